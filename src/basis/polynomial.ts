@@ -1,0 +1,57 @@
+/**
+ * `polynomial: { of, degree, shift?, scale? }`: z^1 .. z^degree with z = (x - shift) / scale.
+ * Defaults: shift = training mean of x, scale = training population standard deviation.
+ * Powers by repeated multiplication (z^k = z^(k-1) * z). `shift: 0, scale: 1` gives raw powers.
+ */
+import type { PolynomialTermSpec } from '../config/types.js';
+import { InputError } from '../errors.js';
+import { meanAndSd } from './stats.js';
+import type { Term, TrainingColumns } from './types.js';
+
+/**
+ * Fixes shift and scale from the training column and returns the term.
+ * @throws InputError `constant-input` when the default scale would be 0 (a constant column)
+ */
+export function polynomialTerm(spec: PolynomialTermSpec, training: TrainingColumns, file: string): Term {
+  const x = training.get(spec.of) as Float64Array;
+  let shift = spec.shift;
+  let scale = spec.scale;
+  if (shift === null || scale === null) {
+    const { mean, sd } = meanAndSd(x);
+    shift ??= mean;
+    if (scale === null) {
+      if (!(sd > 0)) {
+        throw new InputError(
+          'constant-input',
+          `column \`${spec.of}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`,
+          { file, line: spec.line, key: 'polynomial.of' },
+        );
+      }
+      scale = sd;
+    }
+  }
+  const s = shift;
+  const sc = scale;
+  const raw = s === 0 && scale === 1;
+  const names: string[] = [];
+  for (let k = 1; k <= spec.degree; k++) {
+    const base = raw ? spec.of : `z(${spec.of})`;
+    names.push(k === 1 ? base : `${base}^${k}`);
+  }
+  return {
+    spec,
+    inputs: [spec.of],
+    columnNames: names,
+    fixed: { shift: s, scale },
+    fill(inputs, m, out, offset) {
+      const xs = inputs[0];
+      const first = offset * m;
+      for (let i = 0; i < m; i++) out[first + i] = raw ? xs[i] : (xs[i] - s) / sc;
+      for (let k = 1; k < spec.degree; k++) {
+        const prev = (offset + k - 1) * m;
+        const cur = (offset + k) * m;
+        for (let i = 0; i < m; i++) out[cur + i] = out[prev + i] * out[first + i];
+      }
+    },
+  };
+}

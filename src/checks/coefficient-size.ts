@@ -1,0 +1,30 @@
+/**
+ * `coefficient-size`: the largest standardised coefficient.
+ */
+import type { Check } from './types.js';
+import { formatNumber } from '../format.js';
+
+const check: Check = {
+  id: 'coefficient-size',
+  title: 'Coefficient size',
+  limitKey: 'coefficient',
+  description:
+    'The largest standardised coefficient max_j |w_j| * sd(phi_j) / sd(y) over the non-intercept design columns, with population standard deviations over the training rows: the change in the prediction, in target standard deviations, for one standard deviation of that column (standardised regression coefficient; Draper & Smith, Applied Regression Analysis, 3rd ed., 1998, section 16.3). Huge values mean columns cancel each other, the signature of an overfit or ill-conditioned fit.',
+  advice: 'Add a ridge penalty (`fit.ridge`) or remove nearly collinear terms so that columns stop cancelling each other.',
+  line: (d) => d.fit.ridgeLine,
+  measure({ metrics, design }) {
+    if (metrics.maxStdCoefficientColumn < 0) {
+      return { value: null, reason: 'no-columns', message: 'the model has no non-intercept columns' };
+    }
+    const column = design.columnNames[metrics.maxStdCoefficientColumn];
+    const term = design.termOffsets.findLastIndex((o) => o <= metrics.maxStdCoefficientColumn);
+    return {
+      value: metrics.maxStdCoefficient,
+      message: `largest standardised coefficient is ${formatNumber(metrics.maxStdCoefficient)}, on column \`${column}\``,
+      line: term >= 0 ? design.terms[term].spec.line : undefined,
+      detail: { column },
+    };
+  },
+};
+
+export default check;

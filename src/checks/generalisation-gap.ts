@@ -1,0 +1,23 @@
+/**
+ * `generalisation-gap`: hold-out RMSE / training RMSE.
+ */
+import type { Check } from './types.js';
+import { formatNumber } from '../format.js';
+
+const check: Check = {
+  id: 'generalisation-gap',
+  title: 'Generalisation gap',
+  limitKey: 'gap_ratio',
+  description:
+    'Hold-out RMSE divided by training RMSE, RMSE = sqrt(mean((y - yhat)^2)). A model that has learnt noise scores far better on the rows it was fitted to than on new rows (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.2). Infinite when the training RMSE is 0 and the hold-out RMSE is not.',
+  advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
+  line: (d) => d.fit.line,
+  measure({ metrics }) {
+    return {
+      value: metrics.gapRatio,
+      message: `hold-out RMSE ${formatNumber(metrics.holdoutRmse)} is ${formatNumber(metrics.gapRatio)} times the training RMSE ${formatNumber(metrics.trainRmse)}`,
+    };
+  },
+};
+
+export default check;

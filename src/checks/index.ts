@@ -1,0 +1,80 @@
+/**
+ * The check registry: every check module, in a stable order, and the code that runs them.
+ * To add a check: write `checks/<id>.ts` default-exporting a {@link Check}, import it below,
+ * add its limit key to `config/limits.ts` and the schemas, and a README entry (a test keeps the
+ * registry and the README in step).
+ */
+import type { Limit } from '../config/types.js';
+import { jsonNumber, type CheckResult } from '../result.js';
+import { formatNumber } from '../format.js';
+import coefficientSize from './coefficient-size.js';
+import generalisationGap from './generalisation-gap.js';
+import parameterRatio from './parameter-ratio.js';
+import { judge, type Check, type CheckContext, type Measurement } from './types.js';
+
+export type { Check, CheckContext, CoreMetrics, Measurement, ModelData } from './types.js';
+
+/** Every check, in report order. Ids are unique (checked on load). */
+export const CHECKS: readonly Check[] = validate([generalisationGap, parameterRatio, coefficientSize]);
+
+function validate(checks: Check[]): Check[] {
+  const seen = new Set<string>();
+  for (const c of checks) {
+    if (seen.has(c.id)) throw new Error(`duplicate check id ${c.id}`);
+    if (!/^[a-z][a-z0-9-]*$/.test(c.id)) throw new Error(`check id ${c.id} is not kebab-case`);
+    seen.add(c.id);
+  }
+  return checks;
+}
+
+/** The check with this id, or undefined. */
+export function findCheck(id: string): Check | undefined {
+  return CHECKS.find((c) => c.id === id);
+}
+
+function describeLimit(status: CheckResult['status'], limit: Limit): string {
+  if (status === 'fail') return `over the fail limit ${formatNumber(limit.fail)}`;
+  if (status === 'warn') return `over the warning limit ${formatNumber(limit.warn)}`;
+  if (limit.off) return 'limit is off';
+  const parts: string[] = [];
+  if (limit.warn !== null) parts.push(`warn above ${formatNumber(limit.warn)}`);
+  if (limit.fail !== null) parts.push(`fail above ${formatNumber(limit.fail)}`);
+  return `within limits (${parts.join(', ')})`;
+}
+
+/**
+ * Runs one check and compares its figure with the model's limit. A check that throws becomes
+ * a skipped outcome with code `<id>/internal-error` (the run goes on).
+ */
+export function runCheck(check: Check, context: CheckContext): { outcome: CheckResult; figures: Measurement['metrics'] } {
+  const limit = context.descriptor.limits[check.limitKey];
+  const line = limit?.line ?? null;
+  let measured: Measurement;
+  try {
+    measured = check.measure(context);
+  } catch (error) {
+    measured = {
+      value: null,
+      reason: 'internal-error',
+      message: `could not be computed: ${error instanceof Error ? error.message : String(error)}`,
+    };
+  }
+  const effective: Limit = limit ?? { warn: null, fail: null, off: true, source: 'default', line: null };
+  const status = judge(measured.value, effective);
+  const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
+  const comparison = measured.value === null ? '' : `; ${describeLimit(status, effective)}`;
+  const outcome: CheckResult = {
+    id: check.id,
+    code: `${check.id}/${reason}`,
+    status,
+    value: measured.value === null ? null : jsonNumber(measured.value),
+    limitKey: check.limitKey,
+    limit: effective.off ? null : effective.fail,
+    warn: effective.off ? null : effective.warn,
+    line: line ?? measured.line ?? check.line(context.descriptor),
+    message: `${measured.message}${comparison}`,
+    advice: status === 'fail' || status === 'warn' ? check.advice : '',
+    ...(measured.detail ? { detail: measured.detail } : {}),
+  };
+  return { outcome, figures: measured.metrics };
+}

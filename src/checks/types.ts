@@ -1,0 +1,99 @@
+/**
+ * The one shape every check has. A check measures one figure of a fitted model; the registry
+ * compares the figure with the model's limit for that check and writes the outcome. Checks never
+ * log, format or read settings on their own.
+ */
+import type { Descriptor, Limit } from '../config/types.js';
+import type { Design } from '../design-matrix.js';
+import type { FitResult } from '../fit/index.js';
+import type { CheckStatus } from '../result.js';
+
+/** Figures of the refit that every check may read (plain numbers; non-finite allowed). */
+export interface CoreMetrics {
+  trainRmse: number;
+  holdoutRmse: number;
+  trainMae: number;
+  holdoutMae: number;
+  trainR2: number;
+  holdoutR2: number;
+  gapRatio: number;
+  paramsPerSample: number;
+  /** max_j |w_j| sd(phi_j) / sd(y) over non-intercept columns; NaN when there are none. */
+  maxStdCoefficient: number;
+  /** Index of the column with the largest standardised coefficient, or -1. */
+  maxStdCoefficientColumn: number;
+  maxAbsCoefficient: number;
+  /** Population standard deviation of each design column (training rows). */
+  columnSd: Float64Array;
+  /** Population standard deviation of the training target. */
+  targetSd: number;
+  /** Smallest and largest training target. */
+  targetRange: [number, number];
+}
+
+/** The data of one model, as columns (column-major, one Float64Array per input). */
+export interface ModelData {
+  /** Input columns in `design.inputs` order. */
+  inputs: Float64Array[];
+  /** Target column. */
+  y: Float64Array;
+  /** 1-based file line of each row. */
+  lines: Int32Array;
+  /** Number of rows. */
+  rows: number;
+  /** Repository-relative file path. */
+  file: string;
+}
+
+/** Everything a check may read about one model. */
+export interface CheckContext {
+  descriptor: Descriptor;
+  design: Design;
+  fit: FitResult;
+  metrics: CoreMetrics;
+  train: ModelData;
+  holdout: ModelData;
+  /** Memoises work shared by several checks under a key (e.g. cross-validation). */
+  shared<T>(key: string, compute: () => T): T;
+}
+
+/** What a check measured. `value: null` means the check does not apply (status skipped). */
+export interface Measurement {
+  value: number | null;
+  /** Sub-reason appended to the check id in the outcome's code (e.g. `not-applicable`). */
+  reason?: string;
+  /** One sentence on what was measured (without the limit); the registry adds the comparison. */
+  message: string;
+  /** Descriptor line to annotate when the model does not set this check's limit. */
+  line?: number;
+  /** Figures for the JSON report (added to the check outcome). */
+  detail?: Record<string, unknown>;
+  /** Figures to add to the model's metrics (snake_case keys). */
+  metrics?: Record<string, number | string | null>;
+}
+
+/** A check module's default export. */
+export interface Check {
+  /** Stable id, kebab-case, e.g. `generalisation-gap`. */
+  id: string;
+  /** Short title for annotations and tables. */
+  title: string;
+  /** Limit key in YAML (`limits:` map), e.g. `gap_ratio`. */
+  limitKey: string;
+  /** One paragraph for the README: what the figure is, its exact formula and its source. */
+  description: string;
+  /** One sentence on what to change when the check warns or fails. */
+  advice: string;
+  /** Default line to point at: the term or `fit` line that drives the figure. */
+  line(descriptor: Descriptor): number;
+  /** Measures the figure. Must not throw for any fitted model. */
+  measure(context: CheckContext): Measurement;
+}
+
+/** Compares a figure with a limit: above `fail` fails, above `warn` warns; NaN passes as skipped. */
+export function judge(value: number | null, limit: Limit): CheckStatus {
+  if (limit.off || value === null || Number.isNaN(value)) return 'skipped';
+  if (limit.fail !== null && value > limit.fail) return 'fail';
+  if (limit.warn !== null && value > limit.warn) return 'warn';
+  return 'pass';
+}

@@ -1,0 +1,141 @@
+/**
+ * The validated, normalised shapes of the two YAML files a user writes: the repository
+ * settings (`fitgate.yml`) and a model descriptor (`*.model.yml`). Loaders in this folder
+ * turn YAML text into these; nothing downstream sees raw YAML.
+ */
+
+/** A limit as written in YAML: a number (fail above it), `{ warn, fail }` or `off`. */
+export type LimitSpec = number | { warn?: number; fail?: number } | 'off';
+
+/** Where a limit's value came from, lowest precedence first. */
+export type LimitSource = 'default' | 'settings' | 'descriptor';
+
+/**
+ * A resolved limit. A check value strictly above `fail` fails, strictly above `warn` warns.
+ * `off` skips the check. `line` is the descriptor line that set it (descriptor limits only).
+ */
+export interface Limit {
+  warn: number | null;
+  fail: number | null;
+  off: boolean;
+  source: LimitSource;
+  /** 1-based descriptor line of this limit's key when the descriptor sets it, else null. */
+  line: number | null;
+}
+
+/** A position in a YAML file: 1-based line and column. */
+export interface Position {
+  line: number;
+  column: number;
+}
+
+/** Centres of a Gaussian radial basis term, as written. */
+export type RbfCenters =
+  | { kind: 'list'; values: number[] }
+  | { kind: 'count'; from: number; to: number; count: number }
+  | { kind: 'step'; from: number; to: number; step: number }
+  | { kind: 'at-samples' };
+
+/** `linear: [cols]`: the columns as they are. */
+export interface LinearTermSpec {
+  kind: 'linear';
+  columns: string[];
+  line: number;
+}
+
+/** `polynomial: { of, degree, shift?, scale? }`: z^1 .. z^degree, z = (x - shift) / scale. */
+export interface PolynomialTermSpec {
+  kind: 'polynomial';
+  of: string;
+  degree: number;
+  /** Null: the training mean of `of`. */
+  shift: number | null;
+  /** Null: the training population standard deviation of `of`. */
+  scale: number | null;
+  line: number;
+}
+
+/** `rbf: { of, centers, width }`: exp(-(x - c)^2 / (2 width^2)) per centre c. */
+export interface RbfTermSpec {
+  kind: 'rbf';
+  of: string;
+  centers: RbfCenters;
+  width: number;
+  line: number;
+}
+
+/** One entry of a descriptor's `terms` list. */
+export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec;
+
+/** How cross-validation folds are assigned to rows. */
+export type FoldOrder = 'shuffled' | 'blocks';
+
+/** The descriptor's `fit` block with settings defaults applied. */
+export interface FitSpec {
+  /** Add a column of ones first. Default true. */
+  intercept: boolean;
+  /** L2 penalty on every coefficient but the intercept. Default 0 (least squares). */
+  ridge: number;
+  /** k of k-fold cross-validation. Default 5. */
+  folds: number;
+  /** Fold assignment. Default `shuffled` (from `seed`). */
+  foldOrder: FoldOrder;
+  /** Seed of the fold shuffle. Default 1. */
+  seed: number;
+  /** Line of the `fit` key, or of `terms` when the descriptor has no `fit` block. */
+  line: number;
+  /** Line of `ridge` inside `fit` when given, else `line`. */
+  ridgeLine: number;
+}
+
+/** A model descriptor after validation. */
+export interface Descriptor {
+  /** Descriptor path relative to the repository root, with `/` separators. */
+  file: string;
+  /** Unique model name. */
+  name: string;
+  task: 'regression';
+  data: {
+    /** Training CSV, repository-relative (already checked to be inside the repository). */
+    train: string;
+    /** Hold-out CSV, repository-relative. */
+    holdout: string;
+    /** Target column name. */
+    target: string;
+    /** Lines of `data.train`, `data.holdout`, `data.target`. */
+    lines: { train: number; holdout: number; target: number };
+  };
+  terms: TermSpec[];
+  fit: FitSpec;
+  /** Shipped coefficients, intercept first, when the descriptor has them. */
+  coefficients: number[] | null;
+  /** Line of `coefficients`, or null. */
+  coefficientsLine: number | null;
+  /** Limits after merging defaults < settings < descriptor, by limit key. */
+  limits: Record<string, Limit>;
+  /** Line of `name`. */
+  nameLine: number;
+  /** Line of `terms`. */
+  termsLine: number;
+}
+
+/** Resource caps that guard memory and time; settings can raise them. */
+export interface ResourceCaps {
+  /** Largest data file in bytes. Default 512 MiB. */
+  maxFileBytes: number;
+  /** Largest training rows x parameters. Default 2e8. */
+  maxCells: number;
+}
+
+/** The repository settings file after validation. */
+export interface SettingsFile {
+  /** Settings path relative to the repository root; null when there is no settings file. */
+  file: string | null;
+  /** Glob patterns of descriptors, relative to the repository root. */
+  models: string[];
+  /** Settings-level limits (not yet merged with defaults), by limit key, with their spec lines. */
+  limits: Record<string, { spec: LimitSpec; line: number }>;
+  /** Defaults for `fit` keys a descriptor leaves out. */
+  fit: { folds: number; foldOrder: FoldOrder; seed: number };
+  caps: ResourceCaps;
+}

@@ -1,0 +1,246 @@
+/**
+ * One model from descriptor to outcome: load its data, fix the terms, fold the training rows
+ * into the factor, solve, score training and hold-out rows, run every check.
+ */
+import { createTerm, termInputs } from '../basis/index.js';
+import { meanAndSd, range } from '../basis/stats.js';
+import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks/index.js';
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { createDesign, type Design } from '../design-matrix.js';
+import { InputError } from '../errors.js';
+import { fitFactor, QrAccumulator, type FitResult } from '../fit/index.js';
+import { ColumnSpread } from '../metrics/column-spread.js';
+import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
+import type { RepoReader } from '../repo/types.js';
+import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result.js';
+import { forEachBlock, predictRows } from './blocks.js';
+import { loadModelData, type ModelTables } from './load-data.js';
+
+/** Largest number of design columns: the factor alone takes p^2 doubles. */
+export const MAX_PARAMETERS = 4000;
+
+/** A fitted model with everything checks and reporters read. */
+export interface FittedModel {
+  descriptor: Descriptor;
+  design: Design;
+  fit: FitResult;
+  tables: ModelTables;
+  metrics: CoreMetrics;
+  trainPredictions: Float64Array;
+  holdoutPredictions: Float64Array;
+}
+
+/**
+ * Loads, fits and scores one model (no checks).
+ * @throws InputError for bad data, a constant target, or a design over the caps
+ */
+export async function fitModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedModel> {
+  const inputs: string[] = [];
+  for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
+  const tables = await loadModelData(repo, descriptor, inputs, settings);
+  const { train, holdout } = tables;
+  const file = descriptor.file;
+
+  // Fix term parameters from the training rows, then check the size before taking memory.
+  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file));
+  const design = createDesign(terms, descriptor.fit.intercept);
+  const p = design.p;
+  if (p > MAX_PARAMETERS) {
+    throw new InputError(
+      'too-many-parameters',
+      `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the factor takes p^2 numbers); use fewer radial centres or a lower degree`,
+      { file, line: descriptor.termsLine, key: 'terms' },
+    );
+  }
+  if (train.rows * p > settings.caps.maxCells) {
+    throw new InputError(
+      'too-large',
+      `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`,
+      { file, line: descriptor.termsLine, key: 'terms' },
+    );
+  }
+  const targetStats = meanAndSd(train.y, train.rows);
+  if (!(targetStats.sd > 0)) {
+    throw new InputError(
+      'constant-target',
+      `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`,
+      { file, line: descriptor.data.lines.target, key: 'data.target' },
+    );
+  }
+
+  // Fold the training rows into the factor; gather column spreads in the same pass.
+  const factor = new QrAccumulator(p);
+  const spread = new ColumnSpread(p);
+  forEachBlock(design, train, (X, start, m) => {
+    factor.addRows(X, train.y.subarray(start, start + m), m);
+    spread.add(X, m);
+  });
+  const fit = fitFactor(factor, { ridge: descriptor.fit.ridge, penalised: design.penalised });
+
+  // Score training and hold-out rows.
+  const trainPredictions = predictRows(design, train, fit.coefficients);
+  const holdoutPredictions = predictRows(design, holdout, fit.coefficients);
+  const trainSums = emptySums();
+  addErrors(trainSums, train.y, trainPredictions, train.rows);
+  const holdoutSums = emptySums();
+  addErrors(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
+  const tr = errorMeasures(trainSums);
+  const ho = errorMeasures(holdoutSums);
+
+  // Coefficient sizes.
+  const columnSd = spread.sd();
+  let maxStd = Number.NaN;
+  let maxStdColumn = -1;
+  let maxAbs = 0;
+  for (let j = 0; j < p; j++) {
+    const w = Math.abs(fit.coefficients[j]);
+    if (w > maxAbs || Number.isNaN(w)) maxAbs = w;
+    if (!design.penalised[j]) continue;
+    const s = (w * columnSd[j]) / targetStats.sd;
+    if (maxStdColumn < 0 || s > maxStd) {
+      maxStd = s;
+      maxStdColumn = j;
+    }
+  }
+  const metrics: CoreMetrics = {
+    trainRmse: tr.rmse,
+    holdoutRmse: ho.rmse,
+    trainMae: tr.mae,
+    holdoutMae: ho.mae,
+    trainR2: tr.r2,
+    holdoutR2: ho.r2,
+    gapRatio: gapRatio(tr.rmse, ho.rmse),
+    paramsPerSample: p / train.rows,
+    maxStdCoefficient: maxStd,
+    maxStdCoefficientColumn: maxStdColumn,
+    maxAbsCoefficient: maxAbs,
+    columnSd,
+    targetSd: targetStats.sd,
+    targetRange: range(train.y, train.rows),
+  };
+  return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions };
+}
+
+/** Training and hold-out RMSE of the descriptor's shipped coefficients. */
+function scoreShipped(model: FittedModel): ShippedMetrics | null {
+  const { descriptor, design, tables, fit } = model;
+  const shipped = descriptor.coefficients;
+  if (shipped === null) return null;
+  if (shipped.length !== design.p) {
+    throw new InputError(
+      'coefficients-length',
+      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
+      { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
+    );
+  }
+  const rmse = (data: ModelTables['train']): number => {
+    const sums = emptySums();
+    addErrors(sums, data.y, predictRows(design, data, shipped), data.rows);
+    return errorMeasures(sums).rmse;
+  };
+  let diff = 0;
+  for (let j = 0; j < design.p; j++) diff = Math.max(diff, Math.abs(shipped[j] - fit.coefficients[j]));
+  return {
+    train_rmse: jsonNumber(rmse(tables.train)),
+    holdout_rmse: jsonNumber(rmse(tables.holdout)),
+    max_coefficient_difference: jsonNumber(diff),
+  };
+}
+
+/** Model metrics for the report. */
+function reportMetrics(model: FittedModel): ModelMetrics {
+  const { metrics: m, fit, design } = model;
+  return {
+    train_rmse: jsonNumber(m.trainRmse),
+    holdout_rmse: jsonNumber(m.holdoutRmse),
+    train_mae: jsonNumber(m.trainMae),
+    holdout_mae: jsonNumber(m.holdoutMae),
+    train_r2: jsonNumber(m.trainR2),
+    holdout_r2: jsonNumber(m.holdoutR2),
+    gap_ratio: jsonNumber(m.gapRatio),
+    params_per_sample: jsonNumber(m.paramsPerSample),
+    max_std_coefficient: jsonNumber(m.maxStdCoefficient),
+    max_std_coefficient_column: m.maxStdCoefficientColumn >= 0 ? design.columnNames[m.maxStdCoefficientColumn] : null,
+    max_abs_coefficient: jsonNumber(m.maxAbsCoefficient),
+    rank: fit.rank,
+    condition_number: jsonNumber(fit.conditionNumber),
+    condition_number_scaled: jsonNumber(fit.conditionNumberScaled),
+  };
+}
+
+/** The outcome of a model that could not be checked. */
+export function errorResult(name: string, descriptor: string, error: InputError): ModelResult {
+  return {
+    name,
+    descriptor,
+    verdict: 'error',
+    rows: { train: 0, holdout: 0 },
+    parameters: 0,
+    columns: [],
+    metrics: null,
+    coefficients: [],
+    shipped: null,
+    checks: [],
+    error: {
+      message: error.message,
+      file: error.location.file ?? null,
+      line: error.location.line ?? null,
+      code: error.code,
+    },
+  };
+}
+
+/**
+ * Fits one model and runs every check on it. Input problems become a model with verdict
+ * `error` (the run goes on); anything else is re-thrown.
+ */
+export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<ModelResult> {
+  let model: FittedModel;
+  let shipped: ShippedMetrics | null;
+  try {
+    model = await fitModel(repo, descriptor, settings);
+    shipped = scoreShipped(model);
+  } catch (error) {
+    if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
+    throw error;
+  }
+  const memo = new Map<string, unknown>();
+  const context: CheckContext = {
+    descriptor,
+    design: model.design,
+    fit: model.fit,
+    metrics: model.metrics,
+    train: model.tables.train,
+    holdout: model.tables.holdout,
+    shared<T>(key: string, compute: () => T): T {
+      if (!memo.has(key)) memo.set(key, compute());
+      return memo.get(key) as T;
+    },
+  };
+  const metrics = reportMetrics(model);
+  const checks: CheckResult[] = [];
+  let verdict: Verdict = 'pass';
+  for (const check of CHECKS) {
+    const { outcome, figures } = runCheck(check, context);
+    checks.push(outcome);
+    if (figures) Object.assign(metrics, figures);
+    if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);
+  }
+  return {
+    name: descriptor.name,
+    descriptor: descriptor.file,
+    verdict,
+    rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    parameters: model.design.p,
+    columns: [...model.design.columnNames],
+    metrics,
+    coefficients: Array.from(model.fit.coefficients, jsonNumber),
+    shipped,
+    checks,
+    error: null,
+    extra: {
+      rank_deficient: model.fit.rankDeficient,
+      terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
+    },
+  };
+}

@@ -1,0 +1,62 @@
+/**
+ * Loads the columns one model needs from its training and hold-out files.
+ */
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { InputError } from '../errors.js';
+import type { ModelData } from '../checks/types.js';
+import { readTable } from '../data/table.js';
+import type { RepoReader } from '../repo/types.js';
+
+/** Training and hold-out columns of one model. */
+export interface ModelTables {
+  train: ModelData;
+  holdout: ModelData;
+  /** Training input columns by name (for fixing term parameters). */
+  trainColumns: Map<string, Float64Array>;
+}
+
+/**
+ * Reads the input columns (in `inputs` order) and the target of both files.
+ * @throws InputError `target-as-input` when a term reads the target column,
+ *   `no-rows` when either file has no data rows
+ */
+export async function loadModelData(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  inputs: readonly string[],
+  settings: SettingsFile,
+): Promise<ModelTables> {
+  const { data } = descriptor;
+  if (inputs.includes(data.target)) {
+    throw new InputError(
+      'target-as-input',
+      `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`,
+      { file: descriptor.file, line: data.lines.target, key: 'data.target' },
+    );
+  }
+  const columns = [...inputs, data.target];
+  const maxBytes = settings.caps.maxFileBytes;
+  const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
+    const table = await readTable(repo, path, { columns, maxBytes });
+    if (table.rows === 0) {
+      throw new InputError('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
+        file: descriptor.file,
+        line,
+        key,
+      });
+    }
+    return {
+      inputs: inputs.map((c) => table.columns.get(c) as Float64Array),
+      y: table.columns.get(data.target) as Float64Array,
+      lines: table.lines,
+      rows: table.rows,
+      file: path,
+      byName: table.columns,
+    };
+  };
+  const train = await load(data.train, data.lines.train, 'data.train');
+  const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
+  const { byName, ...trainData } = train;
+  const { byName: _unused, ...holdoutData } = holdout;
+  return { train: trainData, holdout: holdoutData, trainColumns: byName };
+}

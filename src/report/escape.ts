@@ -1,0 +1,28 @@
+/**
+ * Escaping of text that comes from the repository (model names, column names, messages) for
+ * each medium it reaches. One helper per medium, tested byte for byte.
+ */
+
+/** HTML text and attribute values: & < > " ' become entities. */
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string);
+}
+
+/**
+ * Markdown inline text (GitHub-flavoured, inside table cells too): HTML-escapes, then
+ * backslash-escapes the characters that start Markdown syntax, and turns line breaks into spaces.
+ */
+export function escapeMarkdown(text: string): string {
+  return escapeHtml(text)
+    .replace(/\r?\n|\r/g, ' ')
+    .replace(/([\\`*_{}[\]()#+!|~-])/g, '\\$1')
+    .replace(/@/g, '@\u200b');
+}
+
+/**
+ * Text for a terminal: control characters (including ESC, which starts colour codes and
+ * cursor moves) are shown as `\u001b` style escapes; line breaks become spaces.
+ */
+export function escapeTerminal(text: string): string {
+  return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+}
