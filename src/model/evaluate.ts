@@ -8,12 +8,13 @@ import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
-import { fitFactor, QrAccumulator, type FitResult } from '../fit/index.js';
+import { fitFactor, QrAccumulator, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
 import type { RepoReader } from '../repo/types.js';
-import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result.js';
+import { fromJsonNumber, jsonNumber, worse, type BaseComparison, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result.js';
 import { forEachBlock, predictRows } from './blocks.js';
+import { buildChartData } from './chart-data.js';
 import { loadModelData, type ModelTables } from './load-data.js';
 
 /** Largest number of design columns: the factor alone takes p^2 doubles. */
@@ -75,7 +76,13 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     factor.addRows(X, train.y.subarray(start, start + m), m);
     spread.add(X, m);
   });
-  const fit = fitFactor(factor, { ridge: descriptor.fit.ridge, penalised: design.penalised });
+  let fit = fitFactor(factor, { ridge: descriptor.fit.ridge, penalised: design.penalised });
+  // One step of iterative refinement from a second pass over the rows, where it converges.
+  if (!fit.rankDeficient && fit.conditionNumberScaled <= REFINE_MAX_CONDITION) {
+    const pass = new RefinementPass(fit);
+    forEachBlock(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
+    fit = pass.finish();
+  }
 
   // Score training and hold-out rows.
   const trainPredictions = predictRows(design, train, fit.coefficients);
@@ -190,11 +197,48 @@ export function errorResult(name: string, descriptor: string, error: InputError)
   };
 }
 
+/** The base commit's outcomes to compare with, by model name. */
+export interface BaseInput {
+  models: ReadonlyMap<string, ModelResult>;
+  /** Full SHA of the base commit. */
+  commit: string;
+}
+
+/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
+function relativeChange(head: number, base: number): number | null {
+  if (Number.isNaN(head) || Number.isNaN(base)) return null;
+  if (base === 0) return head === 0 ? 0 : Infinity;
+  return (head - base) / Math.abs(base);
+}
+
+/** The `base` field of a model result: `new`, or the base figures and the changes. */
+function compareWithBase(metrics: ModelMetrics, baseline: ModelResult | null, commit: string): BaseComparison {
+  if (baseline === null) {
+    return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
+  }
+  const b = baseline.metrics;
+  const headRmse = fromJsonNumber(metrics.holdout_rmse);
+  const headGap = fromJsonNumber(metrics.gap_ratio);
+  const baseRmse = b ? fromJsonNumber(b.holdout_rmse) : Number.NaN;
+  const baseGap = b ? fromJsonNumber(b.gap_ratio) : Number.NaN;
+  const rmseChange = relativeChange(headRmse, baseRmse);
+  const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
+  return {
+    status: 'compared',
+    commit,
+    holdout_rmse: b ? b.holdout_rmse : null,
+    gap_ratio: b ? b.gap_ratio : null,
+    holdout_rmse_change: rmseChange === null ? null : jsonNumber(rmseChange),
+    gap_ratio_change: gapChange === null ? null : jsonNumber(gapChange),
+  };
+}
+
 /**
  * Fits one model and runs every check on it. Input problems become a model with verdict
  * `error` (the run goes on); anything else is re-thrown.
+ * @param base outcomes on the base commit to compare with; default none (no `base` field)
  */
-export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<ModelResult> {
+export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
   let model: FittedModel;
   let shipped: ShippedMetrics | null;
   try {
@@ -212,6 +256,7 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     metrics: model.metrics,
     train: model.tables.train,
     holdout: model.tables.holdout,
+    baseline: base?.models.get(descriptor.name) ?? null,
     shared<T>(key: string, compute: () => T): T {
       if (!memo.has(key)) memo.set(key, compute());
       return memo.get(key) as T;
@@ -237,10 +282,12 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     coefficients: Array.from(model.fit.coefficients, jsonNumber),
     shipped,
     checks,
+    ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
     error: null,
     extra: {
       rank_deficient: model.fit.rankDeficient,
       terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
     },
+    charts: buildChartData(model, checks),
   };
 }

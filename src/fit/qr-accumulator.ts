@@ -1,0 +1,245 @@
+/**
+ * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
+ * factor block by block, so memory grows with p^2 and not with the number of rows.
+ *
+ * Folding a block of m rows computes the QR factorisation of the stacked matrix
+ *
+ *     [ R    qty ]
+ *     [ X_b  y_b ]
+ *
+ * where R is already triangular. Householder reflector j only has to touch row j of R and the
+ * m block rows, so a block costs O(m p^2) flops (Golub & Van Loan, Matrix Computations, 4th ed.,
+ * sec. 5.1-5.2 Householder QR, and sec. 6.5.2 on updating a QR factorisation by appending rows).
+ * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
+ */
+
+/** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
+const WORK_NUMBERS = 16384;
+/** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
+const SAFE_SMALL = 1e-150;
+const SAFE_LARGE = 1e150;
+
+/**
+ * Streaming Householder QR: folds row blocks into an upper-triangular p x p factor R, Q^T y and
+ * the residual sum of squares.
+ *
+ * With X the n x p matrix of every row folded so far and y its right-hand side, the state is
+ * X = Q [R; 0], Q^T y = [qty; r] and `rss` = ||r||^2, which is the least-squares residual sum of
+ * squares min ||X w - y||^2 when R has full rank. Reflectors use the sign choice
+ * beta = -sign(alpha) ||a|| (no cancellation), so diagonal entries of R may be negative.
+ *
+ * @example
+ * const acc = new QrAccumulator(2);
+ * acc.addRows(new Float64Array([1, 1, 1, 0, 1, 2]), new Float64Array([1, 2, 3]), 3);
+ */
+export class QrAccumulator {
+  /** Number of columns. */
+  readonly p: number;
+  #rows = 0;
+  #R: Float64Array;
+  #qty: Float64Array;
+  #rss = 0;
+  /** Work block (column-major, leading dimension `#chunk`) and its right-hand side. */
+  #work: Float64Array | undefined;
+  #workY: Float64Array | undefined;
+  readonly #chunk: number;
+
+  /**
+   * @param p number of columns of the design (a non-negative integer)
+   * @throws RangeError when p is not a non-negative integer
+   */
+  constructor(p: number) {
+    if (!Number.isInteger(p) || p < 0) {
+      throw new RangeError(`QrAccumulator: p must be a non-negative integer, got ${String(p)}`);
+    }
+    this.p = p;
+    this.#R = new Float64Array(p * p);
+    this.#qty = new Float64Array(p);
+    this.#chunk = Math.max(16, Math.floor(WORK_NUMBERS / (p + 1)));
+  }
+
+  /** Number of rows folded in so far (all rows, including penalty rows). */
+  get rows(): number {
+    return this.#rows;
+  }
+
+  /**
+   * Upper-triangular factor, p x p, column-major (R[j*p + i]); rows beyond the rank are zero
+   * (up to rounding) when fewer rows than p were folded. This is the live array: read it, do
+   * not write it (use {@link clone} for a copy to change).
+   */
+  get R(): Float64Array {
+    return this.#R;
+  }
+
+  /** First p entries of Q^T y (live array: read only). */
+  get qty(): Float64Array {
+    return this.#qty;
+  }
+
+  /** Sum of squares of the remaining entries of Q^T y (the least-squares residual sum of squares when R has full rank). */
+  get rss(): number {
+    return this.#rss;
+  }
+
+  /**
+   * Fold m rows into the factor. Large m is processed in internal blocks; the inputs are not
+   * modified.
+   *
+   * @param X column-major m x p block (X[j*m + i] is row i, column j); length at least m*p
+   * @param y right-hand side, length m or more (the first m entries are used)
+   * @param m number of rows (a non-negative integer; 0 does nothing)
+   * @throws RangeError on bad shapes or a NaN / infinite value (the message names row and column)
+   */
+  addRows(X: Float64Array, y: Float64Array, m: number): void {
+    const p = this.p;
+    if (!Number.isInteger(m) || m < 0) {
+      throw new RangeError(`addRows: m must be a non-negative integer, got ${String(m)}`);
+    }
+    if (X.length < m * p) {
+      throw new RangeError(`addRows: X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
+    }
+    if (y.length < m) {
+      throw new RangeError(`addRows: y must hold at least m = ${m} numbers, got ${y.length}`);
+    }
+    this.#foldAll(X, y, m);
+    this.#rows += m;
+  }
+
+  /**
+   * Fold another accumulator's factor into this one: stack [R1; R2] (with their Q^T y) and
+   * re-triangularise; residual sums of squares and row counts add. Used for k-fold
+   * cross-validation: the fit without fold k is the merge of the other folds.
+   *
+   * @param other an accumulator with the same p (not modified)
+   * @throws RangeError when the column counts differ
+   */
+  merge(other: QrAccumulator): void {
+    if (other.p !== this.p) {
+      throw new RangeError(`merge: column counts differ (${this.p} and ${other.p})`);
+    }
+    // R2 is column-major p x p with leading dimension p: exactly the block layout of addRows.
+    // Copy first so that merging an accumulator into itself reads the old factor.
+    const R2 = Float64Array.from(other.#R);
+    const qty2 = Float64Array.from(other.#qty);
+    const rss2 = other.#rss;
+    const rows2 = other.#rows;
+    this.#foldAll(R2, qty2, this.p);
+    this.#rss += rss2;
+    this.#rows += rows2;
+  }
+
+  /** An independent copy (same factor, right-hand side, rss and row count). */
+  clone(): QrAccumulator {
+    const copy = new QrAccumulator(this.p);
+    copy.#R.set(this.#R);
+    copy.#qty.set(this.#qty);
+    copy.#rss = this.#rss;
+    copy.#rows = this.#rows;
+    return copy;
+  }
+
+  /** Folds a column-major m x p block in pieces of at most `#chunk` rows. */
+  #foldAll(X: Float64Array, y: Float64Array, m: number): void {
+    const chunk = this.#chunk;
+    for (let start = 0; start < m; start += chunk) {
+      this.#fold(X, m, y, start, Math.min(chunk, m - start));
+    }
+  }
+
+  /**
+   * Copies rows [start, start + mb) of the column-major block X (leading dimension ldx) into
+   * the work block, checking every value, then annihilates them against R.
+   */
+  #fold(X: Float64Array, ldx: number, y: Float64Array, start: number, mb: number): void {
+    const p = this.p;
+    const ld = this.#chunk;
+    if (this.#work === undefined || this.#workY === undefined) {
+      this.#work = new Float64Array(ld * p);
+      this.#workY = new Float64Array(ld);
+    }
+    const C = this.#work;
+    const yc = this.#workY;
+
+    // Copy and check the block.
+    for (let j = 0; j < p; j++) {
+      const src = j * ldx + start;
+      const dst = j * ld;
+      for (let i = 0; i < mb; i++) {
+        const v = X[src + i];
+        if (!Number.isFinite(v)) {
+          throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
+        }
+        C[dst + i] = v;
+      }
+    }
+    for (let i = 0; i < mb; i++) {
+      const v = y[start + i];
+      if (!Number.isFinite(v)) {
+        throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
+      }
+      yc[i] = v;
+    }
+
+    const R = this.#R;
+    const qty = this.#qty;
+    for (let j = 0; j < p; j++) {
+      // Reflector for column j of [R; C]: a = [R[j,j]; C[0..mb, j]].
+      const cj = j * ld;
+      const alpha = R[j * p + j];
+      let amax = Math.abs(alpha);
+      for (let i = 0; i < mb; i++) {
+        const a = Math.abs(C[cj + i]);
+        if (a > amax) amax = a;
+      }
+      if (amax === 0) continue;
+      let sigma = 0; // sum of squares of the block part
+      let norm: number;
+      if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
+        for (let i = 0; i < mb; i++) {
+          const c = C[cj + i];
+          sigma += c * c;
+        }
+        if (sigma === 0) continue; // nothing to annihilate
+        norm = Math.sqrt(alpha * alpha + sigma);
+      } else {
+        let scaled = 0;
+        for (let i = 0; i < mb; i++) {
+          const c = C[cj + i] / amax;
+          scaled += c * c;
+        }
+        if (scaled === 0) continue;
+        const a0 = alpha / amax;
+        norm = amax * Math.sqrt(a0 * a0 + scaled);
+      }
+      // H = I - v v^T / (beta (beta - alpha)), v = [alpha - beta; C[:, j]].
+      const beta = alpha >= 0 ? -norm : norm;
+      const v0 = alpha - beta;
+      const coef = 1 / (beta * (beta - alpha));
+      for (let k = j + 1; k < p; k++) {
+        const ck = k * ld;
+        const rIdx = k * p + j;
+        let w = v0 * R[rIdx];
+        for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
+        const f = w * coef;
+        if (f === 0) continue;
+        R[rIdx] -= f * v0;
+        for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
+      }
+      {
+        let w = v0 * qty[j];
+        for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
+        const f = w * coef;
+        if (f !== 0) {
+          qty[j] -= f * v0;
+          for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];
+        }
+      }
+      R[j * p + j] = beta;
+    }
+    // What is left of the block's right-hand side is orthogonal to the column space.
+    let rest = 0;
+    for (let i = 0; i < mb; i++) rest += yc[i] * yc[i];
+    this.#rss += rest;
+  }
+}
