@@ -1,0 +1,226 @@
+/**
+ * A {@link RepoReader} over one git commit: files are read from the commit's tree with
+ * `git cat-file`, never from the working tree. The reader's root may be a sub-folder of the
+ * git repository (the action's `working-directory`); nothing outside that folder is read.
+ * Symbolic links are resolved inside the commit's tree only: a link whose target leaves the
+ * root is refused like a `..` path.
+ */
+import { execFile, spawn } from 'node:child_process';
+import path from 'node:path';
+import { InputError } from '../errors.js';
+import { globMatcher } from './glob-pattern.js';
+import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
+import type { RepoReader } from './types.js';
+
+/** Options of {@link createGitRepository}. */
+export interface GitRepositoryOptions {
+  /** A folder inside the git work tree to run git in (absolute). */
+  cwd: string;
+  /** The commit to read (a SHA or any revision git understands). */
+  commit: string;
+  /** The reader's root as a path relative to the top of the git repository (`/` separators); default `''` (the top). */
+  prefix?: string;
+}
+
+/** One entry of the commit's tree. */
+interface TreeEntry {
+  /** `file` (mode 100644/100755), `link` (120000) or `other` (submodules). */
+  kind: 'file' | 'link' | 'other';
+  /** Object id of the blob. */
+  oid: string;
+  /** Size in bytes of the blob. */
+  size: number;
+}
+
+/** Largest number of links followed for one path (as Linux's MAXSYMLINKS). */
+const MAX_LINKS = 40;
+
+/**
+ * Runs git with arguments (never through a shell) and returns standard output as bytes.
+ * @throws Error with git's standard error when git exits non-zero
+ */
+export function runGit(cwd: string, args: string[], maxBuffer = 64 * 1024 * 1024): Promise<Buffer> {
+  return new Promise((resolve, reject) => {
+    execFile('git', args, { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
+      if (error) {
+        const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
+        reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
+      } else resolve(stdout);
+    });
+  });
+}
+
+/**
+ * The full SHA of a revision when it names a commit present in the local object store, else null
+ * (unknown revision, or a shallow clone without it).
+ * @param cwd a folder inside the git work tree
+ * @param revision a SHA, branch, tag or expression such as `HEAD^1`
+ */
+export async function tryResolveCommit(cwd: string, revision: string): Promise<string | null> {
+  if (revision.startsWith('-')) return null;
+  try {
+    const out = await runGit(cwd, ['rev-parse', '--verify', '--quiet', '--end-of-options', `${revision}^{commit}`]);
+    const sha = out.toString('utf8').trim();
+    return /^[0-9a-f]{40,64}$/.test(sha) ? sha : null;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The top folder of the git work tree that contains `dir` (absolute), or null when `dir` is not
+ * inside a git work tree.
+ */
+export async function tryGitTopLevel(dir: string): Promise<string | null> {
+  try {
+    const out = await runGit(dir, ['rev-parse', '--show-toplevel']);
+    const top = out.toString('utf8').trim();
+    return top === '' ? null : top;
+  } catch {
+    return null;
+  }
+}
+
+/** Normalises a repository-relative path; null when it is absolute or leaves the root. */
+function normalise(p: string): string | null {
+  try {
+    return normaliseRepoPath(p);
+  } catch {
+    return null;
+  }
+}
+
+/** Parses `git ls-tree -r -l -z --full-tree` output into entries by path (relative to `prefix`). */
+function parseTree(out: Buffer, prefix: string): Map<string, TreeEntry> {
+  const entries = new Map<string, TreeEntry>();
+  const lead = prefix === '' ? '' : `${prefix}/`;
+  for (const record of out.toString('utf8').split('\0')) {
+    if (record === '') continue;
+    const tab = record.indexOf('\t');
+    const [mode, , oid, size] = record.slice(0, tab).split(/ +/);
+    const full = record.slice(tab + 1);
+    if (!full.startsWith(lead)) continue;
+    const rel = full.slice(lead.length);
+    const kind = mode === '120000' ? 'link' : mode === '100644' || mode === '100755' ? 'file' : 'other';
+    entries.set(rel, { kind, oid, size: Number(size) || 0 });
+  }
+  return entries;
+}
+
+/**
+ * A reader of the files of one commit under `prefix`. The tree is listed once, on first use.
+ * @param options git folder, commit and root prefix
+ */
+export function createGitRepository(options: GitRepositoryOptions): RepoReader {
+  const { cwd, commit } = options;
+  const prefix = normalise(options.prefix ?? '') ?? '';
+  const label = `base commit ${commit.slice(0, 7)}`;
+  let listing: Promise<Map<string, TreeEntry>> | null = null;
+  const tree = (): Promise<Map<string, TreeEntry>> => {
+    listing ??= runGit(cwd, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit], 1024 * 1024 * 1024).then((out) => parseTree(out, prefix));
+    return listing;
+  };
+  const outside = (file: string, where: { file?: string; line?: number; column?: number; key?: string }, target: string): InputError =>
+    new InputError(PATH_OUTSIDE, `path ${JSON.stringify(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
+  const missing = (file: string): InputError => new InputError(FILE_MISSING, `no such file in ${label}; expected an existing file`, { file });
+
+  /**
+   * Follows links component by component inside the tree. Returns the final path and its entry
+   * (undefined when nothing is there), or null when a link leaves the root.
+   */
+  async function realPath(p: string): Promise<{ path: string; entry: TreeEntry | undefined } | null> {
+    const entries = await tree();
+    let parts = p === '' ? [] : p.split('/');
+    let done: string[] = [];
+    let hops = 0;
+    while (parts.length > 0) {
+      const next = [...done, parts[0]].join('/');
+      const entry = entries.get(next);
+      if (entry?.kind === 'link') {
+        hops += 1;
+        if (hops > MAX_LINKS) return null;
+        const target = (await runGit(cwd, ['cat-file', 'blob', entry.oid])).toString('utf8');
+        const joined = target.startsWith('/') ? null : normalise(path.posix.join(done.join('/'), target));
+        if (joined === null) return null;
+        parts = [...(joined === '' ? [] : joined.split('/')), ...parts.slice(1)];
+        done = [];
+        continue;
+      }
+      done.push(parts[0]);
+      parts = parts.slice(1);
+    }
+    const final = done.join('/');
+    return { path: final, entry: entries.get(final) };
+  }
+
+  /** The blob entry of a regular file at `p` (links followed), or an InputError. */
+  async function fileEntry(p: string): Promise<TreeEntry> {
+    const n = normalise(p);
+    if (n === null) throw outside(p, {}, p);
+    const real = await realPath(n);
+    if (real === null) throw outside(p, {}, p);
+    if (real.entry?.kind !== 'file') throw missing(n);
+    return real.entry;
+  }
+
+  return {
+    label,
+    async resolve(fromFile, target, where) {
+      const joined = joinRepoPath(fromFile, target, { file: fromFile, ...where });
+      if ((await realPath(joined)) === null) throw outside(fromFile, { file: fromFile, ...where }, target);
+      return joined;
+    },
+    async isFile(p) {
+      const n = normalise(p);
+      if (n === null) return false;
+      const real = await realPath(n);
+      return real?.entry?.kind === 'file';
+    },
+    async size(p) {
+      return (await fileEntry(p)).size;
+    },
+    async read(p) {
+      const entry = await fileEntry(p);
+      return new Uint8Array(await runGit(cwd, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
+    },
+    async *stream(p, chunkBytes = 1024 * 1024) {
+      const entry = await fileEntry(p);
+      const child = spawn('git', ['cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
+      const closed = new Promise<number | null>((resolve, reject) => {
+        child.on('error', reject);
+        child.on('close', resolve);
+      });
+      let pending: Buffer[] = [];
+      let pendingBytes = 0;
+      for await (const piece of child.stdout as AsyncIterable<Buffer>) {
+        pending.push(piece);
+        pendingBytes += piece.length;
+        if (pendingBytes >= chunkBytes) {
+          yield new Uint8Array(Buffer.concat(pending));
+          pending = [];
+          pendingBytes = 0;
+        }
+      }
+      const code = await closed;
+      if (code !== 0) throw new Error(`git cat-file failed for ${p} in ${label} (exit status ${code})`);
+      if (pendingBytes > 0) yield new Uint8Array(Buffer.concat(pending));
+    },
+    async glob(patterns) {
+      const matchers = patterns.map((pattern) => {
+        const p = pattern.replace(/\\/g, '/');
+        if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
+          throw new InputError(PATH_OUTSIDE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
+        }
+        return globMatcher(p.replace(/^(\.\/)+/, ''));
+      });
+      const entries = await tree();
+      const found: string[] = [];
+      for (const [p, entry] of entries) {
+        if (entry.kind === 'other' || isIgnoredPath(p) || !matchers.some((m) => m(p))) continue;
+        if (entry.kind === 'link' && (await realPath(p))?.entry?.kind !== 'file') continue;
+        found.push(p);
+      }
+      return found.sort();
+    },
+  };
+}
