@@ -3,15 +3,51 @@
  * The `fitgate` command: parse argv, run the pipeline, print a report, set the exit status
  * (0 within limits, 1 a model over a limit, 2 the run could not be done).
  */
-import { writeFile } from 'node:fs/promises';
-import { parseArgs } from './args.js';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { CLI_FETCH_HINT, evaluateBase } from './action/base-commit.js';
+import { parseArgs, type CheckCommand } from './args.js';
 import { errorMessage, InputError } from './errors.js';
+import { mergeReports, type ReportInput } from './merge.js';
+import { defaultJobs } from './parallel/pool.js';
+import { isModelWorker } from './parallel/model-worker.js';
 import { runPipeline } from './pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
+import { formatHtml, HTML_FILE } from './report/html.js';
 import { formatJson } from './report/json.js';
+import { formatJunit } from './report/junit.js';
 import { formatMarkdown } from './report/markdown.js';
+import { formatSarif } from './report/sarif.js';
 import { formatText } from './report/text.js';
-import { exitStatus } from './result.js';
+import { exitStatus, type Result } from './result.js';
+import { VERSION } from './version.js';
+
+/** Reads the report files of `fitgate merge`; a file that cannot be read is an InputError. */
+async function readReports(files: string[]): Promise<ReportInput[]> {
+  return Promise.all(
+    files.map(async (file) => {
+      try {
+        return { file, text: await readFile(file, 'utf8') };
+      } catch (error) {
+        throw new InputError('file-missing', `expected a readable JSON report file: ${errorMessage(error)}`, { file });
+      }
+    }),
+  );
+}
+
+/** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
+async function writeFileReports(command: CheckCommand, result: Result): Promise<void> {
+  if (command.html !== null) {
+    await mkdir(command.html, { recursive: true });
+    await writeFile(path.join(command.html, HTML_FILE), formatHtml(result));
+  }
+  if (command.sarif !== null) {
+    // Paths in the log are relative to the working directory when the root is inside it (code scanning reads them from the checkout).
+    const prefix = path.relative(process.cwd(), command.settings.root).split(path.sep).join('/');
+    await writeFile(command.sarif, formatSarif(result, { pathPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix }));
+  }
+  if (command.junit !== null) await writeFile(command.junit, formatJunit(result, { failOn: command.settings.failOn }));
+}
 
 async function main(argv: string[]): Promise<number> {
   let debug = argv.includes('--debug');
@@ -22,7 +58,17 @@ async function main(argv: string[]): Promise<number> {
       return parsed.status;
     }
     debug = parsed.debug;
-    const result = await runPipeline(parsed.settings, createFsRepository(parsed.settings.root));
+    let result: Result;
+    let failOn: 'fail' | 'warn';
+    if (parsed.kind === 'merge') {
+      result = mergeReports(await readReports(parsed.reports), VERSION);
+      failOn = parsed.failOn;
+    } else {
+      const baseOptions = parsed.base !== null ? await evaluateBase(parsed.settings, parsed.base, { fetchHint: CLI_FETCH_HINT }) : {};
+      const scale = { shard: parsed.shard, jobs: parsed.jobs ?? defaultJobs(), root: parsed.settings.root };
+      result = await runPipeline(parsed.settings, createFsRepository(parsed.settings.root), { ...baseOptions, ...scale });
+      failOn = parsed.settings.failOn;
+    }
     const toFile = parsed.out !== null;
     const color = parsed.color ?? (!toFile && process.stdout.isTTY === true && !process.env.NO_COLOR);
     const text =
@@ -33,7 +79,8 @@ async function main(argv: string[]): Promise<number> {
           : formatText(result, { color });
     if (parsed.out !== null) await writeFile(parsed.out, text);
     else process.stdout.write(text);
-    return exitStatus(result, parsed.settings.failOn);
+    if (parsed.kind === 'check') await writeFileReports(parsed, result);
+    return exitStatus(result, failOn);
   } catch (error) {
     process.stderr.write(`fitgate: ${errorMessage(error)}\n`);
     if (debug && error instanceof Error && error.stack) process.stderr.write(`${error.stack}\n`);
@@ -41,5 +88,11 @@ async function main(argv: string[]): Promise<number> {
     return 2;
   }
 }
+
+// In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
+if (!isModelWorker()) // A closed pipe (`fitgate check | head`) is not an error of the run.
+process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+  if (error.code !== 'EPIPE') throw error;
+});
 
 process.exitCode = await main(process.argv.slice(2));
