@@ -73,3 +73,51 @@ function write(name, header, rows) {
   write('sugar-train.csv', ['day', 'brix'], train);
   write('sugar-holdout.csv', ['day', 'brix'], holdout);
 }
+
+// tank-cooling: temperature of a fermentation tank in the hours after the chiller starts; ten
+// readings taken at irregular times. A degree-9 polynomial through them swings between readings.
+{
+  const u = uniform(41);
+  const e = normal(u);
+  const temp = (h) => 12 + 10 * Math.exp(-h / 6) + 0.3 * e();
+  const hours = [0.2, 0.9, 1.4, 3.8, 4.5, 8.9, 10.2, 15.5, 16.1, 23.7];
+  const train = hours.map((h) => [h, temp(h)]);
+  const holdout = Array.from({ length: 12 }, () => {
+    const h = 0.2 + 23.5 * u();
+    return [h, temp(h)];
+  });
+  write('tank-train.csv', ['hours', 'temp_c'], train);
+  write('tank-holdout.csv', ['hours', 'temp_c'], holdout);
+}
+
+// bottle-fill: millilitres filled against line speed and nozzle pressure. The hold-out file was
+// assembled carelessly: five of its rows are copies of training rows (leakage).
+{
+  const u = uniform(53);
+  const e = normal(u);
+  const rows = (n) =>
+    Array.from({ length: n }, () => {
+      const speed = 20 + 40 * u();
+      const pressure = 1 + 2 * u();
+      return [speed, pressure, 752 - 0.35 * speed + 6 * pressure + 1.2 * e()];
+    });
+  const train = rows(150);
+  const holdout = rows(35);
+  for (const k of [3, 17, 42, 88, 120]) holdout.splice((k * 7) % holdout.length, 0, train[k]);
+  write('fill-train.csv', ['line_speed', 'nozzle_bar', 'fill_ml'], train);
+  write('fill-holdout.csv', ['line_speed', 'nozzle_bar', 'fill_ml'], holdout);
+}
+
+// keg-weight: weight of a filled keg against the litres of cider in it. The shipped coefficients
+// in the descriptor came from last season's heavier steel kegs; this season's data no longer match.
+{
+  const u = uniform(67);
+  const e = normal(u);
+  const rows = (n) =>
+    Array.from({ length: n }, () => {
+      const litres = 10 + 40 * u();
+      return [litres, 7.6 + 1.03 * litres + 0.08 * e()];
+    });
+  write('keg-train.csv', ['litres', 'weight_kg'], rows(60));
+  write('keg-holdout.csv', ['litres', 'weight_kg'], rows(20));
+}

@@ -6,7 +6,7 @@
 import type { Descriptor, Limit } from '../config/types.js';
 import type { Design } from '../design-matrix.js';
 import type { FitResult } from '../fit/index.js';
-import type { CheckStatus } from '../result.js';
+import type { CheckStatus, ModelResult } from '../result.js';
 
 /** Figures of the refit that every check may read (plain numbers; non-finite allowed). */
 export interface CoreMetrics {
@@ -53,6 +53,8 @@ export interface CheckContext {
   metrics: CoreMetrics;
   train: ModelData;
   holdout: ModelData;
+  /** The same model (by name) on the base commit of a pull request; null when there is none to compare with. */
+  baseline: ModelResult | null;
   /** Memoises work shared by several checks under a key (e.g. cross-validation). */
   shared<T>(key: string, compute: () => T): T;
 }
@@ -70,6 +72,8 @@ export interface Measurement {
   detail?: Record<string, unknown>;
   /** Figures to add to the model's metrics (snake_case keys). */
   metrics?: Record<string, number | string | null>;
+  /** A change to propose at a descriptor line (shown as a notice whatever the status). */
+  suggestion?: { text: string; line: number };
 }
 
 /** A check module's default export. */

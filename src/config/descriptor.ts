@@ -8,7 +8,7 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { Descriptor, FoldOrder, LimitSpec, RbfCenters, SettingsFile, TermSpec } from './types.js';
+import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -84,6 +84,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       folds: raw.fit?.folds ?? settings.fit.folds,
       foldOrder: raw.fit?.fold_order ?? settings.fit.foldOrder,
       seed: raw.fit?.seed ?? settings.fit.seed,
+      parameterCount: raw.fit?.parameter_count ?? settings.fit.parameterCount,
       line: fitLine,
       ridgeLine: raw.fit?.ridge !== undefined ? line(['fit', 'ridge']) : fitLine,
     },
@@ -131,7 +132,7 @@ interface RawDescriptor {
   task?: 'regression';
   data: { train: string; holdout: string; target: string };
   terms: RawTerm[];
-  fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number };
+  fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }

@@ -40,7 +40,7 @@ export const LIMIT_KEYS: ReadonlyArray<LimitKeyInfo> = Object.freeze([
   {
     key: 'cv_ratio',
     defaultSpec: 'off',
-    description: 'Mean k-fold cross-validation RMSE divided by training RMSE.',
+    description: 'Pooled k-fold cross-validation RMSE divided by training RMSE.',
   },
   {
     key: 'leakage',
@@ -50,12 +50,12 @@ export const LIMIT_KEYS: ReadonlyArray<LimitKeyInfo> = Object.freeze([
   {
     key: 'swing',
     defaultSpec: { warn: 0.25, fail: 0.5 },
-    description: 'Largest relative change of the fitted curve between refits on resampled training rows.',
+    description: 'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
   },
   {
     key: 'swing_beyond',
     defaultSpec: 'off',
-    description: 'Like `swing`, measured beyond the range of the training inputs (extrapolation).',
+    description: 'Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).',
   },
   {
     key: 'condition',
@@ -65,7 +65,12 @@ export const LIMIT_KEYS: ReadonlyArray<LimitKeyInfo> = Object.freeze([
   {
     key: 'reproducibility',
     defaultSpec: 0.01,
-    description: 'Largest difference between the shipped coefficients and the refit, relative to the refit.',
+    description: 'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
+  },
+  {
+    key: 'complexity',
+    defaultSpec: { warn: 1.5 },
+    description: 'Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.',
   },
   {
     key: 'base_change',

@@ -7,7 +7,7 @@ import { InputError } from '../errors.js';
 import type { RepoReader } from '../repo/types.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateSettingsValue } from './schemas.js';
-import type { FoldOrder, LimitSpec, SettingsFile } from './types.js';
+import type { FoldOrder, LimitSpec, ParameterCount, SettingsFile } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 /** Default settings path, relative to the repository root. */
@@ -17,7 +17,7 @@ export const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
 export const DEFAULT_MODEL_PATTERNS: readonly string[] = Object.freeze(['**/*.model.yml']);
 
 /** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
-export const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled' as FoldOrder, seed: 1 });
+export const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled' as FoldOrder, seed: 1, parameterCount: 'columns' as ParameterCount });
 
 /** Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters. */
 export const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000 });
@@ -89,6 +89,7 @@ export function settingsFromDocument(doc: YamlDocument, file: string): SettingsF
       folds: raw.fit?.folds ?? DEFAULT_FIT.folds,
       foldOrder: raw.fit?.fold_order ?? DEFAULT_FIT.foldOrder,
       seed: raw.fit?.seed ?? DEFAULT_FIT.seed,
+      parameterCount: raw.fit?.parameter_count ?? DEFAULT_FIT.parameterCount,
     },
     caps: {
       maxFileBytes: Math.round((raw.caps?.max_file_mb ?? DEFAULT_CAPS.maxFileMb) * MIB),
@@ -128,6 +129,6 @@ interface RawSettings {
   version: 1;
   models?: string[];
   limits?: Record<string, LimitSpec>;
-  fit?: { folds?: number; fold_order?: FoldOrder; seed?: number };
+  fit?: { folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
   caps?: { max_file_mb?: number; max_cells?: number };
 }

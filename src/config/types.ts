@@ -70,6 +70,9 @@ export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec;
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';
 
+/** What the parameter ratio counts: design columns, or a ridge fit's effective degrees of freedom. */
+export type ParameterCount = 'columns' | 'effective';
+
 /** The descriptor's `fit` block with settings defaults applied. */
 export interface FitSpec {
   /** Add a column of ones first. Default true. */
@@ -82,6 +85,8 @@ export interface FitSpec {
   foldOrder: FoldOrder;
   /** Seed of the fold shuffle. Default 1. */
   seed: number;
+  /** What `parameter-ratio` counts. Default `columns`. */
+  parameterCount: ParameterCount;
   /** Line of the `fit` key, or of `terms` when the descriptor has no `fit` block. */
   line: number;
   /** Line of `ridge` inside `fit` when given, else `line`. */
@@ -136,6 +141,6 @@ export interface SettingsFile {
   /** Settings-level limits (not yet merged with defaults), by limit key, with their spec lines. */
   limits: Record<string, { spec: LimitSpec; line: number }>;
   /** Defaults for `fit` keys a descriptor leaves out. */
-  fit: { folds: number; foldOrder: FoldOrder; seed: number };
+  fit: { folds: number; foldOrder: FoldOrder; seed: number; parameterCount: ParameterCount };
   caps: ResourceCaps;
 }

@@ -215,13 +215,14 @@ export class QrAccumulator {
       // H = I - v v^T / (beta (beta - alpha)), v = [alpha - beta; C[:, j]].
       const beta = alpha >= 0 ? -norm : norm;
       const v0 = alpha - beta;
-      const coef = 1 / (beta * (beta - alpha));
+      // Divide in two steps: beta * (beta - alpha) underflows for columns below about 1e-154.
+      const gap = beta - alpha;
       for (let k = j + 1; k < p; k++) {
         const ck = k * ld;
         const rIdx = k * p + j;
         let w = v0 * R[rIdx];
         for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
-        const f = w * coef;
+        const f = w / beta / gap;
         if (f === 0) continue;
         R[rIdx] -= f * v0;
         for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
@@ -229,7 +230,7 @@ export class QrAccumulator {
       {
         let w = v0 * qty[j];
         for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
-        const f = w * coef;
+        const f = w / beta / gap;
         if (f !== 0) {
           qty[j] -= f * v0;
           for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];

@@ -12,7 +12,7 @@ describe('loadSettings', () => {
       file: null,
       models: ['**/*.model.yml'],
       limits: {},
-      fit: { folds: 5, foldOrder: 'shuffled', seed: 1 },
+      fit: { folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' },
       caps: { maxFileBytes: 512 * 1024 * 1024, maxCells: 200_000_000 },
     });
   });
@@ -48,7 +48,7 @@ describe('loadSettings', () => {
         swing: { spec: { warn: 0.1, fail: 0.2 }, line: 7 },
         base_change: { spec: 'off', line: 8 },
       },
-      fit: { folds: 10, foldOrder: 'blocks', seed: 42 },
+      fit: { folds: 10, foldOrder: 'blocks', seed: 42, parameterCount: 'columns' },
       caps: { maxFileBytes: 2 * 1024 * 1024, maxCells: 1000 },
     });
     expect([modelPatternLine(settings, 0), modelPatternLine(settings, 1)]).toEqual([3, 4]);

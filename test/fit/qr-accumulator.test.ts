@@ -211,3 +211,17 @@ describe('QrAccumulator: invariants', () => {
     }
   });
 });
+
+describe('QrAccumulator with tiny columns', () => {
+  it('folds and merges columns near 1e-160 without overflow (regression: 1/(beta (beta - alpha)) overflowed)', () => {
+    const a = new QrAccumulator(2);
+    a.addRows(new Float64Array([1, 1e-160]), new Float64Array([1]), 1);
+    a.addRows(new Float64Array([1, 3e-160]), new Float64Array([2]), 1);
+    const b = new QrAccumulator(2);
+    b.merge(a);
+    for (const v of b.R) expect(Number.isFinite(v), `R entry ${v}`).toBe(true);
+    for (const v of b.qty) expect(Number.isFinite(v), `qty entry ${v}`).toBe(true);
+    // R^T R equals X^T X: the (2,2) entry is (1e-160)^2 + (3e-160)^2 underflows to 0, the (1,1) entry is 2.
+    expect(Math.abs(b.R[0])).toBeCloseTo(Math.SQRT2, 14);
+  });
+});

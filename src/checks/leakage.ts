@@ -1,0 +1,46 @@
+/**
+ * `leakage`: hold-out rows that repeat a training row.
+ */
+import type { Check } from './types.js';
+import { findLeakage } from '../diagnostics/leakage.js';
+
+const check: Check = {
+  id: 'leakage',
+  title: 'Hold-out rows in the training data',
+  limitKey: 'leakage',
+  description:
+    "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
+  advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
+  line: (d) => d.data.lines.holdout,
+  measure({ train, holdout, design }) {
+    if (design.inputs.length === 0) {
+      return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
+    }
+    const leak = findLeakage(train, holdout);
+    const metrics = { leaked_rows: leak.fullMatches, holdout_rows_in_training: leak.inputMatches };
+    const detail = {
+      columns: [...design.inputs],
+      holdout_rows: leak.holdoutRows,
+      input_matches: leak.inputMatches,
+      target_matches: leak.fullMatches,
+      holdout_lines: leak.holdoutLines,
+      train_lines: leak.trainLines,
+      holdout_file: holdout.file,
+      train_file: train.file,
+    };
+    if (leak.inputMatches === 0) {
+      return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.join(', ')}`, metrics, detail };
+    }
+    const lines = (file: string, ls: number[]): string => `${file} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+    const target =
+      leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
+    return {
+      value: leak.inputMatches,
+      message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
+      metrics,
+      detail,
+    };
+  },
+};
+
+export default check;

@@ -1,0 +1,246 @@
+/**
+ * The rules both CSV paths share, kept in one place so that the fast path and the general
+ * path cannot drift apart: what a number cell may look like, how the header is checked,
+ * the exact error each problem raises, and how rows are gathered into chunks.
+ */
+
+import { InputError, quoteValue } from '../errors.js';
+
+/** Rows per chunk when the caller does not say. */
+export const DEFAULT_CHUNK_ROWS = 65536;
+/** Size cap in bytes when the caller does not say (512 MiB). */
+export const DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
+/** How many header names an error message lists before cutting the list. */
+const MAX_NAMES_LISTED = 20;
+/** How many characters of a bad cell an error message quotes. */
+const MAX_CELL_QUOTED = 40;
+
+/**
+ * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
+ * (empty text, `Infinity`, hexadecimal / binary / octal prefixes): optional sign, digits
+ * with an optional point (`1`, `1.`, `.5`, `1.5`), optional exponent (`e-3`, `E+05`).
+ * Source: ECMA-262 `StrDecimalLiteral` (section "ToNumber Applied to the String Type").
+ */
+export const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+/** What the header check hands to a parser. */
+export interface ColumnPlan {
+  /** All header names in file order. */
+  header: string[];
+  /** 1-based line of the header. */
+  headerLine: number;
+  /** For each field of a row: index into the distinct requested columns, or -1 when unused. */
+  slotOfField: Int32Array;
+  /** For each distinct requested column: its field index in a row. */
+  fieldOfSlot: Int32Array;
+}
+
+/** The requested columns, with repeats collapsed. */
+export interface Request {
+  /** Columns as asked for, in order (may repeat). */
+  columns: string[];
+  /** Distinct names, in first-seen order. */
+  distinct: string[];
+  /** For each asked column: its index in `distinct`. */
+  slotOfColumn: number[];
+}
+
+/**
+ * Collapses repeated names in a column request.
+ * @param columns names as the caller gave them
+ */
+export function planRequest(columns: string[]): Request {
+  const distinct: string[] = [];
+  const slotOfColumn: number[] = [];
+  for (const name of columns) {
+    let slot = distinct.indexOf(name);
+    if (slot === -1) {
+      slot = distinct.length;
+      distinct.push(name);
+    }
+    slotOfColumn.push(slot);
+  }
+  return { columns, distinct, slotOfColumn };
+}
+
+/**
+ * Checks the header and maps requested columns to fields.
+ * Throws InputError `csv-header` for a repeated name (both 1-based positions),
+ * `csv-missing-column` for requested names the header lacks (listing up to 20 names it has).
+ *
+ * @param file repository-relative path, for messages
+ * @param header names as read (already trimmed)
+ * @param headerLine 1-based line of the header
+ * @param request the distinct requested columns
+ */
+export function planColumns(file: string, header: string[], headerLine: number, request: Request): ColumnPlan {
+  const position = new Map<string, number>();
+  header.forEach((name, i) => {
+    const earlier = position.get(name);
+    if (earlier !== undefined) {
+      throw new InputError(
+        'csv-header',
+        `the header names column ${quoteValue(name, MAX_CELL_QUOTED)} twice, at positions ${earlier + 1} and ${i + 1}; expected unique column names`,
+        { file, line: headerLine, key: name },
+      );
+    }
+    position.set(name, i);
+  });
+  const missing = request.distinct.filter((name) => !position.has(name));
+  if (missing.length > 0) {
+    const listed = header.slice(0, MAX_NAMES_LISTED).map((name) => quoteValue(name, MAX_CELL_QUOTED));
+    const more = header.length > MAX_NAMES_LISTED ? `, … (${header.length - MAX_NAMES_LISTED} more)` : '';
+    const wanted = missing.map((name) => quoteValue(name, MAX_CELL_QUOTED)).join(', ');
+    throw new InputError(
+      'csv-missing-column',
+      `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`,
+      { file, line: headerLine, key: missing[0] },
+    );
+  }
+  const slotOfField = new Int32Array(header.length).fill(-1);
+  const fieldOfSlot = new Int32Array(request.distinct.length);
+  request.distinct.forEach((name, slot) => {
+    const field = position.get(name) as number;
+    slotOfField[field] = slot;
+    fieldOfSlot[slot] = field;
+  });
+  return { header, headerLine, slotOfField, fieldOfSlot };
+}
+
+/**
+ * Reads one cell of a requested column as the general path does: trims white space (as
+ * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
+ * value is finite. Anything else throws InputError `csv-cell`.
+ *
+ * @param cell the field text (quotes already removed)
+ * @param file repository-relative path, for messages
+ * @param line 1-based physical line of the row
+ * @param column the column's header name
+ */
+export function cellNumber(cell: string, file: string, line: number, column: string): number {
+  const text = cell.trim();
+  if (DECIMAL_NUMBER.test(text)) {
+    const value = Number(text);
+    if (Number.isFinite(value)) return value;
+  }
+  throw cellError(cell, file, line, column);
+}
+
+/** The `csv-cell` error for a cell that is not a finite decimal number. */
+export function cellError(cell: string, file: string, line: number, column: string): InputError {
+  const text = cell.trim();
+  let why: string;
+  if (text === '') why = 'the cell is empty';
+  else if (DECIMAL_NUMBER.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
+  else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
+  else why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}`;
+  return new InputError(
+    'csv-cell',
+    `column ${quoteValue(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`,
+    { file, line, key: column },
+  );
+}
+
+/** The `csv-ragged` error for a row whose field count differs from the header's. */
+export function raggedError(file: string, line: number, expected: number, actual: number): InputError {
+  return new InputError(
+    'csv-ragged',
+    `the row has ${actual} field${actual === 1 ? '' : 's'}; expected ${expected}, as many as the header`,
+    { file, line },
+  );
+}
+
+/** The `csv-empty` error for a file without a header row. */
+export function emptyError(file: string): InputError {
+  return new InputError('csv-empty', 'the file has no header row; expected a first line of comma-separated column names', {
+    file,
+  });
+}
+
+/** One chunk of rows: see `TableChunk` in table.ts (same shape). */
+export interface Chunk {
+  rows: number;
+  columns: Float64Array[];
+  lines: Int32Array;
+}
+
+/** First buffer size of a chunk; buffers double from here up to the chunk size. */
+const FIRST_CAPACITY = 4096;
+
+/**
+ * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
+ * Parsers write `slots[s][row]` and `lines[row]` directly, then advance `row`; when `row`
+ * reaches `capacity` they call {@link ChunkBuilder.full}, which grows the buffers (doubling)
+ * or hands out a chunk, and reload `slots`, `lines`, `row` and `capacity`.
+ */
+export class ChunkBuilder {
+  /** Filled chunks not yet handed out. */
+  readonly ready: Chunk[] = [];
+  /** One buffer per distinct requested column, length `capacity`. */
+  slots: Float64Array[] = [];
+  /** 1-based physical line of each row, length `capacity`. */
+  lines: Int32Array = new Int32Array(0);
+  /** Rows written in the current buffers. */
+  row = 0;
+  /** Rows the current buffers hold. */
+  capacity = 0;
+
+  /**
+   * @param request the requested columns (a chunk lists them in the asked order)
+   * @param chunkRows rows per chunk
+   */
+  constructor(
+    private readonly request: Request,
+    readonly chunkRows: number,
+  ) {
+    this.fresh();
+  }
+
+  /** Advances one row (for parsers that do not track `row` themselves). */
+  endRow(): void {
+    this.row++;
+    if (this.row === this.capacity) this.full();
+  }
+
+  /** Called when `row === capacity`: hands out a chunk, or doubles the buffers. */
+  full(): void {
+    if (this.row >= this.chunkRows) {
+      this.flush();
+      return;
+    }
+    const capacity = Math.min(this.chunkRows, this.capacity * 2);
+    this.slots = this.slots.map((old) => {
+      const grown = new Float64Array(capacity);
+      grown.set(old);
+      return grown;
+    });
+    const lines = new Int32Array(capacity);
+    lines.set(this.lines);
+    this.lines = lines;
+    this.capacity = capacity;
+  }
+
+  /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
+  flush(): void {
+    const rows = this.row;
+    if (rows === 0) return;
+    const exact = rows === this.capacity;
+    const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
+    const lines = exact ? this.lines : this.lines.slice(0, rows);
+    this.ready.push({ rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines });
+    this.fresh();
+  }
+
+  /** Takes the chunks handed out so far. */
+  take(): Chunk[] {
+    return this.ready.splice(0, this.ready.length);
+  }
+
+  /** New buffers, as large as the last ones (a file that filled one chunk likely fills more). */
+  private fresh(): void {
+    if (this.capacity === 0) this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
+    this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
+    this.lines = new Int32Array(this.capacity);
+    this.row = 0;
+  }
+}

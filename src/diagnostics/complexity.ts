@@ -1,0 +1,216 @@
+/**
+ * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
+ * on the same folds, and pick the simplest setting whose error is within one standard error of
+ * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
+ * section 7.10, the "one-standard-error" rule).
+ */
+import { createTerm, type Term } from '../basis/index.js';
+import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
+import { createDesign, type Design } from '../design-matrix.js';
+import type { FitResult } from '../fit/index.js';
+import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, summariseFolds, type Rows } from './cross-validation.js';
+import { assignFolds, type Folds } from './folds.js';
+
+/** A point of a cross-validation curve, in order of increasing complexity. */
+export interface CurvePoint {
+  /** Mean cross-validation error (any loss; the rule only compares). */
+  mean: number;
+  /** Its standard error (NaN counts as 0). */
+  se: number;
+}
+
+/**
+ * The one-standard-error rule: with the settings ordered from simplest to most complex, the
+ * minimum mean error m* at index `best` and its standard error s*, the choice is the simplest
+ * setting whose mean is at most m* + s* (ESL 2nd ed. section 7.10, p. 244). Non-finite means are
+ * never the best nor chosen. Returns -1 for both when no mean is finite.
+ *
+ * @param curve points ordered simplest first
+ */
+export function oneStandardErrorRule(curve: readonly CurvePoint[]): { best: number; chosen: number } {
+  let best = -1;
+  for (let i = 0; i < curve.length; i++) {
+    if (Number.isFinite(curve[i].mean) && (best < 0 || curve[i].mean < curve[best].mean)) best = i;
+  }
+  if (best < 0) return { best: -1, chosen: -1 };
+  const se = Number.isFinite(curve[best].se) ? curve[best].se : 0;
+  const threshold = curve[best].mean + se;
+  for (let i = 0; i <= best; i++) if (Number.isFinite(curve[i].mean) && curve[i].mean <= threshold) return { best, chosen: i };
+  return { best, chosen: best };
+}
+
+/** Which setting a sweep varies. */
+export type SweepKind = 'degree' | 'width' | 'ridge';
+
+/** One setting of the sweep with its cross-validation figures. */
+export interface SweepPoint {
+  /** The setting's value (degree, width or ridge lambda). */
+  setting: number;
+  /** Text for people, e.g. `degree 3`, `ridge 0.8`. */
+  label: string;
+  /** Design columns. */
+  parameters: number;
+  /** Pooled k-fold RMSE sqrt(sum of squared out-of-fold errors / n). */
+  cvRmse: number;
+  /** Mean of the fold MSEs and its standard error. */
+  meanMse: number;
+  seMse: number;
+  /** This is the model's current setting. */
+  current: boolean;
+  /** Why the setting could not be cross-validated (its figures are NaN), when it could not. */
+  failed?: string;
+}
+
+/** Outcome of a sweep. */
+export interface Sweep {
+  kind: SweepKind;
+  /** Descriptor line to change (the term's line, or `fit.ridge`'s line). */
+  line: number;
+  /** Settings ordered simplest first. */
+  curve: SweepPoint[];
+  /** Index of the minimum mean fold MSE, of the setting the rule chose, and of the current setting. */
+  best: number;
+  chosen: number;
+  current: number;
+  /** Rows used (a deterministic even-stride subsample when the training data are larger than `maxRows`). */
+  rows: number;
+  subsampled: boolean;
+  folds: number;
+}
+
+/** Options of {@link sweepComplexity}. */
+export interface SweepOptions {
+  /** Subsample rows above this count (even stride through the file). Default 200000. */
+  maxRows?: number;
+  /** Highest polynomial degree tried. Default 15. */
+  maxDegree?: number;
+}
+
+/** Formats a setting for people (up to 3 significant digits). */
+function formatSetting(x: number): string {
+  if (x === 0) return '0';
+  const a = Math.abs(x);
+  if (a < 1e-3 || a >= 1e5) return x.toExponential(1).replace('e+', 'e');
+  return String(Number(x.toPrecision(a >= 1 ? 3 : 2)));
+}
+
+/** The setting a sweep varies for this model, or null when there is none. */
+export function sweepTarget(descriptor: Descriptor, design: Design): { kind: SweepKind; term: number; line: number } | null {
+  if (descriptor.fit.ridge > 0) return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
+  let poly = -1;
+  let rbf = -1;
+  design.terms.forEach((t, i) => {
+    const spec = t.spec;
+    if (spec.kind === 'polynomial' && (poly < 0 || spec.degree > (design.terms[poly].spec as PolynomialTermSpec).degree)) poly = i;
+    if (spec.kind === 'rbf' && rbf < 0) rbf = i;
+  });
+  if (poly >= 0) return { kind: 'degree', term: poly, line: design.terms[poly].spec.line };
+  if (rbf >= 0) return { kind: 'width', term: rbf, line: design.terms[rbf].spec.line };
+  if (design.p > (design.intercept ? 1 : 0)) return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
+  return null;
+}
+
+/** Every other row at an even stride, as new columns. */
+function subsample(data: Rows, m: number): Rows {
+  const n = data.rows;
+  const idx = Int32Array.from({ length: m }, (_, t) => Math.floor((t * n) / m));
+  return {
+    inputs: data.inputs.map((col) => Float64Array.from(idx, (i) => col[i])),
+    y: Float64Array.from(idx, (i) => data.y[i]),
+    rows: m,
+  };
+}
+
+/**
+ * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
+ * k-fold errors (the same folds for every setting).
+ *
+ * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
+ *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
+ *   current lambda; simplest = largest. The designs do not change, so the per-fold factors are
+ *   built once and each lambda costs k small solves; one scoring pass serves every lambda.
+ * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
+ * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
+ *   Degree and width settings each build their own design: two passes over the rows each.
+ *
+ * @param descriptor the model (fit options, term lines)
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param fit the current fit (its factor gives trace(X^T X))
+ * @param options row cap and highest degree
+ * @returns null when the model has no setting to sweep or fewer than 2 rows
+ */
+export function sweepComplexity(descriptor: Descriptor, design: Design, train: Rows, fit: FitResult, options: SweepOptions = {}): Sweep | null {
+  const target = sweepTarget(descriptor, design);
+  if (target === null || train.rows < 2) return null;
+  const maxRows = options.maxRows ?? 200000;
+  const subsampled = train.rows > maxRows;
+  const rows = subsampled ? subsample(train, maxRows) : train;
+  const folds: Folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+  if (folds.k < 2) return null;
+  const ridge = descriptor.fit.ridge;
+  const curve: SweepPoint[] = [];
+
+  const pointFrom = (setting: number, label: string, parameters: number, sse: number[], current: boolean): SweepPoint => {
+    const s = summariseFolds(sse, folds.sizes);
+    return { setting, label, parameters, cvRmse: s.cvRmse, meanMse: s.meanMse, seMse: s.seMse, current };
+  };
+
+  if (target.kind === 'ridge') {
+    // trace(X^T X) = trace(R^T R) of the data rows = trace of the penalised factor minus lambda per penalised column.
+    const R = fit.factor.R;
+    const p = design.p;
+    let trace = 0;
+    for (let k = 0; k < p * p; k++) trace += R[k] * R[k];
+    trace -= ridge * fit.penalised.filter(Boolean).length;
+    const scale = trace / Math.max(1, p);
+    const grid: number[] = [];
+    for (let t = 3; t >= -6; t -= 0.5) grid.push(scale * 10 ** t);
+    const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
+    const factors = complementFactors(foldFactors(design, rows, folds));
+    const coefficients = complementCoefficients(factors, lambdas, design.penalised);
+    const { sse } = outOfFoldErrors(design, rows, folds, coefficients);
+    lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
+  } else {
+    const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
+    const spec = design.terms[target.term].spec;
+    const settings: { value: number; current: boolean }[] = [];
+    if (target.kind === 'degree') {
+      const degree = (spec as PolynomialTermSpec).degree;
+      const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
+      for (let g = 1; g <= top; g++) settings.push({ value: g, current: g === degree });
+    } else {
+      const width = (spec as RbfTermSpec).width;
+      for (let t = 4; t >= -2; t--) settings.push({ value: width * 2 ** t, current: t === 0 });
+    }
+    for (const { value, current } of settings) {
+      const changed =
+        target.kind === 'degree' ? { ...(spec as PolynomialTermSpec), degree: value } : { ...(spec as RbfTermSpec), width: value };
+      const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
+      const d = createDesign(terms, design.intercept);
+      const label = `${target.kind} ${formatSetting(value)}`;
+      try {
+        const factors = complementFactors(foldFactors(d, rows, folds));
+        const coefficients = complementCoefficients(factors, [ridge], d.penalised);
+        const { sse } = outOfFoldErrors(d, rows, folds, coefficients);
+        curve.push(pointFrom(value, label, d.p, sse[0], current));
+      } catch (error) {
+        // A setting whose fit cannot be computed (e.g. columns that underflow) leaves a gap in the curve.
+        if (!(error instanceof RangeError)) throw error;
+        curve.push({ setting: value, label, parameters: d.p, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+      }
+    }
+  }
+  const { best, chosen } = oneStandardErrorRule(curve.map((c) => ({ mean: c.meanMse, se: c.seMse })));
+  return {
+    kind: target.kind,
+    line: target.line,
+    curve,
+    best,
+    chosen,
+    current: curve.findIndex((c) => c.current),
+    rows: rows.rows,
+    subsampled,
+    folds: folds.k,
+  };
+}

@@ -1,0 +1,302 @@
+/**
+ * Cross-validation without refitting from scratch: k-fold from per-fold QR factors merged
+ * (one pass over the rows to build them, one to score), leave-one-out from the full fit's
+ * leverages (PRESS), and generalised cross-validation from the hat matrix trace.
+ */
+import type { ModelData } from '../checks/types.js';
+import type { Design } from '../design-matrix.js';
+import { fitFactor, leverages, QrAccumulator, type FitResult } from '../fit/index.js';
+import { forEachBlock } from '../model/blocks.js';
+import type { Folds } from './folds.js';
+
+/** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
+export type Rows = Pick<ModelData, 'inputs' | 'y' | 'rows'>;
+
+/** Leverages within this distance of 1 count as 1 (the row is interpolated; its LOO error is infinite). */
+export const LEVERAGE_ONE_TOLERANCE = 1e-10;
+
+/**
+ * Folds the rows of each fold into its own QR factor in one pass over the rows.
+ *
+ * @param design the model's design (p columns)
+ * @param data rows (n = data.rows, equal to folds.foldOf.length)
+ * @param folds fold of each row
+ * @returns k accumulators, one per fold (data rows only, no penalty)
+ */
+export function foldFactors(design: Design, data: Rows, folds: Folds): QrAccumulator[] {
+  const p = design.p;
+  const k = folds.k;
+  const factors = Array.from({ length: k }, () => new QrAccumulator(p));
+  const foldOf = folds.foldOf;
+  if (k === 1) {
+    forEachBlock(design, data, (X, start, m) => factors[0].addRows(X, data.y.subarray(start, start + m), m));
+    return factors;
+  }
+  let sub = new Float64Array(0);
+  let subY = new Float64Array(0);
+  const counts = new Int32Array(k);
+  forEachBlock(design, data, (X, start, m) => {
+    if (sub.length < m * p) {
+      sub = new Float64Array(m * p);
+      subY = new Float64Array(m);
+    }
+    counts.fill(0);
+    for (let i = 0; i < m; i++) counts[foldOf[start + i]]++;
+    for (let f = 0; f < k; f++) {
+      const mf = counts[f];
+      if (mf === 0) continue;
+      // Gather the block's rows of fold f into a column-major mf x p block.
+      let r = 0;
+      for (let i = 0; i < m; i++) {
+        if (foldOf[start + i] !== f) continue;
+        for (let j = 0; j < p; j++) sub[j * mf + r] = X[j * m + i];
+        subY[r] = data.y[start + i];
+        r++;
+      }
+      factors[f].addRows(sub, subY, mf);
+    }
+  });
+  return factors;
+}
+
+/**
+ * For each fold f, the factor of every other fold's rows: prefix and suffix merges, so k folds
+ * cost about 3k merges of p x p factors instead of k(k-1).
+ *
+ * @param factors per-fold factors from {@link foldFactors} (not modified)
+ * @returns k accumulators; entry f holds every row not in fold f
+ */
+export function complementFactors(factors: readonly QrAccumulator[]): QrAccumulator[] {
+  const k = factors.length;
+  if (k === 0) return [];
+  const p = factors[0].p;
+  const prefix: QrAccumulator[] = [new QrAccumulator(p)];
+  for (let f = 1; f < k; f++) {
+    const next = prefix[f - 1].clone();
+    next.merge(factors[f - 1]);
+    prefix.push(next);
+  }
+  const out: QrAccumulator[] = new Array<QrAccumulator>(k);
+  let suffix = new QrAccumulator(p);
+  for (let f = k - 1; f >= 0; f--) {
+    const without = prefix[f];
+    if (suffix.rows > 0) without.merge(suffix);
+    out[f] = without;
+    if (f > 0) {
+      const s = factors[f].clone();
+      if (suffix.rows > 0) s.merge(suffix);
+      suffix = s;
+    }
+  }
+  return out;
+}
+
+/** Sum of squared out-of-fold errors per fold, for several coefficient sets at once. */
+export interface OutOfFoldErrors {
+  /** sse[s][f]: squared errors of fold f's rows under coefficient set s (fitted without fold f). */
+  sse: number[][];
+}
+
+/**
+ * Scores each row with the coefficients fitted without its fold, for S settings at once, in one
+ * pass over the rows. `visit` (optional) sees every design block too (for further figures in the
+ * same pass).
+ *
+ * @param design the design (p columns)
+ * @param data rows
+ * @param folds fold of each row
+ * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
+ * @param visit called with each block (column-major m x p), its first row and m
+ */
+export function outOfFoldErrors(
+  design: Design,
+  data: Rows,
+  folds: Folds,
+  coefficients: readonly (readonly Float64Array[])[],
+  visit?: (X: Float64Array, start: number, m: number) => void,
+): OutOfFoldErrors {
+  const p = design.p;
+  const k = folds.k;
+  const S = coefficients.length;
+  const sse = Array.from({ length: S }, () => new Array<number>(k).fill(0));
+  const foldOf = folds.foldOf;
+  let pred = new Float64Array(0);
+  forEachBlock(design, data, (X, start, m) => {
+    if (pred.length < m) pred = new Float64Array(m);
+    for (let s = 0; s < S; s++) {
+      const W = coefficients[s];
+      const errors = sse[s];
+      pred.fill(0, 0, m);
+      // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
+      for (let j = 0; j < p; j++) {
+        const col = j * m;
+        for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[foldOf[start + i]][j];
+      }
+      for (let i = 0; i < m; i++) {
+        const r = data.y[start + i] - pred[i];
+        errors[foldOf[start + i]] += r * r;
+      }
+    }
+    visit?.(X, start, m);
+  });
+  return { sse };
+}
+
+/** Mean of the fold errors and its standard error (for the one-standard-error rule). */
+export interface FoldErrorSummary {
+  /** sqrt(sum of all squared out-of-fold errors / n) (pooled over rows). */
+  cvRmse: number;
+  /** Mean squared error of each fold's rows. */
+  foldMse: number[];
+  /** Mean of the fold MSEs, CV(f) of ESL eq. 7.48 with equal weights. */
+  meanMse: number;
+  /** Standard error of `meanMse`: sample sd of the fold MSEs / sqrt(k) (ESL section 7.10). */
+  seMse: number;
+}
+
+/**
+ * Summarises per-fold squared error sums.
+ *
+ * @param sse per-fold sums of squared out-of-fold errors (length k)
+ * @param sizes rows per fold (length k)
+ */
+export function summariseFolds(sse: readonly number[], sizes: readonly number[]): FoldErrorSummary {
+  const k = sse.length;
+  let total = 0;
+  let n = 0;
+  const foldMse = sse.map((s, f) => {
+    total += s;
+    n += sizes[f];
+    return sizes[f] > 0 ? s / sizes[f] : Number.NaN;
+  });
+  const meanMse = foldMse.reduce((a, b) => a + b, 0) / k;
+  let ss = 0;
+  for (const v of foldMse) ss += (v - meanMse) * (v - meanMse);
+  const seMse = k > 1 ? Math.sqrt(ss / (k - 1)) / Math.sqrt(k) : Number.NaN;
+  return { cvRmse: n > 0 ? Math.sqrt(total / n) : Number.NaN, foldMse, meanMse, seMse };
+}
+
+/** Coefficients of every complement fit, for each ridge penalty given. */
+export function complementCoefficients(
+  complements: readonly QrAccumulator[],
+  ridges: readonly number[],
+  penalised: ArrayLike<boolean>,
+): Float64Array[][] {
+  return ridges.map((ridge) => complements.map((acc) => fitFactor(acc, { ridge, penalised }).coefficients));
+}
+
+/** Every cross-validation figure of one fit. */
+export interface CrossValidation {
+  /** Folds used (k >= 2), their order and seed. */
+  k: number;
+  foldSizes: number[];
+  /** k-fold RMSE pooled over rows: sqrt(sum of squared out-of-fold errors / n). NaN when k < 2. */
+  cvRmse: number;
+  /** RMSE of each fold's rows under the fit without that fold. */
+  foldRmse: number[];
+  /** Fold MSE mean and standard error (for the one-standard-error rule). */
+  meanMse: number;
+  seMse: number;
+  /** sqrt(mean((e_i / (1 - h_ii))^2)); Infinity when a row has leverage 1. */
+  loocvRmse: number;
+  /** PRESS = sum (e_i / (1 - h_ii))^2 (Allen 1974). */
+  press: number;
+  /** Generalised cross-validation mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979); Infinity when df >= n. */
+  gcv: number;
+  /** Trace of the hat matrix (effective degrees of freedom). */
+  effectiveDf: number;
+  /** Sum of the leverages over the rows (equals `effectiveDf` up to rounding). */
+  leverageSum: number;
+  /** Largest leverage. */
+  maxLeverage: number;
+  /** Rows whose leverage is 1 within {@link LEVERAGE_ONE_TOLERANCE}. */
+  rowsWithLeverageOne: number;
+  /** Training residual sum of squares sum e_i^2 (from the same pass). */
+  rss: number;
+  /** Rows. */
+  n: number;
+}
+
+/**
+ * k-fold cross-validation, leave-one-out and generalised cross-validation of a fit, in two passes
+ * over the training rows.
+ *
+ * Pass 1 folds each fold's rows into its own QR factor; the fit without fold f solves the merge of
+ * the other factors with the same ridge penalty (exactly the fit a refit on those rows gives,
+ * because a QR factor of stacked rows is the factor of the stacked factors). Pass 2 scores every
+ * row under the fit without its fold and, in the same pass, takes the full fit's residual e_i and
+ * leverage h_ii = x_i^T (X^T X + lambda E^T E)^+ x_i.
+ *
+ * - k-fold: cv_rmse = sqrt(sum over rows of squared out-of-fold errors / n).
+ * - Leave-one-out by the PRESS shortcut: the residual of row i under the fit without row i is
+ *   e_i / (1 - h_ii) (Allen, "The relationship between variable selection and data augmentation
+ *   and a method for prediction", Technometrics 16(1), 1974; holds for ridge with the same
+ *   penalty too); loocv_rmse = sqrt(mean((e_i / (1 - h_ii))^2)). A row with h_ii = 1 (the fit
+ *   interpolates it) gives an infinite figure.
+ * - GCV = mean(e_i^2) / (1 - df/n)^2 with df = trace of the hat matrix (Golub, Heath & Wahba,
+ *   "Generalized cross-validation as a method for choosing a good ridge parameter",
+ *   Technometrics 21(2), 1979, eq. 1.4 up to the factor n).
+ *
+ * @param design the model's design (p columns)
+ * @param data training rows (n rows)
+ * @param fit the full fit (its ridge and penalised mask are reused)
+ * @param folds fold assignment of the n rows
+ */
+export function crossValidate(design: Design, data: Rows, fit: FitResult, folds: Folds): CrossValidation {
+  const n = data.rows;
+  const p = design.p;
+  const k = folds.k;
+  const kfold = k >= 2;
+  let coefficients: Float64Array[][] = [];
+  if (kfold) {
+    const complements = complementFactors(foldFactors(design, data, folds));
+    coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
+  }
+  const w = fit.coefficients;
+  let press = 0;
+  let rss = 0;
+  let leverageSum = 0;
+  let maxLeverage = 0;
+  let rowsWithLeverageOne = 0;
+  const visit = (X: Float64Array, start: number, m: number): void => {
+    const h = leverages(fit, X, m);
+    for (let i = 0; i < m; i++) {
+      let pred = 0;
+      for (let j = 0; j < p; j++) pred += X[j * m + i] * w[j];
+      const e = data.y[start + i] - pred;
+      rss += e * e;
+      const hi = h[i];
+      leverageSum += hi;
+      if (hi > maxLeverage) maxLeverage = hi;
+      if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
+        rowsWithLeverageOne++;
+        press = Infinity;
+      } else {
+        const loo = e / (1 - hi);
+        press += loo * loo;
+      }
+    }
+  };
+  const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
+  const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;
+  const df = fit.degreesOfFreedom;
+  const gcvDenominator = 1 - df / n;
+  const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
+  return {
+    k,
+    foldSizes: [...folds.sizes],
+    cvRmse: summary ? summary.cvRmse : Number.NaN,
+    foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
+    meanMse: summary ? summary.meanMse : Number.NaN,
+    seMse: summary ? summary.seMse : Number.NaN,
+    loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
+    press,
+    gcv,
+    effectiveDf: df,
+    leverageSum,
+    maxLeverage,
+    rowsWithLeverageOne,
+    rss,
+    n,
+  };
+}

@@ -1,0 +1,25 @@
+/**
+ * Diagnostics that several checks read, computed once per model through the check context's memo.
+ */
+import type { CheckContext } from '../checks/types.js';
+import { crossValidate, type CrossValidation } from './cross-validation.js';
+import { assignFolds, type Folds } from './folds.js';
+import { measureSwing, type Swing } from './swing.js';
+
+/** The model's folds from its `fit` settings (k = fit.folds, order fit.foldOrder, seed fit.seed). */
+export function sharedFolds(context: CheckContext): Folds {
+  return context.shared('diagnostics/folds', () => {
+    const { folds, foldOrder, seed } = context.descriptor.fit;
+    return assignFolds(context.train.rows, folds, foldOrder, seed);
+  });
+}
+
+/** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
+export function sharedCrossValidation(context: CheckContext): CrossValidation {
+  return context.shared('diagnostics/cross-validation', () => crossValidate(context.design, context.train, context.fit, sharedFolds(context)));
+}
+
+/** Swing between and beyond samples of the refit (see {@link measureSwing}). */
+export function sharedSwing(context: CheckContext): Swing {
+  return context.shared('diagnostics/swing', () => measureSwing(context.design, context.train, context.fit.coefficients));
+}

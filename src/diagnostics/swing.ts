@@ -1,0 +1,391 @@
+/**
+ * Swing between and beyond samples: how far a model's predictions leave the band of observed
+ * training targets on inputs between the training rows and just past their range.
+ */
+import type { Design } from '../design-matrix.js';
+import { predictRows } from '../model/blocks.js';
+import type { Rows } from './cross-validation.js';
+
+/** Options of {@link measureSwing}; every field has a default. */
+export interface SwingOptions {
+  /** Points inside each gap between neighbouring distinct values of an input. Default 8. */
+  perGap?: number;
+  /** Points of the uniform grid across an input's range (both ends included). Default 201. */
+  uniform?: number;
+  /** Margin outside the range on each side, as a fraction of the range. Default 0.1 (10 %). */
+  margin?: number;
+  /** Points in each margin. Default 40. */
+  marginPoints?: number;
+  /** At most this many gaps get points (the widest); the uniform grid covers the rest. Default 16000. */
+  maxGaps?: number;
+  /** Several inputs: rows sampled for the neighbour segments. Default 2000. */
+  maxRows?: number;
+  /** Several inputs: nearest neighbours per sampled row. Default 3. */
+  neighbours?: number;
+  /** Several inputs: points inside each segment. Default 8. */
+  segmentPoints?: number;
+  /** Points kept per curve in the result (thinning keeps each curve's extremes). Default 400. */
+  maxCurvePoints?: number;
+}
+
+/** One curve for charts: predictions along one input, the other inputs held at their medians. */
+export interface SwingCurve {
+  /** The input varied along the curve. */
+  input: string;
+  /** The values of the other inputs (their training medians); empty for a model of one input. */
+  others: Record<string, number>;
+  /** Training range of the input. */
+  range: [number, number];
+  /** Input values, ascending, margins included (at most `maxCurvePoints`). */
+  x: number[];
+  /** Predictions at `x`. */
+  prediction: number[];
+}
+
+/** Where the largest excursion happened. */
+export interface SwingPoint {
+  /** Input values by name. */
+  inputs: Record<string, number>;
+  prediction: number;
+}
+
+/** The swing figures of one fit. */
+export interface Swing {
+  /**
+   * Excursion between samples: max(0, max(pred) - ymax, ymin - min(pred)) / (ymax - ymin) over
+   * every point inside the training range.
+   */
+  inside: number;
+  /** The same over the margins outside the range. */
+  beyond: number;
+  /** [ymin, ymax] of the training targets. */
+  band: [number, number];
+  /** Points evaluated inside the range and in the margins. */
+  points: { inside: number; beyond: number };
+  /** Where the largest excursion inside and beyond happened (null when no points). */
+  worstInside: SwingPoint | null;
+  worstBeyond: SwingPoint | null;
+  /** One curve per input (with a spread). */
+  curves: SwingCurve[];
+  /** Several inputs: sampled rows and neighbours used for the segments; null for one input. */
+  segments: { rows: number; neighbours: number; pointsPerSegment: number } | null;
+  /** The margin fraction used. */
+  margin: number;
+}
+
+/**
+ * Excursion of predictions outside the band [lo, hi] in units of its width:
+ * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
+ */
+export function excursion(prediction: ArrayLike<number>, lo: number, hi: number): number {
+  if (!(hi > lo) || prediction.length === 0) return Number.NaN;
+  let worst = 0;
+  for (let i = 0; i < prediction.length; i++) {
+    const v = prediction[i];
+    const e = Number.isNaN(v) ? Infinity : Math.max(v - hi, lo - v);
+    if (e > worst) worst = e;
+  }
+  return worst / (hi - lo);
+}
+
+/**
+ * Grid across one input's range: `uniform` evenly spaced points from min to max, plus `perGap`
+ * evenly spaced interior points in each gap between neighbouring distinct values (in the
+ * `maxGaps` widest gaps when there are more; at least one per gap), plus `marginPoints` on each
+ * side up to `margin` x range outside. Sorted, without duplicates.
+ *
+ * @param values the input's training values (any order; not modified)
+ * @returns inside and beyond points, ascending; empty when the input has no spread
+ */
+export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
+  const perGap = options.perGap ?? 8;
+  const uniform = options.uniform ?? 201;
+  const margin = options.margin ?? 0.1;
+  const marginPoints = options.marginPoints ?? 40;
+  const maxGaps = options.maxGaps ?? 16000;
+  const sorted = Float64Array.from(values).sort();
+  const distinct: number[] = [];
+  for (const v of sorted) if (distinct.length === 0 || v !== distinct[distinct.length - 1]) distinct.push(v);
+  if (distinct.length < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
+  const lo = distinct[0];
+  const hi = distinct[distinct.length - 1];
+  const width = hi - lo;
+  const inside: number[] = [];
+  for (let t = 0; t < uniform; t++) inside.push(t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1));
+  const gaps = widestGaps(distinct, maxGaps);
+  const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
+  for (const g of gaps) {
+    const a = distinct[g];
+    const b = distinct[g + 1];
+    for (let t = 1; t <= per; t++) inside.push(a + ((b - a) * t) / (per + 1));
+  }
+  const beyond: number[] = [];
+  for (let t = 1; t <= marginPoints; t++) {
+    const d = (margin * width * t) / marginPoints;
+    beyond.push(lo - d, hi + d);
+  }
+  const unique = (xs: number[]): Float64Array => {
+    const s = Float64Array.from(xs).sort();
+    let w = 0;
+    for (let i = 0; i < s.length; i++) if (w === 0 || s[i] !== s[w - 1]) s[w++] = s[i];
+    return s.slice(0, w);
+  };
+  return { inside: unique(inside), beyond: unique(beyond) };
+}
+
+/**
+ * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
+ * ascending g; all gaps when there are no more than `maxGaps`. Linear time apart from one typed
+ * sort of the widths (a comparator sort of index arrays took seconds on a million rows).
+ */
+function widestGaps(distinct: readonly number[], maxGaps: number): Int32Array {
+  const count = distinct.length - 1;
+  if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
+  const widths = new Float64Array(count);
+  for (let g = 0; g < count; g++) widths[g] = distinct[g + 1] - distinct[g];
+  const threshold = Float64Array.from(widths).sort()[count - maxGaps];
+  let above = 0;
+  for (let g = 0; g < count; g++) if (widths[g] > threshold) above++;
+  let ties = maxGaps - above;
+  const out = new Int32Array(maxGaps);
+  let w = 0;
+  for (let g = 0; g < count; g++) {
+    if (widths[g] > threshold || (widths[g] === threshold && ties-- > 0)) out[w++] = g;
+  }
+  return out;
+}
+
+/** Median of the first n values (selection on a copy; the input is not modified). NaN when n = 0. */
+function median(values: Float64Array, n: number): number {
+  if (n === 0) return Number.NaN;
+  const s = Float64Array.from(values.subarray(0, n));
+  const upper = select(s, n >> 1);
+  if (n % 2 === 1) return upper;
+  // The lower middle is the largest value left of the upper middle after selection.
+  let lower = -Infinity;
+  for (let i = 0; i < n >> 1; i++) if (s[i] > lower) lower = s[i];
+  return (lower + upper) / 2;
+}
+
+/**
+ * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
+ * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
+ */
+function select(a: Float64Array, k: number): number {
+  let lo = 0;
+  let hi = a.length - 1;
+  while (hi > lo) {
+    const mid = (lo + hi) >> 1;
+    // Middle of three as pivot.
+    let x = a[lo];
+    let y = a[mid];
+    let z = a[hi];
+    if (x > y) [x, y] = [y, x];
+    if (y > z) [y, z] = [z, y];
+    if (x > y) [x, y] = [y, x];
+    const pivot = y;
+    let i = lo;
+    let j = hi;
+    while (i <= j) {
+      while (a[i] < pivot) i++;
+      while (a[j] > pivot) j--;
+      if (i <= j) {
+        const t = a[i];
+        a[i] = a[j];
+        a[j] = t;
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) hi = j;
+    else if (k >= i) lo = i;
+    else return a[k];
+  }
+  return a[k];
+}
+
+/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
+function thinIndices(length: number, count: number, keep: readonly number[]): number[] {
+  if (length <= count) return Array.from({ length }, (_, i) => i);
+  const chosen = new Set<number>(keep.filter((i) => i >= 0 && i < length));
+  const slots = Math.max(2, count - chosen.size);
+  for (let t = 0; t < slots; t++) chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
+  return [...chosen].sort((a, b) => a - b);
+}
+
+/**
+ * Measures swing between and beyond samples for a fitted model.
+ *
+ * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
+ * same grid along each input with the other inputs at their training medians, and (b) points on
+ * the segments between each of up to `maxRows` sampled training rows (an even stride through the
+ * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
+ * standard deviations). Margins are along each input. The figure is {@link excursion} against the
+ * band of training targets.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param options grid sizes (see {@link SwingOptions})
+ */
+export function measureSwing(design: Design, train: Rows, coefficients: ArrayLike<number>, options: SwingOptions = {}): Swing {
+  const n = train.rows;
+  const d = design.inputs.length;
+  const margin = options.margin ?? 0.1;
+  const maxCurvePoints = options.maxCurvePoints ?? 400;
+  let ylo = Infinity;
+  let yhi = -Infinity;
+  for (let i = 0; i < n; i++) {
+    if (train.y[i] < ylo) ylo = train.y[i];
+    if (train.y[i] > yhi) yhi = train.y[i];
+  }
+  const band: [number, number] = [ylo, yhi];
+  const predictAt = (columns: Float64Array[], m: number): Float64Array => predictRows(design, { inputs: columns, rows: m }, coefficients);
+  const medians = train.inputs.map((col) => median(col, n));
+
+  let inside = 0;
+  let beyond = 0;
+  let insideCount = 0;
+  let beyondCount = 0;
+  let worstInside: SwingPoint | null = null;
+  let worstBeyond: SwingPoint | null = null;
+  const pointAt = (columns: Float64Array[], i: number, prediction: number): SwingPoint => {
+    const inputs: Record<string, number> = {};
+    design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
+    return { inputs, prediction };
+  };
+  /** Scores points; returns predictions. */
+  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond'): Float64Array => {
+    const pred = predictAt(columns, m);
+    for (let i = 0; i < m; i++) {
+      const v = pred[i];
+      const e = Number.isNaN(v) ? Infinity : Math.max(0, v - yhi, ylo - v) / (yhi - ylo);
+      if (where === 'inside') {
+        if (worstInside === null || e > inside) {
+          inside = Math.max(inside, e);
+          worstInside = pointAt(columns, i, pred[i]);
+        }
+      } else if (worstBeyond === null || e > beyond) {
+        beyond = Math.max(beyond, e);
+        worstBeyond = pointAt(columns, i, pred[i]);
+      }
+    }
+    if (where === 'inside') insideCount += m;
+    else beyondCount += m;
+    return pred;
+  };
+
+  // Along each input, the others at their medians.
+  const curves: SwingCurve[] = [];
+  for (let c = 0; c < d; c++) {
+    const grid = inputGrid(train.inputs[c].subarray(0, n), options);
+    if (grid.inside.length === 0) continue;
+    const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(medians[k])));
+    const pin = score(along(grid.inside), grid.inside.length, 'inside');
+    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond');
+    // Curve for charts: all points ascending, thinned with the extremes kept.
+    const m = grid.inside.length + grid.beyond.length;
+    const xs = new Float64Array(m);
+    const ps = new Float64Array(m);
+    const order = Array.from({ length: m }, (_, i) => i).sort((a, b) => {
+      const xa = a < grid.inside.length ? grid.inside[a] : grid.beyond[a - grid.inside.length];
+      const xb = b < grid.inside.length ? grid.inside[b] : grid.beyond[b - grid.inside.length];
+      return xa - xb;
+    });
+    order.forEach((src, dst) => {
+      xs[dst] = src < grid.inside.length ? grid.inside[src] : grid.beyond[src - grid.inside.length];
+      ps[dst] = src < grid.inside.length ? pin[src] : pout[src - grid.inside.length];
+    });
+    let imax = 0;
+    let imin = 0;
+    for (let i = 1; i < m; i++) {
+      if (ps[i] > ps[imax]) imax = i;
+      if (ps[i] < ps[imin]) imin = i;
+    }
+    const keep = thinIndices(m, maxCurvePoints, [imax, imin]);
+    const others: Record<string, number> = {};
+    design.inputs.forEach((name, k) => {
+      if (k !== c) others[name] = medians[k];
+    });
+    curves.push({
+      input: design.inputs[c],
+      others,
+      range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+      x: keep.map((i) => xs[i]),
+      prediction: keep.map((i) => ps[i]),
+    });
+  }
+
+  // Several inputs: segments between sampled rows and their nearest neighbours.
+  let segments: Swing['segments'] = null;
+  if (d >= 2 && n >= 2) {
+    const maxRows = options.maxRows ?? 2000;
+    const kNear = options.neighbours ?? 3;
+    const perSegment = options.segmentPoints ?? 8;
+    const s = Math.min(n, maxRows);
+    const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
+    const scaled = train.inputs.map((col) => {
+      const v = Float64Array.from(rows, (r) => col[r]);
+      let mean = 0;
+      for (const x of v) mean += x / s;
+      let ss = 0;
+      for (const x of v) ss += (x - mean) * (x - mean);
+      const sd = Math.sqrt(ss / s);
+      return sd > 0 ? v.map((x) => (x - mean) / sd) : new Float64Array(s);
+    });
+    const kk = Math.min(kNear, s - 1);
+    const pairs: number[] = [];
+    const best = new Float64Array(kk);
+    const bestIdx = new Int32Array(kk);
+    for (let a = 0; a < s; a++) {
+      best.fill(Infinity);
+      bestIdx.fill(-1);
+      for (let b = 0; b < s; b++) {
+        if (b === a) continue;
+        let dist = 0;
+        for (const col of scaled) {
+          const t = col[a] - col[b];
+          dist += t * t;
+        }
+        if (dist === 0 || dist >= best[kk - 1]) continue;
+        let pos = kk - 1;
+        while (pos > 0 && best[pos - 1] > dist) {
+          best[pos] = best[pos - 1];
+          bestIdx[pos] = bestIdx[pos - 1];
+          pos--;
+        }
+        best[pos] = dist;
+        bestIdx[pos] = b;
+      }
+      for (let t = 0; t < kk; t++) if (bestIdx[t] >= 0) pairs.push(rows[a], rows[bestIdx[t]]);
+    }
+    const segmentsCount = pairs.length / 2;
+    const m = segmentsCount * perSegment;
+    if (m > 0) {
+      const columns = train.inputs.map(() => new Float64Array(m));
+      for (let q = 0; q < segmentsCount; q++) {
+        const ra = pairs[2 * q];
+        const rb = pairs[2 * q + 1];
+        for (let t = 1; t <= perSegment; t++) {
+          const f = t / (perSegment + 1);
+          for (let c = 0; c < d; c++) columns[c][q * perSegment + t - 1] = train.inputs[c][ra] + f * (train.inputs[c][rb] - train.inputs[c][ra]);
+        }
+      }
+      score(columns, m, 'inside');
+    }
+    segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
+  }
+
+  const valid = ylo < yhi;
+  return {
+    inside: valid && insideCount > 0 ? inside : Number.NaN,
+    beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
+    band,
+    points: { inside: insideCount, beyond: beyondCount },
+    worstInside,
+    worstBeyond,
+    curves,
+    segments,
+    margin,
+  };
+}

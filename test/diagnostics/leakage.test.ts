@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { findLeakage } from '../../src/diagnostics/leakage.js';
+
+function data(rows: number[][], firstLine = 2): { inputs: Float64Array[]; y: Float64Array; rows: number; lines: Int32Array } {
+  const q = rows.length > 0 ? rows[0].length - 1 : 1;
+  return {
+    inputs: Array.from({ length: q }, (_, c) => Float64Array.from(rows, (r) => r[c])),
+    y: Float64Array.from(rows, (r) => r[q]),
+    rows: rows.length,
+    lines: Int32Array.from(rows, (_, i) => firstLine + i),
+  };
+}
+
+describe('leakage: hold-out rows equal to a training row', () => {
+  it('counts input matches and full matches exactly on a constructed pair of files', () => {
+    const train = data([
+      [1, 2, 10],
+      [3, 4, 20],
+      [5, 6, 30],
+      [3, 4, 21], // same inputs as line 3, another target
+    ]);
+    const holdout = data([
+      [1, 2, 10], // full match of train line 2
+      [3, 4, 21], // full match of train line 5 (input match of line 3 first)
+      [5, 6, 99], // inputs only
+      [5, 7, 30], // no match
+      [0.1 + 0.2, 4, 20], // no match: 0.30000000000000004 is not 3
+    ]);
+    const leak = findLeakage(train, holdout);
+    expect(leak.inputMatches).toBe(3);
+    expect(leak.fullMatches).toBe(2);
+    expect(leak.holdoutLines).toEqual([2, 3, 4]);
+    expect(leak.trainLines).toEqual([2, 3, 4]);
+  });
+
+  it('treats -0 and 0 as equal and compares values, not text', () => {
+    const leak = findLeakage(data([[0, 1, 5]]), data([[-0, 1, 5]]));
+    expect(leak.inputMatches).toBe(1);
+    expect(leak.fullMatches).toBe(1);
+  });
+
+  it('reports at most 5 lines of each file, counts every match', () => {
+    const rows = Array.from({ length: 12 }, (_, i) => [i, i * 2]);
+    const leak = findLeakage(data(rows), data(rows, 100));
+    expect(leak.inputMatches).toBe(12);
+    expect(leak.fullMatches).toBe(12);
+    expect(leak.holdoutLines).toEqual([100, 101, 102, 103, 104]);
+    expect(leak.trainLines).toEqual([2, 3, 4, 5, 6]);
+  });
+
+  it('finds nothing in disjoint files and handles empty files', () => {
+    expect(findLeakage(data([[1, 1]]), data([[2, 1]])).inputMatches).toBe(0);
+    expect(findLeakage(data([]), data([[2, 1]])).inputMatches).toBe(0);
+    expect(findLeakage(data([[1, 1]]), data([])).holdoutRows).toBe(0);
+  });
+
+  it('matches the count of a naive all-pairs comparison on 2,000 random rows with planted copies', () => {
+    let s = 7;
+    const next = (): number => {
+      s = (s * 16807) % 2147483647;
+      return Math.floor((s / 2147483647) * 20); // few distinct values: many hash chains and near misses
+    };
+    const train = Array.from({ length: 2000 }, () => [next(), next(), next()]);
+    const holdout = Array.from({ length: 500 }, () => [next(), next(), next()]);
+    let inputs = 0;
+    let full = 0;
+    for (const h of holdout) {
+      const same = train.filter((t) => t[0] === h[0] && t[1] === h[1]);
+      if (same.length > 0) inputs++;
+      if (same.some((t) => t[2] === h[2])) full++;
+    }
+    const leak = findLeakage(data(train), data(holdout));
+    expect([leak.inputMatches, leak.fullMatches]).toEqual([inputs, full]);
+  });
+});
