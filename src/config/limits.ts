@@ -54,7 +54,7 @@ export const LIMIT_KEYS: ReadonlyArray<LimitKeyInfo> = Object.freeze([
   },
   {
     key: 'swing_beyond',
-    defaultSpec: 'off',
+    defaultSpec: { warn: 1 },
     description: 'Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).',
   },
   {
