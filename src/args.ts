@@ -6,6 +6,7 @@ import { Command, CommanderError, Option } from 'commander';
 import path from 'node:path';
 import { InputError } from './errors.js';
 import type { Settings } from './settings.js';
+import { parseShard, type Shard } from './shard.js';
 import { VERSION } from './version.js';
 
 /** Output formats of `fitgate check`. */
@@ -23,10 +24,50 @@ export interface CheckCommand {
   color: boolean | null;
   /** Print stack traces of unexpected errors. */
   debug: boolean;
+  /** Compare with the models as they are on this git revision (`--base`), or null. */
+  base: string | null;
+  /** Check only this share of the models (`--shard K/N`), or null for all. */
+  shard: Shard | null;
+  /** Worker threads for models (`--jobs N`); null = one per core. */
+  jobs: number | null;
+  /** Write the HTML report into this folder (`--html DIR`, path as given), or null. */
+  html: string | null;
+  /** Write a SARIF 2.1.0 log to this file (`--sarif FILE`), or null. */
+  sarif: string | null;
+  /** Write a JUnit XML report to this file (`--junit FILE`), or null. */
+  junit: string | null;
+}
+
+/** A parsed `fitgate merge` command: join shard JSON reports into one. */
+export interface MergeCommand {
+  kind: 'merge';
+  /** Report files, absolute paths, in the order given. */
+  reports: string[];
+  /** Output format. Default `text`. */
+  format: OutputFormat;
+  /** Write the report to this file instead of standard output (path as given). */
+  out: string | null;
+  /** Colour: true/false forced, null = only on a terminal. */
+  color: boolean | null;
+  /** `fail` (default) or `warn`: what makes the exit status 1, as for check. */
+  failOn: 'fail' | 'warn';
+  /** Print stack traces of unexpected errors. */
+  debug: boolean;
+}
+
+/** Reads `--jobs`: a whole number >= 1. */
+function parseJobs(value: unknown): number | null {
+  if (value === undefined) return null;
+  const text = String(value);
+  const n = Number(text);
+  if (!/^\s*\d+\s*$/.test(text) || !Number.isSafeInteger(n) || n < 1) {
+    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${JSON.stringify(text)}`, { key: '--jobs' });
+  }
+  return n;
 }
 
 /** What the command line asked for: a command to run, or text to print (help, version). */
-export type Parsed = CheckCommand | { kind: 'print'; text: string; status: 0 | 2 };
+export type Parsed = CheckCommand | MergeCommand | { kind: 'print'; text: string; status: 0 | 2 };
 
 /**
  * Parses argv (without `node` and the script).
@@ -35,7 +76,7 @@ export type Parsed = CheckCommand | { kind: 'print'; text: string; status: 0 | 2
  */
 export function parseArgs(argv: string[], cwd: string): Parsed {
   let printed = '';
-  let parsed: CheckCommand | null = null;
+  let parsed: CheckCommand | MergeCommand | null = null;
   const program = new Command('fitgate')
     .description('Refit committed regression models, re-score them on their hold-out rows, and fail when they overfit.')
     .version(VERSION, '-V, --version')
@@ -53,6 +94,12 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
     .addOption(new Option('--fail-on <level>', 'what fails the run').choices(['fail', 'warn']).default('fail'))
     .option('--color', 'force colours in the text report')
     .option('--no-color', 'never use colours')
+    .option('--base <ref>', 'also check the models as they are on this git commit and compare (hold-out RMSE, gap ratio, the base_change limit)')
+    .option('--shard <K/N>', 'check only share K of N of the models (descriptors sorted by path, dealt round-robin); join the JSON reports with `fitgate merge`')
+    .option('--jobs <n>', 'worker threads to run models on (default: one per core; 1 = serial)')
+    .option('--html <dir>', 'also write the HTML report (index.html, self-contained) into this folder')
+    .option('--sarif <file>', 'also write a SARIF 2.1.0 log for code scanning to this file')
+    .option('--junit <file>', 'also write a JUnit XML report to this file')
     .option('--debug', 'print stack traces of unexpected errors', false)
     .exitOverride()
     .configureOutput({ writeOut: (s) => (printed += s), writeErr: (s) => (printed += s) })
@@ -71,6 +118,35 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
         format: o.format as OutputFormat,
         out: typeof o.out === 'string' ? o.out : null,
         color: cmd.getOptionValueSource('color') === 'cli' ? Boolean(o.color) : null,
+        debug: Boolean(o.debug),
+        base: typeof o.base === 'string' && o.base !== '' ? o.base : null,
+        shard: typeof o.shard === 'string' ? parseShard(o.shard, '--shard') : null,
+        jobs: parseJobs(o.jobs),
+        html: typeof o.html === 'string' ? o.html : null,
+        sarif: typeof o.sarif === 'string' ? o.sarif : null,
+        junit: typeof o.junit === 'string' ? o.junit : null,
+      };
+    });
+  program
+    .command('merge')
+    .description('Join the JSON reports of `fitgate check --shard K/N --format json` jobs into one report. Exit status as for check.')
+    .argument('<report...>', 'JSON report files')
+    .addOption(new Option('--format <format>', 'report format').choices(['text', 'json', 'markdown']).default('text'))
+    .option('--out <file>', 'write the report to a file instead of standard output')
+    .addOption(new Option('--fail-on <level>', 'what fails the run').choices(['fail', 'warn']).default('fail'))
+    .option('--color', 'force colours in the text report')
+    .option('--no-color', 'never use colours')
+    .option('--debug', 'print stack traces of unexpected errors', false)
+    .exitOverride()
+    .configureOutput({ writeOut: (s) => (printed += s), writeErr: (s) => (printed += s) })
+    .action((reports: string[], o: Record<string, unknown>, cmd: Command) => {
+      parsed = {
+        kind: 'merge',
+        reports: reports.map((r) => path.resolve(cwd, r)),
+        format: o.format as OutputFormat,
+        out: typeof o.out === 'string' ? o.out : null,
+        color: cmd.getOptionValueSource('color') === 'cli' ? Boolean(o.color) : null,
+        failOn: o.failOn === 'warn' ? 'warn' : 'fail',
         debug: Boolean(o.debug),
       };
     });

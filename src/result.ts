@@ -3,6 +3,7 @@
  * The JSON report is exactly `JSON.stringify(result)` (non-finite numbers become strings
  * `"Infinity"`, `"-Infinity"`, `"NaN"` through {@link jsonNumber}).
  */
+import type { ChartData } from './model/chart-data.js';
 
 /** Status of one check. */
 export type CheckStatus = 'pass' | 'warn' | 'fail' | 'skipped';
@@ -50,6 +51,8 @@ export interface CheckResult {
   advice: string;
   /** Extra figures for charts and the JSON report. */
   detail?: Record<string, unknown>;
+  /** A change to propose (e.g. `degree 3`) at a descriptor line; reporters show it as a notice. */
+  suggestion?: { text: string; line: number };
 }
 
 /** Fit and hold-out figures of one model. Non-finite values as {@link JsonNumber}. */
@@ -86,6 +89,25 @@ export interface ShippedMetrics {
   max_coefficient_difference: JsonNumber;
 }
 
+/**
+ * How a model compares with the same model (by name) on the base commit of a pull request.
+ * `new`: no model of that name on the base commit (figures null). `compared`: both were
+ * evaluated; a base figure is null when the base model could not be checked.
+ */
+export interface BaseComparison {
+  status: 'new' | 'compared';
+  /** Full SHA of the base commit. */
+  commit: string;
+  /** Hold-out RMSE on the base commit, or null. */
+  holdout_rmse: JsonNumber | null;
+  /** Gap ratio on the base commit, or null. */
+  gap_ratio: JsonNumber | null;
+  /** (head hold-out RMSE - base) / base; positive = worse. Null when either side is missing. */
+  holdout_rmse_change: JsonNumber | null;
+  /** head gap ratio - base gap ratio. Null when either side is missing. */
+  gap_ratio_change: JsonNumber | null;
+}
+
 /** One model's outcome. */
 export interface ModelResult {
   name: string;
@@ -101,10 +123,14 @@ export interface ModelResult {
   coefficients: JsonNumber[];
   shipped: ShippedMetrics | null;
   checks: CheckResult[];
+  /** Comparison with the base commit; absent when no comparison was asked for or possible. */
+  base?: BaseComparison;
   /** Set when the model could not be checked (verdict `error`). */
   error: { message: string; file: string | null; line: number | null; code: string } | null;
   /** Extra data for charts and further reporters. */
   extra?: Record<string, unknown>;
+  /** What the HTML report and the Markdown charts draw (see model/chart-data.ts); absent for models that could not be checked. */
+  charts?: ChartData;
 }
 
 /** The whole run. */

@@ -26,3 +26,30 @@ export function escapeMarkdown(text: string): string {
 export function escapeTerminal(text: string): string {
   return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
+
+/**
+ * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; characters XML 1.0 does
+ * not allow (C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, lone
+ * surrogates) become U+FFFD.
+ */
+export function escapeXml(text: string): string {
+  return text
+    .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, '\ufffd')
+    .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c] as string);
+}
+
+/**
+ * Text inside a double-quoted Mermaid string (chart titles, axis labels): line breaks and other
+ * control characters become spaces; `"` becomes `'`; `<` and `>` become `‹` and `›` (Mermaid
+ * passes labels through an HTML sanitiser); `#` becomes the full-width `＃` (Mermaid reads
+ * `#name;` as an entity code); a backtick becomes `'` so that the text cannot close a
+ * Markdown code fence.
+ */
+export function escapeMermaid(text: string): string {
+  return text
+    .replace(/[\u0000-\u001f\u007f-\u009f]+/g, ' ')
+    .replace(/["`]/g, "'")
+    .replace(/</g, '‹')
+    .replace(/>/g, '›')
+    .replace(/#/g, '＃');
+}

@@ -1,0 +1,27 @@
+import { describe, expect, it } from 'vitest';
+import { escapeMermaid, escapeXml } from '../../src/report/escape.js';
+import { AWKWARD } from './fixture.js';
+
+describe('escapeXml', () => {
+  it('turns markup characters into entities', () => {
+    expect(escapeXml(AWKWARD)).toBe('a|b &lt;c&gt; &amp; &quot;d&quot; &apos;e&apos; 🍎 `f` #g;');
+  });
+  it('replaces characters XML 1.0 forbids and keeps tab, line feed and carriage return', () => {
+    expect(escapeXml('a\u0000b\u001bc\td\ne\rf\ufffeg')).toBe('a\ufffdb\ufffdc\td\ne\rf\ufffdg');
+  });
+  it('replaces lone surrogates but keeps pairs', () => {
+    expect(escapeXml('x\ud800y\udc00z🍎')).toBe('x\ufffdy\ufffdz🍎');
+  });
+  it('leaves the empty string empty', () => {
+    expect(escapeXml('')).toBe('');
+  });
+});
+
+describe('escapeMermaid', () => {
+  it('makes text safe inside a double-quoted Mermaid string', () => {
+    expect(escapeMermaid(AWKWARD)).toBe("a|b ‹c› & 'd' 'e' 🍎 'f' ＃g;");
+  });
+  it('turns line breaks and control characters into one space each run', () => {
+    expect(escapeMermaid('a\r\nb\u001b[31mc')).toBe('a b [31mc');
+  });
+});
