@@ -110,9 +110,9 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
         kind: 'check',
         settings: {
           root,
-          config: toRepoPath(root, path.resolve(root, String(o.config)), '--config'),
+          config: toRepoPath(root, path.resolve(root, String(o.config)), String(o.config), '--config'),
           configExplicit: explicit,
-          descriptors: descriptors.map((d) => toRepoPath(root, path.resolve(cwd, d), d)),
+          descriptors: descriptors.map((d) => toRepoPath(root, path.resolve(cwd, d), d, d)),
           failOn: o.failOn === 'warn' ? 'warn' : 'fail',
         },
         format: o.format as OutputFormat,
@@ -163,11 +163,16 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
   return { kind: 'print', text: printed || program.helpInformation(), status: argv.length === 0 ? 0 : 2 };
 }
 
-/** A path as repository-relative with `/`; outside the root is an InputError. */
-function toRepoPath(root: string, absolute: string, given: string): string {
+/**
+ * A path as repository-relative with `/`; outside the root is an InputError.
+ * @param given the path as the user wrote it (quoted in the message)
+ * @param key what names it: the option (`--config`) or, for an argument, the path itself
+ */
+function toRepoPath(root: string, absolute: string, given: string, key: string): string {
   const rel = path.relative(root, absolute);
   if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel)) {
-    throw new InputError('path-outside', `\`${given}\` is outside the repository root ${root}; expected a path inside it`, { key: given });
+    const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
+    throw new InputError('path-outside', `${what} outside the repository root ${root}; expected a path inside it`, { key });
   }
   return rel.split(path.sep).join('/');
 }

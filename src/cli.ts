@@ -3,21 +3,20 @@
  * The `fitgate` command: parse argv, run the pipeline, print a report, set the exit status
  * (0 within limits, 1 a model over a limit, 2 the run could not be done).
  */
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { CLI_FETCH_HINT, evaluateBase } from './action/base-commit.js';
-import { parseArgs, type CheckCommand } from './args.js';
+import { parseArgs } from './args.js';
 import { errorMessage, InputError } from './errors.js';
 import { mergeReports, type ReportInput } from './merge.js';
+import { writeFileReports } from './output-files.js';
 import { defaultJobs } from './parallel/pool.js';
 import { isModelWorker } from './parallel/model-worker.js';
 import { runPipeline } from './pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
-import { formatHtml, HTML_FILE } from './report/html.js';
 import { formatJson } from './report/json.js';
-import { formatJunit } from './report/junit.js';
 import { formatMarkdown } from './report/markdown.js';
-import { formatSarif } from './report/sarif.js';
+import { escapeTerminal } from './report/escape.js';
 import { formatText } from './report/text.js';
 import { exitStatus, type Result } from './result.js';
 import { VERSION } from './version.js';
@@ -36,19 +35,6 @@ async function readReports(files: string[]): Promise<ReportInput[]> {
 }
 
 /** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
-async function writeFileReports(command: CheckCommand, result: Result): Promise<void> {
-  if (command.html !== null) {
-    await mkdir(command.html, { recursive: true });
-    await writeFile(path.join(command.html, HTML_FILE), formatHtml(result));
-  }
-  if (command.sarif !== null) {
-    // Paths in the log are relative to the working directory when the root is inside it (code scanning reads them from the checkout).
-    const prefix = path.relative(process.cwd(), command.settings.root).split(path.sep).join('/');
-    await writeFile(command.sarif, formatSarif(result, { pathPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix }));
-  }
-  if (command.junit !== null) await writeFile(command.junit, formatJunit(result, { failOn: command.settings.failOn }));
-}
-
 async function main(argv: string[]): Promise<number> {
   let debug = argv.includes('--debug');
   try {
@@ -79,10 +65,21 @@ async function main(argv: string[]): Promise<number> {
           : formatText(result, { color });
     if (parsed.out !== null) await writeFile(parsed.out, text);
     else process.stdout.write(text);
-    if (parsed.kind === 'check') await writeFileReports(parsed, result);
+    if (parsed.kind === 'check') {
+      // SARIF paths are relative to the working directory when the root lies inside it (code scanning reads them from the checkout).
+      const prefix = path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/');
+      await writeFileReports(result, {
+        html: parsed.html,
+        sarif: parsed.sarif,
+        junit: parsed.junit,
+        sarifPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix,
+        failOn: parsed.settings.failOn,
+      });
+    }
     return exitStatus(result, failOn);
   } catch (error) {
-    process.stderr.write(`fitgate: ${errorMessage(error)}\n`);
+    // One line whatever the message holds (a file name may contain a line break and a `::` command).
+    process.stderr.write(`fitgate: ${escapeTerminal(errorMessage(error))}\n`);
     if (debug && error instanceof Error && error.stack) process.stderr.write(`${error.stack}\n`);
     else if (!(error instanceof InputError)) process.stderr.write('(run with --debug for the stack trace)\n');
     return 2;

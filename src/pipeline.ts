@@ -7,11 +7,36 @@ import { discoverDescriptors } from './config/discover.js';
 import { loadSettings } from './config/settings-file.js';
 import type { Descriptor } from './config/types.js';
 import { InputError } from './errors.js';
-import { errorResult, evaluateModel } from './model/evaluate.js';
+import { errorResult } from './model/evaluate.js';
+import { evaluateModels } from './parallel/model-worker.js';
 import type { RepoReader } from './repo/types.js';
 import { summarise, type ModelResult, type Result } from './result.js';
 import type { Settings } from './settings.js';
+import { formatShard, selectShard, type Shard } from './shard.js';
 import { VERSION } from './version.js';
+
+/** Optional inputs of a run besides its settings. */
+export interface PipelineOptions {
+  /**
+   * Outcomes of the same models on the base commit of a pull request, by model name. When
+   * given, every model gets a `base` comparison (`new` when its name is absent) and the
+   * `base-change` check can judge it. Default: no comparison.
+   */
+  baseline?: ReadonlyMap<string, ModelResult>;
+  /** Full SHA of the commit the baseline comes from (recorded in each comparison). Default empty. */
+  baseCommit?: string;
+  /** Messages about the run as a whole, added to `result.notes`. Default none. */
+  notes?: string[];
+  /** Check only this shard of the descriptors (see shard.ts for the rule). Default: all of them. */
+  shard?: Shard | null;
+  /**
+   * Largest number of worker threads to run models on. Default 1 (serial). Workers are used only
+   * when `root` is given too and there is more than one model; results are the same either way.
+   */
+  jobs?: number;
+  /** Absolute repository root on disk for worker threads to read from. Default none (serial). */
+  root?: string;
+}
 
 /**
  * Checks every model of a run.
@@ -20,10 +45,12 @@ import { VERSION } from './version.js';
  * other model is still checked, so the Result always has every model's outcome.
  * @param settings what to check
  * @param repo the repository's files
+ * @param options baseline of a base commit and run notes; default none
  */
-export async function runPipeline(settings: Settings, repo: RepoReader): Promise<Result> {
+export async function runPipeline(settings: Settings, repo: RepoReader, options: PipelineOptions = {}): Promise<Result> {
   const file = await loadSettings(repo, settings.config, { explicit: settings.configExplicit });
-  const paths = await discoverDescriptors(repo, file, settings.descriptors);
+  const shard = options.shard ?? null;
+  const paths = selectShard(await discoverDescriptors(repo, file, settings.descriptors), shard);
   const models: ModelResult[] = [];
   const loaded: Descriptor[] = [];
   for (const path of paths) {
@@ -35,6 +62,9 @@ export async function runPipeline(settings: Settings, repo: RepoReader): Promise
     }
   }
   checkUniqueNames(loaded);
-  for (const descriptor of loaded) models.push(await evaluateModel(repo, descriptor, file));
-  return summarise(models, VERSION);
+  const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
+  models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
+  const notes = [...(options.notes ?? [])];
+  if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+  return summarise(models, VERSION, notes);
 }

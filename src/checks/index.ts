@@ -7,15 +7,35 @@
 import type { Limit } from '../config/types.js';
 import { jsonNumber, type CheckResult } from '../result.js';
 import { formatNumber } from '../format.js';
+import baseChange from './base-change.js';
 import coefficientSize from './coefficient-size.js';
 import generalisationGap from './generalisation-gap.js';
 import parameterRatio from './parameter-ratio.js';
+import complexity from './complexity.js';
+import conditioning from './conditioning.js';
+import crossValidation from './cross-validation.js';
+import leakage from './leakage.js';
+import reproducibility from './reproducibility.js';
+import swing from './swing.js';
+import swingBeyond from './swing-beyond.js';
 import { judge, type Check, type CheckContext, type Measurement } from './types.js';
 
 export type { Check, CheckContext, CoreMetrics, Measurement, ModelData } from './types.js';
 
 /** Every check, in report order. Ids are unique (checked on load). */
-export const CHECKS: readonly Check[] = validate([generalisationGap, parameterRatio, coefficientSize]);
+export const CHECKS: readonly Check[] = validate([
+  generalisationGap,
+  parameterRatio,
+  coefficientSize,
+  baseChange,
+  crossValidation,
+  swing,
+  swingBeyond,
+  leakage,
+  reproducibility,
+  conditioning,
+  complexity,
+]);
 
 function validate(checks: Check[]): Check[] {
   const seen = new Set<string>();
@@ -75,6 +95,7 @@ export function runCheck(check: Check, context: CheckContext): { outcome: CheckR
     message: `${measured.message}${comparison}`,
     advice: status === 'fail' || status === 'warn' ? check.advice : '',
     ...(measured.detail ? { detail: measured.detail } : {}),
+    ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
   };
   return { outcome, figures: measured.metrics };
 }

@@ -5,7 +5,7 @@
  */
 import type { ModelData } from '../checks/types.js';
 import type { Design } from '../design-matrix.js';
-import { fitFactor, leverages, QrAccumulator, type FitResult } from '../fit/index.js';
+import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from '../fit/index.js';
 import { forEachBlock } from '../model/blocks.js';
 import type { Folds } from './folds.js';
 
@@ -16,30 +16,62 @@ export type Rows = Pick<ModelData, 'inputs' | 'y' | 'rows'>;
 export const LEVERAGE_ONE_TOLERANCE = 1e-10;
 
 /**
- * Folds the rows of each fold into its own QR factor in one pass over the rows.
- *
- * @param design the model's design (p columns)
- * @param data rows (n = data.rows, equal to folds.foldOf.length)
- * @param folds fold of each row
- * @returns k accumulators, one per fold (data rows only, no penalty)
+ * Folds design blocks into one QR factor per fold as they stream past: a block whose rows all
+ * belong to one fold (the usual case for `blocks` folds) goes in as it is; otherwise its rows are
+ * gathered per fold into a scratch block first. Rows enter each fold's factor in file order.
  */
-export function foldFactors(design: Design, data: Rows, folds: Folds): QrAccumulator[] {
-  const p = design.p;
-  const k = folds.k;
-  const factors = Array.from({ length: k }, () => new QrAccumulator(p));
-  const foldOf = folds.foldOf;
-  if (k === 1) {
-    forEachBlock(design, data, (X, start, m) => factors[0].addRows(X, data.y.subarray(start, start + m), m));
-    return factors;
+export class FoldFactorBuilder {
+  /** One accumulator per fold (data rows only, no penalty). */
+  readonly factors: QrAccumulator[];
+  readonly #folds: Folds;
+  readonly #p: number;
+  #sub = new Float64Array(0);
+  #subY = new Float64Array(0);
+  readonly #counts: Int32Array;
+
+  /**
+   * @param p design columns
+   * @param folds fold of each row
+   */
+  constructor(p: number, folds: Folds) {
+    this.#p = p;
+    this.#folds = folds;
+    this.factors = Array.from({ length: folds.k }, () => new QrAccumulator(p));
+    this.#counts = new Int32Array(folds.k);
   }
-  let sub = new Float64Array(0);
-  let subY = new Float64Array(0);
-  const counts = new Int32Array(k);
-  forEachBlock(design, data, (X, start, m) => {
-    if (sub.length < m * p) {
-      sub = new Float64Array(m * p);
-      subY = new Float64Array(m);
+
+  /**
+   * Adds rows [start, start + m) given as a column-major m x p block and their targets.
+   *
+   * @param X column-major m x p block
+   * @param y targets of the whole data set (indexed from `start`)
+   * @param start first row
+   * @param m rows in the block
+   */
+  add(X: Float64Array, y: Float64Array, start: number, m: number): void {
+    const p = this.#p;
+    const k = this.#folds.k;
+    const foldOf = this.#folds.foldOf;
+    if (m === 0) return;
+    const first = foldOf[start];
+    let single = true;
+    for (let i = 1; i < m; i++) {
+      if (foldOf[start + i] !== first) {
+        single = false;
+        break;
+      }
     }
+    if (single) {
+      this.factors[first].addRows(X, y.subarray(start, start + m), m);
+      return;
+    }
+    if (this.#sub.length < m * p) {
+      this.#sub = new Float64Array(m * p);
+      this.#subY = new Float64Array(m);
+    }
+    const sub = this.#sub;
+    const subY = this.#subY;
+    const counts = this.#counts;
     counts.fill(0);
     for (let i = 0; i < m; i++) counts[foldOf[start + i]]++;
     for (let f = 0; f < k; f++) {
@@ -50,13 +82,40 @@ export function foldFactors(design: Design, data: Rows, folds: Folds): QrAccumul
       for (let i = 0; i < m; i++) {
         if (foldOf[start + i] !== f) continue;
         for (let j = 0; j < p; j++) sub[j * mf + r] = X[j * m + i];
-        subY[r] = data.y[start + i];
+        subY[r] = y[start + i];
         r++;
       }
-      factors[f].addRows(sub, subY, mf);
+      this.factors[f].addRows(sub, subY, mf);
     }
-  });
-  return factors;
+  }
+}
+
+/**
+ * Folds the rows of each fold into its own QR factor in one pass over the rows.
+ *
+ * @param design the model's design (p columns)
+ * @param data rows (n = data.rows, equal to folds.foldOf.length)
+ * @param folds fold of each row
+ * @returns k accumulators, one per fold (data rows only, no penalty)
+ */
+export function foldFactors(design: Design, data: Rows, folds: Folds): QrAccumulator[] {
+  const builder = new FoldFactorBuilder(design.p, folds);
+  forEachBlock(design, data, (X, start, m) => builder.add(X, data.y, start, m));
+  return builder.factors;
+}
+
+/**
+ * The factor of every row: the merge of the per-fold factors (a QR factor of stacked rows is the
+ * factor of the stacked factors; Golub & Van Loan, Matrix Computations, 4th ed., sec. 6.5.2).
+ *
+ * @param factors per-fold factors (not modified)
+ * @param p columns (used when there are no factors)
+ */
+export function mergeFactors(factors: readonly QrAccumulator[], p: number): QrAccumulator {
+  if (factors.length === 0) return new QrAccumulator(p);
+  const all = factors[0].clone();
+  for (let f = 1; f < factors.length; f++) all.merge(factors[f]);
+  return all;
 }
 
 /**
@@ -120,17 +179,24 @@ export function outOfFoldErrors(
   const S = coefficients.length;
   const sse = Array.from({ length: S }, () => new Array<number>(k).fill(0));
   const foldOf = folds.foldOf;
+  // W[s][j * k + f]: coefficient j of setting s fitted without fold f (one flat table per setting).
+  const tables = coefficients.map((bySet) => {
+    const t = new Float64Array(p * k);
+    for (let f = 0; f < k; f++) for (let j = 0; j < p; j++) t[j * k + f] = bySet[f][j];
+    return t;
+  });
   let pred = new Float64Array(0);
   forEachBlock(design, data, (X, start, m) => {
     if (pred.length < m) pred = new Float64Array(m);
     for (let s = 0; s < S; s++) {
-      const W = coefficients[s];
+      const W = tables[s];
       const errors = sse[s];
       pred.fill(0, 0, m);
       // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
       for (let j = 0; j < p; j++) {
         const col = j * m;
-        for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[foldOf[start + i]][j];
+        const base = j * k;
+        for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[base + foldOf[start + i]];
       }
       for (let i = 0; i < m; i++) {
         const r = data.y[start + i] - pred[i];
@@ -182,7 +248,7 @@ export function complementCoefficients(
   ridges: readonly number[],
   penalised: ArrayLike<boolean>,
 ): Float64Array[][] {
-  return ridges.map((ridge) => complements.map((acc) => fitFactor(acc, { ridge, penalised }).coefficients));
+  return ridges.map((ridge) => complements.map((acc) => solveCoefficients(acc, { ridge, penalised })));
 }
 
 /** Every cross-validation figure of one fit. */
@@ -217,9 +283,17 @@ export interface CrossValidation {
   n: number;
 }
 
+/** Work {@link crossValidate} can take from a caller that already has it. */
+export interface CrossValidateOptions {
+  /** Per-fold factors of the same rows and folds (from {@link FoldFactorBuilder}); default: built in a first pass. */
+  factors?: readonly QrAccumulator[];
+  /** When given (length >= n), receives the full fit's training predictions from the scoring pass. */
+  predictions?: Float64Array;
+}
+
 /**
  * k-fold cross-validation, leave-one-out and generalised cross-validation of a fit, in two passes
- * over the training rows.
+ * over the training rows (one when the per-fold factors are given).
  *
  * Pass 1 folds each fold's rows into its own QR factor; the fit without fold f solves the merge of
  * the other factors with the same ridge penalty (exactly the fit a refit on those rows gives,
@@ -241,29 +315,42 @@ export interface CrossValidation {
  * @param data training rows (n rows)
  * @param fit the full fit (its ridge and penalised mask are reused)
  * @param folds fold assignment of the n rows
+ * @param options per-fold factors already built, and a buffer for the training predictions (default none)
  */
-export function crossValidate(design: Design, data: Rows, fit: FitResult, folds: Folds): CrossValidation {
+export function crossValidate(design: Design, data: Rows, fit: FitResult, folds: Folds, options: CrossValidateOptions = {}): CrossValidation {
   const n = data.rows;
   const p = design.p;
   const k = folds.k;
   const kfold = k >= 2;
   let coefficients: Float64Array[][] = [];
   if (kfold) {
-    const complements = complementFactors(foldFactors(design, data, folds));
+    const complements = complementFactors(options.factors ?? foldFactors(design, data, folds));
     coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
   }
   const w = fit.coefficients;
+  const out = options.predictions;
   let press = 0;
   let rss = 0;
   let leverageSum = 0;
   let maxLeverage = 0;
   let rowsWithLeverageOne = 0;
+  let h = new Float64Array(0);
+  let pred = new Float64Array(0);
   const visit = (X: Float64Array, start: number, m: number): void => {
-    const h = leverages(fit, X, m);
+    if (h.length < m) {
+      h = new Float64Array(m);
+      pred = new Float64Array(m);
+    }
+    leveragesInto(fit, X, m, h);
+    pred.fill(0, 0, m);
+    for (let j = 0; j < p; j++) {
+      const col = j * m;
+      const wj = w[j];
+      for (let i = 0; i < m; i++) pred[i] += X[col + i] * wj;
+    }
+    if (out !== undefined) out.set(pred.subarray(0, m), start);
     for (let i = 0; i < m; i++) {
-      let pred = 0;
-      for (let j = 0; j < p; j++) pred += X[j * m + i] * w[j];
-      const e = data.y[start + i] - pred;
+      const e = data.y[start + i] - pred[i];
       rss += e * e;
       const hi = h[i];
       leverageSum += hi;

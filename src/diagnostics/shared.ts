@@ -6,9 +6,14 @@ import { crossValidate, type CrossValidation } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 import { measureSwing, type Swing } from './swing.js';
 
+/** Memo key of {@link sharedFolds} (the pipeline fills it from its own pass). */
+export const SHARED_FOLDS_KEY = 'diagnostics/folds';
+/** Memo key of {@link sharedCrossValidation} (the pipeline fills it from its own passes). */
+export const SHARED_CROSS_VALIDATION_KEY = 'diagnostics/cross-validation';
+
 /** The model's folds from its `fit` settings (k = fit.folds, order fit.foldOrder, seed fit.seed). */
 export function sharedFolds(context: CheckContext): Folds {
-  return context.shared('diagnostics/folds', () => {
+  return context.shared(SHARED_FOLDS_KEY, () => {
     const { folds, foldOrder, seed } = context.descriptor.fit;
     return assignFolds(context.train.rows, folds, foldOrder, seed);
   });
@@ -16,7 +21,7 @@ export function sharedFolds(context: CheckContext): Folds {
 
 /** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
 export function sharedCrossValidation(context: CheckContext): CrossValidation {
-  return context.shared('diagnostics/cross-validation', () => crossValidate(context.design, context.train, context.fit, sharedFolds(context)));
+  return context.shared(SHARED_CROSS_VALIDATION_KEY, () => crossValidate(context.design, context.train, context.fit, sharedFolds(context)));
 }
 
 /** Swing between and beyond samples of the refit (see {@link measureSwing}). */

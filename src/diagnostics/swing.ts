@@ -5,6 +5,7 @@
 import type { Design } from '../design-matrix.js';
 import { predictRows } from '../model/blocks.js';
 import type { Rows } from './cross-validation.js';
+import { columnMedian } from './column-median.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -98,73 +99,73 @@ export function excursion(prediction: ArrayLike<number>, lo: number, hi: number)
  * @returns inside and beyond points, ascending; empty when the input has no spread
  */
 export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {}): { inside: Float64Array; beyond: Float64Array } {
+  const sorted = Float64Array.from(values).sort();
+  return gridFromSorted(sorted, sorted.length, options);
+}
+
+/**
+ * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
+ * array is overwritten (its distinct values are packed to the front).
+ */
+function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions): { inside: Float64Array; beyond: Float64Array } {
   const perGap = options.perGap ?? 8;
   const uniform = options.uniform ?? 201;
   const margin = options.margin ?? 0.1;
   const marginPoints = options.marginPoints ?? 40;
   const maxGaps = options.maxGaps ?? 16000;
-  const sorted = Float64Array.from(values).sort();
-  const distinct: number[] = [];
-  for (const v of sorted) if (distinct.length === 0 || v !== distinct[distinct.length - 1]) distinct.push(v);
-  if (distinct.length < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
+  let count = 0;
+  for (let i = 0; i < n; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  const distinct = sorted.subarray(0, count);
+  if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
   const lo = distinct[0];
-  const hi = distinct[distinct.length - 1];
+  const hi = distinct[count - 1];
   const width = hi - lo;
-  const inside: number[] = [];
-  for (let t = 0; t < uniform; t++) inside.push(t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1));
   const gaps = widestGaps(distinct, maxGaps);
   const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
+  const inside = new Float64Array(uniform + gaps.length * per);
+  let w = 0;
+  for (let t = 0; t < uniform; t++) inside[w++] = t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1);
   for (const g of gaps) {
     const a = distinct[g];
     const b = distinct[g + 1];
-    for (let t = 1; t <= per; t++) inside.push(a + ((b - a) * t) / (per + 1));
+    for (let t = 1; t <= per; t++) inside[w++] = a + ((b - a) * t) / (per + 1);
   }
-  const beyond: number[] = [];
+  const beyond = new Float64Array(2 * marginPoints);
   for (let t = 1; t <= marginPoints; t++) {
     const d = (margin * width * t) / marginPoints;
-    beyond.push(lo - d, hi + d);
+    beyond[2 * t - 2] = lo - d;
+    beyond[2 * t - 1] = hi + d;
   }
-  const unique = (xs: number[]): Float64Array => {
-    const s = Float64Array.from(xs).sort();
-    let w = 0;
-    for (let i = 0; i < s.length; i++) if (w === 0 || s[i] !== s[w - 1]) s[w++] = s[i];
-    return s.slice(0, w);
+  const unique = (xs: Float64Array, length: number): Float64Array => {
+    const u = xs.subarray(0, length).sort();
+    let k = 0;
+    for (let i = 0; i < u.length; i++) if (k === 0 || u[i] !== u[k - 1]) u[k++] = u[i];
+    return u.slice(0, k);
   };
-  return { inside: unique(inside), beyond: unique(beyond) };
+  return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
 }
 
 /**
  * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
- * ascending g; all gaps when there are no more than `maxGaps`. Linear time apart from one typed
- * sort of the widths (a comparator sort of index arrays took seconds on a million rows).
+ * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
+ * is found by selection ({@link select}) on one typed array of the widths.
  */
-function widestGaps(distinct: readonly number[], maxGaps: number): Int32Array {
+function widestGaps(distinct: Float64Array, maxGaps: number): Int32Array {
   const count = distinct.length - 1;
   if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
   const widths = new Float64Array(count);
   for (let g = 0; g < count; g++) widths[g] = distinct[g + 1] - distinct[g];
-  const threshold = Float64Array.from(widths).sort()[count - maxGaps];
+  const threshold = select(widths, count - maxGaps);
   let above = 0;
-  for (let g = 0; g < count; g++) if (widths[g] > threshold) above++;
+  for (let g = 0; g < count; g++) if (distinct[g + 1] - distinct[g] > threshold) above++;
   let ties = maxGaps - above;
   const out = new Int32Array(maxGaps);
   let w = 0;
   for (let g = 0; g < count; g++) {
-    if (widths[g] > threshold || (widths[g] === threshold && ties-- > 0)) out[w++] = g;
+    const width = distinct[g + 1] - distinct[g];
+    if (width > threshold || (width === threshold && ties-- > 0)) out[w++] = g;
   }
   return out;
-}
-
-/** Median of the first n values (selection on a copy; the input is not modified). NaN when n = 0. */
-function median(values: Float64Array, n: number): number {
-  if (n === 0) return Number.NaN;
-  const s = Float64Array.from(values.subarray(0, n));
-  const upper = select(s, n >> 1);
-  if (n % 2 === 1) return upper;
-  // The lower middle is the largest value left of the upper middle after selection.
-  let lower = -Infinity;
-  for (let i = 0; i < n >> 1; i++) if (s[i] > lower) lower = s[i];
-  return (lower + upper) / 2;
 }
 
 /**
@@ -241,7 +242,9 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
   }
   const band: [number, number] = [ylo, yhi];
   const predictAt = (columns: Float64Array[], m: number): Float64Array => predictRows(design, { inputs: columns, rows: m }, coefficients);
-  const medians = train.inputs.map((col) => median(col, n));
+  // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
+  const scratch = new Float64Array(n);
+  const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
 
   let inside = 0;
   let beyond = 0;
@@ -278,7 +281,8 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
   // Along each input, the others at their medians.
   const curves: SwingCurve[] = [];
   for (let c = 0; c < d; c++) {
-    const grid = inputGrid(train.inputs[c].subarray(0, n), options);
+    scratch.set(train.inputs[c].subarray(0, n));
+    const grid = gridFromSorted(scratch.sort(), n, options);
     if (grid.inside.length === 0) continue;
     const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(medians[k])));
     const pin = score(along(grid.inside), grid.inside.length, 'inside');

@@ -151,6 +151,60 @@ export function fitFactor(data: QrAccumulator, options: FitOptions = {}): FitRes
 }
 
 /**
+ * The coefficients {@link fitFactor} returns, without its diagnostics (condition numbers,
+ * degrees of freedom): for the many solves of cross-validation and sweeps. The rank decision is
+ * the same: full rank is taken without an SVD only when it is certain, i.e. when the lower bound
+ * 1 / ||S^-1||_F of the smallest singular value of the column-scaled factor S exceeds the cutoff
+ * max(rows, p) eps ||S||_F built on an upper bound of the largest (Golub & Van Loan, Matrix
+ * Computations, 4th ed., sec. 2.3.2: ||A||_2 <= ||A||_F); otherwise the SVD decides.
+ *
+ * @param data factor of the data rows (not modified)
+ * @param options ridge penalty (default 0) and penalised columns (default all)
+ * @returns length p
+ * @throws RangeError on a negative or non-finite penalty or a mask of the wrong length
+ */
+export function solveCoefficients(data: QrAccumulator, options: FitOptions = {}): Float64Array {
+  const p = data.p;
+  const { lambda, mask } = checkPenalty(p, options.ridge, options.penalised);
+  const factor = penalisedFactor(data, lambda, mask);
+  if (p === 0) return new Float64Array(0);
+  const rank = certainlyFullRank(factor.R, p, factor.rows) ? p : scaledSpectrum(factor.R, p, factor.rows).rank;
+  return new FactorSolver(factor.R, p, rank).solve(factor.qty);
+}
+
+/** True when the column-scaled triangular factor surely has rank p under the rule of {@link scaledSpectrum}. */
+function certainlyFullRank(R: Float64Array, p: number, rows: number): boolean {
+  const S = new Float64Array(p * p);
+  let frob = 0;
+  for (let j = 0; j < p; j++) {
+    let ss = 0;
+    for (let i = 0; i <= j; i++) ss += R[j * p + i] * R[j * p + i];
+    if (!(ss > 1e-280 && ss < 1e280)) return false; // leave extreme scales to the SVD
+    const d = Math.sqrt(ss);
+    for (let i = 0; i <= j; i++) S[j * p + i] = R[j * p + i] / d;
+    frob += 1;
+  }
+  // ||S^-1||_F^2 by solving S x = e_c for each column c (back-substitution).
+  const x = new Float64Array(p);
+  let inv = 0;
+  for (let c = 0; c < p; c++) {
+    for (let i = p - 1; i >= 0; i--) {
+      let t = i === c ? 1 : 0;
+      for (let k = i + 1; k <= c; k++) t -= S[k * p + i] * x[k];
+      const diag = S[i * p + i];
+      if (diag === 0) return false;
+      x[i] = i > c ? 0 : t / diag;
+      if (i <= c) inv += x[i] * x[i];
+    }
+  }
+  if (!Number.isFinite(inv)) return false;
+  const sMinLower = 1 / Math.sqrt(inv);
+  const sMaxUpper = Math.sqrt(frob);
+  // A safety factor of 2 covers the rounding of these bounds.
+  return sMinLower > 2 * Math.max(rows, p) * Number.EPSILON * sMaxUpper;
+}
+
+/**
  * Convenience: folds a whole column-major n x p design and solves it.
  *
  * @param X column-major n x p (X[j*n + i] is row i, column j)
@@ -311,6 +365,52 @@ export function leverages(fit: FitResult, X: Float64Array, m: number): Float64Ar
     out[i] = h;
   }
   return out;
+}
+
+/**
+ * Leverages of m rows written into `out` (see {@link leverages}), computed a few hundred rows at
+ * a time with the forward substitution z = R^-T x run down whole columns; per row the operations
+ * and their order are those of {@link leverages}, so the figures are identical. No finiteness
+ * check (the rows come from a design the factor was built from).
+ *
+ * @param fit a fit from {@link fitFactor}
+ * @param X column-major m x p block
+ * @param m rows
+ * @param out length >= m; out[i] receives h_i
+ */
+export function leveragesInto(fit: FitResult, X: Float64Array, m: number, out: Float64Array): void {
+  const p = fit.factor.p;
+  if (p === 0) {
+    out.fill(0, 0, m);
+    return;
+  }
+  if (fit.factorRank < p) {
+    out.set(leverages(fit, X, m));
+    return;
+  }
+  const R = fit.factor.R;
+  const CH = 256;
+  const Z = new Float64Array(CH * p);
+  for (let i0 = 0; i0 < m; i0 += CH) {
+    const mb = Math.min(CH, m - i0);
+    for (let i = 0; i < mb; i++) out[i0 + i] = 0;
+    for (let j = 0; j < p; j++) {
+      const zj = j * CH;
+      const xj = j * m + i0;
+      for (let i = 0; i < mb; i++) Z[zj + i] = X[xj + i];
+      for (let k = 0; k < j; k++) {
+        const r = R[j * p + k];
+        const zk = k * CH;
+        for (let i = 0; i < mb; i++) Z[zj + i] -= r * Z[zk + i];
+      }
+      const diag = R[j * p + j];
+      for (let i = 0; i < mb; i++) {
+        const z = Z[zj + i] / diag;
+        Z[zj + i] = z;
+        out[i0 + i] += z * z;
+      }
+    }
+  }
 }
 
 /**

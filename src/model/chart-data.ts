@@ -9,6 +9,7 @@
 import type { ModelData } from '../checks/types.js';
 import { predictRows } from './blocks.js';
 import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result.js';
+import { columnMedian } from '../diagnostics/column-median.js';
 import type { FittedModel } from './evaluate.js';
 
 /** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
@@ -150,13 +151,6 @@ function series(data: ModelData, predictions: Float64Array, max: number): PointS
     fitted: pick(predictions),
     residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
   };
-}
-
-/** Median of the first n values (sorted copy). NaN when n = 0. */
-function median(values: Float64Array, n: number): number {
-  if (n === 0) return Number.NaN;
-  const s = Float64Array.from(values.subarray(0, n)).sort();
-  return n % 2 === 1 ? s[(n - 1) / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
 }
 
 function minMax(values: Float64Array, n: number): [number, number] {
@@ -303,7 +297,7 @@ function readSweep(checks: readonly CheckResult[]): SweepData | null {
 
 /**
  * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
- * Cost: one pass over each file's kept rows, a sort per input for the medians, and
+ * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
  * {@link CURVE_POINTS} predictions per curve.
  * @param model the fitted model (design, coefficients, data, predictions)
  * @param checks the model's check outcomes (swing and complexity details are read when present)
@@ -313,7 +307,7 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
   const { design, tables, metrics, fit, descriptor } = model;
   const { train, holdout } = tables;
   const inputs = [...design.inputs];
-  const medians = train.inputs.map((col) => median(col, train.rows));
+  const medians = train.inputs.map((col) => columnMedian(col, train.rows));
 
   // One input: the curve over the scanned range with the band; several: partial curves.
   let fitCurve: FitCurveData | null = null;

@@ -8,11 +8,14 @@ import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
-import { fitFactor, QrAccumulator, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
+import { fitFactor, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
 import type { RepoReader } from '../repo/types.js';
 import { fromJsonNumber, jsonNumber, worse, type BaseComparison, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result.js';
+import { crossValidate, FoldFactorBuilder, mergeFactors, type CrossValidation } from '../diagnostics/cross-validation.js';
+import { assignFolds, type Folds } from '../diagnostics/folds.js';
+import { SHARED_CROSS_VALIDATION_KEY, SHARED_FOLDS_KEY } from '../diagnostics/shared.js';
 import { forEachBlock, predictRows } from './blocks.js';
 import { buildChartData } from './chart-data.js';
 import { loadModelData, type ModelTables } from './load-data.js';
@@ -29,7 +32,18 @@ export interface FittedModel {
   metrics: CoreMetrics;
   trainPredictions: Float64Array;
   holdoutPredictions: Float64Array;
+  /** Cross-validation folds of the training rows (from the descriptor's `fit` settings). */
+  folds: Folds;
+  /** Cross-validation figures, computed in the fit's passes over the rows. */
+  crossValidation: CrossValidation;
 }
+
+/**
+ * Scaled condition number above which the refit takes a refinement step (Householder QR is
+ * accurate to about cond * eps: below 1e3 every figure is already right to about 1e-13; common
+ * practice).
+ */
+export const REFINE_FROM_CONDITION = 1e3;
 
 /**
  * Loads, fits and scores one model (no checks).
@@ -69,23 +83,30 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     );
   }
 
-  // Fold the training rows into the factor; gather column spreads in the same pass.
-  const factor = new QrAccumulator(p);
+  // One pass over the training rows: each fold's rows into its own factor (the folds are known
+  // before the pass), column spreads alongside. The full factor is the merge of the fold factors.
+  const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+  const builder = new FoldFactorBuilder(p, folds);
   const spread = new ColumnSpread(p);
   forEachBlock(design, train, (X, start, m) => {
-    factor.addRows(X, train.y.subarray(start, start + m), m);
+    builder.add(X, train.y, start, m);
     spread.add(X, m);
   });
-  let fit = fitFactor(factor, { ridge: descriptor.fit.ridge, penalised: design.penalised });
-  // One step of iterative refinement from a second pass over the rows, where it converges.
-  if (!fit.rankDeficient && fit.conditionNumberScaled <= REFINE_MAX_CONDITION) {
+  let fit = fitFactor(mergeFactors(builder.factors, p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
+  // One step of iterative refinement from a further pass, only where it pays: plain Householder
+  // QR is accurate to about cond * eps, so below REFINE_FROM_CONDITION it cannot gain a digit
+  // that any figure shows; above REFINE_MAX_CONDITION the step does not converge.
+  if (!fit.rankDeficient && fit.conditionNumberScaled > REFINE_FROM_CONDITION && fit.conditionNumberScaled <= REFINE_MAX_CONDITION) {
     const pass = new RefinementPass(fit);
     forEachBlock(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
     fit = pass.finish();
   }
 
-  // Score training and hold-out rows.
-  const trainPredictions = predictRows(design, train, fit.coefficients);
+  // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
+  // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
+  const trainPredictions = new Float64Array(train.rows);
+  const crossValidation = crossValidate(design, train, fit, folds, { factors: builder.factors, predictions: trainPredictions });
+  builder.factors.length = 0; // the fold factors are no longer needed
   const holdoutPredictions = predictRows(design, holdout, fit.coefficients);
   const trainSums = emptySums();
   addErrors(trainSums, train.y, trainPredictions, train.rows);
@@ -125,7 +146,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     targetSd: targetStats.sd,
     targetRange: range(train.y, train.rows),
   };
-  return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions };
+  return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation };
 }
 
 /** Training and hold-out RMSE of the descriptor's shipped coefficients. */
@@ -175,8 +196,13 @@ function reportMetrics(model: FittedModel): ModelMetrics {
   };
 }
 
-/** The outcome of a model that could not be checked. */
+/**
+ * The outcome of a model that could not be checked. The message starts with the key path
+ * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
+ * does, since the result keeps only the file and line of the location.
+ */
 export function errorResult(name: string, descriptor: string, error: InputError): ModelResult {
+  const key = error.location.key;
   return {
     name,
     descriptor,
@@ -189,7 +215,7 @@ export function errorResult(name: string, descriptor: string, error: InputError)
     shipped: null,
     checks: [],
     error: {
-      message: error.message,
+      message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
       file: error.location.file ?? null,
       line: error.location.line ?? null,
       code: error.code,
@@ -248,7 +274,11 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
     throw error;
   }
-  const memo = new Map<string, unknown>();
+  // The pipeline's own passes already produced what the shared diagnostics would compute.
+  const memo = new Map<string, unknown>([
+    [SHARED_FOLDS_KEY, model.folds],
+    [SHARED_CROSS_VALIDATION_KEY, model.crossValidation],
+  ]);
   const context: CheckContext = {
     descriptor,
     design: model.design,

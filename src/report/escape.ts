@@ -9,13 +9,17 @@ export function escapeHtml(text: string): string {
 }
 
 /**
- * Markdown inline text (GitHub-flavoured, inside table cells too): HTML-escapes, then
- * backslash-escapes the characters that start Markdown syntax, and turns line breaks into spaces.
+ * Markdown inline text (GitHub-flavoured, inside table cells too): line breaks become spaces;
+ * `&`, `<` and `>` become entities (no HTML, no hidden comments); the characters that start
+ * inline Markdown syntax or end a table cell (`\`, backtick, `*`, `_`, `[`, `]`, `|`, `~`) are
+ * backslash-escaped; `@` is followed by a zero-width space so that names never mention anyone.
+ * Text is always placed mid-line, so block syntax (`#`, `-`, `>` at a line start) cannot start.
  */
 export function escapeMarkdown(text: string): string {
-  return escapeHtml(text)
+  return text
     .replace(/\r?\n|\r/g, ' ')
-    .replace(/([\\`*_{}[\]()#+!|~-])/g, '\\$1')
+    .replace(/[&<>]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[c] as string)
+    .replace(/([\\`*_[\]|~])/g, '\\$1')
     .replace(/@/g, '@\u200b');
 }
 

@@ -2,9 +2,11 @@
  * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
  * One verdict line, a table of every model, then for each model that did not pass each check's
  * figure against its limit with one sentence on what to change. Built as a string; the caller
- * writes it. Text from the repository is escaped with {@link escapeMarkdown}.
+ * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
+ * readable length; the whole report stays under `maxBytes`.
  */
-import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result.js';
+import { mermaidChart } from './mermaid.js';
+import { fromJsonNumber, type CheckResult, type JsonNumber, type ModelResult, type Result } from '../result.js';
 import { formatNumber } from '../format.js';
 import { escapeMarkdown } from './escape.js';
 
@@ -12,17 +14,38 @@ import { escapeMarkdown } from './escape.js';
 export interface MarkdownOptions {
   /** Heading text before the verdict. Default `fitgate`. */
   title?: string;
-  /** Largest output in bytes; models past it are cut with a note. Default 1,000,000 (under GitHub's 1 MiB summary limit). */
+  /** Largest output in UTF-8 bytes; table rows and model blocks past it are cut with a note. Default 1,000,000 (under GitHub's 1 MiB summary limit). */
   maxBytes?: number;
-  /** Extra lines put right under the verdict line (e.g. a hidden marker). Default none. */
+  /** Lines put first, before the heading (e.g. a hidden marker), counted in `maxBytes`. Default none. */
   preamble?: string[];
 }
 
+/** Default size cap: under GitHub's job-summary limit of 1 MiB (1,048,576 bytes). */
+export const DEFAULT_MAX_BYTES = 1_000_000;
+
+/** Longest piece of repository text (a name, a message) shown, in characters. */
+const MAX_TEXT = 300;
+
+/** Bytes kept free for the closing note when cutting. */
+const NOTE_RESERVE = 400;
+
 const MARK: Record<string, string> = { pass: 'pass', warn: 'WARN', fail: 'FAIL', error: 'ERROR', skipped: 'skipped' };
 
-function cell(v: unknown): string {
-  if (typeof v === 'number' || typeof v === 'string') return formatNumber(fromJsonNumber(v as never));
+/** Repository text for Markdown: cut to {@link MAX_TEXT} characters, then escaped. */
+function text(s: string): string {
+  const chars = [...s];
+  return escapeMarkdown(chars.length > MAX_TEXT ? `${chars.slice(0, MAX_TEXT - 1).join('')}…` : s);
+}
+
+function cell(v: JsonNumber | string | number | null | undefined): string {
+  if (typeof v === 'number' || typeof v === 'string') return formatNumber(fromJsonNumber(v as JsonNumber));
   return '–';
+}
+
+function signed(x: number, suffix = ''): string {
+  if (Number.isNaN(x)) return 'NaN';
+  if (x === 0) return `0${suffix}`;
+  return `${x > 0 ? '+' : ''}${formatNumber(x)}${suffix}`;
 }
 
 function limitText(c: CheckResult): string {
@@ -36,65 +59,122 @@ function limitText(c: CheckResult): string {
 /** The verdict in one line. */
 export function verdictLine(result: Result): string {
   const { counts } = result;
-  const over = counts.fail + counts.error;
   const head =
     result.verdict === 'pass'
-      ? `every model within its limits`
+      ? counts.models === 0
+        ? 'no models to check'
+        : 'every model within its limits'
       : result.verdict === 'warn'
         ? `every model within its fail limits, ${counts.warn} with warnings`
         : result.verdict === 'fail'
           ? `${counts.fail} of ${counts.models} models over a limit`
           : `${counts.error} of ${counts.models} models could not be checked`;
-  return `**${MARK[result.verdict]}**: ${head} (${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)${over === 0 ? '' : ''}`;
+  return `**${MARK[result.verdict]}**: ${head} (${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)`;
 }
 
-function overview(models: ModelResult[]): string[] {
-  const lines = [
-    '| Status | Model | Hold-out RMSE | Gap ratio | Params / row | Max std. coef. |',
-    '| --- | --- | ---: | ---: | ---: | ---: |',
+/** The "against base" cell of a model: `new`, the changes, or `–`. */
+function baseCell(m: ModelResult): string {
+  const b = m.base;
+  if (!b) return '–';
+  if (b.status === 'new') return 'new';
+  const rmse = b.holdout_rmse_change === null ? null : fromJsonNumber(b.holdout_rmse_change);
+  const gap = b.gap_ratio_change === null ? null : fromJsonNumber(b.gap_ratio_change);
+  if (rmse === null && gap === null) return 'base not checked';
+  const parts: string[] = [];
+  if (rmse !== null) parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
+  if (gap !== null) parts.push(`gap ${signed(gap)}`);
+  return parts.join(', ');
+}
+
+/** Table header (and separator) of the model overview. */
+function overviewHead(withBase: boolean): string[] {
+  return [
+    `| Status | Model | Hold-out RMSE | Gap ratio | Params / row | Largest std. coef. |${withBase ? ' Against base |' : ''}`,
+    `| --- | --- | ---: | ---: | ---: | ---: |${withBase ? ' --- |' : ''}`,
   ];
-  for (const m of models) {
-    const x = m.metrics;
-    lines.push(
-      `| ${MARK[m.verdict]} | ${escapeMarkdown(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |`,
-    );
-  }
-  return lines;
+}
+
+/** One row of the model overview. */
+export function overviewRow(m: ModelResult, withBase: boolean): string {
+  const x = m.metrics;
+  return `| ${MARK[m.verdict]} | ${text(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
 }
 
 /** The block of one model that did not pass. */
 export function modelDetail(m: ModelResult): string[] {
-  const lines = [`### ${MARK[m.verdict]}: ${escapeMarkdown(m.name)}`, '', `Descriptor: \`${m.descriptor.replace(/`/g, "'")}\``, ''];
+  const lines = [`### ${MARK[m.verdict]}: ${text(m.name)}`, '', `Descriptor: ${text(m.descriptor)}`, ''];
   if (m.error) {
-    const where = m.error.file ? `${escapeMarkdown(m.error.file)}${m.error.line ? ` line ${m.error.line}` : ''}: ` : '';
-    lines.push(`Could not be checked. ${where}${escapeMarkdown(m.error.message)}`, '');
+    const where = m.error.file ? `${text(m.error.file)}${m.error.line ? ` line ${m.error.line}` : ''}: ` : '';
+    lines.push(`Could not be checked. ${where}${text(m.error.message)}`, '');
     return lines;
   }
-  lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+  lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   for (const c of shown) lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);
   lines.push('');
-  for (const c of shown) lines.push(`- **${c.id}**: ${escapeMarkdown(c.message)}. ${escapeMarkdown(c.advice)}`);
+  for (const c of shown) lines.push(`- **${c.id}**: ${text(c.message)}. ${text(c.advice)}`);
   lines.push('');
+  const chart = mermaidChart(m);
+  if (chart !== null) lines.push(chart);
   return lines;
 }
 
-/** Formats the Result as Markdown. */
+function bytes(s: string): number {
+  return Buffer.byteLength(s, 'utf8');
+}
+
+/**
+ * Formats the Result as Markdown, at most `maxBytes` UTF-8 bytes. When the report would be
+ * larger, table rows and then model blocks are left out (the table first keeps every model
+ * that did not pass) and a closing note says how many.
+ * @param result the run's Result
+ * @param options title, size cap and preamble; defaults in {@link MarkdownOptions}
+ */
 export function formatMarkdown(result: Result, options: MarkdownOptions = {}): string {
-  const maxBytes = options.maxBytes ?? 1_000_000;
-  const head = [`## ${escapeMarkdown(options.title ?? 'fitgate')}`, '', ...(options.preamble ?? []), verdictLine(result), ''];
-  const notes = result.notes.map((n) => `> ${escapeMarkdown(n)}`);
-  let text = [...head, ...(notes.length ? [...notes, ''] : []), ...overview(result.models), ''].join('\n');
-  const failing = result.models.filter((m) => m.verdict !== 'pass');
-  let shownModels = 0;
-  for (const m of failing) {
-    const block = `${modelDetail(m).join('\n')}\n`;
-    if (Buffer.byteLength(text) + Buffer.byteLength(block) > maxBytes - 400) break;
-    text += `\n${block}`;
-    shownModels += 1;
+  const maxBytes = options.maxBytes ?? DEFAULT_MAX_BYTES;
+  const budget = maxBytes - NOTE_RESERVE;
+  const withBase = result.models.some((m) => m.base !== undefined);
+  const head = [...(options.preamble ?? []), `## ${text(options.title ?? 'fitgate')}`, '', verdictLine(result), ''];
+  for (const n of result.notes) head.push(`> ${text(n)}`, '');
+  let out = `${head.join('\n')}\n`;
+
+  const notPassing = result.models.filter((m) => m.verdict !== 'pass');
+  const blocks = notPassing.map((m) => `\n${modelDetail(m).join('\n')}`);
+  const detailBytes = blocks.reduce((sum, b) => sum + bytes(b), 0);
+
+  // The table: when it must be cut it keeps the models that did not pass first, and takes at
+  // least half of what is left, the rest going to the details of those models.
+  const cuts: string[] = [];
+  if (result.models.length > 0) {
+    const tableHead = `${overviewHead(withBase).join('\n')}\n`;
+    const rows = result.models.map((m) => `${overviewRow(m, withBase)}\n`);
+    const left = budget - bytes(out);
+    const tableBudget = bytes(out) + Math.max(left / 2, left - detailBytes);
+    let size = bytes(out) + bytes(tableHead);
+    const keep = new Set<number>();
+    const order = result.models.map((_, i) => i).sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
+    for (const i of order) {
+      if (size + bytes(rows[i]) > tableBudget) break;
+      keep.add(i);
+      size += bytes(rows[i]);
+    }
+    out += tableHead + result.models.map((_, i) => (keep.has(i) ? rows[i] : '')).join('');
+    if (keep.size < result.models.length) cuts.push(`${result.models.length - keep.size} of ${result.models.length} table rows`);
   }
-  if (shownModels < failing.length) {
-    text += `\n_Cut to stay under the size limit: ${failing.length - shownModels} more models did not pass; run \`fitgate check\` or read the JSON report for all of them._\n`;
+
+  // One block per model that did not pass.
+  let shown = 0;
+  let size = bytes(out);
+  for (const block of blocks) {
+    const b = bytes(block);
+    if (size + b > budget) break;
+    out += block;
+    size += b;
+    shown += 1;
   }
-  return text;
+  if (shown < notPassing.length) cuts.push(`${notPassing.length - shown} of ${notPassing.length} model details`);
+  if (cuts.length > 0) {
+    out += `\n_Cut to stay under the size limit: ${cuts.join(' and ')} left out. Run \`fitgate check\` or read the JSON report for all of them._\n`;
+  }
+  return out;
 }

@@ -38,7 +38,7 @@ function metric(m: ModelResult, key: string): string {
 
 function checkLine(model: ModelResult, c: CheckResult, color: boolean): string {
   const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
-  const text = `  ${status} ${c.id} (${model.descriptor}:${c.line}): ${escapeTerminal(c.message)}`;
+  const text = `  ${status} ${c.id} (${escapeTerminal(model.descriptor)}:${c.line}): ${escapeTerminal(c.message)}`;
   return c.advice ? `${text}\n       ${escapeTerminal(c.advice)}` : text;
 }
 
@@ -68,7 +68,7 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   for (const m of result.models) {
     if (m.verdict === 'pass') continue;
     out.push('');
-    out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)} (${m.descriptor})`);
+    out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)} (${escapeTerminal(m.descriptor)})`);
     if (m.error) {
       const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
       out.push(`  ${escapeTerminal(where + m.error.message)}`);
@@ -82,5 +82,7 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   out.push(
     `${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`,
   );
-  return `${out.join('\n')}\n`;
+  // A line that would begin with `::` (after white space, which a CI runner trims) could be read
+  // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
+  return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
 }

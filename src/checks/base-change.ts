@@ -1,0 +1,38 @@
+/**
+ * `base-change`: how much worse the hold-out RMSE got against the same model on the pull
+ * request's base commit, as a fraction.
+ */
+import type { Check } from './types.js';
+import { formatNumber } from '../format.js';
+import { fromJsonNumber } from '../result.js';
+
+/** Formats a fraction as a signed percentage, e.g. `+12.5%`. */
+function percent(x: number): string {
+  if (!Number.isFinite(x)) return formatNumber(x);
+  return `${x >= 0 ? '+' : ''}${formatNumber(x * 100, 3)}%`;
+}
+
+const check: Check = {
+  id: 'base-change',
+  title: 'Change against the base commit',
+  limitKey: 'base_change',
+  description:
+    'Relative change of the hold-out RMSE against the same model (by name) on the base commit of the pull request: (RMSE_head - RMSE_base) / RMSE_base, so 0.1 means 10 % worse; infinite when the base RMSE is 0 and the head RMSE is not. Skipped for models new in the pull request, when the base model could not be checked, and when the base commit is not available. Off by default; set `base_change` to a fraction to use it.',
+  advice:
+    'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
+  line: (d) => d.termsLine,
+  measure({ metrics, baseline }) {
+    if (!baseline) return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
+    const base = baseline.metrics ? fromJsonNumber(baseline.metrics.holdout_rmse) : Number.NaN;
+    if (Number.isNaN(base)) return { value: null, reason: 'base-not-checked', message: 'the model could not be checked on the base commit' };
+    const head = metrics.holdoutRmse;
+    const value = base === 0 ? (head === 0 ? 0 : Infinity) : (head - base) / base;
+    return {
+      value,
+      message: `hold-out RMSE ${formatNumber(head)} against ${formatNumber(base)} on the base commit (${percent(value)})`,
+      detail: { base_holdout_rmse: base },
+    };
+  },
+};
+
+export default check;

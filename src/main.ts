@@ -1,0 +1,86 @@
+/**
+ * The action's entry: read the inputs, compare with the base commit on pull requests, run the
+ * same pipeline as the CLI, hand the Result to the reporters (annotations, log, job summary,
+ * comment), set the outputs, and fail the step exactly when the CLI would exit 1 or 2.
+ * The only place that calls `core.setFailed`.
+ */
+import * as core from '@actions/core';
+import * as github from '@actions/github';
+import { ACTION_FETCH_HINT, evaluateBase } from './action/base-commit.js';
+import { createCommentApi, upsertComment } from './action/comment.js';
+import { pullRequestOf } from './action/event.js';
+import { failedCount, failureMessage, OUTPUTS, writeReport } from './action/outcome.js';
+import { errorMessage, InputError } from './errors.js';
+import { readInputs } from './inputs.js';
+import { defaultJobs } from './parallel/pool.js';
+import { isModelWorker } from './parallel/model-worker.js';
+import { writeFileReports } from './output-files.js';
+import { runPipeline } from './pipeline.js';
+import { createFsRepository } from './repo/fs-repository.js';
+import { escapeLogLine, formatAnnotations, formatCommand, inputErrorAnnotation } from './report/annotations.js';
+import { formatComment, formatSummary } from './report/summary.js';
+import { formatText } from './report/text.js';
+
+/** Writes one notice or warning line of our own (message escaped). */
+function say(level: 'notice' | 'warning', message: string): void {
+  process.stdout.write(`${formatCommand({ level, title: 'fitgate', message })}\n`);
+}
+
+async function run(): Promise<void> {
+  let prefix = '';
+  try {
+    const inputs = readInputs();
+    prefix = inputs.prefix;
+    const pr = pullRequestOf({ eventName: github.context.eventName ?? '', payload: github.context.payload, repository: process.env.GITHUB_REPOSITORY });
+
+    // The base commit first, so that the head run can compare with it.
+    const baseOptions = pr?.baseSha ? await evaluateBase(inputs.settings, pr.baseSha, { fetchHint: ACTION_FETCH_HINT }) : {};
+    const scale = { shard: inputs.shard, jobs: defaultJobs(), root: inputs.settings.root };
+    const result = await runPipeline(inputs.settings, createFsRepository(inputs.settings.root), { ...baseOptions, ...scale });
+
+    // Reporters: annotations and log, JSON report, job summary, comment.
+    process.stdout.write(formatAnnotations(result, { prefix }));
+    for (const line of formatText(result).split('\n')) core.info(escapeLogLine(line));
+    const report = await writeReport(result, inputs.tempDir, process.env.GITHUB_ACTION);
+    try {
+      await writeFileReports(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn });
+    } catch (error) {
+      say('warning', `could not write a file report: ${errorMessage(error)}`);
+    }
+    try {
+      await core.summary.addRaw(formatSummary(result)).write();
+    } catch (error) {
+      say('warning', `could not write the job summary: ${errorMessage(error)}`);
+    }
+    if (inputs.comment && pr) {
+      if (inputs.token === '') say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
+      else {
+        const outcome = await upsertComment(createCommentApi(inputs.token, pr), formatComment(result));
+        if (outcome.kind === 'forbidden') {
+          say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
+        } else if (outcome.kind === 'failed') {
+          say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
+        }
+      }
+    }
+
+    // Outputs and the step's status.
+    core.setOutput(OUTPUTS.verdict, result.verdict);
+    core.setOutput(OUTPUTS.failed, String(failedCount(result, inputs.settings.failOn)));
+    core.setOutput(OUTPUTS.report, report);
+    const failure = failureMessage(result, inputs.settings.failOn);
+    if (failure !== null) core.setFailed(failure);
+  } catch (error) {
+    core.setOutput(OUTPUTS.verdict, 'error');
+    if (error instanceof InputError) {
+      if (error.location.file !== undefined) process.stdout.write(`${formatCommand(inputErrorAnnotation(error, prefix))}\n`);
+      core.setFailed(`fitgate could not run: ${error.describe()}`);
+    } else {
+      if (error instanceof Error && error.stack) core.debug(error.stack);
+      core.setFailed(`fitgate failed unexpectedly: ${errorMessage(error)}`);
+    }
+  }
+}
+
+// In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
+if (!isModelWorker()) await run();

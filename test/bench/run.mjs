@@ -1,0 +1,258 @@
+// The benchmark: `npm run bench` (= node test/bench/run.mjs).
+//
+// Builds a small repository with one model per workload size (S, M, L of ../shared/bench/README.md),
+// runs whole `node dist/cli/index.js check --format json` processes several times, and, when
+// Debian's python3-numpy, python3-pandas and python3-sklearn are installed, runs the reference
+// ../shared/bench/ref_check.py on the same files, taking turns. Prints per size the median wall
+// seconds and peak memory of both, the ratios against the targets, and the figures of both side
+// by side (pass = within 1e-6 relative; leaked rows exact). Then a micro benchmark of k-fold plus
+// leave-one-out against a single fit (micro.mjs).
+//
+// Options:
+//   --sizes S,M,L     which workloads (default all three)
+//   --runs N          whole-process runs per tool and size, median reported (default 3)
+//   --data DIR        use DIR/S, DIR/M, DIR/L/{train,holdout}.csv (as gen_data.py writes them)
+//                     instead of generating data in JavaScript (gen-data.mjs)
+//   --work DIR        scratch folder (default $TMPDIR/fitgate-bench; generated data is kept there)
+//   --reference FILE  ref_check.py (default ../shared/bench/ref_check.py next to the repository)
+//   --no-reference    fitgate only
+//   --no-micro        skip the micro benchmark
+//   --json FILE       also write every measurement as JSON
+//   --cli FILE        the fitgate bundle to run (default dist/cli/index.js, built when missing)
+import { execFileSync, spawnSync } from 'node:child_process';
+import { copyFileSync, existsSync, linkSync, mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { generate } from './gen-data.mjs';
+import { measure, median, memoryMethod } from './measure.mjs';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+
+/** The workloads of ../shared/bench/README.md. */
+export const WORKLOADS = {
+  S: { rows: 2_000, holdoutRows: 500, features: 1, degree: 10, folds: 10, loocv: true, seed: 1, wallRatio: 0.15, memRatio: 0.5, memMiB: null },
+  M: { rows: 100_000, holdoutRows: 25_000, features: 5, degree: 4, folds: 5, loocv: true, seed: 2, wallRatio: 0.35, memRatio: 0.5, memMiB: null },
+  L: { rows: 1_000_000, holdoutRows: 250_000, features: 8, degree: 3, folds: 5, loocv: false, seed: 3, wallRatio: 0.3, memRatio: null, memMiB: 256 },
+};
+
+/** Figures compared: [label, fitgate metrics key, reference key, exact]. */
+const FIGURES = [
+  ['training RMSE', 'train_rmse', 'train_rmse', false],
+  ['hold-out RMSE', 'holdout_rmse', 'holdout_rmse', false],
+  ['gap ratio', 'gap_ratio', 'gap_ratio', false],
+  ['max std. coefficient', 'max_std_coefficient', 'max_std_coef', false],
+  ['leave-one-out RMSE', 'loocv_rmse', 'loocv_rmse', false],
+  ['condition number', 'condition_number', 'cond', false],
+  ['k-fold RMSE (blocks)', 'cv_rmse', 'cv_rmse', false],
+  ['leaked rows', 'leaked_rows', 'leaked_rows', true],
+];
+const RELATIVE_TOLERANCE = 1e-6;
+
+function parseOptions(argv) {
+  const o = { sizes: ['S', 'M', 'L'], runs: 3, data: null, work: path.join(os.tmpdir(), 'fitgate-bench'), reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'), useReference: true, micro: true, json: null, cli: path.join(root, 'dist', 'cli', 'index.js') };
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    const value = () => {
+      if (i + 1 >= argv.length) throw new Error(`${a} needs a value`);
+      return argv[++i];
+    };
+    if (a === '--sizes') o.sizes = value().split(',').map((s) => s.trim().toUpperCase());
+    else if (a === '--runs') o.runs = Number(value());
+    else if (a === '--data') o.data = path.resolve(value());
+    else if (a === '--work') o.work = path.resolve(value());
+    else if (a === '--reference') o.reference = path.resolve(value());
+    else if (a === '--no-reference') o.useReference = false;
+    else if (a === '--no-micro') o.micro = false;
+    else if (a === '--json') o.json = path.resolve(value());
+    else if (a === '--cli') o.cli = path.resolve(value());
+    else throw new Error(`unknown option ${a} (see the top of test/bench/run.mjs)`);
+  }
+  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M or L`);
+  if (!(Number.isInteger(o.runs) && o.runs >= 1)) throw new Error('--runs must be a whole number >= 1');
+  return o;
+}
+
+/** Source data of one size: DIR/<size>/ from --data, or generated once into the work folder. */
+function sourceData(options, size) {
+  const w = WORKLOADS[size];
+  if (options.data) {
+    const dir = path.join(options.data, size);
+    for (const f of ['train.csv', 'holdout.csv']) if (!existsSync(path.join(dir, f))) throw new Error(`--data: ${path.join(dir, f)} is missing`);
+    return dir;
+  }
+  const dir = path.join(options.work, 'data-js', size);
+  const stamp = path.join(dir, 'params.json');
+  const params = JSON.stringify({ rows: w.rows, holdoutRows: w.holdoutRows, features: w.features, seed: w.seed, generator: 1 });
+  if (!existsSync(stamp) || readFileSync(stamp, 'utf8') !== params) {
+    process.stderr.write(`generating ${size} data (${w.rows} + ${w.holdoutRows} rows x ${w.features + 1} columns)...\n`);
+    generate({ out: dir, rows: w.rows, holdoutRows: w.holdoutRows, features: w.features, seed: w.seed });
+    writeFileSync(stamp, params);
+  }
+  return dir;
+}
+
+/** Puts a file into the bench repository: a hard link when possible, else a copy. */
+function place(from, to) {
+  rmSync(to, { force: true });
+  try {
+    linkSync(from, to);
+  } catch {
+    copyFileSync(from, to);
+  }
+}
+
+/** The descriptor of one workload: one polynomial term per input, default shift and scale. */
+function descriptorText(size) {
+  const w = WORKLOADS[size];
+  const terms = Array.from({ length: w.features }, (_, j) => `  - polynomial: { of: x${j + 1}, degree: ${w.degree} }`).join('\n');
+  return `# Benchmark workload ${size} (written by test/bench/run.mjs)
+version: 1
+name: bench-${size.toLowerCase()}
+data:
+  train: ../data/${size}/train.csv
+  holdout: ../data/${size}/holdout.csv
+  target: y
+terms:
+${terms}
+fit:
+  intercept: true
+  ridge: 1
+  folds: ${w.folds}
+  fold_order: blocks
+`;
+}
+
+function buildRepository(options) {
+  const repo = path.join(options.work, 'repo');
+  mkdirSync(path.join(repo, 'models'), { recursive: true });
+  writeFileSync(path.join(repo, 'fitgate.yml'), 'version: 1\nmodels:\n  - "models/*.model.yml"\n');
+  const files = {};
+  for (const size of options.sizes) {
+    const src = sourceData(options, size);
+    const data = path.join(repo, 'data', size);
+    mkdirSync(data, { recursive: true });
+    for (const f of ['train.csv', 'holdout.csv']) place(path.join(src, f), path.join(data, f));
+    const descriptor = path.join('models', `${size.toLowerCase()}.model.yml`);
+    writeFileSync(path.join(repo, descriptor), descriptorText(size));
+    files[size] = { descriptor, train: path.join(data, 'train.csv'), holdout: path.join(data, 'holdout.csv') };
+  }
+  return { repo, files };
+}
+
+function referenceAvailable(options) {
+  if (!options.useReference) return 'turned off (--no-reference)';
+  if (!existsSync(options.reference)) return `not found: ${options.reference}`;
+  if (!existsSync('/usr/bin/python3')) return '/usr/bin/python3 is not installed';
+  const probe = spawnSync('/usr/bin/python3', ['-c', 'import numpy, pandas, sklearn'], { encoding: 'utf8' });
+  if (probe.status !== 0) return 'python3-numpy, python3-pandas or python3-sklearn is not installed (apt-get install -y python3-numpy python3-pandas python3-sklearn)';
+  return null;
+}
+
+function fitgateFigures(stdout) {
+  const report = JSON.parse(stdout);
+  const model = report.models[0];
+  if (!model || model.metrics === null) throw new Error(`fitgate could not check the model: ${JSON.stringify(model?.error ?? report)}`);
+  const figures = {};
+  for (const [, key] of FIGURES) figures[key] = model.metrics[key] ?? null;
+  return { figures, verdict: model.verdict };
+}
+
+function compareFigures(fg, ref) {
+  return FIGURES.map(([label, fgKey, refKey, exact]) => {
+    const a = fg[fgKey];
+    const b = ref[refKey];
+    if (b === null || b === undefined) return { label, fitgate: a, reference: null, relative: null, status: 'n/a' };
+    if (a === null || a === undefined || typeof a !== 'number') return { label, fitgate: a, reference: b, relative: null, status: 'fail' };
+    const relative = exact ? Math.abs(a - b) : Math.abs(a - b) / Math.max(Math.abs(b), Number.MIN_VALUE);
+    const ok = exact ? a === b : relative <= RELATIVE_TOLERANCE;
+    return { label, fitgate: a, reference: b, relative, status: ok ? 'pass' : 'fail' };
+  });
+}
+
+const fmt = (x, digits = 3) => (x === null || x === undefined ? '-' : typeof x !== 'number' ? String(x) : Number.isInteger(x) ? String(x) : x.toPrecision(digits));
+
+function table(rows) {
+  const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => String(r[j]).length)));
+  const line = (r) => `| ${r.map((c, j) => String(c).padEnd(widths[j])).join(' | ')} |`;
+  return [line(rows[0]), `| ${widths.map((w) => '-'.repeat(w)).join(' | ')} |`, ...rows.slice(1).map(line)].join('\n');
+}
+
+async function main() {
+  const options = parseOptions(process.argv.slice(2));
+  const cli = options.cli;
+  if (!existsSync(cli)) {
+    process.stderr.write('dist/cli/index.js is missing; building it (npm run bundle)...\n');
+    execFileSync(process.execPath, [path.join(root, 'test', 'tools', 'bundle.mjs')], { stdio: 'inherit', cwd: root });
+  }
+  mkdirSync(options.work, { recursive: true });
+  const { repo, files } = buildRepository(options);
+  const refMissing = referenceAvailable(options);
+  process.stderr.write(`peak memory: ${memoryMethod()}; reference: ${refMissing ?? options.reference}\n`);
+
+  const results = {};
+  for (const size of options.sizes) {
+    const w = WORKLOADS[size];
+    const f = files[size];
+    const runs = { fitgate: [], reference: [] };
+    let fgOut = null;
+    let refOut = null;
+    for (let r = 0; r < options.runs; r++) {
+      // Taking turns: fitgate, then the reference, on the same files.
+      const fg = await measure(process.execPath, [cli, 'check', f.descriptor, '--format', 'json'], { cwd: repo, okStatus: [0, 1] });
+      runs.fitgate.push(fg);
+      fgOut = fg.stdout;
+      if (!refMissing) {
+        const args = [options.reference, '--train', f.train, '--holdout', f.holdout, '--degree', String(w.degree), '--ridge', '1', '--folds', String(w.folds)];
+        if (w.loocv) args.push('--loocv');
+        const ref = await measure('/usr/bin/python3', args, { cwd: repo });
+        runs.reference.push(ref);
+        refOut = ref.stdout;
+      }
+      process.stderr.write(`${size} run ${r + 1}/${options.runs}: fitgate ${fg.wall.toFixed(2)} s ${fg.peakMiB.toFixed(0)} MiB` + (refMissing ? '\n' : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`));
+    }
+    const fg = fitgateFigures(fgOut);
+    const ref = refOut ? JSON.parse(refOut) : null;
+    results[size] = {
+      fitgate: { wall: median(runs.fitgate.map((x) => x.wall)), peakMiB: median(runs.fitgate.map((x) => x.peakMiB)), walls: runs.fitgate.map((x) => x.wall), verdict: fg.verdict },
+      reference: ref ? { wall: median(runs.reference.map((x) => x.wall)), peakMiB: median(runs.reference.map((x) => x.peakMiB)), walls: runs.reference.map((x) => x.wall), timings: ref.timings_s } : null,
+      figures: ref ? compareFigures(fg.figures, ref) : FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' })),
+      trainBytes: statSync(f.train).size + statSync(f.holdout).size,
+    };
+  }
+
+  // Timing table.
+  const head = ['size', 'fitgate wall s', 'fitgate peak MiB', 'reference wall s', 'reference peak MiB', 'wall ratio', 'memory ratio', 'target', 'met'];
+  const rows = [head];
+  for (const size of options.sizes) {
+    const w = WORKLOADS[size];
+    const r = results[size];
+    const wallRatio = r.reference ? r.fitgate.wall / r.reference.wall : null;
+    const memRatio = r.reference ? r.fitgate.peakMiB / r.reference.peakMiB : null;
+    const target = `wall <= ${w.wallRatio}x, ` + (w.memMiB !== null ? `memory <= ${w.memMiB} MiB` : `memory <= ${w.memRatio}x`);
+    const memOk = w.memMiB !== null ? r.fitgate.peakMiB <= w.memMiB : memRatio !== null && memRatio <= w.memRatio;
+    const met = wallRatio === null ? (w.memMiB !== null ? `memory ${memOk ? 'yes' : 'NO'}; wall n/a` : 'n/a') : wallRatio <= w.wallRatio && memOk ? 'yes' : 'NO';
+    r.ratios = { wall: wallRatio, memory: memRatio, met };
+    rows.push([size, fmt(r.fitgate.wall), fmt(r.fitgate.peakMiB, 4), fmt(r.reference?.wall), fmt(r.reference?.peakMiB, 4), wallRatio === null ? '-' : `${wallRatio.toFixed(3)}x`, memRatio === null ? '-' : `${memRatio.toFixed(3)}x`, target, met]);
+  }
+  process.stdout.write(`\nWhole processes, median of ${options.runs} (${os.cpus().length} cores, node ${process.version}; data: ${options.data ?? 'gen-data.mjs'})\n\n${table(rows)}\n`);
+
+  // Figures.
+  const figRows = [['size', 'figure', 'fitgate', 'reference', 'relative difference', 'within 1e-6']];
+  for (const size of options.sizes) {
+    for (const f of results[size].figures) figRows.push([size, f.label, fmt(f.fitgate, 12), fmt(f.reference, 12), f.relative === null ? '-' : f.relative.toExponential(2), f.status]);
+  }
+  process.stdout.write(`\nFigures (leaked rows exact)\n\n${table(figRows)}\n`);
+
+  if (options.micro) {
+    const { microBenchmark } = await import('./micro.mjs');
+    const micro = await microBenchmark({ root });
+    results.micro = micro;
+    process.stdout.write(`\n${micro.text}\n`);
+  }
+  if (options.json) writeFileSync(options.json, `${JSON.stringify(results, null, 2)}\n`);
+  const failed = options.sizes.some((s) => results[s].figures.some((f) => f.status === 'fail'));
+  if (failed) process.exitCode = 1;
+}
+
+await main();
