@@ -53,6 +53,10 @@ export interface MergeCommand {
   failOn: 'fail' | 'warn';
   /** Print stack traces of unexpected errors. */
   debug: boolean;
+  /** File reports of the joined result, as for check (paths as given), or null. */
+  html: string | null;
+  sarif: string | null;
+  junit: string | null;
 }
 
 /** Reads `--jobs`: a whole number >= 1. */
@@ -134,6 +138,9 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
     .addOption(new Option('--format <format>', 'report format').choices(['text', 'json', 'markdown']).default('text'))
     .option('--out <file>', 'write the report to a file instead of standard output')
     .addOption(new Option('--fail-on <level>', 'what fails the run').choices(['fail', 'warn']).default('fail'))
+    .option('--html <dir>', 'also write the HTML report of the joined result into this folder')
+    .option('--sarif <file>', 'also write a SARIF 2.1.0 log of the joined result to this file')
+    .option('--junit <file>', 'also write a JUnit XML report of the joined result to this file')
     .option('--color', 'force colours in the text report')
     .option('--no-color', 'never use colours')
     .option('--debug', 'print stack traces of unexpected errors', false)
@@ -148,6 +155,9 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
         color: cmd.getOptionValueSource('color') === 'cli' ? Boolean(o.color) : null,
         failOn: o.failOn === 'warn' ? 'warn' : 'fail',
         debug: Boolean(o.debug),
+        html: typeof o.html === 'string' ? o.html : null,
+        sarif: typeof o.sarif === 'string' ? o.sarif : null,
+        junit: typeof o.junit === 'string' ? o.junit : null,
       };
     });
   try {

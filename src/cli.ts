@@ -65,17 +65,16 @@ async function main(argv: string[]): Promise<number> {
           : formatText(result, { color });
     if (parsed.out !== null) await writeFile(parsed.out, text);
     else process.stdout.write(text);
-    if (parsed.kind === 'check') {
-      // SARIF paths are relative to the working directory when the root lies inside it (code scanning reads them from the checkout).
-      const prefix = path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/');
-      await writeFileReports(result, {
-        html: parsed.html,
-        sarif: parsed.sarif,
-        junit: parsed.junit,
-        sarifPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix,
-        failOn: parsed.settings.failOn,
-      });
-    }
+    // SARIF paths are relative to the working directory when the root lies inside it (code
+    // scanning reads them from the checkout); merged shard reports run from the root.
+    const prefix = parsed.kind === 'check' ? path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/') : '';
+    await writeFileReports(result, {
+      html: parsed.html,
+      sarif: parsed.sarif,
+      junit: parsed.junit,
+      sarifPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix,
+      failOn,
+    });
     return exitStatus(result, failOn);
   } catch (error) {
     // One line whatever the message holds (a file name may contain a line break and a `::` command).
