@@ -1,0 +1,166 @@
+/**
+ * The corpus of broken and hostile repositories. Each case is a generator of a small
+ * repository (the base one of repo.ts with one thing broken), the exit status the CLI must
+ * give, and the words its message must contain. The runner (corpus.test.ts) writes each case
+ * into a temporary folder next to an `outside/` folder holding files with a secret marker,
+ * and runs it through the CLI and the action's entry point.
+ *
+ * `$OUTSIDE` in file texts, link targets, arguments and inputs is the absolute path of that
+ * outside folder; `../../outside/...` from `models/` and `../outside/...` from the root reach it
+ * by climbing.
+ */
+import type { FileSpec } from '../harness.js';
+import { descriptor, HOLDOUT, repo, rows, SETTINGS, TRAIN } from './repo.js';
+
+/** One hostile repository and what fitgate must make of it. */
+export interface CorpusCase {
+  /** Short kebab-case name. */
+  id: string;
+  /** What is broken, in words. */
+  about: string;
+  /** The repository's files. */
+  files: Record<string, FileSpec>;
+  /** Extra CLI arguments after `check --root <repo>`. Default none. */
+  args?: string[];
+  /** Action inputs (`config`, ...), or `null` when the case has no action form (reason in `cliOnly`). Default none. */
+  inputs?: Record<string, string> | null;
+  /** Why the case only runs through the CLI (the action has no input for it). */
+  cliOnly?: string;
+  /** Exit status of the CLI: 0 within limits, 1 over a limit, 2 could not be checked. */
+  exit: 0 | 1 | 2;
+  /** Words the message must contain (CLI: standard output and error; action: standard output). */
+  words: string[];
+  /** Expected verdicts of named models in the JSON report, when the run gets that far. */
+  verdicts?: Record<string, string>;
+}
+
+const m = 'models/m.model.yml';
+const train = 'data/train.csv';
+const holdout = 'data/holdout.csv';
+const settings = 'fitgate.yml';
+
+/** A descriptor with one `extra` block. */
+const withExtra = (extra: string): Record<string, FileSpec> => repo({ [m]: descriptor({ extra }) });
+/** A descriptor with other terms. */
+const withTerms = (terms: string): Record<string, FileSpec> => repo({ [m]: descriptor({ terms }) });
+/** Training file replaced. */
+const withTrain = (text: FileSpec): Record<string, FileSpec> => repo({ [train]: text });
+
+/** A YAML alias bomb ("billion laughs"): nine levels of nine aliases each. */
+function aliasBomb(): string {
+  const lines = ['version: 1', 'name: m', 'a0: &a0 [lol, lol, lol, lol, lol, lol, lol, lol, lol]'];
+  for (let i = 1; i <= 9; i++) lines.push(`a${i}: &a${i} [${Array.from({ length: 9 }, () => `*a${i - 1}`).join(', ')}]`);
+  return `${lines.join('\n')}\n`;
+}
+
+/** Bytes that are not UTF-8 text (seeded, fixed). */
+function binaryBytes(n: number): Uint8Array {
+  const out = new Uint8Array(n);
+  let s = 12345;
+  for (let i = 0; i < n; i++) {
+    s = (s * 1103515245 + 12345) >>> 0;
+    out[i] = s >>> 24;
+  }
+  out[0] = 0x89; // as a PNG starts
+  out[1] = 0x00;
+  return out;
+}
+
+const latin1Header = (): Uint8Array => Uint8Array.from([...Buffer.from('x,y'), 0xb0, ...Buffer.from('C\n1,2\n2,4\n3,7\n')]);
+
+/** Every case. */
+export const CASES: CorpusCase[] = [
+  // YAML syntax and structure
+  { id: 'yaml-syntax-descriptor', about: 'a descriptor with an unclosed flow sequence', files: repo({ [m]: 'version: 1\nname: [oops\ndata: 1\n' }), exit: 2, words: ['models/m.model.yml:', 'not valid YAML'] },
+  { id: 'yaml-syntax-settings', about: 'settings with a bad indentation', files: repo({ [settings]: 'version: 1\nmodels:\n  - "models/*.model.yml"\n bad: [\n' }), exit: 2, words: ['fitgate.yml:', 'not valid YAML'] },
+  { id: 'yaml-duplicate-key', about: 'a key given twice', files: repo({ [m]: `${descriptor()}name: other\n` }), exit: 2, words: ['models/m.model.yml:', '`name` appears twice'] },
+  { id: 'yaml-not-a-mapping', about: 'a descriptor that is a list', files: repo({ [m]: '- 1\n- 2\n' }), exit: 2, words: ['models/m.model.yml', 'expected'] },
+  { id: 'yaml-empty-descriptor', about: 'an empty descriptor file', files: repo({ [m]: '' }), exit: 2, words: ['models/m.model.yml', 'expected'] },
+  { id: 'yaml-alias-bomb', about: 'nine levels of nine aliases (387 million leaves)', files: repo({ [m]: aliasBomb() }), exit: 2, words: ['models/m.model.yml', 'aliases'] },
+  { id: 'yaml-deep-flow', about: '100,000 nested flow lists', files: repo({ [m]: { make: () => `version: 1\nname: ${'['.repeat(100_000)}\n` } }), exit: 2, words: ['models/m.model.yml', 'nested'] },
+  { id: 'yaml-deep-block', about: '200 levels of nested block mappings', files: repo({ [m]: { make: () => `version: 1\n${Array.from({ length: 200 }, (_, i) => `${' '.repeat(i)}k${i}:`).join('\n')} 1\n` } }), exit: 2, words: ['models/m.model.yml', 'nested'] },
+  { id: 'yaml-too-large', about: 'a 2 MiB descriptor', files: repo({ [m]: { make: () => `${descriptor()}# ${'x'.repeat(2 * 1024 * 1024)}\n` } }), exit: 2, words: ['models/m.model.yml', 'at most 1048576 bytes'] },
+  { id: 'yaml-binary-descriptor', about: 'a descriptor of binary bytes', files: repo({ [m]: binaryBytes(2000) }), exit: 2, words: ['models/m.model.yml', 'UTF-8'] },
+  { id: 'yaml-nul-in-settings', about: 'settings with a NUL byte', files: repo({ [settings]: `${SETTINGS}\u0000\n` }), exit: 2, words: ['fitgate.yml', 'NUL'] },
+
+  // Schema violations
+  { id: 'schema-unknown-key-descriptor', about: 'a misspelt key', files: repo({ [m]: descriptor().replace('terms:', 'termz: 1\nterms:') }), exit: 2, words: ['models/m.model.yml:', 'termz'] },
+  { id: 'schema-unknown-key-settings', about: 'a misspelt settings key', files: repo({ [settings]: `${SETTINGS}limitz: {}\n` }), exit: 2, words: ['fitgate.yml:', 'limitz'] },
+  { id: 'schema-wrong-type', about: 'degree written as a word', files: withTerms('  - polynomial: { of: x, degree: three }\n'), exit: 2, words: ['models/m.model.yml:', 'degree', '"three"'] },
+  { id: 'schema-degree-zero', about: 'degree 0', files: withTerms('  - polynomial: { of: x, degree: 0 }\n'), exit: 2, words: ['models/m.model.yml:', 'degree', '0'] },
+  { id: 'schema-degree-negative', about: 'degree -2', files: withTerms('  - polynomial: { of: x, degree: -2 }\n'), exit: 2, words: ['models/m.model.yml:', 'degree', '-2'] },
+  { id: 'schema-degree-absurd', about: 'degree 100000', files: withTerms('  - polynomial: { of: x, degree: 100000 }\n'), exit: 2, words: ['models/m.model.yml:', 'degree', '100000'] },
+  { id: 'schema-degree-fraction', about: 'degree 2.5', files: withTerms('  - polynomial: { of: x, degree: 2.5 }\n'), exit: 2, words: ['models/m.model.yml:', 'degree', '2.5'] },
+  { id: 'schema-width-zero', about: 'rbf width 0', files: withTerms('  - rbf: { of: x, centers: [1, 2], width: 0 }\n'), exit: 2, words: ['models/m.model.yml:', 'width'] },
+  { id: 'schema-width-negative', about: 'rbf width -1', files: withTerms('  - rbf: { of: x, centers: [1, 2], width: -1 }\n'), exit: 2, words: ['models/m.model.yml:', 'width', '-1'] },
+  { id: 'schema-terms-empty', about: 'an empty term list', files: repo({ [m]: descriptor().replace(/terms:\n.*\n/, 'terms: []\n') }), exit: 2, words: ['models/m.model.yml:', 'terms'] },
+  { id: 'schema-ridge-negative', about: 'ridge -0.1', files: withExtra('fit:\n  ridge: -0.1\n'), exit: 2, words: ['models/m.model.yml:', 'ridge', '-0.1'] },
+  { id: 'schema-limit-warn-above-fail', about: 'a limit whose warning is above its failure', files: withExtra('limits:\n  gap_ratio: { warn: 3, fail: 2 }\n'), exit: 2, words: ['models/m.model.yml:', 'warn 3 is above fail 2'] },
+  { id: 'schema-limit-warn-above-fail-settings', about: 'the same in the settings file', files: repo({ [settings]: `${SETTINGS}limits:\n  swing: { warn: 0.9, fail: 0.5 }\n` }), exit: 2, words: ['fitgate.yml:', 'warn 0.9 is above fail 0.5'] },
+  { id: 'schema-limit-negative', about: 'a negative limit', files: withExtra('limits:\n  gap_ratio: -1\n'), exit: 2, words: ['models/m.model.yml:', 'gap_ratio'] },
+  { id: 'schema-version', about: 'version 2', files: repo({ [m]: descriptor().replace('version: 1', 'version: 2') }), exit: 2, words: ['models/m.model.yml:', 'version'] },
+  { id: 'schema-folds-one', about: 'one fold', files: withExtra('fit:\n  folds: 1\n'), exit: 2, words: ['models/m.model.yml:', 'folds'] },
+  { id: 'schema-caps-zero', about: 'a file cap of 0 MiB', files: repo({ [settings]: `${SETTINGS}caps:\n  max_file_mb: 0\n` }), exit: 2, words: ['fitgate.yml:', 'max_file_mb'] },
+  { id: 'schema-name-markup', about: 'a model name that is HTML', files: repo({ [m]: descriptor({ name: '"<img src=x onerror=alert(1)>"' }) }), exit: 2, words: ['models/m.model.yml:', '`name`', 'expected only letters'] },
+
+  // Which descriptors: duplicates, globs, missing files
+  { id: 'duplicate-names', about: 'two descriptors with the same name', files: repo({ 'models/n.model.yml': descriptor() }), exit: 2, words: ['models/n.model.yml', 'also used by models/m.model.yml'] },
+  { id: 'glob-matches-nothing', about: 'a pattern that matches no file', files: repo({ [settings]: 'version: 1\nmodels: ["nowhere/*.model.yml"]\n' }), exit: 2, words: ['fitgate.yml:', 'nowhere/*.model.yml', 'matches no file'] },
+  { id: 'no-descriptors-at-all', about: 'no settings and no descriptors', files: { 'README.md': 'nothing here\n' }, exit: 2, words: ['**/*.model.yml', 'matches no file'] },
+  { id: 'data-file-missing', about: 'a training path that names no file', files: repo({ [train]: null }), exit: 2, words: ['models/m.model.yml:', 'data/train.csv', 'not a file'] },
+  { id: 'data-path-is-folder', about: 'a training path that names a folder', files: repo({ [m]: descriptor({ train: '../data' }) }), exit: 2, words: ['models/m.model.yml:', 'not a file'] },
+  { id: 'config-missing', about: '--config naming no file', files: repo(), args: ['--config', 'other.yml'], inputs: { config: 'other.yml' }, exit: 2, words: ['other.yml', 'settings file not found'] },
+  { id: 'descriptor-argument-missing', about: 'a descriptor argument naming no file', files: repo(), args: ['repo/models/none.model.yml'], inputs: null, cliOnly: 'the action checks what the settings match', exit: 2, words: ['descriptor not found'] },
+
+  // Paths that leave the repository
+  { id: 'outside-data-dotdot', about: 'data.train climbing out with ..', files: repo({ [m]: descriptor({ train: '../../outside/secret.csv' }) }), exit: 2, words: ['models/m.model.yml:', 'leaves the repository'] },
+  { id: 'outside-data-absolute', about: 'data.train as an absolute path', files: repo({ [m]: descriptor({ train: '$OUTSIDE/secret.csv' }) }), exit: 2, words: ['models/m.model.yml:', 'is absolute'] },
+  { id: 'outside-data-link-absolute', about: 'the training file is a link to an absolute path outside', files: repo({ [train]: { link: '$OUTSIDE/secret.csv' } }), exit: 2, words: ['models/m.model.yml:', 'outside the repository'] },
+  { id: 'outside-data-link-relative', about: 'the training file is a relative link climbing out', files: repo({ [train]: { link: '../../outside/secret.csv' } }), exit: 2, words: ['models/m.model.yml:', 'outside the repository'] },
+  { id: 'outside-folder-link', about: 'a folder inside that is a link to a folder outside', files: repo({ 'lib': { link: '$OUTSIDE' }, [m]: descriptor({ train: '../lib/secret.csv' }) }), exit: 2, words: ['models/m.model.yml:', 'outside the repository'] },
+  { id: 'outside-descriptor-link', about: 'the descriptor is a link to a descriptor outside (the glob does not follow it)', files: repo({ [m]: { link: '$OUTSIDE/secret.model.yml' } }), exit: 2, words: ['fitgate.yml:', 'matches no file'] },
+  { id: 'outside-settings-link', about: 'fitgate.yml is a link to a file outside', files: repo({ [settings]: { link: '../outside/secret.yml' } }), exit: 2, words: ['fitgate.yml', 'outside the repository'] },
+  { id: 'outside-config-dotdot', about: '--config climbing out', files: repo(), args: ['--config', '../outside/secret.yml'], inputs: { config: '../outside/secret.yml' }, exit: 2, words: ['../outside/secret.yml', 'inside'] },
+  { id: 'outside-config-absolute', about: '--config as an absolute path outside', files: repo(), args: ['--config', '$OUTSIDE/secret.yml'], inputs: { config: '$OUTSIDE/secret.yml' }, exit: 2, words: ['secret.yml', 'inside'] },
+  { id: 'outside-descriptor-argument', about: 'a descriptor argument outside the root', files: repo(), args: ['outside/secret.model.yml'], inputs: null, cliOnly: 'the action takes no descriptor paths', exit: 2, words: ['outside the repository'] },
+  { id: 'outside-descriptor-argument-absolute', about: 'a descriptor argument as an absolute path outside', files: repo(), args: ['$OUTSIDE/secret.model.yml'], inputs: null, cliOnly: 'the action takes no descriptor paths', exit: 2, words: ['outside the repository'] },
+  { id: 'outside-descriptor-argument-link', about: 'a descriptor argument that is a link inside pointing out', files: repo({ 'models/link.model.yml': { link: '$OUTSIDE/secret.model.yml' } }), args: ['repo/models/link.model.yml'], inputs: null, cliOnly: 'the action takes no descriptor paths', exit: 2, words: ['outside the repository'] },
+  { id: 'outside-glob-dotdot', about: 'a models pattern climbing out', files: repo({ [settings]: 'version: 1\nmodels: ["../outside/*.model.yml"]\n' }), exit: 2, words: ['fitgate.yml:', 'leaves the repository'] },
+  { id: 'outside-glob-absolute', about: 'a models pattern that is absolute', files: repo({ [settings]: 'version: 1\nmodels: ["$OUTSIDE/*.model.yml"]\n' }), exit: 2, words: ['fitgate.yml:', 'leaves the repository'] },
+  { id: 'outside-glob-through-link', about: 'a models pattern under a folder link to outside', files: repo({ [settings]: 'version: 1\nmodels: ["ext/*.model.yml"]\n', ext: { link: '$OUTSIDE' } }), exit: 2, words: ['ext/secret.model.yml', 'outside the repository'] },
+  { id: 'link-loop', about: 'a training file that is a link to itself', files: repo({ [train]: { link: 'train.csv' } }), exit: 2, words: ['models/m.model.yml:', 'loop'] },
+  { id: 'nul-in-path', about: 'a data path with a NUL character', files: repo({ [m]: descriptor({ train: '"../data/train.csv\\0.txt"' }) }), exit: 2, words: ['models/m.model.yml:', 'NUL'] },
+
+  // CSV contents
+  { id: 'csv-empty', about: 'an empty training file', files: withTrain(''), exit: 2, words: ['data/train.csv', 'no header row'] },
+  { id: 'csv-header-only', about: 'a training file with a header and no rows', files: withTrain('x,y\n'), exit: 2, words: ['data/train.csv', 'no data rows'] },
+  { id: 'csv-ragged', about: 'a row with an extra field', files: withTrain(`${TRAIN}31,63,9\n`), exit: 2, words: ['data/train.csv:32', 'fields'] },
+  { id: 'csv-text-cell', about: 'text in a used column', files: withTrain(TRAIN.replace('\n3,', '\nthree,')), exit: 2, words: ['data/train.csv:5', '"three"'] },
+  { id: 'csv-nan-cell', about: 'NaN in a used column', files: withTrain(TRAIN.replace('\n3,', '\nNaN,')), exit: 2, words: ['data/train.csv:5', 'NaN'] },
+  { id: 'csv-infinity-cell', about: 'Infinity in a used column', files: withTrain(TRAIN.replace('\n3,', '\nInfinity,')), exit: 2, words: ['data/train.csv:5', 'Infinity'] },
+  { id: 'csv-empty-cell', about: 'an empty cell in a used column', files: withTrain(TRAIN.replace('\n3,', '\n,')), exit: 2, words: ['data/train.csv:5', 'empty'] },
+  { id: 'csv-overflow-cell', about: '1e999 in a used column', files: withTrain(TRAIN.replace('\n3,', '\n1e999,')), exit: 2, words: ['data/train.csv:5', '1e999'] },
+  { id: 'csv-missing-target', about: 'no target column', files: withTrain(rows(30, 0, 1, 'x,z')), exit: 2, words: ['data/train.csv', 'y'] },
+  { id: 'csv-missing-input-holdout', about: 'the hold-out file lacks an input column', files: repo({ [holdout]: rows(10, 0.5, 3, 'u,y') }), exit: 2, words: ['data/holdout.csv', 'x'] },
+  { id: 'csv-duplicate-header', about: 'a header name given twice', files: withTrain(rows(30, 0, 1, 'x,x').replace('x,x', 'x,y,x').replace(/\n(\d[^,\n]*),([^\n]*)/g, '\n$1,$2,0')), exit: 2, words: ['data/train.csv:1', 'x'] },
+  { id: 'csv-binary', about: 'a training file of binary bytes', files: withTrain(binaryBytes(4000)), exit: 2, words: ['data/train.csv', 'UTF-8'] },
+  { id: 'csv-latin1', about: 'a header in Latin-1, not UTF-8', files: withTrain(latin1Header()), exit: 2, words: ['data/train.csv', 'UTF-8'] },
+  { id: 'csv-long-cell', about: 'a 100,000-character cell (the message quotes a short piece)', files: withTrain(TRAIN.replace('\n3,', `\n${'7'.repeat(50)}${'z'.repeat(100_000)},`)), exit: 2, words: ['data/train.csv:5', '777'] },
+  { id: 'csv-bom-works', about: 'a byte-order mark (accepted)', files: withTrain(`\ufeff${TRAIN}`), exit: 0, words: ['PASS'] },
+  { id: 'csv-crlf-works', about: 'CRLF line ends (accepted)', files: repo({ [train]: rows(30, 0, 1, 'x,y', '\r\n'), [holdout]: rows(10, 0.5, 3, 'x,y', '\r\n') }), exit: 0, words: ['PASS'] },
+  { id: 'csv-bom-crlf-works', about: 'a byte-order mark and CRLF together (accepted)', files: withTrain(`\ufeff${rows(30, 0, 1, 'x,y', '\r\n')}`), exit: 0, words: ['PASS'] },
+  { id: 'csv-near-max-double', about: 'inputs near 1e308, finite (a result, not an error)', files: repo({ [train]: rows(30, 0, 1).replace(/\n(\d+),/g, (_, x: string) => `\n${x}e306,`), [holdout]: rows(10, 0.5, 3).replace(/\n([\d.]+),/g, (_, x: string) => `\n${x}e306,`) }), exit: 0, words: ['conditioning'] },
+  { id: 'constant-input', about: 'an input column that never changes (a result, not an error)', files: repo({ [train]: rows(30).replace(/\n(\d+),/g, '\n5,').replace('x,y', 'x,y'), [holdout]: HOLDOUT }), exit: 1, words: ['m'] },
+  { id: 'constant-target', about: 'a target that never changes', files: withTrain(rows(30).replace(/,([-\d.]+)\n/g, ',7\n')), exit: 2, words: ['models/m.model.yml:', 'constant'] },
+  { id: 'fewer-rows-than-folds', about: '3 training rows and 5 folds with cross-validation on', files: repo({ [train]: rows(3), [m]: descriptor({ extra: 'limits:\n  cv_ratio: 2\n  params_per_sample: off\n' }) }), exit: 1, words: ['cross-validation'] },
+  { id: 'more-params-than-rows', about: '10 radial centres for 5 rows (a result: fail, not an error)', files: repo({ [train]: rows(5), [m]: descriptor({ terms: '  - rbf: { of: x, centers: { from: 0, to: 4, count: 10 }, width: 1 }\n' }) }), exit: 1, words: ['parameter-ratio'], verdicts: { m: 'fail' } },
+
+  // Resource caps
+  { id: 'cap-file-size', about: 'a training file over caps.max_file_mb', files: repo({ [settings]: `${SETTINGS}caps:\n  max_file_mb: 0.0001\n` }), exit: 2, words: ['data/train.csv', 'caps.max_file_mb'] },
+  { id: 'cap-file-size-sparse', about: 'a 3 GiB (sparse) training file against the default 512 MiB cap', files: repo({ [train]: { sparseBytes: 3 * 1024 ** 3 } }), exit: 2, words: ['data/train.csv', 'caps.max_file_mb'] },
+  { id: 'cap-cells', about: 'rows x parameters over caps.max_cells', files: repo({ [settings]: `${SETTINGS}caps:\n  max_cells: 10\n` }), exit: 2, words: ['models/m.model.yml', 'caps.max_cells'] },
+  { id: 'cap-parameters', about: '10,000 radial centres', files: withTerms('  - rbf: { of: x, centers: { from: 0, to: 30, count: 10000 }, width: 1 }\n'), exit: 2, words: ['models/m.model.yml', 'design columns'] },
+
+  // One bad model among good ones
+  { id: 'one-bad-among-good', about: 'three models, one with a bad cell: every model gets its outcome', files: repo({ 'models/a.model.yml': descriptor({ name: 'a' }), 'models/b.model.yml': descriptor({ name: 'b', train: '../data/bad.csv' }), 'data/bad.csv': TRAIN.replace('\n3,', '\nx3,') }), exit: 2, words: ['data/bad.csv:5', '"x3"'], verdicts: { a: 'pass', b: 'error', m: 'pass' } },
+];
