@@ -2,3639 +2,12 @@
 import { createRequire as __WEBPACK_EXTERNAL_createRequire } from "module";
 /******/ var __webpack_modules__ = ({
 
-/***/ 2210:
-/***/ ((module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv2020 = void 0;
-const core_1 = __nccwpck_require__(3893);
-const draft2020_1 = __nccwpck_require__(4298);
-const discriminator_1 = __nccwpck_require__(8886);
-const json_schema_2020_12_1 = __nccwpck_require__(3995);
-const META_SCHEMA_ID = "https://json-schema.org/draft/2020-12/schema";
-class Ajv2020 extends core_1.default {
-    constructor(opts = {}) {
-        super({
-            ...opts,
-            dynamicRef: true,
-            next: true,
-            unevaluated: true,
-        });
-    }
-    _addVocabularies() {
-        super._addVocabularies();
-        draft2020_1.default.forEach((v) => this.addVocabulary(v));
-        if (this.opts.discriminator)
-            this.addKeyword(discriminator_1.default);
-    }
-    _addDefaultMetaSchema() {
-        super._addDefaultMetaSchema();
-        const { $data, meta } = this.opts;
-        if (!meta)
-            return;
-        json_schema_2020_12_1.default.call(this, $data);
-        this.refs["http://json-schema.org/schema"] = META_SCHEMA_ID;
-    }
-    defaultMeta() {
-        return (this.opts.defaultMeta =
-            super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : undefined));
-    }
-}
-exports.Ajv2020 = Ajv2020;
-module.exports = exports = Ajv2020;
-module.exports.Ajv2020 = Ajv2020;
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports["default"] = Ajv2020;
-var validate_1 = __nccwpck_require__(7881);
-Object.defineProperty(exports, "KeywordCxt", ({ enumerable: true, get: function () { return validate_1.KeywordCxt; } }));
-var codegen_1 = __nccwpck_require__(1436);
-Object.defineProperty(exports, "_", ({ enumerable: true, get: function () { return codegen_1._; } }));
-Object.defineProperty(exports, "str", ({ enumerable: true, get: function () { return codegen_1.str; } }));
-Object.defineProperty(exports, "stringify", ({ enumerable: true, get: function () { return codegen_1.stringify; } }));
-Object.defineProperty(exports, "nil", ({ enumerable: true, get: function () { return codegen_1.nil; } }));
-Object.defineProperty(exports, "Name", ({ enumerable: true, get: function () { return codegen_1.Name; } }));
-Object.defineProperty(exports, "CodeGen", ({ enumerable: true, get: function () { return codegen_1.CodeGen; } }));
-var validation_error_1 = __nccwpck_require__(3021);
-Object.defineProperty(exports, "ValidationError", ({ enumerable: true, get: function () { return validation_error_1.default; } }));
-var ref_error_1 = __nccwpck_require__(3162);
-Object.defineProperty(exports, "MissingRefError", ({ enumerable: true, get: function () { return ref_error_1.default; } }));
-//# sourceMappingURL=2020.js.map
-
-/***/ }),
-
-/***/ 567:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.regexpCode = exports.getEsmExportName = exports.getProperty = exports.safeStringify = exports.stringify = exports.strConcat = exports.addCodeArg = exports.str = exports._ = exports.nil = exports._Code = exports.Name = exports.IDENTIFIER = exports._CodeOrName = void 0;
-// eslint-disable-next-line @typescript-eslint/no-extraneous-class
-class _CodeOrName {
-}
-exports._CodeOrName = _CodeOrName;
-exports.IDENTIFIER = /^[a-z$_][a-z$_0-9]*$/i;
-class Name extends _CodeOrName {
-    constructor(s) {
-        super();
-        if (!exports.IDENTIFIER.test(s))
-            throw new Error("CodeGen: name must be a valid identifier");
-        this.str = s;
-    }
-    toString() {
-        return this.str;
-    }
-    emptyStr() {
-        return false;
-    }
-    get names() {
-        return { [this.str]: 1 };
-    }
-}
-exports.Name = Name;
-class _Code extends _CodeOrName {
-    constructor(code) {
-        super();
-        this._items = typeof code === "string" ? [code] : code;
-    }
-    toString() {
-        return this.str;
-    }
-    emptyStr() {
-        if (this._items.length > 1)
-            return false;
-        const item = this._items[0];
-        return item === "" || item === '""';
-    }
-    get str() {
-        var _a;
-        return ((_a = this._str) !== null && _a !== void 0 ? _a : (this._str = this._items.reduce((s, c) => `${s}${c}`, "")));
-    }
-    get names() {
-        var _a;
-        return ((_a = this._names) !== null && _a !== void 0 ? _a : (this._names = this._items.reduce((names, c) => {
-            if (c instanceof Name)
-                names[c.str] = (names[c.str] || 0) + 1;
-            return names;
-        }, {})));
-    }
-}
-exports._Code = _Code;
-exports.nil = new _Code("");
-function _(strs, ...args) {
-    const code = [strs[0]];
-    let i = 0;
-    while (i < args.length) {
-        addCodeArg(code, args[i]);
-        code.push(strs[++i]);
-    }
-    return new _Code(code);
-}
-exports._ = _;
-const plus = new _Code("+");
-function str(strs, ...args) {
-    const expr = [safeStringify(strs[0])];
-    let i = 0;
-    while (i < args.length) {
-        expr.push(plus);
-        addCodeArg(expr, args[i]);
-        expr.push(plus, safeStringify(strs[++i]));
-    }
-    optimize(expr);
-    return new _Code(expr);
-}
-exports.str = str;
-function addCodeArg(code, arg) {
-    if (arg instanceof _Code)
-        code.push(...arg._items);
-    else if (arg instanceof Name)
-        code.push(arg);
-    else
-        code.push(interpolate(arg));
-}
-exports.addCodeArg = addCodeArg;
-function optimize(expr) {
-    let i = 1;
-    while (i < expr.length - 1) {
-        if (expr[i] === plus) {
-            const res = mergeExprItems(expr[i - 1], expr[i + 1]);
-            if (res !== undefined) {
-                expr.splice(i - 1, 3, res);
-                continue;
-            }
-            expr[i++] = "+";
-        }
-        i++;
-    }
-}
-function mergeExprItems(a, b) {
-    if (b === '""')
-        return a;
-    if (a === '""')
-        return b;
-    if (typeof a == "string") {
-        if (b instanceof Name || a[a.length - 1] !== '"')
-            return;
-        if (typeof b != "string")
-            return `${a.slice(0, -1)}${b}"`;
-        if (b[0] === '"')
-            return a.slice(0, -1) + b.slice(1);
-        return;
-    }
-    if (typeof b == "string" && b[0] === '"' && !(a instanceof Name))
-        return `"${a}${b.slice(1)}`;
-    return;
-}
-function strConcat(c1, c2) {
-    return c2.emptyStr() ? c1 : c1.emptyStr() ? c2 : str `${c1}${c2}`;
-}
-exports.strConcat = strConcat;
-// TODO do not allow arrays here
-function interpolate(x) {
-    return typeof x == "number" || typeof x == "boolean" || x === null
-        ? x
-        : safeStringify(Array.isArray(x) ? x.join(",") : x);
-}
-function stringify(x) {
-    return new _Code(safeStringify(x));
-}
-exports.stringify = stringify;
-function safeStringify(x) {
-    return JSON.stringify(x)
-        .replace(/\u2028/g, "\\u2028")
-        .replace(/\u2029/g, "\\u2029");
-}
-exports.safeStringify = safeStringify;
-function getProperty(key) {
-    return typeof key == "string" && exports.IDENTIFIER.test(key) ? new _Code(`.${key}`) : _ `[${key}]`;
-}
-exports.getProperty = getProperty;
-//Does best effort to format the name properly
-function getEsmExportName(key) {
-    if (typeof key == "string" && exports.IDENTIFIER.test(key)) {
-        return new _Code(`${key}`);
-    }
-    throw new Error(`CodeGen: invalid export name: ${key}, use explicit $id name mapping`);
-}
-exports.getEsmExportName = getEsmExportName;
-function regexpCode(rx) {
-    return new _Code(rx.toString());
-}
-exports.regexpCode = regexpCode;
-//# sourceMappingURL=code.js.map
-
-/***/ }),
-
-/***/ 1436:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.or = exports.and = exports.not = exports.CodeGen = exports.operators = exports.varKinds = exports.ValueScopeName = exports.ValueScope = exports.Scope = exports.Name = exports.regexpCode = exports.stringify = exports.getProperty = exports.nil = exports.strConcat = exports.str = exports._ = void 0;
-const code_1 = __nccwpck_require__(567);
-const scope_1 = __nccwpck_require__(7788);
-var code_2 = __nccwpck_require__(567);
-Object.defineProperty(exports, "_", ({ enumerable: true, get: function () { return code_2._; } }));
-Object.defineProperty(exports, "str", ({ enumerable: true, get: function () { return code_2.str; } }));
-Object.defineProperty(exports, "strConcat", ({ enumerable: true, get: function () { return code_2.strConcat; } }));
-Object.defineProperty(exports, "nil", ({ enumerable: true, get: function () { return code_2.nil; } }));
-Object.defineProperty(exports, "getProperty", ({ enumerable: true, get: function () { return code_2.getProperty; } }));
-Object.defineProperty(exports, "stringify", ({ enumerable: true, get: function () { return code_2.stringify; } }));
-Object.defineProperty(exports, "regexpCode", ({ enumerable: true, get: function () { return code_2.regexpCode; } }));
-Object.defineProperty(exports, "Name", ({ enumerable: true, get: function () { return code_2.Name; } }));
-var scope_2 = __nccwpck_require__(7788);
-Object.defineProperty(exports, "Scope", ({ enumerable: true, get: function () { return scope_2.Scope; } }));
-Object.defineProperty(exports, "ValueScope", ({ enumerable: true, get: function () { return scope_2.ValueScope; } }));
-Object.defineProperty(exports, "ValueScopeName", ({ enumerable: true, get: function () { return scope_2.ValueScopeName; } }));
-Object.defineProperty(exports, "varKinds", ({ enumerable: true, get: function () { return scope_2.varKinds; } }));
-exports.operators = {
-    GT: new code_1._Code(">"),
-    GTE: new code_1._Code(">="),
-    LT: new code_1._Code("<"),
-    LTE: new code_1._Code("<="),
-    EQ: new code_1._Code("==="),
-    NEQ: new code_1._Code("!=="),
-    NOT: new code_1._Code("!"),
-    OR: new code_1._Code("||"),
-    AND: new code_1._Code("&&"),
-    ADD: new code_1._Code("+"),
-};
-class Node {
-    optimizeNodes() {
-        return this;
-    }
-    optimizeNames(_names, _constants) {
-        return this;
-    }
-}
-class Def extends Node {
-    constructor(varKind, name, rhs) {
-        super();
-        this.varKind = varKind;
-        this.name = name;
-        this.rhs = rhs;
-    }
-    render({ es5, _n }) {
-        const varKind = es5 ? scope_1.varKinds.var : this.varKind;
-        const rhs = this.rhs === undefined ? "" : ` = ${this.rhs}`;
-        return `${varKind} ${this.name}${rhs};` + _n;
-    }
-    optimizeNames(names, constants) {
-        if (!names[this.name.str])
-            return;
-        if (this.rhs)
-            this.rhs = optimizeExpr(this.rhs, names, constants);
-        return this;
-    }
-    get names() {
-        return this.rhs instanceof code_1._CodeOrName ? this.rhs.names : {};
-    }
-}
-class Assign extends Node {
-    constructor(lhs, rhs, sideEffects) {
-        super();
-        this.lhs = lhs;
-        this.rhs = rhs;
-        this.sideEffects = sideEffects;
-    }
-    render({ _n }) {
-        return `${this.lhs} = ${this.rhs};` + _n;
-    }
-    optimizeNames(names, constants) {
-        if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
-            return;
-        this.rhs = optimizeExpr(this.rhs, names, constants);
-        return this;
-    }
-    get names() {
-        const names = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
-        return addExprNames(names, this.rhs);
-    }
-}
-class AssignOp extends Assign {
-    constructor(lhs, op, rhs, sideEffects) {
-        super(lhs, rhs, sideEffects);
-        this.op = op;
-    }
-    render({ _n }) {
-        return `${this.lhs} ${this.op}= ${this.rhs};` + _n;
-    }
-}
-class Label extends Node {
-    constructor(label) {
-        super();
-        this.label = label;
-        this.names = {};
-    }
-    render({ _n }) {
-        return `${this.label}:` + _n;
-    }
-}
-class Break extends Node {
-    constructor(label) {
-        super();
-        this.label = label;
-        this.names = {};
-    }
-    render({ _n }) {
-        const label = this.label ? ` ${this.label}` : "";
-        return `break${label};` + _n;
-    }
-}
-class Throw extends Node {
-    constructor(error) {
-        super();
-        this.error = error;
-    }
-    render({ _n }) {
-        return `throw ${this.error};` + _n;
-    }
-    get names() {
-        return this.error.names;
-    }
-}
-class AnyCode extends Node {
-    constructor(code) {
-        super();
-        this.code = code;
-    }
-    render({ _n }) {
-        return `${this.code};` + _n;
-    }
-    optimizeNodes() {
-        return `${this.code}` ? this : undefined;
-    }
-    optimizeNames(names, constants) {
-        this.code = optimizeExpr(this.code, names, constants);
-        return this;
-    }
-    get names() {
-        return this.code instanceof code_1._CodeOrName ? this.code.names : {};
-    }
-}
-class ParentNode extends Node {
-    constructor(nodes = []) {
-        super();
-        this.nodes = nodes;
-    }
-    render(opts) {
-        return this.nodes.reduce((code, n) => code + n.render(opts), "");
-    }
-    optimizeNodes() {
-        const { nodes } = this;
-        let i = nodes.length;
-        while (i--) {
-            const n = nodes[i].optimizeNodes();
-            if (Array.isArray(n))
-                nodes.splice(i, 1, ...n);
-            else if (n)
-                nodes[i] = n;
-            else
-                nodes.splice(i, 1);
-        }
-        return nodes.length > 0 ? this : undefined;
-    }
-    optimizeNames(names, constants) {
-        const { nodes } = this;
-        let i = nodes.length;
-        while (i--) {
-            // iterating backwards improves 1-pass optimization
-            const n = nodes[i];
-            if (n.optimizeNames(names, constants))
-                continue;
-            subtractNames(names, n.names);
-            nodes.splice(i, 1);
-        }
-        return nodes.length > 0 ? this : undefined;
-    }
-    get names() {
-        return this.nodes.reduce((names, n) => addNames(names, n.names), {});
-    }
-}
-class BlockNode extends ParentNode {
-    render(opts) {
-        return "{" + opts._n + super.render(opts) + "}" + opts._n;
-    }
-}
-class Root extends ParentNode {
-}
-class Else extends BlockNode {
-}
-Else.kind = "else";
-class If extends BlockNode {
-    constructor(condition, nodes) {
-        super(nodes);
-        this.condition = condition;
-    }
-    render(opts) {
-        let code = `if(${this.condition})` + super.render(opts);
-        if (this.else)
-            code += "else " + this.else.render(opts);
-        return code;
-    }
-    optimizeNodes() {
-        super.optimizeNodes();
-        const cond = this.condition;
-        if (cond === true)
-            return this.nodes; // else is ignored here
-        let e = this.else;
-        if (e) {
-            const ns = e.optimizeNodes();
-            e = this.else = Array.isArray(ns) ? new Else(ns) : ns;
-        }
-        if (e) {
-            if (cond === false)
-                return e instanceof If ? e : e.nodes;
-            if (this.nodes.length)
-                return this;
-            return new If(not(cond), e instanceof If ? [e] : e.nodes);
-        }
-        if (cond === false || !this.nodes.length)
-            return undefined;
-        return this;
-    }
-    optimizeNames(names, constants) {
-        var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        if (!(super.optimizeNames(names, constants) || this.else))
-            return;
-        this.condition = optimizeExpr(this.condition, names, constants);
-        return this;
-    }
-    get names() {
-        const names = super.names;
-        addExprNames(names, this.condition);
-        if (this.else)
-            addNames(names, this.else.names);
-        return names;
-    }
-}
-If.kind = "if";
-class For extends BlockNode {
-}
-For.kind = "for";
-class ForLoop extends For {
-    constructor(iteration) {
-        super();
-        this.iteration = iteration;
-    }
-    render(opts) {
-        return `for(${this.iteration})` + super.render(opts);
-    }
-    optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
-            return;
-        this.iteration = optimizeExpr(this.iteration, names, constants);
-        return this;
-    }
-    get names() {
-        return addNames(super.names, this.iteration.names);
-    }
-}
-class ForRange extends For {
-    constructor(varKind, name, from, to) {
-        super();
-        this.varKind = varKind;
-        this.name = name;
-        this.from = from;
-        this.to = to;
-    }
-    render(opts) {
-        const varKind = opts.es5 ? scope_1.varKinds.var : this.varKind;
-        const { name, from, to } = this;
-        return `for(${varKind} ${name}=${from}; ${name}<${to}; ${name}++)` + super.render(opts);
-    }
-    get names() {
-        const names = addExprNames(super.names, this.from);
-        return addExprNames(names, this.to);
-    }
-}
-class ForIter extends For {
-    constructor(loop, varKind, name, iterable) {
-        super();
-        this.loop = loop;
-        this.varKind = varKind;
-        this.name = name;
-        this.iterable = iterable;
-    }
-    render(opts) {
-        return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
-    }
-    optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
-            return;
-        this.iterable = optimizeExpr(this.iterable, names, constants);
-        return this;
-    }
-    get names() {
-        return addNames(super.names, this.iterable.names);
-    }
-}
-class Func extends BlockNode {
-    constructor(name, args, async) {
-        super();
-        this.name = name;
-        this.args = args;
-        this.async = async;
-    }
-    render(opts) {
-        const _async = this.async ? "async " : "";
-        return `${_async}function ${this.name}(${this.args})` + super.render(opts);
-    }
-}
-Func.kind = "func";
-class Return extends ParentNode {
-    render(opts) {
-        return "return " + super.render(opts);
-    }
-}
-Return.kind = "return";
-class Try extends BlockNode {
-    render(opts) {
-        let code = "try" + super.render(opts);
-        if (this.catch)
-            code += this.catch.render(opts);
-        if (this.finally)
-            code += this.finally.render(opts);
-        return code;
-    }
-    optimizeNodes() {
-        var _a, _b;
-        super.optimizeNodes();
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNodes();
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
-        return this;
-    }
-    optimizeNames(names, constants) {
-        var _a, _b;
-        super.optimizeNames(names, constants);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants);
-        return this;
-    }
-    get names() {
-        const names = super.names;
-        if (this.catch)
-            addNames(names, this.catch.names);
-        if (this.finally)
-            addNames(names, this.finally.names);
-        return names;
-    }
-}
-class Catch extends BlockNode {
-    constructor(error) {
-        super();
-        this.error = error;
-    }
-    render(opts) {
-        return `catch(${this.error})` + super.render(opts);
-    }
-}
-Catch.kind = "catch";
-class Finally extends BlockNode {
-    render(opts) {
-        return "finally" + super.render(opts);
-    }
-}
-Finally.kind = "finally";
-class CodeGen {
-    constructor(extScope, opts = {}) {
-        this._values = {};
-        this._blockStarts = [];
-        this._constants = {};
-        this.opts = { ...opts, _n: opts.lines ? "\n" : "" };
-        this._extScope = extScope;
-        this._scope = new scope_1.Scope({ parent: extScope });
-        this._nodes = [new Root()];
-    }
-    toString() {
-        return this._root.render(this.opts);
-    }
-    // returns unique name in the internal scope
-    name(prefix) {
-        return this._scope.name(prefix);
-    }
-    // reserves unique name in the external scope
-    scopeName(prefix) {
-        return this._extScope.name(prefix);
-    }
-    // reserves unique name in the external scope and assigns value to it
-    scopeValue(prefixOrName, value) {
-        const name = this._extScope.value(prefixOrName, value);
-        const vs = this._values[name.prefix] || (this._values[name.prefix] = new Set());
-        vs.add(name);
-        return name;
-    }
-    getScopeValue(prefix, keyOrRef) {
-        return this._extScope.getValue(prefix, keyOrRef);
-    }
-    // return code that assigns values in the external scope to the names that are used internally
-    // (same names that were returned by gen.scopeName or gen.scopeValue)
-    scopeRefs(scopeName) {
-        return this._extScope.scopeRefs(scopeName, this._values);
-    }
-    scopeCode() {
-        return this._extScope.scopeCode(this._values);
-    }
-    _def(varKind, nameOrPrefix, rhs, constant) {
-        const name = this._scope.toName(nameOrPrefix);
-        if (rhs !== undefined && constant)
-            this._constants[name.str] = rhs;
-        this._leafNode(new Def(varKind, name, rhs));
-        return name;
-    }
-    // `const` declaration (`var` in es5 mode)
-    const(nameOrPrefix, rhs, _constant) {
-        return this._def(scope_1.varKinds.const, nameOrPrefix, rhs, _constant);
-    }
-    // `let` declaration with optional assignment (`var` in es5 mode)
-    let(nameOrPrefix, rhs, _constant) {
-        return this._def(scope_1.varKinds.let, nameOrPrefix, rhs, _constant);
-    }
-    // `var` declaration with optional assignment
-    var(nameOrPrefix, rhs, _constant) {
-        return this._def(scope_1.varKinds.var, nameOrPrefix, rhs, _constant);
-    }
-    // assignment code
-    assign(lhs, rhs, sideEffects) {
-        return this._leafNode(new Assign(lhs, rhs, sideEffects));
-    }
-    // `+=` code
-    add(lhs, rhs) {
-        return this._leafNode(new AssignOp(lhs, exports.operators.ADD, rhs));
-    }
-    // appends passed SafeExpr to code or executes Block
-    code(c) {
-        if (typeof c == "function")
-            c();
-        else if (c !== code_1.nil)
-            this._leafNode(new AnyCode(c));
-        return this;
-    }
-    // returns code for object literal for the passed argument list of key-value pairs
-    object(...keyValues) {
-        const code = ["{"];
-        for (const [key, value] of keyValues) {
-            if (code.length > 1)
-                code.push(",");
-            code.push(key);
-            if (key !== value || this.opts.es5) {
-                code.push(":");
-                (0, code_1.addCodeArg)(code, value);
-            }
-        }
-        code.push("}");
-        return new code_1._Code(code);
-    }
-    // `if` clause (or statement if `thenBody` and, optionally, `elseBody` are passed)
-    if(condition, thenBody, elseBody) {
-        this._blockNode(new If(condition));
-        if (thenBody && elseBody) {
-            this.code(thenBody).else().code(elseBody).endIf();
-        }
-        else if (thenBody) {
-            this.code(thenBody).endIf();
-        }
-        else if (elseBody) {
-            throw new Error('CodeGen: "else" body without "then" body');
-        }
-        return this;
-    }
-    // `else if` clause - invalid without `if` or after `else` clauses
-    elseIf(condition) {
-        return this._elseNode(new If(condition));
-    }
-    // `else` clause - only valid after `if` or `else if` clauses
-    else() {
-        return this._elseNode(new Else());
-    }
-    // end `if` statement (needed if gen.if was used only with condition)
-    endIf() {
-        return this._endBlockNode(If, Else);
-    }
-    _for(node, forBody) {
-        this._blockNode(node);
-        if (forBody)
-            this.code(forBody).endFor();
-        return this;
-    }
-    // a generic `for` clause (or statement if `forBody` is passed)
-    for(iteration, forBody) {
-        return this._for(new ForLoop(iteration), forBody);
-    }
-    // `for` statement for a range of values
-    forRange(nameOrPrefix, from, to, forBody, varKind = this.opts.es5 ? scope_1.varKinds.var : scope_1.varKinds.let) {
-        const name = this._scope.toName(nameOrPrefix);
-        return this._for(new ForRange(varKind, name, from, to), () => forBody(name));
-    }
-    // `for-of` statement (in es5 mode replace with a normal for loop)
-    forOf(nameOrPrefix, iterable, forBody, varKind = scope_1.varKinds.const) {
-        const name = this._scope.toName(nameOrPrefix);
-        if (this.opts.es5) {
-            const arr = iterable instanceof code_1.Name ? iterable : this.var("_arr", iterable);
-            return this.forRange("_i", 0, (0, code_1._) `${arr}.length`, (i) => {
-                this.var(name, (0, code_1._) `${arr}[${i}]`);
-                forBody(name);
-            });
-        }
-        return this._for(new ForIter("of", varKind, name, iterable), () => forBody(name));
-    }
-    // `for-in` statement.
-    // With option `ownProperties` replaced with a `for-of` loop for object keys
-    forIn(nameOrPrefix, obj, forBody, varKind = this.opts.es5 ? scope_1.varKinds.var : scope_1.varKinds.const) {
-        if (this.opts.ownProperties) {
-            return this.forOf(nameOrPrefix, (0, code_1._) `Object.keys(${obj})`, forBody);
-        }
-        const name = this._scope.toName(nameOrPrefix);
-        return this._for(new ForIter("in", varKind, name, obj), () => forBody(name));
-    }
-    // end `for` loop
-    endFor() {
-        return this._endBlockNode(For);
-    }
-    // `label` statement
-    label(label) {
-        return this._leafNode(new Label(label));
-    }
-    // `break` statement
-    break(label) {
-        return this._leafNode(new Break(label));
-    }
-    // `return` statement
-    return(value) {
-        const node = new Return();
-        this._blockNode(node);
-        this.code(value);
-        if (node.nodes.length !== 1)
-            throw new Error('CodeGen: "return" should have one node');
-        return this._endBlockNode(Return);
-    }
-    // `try` statement
-    try(tryBody, catchCode, finallyCode) {
-        if (!catchCode && !finallyCode)
-            throw new Error('CodeGen: "try" without "catch" and "finally"');
-        const node = new Try();
-        this._blockNode(node);
-        this.code(tryBody);
-        if (catchCode) {
-            const error = this.name("e");
-            this._currNode = node.catch = new Catch(error);
-            catchCode(error);
-        }
-        if (finallyCode) {
-            this._currNode = node.finally = new Finally();
-            this.code(finallyCode);
-        }
-        return this._endBlockNode(Catch, Finally);
-    }
-    // `throw` statement
-    throw(error) {
-        return this._leafNode(new Throw(error));
-    }
-    // start self-balancing block
-    block(body, nodeCount) {
-        this._blockStarts.push(this._nodes.length);
-        if (body)
-            this.code(body).endBlock(nodeCount);
-        return this;
-    }
-    // end the current self-balancing block
-    endBlock(nodeCount) {
-        const len = this._blockStarts.pop();
-        if (len === undefined)
-            throw new Error("CodeGen: not in self-balancing block");
-        const toClose = this._nodes.length - len;
-        if (toClose < 0 || (nodeCount !== undefined && toClose !== nodeCount)) {
-            throw new Error(`CodeGen: wrong number of nodes: ${toClose} vs ${nodeCount} expected`);
-        }
-        this._nodes.length = len;
-        return this;
-    }
-    // `function` heading (or definition if funcBody is passed)
-    func(name, args = code_1.nil, async, funcBody) {
-        this._blockNode(new Func(name, args, async));
-        if (funcBody)
-            this.code(funcBody).endFunc();
-        return this;
-    }
-    // end function definition
-    endFunc() {
-        return this._endBlockNode(Func);
-    }
-    optimize(n = 1) {
-        while (n-- > 0) {
-            this._root.optimizeNodes();
-            this._root.optimizeNames(this._root.names, this._constants);
-        }
-    }
-    _leafNode(node) {
-        this._currNode.nodes.push(node);
-        return this;
-    }
-    _blockNode(node) {
-        this._currNode.nodes.push(node);
-        this._nodes.push(node);
-    }
-    _endBlockNode(N1, N2) {
-        const n = this._currNode;
-        if (n instanceof N1 || (N2 && n instanceof N2)) {
-            this._nodes.pop();
-            return this;
-        }
-        throw new Error(`CodeGen: not in block "${N2 ? `${N1.kind}/${N2.kind}` : N1.kind}"`);
-    }
-    _elseNode(node) {
-        const n = this._currNode;
-        if (!(n instanceof If)) {
-            throw new Error('CodeGen: "else" without "if"');
-        }
-        this._currNode = n.else = node;
-        return this;
-    }
-    get _root() {
-        return this._nodes[0];
-    }
-    get _currNode() {
-        const ns = this._nodes;
-        return ns[ns.length - 1];
-    }
-    set _currNode(node) {
-        const ns = this._nodes;
-        ns[ns.length - 1] = node;
-    }
-}
-exports.CodeGen = CodeGen;
-function addNames(names, from) {
-    for (const n in from)
-        names[n] = (names[n] || 0) + (from[n] || 0);
-    return names;
-}
-function addExprNames(names, from) {
-    return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
-}
-function optimizeExpr(expr, names, constants) {
-    if (expr instanceof code_1.Name)
-        return replaceName(expr);
-    if (!canOptimize(expr))
-        return expr;
-    return new code_1._Code(expr._items.reduce((items, c) => {
-        if (c instanceof code_1.Name)
-            c = replaceName(c);
-        if (c instanceof code_1._Code)
-            items.push(...c._items);
-        else
-            items.push(c);
-        return items;
-    }, []));
-    function replaceName(n) {
-        const c = constants[n.str];
-        if (c === undefined || names[n.str] !== 1)
-            return n;
-        delete names[n.str];
-        return c;
-    }
-    function canOptimize(e) {
-        return (e instanceof code_1._Code &&
-            e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants[c.str] !== undefined));
-    }
-}
-function subtractNames(names, from) {
-    for (const n in from)
-        names[n] = (names[n] || 0) - (from[n] || 0);
-}
-function not(x) {
-    return typeof x == "boolean" || typeof x == "number" || x === null ? !x : (0, code_1._) `!${par(x)}`;
-}
-exports.not = not;
-const andCode = mappend(exports.operators.AND);
-// boolean AND (&&) expression with the passed arguments
-function and(...args) {
-    return args.reduce(andCode);
-}
-exports.and = and;
-const orCode = mappend(exports.operators.OR);
-// boolean OR (||) expression with the passed arguments
-function or(...args) {
-    return args.reduce(orCode);
-}
-exports.or = or;
-function mappend(op) {
-    return (x, y) => (x === code_1.nil ? y : y === code_1.nil ? x : (0, code_1._) `${par(x)} ${op} ${par(y)}`);
-}
-function par(x) {
-    return x instanceof code_1.Name ? x : (0, code_1._) `(${x})`;
-}
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 7788:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.ValueScope = exports.ValueScopeName = exports.Scope = exports.varKinds = exports.UsedValueState = void 0;
-const code_1 = __nccwpck_require__(567);
-class ValueError extends Error {
-    constructor(name) {
-        super(`CodeGen: "code" for ${name} not defined`);
-        this.value = name.value;
-    }
-}
-var UsedValueState;
-(function (UsedValueState) {
-    UsedValueState[UsedValueState["Started"] = 0] = "Started";
-    UsedValueState[UsedValueState["Completed"] = 1] = "Completed";
-})(UsedValueState || (exports.UsedValueState = UsedValueState = {}));
-exports.varKinds = {
-    const: new code_1.Name("const"),
-    let: new code_1.Name("let"),
-    var: new code_1.Name("var"),
-};
-class Scope {
-    constructor({ prefixes, parent } = {}) {
-        this._names = {};
-        this._prefixes = prefixes;
-        this._parent = parent;
-    }
-    toName(nameOrPrefix) {
-        return nameOrPrefix instanceof code_1.Name ? nameOrPrefix : this.name(nameOrPrefix);
-    }
-    name(prefix) {
-        return new code_1.Name(this._newName(prefix));
-    }
-    _newName(prefix) {
-        const ng = this._names[prefix] || this._nameGroup(prefix);
-        return `${prefix}${ng.index++}`;
-    }
-    _nameGroup(prefix) {
-        var _a, _b;
-        if (((_b = (_a = this._parent) === null || _a === void 0 ? void 0 : _a._prefixes) === null || _b === void 0 ? void 0 : _b.has(prefix)) || (this._prefixes && !this._prefixes.has(prefix))) {
-            throw new Error(`CodeGen: prefix "${prefix}" is not allowed in this scope`);
-        }
-        return (this._names[prefix] = { prefix, index: 0 });
-    }
-}
-exports.Scope = Scope;
-class ValueScopeName extends code_1.Name {
-    constructor(prefix, nameStr) {
-        super(nameStr);
-        this.prefix = prefix;
-    }
-    setValue(value, { property, itemIndex }) {
-        this.value = value;
-        this.scopePath = (0, code_1._) `.${new code_1.Name(property)}[${itemIndex}]`;
-    }
-}
-exports.ValueScopeName = ValueScopeName;
-const line = (0, code_1._) `\n`;
-class ValueScope extends Scope {
-    constructor(opts) {
-        super(opts);
-        this._values = {};
-        this._scope = opts.scope;
-        this.opts = { ...opts, _n: opts.lines ? line : code_1.nil };
-    }
-    get() {
-        return this._scope;
-    }
-    name(prefix) {
-        return new ValueScopeName(prefix, this._newName(prefix));
-    }
-    value(nameOrPrefix, value) {
-        var _a;
-        if (value.ref === undefined)
-            throw new Error("CodeGen: ref must be passed in value");
-        const name = this.toName(nameOrPrefix);
-        const { prefix } = name;
-        const valueKey = (_a = value.key) !== null && _a !== void 0 ? _a : value.ref;
-        let vs = this._values[prefix];
-        if (vs) {
-            const _name = vs.get(valueKey);
-            if (_name)
-                return _name;
-        }
-        else {
-            vs = this._values[prefix] = new Map();
-        }
-        vs.set(valueKey, name);
-        const s = this._scope[prefix] || (this._scope[prefix] = []);
-        const itemIndex = s.length;
-        s[itemIndex] = value.ref;
-        name.setValue(value, { property: prefix, itemIndex });
-        return name;
-    }
-    getValue(prefix, keyOrRef) {
-        const vs = this._values[prefix];
-        if (!vs)
-            return;
-        return vs.get(keyOrRef);
-    }
-    scopeRefs(scopeName, values = this._values) {
-        return this._reduceValues(values, (name) => {
-            if (name.scopePath === undefined)
-                throw new Error(`CodeGen: name "${name}" has no value`);
-            return (0, code_1._) `${scopeName}${name.scopePath}`;
-        });
-    }
-    scopeCode(values = this._values, usedValues, getCode) {
-        return this._reduceValues(values, (name) => {
-            if (name.value === undefined)
-                throw new Error(`CodeGen: name "${name}" has no value`);
-            return name.value.code;
-        }, usedValues, getCode);
-    }
-    _reduceValues(values, valueCode, usedValues = {}, getCode) {
-        let code = code_1.nil;
-        for (const prefix in values) {
-            const vs = values[prefix];
-            if (!vs)
-                continue;
-            const nameSet = (usedValues[prefix] = usedValues[prefix] || new Map());
-            vs.forEach((name) => {
-                if (nameSet.has(name))
-                    return;
-                nameSet.set(name, UsedValueState.Started);
-                let c = valueCode(name);
-                if (c) {
-                    const def = this.opts.es5 ? exports.varKinds.var : exports.varKinds.const;
-                    code = (0, code_1._) `${code}${def} ${name} = ${c};${this.opts._n}`;
-                }
-                else if ((c = getCode === null || getCode === void 0 ? void 0 : getCode(name))) {
-                    code = (0, code_1._) `${code}${c}${this.opts._n}`;
-                }
-                else {
-                    throw new ValueError(name);
-                }
-                nameSet.set(name, UsedValueState.Completed);
-            });
-        }
-        return code;
-    }
-}
-exports.ValueScope = ValueScope;
-//# sourceMappingURL=scope.js.map
-
-/***/ }),
-
-/***/ 1283:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.extendErrors = exports.resetErrorsCount = exports.reportExtraError = exports.reportError = exports.keyword$DataError = exports.keywordError = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const names_1 = __nccwpck_require__(630);
-exports.keywordError = {
-    message: ({ keyword }) => (0, codegen_1.str) `must pass "${keyword}" keyword validation`,
-};
-exports.keyword$DataError = {
-    message: ({ keyword, schemaType }) => schemaType
-        ? (0, codegen_1.str) `"${keyword}" keyword must be ${schemaType} ($data)`
-        : (0, codegen_1.str) `"${keyword}" keyword is invalid ($data)`,
-};
-function reportError(cxt, error = exports.keywordError, errorPaths, overrideAllErrors) {
-    const { it } = cxt;
-    const { gen, compositeRule, allErrors } = it;
-    const errObj = errorObjectCode(cxt, error, errorPaths);
-    if (overrideAllErrors !== null && overrideAllErrors !== void 0 ? overrideAllErrors : (compositeRule || allErrors)) {
-        addError(gen, errObj);
-    }
-    else {
-        returnErrors(it, (0, codegen_1._) `[${errObj}]`);
-    }
-}
-exports.reportError = reportError;
-function reportExtraError(cxt, error = exports.keywordError, errorPaths) {
-    const { it } = cxt;
-    const { gen, compositeRule, allErrors } = it;
-    const errObj = errorObjectCode(cxt, error, errorPaths);
-    addError(gen, errObj);
-    if (!(compositeRule || allErrors)) {
-        returnErrors(it, names_1.default.vErrors);
-    }
-}
-exports.reportExtraError = reportExtraError;
-function resetErrorsCount(gen, errsCount) {
-    gen.assign(names_1.default.errors, errsCount);
-    gen.if((0, codegen_1._) `${names_1.default.vErrors} !== null`, () => gen.if(errsCount, () => gen.assign((0, codegen_1._) `${names_1.default.vErrors}.length`, errsCount), () => gen.assign(names_1.default.vErrors, null)));
-}
-exports.resetErrorsCount = resetErrorsCount;
-function extendErrors({ gen, keyword, schemaValue, data, errsCount, it, }) {
-    /* istanbul ignore if */
-    if (errsCount === undefined)
-        throw new Error("ajv implementation error");
-    const err = gen.name("err");
-    gen.forRange("i", errsCount, names_1.default.errors, (i) => {
-        gen.const(err, (0, codegen_1._) `${names_1.default.vErrors}[${i}]`);
-        gen.if((0, codegen_1._) `${err}.instancePath === undefined`, () => gen.assign((0, codegen_1._) `${err}.instancePath`, (0, codegen_1.strConcat)(names_1.default.instancePath, it.errorPath)));
-        gen.assign((0, codegen_1._) `${err}.schemaPath`, (0, codegen_1.str) `${it.errSchemaPath}/${keyword}`);
-        if (it.opts.verbose) {
-            gen.assign((0, codegen_1._) `${err}.schema`, schemaValue);
-            gen.assign((0, codegen_1._) `${err}.data`, data);
-        }
-    });
-}
-exports.extendErrors = extendErrors;
-function addError(gen, errObj) {
-    const err = gen.const("err", errObj);
-    gen.if((0, codegen_1._) `${names_1.default.vErrors} === null`, () => gen.assign(names_1.default.vErrors, (0, codegen_1._) `[${err}]`), (0, codegen_1._) `${names_1.default.vErrors}.push(${err})`);
-    gen.code((0, codegen_1._) `${names_1.default.errors}++`);
-}
-function returnErrors(it, errs) {
-    const { gen, validateName, schemaEnv } = it;
-    if (schemaEnv.$async) {
-        gen.throw((0, codegen_1._) `new ${it.ValidationError}(${errs})`);
-    }
-    else {
-        gen.assign((0, codegen_1._) `${validateName}.errors`, errs);
-        gen.return(false);
-    }
-}
-const E = {
-    keyword: new codegen_1.Name("keyword"),
-    schemaPath: new codegen_1.Name("schemaPath"), // also used in JTD errors
-    params: new codegen_1.Name("params"),
-    propertyName: new codegen_1.Name("propertyName"),
-    message: new codegen_1.Name("message"),
-    schema: new codegen_1.Name("schema"),
-    parentSchema: new codegen_1.Name("parentSchema"),
-};
-function errorObjectCode(cxt, error, errorPaths) {
-    const { createErrors } = cxt.it;
-    if (createErrors === false)
-        return (0, codegen_1._) `{}`;
-    return errorObject(cxt, error, errorPaths);
-}
-function errorObject(cxt, error, errorPaths = {}) {
-    const { gen, it } = cxt;
-    const keyValues = [
-        errorInstancePath(it, errorPaths),
-        errorSchemaPath(cxt, errorPaths),
-    ];
-    extraErrorProps(cxt, error, keyValues);
-    return gen.object(...keyValues);
-}
-function errorInstancePath({ errorPath }, { instancePath }) {
-    const instPath = instancePath
-        ? (0, codegen_1.str) `${errorPath}${(0, util_1.getErrorPath)(instancePath, util_1.Type.Str)}`
-        : errorPath;
-    return [names_1.default.instancePath, (0, codegen_1.strConcat)(names_1.default.instancePath, instPath)];
-}
-function errorSchemaPath({ keyword, it: { errSchemaPath } }, { schemaPath, parentSchema }) {
-    let schPath = parentSchema ? errSchemaPath : (0, codegen_1.str) `${errSchemaPath}/${keyword}`;
-    if (schemaPath) {
-        schPath = (0, codegen_1.str) `${schPath}${(0, util_1.getErrorPath)(schemaPath, util_1.Type.Str)}`;
-    }
-    return [E.schemaPath, schPath];
-}
-function extraErrorProps(cxt, { params, message }, keyValues) {
-    const { keyword, data, schemaValue, it } = cxt;
-    const { opts, propertyName, topSchemaRef, schemaPath } = it;
-    keyValues.push([E.keyword, keyword], [E.params, typeof params == "function" ? params(cxt) : params || (0, codegen_1._) `{}`]);
-    if (opts.messages) {
-        keyValues.push([E.message, typeof message == "function" ? message(cxt) : message]);
-    }
-    if (opts.verbose) {
-        keyValues.push([E.schema, schemaValue], [E.parentSchema, (0, codegen_1._) `${topSchemaRef}${schemaPath}`], [names_1.default.data, data]);
-    }
-    if (propertyName)
-        keyValues.push([E.propertyName, propertyName]);
-}
-//# sourceMappingURL=errors.js.map
-
-/***/ }),
-
-/***/ 2718:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.resolveSchema = exports.getCompilingSchema = exports.resolveRef = exports.compileSchema = exports.SchemaEnv = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const validation_error_1 = __nccwpck_require__(3021);
-const names_1 = __nccwpck_require__(630);
-const resolve_1 = __nccwpck_require__(4090);
-const util_1 = __nccwpck_require__(4464);
-const validate_1 = __nccwpck_require__(7881);
-class SchemaEnv {
-    constructor(env) {
-        var _a;
-        this.refs = {};
-        this.dynamicAnchors = {};
-        let schema;
-        if (typeof env.schema == "object")
-            schema = env.schema;
-        this.schema = env.schema;
-        this.schemaId = env.schemaId;
-        this.root = env.root || this;
-        this.baseId = (_a = env.baseId) !== null && _a !== void 0 ? _a : (0, resolve_1.normalizeId)(schema === null || schema === void 0 ? void 0 : schema[env.schemaId || "$id"]);
-        this.schemaPath = env.schemaPath;
-        this.localRefs = env.localRefs;
-        this.meta = env.meta;
-        this.$async = schema === null || schema === void 0 ? void 0 : schema.$async;
-        this.refs = {};
-    }
-}
-exports.SchemaEnv = SchemaEnv;
-// let codeSize = 0
-// let nodeCount = 0
-// Compiles schema in SchemaEnv
-function compileSchema(sch) {
-    // TODO refactor - remove compilations
-    const _sch = getCompilingSchema.call(this, sch);
-    if (_sch)
-        return _sch;
-    const rootId = (0, resolve_1.getFullPath)(this.opts.uriResolver, sch.root.baseId); // TODO if getFullPath removed 1 tests fails
-    const { es5, lines } = this.opts.code;
-    const { ownProperties } = this.opts;
-    const gen = new codegen_1.CodeGen(this.scope, { es5, lines, ownProperties });
-    let _ValidationError;
-    if (sch.$async) {
-        _ValidationError = gen.scopeValue("Error", {
-            ref: validation_error_1.default,
-            code: (0, codegen_1._) `require("ajv/dist/runtime/validation_error").default`,
-        });
-    }
-    const validateName = gen.scopeName("validate");
-    sch.validateName = validateName;
-    const schemaCxt = {
-        gen,
-        allErrors: this.opts.allErrors,
-        data: names_1.default.data,
-        parentData: names_1.default.parentData,
-        parentDataProperty: names_1.default.parentDataProperty,
-        dataNames: [names_1.default.data],
-        dataPathArr: [codegen_1.nil], // TODO can its length be used as dataLevel if nil is removed?
-        dataLevel: 0,
-        dataTypes: [],
-        definedProperties: new Set(),
-        topSchemaRef: gen.scopeValue("schema", this.opts.code.source === true
-            ? { ref: sch.schema, code: (0, codegen_1.stringify)(sch.schema) }
-            : { ref: sch.schema }),
-        validateName,
-        ValidationError: _ValidationError,
-        schema: sch.schema,
-        schemaEnv: sch,
-        rootId,
-        baseId: sch.baseId || rootId,
-        schemaPath: codegen_1.nil,
-        errSchemaPath: sch.schemaPath || (this.opts.jtd ? "" : "#"),
-        errorPath: (0, codegen_1._) `""`,
-        opts: this.opts,
-        self: this,
-    };
-    let sourceCode;
-    try {
-        this._compilations.add(sch);
-        (0, validate_1.validateFunctionCode)(schemaCxt);
-        gen.optimize(this.opts.code.optimize);
-        // gen.optimize(1)
-        const validateCode = gen.toString();
-        sourceCode = `${gen.scopeRefs(names_1.default.scope)}return ${validateCode}`;
-        // console.log((codeSize += sourceCode.length), (nodeCount += gen.nodeCount))
-        if (this.opts.code.process)
-            sourceCode = this.opts.code.process(sourceCode, sch);
-        // console.log("\n\n\n *** \n", sourceCode)
-        const makeValidate = new Function(`${names_1.default.self}`, `${names_1.default.scope}`, sourceCode);
-        const validate = makeValidate(this, this.scope.get());
-        this.scope.value(validateName, { ref: validate });
-        validate.errors = null;
-        validate.schema = sch.schema;
-        validate.schemaEnv = sch;
-        if (sch.$async)
-            validate.$async = true;
-        if (this.opts.code.source === true) {
-            validate.source = { validateName, validateCode, scopeValues: gen._values };
-        }
-        if (this.opts.unevaluated) {
-            const { props, items } = schemaCxt;
-            validate.evaluated = {
-                props: props instanceof codegen_1.Name ? undefined : props,
-                items: items instanceof codegen_1.Name ? undefined : items,
-                dynamicProps: props instanceof codegen_1.Name,
-                dynamicItems: items instanceof codegen_1.Name,
-            };
-            if (validate.source)
-                validate.source.evaluated = (0, codegen_1.stringify)(validate.evaluated);
-        }
-        sch.validate = validate;
-        return sch;
-    }
-    catch (e) {
-        delete sch.validate;
-        delete sch.validateName;
-        if (sourceCode)
-            this.logger.error("Error compiling schema, function code:", sourceCode);
-        // console.log("\n\n\n *** \n", sourceCode, this.opts)
-        throw e;
-    }
-    finally {
-        this._compilations.delete(sch);
-    }
-}
-exports.compileSchema = compileSchema;
-function resolveRef(root, baseId, ref) {
-    var _a;
-    ref = (0, resolve_1.resolveUrl)(this.opts.uriResolver, baseId, ref);
-    const schOrFunc = root.refs[ref];
-    if (schOrFunc)
-        return schOrFunc;
-    let _sch = resolve.call(this, root, ref);
-    if (_sch === undefined) {
-        const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref]; // TODO maybe localRefs should hold SchemaEnv
-        const { schemaId } = this.opts;
-        if (schema)
-            _sch = new SchemaEnv({ schema, schemaId, root, baseId });
-    }
-    if (_sch === undefined)
-        return;
-    return (root.refs[ref] = inlineOrCompile.call(this, _sch));
-}
-exports.resolveRef = resolveRef;
-function inlineOrCompile(sch) {
-    if ((0, resolve_1.inlineRef)(sch.schema, this.opts.inlineRefs))
-        return sch.schema;
-    return sch.validate ? sch : compileSchema.call(this, sch);
-}
-// Index of schema compilation in the currently compiled list
-function getCompilingSchema(schEnv) {
-    for (const sch of this._compilations) {
-        if (sameSchemaEnv(sch, schEnv))
-            return sch;
-    }
-}
-exports.getCompilingSchema = getCompilingSchema;
-function sameSchemaEnv(s1, s2) {
-    return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
-}
-// resolve and compile the references ($ref)
-// TODO returns AnySchemaObject (if the schema can be inlined) or validation function
-function resolve(root, // information about the root schema for the current schema
-ref // reference to resolve
-) {
-    let sch;
-    while (typeof (sch = this.refs[ref]) == "string")
-        ref = sch;
-    return sch || this.schemas[ref] || resolveSchema.call(this, root, ref);
-}
-// Resolve schema, its root and baseId
-function resolveSchema(root, // root object with properties schema, refs TODO below SchemaEnv is assigned to it
-ref // reference to resolve
-) {
-    const p = this.opts.uriResolver.parse(ref);
-    const refPath = (0, resolve_1._getFullPath)(this.opts.uriResolver, p);
-    let baseId = (0, resolve_1.getFullPath)(this.opts.uriResolver, root.baseId, undefined);
-    // TODO `Object.keys(root.schema).length > 0` should not be needed - but removing breaks 2 tests
-    if (Object.keys(root.schema).length > 0 && refPath === baseId) {
-        return getJsonPointer.call(this, p, root);
-    }
-    const id = (0, resolve_1.normalizeId)(refPath);
-    const schOrRef = this.refs[id] || this.schemas[id];
-    if (typeof schOrRef == "string") {
-        const sch = resolveSchema.call(this, root, schOrRef);
-        if (typeof (sch === null || sch === void 0 ? void 0 : sch.schema) !== "object")
-            return;
-        return getJsonPointer.call(this, p, sch);
-    }
-    if (typeof (schOrRef === null || schOrRef === void 0 ? void 0 : schOrRef.schema) !== "object")
-        return;
-    if (!schOrRef.validate)
-        compileSchema.call(this, schOrRef);
-    if (id === (0, resolve_1.normalizeId)(ref)) {
-        const { schema } = schOrRef;
-        const { schemaId } = this.opts;
-        const schId = schema[schemaId];
-        if (schId)
-            baseId = (0, resolve_1.resolveUrl)(this.opts.uriResolver, baseId, schId);
-        return new SchemaEnv({ schema, schemaId, root, baseId });
-    }
-    return getJsonPointer.call(this, p, schOrRef);
-}
-exports.resolveSchema = resolveSchema;
-const PREVENT_SCOPE_CHANGE = new Set([
-    "properties",
-    "patternProperties",
-    "enum",
-    "dependencies",
-    "definitions",
-]);
-function getJsonPointer(parsedRef, { baseId, schema, root }) {
-    var _a;
-    if (((_a = parsedRef.fragment) === null || _a === void 0 ? void 0 : _a[0]) !== "/")
-        return;
-    for (const part of parsedRef.fragment.slice(1).split("/")) {
-        if (typeof schema === "boolean")
-            return;
-        const partSchema = schema[(0, util_1.unescapeFragment)(part)];
-        if (partSchema === undefined)
-            return;
-        schema = partSchema;
-        // TODO PREVENT_SCOPE_CHANGE could be defined in keyword def?
-        const schId = typeof schema === "object" && schema[this.opts.schemaId];
-        if (!PREVENT_SCOPE_CHANGE.has(part) && schId) {
-            baseId = (0, resolve_1.resolveUrl)(this.opts.uriResolver, baseId, schId);
-        }
-    }
-    let env;
-    if (typeof schema != "boolean" && schema.$ref && !(0, util_1.schemaHasRulesButRef)(schema, this.RULES)) {
-        const $ref = (0, resolve_1.resolveUrl)(this.opts.uriResolver, baseId, schema.$ref);
-        env = resolveSchema.call(this, root, $ref);
-    }
-    // even though resolution failed we need to return SchemaEnv to throw exception
-    // so that compileAsync loads missing schema.
-    const { schemaId } = this.opts;
-    env = env || new SchemaEnv({ schema, schemaId, root, baseId });
-    if (env.schema !== env.root.schema)
-        return env;
-    return undefined;
-}
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 630:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const names = {
-    // validation function arguments
-    data: new codegen_1.Name("data"), // data passed to validation function
-    // args passed from referencing schema
-    valCxt: new codegen_1.Name("valCxt"), // validation/data context - should not be used directly, it is destructured to the names below
-    instancePath: new codegen_1.Name("instancePath"),
-    parentData: new codegen_1.Name("parentData"),
-    parentDataProperty: new codegen_1.Name("parentDataProperty"),
-    rootData: new codegen_1.Name("rootData"), // root data - same as the data passed to the first/top validation function
-    dynamicAnchors: new codegen_1.Name("dynamicAnchors"), // used to support recursiveRef and dynamicRef
-    // function scoped variables
-    vErrors: new codegen_1.Name("vErrors"), // null or array of validation errors
-    errors: new codegen_1.Name("errors"), // counter of validation errors
-    this: new codegen_1.Name("this"),
-    // "globals"
-    self: new codegen_1.Name("self"),
-    scope: new codegen_1.Name("scope"),
-    // JTD serialize/parse name for JSON string and position
-    json: new codegen_1.Name("json"),
-    jsonPos: new codegen_1.Name("jsonPos"),
-    jsonLen: new codegen_1.Name("jsonLen"),
-    jsonPart: new codegen_1.Name("jsonPart"),
-};
-exports["default"] = names;
-//# sourceMappingURL=names.js.map
-
-/***/ }),
-
-/***/ 3162:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const resolve_1 = __nccwpck_require__(4090);
-class MissingRefError extends Error {
-    constructor(resolver, baseId, ref, msg) {
-        super(msg || `can't resolve reference ${ref} from id ${baseId}`);
-        this.missingRef = (0, resolve_1.resolveUrl)(resolver, baseId, ref);
-        this.missingSchema = (0, resolve_1.normalizeId)((0, resolve_1.getFullPath)(resolver, this.missingRef));
-    }
-}
-exports["default"] = MissingRefError;
-//# sourceMappingURL=ref_error.js.map
-
-/***/ }),
-
-/***/ 4090:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.getSchemaRefs = exports.resolveUrl = exports.normalizeId = exports._getFullPath = exports.getFullPath = exports.inlineRef = void 0;
-const util_1 = __nccwpck_require__(4464);
-const equal = __nccwpck_require__(3430);
-const traverse = __nccwpck_require__(1167);
-// TODO refactor to use keyword definitions
-const SIMPLE_INLINED = new Set([
-    "type",
-    "format",
-    "pattern",
-    "maxLength",
-    "minLength",
-    "maxProperties",
-    "minProperties",
-    "maxItems",
-    "minItems",
-    "maximum",
-    "minimum",
-    "uniqueItems",
-    "multipleOf",
-    "required",
-    "enum",
-    "const",
-]);
-function inlineRef(schema, limit = true) {
-    if (typeof schema == "boolean")
-        return true;
-    if (limit === true)
-        return !hasRef(schema);
-    if (!limit)
-        return false;
-    return countKeys(schema) <= limit;
-}
-exports.inlineRef = inlineRef;
-const REF_KEYWORDS = new Set([
-    "$ref",
-    "$recursiveRef",
-    "$recursiveAnchor",
-    "$dynamicRef",
-    "$dynamicAnchor",
-]);
-function hasRef(schema) {
-    for (const key in schema) {
-        if (REF_KEYWORDS.has(key))
-            return true;
-        const sch = schema[key];
-        if (Array.isArray(sch) && sch.some(hasRef))
-            return true;
-        if (typeof sch == "object" && hasRef(sch))
-            return true;
-    }
-    return false;
-}
-function countKeys(schema) {
-    let count = 0;
-    for (const key in schema) {
-        if (key === "$ref")
-            return Infinity;
-        count++;
-        if (SIMPLE_INLINED.has(key))
-            continue;
-        if (typeof schema[key] == "object") {
-            (0, util_1.eachItem)(schema[key], (sch) => (count += countKeys(sch)));
-        }
-        if (count === Infinity)
-            return Infinity;
-    }
-    return count;
-}
-function getFullPath(resolver, id = "", normalize) {
-    if (normalize !== false)
-        id = normalizeId(id);
-    const p = resolver.parse(id);
-    return _getFullPath(resolver, p);
-}
-exports.getFullPath = getFullPath;
-function _getFullPath(resolver, p) {
-    const serialized = resolver.serialize(p);
-    return serialized.split("#")[0] + "#";
-}
-exports._getFullPath = _getFullPath;
-const TRAILING_SLASH_HASH = /#\/?$/;
-function normalizeId(id) {
-    return id ? id.replace(TRAILING_SLASH_HASH, "") : "";
-}
-exports.normalizeId = normalizeId;
-function resolveUrl(resolver, baseId, id) {
-    id = normalizeId(id);
-    return resolver.resolve(baseId, id);
-}
-exports.resolveUrl = resolveUrl;
-const ANCHOR = /^[a-z_][-a-z0-9._]*$/i;
-function getSchemaRefs(schema, baseId) {
-    if (typeof schema == "boolean")
-        return {};
-    const { schemaId, uriResolver } = this.opts;
-    const schId = normalizeId(schema[schemaId] || baseId);
-    const baseIds = { "": schId };
-    const pathPrefix = getFullPath(uriResolver, schId, false);
-    const localRefs = {};
-    const schemaRefs = new Set();
-    traverse(schema, { allKeys: true }, (sch, jsonPtr, _, parentJsonPtr) => {
-        if (parentJsonPtr === undefined)
-            return;
-        const fullPath = pathPrefix + jsonPtr;
-        let innerBaseId = baseIds[parentJsonPtr];
-        if (typeof sch[schemaId] == "string")
-            innerBaseId = addRef.call(this, sch[schemaId]);
-        addAnchor.call(this, sch.$anchor);
-        addAnchor.call(this, sch.$dynamicAnchor);
-        baseIds[jsonPtr] = innerBaseId;
-        function addRef(ref) {
-            // eslint-disable-next-line @typescript-eslint/unbound-method
-            const _resolve = this.opts.uriResolver.resolve;
-            ref = normalizeId(innerBaseId ? _resolve(innerBaseId, ref) : ref);
-            if (schemaRefs.has(ref))
-                throw ambiguos(ref);
-            schemaRefs.add(ref);
-            let schOrRef = this.refs[ref];
-            if (typeof schOrRef == "string")
-                schOrRef = this.refs[schOrRef];
-            if (typeof schOrRef == "object") {
-                checkAmbiguosRef(sch, schOrRef.schema, ref);
-            }
-            else if (ref !== normalizeId(fullPath)) {
-                if (ref[0] === "#") {
-                    checkAmbiguosRef(sch, localRefs[ref], ref);
-                    localRefs[ref] = sch;
-                }
-                else {
-                    this.refs[ref] = fullPath;
-                }
-            }
-            return ref;
-        }
-        function addAnchor(anchor) {
-            if (typeof anchor == "string") {
-                if (!ANCHOR.test(anchor))
-                    throw new Error(`invalid anchor "${anchor}"`);
-                addRef.call(this, `#${anchor}`);
-            }
-        }
-    });
-    return localRefs;
-    function checkAmbiguosRef(sch1, sch2, ref) {
-        if (sch2 !== undefined && !equal(sch1, sch2))
-            throw ambiguos(ref);
-    }
-    function ambiguos(ref) {
-        return new Error(`reference "${ref}" resolves to more than one schema`);
-    }
-}
-exports.getSchemaRefs = getSchemaRefs;
-//# sourceMappingURL=resolve.js.map
-
-/***/ }),
-
-/***/ 7353:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.getRules = exports.isJSONType = void 0;
-const _jsonTypes = ["string", "number", "integer", "boolean", "null", "object", "array"];
-const jsonTypes = new Set(_jsonTypes);
-function isJSONType(x) {
-    return typeof x == "string" && jsonTypes.has(x);
-}
-exports.isJSONType = isJSONType;
-function getRules() {
-    const groups = {
-        number: { type: "number", rules: [] },
-        string: { type: "string", rules: [] },
-        array: { type: "array", rules: [] },
-        object: { type: "object", rules: [] },
-    };
-    return {
-        types: { ...groups, integer: true, boolean: true, null: true },
-        rules: [{ rules: [] }, groups.number, groups.string, groups.array, groups.object],
-        post: { rules: [] },
-        all: {},
-        keywords: {},
-    };
-}
-exports.getRules = getRules;
-//# sourceMappingURL=rules.js.map
-
-/***/ }),
-
-/***/ 4464:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.checkStrictMode = exports.getErrorPath = exports.Type = exports.useFunc = exports.setEvaluated = exports.evaluatedPropsToName = exports.mergeEvaluated = exports.eachItem = exports.unescapeJsonPointer = exports.escapeJsonPointer = exports.escapeFragment = exports.unescapeFragment = exports.schemaRefOrVal = exports.schemaHasRulesButRef = exports.schemaHasRules = exports.checkUnknownRules = exports.alwaysValidSchema = exports.toHash = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const code_1 = __nccwpck_require__(567);
-// TODO refactor to use Set
-function toHash(arr) {
-    const hash = {};
-    for (const item of arr)
-        hash[item] = true;
-    return hash;
-}
-exports.toHash = toHash;
-function alwaysValidSchema(it, schema) {
-    if (typeof schema == "boolean")
-        return schema;
-    if (Object.keys(schema).length === 0)
-        return true;
-    checkUnknownRules(it, schema);
-    return !schemaHasRules(schema, it.self.RULES.all);
-}
-exports.alwaysValidSchema = alwaysValidSchema;
-function checkUnknownRules(it, schema = it.schema) {
-    const { opts, self } = it;
-    if (!opts.strictSchema)
-        return;
-    if (typeof schema === "boolean")
-        return;
-    const rules = self.RULES.keywords;
-    for (const key in schema) {
-        if (!rules[key])
-            checkStrictMode(it, `unknown keyword: "${key}"`);
-    }
-}
-exports.checkUnknownRules = checkUnknownRules;
-function schemaHasRules(schema, rules) {
-    if (typeof schema == "boolean")
-        return !schema;
-    for (const key in schema)
-        if (rules[key])
-            return true;
-    return false;
-}
-exports.schemaHasRules = schemaHasRules;
-function schemaHasRulesButRef(schema, RULES) {
-    if (typeof schema == "boolean")
-        return !schema;
-    for (const key in schema)
-        if (key !== "$ref" && RULES.all[key])
-            return true;
-    return false;
-}
-exports.schemaHasRulesButRef = schemaHasRulesButRef;
-function schemaRefOrVal({ topSchemaRef, schemaPath }, schema, keyword, $data) {
-    if (!$data) {
-        if (typeof schema == "number" || typeof schema == "boolean")
-            return schema;
-        if (typeof schema == "string")
-            return (0, codegen_1._) `${schema}`;
-    }
-    return (0, codegen_1._) `${topSchemaRef}${schemaPath}${(0, codegen_1.getProperty)(keyword)}`;
-}
-exports.schemaRefOrVal = schemaRefOrVal;
-function unescapeFragment(str) {
-    return unescapeJsonPointer(decodeURIComponent(str));
-}
-exports.unescapeFragment = unescapeFragment;
-function escapeFragment(str) {
-    return encodeURIComponent(escapeJsonPointer(str));
-}
-exports.escapeFragment = escapeFragment;
-function escapeJsonPointer(str) {
-    if (typeof str == "number")
-        return `${str}`;
-    return str.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-exports.escapeJsonPointer = escapeJsonPointer;
-function unescapeJsonPointer(str) {
-    return str.replace(/~1/g, "/").replace(/~0/g, "~");
-}
-exports.unescapeJsonPointer = unescapeJsonPointer;
-function eachItem(xs, f) {
-    if (Array.isArray(xs)) {
-        for (const x of xs)
-            f(x);
-    }
-    else {
-        f(xs);
-    }
-}
-exports.eachItem = eachItem;
-function makeMergeEvaluated({ mergeNames, mergeToName, mergeValues, resultToName, }) {
-    return (gen, from, to, toName) => {
-        const res = to === undefined
-            ? from
-            : to instanceof codegen_1.Name
-                ? (from instanceof codegen_1.Name ? mergeNames(gen, from, to) : mergeToName(gen, from, to), to)
-                : from instanceof codegen_1.Name
-                    ? (mergeToName(gen, to, from), from)
-                    : mergeValues(from, to);
-        return toName === codegen_1.Name && !(res instanceof codegen_1.Name) ? resultToName(gen, res) : res;
-    };
-}
-exports.mergeEvaluated = {
-    props: makeMergeEvaluated({
-        mergeNames: (gen, from, to) => gen.if((0, codegen_1._) `${to} !== true && ${from} !== undefined`, () => {
-            gen.if((0, codegen_1._) `${from} === true`, () => gen.assign(to, true), () => gen.assign(to, (0, codegen_1._) `${to} || {}`).code((0, codegen_1._) `Object.assign(${to}, ${from})`));
-        }),
-        mergeToName: (gen, from, to) => gen.if((0, codegen_1._) `${to} !== true`, () => {
-            if (from === true) {
-                gen.assign(to, true);
-            }
-            else {
-                gen.assign(to, (0, codegen_1._) `${to} || {}`);
-                setEvaluated(gen, to, from);
-            }
-        }),
-        mergeValues: (from, to) => (from === true ? true : { ...from, ...to }),
-        resultToName: evaluatedPropsToName,
-    }),
-    items: makeMergeEvaluated({
-        mergeNames: (gen, from, to) => gen.if((0, codegen_1._) `${to} !== true && ${from} !== undefined`, () => gen.assign(to, (0, codegen_1._) `${from} === true ? true : ${to} > ${from} ? ${to} : ${from}`)),
-        mergeToName: (gen, from, to) => gen.if((0, codegen_1._) `${to} !== true`, () => gen.assign(to, from === true ? true : (0, codegen_1._) `${to} > ${from} ? ${to} : ${from}`)),
-        mergeValues: (from, to) => (from === true ? true : Math.max(from, to)),
-        resultToName: (gen, items) => gen.var("items", items),
-    }),
-};
-function evaluatedPropsToName(gen, ps) {
-    if (ps === true)
-        return gen.var("props", true);
-    const props = gen.var("props", (0, codegen_1._) `{}`);
-    if (ps !== undefined)
-        setEvaluated(gen, props, ps);
-    return props;
-}
-exports.evaluatedPropsToName = evaluatedPropsToName;
-function setEvaluated(gen, props, ps) {
-    Object.keys(ps).forEach((p) => gen.assign((0, codegen_1._) `${props}${(0, codegen_1.getProperty)(p)}`, true));
-}
-exports.setEvaluated = setEvaluated;
-const snippets = {};
-function useFunc(gen, f) {
-    return gen.scopeValue("func", {
-        ref: f,
-        code: snippets[f.code] || (snippets[f.code] = new code_1._Code(f.code)),
-    });
-}
-exports.useFunc = useFunc;
-var Type;
-(function (Type) {
-    Type[Type["Num"] = 0] = "Num";
-    Type[Type["Str"] = 1] = "Str";
-})(Type || (exports.Type = Type = {}));
-function getErrorPath(dataProp, dataPropType, jsPropertySyntax) {
-    // let path
-    if (dataProp instanceof codegen_1.Name) {
-        const isNumber = dataPropType === Type.Num;
-        return jsPropertySyntax
-            ? isNumber
-                ? (0, codegen_1._) `"[" + ${dataProp} + "]"`
-                : (0, codegen_1._) `"['" + ${dataProp} + "']"`
-            : isNumber
-                ? (0, codegen_1._) `"/" + ${dataProp}`
-                : (0, codegen_1._) `"/" + ${dataProp}.replace(/~/g, "~0").replace(/\\//g, "~1")`; // TODO maybe use global escapePointer
-    }
-    return jsPropertySyntax ? (0, codegen_1.getProperty)(dataProp).toString() : "/" + escapeJsonPointer(dataProp);
-}
-exports.getErrorPath = getErrorPath;
-function checkStrictMode(it, msg, mode = it.opts.strictSchema) {
-    if (!mode)
-        return;
-    msg = `strict mode: ${msg}`;
-    if (mode === true)
-        throw new Error(msg);
-    it.self.logger.warn(msg);
-}
-exports.checkStrictMode = checkStrictMode;
-//# sourceMappingURL=util.js.map
-
-/***/ }),
-
-/***/ 7692:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.shouldUseRule = exports.shouldUseGroup = exports.schemaHasRulesForType = void 0;
-function schemaHasRulesForType({ schema, self }, type) {
-    const group = self.RULES.types[type];
-    return group && group !== true && shouldUseGroup(schema, group);
-}
-exports.schemaHasRulesForType = schemaHasRulesForType;
-function shouldUseGroup(schema, group) {
-    return group.rules.some((rule) => shouldUseRule(schema, rule));
-}
-exports.shouldUseGroup = shouldUseGroup;
-function shouldUseRule(schema, rule) {
-    var _a;
-    return (schema[rule.keyword] !== undefined ||
-        ((_a = rule.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== undefined)));
-}
-exports.shouldUseRule = shouldUseRule;
-//# sourceMappingURL=applicability.js.map
-
-/***/ }),
-
-/***/ 5346:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.boolOrEmptySchema = exports.topBoolOrEmptySchema = void 0;
-const errors_1 = __nccwpck_require__(1283);
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const boolError = {
-    message: "boolean schema is false",
-};
-function topBoolOrEmptySchema(it) {
-    const { gen, schema, validateName } = it;
-    if (schema === false) {
-        falseSchemaError(it, false);
-    }
-    else if (typeof schema == "object" && schema.$async === true) {
-        gen.return(names_1.default.data);
-    }
-    else {
-        gen.assign((0, codegen_1._) `${validateName}.errors`, null);
-        gen.return(true);
-    }
-}
-exports.topBoolOrEmptySchema = topBoolOrEmptySchema;
-function boolOrEmptySchema(it, valid) {
-    const { gen, schema } = it;
-    if (schema === false) {
-        gen.var(valid, false); // TODO var
-        falseSchemaError(it);
-    }
-    else {
-        gen.var(valid, true); // TODO var
-    }
-}
-exports.boolOrEmptySchema = boolOrEmptySchema;
-function falseSchemaError(it, overrideAllErrors) {
-    const { gen, data } = it;
-    // TODO maybe some other interface should be used for non-keyword validation errors...
-    const cxt = {
-        gen,
-        keyword: "false schema",
-        data,
-        schema: false,
-        schemaCode: false,
-        schemaValue: false,
-        params: {},
-        it,
-    };
-    (0, errors_1.reportError)(cxt, boolError, undefined, overrideAllErrors);
-}
-//# sourceMappingURL=boolSchema.js.map
-
-/***/ }),
-
-/***/ 6685:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.reportTypeError = exports.checkDataTypes = exports.checkDataType = exports.coerceAndCheckDataType = exports.getJSONTypes = exports.getSchemaTypes = exports.DataType = void 0;
-const rules_1 = __nccwpck_require__(7353);
-const applicability_1 = __nccwpck_require__(7692);
-const errors_1 = __nccwpck_require__(1283);
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-var DataType;
-(function (DataType) {
-    DataType[DataType["Correct"] = 0] = "Correct";
-    DataType[DataType["Wrong"] = 1] = "Wrong";
-})(DataType || (exports.DataType = DataType = {}));
-function getSchemaTypes(schema) {
-    const types = getJSONTypes(schema.type);
-    const hasNull = types.includes("null");
-    if (hasNull) {
-        if (schema.nullable === false)
-            throw new Error("type: null contradicts nullable: false");
-    }
-    else {
-        if (!types.length && schema.nullable !== undefined) {
-            throw new Error('"nullable" cannot be used without "type"');
-        }
-        if (schema.nullable === true)
-            types.push("null");
-    }
-    return types;
-}
-exports.getSchemaTypes = getSchemaTypes;
-// eslint-disable-next-line @typescript-eslint/no-redundant-type-constituents
-function getJSONTypes(ts) {
-    const types = Array.isArray(ts) ? ts : ts ? [ts] : [];
-    if (types.every(rules_1.isJSONType))
-        return types;
-    throw new Error("type must be JSONType or JSONType[]: " + types.join(","));
-}
-exports.getJSONTypes = getJSONTypes;
-function coerceAndCheckDataType(it, types) {
-    const { gen, data, opts } = it;
-    const coerceTo = coerceToTypes(types, opts.coerceTypes);
-    const checkTypes = types.length > 0 &&
-        !(coerceTo.length === 0 && types.length === 1 && (0, applicability_1.schemaHasRulesForType)(it, types[0]));
-    if (checkTypes) {
-        const wrongType = checkDataTypes(types, data, opts.strictNumbers, DataType.Wrong);
-        gen.if(wrongType, () => {
-            if (coerceTo.length)
-                coerceData(it, types, coerceTo);
-            else
-                reportTypeError(it);
-        });
-    }
-    return checkTypes;
-}
-exports.coerceAndCheckDataType = coerceAndCheckDataType;
-const COERCIBLE = new Set(["string", "number", "integer", "boolean", "null"]);
-function coerceToTypes(types, coerceTypes) {
-    return coerceTypes
-        ? types.filter((t) => COERCIBLE.has(t) || (coerceTypes === "array" && t === "array"))
-        : [];
-}
-function coerceData(it, types, coerceTo) {
-    const { gen, data, opts } = it;
-    const dataType = gen.let("dataType", (0, codegen_1._) `typeof ${data}`);
-    const coerced = gen.let("coerced", (0, codegen_1._) `undefined`);
-    if (opts.coerceTypes === "array") {
-        gen.if((0, codegen_1._) `${dataType} == 'object' && Array.isArray(${data}) && ${data}.length == 1`, () => gen
-            .assign(data, (0, codegen_1._) `${data}[0]`)
-            .assign(dataType, (0, codegen_1._) `typeof ${data}`)
-            .if(checkDataTypes(types, data, opts.strictNumbers), () => gen.assign(coerced, data)));
-    }
-    gen.if((0, codegen_1._) `${coerced} !== undefined`);
-    for (const t of coerceTo) {
-        if (COERCIBLE.has(t) || (t === "array" && opts.coerceTypes === "array")) {
-            coerceSpecificType(t);
-        }
-    }
-    gen.else();
-    reportTypeError(it);
-    gen.endIf();
-    gen.if((0, codegen_1._) `${coerced} !== undefined`, () => {
-        gen.assign(data, coerced);
-        assignParentData(it, coerced);
-    });
-    function coerceSpecificType(t) {
-        switch (t) {
-            case "string":
-                gen
-                    .elseIf((0, codegen_1._) `${dataType} == "number" || ${dataType} == "boolean"`)
-                    .assign(coerced, (0, codegen_1._) `"" + ${data}`)
-                    .elseIf((0, codegen_1._) `${data} === null`)
-                    .assign(coerced, (0, codegen_1._) `""`);
-                return;
-            case "number":
-                gen
-                    .elseIf((0, codegen_1._) `${dataType} == "boolean" || ${data} === null
-              || (${dataType} == "string" && ${data} && ${data} == +${data})`)
-                    .assign(coerced, (0, codegen_1._) `+${data}`);
-                return;
-            case "integer":
-                gen
-                    .elseIf((0, codegen_1._) `${dataType} === "boolean" || ${data} === null
-              || (${dataType} === "string" && ${data} && ${data} == +${data} && !(${data} % 1))`)
-                    .assign(coerced, (0, codegen_1._) `+${data}`);
-                return;
-            case "boolean":
-                gen
-                    .elseIf((0, codegen_1._) `${data} === "false" || ${data} === 0 || ${data} === null`)
-                    .assign(coerced, false)
-                    .elseIf((0, codegen_1._) `${data} === "true" || ${data} === 1`)
-                    .assign(coerced, true);
-                return;
-            case "null":
-                gen.elseIf((0, codegen_1._) `${data} === "" || ${data} === 0 || ${data} === false`);
-                gen.assign(coerced, null);
-                return;
-            case "array":
-                gen
-                    .elseIf((0, codegen_1._) `${dataType} === "string" || ${dataType} === "number"
-              || ${dataType} === "boolean" || ${data} === null`)
-                    .assign(coerced, (0, codegen_1._) `[${data}]`);
-        }
-    }
-}
-function assignParentData({ gen, parentData, parentDataProperty }, expr) {
-    // TODO use gen.property
-    gen.if((0, codegen_1._) `${parentData} !== undefined`, () => gen.assign((0, codegen_1._) `${parentData}[${parentDataProperty}]`, expr));
-}
-function checkDataType(dataType, data, strictNums, correct = DataType.Correct) {
-    const EQ = correct === DataType.Correct ? codegen_1.operators.EQ : codegen_1.operators.NEQ;
-    let cond;
-    switch (dataType) {
-        case "null":
-            return (0, codegen_1._) `${data} ${EQ} null`;
-        case "array":
-            cond = (0, codegen_1._) `Array.isArray(${data})`;
-            break;
-        case "object":
-            cond = (0, codegen_1._) `${data} && typeof ${data} == "object" && !Array.isArray(${data})`;
-            break;
-        case "integer":
-            cond = numCond((0, codegen_1._) `!(${data} % 1) && !isNaN(${data})`);
-            break;
-        case "number":
-            cond = numCond();
-            break;
-        default:
-            return (0, codegen_1._) `typeof ${data} ${EQ} ${dataType}`;
-    }
-    return correct === DataType.Correct ? cond : (0, codegen_1.not)(cond);
-    function numCond(_cond = codegen_1.nil) {
-        return (0, codegen_1.and)((0, codegen_1._) `typeof ${data} == "number"`, _cond, strictNums ? (0, codegen_1._) `isFinite(${data})` : codegen_1.nil);
-    }
-}
-exports.checkDataType = checkDataType;
-function checkDataTypes(dataTypes, data, strictNums, correct) {
-    if (dataTypes.length === 1) {
-        return checkDataType(dataTypes[0], data, strictNums, correct);
-    }
-    let cond;
-    const types = (0, util_1.toHash)(dataTypes);
-    if (types.array && types.object) {
-        const notObj = (0, codegen_1._) `typeof ${data} != "object"`;
-        cond = types.null ? notObj : (0, codegen_1._) `!${data} || ${notObj}`;
-        delete types.null;
-        delete types.array;
-        delete types.object;
-    }
-    else {
-        cond = codegen_1.nil;
-    }
-    if (types.number)
-        delete types.integer;
-    for (const t in types)
-        cond = (0, codegen_1.and)(cond, checkDataType(t, data, strictNums, correct));
-    return cond;
-}
-exports.checkDataTypes = checkDataTypes;
-const typeError = {
-    message: ({ schema }) => `must be ${schema}`,
-    params: ({ schema, schemaValue }) => typeof schema == "string" ? (0, codegen_1._) `{type: ${schema}}` : (0, codegen_1._) `{type: ${schemaValue}}`,
-};
-function reportTypeError(it) {
-    const cxt = getTypeErrorContext(it);
-    (0, errors_1.reportError)(cxt, typeError);
-}
-exports.reportTypeError = reportTypeError;
-function getTypeErrorContext(it) {
-    const { gen, data, schema } = it;
-    const schemaCode = (0, util_1.schemaRefOrVal)(it, schema, "type");
-    return {
-        gen,
-        keyword: "type",
-        data,
-        schema: schema.type,
-        schemaCode,
-        schemaValue: schemaCode,
-        parentSchema: schema,
-        params: {},
-        it,
-    };
-}
-//# sourceMappingURL=dataType.js.map
-
-/***/ }),
-
-/***/ 1699:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.assignDefaults = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-function assignDefaults(it, ty) {
-    const { properties, items } = it.schema;
-    if (ty === "object" && properties) {
-        for (const key in properties) {
-            assignDefault(it, key, properties[key].default);
-        }
-    }
-    else if (ty === "array" && Array.isArray(items)) {
-        items.forEach((sch, i) => assignDefault(it, i, sch.default));
-    }
-}
-exports.assignDefaults = assignDefaults;
-function assignDefault(it, prop, defaultValue) {
-    const { gen, compositeRule, data, opts } = it;
-    if (defaultValue === undefined)
-        return;
-    const childData = (0, codegen_1._) `${data}${(0, codegen_1.getProperty)(prop)}`;
-    if (compositeRule) {
-        (0, util_1.checkStrictMode)(it, `default is ignored for: ${childData}`);
-        return;
-    }
-    let condition = (0, codegen_1._) `${childData} === undefined`;
-    if (opts.useDefaults === "empty") {
-        condition = (0, codegen_1._) `${condition} || ${childData} === null || ${childData} === ""`;
-    }
-    // `${childData} === undefined` +
-    // (opts.useDefaults === "empty" ? ` || ${childData} === null || ${childData} === ""` : "")
-    gen.if(condition, (0, codegen_1._) `${childData} = ${(0, codegen_1.stringify)(defaultValue)}`);
-}
-//# sourceMappingURL=defaults.js.map
-
-/***/ }),
-
-/***/ 7881:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.getData = exports.KeywordCxt = exports.validateFunctionCode = void 0;
-const boolSchema_1 = __nccwpck_require__(5346);
-const dataType_1 = __nccwpck_require__(6685);
-const applicability_1 = __nccwpck_require__(7692);
-const dataType_2 = __nccwpck_require__(6685);
-const defaults_1 = __nccwpck_require__(1699);
-const keyword_1 = __nccwpck_require__(5202);
-const subschema_1 = __nccwpck_require__(6200);
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const resolve_1 = __nccwpck_require__(4090);
-const util_1 = __nccwpck_require__(4464);
-const errors_1 = __nccwpck_require__(1283);
-// schema compilation - generates validation function, subschemaCode (below) is used for subschemas
-function validateFunctionCode(it) {
-    if (isSchemaObj(it)) {
-        checkKeywords(it);
-        if (schemaCxtHasRules(it)) {
-            topSchemaObjCode(it);
-            return;
-        }
-    }
-    validateFunction(it, () => (0, boolSchema_1.topBoolOrEmptySchema)(it));
-}
-exports.validateFunctionCode = validateFunctionCode;
-function validateFunction({ gen, validateName, schema, schemaEnv, opts }, body) {
-    if (opts.code.es5) {
-        gen.func(validateName, (0, codegen_1._) `${names_1.default.data}, ${names_1.default.valCxt}`, schemaEnv.$async, () => {
-            gen.code((0, codegen_1._) `"use strict"; ${funcSourceUrl(schema, opts)}`);
-            destructureValCxtES5(gen, opts);
-            gen.code(body);
-        });
-    }
-    else {
-        gen.func(validateName, (0, codegen_1._) `${names_1.default.data}, ${destructureValCxt(opts)}`, schemaEnv.$async, () => gen.code(funcSourceUrl(schema, opts)).code(body));
-    }
-}
-function destructureValCxt(opts) {
-    return (0, codegen_1._) `{${names_1.default.instancePath}="", ${names_1.default.parentData}, ${names_1.default.parentDataProperty}, ${names_1.default.rootData}=${names_1.default.data}${opts.dynamicRef ? (0, codegen_1._) `, ${names_1.default.dynamicAnchors}={}` : codegen_1.nil}}={}`;
-}
-function destructureValCxtES5(gen, opts) {
-    gen.if(names_1.default.valCxt, () => {
-        gen.var(names_1.default.instancePath, (0, codegen_1._) `${names_1.default.valCxt}.${names_1.default.instancePath}`);
-        gen.var(names_1.default.parentData, (0, codegen_1._) `${names_1.default.valCxt}.${names_1.default.parentData}`);
-        gen.var(names_1.default.parentDataProperty, (0, codegen_1._) `${names_1.default.valCxt}.${names_1.default.parentDataProperty}`);
-        gen.var(names_1.default.rootData, (0, codegen_1._) `${names_1.default.valCxt}.${names_1.default.rootData}`);
-        if (opts.dynamicRef)
-            gen.var(names_1.default.dynamicAnchors, (0, codegen_1._) `${names_1.default.valCxt}.${names_1.default.dynamicAnchors}`);
-    }, () => {
-        gen.var(names_1.default.instancePath, (0, codegen_1._) `""`);
-        gen.var(names_1.default.parentData, (0, codegen_1._) `undefined`);
-        gen.var(names_1.default.parentDataProperty, (0, codegen_1._) `undefined`);
-        gen.var(names_1.default.rootData, names_1.default.data);
-        if (opts.dynamicRef)
-            gen.var(names_1.default.dynamicAnchors, (0, codegen_1._) `{}`);
-    });
-}
-function topSchemaObjCode(it) {
-    const { schema, opts, gen } = it;
-    validateFunction(it, () => {
-        if (opts.$comment && schema.$comment)
-            commentKeyword(it);
-        checkNoDefault(it);
-        gen.let(names_1.default.vErrors, null);
-        gen.let(names_1.default.errors, 0);
-        if (opts.unevaluated)
-            resetEvaluated(it);
-        typeAndKeywords(it);
-        returnResults(it);
-    });
-    return;
-}
-function resetEvaluated(it) {
-    // TODO maybe some hook to execute it in the end to check whether props/items are Name, as in assignEvaluated
-    const { gen, validateName } = it;
-    it.evaluated = gen.const("evaluated", (0, codegen_1._) `${validateName}.evaluated`);
-    gen.if((0, codegen_1._) `${it.evaluated}.dynamicProps`, () => gen.assign((0, codegen_1._) `${it.evaluated}.props`, (0, codegen_1._) `undefined`));
-    gen.if((0, codegen_1._) `${it.evaluated}.dynamicItems`, () => gen.assign((0, codegen_1._) `${it.evaluated}.items`, (0, codegen_1._) `undefined`));
-}
-function funcSourceUrl(schema, opts) {
-    const schId = typeof schema == "object" && schema[opts.schemaId];
-    return schId && (opts.code.source || opts.code.process) ? (0, codegen_1._) `/*# sourceURL=${schId} */` : codegen_1.nil;
-}
-// schema compilation - this function is used recursively to generate code for sub-schemas
-function subschemaCode(it, valid) {
-    if (isSchemaObj(it)) {
-        checkKeywords(it);
-        if (schemaCxtHasRules(it)) {
-            subSchemaObjCode(it, valid);
-            return;
-        }
-    }
-    (0, boolSchema_1.boolOrEmptySchema)(it, valid);
-}
-function schemaCxtHasRules({ schema, self }) {
-    if (typeof schema == "boolean")
-        return !schema;
-    for (const key in schema)
-        if (self.RULES.all[key])
-            return true;
-    return false;
-}
-function isSchemaObj(it) {
-    return typeof it.schema != "boolean";
-}
-function subSchemaObjCode(it, valid) {
-    const { schema, gen, opts } = it;
-    if (opts.$comment && schema.$comment)
-        commentKeyword(it);
-    updateContext(it);
-    checkAsyncSchema(it);
-    const errsCount = gen.const("_errs", names_1.default.errors);
-    typeAndKeywords(it, errsCount);
-    // TODO var
-    gen.var(valid, (0, codegen_1._) `${errsCount} === ${names_1.default.errors}`);
-}
-function checkKeywords(it) {
-    (0, util_1.checkUnknownRules)(it);
-    checkRefsAndKeywords(it);
-}
-function typeAndKeywords(it, errsCount) {
-    if (it.opts.jtd)
-        return schemaKeywords(it, [], false, errsCount);
-    const types = (0, dataType_1.getSchemaTypes)(it.schema);
-    const checkedTypes = (0, dataType_1.coerceAndCheckDataType)(it, types);
-    schemaKeywords(it, types, !checkedTypes, errsCount);
-}
-function checkRefsAndKeywords(it) {
-    const { schema, errSchemaPath, opts, self } = it;
-    if (schema.$ref && opts.ignoreKeywordsWithRef && (0, util_1.schemaHasRulesButRef)(schema, self.RULES)) {
-        self.logger.warn(`$ref: keywords ignored in schema at path "${errSchemaPath}"`);
-    }
-}
-function checkNoDefault(it) {
-    const { schema, opts } = it;
-    if (schema.default !== undefined && opts.useDefaults && opts.strictSchema) {
-        (0, util_1.checkStrictMode)(it, "default is ignored in the schema root");
-    }
-}
-function updateContext(it) {
-    const schId = it.schema[it.opts.schemaId];
-    if (schId)
-        it.baseId = (0, resolve_1.resolveUrl)(it.opts.uriResolver, it.baseId, schId);
-}
-function checkAsyncSchema(it) {
-    if (it.schema.$async && !it.schemaEnv.$async)
-        throw new Error("async schema in sync schema");
-}
-function commentKeyword({ gen, schemaEnv, schema, errSchemaPath, opts }) {
-    const msg = schema.$comment;
-    if (opts.$comment === true) {
-        gen.code((0, codegen_1._) `${names_1.default.self}.logger.log(${msg})`);
-    }
-    else if (typeof opts.$comment == "function") {
-        const schemaPath = (0, codegen_1.str) `${errSchemaPath}/$comment`;
-        const rootName = gen.scopeValue("root", { ref: schemaEnv.root });
-        gen.code((0, codegen_1._) `${names_1.default.self}.opts.$comment(${msg}, ${schemaPath}, ${rootName}.schema)`);
-    }
-}
-function returnResults(it) {
-    const { gen, schemaEnv, validateName, ValidationError, opts } = it;
-    if (schemaEnv.$async) {
-        // TODO assign unevaluated
-        gen.if((0, codegen_1._) `${names_1.default.errors} === 0`, () => gen.return(names_1.default.data), () => gen.throw((0, codegen_1._) `new ${ValidationError}(${names_1.default.vErrors})`));
-    }
-    else {
-        gen.assign((0, codegen_1._) `${validateName}.errors`, names_1.default.vErrors);
-        if (opts.unevaluated)
-            assignEvaluated(it);
-        gen.return((0, codegen_1._) `${names_1.default.errors} === 0`);
-    }
-}
-function assignEvaluated({ gen, evaluated, props, items }) {
-    if (props instanceof codegen_1.Name)
-        gen.assign((0, codegen_1._) `${evaluated}.props`, props);
-    if (items instanceof codegen_1.Name)
-        gen.assign((0, codegen_1._) `${evaluated}.items`, items);
-}
-function schemaKeywords(it, types, typeErrors, errsCount) {
-    const { gen, schema, data, allErrors, opts, self } = it;
-    const { RULES } = self;
-    if (schema.$ref && (opts.ignoreKeywordsWithRef || !(0, util_1.schemaHasRulesButRef)(schema, RULES))) {
-        gen.block(() => keywordCode(it, "$ref", RULES.all.$ref.definition)); // TODO typecast
-        return;
-    }
-    if (!opts.jtd)
-        checkStrictTypes(it, types);
-    gen.block(() => {
-        for (const group of RULES.rules)
-            groupKeywords(group);
-        groupKeywords(RULES.post);
-    });
-    function groupKeywords(group) {
-        if (!(0, applicability_1.shouldUseGroup)(schema, group))
-            return;
-        if (group.type) {
-            gen.if((0, dataType_2.checkDataType)(group.type, data, opts.strictNumbers));
-            iterateKeywords(it, group);
-            if (types.length === 1 && types[0] === group.type && typeErrors) {
-                gen.else();
-                (0, dataType_2.reportTypeError)(it);
-            }
-            gen.endIf();
-        }
-        else {
-            iterateKeywords(it, group);
-        }
-        // TODO make it "ok" call?
-        if (!allErrors)
-            gen.if((0, codegen_1._) `${names_1.default.errors} === ${errsCount || 0}`);
-    }
-}
-function iterateKeywords(it, group) {
-    const { gen, schema, opts: { useDefaults }, } = it;
-    if (useDefaults)
-        (0, defaults_1.assignDefaults)(it, group.type);
-    gen.block(() => {
-        for (const rule of group.rules) {
-            if ((0, applicability_1.shouldUseRule)(schema, rule)) {
-                keywordCode(it, rule.keyword, rule.definition, group.type);
-            }
-        }
-    });
-}
-function checkStrictTypes(it, types) {
-    if (it.schemaEnv.meta || !it.opts.strictTypes)
-        return;
-    checkContextTypes(it, types);
-    if (!it.opts.allowUnionTypes)
-        checkMultipleTypes(it, types);
-    checkKeywordTypes(it, it.dataTypes);
-}
-function checkContextTypes(it, types) {
-    if (!types.length)
-        return;
-    if (!it.dataTypes.length) {
-        it.dataTypes = types;
-        return;
-    }
-    types.forEach((t) => {
-        if (!includesType(it.dataTypes, t)) {
-            strictTypesError(it, `type "${t}" not allowed by context "${it.dataTypes.join(",")}"`);
-        }
-    });
-    narrowSchemaTypes(it, types);
-}
-function checkMultipleTypes(it, ts) {
-    if (ts.length > 1 && !(ts.length === 2 && ts.includes("null"))) {
-        strictTypesError(it, "use allowUnionTypes to allow union type keyword");
-    }
-}
-function checkKeywordTypes(it, ts) {
-    const rules = it.self.RULES.all;
-    for (const keyword in rules) {
-        const rule = rules[keyword];
-        if (typeof rule == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule)) {
-            const { type } = rule.definition;
-            if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
-                strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
-            }
-        }
-    }
-}
-function hasApplicableType(schTs, kwdT) {
-    return schTs.includes(kwdT) || (kwdT === "number" && schTs.includes("integer"));
-}
-function includesType(ts, t) {
-    return ts.includes(t) || (t === "integer" && ts.includes("number"));
-}
-function narrowSchemaTypes(it, withTypes) {
-    const ts = [];
-    for (const t of it.dataTypes) {
-        if (includesType(withTypes, t))
-            ts.push(t);
-        else if (withTypes.includes("integer") && t === "number")
-            ts.push("integer");
-    }
-    it.dataTypes = ts;
-}
-function strictTypesError(it, msg) {
-    const schemaPath = it.schemaEnv.baseId + it.errSchemaPath;
-    msg += ` at "${schemaPath}" (strictTypes)`;
-    (0, util_1.checkStrictMode)(it, msg, it.opts.strictTypes);
-}
-class KeywordCxt {
-    constructor(it, def, keyword) {
-        (0, keyword_1.validateKeywordUsage)(it, def, keyword);
-        this.gen = it.gen;
-        this.allErrors = it.allErrors;
-        this.keyword = keyword;
-        this.data = it.data;
-        this.schema = it.schema[keyword];
-        this.$data = def.$data && it.opts.$data && this.schema && this.schema.$data;
-        this.schemaValue = (0, util_1.schemaRefOrVal)(it, this.schema, keyword, this.$data);
-        this.schemaType = def.schemaType;
-        this.parentSchema = it.schema;
-        this.params = {};
-        this.it = it;
-        this.def = def;
-        if (this.$data) {
-            this.schemaCode = it.gen.const("vSchema", getData(this.$data, it));
-        }
-        else {
-            this.schemaCode = this.schemaValue;
-            if (!(0, keyword_1.validSchemaType)(this.schema, def.schemaType, def.allowUndefined)) {
-                throw new Error(`${keyword} value must be ${JSON.stringify(def.schemaType)}`);
-            }
-        }
-        if ("code" in def ? def.trackErrors : def.errors !== false) {
-            this.errsCount = it.gen.const("_errs", names_1.default.errors);
-        }
-    }
-    result(condition, successAction, failAction) {
-        this.failResult((0, codegen_1.not)(condition), successAction, failAction);
-    }
-    failResult(condition, successAction, failAction) {
-        this.gen.if(condition);
-        if (failAction)
-            failAction();
-        else
-            this.error();
-        if (successAction) {
-            this.gen.else();
-            successAction();
-            if (this.allErrors)
-                this.gen.endIf();
-        }
-        else {
-            if (this.allErrors)
-                this.gen.endIf();
-            else
-                this.gen.else();
-        }
-    }
-    pass(condition, failAction) {
-        this.failResult((0, codegen_1.not)(condition), undefined, failAction);
-    }
-    fail(condition) {
-        if (condition === undefined) {
-            this.error();
-            if (!this.allErrors)
-                this.gen.if(false); // this branch will be removed by gen.optimize
-            return;
-        }
-        this.gen.if(condition);
-        this.error();
-        if (this.allErrors)
-            this.gen.endIf();
-        else
-            this.gen.else();
-    }
-    fail$data(condition) {
-        if (!this.$data)
-            return this.fail(condition);
-        const { schemaCode } = this;
-        this.fail((0, codegen_1._) `${schemaCode} !== undefined && (${(0, codegen_1.or)(this.invalid$data(), condition)})`);
-    }
-    error(append, errorParams, errorPaths) {
-        if (errorParams) {
-            this.setParams(errorParams);
-            this._error(append, errorPaths);
-            this.setParams({});
-            return;
-        }
-        this._error(append, errorPaths);
-    }
-    _error(append, errorPaths) {
-        ;
-        (append ? errors_1.reportExtraError : errors_1.reportError)(this, this.def.error, errorPaths);
-    }
-    $dataError() {
-        (0, errors_1.reportError)(this, this.def.$dataError || errors_1.keyword$DataError);
-    }
-    reset() {
-        if (this.errsCount === undefined)
-            throw new Error('add "trackErrors" to keyword definition');
-        (0, errors_1.resetErrorsCount)(this.gen, this.errsCount);
-    }
-    ok(cond) {
-        if (!this.allErrors)
-            this.gen.if(cond);
-    }
-    setParams(obj, assign) {
-        if (assign)
-            Object.assign(this.params, obj);
-        else
-            this.params = obj;
-    }
-    block$data(valid, codeBlock, $dataValid = codegen_1.nil) {
-        this.gen.block(() => {
-            this.check$data(valid, $dataValid);
-            codeBlock();
-        });
-    }
-    check$data(valid = codegen_1.nil, $dataValid = codegen_1.nil) {
-        if (!this.$data)
-            return;
-        const { gen, schemaCode, schemaType, def } = this;
-        gen.if((0, codegen_1.or)((0, codegen_1._) `${schemaCode} === undefined`, $dataValid));
-        if (valid !== codegen_1.nil)
-            gen.assign(valid, true);
-        if (schemaType.length || def.validateSchema) {
-            gen.elseIf(this.invalid$data());
-            this.$dataError();
-            if (valid !== codegen_1.nil)
-                gen.assign(valid, false);
-        }
-        gen.else();
-    }
-    invalid$data() {
-        const { gen, schemaCode, schemaType, def, it } = this;
-        return (0, codegen_1.or)(wrong$DataType(), invalid$DataSchema());
-        function wrong$DataType() {
-            if (schemaType.length) {
-                /* istanbul ignore if */
-                if (!(schemaCode instanceof codegen_1.Name))
-                    throw new Error("ajv implementation error");
-                const st = Array.isArray(schemaType) ? schemaType : [schemaType];
-                return (0, codegen_1._) `${(0, dataType_2.checkDataTypes)(st, schemaCode, it.opts.strictNumbers, dataType_2.DataType.Wrong)}`;
-            }
-            return codegen_1.nil;
-        }
-        function invalid$DataSchema() {
-            if (def.validateSchema) {
-                const validateSchemaRef = gen.scopeValue("validate$data", { ref: def.validateSchema }); // TODO value.code for standalone
-                return (0, codegen_1._) `!${validateSchemaRef}(${schemaCode})`;
-            }
-            return codegen_1.nil;
-        }
-    }
-    subschema(appl, valid) {
-        const subschema = (0, subschema_1.getSubschema)(this.it, appl);
-        (0, subschema_1.extendSubschemaData)(subschema, this.it, appl);
-        (0, subschema_1.extendSubschemaMode)(subschema, appl);
-        const nextContext = { ...this.it, ...subschema, items: undefined, props: undefined };
-        subschemaCode(nextContext, valid);
-        return nextContext;
-    }
-    mergeEvaluated(schemaCxt, toName) {
-        const { it, gen } = this;
-        if (!it.opts.unevaluated)
-            return;
-        if (it.props !== true && schemaCxt.props !== undefined) {
-            it.props = util_1.mergeEvaluated.props(gen, schemaCxt.props, it.props, toName);
-        }
-        if (it.items !== true && schemaCxt.items !== undefined) {
-            it.items = util_1.mergeEvaluated.items(gen, schemaCxt.items, it.items, toName);
-        }
-    }
-    mergeValidEvaluated(schemaCxt, valid) {
-        const { it, gen } = this;
-        if (it.opts.unevaluated && (it.props !== true || it.items !== true)) {
-            gen.if(valid, () => this.mergeEvaluated(schemaCxt, codegen_1.Name));
-            return true;
-        }
-    }
-}
-exports.KeywordCxt = KeywordCxt;
-function keywordCode(it, keyword, def, ruleType) {
-    const cxt = new KeywordCxt(it, def, keyword);
-    if ("code" in def) {
-        def.code(cxt, ruleType);
-    }
-    else if (cxt.$data && def.validate) {
-        (0, keyword_1.funcKeywordCode)(cxt, def);
-    }
-    else if ("macro" in def) {
-        (0, keyword_1.macroKeywordCode)(cxt, def);
-    }
-    else if (def.compile || def.validate) {
-        (0, keyword_1.funcKeywordCode)(cxt, def);
-    }
-}
-const JSON_POINTER = /^\/(?:[^~]|~0|~1)*$/;
-const RELATIVE_JSON_POINTER = /^([0-9]+)(#|\/(?:[^~]|~0|~1)*)?$/;
-function getData($data, { dataLevel, dataNames, dataPathArr }) {
-    let jsonPointer;
-    let data;
-    if ($data === "")
-        return names_1.default.rootData;
-    if ($data[0] === "/") {
-        if (!JSON_POINTER.test($data))
-            throw new Error(`Invalid JSON-pointer: ${$data}`);
-        jsonPointer = $data;
-        data = names_1.default.rootData;
-    }
-    else {
-        const matches = RELATIVE_JSON_POINTER.exec($data);
-        if (!matches)
-            throw new Error(`Invalid JSON-pointer: ${$data}`);
-        const up = +matches[1];
-        jsonPointer = matches[2];
-        if (jsonPointer === "#") {
-            if (up >= dataLevel)
-                throw new Error(errorMsg("property/index", up));
-            return dataPathArr[dataLevel - up];
-        }
-        if (up > dataLevel)
-            throw new Error(errorMsg("data", up));
-        data = dataNames[dataLevel - up];
-        if (!jsonPointer)
-            return data;
-    }
-    let expr = data;
-    const segments = jsonPointer.split("/");
-    for (const segment of segments) {
-        if (segment) {
-            data = (0, codegen_1._) `${data}${(0, codegen_1.getProperty)((0, util_1.unescapeJsonPointer)(segment))}`;
-            expr = (0, codegen_1._) `${expr} && ${data}`;
-        }
-    }
-    return expr;
-    function errorMsg(pointerType, up) {
-        return `Cannot access ${pointerType} ${up} levels up, current level is ${dataLevel}`;
-    }
-}
-exports.getData = getData;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 5202:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.validateKeywordUsage = exports.validSchemaType = exports.funcKeywordCode = exports.macroKeywordCode = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const code_1 = __nccwpck_require__(8484);
-const errors_1 = __nccwpck_require__(1283);
-function macroKeywordCode(cxt, def) {
-    const { gen, keyword, schema, parentSchema, it } = cxt;
-    const macroSchema = def.macro.call(it.self, schema, parentSchema, it);
-    const schemaRef = useKeyword(gen, keyword, macroSchema);
-    if (it.opts.validateSchema !== false)
-        it.self.validateSchema(macroSchema, true);
-    const valid = gen.name("valid");
-    cxt.subschema({
-        schema: macroSchema,
-        schemaPath: codegen_1.nil,
-        errSchemaPath: `${it.errSchemaPath}/${keyword}`,
-        topSchemaRef: schemaRef,
-        compositeRule: true,
-    }, valid);
-    cxt.pass(valid, () => cxt.error(true));
-}
-exports.macroKeywordCode = macroKeywordCode;
-function funcKeywordCode(cxt, def) {
-    var _a;
-    const { gen, keyword, schema, parentSchema, $data, it } = cxt;
-    checkAsyncKeyword(it, def);
-    const validate = !$data && def.compile ? def.compile.call(it.self, schema, parentSchema, it) : def.validate;
-    const validateRef = useKeyword(gen, keyword, validate);
-    const valid = gen.let("valid");
-    cxt.block$data(valid, validateKeyword);
-    cxt.ok((_a = def.valid) !== null && _a !== void 0 ? _a : valid);
-    function validateKeyword() {
-        if (def.errors === false) {
-            assignValid();
-            if (def.modifying)
-                modifyData(cxt);
-            reportErrs(() => cxt.error());
-        }
-        else {
-            const ruleErrs = def.async ? validateAsync() : validateSync();
-            if (def.modifying)
-                modifyData(cxt);
-            reportErrs(() => addErrs(cxt, ruleErrs));
-        }
-    }
-    function validateAsync() {
-        const ruleErrs = gen.let("ruleErrs", null);
-        gen.try(() => assignValid((0, codegen_1._) `await `), (e) => gen.assign(valid, false).if((0, codegen_1._) `${e} instanceof ${it.ValidationError}`, () => gen.assign(ruleErrs, (0, codegen_1._) `${e}.errors`), () => gen.throw(e)));
-        return ruleErrs;
-    }
-    function validateSync() {
-        const validateErrs = (0, codegen_1._) `${validateRef}.errors`;
-        gen.assign(validateErrs, null);
-        assignValid(codegen_1.nil);
-        return validateErrs;
-    }
-    function assignValid(_await = def.async ? (0, codegen_1._) `await ` : codegen_1.nil) {
-        const passCxt = it.opts.passContext ? names_1.default.this : names_1.default.self;
-        const passSchema = !(("compile" in def && !$data) || def.schema === false);
-        gen.assign(valid, (0, codegen_1._) `${_await}${(0, code_1.callValidateCode)(cxt, validateRef, passCxt, passSchema)}`, def.modifying);
-    }
-    function reportErrs(errors) {
-        var _a;
-        gen.if((0, codegen_1.not)((_a = def.valid) !== null && _a !== void 0 ? _a : valid), errors);
-    }
-}
-exports.funcKeywordCode = funcKeywordCode;
-function modifyData(cxt) {
-    const { gen, data, it } = cxt;
-    gen.if(it.parentData, () => gen.assign(data, (0, codegen_1._) `${it.parentData}[${it.parentDataProperty}]`));
-}
-function addErrs(cxt, errs) {
-    const { gen } = cxt;
-    gen.if((0, codegen_1._) `Array.isArray(${errs})`, () => {
-        gen
-            .assign(names_1.default.vErrors, (0, codegen_1._) `${names_1.default.vErrors} === null ? ${errs} : ${names_1.default.vErrors}.concat(${errs})`)
-            .assign(names_1.default.errors, (0, codegen_1._) `${names_1.default.vErrors}.length`);
-        (0, errors_1.extendErrors)(cxt);
-    }, () => cxt.error());
-}
-function checkAsyncKeyword({ schemaEnv }, def) {
-    if (def.async && !schemaEnv.$async)
-        throw new Error("async keyword in sync schema");
-}
-function useKeyword(gen, keyword, result) {
-    if (result === undefined)
-        throw new Error(`keyword "${keyword}" failed to compile`);
-    return gen.scopeValue("keyword", typeof result == "function" ? { ref: result } : { ref: result, code: (0, codegen_1.stringify)(result) });
-}
-function validSchemaType(schema, schemaType, allowUndefined = false) {
-    // TODO add tests
-    return (!schemaType.length ||
-        schemaType.some((st) => st === "array"
-            ? Array.isArray(schema)
-            : st === "object"
-                ? schema && typeof schema == "object" && !Array.isArray(schema)
-                : typeof schema == st || (allowUndefined && typeof schema == "undefined")));
-}
-exports.validSchemaType = validSchemaType;
-function validateKeywordUsage({ schema, opts, self, errSchemaPath }, def, keyword) {
-    /* istanbul ignore if */
-    if (Array.isArray(def.keyword) ? !def.keyword.includes(keyword) : def.keyword !== keyword) {
-        throw new Error("ajv implementation error");
-    }
-    const deps = def.dependencies;
-    if (deps === null || deps === void 0 ? void 0 : deps.some((kwd) => !Object.prototype.hasOwnProperty.call(schema, kwd))) {
-        throw new Error(`parent schema must have dependencies of ${keyword}: ${deps.join(",")}`);
-    }
-    if (def.validateSchema) {
-        const valid = def.validateSchema(schema[keyword]);
-        if (!valid) {
-            const msg = `keyword "${keyword}" value is invalid at path "${errSchemaPath}": ` +
-                self.errorsText(def.validateSchema.errors);
-            if (opts.validateSchema === "log")
-                self.logger.error(msg);
-            else
-                throw new Error(msg);
-        }
-    }
-}
-exports.validateKeywordUsage = validateKeywordUsage;
-//# sourceMappingURL=keyword.js.map
-
-/***/ }),
-
-/***/ 6200:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.extendSubschemaMode = exports.extendSubschemaData = exports.getSubschema = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-function getSubschema(it, { keyword, schemaProp, schema, schemaPath, errSchemaPath, topSchemaRef }) {
-    if (keyword !== undefined && schema !== undefined) {
-        throw new Error('both "keyword" and "schema" passed, only one allowed');
-    }
-    if (keyword !== undefined) {
-        const sch = it.schema[keyword];
-        return schemaProp === undefined
-            ? {
-                schema: sch,
-                schemaPath: (0, codegen_1._) `${it.schemaPath}${(0, codegen_1.getProperty)(keyword)}`,
-                errSchemaPath: `${it.errSchemaPath}/${keyword}`,
-            }
-            : {
-                schema: sch[schemaProp],
-                schemaPath: (0, codegen_1._) `${it.schemaPath}${(0, codegen_1.getProperty)(keyword)}${(0, codegen_1.getProperty)(schemaProp)}`,
-                errSchemaPath: `${it.errSchemaPath}/${keyword}/${(0, util_1.escapeFragment)(schemaProp)}`,
-            };
-    }
-    if (schema !== undefined) {
-        if (schemaPath === undefined || errSchemaPath === undefined || topSchemaRef === undefined) {
-            throw new Error('"schemaPath", "errSchemaPath" and "topSchemaRef" are required with "schema"');
-        }
-        return {
-            schema,
-            schemaPath,
-            topSchemaRef,
-            errSchemaPath,
-        };
-    }
-    throw new Error('either "keyword" or "schema" must be passed');
-}
-exports.getSubschema = getSubschema;
-function extendSubschemaData(subschema, it, { dataProp, dataPropType: dpType, data, dataTypes, propertyName }) {
-    if (data !== undefined && dataProp !== undefined) {
-        throw new Error('both "data" and "dataProp" passed, only one allowed');
-    }
-    const { gen } = it;
-    if (dataProp !== undefined) {
-        const { errorPath, dataPathArr, opts } = it;
-        const nextData = gen.let("data", (0, codegen_1._) `${it.data}${(0, codegen_1.getProperty)(dataProp)}`, true);
-        dataContextProps(nextData);
-        subschema.errorPath = (0, codegen_1.str) `${errorPath}${(0, util_1.getErrorPath)(dataProp, dpType, opts.jsPropertySyntax)}`;
-        subschema.parentDataProperty = (0, codegen_1._) `${dataProp}`;
-        subschema.dataPathArr = [...dataPathArr, subschema.parentDataProperty];
-    }
-    if (data !== undefined) {
-        const nextData = data instanceof codegen_1.Name ? data : gen.let("data", data, true); // replaceable if used once?
-        dataContextProps(nextData);
-        if (propertyName !== undefined)
-            subschema.propertyName = propertyName;
-        // TODO something is possibly wrong here with not changing parentDataProperty and not appending dataPathArr
-    }
-    if (dataTypes)
-        subschema.dataTypes = dataTypes;
-    function dataContextProps(_nextData) {
-        subschema.data = _nextData;
-        subschema.dataLevel = it.dataLevel + 1;
-        subschema.dataTypes = [];
-        it.definedProperties = new Set();
-        subschema.parentData = it.data;
-        subschema.dataNames = [...it.dataNames, _nextData];
-    }
-}
-exports.extendSubschemaData = extendSubschemaData;
-function extendSubschemaMode(subschema, { jtdDiscriminator, jtdMetadata, compositeRule, createErrors, allErrors }) {
-    if (compositeRule !== undefined)
-        subschema.compositeRule = compositeRule;
-    if (createErrors !== undefined)
-        subschema.createErrors = createErrors;
-    if (allErrors !== undefined)
-        subschema.allErrors = allErrors;
-    subschema.jtdDiscriminator = jtdDiscriminator; // not inherited
-    subschema.jtdMetadata = jtdMetadata; // not inherited
-}
-exports.extendSubschemaMode = extendSubschemaMode;
-//# sourceMappingURL=subschema.js.map
-
-/***/ }),
-
-/***/ 3893:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = void 0;
-var validate_1 = __nccwpck_require__(7881);
-Object.defineProperty(exports, "KeywordCxt", ({ enumerable: true, get: function () { return validate_1.KeywordCxt; } }));
-var codegen_1 = __nccwpck_require__(1436);
-Object.defineProperty(exports, "_", ({ enumerable: true, get: function () { return codegen_1._; } }));
-Object.defineProperty(exports, "str", ({ enumerable: true, get: function () { return codegen_1.str; } }));
-Object.defineProperty(exports, "stringify", ({ enumerable: true, get: function () { return codegen_1.stringify; } }));
-Object.defineProperty(exports, "nil", ({ enumerable: true, get: function () { return codegen_1.nil; } }));
-Object.defineProperty(exports, "Name", ({ enumerable: true, get: function () { return codegen_1.Name; } }));
-Object.defineProperty(exports, "CodeGen", ({ enumerable: true, get: function () { return codegen_1.CodeGen; } }));
-const validation_error_1 = __nccwpck_require__(3021);
-const ref_error_1 = __nccwpck_require__(3162);
-const rules_1 = __nccwpck_require__(7353);
-const compile_1 = __nccwpck_require__(2718);
-const codegen_2 = __nccwpck_require__(1436);
-const resolve_1 = __nccwpck_require__(4090);
-const dataType_1 = __nccwpck_require__(6685);
-const util_1 = __nccwpck_require__(4464);
-const $dataRefSchema = __nccwpck_require__(3837);
-const uri_1 = __nccwpck_require__(6285);
-const defaultRegExp = (str, flags) => new RegExp(str, flags);
-defaultRegExp.code = "new RegExp";
-const META_IGNORE_OPTIONS = ["removeAdditional", "useDefaults", "coerceTypes"];
-const EXT_SCOPE_NAMES = new Set([
-    "validate",
-    "serialize",
-    "parse",
-    "wrapper",
-    "root",
-    "schema",
-    "keyword",
-    "pattern",
-    "formats",
-    "validate$data",
-    "func",
-    "obj",
-    "Error",
-]);
-const removedOptions = {
-    errorDataPath: "",
-    format: "`validateFormats: false` can be used instead.",
-    nullable: '"nullable" keyword is supported by default.',
-    jsonPointers: "Deprecated jsPropertySyntax can be used instead.",
-    extendRefs: "Deprecated ignoreKeywordsWithRef can be used instead.",
-    missingRefs: "Pass empty schema with $id that should be ignored to ajv.addSchema.",
-    processCode: "Use option `code: {process: (code, schemaEnv: object) => string}`",
-    sourceCode: "Use option `code: {source: true}`",
-    strictDefaults: "It is default now, see option `strict`.",
-    strictKeywords: "It is default now, see option `strict`.",
-    uniqueItems: '"uniqueItems" keyword is always validated.',
-    unknownFormats: "Disable strict mode or pass `true` to `ajv.addFormat` (or `formats` option).",
-    cache: "Map is used as cache, schema object as key.",
-    serialize: "Map is used as cache, schema object as key.",
-    ajvErrors: "It is default now.",
-};
-const deprecatedOptions = {
-    ignoreKeywordsWithRef: "",
-    jsPropertySyntax: "",
-    unicode: '"minLength"/"maxLength" account for unicode characters by default.',
-};
-const MAX_EXPRESSION = 200;
-// eslint-disable-next-line complexity
-function requiredOptions(o) {
-    var _a, _b, _c, _d, _e, _f, _g, _h, _j, _k, _l, _m, _o, _p, _q, _r, _s, _t, _u, _v, _w, _x, _y, _z, _0;
-    const s = o.strict;
-    const _optz = (_a = o.code) === null || _a === void 0 ? void 0 : _a.optimize;
-    const optimize = _optz === true || _optz === undefined ? 1 : _optz || 0;
-    const regExp = (_c = (_b = o.code) === null || _b === void 0 ? void 0 : _b.regExp) !== null && _c !== void 0 ? _c : defaultRegExp;
-    const uriResolver = (_d = o.uriResolver) !== null && _d !== void 0 ? _d : uri_1.default;
-    return {
-        strictSchema: (_f = (_e = o.strictSchema) !== null && _e !== void 0 ? _e : s) !== null && _f !== void 0 ? _f : true,
-        strictNumbers: (_h = (_g = o.strictNumbers) !== null && _g !== void 0 ? _g : s) !== null && _h !== void 0 ? _h : true,
-        strictTypes: (_k = (_j = o.strictTypes) !== null && _j !== void 0 ? _j : s) !== null && _k !== void 0 ? _k : "log",
-        strictTuples: (_m = (_l = o.strictTuples) !== null && _l !== void 0 ? _l : s) !== null && _m !== void 0 ? _m : "log",
-        strictRequired: (_p = (_o = o.strictRequired) !== null && _o !== void 0 ? _o : s) !== null && _p !== void 0 ? _p : false,
-        code: o.code ? { ...o.code, optimize, regExp } : { optimize, regExp },
-        loopRequired: (_q = o.loopRequired) !== null && _q !== void 0 ? _q : MAX_EXPRESSION,
-        loopEnum: (_r = o.loopEnum) !== null && _r !== void 0 ? _r : MAX_EXPRESSION,
-        meta: (_s = o.meta) !== null && _s !== void 0 ? _s : true,
-        messages: (_t = o.messages) !== null && _t !== void 0 ? _t : true,
-        inlineRefs: (_u = o.inlineRefs) !== null && _u !== void 0 ? _u : true,
-        schemaId: (_v = o.schemaId) !== null && _v !== void 0 ? _v : "$id",
-        addUsedSchema: (_w = o.addUsedSchema) !== null && _w !== void 0 ? _w : true,
-        validateSchema: (_x = o.validateSchema) !== null && _x !== void 0 ? _x : true,
-        validateFormats: (_y = o.validateFormats) !== null && _y !== void 0 ? _y : true,
-        unicodeRegExp: (_z = o.unicodeRegExp) !== null && _z !== void 0 ? _z : true,
-        int32range: (_0 = o.int32range) !== null && _0 !== void 0 ? _0 : true,
-        uriResolver: uriResolver,
-    };
-}
-class Ajv {
-    constructor(opts = {}) {
-        this.schemas = {};
-        this.refs = {};
-        this.formats = Object.create(null);
-        this._compilations = new Set();
-        this._loading = {};
-        this._cache = new Map();
-        opts = this.opts = { ...opts, ...requiredOptions(opts) };
-        const { es5, lines } = this.opts.code;
-        this.scope = new codegen_2.ValueScope({ scope: {}, prefixes: EXT_SCOPE_NAMES, es5, lines });
-        this.logger = getLogger(opts.logger);
-        const formatOpt = opts.validateFormats;
-        opts.validateFormats = false;
-        this.RULES = (0, rules_1.getRules)();
-        checkOptions.call(this, removedOptions, opts, "NOT SUPPORTED");
-        checkOptions.call(this, deprecatedOptions, opts, "DEPRECATED", "warn");
-        this._metaOpts = getMetaSchemaOptions.call(this);
-        if (opts.formats)
-            addInitialFormats.call(this);
-        this._addVocabularies();
-        this._addDefaultMetaSchema();
-        if (opts.keywords)
-            addInitialKeywords.call(this, opts.keywords);
-        if (typeof opts.meta == "object")
-            this.addMetaSchema(opts.meta);
-        addInitialSchemas.call(this);
-        opts.validateFormats = formatOpt;
-    }
-    _addVocabularies() {
-        this.addKeyword("$async");
-    }
-    _addDefaultMetaSchema() {
-        const { $data, meta, schemaId } = this.opts;
-        let _dataRefSchema = $dataRefSchema;
-        if (schemaId === "id") {
-            _dataRefSchema = { ...$dataRefSchema };
-            _dataRefSchema.id = _dataRefSchema.$id;
-            delete _dataRefSchema.$id;
-        }
-        if (meta && $data)
-            this.addMetaSchema(_dataRefSchema, _dataRefSchema[schemaId], false);
-    }
-    defaultMeta() {
-        const { meta, schemaId } = this.opts;
-        return (this.opts.defaultMeta = typeof meta == "object" ? meta[schemaId] || meta : undefined);
-    }
-    validate(schemaKeyRef, // key, ref or schema object
-    // eslint-disable-next-line @typescript-eslint/no-redundant-type-constituents
-    data // to be validated
-    ) {
-        let v;
-        if (typeof schemaKeyRef == "string") {
-            v = this.getSchema(schemaKeyRef);
-            if (!v)
-                throw new Error(`no schema with key or ref "${schemaKeyRef}"`);
-        }
-        else {
-            v = this.compile(schemaKeyRef);
-        }
-        const valid = v(data);
-        if (!("$async" in v))
-            this.errors = v.errors;
-        return valid;
-    }
-    compile(schema, _meta) {
-        const sch = this._addSchema(schema, _meta);
-        return (sch.validate || this._compileSchemaEnv(sch));
-    }
-    compileAsync(schema, meta) {
-        if (typeof this.opts.loadSchema != "function") {
-            throw new Error("options.loadSchema should be a function");
-        }
-        const { loadSchema } = this.opts;
-        return runCompileAsync.call(this, schema, meta);
-        async function runCompileAsync(_schema, _meta) {
-            await loadMetaSchema.call(this, _schema.$schema);
-            const sch = this._addSchema(_schema, _meta);
-            return sch.validate || _compileAsync.call(this, sch);
-        }
-        async function loadMetaSchema($ref) {
-            if ($ref && !this.getSchema($ref)) {
-                await runCompileAsync.call(this, { $ref }, true);
-            }
-        }
-        async function _compileAsync(sch) {
-            try {
-                return this._compileSchemaEnv(sch);
-            }
-            catch (e) {
-                if (!(e instanceof ref_error_1.default))
-                    throw e;
-                checkLoaded.call(this, e);
-                await loadMissingSchema.call(this, e.missingSchema);
-                return _compileAsync.call(this, sch);
-            }
-        }
-        function checkLoaded({ missingSchema: ref, missingRef }) {
-            if (this.refs[ref]) {
-                throw new Error(`AnySchema ${ref} is loaded but ${missingRef} cannot be resolved`);
-            }
-        }
-        async function loadMissingSchema(ref) {
-            const _schema = await _loadSchema.call(this, ref);
-            if (!this.refs[ref])
-                await loadMetaSchema.call(this, _schema.$schema);
-            if (!this.refs[ref])
-                this.addSchema(_schema, ref, meta);
-        }
-        async function _loadSchema(ref) {
-            const p = this._loading[ref];
-            if (p)
-                return p;
-            try {
-                return await (this._loading[ref] = loadSchema(ref));
-            }
-            finally {
-                delete this._loading[ref];
-            }
-        }
-    }
-    // Adds schema to the instance
-    addSchema(schema, // If array is passed, `key` will be ignored
-    key, // Optional schema key. Can be passed to `validate` method instead of schema object or id/ref. One schema per instance can have empty `id` and `key`.
-    _meta, // true if schema is a meta-schema. Used internally, addMetaSchema should be used instead.
-    _validateSchema = this.opts.validateSchema // false to skip schema validation. Used internally, option validateSchema should be used instead.
-    ) {
-        if (Array.isArray(schema)) {
-            for (const sch of schema)
-                this.addSchema(sch, undefined, _meta, _validateSchema);
-            return this;
-        }
-        let id;
-        if (typeof schema === "object") {
-            const { schemaId } = this.opts;
-            id = schema[schemaId];
-            if (id !== undefined && typeof id != "string") {
-                throw new Error(`schema ${schemaId} must be string`);
-            }
-        }
-        key = (0, resolve_1.normalizeId)(key || id);
-        this._checkUnique(key);
-        this.schemas[key] = this._addSchema(schema, _meta, key, _validateSchema, true);
-        return this;
-    }
-    // Add schema that will be used to validate other schemas
-    // options in META_IGNORE_OPTIONS are alway set to false
-    addMetaSchema(schema, key, // schema key
-    _validateSchema = this.opts.validateSchema // false to skip schema validation, can be used to override validateSchema option for meta-schema
-    ) {
-        this.addSchema(schema, key, true, _validateSchema);
-        return this;
-    }
-    //  Validate schema against its meta-schema
-    validateSchema(schema, throwOrLogError) {
-        if (typeof schema == "boolean")
-            return true;
-        let $schema;
-        $schema = schema.$schema;
-        if ($schema !== undefined && typeof $schema != "string") {
-            throw new Error("$schema must be a string");
-        }
-        $schema = $schema || this.opts.defaultMeta || this.defaultMeta();
-        if (!$schema) {
-            this.logger.warn("meta-schema not available");
-            this.errors = null;
-            return true;
-        }
-        const valid = this.validate($schema, schema);
-        if (!valid && throwOrLogError) {
-            const message = "schema is invalid: " + this.errorsText();
-            if (this.opts.validateSchema === "log")
-                this.logger.error(message);
-            else
-                throw new Error(message);
-        }
-        return valid;
-    }
-    // Get compiled schema by `key` or `ref`.
-    // (`key` that was passed to `addSchema` or full schema reference - `schema.$id` or resolved id)
-    getSchema(keyRef) {
-        let sch;
-        while (typeof (sch = getSchEnv.call(this, keyRef)) == "string")
-            keyRef = sch;
-        if (sch === undefined) {
-            const { schemaId } = this.opts;
-            const root = new compile_1.SchemaEnv({ schema: {}, schemaId });
-            sch = compile_1.resolveSchema.call(this, root, keyRef);
-            if (!sch)
-                return;
-            this.refs[keyRef] = sch;
-        }
-        return (sch.validate || this._compileSchemaEnv(sch));
-    }
-    // Remove cached schema(s).
-    // If no parameter is passed all schemas but meta-schemas are removed.
-    // If RegExp is passed all schemas with key/id matching pattern but meta-schemas are removed.
-    // Even if schema is referenced by other schemas it still can be removed as other schemas have local references.
-    removeSchema(schemaKeyRef) {
-        if (schemaKeyRef instanceof RegExp) {
-            this._removeAllSchemas(this.schemas, schemaKeyRef);
-            this._removeAllSchemas(this.refs, schemaKeyRef);
-            return this;
-        }
-        switch (typeof schemaKeyRef) {
-            case "undefined":
-                this._removeAllSchemas(this.schemas);
-                this._removeAllSchemas(this.refs);
-                this._cache.clear();
-                return this;
-            case "string": {
-                const sch = getSchEnv.call(this, schemaKeyRef);
-                if (typeof sch == "object")
-                    this._cache.delete(sch.schema);
-                delete this.schemas[schemaKeyRef];
-                delete this.refs[schemaKeyRef];
-                return this;
-            }
-            case "object": {
-                const cacheKey = schemaKeyRef;
-                this._cache.delete(cacheKey);
-                let id = schemaKeyRef[this.opts.schemaId];
-                if (id) {
-                    id = (0, resolve_1.normalizeId)(id);
-                    delete this.schemas[id];
-                    delete this.refs[id];
-                }
-                return this;
-            }
-            default:
-                throw new Error("ajv.removeSchema: invalid parameter");
-        }
-    }
-    // add "vocabulary" - a collection of keywords
-    addVocabulary(definitions) {
-        for (const def of definitions)
-            this.addKeyword(def);
-        return this;
-    }
-    addKeyword(kwdOrDef, def // deprecated
-    ) {
-        let keyword;
-        if (typeof kwdOrDef == "string") {
-            keyword = kwdOrDef;
-            if (typeof def == "object") {
-                this.logger.warn("these parameters are deprecated, see docs for addKeyword");
-                def.keyword = keyword;
-            }
-        }
-        else if (typeof kwdOrDef == "object" && def === undefined) {
-            def = kwdOrDef;
-            keyword = def.keyword;
-            if (Array.isArray(keyword) && !keyword.length) {
-                throw new Error("addKeywords: keyword must be string or non-empty array");
-            }
-        }
-        else {
-            throw new Error("invalid addKeywords parameters");
-        }
-        checkKeyword.call(this, keyword, def);
-        if (!def) {
-            (0, util_1.eachItem)(keyword, (kwd) => addRule.call(this, kwd));
-            return this;
-        }
-        keywordMetaschema.call(this, def);
-        const definition = {
-            ...def,
-            type: (0, dataType_1.getJSONTypes)(def.type),
-            schemaType: (0, dataType_1.getJSONTypes)(def.schemaType),
-        };
-        (0, util_1.eachItem)(keyword, definition.type.length === 0
-            ? (k) => addRule.call(this, k, definition)
-            : (k) => definition.type.forEach((t) => addRule.call(this, k, definition, t)));
-        return this;
-    }
-    getKeyword(keyword) {
-        const rule = this.RULES.all[keyword];
-        return typeof rule == "object" ? rule.definition : !!rule;
-    }
-    // Remove keyword
-    removeKeyword(keyword) {
-        // TODO return type should be Ajv
-        const { RULES } = this;
-        delete RULES.keywords[keyword];
-        delete RULES.all[keyword];
-        for (const group of RULES.rules) {
-            const i = group.rules.findIndex((rule) => rule.keyword === keyword);
-            if (i >= 0)
-                group.rules.splice(i, 1);
-        }
-        return this;
-    }
-    // Add format
-    addFormat(name, format) {
-        if (typeof format == "string")
-            format = new RegExp(format);
-        this.formats[name] = format;
-        return this;
-    }
-    errorsText(errors = this.errors, // optional array of validation errors
-    { separator = ", ", dataVar = "data" } = {} // optional options with properties `separator` and `dataVar`
-    ) {
-        if (!errors || errors.length === 0)
-            return "No errors";
-        return errors
-            .map((e) => `${dataVar}${e.instancePath} ${e.message}`)
-            .reduce((text, msg) => text + separator + msg);
-    }
-    $dataMetaSchema(metaSchema, keywordsJsonPointers) {
-        const rules = this.RULES.all;
-        metaSchema = JSON.parse(JSON.stringify(metaSchema));
-        for (const jsonPointer of keywordsJsonPointers) {
-            const segments = jsonPointer.split("/").slice(1); // first segment is an empty string
-            let keywords = metaSchema;
-            for (const seg of segments)
-                keywords = keywords[seg];
-            for (const key in rules) {
-                const rule = rules[key];
-                if (typeof rule != "object")
-                    continue;
-                const { $data } = rule.definition;
-                const schema = keywords[key];
-                if ($data && schema)
-                    keywords[key] = schemaOrData(schema);
-            }
-        }
-        return metaSchema;
-    }
-    _removeAllSchemas(schemas, regex) {
-        for (const keyRef in schemas) {
-            const sch = schemas[keyRef];
-            if (!regex || regex.test(keyRef)) {
-                if (typeof sch == "string") {
-                    delete schemas[keyRef];
-                }
-                else if (sch && !sch.meta) {
-                    this._cache.delete(sch.schema);
-                    delete schemas[keyRef];
-                }
-            }
-        }
-    }
-    _addSchema(schema, meta, baseId, validateSchema = this.opts.validateSchema, addSchema = this.opts.addUsedSchema) {
-        let id;
-        const { schemaId } = this.opts;
-        if (typeof schema == "object") {
-            id = schema[schemaId];
-        }
-        else {
-            if (this.opts.jtd)
-                throw new Error("schema must be object");
-            else if (typeof schema != "boolean")
-                throw new Error("schema must be object or boolean");
-        }
-        let sch = this._cache.get(schema);
-        if (sch !== undefined)
-            return sch;
-        baseId = (0, resolve_1.normalizeId)(id || baseId);
-        const localRefs = resolve_1.getSchemaRefs.call(this, schema, baseId);
-        sch = new compile_1.SchemaEnv({ schema, schemaId, meta, baseId, localRefs });
-        this._cache.set(sch.schema, sch);
-        if (addSchema && !baseId.startsWith("#")) {
-            // TODO atm it is allowed to overwrite schemas without id (instead of not adding them)
-            if (baseId)
-                this._checkUnique(baseId);
-            this.refs[baseId] = sch;
-        }
-        if (validateSchema)
-            this.validateSchema(schema, true);
-        return sch;
-    }
-    _checkUnique(id) {
-        if (this.schemas[id] || this.refs[id]) {
-            throw new Error(`schema with key or id "${id}" already exists`);
-        }
-    }
-    _compileSchemaEnv(sch) {
-        if (sch.meta)
-            this._compileMetaSchema(sch);
-        else
-            compile_1.compileSchema.call(this, sch);
-        /* istanbul ignore if */
-        if (!sch.validate)
-            throw new Error("ajv implementation error");
-        return sch.validate;
-    }
-    _compileMetaSchema(sch) {
-        const currentOpts = this.opts;
-        this.opts = this._metaOpts;
-        try {
-            compile_1.compileSchema.call(this, sch);
-        }
-        finally {
-            this.opts = currentOpts;
-        }
-    }
-}
-Ajv.ValidationError = validation_error_1.default;
-Ajv.MissingRefError = ref_error_1.default;
-exports["default"] = Ajv;
-function checkOptions(checkOpts, options, msg, log = "error") {
-    for (const key in checkOpts) {
-        const opt = key;
-        if (opt in options)
-            this.logger[log](`${msg}: option ${key}. ${checkOpts[opt]}`);
-    }
-}
-function getSchEnv(keyRef) {
-    keyRef = (0, resolve_1.normalizeId)(keyRef); // TODO tests fail without this line
-    return this.schemas[keyRef] || this.refs[keyRef];
-}
-function addInitialSchemas() {
-    const optsSchemas = this.opts.schemas;
-    if (!optsSchemas)
-        return;
-    if (Array.isArray(optsSchemas))
-        this.addSchema(optsSchemas);
-    else
-        for (const key in optsSchemas)
-            this.addSchema(optsSchemas[key], key);
-}
-function addInitialFormats() {
-    for (const name in this.opts.formats) {
-        const format = this.opts.formats[name];
-        if (format)
-            this.addFormat(name, format);
-    }
-}
-function addInitialKeywords(defs) {
-    if (Array.isArray(defs)) {
-        this.addVocabulary(defs);
-        return;
-    }
-    this.logger.warn("keywords option as map is deprecated, pass array");
-    for (const keyword in defs) {
-        const def = defs[keyword];
-        if (!def.keyword)
-            def.keyword = keyword;
-        this.addKeyword(def);
-    }
-}
-function getMetaSchemaOptions() {
-    const metaOpts = { ...this.opts };
-    for (const opt of META_IGNORE_OPTIONS)
-        delete metaOpts[opt];
-    return metaOpts;
-}
-const noLogs = { log() { }, warn() { }, error() { } };
-function getLogger(logger) {
-    if (logger === false)
-        return noLogs;
-    if (logger === undefined)
-        return console;
-    if (logger.log && logger.warn && logger.error)
-        return logger;
-    throw new Error("logger must implement log, warn and error methods");
-}
-const KEYWORD_NAME = /^[a-z_$][a-z0-9_$:-]*$/i;
-function checkKeyword(keyword, def) {
-    const { RULES } = this;
-    (0, util_1.eachItem)(keyword, (kwd) => {
-        if (RULES.keywords[kwd])
-            throw new Error(`Keyword ${kwd} is already defined`);
-        if (!KEYWORD_NAME.test(kwd))
-            throw new Error(`Keyword ${kwd} has invalid name`);
-    });
-    if (!def)
-        return;
-    if (def.$data && !("code" in def || "validate" in def)) {
-        throw new Error('$data keyword must have "code" or "validate" function');
-    }
-}
-function addRule(keyword, definition, dataType) {
-    var _a;
-    const post = definition === null || definition === void 0 ? void 0 : definition.post;
-    if (dataType && post)
-        throw new Error('keyword with "post" flag cannot have "type"');
-    const { RULES } = this;
-    let ruleGroup = post ? RULES.post : RULES.rules.find(({ type: t }) => t === dataType);
-    if (!ruleGroup) {
-        ruleGroup = { type: dataType, rules: [] };
-        RULES.rules.push(ruleGroup);
-    }
-    RULES.keywords[keyword] = true;
-    if (!definition)
-        return;
-    const rule = {
-        keyword,
-        definition: {
-            ...definition,
-            type: (0, dataType_1.getJSONTypes)(definition.type),
-            schemaType: (0, dataType_1.getJSONTypes)(definition.schemaType),
-        },
-    };
-    if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule, definition.before);
-    else
-        ruleGroup.rules.push(rule);
-    RULES.all[keyword] = rule;
-    (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
-}
-function addBeforeRule(ruleGroup, rule, before) {
-    const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
-    if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule);
-    }
-    else {
-        ruleGroup.rules.push(rule);
-        this.logger.warn(`rule ${before} is not defined`);
-    }
-}
-function keywordMetaschema(def) {
-    let { metaSchema } = def;
-    if (metaSchema === undefined)
-        return;
-    if (def.$data && this.opts.$data)
-        metaSchema = schemaOrData(metaSchema);
-    def.validateSchema = this.compile(metaSchema, true);
-}
-const $dataRef = {
-    $ref: "https://raw.githubusercontent.com/ajv-validator/ajv/master/lib/refs/data.json#",
-};
-function schemaOrData(schema) {
-    return { anyOf: [schema, $dataRef] };
-}
-//# sourceMappingURL=core.js.map
-
-/***/ }),
-
-/***/ 3995:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const metaSchema = __nccwpck_require__(1678);
-const applicator = __nccwpck_require__(7216);
-const unevaluated = __nccwpck_require__(9547);
-const content = __nccwpck_require__(8226);
-const core = __nccwpck_require__(518);
-const format = __nccwpck_require__(4588);
-const metadata = __nccwpck_require__(5707);
-const validation = __nccwpck_require__(7082);
-const META_SUPPORT_DATA = ["/properties"];
-function addMetaSchema2020($data) {
-    ;
-    [
-        metaSchema,
-        applicator,
-        unevaluated,
-        content,
-        core,
-        with$data(this, format),
-        metadata,
-        with$data(this, validation),
-    ].forEach((sch) => this.addMetaSchema(sch, undefined, false));
-    return this;
-    function with$data(ajv, sch) {
-        return $data ? ajv.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
-    }
-}
-exports["default"] = addMetaSchema2020;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 4951:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-// https://github.com/ajv-validator/ajv/issues/889
-const equal = __nccwpck_require__(3430);
-equal.code = 'require("ajv/dist/runtime/equal").default';
-exports["default"] = equal;
-//# sourceMappingURL=equal.js.map
-
-/***/ }),
-
 /***/ 6214:
 /***/ ((__unused_webpack_module, exports) => {
 
+var __webpack_unused_export__;
 
-Object.defineProperty(exports, "__esModule", ({ value: true }));
+__webpack_unused_export__ = ({ value: true });
 // https://mathiasbynens.be/notes/javascript-encoding
 // https://github.com/bestiejs/punycode.js - punycode.ucs2.decode
 function ucs2length(str) {
@@ -3654,2546 +27,9 @@ function ucs2length(str) {
     }
     return length;
 }
-exports["default"] = ucs2length;
+exports.A = ucs2length;
 ucs2length.code = 'require("ajv/dist/runtime/ucs2length").default';
 //# sourceMappingURL=ucs2length.js.map
-
-/***/ }),
-
-/***/ 6285:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const uri = __nccwpck_require__(4352);
-uri.code = 'require("ajv/dist/runtime/uri").default';
-exports["default"] = uri;
-//# sourceMappingURL=uri.js.map
-
-/***/ }),
-
-/***/ 3021:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-class ValidationError extends Error {
-    constructor(errors) {
-        super("validation failed");
-        this.errors = errors;
-        this.ajv = this.validation = true;
-    }
-}
-exports["default"] = ValidationError;
-//# sourceMappingURL=validation_error.js.map
-
-/***/ }),
-
-/***/ 3448:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.validateAdditionalItems = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: ({ params: { len } }) => (0, codegen_1.str) `must NOT have more than ${len} items`,
-    params: ({ params: { len } }) => (0, codegen_1._) `{limit: ${len}}`,
-};
-const def = {
-    keyword: "additionalItems",
-    type: "array",
-    schemaType: ["boolean", "object"],
-    before: "uniqueItems",
-    error,
-    code(cxt) {
-        const { parentSchema, it } = cxt;
-        const { items } = parentSchema;
-        if (!Array.isArray(items)) {
-            (0, util_1.checkStrictMode)(it, '"additionalItems" is ignored when "items" is not an array of schemas');
-            return;
-        }
-        validateAdditionalItems(cxt, items);
-    },
-};
-function validateAdditionalItems(cxt, items) {
-    const { gen, schema, data, keyword, it } = cxt;
-    it.items = true;
-    const len = gen.const("len", (0, codegen_1._) `${data}.length`);
-    if (schema === false) {
-        cxt.setParams({ len: items.length });
-        cxt.pass((0, codegen_1._) `${len} <= ${items.length}`);
-    }
-    else if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
-        const valid = gen.var("valid", (0, codegen_1._) `${len} <= ${items.length}`); // TODO var
-        gen.if((0, codegen_1.not)(valid), () => validateItems(valid));
-        cxt.ok(valid);
-    }
-    function validateItems(valid) {
-        gen.forRange("i", items.length, len, (i) => {
-            cxt.subschema({ keyword, dataProp: i, dataPropType: util_1.Type.Num }, valid);
-            if (!it.allErrors)
-                gen.if((0, codegen_1.not)(valid), () => gen.break());
-        });
-    }
-}
-exports.validateAdditionalItems = validateAdditionalItems;
-exports["default"] = def;
-//# sourceMappingURL=additionalItems.js.map
-
-/***/ }),
-
-/***/ 2431:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const code_1 = __nccwpck_require__(8484);
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: "must NOT have additional properties",
-    params: ({ params }) => (0, codegen_1._) `{additionalProperty: ${params.additionalProperty}}`,
-};
-const def = {
-    keyword: "additionalProperties",
-    type: ["object"],
-    schemaType: ["boolean", "object"],
-    allowUndefined: true,
-    trackErrors: true,
-    error,
-    code(cxt) {
-        const { gen, schema, parentSchema, data, errsCount, it } = cxt;
-        /* istanbul ignore if */
-        if (!errsCount)
-            throw new Error("ajv implementation error");
-        const { allErrors, opts } = it;
-        it.props = true;
-        if (opts.removeAdditional !== "all" && (0, util_1.alwaysValidSchema)(it, schema))
-            return;
-        const props = (0, code_1.allSchemaProperties)(parentSchema.properties);
-        const patProps = (0, code_1.allSchemaProperties)(parentSchema.patternProperties);
-        checkAdditionalProperties();
-        cxt.ok((0, codegen_1._) `${errsCount} === ${names_1.default.errors}`);
-        function checkAdditionalProperties() {
-            gen.forIn("key", data, (key) => {
-                if (!props.length && !patProps.length)
-                    additionalPropertyCode(key);
-                else
-                    gen.if(isAdditional(key), () => additionalPropertyCode(key));
-            });
-        }
-        function isAdditional(key) {
-            let definedProp;
-            if (props.length > 8) {
-                // TODO maybe an option instead of hard-coded 8?
-                const propsSchema = (0, util_1.schemaRefOrVal)(it, parentSchema.properties, "properties");
-                definedProp = (0, code_1.isOwnProperty)(gen, propsSchema, key);
-            }
-            else if (props.length) {
-                definedProp = (0, codegen_1.or)(...props.map((p) => (0, codegen_1._) `${key} === ${p}`));
-            }
-            else {
-                definedProp = codegen_1.nil;
-            }
-            if (patProps.length) {
-                definedProp = (0, codegen_1.or)(definedProp, ...patProps.map((p) => (0, codegen_1._) `${(0, code_1.usePattern)(cxt, p)}.test(${key})`));
-            }
-            return (0, codegen_1.not)(definedProp);
-        }
-        function deleteAdditional(key) {
-            gen.code((0, codegen_1._) `delete ${data}[${key}]`);
-        }
-        function additionalPropertyCode(key) {
-            if (opts.removeAdditional === "all" || (opts.removeAdditional && schema === false)) {
-                deleteAdditional(key);
-                return;
-            }
-            if (schema === false) {
-                cxt.setParams({ additionalProperty: key });
-                cxt.error();
-                if (!allErrors)
-                    gen.break();
-                return;
-            }
-            if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
-                const valid = gen.name("valid");
-                if (opts.removeAdditional === "failing") {
-                    applyAdditionalSchema(key, valid, false);
-                    gen.if((0, codegen_1.not)(valid), () => {
-                        cxt.reset();
-                        deleteAdditional(key);
-                    });
-                }
-                else {
-                    applyAdditionalSchema(key, valid);
-                    if (!allErrors)
-                        gen.if((0, codegen_1.not)(valid), () => gen.break());
-                }
-            }
-        }
-        function applyAdditionalSchema(key, valid, errors) {
-            const subschema = {
-                keyword: "additionalProperties",
-                dataProp: key,
-                dataPropType: util_1.Type.Str,
-            };
-            if (errors === false) {
-                Object.assign(subschema, {
-                    compositeRule: true,
-                    createErrors: false,
-                    allErrors: false,
-                });
-            }
-            cxt.subschema(subschema, valid);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=additionalProperties.js.map
-
-/***/ }),
-
-/***/ 9205:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const util_1 = __nccwpck_require__(4464);
-const def = {
-    keyword: "allOf",
-    schemaType: "array",
-    code(cxt) {
-        const { gen, schema, it } = cxt;
-        /* istanbul ignore if */
-        if (!Array.isArray(schema))
-            throw new Error("ajv implementation error");
-        const valid = gen.name("valid");
-        schema.forEach((sch, i) => {
-            if ((0, util_1.alwaysValidSchema)(it, sch))
-                return;
-            const schCxt = cxt.subschema({ keyword: "allOf", schemaProp: i }, valid);
-            cxt.ok(valid);
-            cxt.mergeEvaluated(schCxt);
-        });
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=allOf.js.map
-
-/***/ }),
-
-/***/ 9380:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const code_1 = __nccwpck_require__(8484);
-const def = {
-    keyword: "anyOf",
-    schemaType: "array",
-    trackErrors: true,
-    code: code_1.validateUnion,
-    error: { message: "must match a schema in anyOf" },
-};
-exports["default"] = def;
-//# sourceMappingURL=anyOf.js.map
-
-/***/ }),
-
-/***/ 6182:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: ({ params: { min, max } }) => max === undefined
-        ? (0, codegen_1.str) `must contain at least ${min} valid item(s)`
-        : (0, codegen_1.str) `must contain at least ${min} and no more than ${max} valid item(s)`,
-    params: ({ params: { min, max } }) => max === undefined ? (0, codegen_1._) `{minContains: ${min}}` : (0, codegen_1._) `{minContains: ${min}, maxContains: ${max}}`,
-};
-const def = {
-    keyword: "contains",
-    type: "array",
-    schemaType: ["object", "boolean"],
-    before: "uniqueItems",
-    trackErrors: true,
-    error,
-    code(cxt) {
-        const { gen, schema, parentSchema, data, it } = cxt;
-        let min;
-        let max;
-        const { minContains, maxContains } = parentSchema;
-        if (it.opts.next) {
-            min = minContains === undefined ? 1 : minContains;
-            max = maxContains;
-        }
-        else {
-            min = 1;
-        }
-        const len = gen.const("len", (0, codegen_1._) `${data}.length`);
-        cxt.setParams({ min, max });
-        if (max === undefined && min === 0) {
-            (0, util_1.checkStrictMode)(it, `"minContains" == 0 without "maxContains": "contains" keyword ignored`);
-            return;
-        }
-        if (max !== undefined && min > max) {
-            (0, util_1.checkStrictMode)(it, `"minContains" > "maxContains" is always invalid`);
-            cxt.fail();
-            return;
-        }
-        if ((0, util_1.alwaysValidSchema)(it, schema)) {
-            let cond = (0, codegen_1._) `${len} >= ${min}`;
-            if (max !== undefined)
-                cond = (0, codegen_1._) `${cond} && ${len} <= ${max}`;
-            cxt.pass(cond);
-            return;
-        }
-        it.items = true;
-        const valid = gen.name("valid");
-        if (max === undefined && min === 1) {
-            validateItems(valid, () => gen.if(valid, () => gen.break()));
-        }
-        else if (min === 0) {
-            gen.let(valid, true);
-            if (max !== undefined)
-                gen.if((0, codegen_1._) `${data}.length > 0`, validateItemsWithCount);
-        }
-        else {
-            gen.let(valid, false);
-            validateItemsWithCount();
-        }
-        cxt.result(valid, () => cxt.reset());
-        function validateItemsWithCount() {
-            const schValid = gen.name("_valid");
-            const count = gen.let("count", 0);
-            validateItems(schValid, () => gen.if(schValid, () => checkLimits(count)));
-        }
-        function validateItems(_valid, block) {
-            gen.forRange("i", 0, len, (i) => {
-                cxt.subschema({
-                    keyword: "contains",
-                    dataProp: i,
-                    dataPropType: util_1.Type.Num,
-                    compositeRule: true,
-                }, _valid);
-                block();
-            });
-        }
-        function checkLimits(count) {
-            gen.code((0, codegen_1._) `${count}++`);
-            if (max === undefined) {
-                gen.if((0, codegen_1._) `${count} >= ${min}`, () => gen.assign(valid, true).break());
-            }
-            else {
-                gen.if((0, codegen_1._) `${count} > ${max}`, () => gen.assign(valid, false).break());
-                if (min === 1)
-                    gen.assign(valid, true);
-                else
-                    gen.if((0, codegen_1._) `${count} >= ${min}`, () => gen.assign(valid, true));
-            }
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=contains.js.map
-
-/***/ }),
-
-/***/ 5826:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.validateSchemaDeps = exports.validatePropertyDeps = exports.error = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const code_1 = __nccwpck_require__(8484);
-exports.error = {
-    message: ({ params: { property, depsCount, deps } }) => {
-        const property_ies = depsCount === 1 ? "property" : "properties";
-        return (0, codegen_1.str) `must have ${property_ies} ${deps} when property ${property} is present`;
-    },
-    params: ({ params: { property, depsCount, deps, missingProperty } }) => (0, codegen_1._) `{property: ${property},
-    missingProperty: ${missingProperty},
-    depsCount: ${depsCount},
-    deps: ${deps}}`, // TODO change to reference
-};
-const def = {
-    keyword: "dependencies",
-    type: "object",
-    schemaType: "object",
-    error: exports.error,
-    code(cxt) {
-        const [propDeps, schDeps] = splitDependencies(cxt);
-        validatePropertyDeps(cxt, propDeps);
-        validateSchemaDeps(cxt, schDeps);
-    },
-};
-function splitDependencies({ schema }) {
-    const propertyDeps = {};
-    const schemaDeps = {};
-    for (const key in schema) {
-        if (key === "__proto__")
-            continue;
-        const deps = Array.isArray(schema[key]) ? propertyDeps : schemaDeps;
-        deps[key] = schema[key];
-    }
-    return [propertyDeps, schemaDeps];
-}
-function validatePropertyDeps(cxt, propertyDeps = cxt.schema) {
-    const { gen, data, it } = cxt;
-    if (Object.keys(propertyDeps).length === 0)
-        return;
-    const missing = gen.let("missing");
-    for (const prop in propertyDeps) {
-        const deps = propertyDeps[prop];
-        if (deps.length === 0)
-            continue;
-        const hasProperty = (0, code_1.propertyInData)(gen, data, prop, it.opts.ownProperties);
-        cxt.setParams({
-            property: prop,
-            depsCount: deps.length,
-            deps: deps.join(", "),
-        });
-        if (it.allErrors) {
-            gen.if(hasProperty, () => {
-                for (const depProp of deps) {
-                    (0, code_1.checkReportMissingProp)(cxt, depProp);
-                }
-            });
-        }
-        else {
-            gen.if((0, codegen_1._) `${hasProperty} && (${(0, code_1.checkMissingProp)(cxt, deps, missing)})`);
-            (0, code_1.reportMissingProp)(cxt, missing);
-            gen.else();
-        }
-    }
-}
-exports.validatePropertyDeps = validatePropertyDeps;
-function validateSchemaDeps(cxt, schemaDeps = cxt.schema) {
-    const { gen, data, keyword, it } = cxt;
-    const valid = gen.name("valid");
-    for (const prop in schemaDeps) {
-        if ((0, util_1.alwaysValidSchema)(it, schemaDeps[prop]))
-            continue;
-        gen.if((0, code_1.propertyInData)(gen, data, prop, it.opts.ownProperties), () => {
-            const schCxt = cxt.subschema({ keyword, schemaProp: prop }, valid);
-            cxt.mergeValidEvaluated(schCxt, valid);
-        }, () => gen.var(valid, true) // TODO var
-        );
-        cxt.ok(valid);
-    }
-}
-exports.validateSchemaDeps = validateSchemaDeps;
-exports["default"] = def;
-//# sourceMappingURL=dependencies.js.map
-
-/***/ }),
-
-/***/ 3818:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dependencies_1 = __nccwpck_require__(5826);
-const def = {
-    keyword: "dependentSchemas",
-    type: "object",
-    schemaType: "object",
-    code: (cxt) => (0, dependencies_1.validateSchemaDeps)(cxt),
-};
-exports["default"] = def;
-//# sourceMappingURL=dependentSchemas.js.map
-
-/***/ }),
-
-/***/ 8584:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: ({ params }) => (0, codegen_1.str) `must match "${params.ifClause}" schema`,
-    params: ({ params }) => (0, codegen_1._) `{failingKeyword: ${params.ifClause}}`,
-};
-const def = {
-    keyword: "if",
-    schemaType: ["object", "boolean"],
-    trackErrors: true,
-    error,
-    code(cxt) {
-        const { gen, parentSchema, it } = cxt;
-        if (parentSchema.then === undefined && parentSchema.else === undefined) {
-            (0, util_1.checkStrictMode)(it, '"if" without "then" and "else" is ignored');
-        }
-        const hasThen = hasSchema(it, "then");
-        const hasElse = hasSchema(it, "else");
-        if (!hasThen && !hasElse)
-            return;
-        const valid = gen.let("valid", true);
-        const schValid = gen.name("_valid");
-        validateIf();
-        cxt.reset();
-        if (hasThen && hasElse) {
-            const ifClause = gen.let("ifClause");
-            cxt.setParams({ ifClause });
-            gen.if(schValid, validateClause("then", ifClause), validateClause("else", ifClause));
-        }
-        else if (hasThen) {
-            gen.if(schValid, validateClause("then"));
-        }
-        else {
-            gen.if((0, codegen_1.not)(schValid), validateClause("else"));
-        }
-        cxt.pass(valid, () => cxt.error(true));
-        function validateIf() {
-            const schCxt = cxt.subschema({
-                keyword: "if",
-                compositeRule: true,
-                createErrors: false,
-                allErrors: false,
-            }, schValid);
-            cxt.mergeEvaluated(schCxt);
-        }
-        function validateClause(keyword, ifClause) {
-            return () => {
-                const schCxt = cxt.subschema({ keyword }, schValid);
-                gen.assign(valid, schValid);
-                cxt.mergeValidEvaluated(schCxt, valid);
-                if (ifClause)
-                    gen.assign(ifClause, (0, codegen_1._) `${keyword}`);
-                else
-                    cxt.setParams({ ifClause: keyword });
-            };
-        }
-    },
-};
-function hasSchema(it, keyword) {
-    const schema = it.schema[keyword];
-    return schema !== undefined && !(0, util_1.alwaysValidSchema)(it, schema);
-}
-exports["default"] = def;
-//# sourceMappingURL=if.js.map
-
-/***/ }),
-
-/***/ 8775:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const additionalItems_1 = __nccwpck_require__(3448);
-const prefixItems_1 = __nccwpck_require__(6467);
-const items_1 = __nccwpck_require__(5791);
-const items2020_1 = __nccwpck_require__(2959);
-const contains_1 = __nccwpck_require__(6182);
-const dependencies_1 = __nccwpck_require__(5826);
-const propertyNames_1 = __nccwpck_require__(1372);
-const additionalProperties_1 = __nccwpck_require__(2431);
-const properties_1 = __nccwpck_require__(6397);
-const patternProperties_1 = __nccwpck_require__(664);
-const not_1 = __nccwpck_require__(8350);
-const anyOf_1 = __nccwpck_require__(9380);
-const oneOf_1 = __nccwpck_require__(2490);
-const allOf_1 = __nccwpck_require__(9205);
-const if_1 = __nccwpck_require__(8584);
-const thenElse_1 = __nccwpck_require__(6829);
-function getApplicator(draft2020 = false) {
-    const applicator = [
-        // any
-        not_1.default,
-        anyOf_1.default,
-        oneOf_1.default,
-        allOf_1.default,
-        if_1.default,
-        thenElse_1.default,
-        // object
-        propertyNames_1.default,
-        additionalProperties_1.default,
-        dependencies_1.default,
-        properties_1.default,
-        patternProperties_1.default,
-    ];
-    // array
-    if (draft2020)
-        applicator.push(prefixItems_1.default, items2020_1.default);
-    else
-        applicator.push(additionalItems_1.default, items_1.default);
-    applicator.push(contains_1.default);
-    return applicator;
-}
-exports["default"] = getApplicator;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 5791:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.validateTuple = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const code_1 = __nccwpck_require__(8484);
-const def = {
-    keyword: "items",
-    type: "array",
-    schemaType: ["object", "array", "boolean"],
-    before: "uniqueItems",
-    code(cxt) {
-        const { schema, it } = cxt;
-        if (Array.isArray(schema))
-            return validateTuple(cxt, "additionalItems", schema);
-        it.items = true;
-        if ((0, util_1.alwaysValidSchema)(it, schema))
-            return;
-        cxt.ok((0, code_1.validateArray)(cxt));
-    },
-};
-function validateTuple(cxt, extraItems, schArr = cxt.schema) {
-    const { gen, parentSchema, data, keyword, it } = cxt;
-    checkStrictTuple(parentSchema);
-    if (it.opts.unevaluated && schArr.length && it.items !== true) {
-        it.items = util_1.mergeEvaluated.items(gen, schArr.length, it.items);
-    }
-    const valid = gen.name("valid");
-    const len = gen.const("len", (0, codegen_1._) `${data}.length`);
-    schArr.forEach((sch, i) => {
-        if ((0, util_1.alwaysValidSchema)(it, sch))
-            return;
-        gen.if((0, codegen_1._) `${len} > ${i}`, () => cxt.subschema({
-            keyword,
-            schemaProp: i,
-            dataProp: i,
-        }, valid));
-        cxt.ok(valid);
-    });
-    function checkStrictTuple(sch) {
-        const { opts, errSchemaPath } = it;
-        const l = schArr.length;
-        const fullTuple = l === sch.minItems && (l === sch.maxItems || sch[extraItems] === false);
-        if (opts.strictTuples && !fullTuple) {
-            const msg = `"${keyword}" is ${l}-tuple, but minItems or maxItems/${extraItems} are not specified or different at path "${errSchemaPath}"`;
-            (0, util_1.checkStrictMode)(it, msg, opts.strictTuples);
-        }
-    }
-}
-exports.validateTuple = validateTuple;
-exports["default"] = def;
-//# sourceMappingURL=items.js.map
-
-/***/ }),
-
-/***/ 2959:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const code_1 = __nccwpck_require__(8484);
-const additionalItems_1 = __nccwpck_require__(3448);
-const error = {
-    message: ({ params: { len } }) => (0, codegen_1.str) `must NOT have more than ${len} items`,
-    params: ({ params: { len } }) => (0, codegen_1._) `{limit: ${len}}`,
-};
-const def = {
-    keyword: "items",
-    type: "array",
-    schemaType: ["object", "boolean"],
-    before: "uniqueItems",
-    error,
-    code(cxt) {
-        const { schema, parentSchema, it } = cxt;
-        const { prefixItems } = parentSchema;
-        it.items = true;
-        if ((0, util_1.alwaysValidSchema)(it, schema))
-            return;
-        if (prefixItems)
-            (0, additionalItems_1.validateAdditionalItems)(cxt, prefixItems);
-        else
-            cxt.ok((0, code_1.validateArray)(cxt));
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=items2020.js.map
-
-/***/ }),
-
-/***/ 8350:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const util_1 = __nccwpck_require__(4464);
-const def = {
-    keyword: "not",
-    schemaType: ["object", "boolean"],
-    trackErrors: true,
-    code(cxt) {
-        const { gen, schema, it } = cxt;
-        if ((0, util_1.alwaysValidSchema)(it, schema)) {
-            cxt.fail();
-            return;
-        }
-        const valid = gen.name("valid");
-        cxt.subschema({
-            keyword: "not",
-            compositeRule: true,
-            createErrors: false,
-            allErrors: false,
-        }, valid);
-        cxt.failResult(valid, () => cxt.reset(), () => cxt.error());
-    },
-    error: { message: "must NOT be valid" },
-};
-exports["default"] = def;
-//# sourceMappingURL=not.js.map
-
-/***/ }),
-
-/***/ 2490:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: "must match exactly one schema in oneOf",
-    params: ({ params }) => (0, codegen_1._) `{passingSchemas: ${params.passing}}`,
-};
-const def = {
-    keyword: "oneOf",
-    schemaType: "array",
-    trackErrors: true,
-    error,
-    code(cxt) {
-        const { gen, schema, parentSchema, it } = cxt;
-        /* istanbul ignore if */
-        if (!Array.isArray(schema))
-            throw new Error("ajv implementation error");
-        if (it.opts.discriminator && parentSchema.discriminator)
-            return;
-        const schArr = schema;
-        const valid = gen.let("valid", false);
-        const passing = gen.let("passing", null);
-        const schValid = gen.name("_valid");
-        cxt.setParams({ passing });
-        // TODO possibly fail straight away (with warning or exception) if there are two empty always valid schemas
-        gen.block(validateOneOf);
-        cxt.result(valid, () => cxt.reset(), () => cxt.error(true));
-        function validateOneOf() {
-            schArr.forEach((sch, i) => {
-                let schCxt;
-                if ((0, util_1.alwaysValidSchema)(it, sch)) {
-                    gen.var(schValid, true);
-                }
-                else {
-                    schCxt = cxt.subschema({
-                        keyword: "oneOf",
-                        schemaProp: i,
-                        compositeRule: true,
-                    }, schValid);
-                }
-                if (i > 0) {
-                    gen
-                        .if((0, codegen_1._) `${schValid} && ${valid}`)
-                        .assign(valid, false)
-                        .assign(passing, (0, codegen_1._) `[${passing}, ${i}]`)
-                        .else();
-                }
-                gen.if(schValid, () => {
-                    gen.assign(valid, true);
-                    gen.assign(passing, i);
-                    if (schCxt)
-                        cxt.mergeEvaluated(schCxt, codegen_1.Name);
-                });
-            });
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=oneOf.js.map
-
-/***/ }),
-
-/***/ 664:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const code_1 = __nccwpck_require__(8484);
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const util_2 = __nccwpck_require__(4464);
-const def = {
-    keyword: "patternProperties",
-    type: "object",
-    schemaType: "object",
-    code(cxt) {
-        const { gen, schema, data, parentSchema, it } = cxt;
-        const { opts } = it;
-        const patterns = (0, code_1.allSchemaProperties)(schema);
-        const alwaysValidPatterns = patterns.filter((p) => (0, util_1.alwaysValidSchema)(it, schema[p]));
-        if (patterns.length === 0 ||
-            (alwaysValidPatterns.length === patterns.length &&
-                (!it.opts.unevaluated || it.props === true))) {
-            return;
-        }
-        const checkProperties = opts.strictSchema && !opts.allowMatchingProperties && parentSchema.properties;
-        const valid = gen.name("valid");
-        if (it.props !== true && !(it.props instanceof codegen_1.Name)) {
-            it.props = (0, util_2.evaluatedPropsToName)(gen, it.props);
-        }
-        const { props } = it;
-        validatePatternProperties();
-        function validatePatternProperties() {
-            for (const pat of patterns) {
-                if (checkProperties)
-                    checkMatchingProperties(pat);
-                if (it.allErrors) {
-                    validateProperties(pat);
-                }
-                else {
-                    gen.var(valid, true); // TODO var
-                    validateProperties(pat);
-                    gen.if(valid);
-                }
-            }
-        }
-        function checkMatchingProperties(pat) {
-            for (const prop in checkProperties) {
-                if (new RegExp(pat).test(prop)) {
-                    (0, util_1.checkStrictMode)(it, `property ${prop} matches pattern ${pat} (use allowMatchingProperties)`);
-                }
-            }
-        }
-        function validateProperties(pat) {
-            gen.forIn("key", data, (key) => {
-                gen.if((0, codegen_1._) `${(0, code_1.usePattern)(cxt, pat)}.test(${key})`, () => {
-                    const alwaysValid = alwaysValidPatterns.includes(pat);
-                    if (!alwaysValid) {
-                        cxt.subschema({
-                            keyword: "patternProperties",
-                            schemaProp: pat,
-                            dataProp: key,
-                            dataPropType: util_2.Type.Str,
-                        }, valid);
-                    }
-                    if (it.opts.unevaluated && props !== true) {
-                        gen.assign((0, codegen_1._) `${props}[${key}]`, true);
-                    }
-                    else if (!alwaysValid && !it.allErrors) {
-                        // can short-circuit if `unevaluatedProperties` is not supported (opts.next === false)
-                        // or if all properties were evaluated (props === true)
-                        gen.if((0, codegen_1.not)(valid), () => gen.break());
-                    }
-                });
-            });
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=patternProperties.js.map
-
-/***/ }),
-
-/***/ 6467:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const items_1 = __nccwpck_require__(5791);
-const def = {
-    keyword: "prefixItems",
-    type: "array",
-    schemaType: ["array"],
-    before: "uniqueItems",
-    code: (cxt) => (0, items_1.validateTuple)(cxt, "items"),
-};
-exports["default"] = def;
-//# sourceMappingURL=prefixItems.js.map
-
-/***/ }),
-
-/***/ 6397:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const validate_1 = __nccwpck_require__(7881);
-const code_1 = __nccwpck_require__(8484);
-const util_1 = __nccwpck_require__(4464);
-const additionalProperties_1 = __nccwpck_require__(2431);
-const def = {
-    keyword: "properties",
-    type: "object",
-    schemaType: "object",
-    code(cxt) {
-        const { gen, schema, parentSchema, data, it } = cxt;
-        if (it.opts.removeAdditional === "all" && parentSchema.additionalProperties === undefined) {
-            additionalProperties_1.default.code(new validate_1.KeywordCxt(it, additionalProperties_1.default, "additionalProperties"));
-        }
-        const allProps = (0, code_1.allSchemaProperties)(schema);
-        for (const prop of allProps) {
-            it.definedProperties.add(prop);
-        }
-        if (it.opts.unevaluated && allProps.length && it.props !== true) {
-            it.props = util_1.mergeEvaluated.props(gen, (0, util_1.toHash)(allProps), it.props);
-        }
-        const properties = allProps.filter((p) => !(0, util_1.alwaysValidSchema)(it, schema[p]));
-        if (properties.length === 0)
-            return;
-        const valid = gen.name("valid");
-        for (const prop of properties) {
-            if (hasDefault(prop)) {
-                applyPropertySchema(prop);
-            }
-            else {
-                gen.if((0, code_1.propertyInData)(gen, data, prop, it.opts.ownProperties));
-                applyPropertySchema(prop);
-                if (!it.allErrors)
-                    gen.else().var(valid, true);
-                gen.endIf();
-            }
-            cxt.it.definedProperties.add(prop);
-            cxt.ok(valid);
-        }
-        function hasDefault(prop) {
-            return it.opts.useDefaults && !it.compositeRule && schema[prop].default !== undefined;
-        }
-        function applyPropertySchema(prop) {
-            cxt.subschema({
-                keyword: "properties",
-                schemaProp: prop,
-                dataProp: prop,
-            }, valid);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=properties.js.map
-
-/***/ }),
-
-/***/ 1372:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: "property name must be valid",
-    params: ({ params }) => (0, codegen_1._) `{propertyName: ${params.propertyName}}`,
-};
-const def = {
-    keyword: "propertyNames",
-    type: "object",
-    schemaType: ["object", "boolean"],
-    error,
-    code(cxt) {
-        const { gen, schema, data, it } = cxt;
-        if ((0, util_1.alwaysValidSchema)(it, schema))
-            return;
-        const valid = gen.name("valid");
-        gen.forIn("key", data, (key) => {
-            cxt.setParams({ propertyName: key });
-            cxt.subschema({
-                keyword: "propertyNames",
-                data: key,
-                dataTypes: ["string"],
-                propertyName: key,
-                compositeRule: true,
-            }, valid);
-            gen.if((0, codegen_1.not)(valid), () => {
-                cxt.error(true);
-                if (!it.allErrors)
-                    gen.break();
-            });
-        });
-        cxt.ok(valid);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=propertyNames.js.map
-
-/***/ }),
-
-/***/ 6829:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const util_1 = __nccwpck_require__(4464);
-const def = {
-    keyword: ["then", "else"],
-    schemaType: ["object", "boolean"],
-    code({ keyword, parentSchema, it }) {
-        if (parentSchema.if === undefined)
-            (0, util_1.checkStrictMode)(it, `"${keyword}" without "if" is ignored`);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=thenElse.js.map
-
-/***/ }),
-
-/***/ 8484:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.validateUnion = exports.validateArray = exports.usePattern = exports.callValidateCode = exports.schemaProperties = exports.allSchemaProperties = exports.noPropertyInData = exports.propertyInData = exports.isOwnProperty = exports.hasPropFunc = exports.reportMissingProp = exports.checkMissingProp = exports.checkReportMissingProp = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const names_1 = __nccwpck_require__(630);
-const util_2 = __nccwpck_require__(4464);
-function checkReportMissingProp(cxt, prop) {
-    const { gen, data, it } = cxt;
-    gen.if(noPropertyInData(gen, data, prop, it.opts.ownProperties), () => {
-        cxt.setParams({ missingProperty: (0, codegen_1._) `${prop}` }, true);
-        cxt.error();
-    });
-}
-exports.checkReportMissingProp = checkReportMissingProp;
-function checkMissingProp({ gen, data, it: { opts } }, properties, missing) {
-    return (0, codegen_1.or)(...properties.map((prop) => (0, codegen_1.and)(noPropertyInData(gen, data, prop, opts.ownProperties), (0, codegen_1._) `${missing} = ${prop}`)));
-}
-exports.checkMissingProp = checkMissingProp;
-function reportMissingProp(cxt, missing) {
-    cxt.setParams({ missingProperty: missing }, true);
-    cxt.error();
-}
-exports.reportMissingProp = reportMissingProp;
-function hasPropFunc(gen) {
-    return gen.scopeValue("func", {
-        // eslint-disable-next-line @typescript-eslint/unbound-method
-        ref: Object.prototype.hasOwnProperty,
-        code: (0, codegen_1._) `Object.prototype.hasOwnProperty`,
-    });
-}
-exports.hasPropFunc = hasPropFunc;
-function isOwnProperty(gen, data, property) {
-    return (0, codegen_1._) `${hasPropFunc(gen)}.call(${data}, ${property})`;
-}
-exports.isOwnProperty = isOwnProperty;
-function propertyInData(gen, data, property, ownProperties) {
-    const cond = (0, codegen_1._) `${data}${(0, codegen_1.getProperty)(property)} !== undefined`;
-    return ownProperties ? (0, codegen_1._) `${cond} && ${isOwnProperty(gen, data, property)}` : cond;
-}
-exports.propertyInData = propertyInData;
-function noPropertyInData(gen, data, property, ownProperties) {
-    const cond = (0, codegen_1._) `${data}${(0, codegen_1.getProperty)(property)} === undefined`;
-    return ownProperties ? (0, codegen_1.or)(cond, (0, codegen_1.not)(isOwnProperty(gen, data, property))) : cond;
-}
-exports.noPropertyInData = noPropertyInData;
-function allSchemaProperties(schemaMap) {
-    return schemaMap ? Object.keys(schemaMap).filter((p) => p !== "__proto__") : [];
-}
-exports.allSchemaProperties = allSchemaProperties;
-function schemaProperties(it, schemaMap) {
-    return allSchemaProperties(schemaMap).filter((p) => !(0, util_1.alwaysValidSchema)(it, schemaMap[p]));
-}
-exports.schemaProperties = schemaProperties;
-function callValidateCode({ schemaCode, data, it: { gen, topSchemaRef, schemaPath, errorPath }, it }, func, context, passSchema) {
-    const dataAndSchema = passSchema ? (0, codegen_1._) `${schemaCode}, ${data}, ${topSchemaRef}${schemaPath}` : data;
-    const valCxt = [
-        [names_1.default.instancePath, (0, codegen_1.strConcat)(names_1.default.instancePath, errorPath)],
-        [names_1.default.parentData, it.parentData],
-        [names_1.default.parentDataProperty, it.parentDataProperty],
-        [names_1.default.rootData, names_1.default.rootData],
-    ];
-    if (it.opts.dynamicRef)
-        valCxt.push([names_1.default.dynamicAnchors, names_1.default.dynamicAnchors]);
-    const args = (0, codegen_1._) `${dataAndSchema}, ${gen.object(...valCxt)}`;
-    return context !== codegen_1.nil ? (0, codegen_1._) `${func}.call(${context}, ${args})` : (0, codegen_1._) `${func}(${args})`;
-}
-exports.callValidateCode = callValidateCode;
-const newRegExp = (0, codegen_1._) `new RegExp`;
-function usePattern({ gen, it: { opts } }, pattern) {
-    const u = opts.unicodeRegExp ? "u" : "";
-    const { regExp } = opts.code;
-    const rx = regExp(pattern, u);
-    return gen.scopeValue("pattern", {
-        key: rx.toString(),
-        ref: rx,
-        code: (0, codegen_1._) `${regExp.code === "new RegExp" ? newRegExp : (0, util_2.useFunc)(gen, regExp)}(${pattern}, ${u})`,
-    });
-}
-exports.usePattern = usePattern;
-function validateArray(cxt) {
-    const { gen, data, keyword, it } = cxt;
-    const valid = gen.name("valid");
-    if (it.allErrors) {
-        const validArr = gen.let("valid", true);
-        validateItems(() => gen.assign(validArr, false));
-        return validArr;
-    }
-    gen.var(valid, true);
-    validateItems(() => gen.break());
-    return valid;
-    function validateItems(notValid) {
-        const len = gen.const("len", (0, codegen_1._) `${data}.length`);
-        gen.forRange("i", 0, len, (i) => {
-            cxt.subschema({
-                keyword,
-                dataProp: i,
-                dataPropType: util_1.Type.Num,
-            }, valid);
-            gen.if((0, codegen_1.not)(valid), notValid);
-        });
-    }
-}
-exports.validateArray = validateArray;
-function validateUnion(cxt) {
-    const { gen, schema, keyword, it } = cxt;
-    /* istanbul ignore if */
-    if (!Array.isArray(schema))
-        throw new Error("ajv implementation error");
-    const alwaysValid = schema.some((sch) => (0, util_1.alwaysValidSchema)(it, sch));
-    if (alwaysValid && !it.opts.unevaluated)
-        return;
-    const valid = gen.let("valid", false);
-    const schValid = gen.name("_valid");
-    gen.block(() => schema.forEach((_sch, i) => {
-        const schCxt = cxt.subschema({
-            keyword,
-            schemaProp: i,
-            compositeRule: true,
-        }, schValid);
-        gen.assign(valid, (0, codegen_1._) `${valid} || ${schValid}`);
-        const merged = cxt.mergeValidEvaluated(schCxt, schValid);
-        // can short-circuit if `unevaluatedProperties/Items` not supported (opts.unevaluated !== true)
-        // or if all properties and items were evaluated (it.props === true && it.items === true)
-        if (!merged)
-            gen.if((0, codegen_1.not)(valid));
-    }));
-    cxt.result(valid, () => cxt.reset(), () => cxt.error(true));
-}
-exports.validateUnion = validateUnion;
-//# sourceMappingURL=code.js.map
-
-/***/ }),
-
-/***/ 9872:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const def = {
-    keyword: "id",
-    code() {
-        throw new Error('NOT SUPPORTED: keyword "id", use "$id" for schema ID');
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=id.js.map
-
-/***/ }),
-
-/***/ 7397:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const id_1 = __nccwpck_require__(9872);
-const ref_1 = __nccwpck_require__(2996);
-const core = [
-    "$schema",
-    "$id",
-    "$defs",
-    "$vocabulary",
-    { keyword: "$comment" },
-    "definitions",
-    id_1.default,
-    ref_1.default,
-];
-exports["default"] = core;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 2996:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.callRef = exports.getValidate = void 0;
-const ref_error_1 = __nccwpck_require__(3162);
-const code_1 = __nccwpck_require__(8484);
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const compile_1 = __nccwpck_require__(2718);
-const util_1 = __nccwpck_require__(4464);
-const def = {
-    keyword: "$ref",
-    schemaType: "string",
-    code(cxt) {
-        const { gen, schema: $ref, it } = cxt;
-        const { baseId, schemaEnv: env, validateName, opts, self } = it;
-        const { root } = env;
-        if (($ref === "#" || $ref === "#/") && baseId === root.baseId)
-            return callRootRef();
-        const schOrEnv = compile_1.resolveRef.call(self, root, baseId, $ref);
-        if (schOrEnv === undefined)
-            throw new ref_error_1.default(it.opts.uriResolver, baseId, $ref);
-        if (schOrEnv instanceof compile_1.SchemaEnv)
-            return callValidate(schOrEnv);
-        return inlineRefSchema(schOrEnv);
-        function callRootRef() {
-            if (env === root)
-                return callRef(cxt, validateName, env, env.$async);
-            const rootName = gen.scopeValue("root", { ref: root });
-            return callRef(cxt, (0, codegen_1._) `${rootName}.validate`, root, root.$async);
-        }
-        function callValidate(sch) {
-            const v = getValidate(cxt, sch);
-            callRef(cxt, v, sch, sch.$async);
-        }
-        function inlineRefSchema(sch) {
-            const schName = gen.scopeValue("schema", opts.code.source === true ? { ref: sch, code: (0, codegen_1.stringify)(sch) } : { ref: sch });
-            const valid = gen.name("valid");
-            const schCxt = cxt.subschema({
-                schema: sch,
-                dataTypes: [],
-                schemaPath: codegen_1.nil,
-                topSchemaRef: schName,
-                errSchemaPath: $ref,
-            }, valid);
-            cxt.mergeEvaluated(schCxt);
-            cxt.ok(valid);
-        }
-    },
-};
-function getValidate(cxt, sch) {
-    const { gen } = cxt;
-    return sch.validate
-        ? gen.scopeValue("validate", { ref: sch.validate })
-        : (0, codegen_1._) `${gen.scopeValue("wrapper", { ref: sch })}.validate`;
-}
-exports.getValidate = getValidate;
-function callRef(cxt, v, sch, $async) {
-    const { gen, it } = cxt;
-    const { allErrors, schemaEnv: env, opts } = it;
-    const passCxt = opts.passContext ? names_1.default.this : codegen_1.nil;
-    if ($async)
-        callAsyncRef();
-    else
-        callSyncRef();
-    function callAsyncRef() {
-        if (!env.$async)
-            throw new Error("async schema referenced by sync schema");
-        const valid = gen.let("valid");
-        gen.try(() => {
-            gen.code((0, codegen_1._) `await ${(0, code_1.callValidateCode)(cxt, v, passCxt)}`);
-            addEvaluatedFrom(v); // TODO will not work with async, it has to be returned with the result
-            if (!allErrors)
-                gen.assign(valid, true);
-        }, (e) => {
-            gen.if((0, codegen_1._) `!(${e} instanceof ${it.ValidationError})`, () => gen.throw(e));
-            addErrorsFrom(e);
-            if (!allErrors)
-                gen.assign(valid, false);
-        });
-        cxt.ok(valid);
-    }
-    function callSyncRef() {
-        cxt.result((0, code_1.callValidateCode)(cxt, v, passCxt), () => addEvaluatedFrom(v), () => addErrorsFrom(v));
-    }
-    function addErrorsFrom(source) {
-        const errs = (0, codegen_1._) `${source}.errors`;
-        gen.assign(names_1.default.vErrors, (0, codegen_1._) `${names_1.default.vErrors} === null ? ${errs} : ${names_1.default.vErrors}.concat(${errs})`); // TODO tagged
-        gen.assign(names_1.default.errors, (0, codegen_1._) `${names_1.default.vErrors}.length`);
-    }
-    function addEvaluatedFrom(source) {
-        var _a;
-        if (!it.opts.unevaluated)
-            return;
-        const schEvaluated = (_a = sch === null || sch === void 0 ? void 0 : sch.validate) === null || _a === void 0 ? void 0 : _a.evaluated;
-        // TODO refactor
-        if (it.props !== true) {
-            if (schEvaluated && !schEvaluated.dynamicProps) {
-                if (schEvaluated.props !== undefined) {
-                    it.props = util_1.mergeEvaluated.props(gen, schEvaluated.props, it.props);
-                }
-            }
-            else {
-                const props = gen.var("props", (0, codegen_1._) `${source}.evaluated.props`);
-                it.props = util_1.mergeEvaluated.props(gen, props, it.props, codegen_1.Name);
-            }
-        }
-        if (it.items !== true) {
-            if (schEvaluated && !schEvaluated.dynamicItems) {
-                if (schEvaluated.items !== undefined) {
-                    it.items = util_1.mergeEvaluated.items(gen, schEvaluated.items, it.items);
-                }
-            }
-            else {
-                const items = gen.var("items", (0, codegen_1._) `${source}.evaluated.items`);
-                it.items = util_1.mergeEvaluated.items(gen, items, it.items, codegen_1.Name);
-            }
-        }
-    }
-}
-exports.callRef = callRef;
-exports["default"] = def;
-//# sourceMappingURL=ref.js.map
-
-/***/ }),
-
-/***/ 8886:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const types_1 = __nccwpck_require__(7115);
-const compile_1 = __nccwpck_require__(2718);
-const ref_error_1 = __nccwpck_require__(3162);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: ({ params: { discrError, tagName } }) => discrError === types_1.DiscrError.Tag
-        ? `tag "${tagName}" must be string`
-        : `value of tag "${tagName}" must be in oneOf`,
-    params: ({ params: { discrError, tag, tagName } }) => (0, codegen_1._) `{error: ${discrError}, tag: ${tagName}, tagValue: ${tag}}`,
-};
-const def = {
-    keyword: "discriminator",
-    type: "object",
-    schemaType: "object",
-    error,
-    code(cxt) {
-        const { gen, data, schema, parentSchema, it } = cxt;
-        const { oneOf } = parentSchema;
-        if (!it.opts.discriminator) {
-            throw new Error("discriminator: requires discriminator option");
-        }
-        const tagName = schema.propertyName;
-        if (typeof tagName != "string")
-            throw new Error("discriminator: requires propertyName");
-        if (schema.mapping)
-            throw new Error("discriminator: mapping is not supported");
-        if (!oneOf)
-            throw new Error("discriminator: requires oneOf keyword");
-        const valid = gen.let("valid", false);
-        const tag = gen.const("tag", (0, codegen_1._) `${data}${(0, codegen_1.getProperty)(tagName)}`);
-        gen.if((0, codegen_1._) `typeof ${tag} == "string"`, () => validateMapping(), () => cxt.error(false, { discrError: types_1.DiscrError.Tag, tag, tagName }));
-        cxt.ok(valid);
-        function validateMapping() {
-            const mapping = getMapping();
-            gen.if(false);
-            for (const tagValue in mapping) {
-                gen.elseIf((0, codegen_1._) `${tag} === ${tagValue}`);
-                gen.assign(valid, applyTagSchema(mapping[tagValue]));
-            }
-            gen.else();
-            cxt.error(false, { discrError: types_1.DiscrError.Mapping, tag, tagName });
-            gen.endIf();
-        }
-        function applyTagSchema(schemaProp) {
-            const _valid = gen.name("valid");
-            const schCxt = cxt.subschema({ keyword: "oneOf", schemaProp }, _valid);
-            cxt.mergeEvaluated(schCxt, codegen_1.Name);
-            return _valid;
-        }
-        function getMapping() {
-            var _a;
-            const oneOfMapping = {};
-            const topRequired = hasRequired(parentSchema);
-            let tagRequired = true;
-            for (let i = 0; i < oneOf.length; i++) {
-                let sch = oneOf[i];
-                if ((sch === null || sch === void 0 ? void 0 : sch.$ref) && !(0, util_1.schemaHasRulesButRef)(sch, it.self.RULES)) {
-                    const ref = sch.$ref;
-                    sch = compile_1.resolveRef.call(it.self, it.schemaEnv.root, it.baseId, ref);
-                    if (sch instanceof compile_1.SchemaEnv)
-                        sch = sch.schema;
-                    if (sch === undefined)
-                        throw new ref_error_1.default(it.opts.uriResolver, it.baseId, ref);
-                }
-                const propSch = (_a = sch === null || sch === void 0 ? void 0 : sch.properties) === null || _a === void 0 ? void 0 : _a[tagName];
-                if (typeof propSch != "object") {
-                    throw new Error(`discriminator: oneOf subschemas (or referenced schemas) must have "properties/${tagName}"`);
-                }
-                tagRequired = tagRequired && (topRequired || hasRequired(sch));
-                addMappings(propSch, i);
-            }
-            if (!tagRequired)
-                throw new Error(`discriminator: "${tagName}" must be required`);
-            return oneOfMapping;
-            function hasRequired({ required }) {
-                return Array.isArray(required) && required.includes(tagName);
-            }
-            function addMappings(sch, i) {
-                if (sch.const) {
-                    addMapping(sch.const, i);
-                }
-                else if (sch.enum) {
-                    for (const tagValue of sch.enum) {
-                        addMapping(tagValue, i);
-                    }
-                }
-                else {
-                    throw new Error(`discriminator: "properties/${tagName}" must have "const" or "enum"`);
-                }
-            }
-            function addMapping(tagValue, i) {
-                if (typeof tagValue != "string" || tagValue in oneOfMapping) {
-                    throw new Error(`discriminator: "${tagName}" values must be unique strings`);
-                }
-                oneOfMapping[tagValue] = i;
-            }
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 7115:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.DiscrError = void 0;
-var DiscrError;
-(function (DiscrError) {
-    DiscrError["Tag"] = "tag";
-    DiscrError["Mapping"] = "mapping";
-})(DiscrError || (exports.DiscrError = DiscrError = {}));
-//# sourceMappingURL=types.js.map
-
-/***/ }),
-
-/***/ 4298:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const core_1 = __nccwpck_require__(7397);
-const validation_1 = __nccwpck_require__(5481);
-const applicator_1 = __nccwpck_require__(8775);
-const dynamic_1 = __nccwpck_require__(9923);
-const next_1 = __nccwpck_require__(7844);
-const unevaluated_1 = __nccwpck_require__(2010);
-const format_1 = __nccwpck_require__(2601);
-const metadata_1 = __nccwpck_require__(6620);
-const draft2020Vocabularies = [
-    dynamic_1.default,
-    core_1.default,
-    validation_1.default,
-    (0, applicator_1.default)(true),
-    format_1.default,
-    metadata_1.metadataVocabulary,
-    metadata_1.contentVocabulary,
-    next_1.default,
-    unevaluated_1.default,
-];
-exports["default"] = draft2020Vocabularies;
-//# sourceMappingURL=draft2020.js.map
-
-/***/ }),
-
-/***/ 8639:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.dynamicAnchor = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const compile_1 = __nccwpck_require__(2718);
-const ref_1 = __nccwpck_require__(2996);
-const def = {
-    keyword: "$dynamicAnchor",
-    schemaType: "string",
-    code: (cxt) => dynamicAnchor(cxt, cxt.schema),
-};
-function dynamicAnchor(cxt, anchor) {
-    const { gen, it } = cxt;
-    it.schemaEnv.root.dynamicAnchors[anchor] = true;
-    const v = (0, codegen_1._) `${names_1.default.dynamicAnchors}${(0, codegen_1.getProperty)(anchor)}`;
-    const validate = it.errSchemaPath === "#" ? it.validateName : _getValidate(cxt);
-    gen.if((0, codegen_1._) `!${v}`, () => gen.assign(v, validate));
-}
-exports.dynamicAnchor = dynamicAnchor;
-function _getValidate(cxt) {
-    const { schemaEnv, schema, self } = cxt.it;
-    const { root, baseId, localRefs, meta } = schemaEnv.root;
-    const { schemaId } = self.opts;
-    const sch = new compile_1.SchemaEnv({ schema, schemaId, root, baseId, localRefs, meta });
-    compile_1.compileSchema.call(self, sch);
-    return (0, ref_1.getValidate)(cxt, sch);
-}
-exports["default"] = def;
-//# sourceMappingURL=dynamicAnchor.js.map
-
-/***/ }),
-
-/***/ 5065:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.dynamicRef = void 0;
-const codegen_1 = __nccwpck_require__(1436);
-const names_1 = __nccwpck_require__(630);
-const ref_1 = __nccwpck_require__(2996);
-const def = {
-    keyword: "$dynamicRef",
-    schemaType: "string",
-    code: (cxt) => dynamicRef(cxt, cxt.schema),
-};
-function dynamicRef(cxt, ref) {
-    const { gen, keyword, it } = cxt;
-    if (ref[0] !== "#")
-        throw new Error(`"${keyword}" only supports hash fragment reference`);
-    const anchor = ref.slice(1);
-    if (it.allErrors) {
-        _dynamicRef();
-    }
-    else {
-        const valid = gen.let("valid", false);
-        _dynamicRef(valid);
-        cxt.ok(valid);
-    }
-    function _dynamicRef(valid) {
-        // TODO the assumption here is that `recursiveRef: #` always points to the root
-        // of the schema object, which is not correct, because there may be $id that
-        // makes # point to it, and the target schema may not contain dynamic/recursiveAnchor.
-        // Because of that 2 tests in recursiveRef.json fail.
-        // This is a similar problem to #815 (`$id` doesn't alter resolution scope for `{ "$ref": "#" }`).
-        // (This problem is not tested in JSON-Schema-Test-Suite)
-        if (it.schemaEnv.root.dynamicAnchors[anchor]) {
-            const v = gen.let("_v", (0, codegen_1._) `${names_1.default.dynamicAnchors}${(0, codegen_1.getProperty)(anchor)}`);
-            gen.if(v, _callRef(v, valid), _callRef(it.validateName, valid));
-        }
-        else {
-            _callRef(it.validateName, valid)();
-        }
-    }
-    function _callRef(validate, valid) {
-        return valid
-            ? () => gen.block(() => {
-                (0, ref_1.callRef)(cxt, validate);
-                gen.let(valid, true);
-            })
-            : () => (0, ref_1.callRef)(cxt, validate);
-    }
-}
-exports.dynamicRef = dynamicRef;
-exports["default"] = def;
-//# sourceMappingURL=dynamicRef.js.map
-
-/***/ }),
-
-/***/ 9923:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dynamicAnchor_1 = __nccwpck_require__(8639);
-const dynamicRef_1 = __nccwpck_require__(5065);
-const recursiveAnchor_1 = __nccwpck_require__(9982);
-const recursiveRef_1 = __nccwpck_require__(1794);
-const dynamic = [dynamicAnchor_1.default, dynamicRef_1.default, recursiveAnchor_1.default, recursiveRef_1.default];
-exports["default"] = dynamic;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 9982:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dynamicAnchor_1 = __nccwpck_require__(8639);
-const util_1 = __nccwpck_require__(4464);
-const def = {
-    keyword: "$recursiveAnchor",
-    schemaType: "boolean",
-    code(cxt) {
-        if (cxt.schema)
-            (0, dynamicAnchor_1.dynamicAnchor)(cxt, "");
-        else
-            (0, util_1.checkStrictMode)(cxt.it, "$recursiveAnchor: false is ignored");
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=recursiveAnchor.js.map
-
-/***/ }),
-
-/***/ 1794:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dynamicRef_1 = __nccwpck_require__(5065);
-const def = {
-    keyword: "$recursiveRef",
-    schemaType: "string",
-    code: (cxt) => (0, dynamicRef_1.dynamicRef)(cxt, cxt.schema),
-};
-exports["default"] = def;
-//# sourceMappingURL=recursiveRef.js.map
-
-/***/ }),
-
-/***/ 6402:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const error = {
-    message: ({ schemaCode }) => (0, codegen_1.str) `must match format "${schemaCode}"`,
-    params: ({ schemaCode }) => (0, codegen_1._) `{format: ${schemaCode}}`,
-};
-const def = {
-    keyword: "format",
-    type: ["number", "string"],
-    schemaType: "string",
-    $data: true,
-    error,
-    code(cxt, ruleType) {
-        const { gen, data, $data, schema, schemaCode, it } = cxt;
-        const { opts, errSchemaPath, schemaEnv, self } = it;
-        if (!opts.validateFormats)
-            return;
-        if ($data)
-            validate$DataFormat();
-        else
-            validateFormat();
-        function validate$DataFormat() {
-            const fmts = gen.scopeValue("formats", {
-                ref: self.formats,
-                code: opts.code.formats,
-            });
-            const fDef = gen.const("fDef", (0, codegen_1._) `${fmts}[${schemaCode}]`);
-            const fType = gen.let("fType");
-            const format = gen.let("format");
-            // TODO simplify
-            gen.if((0, codegen_1._) `typeof ${fDef} == "object" && !(${fDef} instanceof RegExp)`, () => gen.assign(fType, (0, codegen_1._) `${fDef}.type || "string"`).assign(format, (0, codegen_1._) `${fDef}.validate`), () => gen.assign(fType, (0, codegen_1._) `"string"`).assign(format, fDef));
-            cxt.fail$data((0, codegen_1.or)(unknownFmt(), invalidFmt()));
-            function unknownFmt() {
-                if (opts.strictSchema === false)
-                    return codegen_1.nil;
-                return (0, codegen_1._) `${schemaCode} && !${format}`;
-            }
-            function invalidFmt() {
-                const callFormat = schemaEnv.$async
-                    ? (0, codegen_1._) `(${fDef}.async ? await ${format}(${data}) : ${format}(${data}))`
-                    : (0, codegen_1._) `${format}(${data})`;
-                const validData = (0, codegen_1._) `(typeof ${format} == "function" ? ${callFormat} : ${format}.test(${data}))`;
-                return (0, codegen_1._) `${format} && ${format} !== true && ${fType} === ${ruleType} && !${validData}`;
-            }
-        }
-        function validateFormat() {
-            const formatDef = self.formats[schema];
-            if (!formatDef) {
-                unknownFormat();
-                return;
-            }
-            if (formatDef === true)
-                return;
-            const [fmtType, format, fmtRef] = getFormat(formatDef);
-            if (fmtType === ruleType)
-                cxt.pass(validCondition());
-            function unknownFormat() {
-                if (opts.strictSchema === false) {
-                    self.logger.warn(unknownMsg());
-                    return;
-                }
-                throw new Error(unknownMsg());
-                function unknownMsg() {
-                    return `unknown format "${schema}" ignored in schema at path "${errSchemaPath}"`;
-                }
-            }
-            function getFormat(fmtDef) {
-                const code = fmtDef instanceof RegExp
-                    ? (0, codegen_1.regexpCode)(fmtDef)
-                    : opts.code.formats
-                        ? (0, codegen_1._) `${opts.code.formats}${(0, codegen_1.getProperty)(schema)}`
-                        : undefined;
-                const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
-                if (typeof fmtDef == "object" && !(fmtDef instanceof RegExp)) {
-                    return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._) `${fmt}.validate`];
-                }
-                return ["string", fmtDef, fmt];
-            }
-            function validCondition() {
-                if (typeof formatDef == "object" && !(formatDef instanceof RegExp) && formatDef.async) {
-                    if (!schemaEnv.$async)
-                        throw new Error("async format in sync schema");
-                    return (0, codegen_1._) `await ${fmtRef}(${data})`;
-                }
-                return typeof format == "function" ? (0, codegen_1._) `${fmtRef}(${data})` : (0, codegen_1._) `${fmtRef}.test(${data})`;
-            }
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=format.js.map
-
-/***/ }),
-
-/***/ 2601:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const format_1 = __nccwpck_require__(6402);
-const format = [format_1.default];
-exports["default"] = format;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 6620:
-/***/ ((__unused_webpack_module, exports) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-exports.contentVocabulary = exports.metadataVocabulary = void 0;
-exports.metadataVocabulary = [
-    "title",
-    "description",
-    "default",
-    "deprecated",
-    "readOnly",
-    "writeOnly",
-    "examples",
-];
-exports.contentVocabulary = [
-    "contentMediaType",
-    "contentEncoding",
-    "contentSchema",
-];
-//# sourceMappingURL=metadata.js.map
-
-/***/ }),
-
-/***/ 7844:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dependentRequired_1 = __nccwpck_require__(643);
-const dependentSchemas_1 = __nccwpck_require__(3818);
-const limitContains_1 = __nccwpck_require__(3907);
-const next = [dependentRequired_1.default, dependentSchemas_1.default, limitContains_1.default];
-exports["default"] = next;
-//# sourceMappingURL=next.js.map
-
-/***/ }),
-
-/***/ 2010:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const unevaluatedProperties_1 = __nccwpck_require__(6855);
-const unevaluatedItems_1 = __nccwpck_require__(4144);
-const unevaluated = [unevaluatedProperties_1.default, unevaluatedItems_1.default];
-exports["default"] = unevaluated;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 4144:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: ({ params: { len } }) => (0, codegen_1.str) `must NOT have more than ${len} items`,
-    params: ({ params: { len } }) => (0, codegen_1._) `{limit: ${len}}`,
-};
-const def = {
-    keyword: "unevaluatedItems",
-    type: "array",
-    schemaType: ["boolean", "object"],
-    error,
-    code(cxt) {
-        const { gen, schema, data, it } = cxt;
-        const items = it.items || 0;
-        if (items === true)
-            return;
-        const len = gen.const("len", (0, codegen_1._) `${data}.length`);
-        if (schema === false) {
-            cxt.setParams({ len: items });
-            cxt.fail((0, codegen_1._) `${len} > ${items}`);
-        }
-        else if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
-            const valid = gen.var("valid", (0, codegen_1._) `${len} <= ${items}`);
-            gen.if((0, codegen_1.not)(valid), () => validateItems(valid, items));
-            cxt.ok(valid);
-        }
-        it.items = true;
-        function validateItems(valid, from) {
-            gen.forRange("i", from, len, (i) => {
-                cxt.subschema({ keyword: "unevaluatedItems", dataProp: i, dataPropType: util_1.Type.Num }, valid);
-                if (!it.allErrors)
-                    gen.if((0, codegen_1.not)(valid), () => gen.break());
-            });
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=unevaluatedItems.js.map
-
-/***/ }),
-
-/***/ 6855:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const names_1 = __nccwpck_require__(630);
-const error = {
-    message: "must NOT have unevaluated properties",
-    params: ({ params }) => (0, codegen_1._) `{unevaluatedProperty: ${params.unevaluatedProperty}}`,
-};
-const def = {
-    keyword: "unevaluatedProperties",
-    type: "object",
-    schemaType: ["boolean", "object"],
-    trackErrors: true,
-    error,
-    code(cxt) {
-        const { gen, schema, data, errsCount, it } = cxt;
-        /* istanbul ignore if */
-        if (!errsCount)
-            throw new Error("ajv implementation error");
-        const { allErrors, props } = it;
-        if (props instanceof codegen_1.Name) {
-            gen.if((0, codegen_1._) `${props} !== true`, () => gen.forIn("key", data, (key) => gen.if(unevaluatedDynamic(props, key), () => unevaluatedPropCode(key))));
-        }
-        else if (props !== true) {
-            gen.forIn("key", data, (key) => props === undefined
-                ? unevaluatedPropCode(key)
-                : gen.if(unevaluatedStatic(props, key), () => unevaluatedPropCode(key)));
-        }
-        it.props = true;
-        cxt.ok((0, codegen_1._) `${errsCount} === ${names_1.default.errors}`);
-        function unevaluatedPropCode(key) {
-            if (schema === false) {
-                cxt.setParams({ unevaluatedProperty: key });
-                cxt.error();
-                if (!allErrors)
-                    gen.break();
-                return;
-            }
-            if (!(0, util_1.alwaysValidSchema)(it, schema)) {
-                const valid = gen.name("valid");
-                cxt.subschema({
-                    keyword: "unevaluatedProperties",
-                    dataProp: key,
-                    dataPropType: util_1.Type.Str,
-                }, valid);
-                if (!allErrors)
-                    gen.if((0, codegen_1.not)(valid), () => gen.break());
-            }
-        }
-        function unevaluatedDynamic(evaluatedProps, key) {
-            return (0, codegen_1._) `!${evaluatedProps} || !${evaluatedProps}[${key}]`;
-        }
-        function unevaluatedStatic(evaluatedProps, key) {
-            const ps = [];
-            for (const p in evaluatedProps) {
-                if (evaluatedProps[p] === true)
-                    ps.push((0, codegen_1._) `${key} !== ${p}`);
-            }
-            return (0, codegen_1.and)(...ps);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=unevaluatedProperties.js.map
-
-/***/ }),
-
-/***/ 8026:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const equal_1 = __nccwpck_require__(4951);
-const error = {
-    message: "must be equal to constant",
-    params: ({ schemaCode }) => (0, codegen_1._) `{allowedValue: ${schemaCode}}`,
-};
-const def = {
-    keyword: "const",
-    $data: true,
-    error,
-    code(cxt) {
-        const { gen, data, $data, schemaCode, schema } = cxt;
-        if ($data || (schema && typeof schema == "object")) {
-            cxt.fail$data((0, codegen_1._) `!${(0, util_1.useFunc)(gen, equal_1.default)}(${data}, ${schemaCode})`);
-        }
-        else {
-            cxt.fail((0, codegen_1._) `${schema} !== ${data}`);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=const.js.map
-
-/***/ }),
-
-/***/ 643:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dependencies_1 = __nccwpck_require__(5826);
-const def = {
-    keyword: "dependentRequired",
-    type: "object",
-    schemaType: "object",
-    error: dependencies_1.error,
-    code: (cxt) => (0, dependencies_1.validatePropertyDeps)(cxt),
-};
-exports["default"] = def;
-//# sourceMappingURL=dependentRequired.js.map
-
-/***/ }),
-
-/***/ 3200:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const equal_1 = __nccwpck_require__(4951);
-const error = {
-    message: "must be equal to one of the allowed values",
-    params: ({ schemaCode }) => (0, codegen_1._) `{allowedValues: ${schemaCode}}`,
-};
-const def = {
-    keyword: "enum",
-    schemaType: "array",
-    $data: true,
-    error,
-    code(cxt) {
-        const { gen, data, $data, schema, schemaCode, it } = cxt;
-        if (!$data && schema.length === 0)
-            throw new Error("enum must have non-empty array");
-        const useLoop = schema.length >= it.opts.loopEnum;
-        let eql;
-        const getEql = () => (eql !== null && eql !== void 0 ? eql : (eql = (0, util_1.useFunc)(gen, equal_1.default)));
-        let valid;
-        if (useLoop || $data) {
-            valid = gen.let("valid");
-            cxt.block$data(valid, loopEnum);
-        }
-        else {
-            /* istanbul ignore if */
-            if (!Array.isArray(schema))
-                throw new Error("ajv implementation error");
-            const vSchema = gen.const("vSchema", schemaCode);
-            valid = (0, codegen_1.or)(...schema.map((_x, i) => equalCode(vSchema, i)));
-        }
-        cxt.pass(valid);
-        function loopEnum() {
-            gen.assign(valid, false);
-            gen.forOf("v", schemaCode, (v) => gen.if((0, codegen_1._) `${getEql()}(${data}, ${v})`, () => gen.assign(valid, true).break()));
-        }
-        function equalCode(vSchema, i) {
-            const sch = schema[i];
-            return typeof sch === "object" && sch !== null
-                ? (0, codegen_1._) `${getEql()}(${data}, ${vSchema}[${i}])`
-                : (0, codegen_1._) `${data} === ${sch}`;
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=enum.js.map
-
-/***/ }),
-
-/***/ 5481:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const limitNumber_1 = __nccwpck_require__(3723);
-const multipleOf_1 = __nccwpck_require__(8132);
-const limitLength_1 = __nccwpck_require__(6962);
-const pattern_1 = __nccwpck_require__(6023);
-const limitProperties_1 = __nccwpck_require__(895);
-const required_1 = __nccwpck_require__(4504);
-const limitItems_1 = __nccwpck_require__(6296);
-const uniqueItems_1 = __nccwpck_require__(5132);
-const const_1 = __nccwpck_require__(8026);
-const enum_1 = __nccwpck_require__(3200);
-const validation = [
-    // number
-    limitNumber_1.default,
-    multipleOf_1.default,
-    // string
-    limitLength_1.default,
-    pattern_1.default,
-    // object
-    limitProperties_1.default,
-    required_1.default,
-    // array
-    limitItems_1.default,
-    uniqueItems_1.default,
-    // any
-    { keyword: "type", schemaType: ["string", "array"] },
-    { keyword: "nullable", schemaType: "boolean" },
-    const_1.default,
-    enum_1.default,
-];
-exports["default"] = validation;
-//# sourceMappingURL=index.js.map
-
-/***/ }),
-
-/***/ 3907:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const util_1 = __nccwpck_require__(4464);
-const def = {
-    keyword: ["maxContains", "minContains"],
-    type: "array",
-    schemaType: "number",
-    code({ keyword, parentSchema, it }) {
-        if (parentSchema.contains === undefined) {
-            (0, util_1.checkStrictMode)(it, `"${keyword}" without "contains" is ignored`);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=limitContains.js.map
-
-/***/ }),
-
-/***/ 6296:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const error = {
-    message({ keyword, schemaCode }) {
-        const comp = keyword === "maxItems" ? "more" : "fewer";
-        return (0, codegen_1.str) `must NOT have ${comp} than ${schemaCode} items`;
-    },
-    params: ({ schemaCode }) => (0, codegen_1._) `{limit: ${schemaCode}}`,
-};
-const def = {
-    keyword: ["maxItems", "minItems"],
-    type: "array",
-    schemaType: "number",
-    $data: true,
-    error,
-    code(cxt) {
-        const { keyword, data, schemaCode } = cxt;
-        const op = keyword === "maxItems" ? codegen_1.operators.GT : codegen_1.operators.LT;
-        cxt.fail$data((0, codegen_1._) `${data}.length ${op} ${schemaCode}`);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=limitItems.js.map
-
-/***/ }),
-
-/***/ 6962:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const ucs2length_1 = __nccwpck_require__(6214);
-const error = {
-    message({ keyword, schemaCode }) {
-        const comp = keyword === "maxLength" ? "more" : "fewer";
-        return (0, codegen_1.str) `must NOT have ${comp} than ${schemaCode} characters`;
-    },
-    params: ({ schemaCode }) => (0, codegen_1._) `{limit: ${schemaCode}}`,
-};
-const def = {
-    keyword: ["maxLength", "minLength"],
-    type: "string",
-    schemaType: "number",
-    $data: true,
-    error,
-    code(cxt) {
-        const { keyword, data, schemaCode, it } = cxt;
-        const op = keyword === "maxLength" ? codegen_1.operators.GT : codegen_1.operators.LT;
-        const len = it.opts.unicode === false ? (0, codegen_1._) `${data}.length` : (0, codegen_1._) `${(0, util_1.useFunc)(cxt.gen, ucs2length_1.default)}(${data})`;
-        cxt.fail$data((0, codegen_1._) `${len} ${op} ${schemaCode}`);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=limitLength.js.map
-
-/***/ }),
-
-/***/ 3723:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const ops = codegen_1.operators;
-const KWDs = {
-    maximum: { okStr: "<=", ok: ops.LTE, fail: ops.GT },
-    minimum: { okStr: ">=", ok: ops.GTE, fail: ops.LT },
-    exclusiveMaximum: { okStr: "<", ok: ops.LT, fail: ops.GTE },
-    exclusiveMinimum: { okStr: ">", ok: ops.GT, fail: ops.LTE },
-};
-const error = {
-    message: ({ keyword, schemaCode }) => (0, codegen_1.str) `must be ${KWDs[keyword].okStr} ${schemaCode}`,
-    params: ({ keyword, schemaCode }) => (0, codegen_1._) `{comparison: ${KWDs[keyword].okStr}, limit: ${schemaCode}}`,
-};
-const def = {
-    keyword: Object.keys(KWDs),
-    type: "number",
-    schemaType: "number",
-    $data: true,
-    error,
-    code(cxt) {
-        const { keyword, data, schemaCode } = cxt;
-        cxt.fail$data((0, codegen_1._) `${data} ${KWDs[keyword].fail} ${schemaCode} || isNaN(${data})`);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=limitNumber.js.map
-
-/***/ }),
-
-/***/ 895:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const error = {
-    message({ keyword, schemaCode }) {
-        const comp = keyword === "maxProperties" ? "more" : "fewer";
-        return (0, codegen_1.str) `must NOT have ${comp} than ${schemaCode} properties`;
-    },
-    params: ({ schemaCode }) => (0, codegen_1._) `{limit: ${schemaCode}}`,
-};
-const def = {
-    keyword: ["maxProperties", "minProperties"],
-    type: "object",
-    schemaType: "number",
-    $data: true,
-    error,
-    code(cxt) {
-        const { keyword, data, schemaCode } = cxt;
-        const op = keyword === "maxProperties" ? codegen_1.operators.GT : codegen_1.operators.LT;
-        cxt.fail$data((0, codegen_1._) `Object.keys(${data}).length ${op} ${schemaCode}`);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=limitProperties.js.map
-
-/***/ }),
-
-/***/ 8132:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const codegen_1 = __nccwpck_require__(1436);
-const error = {
-    message: ({ schemaCode }) => (0, codegen_1.str) `must be multiple of ${schemaCode}`,
-    params: ({ schemaCode }) => (0, codegen_1._) `{multipleOf: ${schemaCode}}`,
-};
-const def = {
-    keyword: "multipleOf",
-    type: "number",
-    schemaType: "number",
-    $data: true,
-    error,
-    code(cxt) {
-        const { gen, data, schemaCode, it } = cxt;
-        // const bdt = bad$DataType(schemaCode, <string>def.schemaType, $data)
-        const prec = it.opts.multipleOfPrecision;
-        const res = gen.let("res");
-        const invalid = prec
-            ? (0, codegen_1._) `Math.abs(Math.round(${res}) - ${res}) > 1e-${prec}`
-            : (0, codegen_1._) `${res} !== parseInt(${res})`;
-        cxt.fail$data((0, codegen_1._) `(${schemaCode} === 0 || (${res} = ${data}/${schemaCode}, ${invalid}))`);
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=multipleOf.js.map
-
-/***/ }),
-
-/***/ 6023:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const code_1 = __nccwpck_require__(8484);
-const util_1 = __nccwpck_require__(4464);
-const codegen_1 = __nccwpck_require__(1436);
-const error = {
-    message: ({ schemaCode }) => (0, codegen_1.str) `must match pattern "${schemaCode}"`,
-    params: ({ schemaCode }) => (0, codegen_1._) `{pattern: ${schemaCode}}`,
-};
-const def = {
-    keyword: "pattern",
-    type: "string",
-    schemaType: "string",
-    $data: true,
-    error,
-    code(cxt) {
-        const { gen, data, $data, schema, schemaCode, it } = cxt;
-        const u = it.opts.unicodeRegExp ? "u" : "";
-        if ($data) {
-            const { regExp } = it.opts.code;
-            const regExpCode = regExp.code === "new RegExp" ? (0, codegen_1._) `new RegExp` : (0, util_1.useFunc)(gen, regExp);
-            const valid = gen.let("valid");
-            gen.try(() => gen.assign(valid, (0, codegen_1._) `${regExpCode}(${schemaCode}, ${u}).test(${data})`), () => gen.assign(valid, false));
-            cxt.fail$data((0, codegen_1._) `!${valid}`);
-        }
-        else {
-            const regExp = (0, code_1.usePattern)(cxt, schema);
-            cxt.fail$data((0, codegen_1._) `!${regExp}.test(${data})`);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=pattern.js.map
-
-/***/ }),
-
-/***/ 4504:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const code_1 = __nccwpck_require__(8484);
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const error = {
-    message: ({ params: { missingProperty } }) => (0, codegen_1.str) `must have required property '${missingProperty}'`,
-    params: ({ params: { missingProperty } }) => (0, codegen_1._) `{missingProperty: ${missingProperty}}`,
-};
-const def = {
-    keyword: "required",
-    type: "object",
-    schemaType: "array",
-    $data: true,
-    error,
-    code(cxt) {
-        const { gen, schema, schemaCode, data, $data, it } = cxt;
-        const { opts } = it;
-        if (!$data && schema.length === 0)
-            return;
-        const useLoop = schema.length >= opts.loopRequired;
-        if (it.allErrors)
-            allErrorsMode();
-        else
-            exitOnErrorMode();
-        if (opts.strictRequired) {
-            const props = cxt.parentSchema.properties;
-            const { definedProperties } = cxt.it;
-            for (const requiredKey of schema) {
-                if ((props === null || props === void 0 ? void 0 : props[requiredKey]) === undefined && !definedProperties.has(requiredKey)) {
-                    const schemaPath = it.schemaEnv.baseId + it.errSchemaPath;
-                    const msg = `required property "${requiredKey}" is not defined at "${schemaPath}" (strictRequired)`;
-                    (0, util_1.checkStrictMode)(it, msg, it.opts.strictRequired);
-                }
-            }
-        }
-        function allErrorsMode() {
-            if (useLoop || $data) {
-                cxt.block$data(codegen_1.nil, loopAllRequired);
-            }
-            else {
-                for (const prop of schema) {
-                    (0, code_1.checkReportMissingProp)(cxt, prop);
-                }
-            }
-        }
-        function exitOnErrorMode() {
-            const missing = gen.let("missing");
-            if (useLoop || $data) {
-                const valid = gen.let("valid", true);
-                cxt.block$data(valid, () => loopUntilMissing(missing, valid));
-                cxt.ok(valid);
-            }
-            else {
-                gen.if((0, code_1.checkMissingProp)(cxt, schema, missing));
-                (0, code_1.reportMissingProp)(cxt, missing);
-                gen.else();
-            }
-        }
-        function loopAllRequired() {
-            gen.forOf("prop", schemaCode, (prop) => {
-                cxt.setParams({ missingProperty: prop });
-                gen.if((0, code_1.noPropertyInData)(gen, data, prop, opts.ownProperties), () => cxt.error());
-            });
-        }
-        function loopUntilMissing(missing, valid) {
-            cxt.setParams({ missingProperty: missing });
-            gen.forOf(missing, schemaCode, () => {
-                gen.assign(valid, (0, code_1.propertyInData)(gen, data, missing, opts.ownProperties));
-                gen.if((0, codegen_1.not)(valid), () => {
-                    cxt.error();
-                    gen.break();
-                });
-            }, codegen_1.nil);
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=required.js.map
-
-/***/ }),
-
-/***/ 5132:
-/***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
-
-
-Object.defineProperty(exports, "__esModule", ({ value: true }));
-const dataType_1 = __nccwpck_require__(6685);
-const codegen_1 = __nccwpck_require__(1436);
-const util_1 = __nccwpck_require__(4464);
-const equal_1 = __nccwpck_require__(4951);
-const error = {
-    message: ({ params: { i, j } }) => (0, codegen_1.str) `must NOT have duplicate items (items ## ${j} and ${i} are identical)`,
-    params: ({ params: { i, j } }) => (0, codegen_1._) `{i: ${i}, j: ${j}}`,
-};
-const def = {
-    keyword: "uniqueItems",
-    type: "array",
-    schemaType: "boolean",
-    $data: true,
-    error,
-    code(cxt) {
-        const { gen, data, $data, schema, parentSchema, schemaCode, it } = cxt;
-        if (!$data && !schema)
-            return;
-        const valid = gen.let("valid");
-        const itemTypes = parentSchema.items ? (0, dataType_1.getSchemaTypes)(parentSchema.items) : [];
-        cxt.block$data(valid, validateUniqueItems, (0, codegen_1._) `${schemaCode} === false`);
-        cxt.ok(valid);
-        function validateUniqueItems() {
-            const i = gen.let("i", (0, codegen_1._) `${data}.length`);
-            const j = gen.let("j");
-            cxt.setParams({ i, j });
-            gen.assign(valid, true);
-            gen.if((0, codegen_1._) `${i} > 1`, () => (canOptimize() ? loopN : loopN2)(i, j));
-        }
-        function canOptimize() {
-            return itemTypes.length > 0 && !itemTypes.some((t) => t === "object" || t === "array");
-        }
-        function loopN(i, j) {
-            const item = gen.name("item");
-            const wrongType = (0, dataType_1.checkDataTypes)(itemTypes, item, it.opts.strictNumbers, dataType_1.DataType.Wrong);
-            const indices = gen.const("indices", (0, codegen_1._) `{}`);
-            gen.for((0, codegen_1._) `;${i}--;`, () => {
-                gen.let(item, (0, codegen_1._) `${data}[${i}]`);
-                gen.if(wrongType, (0, codegen_1._) `continue`);
-                if (itemTypes.length > 1)
-                    gen.if((0, codegen_1._) `typeof ${item} == "string"`, (0, codegen_1._) `${item} += "_"`);
-                gen
-                    .if((0, codegen_1._) `typeof ${indices}[${item}] == "number"`, () => {
-                    gen.assign(j, (0, codegen_1._) `${indices}[${item}]`);
-                    cxt.error();
-                    gen.assign(valid, false).break();
-                })
-                    .code((0, codegen_1._) `${indices}[${item}] = ${i}`);
-            });
-        }
-        function loopN2(i, j) {
-            const eql = (0, util_1.useFunc)(gen, equal_1.default);
-            const outer = gen.name("outer");
-            gen.label(outer).for((0, codegen_1._) `;${i}--;`, () => gen.for((0, codegen_1._) `${j} = ${i}; ${j}--;`, () => gen.if((0, codegen_1._) `${eql}(${data}[${i}], ${data}[${j}])`, () => {
-                cxt.error();
-                gen.assign(valid, false).break(outer);
-            })));
-        }
-    },
-};
-exports["default"] = def;
-//# sourceMappingURL=uniqueItems.js.map
-
-/***/ }),
-
-/***/ 3430:
-/***/ ((module) => {
-
-
-
-// do not edit .js files directly - edit src/index.jst
-
-
-
-module.exports = function equal(a, b) {
-  if (a === b) return true;
-
-  if (a && b && typeof a == 'object' && typeof b == 'object') {
-    if (a.constructor !== b.constructor) return false;
-
-    var length, i, keys;
-    if (Array.isArray(a)) {
-      length = a.length;
-      if (length != b.length) return false;
-      for (i = length; i-- !== 0;)
-        if (!equal(a[i], b[i])) return false;
-      return true;
-    }
-
-
-
-    if (a.constructor === RegExp) return a.source === b.source && a.flags === b.flags;
-    if (a.valueOf !== Object.prototype.valueOf) return a.valueOf() === b.valueOf();
-    if (a.toString !== Object.prototype.toString) return a.toString() === b.toString();
-
-    keys = Object.keys(a);
-    length = keys.length;
-    if (length !== Object.keys(b).length) return false;
-
-    for (i = length; i-- !== 0;)
-      if (!Object.prototype.hasOwnProperty.call(b, keys[i])) return false;
-
-    for (i = length; i-- !== 0;) {
-      var key = keys[i];
-
-      if (!equal(a[key], b[key])) return false;
-    }
-
-    return true;
-  }
-
-  // true if both NaN, false otherwise
-  return a!==a && b!==b;
-};
-
-
-/***/ }),
-
-/***/ 1167:
-/***/ ((module) => {
-
-
-
-var traverse = module.exports = function (schema, opts, cb) {
-  // Legacy support for v0.3.1 and earlier.
-  if (typeof opts == 'function') {
-    cb = opts;
-    opts = {};
-  }
-
-  cb = opts.cb || cb;
-  var pre = (typeof cb == 'function') ? cb : cb.pre || function() {};
-  var post = cb.post || function() {};
-
-  _traverse(opts, pre, post, schema, '', schema);
-};
-
-
-traverse.keywords = {
-  additionalItems: true,
-  items: true,
-  contains: true,
-  additionalProperties: true,
-  propertyNames: true,
-  not: true,
-  if: true,
-  then: true,
-  else: true
-};
-
-traverse.arrayKeywords = {
-  items: true,
-  allOf: true,
-  anyOf: true,
-  oneOf: true
-};
-
-traverse.propsKeywords = {
-  $defs: true,
-  definitions: true,
-  properties: true,
-  patternProperties: true,
-  dependencies: true
-};
-
-traverse.skipKeywords = {
-  default: true,
-  enum: true,
-  const: true,
-  required: true,
-  maximum: true,
-  minimum: true,
-  exclusiveMaximum: true,
-  exclusiveMinimum: true,
-  multipleOf: true,
-  maxLength: true,
-  minLength: true,
-  pattern: true,
-  format: true,
-  maxItems: true,
-  minItems: true,
-  uniqueItems: true,
-  maxProperties: true,
-  minProperties: true
-};
-
-
-function _traverse(opts, pre, post, schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex) {
-  if (schema && typeof schema == 'object' && !Array.isArray(schema)) {
-    pre(schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex);
-    for (var key in schema) {
-      var sch = schema[key];
-      if (Array.isArray(sch)) {
-        if (key in traverse.arrayKeywords) {
-          for (var i=0; i<sch.length; i++)
-            _traverse(opts, pre, post, sch[i], jsonPtr + '/' + key + '/' + i, rootSchema, jsonPtr, key, schema, i);
-        }
-      } else if (key in traverse.propsKeywords) {
-        if (sch && typeof sch == 'object') {
-          for (var prop in sch)
-            _traverse(opts, pre, post, sch[prop], jsonPtr + '/' + key + '/' + escapeJsonPtr(prop), rootSchema, jsonPtr, key, schema, prop);
-        }
-      } else if (key in traverse.keywords || (opts.allKeys && !(key in traverse.skipKeywords))) {
-        _traverse(opts, pre, post, sch, jsonPtr + '/' + key, rootSchema, jsonPtr, key, schema);
-      }
-    }
-    post(schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex);
-  }
-}
-
-
-function escapeJsonPtr(str) {
-  return str.replace(/~/g, '~0').replace(/\//g, '~1');
-}
-
 
 /***/ }),
 
@@ -14689,8 +8525,8 @@ var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/errors.ts
 var errors = __nccwpck_require__(3916);
-// EXTERNAL MODULE: ./src/pipeline.ts + 9 modules
-var pipeline = __nccwpck_require__(3481);
+// EXTERNAL MODULE: ./src/pipeline.ts + 10 modules
+var pipeline = __nccwpck_require__(2321);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __nccwpck_require__(1421);
 ;// CONCATENATED MODULE: ./src/repo/glob-pattern.ts
@@ -15211,6 +9047,9 @@ function parseArgs(argv, cwd) {
         .addOption(new Option('--format <format>', 'report format').choices(['text', 'json', 'markdown']).default('text'))
         .option('--out <file>', 'write the report to a file instead of standard output')
         .addOption(new Option('--fail-on <level>', 'what fails the run').choices(['fail', 'warn']).default('fail'))
+        .option('--html <dir>', 'also write the HTML report of the joined result into this folder')
+        .option('--sarif <file>', 'also write a SARIF 2.1.0 log of the joined result to this file')
+        .option('--junit <file>', 'also write a JUnit XML report of the joined result to this file')
         .option('--color', 'force colours in the text report')
         .option('--no-color', 'never use colours')
         .option('--debug', 'print stack traces of unexpected errors', false)
@@ -15225,6 +9064,9 @@ function parseArgs(argv, cwd) {
             color: cmd.getOptionValueSource('color') === 'cli' ? Boolean(o.color) : null,
             failOn: o.failOn === 'warn' ? 'warn' : 'fail',
             debug: Boolean(o.debug),
+            html: typeof o.html === 'string' ? o.html : null,
+            sarif: typeof o.sarif === 'string' ? o.sarif : null,
+            junit: typeof o.junit === 'string' ? o.junit : null,
         };
     });
     try {
@@ -15477,7 +9319,7 @@ function range(x, n = x.length) {
 
 /***/ }),
 
-/***/ 1221:
+/***/ 5729:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -15601,426 +9443,10 @@ const parameter_ratio_check = {
 var basis = __nccwpck_require__(2578);
 // EXTERNAL MODULE: ./src/design-matrix.ts
 var design_matrix = __nccwpck_require__(1927);
-// EXTERNAL MODULE: ./src/fit/index.ts + 5 modules
-var src_fit = __nccwpck_require__(5999);
-// EXTERNAL MODULE: ./src/model/blocks.ts
-var blocks = __nccwpck_require__(4607);
-;// CONCATENATED MODULE: ./src/diagnostics/cross-validation.ts
-
-
-/** Leverages within this distance of 1 count as 1 (the row is interpolated; its LOO error is infinite). */
-const LEVERAGE_ONE_TOLERANCE = 1e-10;
-/**
- * Folds design blocks into one QR factor per fold as they stream past: a block whose rows all
- * belong to one fold (the usual case for `blocks` folds) goes in as it is; otherwise its rows are
- * gathered per fold into a scratch block first. Rows enter each fold's factor in file order.
- */
-class FoldFactorBuilder {
-    /** One accumulator per fold (data rows only, no penalty). */
-    factors;
-    #folds;
-    #p;
-    #sub = new Float64Array(0);
-    #subY = new Float64Array(0);
-    #counts;
-    /**
-     * @param p design columns
-     * @param folds fold of each row
-     */
-    constructor(p, folds) {
-        this.#p = p;
-        this.#folds = folds;
-        this.factors = Array.from({ length: folds.k }, () => new src_fit/* QrAccumulator */.SC(p));
-        this.#counts = new Int32Array(folds.k);
-    }
-    /**
-     * Adds rows [start, start + m) given as a column-major m x p block and their targets.
-     *
-     * @param X column-major m x p block
-     * @param y targets of the whole data set (indexed from `start`)
-     * @param start first row
-     * @param m rows in the block
-     */
-    add(X, y, start, m) {
-        const p = this.#p;
-        const k = this.#folds.k;
-        const foldOf = this.#folds.foldOf;
-        if (m === 0)
-            return;
-        const first = foldOf[start];
-        let single = true;
-        for (let i = 1; i < m; i++) {
-            if (foldOf[start + i] !== first) {
-                single = false;
-                break;
-            }
-        }
-        if (single) {
-            this.factors[first].addRows(X, y.subarray(start, start + m), m);
-            return;
-        }
-        if (this.#sub.length < m * p) {
-            this.#sub = new Float64Array(m * p);
-            this.#subY = new Float64Array(m);
-        }
-        const sub = this.#sub;
-        const subY = this.#subY;
-        const counts = this.#counts;
-        counts.fill(0);
-        for (let i = 0; i < m; i++)
-            counts[foldOf[start + i]]++;
-        for (let f = 0; f < k; f++) {
-            const mf = counts[f];
-            if (mf === 0)
-                continue;
-            // Gather the block's rows of fold f into a column-major mf x p block.
-            let r = 0;
-            for (let i = 0; i < m; i++) {
-                if (foldOf[start + i] !== f)
-                    continue;
-                for (let j = 0; j < p; j++)
-                    sub[j * mf + r] = X[j * m + i];
-                subY[r] = y[start + i];
-                r++;
-            }
-            this.factors[f].addRows(sub, subY, mf);
-        }
-    }
-}
-/**
- * Folds the rows of each fold into its own QR factor in one pass over the rows.
- *
- * @param design the model's design (p columns)
- * @param data rows (n = data.rows, equal to folds.foldOf.length)
- * @param folds fold of each row
- * @returns k accumulators, one per fold (data rows only, no penalty)
- */
-function foldFactors(design, data, folds) {
-    const builder = new FoldFactorBuilder(design.p, folds);
-    (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => builder.add(X, data.y, start, m));
-    return builder.factors;
-}
-/**
- * The factor of every row: the merge of the per-fold factors (a QR factor of stacked rows is the
- * factor of the stacked factors; Golub & Van Loan, Matrix Computations, 4th ed., sec. 6.5.2).
- *
- * @param factors per-fold factors (not modified)
- * @param p columns (used when there are no factors)
- */
-function mergeFactors(factors, p) {
-    if (factors.length === 0)
-        return new QrAccumulator(p);
-    const all = factors[0].clone();
-    for (let f = 1; f < factors.length; f++)
-        all.merge(factors[f]);
-    return all;
-}
-/**
- * For each fold f, the factor of every other fold's rows: prefix and suffix merges, so k folds
- * cost about 3k merges of p x p factors instead of k(k-1).
- *
- * @param factors per-fold factors from {@link foldFactors} (not modified)
- * @returns k accumulators; entry f holds every row not in fold f
- */
-function complementFactors(factors) {
-    const k = factors.length;
-    if (k === 0)
-        return [];
-    const p = factors[0].p;
-    const prefix = [new src_fit/* QrAccumulator */.SC(p)];
-    for (let f = 1; f < k; f++) {
-        const next = prefix[f - 1].clone();
-        next.merge(factors[f - 1]);
-        prefix.push(next);
-    }
-    const out = new Array(k);
-    let suffix = new src_fit/* QrAccumulator */.SC(p);
-    for (let f = k - 1; f >= 0; f--) {
-        const without = prefix[f];
-        if (suffix.rows > 0)
-            without.merge(suffix);
-        out[f] = without;
-        if (f > 0) {
-            const s = factors[f].clone();
-            if (suffix.rows > 0)
-                s.merge(suffix);
-            suffix = s;
-        }
-    }
-    return out;
-}
-/**
- * Scores each row with the coefficients fitted without its fold, for S settings at once, in one
- * pass over the rows. `visit` (optional) sees every design block too (for further figures in the
- * same pass).
- *
- * @param design the design (p columns)
- * @param data rows
- * @param folds fold of each row
- * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
- * @param visit called with each block (column-major m x p), its first row and m
- */
-function outOfFoldErrors(design, data, folds, coefficients, visit) {
-    const p = design.p;
-    const k = folds.k;
-    const S = coefficients.length;
-    const sse = Array.from({ length: S }, () => new Array(k).fill(0));
-    const foldOf = folds.foldOf;
-    // W[s][j * k + f]: coefficient j of setting s fitted without fold f (one flat table per setting).
-    const tables = coefficients.map((bySet) => {
-        const t = new Float64Array(p * k);
-        for (let f = 0; f < k; f++)
-            for (let j = 0; j < p; j++)
-                t[j * k + f] = bySet[f][j];
-        return t;
-    });
-    let pred = new Float64Array(0);
-    (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
-        if (pred.length < m)
-            pred = new Float64Array(m);
-        for (let s = 0; s < S; s++) {
-            const W = tables[s];
-            const errors = sse[s];
-            pred.fill(0, 0, m);
-            // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
-            for (let j = 0; j < p; j++) {
-                const col = j * m;
-                const base = j * k;
-                for (let i = 0; i < m; i++)
-                    pred[i] += X[col + i] * W[base + foldOf[start + i]];
-            }
-            for (let i = 0; i < m; i++) {
-                const r = data.y[start + i] - pred[i];
-                errors[foldOf[start + i]] += r * r;
-            }
-        }
-        visit?.(X, start, m);
-    });
-    return { sse };
-}
-/**
- * Summarises per-fold squared error sums.
- *
- * @param sse per-fold sums of squared out-of-fold errors (length k)
- * @param sizes rows per fold (length k)
- */
-function summariseFolds(sse, sizes) {
-    const k = sse.length;
-    let total = 0;
-    let n = 0;
-    const foldMse = sse.map((s, f) => {
-        total += s;
-        n += sizes[f];
-        return sizes[f] > 0 ? s / sizes[f] : Number.NaN;
-    });
-    const meanMse = foldMse.reduce((a, b) => a + b, 0) / k;
-    let ss = 0;
-    for (const v of foldMse)
-        ss += (v - meanMse) * (v - meanMse);
-    const seMse = k > 1 ? Math.sqrt(ss / (k - 1)) / Math.sqrt(k) : Number.NaN;
-    return { cvRmse: n > 0 ? Math.sqrt(total / n) : Number.NaN, foldMse, meanMse, seMse };
-}
-/** Coefficients of every complement fit, for each ridge penalty given. */
-function complementCoefficients(complements, ridges, penalised) {
-    return ridges.map((ridge) => complements.map((acc) => (0,src_fit/* solveCoefficients */.gQ)(acc, { ridge, penalised })));
-}
-/**
- * k-fold cross-validation, leave-one-out and generalised cross-validation of a fit, in two passes
- * over the training rows (one when the per-fold factors are given).
- *
- * Pass 1 folds each fold's rows into its own QR factor; the fit without fold f solves the merge of
- * the other factors with the same ridge penalty (exactly the fit a refit on those rows gives,
- * because a QR factor of stacked rows is the factor of the stacked factors). Pass 2 scores every
- * row under the fit without its fold and, in the same pass, takes the full fit's residual e_i and
- * leverage h_ii = x_i^T (X^T X + lambda E^T E)^+ x_i.
- *
- * - k-fold: cv_rmse = sqrt(sum over rows of squared out-of-fold errors / n).
- * - Leave-one-out by the PRESS shortcut: the residual of row i under the fit without row i is
- *   e_i / (1 - h_ii) (Allen, "The relationship between variable selection and data augmentation
- *   and a method for prediction", Technometrics 16(1), 1974; holds for ridge with the same
- *   penalty too); loocv_rmse = sqrt(mean((e_i / (1 - h_ii))^2)). A row with h_ii = 1 (the fit
- *   interpolates it) gives an infinite figure.
- * - GCV = mean(e_i^2) / (1 - df/n)^2 with df = trace of the hat matrix (Golub, Heath & Wahba,
- *   "Generalized cross-validation as a method for choosing a good ridge parameter",
- *   Technometrics 21(2), 1979, eq. 1.4 up to the factor n).
- *
- * @param design the model's design (p columns)
- * @param data training rows (n rows)
- * @param fit the full fit (its ridge and penalised mask are reused)
- * @param folds fold assignment of the n rows
- * @param options per-fold factors already built, and a buffer for the training predictions (default none)
- */
-function crossValidate(design, data, fit, folds, options = {}) {
-    const n = data.rows;
-    const p = design.p;
-    const k = folds.k;
-    const kfold = k >= 2;
-    let coefficients = [];
-    if (kfold) {
-        const complements = complementFactors(options.factors ?? foldFactors(design, data, folds));
-        coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
-    }
-    const w = fit.coefficients;
-    const out = options.predictions;
-    let press = 0;
-    let rss = 0;
-    let leverageSum = 0;
-    let maxLeverage = 0;
-    let rowsWithLeverageOne = 0;
-    let h = new Float64Array(0);
-    let pred = new Float64Array(0);
-    const visit = (X, start, m) => {
-        if (h.length < m) {
-            h = new Float64Array(m);
-            pred = new Float64Array(m);
-        }
-        (0,src_fit/* leveragesInto */.lG)(fit, X, m, h);
-        pred.fill(0, 0, m);
-        for (let j = 0; j < p; j++) {
-            const col = j * m;
-            const wj = w[j];
-            for (let i = 0; i < m; i++)
-                pred[i] += X[col + i] * wj;
-        }
-        if (out !== undefined)
-            out.set(pred.subarray(0, m), start);
-        for (let i = 0; i < m; i++) {
-            const e = data.y[start + i] - pred[i];
-            rss += e * e;
-            const hi = h[i];
-            leverageSum += hi;
-            if (hi > maxLeverage)
-                maxLeverage = hi;
-            if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
-                rowsWithLeverageOne++;
-                press = Infinity;
-            }
-            else {
-                const loo = e / (1 - hi);
-                press += loo * loo;
-            }
-        }
-    };
-    const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
-    const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;
-    const df = fit.degreesOfFreedom;
-    const gcvDenominator = 1 - df / n;
-    const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
-    return {
-        k,
-        foldSizes: [...folds.sizes],
-        cvRmse: summary ? summary.cvRmse : Number.NaN,
-        foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
-        meanMse: summary ? summary.meanMse : Number.NaN,
-        seMse: summary ? summary.seMse : Number.NaN,
-        loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
-        press,
-        gcv,
-        effectiveDf: df,
-        leverageSum,
-        maxLeverage,
-        rowsWithLeverageOne,
-        rss,
-        n,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/random.ts
-/**
- * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
- * every machine and every run with the same seed.
- */
-/**
- * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
- * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
- * state passed through a 32-bit integer finaliser (two xor-shift-multiply rounds, the constants of
- * the "lowbias32" mixer published by C. Wellons, "Prospecting for hash functions", 2018). Period
- * 2^32; good enough to shuffle rows, not for cryptography.
- *
- * @param seed any finite number; it is reduced to an unsigned 32-bit integer (the fraction is dropped)
- * @returns a function giving the next number in [0, 1)
- * @throws RangeError when the seed is not finite
- */
-function seededRandom(seed) {
-    if (!Number.isFinite(seed))
-        throw new RangeError(`seededRandom: seed must be a finite number, got ${String(seed)}`);
-    let state = Math.trunc(seed) >>> 0;
-    return () => {
-        state = (state + 0x9e3779b9) >>> 0;
-        let z = state;
-        z ^= z >>> 16;
-        z = Math.imul(z, 0x7feb352d);
-        z ^= z >>> 15;
-        z = Math.imul(z, 0x846ca68b);
-        z ^= z >>> 16;
-        return (z >>> 0) / 4294967296;
-    };
-}
-/**
- * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
- * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
- *
- * @param n length (a non-negative integer)
- * @param random uniform numbers in [0, 1)
- * @returns Int32Array of length n
- */
-function permutation(n, random) {
-    const out = new Int32Array(n);
-    for (let i = 0; i < n; i++)
-        out[i] = i;
-    for (let i = n - 1; i > 0; i--) {
-        const j = Math.floor(random() * (i + 1));
-        const t = out[i];
-        out[i] = out[j];
-        out[j] = t;
-    }
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/folds.ts
-
-/**
- * Fold sizes of k-fold cross-validation on n rows: the first n mod k folds hold floor(n/k) + 1
- * rows, the others floor(n/k) (the split of scikit-learn's `KFold`, documented in its user
- * guide, section 3.1.2.1).
- *
- * @param n rows (>= 0)
- * @param k folds (1 <= k <= max(n, 1))
- */
-function foldSizes(n, k) {
-    const base = Math.floor(n / k);
-    const extra = n % k;
-    return Array.from({ length: k }, (_, f) => base + (f < extra ? 1 : 0));
-}
-/**
- * Assigns n rows to k folds. `blocks`: contiguous blocks in file order with {@link foldSizes}
- * (right for rows ordered in time). `shuffled`: the rows are permuted by a Fisher-Yates shuffle
- * driven by {@link seededRandom}(seed), and consecutive runs of the permutation form folds of the
- * same sizes.
- *
- * @param n rows (a non-negative integer)
- * @param k requested folds; reduced to n when n < k (leave-one-out), at least 1
- * @param order `shuffled` (default in descriptors) or `blocks`
- * @param seed seed of the shuffle (default in descriptors: 1)
- * @throws RangeError when n or k is not a non-negative / positive integer
- */
-function assignFolds(n, k, order, seed) {
-    if (!Number.isInteger(n) || n < 0)
-        throw new RangeError(`assignFolds: n must be a non-negative integer, got ${String(n)}`);
-    if (!Number.isInteger(k) || k < 1)
-        throw new RangeError(`assignFolds: k must be a positive integer, got ${String(k)}`);
-    const kk = Math.max(1, Math.min(k, n));
-    const sizes = foldSizes(n, kk);
-    const foldOf = new Int32Array(n);
-    const perm = order === 'shuffled' ? permutation(n, seededRandom(seed)) : null;
-    let pos = 0;
-    for (let f = 0; f < kk; f++) {
-        for (let c = 0; c < sizes[f]; c++, pos++)
-            foldOf[perm === null ? pos : perm[pos]] = f;
-    }
-    return { k: kk, foldOf, sizes, order, seed };
-}
-
+// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
+var cross_validation = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
 ;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
 /**
  * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
@@ -16085,15 +9511,23 @@ function sweepTarget(descriptor, design) {
         return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
     return null;
 }
+/**
+ * Rows the sweep uses at most: above this a deterministic even-stride subsample (the detail says
+ * `subsampled: true` and gives `rows`). 50,000 rows estimate each setting's k-fold error to well
+ * under its own standard error, at a quarter of the cost of 200,000 (common practice: the curve
+ * only has to rank the settings).
+ */
+const SWEEP_MAX_ROWS = 50000;
 /** Every other row at an even stride, as new columns. */
 function subsample(data, m) {
     const n = data.rows;
-    const idx = Int32Array.from({ length: m }, (_, t) => Math.floor((t * n) / m));
-    return {
-        inputs: data.inputs.map((col) => Float64Array.from(idx, (i) => col[i])),
-        y: Float64Array.from(idx, (i) => data.y[i]),
-        rows: m,
+    const pick = (col) => {
+        const out = new Float64Array(m);
+        for (let t = 0; t < m; t++)
+            out[t] = col[Math.floor((t * n) / m)];
+        return out;
     };
+    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
 }
 /**
  * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
@@ -16118,16 +9552,16 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
     const target = sweepTarget(descriptor, design);
     if (target === null || train.rows < 2)
         return null;
-    const maxRows = options.maxRows ?? 200000;
+    const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
     const subsampled = train.rows > maxRows;
     const rows = subsampled ? subsample(train, maxRows) : train;
-    const folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
     const ridge = descriptor.fit.ridge;
     const curve = [];
     const pointFrom = (setting, label, parameters, sse, current) => {
-        const s = summariseFolds(sse, folds.sizes);
+        const s = (0,cross_validation/* summariseFolds */.$l)(sse, folds.sizes);
         return { setting, label, parameters, cvRmse: s.cvRmse, meanMse: s.meanMse, seMse: s.seMse, current };
     };
     if (target.kind === 'ridge') {
@@ -16143,9 +9577,9 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         for (let t = 3; t >= -6; t -= 0.5)
             grid.push(scale * 10 ** t);
         const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
-        const factors = complementFactors(foldFactors(design, rows, folds));
-        const coefficients = complementCoefficients(factors, lambdas, design.penalised);
-        const { sse } = outOfFoldErrors(design, rows, folds, coefficients);
+        const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(design, rows, folds));
+        const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, lambdas, design.penalised);
+        const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(design, rows, folds, coefficients);
         lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
     }
     else {
@@ -16169,9 +9603,9 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
             const d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
             const label = `${target.kind} ${formatSetting(value)}`;
             try {
-                const factors = complementFactors(foldFactors(d, rows, folds));
-                const coefficients = complementCoefficients(factors, [ridge], d.penalised);
-                const { sse } = outOfFoldErrors(d, rows, folds, coefficients);
+                const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(d, rows, folds));
+                const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, [ridge], d.penalised);
+                const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(d, rows, folds, coefficients);
                 curve.push(pointFrom(value, label, d.p, sse[0], current));
             }
             catch (error) {
@@ -16247,7 +9681,7 @@ const complexity_check = {
     id: 'complexity',
     title: 'Simpler setting',
     limitKey: 'complexity',
-    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. Above 200,000 training rows the sweep uses an even-stride subsample of 200,000 rows. The whole curve is in the detail.",
+    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. Above 50,000 training rows the sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
     advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
     line: (d) => d.fit.line,
     measure({ descriptor, design, train, fit }) {
@@ -16330,379 +9764,8 @@ const conditioning_check = {
 
 // EXTERNAL MODULE: ./src/metrics/regression.ts
 var regression = __nccwpck_require__(1788);
-;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
-
-/**
- * Excursion of predictions outside the band [lo, hi] in units of its width:
- * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
- */
-function excursion(prediction, lo, hi) {
-    if (!(hi > lo) || prediction.length === 0)
-        return Number.NaN;
-    let worst = 0;
-    for (let i = 0; i < prediction.length; i++) {
-        const v = prediction[i];
-        const e = Number.isNaN(v) ? Infinity : Math.max(v - hi, lo - v);
-        if (e > worst)
-            worst = e;
-    }
-    return worst / (hi - lo);
-}
-/**
- * Grid across one input's range: `uniform` evenly spaced points from min to max, plus `perGap`
- * evenly spaced interior points in each gap between neighbouring distinct values (in the
- * `maxGaps` widest gaps when there are more; at least one per gap), plus `marginPoints` on each
- * side up to `margin` x range outside. Sorted, without duplicates.
- *
- * @param values the input's training values (any order; not modified)
- * @returns inside and beyond points, ascending; empty when the input has no spread
- */
-function inputGrid(values, options = {}) {
-    const perGap = options.perGap ?? 8;
-    const uniform = options.uniform ?? 201;
-    const margin = options.margin ?? 0.1;
-    const marginPoints = options.marginPoints ?? 40;
-    const maxGaps = options.maxGaps ?? 16000;
-    const sorted = Float64Array.from(values).sort();
-    const distinct = [];
-    for (const v of sorted)
-        if (distinct.length === 0 || v !== distinct[distinct.length - 1])
-            distinct.push(v);
-    if (distinct.length < 2)
-        return { inside: new Float64Array(0), beyond: new Float64Array(0) };
-    const lo = distinct[0];
-    const hi = distinct[distinct.length - 1];
-    const width = hi - lo;
-    const inside = [];
-    for (let t = 0; t < uniform; t++)
-        inside.push(t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1));
-    const gaps = widestGaps(distinct, maxGaps);
-    const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
-    for (const g of gaps) {
-        const a = distinct[g];
-        const b = distinct[g + 1];
-        for (let t = 1; t <= per; t++)
-            inside.push(a + ((b - a) * t) / (per + 1));
-    }
-    const beyond = [];
-    for (let t = 1; t <= marginPoints; t++) {
-        const d = (margin * width * t) / marginPoints;
-        beyond.push(lo - d, hi + d);
-    }
-    const unique = (xs) => {
-        const s = Float64Array.from(xs).sort();
-        let w = 0;
-        for (let i = 0; i < s.length; i++)
-            if (w === 0 || s[i] !== s[w - 1])
-                s[w++] = s[i];
-        return s.slice(0, w);
-    };
-    return { inside: unique(inside), beyond: unique(beyond) };
-}
-/**
- * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
- * ascending g; all gaps when there are no more than `maxGaps`. Linear time apart from one typed
- * sort of the widths (a comparator sort of index arrays took seconds on a million rows).
- */
-function widestGaps(distinct, maxGaps) {
-    const count = distinct.length - 1;
-    if (count <= maxGaps)
-        return Int32Array.from({ length: count }, (_, g) => g);
-    const widths = new Float64Array(count);
-    for (let g = 0; g < count; g++)
-        widths[g] = distinct[g + 1] - distinct[g];
-    const threshold = Float64Array.from(widths).sort()[count - maxGaps];
-    let above = 0;
-    for (let g = 0; g < count; g++)
-        if (widths[g] > threshold)
-            above++;
-    let ties = maxGaps - above;
-    const out = new Int32Array(maxGaps);
-    let w = 0;
-    for (let g = 0; g < count; g++) {
-        if (widths[g] > threshold || (widths[g] === threshold && ties-- > 0))
-            out[w++] = g;
-    }
-    return out;
-}
-/** Median of the first n values (selection on a copy; the input is not modified). NaN when n = 0. */
-function median(values, n) {
-    if (n === 0)
-        return Number.NaN;
-    const s = Float64Array.from(values.subarray(0, n));
-    const upper = swing_select(s, n >> 1);
-    if (n % 2 === 1)
-        return upper;
-    // The lower middle is the largest value left of the upper middle after selection.
-    let lower = -Infinity;
-    for (let i = 0; i < n >> 1; i++)
-        if (s[i] > lower)
-            lower = s[i];
-    return (lower + upper) / 2;
-}
-/**
- * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
- * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
- */
-function swing_select(a, k) {
-    let lo = 0;
-    let hi = a.length - 1;
-    while (hi > lo) {
-        const mid = (lo + hi) >> 1;
-        // Middle of three as pivot.
-        let x = a[lo];
-        let y = a[mid];
-        let z = a[hi];
-        if (x > y)
-            [x, y] = [y, x];
-        if (y > z)
-            [y, z] = [z, y];
-        if (x > y)
-            [x, y] = [y, x];
-        const pivot = y;
-        let i = lo;
-        let j = hi;
-        while (i <= j) {
-            while (a[i] < pivot)
-                i++;
-            while (a[j] > pivot)
-                j--;
-            if (i <= j) {
-                const t = a[i];
-                a[i] = a[j];
-                a[j] = t;
-                i++;
-                j--;
-            }
-        }
-        if (k <= j)
-            hi = j;
-        else if (k >= i)
-            lo = i;
-        else
-            return a[k];
-    }
-    return a[k];
-}
-/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
-function thinIndices(length, count, keep) {
-    if (length <= count)
-        return Array.from({ length }, (_, i) => i);
-    const chosen = new Set(keep.filter((i) => i >= 0 && i < length));
-    const slots = Math.max(2, count - chosen.size);
-    for (let t = 0; t < slots; t++)
-        chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
-    return [...chosen].sort((a, b) => a - b);
-}
-/**
- * Measures swing between and beyond samples for a fitted model.
- *
- * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
- * same grid along each input with the other inputs at their training medians, and (b) points on
- * the segments between each of up to `maxRows` sampled training rows (an even stride through the
- * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
- * standard deviations). Margins are along each input. The figure is {@link excursion} against the
- * band of training targets.
- *
- * @param design the fitted design
- * @param train training rows (inputs in `design.inputs` order)
- * @param coefficients fitted coefficients (length p)
- * @param options grid sizes (see {@link SwingOptions})
- */
-function measureSwing(design, train, coefficients, options = {}) {
-    const n = train.rows;
-    const d = design.inputs.length;
-    const margin = options.margin ?? 0.1;
-    const maxCurvePoints = options.maxCurvePoints ?? 400;
-    let ylo = Infinity;
-    let yhi = -Infinity;
-    for (let i = 0; i < n; i++) {
-        if (train.y[i] < ylo)
-            ylo = train.y[i];
-        if (train.y[i] > yhi)
-            yhi = train.y[i];
-    }
-    const band = [ylo, yhi];
-    const predictAt = (columns, m) => (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
-    const medians = train.inputs.map((col) => median(col, n));
-    let inside = 0;
-    let beyond = 0;
-    let insideCount = 0;
-    let beyondCount = 0;
-    let worstInside = null;
-    let worstBeyond = null;
-    const pointAt = (columns, i, prediction) => {
-        const inputs = {};
-        design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
-        return { inputs, prediction };
-    };
-    /** Scores points; returns predictions. */
-    const score = (columns, m, where) => {
-        const pred = predictAt(columns, m);
-        for (let i = 0; i < m; i++) {
-            const v = pred[i];
-            const e = Number.isNaN(v) ? Infinity : Math.max(0, v - yhi, ylo - v) / (yhi - ylo);
-            if (where === 'inside') {
-                if (worstInside === null || e > inside) {
-                    inside = Math.max(inside, e);
-                    worstInside = pointAt(columns, i, pred[i]);
-                }
-            }
-            else if (worstBeyond === null || e > beyond) {
-                beyond = Math.max(beyond, e);
-                worstBeyond = pointAt(columns, i, pred[i]);
-            }
-        }
-        if (where === 'inside')
-            insideCount += m;
-        else
-            beyondCount += m;
-        return pred;
-    };
-    // Along each input, the others at their medians.
-    const curves = [];
-    for (let c = 0; c < d; c++) {
-        const grid = inputGrid(train.inputs[c].subarray(0, n), options);
-        if (grid.inside.length === 0)
-            continue;
-        const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(medians[k])));
-        const pin = score(along(grid.inside), grid.inside.length, 'inside');
-        const pout = score(along(grid.beyond), grid.beyond.length, 'beyond');
-        // Curve for charts: all points ascending, thinned with the extremes kept.
-        const m = grid.inside.length + grid.beyond.length;
-        const xs = new Float64Array(m);
-        const ps = new Float64Array(m);
-        const order = Array.from({ length: m }, (_, i) => i).sort((a, b) => {
-            const xa = a < grid.inside.length ? grid.inside[a] : grid.beyond[a - grid.inside.length];
-            const xb = b < grid.inside.length ? grid.inside[b] : grid.beyond[b - grid.inside.length];
-            return xa - xb;
-        });
-        order.forEach((src, dst) => {
-            xs[dst] = src < grid.inside.length ? grid.inside[src] : grid.beyond[src - grid.inside.length];
-            ps[dst] = src < grid.inside.length ? pin[src] : pout[src - grid.inside.length];
-        });
-        let imax = 0;
-        let imin = 0;
-        for (let i = 1; i < m; i++) {
-            if (ps[i] > ps[imax])
-                imax = i;
-            if (ps[i] < ps[imin])
-                imin = i;
-        }
-        const keep = thinIndices(m, maxCurvePoints, [imax, imin]);
-        const others = {};
-        design.inputs.forEach((name, k) => {
-            if (k !== c)
-                others[name] = medians[k];
-        });
-        curves.push({
-            input: design.inputs[c],
-            others,
-            range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-            x: keep.map((i) => xs[i]),
-            prediction: keep.map((i) => ps[i]),
-        });
-    }
-    // Several inputs: segments between sampled rows and their nearest neighbours.
-    let segments = null;
-    if (d >= 2 && n >= 2) {
-        const maxRows = options.maxRows ?? 2000;
-        const kNear = options.neighbours ?? 3;
-        const perSegment = options.segmentPoints ?? 8;
-        const s = Math.min(n, maxRows);
-        const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
-        const scaled = train.inputs.map((col) => {
-            const v = Float64Array.from(rows, (r) => col[r]);
-            let mean = 0;
-            for (const x of v)
-                mean += x / s;
-            let ss = 0;
-            for (const x of v)
-                ss += (x - mean) * (x - mean);
-            const sd = Math.sqrt(ss / s);
-            return sd > 0 ? v.map((x) => (x - mean) / sd) : new Float64Array(s);
-        });
-        const kk = Math.min(kNear, s - 1);
-        const pairs = [];
-        const best = new Float64Array(kk);
-        const bestIdx = new Int32Array(kk);
-        for (let a = 0; a < s; a++) {
-            best.fill(Infinity);
-            bestIdx.fill(-1);
-            for (let b = 0; b < s; b++) {
-                if (b === a)
-                    continue;
-                let dist = 0;
-                for (const col of scaled) {
-                    const t = col[a] - col[b];
-                    dist += t * t;
-                }
-                if (dist === 0 || dist >= best[kk - 1])
-                    continue;
-                let pos = kk - 1;
-                while (pos > 0 && best[pos - 1] > dist) {
-                    best[pos] = best[pos - 1];
-                    bestIdx[pos] = bestIdx[pos - 1];
-                    pos--;
-                }
-                best[pos] = dist;
-                bestIdx[pos] = b;
-            }
-            for (let t = 0; t < kk; t++)
-                if (bestIdx[t] >= 0)
-                    pairs.push(rows[a], rows[bestIdx[t]]);
-        }
-        const segmentsCount = pairs.length / 2;
-        const m = segmentsCount * perSegment;
-        if (m > 0) {
-            const columns = train.inputs.map(() => new Float64Array(m));
-            for (let q = 0; q < segmentsCount; q++) {
-                const ra = pairs[2 * q];
-                const rb = pairs[2 * q + 1];
-                for (let t = 1; t <= perSegment; t++) {
-                    const f = t / (perSegment + 1);
-                    for (let c = 0; c < d; c++)
-                        columns[c][q * perSegment + t - 1] = train.inputs[c][ra] + f * (train.inputs[c][rb] - train.inputs[c][ra]);
-                }
-            }
-            score(columns, m, 'inside');
-        }
-        segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
-    }
-    const valid = ylo < yhi;
-    return {
-        inside: valid && insideCount > 0 ? inside : Number.NaN,
-        beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
-        band,
-        points: { inside: insideCount, beyond: beyondCount },
-        worstInside,
-        worstBeyond,
-        curves,
-        segments,
-        margin,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/shared.ts
-
-
-
-/** The model's folds from its `fit` settings (k = fit.folds, order fit.foldOrder, seed fit.seed). */
-function sharedFolds(context) {
-    return context.shared('diagnostics/folds', () => {
-        const { folds, foldOrder, seed } = context.descriptor.fit;
-        return assignFolds(context.train.rows, folds, foldOrder, seed);
-    });
-}
-/** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
-function sharedCrossValidation(context) {
-    return context.shared('diagnostics/cross-validation', () => crossValidate(context.design, context.train, context.fit, sharedFolds(context)));
-}
-/** Swing between and beyond samples of the refit (see {@link measureSwing}). */
-function sharedSwing(context) {
-    return context.shared('diagnostics/swing', () => measureSwing(context.design, context.train, context.fit.coefficients));
-}
-
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 2 modules
+var shared = __nccwpck_require__(4385);
 ;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
 
 
@@ -16716,8 +9779,8 @@ const cross_validation_check = {
     advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
     line: (d) => d.fit.line,
     measure(context) {
-        const folds = sharedFolds(context);
-        const cv = sharedCrossValidation(context);
+        const folds = (0,shared/* sharedFolds */.eQ)(context);
+        const cv = (0,shared/* sharedCrossValidation */.b6)(context);
         const { metrics, train, design } = context;
         const effectiveDf = cv.effectiveDf;
         const figures = {
@@ -16761,30 +9824,33 @@ const cross_validation_check = {
         };
     },
 };
-/* harmony default export */ const cross_validation = (cross_validation_check);
+/* harmony default export */ const checks_cross_validation = (cross_validation_check);
 
 ;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
 /** How many line numbers of each file to report. */
 const LEAKAGE_EXAMPLE_LINES = 5;
 const f64 = new Float64Array(1);
 const u32 = new Uint32Array(f64.buffer);
-/** 32-bit hash of the bit patterns of row i's values (-0 counts as 0). */
+/**
+ * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
+ * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
+ * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
+ * comparison, so the hash only has to spread rows over the table.
+ */
 function rowHash(columns, i) {
     let h = 0x811c9dc5;
-    for (const col of columns) {
-        f64[0] = col[i] + 0; // -0 + 0 === +0: equal values hash equal
-        for (let w = 0; w < 2; w++) {
-            // Multiply-xorshift mix of each 32-bit half (constants of the lowbias32 finaliser, Wellons 2018).
-            let z = (u32[w] ^ h) >>> 0;
-            z ^= z >>> 16;
-            z = Math.imul(z, 0x7feb352d);
-            z ^= z >>> 15;
-            z = Math.imul(z, 0x846ca68b);
-            z ^= z >>> 16;
-            h = (Math.imul(h, 0x01000193) ^ z) >>> 0;
-        }
+    for (let c = 0; c < columns.length; c++) {
+        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
+        h = Math.imul(h ^ u32[0], 0x9e3779b1);
+        h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
+        h ^= h >>> 13;
     }
-    return h;
+    h ^= h >>> 16;
+    h = Math.imul(h, 0x7feb352d);
+    h ^= h >>> 15;
+    h = Math.imul(h, 0x846ca68b);
+    h ^= h >>> 16;
+    return h >>> 0;
 }
 function sameInputs(a, i, b, j) {
     for (let c = 0; c < a.length; c++)
@@ -16796,50 +9862,67 @@ function sameInputs(a, i, b, j) {
  * Finds hold-out rows equal to a training row in every input column of the model (values compared
  * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
  * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
- * training rows.
+ * hold-out rows (typed arrays, about 20 bytes per row).
  *
  * @param train training rows (inputs in the model's order, targets, lines)
  * @param holdout hold-out rows (same input order)
  */
 function findLeakage(train, holdout) {
     const columns = train.inputs.length;
-    // Hash table: bucket head per hash, chained through `next` (no per-row objects).
-    const heads = new Map();
-    const next = new Int32Array(train.rows).fill(-1);
-    for (let i = train.rows - 1; i >= 0; i--) {
-        const h = rowHash(train.inputs, i);
-        const head = heads.get(h);
-        if (head !== undefined)
-            next[i] = head;
-        heads.set(h, i);
+    // Hash table of the hold-out rows (the smaller file, usually) by open addressing with linear
+    // probing over typed arrays: slot -> (hash, first row), rows with the same hash chained
+    // through `next`. No Map, no per-row objects. The training rows then stream past it in file
+    // order, so each hold-out row's first match is the earliest training row.
+    const h = holdout.rows;
+    let size = 1024;
+    while (size < 2 * h)
+        size *= 2;
+    const mask = size - 1;
+    const slotHash = new Uint32Array(size);
+    const slotHead = new Int32Array(size).fill(-1);
+    const next = new Int32Array(h).fill(-1);
+    const find = (hash) => {
+        let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+        while (slotHead[s] >= 0 && slotHash[s] !== hash)
+            s = (s + 1) & mask;
+        return s;
+    };
+    for (let r = h - 1; r >= 0; r--) {
+        const hash = rowHash(holdout.inputs, r);
+        const s = find(hash);
+        next[r] = slotHead[s];
+        slotHash[s] = hash;
+        slotHead[s] = r;
+    }
+    const firstMatch = new Int32Array(h).fill(-1);
+    const targetToo = new Uint8Array(h);
+    if (h > 0) {
+        for (let i = 0; i < train.rows; i++) {
+            let r = slotHead[find(rowHash(train.inputs, i))];
+            while (r >= 0) {
+                if (sameInputs(holdout.inputs, r, train.inputs, i)) {
+                    if (firstMatch[r] < 0)
+                        firstMatch[r] = i;
+                    if (holdout.y[r] === train.y[i])
+                        targetToo[r] = 1;
+                }
+                r = next[r];
+            }
+        }
     }
     let inputMatches = 0;
     let fullMatches = 0;
     const holdoutLines = [];
     const trainLines = [];
-    for (let r = 0; r < holdout.rows; r++) {
-        let i = heads.get(rowHash(holdout.inputs, r));
-        let firstMatch = -1;
-        let targetToo = false;
-        while (i !== undefined && i >= 0) {
-            if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-                if (firstMatch < 0)
-                    firstMatch = i;
-                if (holdout.y[r] === train.y[i]) {
-                    targetToo = true;
-                    break;
-                }
-            }
-            i = next[i];
-        }
-        if (firstMatch < 0)
+    for (let r = 0; r < h; r++) {
+        if (firstMatch[r] < 0)
             continue;
         inputMatches++;
-        if (targetToo)
+        if (targetToo[r] === 1)
             fullMatches++;
         if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
             holdoutLines.push(holdout.lines[r]);
-            trainLines.push(train.lines[firstMatch]);
+            trainLines.push(train.lines[firstMatch[r]]);
         }
     }
     return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
@@ -16885,6 +9968,8 @@ const leakage_check = {
 };
 /* harmony default export */ const leakage = (leakage_check);
 
+// EXTERNAL MODULE: ./src/model/blocks.ts
+var blocks = __nccwpck_require__(4607);
 ;// CONCATENATED MODULE: ./src/checks/reproducibility.ts
 
 
@@ -16986,7 +10071,7 @@ const swing_check = {
     advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
     line: (d) => d.termsLine,
     measure(context) {
-        const swing = sharedSwing(context);
+        const swing = (0,shared/* sharedSwing */.cQ)(context);
         if (Number.isNaN(swing.inside)) {
             return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is nothing between samples to scan', detail: swingDetail(swing) };
         }
@@ -17017,7 +10102,7 @@ const swing_beyond_check = {
     advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
     line: (d) => d.termsLine,
     measure(context) {
-        const swing = sharedSwing(context);
+        const swing = (0,shared/* sharedSwing */.cQ)(context);
         if (Number.isNaN(swing.beyond)) {
             return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is no range to step beyond' };
         }
@@ -17068,7 +10153,7 @@ const CHECKS = validate([
     parameter_ratio,
     coefficient_size,
     base_change,
-    cross_validation,
+    checks_cross_validation,
     swing,
     swing_beyond,
     leakage,
@@ -17162,7 +10247,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _output_files_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(5168);
 /* harmony import */ var _parallel_pool_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(7262);
 /* harmony import */ var _parallel_model_worker_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(322);
-/* harmony import */ var _pipeline_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(3481);
+/* harmony import */ var _pipeline_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(2321);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(4164);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_markdown_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(5900);
@@ -17235,17 +10320,16 @@ async function main(argv) {
             await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.writeFile)(parsed.out, text);
         else
             process.stdout.write(text);
-        if (parsed.kind === 'check') {
-            // SARIF paths are relative to the working directory when the root lies inside it (code scanning reads them from the checkout).
-            const prefix = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(process.cwd(), parsed.settings.root).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/');
-            await (0,_output_files_js__WEBPACK_IMPORTED_MODULE_6__/* .writeFileReports */ .n)(result, {
-                html: parsed.html,
-                sarif: parsed.sarif,
-                junit: parsed.junit,
-                sarifPrefix: prefix.startsWith('..') || node_path__WEBPACK_IMPORTED_MODULE_1___default().isAbsolute(prefix) ? '' : prefix,
-                failOn: parsed.settings.failOn,
-            });
-        }
+        // SARIF paths are relative to the working directory when the root lies inside it (code
+        // scanning reads them from the checkout); merged shard reports run from the root.
+        const prefix = parsed.kind === 'check' ? node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(process.cwd(), parsed.settings.root).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/') : '';
+        await (0,_output_files_js__WEBPACK_IMPORTED_MODULE_6__/* .writeFileReports */ .n)(result, {
+            html: parsed.html,
+            sarif: parsed.sarif,
+            junit: parsed.junit,
+            sarifPrefix: prefix.startsWith('..') || node_path__WEBPACK_IMPORTED_MODULE_1___default().isAbsolute(prefix) ? '' : prefix,
+            failOn,
+        });
         return (0,_result_js__WEBPACK_IMPORTED_MODULE_13__/* .exitStatus */ .$u)(result, failOn);
     }
     catch (error) {
@@ -17318,6 +10402,1161 @@ function createDesign(terms, intercept) {
             return out;
         },
     };
+}
+
+
+/***/ }),
+
+/***/ 8455:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   z: () => (/* binding */ columnMedian)
+/* harmony export */ });
+/* unused harmony export selectKth */
+/**
+ * Medians of training columns, computed once per column and shared by every reader (swing,
+ * charts): selection on a scratch copy, remembered per column array.
+ */
+const remembered = new WeakMap();
+/**
+ * Median of the first n values of a column: the middle value, or the mean of the two middle
+ * values when n is even; NaN when n = 0. Remembered per column array (and n), so a second
+ * reader gets it for free. The column is not modified.
+ *
+ * @param values the column (length >= n)
+ * @param n rows to take
+ * @param scratch optional work array of length >= n (default: a new one)
+ */
+function columnMedian(values, n, scratch) {
+    const known = remembered.get(values);
+    if (known !== undefined && known.n === n)
+        return known.median;
+    let median = Number.NaN;
+    if (n > 0) {
+        const s = scratch !== undefined && scratch.length >= n ? scratch.subarray(0, n) : new Float64Array(n);
+        s.set(values.subarray(0, n));
+        const upper = selectKth(s, n >> 1);
+        if (n % 2 === 1)
+            median = upper;
+        else {
+            // The lower middle is the largest value left of the upper middle after selection.
+            let lower = -Infinity;
+            for (let i = 0; i < n >> 1; i++)
+                if (s[i] > lower)
+                    lower = s[i];
+            median = (lower + upper) / 2;
+        }
+    }
+    remembered.set(values, { n, median });
+    return median;
+}
+/**
+ * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
+ * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
+ *
+ * @param a values (reordered in place)
+ * @param k rank, 0 <= k < a.length
+ */
+function selectKth(a, k) {
+    let lo = 0;
+    let hi = a.length - 1;
+    while (hi > lo) {
+        const mid = (lo + hi) >> 1;
+        let x = a[lo];
+        let y = a[mid];
+        let z = a[hi];
+        if (x > y)
+            [x, y] = [y, x];
+        if (y > z)
+            [y, z] = [z, y];
+        if (x > y)
+            [x, y] = [y, x];
+        const pivot = y;
+        let i = lo;
+        let j = hi;
+        while (i <= j) {
+            while (a[i] < pivot)
+                i++;
+            while (a[j] > pivot)
+                j--;
+            if (i <= j) {
+                const t = a[i];
+                a[i] = a[j];
+                a[j] = t;
+                i++;
+                j--;
+            }
+        }
+        if (k <= j)
+            hi = j;
+        else if (k >= i)
+            lo = i;
+        else
+            return a[k];
+    }
+    return a[k];
+}
+
+
+/***/ }),
+
+/***/ 7114:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   $l: () => (/* binding */ summariseFolds),
+/* harmony export */   DJ: () => (/* binding */ crossValidate),
+/* harmony export */   UN: () => (/* binding */ FoldFactorBuilder),
+/* harmony export */   Y6: () => (/* binding */ foldFactors),
+/* harmony export */   Yo: () => (/* binding */ outOfFoldErrors),
+/* harmony export */   Z4: () => (/* binding */ mergeFactors),
+/* harmony export */   Zd: () => (/* binding */ complementFactors),
+/* harmony export */   dn: () => (/* binding */ complementCoefficients)
+/* harmony export */ });
+/* unused harmony export LEVERAGE_ONE_TOLERANCE */
+/* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5999);
+/* harmony import */ var _model_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4607);
+
+
+/** Leverages within this distance of 1 count as 1 (the row is interpolated; its LOO error is infinite). */
+const LEVERAGE_ONE_TOLERANCE = 1e-10;
+/**
+ * Folds design blocks into one QR factor per fold as they stream past: a block whose rows all
+ * belong to one fold (the usual case for `blocks` folds) goes in as it is; otherwise its rows are
+ * gathered per fold into a scratch block first. Rows enter each fold's factor in file order.
+ */
+class FoldFactorBuilder {
+    /** One accumulator per fold (data rows only, no penalty). */
+    factors;
+    #folds;
+    #p;
+    #sub = new Float64Array(0);
+    #subY = new Float64Array(0);
+    #counts;
+    /**
+     * @param p design columns
+     * @param folds fold of each row
+     */
+    constructor(p, folds) {
+        this.#p = p;
+        this.#folds = folds;
+        this.factors = Array.from({ length: folds.k }, () => new _fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .QrAccumulator */ .SC(p));
+        this.#counts = new Int32Array(folds.k);
+    }
+    /**
+     * Adds rows [start, start + m) given as a column-major m x p block and their targets.
+     *
+     * @param X column-major m x p block
+     * @param y targets of the whole data set (indexed from `start`)
+     * @param start first row
+     * @param m rows in the block
+     */
+    add(X, y, start, m) {
+        const p = this.#p;
+        const k = this.#folds.k;
+        const foldOf = this.#folds.foldOf;
+        if (m === 0)
+            return;
+        const first = foldOf[start];
+        let single = true;
+        for (let i = 1; i < m; i++) {
+            if (foldOf[start + i] !== first) {
+                single = false;
+                break;
+            }
+        }
+        if (single) {
+            this.factors[first].addRows(X, y.subarray(start, start + m), m);
+            return;
+        }
+        if (this.#sub.length < m * p) {
+            this.#sub = new Float64Array(m * p);
+            this.#subY = new Float64Array(m);
+        }
+        const sub = this.#sub;
+        const subY = this.#subY;
+        const counts = this.#counts;
+        counts.fill(0);
+        for (let i = 0; i < m; i++)
+            counts[foldOf[start + i]]++;
+        for (let f = 0; f < k; f++) {
+            const mf = counts[f];
+            if (mf === 0)
+                continue;
+            // Gather the block's rows of fold f into a column-major mf x p block.
+            let r = 0;
+            for (let i = 0; i < m; i++) {
+                if (foldOf[start + i] !== f)
+                    continue;
+                for (let j = 0; j < p; j++)
+                    sub[j * mf + r] = X[j * m + i];
+                subY[r] = y[start + i];
+                r++;
+            }
+            this.factors[f].addRows(sub, subY, mf);
+        }
+    }
+}
+/**
+ * Folds the rows of each fold into its own QR factor in one pass over the rows.
+ *
+ * @param design the model's design (p columns)
+ * @param data rows (n = data.rows, equal to folds.foldOf.length)
+ * @param folds fold of each row
+ * @returns k accumulators, one per fold (data rows only, no penalty)
+ */
+function foldFactors(design, data, folds) {
+    const builder = new FoldFactorBuilder(design.p, folds);
+    (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => builder.add(X, data.y, start, m));
+    return builder.factors;
+}
+/**
+ * The factor of every row: the merge of the per-fold factors (a QR factor of stacked rows is the
+ * factor of the stacked factors; Golub & Van Loan, Matrix Computations, 4th ed., sec. 6.5.2).
+ *
+ * @param factors per-fold factors (not modified)
+ * @param p columns (used when there are no factors)
+ */
+function mergeFactors(factors, p) {
+    if (factors.length === 0)
+        return new _fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .QrAccumulator */ .SC(p);
+    const all = factors[0].clone();
+    for (let f = 1; f < factors.length; f++)
+        all.merge(factors[f]);
+    return all;
+}
+/**
+ * For each fold f, the factor of every other fold's rows: prefix and suffix merges, so k folds
+ * cost about 3k merges of p x p factors instead of k(k-1).
+ *
+ * @param factors per-fold factors from {@link foldFactors} (not modified)
+ * @returns k accumulators; entry f holds every row not in fold f
+ */
+function complementFactors(factors) {
+    const k = factors.length;
+    if (k === 0)
+        return [];
+    const p = factors[0].p;
+    const prefix = [new _fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .QrAccumulator */ .SC(p)];
+    for (let f = 1; f < k; f++) {
+        const next = prefix[f - 1].clone();
+        next.merge(factors[f - 1]);
+        prefix.push(next);
+    }
+    const out = new Array(k);
+    let suffix = new _fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .QrAccumulator */ .SC(p);
+    for (let f = k - 1; f >= 0; f--) {
+        const without = prefix[f];
+        if (suffix.rows > 0)
+            without.merge(suffix);
+        out[f] = without;
+        if (f > 0) {
+            const s = factors[f].clone();
+            if (suffix.rows > 0)
+                s.merge(suffix);
+            suffix = s;
+        }
+    }
+    return out;
+}
+/**
+ * Scores each row with the coefficients fitted without its fold, for S settings at once, in one
+ * pass over the rows. `visit` (optional) sees every design block too (for further figures in the
+ * same pass).
+ *
+ * @param design the design (p columns)
+ * @param data rows
+ * @param folds fold of each row
+ * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
+ * @param visit called with each block (column-major m x p), its first row and m
+ */
+function outOfFoldErrors(design, data, folds, coefficients, visit) {
+    const p = design.p;
+    const k = folds.k;
+    const S = coefficients.length;
+    const sse = Array.from({ length: S }, () => new Array(k).fill(0));
+    const foldOf = folds.foldOf;
+    // W[s][j * k + f]: coefficient j of setting s fitted without fold f (one flat table per setting).
+    const tables = coefficients.map((bySet) => {
+        const t = new Float64Array(p * k);
+        for (let f = 0; f < k; f++)
+            for (let j = 0; j < p; j++)
+                t[j * k + f] = bySet[f][j];
+        return t;
+    });
+    let pred = new Float64Array(0);
+    const column = new Float64Array(p);
+    (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
+        if (pred.length < m)
+            pred = new Float64Array(m);
+        // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
+        let single = m > 0 ? foldOf[start] : -1;
+        for (let i = 1; i < m && single >= 0; i++)
+            if (foldOf[start + i] !== single)
+                single = -1;
+        for (let s = 0; s < S; s++) {
+            const W = tables[s];
+            const errors = sse[s];
+            pred.fill(0, 0, m);
+            // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
+            if (single >= 0) {
+                for (let j = 0; j < p; j++)
+                    column[j] = W[j * k + single];
+                (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, column, p);
+            }
+            else {
+                for (let j = 0; j < p; j++) {
+                    const col = j * m;
+                    const base = j * k;
+                    for (let i = 0; i < m; i++)
+                        pred[i] += X[col + i] * W[base + foldOf[start + i]];
+                }
+            }
+            for (let i = 0; i < m; i++) {
+                const r = data.y[start + i] - pred[i];
+                errors[foldOf[start + i]] += r * r;
+            }
+        }
+        visit?.(X, start, m);
+    });
+    return { sse };
+}
+/**
+ * Summarises per-fold squared error sums.
+ *
+ * @param sse per-fold sums of squared out-of-fold errors (length k)
+ * @param sizes rows per fold (length k)
+ */
+function summariseFolds(sse, sizes) {
+    const k = sse.length;
+    let total = 0;
+    let n = 0;
+    const foldMse = sse.map((s, f) => {
+        total += s;
+        n += sizes[f];
+        return sizes[f] > 0 ? s / sizes[f] : Number.NaN;
+    });
+    const meanMse = foldMse.reduce((a, b) => a + b, 0) / k;
+    let ss = 0;
+    for (const v of foldMse)
+        ss += (v - meanMse) * (v - meanMse);
+    const seMse = k > 1 ? Math.sqrt(ss / (k - 1)) / Math.sqrt(k) : Number.NaN;
+    return { cvRmse: n > 0 ? Math.sqrt(total / n) : Number.NaN, foldMse, meanMse, seMse };
+}
+/** Coefficients of every complement fit, for each ridge penalty given. */
+function complementCoefficients(complements, ridges, penalised) {
+    return ridges.map((ridge) => complements.map((acc) => (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .solveCoefficients */ .gQ)(acc, { ridge, penalised })));
+}
+/**
+ * k-fold cross-validation, leave-one-out and generalised cross-validation of a fit, in two passes
+ * over the training rows (one when the per-fold factors are given).
+ *
+ * Pass 1 folds each fold's rows into its own QR factor; the fit without fold f solves the merge of
+ * the other factors with the same ridge penalty (exactly the fit a refit on those rows gives,
+ * because a QR factor of stacked rows is the factor of the stacked factors). Pass 2 scores every
+ * row under the fit without its fold and, in the same pass, takes the full fit's residual e_i and
+ * leverage h_ii = x_i^T (X^T X + lambda E^T E)^+ x_i.
+ *
+ * - k-fold: cv_rmse = sqrt(sum over rows of squared out-of-fold errors / n).
+ * - Leave-one-out by the PRESS shortcut: the residual of row i under the fit without row i is
+ *   e_i / (1 - h_ii) (Allen, "The relationship between variable selection and data augmentation
+ *   and a method for prediction", Technometrics 16(1), 1974; holds for ridge with the same
+ *   penalty too); loocv_rmse = sqrt(mean((e_i / (1 - h_ii))^2)). A row with h_ii = 1 (the fit
+ *   interpolates it) gives an infinite figure.
+ * - GCV = mean(e_i^2) / (1 - df/n)^2 with df = trace of the hat matrix (Golub, Heath & Wahba,
+ *   "Generalized cross-validation as a method for choosing a good ridge parameter",
+ *   Technometrics 21(2), 1979, eq. 1.4 up to the factor n).
+ *
+ * @param design the model's design (p columns)
+ * @param data training rows (n rows)
+ * @param fit the full fit (its ridge and penalised mask are reused)
+ * @param folds fold assignment of the n rows
+ * @param options per-fold factors already built, and a buffer for the training predictions (default none)
+ */
+function crossValidate(design, data, fit, folds, options = {}) {
+    const n = data.rows;
+    const p = design.p;
+    const k = folds.k;
+    const kfold = k >= 2;
+    let coefficients = [];
+    if (kfold) {
+        const complements = complementFactors(options.factors ?? foldFactors(design, data, folds));
+        coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
+    }
+    const w = fit.coefficients;
+    const out = options.predictions;
+    let press = 0;
+    let rss = 0;
+    let leverageSum = 0;
+    let maxLeverage = 0;
+    let rowsWithLeverageOne = 0;
+    let h = new Float64Array(0);
+    let pred = new Float64Array(0);
+    const visit = (X, start, m) => {
+        if (h.length < m) {
+            h = new Float64Array(m);
+            pred = new Float64Array(m);
+        }
+        (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .leveragesInto */ .lG)(fit, X, m, h);
+        pred.fill(0, 0, m);
+        (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
+        if (out !== undefined)
+            out.set(pred.subarray(0, m), start);
+        for (let i = 0; i < m; i++) {
+            const e = data.y[start + i] - pred[i];
+            rss += e * e;
+            const hi = h[i];
+            leverageSum += hi;
+            if (hi > maxLeverage)
+                maxLeverage = hi;
+            if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
+                rowsWithLeverageOne++;
+                press = Infinity;
+            }
+            else {
+                const loo = e / (1 - hi);
+                press += loo * loo;
+            }
+        }
+    };
+    const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
+    const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;
+    const df = fit.degreesOfFreedom;
+    const gcvDenominator = 1 - df / n;
+    const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
+    return {
+        k,
+        foldSizes: [...folds.sizes],
+        cvRmse: summary ? summary.cvRmse : Number.NaN,
+        foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
+        meanMse: summary ? summary.meanMse : Number.NaN,
+        seMse: summary ? summary.seMse : Number.NaN,
+        loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
+        press,
+        gcv,
+        effectiveDf: df,
+        leverageSum,
+        maxLeverage,
+        rowsWithLeverageOne,
+        rss,
+        n,
+    };
+}
+
+
+/***/ }),
+
+/***/ 7694:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  o: () => (/* binding */ assignFolds)
+});
+
+// UNUSED EXPORTS: foldSizes
+
+;// CONCATENATED MODULE: ./src/diagnostics/random.ts
+/**
+ * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
+ * every machine and every run with the same seed.
+ */
+/**
+ * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
+ * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
+ * state passed through a 32-bit integer finaliser (two xor-shift-multiply rounds, the constants of
+ * the "lowbias32" mixer published by C. Wellons, "Prospecting for hash functions", 2018). Period
+ * 2^32; good enough to shuffle rows, not for cryptography.
+ *
+ * @param seed any finite number; it is reduced to an unsigned 32-bit integer (the fraction is dropped)
+ * @returns a function giving the next number in [0, 1)
+ * @throws RangeError when the seed is not finite
+ */
+function seededRandom(seed) {
+    if (!Number.isFinite(seed))
+        throw new RangeError(`seededRandom: seed must be a finite number, got ${String(seed)}`);
+    let state = Math.trunc(seed) >>> 0;
+    return () => {
+        state = (state + 0x9e3779b9) >>> 0;
+        let z = state;
+        z ^= z >>> 16;
+        z = Math.imul(z, 0x7feb352d);
+        z ^= z >>> 15;
+        z = Math.imul(z, 0x846ca68b);
+        z ^= z >>> 16;
+        return (z >>> 0) / 4294967296;
+    };
+}
+/**
+ * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
+ * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
+ *
+ * @param n length (a non-negative integer)
+ * @param random uniform numbers in [0, 1)
+ * @returns Int32Array of length n
+ */
+function permutation(n, random) {
+    const out = new Int32Array(n);
+    for (let i = 0; i < n; i++)
+        out[i] = i;
+    for (let i = n - 1; i > 0; i--) {
+        const j = Math.floor(random() * (i + 1));
+        const t = out[i];
+        out[i] = out[j];
+        out[j] = t;
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/folds.ts
+
+/**
+ * Fold sizes of k-fold cross-validation on n rows: the first n mod k folds hold floor(n/k) + 1
+ * rows, the others floor(n/k) (the split of scikit-learn's `KFold`, documented in its user
+ * guide, section 3.1.2.1).
+ *
+ * @param n rows (>= 0)
+ * @param k folds (1 <= k <= max(n, 1))
+ */
+function foldSizes(n, k) {
+    const base = Math.floor(n / k);
+    const extra = n % k;
+    return Array.from({ length: k }, (_, f) => base + (f < extra ? 1 : 0));
+}
+/**
+ * Assigns n rows to k folds. `blocks`: contiguous blocks in file order with {@link foldSizes}
+ * (right for rows ordered in time). `shuffled`: the rows are permuted by a Fisher-Yates shuffle
+ * driven by {@link seededRandom}(seed), and consecutive runs of the permutation form folds of the
+ * same sizes.
+ *
+ * @param n rows (a non-negative integer)
+ * @param k requested folds; reduced to n when n < k (leave-one-out), at least 1
+ * @param order `shuffled` (default in descriptors) or `blocks`
+ * @param seed seed of the shuffle (default in descriptors: 1)
+ * @throws RangeError when n or k is not a non-negative / positive integer
+ */
+function assignFolds(n, k, order, seed) {
+    if (!Number.isInteger(n) || n < 0)
+        throw new RangeError(`assignFolds: n must be a non-negative integer, got ${String(n)}`);
+    if (!Number.isInteger(k) || k < 1)
+        throw new RangeError(`assignFolds: k must be a positive integer, got ${String(k)}`);
+    const kk = Math.max(1, Math.min(k, n));
+    const sizes = foldSizes(n, kk);
+    const foldOf = new Int32Array(n);
+    const perm = order === 'shuffled' ? permutation(n, seededRandom(seed)) : null;
+    let pos = 0;
+    for (let f = 0; f < kk; f++) {
+        for (let c = 0; c < sizes[f]; c++, pos++)
+            foldOf[perm === null ? pos : perm[pos]] = f;
+    }
+    return { k: kk, foldOf, sizes, order, seed };
+}
+
+
+/***/ }),
+
+/***/ 4385:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  X: () => (/* binding */ SHARED_CROSS_VALIDATION_KEY),
+  Tq: () => (/* binding */ SHARED_FOLDS_KEY),
+  b6: () => (/* binding */ sharedCrossValidation),
+  eQ: () => (/* binding */ sharedFolds),
+  cQ: () => (/* binding */ sharedSwing)
+});
+
+// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
+var cross_validation = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/model/blocks.ts
+var blocks = __nccwpck_require__(4607);
+// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
+var column_median = __nccwpck_require__(8455);
+;// CONCATENATED MODULE: ./src/diagnostics/radix-sort.ts
+/**
+ * Sorting of large Float64Array columns: a distribution (bucket) sort when the values are spread
+ * evenly, else a least-significant-digit radix sort on the IEEE 754 bit patterns (Knuth, The Art
+ * of Computer Programming, vol. 3, 2nd ed., sec. 5.2.5); both several times faster than the
+ * built-in typed-array sort on a million values, with the same result.
+ */
+/** Below this length the built-in sort is used. */
+const RADIX_FROM = 4096;
+const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
+/**
+ * Sorts `a` ascending in place, in the order of `Float64Array.prototype.sort` (-0 before +0; the
+ * columns sorted here hold no NaN) and returns it.
+ *
+ * Evenly spread values go by buckets of equal width ({@link bucketSort}). Otherwise the bit
+ * pattern of each value becomes an unsigned key that orders like the number (sign bit
+ * flipped for positives, every bit inverted for negatives), keys are sorted by four stable
+ * counting passes of 16 bits (a pass is skipped when every key has the same digit), and the
+ * patterns are turned back.
+ *
+ * @param a values (sorted in place)
+ * @param scratch optional work array of length >= 2 * a.length (default: a new one)
+ */
+function sortFloat64(a, scratch) {
+    const n = a.length;
+    if (n < RADIX_FROM || !LITTLE_ENDIAN)
+        return a.sort();
+    const usable = scratch !== undefined && scratch.length >= 2 * n && scratch.byteOffset % 8 === 0;
+    const work = usable ? scratch.subarray(0, 2 * n) : new Uint32Array(2 * n);
+    if (bucketSort(a, new Float64Array(work.buffer, work.byteOffset, n)))
+        return a;
+    return radixSort(a, work);
+}
+/** Largest bucket {@link bucketSort} sorts by insertion; a larger one sends the column to the radix sort. */
+const MAX_BUCKET = 48;
+/** a < b in the order of the built-in sort (-0 before +0). */
+function before(a, b) {
+    return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
+}
+/**
+ * Distribution sort for evenly spread values (Knuth, vol. 3, sec. 5.2.5 again: sorting by
+ * address calculation): about n/4 buckets of equal width between the extremes (the bucket index
+ * never decreases as the value grows), then insertion sort in each bucket. Returns false, with
+ * `a` unchanged, when the values are not spread evenly enough (a bucket over MAX_BUCKET values)
+ * or the extremes are not usable; the caller then sorts another way.
+ */
+function bucketSort(a, out) {
+    const n = a.length;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < n; i++) {
+        const v = a[i];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    const buckets = n >> 2;
+    const scale = buckets / (hi - lo);
+    if (!(hi > lo) || !Number.isFinite(scale) || !(scale > 0))
+        return false;
+    const start = new Int32Array(buckets + 1);
+    const last = buckets - 1;
+    for (let i = 0; i < n; i++) {
+        const b = Math.min(last, Math.floor((a[i] - lo) * scale));
+        start[b + 1]++;
+    }
+    for (let b = 0; b < buckets; b++) {
+        if (start[b + 1] > MAX_BUCKET)
+            return false;
+        start[b + 1] += start[b];
+    }
+    const fill = start.slice(0, buckets);
+    for (let i = 0; i < n; i++) {
+        const v = a[i];
+        const b = Math.min(last, Math.floor((v - lo) * scale));
+        out[fill[b]++] = v;
+    }
+    for (let b = 0; b < buckets; b++) {
+        const end = start[b + 1];
+        for (let i = start[b] + 1; i < end; i++) {
+            const v = out[i];
+            let j = i - 1;
+            while (j >= start[b] && before(v, out[j])) {
+                out[j + 1] = out[j];
+                j--;
+            }
+            out[j + 1] = v;
+        }
+    }
+    a.set(out);
+    return true;
+}
+/** The radix sort of {@link sortFloat64} (any values; `scratch` holds 2n words). */
+function radixSort(a, scratch) {
+    const n = a.length;
+    const u = new Uint32Array(a.buffer, a.byteOffset, 2 * n);
+    const counts = new Uint32Array(4 * 65536);
+    for (let i = 0; i < n; i++) {
+        let lo = u[2 * i];
+        let hi = u[2 * i + 1];
+        if (hi & 0x80000000) {
+            hi = ~hi >>> 0;
+            lo = ~lo >>> 0;
+        }
+        else {
+            hi = (hi | 0x80000000) >>> 0;
+        }
+        u[2 * i] = lo;
+        u[2 * i + 1] = hi;
+        counts[lo & 0xffff]++;
+        counts[65536 + (lo >>> 16)]++;
+        counts[131072 + (hi & 0xffff)]++;
+        counts[196608 + (hi >>> 16)]++;
+    }
+    let src = u;
+    let dst = scratch;
+    for (let d = 0; d < 4; d++) {
+        const base = d * 65536;
+        const word = d < 2 ? 0 : 1;
+        const shift = d % 2 === 0 ? 0 : 16;
+        const firstDigit = (src[word] >>> shift) & 0xffff;
+        if (counts[base + firstDigit] === n)
+            continue; // every key has this digit
+        let sum = 0;
+        for (let b = 0; b < 65536; b++) {
+            const c = counts[base + b];
+            counts[base + b] = sum;
+            sum += c;
+        }
+        for (let i = 0; i < n; i++) {
+            const digit = (src[2 * i + word] >>> shift) & 0xffff;
+            const pos = counts[base + digit]++;
+            dst[2 * pos] = src[2 * i];
+            dst[2 * pos + 1] = src[2 * i + 1];
+        }
+        const t = src;
+        src = dst;
+        dst = t;
+    }
+    if (src !== u)
+        u.set(src);
+    for (let i = 0; i < n; i++) {
+        const hi = u[2 * i + 1];
+        if (hi & 0x80000000) {
+            u[2 * i + 1] = (hi & 0x7fffffff) >>> 0;
+        }
+        else {
+            u[2 * i + 1] = ~hi >>> 0;
+            u[2 * i] = ~u[2 * i] >>> 0;
+        }
+    }
+    return a;
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
+
+
+
+/**
+ * Excursion of predictions outside the band [lo, hi] in units of its width:
+ * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
+ */
+function excursion(prediction, lo, hi) {
+    if (!(hi > lo) || prediction.length === 0)
+        return Number.NaN;
+    let worst = 0;
+    for (let i = 0; i < prediction.length; i++) {
+        const v = prediction[i];
+        const e = Number.isNaN(v) ? Infinity : Math.max(v - hi, lo - v);
+        if (e > worst)
+            worst = e;
+    }
+    return worst / (hi - lo);
+}
+/**
+ * Grid across one input's range: `uniform` evenly spaced points from min to max, plus `perGap`
+ * evenly spaced interior points in each gap between neighbouring distinct values (in the
+ * `maxGaps` widest gaps when there are more; at least one per gap), plus `marginPoints` on each
+ * side up to `margin` x range outside. Sorted, without duplicates.
+ *
+ * @param values the input's training values (any order; not modified)
+ * @returns inside and beyond points, ascending; empty when the input has no spread
+ */
+function inputGrid(values, options = {}) {
+    const sorted = Float64Array.from(values).sort();
+    return gridFromSorted(sorted, sorted.length, options);
+}
+/**
+ * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
+ * array is overwritten (its distinct values are packed to the front).
+ */
+function gridFromSorted(sorted, n, options, work) {
+    const perGap = options.perGap ?? 8;
+    const uniform = options.uniform ?? 201;
+    const margin = options.margin ?? 0.1;
+    const marginPoints = options.marginPoints ?? 40;
+    const maxGaps = options.maxGaps ?? 16000;
+    let count = 0;
+    for (let i = 0; i < n; i++)
+        if (count === 0 || sorted[i] !== sorted[count - 1])
+            sorted[count++] = sorted[i];
+    const distinct = sorted.subarray(0, count);
+    if (count < 2)
+        return { inside: new Float64Array(0), beyond: new Float64Array(0) };
+    const lo = distinct[0];
+    const hi = distinct[count - 1];
+    const width = hi - lo;
+    const gaps = widestGaps(distinct, maxGaps, work);
+    const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
+    const inside = new Float64Array(uniform + gaps.length * per);
+    let w = 0;
+    for (let t = 0; t < uniform; t++)
+        inside[w++] = t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1);
+    for (const g of gaps) {
+        const a = distinct[g];
+        const b = distinct[g + 1];
+        for (let t = 1; t <= per; t++)
+            inside[w++] = a + ((b - a) * t) / (per + 1);
+    }
+    const beyond = new Float64Array(2 * marginPoints);
+    for (let t = 1; t <= marginPoints; t++) {
+        const d = (margin * width * t) / marginPoints;
+        beyond[2 * t - 2] = lo - d;
+        beyond[2 * t - 1] = hi + d;
+    }
+    const unique = (xs, length) => {
+        const u = sortFloat64(xs.subarray(0, length));
+        let k = 0;
+        for (let i = 0; i < u.length; i++)
+            if (k === 0 || u[i] !== u[k - 1])
+                u[k++] = u[i];
+        return u.slice(0, k);
+    };
+    return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+}
+/**
+ * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
+ * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
+ * is found by selection ({@link select}) on one typed array of the widths.
+ */
+function widestGaps(distinct, maxGaps, work) {
+    const count = distinct.length - 1;
+    if (count <= maxGaps)
+        return Int32Array.from({ length: count }, (_, g) => g);
+    const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
+    for (let g = 0; g < count; g++)
+        widths[g] = distinct[g + 1] - distinct[g];
+    const threshold = swing_select(widths, count - maxGaps);
+    let above = 0;
+    for (let g = 0; g < count; g++)
+        if (distinct[g + 1] - distinct[g] > threshold)
+            above++;
+    let ties = maxGaps - above;
+    const out = new Int32Array(maxGaps);
+    let w = 0;
+    for (let g = 0; g < count; g++) {
+        const width = distinct[g + 1] - distinct[g];
+        if (width > threshold || (width === threshold && ties-- > 0))
+            out[w++] = g;
+    }
+    return out;
+}
+/**
+ * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
+ * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
+ */
+function swing_select(a, k) {
+    let lo = 0;
+    let hi = a.length - 1;
+    while (hi > lo) {
+        const mid = (lo + hi) >> 1;
+        // Middle of three as pivot.
+        let x = a[lo];
+        let y = a[mid];
+        let z = a[hi];
+        if (x > y)
+            [x, y] = [y, x];
+        if (y > z)
+            [y, z] = [z, y];
+        if (x > y)
+            [x, y] = [y, x];
+        const pivot = y;
+        let i = lo;
+        let j = hi;
+        while (i <= j) {
+            while (a[i] < pivot)
+                i++;
+            while (a[j] > pivot)
+                j--;
+            if (i <= j) {
+                const t = a[i];
+                a[i] = a[j];
+                a[j] = t;
+                i++;
+                j--;
+            }
+        }
+        if (k <= j)
+            hi = j;
+        else if (k >= i)
+            lo = i;
+        else
+            return a[k];
+    }
+    return a[k];
+}
+/**
+ * Copies the values an input's grid is built from into `out` and returns how many: every row
+ * when there are at most `max`, else `max - 2` rows at an even stride plus the smallest and the
+ * largest value. Large files have gaps far narrower than any swing, so the sample loses nothing
+ * the figure could show and saves sorting millions of values.
+ */
+function gridSample(column, n, max, out) {
+    if (n <= max) {
+        out.set(column.subarray(0, n));
+        return n;
+    }
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < n; i++) {
+        const v = column[i];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    const strided = max - 2;
+    for (let t = 0; t < strided; t++)
+        out[t] = column[Math.floor((t * n) / strided)];
+    out[strided] = lo;
+    out[strided + 1] = hi;
+    return max;
+}
+/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
+function thinIndices(length, count, keep) {
+    if (length <= count)
+        return Array.from({ length }, (_, i) => i);
+    const chosen = new Set(keep.filter((i) => i >= 0 && i < length));
+    const slots = Math.max(2, count - chosen.size);
+    for (let t = 0; t < slots; t++)
+        chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
+    return [...chosen].sort((a, b) => a - b);
+}
+/**
+ * Measures swing between and beyond samples for a fitted model.
+ *
+ * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
+ * same grid along each input with the other inputs at their training medians, and (b) points on
+ * the segments between each of up to `maxRows` sampled training rows (an even stride through the
+ * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
+ * standard deviations). Margins are along each input. The figure is {@link excursion} against the
+ * band of training targets.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param options grid sizes (see {@link SwingOptions})
+ */
+function measureSwing(design, train, coefficients, options = {}) {
+    const n = train.rows;
+    const d = design.inputs.length;
+    const margin = options.margin ?? 0.1;
+    const maxCurvePoints = options.maxCurvePoints ?? 400;
+    let ylo = Infinity;
+    let yhi = -Infinity;
+    for (let i = 0; i < n; i++) {
+        if (train.y[i] < ylo)
+            ylo = train.y[i];
+        if (train.y[i] > yhi)
+            yhi = train.y[i];
+    }
+    const band = [ylo, yhi];
+    const predictAt = (columns, m) => (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
+    // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
+    const scratch = new Float64Array(n);
+    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
+    const radixScratch = new Uint32Array(2 * n);
+    let inside = 0;
+    let beyond = 0;
+    let insideCount = 0;
+    let beyondCount = 0;
+    let worstInside = null;
+    let worstBeyond = null;
+    const pointAt = (columns, i, prediction) => {
+        const inputs = {};
+        design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
+        return { inputs, prediction };
+    };
+    /** Scores points; returns predictions. */
+    const score = (columns, m, where) => {
+        const pred = predictAt(columns, m);
+        for (let i = 0; i < m; i++) {
+            const v = pred[i];
+            const e = Number.isNaN(v) ? Infinity : Math.max(0, v - yhi, ylo - v) / (yhi - ylo);
+            if (where === 'inside') {
+                if (worstInside === null || e > inside) {
+                    inside = Math.max(inside, e);
+                    worstInside = pointAt(columns, i, pred[i]);
+                }
+            }
+            else if (worstBeyond === null || e > beyond) {
+                beyond = Math.max(beyond, e);
+                worstBeyond = pointAt(columns, i, pred[i]);
+            }
+        }
+        if (where === 'inside')
+            insideCount += m;
+        else
+            beyondCount += m;
+        return pred;
+    };
+    // Along each input, the others at their medians (one reused column of each median).
+    const constants = medians.map(() => new Float64Array(0));
+    const constant = (k, length) => {
+        if (constants[k].length < length)
+            constants[k] = new Float64Array(length).fill(medians[k]);
+        return constants[k].subarray(0, length);
+    };
+    const curves = [];
+    for (let c = 0; c < d; c++) {
+        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 100_000, scratch);
+        const sample = scratch.subarray(0, len);
+        const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, options, new Float64Array(radixScratch.buffer, 0, len));
+        if (grid.inside.length === 0)
+            continue;
+        const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
+        const pin = score(along(grid.inside), grid.inside.length, 'inside');
+        const pout = score(along(grid.beyond), grid.beyond.length, 'beyond');
+        // Curve for charts: all points ascending, thinned with the extremes kept.
+        const m = grid.inside.length + grid.beyond.length;
+        const xs = new Float64Array(m);
+        const ps = new Float64Array(m);
+        // Merge the two ascending point sets (they never share a value: the margins lie outside
+        // the range), which is the order a stable sort by x gives.
+        const nIn = grid.inside.length;
+        const nOut = grid.beyond.length;
+        for (let a = 0, b = 0, dst = 0; dst < m; dst++) {
+            if (b >= nOut || (a < nIn && grid.inside[a] <= grid.beyond[b])) {
+                xs[dst] = grid.inside[a];
+                ps[dst] = pin[a++];
+            }
+            else {
+                xs[dst] = grid.beyond[b];
+                ps[dst] = pout[b++];
+            }
+        }
+        let imax = 0;
+        let imin = 0;
+        for (let i = 1; i < m; i++) {
+            if (ps[i] > ps[imax])
+                imax = i;
+            if (ps[i] < ps[imin])
+                imin = i;
+        }
+        const keep = thinIndices(m, maxCurvePoints, [imax, imin]);
+        const others = {};
+        design.inputs.forEach((name, k) => {
+            if (k !== c)
+                others[name] = medians[k];
+        });
+        curves.push({
+            input: design.inputs[c],
+            others,
+            range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+            x: keep.map((i) => xs[i]),
+            prediction: keep.map((i) => ps[i]),
+        });
+    }
+    // Several inputs: segments between sampled rows and their nearest neighbours.
+    let segments = null;
+    if (d >= 2 && n >= 2) {
+        const maxRows = options.maxRows ?? 2000;
+        const kNear = options.neighbours ?? 3;
+        const perSegment = options.segmentPoints ?? 8;
+        const s = Math.min(n, maxRows);
+        const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
+        // Scaled inputs of the sampled rows, row-major (flat[a * d + c]) for the neighbour search.
+        const flat = new Float64Array(s * d);
+        train.inputs.forEach((col, c) => {
+            const v = Float64Array.from(rows, (r) => col[r]);
+            let mean = 0;
+            for (const x of v)
+                mean += x / s;
+            let ss = 0;
+            for (const x of v)
+                ss += (x - mean) * (x - mean);
+            const sd = Math.sqrt(ss / s);
+            for (let a = 0; a < s; a++)
+                flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
+        });
+        const kk = Math.min(kNear, s - 1);
+        const pairs = [];
+        const best = new Float64Array(kk);
+        const bestIdx = new Int32Array(kk);
+        for (let a = 0; a < s; a++) {
+            best.fill(Infinity);
+            bestIdx.fill(-1);
+            const ra = a * d;
+            for (let b = 0; b < s; b++) {
+                if (b === a)
+                    continue;
+                const rb = b * d;
+                // Partial sums only grow, so stopping once one reaches the k-th best distance skips
+                // exactly the rows the full sum would skip.
+                const limit = best[kk - 1];
+                let dist = 0;
+                for (let c = 0; c < d && dist < limit; c++) {
+                    const t = flat[ra + c] - flat[rb + c];
+                    dist += t * t;
+                }
+                if (dist === 0 || dist >= limit)
+                    continue;
+                let pos = kk - 1;
+                while (pos > 0 && best[pos - 1] > dist) {
+                    best[pos] = best[pos - 1];
+                    bestIdx[pos] = bestIdx[pos - 1];
+                    pos--;
+                }
+                best[pos] = dist;
+                bestIdx[pos] = b;
+            }
+            for (let t = 0; t < kk; t++)
+                if (bestIdx[t] >= 0)
+                    pairs.push(rows[a], rows[bestIdx[t]]);
+        }
+        const segmentsCount = pairs.length / 2;
+        const m = segmentsCount * perSegment;
+        if (m > 0) {
+            const columns = train.inputs.map(() => new Float64Array(m));
+            for (let q = 0; q < segmentsCount; q++) {
+                const ra = pairs[2 * q];
+                const rb = pairs[2 * q + 1];
+                for (let t = 1; t <= perSegment; t++) {
+                    const f = t / (perSegment + 1);
+                    for (let c = 0; c < d; c++)
+                        columns[c][q * perSegment + t - 1] = train.inputs[c][ra] + f * (train.inputs[c][rb] - train.inputs[c][ra]);
+                }
+            }
+            score(columns, m, 'inside');
+        }
+        segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
+    }
+    const valid = ylo < yhi;
+    return {
+        inside: valid && insideCount > 0 ? inside : Number.NaN,
+        beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
+        band,
+        points: { inside: insideCount, beyond: beyondCount },
+        worstInside,
+        worstBeyond,
+        curves,
+        segments,
+        margin,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/shared.ts
+
+
+
+/** Memo key of {@link sharedFolds} (the pipeline fills it from its own pass). */
+const SHARED_FOLDS_KEY = 'diagnostics/folds';
+/** Memo key of {@link sharedCrossValidation} (the pipeline fills it from its own passes). */
+const SHARED_CROSS_VALIDATION_KEY = 'diagnostics/cross-validation';
+/** The model's folds from its `fit` settings (k = fit.folds, order fit.foldOrder, seed fit.seed). */
+function sharedFolds(context) {
+    return context.shared(SHARED_FOLDS_KEY, () => {
+        const { folds, foldOrder, seed } = context.descriptor.fit;
+        return (0,diagnostics_folds/* assignFolds */.o)(context.train.rows, folds, foldOrder, seed);
+    });
+}
+/** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
+function sharedCrossValidation(context) {
+    return context.shared(SHARED_CROSS_VALIDATION_KEY, () => (0,cross_validation/* crossValidate */.DJ)(context.design, context.train, context.fit, sharedFolds(context)));
+}
+/** Swing between and beyond samples of the refit (see {@link measureSwing}). */
+function sharedSwing(context) {
+    return context.shared('diagnostics/swing', () => measureSwing(context.design, context.train, context.fit.coefficients));
 }
 
 
@@ -17904,31 +12143,61 @@ class qr_accumulator_QrAccumulator {
                 const a0 = alpha / amax;
                 norm = amax * Math.sqrt(a0 * a0 + scaled);
             }
-            // H = I - v v^T / (beta (beta - alpha)), v = [alpha - beta; C[:, j]].
+            // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
+            // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
+            // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
             const beta = alpha >= 0 ? -norm : norm;
             const v0 = alpha - beta;
-            // Divide in two steps: beta * (beta - alpha) underflows for columns below about 1e-154.
-            const gap = beta - alpha;
-            for (let k = j + 1; k < p; k++) {
+            const tau = (beta - alpha) / beta;
+            for (let i = 0; i < mb; i++)
+                C[cj + i] /= v0;
+            let k = j + 1;
+            // Two columns at a time: each u_i is loaded once for both (per column the operations and
+            // their order are those of the single-column loop below).
+            for (; k + 1 < p; k += 2) {
+                const ck = k * ld;
+                const ck2 = ck + ld;
+                const rIdx = k * p + j;
+                const rIdx2 = rIdx + p;
+                let w1 = R[rIdx];
+                let w2 = R[rIdx2];
+                for (let i = 0; i < mb; i++) {
+                    const u = C[cj + i];
+                    w1 += u * C[ck + i];
+                    w2 += u * C[ck2 + i];
+                }
+                const f1 = tau * w1;
+                const f2 = tau * w2;
+                if (f1 === 0 && f2 === 0)
+                    continue;
+                R[rIdx] -= f1;
+                R[rIdx2] -= f2;
+                for (let i = 0; i < mb; i++) {
+                    const u = C[cj + i];
+                    C[ck + i] -= f1 * u;
+                    C[ck2 + i] -= f2 * u;
+                }
+            }
+            for (; k < p; k++) {
                 const ck = k * ld;
                 const rIdx = k * p + j;
-                let w = v0 * R[rIdx];
+                let w = R[rIdx];
                 for (let i = 0; i < mb; i++)
                     w += C[cj + i] * C[ck + i];
-                const f = w / beta / gap;
+                const f = tau * w;
                 if (f === 0)
                     continue;
-                R[rIdx] -= f * v0;
+                R[rIdx] -= f;
                 for (let i = 0; i < mb; i++)
                     C[ck + i] -= f * C[cj + i];
             }
             {
-                let w = v0 * qty[j];
+                let w = qty[j];
                 for (let i = 0; i < mb; i++)
                     w += C[cj + i] * yc[i];
-                const f = w / beta / gap;
+                const f = tau * w;
                 if (f !== 0) {
-                    qty[j] -= f * v0;
+                    qty[j] -= f;
                     for (let i = 0; i < mb; i++)
                         yc[i] -= f * C[cj + i];
                 }
@@ -18291,7 +12560,19 @@ function leveragesInto(fit, X, m, out) {
             const xj = j * m + i0;
             for (let i = 0; i < mb; i++)
                 Z[zj + i] = X[xj + i];
-            for (let k = 0; k < j; k++) {
+            let k = 0;
+            // Four earlier columns per sweep (the same subtractions in the same order per row).
+            for (; k + 3 < j; k += 4) {
+                const r0 = R[j * p + k];
+                const r1 = R[j * p + k + 1];
+                const r2 = R[j * p + k + 2];
+                const r3 = R[j * p + k + 3];
+                const z0 = k * CH;
+                for (let i = 0; i < mb; i++) {
+                    Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
+                }
+            }
+            for (; k < j; k++) {
                 const r = R[j * p + k];
                 const zk = k * CH;
                 for (let i = 0; i < mb; i++)
@@ -18836,12 +13117,18 @@ function gapRatio(trainRmse, holdoutRmse) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   aN: () => (/* binding */ forEachBlock),
+/* harmony export */   kD: () => (/* binding */ addProducts),
 /* harmony export */   tp: () => (/* binding */ predictRows)
 /* harmony export */ });
 /* unused harmony export blockRows */
-/** Rows per block for a design of p columns: about 1 M doubles (8 MiB), at least 64 rows. */
+/**
+ * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
+ * enough to stay in cache between building a block and folding it (the QR works on pieces of a
+ * few hundred rows of it), and to keep each pass's buffer from weighing on peak memory; large
+ * enough that the per-block overhead does not show.
+ */
 function blockRows(p) {
-    return Math.max(64, Math.floor((1 << 20) / Math.max(1, p)));
+    return Math.max(64, Math.floor((1 << 16) / Math.max(1, p)));
 }
 /**
  * Calls `visit(X, start, m)` for consecutive blocks of rows; `X` is column-major m x p and is
@@ -18859,18 +13146,51 @@ function forEachBlock(design, data, visit) {
 /** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
 function predictRows(design, data, w) {
     const out = new Float64Array(data.rows);
-    const p = design.p;
-    forEachBlock(design, data, (X, start, m) => {
-        for (let j = 0; j < p; j++) {
-            const wj = w[j];
-            if (wj === 0)
-                continue;
-            const base = j * m;
-            for (let i = 0; i < m; i++)
-                out[start + i] += X[base + i] * wj;
-        }
-    });
+    forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
     return out;
+}
+/**
+ * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block, the terms
+ * added one after another in column order (four columns per sweep over the rows, so each
+ * output is loaded and stored once per four columns; the sums are those of the plain loop).
+ * Columns whose weight is 0 are left out.
+ *
+ * @param out output (length >= at + m)
+ * @param at first output index
+ * @param X column-major m x p block
+ * @param m rows
+ * @param w coefficients (length >= p)
+ * @param p columns
+ */
+function addProducts(out, at, X, m, w, p) {
+    let j = 0;
+    for (; j + 3 < p; j += 4) {
+        const w0 = w[j];
+        const w1 = w[j + 1];
+        const w2 = w[j + 2];
+        const w3 = w[j + 3];
+        if (w0 === 0 || w1 === 0 || w2 === 0 || w3 === 0) {
+            for (let q = j; q < j + 4; q++)
+                addColumn(out, at, X, m, w[q], q);
+            continue;
+        }
+        const c0 = j * m;
+        const c1 = c0 + m;
+        const c2 = c1 + m;
+        const c3 = c2 + m;
+        for (let i = 0; i < m; i++)
+            out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
+    }
+    for (; j < p; j++)
+        addColumn(out, at, X, m, w[j], j);
+}
+/** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
+function addColumn(out, at, X, m, wj, j) {
+    if (wj === 0)
+        return;
+    const c = j * m;
+    for (let i = 0; i < m; i++)
+        out[at + i] += X[c + i] * wj;
 }
 
 
@@ -18886,14 +13206,14 @@ __nccwpck_require__.d(__webpack_exports__, {
   H_: () => (/* binding */ evaluateModel)
 });
 
-// UNUSED EXPORTS: MAX_PARAMETERS, fitModel
+// UNUSED EXPORTS: INTERNAL_ERROR, MAX_MAGNITUDE, MAX_PARAMETERS, fitModel
 
 // EXTERNAL MODULE: ./src/basis/index.ts + 3 modules
 var basis = __nccwpck_require__(2578);
 // EXTERNAL MODULE: ./src/basis/stats.ts
 var stats = __nccwpck_require__(6029);
-// EXTERNAL MODULE: ./src/checks/index.ts + 20 modules
-var src_checks = __nccwpck_require__(1221);
+// EXTERNAL MODULE: ./src/checks/index.ts + 15 modules
+var src_checks = __nccwpck_require__(5729);
 // EXTERNAL MODULE: ./src/design-matrix.ts
 var design_matrix = __nccwpck_require__(1927);
 // EXTERNAL MODULE: ./src/errors.ts
@@ -18956,9 +13276,18 @@ class ColumnSpread {
 var regression = __nccwpck_require__(1788);
 // EXTERNAL MODULE: ./src/result.ts
 var result = __nccwpck_require__(1666);
+// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
+var cross_validation = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 2 modules
+var shared = __nccwpck_require__(4385);
 // EXTERNAL MODULE: ./src/model/blocks.ts
 var blocks = __nccwpck_require__(4607);
+// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
+var column_median = __nccwpck_require__(8455);
 ;// CONCATENATED MODULE: ./src/model/chart-data.ts
+
 
 
 /** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
@@ -18997,13 +13326,6 @@ function series(data, predictions, max) {
         fitted: pick(predictions),
         residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
     };
-}
-/** Median of the first n values (sorted copy). NaN when n = 0. */
-function median(values, n) {
-    if (n === 0)
-        return Number.NaN;
-    const s = Float64Array.from(values.subarray(0, n)).sort();
-    return n % 2 === 1 ? s[(n - 1) / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
 }
 function minMax(values, n) {
     let lo = Infinity;
@@ -19148,7 +13470,7 @@ function readSweep(checks) {
 }
 /**
  * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
- * Cost: one pass over each file's kept rows, a sort per input for the medians, and
+ * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
  * {@link CURVE_POINTS} predictions per curve.
  * @param model the fitted model (design, coefficients, data, predictions)
  * @param checks the model's check outcomes (swing and complexity details are read when present)
@@ -19158,7 +13480,7 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     const { design, tables, metrics, fit, descriptor } = model;
     const { train, holdout } = tables;
     const inputs = [...design.inputs];
-    const medians = train.inputs.map((col) => median(col, train.rows));
+    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
     // One input: the curve over the scanned range with the band; several: partial curves.
     let fitCurve = null;
     const partials = [];
@@ -19390,9 +13712,28 @@ class ChunkBuilder {
         const exact = rows === this.capacity;
         const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
         const lines = exact ? this.lines : this.lines.slice(0, rows);
-        this.ready.push({ rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines });
+        const chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
+        if (exact)
+            this.#buffersOf.set(chunk, { slots, lines });
+        this.ready.push(chunk);
         this.fresh();
     }
+    /**
+     * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
+     * reused for a later chunk (no allocation per chunk when the reader copies each chunk away
+     * before asking for the next). Chunks of another size are ignored.
+     *
+     * @param chunk a chunk from {@link take}; must not be read afterwards
+     */
+    recycle(chunk) {
+        const buffers = this.#buffersOf.get(chunk);
+        if (buffers === undefined)
+            return;
+        this.#buffersOf.delete(chunk);
+        this.#spare.push(buffers);
+    }
+    #buffersOf = new WeakMap();
+    #spare = [];
     /** Takes the chunks handed out so far. */
     take() {
         return this.ready.splice(0, this.ready.length);
@@ -19401,9 +13742,17 @@ class ChunkBuilder {
     fresh() {
         if (this.capacity === 0)
             this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
+        this.row = 0;
+        while (this.#spare.length > 0) {
+            const spare = this.#spare.pop();
+            if (spare.lines.length !== this.capacity)
+                continue;
+            this.slots = spare.slots;
+            this.lines = spare.lines;
+            return;
+        }
         this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
         this.lines = new Int32Array(this.capacity);
-        this.row = 0;
     }
 }
 
@@ -19601,14 +13950,20 @@ async function* fastChunks(pieces, target) {
         reader.read(bytes);
         if (reader.stopped)
             return;
-        for (const chunk of reader.builder.take())
+        for (const chunk of reader.builder.take()) {
             yield chunk;
+            if (target.recycle === true)
+                reader.builder.recycle(chunk);
+        }
     }
     if (reader.plan === null)
         throw emptyError(target.file);
     reader.builder.flush();
-    for (const chunk of reader.builder.take())
+    for (const chunk of reader.builder.take()) {
         yield chunk;
+        if (target.recycle === true)
+            reader.builder.recycle(chunk);
+    }
 }
 /** State of the fast path between blocks. */
 class FastReader {
@@ -22125,8 +16480,11 @@ async function* generalChunks(pieces, target, skipRows = 0) {
             parser.write(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
             if (settle(null))
                 return;
-            for (const chunk of builder.take())
+            for (const chunk of builder.take()) {
                 yield chunk;
+                if (target.recycle === true)
+                    builder.recycle(chunk);
+            }
         }
         await endParser(parser);
         if (settle(bad))
@@ -22136,8 +16494,11 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         if (plan === null)
             throw emptyError(file);
         builder.flush();
-        for (const chunk of builder.take())
+        for (const chunk of builder.take()) {
             yield chunk;
+            if (target.recycle === true)
+                builder.recycle(chunk);
+        }
     }
     finally {
         parser.destroy();
@@ -22231,14 +16592,15 @@ function syntaxError(failure, file, line) {
 async function* readTableChunks(repo, path, options) {
     const settings = checkOptions(options);
     await checkSize(repo, path, settings.maxBytes);
-    yield* scan(repo, path, settings, () => undefined, false);
+    yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
 }
 /**
- * Reads the requested columns whole (concatenating the chunks, no per-row objects).
- *
- * The chunks are kept as they come and copied once into arrays of the exact final length:
- * the same peak memory as growing buffers by doubling (at most twice the data), with one
- * copy instead of several.
+ * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
+ * chunks kept): after the first chunk the row count is estimated from the file size and the
+ * bytes read so far (plus 5 %), each chunk is copied in as it arrives and dropped, and the
+ * arrays grow by 1.5x when the estimate was short. The result views the first `rows` entries
+ * (capacity beyond that stays allocated: a few percent). Peak memory is about the data plus
+ * one chunk, instead of twice the data.
  *
  * @param repo where the file lives
  * @param path repository-relative path of the CSV file
@@ -22247,22 +16609,58 @@ async function* readTableChunks(repo, path, options) {
  */
 async function readTable(repo, path, options) {
     const settings = checkOptions(options);
-    await checkSize(repo, path, settings.maxBytes);
+    const size = await checkSize(repo, path, settings.maxBytes);
     let header = [];
-    const chunks = [];
+    let bytesRead = 0;
+    const counted = async function* () {
+        for await (const piece of repo.stream(path)) {
+            bytesRead += piece.length;
+            yield piece;
+        }
+    };
+    // First position of each distinct requested name (a repeated name shares one array).
+    const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
+    let columns = [];
+    let lines = new Int32Array(0);
     let rows = 0;
-    for await (const chunk of scan(repo, path, settings, (plan) => (header = plan.header), false)) {
-        chunks.push(chunk);
-        rows += chunk.rows;
+    const grow = (capacity) => {
+        columns = settings.columns.map((_, k) => {
+            if (firstOf[k] !== k)
+                return columns[firstOf[k]];
+            const next = new Float64Array(capacity);
+            if (rows > 0)
+                next.set(columns[k].subarray(0, rows));
+            return next;
+        });
+        const nextLines = new Int32Array(capacity);
+        if (rows > 0)
+            nextLines.set(lines.subarray(0, rows));
+        lines = nextLines;
+    };
+    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+        const needed = rows + chunk.rows;
+        if (needed > lines.length) {
+            let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
+            if (rows === 0 && bytesRead > 0) {
+                // First chunk: estimate the whole file's rows from its bytes per row.
+                const estimate = Math.ceil((size / bytesRead) * chunk.rows * 1.05);
+                capacity = Math.max(needed, Math.min(estimate, Math.ceil(size / 2) + 1));
+            }
+            grow(capacity);
+        }
+        settings.columns.forEach((_, k) => {
+            if (firstOf[k] === k)
+                columns[k].set(chunk.columns[k], rows);
+        });
+        lines.set(chunk.lines, rows);
+        rows = needed;
     }
-    const columns = new Map();
+    const out = new Map();
     settings.columns.forEach((name, k) => {
-        if (columns.has(name))
-            return;
-        columns.set(name, concatenate(chunks.map((chunk) => chunk.columns[k]), new Float64Array(rows)));
+        if (!out.has(name))
+            out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
     });
-    const lines = concatenate(chunks.map((chunk) => chunk.lines), new Int32Array(rows));
-    return { file: path, header, rows, columns, lines };
+    return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
 }
 /**
  * Reads only the header names (for messages and checks): trimmed, in file order, checked
@@ -22277,7 +16675,7 @@ async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES) {
     await checkSize(repo, path, settings.maxBytes);
     let header = [];
     // A header-only scan ends right after the header and yields no rows.
-    const scanning = scan(repo, path, settings, (plan) => (header = plan.header), true);
+    const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
     while (!(await scanning.next()).done)
         ;
     return header;
@@ -22295,12 +16693,13 @@ function checkOptions(options) {
         throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
     return { columns, chunkRows, maxBytes, general };
 }
-/** InputError `file-too-large` when the file is over the cap. */
+/** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
 async function checkSize(repo, path, maxBytes) {
     const size = await repo.size(path);
     if (size > maxBytes) {
         throw new errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
     }
+    return size;
 }
 function megabytes(bytes) {
     return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
@@ -22309,13 +16708,14 @@ function megabytes(bytes) {
  * Runs the fast path, and on the general path from the start when the fast one declines,
  * handing out only the rows the fast path has not handed out already.
  */
-async function* scan(repo, path, settings, onHeader, headerOnly) {
+async function* scan(open, path, settings, onHeader, headerOnly, recycle = false) {
     let headerSeen = false;
     const target = {
         file: path,
         request: planRequest(settings.columns),
         chunkRows: settings.chunkRows,
         headerOnly,
+        recycle,
         onHeader: (plan) => {
             if (headerSeen)
                 return;
@@ -22326,7 +16726,7 @@ async function* scan(repo, path, settings, onHeader, headerOnly) {
     let handedOut = 0;
     if (!settings.general) {
         try {
-            for await (const chunk of fastChunks(repo.stream(path), target)) {
+            for await (const chunk of fastChunks(open(), target)) {
                 handedOut += chunk.rows;
                 yield chunk;
             }
@@ -22337,18 +16737,7 @@ async function* scan(repo, path, settings, onHeader, headerOnly) {
                 throw error;
         }
     }
-    yield* generalChunks(repo.stream(path), target, handedOut);
-}
-/** Copies `parts` one after another into `out` (whose length is their total). */
-function concatenate(parts, out) {
-    if (parts.length === 1 && parts[0].length === out.length)
-        return parts[0];
-    let at = 0;
-    for (const part of parts) {
-        out.set(part, at);
-        at += part.length;
-    }
-    return out;
+    yield* generalChunks(open(), target, handedOut);
 }
 
 ;// CONCATENATED MODULE: ./src/model/load-data.ts
@@ -22408,8 +16797,18 @@ async function loadModelData(repo, descriptor, inputs, settings) {
 
 
 
+
+
+
+/** Error code of a model that failed through a fault in fitgate rather than in its files. */
+const INTERNAL_ERROR = 'internal-error';
 /** Largest number of design columns: the factor alone takes p^2 doubles. */
 const MAX_PARAMETERS = 4000;
+/**
+ * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
+ * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
+ */
+const MAX_MAGNITUDE = 1e140;
 /**
  * Loads, fits and scores one model (no checks).
  * @throws InputError for bad data, a constant target, or a design over the caps
@@ -22433,26 +16832,52 @@ async function fitModel(repo, descriptor, settings) {
     if (train.rows * p > settings.caps.maxCells) {
         throw new errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
     }
+    for (const data of [train, tables.holdout]) {
+        for (let i = 0; i < data.rows; i++) {
+            if (Math.abs(data.y[i]) <= MAX_MAGNITUDE)
+                continue;
+            throw new errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+        }
+    }
     const targetStats = (0,stats/* meanAndSd */.u)(train.y, train.rows);
     if (!(targetStats.sd > 0)) {
         throw new errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
-    // Fold the training rows into the factor; gather column spreads in the same pass.
-    const factor = new src_fit/* QrAccumulator */.SC(p);
+    // One pass over the training rows: each fold's rows into its own factor (the folds are known
+    // before the pass), column spreads alongside. The full factor is the merge of the fold factors.
+    const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const builder = new cross_validation/* FoldFactorBuilder */.UN(p, folds);
     const spread = new ColumnSpread(p);
     (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
-        factor.addRows(X, train.y.subarray(start, start + m), m);
+        checkFiniteBlock(design, train, descriptor, X, start, m);
+        builder.add(X, train.y, start, m);
         spread.add(X, m);
     });
-    let fit = (0,src_fit/* fitFactor */.Ps)(factor, { ridge: descriptor.fit.ridge, penalised: design.penalised });
-    // One step of iterative refinement from a second pass over the rows, where it converges.
+    const full = (0,cross_validation/* mergeFactors */.Z4)(builder.factors, p);
+    let fit = (0,src_fit/* fitFactor */.Ps)(full, { ridge: descriptor.fit.ridge, penalised: design.penalised });
+    // One step of iterative refinement from a further pass where it converges. It is kept even for
+    // well-conditioned designs: plain QR is accurate to about cond * eps in norm, but small
+    // coefficients then differ in their last 4-5 digits between row orders (fold-factor merges
+    // versus one sequential factor); the refined solution does not depend on the order.
     if (!fit.rankDeficient && fit.conditionNumberScaled <= src_fit/* REFINE_MAX_CONDITION */.VH) {
         const pass = new src_fit/* RefinementPass */.rT(fit);
         (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
         fit = pass.finish();
     }
-    // Score training and hold-out rows.
-    const trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
+    // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
+    // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
+    let trainPredictions = new Float64Array(train.rows);
+    let crossValidation;
+    try {
+        crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: builder.factors, predictions: trainPredictions });
+    }
+    catch {
+        // The cross-validation check will run it again and report why it could not be computed
+        // (as a check that throws does); the fit itself stands.
+        crossValidation = null;
+        trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
+    }
+    builder.factors.length = 0; // the fold factors are no longer needed
     const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
     const trainSums = (0,regression/* emptySums */.y3)();
     (0,regression/* addErrors */.xB)(trainSums, train.y, trainPredictions, train.rows);
@@ -22493,7 +16918,27 @@ async function fitModel(repo, descriptor, settings) {
         targetSd: targetStats.sd,
         targetRange: (0,stats/* range */.y)(train.y, train.rows),
     };
-    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions };
+    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation };
+}
+/**
+ * InputError `design-overflow` when a block of the training design holds a value that is not a
+ * finite number within ±{@link MAX_MAGNITUDE}: finite data can still overflow in a term (a huge
+ * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
+ */
+function checkFiniteBlock(design, train, descriptor, X, start, m) {
+    for (let j = 0; j < design.p; j++) {
+        const base = j * m;
+        for (let i = 0; i < m; i++) {
+            const v = X[base + i];
+            if (Math.abs(v) <= MAX_MAGNITUDE)
+                continue;
+            let term = 0;
+            while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
+                term += 1;
+            const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
+            throw new errors/* InputError */.dz('design-overflow', `design column \`${design.columnNames[j]}\` is ${v} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+        }
+    }
 }
 /** Training and hold-out RMSE of the descriptor's shipped coefficients. */
 function scoreShipped(model) {
@@ -22608,9 +17053,15 @@ async function evaluateModel(repo, descriptor, settings, base) {
     catch (error) {
         if (error instanceof errors/* InputError */.dz)
             return errorResult(descriptor.name, descriptor.file, error);
-        throw error;
+        // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
+        // that every other model still gets its outcome; the code marks it as a bug to report.
+        const detail = error instanceof Error ? error.message : String(error);
+        return errorResult(descriptor.name, descriptor.file, new errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
     }
-    const memo = new Map();
+    // The pipeline's own passes already produced what the shared diagnostics would compute.
+    const memo = new Map([[shared/* SHARED_FOLDS_KEY */.Tq, model.folds]]);
+    if (model.crossValidation !== null)
+        memo.set(shared/* SHARED_CROSS_VALIDATION_KEY */.X, model.crossValidation);
     const context = {
         descriptor,
         design: model.design,
@@ -22674,8 +17125,8 @@ var promises_ = __nccwpck_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
-// EXTERNAL MODULE: ./src/checks/index.ts + 20 modules
-var checks = __nccwpck_require__(1221);
+// EXTERNAL MODULE: ./src/checks/index.ts + 15 modules
+var checks = __nccwpck_require__(5729);
 // EXTERNAL MODULE: ./src/format.ts
 var format = __nccwpck_require__(6264);
 // EXTERNAL MODULE: ./src/result.ts
@@ -24066,7 +18517,7 @@ function serveTasks(handle) {
 
 /***/ }),
 
-/***/ 3481:
+/***/ 2321:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -24460,54 +18911,5467 @@ function boundsText(schema) {
     return `${what} ${parts.join(' and ')}`;
 }
 
-// EXTERNAL MODULE: ./node_modules/ajv/dist/2020.js
-var _2020 = __nccwpck_require__(2210);
 ;// CONCATENATED MODULE: ./src/config/schema/descriptor.schema.json
-const descriptor_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor\'s folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor\'s folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file\'s `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design\'s columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term\'s columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model\'s own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row\'s value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail above it)","description":"Fail when the figure is above this number.","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is above this number.","type":"number","minimum":0},"fail":{"description":"Fail when the figure is above this number.","type":"number","minimum":0}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}}');
+const descriptor_schema_namespaceObject = {};
 ;// CONCATENATED MODULE: ./src/config/schema/settings.schema.json
-const settings_schema_namespaceObject = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor\'s own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design\'s columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail above it)","description":"Fail when the figure is above this number.","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is above this number.","type":"number","minimum":0},"fail":{"description":"Fail when the figure is above this number.","type":"number","minimum":0}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}}');
+const settings_schema_namespaceObject = {};
+// EXTERNAL MODULE: ./node_modules/ajv/dist/runtime/ucs2length.js
+var ucs2length = __nccwpck_require__(6214);
+;// CONCATENATED MODULE: ./src/config/generated/validators.ts
+// @ts-nocheck
+// Generated by test/tools/gen-validators.mjs from src/config/schema/*.json and src/config/limits.ts: do not edit.
+
+
+const validateSettings = validate20;
+const schema31 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
+const schema32 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
+const schema33 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+const func2 = Object.prototype.hasOwnProperty;
+function validate21(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate21.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        for (const key0 in data) {
+            if (!(func2.call(schema32.properties, key0))) {
+                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema32, data };
+                if (vErrors === null) {
+                    vErrors = [err0];
+                }
+                else {
+                    vErrors.push(err0);
+                }
+                errors++;
+            }
+        }
+        if (data.gap_ratio !== undefined) {
+            let data0 = data.gap_ratio;
+            const _errs4 = errors;
+            let valid2 = false;
+            let passing0 = null;
+            const _errs5 = errors;
+            if ((typeof data0 == "number") && (isFinite(data0))) {
+                if (data0 < 0 || isNaN(data0)) {
+                    const err1 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err1];
+                    }
+                    else {
+                        vErrors.push(err1);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err2 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err2];
+                }
+                else {
+                    vErrors.push(err2);
+                }
+                errors++;
+            }
+            var _valid0 = _errs5 === errors;
+            if (_valid0) {
+                valid2 = true;
+                passing0 = 0;
+            }
+            const _errs7 = errors;
+            if (data0 && typeof data0 == "object" && !Array.isArray(data0)) {
+                if (Object.keys(data0).length < 1) {
+                    const err3 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err3];
+                    }
+                    else {
+                        vErrors.push(err3);
+                    }
+                    errors++;
+                }
+                for (const key1 in data0) {
+                    if (!((key1 === "warn") || (key1 === "fail"))) {
+                        const err4 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data0 };
+                        if (vErrors === null) {
+                            vErrors = [err4];
+                        }
+                        else {
+                            vErrors.push(err4);
+                        }
+                        errors++;
+                    }
+                }
+                if (data0.warn !== undefined) {
+                    let data1 = data0.warn;
+                    if ((typeof data1 == "number") && (isFinite(data1))) {
+                        if (data1 < 0 || isNaN(data1)) {
+                            const err5 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data1 };
+                            if (vErrors === null) {
+                                vErrors = [err5];
+                            }
+                            else {
+                                vErrors.push(err5);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err6 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data1 };
+                        if (vErrors === null) {
+                            vErrors = [err6];
+                        }
+                        else {
+                            vErrors.push(err6);
+                        }
+                        errors++;
+                    }
+                }
+                if (data0.fail !== undefined) {
+                    let data2 = data0.fail;
+                    if ((typeof data2 == "number") && (isFinite(data2))) {
+                        if (data2 < 0 || isNaN(data2)) {
+                            const err7 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data2 };
+                            if (vErrors === null) {
+                                vErrors = [err7];
+                            }
+                            else {
+                                vErrors.push(err7);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err8 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data2 };
+                        if (vErrors === null) {
+                            vErrors = [err8];
+                        }
+                        else {
+                            vErrors.push(err8);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err9 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            var _valid0 = _errs7 === errors;
+            if (_valid0 && valid2) {
+                valid2 = false;
+                passing0 = [passing0, 1];
+            }
+            else {
+                if (_valid0) {
+                    valid2 = true;
+                    passing0 = 1;
+                }
+                const _errs14 = errors;
+                if ("off" !== data0) {
+                    const err10 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+                var _valid0 = _errs14 === errors;
+                if (_valid0 && valid2) {
+                    valid2 = false;
+                    passing0 = [passing0, 2];
+                }
+                else {
+                    if (_valid0) {
+                        valid2 = true;
+                        passing0 = 2;
+                    }
+                }
+            }
+            if (!valid2) {
+                const err11 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err11];
+                }
+                else {
+                    vErrors.push(err11);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs4;
+                if (vErrors !== null) {
+                    if (_errs4) {
+                        vErrors.length = _errs4;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.params_per_sample !== undefined) {
+            let data3 = data.params_per_sample;
+            const _errs17 = errors;
+            let valid5 = false;
+            let passing1 = null;
+            const _errs18 = errors;
+            if ((typeof data3 == "number") && (isFinite(data3))) {
+                if (data3 < 0 || isNaN(data3)) {
+                    const err12 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err13 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err13];
+                }
+                else {
+                    vErrors.push(err13);
+                }
+                errors++;
+            }
+            var _valid1 = _errs18 === errors;
+            if (_valid1) {
+                valid5 = true;
+                passing1 = 0;
+            }
+            const _errs20 = errors;
+            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
+                if (Object.keys(data3).length < 1) {
+                    const err14 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err14];
+                    }
+                    else {
+                        vErrors.push(err14);
+                    }
+                    errors++;
+                }
+                for (const key2 in data3) {
+                    if (!((key2 === "warn") || (key2 === "fail"))) {
+                        const err15 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err15];
+                        }
+                        else {
+                            vErrors.push(err15);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.warn !== undefined) {
+                    let data4 = data3.warn;
+                    if ((typeof data4 == "number") && (isFinite(data4))) {
+                        if (data4 < 0 || isNaN(data4)) {
+                            const err16 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err16];
+                            }
+                            else {
+                                vErrors.push(err16);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err17 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err17];
+                        }
+                        else {
+                            vErrors.push(err17);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.fail !== undefined) {
+                    let data5 = data3.fail;
+                    if ((typeof data5 == "number") && (isFinite(data5))) {
+                        if (data5 < 0 || isNaN(data5)) {
+                            const err18 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err18];
+                            }
+                            else {
+                                vErrors.push(err18);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err19 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err20 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err20];
+                }
+                else {
+                    vErrors.push(err20);
+                }
+                errors++;
+            }
+            var _valid1 = _errs20 === errors;
+            if (_valid1 && valid5) {
+                valid5 = false;
+                passing1 = [passing1, 1];
+            }
+            else {
+                if (_valid1) {
+                    valid5 = true;
+                    passing1 = 1;
+                }
+                const _errs27 = errors;
+                if ("off" !== data3) {
+                    const err21 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err21];
+                    }
+                    else {
+                        vErrors.push(err21);
+                    }
+                    errors++;
+                }
+                var _valid1 = _errs27 === errors;
+                if (_valid1 && valid5) {
+                    valid5 = false;
+                    passing1 = [passing1, 2];
+                }
+                else {
+                    if (_valid1) {
+                        valid5 = true;
+                        passing1 = 2;
+                    }
+                }
+            }
+            if (!valid5) {
+                const err22 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing1 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err22];
+                }
+                else {
+                    vErrors.push(err22);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs17;
+                if (vErrors !== null) {
+                    if (_errs17) {
+                        vErrors.length = _errs17;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.coefficient !== undefined) {
+            let data6 = data.coefficient;
+            const _errs30 = errors;
+            let valid8 = false;
+            let passing2 = null;
+            const _errs31 = errors;
+            if ((typeof data6 == "number") && (isFinite(data6))) {
+                if (data6 < 0 || isNaN(data6)) {
+                    const err23 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err23];
+                    }
+                    else {
+                        vErrors.push(err23);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err24 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data6 };
+                if (vErrors === null) {
+                    vErrors = [err24];
+                }
+                else {
+                    vErrors.push(err24);
+                }
+                errors++;
+            }
+            var _valid2 = _errs31 === errors;
+            if (_valid2) {
+                valid8 = true;
+                passing2 = 0;
+            }
+            const _errs33 = errors;
+            if (data6 && typeof data6 == "object" && !Array.isArray(data6)) {
+                if (Object.keys(data6).length < 1) {
+                    const err25 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err25];
+                    }
+                    else {
+                        vErrors.push(err25);
+                    }
+                    errors++;
+                }
+                for (const key3 in data6) {
+                    if (!((key3 === "warn") || (key3 === "fail"))) {
+                        const err26 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err26];
+                        }
+                        else {
+                            vErrors.push(err26);
+                        }
+                        errors++;
+                    }
+                }
+                if (data6.warn !== undefined) {
+                    let data7 = data6.warn;
+                    if ((typeof data7 == "number") && (isFinite(data7))) {
+                        if (data7 < 0 || isNaN(data7)) {
+                            const err27 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err27];
+                            }
+                            else {
+                                vErrors.push(err27);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err28 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err28];
+                        }
+                        else {
+                            vErrors.push(err28);
+                        }
+                        errors++;
+                    }
+                }
+                if (data6.fail !== undefined) {
+                    let data8 = data6.fail;
+                    if ((typeof data8 == "number") && (isFinite(data8))) {
+                        if (data8 < 0 || isNaN(data8)) {
+                            const err29 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err29];
+                            }
+                            else {
+                                vErrors.push(err29);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err30 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err30];
+                        }
+                        else {
+                            vErrors.push(err30);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err31 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data6 };
+                if (vErrors === null) {
+                    vErrors = [err31];
+                }
+                else {
+                    vErrors.push(err31);
+                }
+                errors++;
+            }
+            var _valid2 = _errs33 === errors;
+            if (_valid2 && valid8) {
+                valid8 = false;
+                passing2 = [passing2, 1];
+            }
+            else {
+                if (_valid2) {
+                    valid8 = true;
+                    passing2 = 1;
+                }
+                const _errs40 = errors;
+                if ("off" !== data6) {
+                    const err32 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err32];
+                    }
+                    else {
+                        vErrors.push(err32);
+                    }
+                    errors++;
+                }
+                var _valid2 = _errs40 === errors;
+                if (_valid2 && valid8) {
+                    valid8 = false;
+                    passing2 = [passing2, 2];
+                }
+                else {
+                    if (_valid2) {
+                        valid8 = true;
+                        passing2 = 2;
+                    }
+                }
+            }
+            if (!valid8) {
+                const err33 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing2 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data6 };
+                if (vErrors === null) {
+                    vErrors = [err33];
+                }
+                else {
+                    vErrors.push(err33);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs30;
+                if (vErrors !== null) {
+                    if (_errs30) {
+                        vErrors.length = _errs30;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.cv_ratio !== undefined) {
+            let data9 = data.cv_ratio;
+            const _errs43 = errors;
+            let valid11 = false;
+            let passing3 = null;
+            const _errs44 = errors;
+            if ((typeof data9 == "number") && (isFinite(data9))) {
+                if (data9 < 0 || isNaN(data9)) {
+                    const err34 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data9 };
+                    if (vErrors === null) {
+                        vErrors = [err34];
+                    }
+                    else {
+                        vErrors.push(err34);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err35 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err35];
+                }
+                else {
+                    vErrors.push(err35);
+                }
+                errors++;
+            }
+            var _valid3 = _errs44 === errors;
+            if (_valid3) {
+                valid11 = true;
+                passing3 = 0;
+            }
+            const _errs46 = errors;
+            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                if (Object.keys(data9).length < 1) {
+                    const err36 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data9 };
+                    if (vErrors === null) {
+                        vErrors = [err36];
+                    }
+                    else {
+                        vErrors.push(err36);
+                    }
+                    errors++;
+                }
+                for (const key4 in data9) {
+                    if (!((key4 === "warn") || (key4 === "fail"))) {
+                        const err37 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err37];
+                        }
+                        else {
+                            vErrors.push(err37);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.warn !== undefined) {
+                    let data10 = data9.warn;
+                    if ((typeof data10 == "number") && (isFinite(data10))) {
+                        if (data10 < 0 || isNaN(data10)) {
+                            const err38 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data10 };
+                            if (vErrors === null) {
+                                vErrors = [err38];
+                            }
+                            else {
+                                vErrors.push(err38);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err39 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err39];
+                        }
+                        else {
+                            vErrors.push(err39);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.fail !== undefined) {
+                    let data11 = data9.fail;
+                    if ((typeof data11 == "number") && (isFinite(data11))) {
+                        if (data11 < 0 || isNaN(data11)) {
+                            const err40 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data11 };
+                            if (vErrors === null) {
+                                vErrors = [err40];
+                            }
+                            else {
+                                vErrors.push(err40);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err41 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err41];
+                        }
+                        else {
+                            vErrors.push(err41);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err42 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err42];
+                }
+                else {
+                    vErrors.push(err42);
+                }
+                errors++;
+            }
+            var _valid3 = _errs46 === errors;
+            if (_valid3 && valid11) {
+                valid11 = false;
+                passing3 = [passing3, 1];
+            }
+            else {
+                if (_valid3) {
+                    valid11 = true;
+                    passing3 = 1;
+                }
+                const _errs53 = errors;
+                if ("off" !== data9) {
+                    const err43 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data9 };
+                    if (vErrors === null) {
+                        vErrors = [err43];
+                    }
+                    else {
+                        vErrors.push(err43);
+                    }
+                    errors++;
+                }
+                var _valid3 = _errs53 === errors;
+                if (_valid3 && valid11) {
+                    valid11 = false;
+                    passing3 = [passing3, 2];
+                }
+                else {
+                    if (_valid3) {
+                        valid11 = true;
+                        passing3 = 2;
+                    }
+                }
+            }
+            if (!valid11) {
+                const err44 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing3 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err44];
+                }
+                else {
+                    vErrors.push(err44);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs43;
+                if (vErrors !== null) {
+                    if (_errs43) {
+                        vErrors.length = _errs43;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.leakage !== undefined) {
+            let data12 = data.leakage;
+            const _errs56 = errors;
+            let valid14 = false;
+            let passing4 = null;
+            const _errs57 = errors;
+            if ((typeof data12 == "number") && (isFinite(data12))) {
+                if (data12 < 0 || isNaN(data12)) {
+                    const err45 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data12 };
+                    if (vErrors === null) {
+                        vErrors = [err45];
+                    }
+                    else {
+                        vErrors.push(err45);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err46 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err46];
+                }
+                else {
+                    vErrors.push(err46);
+                }
+                errors++;
+            }
+            var _valid4 = _errs57 === errors;
+            if (_valid4) {
+                valid14 = true;
+                passing4 = 0;
+            }
+            const _errs59 = errors;
+            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
+                if (Object.keys(data12).length < 1) {
+                    const err47 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data12 };
+                    if (vErrors === null) {
+                        vErrors = [err47];
+                    }
+                    else {
+                        vErrors.push(err47);
+                    }
+                    errors++;
+                }
+                for (const key5 in data12) {
+                    if (!((key5 === "warn") || (key5 === "fail"))) {
+                        const err48 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err48];
+                        }
+                        else {
+                            vErrors.push(err48);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.warn !== undefined) {
+                    let data13 = data12.warn;
+                    if ((typeof data13 == "number") && (isFinite(data13))) {
+                        if (data13 < 0 || isNaN(data13)) {
+                            const err49 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data13 };
+                            if (vErrors === null) {
+                                vErrors = [err49];
+                            }
+                            else {
+                                vErrors.push(err49);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err50 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data13 };
+                        if (vErrors === null) {
+                            vErrors = [err50];
+                        }
+                        else {
+                            vErrors.push(err50);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.fail !== undefined) {
+                    let data14 = data12.fail;
+                    if ((typeof data14 == "number") && (isFinite(data14))) {
+                        if (data14 < 0 || isNaN(data14)) {
+                            const err51 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err51];
+                            }
+                            else {
+                                vErrors.push(err51);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err52 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err52];
+                        }
+                        else {
+                            vErrors.push(err52);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err53 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err53];
+                }
+                else {
+                    vErrors.push(err53);
+                }
+                errors++;
+            }
+            var _valid4 = _errs59 === errors;
+            if (_valid4 && valid14) {
+                valid14 = false;
+                passing4 = [passing4, 1];
+            }
+            else {
+                if (_valid4) {
+                    valid14 = true;
+                    passing4 = 1;
+                }
+                const _errs66 = errors;
+                if ("off" !== data12) {
+                    const err54 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data12 };
+                    if (vErrors === null) {
+                        vErrors = [err54];
+                    }
+                    else {
+                        vErrors.push(err54);
+                    }
+                    errors++;
+                }
+                var _valid4 = _errs66 === errors;
+                if (_valid4 && valid14) {
+                    valid14 = false;
+                    passing4 = [passing4, 2];
+                }
+                else {
+                    if (_valid4) {
+                        valid14 = true;
+                        passing4 = 2;
+                    }
+                }
+            }
+            if (!valid14) {
+                const err55 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing4 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err55];
+                }
+                else {
+                    vErrors.push(err55);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs56;
+                if (vErrors !== null) {
+                    if (_errs56) {
+                        vErrors.length = _errs56;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.swing !== undefined) {
+            let data15 = data.swing;
+            const _errs69 = errors;
+            let valid17 = false;
+            let passing5 = null;
+            const _errs70 = errors;
+            if ((typeof data15 == "number") && (isFinite(data15))) {
+                if (data15 < 0 || isNaN(data15)) {
+                    const err56 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data15 };
+                    if (vErrors === null) {
+                        vErrors = [err56];
+                    }
+                    else {
+                        vErrors.push(err56);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err57 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data15 };
+                if (vErrors === null) {
+                    vErrors = [err57];
+                }
+                else {
+                    vErrors.push(err57);
+                }
+                errors++;
+            }
+            var _valid5 = _errs70 === errors;
+            if (_valid5) {
+                valid17 = true;
+                passing5 = 0;
+            }
+            const _errs72 = errors;
+            if (data15 && typeof data15 == "object" && !Array.isArray(data15)) {
+                if (Object.keys(data15).length < 1) {
+                    const err58 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data15 };
+                    if (vErrors === null) {
+                        vErrors = [err58];
+                    }
+                    else {
+                        vErrors.push(err58);
+                    }
+                    errors++;
+                }
+                for (const key6 in data15) {
+                    if (!((key6 === "warn") || (key6 === "fail"))) {
+                        const err59 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data15 };
+                        if (vErrors === null) {
+                            vErrors = [err59];
+                        }
+                        else {
+                            vErrors.push(err59);
+                        }
+                        errors++;
+                    }
+                }
+                if (data15.warn !== undefined) {
+                    let data16 = data15.warn;
+                    if ((typeof data16 == "number") && (isFinite(data16))) {
+                        if (data16 < 0 || isNaN(data16)) {
+                            const err60 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data16 };
+                            if (vErrors === null) {
+                                vErrors = [err60];
+                            }
+                            else {
+                                vErrors.push(err60);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err61 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data16 };
+                        if (vErrors === null) {
+                            vErrors = [err61];
+                        }
+                        else {
+                            vErrors.push(err61);
+                        }
+                        errors++;
+                    }
+                }
+                if (data15.fail !== undefined) {
+                    let data17 = data15.fail;
+                    if ((typeof data17 == "number") && (isFinite(data17))) {
+                        if (data17 < 0 || isNaN(data17)) {
+                            const err62 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data17 };
+                            if (vErrors === null) {
+                                vErrors = [err62];
+                            }
+                            else {
+                                vErrors.push(err62);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err63 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data17 };
+                        if (vErrors === null) {
+                            vErrors = [err63];
+                        }
+                        else {
+                            vErrors.push(err63);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err64 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data15 };
+                if (vErrors === null) {
+                    vErrors = [err64];
+                }
+                else {
+                    vErrors.push(err64);
+                }
+                errors++;
+            }
+            var _valid5 = _errs72 === errors;
+            if (_valid5 && valid17) {
+                valid17 = false;
+                passing5 = [passing5, 1];
+            }
+            else {
+                if (_valid5) {
+                    valid17 = true;
+                    passing5 = 1;
+                }
+                const _errs79 = errors;
+                if ("off" !== data15) {
+                    const err65 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data15 };
+                    if (vErrors === null) {
+                        vErrors = [err65];
+                    }
+                    else {
+                        vErrors.push(err65);
+                    }
+                    errors++;
+                }
+                var _valid5 = _errs79 === errors;
+                if (_valid5 && valid17) {
+                    valid17 = false;
+                    passing5 = [passing5, 2];
+                }
+                else {
+                    if (_valid5) {
+                        valid17 = true;
+                        passing5 = 2;
+                    }
+                }
+            }
+            if (!valid17) {
+                const err66 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing5 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data15 };
+                if (vErrors === null) {
+                    vErrors = [err66];
+                }
+                else {
+                    vErrors.push(err66);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs69;
+                if (vErrors !== null) {
+                    if (_errs69) {
+                        vErrors.length = _errs69;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.swing_beyond !== undefined) {
+            let data18 = data.swing_beyond;
+            const _errs82 = errors;
+            let valid20 = false;
+            let passing6 = null;
+            const _errs83 = errors;
+            if ((typeof data18 == "number") && (isFinite(data18))) {
+                if (data18 < 0 || isNaN(data18)) {
+                    const err67 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data18 };
+                    if (vErrors === null) {
+                        vErrors = [err67];
+                    }
+                    else {
+                        vErrors.push(err67);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err68 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data18 };
+                if (vErrors === null) {
+                    vErrors = [err68];
+                }
+                else {
+                    vErrors.push(err68);
+                }
+                errors++;
+            }
+            var _valid6 = _errs83 === errors;
+            if (_valid6) {
+                valid20 = true;
+                passing6 = 0;
+            }
+            const _errs85 = errors;
+            if (data18 && typeof data18 == "object" && !Array.isArray(data18)) {
+                if (Object.keys(data18).length < 1) {
+                    const err69 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data18 };
+                    if (vErrors === null) {
+                        vErrors = [err69];
+                    }
+                    else {
+                        vErrors.push(err69);
+                    }
+                    errors++;
+                }
+                for (const key7 in data18) {
+                    if (!((key7 === "warn") || (key7 === "fail"))) {
+                        const err70 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data18 };
+                        if (vErrors === null) {
+                            vErrors = [err70];
+                        }
+                        else {
+                            vErrors.push(err70);
+                        }
+                        errors++;
+                    }
+                }
+                if (data18.warn !== undefined) {
+                    let data19 = data18.warn;
+                    if ((typeof data19 == "number") && (isFinite(data19))) {
+                        if (data19 < 0 || isNaN(data19)) {
+                            const err71 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data19 };
+                            if (vErrors === null) {
+                                vErrors = [err71];
+                            }
+                            else {
+                                vErrors.push(err71);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err72 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data19 };
+                        if (vErrors === null) {
+                            vErrors = [err72];
+                        }
+                        else {
+                            vErrors.push(err72);
+                        }
+                        errors++;
+                    }
+                }
+                if (data18.fail !== undefined) {
+                    let data20 = data18.fail;
+                    if ((typeof data20 == "number") && (isFinite(data20))) {
+                        if (data20 < 0 || isNaN(data20)) {
+                            const err73 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data20 };
+                            if (vErrors === null) {
+                                vErrors = [err73];
+                            }
+                            else {
+                                vErrors.push(err73);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err74 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data20 };
+                        if (vErrors === null) {
+                            vErrors = [err74];
+                        }
+                        else {
+                            vErrors.push(err74);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err75 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data18 };
+                if (vErrors === null) {
+                    vErrors = [err75];
+                }
+                else {
+                    vErrors.push(err75);
+                }
+                errors++;
+            }
+            var _valid6 = _errs85 === errors;
+            if (_valid6 && valid20) {
+                valid20 = false;
+                passing6 = [passing6, 1];
+            }
+            else {
+                if (_valid6) {
+                    valid20 = true;
+                    passing6 = 1;
+                }
+                const _errs92 = errors;
+                if ("off" !== data18) {
+                    const err76 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data18 };
+                    if (vErrors === null) {
+                        vErrors = [err76];
+                    }
+                    else {
+                        vErrors.push(err76);
+                    }
+                    errors++;
+                }
+                var _valid6 = _errs92 === errors;
+                if (_valid6 && valid20) {
+                    valid20 = false;
+                    passing6 = [passing6, 2];
+                }
+                else {
+                    if (_valid6) {
+                        valid20 = true;
+                        passing6 = 2;
+                    }
+                }
+            }
+            if (!valid20) {
+                const err77 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing6 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data18 };
+                if (vErrors === null) {
+                    vErrors = [err77];
+                }
+                else {
+                    vErrors.push(err77);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs82;
+                if (vErrors !== null) {
+                    if (_errs82) {
+                        vErrors.length = _errs82;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.condition !== undefined) {
+            let data21 = data.condition;
+            const _errs95 = errors;
+            let valid23 = false;
+            let passing7 = null;
+            const _errs96 = errors;
+            if ((typeof data21 == "number") && (isFinite(data21))) {
+                if (data21 < 0 || isNaN(data21)) {
+                    const err78 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err78];
+                    }
+                    else {
+                        vErrors.push(err78);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err79 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err79];
+                }
+                else {
+                    vErrors.push(err79);
+                }
+                errors++;
+            }
+            var _valid7 = _errs96 === errors;
+            if (_valid7) {
+                valid23 = true;
+                passing7 = 0;
+            }
+            const _errs98 = errors;
+            if (data21 && typeof data21 == "object" && !Array.isArray(data21)) {
+                if (Object.keys(data21).length < 1) {
+                    const err80 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err80];
+                    }
+                    else {
+                        vErrors.push(err80);
+                    }
+                    errors++;
+                }
+                for (const key8 in data21) {
+                    if (!((key8 === "warn") || (key8 === "fail"))) {
+                        const err81 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key8 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data21 };
+                        if (vErrors === null) {
+                            vErrors = [err81];
+                        }
+                        else {
+                            vErrors.push(err81);
+                        }
+                        errors++;
+                    }
+                }
+                if (data21.warn !== undefined) {
+                    let data22 = data21.warn;
+                    if ((typeof data22 == "number") && (isFinite(data22))) {
+                        if (data22 < 0 || isNaN(data22)) {
+                            const err82 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data22 };
+                            if (vErrors === null) {
+                                vErrors = [err82];
+                            }
+                            else {
+                                vErrors.push(err82);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err83 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data22 };
+                        if (vErrors === null) {
+                            vErrors = [err83];
+                        }
+                        else {
+                            vErrors.push(err83);
+                        }
+                        errors++;
+                    }
+                }
+                if (data21.fail !== undefined) {
+                    let data23 = data21.fail;
+                    if ((typeof data23 == "number") && (isFinite(data23))) {
+                        if (data23 < 0 || isNaN(data23)) {
+                            const err84 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data23 };
+                            if (vErrors === null) {
+                                vErrors = [err84];
+                            }
+                            else {
+                                vErrors.push(err84);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err85 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data23 };
+                        if (vErrors === null) {
+                            vErrors = [err85];
+                        }
+                        else {
+                            vErrors.push(err85);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err86 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err86];
+                }
+                else {
+                    vErrors.push(err86);
+                }
+                errors++;
+            }
+            var _valid7 = _errs98 === errors;
+            if (_valid7 && valid23) {
+                valid23 = false;
+                passing7 = [passing7, 1];
+            }
+            else {
+                if (_valid7) {
+                    valid23 = true;
+                    passing7 = 1;
+                }
+                const _errs105 = errors;
+                if ("off" !== data21) {
+                    const err87 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err87];
+                    }
+                    else {
+                        vErrors.push(err87);
+                    }
+                    errors++;
+                }
+                var _valid7 = _errs105 === errors;
+                if (_valid7 && valid23) {
+                    valid23 = false;
+                    passing7 = [passing7, 2];
+                }
+                else {
+                    if (_valid7) {
+                        valid23 = true;
+                        passing7 = 2;
+                    }
+                }
+            }
+            if (!valid23) {
+                const err88 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing7 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err88];
+                }
+                else {
+                    vErrors.push(err88);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs95;
+                if (vErrors !== null) {
+                    if (_errs95) {
+                        vErrors.length = _errs95;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.reproducibility !== undefined) {
+            let data24 = data.reproducibility;
+            const _errs108 = errors;
+            let valid26 = false;
+            let passing8 = null;
+            const _errs109 = errors;
+            if ((typeof data24 == "number") && (isFinite(data24))) {
+                if (data24 < 0 || isNaN(data24)) {
+                    const err89 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data24 };
+                    if (vErrors === null) {
+                        vErrors = [err89];
+                    }
+                    else {
+                        vErrors.push(err89);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err90 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data24 };
+                if (vErrors === null) {
+                    vErrors = [err90];
+                }
+                else {
+                    vErrors.push(err90);
+                }
+                errors++;
+            }
+            var _valid8 = _errs109 === errors;
+            if (_valid8) {
+                valid26 = true;
+                passing8 = 0;
+            }
+            const _errs111 = errors;
+            if (data24 && typeof data24 == "object" && !Array.isArray(data24)) {
+                if (Object.keys(data24).length < 1) {
+                    const err91 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data24 };
+                    if (vErrors === null) {
+                        vErrors = [err91];
+                    }
+                    else {
+                        vErrors.push(err91);
+                    }
+                    errors++;
+                }
+                for (const key9 in data24) {
+                    if (!((key9 === "warn") || (key9 === "fail"))) {
+                        const err92 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key9 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data24 };
+                        if (vErrors === null) {
+                            vErrors = [err92];
+                        }
+                        else {
+                            vErrors.push(err92);
+                        }
+                        errors++;
+                    }
+                }
+                if (data24.warn !== undefined) {
+                    let data25 = data24.warn;
+                    if ((typeof data25 == "number") && (isFinite(data25))) {
+                        if (data25 < 0 || isNaN(data25)) {
+                            const err93 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data25 };
+                            if (vErrors === null) {
+                                vErrors = [err93];
+                            }
+                            else {
+                                vErrors.push(err93);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err94 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data25 };
+                        if (vErrors === null) {
+                            vErrors = [err94];
+                        }
+                        else {
+                            vErrors.push(err94);
+                        }
+                        errors++;
+                    }
+                }
+                if (data24.fail !== undefined) {
+                    let data26 = data24.fail;
+                    if ((typeof data26 == "number") && (isFinite(data26))) {
+                        if (data26 < 0 || isNaN(data26)) {
+                            const err95 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data26 };
+                            if (vErrors === null) {
+                                vErrors = [err95];
+                            }
+                            else {
+                                vErrors.push(err95);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err96 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data26 };
+                        if (vErrors === null) {
+                            vErrors = [err96];
+                        }
+                        else {
+                            vErrors.push(err96);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err97 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data24 };
+                if (vErrors === null) {
+                    vErrors = [err97];
+                }
+                else {
+                    vErrors.push(err97);
+                }
+                errors++;
+            }
+            var _valid8 = _errs111 === errors;
+            if (_valid8 && valid26) {
+                valid26 = false;
+                passing8 = [passing8, 1];
+            }
+            else {
+                if (_valid8) {
+                    valid26 = true;
+                    passing8 = 1;
+                }
+                const _errs118 = errors;
+                if ("off" !== data24) {
+                    const err98 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data24 };
+                    if (vErrors === null) {
+                        vErrors = [err98];
+                    }
+                    else {
+                        vErrors.push(err98);
+                    }
+                    errors++;
+                }
+                var _valid8 = _errs118 === errors;
+                if (_valid8 && valid26) {
+                    valid26 = false;
+                    passing8 = [passing8, 2];
+                }
+                else {
+                    if (_valid8) {
+                        valid26 = true;
+                        passing8 = 2;
+                    }
+                }
+            }
+            if (!valid26) {
+                const err99 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing8 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data24 };
+                if (vErrors === null) {
+                    vErrors = [err99];
+                }
+                else {
+                    vErrors.push(err99);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs108;
+                if (vErrors !== null) {
+                    if (_errs108) {
+                        vErrors.length = _errs108;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.complexity !== undefined) {
+            let data27 = data.complexity;
+            const _errs121 = errors;
+            let valid29 = false;
+            let passing9 = null;
+            const _errs122 = errors;
+            if ((typeof data27 == "number") && (isFinite(data27))) {
+                if (data27 < 0 || isNaN(data27)) {
+                    const err100 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data27 };
+                    if (vErrors === null) {
+                        vErrors = [err100];
+                    }
+                    else {
+                        vErrors.push(err100);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err101 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data27 };
+                if (vErrors === null) {
+                    vErrors = [err101];
+                }
+                else {
+                    vErrors.push(err101);
+                }
+                errors++;
+            }
+            var _valid9 = _errs122 === errors;
+            if (_valid9) {
+                valid29 = true;
+                passing9 = 0;
+            }
+            const _errs124 = errors;
+            if (data27 && typeof data27 == "object" && !Array.isArray(data27)) {
+                if (Object.keys(data27).length < 1) {
+                    const err102 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data27 };
+                    if (vErrors === null) {
+                        vErrors = [err102];
+                    }
+                    else {
+                        vErrors.push(err102);
+                    }
+                    errors++;
+                }
+                for (const key10 in data27) {
+                    if (!((key10 === "warn") || (key10 === "fail"))) {
+                        const err103 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key10 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data27 };
+                        if (vErrors === null) {
+                            vErrors = [err103];
+                        }
+                        else {
+                            vErrors.push(err103);
+                        }
+                        errors++;
+                    }
+                }
+                if (data27.warn !== undefined) {
+                    let data28 = data27.warn;
+                    if ((typeof data28 == "number") && (isFinite(data28))) {
+                        if (data28 < 0 || isNaN(data28)) {
+                            const err104 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data28 };
+                            if (vErrors === null) {
+                                vErrors = [err104];
+                            }
+                            else {
+                                vErrors.push(err104);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err105 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data28 };
+                        if (vErrors === null) {
+                            vErrors = [err105];
+                        }
+                        else {
+                            vErrors.push(err105);
+                        }
+                        errors++;
+                    }
+                }
+                if (data27.fail !== undefined) {
+                    let data29 = data27.fail;
+                    if ((typeof data29 == "number") && (isFinite(data29))) {
+                        if (data29 < 0 || isNaN(data29)) {
+                            const err106 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data29 };
+                            if (vErrors === null) {
+                                vErrors = [err106];
+                            }
+                            else {
+                                vErrors.push(err106);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err107 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data29 };
+                        if (vErrors === null) {
+                            vErrors = [err107];
+                        }
+                        else {
+                            vErrors.push(err107);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err108 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data27 };
+                if (vErrors === null) {
+                    vErrors = [err108];
+                }
+                else {
+                    vErrors.push(err108);
+                }
+                errors++;
+            }
+            var _valid9 = _errs124 === errors;
+            if (_valid9 && valid29) {
+                valid29 = false;
+                passing9 = [passing9, 1];
+            }
+            else {
+                if (_valid9) {
+                    valid29 = true;
+                    passing9 = 1;
+                }
+                const _errs131 = errors;
+                if ("off" !== data27) {
+                    const err109 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data27 };
+                    if (vErrors === null) {
+                        vErrors = [err109];
+                    }
+                    else {
+                        vErrors.push(err109);
+                    }
+                    errors++;
+                }
+                var _valid9 = _errs131 === errors;
+                if (_valid9 && valid29) {
+                    valid29 = false;
+                    passing9 = [passing9, 2];
+                }
+                else {
+                    if (_valid9) {
+                        valid29 = true;
+                        passing9 = 2;
+                    }
+                }
+            }
+            if (!valid29) {
+                const err110 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing9 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data27 };
+                if (vErrors === null) {
+                    vErrors = [err110];
+                }
+                else {
+                    vErrors.push(err110);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs121;
+                if (vErrors !== null) {
+                    if (_errs121) {
+                        vErrors.length = _errs121;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.base_change !== undefined) {
+            let data30 = data.base_change;
+            const _errs134 = errors;
+            let valid32 = false;
+            let passing10 = null;
+            const _errs135 = errors;
+            if ((typeof data30 == "number") && (isFinite(data30))) {
+                if (data30 < 0 || isNaN(data30)) {
+                    const err111 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data30 };
+                    if (vErrors === null) {
+                        vErrors = [err111];
+                    }
+                    else {
+                        vErrors.push(err111);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err112 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data30 };
+                if (vErrors === null) {
+                    vErrors = [err112];
+                }
+                else {
+                    vErrors.push(err112);
+                }
+                errors++;
+            }
+            var _valid10 = _errs135 === errors;
+            if (_valid10) {
+                valid32 = true;
+                passing10 = 0;
+            }
+            const _errs137 = errors;
+            if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
+                if (Object.keys(data30).length < 1) {
+                    const err113 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data30 };
+                    if (vErrors === null) {
+                        vErrors = [err113];
+                    }
+                    else {
+                        vErrors.push(err113);
+                    }
+                    errors++;
+                }
+                for (const key11 in data30) {
+                    if (!((key11 === "warn") || (key11 === "fail"))) {
+                        const err114 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key11 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data30 };
+                        if (vErrors === null) {
+                            vErrors = [err114];
+                        }
+                        else {
+                            vErrors.push(err114);
+                        }
+                        errors++;
+                    }
+                }
+                if (data30.warn !== undefined) {
+                    let data31 = data30.warn;
+                    if ((typeof data31 == "number") && (isFinite(data31))) {
+                        if (data31 < 0 || isNaN(data31)) {
+                            const err115 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data31 };
+                            if (vErrors === null) {
+                                vErrors = [err115];
+                            }
+                            else {
+                                vErrors.push(err115);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err116 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data31 };
+                        if (vErrors === null) {
+                            vErrors = [err116];
+                        }
+                        else {
+                            vErrors.push(err116);
+                        }
+                        errors++;
+                    }
+                }
+                if (data30.fail !== undefined) {
+                    let data32 = data30.fail;
+                    if ((typeof data32 == "number") && (isFinite(data32))) {
+                        if (data32 < 0 || isNaN(data32)) {
+                            const err117 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data32 };
+                            if (vErrors === null) {
+                                vErrors = [err117];
+                            }
+                            else {
+                                vErrors.push(err117);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err118 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data32 };
+                        if (vErrors === null) {
+                            vErrors = [err118];
+                        }
+                        else {
+                            vErrors.push(err118);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err119 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data30 };
+                if (vErrors === null) {
+                    vErrors = [err119];
+                }
+                else {
+                    vErrors.push(err119);
+                }
+                errors++;
+            }
+            var _valid10 = _errs137 === errors;
+            if (_valid10 && valid32) {
+                valid32 = false;
+                passing10 = [passing10, 1];
+            }
+            else {
+                if (_valid10) {
+                    valid32 = true;
+                    passing10 = 1;
+                }
+                const _errs144 = errors;
+                if ("off" !== data30) {
+                    const err120 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data30 };
+                    if (vErrors === null) {
+                        vErrors = [err120];
+                    }
+                    else {
+                        vErrors.push(err120);
+                    }
+                    errors++;
+                }
+                var _valid10 = _errs144 === errors;
+                if (_valid10 && valid32) {
+                    valid32 = false;
+                    passing10 = [passing10, 2];
+                }
+                else {
+                    if (_valid10) {
+                        valid32 = true;
+                        passing10 = 2;
+                    }
+                }
+            }
+            if (!valid32) {
+                const err121 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing10 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data30 };
+                if (vErrors === null) {
+                    vErrors = [err121];
+                }
+                else {
+                    vErrors.push(err121);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs134;
+                if (vErrors !== null) {
+                    if (_errs134) {
+                        vErrors.length = _errs134;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+    }
+    else {
+        const err122 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema32.type, parentSchema: schema32, data };
+        if (vErrors === null) {
+            vErrors = [err122];
+        }
+        else {
+            vErrors.push(err122);
+        }
+        errors++;
+    }
+    validate21.errors = vErrors;
+    return errors === 0;
+}
+validate21.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate20(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    /*# sourceURL="urn:fitgate:schema:settings:1" */ ;
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate20.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.version === undefined) {
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema31.required, parentSchema: schema31, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!(((((key0 === "version") || (key0 === "models")) || (key0 === "limits")) || (key0 === "fit")) || (key0 === "caps"))) {
+                const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31, data };
+                if (vErrors === null) {
+                    vErrors = [err1];
+                }
+                else {
+                    vErrors.push(err1);
+                }
+                errors++;
+            }
+        }
+        if (data.version !== undefined) {
+            let data0 = data.version;
+            if (1 !== data0) {
+                const err2 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema31.properties.version, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err2];
+                }
+                else {
+                    vErrors.push(err2);
+                }
+                errors++;
+            }
+        }
+        if (data.models !== undefined) {
+            let data1 = data.models;
+            if (Array.isArray(data1)) {
+                if (data1.length < 1) {
+                    const err3 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema31.properties.models, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err3];
+                    }
+                    else {
+                        vErrors.push(err3);
+                    }
+                    errors++;
+                }
+                const len0 = data1.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    let data2 = data1[i0];
+                    if (typeof data2 === "string") {
+                        if (func1(data2) < 1) {
+                            const err4 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.models.items, data: data2 };
+                            if (vErrors === null) {
+                                vErrors = [err4];
+                            }
+                            else {
+                                vErrors.push(err4);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err5 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.models.items.type, parentSchema: schema31.properties.models.items, data: data2 };
+                        if (vErrors === null) {
+                            vErrors = [err5];
+                        }
+                        else {
+                            vErrors.push(err5);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err6 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema31.properties.models.type, parentSchema: schema31.properties.models, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err6];
+                }
+                else {
+                    vErrors.push(err6);
+                }
+                errors++;
+            }
+        }
+        if (data.limits !== undefined) {
+            if (!(validate21(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data4 = data.fit;
+            if (data4 && typeof data4 == "object" && !Array.isArray(data4)) {
+                for (const key1 in data4) {
+                    if (!((((key1 === "folds") || (key1 === "fold_order")) || (key1 === "seed")) || (key1 === "parameter_count"))) {
+                        const err7 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.fit, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err7];
+                        }
+                        else {
+                            vErrors.push(err7);
+                        }
+                        errors++;
+                    }
+                }
+                if (data4.folds !== undefined) {
+                    let data5 = data4.folds;
+                    if (!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))) {
+                        const err8 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.fit.properties.folds.type, parentSchema: schema31.properties.fit.properties.folds, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err8];
+                        }
+                        else {
+                            vErrors.push(err8);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data5 == "number") && (isFinite(data5))) {
+                        if (data5 < 2 || isNaN(data5)) {
+                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema31.properties.fit.properties.folds, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err9];
+                            }
+                            else {
+                                vErrors.push(err9);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data4.fold_order !== undefined) {
+                    let data6 = data4.fold_order;
+                    if (!((data6 === "shuffled") || (data6 === "blocks"))) {
+                        const err10 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema31.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.fit.properties.fold_order.enum, parentSchema: schema31.properties.fit.properties.fold_order, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err10];
+                        }
+                        else {
+                            vErrors.push(err10);
+                        }
+                        errors++;
+                    }
+                }
+                if (data4.seed !== undefined) {
+                    let data7 = data4.seed;
+                    if (!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))) {
+                        const err11 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.fit.properties.seed.type, parentSchema: schema31.properties.fit.properties.seed, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err11];
+                        }
+                        else {
+                            vErrors.push(err11);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data7 == "number") && (isFinite(data7))) {
+                        if (data7 > 4294967295 || isNaN(data7)) {
+                            const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema31.properties.fit.properties.seed, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err12];
+                            }
+                            else {
+                                vErrors.push(err12);
+                            }
+                            errors++;
+                        }
+                        if (data7 < 0 || isNaN(data7)) {
+                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.fit.properties.seed, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err13];
+                            }
+                            else {
+                                vErrors.push(err13);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data4.parameter_count !== undefined) {
+                    let data8 = data4.parameter_count;
+                    if (!((data8 === "columns") || (data8 === "effective"))) {
+                        const err14 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema31.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.fit.properties.parameter_count.enum, parentSchema: schema31.properties.fit.properties.parameter_count, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err14];
+                        }
+                        else {
+                            vErrors.push(err14);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err15 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.fit.type, parentSchema: schema31.properties.fit, data: data4 };
+                if (vErrors === null) {
+                    vErrors = [err15];
+                }
+                else {
+                    vErrors.push(err15);
+                }
+                errors++;
+            }
+        }
+        if (data.caps !== undefined) {
+            let data9 = data.caps;
+            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                for (const key2 in data9) {
+                    if (!((key2 === "max_file_mb") || (key2 === "max_cells"))) {
+                        const err16 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.caps, data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err16];
+                        }
+                        else {
+                            vErrors.push(err16);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.max_file_mb !== undefined) {
+                    let data10 = data9.max_file_mb;
+                    if ((typeof data10 == "number") && (isFinite(data10))) {
+                        if (data10 <= 0 || isNaN(data10)) {
+                            const err17 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.caps.properties.max_file_mb, data: data10 };
+                            if (vErrors === null) {
+                                vErrors = [err17];
+                            }
+                            else {
+                                vErrors.push(err17);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.caps.properties.max_file_mb.type, parentSchema: schema31.properties.caps.properties.max_file_mb, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err18];
+                        }
+                        else {
+                            vErrors.push(err18);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.max_cells !== undefined) {
+                    let data11 = data9.max_cells;
+                    if (!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))) {
+                        const err19 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.caps.properties.max_cells.type, parentSchema: schema31.properties.caps.properties.max_cells, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data11 == "number") && (isFinite(data11))) {
+                        if (data11 < 1 || isNaN(data11)) {
+                            const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.caps.properties.max_cells, data: data11 };
+                            if (vErrors === null) {
+                                vErrors = [err20];
+                            }
+                            else {
+                                vErrors.push(err20);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+            }
+            else {
+                const err21 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.caps.type, parentSchema: schema31.properties.caps, data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err21];
+                }
+                else {
+                    vErrors.push(err21);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err22 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.type, parentSchema: schema31, data };
+        if (vErrors === null) {
+            vErrors = [err22];
+        }
+        else {
+            vErrors.push(err22);
+        }
+        errors++;
+    }
+    validate20.errors = vErrors;
+    return errors === 0;
+}
+validate20.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+const validateDescriptor = validate23;
+const schema44 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model. Only `regression` today.", "enum": ["regression"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const pattern4 = new RegExp("^[A-Za-z0-9._-]+$", "u");
+const schema45 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } };
+const schema46 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
+function validate24(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate24.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (Object.keys(data).length > 1) {
+            const err0 = { instancePath, schemaPath: "#/maxProperties", keyword: "maxProperties", params: { limit: 1 }, message: "must NOT have more than 1 properties", schema: 1, parentSchema: schema45, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        if (Object.keys(data).length < 1) {
+            const err1 = { instancePath, schemaPath: "#/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema45, data };
+            if (vErrors === null) {
+                vErrors = [err1];
+            }
+            else {
+                vErrors.push(err1);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            const _errs1 = errors;
+            if (!(((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf"))) {
+                const err2 = { instancePath, schemaPath: "#/propertyNames/enum", keyword: "enum", params: { allowedValues: schema45.propertyNames.enum }, message: "must be equal to one of the allowed values", schema: schema45.propertyNames.enum, parentSchema: schema45.propertyNames, data: key0, propertyName: key0 };
+                if (vErrors === null) {
+                    vErrors = [err2];
+                }
+                else {
+                    vErrors.push(err2);
+                }
+                errors++;
+            }
+            var valid0 = _errs1 === errors;
+            if (!valid0) {
+                const err3 = { instancePath, schemaPath: "#/propertyNames", keyword: "propertyNames", params: { propertyName: key0 }, message: "property name must be valid", schema: schema45.propertyNames, parentSchema: schema45, data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.linear !== undefined) {
+            let data0 = data.linear;
+            if (Array.isArray(data0)) {
+                if (data0.length < 1) {
+                    const err4 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema45.properties.linear, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+                const len0 = data0.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    let data1 = data0[i0];
+                    if (typeof data1 === "string") {
+                        if (func1(data1) < 1) {
+                            const err5 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema45.properties.linear.items, data: data1 };
+                            if (vErrors === null) {
+                                vErrors = [err5];
+                            }
+                            else {
+                                vErrors.push(err5);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err6 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema45.properties.linear.items.type, parentSchema: schema45.properties.linear.items, data: data1 };
+                        if (vErrors === null) {
+                            vErrors = [err6];
+                        }
+                        else {
+                            vErrors.push(err6);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema45.properties.linear.type, parentSchema: schema45.properties.linear, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+        if (data.polynomial !== undefined) {
+            let data2 = data.polynomial;
+            if (data2 && typeof data2 == "object" && !Array.isArray(data2)) {
+                if (data2.of === undefined) {
+                    const err8 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema45.properties.polynomial.required, parentSchema: schema45.properties.polynomial, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err8];
+                    }
+                    else {
+                        vErrors.push(err8);
+                    }
+                    errors++;
+                }
+                if (data2.degree === undefined) {
+                    const err9 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "degree" }, message: "must have required property '" + "degree" + "'", schema: schema45.properties.polynomial.required, parentSchema: schema45.properties.polynomial, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err9];
+                    }
+                    else {
+                        vErrors.push(err9);
+                    }
+                    errors++;
+                }
+                for (const key1 in data2) {
+                    if (!((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale"))) {
+                        const err10 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema45.properties.polynomial, data: data2 };
+                        if (vErrors === null) {
+                            vErrors = [err10];
+                        }
+                        else {
+                            vErrors.push(err10);
+                        }
+                        errors++;
+                    }
+                }
+                if (data2.of !== undefined) {
+                    let data3 = data2.of;
+                    if (typeof data3 === "string") {
+                        if (func1(data3) < 1) {
+                            const err11 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema45.properties.polynomial.properties.of, data: data3 };
+                            if (vErrors === null) {
+                                vErrors = [err11];
+                            }
+                            else {
+                                vErrors.push(err11);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err12 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema45.properties.polynomial.properties.of.type, parentSchema: schema45.properties.polynomial.properties.of, data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err12];
+                        }
+                        else {
+                            vErrors.push(err12);
+                        }
+                        errors++;
+                    }
+                }
+                if (data2.degree !== undefined) {
+                    let data4 = data2.degree;
+                    if (!(((typeof data4 == "number") && (!(data4 % 1) && !isNaN(data4))) && (isFinite(data4)))) {
+                        const err13 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema45.properties.polynomial.properties.degree.type, parentSchema: schema45.properties.polynomial.properties.degree, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err13];
+                        }
+                        else {
+                            vErrors.push(err13);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data4 == "number") && (isFinite(data4))) {
+                        if (data4 > 30 || isNaN(data4)) {
+                            const err14 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 30 }, message: "must be <= 30", schema: 30, parentSchema: schema45.properties.polynomial.properties.degree, data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err14];
+                            }
+                            else {
+                                vErrors.push(err14);
+                            }
+                            errors++;
+                        }
+                        if (data4 < 1 || isNaN(data4)) {
+                            const err15 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema45.properties.polynomial.properties.degree, data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err15];
+                            }
+                            else {
+                                vErrors.push(err15);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data2.shift !== undefined) {
+                    let data5 = data2.shift;
+                    if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                        const err16 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema45.properties.polynomial.properties.shift.type, parentSchema: schema45.properties.polynomial.properties.shift, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err16];
+                        }
+                        else {
+                            vErrors.push(err16);
+                        }
+                        errors++;
+                    }
+                }
+                if (data2.scale !== undefined) {
+                    let data6 = data2.scale;
+                    if ((typeof data6 == "number") && (isFinite(data6))) {
+                        if (data6 <= 0 || isNaN(data6)) {
+                            const err17 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema45.properties.polynomial.properties.scale, data: data6 };
+                            if (vErrors === null) {
+                                vErrors = [err17];
+                            }
+                            else {
+                                vErrors.push(err17);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err18 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema45.properties.polynomial.properties.scale.type, parentSchema: schema45.properties.polynomial.properties.scale, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err18];
+                        }
+                        else {
+                            vErrors.push(err18);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err19 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema45.properties.polynomial.type, parentSchema: schema45.properties.polynomial, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err19];
+                }
+                else {
+                    vErrors.push(err19);
+                }
+                errors++;
+            }
+        }
+        if (data.rbf !== undefined) {
+            let data7 = data.rbf;
+            if (data7 && typeof data7 == "object" && !Array.isArray(data7)) {
+                if (data7.of === undefined) {
+                    const err20 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema45.properties.rbf.required, parentSchema: schema45.properties.rbf, data: data7 };
+                    if (vErrors === null) {
+                        vErrors = [err20];
+                    }
+                    else {
+                        vErrors.push(err20);
+                    }
+                    errors++;
+                }
+                if (data7.centers === undefined) {
+                    const err21 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "centers" }, message: "must have required property '" + "centers" + "'", schema: schema45.properties.rbf.required, parentSchema: schema45.properties.rbf, data: data7 };
+                    if (vErrors === null) {
+                        vErrors = [err21];
+                    }
+                    else {
+                        vErrors.push(err21);
+                    }
+                    errors++;
+                }
+                if (data7.width === undefined) {
+                    const err22 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "width" }, message: "must have required property '" + "width" + "'", schema: schema45.properties.rbf.required, parentSchema: schema45.properties.rbf, data: data7 };
+                    if (vErrors === null) {
+                        vErrors = [err22];
+                    }
+                    else {
+                        vErrors.push(err22);
+                    }
+                    errors++;
+                }
+                for (const key2 in data7) {
+                    if (!(((key2 === "of") || (key2 === "centers")) || (key2 === "width"))) {
+                        const err23 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema45.properties.rbf, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err23];
+                        }
+                        else {
+                            vErrors.push(err23);
+                        }
+                        errors++;
+                    }
+                }
+                if (data7.of !== undefined) {
+                    let data8 = data7.of;
+                    if (typeof data8 === "string") {
+                        if (func1(data8) < 1) {
+                            const err24 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema45.properties.rbf.properties.of, data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err24];
+                            }
+                            else {
+                                vErrors.push(err24);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err25 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema45.properties.rbf.properties.of.type, parentSchema: schema45.properties.rbf.properties.of, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err25];
+                        }
+                        else {
+                            vErrors.push(err25);
+                        }
+                        errors++;
+                    }
+                }
+                if (data7.centers !== undefined) {
+                    let data9 = data7.centers;
+                    const _errs24 = errors;
+                    let valid7 = false;
+                    let passing0 = null;
+                    const _errs25 = errors;
+                    if (Array.isArray(data9)) {
+                        if (data9.length < 1) {
+                            const err26 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema46.oneOf[0], data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err26];
+                            }
+                            else {
+                                vErrors.push(err26);
+                            }
+                            errors++;
+                        }
+                        const len1 = data9.length;
+                        for (let i1 = 0; i1 < len1; i1++) {
+                            let data10 = data9[i1];
+                            if (!((typeof data10 == "number") && (isFinite(data10)))) {
+                                const err27 = { instancePath: instancePath + "/rbf/centers/" + i1, schemaPath: "#/$defs/centers/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[0].items.type, parentSchema: schema46.oneOf[0].items, data: data10 };
+                                if (vErrors === null) {
+                                    vErrors = [err27];
+                                }
+                                else {
+                                    vErrors.push(err27);
+                                }
+                                errors++;
+                            }
+                        }
+                    }
+                    else {
+                        const err28 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema46.oneOf[0].type, parentSchema: schema46.oneOf[0], data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err28];
+                        }
+                        else {
+                            vErrors.push(err28);
+                        }
+                        errors++;
+                    }
+                    var _valid0 = _errs25 === errors;
+                    if (_valid0) {
+                        valid7 = true;
+                        passing0 = 0;
+                    }
+                    const _errs29 = errors;
+                    if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                        if (data9.from === undefined) {
+                            const err29 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema46.oneOf[1].required, parentSchema: schema46.oneOf[1], data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err29];
+                            }
+                            else {
+                                vErrors.push(err29);
+                            }
+                            errors++;
+                        }
+                        if (data9.to === undefined) {
+                            const err30 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema46.oneOf[1].required, parentSchema: schema46.oneOf[1], data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err30];
+                            }
+                            else {
+                                vErrors.push(err30);
+                            }
+                            errors++;
+                        }
+                        if (data9.count === undefined) {
+                            const err31 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema46.oneOf[1].required, parentSchema: schema46.oneOf[1], data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err31];
+                            }
+                            else {
+                                vErrors.push(err31);
+                            }
+                            errors++;
+                        }
+                        for (const key3 in data9) {
+                            if (!(((key3 === "from") || (key3 === "to")) || (key3 === "count"))) {
+                                const err32 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema46.oneOf[1], data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err32];
+                                }
+                                else {
+                                    vErrors.push(err32);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data9.from !== undefined) {
+                            let data11 = data9.from;
+                            if (!((typeof data11 == "number") && (isFinite(data11)))) {
+                                const err33 = { instancePath: instancePath + "/rbf/centers/from", schemaPath: "#/$defs/centers/oneOf/1/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[1].properties.from.type, parentSchema: schema46.oneOf[1].properties.from, data: data11 };
+                                if (vErrors === null) {
+                                    vErrors = [err33];
+                                }
+                                else {
+                                    vErrors.push(err33);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data9.to !== undefined) {
+                            let data12 = data9.to;
+                            if (!((typeof data12 == "number") && (isFinite(data12)))) {
+                                const err34 = { instancePath: instancePath + "/rbf/centers/to", schemaPath: "#/$defs/centers/oneOf/1/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[1].properties.to.type, parentSchema: schema46.oneOf[1].properties.to, data: data12 };
+                                if (vErrors === null) {
+                                    vErrors = [err34];
+                                }
+                                else {
+                                    vErrors.push(err34);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data9.count !== undefined) {
+                            let data13 = data9.count;
+                            if (!(((typeof data13 == "number") && (!(data13 % 1) && !isNaN(data13))) && (isFinite(data13)))) {
+                                const err35 = { instancePath: instancePath + "/rbf/centers/count", schemaPath: "#/$defs/centers/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema46.oneOf[1].properties.count.type, parentSchema: schema46.oneOf[1].properties.count, data: data13 };
+                                if (vErrors === null) {
+                                    vErrors = [err35];
+                                }
+                                else {
+                                    vErrors.push(err35);
+                                }
+                                errors++;
+                            }
+                            if ((typeof data13 == "number") && (isFinite(data13))) {
+                                if (data13 > 10000 || isNaN(data13)) {
+                                    const err36 = { instancePath: instancePath + "/rbf/centers/count", schemaPath: "#/$defs/centers/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 10000 }, message: "must be <= 10000", schema: 10000, parentSchema: schema46.oneOf[1].properties.count, data: data13 };
+                                    if (vErrors === null) {
+                                        vErrors = [err36];
+                                    }
+                                    else {
+                                        vErrors.push(err36);
+                                    }
+                                    errors++;
+                                }
+                                if (data13 < 1 || isNaN(data13)) {
+                                    const err37 = { instancePath: instancePath + "/rbf/centers/count", schemaPath: "#/$defs/centers/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema46.oneOf[1].properties.count, data: data13 };
+                                    if (vErrors === null) {
+                                        vErrors = [err37];
+                                    }
+                                    else {
+                                        vErrors.push(err37);
+                                    }
+                                    errors++;
+                                }
+                            }
+                        }
+                    }
+                    else {
+                        const err38 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema46.oneOf[1].type, parentSchema: schema46.oneOf[1], data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err38];
+                        }
+                        else {
+                            vErrors.push(err38);
+                        }
+                        errors++;
+                    }
+                    var _valid0 = _errs29 === errors;
+                    if (_valid0 && valid7) {
+                        valid7 = false;
+                        passing0 = [passing0, 1];
+                    }
+                    else {
+                        if (_valid0) {
+                            valid7 = true;
+                            passing0 = 1;
+                            var props0 = true;
+                        }
+                        const _errs38 = errors;
+                        if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                            if (data9.from === undefined) {
+                                const err39 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema46.oneOf[2].required, parentSchema: schema46.oneOf[2], data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err39];
+                                }
+                                else {
+                                    vErrors.push(err39);
+                                }
+                                errors++;
+                            }
+                            if (data9.to === undefined) {
+                                const err40 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema46.oneOf[2].required, parentSchema: schema46.oneOf[2], data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err40];
+                                }
+                                else {
+                                    vErrors.push(err40);
+                                }
+                                errors++;
+                            }
+                            if (data9.step === undefined) {
+                                const err41 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/required", keyword: "required", params: { missingProperty: "step" }, message: "must have required property '" + "step" + "'", schema: schema46.oneOf[2].required, parentSchema: schema46.oneOf[2], data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err41];
+                                }
+                                else {
+                                    vErrors.push(err41);
+                                }
+                                errors++;
+                            }
+                            for (const key4 in data9) {
+                                if (!(((key4 === "from") || (key4 === "to")) || (key4 === "step"))) {
+                                    const err42 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema46.oneOf[2], data: data9 };
+                                    if (vErrors === null) {
+                                        vErrors = [err42];
+                                    }
+                                    else {
+                                        vErrors.push(err42);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            if (data9.from !== undefined) {
+                                let data14 = data9.from;
+                                if (!((typeof data14 == "number") && (isFinite(data14)))) {
+                                    const err43 = { instancePath: instancePath + "/rbf/centers/from", schemaPath: "#/$defs/centers/oneOf/2/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[2].properties.from.type, parentSchema: schema46.oneOf[2].properties.from, data: data14 };
+                                    if (vErrors === null) {
+                                        vErrors = [err43];
+                                    }
+                                    else {
+                                        vErrors.push(err43);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            if (data9.to !== undefined) {
+                                let data15 = data9.to;
+                                if (!((typeof data15 == "number") && (isFinite(data15)))) {
+                                    const err44 = { instancePath: instancePath + "/rbf/centers/to", schemaPath: "#/$defs/centers/oneOf/2/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[2].properties.to.type, parentSchema: schema46.oneOf[2].properties.to, data: data15 };
+                                    if (vErrors === null) {
+                                        vErrors = [err44];
+                                    }
+                                    else {
+                                        vErrors.push(err44);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            if (data9.step !== undefined) {
+                                let data16 = data9.step;
+                                if ((typeof data16 == "number") && (isFinite(data16))) {
+                                    if (data16 <= 0 || isNaN(data16)) {
+                                        const err45 = { instancePath: instancePath + "/rbf/centers/step", schemaPath: "#/$defs/centers/oneOf/2/properties/step/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema46.oneOf[2].properties.step, data: data16 };
+                                        if (vErrors === null) {
+                                            vErrors = [err45];
+                                        }
+                                        else {
+                                            vErrors.push(err45);
+                                        }
+                                        errors++;
+                                    }
+                                }
+                                else {
+                                    const err46 = { instancePath: instancePath + "/rbf/centers/step", schemaPath: "#/$defs/centers/oneOf/2/properties/step/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[2].properties.step.type, parentSchema: schema46.oneOf[2].properties.step, data: data16 };
+                                    if (vErrors === null) {
+                                        vErrors = [err46];
+                                    }
+                                    else {
+                                        vErrors.push(err46);
+                                    }
+                                    errors++;
+                                }
+                            }
+                        }
+                        else {
+                            const err47 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema46.oneOf[2].type, parentSchema: schema46.oneOf[2], data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err47];
+                            }
+                            else {
+                                vErrors.push(err47);
+                            }
+                            errors++;
+                        }
+                        var _valid0 = _errs38 === errors;
+                        if (_valid0 && valid7) {
+                            valid7 = false;
+                            passing0 = [passing0, 2];
+                        }
+                        else {
+                            if (_valid0) {
+                                valid7 = true;
+                                passing0 = 2;
+                                if (props0 !== true) {
+                                    props0 = true;
+                                }
+                            }
+                            const _errs47 = errors;
+                            if ("at-samples" !== data9) {
+                                const err48 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/3/const", keyword: "const", params: { allowedValue: "at-samples" }, message: "must be equal to constant", schema: "at-samples", parentSchema: schema46.oneOf[3], data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err48];
+                                }
+                                else {
+                                    vErrors.push(err48);
+                                }
+                                errors++;
+                            }
+                            var _valid0 = _errs47 === errors;
+                            if (_valid0 && valid7) {
+                                valid7 = false;
+                                passing0 = [passing0, 3];
+                            }
+                            else {
+                                if (_valid0) {
+                                    valid7 = true;
+                                    passing0 = 3;
+                                }
+                            }
+                        }
+                    }
+                    if (!valid7) {
+                        const err49 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema46.oneOf, parentSchema: schema46, data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err49];
+                        }
+                        else {
+                            vErrors.push(err49);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs24;
+                        if (vErrors !== null) {
+                            if (_errs24) {
+                                vErrors.length = _errs24;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data7.width !== undefined) {
+                    let data17 = data7.width;
+                    if ((typeof data17 == "number") && (isFinite(data17))) {
+                        if (data17 <= 0 || isNaN(data17)) {
+                            const err50 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema45.properties.rbf.properties.width, data: data17 };
+                            if (vErrors === null) {
+                                vErrors = [err50];
+                            }
+                            else {
+                                vErrors.push(err50);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err51 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema45.properties.rbf.properties.width.type, parentSchema: schema45.properties.rbf.properties.width, data: data17 };
+                        if (vErrors === null) {
+                            vErrors = [err51];
+                        }
+                        else {
+                            vErrors.push(err51);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err52 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema45.properties.rbf.type, parentSchema: schema45.properties.rbf, data: data7 };
+                if (vErrors === null) {
+                    vErrors = [err52];
+                }
+                else {
+                    vErrors.push(err52);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err53 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema45.type, parentSchema: schema45, data };
+        if (vErrors === null) {
+            vErrors = [err53];
+        }
+        else {
+            vErrors.push(err53);
+        }
+        errors++;
+    }
+    validate24.errors = vErrors;
+    return errors === 0;
+}
+validate24.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true }, "dynamicProps": false, "dynamicItems": false };
+const schema47 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
+const schema48 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+function validate26(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate26.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        for (const key0 in data) {
+            if (!(func2.call(schema47.properties, key0))) {
+                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema47, data };
+                if (vErrors === null) {
+                    vErrors = [err0];
+                }
+                else {
+                    vErrors.push(err0);
+                }
+                errors++;
+            }
+        }
+        if (data.gap_ratio !== undefined) {
+            let data0 = data.gap_ratio;
+            const _errs4 = errors;
+            let valid2 = false;
+            let passing0 = null;
+            const _errs5 = errors;
+            if ((typeof data0 == "number") && (isFinite(data0))) {
+                if (data0 < 0 || isNaN(data0)) {
+                    const err1 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err1];
+                    }
+                    else {
+                        vErrors.push(err1);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err2 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err2];
+                }
+                else {
+                    vErrors.push(err2);
+                }
+                errors++;
+            }
+            var _valid0 = _errs5 === errors;
+            if (_valid0) {
+                valid2 = true;
+                passing0 = 0;
+            }
+            const _errs7 = errors;
+            if (data0 && typeof data0 == "object" && !Array.isArray(data0)) {
+                if (Object.keys(data0).length < 1) {
+                    const err3 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err3];
+                    }
+                    else {
+                        vErrors.push(err3);
+                    }
+                    errors++;
+                }
+                for (const key1 in data0) {
+                    if (!((key1 === "warn") || (key1 === "fail"))) {
+                        const err4 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data0 };
+                        if (vErrors === null) {
+                            vErrors = [err4];
+                        }
+                        else {
+                            vErrors.push(err4);
+                        }
+                        errors++;
+                    }
+                }
+                if (data0.warn !== undefined) {
+                    let data1 = data0.warn;
+                    if ((typeof data1 == "number") && (isFinite(data1))) {
+                        if (data1 < 0 || isNaN(data1)) {
+                            const err5 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data1 };
+                            if (vErrors === null) {
+                                vErrors = [err5];
+                            }
+                            else {
+                                vErrors.push(err5);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err6 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data1 };
+                        if (vErrors === null) {
+                            vErrors = [err6];
+                        }
+                        else {
+                            vErrors.push(err6);
+                        }
+                        errors++;
+                    }
+                }
+                if (data0.fail !== undefined) {
+                    let data2 = data0.fail;
+                    if ((typeof data2 == "number") && (isFinite(data2))) {
+                        if (data2 < 0 || isNaN(data2)) {
+                            const err7 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data2 };
+                            if (vErrors === null) {
+                                vErrors = [err7];
+                            }
+                            else {
+                                vErrors.push(err7);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err8 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data2 };
+                        if (vErrors === null) {
+                            vErrors = [err8];
+                        }
+                        else {
+                            vErrors.push(err8);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err9 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            var _valid0 = _errs7 === errors;
+            if (_valid0 && valid2) {
+                valid2 = false;
+                passing0 = [passing0, 1];
+            }
+            else {
+                if (_valid0) {
+                    valid2 = true;
+                    passing0 = 1;
+                }
+                const _errs14 = errors;
+                if ("off" !== data0) {
+                    const err10 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+                var _valid0 = _errs14 === errors;
+                if (_valid0 && valid2) {
+                    valid2 = false;
+                    passing0 = [passing0, 2];
+                }
+                else {
+                    if (_valid0) {
+                        valid2 = true;
+                        passing0 = 2;
+                    }
+                }
+            }
+            if (!valid2) {
+                const err11 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err11];
+                }
+                else {
+                    vErrors.push(err11);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs4;
+                if (vErrors !== null) {
+                    if (_errs4) {
+                        vErrors.length = _errs4;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.params_per_sample !== undefined) {
+            let data3 = data.params_per_sample;
+            const _errs17 = errors;
+            let valid5 = false;
+            let passing1 = null;
+            const _errs18 = errors;
+            if ((typeof data3 == "number") && (isFinite(data3))) {
+                if (data3 < 0 || isNaN(data3)) {
+                    const err12 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err13 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err13];
+                }
+                else {
+                    vErrors.push(err13);
+                }
+                errors++;
+            }
+            var _valid1 = _errs18 === errors;
+            if (_valid1) {
+                valid5 = true;
+                passing1 = 0;
+            }
+            const _errs20 = errors;
+            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
+                if (Object.keys(data3).length < 1) {
+                    const err14 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err14];
+                    }
+                    else {
+                        vErrors.push(err14);
+                    }
+                    errors++;
+                }
+                for (const key2 in data3) {
+                    if (!((key2 === "warn") || (key2 === "fail"))) {
+                        const err15 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err15];
+                        }
+                        else {
+                            vErrors.push(err15);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.warn !== undefined) {
+                    let data4 = data3.warn;
+                    if ((typeof data4 == "number") && (isFinite(data4))) {
+                        if (data4 < 0 || isNaN(data4)) {
+                            const err16 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err16];
+                            }
+                            else {
+                                vErrors.push(err16);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err17 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err17];
+                        }
+                        else {
+                            vErrors.push(err17);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.fail !== undefined) {
+                    let data5 = data3.fail;
+                    if ((typeof data5 == "number") && (isFinite(data5))) {
+                        if (data5 < 0 || isNaN(data5)) {
+                            const err18 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err18];
+                            }
+                            else {
+                                vErrors.push(err18);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err19 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err20 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err20];
+                }
+                else {
+                    vErrors.push(err20);
+                }
+                errors++;
+            }
+            var _valid1 = _errs20 === errors;
+            if (_valid1 && valid5) {
+                valid5 = false;
+                passing1 = [passing1, 1];
+            }
+            else {
+                if (_valid1) {
+                    valid5 = true;
+                    passing1 = 1;
+                }
+                const _errs27 = errors;
+                if ("off" !== data3) {
+                    const err21 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err21];
+                    }
+                    else {
+                        vErrors.push(err21);
+                    }
+                    errors++;
+                }
+                var _valid1 = _errs27 === errors;
+                if (_valid1 && valid5) {
+                    valid5 = false;
+                    passing1 = [passing1, 2];
+                }
+                else {
+                    if (_valid1) {
+                        valid5 = true;
+                        passing1 = 2;
+                    }
+                }
+            }
+            if (!valid5) {
+                const err22 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing1 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err22];
+                }
+                else {
+                    vErrors.push(err22);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs17;
+                if (vErrors !== null) {
+                    if (_errs17) {
+                        vErrors.length = _errs17;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.coefficient !== undefined) {
+            let data6 = data.coefficient;
+            const _errs30 = errors;
+            let valid8 = false;
+            let passing2 = null;
+            const _errs31 = errors;
+            if ((typeof data6 == "number") && (isFinite(data6))) {
+                if (data6 < 0 || isNaN(data6)) {
+                    const err23 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err23];
+                    }
+                    else {
+                        vErrors.push(err23);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err24 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data6 };
+                if (vErrors === null) {
+                    vErrors = [err24];
+                }
+                else {
+                    vErrors.push(err24);
+                }
+                errors++;
+            }
+            var _valid2 = _errs31 === errors;
+            if (_valid2) {
+                valid8 = true;
+                passing2 = 0;
+            }
+            const _errs33 = errors;
+            if (data6 && typeof data6 == "object" && !Array.isArray(data6)) {
+                if (Object.keys(data6).length < 1) {
+                    const err25 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err25];
+                    }
+                    else {
+                        vErrors.push(err25);
+                    }
+                    errors++;
+                }
+                for (const key3 in data6) {
+                    if (!((key3 === "warn") || (key3 === "fail"))) {
+                        const err26 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err26];
+                        }
+                        else {
+                            vErrors.push(err26);
+                        }
+                        errors++;
+                    }
+                }
+                if (data6.warn !== undefined) {
+                    let data7 = data6.warn;
+                    if ((typeof data7 == "number") && (isFinite(data7))) {
+                        if (data7 < 0 || isNaN(data7)) {
+                            const err27 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err27];
+                            }
+                            else {
+                                vErrors.push(err27);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err28 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err28];
+                        }
+                        else {
+                            vErrors.push(err28);
+                        }
+                        errors++;
+                    }
+                }
+                if (data6.fail !== undefined) {
+                    let data8 = data6.fail;
+                    if ((typeof data8 == "number") && (isFinite(data8))) {
+                        if (data8 < 0 || isNaN(data8)) {
+                            const err29 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err29];
+                            }
+                            else {
+                                vErrors.push(err29);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err30 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err30];
+                        }
+                        else {
+                            vErrors.push(err30);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err31 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data6 };
+                if (vErrors === null) {
+                    vErrors = [err31];
+                }
+                else {
+                    vErrors.push(err31);
+                }
+                errors++;
+            }
+            var _valid2 = _errs33 === errors;
+            if (_valid2 && valid8) {
+                valid8 = false;
+                passing2 = [passing2, 1];
+            }
+            else {
+                if (_valid2) {
+                    valid8 = true;
+                    passing2 = 1;
+                }
+                const _errs40 = errors;
+                if ("off" !== data6) {
+                    const err32 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err32];
+                    }
+                    else {
+                        vErrors.push(err32);
+                    }
+                    errors++;
+                }
+                var _valid2 = _errs40 === errors;
+                if (_valid2 && valid8) {
+                    valid8 = false;
+                    passing2 = [passing2, 2];
+                }
+                else {
+                    if (_valid2) {
+                        valid8 = true;
+                        passing2 = 2;
+                    }
+                }
+            }
+            if (!valid8) {
+                const err33 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing2 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data6 };
+                if (vErrors === null) {
+                    vErrors = [err33];
+                }
+                else {
+                    vErrors.push(err33);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs30;
+                if (vErrors !== null) {
+                    if (_errs30) {
+                        vErrors.length = _errs30;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.cv_ratio !== undefined) {
+            let data9 = data.cv_ratio;
+            const _errs43 = errors;
+            let valid11 = false;
+            let passing3 = null;
+            const _errs44 = errors;
+            if ((typeof data9 == "number") && (isFinite(data9))) {
+                if (data9 < 0 || isNaN(data9)) {
+                    const err34 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data9 };
+                    if (vErrors === null) {
+                        vErrors = [err34];
+                    }
+                    else {
+                        vErrors.push(err34);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err35 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err35];
+                }
+                else {
+                    vErrors.push(err35);
+                }
+                errors++;
+            }
+            var _valid3 = _errs44 === errors;
+            if (_valid3) {
+                valid11 = true;
+                passing3 = 0;
+            }
+            const _errs46 = errors;
+            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                if (Object.keys(data9).length < 1) {
+                    const err36 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data9 };
+                    if (vErrors === null) {
+                        vErrors = [err36];
+                    }
+                    else {
+                        vErrors.push(err36);
+                    }
+                    errors++;
+                }
+                for (const key4 in data9) {
+                    if (!((key4 === "warn") || (key4 === "fail"))) {
+                        const err37 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err37];
+                        }
+                        else {
+                            vErrors.push(err37);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.warn !== undefined) {
+                    let data10 = data9.warn;
+                    if ((typeof data10 == "number") && (isFinite(data10))) {
+                        if (data10 < 0 || isNaN(data10)) {
+                            const err38 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data10 };
+                            if (vErrors === null) {
+                                vErrors = [err38];
+                            }
+                            else {
+                                vErrors.push(err38);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err39 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err39];
+                        }
+                        else {
+                            vErrors.push(err39);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.fail !== undefined) {
+                    let data11 = data9.fail;
+                    if ((typeof data11 == "number") && (isFinite(data11))) {
+                        if (data11 < 0 || isNaN(data11)) {
+                            const err40 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data11 };
+                            if (vErrors === null) {
+                                vErrors = [err40];
+                            }
+                            else {
+                                vErrors.push(err40);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err41 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err41];
+                        }
+                        else {
+                            vErrors.push(err41);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err42 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err42];
+                }
+                else {
+                    vErrors.push(err42);
+                }
+                errors++;
+            }
+            var _valid3 = _errs46 === errors;
+            if (_valid3 && valid11) {
+                valid11 = false;
+                passing3 = [passing3, 1];
+            }
+            else {
+                if (_valid3) {
+                    valid11 = true;
+                    passing3 = 1;
+                }
+                const _errs53 = errors;
+                if ("off" !== data9) {
+                    const err43 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data9 };
+                    if (vErrors === null) {
+                        vErrors = [err43];
+                    }
+                    else {
+                        vErrors.push(err43);
+                    }
+                    errors++;
+                }
+                var _valid3 = _errs53 === errors;
+                if (_valid3 && valid11) {
+                    valid11 = false;
+                    passing3 = [passing3, 2];
+                }
+                else {
+                    if (_valid3) {
+                        valid11 = true;
+                        passing3 = 2;
+                    }
+                }
+            }
+            if (!valid11) {
+                const err44 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing3 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err44];
+                }
+                else {
+                    vErrors.push(err44);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs43;
+                if (vErrors !== null) {
+                    if (_errs43) {
+                        vErrors.length = _errs43;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.leakage !== undefined) {
+            let data12 = data.leakage;
+            const _errs56 = errors;
+            let valid14 = false;
+            let passing4 = null;
+            const _errs57 = errors;
+            if ((typeof data12 == "number") && (isFinite(data12))) {
+                if (data12 < 0 || isNaN(data12)) {
+                    const err45 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data12 };
+                    if (vErrors === null) {
+                        vErrors = [err45];
+                    }
+                    else {
+                        vErrors.push(err45);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err46 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err46];
+                }
+                else {
+                    vErrors.push(err46);
+                }
+                errors++;
+            }
+            var _valid4 = _errs57 === errors;
+            if (_valid4) {
+                valid14 = true;
+                passing4 = 0;
+            }
+            const _errs59 = errors;
+            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
+                if (Object.keys(data12).length < 1) {
+                    const err47 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data12 };
+                    if (vErrors === null) {
+                        vErrors = [err47];
+                    }
+                    else {
+                        vErrors.push(err47);
+                    }
+                    errors++;
+                }
+                for (const key5 in data12) {
+                    if (!((key5 === "warn") || (key5 === "fail"))) {
+                        const err48 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err48];
+                        }
+                        else {
+                            vErrors.push(err48);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.warn !== undefined) {
+                    let data13 = data12.warn;
+                    if ((typeof data13 == "number") && (isFinite(data13))) {
+                        if (data13 < 0 || isNaN(data13)) {
+                            const err49 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data13 };
+                            if (vErrors === null) {
+                                vErrors = [err49];
+                            }
+                            else {
+                                vErrors.push(err49);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err50 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data13 };
+                        if (vErrors === null) {
+                            vErrors = [err50];
+                        }
+                        else {
+                            vErrors.push(err50);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.fail !== undefined) {
+                    let data14 = data12.fail;
+                    if ((typeof data14 == "number") && (isFinite(data14))) {
+                        if (data14 < 0 || isNaN(data14)) {
+                            const err51 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err51];
+                            }
+                            else {
+                                vErrors.push(err51);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err52 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err52];
+                        }
+                        else {
+                            vErrors.push(err52);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err53 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err53];
+                }
+                else {
+                    vErrors.push(err53);
+                }
+                errors++;
+            }
+            var _valid4 = _errs59 === errors;
+            if (_valid4 && valid14) {
+                valid14 = false;
+                passing4 = [passing4, 1];
+            }
+            else {
+                if (_valid4) {
+                    valid14 = true;
+                    passing4 = 1;
+                }
+                const _errs66 = errors;
+                if ("off" !== data12) {
+                    const err54 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data12 };
+                    if (vErrors === null) {
+                        vErrors = [err54];
+                    }
+                    else {
+                        vErrors.push(err54);
+                    }
+                    errors++;
+                }
+                var _valid4 = _errs66 === errors;
+                if (_valid4 && valid14) {
+                    valid14 = false;
+                    passing4 = [passing4, 2];
+                }
+                else {
+                    if (_valid4) {
+                        valid14 = true;
+                        passing4 = 2;
+                    }
+                }
+            }
+            if (!valid14) {
+                const err55 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing4 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err55];
+                }
+                else {
+                    vErrors.push(err55);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs56;
+                if (vErrors !== null) {
+                    if (_errs56) {
+                        vErrors.length = _errs56;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.swing !== undefined) {
+            let data15 = data.swing;
+            const _errs69 = errors;
+            let valid17 = false;
+            let passing5 = null;
+            const _errs70 = errors;
+            if ((typeof data15 == "number") && (isFinite(data15))) {
+                if (data15 < 0 || isNaN(data15)) {
+                    const err56 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data15 };
+                    if (vErrors === null) {
+                        vErrors = [err56];
+                    }
+                    else {
+                        vErrors.push(err56);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err57 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data15 };
+                if (vErrors === null) {
+                    vErrors = [err57];
+                }
+                else {
+                    vErrors.push(err57);
+                }
+                errors++;
+            }
+            var _valid5 = _errs70 === errors;
+            if (_valid5) {
+                valid17 = true;
+                passing5 = 0;
+            }
+            const _errs72 = errors;
+            if (data15 && typeof data15 == "object" && !Array.isArray(data15)) {
+                if (Object.keys(data15).length < 1) {
+                    const err58 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data15 };
+                    if (vErrors === null) {
+                        vErrors = [err58];
+                    }
+                    else {
+                        vErrors.push(err58);
+                    }
+                    errors++;
+                }
+                for (const key6 in data15) {
+                    if (!((key6 === "warn") || (key6 === "fail"))) {
+                        const err59 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data15 };
+                        if (vErrors === null) {
+                            vErrors = [err59];
+                        }
+                        else {
+                            vErrors.push(err59);
+                        }
+                        errors++;
+                    }
+                }
+                if (data15.warn !== undefined) {
+                    let data16 = data15.warn;
+                    if ((typeof data16 == "number") && (isFinite(data16))) {
+                        if (data16 < 0 || isNaN(data16)) {
+                            const err60 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data16 };
+                            if (vErrors === null) {
+                                vErrors = [err60];
+                            }
+                            else {
+                                vErrors.push(err60);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err61 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data16 };
+                        if (vErrors === null) {
+                            vErrors = [err61];
+                        }
+                        else {
+                            vErrors.push(err61);
+                        }
+                        errors++;
+                    }
+                }
+                if (data15.fail !== undefined) {
+                    let data17 = data15.fail;
+                    if ((typeof data17 == "number") && (isFinite(data17))) {
+                        if (data17 < 0 || isNaN(data17)) {
+                            const err62 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data17 };
+                            if (vErrors === null) {
+                                vErrors = [err62];
+                            }
+                            else {
+                                vErrors.push(err62);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err63 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data17 };
+                        if (vErrors === null) {
+                            vErrors = [err63];
+                        }
+                        else {
+                            vErrors.push(err63);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err64 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data15 };
+                if (vErrors === null) {
+                    vErrors = [err64];
+                }
+                else {
+                    vErrors.push(err64);
+                }
+                errors++;
+            }
+            var _valid5 = _errs72 === errors;
+            if (_valid5 && valid17) {
+                valid17 = false;
+                passing5 = [passing5, 1];
+            }
+            else {
+                if (_valid5) {
+                    valid17 = true;
+                    passing5 = 1;
+                }
+                const _errs79 = errors;
+                if ("off" !== data15) {
+                    const err65 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data15 };
+                    if (vErrors === null) {
+                        vErrors = [err65];
+                    }
+                    else {
+                        vErrors.push(err65);
+                    }
+                    errors++;
+                }
+                var _valid5 = _errs79 === errors;
+                if (_valid5 && valid17) {
+                    valid17 = false;
+                    passing5 = [passing5, 2];
+                }
+                else {
+                    if (_valid5) {
+                        valid17 = true;
+                        passing5 = 2;
+                    }
+                }
+            }
+            if (!valid17) {
+                const err66 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing5 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data15 };
+                if (vErrors === null) {
+                    vErrors = [err66];
+                }
+                else {
+                    vErrors.push(err66);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs69;
+                if (vErrors !== null) {
+                    if (_errs69) {
+                        vErrors.length = _errs69;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.swing_beyond !== undefined) {
+            let data18 = data.swing_beyond;
+            const _errs82 = errors;
+            let valid20 = false;
+            let passing6 = null;
+            const _errs83 = errors;
+            if ((typeof data18 == "number") && (isFinite(data18))) {
+                if (data18 < 0 || isNaN(data18)) {
+                    const err67 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data18 };
+                    if (vErrors === null) {
+                        vErrors = [err67];
+                    }
+                    else {
+                        vErrors.push(err67);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err68 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data18 };
+                if (vErrors === null) {
+                    vErrors = [err68];
+                }
+                else {
+                    vErrors.push(err68);
+                }
+                errors++;
+            }
+            var _valid6 = _errs83 === errors;
+            if (_valid6) {
+                valid20 = true;
+                passing6 = 0;
+            }
+            const _errs85 = errors;
+            if (data18 && typeof data18 == "object" && !Array.isArray(data18)) {
+                if (Object.keys(data18).length < 1) {
+                    const err69 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data18 };
+                    if (vErrors === null) {
+                        vErrors = [err69];
+                    }
+                    else {
+                        vErrors.push(err69);
+                    }
+                    errors++;
+                }
+                for (const key7 in data18) {
+                    if (!((key7 === "warn") || (key7 === "fail"))) {
+                        const err70 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data18 };
+                        if (vErrors === null) {
+                            vErrors = [err70];
+                        }
+                        else {
+                            vErrors.push(err70);
+                        }
+                        errors++;
+                    }
+                }
+                if (data18.warn !== undefined) {
+                    let data19 = data18.warn;
+                    if ((typeof data19 == "number") && (isFinite(data19))) {
+                        if (data19 < 0 || isNaN(data19)) {
+                            const err71 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data19 };
+                            if (vErrors === null) {
+                                vErrors = [err71];
+                            }
+                            else {
+                                vErrors.push(err71);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err72 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data19 };
+                        if (vErrors === null) {
+                            vErrors = [err72];
+                        }
+                        else {
+                            vErrors.push(err72);
+                        }
+                        errors++;
+                    }
+                }
+                if (data18.fail !== undefined) {
+                    let data20 = data18.fail;
+                    if ((typeof data20 == "number") && (isFinite(data20))) {
+                        if (data20 < 0 || isNaN(data20)) {
+                            const err73 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data20 };
+                            if (vErrors === null) {
+                                vErrors = [err73];
+                            }
+                            else {
+                                vErrors.push(err73);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err74 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data20 };
+                        if (vErrors === null) {
+                            vErrors = [err74];
+                        }
+                        else {
+                            vErrors.push(err74);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err75 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data18 };
+                if (vErrors === null) {
+                    vErrors = [err75];
+                }
+                else {
+                    vErrors.push(err75);
+                }
+                errors++;
+            }
+            var _valid6 = _errs85 === errors;
+            if (_valid6 && valid20) {
+                valid20 = false;
+                passing6 = [passing6, 1];
+            }
+            else {
+                if (_valid6) {
+                    valid20 = true;
+                    passing6 = 1;
+                }
+                const _errs92 = errors;
+                if ("off" !== data18) {
+                    const err76 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data18 };
+                    if (vErrors === null) {
+                        vErrors = [err76];
+                    }
+                    else {
+                        vErrors.push(err76);
+                    }
+                    errors++;
+                }
+                var _valid6 = _errs92 === errors;
+                if (_valid6 && valid20) {
+                    valid20 = false;
+                    passing6 = [passing6, 2];
+                }
+                else {
+                    if (_valid6) {
+                        valid20 = true;
+                        passing6 = 2;
+                    }
+                }
+            }
+            if (!valid20) {
+                const err77 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing6 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data18 };
+                if (vErrors === null) {
+                    vErrors = [err77];
+                }
+                else {
+                    vErrors.push(err77);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs82;
+                if (vErrors !== null) {
+                    if (_errs82) {
+                        vErrors.length = _errs82;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.condition !== undefined) {
+            let data21 = data.condition;
+            const _errs95 = errors;
+            let valid23 = false;
+            let passing7 = null;
+            const _errs96 = errors;
+            if ((typeof data21 == "number") && (isFinite(data21))) {
+                if (data21 < 0 || isNaN(data21)) {
+                    const err78 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err78];
+                    }
+                    else {
+                        vErrors.push(err78);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err79 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err79];
+                }
+                else {
+                    vErrors.push(err79);
+                }
+                errors++;
+            }
+            var _valid7 = _errs96 === errors;
+            if (_valid7) {
+                valid23 = true;
+                passing7 = 0;
+            }
+            const _errs98 = errors;
+            if (data21 && typeof data21 == "object" && !Array.isArray(data21)) {
+                if (Object.keys(data21).length < 1) {
+                    const err80 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err80];
+                    }
+                    else {
+                        vErrors.push(err80);
+                    }
+                    errors++;
+                }
+                for (const key8 in data21) {
+                    if (!((key8 === "warn") || (key8 === "fail"))) {
+                        const err81 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key8 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data21 };
+                        if (vErrors === null) {
+                            vErrors = [err81];
+                        }
+                        else {
+                            vErrors.push(err81);
+                        }
+                        errors++;
+                    }
+                }
+                if (data21.warn !== undefined) {
+                    let data22 = data21.warn;
+                    if ((typeof data22 == "number") && (isFinite(data22))) {
+                        if (data22 < 0 || isNaN(data22)) {
+                            const err82 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data22 };
+                            if (vErrors === null) {
+                                vErrors = [err82];
+                            }
+                            else {
+                                vErrors.push(err82);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err83 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data22 };
+                        if (vErrors === null) {
+                            vErrors = [err83];
+                        }
+                        else {
+                            vErrors.push(err83);
+                        }
+                        errors++;
+                    }
+                }
+                if (data21.fail !== undefined) {
+                    let data23 = data21.fail;
+                    if ((typeof data23 == "number") && (isFinite(data23))) {
+                        if (data23 < 0 || isNaN(data23)) {
+                            const err84 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data23 };
+                            if (vErrors === null) {
+                                vErrors = [err84];
+                            }
+                            else {
+                                vErrors.push(err84);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err85 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data23 };
+                        if (vErrors === null) {
+                            vErrors = [err85];
+                        }
+                        else {
+                            vErrors.push(err85);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err86 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err86];
+                }
+                else {
+                    vErrors.push(err86);
+                }
+                errors++;
+            }
+            var _valid7 = _errs98 === errors;
+            if (_valid7 && valid23) {
+                valid23 = false;
+                passing7 = [passing7, 1];
+            }
+            else {
+                if (_valid7) {
+                    valid23 = true;
+                    passing7 = 1;
+                }
+                const _errs105 = errors;
+                if ("off" !== data21) {
+                    const err87 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err87];
+                    }
+                    else {
+                        vErrors.push(err87);
+                    }
+                    errors++;
+                }
+                var _valid7 = _errs105 === errors;
+                if (_valid7 && valid23) {
+                    valid23 = false;
+                    passing7 = [passing7, 2];
+                }
+                else {
+                    if (_valid7) {
+                        valid23 = true;
+                        passing7 = 2;
+                    }
+                }
+            }
+            if (!valid23) {
+                const err88 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing7 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err88];
+                }
+                else {
+                    vErrors.push(err88);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs95;
+                if (vErrors !== null) {
+                    if (_errs95) {
+                        vErrors.length = _errs95;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.reproducibility !== undefined) {
+            let data24 = data.reproducibility;
+            const _errs108 = errors;
+            let valid26 = false;
+            let passing8 = null;
+            const _errs109 = errors;
+            if ((typeof data24 == "number") && (isFinite(data24))) {
+                if (data24 < 0 || isNaN(data24)) {
+                    const err89 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data24 };
+                    if (vErrors === null) {
+                        vErrors = [err89];
+                    }
+                    else {
+                        vErrors.push(err89);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err90 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data24 };
+                if (vErrors === null) {
+                    vErrors = [err90];
+                }
+                else {
+                    vErrors.push(err90);
+                }
+                errors++;
+            }
+            var _valid8 = _errs109 === errors;
+            if (_valid8) {
+                valid26 = true;
+                passing8 = 0;
+            }
+            const _errs111 = errors;
+            if (data24 && typeof data24 == "object" && !Array.isArray(data24)) {
+                if (Object.keys(data24).length < 1) {
+                    const err91 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data24 };
+                    if (vErrors === null) {
+                        vErrors = [err91];
+                    }
+                    else {
+                        vErrors.push(err91);
+                    }
+                    errors++;
+                }
+                for (const key9 in data24) {
+                    if (!((key9 === "warn") || (key9 === "fail"))) {
+                        const err92 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key9 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data24 };
+                        if (vErrors === null) {
+                            vErrors = [err92];
+                        }
+                        else {
+                            vErrors.push(err92);
+                        }
+                        errors++;
+                    }
+                }
+                if (data24.warn !== undefined) {
+                    let data25 = data24.warn;
+                    if ((typeof data25 == "number") && (isFinite(data25))) {
+                        if (data25 < 0 || isNaN(data25)) {
+                            const err93 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data25 };
+                            if (vErrors === null) {
+                                vErrors = [err93];
+                            }
+                            else {
+                                vErrors.push(err93);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err94 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data25 };
+                        if (vErrors === null) {
+                            vErrors = [err94];
+                        }
+                        else {
+                            vErrors.push(err94);
+                        }
+                        errors++;
+                    }
+                }
+                if (data24.fail !== undefined) {
+                    let data26 = data24.fail;
+                    if ((typeof data26 == "number") && (isFinite(data26))) {
+                        if (data26 < 0 || isNaN(data26)) {
+                            const err95 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data26 };
+                            if (vErrors === null) {
+                                vErrors = [err95];
+                            }
+                            else {
+                                vErrors.push(err95);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err96 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data26 };
+                        if (vErrors === null) {
+                            vErrors = [err96];
+                        }
+                        else {
+                            vErrors.push(err96);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err97 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data24 };
+                if (vErrors === null) {
+                    vErrors = [err97];
+                }
+                else {
+                    vErrors.push(err97);
+                }
+                errors++;
+            }
+            var _valid8 = _errs111 === errors;
+            if (_valid8 && valid26) {
+                valid26 = false;
+                passing8 = [passing8, 1];
+            }
+            else {
+                if (_valid8) {
+                    valid26 = true;
+                    passing8 = 1;
+                }
+                const _errs118 = errors;
+                if ("off" !== data24) {
+                    const err98 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data24 };
+                    if (vErrors === null) {
+                        vErrors = [err98];
+                    }
+                    else {
+                        vErrors.push(err98);
+                    }
+                    errors++;
+                }
+                var _valid8 = _errs118 === errors;
+                if (_valid8 && valid26) {
+                    valid26 = false;
+                    passing8 = [passing8, 2];
+                }
+                else {
+                    if (_valid8) {
+                        valid26 = true;
+                        passing8 = 2;
+                    }
+                }
+            }
+            if (!valid26) {
+                const err99 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing8 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data24 };
+                if (vErrors === null) {
+                    vErrors = [err99];
+                }
+                else {
+                    vErrors.push(err99);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs108;
+                if (vErrors !== null) {
+                    if (_errs108) {
+                        vErrors.length = _errs108;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.complexity !== undefined) {
+            let data27 = data.complexity;
+            const _errs121 = errors;
+            let valid29 = false;
+            let passing9 = null;
+            const _errs122 = errors;
+            if ((typeof data27 == "number") && (isFinite(data27))) {
+                if (data27 < 0 || isNaN(data27)) {
+                    const err100 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data27 };
+                    if (vErrors === null) {
+                        vErrors = [err100];
+                    }
+                    else {
+                        vErrors.push(err100);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err101 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data27 };
+                if (vErrors === null) {
+                    vErrors = [err101];
+                }
+                else {
+                    vErrors.push(err101);
+                }
+                errors++;
+            }
+            var _valid9 = _errs122 === errors;
+            if (_valid9) {
+                valid29 = true;
+                passing9 = 0;
+            }
+            const _errs124 = errors;
+            if (data27 && typeof data27 == "object" && !Array.isArray(data27)) {
+                if (Object.keys(data27).length < 1) {
+                    const err102 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data27 };
+                    if (vErrors === null) {
+                        vErrors = [err102];
+                    }
+                    else {
+                        vErrors.push(err102);
+                    }
+                    errors++;
+                }
+                for (const key10 in data27) {
+                    if (!((key10 === "warn") || (key10 === "fail"))) {
+                        const err103 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key10 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data27 };
+                        if (vErrors === null) {
+                            vErrors = [err103];
+                        }
+                        else {
+                            vErrors.push(err103);
+                        }
+                        errors++;
+                    }
+                }
+                if (data27.warn !== undefined) {
+                    let data28 = data27.warn;
+                    if ((typeof data28 == "number") && (isFinite(data28))) {
+                        if (data28 < 0 || isNaN(data28)) {
+                            const err104 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data28 };
+                            if (vErrors === null) {
+                                vErrors = [err104];
+                            }
+                            else {
+                                vErrors.push(err104);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err105 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data28 };
+                        if (vErrors === null) {
+                            vErrors = [err105];
+                        }
+                        else {
+                            vErrors.push(err105);
+                        }
+                        errors++;
+                    }
+                }
+                if (data27.fail !== undefined) {
+                    let data29 = data27.fail;
+                    if ((typeof data29 == "number") && (isFinite(data29))) {
+                        if (data29 < 0 || isNaN(data29)) {
+                            const err106 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data29 };
+                            if (vErrors === null) {
+                                vErrors = [err106];
+                            }
+                            else {
+                                vErrors.push(err106);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err107 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data29 };
+                        if (vErrors === null) {
+                            vErrors = [err107];
+                        }
+                        else {
+                            vErrors.push(err107);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err108 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data27 };
+                if (vErrors === null) {
+                    vErrors = [err108];
+                }
+                else {
+                    vErrors.push(err108);
+                }
+                errors++;
+            }
+            var _valid9 = _errs124 === errors;
+            if (_valid9 && valid29) {
+                valid29 = false;
+                passing9 = [passing9, 1];
+            }
+            else {
+                if (_valid9) {
+                    valid29 = true;
+                    passing9 = 1;
+                }
+                const _errs131 = errors;
+                if ("off" !== data27) {
+                    const err109 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data27 };
+                    if (vErrors === null) {
+                        vErrors = [err109];
+                    }
+                    else {
+                        vErrors.push(err109);
+                    }
+                    errors++;
+                }
+                var _valid9 = _errs131 === errors;
+                if (_valid9 && valid29) {
+                    valid29 = false;
+                    passing9 = [passing9, 2];
+                }
+                else {
+                    if (_valid9) {
+                        valid29 = true;
+                        passing9 = 2;
+                    }
+                }
+            }
+            if (!valid29) {
+                const err110 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing9 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data27 };
+                if (vErrors === null) {
+                    vErrors = [err110];
+                }
+                else {
+                    vErrors.push(err110);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs121;
+                if (vErrors !== null) {
+                    if (_errs121) {
+                        vErrors.length = _errs121;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+        if (data.base_change !== undefined) {
+            let data30 = data.base_change;
+            const _errs134 = errors;
+            let valid32 = false;
+            let passing10 = null;
+            const _errs135 = errors;
+            if ((typeof data30 == "number") && (isFinite(data30))) {
+                if (data30 < 0 || isNaN(data30)) {
+                    const err111 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data30 };
+                    if (vErrors === null) {
+                        vErrors = [err111];
+                    }
+                    else {
+                        vErrors.push(err111);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err112 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data30 };
+                if (vErrors === null) {
+                    vErrors = [err112];
+                }
+                else {
+                    vErrors.push(err112);
+                }
+                errors++;
+            }
+            var _valid10 = _errs135 === errors;
+            if (_valid10) {
+                valid32 = true;
+                passing10 = 0;
+            }
+            const _errs137 = errors;
+            if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
+                if (Object.keys(data30).length < 1) {
+                    const err113 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data30 };
+                    if (vErrors === null) {
+                        vErrors = [err113];
+                    }
+                    else {
+                        vErrors.push(err113);
+                    }
+                    errors++;
+                }
+                for (const key11 in data30) {
+                    if (!((key11 === "warn") || (key11 === "fail"))) {
+                        const err114 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key11 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data30 };
+                        if (vErrors === null) {
+                            vErrors = [err114];
+                        }
+                        else {
+                            vErrors.push(err114);
+                        }
+                        errors++;
+                    }
+                }
+                if (data30.warn !== undefined) {
+                    let data31 = data30.warn;
+                    if ((typeof data31 == "number") && (isFinite(data31))) {
+                        if (data31 < 0 || isNaN(data31)) {
+                            const err115 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data31 };
+                            if (vErrors === null) {
+                                vErrors = [err115];
+                            }
+                            else {
+                                vErrors.push(err115);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err116 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data31 };
+                        if (vErrors === null) {
+                            vErrors = [err116];
+                        }
+                        else {
+                            vErrors.push(err116);
+                        }
+                        errors++;
+                    }
+                }
+                if (data30.fail !== undefined) {
+                    let data32 = data30.fail;
+                    if ((typeof data32 == "number") && (isFinite(data32))) {
+                        if (data32 < 0 || isNaN(data32)) {
+                            const err117 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data32 };
+                            if (vErrors === null) {
+                                vErrors = [err117];
+                            }
+                            else {
+                                vErrors.push(err117);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err118 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data32 };
+                        if (vErrors === null) {
+                            vErrors = [err118];
+                        }
+                        else {
+                            vErrors.push(err118);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err119 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data30 };
+                if (vErrors === null) {
+                    vErrors = [err119];
+                }
+                else {
+                    vErrors.push(err119);
+                }
+                errors++;
+            }
+            var _valid10 = _errs137 === errors;
+            if (_valid10 && valid32) {
+                valid32 = false;
+                passing10 = [passing10, 1];
+            }
+            else {
+                if (_valid10) {
+                    valid32 = true;
+                    passing10 = 1;
+                }
+                const _errs144 = errors;
+                if ("off" !== data30) {
+                    const err120 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data30 };
+                    if (vErrors === null) {
+                        vErrors = [err120];
+                    }
+                    else {
+                        vErrors.push(err120);
+                    }
+                    errors++;
+                }
+                var _valid10 = _errs144 === errors;
+                if (_valid10 && valid32) {
+                    valid32 = false;
+                    passing10 = [passing10, 2];
+                }
+                else {
+                    if (_valid10) {
+                        valid32 = true;
+                        passing10 = 2;
+                    }
+                }
+            }
+            if (!valid32) {
+                const err121 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing10 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data30 };
+                if (vErrors === null) {
+                    vErrors = [err121];
+                }
+                else {
+                    vErrors.push(err121);
+                }
+                errors++;
+            }
+            else {
+                errors = _errs134;
+                if (vErrors !== null) {
+                    if (_errs134) {
+                        vErrors.length = _errs134;
+                    }
+                    else {
+                        vErrors = null;
+                    }
+                }
+            }
+        }
+    }
+    else {
+        const err122 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema47.type, parentSchema: schema47, data };
+        if (vErrors === null) {
+            vErrors = [err122];
+        }
+        else {
+            vErrors.push(err122);
+        }
+        errors++;
+    }
+    validate26.errors = vErrors;
+    return errors === 0;
+}
+validate26.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate23(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    /*# sourceURL="urn:fitgate:schema:descriptor:1" */ ;
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate23.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.version === undefined) {
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema44.required, parentSchema: schema44, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        if (data.name === undefined) {
+            const err1 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "name" }, message: "must have required property '" + "name" + "'", schema: schema44.required, parentSchema: schema44, data };
+            if (vErrors === null) {
+                vErrors = [err1];
+            }
+            else {
+                vErrors.push(err1);
+            }
+            errors++;
+        }
+        if (data.data === undefined) {
+            const err2 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "data" }, message: "must have required property '" + "data" + "'", schema: schema44.required, parentSchema: schema44, data };
+            if (vErrors === null) {
+                vErrors = [err2];
+            }
+            else {
+                vErrors.push(err2);
+            }
+            errors++;
+        }
+        if (data.terms === undefined) {
+            const err3 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "terms" }, message: "must have required property '" + "terms" + "'", schema: schema44.required, parentSchema: schema44, data };
+            if (vErrors === null) {
+                vErrors = [err3];
+            }
+            else {
+                vErrors.push(err3);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))) {
+                const err4 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema44, data };
+                if (vErrors === null) {
+                    vErrors = [err4];
+                }
+                else {
+                    vErrors.push(err4);
+                }
+                errors++;
+            }
+        }
+        if (data.version !== undefined) {
+            let data0 = data.version;
+            if (1 !== data0) {
+                const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema44.properties.version, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.name !== undefined) {
+            let data1 = data.name;
+            if (typeof data1 === "string") {
+                if (func1(data1) > 100) {
+                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema44.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+                if (func1(data1) < 1) {
+                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err7];
+                    }
+                    else {
+                        vErrors.push(err7);
+                    }
+                    errors++;
+                }
+                if (!pattern4.test(data1)) {
+                    const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema44.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err8];
+                    }
+                    else {
+                        vErrors.push(err8);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err9 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.name.type, parentSchema: schema44.properties.name, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+        }
+        if (data.task !== undefined) {
+            let data2 = data.task;
+            if (!(data2 === "regression")) {
+                const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema44.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema44.properties.task.enum, parentSchema: schema44.properties.task, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err10];
+                }
+                else {
+                    vErrors.push(err10);
+                }
+                errors++;
+            }
+        }
+        if (data.data !== undefined) {
+            let data3 = data.data;
+            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
+                if (data3.train === undefined) {
+                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema44.properties.data.required, parentSchema: schema44.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+                if (data3.holdout === undefined) {
+                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema44.properties.data.required, parentSchema: schema44.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+                if (data3.target === undefined) {
+                    const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema44.properties.data.required, parentSchema: schema44.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err13];
+                    }
+                    else {
+                        vErrors.push(err13);
+                    }
+                    errors++;
+                }
+                for (const key1 in data3) {
+                    if (!(((key1 === "train") || (key1 === "holdout")) || (key1 === "target"))) {
+                        const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema44.properties.data, data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err14];
+                        }
+                        else {
+                            vErrors.push(err14);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.train !== undefined) {
+                    let data4 = data3.train;
+                    if (typeof data4 === "string") {
+                        if (func1(data4) < 1) {
+                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.data.properties.train, data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err15];
+                            }
+                            else {
+                                vErrors.push(err15);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.data.properties.train.type, parentSchema: schema44.properties.data.properties.train, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err16];
+                        }
+                        else {
+                            vErrors.push(err16);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.holdout !== undefined) {
+                    let data5 = data3.holdout;
+                    if (typeof data5 === "string") {
+                        if (func1(data5) < 1) {
+                            const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.data.properties.holdout, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err17];
+                            }
+                            else {
+                                vErrors.push(err17);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err18 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.data.properties.holdout.type, parentSchema: schema44.properties.data.properties.holdout, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err18];
+                        }
+                        else {
+                            vErrors.push(err18);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.target !== undefined) {
+                    let data6 = data3.target;
+                    if (typeof data6 === "string") {
+                        if (func1(data6) < 1) {
+                            const err19 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.data.properties.target, data: data6 };
+                            if (vErrors === null) {
+                                vErrors = [err19];
+                            }
+                            else {
+                                vErrors.push(err19);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err20 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.data.properties.target.type, parentSchema: schema44.properties.data.properties.target, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err20];
+                        }
+                        else {
+                            vErrors.push(err20);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err21 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema44.properties.data.type, parentSchema: schema44.properties.data, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err21];
+                }
+                else {
+                    vErrors.push(err21);
+                }
+                errors++;
+            }
+        }
+        if (data.terms !== undefined) {
+            let data7 = data.terms;
+            if (Array.isArray(data7)) {
+                if (data7.length < 1) {
+                    const err22 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema44.properties.terms, data: data7 };
+                    if (vErrors === null) {
+                        vErrors = [err22];
+                    }
+                    else {
+                        vErrors.push(err22);
+                    }
+                    errors++;
+                }
+                const len0 = data7.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    if (!(validate24(data7[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data7, parentDataProperty: i0, rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
+                        errors = vErrors.length;
+                    }
+                }
+            }
+            else {
+                const err23 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema44.properties.terms.type, parentSchema: schema44.properties.terms, data: data7 };
+                if (vErrors === null) {
+                    vErrors = [err23];
+                }
+                else {
+                    vErrors.push(err23);
+                }
+                errors++;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data9 = data.fit;
+            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                for (const key2 in data9) {
+                    if (!((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count"))) {
+                        const err24 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema44.properties.fit, data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err24];
+                        }
+                        else {
+                            vErrors.push(err24);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.intercept !== undefined) {
+                    let data10 = data9.intercept;
+                    if (typeof data10 !== "boolean") {
+                        const err25 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema44.properties.fit.properties.intercept.type, parentSchema: schema44.properties.fit.properties.intercept, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err25];
+                        }
+                        else {
+                            vErrors.push(err25);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.ridge !== undefined) {
+                    let data11 = data9.ridge;
+                    if ((typeof data11 == "number") && (isFinite(data11))) {
+                        if (data11 < 0 || isNaN(data11)) {
+                            const err26 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema44.properties.fit.properties.ridge, data: data11 };
+                            if (vErrors === null) {
+                                vErrors = [err26];
+                            }
+                            else {
+                                vErrors.push(err26);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err27 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema44.properties.fit.properties.ridge.type, parentSchema: schema44.properties.fit.properties.ridge, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err27];
+                        }
+                        else {
+                            vErrors.push(err27);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.folds !== undefined) {
+                    let data12 = data9.folds;
+                    if (!(((typeof data12 == "number") && (!(data12 % 1) && !isNaN(data12))) && (isFinite(data12)))) {
+                        const err28 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema44.properties.fit.properties.folds.type, parentSchema: schema44.properties.fit.properties.folds, data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err28];
+                        }
+                        else {
+                            vErrors.push(err28);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data12 == "number") && (isFinite(data12))) {
+                        if (data12 < 2 || isNaN(data12)) {
+                            const err29 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema44.properties.fit.properties.folds, data: data12 };
+                            if (vErrors === null) {
+                                vErrors = [err29];
+                            }
+                            else {
+                                vErrors.push(err29);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data9.fold_order !== undefined) {
+                    let data13 = data9.fold_order;
+                    if (!((data13 === "shuffled") || (data13 === "blocks"))) {
+                        const err30 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema44.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema44.properties.fit.properties.fold_order.enum, parentSchema: schema44.properties.fit.properties.fold_order, data: data13 };
+                        if (vErrors === null) {
+                            vErrors = [err30];
+                        }
+                        else {
+                            vErrors.push(err30);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.seed !== undefined) {
+                    let data14 = data9.seed;
+                    if (!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))) {
+                        const err31 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema44.properties.fit.properties.seed.type, parentSchema: schema44.properties.fit.properties.seed, data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err31];
+                        }
+                        else {
+                            vErrors.push(err31);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data14 == "number") && (isFinite(data14))) {
+                        if (data14 > 4294967295 || isNaN(data14)) {
+                            const err32 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema44.properties.fit.properties.seed, data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err32];
+                            }
+                            else {
+                                vErrors.push(err32);
+                            }
+                            errors++;
+                        }
+                        if (data14 < 0 || isNaN(data14)) {
+                            const err33 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema44.properties.fit.properties.seed, data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err33];
+                            }
+                            else {
+                                vErrors.push(err33);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data9.parameter_count !== undefined) {
+                    let data15 = data9.parameter_count;
+                    if (!((data15 === "columns") || (data15 === "effective"))) {
+                        const err34 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema44.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema44.properties.fit.properties.parameter_count.enum, parentSchema: schema44.properties.fit.properties.parameter_count, data: data15 };
+                        if (vErrors === null) {
+                            vErrors = [err34];
+                        }
+                        else {
+                            vErrors.push(err34);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err35 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema44.properties.fit.type, parentSchema: schema44.properties.fit, data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err35];
+                }
+                else {
+                    vErrors.push(err35);
+                }
+                errors++;
+            }
+        }
+        if (data.coefficients !== undefined) {
+            let data16 = data.coefficients;
+            if (Array.isArray(data16)) {
+                if (data16.length < 1) {
+                    const err36 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema44.properties.coefficients, data: data16 };
+                    if (vErrors === null) {
+                        vErrors = [err36];
+                    }
+                    else {
+                        vErrors.push(err36);
+                    }
+                    errors++;
+                }
+                const len1 = data16.length;
+                for (let i1 = 0; i1 < len1; i1++) {
+                    let data17 = data16[i1];
+                    if (!((typeof data17 == "number") && (isFinite(data17)))) {
+                        const err37 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema44.properties.coefficients.items.type, parentSchema: schema44.properties.coefficients.items, data: data17 };
+                        if (vErrors === null) {
+                            vErrors = [err37];
+                        }
+                        else {
+                            vErrors.push(err37);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err38 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema44.properties.coefficients.type, parentSchema: schema44.properties.coefficients, data: data16 };
+                if (vErrors === null) {
+                    vErrors = [err38];
+                }
+                else {
+                    vErrors.push(err38);
+                }
+                errors++;
+            }
+        }
+        if (data.limits !== undefined) {
+            if (!(validate26(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate26.errors : vErrors.concat(validate26.errors);
+                errors = vErrors.length;
+            }
+        }
+    }
+    else {
+        const err39 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema44.type, parentSchema: schema44, data };
+        if (vErrors === null) {
+            vErrors = [err39];
+        }
+        else {
+            vErrors.push(err39);
+        }
+        errors++;
+    }
+    validate23.errors = vErrors;
+    return errors === 0;
+}
+validate23.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+
 ;// CONCATENATED MODULE: ./src/config/schemas.ts
 /**
- * The two JSON Schemas (shipped as JSON files beside this module) compiled once, with the
- * limit keys of {@link LIMIT_KEYS} added to their `limits` so that a key added to the table
- * is accepted even before the schema files list it (a test keeps the files in step).
+ * The two JSON Schemas (shipped as JSON files beside this module) as validators. They are
+ * compiled ahead of time by test/tools/gen-validators.mjs (ajv standalone code, run by
+ * `npm run bundle`) into ./generated/validators.ts, with the limit keys of `LIMIT_KEYS` added to
+ * their `limits` so that a key added to the table is accepted even before the schema files list
+ * it (a test keeps the files in step, another fails when the generated module is stale). No
+ * schema is compiled at run time.
  */
 
 
 
-
 /** The settings schema as shipped (`settings.schema.json`). */
-const settingsSchema = settings_schema_namespaceObject;
+const settingsSchema = (/* unused pure expression or super */ null && (settingsSchemaFile));
 /** The descriptor schema as shipped (`descriptor.schema.json`). */
-const descriptorSchema = descriptor_schema_namespaceObject;
-let compiled = null;
-function compile() {
-    if (compiled)
-        return compiled;
-    const ajv = new _2020.Ajv2020({ allErrors: true, verbose: true, strict: true, logger: false });
-    compiled = { settings: ajv.compile(withLimitKeys(settingsSchema)), descriptor: ajv.compile(withLimitKeys(descriptorSchema)) };
-    return compiled;
-}
-/** A copy of `schema` whose `$defs.limits.properties` has every key of {@link LIMIT_KEYS}. */
-function withLimitKeys(schema) {
-    const copy = structuredClone(schema);
-    const properties = (copy.$defs?.limits?.properties ?? {});
-    for (const { key, defaultSpec, description } of LIMIT_KEYS) {
-        if (!(key in properties))
-            properties[key] = { $ref: '#/$defs/limit', description, default: defaultSpec };
-    }
-    return copy;
-}
+const descriptorSchema = (/* unused pure expression or super */ null && (descriptorSchemaFile));
 /** Validates a parsed settings file against `settings.schema.json`. */
-const validateSettingsValue = (value) => {
-    const validate = compile().settings;
-    return validate(value) ? null : [...(validate.errors ?? [])];
-};
+const validateSettingsValue = (value) => run(validateSettings, value);
 /** Validates a parsed descriptor against `descriptor.schema.json`. */
-const validateDescriptorValue = (value) => {
-    const validate = compile().descriptor;
+const validateDescriptorValue = (value) => run(validateDescriptor, value);
+function run(validate, value) {
     return validate(value) ? null : [...(validate.errors ?? [])];
-};
+}
 
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
 var dist = __nccwpck_require__(8815);
@@ -26450,7 +26314,7 @@ var units = __nccwpck_require__(3332);
 /** A number for a Mermaid series: 4 significant digits, plain decimal notation. */
 function value(v) {
     const r = Number(v.toPrecision(4));
-    return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r))))) : String(r);
+    return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r)))))) : String(r);
 }
 /** Indices of at most `max` evenly spaced entries of a list of `n`, first and last kept. */
 function evenly(n, max) {
@@ -31319,1809 +31183,6 @@ exports.suggestSimilar = suggestSimilar;
 
 /***/ }),
 
-/***/ 4352:
-/***/ ((module, __unused_webpack_exports, __nccwpck_require__) => {
-
-
-
-const { normalizeIPv6, removeDotSegments, removeDotSegmentsRelative, recomposeAuthority, normalizePercentEncoding, normalizePathEncoding, serializePathEncoding, normalizeQueryFragmentEncoding, encodeQuery, encodeFragment, reescapeHostDelimiters, isIPv4, nonSimpleDomain } = __nccwpck_require__(5077)
-const { SCHEMES, getSchemeHandler } = __nccwpck_require__(5300)
-
-const VALID_SCHEME = /^[A-Za-z][A-Za-z0-9+.-]*$/u
-const MALFORMED_SCHEME_ERROR = 'URI scheme is malformed.'
-const MALFORMED_HOST_ERROR = 'URI host is malformed.'
-// ASCII characters outside the RFC 3986 reg-name set (unreserved, sub-delims
-// and "%" for pct-encoded): C0 controls, space, DEL, and "#/:<>?@[\]^`{|}.
-const FORBIDDEN_DOMAIN_HOST_CHARACTER = /[\0-\x20"#/:<>?@[\\\]^`{|}\x7F]/u
-
-/**
- * RFC 3986 section 3.1 does not allow percent-encoding in a scheme, so the
- * scheme is validated as-is and never decoded. Decoding would let inert input
- * such as `%6Aavascript:` become a live `javascript:` scheme.
- *
- * @param {string} scheme
- * @returns {string}
- */
-function validateScheme (scheme) {
-  const stringScheme = String(scheme)
-  if (!VALID_SCHEME.test(stringScheme)) {
-    throw new TypeError(MALFORMED_SCHEME_ERROR)
-  }
-  return stringScheme
-}
-
-/**
- * @template {import('./types/index').URIComponent|string} T
- * @param {T} uri
- * @param {import('./types/index').Options} [options]
- * @returns {T}
- */
-function normalize (uri, options) {
-  if (typeof uri === 'string') {
-    uri = /** @type {T} */ (normalizeString(uri, options))
-  } else if (typeof uri === 'object') {
-    uri = /** @type {T} */ (parse(serialize(uri, options), options))
-  }
-  return uri
-}
-
-/**
- * @param {string} baseURI
- * @param {string} relativeURI
- * @param {import('./types/index').Options} [options]
- * @returns {string}
- */
-function resolve (baseURI, relativeURI, options) {
-  const schemelessOptions = options ? Object.assign({ scheme: 'null' }, options) : { scheme: 'null' }
-  const {
-    parsed: baseParsed,
-    malformedAuthorityOrPort: baseMalformed,
-    malformedPercentEncoding: baseMalformedPercentEncoding,
-    malformedSchemeSpecific: baseMalformedSchemeSpecific,
-    malformedHost: baseMalformedHost,
-    malformedScheme: baseMalformedScheme
-  } = parseWithStatus(baseURI, schemelessOptions)
-  const {
-    parsed: relativeParsed,
-    malformedAuthorityOrPort: relativeMalformed,
-    malformedPercentEncoding: relativeMalformedPercentEncoding,
-    malformedSchemeSpecific: relativeMalformedSchemeSpecific,
-    malformedHost: relativeMalformedHost,
-    malformedScheme: relativeMalformedScheme
-  } = parseWithStatus(relativeURI, schemelessOptions)
-  if (
-    baseMalformed ||
-    relativeMalformed ||
-    baseMalformedPercentEncoding ||
-    relativeMalformedPercentEncoding ||
-    baseMalformedSchemeSpecific ||
-    relativeMalformedSchemeSpecific ||
-    baseMalformedHost ||
-    relativeMalformedHost ||
-    baseMalformedScheme ||
-    relativeMalformedScheme
-  ) {
-    throw new Error(baseParsed.error || relativeParsed.error || 'URI is malformed.')
-  }
-  const resolved = resolveComponent(baseParsed, relativeParsed, schemelessOptions, true)
-  const resolvedSchemeHandler = getSchemeHandler((options && options.scheme) || resolved.scheme)
-  const resolvedHost = resolved.host
-  const resolvedHostIsIP = resolvedHost !== undefined && resolvedHost !== '' &&
-    (isIPv4(resolvedHost) || normalizeIPv6(resolvedHost).isIPV6)
-  // Inputs are parsed scheme-neutrally, so delimiters and controls in a domain
-  // host are only detected here, once the final scheme is known. They always
-  // fail closed, including in percent-encoded hosts.
-  if (hasForbiddenDomainHost(resolved, options || {}, resolvedSchemeHandler, resolvedHostIsIP)) {
-    throw new Error(MALFORMED_HOST_ERROR)
-  }
-  canonicalizeHost(resolved, options || {}, resolvedSchemeHandler, resolvedHostIsIP)
-  // Percent escapes in an ASCII reg-name are encoded data. The WHATWG hostname
-  // parser can reject them even though fast-uri preserves them safely as RFC
-  // 3986 data. A raw non-ASCII host must still fail closed if conversion fails.
-  const encodedASCIIHost = resolvedHost && resolvedHost.indexOf('%') !== -1 &&
-    !/\P{ASCII}/u.test(resolvedHost)
-  if (resolved.error && !encodedASCIIHost) {
-    throw new Error(resolved.error)
-  }
-  schemelessOptions.skipEscape = true
-  return serialize(resolved, schemelessOptions)
-}
-
-/**
- * @param {import ('./types/index').URIComponent} base
- * @param {import ('./types/index').URIComponent} relative
- * @param {import('./types/index').Options} [options]
- * @param {boolean} [skipNormalization=false]
- * @returns {import ('./types/index').URIComponent}
- */
-function resolveComponent (base, relative, options, skipNormalization) {
-  /** @type {import('./types/index').URIComponent} */
-  const target = {}
-  if (!skipNormalization) {
-    base = parse(serialize(base, options), options) // normalize base component
-    relative = parse(serialize(relative, options), options) // normalize relative component
-  }
-  options = options || {}
-
-  if (!options.tolerant && relative.scheme) {
-    target.scheme = relative.scheme
-    // target.authority = relative.authority;
-    target.userinfo = relative.userinfo
-    target.host = relative.host
-    target.port = relative.port
-    target.path = removeDotSegments(relative.path || '')
-    target.query = relative.query
-  } else {
-    if (relative.userinfo !== undefined || relative.host !== undefined || relative.port !== undefined) {
-      // target.authority = relative.authority;
-      target.userinfo = relative.userinfo
-      target.host = relative.host
-      target.port = relative.port
-      target.path = removeDotSegments(relative.path || '')
-      target.query = relative.query
-    } else {
-      if (!relative.path) {
-        target.path = base.path
-        if (relative.query !== undefined) {
-          target.query = relative.query
-        } else {
-          target.query = base.query
-        }
-      } else {
-        if (relative.path[0] === '/') {
-          target.path = removeDotSegments(relative.path)
-        } else {
-          const baseHasAuthority = base.userinfo !== undefined || base.host !== undefined || base.port !== undefined
-          if (baseHasAuthority && !base.path) {
-            target.path = '/' + relative.path
-          } else if (!base.path) {
-            target.path = relative.path
-          } else {
-            target.path = base.path.slice(0, base.path.lastIndexOf('/') + 1) + relative.path
-          }
-          target.path = base.scheme === undefined && !baseHasAuthority && target.path[0] !== '/'
-            ? removeDotSegmentsRelative(target.path)
-            : removeDotSegments(target.path)
-        }
-        target.query = relative.query
-      }
-      // target.authority = base.authority;
-      target.userinfo = base.userinfo
-      target.host = base.host
-      target.port = base.port
-    }
-    target.scheme = base.scheme
-  }
-
-  target.fragment = relative.fragment
-
-  return target
-}
-
-/**
- * @param {import ('./types/index').URIComponent|string} uriA
- * @param {import ('./types/index').URIComponent|string} uriB
- * @param {import ('./types/index').Options} options
- * @returns {boolean}
- */
-function equal (uriA, uriB, options) {
-  const normalizedA = normalizeComparableURI(uriA, options)
-  const normalizedB = normalizeComparableURI(uriB, options)
-
-  return normalizedA !== undefined && normalizedB !== undefined && normalizedA === normalizedB
-}
-
-/**
- * @param {Readonly<import('./types/index').URIComponent>} cmpts
- * @param {import('./types/index').Options} [opts]
- * @returns {string}
- */
-function serialize (cmpts, opts) {
-  const component = {
-    host: cmpts.host,
-    scheme: cmpts.scheme,
-    userinfo: cmpts.userinfo,
-    port: cmpts.port,
-    path: cmpts.path,
-    query: cmpts.query,
-    nid: cmpts.nid,
-    nss: cmpts.nss,
-    uuid: cmpts.uuid,
-    fragment: cmpts.fragment,
-    reference: cmpts.reference,
-    resourceName: cmpts.resourceName,
-    secure: cmpts.secure,
-    error: ''
-  }
-  const options = Object.assign({}, opts)
-  const uriTokens = []
-
-  if (component.scheme) {
-    component.scheme = validateScheme(component.scheme)
-  }
-
-  // find scheme handler
-  const schemeHandler = getSchemeHandler(options.scheme || component.scheme)
-
-  // perform scheme specific serialization
-  if (schemeHandler && schemeHandler.serialize) schemeHandler.serialize(component, options)
-
-  const hasAuthority = component.userinfo !== undefined || component.host !== undefined || component.port !== undefined
-  // A reference with no emitted scheme is path-noscheme: a bare ':' in its
-  // first path segment would reparse as a scheme (RFC 3986 3.3/4.2). Enforced
-  // under skipEscape too (resolve()), so the reapply below gates on this flag.
-  const schemelessReference = (component.scheme === undefined || options.reference === 'suffix') && !hasAuthority
-  const pathNoScheme = !options.skipEscape && schemelessReference
-
-  if (component.path !== undefined) {
-    if (!options.skipEscape) {
-      component.path = serializePathEncoding(component.path, pathNoScheme)
-    } else {
-      component.path = normalizePercentEncoding(component.path)
-    }
-  }
-
-  if (options.reference !== 'suffix' && component.scheme) {
-    // Scheme handlers may replace the scheme during serialization.
-    component.scheme = validateScheme(component.scheme)
-    uriTokens.push(component.scheme, ':')
-  }
-
-  const authority = recomposeAuthority(component)
-  if (authority !== undefined) {
-    if (options.reference !== 'suffix') {
-      uriTokens.push('//')
-    }
-
-    uriTokens.push(authority)
-
-    if (component.path && component.path[0] !== '/') {
-      uriTokens.push('/')
-    }
-  }
-  if (component.path !== undefined) {
-    let s = component.path
-
-    if (!options.absolutePath && (!schemeHandler || !schemeHandler.absolutePath)) {
-      // A relative-path reference keeps its unresolvable leading ".." segments
-      // and must never become root-relative (RFC 3986 section 5.2.4 applies to
-      // merged target paths, not to the reference itself).
-      s = schemelessReference && s[0] !== '/'
-        ? removeDotSegmentsRelative(s)
-        : removeDotSegments(s)
-    }
-
-    // Dot-segment removal can expose a colon that was not originally in the
-    // first segment (for example, "./a:b"). Reapply path-noscheme encoding so
-    // the serialized relative reference cannot be reparsed as a URI scheme.
-    if (schemelessReference) {
-      s = serializePathEncoding(s, true)
-    }
-
-    if (
-      authority === undefined &&
-      s[0] === '/' &&
-      s[1] === '/'
-    ) {
-      // don't allow the path to start with "//"
-      s = '/%2F' + s.slice(2)
-    }
-
-    uriTokens.push(s)
-  }
-
-  if (component.query !== undefined) {
-    uriTokens.push('?', encodeQuery(component.query))
-  }
-
-  if (component.fragment !== undefined) {
-    uriTokens.push('#', encodeFragment(component.fragment))
-  }
-  return uriTokens.join('')
-}
-
-const URI_PARSE = /^(?:([^#/:?]+):)?(?:\/\/((?:([^#/?@]*)@)?(\[[^#/?\]]+\]|[^#/:?]*)(?::(\d*))?))?([^#?]*)(?:\?([^#]*))?(?:#((?:.|[\n\r])*))?/u
-
-// Captures the authority component (between "//" and the next "/", "?" or "#"),
-// with or without a scheme prefix, for the literal-backslash rejection below.
-const AUTHORITY_PREFIX = /^(?:[^#/:?]+:)?\/\/([^/?#]*)/
-
-// Captures the leading authority-introducer region after an optional scheme: a
-// run of forward slashes, backslashes, and the characters the WHATWG URL parser
-// removes before parsing (TAB U+0009, LF U+000A, CR U+000D). A valid introducer
-// is exactly "//". Node treats "\" as "/" on special schemes and strips those
-// characters first, so forms like "\\", "/\", "\/", "/<TAB>/", or a leading
-// "<TAB>//" reach an authority in Node while fast-uri's URI_PARSE folds them into
-// the path group (host confusion / SSRF / redirect bypass).
-const AUTHORITY_INTRODUCER_REGION = /^(?:[^#/:?]+:)?([/\\\t\n\r]*)/
-
-/**
- * @param {import('./types/index').URIComponent} parsed
- * @param {RegExpMatchArray} matches
- * @returns {string|undefined}
- */
-function getParseError (parsed, matches) {
-  if (matches[2] !== undefined && parsed.path && parsed.path[0] !== '/') {
-    return 'URI path must start with "/" when authority is present.'
-  }
-
-  if (typeof parsed.port === 'number' && (parsed.port < 0 || parsed.port > 65535)) {
-    return 'URI port is malformed.'
-  }
-
-  return undefined
-}
-
-/**
- * Checks percent syntax without decoding the represented octets. RFC 3986
- * percent-encoding is byte-oriented, so sequences such as `%FF` are valid even
- * though they are not independently valid UTF-8.
- *
- * @param {string|undefined} component
- * @returns {boolean}
- */
-function hasMalformedPercentEncoding (component) {
-  if (component === undefined) return false
-
-  let percent = component.indexOf('%')
-  while (percent !== -1) {
-    if (percent + 2 >= component.length || !/^[\da-f]{2}$/iu.test(component.slice(percent + 1, percent + 3))) {
-      return true
-    }
-    percent = component.indexOf('%', percent + 3)
-  }
-
-  return false
-}
-
-/**
- * Whether the host is a bracketed IP literal (RFC 3986 `IP-literal`).
- * An unterminated `[` is not a literal, so it must still be validated as a
- * reg-name instead of being waved through as an IP.
- *
- * @param {string} host
- * @returns {boolean}
- */
-function isIPLiteral (host) {
-  return host[0] === '[' && host[host.length - 1] === ']'
-}
-
-/**
- * @param {RegExpMatchArray} matches
- * @returns {boolean}
- */
-function hasMalformedComponentPercentEncoding (matches) {
-  // Bracketed IP literals use a raw "%" as the zone separator for historical
-  // compatibility. Their parsing is intentionally left to normalizeIPv6.
-  const host = matches[4]
-  return hasMalformedPercentEncoding(matches[3]) ||
-    (host !== undefined && !isIPLiteral(host) && hasMalformedPercentEncoding(host)) ||
-    hasMalformedPercentEncoding(matches[6]) ||
-    hasMalformedPercentEncoding(matches[7]) ||
-    hasMalformedPercentEncoding(matches[8])
-}
-
-/**
- * @param {import('./types/index').URIComponent} parsed
- * @param {import('./types/index').Options} options
- * @param {{ domainHost?: boolean, unicodeSupport?: boolean }|undefined} schemeHandler
- * @param {boolean} isIP
- * @returns {boolean} whether host conversion failed
- */
-function canonicalizeHost (parsed, options, schemeHandler, isIP) {
-  if (hasForbiddenDomainHost(parsed, options, schemeHandler, isIP)) {
-    parsed.error = parsed.error || MALFORMED_HOST_ERROR
-    return true
-  }
-
-  if (
-    !options.unicodeSupport &&
-    (!schemeHandler || !schemeHandler.unicodeSupport) &&
-    parsed.host &&
-    !isIPLiteral(parsed.host) &&
-    (options.domainHost || (schemeHandler && schemeHandler.domainHost)) &&
-    isIP === false &&
-    nonSimpleDomain(parsed.host)
-  ) {
-    let url
-    try {
-      url = new URL('http://' + parsed.host)
-    } catch (e) {
-      parsed.error = parsed.error || "Host's domain name can not be converted to ASCII: " + e
-      return true
-    }
-    // The WHATWG parser must have read the whole input as a host. Anything
-    // else means it found a delimiter fast-uri did not, so its hostname would
-    // describe a different authority.
-    if (!isHostOnlyURL(url)) {
-      parsed.error = parsed.error || MALFORMED_HOST_ERROR
-      return true
-    }
-    parsed.host = url.hostname
-  }
-  return false
-}
-
-/**
- * Whether a domain host contains an ASCII character that RFC 3986 does not
- * allow in a reg-name (unreserved, sub-delims, or pct-encoded). Such a host is
- * rejected instead of being handed to the WHATWG URL parser, which would treat
- * "@" as a userinfo delimiter (silently dropping the data before it) and strip
- * TAB, LF, and CR. Non-ASCII characters remain allowed for IDNs.
- *
- * @param {import('./types/index').URIComponent} parsed
- * @param {import('./types/index').Options} options
- * @param {{ domainHost?: boolean }|undefined} schemeHandler
- * @param {boolean} isIP
- * @returns {boolean}
- */
-function hasForbiddenDomainHost (parsed, options, schemeHandler, isIP) {
-  return Boolean(
-    parsed.host &&
-    isIP === false &&
-    !isIPLiteral(parsed.host) &&
-    (options.domainHost || (schemeHandler && schemeHandler.domainHost)) &&
-    FORBIDDEN_DOMAIN_HOST_CHARACTER.test(parsed.host)
-  )
-}
-
-/**
- * @param {URL} url
- * @returns {boolean}
- */
-function isHostOnlyURL (url) {
-  return url.username === '' &&
-    url.password === '' &&
-    url.port === '' &&
-    url.pathname === '/' &&
-    url.search === '' &&
-    url.hash === '' &&
-    url.hostname !== ''
-}
-
-/**
- * @param {string} uri
- * @param {import('./types/index').Options} [opts]
- * @returns {{ parsed: import('./types/index').URIComponent, malformedAuthorityOrPort: boolean, malformedPercentEncoding: boolean, malformedSchemeSpecific: boolean, malformedHost: boolean, malformedScheme: boolean }}
- */
-function parseWithStatus (uri, opts) {
-  const options = Object.assign({}, opts)
-  /** @type {import('./types/index').URIComponent} */
-  const parsed = {
-    scheme: undefined,
-    userinfo: undefined,
-    host: '',
-    port: undefined,
-    path: '',
-    query: undefined,
-    fragment: undefined
-  }
-
-  let malformedAuthorityOrPort = false
-  let malformedPercentEncoding = false
-  let malformedSchemeSpecific = false
-  let malformedHost = false
-  let malformedIPLiteral = false
-  let malformedScheme = false
-
-  let isIP = false
-  if (options.reference === 'suffix') {
-    if (options.scheme) {
-      uri = options.scheme + ':' + uri
-    } else {
-      uri = '//' + uri
-    }
-  }
-
-  // A literal backslash (U+005C) is not a valid RFC 3986 URI character and is
-  // not an authority delimiter. Reject it in the authority rather than
-  // rewriting it: normalizing "\" -> "/" (WHATWG error recovery) could silently
-  // change the resource identified by an otherwise-invalid input, and lets "\"
-  // act as a host delimiter here while Node's native URL parses a different
-  // host (SSRF / redirect / origin-allowlist bypass). Percent-encoded %5C is
-  // untouched and remains valid encoded data.
-  const authorityMatch = uri.match(AUTHORITY_PREFIX)
-  if (authorityMatch !== null && authorityMatch[1].indexOf('\\') !== -1) {
-    parsed.error = 'URI authority must not contain a literal backslash.'
-    malformedAuthorityOrPort = true
-  }
-
-  // Reject a malformed or whitespace-smuggled authority introducer. fast-uri
-  // only recognizes a literal "//"; anything else in the leading separator run
-  // (a backslash, or a "//" that appears only after removing the TAB/LF/CR that
-  // Node strips) means the authority fast-uri parses differs from the one Node's
-  // URL resolves. Reject rather than rewrite, mirroring the literal-backslash
-  // guard above. Percent-encoded forms (%5C, %09) are untouched, valid data.
-  const introducerMatch = uri.match(AUTHORITY_INTRODUCER_REGION)
-  if (introducerMatch !== null) {
-    const region = introducerMatch[1]
-    const normalizedRegion = region.replace(/[\t\n\r]/g, '')
-    // Two or more leading separators introduce an authority.
-    if (normalizedRegion.length >= 2) {
-      if (normalizedRegion.slice(0, 2) !== '//') {
-        parsed.error = parsed.error || 'URI authority must not contain a literal backslash.'
-        malformedAuthorityOrPort = true
-      } else if (region.length !== normalizedRegion.length) {
-        parsed.error = parsed.error || 'URI authority introducer must not contain whitespace.'
-        malformedAuthorityOrPort = true
-      }
-    }
-  }
-
-  const matches = uri.match(URI_PARSE)
-
-  if (matches) {
-    // store each component
-    parsed.scheme = matches[1]
-    parsed.userinfo = matches[3]
-    parsed.host = matches[4]
-    parsed.port = parseInt(matches[5], 10)
-    parsed.path = matches[6] || ''
-    parsed.query = matches[7]
-    parsed.fragment = matches[8]
-
-    if (parsed.scheme !== undefined) {
-      if (VALID_SCHEME.test(parsed.scheme)) {
-        parsed.scheme = parsed.scheme.toLowerCase()
-      } else {
-        parsed.error = parsed.error || MALFORMED_SCHEME_ERROR
-        malformedScheme = true
-      }
-    }
-
-    malformedPercentEncoding = hasMalformedComponentPercentEncoding(matches)
-    if (malformedPercentEncoding) {
-      parsed.error = parsed.error || 'URI contains malformed percent-encoding.'
-    }
-
-    // fix port number
-    if (isNaN(parsed.port)) {
-      parsed.port = matches[5]
-    }
-
-    const parseError = getParseError(parsed, matches)
-    if (parseError !== undefined) {
-      parsed.error = parsed.error || parseError
-      malformedAuthorityOrPort = true
-    }
-
-    if (parsed.host) {
-      const ipv4result = isIPv4(parsed.host)
-      if (ipv4result === false) {
-        const bracketedIPLiteral = isIPLiteral(parsed.host)
-        const hasIPLiteralBracket = parsed.host.indexOf('[') !== -1 || parsed.host.indexOf(']') !== -1
-        const ipv6result = normalizeIPv6(parsed.host)
-        isIP = ipv6result.isIPV6 || ipv6result.isIPVFuture === true
-        malformedIPLiteral = hasIPLiteralBracket && (!bracketedIPLiteral || ipv6result.error === true)
-        parsed.host = isIP ? ipv6result.host : ipv6result.host.toLowerCase()
-
-        if (malformedIPLiteral) {
-          parsed.error = parsed.error || MALFORMED_HOST_ERROR
-          malformedAuthorityOrPort = true
-        }
-      } else {
-        isIP = true
-      }
-    }
-    if (parsed.scheme === undefined && parsed.userinfo === undefined && parsed.host === undefined && parsed.port === undefined && parsed.query === undefined && !parsed.path) {
-      parsed.reference = 'same-document'
-    } else if (parsed.scheme === undefined) {
-      parsed.reference = 'relative'
-    } else if (parsed.fragment === undefined) {
-      parsed.reference = 'absolute'
-    } else {
-      parsed.reference = 'uri'
-    }
-
-    // check for reference errors
-    if (options.reference && options.reference !== 'suffix' && options.reference !== parsed.reference) {
-      parsed.error = parsed.error || 'URI is not a ' + options.reference + ' reference.'
-    }
-
-    // find scheme handler
-    const schemeHandler = getSchemeHandler(options.scheme || parsed.scheme)
-
-    // convert Unicode IDN -> ASCII IDN when the effective scheme uses domain hosts
-    if (!malformedIPLiteral) {
-      malformedHost = canonicalizeHost(parsed, options, schemeHandler, isIP)
-    }
-
-    if (uri.indexOf('%') !== -1 && parsed.host !== undefined && !malformedIPLiteral) {
-      let host = isIP ? parsed.host : normalizePercentEncoding(parsed.host, true)
-      if (!isIP) {
-        // Fold reg-name case after decoding unreserved octets. The second
-        // pass only restores uppercase hex in escapes that remain encoded.
-        host = normalizePercentEncoding(host.toLowerCase())
-      }
-      // Resolution parses both inputs with the internal `null` scheme before
-      // the effective scheme is known. Keep raw host delimiters for that step
-      // so resolve() can reject them for domain-host schemes; the resolved
-      // authority is encoded when it is serialized.
-      parsed.host = isIP || options.scheme !== 'null' ? reescapeHostDelimiters(host, isIP) : host
-    }
-
-    if (!schemeHandler || (schemeHandler && !schemeHandler.skipNormalize)) {
-      if (parsed.path) {
-        parsed.path = normalizePathEncoding(parsed.path)
-      }
-      if (parsed.query) {
-        parsed.query = normalizeQueryFragmentEncoding(parsed.query)
-      }
-      if (parsed.fragment) {
-        parsed.fragment = normalizeQueryFragmentEncoding(parsed.fragment)
-      }
-    }
-
-    // perform scheme specific parsing
-    if (schemeHandler && schemeHandler.parse) {
-      schemeHandler.parse(parsed, options)
-      if (schemeHandler === SCHEMES.urn && parsed.nid === undefined) {
-        malformedSchemeSpecific = true
-      }
-    }
-  } else {
-    parsed.error = parsed.error || 'URI can not be parsed.'
-  }
-  return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme }
-}
-
-/**
- * @param {string} uri
- * @param {import('./types/index').Options} [opts]
- * @returns
- */
-function parse (uri, opts) {
-  return parseWithStatus(uri, opts).parsed
-}
-
-/**
- * @param {string} uri
- * @param {import('./types/index').Options} [opts]
- * @returns {string}
- */
-function normalizeString (uri, opts) {
-  return normalizeStringWithStatus(uri, opts).normalized
-}
-
-/**
- * @param {string} uri
- * @param {import('./types/index').Options} [opts]
- * @returns {{ normalized: string, malformedAuthorityOrPort: boolean, malformedPercentEncoding: boolean, malformedSchemeSpecific: boolean, malformedHost: boolean, malformedScheme: boolean }}
- */
-function normalizeStringWithStatus (uri, opts) {
-  const { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = parseWithStatus(uri, opts)
-  return {
-    normalized: malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? uri : serialize(parsed, opts),
-    malformedAuthorityOrPort,
-    malformedPercentEncoding,
-    malformedSchemeSpecific,
-    malformedHost,
-    malformedScheme
-  }
-}
-
-/**
- * @param {import ('./types/index').URIComponent|string} uri
- * @param {import('./types/index').Options} [opts]
- * @returns {string|undefined}
- */
-function normalizeComparableURI (uri, opts) {
-  if (typeof uri !== 'string' && typeof uri !== 'object') {
-    return undefined
-  }
-
-  let value
-  try {
-    value = typeof uri === 'string' ? uri : serialize(uri, opts)
-  } catch {
-    return undefined
-  }
-  const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value, opts)
-  return malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? undefined : normalized
-}
-
-const fastUri = {
-  SCHEMES,
-  normalize,
-  resolve,
-  resolveComponent,
-  equal,
-  serialize,
-  parse
-}
-
-module.exports = fastUri
-module.exports["default"] = fastUri
-module.exports.fastUri = fastUri
-
-
-/***/ }),
-
-/***/ 5300:
-/***/ ((module, __unused_webpack_exports, __nccwpck_require__) => {
-
-
-
-const { isUUID } = __nccwpck_require__(5077)
-const URN_REG = /^([\da-z][\d\-a-z]{0,31}):((?:[\w!$'()*+,\-./:;=@]|%[\da-f]{2})+)$/iu
-
-const supportedSchemeNames = /** @type {const} */ (['http', 'https', 'ws',
-  'wss', 'urn', 'urn:uuid'])
-
-/** @typedef {supportedSchemeNames[number]} SchemeName */
-
-/**
- * @param {string} name
- * @returns {name is SchemeName}
- */
-function isValidSchemeName (name) {
-  return supportedSchemeNames.indexOf(/** @type {*} */ (name)) !== -1
-}
-
-/**
- * @callback SchemeFn
- * @param {import('../types/index').URIComponent} component
- * @param {import('../types/index').Options} options
- * @returns {import('../types/index').URIComponent}
- */
-
-/**
- * @typedef {Object} SchemeHandler
- * @property {SchemeName} scheme - The scheme name.
- * @property {boolean} [domainHost] - Indicates if the scheme supports domain hosts.
- * @property {SchemeFn} parse - Function to parse the URI component for this scheme.
- * @property {SchemeFn} serialize - Function to serialize the URI component for this scheme.
- * @property {boolean} [skipNormalize] - Indicates if normalization should be skipped for this scheme.
- * @property {boolean} [absolutePath] - Indicates if the scheme uses absolute paths.
- * @property {boolean} [unicodeSupport] - Indicates if the scheme supports Unicode.
- */
-
-/**
- * @param {import('../types/index').URIComponent} wsComponent
- * @returns {boolean}
- */
-function wsIsSecure (wsComponent) {
-  if (wsComponent.secure === true) {
-    return true
-  } else if (wsComponent.secure === false) {
-    return false
-  } else if (wsComponent.scheme) {
-    return (
-      wsComponent.scheme.length === 3 &&
-      (wsComponent.scheme[0] === 'w' || wsComponent.scheme[0] === 'W') &&
-      (wsComponent.scheme[1] === 's' || wsComponent.scheme[1] === 'S') &&
-      (wsComponent.scheme[2] === 's' || wsComponent.scheme[2] === 'S')
-    )
-  } else {
-    return false
-  }
-}
-
-/** @type {SchemeFn} */
-function httpParse (component) {
-  if (!component.host) {
-    component.error = component.error || 'HTTP URIs must have a host.'
-  }
-
-  return component
-}
-
-/** @type {SchemeFn} */
-function httpSerialize (component) {
-  const secure = String(component.scheme).toLowerCase() === 'https'
-
-  // normalize the default port
-  if (component.port === (secure ? 443 : 80) || component.port === '') {
-    component.port = undefined
-  }
-
-  // normalize the empty path
-  if (!component.path) {
-    component.path = '/'
-  }
-
-  // NOTE: We do not parse query strings for HTTP URIs
-  // as WWW Form Url Encoded query strings are part of the HTML4+ spec,
-  // and not the HTTP spec.
-
-  return component
-}
-
-/** @type {SchemeFn} */
-function wsParse (wsComponent) {
-// indicate if the secure flag is set
-  wsComponent.secure = wsIsSecure(wsComponent)
-
-  // construct resouce name
-  wsComponent.resourceName = (wsComponent.path || '/') + (wsComponent.query ? '?' + wsComponent.query : '')
-  wsComponent.path = undefined
-  wsComponent.query = undefined
-
-  return wsComponent
-}
-
-/** @type {SchemeFn} */
-function wsSerialize (wsComponent) {
-// normalize the default port
-  if (wsComponent.port === (wsIsSecure(wsComponent) ? 443 : 80) || wsComponent.port === '') {
-    wsComponent.port = undefined
-  }
-
-  // ensure scheme matches secure flag
-  if (typeof wsComponent.secure === 'boolean') {
-    wsComponent.scheme = (wsComponent.secure ? 'wss' : 'ws')
-    wsComponent.secure = undefined
-  }
-
-  // reconstruct path from resource name
-  if (wsComponent.resourceName) {
-    const queryIndex = wsComponent.resourceName.indexOf('?')
-    const path = queryIndex === -1
-      ? wsComponent.resourceName
-      : wsComponent.resourceName.slice(0, queryIndex)
-    wsComponent.path = (path && path !== '/' ? path : undefined)
-    wsComponent.query = queryIndex === -1
-      ? undefined
-      : wsComponent.resourceName.slice(queryIndex + 1)
-    wsComponent.resourceName = undefined
-  }
-
-  // forbid fragment component
-  wsComponent.fragment = undefined
-
-  return wsComponent
-}
-
-/** @type {SchemeFn} */
-function urnParse (urnComponent, options) {
-  if (!urnComponent.path) {
-    urnComponent.error = 'URN can not be parsed'
-    return urnComponent
-  }
-  const matches = urnComponent.path.match(URN_REG)
-  if (matches && matches[0] === urnComponent.path) {
-    const scheme = options.scheme || urnComponent.scheme || 'urn'
-    urnComponent.nid = matches[1].toLowerCase()
-    urnComponent.nss = matches[2]
-    const urnScheme = `${scheme}:${options.nid || urnComponent.nid}`
-    const schemeHandler = getSchemeHandler(urnScheme)
-    urnComponent.path = undefined
-
-    if (schemeHandler) {
-      urnComponent = schemeHandler.parse(urnComponent, options)
-    }
-  } else {
-    urnComponent.error = urnComponent.error || 'URN can not be parsed.'
-  }
-
-  return urnComponent
-}
-
-/** @type {SchemeFn} */
-function urnSerialize (urnComponent, options) {
-  if (urnComponent.nid === undefined) {
-    throw new Error('URN without nid cannot be serialized')
-  }
-  const scheme = options.scheme || urnComponent.scheme || 'urn'
-  const nid = urnComponent.nid.toLowerCase()
-  const urnScheme = `${scheme}:${options.nid || nid}`
-  const schemeHandler = getSchemeHandler(urnScheme)
-
-  if (schemeHandler) {
-    urnComponent = schemeHandler.serialize(urnComponent, options)
-  }
-
-  const uriComponent = urnComponent
-  const nss = urnComponent.nss
-  uriComponent.path = `${nid || options.nid}:${nss}`
-
-  options.skipEscape = true
-  return uriComponent
-}
-
-/** @type {SchemeFn} */
-function urnuuidParse (urnComponent, options) {
-  const uuidComponent = urnComponent
-  uuidComponent.uuid = uuidComponent.nss
-  uuidComponent.nss = undefined
-
-  if (!options.tolerant && (!uuidComponent.uuid || !isUUID(uuidComponent.uuid))) {
-    uuidComponent.error = uuidComponent.error || 'UUID is not valid.'
-  }
-
-  return uuidComponent
-}
-
-/** @type {SchemeFn} */
-function urnuuidSerialize (uuidComponent) {
-  const urnComponent = uuidComponent
-  // normalize UUID
-  urnComponent.nss = (uuidComponent.uuid || '').toLowerCase()
-  return urnComponent
-}
-
-const http = /** @type {SchemeHandler} */ ({
-  scheme: 'http',
-  domainHost: true,
-  parse: httpParse,
-  serialize: httpSerialize
-})
-
-const https = /** @type {SchemeHandler} */ ({
-  scheme: 'https',
-  domainHost: http.domainHost,
-  parse: httpParse,
-  serialize: httpSerialize
-})
-
-const ws = /** @type {SchemeHandler} */ ({
-  scheme: 'ws',
-  domainHost: true,
-  parse: wsParse,
-  serialize: wsSerialize
-})
-
-const wss = /** @type {SchemeHandler} */ ({
-  scheme: 'wss',
-  domainHost: ws.domainHost,
-  parse: ws.parse,
-  serialize: ws.serialize
-})
-
-const urn = /** @type {SchemeHandler} */ ({
-  scheme: 'urn',
-  parse: urnParse,
-  serialize: urnSerialize,
-  skipNormalize: true
-})
-
-const urnuuid = /** @type {SchemeHandler} */ ({
-  scheme: 'urn:uuid',
-  parse: urnuuidParse,
-  serialize: urnuuidSerialize,
-  skipNormalize: true
-})
-
-const SCHEMES = /** @type {Record<SchemeName, SchemeHandler>} */ ({
-  http,
-  https,
-  ws,
-  wss,
-  urn,
-  'urn:uuid': urnuuid
-})
-
-Object.setPrototypeOf(SCHEMES, null)
-
-/**
- * @param {string|undefined} scheme
- * @returns {SchemeHandler|undefined}
- */
-function getSchemeHandler (scheme) {
-  return (
-    scheme && (
-      SCHEMES[/** @type {SchemeName} */ (scheme)] ||
-      SCHEMES[/** @type {SchemeName} */(scheme.toLowerCase())])
-  ) ||
-    undefined
-}
-
-module.exports = {
-  wsIsSecure,
-  SCHEMES,
-  isValidSchemeName,
-  getSchemeHandler,
-}
-
-
-/***/ }),
-
-/***/ 5077:
-/***/ ((module) => {
-
-
-
-/** @type {(value: string) => boolean} */
-const isUUID = RegExp.prototype.test.bind(/^[\da-f]{8}-[\da-f]{4}-[\da-f]{4}-[\da-f]{4}-[\da-f]{12}$/iu)
-
-/** @type {(value: string) => boolean} */
-const isIPv4 = RegExp.prototype.test.bind(/^(?:(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)$/u)
-
-/** @type {(value: string) => boolean} */
-const isPort = RegExp.prototype.test.bind(/^\d*$/u)
-
-/** @type {(value: string) => boolean} */
-const isHexPair = RegExp.prototype.test.bind(/^[\da-f]{2}$/iu)
-
-/** @type {(value: string) => boolean} */
-const isUnreserved = RegExp.prototype.test.bind(/^[\da-z\-._~]$/iu)
-
-/** @type {(value: string) => boolean} */
-const isPathCharacter = RegExp.prototype.test.bind(/^[A-Za-z0-9\-._~!$&'()*+,;=:@/]$/u)
-
-/** @type {(value: string) => boolean} */
-const isQueryFragmentCharacter = RegExp.prototype.test.bind(/^[A-Za-z0-9\-._~!$&'()*+,;=:@/?]$/u)
-
-/** @type {(value: string) => boolean} */
-const isUserinfoCharacter = RegExp.prototype.test.bind(/^[A-Za-z0-9\-._~!$&'()*+,;=:]$/u)
-
-const BYTE_HEX = new Array(256)
-{
-  const HEX_DIGITS = '0123456789ABCDEF'
-  for (let i = 0; i < 256; i++) {
-    BYTE_HEX[i] = '%' + HEX_DIGITS[i >> 4] + HEX_DIGITS[i & 0xF]
-  }
-}
-function percentEncodeNonAscii (cp) {
-  if (cp < 0x800) {
-    return BYTE_HEX[0xC0 | (cp >> 6)] +
-           BYTE_HEX[0x80 | (cp & 0x3F)]
-  }
-  if (cp < 0x10000) {
-    return BYTE_HEX[0xE0 | (cp >> 12)] +
-           BYTE_HEX[0x80 | ((cp >> 6) & 0x3F)] +
-           BYTE_HEX[0x80 | (cp & 0x3F)]
-  }
-  return BYTE_HEX[0xF0 | (cp >> 18)] +
-         BYTE_HEX[0x80 | ((cp >> 12) & 0x3F)] +
-         BYTE_HEX[0x80 | ((cp >> 6) & 0x3F)] +
-         BYTE_HEX[0x80 | (cp & 0x3F)]
-}
-
-/**
- * @param {Array<string>} input
- * @returns {string}
- */
-function stringArrayToHexStripped (input) {
-  let acc = ''
-  let code = 0
-  let i = 0
-
-  for (i = 0; i < input.length; i++) {
-    code = input[i].charCodeAt(0)
-    if (code === 48) {
-      continue
-    }
-    if (!((code >= 48 && code <= 57) || (code >= 65 && code <= 70) || (code >= 97 && code <= 102))) {
-      return ''
-    }
-    acc += input[i]
-    break
-  }
-
-  for (i += 1; i < input.length; i++) {
-    code = input[i].charCodeAt(0)
-    if (!((code >= 48 && code <= 57) || (code >= 65 && code <= 70) || (code >= 97 && code <= 102))) {
-      return ''
-    }
-    acc += input[i]
-  }
-  return acc
-}
-
-/** @type {(value: string) => boolean} */
-const isHextet = RegExp.prototype.test.bind(/^[\dA-Fa-f]{1,4}$/)
-
-/** @type {(value: string) => boolean} */
-const isIPvFuture = RegExp.prototype.test.bind(/^[vV][\dA-Fa-f]+\.[A-Za-z\d\-._~!$&'()*+,;=:]+$/)
-
-/** @type {(value: string) => boolean} */
-const isZoneCharacter = RegExp.prototype.test.bind(/^[A-Za-z\d\-._~]$/)
-
-/**
- * @param {string} value
- * @returns {boolean}
- */
-const nonSimpleDomain = RegExp.prototype.test.bind(/[^!"$&'()*+,\-.;=_`a-z{}~]/u)
-
-/**
- * @param {string} zone
- * @returns {boolean}
- */
-function isZoneIdentifier (zone) {
-  if (zone.length === 0) return false
-
-  for (let i = 0; i < zone.length; i++) {
-    if (isZoneCharacter(zone[i])) continue
-    if (zone[i] === '%' && i + 2 < zone.length && isHexPair(zone.slice(i + 1, i + 3))) {
-      i += 2
-      continue
-    }
-    return false
-  }
-
-  return true
-}
-
-/**
- * Compresses the longest run of zero hextets to "::" per RFC 5952. A run of a
- * single zero hextet is left uncompressed. On ties the leftmost run wins.
- *
- * @param {string[]} hextets
- * @returns {string}
- */
-function compressIPv6ZeroRun (hextets) {
-  let bestStart = -1
-  let bestLength = 0
-  let runStart = -1
-  let runLength = 0
-  for (let i = 0; i < hextets.length; i++) {
-    if (hextets[i] === '0') {
-      if (runStart === -1) runStart = i
-      runLength++
-      if (runLength > bestLength) {
-        bestLength = runLength
-        bestStart = runStart
-      }
-    } else {
-      runStart = -1
-      runLength = 0
-    }
-  }
-
-  if (bestLength < 2) return hextets.join(':')
-
-  const head = hextets.slice(0, bestStart).join(':')
-  const tail = hextets.slice(bestStart + bestLength).join(':')
-  return head + '::' + tail
-}
-
-/**
- * Validates an IPv6 address against the alternatives in RFC 3986 section
- * 3.2.2 and returns the same address with leading hextet zeroes removed.
- * An embedded IPv4 address counts as two hextets and is only valid at the end.
- *
- * @param {string} input
- * @returns {string|undefined}
- */
-function normalizeIPv6Address (input) {
-  const compression = input.indexOf('::')
-  if (compression !== -1 && input.indexOf('::', compression + 1) !== -1) return undefined
-
-  const left = compression === -1 ? input.split(':') : input.slice(0, compression).split(':')
-  const right = compression === -1 ? [] : input.slice(compression + 2).split(':')
-  if (compression !== -1) {
-    if (left.length === 1 && left[0] === '') left.length = 0
-    if (right.length === 1 && right[0] === '') right.length = 0
-  }
-
-  const parts = left.concat(right)
-  let hextetCount = 0
-  for (let i = 0; i < parts.length; i++) {
-    const part = parts[i]
-    if (part === '') return undefined
-
-    if (part.indexOf('.') !== -1) {
-      if (i !== parts.length - 1 || (compression !== -1 && right.length === 0) || !isIPv4(part)) return undefined
-      hextetCount += 2
-      continue
-    }
-
-    if (!isHextet(part)) return undefined
-    parts[i] = parseInt(part, 16).toString(16)
-    hextetCount++
-  }
-
-  if (compression === -1) {
-    if (hextetCount !== 8) return undefined
-    return compressIPv6ZeroRun(parts)
-  }
-  if (hextetCount >= 8) return undefined
-
-  // expand "::" then re-compress the longest run for a canonical result
-  const expanded = parts.slice(0, left.length)
-  for (let i = hextetCount; i < 8; i++) expanded.push('0')
-  for (let i = left.length; i < parts.length; i++) expanded.push(parts[i])
-  return compressIPv6ZeroRun(expanded)
-}
-
-/**
- * @typedef {Object} NormalizeIPv6Result
- * @property {string} host - The normalized host.
- * @property {string} [escapedHost] - The escaped host.
- * @property {boolean} isIPV6 - Indicates if the host is an IPv6 address.
- * @property {boolean} [isIPVFuture] - Indicates if the host is an IPvFuture literal.
- * @property {boolean} [error] - Indicates if a bracketed IP literal is malformed.
- */
-
-/**
- * Validates and normalizes a bracketed IP literal. Raw zone separators remain
- * accepted for backwards compatibility, while encoded separators and zone
- * contents follow RFC 6874.
- *
- * @param {string} host
- * @returns {NormalizeIPv6Result}
- */
-function normalizeIPv6 (host) {
-  const bracketed = host[0] === '[' && host[host.length - 1] === ']'
-  const hasBracket = host[0] === '[' || host[host.length - 1] === ']'
-  if (hasBracket && !bracketed) return { host, isIPV6: false, error: true }
-
-  let input = bracketed ? host.slice(1, -1) : host
-  if (bracketed && isIPvFuture(input)) {
-    input = input.toLowerCase()
-    return { host: `[${input}]`, escapedHost: input, isIPV6: false, isIPVFuture: true }
-  }
-
-  if (findToken(input, ':') < 2) {
-    return { host, isIPV6: false, error: bracketed }
-  }
-
-  let zoneIdentifier = ''
-  const zoneSeparator = input.indexOf('%')
-  if (zoneSeparator !== -1) {
-    const separatorLength = input.slice(zoneSeparator, zoneSeparator + 3).toLowerCase() === '%25' ? 3 : 1
-    zoneIdentifier = input.slice(zoneSeparator + separatorLength)
-    if (!isZoneIdentifier(zoneIdentifier)) return { host, isIPV6: false, error: true }
-    input = input.slice(0, zoneSeparator)
-  }
-
-  const address = normalizeIPv6Address(input)
-  if (address === undefined) return { host, isIPV6: false, error: true }
-
-  return {
-    host: address + (zoneIdentifier ? '%' + zoneIdentifier : ''),
-    escapedHost: address + (zoneIdentifier ? '%25' + zoneIdentifier : ''),
-    isIPV6: true
-  }
-}
-
-/**
- * @param {string} str
- * @param {string} token
- * @returns {number}
- */
-function findToken (str, token) {
-  let ind = 0
-  for (let i = 0; i < str.length; i++) {
-    if (str[i] === token) ind++
-  }
-  return ind
-}
-
-/**
- * @param {string} path
- * @returns {string}
- *
- * @see https://datatracker.ietf.org/doc/html/rfc3986#section-5.2.4
- */
-function removeDotSegments (path) {
-  let input = path
-  const output = []
-  let nextSlash = -1
-  let len = 0
-
-  // eslint-disable-next-line no-cond-assign
-  while (len = input.length) {
-    if (len === 1) {
-      if (input === '.') {
-        break
-      } else if (input === '/') {
-        output.push('/')
-        break
-      } else {
-        output.push(input)
-        break
-      }
-    } else if (len === 2) {
-      if (input[0] === '.') {
-        if (input[1] === '.') {
-          break
-        } else if (input[1] === '/') {
-          input = input.slice(2)
-          continue
-        }
-      } else if (input[0] === '/') {
-        if (input[1] === '.' || input[1] === '/') {
-          output.push('/')
-          break
-        }
-      }
-    } else if (len === 3) {
-      if (input === '/..') {
-        if (output.length !== 0) {
-          output.pop()
-        }
-        output.push('/')
-        break
-      }
-    }
-    if (input[0] === '.') {
-      if (input[1] === '.') {
-        if (input[2] === '/') {
-          input = input.slice(3)
-          continue
-        }
-      } else if (input[1] === '/') {
-        input = input.slice(2)
-        continue
-      }
-    } else if (input[0] === '/') {
-      if (input[1] === '.') {
-        if (input[2] === '/') {
-          input = input.slice(2)
-          continue
-        } else if (input[2] === '.') {
-          if (input[3] === '/') {
-            input = input.slice(3)
-            if (output.length !== 0) {
-              output.pop()
-            }
-            continue
-          }
-        }
-      }
-    }
-
-    // Rule 2E: Move normal path segment to output
-    if ((nextSlash = input.indexOf('/', 1)) === -1) {
-      output.push(input)
-      break
-    } else {
-      output.push(input.slice(0, nextSlash))
-      input = input.slice(nextSlash)
-    }
-  }
-
-  return output.join('')
-}
-
-/**
- * Removes dot segments from the path of a relative reference (a path that does
- * not start with "/") without changing what it resolves to against any base.
- * Unlike `removeDotSegments`, leading ".." segments that cannot be collapsed
- * are kept, the result never becomes root-relative, and a result that would be
- * empty or start with an empty segment is prefixed with "." (an empty path
- * means "same document" and a leading "//" would introduce an authority).
- *
- * @param {string} path
- * @returns {string}
- */
-function removeDotSegmentsRelative (path) {
-  if (path === '' || path[0] === '/') {
-    return removeDotSegments(path)
-  }
-
-  const segments = path.split('/')
-  const last = segments.length - 1
-  /** @type {string[]} */
-  const output = []
-  let trailingDirectory = false
-
-  for (let i = 0; i <= last; i++) {
-    const segment = segments[i]
-    if (segment === '.' || segment === '..') {
-      if (segment === '..') {
-        if (output.length !== 0 && output[output.length - 1] !== '..') {
-          output.pop()
-        } else {
-          output.push('..')
-        }
-      }
-      trailingDirectory = i === last
-    } else {
-      output.push(segment)
-    }
-  }
-
-  if (trailingDirectory && output[output.length - 1] !== '..') {
-    output.push('')
-  }
-  if (output.length === 0 || output[0] === '' || output[0].includes(':')) {
-    // An empty path, a leading empty segment ("//"), or a first segment
-    // containing ":" (which would be mistaken for a scheme, RFC 3986 section
-    // 4.2) must stay behind a "." segment so the reference keeps its meaning.
-    output.unshift('.')
-  }
-
-  return output.join('/')
-}
-
-/**
- * Re-escape RFC 3986 gen-delims that must not appear literally in the host.
- * After the URI regex parses, these characters cannot be literal in the host
- * field, so any that appear after decoding came from percent-encoding and
- * must be restored to prevent authority structure changes.
- *
- * @param {string} host
- * @param {boolean} isIP - true for IPv4/IPv6 hosts (skip colon re-escaping)
- * @returns {string}
- */
-const HOST_DELIMS = { '@': '%40', '/': '%2F', '?': '%3F', '#': '%23', ':': '%3A' }
-const HOST_DELIM_RE = /[@/?#:]/g
-const HOST_DELIM_NO_COLON_RE = /[@/?#]/g
-
-function reescapeHostDelimiters (host, isIP) {
-  const re = isIP ? HOST_DELIM_NO_COLON_RE : HOST_DELIM_RE
-  re.lastIndex = 0
-  return host.replace(re, (ch) => HOST_DELIMS[ch])
-}
-
-/**
- * Normalizes percent escapes and optionally decodes only unreserved ASCII bytes.
- * Reserved delimiters such as `%2F` stay escaped; `%2E` is unreserved.
- *
- * @param {string} input
- * @param {boolean} [decodeUnreserved=false]
- * @returns {string}
- */
-function normalizePercentEncoding (input, decodeUnreserved = false) {
-  if (input.indexOf('%') === -1) {
-    return input
-  }
-
-  let output = ''
-
-  for (let i = 0; i < input.length; i++) {
-    if (input[i] === '%' && i + 2 < input.length) {
-      const hex = input.slice(i + 1, i + 3)
-      if (isHexPair(hex)) {
-        const normalizedHex = hex.toUpperCase()
-        const decoded = String.fromCharCode(parseInt(normalizedHex, 16))
-
-        if (decodeUnreserved && isUnreserved(decoded)) {
-          output += decoded
-        } else {
-          output += '%' + normalizedHex
-        }
-
-        i += 2
-        continue
-      }
-    }
-
-    output += input[i]
-  }
-
-  return output
-}
-
-/**
- * Normalizes path data without turning reserved escapes into live path syntax.
- * Valid escapes are uppercased, raw unsafe characters are escaped, and only
- * unreserved bytes that are not `.` are decoded.
- *
- * @param {string} input
- * @returns {string}
- */
-function normalizePathEncoding (input) {
-  let output = ''
-
-  for (let i = 0; i < input.length; i++) {
-    const ch = input[i]
-    if (ch === '%' && i + 2 < input.length) {
-      const hex = input.slice(i + 1, i + 3)
-      if (isHexPair(hex)) {
-        const normalizedHex = hex.toUpperCase()
-        const decoded = String.fromCharCode(parseInt(normalizedHex, 16))
-
-        if (decoded !== '.' && isUnreserved(decoded)) {
-          output += decoded
-        } else {
-          output += '%' + normalizedHex
-        }
-
-        i += 2
-        continue
-      }
-    }
-
-    if (isPathCharacter(ch)) {
-      output += ch
-    } else {
-      const code = input.charCodeAt(i)
-      if (code < 0x80) {
-        output += isEscapeSafe(code) ? ch : BYTE_HEX[code]
-      } else if (code < 0xD800 || code > 0xDFFF) {
-        output += percentEncodeNonAscii(code)
-      } else if (code <= 0xDBFF && i + 1 < input.length) {
-        const low = input.charCodeAt(i + 1)
-        if (low >= 0xDC00 && low <= 0xDFFF) {
-          output += percentEncodeNonAscii(0x10000 + ((code - 0xD800) << 10) + (low - 0xDC00))
-          i++
-        } else {
-          output += percentEncodeNonAscii(0xFFFD)
-        }
-      } else {
-        output += percentEncodeNonAscii(0xFFFD)
-      }
-    }
-  }
-
-  return output
-}
-
-/**
- * Serializes a path without rewriting reserved data. Raw RFC 3986 path
- * characters remain literal, valid escapes are preserved and uppercased, and
- * everything else is UTF-8 percent-encoded. In a path-noscheme, a colon in the
- * first segment must be escaped so the result cannot be parsed as a scheme.
- *
- * @param {string} input
- * @param {boolean} [pathNoScheme=false]
- * @returns {string}
- */
-function serializePathEncoding (input, pathNoScheme = false) {
-  let output = ''
-  let firstSegment = pathNoScheme && input[0] !== '/'
-
-  for (let i = 0; i < input.length; i++) {
-    const ch = input[i]
-    if (ch === '%' && i + 2 < input.length) {
-      const hex = input.slice(i + 1, i + 3)
-      if (isHexPair(hex)) {
-        output += '%' + hex.toUpperCase()
-        i += 2
-        continue
-      }
-    }
-
-    if (ch === '/') {
-      firstSegment = false
-    }
-
-    if (isPathCharacter(ch) && (ch !== ':' || !firstSegment)) {
-      output += ch
-    } else {
-      const code = input.charCodeAt(i)
-      if (code < 0x80) {
-        output += BYTE_HEX[code]
-      } else if (code < 0xD800 || code > 0xDFFF) {
-        output += percentEncodeNonAscii(code)
-      } else if (code <= 0xDBFF && i + 1 < input.length) {
-        const low = input.charCodeAt(i + 1)
-        if (low >= 0xDC00 && low <= 0xDFFF) {
-          output += percentEncodeNonAscii(0x10000 + ((code - 0xD800) << 10) + (low - 0xDC00))
-          i++
-        } else {
-          output += percentEncodeNonAscii(0xFFFD)
-        }
-      } else {
-        output += percentEncodeNonAscii(0xFFFD)
-      }
-    }
-  }
-
-  return output
-}
-
-/**
- * Percent-encodes a URI component using its RFC 3986 literal character set.
- * Existing valid escapes are preserved and normalized to uppercase hex.
- *
- * @param {string} input
- * @param {(value: string) => boolean} isAllowed
- * @returns {string}
- */
-function encodeComponent (input, isAllowed) {
-  let output = ''
-
-  for (let i = 0; i < input.length; i++) {
-    const ch = input[i]
-    if (ch === '%' && i + 2 < input.length) {
-      const hex = input.slice(i + 1, i + 3)
-      if (isHexPair(hex)) {
-        output += '%' + hex.toUpperCase()
-        i += 2
-        continue
-      }
-    }
-
-    if (isAllowed(ch)) {
-      output += ch
-    } else {
-      const code = input.charCodeAt(i)
-      if (code < 0x80) {
-        output += BYTE_HEX[code]
-      } else if (code < 0xD800 || code > 0xDFFF) {
-        output += percentEncodeNonAscii(code)
-      } else if (code <= 0xDBFF && i + 1 < input.length) {
-        const low = input.charCodeAt(i + 1)
-        if (low >= 0xDC00 && low <= 0xDFFF) {
-          output += percentEncodeNonAscii(0x10000 + ((code - 0xD800) << 10) + (low - 0xDC00))
-          i++
-        } else {
-          output += percentEncodeNonAscii(0xFFFD)
-        }
-      } else {
-        output += percentEncodeNonAscii(0xFFFD)
-      }
-    }
-  }
-
-  return output
-}
-
-/**
- * Encodes userinfo while preserving its RFC 3986 §3.2.1 literal characters.
- * In particular, authority delimiters such as `@`, `/`, `?`, and `#` are data.
- *
- * @param {string} input
- * @returns {string}
- */
-function encodeUserinfo (input) {
-  return encodeComponent(input, isUserinfoCharacter)
-}
-
-/**
- * Encodes query data using the RFC 3986 §3.4 grammar. A literal `#` must be
- * escaped because it would otherwise begin the fragment component.
- *
- * @param {string} input
- * @returns {string}
- */
-function encodeQuery (input) {
-  return encodeComponent(input, isQueryFragmentCharacter)
-}
-
-/**
- * Encodes fragment data using the RFC 3986 §3.5 grammar.
- *
- * @param {string} input
- * @returns {string}
- */
-function encodeFragment (input) {
-  return encodeComponent(input, isQueryFragmentCharacter)
-}
-
-function isEscapeSafe (cp) {
-  return (
-    (cp >= 0x30 && cp <= 0x39) ||
-    (cp >= 0x41 && cp <= 0x5A) ||
-    (cp >= 0x61 && cp <= 0x7A) ||
-    cp === 0x2A || cp === 0x2B || cp === 0x2D || cp === 0x2E ||
-    cp === 0x2F || cp === 0x40 || cp === 0x5F
-  )
-}
-
-/**
- * Normalizes the percent-encoding of a query or fragment component.
- *
- * Like `normalizePathEncoding`, but uses the query/fragment character set
- * (which additionally allows `?`) and decodes `.` since it has no dot-segment
- * meaning outside of a path.
- *
- * @param {string} input
- * @returns {string}
- */
-function normalizeQueryFragmentEncoding (input) {
-  let output = ''
-
-  for (let i = 0; i < input.length; i++) {
-    const ch = input[i]
-    if (ch === '%' && i + 2 < input.length) {
-      const hex = input.slice(i + 1, i + 3)
-      if (isHexPair(hex)) {
-        const normalizedHex = hex.toUpperCase()
-        const decoded = String.fromCharCode(parseInt(normalizedHex, 16))
-
-        if (isUnreserved(decoded)) {
-          output += decoded
-        } else {
-          output += '%' + normalizedHex
-        }
-
-        i += 2
-        continue
-      }
-    }
-
-    if (isQueryFragmentCharacter(ch)) {
-      output += ch
-    } else {
-      const code = input.charCodeAt(i)
-      if (code < 0x80) {
-        output += isEscapeSafe(code) ? ch : BYTE_HEX[code]
-      } else if (code < 0xD800 || code > 0xDFFF) {
-        output += percentEncodeNonAscii(code)
-      } else if (code <= 0xDBFF && i + 1 < input.length) {
-        const low = input.charCodeAt(i + 1)
-        if (low >= 0xDC00 && low <= 0xDFFF) {
-          output += percentEncodeNonAscii(0x10000 + ((code - 0xD800) << 10) + (low - 0xDC00))
-          i++
-        } else {
-          output += percentEncodeNonAscii(0xFFFD)
-        }
-      } else {
-        output += percentEncodeNonAscii(0xFFFD)
-      }
-    }
-  }
-
-  return output
-}
-
-/**
- * Escapes a component while preserving existing valid percent escapes.
- *
- * @param {string} input
- * @returns {string}
- */
-function escapePreservingEscapes (input) {
-  let output = ''
-
-  for (let i = 0; i < input.length; i++) {
-    if (input[i] === '%' && i + 2 < input.length) {
-      const hex = input.slice(i + 1, i + 3)
-      if (isHexPair(hex)) {
-        output += '%' + hex.toUpperCase()
-        i += 2
-        continue
-      }
-    }
-
-    output += escape(input[i])
-  }
-
-  return output
-}
-
-/**
- * @param {import('../types/index').URIComponent} component
- * @returns {string|undefined}
- */
-function recomposeAuthority (component) {
-  const uriTokens = []
-
-  if (component.userinfo !== undefined) {
-    uriTokens.push(encodeUserinfo(component.userinfo))
-    uriTokens.push('@')
-  }
-
-  if (component.host !== undefined) {
-    let host = component.host
-    if (!isIPv4(host)) {
-      let ipV6res = normalizeIPv6(host)
-      if (ipV6res.isIPV6 !== true && ipV6res.isIPVFuture !== true) {
-        // Decode only unreserved bytes, once. In particular, keep %25 encoded
-        // so it cannot introduce a second escape during recomposition.
-        host = normalizePercentEncoding(host, true)
-        ipV6res = normalizeIPv6(host)
-      }
-      if (ipV6res.isIPV6 === true || ipV6res.isIPVFuture === true) {
-        host = `[${ipV6res.escapedHost}]`
-      } else {
-        host = reescapeHostDelimiters(host, false)
-      }
-    }
-    uriTokens.push(host)
-  }
-
-  if (typeof component.port === 'number' || typeof component.port === 'string') {
-    const port = String(component.port)
-    if (!isPort(port)) {
-      throw new TypeError('URI port is malformed.')
-    }
-    uriTokens.push(':')
-    uriTokens.push(port)
-  }
-
-  return uriTokens.length ? uriTokens.join('') : undefined
-};
-
-module.exports = {
-  nonSimpleDomain,
-  recomposeAuthority,
-  reescapeHostDelimiters,
-  normalizePercentEncoding,
-  normalizePathEncoding,
-  serializePathEncoding,
-  normalizeQueryFragmentEncoding,
-  encodeUserinfo,
-  encodeQuery,
-  encodeFragment,
-  escapePreservingEscapes,
-  removeDotSegments,
-  removeDotSegmentsRelative,
-  isIPv4,
-  isUUID,
-  normalizeIPv6,
-  stringArrayToHexStripped
-}
-
-
-/***/ }),
-
 /***/ 7349:
 /***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
 
@@ -33224,9 +31285,9 @@ exports.composeCollection = composeCollection;
 
 
 
-var Document = __nccwpck_require__(5402);
+var Document = __nccwpck_require__(3021);
 var composeNode = __nccwpck_require__(5937);
-var resolveEnd = __nccwpck_require__(5407);
+var resolveEnd = __nccwpck_require__(7788);
 var resolveProps = __nccwpck_require__(4631);
 
 function composeDoc(options, directives, { offset, start, value, end }, onError) {
@@ -33280,7 +31341,7 @@ var Alias = __nccwpck_require__(4065);
 var identity = __nccwpck_require__(1127);
 var composeCollection = __nccwpck_require__(7349);
 var composeScalar = __nccwpck_require__(5413);
-var resolveEnd = __nccwpck_require__(5407);
+var resolveEnd = __nccwpck_require__(7788);
 var utilEmptyScalarPosition = __nccwpck_require__(2599);
 
 const CN = { composeNode, composeEmptyNode };
@@ -33492,11 +31553,11 @@ exports.composeScalar = composeScalar;
 
 var node_process = __nccwpck_require__(932);
 var directives = __nccwpck_require__(1342);
-var Document = __nccwpck_require__(5402);
+var Document = __nccwpck_require__(3021);
 var errors = __nccwpck_require__(1464);
 var identity = __nccwpck_require__(1127);
 var composeDoc = __nccwpck_require__(3683);
-var resolveEnd = __nccwpck_require__(5407);
+var resolveEnd = __nccwpck_require__(7788);
 
 function getErrorPos(src) {
     if (typeof src === 'number')
@@ -34105,7 +32166,7 @@ exports.resolveBlockSeq = resolveBlockSeq;
 
 /***/ }),
 
-/***/ 5407:
+/***/ 7788:
 /***/ ((__unused_webpack_module, exports) => {
 
 
@@ -34160,7 +32221,7 @@ var identity = __nccwpck_require__(1127);
 var Pair = __nccwpck_require__(7165);
 var YAMLMap = __nccwpck_require__(4454);
 var YAMLSeq = __nccwpck_require__(2223);
-var resolveEnd = __nccwpck_require__(5407);
+var resolveEnd = __nccwpck_require__(7788);
 var resolveProps = __nccwpck_require__(4631);
 var utilContainsNewline = __nccwpck_require__(9499);
 var utilMapIncludes = __nccwpck_require__(1187);
@@ -34373,7 +32434,7 @@ exports.resolveFlowCollection = resolveFlowCollection;
 
 
 var Scalar = __nccwpck_require__(3301);
-var resolveEnd = __nccwpck_require__(5407);
+var resolveEnd = __nccwpck_require__(7788);
 
 function resolveFlowScalar(scalar, strict, onError) {
     const { offset, type, source, end } = scalar;
@@ -34881,7 +32942,7 @@ exports.mapIncludes = mapIncludes;
 
 /***/ }),
 
-/***/ 5402:
+/***/ 3021:
 /***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
 
 
@@ -34892,7 +32953,7 @@ var identity = __nccwpck_require__(1127);
 var Pair = __nccwpck_require__(7165);
 var toJS = __nccwpck_require__(4043);
 var Schema = __nccwpck_require__(5840);
-var stringifyDocument = __nccwpck_require__(9210);
+var stringifyDocument = __nccwpck_require__(6829);
 var anchors = __nccwpck_require__(1596);
 var applyReviver = __nccwpck_require__(3661);
 var createNode = __nccwpck_require__(2404);
@@ -35730,7 +33791,7 @@ var __webpack_unused_export__;
 
 
 var composer = __nccwpck_require__(9984);
-var Document = __nccwpck_require__(5402);
+var Document = __nccwpck_require__(3021);
 var Schema = __nccwpck_require__(5840);
 var errors = __nccwpck_require__(1464);
 var Alias = __nccwpck_require__(4065);
@@ -38964,7 +37025,7 @@ exports.Parser = Parser;
 
 
 var composer = __nccwpck_require__(9984);
-var Document = __nccwpck_require__(5402);
+var Document = __nccwpck_require__(3021);
 var errors = __nccwpck_require__(1464);
 var log = __nccwpck_require__(7249);
 var identity = __nccwpck_require__(1127);
@@ -40814,7 +38875,7 @@ exports.stringifyComment = stringifyComment;
 
 /***/ }),
 
-/***/ 9210:
+/***/ 6829:
 /***/ ((__unused_webpack_module, exports, __nccwpck_require__) => {
 
 
@@ -41686,69 +39747,6 @@ function replaceNode(key, path, node) {
 exports.visit = visit;
 exports.visitAsync = visitAsync;
 
-
-/***/ }),
-
-/***/ 3837:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$id":"https://raw.githubusercontent.com/ajv-validator/ajv/master/lib/refs/data.json#","description":"Meta-schema for $data reference (JSON AnySchema extension proposal)","type":"object","required":["$data"],"properties":{"$data":{"type":"string","anyOf":[{"format":"relative-json-pointer"},{"format":"json-pointer"}]}},"additionalProperties":false}');
-
-/***/ }),
-
-/***/ 7216:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/applicator","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/applicator":true},"$dynamicAnchor":"meta","title":"Applicator vocabulary meta-schema","type":["object","boolean"],"properties":{"prefixItems":{"$ref":"#/$defs/schemaArray"},"items":{"$dynamicRef":"#meta"},"contains":{"$dynamicRef":"#meta"},"additionalProperties":{"$dynamicRef":"#meta"},"properties":{"type":"object","additionalProperties":{"$dynamicRef":"#meta"},"default":{}},"patternProperties":{"type":"object","additionalProperties":{"$dynamicRef":"#meta"},"propertyNames":{"format":"regex"},"default":{}},"dependentSchemas":{"type":"object","additionalProperties":{"$dynamicRef":"#meta"},"default":{}},"propertyNames":{"$dynamicRef":"#meta"},"if":{"$dynamicRef":"#meta"},"then":{"$dynamicRef":"#meta"},"else":{"$dynamicRef":"#meta"},"allOf":{"$ref":"#/$defs/schemaArray"},"anyOf":{"$ref":"#/$defs/schemaArray"},"oneOf":{"$ref":"#/$defs/schemaArray"},"not":{"$dynamicRef":"#meta"}},"$defs":{"schemaArray":{"type":"array","minItems":1,"items":{"$dynamicRef":"#meta"}}}}');
-
-/***/ }),
-
-/***/ 8226:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/content","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/content":true},"$dynamicAnchor":"meta","title":"Content vocabulary meta-schema","type":["object","boolean"],"properties":{"contentEncoding":{"type":"string"},"contentMediaType":{"type":"string"},"contentSchema":{"$dynamicRef":"#meta"}}}');
-
-/***/ }),
-
-/***/ 518:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/core","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/core":true},"$dynamicAnchor":"meta","title":"Core vocabulary meta-schema","type":["object","boolean"],"properties":{"$id":{"$ref":"#/$defs/uriReferenceString","$comment":"Non-empty fragments not allowed.","pattern":"^[^#]*#?$"},"$schema":{"$ref":"#/$defs/uriString"},"$ref":{"$ref":"#/$defs/uriReferenceString"},"$anchor":{"$ref":"#/$defs/anchorString"},"$dynamicRef":{"$ref":"#/$defs/uriReferenceString"},"$dynamicAnchor":{"$ref":"#/$defs/anchorString"},"$vocabulary":{"type":"object","propertyNames":{"$ref":"#/$defs/uriString"},"additionalProperties":{"type":"boolean"}},"$comment":{"type":"string"},"$defs":{"type":"object","additionalProperties":{"$dynamicRef":"#meta"}}},"$defs":{"anchorString":{"type":"string","pattern":"^[A-Za-z_][-A-Za-z0-9._]*$"},"uriString":{"type":"string","format":"uri"},"uriReferenceString":{"type":"string","format":"uri-reference"}}}');
-
-/***/ }),
-
-/***/ 4588:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/format-annotation","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/format-annotation":true},"$dynamicAnchor":"meta","title":"Format vocabulary meta-schema for annotation results","type":["object","boolean"],"properties":{"format":{"type":"string"}}}');
-
-/***/ }),
-
-/***/ 5707:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/meta-data","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/meta-data":true},"$dynamicAnchor":"meta","title":"Meta-data vocabulary meta-schema","type":["object","boolean"],"properties":{"title":{"type":"string"},"description":{"type":"string"},"default":true,"deprecated":{"type":"boolean","default":false},"readOnly":{"type":"boolean","default":false},"writeOnly":{"type":"boolean","default":false},"examples":{"type":"array","items":true}}}');
-
-/***/ }),
-
-/***/ 9547:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/unevaluated","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/unevaluated":true},"$dynamicAnchor":"meta","title":"Unevaluated applicator vocabulary meta-schema","type":["object","boolean"],"properties":{"unevaluatedItems":{"$dynamicRef":"#meta"},"unevaluatedProperties":{"$dynamicRef":"#meta"}}}');
-
-/***/ }),
-
-/***/ 7082:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/meta/validation","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/validation":true},"$dynamicAnchor":"meta","title":"Validation vocabulary meta-schema","type":["object","boolean"],"properties":{"type":{"anyOf":[{"$ref":"#/$defs/simpleTypes"},{"type":"array","items":{"$ref":"#/$defs/simpleTypes"},"minItems":1,"uniqueItems":true}]},"const":true,"enum":{"type":"array","items":true},"multipleOf":{"type":"number","exclusiveMinimum":0},"maximum":{"type":"number"},"exclusiveMaximum":{"type":"number"},"minimum":{"type":"number"},"exclusiveMinimum":{"type":"number"},"maxLength":{"$ref":"#/$defs/nonNegativeInteger"},"minLength":{"$ref":"#/$defs/nonNegativeIntegerDefault0"},"pattern":{"type":"string","format":"regex"},"maxItems":{"$ref":"#/$defs/nonNegativeInteger"},"minItems":{"$ref":"#/$defs/nonNegativeIntegerDefault0"},"uniqueItems":{"type":"boolean","default":false},"maxContains":{"$ref":"#/$defs/nonNegativeInteger"},"minContains":{"$ref":"#/$defs/nonNegativeInteger","default":1},"maxProperties":{"$ref":"#/$defs/nonNegativeInteger"},"minProperties":{"$ref":"#/$defs/nonNegativeIntegerDefault0"},"required":{"$ref":"#/$defs/stringArray"},"dependentRequired":{"type":"object","additionalProperties":{"$ref":"#/$defs/stringArray"}}},"$defs":{"nonNegativeInteger":{"type":"integer","minimum":0},"nonNegativeIntegerDefault0":{"$ref":"#/$defs/nonNegativeInteger","default":0},"simpleTypes":{"enum":["array","boolean","integer","null","number","object","string"]},"stringArray":{"type":"array","items":{"type":"string"},"uniqueItems":true,"default":[]}}}');
-
-/***/ }),
-
-/***/ 1678:
-/***/ ((module) => {
-
-module.exports = /*#__PURE__*/JSON.parse('{"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"https://json-schema.org/draft/2020-12/schema","$vocabulary":{"https://json-schema.org/draft/2020-12/vocab/core":true,"https://json-schema.org/draft/2020-12/vocab/applicator":true,"https://json-schema.org/draft/2020-12/vocab/unevaluated":true,"https://json-schema.org/draft/2020-12/vocab/validation":true,"https://json-schema.org/draft/2020-12/vocab/meta-data":true,"https://json-schema.org/draft/2020-12/vocab/format-annotation":true,"https://json-schema.org/draft/2020-12/vocab/content":true},"$dynamicAnchor":"meta","title":"Core and Validation specifications meta-schema","allOf":[{"$ref":"meta/core"},{"$ref":"meta/applicator"},{"$ref":"meta/unevaluated"},{"$ref":"meta/validation"},{"$ref":"meta/meta-data"},{"$ref":"meta/format-annotation"},{"$ref":"meta/content"}],"type":["object","boolean"],"$comment":"This meta-schema also defines keywords that have appeared in previous drafts in order to prevent incompatible extensions as they remain in common use.","properties":{"definitions":{"$comment":"\\"definitions\\" has been replaced by \\"$defs\\".","type":"object","additionalProperties":{"$dynamicRef":"#meta"},"deprecated":true,"default":{}},"dependencies":{"$comment":"\\"dependencies\\" has been split and replaced by \\"dependentSchemas\\" and \\"dependentRequired\\" in order to serve their differing semantics.","type":"object","additionalProperties":{"anyOf":[{"$dynamicRef":"#meta"},{"$ref":"meta/validation#/$defs/stringArray"}]},"deprecated":true,"default":{}},"$recursiveAnchor":{"$comment":"\\"$recursiveAnchor\\" has been replaced by \\"$dynamicAnchor\\".","$ref":"meta/core#/$defs/anchorString","deprecated":true},"$recursiveRef":{"$comment":"\\"$recursiveRef\\" has been replaced by \\"$dynamicRef\\".","$ref":"meta/core#/$defs/uriReferenceString","deprecated":true}}}');
 
 /***/ })
 

@@ -227,9 +227,28 @@ export class ChunkBuilder {
     const exact = rows === this.capacity;
     const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
     const lines = exact ? this.lines : this.lines.slice(0, rows);
-    this.ready.push({ rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines });
+    const chunk: Chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
+    if (exact) this.#buffersOf.set(chunk, { slots, lines });
+    this.ready.push(chunk);
     this.fresh();
   }
+
+  /**
+   * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
+   * reused for a later chunk (no allocation per chunk when the reader copies each chunk away
+   * before asking for the next). Chunks of another size are ignored.
+   *
+   * @param chunk a chunk from {@link take}; must not be read afterwards
+   */
+  recycle(chunk: Chunk): void {
+    const buffers = this.#buffersOf.get(chunk);
+    if (buffers === undefined) return;
+    this.#buffersOf.delete(chunk);
+    this.#spare.push(buffers);
+  }
+
+  readonly #buffersOf = new WeakMap<Chunk, { slots: Float64Array[]; lines: Int32Array }>();
+  readonly #spare: { slots: Float64Array[]; lines: Int32Array }[] = [];
 
   /** Takes the chunks handed out so far. */
   take(): Chunk[] {
@@ -239,8 +258,15 @@ export class ChunkBuilder {
   /** New buffers, as large as the last ones (a file that filled one chunk likely fills more). */
   private fresh(): void {
     if (this.capacity === 0) this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
+    this.row = 0;
+    while (this.#spare.length > 0) {
+      const spare = this.#spare.pop() as { slots: Float64Array[]; lines: Int32Array };
+      if (spare.lines.length !== this.capacity) continue;
+      this.slots = spare.slots;
+      this.lines = spare.lines;
+      return;
+    }
     this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
     this.lines = new Int32Array(this.capacity);
-    this.row = 0;
   }
 }

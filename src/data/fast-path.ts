@@ -78,11 +78,17 @@ export async function* fastChunks(pieces: AsyncIterable<Uint8Array>, target: Sca
     }
     reader.read(bytes);
     if (reader.stopped) return;
-    for (const chunk of reader.builder.take()) yield chunk;
+    for (const chunk of reader.builder.take()) {
+      yield chunk;
+      if (target.recycle === true) reader.builder.recycle(chunk);
+    }
   }
   if (reader.plan === null) throw emptyError(target.file);
   reader.builder.flush();
-  for (const chunk of reader.builder.take()) yield chunk;
+  for (const chunk of reader.builder.take()) {
+      yield chunk;
+      if (target.recycle === true) reader.builder.recycle(chunk);
+    }
 }
 
 /** State of the fast path between blocks. */

@@ -31,6 +31,11 @@ export interface ScanTarget {
   headerOnly: boolean;
   /** Called once the header has passed its checks. */
   onHeader: (plan: ColumnPlan) => void;
+  /**
+   * The reader is done with each chunk when it asks for the next one (it copies the rows away),
+   * so the chunk's buffers may be reused. Default false: chunks stay valid.
+   */
+  recycle?: boolean;
 }
 
 /** Stops csv-parse from inside `on_record` once the header is known (header-only reads). */
@@ -128,14 +133,20 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
       lineFeeds += countLineFeeds(bytes);
       parser.write(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
       if (settle(null)) return;
-      for (const chunk of builder.take()) yield chunk;
+      for (const chunk of builder.take()) {
+      yield chunk;
+      if (target.recycle === true) builder.recycle(chunk);
+    }
     }
     await endParser(parser);
     if (settle(bad)) return;
     if (bad !== null) throw encodingError(file, 1 + lineFeeds, bad.utf16);
     if (plan === null) throw emptyError(file);
     builder.flush();
-    for (const chunk of builder.take()) yield chunk;
+    for (const chunk of builder.take()) {
+      yield chunk;
+      if (target.recycle === true) builder.recycle(chunk);
+    }
   } finally {
     parser.destroy();
     await blocks.return?.(undefined);

@@ -81,15 +81,16 @@ export interface Table {
 export async function* readTableChunks(repo: RepoReader, path: string, options: ReadTableOptions): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
   await checkSize(repo, path, settings.maxBytes);
-  yield* scan(repo, path, settings, () => undefined, false);
+  yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
 }
 
 /**
- * Reads the requested columns whole (concatenating the chunks, no per-row objects).
- *
- * The chunks are kept as they come and copied once into arrays of the exact final length:
- * the same peak memory as growing buffers by doubling (at most twice the data), with one
- * copy instead of several.
+ * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
+ * chunks kept): after the first chunk the row count is estimated from the file size and the
+ * bytes read so far (plus 5 %), each chunk is copied in as it arrives and dropped, and the
+ * arrays grow by 1.5x when the estimate was short. The result views the first `rows` entries
+ * (capacity beyond that stays allocated: a few percent). Peak memory is about the data plus
+ * one chunk, instead of twice the data.
  *
  * @param repo where the file lives
  * @param path repository-relative path of the CSV file
@@ -98,21 +99,53 @@ export async function* readTableChunks(repo: RepoReader, path: string, options: 
  */
 export async function readTable(repo: RepoReader, path: string, options: ReadTableOptions): Promise<Table> {
   const settings = checkOptions(options);
-  await checkSize(repo, path, settings.maxBytes);
+  const size = await checkSize(repo, path, settings.maxBytes);
   let header: string[] = [];
-  const chunks: TableChunk[] = [];
+  let bytesRead = 0;
+  const counted = async function* (): AsyncIterable<Uint8Array> {
+    for await (const piece of repo.stream(path)) {
+      bytesRead += piece.length;
+      yield piece;
+    }
+  };
+  // First position of each distinct requested name (a repeated name shares one array).
+  const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
+  let columns: Float64Array[] = [];
+  let lines = new Int32Array(0);
   let rows = 0;
-  for await (const chunk of scan(repo, path, settings, (plan) => (header = plan.header), false)) {
-    chunks.push(chunk);
-    rows += chunk.rows;
+  const grow = (capacity: number): void => {
+    columns = settings.columns.map((_, k) => {
+      if (firstOf[k] !== k) return columns[firstOf[k]];
+      const next = new Float64Array(capacity);
+      if (rows > 0) next.set(columns[k].subarray(0, rows));
+      return next;
+    });
+    const nextLines = new Int32Array(capacity);
+    if (rows > 0) nextLines.set(lines.subarray(0, rows));
+    lines = nextLines;
+  };
+  for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+    const needed = rows + chunk.rows;
+    if (needed > lines.length) {
+      let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
+      if (rows === 0 && bytesRead > 0) {
+        // First chunk: estimate the whole file's rows from its bytes per row.
+        const estimate = Math.ceil((size / bytesRead) * chunk.rows * 1.05);
+        capacity = Math.max(needed, Math.min(estimate, Math.ceil(size / 2) + 1));
+      }
+      grow(capacity);
+    }
+    settings.columns.forEach((_, k) => {
+      if (firstOf[k] === k) columns[k].set(chunk.columns[k], rows);
+    });
+    lines.set(chunk.lines, rows);
+    rows = needed;
   }
-  const columns = new Map<string, Float64Array>();
+  const out = new Map<string, Float64Array>();
   settings.columns.forEach((name, k) => {
-    if (columns.has(name)) return;
-    columns.set(name, concatenate(chunks.map((chunk) => chunk.columns[k]), new Float64Array(rows)));
+    if (!out.has(name)) out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
   });
-  const lines = concatenate(chunks.map((chunk) => chunk.lines), new Int32Array(rows));
-  return { file: path, header, rows, columns, lines };
+  return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
 }
 
 /**
@@ -128,7 +161,7 @@ export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFA
   await checkSize(repo, path, settings.maxBytes);
   let header: string[] = [];
   // A header-only scan ends right after the header and yields no rows.
-  const scanning = scan(repo, path, settings, (plan) => (header = plan.header), true);
+  const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
   while (!(await scanning.next()).done);
   return header;
 }
@@ -153,8 +186,8 @@ function checkOptions(options: ReadTableOptions): Settings {
   return { columns, chunkRows, maxBytes, general };
 }
 
-/** InputError `file-too-large` when the file is over the cap. */
-async function checkSize(repo: RepoReader, path: string, maxBytes: number): Promise<void> {
+/** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
+async function checkSize(repo: RepoReader, path: string, maxBytes: number): Promise<number> {
   const size = await repo.size(path);
   if (size > maxBytes) {
     throw new InputError(
@@ -163,6 +196,7 @@ async function checkSize(repo: RepoReader, path: string, maxBytes: number): Prom
       { file: path },
     );
   }
+  return size;
 }
 
 function megabytes(bytes: number): string {
@@ -174,11 +208,12 @@ function megabytes(bytes: number): string {
  * handing out only the rows the fast path has not handed out already.
  */
 async function* scan(
-  repo: RepoReader,
+  open: () => AsyncIterable<Uint8Array>,
   path: string,
   settings: Settings,
   onHeader: (plan: ColumnPlan) => void,
   headerOnly: boolean,
+  recycle = false,
 ): AsyncGenerator<TableChunk> {
   let headerSeen = false;
   const target: ScanTarget = {
@@ -186,6 +221,7 @@ async function* scan(
     request: planRequest(settings.columns),
     chunkRows: settings.chunkRows,
     headerOnly,
+    recycle,
     onHeader: (plan) => {
       if (headerSeen) return;
       headerSeen = true;
@@ -195,7 +231,7 @@ async function* scan(
   let handedOut = 0;
   if (!settings.general) {
     try {
-      for await (const chunk of fastChunks(repo.stream(path), target)) {
+      for await (const chunk of fastChunks(open(), target)) {
         handedOut += chunk.rows;
         yield chunk;
       }
@@ -204,16 +240,5 @@ async function* scan(
       if (!(error instanceof FastPathDeclined)) throw error;
     }
   }
-  yield* generalChunks(repo.stream(path), target, handedOut);
-}
-
-/** Copies `parts` one after another into `out` (whose length is their total). */
-function concatenate<T extends Float64Array | Int32Array>(parts: T[], out: T): T {
-  if (parts.length === 1 && parts[0].length === out.length) return parts[0];
-  let at = 0;
-  for (const part of parts) {
-    out.set(part, at);
-    at += part.length;
-  }
-  return out;
+  yield* generalChunks(open(), target, handedOut);
 }

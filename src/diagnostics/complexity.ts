@@ -80,7 +80,7 @@ export interface Sweep {
 
 /** Options of {@link sweepComplexity}. */
 export interface SweepOptions {
-  /** Subsample rows above this count (even stride through the file). Default 200000. */
+  /** Subsample rows above this count (even stride through the file). Default {@link SWEEP_MAX_ROWS}. */
   maxRows?: number;
   /** Highest polynomial degree tried. Default 15. */
   maxDegree?: number;
@@ -110,15 +110,23 @@ export function sweepTarget(descriptor: Descriptor, design: Design): { kind: Swe
   return null;
 }
 
+/**
+ * Rows the sweep uses at most: above this a deterministic even-stride subsample (the detail says
+ * `subsampled: true` and gives `rows`). 50,000 rows estimate each setting's k-fold error to well
+ * under its own standard error, at a quarter of the cost of 200,000 (common practice: the curve
+ * only has to rank the settings).
+ */
+export const SWEEP_MAX_ROWS = 50000;
+
 /** Every other row at an even stride, as new columns. */
 function subsample(data: Rows, m: number): Rows {
   const n = data.rows;
-  const idx = Int32Array.from({ length: m }, (_, t) => Math.floor((t * n) / m));
-  return {
-    inputs: data.inputs.map((col) => Float64Array.from(idx, (i) => col[i])),
-    y: Float64Array.from(idx, (i) => data.y[i]),
-    rows: m,
+  const pick = (col: Float64Array): Float64Array => {
+    const out = new Float64Array(m);
+    for (let t = 0; t < m; t++) out[t] = col[Math.floor((t * n) / m)];
+    return out;
   };
+  return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
 }
 
 /**
@@ -143,7 +151,7 @@ function subsample(data: Rows, m: number): Rows {
 export function sweepComplexity(descriptor: Descriptor, design: Design, train: Rows, fit: FitResult, options: SweepOptions = {}): Sweep | null {
   const target = sweepTarget(descriptor, design);
   if (target === null || train.rows < 2) return null;
-  const maxRows = options.maxRows ?? 200000;
+  const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
   const subsampled = train.rows > maxRows;
   const rows = subsampled ? subsample(train, maxRows) : train;
   const folds: Folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);

@@ -6,7 +6,7 @@
 import type { ModelData } from '../checks/types.js';
 import type { Design } from '../design-matrix.js';
 import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from '../fit/index.js';
-import { forEachBlock } from '../model/blocks.js';
+import { addProducts, forEachBlock } from '../model/blocks.js';
 import type { Folds } from './folds.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
@@ -186,17 +186,26 @@ export function outOfFoldErrors(
     return t;
   });
   let pred = new Float64Array(0);
+  const column = new Float64Array(p);
   forEachBlock(design, data, (X, start, m) => {
     if (pred.length < m) pred = new Float64Array(m);
+    // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
+    let single = m > 0 ? foldOf[start] : -1;
+    for (let i = 1; i < m && single >= 0; i++) if (foldOf[start + i] !== single) single = -1;
     for (let s = 0; s < S; s++) {
       const W = tables[s];
       const errors = sse[s];
       pred.fill(0, 0, m);
       // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
-      for (let j = 0; j < p; j++) {
-        const col = j * m;
-        const base = j * k;
-        for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[base + foldOf[start + i]];
+      if (single >= 0) {
+        for (let j = 0; j < p; j++) column[j] = W[j * k + single];
+        addProducts(pred, 0, X, m, column, p);
+      } else {
+        for (let j = 0; j < p; j++) {
+          const col = j * m;
+          const base = j * k;
+          for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[base + foldOf[start + i]];
+        }
       }
       for (let i = 0; i < m; i++) {
         const r = data.y[start + i] - pred[i];
@@ -343,11 +352,7 @@ export function crossValidate(design: Design, data: Rows, fit: FitResult, folds:
     }
     leveragesInto(fit, X, m, h);
     pred.fill(0, 0, m);
-    for (let j = 0; j < p; j++) {
-      const col = j * m;
-      const wj = w[j];
-      for (let i = 0; i < m; i++) pred[i] += X[col + i] * wj;
-    }
+    addProducts(pred, 0, X, m, w, p);
     if (out !== undefined) out.set(pred.subarray(0, m), start);
     for (let i = 0; i < m; i++) {
       const e = data.y[start + i] - pred[i];

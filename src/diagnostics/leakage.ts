@@ -26,23 +26,26 @@ export interface Leakage {
 const f64 = new Float64Array(1);
 const u32 = new Uint32Array(f64.buffer);
 
-/** 32-bit hash of the bit patterns of row i's values (-0 counts as 0). */
+/**
+ * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
+ * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
+ * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
+ * comparison, so the hash only has to spread rows over the table.
+ */
 function rowHash(columns: readonly Float64Array[], i: number): number {
   let h = 0x811c9dc5;
-  for (const col of columns) {
-    f64[0] = col[i] + 0; // -0 + 0 === +0: equal values hash equal
-    for (let w = 0; w < 2; w++) {
-      // Multiply-xorshift mix of each 32-bit half (constants of the lowbias32 finaliser, Wellons 2018).
-      let z = (u32[w] ^ h) >>> 0;
-      z ^= z >>> 16;
-      z = Math.imul(z, 0x7feb352d);
-      z ^= z >>> 15;
-      z = Math.imul(z, 0x846ca68b);
-      z ^= z >>> 16;
-      h = (Math.imul(h, 0x01000193) ^ z) >>> 0;
-    }
+  for (let c = 0; c < columns.length; c++) {
+    f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
+    h = Math.imul(h ^ u32[0], 0x9e3779b1);
+    h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
+    h ^= h >>> 13;
   }
-  return h;
+  h ^= h >>> 16;
+  h = Math.imul(h, 0x7feb352d);
+  h ^= h >>> 15;
+  h = Math.imul(h, 0x846ca68b);
+  h ^= h >>> 16;
+  return h >>> 0;
 }
 
 function sameInputs(a: readonly Float64Array[], i: number, b: readonly Float64Array[], j: number): boolean {
@@ -54,46 +57,61 @@ function sameInputs(a: readonly Float64Array[], i: number, b: readonly Float64Ar
  * Finds hold-out rows equal to a training row in every input column of the model (values compared
  * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
  * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
- * training rows.
+ * hold-out rows (typed arrays, about 20 bytes per row).
  *
  * @param train training rows (inputs in the model's order, targets, lines)
  * @param holdout hold-out rows (same input order)
  */
 export function findLeakage(train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>, holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>): Leakage {
   const columns = train.inputs.length;
-  // Hash table: bucket head per hash, chained through `next` (no per-row objects).
-  const heads = new Map<number, number>();
-  const next = new Int32Array(train.rows).fill(-1);
-  for (let i = train.rows - 1; i >= 0; i--) {
-    const h = rowHash(train.inputs, i);
-    const head = heads.get(h);
-    if (head !== undefined) next[i] = head;
-    heads.set(h, i);
+  // Hash table of the hold-out rows (the smaller file, usually) by open addressing with linear
+  // probing over typed arrays: slot -> (hash, first row), rows with the same hash chained
+  // through `next`. No Map, no per-row objects. The training rows then stream past it in file
+  // order, so each hold-out row's first match is the earliest training row.
+  const h = holdout.rows;
+  let size = 1024;
+  while (size < 2 * h) size *= 2;
+  const mask = size - 1;
+  const slotHash = new Uint32Array(size);
+  const slotHead = new Int32Array(size).fill(-1);
+  const next = new Int32Array(h).fill(-1);
+  const find = (hash: number): number => {
+    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+    while (slotHead[s] >= 0 && slotHash[s] !== hash) s = (s + 1) & mask;
+    return s;
+  };
+  for (let r = h - 1; r >= 0; r--) {
+    const hash = rowHash(holdout.inputs, r);
+    const s = find(hash);
+    next[r] = slotHead[s];
+    slotHash[s] = hash;
+    slotHead[s] = r;
+  }
+  const firstMatch = new Int32Array(h).fill(-1);
+  const targetToo = new Uint8Array(h);
+  if (h > 0) {
+    for (let i = 0; i < train.rows; i++) {
+      let r = slotHead[find(rowHash(train.inputs, i))];
+      while (r >= 0) {
+        if (sameInputs(holdout.inputs, r, train.inputs, i)) {
+          if (firstMatch[r] < 0) firstMatch[r] = i;
+          if (holdout.y[r] === train.y[i]) targetToo[r] = 1;
+        }
+        r = next[r];
+      }
+    }
   }
   let inputMatches = 0;
   let fullMatches = 0;
   const holdoutLines: number[] = [];
   const trainLines: number[] = [];
-  for (let r = 0; r < holdout.rows; r++) {
-    let i = heads.get(rowHash(holdout.inputs, r));
-    let firstMatch = -1;
-    let targetToo = false;
-    while (i !== undefined && i >= 0) {
-      if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-        if (firstMatch < 0) firstMatch = i;
-        if (holdout.y[r] === train.y[i]) {
-          targetToo = true;
-          break;
-        }
-      }
-      i = next[i];
-    }
-    if (firstMatch < 0) continue;
+  for (let r = 0; r < h; r++) {
+    if (firstMatch[r] < 0) continue;
     inputMatches++;
-    if (targetToo) fullMatches++;
+    if (targetToo[r] === 1) fullMatches++;
     if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
       holdoutLines.push(holdout.lines[r]);
-      trainLines.push(train.lines[firstMatch]);
+      trainLines.push(train.lines[firstMatch[r]]);
     }
   }
   return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };

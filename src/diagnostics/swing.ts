@@ -6,6 +6,7 @@ import type { Design } from '../design-matrix.js';
 import { predictRows } from '../model/blocks.js';
 import type { Rows } from './cross-validation.js';
 import { columnMedian } from './column-median.js';
+import { sortFloat64 } from './radix-sort.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -19,6 +20,11 @@ export interface SwingOptions {
   marginPoints?: number;
   /** At most this many gaps get points (the widest); the uniform grid covers the rest. Default 16000. */
   maxGaps?: number;
+  /**
+   * Rows an input's grid is built from: above it, an even stride through the file plus the
+   * input's smallest and largest value (so the grid spans the whole range). Default 100,000.
+   */
+  maxGridRows?: number;
   /** Several inputs: rows sampled for the neighbour segments. Default 2000. */
   maxRows?: number;
   /** Several inputs: nearest neighbours per sampled row. Default 3. */
@@ -107,7 +113,7 @@ export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {})
  * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
  * array is overwritten (its distinct values are packed to the front).
  */
-function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions): { inside: Float64Array; beyond: Float64Array } {
+function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions, work?: Float64Array): { inside: Float64Array; beyond: Float64Array } {
   const perGap = options.perGap ?? 8;
   const uniform = options.uniform ?? 201;
   const margin = options.margin ?? 0.1;
@@ -120,7 +126,7 @@ function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions):
   const lo = distinct[0];
   const hi = distinct[count - 1];
   const width = hi - lo;
-  const gaps = widestGaps(distinct, maxGaps);
+  const gaps = widestGaps(distinct, maxGaps, work);
   const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
   const inside = new Float64Array(uniform + gaps.length * per);
   let w = 0;
@@ -137,7 +143,7 @@ function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions):
     beyond[2 * t - 1] = hi + d;
   }
   const unique = (xs: Float64Array, length: number): Float64Array => {
-    const u = xs.subarray(0, length).sort();
+    const u = sortFloat64(xs.subarray(0, length));
     let k = 0;
     for (let i = 0; i < u.length; i++) if (k === 0 || u[i] !== u[k - 1]) u[k++] = u[i];
     return u.slice(0, k);
@@ -150,10 +156,10 @@ function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions):
  * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
  * is found by selection ({@link select}) on one typed array of the widths.
  */
-function widestGaps(distinct: Float64Array, maxGaps: number): Int32Array {
+function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array): Int32Array {
   const count = distinct.length - 1;
   if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
-  const widths = new Float64Array(count);
+  const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
   for (let g = 0; g < count; g++) widths[g] = distinct[g + 1] - distinct[g];
   const threshold = select(widths, count - maxGaps);
   let above = 0;
@@ -205,6 +211,31 @@ function select(a: Float64Array, k: number): number {
   return a[k];
 }
 
+/**
+ * Copies the values an input's grid is built from into `out` and returns how many: every row
+ * when there are at most `max`, else `max - 2` rows at an even stride plus the smallest and the
+ * largest value. Large files have gaps far narrower than any swing, so the sample loses nothing
+ * the figure could show and saves sorting millions of values.
+ */
+function gridSample(column: Float64Array, n: number, max: number, out: Float64Array): number {
+  if (n <= max) {
+    out.set(column.subarray(0, n));
+    return n;
+  }
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < n; i++) {
+    const v = column[i];
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  const strided = max - 2;
+  for (let t = 0; t < strided; t++) out[t] = column[Math.floor((t * n) / strided)];
+  out[strided] = lo;
+  out[strided + 1] = hi;
+  return max;
+}
+
 /** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
 function thinIndices(length: number, count: number, keep: readonly number[]): number[] {
   if (length <= count) return Array.from({ length }, (_, i) => i);
@@ -245,6 +276,7 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
   // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
   const scratch = new Float64Array(n);
   const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
+  const radixScratch = new Uint32Array(2 * n);
 
   let inside = 0;
   let beyond = 0;
@@ -278,28 +310,38 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
     return pred;
   };
 
-  // Along each input, the others at their medians.
+  // Along each input, the others at their medians (one reused column of each median).
+  const constants: Float64Array[] = medians.map(() => new Float64Array(0));
+  const constant = (k: number, length: number): Float64Array => {
+    if (constants[k].length < length) constants[k] = new Float64Array(length).fill(medians[k]);
+    return constants[k].subarray(0, length);
+  };
   const curves: SwingCurve[] = [];
   for (let c = 0; c < d; c++) {
-    scratch.set(train.inputs[c].subarray(0, n));
-    const grid = gridFromSorted(scratch.sort(), n, options);
+    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 100_000, scratch);
+    const sample = scratch.subarray(0, len);
+    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, options, new Float64Array(radixScratch.buffer, 0, len));
     if (grid.inside.length === 0) continue;
-    const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : new Float64Array(xs.length).fill(medians[k])));
+    const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
     const pin = score(along(grid.inside), grid.inside.length, 'inside');
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond');
     // Curve for charts: all points ascending, thinned with the extremes kept.
     const m = grid.inside.length + grid.beyond.length;
     const xs = new Float64Array(m);
     const ps = new Float64Array(m);
-    const order = Array.from({ length: m }, (_, i) => i).sort((a, b) => {
-      const xa = a < grid.inside.length ? grid.inside[a] : grid.beyond[a - grid.inside.length];
-      const xb = b < grid.inside.length ? grid.inside[b] : grid.beyond[b - grid.inside.length];
-      return xa - xb;
-    });
-    order.forEach((src, dst) => {
-      xs[dst] = src < grid.inside.length ? grid.inside[src] : grid.beyond[src - grid.inside.length];
-      ps[dst] = src < grid.inside.length ? pin[src] : pout[src - grid.inside.length];
-    });
+    // Merge the two ascending point sets (they never share a value: the margins lie outside
+    // the range), which is the order a stable sort by x gives.
+    const nIn = grid.inside.length;
+    const nOut = grid.beyond.length;
+    for (let a = 0, b = 0, dst = 0; dst < m; dst++) {
+      if (b >= nOut || (a < nIn && grid.inside[a] <= grid.beyond[b])) {
+        xs[dst] = grid.inside[a];
+        ps[dst] = pin[a++];
+      } else {
+        xs[dst] = grid.beyond[b];
+        ps[dst] = pout[b++];
+      }
+    }
     let imax = 0;
     let imin = 0;
     for (let i = 1; i < m; i++) {
@@ -328,14 +370,16 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
     const perSegment = options.segmentPoints ?? 8;
     const s = Math.min(n, maxRows);
     const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
-    const scaled = train.inputs.map((col) => {
+    // Scaled inputs of the sampled rows, row-major (flat[a * d + c]) for the neighbour search.
+    const flat = new Float64Array(s * d);
+    train.inputs.forEach((col, c) => {
       const v = Float64Array.from(rows, (r) => col[r]);
       let mean = 0;
       for (const x of v) mean += x / s;
       let ss = 0;
       for (const x of v) ss += (x - mean) * (x - mean);
       const sd = Math.sqrt(ss / s);
-      return sd > 0 ? v.map((x) => (x - mean) / sd) : new Float64Array(s);
+      for (let a = 0; a < s; a++) flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
     });
     const kk = Math.min(kNear, s - 1);
     const pairs: number[] = [];
@@ -344,14 +388,19 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
     for (let a = 0; a < s; a++) {
       best.fill(Infinity);
       bestIdx.fill(-1);
+      const ra = a * d;
       for (let b = 0; b < s; b++) {
         if (b === a) continue;
+        const rb = b * d;
+        // Partial sums only grow, so stopping once one reaches the k-th best distance skips
+        // exactly the rows the full sum would skip.
+        const limit = best[kk - 1];
         let dist = 0;
-        for (const col of scaled) {
-          const t = col[a] - col[b];
+        for (let c = 0; c < d && dist < limit; c++) {
+          const t = flat[ra + c] - flat[rb + c];
           dist += t * t;
         }
-        if (dist === 0 || dist >= best[kk - 1]) continue;
+        if (dist === 0 || dist >= limit) continue;
         let pos = kk - 1;
         while (pos > 0 && best[pos - 1] > dist) {
           best[pos] = best[pos - 1];

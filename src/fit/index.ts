@@ -398,7 +398,19 @@ export function leveragesInto(fit: FitResult, X: Float64Array, m: number, out: F
       const zj = j * CH;
       const xj = j * m + i0;
       for (let i = 0; i < mb; i++) Z[zj + i] = X[xj + i];
-      for (let k = 0; k < j; k++) {
+      let k = 0;
+      // Four earlier columns per sweep (the same subtractions in the same order per row).
+      for (; k + 3 < j; k += 4) {
+        const r0 = R[j * p + k];
+        const r1 = R[j * p + k + 1];
+        const r2 = R[j * p + k + 2];
+        const r3 = R[j * p + k + 3];
+        const z0 = k * CH;
+        for (let i = 0; i < mb; i++) {
+          Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
+        }
+      }
+      for (; k < j; k++) {
         const r = R[j * p + k];
         const zk = k * CH;
         for (let i = 0; i < mb; i++) Z[zj + i] -= r * Z[zk + i];

@@ -212,27 +212,55 @@ export class QrAccumulator {
         const a0 = alpha / amax;
         norm = amax * Math.sqrt(a0 * a0 + scaled);
       }
-      // H = I - v v^T / (beta (beta - alpha)), v = [alpha - beta; C[:, j]].
+      // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
+      // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
+      // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
       const beta = alpha >= 0 ? -norm : norm;
       const v0 = alpha - beta;
-      // Divide in two steps: beta * (beta - alpha) underflows for columns below about 1e-154.
-      const gap = beta - alpha;
-      for (let k = j + 1; k < p; k++) {
+      const tau = (beta - alpha) / beta;
+      for (let i = 0; i < mb; i++) C[cj + i] /= v0;
+      let k = j + 1;
+      // Two columns at a time: each u_i is loaded once for both (per column the operations and
+      // their order are those of the single-column loop below).
+      for (; k + 1 < p; k += 2) {
+        const ck = k * ld;
+        const ck2 = ck + ld;
+        const rIdx = k * p + j;
+        const rIdx2 = rIdx + p;
+        let w1 = R[rIdx];
+        let w2 = R[rIdx2];
+        for (let i = 0; i < mb; i++) {
+          const u = C[cj + i];
+          w1 += u * C[ck + i];
+          w2 += u * C[ck2 + i];
+        }
+        const f1 = tau * w1;
+        const f2 = tau * w2;
+        if (f1 === 0 && f2 === 0) continue;
+        R[rIdx] -= f1;
+        R[rIdx2] -= f2;
+        for (let i = 0; i < mb; i++) {
+          const u = C[cj + i];
+          C[ck + i] -= f1 * u;
+          C[ck2 + i] -= f2 * u;
+        }
+      }
+      for (; k < p; k++) {
         const ck = k * ld;
         const rIdx = k * p + j;
-        let w = v0 * R[rIdx];
+        let w = R[rIdx];
         for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
-        const f = w / beta / gap;
+        const f = tau * w;
         if (f === 0) continue;
-        R[rIdx] -= f * v0;
+        R[rIdx] -= f;
         for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
       }
       {
-        let w = v0 * qty[j];
+        let w = qty[j];
         for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
-        const f = w / beta / gap;
+        const f = tau * w;
         if (f !== 0) {
-          qty[j] -= f * v0;
+          qty[j] -= f;
           for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];
         }
       }

@@ -5,9 +5,14 @@
 import type { ModelData } from '../checks/types.js';
 import type { Design } from '../design-matrix.js';
 
-/** Rows per block for a design of p columns: about 1 M doubles (8 MiB), at least 64 rows. */
+/**
+ * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
+ * enough to stay in cache between building a block and folding it (the QR works on pieces of a
+ * few hundred rows of it), and to keep each pass's buffer from weighing on peak memory; large
+ * enough that the per-block overhead does not show.
+ */
 export function blockRows(p: number): number {
-  return Math.max(64, Math.floor((1 << 20) / Math.max(1, p)));
+  return Math.max(64, Math.floor((1 << 16) / Math.max(1, p)));
 }
 
 /**
@@ -31,14 +36,46 @@ export function forEachBlock(
 /** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
 export function predictRows(design: Design, data: Pick<ModelData, 'inputs' | 'rows'>, w: ArrayLike<number>): Float64Array {
   const out = new Float64Array(data.rows);
-  const p = design.p;
-  forEachBlock(design, data, (X, start, m) => {
-    for (let j = 0; j < p; j++) {
-      const wj = w[j];
-      if (wj === 0) continue;
-      const base = j * m;
-      for (let i = 0; i < m; i++) out[start + i] += X[base + i] * wj;
-    }
-  });
+  forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
   return out;
+}
+
+/**
+ * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block, the terms
+ * added one after another in column order (four columns per sweep over the rows, so each
+ * output is loaded and stored once per four columns; the sums are those of the plain loop).
+ * Columns whose weight is 0 are left out.
+ *
+ * @param out output (length >= at + m)
+ * @param at first output index
+ * @param X column-major m x p block
+ * @param m rows
+ * @param w coefficients (length >= p)
+ * @param p columns
+ */
+export function addProducts(out: Float64Array, at: number, X: Float64Array, m: number, w: ArrayLike<number>, p: number): void {
+  let j = 0;
+  for (; j + 3 < p; j += 4) {
+    const w0 = w[j];
+    const w1 = w[j + 1];
+    const w2 = w[j + 2];
+    const w3 = w[j + 3];
+    if (w0 === 0 || w1 === 0 || w2 === 0 || w3 === 0) {
+      for (let q = j; q < j + 4; q++) addColumn(out, at, X, m, w[q], q);
+      continue;
+    }
+    const c0 = j * m;
+    const c1 = c0 + m;
+    const c2 = c1 + m;
+    const c3 = c2 + m;
+    for (let i = 0; i < m; i++) out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
+  }
+  for (; j < p; j++) addColumn(out, at, X, m, w[j], j);
+}
+
+/** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
+function addColumn(out: Float64Array, at: number, X: Float64Array, m: number, wj: number, j: number): void {
+  if (wj === 0) return;
+  const c = j * m;
+  for (let i = 0; i < m; i++) out[at + i] += X[c + i] * wj;
 }

@@ -8,7 +8,7 @@ import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
-import { fitFactor, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
+import { fitFactor, QrAccumulator, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
 import type { RepoReader } from '../repo/types.js';
@@ -20,8 +20,17 @@ import { forEachBlock, predictRows } from './blocks.js';
 import { buildChartData } from './chart-data.js';
 import { loadModelData, type ModelTables } from './load-data.js';
 
+/** Error code of a model that failed through a fault in fitgate rather than in its files. */
+export const INTERNAL_ERROR = 'internal-error';
+
 /** Largest number of design columns: the factor alone takes p^2 doubles. */
 export const MAX_PARAMETERS = 4000;
+
+/**
+ * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
+ * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
+ */
+export const MAX_MAGNITUDE = 1e140;
 
 /** A fitted model with everything checks and reporters read. */
 export interface FittedModel {
@@ -34,16 +43,9 @@ export interface FittedModel {
   holdoutPredictions: Float64Array;
   /** Cross-validation folds of the training rows (from the descriptor's `fit` settings). */
   folds: Folds;
-  /** Cross-validation figures, computed in the fit's passes over the rows. */
-  crossValidation: CrossValidation;
+  /** Cross-validation figures, computed in the fit's passes over the rows; null when they could not be computed. */
+  crossValidation: CrossValidation | null;
 }
-
-/**
- * Scaled condition number above which the refit takes a refinement step (Householder QR is
- * accurate to about cond * eps: below 1e3 every figure is already right to about 1e-13; common
- * practice).
- */
-export const REFINE_FROM_CONDITION = 1e3;
 
 /**
  * Loads, fits and scores one model (no checks).
@@ -74,6 +76,16 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
       { file, line: descriptor.termsLine, key: 'terms' },
     );
   }
+  for (const data of [train, tables.holdout]) {
+    for (let i = 0; i < data.rows; i++) {
+      if (Math.abs(data.y[i]) <= MAX_MAGNITUDE) continue;
+      throw new InputError(
+        'target-range',
+        `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
+        { file, line: descriptor.data.lines.target, key: 'data.target' },
+      );
+    }
+  }
   const targetStats = meanAndSd(train.y, train.rows);
   if (!(targetStats.sd > 0)) {
     throw new InputError(
@@ -89,14 +101,17 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   const builder = new FoldFactorBuilder(p, folds);
   const spread = new ColumnSpread(p);
   forEachBlock(design, train, (X, start, m) => {
+    checkFiniteBlock(design, train, descriptor, X, start, m);
     builder.add(X, train.y, start, m);
     spread.add(X, m);
   });
-  let fit = fitFactor(mergeFactors(builder.factors, p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
-  // One step of iterative refinement from a further pass, only where it pays: plain Householder
-  // QR is accurate to about cond * eps, so below REFINE_FROM_CONDITION it cannot gain a digit
-  // that any figure shows; above REFINE_MAX_CONDITION the step does not converge.
-  if (!fit.rankDeficient && fit.conditionNumberScaled > REFINE_FROM_CONDITION && fit.conditionNumberScaled <= REFINE_MAX_CONDITION) {
+  const full = mergeFactors(builder.factors, p);
+  let fit = fitFactor(full, { ridge: descriptor.fit.ridge, penalised: design.penalised });
+  // One step of iterative refinement from a further pass where it converges. It is kept even for
+  // well-conditioned designs: plain QR is accurate to about cond * eps in norm, but small
+  // coefficients then differ in their last 4-5 digits between row orders (fold-factor merges
+  // versus one sequential factor); the refined solution does not depend on the order.
+  if (!fit.rankDeficient && fit.conditionNumberScaled <= REFINE_MAX_CONDITION) {
     const pass = new RefinementPass(fit);
     forEachBlock(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
     fit = pass.finish();
@@ -104,8 +119,16 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
 
   // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
   // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
-  const trainPredictions = new Float64Array(train.rows);
-  const crossValidation = crossValidate(design, train, fit, folds, { factors: builder.factors, predictions: trainPredictions });
+  let trainPredictions: Float64Array = new Float64Array(train.rows);
+  let crossValidation: CrossValidation | null;
+  try {
+    crossValidation = crossValidate(design, train, fit, folds, { factors: builder.factors, predictions: trainPredictions });
+  } catch {
+    // The cross-validation check will run it again and report why it could not be computed
+    // (as a check that throws does); the fit itself stands.
+    crossValidation = null;
+    trainPredictions = predictRows(design, train, fit.coefficients);
+  }
   builder.factors.length = 0; // the fold factors are no longer needed
   const holdoutPredictions = predictRows(design, holdout, fit.coefficients);
   const trainSums = emptySums();
@@ -147,6 +170,29 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     targetRange: range(train.y, train.rows),
   };
   return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation };
+}
+
+/**
+ * InputError `design-overflow` when a block of the training design holds a value that is not a
+ * finite number within ±{@link MAX_MAGNITUDE}: finite data can still overflow in a term (a huge
+ * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
+ */
+function checkFiniteBlock(design: Design, train: FittedModel['tables']['train'], descriptor: Descriptor, X: Float64Array, start: number, m: number): void {
+  for (let j = 0; j < design.p; j++) {
+    const base = j * m;
+    for (let i = 0; i < m; i++) {
+      const v = X[base + i];
+      if (Math.abs(v) <= MAX_MAGNITUDE) continue;
+      let term = 0;
+      while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j) term += 1;
+      const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
+      throw new InputError(
+        'design-overflow',
+        `design column \`${design.columnNames[j]}\` is ${v} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`,
+        { file: descriptor.file, line, key: 'terms' },
+      );
+    }
+  }
 }
 
 /** Training and hold-out RMSE of the descriptor's shipped coefficients. */
@@ -272,13 +318,14 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     shipped = scoreShipped(model);
   } catch (error) {
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
-    throw error;
+    // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
+    // that every other model still gets its outcome; the code marks it as a bug to report.
+    const detail = error instanceof Error ? error.message : String(error);
+    return errorResult(descriptor.name, descriptor.file, new InputError(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
   }
   // The pipeline's own passes already produced what the shared diagnostics would compute.
-  const memo = new Map<string, unknown>([
-    [SHARED_FOLDS_KEY, model.folds],
-    [SHARED_CROSS_VALIDATION_KEY, model.crossValidation],
-  ]);
+  const memo = new Map<string, unknown>([[SHARED_FOLDS_KEY, model.folds]]);
+  if (model.crossValidation !== null) memo.set(SHARED_CROSS_VALIDATION_KEY, model.crossValidation);
   const context: CheckContext = {
     descriptor,
     design: model.design,

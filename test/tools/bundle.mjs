@@ -10,6 +10,8 @@ const root = fileURLToPath(new URL('../..', import.meta.url));
 const dist = path.join(root, 'dist');
 const ncc = path.join(root, 'node_modules', '@vercel', 'ncc', 'dist', 'ncc', 'cli.js');
 
+// Precompiled schema validators first (src/config/generated/validators.ts).
+execFileSync(process.execPath, [path.join(root, 'test', 'tools', 'gen-validators.mjs')], { cwd: root, stdio: 'inherit' });
 rmSync(dist, { recursive: true, force: true });
 const entries = [
   { src: 'src/main.ts', out: dist },
