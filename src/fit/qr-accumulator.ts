@@ -220,8 +220,42 @@ export class QrAccumulator {
       const tau = (beta - alpha) / beta;
       for (let i = 0; i < mb; i++) C[cj + i] /= v0;
       let k = j + 1;
-      // Two columns at a time: each u_i is loaded once for both (per column the operations and
-      // their order are those of the single-column loop below).
+      // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
+      // operations and their order are those of the single-column loop below).
+      for (; k + 3 < p; k += 4) {
+        const c1 = k * ld;
+        const c2 = c1 + ld;
+        const c3 = c2 + ld;
+        const c4 = c3 + ld;
+        const r1 = k * p + j;
+        let w1 = R[r1];
+        let w2 = R[r1 + p];
+        let w3 = R[r1 + 2 * p];
+        let w4 = R[r1 + 3 * p];
+        for (let i = 0; i < mb; i++) {
+          const u = C[cj + i];
+          w1 += u * C[c1 + i];
+          w2 += u * C[c2 + i];
+          w3 += u * C[c3 + i];
+          w4 += u * C[c4 + i];
+        }
+        const f1 = tau * w1;
+        const f2 = tau * w2;
+        const f3 = tau * w3;
+        const f4 = tau * w4;
+        if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0) continue;
+        R[r1] -= f1;
+        R[r1 + p] -= f2;
+        R[r1 + 2 * p] -= f3;
+        R[r1 + 3 * p] -= f4;
+        for (let i = 0; i < mb; i++) {
+          const u = C[cj + i];
+          C[c1 + i] -= f1 * u;
+          C[c2 + i] -= f2 * u;
+          C[c3 + i] -= f3 * u;
+          C[c4 + i] -= f4 * u;
+        }
+      }
       for (; k + 1 < p; k += 2) {
         const ck = k * ld;
         const ck2 = ck + ld;
