@@ -10067,7 +10067,7 @@ const swing_check = {
     id: 'swing',
     title: 'Swing between samples',
     limitKey: 'swing',
-    description: 'How far the predictions between the training samples leave the band [min y, max y] of the training targets, in units of the band width: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y) over a dense grid. One input: 201 evenly spaced points across the training range plus 8 points inside every gap between neighbouring distinct values (the widest 16,000 gaps when there are more). Several inputs: the same grid along each input with the others at their training medians, plus 8 points on each segment between a training row and its 3 nearest neighbours (Euclidean distance on inputs divided by their standard deviations; at most 2,000 rows, an even stride through the file). A model that interpolates its samples with a high-degree polynomial or narrow radial bumps swings far outside the band between them (Runge phenomenon: Runge 1901, Zeitschrift für Mathematik und Physik 46). 0 when every prediction stays inside the band.',
+    description: 'How far the predictions between the training samples leave the band [min y, max y] of the training targets, in units of the band width: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y) over a dense grid. One input: 201 evenly spaced points across the training range plus 8 points inside every gap between neighbouring distinct values (the widest 4,000 gaps when there are more; above 20,000 rows the gaps of 20,000 rows at an even stride plus the extremes). Several inputs: the same grid along each input with the others at their training medians, plus 8 points on each segment between a training row and its 3 nearest neighbours (Euclidean distance on inputs divided by their standard deviations; at most 1,000 rows, an even stride through the file). A model that interpolates its samples with a high-degree polynomial or narrow radial bumps swings far outside the band between them (Runge phenomenon: Runge 1901, Zeitschrift für Mathematik und Physik 46). 0 when every prediction stays inside the band.',
     advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
     line: (d) => d.termsLine,
     measure(context) {
@@ -11175,7 +11175,7 @@ function gridFromSorted(sorted, n, options, work) {
     const uniform = options.uniform ?? 201;
     const margin = options.margin ?? 0.1;
     const marginPoints = options.marginPoints ?? 40;
-    const maxGaps = options.maxGaps ?? 16000;
+    const maxGaps = options.maxGaps ?? 4000;
     let count = 0;
     for (let i = 0; i < n; i++)
         if (count === 0 || sorted[i] !== sorted[count - 1])
@@ -11399,7 +11399,7 @@ function measureSwing(design, train, coefficients, options = {}) {
     };
     const curves = [];
     for (let c = 0; c < d; c++) {
-        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 100_000, scratch);
+        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
         const sample = scratch.subarray(0, len);
         const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, options, new Float64Array(radixScratch.buffer, 0, len));
         if (grid.inside.length === 0)
@@ -11450,7 +11450,7 @@ function measureSwing(design, train, coefficients, options = {}) {
     // Several inputs: segments between sampled rows and their nearest neighbours.
     let segments = null;
     if (d >= 2 && n >= 2) {
-        const maxRows = options.maxRows ?? 2000;
+        const maxRows = options.maxRows ?? 1000;
         const kNear = options.neighbours ?? 3;
         const perSegment = options.segmentPoints ?? 8;
         const s = Math.min(n, maxRows);

@@ -18,14 +18,14 @@ export interface SwingOptions {
   margin?: number;
   /** Points in each margin. Default 40. */
   marginPoints?: number;
-  /** At most this many gaps get points (the widest); the uniform grid covers the rest. Default 16000. */
+  /** At most this many gaps get points (the widest); the uniform grid covers the rest. Default 4000. */
   maxGaps?: number;
   /**
    * Rows an input's grid is built from: above it, an even stride through the file plus the
-   * input's smallest and largest value (so the grid spans the whole range). Default 100,000.
+   * input's smallest and largest value (so the grid spans the whole range). Default 20,000.
    */
   maxGridRows?: number;
-  /** Several inputs: rows sampled for the neighbour segments. Default 2000. */
+  /** Several inputs: rows sampled for the neighbour segments. Default 1000. */
   maxRows?: number;
   /** Several inputs: nearest neighbours per sampled row. Default 3. */
   neighbours?: number;
@@ -118,7 +118,7 @@ function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions, 
   const uniform = options.uniform ?? 201;
   const margin = options.margin ?? 0.1;
   const marginPoints = options.marginPoints ?? 40;
-  const maxGaps = options.maxGaps ?? 16000;
+  const maxGaps = options.maxGaps ?? 4000;
   let count = 0;
   for (let i = 0; i < n; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
   const distinct = sorted.subarray(0, count);
@@ -318,7 +318,7 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
   };
   const curves: SwingCurve[] = [];
   for (let c = 0; c < d; c++) {
-    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 100_000, scratch);
+    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
     const sample = scratch.subarray(0, len);
     const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, options, new Float64Array(radixScratch.buffer, 0, len));
     if (grid.inside.length === 0) continue;
@@ -365,7 +365,7 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
   // Several inputs: segments between sampled rows and their nearest neighbours.
   let segments: Swing['segments'] = null;
   if (d >= 2 && n >= 2) {
-    const maxRows = options.maxRows ?? 2000;
+    const maxRows = options.maxRows ?? 1000;
     const kNear = options.neighbours ?? 3;
     const perSegment = options.segmentPoints ?? 8;
     const s = Math.min(n, maxRows);

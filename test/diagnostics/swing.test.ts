@@ -59,7 +59,7 @@ describe('swing of a fitted model', () => {
     const b = Float64Array.from({ length: n }, (_, i) => (i * 104729) % 997);
     const rows = { inputs: [a, b], y: Float64Array.from(a, (v, i) => v + b[i]), rows: n };
     const swing = measureSwing(design, rows, fitRows(design, rows).coefficients);
-    expect(swing.segments).toEqual({ rows: 2000, neighbours: 3, pointsPerSegment: 8 });
+    expect(swing.segments).toEqual({ rows: 1000, neighbours: 3, pointsPerSegment: 8 });
     expect(swing.curves.map((c) => c.input)).toEqual(['x1', 'x2']);
     for (const c of swing.curves) expect(c.x.length).toBeLessThanOrEqual(400);
     expect(swing.inside).toBeLessThan(1e-9);
