@@ -11,6 +11,9 @@ import { createDesign } from '../../src/design-matrix.js';
 import { fitFactor, QrAccumulator } from '../../src/fit/index.js';
 import { forEachBlock, predictRows } from '../../src/model/blocks.js';
 
+/** A term as written in a test, its line optional (distributes over the term kinds). */
+export type TermWithoutLine = TermSpec extends infer T ? (T extends TermSpec ? Omit<T, 'line'> : never) : never;
+
 export const repoRoot = fileURLToPath(new URL('../../', import.meta.url));
 
 /** A small table: column names, columns, 1-based file lines (header on line 1). */
@@ -61,7 +64,7 @@ export function defaultLimits(overrides: Record<string, { warn?: number; fail?: 
 
 /** A descriptor built in the test. Terms get lines 10, 11, ...; `fit` line 20, `ridge` line 21. */
 export function descriptor(options: {
-  terms: Array<Omit<TermSpec, 'line'> & { line?: number }>;
+  terms: Array<TermWithoutLine & { line?: number }>;
   target: string;
   ridge?: number;
   intercept?: boolean;
@@ -85,6 +88,7 @@ export function descriptor(options: {
       seed: options.seed ?? 1,
       line: 20,
       ridgeLine: options.ridge !== undefined ? 21 : 20,
+      parameterCount: 'columns',
     },
     coefficients: options.coefficients ?? null,
     coefficientsLine: options.coefficients ? 30 : null,

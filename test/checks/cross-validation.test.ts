@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { runCheck } from '../../src/checks/index.js';
 import crossValidation from '../../src/checks/cross-validation.js';
-import type { TermSpec } from '../../src/config/types.js';
+import type { TermWithoutLine } from './context.js';
 import { buildContext, defaultLimits, descriptor, exampleTable, table } from './context.js';
 
-const poly = (degree: number): Omit<TermSpec, 'line'> => ({ kind: 'polynomial', of: 'depth_m', degree, shift: null, scale: null });
+const poly = (degree: number): TermWithoutLine => ({ kind: 'polynomial', of: 'depth_m', degree, shift: null, scale: null });
 
 describe('cross-validation check', () => {
   it('fails the interpolating degree-9 cellar fit, reports infinite leave-one-out and records the folds', () => {

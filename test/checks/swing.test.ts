@@ -2,12 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { runCheck } from '../../src/checks/index.js';
 import swing from '../../src/checks/swing.js';
 import swingBeyond from '../../src/checks/swing-beyond.js';
-import type { TermSpec } from '../../src/config/types.js';
+import type { TermWithoutLine } from './context.js';
 import { buildContext, defaultLimits, descriptor, exampleTable } from './context.js';
 
-const poly = (of: string, degree: number): Omit<TermSpec, 'line'> => ({ kind: 'polynomial', of, degree, shift: null, scale: null });
+const poly = (of: string, degree: number): TermWithoutLine => ({ kind: 'polynomial', of, degree, shift: null, scale: null });
 
-function run(file: string, target: string, term: Omit<TermSpec, 'line'>) {
+function run(file: string, target: string, term: TermWithoutLine) {
   const d = descriptor({ terms: [term], target, limits: defaultLimits({ swing_beyond: { fail: 1 } }) });
   const context = buildContext(d, exampleTable(`${file}-train.csv`), exampleTable(`${file}-holdout.csv`));
   return { swing: runCheck(swing, context).outcome, beyond: runCheck(swingBeyond, context).outcome };

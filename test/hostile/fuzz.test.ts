@@ -82,9 +82,9 @@ const descriptorText = fc
     train: often(fc.constant('../data/train.csv'), oddPath),
     holdout: often(fc.constant('../data/holdout.csv'), oddPath),
     target: often(fc.constant('y'), column),
-    terms: often(fc.array(term, { minLength: 1, maxLength: 3 }), fc.constant([])),
+    terms: often(fc.array(term, { minLength: 1, maxLength: 3 }), fc.constant<string[]>([])),
     fit: often(fc.constant(null), fc.tuple(fc.option(number), fc.option(number), fc.option(fc.constantFrom('true', 'false', 'yes')), fc.option(fc.constantFrom('shuffled', 'blocks', 'random'))), 3),
-    limits: often(fc.constant([]), fc.array(fc.tuple(limitKey, limitValue), { maxLength: 3 }), 2),
+    limits: often(fc.constant<[string, string][]>([]), fc.array(fc.tuple(limitKey, limitValue), { maxLength: 3 }), 2),
     coefficients: often(fc.constant(null), fc.array(number, { maxLength: 5 }), 5),
   })
   .map((d) => {
@@ -109,7 +109,7 @@ function mutated(text: fc.Arbitrary<string>): fc.Arbitrary<string> {
     fc.tuple(fc.constant('insert' as const), fc.nat(), fc.stringMatching(/^[[\]{}:,\-&*!|>'"%@`\t\n# \\\r\u0000\ufeffa1.]{1,6}$/)),
     fc.tuple(fc.constant('line' as const), fc.nat(), fc.nat()),
   );
-  return fc.tuple(text, often(fc.constant([]), fc.array(edit, { minLength: 1, maxLength: 3 }), 10)).map(([t, edits]) => {
+  return fc.tuple(text, often(fc.constant<Array<['cut', number, number] | ['insert', number, string] | ['line', number, number]>>([]), fc.array(edit, { minLength: 1, maxLength: 3 }), 10)).map(([t, edits]) => {
     let out = t;
     for (const e of edits) {
       if (e[0] === 'cut') {
@@ -137,7 +137,7 @@ const settingsText = fc.option(
         models: often(fc.constant('["models/*.model.yml"]'), fc.constantFrom('["**/*.yml"]', '["nothing/*"]', '["../*"]', '[]', '"x"')),
         caps: often(fc.constant(null), fc.tuple(number, number), 5),
         folds: often(fc.constant(null), number, 5),
-        limits: often(fc.constant([]), fc.array(fc.tuple(limitKey, limitValue), { maxLength: 2 }), 2),
+        limits: often(fc.constant<[string, string][]>([]), fc.array(fc.tuple(limitKey, limitValue), { maxLength: 2 }), 2),
       })
       .map((s) => {
         const lines = ['version: 1', `models: ${s.models}`];
