@@ -16791,7 +16791,13 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     const columns = [...inputs, data.target];
     const maxBytes = settings.caps.maxFileBytes;
     const load = async (path, line, key) => {
-        const table = await readTable(repo, path, { columns, maxBytes });
+        let table;
+        try {
+            table = await readTable(repo, path, { columns, maxBytes });
+        }
+        catch (error) {
+            throw withAsker(error, descriptor);
+        }
         if (table.rows === 0) {
             throw new errors/* InputError */.dz('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
                 file: descriptor.file,
@@ -16813,6 +16819,20 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     const { byName, ...trainData } = train;
     const { byName: _unused, ...holdoutData } = holdout;
     return { train: trainData, holdout: holdoutData, trainColumns: byName };
+}
+/**
+ * A missing column names the descriptor line that asked for it: `data.target`, or the first term
+ * that reads the column. Other errors pass unchanged.
+ */
+function withAsker(error, descriptor) {
+    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+        return error;
+    const column = error.location.key;
+    const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
+    const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
+    if (asker === null)
+        return error;
+    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
 }
 
 ;// CONCATENATED MODULE: ./src/model/evaluate.ts

@@ -37,7 +37,12 @@ export async function loadModelData(
   const columns = [...inputs, data.target];
   const maxBytes = settings.caps.maxFileBytes;
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
-    const table = await readTable(repo, path, { columns, maxBytes });
+    let table;
+    try {
+      table = await readTable(repo, path, { columns, maxBytes });
+    } catch (error) {
+      throw withAsker(error, descriptor);
+    }
     if (table.rows === 0) {
       throw new InputError('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
         file: descriptor.file,
@@ -60,3 +65,17 @@ export async function loadModelData(
   const { byName: _unused, ...holdoutData } = holdout;
   return { train: trainData, holdout: holdoutData, trainColumns: byName };
 }
+
+/**
+ * A missing column names the descriptor line that asked for it: `data.target`, or the first term
+ * that reads the column. Other errors pass unchanged.
+ */
+function withAsker(error: unknown, descriptor: Descriptor): unknown {
+  if (!(error instanceof InputError) || error.code !== 'csv-missing-column' || error.location.key === undefined) return error;
+  const column = error.location.key;
+  const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
+  const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
+  if (asker === null) return error;
+  return new InputError(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
+}
+
