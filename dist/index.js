@@ -39522,9 +39522,9 @@ function createDesign(terms, intercept) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   I: () => (/* binding */ selectKth),
 /* harmony export */   z: () => (/* binding */ columnMedian)
 /* harmony export */ });
-/* unused harmony export selectKth */
 /**
  * Medians of training columns, computed once per column and shared by every reader (swing,
  * charts): selection on a scratch copy, remembered per column array.
@@ -40089,6 +40089,8 @@ var diagnostics_folds = __nccwpck_require__(7694);
 var blocks = __nccwpck_require__(4607);
 // EXTERNAL MODULE: ./src/diagnostics/column-median.ts
 var column_median = __nccwpck_require__(8455);
+// EXTERNAL MODULE: ./src/basis/stats.ts
+var stats = __nccwpck_require__(6029);
 ;// CONCATENATED MODULE: ./src/diagnostics/radix-sort.ts
 /**
  * Sorting of large Float64Array columns: a distribution (bucket) sort when the values are spread
@@ -40248,6 +40250,7 @@ function radixSort(a, scratch) {
 
 
 
+
 /**
  * Excursion of predictions outside the band [lo, hi] in units of its width:
  * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
@@ -40337,7 +40340,7 @@ function widestGaps(distinct, maxGaps, work) {
     const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
     for (let g = 0; g < count; g++)
         widths[g] = distinct[g + 1] - distinct[g];
-    const threshold = swing_select(widths, count - maxGaps);
+    const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
     let above = 0;
     for (let g = 0; g < count; g++)
         if (distinct[g + 1] - distinct[g] > threshold)
@@ -40353,50 +40356,6 @@ function widestGaps(distinct, maxGaps, work) {
     return out;
 }
 /**
- * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
- * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
- */
-function swing_select(a, k) {
-    let lo = 0;
-    let hi = a.length - 1;
-    while (hi > lo) {
-        const mid = (lo + hi) >> 1;
-        // Middle of three as pivot.
-        let x = a[lo];
-        let y = a[mid];
-        let z = a[hi];
-        if (x > y)
-            [x, y] = [y, x];
-        if (y > z)
-            [y, z] = [z, y];
-        if (x > y)
-            [x, y] = [y, x];
-        const pivot = y;
-        let i = lo;
-        let j = hi;
-        while (i <= j) {
-            while (a[i] < pivot)
-                i++;
-            while (a[j] > pivot)
-                j--;
-            if (i <= j) {
-                const t = a[i];
-                a[i] = a[j];
-                a[j] = t;
-                i++;
-                j--;
-            }
-        }
-        if (k <= j)
-            hi = j;
-        else if (k >= i)
-            lo = i;
-        else
-            return a[k];
-    }
-    return a[k];
-}
-/**
  * Copies the values an input's grid is built from into `out` and returns how many: every row
  * when there are at most `max`, else `max - 2` rows at an even stride plus the smallest and the
  * largest value. Large files have gaps far narrower than any swing, so the sample loses nothing
@@ -40407,15 +40366,7 @@ function gridSample(column, n, max, out) {
         out.set(column.subarray(0, n));
         return n;
     }
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (let i = 0; i < n; i++) {
-        const v = column[i];
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
+    const [lo, hi] = (0,stats/* range */.y)(column, n);
     const strided = max - 2;
     for (let t = 0; t < strided; t++)
         out[t] = column[Math.floor((t * n) / strided)];
@@ -42361,6 +42312,7 @@ var column_median = __nccwpck_require__(8455);
 
 
 
+
 /** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
 const MAX_CHART_POINTS = 2000;
 /** Points of the evenly spaced grid along a curve. */
@@ -42397,18 +42349,6 @@ function series(data, predictions, max) {
         fitted: pick(predictions),
         residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
     };
-}
-function minMax(values, n) {
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (let i = 0; i < n; i++) {
-        const v = values[i];
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
-    return [lo, hi];
 }
 /** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
 function curveAlong(model, c, lo, hi, medians, extra) {
@@ -42556,7 +42496,7 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     let fitCurve = null;
     const partials = [];
     for (let c = 0; c < inputs.length; c++) {
-        const [tlo, thi] = minMax(train.inputs[c], train.rows);
+        const [tlo, thi] = (0,stats/* range */.y)(train.inputs[c], train.rows);
         if (!(thi > tlo))
             continue;
         const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;

@@ -5,7 +5,8 @@
 import type { Design } from '../design-matrix.js';
 import { predictRows } from '../model/blocks.js';
 import type { Rows } from './cross-validation.js';
-import { columnMedian } from './column-median.js';
+import { columnMedian, selectKth } from './column-median.js';
+import { range } from '../basis/stats.js';
 import { sortFloat64 } from './radix-sort.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
@@ -161,7 +162,7 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
   if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
   const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
   for (let g = 0; g < count; g++) widths[g] = distinct[g + 1] - distinct[g];
-  const threshold = select(widths, count - maxGaps);
+  const threshold = selectKth(widths, count - maxGaps);
   let above = 0;
   for (let g = 0; g < count; g++) if (distinct[g + 1] - distinct[g] > threshold) above++;
   let ties = maxGaps - above;
@@ -175,43 +176,6 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
 }
 
 /**
- * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
- * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
- */
-function select(a: Float64Array, k: number): number {
-  let lo = 0;
-  let hi = a.length - 1;
-  while (hi > lo) {
-    const mid = (lo + hi) >> 1;
-    // Middle of three as pivot.
-    let x = a[lo];
-    let y = a[mid];
-    let z = a[hi];
-    if (x > y) [x, y] = [y, x];
-    if (y > z) [y, z] = [z, y];
-    if (x > y) [x, y] = [y, x];
-    const pivot = y;
-    let i = lo;
-    let j = hi;
-    while (i <= j) {
-      while (a[i] < pivot) i++;
-      while (a[j] > pivot) j--;
-      if (i <= j) {
-        const t = a[i];
-        a[i] = a[j];
-        a[j] = t;
-        i++;
-        j--;
-      }
-    }
-    if (k <= j) hi = j;
-    else if (k >= i) lo = i;
-    else return a[k];
-  }
-  return a[k];
-}
-
-/**
  * Copies the values an input's grid is built from into `out` and returns how many: every row
  * when there are at most `max`, else `max - 2` rows at an even stride plus the smallest and the
  * largest value. Large files have gaps far narrower than any swing, so the sample loses nothing
@@ -222,13 +186,7 @@ function gridSample(column: Float64Array, n: number, max: number, out: Float64Ar
     out.set(column.subarray(0, n));
     return n;
   }
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (let i = 0; i < n; i++) {
-    const v = column[i];
-    if (v < lo) lo = v;
-    if (v > hi) hi = v;
-  }
+  const [lo, hi] = range(column, n);
   const strided = max - 2;
   for (let t = 0; t < strided; t++) out[t] = column[Math.floor((t * n) / strided)];
   out[strided] = lo;

@@ -10,6 +10,7 @@ import type { ModelData } from '../checks/types.js';
 import { predictRows } from './blocks.js';
 import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result.js';
 import { columnMedian } from '../diagnostics/column-median.js';
+import { range } from '../basis/stats.js';
 import type { FittedModel } from './evaluate.js';
 
 /** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
@@ -151,17 +152,6 @@ function series(data: ModelData, predictions: Float64Array, max: number): PointS
     fitted: pick(predictions),
     residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
   };
-}
-
-function minMax(values: Float64Array, n: number): [number, number] {
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (let i = 0; i < n; i++) {
-    const v = values[i];
-    if (v < lo) lo = v;
-    if (v > hi) hi = v;
-  }
-  return [lo, hi];
 }
 
 /** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
@@ -313,7 +303,7 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
   let fitCurve: FitCurveData | null = null;
   const partials: CurveData[] = [];
   for (let c = 0; c < inputs.length; c++) {
-    const [tlo, thi] = minMax(train.inputs[c], train.rows);
+    const [tlo, thi] = range(train.inputs[c], train.rows);
     if (!(thi > tlo)) continue;
     const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
     const swingCurve = swing?.curve ?? null;
