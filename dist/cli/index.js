@@ -8529,6 +8529,8 @@ var errors = __nccwpck_require__(3916);
 var pipeline = __nccwpck_require__(2321);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __nccwpck_require__(1421);
+// EXTERNAL MODULE: ./src/repo/repo-path.ts
+var repo_path = __nccwpck_require__(3856);
 ;// CONCATENATED MODULE: ./src/repo/glob-pattern.ts
 /**
  * A small glob matcher for readers without a file system (memory, git blobs). It follows
@@ -8536,6 +8538,8 @@ var external_node_child_process_ = __nccwpck_require__(1421);
  * one path segment, `**` spans segments, `[...]` and `{a,b}` work, and wildcards do not
  * match a leading `.` of a segment.
  */
+
+
 /**
  * Compiles a glob pattern to a matcher of repository-relative paths.
  *
@@ -8647,9 +8651,21 @@ function segmentToRegex(segment) {
 function escapeRegex(c) {
     return /[.*+?^${}()|[\]\\/]/.test(c) ? `\\${c}` : c;
 }
+/**
+ * One matcher per pattern of a settings file's `models` list (for readers without a disk: memory
+ * and git commits). `\\` separators become `/` and leading `./` is dropped.
+ * @throws InputError `path-outside` for an absolute pattern or one that starts with `..`
+ */
+function patternMatchers(patterns) {
+    return patterns.map((pattern) => {
+        const p = pattern.replace(/\\/g, '/');
+        if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
+            throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
+        }
+        return globMatcher(p.replace(/^(\.\/)+/, ''));
+    });
+}
 
-// EXTERNAL MODULE: ./src/repo/repo-path.ts
-var repo_path = __nccwpck_require__(3856);
 ;// CONCATENATED MODULE: ./src/repo/git-repository.ts
 /**
  * A {@link RepoReader} over one git commit: files are read from the commit's tree with
@@ -8844,13 +8860,7 @@ function createGitRepository(options) {
                 yield new Uint8Array(Buffer.concat(pending));
         },
         async glob(patterns) {
-            const matchers = patterns.map((pattern) => {
-                const p = pattern.replace(/\\/g, '/');
-                if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
-                    throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-                }
-                return globMatcher(p.replace(/^(\.\/)+/, ''));
-            });
+            const matchers = patternMatchers(patterns);
             const entries = await tree();
             const found = [];
             for (const [p, entry] of entries) {

@@ -8,7 +8,7 @@ import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
-import { fitFactor, QrAccumulator, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
+import { fitFactor, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
 import type { RepoReader } from '../repo/types.js';

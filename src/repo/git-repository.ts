@@ -8,7 +8,7 @@
 import { execFile, spawn } from 'node:child_process';
 import path from 'node:path';
 import { InputError } from '../errors.js';
-import { globMatcher } from './glob-pattern.js';
+import { patternMatchers } from './glob-pattern.js';
 import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
 import type { RepoReader } from './types.js';
 
@@ -206,13 +206,7 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
       if (pendingBytes > 0) yield new Uint8Array(Buffer.concat(pending));
     },
     async glob(patterns) {
-      const matchers = patterns.map((pattern) => {
-        const p = pattern.replace(/\\/g, '/');
-        if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
-          throw new InputError(PATH_OUTSIDE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-        }
-        return globMatcher(p.replace(/^(\.\/)+/, ''));
-      });
+      const matchers = patternMatchers(patterns);
       const entries = await tree();
       const found: string[] = [];
       for (const [p, entry] of entries) {

@@ -4,6 +4,8 @@
  * one path segment, `**` spans segments, `[...]` and `{a,b}` work, and wildcards do not
  * match a leading `.` of a segment.
  */
+import { InputError } from '../errors.js';
+import { PATH_OUTSIDE } from './repo-path.js';
 
 /**
  * Compiles a glob pattern to a matcher of repository-relative paths.
@@ -108,4 +110,19 @@ function segmentToRegex(segment: string): string {
 
 function escapeRegex(c: string): string {
   return /[.*+?^${}()|[\]\\/]/.test(c) ? `\\${c}` : c;
+}
+
+/**
+ * One matcher per pattern of a settings file's `models` list (for readers without a disk: memory
+ * and git commits). `\\` separators become `/` and leading `./` is dropped.
+ * @throws InputError `path-outside` for an absolute pattern or one that starts with `..`
+ */
+export function patternMatchers(patterns: readonly string[]): Array<(path: string) => boolean> {
+  return patterns.map((pattern) => {
+    const p = pattern.replace(/\\/g, '/');
+    if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
+      throw new InputError(PATH_OUTSIDE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
+    }
+    return globMatcher(p.replace(/^(\.\/)+/, ''));
+  });
 }

@@ -4,8 +4,8 @@
  */
 
 import { InputError } from '../errors.js';
-import { globMatcher } from './glob-pattern.js';
-import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
+import { patternMatchers } from './glob-pattern.js';
+import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath } from './repo-path.js';
 import type { RepoReader } from './types.js';
 
 /**
@@ -49,13 +49,7 @@ export function createMemoryRepository(files: Record<string, string | Uint8Array
       for (let start = 0; start < contents.byteLength; start += step) yield contents.slice(start, start + step);
     },
     async glob(patterns) {
-      const matchers = patterns.map((pattern) => {
-        const p = pattern.replace(/\\/g, '/');
-        if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
-          throw new InputError(PATH_OUTSIDE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-        }
-        return globMatcher(p.replace(/^(\.\/)+/, ''));
-      });
+      const matchers = patternMatchers(patterns);
       return [...store.keys()].filter((path) => !isIgnoredPath(path) && matchers.some((m) => m(path))).sort();
     },
   };
