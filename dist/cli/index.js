@@ -11661,6 +11661,12 @@ const wrap = matrix/* wrap */.LV;
  * ml-matrix (Golub-Kahan-Reinsch SVD as in JAMA). The wrapper only ever passes matrices with
  * at least as many rows as columns and sets `autoTranspose`, so ml-matrix's console warning
  * for wide matrices can never reach the log.
+ *
+ * The iteration of that algorithm has no iteration cap and can fail to converge on entries near
+ * the underflow threshold (seen on factors of rank-deficient designs holding values like
+ * 1e-300 and subnormals): the wrapper scales the matrix by a power of two so that its largest
+ * entry is about 1 (exact) and sets entries below 2^-600 of it to zero, far below what can move a
+ * singular value above the rank tolerance (about 1e-16 of the largest), then scales back.
  */
 
 /**
@@ -11675,10 +11681,28 @@ const wrap = matrix/* wrap */.LV;
 function svd(A, m, k) {
     if (k < 1 || m < k)
         throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
+    let amax = 0;
+    for (let i = 0; i < m * k; i++) {
+        const a = Math.abs(A[i]);
+        if (!(a <= amax))
+            amax = a;
+    }
+    if (!Number.isFinite(amax))
+        throw new RangeError('svd: the matrix has a non-finite entry');
+    if (amax === 0)
+        return zeroSvd(m, k);
+    // Scale by a power of two (exact) so that the largest entry is near 1; flush what is left of
+    // entries below 2^-600 to zero.
+    const shift = Math.round(Math.log2(amax));
+    const scale = 2 ** -shift;
+    const floor = 2 ** -600;
     const M = new Matrix(m, k);
-    for (let j = 0; j < k; j++)
-        for (let i = 0; i < m; i++)
-            M.set(i, j, A[j * m + i]);
+    for (let j = 0; j < k; j++) {
+        for (let i = 0; i < m; i++) {
+            const v = A[j * m + i] * scale;
+            M.set(i, j, Math.abs(v) < floor ? 0 : v);
+        }
+    }
     const dec = new SingularValueDecomposition(M, { autoTranspose: true });
     const diag = dec.diagonal;
     const Um = dec.leftSingularVectors;
@@ -11689,13 +11713,23 @@ function svd(A, m, k) {
     const U = new Float64Array(m * k);
     const V = new Float64Array(k * k);
     order.forEach((c, to) => {
-        s[to] = Math.max(0, diag[c]);
+        s[to] = Math.max(0, diag[c]) * 2 ** shift;
         for (let i = 0; i < m; i++)
             U[to * m + i] = Um.get(i, c);
         for (let i = 0; i < k; i++)
             V[to * k + i] = Vm.get(i, c);
     });
     return { s, U, V };
+}
+/** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
+function zeroSvd(m, k) {
+    const U = new Float64Array(m * k);
+    const V = new Float64Array(k * k);
+    for (let c = 0; c < k; c++) {
+        U[c * m + c] = 1;
+        V[c * k + c] = 1;
+    }
+    return { s: new Float64Array(k), U, V };
 }
 
 ;// CONCATENATED MODULE: ./src/fit/factor-solver.ts
@@ -17355,8 +17389,14 @@ function niceTicks(lo, hi, count = 5) {
     const power = 10 ** Math.floor(Math.log10(raw));
     const f = raw / power;
     const step = (f < 1.5 ? 1 : f < 3 ? 2 : f < 7 ? 5 : 10) * power;
+    const first = Math.ceil(lo / step - 1e-9);
+    const last = Math.floor(hi / step + 1e-9);
+    // Far from zero relative to the step (|first| beyond 2^52), the tick index no longer moves by
+    // one per step in double precision: fall back to the two ends rather than loop.
+    if (!Number.isFinite(step) || step <= 0 || !(Math.abs(first) < 2 ** 52 && Math.abs(last) < 2 ** 52) || last - first > 100)
+        return [lo, hi];
     const ticks = [];
-    for (let t = Math.ceil(lo / step - 1e-9); t * step <= hi + step * 1e-9; t++) {
+    for (let t = first; t <= last; t++) {
         const v = t * step;
         ticks.push(Math.abs(v) < step * 1e-9 ? 0 : Number(v.toPrecision(12)));
     }
@@ -17380,8 +17420,10 @@ function linearScale(domain, range, tickCount = 5) {
  * @param range pixel interval
  */
 function logScale(domain, range) {
-    const lo = Math.max(domain[0], Number.MIN_VALUE);
-    const hi = domain[1] > lo ? domain[1] : lo * 10;
+    // Clamp to finite positive numbers: a padded domain can reach Infinity near 1e308, and the
+    // tick loop below must stay bounded.
+    const lo = Math.min(Math.max(domain[0], Number.MIN_VALUE), Number.MAX_VALUE / 10);
+    const hi = Math.min(domain[1] > lo ? domain[1] : lo * 10, Number.MAX_VALUE);
     const a = Math.log10(lo);
     const b = Math.log10(hi);
     const k = (range[1] - range[0]) / (b - a);

@@ -27,3 +27,26 @@ describe('svd', () => {
     expect(() => svd(new Float64Array(0), 0, 0)).toThrow(RangeError);
   });
 });
+
+describe('svd far from 1', () => {
+  it('scales by a power of two: singular values of 1e-300 and 1e200 matrices are exact multiples', () => {
+    // A = c * [[3, 0], [4, 5]]: scaling A by c scales its singular values by c
+    const base = svd(Float64Array.from([3, 4, 0, 5]), 2, 2).s;
+    for (const c of [1e-300, 1e200]) {
+      const s = svd(Float64Array.from([3 * c, 4 * c, 0, 5 * c]), 2, 2).s;
+      for (let i = 0; i < 2; i++) expect(Math.abs(s[i] / c - base[i]) / base[i], `c = ${c}, i = ${i}`).toBeLessThan(1e-14);
+    }
+  });
+
+  it('ends on a factor with subnormal entries (regression: the iteration never converged)', () => {
+    const A = Float64Array.from([2, 0, 0, 1e-300, 1, 0, 5e-324, 2.9e-313, -1e-297]);
+    const { s } = svd(A, 3, 3);
+    expect(s[0]).toBeCloseTo(2, 12);
+    expect(s[1]).toBeCloseTo(1, 12);
+    expect(s[2]).toBeLessThan(1e-290);
+  });
+
+  it('returns zeros for the zero matrix', () => {
+    expect(Array.from(svd(new Float64Array(4), 2, 2).s)).toEqual([0, 0]);
+  });
+});

@@ -50,8 +50,13 @@ export function niceTicks(lo: number, hi: number, count = 5): number[] {
   const power = 10 ** Math.floor(Math.log10(raw));
   const f = raw / power;
   const step = (f < 1.5 ? 1 : f < 3 ? 2 : f < 7 ? 5 : 10) * power;
+  const first = Math.ceil(lo / step - 1e-9);
+  const last = Math.floor(hi / step + 1e-9);
+  // Far from zero relative to the step (|first| beyond 2^52), the tick index no longer moves by
+  // one per step in double precision: fall back to the two ends rather than loop.
+  if (!Number.isFinite(step) || step <= 0 || !(Math.abs(first) < 2 ** 52 && Math.abs(last) < 2 ** 52) || last - first > 100) return [lo, hi];
   const ticks: number[] = [];
-  for (let t = Math.ceil(lo / step - 1e-9); t * step <= hi + step * 1e-9; t++) {
+  for (let t = first; t <= last; t++) {
     const v = t * step;
     ticks.push(Math.abs(v) < step * 1e-9 ? 0 : Number(v.toPrecision(12)));
   }
@@ -77,8 +82,10 @@ export function linearScale(domain: [number, number], range: [number, number], t
  * @param range pixel interval
  */
 export function logScale(domain: [number, number], range: [number, number]): Scale {
-  const lo = Math.max(domain[0], Number.MIN_VALUE);
-  const hi = domain[1] > lo ? domain[1] : lo * 10;
+  // Clamp to finite positive numbers: a padded domain can reach Infinity near 1e308, and the
+  // tick loop below must stay bounded.
+  const lo = Math.min(Math.max(domain[0], Number.MIN_VALUE), Number.MAX_VALUE / 10);
+  const hi = Math.min(domain[1] > lo ? domain[1] : lo * 10, Number.MAX_VALUE);
   const a = Math.log10(lo);
   const b = Math.log10(hi);
   const k = (range[1] - range[0]) / (b - a);

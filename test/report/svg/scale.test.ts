@@ -12,6 +12,10 @@ describe('niceTicks', () => {
     expect(niceTicks(3, 3)).toEqual([3]);
     expect(niceTicks(Number.NaN, 1)).toEqual([Number.NaN]);
   });
+  it('falls back to the two ends far from zero, where the tick index cannot advance in double precision', () => {
+    // step 2e-16 * 1e20 / 5 rounds to a power of ten near 1e4, and 1e20 / 1e4 = 1e16 > 2^52
+    expect(niceTicks(1e20, 1e20 + 32768)).toEqual([1e20, 1e20 + 32768]);
+  });
 });
 
 describe('extent and pad', () => {
@@ -40,5 +44,14 @@ describe('scales', () => {
     const s = logScale([1e-3, 1e22], [0, 100]);
     expect(s.ticks.length).toBeLessThanOrEqual(9);
     expect(s.ticks[0]).toBe(1e-3);
+  });
+});
+
+describe('logScale near the largest double', () => {
+  it('keeps its ticks finite and few when the domain reaches Infinity (regression: an endless loop found by fuzzing)', () => {
+    const s = logScale([1e-20, Infinity], [0, 100]);
+    expect(s.ticks.length).toBeGreaterThan(0);
+    expect(s.ticks.length).toBeLessThanOrEqual(9);
+    expect(s.ticks.every((t) => Number.isFinite(t))).toBe(true);
   });
 });
