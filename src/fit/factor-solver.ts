@@ -43,7 +43,7 @@ export function scaledSpectrum(R: Float64Array, p: number, rows: number): Scaled
     const div = d > 0 ? d : 1;
     for (let i = 0; i <= j; i++) scaled[j * p + i] = R[j * p + i] / div;
   }
-  const { s, V } = svd(scaled, p, p);
+  const { s, V } = svd(scaled, p, p, 'right');
   const tolerance = Math.max(rows, p) * Number.EPSILON * s[0];
   let rank = 0;
   while (rank < p && s[rank] > tolerance) rank++;
@@ -57,7 +57,7 @@ export function scaledSpectrum(R: Float64Array, p: number, rows: number): Scaled
  * @param p columns (>= 1)
  */
 export function rawSingularValues(R: Float64Array, p: number): Float64Array {
-  return svd(R, p, p).s;
+  return svd(R, p, p, 'none').s;
 }
 
 /**

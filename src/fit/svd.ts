@@ -1,26 +1,32 @@
 /**
- * Singular value decomposition of the small p x p matrices of the fitting engine, through
- * ml-matrix (Golub-Kahan-Reinsch SVD as in JAMA). The wrapper only ever passes matrices with
- * at least as many rows as columns and sets `autoTranspose`, so ml-matrix's console warning
- * for wide matrices can never reach the log.
+ * Singular value decomposition of the small p x p matrices of the fitting engine, by one-sided
+ * Jacobi rotations (Hestenes 1958; Demmel & Veselić, "Jacobi's method is more accurate than QR",
+ * SIAM J. Matrix Anal. Appl. 13(4), 1992): the columns of A are rotated pairwise until they are
+ * mutually orthogonal; their norms are then the singular values, the normalised columns the left
+ * singular vectors, and the accumulated rotations the right singular vectors.
  *
- * The iteration of that algorithm has no iteration cap and can fail to converge on entries near
- * the underflow threshold (seen on factors of rank-deficient designs holding values like
- * 1e-300 and subnormals): the wrapper scales the matrix by a power of two so that its largest
- * entry is about 1 (exact) and sets entries below 2^-600 of it to zero, far below what can move a
- * singular value above the rank tolerance (about 1e-16 of the largest), then scales back.
+ * Why not ml-matrix's SVD (Golub-Kahan-Reinsch as in JAMA): its iteration has no cap, and on
+ * factors of rank-deficient designs (all-zero and duplicate columns next to values near the
+ * underflow threshold) it was seen to run for minutes without ending. Jacobi sweeps converge
+ * quadratically and are capped here (60 sweeps); the matrix is scaled by a power of two (exact)
+ * so that its largest entry is about 1, and entries below 2^-600 of it are set to zero.
  */
-import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 
 /** A thin SVD A = U diag(s) V^T of an m x k matrix (m >= k), column-major arrays. */
 export interface Svd {
   /** Singular values, descending, length k. */
   s: Float64Array;
-  /** Left singular vectors, m x k column-major (U[c*m + r]). */
+  /** Left singular vectors, m x k column-major (U[c*m + r]); empty when not asked for. */
   U: Float64Array;
-  /** Right singular vectors, k x k column-major (V[c*k + r]): column c belongs to s[c]. */
+  /** Right singular vectors, k x k column-major (V[c*k + r]): column c belongs to s[c]; empty when not asked for. */
   V: Float64Array;
 }
+
+/** Which singular vectors to return (the work is the same; this only saves copies). */
+export type SvdVectors = 'both' | 'right' | 'none';
+
+/** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
+export const MAX_SWEEPS = 60;
 
 /**
  * SVD of a column-major m x k matrix with m >= k >= 1.
@@ -28,10 +34,11 @@ export interface Svd {
  * @param A column-major m x k (A[j*m + i])
  * @param m rows
  * @param k columns (at most m)
+ * @param vectors which singular vectors to return; default both
  * @returns singular values in descending order with the matching vectors
- * @throws RangeError when m < k or k < 1
+ * @throws RangeError when m < k or k < 1, or when A has a non-finite entry
  */
-export function svd(A: Float64Array, m: number, k: number): Svd {
+export function svd(A: Float64Array, m: number, k: number, vectors: SvdVectors = 'both'): Svd {
   if (k < 1 || m < k) throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
   let amax = 0;
   for (let i = 0; i < m * k; i++) {
@@ -39,43 +46,88 @@ export function svd(A: Float64Array, m: number, k: number): Svd {
     if (!(a <= amax)) amax = a;
   }
   if (!Number.isFinite(amax)) throw new RangeError('svd: the matrix has a non-finite entry');
-  if (amax === 0) return zeroSvd(m, k);
-  // Scale by a power of two (exact) so that the largest entry is near 1; flush what is left of
-  // entries below 2^-600 to zero.
+  if (amax === 0) return zeroSvd(m, k, vectors);
   const shift = Math.round(Math.log2(amax));
   const scale = 2 ** -shift;
   const floor = 2 ** -600;
-  const M = new Matrix(m, k);
-  for (let j = 0; j < k; j++) {
-    for (let i = 0; i < m; i++) {
-      const v = A[j * m + i] * scale;
-      M.set(i, j, Math.abs(v) < floor ? 0 : v);
-    }
+  const W = new Float64Array(m * k);
+  for (let i = 0; i < m * k; i++) {
+    const v = A[i] * scale;
+    W[i] = Math.abs(v) < floor ? 0 : v;
   }
-  const dec = new SingularValueDecomposition(M, { autoTranspose: true });
-  const diag = dec.diagonal;
-  const Um = dec.leftSingularVectors;
-  const Vm = dec.rightSingularVectors;
-  // Sort descending (ml-matrix already does; this keeps the contract independent of it).
-  const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => diag[b] - diag[a]);
-  const s = new Float64Array(k);
-  const U = new Float64Array(m * k);
   const V = new Float64Array(k * k);
+  for (let c = 0; c < k; c++) V[c * k + c] = 1;
+
+  // One-sided Jacobi: rotate column pairs (p, q) until every pair is orthogonal to eps.
+  const eps = Number.EPSILON;
+  for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
+    let rotated = false;
+    for (let p = 0; p < k - 1; p++) {
+      const cp = p * m;
+      for (let q = p + 1; q < k; q++) {
+        const cq = q * m;
+        let alpha = 0;
+        let beta = 0;
+        let gamma = 0;
+        for (let i = 0; i < m; i++) {
+          const x = W[cp + i];
+          const y = W[cq + i];
+          alpha += x * x;
+          beta += y * y;
+          gamma += x * y;
+        }
+        if (gamma === 0 || Math.abs(gamma) <= eps * Math.sqrt(alpha * beta)) continue;
+        rotated = true;
+        // Rotation angle that zeroes the (p, q) entry of W^T W (Rutishauser's formulas).
+        const zeta = (beta - alpha) / (2 * gamma);
+        const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
+        const c = 1 / Math.sqrt(1 + t * t);
+        const s = c * t;
+        for (let i = 0; i < m; i++) {
+          const x = W[cp + i];
+          const y = W[cq + i];
+          W[cp + i] = c * x - s * y;
+          W[cq + i] = s * x + c * y;
+        }
+        const vp = p * k;
+        const vq = q * k;
+        for (let i = 0; i < k; i++) {
+          const x = V[vp + i];
+          const y = V[vq + i];
+          V[vp + i] = c * x - s * y;
+          V[vq + i] = s * x + c * y;
+        }
+      }
+    }
+    if (!rotated) break;
+  }
+
+  // Singular values are the column norms; sort descending.
+  const norms = new Float64Array(k);
+  for (let c = 0; c < k; c++) {
+    let ss = 0;
+    for (let i = 0; i < m; i++) ss += W[c * m + i] ** 2;
+    norms[c] = Math.sqrt(ss);
+  }
+  const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
+  const s = new Float64Array(k);
+  const U = new Float64Array(vectors === 'both' ? m * k : 0);
+  const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
   order.forEach((c, to) => {
-    s[to] = Math.max(0, diag[c]) * 2 ** shift;
-    for (let i = 0; i < m; i++) U[to * m + i] = Um.get(i, c);
-    for (let i = 0; i < k; i++) V[to * k + i] = Vm.get(i, c);
+    s[to] = norms[c] * 2 ** shift;
+    if (U.length > 0 && norms[c] > 0) for (let i = 0; i < m; i++) U[to * m + i] = W[c * m + i] / norms[c];
+    if (Vout.length > 0) for (let i = 0; i < k; i++) Vout[to * k + i] = V[c * k + i];
   });
-  return { s, U, V };
+  return { s, U, V: Vout };
 }
 
 /** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
-function zeroSvd(m: number, k: number): Svd {
-  const U = new Float64Array(m * k);
-  const V = new Float64Array(k * k);
+function zeroSvd(m: number, k: number, vectors: SvdVectors): Svd {
+  const U = new Float64Array(vectors === 'both' ? m * k : 0);
+  const V = new Float64Array(vectors === 'none' ? 0 : k * k);
   for (let c = 0; c < k; c++) {
-    U[c * m + c] = 1;
-    V[c * k + c] = 1;
+    if (U.length > 0) U[c * m + c] = 1;
+    if (V.length > 0) V[c * k + c] = 1;
   }
   return { s: new Float64Array(k), U, V };
 }

@@ -23,8 +23,12 @@ import { loadModelData, type ModelTables } from './load-data.js';
 /** Error code of a model that failed through a fault in fitgate rather than in its files. */
 export const INTERNAL_ERROR = 'internal-error';
 
-/** Largest number of design columns: the factor alone takes p^2 doubles. */
-export const MAX_PARAMETERS = 4000;
+/**
+ * Largest number of design columns. The diagnostics take singular value decompositions of p x p
+ * factors (several per model and fold when the design is rank deficient), whose cost grows with
+ * p^3: at 200 columns each takes about 0.4 s here, so a pull request cannot make a run take hours.
+ */
+export const MAX_PARAMETERS = 200;
 
 /**
  * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
@@ -65,7 +69,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   if (p > MAX_PARAMETERS) {
     throw new InputError(
       'too-many-parameters',
-      `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the factor takes p^2 numbers); use fewer radial centres or a lower degree`,
+      `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`,
       { file, line: descriptor.termsLine, key: 'terms' },
     );
   }
