@@ -33373,7 +33373,7 @@ const swing_beyond_check = {
     id: 'swing-beyond',
     title: 'Swing beyond the samples',
     limitKey: 'swing_beyond',
-    description: 'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; off by default. The chart data are in the `swing` outcome.',
+    description: 'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; by default it only warns (above 1 band width). The chart data are in the `swing` outcome.',
     advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
     line: (d) => d.termsLine,
     measure(context) {
@@ -34831,20 +34831,8 @@ function svd(A, m, k, vectors = 'both') {
                 const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
                 const c = 1 / Math.sqrt(1 + t * t);
                 const s = c * t;
-                for (let i = 0; i < m; i++) {
-                    const x = W[cp + i];
-                    const y = W[cq + i];
-                    W[cp + i] = c * x - s * y;
-                    W[cq + i] = s * x + c * y;
-                }
-                const vp = p * k;
-                const vq = q * k;
-                for (let i = 0; i < k; i++) {
-                    const x = V[vp + i];
-                    const y = V[vq + i];
-                    V[vp + i] = c * x - s * y;
-                    V[vq + i] = s * x + c * y;
-                }
+                rotate(W, cp, cq, m, c, s);
+                rotate(V, p * k, q * k, k, c, s);
             }
         }
         if (!rotated)
@@ -34872,6 +34860,15 @@ function svd(A, m, k, vectors = 'both') {
                 Vout[to * k + i] = V[c * k + i];
     });
     return { s, U, V: Vout };
+}
+/** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
+function rotate(M, a, b, n, c, s) {
+    for (let i = 0; i < n; i++) {
+        const x = M[a + i];
+        const y = M[b + i];
+        M[a + i] = c * x - s * y;
+        M[b + i] = s * x + c * y;
+    }
 }
 /** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
 function zeroSvd(m, k, vectors) {

@@ -12,7 +12,7 @@ const check: Check = {
   title: 'Swing beyond the samples',
   limitKey: 'swing_beyond',
   description:
-    'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; off by default. The chart data are in the `swing` outcome.',
+    'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; by default it only warns (above 1 band width). The chart data are in the `swing` outcome.',
   advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
   line: (d) => d.termsLine,
   measure(context) {

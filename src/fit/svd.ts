@@ -83,20 +83,8 @@ export function svd(A: Float64Array, m: number, k: number, vectors: SvdVectors =
         const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
         const c = 1 / Math.sqrt(1 + t * t);
         const s = c * t;
-        for (let i = 0; i < m; i++) {
-          const x = W[cp + i];
-          const y = W[cq + i];
-          W[cp + i] = c * x - s * y;
-          W[cq + i] = s * x + c * y;
-        }
-        const vp = p * k;
-        const vq = q * k;
-        for (let i = 0; i < k; i++) {
-          const x = V[vp + i];
-          const y = V[vq + i];
-          V[vp + i] = c * x - s * y;
-          V[vq + i] = s * x + c * y;
-        }
+        rotate(W, cp, cq, m, c, s);
+        rotate(V, p * k, q * k, k, c, s);
       }
     }
     if (!rotated) break;
@@ -119,6 +107,16 @@ export function svd(A: Float64Array, m: number, k: number, vectors: SvdVectors =
     if (Vout.length > 0) for (let i = 0; i < k; i++) Vout[to * k + i] = V[c * k + i];
   });
   return { s, U, V: Vout };
+}
+
+/** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
+function rotate(M: Float64Array, a: number, b: number, n: number, c: number, s: number): void {
+  for (let i = 0; i < n; i++) {
+    const x = M[a + i];
+    const y = M[b + i];
+    M[a + i] = c * x - s * y;
+    M[b + i] = s * x + c * y;
+  }
 }
 
 /** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
