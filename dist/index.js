@@ -32810,11 +32810,14 @@ function subsample(data, m) {
  *
  * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
  *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
- *   current lambda; simplest = largest. The designs do not change, so the per-fold factors are
- *   built once and each lambda costs k small solves; one scoring pass serves every lambda.
+ *   current lambda; simplest = largest. The design does not change, so the model's per-fold
+ *   factors serve every lambda: k small solves per lambda, and each fold's squared errors come
+ *   from its own factor ({@link outOfFoldErrorsFromFactors}), with no pass over the rows. Every
+ *   row is used (no subsample).
  * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
  * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
- *   Degree and width settings each build their own design: two passes over the rows each.
+ *   Degree and width settings each build their own design: two passes over the rows each, on
+ *   an even-stride subsample above `maxRows` rows.
  *
  * @param descriptor the model (fit options, term lines)
  * @param design the fitted design
@@ -32828,7 +32831,8 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
     if (target === null || train.rows < 2)
         return null;
     const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
-    const subsampled = train.rows > maxRows;
+    // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
+    const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
     const rows = subsampled ? subsample(train, maxRows) : train;
     const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
@@ -32852,9 +32856,16 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         for (let t = 3; t >= -6; t -= 0.5)
             grid.push(scale * 10 ** t);
         const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
-        const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(design, rows, folds));
-        const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, lambdas, design.penalised);
-        const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(design, rows, folds, coefficients);
+        let factors;
+        if (options.factors) {
+            factors = options.factors();
+        }
+        else {
+            const perFold = (0,cross_validation/* foldFactors */.Y6)(design, rows, folds);
+            factors = { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
+        }
+        const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors.complements, lambdas, design.penalised);
+        const { sse } = (0,cross_validation/* outOfFoldErrorsFromFactors */.un)(factors.perFold, coefficients);
         lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
     }
     else {
@@ -32947,7 +32958,10 @@ function jsonMetrics(record) {
     return out;
 }
 
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 2 modules
+var shared = __nccwpck_require__(4385);
 ;// CONCATENATED MODULE: ./src/checks/complexity.ts
+
 
 
 
@@ -32956,11 +32970,12 @@ const complexity_check = {
     id: 'complexity',
     title: 'Simpler setting',
     limitKey: 'complexity',
-    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. Above 50,000 training rows the sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
+    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. A ridge sweep uses every training row; above 50,000 training rows a degree or width sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
     advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
     line: (d) => d.fit.line,
-    measure({ descriptor, design, train, fit }) {
-        const sweep = sweepComplexity(descriptor, design, train, fit);
+    measure(context) {
+        const { descriptor, design, train, fit } = context;
+        const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => (0,shared/* sharedFoldFactors */.zf)(context) });
         if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
             return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
         }
@@ -33039,8 +33054,6 @@ const conditioning_check = {
 
 // EXTERNAL MODULE: ./src/metrics/regression.ts
 var regression = __nccwpck_require__(1788);
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 2 modules
-var shared = __nccwpck_require__(4385);
 ;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
 
 
@@ -33507,6 +33520,371 @@ function runCheck(check, context) {
 
 /***/ }),
 
+/***/ 8706:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   CA: () => (/* binding */ emptyError),
+/* harmony export */   L6: () => (/* binding */ raggedError),
+/* harmony export */   NX: () => (/* binding */ planRequest),
+/* harmony export */   W4: () => (/* binding */ cellNumber),
+/* harmony export */   _I: () => (/* binding */ DEFAULT_CHUNK_ROWS),
+/* harmony export */   fS: () => (/* binding */ DEFAULT_MAX_BYTES),
+/* harmony export */   j7: () => (/* binding */ planColumns),
+/* harmony export */   vB: () => (/* binding */ ChunkBuilder)
+/* harmony export */ });
+/* unused harmony exports DECIMAL_NUMBER, cellError */
+/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3916);
+/**
+ * The rules both CSV paths share, kept in one place so that the fast path and the general
+ * path cannot drift apart: what a number cell may look like, how the header is checked,
+ * the exact error each problem raises, and how rows are gathered into chunks.
+ */
+
+/** Rows per chunk when the caller does not say. */
+const DEFAULT_CHUNK_ROWS = 65536;
+/** Size cap in bytes when the caller does not say (512 MiB). */
+const DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
+/** How many header names an error message lists before cutting the list. */
+const MAX_NAMES_LISTED = 20;
+/** How many characters of a bad cell an error message quotes. */
+const MAX_CELL_QUOTED = 40;
+/**
+ * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
+ * (empty text, `Infinity`, hexadecimal / binary / octal prefixes): optional sign, digits
+ * with an optional point (`1`, `1.`, `.5`, `1.5`), optional exponent (`e-3`, `E+05`).
+ * Source: ECMA-262 `StrDecimalLiteral` (section "ToNumber Applied to the String Type").
+ */
+const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+/**
+ * Collapses repeated names in a column request.
+ * @param columns names as the caller gave them
+ */
+function planRequest(columns) {
+    const distinct = [];
+    const slotOfColumn = [];
+    for (const name of columns) {
+        let slot = distinct.indexOf(name);
+        if (slot === -1) {
+            slot = distinct.length;
+            distinct.push(name);
+        }
+        slotOfColumn.push(slot);
+    }
+    return { columns, distinct, slotOfColumn };
+}
+/**
+ * Checks the header and maps requested columns to fields.
+ * Throws InputError `csv-header` for a repeated name (both 1-based positions),
+ * `csv-missing-column` for requested names the header lacks (listing up to 20 names it has).
+ *
+ * @param file repository-relative path, for messages
+ * @param header names as read (already trimmed)
+ * @param headerLine 1-based line of the header
+ * @param request the distinct requested columns
+ */
+function planColumns(file, header, headerLine, request) {
+    const position = new Map();
+    header.forEach((name, i) => {
+        const earlier = position.get(name);
+        if (earlier !== undefined) {
+            throw new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-header', `the header names column ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)} twice, at positions ${earlier + 1} and ${i + 1}; expected unique column names`, { file, line: headerLine, key: name });
+        }
+        position.set(name, i);
+    });
+    const missing = request.distinct.filter((name) => !position.has(name));
+    if (missing.length > 0) {
+        const listed = header.slice(0, MAX_NAMES_LISTED).map((name) => (0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED));
+        const more = header.length > MAX_NAMES_LISTED ? `, … (${header.length - MAX_NAMES_LISTED} more)` : '';
+        const wanted = missing.map((name) => (0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)).join(', ');
+        throw new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-missing-column', `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`, { file, line: headerLine, key: missing[0] });
+    }
+    const slotOfField = new Int32Array(header.length).fill(-1);
+    const fieldOfSlot = new Int32Array(request.distinct.length);
+    request.distinct.forEach((name, slot) => {
+        const field = position.get(name);
+        slotOfField[field] = slot;
+        fieldOfSlot[slot] = field;
+    });
+    return { header, headerLine, slotOfField, fieldOfSlot };
+}
+/**
+ * Reads one cell of a requested column as the general path does: trims white space (as
+ * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
+ * value is finite. Anything else throws InputError `csv-cell`.
+ *
+ * @param cell the field text (quotes already removed)
+ * @param file repository-relative path, for messages
+ * @param line 1-based physical line of the row
+ * @param column the column's header name
+ */
+function cellNumber(cell, file, line, column) {
+    const text = cell.trim();
+    if (DECIMAL_NUMBER.test(text)) {
+        const value = Number(text);
+        if (Number.isFinite(value))
+            return value;
+    }
+    throw cellError(cell, file, line, column);
+}
+/** The `csv-cell` error for a cell that is not a finite decimal number. */
+function cellError(cell, file, line, column) {
+    const text = cell.trim();
+    let why;
+    if (text === '')
+        why = 'the cell is empty';
+    else if (DECIMAL_NUMBER.test(text))
+        why = `got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
+    else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text))
+        why = `got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
+    else
+        why = `got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}`;
+    return new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`, { file, line, key: column });
+}
+/** The `csv-ragged` error for a row whose field count differs from the header's. */
+function raggedError(file, line, expected, actual) {
+    return new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-ragged', `the row has ${actual} field${actual === 1 ? '' : 's'}; expected ${expected}, as many as the header`, { file, line });
+}
+/** The `csv-empty` error for a file without a header row. */
+function emptyError(file) {
+    return new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-empty', 'the file has no header row; expected a first line of comma-separated column names', {
+        file,
+    });
+}
+/** First buffer size of a chunk; buffers double from here up to the chunk size. */
+const FIRST_CAPACITY = 4096;
+/**
+ * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
+ * Parsers write `slots[s][row]` and `lines[row]` directly, then advance `row`; when `row`
+ * reaches `capacity` they call {@link ChunkBuilder.full}, which grows the buffers (doubling)
+ * or hands out a chunk, and reload `slots`, `lines`, `row` and `capacity`.
+ */
+class ChunkBuilder {
+    request;
+    chunkRows;
+    /** Filled chunks not yet handed out. */
+    ready = [];
+    /** One buffer per distinct requested column, length `capacity`. */
+    slots = [];
+    /** 1-based physical line of each row, length `capacity`. */
+    lines = new Int32Array(0);
+    /** Rows written in the current buffers. */
+    row = 0;
+    /** Rows the current buffers hold. */
+    capacity = 0;
+    /**
+     * @param request the requested columns (a chunk lists them in the asked order)
+     * @param chunkRows rows per chunk
+     */
+    constructor(request, chunkRows) {
+        this.request = request;
+        this.chunkRows = chunkRows;
+        this.fresh();
+    }
+    /** Advances one row (for parsers that do not track `row` themselves). */
+    endRow() {
+        this.row++;
+        if (this.row === this.capacity)
+            this.full();
+    }
+    /** Called when `row === capacity`: hands out a chunk, or doubles the buffers. */
+    full() {
+        if (this.row >= this.chunkRows) {
+            this.flush();
+            return;
+        }
+        const capacity = Math.min(this.chunkRows, this.capacity * 2);
+        this.slots = this.slots.map((old) => {
+            const grown = new Float64Array(capacity);
+            grown.set(old);
+            return grown;
+        });
+        const lines = new Int32Array(capacity);
+        lines.set(this.lines);
+        this.lines = lines;
+        this.capacity = capacity;
+    }
+    /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
+    flush() {
+        const rows = this.row;
+        if (rows === 0)
+            return;
+        const exact = rows === this.capacity;
+        const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
+        const lines = exact ? this.lines : this.lines.slice(0, rows);
+        const chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
+        if (exact)
+            this.#buffersOf.set(chunk, { slots, lines });
+        this.ready.push(chunk);
+        this.fresh();
+    }
+    /**
+     * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
+     * reused for a later chunk (no allocation per chunk when the reader copies each chunk away
+     * before asking for the next). Chunks of another size are ignored.
+     *
+     * @param chunk a chunk from {@link take}; must not be read afterwards
+     */
+    recycle(chunk) {
+        const buffers = this.#buffersOf.get(chunk);
+        if (buffers === undefined)
+            return;
+        this.#buffersOf.delete(chunk);
+        this.#spare.push(buffers);
+    }
+    #buffersOf = new WeakMap();
+    #spare = [];
+    /** Takes the chunks handed out so far. */
+    take() {
+        return this.ready.splice(0, this.ready.length);
+    }
+    /** New buffers, as large as the last ones (a file that filled one chunk likely fills more). */
+    fresh() {
+        if (this.capacity === 0)
+            this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
+        this.row = 0;
+        while (this.#spare.length > 0) {
+            const spare = this.#spare.pop();
+            if (spare.lines.length !== this.capacity)
+                continue;
+            this.slots = spare.slots;
+            this.lines = spare.lines;
+            return;
+        }
+        this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
+        this.lines = new Int32Array(this.capacity);
+    }
+}
+
+
+/***/ }),
+
+/***/ 5383:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   D: () => (/* binding */ lineBlocks),
+/* harmony export */   S: () => (/* binding */ encodingError)
+/* harmony export */ });
+/* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4573);
+/* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_buffer__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3916);
+/**
+ * Turns a file's byte pieces (as a {@link RepoReader} streams them, split anywhere) into
+ * blocks that end right after a line feed, so that no line and no UTF-8 character is ever
+ * split between two blocks. Both CSV paths read through this one door, which also drops a
+ * UTF-8 byte-order mark and stops at the first line that is not UTF-8 (the reader, which
+ * counts lines, then throws {@link encodingError}).
+ */
+
+
+const LF = 10;
+const BOM = [0xef, 0xbb, 0xbf];
+/**
+ * Streams `pieces` as blocks of whole lines, checked to be UTF-8.
+ *
+ * A leading UTF-8 byte-order mark is dropped (line 1 stays line 1). When a line holds bytes
+ * that are not UTF-8, the lines before it are still yielded, then a block with `badUtf8`
+ * ends the stream: so errors always surface in file order, whatever the piece sizes.
+ * An empty file yields nothing. No piece is copied except the line that straddles two pieces.
+ *
+ * @param pieces the file's bytes in pieces of any size (an empty piece is allowed)
+ */
+async function* lineBlocks(pieces) {
+    let pending = [];
+    let pendingBytes = 0;
+    let first = true;
+    /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8). */
+    function* emit(bytes, final) {
+        if (first) {
+            first = false;
+            if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2])
+                bytes = bytes.subarray(3);
+            else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
+                yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
+                return false;
+            }
+        }
+        if (bytes.length === 0)
+            return true;
+        const good = utf8Prefix(bytes);
+        if (good === bytes.length) {
+            yield { bytes, final, badUtf8: false, utf16: false };
+            return true;
+        }
+        if (good > 0)
+            yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, utf16: false };
+        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: false };
+        return false;
+    }
+    for await (const piece of pieces) {
+        if (piece.length === 0)
+            continue;
+        const firstCut = piece.indexOf(LF) + 1;
+        if (firstCut === 0) {
+            pending.push(piece);
+            pendingBytes += piece.length;
+            continue;
+        }
+        // The line that straddles the previous pieces and this one, then this piece's whole lines.
+        const lastCut = piece.lastIndexOf(LF) + 1;
+        if (pendingBytes > 0) {
+            const joined = concat([...pending, piece.subarray(0, firstCut)], pendingBytes + firstCut);
+            if (!(yield* emit(joined, false)))
+                return;
+            if (lastCut > firstCut && !(yield* emit(piece.subarray(firstCut, lastCut), false)))
+                return;
+        }
+        else if (!(yield* emit(piece.subarray(0, lastCut), false)))
+            return;
+        pending = lastCut < piece.length ? [piece.subarray(lastCut)] : [];
+        pendingBytes = piece.length - lastCut;
+    }
+    if (pendingBytes > 0)
+        yield* emit(concat(pending, pendingBytes), true);
+}
+function concat(parts, total) {
+    if (parts.length === 1)
+        return parts[0];
+    const out = new Uint8Array(total);
+    let at = 0;
+    for (const part of parts) {
+        out.set(part, at);
+        at += part.length;
+    }
+    return out;
+}
+/** Length of the longest run of whole UTF-8 lines at the start of `bytes`. */
+function utf8Prefix(bytes) {
+    if ((0,node_buffer__WEBPACK_IMPORTED_MODULE_0__.isUtf8)(bytes))
+        return bytes.length;
+    let start = 0;
+    while (start < bytes.length) {
+        const lf = bytes.indexOf(LF, start);
+        const end = lf === -1 ? bytes.length : lf + 1;
+        if (!(0,node_buffer__WEBPACK_IMPORTED_MODULE_0__.isUtf8)(bytes.subarray(start, end)))
+            break;
+        start = end;
+    }
+    return start;
+}
+/**
+ * The `csv-encoding` error for a line that is not UTF-8.
+ * @param file repository-relative path
+ * @param line 1-based line holding the bad bytes
+ * @param utf16 the file starts with a UTF-16 byte-order mark
+ */
+function encodingError(file, line, utf16) {
+    const hint = utf16 ? ' (the file looks like UTF-16)' : '';
+    return new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-encoding', `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`, {
+        file,
+        line,
+    });
+}
+
+
+/***/ }),
+
 /***/ 1927:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -33664,7 +34042,8 @@ function selectKth(a, k) {
 /* harmony export */   Yo: () => (/* binding */ outOfFoldErrors),
 /* harmony export */   Z4: () => (/* binding */ mergeFactors),
 /* harmony export */   Zd: () => (/* binding */ complementFactors),
-/* harmony export */   dn: () => (/* binding */ complementCoefficients)
+/* harmony export */   dn: () => (/* binding */ complementCoefficients),
+/* harmony export */   un: () => (/* binding */ outOfFoldErrorsFromFactors)
 /* harmony export */ });
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6933);
@@ -33813,6 +34192,39 @@ function complementFactors(factors) {
     return out;
 }
 /**
+ * Squared out-of-fold errors from the fold factors alone, without a pass over the rows: with fold
+ * f's rows X_f = Q_f [R_f; 0] and Q_f^T y_f = [qty_f; r_f],
+ *
+ *     ||y_f - X_f w||^2 = ||qty_f - R_f w||^2 + ||r_f||^2
+ *
+ * for any w, because Q_f is orthogonal (Golub & Van Loan, Matrix Computations, 4th ed., sec.
+ * 5.3.3, the least-squares residual from a QR factorisation). Both terms are sums of squares, so
+ * nothing cancels; it holds whatever the fold's rank. Costs p^2 per fold and coefficient set.
+ *
+ * @param perFold per-fold factors (fold f's rows only)
+ * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
+ * @returns sse[s][f], as {@link outOfFoldErrors} gives them from a pass over the rows
+ */
+function outOfFoldErrorsFromFactors(perFold, coefficients) {
+    const sse = coefficients.map((bySet) => perFold.map((acc, f) => {
+        const p = acc.p;
+        const R = acc.R;
+        const qty = acc.qty;
+        const w = bySet[f];
+        let sum = acc.rss;
+        for (let i = 0; i < p; i++) {
+            // (R w)_i: R is upper triangular, column-major.
+            let t = 0;
+            for (let j = i; j < p; j++)
+                t += R[j * p + i] * w[j];
+            const d = qty[i] - t;
+            sum += d * d;
+        }
+        return sum;
+    }));
+    return { sse };
+}
+/**
  * Scores each row with the coefficients fitted without its fold, for S settings at once, in one
  * pass over the rows. `visit` (optional) sees every design block too (for further figures in the
  * same pass).
@@ -33933,7 +34345,7 @@ function crossValidate(design, data, fit, folds, options = {}) {
     const kfold = k >= 2;
     let coefficients = [];
     if (kfold) {
-        const complements = complementFactors(options.factors ?? foldFactors(design, data, folds));
+        const complements = options.complements ?? complementFactors(options.factors ?? foldFactors(design, data, folds));
         coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
     }
     const w = fit.coefficients;
@@ -34117,7 +34529,9 @@ function assignFolds(n, k, order, seed) {
 __nccwpck_require__.d(__webpack_exports__, {
   X: () => (/* binding */ SHARED_CROSS_VALIDATION_KEY),
   Tq: () => (/* binding */ SHARED_FOLDS_KEY),
+  b9: () => (/* binding */ SHARED_FOLD_FACTORS_KEY),
   b6: () => (/* binding */ sharedCrossValidation),
+  zf: () => (/* binding */ sharedFoldFactors),
   eQ: () => (/* binding */ sharedFolds),
   cQ: () => (/* binding */ sharedSwing)
 });
@@ -34426,6 +34840,58 @@ function thinIndices(length, count, keep) {
     return [...chosen].sort((a, b) => a - b);
 }
 /**
+ * Pairs (row, neighbour) of each sampled row and its `kk` nearest other sampled rows by squared
+ * Euclidean distance (exact duplicates skipped), by brute force over the s x s pairs.
+ *
+ * @param flat scaled inputs of the sampled rows, row-major: flat[a * d + c]
+ * @param s sampled rows
+ * @param d inputs
+ * @param kk neighbours per row (at most s - 1)
+ * @param rows training row index of each sampled row
+ * @returns flat pairs [row, neighbour, row, neighbour, ...] of training row indices
+ */
+function nearestPairs(flat, s, d, kk, rows) {
+    const pairs = new Int32Array(2 * s * kk);
+    let count = 0;
+    const best = new Float64Array(kk);
+    const bestIdx = new Int32Array(kk);
+    for (let a = 0; a < s; a++) {
+        best.fill(Infinity);
+        bestIdx.fill(-1);
+        const ra = a * d;
+        for (let b = 0; b < s; b++) {
+            if (b === a)
+                continue;
+            const rb = b * d;
+            // Partial sums only grow, so stopping once one reaches the k-th best distance skips
+            // exactly the rows the full sum would skip.
+            const limit = best[kk - 1];
+            let dist = 0;
+            for (let c = 0; c < d && dist < limit; c++) {
+                const t = flat[ra + c] - flat[rb + c];
+                dist += t * t;
+            }
+            if (dist === 0 || dist >= limit)
+                continue;
+            let pos = kk - 1;
+            while (pos > 0 && best[pos - 1] > dist) {
+                best[pos] = best[pos - 1];
+                bestIdx[pos] = bestIdx[pos - 1];
+                pos--;
+            }
+            best[pos] = dist;
+            bestIdx[pos] = b;
+        }
+        for (let t = 0; t < kk; t++) {
+            if (bestIdx[t] < 0)
+                continue;
+            pairs[count++] = rows[a];
+            pairs[count++] = rows[bestIdx[t]];
+        }
+    }
+    return pairs.subarray(0, count);
+}
+/**
  * Measures swing between and beyond samples for a fitted model.
  *
  * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
@@ -34573,40 +35039,7 @@ function measureSwing(design, train, coefficients, options = {}) {
                 flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
         });
         const kk = Math.min(kNear, s - 1);
-        const pairs = [];
-        const best = new Float64Array(kk);
-        const bestIdx = new Int32Array(kk);
-        for (let a = 0; a < s; a++) {
-            best.fill(Infinity);
-            bestIdx.fill(-1);
-            const ra = a * d;
-            for (let b = 0; b < s; b++) {
-                if (b === a)
-                    continue;
-                const rb = b * d;
-                // Partial sums only grow, so stopping once one reaches the k-th best distance skips
-                // exactly the rows the full sum would skip.
-                const limit = best[kk - 1];
-                let dist = 0;
-                for (let c = 0; c < d && dist < limit; c++) {
-                    const t = flat[ra + c] - flat[rb + c];
-                    dist += t * t;
-                }
-                if (dist === 0 || dist >= limit)
-                    continue;
-                let pos = kk - 1;
-                while (pos > 0 && best[pos - 1] > dist) {
-                    best[pos] = best[pos - 1];
-                    bestIdx[pos] = bestIdx[pos - 1];
-                    pos--;
-                }
-                best[pos] = dist;
-                bestIdx[pos] = b;
-            }
-            for (let t = 0; t < kk; t++)
-                if (bestIdx[t] >= 0)
-                    pairs.push(rows[a], rows[bestIdx[t]]);
-        }
+        const pairs = nearestPairs(flat, s, d, kk, rows);
         const segmentsCount = pairs.length / 2;
         const m = segmentsCount * perSegment;
         if (m > 0) {
@@ -34646,6 +35079,8 @@ function measureSwing(design, train, coefficients, options = {}) {
 const SHARED_FOLDS_KEY = 'diagnostics/folds';
 /** Memo key of {@link sharedCrossValidation} (the pipeline fills it from its own passes). */
 const SHARED_CROSS_VALIDATION_KEY = 'diagnostics/cross-validation';
+/** Memo key of {@link sharedFoldFactors} (the pipeline fills it from its own pass). */
+const SHARED_FOLD_FACTORS_KEY = 'diagnostics/fold-factors';
 /** The model's folds from its `fit` settings (k = fit.folds, order fit.foldOrder, seed fit.seed). */
 function sharedFolds(context) {
     return context.shared(SHARED_FOLDS_KEY, () => {
@@ -34653,9 +35088,19 @@ function sharedFolds(context) {
         return (0,diagnostics_folds/* assignFolds */.o)(context.train.rows, folds, foldOrder, seed);
     });
 }
+/** QR factors of each fold's training rows and of each fold's complement (one pass when not memoised). */
+function sharedFoldFactors(context) {
+    return context.shared(SHARED_FOLD_FACTORS_KEY, () => {
+        const perFold = (0,cross_validation/* foldFactors */.Y6)(context.design, context.train, sharedFolds(context));
+        return { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
+    });
+}
 /** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
 function sharedCrossValidation(context) {
-    return context.shared(SHARED_CROSS_VALIDATION_KEY, () => (0,cross_validation/* crossValidate */.DJ)(context.design, context.train, context.fit, sharedFolds(context)));
+    return context.shared(SHARED_CROSS_VALIDATION_KEY, () => {
+        const { perFold, complements } = sharedFoldFactors(context);
+        return (0,cross_validation/* crossValidate */.DJ)(context.design, context.train, context.fit, sharedFolds(context), { factors: perFold, complements });
+    });
 }
 /** Swing between and beyond samples of the refit (see {@link measureSwing}). */
 function sharedSwing(context) {
@@ -36302,7 +36747,7 @@ function addColumn(out, at, X, m, wj, j) {
 
 /***/ }),
 
-/***/ 80:
+/***/ 4216:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -36629,344 +37074,10 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     };
 }
 
-;// CONCATENATED MODULE: ./src/data/csv-rules.ts
-/**
- * The rules both CSV paths share, kept in one place so that the fast path and the general
- * path cannot drift apart: what a number cell may look like, how the header is checked,
- * the exact error each problem raises, and how rows are gathered into chunks.
- */
-
-/** Rows per chunk when the caller does not say. */
-const DEFAULT_CHUNK_ROWS = 65536;
-/** Size cap in bytes when the caller does not say (512 MiB). */
-const csv_rules_DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
-/** How many header names an error message lists before cutting the list. */
-const MAX_NAMES_LISTED = 20;
-/** How many characters of a bad cell an error message quotes. */
-const MAX_CELL_QUOTED = 40;
-/**
- * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
- * (empty text, `Infinity`, hexadecimal / binary / octal prefixes): optional sign, digits
- * with an optional point (`1`, `1.`, `.5`, `1.5`), optional exponent (`e-3`, `E+05`).
- * Source: ECMA-262 `StrDecimalLiteral` (section "ToNumber Applied to the String Type").
- */
-const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-/**
- * Collapses repeated names in a column request.
- * @param columns names as the caller gave them
- */
-function planRequest(columns) {
-    const distinct = [];
-    const slotOfColumn = [];
-    for (const name of columns) {
-        let slot = distinct.indexOf(name);
-        if (slot === -1) {
-            slot = distinct.length;
-            distinct.push(name);
-        }
-        slotOfColumn.push(slot);
-    }
-    return { columns, distinct, slotOfColumn };
-}
-/**
- * Checks the header and maps requested columns to fields.
- * Throws InputError `csv-header` for a repeated name (both 1-based positions),
- * `csv-missing-column` for requested names the header lacks (listing up to 20 names it has).
- *
- * @param file repository-relative path, for messages
- * @param header names as read (already trimmed)
- * @param headerLine 1-based line of the header
- * @param request the distinct requested columns
- */
-function planColumns(file, header, headerLine, request) {
-    const position = new Map();
-    header.forEach((name, i) => {
-        const earlier = position.get(name);
-        if (earlier !== undefined) {
-            throw new errors/* InputError */.dz('csv-header', `the header names column ${(0,errors/* quoteValue */.cl)(name, MAX_CELL_QUOTED)} twice, at positions ${earlier + 1} and ${i + 1}; expected unique column names`, { file, line: headerLine, key: name });
-        }
-        position.set(name, i);
-    });
-    const missing = request.distinct.filter((name) => !position.has(name));
-    if (missing.length > 0) {
-        const listed = header.slice(0, MAX_NAMES_LISTED).map((name) => (0,errors/* quoteValue */.cl)(name, MAX_CELL_QUOTED));
-        const more = header.length > MAX_NAMES_LISTED ? `, … (${header.length - MAX_NAMES_LISTED} more)` : '';
-        const wanted = missing.map((name) => (0,errors/* quoteValue */.cl)(name, MAX_CELL_QUOTED)).join(', ');
-        throw new errors/* InputError */.dz('csv-missing-column', `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`, { file, line: headerLine, key: missing[0] });
-    }
-    const slotOfField = new Int32Array(header.length).fill(-1);
-    const fieldOfSlot = new Int32Array(request.distinct.length);
-    request.distinct.forEach((name, slot) => {
-        const field = position.get(name);
-        slotOfField[field] = slot;
-        fieldOfSlot[slot] = field;
-    });
-    return { header, headerLine, slotOfField, fieldOfSlot };
-}
-/**
- * Reads one cell of a requested column as the general path does: trims white space (as
- * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
- * value is finite. Anything else throws InputError `csv-cell`.
- *
- * @param cell the field text (quotes already removed)
- * @param file repository-relative path, for messages
- * @param line 1-based physical line of the row
- * @param column the column's header name
- */
-function cellNumber(cell, file, line, column) {
-    const text = cell.trim();
-    if (DECIMAL_NUMBER.test(text)) {
-        const value = Number(text);
-        if (Number.isFinite(value))
-            return value;
-    }
-    throw cellError(cell, file, line, column);
-}
-/** The `csv-cell` error for a cell that is not a finite decimal number. */
-function cellError(cell, file, line, column) {
-    const text = cell.trim();
-    let why;
-    if (text === '')
-        why = 'the cell is empty';
-    else if (DECIMAL_NUMBER.test(text))
-        why = `got ${(0,errors/* quoteValue */.cl)(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
-    else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text))
-        why = `got ${(0,errors/* quoteValue */.cl)(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
-    else
-        why = `got ${(0,errors/* quoteValue */.cl)(cell, MAX_CELL_QUOTED)}`;
-    return new errors/* InputError */.dz('csv-cell', `column ${(0,errors/* quoteValue */.cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`, { file, line, key: column });
-}
-/** The `csv-ragged` error for a row whose field count differs from the header's. */
-function raggedError(file, line, expected, actual) {
-    return new errors/* InputError */.dz('csv-ragged', `the row has ${actual} field${actual === 1 ? '' : 's'}; expected ${expected}, as many as the header`, { file, line });
-}
-/** The `csv-empty` error for a file without a header row. */
-function emptyError(file) {
-    return new errors/* InputError */.dz('csv-empty', 'the file has no header row; expected a first line of comma-separated column names', {
-        file,
-    });
-}
-/** First buffer size of a chunk; buffers double from here up to the chunk size. */
-const FIRST_CAPACITY = 4096;
-/**
- * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
- * Parsers write `slots[s][row]` and `lines[row]` directly, then advance `row`; when `row`
- * reaches `capacity` they call {@link ChunkBuilder.full}, which grows the buffers (doubling)
- * or hands out a chunk, and reload `slots`, `lines`, `row` and `capacity`.
- */
-class ChunkBuilder {
-    request;
-    chunkRows;
-    /** Filled chunks not yet handed out. */
-    ready = [];
-    /** One buffer per distinct requested column, length `capacity`. */
-    slots = [];
-    /** 1-based physical line of each row, length `capacity`. */
-    lines = new Int32Array(0);
-    /** Rows written in the current buffers. */
-    row = 0;
-    /** Rows the current buffers hold. */
-    capacity = 0;
-    /**
-     * @param request the requested columns (a chunk lists them in the asked order)
-     * @param chunkRows rows per chunk
-     */
-    constructor(request, chunkRows) {
-        this.request = request;
-        this.chunkRows = chunkRows;
-        this.fresh();
-    }
-    /** Advances one row (for parsers that do not track `row` themselves). */
-    endRow() {
-        this.row++;
-        if (this.row === this.capacity)
-            this.full();
-    }
-    /** Called when `row === capacity`: hands out a chunk, or doubles the buffers. */
-    full() {
-        if (this.row >= this.chunkRows) {
-            this.flush();
-            return;
-        }
-        const capacity = Math.min(this.chunkRows, this.capacity * 2);
-        this.slots = this.slots.map((old) => {
-            const grown = new Float64Array(capacity);
-            grown.set(old);
-            return grown;
-        });
-        const lines = new Int32Array(capacity);
-        lines.set(this.lines);
-        this.lines = lines;
-        this.capacity = capacity;
-    }
-    /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
-    flush() {
-        const rows = this.row;
-        if (rows === 0)
-            return;
-        const exact = rows === this.capacity;
-        const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
-        const lines = exact ? this.lines : this.lines.slice(0, rows);
-        const chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
-        if (exact)
-            this.#buffersOf.set(chunk, { slots, lines });
-        this.ready.push(chunk);
-        this.fresh();
-    }
-    /**
-     * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
-     * reused for a later chunk (no allocation per chunk when the reader copies each chunk away
-     * before asking for the next). Chunks of another size are ignored.
-     *
-     * @param chunk a chunk from {@link take}; must not be read afterwards
-     */
-    recycle(chunk) {
-        const buffers = this.#buffersOf.get(chunk);
-        if (buffers === undefined)
-            return;
-        this.#buffersOf.delete(chunk);
-        this.#spare.push(buffers);
-    }
-    #buffersOf = new WeakMap();
-    #spare = [];
-    /** Takes the chunks handed out so far. */
-    take() {
-        return this.ready.splice(0, this.ready.length);
-    }
-    /** New buffers, as large as the last ones (a file that filled one chunk likely fills more). */
-    fresh() {
-        if (this.capacity === 0)
-            this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
-        this.row = 0;
-        while (this.#spare.length > 0) {
-            const spare = this.#spare.pop();
-            if (spare.lines.length !== this.capacity)
-                continue;
-            this.slots = spare.slots;
-            this.lines = spare.lines;
-            return;
-        }
-        this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
-        this.lines = new Int32Array(this.capacity);
-    }
-}
-
-// EXTERNAL MODULE: external "node:buffer"
-var external_node_buffer_ = __nccwpck_require__(4573);
-;// CONCATENATED MODULE: ./src/data/line-blocks.ts
-/**
- * Turns a file's byte pieces (as a {@link RepoReader} streams them, split anywhere) into
- * blocks that end right after a line feed, so that no line and no UTF-8 character is ever
- * split between two blocks. Both CSV paths read through this one door, which also drops a
- * UTF-8 byte-order mark and stops at the first line that is not UTF-8 (the reader, which
- * counts lines, then throws {@link encodingError}).
- */
-
-
-const LF = 10;
-const BOM = [0xef, 0xbb, 0xbf];
-/**
- * Streams `pieces` as blocks of whole lines, checked to be UTF-8.
- *
- * A leading UTF-8 byte-order mark is dropped (line 1 stays line 1). When a line holds bytes
- * that are not UTF-8, the lines before it are still yielded, then a block with `badUtf8`
- * ends the stream: so errors always surface in file order, whatever the piece sizes.
- * An empty file yields nothing. No piece is copied except the line that straddles two pieces.
- *
- * @param pieces the file's bytes in pieces of any size (an empty piece is allowed)
- */
-async function* lineBlocks(pieces) {
-    let pending = [];
-    let pendingBytes = 0;
-    let first = true;
-    /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8). */
-    function* emit(bytes, final) {
-        if (first) {
-            first = false;
-            if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2])
-                bytes = bytes.subarray(3);
-            else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
-                yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
-                return false;
-            }
-        }
-        if (bytes.length === 0)
-            return true;
-        const good = utf8Prefix(bytes);
-        if (good === bytes.length) {
-            yield { bytes, final, badUtf8: false, utf16: false };
-            return true;
-        }
-        if (good > 0)
-            yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, utf16: false };
-        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: false };
-        return false;
-    }
-    for await (const piece of pieces) {
-        if (piece.length === 0)
-            continue;
-        const firstCut = piece.indexOf(LF) + 1;
-        if (firstCut === 0) {
-            pending.push(piece);
-            pendingBytes += piece.length;
-            continue;
-        }
-        // The line that straddles the previous pieces and this one, then this piece's whole lines.
-        const lastCut = piece.lastIndexOf(LF) + 1;
-        if (pendingBytes > 0) {
-            const joined = concat([...pending, piece.subarray(0, firstCut)], pendingBytes + firstCut);
-            if (!(yield* emit(joined, false)))
-                return;
-            if (lastCut > firstCut && !(yield* emit(piece.subarray(firstCut, lastCut), false)))
-                return;
-        }
-        else if (!(yield* emit(piece.subarray(0, lastCut), false)))
-            return;
-        pending = lastCut < piece.length ? [piece.subarray(lastCut)] : [];
-        pendingBytes = piece.length - lastCut;
-    }
-    if (pendingBytes > 0)
-        yield* emit(concat(pending, pendingBytes), true);
-}
-function concat(parts, total) {
-    if (parts.length === 1)
-        return parts[0];
-    const out = new Uint8Array(total);
-    let at = 0;
-    for (const part of parts) {
-        out.set(part, at);
-        at += part.length;
-    }
-    return out;
-}
-/** Length of the longest run of whole UTF-8 lines at the start of `bytes`. */
-function utf8Prefix(bytes) {
-    if ((0,external_node_buffer_.isUtf8)(bytes))
-        return bytes.length;
-    let start = 0;
-    while (start < bytes.length) {
-        const lf = bytes.indexOf(LF, start);
-        const end = lf === -1 ? bytes.length : lf + 1;
-        if (!(0,external_node_buffer_.isUtf8)(bytes.subarray(start, end)))
-            break;
-        start = end;
-    }
-    return start;
-}
-/**
- * The `csv-encoding` error for a line that is not UTF-8.
- * @param file repository-relative path
- * @param line 1-based line holding the bad bytes
- * @param utf16 the file starts with a UTF-16 byte-order mark
- */
-function encodingError(file, line, utf16) {
-    const hint = utf16 ? ' (the file looks like UTF-16)' : '';
-    return new errors/* InputError */.dz('csv-encoding', `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`, {
-        file,
-        line,
-    });
-}
-
+// EXTERNAL MODULE: ./src/data/csv-rules.ts
+var csv_rules = __nccwpck_require__(8706);
+// EXTERNAL MODULE: ./src/data/line-blocks.ts
+var line_blocks = __nccwpck_require__(5383);
 ;// CONCATENATED MODULE: ./src/data/fast-path.ts
 /**
  * The fast CSV path: one loop over the bytes of plain numeric CSV (no quotes), parsing
@@ -36991,7 +37102,7 @@ class FastPathDeclined extends Error {
 }
 // Bytes the loop looks at.
 const TAB = 9;
-const fast_path_LF = 10;
+const LF = 10;
 const VT = 11;
 const FF = 12;
 const CR = 13;
@@ -37031,15 +37142,15 @@ const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
  */
 async function* fastChunks(pieces, target) {
     const reader = new FastReader(target);
-    for await (const block of lineBlocks(pieces)) {
+    for await (const block of (0,line_blocks/* lineBlocks */.D)(pieces)) {
         if (block.badUtf8)
-            throw encodingError(target.file, reader.line, block.utf16);
+            throw (0,line_blocks/* encodingError */.S)(target.file, reader.line, block.utf16);
         let bytes = block.bytes;
-        if (block.final && bytes[bytes.length - 1] !== fast_path_LF) {
+        if (block.final && bytes[bytes.length - 1] !== LF) {
             // Give the last line its line feed so that every inner loop stops on one.
             const closed = new Uint8Array(bytes.length + 1);
             closed.set(bytes);
-            closed[bytes.length] = fast_path_LF;
+            closed[bytes.length] = LF;
             bytes = closed;
         }
         reader.read(bytes);
@@ -37052,7 +37163,7 @@ async function* fastChunks(pieces, target) {
         }
     }
     if (reader.plan === null)
-        throw emptyError(target.file);
+        throw (0,csv_rules/* emptyError */.CA)(target.file);
     reader.builder.flush();
     for (const chunk of reader.builder.take()) {
         yield chunk;
@@ -37071,7 +37182,7 @@ class FastReader {
     stopped = false;
     constructor(target) {
         this.target = target;
-        this.builder = new ChunkBuilder(target.request, target.chunkRows);
+        this.builder = new csv_rules/* ChunkBuilder */.vB(target.request, target.chunkRows);
     }
     /** Reads whole lines; `buf` ends with a line feed. */
     read(buf) {
@@ -37105,12 +37216,12 @@ class FastReader {
             let b = buf[p];
             while (b === SPACE || b === TAB)
                 b = buf[++p];
-            if (b === fast_path_LF) {
+            if (b === LF) {
                 p++;
                 line++;
                 continue;
             }
-            if (b === CR && buf[p + 1] === fast_path_LF) {
+            if (b === CR && buf[p + 1] === LF) {
                 p += 2;
                 line++;
                 continue;
@@ -37199,8 +37310,8 @@ class FastReader {
                 }
                 else {
                     // An unused cell: skip to the comma or the line end.
-                    while (b !== COMMA && b !== fast_path_LF) {
-                        if (b === QUOTE || (b === CR && buf[p + 1] !== fast_path_LF))
+                    while (b !== COMMA && b !== LF) {
+                        if (b === QUOTE || (b === CR && buf[p + 1] !== LF))
                             throw new FastPathDeclined(line);
                         if (b === CR)
                             break;
@@ -37214,9 +37325,9 @@ class FastReader {
                     b = buf[++p];
                     continue;
                 }
-                if (b === CR && buf[p + 1] === fast_path_LF)
+                if (b === CR && buf[p + 1] === LF)
                     b = buf[++p];
-                if (b !== fast_path_LF || field !== lastField)
+                if (b !== LF || field !== lastField)
                     throw new FastPathDeclined(line);
                 p++;
                 break;
@@ -37236,7 +37347,7 @@ class FastReader {
     readHeader(buf) {
         let p = 0;
         while (p < buf.length) {
-            const lf = buf.indexOf(fast_path_LF, p);
+            const lf = buf.indexOf(LF, p);
             let end = lf;
             if (end > p && buf[end - 1] === CR)
                 end--;
@@ -37250,7 +37361,7 @@ class FastReader {
             if (text.trim() === '')
                 continue;
             const header = text.split(',').map((name) => name.trim());
-            this.plan = planColumns(this.target.file, header, line, this.target.request);
+            this.plan = (0,csv_rules/* planColumns */.j7)(this.target.file, header, line, this.target.request);
             this.target.onHeader(this.plan);
             if (this.target.headerOnly)
                 this.stopped = true;
@@ -37258,2388 +37369,6 @@ class FastReader {
         }
         return p;
     }
-}
-
-;// CONCATENATED MODULE: external "stream"
-const external_stream_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("stream");
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/is_object.js
-const is_object = function (obj) {
-  return typeof obj === "object" && obj !== null && !Array.isArray(obj);
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/CsvError.js
-class CsvError extends Error {
-  constructor(code, message, options, ...contexts) {
-    if (Array.isArray(message)) message = message.join(" ").trim();
-    super(message);
-    if (Error.captureStackTrace !== undefined) {
-      Error.captureStackTrace(this, CsvError);
-    }
-    this.code = code;
-    for (const context of contexts) {
-      for (const key in context) {
-        const value = context[key];
-        this[key] = Buffer.isBuffer(value)
-          ? value.toString(options.encoding)
-          : value == null
-            ? value
-            : JSON.parse(JSON.stringify(value));
-      }
-    }
-  }
-}
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/normalize_columns_array.js
-
-
-
-const normalize_columns_array = function (columns) {
-  const normalizedColumns = [];
-  for (let i = 0, l = columns.length; i < l; i++) {
-    const column = columns[i];
-    if (column === undefined || column === null || column === false) {
-      normalizedColumns[i] = { disabled: true };
-    } else if (typeof column === "string" || typeof column === "number") {
-      normalizedColumns[i] = { name: `${column}` };
-    } else if (is_object(column)) {
-      if (typeof column.name !== "string") {
-        throw new CsvError("CSV_OPTION_COLUMNS_MISSING_NAME", [
-          "Option columns missing name:",
-          `property "name" is required at position ${i}`,
-          "when column is an object literal",
-        ]);
-      }
-      normalizedColumns[i] = column;
-    } else {
-      throw new CsvError("CSV_INVALID_COLUMN_DEFINITION", [
-        "Invalid column definition:",
-        "expect a string or a literal object,",
-        `got ${JSON.stringify(column)} at position ${i}`,
-      ]);
-    }
-  }
-  return normalizedColumns;
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/ResizeableBuffer.js
-class ResizeableBuffer {
-  constructor(size = 100) {
-    this.size = size;
-    this.length = 0;
-    this.buf = Buffer.allocUnsafe(size);
-  }
-  prepend(val) {
-    if (Buffer.isBuffer(val)) {
-      const length = this.length + val.length;
-      if (length >= this.size) {
-        this.resize();
-        if (length >= this.size) {
-          throw Error("INVALID_BUFFER_STATE");
-        }
-      }
-      const buf = this.buf;
-      this.buf = Buffer.allocUnsafe(this.size);
-      val.copy(this.buf, 0);
-      buf.copy(this.buf, val.length);
-      this.length += val.length;
-    } else {
-      const length = this.length++;
-      if (length === this.size) {
-        this.resize();
-      }
-      const buf = this.clone();
-      this.buf[0] = val;
-      buf.copy(this.buf, 1, 0, length);
-    }
-  }
-  append(val) {
-    const length = this.length++;
-    if (length === this.size) {
-      this.resize();
-    }
-    this.buf[length] = val;
-  }
-  clone() {
-    return Buffer.from(this.buf.slice(0, this.length));
-  }
-  resize() {
-    const length = this.length;
-    this.size = this.size * 2;
-    const buf = Buffer.allocUnsafe(this.size);
-    this.buf.copy(buf, 0, 0, length);
-    this.buf = buf;
-  }
-  toString(encoding) {
-    if (encoding) {
-      return this.buf.toString(encoding, 0, this.length);
-    } else {
-      return Uint8Array.prototype.slice.call(this.buf.slice(0, this.length));
-    }
-  }
-  toJSON() {
-    return this.toString("utf8");
-  }
-  reset() {
-    this.length = 0;
-  }
-}
-
-/* harmony default export */ const utils_ResizeableBuffer = (ResizeableBuffer);
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/init_state.js
-
-
-const init_state = function (options) {
-  // ECMAScript WhiteSpace + LineTerminator codepoints, encoded under
-  // `options.encoding`. Aligns trimming with `String.prototype.trim()`.
-  // https://tc39.es/ecma262/#sec-white-space
-  // https://tc39.es/ecma262/#sec-line-terminators
-  //
-  // Codepoints unrepresentable in the target encoding are dropped: Node's
-  // Buffer substitutes them with `?` (0x3F), and including those would cause
-  // literal `?` bytes in the input to be trimmed under `latin1`/`ascii`.
-  const timchars = [
-    // Basic Latin
-    0x0020, // [Space](https://www.fileformat.info/info/unicode/char/0020/index.htm)
-    0x0009, // [CHARACTER TABULATION (HT)](https://www.fileformat.info/info/unicode/char/0009/index.htm)
-    0x000a, // [LINE FEED (LF)](https://www.fileformat.info/info/unicode/char/000a/index.htm)
-    0x000d, // [CARRIAGE RETURN (CR)](https://www.fileformat.info/info/unicode/char/000d/index.htm)
-    0x000c, // [FORM FEED (FF)](https://www.fileformat.info/info/unicode/char/000c/index.htm)
-    0x000b, // [LINE TABULATION (VT)](https://www.fileformat.info/info/unicode/char/000b/index.htm)
-    // Latin-1 Supplement
-    0x00a0, // [NO-BREAK SPACE (NBSP)](https://www.fileformat.info/info/unicode/char/00a0/index.htm)
-    // Ogham
-    0x1680, // [OGHAM SPACE MARK](https://www.fileformat.info/info/unicode/char/1680/index.htm)
-    // General Punctuation
-    0x2000, // [EN QUAD](https://www.fileformat.info/info/unicode/char/2000/index.htm)
-    0x2001, // [EM QUAD](https://www.fileformat.info/info/unicode/char/2001/index.htm)
-    0x2002, // [EN SPACE](https://www.fileformat.info/info/unicode/char/2002/index.htm)
-    0x2003, // [EM SPACE](https://www.fileformat.info/info/unicode/char/2003/index.htm)
-    0x2004, // [THREE-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2004/index.htm)
-    0x2005, // [FOUR-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2005/index.htm)
-    0x2006, // [SIX-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2006/index.htm)
-    0x2007, // [FIGURE SPACE](https://www.fileformat.info/info/unicode/char/2007/index.htm)
-    0x2008, // [PUNCTUATION SPACE](https://www.fileformat.info/info/unicode/char/2008/index.htm)
-    0x2009, // [THIN SPACE](https://www.fileformat.info/info/unicode/char/2009/index.htm)
-    0x200a, // [HAIR SPACE](https://www.fileformat.info/info/unicode/char/200a/index.htm)
-    0x2028, // [LINE SEPARATOR](https://www.fileformat.info/info/unicode/char/2028/index.htm)
-    0x2029, // [PARAGRAPH SEPARATOR](https://www.fileformat.info/info/unicode/char/2029/index.htm)
-    0x202f, // [NARROW NO-BREAK SPACE (NNBSP)](https://www.fileformat.info/info/unicode/char/202f/index.htm)
-    0x205f, // [MEDIUM MATHEMATICAL SPACE (MMSP)](https://www.fileformat.info/info/unicode/char/205f/index.htm)
-    0x3000, // [IDEOGRAPHIC SPACE](https://www.fileformat.info/info/unicode/char/3000/index.htm)
-    0xfeff, // [ZERO WIDTH NO-BREAK SPACE (BOM)](https://www.fileformat.info/info/unicode/char/feff/index.htm)
-  ].reduce((acc, codepoint) => {
-    const encoded = Buffer.from(
-      String.fromCharCode(codepoint),
-      options.encoding,
-    );
-    if (codepoint !== 0x3f && encoded.length === 1 && encoded[0] === 0x3f) {
-      return acc;
-    }
-    acc.push(encoded);
-    return acc;
-  }, []);
-  // First-byte lookup table for `__isCharTrimable`. Non-whitespace bytes
-  // (the common case) bail out in O(1) without scanning every timchar.
-  const timcharFirstBytes = new Uint8Array(256);
-  for (const t of timchars) timcharFirstBytes[t[0]] = 1;
-  return {
-    bomSkipped: false,
-    bufBytesStart: 0,
-    castField: options.cast_function,
-    commenting: false,
-    delimiterBufPrevious: undefined,
-    delimiterDiscovered: false,
-    // Current error encountered by a record
-    error: undefined,
-    enabled: options.from_line === 1,
-    escaping: false,
-    escapeIsQuote:
-      Buffer.isBuffer(options.escape) &&
-      Buffer.isBuffer(options.quote) &&
-      Buffer.compare(options.escape, options.quote) === 0,
-    // columns can be `false`, `true`, `Array`
-    expectedRecordLength: Array.isArray(options.columns)
-      ? options.columns.length
-      : undefined,
-    field: new utils_ResizeableBuffer(20),
-    firstLineToHeaders: options.cast_first_line_to_header,
-    needMoreDataSize: Math.max(
-      // Skip if the remaining buffer smaller than comment
-      options.comment !== null ? options.comment.length : 0,
-      // Skip if the remaining buffer can be delimiter
-      ...(options.delimiter
-        ? options.delimiter.map((delimiter) => delimiter.length)
-        : []),
-      // Auto discovery of delimiter is limited to 1 character
-      options.delimiter_auto ? 1 : 0,
-      // Skip if the remaining buffer can be escape sequence
-      options.quote !== null ? options.quote.length : 0,
-      // Skip if the remaining buffer can be a multi-byte trim character
-      ...timchars.map((t) => t.length),
-    ),
-    previousBuf: undefined,
-    quoting: false,
-    stop: false,
-    rawBuffer: new utils_ResizeableBuffer(100),
-    record: [],
-    recordHasError: false,
-    record_length: 0,
-    recordDelimiterMaxLength:
-      options.record_delimiter.length === 0
-        ? 0
-        : Math.max(...options.record_delimiter.map((v) => v.length)),
-    trimChars: [
-      Buffer.from(" ", options.encoding)[0],
-      Buffer.from("\t", options.encoding)[0],
-    ],
-    wasQuoting: false,
-    wasRowDelimiter: false,
-    timchars: timchars,
-    timcharFirstBytes: timcharFirstBytes,
-  };
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/underscore.js
-const underscore = function (str) {
-  return str.replace(/([A-Z])/g, function (_, match) {
-    return "_" + match.toLowerCase();
-  });
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/normalize_options.js
-
-
-
-
-
-const normalize_options = function (opts) {
-  const options = {};
-  // Merge with user options
-  for (const opt in opts) {
-    options[underscore(opt)] = opts[opt];
-  }
-  // Normalize option `encoding`
-  // Note: defined first because other options depends on it
-  // to convert chars/strings into buffers.
-  if (options.encoding === undefined || options.encoding === true) {
-    options.encoding = "utf8";
-  } else if (options.encoding === null || options.encoding === false) {
-    options.encoding = null;
-  } else if (
-    typeof options.encoding !== "string" &&
-    options.encoding !== null
-  ) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_ENCODING",
-      [
-        "Invalid option encoding:",
-        "encoding must be a string or null to return a buffer,",
-        `got ${JSON.stringify(options.encoding)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `bom`
-  if (
-    options.bom === undefined ||
-    options.bom === null ||
-    options.bom === false
-  ) {
-    options.bom = false;
-  } else if (options.bom !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_BOM",
-      [
-        "Invalid option bom:",
-        "bom must be true,",
-        `got ${JSON.stringify(options.bom)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `cast`
-  options.cast_function = null;
-  if (
-    options.cast === undefined ||
-    options.cast === null ||
-    options.cast === false ||
-    options.cast === ""
-  ) {
-    options.cast = undefined;
-  } else if (typeof options.cast === "function") {
-    options.cast_function = options.cast;
-    options.cast = true;
-  } else if (options.cast !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_CAST",
-      [
-        "Invalid option cast:",
-        "cast must be true or a function,",
-        `got ${JSON.stringify(options.cast)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `cast_date`
-  if (
-    options.cast_date === undefined ||
-    options.cast_date === null ||
-    options.cast_date === false ||
-    options.cast_date === ""
-  ) {
-    options.cast_date = false;
-  } else if (options.cast_date === true) {
-    options.cast_date = function (value) {
-      const date = Date.parse(value);
-      return !isNaN(date) ? new Date(date) : value;
-    };
-  } else if (typeof options.cast_date !== "function") {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_CAST_DATE",
-      [
-        "Invalid option cast_date:",
-        "cast_date must be true or a function,",
-        `got ${JSON.stringify(options.cast_date)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `columns`
-  options.cast_first_line_to_header = undefined;
-  if (options.columns === true) {
-    // Fields in the first line are converted as-is to columns
-    options.cast_first_line_to_header = undefined;
-  } else if (typeof options.columns === "function") {
-    options.cast_first_line_to_header = options.columns;
-    options.columns = true;
-  } else if (Array.isArray(options.columns)) {
-    options.columns = normalize_columns_array(options.columns);
-  } else if (
-    options.columns === undefined ||
-    options.columns === null ||
-    options.columns === false
-  ) {
-    options.columns = false;
-  } else {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_COLUMNS",
-      [
-        "Invalid option columns:",
-        "expect an array, a function or true,",
-        `got ${JSON.stringify(options.columns)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `group_columns_by_name`
-  if (
-    options.group_columns_by_name === undefined ||
-    options.group_columns_by_name === null ||
-    options.group_columns_by_name === false
-  ) {
-    options.group_columns_by_name = false;
-  } else if (options.group_columns_by_name !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
-      [
-        "Invalid option group_columns_by_name:",
-        "expect an boolean,",
-        `got ${JSON.stringify(options.group_columns_by_name)}`,
-      ],
-      options,
-    );
-  } else if (options.columns === false) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
-      [
-        "Invalid option group_columns_by_name:",
-        "the `columns` mode must be activated.",
-      ],
-      options,
-    );
-  }
-  // Normalize option `comment`
-  if (
-    options.comment === undefined ||
-    options.comment === null ||
-    options.comment === false ||
-    options.comment === ""
-  ) {
-    options.comment = null;
-  } else {
-    if (typeof options.comment === "string") {
-      options.comment = Buffer.from(options.comment, options.encoding);
-    }
-    if (!Buffer.isBuffer(options.comment)) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_COMMENT",
-        [
-          "Invalid option comment:",
-          "comment must be a buffer or a string,",
-          `got ${JSON.stringify(options.comment)}`,
-        ],
-        options,
-      );
-    }
-  }
-  // Normalize option `comment_no_infix`
-  if (
-    options.comment_no_infix === undefined ||
-    options.comment_no_infix === null ||
-    options.comment_no_infix === false
-  ) {
-    options.comment_no_infix = false;
-  } else if (options.comment_no_infix !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_COMMENT",
-      [
-        "Invalid option comment_no_infix:",
-        "value must be a boolean,",
-        `got ${JSON.stringify(options.comment_no_infix)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `delimiter_auto`
-  if (
-    options.delimiter_auto === undefined ||
-    options.delimiter_auto === null ||
-    options.delimiter_auto === false
-  ) {
-    options.delimiter_auto = false;
-  } else if (options.delimiter_auto === true) {
-    options.delimiter_auto = {};
-  } else if (!is_object(options.delimiter_auto)) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_DELIMITER_AUTO",
-      [
-        "Invalid option delimiter_auto:",
-        "delimiter_auto must be a boolean or a configuration object,",
-        `got ${JSON.stringify(options.delimiter_auto)}`,
-      ],
-      options,
-    );
-  }
-  if (options.delimiter_auto) {
-    if (options.delimiter_auto.preferred === undefined)
-      options.delimiter_auto.preferred = {
-        [",".charCodeAt(0)]: 1.8,
-        ["\t".charCodeAt(0)]: 1.8,
-        [";".charCodeAt(0)]: 1.6,
-        [" ".charCodeAt(0)]: 1.6,
-        [":".charCodeAt(0)]: 1.5,
-        [".".charCodeAt(0)]: 1.4,
-        ["/".charCodeAt(0)]: 1.4,
-      };
-    else if (!is_object(options.delimiter_auto.preferred)) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "preferred must be an object,",
-          `got ${JSON.stringify(options.delimiter_auto.preferred)}`,
-        ],
-        options,
-      );
-    }
-    if (options.delimiter_auto.score === undefined)
-      options.delimiter_auto.score = (info, options) => {
-        return (
-          (info.total - info.std) * (options.preferred[info.char_code] || 1)
-        );
-      };
-    else if (typeof options.delimiter_auto.score !== "function") {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "score must be a function,",
-          `got ${JSON.stringify(options.delimiter_auto.score)}`,
-        ],
-        options,
-      );
-    }
-    if (options.delimiter_auto.size === undefined)
-      options.delimiter_auto.size = 2048;
-    else if (typeof options.delimiter_auto.size !== "number") {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "size must be a number,",
-          `got ${JSON.stringify(options.delimiter_auto.size)}`,
-        ],
-        options,
-      );
-    }
-  }
-  // Normalize option `delimiter`
-  const delimiter_json = JSON.stringify(options.delimiter);
-  if (options.delimiter_auto !== false) {
-    options.delimiter = [];
-  }
-  if (!Array.isArray(options.delimiter)) {
-    if (
-      options.delimiter === undefined ||
-      options.delimiter === null ||
-      options.delimiter === false
-    ) {
-      options.delimiter = Buffer.from(",", options.encoding);
-    }
-    options.delimiter = [options.delimiter];
-  }
-  options.delimiter = options.delimiter.map(function (delimiter) {
-    if (typeof delimiter === "string") {
-      delimiter = Buffer.from(delimiter, options.encoding);
-    }
-    if (!Buffer.isBuffer(delimiter) || delimiter.length === 0) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER",
-        [
-          "Invalid option delimiter:",
-          "delimiter must be a non empty string or buffer or array of string|buffer,",
-          `got ${delimiter_json}`,
-        ],
-        options,
-      );
-    }
-    return delimiter;
-  });
-  // Normalize option `escape`
-  if (options.escape === undefined || options.escape === true) {
-    options.escape = Buffer.from('"', options.encoding);
-  } else if (typeof options.escape === "string") {
-    options.escape = Buffer.from(options.escape, options.encoding);
-  } else if (options.escape === null || options.escape === false) {
-    options.escape = null;
-  }
-  if (options.escape !== null) {
-    if (!Buffer.isBuffer(options.escape)) {
-      throw new Error(
-        `Invalid Option: escape must be a buffer, a string or a boolean, got ${JSON.stringify(options.escape)}`,
-      );
-    }
-  }
-  // Normalize option `from`
-  if (options.from === undefined || options.from === null) {
-    options.from = 1;
-  } else {
-    if (typeof options.from === "string" && /\d+/.test(options.from)) {
-      options.from = parseInt(options.from);
-    }
-    if (Number.isInteger(options.from)) {
-      if (options.from < 0) {
-        throw new Error(
-          `Invalid Option: from must be a positive integer, got ${JSON.stringify(opts.from)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: from must be an integer, got ${JSON.stringify(options.from)}`,
-      );
-    }
-  }
-  // Normalize option `from_line`
-  if (options.from_line === undefined || options.from_line === null) {
-    options.from_line = 1;
-  } else {
-    if (
-      typeof options.from_line === "string" &&
-      /\d+/.test(options.from_line)
-    ) {
-      options.from_line = parseInt(options.from_line);
-    }
-    if (Number.isInteger(options.from_line)) {
-      if (options.from_line <= 0) {
-        throw new Error(
-          `Invalid Option: from_line must be a positive integer greater than 0, got ${JSON.stringify(opts.from_line)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: from_line must be an integer, got ${JSON.stringify(opts.from_line)}`,
-      );
-    }
-  }
-  // Normalize options `ignore_last_delimiters`
-  if (
-    options.ignore_last_delimiters === undefined ||
-    options.ignore_last_delimiters === null
-  ) {
-    options.ignore_last_delimiters = false;
-  } else if (typeof options.ignore_last_delimiters === "number") {
-    options.ignore_last_delimiters = Math.floor(options.ignore_last_delimiters);
-    if (options.ignore_last_delimiters === 0) {
-      options.ignore_last_delimiters = false;
-    }
-  } else if (typeof options.ignore_last_delimiters !== "boolean") {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_IGNORE_LAST_DELIMITERS",
-      [
-        "Invalid option `ignore_last_delimiters`:",
-        "the value must be a boolean value or an integer,",
-        `got ${JSON.stringify(options.ignore_last_delimiters)}`,
-      ],
-      options,
-    );
-  }
-  if (options.ignore_last_delimiters === true && options.columns === false) {
-    throw new CsvError(
-      "CSV_IGNORE_LAST_DELIMITERS_REQUIRES_COLUMNS",
-      [
-        "The option `ignore_last_delimiters`",
-        "requires the activation of the `columns` option",
-      ],
-      options,
-    );
-  }
-  // Normalize option `info`
-  if (
-    options.info === undefined ||
-    options.info === null ||
-    options.info === false
-  ) {
-    options.info = false;
-  } else if (options.info !== true) {
-    throw new Error(
-      `Invalid Option: info must be true, got ${JSON.stringify(options.info)}`,
-    );
-  }
-  // Normalize option `max_record_size`
-  if (
-    options.max_record_size === undefined ||
-    options.max_record_size === null ||
-    options.max_record_size === false
-  ) {
-    options.max_record_size = 0;
-  } else if (
-    Number.isInteger(options.max_record_size) &&
-    options.max_record_size >= 0
-  ) {
-    // Great, nothing to do
-  } else if (
-    typeof options.max_record_size === "string" &&
-    /\d+/.test(options.max_record_size)
-  ) {
-    options.max_record_size = parseInt(options.max_record_size);
-  } else {
-    throw new Error(
-      `Invalid Option: max_record_size must be a positive integer, got ${JSON.stringify(options.max_record_size)}`,
-    );
-  }
-  // Normalize option `objname`
-  if (
-    options.objname === undefined ||
-    options.objname === null ||
-    options.objname === false
-  ) {
-    options.objname = undefined;
-  } else if (Buffer.isBuffer(options.objname)) {
-    if (options.objname.length === 0) {
-      throw new Error(`Invalid Option: objname must be a non empty buffer`);
-    }
-    if (options.encoding === null) {
-      // Don't call `toString`, leave objname as a buffer
-    } else {
-      options.objname = options.objname.toString(options.encoding);
-    }
-  } else if (typeof options.objname === "string") {
-    if (options.objname.length === 0) {
-      throw new Error(`Invalid Option: objname must be a non empty string`);
-    }
-    // Great, nothing to do
-  } else if (typeof options.objname === "number") {
-    // if(options.objname.length === 0){
-    //   throw new Error(`Invalid Option: objname must be a non empty string`);
-    // }
-    // Great, nothing to do
-  } else {
-    throw new Error(
-      `Invalid Option: objname must be a string or a buffer, got ${options.objname}`,
-    );
-  }
-  if (options.objname !== undefined) {
-    if (typeof options.objname === "number") {
-      if (options.columns !== false) {
-        throw Error(
-          "Invalid Option: objname index cannot be combined with columns or be defined as a field",
-        );
-      }
-    } else {
-      // A string or a buffer
-      if (options.columns === false) {
-        throw Error(
-          "Invalid Option: objname field must be combined with columns or be defined as an index",
-        );
-      }
-    }
-  }
-  // Normalize option `on_record`
-  if (options.on_record === undefined || options.on_record === null) {
-    options.on_record = undefined;
-  } else if (typeof options.on_record !== "function") {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_ON_RECORD",
-      [
-        "Invalid option `on_record`:",
-        "expect a function,",
-        `got ${JSON.stringify(options.on_record)}`,
-      ],
-      options,
-    );
-  }
-  // Normalize option `on_skip`
-  // options.on_skip ??= (err, chunk) => {
-  //   this.emit('skip', err, chunk);
-  // };
-  if (
-    options.on_skip !== undefined &&
-    options.on_skip !== null &&
-    typeof options.on_skip !== "function"
-  ) {
-    throw new Error(
-      `Invalid Option: on_skip must be a function, got ${JSON.stringify(options.on_skip)}`,
-    );
-  }
-  // Normalize option `quote`
-  if (
-    options.quote === null ||
-    options.quote === false ||
-    options.quote === ""
-  ) {
-    options.quote = null;
-  } else {
-    if (options.quote === undefined || options.quote === true) {
-      options.quote = Buffer.from('"', options.encoding);
-    } else if (typeof options.quote === "string") {
-      options.quote = Buffer.from(options.quote, options.encoding);
-    }
-    if (!Buffer.isBuffer(options.quote)) {
-      throw new Error(
-        `Invalid Option: quote must be a buffer or a string, got ${JSON.stringify(options.quote)}`,
-      );
-    }
-  }
-  // Normalize option `raw`
-  if (
-    options.raw === undefined ||
-    options.raw === null ||
-    options.raw === false
-  ) {
-    options.raw = false;
-  } else if (options.raw !== true) {
-    throw new Error(
-      `Invalid Option: raw must be true, got ${JSON.stringify(options.raw)}`,
-    );
-  }
-  // Normalize option `record_delimiter`
-  if (options.record_delimiter === undefined) {
-    options.record_delimiter = [];
-  } else if (
-    typeof options.record_delimiter === "string" ||
-    Buffer.isBuffer(options.record_delimiter)
-  ) {
-    if (options.record_delimiter.length === 0) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a non empty string or buffer,",
-          `got ${JSON.stringify(options.record_delimiter)}`,
-        ],
-        options,
-      );
-    }
-    options.record_delimiter = [options.record_delimiter];
-  } else if (!Array.isArray(options.record_delimiter)) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_RECORD_DELIMITER",
-      [
-        "Invalid option `record_delimiter`:",
-        "value must be a string, a buffer or array of string|buffer,",
-        `got ${JSON.stringify(options.record_delimiter)}`,
-      ],
-      options,
-    );
-  }
-  options.record_delimiter = options.record_delimiter.map(function (rd, i) {
-    if (typeof rd !== "string" && !Buffer.isBuffer(rd)) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a string, a buffer or array of string|buffer",
-          `at index ${i},`,
-          `got ${JSON.stringify(rd)}`,
-        ],
-        options,
-      );
-    } else if (rd.length === 0) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a non empty string or buffer",
-          `at index ${i},`,
-          `got ${JSON.stringify(rd)}`,
-        ],
-        options,
-      );
-    }
-    if (typeof rd === "string") {
-      rd = Buffer.from(rd, options.encoding);
-    }
-    return rd;
-  });
-  // Normalize option `relax_column_count`
-  if (typeof options.relax_column_count === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_column_count === undefined ||
-    options.relax_column_count === null
-  ) {
-    options.relax_column_count = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count must be a boolean, got ${JSON.stringify(options.relax_column_count)}`,
-    );
-  }
-  if (typeof options.relax_column_count_less === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_column_count_less === undefined ||
-    options.relax_column_count_less === null
-  ) {
-    options.relax_column_count_less = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count_less must be a boolean, got ${JSON.stringify(options.relax_column_count_less)}`,
-    );
-  }
-  if (typeof options.relax_column_count_more === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_column_count_more === undefined ||
-    options.relax_column_count_more === null
-  ) {
-    options.relax_column_count_more = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count_more must be a boolean, got ${JSON.stringify(options.relax_column_count_more)}`,
-    );
-  }
-  // Normalize option `relax_quotes`
-  if (typeof options.relax_quotes === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.relax_quotes === undefined ||
-    options.relax_quotes === null
-  ) {
-    options.relax_quotes = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_quotes must be a boolean, got ${JSON.stringify(options.relax_quotes)}`,
-    );
-  }
-  // Normalize option `skip_empty_lines`
-  if (typeof options.skip_empty_lines === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.skip_empty_lines === undefined ||
-    options.skip_empty_lines === null
-  ) {
-    options.skip_empty_lines = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_empty_lines must be a boolean, got ${JSON.stringify(options.skip_empty_lines)}`,
-    );
-  }
-  // Normalize option `skip_records_with_empty_values`
-  if (typeof options.skip_records_with_empty_values === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.skip_records_with_empty_values === undefined ||
-    options.skip_records_with_empty_values === null
-  ) {
-    options.skip_records_with_empty_values = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_records_with_empty_values must be a boolean, got ${JSON.stringify(options.skip_records_with_empty_values)}`,
-    );
-  }
-  // Normalize option `skip_records_with_error`
-  if (typeof options.skip_records_with_error === "boolean") {
-    // Great, nothing to do
-  } else if (
-    options.skip_records_with_error === undefined ||
-    options.skip_records_with_error === null
-  ) {
-    options.skip_records_with_error = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_records_with_error must be a boolean, got ${JSON.stringify(options.skip_records_with_error)}`,
-    );
-  }
-  // Normalize option `rtrim`
-  if (
-    options.rtrim === undefined ||
-    options.rtrim === null ||
-    options.rtrim === false
-  ) {
-    options.rtrim = false;
-  } else if (options.rtrim !== true) {
-    throw new Error(
-      `Invalid Option: rtrim must be a boolean, got ${JSON.stringify(options.rtrim)}`,
-    );
-  }
-  // Normalize option `ltrim`
-  if (
-    options.ltrim === undefined ||
-    options.ltrim === null ||
-    options.ltrim === false
-  ) {
-    options.ltrim = false;
-  } else if (options.ltrim !== true) {
-    throw new Error(
-      `Invalid Option: ltrim must be a boolean, got ${JSON.stringify(options.ltrim)}`,
-    );
-  }
-  // Normalize option `trim`
-  if (
-    options.trim === undefined ||
-    options.trim === null ||
-    options.trim === false
-  ) {
-    options.trim = false;
-  } else if (options.trim !== true) {
-    throw new Error(
-      `Invalid Option: trim must be a boolean, got ${JSON.stringify(options.trim)}`,
-    );
-  }
-  // Normalize options `trim`, `ltrim` and `rtrim`
-  if (options.trim === true && opts.ltrim !== false) {
-    options.ltrim = true;
-  } else if (options.ltrim !== true) {
-    options.ltrim = false;
-  }
-  if (options.trim === true && opts.rtrim !== false) {
-    options.rtrim = true;
-  } else if (options.rtrim !== true) {
-    options.rtrim = false;
-  }
-  // Normalize option `to`
-  if (options.to === undefined || options.to === null) {
-    options.to = -1;
-  } else if (options.to !== -1) {
-    if (typeof options.to === "string" && /\d+/.test(options.to)) {
-      options.to = parseInt(options.to);
-    }
-    if (Number.isInteger(options.to)) {
-      if (options.to <= 0) {
-        throw new Error(
-          `Invalid Option: to must be a positive integer greater than 0, got ${JSON.stringify(opts.to)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: to must be an integer, got ${JSON.stringify(opts.to)}`,
-      );
-    }
-  }
-  // Normalize option `to_line`
-  if (options.to_line === undefined || options.to_line === null) {
-    options.to_line = -1;
-  } else if (options.to_line !== -1) {
-    if (typeof options.to_line === "string" && /\d+/.test(options.to_line)) {
-      options.to_line = parseInt(options.to_line);
-    }
-    if (Number.isInteger(options.to_line)) {
-      if (options.to_line <= 0) {
-        throw new Error(
-          `Invalid Option: to_line must be a positive integer greater than 0, got ${JSON.stringify(opts.to_line)}`,
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: to_line must be an integer, got ${JSON.stringify(opts.to_line)}`,
-      );
-    }
-  }
-  return options;
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/delimiter_discover.js
-
-
-
-// Discussed in [issue #400](https://github.com/adaltas/node-csv/issues/400)
-// See https://github.com/python/cpython/blob/ea1b1c579f600cc85d145c60862b2e6b98701b24/Lib/csv.py#L349
-const delimiter_discover = function (records, options) {
-  // Normalize the configuration
-  if (!options) {
-    ({ delimiter_auto: options } = normalize_options({ delimiter_auto: true }));
-  }
-  // Convert String to Buffer
-  if (typeof records === "string") {
-    records = Buffer.from(records);
-  }
-  // Convert Buffer to an array of records
-  if (Buffer.isBuffer(records)) {
-    records = ((data) => {
-      const records = [];
-      const parser = transform({ delimiter: [] });
-      const push = (record) => records.push(record);
-      const close = () => {};
-      const error = parser.parse(data, true, push, close);
-      if (error !== undefined) throw error;
-      return records;
-    })(records);
-  }
-  // Info array initialization, 127 entries, one per char code
-  const info = Array(127)
-    .fill()
-    .map(() => ({ lines: [] }));
-  // Traverse each records, count occurences per char code
-  records.map(([record], line) => {
-    for (let i = 0, l = record.length; i < l; i++) {
-      // Count the character frequency
-      const code = record.charCodeAt(i);
-      if (info[code].lines[line] === undefined) info[code].lines[line] = 0;
-      info[code].lines[line]++;
-    }
-  });
-  // Traverse each char code, compute the score
-  info.map((info, i) => {
-    info.char_code = i;
-    info.std = std(info.lines);
-    info.total = info.lines.reduce((acc, val) => acc + val, 0);
-    info.preferred = !!options.preferred[i];
-    info.score = options.score(info, options);
-  });
-  // Extract the dominant character
-  const result = info.reduce(
-    (acc, info) => (acc.score > info.score ? acc : info),
-    {},
-  );
-  return String.fromCharCode(result.char_code);
-};
-
-const std = function (array) {
-  const n = array.length;
-  if (n === 0) return 0;
-  const mean = array.reduce((a, b) => a + b) / n;
-  return Math.sqrt(
-    array.map((x) => Math.pow(x - mean, 2)).reduce((a, b) => a + b) / n,
-  );
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/index.js
-
-
-
-
-
-
-const isRecordEmpty = function (record) {
-  return record.every(
-    (field) =>
-      field == null || (field.toString && field.toString().trim() === ""),
-  );
-};
-
-const cr = 13; // `\r`, carriage return, 0x0D in hexadécimal, 13 in decimal
-const nl = 10; // `\n`, newline, 0x0A in hexadecimal, 10 in decimal
-
-const boms = {
-  // Note, the following are equals:
-  // Buffer.from("\ufeff")
-  // Buffer.from([239, 187, 191])
-  // Buffer.from('EFBBBF', 'hex')
-  utf8: Buffer.from([239, 187, 191]),
-  // Note, the following are equals:
-  // Buffer.from "\ufeff", 'utf16le
-  // Buffer.from([255, 254])
-  utf16le: Buffer.from([255, 254]),
-};
-
-const transform = function (original_options = {}) {
-  const info = {
-    bytes: 0,
-    bytes_records: 0,
-    comment_lines: 0,
-    empty_lines: 0,
-    invalid_field_length: 0,
-    lines: 1,
-    records: 0,
-  };
-  const options = normalize_options(original_options);
-  return {
-    info: info,
-    original_options: original_options,
-    options: options,
-    state: init_state(options),
-    __needMoreData: function (i, bufLen, end) {
-      if (end) return false;
-      const { encoding, escape, quote } = this.options;
-      const { quoting, needMoreDataSize, recordDelimiterMaxLength } =
-        this.state;
-      const numOfCharLeft = bufLen - i - 1;
-      const requiredLength = Math.max(
-        needMoreDataSize,
-        // Skip if the remaining buffer smaller than record delimiter
-        // If "record_delimiter" is yet to be discovered:
-        // 1. It is equals to `[]` and "recordDelimiterMaxLength" equals `0`
-        // 2. We set the length to windows line ending in the current encoding
-        // Note, that encoding is known from user or bom discovery at that point
-        // recordDelimiterMaxLength,
-        recordDelimiterMaxLength === 0
-          ? Buffer.from("\r\n", encoding).length
-          : recordDelimiterMaxLength,
-        // Skip if remaining buffer can be an escaped quote
-        quoting ? (escape === null ? 0 : escape.length) + quote.length : 0,
-        // Skip if remaining buffer can be record delimiter following the closing quote
-        quoting ? quote.length + recordDelimiterMaxLength : 0,
-      );
-      return numOfCharLeft < requiredLength;
-    },
-    // Central parser implementation
-    parse: function (nextBuf, end, push, close) {
-      const {
-        bom,
-        comment_no_infix,
-        delimiter_auto,
-        encoding,
-        from_line,
-        ltrim,
-        max_record_size,
-        raw,
-        relax_quotes,
-        rtrim,
-        skip_empty_lines,
-        to,
-        to_line,
-      } = this.options;
-      let { comment, escape, quote, record_delimiter } = this.options;
-      const {
-        bomSkipped,
-        delimiterDiscovered,
-        delimiterBufPrevious,
-        rawBuffer,
-        escapeIsQuote,
-      } = this.state;
-      // Automatic delimiter discovery
-      if (!delimiterDiscovered && delimiter_auto) {
-        let delimiterBuf;
-        if (delimiterBufPrevious === undefined) {
-          delimiterBuf = nextBuf;
-        } else if (
-          delimiterBufPrevious !== undefined &&
-          nextBuf === undefined
-        ) {
-          delimiterBuf = delimiterBufPrevious;
-        } else {
-          delimiterBuf = Buffer.concat([delimiterBufPrevious, nextBuf]);
-        }
-        // Ensure that nextBuf is not concatenated a second time during buffer reconciliation
-        nextBuf = undefined;
-        // this.delimiterBufPrevious = delimiterBuf;
-        if (end || delimiterBuf.length > delimiter_auto.size) {
-          this.options.delimiter = [
-            Buffer.from(
-              delimiter_discover(delimiterBuf, this.options.delimiter_auto),
-            ),
-          ];
-          this.state.previousBuf = delimiterBuf;
-          this.state.delimiterBufPrevious = undefined;
-          this.state.delimiterDiscovered = true;
-        } else {
-          this.state.delimiterBufPrevious = delimiterBuf;
-          return;
-        }
-      }
-      // Previous buffers reconciliation
-      const { previousBuf } = this.state;
-      let buf;
-      if (previousBuf === undefined) {
-        if (nextBuf === undefined) {
-          // Handle empty string
-          close();
-          return;
-        } else {
-          buf = nextBuf;
-        }
-      } else if (previousBuf !== undefined && nextBuf === undefined) {
-        buf = previousBuf;
-      } else {
-        buf = Buffer.concat([previousBuf, nextBuf]);
-      }
-      // Handle UTF BOM
-      if (bomSkipped === false) {
-        if (bom === false) {
-          this.state.bomSkipped = true;
-        } else if (buf.length < 3) {
-          // No enough data
-          if (end === false) {
-            // Wait for more data
-            this.state.previousBuf = buf;
-            return;
-          }
-        } else {
-          for (const encoding in boms) {
-            if (boms[encoding].compare(buf, 0, boms[encoding].length) === 0) {
-              // Skip BOM
-              const bomLength = boms[encoding].length;
-              this.state.bufBytesStart += bomLength;
-              buf = buf.slice(bomLength);
-              // Renormalize original options with the new encoding
-              const options = normalize_options({
-                ...this.original_options,
-                encoding: encoding,
-              });
-              // Properties are merged with the existing options instance
-              for (const key in options) {
-                this.options[key] = options[key];
-              }
-              // Options will re-evaluate the Buffer with the new encoding
-              ({ comment, escape, quote } = this.options);
-              break;
-            }
-          }
-          this.state.bomSkipped = true;
-        }
-      }
-      const bufLen = buf.length;
-      let pos;
-      for (pos = 0; pos < bufLen; pos++) {
-        // Ensure we get enough space to look ahead
-        // There should be a way to move this out of the loop
-        if (this.__needMoreData(pos, bufLen, end)) {
-          break;
-        }
-        if (this.state.wasRowDelimiter === true) {
-          this.info.lines++;
-          this.state.wasRowDelimiter = false;
-        }
-        if (to_line !== -1 && this.info.lines > to_line) {
-          this.state.stop = true;
-          close();
-          return;
-        }
-        // Auto discovery of record_delimiter, unix, mac and windows supported
-        if (this.state.quoting === false && record_delimiter.length === 0) {
-          const record_delimiterCount = this.__autoDiscoverRecordDelimiter(
-            buf,
-            pos,
-          );
-          if (record_delimiterCount) {
-            record_delimiter = this.options.record_delimiter;
-          }
-        }
-        const chr = buf[pos];
-        if (raw === true) {
-          rawBuffer.append(chr);
-        }
-        if (
-          (chr === cr || chr === nl) &&
-          this.state.wasRowDelimiter === false
-        ) {
-          this.state.wasRowDelimiter = true;
-        }
-        // Previous char was a valid escape char
-        // treat the current char as a regular char
-        if (this.state.escaping === true) {
-          this.state.escaping = false;
-        } else {
-          // Escape is only active inside quoted fields
-          // We are quoting, the char is an escape chr and there is a chr to escape
-          // if(escape !== null && this.state.quoting === true && chr === escape && pos + 1 < bufLen){
-          if (
-            escape !== null &&
-            this.state.quoting === true &&
-            this.__isEscape(buf, pos, chr) &&
-            pos + escape.length < bufLen
-          ) {
-            if (escapeIsQuote) {
-              if (this.__isQuote(buf, pos + escape.length)) {
-                this.state.escaping = true;
-                pos += escape.length - 1;
-                continue;
-              }
-            } else {
-              this.state.escaping = true;
-              pos += escape.length - 1;
-              continue;
-            }
-          }
-          // Not currently escaping and chr is a quote
-          // TODO: need to compare bytes instead of single char
-          if (this.state.commenting === false && this.__isQuote(buf, pos)) {
-            if (this.state.quoting === true) {
-              const nextChr = buf[pos + quote.length];
-              const isNextChrTrimable =
-                rtrim && this.__isCharTrimable(buf, pos + quote.length);
-              const isNextChrComment =
-                comment !== null &&
-                this.__compareBytes(comment, buf, pos + quote.length, nextChr);
-              const isNextChrDelimiter = this.__isDelimiter(
-                buf,
-                pos + quote.length,
-                nextChr,
-              );
-              const isNextChrRecordDelimiter =
-                record_delimiter.length === 0
-                  ? this.__autoDiscoverRecordDelimiter(buf, pos + quote.length)
-                  : this.__isRecordDelimiter(nextChr, buf, pos + quote.length);
-              // Escape a quote
-              // Treat next char as a regular character
-              if (
-                escape !== null &&
-                this.__isEscape(buf, pos, chr) &&
-                this.__isQuote(buf, pos + escape.length)
-              ) {
-                pos += escape.length - 1;
-              } else if (
-                !nextChr ||
-                isNextChrDelimiter ||
-                isNextChrRecordDelimiter ||
-                isNextChrComment ||
-                isNextChrTrimable
-              ) {
-                this.state.quoting = false;
-                this.state.wasQuoting = true;
-                pos += quote.length - 1;
-                continue;
-              } else if (relax_quotes === false) {
-                const err = this.__error(
-                  new CsvError(
-                    "CSV_INVALID_CLOSING_QUOTE",
-                    [
-                      "Invalid Closing Quote:",
-                      `got "${String.fromCharCode(nextChr)}"`,
-                      `at line ${this.info.lines}`,
-                      "instead of delimiter, record delimiter, trimable character",
-                      "(if activated) or comment",
-                    ],
-                    this.options,
-                    this.__infoField(),
-                  ),
-                );
-                if (err !== undefined) return err;
-              } else {
-                this.state.quoting = false;
-                this.state.wasQuoting = true;
-                this.state.field.prepend(quote);
-                pos += quote.length - 1;
-              }
-            } else {
-              if (this.state.field.length !== 0) {
-                // In relax_quotes mode, treat opening quote preceded by chrs as regular
-                if (relax_quotes === false) {
-                  const info = this.__infoField();
-                  const bom = Object.keys(boms)
-                    .map((b) =>
-                      boms[b].equals(this.state.field.toString()) ? b : false,
-                    )
-                    .filter(Boolean)[0];
-                  const err = this.__error(
-                    new CsvError(
-                      "INVALID_OPENING_QUOTE",
-                      [
-                        "Invalid Opening Quote:",
-                        `a quote is found on field ${JSON.stringify(info.column)} at line ${info.lines}, value is ${JSON.stringify(this.state.field.toString(encoding))}`,
-                        bom ? `(${bom} bom)` : undefined,
-                      ],
-                      this.options,
-                      info,
-                      {
-                        field: this.state.field,
-                      },
-                    ),
-                  );
-                  if (err !== undefined) return err;
-                }
-              } else {
-                this.state.quoting = true;
-                pos += quote.length - 1;
-                continue;
-              }
-            }
-          }
-          if (this.state.quoting === false) {
-            const recordDelimiterLength = this.__isRecordDelimiter(
-              chr,
-              buf,
-              pos,
-            );
-            if (recordDelimiterLength !== 0) {
-              // Do not emit comments which take a full line
-              const skipCommentLine =
-                this.state.commenting &&
-                this.state.wasQuoting === false &&
-                this.state.record.length === 0 &&
-                this.state.field.length === 0;
-              if (skipCommentLine) {
-                this.info.comment_lines++;
-                // Skip full comment line
-              } else {
-                // Activate records emission if above from_line
-                if (
-                  this.state.enabled === false &&
-                  this.info.lines +
-                    (this.state.wasRowDelimiter === true ? 1 : 0) >=
-                    from_line
-                ) {
-                  this.state.enabled = true;
-                  this.__resetField();
-                  this.__resetRecord();
-                  pos += recordDelimiterLength - 1;
-                  continue;
-                }
-                // Skip if line is empty and skip_empty_lines activated
-                if (
-                  skip_empty_lines === true &&
-                  this.state.wasQuoting === false &&
-                  this.state.record.length === 0 &&
-                  this.state.field.length === 0
-                ) {
-                  this.info.empty_lines++;
-                  pos += recordDelimiterLength - 1;
-                  continue;
-                }
-                this.info.bytes = this.state.bufBytesStart + pos;
-                const errField = this.__onField();
-                if (errField !== undefined) return errField;
-                this.info.bytes =
-                  this.state.bufBytesStart + pos + recordDelimiterLength;
-                const errRecord = this.__onRecord(push);
-                if (errRecord !== undefined) return errRecord;
-                if (to !== -1 && this.info.records >= to) {
-                  this.state.stop = true;
-                  close();
-                  return;
-                }
-              }
-              this.state.commenting = false;
-              pos += recordDelimiterLength - 1;
-              continue;
-            }
-            if (this.state.commenting) {
-              continue;
-            }
-            if (
-              comment !== null &&
-              (comment_no_infix === false ||
-                (this.state.record.length === 0 &&
-                  this.state.field.length === 0))
-            ) {
-              const commentCount = this.__compareBytes(comment, buf, pos, chr);
-              if (commentCount !== 0) {
-                this.state.commenting = true;
-                continue;
-              }
-            }
-            const delimiterLength = this.__isDelimiter(buf, pos, chr);
-            if (delimiterLength !== 0) {
-              this.info.bytes = this.state.bufBytesStart + pos;
-              const errField = this.__onField();
-              if (errField !== undefined) return errField;
-              pos += delimiterLength - 1;
-              continue;
-            }
-          }
-        }
-        if (this.state.commenting === false) {
-          if (
-            max_record_size !== 0 &&
-            this.state.record_length + this.state.field.length > max_record_size
-          ) {
-            return this.__error(
-              new CsvError(
-                "CSV_MAX_RECORD_SIZE",
-                [
-                  "Max Record Size:",
-                  "record exceed the maximum number of tolerated bytes",
-                  `of ${max_record_size}`,
-                  `at line ${this.info.lines}`,
-                ],
-                this.options,
-                this.__infoField(),
-              ),
-            );
-          }
-        }
-        const lappend =
-          ltrim === false ||
-          this.state.quoting === true ||
-          this.state.field.length !== 0 ||
-          !this.__isCharTrimable(buf, pos);
-        // rtrim in non quoting is handle in __onField
-        const rappend = rtrim === false || this.state.wasQuoting === false;
-        if (lappend === true && rappend === true) {
-          this.state.field.append(chr);
-        } else if (rtrim === true && !this.__isCharTrimable(buf, pos)) {
-          return this.__error(
-            new CsvError(
-              "CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE",
-              [
-                "Invalid Closing Quote:",
-                "found non trimable byte after quote",
-                `at line ${this.info.lines}`,
-              ],
-              this.options,
-              this.__infoField(),
-            ),
-          );
-        } else {
-          if (lappend === false) {
-            pos += this.__isCharTrimable(buf, pos) - 1;
-          }
-          continue;
-        }
-      }
-      if (end === true) {
-        // Ensure we are not ending in a quoting state
-        if (this.state.quoting === true) {
-          const err = this.__error(
-            new CsvError(
-              "CSV_QUOTE_NOT_CLOSED",
-              [
-                "Quote Not Closed:",
-                `the parsing is finished with an opening quote at line ${this.info.lines}`,
-              ],
-              this.options,
-              this.__infoField(),
-            ),
-          );
-          if (err !== undefined) return err;
-        } else {
-          // Skip last line if it has no characters
-          if (
-            this.state.wasQuoting === true ||
-            this.state.record.length !== 0 ||
-            this.state.field.length !== 0
-          ) {
-            this.info.bytes = this.state.bufBytesStart + pos;
-            const errField = this.__onField();
-            if (errField !== undefined) return errField;
-            const errRecord = this.__onRecord(push);
-            if (errRecord !== undefined) return errRecord;
-          } else if (this.state.wasRowDelimiter === true) {
-            this.info.empty_lines++;
-          } else if (this.state.commenting === true) {
-            this.info.comment_lines++;
-          }
-        }
-      } else {
-        this.state.bufBytesStart += pos;
-        this.state.previousBuf = buf.slice(pos);
-      }
-      if (this.state.wasRowDelimiter === true) {
-        this.info.lines++;
-        this.state.wasRowDelimiter = false;
-      }
-    },
-    __onRecord: function (push) {
-      const {
-        columns,
-        group_columns_by_name,
-        encoding,
-        info,
-        from,
-        relax_column_count,
-        relax_column_count_less,
-        relax_column_count_more,
-        raw,
-        skip_records_with_empty_values,
-      } = this.options;
-      const { enabled, record } = this.state;
-      if (enabled === false) {
-        return this.__resetRecord();
-      }
-      // Convert the first line into column names
-      const recordLength = record.length;
-      if (columns === true) {
-        if (skip_records_with_empty_values === true && isRecordEmpty(record)) {
-          this.__resetRecord();
-          return;
-        }
-        return this.__firstLineToColumns(record);
-      }
-      if (columns === false && this.info.records === 0) {
-        this.state.expectedRecordLength = recordLength;
-      }
-      if (recordLength !== this.state.expectedRecordLength) {
-        const err =
-          columns === false
-            ? new CsvError(
-                "CSV_RECORD_INCONSISTENT_FIELDS_LENGTH",
-                [
-                  "Invalid Record Length:",
-                  `expect ${this.state.expectedRecordLength},`,
-                  `got ${recordLength} on line ${this.info.lines}`,
-                ],
-                this.options,
-                this.__infoField(),
-                {
-                  record: record,
-                },
-              )
-            : new CsvError(
-                "CSV_RECORD_INCONSISTENT_COLUMNS",
-                [
-                  "Invalid Record Length:",
-                  `columns length is ${columns.length},`, // rename columns
-                  `got ${recordLength} on line ${this.info.lines}`,
-                ],
-                this.options,
-                this.__infoField(),
-                {
-                  record: record,
-                },
-              );
-        if (
-          relax_column_count === true ||
-          (relax_column_count_less === true &&
-            recordLength < this.state.expectedRecordLength) ||
-          (relax_column_count_more === true &&
-            recordLength > this.state.expectedRecordLength)
-        ) {
-          this.info.invalid_field_length++;
-          this.state.error = err;
-          // Error is undefined with skip_records_with_error
-        } else {
-          const finalErr = this.__error(err);
-          if (finalErr) return finalErr;
-        }
-      }
-      if (skip_records_with_empty_values === true && isRecordEmpty(record)) {
-        this.__resetRecord();
-        return;
-      }
-      if (this.state.recordHasError === true) {
-        this.__resetRecord();
-        this.state.recordHasError = false;
-        return;
-      }
-      this.info.records++;
-      if (from === 1 || this.info.records >= from) {
-        const { objname } = this.options;
-        // With columns, records are object
-        if (columns !== false) {
-          const obj = {};
-          // Transform record array to an object
-          for (let i = 0, l = record.length; i < l; i++) {
-            if (columns[i] === undefined || columns[i].disabled) continue;
-            // Turn duplicate columns into an array
-            if (
-              group_columns_by_name === true &&
-              Object.hasOwn(obj, columns[i].name)
-            ) {
-              if (Array.isArray(obj[columns[i].name])) {
-                obj[columns[i].name] = obj[columns[i].name].concat(record[i]);
-              } else {
-                obj[columns[i].name] = [obj[columns[i].name], record[i]];
-              }
-            } else {
-              Object.defineProperty(obj, columns[i].name, {
-                value: record[i],
-                enumerable: true,
-                writable: true,
-                configurable: true,
-              });
-            }
-          }
-          // Without objname (default)
-          if (raw === true || info === true) {
-            const extRecord = Object.assign(
-              { record: obj },
-              raw === true
-                ? { raw: this.state.rawBuffer.toString(encoding) }
-                : {},
-              info === true ? { info: this.__infoRecord() } : {},
-            );
-            const err = this.__push(
-              objname === undefined ? extRecord : [obj[objname], extRecord],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          } else {
-            const err = this.__push(
-              objname === undefined ? obj : [obj[objname], obj],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          }
-          // Without columns, records are array
-        } else {
-          if (raw === true || info === true) {
-            const extRecord = Object.assign(
-              { record: record },
-              raw === true
-                ? { raw: this.state.rawBuffer.toString(encoding) }
-                : {},
-              info === true ? { info: this.__infoRecord() } : {},
-            );
-            const err = this.__push(
-              objname === undefined ? extRecord : [record[objname], extRecord],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          } else {
-            const err = this.__push(
-              objname === undefined ? record : [record[objname], record],
-              push,
-            );
-            if (err) {
-              return err;
-            }
-          }
-        }
-      }
-      this.__resetRecord();
-    },
-    __firstLineToColumns: function (record) {
-      const { firstLineToHeaders } = this.state;
-      try {
-        const headers =
-          firstLineToHeaders === undefined
-            ? record
-            : firstLineToHeaders.call(null, record);
-        if (!Array.isArray(headers)) {
-          return this.__error(
-            new CsvError(
-              "CSV_INVALID_COLUMN_MAPPING",
-              [
-                "Invalid Column Mapping:",
-                "expect an array from column function,",
-                `got ${JSON.stringify(headers)}`,
-              ],
-              this.options,
-              this.__infoField(),
-              {
-                headers: headers,
-              },
-            ),
-          );
-        }
-        const normalizedHeaders = normalize_columns_array(headers);
-        this.state.expectedRecordLength = normalizedHeaders.length;
-        this.options.columns = normalizedHeaders;
-        this.__resetRecord();
-        return;
-      } catch (err) {
-        return err;
-      }
-    },
-    __resetRecord: function () {
-      if (this.options.raw === true) {
-        this.state.rawBuffer.reset();
-      }
-      this.state.error = undefined;
-      this.state.record = [];
-      this.state.record_length = 0;
-    },
-    __onField: function () {
-      const { cast, encoding, rtrim, max_record_size } = this.options;
-      const { enabled, wasQuoting } = this.state;
-      // Short circuit for the from_line options
-      if (enabled === false) {
-        return this.__resetField();
-      }
-      let field = this.state.field.toString(encoding);
-      if (rtrim === true && wasQuoting === false) {
-        field = field.trimRight();
-      }
-      if (cast === true) {
-        const [err, f] = this.__cast(field);
-        if (err !== undefined) return err;
-        field = f;
-      }
-      this.state.record.push(field);
-      // Increment record length if record size must not exceed a limit
-      if (max_record_size !== 0 && typeof field === "string") {
-        this.state.record_length += field.length;
-      }
-      this.__resetField();
-    },
-    __resetField: function () {
-      this.state.field.reset();
-      this.state.wasQuoting = false;
-    },
-    __push: function (record, push) {
-      const { on_record } = this.options;
-      if (on_record !== undefined) {
-        const info = this.__infoRecord();
-        try {
-          record = on_record.call(null, record, info);
-        } catch (err) {
-          return err;
-        }
-        if (record === undefined || record === null) {
-          return;
-        }
-      }
-      this.info.bytes_records += this.info.bytes;
-      push(record);
-    },
-    // Return a tuple with the error and the casted value
-    __cast: function (field) {
-      const { columns, relax_column_count } = this.options;
-      const isColumns = Array.isArray(columns);
-      // Dont loose time calling cast
-      // because the final record is an object
-      // and this field can't be associated to a key present in columns
-      if (
-        isColumns === true &&
-        relax_column_count &&
-        this.options.columns.length <= this.state.record.length
-      ) {
-        return [undefined, undefined];
-      }
-      if (this.state.castField !== null) {
-        try {
-          const info = this.__infoField();
-          return [undefined, this.state.castField.call(null, field, info)];
-        } catch (err) {
-          return [err];
-        }
-      }
-      if (this.__isFloat(field)) {
-        return [undefined, parseFloat(field)];
-      } else if (this.options.cast_date !== false) {
-        const info = this.__infoField();
-        return [undefined, this.options.cast_date.call(null, field, info)];
-      }
-      return [undefined, field];
-    },
-    __compareBytes: function (sourceBuf, targetBuf, targetPos, firstByte) {
-      if (sourceBuf[0] !== firstByte) return 0;
-      const sourceLength = sourceBuf.length;
-      for (let i = 1; i < sourceLength; i++) {
-        if (sourceBuf[i] !== targetBuf[targetPos + i]) return 0;
-      }
-      return sourceLength;
-    },
-    // Helper to test if a character is trimable
-    __isCharTrimable: function (buf, pos) {
-      const { timchars, timcharFirstBytes } = this.state;
-      // Fast bail-out: non-whitespace bytes (the common case) are rejected
-      // without scanning the full timchar list.
-      const first = buf[pos];
-      if (first === undefined || timcharFirstBytes[first] === 0) return 0;
-      loop1: for (let i = 0; i < timchars.length; i++) {
-        const timchar = timchars[i];
-        for (let j = 0; j < timchar.length; j++) {
-          if (timchar[j] !== buf[pos + j]) continue loop1;
-        }
-        return timchar.length;
-      }
-      return 0;
-    },
-    __isDelimiter: function (buf, pos, chr) {
-      const { delimiter, ignore_last_delimiters } = this.options;
-      if (
-        ignore_last_delimiters === true &&
-        this.state.record.length === this.options.columns.length - 1
-      ) {
-        return 0;
-      } else if (
-        ignore_last_delimiters !== false &&
-        typeof ignore_last_delimiters === "number" &&
-        this.state.record.length === ignore_last_delimiters - 1
-      ) {
-        return 0;
-      }
-      loop1: for (let i = 0; i < delimiter.length; i++) {
-        const del = delimiter[i];
-        if (del[0] === chr) {
-          for (let j = 1; j < del.length; j++) {
-            if (del[j] !== buf[pos + j]) continue loop1;
-          }
-          return del.length;
-        }
-      }
-      return 0;
-    },
-    __isEscape: function (buf, pos, chr) {
-      const { escape } = this.options;
-      if (escape === null) return false;
-      const l = escape.length;
-      if (escape[0] === chr) {
-        for (let i = 0; i < l; i++) {
-          if (escape[i] !== buf[pos + i]) {
-            return false;
-          }
-        }
-        return true;
-      }
-      return false;
-    },
-    __isFloat: function (value) {
-      return value - parseFloat(value) + 1 >= 0; // Borrowed from jquery
-    },
-    // Keep it in case we implement the `cast_int` option
-    // __isInt(value){
-    //   // return Number.isInteger(parseInt(value))
-    //   // return !isNaN( parseInt( obj ) );
-    //   return /^(\-|\+)?[1-9][0-9]*$/.test(value)
-    // }
-    __isQuote: function (buf, pos) {
-      const { quote } = this.options;
-      if (quote === null) return false;
-      const l = quote.length;
-      for (let i = 0; i < l; i++) {
-        if (quote[i] !== buf[pos + i]) {
-          return false;
-        }
-      }
-      return true;
-    },
-    __isRecordDelimiter: function (chr, buf, pos) {
-      const { record_delimiter } = this.options;
-      const recordDelimiterLength = record_delimiter.length;
-      loop1: for (let i = 0; i < recordDelimiterLength; i++) {
-        const rd = record_delimiter[i];
-        const rdLength = rd.length;
-        if (rd[0] !== chr) {
-          continue;
-        }
-        for (let j = 1; j < rdLength; j++) {
-          if (rd[j] !== buf[pos + j]) {
-            continue loop1;
-          }
-        }
-        return rd.length;
-      }
-      return 0;
-    },
-    __autoDiscoverRecordDelimiter: function (buf, pos) {
-      const { encoding } = this.options;
-      // Note, we don't need to cache this information in state,
-      // It is only called on the first line until we find out a suitable
-      // record delimiter.
-      const rds = [
-        // Important, the windows line ending must be before mac os 9
-        Buffer.from("\r\n", encoding),
-        Buffer.from("\n", encoding),
-        Buffer.from("\r", encoding),
-      ];
-      loop: for (let i = 0; i < rds.length; i++) {
-        const l = rds[i].length;
-        for (let j = 0; j < l; j++) {
-          if (rds[i][j] !== buf[pos + j]) {
-            continue loop;
-          }
-        }
-        this.options.record_delimiter.push(rds[i]);
-        this.state.recordDelimiterMaxLength = rds[i].length;
-        return rds[i].length;
-      }
-      return 0;
-    },
-    __error: function (msg) {
-      const { encoding, raw, skip_records_with_error } = this.options;
-      const err = typeof msg === "string" ? new Error(msg) : msg;
-      if (skip_records_with_error) {
-        this.state.recordHasError = true;
-        if (this.options.on_skip !== undefined) {
-          try {
-            this.options.on_skip(
-              err,
-              raw ? this.state.rawBuffer.toString(encoding) : undefined,
-            );
-          } catch (err) {
-            return err;
-          }
-        }
-        // this.emit('skip', err, raw ? this.state.rawBuffer.toString(encoding) : undefined);
-        return undefined;
-      } else {
-        return err;
-      }
-    },
-    __infoDataSet: function () {
-      return {
-        ...this.info,
-        columns: this.options.columns,
-      };
-    },
-    __infoRecord: function () {
-      const { columns, raw, encoding } = this.options;
-      return {
-        ...this.__infoDataSet(),
-        bytes_records: this.info.bytes,
-        error: this.state.error,
-        header: columns === true,
-        index: this.state.record.length,
-        raw: raw ? this.state.rawBuffer.toString(encoding) : undefined,
-      };
-    },
-    __infoField: function () {
-      const { columns } = this.options;
-      const isColumns = Array.isArray(columns);
-      // Bytes records are only incremented when all records'fields are parsed
-      const bytes_records = this.info.bytes_records;
-      return {
-        ...this.__infoRecord(),
-        bytes_records: bytes_records,
-        column:
-          isColumns === true
-            ? columns.length > this.state.record.length
-              ? columns[this.state.record.length].name
-              : null
-            : this.state.record.length,
-        quoting: this.state.wasQuoting,
-      };
-    },
-  };
-};
-
-
-
-;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/index.js
-/*
-CSV Parse
-
-Please look at the [project documentation](https://csv.js.org/parse/) for
-additional information.
-*/
-
-
-
-
-
-
-
-class Parser extends external_stream_namespaceObject.Transform {
-  constructor(opts = {}) {
-    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
-    this.api = transform({
-      on_skip: (err, chunk) => {
-        this.emit("skip", err, chunk);
-      },
-      ...opts,
-    });
-    // Backward compatibility
-    this.state = this.api.state;
-    this.options = this.api.options;
-    this.info = this.api.info;
-  }
-  // Implementation of `Transform._transform`
-  _transform(buf, _, callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err = this.api.parse(
-      buf,
-      false,
-      (record) => {
-        this.push(record);
-      },
-      () => {
-        this.push(null);
-        this.end();
-        // Fix #333 and break #410
-        //   ko: api.stream.iterator.coffee
-        //   ko with v21.4.0, ok with node v20.5.1: api.stream.finished # aborted (with generate())
-        //   ko: api.stream.finished # aborted (with Readable)
-        // this.destroy()
-        // Fix #410 and partially break #333
-        //   ok: api.stream.iterator.coffee
-        //   ok: api.stream.finished # aborted (with generate())
-        //   broken: api.stream.finished # aborted (with Readable)
-        this.on("end", this.destroy);
-      },
-    );
-    if (err !== undefined) {
-      this.state.stop = true;
-    }
-    callback(err);
-  }
-  // Implementation of `Transform._flush`
-  _flush(callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err = this.api.parse(
-      undefined,
-      true,
-      (record) => {
-        this.push(record);
-      },
-      () => {
-        this.push(null);
-        this.on("end", this.destroy);
-      },
-    );
-    callback(err);
-  }
-}
-
-const parse = function () {
-  let data, options, callback;
-  for (const i in arguments) {
-    const argument = arguments[i];
-    const type = typeof argument;
-    if (
-      data === undefined &&
-      (typeof argument === "string" || Buffer.isBuffer(argument))
-    ) {
-      data = argument;
-    } else if (options === undefined && is_object(argument)) {
-      options = argument;
-    } else if (callback === undefined && type === "function") {
-      callback = argument;
-    } else {
-      throw new CsvError(
-        "CSV_INVALID_ARGUMENT",
-        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
-        options || {},
-      );
-    }
-  }
-  const parser = new Parser(options);
-  if (callback) {
-    const records =
-      options === undefined || options.objname === undefined
-        ? []
-        : Object.create(null);
-    parser.on("readable", function () {
-      let record;
-      while ((record = this.read()) !== null) {
-        if (options === undefined || options.objname === undefined) {
-          records.push(record);
-        } else {
-          Object.assign(records, {
-            [record[0]]: record[1],
-            // writable: true,
-            // enumerable: true,
-            // configurable: true
-          });
-        }
-      }
-    });
-    parser.on("error", function (err) {
-      callback(err, undefined, parser.api.__infoDataSet());
-    });
-    parser.on("end", function () {
-      callback(undefined, records, parser.api.__infoDataSet());
-    });
-  }
-  if (data !== undefined) {
-    const writer = function () {
-      parser.write(data);
-      parser.end();
-    };
-    // Support Deno, Rollup doesn't provide a shim for setImmediate
-    if (typeof setImmediate === "function") {
-      setImmediate(writer);
-    } else {
-      setTimeout(writer, 0);
-    }
-  }
-  return parser;
-};
-
-
-
-;// CONCATENATED MODULE: ./src/data/general-path.ts
-/**
- * The general CSV path: csv-parse (streaming API) with quoted fields, CRLF, blank lines and
- * white space around fields. Every record goes through csv-parse's `on_record` hook as soon
- * as it is parsed, so rows are checked and converted in file order and errors come out in
- * file order whatever the piece sizes.
- */
-
-
-
-
-/** Stops csv-parse from inside `on_record` once the header is known (header-only reads). */
-class StopReading extends Error {
-}
-/**
- * Reads a CSV file with csv-parse and yields numeric chunks.
- *
- * Settings: comma delimiter, `"` quote (and `""` inside quotes), `\n` or `\r\n` line ends,
- * white space around fields trimmed (`trim: true`, the set of `String.prototype.trim`),
- * lines holding only white space skipped, field counts checked here (`csv-ragged`).
- * The physical line of a record is worked out from csv-parse's counts: 1 + skipped blank
- * lines + earlier records + line breaks inside earlier quoted fields.
- *
- * @param pieces the file's bytes in pieces of any size
- * @param target what to read
- * @param skipRows data rows already handed out by the fast path: parsed and checked but not converted
- */
-async function* generalChunks(pieces, target, skipRows = 0) {
-    const { file, request } = target;
-    const builder = new ChunkBuilder(request, target.chunkRows);
-    let plan = null;
-    let breaksInFields = 0;
-    let dataRows = 0;
-    const onRecord = (record, info) => {
-        const line = 1 + info.empty_lines + (info.records - 1) + breaksInFields;
-        for (const field of record) {
-            for (let i = field.indexOf('\n'); i !== -1; i = field.indexOf('\n', i + 1))
-                breaksInFields++;
-        }
-        if (plan === null) {
-            plan = planColumns(file, record, line, request);
-            target.onHeader(plan);
-            if (target.headerOnly)
-                throw new StopReading();
-            return null;
-        }
-        if (record.length !== plan.header.length)
-            throw raggedError(file, line, plan.header.length, record.length);
-        if (dataRows++ < skipRows)
-            return null;
-        const { fieldOfSlot } = plan;
-        const row = builder.row;
-        for (let slot = 0; slot < fieldOfSlot.length; slot++) {
-            builder.slots[slot][row] = cellNumber(record[fieldOfSlot[slot]], file, line, request.distinct[slot]);
-        }
-        builder.lines[row] = line;
-        builder.endRow();
-        return null;
-    };
-    const parser = parse({
-        bom: false, // line-blocks drops it
-        delimiter: ',',
-        quote: '"',
-        escape: '"',
-        record_delimiter: ['\r\n', '\n'],
-        trim: true,
-        skip_empty_lines: true,
-        relax_column_count: true,
-        on_record: onRecord,
-    });
-    // Errors are read from `parser.errored` after each write; this keeps Node from also
-    // reporting them as unhandled.
-    parser.on('error', () => undefined);
-    /** 1-based line where the next record starts (or the open one started). */
-    const nextLine = () => 1 + parser.info.empty_lines + parser.info.records + breaksInFields;
-    /**
-     * True when reading should stop quietly; throws the row or syntax error otherwise. After
-     * bad bytes (`bad`), a syntax error only means the text was cut short: the bad bytes win.
-     */
-    const settle = (bad) => {
-        const failure = parser.errored;
-        if (failure === null)
-            return false;
-        if (failure instanceof StopReading)
-            return true;
-        if (failure instanceof errors/* InputError */.dz)
-            throw failure;
-        if (bad !== null)
-            throw encodingError(file, 1 + lineFeeds, bad.utf16);
-        throw syntaxError(failure, file, nextLine());
-    };
-    // Line feeds written so far: the line of bad bytes is the one after them.
-    let lineFeeds = 0;
-    const blocks = lineBlocks(pieces)[Symbol.asyncIterator]();
-    try {
-        let bad = null;
-        for (;;) {
-            const next = await blocks.next();
-            if (next.done === true)
-                break;
-            if (next.value.badUtf8) {
-                // The lines before the bad bytes are written; finish them first so that an
-                // earlier row error wins, as it does on the fast path.
-                bad = next.value;
-                break;
-            }
-            const { bytes } = next.value;
-            lineFeeds += countLineFeeds(bytes);
-            parser.write(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
-            if (settle(null))
-                return;
-            for (const chunk of builder.take()) {
-                yield chunk;
-                if (target.recycle === true)
-                    builder.recycle(chunk);
-            }
-        }
-        await endParser(parser);
-        if (settle(bad))
-            return;
-        if (bad !== null)
-            throw encodingError(file, 1 + lineFeeds, bad.utf16);
-        if (plan === null)
-            throw emptyError(file);
-        builder.flush();
-        for (const chunk of builder.take()) {
-            yield chunk;
-            if (target.recycle === true)
-                builder.recycle(chunk);
-        }
-    }
-    finally {
-        parser.destroy();
-        await blocks.return?.(undefined);
-    }
-}
-/** Counts `\n` bytes. */
-function countLineFeeds(bytes) {
-    let n = 0;
-    for (let i = bytes.indexOf(10); i !== -1; i = bytes.indexOf(10, i + 1))
-        n++;
-    return n;
-}
-/** Ends the parser's input and waits until it has handled the last record (or failed). */
-function endParser(parser) {
-    return new Promise((resolve) => {
-        if (parser.errored !== null) {
-            resolve();
-            return;
-        }
-        const done = () => resolve();
-        parser.once('finish', done);
-        parser.once('error', done);
-        parser.once('close', done);
-        parser.end();
-    });
-}
-/** Turns a csv-parse error into InputError `csv-syntax` at the line where the record began. */
-function syntaxError(failure, file, line) {
-    const code = failure.code;
-    let what;
-    switch (code) {
-        case 'CSV_QUOTE_NOT_CLOSED':
-            what = `a quoted field in the record starting on line ${line} is never closed; expected a closing quote (")`;
-            break;
-        case 'CSV_INVALID_CLOSING_QUOTE':
-        case 'CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE':
-            what = `in the record starting on line ${line}, a closing quote is followed by text; expected a comma or the end of the line after it (write "" for a quote inside a quoted field)`;
-            break;
-        case 'INVALID_OPENING_QUOTE':
-            what = `in the record starting on line ${line}, a quote appears inside an unquoted field; expected quotes only around a whole field (write "" for a quote inside a quoted field)`;
-            break;
-        default:
-            what = `the record starting on line ${line} is not valid CSV: ${failure.message}`;
-    }
-    return new errors/* InputError */.dz('csv-syntax', what, { file, line });
 }
 
 ;// CONCATENATED MODULE: ./src/data/table.ts
@@ -39667,7 +37396,6 @@ function syntaxError(failure, file, line) {
  * plain numeric CSV (fast-path.ts), and csv-parse for everything else (general-path.ts). The
  * fast one hands the file to the general one when it meets something it does not handle.
  */
-
 
 
 
@@ -39777,7 +37505,7 @@ async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES) {
 }
 /** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
 function checkOptions(options) {
-    const { columns, chunkRows = DEFAULT_CHUNK_ROWS, maxBytes = csv_rules_DEFAULT_MAX_BYTES, general = false } = options;
+    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false } = options;
     if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
         throw new TypeError('readTable: `columns` must be an array of column names');
     }
@@ -39807,7 +37535,7 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
     let headerSeen = false;
     const target = {
         file: path,
-        request: planRequest(settings.columns),
+        request: (0,csv_rules/* planRequest */.NX)(settings.columns),
         chunkRows: settings.chunkRows,
         headerOnly,
         recycle,
@@ -39832,6 +37560,8 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
                 throw error;
         }
     }
+    // csv-parse is loaded only when a file needs it (most data files take the fast path).
+    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(70), __nccwpck_require__.e(462)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
     yield* generalChunks(open(), target, handedOut);
 }
 
@@ -39985,10 +37715,11 @@ async function fitModel(repo, descriptor, settings) {
     }
     // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
     // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
+    const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? (0,cross_validation/* complementFactors */.Zd)(builder.factors) : [] };
     let trainPredictions = new Float64Array(train.rows);
     let crossValidation;
     try {
-        crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: builder.factors, predictions: trainPredictions });
+        crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
     }
     catch {
         // The cross-validation check will run it again and report why it could not be computed
@@ -39996,7 +37727,6 @@ async function fitModel(repo, descriptor, settings) {
         crossValidation = null;
         trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
     }
-    builder.factors.length = 0; // the fold factors are no longer needed
     const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
     const trainSums = (0,regression/* emptySums */.y3)();
     (0,regression/* addErrors */.xB)(trainSums, train.y, trainPredictions, train.rows);
@@ -40037,7 +37767,7 @@ async function fitModel(repo, descriptor, settings) {
         targetSd: targetStats.sd,
         targetRange: (0,stats/* range */.y)(train.y, train.rows),
     };
-    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation };
+    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation, foldFactors };
 }
 /**
  * InputError `design-overflow` when a block of the training design holds a value that is not a
@@ -40178,7 +37908,10 @@ async function evaluateModel(repo, descriptor, settings, base) {
         return errorResult(descriptor.name, descriptor.file, new errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
     }
     // The pipeline's own passes already produced what the shared diagnostics would compute.
-    const memo = new Map([[shared/* SHARED_FOLDS_KEY */.Tq, model.folds]]);
+    const memo = new Map([
+        [shared/* SHARED_FOLDS_KEY */.Tq, model.folds],
+        [shared/* SHARED_FOLD_FACTORS_KEY */.b9, model.foldFactors],
+    ]);
     if (model.crossValidation !== null)
         memo.set(shared/* SHARED_CROSS_VALIDATION_KEY */.X, model.crossValidation);
     const context = {
@@ -41424,7 +39157,7 @@ async function writeFileReports(result, files) {
 /* harmony import */ var node_url__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_url__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _model_evaluate_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(80);
+/* harmony import */ var _model_evaluate_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4216);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(7844);
 /* harmony import */ var _pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6093);
 /**
@@ -42036,16 +39769,202 @@ var ucs2length = __nccwpck_require__(6214);
 // Generated by test/tools/gen-validators.mjs from src/config/schema/*.json and src/config/limits.ts: do not edit.
 
 
-const validateSettings = validate20;
-const schema31 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const validateSettings = validate52;
+const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
-const schema32 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
-const schema33 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
 const func2 = Object.prototype.hasOwnProperty;
-function validate21(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+const schema21 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+function validate54(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate21.evaluated;
+    const evaluated0 = validate54.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    const _errs0 = errors;
+    let valid0 = false;
+    let passing0 = null;
+    const _errs1 = errors;
+    if ((typeof data == "number") && (isFinite(data))) {
+        if (data < 0 || isNaN(data)) {
+            const err0 = { instancePath, schemaPath: "#/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[0], data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+    }
+    else {
+        const err1 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[0].type, parentSchema: schema21.oneOf[0], data };
+        if (vErrors === null) {
+            vErrors = [err1];
+        }
+        else {
+            vErrors.push(err1);
+        }
+        errors++;
+    }
+    var _valid0 = _errs1 === errors;
+    if (_valid0) {
+        valid0 = true;
+        passing0 = 0;
+    }
+    const _errs3 = errors;
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (Object.keys(data).length < 1) {
+            const err2 = { instancePath, schemaPath: "#/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema21.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err2];
+            }
+            else {
+                vErrors.push(err2);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!((key0 === "warn") || (key0 === "fail"))) {
+                const err3 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema21.oneOf[1], data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.warn !== undefined) {
+            let data0 = data.warn;
+            if ((typeof data0 == "number") && (isFinite(data0))) {
+                if (data0 < 0 || isNaN(data0)) {
+                    const err4 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[1].properties.warn, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err5 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[1].properties.warn.type, parentSchema: schema21.oneOf[1].properties.warn, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.fail !== undefined) {
+            let data1 = data.fail;
+            if ((typeof data1 == "number") && (isFinite(data1))) {
+                if (data1 < 0 || isNaN(data1)) {
+                    const err6 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[1].properties.fail, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[1].properties.fail.type, parentSchema: schema21.oneOf[1].properties.fail, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err8 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema21.oneOf[1].type, parentSchema: schema21.oneOf[1], data };
+        if (vErrors === null) {
+            vErrors = [err8];
+        }
+        else {
+            vErrors.push(err8);
+        }
+        errors++;
+    }
+    var _valid0 = _errs3 === errors;
+    if (_valid0 && valid0) {
+        valid0 = false;
+        passing0 = [passing0, 1];
+    }
+    else {
+        if (_valid0) {
+            valid0 = true;
+            passing0 = 1;
+            var props0 = true;
+        }
+        const _errs10 = errors;
+        if ("off" !== data) {
+            const err9 = { instancePath, schemaPath: "#/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema21.oneOf[2], data };
+            if (vErrors === null) {
+                vErrors = [err9];
+            }
+            else {
+                vErrors.push(err9);
+            }
+            errors++;
+        }
+        var _valid0 = _errs10 === errors;
+        if (_valid0 && valid0) {
+            valid0 = false;
+            passing0 = [passing0, 2];
+        }
+        else {
+            if (_valid0) {
+                valid0 = true;
+                passing0 = 2;
+            }
+        }
+    }
+    if (!valid0) {
+        const err10 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema21.oneOf, parentSchema: schema21, data };
+        if (vErrors === null) {
+            vErrors = [err10];
+        }
+        else {
+            vErrors.push(err10);
+        }
+        errors++;
+    }
+    else {
+        errors = _errs0;
+        if (vErrors !== null) {
+            if (_errs0) {
+                vErrors.length = _errs0;
+            }
+            else {
+                vErrors = null;
+            }
+        }
+    }
+    validate54.errors = vErrors;
+    evaluated0.props = props0;
+    return errors === 0;
+}
+validate54.evaluated = { "dynamicProps": true, "dynamicItems": false };
+function validate53(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate53.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -42054,8 +39973,8 @@ function validate21(data, { instancePath = "", parentData, parentDataProperty, r
     }
     if (data && typeof data == "object" && !Array.isArray(data)) {
         for (const key0 in data) {
-            if (!(func2.call(schema32.properties, key0))) {
-                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema32, data };
+            if (!(func2.call(schema20.properties, key0))) {
+                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema20, data };
                 if (vErrors === null) {
                     vErrors = [err0];
                 }
@@ -42066,1928 +39985,91 @@ function validate21(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
         if (data.gap_ratio !== undefined) {
-            let data0 = data.gap_ratio;
-            const _errs4 = errors;
-            let valid2 = false;
-            let passing0 = null;
-            const _errs5 = errors;
-            if ((typeof data0 == "number") && (isFinite(data0))) {
-                if (data0 < 0 || isNaN(data0)) {
-                    const err1 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err1];
-                    }
-                    else {
-                        vErrors.push(err1);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err2 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err2];
-                }
-                else {
-                    vErrors.push(err2);
-                }
-                errors++;
-            }
-            var _valid0 = _errs5 === errors;
-            if (_valid0) {
-                valid2 = true;
-                passing0 = 0;
-            }
-            const _errs7 = errors;
-            if (data0 && typeof data0 == "object" && !Array.isArray(data0)) {
-                if (Object.keys(data0).length < 1) {
-                    const err3 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err3];
-                    }
-                    else {
-                        vErrors.push(err3);
-                    }
-                    errors++;
-                }
-                for (const key1 in data0) {
-                    if (!((key1 === "warn") || (key1 === "fail"))) {
-                        const err4 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data0 };
-                        if (vErrors === null) {
-                            vErrors = [err4];
-                        }
-                        else {
-                            vErrors.push(err4);
-                        }
-                        errors++;
-                    }
-                }
-                if (data0.warn !== undefined) {
-                    let data1 = data0.warn;
-                    if ((typeof data1 == "number") && (isFinite(data1))) {
-                        if (data1 < 0 || isNaN(data1)) {
-                            const err5 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data1 };
-                            if (vErrors === null) {
-                                vErrors = [err5];
-                            }
-                            else {
-                                vErrors.push(err5);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err6 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data1 };
-                        if (vErrors === null) {
-                            vErrors = [err6];
-                        }
-                        else {
-                            vErrors.push(err6);
-                        }
-                        errors++;
-                    }
-                }
-                if (data0.fail !== undefined) {
-                    let data2 = data0.fail;
-                    if ((typeof data2 == "number") && (isFinite(data2))) {
-                        if (data2 < 0 || isNaN(data2)) {
-                            const err7 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data2 };
-                            if (vErrors === null) {
-                                vErrors = [err7];
-                            }
-                            else {
-                                vErrors.push(err7);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err8 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data2 };
-                        if (vErrors === null) {
-                            vErrors = [err8];
-                        }
-                        else {
-                            vErrors.push(err8);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err9 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err9];
-                }
-                else {
-                    vErrors.push(err9);
-                }
-                errors++;
-            }
-            var _valid0 = _errs7 === errors;
-            if (_valid0 && valid2) {
-                valid2 = false;
-                passing0 = [passing0, 1];
-            }
-            else {
-                if (_valid0) {
-                    valid2 = true;
-                    passing0 = 1;
-                }
-                const _errs14 = errors;
-                if ("off" !== data0) {
-                    const err10 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err10];
-                    }
-                    else {
-                        vErrors.push(err10);
-                    }
-                    errors++;
-                }
-                var _valid0 = _errs14 === errors;
-                if (_valid0 && valid2) {
-                    valid2 = false;
-                    passing0 = [passing0, 2];
-                }
-                else {
-                    if (_valid0) {
-                        valid2 = true;
-                        passing0 = 2;
-                    }
-                }
-            }
-            if (!valid2) {
-                const err11 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err11];
-                }
-                else {
-                    vErrors.push(err11);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs4;
-                if (vErrors !== null) {
-                    if (_errs4) {
-                        vErrors.length = _errs4;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.params_per_sample !== undefined) {
-            let data3 = data.params_per_sample;
-            const _errs17 = errors;
-            let valid5 = false;
-            let passing1 = null;
-            const _errs18 = errors;
-            if ((typeof data3 == "number") && (isFinite(data3))) {
-                if (data3 < 0 || isNaN(data3)) {
-                    const err12 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err12];
-                    }
-                    else {
-                        vErrors.push(err12);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err13 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err13];
-                }
-                else {
-                    vErrors.push(err13);
-                }
-                errors++;
-            }
-            var _valid1 = _errs18 === errors;
-            if (_valid1) {
-                valid5 = true;
-                passing1 = 0;
-            }
-            const _errs20 = errors;
-            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
-                if (Object.keys(data3).length < 1) {
-                    const err14 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err14];
-                    }
-                    else {
-                        vErrors.push(err14);
-                    }
-                    errors++;
-                }
-                for (const key2 in data3) {
-                    if (!((key2 === "warn") || (key2 === "fail"))) {
-                        const err15 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data3 };
-                        if (vErrors === null) {
-                            vErrors = [err15];
-                        }
-                        else {
-                            vErrors.push(err15);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.warn !== undefined) {
-                    let data4 = data3.warn;
-                    if ((typeof data4 == "number") && (isFinite(data4))) {
-                        if (data4 < 0 || isNaN(data4)) {
-                            const err16 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data4 };
-                            if (vErrors === null) {
-                                vErrors = [err16];
-                            }
-                            else {
-                                vErrors.push(err16);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err17 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data4 };
-                        if (vErrors === null) {
-                            vErrors = [err17];
-                        }
-                        else {
-                            vErrors.push(err17);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.fail !== undefined) {
-                    let data5 = data3.fail;
-                    if ((typeof data5 == "number") && (isFinite(data5))) {
-                        if (data5 < 0 || isNaN(data5)) {
-                            const err18 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data5 };
-                            if (vErrors === null) {
-                                vErrors = [err18];
-                            }
-                            else {
-                                vErrors.push(err18);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err19 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data5 };
-                        if (vErrors === null) {
-                            vErrors = [err19];
-                        }
-                        else {
-                            vErrors.push(err19);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err20 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err20];
-                }
-                else {
-                    vErrors.push(err20);
-                }
-                errors++;
-            }
-            var _valid1 = _errs20 === errors;
-            if (_valid1 && valid5) {
-                valid5 = false;
-                passing1 = [passing1, 1];
-            }
-            else {
-                if (_valid1) {
-                    valid5 = true;
-                    passing1 = 1;
-                }
-                const _errs27 = errors;
-                if ("off" !== data3) {
-                    const err21 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err21];
-                    }
-                    else {
-                        vErrors.push(err21);
-                    }
-                    errors++;
-                }
-                var _valid1 = _errs27 === errors;
-                if (_valid1 && valid5) {
-                    valid5 = false;
-                    passing1 = [passing1, 2];
-                }
-                else {
-                    if (_valid1) {
-                        valid5 = true;
-                        passing1 = 2;
-                    }
-                }
-            }
-            if (!valid5) {
-                const err22 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing1 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err22];
-                }
-                else {
-                    vErrors.push(err22);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs17;
-                if (vErrors !== null) {
-                    if (_errs17) {
-                        vErrors.length = _errs17;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.coefficient !== undefined) {
-            let data6 = data.coefficient;
-            const _errs30 = errors;
-            let valid8 = false;
-            let passing2 = null;
-            const _errs31 = errors;
-            if ((typeof data6 == "number") && (isFinite(data6))) {
-                if (data6 < 0 || isNaN(data6)) {
-                    const err23 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err23];
-                    }
-                    else {
-                        vErrors.push(err23);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err24 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data6 };
-                if (vErrors === null) {
-                    vErrors = [err24];
-                }
-                else {
-                    vErrors.push(err24);
-                }
-                errors++;
-            }
-            var _valid2 = _errs31 === errors;
-            if (_valid2) {
-                valid8 = true;
-                passing2 = 0;
-            }
-            const _errs33 = errors;
-            if (data6 && typeof data6 == "object" && !Array.isArray(data6)) {
-                if (Object.keys(data6).length < 1) {
-                    const err25 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err25];
-                    }
-                    else {
-                        vErrors.push(err25);
-                    }
-                    errors++;
-                }
-                for (const key3 in data6) {
-                    if (!((key3 === "warn") || (key3 === "fail"))) {
-                        const err26 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err26];
-                        }
-                        else {
-                            vErrors.push(err26);
-                        }
-                        errors++;
-                    }
-                }
-                if (data6.warn !== undefined) {
-                    let data7 = data6.warn;
-                    if ((typeof data7 == "number") && (isFinite(data7))) {
-                        if (data7 < 0 || isNaN(data7)) {
-                            const err27 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data7 };
-                            if (vErrors === null) {
-                                vErrors = [err27];
-                            }
-                            else {
-                                vErrors.push(err27);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err28 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data7 };
-                        if (vErrors === null) {
-                            vErrors = [err28];
-                        }
-                        else {
-                            vErrors.push(err28);
-                        }
-                        errors++;
-                    }
-                }
-                if (data6.fail !== undefined) {
-                    let data8 = data6.fail;
-                    if ((typeof data8 == "number") && (isFinite(data8))) {
-                        if (data8 < 0 || isNaN(data8)) {
-                            const err29 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data8 };
-                            if (vErrors === null) {
-                                vErrors = [err29];
-                            }
-                            else {
-                                vErrors.push(err29);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err30 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err30];
-                        }
-                        else {
-                            vErrors.push(err30);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err31 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data6 };
-                if (vErrors === null) {
-                    vErrors = [err31];
-                }
-                else {
-                    vErrors.push(err31);
-                }
-                errors++;
-            }
-            var _valid2 = _errs33 === errors;
-            if (_valid2 && valid8) {
-                valid8 = false;
-                passing2 = [passing2, 1];
-            }
-            else {
-                if (_valid2) {
-                    valid8 = true;
-                    passing2 = 1;
-                }
-                const _errs40 = errors;
-                if ("off" !== data6) {
-                    const err32 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err32];
-                    }
-                    else {
-                        vErrors.push(err32);
-                    }
-                    errors++;
-                }
-                var _valid2 = _errs40 === errors;
-                if (_valid2 && valid8) {
-                    valid8 = false;
-                    passing2 = [passing2, 2];
-                }
-                else {
-                    if (_valid2) {
-                        valid8 = true;
-                        passing2 = 2;
-                    }
-                }
-            }
-            if (!valid8) {
-                const err33 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing2 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data6 };
-                if (vErrors === null) {
-                    vErrors = [err33];
-                }
-                else {
-                    vErrors.push(err33);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs30;
-                if (vErrors !== null) {
-                    if (_errs30) {
-                        vErrors.length = _errs30;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.cv_ratio !== undefined) {
-            let data9 = data.cv_ratio;
-            const _errs43 = errors;
-            let valid11 = false;
-            let passing3 = null;
-            const _errs44 = errors;
-            if ((typeof data9 == "number") && (isFinite(data9))) {
-                if (data9 < 0 || isNaN(data9)) {
-                    const err34 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data9 };
-                    if (vErrors === null) {
-                        vErrors = [err34];
-                    }
-                    else {
-                        vErrors.push(err34);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err35 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err35];
-                }
-                else {
-                    vErrors.push(err35);
-                }
-                errors++;
-            }
-            var _valid3 = _errs44 === errors;
-            if (_valid3) {
-                valid11 = true;
-                passing3 = 0;
-            }
-            const _errs46 = errors;
-            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                if (Object.keys(data9).length < 1) {
-                    const err36 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data9 };
-                    if (vErrors === null) {
-                        vErrors = [err36];
-                    }
-                    else {
-                        vErrors.push(err36);
-                    }
-                    errors++;
-                }
-                for (const key4 in data9) {
-                    if (!((key4 === "warn") || (key4 === "fail"))) {
-                        const err37 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err37];
-                        }
-                        else {
-                            vErrors.push(err37);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.warn !== undefined) {
-                    let data10 = data9.warn;
-                    if ((typeof data10 == "number") && (isFinite(data10))) {
-                        if (data10 < 0 || isNaN(data10)) {
-                            const err38 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data10 };
-                            if (vErrors === null) {
-                                vErrors = [err38];
-                            }
-                            else {
-                                vErrors.push(err38);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err39 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data10 };
-                        if (vErrors === null) {
-                            vErrors = [err39];
-                        }
-                        else {
-                            vErrors.push(err39);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.fail !== undefined) {
-                    let data11 = data9.fail;
-                    if ((typeof data11 == "number") && (isFinite(data11))) {
-                        if (data11 < 0 || isNaN(data11)) {
-                            const err40 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data11 };
-                            if (vErrors === null) {
-                                vErrors = [err40];
-                            }
-                            else {
-                                vErrors.push(err40);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err41 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data11 };
-                        if (vErrors === null) {
-                            vErrors = [err41];
-                        }
-                        else {
-                            vErrors.push(err41);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err42 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err42];
-                }
-                else {
-                    vErrors.push(err42);
-                }
-                errors++;
-            }
-            var _valid3 = _errs46 === errors;
-            if (_valid3 && valid11) {
-                valid11 = false;
-                passing3 = [passing3, 1];
-            }
-            else {
-                if (_valid3) {
-                    valid11 = true;
-                    passing3 = 1;
-                }
-                const _errs53 = errors;
-                if ("off" !== data9) {
-                    const err43 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data9 };
-                    if (vErrors === null) {
-                        vErrors = [err43];
-                    }
-                    else {
-                        vErrors.push(err43);
-                    }
-                    errors++;
-                }
-                var _valid3 = _errs53 === errors;
-                if (_valid3 && valid11) {
-                    valid11 = false;
-                    passing3 = [passing3, 2];
-                }
-                else {
-                    if (_valid3) {
-                        valid11 = true;
-                        passing3 = 2;
-                    }
-                }
-            }
-            if (!valid11) {
-                const err44 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing3 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err44];
-                }
-                else {
-                    vErrors.push(err44);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs43;
-                if (vErrors !== null) {
-                    if (_errs43) {
-                        vErrors.length = _errs43;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.leakage !== undefined) {
-            let data12 = data.leakage;
-            const _errs56 = errors;
-            let valid14 = false;
-            let passing4 = null;
-            const _errs57 = errors;
-            if ((typeof data12 == "number") && (isFinite(data12))) {
-                if (data12 < 0 || isNaN(data12)) {
-                    const err45 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data12 };
-                    if (vErrors === null) {
-                        vErrors = [err45];
-                    }
-                    else {
-                        vErrors.push(err45);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err46 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err46];
-                }
-                else {
-                    vErrors.push(err46);
-                }
-                errors++;
-            }
-            var _valid4 = _errs57 === errors;
-            if (_valid4) {
-                valid14 = true;
-                passing4 = 0;
-            }
-            const _errs59 = errors;
-            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
-                if (Object.keys(data12).length < 1) {
-                    const err47 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data12 };
-                    if (vErrors === null) {
-                        vErrors = [err47];
-                    }
-                    else {
-                        vErrors.push(err47);
-                    }
-                    errors++;
-                }
-                for (const key5 in data12) {
-                    if (!((key5 === "warn") || (key5 === "fail"))) {
-                        const err48 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err48];
-                        }
-                        else {
-                            vErrors.push(err48);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.warn !== undefined) {
-                    let data13 = data12.warn;
-                    if ((typeof data13 == "number") && (isFinite(data13))) {
-                        if (data13 < 0 || isNaN(data13)) {
-                            const err49 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data13 };
-                            if (vErrors === null) {
-                                vErrors = [err49];
-                            }
-                            else {
-                                vErrors.push(err49);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err50 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data13 };
-                        if (vErrors === null) {
-                            vErrors = [err50];
-                        }
-                        else {
-                            vErrors.push(err50);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.fail !== undefined) {
-                    let data14 = data12.fail;
-                    if ((typeof data14 == "number") && (isFinite(data14))) {
-                        if (data14 < 0 || isNaN(data14)) {
-                            const err51 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data14 };
-                            if (vErrors === null) {
-                                vErrors = [err51];
-                            }
-                            else {
-                                vErrors.push(err51);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err52 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err52];
-                        }
-                        else {
-                            vErrors.push(err52);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err53 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err53];
-                }
-                else {
-                    vErrors.push(err53);
-                }
-                errors++;
-            }
-            var _valid4 = _errs59 === errors;
-            if (_valid4 && valid14) {
-                valid14 = false;
-                passing4 = [passing4, 1];
-            }
-            else {
-                if (_valid4) {
-                    valid14 = true;
-                    passing4 = 1;
-                }
-                const _errs66 = errors;
-                if ("off" !== data12) {
-                    const err54 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data12 };
-                    if (vErrors === null) {
-                        vErrors = [err54];
-                    }
-                    else {
-                        vErrors.push(err54);
-                    }
-                    errors++;
-                }
-                var _valid4 = _errs66 === errors;
-                if (_valid4 && valid14) {
-                    valid14 = false;
-                    passing4 = [passing4, 2];
-                }
-                else {
-                    if (_valid4) {
-                        valid14 = true;
-                        passing4 = 2;
-                    }
-                }
-            }
-            if (!valid14) {
-                const err55 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing4 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err55];
-                }
-                else {
-                    vErrors.push(err55);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs56;
-                if (vErrors !== null) {
-                    if (_errs56) {
-                        vErrors.length = _errs56;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.swing !== undefined) {
-            let data15 = data.swing;
-            const _errs69 = errors;
-            let valid17 = false;
-            let passing5 = null;
-            const _errs70 = errors;
-            if ((typeof data15 == "number") && (isFinite(data15))) {
-                if (data15 < 0 || isNaN(data15)) {
-                    const err56 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data15 };
-                    if (vErrors === null) {
-                        vErrors = [err56];
-                    }
-                    else {
-                        vErrors.push(err56);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err57 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data15 };
-                if (vErrors === null) {
-                    vErrors = [err57];
-                }
-                else {
-                    vErrors.push(err57);
-                }
-                errors++;
-            }
-            var _valid5 = _errs70 === errors;
-            if (_valid5) {
-                valid17 = true;
-                passing5 = 0;
-            }
-            const _errs72 = errors;
-            if (data15 && typeof data15 == "object" && !Array.isArray(data15)) {
-                if (Object.keys(data15).length < 1) {
-                    const err58 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data15 };
-                    if (vErrors === null) {
-                        vErrors = [err58];
-                    }
-                    else {
-                        vErrors.push(err58);
-                    }
-                    errors++;
-                }
-                for (const key6 in data15) {
-                    if (!((key6 === "warn") || (key6 === "fail"))) {
-                        const err59 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data15 };
-                        if (vErrors === null) {
-                            vErrors = [err59];
-                        }
-                        else {
-                            vErrors.push(err59);
-                        }
-                        errors++;
-                    }
-                }
-                if (data15.warn !== undefined) {
-                    let data16 = data15.warn;
-                    if ((typeof data16 == "number") && (isFinite(data16))) {
-                        if (data16 < 0 || isNaN(data16)) {
-                            const err60 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data16 };
-                            if (vErrors === null) {
-                                vErrors = [err60];
-                            }
-                            else {
-                                vErrors.push(err60);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err61 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data16 };
-                        if (vErrors === null) {
-                            vErrors = [err61];
-                        }
-                        else {
-                            vErrors.push(err61);
-                        }
-                        errors++;
-                    }
-                }
-                if (data15.fail !== undefined) {
-                    let data17 = data15.fail;
-                    if ((typeof data17 == "number") && (isFinite(data17))) {
-                        if (data17 < 0 || isNaN(data17)) {
-                            const err62 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data17 };
-                            if (vErrors === null) {
-                                vErrors = [err62];
-                            }
-                            else {
-                                vErrors.push(err62);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err63 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data17 };
-                        if (vErrors === null) {
-                            vErrors = [err63];
-                        }
-                        else {
-                            vErrors.push(err63);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err64 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data15 };
-                if (vErrors === null) {
-                    vErrors = [err64];
-                }
-                else {
-                    vErrors.push(err64);
-                }
-                errors++;
-            }
-            var _valid5 = _errs72 === errors;
-            if (_valid5 && valid17) {
-                valid17 = false;
-                passing5 = [passing5, 1];
-            }
-            else {
-                if (_valid5) {
-                    valid17 = true;
-                    passing5 = 1;
-                }
-                const _errs79 = errors;
-                if ("off" !== data15) {
-                    const err65 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data15 };
-                    if (vErrors === null) {
-                        vErrors = [err65];
-                    }
-                    else {
-                        vErrors.push(err65);
-                    }
-                    errors++;
-                }
-                var _valid5 = _errs79 === errors;
-                if (_valid5 && valid17) {
-                    valid17 = false;
-                    passing5 = [passing5, 2];
-                }
-                else {
-                    if (_valid5) {
-                        valid17 = true;
-                        passing5 = 2;
-                    }
-                }
-            }
-            if (!valid17) {
-                const err66 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing5 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data15 };
-                if (vErrors === null) {
-                    vErrors = [err66];
-                }
-                else {
-                    vErrors.push(err66);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs69;
-                if (vErrors !== null) {
-                    if (_errs69) {
-                        vErrors.length = _errs69;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.swing_beyond !== undefined) {
-            let data18 = data.swing_beyond;
-            const _errs82 = errors;
-            let valid20 = false;
-            let passing6 = null;
-            const _errs83 = errors;
-            if ((typeof data18 == "number") && (isFinite(data18))) {
-                if (data18 < 0 || isNaN(data18)) {
-                    const err67 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data18 };
-                    if (vErrors === null) {
-                        vErrors = [err67];
-                    }
-                    else {
-                        vErrors.push(err67);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err68 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data18 };
-                if (vErrors === null) {
-                    vErrors = [err68];
-                }
-                else {
-                    vErrors.push(err68);
-                }
-                errors++;
-            }
-            var _valid6 = _errs83 === errors;
-            if (_valid6) {
-                valid20 = true;
-                passing6 = 0;
-            }
-            const _errs85 = errors;
-            if (data18 && typeof data18 == "object" && !Array.isArray(data18)) {
-                if (Object.keys(data18).length < 1) {
-                    const err69 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data18 };
-                    if (vErrors === null) {
-                        vErrors = [err69];
-                    }
-                    else {
-                        vErrors.push(err69);
-                    }
-                    errors++;
-                }
-                for (const key7 in data18) {
-                    if (!((key7 === "warn") || (key7 === "fail"))) {
-                        const err70 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data18 };
-                        if (vErrors === null) {
-                            vErrors = [err70];
-                        }
-                        else {
-                            vErrors.push(err70);
-                        }
-                        errors++;
-                    }
-                }
-                if (data18.warn !== undefined) {
-                    let data19 = data18.warn;
-                    if ((typeof data19 == "number") && (isFinite(data19))) {
-                        if (data19 < 0 || isNaN(data19)) {
-                            const err71 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data19 };
-                            if (vErrors === null) {
-                                vErrors = [err71];
-                            }
-                            else {
-                                vErrors.push(err71);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err72 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data19 };
-                        if (vErrors === null) {
-                            vErrors = [err72];
-                        }
-                        else {
-                            vErrors.push(err72);
-                        }
-                        errors++;
-                    }
-                }
-                if (data18.fail !== undefined) {
-                    let data20 = data18.fail;
-                    if ((typeof data20 == "number") && (isFinite(data20))) {
-                        if (data20 < 0 || isNaN(data20)) {
-                            const err73 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data20 };
-                            if (vErrors === null) {
-                                vErrors = [err73];
-                            }
-                            else {
-                                vErrors.push(err73);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err74 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data20 };
-                        if (vErrors === null) {
-                            vErrors = [err74];
-                        }
-                        else {
-                            vErrors.push(err74);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err75 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data18 };
-                if (vErrors === null) {
-                    vErrors = [err75];
-                }
-                else {
-                    vErrors.push(err75);
-                }
-                errors++;
-            }
-            var _valid6 = _errs85 === errors;
-            if (_valid6 && valid20) {
-                valid20 = false;
-                passing6 = [passing6, 1];
-            }
-            else {
-                if (_valid6) {
-                    valid20 = true;
-                    passing6 = 1;
-                }
-                const _errs92 = errors;
-                if ("off" !== data18) {
-                    const err76 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data18 };
-                    if (vErrors === null) {
-                        vErrors = [err76];
-                    }
-                    else {
-                        vErrors.push(err76);
-                    }
-                    errors++;
-                }
-                var _valid6 = _errs92 === errors;
-                if (_valid6 && valid20) {
-                    valid20 = false;
-                    passing6 = [passing6, 2];
-                }
-                else {
-                    if (_valid6) {
-                        valid20 = true;
-                        passing6 = 2;
-                    }
-                }
-            }
-            if (!valid20) {
-                const err77 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing6 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data18 };
-                if (vErrors === null) {
-                    vErrors = [err77];
-                }
-                else {
-                    vErrors.push(err77);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs82;
-                if (vErrors !== null) {
-                    if (_errs82) {
-                        vErrors.length = _errs82;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.condition !== undefined) {
-            let data21 = data.condition;
-            const _errs95 = errors;
-            let valid23 = false;
-            let passing7 = null;
-            const _errs96 = errors;
-            if ((typeof data21 == "number") && (isFinite(data21))) {
-                if (data21 < 0 || isNaN(data21)) {
-                    const err78 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err78];
-                    }
-                    else {
-                        vErrors.push(err78);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err79 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data21 };
-                if (vErrors === null) {
-                    vErrors = [err79];
-                }
-                else {
-                    vErrors.push(err79);
-                }
-                errors++;
-            }
-            var _valid7 = _errs96 === errors;
-            if (_valid7) {
-                valid23 = true;
-                passing7 = 0;
-            }
-            const _errs98 = errors;
-            if (data21 && typeof data21 == "object" && !Array.isArray(data21)) {
-                if (Object.keys(data21).length < 1) {
-                    const err80 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err80];
-                    }
-                    else {
-                        vErrors.push(err80);
-                    }
-                    errors++;
-                }
-                for (const key8 in data21) {
-                    if (!((key8 === "warn") || (key8 === "fail"))) {
-                        const err81 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key8 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data21 };
-                        if (vErrors === null) {
-                            vErrors = [err81];
-                        }
-                        else {
-                            vErrors.push(err81);
-                        }
-                        errors++;
-                    }
-                }
-                if (data21.warn !== undefined) {
-                    let data22 = data21.warn;
-                    if ((typeof data22 == "number") && (isFinite(data22))) {
-                        if (data22 < 0 || isNaN(data22)) {
-                            const err82 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data22 };
-                            if (vErrors === null) {
-                                vErrors = [err82];
-                            }
-                            else {
-                                vErrors.push(err82);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err83 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data22 };
-                        if (vErrors === null) {
-                            vErrors = [err83];
-                        }
-                        else {
-                            vErrors.push(err83);
-                        }
-                        errors++;
-                    }
-                }
-                if (data21.fail !== undefined) {
-                    let data23 = data21.fail;
-                    if ((typeof data23 == "number") && (isFinite(data23))) {
-                        if (data23 < 0 || isNaN(data23)) {
-                            const err84 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data23 };
-                            if (vErrors === null) {
-                                vErrors = [err84];
-                            }
-                            else {
-                                vErrors.push(err84);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err85 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data23 };
-                        if (vErrors === null) {
-                            vErrors = [err85];
-                        }
-                        else {
-                            vErrors.push(err85);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err86 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data21 };
-                if (vErrors === null) {
-                    vErrors = [err86];
-                }
-                else {
-                    vErrors.push(err86);
-                }
-                errors++;
-            }
-            var _valid7 = _errs98 === errors;
-            if (_valid7 && valid23) {
-                valid23 = false;
-                passing7 = [passing7, 1];
-            }
-            else {
-                if (_valid7) {
-                    valid23 = true;
-                    passing7 = 1;
-                }
-                const _errs105 = errors;
-                if ("off" !== data21) {
-                    const err87 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err87];
-                    }
-                    else {
-                        vErrors.push(err87);
-                    }
-                    errors++;
-                }
-                var _valid7 = _errs105 === errors;
-                if (_valid7 && valid23) {
-                    valid23 = false;
-                    passing7 = [passing7, 2];
-                }
-                else {
-                    if (_valid7) {
-                        valid23 = true;
-                        passing7 = 2;
-                    }
-                }
-            }
-            if (!valid23) {
-                const err88 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing7 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data21 };
-                if (vErrors === null) {
-                    vErrors = [err88];
-                }
-                else {
-                    vErrors.push(err88);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs95;
-                if (vErrors !== null) {
-                    if (_errs95) {
-                        vErrors.length = _errs95;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.reproducibility !== undefined) {
-            let data24 = data.reproducibility;
-            const _errs108 = errors;
-            let valid26 = false;
-            let passing8 = null;
-            const _errs109 = errors;
-            if ((typeof data24 == "number") && (isFinite(data24))) {
-                if (data24 < 0 || isNaN(data24)) {
-                    const err89 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data24 };
-                    if (vErrors === null) {
-                        vErrors = [err89];
-                    }
-                    else {
-                        vErrors.push(err89);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err90 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data24 };
-                if (vErrors === null) {
-                    vErrors = [err90];
-                }
-                else {
-                    vErrors.push(err90);
-                }
-                errors++;
-            }
-            var _valid8 = _errs109 === errors;
-            if (_valid8) {
-                valid26 = true;
-                passing8 = 0;
-            }
-            const _errs111 = errors;
-            if (data24 && typeof data24 == "object" && !Array.isArray(data24)) {
-                if (Object.keys(data24).length < 1) {
-                    const err91 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data24 };
-                    if (vErrors === null) {
-                        vErrors = [err91];
-                    }
-                    else {
-                        vErrors.push(err91);
-                    }
-                    errors++;
-                }
-                for (const key9 in data24) {
-                    if (!((key9 === "warn") || (key9 === "fail"))) {
-                        const err92 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key9 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data24 };
-                        if (vErrors === null) {
-                            vErrors = [err92];
-                        }
-                        else {
-                            vErrors.push(err92);
-                        }
-                        errors++;
-                    }
-                }
-                if (data24.warn !== undefined) {
-                    let data25 = data24.warn;
-                    if ((typeof data25 == "number") && (isFinite(data25))) {
-                        if (data25 < 0 || isNaN(data25)) {
-                            const err93 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data25 };
-                            if (vErrors === null) {
-                                vErrors = [err93];
-                            }
-                            else {
-                                vErrors.push(err93);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err94 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data25 };
-                        if (vErrors === null) {
-                            vErrors = [err94];
-                        }
-                        else {
-                            vErrors.push(err94);
-                        }
-                        errors++;
-                    }
-                }
-                if (data24.fail !== undefined) {
-                    let data26 = data24.fail;
-                    if ((typeof data26 == "number") && (isFinite(data26))) {
-                        if (data26 < 0 || isNaN(data26)) {
-                            const err95 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data26 };
-                            if (vErrors === null) {
-                                vErrors = [err95];
-                            }
-                            else {
-                                vErrors.push(err95);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err96 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data26 };
-                        if (vErrors === null) {
-                            vErrors = [err96];
-                        }
-                        else {
-                            vErrors.push(err96);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err97 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data24 };
-                if (vErrors === null) {
-                    vErrors = [err97];
-                }
-                else {
-                    vErrors.push(err97);
-                }
-                errors++;
-            }
-            var _valid8 = _errs111 === errors;
-            if (_valid8 && valid26) {
-                valid26 = false;
-                passing8 = [passing8, 1];
-            }
-            else {
-                if (_valid8) {
-                    valid26 = true;
-                    passing8 = 1;
-                }
-                const _errs118 = errors;
-                if ("off" !== data24) {
-                    const err98 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data24 };
-                    if (vErrors === null) {
-                        vErrors = [err98];
-                    }
-                    else {
-                        vErrors.push(err98);
-                    }
-                    errors++;
-                }
-                var _valid8 = _errs118 === errors;
-                if (_valid8 && valid26) {
-                    valid26 = false;
-                    passing8 = [passing8, 2];
-                }
-                else {
-                    if (_valid8) {
-                        valid26 = true;
-                        passing8 = 2;
-                    }
-                }
-            }
-            if (!valid26) {
-                const err99 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing8 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data24 };
-                if (vErrors === null) {
-                    vErrors = [err99];
-                }
-                else {
-                    vErrors.push(err99);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs108;
-                if (vErrors !== null) {
-                    if (_errs108) {
-                        vErrors.length = _errs108;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.complexity !== undefined) {
-            let data27 = data.complexity;
-            const _errs121 = errors;
-            let valid29 = false;
-            let passing9 = null;
-            const _errs122 = errors;
-            if ((typeof data27 == "number") && (isFinite(data27))) {
-                if (data27 < 0 || isNaN(data27)) {
-                    const err100 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data27 };
-                    if (vErrors === null) {
-                        vErrors = [err100];
-                    }
-                    else {
-                        vErrors.push(err100);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err101 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data27 };
-                if (vErrors === null) {
-                    vErrors = [err101];
-                }
-                else {
-                    vErrors.push(err101);
-                }
-                errors++;
-            }
-            var _valid9 = _errs122 === errors;
-            if (_valid9) {
-                valid29 = true;
-                passing9 = 0;
-            }
-            const _errs124 = errors;
-            if (data27 && typeof data27 == "object" && !Array.isArray(data27)) {
-                if (Object.keys(data27).length < 1) {
-                    const err102 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data27 };
-                    if (vErrors === null) {
-                        vErrors = [err102];
-                    }
-                    else {
-                        vErrors.push(err102);
-                    }
-                    errors++;
-                }
-                for (const key10 in data27) {
-                    if (!((key10 === "warn") || (key10 === "fail"))) {
-                        const err103 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key10 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data27 };
-                        if (vErrors === null) {
-                            vErrors = [err103];
-                        }
-                        else {
-                            vErrors.push(err103);
-                        }
-                        errors++;
-                    }
-                }
-                if (data27.warn !== undefined) {
-                    let data28 = data27.warn;
-                    if ((typeof data28 == "number") && (isFinite(data28))) {
-                        if (data28 < 0 || isNaN(data28)) {
-                            const err104 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data28 };
-                            if (vErrors === null) {
-                                vErrors = [err104];
-                            }
-                            else {
-                                vErrors.push(err104);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err105 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data28 };
-                        if (vErrors === null) {
-                            vErrors = [err105];
-                        }
-                        else {
-                            vErrors.push(err105);
-                        }
-                        errors++;
-                    }
-                }
-                if (data27.fail !== undefined) {
-                    let data29 = data27.fail;
-                    if ((typeof data29 == "number") && (isFinite(data29))) {
-                        if (data29 < 0 || isNaN(data29)) {
-                            const err106 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data29 };
-                            if (vErrors === null) {
-                                vErrors = [err106];
-                            }
-                            else {
-                                vErrors.push(err106);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err107 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data29 };
-                        if (vErrors === null) {
-                            vErrors = [err107];
-                        }
-                        else {
-                            vErrors.push(err107);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err108 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data27 };
-                if (vErrors === null) {
-                    vErrors = [err108];
-                }
-                else {
-                    vErrors.push(err108);
-                }
-                errors++;
-            }
-            var _valid9 = _errs124 === errors;
-            if (_valid9 && valid29) {
-                valid29 = false;
-                passing9 = [passing9, 1];
-            }
-            else {
-                if (_valid9) {
-                    valid29 = true;
-                    passing9 = 1;
-                }
-                const _errs131 = errors;
-                if ("off" !== data27) {
-                    const err109 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data27 };
-                    if (vErrors === null) {
-                        vErrors = [err109];
-                    }
-                    else {
-                        vErrors.push(err109);
-                    }
-                    errors++;
-                }
-                var _valid9 = _errs131 === errors;
-                if (_valid9 && valid29) {
-                    valid29 = false;
-                    passing9 = [passing9, 2];
-                }
-                else {
-                    if (_valid9) {
-                        valid29 = true;
-                        passing9 = 2;
-                    }
-                }
-            }
-            if (!valid29) {
-                const err110 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing9 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data27 };
-                if (vErrors === null) {
-                    vErrors = [err110];
-                }
-                else {
-                    vErrors.push(err110);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs121;
-                if (vErrors !== null) {
-                    if (_errs121) {
-                        vErrors.length = _errs121;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
         if (data.base_change !== undefined) {
-            let data30 = data.base_change;
-            const _errs134 = errors;
-            let valid32 = false;
-            let passing10 = null;
-            const _errs135 = errors;
-            if ((typeof data30 == "number") && (isFinite(data30))) {
-                if (data30 < 0 || isNaN(data30)) {
-                    const err111 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[0], data: data30 };
-                    if (vErrors === null) {
-                        vErrors = [err111];
-                    }
-                    else {
-                        vErrors.push(err111);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err112 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[0].type, parentSchema: schema33.oneOf[0], data: data30 };
-                if (vErrors === null) {
-                    vErrors = [err112];
-                }
-                else {
-                    vErrors.push(err112);
-                }
-                errors++;
-            }
-            var _valid10 = _errs135 === errors;
-            if (_valid10) {
-                valid32 = true;
-                passing10 = 0;
-            }
-            const _errs137 = errors;
-            if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
-                if (Object.keys(data30).length < 1) {
-                    const err113 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema33.oneOf[1], data: data30 };
-                    if (vErrors === null) {
-                        vErrors = [err113];
-                    }
-                    else {
-                        vErrors.push(err113);
-                    }
-                    errors++;
-                }
-                for (const key11 in data30) {
-                    if (!((key11 === "warn") || (key11 === "fail"))) {
-                        const err114 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key11 }, message: "must NOT have additional properties", schema: false, parentSchema: schema33.oneOf[1], data: data30 };
-                        if (vErrors === null) {
-                            vErrors = [err114];
-                        }
-                        else {
-                            vErrors.push(err114);
-                        }
-                        errors++;
-                    }
-                }
-                if (data30.warn !== undefined) {
-                    let data31 = data30.warn;
-                    if ((typeof data31 == "number") && (isFinite(data31))) {
-                        if (data31 < 0 || isNaN(data31)) {
-                            const err115 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.warn, data: data31 };
-                            if (vErrors === null) {
-                                vErrors = [err115];
-                            }
-                            else {
-                                vErrors.push(err115);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err116 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.warn.type, parentSchema: schema33.oneOf[1].properties.warn, data: data31 };
-                        if (vErrors === null) {
-                            vErrors = [err116];
-                        }
-                        else {
-                            vErrors.push(err116);
-                        }
-                        errors++;
-                    }
-                }
-                if (data30.fail !== undefined) {
-                    let data32 = data30.fail;
-                    if ((typeof data32 == "number") && (isFinite(data32))) {
-                        if (data32 < 0 || isNaN(data32)) {
-                            const err117 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33.oneOf[1].properties.fail, data: data32 };
-                            if (vErrors === null) {
-                                vErrors = [err117];
-                            }
-                            else {
-                                vErrors.push(err117);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err118 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.oneOf[1].properties.fail.type, parentSchema: schema33.oneOf[1].properties.fail, data: data32 };
-                        if (vErrors === null) {
-                            vErrors = [err118];
-                        }
-                        else {
-                            vErrors.push(err118);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err119 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema33.oneOf[1].type, parentSchema: schema33.oneOf[1], data: data30 };
-                if (vErrors === null) {
-                    vErrors = [err119];
-                }
-                else {
-                    vErrors.push(err119);
-                }
-                errors++;
-            }
-            var _valid10 = _errs137 === errors;
-            if (_valid10 && valid32) {
-                valid32 = false;
-                passing10 = [passing10, 1];
-            }
-            else {
-                if (_valid10) {
-                    valid32 = true;
-                    passing10 = 1;
-                }
-                const _errs144 = errors;
-                if ("off" !== data30) {
-                    const err120 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema33.oneOf[2], data: data30 };
-                    if (vErrors === null) {
-                        vErrors = [err120];
-                    }
-                    else {
-                        vErrors.push(err120);
-                    }
-                    errors++;
-                }
-                var _valid10 = _errs144 === errors;
-                if (_valid10 && valid32) {
-                    valid32 = false;
-                    passing10 = [passing10, 2];
-                }
-                else {
-                    if (_valid10) {
-                        valid32 = true;
-                        passing10 = 2;
-                    }
-                }
-            }
-            if (!valid32) {
-                const err121 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing10 }, message: "must match exactly one schema in oneOf", schema: schema33.oneOf, parentSchema: schema33, data: data30 };
-                if (vErrors === null) {
-                    vErrors = [err121];
-                }
-                else {
-                    vErrors.push(err121);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs134;
-                if (vErrors !== null) {
-                    if (_errs134) {
-                        vErrors.length = _errs134;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate54(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
             }
         }
     }
     else {
-        const err122 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema32.type, parentSchema: schema32, data };
+        const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema20.type, parentSchema: schema20, data };
         if (vErrors === null) {
-            vErrors = [err122];
+            vErrors = [err1];
         }
         else {
-            vErrors.push(err122);
+            vErrors.push(err1);
         }
         errors++;
     }
-    validate21.errors = vErrors;
+    validate53.errors = vErrors;
     return errors === 0;
 }
-validate21.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-function validate20(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate53.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate52(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     /*# sourceURL="urn:fitgate:schema:settings:1" */ ;
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate20.evaluated;
+    const evaluated0 = validate52.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -43996,7 +40078,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
     }
     if (data && typeof data == "object" && !Array.isArray(data)) {
         if (data.version === undefined) {
-            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema31.required, parentSchema: schema31, data };
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema19.required, parentSchema: schema19, data };
             if (vErrors === null) {
                 vErrors = [err0];
             }
@@ -44007,7 +40089,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
         }
         for (const key0 in data) {
             if (!(((((key0 === "version") || (key0 === "models")) || (key0 === "limits")) || (key0 === "fit")) || (key0 === "caps"))) {
-                const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31, data };
+                const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19, data };
                 if (vErrors === null) {
                     vErrors = [err1];
                 }
@@ -44020,7 +40102,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
         if (data.version !== undefined) {
             let data0 = data.version;
             if (1 !== data0) {
-                const err2 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema31.properties.version, data: data0 };
+                const err2 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema19.properties.version, data: data0 };
                 if (vErrors === null) {
                     vErrors = [err2];
                 }
@@ -44034,7 +40116,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
             let data1 = data.models;
             if (Array.isArray(data1)) {
                 if (data1.length < 1) {
-                    const err3 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema31.properties.models, data: data1 };
+                    const err3 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema19.properties.models, data: data1 };
                     if (vErrors === null) {
                         vErrors = [err3];
                     }
@@ -44048,7 +40130,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                     let data2 = data1[i0];
                     if (typeof data2 === "string") {
                         if (func1(data2) < 1) {
-                            const err4 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.models.items, data: data2 };
+                            const err4 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema19.properties.models.items, data: data2 };
                             if (vErrors === null) {
                                 vErrors = [err4];
                             }
@@ -44059,7 +40141,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err5 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.models.items.type, parentSchema: schema31.properties.models.items, data: data2 };
+                        const err5 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema19.properties.models.items.type, parentSchema: schema19.properties.models.items, data: data2 };
                         if (vErrors === null) {
                             vErrors = [err5];
                         }
@@ -44071,7 +40153,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err6 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema31.properties.models.type, parentSchema: schema31.properties.models, data: data1 };
+                const err6 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema19.properties.models.type, parentSchema: schema19.properties.models, data: data1 };
                 if (vErrors === null) {
                     vErrors = [err6];
                 }
@@ -44082,8 +40164,8 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
         if (data.limits !== undefined) {
-            if (!(validate21(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
+            if (!(validate53(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
                 errors = vErrors.length;
             }
         }
@@ -44092,7 +40174,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
             if (data4 && typeof data4 == "object" && !Array.isArray(data4)) {
                 for (const key1 in data4) {
                     if (!((((key1 === "folds") || (key1 === "fold_order")) || (key1 === "seed")) || (key1 === "parameter_count"))) {
-                        const err7 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.fit, data: data4 };
+                        const err7 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.fit, data: data4 };
                         if (vErrors === null) {
                             vErrors = [err7];
                         }
@@ -44105,7 +40187,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data4.folds !== undefined) {
                     let data5 = data4.folds;
                     if (!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))) {
-                        const err8 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.fit.properties.folds.type, parentSchema: schema31.properties.fit.properties.folds, data: data5 };
+                        const err8 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.folds.type, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
                         if (vErrors === null) {
                             vErrors = [err8];
                         }
@@ -44116,7 +40198,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     if ((typeof data5 == "number") && (isFinite(data5))) {
                         if (data5 < 2 || isNaN(data5)) {
-                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema31.properties.fit.properties.folds, data: data5 };
+                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
                             if (vErrors === null) {
                                 vErrors = [err9];
                             }
@@ -44130,7 +40212,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data4.fold_order !== undefined) {
                     let data6 = data4.fold_order;
                     if (!((data6 === "shuffled") || (data6 === "blocks"))) {
-                        const err10 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema31.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.fit.properties.fold_order.enum, parentSchema: schema31.properties.fit.properties.fold_order, data: data6 };
+                        const err10 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.fold_order.enum, parentSchema: schema19.properties.fit.properties.fold_order, data: data6 };
                         if (vErrors === null) {
                             vErrors = [err10];
                         }
@@ -44143,7 +40225,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data4.seed !== undefined) {
                     let data7 = data4.seed;
                     if (!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))) {
-                        const err11 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.fit.properties.seed.type, parentSchema: schema31.properties.fit.properties.seed, data: data7 };
+                        const err11 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.seed.type, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
                         if (vErrors === null) {
                             vErrors = [err11];
                         }
@@ -44154,7 +40236,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     if ((typeof data7 == "number") && (isFinite(data7))) {
                         if (data7 > 4294967295 || isNaN(data7)) {
-                            const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema31.properties.fit.properties.seed, data: data7 };
+                            const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
                             if (vErrors === null) {
                                 vErrors = [err12];
                             }
@@ -44164,7 +40246,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                             errors++;
                         }
                         if (data7 < 0 || isNaN(data7)) {
-                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.fit.properties.seed, data: data7 };
+                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
                             if (vErrors === null) {
                                 vErrors = [err13];
                             }
@@ -44178,7 +40260,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data4.parameter_count !== undefined) {
                     let data8 = data4.parameter_count;
                     if (!((data8 === "columns") || (data8 === "effective"))) {
-                        const err14 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema31.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.fit.properties.parameter_count.enum, parentSchema: schema31.properties.fit.properties.parameter_count, data: data8 };
+                        const err14 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.parameter_count.enum, parentSchema: schema19.properties.fit.properties.parameter_count, data: data8 };
                         if (vErrors === null) {
                             vErrors = [err14];
                         }
@@ -44190,7 +40272,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err15 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.fit.type, parentSchema: schema31.properties.fit, data: data4 };
+                const err15 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.fit.type, parentSchema: schema19.properties.fit, data: data4 };
                 if (vErrors === null) {
                     vErrors = [err15];
                 }
@@ -44205,7 +40287,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
             if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
                 for (const key2 in data9) {
                     if (!((key2 === "max_file_mb") || (key2 === "max_cells"))) {
-                        const err16 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.caps, data: data9 };
+                        const err16 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.caps, data: data9 };
                         if (vErrors === null) {
                             vErrors = [err16];
                         }
@@ -44219,7 +40301,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                     let data10 = data9.max_file_mb;
                     if ((typeof data10 == "number") && (isFinite(data10))) {
                         if (data10 <= 0 || isNaN(data10)) {
-                            const err17 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.caps.properties.max_file_mb, data: data10 };
+                            const err17 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
                             if (vErrors === null) {
                                 vErrors = [err17];
                             }
@@ -44230,7 +40312,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.caps.properties.max_file_mb.type, parentSchema: schema31.properties.caps.properties.max_file_mb, data: data10 };
+                        const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_file_mb.type, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
                         if (vErrors === null) {
                             vErrors = [err18];
                         }
@@ -44243,7 +40325,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data9.max_cells !== undefined) {
                     let data11 = data9.max_cells;
                     if (!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))) {
-                        const err19 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.caps.properties.max_cells.type, parentSchema: schema31.properties.caps.properties.max_cells, data: data11 };
+                        const err19 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.caps.properties.max_cells.type, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
                         if (vErrors === null) {
                             vErrors = [err19];
                         }
@@ -44254,7 +40336,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     if ((typeof data11 == "number") && (isFinite(data11))) {
                         if (data11 < 1 || isNaN(data11)) {
-                            const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.caps.properties.max_cells, data: data11 };
+                            const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
                             if (vErrors === null) {
                                 vErrors = [err20];
                             }
@@ -44267,7 +40349,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err21 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.caps.type, parentSchema: schema31.properties.caps, data: data9 };
+                const err21 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.caps.type, parentSchema: schema19.properties.caps, data: data9 };
                 if (vErrors === null) {
                     vErrors = [err21];
                 }
@@ -44279,7 +40361,7 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
         }
     }
     else {
-        const err22 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.type, parentSchema: schema31, data };
+        const err22 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.type, parentSchema: schema19, data };
         if (vErrors === null) {
             vErrors = [err22];
         }
@@ -44288,19 +40370,372 @@ function validate20(data, { instancePath = "", parentData, parentDataProperty, r
         }
         errors++;
     }
-    validate20.errors = vErrors;
+    validate52.errors = vErrors;
     return errors === 0;
 }
-validate20.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-const validateDescriptor = validate23;
-const schema44 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model. Only `regression` today.", "enum": ["regression"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
-const pattern4 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema45 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } };
-const schema46 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
-function validate24(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+const validateDescriptor = validate67;
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model. Only `regression` today.", "enum": ["regression"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
+const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } };
+const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
+function validate69(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate24.evaluated;
+    const evaluated0 = validate69.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    const _errs0 = errors;
+    let valid0 = false;
+    let passing0 = null;
+    const _errs1 = errors;
+    if (Array.isArray(data)) {
+        if (data.length < 1) {
+            const err0 = { instancePath, schemaPath: "#/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema24.oneOf[0], data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        const len0 = data.length;
+        for (let i0 = 0; i0 < len0; i0++) {
+            let data0 = data[i0];
+            if (!((typeof data0 == "number") && (isFinite(data0)))) {
+                const err1 = { instancePath: instancePath + "/" + i0, schemaPath: "#/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[0].items.type, parentSchema: schema24.oneOf[0].items, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err1];
+                }
+                else {
+                    vErrors.push(err1);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err2 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema24.oneOf[0].type, parentSchema: schema24.oneOf[0], data };
+        if (vErrors === null) {
+            vErrors = [err2];
+        }
+        else {
+            vErrors.push(err2);
+        }
+        errors++;
+    }
+    var _valid0 = _errs1 === errors;
+    if (_valid0) {
+        valid0 = true;
+        passing0 = 0;
+        var items0 = true;
+    }
+    const _errs5 = errors;
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.from === undefined) {
+            const err3 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err3];
+            }
+            else {
+                vErrors.push(err3);
+            }
+            errors++;
+        }
+        if (data.to === undefined) {
+            const err4 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err4];
+            }
+            else {
+                vErrors.push(err4);
+            }
+            errors++;
+        }
+        if (data.count === undefined) {
+            const err5 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err5];
+            }
+            else {
+                vErrors.push(err5);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!(((key0 === "from") || (key0 === "to")) || (key0 === "count"))) {
+                const err6 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema24.oneOf[1], data };
+                if (vErrors === null) {
+                    vErrors = [err6];
+                }
+                else {
+                    vErrors.push(err6);
+                }
+                errors++;
+            }
+        }
+        if (data.from !== undefined) {
+            let data1 = data.from;
+            if (!((typeof data1 == "number") && (isFinite(data1)))) {
+                const err7 = { instancePath: instancePath + "/from", schemaPath: "#/oneOf/1/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[1].properties.from.type, parentSchema: schema24.oneOf[1].properties.from, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+        if (data.to !== undefined) {
+            let data2 = data.to;
+            if (!((typeof data2 == "number") && (isFinite(data2)))) {
+                const err8 = { instancePath: instancePath + "/to", schemaPath: "#/oneOf/1/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[1].properties.to.type, parentSchema: schema24.oneOf[1].properties.to, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err8];
+                }
+                else {
+                    vErrors.push(err8);
+                }
+                errors++;
+            }
+        }
+        if (data.count !== undefined) {
+            let data3 = data.count;
+            if (!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))) {
+                const err9 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema24.oneOf[1].properties.count.type, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            if ((typeof data3 == "number") && (isFinite(data3))) {
+                if (data3 > 10000 || isNaN(data3)) {
+                    const err10 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 10000 }, message: "must be <= 10000", schema: 10000, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+                if (data3 < 1 || isNaN(data3)) {
+                    const err11 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+            }
+        }
+    }
+    else {
+        const err12 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema24.oneOf[1].type, parentSchema: schema24.oneOf[1], data };
+        if (vErrors === null) {
+            vErrors = [err12];
+        }
+        else {
+            vErrors.push(err12);
+        }
+        errors++;
+    }
+    var _valid0 = _errs5 === errors;
+    if (_valid0 && valid0) {
+        valid0 = false;
+        passing0 = [passing0, 1];
+    }
+    else {
+        if (_valid0) {
+            valid0 = true;
+            passing0 = 1;
+            var props0 = true;
+        }
+        const _errs14 = errors;
+        if (data && typeof data == "object" && !Array.isArray(data)) {
+            if (data.from === undefined) {
+                const err13 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err13];
+                }
+                else {
+                    vErrors.push(err13);
+                }
+                errors++;
+            }
+            if (data.to === undefined) {
+                const err14 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err14];
+                }
+                else {
+                    vErrors.push(err14);
+                }
+                errors++;
+            }
+            if (data.step === undefined) {
+                const err15 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "step" }, message: "must have required property '" + "step" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err15];
+                }
+                else {
+                    vErrors.push(err15);
+                }
+                errors++;
+            }
+            for (const key1 in data) {
+                if (!(((key1 === "from") || (key1 === "to")) || (key1 === "step"))) {
+                    const err16 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema24.oneOf[2], data };
+                    if (vErrors === null) {
+                        vErrors = [err16];
+                    }
+                    else {
+                        vErrors.push(err16);
+                    }
+                    errors++;
+                }
+            }
+            if (data.from !== undefined) {
+                let data4 = data.from;
+                if (!((typeof data4 == "number") && (isFinite(data4)))) {
+                    const err17 = { instancePath: instancePath + "/from", schemaPath: "#/oneOf/2/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.from.type, parentSchema: schema24.oneOf[2].properties.from, data: data4 };
+                    if (vErrors === null) {
+                        vErrors = [err17];
+                    }
+                    else {
+                        vErrors.push(err17);
+                    }
+                    errors++;
+                }
+            }
+            if (data.to !== undefined) {
+                let data5 = data.to;
+                if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                    const err18 = { instancePath: instancePath + "/to", schemaPath: "#/oneOf/2/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.to.type, parentSchema: schema24.oneOf[2].properties.to, data: data5 };
+                    if (vErrors === null) {
+                        vErrors = [err18];
+                    }
+                    else {
+                        vErrors.push(err18);
+                    }
+                    errors++;
+                }
+            }
+            if (data.step !== undefined) {
+                let data6 = data.step;
+                if ((typeof data6 == "number") && (isFinite(data6))) {
+                    if (data6 <= 0 || isNaN(data6)) {
+                        const err19 = { instancePath: instancePath + "/step", schemaPath: "#/oneOf/2/properties/step/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema24.oneOf[2].properties.step, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                }
+                else {
+                    const err20 = { instancePath: instancePath + "/step", schemaPath: "#/oneOf/2/properties/step/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.step.type, parentSchema: schema24.oneOf[2].properties.step, data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err20];
+                    }
+                    else {
+                        vErrors.push(err20);
+                    }
+                    errors++;
+                }
+            }
+        }
+        else {
+            const err21 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema24.oneOf[2].type, parentSchema: schema24.oneOf[2], data };
+            if (vErrors === null) {
+                vErrors = [err21];
+            }
+            else {
+                vErrors.push(err21);
+            }
+            errors++;
+        }
+        var _valid0 = _errs14 === errors;
+        if (_valid0 && valid0) {
+            valid0 = false;
+            passing0 = [passing0, 2];
+        }
+        else {
+            if (_valid0) {
+                valid0 = true;
+                passing0 = 2;
+                if (props0 !== true) {
+                    props0 = true;
+                }
+            }
+            const _errs23 = errors;
+            if ("at-samples" !== data) {
+                const err22 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "at-samples" }, message: "must be equal to constant", schema: "at-samples", parentSchema: schema24.oneOf[3], data };
+                if (vErrors === null) {
+                    vErrors = [err22];
+                }
+                else {
+                    vErrors.push(err22);
+                }
+                errors++;
+            }
+            var _valid0 = _errs23 === errors;
+            if (_valid0 && valid0) {
+                valid0 = false;
+                passing0 = [passing0, 3];
+            }
+            else {
+                if (_valid0) {
+                    valid0 = true;
+                    passing0 = 3;
+                }
+            }
+        }
+    }
+    if (!valid0) {
+        const err23 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema24.oneOf, parentSchema: schema24, data };
+        if (vErrors === null) {
+            vErrors = [err23];
+        }
+        else {
+            vErrors.push(err23);
+        }
+        errors++;
+    }
+    else {
+        errors = _errs0;
+        if (vErrors !== null) {
+            if (_errs0) {
+                vErrors.length = _errs0;
+            }
+            else {
+                vErrors = null;
+            }
+        }
+    }
+    validate69.errors = vErrors;
+    evaluated0.props = props0;
+    evaluated0.items = items0;
+    return errors === 0;
+}
+validate69.evaluated = { "dynamicProps": true, "dynamicItems": true };
+function validate68(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate68.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -44309,7 +40744,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
     }
     if (data && typeof data == "object" && !Array.isArray(data)) {
         if (Object.keys(data).length > 1) {
-            const err0 = { instancePath, schemaPath: "#/maxProperties", keyword: "maxProperties", params: { limit: 1 }, message: "must NOT have more than 1 properties", schema: 1, parentSchema: schema45, data };
+            const err0 = { instancePath, schemaPath: "#/maxProperties", keyword: "maxProperties", params: { limit: 1 }, message: "must NOT have more than 1 properties", schema: 1, parentSchema: schema23, data };
             if (vErrors === null) {
                 vErrors = [err0];
             }
@@ -44319,7 +40754,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
             errors++;
         }
         if (Object.keys(data).length < 1) {
-            const err1 = { instancePath, schemaPath: "#/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema45, data };
+            const err1 = { instancePath, schemaPath: "#/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema23, data };
             if (vErrors === null) {
                 vErrors = [err1];
             }
@@ -44331,7 +40766,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
         for (const key0 in data) {
             const _errs1 = errors;
             if (!(((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf"))) {
-                const err2 = { instancePath, schemaPath: "#/propertyNames/enum", keyword: "enum", params: { allowedValues: schema45.propertyNames.enum }, message: "must be equal to one of the allowed values", schema: schema45.propertyNames.enum, parentSchema: schema45.propertyNames, data: key0, propertyName: key0 };
+                const err2 = { instancePath, schemaPath: "#/propertyNames/enum", keyword: "enum", params: { allowedValues: schema23.propertyNames.enum }, message: "must be equal to one of the allowed values", schema: schema23.propertyNames.enum, parentSchema: schema23.propertyNames, data: key0, propertyName: key0 };
                 if (vErrors === null) {
                     vErrors = [err2];
                 }
@@ -44342,7 +40777,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
             }
             var valid0 = _errs1 === errors;
             if (!valid0) {
-                const err3 = { instancePath, schemaPath: "#/propertyNames", keyword: "propertyNames", params: { propertyName: key0 }, message: "property name must be valid", schema: schema45.propertyNames, parentSchema: schema45, data };
+                const err3 = { instancePath, schemaPath: "#/propertyNames", keyword: "propertyNames", params: { propertyName: key0 }, message: "property name must be valid", schema: schema23.propertyNames, parentSchema: schema23, data };
                 if (vErrors === null) {
                     vErrors = [err3];
                 }
@@ -44356,7 +40791,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
             let data0 = data.linear;
             if (Array.isArray(data0)) {
                 if (data0.length < 1) {
-                    const err4 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema45.properties.linear, data: data0 };
+                    const err4 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.linear, data: data0 };
                     if (vErrors === null) {
                         vErrors = [err4];
                     }
@@ -44370,7 +40805,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     let data1 = data0[i0];
                     if (typeof data1 === "string") {
                         if (func1(data1) < 1) {
-                            const err5 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema45.properties.linear.items, data: data1 };
+                            const err5 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.linear.items, data: data1 };
                             if (vErrors === null) {
                                 vErrors = [err5];
                             }
@@ -44381,7 +40816,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err6 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema45.properties.linear.items.type, parentSchema: schema45.properties.linear.items, data: data1 };
+                        const err6 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.linear.items.type, parentSchema: schema23.properties.linear.items, data: data1 };
                         if (vErrors === null) {
                             vErrors = [err6];
                         }
@@ -44393,7 +40828,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err7 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema45.properties.linear.type, parentSchema: schema45.properties.linear, data: data0 };
+                const err7 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.linear.type, parentSchema: schema23.properties.linear, data: data0 };
                 if (vErrors === null) {
                     vErrors = [err7];
                 }
@@ -44407,7 +40842,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
             let data2 = data.polynomial;
             if (data2 && typeof data2 == "object" && !Array.isArray(data2)) {
                 if (data2.of === undefined) {
-                    const err8 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema45.properties.polynomial.required, parentSchema: schema45.properties.polynomial, data: data2 };
+                    const err8 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.polynomial.required, parentSchema: schema23.properties.polynomial, data: data2 };
                     if (vErrors === null) {
                         vErrors = [err8];
                     }
@@ -44417,7 +40852,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 if (data2.degree === undefined) {
-                    const err9 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "degree" }, message: "must have required property '" + "degree" + "'", schema: schema45.properties.polynomial.required, parentSchema: schema45.properties.polynomial, data: data2 };
+                    const err9 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "degree" }, message: "must have required property '" + "degree" + "'", schema: schema23.properties.polynomial.required, parentSchema: schema23.properties.polynomial, data: data2 };
                     if (vErrors === null) {
                         vErrors = [err9];
                     }
@@ -44428,7 +40863,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                 }
                 for (const key1 in data2) {
                     if (!((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale"))) {
-                        const err10 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema45.properties.polynomial, data: data2 };
+                        const err10 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.polynomial, data: data2 };
                         if (vErrors === null) {
                             vErrors = [err10];
                         }
@@ -44442,7 +40877,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     let data3 = data2.of;
                     if (typeof data3 === "string") {
                         if (func1(data3) < 1) {
-                            const err11 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema45.properties.polynomial.properties.of, data: data3 };
+                            const err11 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.polynomial.properties.of, data: data3 };
                             if (vErrors === null) {
                                 vErrors = [err11];
                             }
@@ -44453,7 +40888,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err12 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema45.properties.polynomial.properties.of.type, parentSchema: schema45.properties.polynomial.properties.of, data: data3 };
+                        const err12 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.polynomial.properties.of.type, parentSchema: schema23.properties.polynomial.properties.of, data: data3 };
                         if (vErrors === null) {
                             vErrors = [err12];
                         }
@@ -44466,7 +40901,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data2.degree !== undefined) {
                     let data4 = data2.degree;
                     if (!(((typeof data4 == "number") && (!(data4 % 1) && !isNaN(data4))) && (isFinite(data4)))) {
-                        const err13 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema45.properties.polynomial.properties.degree.type, parentSchema: schema45.properties.polynomial.properties.degree, data: data4 };
+                        const err13 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.polynomial.properties.degree.type, parentSchema: schema23.properties.polynomial.properties.degree, data: data4 };
                         if (vErrors === null) {
                             vErrors = [err13];
                         }
@@ -44477,7 +40912,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     if ((typeof data4 == "number") && (isFinite(data4))) {
                         if (data4 > 30 || isNaN(data4)) {
-                            const err14 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 30 }, message: "must be <= 30", schema: 30, parentSchema: schema45.properties.polynomial.properties.degree, data: data4 };
+                            const err14 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 30 }, message: "must be <= 30", schema: 30, parentSchema: schema23.properties.polynomial.properties.degree, data: data4 };
                             if (vErrors === null) {
                                 vErrors = [err14];
                             }
@@ -44487,7 +40922,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                             errors++;
                         }
                         if (data4 < 1 || isNaN(data4)) {
-                            const err15 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema45.properties.polynomial.properties.degree, data: data4 };
+                            const err15 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.polynomial.properties.degree, data: data4 };
                             if (vErrors === null) {
                                 vErrors = [err15];
                             }
@@ -44501,7 +40936,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data2.shift !== undefined) {
                     let data5 = data2.shift;
                     if (!((typeof data5 == "number") && (isFinite(data5)))) {
-                        const err16 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema45.properties.polynomial.properties.shift.type, parentSchema: schema45.properties.polynomial.properties.shift, data: data5 };
+                        const err16 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.shift.type, parentSchema: schema23.properties.polynomial.properties.shift, data: data5 };
                         if (vErrors === null) {
                             vErrors = [err16];
                         }
@@ -44515,7 +40950,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     let data6 = data2.scale;
                     if ((typeof data6 == "number") && (isFinite(data6))) {
                         if (data6 <= 0 || isNaN(data6)) {
-                            const err17 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema45.properties.polynomial.properties.scale, data: data6 };
+                            const err17 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.polynomial.properties.scale, data: data6 };
                             if (vErrors === null) {
                                 vErrors = [err17];
                             }
@@ -44526,7 +40961,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err18 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema45.properties.polynomial.properties.scale.type, parentSchema: schema45.properties.polynomial.properties.scale, data: data6 };
+                        const err18 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.scale.type, parentSchema: schema23.properties.polynomial.properties.scale, data: data6 };
                         if (vErrors === null) {
                             vErrors = [err18];
                         }
@@ -44538,7 +40973,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err19 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema45.properties.polynomial.type, parentSchema: schema45.properties.polynomial, data: data2 };
+                const err19 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.polynomial.type, parentSchema: schema23.properties.polynomial, data: data2 };
                 if (vErrors === null) {
                     vErrors = [err19];
                 }
@@ -44552,7 +40987,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
             let data7 = data.rbf;
             if (data7 && typeof data7 == "object" && !Array.isArray(data7)) {
                 if (data7.of === undefined) {
-                    const err20 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema45.properties.rbf.required, parentSchema: schema45.properties.rbf, data: data7 };
+                    const err20 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data7 };
                     if (vErrors === null) {
                         vErrors = [err20];
                     }
@@ -44562,7 +40997,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 if (data7.centers === undefined) {
-                    const err21 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "centers" }, message: "must have required property '" + "centers" + "'", schema: schema45.properties.rbf.required, parentSchema: schema45.properties.rbf, data: data7 };
+                    const err21 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "centers" }, message: "must have required property '" + "centers" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data7 };
                     if (vErrors === null) {
                         vErrors = [err21];
                     }
@@ -44572,7 +41007,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 if (data7.width === undefined) {
-                    const err22 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "width" }, message: "must have required property '" + "width" + "'", schema: schema45.properties.rbf.required, parentSchema: schema45.properties.rbf, data: data7 };
+                    const err22 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "width" }, message: "must have required property '" + "width" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data7 };
                     if (vErrors === null) {
                         vErrors = [err22];
                     }
@@ -44583,7 +41018,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                 }
                 for (const key2 in data7) {
                     if (!(((key2 === "of") || (key2 === "centers")) || (key2 === "width"))) {
-                        const err23 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema45.properties.rbf, data: data7 };
+                        const err23 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.rbf, data: data7 };
                         if (vErrors === null) {
                             vErrors = [err23];
                         }
@@ -44597,7 +41032,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     let data8 = data7.of;
                     if (typeof data8 === "string") {
                         if (func1(data8) < 1) {
-                            const err24 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema45.properties.rbf.properties.of, data: data8 };
+                            const err24 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.rbf.properties.of, data: data8 };
                             if (vErrors === null) {
                                 vErrors = [err24];
                             }
@@ -44608,7 +41043,7 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err25 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema45.properties.rbf.properties.of.type, parentSchema: schema45.properties.rbf.properties.of, data: data8 };
+                        const err25 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.rbf.properties.of.type, parentSchema: schema23.properties.rbf.properties.of, data: data8 };
                         if (vErrors === null) {
                             vErrors = [err25];
                         }
@@ -44619,14 +41054,16 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                 }
                 if (data7.centers !== undefined) {
-                    let data9 = data7.centers;
-                    const _errs24 = errors;
-                    let valid7 = false;
-                    let passing0 = null;
-                    const _errs25 = errors;
-                    if (Array.isArray(data9)) {
-                        if (data9.length < 1) {
-                            const err26 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema46.oneOf[0], data: data9 };
+                    if (!(validate69(data7.centers, { instancePath: instancePath + "/rbf/centers", parentData: data7, parentDataProperty: "centers", rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+                        errors = vErrors.length;
+                    }
+                }
+                if (data7.width !== undefined) {
+                    let data10 = data7.width;
+                    if ((typeof data10 == "number") && (isFinite(data10))) {
+                        if (data10 <= 0 || isNaN(data10)) {
+                            const err26 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.rbf.properties.width, data: data10 };
                             if (vErrors === null) {
                                 vErrors = [err26];
                             }
@@ -44635,386 +41072,237 @@ function validate24(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                        const len1 = data9.length;
-                        for (let i1 = 0; i1 < len1; i1++) {
-                            let data10 = data9[i1];
-                            if (!((typeof data10 == "number") && (isFinite(data10)))) {
-                                const err27 = { instancePath: instancePath + "/rbf/centers/" + i1, schemaPath: "#/$defs/centers/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[0].items.type, parentSchema: schema46.oneOf[0].items, data: data10 };
-                                if (vErrors === null) {
-                                    vErrors = [err27];
-                                }
-                                else {
-                                    vErrors.push(err27);
-                                }
-                                errors++;
-                            }
-                        }
                     }
                     else {
-                        const err28 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema46.oneOf[0].type, parentSchema: schema46.oneOf[0], data: data9 };
+                        const err27 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.width.type, parentSchema: schema23.properties.rbf.properties.width, data: data10 };
                         if (vErrors === null) {
-                            vErrors = [err28];
+                            vErrors = [err27];
                         }
                         else {
-                            vErrors.push(err28);
-                        }
-                        errors++;
-                    }
-                    var _valid0 = _errs25 === errors;
-                    if (_valid0) {
-                        valid7 = true;
-                        passing0 = 0;
-                    }
-                    const _errs29 = errors;
-                    if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                        if (data9.from === undefined) {
-                            const err29 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema46.oneOf[1].required, parentSchema: schema46.oneOf[1], data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err29];
-                            }
-                            else {
-                                vErrors.push(err29);
-                            }
-                            errors++;
-                        }
-                        if (data9.to === undefined) {
-                            const err30 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema46.oneOf[1].required, parentSchema: schema46.oneOf[1], data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err30];
-                            }
-                            else {
-                                vErrors.push(err30);
-                            }
-                            errors++;
-                        }
-                        if (data9.count === undefined) {
-                            const err31 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema46.oneOf[1].required, parentSchema: schema46.oneOf[1], data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err31];
-                            }
-                            else {
-                                vErrors.push(err31);
-                            }
-                            errors++;
-                        }
-                        for (const key3 in data9) {
-                            if (!(((key3 === "from") || (key3 === "to")) || (key3 === "count"))) {
-                                const err32 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema46.oneOf[1], data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err32];
-                                }
-                                else {
-                                    vErrors.push(err32);
-                                }
-                                errors++;
-                            }
-                        }
-                        if (data9.from !== undefined) {
-                            let data11 = data9.from;
-                            if (!((typeof data11 == "number") && (isFinite(data11)))) {
-                                const err33 = { instancePath: instancePath + "/rbf/centers/from", schemaPath: "#/$defs/centers/oneOf/1/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[1].properties.from.type, parentSchema: schema46.oneOf[1].properties.from, data: data11 };
-                                if (vErrors === null) {
-                                    vErrors = [err33];
-                                }
-                                else {
-                                    vErrors.push(err33);
-                                }
-                                errors++;
-                            }
-                        }
-                        if (data9.to !== undefined) {
-                            let data12 = data9.to;
-                            if (!((typeof data12 == "number") && (isFinite(data12)))) {
-                                const err34 = { instancePath: instancePath + "/rbf/centers/to", schemaPath: "#/$defs/centers/oneOf/1/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[1].properties.to.type, parentSchema: schema46.oneOf[1].properties.to, data: data12 };
-                                if (vErrors === null) {
-                                    vErrors = [err34];
-                                }
-                                else {
-                                    vErrors.push(err34);
-                                }
-                                errors++;
-                            }
-                        }
-                        if (data9.count !== undefined) {
-                            let data13 = data9.count;
-                            if (!(((typeof data13 == "number") && (!(data13 % 1) && !isNaN(data13))) && (isFinite(data13)))) {
-                                const err35 = { instancePath: instancePath + "/rbf/centers/count", schemaPath: "#/$defs/centers/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema46.oneOf[1].properties.count.type, parentSchema: schema46.oneOf[1].properties.count, data: data13 };
-                                if (vErrors === null) {
-                                    vErrors = [err35];
-                                }
-                                else {
-                                    vErrors.push(err35);
-                                }
-                                errors++;
-                            }
-                            if ((typeof data13 == "number") && (isFinite(data13))) {
-                                if (data13 > 10000 || isNaN(data13)) {
-                                    const err36 = { instancePath: instancePath + "/rbf/centers/count", schemaPath: "#/$defs/centers/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 10000 }, message: "must be <= 10000", schema: 10000, parentSchema: schema46.oneOf[1].properties.count, data: data13 };
-                                    if (vErrors === null) {
-                                        vErrors = [err36];
-                                    }
-                                    else {
-                                        vErrors.push(err36);
-                                    }
-                                    errors++;
-                                }
-                                if (data13 < 1 || isNaN(data13)) {
-                                    const err37 = { instancePath: instancePath + "/rbf/centers/count", schemaPath: "#/$defs/centers/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema46.oneOf[1].properties.count, data: data13 };
-                                    if (vErrors === null) {
-                                        vErrors = [err37];
-                                    }
-                                    else {
-                                        vErrors.push(err37);
-                                    }
-                                    errors++;
-                                }
-                            }
-                        }
-                    }
-                    else {
-                        const err38 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema46.oneOf[1].type, parentSchema: schema46.oneOf[1], data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err38];
-                        }
-                        else {
-                            vErrors.push(err38);
-                        }
-                        errors++;
-                    }
-                    var _valid0 = _errs29 === errors;
-                    if (_valid0 && valid7) {
-                        valid7 = false;
-                        passing0 = [passing0, 1];
-                    }
-                    else {
-                        if (_valid0) {
-                            valid7 = true;
-                            passing0 = 1;
-                            var props0 = true;
-                        }
-                        const _errs38 = errors;
-                        if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                            if (data9.from === undefined) {
-                                const err39 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema46.oneOf[2].required, parentSchema: schema46.oneOf[2], data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err39];
-                                }
-                                else {
-                                    vErrors.push(err39);
-                                }
-                                errors++;
-                            }
-                            if (data9.to === undefined) {
-                                const err40 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema46.oneOf[2].required, parentSchema: schema46.oneOf[2], data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err40];
-                                }
-                                else {
-                                    vErrors.push(err40);
-                                }
-                                errors++;
-                            }
-                            if (data9.step === undefined) {
-                                const err41 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/required", keyword: "required", params: { missingProperty: "step" }, message: "must have required property '" + "step" + "'", schema: schema46.oneOf[2].required, parentSchema: schema46.oneOf[2], data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err41];
-                                }
-                                else {
-                                    vErrors.push(err41);
-                                }
-                                errors++;
-                            }
-                            for (const key4 in data9) {
-                                if (!(((key4 === "from") || (key4 === "to")) || (key4 === "step"))) {
-                                    const err42 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema46.oneOf[2], data: data9 };
-                                    if (vErrors === null) {
-                                        vErrors = [err42];
-                                    }
-                                    else {
-                                        vErrors.push(err42);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            if (data9.from !== undefined) {
-                                let data14 = data9.from;
-                                if (!((typeof data14 == "number") && (isFinite(data14)))) {
-                                    const err43 = { instancePath: instancePath + "/rbf/centers/from", schemaPath: "#/$defs/centers/oneOf/2/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[2].properties.from.type, parentSchema: schema46.oneOf[2].properties.from, data: data14 };
-                                    if (vErrors === null) {
-                                        vErrors = [err43];
-                                    }
-                                    else {
-                                        vErrors.push(err43);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            if (data9.to !== undefined) {
-                                let data15 = data9.to;
-                                if (!((typeof data15 == "number") && (isFinite(data15)))) {
-                                    const err44 = { instancePath: instancePath + "/rbf/centers/to", schemaPath: "#/$defs/centers/oneOf/2/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[2].properties.to.type, parentSchema: schema46.oneOf[2].properties.to, data: data15 };
-                                    if (vErrors === null) {
-                                        vErrors = [err44];
-                                    }
-                                    else {
-                                        vErrors.push(err44);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            if (data9.step !== undefined) {
-                                let data16 = data9.step;
-                                if ((typeof data16 == "number") && (isFinite(data16))) {
-                                    if (data16 <= 0 || isNaN(data16)) {
-                                        const err45 = { instancePath: instancePath + "/rbf/centers/step", schemaPath: "#/$defs/centers/oneOf/2/properties/step/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema46.oneOf[2].properties.step, data: data16 };
-                                        if (vErrors === null) {
-                                            vErrors = [err45];
-                                        }
-                                        else {
-                                            vErrors.push(err45);
-                                        }
-                                        errors++;
-                                    }
-                                }
-                                else {
-                                    const err46 = { instancePath: instancePath + "/rbf/centers/step", schemaPath: "#/$defs/centers/oneOf/2/properties/step/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema46.oneOf[2].properties.step.type, parentSchema: schema46.oneOf[2].properties.step, data: data16 };
-                                    if (vErrors === null) {
-                                        vErrors = [err46];
-                                    }
-                                    else {
-                                        vErrors.push(err46);
-                                    }
-                                    errors++;
-                                }
-                            }
-                        }
-                        else {
-                            const err47 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema46.oneOf[2].type, parentSchema: schema46.oneOf[2], data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err47];
-                            }
-                            else {
-                                vErrors.push(err47);
-                            }
-                            errors++;
-                        }
-                        var _valid0 = _errs38 === errors;
-                        if (_valid0 && valid7) {
-                            valid7 = false;
-                            passing0 = [passing0, 2];
-                        }
-                        else {
-                            if (_valid0) {
-                                valid7 = true;
-                                passing0 = 2;
-                                if (props0 !== true) {
-                                    props0 = true;
-                                }
-                            }
-                            const _errs47 = errors;
-                            if ("at-samples" !== data9) {
-                                const err48 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf/3/const", keyword: "const", params: { allowedValue: "at-samples" }, message: "must be equal to constant", schema: "at-samples", parentSchema: schema46.oneOf[3], data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err48];
-                                }
-                                else {
-                                    vErrors.push(err48);
-                                }
-                                errors++;
-                            }
-                            var _valid0 = _errs47 === errors;
-                            if (_valid0 && valid7) {
-                                valid7 = false;
-                                passing0 = [passing0, 3];
-                            }
-                            else {
-                                if (_valid0) {
-                                    valid7 = true;
-                                    passing0 = 3;
-                                }
-                            }
-                        }
-                    }
-                    if (!valid7) {
-                        const err49 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/$defs/centers/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema46.oneOf, parentSchema: schema46, data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err49];
-                        }
-                        else {
-                            vErrors.push(err49);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs24;
-                        if (vErrors !== null) {
-                            if (_errs24) {
-                                vErrors.length = _errs24;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data7.width !== undefined) {
-                    let data17 = data7.width;
-                    if ((typeof data17 == "number") && (isFinite(data17))) {
-                        if (data17 <= 0 || isNaN(data17)) {
-                            const err50 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema45.properties.rbf.properties.width, data: data17 };
-                            if (vErrors === null) {
-                                vErrors = [err50];
-                            }
-                            else {
-                                vErrors.push(err50);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err51 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema45.properties.rbf.properties.width.type, parentSchema: schema45.properties.rbf.properties.width, data: data17 };
-                        if (vErrors === null) {
-                            vErrors = [err51];
-                        }
-                        else {
-                            vErrors.push(err51);
+                            vErrors.push(err27);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err52 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema45.properties.rbf.type, parentSchema: schema45.properties.rbf, data: data7 };
+                const err28 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.rbf.type, parentSchema: schema23.properties.rbf, data: data7 };
                 if (vErrors === null) {
-                    vErrors = [err52];
+                    vErrors = [err28];
                 }
                 else {
-                    vErrors.push(err52);
+                    vErrors.push(err28);
                 }
                 errors++;
             }
         }
     }
     else {
-        const err53 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema45.type, parentSchema: schema45, data };
+        const err29 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.type, parentSchema: schema23, data };
         if (vErrors === null) {
-            vErrors = [err53];
+            vErrors = [err29];
         }
         else {
-            vErrors.push(err53);
+            vErrors.push(err29);
         }
         errors++;
     }
-    validate24.errors = vErrors;
+    validate68.errors = vErrors;
     return errors === 0;
 }
-validate24.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true }, "dynamicProps": false, "dynamicItems": false };
-const schema47 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
-const schema48 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
-function validate26(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate68.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true }, "dynamicProps": false, "dynamicItems": false };
+const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
+const schema26 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+function validate73(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate26.evaluated;
+    const evaluated0 = validate73.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    const _errs0 = errors;
+    let valid0 = false;
+    let passing0 = null;
+    const _errs1 = errors;
+    if ((typeof data == "number") && (isFinite(data))) {
+        if (data < 0 || isNaN(data)) {
+            const err0 = { instancePath, schemaPath: "#/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[0], data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+    }
+    else {
+        const err1 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[0].type, parentSchema: schema26.oneOf[0], data };
+        if (vErrors === null) {
+            vErrors = [err1];
+        }
+        else {
+            vErrors.push(err1);
+        }
+        errors++;
+    }
+    var _valid0 = _errs1 === errors;
+    if (_valid0) {
+        valid0 = true;
+        passing0 = 0;
+    }
+    const _errs3 = errors;
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (Object.keys(data).length < 1) {
+            const err2 = { instancePath, schemaPath: "#/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema26.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err2];
+            }
+            else {
+                vErrors.push(err2);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!((key0 === "warn") || (key0 === "fail"))) {
+                const err3 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema26.oneOf[1], data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.warn !== undefined) {
+            let data0 = data.warn;
+            if ((typeof data0 == "number") && (isFinite(data0))) {
+                if (data0 < 0 || isNaN(data0)) {
+                    const err4 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[1].properties.warn, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err5 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[1].properties.warn.type, parentSchema: schema26.oneOf[1].properties.warn, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.fail !== undefined) {
+            let data1 = data.fail;
+            if ((typeof data1 == "number") && (isFinite(data1))) {
+                if (data1 < 0 || isNaN(data1)) {
+                    const err6 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[1].properties.fail, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[1].properties.fail.type, parentSchema: schema26.oneOf[1].properties.fail, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err8 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema26.oneOf[1].type, parentSchema: schema26.oneOf[1], data };
+        if (vErrors === null) {
+            vErrors = [err8];
+        }
+        else {
+            vErrors.push(err8);
+        }
+        errors++;
+    }
+    var _valid0 = _errs3 === errors;
+    if (_valid0 && valid0) {
+        valid0 = false;
+        passing0 = [passing0, 1];
+    }
+    else {
+        if (_valid0) {
+            valid0 = true;
+            passing0 = 1;
+            var props0 = true;
+        }
+        const _errs10 = errors;
+        if ("off" !== data) {
+            const err9 = { instancePath, schemaPath: "#/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema26.oneOf[2], data };
+            if (vErrors === null) {
+                vErrors = [err9];
+            }
+            else {
+                vErrors.push(err9);
+            }
+            errors++;
+        }
+        var _valid0 = _errs10 === errors;
+        if (_valid0 && valid0) {
+            valid0 = false;
+            passing0 = [passing0, 2];
+        }
+        else {
+            if (_valid0) {
+                valid0 = true;
+                passing0 = 2;
+            }
+        }
+    }
+    if (!valid0) {
+        const err10 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema26.oneOf, parentSchema: schema26, data };
+        if (vErrors === null) {
+            vErrors = [err10];
+        }
+        else {
+            vErrors.push(err10);
+        }
+        errors++;
+    }
+    else {
+        errors = _errs0;
+        if (vErrors !== null) {
+            if (_errs0) {
+                vErrors.length = _errs0;
+            }
+            else {
+                vErrors = null;
+            }
+        }
+    }
+    validate73.errors = vErrors;
+    evaluated0.props = props0;
+    return errors === 0;
+}
+validate73.evaluated = { "dynamicProps": true, "dynamicItems": false };
+function validate72(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate72.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -45023,8 +41311,8 @@ function validate26(data, { instancePath = "", parentData, parentDataProperty, r
     }
     if (data && typeof data == "object" && !Array.isArray(data)) {
         for (const key0 in data) {
-            if (!(func2.call(schema47.properties, key0))) {
-                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema47, data };
+            if (!(func2.call(schema25.properties, key0))) {
+                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema25, data };
                 if (vErrors === null) {
                     vErrors = [err0];
                 }
@@ -45035,1928 +41323,91 @@ function validate26(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
         if (data.gap_ratio !== undefined) {
-            let data0 = data.gap_ratio;
-            const _errs4 = errors;
-            let valid2 = false;
-            let passing0 = null;
-            const _errs5 = errors;
-            if ((typeof data0 == "number") && (isFinite(data0))) {
-                if (data0 < 0 || isNaN(data0)) {
-                    const err1 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err1];
-                    }
-                    else {
-                        vErrors.push(err1);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err2 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err2];
-                }
-                else {
-                    vErrors.push(err2);
-                }
-                errors++;
-            }
-            var _valid0 = _errs5 === errors;
-            if (_valid0) {
-                valid2 = true;
-                passing0 = 0;
-            }
-            const _errs7 = errors;
-            if (data0 && typeof data0 == "object" && !Array.isArray(data0)) {
-                if (Object.keys(data0).length < 1) {
-                    const err3 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err3];
-                    }
-                    else {
-                        vErrors.push(err3);
-                    }
-                    errors++;
-                }
-                for (const key1 in data0) {
-                    if (!((key1 === "warn") || (key1 === "fail"))) {
-                        const err4 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data0 };
-                        if (vErrors === null) {
-                            vErrors = [err4];
-                        }
-                        else {
-                            vErrors.push(err4);
-                        }
-                        errors++;
-                    }
-                }
-                if (data0.warn !== undefined) {
-                    let data1 = data0.warn;
-                    if ((typeof data1 == "number") && (isFinite(data1))) {
-                        if (data1 < 0 || isNaN(data1)) {
-                            const err5 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data1 };
-                            if (vErrors === null) {
-                                vErrors = [err5];
-                            }
-                            else {
-                                vErrors.push(err5);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err6 = { instancePath: instancePath + "/gap_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data1 };
-                        if (vErrors === null) {
-                            vErrors = [err6];
-                        }
-                        else {
-                            vErrors.push(err6);
-                        }
-                        errors++;
-                    }
-                }
-                if (data0.fail !== undefined) {
-                    let data2 = data0.fail;
-                    if ((typeof data2 == "number") && (isFinite(data2))) {
-                        if (data2 < 0 || isNaN(data2)) {
-                            const err7 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data2 };
-                            if (vErrors === null) {
-                                vErrors = [err7];
-                            }
-                            else {
-                                vErrors.push(err7);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err8 = { instancePath: instancePath + "/gap_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data2 };
-                        if (vErrors === null) {
-                            vErrors = [err8];
-                        }
-                        else {
-                            vErrors.push(err8);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err9 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err9];
-                }
-                else {
-                    vErrors.push(err9);
-                }
-                errors++;
-            }
-            var _valid0 = _errs7 === errors;
-            if (_valid0 && valid2) {
-                valid2 = false;
-                passing0 = [passing0, 1];
-            }
-            else {
-                if (_valid0) {
-                    valid2 = true;
-                    passing0 = 1;
-                }
-                const _errs14 = errors;
-                if ("off" !== data0) {
-                    const err10 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err10];
-                    }
-                    else {
-                        vErrors.push(err10);
-                    }
-                    errors++;
-                }
-                var _valid0 = _errs14 === errors;
-                if (_valid0 && valid2) {
-                    valid2 = false;
-                    passing0 = [passing0, 2];
-                }
-                else {
-                    if (_valid0) {
-                        valid2 = true;
-                        passing0 = 2;
-                    }
-                }
-            }
-            if (!valid2) {
-                const err11 = { instancePath: instancePath + "/gap_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err11];
-                }
-                else {
-                    vErrors.push(err11);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs4;
-                if (vErrors !== null) {
-                    if (_errs4) {
-                        vErrors.length = _errs4;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.params_per_sample !== undefined) {
-            let data3 = data.params_per_sample;
-            const _errs17 = errors;
-            let valid5 = false;
-            let passing1 = null;
-            const _errs18 = errors;
-            if ((typeof data3 == "number") && (isFinite(data3))) {
-                if (data3 < 0 || isNaN(data3)) {
-                    const err12 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err12];
-                    }
-                    else {
-                        vErrors.push(err12);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err13 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err13];
-                }
-                else {
-                    vErrors.push(err13);
-                }
-                errors++;
-            }
-            var _valid1 = _errs18 === errors;
-            if (_valid1) {
-                valid5 = true;
-                passing1 = 0;
-            }
-            const _errs20 = errors;
-            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
-                if (Object.keys(data3).length < 1) {
-                    const err14 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err14];
-                    }
-                    else {
-                        vErrors.push(err14);
-                    }
-                    errors++;
-                }
-                for (const key2 in data3) {
-                    if (!((key2 === "warn") || (key2 === "fail"))) {
-                        const err15 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data3 };
-                        if (vErrors === null) {
-                            vErrors = [err15];
-                        }
-                        else {
-                            vErrors.push(err15);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.warn !== undefined) {
-                    let data4 = data3.warn;
-                    if ((typeof data4 == "number") && (isFinite(data4))) {
-                        if (data4 < 0 || isNaN(data4)) {
-                            const err16 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data4 };
-                            if (vErrors === null) {
-                                vErrors = [err16];
-                            }
-                            else {
-                                vErrors.push(err16);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err17 = { instancePath: instancePath + "/params_per_sample/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data4 };
-                        if (vErrors === null) {
-                            vErrors = [err17];
-                        }
-                        else {
-                            vErrors.push(err17);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.fail !== undefined) {
-                    let data5 = data3.fail;
-                    if ((typeof data5 == "number") && (isFinite(data5))) {
-                        if (data5 < 0 || isNaN(data5)) {
-                            const err18 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data5 };
-                            if (vErrors === null) {
-                                vErrors = [err18];
-                            }
-                            else {
-                                vErrors.push(err18);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err19 = { instancePath: instancePath + "/params_per_sample/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data5 };
-                        if (vErrors === null) {
-                            vErrors = [err19];
-                        }
-                        else {
-                            vErrors.push(err19);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err20 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err20];
-                }
-                else {
-                    vErrors.push(err20);
-                }
-                errors++;
-            }
-            var _valid1 = _errs20 === errors;
-            if (_valid1 && valid5) {
-                valid5 = false;
-                passing1 = [passing1, 1];
-            }
-            else {
-                if (_valid1) {
-                    valid5 = true;
-                    passing1 = 1;
-                }
-                const _errs27 = errors;
-                if ("off" !== data3) {
-                    const err21 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err21];
-                    }
-                    else {
-                        vErrors.push(err21);
-                    }
-                    errors++;
-                }
-                var _valid1 = _errs27 === errors;
-                if (_valid1 && valid5) {
-                    valid5 = false;
-                    passing1 = [passing1, 2];
-                }
-                else {
-                    if (_valid1) {
-                        valid5 = true;
-                        passing1 = 2;
-                    }
-                }
-            }
-            if (!valid5) {
-                const err22 = { instancePath: instancePath + "/params_per_sample", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing1 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err22];
-                }
-                else {
-                    vErrors.push(err22);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs17;
-                if (vErrors !== null) {
-                    if (_errs17) {
-                        vErrors.length = _errs17;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.coefficient !== undefined) {
-            let data6 = data.coefficient;
-            const _errs30 = errors;
-            let valid8 = false;
-            let passing2 = null;
-            const _errs31 = errors;
-            if ((typeof data6 == "number") && (isFinite(data6))) {
-                if (data6 < 0 || isNaN(data6)) {
-                    const err23 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err23];
-                    }
-                    else {
-                        vErrors.push(err23);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err24 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data6 };
-                if (vErrors === null) {
-                    vErrors = [err24];
-                }
-                else {
-                    vErrors.push(err24);
-                }
-                errors++;
-            }
-            var _valid2 = _errs31 === errors;
-            if (_valid2) {
-                valid8 = true;
-                passing2 = 0;
-            }
-            const _errs33 = errors;
-            if (data6 && typeof data6 == "object" && !Array.isArray(data6)) {
-                if (Object.keys(data6).length < 1) {
-                    const err25 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err25];
-                    }
-                    else {
-                        vErrors.push(err25);
-                    }
-                    errors++;
-                }
-                for (const key3 in data6) {
-                    if (!((key3 === "warn") || (key3 === "fail"))) {
-                        const err26 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err26];
-                        }
-                        else {
-                            vErrors.push(err26);
-                        }
-                        errors++;
-                    }
-                }
-                if (data6.warn !== undefined) {
-                    let data7 = data6.warn;
-                    if ((typeof data7 == "number") && (isFinite(data7))) {
-                        if (data7 < 0 || isNaN(data7)) {
-                            const err27 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data7 };
-                            if (vErrors === null) {
-                                vErrors = [err27];
-                            }
-                            else {
-                                vErrors.push(err27);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err28 = { instancePath: instancePath + "/coefficient/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data7 };
-                        if (vErrors === null) {
-                            vErrors = [err28];
-                        }
-                        else {
-                            vErrors.push(err28);
-                        }
-                        errors++;
-                    }
-                }
-                if (data6.fail !== undefined) {
-                    let data8 = data6.fail;
-                    if ((typeof data8 == "number") && (isFinite(data8))) {
-                        if (data8 < 0 || isNaN(data8)) {
-                            const err29 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data8 };
-                            if (vErrors === null) {
-                                vErrors = [err29];
-                            }
-                            else {
-                                vErrors.push(err29);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err30 = { instancePath: instancePath + "/coefficient/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err30];
-                        }
-                        else {
-                            vErrors.push(err30);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err31 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data6 };
-                if (vErrors === null) {
-                    vErrors = [err31];
-                }
-                else {
-                    vErrors.push(err31);
-                }
-                errors++;
-            }
-            var _valid2 = _errs33 === errors;
-            if (_valid2 && valid8) {
-                valid8 = false;
-                passing2 = [passing2, 1];
-            }
-            else {
-                if (_valid2) {
-                    valid8 = true;
-                    passing2 = 1;
-                }
-                const _errs40 = errors;
-                if ("off" !== data6) {
-                    const err32 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err32];
-                    }
-                    else {
-                        vErrors.push(err32);
-                    }
-                    errors++;
-                }
-                var _valid2 = _errs40 === errors;
-                if (_valid2 && valid8) {
-                    valid8 = false;
-                    passing2 = [passing2, 2];
-                }
-                else {
-                    if (_valid2) {
-                        valid8 = true;
-                        passing2 = 2;
-                    }
-                }
-            }
-            if (!valid8) {
-                const err33 = { instancePath: instancePath + "/coefficient", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing2 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data6 };
-                if (vErrors === null) {
-                    vErrors = [err33];
-                }
-                else {
-                    vErrors.push(err33);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs30;
-                if (vErrors !== null) {
-                    if (_errs30) {
-                        vErrors.length = _errs30;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.cv_ratio !== undefined) {
-            let data9 = data.cv_ratio;
-            const _errs43 = errors;
-            let valid11 = false;
-            let passing3 = null;
-            const _errs44 = errors;
-            if ((typeof data9 == "number") && (isFinite(data9))) {
-                if (data9 < 0 || isNaN(data9)) {
-                    const err34 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data9 };
-                    if (vErrors === null) {
-                        vErrors = [err34];
-                    }
-                    else {
-                        vErrors.push(err34);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err35 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err35];
-                }
-                else {
-                    vErrors.push(err35);
-                }
-                errors++;
-            }
-            var _valid3 = _errs44 === errors;
-            if (_valid3) {
-                valid11 = true;
-                passing3 = 0;
-            }
-            const _errs46 = errors;
-            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                if (Object.keys(data9).length < 1) {
-                    const err36 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data9 };
-                    if (vErrors === null) {
-                        vErrors = [err36];
-                    }
-                    else {
-                        vErrors.push(err36);
-                    }
-                    errors++;
-                }
-                for (const key4 in data9) {
-                    if (!((key4 === "warn") || (key4 === "fail"))) {
-                        const err37 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err37];
-                        }
-                        else {
-                            vErrors.push(err37);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.warn !== undefined) {
-                    let data10 = data9.warn;
-                    if ((typeof data10 == "number") && (isFinite(data10))) {
-                        if (data10 < 0 || isNaN(data10)) {
-                            const err38 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data10 };
-                            if (vErrors === null) {
-                                vErrors = [err38];
-                            }
-                            else {
-                                vErrors.push(err38);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err39 = { instancePath: instancePath + "/cv_ratio/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data10 };
-                        if (vErrors === null) {
-                            vErrors = [err39];
-                        }
-                        else {
-                            vErrors.push(err39);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.fail !== undefined) {
-                    let data11 = data9.fail;
-                    if ((typeof data11 == "number") && (isFinite(data11))) {
-                        if (data11 < 0 || isNaN(data11)) {
-                            const err40 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data11 };
-                            if (vErrors === null) {
-                                vErrors = [err40];
-                            }
-                            else {
-                                vErrors.push(err40);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err41 = { instancePath: instancePath + "/cv_ratio/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data11 };
-                        if (vErrors === null) {
-                            vErrors = [err41];
-                        }
-                        else {
-                            vErrors.push(err41);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err42 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err42];
-                }
-                else {
-                    vErrors.push(err42);
-                }
-                errors++;
-            }
-            var _valid3 = _errs46 === errors;
-            if (_valid3 && valid11) {
-                valid11 = false;
-                passing3 = [passing3, 1];
-            }
-            else {
-                if (_valid3) {
-                    valid11 = true;
-                    passing3 = 1;
-                }
-                const _errs53 = errors;
-                if ("off" !== data9) {
-                    const err43 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data9 };
-                    if (vErrors === null) {
-                        vErrors = [err43];
-                    }
-                    else {
-                        vErrors.push(err43);
-                    }
-                    errors++;
-                }
-                var _valid3 = _errs53 === errors;
-                if (_valid3 && valid11) {
-                    valid11 = false;
-                    passing3 = [passing3, 2];
-                }
-                else {
-                    if (_valid3) {
-                        valid11 = true;
-                        passing3 = 2;
-                    }
-                }
-            }
-            if (!valid11) {
-                const err44 = { instancePath: instancePath + "/cv_ratio", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing3 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err44];
-                }
-                else {
-                    vErrors.push(err44);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs43;
-                if (vErrors !== null) {
-                    if (_errs43) {
-                        vErrors.length = _errs43;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.leakage !== undefined) {
-            let data12 = data.leakage;
-            const _errs56 = errors;
-            let valid14 = false;
-            let passing4 = null;
-            const _errs57 = errors;
-            if ((typeof data12 == "number") && (isFinite(data12))) {
-                if (data12 < 0 || isNaN(data12)) {
-                    const err45 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data12 };
-                    if (vErrors === null) {
-                        vErrors = [err45];
-                    }
-                    else {
-                        vErrors.push(err45);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err46 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err46];
-                }
-                else {
-                    vErrors.push(err46);
-                }
-                errors++;
-            }
-            var _valid4 = _errs57 === errors;
-            if (_valid4) {
-                valid14 = true;
-                passing4 = 0;
-            }
-            const _errs59 = errors;
-            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
-                if (Object.keys(data12).length < 1) {
-                    const err47 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data12 };
-                    if (vErrors === null) {
-                        vErrors = [err47];
-                    }
-                    else {
-                        vErrors.push(err47);
-                    }
-                    errors++;
-                }
-                for (const key5 in data12) {
-                    if (!((key5 === "warn") || (key5 === "fail"))) {
-                        const err48 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err48];
-                        }
-                        else {
-                            vErrors.push(err48);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.warn !== undefined) {
-                    let data13 = data12.warn;
-                    if ((typeof data13 == "number") && (isFinite(data13))) {
-                        if (data13 < 0 || isNaN(data13)) {
-                            const err49 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data13 };
-                            if (vErrors === null) {
-                                vErrors = [err49];
-                            }
-                            else {
-                                vErrors.push(err49);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err50 = { instancePath: instancePath + "/leakage/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data13 };
-                        if (vErrors === null) {
-                            vErrors = [err50];
-                        }
-                        else {
-                            vErrors.push(err50);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.fail !== undefined) {
-                    let data14 = data12.fail;
-                    if ((typeof data14 == "number") && (isFinite(data14))) {
-                        if (data14 < 0 || isNaN(data14)) {
-                            const err51 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data14 };
-                            if (vErrors === null) {
-                                vErrors = [err51];
-                            }
-                            else {
-                                vErrors.push(err51);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err52 = { instancePath: instancePath + "/leakage/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err52];
-                        }
-                        else {
-                            vErrors.push(err52);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err53 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err53];
-                }
-                else {
-                    vErrors.push(err53);
-                }
-                errors++;
-            }
-            var _valid4 = _errs59 === errors;
-            if (_valid4 && valid14) {
-                valid14 = false;
-                passing4 = [passing4, 1];
-            }
-            else {
-                if (_valid4) {
-                    valid14 = true;
-                    passing4 = 1;
-                }
-                const _errs66 = errors;
-                if ("off" !== data12) {
-                    const err54 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data12 };
-                    if (vErrors === null) {
-                        vErrors = [err54];
-                    }
-                    else {
-                        vErrors.push(err54);
-                    }
-                    errors++;
-                }
-                var _valid4 = _errs66 === errors;
-                if (_valid4 && valid14) {
-                    valid14 = false;
-                    passing4 = [passing4, 2];
-                }
-                else {
-                    if (_valid4) {
-                        valid14 = true;
-                        passing4 = 2;
-                    }
-                }
-            }
-            if (!valid14) {
-                const err55 = { instancePath: instancePath + "/leakage", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing4 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err55];
-                }
-                else {
-                    vErrors.push(err55);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs56;
-                if (vErrors !== null) {
-                    if (_errs56) {
-                        vErrors.length = _errs56;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.swing !== undefined) {
-            let data15 = data.swing;
-            const _errs69 = errors;
-            let valid17 = false;
-            let passing5 = null;
-            const _errs70 = errors;
-            if ((typeof data15 == "number") && (isFinite(data15))) {
-                if (data15 < 0 || isNaN(data15)) {
-                    const err56 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data15 };
-                    if (vErrors === null) {
-                        vErrors = [err56];
-                    }
-                    else {
-                        vErrors.push(err56);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err57 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data15 };
-                if (vErrors === null) {
-                    vErrors = [err57];
-                }
-                else {
-                    vErrors.push(err57);
-                }
-                errors++;
-            }
-            var _valid5 = _errs70 === errors;
-            if (_valid5) {
-                valid17 = true;
-                passing5 = 0;
-            }
-            const _errs72 = errors;
-            if (data15 && typeof data15 == "object" && !Array.isArray(data15)) {
-                if (Object.keys(data15).length < 1) {
-                    const err58 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data15 };
-                    if (vErrors === null) {
-                        vErrors = [err58];
-                    }
-                    else {
-                        vErrors.push(err58);
-                    }
-                    errors++;
-                }
-                for (const key6 in data15) {
-                    if (!((key6 === "warn") || (key6 === "fail"))) {
-                        const err59 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data15 };
-                        if (vErrors === null) {
-                            vErrors = [err59];
-                        }
-                        else {
-                            vErrors.push(err59);
-                        }
-                        errors++;
-                    }
-                }
-                if (data15.warn !== undefined) {
-                    let data16 = data15.warn;
-                    if ((typeof data16 == "number") && (isFinite(data16))) {
-                        if (data16 < 0 || isNaN(data16)) {
-                            const err60 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data16 };
-                            if (vErrors === null) {
-                                vErrors = [err60];
-                            }
-                            else {
-                                vErrors.push(err60);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err61 = { instancePath: instancePath + "/swing/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data16 };
-                        if (vErrors === null) {
-                            vErrors = [err61];
-                        }
-                        else {
-                            vErrors.push(err61);
-                        }
-                        errors++;
-                    }
-                }
-                if (data15.fail !== undefined) {
-                    let data17 = data15.fail;
-                    if ((typeof data17 == "number") && (isFinite(data17))) {
-                        if (data17 < 0 || isNaN(data17)) {
-                            const err62 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data17 };
-                            if (vErrors === null) {
-                                vErrors = [err62];
-                            }
-                            else {
-                                vErrors.push(err62);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err63 = { instancePath: instancePath + "/swing/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data17 };
-                        if (vErrors === null) {
-                            vErrors = [err63];
-                        }
-                        else {
-                            vErrors.push(err63);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err64 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data15 };
-                if (vErrors === null) {
-                    vErrors = [err64];
-                }
-                else {
-                    vErrors.push(err64);
-                }
-                errors++;
-            }
-            var _valid5 = _errs72 === errors;
-            if (_valid5 && valid17) {
-                valid17 = false;
-                passing5 = [passing5, 1];
-            }
-            else {
-                if (_valid5) {
-                    valid17 = true;
-                    passing5 = 1;
-                }
-                const _errs79 = errors;
-                if ("off" !== data15) {
-                    const err65 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data15 };
-                    if (vErrors === null) {
-                        vErrors = [err65];
-                    }
-                    else {
-                        vErrors.push(err65);
-                    }
-                    errors++;
-                }
-                var _valid5 = _errs79 === errors;
-                if (_valid5 && valid17) {
-                    valid17 = false;
-                    passing5 = [passing5, 2];
-                }
-                else {
-                    if (_valid5) {
-                        valid17 = true;
-                        passing5 = 2;
-                    }
-                }
-            }
-            if (!valid17) {
-                const err66 = { instancePath: instancePath + "/swing", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing5 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data15 };
-                if (vErrors === null) {
-                    vErrors = [err66];
-                }
-                else {
-                    vErrors.push(err66);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs69;
-                if (vErrors !== null) {
-                    if (_errs69) {
-                        vErrors.length = _errs69;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.swing_beyond !== undefined) {
-            let data18 = data.swing_beyond;
-            const _errs82 = errors;
-            let valid20 = false;
-            let passing6 = null;
-            const _errs83 = errors;
-            if ((typeof data18 == "number") && (isFinite(data18))) {
-                if (data18 < 0 || isNaN(data18)) {
-                    const err67 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data18 };
-                    if (vErrors === null) {
-                        vErrors = [err67];
-                    }
-                    else {
-                        vErrors.push(err67);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err68 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data18 };
-                if (vErrors === null) {
-                    vErrors = [err68];
-                }
-                else {
-                    vErrors.push(err68);
-                }
-                errors++;
-            }
-            var _valid6 = _errs83 === errors;
-            if (_valid6) {
-                valid20 = true;
-                passing6 = 0;
-            }
-            const _errs85 = errors;
-            if (data18 && typeof data18 == "object" && !Array.isArray(data18)) {
-                if (Object.keys(data18).length < 1) {
-                    const err69 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data18 };
-                    if (vErrors === null) {
-                        vErrors = [err69];
-                    }
-                    else {
-                        vErrors.push(err69);
-                    }
-                    errors++;
-                }
-                for (const key7 in data18) {
-                    if (!((key7 === "warn") || (key7 === "fail"))) {
-                        const err70 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data18 };
-                        if (vErrors === null) {
-                            vErrors = [err70];
-                        }
-                        else {
-                            vErrors.push(err70);
-                        }
-                        errors++;
-                    }
-                }
-                if (data18.warn !== undefined) {
-                    let data19 = data18.warn;
-                    if ((typeof data19 == "number") && (isFinite(data19))) {
-                        if (data19 < 0 || isNaN(data19)) {
-                            const err71 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data19 };
-                            if (vErrors === null) {
-                                vErrors = [err71];
-                            }
-                            else {
-                                vErrors.push(err71);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err72 = { instancePath: instancePath + "/swing_beyond/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data19 };
-                        if (vErrors === null) {
-                            vErrors = [err72];
-                        }
-                        else {
-                            vErrors.push(err72);
-                        }
-                        errors++;
-                    }
-                }
-                if (data18.fail !== undefined) {
-                    let data20 = data18.fail;
-                    if ((typeof data20 == "number") && (isFinite(data20))) {
-                        if (data20 < 0 || isNaN(data20)) {
-                            const err73 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data20 };
-                            if (vErrors === null) {
-                                vErrors = [err73];
-                            }
-                            else {
-                                vErrors.push(err73);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err74 = { instancePath: instancePath + "/swing_beyond/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data20 };
-                        if (vErrors === null) {
-                            vErrors = [err74];
-                        }
-                        else {
-                            vErrors.push(err74);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err75 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data18 };
-                if (vErrors === null) {
-                    vErrors = [err75];
-                }
-                else {
-                    vErrors.push(err75);
-                }
-                errors++;
-            }
-            var _valid6 = _errs85 === errors;
-            if (_valid6 && valid20) {
-                valid20 = false;
-                passing6 = [passing6, 1];
-            }
-            else {
-                if (_valid6) {
-                    valid20 = true;
-                    passing6 = 1;
-                }
-                const _errs92 = errors;
-                if ("off" !== data18) {
-                    const err76 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data18 };
-                    if (vErrors === null) {
-                        vErrors = [err76];
-                    }
-                    else {
-                        vErrors.push(err76);
-                    }
-                    errors++;
-                }
-                var _valid6 = _errs92 === errors;
-                if (_valid6 && valid20) {
-                    valid20 = false;
-                    passing6 = [passing6, 2];
-                }
-                else {
-                    if (_valid6) {
-                        valid20 = true;
-                        passing6 = 2;
-                    }
-                }
-            }
-            if (!valid20) {
-                const err77 = { instancePath: instancePath + "/swing_beyond", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing6 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data18 };
-                if (vErrors === null) {
-                    vErrors = [err77];
-                }
-                else {
-                    vErrors.push(err77);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs82;
-                if (vErrors !== null) {
-                    if (_errs82) {
-                        vErrors.length = _errs82;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.condition !== undefined) {
-            let data21 = data.condition;
-            const _errs95 = errors;
-            let valid23 = false;
-            let passing7 = null;
-            const _errs96 = errors;
-            if ((typeof data21 == "number") && (isFinite(data21))) {
-                if (data21 < 0 || isNaN(data21)) {
-                    const err78 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err78];
-                    }
-                    else {
-                        vErrors.push(err78);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err79 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data21 };
-                if (vErrors === null) {
-                    vErrors = [err79];
-                }
-                else {
-                    vErrors.push(err79);
-                }
-                errors++;
-            }
-            var _valid7 = _errs96 === errors;
-            if (_valid7) {
-                valid23 = true;
-                passing7 = 0;
-            }
-            const _errs98 = errors;
-            if (data21 && typeof data21 == "object" && !Array.isArray(data21)) {
-                if (Object.keys(data21).length < 1) {
-                    const err80 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err80];
-                    }
-                    else {
-                        vErrors.push(err80);
-                    }
-                    errors++;
-                }
-                for (const key8 in data21) {
-                    if (!((key8 === "warn") || (key8 === "fail"))) {
-                        const err81 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key8 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data21 };
-                        if (vErrors === null) {
-                            vErrors = [err81];
-                        }
-                        else {
-                            vErrors.push(err81);
-                        }
-                        errors++;
-                    }
-                }
-                if (data21.warn !== undefined) {
-                    let data22 = data21.warn;
-                    if ((typeof data22 == "number") && (isFinite(data22))) {
-                        if (data22 < 0 || isNaN(data22)) {
-                            const err82 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data22 };
-                            if (vErrors === null) {
-                                vErrors = [err82];
-                            }
-                            else {
-                                vErrors.push(err82);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err83 = { instancePath: instancePath + "/condition/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data22 };
-                        if (vErrors === null) {
-                            vErrors = [err83];
-                        }
-                        else {
-                            vErrors.push(err83);
-                        }
-                        errors++;
-                    }
-                }
-                if (data21.fail !== undefined) {
-                    let data23 = data21.fail;
-                    if ((typeof data23 == "number") && (isFinite(data23))) {
-                        if (data23 < 0 || isNaN(data23)) {
-                            const err84 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data23 };
-                            if (vErrors === null) {
-                                vErrors = [err84];
-                            }
-                            else {
-                                vErrors.push(err84);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err85 = { instancePath: instancePath + "/condition/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data23 };
-                        if (vErrors === null) {
-                            vErrors = [err85];
-                        }
-                        else {
-                            vErrors.push(err85);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err86 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data21 };
-                if (vErrors === null) {
-                    vErrors = [err86];
-                }
-                else {
-                    vErrors.push(err86);
-                }
-                errors++;
-            }
-            var _valid7 = _errs98 === errors;
-            if (_valid7 && valid23) {
-                valid23 = false;
-                passing7 = [passing7, 1];
-            }
-            else {
-                if (_valid7) {
-                    valid23 = true;
-                    passing7 = 1;
-                }
-                const _errs105 = errors;
-                if ("off" !== data21) {
-                    const err87 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err87];
-                    }
-                    else {
-                        vErrors.push(err87);
-                    }
-                    errors++;
-                }
-                var _valid7 = _errs105 === errors;
-                if (_valid7 && valid23) {
-                    valid23 = false;
-                    passing7 = [passing7, 2];
-                }
-                else {
-                    if (_valid7) {
-                        valid23 = true;
-                        passing7 = 2;
-                    }
-                }
-            }
-            if (!valid23) {
-                const err88 = { instancePath: instancePath + "/condition", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing7 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data21 };
-                if (vErrors === null) {
-                    vErrors = [err88];
-                }
-                else {
-                    vErrors.push(err88);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs95;
-                if (vErrors !== null) {
-                    if (_errs95) {
-                        vErrors.length = _errs95;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.reproducibility !== undefined) {
-            let data24 = data.reproducibility;
-            const _errs108 = errors;
-            let valid26 = false;
-            let passing8 = null;
-            const _errs109 = errors;
-            if ((typeof data24 == "number") && (isFinite(data24))) {
-                if (data24 < 0 || isNaN(data24)) {
-                    const err89 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data24 };
-                    if (vErrors === null) {
-                        vErrors = [err89];
-                    }
-                    else {
-                        vErrors.push(err89);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err90 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data24 };
-                if (vErrors === null) {
-                    vErrors = [err90];
-                }
-                else {
-                    vErrors.push(err90);
-                }
-                errors++;
-            }
-            var _valid8 = _errs109 === errors;
-            if (_valid8) {
-                valid26 = true;
-                passing8 = 0;
-            }
-            const _errs111 = errors;
-            if (data24 && typeof data24 == "object" && !Array.isArray(data24)) {
-                if (Object.keys(data24).length < 1) {
-                    const err91 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data24 };
-                    if (vErrors === null) {
-                        vErrors = [err91];
-                    }
-                    else {
-                        vErrors.push(err91);
-                    }
-                    errors++;
-                }
-                for (const key9 in data24) {
-                    if (!((key9 === "warn") || (key9 === "fail"))) {
-                        const err92 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key9 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data24 };
-                        if (vErrors === null) {
-                            vErrors = [err92];
-                        }
-                        else {
-                            vErrors.push(err92);
-                        }
-                        errors++;
-                    }
-                }
-                if (data24.warn !== undefined) {
-                    let data25 = data24.warn;
-                    if ((typeof data25 == "number") && (isFinite(data25))) {
-                        if (data25 < 0 || isNaN(data25)) {
-                            const err93 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data25 };
-                            if (vErrors === null) {
-                                vErrors = [err93];
-                            }
-                            else {
-                                vErrors.push(err93);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err94 = { instancePath: instancePath + "/reproducibility/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data25 };
-                        if (vErrors === null) {
-                            vErrors = [err94];
-                        }
-                        else {
-                            vErrors.push(err94);
-                        }
-                        errors++;
-                    }
-                }
-                if (data24.fail !== undefined) {
-                    let data26 = data24.fail;
-                    if ((typeof data26 == "number") && (isFinite(data26))) {
-                        if (data26 < 0 || isNaN(data26)) {
-                            const err95 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data26 };
-                            if (vErrors === null) {
-                                vErrors = [err95];
-                            }
-                            else {
-                                vErrors.push(err95);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err96 = { instancePath: instancePath + "/reproducibility/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data26 };
-                        if (vErrors === null) {
-                            vErrors = [err96];
-                        }
-                        else {
-                            vErrors.push(err96);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err97 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data24 };
-                if (vErrors === null) {
-                    vErrors = [err97];
-                }
-                else {
-                    vErrors.push(err97);
-                }
-                errors++;
-            }
-            var _valid8 = _errs111 === errors;
-            if (_valid8 && valid26) {
-                valid26 = false;
-                passing8 = [passing8, 1];
-            }
-            else {
-                if (_valid8) {
-                    valid26 = true;
-                    passing8 = 1;
-                }
-                const _errs118 = errors;
-                if ("off" !== data24) {
-                    const err98 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data24 };
-                    if (vErrors === null) {
-                        vErrors = [err98];
-                    }
-                    else {
-                        vErrors.push(err98);
-                    }
-                    errors++;
-                }
-                var _valid8 = _errs118 === errors;
-                if (_valid8 && valid26) {
-                    valid26 = false;
-                    passing8 = [passing8, 2];
-                }
-                else {
-                    if (_valid8) {
-                        valid26 = true;
-                        passing8 = 2;
-                    }
-                }
-            }
-            if (!valid26) {
-                const err99 = { instancePath: instancePath + "/reproducibility", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing8 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data24 };
-                if (vErrors === null) {
-                    vErrors = [err99];
-                }
-                else {
-                    vErrors.push(err99);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs108;
-                if (vErrors !== null) {
-                    if (_errs108) {
-                        vErrors.length = _errs108;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.complexity !== undefined) {
-            let data27 = data.complexity;
-            const _errs121 = errors;
-            let valid29 = false;
-            let passing9 = null;
-            const _errs122 = errors;
-            if ((typeof data27 == "number") && (isFinite(data27))) {
-                if (data27 < 0 || isNaN(data27)) {
-                    const err100 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data27 };
-                    if (vErrors === null) {
-                        vErrors = [err100];
-                    }
-                    else {
-                        vErrors.push(err100);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err101 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data27 };
-                if (vErrors === null) {
-                    vErrors = [err101];
-                }
-                else {
-                    vErrors.push(err101);
-                }
-                errors++;
-            }
-            var _valid9 = _errs122 === errors;
-            if (_valid9) {
-                valid29 = true;
-                passing9 = 0;
-            }
-            const _errs124 = errors;
-            if (data27 && typeof data27 == "object" && !Array.isArray(data27)) {
-                if (Object.keys(data27).length < 1) {
-                    const err102 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data27 };
-                    if (vErrors === null) {
-                        vErrors = [err102];
-                    }
-                    else {
-                        vErrors.push(err102);
-                    }
-                    errors++;
-                }
-                for (const key10 in data27) {
-                    if (!((key10 === "warn") || (key10 === "fail"))) {
-                        const err103 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key10 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data27 };
-                        if (vErrors === null) {
-                            vErrors = [err103];
-                        }
-                        else {
-                            vErrors.push(err103);
-                        }
-                        errors++;
-                    }
-                }
-                if (data27.warn !== undefined) {
-                    let data28 = data27.warn;
-                    if ((typeof data28 == "number") && (isFinite(data28))) {
-                        if (data28 < 0 || isNaN(data28)) {
-                            const err104 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data28 };
-                            if (vErrors === null) {
-                                vErrors = [err104];
-                            }
-                            else {
-                                vErrors.push(err104);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err105 = { instancePath: instancePath + "/complexity/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data28 };
-                        if (vErrors === null) {
-                            vErrors = [err105];
-                        }
-                        else {
-                            vErrors.push(err105);
-                        }
-                        errors++;
-                    }
-                }
-                if (data27.fail !== undefined) {
-                    let data29 = data27.fail;
-                    if ((typeof data29 == "number") && (isFinite(data29))) {
-                        if (data29 < 0 || isNaN(data29)) {
-                            const err106 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data29 };
-                            if (vErrors === null) {
-                                vErrors = [err106];
-                            }
-                            else {
-                                vErrors.push(err106);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err107 = { instancePath: instancePath + "/complexity/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data29 };
-                        if (vErrors === null) {
-                            vErrors = [err107];
-                        }
-                        else {
-                            vErrors.push(err107);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err108 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data27 };
-                if (vErrors === null) {
-                    vErrors = [err108];
-                }
-                else {
-                    vErrors.push(err108);
-                }
-                errors++;
-            }
-            var _valid9 = _errs124 === errors;
-            if (_valid9 && valid29) {
-                valid29 = false;
-                passing9 = [passing9, 1];
-            }
-            else {
-                if (_valid9) {
-                    valid29 = true;
-                    passing9 = 1;
-                }
-                const _errs131 = errors;
-                if ("off" !== data27) {
-                    const err109 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data27 };
-                    if (vErrors === null) {
-                        vErrors = [err109];
-                    }
-                    else {
-                        vErrors.push(err109);
-                    }
-                    errors++;
-                }
-                var _valid9 = _errs131 === errors;
-                if (_valid9 && valid29) {
-                    valid29 = false;
-                    passing9 = [passing9, 2];
-                }
-                else {
-                    if (_valid9) {
-                        valid29 = true;
-                        passing9 = 2;
-                    }
-                }
-            }
-            if (!valid29) {
-                const err110 = { instancePath: instancePath + "/complexity", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing9 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data27 };
-                if (vErrors === null) {
-                    vErrors = [err110];
-                }
-                else {
-                    vErrors.push(err110);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs121;
-                if (vErrors !== null) {
-                    if (_errs121) {
-                        vErrors.length = _errs121;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
         if (data.base_change !== undefined) {
-            let data30 = data.base_change;
-            const _errs134 = errors;
-            let valid32 = false;
-            let passing10 = null;
-            const _errs135 = errors;
-            if ((typeof data30 == "number") && (isFinite(data30))) {
-                if (data30 < 0 || isNaN(data30)) {
-                    const err111 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[0], data: data30 };
-                    if (vErrors === null) {
-                        vErrors = [err111];
-                    }
-                    else {
-                        vErrors.push(err111);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err112 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[0].type, parentSchema: schema48.oneOf[0], data: data30 };
-                if (vErrors === null) {
-                    vErrors = [err112];
-                }
-                else {
-                    vErrors.push(err112);
-                }
-                errors++;
-            }
-            var _valid10 = _errs135 === errors;
-            if (_valid10) {
-                valid32 = true;
-                passing10 = 0;
-            }
-            const _errs137 = errors;
-            if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
-                if (Object.keys(data30).length < 1) {
-                    const err113 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema48.oneOf[1], data: data30 };
-                    if (vErrors === null) {
-                        vErrors = [err113];
-                    }
-                    else {
-                        vErrors.push(err113);
-                    }
-                    errors++;
-                }
-                for (const key11 in data30) {
-                    if (!((key11 === "warn") || (key11 === "fail"))) {
-                        const err114 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key11 }, message: "must NOT have additional properties", schema: false, parentSchema: schema48.oneOf[1], data: data30 };
-                        if (vErrors === null) {
-                            vErrors = [err114];
-                        }
-                        else {
-                            vErrors.push(err114);
-                        }
-                        errors++;
-                    }
-                }
-                if (data30.warn !== undefined) {
-                    let data31 = data30.warn;
-                    if ((typeof data31 == "number") && (isFinite(data31))) {
-                        if (data31 < 0 || isNaN(data31)) {
-                            const err115 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.warn, data: data31 };
-                            if (vErrors === null) {
-                                vErrors = [err115];
-                            }
-                            else {
-                                vErrors.push(err115);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err116 = { instancePath: instancePath + "/base_change/warn", schemaPath: "#/$defs/limit/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.warn.type, parentSchema: schema48.oneOf[1].properties.warn, data: data31 };
-                        if (vErrors === null) {
-                            vErrors = [err116];
-                        }
-                        else {
-                            vErrors.push(err116);
-                        }
-                        errors++;
-                    }
-                }
-                if (data30.fail !== undefined) {
-                    let data32 = data30.fail;
-                    if ((typeof data32 == "number") && (isFinite(data32))) {
-                        if (data32 < 0 || isNaN(data32)) {
-                            const err117 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema48.oneOf[1].properties.fail, data: data32 };
-                            if (vErrors === null) {
-                                vErrors = [err117];
-                            }
-                            else {
-                                vErrors.push(err117);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err118 = { instancePath: instancePath + "/base_change/fail", schemaPath: "#/$defs/limit/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema48.oneOf[1].properties.fail.type, parentSchema: schema48.oneOf[1].properties.fail, data: data32 };
-                        if (vErrors === null) {
-                            vErrors = [err118];
-                        }
-                        else {
-                            vErrors.push(err118);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err119 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema48.oneOf[1].type, parentSchema: schema48.oneOf[1], data: data30 };
-                if (vErrors === null) {
-                    vErrors = [err119];
-                }
-                else {
-                    vErrors.push(err119);
-                }
-                errors++;
-            }
-            var _valid10 = _errs137 === errors;
-            if (_valid10 && valid32) {
-                valid32 = false;
-                passing10 = [passing10, 1];
-            }
-            else {
-                if (_valid10) {
-                    valid32 = true;
-                    passing10 = 1;
-                }
-                const _errs144 = errors;
-                if ("off" !== data30) {
-                    const err120 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema48.oneOf[2], data: data30 };
-                    if (vErrors === null) {
-                        vErrors = [err120];
-                    }
-                    else {
-                        vErrors.push(err120);
-                    }
-                    errors++;
-                }
-                var _valid10 = _errs144 === errors;
-                if (_valid10 && valid32) {
-                    valid32 = false;
-                    passing10 = [passing10, 2];
-                }
-                else {
-                    if (_valid10) {
-                        valid32 = true;
-                        passing10 = 2;
-                    }
-                }
-            }
-            if (!valid32) {
-                const err121 = { instancePath: instancePath + "/base_change", schemaPath: "#/$defs/limit/oneOf", keyword: "oneOf", params: { passingSchemas: passing10 }, message: "must match exactly one schema in oneOf", schema: schema48.oneOf, parentSchema: schema48, data: data30 };
-                if (vErrors === null) {
-                    vErrors = [err121];
-                }
-                else {
-                    vErrors.push(err121);
-                }
-                errors++;
-            }
-            else {
-                errors = _errs134;
-                if (vErrors !== null) {
-                    if (_errs134) {
-                        vErrors.length = _errs134;
-                    }
-                    else {
-                        vErrors = null;
-                    }
-                }
+            if (!(validate73(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+                errors = vErrors.length;
             }
         }
     }
     else {
-        const err122 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema47.type, parentSchema: schema47, data };
+        const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema25.type, parentSchema: schema25, data };
         if (vErrors === null) {
-            vErrors = [err122];
+            vErrors = [err1];
         }
         else {
-            vErrors.push(err122);
+            vErrors.push(err1);
         }
         errors++;
     }
-    validate26.errors = vErrors;
+    validate72.errors = vErrors;
     return errors === 0;
 }
-validate26.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-function validate23(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate72.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate67(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     /*# sourceURL="urn:fitgate:schema:descriptor:1" */ ;
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate23.evaluated;
+    const evaluated0 = validate67.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -46965,7 +41416,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
     }
     if (data && typeof data == "object" && !Array.isArray(data)) {
         if (data.version === undefined) {
-            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema44.required, parentSchema: schema44, data };
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema22.required, parentSchema: schema22, data };
             if (vErrors === null) {
                 vErrors = [err0];
             }
@@ -46975,7 +41426,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             errors++;
         }
         if (data.name === undefined) {
-            const err1 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "name" }, message: "must have required property '" + "name" + "'", schema: schema44.required, parentSchema: schema44, data };
+            const err1 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "name" }, message: "must have required property '" + "name" + "'", schema: schema22.required, parentSchema: schema22, data };
             if (vErrors === null) {
                 vErrors = [err1];
             }
@@ -46985,7 +41436,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             errors++;
         }
         if (data.data === undefined) {
-            const err2 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "data" }, message: "must have required property '" + "data" + "'", schema: schema44.required, parentSchema: schema44, data };
+            const err2 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "data" }, message: "must have required property '" + "data" + "'", schema: schema22.required, parentSchema: schema22, data };
             if (vErrors === null) {
                 vErrors = [err2];
             }
@@ -46995,7 +41446,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             errors++;
         }
         if (data.terms === undefined) {
-            const err3 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "terms" }, message: "must have required property '" + "terms" + "'", schema: schema44.required, parentSchema: schema44, data };
+            const err3 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "terms" }, message: "must have required property '" + "terms" + "'", schema: schema22.required, parentSchema: schema22, data };
             if (vErrors === null) {
                 vErrors = [err3];
             }
@@ -47006,7 +41457,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
         }
         for (const key0 in data) {
             if (!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))) {
-                const err4 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema44, data };
+                const err4 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22, data };
                 if (vErrors === null) {
                     vErrors = [err4];
                 }
@@ -47019,7 +41470,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
         if (data.version !== undefined) {
             let data0 = data.version;
             if (1 !== data0) {
-                const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema44.properties.version, data: data0 };
+                const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema22.properties.version, data: data0 };
                 if (vErrors === null) {
                     vErrors = [err5];
                 }
@@ -47033,7 +41484,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             let data1 = data.name;
             if (typeof data1 === "string") {
                 if (func1(data1) > 100) {
-                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema44.properties.name, data: data1 };
+                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema22.properties.name, data: data1 };
                     if (vErrors === null) {
                         vErrors = [err6];
                     }
@@ -47043,7 +41494,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 if (func1(data1) < 1) {
-                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.name, data: data1 };
+                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.name, data: data1 };
                     if (vErrors === null) {
                         vErrors = [err7];
                     }
@@ -47052,8 +41503,8 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     errors++;
                 }
-                if (!pattern4.test(data1)) {
-                    const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema44.properties.name, data: data1 };
+                if (!pattern3.test(data1)) {
+                    const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema22.properties.name, data: data1 };
                     if (vErrors === null) {
                         vErrors = [err8];
                     }
@@ -47064,7 +41515,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err9 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.name.type, parentSchema: schema44.properties.name, data: data1 };
+                const err9 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.name.type, parentSchema: schema22.properties.name, data: data1 };
                 if (vErrors === null) {
                     vErrors = [err9];
                 }
@@ -47077,7 +41528,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
         if (data.task !== undefined) {
             let data2 = data.task;
             if (!(data2 === "regression")) {
-                const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema44.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema44.properties.task.enum, parentSchema: schema44.properties.task, data: data2 };
+                const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema22.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.task.enum, parentSchema: schema22.properties.task, data: data2 };
                 if (vErrors === null) {
                     vErrors = [err10];
                 }
@@ -47091,7 +41542,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             let data3 = data.data;
             if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
                 if (data3.train === undefined) {
-                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema44.properties.data.required, parentSchema: schema44.properties.data, data: data3 };
+                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
                     if (vErrors === null) {
                         vErrors = [err11];
                     }
@@ -47101,7 +41552,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 if (data3.holdout === undefined) {
-                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema44.properties.data.required, parentSchema: schema44.properties.data, data: data3 };
+                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
                     if (vErrors === null) {
                         vErrors = [err12];
                     }
@@ -47111,7 +41562,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 if (data3.target === undefined) {
-                    const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema44.properties.data.required, parentSchema: schema44.properties.data, data: data3 };
+                    const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
                     if (vErrors === null) {
                         vErrors = [err13];
                     }
@@ -47122,7 +41573,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 }
                 for (const key1 in data3) {
                     if (!(((key1 === "train") || (key1 === "holdout")) || (key1 === "target"))) {
-                        const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema44.properties.data, data: data3 };
+                        const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
                         if (vErrors === null) {
                             vErrors = [err14];
                         }
@@ -47136,7 +41587,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     let data4 = data3.train;
                     if (typeof data4 === "string") {
                         if (func1(data4) < 1) {
-                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.data.properties.train, data: data4 };
+                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train, data: data4 };
                             if (vErrors === null) {
                                 vErrors = [err15];
                             }
@@ -47147,7 +41598,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.data.properties.train.type, parentSchema: schema44.properties.data.properties.train, data: data4 };
+                        const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.type, parentSchema: schema22.properties.data.properties.train, data: data4 };
                         if (vErrors === null) {
                             vErrors = [err16];
                         }
@@ -47161,7 +41612,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     let data5 = data3.holdout;
                     if (typeof data5 === "string") {
                         if (func1(data5) < 1) {
-                            const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.data.properties.holdout, data: data5 };
+                            const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
                             if (vErrors === null) {
                                 vErrors = [err17];
                             }
@@ -47172,7 +41623,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err18 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.data.properties.holdout.type, parentSchema: schema44.properties.data.properties.holdout, data: data5 };
+                        const err18 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.type, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
                         if (vErrors === null) {
                             vErrors = [err18];
                         }
@@ -47186,7 +41637,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     let data6 = data3.target;
                     if (typeof data6 === "string") {
                         if (func1(data6) < 1) {
-                            const err19 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema44.properties.data.properties.target, data: data6 };
+                            const err19 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data6 };
                             if (vErrors === null) {
                                 vErrors = [err19];
                             }
@@ -47197,7 +41648,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err20 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema44.properties.data.properties.target.type, parentSchema: schema44.properties.data.properties.target, data: data6 };
+                        const err20 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data6 };
                         if (vErrors === null) {
                             vErrors = [err20];
                         }
@@ -47209,7 +41660,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err21 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema44.properties.data.type, parentSchema: schema44.properties.data, data: data3 };
+                const err21 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
                 if (vErrors === null) {
                     vErrors = [err21];
                 }
@@ -47223,7 +41674,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             let data7 = data.terms;
             if (Array.isArray(data7)) {
                 if (data7.length < 1) {
-                    const err22 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema44.properties.terms, data: data7 };
+                    const err22 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data7 };
                     if (vErrors === null) {
                         vErrors = [err22];
                     }
@@ -47234,14 +41685,14 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 }
                 const len0 = data7.length;
                 for (let i0 = 0; i0 < len0; i0++) {
-                    if (!(validate24(data7[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data7, parentDataProperty: i0, rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
+                    if (!(validate68(data7[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data7, parentDataProperty: i0, rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
                         errors = vErrors.length;
                     }
                 }
             }
             else {
-                const err23 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema44.properties.terms.type, parentSchema: schema44.properties.terms, data: data7 };
+                const err23 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data7 };
                 if (vErrors === null) {
                     vErrors = [err23];
                 }
@@ -47256,7 +41707,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
                 for (const key2 in data9) {
                     if (!((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count"))) {
-                        const err24 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema44.properties.fit, data: data9 };
+                        const err24 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data9 };
                         if (vErrors === null) {
                             vErrors = [err24];
                         }
@@ -47269,7 +41720,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data9.intercept !== undefined) {
                     let data10 = data9.intercept;
                     if (typeof data10 !== "boolean") {
-                        const err25 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema44.properties.fit.properties.intercept.type, parentSchema: schema44.properties.fit.properties.intercept, data: data10 };
+                        const err25 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data10 };
                         if (vErrors === null) {
                             vErrors = [err25];
                         }
@@ -47283,7 +41734,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     let data11 = data9.ridge;
                     if ((typeof data11 == "number") && (isFinite(data11))) {
                         if (data11 < 0 || isNaN(data11)) {
-                            const err26 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema44.properties.fit.properties.ridge, data: data11 };
+                            const err26 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data11 };
                             if (vErrors === null) {
                                 vErrors = [err26];
                             }
@@ -47294,7 +41745,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                     }
                     else {
-                        const err27 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema44.properties.fit.properties.ridge.type, parentSchema: schema44.properties.fit.properties.ridge, data: data11 };
+                        const err27 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data11 };
                         if (vErrors === null) {
                             vErrors = [err27];
                         }
@@ -47307,7 +41758,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data9.folds !== undefined) {
                     let data12 = data9.folds;
                     if (!(((typeof data12 == "number") && (!(data12 % 1) && !isNaN(data12))) && (isFinite(data12)))) {
-                        const err28 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema44.properties.fit.properties.folds.type, parentSchema: schema44.properties.fit.properties.folds, data: data12 };
+                        const err28 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data12 };
                         if (vErrors === null) {
                             vErrors = [err28];
                         }
@@ -47318,7 +41769,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     if ((typeof data12 == "number") && (isFinite(data12))) {
                         if (data12 < 2 || isNaN(data12)) {
-                            const err29 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema44.properties.fit.properties.folds, data: data12 };
+                            const err29 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data12 };
                             if (vErrors === null) {
                                 vErrors = [err29];
                             }
@@ -47332,7 +41783,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data9.fold_order !== undefined) {
                     let data13 = data9.fold_order;
                     if (!((data13 === "shuffled") || (data13 === "blocks"))) {
-                        const err30 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema44.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema44.properties.fit.properties.fold_order.enum, parentSchema: schema44.properties.fit.properties.fold_order, data: data13 };
+                        const err30 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data13 };
                         if (vErrors === null) {
                             vErrors = [err30];
                         }
@@ -47345,7 +41796,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data9.seed !== undefined) {
                     let data14 = data9.seed;
                     if (!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))) {
-                        const err31 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema44.properties.fit.properties.seed.type, parentSchema: schema44.properties.fit.properties.seed, data: data14 };
+                        const err31 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data14 };
                         if (vErrors === null) {
                             vErrors = [err31];
                         }
@@ -47356,7 +41807,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     if ((typeof data14 == "number") && (isFinite(data14))) {
                         if (data14 > 4294967295 || isNaN(data14)) {
-                            const err32 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema44.properties.fit.properties.seed, data: data14 };
+                            const err32 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data14 };
                             if (vErrors === null) {
                                 vErrors = [err32];
                             }
@@ -47366,7 +41817,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                             errors++;
                         }
                         if (data14 < 0 || isNaN(data14)) {
-                            const err33 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema44.properties.fit.properties.seed, data: data14 };
+                            const err33 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data14 };
                             if (vErrors === null) {
                                 vErrors = [err33];
                             }
@@ -47380,7 +41831,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 if (data9.parameter_count !== undefined) {
                     let data15 = data9.parameter_count;
                     if (!((data15 === "columns") || (data15 === "effective"))) {
-                        const err34 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema44.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema44.properties.fit.properties.parameter_count.enum, parentSchema: schema44.properties.fit.properties.parameter_count, data: data15 };
+                        const err34 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data15 };
                         if (vErrors === null) {
                             vErrors = [err34];
                         }
@@ -47392,7 +41843,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err35 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema44.properties.fit.type, parentSchema: schema44.properties.fit, data: data9 };
+                const err35 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data9 };
                 if (vErrors === null) {
                     vErrors = [err35];
                 }
@@ -47406,7 +41857,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             let data16 = data.coefficients;
             if (Array.isArray(data16)) {
                 if (data16.length < 1) {
-                    const err36 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema44.properties.coefficients, data: data16 };
+                    const err36 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data16 };
                     if (vErrors === null) {
                         vErrors = [err36];
                     }
@@ -47419,7 +41870,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 for (let i1 = 0; i1 < len1; i1++) {
                     let data17 = data16[i1];
                     if (!((typeof data17 == "number") && (isFinite(data17)))) {
-                        const err37 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema44.properties.coefficients.items.type, parentSchema: schema44.properties.coefficients.items, data: data17 };
+                        const err37 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data17 };
                         if (vErrors === null) {
                             vErrors = [err37];
                         }
@@ -47431,7 +41882,7 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
                 }
             }
             else {
-                const err38 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema44.properties.coefficients.type, parentSchema: schema44.properties.coefficients, data: data16 };
+                const err38 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data16 };
                 if (vErrors === null) {
                     vErrors = [err38];
                 }
@@ -47442,14 +41893,14 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
         if (data.limits !== undefined) {
-            if (!(validate26(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate26.errors : vErrors.concat(validate26.errors);
+            if (!(validate72(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
                 errors = vErrors.length;
             }
         }
     }
     else {
-        const err39 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema44.type, parentSchema: schema44, data };
+        const err39 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
         if (vErrors === null) {
             vErrors = [err39];
         }
@@ -47458,10 +41909,10 @@ function validate23(data, { instancePath = "", parentData, parentDataProperty, r
         }
         errors++;
     }
-    validate23.errors = vErrors;
+    validate67.errors = vErrors;
     return errors === 0;
 }
-validate23.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+validate67.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 
 ;// CONCATENATED MODULE: ./src/config/schemas.ts
 /**
@@ -48126,8 +42577,8 @@ function readCenters(doc, file, centers, at) {
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
 
-// EXTERNAL MODULE: ./src/model/evaluate.ts + 19 modules
-var evaluate = __nccwpck_require__(80);
+// EXTERNAL MODULE: ./src/model/evaluate.ts + 5 modules
+var evaluate = __nccwpck_require__(4216);
 // EXTERNAL MODULE: ./src/parallel/model-worker.ts
 var model_worker = __nccwpck_require__(8085);
 // EXTERNAL MODULE: ./src/result.ts
@@ -50329,6 +44780,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("path");
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("process");
+
+/***/ }),
+
+/***/ 2203:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("stream");
 
 /***/ }),
 
@@ -66933,6 +61391,9 @@ function getOctokit(token, options, ...additionalPlugins) {
 /******/ 	return module.exports;
 /******/ }
 /******/ 
+/******/ // expose the modules object (__webpack_modules__)
+/******/ __nccwpck_require__.m = __webpack_modules__;
+/******/ 
 /************************************************************************/
 /******/ /* webpack/runtime/asset-relocator-loader */
 /******/ if (typeof __nccwpck_require__ !== 'undefined') __nccwpck_require__.ab = decodeURIComponent(new URL('.', import.meta.url).pathname).slice(import.meta.url.match(/^file:\/\/\/\w:/) ? 1 : 0, -1) + "/";
@@ -67060,6 +61521,28 @@ function getOctokit(token, options, ...additionalPlugins) {
 /******/ 	};
 /******/ })();
 /******/ 
+/******/ /* webpack/runtime/ensure chunk */
+/******/ (() => {
+/******/ 	__nccwpck_require__.f = {};
+/******/ 	// This file contains only the entry chunk.
+/******/ 	// The chunk loading function for additional chunks
+/******/ 	__nccwpck_require__.e = (chunkId) => {
+/******/ 		return Promise.all(Object.keys(__nccwpck_require__.f).reduce((promises, key) => {
+/******/ 			__nccwpck_require__.f[key](chunkId, promises);
+/******/ 			return promises;
+/******/ 		}, []));
+/******/ 	};
+/******/ })();
+/******/ 
+/******/ /* webpack/runtime/get javascript chunk filename */
+/******/ (() => {
+/******/ 	// This function allow to reference async chunks
+/******/ 	__nccwpck_require__.u = (chunkId) => {
+/******/ 		// return url for filenames based on template
+/******/ 		return "" + chunkId + ".index.js";
+/******/ 	};
+/******/ })();
+/******/ 
 /******/ /* webpack/runtime/hasOwnProperty shorthand */
 /******/ (() => {
 /******/ 	__nccwpck_require__.o = (obj, prop) => (Object.prototype.hasOwnProperty.call(obj, prop))
@@ -67074,6 +61557,69 @@ function getOctokit(token, options, ...additionalPlugins) {
 /******/ 		}
 /******/ 		Object.defineProperty(exports, '__esModule', { value: true });
 /******/ 	};
+/******/ })();
+/******/ 
+/******/ /* webpack/runtime/import chunk loading */
+/******/ (() => {
+/******/ 	// no baseURI
+/******/ 	
+/******/ 	// object to store loaded and loading chunks
+/******/ 	// undefined = chunk not loaded, null = chunk preloaded/prefetched
+/******/ 	// [resolve, Promise] = chunk loading, 0 = chunk loaded
+/******/ 	var installedChunks = {
+/******/ 		792: 0
+/******/ 	};
+/******/ 	
+/******/ 	var installChunk = (data) => {
+/******/ 		var {ids, modules, runtime} = data;
+/******/ 		// add "modules" to the modules object,
+/******/ 		// then flag all "ids" as loaded and fire callback
+/******/ 		var moduleId, chunkId, i = 0;
+/******/ 		for(moduleId in modules) {
+/******/ 			if(__nccwpck_require__.o(modules, moduleId)) {
+/******/ 				__nccwpck_require__.m[moduleId] = modules[moduleId];
+/******/ 			}
+/******/ 		}
+/******/ 		if(runtime) runtime(__nccwpck_require__);
+/******/ 		for(;i < ids.length; i++) {
+/******/ 			chunkId = ids[i];
+/******/ 			if(__nccwpck_require__.o(installedChunks, chunkId) && installedChunks[chunkId]) {
+/******/ 				installedChunks[chunkId][0]();
+/******/ 			}
+/******/ 			installedChunks[ids[i]] = 0;
+/******/ 		}
+/******/ 	
+/******/ 	}
+/******/ 	
+/******/ 	__nccwpck_require__.f.j = (chunkId, promises) => {
+/******/ 			// import() chunk loading for javascript
+/******/ 			var installedChunkData = __nccwpck_require__.o(installedChunks, chunkId) ? installedChunks[chunkId] : undefined;
+/******/ 			if(installedChunkData !== 0) { // 0 means "already installed".
+/******/ 	
+/******/ 				// a Promise means "currently loading".
+/******/ 				if(installedChunkData) {
+/******/ 					promises.push(installedChunkData[1]);
+/******/ 				} else {
+/******/ 					if(true) { // all chunks have JS
+/******/ 						// setup Promise in chunk cache
+/******/ 						var promise = import("./" + __nccwpck_require__.u(chunkId)).then(installChunk, (e) => {
+/******/ 							if(installedChunks[chunkId] !== 0) installedChunks[chunkId] = undefined;
+/******/ 							throw e;
+/******/ 						});
+/******/ 						var promise = Promise.race([promise, new Promise((resolve) => (installedChunkData = installedChunks[chunkId] = [resolve]))])
+/******/ 						promises.push(installedChunkData[1] = promise);
+/******/ 					}
+/******/ 				}
+/******/ 			}
+/******/ 	};
+/******/ 	
+/******/ 	// no prefetching
+/******/ 	
+/******/ 	// no preloaded
+/******/ 	
+/******/ 	// no external install chunk
+/******/ 	
+/******/ 	// no on chunks loaded
 /******/ })();
 /******/ 
 /************************************************************************/

@@ -5,17 +5,14 @@
  */
 import { readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { CLI_FETCH_HINT, evaluateBase } from './action/base-commit.js';
 import { parseArgs } from './args.js';
 import { errorMessage, InputError } from './errors.js';
-import { mergeReports, type ReportInput } from './merge.js';
-import { writeFileReports } from './output-files.js';
+import type { ReportInput } from './merge.js';
 import { defaultJobs } from './parallel/pool.js';
 import { isModelWorker } from './parallel/model-worker.js';
 import { runPipeline } from './pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
 import { formatJson } from './report/json.js';
-import { formatMarkdown } from './report/markdown.js';
 import { escapeTerminal } from './report/escape.js';
 import { formatText } from './report/text.js';
 import { exitStatus, type Result } from './result.js';
@@ -46,11 +43,17 @@ async function main(argv: string[]): Promise<number> {
     debug = parsed.debug;
     let result: Result;
     let failOn: 'fail' | 'warn';
+    // Modules only some runs need are loaded when asked for, so that a plain check starts fast.
     if (parsed.kind === 'merge') {
+      const { mergeReports } = await import('./merge.js');
       result = mergeReports(await readReports(parsed.reports), VERSION);
       failOn = parsed.failOn;
     } else {
-      const baseOptions = parsed.base !== null ? await evaluateBase(parsed.settings, parsed.base, { fetchHint: CLI_FETCH_HINT }) : {};
+      let baseOptions = {};
+      if (parsed.base !== null) {
+        const { CLI_FETCH_HINT, evaluateBase } = await import('./action/base-commit.js');
+        baseOptions = await evaluateBase(parsed.settings, parsed.base, { fetchHint: CLI_FETCH_HINT });
+      }
       const scale = { shard: parsed.shard, jobs: parsed.jobs ?? defaultJobs(), root: parsed.settings.root };
       result = await runPipeline(parsed.settings, createFsRepository(parsed.settings.root), { ...baseOptions, ...scale });
       failOn = parsed.settings.failOn;
@@ -61,13 +64,15 @@ async function main(argv: string[]): Promise<number> {
       parsed.format === 'json'
         ? formatJson(result)
         : parsed.format === 'markdown'
-          ? formatMarkdown(result)
+          ? (await import('./report/markdown.js')).formatMarkdown(result)
           : formatText(result, { color });
     if (parsed.out !== null) await writeFile(parsed.out, text);
     else process.stdout.write(text);
     // SARIF paths are relative to the working directory when the root lies inside it (code
     // scanning reads them from the checkout); merged shard reports run from the root.
     const prefix = parsed.kind === 'check' ? path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/') : '';
+    if (parsed.html === null && parsed.sarif === null && parsed.junit === null) return exitStatus(result, failOn);
+    const { writeFileReports } = await import('./output-files.js');
     await writeFileReports(result, {
       html: parsed.html,
       sarif: parsed.sarif,

@@ -6,6 +6,7 @@ import type { Check, Measurement } from './types.js';
 import { formatNumber } from '../format.js';
 import { sweepComplexity } from '../diagnostics/complexity.js';
 import { jsonRecord } from '../diagnostics/json.js';
+import { sharedFoldFactors } from '../diagnostics/shared.js';
 import { jsonNumber } from '../result.js';
 
 const check: Check = {
@@ -13,11 +14,12 @@ const check: Check = {
   title: 'Simpler setting',
   limitKey: 'complexity',
   description:
-    "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. Above 50,000 training rows the sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
+    "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. A ridge sweep uses every training row; above 50,000 training rows a degree or width sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
   advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
   line: (d) => d.fit.line,
-  measure({ descriptor, design, train, fit }): Measurement {
-    const sweep = sweepComplexity(descriptor, design, train, fit);
+  measure(context): Measurement {
+    const { descriptor, design, train, fit } = context;
+    const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => sharedFoldFactors(context) });
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
       return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
     }

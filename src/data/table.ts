@@ -27,7 +27,7 @@ import type { RepoReader } from '../repo/types.js';
 import { InputError } from '../errors.js';
 import { DEFAULT_CHUNK_ROWS, DEFAULT_MAX_BYTES, planRequest, type ColumnPlan } from './csv-rules.js';
 import { FastPathDeclined, fastChunks } from './fast-path.js';
-import { generalChunks, type ScanTarget } from './general-path.js';
+import type { ScanTarget } from './general-path.js';
 
 /** A run of consecutive data rows, column-major. */
 export interface TableChunk {
@@ -240,5 +240,7 @@ async function* scan(
       if (!(error instanceof FastPathDeclined)) throw error;
     }
   }
+  // csv-parse is loaded only when a file needs it (most data files take the fast path).
+  const { generalChunks } = await import('./general-path.js');
   yield* generalChunks(open(), target, handedOut);
 }

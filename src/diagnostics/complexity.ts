@@ -8,7 +8,7 @@ import { createTerm, type Term } from '../basis/index.js';
 import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import type { FitResult } from '../fit/index.js';
-import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, summariseFolds, type Rows } from './cross-validation.js';
+import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds, type FoldFactors, type Rows } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 
 /** A point of a cross-validation curve, in order of increasing complexity. */
@@ -72,7 +72,7 @@ export interface Sweep {
   best: number;
   chosen: number;
   current: number;
-  /** Rows used (a deterministic even-stride subsample when the training data are larger than `maxRows`). */
+  /** Rows used (degree and width sweeps: a deterministic even-stride subsample when the training data are larger than `maxRows`). */
   rows: number;
   subsampled: boolean;
   folds: number;
@@ -80,10 +80,16 @@ export interface Sweep {
 
 /** Options of {@link sweepComplexity}. */
 export interface SweepOptions {
-  /** Subsample rows above this count (even stride through the file). Default {@link SWEEP_MAX_ROWS}. */
+  /** Degree and width sweeps: subsample rows above this count (even stride through the file). Default {@link SWEEP_MAX_ROWS}. */
   maxRows?: number;
   /** Highest polynomial degree tried. Default 15. */
   maxDegree?: number;
+  /**
+   * The fold factors of `train` under the model's own folds (`fit.folds`, `fit.fold_order`,
+   * `fit.seed`), when the caller has them; a ridge sweep then makes no pass over the rows.
+   * Default: a ridge sweep builds them in one pass.
+   */
+  factors?: () => FoldFactors;
 }
 
 /** Formats a setting for people (up to 3 significant digits). */
@@ -135,11 +141,14 @@ function subsample(data: Rows, m: number): Rows {
  *
  * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
  *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
- *   current lambda; simplest = largest. The designs do not change, so the per-fold factors are
- *   built once and each lambda costs k small solves; one scoring pass serves every lambda.
+ *   current lambda; simplest = largest. The design does not change, so the model's per-fold
+ *   factors serve every lambda: k small solves per lambda, and each fold's squared errors come
+ *   from its own factor ({@link outOfFoldErrorsFromFactors}), with no pass over the rows. Every
+ *   row is used (no subsample).
  * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
  * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
- *   Degree and width settings each build their own design: two passes over the rows each.
+ *   Degree and width settings each build their own design: two passes over the rows each, on
+ *   an even-stride subsample above `maxRows` rows.
  *
  * @param descriptor the model (fit options, term lines)
  * @param design the fitted design
@@ -152,7 +161,8 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
   const target = sweepTarget(descriptor, design);
   if (target === null || train.rows < 2) return null;
   const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
-  const subsampled = train.rows > maxRows;
+  // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
+  const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
   const rows = subsampled ? subsample(train, maxRows) : train;
   const folds: Folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
   if (folds.k < 2) return null;
@@ -175,9 +185,15 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
     const grid: number[] = [];
     for (let t = 3; t >= -6; t -= 0.5) grid.push(scale * 10 ** t);
     const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
-    const factors = complementFactors(foldFactors(design, rows, folds));
-    const coefficients = complementCoefficients(factors, lambdas, design.penalised);
-    const { sse } = outOfFoldErrors(design, rows, folds, coefficients);
+    let factors: FoldFactors;
+    if (options.factors) {
+      factors = options.factors();
+    } else {
+      const perFold = foldFactors(design, rows, folds);
+      factors = { perFold, complements: complementFactors(perFold) };
+    }
+    const coefficients = complementCoefficients(factors.complements, lambdas, design.penalised);
+    const { sse } = outOfFoldErrorsFromFactors(factors.perFold, coefficients);
     lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
   } else {
     const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));

@@ -150,6 +150,49 @@ export function complementFactors(factors: readonly QrAccumulator[]): QrAccumula
   return out;
 }
 
+/** Per-fold QR factors of the training rows and, for each fold, the factor of every other fold. */
+export interface FoldFactors {
+  /** perFold[f]: the rows of fold f (data rows only, no penalty). */
+  perFold: readonly QrAccumulator[];
+  /** complements[f]: every row not in fold f (see {@link complementFactors}). */
+  complements: readonly QrAccumulator[];
+}
+
+/**
+ * Squared out-of-fold errors from the fold factors alone, without a pass over the rows: with fold
+ * f's rows X_f = Q_f [R_f; 0] and Q_f^T y_f = [qty_f; r_f],
+ *
+ *     ||y_f - X_f w||^2 = ||qty_f - R_f w||^2 + ||r_f||^2
+ *
+ * for any w, because Q_f is orthogonal (Golub & Van Loan, Matrix Computations, 4th ed., sec.
+ * 5.3.3, the least-squares residual from a QR factorisation). Both terms are sums of squares, so
+ * nothing cancels; it holds whatever the fold's rank. Costs p^2 per fold and coefficient set.
+ *
+ * @param perFold per-fold factors (fold f's rows only)
+ * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
+ * @returns sse[s][f], as {@link outOfFoldErrors} gives them from a pass over the rows
+ */
+export function outOfFoldErrorsFromFactors(perFold: readonly QrAccumulator[], coefficients: readonly (readonly Float64Array[])[]): OutOfFoldErrors {
+  const sse = coefficients.map((bySet) =>
+    perFold.map((acc, f) => {
+      const p = acc.p;
+      const R = acc.R;
+      const qty = acc.qty;
+      const w = bySet[f];
+      let sum = acc.rss;
+      for (let i = 0; i < p; i++) {
+        // (R w)_i: R is upper triangular, column-major.
+        let t = 0;
+        for (let j = i; j < p; j++) t += R[j * p + i] * w[j];
+        const d = qty[i] - t;
+        sum += d * d;
+      }
+      return sum;
+    }),
+  );
+  return { sse };
+}
+
 /** Sum of squared out-of-fold errors per fold, for several coefficient sets at once. */
 export interface OutOfFoldErrors {
   /** sse[s][f]: squared errors of fold f's rows under coefficient set s (fitted without fold f). */
@@ -296,6 +339,8 @@ export interface CrossValidation {
 export interface CrossValidateOptions {
   /** Per-fold factors of the same rows and folds (from {@link FoldFactorBuilder}); default: built in a first pass. */
   factors?: readonly QrAccumulator[];
+  /** Their complements ({@link complementFactors} of `factors`); default: merged here. */
+  complements?: readonly QrAccumulator[];
   /** When given (length >= n), receives the full fit's training predictions from the scoring pass. */
   predictions?: Float64Array;
 }
@@ -333,7 +378,7 @@ export function crossValidate(design: Design, data: Rows, fit: FitResult, folds:
   const kfold = k >= 2;
   let coefficients: Float64Array[][] = [];
   if (kfold) {
-    const complements = complementFactors(options.factors ?? foldFactors(design, data, folds));
+    const complements = options.complements ?? complementFactors(options.factors ?? foldFactors(design, data, folds));
     coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
   }
   const w = fit.coefficients;

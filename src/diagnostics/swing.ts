@@ -204,6 +204,56 @@ function thinIndices(length: number, count: number, keep: readonly number[]): nu
 }
 
 /**
+ * Pairs (row, neighbour) of each sampled row and its `kk` nearest other sampled rows by squared
+ * Euclidean distance (exact duplicates skipped), by brute force over the s x s pairs.
+ *
+ * @param flat scaled inputs of the sampled rows, row-major: flat[a * d + c]
+ * @param s sampled rows
+ * @param d inputs
+ * @param kk neighbours per row (at most s - 1)
+ * @param rows training row index of each sampled row
+ * @returns flat pairs [row, neighbour, row, neighbour, ...] of training row indices
+ */
+function nearestPairs(flat: Float64Array, s: number, d: number, kk: number, rows: Int32Array): Int32Array {
+  const pairs = new Int32Array(2 * s * kk);
+  let count = 0;
+  const best = new Float64Array(kk);
+  const bestIdx = new Int32Array(kk);
+  for (let a = 0; a < s; a++) {
+    best.fill(Infinity);
+    bestIdx.fill(-1);
+    const ra = a * d;
+    for (let b = 0; b < s; b++) {
+      if (b === a) continue;
+      const rb = b * d;
+      // Partial sums only grow, so stopping once one reaches the k-th best distance skips
+      // exactly the rows the full sum would skip.
+      const limit = best[kk - 1];
+      let dist = 0;
+      for (let c = 0; c < d && dist < limit; c++) {
+        const t = flat[ra + c] - flat[rb + c];
+        dist += t * t;
+      }
+      if (dist === 0 || dist >= limit) continue;
+      let pos = kk - 1;
+      while (pos > 0 && best[pos - 1] > dist) {
+        best[pos] = best[pos - 1];
+        bestIdx[pos] = bestIdx[pos - 1];
+        pos--;
+      }
+      best[pos] = dist;
+      bestIdx[pos] = b;
+    }
+    for (let t = 0; t < kk; t++) {
+      if (bestIdx[t] < 0) continue;
+      pairs[count++] = rows[a];
+      pairs[count++] = rows[bestIdx[t]];
+    }
+  }
+  return pairs.subarray(0, count);
+}
+
+/**
  * Measures swing between and beyond samples for a fitted model.
  *
  * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
@@ -340,36 +390,7 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
       for (let a = 0; a < s; a++) flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
     });
     const kk = Math.min(kNear, s - 1);
-    const pairs: number[] = [];
-    const best = new Float64Array(kk);
-    const bestIdx = new Int32Array(kk);
-    for (let a = 0; a < s; a++) {
-      best.fill(Infinity);
-      bestIdx.fill(-1);
-      const ra = a * d;
-      for (let b = 0; b < s; b++) {
-        if (b === a) continue;
-        const rb = b * d;
-        // Partial sums only grow, so stopping once one reaches the k-th best distance skips
-        // exactly the rows the full sum would skip.
-        const limit = best[kk - 1];
-        let dist = 0;
-        for (let c = 0; c < d && dist < limit; c++) {
-          const t = flat[ra + c] - flat[rb + c];
-          dist += t * t;
-        }
-        if (dist === 0 || dist >= limit) continue;
-        let pos = kk - 1;
-        while (pos > 0 && best[pos - 1] > dist) {
-          best[pos] = best[pos - 1];
-          bestIdx[pos] = bestIdx[pos - 1];
-          pos--;
-        }
-        best[pos] = dist;
-        bestIdx[pos] = b;
-      }
-      for (let t = 0; t < kk; t++) if (bestIdx[t] >= 0) pairs.push(rows[a], rows[bestIdx[t]]);
-    }
+    const pairs = nearestPairs(flat, s, d, kk, rows);
     const segmentsCount = pairs.length / 2;
     const m = segmentsCount * perSegment;
     if (m > 0) {

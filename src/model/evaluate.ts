@@ -13,9 +13,9 @@ import { ColumnSpread } from '../metrics/column-spread.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
 import type { RepoReader } from '../repo/types.js';
 import { fromJsonNumber, jsonNumber, worse, type BaseComparison, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result.js';
-import { crossValidate, FoldFactorBuilder, mergeFactors, type CrossValidation } from '../diagnostics/cross-validation.js';
+import { complementFactors, crossValidate, FoldFactorBuilder, mergeFactors, type CrossValidation, type FoldFactors } from '../diagnostics/cross-validation.js';
 import { assignFolds, type Folds } from '../diagnostics/folds.js';
-import { SHARED_CROSS_VALIDATION_KEY, SHARED_FOLDS_KEY } from '../diagnostics/shared.js';
+import { SHARED_CROSS_VALIDATION_KEY, SHARED_FOLD_FACTORS_KEY, SHARED_FOLDS_KEY } from '../diagnostics/shared.js';
 import { forEachBlock, predictRows } from './blocks.js';
 import { buildChartData } from './chart-data.js';
 import { loadModelData, type ModelTables } from './load-data.js';
@@ -49,6 +49,8 @@ export interface FittedModel {
   folds: Folds;
   /** Cross-validation figures, computed in the fit's passes over the rows; null when they could not be computed. */
   crossValidation: CrossValidation | null;
+  /** QR factors of each fold's rows and of each fold's complement (k small p x p factors). */
+  foldFactors: FoldFactors;
 }
 
 /**
@@ -123,17 +125,17 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
 
   // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
   // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
+  const foldFactors: FoldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? complementFactors(builder.factors) : [] };
   let trainPredictions: Float64Array = new Float64Array(train.rows);
   let crossValidation: CrossValidation | null;
   try {
-    crossValidation = crossValidate(design, train, fit, folds, { factors: builder.factors, predictions: trainPredictions });
+    crossValidation = crossValidate(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
   } catch {
     // The cross-validation check will run it again and report why it could not be computed
     // (as a check that throws does); the fit itself stands.
     crossValidation = null;
     trainPredictions = predictRows(design, train, fit.coefficients);
   }
-  builder.factors.length = 0; // the fold factors are no longer needed
   const holdoutPredictions = predictRows(design, holdout, fit.coefficients);
   const trainSums = emptySums();
   addErrors(trainSums, train.y, trainPredictions, train.rows);
@@ -173,7 +175,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     targetSd: targetStats.sd,
     targetRange: range(train.y, train.rows),
   };
-  return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation };
+  return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation, foldFactors };
 }
 
 /**
@@ -328,7 +330,10 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     return errorResult(descriptor.name, descriptor.file, new InputError(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
   }
   // The pipeline's own passes already produced what the shared diagnostics would compute.
-  const memo = new Map<string, unknown>([[SHARED_FOLDS_KEY, model.folds]]);
+  const memo = new Map<string, unknown>([
+    [SHARED_FOLDS_KEY, model.folds],
+    [SHARED_FOLD_FACTORS_KEY, model.foldFactors],
+  ]);
   if (model.crossValidation !== null) memo.set(SHARED_CROSS_VALIDATION_KEY, model.crossValidation);
   const context: CheckContext = {
     descriptor,

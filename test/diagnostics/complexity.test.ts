@@ -3,7 +3,9 @@ import { oneStandardErrorRule, sweepComplexity } from '../../src/diagnostics/com
 import { createTerm } from '../../src/basis/index.js';
 import { createDesign } from '../../src/design-matrix.js';
 import { descriptor } from '../checks/context.js';
-import { fitRows } from './helpers.js';
+import { fitRows, predictRow, relDiff, selectRows } from './helpers.js';
+import { assignFolds } from '../../src/diagnostics/folds.js';
+import { summariseFolds } from '../../src/diagnostics/cross-validation.js';
 import { seededRandom } from '../../src/diagnostics/random.js';
 
 describe('one-standard-error rule (Hastie, Tibshirani & Friedman, ESL 2nd ed. section 7.10)', () => {
@@ -74,5 +76,30 @@ describe('sweep of the ridge penalty', () => {
     for (let i = 1; i < settings.length; i++) expect(settings[i]).toBeLessThan(settings[i - 1]);
     expect(sweep?.curve[sweep.current].setting).toBe(0.5);
     expect(sweep?.curve.length).toBe(20);
+  });
+
+  it('scores every lambda like brute-force refits on each fold complement, on every row (no subsample)', () => {
+    const u = seededRandom(12);
+    const n = 120;
+    const x = Float64Array.from({ length: n }, () => 2 * u() - 1);
+    const y = Float64Array.from(x, (v) => Math.sin(3 * v) + 0.2 * (u() - 0.5));
+    const d = descriptor({ terms: [{ kind: 'polynomial', of: 'x', degree: 6, shift: null, scale: null }], target: 'y', ridge: 0.3 });
+    const design = createDesign([createTerm(d.terms[0], new Map([['x', x]]), d.file)], true);
+    const rows = { inputs: [x], y, rows: n };
+    const sweep = sweepComplexity(d, design, rows, fitRows(design, rows, 0.3), { maxRows: 50 });
+    expect(sweep?.subsampled).toBe(false);
+    expect(sweep?.rows).toBe(n);
+    const folds = assignFolds(n, d.fit.folds, d.fit.foldOrder, d.fit.seed);
+    for (const point of sweep?.curve ?? []) {
+      const sse = new Array<number>(folds.k).fill(0);
+      for (let f = 0; f < folds.k; f++) {
+        const rest = selectRows(rows, (i) => folds.foldOf[i] !== f);
+        const w = fitRows(design, rest, point.setting).coefficients;
+        for (let i = 0; i < n; i++) if (folds.foldOf[i] === f) sse[f] += (y[i] - predictRow(design, rows, i, w)) ** 2;
+      }
+      const expected = summariseFolds(sse, folds.sizes);
+      expect(relDiff(point.cvRmse, expected.cvRmse), `${point.label}: ${point.cvRmse} vs ${expected.cvRmse}`).toBeLessThan(1e-10);
+      expect(relDiff(point.meanMse, expected.meanMse)).toBeLessThan(1e-10);
+    }
   });
 });

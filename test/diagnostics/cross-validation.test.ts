@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Matrix, inverse, SingularValueDecomposition } from 'ml-matrix';
-import { complementFactors, crossValidate, foldFactors, summariseFolds } from '../../src/diagnostics/cross-validation.js';
+import { complementCoefficients, complementFactors, crossValidate, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds } from '../../src/diagnostics/cross-validation.js';
 import { assignFolds } from '../../src/diagnostics/folds.js';
 import { fitDesign } from '../../src/fit/index.js';
 import { fitRows, linearDesign, predictRow, randomRows, relDiff, selectRows } from './helpers.js';
@@ -128,4 +128,20 @@ describe('k-fold cross-validation from merged fold factors', () => {
     expect(cv.cvRmse).toBeNaN();
     expect(cv.loocvRmse).toBe(Infinity);
   });
+
+  // Identity ||y_f - X_f w||^2 = ||qty_f - R_f w||^2 + rss_f (Golub & Van Loan, Matrix Computations, 4th ed., sec. 5.3.3).
+  for (const [n, k, q] of [[40, 5, 3], [9, 4, 3]] as const) {
+    it(`squared out-of-fold errors from the fold factors equal a pass over the rows (n = ${n}, k = ${k}, p = ${q + 1}${n / k < q + 1 ? ', folds with fewer rows than columns' : ''})`, () => {
+      const design = linearDesign(q);
+      const rows = randomRows(n, q, 31);
+      const folds = assignFolds(n, k, 'shuffled', 5);
+      const perFold = foldFactors(design, rows, folds);
+      const coefficients = complementCoefficients(complementFactors(perFold), [0, 0.01, 3, 1e4], design.penalised);
+      const fromFactors = outOfFoldErrorsFromFactors(perFold, coefficients).sse;
+      const fromRows = outOfFoldErrors(design, rows, folds, coefficients).sse;
+      fromRows.forEach((bySet, s) =>
+        bySet.forEach((e, f) => expect(relDiff(fromFactors[s][f], e), `setting ${s}, fold ${f}: ${fromFactors[s][f]} vs ${e}`).toBeLessThan(1e-11)),
+      );
+    });
+  }
 });

@@ -152,9 +152,10 @@ export function prepareBundles(): Bundles {
       const work = mkdtempSync(`${out}.work-`);
       try {
         if (fresh) {
-          for (const [from, sub] of [[actionDist, 'action'], [cliDist, 'cli']] as const) {
+          // Each bundle is its index.js plus the chunks it loads on demand (N.index.js beside it).
+          for (const [from, sub] of [[dist, 'action'], [path.join(dist, 'cli'), 'cli']] as const) {
             mkdirSync(path.join(work, sub));
-            copyFileSync(from, path.join(work, sub, 'index.js'));
+            for (const f of readdirSync(from)) if (f.endsWith('.js')) copyFileSync(path.join(from, f), path.join(work, sub, f));
             writeFileSync(path.join(work, sub, 'package.json'), '{ "type": "module" }\n');
           }
         } else buildPrivately(work);

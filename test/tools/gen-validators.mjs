@@ -44,7 +44,7 @@ export async function generate() {
   const read = (name) => JSON.parse(readFileSync(path.join(root, 'src', 'config', 'schema', name), 'utf8'));
   const settings = withLimitKeys(read('settings.schema.json'), keys);
   const descriptor = withLimitKeys(read('descriptor.schema.json'), keys);
-  const ajv = new Ajv2020({ allErrors: true, verbose: true, strict: true, logger: false, code: { source: true, esm: true, lines: true } });
+  const ajv = new Ajv2020({ allErrors: true, verbose: true, strict: true, logger: false, inlineRefs: false, code: { source: true, esm: true, lines: true } });
   ajv.addSchema(settings);
   ajv.addSchema(descriptor);
   let code = standaloneCode(ajv, { validateSettings: settings.$id, validateDescriptor: descriptor.$id });
