@@ -2,7 +2,7 @@
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
  * training targets on inputs between the training rows and just past their range.
  */
-import type { Design } from '../design-matrix.js';
+import { createDesign, type Design } from '../design-matrix.js';
 import { predictRows } from '../model/blocks.js';
 import type { Rows } from './cross-validation.js';
 import { columnMedian, selectKth } from './column-median.js';
@@ -19,7 +19,10 @@ export interface SwingOptions {
   margin?: number;
   /** Points in each margin. Default 40. */
   marginPoints?: number;
-  /** At most this many gaps get points (the widest); the uniform grid covers the rest. Default 4000. */
+  /**
+   * At most this many gaps get points (the widest); the uniform grid covers the rest. Several
+   * inputs share it evenly: each input's grid takes its ceil(maxGaps / d) widest gaps. Default 4000.
+   */
   maxGaps?: number;
   /**
    * Rows an input's grid is built from: above it, an even stride through the file plus the
@@ -254,6 +257,101 @@ function nearestPairs(flat: Float64Array, s: number, d: number, kk: number, rows
 }
 
 /**
+ * Predictions along input c with every other input fixed, as a function of that input's values:
+ * terms that do not read input c add the same amount at every point, so they are evaluated once
+ * (at the fixed values) and only the terms that read c are filled per point. A model whose every
+ * term reads c is predicted with its whole design, as {@link predictRows} does.
+ *
+ * @param design the fitted design
+ * @param coefficients fitted coefficients (length p)
+ * @param c index of the varying input in `design.inputs`
+ * @param fixed value of every input (entry c is ignored)
+ * @returns predict(xs): predictions at the points xs of input c
+ */
+function predictorAlong(design: Design, coefficients: ArrayLike<number>, c: number, fixed: readonly number[]): (xs: Float64Array) => Float64Array {
+  const name = design.inputs[c];
+  const varying = design.terms.map((t) => t.inputs.includes(name));
+  const constantColumns = (n: number): Float64Array[] => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
+  if (varying.every(Boolean)) {
+    return (xs) => predictRows(design, { inputs: design.inputs.map((_, k) => (k === c ? xs : constantColumns(xs.length)[k])), rows: xs.length }, coefficients);
+  }
+  // The fixed part: intercept plus every term that does not read input c, at the fixed values.
+  const row = design.fill(constantColumns(1), 0, 1);
+  let base = design.intercept ? coefficients[0] : 0;
+  const sub: number[] = [];
+  design.terms.forEach((t, i) => {
+    const first = design.termOffsets[i];
+    const width = t.columnNames.length;
+    for (let j = first; j < first + width; j++) {
+      if (varying[i]) sub.push(coefficients[j]);
+      else base += row[j] * coefficients[j];
+    }
+  });
+  const partial = createDesign(
+    design.terms.filter((_, i) => varying[i]),
+    false,
+  );
+  const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
+  return (xs) => {
+    const columns = partial.inputs.map((input) => (input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN)));
+    const out = predictRows(partial, { inputs: columns, rows: xs.length }, sub);
+    for (let i = 0; i < out.length; i++) out[i] += base;
+    return out;
+  };
+}
+
+/**
+ * Merges two ascending point sets that never share a value (the margins lie outside the range)
+ * with their predictions: the order a stable sort by x gives.
+ */
+function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp: Float64Array): { xs: Float64Array; ps: Float64Array } {
+  const na = ax.length;
+  const nb = bx.length;
+  const xs = new Float64Array(na + nb);
+  const ps = new Float64Array(na + nb);
+  for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
+    if (b >= nb || (a < na && ax[a] <= bx[b])) {
+      xs[dst] = ax[a];
+      ps[dst] = ap[a++];
+    } else {
+      xs[dst] = bx[b];
+      ps[dst] = bp[b++];
+    }
+  }
+  return { xs, ps };
+}
+
+/** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
+function extremeIndices(values: Float64Array): [number, number] {
+  let imin = 0;
+  let imax = 0;
+  for (let i = 1; i < values.length; i++) {
+    if (values[i] > values[imax]) imax = i;
+    if (values[i] < values[imin]) imin = i;
+  }
+  return [imin, imax];
+}
+
+/**
+ * The largest excursion max(0, v - hi, lo - v) / (hi - lo) over pred[0..m) (Infinity for a NaN
+ * prediction) and the first index reaching it.
+ */
+function largestExcursion(pred: Float64Array, m: number, lo: number, hi: number): { value: number; index: number } {
+  let value = -Infinity;
+  let index = 0;
+  const width = hi - lo;
+  for (let i = 0; i < m; i++) {
+    const v = pred[i];
+    const e = Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / width;
+    if (e > value) {
+      value = e;
+      index = i;
+    }
+  }
+  return { value, index };
+}
+
+/**
  * Measures swing between and beyond samples for a fitted model.
  *
  * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
@@ -297,20 +395,19 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
     design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
     return { inputs, prediction };
   };
-  /** Scores points; returns predictions. */
-  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond'): Float64Array => {
-    const pred = predictAt(columns, m);
-    for (let i = 0; i < m; i++) {
-      const v = pred[i];
-      const e = Number.isNaN(v) ? Infinity : Math.max(0, v - yhi, ylo - v) / (yhi - ylo);
+  /** Scores points (predicted here unless their predictions are given); returns the predictions. */
+  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
+    const pred = given ?? predictAt(columns, m);
+    if (m > 0) {
+      const { value, index } = largestExcursion(pred, m, ylo, yhi);
       if (where === 'inside') {
-        if (worstInside === null || e > inside) {
-          inside = Math.max(inside, e);
-          worstInside = pointAt(columns, i, pred[i]);
+        if (worstInside === null || value > inside) {
+          inside = Math.max(inside, value);
+          worstInside = pointAt(columns, index, pred[index]);
         }
-      } else if (worstBeyond === null || e > beyond) {
-        beyond = Math.max(beyond, e);
-        worstBeyond = pointAt(columns, i, pred[i]);
+      } else if (worstBeyond === null || value > beyond) {
+        beyond = Math.max(beyond, value);
+        worstBeyond = pointAt(columns, index, pred[index]);
       }
     }
     if (where === 'inside') insideCount += m;
@@ -325,37 +422,20 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
     return constants[k].subarray(0, length);
   };
   const curves: SwingCurve[] = [];
+  const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
   for (let c = 0; c < d; c++) {
     const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
     const sample = scratch.subarray(0, len);
-    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, options, new Float64Array(radixScratch.buffer, 0, len));
+    const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
     if (grid.inside.length === 0) continue;
     const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
-    const pin = score(along(grid.inside), grid.inside.length, 'inside');
-    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond');
+    const predict = predictorAlong(design, coefficients, c, medians);
+    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
+    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
     // Curve for charts: all points ascending, thinned with the extremes kept.
-    const m = grid.inside.length + grid.beyond.length;
-    const xs = new Float64Array(m);
-    const ps = new Float64Array(m);
-    // Merge the two ascending point sets (they never share a value: the margins lie outside
-    // the range), which is the order a stable sort by x gives.
-    const nIn = grid.inside.length;
-    const nOut = grid.beyond.length;
-    for (let a = 0, b = 0, dst = 0; dst < m; dst++) {
-      if (b >= nOut || (a < nIn && grid.inside[a] <= grid.beyond[b])) {
-        xs[dst] = grid.inside[a];
-        ps[dst] = pin[a++];
-      } else {
-        xs[dst] = grid.beyond[b];
-        ps[dst] = pout[b++];
-      }
-    }
-    let imax = 0;
-    let imin = 0;
-    for (let i = 1; i < m; i++) {
-      if (ps[i] > ps[imax]) imax = i;
-      if (ps[i] < ps[imin]) imin = i;
-    }
+    const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
+    const m = xs.length;
+    const [imin, imax] = extremeIndices(ps);
     const keep = thinIndices(m, maxCurvePoints, [imax, imin]);
     const others: Record<string, number> = {};
     design.inputs.forEach((name, k) => {

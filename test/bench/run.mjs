@@ -18,6 +18,11 @@
 //   --no-reference    fitgate only
 //   --no-micro        skip the micro benchmark
 //   --json FILE       also write every measurement as JSON
+//   --inherit-env     run both tools with this process's environment (default: a minimal one,
+//                     PATH, HOME, LANG and TMPDIR only, the same for both tools: a site setting
+//                     such as NODE_EXTRA_CA_CERTS makes every Node process read and parse a
+//                     certificate bundle at start, about 50 ms on the development machine, for a
+//                     command that opens no connection)
 //   --cli FILE        the fitgate bundle to run (default dist/cli/index.js, built when missing)
 import { execFileSync, spawnSync } from 'node:child_process';
 import { copyFileSync, existsSync, linkSync, mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
@@ -50,7 +55,7 @@ const FIGURES = [
 const RELATIVE_TOLERANCE = 1e-6;
 
 function parseOptions(argv) {
-  const o = { sizes: ['S', 'M', 'L'], runs: 3, data: null, work: path.join(os.tmpdir(), 'fitgate-bench'), reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'), useReference: true, micro: true, json: null, cli: path.join(root, 'dist', 'cli', 'index.js') };
+  const o = { sizes: ['S', 'M', 'L'], runs: 3, data: null, work: path.join(os.tmpdir(), 'fitgate-bench'), reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'), useReference: true, micro: true, json: null, cli: path.join(root, 'dist', 'cli', 'index.js'), inheritEnv: false };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     const value = () => {
@@ -66,6 +71,7 @@ function parseOptions(argv) {
     else if (a === '--no-micro') o.micro = false;
     else if (a === '--json') o.json = path.resolve(value());
     else if (a === '--cli') o.cli = path.resolve(value());
+    else if (a === '--inherit-env') o.inheritEnv = true;
     else throw new Error(`unknown option ${a} (see the top of test/bench/run.mjs)`);
   }
   for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M or L`);
@@ -140,11 +146,19 @@ function buildRepository(options) {
   return { repo, files };
 }
 
+/** The environment both tools run with (see --inherit-env). */
+function benchEnvironment(options) {
+  if (options.inheritEnv) return process.env;
+  const env = {};
+  for (const key of ['PATH', 'HOME', 'LANG', 'TMPDIR']) if (process.env[key] !== undefined) env[key] = process.env[key];
+  return env;
+}
+
 function referenceAvailable(options) {
   if (!options.useReference) return 'turned off (--no-reference)';
   if (!existsSync(options.reference)) return `not found: ${options.reference}`;
   if (!existsSync('/usr/bin/python3')) return '/usr/bin/python3 is not installed';
-  const probe = spawnSync('/usr/bin/python3', ['-c', 'import numpy, pandas, sklearn'], { encoding: 'utf8' });
+  const probe = spawnSync('/usr/bin/python3', ['-c', 'import numpy, pandas, sklearn'], { encoding: 'utf8', env: benchEnvironment(options) });
   if (probe.status !== 0) return 'python3-numpy, python3-pandas or python3-sklearn is not installed (apt-get install -y python3-numpy python3-pandas python3-sklearn)';
   return null;
 }
@@ -188,7 +202,9 @@ async function main() {
   mkdirSync(options.work, { recursive: true });
   const { repo, files } = buildRepository(options);
   const refMissing = referenceAvailable(options);
-  process.stderr.write(`peak memory: ${memoryMethod()}; reference: ${refMissing ?? options.reference}\n`);
+  const env = benchEnvironment(options);
+  const envNote = options.inheritEnv ? 'the caller\'s environment' : `a minimal environment (${Object.keys(env).join(', ')}) for both tools`;
+  process.stderr.write(`peak memory: ${memoryMethod()}; reference: ${refMissing ?? options.reference}; ${envNote}\n`);
 
   const results = {};
   for (const size of options.sizes) {
@@ -199,13 +215,13 @@ async function main() {
     let refOut = null;
     for (let r = 0; r < options.runs; r++) {
       // Taking turns: fitgate, then the reference, on the same files.
-      const fg = await measure(process.execPath, [cli, 'check', f.descriptor, '--format', 'json'], { cwd: repo, okStatus: [0, 1] });
+      const fg = await measure(process.execPath, [cli, 'check', f.descriptor, '--format', 'json'], { cwd: repo, okStatus: [0, 1], env });
       runs.fitgate.push(fg);
       fgOut = fg.stdout;
       if (!refMissing) {
         const args = [options.reference, '--train', f.train, '--holdout', f.holdout, '--degree', String(w.degree), '--ridge', '1', '--folds', String(w.folds)];
         if (w.loocv) args.push('--loocv');
-        const ref = await measure('/usr/bin/python3', args, { cwd: repo });
+        const ref = await measure('/usr/bin/python3', args, { cwd: repo, env });
         runs.reference.push(ref);
         refOut = ref.stdout;
       }
@@ -235,7 +251,7 @@ async function main() {
     r.ratios = { wall: wallRatio, memory: memRatio, met };
     rows.push([size, fmt(r.fitgate.wall), fmt(r.fitgate.peakMiB, 4), fmt(r.reference?.wall), fmt(r.reference?.peakMiB, 4), wallRatio === null ? '-' : `${wallRatio.toFixed(3)}x`, memRatio === null ? '-' : `${memRatio.toFixed(3)}x`, target, met]);
   }
-  process.stdout.write(`\nWhole processes, median of ${options.runs} (${os.cpus().length} cores, node ${process.version}; data: ${options.data ?? 'gen-data.mjs'})\n\n${table(rows)}\n`);
+  process.stdout.write(`\nWhole processes, median of ${options.runs} (${os.cpus().length} cores, node ${process.version}; data: ${options.data ?? 'gen-data.mjs'}; ${envNote})\n\n${table(rows)}\n`);
 
   // Figures.
   const figRows = [['size', 'figure', 'fitgate', 'reference', 'relative difference', 'within 1e-6']];
