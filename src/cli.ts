@@ -17,6 +17,7 @@ import { escapeTerminal } from './report/escape.js';
 import { formatText } from './report/text.js';
 import { exitStatus, type Result } from './result.js';
 import { VERSION } from './version.js';
+import { deferOptimisingCompiler } from './optimising-compiler.js';
 
 /** Reads the report files of `fitgate merge`; a file that cannot be read is an InputError. */
 async function readReports(files: string[]): Promise<ReportInput[]> {
@@ -33,6 +34,7 @@ async function readReports(files: string[]): Promise<ReportInput[]> {
 
 /** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
 async function main(argv: string[]): Promise<number> {
+  deferOptimisingCompiler();
   let debug = argv.includes('--debug');
   try {
     const parsed = parseArgs(argv, process.cwd());
@@ -90,10 +92,12 @@ async function main(argv: string[]): Promise<number> {
   }
 }
 
-// In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
-if (!isModelWorker()) // A closed pipe (`fitgate check | head`) is not an error of the run.
-process.stdout.on('error', (error: NodeJS.ErrnoException) => {
-  if (error.code !== 'EPIPE') throw error;
-});
-
-process.exitCode = await main(process.argv.slice(2));
+// In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs
+// instead: the command itself runs on the main thread only.
+if (!isModelWorker()) {
+  // A closed pipe (`fitgate check | head`) is not an error of the run.
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code !== 'EPIPE') throw error;
+  });
+  process.exitCode = await main(process.argv.slice(2));
+}

@@ -20,6 +20,7 @@ import { createFsRepository } from './repo/fs-repository.js';
 import { escapeLogLine, formatAnnotations, formatCommand, inputErrorAnnotation } from './report/annotations.js';
 import { formatComment, formatSummary } from './report/summary.js';
 import { formatText } from './report/text.js';
+import { deferOptimisingCompiler } from './optimising-compiler.js';
 
 /** Writes one notice or warning line of our own (message escaped). */
 function say(level: 'notice' | 'warning', message: string): void {
@@ -27,6 +28,7 @@ function say(level: 'notice' | 'warning', message: string): void {
 }
 
 async function run(): Promise<void> {
+  deferOptimisingCompiler();
   let prefix = '';
   try {
     const inputs = readInputs();

@@ -9,6 +9,7 @@ import type { Descriptor } from './config/types.js';
 import { InputError } from './errors.js';
 import { errorResult } from './model/evaluate.js';
 import { evaluateModels } from './parallel/model-worker.js';
+import { allowOptimisingCompiler } from './optimising-compiler.js';
 import type { RepoReader } from './repo/types.js';
 import { summarise, type ModelResult, type Result } from './result.js';
 import type { Settings } from './settings.js';
@@ -62,6 +63,8 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
     }
   }
   checkUniqueNames(loaded);
+  // Several models reuse the same hot code: worth optimising (see optimising-compiler.ts).
+  if (loaded.length > 1) allowOptimisingCompiler();
   const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
   models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
   const notes = [...(options.notes ?? [])];

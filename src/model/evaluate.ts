@@ -10,6 +10,8 @@ import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
 import { fitFactor, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
+import { allowOptimisingCompiler, estimateWork, SMALL_WORK } from '../optimising-compiler.js';
+import { sweepTarget } from '../diagnostics/complexity.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../metrics/regression.js';
 import type { RepoReader } from '../repo/types.js';
 import { fromJsonNumber, jsonNumber, worse, type BaseComparison, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result.js';
@@ -92,6 +94,11 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
       );
     }
   }
+  // Big work runs on optimised code (see optimising-compiler.ts); small work finishes sooner without.
+  const sweep = sweepTarget(descriptor, design);
+  const swept = sweep === null ? null : design.terms[sweep.term]?.spec;
+  const refits = swept?.kind === 'polynomial' ? Math.min(swept.degree, 12) + 3 : swept?.kind === 'rbf' ? 7 : 0;
+  if (estimateWork({ rows: train.rows, columns: p, inputs: design.inputs.length, refits }) > SMALL_WORK) allowOptimisingCompiler();
   const targetStats = meanAndSd(train.y, train.rows);
   if (!(targetStats.sd > 0)) {
     throw new InputError(

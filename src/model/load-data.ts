@@ -5,6 +5,7 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError } from '../errors.js';
 import type { ModelData } from '../checks/types.js';
 import { readTable } from '../data/table.js';
+import { allowOptimisingCompiler, SMALL_DATA_BYTES } from '../optimising-compiler.js';
 import type { RepoReader } from '../repo/types.js';
 
 /** Training and hold-out columns of one model. */
@@ -36,6 +37,16 @@ export async function loadModelData(
   }
   const columns = [...inputs, data.target];
   const maxBytes = settings.caps.maxFileBytes;
+  // Reading big files is big work: let the optimising compiler in before the first byte.
+  let bytes = 0;
+  for (const path of [data.train, data.holdout]) {
+    try {
+      bytes += await repo.size(path);
+    } catch {
+      // readTable reports a file that cannot be read, with its location.
+    }
+  }
+  if (bytes > SMALL_DATA_BYTES) allowOptimisingCompiler();
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table;
     try {

@@ -50,6 +50,19 @@ describe('models on worker threads', () => {
     }
   });
 
+  it('through the bundle (where each worker loads the whole CLI): the report alone on stdout, the same as serial', () => {
+    // Regression: the bundle's entry ran the command in every worker too, printing the usage text.
+    const bundle = path.join(process.cwd(), 'dist', 'cli', 'index.js');
+    const run = (jobs: string) => spawnSync(process.execPath, [bundle, 'check', '--root', repo, '--jobs', jobs, '--format', 'json'], { encoding: 'utf8', env: { ...process.env, NODE_DEBUG: 'worker' }, maxBuffer: 256 * 1024 * 1024 });
+    const serial = run('1');
+    const parallel = run('2');
+    expect((parallel.stderr.match(/create new worker/g) ?? []).length, 'workers started').toBe(2);
+    expect(parallel.stdout).not.toContain('Usage:');
+    expect(() => JSON.parse(parallel.stdout)).not.toThrow();
+    expect(parallel.stdout).toBe(serial.stdout);
+    expect(parallel.status).toBe(serial.status);
+  });
+
   it('matches the in-process serial pipeline, error models included, in descriptor order', async () => {
     const parallel = cli(['check', '--root', repo, '--jobs', '3', '--format', 'json']);
     expect(parallel.workers).toBe(3);
