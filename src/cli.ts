@@ -9,7 +9,7 @@ import { parseArgs } from './args.js';
 import { errorMessage, InputError } from './errors.js';
 import type { ReportInput } from './merge.js';
 import { defaultJobs } from './parallel/pool.js';
-import { isModelWorker } from './parallel/model-worker.js';
+import { isFitgateWorker } from './parallel/worker-role.js';
 import { runPipeline } from './pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
 import { formatJson } from './report/json.js';
@@ -94,7 +94,7 @@ async function main(argv: string[]): Promise<number> {
 
 // In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs
 // instead: the command itself runs on the main thread only.
-if (!isModelWorker()) {
+if (!isFitgateWorker()) {
   // A closed pipe (`fitgate check | head`) is not an error of the run.
   process.stdout.on('error', (error: NodeJS.ErrnoException) => {
     if (error.code !== 'EPIPE') throw error;

@@ -13,7 +13,7 @@ import { failedCount, failureMessage, OUTPUTS, writeReport } from './action/outc
 import { errorMessage, InputError } from './errors.js';
 import { readInputs } from './inputs.js';
 import { defaultJobs } from './parallel/pool.js';
-import { isModelWorker } from './parallel/model-worker.js';
+import { isFitgateWorker } from './parallel/worker-role.js';
 import { writeFileReports } from './output-files.js';
 import { runPipeline } from './pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
@@ -85,4 +85,4 @@ async function run(): Promise<void> {
 }
 
 // In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
-if (!isModelWorker()) await run();
+if (!isFitgateWorker()) await run();

@@ -16,8 +16,8 @@ var promises_ = __webpack_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
-// EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
-var checks = __webpack_require__(150);
+// EXTERNAL MODULE: ./src/checks/index.ts + 13 modules
+var checks = __webpack_require__(5614);
 // EXTERNAL MODULE: ./src/format.ts
 var format = __webpack_require__(6264);
 // EXTERNAL MODULE: ./src/result.ts

@@ -2933,7 +2933,7 @@ function range(x, n = x.length) {
 
 /***/ }),
 
-/***/ 150:
+/***/ 5614:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -3097,8 +3097,8 @@ function jsonMetrics(record) {
     return out;
 }
 
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 2 modules
-var shared = __nccwpck_require__(4385);
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 3 modules
+var shared = __nccwpck_require__(5083);
 ;// CONCATENATED MODULE: ./src/checks/complexity.ts
 
 
@@ -3253,108 +3253,6 @@ const cross_validation_check = {
 };
 /* harmony default export */ const cross_validation = (cross_validation_check);
 
-;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
-/** How many line numbers of each file to report. */
-const LEAKAGE_EXAMPLE_LINES = 5;
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-/**
- * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
- * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
- * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
- * comparison, so the hash only has to spread rows over the table.
- */
-function rowHash(columns, i) {
-    let h = 0x811c9dc5;
-    for (let c = 0; c < columns.length; c++) {
-        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
-        h = Math.imul(h ^ u32[0], 0x9e3779b1);
-        h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
-        h ^= h >>> 13;
-    }
-    h ^= h >>> 16;
-    h = Math.imul(h, 0x7feb352d);
-    h ^= h >>> 15;
-    h = Math.imul(h, 0x846ca68b);
-    h ^= h >>> 16;
-    return h >>> 0;
-}
-function sameInputs(a, i, b, j) {
-    for (let c = 0; c < a.length; c++)
-        if (a[c][i] !== b[c][j])
-            return false;
-    return true;
-}
-/**
- * Finds hold-out rows equal to a training row in every input column of the model (values compared
- * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
- * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
- * hold-out rows (typed arrays, about 20 bytes per row).
- *
- * @param train training rows (inputs in the model's order, targets, lines)
- * @param holdout hold-out rows (same input order)
- */
-function findLeakage(train, holdout) {
-    const columns = train.inputs.length;
-    // Hash table of the hold-out rows (the smaller file, usually) by open addressing with linear
-    // probing over typed arrays: slot -> (hash, first row), rows with the same hash chained
-    // through `next`. No Map, no per-row objects. The training rows then stream past it in file
-    // order, so each hold-out row's first match is the earliest training row.
-    const h = holdout.rows;
-    let size = 1024;
-    while (size < 2 * h)
-        size *= 2;
-    const mask = size - 1;
-    const slotHash = new Uint32Array(size);
-    const slotHead = new Int32Array(size).fill(-1);
-    const next = new Int32Array(h).fill(-1);
-    const find = (hash) => {
-        let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
-        while (slotHead[s] >= 0 && slotHash[s] !== hash)
-            s = (s + 1) & mask;
-        return s;
-    };
-    for (let r = h - 1; r >= 0; r--) {
-        const hash = rowHash(holdout.inputs, r);
-        const s = find(hash);
-        next[r] = slotHead[s];
-        slotHash[s] = hash;
-        slotHead[s] = r;
-    }
-    const firstMatch = new Int32Array(h).fill(-1);
-    const targetToo = new Uint8Array(h);
-    if (h > 0) {
-        for (let i = 0; i < train.rows; i++) {
-            let r = slotHead[find(rowHash(train.inputs, i))];
-            while (r >= 0) {
-                if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-                    if (firstMatch[r] < 0)
-                        firstMatch[r] = i;
-                    if (holdout.y[r] === train.y[i])
-                        targetToo[r] = 1;
-                }
-                r = next[r];
-            }
-        }
-    }
-    let inputMatches = 0;
-    let fullMatches = 0;
-    const holdoutLines = [];
-    const trainLines = [];
-    for (let r = 0; r < h; r++) {
-        if (firstMatch[r] < 0)
-            continue;
-        inputMatches++;
-        if (targetToo[r] === 1)
-            fullMatches++;
-        if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
-            holdoutLines.push(holdout.lines[r]);
-            trainLines.push(train.lines[firstMatch[r]]);
-        }
-    }
-    return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
-}
-
 ;// CONCATENATED MODULE: ./src/checks/leakage.ts
 
 const leakage_check = {
@@ -3364,11 +3262,12 @@ const leakage_check = {
     description: "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
     advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
     line: (d) => d.data.lines.holdout,
-    measure({ train, holdout, design }) {
+    measure(context) {
+        const { holdout, train, design } = context;
         if (design.inputs.length === 0) {
             return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
         }
-        const leak = findLeakage(train, holdout);
+        const leak = (0,shared/* sharedLeakage */.EW)(context);
         const metrics = { leaked_rows: leak.fullMatches, holdout_rows_in_training: leak.inputMatches };
         const detail = {
             columns: [...design.inputs],
@@ -3670,8 +3569,8 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _args_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(685);
 /* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3916);
 /* harmony import */ var _parallel_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(7262);
-/* harmony import */ var _parallel_model_worker_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(322);
-/* harmony import */ var _pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(2321);
+/* harmony import */ var _parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(9506);
+/* harmony import */ var _pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9513);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4164);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
@@ -3775,7 +3674,7 @@ async function main(argv) {
 }
 // In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs
 // instead: the command itself runs on the main thread only.
-if (!(0,_parallel_model_worker_js__WEBPACK_IMPORTED_MODULE_5__/* .isModelWorker */ .uS)()) {
+if (!(0,_parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_5__/* .isFitgateWorker */ .$L)()) {
     // A closed pipe (`fitgate check | head`) is not an error of the run.
     process.stdout.on('error', (error) => {
         if (error.code !== 'EPIPE')
@@ -5003,7 +4902,7 @@ function assignFolds(n, k, order, seed) {
 
 /***/ }),
 
-/***/ 4385:
+/***/ 5083:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -5015,13 +4914,118 @@ __nccwpck_require__.d(__webpack_exports__, {
   b6: () => (/* binding */ sharedCrossValidation),
   zf: () => (/* binding */ sharedFoldFactors),
   eQ: () => (/* binding */ sharedFolds),
+  EW: () => (/* binding */ sharedLeakage),
   cQ: () => (/* binding */ sharedSwing)
 });
+
+// UNUSED EXPORTS: SHARED_LEAKAGE_KEY, SHARED_SWING_KEY
 
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(7114);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
 var diagnostics_folds = __nccwpck_require__(7694);
+;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
+/** How many line numbers of each file to report. */
+const LEAKAGE_EXAMPLE_LINES = 5;
+const f64 = new Float64Array(1);
+const u32 = new Uint32Array(f64.buffer);
+/**
+ * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
+ * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
+ * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
+ * comparison, so the hash only has to spread rows over the table.
+ */
+function rowHash(columns, i) {
+    let h = 0x811c9dc5;
+    for (let c = 0; c < columns.length; c++) {
+        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
+        h = Math.imul(h ^ u32[0], 0x9e3779b1);
+        h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
+        h ^= h >>> 13;
+    }
+    h ^= h >>> 16;
+    h = Math.imul(h, 0x7feb352d);
+    h ^= h >>> 15;
+    h = Math.imul(h, 0x846ca68b);
+    h ^= h >>> 16;
+    return h >>> 0;
+}
+function sameInputs(a, i, b, j) {
+    for (let c = 0; c < a.length; c++)
+        if (a[c][i] !== b[c][j])
+            return false;
+    return true;
+}
+/**
+ * Finds hold-out rows equal to a training row in every input column of the model (values compared
+ * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
+ * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
+ * hold-out rows (typed arrays, about 20 bytes per row).
+ *
+ * @param train training rows (inputs in the model's order, targets, lines)
+ * @param holdout hold-out rows (same input order)
+ */
+function findLeakage(train, holdout) {
+    const columns = train.inputs.length;
+    // Hash table of the hold-out rows (the smaller file, usually) by open addressing with linear
+    // probing over typed arrays: slot -> (hash, first row), rows with the same hash chained
+    // through `next`. No Map, no per-row objects. The training rows then stream past it in file
+    // order, so each hold-out row's first match is the earliest training row.
+    const h = holdout.rows;
+    let size = 1024;
+    while (size < 2 * h)
+        size *= 2;
+    const mask = size - 1;
+    const slotHash = new Uint32Array(size);
+    const slotHead = new Int32Array(size).fill(-1);
+    const next = new Int32Array(h).fill(-1);
+    const find = (hash) => {
+        let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+        while (slotHead[s] >= 0 && slotHash[s] !== hash)
+            s = (s + 1) & mask;
+        return s;
+    };
+    for (let r = h - 1; r >= 0; r--) {
+        const hash = rowHash(holdout.inputs, r);
+        const s = find(hash);
+        next[r] = slotHead[s];
+        slotHash[s] = hash;
+        slotHead[s] = r;
+    }
+    const firstMatch = new Int32Array(h).fill(-1);
+    const targetToo = new Uint8Array(h);
+    if (h > 0) {
+        for (let i = 0; i < train.rows; i++) {
+            let r = slotHead[find(rowHash(train.inputs, i))];
+            while (r >= 0) {
+                if (sameInputs(holdout.inputs, r, train.inputs, i)) {
+                    if (firstMatch[r] < 0)
+                        firstMatch[r] = i;
+                    if (holdout.y[r] === train.y[i])
+                        targetToo[r] = 1;
+                }
+                r = next[r];
+            }
+        }
+    }
+    let inputMatches = 0;
+    let fullMatches = 0;
+    const holdoutLines = [];
+    const trainLines = [];
+    for (let r = 0; r < h; r++) {
+        if (firstMatch[r] < 0)
+            continue;
+        inputMatches++;
+        if (targetToo[r] === 1)
+            fullMatches++;
+        if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
+            holdoutLines.push(holdout.lines[r]);
+            trainLines.push(train.lines[firstMatch[r]]);
+        }
+    }
+    return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
+}
+
 // EXTERNAL MODULE: ./src/design-matrix.ts
 var design_matrix = __nccwpck_require__(1927);
 // EXTERNAL MODULE: ./src/model/blocks.ts
@@ -5475,25 +5479,15 @@ function largestExcursion(pred, m, lo, hi) {
     return { value, index };
 }
 /**
- * Measures swing between and beyond samples for a fitted model.
+ * The coefficient-independent part of {@link measureSwing}: band, medians, grids and segments.
  *
- * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
- * same grid along each input with the other inputs at their training medians, and (b) points on
- * the segments between each of up to `maxRows` sampled training rows (an even stride through the
- * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
- * standard deviations). Margins are along each input. The figure is {@link excursion} against the
- * band of training targets.
- *
- * @param design the fitted design
+ * @param design the model's design (only its inputs are read)
  * @param train training rows (inputs in `design.inputs` order)
- * @param coefficients fitted coefficients (length p)
  * @param options grid sizes (see {@link SwingOptions})
  */
-function measureSwing(design, train, coefficients, options = {}) {
+function planSwing(design, train, options = {}) {
     const n = train.rows;
     const d = design.inputs.length;
-    const margin = options.margin ?? 0.1;
-    const maxCurvePoints = options.maxCurvePoints ?? 400;
     let ylo = Infinity;
     let yhi = -Infinity;
     for (let i = 0; i < n; i++) {
@@ -5502,84 +5496,22 @@ function measureSwing(design, train, coefficients, options = {}) {
         if (train.y[i] > yhi)
             yhi = train.y[i];
     }
-    const band = [ylo, yhi];
-    const predictAt = (columns, m) => (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
     // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
     const scratch = new Float64Array(n);
     const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
     const radixScratch = new Uint32Array(2 * n);
-    let inside = 0;
-    let beyond = 0;
-    let insideCount = 0;
-    let beyondCount = 0;
-    let worstInside = null;
-    let worstBeyond = null;
-    const pointAt = (columns, i, prediction) => {
-        const inputs = {};
-        design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
-        return { inputs, prediction };
-    };
-    /** Scores points (predicted here unless their predictions are given); returns the predictions. */
-    const score = (columns, m, where, given) => {
-        const pred = given ?? predictAt(columns, m);
-        if (m > 0) {
-            const { value, index } = largestExcursion(pred, m, ylo, yhi);
-            if (where === 'inside') {
-                if (worstInside === null || value > inside) {
-                    inside = Math.max(inside, value);
-                    worstInside = pointAt(columns, index, pred[index]);
-                }
-            }
-            else if (worstBeyond === null || value > beyond) {
-                beyond = Math.max(beyond, value);
-                worstBeyond = pointAt(columns, index, pred[index]);
-            }
-        }
-        if (where === 'inside')
-            insideCount += m;
-        else
-            beyondCount += m;
-        return pred;
-    };
-    // Along each input, the others at their medians (one reused column of each median).
-    const constants = medians.map(() => new Float64Array(0));
-    const constant = (k, length) => {
-        if (constants[k].length < length)
-            constants[k] = new Float64Array(length).fill(medians[k]);
-        return constants[k].subarray(0, length);
-    };
-    const curves = [];
+    const grids = [];
     const gridOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
     for (let c = 0; c < d; c++) {
         const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
         const sample = scratch.subarray(0, len);
         const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
-        if (grid.inside.length === 0)
-            continue;
-        const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
-        const predict = predictorAlong(design, coefficients, c, medians);
-        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
-        const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
-        // Curve for charts: all points ascending, thinned with the extremes kept.
-        const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
-        const m = xs.length;
-        const [imin, imax] = extremeIndices(ps);
-        const keep = thinIndices(m, maxCurvePoints, [imax, imin]);
-        const others = {};
-        design.inputs.forEach((name, k) => {
-            if (k !== c)
-                others[name] = medians[k];
-        });
-        curves.push({
-            input: design.inputs[c],
-            others,
-            range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-            x: keep.map((i) => xs[i]),
-            prediction: keep.map((i) => ps[i]),
-        });
+        if (grid.inside.length > 0)
+            grids.push({ input: c, inside: grid.inside, beyond: grid.beyond });
     }
     // Several inputs: segments between sampled rows and their nearest neighbours.
     let segments = null;
+    let segmentColumns = null;
     if (d >= 2 && n >= 2) {
         const maxRows = options.maxRows ?? 1000;
         const kNear = options.neighbours ?? 3;
@@ -5615,25 +5547,123 @@ function measureSwing(design, train, coefficients, options = {}) {
                         columns[c][q * perSegment + t - 1] = train.inputs[c][ra] + f * (train.inputs[c][rb] - train.inputs[c][ra]);
                 }
             }
-            score(columns, m, 'inside');
+            segmentColumns = columns;
         }
         segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
     }
+    return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+}
+/**
+ * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
+ *
+ * @param plan from {@link planSwing} on the same design and rows
+ * @param design the fitted design
+ * @param coefficients fitted coefficients (length p)
+ */
+function scoreSwing(plan, design, coefficients) {
+    const [ylo, yhi] = plan.band;
+    const { medians, maxCurvePoints } = plan;
+    let inside = 0;
+    let beyond = 0;
+    let insideCount = 0;
+    let beyondCount = 0;
+    let worstInside = null;
+    let worstBeyond = null;
+    const pointAt = (columns, i, prediction) => {
+        const inputs = {};
+        design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
+        return { inputs, prediction };
+    };
+    /** Scores points (predicted here unless their predictions are given); returns the predictions. */
+    const score = (columns, m, where, given) => {
+        const pred = given ?? (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
+        if (m > 0) {
+            const { value, index } = largestExcursion(pred, m, ylo, yhi);
+            if (where === 'inside') {
+                if (worstInside === null || value > inside) {
+                    inside = Math.max(inside, value);
+                    worstInside = pointAt(columns, index, pred[index]);
+                }
+            }
+            else if (worstBeyond === null || value > beyond) {
+                beyond = Math.max(beyond, value);
+                worstBeyond = pointAt(columns, index, pred[index]);
+            }
+        }
+        if (where === 'inside')
+            insideCount += m;
+        else
+            beyondCount += m;
+        return pred;
+    };
+    // Along each input, the others at their medians (one reused column of each median).
+    const constants = medians.map(() => new Float64Array(0));
+    const constant = (k, length) => {
+        if (constants[k].length < length)
+            constants[k] = new Float64Array(length).fill(medians[k]);
+        return constants[k].subarray(0, length);
+    };
+    const curves = [];
+    for (const grid of plan.grids) {
+        const c = grid.input;
+        const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
+        const predict = predictorAlong(design, coefficients, c, medians);
+        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
+        const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+        // Curve for charts: all points ascending, thinned with the extremes kept.
+        const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
+        const [imin, imax] = extremeIndices(ps);
+        const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
+        const others = {};
+        design.inputs.forEach((name, k) => {
+            if (k !== c)
+                others[name] = medians[k];
+        });
+        curves.push({
+            input: design.inputs[c],
+            others,
+            range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+            x: keep.map((i) => xs[i]),
+            prediction: keep.map((i) => ps[i]),
+        });
+    }
+    if (plan.segmentColumns !== null)
+        score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
     const valid = ylo < yhi;
     return {
         inside: valid && insideCount > 0 ? inside : Number.NaN,
         beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
-        band,
+        band: [ylo, yhi],
         points: { inside: insideCount, beyond: beyondCount },
         worstInside,
         worstBeyond,
         curves,
-        segments,
-        margin,
+        segments: plan.segments,
+        margin: plan.margin,
     };
+}
+/**
+ * Measures swing between and beyond samples for a fitted model: {@link planSwing}, then
+ * {@link scoreSwing}.
+ *
+ * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
+ * same grid along each input with the other inputs at their training medians, and (b) points on
+ * the segments between each of up to `maxRows` sampled training rows (an even stride through the
+ * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
+ * standard deviations). Margins are along each input. The figure is {@link excursion} against the
+ * band of training targets.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param options grid sizes (see {@link SwingOptions})
+ */
+function measureSwing(design, train, coefficients, options = {}) {
+    return scoreSwing(planSwing(design, train, options), design, coefficients);
 }
 
 ;// CONCATENATED MODULE: ./src/diagnostics/shared.ts
+
 
 
 
@@ -5664,9 +5694,17 @@ function sharedCrossValidation(context) {
         return (0,cross_validation/* crossValidate */.DJ)(context.design, context.train, context.fit, sharedFolds(context), { factors: perFold, complements });
     });
 }
+/** Memo key of {@link sharedSwing} (a helper thread may fill it). */
+const SHARED_SWING_KEY = 'diagnostics/swing';
+/** Memo key of {@link sharedLeakage} (a helper thread may fill it). */
+const SHARED_LEAKAGE_KEY = 'diagnostics/leakage';
 /** Swing between and beyond samples of the refit (see {@link measureSwing}). */
 function sharedSwing(context) {
-    return context.shared('diagnostics/swing', () => measureSwing(context.design, context.train, context.fit.coefficients));
+    return context.shared(SHARED_SWING_KEY, () => measureSwing(context.design, context.train, context.fit.coefficients));
+}
+/** Hold-out rows that repeat a training row (see {@link findLeakage}). */
+function sharedLeakage(context) {
+    return context.shared(SHARED_LEAKAGE_KEY, () => findLeakage(context.train, context.holdout));
 }
 
 
@@ -6239,164 +6277,181 @@ class qr_accumulator_QrAccumulator {
             this.#work = new Float64Array(ld * p);
             this.#workY = new Float64Array(ld);
         }
-        const C = this.#work;
-        const yc = this.#workY;
-        // Copy and check the block.
-        for (let j = 0; j < p; j++) {
-            const src = j * ldx + start;
-            const dst = j * ld;
-            for (let i = 0; i < mb; i++) {
-                const v = X[src + i];
-                if (!Number.isFinite(v)) {
-                    throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
-                }
-                C[dst + i] = v;
-            }
-        }
-        for (let i = 0; i < mb; i++) {
-            const v = y[start + i];
-            if (!Number.isFinite(v)) {
-                throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
-            }
-            yc[i] = v;
-        }
-        const R = this.#R;
-        const qty = this.#qty;
-        for (let j = 0; j < p; j++) {
-            // Reflector for column j of [R; C]: a = [R[j,j]; C[0..mb, j]].
-            const cj = j * ld;
-            const alpha = R[j * p + j];
-            let amax = Math.abs(alpha);
-            for (let i = 0; i < mb; i++) {
-                const a = Math.abs(C[cj + i]);
-                if (a > amax)
-                    amax = a;
-            }
-            if (amax === 0)
-                continue;
-            let sigma = 0; // sum of squares of the block part
-            let norm;
-            if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
-                for (let i = 0; i < mb; i++) {
-                    const c = C[cj + i];
-                    sigma += c * c;
-                }
-                if (sigma === 0)
-                    continue; // nothing to annihilate
-                norm = Math.sqrt(alpha * alpha + sigma);
-            }
-            else {
-                let scaled = 0;
-                for (let i = 0; i < mb; i++) {
-                    const c = C[cj + i] / amax;
-                    scaled += c * c;
-                }
-                if (scaled === 0)
-                    continue;
-                const a0 = alpha / amax;
-                norm = amax * Math.sqrt(a0 * a0 + scaled);
-            }
-            // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
-            // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
-            // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
-            const beta = alpha >= 0 ? -norm : norm;
-            const v0 = alpha - beta;
-            const tau = (beta - alpha) / beta;
-            for (let i = 0; i < mb; i++)
-                C[cj + i] /= v0;
-            let k = j + 1;
-            // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
-            // operations and their order are those of the single-column loop below).
-            for (; k + 3 < p; k += 4) {
-                const c1 = k * ld;
-                const c2 = c1 + ld;
-                const c3 = c2 + ld;
-                const c4 = c3 + ld;
-                const r1 = k * p + j;
-                let w1 = R[r1];
-                let w2 = R[r1 + p];
-                let w3 = R[r1 + 2 * p];
-                let w4 = R[r1 + 3 * p];
-                for (let i = 0; i < mb; i++) {
-                    const u = C[cj + i];
-                    w1 += u * C[c1 + i];
-                    w2 += u * C[c2 + i];
-                    w3 += u * C[c3 + i];
-                    w4 += u * C[c4 + i];
-                }
-                const f1 = tau * w1;
-                const f2 = tau * w2;
-                const f3 = tau * w3;
-                const f4 = tau * w4;
-                if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0)
-                    continue;
-                R[r1] -= f1;
-                R[r1 + p] -= f2;
-                R[r1 + 2 * p] -= f3;
-                R[r1 + 3 * p] -= f4;
-                for (let i = 0; i < mb; i++) {
-                    const u = C[cj + i];
-                    C[c1 + i] -= f1 * u;
-                    C[c2 + i] -= f2 * u;
-                    C[c3 + i] -= f3 * u;
-                    C[c4 + i] -= f4 * u;
-                }
-            }
-            for (; k + 1 < p; k += 2) {
-                const ck = k * ld;
-                const ck2 = ck + ld;
-                const rIdx = k * p + j;
-                const rIdx2 = rIdx + p;
-                let w1 = R[rIdx];
-                let w2 = R[rIdx2];
-                for (let i = 0; i < mb; i++) {
-                    const u = C[cj + i];
-                    w1 += u * C[ck + i];
-                    w2 += u * C[ck2 + i];
-                }
-                const f1 = tau * w1;
-                const f2 = tau * w2;
-                if (f1 === 0 && f2 === 0)
-                    continue;
-                R[rIdx] -= f1;
-                R[rIdx2] -= f2;
-                for (let i = 0; i < mb; i++) {
-                    const u = C[cj + i];
-                    C[ck + i] -= f1 * u;
-                    C[ck2 + i] -= f2 * u;
-                }
-            }
-            for (; k < p; k++) {
-                const ck = k * ld;
-                const rIdx = k * p + j;
-                let w = R[rIdx];
-                for (let i = 0; i < mb; i++)
-                    w += C[cj + i] * C[ck + i];
-                const f = tau * w;
-                if (f === 0)
-                    continue;
-                R[rIdx] -= f;
-                for (let i = 0; i < mb; i++)
-                    C[ck + i] -= f * C[cj + i];
-            }
-            {
-                let w = qty[j];
-                for (let i = 0; i < mb; i++)
-                    w += C[cj + i] * yc[i];
-                const f = tau * w;
-                if (f !== 0) {
-                    qty[j] -= f;
-                    for (let i = 0; i < mb; i++)
-                        yc[i] -= f * C[cj + i];
-                }
-            }
-            R[j * p + j] = beta;
-        }
+        copyChecked(X, ldx, y, start, mb, p, this.#work, this.#workY, ld);
+        annihilate(this.#R, this.#qty, this.#work, this.#workY, ld, p, mb);
         // What is left of the block's right-hand side is orthogonal to the column space.
-        let rest = 0;
+        this.#rss += sumOfSquares(this.#workY, mb);
+    }
+}
+// The kernels below are separate functions, each one loop nest, so that V8 optimises each
+// whole (a loop that first runs after another loop was optimised mid-function has no type
+// feedback and throws the optimised code away, block after block).
+/**
+ * Copies rows [start, start + mb) of the column-major X (leading dimension ldx) and of y into C
+ * (leading dimension ld) and yc.
+ * @throws RangeError naming row and column when a value is NaN or infinite
+ */
+function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
+    for (let j = 0; j < p; j++) {
+        const src = j * ldx + start;
+        const dst = j * ld;
+        for (let i = 0; i < mb; i++) {
+            const v = X[src + i];
+            if (!Number.isFinite(v)) {
+                throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
+            }
+            C[dst + i] = v;
+        }
+    }
+    for (let i = 0; i < mb; i++) {
+        const v = y[start + i];
+        if (!Number.isFinite(v)) {
+            throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
+        }
+        yc[i] = v;
+    }
+}
+/** Sum of squares of v[0..m). */
+function sumOfSquares(v, m) {
+    let s = 0;
+    for (let i = 0; i < m; i++)
+        s += v[i] * v[i];
+    return s;
+}
+/**
+ * Householder reflections that zero the mb x p block C (leading dimension ld) against the
+ * triangular R (p x p, column-major), applied to qty and yc alike.
+ */
+function annihilate(R, qty, C, yc, ld, p, mb) {
+    for (let j = 0; j < p; j++) {
+        // Reflector for column j of [R; C]: a = [R[j,j]; C[0..mb, j]].
+        const cj = j * ld;
+        const alpha = R[j * p + j];
+        let amax = Math.abs(alpha);
+        for (let i = 0; i < mb; i++) {
+            const a = Math.abs(C[cj + i]);
+            if (a > amax)
+                amax = a;
+        }
+        if (amax === 0)
+            continue;
+        let sigma = 0; // sum of squares of the block part
+        let norm;
+        if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
+            for (let i = 0; i < mb; i++) {
+                const c = C[cj + i];
+                sigma += c * c;
+            }
+            if (sigma === 0)
+                continue; // nothing to annihilate
+            norm = Math.sqrt(alpha * alpha + sigma);
+        }
+        else {
+            let scaled = 0;
+            for (let i = 0; i < mb; i++) {
+                const c = C[cj + i] / amax;
+                scaled += c * c;
+            }
+            if (scaled === 0)
+                continue;
+            const a0 = alpha / amax;
+            norm = amax * Math.sqrt(a0 * a0 + scaled);
+        }
+        // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
+        // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
+        // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
+        const beta = alpha >= 0 ? -norm : norm;
+        const v0 = alpha - beta;
+        const tau = (beta - alpha) / beta;
         for (let i = 0; i < mb; i++)
-            rest += yc[i] * yc[i];
-        this.#rss += rest;
+            C[cj + i] /= v0;
+        let k = j + 1;
+        // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
+        // operations and their order are those of the single-column loop below).
+        for (; k + 3 < p; k += 4) {
+            const c1 = k * ld;
+            const c2 = c1 + ld;
+            const c3 = c2 + ld;
+            const c4 = c3 + ld;
+            const r1 = k * p + j;
+            let w1 = R[r1];
+            let w2 = R[r1 + p];
+            let w3 = R[r1 + 2 * p];
+            let w4 = R[r1 + 3 * p];
+            for (let i = 0; i < mb; i++) {
+                const u = C[cj + i];
+                w1 += u * C[c1 + i];
+                w2 += u * C[c2 + i];
+                w3 += u * C[c3 + i];
+                w4 += u * C[c4 + i];
+            }
+            const f1 = tau * w1;
+            const f2 = tau * w2;
+            const f3 = tau * w3;
+            const f4 = tau * w4;
+            if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0)
+                continue;
+            R[r1] -= f1;
+            R[r1 + p] -= f2;
+            R[r1 + 2 * p] -= f3;
+            R[r1 + 3 * p] -= f4;
+            for (let i = 0; i < mb; i++) {
+                const u = C[cj + i];
+                C[c1 + i] -= f1 * u;
+                C[c2 + i] -= f2 * u;
+                C[c3 + i] -= f3 * u;
+                C[c4 + i] -= f4 * u;
+            }
+        }
+        for (; k + 1 < p; k += 2) {
+            const ck = k * ld;
+            const ck2 = ck + ld;
+            const rIdx = k * p + j;
+            const rIdx2 = rIdx + p;
+            let w1 = R[rIdx];
+            let w2 = R[rIdx2];
+            for (let i = 0; i < mb; i++) {
+                const u = C[cj + i];
+                w1 += u * C[ck + i];
+                w2 += u * C[ck2 + i];
+            }
+            const f1 = tau * w1;
+            const f2 = tau * w2;
+            if (f1 === 0 && f2 === 0)
+                continue;
+            R[rIdx] -= f1;
+            R[rIdx2] -= f2;
+            for (let i = 0; i < mb; i++) {
+                const u = C[cj + i];
+                C[ck + i] -= f1 * u;
+                C[ck2 + i] -= f2 * u;
+            }
+        }
+        for (; k < p; k++) {
+            const ck = k * ld;
+            const rIdx = k * p + j;
+            let w = R[rIdx];
+            for (let i = 0; i < mb; i++)
+                w += C[cj + i] * C[ck + i];
+            const f = tau * w;
+            if (f === 0)
+                continue;
+            R[rIdx] -= f;
+            for (let i = 0; i < mb; i++)
+                C[ck + i] -= f * C[cj + i];
+        }
+        {
+            let w = qty[j];
+            for (let i = 0; i < mb; i++)
+                w += C[cj + i] * yc[i];
+            const f = tau * w;
+            if (f !== 0) {
+                qty[j] -= f;
+                for (let i = 0; i < mb; i++)
+                    yc[i] -= f * C[cj + i];
+            }
+        }
+        R[j * p + j] = beta;
     }
 }
 
@@ -7081,1247 +7136,6 @@ function addColumn(out, at, X, m, wj, j) {
 
 /***/ }),
 
-/***/ 4216:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  WG: () => (/* binding */ errorResult),
-  H_: () => (/* binding */ evaluateModel)
-});
-
-// UNUSED EXPORTS: INTERNAL_ERROR, MAX_MAGNITUDE, MAX_PARAMETERS, fitModel
-
-// EXTERNAL MODULE: ./src/basis/index.ts + 3 modules
-var basis = __nccwpck_require__(2578);
-// EXTERNAL MODULE: ./src/basis/stats.ts
-var stats = __nccwpck_require__(6029);
-// EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
-var src_checks = __nccwpck_require__(150);
-// EXTERNAL MODULE: ./src/design-matrix.ts
-var design_matrix = __nccwpck_require__(1927);
-// EXTERNAL MODULE: ./src/errors.ts
-var errors = __nccwpck_require__(3916);
-// EXTERNAL MODULE: ./src/fit/index.ts + 4 modules
-var src_fit = __nccwpck_require__(6933);
-;// CONCATENATED MODULE: ./src/metrics/column-spread.ts
-/**
- * Population standard deviations of the design columns, gathered block by block in the same
- * pass that folds rows into the factor. Sums are taken about each column's first value, which
- * keeps the subtraction well conditioned for columns with a large offset.
- */
-/** Running sums per column. */
-class ColumnSpread {
-    p;
-    shift;
-    s1;
-    s2;
-    n = 0;
-    /** @param p number of columns */
-    constructor(p) {
-        this.p = p;
-        this.shift = new Float64Array(p);
-        this.s1 = new Float64Array(p);
-        this.s2 = new Float64Array(p);
-    }
-    /** Adds a column-major block of `m` rows. */
-    add(X, m) {
-        if (m === 0)
-            return;
-        for (let j = 0; j < this.p; j++) {
-            const base = j * m;
-            if (this.n === 0)
-                this.shift[j] = X[base];
-            const s = this.shift[j];
-            let a = 0;
-            let b = 0;
-            for (let i = 0; i < m; i++) {
-                const d = X[base + i] - s;
-                a += d;
-                b += d * d;
-            }
-            this.s1[j] += a;
-            this.s2[j] += b;
-        }
-        this.n += m;
-    }
-    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
-    sd() {
-        const out = new Float64Array(this.p);
-        for (let j = 0; j < this.p; j++) {
-            const mean = this.s1[j] / this.n;
-            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
-        }
-        return out;
-    }
-}
-
-// EXTERNAL MODULE: ./src/optimising-compiler.ts + 1 modules
-var optimising_compiler = __nccwpck_require__(6475);
-// EXTERNAL MODULE: ./src/diagnostics/complexity.ts
-var complexity = __nccwpck_require__(2210);
-// EXTERNAL MODULE: ./src/metrics/regression.ts
-var regression = __nccwpck_require__(1788);
-// EXTERNAL MODULE: ./src/result.ts
-var result = __nccwpck_require__(1666);
-// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
-var cross_validation = __nccwpck_require__(7114);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
-var diagnostics_folds = __nccwpck_require__(7694);
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 2 modules
-var shared = __nccwpck_require__(4385);
-// EXTERNAL MODULE: ./src/model/blocks.ts
-var blocks = __nccwpck_require__(4607);
-// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
-var column_median = __nccwpck_require__(8455);
-;// CONCATENATED MODULE: ./src/model/chart-data.ts
-
-
-
-
-/** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
-const MAX_CHART_POINTS = 2000;
-/** Points of the evenly spaced grid along a curve. */
-const CURVE_POINTS = 401;
-/** Margin on each side of an input's training range for curves, as a fraction of the range (as the swing check's default). */
-const CURVE_MARGIN = 0.1;
-/** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
-const CHART_DIGITS = 7;
-/** Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. */
-function chartNumber(x) {
-    return Number.isFinite(x) ? Number(x.toPrecision(CHART_DIGITS)) : null;
-}
-/**
- * Rows to keep when a file has more than `max` rows: `max` evenly spaced indices
- * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
- */
-function thinRows(n, max = MAX_CHART_POINTS) {
-    if (n <= max)
-        return Int32Array.from({ length: n }, (_, i) => i);
-    return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
-}
-function series(data, predictions, max) {
-    const keep = thinRows(data.rows, max);
-    const thinned = keep.length < data.rows;
-    const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
-    return {
-        rows: data.rows,
-        shown: keep.length,
-        thinned,
-        thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-        lines: Array.from(keep, (i) => data.lines[i]),
-        x: data.inputs.map(pick),
-        actual: pick(data.y),
-        fitted: pick(predictions),
-        residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
-    };
-}
-/** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
-function curveAlong(model, c, lo, hi, medians, extra) {
-    const xs = [];
-    for (let t = 0; t < CURVE_POINTS; t++)
-        xs.push(t === CURVE_POINTS - 1 ? hi : lo + ((hi - lo) * t) / (CURVE_POINTS - 1));
-    for (const v of extra)
-        if (v >= lo && v <= hi)
-            xs.push(v);
-    const grid = Float64Array.from(xs).sort();
-    const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
-    const pred = (0,blocks/* predictRows */.tp)(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
-    const x = [];
-    const y = [];
-    for (let i = 0; i < grid.length; i++) {
-        const xi = chartNumber(grid[i]);
-        if (xi === null || (x.length > 0 && xi === x[x.length - 1]))
-            continue;
-        x.push(xi);
-        y.push(chartNumber(pred[i]));
-    }
-    return { x, y };
-}
-/**
- * Stretches of the curve outside [lo, hi]; edges are placed where the straight line between two
- * neighbouring grid points crosses the band edge. A null prediction counts as outside (above).
- */
-function bandRegions(x, y, lo, hi) {
-    const regions = [];
-    const sideOf = (v) => (v === null || v > hi ? 'above' : v < lo ? 'below' : null);
-    const cross = (i, edge) => {
-        const a = y[i - 1];
-        const b = y[i];
-        if (a === null || b === null || a === b)
-            return x[i];
-        const f = (edge - a) / (b - a);
-        return x[i - 1] + Math.min(1, Math.max(0, f)) * (x[i] - x[i - 1]);
-    };
-    let open = null;
-    for (let i = 0; i < x.length; i++) {
-        const s = sideOf(y[i]);
-        if (open && s !== open.side) {
-            open.to = cross(i, open.side === 'above' ? hi : lo);
-            regions.push(open);
-            open = null;
-        }
-        if (s && !open)
-            open = { from: i === 0 ? x[0] : cross(i, s === 'above' ? hi : lo), to: x[i], side: s };
-    }
-    if (open) {
-        open.to = x[x.length - 1];
-        regions.push(open);
-    }
-    return regions.map((r) => ({ from: chartNumber(r.from) ?? r.from, to: chartNumber(r.to) ?? r.to, side: r.side }));
-}
-function numberPair(v) {
-    const xs = numbers(v);
-    return xs && xs.length === 2 && Number.isFinite(xs[0]) && Number.isFinite(xs[1]) ? [xs[0], xs[1]] : null;
-}
-/** An array of JSON numbers (finite numbers or `"Infinity"` style strings) as numbers, or null. */
-function numbers(v) {
-    if (!Array.isArray(v) || !v.every((e) => typeof e === 'number' || e === 'Infinity' || e === '-Infinity' || e === 'NaN'))
-        return null;
-    return v.map((e) => (0,result/* fromJsonNumber */.M)(e));
-}
-function readSwing(checks, input) {
-    const check = checks.find((c) => c.id === 'swing');
-    if (!check || !check.detail)
-        return null;
-    const d = check.detail;
-    const band = numberPair(d.band);
-    let curve = null;
-    const curves = Array.isArray(d.curves) ? d.curves : [];
-    const mine = curves.find((c) => c && c.input === input);
-    if (mine) {
-        const x = numbers(mine.x);
-        const prediction = numbers(mine.prediction);
-        if (x && prediction && x.length === prediction.length && x.length > 0)
-            curve = { x, prediction, range: numberPair(mine.range) };
-    }
-    let regions = null;
-    if (Array.isArray(d.regions)) {
-        regions = [];
-        for (const r of d.regions) {
-            if (r && (r.input === undefined || r.input === input) && typeof r.from === 'number' && typeof r.to === 'number') {
-                regions.push({ from: r.from, to: r.to, side: r.side === 'below' ? 'below' : 'above' });
-            }
-        }
-    }
-    return { band, curve, regions };
-}
-function finiteOrNull(v) {
-    const x = typeof v === 'number' || typeof v === 'string' ? (0,result/* fromJsonNumber */.M)(v) : Number.NaN;
-    return Number.isFinite(x) ? x : null;
-}
-/**
- * Reads the complexity check's sweep from its detail: `{ setting: 'degree' | 'width' | 'ridge',
- * current, chosen (the suggested index), curve: [{ setting, cv_rmse }] }`.
- */
-function readSweep(checks) {
-    const check = checks.find((c) => c.id === 'complexity');
-    if (!check || !check.detail || !Array.isArray(check.detail.curve))
-        return null;
-    const d = check.detail;
-    const curve = d.curve;
-    const at = (index) => {
-        const i = typeof index === 'number' && Number.isInteger(index) ? index : -1;
-        return i >= 0 && i < curve.length ? finiteOrNull(curve[i]?.setting) : null;
-    };
-    const rows = [];
-    for (const p of curve) {
-        const s = p && typeof p === 'object' ? finiteOrNull(p.setting) : null;
-        if (s !== null)
-            rows.push({ s, cv: finiteOrNull(p.cv_rmse) });
-    }
-    if (rows.length === 0)
-        return null;
-    rows.sort((a, b) => a.s - b.s);
-    const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
-    const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
-    return {
-        parameter,
-        log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && Math.max(...positive) / Math.min(...positive) >= 10,
-        settings: rows.map((r) => chartNumber(r.s) ?? r.s),
-        cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
-        train: null,
-        chosen: at(d.current),
-        suggested: at(d.chosen),
-    };
-}
-/**
- * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
- * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
- * {@link CURVE_POINTS} predictions per curve.
- * @param model the fitted model (design, coefficients, data, predictions)
- * @param checks the model's check outcomes (swing and complexity details are read when present)
- * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
- */
-function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
-    const { design, tables, metrics, fit, descriptor } = model;
-    const { train, holdout } = tables;
-    const inputs = [...design.inputs];
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
-    // One input: the curve over the scanned range with the band; several: partial curves.
-    let fitCurve = null;
-    const partials = [];
-    for (let c = 0; c < inputs.length; c++) {
-        const [tlo, thi] = (0,stats/* range */.y)(train.inputs[c], train.rows);
-        if (!(thi > tlo))
-            continue;
-        const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
-        const swingCurve = swing?.curve ?? null;
-        const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
-        const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
-        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
-        const others = {};
-        inputs.forEach((name, k) => {
-            if (k !== c)
-                others[name] = chartNumber(medians[k]) ?? 0;
-        });
-        const curve = { input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, y };
-        if (inputs.length === 1) {
-            const band = swing?.band ?? metrics.targetRange;
-            fitCurve = {
-                ...curve,
-                band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
-                regions: swing?.regions ?? bandRegions(x, y, band[0], band[1]),
-                source: swing && (swing.band || swing.curve) ? 'swing' : 'data',
-            };
-        }
-        else {
-            partials.push(curve);
-        }
-    }
-    // Standardised coefficients of the non-intercept columns.
-    const coefCheck = checks.find((c) => c.id === 'coefficient-size');
-    const columns = [];
-    const values = [];
-    for (let j = 0; j < design.p; j++) {
-        if (!design.penalised[j])
-            continue;
-        columns.push(design.columnNames[j]);
-        values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
-    }
-    return {
-        target: descriptor.data.target,
-        inputs,
-        train: series(train, model.trainPredictions, maxPoints),
-        holdout: series(holdout, model.holdoutPredictions, maxPoints),
-        fit: fitCurve,
-        partials,
-        sweep: readSweep(checks),
-        coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
-    };
-}
-
-// EXTERNAL MODULE: ./src/data/csv-rules.ts
-var csv_rules = __nccwpck_require__(8706);
-// EXTERNAL MODULE: ./src/data/line-blocks.ts + 1 modules
-var line_blocks = __nccwpck_require__(4113);
-;// CONCATENATED MODULE: ./src/data/fast-path.ts
-/**
- * The fast CSV path: one loop over the bytes of plain numeric CSV (no quotes), parsing
- * numbers straight into Float64Array columns without building a string per field.
- *
- * It accepts a strict subset of what the general path accepts and gives the same numbers
- * and line numbers for it. Anything else (a quote, a lone carriage return, a field count
- * that differs from the header's, a cell that is not a plain finite number, white space
- * other than spaces and tabs where it matters) makes it give up with
- * {@link FastPathDeclined}; the caller then reads the file again on the general path,
- * which either accepts it or throws the error the user should see.
- */
-
-
-/** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
-class FastPathDeclined extends Error {
-    line;
-    constructor(line) {
-        super(`fast CSV path declined at line ${line}`);
-        this.line = line;
-    }
-}
-// Bytes the loop looks at.
-const TAB = 9;
-const LF = 10;
-const VT = 11;
-const FF = 12;
-const CR = 13;
-const SPACE = 32;
-const QUOTE = 34;
-const PLUS = 43;
-const COMMA = 44;
-const MINUS = 45;
-const POINT = 46;
-const DIGIT_0 = 48;
-const DIGIT_9 = 57;
-const UPPER_E = 69;
-const LOWER_E = 101;
-/**
- * Largest mantissa that can take one more decimal digit and stay below 2^53 (every integer
- * up to 2^53 is exact in a double): 900719925474098 * 10 + 9 < 9007199254740992.
- */
-const MANTISSA_ROOM = 900719925474099;
-/** Exponents beyond this are clamped while reading digits (the value then goes through Number()). */
-const EXPONENT_CLAMP = 100000;
-/** Powers of ten that are exact in a double: 10^0 .. 10^22. */
-const EXACT_POWERS_OF_TEN = Float64Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
-const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
-/**
- * Reads plain numeric CSV and yields numeric chunks; throws {@link FastPathDeclined} at the
- * first thing it does not handle (chunks already yielded stay valid: they are exactly what
- * the general path gives for those rows).
- *
- * A number is built exactly: the digits go into an integer mantissa m (kept below 2^53) and
- * a decimal exponent e; when |e| <= 22 the value is m * 10^e or m / 10^-e, one correctly
- * rounded operation on two exact doubles, hence equal to `Number(text)` (W. D. Clinger,
- * "How to read floating point numbers accurately", PLDI 1990, the fast path). Otherwise the
- * cell's text goes through `Number()`.
- *
- * @param pieces the file's bytes in pieces of any size
- * @param target what to read
- */
-async function* fastChunks(pieces, target) {
-    const reader = new FastReader(target);
-    for await (const block of (0,line_blocks/* lineBlocks */.D)(pieces)) {
-        if (block.badUtf8)
-            throw (0,line_blocks/* encodingError */.S)(target.file, reader.line, block.utf16);
-        let bytes = block.bytes;
-        if (block.final && bytes[bytes.length - 1] !== LF) {
-            // Give the last line its line feed so that every inner loop stops on one.
-            const closed = new Uint8Array(bytes.length + 1);
-            closed.set(bytes);
-            closed[bytes.length] = LF;
-            bytes = closed;
-        }
-        reader.read(bytes);
-        if (reader.stopped)
-            return;
-        for (const chunk of reader.builder.take()) {
-            yield chunk;
-            if (target.recycle === true)
-                reader.builder.recycle(chunk);
-        }
-    }
-    if (reader.plan === null)
-        throw (0,csv_rules/* emptyError */.CA)(target.file);
-    reader.builder.flush();
-    for (const chunk of reader.builder.take()) {
-        yield chunk;
-        if (target.recycle === true)
-            reader.builder.recycle(chunk);
-    }
-}
-/** State of the fast path between blocks. */
-class FastReader {
-    target;
-    builder;
-    plan = null;
-    /** 1-based line number of the next line to read. */
-    line = 1;
-    /** True once a header-only read has its header. */
-    stopped = false;
-    constructor(target) {
-        this.target = target;
-        this.builder = new csv_rules/* ChunkBuilder */.vB(target.request, target.chunkRows);
-    }
-    /** Reads whole lines; `buf` ends with a line feed. */
-    read(buf) {
-        let p = this.plan === null ? this.readHeader(buf) : 0;
-        if (this.plan === null || this.stopped)
-            return;
-        const builder = this.builder;
-        while (p < buf.length) {
-            p = this.readRows(buf, p);
-            // The buffer switch lives out here so the hot loop never runs code it has no type
-            // feedback for (which would throw away its optimised code).
-            if (builder.row === builder.capacity)
-                builder.full();
-        }
-    }
-    /** Reads rows from `p` until the block ends or the chunk buffers are full; returns the new offset. */
-    readRows(buf, p) {
-        const plan = this.plan;
-        const end = buf.length;
-        const slotOfField = plan.slotOfField;
-        const lastField = slotOfField.length - 1;
-        const builder = this.builder;
-        const slots = builder.slots;
-        const lines = builder.lines;
-        const capacity = builder.capacity;
-        let row = builder.row;
-        let line = this.line;
-        let text = null;
-        while (p < end && row < capacity) {
-            // Line start: skip spaces and tabs; a line of nothing else is blank.
-            let b = buf[p];
-            while (b === SPACE || b === TAB)
-                b = buf[++p];
-            if (b === LF) {
-                p++;
-                line++;
-                continue;
-            }
-            if (b === CR && buf[p + 1] === LF) {
-                p += 2;
-                line++;
-                continue;
-            }
-            // Other white space could make the line blank for the general path: let it decide.
-            if (b > 127 || b === VT || b === FF || b === CR)
-                throw new FastPathDeclined(line);
-            let field = 0;
-            for (;;) {
-                const slot = slotOfField[field];
-                if (slot >= 0) {
-                    // A requested cell: [spaces] [sign] digits [. digits] [e [sign] digits] [spaces]
-                    while (b === SPACE || b === TAB)
-                        b = buf[++p];
-                    const start = p;
-                    let negative = false;
-                    if (b === MINUS) {
-                        negative = true;
-                        b = buf[++p];
-                    }
-                    else if (b === PLUS) {
-                        b = buf[++p];
-                    }
-                    let mantissa = 0;
-                    let digits = 0;
-                    let exponent = 0;
-                    let exact = true;
-                    while (b >= DIGIT_0 && b <= DIGIT_9) {
-                        if (mantissa < MANTISSA_ROOM)
-                            mantissa = mantissa * 10 + (b - DIGIT_0);
-                        else
-                            exact = false;
-                        digits++;
-                        b = buf[++p];
-                    }
-                    if (b === POINT) {
-                        b = buf[++p];
-                        while (b >= DIGIT_0 && b <= DIGIT_9) {
-                            if (mantissa < MANTISSA_ROOM) {
-                                mantissa = mantissa * 10 + (b - DIGIT_0);
-                                exponent--;
-                            }
-                            else
-                                exact = false;
-                            digits++;
-                            b = buf[++p];
-                        }
-                    }
-                    if (digits === 0)
-                        throw new FastPathDeclined(line);
-                    if (b === LOWER_E || b === UPPER_E) {
-                        b = buf[++p];
-                        let negativeExponent = false;
-                        if (b === MINUS) {
-                            negativeExponent = true;
-                            b = buf[++p];
-                        }
-                        else if (b === PLUS) {
-                            b = buf[++p];
-                        }
-                        if (!(b >= DIGIT_0 && b <= DIGIT_9))
-                            throw new FastPathDeclined(line);
-                        let e = 0;
-                        while (b >= DIGIT_0 && b <= DIGIT_9) {
-                            if (e < EXPONENT_CLAMP)
-                                e = e * 10 + (b - DIGIT_0);
-                            b = buf[++p];
-                        }
-                        exponent += negativeExponent ? -e : e;
-                    }
-                    let value;
-                    if (exact && exponent >= -22 && exponent <= 22) {
-                        value = exponent < 0 ? mantissa / EXACT_POWERS_OF_TEN[-exponent] : mantissa * EXACT_POWERS_OF_TEN[exponent];
-                        if (negative)
-                            value = -value;
-                    }
-                    else {
-                        text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
-                        value = Number(text.toString('latin1', start, p));
-                        if (!Number.isFinite(value))
-                            throw new FastPathDeclined(line);
-                    }
-                    while (b === SPACE || b === TAB)
-                        b = buf[++p];
-                    slots[slot][row] = value;
-                }
-                else {
-                    // An unused cell: skip to the comma or the line end.
-                    while (b !== COMMA && b !== LF) {
-                        if (b === QUOTE || (b === CR && buf[p + 1] !== LF))
-                            throw new FastPathDeclined(line);
-                        if (b === CR)
-                            break;
-                        b = buf[++p];
-                    }
-                }
-                if (b === COMMA) {
-                    if (field === lastField)
-                        throw new FastPathDeclined(line);
-                    field++;
-                    b = buf[++p];
-                    continue;
-                }
-                if (b === CR && buf[p + 1] === LF)
-                    b = buf[++p];
-                if (b !== LF || field !== lastField)
-                    throw new FastPathDeclined(line);
-                p++;
-                break;
-            }
-            lines[row] = line;
-            line++;
-            row++;
-        }
-        builder.row = row;
-        this.line = line;
-        return p;
-    }
-    /**
-     * Reads lines up to and including the first non-blank one, the header; returns the offset
-     * after it (or `buf.length` when the block has no header yet).
-     */
-    readHeader(buf) {
-        let p = 0;
-        while (p < buf.length) {
-            const lf = buf.indexOf(LF, p);
-            let end = lf;
-            if (end > p && buf[end - 1] === CR)
-                end--;
-            for (let i = p; i < end; i++) {
-                if (buf[i] === QUOTE || buf[i] === CR)
-                    throw new FastPathDeclined(this.line);
-            }
-            const text = utf8.decode(buf.subarray(p, end));
-            const line = this.line++;
-            p = lf + 1;
-            if (text.trim() === '')
-                continue;
-            const header = text.split(',').map((name) => name.trim());
-            this.plan = (0,csv_rules/* planColumns */.j7)(this.target.file, header, line, this.target.request);
-            this.target.onHeader(this.plan);
-            if (this.target.headerOnly)
-                this.stopped = true;
-            return p;
-        }
-        return p;
-    }
-}
-
-;// CONCATENATED MODULE: ./src/data/table.ts
-/**
- * CSV data files to numeric columns.
- *
- * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
- * chosen by name and only those are converted. What is accepted, in words:
- *
- * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
- *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
- *   is the number 1.5.
- * - White space around a field is ignored (the characters `String.prototype.trim` removes),
- *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
- *   blank and skipped, before the header as well as between rows.
- * - The header is the first non-blank record; its names are trimmed and must be unique.
- * - A cell of a requested column must be a finite decimal number as JavaScript's `Number()`
- *   reads it: sign, digits, point, exponent (`-1`, `.5`, `1.`, `2.5E-3`). Empty cells, `NaN`,
- *   `Infinity`, `inf`, hexadecimal and values that overflow (`1e999`) are errors; values that
- *   underflow to a subnormal or zero are kept (they are what `Number()` gives).
- * - Every row has as many fields as the header.
- * - The whole file must be UTF-8, not only the columns used.
- *
- * Two readers give the same numbers, line numbers and errors: a fast loop over the bytes for
- * plain numeric CSV (fast-path.ts), and csv-parse for everything else (general-path.ts). The
- * fast one hands the file to the general one when it meets something it does not handle.
- */
-
-
-
-/**
- * Streams a CSV file as numeric chunks (header checked first).
- *
- * Every chunk but the last holds exactly `chunkRows` rows; a file with a header and no data
- * rows yields no chunk. Errors are InputErrors: `file-too-large` (before reading),
- * `file-missing`, `csv-empty`, `csv-header`, `csv-missing-column`, `csv-ragged`, `csv-cell`,
- * `csv-syntax`, `csv-encoding`; each names the file and, where there is one, the line.
- *
- * @param repo where the file lives
- * @param path repository-relative path of the CSV file
- * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
- *   `general: true` to skip the fast path
- */
-async function* readTableChunks(repo, path, options) {
-    const settings = checkOptions(options);
-    await checkSize(repo, path, settings.maxBytes);
-    yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
-}
-/**
- * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
- * chunks kept): after the first chunk the row count is estimated from the file size and the
- * bytes read so far (plus 5 %), each chunk is copied in as it arrives and dropped, and the
- * arrays grow by 1.5x when the estimate was short. The result views the first `rows` entries
- * (capacity beyond that stays allocated: a few percent). Peak memory is about the data plus
- * one chunk, instead of twice the data.
- *
- * @param repo where the file lives
- * @param path repository-relative path of the CSV file
- * @param options as for {@link readTableChunks}
- * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
- */
-async function readTable(repo, path, options) {
-    const settings = checkOptions(options);
-    const size = await checkSize(repo, path, settings.maxBytes);
-    let header = [];
-    let bytesRead = 0;
-    const counted = async function* () {
-        for await (const piece of repo.stream(path)) {
-            bytesRead += piece.length;
-            yield piece;
-        }
-    };
-    // First position of each distinct requested name (a repeated name shares one array).
-    const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
-    let columns = [];
-    let lines = new Int32Array(0);
-    let rows = 0;
-    const grow = (capacity) => {
-        columns = settings.columns.map((_, k) => {
-            if (firstOf[k] !== k)
-                return columns[firstOf[k]];
-            const next = new Float64Array(capacity);
-            if (rows > 0)
-                next.set(columns[k].subarray(0, rows));
-            return next;
-        });
-        const nextLines = new Int32Array(capacity);
-        if (rows > 0)
-            nextLines.set(lines.subarray(0, rows));
-        lines = nextLines;
-    };
-    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
-        const needed = rows + chunk.rows;
-        if (needed > lines.length) {
-            let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
-            if (rows === 0 && bytesRead > 0) {
-                // First chunk: estimate the whole file's rows from its bytes per row.
-                const estimate = Math.ceil((size / bytesRead) * chunk.rows * 1.05);
-                capacity = Math.max(needed, Math.min(estimate, Math.ceil(size / 2) + 1));
-            }
-            grow(capacity);
-        }
-        settings.columns.forEach((_, k) => {
-            if (firstOf[k] === k)
-                columns[k].set(chunk.columns[k], rows);
-        });
-        lines.set(chunk.lines, rows);
-        rows = needed;
-    }
-    const out = new Map();
-    settings.columns.forEach((name, k) => {
-        if (!out.has(name))
-            out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
-    });
-    return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
-}
-/**
- * Reads only the header names (for messages and checks): trimmed, in file order, checked
- * for repeats (`csv-header`); `csv-empty` when the file has none.
- *
- * @param repo where the file lives
- * @param path repository-relative path of the CSV file
- * @param maxBytes size cap in bytes; default 512 MiB
- */
-async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES) {
-    const settings = checkOptions({ columns: [], maxBytes });
-    await checkSize(repo, path, settings.maxBytes);
-    let header = [];
-    // A header-only scan ends right after the header and yields no rows.
-    const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
-    while (!(await scanning.next()).done)
-        ;
-    return header;
-}
-/** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
-function checkOptions(options) {
-    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false } = options;
-    if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
-        throw new TypeError('readTable: `columns` must be an array of column names');
-    }
-    if (!Number.isInteger(chunkRows) || chunkRows < 1 || chunkRows > 2 ** 30) {
-        throw new RangeError(`readTable: \`chunkRows\` must be an integer from 1 to 2^30, got ${chunkRows}`);
-    }
-    if (!(maxBytes >= 0))
-        throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
-    return { columns, chunkRows, maxBytes, general };
-}
-/** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
-async function checkSize(repo, path, maxBytes) {
-    const size = await repo.size(path);
-    if (size > maxBytes) {
-        throw new errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
-    }
-    return size;
-}
-function megabytes(bytes) {
-    return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
-}
-/**
- * Runs the fast path, and on the general path from the start when the fast one declines,
- * handing out only the rows the fast path has not handed out already.
- */
-async function* scan(open, path, settings, onHeader, headerOnly, recycle = false) {
-    let headerSeen = false;
-    const target = {
-        file: path,
-        request: (0,csv_rules/* planRequest */.NX)(settings.columns),
-        chunkRows: settings.chunkRows,
-        headerOnly,
-        recycle,
-        onHeader: (plan) => {
-            if (headerSeen)
-                return;
-            headerSeen = true;
-            onHeader(plan);
-        },
-    };
-    let handedOut = 0;
-    if (!settings.general) {
-        try {
-            for await (const chunk of fastChunks(open(), target)) {
-                handedOut += chunk.rows;
-                yield chunk;
-            }
-            return;
-        }
-        catch (error) {
-            if (!(error instanceof FastPathDeclined))
-                throw error;
-        }
-    }
-    // csv-parse is loaded only when a file needs it (most data files take the fast path).
-    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(70), __nccwpck_require__.e(462)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
-    yield* generalChunks(open(), target, handedOut);
-}
-
-;// CONCATENATED MODULE: ./src/model/load-data.ts
-
-
-
-/**
- * Reads the input columns (in `inputs` order) and the target of both files.
- * @throws InputError `target-as-input` when a term reads the target column,
- *   `no-rows` when either file has no data rows
- */
-async function loadModelData(repo, descriptor, inputs, settings) {
-    const { data } = descriptor;
-    if (inputs.includes(data.target)) {
-        throw new errors/* InputError */.dz('target-as-input', `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
-    }
-    const columns = [...inputs, data.target];
-    const maxBytes = settings.caps.maxFileBytes;
-    // Reading big files is big work: let the optimising compiler in before the first byte.
-    let bytes = 0;
-    for (const path of [data.train, data.holdout]) {
-        try {
-            bytes += await repo.size(path);
-        }
-        catch {
-            // readTable reports a file that cannot be read, with its location.
-        }
-    }
-    if (bytes > optimising_compiler/* SMALL_DATA_BYTES */.Bu)
-        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
-    const load = async (path, line, key) => {
-        let table;
-        try {
-            table = await readTable(repo, path, { columns, maxBytes });
-        }
-        catch (error) {
-            throw withAsker(error, descriptor);
-        }
-        if (table.rows === 0) {
-            throw new errors/* InputError */.dz('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
-                file: descriptor.file,
-                line,
-                key,
-            });
-        }
-        return {
-            inputs: inputs.map((c) => table.columns.get(c)),
-            y: table.columns.get(data.target),
-            lines: table.lines,
-            rows: table.rows,
-            file: path,
-            byName: table.columns,
-        };
-    };
-    const train = await load(data.train, data.lines.train, 'data.train');
-    const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
-    const { byName, ...trainData } = train;
-    const { byName: _unused, ...holdoutData } = holdout;
-    return { train: trainData, holdout: holdoutData, trainColumns: byName };
-}
-/**
- * A missing column names the descriptor line that asked for it: `data.target`, or the first term
- * that reads the column. Other errors pass unchanged.
- */
-function withAsker(error, descriptor) {
-    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
-        return error;
-    const column = error.location.key;
-    const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
-    const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
-    if (asker === null)
-        return error;
-    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
-}
-
-;// CONCATENATED MODULE: ./src/model/evaluate.ts
-/**
- * One model from descriptor to outcome: load its data, fix the terms, fold the training rows
- * into the factor, solve, score training and hold-out rows, run every check.
- */
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-/** Error code of a model that failed through a fault in fitgate rather than in its files. */
-const INTERNAL_ERROR = 'internal-error';
-/**
- * Largest number of design columns. The diagnostics take singular value decompositions of p x p
- * factors (several per model and fold when the design is rank deficient), whose cost grows with
- * p^3: at 200 columns each takes about 0.4 s here, so a pull request cannot make a run take hours.
- */
-const MAX_PARAMETERS = 200;
-/**
- * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
- * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
- */
-const MAX_MAGNITUDE = 1e140;
-/**
- * Loads, fits and scores one model (no checks).
- * @throws InputError for bad data, a constant target, or a design over the caps
- */
-async function fitModel(repo, descriptor, settings) {
-    const inputs = [];
-    for (const t of descriptor.terms)
-        for (const c of (0,basis/* termInputs */.Q)(t))
-            if (!inputs.includes(c))
-                inputs.push(c);
-    const tables = await loadModelData(repo, descriptor, inputs, settings);
-    const { train, holdout } = tables;
-    const file = descriptor.file;
-    // Fix term parameters from the training rows, then check the size before taking memory.
-    const terms = descriptor.terms.map((spec) => (0,basis/* createTerm */.P)(spec, tables.trainColumns, file));
-    const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
-    const p = design.p;
-    if (p > MAX_PARAMETERS) {
-        throw new errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
-    }
-    if (train.rows * p > settings.caps.maxCells) {
-        throw new errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
-    }
-    for (const data of [train, tables.holdout]) {
-        for (let i = 0; i < data.rows; i++) {
-            if (Math.abs(data.y[i]) <= MAX_MAGNITUDE)
-                continue;
-            throw new errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
-        }
-    }
-    // Big work runs on optimised code (see optimising-compiler.ts); small work finishes sooner without.
-    const sweep = (0,complexity/* sweepTarget */.mb)(descriptor, design);
-    const swept = sweep === null ? null : design.terms[sweep.term]?.spec;
-    const refits = swept?.kind === 'polynomial' ? Math.min(swept.degree, 12) + 3 : swept?.kind === 'rbf' ? 7 : 0;
-    if ((0,optimising_compiler/* estimateWork */.KB)({ rows: train.rows, columns: p, inputs: design.inputs.length, refits }) > optimising_compiler/* SMALL_WORK */.ch)
-        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
-    const targetStats = (0,stats/* meanAndSd */.u)(train.y, train.rows);
-    if (!(targetStats.sd > 0)) {
-        throw new errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
-    }
-    // One pass over the training rows: each fold's rows into its own factor (the folds are known
-    // before the pass), column spreads alongside. The full factor is the merge of the fold factors.
-    const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-    const builder = new cross_validation/* FoldFactorBuilder */.UN(p, folds);
-    const spread = new ColumnSpread(p);
-    (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
-        checkFiniteBlock(design, train, descriptor, X, start, m);
-        builder.add(X, train.y, start, m);
-        spread.add(X, m);
-    });
-    const full = (0,cross_validation/* mergeFactors */.Z4)(builder.factors, p);
-    let fit = (0,src_fit/* fitFactor */.Ps)(full, { ridge: descriptor.fit.ridge, penalised: design.penalised });
-    // One step of iterative refinement from a further pass where it converges. It is kept even for
-    // well-conditioned designs: plain QR is accurate to about cond * eps in norm, but small
-    // coefficients then differ in their last 4-5 digits between row orders (fold-factor merges
-    // versus one sequential factor); the refined solution does not depend on the order.
-    if (!fit.rankDeficient && fit.conditionNumberScaled <= src_fit/* REFINE_MAX_CONDITION */.VH) {
-        const pass = new src_fit/* RefinementPass */.rT(fit);
-        (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
-        fit = pass.finish();
-    }
-    // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
-    // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
-    const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? (0,cross_validation/* complementFactors */.Zd)(builder.factors) : [] };
-    let trainPredictions = new Float64Array(train.rows);
-    let crossValidation;
-    try {
-        crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
-    }
-    catch {
-        // The cross-validation check will run it again and report why it could not be computed
-        // (as a check that throws does); the fit itself stands.
-        crossValidation = null;
-        trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
-    }
-    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
-    const trainSums = (0,regression/* emptySums */.y3)();
-    (0,regression/* addErrors */.xB)(trainSums, train.y, trainPredictions, train.rows);
-    const holdoutSums = (0,regression/* emptySums */.y3)();
-    (0,regression/* addErrors */.xB)(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
-    const tr = (0,regression/* errorMeasures */._I)(trainSums);
-    const ho = (0,regression/* errorMeasures */._I)(holdoutSums);
-    // Coefficient sizes.
-    const columnSd = spread.sd();
-    let maxStd = Number.NaN;
-    let maxStdColumn = -1;
-    let maxAbs = 0;
-    for (let j = 0; j < p; j++) {
-        const w = Math.abs(fit.coefficients[j]);
-        if (w > maxAbs || Number.isNaN(w))
-            maxAbs = w;
-        if (!design.penalised[j])
-            continue;
-        const s = (w * columnSd[j]) / targetStats.sd;
-        if (maxStdColumn < 0 || s > maxStd) {
-            maxStd = s;
-            maxStdColumn = j;
-        }
-    }
-    const metrics = {
-        trainRmse: tr.rmse,
-        holdoutRmse: ho.rmse,
-        trainMae: tr.mae,
-        holdoutMae: ho.mae,
-        trainR2: tr.r2,
-        holdoutR2: ho.r2,
-        gapRatio: (0,regression/* gapRatio */.yr)(tr.rmse, ho.rmse),
-        paramsPerSample: p / train.rows,
-        maxStdCoefficient: maxStd,
-        maxStdCoefficientColumn: maxStdColumn,
-        maxAbsCoefficient: maxAbs,
-        columnSd,
-        targetSd: targetStats.sd,
-        targetRange: (0,stats/* range */.y)(train.y, train.rows),
-    };
-    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation, foldFactors };
-}
-/**
- * InputError `design-overflow` when a block of the training design holds a value that is not a
- * finite number within ±{@link MAX_MAGNITUDE}: finite data can still overflow in a term (a huge
- * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
- */
-function checkFiniteBlock(design, train, descriptor, X, start, m) {
-    for (let j = 0; j < design.p; j++) {
-        const base = j * m;
-        for (let i = 0; i < m; i++) {
-            const v = X[base + i];
-            if (Math.abs(v) <= MAX_MAGNITUDE)
-                continue;
-            let term = 0;
-            while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
-                term += 1;
-            const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
-            throw new errors/* InputError */.dz('design-overflow', `design column \`${design.columnNames[j]}\` is ${v} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
-        }
-    }
-}
-/** Training and hold-out RMSE of the descriptor's shipped coefficients. */
-function scoreShipped(model) {
-    const { descriptor, design, tables, fit } = model;
-    const shipped = descriptor.coefficients;
-    if (shipped === null)
-        return null;
-    if (shipped.length !== design.p) {
-        throw new errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
-    }
-    const rmse = (data) => {
-        const sums = (0,regression/* emptySums */.y3)();
-        (0,regression/* addErrors */.xB)(sums, data.y, (0,blocks/* predictRows */.tp)(design, data, shipped), data.rows);
-        return (0,regression/* errorMeasures */._I)(sums).rmse;
-    };
-    let diff = 0;
-    for (let j = 0; j < design.p; j++)
-        diff = Math.max(diff, Math.abs(shipped[j] - fit.coefficients[j]));
-    return {
-        train_rmse: (0,result/* jsonNumber */.qj)(rmse(tables.train)),
-        holdout_rmse: (0,result/* jsonNumber */.qj)(rmse(tables.holdout)),
-        max_coefficient_difference: (0,result/* jsonNumber */.qj)(diff),
-    };
-}
-/** Model metrics for the report. */
-function reportMetrics(model) {
-    const { metrics: m, fit, design } = model;
-    return {
-        train_rmse: (0,result/* jsonNumber */.qj)(m.trainRmse),
-        holdout_rmse: (0,result/* jsonNumber */.qj)(m.holdoutRmse),
-        train_mae: (0,result/* jsonNumber */.qj)(m.trainMae),
-        holdout_mae: (0,result/* jsonNumber */.qj)(m.holdoutMae),
-        train_r2: (0,result/* jsonNumber */.qj)(m.trainR2),
-        holdout_r2: (0,result/* jsonNumber */.qj)(m.holdoutR2),
-        gap_ratio: (0,result/* jsonNumber */.qj)(m.gapRatio),
-        params_per_sample: (0,result/* jsonNumber */.qj)(m.paramsPerSample),
-        max_std_coefficient: (0,result/* jsonNumber */.qj)(m.maxStdCoefficient),
-        max_std_coefficient_column: m.maxStdCoefficientColumn >= 0 ? design.columnNames[m.maxStdCoefficientColumn] : null,
-        max_abs_coefficient: (0,result/* jsonNumber */.qj)(m.maxAbsCoefficient),
-        rank: fit.rank,
-        condition_number: (0,result/* jsonNumber */.qj)(fit.conditionNumber),
-        condition_number_scaled: (0,result/* jsonNumber */.qj)(fit.conditionNumberScaled),
-    };
-}
-/**
- * The outcome of a model that could not be checked. The message starts with the key path
- * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
- * does, since the result keeps only the file and line of the location.
- */
-function errorResult(name, descriptor, error) {
-    const key = error.location.key;
-    return {
-        name,
-        descriptor,
-        verdict: 'error',
-        rows: { train: 0, holdout: 0 },
-        parameters: 0,
-        columns: [],
-        metrics: null,
-        coefficients: [],
-        shipped: null,
-        checks: [],
-        error: {
-            message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
-            file: error.location.file ?? null,
-            line: error.location.line ?? null,
-            code: error.code,
-        },
-    };
-}
-/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
-function relativeChange(head, base) {
-    if (Number.isNaN(head) || Number.isNaN(base))
-        return null;
-    if (base === 0)
-        return head === 0 ? 0 : Infinity;
-    return (head - base) / Math.abs(base);
-}
-/** The `base` field of a model result: `new`, or the base figures and the changes. */
-function compareWithBase(metrics, baseline, commit) {
-    if (baseline === null) {
-        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
-    }
-    const b = baseline.metrics;
-    const headRmse = (0,result/* fromJsonNumber */.M)(metrics.holdout_rmse);
-    const headGap = (0,result/* fromJsonNumber */.M)(metrics.gap_ratio);
-    const baseRmse = b ? (0,result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
-    const baseGap = b ? (0,result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
-    const rmseChange = relativeChange(headRmse, baseRmse);
-    const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
-    return {
-        status: 'compared',
-        commit,
-        holdout_rmse: b ? b.holdout_rmse : null,
-        gap_ratio: b ? b.gap_ratio : null,
-        holdout_rmse_change: rmseChange === null ? null : (0,result/* jsonNumber */.qj)(rmseChange),
-        gap_ratio_change: gapChange === null ? null : (0,result/* jsonNumber */.qj)(gapChange),
-    };
-}
-/**
- * Fits one model and runs every check on it. Input problems become a model with verdict
- * `error` (the run goes on); anything else is re-thrown.
- * @param base outcomes on the base commit to compare with; default none (no `base` field)
- */
-async function evaluateModel(repo, descriptor, settings, base) {
-    let model;
-    let shipped;
-    try {
-        model = await fitModel(repo, descriptor, settings);
-        shipped = scoreShipped(model);
-    }
-    catch (error) {
-        if (error instanceof errors/* InputError */.dz)
-            return errorResult(descriptor.name, descriptor.file, error);
-        // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
-        // that every other model still gets its outcome; the code marks it as a bug to report.
-        const detail = error instanceof Error ? error.message : String(error);
-        return errorResult(descriptor.name, descriptor.file, new errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
-    }
-    // The pipeline's own passes already produced what the shared diagnostics would compute.
-    const memo = new Map([
-        [shared/* SHARED_FOLDS_KEY */.Tq, model.folds],
-        [shared/* SHARED_FOLD_FACTORS_KEY */.b9, model.foldFactors],
-    ]);
-    if (model.crossValidation !== null)
-        memo.set(shared/* SHARED_CROSS_VALIDATION_KEY */.X, model.crossValidation);
-    const context = {
-        descriptor,
-        design: model.design,
-        fit: model.fit,
-        metrics: model.metrics,
-        train: model.tables.train,
-        holdout: model.tables.holdout,
-        baseline: base?.models.get(descriptor.name) ?? null,
-        shared(key, compute) {
-            if (!memo.has(key))
-                memo.set(key, compute());
-            return memo.get(key);
-        },
-    };
-    const metrics = reportMetrics(model);
-    const checks = [];
-    let verdict = 'pass';
-    for (const check of src_checks/* CHECKS */.ui) {
-        const { outcome, figures } = (0,src_checks/* runCheck */.k_)(check, context);
-        checks.push(outcome);
-        if (figures)
-            Object.assign(metrics, figures);
-        if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result/* worse */.JJ)(verdict, outcome.status);
-    }
-    return {
-        name: descriptor.name,
-        descriptor: descriptor.file,
-        verdict,
-        rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
-        parameters: model.design.p,
-        columns: [...model.design.columnNames],
-        metrics,
-        coefficients: Array.from(model.fit.coefficients, result/* jsonNumber */.qj),
-        shipped,
-        checks,
-        ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
-        error: null,
-        extra: {
-            rank_deficient: model.fit.rankDeficient,
-            terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
-        },
-        charts: buildChartData(model, checks),
-    };
-}
-
-
-/***/ }),
-
 /***/ 6475:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -8403,102 +7217,6 @@ function estimateWork(shape) {
     const swing = d >= 2 ? 1e6 * d + (gridPoints + 24_000) * p : gridPoints * p;
     return passes + swing;
 }
-
-
-/***/ }),
-
-/***/ 322:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  eq: () => (/* binding */ evaluateModels),
-  uS: () => (/* binding */ isModelWorker)
-});
-
-// UNUSED EXPORTS: WORKER_FLAG, workerScript
-
-;// CONCATENATED MODULE: external "node:url"
-const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
-// EXTERNAL MODULE: external "node:worker_threads"
-var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./src/model/evaluate.ts + 5 modules
-var evaluate = __nccwpck_require__(4216);
-// EXTERNAL MODULE: ./src/repo/fs-repository.ts + 6 modules
-var fs_repository = __nccwpck_require__(4164);
-// EXTERNAL MODULE: ./src/parallel/pool.ts + 1 modules
-var pool = __nccwpck_require__(7262);
-;// CONCATENATED MODULE: ./src/parallel/model-worker.ts
-/**
- * Models on worker threads: the main thread sends each model's descriptor (with the settings
- * file and, when comparing with a base commit, that model's base outcome) as plain data; a
- * worker reads the model's files from the same repository root, fits it, runs its checks and
- * sends the ModelResult back. Results come back in descriptor order, identical to a serial run.
- *
- * The worker runs this very module's file. The CLI is bundled into one file, so there the
- * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
- * (it asks {@link isModelWorker} first), and this module's top level starts the worker loop.
- * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
- * worker threads cannot load it and models run serially.
- */
-
-
-
-
-
-/** The `workerData` key that marks a model worker. */
-const WORKER_FLAG = 'fitgateWorker';
-/** True in a worker thread started by {@link evaluateModels} (entry files use it to stand aside). */
-function isModelWorker() {
-    return !external_node_worker_threads_.isMainThread && typeof external_node_worker_threads_.workerData === 'object' && external_node_worker_threads_.workerData !== null && external_node_worker_threads_.workerData[WORKER_FLAG] === true;
-}
-/**
- * The file a worker should run: this module's own file, or null when it is not plain JavaScript
- * (then worker threads cannot load it and models run serially).
- */
-function workerScript() {
-    const url = import.meta.url;
-    if (!url.startsWith('file:') || !/\.(m?js|cjs)$/.test(url))
-        return null;
-    return (0,external_node_url_namespaceObject.fileURLToPath)(url);
-}
-/**
- * Evaluates models, on worker threads when that is possible and worth it (more than one model,
- * `jobs` > 1, a disk root, and a JavaScript module file), serially otherwise.
- * @param repo the repository reader (used by the serial path)
- * @param descriptors the models, in report order
- * @param settings the settings file
- * @param options workers and base comparison; default serial, no comparison
- * @returns one ModelResult per descriptor, in the same order
- */
-async function evaluateModels(repo, descriptors, settings, options = {}) {
-    const jobs = Math.min(options.jobs ?? 1, descriptors.length);
-    const script = workerScript();
-    if (jobs <= 1 || options.root === undefined || script === null) {
-        const results = [];
-        for (const descriptor of descriptors)
-            results.push(await (0,evaluate/* evaluateModel */.H_)(repo, descriptor, settings, options.base));
-        return results;
-    }
-    const base = options.base;
-    const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor });
-    const data = { [WORKER_FLAG]: true, root: options.root, settings };
-    return (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data });
-}
-/** The worker loop: evaluate each model task sent by the pool. */
-function startModelWorker() {
-    const data = external_node_worker_threads_.workerData;
-    const repo = (0,fs_repository/* createFsRepository */.E)(data.root);
-    (0,pool/* serveTasks */.aJ)((task) => {
-        const base = task.baseline === undefined
-            ? undefined
-            : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
-        return (0,evaluate/* evaluateModel */.H_)(repo, task.descriptor, data.settings, base);
-    });
-}
-if (isModelWorker())
-    startModelWorker();
 
 
 /***/ }),
@@ -8639,7 +7357,43 @@ function serveTasks(handle) {
 
 /***/ }),
 
-/***/ 2321:
+/***/ 9506:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   $L: () => (/* binding */ isFitgateWorker),
+/* harmony export */   oy: () => (/* binding */ WORKER_FLAG),
+/* harmony export */   ru: () => (/* binding */ workerRole)
+/* harmony export */ });
+/* unused harmony export WORKER_ROLE */
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
+/**
+ * Which kind of fitgate worker thread this is. Every worker runs the same bundle file as the
+ * command (dist/ is one file per entry), so the entry files ask {@link isFitgateWorker} and stand
+ * aside, and each worker module starts its loop only for its own role.
+ */
+
+/** The `workerData` key that marks a fitgate worker. */
+const WORKER_FLAG = 'fitgateWorker';
+/** The `workerData` key naming the worker's role; absent for a model worker. */
+const WORKER_ROLE = 'fitgateRole';
+/** True in any worker thread fitgate started (model or helper). */
+function isFitgateWorker() {
+    return !node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.isMainThread && typeof node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData === 'object' && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData !== null && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_FLAG] === true;
+}
+/** The role of this fitgate worker (`model` when none is named), or null outside one. */
+function workerRole() {
+    if (!isFitgateWorker())
+        return null;
+    const role = node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_ROLE];
+    return typeof role === 'string' ? role : 'model';
+}
+
+
+/***/ }),
+
+/***/ 9513:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -11852,14 +10606,1317 @@ function readCenters(doc, file, centers, at) {
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
 
-// EXTERNAL MODULE: ./src/model/evaluate.ts + 5 modules
-var evaluate = __nccwpck_require__(4216);
-// EXTERNAL MODULE: ./src/parallel/model-worker.ts + 1 modules
-var model_worker = __nccwpck_require__(322);
+// EXTERNAL MODULE: ./src/basis/index.ts + 3 modules
+var basis = __nccwpck_require__(2578);
+// EXTERNAL MODULE: ./src/basis/stats.ts
+var stats = __nccwpck_require__(6029);
+// EXTERNAL MODULE: ./src/checks/index.ts + 13 modules
+var src_checks = __nccwpck_require__(5614);
+// EXTERNAL MODULE: ./src/design-matrix.ts
+var design_matrix = __nccwpck_require__(1927);
+// EXTERNAL MODULE: ./src/fit/index.ts + 4 modules
+var src_fit = __nccwpck_require__(6933);
+;// CONCATENATED MODULE: ./src/metrics/column-spread.ts
+/**
+ * Population standard deviations of the design columns, gathered block by block in the same
+ * pass that folds rows into the factor. Sums are taken about each column's first value, which
+ * keeps the subtraction well conditioned for columns with a large offset.
+ */
+/** Running sums per column. */
+class ColumnSpread {
+    p;
+    shift;
+    s1;
+    s2;
+    n = 0;
+    /** @param p number of columns */
+    constructor(p) {
+        this.p = p;
+        this.shift = new Float64Array(p);
+        this.s1 = new Float64Array(p);
+        this.s2 = new Float64Array(p);
+    }
+    /** Adds a column-major block of `m` rows. */
+    add(X, m) {
+        if (m === 0)
+            return;
+        for (let j = 0; j < this.p; j++) {
+            const base = j * m;
+            if (this.n === 0)
+                this.shift[j] = X[base];
+            const s = this.shift[j];
+            let a = 0;
+            let b = 0;
+            for (let i = 0; i < m; i++) {
+                const d = X[base + i] - s;
+                a += d;
+                b += d * d;
+            }
+            this.s1[j] += a;
+            this.s2[j] += b;
+        }
+        this.n += m;
+    }
+    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
+    sd() {
+        const out = new Float64Array(this.p);
+        for (let j = 0; j < this.p; j++) {
+            const mean = this.s1[j] / this.n;
+            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
+        }
+        return out;
+    }
+}
+
 // EXTERNAL MODULE: ./src/optimising-compiler.ts + 1 modules
 var optimising_compiler = __nccwpck_require__(6475);
+// EXTERNAL MODULE: ./src/diagnostics/complexity.ts
+var complexity = __nccwpck_require__(2210);
+// EXTERNAL MODULE: ./src/metrics/regression.ts
+var regression = __nccwpck_require__(1788);
 // EXTERNAL MODULE: ./src/result.ts
 var result = __nccwpck_require__(1666);
+// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
+var cross_validation = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 3 modules
+var shared = __nccwpck_require__(5083);
+// EXTERNAL MODULE: ./src/model/blocks.ts
+var blocks = __nccwpck_require__(4607);
+// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
+var column_median = __nccwpck_require__(8455);
+;// CONCATENATED MODULE: ./src/model/chart-data.ts
+
+
+
+
+/** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
+const MAX_CHART_POINTS = 2000;
+/** Points of the evenly spaced grid along a curve. */
+const CURVE_POINTS = 401;
+/** Margin on each side of an input's training range for curves, as a fraction of the range (as the swing check's default). */
+const CURVE_MARGIN = 0.1;
+/** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
+const CHART_DIGITS = 7;
+/** Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. */
+function chartNumber(x) {
+    return Number.isFinite(x) ? Number(x.toPrecision(CHART_DIGITS)) : null;
+}
+/**
+ * Rows to keep when a file has more than `max` rows: `max` evenly spaced indices
+ * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
+ */
+function thinRows(n, max = MAX_CHART_POINTS) {
+    if (n <= max)
+        return Int32Array.from({ length: n }, (_, i) => i);
+    return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
+}
+function series(data, predictions, max) {
+    const keep = thinRows(data.rows, max);
+    const thinned = keep.length < data.rows;
+    const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
+    return {
+        rows: data.rows,
+        shown: keep.length,
+        thinned,
+        thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
+        lines: Array.from(keep, (i) => data.lines[i]),
+        x: data.inputs.map(pick),
+        actual: pick(data.y),
+        fitted: pick(predictions),
+        residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
+    };
+}
+/** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
+function curveAlong(model, c, lo, hi, medians, extra) {
+    const xs = [];
+    for (let t = 0; t < CURVE_POINTS; t++)
+        xs.push(t === CURVE_POINTS - 1 ? hi : lo + ((hi - lo) * t) / (CURVE_POINTS - 1));
+    for (const v of extra)
+        if (v >= lo && v <= hi)
+            xs.push(v);
+    const grid = Float64Array.from(xs).sort();
+    const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+    const pred = (0,blocks/* predictRows */.tp)(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
+    const x = [];
+    const y = [];
+    for (let i = 0; i < grid.length; i++) {
+        const xi = chartNumber(grid[i]);
+        if (xi === null || (x.length > 0 && xi === x[x.length - 1]))
+            continue;
+        x.push(xi);
+        y.push(chartNumber(pred[i]));
+    }
+    return { x, y };
+}
+/**
+ * Stretches of the curve outside [lo, hi]; edges are placed where the straight line between two
+ * neighbouring grid points crosses the band edge. A null prediction counts as outside (above).
+ */
+function bandRegions(x, y, lo, hi) {
+    const regions = [];
+    const sideOf = (v) => (v === null || v > hi ? 'above' : v < lo ? 'below' : null);
+    const cross = (i, edge) => {
+        const a = y[i - 1];
+        const b = y[i];
+        if (a === null || b === null || a === b)
+            return x[i];
+        const f = (edge - a) / (b - a);
+        return x[i - 1] + Math.min(1, Math.max(0, f)) * (x[i] - x[i - 1]);
+    };
+    let open = null;
+    for (let i = 0; i < x.length; i++) {
+        const s = sideOf(y[i]);
+        if (open && s !== open.side) {
+            open.to = cross(i, open.side === 'above' ? hi : lo);
+            regions.push(open);
+            open = null;
+        }
+        if (s && !open)
+            open = { from: i === 0 ? x[0] : cross(i, s === 'above' ? hi : lo), to: x[i], side: s };
+    }
+    if (open) {
+        open.to = x[x.length - 1];
+        regions.push(open);
+    }
+    return regions.map((r) => ({ from: chartNumber(r.from) ?? r.from, to: chartNumber(r.to) ?? r.to, side: r.side }));
+}
+function numberPair(v) {
+    const xs = numbers(v);
+    return xs && xs.length === 2 && Number.isFinite(xs[0]) && Number.isFinite(xs[1]) ? [xs[0], xs[1]] : null;
+}
+/** An array of JSON numbers (finite numbers or `"Infinity"` style strings) as numbers, or null. */
+function numbers(v) {
+    if (!Array.isArray(v) || !v.every((e) => typeof e === 'number' || e === 'Infinity' || e === '-Infinity' || e === 'NaN'))
+        return null;
+    return v.map((e) => (0,result/* fromJsonNumber */.M)(e));
+}
+function readSwing(checks, input) {
+    const check = checks.find((c) => c.id === 'swing');
+    if (!check || !check.detail)
+        return null;
+    const d = check.detail;
+    const band = numberPair(d.band);
+    let curve = null;
+    const curves = Array.isArray(d.curves) ? d.curves : [];
+    const mine = curves.find((c) => c && c.input === input);
+    if (mine) {
+        const x = numbers(mine.x);
+        const prediction = numbers(mine.prediction);
+        if (x && prediction && x.length === prediction.length && x.length > 0)
+            curve = { x, prediction, range: numberPair(mine.range) };
+    }
+    let regions = null;
+    if (Array.isArray(d.regions)) {
+        regions = [];
+        for (const r of d.regions) {
+            if (r && (r.input === undefined || r.input === input) && typeof r.from === 'number' && typeof r.to === 'number') {
+                regions.push({ from: r.from, to: r.to, side: r.side === 'below' ? 'below' : 'above' });
+            }
+        }
+    }
+    return { band, curve, regions };
+}
+function finiteOrNull(v) {
+    const x = typeof v === 'number' || typeof v === 'string' ? (0,result/* fromJsonNumber */.M)(v) : Number.NaN;
+    return Number.isFinite(x) ? x : null;
+}
+/**
+ * Reads the complexity check's sweep from its detail: `{ setting: 'degree' | 'width' | 'ridge',
+ * current, chosen (the suggested index), curve: [{ setting, cv_rmse }] }`.
+ */
+function readSweep(checks) {
+    const check = checks.find((c) => c.id === 'complexity');
+    if (!check || !check.detail || !Array.isArray(check.detail.curve))
+        return null;
+    const d = check.detail;
+    const curve = d.curve;
+    const at = (index) => {
+        const i = typeof index === 'number' && Number.isInteger(index) ? index : -1;
+        return i >= 0 && i < curve.length ? finiteOrNull(curve[i]?.setting) : null;
+    };
+    const rows = [];
+    for (const p of curve) {
+        const s = p && typeof p === 'object' ? finiteOrNull(p.setting) : null;
+        if (s !== null)
+            rows.push({ s, cv: finiteOrNull(p.cv_rmse) });
+    }
+    if (rows.length === 0)
+        return null;
+    rows.sort((a, b) => a.s - b.s);
+    const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
+    const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
+    return {
+        parameter,
+        log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && Math.max(...positive) / Math.min(...positive) >= 10,
+        settings: rows.map((r) => chartNumber(r.s) ?? r.s),
+        cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
+        train: null,
+        chosen: at(d.current),
+        suggested: at(d.chosen),
+    };
+}
+/**
+ * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
+ * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
+ * {@link CURVE_POINTS} predictions per curve.
+ * @param model the fitted model (design, coefficients, data, predictions)
+ * @param checks the model's check outcomes (swing and complexity details are read when present)
+ * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
+ */
+function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
+    const { design, tables, metrics, fit, descriptor } = model;
+    const { train, holdout } = tables;
+    const inputs = [...design.inputs];
+    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
+    // One input: the curve over the scanned range with the band; several: partial curves.
+    let fitCurve = null;
+    const partials = [];
+    for (let c = 0; c < inputs.length; c++) {
+        const [tlo, thi] = (0,stats/* range */.y)(train.inputs[c], train.rows);
+        if (!(thi > tlo))
+            continue;
+        const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
+        const swingCurve = swing?.curve ?? null;
+        const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
+        const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
+        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
+        const others = {};
+        inputs.forEach((name, k) => {
+            if (k !== c)
+                others[name] = chartNumber(medians[k]) ?? 0;
+        });
+        const curve = { input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, y };
+        if (inputs.length === 1) {
+            const band = swing?.band ?? metrics.targetRange;
+            fitCurve = {
+                ...curve,
+                band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
+                regions: swing?.regions ?? bandRegions(x, y, band[0], band[1]),
+                source: swing && (swing.band || swing.curve) ? 'swing' : 'data',
+            };
+        }
+        else {
+            partials.push(curve);
+        }
+    }
+    // Standardised coefficients of the non-intercept columns.
+    const coefCheck = checks.find((c) => c.id === 'coefficient-size');
+    const columns = [];
+    const values = [];
+    for (let j = 0; j < design.p; j++) {
+        if (!design.penalised[j])
+            continue;
+        columns.push(design.columnNames[j]);
+        values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
+    }
+    return {
+        target: descriptor.data.target,
+        inputs,
+        train: series(train, model.trainPredictions, maxPoints),
+        holdout: series(holdout, model.holdoutPredictions, maxPoints),
+        fit: fitCurve,
+        partials,
+        sweep: readSweep(checks),
+        coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
+    };
+}
+
+// EXTERNAL MODULE: ./src/data/csv-rules.ts
+var csv_rules = __nccwpck_require__(8706);
+// EXTERNAL MODULE: ./src/data/line-blocks.ts + 1 modules
+var line_blocks = __nccwpck_require__(4113);
+;// CONCATENATED MODULE: ./src/data/fast-path.ts
+/**
+ * The fast CSV path: one loop over the bytes of plain numeric CSV (no quotes), parsing
+ * numbers straight into Float64Array columns without building a string per field.
+ *
+ * It accepts a strict subset of what the general path accepts and gives the same numbers
+ * and line numbers for it. Anything else (a quote, a lone carriage return, a field count
+ * that differs from the header's, a cell that is not a plain finite number, white space
+ * other than spaces and tabs where it matters) makes it give up with
+ * {@link FastPathDeclined}; the caller then reads the file again on the general path,
+ * which either accepts it or throws the error the user should see.
+ */
+
+
+/** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
+class FastPathDeclined extends Error {
+    line;
+    constructor(line) {
+        super(`fast CSV path declined at line ${line}`);
+        this.line = line;
+    }
+}
+// Bytes the loop looks at.
+const TAB = 9;
+const LF = 10;
+const VT = 11;
+const FF = 12;
+const CR = 13;
+const SPACE = 32;
+const QUOTE = 34;
+const PLUS = 43;
+const COMMA = 44;
+const MINUS = 45;
+const POINT = 46;
+const DIGIT_0 = 48;
+const DIGIT_9 = 57;
+const UPPER_E = 69;
+const LOWER_E = 101;
+/**
+ * Largest mantissa that can take one more decimal digit and stay below 2^53 (every integer
+ * up to 2^53 is exact in a double): 900719925474098 * 10 + 9 < 9007199254740992.
+ */
+const MANTISSA_ROOM = 900719925474099;
+/** Exponents beyond this are clamped while reading digits (the value then goes through Number()). */
+const EXPONENT_CLAMP = 100000;
+/** Powers of ten that are exact in a double: 10^0 .. 10^22. */
+const EXACT_POWERS_OF_TEN = Float64Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
+/**
+ * Reads plain numeric CSV and yields numeric chunks; throws {@link FastPathDeclined} at the
+ * first thing it does not handle (chunks already yielded stay valid: they are exactly what
+ * the general path gives for those rows).
+ *
+ * A number is built exactly: the digits go into an integer mantissa m (kept below 2^53) and
+ * a decimal exponent e; when |e| <= 22 the value is m * 10^e or m / 10^-e, one correctly
+ * rounded operation on two exact doubles, hence equal to `Number(text)` (W. D. Clinger,
+ * "How to read floating point numbers accurately", PLDI 1990, the fast path). Otherwise the
+ * cell's text goes through `Number()`.
+ *
+ * @param pieces the file's bytes in pieces of any size
+ * @param target what to read
+ */
+async function* fastChunks(pieces, target) {
+    const reader = new FastReader(target);
+    for await (const block of (0,line_blocks/* lineBlocks */.D)(pieces)) {
+        if (block.badUtf8)
+            throw (0,line_blocks/* encodingError */.S)(target.file, reader.line, block.utf16);
+        let bytes = block.bytes;
+        if (block.final && bytes[bytes.length - 1] !== LF) {
+            // Give the last line its line feed so that every inner loop stops on one.
+            const closed = new Uint8Array(bytes.length + 1);
+            closed.set(bytes);
+            closed[bytes.length] = LF;
+            bytes = closed;
+        }
+        reader.read(bytes);
+        if (reader.stopped)
+            return;
+        for (const chunk of reader.builder.take()) {
+            yield chunk;
+            if (target.recycle === true)
+                reader.builder.recycle(chunk);
+        }
+    }
+    if (reader.plan === null)
+        throw (0,csv_rules/* emptyError */.CA)(target.file);
+    reader.builder.flush();
+    for (const chunk of reader.builder.take()) {
+        yield chunk;
+        if (target.recycle === true)
+            reader.builder.recycle(chunk);
+    }
+}
+/** State of the fast path between blocks. */
+class FastReader {
+    target;
+    builder;
+    plan = null;
+    /** 1-based line number of the next line to read. */
+    line = 1;
+    /** True once a header-only read has its header. */
+    stopped = false;
+    constructor(target) {
+        this.target = target;
+        this.builder = new csv_rules/* ChunkBuilder */.vB(target.request, target.chunkRows);
+    }
+    /** Reads whole lines; `buf` ends with a line feed. */
+    read(buf) {
+        let p = this.plan === null ? this.readHeader(buf) : 0;
+        if (this.plan === null || this.stopped)
+            return;
+        const builder = this.builder;
+        while (p < buf.length) {
+            p = this.readRows(buf, p);
+            // The buffer switch lives out here so the hot loop never runs code it has no type
+            // feedback for (which would throw away its optimised code).
+            if (builder.row === builder.capacity)
+                builder.full();
+        }
+    }
+    /** Reads rows from `p` until the block ends or the chunk buffers are full; returns the new offset. */
+    readRows(buf, p) {
+        const plan = this.plan;
+        const end = buf.length;
+        const slotOfField = plan.slotOfField;
+        const lastField = slotOfField.length - 1;
+        const builder = this.builder;
+        const slots = builder.slots;
+        const lines = builder.lines;
+        const capacity = builder.capacity;
+        let row = builder.row;
+        let line = this.line;
+        let text = null;
+        while (p < end && row < capacity) {
+            // Line start: skip spaces and tabs; a line of nothing else is blank.
+            let b = buf[p];
+            while (b === SPACE || b === TAB)
+                b = buf[++p];
+            if (b === LF) {
+                p++;
+                line++;
+                continue;
+            }
+            if (b === CR && buf[p + 1] === LF) {
+                p += 2;
+                line++;
+                continue;
+            }
+            // Other white space could make the line blank for the general path: let it decide.
+            if (b > 127 || b === VT || b === FF || b === CR)
+                throw new FastPathDeclined(line);
+            let field = 0;
+            for (;;) {
+                const slot = slotOfField[field];
+                if (slot >= 0) {
+                    // A requested cell: [spaces] [sign] digits [. digits] [e [sign] digits] [spaces]
+                    while (b === SPACE || b === TAB)
+                        b = buf[++p];
+                    const start = p;
+                    let negative = false;
+                    if (b === MINUS) {
+                        negative = true;
+                        b = buf[++p];
+                    }
+                    else if (b === PLUS) {
+                        b = buf[++p];
+                    }
+                    let mantissa = 0;
+                    let digits = 0;
+                    let exponent = 0;
+                    let exact = true;
+                    while (b >= DIGIT_0 && b <= DIGIT_9) {
+                        if (mantissa < MANTISSA_ROOM)
+                            mantissa = mantissa * 10 + (b - DIGIT_0);
+                        else
+                            exact = false;
+                        digits++;
+                        b = buf[++p];
+                    }
+                    if (b === POINT) {
+                        b = buf[++p];
+                        while (b >= DIGIT_0 && b <= DIGIT_9) {
+                            if (mantissa < MANTISSA_ROOM) {
+                                mantissa = mantissa * 10 + (b - DIGIT_0);
+                                exponent--;
+                            }
+                            else
+                                exact = false;
+                            digits++;
+                            b = buf[++p];
+                        }
+                    }
+                    if (digits === 0)
+                        throw new FastPathDeclined(line);
+                    if (b === LOWER_E || b === UPPER_E) {
+                        b = buf[++p];
+                        let negativeExponent = false;
+                        if (b === MINUS) {
+                            negativeExponent = true;
+                            b = buf[++p];
+                        }
+                        else if (b === PLUS) {
+                            b = buf[++p];
+                        }
+                        if (!(b >= DIGIT_0 && b <= DIGIT_9))
+                            throw new FastPathDeclined(line);
+                        let e = 0;
+                        while (b >= DIGIT_0 && b <= DIGIT_9) {
+                            if (e < EXPONENT_CLAMP)
+                                e = e * 10 + (b - DIGIT_0);
+                            b = buf[++p];
+                        }
+                        exponent += negativeExponent ? -e : e;
+                    }
+                    let value;
+                    if (exact && exponent >= -22 && exponent <= 22) {
+                        value = exponent < 0 ? mantissa / EXACT_POWERS_OF_TEN[-exponent] : mantissa * EXACT_POWERS_OF_TEN[exponent];
+                        if (negative)
+                            value = -value;
+                    }
+                    else {
+                        text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
+                        value = Number(text.toString('latin1', start, p));
+                        if (!Number.isFinite(value))
+                            throw new FastPathDeclined(line);
+                    }
+                    while (b === SPACE || b === TAB)
+                        b = buf[++p];
+                    slots[slot][row] = value;
+                }
+                else {
+                    // An unused cell: skip to the comma or the line end.
+                    while (b !== COMMA && b !== LF) {
+                        if (b === QUOTE || (b === CR && buf[p + 1] !== LF))
+                            throw new FastPathDeclined(line);
+                        if (b === CR)
+                            break;
+                        b = buf[++p];
+                    }
+                }
+                if (b === COMMA) {
+                    if (field === lastField)
+                        throw new FastPathDeclined(line);
+                    field++;
+                    b = buf[++p];
+                    continue;
+                }
+                if (b === CR && buf[p + 1] === LF)
+                    b = buf[++p];
+                if (b !== LF || field !== lastField)
+                    throw new FastPathDeclined(line);
+                p++;
+                break;
+            }
+            lines[row] = line;
+            line++;
+            row++;
+        }
+        builder.row = row;
+        this.line = line;
+        return p;
+    }
+    /**
+     * Reads lines up to and including the first non-blank one, the header; returns the offset
+     * after it (or `buf.length` when the block has no header yet).
+     */
+    readHeader(buf) {
+        let p = 0;
+        while (p < buf.length) {
+            const lf = buf.indexOf(LF, p);
+            let end = lf;
+            if (end > p && buf[end - 1] === CR)
+                end--;
+            for (let i = p; i < end; i++) {
+                if (buf[i] === QUOTE || buf[i] === CR)
+                    throw new FastPathDeclined(this.line);
+            }
+            const text = utf8.decode(buf.subarray(p, end));
+            const line = this.line++;
+            p = lf + 1;
+            if (text.trim() === '')
+                continue;
+            const header = text.split(',').map((name) => name.trim());
+            this.plan = (0,csv_rules/* planColumns */.j7)(this.target.file, header, line, this.target.request);
+            this.target.onHeader(this.plan);
+            if (this.target.headerOnly)
+                this.stopped = true;
+            return p;
+        }
+        return p;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/data/table.ts
+/**
+ * CSV data files to numeric columns.
+ *
+ * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
+ * chosen by name and only those are converted. What is accepted, in words:
+ *
+ * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
+ *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
+ *   is the number 1.5.
+ * - White space around a field is ignored (the characters `String.prototype.trim` removes),
+ *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
+ *   blank and skipped, before the header as well as between rows.
+ * - The header is the first non-blank record; its names are trimmed and must be unique.
+ * - A cell of a requested column must be a finite decimal number as JavaScript's `Number()`
+ *   reads it: sign, digits, point, exponent (`-1`, `.5`, `1.`, `2.5E-3`). Empty cells, `NaN`,
+ *   `Infinity`, `inf`, hexadecimal and values that overflow (`1e999`) are errors; values that
+ *   underflow to a subnormal or zero are kept (they are what `Number()` gives).
+ * - Every row has as many fields as the header.
+ * - The whole file must be UTF-8, not only the columns used.
+ *
+ * Two readers give the same numbers, line numbers and errors: a fast loop over the bytes for
+ * plain numeric CSV (fast-path.ts), and csv-parse for everything else (general-path.ts). The
+ * fast one hands the file to the general one when it meets something it does not handle.
+ */
+
+
+
+/**
+ * Streams a CSV file as numeric chunks (header checked first).
+ *
+ * Every chunk but the last holds exactly `chunkRows` rows; a file with a header and no data
+ * rows yields no chunk. Errors are InputErrors: `file-too-large` (before reading),
+ * `file-missing`, `csv-empty`, `csv-header`, `csv-missing-column`, `csv-ragged`, `csv-cell`,
+ * `csv-syntax`, `csv-encoding`; each names the file and, where there is one, the line.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path of the CSV file
+ * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
+ *   `general: true` to skip the fast path
+ */
+async function* readTableChunks(repo, path, options) {
+    const settings = checkOptions(options);
+    await table_checkSize(repo, path, settings.maxBytes);
+    yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
+}
+/**
+ * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
+ * chunks kept): after the first chunk the row count is estimated from the file size and the
+ * bytes read so far (plus 5 %), each chunk is copied in as it arrives and dropped, and the
+ * arrays grow by 1.5x when the estimate was short. The result views the first `rows` entries
+ * (capacity beyond that stays allocated: a few percent). Peak memory is about the data plus
+ * one chunk, instead of twice the data.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path of the CSV file
+ * @param options as for {@link readTableChunks}
+ * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
+ */
+async function readTable(repo, path, options) {
+    const settings = checkOptions(options);
+    const size = await table_checkSize(repo, path, settings.maxBytes);
+    let header = [];
+    let bytesRead = 0;
+    const counted = async function* () {
+        for await (const piece of repo.stream(path)) {
+            bytesRead += piece.length;
+            yield piece;
+        }
+    };
+    // First position of each distinct requested name (a repeated name shares one array).
+    const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
+    let columns = [];
+    let lines = new Int32Array(0);
+    let rows = 0;
+    const grow = (capacity) => {
+        columns = settings.columns.map((_, k) => {
+            if (firstOf[k] !== k)
+                return columns[firstOf[k]];
+            const next = new Float64Array(capacity);
+            if (rows > 0)
+                next.set(columns[k].subarray(0, rows));
+            return next;
+        });
+        const nextLines = new Int32Array(capacity);
+        if (rows > 0)
+            nextLines.set(lines.subarray(0, rows));
+        lines = nextLines;
+    };
+    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+        const needed = rows + chunk.rows;
+        if (needed > lines.length) {
+            let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
+            if (rows === 0 && bytesRead > 0) {
+                // First chunk: estimate the whole file's rows from its bytes per row.
+                const estimate = Math.ceil((size / bytesRead) * chunk.rows * 1.05);
+                capacity = Math.max(needed, Math.min(estimate, Math.ceil(size / 2) + 1));
+            }
+            grow(capacity);
+        }
+        settings.columns.forEach((_, k) => {
+            if (firstOf[k] === k)
+                columns[k].set(chunk.columns[k], rows);
+        });
+        lines.set(chunk.lines, rows);
+        rows = needed;
+    }
+    const out = new Map();
+    settings.columns.forEach((name, k) => {
+        if (!out.has(name))
+            out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
+    });
+    return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
+}
+/**
+ * Reads only the header names (for messages and checks): trimmed, in file order, checked
+ * for repeats (`csv-header`); `csv-empty` when the file has none.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path of the CSV file
+ * @param maxBytes size cap in bytes; default 512 MiB
+ */
+async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES) {
+    const settings = checkOptions({ columns: [], maxBytes });
+    await table_checkSize(repo, path, settings.maxBytes);
+    let header = [];
+    // A header-only scan ends right after the header and yields no rows.
+    const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
+    while (!(await scanning.next()).done)
+        ;
+    return header;
+}
+/** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
+function checkOptions(options) {
+    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false } = options;
+    if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
+        throw new TypeError('readTable: `columns` must be an array of column names');
+    }
+    if (!Number.isInteger(chunkRows) || chunkRows < 1 || chunkRows > 2 ** 30) {
+        throw new RangeError(`readTable: \`chunkRows\` must be an integer from 1 to 2^30, got ${chunkRows}`);
+    }
+    if (!(maxBytes >= 0))
+        throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
+    return { columns, chunkRows, maxBytes, general };
+}
+/** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
+async function table_checkSize(repo, path, maxBytes) {
+    const size = await repo.size(path);
+    if (size > maxBytes) {
+        throw new src_errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
+    }
+    return size;
+}
+function megabytes(bytes) {
+    return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+}
+/**
+ * Runs the fast path, and on the general path from the start when the fast one declines,
+ * handing out only the rows the fast path has not handed out already.
+ */
+async function* scan(open, path, settings, onHeader, headerOnly, recycle = false) {
+    let headerSeen = false;
+    const target = {
+        file: path,
+        request: (0,csv_rules/* planRequest */.NX)(settings.columns),
+        chunkRows: settings.chunkRows,
+        headerOnly,
+        recycle,
+        onHeader: (plan) => {
+            if (headerSeen)
+                return;
+            headerSeen = true;
+            onHeader(plan);
+        },
+    };
+    let handedOut = 0;
+    if (!settings.general) {
+        try {
+            for await (const chunk of fastChunks(open(), target)) {
+                handedOut += chunk.rows;
+                yield chunk;
+            }
+            return;
+        }
+        catch (error) {
+            if (!(error instanceof FastPathDeclined))
+                throw error;
+        }
+    }
+    // csv-parse is loaded only when a file needs it (most data files take the fast path).
+    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(70), __nccwpck_require__.e(462)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
+    yield* generalChunks(open(), target, handedOut);
+}
+
+;// CONCATENATED MODULE: ./src/model/load-data.ts
+
+
+
+/**
+ * Bytes of a model's training and hold-out files together (a file that cannot be read counts 0:
+ * reading it reports the problem with its location).
+ */
+async function dataBytes(repo, descriptor) {
+    let bytes = 0;
+    for (const path of [descriptor.data.train, descriptor.data.holdout]) {
+        try {
+            bytes += await repo.size(path);
+        }
+        catch {
+            // reported by readTable
+        }
+    }
+    return bytes;
+}
+/**
+ * Reads the input columns (in `inputs` order) and the target of both files.
+ * @throws InputError `target-as-input` when a term reads the target column,
+ *   `no-rows` when either file has no data rows
+ */
+async function loadModelData(repo, descriptor, inputs, settings) {
+    const { data } = descriptor;
+    if (inputs.includes(data.target)) {
+        throw new src_errors/* InputError */.dz('target-as-input', `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
+    }
+    const columns = [...inputs, data.target];
+    const maxBytes = settings.caps.maxFileBytes;
+    // Reading big files is big work: let the optimising compiler in before the first byte.
+    if ((await dataBytes(repo, descriptor)) > optimising_compiler/* SMALL_DATA_BYTES */.Bu)
+        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
+    const load = async (path, line, key) => {
+        let table;
+        try {
+            table = await readTable(repo, path, { columns, maxBytes });
+        }
+        catch (error) {
+            throw withAsker(error, descriptor);
+        }
+        if (table.rows === 0) {
+            throw new src_errors/* InputError */.dz('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
+                file: descriptor.file,
+                line,
+                key,
+            });
+        }
+        return {
+            inputs: inputs.map((c) => table.columns.get(c)),
+            y: table.columns.get(data.target),
+            lines: table.lines,
+            rows: table.rows,
+            file: path,
+            byName: table.columns,
+        };
+    };
+    const train = await load(data.train, data.lines.train, 'data.train');
+    const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
+    const { byName, ...trainData } = train;
+    const { byName: _unused, ...holdoutData } = holdout;
+    return { train: trainData, holdout: holdoutData, trainColumns: byName };
+}
+/**
+ * A missing column names the descriptor line that asked for it: `data.target`, or the first term
+ * that reads the column. Other errors pass unchanged.
+ */
+function withAsker(error, descriptor) {
+    if (!(error instanceof src_errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+        return error;
+    const column = error.location.key;
+    const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
+    const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
+    if (asker === null)
+        return error;
+    return new src_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
+}
+
+;// CONCATENATED MODULE: ./src/model/evaluate.ts
+/**
+ * One model from descriptor to outcome: load its data, fix the terms, fold the training rows
+ * into the factor, solve, score training and hold-out rows, run every check.
+ */
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/** Error code of a model that failed through a fault in fitgate rather than in its files. */
+const INTERNAL_ERROR = 'internal-error';
+/**
+ * Largest number of design columns. The diagnostics take singular value decompositions of p x p
+ * factors (several per model and fold when the design is rank deficient), whose cost grows with
+ * p^3: at 200 columns each takes about 0.4 s here, so a pull request cannot make a run take hours.
+ */
+const MAX_PARAMETERS = 200;
+/**
+ * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
+ * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
+ */
+const MAX_MAGNITUDE = 1e140;
+/**
+ * Loads, fits and scores one model (no checks).
+ * @throws InputError for bad data, a constant target, or a design over the caps
+ */
+async function fitModel(repo, descriptor, settings) {
+    const inputs = [];
+    for (const t of descriptor.terms)
+        for (const c of (0,basis/* termInputs */.Q)(t))
+            if (!inputs.includes(c))
+                inputs.push(c);
+    const tables = await loadModelData(repo, descriptor, inputs, settings);
+    const { train, holdout } = tables;
+    const file = descriptor.file;
+    // Fix term parameters from the training rows, then check the size before taking memory.
+    const terms = descriptor.terms.map((spec) => (0,basis/* createTerm */.P)(spec, tables.trainColumns, file));
+    const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
+    const p = design.p;
+    if (p > MAX_PARAMETERS) {
+        throw new src_errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
+    }
+    if (train.rows * p > settings.caps.maxCells) {
+        throw new src_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
+    }
+    for (const data of [train, tables.holdout]) {
+        for (let i = 0; i < data.rows; i++) {
+            if (Math.abs(data.y[i]) <= MAX_MAGNITUDE)
+                continue;
+            throw new src_errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+        }
+    }
+    // Big work runs on optimised code (see optimising-compiler.ts); small work finishes sooner without.
+    const sweep = (0,complexity/* sweepTarget */.mb)(descriptor, design);
+    const swept = sweep === null ? null : design.terms[sweep.term]?.spec;
+    const refits = swept?.kind === 'polynomial' ? Math.min(swept.degree, 12) + 3 : swept?.kind === 'rbf' ? 7 : 0;
+    if ((0,optimising_compiler/* estimateWork */.KB)({ rows: train.rows, columns: p, inputs: design.inputs.length, refits }) > optimising_compiler/* SMALL_WORK */.ch)
+        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
+    const targetStats = (0,stats/* meanAndSd */.u)(train.y, train.rows);
+    if (!(targetStats.sd > 0)) {
+        throw new src_errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+    }
+    // One pass over the training rows: each fold's rows into its own factor (the folds are known
+    // before the pass), column spreads alongside. The full factor is the merge of the fold factors.
+    const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const builder = new cross_validation/* FoldFactorBuilder */.UN(p, folds);
+    const spread = new ColumnSpread(p);
+    (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
+        checkFiniteBlock(design, train, descriptor, X, start, m);
+        builder.add(X, train.y, start, m);
+        spread.add(X, m);
+    });
+    const full = (0,cross_validation/* mergeFactors */.Z4)(builder.factors, p);
+    let fit = (0,src_fit/* fitFactor */.Ps)(full, { ridge: descriptor.fit.ridge, penalised: design.penalised });
+    // One step of iterative refinement from a further pass where it converges. It is kept even for
+    // well-conditioned designs: plain QR is accurate to about cond * eps in norm, but small
+    // coefficients then differ in their last 4-5 digits between row orders (fold-factor merges
+    // versus one sequential factor); the refined solution does not depend on the order.
+    if (!fit.rankDeficient && fit.conditionNumberScaled <= src_fit/* REFINE_MAX_CONDITION */.VH) {
+        const pass = new src_fit/* RefinementPass */.rT(fit);
+        (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
+        fit = pass.finish();
+    }
+    // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
+    // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
+    const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? (0,cross_validation/* complementFactors */.Zd)(builder.factors) : [] };
+    let trainPredictions = new Float64Array(train.rows);
+    let crossValidation;
+    try {
+        crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
+    }
+    catch {
+        // The cross-validation check will run it again and report why it could not be computed
+        // (as a check that throws does); the fit itself stands.
+        crossValidation = null;
+        trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
+    }
+    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
+    const trainSums = (0,regression/* emptySums */.y3)();
+    (0,regression/* addErrors */.xB)(trainSums, train.y, trainPredictions, train.rows);
+    const holdoutSums = (0,regression/* emptySums */.y3)();
+    (0,regression/* addErrors */.xB)(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
+    const tr = (0,regression/* errorMeasures */._I)(trainSums);
+    const ho = (0,regression/* errorMeasures */._I)(holdoutSums);
+    // Coefficient sizes.
+    const columnSd = spread.sd();
+    let maxStd = Number.NaN;
+    let maxStdColumn = -1;
+    let maxAbs = 0;
+    for (let j = 0; j < p; j++) {
+        const w = Math.abs(fit.coefficients[j]);
+        if (w > maxAbs || Number.isNaN(w))
+            maxAbs = w;
+        if (!design.penalised[j])
+            continue;
+        const s = (w * columnSd[j]) / targetStats.sd;
+        if (maxStdColumn < 0 || s > maxStd) {
+            maxStd = s;
+            maxStdColumn = j;
+        }
+    }
+    const metrics = {
+        trainRmse: tr.rmse,
+        holdoutRmse: ho.rmse,
+        trainMae: tr.mae,
+        holdoutMae: ho.mae,
+        trainR2: tr.r2,
+        holdoutR2: ho.r2,
+        gapRatio: (0,regression/* gapRatio */.yr)(tr.rmse, ho.rmse),
+        paramsPerSample: p / train.rows,
+        maxStdCoefficient: maxStd,
+        maxStdCoefficientColumn: maxStdColumn,
+        maxAbsCoefficient: maxAbs,
+        columnSd,
+        targetSd: targetStats.sd,
+        targetRange: (0,stats/* range */.y)(train.y, train.rows),
+    };
+    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation, foldFactors };
+}
+/**
+ * InputError `design-overflow` when a block of the training design holds a value that is not a
+ * finite number within ±{@link MAX_MAGNITUDE}: finite data can still overflow in a term (a huge
+ * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
+ */
+function checkFiniteBlock(design, train, descriptor, X, start, m) {
+    for (let j = 0; j < design.p; j++) {
+        const base = j * m;
+        for (let i = 0; i < m; i++) {
+            const v = X[base + i];
+            if (Math.abs(v) <= MAX_MAGNITUDE)
+                continue;
+            let term = 0;
+            while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
+                term += 1;
+            const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
+            throw new src_errors/* InputError */.dz('design-overflow', `design column \`${design.columnNames[j]}\` is ${v} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+        }
+    }
+}
+/** Training and hold-out RMSE of the descriptor's shipped coefficients. */
+function scoreShipped(model) {
+    const { descriptor, design, tables, fit } = model;
+    const shipped = descriptor.coefficients;
+    if (shipped === null)
+        return null;
+    if (shipped.length !== design.p) {
+        throw new src_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+    }
+    const rmse = (data) => {
+        const sums = (0,regression/* emptySums */.y3)();
+        (0,regression/* addErrors */.xB)(sums, data.y, (0,blocks/* predictRows */.tp)(design, data, shipped), data.rows);
+        return (0,regression/* errorMeasures */._I)(sums).rmse;
+    };
+    let diff = 0;
+    for (let j = 0; j < design.p; j++)
+        diff = Math.max(diff, Math.abs(shipped[j] - fit.coefficients[j]));
+    return {
+        train_rmse: (0,result/* jsonNumber */.qj)(rmse(tables.train)),
+        holdout_rmse: (0,result/* jsonNumber */.qj)(rmse(tables.holdout)),
+        max_coefficient_difference: (0,result/* jsonNumber */.qj)(diff),
+    };
+}
+/** Model metrics for the report. */
+function reportMetrics(model) {
+    const { metrics: m, fit, design } = model;
+    return {
+        train_rmse: (0,result/* jsonNumber */.qj)(m.trainRmse),
+        holdout_rmse: (0,result/* jsonNumber */.qj)(m.holdoutRmse),
+        train_mae: (0,result/* jsonNumber */.qj)(m.trainMae),
+        holdout_mae: (0,result/* jsonNumber */.qj)(m.holdoutMae),
+        train_r2: (0,result/* jsonNumber */.qj)(m.trainR2),
+        holdout_r2: (0,result/* jsonNumber */.qj)(m.holdoutR2),
+        gap_ratio: (0,result/* jsonNumber */.qj)(m.gapRatio),
+        params_per_sample: (0,result/* jsonNumber */.qj)(m.paramsPerSample),
+        max_std_coefficient: (0,result/* jsonNumber */.qj)(m.maxStdCoefficient),
+        max_std_coefficient_column: m.maxStdCoefficientColumn >= 0 ? design.columnNames[m.maxStdCoefficientColumn] : null,
+        max_abs_coefficient: (0,result/* jsonNumber */.qj)(m.maxAbsCoefficient),
+        rank: fit.rank,
+        condition_number: (0,result/* jsonNumber */.qj)(fit.conditionNumber),
+        condition_number_scaled: (0,result/* jsonNumber */.qj)(fit.conditionNumberScaled),
+    };
+}
+/**
+ * The outcome of a model that could not be checked. The message starts with the key path
+ * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
+ * does, since the result keeps only the file and line of the location.
+ */
+function errorResult(name, descriptor, error) {
+    const key = error.location.key;
+    return {
+        name,
+        descriptor,
+        verdict: 'error',
+        rows: { train: 0, holdout: 0 },
+        parameters: 0,
+        columns: [],
+        metrics: null,
+        coefficients: [],
+        shipped: null,
+        checks: [],
+        error: {
+            message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
+            file: error.location.file ?? null,
+            line: error.location.line ?? null,
+            code: error.code,
+        },
+    };
+}
+/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
+function relativeChange(head, base) {
+    if (Number.isNaN(head) || Number.isNaN(base))
+        return null;
+    if (base === 0)
+        return head === 0 ? 0 : Infinity;
+    return (head - base) / Math.abs(base);
+}
+/** The `base` field of a model result: `new`, or the base figures and the changes. */
+function compareWithBase(metrics, baseline, commit) {
+    if (baseline === null) {
+        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
+    }
+    const b = baseline.metrics;
+    const headRmse = (0,result/* fromJsonNumber */.M)(metrics.holdout_rmse);
+    const headGap = (0,result/* fromJsonNumber */.M)(metrics.gap_ratio);
+    const baseRmse = b ? (0,result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
+    const baseGap = b ? (0,result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
+    const rmseChange = relativeChange(headRmse, baseRmse);
+    const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
+    return {
+        status: 'compared',
+        commit,
+        holdout_rmse: b ? b.holdout_rmse : null,
+        gap_ratio: b ? b.gap_ratio : null,
+        holdout_rmse_change: rmseChange === null ? null : (0,result/* jsonNumber */.qj)(rmseChange),
+        gap_ratio_change: gapChange === null ? null : (0,result/* jsonNumber */.qj)(gapChange),
+    };
+}
+/**
+ * Fits one model and runs every check on it. Input problems become a model with verdict
+ * `error` (the run goes on); anything else is re-thrown.
+ * @param base outcomes on the base commit to compare with; default none (no `base` field)
+ */
+async function evaluateModel(repo, descriptor, settings, base) {
+    let model;
+    let shipped;
+    try {
+        model = await fitModel(repo, descriptor, settings);
+        shipped = scoreShipped(model);
+    }
+    catch (error) {
+        if (error instanceof src_errors/* InputError */.dz)
+            return errorResult(descriptor.name, descriptor.file, error);
+        // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
+        // that every other model still gets its outcome; the code marks it as a bug to report.
+        const detail = error instanceof Error ? error.message : String(error);
+        return errorResult(descriptor.name, descriptor.file, new src_errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
+    }
+    // The pipeline's own passes already produced what the shared diagnostics would compute.
+    const memo = new Map([
+        [shared/* SHARED_FOLDS_KEY */.Tq, model.folds],
+        [shared/* SHARED_FOLD_FACTORS_KEY */.b9, model.foldFactors],
+    ]);
+    if (model.crossValidation !== null)
+        memo.set(shared/* SHARED_CROSS_VALIDATION_KEY */.X, model.crossValidation);
+    const context = {
+        descriptor,
+        design: model.design,
+        fit: model.fit,
+        metrics: model.metrics,
+        train: model.tables.train,
+        holdout: model.tables.holdout,
+        baseline: base?.models.get(descriptor.name) ?? null,
+        shared(key, compute) {
+            if (!memo.has(key))
+                memo.set(key, compute());
+            return memo.get(key);
+        },
+    };
+    const metrics = reportMetrics(model);
+    const checks = [];
+    let verdict = 'pass';
+    for (const check of src_checks/* CHECKS */.ui) {
+        const { outcome, figures } = (0,src_checks/* runCheck */.k_)(check, context);
+        checks.push(outcome);
+        if (figures)
+            Object.assign(metrics, figures);
+        if (outcome.status === 'fail' || outcome.status === 'warn')
+            verdict = (0,result/* worse */.JJ)(verdict, outcome.status);
+    }
+    return {
+        name: descriptor.name,
+        descriptor: descriptor.file,
+        verdict,
+        rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+        parameters: model.design.p,
+        columns: [...model.design.columnNames],
+        metrics,
+        coefficients: Array.from(model.fit.coefficients, result/* jsonNumber */.qj),
+        shipped,
+        checks,
+        ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
+        error: null,
+        extra: {
+            rank_deficient: model.fit.rankDeficient,
+            terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
+        },
+        charts: buildChartData(model, checks),
+    };
+}
+
+;// CONCATENATED MODULE: external "node:url"
+const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
+// EXTERNAL MODULE: external "node:worker_threads"
+var external_node_worker_threads_ = __nccwpck_require__(5919);
+// EXTERNAL MODULE: ./src/repo/fs-repository.ts + 6 modules
+var fs_repository = __nccwpck_require__(4164);
+// EXTERNAL MODULE: ./src/parallel/pool.ts + 1 modules
+var pool = __nccwpck_require__(7262);
+// EXTERNAL MODULE: ./src/parallel/worker-role.ts
+var worker_role = __nccwpck_require__(9506);
+;// CONCATENATED MODULE: ./src/parallel/model-worker.ts
+/**
+ * Models on worker threads: the main thread sends each model's descriptor (with the settings
+ * file and, when comparing with a base commit, that model's base outcome) as plain data; a
+ * worker reads the model's files from the same repository root, fits it, runs its checks and
+ * sends the ModelResult back. Results come back in descriptor order, identical to a serial run.
+ *
+ * The worker runs this very module's file. The CLI is bundled into one file, so there the
+ * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
+ * (it asks isFitgateWorker() of worker-role.ts first), and this module's top level starts the worker loop.
+ * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
+ * worker threads cannot load it and models run serially.
+ */
+
+
+
+
+
+
+/** True in a model worker thread started by {@link evaluateModels}. */
+function isModelWorker() {
+    return (0,worker_role/* workerRole */.ru)() === 'model';
+}
+/**
+ * The file a worker should run: this module's own file, or null when it is not plain JavaScript
+ * (then worker threads cannot load it and models run serially).
+ */
+function workerScript() {
+    const url = import.meta.url;
+    if (!url.startsWith('file:') || !/\.(m?js|cjs)$/.test(url))
+        return null;
+    return (0,external_node_url_namespaceObject.fileURLToPath)(url);
+}
+/**
+ * Evaluates models, on worker threads when that is possible and worth it (more than one model,
+ * `jobs` > 1, a disk root, and a JavaScript module file), serially otherwise.
+ * @param repo the repository reader (used by the serial path)
+ * @param descriptors the models, in report order
+ * @param settings the settings file
+ * @param options workers and base comparison; default serial, no comparison
+ * @returns one ModelResult per descriptor, in the same order
+ */
+async function evaluateModels(repo, descriptors, settings, options = {}) {
+    const jobs = Math.min(options.jobs ?? 1, descriptors.length);
+    const script = workerScript();
+    if (jobs <= 1 || options.root === undefined || script === null) {
+        const results = [];
+        for (const descriptor of descriptors)
+            results.push(await evaluateModel(repo, descriptor, settings, options.base));
+        return results;
+    }
+    const base = options.base;
+    const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor });
+    const data = { [worker_role/* WORKER_FLAG */.oy]: true, root: options.root, settings };
+    return (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data });
+}
+/** The worker loop: evaluate each model task sent by the pool. */
+function startModelWorker() {
+    const data = external_node_worker_threads_.workerData;
+    const repo = (0,fs_repository/* createFsRepository */.E)(data.root);
+    (0,pool/* serveTasks */.aJ)((task) => {
+        const base = task.baseline === undefined
+            ? undefined
+            : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
+        return evaluateModel(repo, task.descriptor, data.settings, base);
+    });
+}
+if (isModelWorker())
+    startModelWorker();
+
 // EXTERNAL MODULE: ./src/shard.ts
 var src_shard = __nccwpck_require__(7903);
 // EXTERNAL MODULE: ./src/version.ts
@@ -11901,7 +11958,7 @@ async function runPipeline(settings, repo, options = {}) {
         catch (error) {
             if (!(error instanceof src_errors/* InputError */.dz))
                 throw error;
-            models.push((0,evaluate/* errorResult */.WG)(path, path, error));
+            models.push(errorResult(path, path, error));
         }
     }
     checkUniqueNames(loaded);
@@ -11909,7 +11966,7 @@ async function runPipeline(settings, repo, options = {}) {
     if (loaded.length > 1)
         (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
     const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
-    models.push(...(await (0,model_worker/* evaluateModels */.eq)(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
+    models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
     const notes = [...(options.notes ?? [])];
     if (shard)
         notes.push(`shard ${(0,src_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);

@@ -2,7 +2,7 @@
  * `leakage`: hold-out rows that repeat a training row.
  */
 import type { Check } from './types.js';
-import { findLeakage } from '../diagnostics/leakage.js';
+import { sharedLeakage } from '../diagnostics/shared.js';
 
 const check: Check = {
   id: 'leakage',
@@ -12,11 +12,12 @@ const check: Check = {
     "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
   advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
   line: (d) => d.data.lines.holdout,
-  measure({ train, holdout, design }) {
+  measure(context) {
+    const { holdout, train, design } = context;
     if (design.inputs.length === 0) {
       return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
     }
-    const leak = findLeakage(train, holdout);
+    const leak = sharedLeakage(context);
     const metrics = { leaked_rows: leak.fullMatches, holdout_rows_in_training: leak.inputMatches };
     const detail = {
       columns: [...design.inputs],

@@ -4,6 +4,7 @@
 import type { CheckContext } from '../checks/types.js';
 import { complementFactors, crossValidate, foldFactors, type CrossValidation, type FoldFactors } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
+import { findLeakage, type Leakage } from './leakage.js';
 import { measureSwing, type Swing } from './swing.js';
 
 /** Memo key of {@link sharedFolds} (the pipeline fills it from its own pass). */
@@ -38,7 +39,17 @@ export function sharedCrossValidation(context: CheckContext): CrossValidation {
   });
 }
 
+/** Memo key of {@link sharedSwing} (a helper thread may fill it). */
+export const SHARED_SWING_KEY = 'diagnostics/swing';
+/** Memo key of {@link sharedLeakage} (a helper thread may fill it). */
+export const SHARED_LEAKAGE_KEY = 'diagnostics/leakage';
+
 /** Swing between and beyond samples of the refit (see {@link measureSwing}). */
 export function sharedSwing(context: CheckContext): Swing {
-  return context.shared('diagnostics/swing', () => measureSwing(context.design, context.train, context.fit.coefficients));
+  return context.shared(SHARED_SWING_KEY, () => measureSwing(context.design, context.train, context.fit.coefficients));
+}
+
+/** Hold-out rows that repeat a training row (see {@link findLeakage}). */
+export function sharedLeakage(context: CheckContext): Leakage {
+  return context.shared(SHARED_LEAKAGE_KEY, () => findLeakage(context.train, context.holdout));
 }

@@ -351,107 +351,63 @@ function largestExcursion(pred: Float64Array, m: number, lo: number, hi: number)
   return { value, index };
 }
 
+/** One input's scan: its grid inside the training range and in the margins. */
+export interface SwingGrid {
+  /** Index of the input in `design.inputs`. */
+  input: number;
+  /** Points inside the range and in the margins, each ascending. */
+  inside: Float64Array;
+  beyond: Float64Array;
+}
+
 /**
- * Measures swing between and beyond samples for a fitted model.
+ * Everything the swing scan needs that does not depend on the coefficients: the target band, the
+ * input medians, each input's grid and the neighbour segments. Plain data (typed arrays, numbers),
+ * so it can be built on another thread while the model is fitted.
+ */
+export interface SwingPlan {
+  band: [number, number];
+  medians: number[];
+  grids: SwingGrid[];
+  /** Points on the neighbour segments, one column per input (several inputs only). */
+  segmentColumns: Float64Array[] | null;
+  segments: Swing['segments'];
+  margin: number;
+  maxCurvePoints: number;
+}
+
+/**
+ * The coefficient-independent part of {@link measureSwing}: band, medians, grids and segments.
  *
- * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
- * same grid along each input with the other inputs at their training medians, and (b) points on
- * the segments between each of up to `maxRows` sampled training rows (an even stride through the
- * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
- * standard deviations). Margins are along each input. The figure is {@link excursion} against the
- * band of training targets.
- *
- * @param design the fitted design
+ * @param design the model's design (only its inputs are read)
  * @param train training rows (inputs in `design.inputs` order)
- * @param coefficients fitted coefficients (length p)
  * @param options grid sizes (see {@link SwingOptions})
  */
-export function measureSwing(design: Design, train: Rows, coefficients: ArrayLike<number>, options: SwingOptions = {}): Swing {
+export function planSwing(design: Design, train: Rows, options: SwingOptions = {}): SwingPlan {
   const n = train.rows;
   const d = design.inputs.length;
-  const margin = options.margin ?? 0.1;
-  const maxCurvePoints = options.maxCurvePoints ?? 400;
   let ylo = Infinity;
   let yhi = -Infinity;
   for (let i = 0; i < n; i++) {
     if (train.y[i] < ylo) ylo = train.y[i];
     if (train.y[i] > yhi) yhi = train.y[i];
   }
-  const band: [number, number] = [ylo, yhi];
-  const predictAt = (columns: Float64Array[], m: number): Float64Array => predictRows(design, { inputs: columns, rows: m }, coefficients);
   // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
   const scratch = new Float64Array(n);
   const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
   const radixScratch = new Uint32Array(2 * n);
-
-  let inside = 0;
-  let beyond = 0;
-  let insideCount = 0;
-  let beyondCount = 0;
-  let worstInside: SwingPoint | null = null;
-  let worstBeyond: SwingPoint | null = null;
-  const pointAt = (columns: Float64Array[], i: number, prediction: number): SwingPoint => {
-    const inputs: Record<string, number> = {};
-    design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
-    return { inputs, prediction };
-  };
-  /** Scores points (predicted here unless their predictions are given); returns the predictions. */
-  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
-    const pred = given ?? predictAt(columns, m);
-    if (m > 0) {
-      const { value, index } = largestExcursion(pred, m, ylo, yhi);
-      if (where === 'inside') {
-        if (worstInside === null || value > inside) {
-          inside = Math.max(inside, value);
-          worstInside = pointAt(columns, index, pred[index]);
-        }
-      } else if (worstBeyond === null || value > beyond) {
-        beyond = Math.max(beyond, value);
-        worstBeyond = pointAt(columns, index, pred[index]);
-      }
-    }
-    if (where === 'inside') insideCount += m;
-    else beyondCount += m;
-    return pred;
-  };
-
-  // Along each input, the others at their medians (one reused column of each median).
-  const constants: Float64Array[] = medians.map(() => new Float64Array(0));
-  const constant = (k: number, length: number): Float64Array => {
-    if (constants[k].length < length) constants[k] = new Float64Array(length).fill(medians[k]);
-    return constants[k].subarray(0, length);
-  };
-  const curves: SwingCurve[] = [];
+  const grids: SwingGrid[] = [];
   const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
   for (let c = 0; c < d; c++) {
     const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
     const sample = scratch.subarray(0, len);
     const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
-    if (grid.inside.length === 0) continue;
-    const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
-    const predict = predictorAlong(design, coefficients, c, medians);
-    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
-    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
-    // Curve for charts: all points ascending, thinned with the extremes kept.
-    const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
-    const m = xs.length;
-    const [imin, imax] = extremeIndices(ps);
-    const keep = thinIndices(m, maxCurvePoints, [imax, imin]);
-    const others: Record<string, number> = {};
-    design.inputs.forEach((name, k) => {
-      if (k !== c) others[name] = medians[k];
-    });
-    curves.push({
-      input: design.inputs[c],
-      others,
-      range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-      x: keep.map((i) => xs[i]),
-      prediction: keep.map((i) => ps[i]),
-    });
+    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: grid.beyond });
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
   let segments: Swing['segments'] = null;
+  let segmentColumns: Float64Array[] | null = null;
   if (d >= 2 && n >= 2) {
     const maxRows = options.maxRows ?? 1000;
     const kNear = options.neighbours ?? 3;
@@ -483,21 +439,115 @@ export function measureSwing(design: Design, train: Rows, coefficients: ArrayLik
           for (let c = 0; c < d; c++) columns[c][q * perSegment + t - 1] = train.inputs[c][ra] + f * (train.inputs[c][rb] - train.inputs[c][ra]);
         }
       }
-      score(columns, m, 'inside');
+      segmentColumns = columns;
     }
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
+  return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+}
+
+/**
+ * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
+ *
+ * @param plan from {@link planSwing} on the same design and rows
+ * @param design the fitted design
+ * @param coefficients fitted coefficients (length p)
+ */
+export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayLike<number>): Swing {
+  const [ylo, yhi] = plan.band;
+  const { medians, maxCurvePoints } = plan;
+  let inside = 0;
+  let beyond = 0;
+  let insideCount = 0;
+  let beyondCount = 0;
+  let worstInside: SwingPoint | null = null;
+  let worstBeyond: SwingPoint | null = null;
+  const pointAt = (columns: Float64Array[], i: number, prediction: number): SwingPoint => {
+    const inputs: Record<string, number> = {};
+    design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
+    return { inputs, prediction };
+  };
+  /** Scores points (predicted here unless their predictions are given); returns the predictions. */
+  const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
+    const pred = given ?? predictRows(design, { inputs: columns, rows: m }, coefficients);
+    if (m > 0) {
+      const { value, index } = largestExcursion(pred, m, ylo, yhi);
+      if (where === 'inside') {
+        if (worstInside === null || value > inside) {
+          inside = Math.max(inside, value);
+          worstInside = pointAt(columns, index, pred[index]);
+        }
+      } else if (worstBeyond === null || value > beyond) {
+        beyond = Math.max(beyond, value);
+        worstBeyond = pointAt(columns, index, pred[index]);
+      }
+    }
+    if (where === 'inside') insideCount += m;
+    else beyondCount += m;
+    return pred;
+  };
+
+  // Along each input, the others at their medians (one reused column of each median).
+  const constants: Float64Array[] = medians.map(() => new Float64Array(0));
+  const constant = (k: number, length: number): Float64Array => {
+    if (constants[k].length < length) constants[k] = new Float64Array(length).fill(medians[k]);
+    return constants[k].subarray(0, length);
+  };
+  const curves: SwingCurve[] = [];
+  for (const grid of plan.grids) {
+    const c = grid.input;
+    const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
+    const predict = predictorAlong(design, coefficients, c, medians);
+    const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
+    const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+    // Curve for charts: all points ascending, thinned with the extremes kept.
+    const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
+    const [imin, imax] = extremeIndices(ps);
+    const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
+    const others: Record<string, number> = {};
+    design.inputs.forEach((name, k) => {
+      if (k !== c) others[name] = medians[k];
+    });
+    curves.push({
+      input: design.inputs[c],
+      others,
+      range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+      x: keep.map((i) => xs[i]),
+      prediction: keep.map((i) => ps[i]),
+    });
+  }
+  if (plan.segmentColumns !== null) score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
 
   const valid = ylo < yhi;
   return {
     inside: valid && insideCount > 0 ? inside : Number.NaN,
     beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
-    band,
+    band: [ylo, yhi],
     points: { inside: insideCount, beyond: beyondCount },
     worstInside,
     worstBeyond,
     curves,
-    segments,
-    margin,
+    segments: plan.segments,
+    margin: plan.margin,
   };
+}
+
+/**
+ * Measures swing between and beyond samples for a fitted model: {@link planSwing}, then
+ * {@link scoreSwing}.
+ *
+ * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
+ * same grid along each input with the other inputs at their training medians, and (b) points on
+ * the segments between each of up to `maxRows` sampled training rows (an even stride through the
+ * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
+ * standard deviations). Margins are along each input. The figure is {@link excursion} against the
+ * band of training targets.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param options grid sizes (see {@link SwingOptions})
+ */
+export function measureSwing(design: Design, train: Rows, coefficients: ArrayLike<number>, options: SwingOptions = {}): Swing {
+  return scoreSwing(planSwing(design, train, options), design, coefficients);
 }

@@ -158,151 +158,170 @@ export class QrAccumulator {
       this.#work = new Float64Array(ld * p);
       this.#workY = new Float64Array(ld);
     }
-    const C = this.#work;
-    const yc = this.#workY;
-
-    // Copy and check the block.
-    for (let j = 0; j < p; j++) {
-      const src = j * ldx + start;
-      const dst = j * ld;
-      for (let i = 0; i < mb; i++) {
-        const v = X[src + i];
-        if (!Number.isFinite(v)) {
-          throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
-        }
-        C[dst + i] = v;
-      }
-    }
-    for (let i = 0; i < mb; i++) {
-      const v = y[start + i];
-      if (!Number.isFinite(v)) {
-        throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
-      }
-      yc[i] = v;
-    }
-
-    const R = this.#R;
-    const qty = this.#qty;
-    for (let j = 0; j < p; j++) {
-      // Reflector for column j of [R; C]: a = [R[j,j]; C[0..mb, j]].
-      const cj = j * ld;
-      const alpha = R[j * p + j];
-      let amax = Math.abs(alpha);
-      for (let i = 0; i < mb; i++) {
-        const a = Math.abs(C[cj + i]);
-        if (a > amax) amax = a;
-      }
-      if (amax === 0) continue;
-      let sigma = 0; // sum of squares of the block part
-      let norm: number;
-      if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
-        for (let i = 0; i < mb; i++) {
-          const c = C[cj + i];
-          sigma += c * c;
-        }
-        if (sigma === 0) continue; // nothing to annihilate
-        norm = Math.sqrt(alpha * alpha + sigma);
-      } else {
-        let scaled = 0;
-        for (let i = 0; i < mb; i++) {
-          const c = C[cj + i] / amax;
-          scaled += c * c;
-        }
-        if (scaled === 0) continue;
-        const a0 = alpha / amax;
-        norm = amax * Math.sqrt(a0 * a0 + scaled);
-      }
-      // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
-      // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
-      // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
-      const beta = alpha >= 0 ? -norm : norm;
-      const v0 = alpha - beta;
-      const tau = (beta - alpha) / beta;
-      for (let i = 0; i < mb; i++) C[cj + i] /= v0;
-      let k = j + 1;
-      // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
-      // operations and their order are those of the single-column loop below).
-      for (; k + 3 < p; k += 4) {
-        const c1 = k * ld;
-        const c2 = c1 + ld;
-        const c3 = c2 + ld;
-        const c4 = c3 + ld;
-        const r1 = k * p + j;
-        let w1 = R[r1];
-        let w2 = R[r1 + p];
-        let w3 = R[r1 + 2 * p];
-        let w4 = R[r1 + 3 * p];
-        for (let i = 0; i < mb; i++) {
-          const u = C[cj + i];
-          w1 += u * C[c1 + i];
-          w2 += u * C[c2 + i];
-          w3 += u * C[c3 + i];
-          w4 += u * C[c4 + i];
-        }
-        const f1 = tau * w1;
-        const f2 = tau * w2;
-        const f3 = tau * w3;
-        const f4 = tau * w4;
-        if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0) continue;
-        R[r1] -= f1;
-        R[r1 + p] -= f2;
-        R[r1 + 2 * p] -= f3;
-        R[r1 + 3 * p] -= f4;
-        for (let i = 0; i < mb; i++) {
-          const u = C[cj + i];
-          C[c1 + i] -= f1 * u;
-          C[c2 + i] -= f2 * u;
-          C[c3 + i] -= f3 * u;
-          C[c4 + i] -= f4 * u;
-        }
-      }
-      for (; k + 1 < p; k += 2) {
-        const ck = k * ld;
-        const ck2 = ck + ld;
-        const rIdx = k * p + j;
-        const rIdx2 = rIdx + p;
-        let w1 = R[rIdx];
-        let w2 = R[rIdx2];
-        for (let i = 0; i < mb; i++) {
-          const u = C[cj + i];
-          w1 += u * C[ck + i];
-          w2 += u * C[ck2 + i];
-        }
-        const f1 = tau * w1;
-        const f2 = tau * w2;
-        if (f1 === 0 && f2 === 0) continue;
-        R[rIdx] -= f1;
-        R[rIdx2] -= f2;
-        for (let i = 0; i < mb; i++) {
-          const u = C[cj + i];
-          C[ck + i] -= f1 * u;
-          C[ck2 + i] -= f2 * u;
-        }
-      }
-      for (; k < p; k++) {
-        const ck = k * ld;
-        const rIdx = k * p + j;
-        let w = R[rIdx];
-        for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
-        const f = tau * w;
-        if (f === 0) continue;
-        R[rIdx] -= f;
-        for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
-      }
-      {
-        let w = qty[j];
-        for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
-        const f = tau * w;
-        if (f !== 0) {
-          qty[j] -= f;
-          for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];
-        }
-      }
-      R[j * p + j] = beta;
-    }
+    copyChecked(X, ldx, y, start, mb, p, this.#work, this.#workY, ld);
+    annihilate(this.#R, this.#qty, this.#work, this.#workY, ld, p, mb);
     // What is left of the block's right-hand side is orthogonal to the column space.
-    let rest = 0;
-    for (let i = 0; i < mb; i++) rest += yc[i] * yc[i];
-    this.#rss += rest;
+    this.#rss += sumOfSquares(this.#workY, mb);
+  }
+}
+
+// The kernels below are separate functions, each one loop nest, so that V8 optimises each
+// whole (a loop that first runs after another loop was optimised mid-function has no type
+// feedback and throws the optimised code away, block after block).
+
+/**
+ * Copies rows [start, start + mb) of the column-major X (leading dimension ldx) and of y into C
+ * (leading dimension ld) and yc.
+ * @throws RangeError naming row and column when a value is NaN or infinite
+ */
+function copyChecked(X: Float64Array, ldx: number, y: Float64Array, start: number, mb: number, p: number, C: Float64Array, yc: Float64Array, ld: number): void {
+  for (let j = 0; j < p; j++) {
+    const src = j * ldx + start;
+    const dst = j * ld;
+    for (let i = 0; i < mb; i++) {
+      const v = X[src + i];
+      if (!Number.isFinite(v)) {
+        throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
+      }
+      C[dst + i] = v;
+    }
+  }
+  for (let i = 0; i < mb; i++) {
+    const v = y[start + i];
+    if (!Number.isFinite(v)) {
+      throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
+    }
+    yc[i] = v;
+  }
+}
+
+/** Sum of squares of v[0..m). */
+function sumOfSquares(v: Float64Array, m: number): number {
+  let s = 0;
+  for (let i = 0; i < m; i++) s += v[i] * v[i];
+  return s;
+}
+
+/**
+ * Householder reflections that zero the mb x p block C (leading dimension ld) against the
+ * triangular R (p x p, column-major), applied to qty and yc alike.
+ */
+function annihilate(R: Float64Array, qty: Float64Array, C: Float64Array, yc: Float64Array, ld: number, p: number, mb: number): void {
+  for (let j = 0; j < p; j++) {
+    // Reflector for column j of [R; C]: a = [R[j,j]; C[0..mb, j]].
+    const cj = j * ld;
+    const alpha = R[j * p + j];
+    let amax = Math.abs(alpha);
+    for (let i = 0; i < mb; i++) {
+      const a = Math.abs(C[cj + i]);
+      if (a > amax) amax = a;
+    }
+    if (amax === 0) continue;
+    let sigma = 0; // sum of squares of the block part
+    let norm: number;
+    if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
+      for (let i = 0; i < mb; i++) {
+        const c = C[cj + i];
+        sigma += c * c;
+      }
+      if (sigma === 0) continue; // nothing to annihilate
+      norm = Math.sqrt(alpha * alpha + sigma);
+    } else {
+      let scaled = 0;
+      for (let i = 0; i < mb; i++) {
+        const c = C[cj + i] / amax;
+        scaled += c * c;
+      }
+      if (scaled === 0) continue;
+      const a0 = alpha / amax;
+      norm = amax * Math.sqrt(a0 * a0 + scaled);
+    }
+    // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
+    // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
+    // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
+    const beta = alpha >= 0 ? -norm : norm;
+    const v0 = alpha - beta;
+    const tau = (beta - alpha) / beta;
+    for (let i = 0; i < mb; i++) C[cj + i] /= v0;
+    let k = j + 1;
+    // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
+    // operations and their order are those of the single-column loop below).
+    for (; k + 3 < p; k += 4) {
+      const c1 = k * ld;
+      const c2 = c1 + ld;
+      const c3 = c2 + ld;
+      const c4 = c3 + ld;
+      const r1 = k * p + j;
+      let w1 = R[r1];
+      let w2 = R[r1 + p];
+      let w3 = R[r1 + 2 * p];
+      let w4 = R[r1 + 3 * p];
+      for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        w1 += u * C[c1 + i];
+        w2 += u * C[c2 + i];
+        w3 += u * C[c3 + i];
+        w4 += u * C[c4 + i];
+      }
+      const f1 = tau * w1;
+      const f2 = tau * w2;
+      const f3 = tau * w3;
+      const f4 = tau * w4;
+      if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0) continue;
+      R[r1] -= f1;
+      R[r1 + p] -= f2;
+      R[r1 + 2 * p] -= f3;
+      R[r1 + 3 * p] -= f4;
+      for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        C[c1 + i] -= f1 * u;
+        C[c2 + i] -= f2 * u;
+        C[c3 + i] -= f3 * u;
+        C[c4 + i] -= f4 * u;
+      }
+    }
+    for (; k + 1 < p; k += 2) {
+      const ck = k * ld;
+      const ck2 = ck + ld;
+      const rIdx = k * p + j;
+      const rIdx2 = rIdx + p;
+      let w1 = R[rIdx];
+      let w2 = R[rIdx2];
+      for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        w1 += u * C[ck + i];
+        w2 += u * C[ck2 + i];
+      }
+      const f1 = tau * w1;
+      const f2 = tau * w2;
+      if (f1 === 0 && f2 === 0) continue;
+      R[rIdx] -= f1;
+      R[rIdx2] -= f2;
+      for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        C[ck + i] -= f1 * u;
+        C[ck2 + i] -= f2 * u;
+      }
+    }
+    for (; k < p; k++) {
+      const ck = k * ld;
+      const rIdx = k * p + j;
+      let w = R[rIdx];
+      for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
+      const f = tau * w;
+      if (f === 0) continue;
+      R[rIdx] -= f;
+      for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
+    }
+    {
+      let w = qty[j];
+      for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
+      const f = tau * w;
+      if (f !== 0) {
+        qty[j] -= f;
+        for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];
+      }
+    }
+    R[j * p + j] = beta;
   }
 }

@@ -17,6 +17,22 @@ export interface ModelTables {
 }
 
 /**
+ * Bytes of a model's training and hold-out files together (a file that cannot be read counts 0:
+ * reading it reports the problem with its location).
+ */
+export async function dataBytes(repo: RepoReader, descriptor: Descriptor): Promise<number> {
+  let bytes = 0;
+  for (const path of [descriptor.data.train, descriptor.data.holdout]) {
+    try {
+      bytes += await repo.size(path);
+    } catch {
+      // reported by readTable
+    }
+  }
+  return bytes;
+}
+
+/**
  * Reads the input columns (in `inputs` order) and the target of both files.
  * @throws InputError `target-as-input` when a term reads the target column,
  *   `no-rows` when either file has no data rows
@@ -38,15 +54,7 @@ export async function loadModelData(
   const columns = [...inputs, data.target];
   const maxBytes = settings.caps.maxFileBytes;
   // Reading big files is big work: let the optimising compiler in before the first byte.
-  let bytes = 0;
-  for (const path of [data.train, data.holdout]) {
-    try {
-      bytes += await repo.size(path);
-    } catch {
-      // readTable reports a file that cannot be read, with its location.
-    }
-  }
-  if (bytes > SMALL_DATA_BYTES) allowOptimisingCompiler();
+  if ((await dataBytes(repo, descriptor)) > SMALL_DATA_BYTES) allowOptimisingCompiler();
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table;
     try {

@@ -6,21 +6,20 @@
  *
  * The worker runs this very module's file. The CLI is bundled into one file, so there the
  * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
- * (it asks {@link isModelWorker} first), and this module's top level starts the worker loop.
+ * (it asks isFitgateWorker() of worker-role.ts first), and this module's top level starts the worker loop.
  * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
  * worker threads cannot load it and models run serially.
  */
 import { fileURLToPath } from 'node:url';
-import { isMainThread, workerData } from 'node:worker_threads';
+import { workerData } from 'node:worker_threads';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { evaluateModel, type BaseInput } from '../model/evaluate.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
 import type { ModelResult } from '../result.js';
 import { runPool, serveTasks } from './pool.js';
+import { WORKER_FLAG, workerRole } from './worker-role.js';
 
-/** The `workerData` key that marks a model worker. */
-export const WORKER_FLAG = 'fitgateWorker';
 
 /** What every model worker receives as `workerData`. */
 interface ModelWorkerData {
@@ -38,9 +37,9 @@ interface ModelTask {
   commit?: string;
 }
 
-/** True in a worker thread started by {@link evaluateModels} (entry files use it to stand aside). */
+/** True in a model worker thread started by {@link evaluateModels}. */
 export function isModelWorker(): boolean {
-  return !isMainThread && typeof workerData === 'object' && workerData !== null && (workerData as Record<string, unknown>)[WORKER_FLAG] === true;
+  return workerRole() === 'model';
 }
 
 /**
