@@ -3053,8 +3053,8 @@ const parameter_ratio_check = {
 };
 /* harmony default export */ const parameter_ratio = (parameter_ratio_check);
 
-// EXTERNAL MODULE: ./src/diagnostics/complexity.ts
-var complexity = __nccwpck_require__(2210);
+// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
+var complexity = __nccwpck_require__(7070);
 ;// CONCATENATED MODULE: ./src/diagnostics/json.ts
 /**
  * Makes diagnostic figures safe for the JSON report: non-finite numbers become the strings of
@@ -4204,24 +4204,115 @@ function selectKth(a, k) {
 
 /***/ }),
 
-/***/ 2210:
+/***/ 7070:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   j6: () => (/* binding */ sweepComplexity),
-/* harmony export */   mb: () => (/* binding */ sweepTarget)
-/* harmony export */ });
-/* unused harmony exports oneStandardErrorRule, SWEEP_MAX_ROWS */
-/* harmony import */ var _basis_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2578);
-/* harmony import */ var _design_matrix_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1927);
-/* harmony import */ var _cross_validation_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7114);
-/* harmony import */ var _folds_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(7694);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  j6: () => (/* binding */ sweepComplexity),
+  mb: () => (/* binding */ sweepTarget)
+});
+
+// UNUSED EXPORTS: SWEEP_MAX_ROWS, oneStandardErrorRule
+
+// EXTERNAL MODULE: ./src/basis/index.ts + 3 modules
+var basis = __nccwpck_require__(2578);
+// EXTERNAL MODULE: ./src/design-matrix.ts
+var design_matrix = __nccwpck_require__(1927);
+// EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
+var fit = __nccwpck_require__(2485);
+// EXTERNAL MODULE: ./src/fit/svd.ts
+var svd = __nccwpck_require__(5936);
+;// CONCATENATED MODULE: ./src/fit/ridge-path.ts
+
+/**
+ * Coefficients of every penalty, or null when the penalised columns are not all columns or all
+ * but the first, when r00 is 0, or when a penalty is not positive (the caller then solves each
+ * penalty on its own).
+ *
+ * @param data factor of the data rows (not modified)
+ * @param lambdas penalties, each > 0
+ * @param penalised which columns are penalised (length p)
+ * @returns one length-p coefficient array per penalty, in order
+ */
+function ridgePath(data, lambdas, penalised) {
+    const p = data.p;
+    if (p === 0 || penalised.length !== p || !lambdas.every((l) => l > 0 && Number.isFinite(l)))
+        return null;
+    let free = 0;
+    while (free < p && !penalised[free])
+        free++;
+    for (let j = free; j < p; j++)
+        if (!penalised[j])
+            return null;
+    if (free > 1)
+        return null;
+    const R = data.R;
+    const q = data.qty;
+    if (free === 1 && !(R[0] !== 0))
+        return null;
+    // The penalised block R2 (k x k) and its right-hand side q2.
+    const k = p - free;
+    if (k === 0)
+        return null;
+    const out = lambdas.map(() => new Float64Array(p));
+    const R2 = new Float64Array(k * k);
+    for (let c = 0; c < k; c++)
+        for (let r = 0; r <= c; r++)
+            R2[c * k + r] = R[(c + free) * p + (r + free)];
+    let decomposition;
+    try {
+        decomposition = (0,svd/* svd */.C)(R2, k, k, 'both');
+    }
+    catch {
+        return null;
+    }
+    const { s, U, V } = decomposition;
+    // U^T q2 once.
+    const uq = new Float64Array(k);
+    for (let c = 0; c < k; c++) {
+        let t = 0;
+        for (let r = 0; r < k; r++)
+            t += U[c * k + r] * q[r + free];
+        uq[c] = t;
+    }
+    const coef = new Float64Array(k);
+    lambdas.forEach((lambda, index) => {
+        for (let c = 0; c < k; c++)
+            coef[c] = (s[c] / (s[c] * s[c] + lambda)) * uq[c];
+        const w = out[index];
+        for (let r = 0; r < k; r++) {
+            let t = 0;
+            for (let c = 0; c < k; c++)
+                t += V[c * k + r] * coef[c];
+            w[r + free] = t;
+        }
+        if (free === 1) {
+            let t = q[0];
+            for (let j = 1; j < p; j++)
+                t -= R[j * p] * w[j];
+            w[0] = t / R[0];
+        }
+    });
+    if (out.some((w) => w.some((v) => !Number.isFinite(v))))
+        return null;
+    return out;
+}
+
+// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
+var cross_validation = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
+var diagnostics_folds = __nccwpck_require__(7694);
+;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
 /**
  * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
  * on the same folds, and pick the simplest setting whose error is within one standard error of
  * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
  * section 7.10, the "one-standard-error" rule).
  */
+
+
 
 
 
@@ -4298,13 +4389,31 @@ function subsample(data, m) {
     return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
 }
 /**
+ * coefficients[s][f]: the fit without fold f under penalty s. One SVD per fold serves every
+ * positive penalty ({@link ridgePath}); a penalty of 0, or a factor the path does not take, is
+ * solved on its own.
+ */
+function sweepCoefficients(complements, lambdas, penalised) {
+    const coefficients = lambdas.map(() => new Array(complements.length));
+    const positive = lambdas.filter((l) => l > 0);
+    complements.forEach((acc, f) => {
+        const path = ridgePath(acc, positive, penalised);
+        let next = 0;
+        lambdas.forEach((lambda, s) => {
+            coefficients[s][f] = path !== null && lambda > 0 ? path[next++] : (0,fit/* solveCoefficients */.gQ)(acc, { ridge: lambda, penalised });
+        });
+    });
+    return coefficients;
+}
+/**
  * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
  * k-fold errors (the same folds for every setting).
  *
  * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
  *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
  *   current lambda; simplest = largest. The design does not change, so the model's per-fold
- *   factors serve every lambda: k small solves per lambda, and each fold's squared errors come
+ *   factors serve every lambda: one SVD per fold complement gives every lambda's coefficients
+ *   ({@link ridgePath}), and each fold's squared errors come
  *   from its own factor ({@link outOfFoldErrorsFromFactors}), with no pass over the rows. Every
  *   row is used (no subsample).
  * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
@@ -4327,13 +4436,13 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
     // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
     const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
     const rows = subsampled ? subsample(train, maxRows) : train;
-    const folds = (0,_folds_js__WEBPACK_IMPORTED_MODULE_2__/* .assignFolds */ .o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
     const ridge = descriptor.fit.ridge;
     const curve = [];
     const pointFrom = (setting, label, parameters, sse, current) => {
-        const s = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .summariseFolds */ .$l)(sse, folds.sizes);
+        const s = (0,cross_validation/* summariseFolds */.$l)(sse, folds.sizes);
         return { setting, label, parameters, cvRmse: s.cvRmse, meanMse: s.meanMse, seMse: s.seMse, current };
     };
     if (target.kind === 'ridge') {
@@ -4354,11 +4463,11 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
             factors = options.factors();
         }
         else {
-            const perFold = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .foldFactors */ .Y6)(design, rows, folds);
-            factors = { perFold, complements: (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .complementFactors */ .Zd)(perFold) };
+            const perFold = (0,cross_validation/* foldFactors */.Y6)(design, rows, folds);
+            factors = { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
         }
-        const coefficients = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .complementCoefficients */ .dn)(factors.complements, lambdas, design.penalised);
-        const { sse } = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .outOfFoldErrorsFromFactors */ .un)(factors.perFold, coefficients);
+        const coefficients = sweepCoefficients(factors.complements, lambdas, design.penalised);
+        const { sse } = (0,cross_validation/* outOfFoldErrorsFromFactors */.un)(factors.perFold, coefficients);
         lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
     }
     else {
@@ -4378,13 +4487,13 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         }
         for (const { value, current } of settings) {
             const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
-            const terms = design.terms.map((t, i) => (i === target.term ? (0,_basis_index_js__WEBPACK_IMPORTED_MODULE_0__/* .createTerm */ .P)(changed, trainColumns, descriptor.file) : t));
-            const d = (0,_design_matrix_js__WEBPACK_IMPORTED_MODULE_3__/* .createDesign */ .x)(terms, design.intercept);
+            const terms = design.terms.map((t, i) => (i === target.term ? (0,basis/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
+            const d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
             const label = `${target.kind} ${formatSetting(value)}`;
             try {
-                const factors = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .complementFactors */ .Zd)((0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .foldFactors */ .Y6)(d, rows, folds));
-                const coefficients = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .complementCoefficients */ .dn)(factors, [ridge], d.penalised);
-                const { sse } = (0,_cross_validation_js__WEBPACK_IMPORTED_MODULE_1__/* .outOfFoldErrors */ .Yo)(d, rows, folds, coefficients);
+                const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(d, rows, folds));
+                const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, [ridge], d.penalised);
+                const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(d, rows, folds, coefficients);
                 curve.push(pointFrom(value, label, d.p, sse[0], current));
             }
             catch (error) {
@@ -4427,7 +4536,7 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony export */   un: () => (/* binding */ outOfFoldErrorsFromFactors)
 /* harmony export */ });
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
-/* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6933);
+/* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2485);
 /* harmony import */ var _model_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4607);
 
 
@@ -5334,16 +5443,27 @@ function thinIndices(length, count, keep) {
 }
 /**
  * Pairs (row, neighbour) of each sampled row and its `kk` nearest other sampled rows by squared
- * Euclidean distance (exact duplicates skipped), by brute force over the s x s pairs.
+ * Euclidean distance (exact duplicates skipped; equal distances: the lower index first).
+ *
+ * The rows are sorted by their first coordinate and each row's search walks outwards from its
+ * place in that order, stopping on a side once the first coordinate alone is farther than the
+ * k-th best distance (a sum of squares is at least any of its terms, also in floating point), so
+ * far rows are never looked at. The result is the brute-force result over all s x s pairs.
  *
  * @param flat scaled inputs of the sampled rows, row-major: flat[a * d + c]
  * @param s sampled rows
  * @param d inputs
  * @param kk neighbours per row (at most s - 1)
  * @param rows training row index of each sampled row
- * @returns flat pairs [row, neighbour, row, neighbour, ...] of training row indices
+ * @returns flat pairs [row, neighbour, row, neighbour, ...] of training row indices, rows in
+ *   sampled order and each row's neighbours nearest first
  */
 function nearestPairs(flat, s, d, kk, rows) {
+    // Sampled rows in order of their first coordinate (ties by index).
+    const order = Int32Array.from({ length: s }, (_, a) => a).sort((a, b) => flat[a * d] - flat[b * d] || a - b);
+    const place = new Int32Array(s);
+    for (let t = 0; t < s; t++)
+        place[order[t]] = t;
     const pairs = new Int32Array(2 * s * kk);
     let count = 0;
     const best = new Float64Array(kk);
@@ -5351,29 +5471,31 @@ function nearestPairs(flat, s, d, kk, rows) {
     for (let a = 0; a < s; a++) {
         best.fill(Infinity);
         bestIdx.fill(-1);
-        const ra = a * d;
-        for (let b = 0; b < s; b++) {
-            if (b === a)
+        const here = place[a];
+        let down = here - 1;
+        let up = here + 1;
+        let downOpen = down >= 0;
+        let upOpen = up < s;
+        while (downOpen || upOpen) {
+            // The side whose next row is nearer in the first coordinate.
+            const gapDown = downOpen ? flat[a * d] - flat[order[down] * d] : Infinity;
+            const gapUp = upOpen ? flat[order[up] * d] - flat[a * d] : Infinity;
+            const goUp = gapUp < gapDown;
+            const b = goUp ? order[up] : order[down];
+            const gap = goUp ? gapUp : gapDown;
+            if (gap * gap > best[kk - 1]) {
+                // Every further row on this side is at least as far in the first coordinate.
+                if (goUp)
+                    upOpen = false;
+                else
+                    downOpen = false;
                 continue;
-            const rb = b * d;
-            // Partial sums only grow, so stopping once one reaches the k-th best distance skips
-            // exactly the rows the full sum would skip.
-            const limit = best[kk - 1];
-            let dist = 0;
-            for (let c = 0; c < d && dist < limit; c++) {
-                const t = flat[ra + c] - flat[rb + c];
-                dist += t * t;
             }
-            if (dist === 0 || dist >= limit)
-                continue;
-            let pos = kk - 1;
-            while (pos > 0 && best[pos - 1] > dist) {
-                best[pos] = best[pos - 1];
-                bestIdx[pos] = bestIdx[pos - 1];
-                pos--;
-            }
-            best[pos] = dist;
-            bestIdx[pos] = b;
+            if (goUp)
+                upOpen = ++up < s;
+            else
+                downOpen = --down >= 0;
+            considerNeighbour(flat, d, a, b, kk, best, bestIdx);
         }
         for (let t = 0; t < kk; t++) {
             if (bestIdx[t] < 0)
@@ -5383,6 +5505,31 @@ function nearestPairs(flat, s, d, kk, rows) {
         }
     }
     return pairs.subarray(0, count);
+}
+/**
+ * Puts row b into row a's list of the kk nearest (sorted by distance, then index) when it
+ * belongs there; the distance is summed over the coordinates in order, as the list's entries were.
+ */
+function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
+    const limit = best[kk - 1];
+    const ra = a * d;
+    const rb = b * d;
+    let dist = 0;
+    // Partial sums only grow: once one passes the k-th best, the row cannot enter.
+    for (let c = 0; c < d && dist <= limit; c++) {
+        const t = flat[ra + c] - flat[rb + c];
+        dist += t * t;
+    }
+    if (dist === 0 || dist > limit || (dist === limit && b > bestIdx[kk - 1]))
+        return;
+    let pos = kk - 1;
+    while (pos > 0 && (best[pos - 1] > dist || (best[pos - 1] === dist && bestIdx[pos - 1] > b))) {
+        best[pos] = best[pos - 1];
+        bestIdx[pos] = bestIdx[pos - 1];
+        pos--;
+    }
+    best[pos] = dist;
+    bestIdx[pos] = b;
 }
 /**
  * Predictions along input c with every other input fixed, as a function of that input's values:
@@ -5784,7 +5931,7 @@ function quoteValue(value, max = 80) {
 
 /***/ }),
 
-/***/ 6933:
+/***/ 2485:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -5800,134 +5947,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // UNUSED EXPORTS: fitDesign, leverages, predict
 
-;// CONCATENATED MODULE: ./src/fit/svd.ts
-/**
- * Singular value decomposition of the small p x p matrices of the fitting engine, by one-sided
- * Jacobi rotations (Hestenes 1958; Demmel & Veselić, "Jacobi's method is more accurate than QR",
- * SIAM J. Matrix Anal. Appl. 13(4), 1992): the columns of A are rotated pairwise until they are
- * mutually orthogonal; their norms are then the singular values, the normalised columns the left
- * singular vectors, and the accumulated rotations the right singular vectors.
- *
- * Why not ml-matrix's SVD (Golub-Kahan-Reinsch as in JAMA): its iteration has no cap, and on
- * factors of rank-deficient designs (all-zero and duplicate columns next to values near the
- * underflow threshold) it was seen to run for minutes without ending. Jacobi sweeps converge
- * quadratically and are capped here (60 sweeps); the matrix is scaled by a power of two (exact)
- * so that its largest entry is about 1, and entries below 2^-600 of it are set to zero.
- */
-/** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
-const MAX_SWEEPS = 60;
-/**
- * SVD of a column-major m x k matrix with m >= k >= 1.
- *
- * @param A column-major m x k (A[j*m + i])
- * @param m rows
- * @param k columns (at most m)
- * @param vectors which singular vectors to return; default both
- * @returns singular values in descending order with the matching vectors
- * @throws RangeError when m < k or k < 1, or when A has a non-finite entry
- */
-function svd(A, m, k, vectors = 'both') {
-    if (k < 1 || m < k)
-        throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
-    let amax = 0;
-    for (let i = 0; i < m * k; i++) {
-        const a = Math.abs(A[i]);
-        if (!(a <= amax))
-            amax = a;
-    }
-    if (!Number.isFinite(amax))
-        throw new RangeError('svd: the matrix has a non-finite entry');
-    if (amax === 0)
-        return zeroSvd(m, k, vectors);
-    const shift = Math.round(Math.log2(amax));
-    const scale = 2 ** -shift;
-    const floor = 2 ** -600;
-    const W = new Float64Array(m * k);
-    for (let i = 0; i < m * k; i++) {
-        const v = A[i] * scale;
-        W[i] = Math.abs(v) < floor ? 0 : v;
-    }
-    const V = new Float64Array(k * k);
-    for (let c = 0; c < k; c++)
-        V[c * k + c] = 1;
-    // One-sided Jacobi: rotate column pairs (p, q) until every pair is orthogonal to eps.
-    const eps = Number.EPSILON;
-    for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
-        let rotated = false;
-        for (let p = 0; p < k - 1; p++) {
-            const cp = p * m;
-            for (let q = p + 1; q < k; q++) {
-                const cq = q * m;
-                let alpha = 0;
-                let beta = 0;
-                let gamma = 0;
-                for (let i = 0; i < m; i++) {
-                    const x = W[cp + i];
-                    const y = W[cq + i];
-                    alpha += x * x;
-                    beta += y * y;
-                    gamma += x * y;
-                }
-                if (gamma === 0 || Math.abs(gamma) <= eps * Math.sqrt(alpha * beta))
-                    continue;
-                rotated = true;
-                // Rotation angle that zeroes the (p, q) entry of W^T W (Rutishauser's formulas).
-                const zeta = (beta - alpha) / (2 * gamma);
-                const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
-                const c = 1 / Math.sqrt(1 + t * t);
-                const s = c * t;
-                rotate(W, cp, cq, m, c, s);
-                rotate(V, p * k, q * k, k, c, s);
-            }
-        }
-        if (!rotated)
-            break;
-    }
-    // Singular values are the column norms; sort descending.
-    const norms = new Float64Array(k);
-    for (let c = 0; c < k; c++) {
-        let ss = 0;
-        for (let i = 0; i < m; i++)
-            ss += W[c * m + i] ** 2;
-        norms[c] = Math.sqrt(ss);
-    }
-    const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
-    const s = new Float64Array(k);
-    const U = new Float64Array(vectors === 'both' ? m * k : 0);
-    const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
-    order.forEach((c, to) => {
-        s[to] = norms[c] * 2 ** shift;
-        if (U.length > 0 && norms[c] > 0)
-            for (let i = 0; i < m; i++)
-                U[to * m + i] = W[c * m + i] / norms[c];
-        if (Vout.length > 0)
-            for (let i = 0; i < k; i++)
-                Vout[to * k + i] = V[c * k + i];
-    });
-    return { s, U, V: Vout };
-}
-/** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
-function rotate(M, a, b, n, c, s) {
-    for (let i = 0; i < n; i++) {
-        const x = M[a + i];
-        const y = M[b + i];
-        M[a + i] = c * x - s * y;
-        M[b + i] = s * x + c * y;
-    }
-}
-/** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
-function zeroSvd(m, k, vectors) {
-    const U = new Float64Array(vectors === 'both' ? m * k : 0);
-    const V = new Float64Array(vectors === 'none' ? 0 : k * k);
-    for (let c = 0; c < k; c++) {
-        if (U.length > 0)
-            U[c * m + c] = 1;
-        if (V.length > 0)
-            V[c * k + c] = 1;
-    }
-    return { s: new Float64Array(k), U, V };
-}
-
+// EXTERNAL MODULE: ./src/fit/svd.ts
+var svd = __nccwpck_require__(5936);
 ;// CONCATENATED MODULE: ./src/fit/factor-solver.ts
 /**
  * Rank decisions and solves with a p x p upper-triangular factor R of a design X = Q R.
@@ -5963,7 +5984,7 @@ function scaledSpectrum(R, p, rows) {
         for (let i = 0; i <= j; i++)
             scaled[j * p + i] = R[j * p + i] / div;
     }
-    const { s, V } = svd(scaled, p, p, 'right');
+    const { s, V } = (0,svd/* svd */.C)(scaled, p, p, 'right');
     const tolerance = Math.max(rows, p) * Number.EPSILON * s[0];
     let rank = 0;
     while (rank < p && s[rank] > tolerance)
@@ -5977,7 +5998,7 @@ function scaledSpectrum(R, p, rows) {
  * @param p columns (>= 1)
  */
 function rawSingularValues(R, p) {
-    return svd(R, p, p, 'none').s;
+    return (0,svd/* svd */.C)(R, p, p, 'none').s;
 }
 /**
  * Solves with R (p x p upper triangular, column-major) given its numerical rank: triangular
@@ -5998,7 +6019,7 @@ class FactorSolver {
         this.p = p;
         this.rank = rank;
         this.#R = R;
-        this.#svd = rank < p && rank > 0 ? svd(R, p, p) : undefined;
+        this.#svd = rank < p && rank > 0 ? (0,svd/* svd */.C)(R, p, p) : undefined;
     }
     /** w = R^+ b (back-substitution R w = b when full rank). Length p in, length p out. */
     solve(b) {
@@ -6941,6 +6962,143 @@ function twoProductError(a, b, prod) {
     const bh = t - (t - b);
     const bl = b - bh;
     return al * bl - (prod - ah * bh - ah * bl - al * bh);
+}
+
+
+/***/ }),
+
+/***/ 5936:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   C: () => (/* binding */ svd)
+/* harmony export */ });
+/* unused harmony export MAX_SWEEPS */
+/**
+ * Singular value decomposition of the small p x p matrices of the fitting engine, by one-sided
+ * Jacobi rotations (Hestenes 1958; Demmel & Veselić, "Jacobi's method is more accurate than QR",
+ * SIAM J. Matrix Anal. Appl. 13(4), 1992): the columns of A are rotated pairwise until they are
+ * mutually orthogonal; their norms are then the singular values, the normalised columns the left
+ * singular vectors, and the accumulated rotations the right singular vectors.
+ *
+ * Why not ml-matrix's SVD (Golub-Kahan-Reinsch as in JAMA): its iteration has no cap, and on
+ * factors of rank-deficient designs (all-zero and duplicate columns next to values near the
+ * underflow threshold) it was seen to run for minutes without ending. Jacobi sweeps converge
+ * quadratically and are capped here (60 sweeps); the matrix is scaled by a power of two (exact)
+ * so that its largest entry is about 1, and entries below 2^-600 of it are set to zero.
+ */
+/** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
+const MAX_SWEEPS = 60;
+/**
+ * SVD of a column-major m x k matrix with m >= k >= 1.
+ *
+ * @param A column-major m x k (A[j*m + i])
+ * @param m rows
+ * @param k columns (at most m)
+ * @param vectors which singular vectors to return; default both
+ * @returns singular values in descending order with the matching vectors
+ * @throws RangeError when m < k or k < 1, or when A has a non-finite entry
+ */
+function svd(A, m, k, vectors = 'both') {
+    if (k < 1 || m < k)
+        throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
+    let amax = 0;
+    for (let i = 0; i < m * k; i++) {
+        const a = Math.abs(A[i]);
+        if (!(a <= amax))
+            amax = a;
+    }
+    if (!Number.isFinite(amax))
+        throw new RangeError('svd: the matrix has a non-finite entry');
+    if (amax === 0)
+        return zeroSvd(m, k, vectors);
+    const shift = Math.round(Math.log2(amax));
+    const scale = 2 ** -shift;
+    const floor = 2 ** -600;
+    const W = new Float64Array(m * k);
+    for (let i = 0; i < m * k; i++) {
+        const v = A[i] * scale;
+        W[i] = Math.abs(v) < floor ? 0 : v;
+    }
+    const V = new Float64Array(k * k);
+    for (let c = 0; c < k; c++)
+        V[c * k + c] = 1;
+    // One-sided Jacobi: rotate column pairs (p, q) until every pair is orthogonal to eps.
+    const eps = Number.EPSILON;
+    for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
+        let rotated = false;
+        for (let p = 0; p < k - 1; p++) {
+            const cp = p * m;
+            for (let q = p + 1; q < k; q++) {
+                const cq = q * m;
+                let alpha = 0;
+                let beta = 0;
+                let gamma = 0;
+                for (let i = 0; i < m; i++) {
+                    const x = W[cp + i];
+                    const y = W[cq + i];
+                    alpha += x * x;
+                    beta += y * y;
+                    gamma += x * y;
+                }
+                if (gamma === 0 || Math.abs(gamma) <= eps * Math.sqrt(alpha * beta))
+                    continue;
+                rotated = true;
+                // Rotation angle that zeroes the (p, q) entry of W^T W (Rutishauser's formulas).
+                const zeta = (beta - alpha) / (2 * gamma);
+                const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
+                const c = 1 / Math.sqrt(1 + t * t);
+                const s = c * t;
+                rotate(W, cp, cq, m, c, s);
+                rotate(V, p * k, q * k, k, c, s);
+            }
+        }
+        if (!rotated)
+            break;
+    }
+    // Singular values are the column norms; sort descending.
+    const norms = new Float64Array(k);
+    for (let c = 0; c < k; c++) {
+        let ss = 0;
+        for (let i = 0; i < m; i++)
+            ss += W[c * m + i] ** 2;
+        norms[c] = Math.sqrt(ss);
+    }
+    const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
+    const s = new Float64Array(k);
+    const U = new Float64Array(vectors === 'both' ? m * k : 0);
+    const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
+    order.forEach((c, to) => {
+        s[to] = norms[c] * 2 ** shift;
+        if (U.length > 0 && norms[c] > 0)
+            for (let i = 0; i < m; i++)
+                U[to * m + i] = W[c * m + i] / norms[c];
+        if (Vout.length > 0)
+            for (let i = 0; i < k; i++)
+                Vout[to * k + i] = V[c * k + i];
+    });
+    return { s, U, V: Vout };
+}
+/** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
+function rotate(M, a, b, n, c, s) {
+    for (let i = 0; i < n; i++) {
+        const x = M[a + i];
+        const y = M[b + i];
+        M[a + i] = c * x - s * y;
+        M[b + i] = s * x + c * y;
+    }
+}
+/** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
+function zeroSvd(m, k, vectors) {
+    const U = new Float64Array(vectors === 'both' ? m * k : 0);
+    const V = new Float64Array(vectors === 'none' ? 0 : k * k);
+    for (let c = 0; c < k; c++) {
+        if (U.length > 0)
+            U[c * m + c] = 1;
+        if (V.length > 0)
+            V[c * k + c] = 1;
+    }
+    return { s: new Float64Array(k), U, V };
 }
 
 
@@ -10614,8 +10772,8 @@ var stats = __nccwpck_require__(6029);
 var src_checks = __nccwpck_require__(5614);
 // EXTERNAL MODULE: ./src/design-matrix.ts
 var design_matrix = __nccwpck_require__(1927);
-// EXTERNAL MODULE: ./src/fit/index.ts + 4 modules
-var src_fit = __nccwpck_require__(6933);
+// EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
+var src_fit = __nccwpck_require__(2485);
 ;// CONCATENATED MODULE: ./src/metrics/column-spread.ts
 /**
  * Population standard deviations of the design columns, gathered block by block in the same
@@ -10670,8 +10828,8 @@ class ColumnSpread {
 
 // EXTERNAL MODULE: ./src/optimising-compiler.ts + 1 modules
 var optimising_compiler = __nccwpck_require__(6475);
-// EXTERNAL MODULE: ./src/diagnostics/complexity.ts
-var complexity = __nccwpck_require__(2210);
+// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
+var complexity = __nccwpck_require__(7070);
 // EXTERNAL MODULE: ./src/metrics/regression.ts
 var regression = __nccwpck_require__(1788);
 // EXTERNAL MODULE: ./src/result.ts

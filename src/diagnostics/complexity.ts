@@ -7,7 +7,8 @@
 import { createTerm, type Term } from '../basis/index.js';
 import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
-import type { FitResult } from '../fit/index.js';
+import { solveCoefficients, type FitResult, type QrAccumulator } from '../fit/index.js';
+import { ridgePath } from '../fit/ridge-path.js';
 import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds, type FoldFactors, type Rows } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 
@@ -136,13 +137,32 @@ function subsample(data: Rows, m: number): Rows {
 }
 
 /**
+ * coefficients[s][f]: the fit without fold f under penalty s. One SVD per fold serves every
+ * positive penalty ({@link ridgePath}); a penalty of 0, or a factor the path does not take, is
+ * solved on its own.
+ */
+function sweepCoefficients(complements: readonly QrAccumulator[], lambdas: readonly number[], penalised: readonly boolean[]): Float64Array[][] {
+  const coefficients = lambdas.map(() => new Array<Float64Array>(complements.length));
+  const positive = lambdas.filter((l) => l > 0);
+  complements.forEach((acc, f) => {
+    const path = ridgePath(acc, positive, penalised);
+    let next = 0;
+    lambdas.forEach((lambda, s) => {
+      coefficients[s][f] = path !== null && lambda > 0 ? path[next++] : solveCoefficients(acc, { ridge: lambda, penalised });
+    });
+  });
+  return coefficients;
+}
+
+/**
  * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
  * k-fold errors (the same folds for every setting).
  *
  * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
  *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
  *   current lambda; simplest = largest. The design does not change, so the model's per-fold
- *   factors serve every lambda: k small solves per lambda, and each fold's squared errors come
+ *   factors serve every lambda: one SVD per fold complement gives every lambda's coefficients
+ *   ({@link ridgePath}), and each fold's squared errors come
  *   from its own factor ({@link outOfFoldErrorsFromFactors}), with no pass over the rows. Every
  *   row is used (no subsample).
  * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
@@ -192,7 +212,7 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
       const perFold = foldFactors(design, rows, folds);
       factors = { perFold, complements: complementFactors(perFold) };
     }
-    const coefficients = complementCoefficients(factors.complements, lambdas, design.penalised);
+    const coefficients = sweepCoefficients(factors.complements, lambdas, design.penalised);
     const { sse } = outOfFoldErrorsFromFactors(factors.perFold, coefficients);
     lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
   } else {
