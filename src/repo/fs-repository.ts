@@ -8,7 +8,6 @@
 import { createReadStream } from 'node:fs';
 import { readFile, realpath, stat } from 'node:fs/promises';
 import * as nodePath from 'node:path';
-import { glob as tinyGlob } from 'tinyglobby';
 import { InputError, type ErrorLocation } from '../errors.js';
 import { FILE_MISSING, isAbsoluteLike, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
 import type { RepoReader } from './types.js';
@@ -107,6 +106,8 @@ export function createFsRepository(root: string): RepoReader {
         }
       }
       if (patterns.length === 0) return [];
+      // tinyglobby is loaded when a run globs (a run given its descriptors never does).
+      const { glob: tinyGlob } = await import('tinyglobby');
       const found = await tinyGlob(patterns, {
         cwd: await rootReal(),
         onlyFiles: true,
