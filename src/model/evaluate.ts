@@ -8,7 +8,7 @@ import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
-import { fitFactor, RefinementPass, REFINE_MAX_CONDITION, type FitResult } from '../fit/index.js';
+import { fitFactor, RefinementPass, refinementApplies, type FitResult } from '../fit/index.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
 import { allowOptimisingCompiler, estimateWork, SMALL_WORK } from '../optimising-compiler.js';
 import { sweepTarget } from '../diagnostics/complexity.js';
@@ -120,11 +120,9 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   });
   const full = mergeFactors(builder.factors, p);
   let fit = fitFactor(full, { ridge: descriptor.fit.ridge, penalised: design.penalised });
-  // One step of iterative refinement from a further pass where it converges. It is kept even for
-  // well-conditioned designs: plain QR is accurate to about cond * eps in norm, but small
-  // coefficients then differ in their last 4-5 digits between row orders (fold-factor merges
-  // versus one sequential factor); the refined solution does not depend on the order.
-  if (!fit.rankDeficient && fit.conditionNumberScaled <= REFINE_MAX_CONDITION) {
+  // One step of iterative refinement from a further pass where it converges and gains digits
+  // (not for well-conditioned designs, whose QR solution is already accurate to about 1e-14).
+  if (refinementApplies(fit)) {
     const pass = new RefinementPass(fit);
     forEachBlock(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
     fit = pass.finish();

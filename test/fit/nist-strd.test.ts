@@ -12,7 +12,7 @@
  * printed beside them.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { fitDesign } from '../../src/fit/index.js';
+import { fitDesign, REFINE_MIN_CONDITION } from '../../src/fit/index.js';
 import { lre, nistDesign, readNist, referenceDir, referencePresent } from './nist.js';
 
 const DATASETS = ['Norris', 'Pontius', 'NoInt1', 'NoInt2', 'Filip', 'Longley', 'Wampler1', 'Wampler2', 'Wampler3', 'Wampler4', 'Wampler5'];
@@ -34,7 +34,7 @@ describe.skipIf(skip)(`NIST StRD linear least squares${skip ? ` (skipped: ${refe
       const fit = fitDesign(X, y, n, p, { refine });
       const coef = d.estimates.map((c, j) => lre(fit.coefficients[j], c));
       const sd = lre(Math.sqrt(fit.rss / (n - p)), d.residualSd);
-      figures.push(`${refine ? 'refined' : 'plain'}: min LRE coefficients ${Math.min(...coef).toFixed(2)}, residual SD ${sd.toFixed(2)}${fit.refined !== refine ? ' (refinement not applied: kappa too large)' : ''}`);
+      figures.push(`${refine ? 'refined' : 'plain'}: min LRE coefficients ${Math.min(...coef).toFixed(2)}, residual SD ${sd.toFixed(2)}${fit.refined !== refine ? ` (refinement not applied: scaled condition ${fit.conditionNumberScaled.toPrecision(2)}, ${fit.conditionNumberScaled <= REFINE_MIN_CONDITION ? 'already accurate' : 'too large'})` : ''}`);
       if (refine) result = { coef, sd };
       expect(fit.rank, `${name} rank`).toBe(p);
     }
