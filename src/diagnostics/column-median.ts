@@ -20,18 +20,79 @@ export function columnMedian(values: Float64Array, n: number, scratch?: Float64A
   let median = Number.NaN;
   if (n > 0) {
     const s = scratch !== undefined && scratch.length >= n ? scratch.subarray(0, n) : new Float64Array(n);
-    s.set(values.subarray(0, n));
-    const upper = selectKth(s, n >> 1);
-    if (n % 2 === 1) median = upper;
-    else {
-      // The lower middle is the largest value left of the upper middle after selection.
-      let lower = -Infinity;
-      for (let i = 0; i < n >> 1; i++) if (s[i] > lower) lower = s[i];
-      median = (lower + upper) / 2;
-    }
+    median = (n >= BRACKET_MIN_ROWS ? bracketedMedian(values, n, s) : null) ?? selectedMedian(values, n, s);
   }
   remembered.set(values, { n, median });
   return median;
+}
+
+/** Columns of at least this many rows try {@link bracketedMedian} first. */
+const BRACKET_MIN_ROWS = 16384;
+/** Rows in the bracketing sample. */
+const BRACKET_SAMPLE = 2048;
+/** Sample ranks on each side of the sample's middle that bound the bracket (about 9 standard deviations of the middle's rank). */
+const BRACKET_HALF_WIDTH = 200;
+
+/** The median by selection on a copy of all n values (in `work`, length >= n). */
+function selectedMedian(values: Float64Array, n: number, work: Float64Array): number {
+  const s = work.subarray(0, n);
+  s.set(values.subarray(0, n));
+  return middleOf(s, n, n >> 1);
+}
+
+/**
+ * The median of a[0..m) given that the wanted middle ranks are `upper` (and `upper - 1` when n is
+ * even) of the whole column, counted from a's first value: selection on a.
+ */
+function middleOf(a: Float64Array, n: number, upper: number): number {
+  const value = selectKth(a, upper);
+  if (n % 2 === 1) return value;
+  // The lower middle is the largest value left of the upper middle after selection.
+  let lower = -Infinity;
+  for (let i = 0; i < upper; i++) if (a[i] > lower) lower = a[i];
+  return (lower + value) / 2;
+}
+
+/**
+ * The exact median in one pass over the column and a selection among a tenth of it: the middle
+ * ranks are bracketed by two values of a sorted even-stride sample, the pass counts the values
+ * below the bracket and gathers those inside it, and the middle is selected among those (the
+ * sampling step of Floyd & Rivest, "Expected time bounds for selection", Communications of the ACM
+ * 18(3), 1975). Returns null when the bracket misses a middle rank or holds too many values (the
+ * caller then selects among all of them), so the result is always the exact median.
+ */
+function bracketedMedian(values: Float64Array, n: number, work: Float64Array): number | null {
+  const sample = new Float64Array(BRACKET_SAMPLE);
+  for (let t = 0; t < BRACKET_SAMPLE; t++) sample[t] = values[Math.floor((t * n) / BRACKET_SAMPLE)];
+  sample.sort();
+  const lo = sample[BRACKET_SAMPLE / 2 - BRACKET_HALF_WIDTH];
+  const hi = sample[BRACKET_SAMPLE / 2 + BRACKET_HALF_WIDTH];
+  const capacity = Math.min(n, work.length);
+  const { below, inside } = gatherBracket(values, n, lo, hi, work, capacity);
+  if (inside < 0) return null;
+  const upper = n >> 1;
+  const lower = n % 2 === 1 ? upper : upper - 1;
+  // Both middle ranks must fall among the gathered values.
+  if (lower < below || upper >= below + inside) return null;
+  return middleOf(work.subarray(0, inside), n, upper - below);
+}
+
+/**
+ * One pass: counts values below `lo` and copies those in [lo, hi] to `out` (in column order).
+ * `inside` is -1 when more than `capacity` values fall in the bracket.
+ */
+function gatherBracket(values: Float64Array, n: number, lo: number, hi: number, out: Float64Array, capacity: number): { below: number; inside: number } {
+  let below = 0;
+  let inside = 0;
+  for (let i = 0; i < n; i++) {
+    const v = values[i];
+    if (v < lo) below++;
+    else if (v <= hi) {
+      if (inside === capacity) return { below, inside: -1 };
+      out[inside++] = v;
+    }
+  }
+  return { below, inside };
 }
 
 /**
