@@ -30254,8 +30254,8 @@ function jsonMetrics(record) {
     return out;
 }
 
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 3 modules
-var shared = __nccwpck_require__(5083);
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 4 modules
+var shared = __nccwpck_require__(9389);
 ;// CONCATENATED MODULE: ./src/checks/complexity.ts
 
 
@@ -32094,7 +32094,7 @@ function assignFolds(n, k, order, seed) {
 
 /***/ }),
 
-/***/ 5083:
+/***/ 9389:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -32381,11 +32381,198 @@ function radixSort(a, scratch) {
     return a;
 }
 
+;// CONCATENATED MODULE: ./src/diagnostics/nearest-neighbours.ts
+/**
+ * The k nearest neighbours of every point of a small set (the swing scan's sampled rows), exactly
+ * as a search over all pairs finds them, through a k-d tree (Bentley, "Multidimensional binary
+ * search trees used for associative searching", Communications of the ACM 18(9), 1975).
+ */
+/** Points per leaf of the tree. */
+const LEAF_SIZE = 8;
+/**
+ * Pairs (row, neighbour) of each point and its `kk` nearest other points by squared Euclidean
+ * distance, summed over the coordinates in order (exact duplicates, distance 0, are skipped;
+ * equal distances: the lower index first).
+ *
+ * The search descends the tree to the point's own leaf first and visits a subtree on the other
+ * side of a split only when the distance to the split plane, squared, is at most the k-th best
+ * distance so far: every point there is at least that far in that coordinate alone, and a sum of
+ * squares is at least any of its terms (in floating point too, as rounding is monotone). So the
+ * result is the result of the search over all s x s pairs.
+ *
+ * @param flat coordinates, row-major: flat[a * d + c]
+ * @param s points
+ * @param d coordinates per point
+ * @param kk neighbours per point (at most s - 1)
+ * @param rows the training row of each point
+ * @returns flat pairs [row, neighbour, row, neighbour, ...] of training rows, points in order and
+ *   each point's neighbours nearest first
+ */
+function nearestPairs(flat, s, d, kk, rows) {
+    const pairs = new Int32Array(2 * s * Math.max(kk, 0));
+    if (s < 2 || kk < 1 || d < 1)
+        return pairs.subarray(0, 0);
+    const tree = buildTree(flat, s, d);
+    let count = 0;
+    const best = new Float64Array(kk);
+    const bestIdx = new Int32Array(kk);
+    for (let a = 0; a < s; a++) {
+        best.fill(Infinity);
+        bestIdx.fill(-1);
+        searchTree(tree, 0, flat, d, a, kk, best, bestIdx);
+        for (let t = 0; t < kk; t++) {
+            if (bestIdx[t] < 0)
+                continue;
+            pairs[count++] = rows[a];
+            pairs[count++] = rows[bestIdx[t]];
+        }
+    }
+    return pairs.subarray(0, count);
+}
+/** Builds the tree: each node splits its points at the median of its widest coordinate. */
+function buildTree(flat, s, d) {
+    const capacity = 2 * Math.ceil(s / (LEAF_SIZE / 2)) + 1;
+    const tree = {
+        idx: Int32Array.from({ length: s }, (_, a) => a),
+        lo: new Int32Array(capacity),
+        hi: new Int32Array(capacity),
+        mid: new Int32Array(capacity),
+        dim: new Int32Array(capacity),
+        value: new Float64Array(capacity),
+        left: new Int32Array(capacity),
+        right: new Int32Array(capacity),
+    };
+    let nodes = 0;
+    const make = (lo, hi) => {
+        const node = nodes++;
+        tree.lo[node] = lo;
+        tree.hi[node] = hi;
+        tree.left[node] = -1;
+        tree.right[node] = -1;
+        tree.dim[node] = -1;
+        if (hi - lo <= LEAF_SIZE)
+            return node;
+        const c = widestCoordinate(flat, d, tree.idx, lo, hi);
+        if (c < 0)
+            return node; // every point equal: a leaf
+        const mid = (lo + hi) >> 1;
+        selectByCoordinate(flat, d, c, tree.idx, lo, hi, mid);
+        tree.dim[node] = c;
+        tree.mid[node] = mid;
+        tree.value[node] = flat[tree.idx[mid] * d + c];
+        tree.left[node] = make(lo, mid);
+        tree.right[node] = make(mid, hi);
+        return node;
+    };
+    make(0, s);
+    return tree;
+}
+/** The coordinate with the widest range over idx[lo..hi), or -1 when every range is 0. */
+function widestCoordinate(flat, d, idx, lo, hi) {
+    let bestDim = -1;
+    let bestWidth = 0;
+    for (let c = 0; c < d; c++) {
+        let min = Infinity;
+        let max = -Infinity;
+        for (let t = lo; t < hi; t++) {
+            const v = flat[idx[t] * d + c];
+            if (v < min)
+                min = v;
+            if (v > max)
+                max = v;
+        }
+        if (max - min > bestWidth) {
+            bestWidth = max - min;
+            bestDim = c;
+        }
+    }
+    return bestDim;
+}
+/**
+ * Reorders idx[lo..hi) so that idx[k] holds the point whose coordinate c has rank k - lo, points
+ * before it no greater and points after it no smaller in that coordinate (Hoare's selection).
+ */
+function selectByCoordinate(flat, d, c, idx, lo, hi, k) {
+    let l = lo;
+    let r = hi - 1;
+    while (r > l) {
+        const pivot = flat[idx[(l + r) >> 1] * d + c];
+        let i = l;
+        let j = r;
+        while (i <= j) {
+            while (flat[idx[i] * d + c] < pivot)
+                i++;
+            while (flat[idx[j] * d + c] > pivot)
+                j--;
+            if (i <= j) {
+                const t = idx[i];
+                idx[i] = idx[j];
+                idx[j] = t;
+                i++;
+                j--;
+            }
+        }
+        if (k <= j)
+            r = j;
+        else if (k >= i)
+            l = i;
+        else
+            return;
+    }
+}
+/**
+ * The k nearest points of point a within `node`'s subtree, merged into best (distances) and
+ * bestIdx (points), nearest first: the side of each split that holds a first, the other side only
+ * when the squared distance to the split can still be at most the k-th best. Points equal to the
+ * split value may sit on either side, so a gap of 0 visits both.
+ */
+function searchTree(tree, node, flat, d, a, kk, best, bestIdx) {
+    const c = tree.dim[node];
+    if (c < 0) {
+        for (let t = tree.lo[node]; t < tree.hi[node]; t++) {
+            const b = tree.idx[t];
+            if (b !== a)
+                considerNeighbour(flat, d, a, b, kk, best, bestIdx);
+        }
+        return;
+    }
+    const diff = flat[a * d + c] - tree.value[node];
+    searchTree(tree, diff < 0 ? tree.left[node] : tree.right[node], flat, d, a, kk, best, bestIdx);
+    if (diff * diff <= best[kk - 1])
+        searchTree(tree, diff < 0 ? tree.right[node] : tree.left[node], flat, d, a, kk, best, bestIdx);
+}
+/**
+ * Puts point b into point a's list of the kk nearest (sorted by distance, then index) when it
+ * belongs there; the distance is summed over the coordinates in order, as the list's entries were.
+ */
+function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
+    const limit = best[kk - 1];
+    const ra = a * d;
+    const rb = b * d;
+    let dist = 0;
+    // Partial sums only grow: once one passes the k-th best, the point cannot enter.
+    for (let c = 0; c < d && dist <= limit; c++) {
+        const t = flat[ra + c] - flat[rb + c];
+        dist += t * t;
+    }
+    if (dist === 0 || dist > limit || (dist === limit && b > bestIdx[kk - 1]))
+        return;
+    let pos = kk - 1;
+    while (pos > 0 && (best[pos - 1] > dist || (best[pos - 1] === dist && bestIdx[pos - 1] > b))) {
+        best[pos] = best[pos - 1];
+        bestIdx[pos] = bestIdx[pos - 1];
+        pos--;
+    }
+    best[pos] = dist;
+    bestIdx[pos] = b;
+}
+
 ;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
 /**
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
  * training targets on inputs between the training rows and just past their range.
  */
+
 
 
 
@@ -32523,96 +32710,6 @@ function thinIndices(length, count, keep) {
     for (let t = 0; t < slots; t++)
         chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
     return [...chosen].sort((a, b) => a - b);
-}
-/**
- * Pairs (row, neighbour) of each sampled row and its `kk` nearest other sampled rows by squared
- * Euclidean distance (exact duplicates skipped; equal distances: the lower index first).
- *
- * The rows are sorted by their first coordinate and each row's search walks outwards from its
- * place in that order, stopping on a side once the first coordinate alone is farther than the
- * k-th best distance (a sum of squares is at least any of its terms, also in floating point), so
- * far rows are never looked at. The result is the brute-force result over all s x s pairs.
- *
- * @param flat scaled inputs of the sampled rows, row-major: flat[a * d + c]
- * @param s sampled rows
- * @param d inputs
- * @param kk neighbours per row (at most s - 1)
- * @param rows training row index of each sampled row
- * @returns flat pairs [row, neighbour, row, neighbour, ...] of training row indices, rows in
- *   sampled order and each row's neighbours nearest first
- */
-function nearestPairs(flat, s, d, kk, rows) {
-    // Sampled rows in order of their first coordinate (ties by index).
-    const order = Int32Array.from({ length: s }, (_, a) => a).sort((a, b) => flat[a * d] - flat[b * d] || a - b);
-    const place = new Int32Array(s);
-    for (let t = 0; t < s; t++)
-        place[order[t]] = t;
-    const pairs = new Int32Array(2 * s * kk);
-    let count = 0;
-    const best = new Float64Array(kk);
-    const bestIdx = new Int32Array(kk);
-    for (let a = 0; a < s; a++) {
-        best.fill(Infinity);
-        bestIdx.fill(-1);
-        const here = place[a];
-        let down = here - 1;
-        let up = here + 1;
-        let downOpen = down >= 0;
-        let upOpen = up < s;
-        while (downOpen || upOpen) {
-            // The side whose next row is nearer in the first coordinate.
-            const gapDown = downOpen ? flat[a * d] - flat[order[down] * d] : Infinity;
-            const gapUp = upOpen ? flat[order[up] * d] - flat[a * d] : Infinity;
-            const goUp = gapUp < gapDown;
-            const b = goUp ? order[up] : order[down];
-            const gap = goUp ? gapUp : gapDown;
-            if (gap * gap > best[kk - 1]) {
-                // Every further row on this side is at least as far in the first coordinate.
-                if (goUp)
-                    upOpen = false;
-                else
-                    downOpen = false;
-                continue;
-            }
-            if (goUp)
-                upOpen = ++up < s;
-            else
-                downOpen = --down >= 0;
-            considerNeighbour(flat, d, a, b, kk, best, bestIdx);
-        }
-        for (let t = 0; t < kk; t++) {
-            if (bestIdx[t] < 0)
-                continue;
-            pairs[count++] = rows[a];
-            pairs[count++] = rows[bestIdx[t]];
-        }
-    }
-    return pairs.subarray(0, count);
-}
-/**
- * Puts row b into row a's list of the kk nearest (sorted by distance, then index) when it
- * belongs there; the distance is summed over the coordinates in order, as the list's entries were.
- */
-function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
-    const limit = best[kk - 1];
-    const ra = a * d;
-    const rb = b * d;
-    let dist = 0;
-    // Partial sums only grow: once one passes the k-th best, the row cannot enter.
-    for (let c = 0; c < d && dist <= limit; c++) {
-        const t = flat[ra + c] - flat[rb + c];
-        dist += t * t;
-    }
-    if (dist === 0 || dist > limit || (dist === limit && b > bestIdx[kk - 1]))
-        return;
-    let pos = kk - 1;
-    while (pos > 0 && (best[pos - 1] > dist || (best[pos - 1] === dist && bestIdx[pos - 1] > b))) {
-        best[pos] = best[pos - 1];
-        bestIdx[pos] = bestIdx[pos - 1];
-        pos--;
-    }
-    best[pos] = dist;
-    bestIdx[pos] = b;
 }
 /**
  * Predictions along input c with every other input fixed, as a function of that input's values:
@@ -39343,8 +39440,8 @@ var result = __nccwpck_require__(1666);
 var cross_validation = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
 var diagnostics_folds = __nccwpck_require__(7694);
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 3 modules
-var shared = __nccwpck_require__(5083);
+// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 4 modules
+var shared = __nccwpck_require__(9389);
 // EXTERNAL MODULE: ./src/model/blocks.ts
 var blocks = __nccwpck_require__(4607);
 // EXTERNAL MODULE: ./src/diagnostics/column-median.ts

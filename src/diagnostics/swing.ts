@@ -8,6 +8,7 @@ import type { Rows } from './cross-validation.js';
 import { columnMedian, selectKth } from './column-median.js';
 import { range } from '../basis/stats.js';
 import { sortFloat64 } from './radix-sort.js';
+import { nearestPairs } from './nearest-neighbours.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -204,91 +205,6 @@ function thinIndices(length: number, count: number, keep: readonly number[]): nu
   const slots = Math.max(2, count - chosen.size);
   for (let t = 0; t < slots; t++) chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
   return [...chosen].sort((a, b) => a - b);
-}
-
-/**
- * Pairs (row, neighbour) of each sampled row and its `kk` nearest other sampled rows by squared
- * Euclidean distance (exact duplicates skipped; equal distances: the lower index first).
- *
- * The rows are sorted by their first coordinate and each row's search walks outwards from its
- * place in that order, stopping on a side once the first coordinate alone is farther than the
- * k-th best distance (a sum of squares is at least any of its terms, also in floating point), so
- * far rows are never looked at. The result is the brute-force result over all s x s pairs.
- *
- * @param flat scaled inputs of the sampled rows, row-major: flat[a * d + c]
- * @param s sampled rows
- * @param d inputs
- * @param kk neighbours per row (at most s - 1)
- * @param rows training row index of each sampled row
- * @returns flat pairs [row, neighbour, row, neighbour, ...] of training row indices, rows in
- *   sampled order and each row's neighbours nearest first
- */
-export function nearestPairs(flat: Float64Array, s: number, d: number, kk: number, rows: Int32Array): Int32Array {
-  // Sampled rows in order of their first coordinate (ties by index).
-  const order = Int32Array.from({ length: s }, (_, a) => a).sort((a, b) => flat[a * d] - flat[b * d] || a - b);
-  const place = new Int32Array(s);
-  for (let t = 0; t < s; t++) place[order[t]] = t;
-  const pairs = new Int32Array(2 * s * kk);
-  let count = 0;
-  const best = new Float64Array(kk);
-  const bestIdx = new Int32Array(kk);
-  for (let a = 0; a < s; a++) {
-    best.fill(Infinity);
-    bestIdx.fill(-1);
-    const here = place[a];
-    let down = here - 1;
-    let up = here + 1;
-    let downOpen = down >= 0;
-    let upOpen = up < s;
-    while (downOpen || upOpen) {
-      // The side whose next row is nearer in the first coordinate.
-      const gapDown = downOpen ? flat[a * d] - flat[order[down] * d] : Infinity;
-      const gapUp = upOpen ? flat[order[up] * d] - flat[a * d] : Infinity;
-      const goUp = gapUp < gapDown;
-      const b = goUp ? order[up] : order[down];
-      const gap = goUp ? gapUp : gapDown;
-      if (gap * gap > best[kk - 1]) {
-        // Every further row on this side is at least as far in the first coordinate.
-        if (goUp) upOpen = false;
-        else downOpen = false;
-        continue;
-      }
-      if (goUp) upOpen = ++up < s;
-      else downOpen = --down >= 0;
-      considerNeighbour(flat, d, a, b, kk, best, bestIdx);
-    }
-    for (let t = 0; t < kk; t++) {
-      if (bestIdx[t] < 0) continue;
-      pairs[count++] = rows[a];
-      pairs[count++] = rows[bestIdx[t]];
-    }
-  }
-  return pairs.subarray(0, count);
-}
-
-/**
- * Puts row b into row a's list of the kk nearest (sorted by distance, then index) when it
- * belongs there; the distance is summed over the coordinates in order, as the list's entries were.
- */
-function considerNeighbour(flat: Float64Array, d: number, a: number, b: number, kk: number, best: Float64Array, bestIdx: Int32Array): void {
-  const limit = best[kk - 1];
-  const ra = a * d;
-  const rb = b * d;
-  let dist = 0;
-  // Partial sums only grow: once one passes the k-th best, the row cannot enter.
-  for (let c = 0; c < d && dist <= limit; c++) {
-    const t = flat[ra + c] - flat[rb + c];
-    dist += t * t;
-  }
-  if (dist === 0 || dist > limit || (dist === limit && b > bestIdx[kk - 1])) return;
-  let pos = kk - 1;
-  while (pos > 0 && (best[pos - 1] > dist || (best[pos - 1] === dist && bestIdx[pos - 1] > b))) {
-    best[pos] = best[pos - 1];
-    bestIdx[pos] = bestIdx[pos - 1];
-    pos--;
-  }
-  best[pos] = dist;
-  bestIdx[pos] = b;
 }
 
 /**
