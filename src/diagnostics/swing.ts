@@ -328,6 +328,47 @@ export interface SwingPlan {
 }
 
 /**
+ * The inputs of the sampled rows, each divided by its standard deviation over them after taking
+ * off their mean (0 for an input without spread), row-major: flat[a * d + c] for the neighbour
+ * search.
+ */
+function scaledRows(inputs: readonly Float64Array[], rows: Int32Array): Float64Array {
+  const s = rows.length;
+  const d = inputs.length;
+  const flat = new Float64Array(s * d);
+  const v = new Float64Array(s);
+  for (let c = 0; c < d; c++) {
+    const col = inputs[c];
+    for (let a = 0; a < s; a++) v[a] = col[rows[a]];
+    let mean = 0;
+    for (let a = 0; a < s; a++) mean += v[a] / s;
+    let ss = 0;
+    for (let a = 0; a < s; a++) ss += (v[a] - mean) * (v[a] - mean);
+    const sd = Math.sqrt(ss / s);
+    for (let a = 0; a < s; a++) flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
+  }
+  return flat;
+}
+
+/** `perSegment` evenly spaced points strictly inside each segment between a row and its neighbour, one column per input. */
+function segmentPoints(inputs: readonly Float64Array[], pairs: Int32Array, perSegment: number): Float64Array[] {
+  const d = inputs.length;
+  const segmentsCount = pairs.length / 2;
+  const m = segmentsCount * perSegment;
+  const columns = inputs.map(() => new Float64Array(m));
+  for (let c = 0; c < d; c++) {
+    const col = inputs[c];
+    const out = columns[c];
+    for (let q = 0; q < segmentsCount; q++) {
+      const from = col[pairs[2 * q]];
+      const to = col[pairs[2 * q + 1]];
+      for (let t = 1; t <= perSegment; t++) out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
+    }
+  }
+  return columns;
+}
+
+/**
  * The coefficient-independent part of {@link measureSwing}: band, medians, grids and segments.
  *
  * @param design the model's design (only its inputs are read)
@@ -365,33 +406,10 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     const perSegment = options.segmentPoints ?? 8;
     const s = Math.min(n, maxRows);
     const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
-    // Scaled inputs of the sampled rows, row-major (flat[a * d + c]) for the neighbour search.
-    const flat = new Float64Array(s * d);
-    train.inputs.forEach((col, c) => {
-      const v = Float64Array.from(rows, (r) => col[r]);
-      let mean = 0;
-      for (const x of v) mean += x / s;
-      let ss = 0;
-      for (const x of v) ss += (x - mean) * (x - mean);
-      const sd = Math.sqrt(ss / s);
-      for (let a = 0; a < s; a++) flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
-    });
+    const flat = scaledRows(train.inputs, rows);
     const kk = Math.min(kNear, s - 1);
     const pairs = nearestPairs(flat, s, d, kk, rows);
-    const segmentsCount = pairs.length / 2;
-    const m = segmentsCount * perSegment;
-    if (m > 0) {
-      const columns = train.inputs.map(() => new Float64Array(m));
-      for (let q = 0; q < segmentsCount; q++) {
-        const ra = pairs[2 * q];
-        const rb = pairs[2 * q + 1];
-        for (let t = 1; t <= perSegment; t++) {
-          const f = t / (perSegment + 1);
-          for (let c = 0; c < d; c++) columns[c][q * perSegment + t - 1] = train.inputs[c][ra] + f * (train.inputs[c][rb] - train.inputs[c][ra]);
-        }
-      }
-      segmentColumns = columns;
-    }
+    if (pairs.length > 0 && perSegment > 0) segmentColumns = segmentPoints(train.inputs, pairs, perSegment);
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
   return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
