@@ -34756,7 +34756,7 @@ __nccwpck_require__.d(__webpack_exports__, {
   KB: () => (/* binding */ estimateWork)
 });
 
-// UNUSED EXPORTS: optimisingCompilerDeferred
+// UNUSED EXPORTS: compilerFlagsGiven, optimisingCompilerDeferred
 
 ;// CONCATENATED MODULE: external "node:v8"
 const external_node_v8_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:v8");
@@ -34797,9 +34797,20 @@ function setFlag(flag) {
         return false;
     }
 }
-/** Turns TurboFan off until {@link allowOptimisingCompiler}; entry points call it first. */
+/**
+ * True when the user chose how V8 compiles (a compiler flag in Node's arguments or NODE_OPTIONS):
+ * fitgate then leaves the flags alone.
+ */
+function compilerFlagsGiven(execArgv = process.execArgv, nodeOptions = process.env.NODE_OPTIONS) {
+    const given = [...execArgv, ...(nodeOptions ?? '').split(/\s+/)];
+    return given.some((arg) => /^--(no-)?(turbofan|opt|jitless|maglev|sparkplug|always-sparkplug)(=|$)/.test(arg.replace(/_/g, '-')));
+}
+/**
+ * Turns TurboFan off until {@link allowOptimisingCompiler}; entry points call it first. Does
+ * nothing when the user set a compiler flag ({@link compilerFlagsGiven}).
+ */
 function deferOptimisingCompiler() {
-    if (!deferred)
+    if (!deferred && !compilerFlagsGiven())
         deferred = setFlag('--no-turbofan');
 }
 /** Turns TurboFan back on (idempotent; does nothing when it was never turned off). */

@@ -37,9 +37,21 @@ function setFlag(flag: string): boolean {
   }
 }
 
-/** Turns TurboFan off until {@link allowOptimisingCompiler}; entry points call it first. */
+/**
+ * True when the user chose how V8 compiles (a compiler flag in Node's arguments or NODE_OPTIONS):
+ * fitgate then leaves the flags alone.
+ */
+export function compilerFlagsGiven(execArgv: readonly string[] = process.execArgv, nodeOptions: string | undefined = process.env.NODE_OPTIONS): boolean {
+  const given = [...execArgv, ...(nodeOptions ?? '').split(/\s+/)];
+  return given.some((arg) => /^--(no-)?(turbofan|opt|jitless|maglev|sparkplug|always-sparkplug)(=|$)/.test(arg.replace(/_/g, '-')));
+}
+
+/**
+ * Turns TurboFan off until {@link allowOptimisingCompiler}; entry points call it first. Does
+ * nothing when the user set a compiler flag ({@link compilerFlagsGiven}).
+ */
 export function deferOptimisingCompiler(): void {
-  if (!deferred) deferred = setFlag('--no-turbofan');
+  if (!deferred && !compilerFlagsGiven()) deferred = setFlag('--no-turbofan');
 }
 
 /** Turns TurboFan back on (idempotent; does nothing when it was never turned off). */

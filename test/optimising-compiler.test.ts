@@ -1,6 +1,6 @@
 import { execFileSync } from 'node:child_process';
 import { afterEach, describe, expect, it } from 'vitest';
-import { allowOptimisingCompiler, deferOptimisingCompiler, estimateWork, optimisingCompilerDeferred, SMALL_WORK } from '../src/optimising-compiler.js';
+import { allowOptimisingCompiler, compilerFlagsGiven, deferOptimisingCompiler, estimateWork, optimisingCompilerDeferred, SMALL_WORK } from '../src/optimising-compiler.js';
 
 describe('when the optimising compiler runs', () => {
   afterEach(() => allowOptimisingCompiler());
@@ -23,6 +23,17 @@ describe('when the optimising compiler runs', () => {
     const optimised = run([]);
     expect(optimised).toMatch(/^[0-9a-f]{80}$/);
     expect(run(['--no-turbofan'])).toBe(optimised);
+  });
+});
+
+describe('compiler flags the user set are left alone', () => {
+  it('sees them in the arguments of node and in NODE_OPTIONS', () => {
+    expect(compilerFlagsGiven([], undefined)).toBe(false);
+    expect(compilerFlagsGiven(['--max-old-space-size=4096'], '--enable-source-maps')).toBe(false);
+    expect(compilerFlagsGiven(['--no-turbofan'], undefined)).toBe(true);
+    expect(compilerFlagsGiven([], '--enable-source-maps --jitless')).toBe(true);
+    expect(compilerFlagsGiven(['--no_opt'], undefined)).toBe(true);
+    expect(compilerFlagsGiven(['--turbofan-filter=x'], undefined)).toBe(false);
   });
 });
 
