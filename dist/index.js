@@ -33045,9 +33045,9 @@ function sharedCrossValidation(context) {
         return (0,cross_validation/* crossValidate */.DJ)(context.design, context.train, context.fit, sharedFolds(context), { factors: perFold, complements });
     });
 }
-/** Memo key of {@link sharedSwing} (a helper thread may fill it). */
+/** Memo key of {@link sharedSwing}. */
 const SHARED_SWING_KEY = 'diagnostics/swing';
-/** Memo key of {@link sharedLeakage} (a helper thread may fill it). */
+/** Memo key of {@link sharedLeakage}. */
 const SHARED_LEAKAGE_KEY = 'diagnostics/leakage';
 /** Swing between and beyond samples of the refit (see {@link measureSwing}). */
 function sharedSwing(context) {
@@ -34582,7 +34582,7 @@ async function run() {
     }
 }
 // In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
-if (!(0,_parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_8__/* .isFitgateWorker */ .$L)())
+if (!(0,_parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_8__/* .isFitgateWorker */ .$)())
     await run();
 
 __webpack_async_result__();
@@ -36156,33 +36156,22 @@ function serveTasks(handle) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   $L: () => (/* binding */ isFitgateWorker),
-/* harmony export */   oy: () => (/* binding */ WORKER_FLAG),
-/* harmony export */   ru: () => (/* binding */ workerRole)
+/* harmony export */   $: () => (/* binding */ isFitgateWorker),
+/* harmony export */   o: () => (/* binding */ WORKER_FLAG)
 /* harmony export */ });
-/* unused harmony export WORKER_ROLE */
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
 /**
- * Which kind of fitgate worker thread this is. Every worker runs the same bundle file as the
- * command (dist/ is one file per entry), so the entry files ask {@link isFitgateWorker} and stand
- * aside, and each worker module starts its loop only for its own role.
+ * Whether this thread is one of fitgate's worker threads. Every worker runs the same bundle as the
+ * command (the bundle of an entry is its worker script too), so the entry files ask
+ * {@link isFitgateWorker} and stand aside, and the worker module starts its loop instead.
  */
 
 /** The `workerData` key that marks a fitgate worker. */
 const WORKER_FLAG = 'fitgateWorker';
-/** The `workerData` key naming the worker's role; absent for a model worker. */
-const WORKER_ROLE = 'fitgateRole';
-/** True in any worker thread fitgate started (model or helper). */
+/** True in any worker thread fitgate started. */
 function isFitgateWorker() {
     return !node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.isMainThread && typeof node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData === 'object' && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData !== null && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_FLAG] === true;
-}
-/** The role of this fitgate worker (`model` when none is named), or null outside one. */
-function workerRole() {
-    if (!isFitgateWorker())
-        return null;
-    const role = node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_ROLE];
-    return typeof role === 'string' ? role : 'model';
 }
 
 
@@ -40659,9 +40648,9 @@ var worker_role = __nccwpck_require__(9506);
 
 
 
-/** True in a model worker thread started by {@link evaluateModels}. */
+/** True in a model worker thread started by {@link evaluateModels} (the only kind of fitgate worker). */
 function isModelWorker() {
-    return (0,worker_role/* workerRole */.ru)() === 'model';
+    return (0,worker_role/* isFitgateWorker */.$)();
 }
 /**
  * The file a worker should run: this module's own file, or null when it is not plain JavaScript
@@ -40693,7 +40682,7 @@ async function evaluateModels(repo, descriptors, settings, options = {}) {
     }
     const base = options.base;
     const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor });
-    const data = { [worker_role/* WORKER_FLAG */.oy]: true, root: options.root, settings };
+    const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
     return (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data });
 }
 /** The worker loop: evaluate each model task sent by the pool. */

@@ -39,9 +39,9 @@ export function sharedCrossValidation(context: CheckContext): CrossValidation {
   });
 }
 
-/** Memo key of {@link sharedSwing} (a helper thread may fill it). */
+/** Memo key of {@link sharedSwing}. */
 export const SHARED_SWING_KEY = 'diagnostics/swing';
-/** Memo key of {@link sharedLeakage} (a helper thread may fill it). */
+/** Memo key of {@link sharedLeakage}. */
 export const SHARED_LEAKAGE_KEY = 'diagnostics/leakage';
 
 /** Swing between and beyond samples of the refit (see {@link measureSwing}). */

@@ -18,7 +18,7 @@ import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
 import type { ModelResult } from '../result.js';
 import { runPool, serveTasks } from './pool.js';
-import { WORKER_FLAG, workerRole } from './worker-role.js';
+import { isFitgateWorker, WORKER_FLAG } from './worker-role.js';
 
 
 /** What every model worker receives as `workerData`. */
@@ -37,9 +37,9 @@ interface ModelTask {
   commit?: string;
 }
 
-/** True in a model worker thread started by {@link evaluateModels}. */
+/** True in a model worker thread started by {@link evaluateModels} (the only kind of fitgate worker). */
 export function isModelWorker(): boolean {
-  return workerRole() === 'model';
+  return isFitgateWorker();
 }
 
 /**
