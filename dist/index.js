@@ -34861,6 +34861,8 @@ var format = __nccwpck_require__(6264);
 var src_result = __nccwpck_require__(1666);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __nccwpck_require__(6412);
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __nccwpck_require__(5594);
 ;// CONCATENATED MODULE: ./src/report/svg/palette.ts
 /**
  * Colours and marks of every chart. Colours come from the colour-blind-safe set of Okabe & Ito
@@ -35594,6 +35596,7 @@ function residualsChart(chart, options) {
 
 
 
+
 const MARK = { pass: 'pass', warn: 'WARN', fail: 'FAIL', error: 'ERROR', skipped: 'skipped' };
 /** Name of the file `--html DIR` writes into DIR. */
 const HTML_FILE = 'index.html';
@@ -35651,26 +35654,8 @@ function num(v) {
 function badge(status) {
     return `<span class="badge ${(0,report_escape/* escapeHtml */.ZD)(status)}">${(0,report_escape/* escapeHtml */.ZD)(MARK[status] ?? status)}</span>`;
 }
-function limitText(c) {
-    if (c.limit === null && c.warn === null)
-        return 'off';
-    const parts = [];
-    if (c.warn !== null)
-        parts.push(`warn &gt; ${num(c.warn)}`);
-    if (c.limit !== null)
-        parts.push(`fail &gt; ${num(c.limit)}`);
-    return parts.join(', ');
-}
 function verdictText(result) {
-    const { counts } = result;
-    const head = result.verdict === 'pass'
-        ? 'every model within its limits'
-        : result.verdict === 'warn'
-            ? `every model within its fail limits, ${counts.warn} with warnings`
-            : result.verdict === 'fail'
-                ? `${counts.fail} of ${counts.models} models over a limit`
-                : `${counts.error} of ${counts.models} models could not be checked`;
-    return `${badge(result.verdict)} ${(0,report_escape/* escapeHtml */.ZD)(head)} <span class="muted">(${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)</span>`;
+    return `${badge(result.verdict)} ${(0,report_escape/* escapeHtml */.ZD)((0,wording/* verdictHeadline */.ge)(result))} <span class="muted">(${(0,report_escape/* escapeHtml */.ZD)((0,wording/* countsText */.WN)(result.counts))})</span>`;
 }
 function overview(result) {
     const rows = result.models.map((m, i) => {
@@ -35692,7 +35677,7 @@ function checksTable(m) {
         const advice = c.advice ? ` <span class="advice">${(0,report_escape/* escapeHtml */.ZD)(c.advice)}</span>` : '';
         const suggestion = c.suggestion ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>` : '';
         return (`<tr data-check="${(0,report_escape/* escapeHtml */.ZD)(c.id)}" data-status="${(0,report_escape/* escapeHtml */.ZD)(c.status)}"><td>${(0,report_escape/* escapeHtml */.ZD)(title)}<br><code class="muted">${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code></td><td>${badge(c.status)}</td>` +
-            `<td class="num">${num(c.value)}</td><td class="num">${limitText(c)}</td><td class="num">${c.line}</td>` +
+            `<td class="num">${num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
             `<td class="finding">${(0,report_escape/* escapeHtml */.ZD)(c.message)}.${advice}${suggestion}</td></tr>`);
     });
     return ('<table class="checks"><thead><tr><th>Check</th><th>Status</th><th class="num">Value</th><th class="num">Limit</th><th class="num">Line</th><th>Finding</th></tr></thead>' +
@@ -35794,6 +35779,7 @@ function formatHtml(result, options = {}) {
 
 
 
+
 function attrs(pairs) {
     return Object.entries(pairs)
         .map(([k, v]) => ` ${k}="${(0,report_escape/* escapeXml */.X)(String(v))}"`)
@@ -35801,12 +35787,7 @@ function attrs(pairs) {
 }
 function junit_figure(c) {
     const value = c.value === null ? '–' : (0,format/* formatNumber */.Z)((0,src_result/* fromJsonNumber */.M)(c.value));
-    const limits = [];
-    if (c.warn !== null)
-        limits.push(`warn > ${(0,format/* formatNumber */.Z)(c.warn)}`);
-    if (c.limit !== null)
-        limits.push(`fail > ${(0,format/* formatNumber */.Z)(c.limit)}`);
-    return `value ${value}; limit ${limits.length ? limits.join(', ') : 'off'}`;
+    return `value ${value}; limit ${(0,wording/* limitText */.PW)(c)}`;
 }
 function suite(m, failOn) {
     const cases = [];
@@ -41334,6 +41315,8 @@ function mermaidChart(model, options = {}) {
 
 // EXTERNAL MODULE: ./src/result.ts
 var result = __nccwpck_require__(1666);
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __nccwpck_require__(5594);
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
 /**
  * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
@@ -41342,6 +41325,7 @@ var result = __nccwpck_require__(1666);
  * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
  * readable length; the whole report stays under `maxBytes`.
  */
+
 
 
 
@@ -41370,29 +41354,10 @@ function signed(x, suffix = '') {
         return `0${suffix}`;
     return `${x > 0 ? '+' : ''}${(0,format/* formatNumber */.Z)(x)}${suffix}`;
 }
-function limitText(c) {
-    if (c.limit === null && c.warn === null)
-        return 'off';
-    const parts = [];
-    if (c.warn !== null)
-        parts.push(`warn > ${(0,format/* formatNumber */.Z)(c.warn)}`);
-    if (c.limit !== null)
-        parts.push(`fail > ${(0,format/* formatNumber */.Z)(c.limit)}`);
-    return parts.join(', ');
-}
 /** The verdict in one line. */
 function verdictLine(result) {
-    const { counts } = result;
-    const head = result.verdict === 'pass'
-        ? counts.models === 0
-            ? 'no models to check'
-            : 'every model within its limits'
-        : result.verdict === 'warn'
-            ? `every model within its fail limits, ${counts.warn} with warnings`
-            : result.verdict === 'fail'
-                ? `${counts.fail} of ${counts.models} models over a limit`
-                : `${counts.error} of ${counts.models} models could not be checked`;
-    return `**${MARK[result.verdict]}**: ${head} (${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)`;
+    const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : (0,wording/* verdictHeadline */.ge)(result);
+    return `**${MARK[result.verdict]}**: ${head} (${(0,wording/* countsText */.WN)(result.counts)})`;
 }
 /** The "against base" cell of a model: `new`, the changes, or `–`. */
 function baseCell(m) {
@@ -41435,7 +41400,7 @@ function modelDetail(m) {
     const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
     lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
     for (const c of shown)
-        lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);
+        lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);
     lines.push('');
     for (const c of shown)
         lines.push(`- **${c.id}**: ${markdown_text(c.message)}. ${markdown_text(c.advice)}`);
@@ -41654,6 +41619,48 @@ function formatText(result, options = {}) {
     // A line that would begin with `::` (after white space, which a CI runner trims) could be read
     // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
     return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
+}
+
+
+/***/ }),
+
+/***/ 5594:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   PW: () => (/* binding */ limitText),
+/* harmony export */   WN: () => (/* binding */ countsText),
+/* harmony export */   ge: () => (/* binding */ verdictHeadline)
+/* harmony export */ });
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6264);
+/**
+ * Sentences several reporters print, as plain text: each reporter escapes them for its medium
+ * (HTML, Markdown, XML).
+ */
+
+/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
+function limitText(c) {
+    const parts = [];
+    if (c.warn !== null)
+        parts.push(`warn > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.warn)}`);
+    if (c.limit !== null)
+        parts.push(`fail > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.limit)}`);
+    return parts.length ? parts.join(', ') : 'off';
+}
+/** The run's verdict in words, e.g. `2 of 6 models over a limit`. */
+function verdictHeadline(result) {
+    const { counts } = result;
+    if (result.verdict === 'pass')
+        return 'every model within its limits';
+    if (result.verdict === 'warn')
+        return `every model within its fail limits, ${counts.warn} with warnings`;
+    if (result.verdict === 'fail')
+        return `${counts.fail} of ${counts.models} models over a limit`;
+    return `${counts.error} of ${counts.models} models could not be checked`;
+}
+/** The counts behind the verdict: `6 checked: 1 pass, 0 warn, 5 fail, 0 error`. */
+function countsText(counts) {
+    return `${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error`;
 }
 
 

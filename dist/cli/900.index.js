@@ -134,6 +134,8 @@ function mermaidChart(model, options = {}) {
 
 // EXTERNAL MODULE: ./src/result.ts
 var result = __webpack_require__(1666);
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __webpack_require__(5594);
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
 /**
  * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
@@ -142,6 +144,7 @@ var result = __webpack_require__(1666);
  * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
  * readable length; the whole report stays under `maxBytes`.
  */
+
 
 
 
@@ -170,29 +173,10 @@ function signed(x, suffix = '') {
         return `0${suffix}`;
     return `${x > 0 ? '+' : ''}${(0,format/* formatNumber */.Z)(x)}${suffix}`;
 }
-function limitText(c) {
-    if (c.limit === null && c.warn === null)
-        return 'off';
-    const parts = [];
-    if (c.warn !== null)
-        parts.push(`warn > ${(0,format/* formatNumber */.Z)(c.warn)}`);
-    if (c.limit !== null)
-        parts.push(`fail > ${(0,format/* formatNumber */.Z)(c.limit)}`);
-    return parts.join(', ');
-}
 /** The verdict in one line. */
 function verdictLine(result) {
-    const { counts } = result;
-    const head = result.verdict === 'pass'
-        ? counts.models === 0
-            ? 'no models to check'
-            : 'every model within its limits'
-        : result.verdict === 'warn'
-            ? `every model within its fail limits, ${counts.warn} with warnings`
-            : result.verdict === 'fail'
-                ? `${counts.fail} of ${counts.models} models over a limit`
-                : `${counts.error} of ${counts.models} models could not be checked`;
-    return `**${MARK[result.verdict]}**: ${head} (${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)`;
+    const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : (0,wording/* verdictHeadline */.ge)(result);
+    return `**${MARK[result.verdict]}**: ${head} (${(0,wording/* countsText */.WN)(result.counts)})`;
 }
 /** The "against base" cell of a model: `new`, the changes, or `–`. */
 function baseCell(m) {
@@ -235,7 +219,7 @@ function modelDetail(m) {
     const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
     lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
     for (const c of shown)
-        lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);
+        lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);
     lines.push('');
     for (const c of shown)
         lines.push(`- **${c.id}**: ${markdown_text(c.message)}. ${markdown_text(c.advice)}`);
@@ -347,6 +331,48 @@ function unitOf(column) {
 function axisLabel(column) {
     const unit = unitOf(column);
     return unit ? `${column} (${unit})` : column;
+}
+
+
+/***/ }),
+
+/***/ 5594:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   PW: () => (/* binding */ limitText),
+/* harmony export */   WN: () => (/* binding */ countsText),
+/* harmony export */   ge: () => (/* binding */ verdictHeadline)
+/* harmony export */ });
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6264);
+/**
+ * Sentences several reporters print, as plain text: each reporter escapes them for its medium
+ * (HTML, Markdown, XML).
+ */
+
+/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
+function limitText(c) {
+    const parts = [];
+    if (c.warn !== null)
+        parts.push(`warn > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.warn)}`);
+    if (c.limit !== null)
+        parts.push(`fail > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.limit)}`);
+    return parts.length ? parts.join(', ') : 'off';
+}
+/** The run's verdict in words, e.g. `2 of 6 models over a limit`. */
+function verdictHeadline(result) {
+    const { counts } = result;
+    if (result.verdict === 'pass')
+        return 'every model within its limits';
+    if (result.verdict === 'warn')
+        return `every model within its fail limits, ${counts.warn} with warnings`;
+    if (result.verdict === 'fail')
+        return `${counts.fail} of ${counts.models} models over a limit`;
+    return `${counts.error} of ${counts.models} models could not be checked`;
+}
+/** The counts behind the verdict: `6 checked: 1 pass, 0 warn, 5 fail, 0 error`. */
+function countsText(counts) {
+    return `${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error`;
 }
 
 

@@ -24,6 +24,8 @@ var format = __webpack_require__(6264);
 var src_result = __webpack_require__(1666);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __webpack_require__(4031);
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __webpack_require__(5594);
 ;// CONCATENATED MODULE: ./src/report/svg/palette.ts
 /**
  * Colours and marks of every chart. Colours come from the colour-blind-safe set of Okabe & Ito
@@ -757,6 +759,7 @@ function residualsChart(chart, options) {
 
 
 
+
 const MARK = { pass: 'pass', warn: 'WARN', fail: 'FAIL', error: 'ERROR', skipped: 'skipped' };
 /** Name of the file `--html DIR` writes into DIR. */
 const HTML_FILE = 'index.html';
@@ -814,26 +817,8 @@ function num(v) {
 function badge(status) {
     return `<span class="badge ${(0,report_escape/* escapeHtml */.ZD)(status)}">${(0,report_escape/* escapeHtml */.ZD)(MARK[status] ?? status)}</span>`;
 }
-function limitText(c) {
-    if (c.limit === null && c.warn === null)
-        return 'off';
-    const parts = [];
-    if (c.warn !== null)
-        parts.push(`warn &gt; ${num(c.warn)}`);
-    if (c.limit !== null)
-        parts.push(`fail &gt; ${num(c.limit)}`);
-    return parts.join(', ');
-}
 function verdictText(result) {
-    const { counts } = result;
-    const head = result.verdict === 'pass'
-        ? 'every model within its limits'
-        : result.verdict === 'warn'
-            ? `every model within its fail limits, ${counts.warn} with warnings`
-            : result.verdict === 'fail'
-                ? `${counts.fail} of ${counts.models} models over a limit`
-                : `${counts.error} of ${counts.models} models could not be checked`;
-    return `${badge(result.verdict)} ${(0,report_escape/* escapeHtml */.ZD)(head)} <span class="muted">(${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)</span>`;
+    return `${badge(result.verdict)} ${(0,report_escape/* escapeHtml */.ZD)((0,wording/* verdictHeadline */.ge)(result))} <span class="muted">(${(0,report_escape/* escapeHtml */.ZD)((0,wording/* countsText */.WN)(result.counts))})</span>`;
 }
 function overview(result) {
     const rows = result.models.map((m, i) => {
@@ -855,7 +840,7 @@ function checksTable(m) {
         const advice = c.advice ? ` <span class="advice">${(0,report_escape/* escapeHtml */.ZD)(c.advice)}</span>` : '';
         const suggestion = c.suggestion ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>` : '';
         return (`<tr data-check="${(0,report_escape/* escapeHtml */.ZD)(c.id)}" data-status="${(0,report_escape/* escapeHtml */.ZD)(c.status)}"><td>${(0,report_escape/* escapeHtml */.ZD)(title)}<br><code class="muted">${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code></td><td>${badge(c.status)}</td>` +
-            `<td class="num">${num(c.value)}</td><td class="num">${limitText(c)}</td><td class="num">${c.line}</td>` +
+            `<td class="num">${num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
             `<td class="finding">${(0,report_escape/* escapeHtml */.ZD)(c.message)}.${advice}${suggestion}</td></tr>`);
     });
     return ('<table class="checks"><thead><tr><th>Check</th><th>Status</th><th class="num">Value</th><th class="num">Limit</th><th class="num">Line</th><th>Finding</th></tr></thead>' +
@@ -957,6 +942,7 @@ function formatHtml(result, options = {}) {
 
 
 
+
 function attrs(pairs) {
     return Object.entries(pairs)
         .map(([k, v]) => ` ${k}="${(0,report_escape/* escapeXml */.X)(String(v))}"`)
@@ -964,12 +950,7 @@ function attrs(pairs) {
 }
 function junit_figure(c) {
     const value = c.value === null ? '–' : (0,format/* formatNumber */.Z)((0,src_result/* fromJsonNumber */.M)(c.value));
-    const limits = [];
-    if (c.warn !== null)
-        limits.push(`warn > ${(0,format/* formatNumber */.Z)(c.warn)}`);
-    if (c.limit !== null)
-        limits.push(`fail > ${(0,format/* formatNumber */.Z)(c.limit)}`);
-    return `value ${value}; limit ${limits.length ? limits.join(', ') : 'off'}`;
+    return `value ${value}; limit ${(0,wording/* limitText */.PW)(c)}`;
 }
 function suite(m, failOn) {
     const cases = [];
@@ -1222,6 +1203,48 @@ function unitOf(column) {
 function axisLabel(column) {
     const unit = unitOf(column);
     return unit ? `${column} (${unit})` : column;
+}
+
+
+/***/ }),
+
+/***/ 5594:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   PW: () => (/* binding */ limitText),
+/* harmony export */   WN: () => (/* binding */ countsText),
+/* harmony export */   ge: () => (/* binding */ verdictHeadline)
+/* harmony export */ });
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6264);
+/**
+ * Sentences several reporters print, as plain text: each reporter escapes them for its medium
+ * (HTML, Markdown, XML).
+ */
+
+/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
+function limitText(c) {
+    const parts = [];
+    if (c.warn !== null)
+        parts.push(`warn > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.warn)}`);
+    if (c.limit !== null)
+        parts.push(`fail > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.limit)}`);
+    return parts.length ? parts.join(', ') : 'off';
+}
+/** The run's verdict in words, e.g. `2 of 6 models over a limit`. */
+function verdictHeadline(result) {
+    const { counts } = result;
+    if (result.verdict === 'pass')
+        return 'every model within its limits';
+    if (result.verdict === 'warn')
+        return `every model within its fail limits, ${counts.warn} with warnings`;
+    if (result.verdict === 'fail')
+        return `${counts.fail} of ${counts.models} models over a limit`;
+    return `${counts.error} of ${counts.models} models could not be checked`;
+}
+/** The counts behind the verdict: `6 checked: 1 pass, 0 warn, 5 fail, 0 error`. */
+function countsText(counts) {
+    return `${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error`;
 }
 
 

@@ -8,8 +8,9 @@
 import { findCheck } from '../checks/index.js';
 import { formatNumber } from '../format.js';
 import type { ChartData } from '../model/chart-data.js';
-import { fromJsonNumber, type CheckResult, type JsonNumber, type ModelResult, type Result } from '../result.js';
+import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result.js';
 import { escapeHtml } from './escape.js';
+import { countsText, limitText, verdictHeadline } from './wording.js';
 import { coefficientBarsChart } from './svg/coefficient-bars.js';
 import { cvCurveChart } from './svg/cv-curve.js';
 import { fitCurveChart } from './svg/fit-curve.js';
@@ -86,25 +87,8 @@ function badge(status: string): string {
   return `<span class="badge ${escapeHtml(status)}">${escapeHtml(MARK[status] ?? status)}</span>`;
 }
 
-function limitText(c: CheckResult): string {
-  if (c.limit === null && c.warn === null) return 'off';
-  const parts: string[] = [];
-  if (c.warn !== null) parts.push(`warn &gt; ${num(c.warn)}`);
-  if (c.limit !== null) parts.push(`fail &gt; ${num(c.limit)}`);
-  return parts.join(', ');
-}
-
 function verdictText(result: Result): string {
-  const { counts } = result;
-  const head =
-    result.verdict === 'pass'
-      ? 'every model within its limits'
-      : result.verdict === 'warn'
-        ? `every model within its fail limits, ${counts.warn} with warnings`
-        : result.verdict === 'fail'
-          ? `${counts.fail} of ${counts.models} models over a limit`
-          : `${counts.error} of ${counts.models} models could not be checked`;
-  return `${badge(result.verdict)} ${escapeHtml(head)} <span class="muted">(${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)</span>`;
+  return `${badge(result.verdict)} ${escapeHtml(verdictHeadline(result))} <span class="muted">(${escapeHtml(countsText(result.counts))})</span>`;
 }
 
 function overview(result: Result): string {
@@ -133,7 +117,7 @@ function checksTable(m: ModelResult): string {
     const suggestion = c.suggestion ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${escapeHtml(c.suggestion.text)}</span>` : '';
     return (
       `<tr data-check="${escapeHtml(c.id)}" data-status="${escapeHtml(c.status)}"><td>${escapeHtml(title)}<br><code class="muted">${escapeHtml(c.id)}</code></td><td>${badge(c.status)}</td>` +
-      `<td class="num">${num(c.value)}</td><td class="num">${limitText(c)}</td><td class="num">${c.line}</td>` +
+      `<td class="num">${num(c.value)}</td><td class="num">${escapeHtml(limitText(c))}</td><td class="num">${c.line}</td>` +
       `<td class="finding">${escapeHtml(c.message)}.${advice}${suggestion}</td></tr>`
     );
   });

@@ -9,6 +9,7 @@
 import { formatNumber } from '../format.js';
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result.js';
 import { escapeXml } from './escape.js';
+import { limitText } from './wording.js';
 
 /** Options of the JUnit report. */
 export interface JunitOptions {
@@ -24,10 +25,7 @@ function attrs(pairs: Record<string, string | number>): string {
 
 function figure(c: CheckResult): string {
   const value = c.value === null ? '–' : formatNumber(fromJsonNumber(c.value));
-  const limits: string[] = [];
-  if (c.warn !== null) limits.push(`warn > ${formatNumber(c.warn)}`);
-  if (c.limit !== null) limits.push(`fail > ${formatNumber(c.limit)}`);
-  return `value ${value}; limit ${limits.length ? limits.join(', ') : 'off'}`;
+  return `value ${value}; limit ${limitText(c)}`;
 }
 
 interface Counts {

@@ -6,9 +6,10 @@
  * readable length; the whole report stays under `maxBytes`.
  */
 import { mermaidChart } from './mermaid.js';
-import { fromJsonNumber, type CheckResult, type JsonNumber, type ModelResult, type Result } from '../result.js';
+import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result.js';
 import { formatNumber } from '../format.js';
 import { escapeMarkdown } from './escape.js';
+import { countsText, limitText, verdictHeadline } from './wording.js';
 
 /** Options of the Markdown report. */
 export interface MarkdownOptions {
@@ -48,28 +49,10 @@ function signed(x: number, suffix = ''): string {
   return `${x > 0 ? '+' : ''}${formatNumber(x)}${suffix}`;
 }
 
-function limitText(c: CheckResult): string {
-  if (c.limit === null && c.warn === null) return 'off';
-  const parts: string[] = [];
-  if (c.warn !== null) parts.push(`warn > ${formatNumber(c.warn)}`);
-  if (c.limit !== null) parts.push(`fail > ${formatNumber(c.limit)}`);
-  return parts.join(', ');
-}
-
 /** The verdict in one line. */
 export function verdictLine(result: Result): string {
-  const { counts } = result;
-  const head =
-    result.verdict === 'pass'
-      ? counts.models === 0
-        ? 'no models to check'
-        : 'every model within its limits'
-      : result.verdict === 'warn'
-        ? `every model within its fail limits, ${counts.warn} with warnings`
-        : result.verdict === 'fail'
-          ? `${counts.fail} of ${counts.models} models over a limit`
-          : `${counts.error} of ${counts.models} models could not be checked`;
-  return `**${MARK[result.verdict]}**: ${head} (${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error)`;
+  const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : verdictHeadline(result);
+  return `**${MARK[result.verdict]}**: ${head} (${countsText(result.counts)})`;
 }
 
 /** The "against base" cell of a model: `new`, the changes, or `–`. */
