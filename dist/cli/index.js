@@ -1859,8 +1859,8 @@ function ridgePath(data, lambdas, penalised) {
 
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(7114);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
-var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts
+var diagnostics_folds = __nccwpck_require__(9236);
 ;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
 /**
  * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
@@ -2458,70 +2458,14 @@ function crossValidate(design, data, fit, folds, options = {}) {
 
 /***/ }),
 
-/***/ 7694:
+/***/ 9236:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  o: () => (/* binding */ assignFolds)
-});
-
-// UNUSED EXPORTS: foldSizes
-
-;// CONCATENATED MODULE: ./src/diagnostics/random.ts
-/**
- * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
- * every machine and every run with the same seed.
- */
-/**
- * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
- * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
- * state passed through a 32-bit integer finaliser (two xor-shift-multiply rounds, the constants of
- * the "lowbias32" mixer published by C. Wellons, "Prospecting for hash functions", 2018). Period
- * 2^32; good enough to shuffle rows, not for cryptography.
- *
- * @param seed any finite number; it is reduced to an unsigned 32-bit integer (the fraction is dropped)
- * @returns a function giving the next number in [0, 1)
- * @throws RangeError when the seed is not finite
- */
-function seededRandom(seed) {
-    if (!Number.isFinite(seed))
-        throw new RangeError(`seededRandom: seed must be a finite number, got ${String(seed)}`);
-    let state = Math.trunc(seed) >>> 0;
-    return () => {
-        state = (state + 0x9e3779b9) >>> 0;
-        let z = state;
-        z ^= z >>> 16;
-        z = Math.imul(z, 0x7feb352d);
-        z ^= z >>> 15;
-        z = Math.imul(z, 0x846ca68b);
-        z ^= z >>> 16;
-        return (z >>> 0) / 4294967296;
-    };
-}
-/**
- * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
- * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
- *
- * @param n length (a non-negative integer)
- * @param random uniform numbers in [0, 1)
- * @returns Int32Array of length n
- */
-function permutation(n, random) {
-    const out = new Int32Array(n);
-    for (let i = 0; i < n; i++)
-        out[i] = i;
-    for (let i = n - 1; i > 0; i--) {
-        const j = Math.floor(random() * (i + 1));
-        const t = out[i];
-        out[i] = out[j];
-        out[j] = t;
-    }
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/folds.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   o: () => (/* binding */ assignFolds)
+/* harmony export */ });
+/* unused harmony export foldSizes */
+/* harmony import */ var _random_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5089);
 
 /**
  * Fold sizes of k-fold cross-validation on n rows: the first n mod k folds hold floor(n/k) + 1
@@ -2556,13 +2500,82 @@ function assignFolds(n, k, order, seed) {
     const kk = Math.max(1, Math.min(k, n));
     const sizes = foldSizes(n, kk);
     const foldOf = new Int32Array(n);
-    const perm = order === 'shuffled' ? permutation(n, seededRandom(seed)) : null;
+    const perm = order === 'shuffled' ? (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .permutation */ .dL)(n, (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .seededRandom */ .Is)(seed)) : null;
     let pos = 0;
     for (let f = 0; f < kk; f++) {
         for (let c = 0; c < sizes[f]; c++, pos++)
             foldOf[perm === null ? pos : perm[pos]] = f;
     }
     return { k: kk, foldOf, sizes, order, seed };
+}
+
+
+/***/ }),
+
+/***/ 5089:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Is: () => (/* binding */ seededRandom),
+/* harmony export */   QV: () => (/* binding */ mix32),
+/* harmony export */   dL: () => (/* binding */ permutation)
+/* harmony export */ });
+/**
+ * A small seeded pseudo-random generator, so that shuffled cross-validation folds are the same on
+ * every machine and every run with the same seed.
+ */
+/**
+ * Returns a generator of uniform numbers in [0, 1) from a 32-bit seed. The state advances by the
+ * odd constant 0x9e3779b9 (the golden-ratio increment of a Weyl sequence) and each output is the
+ * state passed through a 32-bit integer finaliser (two xor-shift-multiply rounds, the constants of
+ * the "lowbias32" mixer published by C. Wellons, "Prospecting for hash functions", 2018). Period
+ * 2^32; good enough to shuffle rows, not for cryptography.
+ *
+ * @param seed any finite number; it is reduced to an unsigned 32-bit integer (the fraction is dropped)
+ * @returns a function giving the next number in [0, 1)
+ * @throws RangeError when the seed is not finite
+ */
+function seededRandom(seed) {
+    if (!Number.isFinite(seed))
+        throw new RangeError(`seededRandom: seed must be a finite number, got ${String(seed)}`);
+    let state = Math.trunc(seed) >>> 0;
+    return () => {
+        state = (state + 0x9e3779b9) >>> 0;
+        return mix32(state) / 4294967296;
+    };
+}
+/**
+ * The 32-bit integer finaliser of {@link seededRandom} ("lowbias32", C. Wellons, "Prospecting for
+ * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
+ * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
+ */
+function mix32(z) {
+    z ^= z >>> 16;
+    z = Math.imul(z, 0x7feb352d);
+    z ^= z >>> 15;
+    z = Math.imul(z, 0x846ca68b);
+    z ^= z >>> 16;
+    return z >>> 0;
+}
+/**
+ * A uniformly random permutation of 0..n-1 (Fisher-Yates shuffle, Durstenfeld's in-place form;
+ * Knuth, The Art of Computer Programming vol. 2, 3rd ed., algorithm 3.4.2 P).
+ *
+ * @param n length (a non-negative integer)
+ * @param random uniform numbers in [0, 1)
+ * @returns Int32Array of length n
+ */
+function permutation(n, random) {
+    const out = new Int32Array(n);
+    for (let i = 0; i < n; i++)
+        out[i] = i;
+    for (let i = n - 1; i > 0; i--) {
+        const j = Math.floor(random() * (i + 1));
+        const t = out[i];
+        out[i] = out[j];
+        out[j] = t;
+    }
+    return out;
 }
 
 
@@ -2588,9 +2601,12 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(7114);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
-var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts
+var diagnostics_folds = __nccwpck_require__(9236);
+// EXTERNAL MODULE: ./src/diagnostics/random.ts
+var random = __nccwpck_require__(5089);
 ;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
+
 /** How many line numbers of each file to report. */
 const LEAKAGE_EXAMPLE_LINES = 5;
 const f64 = new Float64Array(1);
@@ -2609,12 +2625,7 @@ function rowHash(columns, i) {
         h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
         h ^= h >>> 13;
     }
-    h ^= h >>> 16;
-    h = Math.imul(h, 0x7feb352d);
-    h ^= h >>> 15;
-    h = Math.imul(h, 0x846ca68b);
-    h ^= h >>> 16;
-    return h >>> 0;
+    return (0,random/* mix32 */.QV)(h);
 }
 function sameInputs(a, i, b, j) {
     for (let c = 0; c < a.length; c++)
@@ -8528,8 +8539,8 @@ var regression = __nccwpck_require__(1788);
 var result = __nccwpck_require__(1666);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(7114);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts + 1 modules
-var diagnostics_folds = __nccwpck_require__(7694);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts
+var diagnostics_folds = __nccwpck_require__(9236);
 // EXTERNAL MODULE: ./src/diagnostics/shared.ts + 4 modules
 var shared = __nccwpck_require__(9389);
 // EXTERNAL MODULE: ./src/model/blocks.ts

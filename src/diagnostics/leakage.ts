@@ -3,6 +3,7 @@
  * values, confirmed by exact comparison on hash hits.
  */
 import type { ModelData } from '../checks/types.js';
+import { mix32 } from './random.js';
 
 /** How many line numbers of each file to report. */
 export const LEAKAGE_EXAMPLE_LINES = 5;
@@ -40,12 +41,7 @@ function rowHash(columns: readonly Float64Array[], i: number): number {
     h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
     h ^= h >>> 13;
   }
-  h ^= h >>> 16;
-  h = Math.imul(h, 0x7feb352d);
-  h ^= h >>> 15;
-  h = Math.imul(h, 0x846ca68b);
-  h ^= h >>> 16;
-  return h >>> 0;
+  return mix32(h);
 }
 
 function sameInputs(a: readonly Float64Array[], i: number, b: readonly Float64Array[], j: number): boolean {

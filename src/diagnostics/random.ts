@@ -19,14 +19,22 @@ export function seededRandom(seed: number): () => number {
   let state = Math.trunc(seed) >>> 0;
   return () => {
     state = (state + 0x9e3779b9) >>> 0;
-    let z = state;
-    z ^= z >>> 16;
-    z = Math.imul(z, 0x7feb352d);
-    z ^= z >>> 15;
-    z = Math.imul(z, 0x846ca68b);
-    z ^= z >>> 16;
-    return (z >>> 0) / 4294967296;
+    return mix32(state) / 4294967296;
   };
+}
+
+/**
+ * The 32-bit integer finaliser of {@link seededRandom} ("lowbias32", C. Wellons, "Prospecting for
+ * hash functions", 2018): xor-shift, multiply, xor-shift, multiply, xor-shift; every input bit
+ * reaches every output bit. Returns an unsigned 32-bit integer. Leakage hashes rows with it too.
+ */
+export function mix32(z: number): number {
+  z ^= z >>> 16;
+  z = Math.imul(z, 0x7feb352d);
+  z ^= z >>> 15;
+  z = Math.imul(z, 0x846ca68b);
+  z ^= z >>> 16;
+  return z >>> 0;
 }
 
 /**
