@@ -3219,7 +3219,11 @@ function predictorAlong(design, coefficients, c, fixed) {
     const varying = design.terms.map((t) => t.inputs.includes(name));
     const constantColumns = (n) => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
     if (varying.every(Boolean)) {
-        return (xs) => (0,blocks/* predictRows */.tp)(design, { inputs: design.inputs.map((_, k) => (k === c ? xs : constantColumns(xs.length)[k])), rows: xs.length }, coefficients);
+        return (xs) => {
+            const columns = constantColumns(xs.length);
+            columns[c] = xs;
+            return (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: xs.length }, coefficients);
+        };
     }
     // The fixed part: intercept plus every term that does not read input c, at the fixed values.
     const row = design.fill(constantColumns(1), 0, 1);
