@@ -1,9 +1,14 @@
 /**
  * The command line: the only reader of argv. Produces the same {@link Settings} the action's
  * `inputs.ts` does, plus the CLI's own output options.
+ *
+ * Tokens come from Node's own `util.parseArgs` (long options, `--name=value`, `--` ending the
+ * options, options and arguments in any order); the commands, their options, the checks of
+ * values and the help text are declared once in {@link COMMANDS}. A repeated option keeps its
+ * last value, as is usual for command lines.
  */
-import { Command, CommanderError, Option } from 'commander';
 import path from 'node:path';
+import { parseArgs as tokenize } from 'node:util';
 import { InputError } from './errors.js';
 import type { Settings } from './settings.js';
 import { parseShard, type Shard } from './shard.js';
@@ -60,12 +65,11 @@ export interface MergeCommand {
 }
 
 /** Reads `--jobs`: a whole number >= 1. */
-function parseJobs(value: unknown): number | null {
+function parseJobs(value: string | undefined): number | null {
   if (value === undefined) return null;
-  const text = String(value);
-  const n = Number(text);
-  if (!/^\s*\d+\s*$/.test(text) || !Number.isSafeInteger(n) || n < 1) {
-    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${JSON.stringify(text)}`, { key: '--jobs' });
+  const n = Number(value);
+  if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1) {
+    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${JSON.stringify(value)}`, { key: '--jobs' });
   }
   return n;
 }
@@ -73,104 +77,250 @@ function parseJobs(value: unknown): number | null {
 /** What the command line asked for: a command to run, or text to print (help, version). */
 export type Parsed = CheckCommand | MergeCommand | { kind: 'print'; text: string; status: 0 | 2 };
 
+/** One option of a command: a switch, or an option taking a value (`value` names it in the help). */
+interface OptionSpec {
+  name: string;
+  description: string;
+  /** Placeholder of the option's value (`--out <file>`); absent for a switch. */
+  value?: string;
+  /** The only values accepted, when the option has a fixed set. */
+  choices?: readonly string[];
+  /** The value when the option is not given (shown in the help). */
+  default?: string;
+}
+
+/** A command: its positional argument and its options. */
+interface CommandSpec {
+  name: 'check' | 'merge';
+  summary: string;
+  argument: { name: string; description: string; required: boolean };
+  options: readonly OptionSpec[];
+}
+
+const FORMAT: OptionSpec = { name: 'format', value: 'format', description: 'report format', choices: ['text', 'json', 'markdown'], default: 'text' };
+const OUT: OptionSpec = { name: 'out', value: 'file', description: 'write the report to a file instead of standard output' };
+const FAIL_ON: OptionSpec = { name: 'fail-on', value: 'level', description: 'what fails the run', choices: ['fail', 'warn'], default: 'fail' };
+const COLOR: OptionSpec = { name: 'color', description: 'force colours in the text report' };
+const NO_COLOR: OptionSpec = { name: 'no-color', description: 'never use colours' };
+const DEBUG: OptionSpec = { name: 'debug', description: 'print stack traces of unexpected errors' };
+const HELP: OptionSpec = { name: 'help', description: 'print this help' };
+
+/** Every command, in the order the main help lists them. */
+const COMMANDS: readonly CommandSpec[] = [
+  {
+    name: 'check',
+    summary: 'Check models against their limits. Exit status: 0 within limits, 1 a model over a limit, 2 the run could not be done.',
+    argument: { name: 'descriptor', description: 'model descriptors to check (default: every model the settings file matches)', required: false },
+    options: [
+      { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read', default: '.' },
+      { name: 'config', value: 'file', description: 'settings file, relative to the root', default: 'fitgate.yml' },
+      FORMAT,
+      OUT,
+      FAIL_ON,
+      COLOR,
+      NO_COLOR,
+      { name: 'base', value: 'ref', description: 'also check the models as they are on this git commit and compare (hold-out RMSE, gap ratio, the base_change limit)' },
+      { name: 'shard', value: 'K/N', description: 'check only share K of N of the models (descriptors sorted by path, dealt round-robin); join the JSON reports with `fitgate merge`' },
+      { name: 'jobs', value: 'n', description: 'worker threads to run models on (default: one per core; 1 = serial)' },
+      { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
+      { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },
+      { name: 'junit', value: 'file', description: 'also write a JUnit XML report to this file' },
+      DEBUG,
+      HELP,
+    ],
+  },
+  {
+    name: 'merge',
+    summary: 'Join the JSON reports of `fitgate check --shard K/N --format json` jobs into one report. Exit status as for check.',
+    argument: { name: 'report', description: 'JSON report files', required: true },
+    options: [
+      FORMAT,
+      OUT,
+      FAIL_ON,
+      { name: 'html', value: 'dir', description: 'also write the HTML report of the joined result into this folder' },
+      { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log of the joined result to this file' },
+      { name: 'junit', value: 'file', description: 'also write a JUnit XML report of the joined result to this file' },
+      COLOR,
+      NO_COLOR,
+      DEBUG,
+      HELP,
+    ],
+  },
+];
+
+const DESCRIPTION = 'Refit committed regression models, re-score them on their hold-out rows, and fail when they overfit.';
+
+/** Help lines are wrapped to this many columns. */
+const HELP_WIDTH = 80;
+
+/** What a command's options came to: values of options that take one, and the switches given. */
+interface OptionValues {
+  values: Map<string, string>;
+  switches: Set<string>;
+  /** `true` for `--color`, `false` for `--no-color`, whichever came last; null when neither. */
+  color: boolean | null;
+  positionals: string[];
+}
+
+/** A mistake on the command line: printed with a pointer to the help, exit status 2. */
+function usageError(message: string, command: CommandSpec | null): Parsed {
+  const hint = command === null ? '(run `fitgate --help` for the commands)' : `(run \`fitgate ${command.name} --help\` for the options)`;
+  return { kind: 'print', text: `error: ${message}\n${hint}\n`, status: 2 };
+}
+
 /**
  * Parses argv (without `node` and the script).
  * @param argv arguments
  * @param cwd the working directory paths are relative to
  */
 export function parseArgs(argv: string[], cwd: string): Parsed {
-  let printed = '';
-  let parsed: CheckCommand | MergeCommand | null = null;
-  const program = new Command('fitgate')
-    .description('Refit committed regression models, re-score them on their hold-out rows, and fail when they overfit.')
-    .version(VERSION, '-V, --version')
-    .exitOverride()
-    .configureOutput({ writeOut: (s) => (printed += s), writeErr: (s) => (printed += s) })
-    .showHelpAfterError('(run `fitgate check --help` for the options)');
-  program
-    .command('check')
-    .description('Check models against their limits. Exit status: 0 within limits, 1 a model over a limit, 2 the run could not be done.')
-    .argument('[descriptor...]', 'model descriptors to check (default: every model the settings file matches)')
-    .option('--root <dir>', 'repository root; nothing outside it is read', '.')
-    .option('--config <file>', 'settings file, relative to the root', 'fitgate.yml')
-    .addOption(new Option('--format <format>', 'report format').choices(['text', 'json', 'markdown']).default('text'))
-    .option('--out <file>', 'write the report to a file instead of standard output')
-    .addOption(new Option('--fail-on <level>', 'what fails the run').choices(['fail', 'warn']).default('fail'))
-    .option('--color', 'force colours in the text report')
-    .option('--no-color', 'never use colours')
-    .option('--base <ref>', 'also check the models as they are on this git commit and compare (hold-out RMSE, gap ratio, the base_change limit)')
-    .option('--shard <K/N>', 'check only share K of N of the models (descriptors sorted by path, dealt round-robin); join the JSON reports with `fitgate merge`')
-    .option('--jobs <n>', 'worker threads to run models on (default: one per core; 1 = serial)')
-    .option('--html <dir>', 'also write the HTML report (index.html, self-contained) into this folder')
-    .option('--sarif <file>', 'also write a SARIF 2.1.0 log for code scanning to this file')
-    .option('--junit <file>', 'also write a JUnit XML report to this file')
-    .option('--debug', 'print stack traces of unexpected errors', false)
-    .exitOverride()
-    .configureOutput({ writeOut: (s) => (printed += s), writeErr: (s) => (printed += s) })
-    .action((descriptors: string[], o: Record<string, unknown>, cmd: Command) => {
-      const root = path.resolve(cwd, String(o.root));
-      const explicit = cmd.getOptionValueSource('config') === 'cli';
-      parsed = {
-        kind: 'check',
-        settings: {
-          root,
-          config: toRepoPath(root, path.resolve(root, String(o.config)), String(o.config), '--config'),
-          configExplicit: explicit,
-          descriptors: descriptors.map((d) => toRepoPath(root, path.resolve(cwd, d), d, d)),
-          failOn: o.failOn === 'warn' ? 'warn' : 'fail',
-        },
-        format: o.format as OutputFormat,
-        out: typeof o.out === 'string' ? o.out : null,
-        color: cmd.getOptionValueSource('color') === 'cli' ? Boolean(o.color) : null,
-        debug: Boolean(o.debug),
-        base: typeof o.base === 'string' && o.base !== '' ? o.base : null,
-        shard: typeof o.shard === 'string' ? parseShard(o.shard, '--shard') : null,
-        jobs: parseJobs(o.jobs),
-        html: typeof o.html === 'string' ? o.html : null,
-        sarif: typeof o.sarif === 'string' ? o.sarif : null,
-        junit: typeof o.junit === 'string' ? o.junit : null,
-      };
-    });
-  program
-    .command('merge')
-    .description('Join the JSON reports of `fitgate check --shard K/N --format json` jobs into one report. Exit status as for check.')
-    .argument('<report...>', 'JSON report files')
-    .addOption(new Option('--format <format>', 'report format').choices(['text', 'json', 'markdown']).default('text'))
-    .option('--out <file>', 'write the report to a file instead of standard output')
-    .addOption(new Option('--fail-on <level>', 'what fails the run').choices(['fail', 'warn']).default('fail'))
-    .option('--html <dir>', 'also write the HTML report of the joined result into this folder')
-    .option('--sarif <file>', 'also write a SARIF 2.1.0 log of the joined result to this file')
-    .option('--junit <file>', 'also write a JUnit XML report of the joined result to this file')
-    .option('--color', 'force colours in the text report')
-    .option('--no-color', 'never use colours')
-    .option('--debug', 'print stack traces of unexpected errors', false)
-    .exitOverride()
-    .configureOutput({ writeOut: (s) => (printed += s), writeErr: (s) => (printed += s) })
-    .action((reports: string[], o: Record<string, unknown>, cmd: Command) => {
-      parsed = {
-        kind: 'merge',
-        reports: reports.map((r) => path.resolve(cwd, r)),
-        format: o.format as OutputFormat,
-        out: typeof o.out === 'string' ? o.out : null,
-        color: cmd.getOptionValueSource('color') === 'cli' ? Boolean(o.color) : null,
-        failOn: o.failOn === 'warn' ? 'warn' : 'fail',
-        debug: Boolean(o.debug),
-        html: typeof o.html === 'string' ? o.html : null,
-        sarif: typeof o.sarif === 'string' ? o.sarif : null,
-        junit: typeof o.junit === 'string' ? o.junit : null,
-      };
-    });
-  try {
-    program.parse(argv, { from: 'user' });
-  } catch (error) {
-    if (error instanceof CommanderError) {
-      const ok = error.exitCode === 0;
-      return { kind: 'print', text: printed || `${error.message}\n`, status: ok ? 0 : 2 };
-    }
-    throw error;
+  const [first, ...rest] = argv;
+  if (first === undefined || first === '-h' || first === '--help') return { kind: 'print', text: mainHelp(), status: 0 };
+  if (first === '-V' || first === '--version') return { kind: 'print', text: `${VERSION}\n`, status: 0 };
+  if (first === 'help') {
+    const topic = rest[0];
+    if (topic === undefined) return { kind: 'print', text: mainHelp(), status: 0 };
+    const command = COMMANDS.find((c) => c.name === topic);
+    return command ? { kind: 'print', text: commandHelp(command), status: 0 } : usageError(`unknown command '${topic}'`, null);
   }
-  if (parsed) return parsed;
-  return { kind: 'print', text: printed || program.helpInformation(), status: argv.length === 0 ? 0 : 2 };
+  const command = COMMANDS.find((c) => c.name === first);
+  if (!command) return usageError(first.startsWith('-') ? `unknown option '${first}'` : `unknown command '${first}'`, null);
+  const read = readOptions(command, rest);
+  if ('kind' in read) return read;
+  if (read.switches.has('help')) return { kind: 'print', text: commandHelp(command), status: 0 };
+  if (command.argument.required && read.positionals.length === 0) return usageError(`missing required argument '${command.argument.name}'`, command);
+  const value = (name: string): string | null => read.values.get(name) ?? null;
+  const common = {
+    format: (value('format') ?? 'text') as OutputFormat,
+    out: value('out'),
+    color: read.color,
+    debug: read.switches.has('debug'),
+    html: value('html'),
+    sarif: value('sarif'),
+    junit: value('junit'),
+  };
+  const failOn = value('fail-on') === 'warn' ? 'warn' : 'fail';
+  if (command.name === 'merge') {
+    return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common };
+  }
+  const root = path.resolve(cwd, value('root') ?? '.');
+  const config = value('config');
+  const base = value('base');
+  const shard = value('shard');
+  return {
+    kind: 'check',
+    settings: {
+      root,
+      config: toRepoPath(root, path.resolve(root, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
+      configExplicit: config !== null,
+      descriptors: read.positionals.map((d) => toRepoPath(root, path.resolve(cwd, d), d, d)),
+      failOn,
+    },
+    ...common,
+    base: base !== null && base !== '' ? base : null,
+    shard: shard !== null ? parseShard(shard, '--shard') : null,
+    jobs: parseJobs(value('jobs') ?? undefined),
+  };
+}
+
+/**
+ * Reads a command's options and arguments, in any order; `--` ends the options. A value that is
+ * not among an option's choices, an unknown option, a value missing or given to a switch is a
+ * usage error.
+ */
+function readOptions(command: CommandSpec, args: string[]): OptionValues | Parsed {
+  const declared = Object.fromEntries(command.options.map((o) => [o.name, { type: o.value === undefined ? ('boolean' as const) : ('string' as const), ...(o.name === 'help' ? { short: 'h' } : {}) }]));
+  const { tokens } = tokenize({ args, options: declared, strict: false, allowPositionals: true, tokens: true });
+  const out: OptionValues = { values: new Map(), switches: new Set(), color: null, positionals: [] };
+  // Asking for help wins over any mistake beside it.
+  if (tokens.some((t) => t.kind === 'option' && t.name === 'help')) {
+    out.switches.add('help');
+    return out;
+  }
+  for (const token of tokens) {
+    if (token.kind === 'positional') out.positionals.push(token.value);
+    if (token.kind !== 'option') continue;
+    const spec = command.options.find((o) => o.name === token.name);
+    if (!spec || (token.rawName.length === 2 && token.name !== 'help')) return usageError(`unknown option '${token.rawName}'`, command);
+    if (spec.value === undefined) {
+      if (token.inlineValue) return usageError(`option '--${spec.name}' takes no value`, command);
+      if (spec.name === 'color' || spec.name === 'no-color') out.color = spec.name === 'color';
+      else out.switches.add(spec.name);
+      continue;
+    }
+    if (token.value === undefined) return usageError(`option '--${spec.name} <${spec.value}>' argument missing`, command);
+    if (spec.choices && !spec.choices.includes(token.value)) {
+      return usageError(`option '--${spec.name} <${spec.value}>' argument '${token.value}' is invalid; expected one of ${spec.choices.join(', ')}`, command);
+    }
+    out.values.set(spec.name, token.value);
+  }
+  return out;
+}
+
+/** The help of `fitgate` alone: the commands. */
+function mainHelp(): string {
+  const rows: Array<readonly [string, string]> = COMMANDS.map((c) => [`${c.name} [options] ${argumentUsage(c)}`, c.summary] as const);
+  rows.push(['help [command]', 'print the help of a command']);
+  return [
+    'Usage: fitgate [options] [command]',
+    '',
+    ...wrap(DESCRIPTION, HELP_WIDTH),
+    '',
+    'Options:',
+    ...table([
+      ['-V, --version', 'print the version'],
+      ['-h, --help', 'print this help'],
+    ]),
+    '',
+    'Commands:',
+    ...table(rows),
+    '',
+  ].join('\n');
+}
+
+/** The help of one command: its argument and every option with its choices and default. */
+function commandHelp(command: CommandSpec): string {
+  const options = command.options.map((o) => {
+    const name = o.name === 'help' ? '-h, --help' : `--${o.name}${o.value === undefined ? '' : ` <${o.value}>`}`;
+    const notes = [o.choices ? `one of ${o.choices.join(', ')}` : '', o.default !== undefined ? `default: ${o.default}` : ''].filter((s) => s !== '');
+    return [name, notes.length > 0 ? `${o.description} (${notes.join('; ')})` : o.description] as const;
+  });
+  return [
+    `Usage: fitgate ${command.name} [options] ${argumentUsage(command)}`,
+    '',
+    ...wrap(command.summary, HELP_WIDTH),
+    '',
+    'Arguments:',
+    ...table([[command.argument.name, command.argument.description]]),
+    '',
+    'Options:',
+    ...table(options),
+    '',
+  ].join('\n');
+}
+
+function argumentUsage(command: CommandSpec): string {
+  return command.argument.required ? `<${command.argument.name}...>` : `[${command.argument.name}...]`;
+}
+
+/** Two columns: names padded to the widest, descriptions wrapped beside them. */
+function table(rows: ReadonlyArray<readonly [string, string]>): string[] {
+  const indent = 2 + Math.max(...rows.map(([name]) => name.length)) + 2;
+  return rows.flatMap(([name, text]) => wrap(text, HELP_WIDTH - indent).map((line, i) => (i === 0 ? `  ${name.padEnd(indent - 4)}  ${line}` : `${' '.repeat(indent)}${line}`)));
+}
+
+/** Words of `text` in lines of at most `width` characters (a longer word gets a line of its own). */
+function wrap(text: string, width: number): string[] {
+  const lines: string[] = [];
+  let line = '';
+  for (const word of text.split(' ')) {
+    if (line !== '' && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = word;
+    } else line = line === '' ? word : `${line} ${word}`;
+  }
+  lines.push(line);
+  return lines;
 }
 
 /**
