@@ -3,10 +3,15 @@
  * lexically (no absolute paths, no `..` above the root) and then through the file system
  * (the real path, with every symbolic link at any level followed, must stay inside the
  * root's real path) before anything is opened; the real path is what gets opened.
+ *
+ * The file system calls are synchronous behind the asynchronous interface: a run reads its files
+ * one after another (models run in parallel on worker threads, each with its own reader), and a
+ * local call takes less time than its round trip through libuv's thread pool. A small model's
+ * run makes a few dozen such calls; a 1 MiB piece of a big file is read in well under a
+ * millisecond.
  */
 
-import { createReadStream } from 'node:fs';
-import { readFile, realpath, stat } from 'node:fs/promises';
+import { closeSync, fstatSync, openSync, readFileSync, readSync, realpathSync, statSync, type Stats } from 'node:fs';
 import * as nodePath from 'node:path';
 import { InputError, type ErrorLocation } from '../errors.js';
 import { FILE_MISSING, isAbsoluteLike, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
@@ -91,12 +96,25 @@ export function createFsRepository(root: string): RepoReader {
       return (await stat(await requireFile(path))).size;
     },
     async read(path) {
-      return readFile(await requireFile(path));
+      return readFileSync(await requireFile(path));
     },
     async *stream(path, chunkBytes = 1024 * 1024) {
       const real = await requireFile(path);
-      const stream = createReadStream(real, { highWaterMark: Math.max(1, Math.floor(chunkBytes)) });
-      for await (const chunk of stream) yield chunk as Buffer;
+      const fd = openSync(real, 'r');
+      try {
+        // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
+        // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
+        // so a reader may keep a previous one.
+        const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, fstatSync(fd).size + 1)));
+        for (;;) {
+          const piece = Buffer.allocUnsafe(size);
+          const n = readSync(fd, piece, 0, size, null);
+          if (n === 0) return;
+          yield n === size ? piece : piece.subarray(0, n);
+        }
+      } finally {
+        closeSync(fd);
+      }
     },
     async glob(patterns) {
       for (const pattern of patterns) {
@@ -119,6 +137,16 @@ export function createFsRepository(root: string): RepoReader {
       return [...paths].sort();
     },
   };
+}
+
+/** The real path (the system's realpath(3), as fs/promises uses), as a promise. */
+async function realpath(path: string): Promise<string> {
+  return realpathSync.native(path);
+}
+
+/** File information, as a promise. */
+async function stat(path: string): Promise<Stats> {
+  return statSync(path);
 }
 
 function isInside(base: string, real: string): boolean {

@@ -54,6 +54,25 @@ describe('createFsRepository: reading', () => {
     expect(new TextDecoder().decode(await repo.read('models/inside-link.csv')), 'a link inside the root is followed').toBe('x,y\n3,4\n');
   });
 
+  it('streams a big file in fresh pieces of the size asked for, and an empty file as nothing', async () => {
+    const bytes = new Uint8Array(200_000);
+    for (let i = 0; i < bytes.length; i++) bytes[i] = (i * 7919) % 251;
+    writeFileSync(join(root, 'models', 'big.bin'), bytes);
+    writeFileSync(join(root, 'models', 'empty.csv'), '');
+    const repo = createFsRepository(root);
+    const pieces: Uint8Array[] = [];
+    for await (const piece of repo.stream('models/big.bin', 65_536)) pieces.push(piece);
+    expect(pieces.map((c) => c.byteLength)).toEqual([65_536, 65_536, 65_536, 3_392]);
+    // Kept pieces are not overwritten by later reads.
+    expect(Buffer.concat(pieces).equals(Buffer.from(bytes))).toBe(true);
+    const whole: Uint8Array[] = [];
+    for await (const piece of repo.stream('models/big.bin')) whole.push(piece);
+    expect(whole.map((c) => c.byteLength)).toEqual([200_000]);
+    const empty: Uint8Array[] = [];
+    for await (const piece of repo.stream('models/empty.csv')) empty.push(piece);
+    expect(empty).toEqual([]);
+  });
+
   it('gives file-missing for missing files and folders', async () => {
     const repo = createFsRepository(root);
     await expectInputError(() => repo.read('models/none.csv'), { code: 'file-missing', file: 'models/none.csv' });
