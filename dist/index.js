@@ -29913,7 +29913,7 @@ function polynomialTerm(spec, training, file) {
     let shift = spec.shift;
     let scale = spec.scale;
     if (shift === null || scale === null) {
-        const { mean, sd } = (0,stats/* meanAndSd */.u)(x);
+        const { mean, sd } = (0,stats/* meanAndSd */.ud)(x);
         shift ??= mean;
         if (scale === null) {
             if (!(sd > 0)) {
@@ -30044,8 +30044,10 @@ function createTerm(spec, training, file) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   u: () => (/* binding */ meanAndSd),
-/* harmony export */   y: () => (/* binding */ range)
+/* harmony export */   Mq: () => (/* binding */ sumOfSquaredDeviations),
+/* harmony export */   jZ: () => (/* binding */ sumOfDeviations),
+/* harmony export */   ud: () => (/* binding */ meanAndSd),
+/* harmony export */   y1: () => (/* binding */ range)
 /* harmony export */ });
 /**
  * Column statistics used to fix basis parameters.
@@ -30057,34 +30059,55 @@ function createTerm(spec, training, file) {
 function meanAndSd(x, n = x.length) {
     if (n === 0)
         return { mean: Number.NaN, sd: Number.NaN };
+    let mean = sumOf(x, n) / n;
+    // One correction step (mean of deviations) keeps the mean exact to rounding for large offsets.
+    mean += sumOfDeviations(x, n, mean) / n;
+    return { mean, sd: Math.sqrt(sumOfSquaredDeviations(x, n, mean) / n) };
+}
+// The passes below are separate functions, each one loop followed by nothing but its return, so
+// that V8's code optimised in the middle of a long loop never runs into code it has no type
+// feedback for (which throws the optimised code away; see DEVELOPERS.md, "Writing hot loops").
+function sumOf(x, n) {
     let sum = 0;
     for (let i = 0; i < n; i++)
         sum += x[i];
-    let mean = sum / n;
-    // One correction step (mean of deviations) keeps the mean exact to rounding for large offsets.
+    return sum;
+}
+/** Sum of x[i] - shift over x[0..n), added in order. */
+function sumOfDeviations(x, n, shift) {
     let dev = 0;
     for (let i = 0; i < n; i++)
-        dev += x[i] - mean;
-    mean += dev / n;
+        dev += x[i] - shift;
+    return dev;
+}
+/** Sum of (x[i] - shift)^2 over x[0..n), added in order. */
+function sumOfSquaredDeviations(x, n, shift) {
     let ss = 0;
     for (let i = 0; i < n; i++) {
-        const d = x[i] - mean;
+        const d = x[i] - shift;
         ss += d * d;
     }
-    return { mean, sd: Math.sqrt(ss / n) };
+    return ss;
 }
-/** Smallest and largest of the first `n` entries; [Infinity, -Infinity] when empty. */
+/** Smallest and largest of the first `n` entries (NaN entries ignored); [Infinity, -Infinity] when empty. */
 function range(x, n = x.length) {
+    return [smallest(x, n), largest(x, n)];
+}
+/** Smallest of x[0..n), NaN ignored; Infinity when empty. */
+function smallest(x, n) {
     let lo = Infinity;
+    for (let i = 0; i < n; i++)
+        if (x[i] < lo)
+            lo = x[i];
+    return lo;
+}
+/** Largest of x[0..n), NaN ignored; -Infinity when empty. */
+function largest(x, n) {
     let hi = -Infinity;
-    for (let i = 0; i < n; i++) {
-        const v = x[i];
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
-    return [lo, hi];
+    for (let i = 0; i < n; i++)
+        if (x[i] > hi)
+            hi = x[i];
+    return hi;
 }
 
 
@@ -31186,11 +31209,16 @@ function middleOf(a, n, upper) {
     if (n % 2 === 1)
         return value;
     // The lower middle is the largest value left of the upper middle after selection.
-    let lower = -Infinity;
-    for (let i = 0; i < upper; i++)
-        if (a[i] > lower)
-            lower = a[i];
-    return (lower + value) / 2;
+    return (largestBefore(a, upper) + value) / 2;
+}
+// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
+/** Largest of a[0..end); -Infinity when end = 0. */
+function largestBefore(a, end) {
+    let largest = -Infinity;
+    for (let i = 0; i < end; i++)
+        if (a[i] > largest)
+            largest = a[i];
+    return largest;
 }
 /**
  * The exact median in one pass over the column and a selection among a tenth of it: the middle
@@ -31207,10 +31235,10 @@ function bracketedMedian(values, n, work) {
     sample.sort();
     const lo = sample[BRACKET_SAMPLE / 2 - BRACKET_HALF_WIDTH];
     const hi = sample[BRACKET_SAMPLE / 2 + BRACKET_HALF_WIDTH];
-    const capacity = Math.min(n, work.length);
-    const { below, inside } = gatherBracket(values, n, lo, hi, work, capacity);
+    const inside = gatherBracket(values, n, lo, hi, work, Math.min(n, work.length));
     if (inside < 0)
         return null;
+    const below = countBelow(values, n, lo);
     const upper = n >> 1;
     const lower = n % 2 === 1 ? upper : upper - 1;
     // Both middle ranks must fall among the gathered values.
@@ -31219,23 +31247,28 @@ function bracketedMedian(values, n, work) {
     return middleOf(work.subarray(0, inside), n, upper - below);
 }
 /**
- * One pass: counts values below `lo` and copies those in [lo, hi] to `out` (in column order).
- * `inside` is -1 when more than `capacity` values fall in the bracket.
+ * One pass: copies the values in [lo, hi] to `out` (in column order) and returns how many; -1 when
+ * more than `capacity` values fall in the bracket.
  */
 function gatherBracket(values, n, lo, hi, out, capacity) {
-    let below = 0;
     let inside = 0;
     for (let i = 0; i < n; i++) {
         const v = values[i];
-        if (v < lo)
-            below++;
-        else if (v <= hi) {
+        if (v >= lo && v <= hi) {
             if (inside === capacity)
-                return { below, inside: -1 };
+                return -1;
             out[inside++] = v;
         }
     }
-    return { below, inside };
+    return inside;
+}
+/** Values below `lo` among values[0..n). */
+function countBelow(values, n, lo) {
+    let below = 0;
+    for (let i = 0; i < n; i++)
+        if (values[i] < lo)
+            below++;
+    return below;
 }
 /**
  * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
@@ -31252,12 +31285,23 @@ function selectKth(a, k) {
         let x = a[lo];
         let y = a[mid];
         let z = a[hi];
-        if (x > y)
-            [x, y] = [y, x];
-        if (y > z)
-            [y, z] = [z, y];
-        if (x > y)
-            [x, y] = [y, x];
+        // Sort the three with plain swaps (no array literals: see DEVELOPERS.md, "Writing hot loops").
+        let t;
+        if (x > y) {
+            t = x;
+            x = y;
+            y = t;
+        }
+        if (y > z) {
+            t = y;
+            y = z;
+            z = t;
+        }
+        if (x > y) {
+            t = x;
+            x = y;
+            y = t;
+        }
         const pivot = y;
         let i = lo;
         let j = hi;
@@ -31663,14 +31707,7 @@ class FoldFactorBuilder {
         if (m === 0)
             return;
         const first = foldOf[start];
-        let single = true;
-        for (let i = 1; i < m; i++) {
-            if (foldOf[start + i] !== first) {
-                single = false;
-                break;
-            }
-        }
-        if (single) {
+        if (oneFold(foldOf, start, m)) {
             this.factors[first].addRows(X, y.subarray(start, start + m), m);
             return;
         }
@@ -31701,6 +31738,14 @@ class FoldFactorBuilder {
             this.factors[f].addRows(sub, subY, mf);
         }
     }
+}
+/** True when rows start .. start+m-1 (m >= 1) all belong to one fold (one loop per function; see DEVELOPERS.md, "Writing hot loops"). */
+function oneFold(foldOf, start, m) {
+    const first = foldOf[start];
+    for (let i = 1; i < m; i++)
+        if (foldOf[start + i] !== first)
+            return false;
+    return true;
 }
 /**
  * Folds the rows of each fold into its own QR factor in one pass over the rows.
@@ -31828,10 +31873,7 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
         if (pred.length < m)
             pred = new Float64Array(m);
         // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
-        let single = m > 0 ? foldOf[start] : -1;
-        for (let i = 1; i < m && single >= 0; i++)
-            if (foldOf[start + i] !== single)
-                single = -1;
+        const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
         for (let s = 0; s < S; s++) {
             const W = tables[s];
             const errors = sse[s];
@@ -31940,22 +31982,35 @@ function crossValidate(design, data, fit, folds, options = {}) {
         (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
         if (out !== undefined)
             out.set(pred.subarray(0, m), start);
+        // The sums run in locals and are stored once per block: the same additions in the same order,
+        // without boxing a number into the closure's context on every row.
+        let blockRss = rss;
+        let blockPress = press;
+        let blockLeverageSum = leverageSum;
+        let blockMaxLeverage = maxLeverage;
+        let blockOnes = rowsWithLeverageOne;
+        const y = data.y;
         for (let i = 0; i < m; i++) {
-            const e = data.y[start + i] - pred[i];
-            rss += e * e;
+            const e = y[start + i] - pred[i];
+            blockRss += e * e;
             const hi = h[i];
-            leverageSum += hi;
-            if (hi > maxLeverage)
-                maxLeverage = hi;
+            blockLeverageSum += hi;
+            if (hi > blockMaxLeverage)
+                blockMaxLeverage = hi;
             if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
-                rowsWithLeverageOne++;
-                press = Infinity;
+                blockOnes++;
+                blockPress = Infinity;
             }
             else {
                 const loo = e / (1 - hi);
-                press += loo * loo;
+                blockPress += loo * loo;
             }
         }
+        rss = blockRss;
+        press = blockPress;
+        leverageSum = blockLeverageSum;
+        maxLeverage = blockMaxLeverage;
+        rowsWithLeverageOne = blockOnes;
     };
     const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
     const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;
@@ -32028,11 +32083,19 @@ function assignFolds(n, k, order, seed) {
     const foldOf = new Int32Array(n);
     const perm = order === 'shuffled' ? (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .permutation */ .dL)(n, (0,_random_js__WEBPACK_IMPORTED_MODULE_0__/* .seededRandom */ .Is)(seed)) : null;
     let pos = 0;
-    for (let f = 0; f < kk; f++) {
-        for (let c = 0; c < sizes[f]; c++, pos++)
-            foldOf[perm === null ? pos : perm[pos]] = f;
-    }
+    for (let f = 0; f < kk; f++)
+        pos = markFold(foldOf, perm, pos, sizes[f], f);
     return { k: kk, foldOf, sizes, order, seed };
+}
+/**
+ * Assigns fold f to `size` rows from position `pos` (of the permutation, or the file order when
+ * none); returns the next position. One loop per function (see DEVELOPERS.md, "Writing hot loops").
+ */
+function markFold(foldOf, perm, pos, size, f) {
+    let at = pos;
+    for (let c = 0; c < size; c++, at++)
+        foldOf[perm === null ? at : perm[at]] = f;
+    return at;
 }
 
 
@@ -32092,16 +32155,24 @@ function mix32(z) {
  * @returns Int32Array of length n
  */
 function permutation(n, random) {
+    const out = identity(n);
+    shuffle(out, random);
+    return out;
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+function identity(n) {
     const out = new Int32Array(n);
     for (let i = 0; i < n; i++)
         out[i] = i;
-    for (let i = n - 1; i > 0; i--) {
+    return out;
+}
+function shuffle(out, random) {
+    for (let i = out.length - 1; i > 0; i--) {
         const j = Math.floor(random() * (i + 1));
         const t = out[i];
         out[i] = out[j];
         out[j] = t;
     }
-    return out;
 }
 
 
@@ -32159,6 +32230,44 @@ function sameInputs(a, i, b, j) {
             return false;
     return true;
 }
+/** The slot of `hash`: where it is, or the empty slot where it goes. */
+function findSlot(table, hash) {
+    const { slotHead, slotHash, mask } = table;
+    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+    while (slotHead[s] >= 0 && slotHash[s] !== hash)
+        s = (s + 1) & mask;
+    return s;
+}
+// The two passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** Puts rows 0..n-1 in the table, so that each chain lists its rows in file order. */
+function indexRows(table, inputs, n) {
+    for (let r = n - 1; r >= 0; r--) {
+        const hash = rowHash(inputs, r);
+        const s = findSlot(table, hash);
+        table.next[r] = table.slotHead[s];
+        table.slotHash[s] = hash;
+        table.slotHead[s] = r;
+    }
+}
+/**
+ * Streams the training rows past the table of hold-out rows in file order: firstMatch[r] receives
+ * the first training row whose inputs equal hold-out row r's, targetToo[r] = 1 when some such row
+ * has its target too.
+ */
+function matchRows(table, holdout, train, firstMatch, targetToo) {
+    for (let i = 0; i < train.rows; i++) {
+        let r = table.slotHead[findSlot(table, rowHash(train.inputs, i))];
+        while (r >= 0) {
+            if (sameInputs(holdout.inputs, r, train.inputs, i)) {
+                if (firstMatch[r] < 0)
+                    firstMatch[r] = i;
+                if (holdout.y[r] === train.y[i])
+                    targetToo[r] = 1;
+            }
+            r = table.next[r];
+        }
+    }
+}
 /**
  * Finds hold-out rows equal to a training row in every input column of the model (values compared
  * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
@@ -32170,47 +32279,18 @@ function sameInputs(a, i, b, j) {
  */
 function findLeakage(train, holdout) {
     const columns = train.inputs.length;
-    // Hash table of the hold-out rows (the smaller file, usually) by open addressing with linear
-    // probing over typed arrays: slot -> (hash, first row), rows with the same hash chained
-    // through `next`. No Map, no per-row objects. The training rows then stream past it in file
-    // order, so each hold-out row's first match is the earliest training row.
+    // A hash table of the hold-out rows (the smaller file, usually); the training rows then stream
+    // past it in file order, so each hold-out row's first match is the earliest training row.
     const h = holdout.rows;
     let size = 1024;
     while (size < 2 * h)
         size *= 2;
-    const mask = size - 1;
-    const slotHash = new Uint32Array(size);
-    const slotHead = new Int32Array(size).fill(-1);
-    const next = new Int32Array(h).fill(-1);
-    const find = (hash) => {
-        let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
-        while (slotHead[s] >= 0 && slotHash[s] !== hash)
-            s = (s + 1) & mask;
-        return s;
-    };
-    for (let r = h - 1; r >= 0; r--) {
-        const hash = rowHash(holdout.inputs, r);
-        const s = find(hash);
-        next[r] = slotHead[s];
-        slotHash[s] = hash;
-        slotHead[s] = r;
-    }
+    const table = { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(h).fill(-1) };
+    indexRows(table, holdout.inputs, h);
     const firstMatch = new Int32Array(h).fill(-1);
     const targetToo = new Uint8Array(h);
-    if (h > 0) {
-        for (let i = 0; i < train.rows; i++) {
-            let r = slotHead[find(rowHash(train.inputs, i))];
-            while (r >= 0) {
-                if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-                    if (firstMatch[r] < 0)
-                        firstMatch[r] = i;
-                    if (holdout.y[r] === train.y[i])
-                        targetToo[r] = 1;
-                }
-                r = next[r];
-            }
-        }
-    }
+    if (h > 0)
+        matchRows(table, holdout, train, firstMatch, targetToo);
     let inputMatches = 0;
     let fullMatches = 0;
     const holdoutLines = [];
@@ -32634,10 +32714,7 @@ function gridFromSorted(sorted, n, options, work) {
     const margin = options.margin ?? 0.1;
     const marginPoints = options.marginPoints ?? 40;
     const maxGaps = options.maxGaps ?? 4000;
-    let count = 0;
-    for (let i = 0; i < n; i++)
-        if (count === 0 || sorted[i] !== sorted[count - 1])
-            sorted[count++] = sorted[i];
+    const count = packDistinct(sorted, n);
     const distinct = sorted.subarray(0, count);
     if (count < 2)
         return { inside: new Float64Array(0), beyond: new Float64Array(0) };
@@ -32647,30 +32724,52 @@ function gridFromSorted(sorted, n, options, work) {
     const gaps = widestGaps(distinct, maxGaps, work);
     const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
     const inside = new Float64Array(uniform + gaps.length * per);
-    let w = 0;
-    for (let t = 0; t < uniform; t++)
-        inside[w++] = t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1);
-    for (const g of gaps) {
-        const a = distinct[g];
-        const b = distinct[g + 1];
+    fillUniform(inside, uniform, lo, hi);
+    const w = fillGaps(inside, uniform, distinct, gaps, per);
+    const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+    return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+}
+// The loops of the grid are functions of their own, each a loop and its return (see
+// DEVELOPERS.md, "Writing hot loops").
+/** Packs the distinct values of the ascending a[0..n) to its front; returns how many. */
+function packDistinct(a, n) {
+    let count = 0;
+    for (let i = 0; i < n; i++)
+        if (count === 0 || a[i] !== a[count - 1])
+            a[count++] = a[i];
+    return count;
+}
+/** The distinct values of xs[0..length), ascending (xs is reordered). */
+function unique(xs, length) {
+    const u = sortFloat64(xs.subarray(0, length));
+    return u.slice(0, packDistinct(u, u.length));
+}
+/** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
+function fillUniform(out, count, lo, hi) {
+    const width = hi - lo;
+    for (let t = 0; t < count; t++)
+        out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
+}
+/** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
+function fillGaps(out, at, distinct, gaps, per) {
+    let w = at;
+    for (let g = 0; g < gaps.length; g++) {
+        const a = distinct[gaps[g]];
+        const b = distinct[gaps[g] + 1];
         for (let t = 1; t <= per; t++)
-            inside[w++] = a + ((b - a) * t) / (per + 1);
+            out[w++] = a + ((b - a) * t) / (per + 1);
     }
-    const beyond = new Float64Array(2 * marginPoints);
-    for (let t = 1; t <= marginPoints; t++) {
-        const d = (margin * width * t) / marginPoints;
+    return w;
+}
+/** `count` points on each side of [lo, hi], at (t / count) of `reach` for t = 1..count, alternating below and above. */
+function marginGrid(lo, hi, reach, count) {
+    const beyond = new Float64Array(2 * count);
+    for (let t = 1; t <= count; t++) {
+        const d = (reach * t) / count;
         beyond[2 * t - 2] = lo - d;
         beyond[2 * t - 1] = hi + d;
     }
-    const unique = (xs, length) => {
-        const u = sortFloat64(xs.subarray(0, length));
-        let k = 0;
-        for (let i = 0; i < u.length; i++)
-            if (k === 0 || u[i] !== u[k - 1])
-                u[k++] = u[i];
-        return u.slice(0, k);
-    };
-    return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+    return beyond;
 }
 /**
  * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
@@ -32682,22 +32781,35 @@ function widestGaps(distinct, maxGaps, work) {
     if (count <= maxGaps)
         return Int32Array.from({ length: count }, (_, g) => g);
     const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
+    gapWidths(distinct, count, widths);
+    const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
+    const out = new Int32Array(maxGaps);
+    pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
+    return out;
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+/** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
+function gapWidths(distinct, count, widths) {
     for (let g = 0; g < count; g++)
         widths[g] = distinct[g + 1] - distinct[g];
-    const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
+}
+/** How many of the first `count` gaps are wider than `threshold`. */
+function gapsWiderThan(distinct, count, threshold) {
     let above = 0;
     for (let g = 0; g < count; g++)
         if (distinct[g + 1] - distinct[g] > threshold)
             above++;
-    let ties = maxGaps - above;
-    const out = new Int32Array(maxGaps);
+    return above;
+}
+/** Writes to `out`, ascending, every gap wider than `threshold` and the first `ties` gaps equal to it. */
+function pickGaps(distinct, count, threshold, ties, out) {
+    let left = ties;
     let w = 0;
     for (let g = 0; g < count; g++) {
         const width = distinct[g + 1] - distinct[g];
-        if (width > threshold || (width === threshold && ties-- > 0))
+        if (width > threshold || (width === threshold && left-- > 0))
             out[w++] = g;
     }
-    return out;
 }
 /**
  * Copies the values an input's grid is built from into `out` and returns how many: every row
@@ -32710,13 +32822,17 @@ function gridSample(column, n, max, out) {
         out.set(column.subarray(0, n));
         return n;
     }
-    const [lo, hi] = (0,stats/* range */.y)(column, n);
+    const [lo, hi] = (0,stats/* range */.y1)(column, n);
     const strided = max - 2;
-    for (let t = 0; t < strided; t++)
-        out[t] = column[Math.floor((t * n) / strided)];
     out[strided] = lo;
     out[strided + 1] = hi;
+    stridedSample(column, n, strided, out);
     return max;
+}
+/** out[t] = column[floor(t n / count)] for t = 0 .. count-1. */
+function stridedSample(column, n, count, out) {
+    for (let t = 0; t < count; t++)
+        out[t] = column[Math.floor((t * n) / count)];
 }
 /** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
 function thinIndices(length, count, keep) {
@@ -32777,13 +32893,12 @@ function predictorAlong(design, coefficients, c, fixed) {
 }
 /**
  * Merges two ascending point sets that never share a value (the margins lie outside the range)
- * with their predictions: the order a stable sort by x gives.
+ * with their predictions into xs and ps (length of both sets together): the order a stable sort
+ * by x gives.
  */
-function mergeAscending(ax, ap, bx, bp) {
+function mergeAscending(ax, ap, bx, bp, xs, ps) {
     const na = ax.length;
     const nb = bx.length;
-    const xs = new Float64Array(na + nb);
-    const ps = new Float64Array(na + nb);
     for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
         if (b >= nb || (a < na && ax[a] <= bx[b])) {
             xs[dst] = ax[a];
@@ -32794,37 +32909,42 @@ function mergeAscending(ax, ap, bx, bp) {
             ps[dst] = bp[b++];
         }
     }
-    return { xs, ps };
 }
 /** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
 function extremeIndices(values) {
+    return [indexOfSmallest(values), indexOfLargest(values)];
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+function indexOfSmallest(values) {
     let imin = 0;
-    let imax = 0;
-    for (let i = 1; i < values.length; i++) {
-        if (values[i] > values[imax])
-            imax = i;
+    for (let i = 1; i < values.length; i++)
         if (values[i] < values[imin])
             imin = i;
-    }
-    return [imin, imax];
+    return imin;
 }
-/**
- * The largest excursion max(0, v - hi, lo - v) / (hi - lo) over pred[0..m) (Infinity for a NaN
- * prediction) and the first index reaching it.
- */
-function largestExcursion(pred, m, lo, hi) {
+function indexOfLargest(values) {
+    let imax = 0;
+    for (let i = 1; i < values.length; i++)
+        if (values[i] > values[imax])
+            imax = i;
+    return imax;
+}
+/** Excursion of one prediction: max(0, v - hi, lo - v) / (hi - lo); Infinity for NaN. */
+function pointExcursion(v, lo, hi) {
+    return Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / (hi - lo);
+}
+/** The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than -Infinity. */
+function worstExcursionIndex(pred, m, lo, hi) {
     let value = -Infinity;
     let index = 0;
-    const width = hi - lo;
     for (let i = 0; i < m; i++) {
-        const v = pred[i];
-        const e = Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / width;
+        const e = pointExcursion(pred[i], lo, hi);
         if (e > value) {
             value = e;
             index = i;
         }
     }
-    return { value, index };
+    return index;
 }
 /**
  * The inputs of the sampled rows, each divided by its standard deviation over them after taking
@@ -32858,17 +32978,18 @@ function segmentPoints(inputs, pairs, perSegment) {
     const segmentsCount = pairs.length / 2;
     const m = segmentsCount * perSegment;
     const columns = inputs.map(() => new Float64Array(m));
-    for (let c = 0; c < d; c++) {
-        const col = inputs[c];
-        const out = columns[c];
-        for (let q = 0; q < segmentsCount; q++) {
-            const from = col[pairs[2 * q]];
-            const to = col[pairs[2 * q + 1]];
-            for (let t = 1; t <= perSegment; t++)
-                out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
-        }
-    }
+    for (let c = 0; c < d; c++)
+        segmentsAlong(inputs[c], pairs, segmentsCount, perSegment, columns[c]);
     return columns;
+}
+/** One input's points inside every segment (pairs[2q] to pairs[2q + 1]), `perSegment` each, into `out`. */
+function segmentsAlong(col, pairs, segmentsCount, perSegment, out) {
+    for (let q = 0; q < segmentsCount; q++) {
+        const from = col[pairs[2 * q]];
+        const to = col[pairs[2 * q + 1]];
+        for (let t = 1; t <= perSegment; t++)
+            out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
+    }
 }
 /**
  * The coefficient-independent part of {@link measureSwing}: band, medians, grids and segments.
@@ -32880,14 +33001,7 @@ function segmentPoints(inputs, pairs, perSegment) {
 function planSwing(design, train, options = {}) {
     const n = train.rows;
     const d = design.inputs.length;
-    let ylo = Infinity;
-    let yhi = -Infinity;
-    for (let i = 0; i < n; i++) {
-        if (train.y[i] < ylo)
-            ylo = train.y[i];
-        if (train.y[i] > yhi)
-            yhi = train.y[i];
-    }
+    const [ylo, yhi] = (0,stats/* range */.y1)(train.y, n);
     // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
     const scratch = new Float64Array(n);
     const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
@@ -32944,7 +33058,8 @@ function scoreSwing(plan, design, coefficients) {
     const score = (columns, m, where, given) => {
         const pred = given ?? (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
         if (m > 0) {
-            const { value, index } = largestExcursion(pred, m, ylo, yhi);
+            const index = worstExcursionIndex(pred, m, ylo, yhi);
+            const value = pointExcursion(pred[index], ylo, yhi);
             if (where === 'inside') {
                 if (worstInside === null || value > inside) {
                     inside = Math.max(inside, value);
@@ -32977,7 +33092,9 @@ function scoreSwing(plan, design, coefficients) {
         const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
         const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
         // Curve for charts: all points ascending, thinned with the extremes kept.
-        const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
+        const xs = new Float64Array(grid.inside.length + grid.beyond.length);
+        const ps = new Float64Array(xs.length);
+        mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
         const [imin, imax] = extremeIndices(ps);
         const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
         const others = {};
@@ -33532,23 +33649,25 @@ class qr_accumulator_QrAccumulator {
  * @throws RangeError naming row and column when a value is NaN or infinite
  */
 function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
-    for (let j = 0; j < p; j++) {
-        const src = j * ldx + start;
-        const dst = j * ld;
-        for (let i = 0; i < mb; i++) {
-            const v = X[src + i];
-            if (!Number.isFinite(v)) {
-                throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
-            }
-            C[dst + i] = v;
-        }
-    }
+    for (let j = 0; j < p; j++)
+        copyColumnChecked(X, j * ldx + start, C, j * ld, mb, start, j);
+    copyColumnChecked(y, start, yc, 0, mb, start, -1);
+}
+/**
+ * Copies mb values from src[from..] to dst[to..] (one loop per function; see DEVELOPERS.md,
+ * "Writing hot loops").
+ * @param firstRow the row of src[from], for the error
+ * @param column the column of X, or -1 for y, for the error
+ * @throws RangeError naming row and column when a value is NaN or infinite
+ */
+function copyColumnChecked(src, from, dst, to, mb, firstRow, column) {
     for (let i = 0; i < mb; i++) {
-        const v = y[start + i];
+        const v = src[from + i];
         if (!Number.isFinite(v)) {
-            throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
+            const what = column < 0 ? `y at row ${firstRow + i}` : `X at row ${firstRow + i}, column ${column}`;
+            throw new RangeError(`addRows: ${what} must be a finite number, got ${String(v)}`);
         }
-        yc[i] = v;
+        dst[to + i] = v;
     }
 }
 /** Sum of squares of v[0..m). */
@@ -34045,42 +34164,50 @@ function leveragesInto(fit, X, m, out) {
         out.set(leverages(fit, X, m));
         return;
     }
-    const R = fit.factor.R;
-    const CH = 256;
-    const Z = new Float64Array(CH * p);
-    for (let i0 = 0; i0 < m; i0 += CH) {
-        const mb = Math.min(CH, m - i0);
+    const Z = new Float64Array(LEVERAGE_CHUNK * fit.factor.p);
+    for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK)
+        leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
+}
+/** Rows per chunk of {@link leveragesInto} (the chunk's z columns stay in cache). */
+const LEVERAGE_CHUNK = 256;
+/**
+ * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
+ * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
+ * its own so that its loops never run inside code V8 optimised in the middle of another chunk
+ * (see DEVELOPERS.md, "Writing hot loops").
+ */
+function leverageChunk(R, p, X, m, i0, mb, Z, out) {
+    const CH = LEVERAGE_CHUNK;
+    for (let i = 0; i < mb; i++)
+        out[i0 + i] = 0;
+    for (let j = 0; j < p; j++) {
+        const zj = j * CH;
+        const xj = j * m + i0;
         for (let i = 0; i < mb; i++)
-            out[i0 + i] = 0;
-        for (let j = 0; j < p; j++) {
-            const zj = j * CH;
-            const xj = j * m + i0;
-            for (let i = 0; i < mb; i++)
-                Z[zj + i] = X[xj + i];
-            let k = 0;
-            // Four earlier columns per sweep (the same subtractions in the same order per row).
-            for (; k + 3 < j; k += 4) {
-                const r0 = R[j * p + k];
-                const r1 = R[j * p + k + 1];
-                const r2 = R[j * p + k + 2];
-                const r3 = R[j * p + k + 3];
-                const z0 = k * CH;
-                for (let i = 0; i < mb; i++) {
-                    Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
-                }
-            }
-            for (; k < j; k++) {
-                const r = R[j * p + k];
-                const zk = k * CH;
-                for (let i = 0; i < mb; i++)
-                    Z[zj + i] -= r * Z[zk + i];
-            }
-            const diag = R[j * p + j];
+            Z[zj + i] = X[xj + i];
+        let k = 0;
+        // Four earlier columns per sweep (the same subtractions in the same order per row).
+        for (; k + 3 < j; k += 4) {
+            const r0 = R[j * p + k];
+            const r1 = R[j * p + k + 1];
+            const r2 = R[j * p + k + 2];
+            const r3 = R[j * p + k + 3];
+            const z0 = k * CH;
             for (let i = 0; i < mb; i++) {
-                const z = Z[zj + i] / diag;
-                Z[zj + i] = z;
-                out[i0 + i] += z * z;
+                Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
             }
+        }
+        for (; k < j; k++) {
+            const r = R[j * p + k];
+            const zk = k * CH;
+            for (let i = 0; i < mb; i++)
+                Z[zj + i] -= r * Z[zk + i];
+        }
+        const diag = R[j * p + j];
+        for (let i = 0; i < mb; i++) {
+            const z = Z[zj + i] / diag;
+            Z[zj + i] = z;
+            out[i0 + i] += z * z;
         }
     }
 }
@@ -34235,28 +34362,61 @@ const MAX_SWEEPS = 60;
 function svd(A, m, k, vectors = 'both') {
     if (k < 1 || m < k)
         throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
-    let amax = 0;
-    for (let i = 0; i < m * k; i++) {
-        const a = Math.abs(A[i]);
-        if (!(a <= amax))
-            amax = a;
-    }
+    const amax = largestMagnitude(A, m * k);
     if (!Number.isFinite(amax))
         throw new RangeError('svd: the matrix has a non-finite entry');
     if (amax === 0)
         return zeroSvd(m, k, vectors);
     const shift = Math.round(Math.log2(amax));
-    const scale = 2 ** -shift;
-    const floor = 2 ** -600;
-    const W = new Float64Array(m * k);
-    for (let i = 0; i < m * k; i++) {
-        const v = A[i] * scale;
-        W[i] = Math.abs(v) < floor ? 0 : v;
-    }
+    const W = scaledCopy(A, m * k, 2 ** -shift);
     const V = new Float64Array(k * k);
     for (let c = 0; c < k; c++)
         V[c * k + c] = 1;
-    // One-sided Jacobi: rotate column pairs (p, q) until every pair is orthogonal to eps.
+    jacobiSweeps(W, V, m, k);
+    // Singular values are the column norms; sort descending.
+    const norms = columnNorms(W, m, k);
+    const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
+    const s = new Float64Array(k);
+    const U = new Float64Array(vectors === 'both' ? m * k : 0);
+    const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
+    order.forEach((c, to) => {
+        s[to] = norms[c] * 2 ** shift;
+        if (U.length > 0 && norms[c] > 0)
+            for (let i = 0; i < m; i++)
+                U[to * m + i] = W[c * m + i] / norms[c];
+        if (Vout.length > 0)
+            for (let i = 0; i < k; i++)
+                Vout[to * k + i] = V[c * k + i];
+    });
+    return { s, U, V: Vout };
+}
+// The loops below are functions of their own, each a loop nest and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+/** Largest |a_i| over A[0..n); NaN or Infinity when an entry is not finite. */
+function largestMagnitude(A, n) {
+    let amax = 0;
+    for (let i = 0; i < n; i++) {
+        const a = Math.abs(A[i]);
+        if (!(a <= amax))
+            amax = a;
+    }
+    return amax;
+}
+/** A[0..n) times `scale` (a power of two, so exact), entries below 2^-600 set to zero. */
+function scaledCopy(A, n, scale) {
+    const floor = 2 ** -600;
+    const W = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+        const v = A[i] * scale;
+        W[i] = Math.abs(v) < floor ? 0 : v;
+    }
+    return W;
+}
+/**
+ * One-sided Jacobi: rotates column pairs (p, q) of W (m x k), and the same pairs of V (k x k),
+ * until every pair of W's columns is orthogonal to machine precision, or {@link MAX_SWEEPS}.
+ */
+function jacobiSweeps(W, V, m, k) {
     const eps = Number.EPSILON;
     for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
         let rotated = false;
@@ -34287,9 +34447,11 @@ function svd(A, m, k, vectors = 'both') {
             }
         }
         if (!rotated)
-            break;
+            return;
     }
-    // Singular values are the column norms; sort descending.
+}
+/** Euclidean norms of the k columns of the column-major m x k W. */
+function columnNorms(W, m, k) {
     const norms = new Float64Array(k);
     for (let c = 0; c < k; c++) {
         let ss = 0;
@@ -34297,20 +34459,7 @@ function svd(A, m, k, vectors = 'both') {
             ss += W[c * m + i] ** 2;
         norms[c] = Math.sqrt(ss);
     }
-    const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
-    const s = new Float64Array(k);
-    const U = new Float64Array(vectors === 'both' ? m * k : 0);
-    const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
-    order.forEach((c, to) => {
-        s[to] = norms[c] * 2 ** shift;
-        if (U.length > 0 && norms[c] > 0)
-            for (let i = 0; i < m; i++)
-                U[to * m + i] = W[c * m + i] / norms[c];
-        if (Vout.length > 0)
-            for (let i = 0; i < k; i++)
-                Vout[to * k + i] = V[c * k + i];
-    });
-    return { s, U, V: Vout };
+    return norms;
 }
 /** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
 function rotate(M, a, b, n, c, s) {
@@ -34614,6 +34763,7 @@ __webpack_async_result__();
 /* harmony export */   y3: () => (/* binding */ emptySums),
 /* harmony export */   yr: () => (/* binding */ gapRatio)
 /* harmony export */ });
+/* harmony import */ var _basis_stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6029);
 /**
  * Error measures of predictions against observed targets, over Float64Arrays.
  * Formulas: RMSE = sqrt(mean((y - yhat)^2)), MAE = mean(|y - yhat|),
@@ -34621,32 +34771,39 @@ __webpack_async_result__();
  * Applied Regression Analysis, 3rd ed., 1998, section 1.6). R^2 of hold-out rows uses the
  * hold-out mean. All are NaN for zero rows; R^2 is NaN when the target is constant.
  */
+
 /** Empty sums. */
 function emptySums() {
     return { n: 0, sse: 0, sae: 0, shift: Number.NaN, sy: 0, syy: 0 };
 }
-/** Adds `m` observations (targets `y`, predictions `yhat`) to `sums`. */
+/**
+ * Adds `m` observations (targets `y`, predictions `yhat`) to `sums`. Each sum is its own pass
+ * (one loop per function; see DEVELOPERS.md, "Writing hot loops"), added in row order.
+ */
 function addErrors(sums, y, yhat, m) {
     if (m > 0 && Number.isNaN(sums.shift))
         sums.shift = y[0];
-    const s = sums.shift;
+    sums.n += m;
+    sums.sse += squaredErrorSum(y, yhat, m);
+    sums.sae += absoluteErrorSum(y, yhat, m);
+    sums.sy += (0,_basis_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfDeviations */ .jZ)(y, m, sums.shift);
+    sums.syy += (0,_basis_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfSquaredDeviations */ .Mq)(y, m, sums.shift);
+}
+/** Sum of (y - yhat)^2 over the first m rows. */
+function squaredErrorSum(y, yhat, m) {
     let sse = 0;
-    let sae = 0;
-    let sy = 0;
-    let syy = 0;
     for (let i = 0; i < m; i++) {
         const r = y[i] - yhat[i];
         sse += r * r;
-        sae += Math.abs(r);
-        const d = y[i] - s;
-        sy += d;
-        syy += d * d;
     }
-    sums.n += m;
-    sums.sse += sse;
-    sums.sae += sae;
-    sums.sy += sy;
-    sums.syy += syy;
+    return sse;
+}
+/** Sum of |y - yhat| over the first m rows. */
+function absoluteErrorSum(y, yhat, m) {
+    let sae = 0;
+    for (let i = 0; i < m; i++)
+        sae += Math.abs(y[i] - yhat[i]);
+    return sae;
 }
 /** RMSE, MAE and R^2 from gathered sums. */
 function errorMeasures(sums) {
@@ -34727,24 +34884,28 @@ function predictRows(design, data, w) {
 function addProducts(out, at, X, m, w, p) {
     let j = 0;
     for (; j + 3 < p; j += 4) {
-        const w0 = w[j];
-        const w1 = w[j + 1];
-        const w2 = w[j + 2];
-        const w3 = w[j + 3];
-        if (w0 === 0 || w1 === 0 || w2 === 0 || w3 === 0) {
+        if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {
             for (let q = j; q < j + 4; q++)
                 addColumn(out, at, X, m, w[q], q);
-            continue;
         }
-        const c0 = j * m;
-        const c1 = c0 + m;
-        const c2 = c1 + m;
-        const c3 = c2 + m;
-        for (let i = 0; i < m; i++)
-            out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
+        else {
+            addFourColumns(out, at, X, m, w[j], w[j + 1], w[j + 2], w[j + 3], j);
+        }
     }
     for (; j < p; j++)
         addColumn(out, at, X, m, w[j], j);
+}
+// The row loops are functions of their own, each one loop and its return (see DEVELOPERS.md,
+// "Writing hot loops"): the loop over columns above then never runs inside code optimised in
+// the middle of a row loop.
+/** out[at + i] += X[j*m + i] w0 + X[(j+1)*m + i] w1 + X[(j+2)*m + i] w2 + X[(j+3)*m + i] w3, added left to right. */
+function addFourColumns(out, at, X, m, w0, w1, w2, w3, j) {
+    const c0 = j * m;
+    const c1 = c0 + m;
+    const c2 = c1 + m;
+    const c3 = c2 + m;
+    for (let i = 0; i < m; i++)
+        out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
 }
 /** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
 function addColumn(out, at, X, m, wj, j) {
@@ -39402,6 +39563,7 @@ var src_fit = __nccwpck_require__(2485);
  * pass that folds rows into the factor. Sums are taken about each column's first value, which
  * keeps the subtraction well conditioned for columns with a large offset.
  */
+
 /** Running sums per column. */
 class ColumnSpread {
     p;
@@ -39424,16 +39586,10 @@ class ColumnSpread {
             const base = j * m;
             if (this.n === 0)
                 this.shift[j] = X[base];
-            const s = this.shift[j];
-            let a = 0;
-            let b = 0;
-            for (let i = 0; i < m; i++) {
-                const d = X[base + i] - s;
-                a += d;
-                b += d * d;
-            }
-            this.s1[j] += a;
-            this.s2[j] += b;
+            const column = X.subarray(base, base + m);
+            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
+            this.s1[j] += (0,stats/* sumOfDeviations */.jZ)(column, m, this.shift[j]);
+            this.s2[j] += (0,stats/* sumOfSquaredDeviations */.Mq)(column, m, this.shift[j]);
         }
         this.n += m;
     }
@@ -39654,7 +39810,7 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     let fitCurve = null;
     const partials = [];
     for (let c = 0; c < inputs.length; c++) {
-        const [tlo, thi] = (0,stats/* range */.y)(train.inputs[c], train.rows);
+        const [tlo, thi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
         if (!(thi > tlo))
             continue;
         const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
@@ -39840,6 +39996,8 @@ class FastReader {
         let row = builder.row;
         let line = this.line;
         let text = null;
+        // The counters are stored on every line, inside the loop: code after a loop that V8 optimised
+        // while it ran has no type feedback, and reaching it would throw the optimised code away.
         while (p < end && row < capacity) {
             // Line start: skip spaces and tabs; a line of nothing else is blank.
             let b = buf[p];
@@ -39848,11 +40006,13 @@ class FastReader {
             if (b === LF) {
                 p++;
                 line++;
+                this.line = line;
                 continue;
             }
             if (b === CR && buf[p + 1] === LF) {
                 p += 2;
                 line++;
+                this.line = line;
                 continue;
             }
             // Other white space could make the line blank for the general path: let it decide.
@@ -39903,9 +40063,10 @@ class FastReader {
                         throw new FastPathDeclined(line);
                     if (b === LOWER_E || b === UPPER_E) {
                         b = buf[++p];
-                        let negativeExponent = false;
+                        // The sign multiplies (no unary minus only negative exponents would run).
+                        let exponentSign = 1;
                         if (b === MINUS) {
-                            negativeExponent = true;
+                            exponentSign = -1;
                             b = buf[++p];
                         }
                         else if (b === PLUS) {
@@ -39919,7 +40080,7 @@ class FastReader {
                                 e = e * 10 + (b - DIGIT_0);
                             b = buf[++p];
                         }
-                        exponent += negativeExponent ? -e : e;
+                        exponent += exponentSign * e;
                     }
                     let value;
                     if (exact && exponent >= -22 && exponent <= 22) {
@@ -39964,9 +40125,9 @@ class FastReader {
             lines[row] = line;
             line++;
             row++;
+            builder.row = row;
+            this.line = line;
         }
-        builder.row = row;
-        this.line = line;
         return p;
     }
     /**
@@ -40333,9 +40494,8 @@ async function fitModel(repo, descriptor, settings) {
         throw new src_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
     }
     for (const data of [train, tables.holdout]) {
-        for (let i = 0; i < data.rows; i++) {
-            if (Math.abs(data.y[i]) <= MAX_MAGNITUDE)
-                continue;
+        const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
+        if (i >= 0) {
             throw new src_errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
         }
     }
@@ -40345,7 +40505,7 @@ async function fitModel(repo, descriptor, settings) {
     const refits = swept?.kind === 'polynomial' ? Math.min(swept.degree, 12) + 3 : swept?.kind === 'rbf' ? 7 : 0;
     if ((0,optimising_compiler/* estimateWork */.KB)({ rows: train.rows, columns: p, inputs: design.inputs.length, refits }) > optimising_compiler/* SMALL_WORK */.ch)
         (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
-    const targetStats = (0,stats/* meanAndSd */.u)(train.y, train.rows);
+    const targetStats = (0,stats/* meanAndSd */.ud)(train.y, train.rows);
     if (!(targetStats.sd > 0)) {
         throw new src_errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
@@ -40420,9 +40580,20 @@ async function fitModel(repo, descriptor, settings) {
         maxAbsCoefficient: maxAbs,
         columnSd,
         targetSd: targetStats.sd,
-        targetRange: (0,stats/* range */.y)(train.y, train.rows),
+        targetRange: (0,stats/* range */.y1)(train.y, train.rows),
     };
     return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation, foldFactors };
+}
+/**
+ * Index of the first of values[0..n) that is not within ±max (NaN included), or -1. A function of
+ * its own so that fitModel is not optimised in the middle of this loop (see DEVELOPERS.md,
+ * "Writing hot loops").
+ */
+function firstBeyond(values, n, max) {
+    for (let i = 0; i < n; i++)
+        if (!(Math.abs(values[i]) <= max))
+            return i;
+    return -1;
 }
 /**
  * InputError `design-overflow` when a block of the training design holds a value that is not a

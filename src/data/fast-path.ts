@@ -131,6 +131,8 @@ class FastReader {
     let line = this.line;
     let text: Buffer | null = null;
 
+    // The counters are stored on every line, inside the loop: code after a loop that V8 optimised
+    // while it ran has no type feedback, and reaching it would throw the optimised code away.
     while (p < end && row < capacity) {
       // Line start: skip spaces and tabs; a line of nothing else is blank.
       let b = buf[p];
@@ -138,11 +140,13 @@ class FastReader {
       if (b === LF) {
         p++;
         line++;
+        this.line = line;
         continue;
       }
       if (b === CR && buf[p + 1] === LF) {
         p += 2;
         line++;
+        this.line = line;
         continue;
       }
       // Other white space could make the line blank for the general path: let it decide.
@@ -186,9 +190,10 @@ class FastReader {
           if (digits === 0) throw new FastPathDeclined(line);
           if (b === LOWER_E || b === UPPER_E) {
             b = buf[++p];
-            let negativeExponent = false;
+            // The sign multiplies (no unary minus only negative exponents would run).
+            let exponentSign = 1;
             if (b === MINUS) {
-              negativeExponent = true;
+              exponentSign = -1;
               b = buf[++p];
             } else if (b === PLUS) {
               b = buf[++p];
@@ -199,7 +204,7 @@ class FastReader {
               if (e < EXPONENT_CLAMP) e = e * 10 + (b - DIGIT_0);
               b = buf[++p];
             }
-            exponent += negativeExponent ? -e : e;
+            exponent += exponentSign * e;
           }
           let value: number;
           if (exact && exponent >= -22 && exponent <= 22) {
@@ -234,9 +239,9 @@ class FastReader {
       lines[row] = line;
       line++;
       row++;
+      builder.row = row;
+      this.line = line;
     }
-    builder.row = row;
-    this.line = line;
     return p;
   }
 

@@ -48,9 +48,16 @@ function middleOf(a: Float64Array, n: number, upper: number): number {
   const value = selectKth(a, upper);
   if (n % 2 === 1) return value;
   // The lower middle is the largest value left of the upper middle after selection.
-  let lower = -Infinity;
-  for (let i = 0; i < upper; i++) if (a[i] > lower) lower = a[i];
-  return (lower + value) / 2;
+  return (largestBefore(a, upper) + value) / 2;
+}
+
+// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
+
+/** Largest of a[0..end); -Infinity when end = 0. */
+function largestBefore(a: Float64Array, end: number): number {
+  let largest = -Infinity;
+  for (let i = 0; i < end; i++) if (a[i] > largest) largest = a[i];
+  return largest;
 }
 
 /**
@@ -67,9 +74,9 @@ function bracketedMedian(values: Float64Array, n: number, work: Float64Array): n
   sample.sort();
   const lo = sample[BRACKET_SAMPLE / 2 - BRACKET_HALF_WIDTH];
   const hi = sample[BRACKET_SAMPLE / 2 + BRACKET_HALF_WIDTH];
-  const capacity = Math.min(n, work.length);
-  const { below, inside } = gatherBracket(values, n, lo, hi, work, capacity);
+  const inside = gatherBracket(values, n, lo, hi, work, Math.min(n, work.length));
   if (inside < 0) return null;
+  const below = countBelow(values, n, lo);
   const upper = n >> 1;
   const lower = n % 2 === 1 ? upper : upper - 1;
   // Both middle ranks must fall among the gathered values.
@@ -78,21 +85,26 @@ function bracketedMedian(values: Float64Array, n: number, work: Float64Array): n
 }
 
 /**
- * One pass: counts values below `lo` and copies those in [lo, hi] to `out` (in column order).
- * `inside` is -1 when more than `capacity` values fall in the bracket.
+ * One pass: copies the values in [lo, hi] to `out` (in column order) and returns how many; -1 when
+ * more than `capacity` values fall in the bracket.
  */
-function gatherBracket(values: Float64Array, n: number, lo: number, hi: number, out: Float64Array, capacity: number): { below: number; inside: number } {
-  let below = 0;
+function gatherBracket(values: Float64Array, n: number, lo: number, hi: number, out: Float64Array, capacity: number): number {
   let inside = 0;
   for (let i = 0; i < n; i++) {
     const v = values[i];
-    if (v < lo) below++;
-    else if (v <= hi) {
-      if (inside === capacity) return { below, inside: -1 };
+    if (v >= lo && v <= hi) {
+      if (inside === capacity) return -1;
       out[inside++] = v;
     }
   }
-  return { below, inside };
+  return inside;
+}
+
+/** Values below `lo` among values[0..n). */
+function countBelow(values: Float64Array, n: number, lo: number): number {
+  let below = 0;
+  for (let i = 0; i < n; i++) if (values[i] < lo) below++;
+  return below;
 }
 
 /**
@@ -110,9 +122,23 @@ export function selectKth(a: Float64Array, k: number): number {
     let x = a[lo];
     let y = a[mid];
     let z = a[hi];
-    if (x > y) [x, y] = [y, x];
-    if (y > z) [y, z] = [z, y];
-    if (x > y) [x, y] = [y, x];
+    // Sort the three with plain swaps (no array literals: see DEVELOPERS.md, "Writing hot loops").
+    let t: number;
+    if (x > y) {
+      t = x;
+      x = y;
+      y = t;
+    }
+    if (y > z) {
+      t = y;
+      y = z;
+      z = t;
+    }
+    if (x > y) {
+      t = x;
+      x = y;
+      y = t;
+    }
     const pivot = y;
     let i = lo;
     let j = hi;

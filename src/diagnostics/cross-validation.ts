@@ -54,14 +54,7 @@ export class FoldFactorBuilder {
     const foldOf = this.#folds.foldOf;
     if (m === 0) return;
     const first = foldOf[start];
-    let single = true;
-    for (let i = 1; i < m; i++) {
-      if (foldOf[start + i] !== first) {
-        single = false;
-        break;
-      }
-    }
-    if (single) {
+    if (oneFold(foldOf, start, m)) {
       this.factors[first].addRows(X, y.subarray(start, start + m), m);
       return;
     }
@@ -88,6 +81,13 @@ export class FoldFactorBuilder {
       this.factors[f].addRows(sub, subY, mf);
     }
   }
+}
+
+/** True when rows start .. start+m-1 (m >= 1) all belong to one fold (one loop per function; see DEVELOPERS.md, "Writing hot loops"). */
+function oneFold(foldOf: Int32Array, start: number, m: number): boolean {
+  const first = foldOf[start];
+  for (let i = 1; i < m; i++) if (foldOf[start + i] !== first) return false;
+  return true;
 }
 
 /**
@@ -233,8 +233,7 @@ export function outOfFoldErrors(
   forEachBlock(design, data, (X, start, m) => {
     if (pred.length < m) pred = new Float64Array(m);
     // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
-    let single = m > 0 ? foldOf[start] : -1;
-    for (let i = 1; i < m && single >= 0; i++) if (foldOf[start + i] !== single) single = -1;
+    const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
     for (let s = 0; s < S; s++) {
       const W = tables[s];
       const errors = sse[s];
@@ -399,20 +398,33 @@ export function crossValidate(design: Design, data: Rows, fit: FitResult, folds:
     pred.fill(0, 0, m);
     addProducts(pred, 0, X, m, w, p);
     if (out !== undefined) out.set(pred.subarray(0, m), start);
+    // The sums run in locals and are stored once per block: the same additions in the same order,
+    // without boxing a number into the closure's context on every row.
+    let blockRss = rss;
+    let blockPress = press;
+    let blockLeverageSum = leverageSum;
+    let blockMaxLeverage = maxLeverage;
+    let blockOnes = rowsWithLeverageOne;
+    const y = data.y;
     for (let i = 0; i < m; i++) {
-      const e = data.y[start + i] - pred[i];
-      rss += e * e;
+      const e = y[start + i] - pred[i];
+      blockRss += e * e;
       const hi = h[i];
-      leverageSum += hi;
-      if (hi > maxLeverage) maxLeverage = hi;
+      blockLeverageSum += hi;
+      if (hi > blockMaxLeverage) blockMaxLeverage = hi;
       if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
-        rowsWithLeverageOne++;
-        press = Infinity;
+        blockOnes++;
+        blockPress = Infinity;
       } else {
         const loo = e / (1 - hi);
-        press += loo * loo;
+        blockPress += loo * loo;
       }
     }
+    rss = blockRss;
+    press = blockPress;
+    leverageSum = blockLeverageSum;
+    maxLeverage = blockMaxLeverage;
+    rowsWithLeverageOne = blockOnes;
   };
   const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
   const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;

@@ -50,6 +50,56 @@ function sameInputs(a: readonly Float64Array[], i: number, b: readonly Float64Ar
 }
 
 /**
+ * Hash table of rows by open addressing with linear probing over typed arrays: slot -> (hash,
+ * first row), rows with the same hash chained through `next`. No Map, no per-row objects.
+ */
+interface RowTable {
+  mask: number;
+  slotHash: Uint32Array;
+  slotHead: Int32Array;
+  next: Int32Array;
+}
+
+/** The slot of `hash`: where it is, or the empty slot where it goes. */
+function findSlot(table: RowTable, hash: number): number {
+  const { slotHead, slotHash, mask } = table;
+  let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+  while (slotHead[s] >= 0 && slotHash[s] !== hash) s = (s + 1) & mask;
+  return s;
+}
+
+// The two passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+
+/** Puts rows 0..n-1 in the table, so that each chain lists its rows in file order. */
+function indexRows(table: RowTable, inputs: readonly Float64Array[], n: number): void {
+  for (let r = n - 1; r >= 0; r--) {
+    const hash = rowHash(inputs, r);
+    const s = findSlot(table, hash);
+    table.next[r] = table.slotHead[s];
+    table.slotHash[s] = hash;
+    table.slotHead[s] = r;
+  }
+}
+
+/**
+ * Streams the training rows past the table of hold-out rows in file order: firstMatch[r] receives
+ * the first training row whose inputs equal hold-out row r's, targetToo[r] = 1 when some such row
+ * has its target too.
+ */
+function matchRows(table: RowTable, holdout: Pick<ModelData, 'inputs' | 'y'>, train: Pick<ModelData, 'inputs' | 'y' | 'rows'>, firstMatch: Int32Array, targetToo: Uint8Array): void {
+  for (let i = 0; i < train.rows; i++) {
+    let r = table.slotHead[findSlot(table, rowHash(train.inputs, i))];
+    while (r >= 0) {
+      if (sameInputs(holdout.inputs, r, train.inputs, i)) {
+        if (firstMatch[r] < 0) firstMatch[r] = i;
+        if (holdout.y[r] === train.y[i]) targetToo[r] = 1;
+      }
+      r = table.next[r];
+    }
+  }
+}
+
+/**
  * Finds hold-out rows equal to a training row in every input column of the model (values compared
  * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
  * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
@@ -60,43 +110,16 @@ function sameInputs(a: readonly Float64Array[], i: number, b: readonly Float64Ar
  */
 export function findLeakage(train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>, holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>): Leakage {
   const columns = train.inputs.length;
-  // Hash table of the hold-out rows (the smaller file, usually) by open addressing with linear
-  // probing over typed arrays: slot -> (hash, first row), rows with the same hash chained
-  // through `next`. No Map, no per-row objects. The training rows then stream past it in file
-  // order, so each hold-out row's first match is the earliest training row.
+  // A hash table of the hold-out rows (the smaller file, usually); the training rows then stream
+  // past it in file order, so each hold-out row's first match is the earliest training row.
   const h = holdout.rows;
   let size = 1024;
   while (size < 2 * h) size *= 2;
-  const mask = size - 1;
-  const slotHash = new Uint32Array(size);
-  const slotHead = new Int32Array(size).fill(-1);
-  const next = new Int32Array(h).fill(-1);
-  const find = (hash: number): number => {
-    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
-    while (slotHead[s] >= 0 && slotHash[s] !== hash) s = (s + 1) & mask;
-    return s;
-  };
-  for (let r = h - 1; r >= 0; r--) {
-    const hash = rowHash(holdout.inputs, r);
-    const s = find(hash);
-    next[r] = slotHead[s];
-    slotHash[s] = hash;
-    slotHead[s] = r;
-  }
+  const table: RowTable = { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(h).fill(-1) };
+  indexRows(table, holdout.inputs, h);
   const firstMatch = new Int32Array(h).fill(-1);
   const targetToo = new Uint8Array(h);
-  if (h > 0) {
-    for (let i = 0; i < train.rows; i++) {
-      let r = slotHead[find(rowHash(train.inputs, i))];
-      while (r >= 0) {
-        if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-          if (firstMatch[r] < 0) firstMatch[r] = i;
-          if (holdout.y[r] === train.y[i]) targetToo[r] = 1;
-        }
-        r = next[r];
-      }
-    }
-  }
+  if (h > 0) matchRows(table, holdout, train, firstMatch, targetToo);
   let inputMatches = 0;
   let fullMatches = 0;
   const holdoutLines: number[] = [];

@@ -124,8 +124,7 @@ function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions, 
   const margin = options.margin ?? 0.1;
   const marginPoints = options.marginPoints ?? 40;
   const maxGaps = options.maxGaps ?? 4000;
-  let count = 0;
-  for (let i = 0; i < n; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  const count = packDistinct(sorted, n);
   const distinct = sorted.subarray(0, count);
   if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
   const lo = distinct[0];
@@ -134,26 +133,54 @@ function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions, 
   const gaps = widestGaps(distinct, maxGaps, work);
   const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
   const inside = new Float64Array(uniform + gaps.length * per);
-  let w = 0;
-  for (let t = 0; t < uniform; t++) inside[w++] = t === uniform - 1 ? hi : lo + (width * t) / Math.max(1, uniform - 1);
-  for (const g of gaps) {
-    const a = distinct[g];
-    const b = distinct[g + 1];
-    for (let t = 1; t <= per; t++) inside[w++] = a + ((b - a) * t) / (per + 1);
+  fillUniform(inside, uniform, lo, hi);
+  const w = fillGaps(inside, uniform, distinct, gaps, per);
+  const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+  return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+}
+
+// The loops of the grid are functions of their own, each a loop and its return (see
+// DEVELOPERS.md, "Writing hot loops").
+
+/** Packs the distinct values of the ascending a[0..n) to its front; returns how many. */
+function packDistinct(a: Float64Array, n: number): number {
+  let count = 0;
+  for (let i = 0; i < n; i++) if (count === 0 || a[i] !== a[count - 1]) a[count++] = a[i];
+  return count;
+}
+
+/** The distinct values of xs[0..length), ascending (xs is reordered). */
+function unique(xs: Float64Array, length: number): Float64Array {
+  const u = sortFloat64(xs.subarray(0, length));
+  return u.slice(0, packDistinct(u, u.length));
+}
+
+/** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
+function fillUniform(out: Float64Array, count: number, lo: number, hi: number): void {
+  const width = hi - lo;
+  for (let t = 0; t < count; t++) out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
+}
+
+/** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
+function fillGaps(out: Float64Array, at: number, distinct: Float64Array, gaps: Int32Array, per: number): number {
+  let w = at;
+  for (let g = 0; g < gaps.length; g++) {
+    const a = distinct[gaps[g]];
+    const b = distinct[gaps[g] + 1];
+    for (let t = 1; t <= per; t++) out[w++] = a + ((b - a) * t) / (per + 1);
   }
-  const beyond = new Float64Array(2 * marginPoints);
-  for (let t = 1; t <= marginPoints; t++) {
-    const d = (margin * width * t) / marginPoints;
+  return w;
+}
+
+/** `count` points on each side of [lo, hi], at (t / count) of `reach` for t = 1..count, alternating below and above. */
+function marginGrid(lo: number, hi: number, reach: number, count: number): Float64Array {
+  const beyond = new Float64Array(2 * count);
+  for (let t = 1; t <= count; t++) {
+    const d = (reach * t) / count;
     beyond[2 * t - 2] = lo - d;
     beyond[2 * t - 1] = hi + d;
   }
-  const unique = (xs: Float64Array, length: number): Float64Array => {
-    const u = sortFloat64(xs.subarray(0, length));
-    let k = 0;
-    for (let i = 0; i < u.length; i++) if (k === 0 || u[i] !== u[k - 1]) u[k++] = u[i];
-    return u.slice(0, k);
-  };
-  return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+  return beyond;
 }
 
 /**
@@ -165,18 +192,35 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
   const count = distinct.length - 1;
   if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
   const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
-  for (let g = 0; g < count; g++) widths[g] = distinct[g + 1] - distinct[g];
+  gapWidths(distinct, count, widths);
   const threshold = selectKth(widths, count - maxGaps);
+  const out = new Int32Array(maxGaps);
+  pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
+  return out;
+}
+
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+
+/** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
+function gapWidths(distinct: Float64Array, count: number, widths: Float64Array): void {
+  for (let g = 0; g < count; g++) widths[g] = distinct[g + 1] - distinct[g];
+}
+
+/** How many of the first `count` gaps are wider than `threshold`. */
+function gapsWiderThan(distinct: Float64Array, count: number, threshold: number): number {
   let above = 0;
   for (let g = 0; g < count; g++) if (distinct[g + 1] - distinct[g] > threshold) above++;
-  let ties = maxGaps - above;
-  const out = new Int32Array(maxGaps);
+  return above;
+}
+
+/** Writes to `out`, ascending, every gap wider than `threshold` and the first `ties` gaps equal to it. */
+function pickGaps(distinct: Float64Array, count: number, threshold: number, ties: number, out: Int32Array): void {
+  let left = ties;
   let w = 0;
   for (let g = 0; g < count; g++) {
     const width = distinct[g + 1] - distinct[g];
-    if (width > threshold || (width === threshold && ties-- > 0)) out[w++] = g;
+    if (width > threshold || (width === threshold && left-- > 0)) out[w++] = g;
   }
-  return out;
 }
 
 /**
@@ -192,10 +236,15 @@ function gridSample(column: Float64Array, n: number, max: number, out: Float64Ar
   }
   const [lo, hi] = range(column, n);
   const strided = max - 2;
-  for (let t = 0; t < strided; t++) out[t] = column[Math.floor((t * n) / strided)];
   out[strided] = lo;
   out[strided + 1] = hi;
+  stridedSample(column, n, strided, out);
   return max;
+}
+
+/** out[t] = column[floor(t n / count)] for t = 0 .. count-1. */
+function stridedSample(column: Float64Array, n: number, count: number, out: Float64Array): void {
+  for (let t = 0; t < count; t++) out[t] = column[Math.floor((t * n) / count)];
 }
 
 /** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
@@ -257,13 +306,12 @@ function predictorAlong(design: Design, coefficients: ArrayLike<number>, c: numb
 
 /**
  * Merges two ascending point sets that never share a value (the margins lie outside the range)
- * with their predictions: the order a stable sort by x gives.
+ * with their predictions into xs and ps (length of both sets together): the order a stable sort
+ * by x gives.
  */
-function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp: Float64Array): { xs: Float64Array; ps: Float64Array } {
+function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp: Float64Array, xs: Float64Array, ps: Float64Array): void {
   const na = ax.length;
   const nb = bx.length;
-  const xs = new Float64Array(na + nb);
-  const ps = new Float64Array(na + nb);
   for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
     if (b >= nb || (a < na && ax[a] <= bx[b])) {
       xs[dst] = ax[a];
@@ -273,37 +321,44 @@ function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp
       ps[dst] = bp[b++];
     }
   }
-  return { xs, ps };
 }
 
 /** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
 function extremeIndices(values: Float64Array): [number, number] {
-  let imin = 0;
-  let imax = 0;
-  for (let i = 1; i < values.length; i++) {
-    if (values[i] > values[imax]) imax = i;
-    if (values[i] < values[imin]) imin = i;
-  }
-  return [imin, imax];
+  return [indexOfSmallest(values), indexOfLargest(values)];
 }
 
-/**
- * The largest excursion max(0, v - hi, lo - v) / (hi - lo) over pred[0..m) (Infinity for a NaN
- * prediction) and the first index reaching it.
- */
-function largestExcursion(pred: Float64Array, m: number, lo: number, hi: number): { value: number; index: number } {
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+
+function indexOfSmallest(values: Float64Array): number {
+  let imin = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] < values[imin]) imin = i;
+  return imin;
+}
+
+function indexOfLargest(values: Float64Array): number {
+  let imax = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] > values[imax]) imax = i;
+  return imax;
+}
+
+/** Excursion of one prediction: max(0, v - hi, lo - v) / (hi - lo); Infinity for NaN. */
+function pointExcursion(v: number, lo: number, hi: number): number {
+  return Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / (hi - lo);
+}
+
+/** The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than -Infinity. */
+function worstExcursionIndex(pred: Float64Array, m: number, lo: number, hi: number): number {
   let value = -Infinity;
   let index = 0;
-  const width = hi - lo;
   for (let i = 0; i < m; i++) {
-    const v = pred[i];
-    const e = Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / width;
+    const e = pointExcursion(pred[i], lo, hi);
     if (e > value) {
       value = e;
       index = i;
     }
   }
-  return { value, index };
+  return index;
 }
 
 /** One input's scan: its grid inside the training range and in the margins. */
@@ -360,16 +415,17 @@ function segmentPoints(inputs: readonly Float64Array[], pairs: Int32Array, perSe
   const segmentsCount = pairs.length / 2;
   const m = segmentsCount * perSegment;
   const columns = inputs.map(() => new Float64Array(m));
-  for (let c = 0; c < d; c++) {
-    const col = inputs[c];
-    const out = columns[c];
-    for (let q = 0; q < segmentsCount; q++) {
-      const from = col[pairs[2 * q]];
-      const to = col[pairs[2 * q + 1]];
-      for (let t = 1; t <= perSegment; t++) out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
-    }
-  }
+  for (let c = 0; c < d; c++) segmentsAlong(inputs[c], pairs, segmentsCount, perSegment, columns[c]);
   return columns;
+}
+
+/** One input's points inside every segment (pairs[2q] to pairs[2q + 1]), `perSegment` each, into `out`. */
+function segmentsAlong(col: Float64Array, pairs: Int32Array, segmentsCount: number, perSegment: number, out: Float64Array): void {
+  for (let q = 0; q < segmentsCount; q++) {
+    const from = col[pairs[2 * q]];
+    const to = col[pairs[2 * q + 1]];
+    for (let t = 1; t <= perSegment; t++) out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
+  }
 }
 
 /**
@@ -382,12 +438,7 @@ function segmentPoints(inputs: readonly Float64Array[], pairs: Int32Array, perSe
 export function planSwing(design: Design, train: Rows, options: SwingOptions = {}): SwingPlan {
   const n = train.rows;
   const d = design.inputs.length;
-  let ylo = Infinity;
-  let yhi = -Infinity;
-  for (let i = 0; i < n; i++) {
-    if (train.y[i] < ylo) ylo = train.y[i];
-    if (train.y[i] > yhi) yhi = train.y[i];
-  }
+  const [ylo, yhi] = range(train.y, n);
   // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
   const scratch = new Float64Array(n);
   const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
@@ -444,7 +495,8 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
   const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
     const pred = given ?? predictRows(design, { inputs: columns, rows: m }, coefficients);
     if (m > 0) {
-      const { value, index } = largestExcursion(pred, m, ylo, yhi);
+      const index = worstExcursionIndex(pred, m, ylo, yhi);
+      const value = pointExcursion(pred[index], ylo, yhi);
       if (where === 'inside') {
         if (worstInside === null || value > inside) {
           inside = Math.max(inside, value);
@@ -474,7 +526,9 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
     // Curve for charts: all points ascending, thinned with the extremes kept.
-    const { xs, ps } = mergeAscending(grid.inside, pin, grid.beyond, pout);
+    const xs = new Float64Array(grid.inside.length + grid.beyond.length);
+    const ps = new Float64Array(xs.length);
+    mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
     const [imin, imax] = extremeIndices(ps);
     const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
     const others: Record<string, number> = {};

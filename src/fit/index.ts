@@ -404,39 +404,48 @@ export function leveragesInto(fit: FitResult, X: Float64Array, m: number, out: F
     out.set(leverages(fit, X, m));
     return;
   }
-  const R = fit.factor.R;
-  const CH = 256;
-  const Z = new Float64Array(CH * p);
-  for (let i0 = 0; i0 < m; i0 += CH) {
-    const mb = Math.min(CH, m - i0);
-    for (let i = 0; i < mb; i++) out[i0 + i] = 0;
-    for (let j = 0; j < p; j++) {
-      const zj = j * CH;
-      const xj = j * m + i0;
-      for (let i = 0; i < mb; i++) Z[zj + i] = X[xj + i];
-      let k = 0;
-      // Four earlier columns per sweep (the same subtractions in the same order per row).
-      for (; k + 3 < j; k += 4) {
-        const r0 = R[j * p + k];
-        const r1 = R[j * p + k + 1];
-        const r2 = R[j * p + k + 2];
-        const r3 = R[j * p + k + 3];
-        const z0 = k * CH;
-        for (let i = 0; i < mb; i++) {
-          Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
-        }
-      }
-      for (; k < j; k++) {
-        const r = R[j * p + k];
-        const zk = k * CH;
-        for (let i = 0; i < mb; i++) Z[zj + i] -= r * Z[zk + i];
-      }
-      const diag = R[j * p + j];
+  const Z = new Float64Array(LEVERAGE_CHUNK * fit.factor.p);
+  for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK) leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
+}
+
+/** Rows per chunk of {@link leveragesInto} (the chunk's z columns stay in cache). */
+const LEVERAGE_CHUNK = 256;
+
+/**
+ * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
+ * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
+ * its own so that its loops never run inside code V8 optimised in the middle of another chunk
+ * (see DEVELOPERS.md, "Writing hot loops").
+ */
+function leverageChunk(R: Float64Array, p: number, X: Float64Array, m: number, i0: number, mb: number, Z: Float64Array, out: Float64Array): void {
+  const CH = LEVERAGE_CHUNK;
+  for (let i = 0; i < mb; i++) out[i0 + i] = 0;
+  for (let j = 0; j < p; j++) {
+    const zj = j * CH;
+    const xj = j * m + i0;
+    for (let i = 0; i < mb; i++) Z[zj + i] = X[xj + i];
+    let k = 0;
+    // Four earlier columns per sweep (the same subtractions in the same order per row).
+    for (; k + 3 < j; k += 4) {
+      const r0 = R[j * p + k];
+      const r1 = R[j * p + k + 1];
+      const r2 = R[j * p + k + 2];
+      const r3 = R[j * p + k + 3];
+      const z0 = k * CH;
       for (let i = 0; i < mb; i++) {
-        const z = Z[zj + i] / diag;
-        Z[zj + i] = z;
-        out[i0 + i] += z * z;
+        Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
       }
+    }
+    for (; k < j; k++) {
+      const r = R[j * p + k];
+      const zk = k * CH;
+      for (let i = 0; i < mb; i++) Z[zj + i] -= r * Z[zk + i];
+    }
+    const diag = R[j * p + j];
+    for (let i = 0; i < mb; i++) {
+      const z = Z[zj + i] / diag;
+      Z[zj + i] = z;
+      out[i0 + i] += z * z;
     }
   }
 }

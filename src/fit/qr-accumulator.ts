@@ -175,23 +175,25 @@ export class QrAccumulator {
  * @throws RangeError naming row and column when a value is NaN or infinite
  */
 function copyChecked(X: Float64Array, ldx: number, y: Float64Array, start: number, mb: number, p: number, C: Float64Array, yc: Float64Array, ld: number): void {
-  for (let j = 0; j < p; j++) {
-    const src = j * ldx + start;
-    const dst = j * ld;
-    for (let i = 0; i < mb; i++) {
-      const v = X[src + i];
-      if (!Number.isFinite(v)) {
-        throw new RangeError(`addRows: X at row ${start + i}, column ${j} must be a finite number, got ${String(v)}`);
-      }
-      C[dst + i] = v;
-    }
-  }
+  for (let j = 0; j < p; j++) copyColumnChecked(X, j * ldx + start, C, j * ld, mb, start, j);
+  copyColumnChecked(y, start, yc, 0, mb, start, -1);
+}
+
+/**
+ * Copies mb values from src[from..] to dst[to..] (one loop per function; see DEVELOPERS.md,
+ * "Writing hot loops").
+ * @param firstRow the row of src[from], for the error
+ * @param column the column of X, or -1 for y, for the error
+ * @throws RangeError naming row and column when a value is NaN or infinite
+ */
+function copyColumnChecked(src: Float64Array, from: number, dst: Float64Array, to: number, mb: number, firstRow: number, column: number): void {
   for (let i = 0; i < mb; i++) {
-    const v = y[start + i];
+    const v = src[from + i];
     if (!Number.isFinite(v)) {
-      throw new RangeError(`addRows: y at row ${start + i} must be a finite number, got ${String(v)}`);
+      const what = column < 0 ? `y at row ${firstRow + i}` : `X at row ${firstRow + i}, column ${column}`;
+      throw new RangeError(`addRows: ${what} must be a finite number, got ${String(v)}`);
     }
-    yc[i] = v;
+    dst[to + i] = v;
   }
 }
 

@@ -40,25 +40,58 @@ export const MAX_SWEEPS = 60;
  */
 export function svd(A: Float64Array, m: number, k: number, vectors: SvdVectors = 'both'): Svd {
   if (k < 1 || m < k) throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
-  let amax = 0;
-  for (let i = 0; i < m * k; i++) {
-    const a = Math.abs(A[i]);
-    if (!(a <= amax)) amax = a;
-  }
+  const amax = largestMagnitude(A, m * k);
   if (!Number.isFinite(amax)) throw new RangeError('svd: the matrix has a non-finite entry');
   if (amax === 0) return zeroSvd(m, k, vectors);
   const shift = Math.round(Math.log2(amax));
-  const scale = 2 ** -shift;
+  const W = scaledCopy(A, m * k, 2 ** -shift);
+  const V = new Float64Array(k * k);
+  for (let c = 0; c < k; c++) V[c * k + c] = 1;
+  jacobiSweeps(W, V, m, k);
+
+  // Singular values are the column norms; sort descending.
+  const norms = columnNorms(W, m, k);
+  const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
+  const s = new Float64Array(k);
+  const U = new Float64Array(vectors === 'both' ? m * k : 0);
+  const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
+  order.forEach((c, to) => {
+    s[to] = norms[c] * 2 ** shift;
+    if (U.length > 0 && norms[c] > 0) for (let i = 0; i < m; i++) U[to * m + i] = W[c * m + i] / norms[c];
+    if (Vout.length > 0) for (let i = 0; i < k; i++) Vout[to * k + i] = V[c * k + i];
+  });
+  return { s, U, V: Vout };
+}
+
+// The loops below are functions of their own, each a loop nest and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+
+/** Largest |a_i| over A[0..n); NaN or Infinity when an entry is not finite. */
+function largestMagnitude(A: Float64Array, n: number): number {
+  let amax = 0;
+  for (let i = 0; i < n; i++) {
+    const a = Math.abs(A[i]);
+    if (!(a <= amax)) amax = a;
+  }
+  return amax;
+}
+
+/** A[0..n) times `scale` (a power of two, so exact), entries below 2^-600 set to zero. */
+function scaledCopy(A: Float64Array, n: number, scale: number): Float64Array {
   const floor = 2 ** -600;
-  const W = new Float64Array(m * k);
-  for (let i = 0; i < m * k; i++) {
+  const W = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
     const v = A[i] * scale;
     W[i] = Math.abs(v) < floor ? 0 : v;
   }
-  const V = new Float64Array(k * k);
-  for (let c = 0; c < k; c++) V[c * k + c] = 1;
+  return W;
+}
 
-  // One-sided Jacobi: rotate column pairs (p, q) until every pair is orthogonal to eps.
+/**
+ * One-sided Jacobi: rotates column pairs (p, q) of W (m x k), and the same pairs of V (k x k),
+ * until every pair of W's columns is orthogonal to machine precision, or {@link MAX_SWEEPS}.
+ */
+function jacobiSweeps(W: Float64Array, V: Float64Array, m: number, k: number): void {
   const eps = Number.EPSILON;
   for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
     let rotated = false;
@@ -87,26 +120,19 @@ export function svd(A: Float64Array, m: number, k: number, vectors: SvdVectors =
         rotate(V, p * k, q * k, k, c, s);
       }
     }
-    if (!rotated) break;
+    if (!rotated) return;
   }
+}
 
-  // Singular values are the column norms; sort descending.
+/** Euclidean norms of the k columns of the column-major m x k W. */
+function columnNorms(W: Float64Array, m: number, k: number): Float64Array {
   const norms = new Float64Array(k);
   for (let c = 0; c < k; c++) {
     let ss = 0;
     for (let i = 0; i < m; i++) ss += W[c * m + i] ** 2;
     norms[c] = Math.sqrt(ss);
   }
-  const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
-  const s = new Float64Array(k);
-  const U = new Float64Array(vectors === 'both' ? m * k : 0);
-  const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
-  order.forEach((c, to) => {
-    s[to] = norms[c] * 2 ** shift;
-    if (U.length > 0 && norms[c] > 0) for (let i = 0; i < m; i++) U[to * m + i] = W[c * m + i] / norms[c];
-    if (Vout.length > 0) for (let i = 0; i < k; i++) Vout[to * k + i] = V[c * k + i];
-  });
-  return { s, U, V: Vout };
+  return norms;
 }
 
 /** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */

@@ -3,6 +3,7 @@
  * pass that folds rows into the factor. Sums are taken about each column's first value, which
  * keeps the subtraction well conditioned for columns with a large offset.
  */
+import { sumOfDeviations, sumOfSquaredDeviations } from '../basis/stats.js';
 
 /** Running sums per column. */
 export class ColumnSpread {
@@ -24,16 +25,10 @@ export class ColumnSpread {
     for (let j = 0; j < this.p; j++) {
       const base = j * m;
       if (this.n === 0) this.shift[j] = X[base];
-      const s = this.shift[j];
-      let a = 0;
-      let b = 0;
-      for (let i = 0; i < m; i++) {
-        const d = X[base + i] - s;
-        a += d;
-        b += d * d;
-      }
-      this.s1[j] += a;
-      this.s2[j] += b;
+      const column = X.subarray(base, base + m);
+      // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
+      this.s1[j] += sumOfDeviations(column, m, this.shift[j]);
+      this.s2[j] += sumOfSquaredDeviations(column, m, this.shift[j]);
     }
     this.n += m;
   }

@@ -5,6 +5,7 @@
  * Applied Regression Analysis, 3rd ed., 1998, section 1.6). R^2 of hold-out rows uses the
  * hold-out mean. All are NaN for zero rows; R^2 is NaN when the target is constant.
  */
+import { sumOfDeviations, sumOfSquaredDeviations } from '../basis/stats.js';
 
 /** Sums needed for RMSE, MAE and R^2, gathered in one pass. */
 export interface ErrorSums {
@@ -22,27 +23,34 @@ export function emptySums(): ErrorSums {
   return { n: 0, sse: 0, sae: 0, shift: Number.NaN, sy: 0, syy: 0 };
 }
 
-/** Adds `m` observations (targets `y`, predictions `yhat`) to `sums`. */
-export function addErrors(sums: ErrorSums, y: ArrayLike<number>, yhat: ArrayLike<number>, m: number): void {
+/**
+ * Adds `m` observations (targets `y`, predictions `yhat`) to `sums`. Each sum is its own pass
+ * (one loop per function; see DEVELOPERS.md, "Writing hot loops"), added in row order.
+ */
+export function addErrors(sums: ErrorSums, y: Float64Array, yhat: Float64Array, m: number): void {
   if (m > 0 && Number.isNaN(sums.shift)) sums.shift = y[0];
-  const s = sums.shift;
+  sums.n += m;
+  sums.sse += squaredErrorSum(y, yhat, m);
+  sums.sae += absoluteErrorSum(y, yhat, m);
+  sums.sy += sumOfDeviations(y, m, sums.shift);
+  sums.syy += sumOfSquaredDeviations(y, m, sums.shift);
+}
+
+/** Sum of (y - yhat)^2 over the first m rows. */
+function squaredErrorSum(y: Float64Array, yhat: Float64Array, m: number): number {
   let sse = 0;
-  let sae = 0;
-  let sy = 0;
-  let syy = 0;
   for (let i = 0; i < m; i++) {
     const r = y[i] - yhat[i];
     sse += r * r;
-    sae += Math.abs(r);
-    const d = y[i] - s;
-    sy += d;
-    syy += d * d;
   }
-  sums.n += m;
-  sums.sse += sse;
-  sums.sae += sae;
-  sums.sy += sy;
-  sums.syy += syy;
+  return sse;
+}
+
+/** Sum of |y - yhat| over the first m rows. */
+function absoluteErrorSum(y: Float64Array, yhat: Float64Array, m: number): number {
+  let sae = 0;
+  for (let i = 0; i < m; i++) sae += Math.abs(y[i] - yhat[i]);
+  return sae;
 }
 
 /** RMSE, MAE and R^2 from gathered sums. */

@@ -4,8 +4,8 @@ import { addErrors, emptySums, errorMeasures, gapRatio } from '../../src/metrics
 
 describe('error measures', () => {
   it('match their definitions on a small case computed by hand', () => {
-    const y = [1, 2, 3, 4];
-    const yhat = [1.5, 2, 2, 4];
+    const y = Float64Array.of(1, 2, 3, 4);
+    const yhat = Float64Array.of(1.5, 2, 2, 4);
     const s = emptySums();
     addErrors(s, y.slice(0, 2), yhat.slice(0, 2), 2);
     addErrors(s, y.slice(2), yhat.slice(2), 2);
@@ -19,7 +19,7 @@ describe('error measures', () => {
   it('are NaN for zero rows, and R^2 is NaN for a constant target', () => {
     expect(Number.isNaN(errorMeasures(emptySums()).rmse)).toBe(true);
     const s = emptySums();
-    addErrors(s, [2, 2], [1, 3], 2);
+    addErrors(s, Float64Array.of(2, 2), Float64Array.of(1, 3), 2);
     expect(Number.isNaN(errorMeasures(s).r2)).toBe(true);
     expect(errorMeasures(s).rmse).toBe(1);
   });
