@@ -7,17 +7,22 @@
  * than one model, data files over {@link SMALL_DATA_BYTES}, or more work than {@link SMALL_WORK}. The numbers computed are the same either
  * way: JavaScript arithmetic does not depend on the tier that runs it.
  *
- * Measured on the development machine (2 cores, node 20): a one-input model of 2,000 rows and 11
- * columns takes 0.20 s and 59 MiB without TurboFan against 0.28 s and 80 MiB with it; a
- * five-input model of 1,000 rows and 21 columns takes 0.52 s without and 0.34 s with it.
+ * Measured on the development machine (2 cores, node 20; medians of 41-61 alternating runs),
+ * with TurboFan turned on where the model's work is known (after the settings, descriptor and
+ * data are read): a one-input model of 2,000 rows and 11 columns (7.8e5 multiply-adds) takes
+ * 0.236 s and 62 MiB against 0.255 s and 55 MiB on baseline code; of 1,000 rows (3.9e5) 0.205 s
+ * against 0.213 s; of 400 rows (1.6e5) the same either way, with 7 MiB more. A five-input model of
+ * 1,000 rows and 21 columns takes 0.52 s without and 0.34 s with it. (Before the hot loops were
+ * written so that V8 keeps their optimised code, the crossover lay near 2e6.)
  */
 import v8 from 'node:v8';
 
 /**
- * Estimated multiply-adds below which a run stays on baseline code: about 10 ms of optimised
- * code, 60-80 ms of baseline code (the crossover measured above lies between 1e6 and 7e6).
+ * Estimated multiply-adds below which a run stays on baseline code: a few milliseconds of
+ * optimised code, about 20 ms of baseline code (the crossover measured above lies between 1.6e5
+ * and 3.9e5).
  */
-export const SMALL_WORK = 2e6;
+export const SMALL_WORK = 3e5;
 
 /**
  * Bytes of a model's training and hold-out files above which the optimising compiler is turned

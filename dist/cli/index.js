@@ -4562,11 +4562,9 @@ function fitDesign(X, y, n, p, options = {}) {
     // The data are at hand: take rss directly from compensated residuals at the new coefficients.
     if (!refined.refined)
         return fit;
-    const r = residuals(X, y, n, refined.coefficients).hi;
-    let rss = 0;
-    for (let i = 0; i < n; i++)
-        rss += r[i] * r[i];
-    return { ...refined, rss };
+    const r = new Float64Array(n);
+    residualsInto(X, y, n, refined.coefficients, r, new Float64Array(n));
+    return { ...refined, rss: squaredSum(r, n) };
 }
 /**
  * Largest scaled condition number for which {@link RefinementPass} applies its correction:
@@ -4627,29 +4625,12 @@ class RefinementPass {
         const w = this.#fit.coefficients;
         const p = w.length;
         checkBlock(X, y, m, p);
-        const { hi, lo } = residuals(X, y, m, w);
-        let rss = 0;
-        for (let i = 0; i < m; i++)
-            rss += hi[i] * hi[i];
-        this.#rss += rss;
-        const gHi = this.#gHi;
-        const gLo = this.#gLo;
-        for (let j = 0; j < p; j++) {
-            // Dot2 of column j with r_hi, plus the plain dot with r_lo, into the running (hi, lo).
-            let sum = gHi[j];
-            let comp = gLo[j];
-            const col = j * m;
-            for (let i = 0; i < m; i++) {
-                const a = X[col + i];
-                const prod = a * hi[i];
-                const t = sum + prod;
-                const z = t - sum;
-                comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
-                sum = t;
-            }
-            gHi[j] = sum;
-            gLo[j] = comp;
-        }
+        const hi = new Float64Array(m);
+        const lo = new Float64Array(m);
+        residualsInto(X, y, m, w, hi, lo);
+        this.#rss += squaredSum(hi, m);
+        for (let j = 0; j < p; j++)
+            addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
     }
     /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
     finish() {
@@ -4853,26 +4834,53 @@ function checkBlock(X, y, m, p) {
         throw new RangeError(`X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
     if (y !== undefined && y.length < m)
         throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
-    for (let k = 0; k < m * p; k++) {
-        if (!Number.isFinite(X[k])) {
-            throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-        }
-    }
-    if (y !== undefined) {
-        for (let i = 0; i < m; i++) {
-            if (!Number.isFinite(y[i]))
-                throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
-        }
-    }
+    const k = firstNotFinite(X, m * p);
+    if (k >= 0)
+        throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
+    const i = y === undefined ? -1 : firstNotFinite(y, m);
+    if (y !== undefined && i >= 0)
+        throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
+}
+// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+/** Index of the first NaN or infinite value among v[0..n), or -1. */
+function firstNotFinite(v, n) {
+    for (let i = 0; i < n; i++)
+        if (!Number.isFinite(v[i]))
+            return i;
+    return -1;
+}
+/** Sum of v[i]^2 over v[0..n), in order. */
+function squaredSum(v, n) {
+    let s = 0;
+    for (let i = 0; i < n; i++)
+        s += v[i] * v[i];
+    return s;
 }
 /**
- * r = y - X w for a column-major m x p block as double-double numbers hi + lo, each entry by a
- * compensated dot product (Dot2).
+ * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
+ * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
  */
-function residuals(X, y, m, w) {
+function addColumnDot2(X, col, m, hi, lo, gHi, gLo, j) {
+    let sum = gHi[j];
+    let comp = gLo[j];
+    for (let i = 0; i < m; i++) {
+        const a = X[col + i];
+        const prod = a * hi[i];
+        const t = sum + prod;
+        const z = t - sum;
+        comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
+        sum = t;
+    }
+    gHi[j] = sum;
+    gLo[j] = comp;
+}
+/**
+ * r = y - X w for a column-major m x p block as double-double numbers hi + lo (written to the
+ * length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
+ */
+function residualsInto(X, y, m, w, hi, lo) {
     const p = w.length;
-    const hi = new Float64Array(m);
-    const lo = new Float64Array(m);
     for (let i = 0; i < m; i++) {
         let s = y[i];
         let c = 0;
@@ -4890,7 +4898,6 @@ function residuals(X, y, m, w) {
         hi[i] = h;
         lo[i] = s - (h - z) + (c - z);
     }
-    return { hi, lo };
 }
 /** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */
 function twoProductError(a, b, prod) {
@@ -4927,6 +4934,8 @@ function twoProductError(a, b, prod) {
  * quadratically and are capped here (60 sweeps); the matrix is scaled by a power of two (exact)
  * so that its largest entry is about 1, and entries below 2^-600 of it are set to zero.
  */
+/** Machine epsilon, read once (a property read at the top of a hot function has no type feedback on its first call). */
+const EPSILON = Number.EPSILON;
 /** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
 const MAX_SWEEPS = 60;
 /**
@@ -4997,7 +5006,7 @@ function scaledCopy(A, n, scale) {
  * until every pair of W's columns is orthogonal to machine precision, or {@link MAX_SWEEPS}.
  */
 function jacobiSweeps(W, V, m, k) {
-    const eps = Number.EPSILON;
+    const eps = EPSILON;
     for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
         let rotated = false;
         for (let p = 0; p < k - 1; p++) {
@@ -5296,16 +5305,21 @@ var external_node_v8_default = /*#__PURE__*/__nccwpck_require__.n(external_node_
  * than one model, data files over {@link SMALL_DATA_BYTES}, or more work than {@link SMALL_WORK}. The numbers computed are the same either
  * way: JavaScript arithmetic does not depend on the tier that runs it.
  *
- * Measured on the development machine (2 cores, node 20): a one-input model of 2,000 rows and 11
- * columns takes 0.20 s and 59 MiB without TurboFan against 0.28 s and 80 MiB with it; a
- * five-input model of 1,000 rows and 21 columns takes 0.52 s without and 0.34 s with it.
+ * Measured on the development machine (2 cores, node 20; medians of 41-61 alternating runs),
+ * with TurboFan turned on where the model's work is known (after the settings, descriptor and
+ * data are read): a one-input model of 2,000 rows and 11 columns (7.8e5 multiply-adds) takes
+ * 0.236 s and 62 MiB against 0.255 s and 55 MiB on baseline code; of 1,000 rows (3.9e5) 0.205 s
+ * against 0.213 s; of 400 rows (1.6e5) the same either way, with 7 MiB more. A five-input model of
+ * 1,000 rows and 21 columns takes 0.52 s without and 0.34 s with it. (Before the hot loops were
+ * written so that V8 keeps their optimised code, the crossover lay near 2e6.)
  */
 
 /**
- * Estimated multiply-adds below which a run stays on baseline code: about 10 ms of optimised
- * code, 60-80 ms of baseline code (the crossover measured above lies between 1e6 and 7e6).
+ * Estimated multiply-adds below which a run stays on baseline code: a few milliseconds of
+ * optimised code, about 20 ms of baseline code (the crossover measured above lies between 1.6e5
+ * and 3.9e5).
  */
-const SMALL_WORK = 2e6;
+const SMALL_WORK = 3e5;
 /**
  * Bytes of a model's training and hold-out files above which the optimising compiler is turned
  * on before they are read (parsing 256 KB of CSV is itself a hot loop worth optimising).

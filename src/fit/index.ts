@@ -224,10 +224,9 @@ export function fitDesign(X: Float64Array, y: Float64Array, n: number, p: number
   const refined = pass.finish();
   // The data are at hand: take rss directly from compensated residuals at the new coefficients.
   if (!refined.refined) return fit;
-  const r = residuals(X, y, n, refined.coefficients).hi;
-  let rss = 0;
-  for (let i = 0; i < n; i++) rss += r[i] * r[i];
-  return { ...refined, rss };
+  const r = new Float64Array(n);
+  residualsInto(X, y, n, refined.coefficients, r, new Float64Array(n));
+  return { ...refined, rss: squaredSum(r, n) };
 }
 
 /**
@@ -294,28 +293,11 @@ export class RefinementPass {
     const w = this.#fit.coefficients;
     const p = w.length;
     checkBlock(X, y, m, p);
-    const { hi, lo } = residuals(X, y, m, w);
-    let rss = 0;
-    for (let i = 0; i < m; i++) rss += hi[i] * hi[i];
-    this.#rss += rss;
-    const gHi = this.#gHi;
-    const gLo = this.#gLo;
-    for (let j = 0; j < p; j++) {
-      // Dot2 of column j with r_hi, plus the plain dot with r_lo, into the running (hi, lo).
-      let sum = gHi[j];
-      let comp = gLo[j];
-      const col = j * m;
-      for (let i = 0; i < m; i++) {
-        const a = X[col + i];
-        const prod = a * hi[i];
-        const t = sum + prod;
-        const z = t - sum;
-        comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
-        sum = t;
-      }
-      gHi[j] = sum;
-      gLo[j] = comp;
-    }
+    const hi = new Float64Array(m);
+    const lo = new Float64Array(m);
+    residualsInto(X, y, m, w, hi, lo);
+    this.#rss += squaredSum(hi, m);
+    for (let j = 0; j < p; j++) addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
   }
 
   /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
@@ -506,26 +488,53 @@ function checkBlock(X: Float64Array, y: Float64Array | undefined, m: number, p: 
   if (!Number.isInteger(m) || m < 0) throw new RangeError(`m must be a non-negative integer, got ${String(m)}`);
   if (X.length < m * p) throw new RangeError(`X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
   if (y !== undefined && y.length < m) throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
-  for (let k = 0; k < m * p; k++) {
-    if (!Number.isFinite(X[k])) {
-      throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-    }
-  }
-  if (y !== undefined) {
-    for (let i = 0; i < m; i++) {
-      if (!Number.isFinite(y[i])) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
-    }
-  }
+  const k = firstNotFinite(X, m * p);
+  if (k >= 0) throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
+  const i = y === undefined ? -1 : firstNotFinite(y, m);
+  if (y !== undefined && i >= 0) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
+}
+
+// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+
+/** Index of the first NaN or infinite value among v[0..n), or -1. */
+function firstNotFinite(v: Float64Array, n: number): number {
+  for (let i = 0; i < n; i++) if (!Number.isFinite(v[i])) return i;
+  return -1;
+}
+
+/** Sum of v[i]^2 over v[0..n), in order. */
+function squaredSum(v: Float64Array, n: number): number {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += v[i] * v[i];
+  return s;
 }
 
 /**
- * r = y - X w for a column-major m x p block as double-double numbers hi + lo, each entry by a
- * compensated dot product (Dot2).
+ * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
+ * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
  */
-function residuals(X: Float64Array, y: Float64Array, m: number, w: Float64Array): { hi: Float64Array; lo: Float64Array } {
+function addColumnDot2(X: Float64Array, col: number, m: number, hi: Float64Array, lo: Float64Array, gHi: Float64Array, gLo: Float64Array, j: number): void {
+  let sum = gHi[j];
+  let comp = gLo[j];
+  for (let i = 0; i < m; i++) {
+    const a = X[col + i];
+    const prod = a * hi[i];
+    const t = sum + prod;
+    const z = t - sum;
+    comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
+    sum = t;
+  }
+  gHi[j] = sum;
+  gLo[j] = comp;
+}
+
+/**
+ * r = y - X w for a column-major m x p block as double-double numbers hi + lo (written to the
+ * length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
+ */
+function residualsInto(X: Float64Array, y: Float64Array, m: number, w: Float64Array, hi: Float64Array, lo: Float64Array): void {
   const p = w.length;
-  const hi = new Float64Array(m);
-  const lo = new Float64Array(m);
   for (let i = 0; i < m; i++) {
     let s = y[i];
     let c = 0;
@@ -543,7 +552,6 @@ function residuals(X: Float64Array, y: Float64Array, m: number, w: Float64Array)
     hi[i] = h;
     lo[i] = s - (h - z) + (c - z);
   }
-  return { hi, lo };
 }
 
 /** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */

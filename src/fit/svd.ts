@@ -25,6 +25,9 @@ export interface Svd {
 /** Which singular vectors to return (the work is the same; this only saves copies). */
 export type SvdVectors = 'both' | 'right' | 'none';
 
+/** Machine epsilon, read once (a property read at the top of a hot function has no type feedback on its first call). */
+const EPSILON = Number.EPSILON;
+
 /** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
 export const MAX_SWEEPS = 60;
 
@@ -92,7 +95,7 @@ function scaledCopy(A: Float64Array, n: number, scale: number): Float64Array {
  * until every pair of W's columns is orthogonal to machine precision, or {@link MAX_SWEEPS}.
  */
 function jacobiSweeps(W: Float64Array, V: Float64Array, m: number, k: number): void {
-  const eps = Number.EPSILON;
+  const eps = EPSILON;
   for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
     let rotated = false;
     for (let p = 0; p < k - 1; p++) {
