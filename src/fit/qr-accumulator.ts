@@ -206,124 +206,166 @@ function sumOfSquares(v: Float64Array, m: number): number {
 
 /**
  * Householder reflections that zero the mb x p block C (leading dimension ld) against the
- * triangular R (p x p, column-major), applied to qty and yc alike.
+ * triangular R (p x p, column-major), applied to qty and yc alike. Each step is a function of its
+ * own (one loop nest each), so that V8 compiles the small hot pieces separately and soon.
  */
 function annihilate(R: Float64Array, qty: Float64Array, C: Float64Array, yc: Float64Array, ld: number, p: number, mb: number): void {
   for (let j = 0; j < p; j++) {
-    // Reflector for column j of [R; C]: a = [R[j,j]; C[0..mb, j]].
     const cj = j * ld;
     const alpha = R[j * p + j];
-    let amax = Math.abs(alpha);
-    for (let i = 0; i < mb; i++) {
-      const a = Math.abs(C[cj + i]);
-      if (a > amax) amax = a;
-    }
-    if (amax === 0) continue;
-    let sigma = 0; // sum of squares of the block part
-    let norm: number;
-    if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
-      for (let i = 0; i < mb; i++) {
-        const c = C[cj + i];
-        sigma += c * c;
-      }
-      if (sigma === 0) continue; // nothing to annihilate
-      norm = Math.sqrt(alpha * alpha + sigma);
-    } else {
-      let scaled = 0;
-      for (let i = 0; i < mb; i++) {
-        const c = C[cj + i] / amax;
-        scaled += c * c;
-      }
-      if (scaled === 0) continue;
-      const a0 = alpha / amax;
-      norm = amax * Math.sqrt(a0 * a0 + scaled);
-    }
-    // H = I - tau u u^T with u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]],
-    // tau = (beta - alpha) / beta in [1, 2] (the normalisation of LAPACK's dlarfg). Every
-    // |u_i| <= 1, so no intermediate overflows or underflows however tiny the column is.
-    const beta = alpha >= 0 ? -norm : norm;
-    const v0 = alpha - beta;
+    const beta = reflector(C, cj, mb, alpha);
+    if (Number.isNaN(beta)) continue; // nothing to annihilate in this column
     const tau = (beta - alpha) / beta;
-    for (let i = 0; i < mb; i++) C[cj + i] /= v0;
     let k = j + 1;
     // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
-    // operations and their order are those of the single-column loop below).
-    for (; k + 3 < p; k += 4) {
-      const c1 = k * ld;
-      const c2 = c1 + ld;
-      const c3 = c2 + ld;
-      const c4 = c3 + ld;
-      const r1 = k * p + j;
-      let w1 = R[r1];
-      let w2 = R[r1 + p];
-      let w3 = R[r1 + 2 * p];
-      let w4 = R[r1 + 3 * p];
-      for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        w1 += u * C[c1 + i];
-        w2 += u * C[c2 + i];
-        w3 += u * C[c3 + i];
-        w4 += u * C[c4 + i];
-      }
-      const f1 = tau * w1;
-      const f2 = tau * w2;
-      const f3 = tau * w3;
-      const f4 = tau * w4;
-      if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0) continue;
-      R[r1] -= f1;
-      R[r1 + p] -= f2;
-      R[r1 + 2 * p] -= f3;
-      R[r1 + 3 * p] -= f4;
-      for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        C[c1 + i] -= f1 * u;
-        C[c2 + i] -= f2 * u;
-        C[c3 + i] -= f3 * u;
-        C[c4 + i] -= f4 * u;
-      }
-    }
-    for (; k + 1 < p; k += 2) {
-      const ck = k * ld;
-      const ck2 = ck + ld;
-      const rIdx = k * p + j;
-      const rIdx2 = rIdx + p;
-      let w1 = R[rIdx];
-      let w2 = R[rIdx2];
-      for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        w1 += u * C[ck + i];
-        w2 += u * C[ck2 + i];
-      }
-      const f1 = tau * w1;
-      const f2 = tau * w2;
-      if (f1 === 0 && f2 === 0) continue;
-      R[rIdx] -= f1;
-      R[rIdx2] -= f2;
-      for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        C[ck + i] -= f1 * u;
-        C[ck2 + i] -= f2 * u;
-      }
-    }
-    for (; k < p; k++) {
-      const ck = k * ld;
-      const rIdx = k * p + j;
-      let w = R[rIdx];
-      for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
-      const f = tau * w;
-      if (f === 0) continue;
-      R[rIdx] -= f;
-      for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
-    }
-    {
-      let w = qty[j];
-      for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
-      const f = tau * w;
-      if (f !== 0) {
-        qty[j] -= f;
-        for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];
-      }
-    }
+    // operations and their order are those of the single-column loop).
+    for (; k + 3 < p; k += 4) reflectFour(R, C, ld, p, j, k, mb, tau);
+    for (; k + 1 < p; k += 2) reflectTwo(R, C, ld, p, j, k, mb, tau);
+    for (; k < p; k++) reflectOne(R, C, ld, p, j, k, mb, tau);
+    reflectTarget(qty, yc, C, cj, mb, tau, j);
     R[j * p + j] = beta;
   }
+}
+
+/**
+ * The reflector for column j of [R; C] with a = [alpha; C[cj..cj+mb)]: H = I - tau u u^T with
+ * u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]], tau = (beta - alpha) / beta in
+ * [1, 2] (the normalisation of LAPACK's dlarfg). Every |u_i| <= 1, so no intermediate overflows or
+ * underflows however tiny the column is. Overwrites the column with u's lower part and returns
+ * beta; NaN (the column unchanged) when the block part is zero.
+ */
+function reflector(C: Float64Array, cj: number, mb: number, alpha: number): number {
+  const amax = Math.max(Math.abs(alpha), largestMagnitudeIn(C, cj, mb));
+  if (amax === 0) return Number.NaN;
+  let norm: number;
+  if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
+    const sigma = sumOfSquaresIn(C, cj, mb); // sum of squares of the block part
+    if (sigma === 0) return Number.NaN;
+    norm = Math.sqrt(alpha * alpha + sigma);
+  } else {
+    const scaled = scaledSumOfSquaresIn(C, cj, mb, amax);
+    if (scaled === 0) return Number.NaN;
+    const a0 = alpha / amax;
+    norm = amax * Math.sqrt(a0 * a0 + scaled);
+  }
+  const beta = alpha >= 0 ? -norm : norm;
+  divideIn(C, cj, mb, alpha - beta);
+  return beta;
+}
+
+function largestMagnitudeIn(C: Float64Array, from: number, n: number): number {
+  let amax = 0;
+  for (let i = 0; i < n; i++) {
+    const a = Math.abs(C[from + i]);
+    if (a > amax) amax = a;
+  }
+  return amax;
+}
+
+function sumOfSquaresIn(C: Float64Array, from: number, n: number): number {
+  let sigma = 0;
+  for (let i = 0; i < n; i++) {
+    const c = C[from + i];
+    sigma += c * c;
+  }
+  return sigma;
+}
+
+function scaledSumOfSquaresIn(C: Float64Array, from: number, n: number, scale: number): number {
+  let scaled = 0;
+  for (let i = 0; i < n; i++) {
+    const c = C[from + i] / scale;
+    scaled += c * c;
+  }
+  return scaled;
+}
+
+function divideIn(C: Float64Array, from: number, n: number, d: number): void {
+  for (let i = 0; i < n; i++) C[from + i] /= d;
+}
+
+/** Applies the reflector of column j (u in C's column j) to columns k .. k+3 of [R; C]. */
+function reflectFour(R: Float64Array, C: Float64Array, ld: number, p: number, j: number, k: number, mb: number, tau: number): void {
+  const cj = j * ld;
+  const c1 = k * ld;
+  const c2 = c1 + ld;
+  const c3 = c2 + ld;
+  const c4 = c3 + ld;
+  const r1 = k * p + j;
+  let w1 = R[r1];
+  let w2 = R[r1 + p];
+  let w3 = R[r1 + 2 * p];
+  let w4 = R[r1 + 3 * p];
+  for (let i = 0; i < mb; i++) {
+    const u = C[cj + i];
+    w1 += u * C[c1 + i];
+    w2 += u * C[c2 + i];
+    w3 += u * C[c3 + i];
+    w4 += u * C[c4 + i];
+  }
+  const f1 = tau * w1;
+  const f2 = tau * w2;
+  const f3 = tau * w3;
+  const f4 = tau * w4;
+  if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0) return;
+  R[r1] -= f1;
+  R[r1 + p] -= f2;
+  R[r1 + 2 * p] -= f3;
+  R[r1 + 3 * p] -= f4;
+  for (let i = 0; i < mb; i++) {
+    const u = C[cj + i];
+    C[c1 + i] -= f1 * u;
+    C[c2 + i] -= f2 * u;
+    C[c3 + i] -= f3 * u;
+    C[c4 + i] -= f4 * u;
+  }
+}
+
+/** Applies the reflector of column j to columns k and k+1 of [R; C]. */
+function reflectTwo(R: Float64Array, C: Float64Array, ld: number, p: number, j: number, k: number, mb: number, tau: number): void {
+  const cj = j * ld;
+  const ck = k * ld;
+  const ck2 = ck + ld;
+  const rIdx = k * p + j;
+  const rIdx2 = rIdx + p;
+  let w1 = R[rIdx];
+  let w2 = R[rIdx2];
+  for (let i = 0; i < mb; i++) {
+    const u = C[cj + i];
+    w1 += u * C[ck + i];
+    w2 += u * C[ck2 + i];
+  }
+  const f1 = tau * w1;
+  const f2 = tau * w2;
+  if (f1 === 0 && f2 === 0) return;
+  R[rIdx] -= f1;
+  R[rIdx2] -= f2;
+  for (let i = 0; i < mb; i++) {
+    const u = C[cj + i];
+    C[ck + i] -= f1 * u;
+    C[ck2 + i] -= f2 * u;
+  }
+}
+
+/** Applies the reflector of column j to column k of [R; C]. */
+function reflectOne(R: Float64Array, C: Float64Array, ld: number, p: number, j: number, k: number, mb: number, tau: number): void {
+  const cj = j * ld;
+  const ck = k * ld;
+  const rIdx = k * p + j;
+  let w = R[rIdx];
+  for (let i = 0; i < mb; i++) w += C[cj + i] * C[ck + i];
+  const f = tau * w;
+  if (f === 0) return;
+  R[rIdx] -= f;
+  for (let i = 0; i < mb; i++) C[ck + i] -= f * C[cj + i];
+}
+
+/** Applies the reflector of column j (u in C from cj) to the right-hand side [qty; yc]. */
+function reflectTarget(qty: Float64Array, yc: Float64Array, C: Float64Array, cj: number, mb: number, tau: number, j: number): void {
+  let w = qty[j];
+  for (let i = 0; i < mb; i++) w += C[cj + i] * yc[i];
+  const f = tau * w;
+  if (f === 0) return;
+  qty[j] -= f;
+  for (let i = 0; i < mb; i++) yc[i] -= f * C[cj + i];
 }
