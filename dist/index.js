@@ -29936,18 +29936,26 @@ function polynomialTerm(spec, training, file) {
         columnNames: names,
         fixed: { shift: s, scale },
         fill(inputs, m, out, offset) {
-            const xs = inputs[0];
             const first = offset * m;
-            for (let i = 0; i < m; i++)
-                out[first + i] = raw ? xs[i] : (xs[i] - s) / sc;
-            for (let k = 1; k < spec.degree; k++) {
-                const prev = (offset + k - 1) * m;
-                const cur = (offset + k) * m;
-                for (let i = 0; i < m; i++)
-                    out[cur + i] = out[prev + i] * out[first + i];
-            }
+            if (raw)
+                out.set(inputs[0].subarray(0, m), first);
+            else
+                standardise(inputs[0], m, s, sc, out, first);
+            for (let k = 1; k < spec.degree; k++)
+                multiplyColumns(out, (offset + k - 1) * m, first, (offset + k) * m, m);
         },
     };
+}
+// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** out[at + i] = (x[i] - shift) / scale for i < m. */
+function standardise(x, m, shift, scale, out, at) {
+    for (let i = 0; i < m; i++)
+        out[at + i] = (x[i] - shift) / scale;
+}
+/** out[to + i] = out[a + i] * out[b + i] for i < m (the next power from the previous one and z). */
+function multiplyColumns(out, a, b, to, m) {
+    for (let i = 0; i < m; i++)
+        out[to + i] = out[a + i] * out[b + i];
 }
 
 ;// CONCATENATED MODULE: ./src/basis/rbf.ts
@@ -29999,17 +30007,20 @@ function rbfTerm(spec, training) {
         columnNames: centres.map((c) => `rbf(${spec.of}; c=${label(c)})`),
         fixed: { width: spec.width, centers: centres },
         fill(inputs, m, out, offset) {
-            const xs = inputs[0];
-            for (let k = 0; k < centres.length; k++) {
-                const c = centres[k];
-                const base = (offset + k) * m;
-                for (let i = 0; i < m; i++) {
-                    const d = xs[i] - c;
-                    out[base + i] = Math.exp(-d * d * a);
-                }
-            }
+            for (let k = 0; k < centres.length; k++)
+                gaussianColumn(inputs[0], m, centres[k], a, out, (offset + k) * m);
         },
     };
+}
+/**
+ * out[at + i] = exp(-(x[i] - c)^2 a) for i < m. A function of its own, one loop (see
+ * DEVELOPERS.md, "Writing hot loops").
+ */
+function gaussianColumn(x, m, c, a, out, at) {
+    for (let i = 0; i < m; i++) {
+        const d = x[i] - c;
+        out[at + i] = Math.exp(-d * d * a);
+    }
 }
 
 ;// CONCATENATED MODULE: ./src/basis/index.ts
