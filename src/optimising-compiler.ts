@@ -1,11 +1,12 @@
 /**
  * When V8's optimising compiler (TurboFan) runs. A fitgate run over a small model finishes in a
- * few hundred milliseconds, most of it start-up; TurboFan would spend tens of milliseconds and
- * about 20 MB compiling hot functions on a background thread for loops that are over before the
- * optimised code arrives. So the entry points start with TurboFan off (V8 still runs its
- * interpreter and the Sparkplug baseline compiler) and turn it on as soon as the run holds more
- * than one model, data files over {@link SMALL_DATA_BYTES}, or more work than {@link SMALL_WORK}. The numbers computed are the same either
- * way: JavaScript arithmetic does not depend on the tier that runs it.
+ * few hundred milliseconds, most of it start-up; from the first line TurboFan would spend its
+ * background thread and several MiB on the YAML parser, the schema validators and loops that are
+ * over before the optimised code arrives. So the entry points start with TurboFan off (V8 still
+ * runs its interpreter and the Sparkplug baseline compiler) and turn it on as soon as the run
+ * holds more than one model, data files over {@link SMALL_DATA_BYTES}, or more work than
+ * {@link SMALL_WORK}. The numbers computed are the same either way: JavaScript arithmetic does not
+ * depend on the tier that runs it.
  *
  * Measured on the development machine (2 cores, node 20; medians of 41-61 alternating runs),
  * with TurboFan turned on where the model's work is known (after the settings, descriptor and
