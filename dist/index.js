@@ -38996,6 +38996,7 @@ const YAML_GUARDS = Object.freeze({
 const YAML_ERROR = Object.freeze({
     syntax: 'yaml-syntax',
     duplicateKey: 'yaml-duplicate-key',
+    collectionKey: 'yaml-collection-key',
     tooDeep: 'yaml-too-deep',
     aliases: 'yaml-aliases',
     tooLarge: 'file-too-large',
@@ -39066,7 +39067,7 @@ function parseYaml(text, file) {
         const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
         throw new src_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${message}`, { file, ...at(error.pos[0]) });
     }
-    checkStructure(doc, file, at);
+    checkStructure(doc, text, file, at);
     let value;
     try {
         value = doc.toJS({ maxAliasCount: YAML_GUARDS.maxAliasCount });
@@ -39165,8 +39166,8 @@ function roughNesting(text) {
     }
     return { depth: best, offset: bestOffset };
 }
-/** Checks nesting depth and duplicate keys on the syntax tree (aliases are not followed). */
-function checkStructure(doc, file, at) {
+/** Checks nesting depth, duplicate keys and keys that are lists or mappings on the syntax tree (aliases are followed only to see what a key is). */
+function checkStructure(doc, text, file, at) {
     const visit = (node, depth) => {
         if ((0,dist/* isMap */.jh)(node) || (0,dist/* isSeq */.oP)(node)) {
             if (depth > YAML_GUARDS.maxDepth) {
@@ -39179,8 +39180,19 @@ function checkStructure(doc, file, at) {
         if ((0,dist/* isMap */.jh)(node)) {
             const seen = new Map();
             for (const pair of node.items) {
-                const key = keyText(pair.key);
                 const keyOffset = pair.key?.range?.[0] ?? node.range?.[0] ?? 0;
+                // YAML allows a list or a mapping as a key; no key of fitgate's files is one, and plain
+                // JavaScript objects cannot hold one (the yaml package would print a process warning).
+                const keyNode = resolveAlias(doc, pair.key);
+                if ((0,dist/* isMap */.jh)(keyNode) || (0,dist/* isSeq */.oP)(keyNode)) {
+                    const range = pair.key?.range;
+                    const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
+                    throw new src_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`, {
+                        file,
+                        ...at(keyOffset),
+                    });
+                }
+                const key = keyText(pair.key);
                 const before = seen.get(key);
                 if (before !== undefined) {
                     const first = at(before);
@@ -39205,6 +39217,10 @@ function checkStructure(doc, file, at) {
         }
     };
     visit(doc.contents, 1);
+}
+/** The text cut to `max` characters (with an ellipsis). */
+function clip(text, max) {
+    return text.length <= max ? text : `${text.slice(0, max - 1)}…`;
 }
 /** A mapping key as the text plain JavaScript would use for it. */
 function keyText(key) {

@@ -25,6 +25,7 @@ export const YAML_GUARDS = Object.freeze({
 export const YAML_ERROR = Object.freeze({
   syntax: 'yaml-syntax',
   duplicateKey: 'yaml-duplicate-key',
+  collectionKey: 'yaml-collection-key',
   tooDeep: 'yaml-too-deep',
   aliases: 'yaml-aliases',
   tooLarge: 'file-too-large',
@@ -117,7 +118,7 @@ export function parseYaml(text: string, file: string): YamlDocument {
     );
   }
 
-  checkStructure(doc, file, at);
+  checkStructure(doc, text, file, at);
 
   let value: unknown;
   try {
@@ -213,8 +214,8 @@ function roughNesting(text: string): { depth: number; offset: number } {
   return { depth: best, offset: bestOffset };
 }
 
-/** Checks nesting depth and duplicate keys on the syntax tree (aliases are not followed). */
-function checkStructure(doc: Document, file: string, at: (offset: number) => Position): void {
+/** Checks nesting depth, duplicate keys and keys that are lists or mappings on the syntax tree (aliases are followed only to see what a key is). */
+function checkStructure(doc: Document, text: string, file: string, at: (offset: number) => Position): void {
   const visit = (node: unknown, depth: number): void => {
     if (isMap(node) || isSeq(node)) {
       if (depth > YAML_GUARDS.maxDepth) {
@@ -227,8 +228,19 @@ function checkStructure(doc: Document, file: string, at: (offset: number) => Pos
     if (isMap(node)) {
       const seen = new Map<string, number>();
       for (const pair of node.items) {
-        const key = keyText(pair.key);
         const keyOffset = (pair.key as YamlNode | null)?.range?.[0] ?? node.range?.[0] ?? 0;
+        // YAML allows a list or a mapping as a key; no key of fitgate's files is one, and plain
+        // JavaScript objects cannot hold one (the yaml package would print a process warning).
+        const keyNode = resolveAlias(doc, pair.key);
+        if (isMap(keyNode) || isSeq(keyNode)) {
+          const range = (pair.key as YamlNode | null)?.range;
+          const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
+          throw new InputError(YAML_ERROR.collectionKey, `a ${isMap(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`, {
+            file,
+            ...at(keyOffset),
+          });
+        }
+        const key = keyText(pair.key);
         const before = seen.get(key);
         if (before !== undefined) {
           const first = at(before);
@@ -250,6 +262,11 @@ function checkStructure(doc: Document, file: string, at: (offset: number) => Pos
     }
   };
   visit(doc.contents, 1);
+}
+
+/** The text cut to `max` characters (with an ellipsis). */
+function clip(text: string, max: number): string {
+  return text.length <= max ? text : `${text.slice(0, max - 1)}…`;
 }
 
 /** A mapping key as the text plain JavaScript would use for it. */

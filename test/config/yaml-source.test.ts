@@ -51,6 +51,24 @@ describe('parseYaml: errors', () => {
     await expectInputError(() => parseYaml('fit:\n  ridge: 1\n  seed: 2\n  ridge: 3\n', F), { code: 'yaml-duplicate-key', file: F, line: 4, column: 3 });
   });
 
+  it('refuses a list or a mapping used as a key, at its position, without a process warning', async () => {
+    const warnings: Error[] = [];
+    const onWarning = (w: Error): void => void warnings.push(w);
+    process.on('warning', onWarning);
+    try {
+      await expectInputError(() => parseYaml('version: 1\nterms:\n  - { from: 0, to: 10 }: 3\n', F), { code: 'yaml-collection-key', file: F, line: 3, column: 5 });
+      await expectInputError(() => parseYaml('a: 1\n[x, y]: 2\n', F), { code: 'yaml-collection-key', file: F, line: 2, column: 1 });
+      await expectInputError(() => parseYaml('a: &l [1, 2]\n*l : 2\n', F), { code: 'yaml-collection-key', file: F, line: 2, column: 1 });
+      expect(() => parseYaml('a: 1\n[x, y]: 2\n', F)).toThrow('a list used as a key (`[x, y]`)');
+      // A scalar alias as a key is a plain key.
+      expect(parseYaml('a: &k name\n*k : 2\n', F).value).toEqual({ a: 'name', name: 2 });
+      await new Promise((resolve) => setImmediate(resolve));
+    } finally {
+      process.off('warning', onWarning);
+    }
+    expect(warnings.map((w) => w.message)).toEqual([]);
+  });
+
   it('refuses an alias bomb quickly', async () => {
     const lines = ['a: &a ["x","x","x","x","x","x","x","x","x"]'];
     for (let i = 1; i < 10; i++) {

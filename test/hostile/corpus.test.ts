@@ -8,7 +8,7 @@
 import { appendFileSync, rmSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CASES, type CorpusCase } from './corpus/cases.js';
-import { foreignCommands, prepareBundles, runAction, runCli, SECRET, STACK_LINE, TOKEN, verdictsFor, writeCase, type CaseDirs, type Run } from './harness.js';
+import { foreignCommands, NODE_WARNING, prepareBundles, runAction, runCli, SECRET, STACK_LINE, TOKEN, verdictsFor, writeCase, type CaseDirs, type Run } from './harness.js';
 
 const written = new Map<string, CaseDirs>();
 
@@ -54,6 +54,7 @@ describe.concurrent('hostile repositories through the CLI', () => {
     expect(run.status, show(run)).toBe(c.exit);
     for (const word of c.words) expect(all, `word ${JSON.stringify(word)}\n${show(run)}`).toContain(word);
     expect(all, show(run)).not.toMatch(STACK_LINE);
+    expect(run.stderr, `a library's warning is not a message of fitgate's\n${show(run)}`).not.toMatch(NODE_WARNING);
     expect(run.stderr, `an unexpected error is a bug\n${show(run)}`).not.toContain('--debug');
     expect(all).not.toContain(SECRET);
     expect(all, `a fault in fitgate is a bug\n${show(run)}`).not.toContain('fault in fitgate');
@@ -76,6 +77,7 @@ describe.concurrent('hostile repositories through the action', () => {
     if (c.exit !== 0) expect(run.stdout, show(run)).toMatch(/^::error( [^\n]*)?::/m);
     for (const word of c.words) expect(run.stdout, `word ${JSON.stringify(word)}\n${show(run)}`).toContain(word);
     expect(`${run.stdout}\n${run.stderr}`, show(run)).not.toMatch(STACK_LINE);
+    expect(run.stderr, `a library's warning is not a message of fitgate's\n${show(run)}`).not.toMatch(NODE_WARNING);
     expect(run.stdout, `an unexpected error is a bug\n${show(run)}`).not.toContain('failed unexpectedly');
     expect(foreignCommands(run.stdout), show(run)).toEqual([]);
     for (const text of [run.stdout, run.stderr, run.summary, run.report, JSON.stringify(run.outputs)]) {

@@ -24,7 +24,7 @@ import { formatText } from '../../src/report/text.js';
 import { exitStatus } from '../../src/result.js';
 import { defaultSettings } from '../../src/settings.js';
 import { rows } from './corpus/repo.js';
-import { foreignCommands, prepareBundles, runCli, STACK_LINE, writeCase, type CaseDirs } from './harness.js';
+import { foreignCommands, NODE_WARNING, prepareBundles, runCli, STACK_LINE, writeCase, type CaseDirs } from './harness.js';
 
 const RUNS = Number(process.env.FITGATE_FUZZ_RUNS ?? 300);
 const CLI_RUNS = Number(process.env.FITGATE_FUZZ_CLI_RUNS ?? 4);
@@ -260,6 +260,7 @@ describe('fuzzing through the built CLI', () => {
       const detail = `${JSON.stringify(filesOf(r), (_, v: unknown) => (v instanceof Uint8Array ? Buffer.from(v).toString('latin1') : v))}\n${run.stdout}\n${run.stderr}`;
       expect([0, 1, 2], detail).toContain(run.status);
       expect(`${run.stdout}${run.stderr}`, detail).not.toMatch(STACK_LINE);
+      expect(run.stderr, detail).not.toMatch(NODE_WARNING);
       expect(run.stderr, detail).not.toContain('--debug');
       expect(foreignCommands(run.stdout), detail).toEqual([]);
       if (run.status === 2) expect(`${run.stdout}${run.stderr}`.trim().length, detail).toBeGreaterThan(0);

@@ -280,6 +280,9 @@ export function verdictsFor(status: number): string[] {
 /** A stack trace line (`    at f (file:1:2)`), as Node prints them. */
 export const STACK_LINE = /^\s+at .+(:\d+:\d+\)?|\(native\)|<anonymous>\)?)$/m;
 
+/** A process warning Node.js printed (`(node:1234) Warning: ...`): a library talking past fitgate's own messages. */
+export const NODE_WARNING = /\(node:\d+\) \w*Warning:/;
+
 /** Workflow commands fitgate itself writes: a level, optional escaped properties, then `::`. */
 const OWN_COMMAND = /^::(error|warning|notice|debug)( (file|line|title)=[^:\r\n]*(,(file|line|title)=[^:\r\n]*)*)?::/;
 

@@ -74,6 +74,7 @@ export const CASES: CorpusCase[] = [
   { id: 'yaml-syntax-descriptor', about: 'a descriptor with an unclosed flow sequence', files: repo({ [m]: 'version: 1\nname: [oops\ndata: 1\n' }), exit: 2, words: ['models/m.model.yml:', 'not valid YAML'] },
   { id: 'yaml-syntax-settings', about: 'settings with a bad indentation', files: repo({ [settings]: 'version: 1\nmodels:\n  - "models/*.model.yml"\n bad: [\n' }), exit: 2, words: ['fitgate.yml:', 'not valid YAML'] },
   { id: 'yaml-duplicate-key', about: 'a key given twice', files: repo({ [m]: `${descriptor()}name: other\n` }), exit: 2, words: ['models/m.model.yml:', '`name` appears twice'] },
+  { id: 'yaml-collection-key', about: 'a mapping used as a key (YAML allows it; no key of ours is one)', files: repo({ [m]: `${descriptor()}{ from: 0, to: 10 }: 3\n` }), exit: 2, words: ['models/m.model.yml:', 'a mapping used as a key'] },
   { id: 'yaml-not-a-mapping', about: 'a descriptor that is a list', files: repo({ [m]: '- 1\n- 2\n' }), exit: 2, words: ['models/m.model.yml', 'expected'] },
   { id: 'yaml-empty-descriptor', about: 'an empty descriptor file', files: repo({ [m]: '' }), exit: 2, words: ['models/m.model.yml', 'expected'] },
   { id: 'yaml-alias-bomb', about: 'nine levels of nine aliases (387 million leaves)', files: repo({ [m]: aliasBomb() }), exit: 2, words: ['models/m.model.yml', 'aliases'] },
