@@ -502,9 +502,11 @@ function createTerm(spec, training, file) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   Mq: () => (/* binding */ sumOfSquaredDeviations),
 /* harmony export */   jZ: () => (/* binding */ sumOfDeviations),
+/* harmony export */   nQ: () => (/* binding */ largest),
 /* harmony export */   ud: () => (/* binding */ meanAndSd),
 /* harmony export */   y1: () => (/* binding */ range)
 /* harmony export */ });
+/* unused harmony export smallest */
 /**
  * Column statistics used to fix basis parameters.
  */
@@ -1753,10 +1755,12 @@ function createDesign(terms, intercept) {
 /* harmony export */   I: () => (/* binding */ selectKth),
 /* harmony export */   z: () => (/* binding */ columnMedian)
 /* harmony export */ });
+/* harmony import */ var _basis_stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6029);
 /**
  * Medians of training columns, computed once per column and shared by every reader (swing,
  * charts): selection on a scratch copy, remembered per column array.
  */
+
 const remembered = new WeakMap();
 /**
  * Median of the first n values of a column: the middle value, or the mean of the two middle
@@ -1800,16 +1804,7 @@ function middleOf(a, n, upper) {
     if (n % 2 === 1)
         return value;
     // The lower middle is the largest value left of the upper middle after selection.
-    return (largestBefore(a, upper) + value) / 2;
-}
-// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
-/** Largest of a[0..end); -Infinity when end = 0. */
-function largestBefore(a, end) {
-    let largest = -Infinity;
-    for (let i = 0; i < end; i++)
-        if (a[i] > largest)
-            largest = a[i];
-    return largest;
+    return ((0,_basis_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .largest */ .nQ)(a, upper) + value) / 2;
 }
 /**
  * The exact median in one pass over the column and a selection among a tenth of it: the middle
@@ -1837,6 +1832,7 @@ function bracketedMedian(values, n, work) {
         return null;
     return middleOf(work.subarray(0, inside), n, upper - below);
 }
+// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
 /**
  * One pass: copies the values in [lo, hi] to `out` (in column order) and returns how many; -1 when
  * more than `capacity` values fall in the bracket.
@@ -4027,55 +4023,6 @@ class FactorSolver {
     }
 }
 
-;// CONCATENATED MODULE: ./src/fit/ridge.ts
-/**
- * Checks a penalty and its column mask.
- *
- * @param p number of columns
- * @param ridge lambda (default 0)
- * @param penalised mask of length p (default: every column)
- * @returns lambda and a concrete boolean mask of length p
- * @throws RangeError when lambda is negative or not finite, or the mask has the wrong length
- */
-function checkPenalty(p, ridge = 0, penalised) {
-    if (typeof ridge !== 'number' || !Number.isFinite(ridge) || ridge < 0) {
-        throw new RangeError(`ridge must be a finite number >= 0, got ${String(ridge)}`);
-    }
-    if (penalised !== undefined && penalised.length !== p) {
-        throw new RangeError(`penalised must have one entry per column (${p}), got ${penalised.length}`);
-    }
-    const mask = Array.from({ length: p }, (_, j) => (penalised === undefined ? true : Boolean(penalised[j])));
-    return { lambda: ridge, mask };
-}
-/**
- * The factor of [X; sqrt(lambda) E]: a clone of the data factor with one penalty row per
- * penalised column folded in. The penalty applies to the columns exactly as built (lambda is
- * not rescaled by column norms or row counts).
- *
- * @param data factor of the data rows (not modified)
- * @param lambda penalty >= 0; 0 (or no penalised column) returns a plain clone
- * @param mask length p, true where column j is penalised
- * @returns a new accumulator; its `rows` counts the penalty rows too
- */
-function penalisedFactor(data, lambda, mask) {
-    const factor = data.clone();
-    const p = data.p;
-    const cols = [];
-    for (let j = 0; j < p; j++)
-        if (mask[j])
-            cols.push(j);
-    if (lambda === 0 || cols.length === 0)
-        return factor;
-    const k = cols.length;
-    const E = new Float64Array(k * p);
-    const root = Math.sqrt(lambda);
-    cols.forEach((j, r) => {
-        E[j * k + r] = root;
-    });
-    factor.addRows(E, new Float64Array(k), k);
-    return factor;
-}
-
 ;// CONCATENATED MODULE: ./src/fit/qr-accumulator.ts
 /**
  * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
@@ -4228,7 +4175,7 @@ class qr_accumulator_QrAccumulator {
         copyChecked(X, ldx, y, start, mb, p, this.#work, this.#workY, ld);
         annihilate(this.#R, this.#qty, this.#work, this.#workY, ld, p, mb);
         // What is left of the block's right-hand side is orthogonal to the column space.
-        this.#rss += sumOfSquares(this.#workY, mb);
+        this.#rss += qr_accumulator_sumOfSquares(this.#workY, mb);
     }
 }
 // The kernels below are separate functions, each one loop nest, so that V8 optimises each
@@ -4261,8 +4208,8 @@ function copyColumnChecked(src, from, dst, to, mb, firstRow, column) {
         dst[to + i] = v;
     }
 }
-/** Sum of squares of v[0..m). */
-function sumOfSquares(v, m) {
+/** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
+function qr_accumulator_sumOfSquares(v, m) {
     let s = 0;
     for (let i = 0; i < m; i++)
         s += v[i] * v[i];
@@ -4443,6 +4390,55 @@ function reflectTarget(qty, yc, C, cj, mb, tau, j) {
         yc[i] -= f * C[cj + i];
 }
 
+;// CONCATENATED MODULE: ./src/fit/ridge.ts
+/**
+ * Checks a penalty and its column mask.
+ *
+ * @param p number of columns
+ * @param ridge lambda (default 0)
+ * @param penalised mask of length p (default: every column)
+ * @returns lambda and a concrete boolean mask of length p
+ * @throws RangeError when lambda is negative or not finite, or the mask has the wrong length
+ */
+function checkPenalty(p, ridge = 0, penalised) {
+    if (typeof ridge !== 'number' || !Number.isFinite(ridge) || ridge < 0) {
+        throw new RangeError(`ridge must be a finite number >= 0, got ${String(ridge)}`);
+    }
+    if (penalised !== undefined && penalised.length !== p) {
+        throw new RangeError(`penalised must have one entry per column (${p}), got ${penalised.length}`);
+    }
+    const mask = Array.from({ length: p }, (_, j) => (penalised === undefined ? true : Boolean(penalised[j])));
+    return { lambda: ridge, mask };
+}
+/**
+ * The factor of [X; sqrt(lambda) E]: a clone of the data factor with one penalty row per
+ * penalised column folded in. The penalty applies to the columns exactly as built (lambda is
+ * not rescaled by column norms or row counts).
+ *
+ * @param data factor of the data rows (not modified)
+ * @param lambda penalty >= 0; 0 (or no penalised column) returns a plain clone
+ * @param mask length p, true where column j is penalised
+ * @returns a new accumulator; its `rows` counts the penalty rows too
+ */
+function penalisedFactor(data, lambda, mask) {
+    const factor = data.clone();
+    const p = data.p;
+    const cols = [];
+    for (let j = 0; j < p; j++)
+        if (mask[j])
+            cols.push(j);
+    if (lambda === 0 || cols.length === 0)
+        return factor;
+    const k = cols.length;
+    const E = new Float64Array(k * p);
+    const root = Math.sqrt(lambda);
+    cols.forEach((j, r) => {
+        E[j * k + r] = root;
+    });
+    factor.addRows(E, new Float64Array(k), k);
+    return factor;
+}
+
 ;// CONCATENATED MODULE: ./src/fit/index.ts
 /**
  * The fitting engine: least squares and ridge from a streaming Householder QR factor, with
@@ -4613,7 +4609,7 @@ function fitDesign(X, y, n, p, options = {}) {
         return fit;
     const r = new Float64Array(n);
     residualsInto(X, y, n, refined.coefficients, r, new Float64Array(n));
-    return { ...refined, rss: squaredSum(r, n) };
+    return { ...refined, rss: sumOfSquares(r, n) };
 }
 /**
  * Largest scaled condition number for which {@link RefinementPass} applies its correction:
@@ -4677,7 +4673,7 @@ class RefinementPass {
         const hi = new Float64Array(m);
         const lo = new Float64Array(m);
         residualsInto(X, y, m, w, hi, lo);
-        this.#rss += squaredSum(hi, m);
+        this.#rss += qr_accumulator_sumOfSquares(hi, m);
         for (let j = 0; j < p; j++)
             addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
     }
@@ -4898,13 +4894,6 @@ function firstNotFinite(v, n) {
         if (!Number.isFinite(v[i]))
             return i;
     return -1;
-}
-/** Sum of v[i]^2 over v[0..n), in order. */
-function squaredSum(v, n) {
-    let s = 0;
-    for (let i = 0; i < n; i++)
-        s += v[i] * v[i];
-    return s;
 }
 /**
  * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with

@@ -47,14 +47,14 @@ export function range(x: Float64Array, n = x.length): [number, number] {
 }
 
 /** Smallest of x[0..n), NaN ignored; Infinity when empty. */
-function smallest(x: Float64Array, n: number): number {
+export function smallest(x: Float64Array, n: number): number {
   let lo = Infinity;
   for (let i = 0; i < n; i++) if (x[i] < lo) lo = x[i];
   return lo;
 }
 
 /** Largest of x[0..n), NaN ignored; -Infinity when empty. */
-function largest(x: Float64Array, n: number): number {
+export function largest(x: Float64Array, n: number): number {
   let hi = -Infinity;
   for (let i = 0; i < n; i++) if (x[i] > hi) hi = x[i];
   return hi;

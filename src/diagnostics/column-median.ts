@@ -2,6 +2,7 @@
  * Medians of training columns, computed once per column and shared by every reader (swing,
  * charts): selection on a scratch copy, remembered per column array.
  */
+import { largest } from '../basis/stats.js';
 
 const remembered = new WeakMap<Float64Array, { n: number; median: number }>();
 
@@ -48,16 +49,7 @@ function middleOf(a: Float64Array, n: number, upper: number): number {
   const value = selectKth(a, upper);
   if (n % 2 === 1) return value;
   // The lower middle is the largest value left of the upper middle after selection.
-  return (largestBefore(a, upper) + value) / 2;
-}
-
-// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
-
-/** Largest of a[0..end); -Infinity when end = 0. */
-function largestBefore(a: Float64Array, end: number): number {
-  let largest = -Infinity;
-  for (let i = 0; i < end; i++) if (a[i] > largest) largest = a[i];
-  return largest;
+  return (largest(a, upper) + value) / 2;
 }
 
 /**
@@ -83,6 +75,8 @@ function bracketedMedian(values: Float64Array, n: number, work: Float64Array): n
   if (lower < below || upper >= below + inside) return null;
   return middleOf(work.subarray(0, inside), n, upper - below);
 }
+
+// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
 
 /**
  * One pass: copies the values in [lo, hi] to `out` (in column order) and returns how many; -1 when

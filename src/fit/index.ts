@@ -9,7 +9,7 @@
  * see test/fit/nist-strd.test.ts, which prints every dataset's figures).
  */
 import { FactorSolver, rawSingularValues, scaledSpectrum } from './factor-solver.js';
-import { QrAccumulator } from './qr-accumulator.js';
+import { QrAccumulator, sumOfSquares } from './qr-accumulator.js';
 import { checkPenalty, penalisedFactor } from './ridge.js';
 
 export { QrAccumulator } from './qr-accumulator.js';
@@ -226,7 +226,7 @@ export function fitDesign(X: Float64Array, y: Float64Array, n: number, p: number
   if (!refined.refined) return fit;
   const r = new Float64Array(n);
   residualsInto(X, y, n, refined.coefficients, r, new Float64Array(n));
-  return { ...refined, rss: squaredSum(r, n) };
+  return { ...refined, rss: sumOfSquares(r, n) };
 }
 
 /**
@@ -296,7 +296,7 @@ export class RefinementPass {
     const hi = new Float64Array(m);
     const lo = new Float64Array(m);
     residualsInto(X, y, m, w, hi, lo);
-    this.#rss += squaredSum(hi, m);
+    this.#rss += sumOfSquares(hi, m);
     for (let j = 0; j < p; j++) addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
   }
 
@@ -501,13 +501,6 @@ function checkBlock(X: Float64Array, y: Float64Array | undefined, m: number, p: 
 function firstNotFinite(v: Float64Array, n: number): number {
   for (let i = 0; i < n; i++) if (!Number.isFinite(v[i])) return i;
   return -1;
-}
-
-/** Sum of v[i]^2 over v[0..n), in order. */
-function squaredSum(v: Float64Array, n: number): number {
-  let s = 0;
-  for (let i = 0; i < n; i++) s += v[i] * v[i];
-  return s;
 }
 
 /**

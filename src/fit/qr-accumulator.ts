@@ -197,8 +197,8 @@ function copyColumnChecked(src: Float64Array, from: number, dst: Float64Array, t
   }
 }
 
-/** Sum of squares of v[0..m). */
-function sumOfSquares(v: Float64Array, m: number): number {
+/** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
+export function sumOfSquares(v: Float64Array, m: number): number {
   let s = 0;
   for (let i = 0; i < m; i++) s += v[i] * v[i];
   return s;
