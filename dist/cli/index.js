@@ -4770,7 +4770,7 @@ function leveragesInto(fit, X, m, out) {
         out.set(leverages(fit, X, m));
         return;
     }
-    const Z = new Float64Array(LEVERAGE_CHUNK * fit.factor.p);
+    const Z = new Float64Array(LEVERAGE_CHUNK * p);
     for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK)
         leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
 }
@@ -4882,8 +4882,10 @@ function checkBlock(X, y, m, p) {
     const k = firstNotFinite(X, m * p);
     if (k >= 0)
         throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-    const i = y === undefined ? -1 : firstNotFinite(y, m);
-    if (y !== undefined && i >= 0)
+    if (y === undefined)
+        return;
+    const i = firstNotFinite(y, m);
+    if (i >= 0)
         throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
 }
 // The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
@@ -9323,7 +9325,8 @@ class FastReader {
                         throw new FastPathDeclined(line);
                     if (b === LOWER_E || b === UPPER_E) {
                         b = buf[++p];
-                        // The sign multiplies (no unary minus only negative exponents would run).
+                        // The sign multiplies: a unary minus would run only for negative exponents, and code
+                        // that runs rarely has no type feedback when V8 optimises the loop.
                         let exponentSign = 1;
                         if (b === MINUS) {
                             exponentSign = -1;

@@ -190,7 +190,8 @@ class FastReader {
           if (digits === 0) throw new FastPathDeclined(line);
           if (b === LOWER_E || b === UPPER_E) {
             b = buf[++p];
-            // The sign multiplies (no unary minus only negative exponents would run).
+            // The sign multiplies: a unary minus would run only for negative exponents, and code
+            // that runs rarely has no type feedback when V8 optimises the loop.
             let exponentSign = 1;
             if (b === MINUS) {
               exponentSign = -1;

@@ -386,7 +386,7 @@ export function leveragesInto(fit: FitResult, X: Float64Array, m: number, out: F
     out.set(leverages(fit, X, m));
     return;
   }
-  const Z = new Float64Array(LEVERAGE_CHUNK * fit.factor.p);
+  const Z = new Float64Array(LEVERAGE_CHUNK * p);
   for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK) leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
 }
 
@@ -490,8 +490,9 @@ function checkBlock(X: Float64Array, y: Float64Array | undefined, m: number, p: 
   if (y !== undefined && y.length < m) throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
   const k = firstNotFinite(X, m * p);
   if (k >= 0) throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-  const i = y === undefined ? -1 : firstNotFinite(y, m);
-  if (y !== undefined && i >= 0) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
+  if (y === undefined) return;
+  const i = firstNotFinite(y, m);
+  if (i >= 0) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
 }
 
 // The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
