@@ -261,21 +261,16 @@ function readOptions(command: CommandSpec, args: string[]): OptionValues | Parse
 function mainHelp(): string {
   const rows: Array<readonly [string, string]> = COMMANDS.map((c) => [`${c.name} [options] ${argumentUsage(c)}`, c.summary] as const);
   rows.push(['help [command]', 'print the help of a command']);
-  return [
-    'Usage: fitgate [options] [command]',
-    '',
-    ...wrap(DESCRIPTION, HELP_WIDTH),
-    '',
-    'Options:',
-    ...table([
-      ['-V, --version', 'print the version'],
-      ['-h, --help', 'print this help'],
-    ]),
-    '',
-    'Commands:',
-    ...table(rows),
-    '',
-  ].join('\n');
+  return helpPage('fitgate [options] [command]', DESCRIPTION, [
+    [
+      'Options',
+      [
+        ['-V, --version', 'print the version'],
+        ['-h, --help', 'print this help'],
+      ],
+    ],
+    ['Commands', rows],
+  ]);
 }
 
 /** The help of one command: its argument and every option with its choices and default. */
@@ -285,18 +280,17 @@ function commandHelp(command: CommandSpec): string {
     const notes = [o.choices ? `one of ${o.choices.join(', ')}` : '', o.default !== undefined ? `default: ${o.default}` : ''].filter((s) => s !== '');
     return [name, notes.length > 0 ? `${o.description} (${notes.join('; ')})` : o.description] as const;
   });
-  return [
-    `Usage: fitgate ${command.name} [options] ${argumentUsage(command)}`,
-    '',
-    ...wrap(command.summary, HELP_WIDTH),
-    '',
-    'Arguments:',
-    ...table([[command.argument.name, command.argument.description]]),
-    '',
-    'Options:',
-    ...table(options),
-    '',
-  ].join('\n');
+  return helpPage(`fitgate ${command.name} [options] ${argumentUsage(command)}`, command.summary, [
+    ['Arguments', [[command.argument.name, command.argument.description]]],
+    ['Options', options],
+  ]);
+}
+
+/** A help page: the usage line, the wrapped description, then each titled section as a table. */
+function helpPage(usage: string, description: string, sections: ReadonlyArray<readonly [string, ReadonlyArray<readonly [string, string]>]>): string {
+  const lines = [`Usage: ${usage}`, '', ...wrap(description, HELP_WIDTH)];
+  for (const [title, rows] of sections) lines.push('', `${title}:`, ...table(rows));
+  return [...lines, ''].join('\n');
 }
 
 function argumentUsage(command: CommandSpec): string {

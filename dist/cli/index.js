@@ -240,21 +240,16 @@ function readOptions(command, args) {
 function mainHelp() {
     const rows = COMMANDS.map((c) => [`${c.name} [options] ${argumentUsage(c)}`, c.summary]);
     rows.push(['help [command]', 'print the help of a command']);
-    return [
-        'Usage: fitgate [options] [command]',
-        '',
-        ...wrap(DESCRIPTION, HELP_WIDTH),
-        '',
-        'Options:',
-        ...table([
-            ['-V, --version', 'print the version'],
-            ['-h, --help', 'print this help'],
-        ]),
-        '',
-        'Commands:',
-        ...table(rows),
-        '',
-    ].join('\n');
+    return helpPage('fitgate [options] [command]', DESCRIPTION, [
+        [
+            'Options',
+            [
+                ['-V, --version', 'print the version'],
+                ['-h, --help', 'print this help'],
+            ],
+        ],
+        ['Commands', rows],
+    ]);
 }
 /** The help of one command: its argument and every option with its choices and default. */
 function commandHelp(command) {
@@ -263,18 +258,17 @@ function commandHelp(command) {
         const notes = [o.choices ? `one of ${o.choices.join(', ')}` : '', o.default !== undefined ? `default: ${o.default}` : ''].filter((s) => s !== '');
         return [name, notes.length > 0 ? `${o.description} (${notes.join('; ')})` : o.description];
     });
-    return [
-        `Usage: fitgate ${command.name} [options] ${argumentUsage(command)}`,
-        '',
-        ...wrap(command.summary, HELP_WIDTH),
-        '',
-        'Arguments:',
-        ...table([[command.argument.name, command.argument.description]]),
-        '',
-        'Options:',
-        ...table(options),
-        '',
-    ].join('\n');
+    return helpPage(`fitgate ${command.name} [options] ${argumentUsage(command)}`, command.summary, [
+        ['Arguments', [[command.argument.name, command.argument.description]]],
+        ['Options', options],
+    ]);
+}
+/** A help page: the usage line, the wrapped description, then each titled section as a table. */
+function helpPage(usage, description, sections) {
+    const lines = [`Usage: ${usage}`, '', ...wrap(description, HELP_WIDTH)];
+    for (const [title, rows] of sections)
+        lines.push('', `${title}:`, ...table(rows));
+    return [...lines, ''].join('\n');
 }
 function argumentUsage(command) {
     return command.argument.required ? `<${command.argument.name}...>` : `[${command.argument.name}...]`;
