@@ -1,5 +1,5 @@
-// The CLI bundle (node dist/cli/index.js) loads some parts on first use from files beside it
-// (dist/cli/N.index.js): the general CSV parser, the Markdown, HTML, SARIF and JUnit reporters,
+// The CLI bundle (node dist/cli/index.js) loads some parts on first use from files in
+// (dist/cli/chunks/N.index.js): the general CSV parser, the Markdown, HTML, SARIF and JUnit reporters,
 // `merge`, the base comparison and the glob matcher. Each of those paths runs here once through
 // the bundle, so a chunk missing from dist/ or failing to load shows up as a failed run.
 import { execFileSync, spawnSync } from 'node:child_process';

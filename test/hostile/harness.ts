@@ -9,7 +9,7 @@
  * ncc call as `npm run bundle`, without touching `dist/`).
  */
 import { execFile, execFileSync } from 'node:child_process';
-import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, renameSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
+import { copyFileSync, cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, renameSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -152,12 +152,12 @@ export function prepareBundles(): Bundles {
       const work = mkdtempSync(`${out}.work-`);
       try {
         if (fresh) {
-          // Each bundle is its index.js plus the chunks it loads on demand (N.index.js beside it).
-          for (const [from, sub] of [[dist, 'action'], [path.join(dist, 'cli'), 'cli']] as const) {
-            mkdirSync(path.join(work, sub));
-            for (const f of readdirSync(from)) if (f.endsWith('.js')) copyFileSync(path.join(from, f), path.join(work, sub, f));
-            writeFileSync(path.join(work, sub, 'package.json'), '{ "type": "module" }\n');
-          }
+          // The action is its index.js plus the chunks it loads on demand (N.index.js beside it);
+          // the CLI is all of dist/cli (launcher, core, code cache, chunks/).
+          mkdirSync(path.join(work, 'action'));
+          for (const f of readdirSync(dist)) if (f.endsWith('.js')) copyFileSync(path.join(dist, f), path.join(work, 'action', f));
+          writeFileSync(path.join(work, 'action', 'package.json'), '{ "type": "module" }\n');
+          cpSync(path.join(dist, 'cli'), path.join(work, 'cli'), { recursive: true });
         } else buildPrivately(work);
         renameSync(work, out);
       } finally {
