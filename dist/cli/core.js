@@ -1,4 +1,4 @@
-(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 8f1d76439d8e09361808418ce3e80e43c266d831f88f27e190d40f1bfc996df0
+(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 22dd5ea7a761ebebe4f6227a29befc3287a9e78aa8f337af4c37c4b8d1350226
 /******/ var __webpack_modules__ = ({
 
 /***/ 6214:
@@ -1193,8 +1193,8 @@ function runCheck(check, context) {
 /***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
 
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1455);
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _args_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(280);
@@ -1202,7 +1202,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _parallel_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(7262);
 /* harmony import */ var _parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(9506);
 /* harmony import */ var _pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9513);
-/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(8352);
+/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
 /* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(5655);
@@ -1213,6 +1213,8 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
  * The `fitgate` command: parse argv, run the pipeline, print a report, set the exit status
  * (0 within limits, 1 a model over a limit, 2 the run could not be done).
  */
+// node:fs rather than node:fs/promises: a command reads and writes its few files in turn, and the
+// promises module takes about 2 ms to load (readline and streams come with it).
 
 
 
@@ -1228,15 +1230,15 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 
 
 /** Reads the report files of `fitgate merge`; a file that cannot be read is an InputError. */
-async function readReports(files) {
-    return Promise.all(files.map(async (file) => {
+function readReports(files) {
+    return files.map((file) => {
         try {
-            return { file, text: await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.readFile)(file, 'utf8') };
+            return { file, text: (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readFileSync)(file, 'utf8') };
         }
         catch (error) {
             throw new _errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz('file-missing', `expected a readable JSON report file: ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorMessage */ .gJ)(error)}`, { file });
         }
-    }));
+    });
 }
 /** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
 async function main(argv) {
@@ -1254,7 +1256,7 @@ async function main(argv) {
         // Modules only some runs need are loaded when asked for, so that a plain check starts fast.
         if (parsed.kind === 'merge') {
             const { mergeReports } = await __nccwpck_require__.e(/* import() */ 107).then(__nccwpck_require__.bind(__nccwpck_require__, 9107));
-            result = mergeReports(await readReports(parsed.reports), _version_js__WEBPACK_IMPORTED_MODULE_11__/* .VERSION */ .x);
+            result = mergeReports(readReports(parsed.reports), _version_js__WEBPACK_IMPORTED_MODULE_11__/* .VERSION */ .x);
             failOn = parsed.failOn;
         }
         else {
@@ -1275,7 +1277,7 @@ async function main(argv) {
                 ? (await __nccwpck_require__.e(/* import() */ 900).then(__nccwpck_require__.bind(__nccwpck_require__, 5900))).formatMarkdown(result)
                 : (0,_report_text_js__WEBPACK_IMPORTED_MODULE_8__/* .formatText */ .v)(result, { color });
         if (parsed.out !== null)
-            await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.writeFile)(parsed.out, text);
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.writeFileSync)(parsed.out, text);
         else
             process.stdout.write(text);
         // SARIF paths are relative to the working directory when the root lies inside it (code
@@ -10046,8 +10048,8 @@ async function evaluateModel(repo, descriptor, settings, base) {
 const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(__fitgate_entry_url)("node:url");
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./src/repo/fs-repository.ts + 1 modules
-var fs_repository = __nccwpck_require__(8352);
+// EXTERNAL MODULE: ./src/repo/fs-repository.ts
+var fs_repository = __nccwpck_require__(4526);
 // EXTERNAL MODULE: ./src/parallel/pool.ts + 1 modules
 var pool = __nccwpck_require__(7262);
 // EXTERNAL MODULE: ./src/parallel/worker-role.ts
@@ -10181,24 +10183,18 @@ async function runPipeline(settings, repo, options = {}) {
 
 /***/ }),
 
-/***/ 8352:
+/***/ 4526:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  E: () => (/* binding */ createFsRepository)
-});
-
-;// CONCATENATED MODULE: external "node:fs"
-const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(__fitgate_entry_url)("node:fs");
-// EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __nccwpck_require__(6760);
-// EXTERNAL MODULE: ./src/errors.ts
-var errors = __nccwpck_require__(3916);
-// EXTERNAL MODULE: ./src/repo/repo-path.ts
-var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/repo/fs-repository.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   E: () => (/* binding */ createFsRepository)
+/* harmony export */ });
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(3916);
+/* harmony import */ var _repo_path_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3856);
 /**
  * A {@link RepoReader} over a folder on disk (the working tree). Every path is checked
  * lexically (no absolute paths, no `..` above the root) and then through the file system
@@ -10226,19 +10222,19 @@ const IGNORED_GLOBS = ['**/node_modules/**', '**/.git/**'];
  * @param root the repository folder (absolute, or relative to the working directory)
  */
 function createFsRepository(root) {
-    const rootAbsolute = external_node_path_.resolve(root);
+    const rootAbsolute = node_path__WEBPACK_IMPORTED_MODULE_1__.resolve(root);
     let rootRealPromise = null;
     const rootReal = () => {
         rootRealPromise ??= realpath(rootAbsolute).catch((error) => {
             rootRealPromise = null;
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
+            throw new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
         });
         return rootRealPromise;
     };
     /** The real path of a normalised repository-relative path, or null when nothing is there. */
     const realInside = async (rel, where, shown) => {
         const base = await rootReal();
-        const full = rel === '' ? base : external_node_path_.join(base, ...rel.split('/'));
+        const full = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...rel.split('/'));
         let real = null;
         try {
             real = await realpath(full);
@@ -10246,13 +10242,13 @@ function createFsRepository(root) {
         catch (error) {
             const code = codeOf(error);
             if (code === 'ELOOP')
-                throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
+                throw new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
             if (code !== 'ENOENT' && code !== 'ENOTDIR')
                 throw error;
         }
         if (real === null) {
             // Missing: still refuse when an existing folder on the way leads outside.
-            for (let parent = external_node_path_.dirname(full); parent.length >= base.length; parent = external_node_path_.dirname(parent)) {
+            for (let parent = node_path__WEBPACK_IMPORTED_MODULE_1__.dirname(full); parent.length >= base.length; parent = node_path__WEBPACK_IMPORTED_MODULE_1__.dirname(parent)) {
                 try {
                     const parentReal = await realpath(parent);
                     if (!isInside(base, parentReal))
@@ -10260,7 +10256,7 @@ function createFsRepository(root) {
                     break;
                 }
                 catch (error) {
-                    if (error instanceof errors/* InputError */.dz)
+                    if (error instanceof _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz)
                         throw error;
                     if (parent === base)
                         break;
@@ -10272,21 +10268,21 @@ function createFsRepository(root) {
             throw outside(shown, where);
         return real;
     };
-    const check = async (path) => realInside((0,repo_path/* normaliseRepoPath */.Gn)(path), { file: path }, path);
+    const check = async (path) => realInside((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(path), { file: path }, path);
     const requireFile = async (path) => {
         const real = await check(path);
         if (real === null)
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
+            throw new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
         const info = await stat(real);
         if (!info.isFile())
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `is not a regular file (a folder or device); expected a file`, { file: path });
+            throw new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `is not a regular file (a folder or device); expected a file`, { file: path });
         return real;
     };
     return {
         label: rootAbsolute,
         async resolve(fromFile, target, where) {
             const location = { file: fromFile, ...where };
-            const rel = (0,repo_path/* joinRepoPath */.Kp)(fromFile, target, location);
+            const rel = (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .joinRepoPath */ .Kp)(fromFile, target, location);
             await realInside(rel, location, target);
             return rel;
         },
@@ -10300,33 +10296,33 @@ function createFsRepository(root) {
             return (await stat(await requireFile(path))).size;
         },
         async read(path) {
-            return (0,external_node_fs_namespaceObject.readFileSync)(await requireFile(path));
+            return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readFileSync)(await requireFile(path));
         },
         async *stream(path, chunkBytes = 1024 * 1024) {
             const real = await requireFile(path);
-            const fd = (0,external_node_fs_namespaceObject.openSync)(real, 'r');
+            const fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(real, 'r');
             try {
                 // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
                 // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
                 // so a reader may keep a previous one.
-                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,external_node_fs_namespaceObject.fstatSync)(fd).size + 1)));
+                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fstatSync)(fd).size + 1)));
                 for (;;) {
                     const piece = Buffer.allocUnsafe(size);
-                    const n = (0,external_node_fs_namespaceObject.readSync)(fd, piece, 0, size, null);
+                    const n = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync)(fd, piece, 0, size, null);
                     if (n === 0)
                         return;
                     yield n === size ? piece : piece.subarray(0, n);
                 }
             }
             finally {
-                (0,external_node_fs_namespaceObject.closeSync)(fd);
+                (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
             }
         },
         async glob(patterns) {
             for (const pattern of patterns) {
                 const p = pattern.replace(/\\/g, '/');
-                if ((0,repo_path/* isAbsoluteLike */.tp)(pattern) || p === '..' || p.startsWith('../')) {
-                    throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
+                if ((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .isAbsoluteLike */ .tp)(pattern) || p === '..' || p.startsWith('../')) {
+                    throw new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
                 }
             }
             if (patterns.length === 0)
@@ -10340,25 +10336,25 @@ function createFsRepository(root) {
                 dot: false,
                 ignore: IGNORED_GLOBS,
             });
-            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,repo_path/* isIgnoredPath */.wY)(p)));
+            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .isIgnoredPath */ .wY)(p)));
             return [...paths].sort();
         },
     };
 }
 /** The real path (the system's realpath(3), as fs/promises uses), as a promise. */
 async function realpath(path) {
-    return external_node_fs_namespaceObject.realpathSync.native(path);
+    return node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync.native(path);
 }
 /** File information, as a promise. */
 async function stat(path) {
-    return (0,external_node_fs_namespaceObject.statSync)(path);
+    return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(path);
 }
 function isInside(base, real) {
-    const rel = external_node_path_.relative(base, real);
-    return rel === '' || (rel !== '..' && !rel.startsWith(`..${external_node_path_.sep}`) && !external_node_path_.isAbsolute(rel));
+    const rel = node_path__WEBPACK_IMPORTED_MODULE_1__.relative(base, real);
+    return rel === '' || (rel !== '..' && !rel.startsWith(`..${node_path__WEBPACK_IMPORTED_MODULE_1__.sep}`) && !node_path__WEBPACK_IMPORTED_MODULE_1__.isAbsolute(rel));
 }
 function outside(shown, where) {
-    return new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
+    return new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
 }
 function codeOf(error) {
     return error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : undefined;
@@ -10782,6 +10778,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(__fitgate_entry_url)("node:chi
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(__fitgate_entry_url)("node:crypto");
+
+/***/ }),
+
+/***/ 3024:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(__fitgate_entry_url)("node:fs");
 
 /***/ }),
 
