@@ -59,6 +59,10 @@ describe('the CLI bundle loads what a run needs on demand', () => {
     const merged = cli(['merge', 'shard-1.json', 'shard-2.json', '--format', 'json']);
     expect(merged.status, merged.stderr).toBe(1);
     expect((JSON.parse(merged.stdout) as { models: unknown[] }).models).toHaveLength(6);
+    // A report that cannot be read stops the merge with exit status 2 and names the file.
+    const missing = cli(['merge', 'shard-1.json', 'no-such-shard.json']);
+    expect(missing.status).toBe(2);
+    expect(missing.stderr).toMatch(/^fitgate: .*no-such-shard\.json.*expected a readable JSON report file: ENOENT/m);
   });
 
   it('compares with a base commit', () => {
