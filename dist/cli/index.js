@@ -255,7 +255,8 @@ Object.defineProperty(exports, "__esModule", ({ value: true }));
 /**
  * The `fitgate` command as shipped (dist/cli/index.js): compiles the command's core
  * (dist/cli/core.js, src/cli.ts made a classic script by core-script.ts) from its V8 code cache
- * when this Node.js can use it, and runs it. Everything the command does is in cli.ts.
+ * when this Node.js can use it, and runs it. Everything the command does is in cli.ts; a core
+ * that cannot be read or started (a damaged installation) ends the run with status 2.
  *
  * This file and the rest of src/launch are CommonJS (src/launch/package.json): Node.js starts a
  * CommonJS entry without its ES module loader, about 7 ms sooner on the development machine. The
@@ -263,8 +264,17 @@ Object.defineProperty(exports, "__esModule", ({ value: true }));
  */
 const node_path_1 = __importDefault(__nccwpck_require__(760));
 const code_cache_js_1 = __nccwpck_require__(849);
-const core = (0, code_cache_js_1.compileCore)(node_path_1.default.join(__dirname, 'core.js'), node_path_1.default.join(__dirname, 'core.cache'));
-void (0, code_cache_js_1.runCore)(core.script, __filename, node_path_1.default.join(__dirname, 'chunks'));
+function cannotStart(error) {
+    process.stderr.write(`fitgate: cannot start: ${error instanceof Error ? error.message : String(error)}\n`);
+    process.exitCode = 2;
+}
+try {
+    const core = (0, code_cache_js_1.compileCore)(node_path_1.default.join(__dirname, 'core.js'), node_path_1.default.join(__dirname, 'core.cache'));
+    (0, code_cache_js_1.runCore)(core.script, __filename, node_path_1.default.join(__dirname, 'chunks')).catch(cannotStart);
+}
+catch (error) {
+    cannotStart(error);
+}
 
 
 /***/ }),

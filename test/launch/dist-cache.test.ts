@@ -66,3 +66,13 @@ describe('the shipped code cache', () => {
     expect(damaged.stdout).toBe(shipped.stdout);
   });
 });
+
+describe('the launcher', () => {
+  it('ends with status 2 and says why when the core is missing', () => {
+    const dir = copyWith('no-core', (cache) => cache);
+    rmSync(path.join(dir, 'core.js'));
+    const run = spawnSync(process.execPath, [path.join(dir, 'index.js'), '--version'], { encoding: 'utf8' });
+    expect(run.status).toBe(2);
+    expect(run.stderr).toMatch(/^fitgate: cannot start: ENOENT: no such file or directory, open '.*core\.js'\n$/);
+  });
+});
