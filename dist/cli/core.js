@@ -1,4 +1,4 @@
-(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 22dd5ea7a761ebebe4f6227a29befc3287a9e78aa8f337af4c37c4b8d1350226
+(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 432aa1adf4a3bd265e891b967b3fae3d8db46ef2ec7de5bd2e50be7af182bbea
 /******/ var __webpack_modules__ = ({
 
 /***/ 6214:

@@ -195,15 +195,13 @@ const ID_MARK = '// fitgate core ';
  * Rewrites an ncc ES module bundle into the source of one async function expression (see the
  * module comment).
  * @param bundle the text of ncc's `index.js`
- * @param id the build's identity, written at the end of the first line (the build uses the
- *   bundle's SHA-256, in hex)
+ * @param identify gives the build's identity from the script's whole text with an empty identity
+ *   (the build uses its SHA-256, in hex): any change to the script changes it
  * @returns the script's source: `(async function (...) {"use strict"; // fitgate core ID` and the
  *   bundle's statements, then `})`
  * @throws Error when the bundle does not have the expected shape (a changed ncc or webpack runtime)
  */
-function toCoreScript(bundle, id) {
-    if (!/^[0-9a-z]+$/.test(id))
-        throw new Error(`a core script's identity is lower-case letters and digits, not ${JSON.stringify(id)}`);
+function toCoreScript(bundle, identify) {
     const shebang = /^#!.*\n/.exec(bundle);
     let text = shebang ? bundle.slice(shebang[0].length) : bundle;
     if (!text.startsWith(NCC_IMPORT))
@@ -224,7 +222,12 @@ function toCoreScript(bundle, id) {
     const dynamic = /\bimport\s*\((?!\))/.exec(text);
     if (dynamic)
         throw new Error(`the CLI bundle has an import() besides the chunk loader: ${JSON.stringify(text.slice(dynamic.index - 40, dynamic.index + 40))}`);
-    return `(async function (${exports.CORE_PARAMETERS.join(', ')}) {"use strict"; ${ID_MARK}${id}\n${text}\n})`;
+    const head = `(async function (${exports.CORE_PARAMETERS.join(', ')}) {"use strict"; ${ID_MARK}`;
+    const rest = `\n${text}\n})`;
+    const id = identify(head + rest);
+    if (!/^[0-9a-z]+$/.test(id))
+        throw new Error(`a core script's identity is lower-case letters and digits, not ${JSON.stringify(id)}`);
+    return head + id + rest;
 }
 /**
  * The identity written on a core script's first line by {@link toCoreScript}, or null.

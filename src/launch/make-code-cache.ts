@@ -5,7 +5,7 @@
  *     node make-code-cache.js MODULE OUT_DIR TRAINING_ROOT [PREVIOUS_CACHE]
  *
  * - MODULE: ncc's ES module bundle of src/cli.ts; OUT_DIR/core.js is written from it (core-script.ts),
- *   named by the bundle's SHA-256. The launcher (OUT_DIR/index.js) and the chunks
+ *   named by the SHA-256 of its own text (with an empty name). The launcher (OUT_DIR/index.js) and the chunks
  *   (OUT_DIR/chunks/) must be in place: the training runs load chunks as any run does.
  * - The cache holds the functions that two checks of TRAINING_ROOT (the example repository, JSON
  *   and text output, one thread) compile; a run that needs others compiles them as usual.
@@ -22,7 +22,12 @@ import path from 'node:path';
 import v8 from 'node:v8';
 import vm from 'node:vm';
 import { encodeCodeCache, readCodeCache, runCore, withCacheChecksums } from './code-cache.js';
-import { toCoreScript } from './core-script.js';
+import { coreId, toCoreScript } from './core-script.js';
+
+/** Lower-case hex SHA-256 of a text's UTF-8 bytes: the core script's identity. */
+function sha256(text: string): string {
+  return createHash('sha256').update(text, 'utf8').digest('hex');
+}
 
 /** The runs whose compiled functions go into the cache. */
 function trainingRuns(root: string): string[][] {
@@ -36,9 +41,9 @@ function trainingRuns(root: string): string[][] {
 async function make(moduleFile: string, outDir: string, trainingRoot: string, previousCache: string | undefined): Promise<string> {
   const coreFile = path.join(outDir, 'core.js');
   const cacheFile = path.join(outDir, 'core.cache');
-  const bundle = readFileSync(moduleFile, 'utf8');
-  const id = createHash('sha256').update(bundle).digest('hex');
-  const source = Buffer.from(toCoreScript(bundle, id), 'utf8');
+  const source = Buffer.from(toCoreScript(readFileSync(moduleFile, 'utf8'), sha256), 'utf8');
+  const id = coreId(source);
+  if (id === null) throw new Error('the core script names no build');
   writeFileSync(coreFile, source);
 
   if (previousCache !== undefined && existsSync(previousCache)) {

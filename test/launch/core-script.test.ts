@@ -30,7 +30,7 @@ describe('toCoreScript', () => {
           'globalThis.__coreSeen.chunk = await load(7);',
         ].join('\n'),
       ),
-      'abc123',
+      () => 'abc123',
     );
     expect(source.split('\n')[0]).toBe(`(async function (${CORE_PARAMETERS.join(', ')}) {"use strict"; // fitgate core abc123`);
     const core = new vm.Script(source).runInThisContext() as CoreFunction;
@@ -52,21 +52,34 @@ describe('toCoreScript', () => {
   });
 
   it('refuses a bundle of another shape, saying what it found', () => {
-    expect(() => toCoreScript('console.log(1);\n', 'a')).toThrow(/does not start with ncc's import of createRequire/);
-    expect(() => toCoreScript(nccModule('import fs from "node:fs";'), 'a')).toThrow(/module statement at offset \d+: "import fs/);
-    expect(() => toCoreScript(nccModule('export const x = 1;'), 'a')).toThrow(/module statement/);
-    expect(() => toCoreScript(nccModule('const r = import.meta.resolve("x");'), 'a')).toThrow(/import\.meta other than import\.meta\.url/);
-    expect(() => toCoreScript(nccModule('const other = import("./x.js");'), 'a')).toThrow(/an import\(\) besides the chunk loader/);
+    expect(() => toCoreScript('console.log(1);\n', () => 'a')).toThrow(/does not start with ncc's import of createRequire/);
+    expect(() => toCoreScript(nccModule('import fs from "node:fs";'), () => 'a')).toThrow(/module statement at offset \d+: "import fs/);
+    expect(() => toCoreScript(nccModule('export const x = 1;'), () => 'a')).toThrow(/module statement/);
+    expect(() => toCoreScript(nccModule('const r = import.meta.resolve("x");'), () => 'a')).toThrow(/import\.meta other than import\.meta\.url/);
+    expect(() => toCoreScript(nccModule('const other = import("./x.js");'), () => 'a')).toThrow(/an import\(\) besides the chunk loader/);
     const twice = nccModule(`const again = (chunkId) => import("./" + ${REQUIRE}.u(chunkId));`);
-    expect(() => toCoreScript(twice, 'a')).toThrow(/chunk loader once in the CLI bundle, found it 2 times/);
+    expect(() => toCoreScript(twice, () => 'a')).toThrow(/chunk loader once in the CLI bundle, found it 2 times/);
     const none = nccModule('').replace(`import("./" + ${REQUIRE}.u(chunkId))`, 'null');
-    expect(() => toCoreScript(none, 'a')).toThrow(/found it 0 times/);
-    expect(() => toCoreScript(nccModule(''), 'A B')).toThrow(/lower-case letters and digits/);
+    expect(() => toCoreScript(none, () => 'a')).toThrow(/found it 0 times/);
+    expect(() => toCoreScript(nccModule(''), () => 'A B')).toThrow(/lower-case letters and digits/);
+  });
+
+  it('names the build from the whole script with its name left empty', () => {
+    const seen: string[] = [];
+    const source = toCoreScript(nccModule('const a = 1;'), (script) => {
+      seen.push(script);
+      return 'f00d';
+    });
+    expect(seen).toHaveLength(1);
+    expect(seen[0]).toBe(source.replace('// fitgate core f00d\n', '// fitgate core \n'));
+    // Another bundle gives another script to name.
+    toCoreScript(nccModule('const a = 2;'), (script) => (seen.push(script), 'f00e'));
+    expect(seen[1]).not.toBe(seen[0]);
   });
 
   it('leaves the text between the rewrites as it was', () => {
     const body = 'const s = "import is a word"; // import() in a comment';
-    const source = toCoreScript(nccModule(body), 'a');
+    const source = toCoreScript(nccModule(body), () => 'a');
     expect(source).toContain('const s = "import is a word"; // import() in a comment');
     expect(source.endsWith('\n})')).toBe(true);
   });
@@ -74,7 +87,7 @@ describe('toCoreScript', () => {
 
 describe('coreId', () => {
   it('reads the identity at the end of the first line', () => {
-    expect(coreId(Buffer.from(toCoreScript(nccModule(''), '0f9e')))).toBe('0f9e');
+    expect(coreId(Buffer.from(toCoreScript(nccModule(''), () => '0f9e')))).toBe('0f9e');
   });
   it('is null for a script without one', () => {
     expect(coreId(Buffer.from('(async function () {\n})'))).toBeNull();

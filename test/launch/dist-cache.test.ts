@@ -2,12 +2,14 @@
 // this Node.js is the one that made it, and a run gives the same report with the cache, without
 // it, and with a damaged one.
 import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
 import { currentRuntime, readCodeCache } from '../../src/launch/code-cache.js';
+import { coreId } from '../../src/launch/core-script.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const cli = path.join(root, 'dist', 'cli');
@@ -36,8 +38,12 @@ function check(dir: string): { status: number | null; stdout: string; cache: str
 describe('the shipped code cache', () => {
   const lookup = readCodeCache(readFileSync(path.join(cli, 'core.cache')), readFileSync(path.join(cli, 'core.js')), null);
 
-  it('was made for the shipped core.js', () => {
+  it('was made for the shipped core.js, which the build named by the SHA-256 of its text', () => {
     expect(lookup.data === null ? lookup.reason : 'fits').toBe('fits');
+    const core = readFileSync(path.join(cli, 'core.js'), 'utf8');
+    const id = coreId(Buffer.from(core));
+    expect(id).toMatch(/^[0-9a-f]{64}$/);
+    expect(createHash('sha256').update(core.replace(`// fitgate core ${id}\n`, '// fitgate core \n'), 'utf8').digest('hex')).toBe(id);
   });
 
   it('is taken by V8 when this Node.js made it, and passed over otherwise', () => {
