@@ -1,4 +1,4 @@
-(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 432aa1adf4a3bd265e891b967b3fae3d8db46ef2ec7de5bd2e50be7af182bbea
+(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 14c9f5c29c8be0b036d3a6610e5d5dd9a761050ab7e0385cf5888dc82675fbe6
 /******/ var __webpack_modules__ = ({
 
 /***/ 6214:
@@ -2247,6 +2247,8 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2485);
 /* harmony import */ var _model_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4607);
+/* harmony import */ var _fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9554);
+
 
 
 /** Leverages within this distance of 1 count as 1 (the row is interpolated; its LOO error is infinite). */
@@ -2451,12 +2453,18 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
     });
     let pred = new Float64Array(0);
     const column = new Float64Array(p);
+    const kernels = (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_2__/* .wasmKernels */ .FY)();
     (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
         if (pred.length < m)
             pred = new Float64Array(m);
         // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
         const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
         for (let s = 0; s < S; s++) {
+            // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations in the same order).
+            if (kernels !== null) {
+                (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_2__/* .outOfFoldRows */ .e8)(kernels, X, m, p, tables[s], k, foldOf.subarray(start, start + m), single, data.y.subarray(start, start + m), sse[s]);
+                continue;
+            }
             const W = tables[s];
             const errors = sse[s];
             pred.fill(0, 0, m);
@@ -4018,6 +4026,8 @@ class FactorSolver {
     }
 }
 
+// EXTERNAL MODULE: ./src/fit/wasm-kernels.ts + 1 modules
+var wasm_kernels = __nccwpck_require__(9554);
 ;// CONCATENATED MODULE: ./src/fit/qr-accumulator.ts
 /**
  * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
@@ -4033,6 +4043,7 @@ class FactorSolver {
  * sec. 5.1-5.2 Householder QR, and sec. 6.5.2 on updating a QR factorisation by appending rows).
  * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
  */
+
 /** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
 const WORK_NUMBERS = 16384;
 /** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
@@ -4149,9 +4160,22 @@ class qr_accumulator_QrAccumulator {
         copy.#rows = this.#rows;
         return copy;
     }
-    /** Folds a column-major m x p block in pieces of at most `#chunk` rows. */
+    /**
+     * Folds a column-major m x p block in pieces of at most `#chunk` rows: in WebAssembly where it
+     * is in use (wasm-kernels.ts; the same operations in the same order), else below.
+     */
     #foldAll(X, y, m) {
         const chunk = this.#chunk;
+        const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
+        if (kernels !== null) {
+            const { rss, bad } = (0,wasm_kernels/* foldRows */.$8)(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
+            this.#rss = rss;
+            if (bad !== null) {
+                const what = bad.column < 0 ? `y at row ${bad.row}` : `X at row ${bad.row}, column ${bad.column}`;
+                throw new RangeError(`addRows: ${what} must be a finite number, got ${String(bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row])}`);
+            }
+            return;
+        }
         for (let start = 0; start < m; start += chunk) {
             this.#fold(X, m, y, start, Math.min(chunk, m - start));
         }
@@ -4449,6 +4473,7 @@ function penalisedFactor(data, lambda, mask) {
 
 
 
+
 /**
  * Solves least squares or ridge from a data factor (data rows only). Never mutates `data`.
  *
@@ -4664,6 +4689,16 @@ class RefinementPass {
     addRows(X, y, m) {
         const w = this.#fit.coefficients;
         const p = w.length;
+        // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
+        const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
+        if (kernels !== null) {
+            checkShape(X, y, m, p);
+            const { sumOfSquares: ss, bad } = (0,wasm_kernels/* refineRows */.Hb)(kernels, X, y, m, w, this.#gHi, this.#gLo);
+            if (bad !== null)
+                notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+            this.#rss += ss;
+            return;
+        }
         checkBlock(X, y, m, p);
         const hi = new Float64Array(m);
         const lo = new Float64Array(m);
@@ -4763,6 +4798,12 @@ function leveragesInto(fit, X, m, out) {
     }
     if (fit.factorRank < p) {
         out.set(leverages(fit, X, m));
+        return;
+    }
+    // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
+    const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
+    if (kernels !== null) {
+        (0,wasm_kernels/* leverageRows */.fO)(kernels, fit.factor.R, p, X, m, out);
         return;
     }
     const Z = new Float64Array(LEVERAGE_CHUNK * p);
@@ -4868,19 +4909,26 @@ function hatTrace(data, solver) {
 }
 /** Checks a column-major block and its right-hand side for shape and finiteness. */
 function checkBlock(X, y, m, p) {
+    checkShape(X, y, m, p);
+    notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
+}
+/** Checks the shapes of a column-major block and its right-hand side. */
+function checkShape(X, y, m, p) {
     if (!Number.isInteger(m) || m < 0)
         throw new RangeError(`m must be a non-negative integer, got ${String(m)}`);
     if (X.length < m * p)
         throw new RangeError(`X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
     if (y !== undefined && y.length < m)
         throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
-    const k = firstNotFinite(X, m * p);
+}
+/**
+ * Throws the RangeError for the first value of X (index k, column-major with m rows) or else of y
+ * (index i) that is not finite; does nothing when both are -1.
+ */
+function notFinite(X, y, m, k, i) {
     if (k >= 0)
         throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-    if (y === undefined)
-        return;
-    const i = firstNotFinite(y, m);
-    if (i >= 0)
+    if (i >= 0 && y !== undefined)
         throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
 }
 // The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
@@ -5110,6 +5158,241 @@ function zeroSvd(m, k, vectors) {
 
 /***/ }),
 
+/***/ 9554:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  iT: () => (/* binding */ addProductsInto),
+  $8: () => (/* binding */ foldRows),
+  fO: () => (/* binding */ leverageRows),
+  e8: () => (/* binding */ outOfFoldRows),
+  Hb: () => (/* binding */ refineRows),
+  FY: () => (/* binding */ wasmKernels)
+});
+
+// UNUSED EXPORTS: useWasmKernels
+
+;// CONCATENATED MODULE: ./src/fit/generated/kernels-wasm.ts
+// Generated by test/tools/gen-wasm.mjs from src/fit/kernels.wat; do not edit.
+/** The row kernels' WebAssembly module (3813 bytes), in base64. */
+const KERNELS_WASM = 'AGFzbQEAAAABfw5gA39/fwF/YAJ/fwF8YAN/f3wBfGADf398AGAIf39/f39/f3wAYAZ/f39/fH8AYAd/f39/f39/AGAJf39/f39/' +
+    'f39/AX9gBn9/f39/fwBgAn9/AX9gA3x8fAF8YAl/f39/f39/f38BfGAFf39/f38AYAt/f39/f39/f39/fwADFRQAAQECAwIEBAQF' +
+    'BgcICQoGCAsMDQUDAQABBi8FfwFBAAt/AUEAC3wBRAAAAAAAAAAAC3wARHWUP2rnL8ogC3wARK+WUC41jRNfCwdsCgZtZW1vcnkC' +
+    'AAZiYWRSb3cDAAliYWRDb2x1bW4DAQNyc3MDAgRmb2xkAAsJbGV2ZXJhZ2VzAAwOZmlyc3ROb3RGaW5pdGUADQZyZWZpbmUAEQth' +
+    'ZGRQcm9kdWN0cwASCW91dE9mRm9sZAATCp4bFE0CAX8BfAJAA0AgAyACTg0BIAAgA0EDdGorAwAhBCAEIAShRAAAAAAAAAAAYgRA' +
+    'IAMPCyABIANBA3RqIAQ5AwAgA0EBaiEDDAALC0F/CzgCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwCZIQQgBCADZARAIAQhAwsg' +
+    'AkEBaiECDAALCyADCzUCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwAhBCADIAQgBKKgIQMgAkEBaiECDAALCyADCzgCAX8CfAJA' +
+    'A0AgAyABTg0BIAAgA0EDdGorAwAgAqMhBSAEIAUgBaKgIQQgA0EBaiEDDAALCyAECzEBAn8CQANAIAMgAU4NASAAIANBA3RqIQQg' +
+    'BCAEKwMAIAKjOQMAIANBAWohAwwACwsLvQEBBnwgApkgACABEAGlIQMgA0QAAAAAAAAAAGEEQEQAAAAAAAD4fw8LIAMjA2QgAyME' +
+    'Y3EEQCAAIAEQAiEEIAREAAAAAAAAAABhBEBEAAAAAAAA+H8PCyACIAKiIASgnyEHBSAAIAEgAxADIQUgBUQAAAAAAAAAAGEEQEQA' +
+    'AAAAAAD4fw8LIAIgA6MhBiADIAYgBqIgBaCfoiEHCyAHmiAHIAJEAAAAAAAAAABmGyEIIAAgASACIAihEAQgCAuMBAMHfwl8A38g' +
+    'ASAEIAJsQQN0aiEIIAEgBSACbEEDdGohCSAJIAJBA3RqIQogCiACQQN0aiELIAsgAkEDdGohDCAAIAUgA2wgBGpBA3RqIQ0gA0ED' +
+    'dCEOIA0rAwAhDyANIA5qKwMAIRAgDSAOQQJsaisDACERIA0gDkEDbGorAwAhEgJAA0AgGCAGTg0BIBhBA3QhGSAIIBlqKwMAIRcg' +
+    'DyAXIAkgGWorAwCioCEPIBAgFyAKIBlqKwMAoqAhECARIBcgCyAZaisDAKKgIREgEiAXIAwgGWorAwCioCESIBhBAWohGAwACwsg' +
+    'ByAPoiETIAcgEKIhFCAHIBGiIRUgByASoiEWIBNEAAAAAAAAAABhIBREAAAAAAAAAABhcSAVRAAAAAAAAAAAYSAWRAAAAAAAAAAA' +
+    'YXFxBEAPCyANIA0rAwAgE6E5AwAgDSAOaiEaIBogGisDACAUoTkDACAaIA5qIRogGiAaKwMAIBWhOQMAIBogDmohGiAaIBorAwAg' +
+    'FqE5AwBBACEYAkADQCAYIAZODQEgGEEDdCEZIAggGWorAwAhFyAJIBlqIRogGiAaKwMAIBMgF6KhOQMAIAogGWohGiAaIBorAwAg' +
+    'FCAXoqE5AwAgCyAZaiEaIBogGisDACAVIBeioTkDACAMIBlqIRogGiAaKwMAIBYgF6KhOQMAIBhBAWohGAwACwsLuQIDBX8FfAN/' +
+    'IAEgBCACbEEDdGohCCABIAUgAmxBA3RqIQkgCSACQQN0aiEKIAAgBSADbCAEakEDdGohCyALIANBA3RqIQwgCysDACENIAwrAwAh' +
+    'DgJAA0AgEiAGTg0BIBJBA3QhEyAIIBNqKwMAIREgDSARIAkgE2orAwCioCENIA4gESAKIBNqKwMAoqAhDiASQQFqIRIMAAsLIAcg' +
+    'DaIhDyAHIA6iIRAgD0QAAAAAAAAAAGEgEEQAAAAAAAAAAGFxBEAPCyALIAsrAwAgD6E5AwAgDCAMKwMAIBChOQMAQQAhEgJAA0Ag' +
+    'EiAGTg0BIBJBA3QhEyAIIBNqKwMAIREgCSATaiEUIBQgFCsDACAPIBGioTkDACAKIBNqIRQgFCAUKwMAIBAgEaKhOQMAIBJBAWoh' +
+    'EgwACwsLzgEDA38CfAN/IAEgBCACbEEDdGohCCABIAUgAmxBA3RqIQkgACAFIANsIARqQQN0aiEKIAorAwAhCwJAA0AgDSAGTg0B' +
+    'IA1BA3QhDiALIAggDmorAwAgCSAOaisDAKKgIQsgDUEBaiENDAALCyAHIAuiIQwgDEQAAAAAAAAAAGEEQA8LIAogCisDACAMoTkD' +
+    'AEEAIQ0CQANAIA0gBk4NASANQQN0IQ4gCSAOaiEPIA8gDysDACAMIAggDmorAwCioTkDACANQQFqIQ0MAAsLC64BAwF/AnwDfyAA' +
+    'IAVBA3RqIQYgBisDACEHAkADQCAJIANODQEgCUEDdCEKIAcgAiAKaisDACABIApqKwMAoqAhByAJQQFqIQkMAAsLIAQgB6IhCCAI' +
+    'RAAAAAAAAAAAYQRADwsgBiAGKwMAIAihOQMAQQAhCQJAA0AgCSADTg0BIAlBA3QhCiABIApqIQsgCyALKwMAIAggAiAKaisDAKKh' +
+    'OQMAIAlBAWohCQwACwsL9gECBH8DfAJAA0AgByAFTg0BIAIgByAEbEEDdGohCSAAIAcgBWwgB2pBA3RqIQogCisDACELIAkgBiAL' +
+    'EAUhDCAMIAxhBEAgDCALoSAMoyENIAdBAWohCAJAA0AgCEEDaiAFTg0BIAAgAiAEIAUgByAIIAYgDRAGIAhBBGohCAwACwsCQANA' +
+    'IAhBAWogBU4NASAAIAIgBCAFIAcgCCAGIA0QByAIQQJqIQgMAAsLAkADQCAIIAVODQEgACACIAQgBSAHIAggBiANEAggCEEBaiEI' +
+    'DAALCyABIAMgCSAGIA0gBxAJIAogDDkDAAsgB0EBaiEHDAALCwu+AQEEfwJAA0AgCSAETg0BIAggBCAJayAIIAQgCWtIGyEKQQAh' +
+    'CwJAA0AgCyAFTg0BIAIgCyAEbCAJakEDdGogBiALIAhsQQN0aiAKEAAhDCAMQQBOBEAgCSAMaiQAIAskAUEBDwsgC0EBaiELDAAL' +
+    'CyADIAlBA3RqIAcgChAAIQwgDEEATgRAIAkgDGokAEF/JAFBAQ8LIAAgASAGIAcgCCAFIAoQCiMCIAcgChACoCQCIAkgCGohCQwA' +
+    'CwtBAAuYAgMGfwN8An8gA0EDdCEJIAVBACAJ/AsAAkADQCAHIAFODQEgBCAHIAlsaiEKIAogAiAHIAlsaiAJ/AoAAEEAIQgCQANA' +
+    'IAggB04NASAAIAcgAWwgCGpBA3RqKwMAIQwgBCAIIAlsaiELQQAhDwJAA0AgDyAJTg0BIAogD2ohECAQIBArAwAgDCALIA9qKwMA' +
+    'oqE5AwAgD0EIaiEPDAALCyAIQQFqIQgMAAsLIAAgByABbCAHakEDdGorAwAhDUEAIQYCQANAIAYgA04NASAGQQN0IQ8gCiAPaisD' +
+    'ACANoyEOIAogD2ogDjkDACAFIA9qIRAgECAQKwMAIA4gDqKgOQMAIAZBAWohBgwACwsgB0EBaiEHDAALCwtAAgF/AXwCQANAIAIg' +
+    'AU4NASAAIAJBA3RqKwMAIQMgAyADoUQAAAAAAAAAAGIEQCACDwsgAkEBaiECDAALC0F/C1wBBXxEAAAAAgAAoEEgAKIhAyADIAMg' +
+    'AKGhIQQgACAEoSEFRAAAAAIAAKBBIAGiIQMgAyADIAGhoSEGIAEgBqEhByAFIAeiIAIgBCAGoqEgBCAHoqEgBSAGoqGhC9YBAgN/' +
+    'CHwCQANAIAcgAk4NASAHQQN0IQkgASAJaisDACEKRAAAAAAAAAAAIQtBACEIAkADQCAIIARODQEgACAIIAJsIAdqQQN0aisDAJoh' +
+    'DCADIAhBA3RqKwMAIQ0gDCANoiEOIAogDqAhDyAPIAqhIRAgCyAKIA8gEKGhIA4gEKGgIAwgDSAOEA6goCELIA8hCiAIQQFqIQgM' +
+    'AAsLIAogC6AhESARIAqhIRAgBSAJaiAROQMAIAYgCWogCiARIBChoSALIBChoDkDACAHQQFqIQcMAAsLC5QBAgJ/B3wgBCsDACEI' +
+    'IAUrAwAhCQJAA0AgBiABTg0BIAZBA3QhByAAIAdqKwMAIQogAiAHaisDACELIAogC6IhDCAIIAygIQ0gDSAIoSEOIAkgCCANIA6h' +
+    'oSAMIA6hoCAKIAsgDBAOoCAKIAMgB2orAwCioKAhCSANIQggBkEBaiEGDAALCyAEIAg5AwAgBSAJOQMAC1kCAX8BfCAAIAEgAiAD' +
+    'IAQgBSAGEA8gBSACEAIhCgJAA0AgCSAETg0BIAAgCSACbEEDdGogAiAFIAYgByAJQQN0aiAIIAlBA3RqEBAgCUEBaiEJDAALCyAK' +
+    'C4IBAwF/AXwEfyACQQN0IQkCQANAIAUgBE4NASADIAVBA3RqKwMAIQYgBkQAAAAAAAAAAGIEQCABIAUgCWxqIQdBACEIAkADQCAI' +
+    'IAlODQEgACAIaiEKIAogCisDACAHIAhqKwMAIAaioDkDACAIQQhqIQgMAAsLCyAFQQFqIQUMAAsLC68CAgZ/AXwgCEEAIAFBA3T8' +
+    'CwAgBkEATgRAAkADQCAMIAJODQEgCSAMQQN0aiADIAwgBGwgBmpBA3RqKwMAOQMAIAxBAWohDAwACwsgCCAAIAEgCSACEBIFAkAD' +
+    'QCAMIAJODQEgACAMIAFsQQN0aiENIAwgBGwhDkEAIQsCQANAIAsgAU4NASAIIAtBA3RqIQ8gDyAPKwMAIA0gC0EDdGorAwAgAyAO' +
+    'IAUgC0ECdGooAgBqQQN0aisDAKKgOQMAIAtBAWohCwwACwsgDEEBaiEMDAALCwtBACELAkADQCALIAFODQEgByALQQN0aisDACAI' +
+    'IAtBA3RqKwMAoSERIAUgC0ECdGooAgAhECAKIBBBA3RqIQ8gDyAPKwMAIBEgEaKgOQMAIAtBAWohCwwACwsL';
+
+;// CONCATENATED MODULE: ./src/fit/wasm-kernels.ts
+/**
+ * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions and
+ * out-of-fold errors), compiled once per thread, and
+ * the wrappers that copy arrays into the module's memory and back. Both kernels compute what the
+ * JavaScript they stand in for computes, to the bit; the JavaScript stays as the fallback where
+ * WebAssembly is not available (`node --jitless`) or turned off ({@link useWasmKernels}), and as
+ * the reference the tests compare with.
+ *
+ * Why: a small model's row loops run once or twice over a few thousand rows, mostly in V8's
+ * interpreter, which boxes every floating-point result; WebAssembly is compiled before its first
+ * call. On the S workload of `npm run bench` (2,000 rows, 11 columns) a whole run takes about
+ * 20 ms less with them (see the README, "Benchmark").
+ */
+
+/** This runtime's WebAssembly, or undefined (`node --jitless` has none). */
+const WASM = globalThis.WebAssembly;
+/** WebAssembly's page size in bytes. */
+const PAGE = 65536;
+let kernels = null;
+let enabled = WASM !== undefined;
+/**
+ * Whether the fit uses the WebAssembly kernels (default: when WebAssembly is available). Tests
+ * turn them off to run the JavaScript kernels on the same data.
+ * @param on true to use them (ignored where WebAssembly is not available), false for JavaScript
+ * @returns whether they were in use before
+ */
+function useWasmKernels(on) {
+    const before = enabled;
+    enabled = on && WASM !== undefined;
+    return before;
+}
+/** The kernels, compiled on first use; null when they are not in use. */
+function wasmKernels() {
+    if (!enabled || WASM === undefined)
+        return null;
+    if (kernels === null)
+        kernels = new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports;
+    return kernels;
+}
+/** A view of the module's memory with room for at least `doubles` float64 values. */
+function heap(k, doubles) {
+    const bytes = doubles * 8;
+    const have = k.memory.buffer.byteLength;
+    if (bytes > have)
+        k.memory.grow(Math.ceil((bytes - have) / PAGE));
+    return new Float64Array(k.memory.buffer, 0, doubles);
+}
+/**
+ * Folds the m rows of a column-major block into [R; qty] (QrAccumulator's fold, in pieces of
+ * `chunk` rows). R (p x p) and qty (p) are updated in place.
+ * @param rss the residual sum of squares so far
+ * @returns the new residual sum of squares, and where a value was not finite (null when none
+ *   was; the pieces before it are folded, as the JavaScript leaves them)
+ */
+function foldRows(k, R, qty, rss, X, y, m, p, chunk) {
+    const oQty = p * p;
+    const oX = oQty + p;
+    const oY = oX + m * p;
+    const oC = oY + m;
+    const oYc = oC + chunk * p;
+    const f = heap(k, oYc + chunk);
+    f.set(R);
+    f.set(qty, oQty);
+    f.set(X.subarray(0, m * p), oX);
+    f.set(y.subarray(0, m), oY);
+    k.rss.value = rss;
+    const status = k.fold(0, oQty * 8, oX * 8, oY * 8, m, p, oC * 8, oYc * 8, chunk);
+    R.set(f.subarray(0, oQty));
+    qty.set(f.subarray(oQty, oQty + p));
+    const bad = status === 0 ? null : { row: k.badRow.value, column: k.badColumn.value };
+    return { rss: k.rss.value, bad };
+}
+/**
+ * Leverages of the m rows of a column-major block under a full-rank factor R (p x p):
+ * out[i] = || R^-T x_i ||^2 for i < m.
+ */
+function leverageRows(k, R, p, X, m, out) {
+    const oX = p * p;
+    const oZ = oX + m * p;
+    const oOut = oZ + m * p;
+    const f = heap(k, oOut + m);
+    f.set(R.subarray(0, p * p));
+    f.set(X.subarray(0, m * p), oX);
+    k.leverages(0, p, oX * 8, m, oZ * 8, oOut * 8);
+    out.set(f.subarray(oOut, oOut + m));
+}
+/**
+ * One block of the refinement pass: checks X (m x p, column-major) and y for finiteness, then
+ * adds each column's compensated dot product with the residuals y - X w to (gHi, gLo), in place.
+ * @returns the sum of squares of the residuals' high parts, or where a value is not finite
+ *   (nothing added then)
+ */
+function refineRows(k, X, y, m, w, gHi, gLo) {
+    const p = w.length;
+    const oY = m * p;
+    const oW = oY + m;
+    const oHi = oW + p;
+    const oLo = oHi + m;
+    const oGHi = oLo + m;
+    const oGLo = oGHi + p;
+    const f = heap(k, oGLo + p);
+    f.set(X.subarray(0, m * p));
+    f.set(y.subarray(0, m), oY);
+    const atX = k.firstNotFinite(0, m * p);
+    if (atX >= 0)
+        return { sumOfSquares: 0, bad: { row: atX % m, column: Math.floor(atX / m) } };
+    const atY = k.firstNotFinite(oY * 8, m);
+    if (atY >= 0)
+        return { sumOfSquares: 0, bad: { row: atY, column: -1 } };
+    f.set(w, oW);
+    f.set(gHi, oGHi);
+    f.set(gLo, oGLo);
+    const sumOfSquares = k.refine(0, oY * 8, m, oW * 8, p, oHi * 8, oLo * 8, oGHi * 8, oGLo * 8);
+    gHi.set(f.subarray(oGHi, oGHi + p));
+    gLo.set(f.subarray(oGLo, oGLo + p));
+    return { sumOfSquares, bad: null };
+}
+/**
+ * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block (columns
+ * whose weight is 0 left out): model/blocks.ts's addProducts.
+ */
+function addProductsInto(k, out, at, X, m, w, p) {
+    const oX = m;
+    const oW = oX + m * p;
+    const f = heap(k, oW + p);
+    f.set(out.subarray(at, at + m));
+    f.set(X.subarray(0, m * p), oX);
+    for (let j = 0; j < p; j++)
+        f[oW + j] = w[j];
+    k.addProducts(0, oX * 8, m, oW * 8, p);
+    out.set(f.subarray(0, m), at);
+}
+/**
+ * Adds one block's squared out-of-fold errors to errors[f] (cross-validation.ts, outOfFoldErrors,
+ * one setting).
+ * @param W coefficient j fitted without fold f at W[j * k + f]
+ * @param folds the fold of each of the m rows
+ * @param single the fold of every row, or -1 when they differ
+ * @param y the m rows' targets
+ * @param errors per fold, added to in place
+ */
+function outOfFoldRows(k, X, m, p, W, kFolds, folds, single, y, errors) {
+    const oW = m * p;
+    const oY = oW + p * kFolds;
+    const oPred = oY + m;
+    const oColumn = oPred + m;
+    const oErrors = oColumn + p;
+    const oFolds = oErrors + kFolds;
+    const f = heap(k, oFolds + Math.ceil(m / 2));
+    f.set(X.subarray(0, m * p));
+    f.set(W, oW);
+    f.set(y.subarray(0, m), oY);
+    for (let q = 0; q < kFolds; q++)
+        f[oErrors + q] = errors[q];
+    new Int32Array(f.buffer, oFolds * 8, m).set(folds.subarray(0, m));
+    k.outOfFold(0, m, p, oW * 8, kFolds, oFolds * 8, single, oY * 8, oPred * 8, oColumn * 8, oErrors * 8);
+    for (let q = 0; q < kFolds; q++)
+        errors[q] = f[oErrors + q];
+}
+
+
+/***/ }),
+
 /***/ 6264:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -5233,6 +5516,8 @@ function gapRatio(trainRmse, holdoutRmse) {
 /* harmony export */   tp: () => (/* binding */ predictRows)
 /* harmony export */ });
 /* unused harmony export blockRows */
+/* harmony import */ var _fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(9554);
+
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
  * enough to stay in cache between building a block and folding it (the QR works on pieces of a
@@ -5275,6 +5560,12 @@ function predictRows(design, data, w) {
  * @param p columns
  */
 function addProducts(out, at, X, m, w, p) {
+    // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same additions in the same order).
+    const kernels = (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_0__/* .wasmKernels */ .FY)();
+    if (kernels !== null) {
+        (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_0__/* .addProductsInto */ .iT)(kernels, out, at, X, m, w, p);
+        return;
+    }
     let j = 0;
     for (; j + 3 < p; j += 4) {
         if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {

@@ -7,6 +7,7 @@ import type { ModelData } from '../checks/types.js';
 import type { Design } from '../design-matrix.js';
 import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from '../fit/index.js';
 import { addProducts, forEachBlock } from '../model/blocks.js';
+import { outOfFoldRows, wasmKernels } from '../fit/wasm-kernels.js';
 import type { Folds } from './folds.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
@@ -230,11 +231,17 @@ export function outOfFoldErrors(
   });
   let pred = new Float64Array(0);
   const column = new Float64Array(p);
+  const kernels = wasmKernels();
   forEachBlock(design, data, (X, start, m) => {
     if (pred.length < m) pred = new Float64Array(m);
     // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
     const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
     for (let s = 0; s < S; s++) {
+      // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations in the same order).
+      if (kernels !== null) {
+        outOfFoldRows(kernels, X, m, p, tables[s], k, foldOf.subarray(start, start + m), single, data.y.subarray(start, start + m), sse[s]);
+        continue;
+      }
       const W = tables[s];
       const errors = sse[s];
       pred.fill(0, 0, m);

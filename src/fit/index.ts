@@ -11,6 +11,7 @@
 import { FactorSolver, rawSingularValues, scaledSpectrum } from './factor-solver.js';
 import { QrAccumulator, sumOfSquares } from './qr-accumulator.js';
 import { checkPenalty, penalisedFactor } from './ridge.js';
+import { leverageRows, refineRows, wasmKernels } from './wasm-kernels.js';
 
 export { QrAccumulator } from './qr-accumulator.js';
 
@@ -292,6 +293,15 @@ export class RefinementPass {
   addRows(X: Float64Array, y: Float64Array, m: number): void {
     const w = this.#fit.coefficients;
     const p = w.length;
+    // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
+    const kernels = wasmKernels();
+    if (kernels !== null) {
+      checkShape(X, y, m, p);
+      const { sumOfSquares: ss, bad } = refineRows(kernels, X, y, m, w, this.#gHi, this.#gLo);
+      if (bad !== null) notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+      this.#rss += ss;
+      return;
+    }
     checkBlock(X, y, m, p);
     const hi = new Float64Array(m);
     const lo = new Float64Array(m);
@@ -384,6 +394,12 @@ export function leveragesInto(fit: FitResult, X: Float64Array, m: number, out: F
   }
   if (fit.factorRank < p) {
     out.set(leverages(fit, X, m));
+    return;
+  }
+  // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
+  const kernels = wasmKernels();
+  if (kernels !== null) {
+    leverageRows(kernels, fit.factor.R, p, X, m, out);
     return;
   }
   const Z = new Float64Array(LEVERAGE_CHUNK * p);
@@ -485,14 +501,24 @@ function hatTrace(data: QrAccumulator, solver: FactorSolver): number {
 
 /** Checks a column-major block and its right-hand side for shape and finiteness. */
 function checkBlock(X: Float64Array, y: Float64Array | undefined, m: number, p: number): void {
+  checkShape(X, y, m, p);
+  notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
+}
+
+/** Checks the shapes of a column-major block and its right-hand side. */
+function checkShape(X: Float64Array, y: Float64Array | undefined, m: number, p: number): void {
   if (!Number.isInteger(m) || m < 0) throw new RangeError(`m must be a non-negative integer, got ${String(m)}`);
   if (X.length < m * p) throw new RangeError(`X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
   if (y !== undefined && y.length < m) throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
-  const k = firstNotFinite(X, m * p);
+}
+
+/**
+ * Throws the RangeError for the first value of X (index k, column-major with m rows) or else of y
+ * (index i) that is not finite; does nothing when both are -1.
+ */
+function notFinite(X: Float64Array, y: Float64Array | undefined, m: number, k: number, i: number): void {
   if (k >= 0) throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-  if (y === undefined) return;
-  const i = firstNotFinite(y, m);
-  if (i >= 0) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
+  if (i >= 0 && y !== undefined) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
 }
 
 // The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,

@@ -13,6 +13,8 @@
  * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
  */
 
+import { foldRows, wasmKernels } from './wasm-kernels.js';
+
 /** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
 const WORK_NUMBERS = 16384;
 /** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
@@ -139,9 +141,22 @@ export class QrAccumulator {
     return copy;
   }
 
-  /** Folds a column-major m x p block in pieces of at most `#chunk` rows. */
+  /**
+   * Folds a column-major m x p block in pieces of at most `#chunk` rows: in WebAssembly where it
+   * is in use (wasm-kernels.ts; the same operations in the same order), else below.
+   */
   #foldAll(X: Float64Array, y: Float64Array, m: number): void {
     const chunk = this.#chunk;
+    const kernels = wasmKernels();
+    if (kernels !== null) {
+      const { rss, bad } = foldRows(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
+      this.#rss = rss;
+      if (bad !== null) {
+        const what = bad.column < 0 ? `y at row ${bad.row}` : `X at row ${bad.row}, column ${bad.column}`;
+        throw new RangeError(`addRows: ${what} must be a finite number, got ${String(bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row])}`);
+      }
+      return;
+    }
     for (let start = 0; start < m; start += chunk) {
       this.#fold(X, m, y, start, Math.min(chunk, m - start));
     }

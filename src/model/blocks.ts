@@ -4,6 +4,7 @@
  */
 import type { ModelData } from '../checks/types.js';
 import type { Design } from '../design-matrix.js';
+import { addProductsInto, wasmKernels } from '../fit/wasm-kernels.js';
 
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
@@ -54,6 +55,12 @@ export function predictRows(design: Design, data: Pick<ModelData, 'inputs' | 'ro
  * @param p columns
  */
 export function addProducts(out: Float64Array, at: number, X: Float64Array, m: number, w: ArrayLike<number>, p: number): void {
+  // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same additions in the same order).
+  const kernels = wasmKernels();
+  if (kernels !== null) {
+    addProductsInto(kernels, out, at, X, m, w, p);
+    return;
+  }
   let j = 0;
   for (; j + 3 < p; j += 4) {
     if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {

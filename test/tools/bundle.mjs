@@ -29,6 +29,8 @@ function build(src, out) {
 try {
   // Precompiled schema validators first (src/config/generated/validators.ts).
   execFileSync(process.execPath, [path.join(root, 'test', 'tools', 'gen-validators.mjs')], { cwd: root, stdio: 'inherit' });
+  // The row kernels' WebAssembly module (src/fit/generated/kernels-wasm.ts).
+  execFileSync(process.execPath, [path.join(root, 'test', 'tools', 'gen-wasm.mjs')], { cwd: root, stdio: 'inherit' });
   const previousCache = path.join(work, 'previous.cache');
   if (existsSync(path.join(cli, 'core.cache'))) copyFileSync(path.join(cli, 'core.cache'), previousCache);
   rmSync(dist, { recursive: true, force: true });
