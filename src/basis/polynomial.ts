@@ -5,6 +5,7 @@
  */
 import type { PolynomialTermSpec } from '../config/types.js';
 import { InputError } from '../errors.js';
+import { polynomialColumnsInto, wasmKernels } from '../fit/wasm-kernels.js';
 import { meanAndSd } from './stats.js';
 import type { Term, TrainingColumns } from './types.js';
 
@@ -45,6 +46,12 @@ export function polynomialTerm(spec: PolynomialTermSpec, training: TrainingColum
     fixed: { shift: s, scale },
     fill(inputs, m, out, offset) {
       const first = offset * m;
+      // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations).
+      const kernels = wasmKernels();
+      if (kernels !== null) {
+        polynomialColumnsInto(kernels, inputs[0], m, s, sc, raw, spec.degree, out, first);
+        return;
+      }
       if (raw) out.set(inputs[0].subarray(0, m), first);
       else standardise(inputs[0], m, s, sc, out, first);
       for (let k = 1; k < spec.degree; k++) multiplyColumns(out, (offset + k - 1) * m, first, (offset + k) * m, m);

@@ -546,4 +546,51 @@
         (f64.store (local.get $at) (f64.add (f64.load (local.get $at)) (f64.mul (local.get $r) (local.get $r))))
         (local.set $i (i32.add (local.get $i) (i32.const 1)))
         (br $next))))
+
+  ;; The degree columns of a polynomial term for m values x (basis/polynomial.ts): column 1 is
+  ;; z = (x - shift) / scale (x itself when raw is 1), column k the previous column times z; written
+  ;; one after another from out.
+  (func (export "polynomialColumns") (param $x i32) (param $m i32) (param $shift f64) (param $scale f64) (param $raw i32)
+      (param $degree i32) (param $out i32)
+    (local $k i32) (local $off i32) (local $end i32) (local $prev i32) (local $next i32)
+    (local.set $end (i32.shl (local.get $m) (i32.const 3)))
+    (if (local.get $raw)
+      (then (memory.copy (local.get $out) (local.get $x) (local.get $end)))
+      (else
+        (block $done
+          (loop $next
+            (br_if $done (i32.ge_s (local.get $off) (local.get $end)))
+            (f64.store (i32.add (local.get $out) (local.get $off))
+              (f64.div (f64.sub (f64.load (i32.add (local.get $x) (local.get $off))) (local.get $shift)) (local.get $scale)))
+            (local.set $off (i32.add (local.get $off) (i32.const 8)))
+            (br $next)))))
+    (local.set $k (i32.const 1))
+    (block $powers
+      (loop $power
+        (br_if $powers (i32.ge_s (local.get $k) (local.get $degree)))
+        (local.set $prev (i32.add (local.get $out) (i32.mul (i32.sub (local.get $k) (i32.const 1)) (local.get $end))))
+        (local.set $next (i32.add (local.get $out) (i32.mul (local.get $k) (local.get $end))))
+        (local.set $off (i32.const 0))
+        (block $rows
+          (loop $row
+            (br_if $rows (i32.ge_s (local.get $off) (local.get $end)))
+            (f64.store (i32.add (local.get $next) (local.get $off))
+              (f64.mul (f64.load (i32.add (local.get $prev) (local.get $off))) (f64.load (i32.add (local.get $out) (local.get $off)))))
+            (local.set $off (i32.add (local.get $off) (i32.const 8)))
+            (br $row)))
+        (local.set $k (i32.add (local.get $k) (i32.const 1)))
+        (br $power))))
+
+  ;; Index of the first of the n values at a whose magnitude is not within max (NaN included), or
+  ;; -1 (model/evaluate.ts, the design's range check).
+  (func (export "firstBeyond") (param $a i32) (param $n i32) (param $max f64) (result i32)
+    (local $i i32)
+    (block $done
+      (loop $next
+        (br_if $done (i32.ge_s (local.get $i) (local.get $n)))
+        (if (i32.eqz (f64.le (f64.abs (f64.load (i32.add (local.get $a) (i32.shl (local.get $i) (i32.const 3))))) (local.get $max)))
+          (then (return (local.get $i))))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $next)))
+    (i32.const -1))
 )

@@ -1,6 +1,7 @@
 /**
- * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions and
- * out-of-fold errors), compiled once per thread, and
+ * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions,
+ * out-of-fold errors, polynomial columns and the design's range check), compiled once per
+ * thread, and
  * the wrappers that copy arrays into the module's memory and back. Both kernels compute what the
  * JavaScript they stand in for computes, to the bit; the JavaScript stays as the fallback where
  * WebAssembly is not available (`node --jitless`) or turned off ({@link useWasmKernels}), and as
@@ -42,6 +43,8 @@ interface KernelExports {
   refine(X: number, y: number, m: number, w: number, p: number, hi: number, lo: number, gHi: number, gLo: number): number;
   addProducts(out: number, X: number, m: number, w: number, p: number): void;
   outOfFold(X: number, m: number, p: number, W: number, k: number, folds: number, single: number, y: number, pred: number, column: number, errors: number): void;
+  polynomialColumns(x: number, m: number, shift: number, scale: number, raw: number, degree: number, out: number): void;
+  firstBeyond(a: number, n: number, max: number): number;
 }
 
 /** WebAssembly's page size in bytes. */
@@ -207,4 +210,23 @@ export function outOfFoldRows(
   new Int32Array(f.buffer, oFolds * 8, m).set(folds.subarray(0, m));
   k.outOfFold(0, m, p, oW * 8, kFolds, oFolds * 8, single, oY * 8, oPred * 8, oColumn * 8, oErrors * 8);
   for (let q = 0; q < kFolds; q++) errors[q] = f[oErrors + q];
+}
+
+/**
+ * The `degree` columns of a polynomial term for x[0..m) written to out from `at` (column k at
+ * at + k m): z = (x - shift) / scale (x itself when `raw`), then its powers (basis/polynomial.ts).
+ */
+export function polynomialColumnsInto(k: KernelExports, x: Float64Array, m: number, shift: number, scale: number, raw: boolean, degree: number, out: Float64Array, at: number): void {
+  const oOut = m;
+  const f = heap(k, oOut + degree * m);
+  f.set(x.subarray(0, m));
+  k.polynomialColumns(0, m, shift, scale, raw ? 1 : 0, degree, oOut * 8);
+  out.set(f.subarray(oOut, oOut + degree * m), at);
+}
+
+/** Index of the first of a[0..n) whose magnitude is not within max (NaN included), or -1. */
+export function firstBeyondIn(k: KernelExports, a: Float64Array, n: number, max: number): number {
+  const f = heap(k, n);
+  f.set(a.subarray(0, n));
+  return k.firstBeyond(0, n, max);
 }

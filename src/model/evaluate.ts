@@ -9,6 +9,7 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
 import { InputError } from '../errors.js';
 import { fitFactor, RefinementPass, refinementApplies, type FitResult } from '../fit/index.js';
+import { firstBeyondIn, wasmKernels } from '../fit/wasm-kernels.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
 import { allowOptimisingCompiler, estimateWork, SMALL_WORK } from '../optimising-compiler.js';
 import { sweepTarget } from '../diagnostics/complexity.js';
@@ -199,6 +200,10 @@ function firstBeyond(values: Float64Array, n: number, max: number): number {
  * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
  */
 function checkFiniteBlock(design: Design, train: FittedModel['tables']['train'], descriptor: Descriptor, X: Float64Array, start: number, m: number): void {
+  // In WebAssembly where it is in use (fit/wasm-kernels.ts); the loop below then only runs to
+  // report a value that is out of range.
+  const kernels = wasmKernels();
+  if (kernels !== null && firstBeyondIn(kernels, X, design.p * m, MAX_MAGNITUDE) < 0) return;
   for (let j = 0; j < design.p; j++) {
     const base = j * m;
     for (let i = 0; i < m; i++) {

@@ -16,6 +16,13 @@ import { addProducts } from '../../src/model/blocks.js';
 import { generate } from '../tools/gen-wasm.mjs';
 import { fitRows, linearDesign, randomRows } from '../diagnostics/helpers.js';
 import { seeded } from './helpers.js';
+import { createTerm } from '../../src/basis/index.js';
+import { loadDescriptor } from '../../src/config/descriptor.js';
+import { loadSettings } from '../../src/config/settings-file.js';
+import { createDesign } from '../../src/design-matrix.js';
+import { evaluateModel } from '../../src/model/evaluate.js';
+import { createMemoryRepository } from '../../src/repo/memory-repository.js';
+import { descriptor } from '../checks/context.js';
 
 afterEach(() => {
   useWasmKernels(true);
@@ -27,6 +34,15 @@ function both<T>(compute: () => T): { js: T; wasm: T } {
   const js = compute();
   useWasmKernels(true);
   const wasm = compute();
+  return { js, wasm };
+}
+
+/** {@link both} for asynchronous work. */
+async function bothAsync<T>(compute: () => Promise<T>): Promise<{ js: T; wasm: T }> {
+  useWasmKernels(false);
+  const js = await compute();
+  useWasmKernels(true);
+  const wasm = await compute();
   return { js, wasm };
 }
 
@@ -221,6 +237,43 @@ describe('predictions and out-of-fold errors', () => {
       expectSameBits('cross-validation figures', figures(js.cv), figures(wasm.cv));
     });
   }
+});
+
+describe('polynomial columns and the design range check', () => {
+  it('the columns of polynomial terms, standardised and raw, degrees 1 to 12: the same bits', () => {
+    const x = Float64Array.from({ length: 777 }, (_, i) => Math.cos(i * 1.3) * 40 + i / 9);
+    for (const degree of [1, 2, 5, 12]) {
+      for (const [shift, scale] of [
+        [null, null],
+        [0, 1],
+        [3.5, 0.25],
+      ] as const) {
+        const d = descriptor({ terms: [{ kind: 'polynomial', of: 'x', degree, shift, scale }], target: 'y', folds: 5 });
+        const { js, wasm } = both(() => {
+          const design = createDesign([createTerm(d.terms[0], new Map([['x', x]]), d.file)], true);
+          return design.fill([x], 0, x.length);
+        });
+        expectSameBits(`degree ${degree}, shift ${shift}, scale ${scale}`, js, wasm);
+      }
+    }
+  });
+
+  it('a design value beyond the range: the same error, naming the column, the line of the row and the term', async () => {
+    const files = {
+      'models/m.model.yml': 'version: 1\nname: m\ndata:\n  train: ../data/t.csv\n  holdout: ../data/h.csv\n  target: y\nterms:\n  - polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }\n',
+      'data/t.csv': `x,y\n${Array.from({ length: 30 }, (_, i) => `${i === 17 ? 1e30 : (i + 1) / 7},${i % 5}`).join('\n')}\n`,
+      'data/h.csv': 'x,y\n0.5,1\n',
+    };
+    const { js, wasm } = await bothAsync(async () => {
+      const repo = createMemoryRepository(files);
+      const settings = await loadSettings(repo, 'fitgate.yml');
+      const result = await evaluateModel(repo, await loadDescriptor(repo, 'models/m.model.yml', settings), settings);
+      return result.error;
+    });
+    expect(js?.code).toBe('design-overflow');
+    expect(js?.message).toMatch(/^`terms`: design column `z\(x\)\^2` is 1\.0000000000000001e\+180 at training row on line 19 of data\/t\.csv; expected values within ±1e\+140/);
+    expect(wasm).toEqual(js);
+  });
 });
 
 describe('a whole run', () => {
