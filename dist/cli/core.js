@@ -1,4 +1,4 @@
-(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 58ecc80ae33a4949871dc1af5fbaa5674230ee04ee8da3574f4403cd7f20313a
+(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 8e4f7c1f5520b6462fddcf39ba9be4a3c77e678197e081dfdb91aba54e653d81
 /******/ var __webpack_modules__ = ({
 
 /***/ 6214:
@@ -5248,16 +5248,15 @@ const KERNELS_WASM = 'AGFzbQEAAAABkAEQYAN/f38Bf2ACf38BfGADf398AXxgA39/fABgCH9/f3
 /**
  * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions,
  * out-of-fold errors, polynomial columns and the design's range check), compiled once per
- * thread, and
- * the wrappers that copy arrays into the module's memory and back. Both kernels compute what the
- * JavaScript they stand in for computes, to the bit; the JavaScript stays as the fallback where
- * WebAssembly is not available (`node --jitless`) or turned off ({@link useWasmKernels}), and as
- * the reference the tests compare with.
+ * thread, and the wrappers that copy arrays into the module's memory and back. Each kernel
+ * computes what the JavaScript it stands in for computes, to the bit; the JavaScript stays as the
+ * fallback where WebAssembly is not available (`node --jitless`) or turned off
+ * ({@link useWasmKernels}), and as the reference the tests compare with.
  *
  * Why: a small model's row loops run once or twice over a few thousand rows, mostly in V8's
  * interpreter, which boxes every floating-point result; WebAssembly is compiled before its first
  * call. On the S workload of `npm run bench` (2,000 rows, 11 columns) a whole run takes about
- * 20 ms less with them (see the README, "Benchmark").
+ * 30 ms less with them, M and L less too (see the README, "Benchmark").
  */
 
 /** This runtime's WebAssembly, or undefined (`node --jitless` has none). */

@@ -1,16 +1,15 @@
 /**
  * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions,
  * out-of-fold errors, polynomial columns and the design's range check), compiled once per
- * thread, and
- * the wrappers that copy arrays into the module's memory and back. Both kernels compute what the
- * JavaScript they stand in for computes, to the bit; the JavaScript stays as the fallback where
- * WebAssembly is not available (`node --jitless`) or turned off ({@link useWasmKernels}), and as
- * the reference the tests compare with.
+ * thread, and the wrappers that copy arrays into the module's memory and back. Each kernel
+ * computes what the JavaScript it stands in for computes, to the bit; the JavaScript stays as the
+ * fallback where WebAssembly is not available (`node --jitless`) or turned off
+ * ({@link useWasmKernels}), and as the reference the tests compare with.
  *
  * Why: a small model's row loops run once or twice over a few thousand rows, mostly in V8's
  * interpreter, which boxes every floating-point result; WebAssembly is compiled before its first
  * call. On the S workload of `npm run bench` (2,000 rows, 11 columns) a whole run takes about
- * 20 ms less with them (see the README, "Benchmark").
+ * 30 ms less with them, M and L less too (see the README, "Benchmark").
  */
 import { KERNELS_WASM } from './generated/kernels-wasm.js';
 
@@ -32,7 +31,7 @@ interface WasmGlobal {
 }
 
 /** What kernels.wat exports. */
-interface KernelExports {
+export interface KernelExports {
   memory: { buffer: ArrayBuffer; grow(pages: number): number };
   badRow: WasmGlobal;
   badColumn: WasmGlobal;
