@@ -1,4 +1,4 @@
-(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 8e4f7c1f5520b6462fddcf39ba9be4a3c77e678197e081dfdb91aba54e653d81
+(async function (__WEBPACK_EXTERNAL_createRequire, __fitgate_entry_url, __fitgate_import) {"use strict"; // fitgate core 28e85cafbf8138e44ad2ac154161fc74861b21c93844951862e516a9834c008e
 /******/ var __webpack_modules__ = ({
 
 /***/ 6214:
@@ -4179,10 +4179,8 @@ class qr_accumulator_QrAccumulator {
         if (kernels !== null) {
             const { rss, bad } = (0,wasm_kernels/* foldRows */.$8)(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
             this.#rss = rss;
-            if (bad !== null) {
-                const what = bad.column < 0 ? `y at row ${bad.row}` : `X at row ${bad.row}, column ${bad.column}`;
-                throw new RangeError(`addRows: ${what} must be a finite number, got ${String(bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row])}`);
-            }
+            if (bad !== null)
+                throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
             return;
         }
         for (let start = 0; start < m; start += chunk) {
@@ -4229,12 +4227,15 @@ function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
 function copyColumnChecked(src, from, dst, to, mb, firstRow, column) {
     for (let i = 0; i < mb; i++) {
         const v = src[from + i];
-        if (!Number.isFinite(v)) {
-            const what = column < 0 ? `y at row ${firstRow + i}` : `X at row ${firstRow + i}, column ${column}`;
-            throw new RangeError(`addRows: ${what} must be a finite number, got ${String(v)}`);
-        }
+        if (!Number.isFinite(v))
+            throw notFinite(firstRow + i, column, v);
         dst[to + i] = v;
     }
+}
+/** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
+function notFinite(row, column, value) {
+    const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
+    return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
 }
 /** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
 function qr_accumulator_sumOfSquares(v, m) {
@@ -4704,7 +4705,7 @@ class RefinementPass {
             checkShape(X, y, m, p);
             const { sumOfSquares: ss, bad } = (0,wasm_kernels/* refineRows */.Hb)(kernels, X, y, m, w, this.#gHi, this.#gLo);
             if (bad !== null)
-                notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+                fit_notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
             this.#rss += ss;
             return;
         }
@@ -4919,7 +4920,7 @@ function hatTrace(data, solver) {
 /** Checks a column-major block and its right-hand side for shape and finiteness. */
 function checkBlock(X, y, m, p) {
     checkShape(X, y, m, p);
-    notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
+    fit_notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
 }
 /** Checks the shapes of a column-major block and its right-hand side. */
 function checkShape(X, y, m, p) {
@@ -4934,7 +4935,7 @@ function checkShape(X, y, m, p) {
  * Throws the RangeError for the first value of X (index k, column-major with m rows) or else of y
  * (index i) that is not finite; does nothing when both are -1.
  */
-function notFinite(X, y, m, k, i) {
+function fit_notFinite(X, y, m, k, i) {
     if (k >= 0)
         throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
     if (i >= 0 && y !== undefined)

@@ -151,10 +151,7 @@ export class QrAccumulator {
     if (kernels !== null) {
       const { rss, bad } = foldRows(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
       this.#rss = rss;
-      if (bad !== null) {
-        const what = bad.column < 0 ? `y at row ${bad.row}` : `X at row ${bad.row}, column ${bad.column}`;
-        throw new RangeError(`addRows: ${what} must be a finite number, got ${String(bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row])}`);
-      }
+      if (bad !== null) throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
       return;
     }
     for (let start = 0; start < m; start += chunk) {
@@ -204,12 +201,15 @@ function copyChecked(X: Float64Array, ldx: number, y: Float64Array, start: numbe
 function copyColumnChecked(src: Float64Array, from: number, dst: Float64Array, to: number, mb: number, firstRow: number, column: number): void {
   for (let i = 0; i < mb; i++) {
     const v = src[from + i];
-    if (!Number.isFinite(v)) {
-      const what = column < 0 ? `y at row ${firstRow + i}` : `X at row ${firstRow + i}, column ${column}`;
-      throw new RangeError(`addRows: ${what} must be a finite number, got ${String(v)}`);
-    }
+    if (!Number.isFinite(v)) throw notFinite(firstRow + i, column, v);
     dst[to + i] = v;
   }
+}
+
+/** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
+function notFinite(row: number, column: number, value: number): RangeError {
+  const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
+  return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
 }
 
 /** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
