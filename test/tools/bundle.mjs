@@ -47,11 +47,15 @@ try {
   copyFileSync(build('src/launch/launcher.ts', path.join(work, 'launcher')), path.join(cli, 'index.js'));
   chmodSync(path.join(cli, 'index.js'), 0o755);
   writeFileSync(path.join(dist, 'package.json'), `${JSON.stringify({ type: 'module' }, null, 2)}\n`);
+  // V8 binds its cache to the flags in force: the cache is made, and checked, without any that
+  // NODE_OPTIONS might add (a plain `node` run has none).
+  const plainEnv = { ...process.env };
+  delete plainEnv.NODE_OPTIONS;
   const maker = build('src/launch/make-code-cache.ts', path.join(work, 'maker'));
-  execFileSync(process.execPath, [maker, cliModule, cli, path.join(root, 'examples'), previousCache], { cwd: root, stdio: ['ignore', 'ignore', 'inherit'] });
+  execFileSync(process.execPath, [maker, cliModule, cli, path.join(root, 'examples'), previousCache], { cwd: root, env: plainEnv, stdio: ['ignore', 'ignore', 'inherit'] });
 
   // A cache made for this Node.js must be one V8 takes; one kept from another is only reported.
-  const probe = spawnSync(process.execPath, [path.join(cli, 'index.js'), '--version'], { cwd: root, env: { ...process.env, NODE_DEBUG: 'fitgate' }, encoding: 'utf8' });
+  const probe = spawnSync(process.execPath, [path.join(cli, 'index.js'), '--version'], { cwd: root, env: { ...plainEnv, NODE_DEBUG: 'fitgate' }, encoding: 'utf8' });
   const outcome = /code cache: (.*)/.exec(probe.stderr)?.[1] ?? `no outcome reported (status ${probe.status}): ${probe.stderr}`;
   if (outcome.startsWith('made for V8 ')) process.stderr.write(`note: the code cache is not this Node.js's: ${outcome}\n`);
   else if (outcome !== 'accepted' || probe.status !== 0) throw new Error(`the CLI's code cache is not used: ${outcome}`);
