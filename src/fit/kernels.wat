@@ -22,19 +22,27 @@
   (global $SAFE_SMALL f64 (f64.const 1e-150))
   (global $SAFE_LARGE f64 (f64.const 1e150))
 
-  ;; Copies n values from src to dst; returns the index of the first that is not finite, or -1.
-  (func $copyChecked (param $src i32) (param $dst i32) (param $n i32) (result i32)
+  ;; Index of the first NaN or infinite value among the n at a, or -1 (fit/index.ts, firstNotFinite).
+  (func $firstNotFinite (export "firstNotFinite") (param $a i32) (param $n i32) (result i32)
     (local $i i32) (local $v f64)
     (block $done
       (loop $next
         (br_if $done (i32.ge_s (local.get $i) (local.get $n)))
-        (local.set $v (f64.load (i32.add (local.get $src) (i32.shl (local.get $i) (i32.const 3)))))
+        (local.set $v (f64.load (i32.add (local.get $a) (i32.shl (local.get $i) (i32.const 3)))))
         ;; v - v is 0 for every finite v, NaN for NaN and the infinities.
         (if (f64.ne (f64.sub (local.get $v) (local.get $v)) (f64.const 0)) (then (return (local.get $i))))
-        (f64.store (i32.add (local.get $dst) (i32.shl (local.get $i) (i32.const 3))) (local.get $v))
         (local.set $i (i32.add (local.get $i) (i32.const 1)))
         (br $next)))
     (i32.const -1))
+
+  ;; Copies n values from src to dst when all are finite; returns the index of the first that is
+  ;; not, or -1.
+  (func $copyChecked (param $src i32) (param $dst i32) (param $n i32) (result i32)
+    (local $bad i32)
+    (local.set $bad (call $firstNotFinite (local.get $src) (local.get $n)))
+    (if (i32.lt_s (local.get $bad) (i32.const 0))
+      (then (memory.copy (local.get $dst) (local.get $src) (i32.shl (local.get $n) (i32.const 3)))))
+    (local.get $bad))
 
   (func $largestMagnitude (param $a i32) (param $n i32) (result f64)
     (local $i i32) (local $amax f64) (local $v f64)
@@ -365,18 +373,6 @@
             (br $scale)))
         (local.set $j (i32.add (local.get $j) (i32.const 1)))
         (br $column))))
-
-  ;; Index of the first NaN or infinite value among the n at a, or -1 (fit/index.ts, firstNotFinite).
-  (func (export "firstNotFinite") (param $a i32) (param $n i32) (result i32)
-    (local $i i32) (local $v f64)
-    (block $done
-      (loop $next
-        (br_if $done (i32.ge_s (local.get $i) (local.get $n)))
-        (local.set $v (f64.load (i32.add (local.get $a) (i32.shl (local.get $i) (i32.const 3)))))
-        (if (f64.ne (f64.sub (local.get $v) (local.get $v)) (f64.const 0)) (then (return (local.get $i))))
-        (local.set $i (i32.add (local.get $i) (i32.const 1)))
-        (br $next)))
-    (i32.const -1))
 
   ;; Exact error of a floating-point product, a*b - fl(a*b) (Dekker / Veltkamp splitting;
   ;; fit/index.ts, twoProductError).

@@ -79,7 +79,7 @@ function heap(k: KernelExports, doubles: number): Float64Array {
   return new Float64Array(k.memory.buffer, 0, doubles);
 }
 
-/** Where {@link foldRows} found a value that is not finite: its row in the block, and column (-1: y). */
+/** Where a kernel found a value that is not finite: its row in the block, and column (-1: y). */
 export interface BadValue {
   row: number;
   column: number;
@@ -126,16 +126,13 @@ export function leverageRows(k: KernelExports, R: Float64Array, p: number, X: Fl
   out.set(f.subarray(oOut, oOut + m));
 }
 
-/** Where {@link refineRows} found a value that is not finite: X at (row, column), or y at row (column -1). */
-export type RefineCheck = BadValue | null;
-
 /**
  * One block of the refinement pass: checks X (m x p, column-major) and y for finiteness, then
  * adds each column's compensated dot product with the residuals y - X w to (gHi, gLo), in place.
  * @returns the sum of squares of the residuals' high parts, or where a value is not finite
  *   (nothing added then)
  */
-export function refineRows(k: KernelExports, X: Float64Array, y: Float64Array, m: number, w: Float64Array, gHi: Float64Array, gLo: Float64Array): { sumOfSquares: number; bad: RefineCheck } {
+export function refineRows(k: KernelExports, X: Float64Array, y: Float64Array, m: number, w: Float64Array, gHi: Float64Array, gLo: Float64Array): { sumOfSquares: number; bad: BadValue | null } {
   const p = w.length;
   const oY = m * p;
   const oW = oY + m;
