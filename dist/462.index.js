@@ -9,7 +9,7 @@ export const modules = {
 /* harmony export */   generalChunks: () => (/* binding */ generalChunks)
 /* harmony export */ });
 /* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6070);
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(3916);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
 /* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5383);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8706);
 /**
@@ -96,7 +96,7 @@ async function* generalChunks(pieces, target, skipRows = 0) {
             return false;
         if (failure instanceof StopReading)
             return true;
-        if (failure instanceof _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz)
+        if (failure instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz)
             throw failure;
         if (bad !== null)
             throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .S)(file, 1 + lineFeeds, bad.utf16);
@@ -186,7 +186,7 @@ function syntaxError(failure, file, line) {
         default:
             what = `the record starting on line ${line} is not valid CSV: ${failure.message}`;
     }
-    return new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-syntax', what, { file, line });
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-syntax', what, { file, line });
 }
 
 

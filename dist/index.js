@@ -29259,10 +29259,10 @@ var promises_ = __nccwpck_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
-// EXTERNAL MODULE: ./src/errors.ts
-var errors = __nccwpck_require__(3916);
-// EXTERNAL MODULE: ./src/pipeline.ts + 18 modules
-var pipeline = __nccwpck_require__(3007);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/run/pipeline.ts + 32 modules
+var pipeline = __nccwpck_require__(8805);
 ;// CONCATENATED MODULE: external "node:child_process"
 const external_node_child_process_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
 // EXTERNAL MODULE: ./src/repo/repo-path.ts
@@ -29807,8 +29807,8 @@ function formatJson(result) {
     return `${JSON.stringify(result, null, 2)}\n`;
 }
 
-// EXTERNAL MODULE: ./src/result.ts
-var src_result = __nccwpck_require__(1666);
+// EXTERNAL MODULE: ./src/result/result.ts
+var result_result = __nccwpck_require__(1628);
 ;// CONCATENATED MODULE: ./src/action/outcome.ts
 /**
  * The step's outcome from a Result: the outputs, the JSON report file, and the one-line
@@ -29839,7 +29839,7 @@ function names(models) {
  * @param failOn `fail` or `warn`
  */
 function failureMessage(result, failOn) {
-    const status = (0,src_result/* exitStatus */.$u)(result, failOn);
+    const status = (0,result_result/* exitStatus */.$u)(result, failOn);
     if (status === 0)
         return null;
     const { counts } = result;
@@ -29871,271 +29871,7 @@ async function writeReport(result, dir, step) {
 
 /***/ }),
 
-/***/ 2578:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  P: () => (/* binding */ createTerm),
-  Q: () => (/* binding */ termInputs)
-});
-
-;// CONCATENATED MODULE: ./src/basis/linear.ts
-/** Builds the linear term: one design column per listed input column, copied unchanged. */
-function linearTerm(spec) {
-    return {
-        spec,
-        inputs: spec.columns,
-        columnNames: spec.columns,
-        fixed: {},
-        fill(inputs, m, out, offset) {
-            for (let j = 0; j < inputs.length; j++) {
-                out.set(inputs[j].subarray(0, m), (offset + j) * m);
-            }
-        },
-    };
-}
-
-// EXTERNAL MODULE: ./src/errors.ts
-var errors = __nccwpck_require__(3916);
-// EXTERNAL MODULE: ./src/fit/wasm-kernels.ts + 1 modules
-var wasm_kernels = __nccwpck_require__(9554);
-// EXTERNAL MODULE: ./src/basis/stats.ts
-var stats = __nccwpck_require__(6029);
-;// CONCATENATED MODULE: ./src/basis/polynomial.ts
-
-
-
-/**
- * Fixes shift and scale from the training column and returns the term.
- * @throws InputError `constant-input` when the default scale would be 0 (a constant column)
- */
-function polynomialTerm(spec, training, file) {
-    const x = training.get(spec.of);
-    let shift = spec.shift;
-    let scale = spec.scale;
-    if (shift === null || scale === null) {
-        const { mean, sd } = (0,stats/* meanAndSd */.ud)(x);
-        shift ??= mean;
-        if (scale === null) {
-            if (!(sd > 0)) {
-                throw new errors/* InputError */.dz('constant-input', `column \`${spec.of}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`, { file, line: spec.line, key: 'polynomial.of' });
-            }
-            scale = sd;
-        }
-    }
-    const s = shift;
-    const sc = scale;
-    const raw = s === 0 && scale === 1;
-    const names = [];
-    for (let k = 1; k <= spec.degree; k++) {
-        const base = raw ? spec.of : `z(${spec.of})`;
-        names.push(k === 1 ? base : `${base}^${k}`);
-    }
-    return {
-        spec,
-        inputs: [spec.of],
-        columnNames: names,
-        fixed: { shift: s, scale },
-        fill(inputs, m, out, offset) {
-            const first = offset * m;
-            // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations).
-            const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
-            if (kernels !== null) {
-                (0,wasm_kernels/* polynomialColumnsInto */.qO)(kernels, inputs[0], m, s, sc, raw, spec.degree, out, first);
-                return;
-            }
-            if (raw)
-                out.set(inputs[0].subarray(0, m), first);
-            else
-                standardise(inputs[0], m, s, sc, out, first);
-            for (let k = 1; k < spec.degree; k++)
-                multiplyColumns(out, (offset + k - 1) * m, first, (offset + k) * m, m);
-        },
-    };
-}
-// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
-/** out[at + i] = (x[i] - shift) / scale for i < m. */
-function standardise(x, m, shift, scale, out, at) {
-    for (let i = 0; i < m; i++)
-        out[at + i] = (x[i] - shift) / scale;
-}
-/** out[to + i] = out[a + i] * out[b + i] for i < m (the next power from the previous one and z). */
-function multiplyColumns(out, a, b, to, m) {
-    for (let i = 0; i < m; i++)
-        out[to + i] = out[a + i] * out[b + i];
-}
-
-;// CONCATENATED MODULE: ./src/basis/rbf.ts
-/** Largest number of centres a `{ from, to, step }` range may produce. */
-const MAX_STEP_CENTERS = 10000;
-/** The centres a specification stands for, in order. */
-function rbfCenters(centers, training) {
-    switch (centers.kind) {
-        case 'list':
-            return [...centers.values];
-        case 'count': {
-            const { from, to, count } = centers;
-            if (count === 1)
-                return [from];
-            const out = [];
-            for (let k = 0; k < count; k++)
-                out.push(k === count - 1 ? to : from + ((to - from) * k) / (count - 1));
-            return out;
-        }
-        case 'step': {
-            const { from, to, step } = centers;
-            const out = [];
-            const dir = to >= from ? 1 : -1;
-            for (let k = 0; out.length < MAX_STEP_CENTERS; k++) {
-                const c = from + dir * k * step;
-                if (dir * (c - to) > 1e-9 * step)
-                    break;
-                out.push(c);
-            }
-            return out;
-        }
-        case 'at-samples':
-            return Array.from(training);
-    }
-}
-/** Formats a centre for a column name (shortest round-trip text, at most 6 significant digits). */
-function label(c) {
-    const short = Number(c.toPrecision(6));
-    return String(short);
-}
-/** Builds the Gaussian term with its centres fixed. */
-function rbfTerm(spec, training) {
-    const x = training.get(spec.of);
-    const centres = rbfCenters(spec.centers, x);
-    const a = 1 / (2 * spec.width * spec.width);
-    return {
-        spec,
-        inputs: [spec.of],
-        columnNames: centres.map((c) => `rbf(${spec.of}; c=${label(c)})`),
-        fixed: { width: spec.width, centers: centres },
-        fill(inputs, m, out, offset) {
-            for (let k = 0; k < centres.length; k++)
-                gaussianColumn(inputs[0], m, centres[k], a, out, (offset + k) * m);
-        },
-    };
-}
-/**
- * out[at + i] = exp(-(x[i] - c)^2 a) for i < m. A function of its own, one loop (see
- * DEVELOPERS.md, "Writing hot loops").
- */
-function gaussianColumn(x, m, c, a, out, at) {
-    for (let i = 0; i < m; i++) {
-        const d = x[i] - c;
-        out[at + i] = Math.exp(-d * d * a);
-    }
-}
-
-;// CONCATENATED MODULE: ./src/basis/index.ts
-
-
-
-/** Every input column a term reads (without duplicates, in first-use order). */
-function termInputs(spec) {
-    return spec.kind === 'linear' ? [...new Set(spec.columns)] : [spec.of];
-}
-/**
- * Fixes a term's data-dependent parameters from the training columns.
- * @param spec the descriptor entry
- * @param training training columns by name (must hold every input of the term)
- * @param file descriptor path, for errors
- */
-function createTerm(spec, training, file) {
-    switch (spec.kind) {
-        case 'linear':
-            return linearTerm(spec);
-        case 'polynomial':
-            return polynomialTerm(spec, training, file);
-        case 'rbf':
-            return rbfTerm(spec, training);
-    }
-}
-
-
-/***/ }),
-
-/***/ 6029:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Mq: () => (/* binding */ sumOfSquaredDeviations),
-/* harmony export */   jZ: () => (/* binding */ sumOfDeviations),
-/* harmony export */   nQ: () => (/* binding */ largest),
-/* harmony export */   ud: () => (/* binding */ meanAndSd),
-/* harmony export */   y1: () => (/* binding */ range)
-/* harmony export */ });
-/* unused harmony export smallest */
-/**
- * Column statistics used to fix basis parameters.
- */
-/**
- * Mean and population standard deviation sqrt(mean((x - mean)^2)) of the first `n` entries,
- * by two passes (the second on deviations, so no cancellation). Empty input gives NaN.
- */
-function meanAndSd(x, n = x.length) {
-    if (n === 0)
-        return { mean: Number.NaN, sd: Number.NaN };
-    let mean = sumOf(x, n) / n;
-    // One correction step (mean of deviations) keeps the mean exact to rounding for large offsets.
-    mean += sumOfDeviations(x, n, mean) / n;
-    return { mean, sd: Math.sqrt(sumOfSquaredDeviations(x, n, mean) / n) };
-}
-// The passes below are separate functions, each one loop followed by nothing but its return, so
-// that V8's code optimised in the middle of a long loop never runs into code it has no type
-// feedback for (which throws the optimised code away; see DEVELOPERS.md, "Writing hot loops").
-function sumOf(x, n) {
-    let sum = 0;
-    for (let i = 0; i < n; i++)
-        sum += x[i];
-    return sum;
-}
-/** Sum of x[i] - shift over x[0..n), added in order. */
-function sumOfDeviations(x, n, shift) {
-    let dev = 0;
-    for (let i = 0; i < n; i++)
-        dev += x[i] - shift;
-    return dev;
-}
-/** Sum of (x[i] - shift)^2 over x[0..n), added in order. */
-function sumOfSquaredDeviations(x, n, shift) {
-    let ss = 0;
-    for (let i = 0; i < n; i++) {
-        const d = x[i] - shift;
-        ss += d * d;
-    }
-    return ss;
-}
-/** Smallest and largest of the first `n` entries (NaN entries ignored); [Infinity, -Infinity] when empty. */
-function range(x, n = x.length) {
-    return [smallest(x, n), largest(x, n)];
-}
-/** Smallest of x[0..n), NaN ignored; Infinity when empty. */
-function smallest(x, n) {
-    let lo = Infinity;
-    for (let i = 0; i < n; i++)
-        if (x[i] < lo)
-            lo = x[i];
-    return lo;
-}
-/** Largest of x[0..n), NaN ignored; -Infinity when empty. */
-function largest(x, n) {
-    let hi = -Infinity;
-    for (let i = 0; i < n; i++)
-        if (x[i] > hi)
-            hi = x[i];
-    return hi;
-}
-
-
-/***/ }),
-
-/***/ 5614:
+/***/ 1093:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -30146,10 +29882,10 @@ __nccwpck_require__.d(__webpack_exports__, {
   k_: () => (/* binding */ runCheck)
 });
 
-// EXTERNAL MODULE: ./src/result.ts
-var result = __nccwpck_require__(1666);
-// EXTERNAL MODULE: ./src/format.ts
-var format = __nccwpck_require__(6264);
+// EXTERNAL MODULE: ./src/result/result.ts
+var result = __nccwpck_require__(1628);
+// EXTERNAL MODULE: ./src/core/format.ts
+var format = __nccwpck_require__(6228);
 ;// CONCATENATED MODULE: ./src/checks/base-change.ts
 
 
@@ -30255,1114 +29991,10 @@ const parameter_ratio_check = {
 };
 /* harmony default export */ const parameter_ratio = (parameter_ratio_check);
 
-// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
-var complexity = __nccwpck_require__(7070);
-;// CONCATENATED MODULE: ./src/diagnostics/json.ts
-/**
- * Makes diagnostic figures safe for the JSON report: non-finite numbers become the strings of
- * {@link jsonNumber}, typed arrays become plain arrays, nested objects and arrays are converted.
- */
-
-/**
- * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
- * `undefined` fields dropped).
- *
- * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
- */
-function jsonSafe(value) {
-    if (typeof value === 'number')
-        return (0,result/* jsonNumber */.qj)(value);
-    if (typeof value === 'string' || typeof value === 'boolean' || value === null)
-        return value;
-    if (ArrayBuffer.isView(value) && !(value instanceof DataView))
-        return Array.from(value, result/* jsonNumber */.qj);
-    if (Array.isArray(value))
-        return value.map(jsonSafe);
-    if (typeof value === 'object' && value !== undefined) {
-        const out = {};
-        for (const [k, v] of Object.entries(value))
-            if (v !== undefined)
-                out[k] = jsonSafe(v);
-        return out;
-    }
-    return null;
-}
-/** {@link jsonSafe} for a record of figures (model metrics or check detail). */
-function jsonRecord(record) {
-    return jsonSafe(record);
-}
-/** Model metrics: numbers through `jsonNumber` (flat record). */
-function jsonMetrics(record) {
-    const out = {};
-    for (const [k, v] of Object.entries(record))
-        out[k] = typeof v === 'number' ? (0,result/* jsonNumber */.qj)(v) : v;
-    return out;
-}
-
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 4 modules
-var shared = __nccwpck_require__(9389);
-;// CONCATENATED MODULE: ./src/checks/complexity.ts
-
-
-
-
-
-const complexity_check = {
-    id: 'complexity',
-    title: 'Simpler setting',
-    limitKey: 'complexity',
-    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. A ridge sweep uses every training row; above 50,000 training rows a degree or width sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
-    advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
-    line: (d) => d.fit.line,
-    measure(context) {
-        const { descriptor, design, train, fit } = context;
-        const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, { factors: () => (0,shared/* sharedFoldFactors */.zf)(context) });
-        if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
-            return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
-        }
-        const chosen = sweep.curve[sweep.chosen];
-        const current = sweep.curve[sweep.current];
-        const best = sweep.curve[sweep.best];
-        const value = chosen.cvRmse > 0 ? current.cvRmse / chosen.cvRmse : current.cvRmse === 0 ? 1 : Infinity;
-        const detail = jsonRecord({
-            setting: sweep.kind,
-            folds: sweep.folds,
-            rows: sweep.rows,
-            subsampled: sweep.subsampled,
-            rule: 'one-standard-error',
-            chosen: sweep.chosen,
-            best: sweep.best,
-            current: sweep.current,
-            curve: sweep.curve.map((c) => ({ setting: c.setting, label: c.label, parameters: c.parameters, cv_rmse: c.cvRmse, mean_mse: c.meanMse, se_mse: c.seMse, current: c.current, ...(c.failed ? { failed: c.failed } : {}) })),
-        });
-        const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
-        if (sweep.chosen === sweep.current) {
-            return {
-                value,
-                message: `${current.label} is the simplest setting within one standard error of the best cross-validation error (${sweep.curve.length} settings swept${sub})`,
-                line: sweep.line,
-                metrics: { suggested_setting: current.label },
-                detail,
-            };
-        }
-        return {
-            value,
-            message: `${chosen.label} has k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} for the current ${current.label}; it is the simplest of ${sweep.curve.length} settings within one standard error of the best (${best.label}, ${(0,format/* formatNumber */.Z)(best.cvRmse)})${sub}`,
-            line: sweep.line,
-            metrics: { suggested_setting: chosen.label, suggested_cv_rmse: (0,result/* jsonNumber */.qj)(chosen.cvRmse) },
-            detail,
-            suggestion: { text: `${chosen.label} (k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} now)`, line: sweep.line },
-        };
-    },
-};
-/* harmony default export */ const checks_complexity = (complexity_check);
-
-;// CONCATENATED MODULE: ./src/checks/conditioning.ts
-
-
-const conditioning_check = {
-    id: 'conditioning',
-    title: 'Conditioning of the design',
-    limitKey: 'condition',
-    description: '2-norm condition number s_max / s_min of the design with every column scaled to unit length, from the singular values of the triangular factor R of its QR factorisation (Golub & Van Loan, Matrix Computations, 4th ed., 2013, sections 2.6 and 5.3; column scaling as in van der Sluis 1969, Numerische Mathematik 14). Infinite when the design is rank deficient. A large value means some columns are nearly linear combinations of others, so their coefficients are poorly determined; the message names the columns that take part in the most nearly collinear combination (weight |v_j| >= 0.1 in the right singular vector of the smallest singular value) and points at the first of their terms. Default: warn above 1e8 (common practice).',
-    advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
-    line: (d) => d.termsLine,
-    measure({ fit, design, descriptor }) {
-        const value = fit.conditionNumberScaled;
-        const columns = fit.collinearColumns.map((j) => design.columnNames[j]);
-        // Term of each collinear column (the intercept belongs to the `fit` block).
-        const termOf = (j) => {
-            let t = -1;
-            design.termOffsets.forEach((offset, i) => {
-                if (j >= offset && design.terms[i].columnNames.length > 0)
-                    t = i;
-            });
-            return t;
-        };
-        const terms = [...new Set(fit.collinearColumns.map(termOf).filter((t) => t >= 0))];
-        const line = terms.length > 0 ? design.terms[terms[0]].spec.line : descriptor.fit.line;
-        const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
-        return {
-            value,
-            message: `the column-scaled design has condition number ${(0,format/* formatNumber */.Z)(value)} (rank ${fit.rank} of ${design.p})${value > 1e3 ? named : ''}`,
-            line,
-            metrics: { condition_number_scaled: (0,result/* jsonNumber */.qj)(value) },
-            detail: { collinear_columns: columns, collinear_term_lines: terms.map((t) => design.terms[t].spec.line), rank: fit.rank, singular_values_scaled: Array.from(fit.singularValuesScaled, result/* jsonNumber */.qj) },
-        };
-    },
-};
-/* harmony default export */ const conditioning = (conditioning_check);
-
-// EXTERNAL MODULE: ./src/metrics/regression.ts
-var regression = __nccwpck_require__(1788);
-;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
-
-
-
-
-const cross_validation_check = {
-    id: 'cross-validation',
-    title: 'Cross-validation',
-    limitKey: 'cv_ratio',
-    description: 'k-fold cross-validation RMSE divided by training RMSE. The rows are split into k folds (`fit.folds`, default 5; `fit.fold_order: shuffled` from `fit.seed`, the default, or `blocks`: contiguous blocks in file order, the first n mod k folds one row longer); each fold is predicted by the fit on the other folds with the same ridge penalty, and cv_rmse = sqrt(sum of all squared out-of-fold errors / n) (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10). Also reported: leave-one-out RMSE sqrt(mean((e_i / (1 - h_ii))^2)) from the PRESS residuals (Allen 1974, Technometrics 16(1)), with h_ii the leverages (infinite when a row has leverage 1), generalised cross-validation GCV = mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979, Technometrics 21(2)), and the effective degrees of freedom df = trace of the hat matrix = sum of the leverages, sum_j d_j^2 / (d_j^2 + lambda) for ridge (ESL eq. 3.50). Infinite when the training RMSE is 0 and the CV RMSE is not.',
-    advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
-    line: (d) => d.fit.line,
-    measure(context) {
-        const folds = (0,shared/* sharedFolds */.eQ)(context);
-        const cv = (0,shared/* sharedCrossValidation */.b6)(context);
-        const { metrics, train, design } = context;
-        const effectiveDf = cv.effectiveDf;
-        const figures = {
-            loocv_rmse: cv.loocvRmse,
-            gcv: cv.gcv,
-            effective_df: effectiveDf,
-            effective_df_per_sample: effectiveDf / train.rows,
-            cv_folds: cv.k,
-        };
-        const detail = {
-            folds: cv.k,
-            fold_order: folds.order,
-            seed: folds.seed,
-            fold_rows: cv.foldSizes,
-            fold_rmse: cv.foldRmse,
-            cv_rmse: cv.cvRmse,
-            loocv_rmse: cv.loocvRmse,
-            press: cv.press,
-            gcv: cv.gcv,
-            effective_df: effectiveDf,
-            parameters: design.p,
-            max_leverage: cv.maxLeverage,
-            rows_with_leverage_one: cv.rowsWithLeverageOne,
-        };
-        if (cv.k < 2) {
-            return {
-                value: null,
-                reason: 'too-few-rows',
-                message: `cross-validation needs at least 2 training rows, got ${train.rows}`,
-                metrics: jsonMetrics(figures),
-                detail: jsonRecord(detail),
-            };
-        }
-        const ratio = (0,regression/* gapRatio */.yr)(metrics.trainRmse, cv.cvRmse);
-        const loo = cv.rowsWithLeverageOne > 0 ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)` : (0,format/* formatNumber */.Z)(cv.loocvRmse);
-        return {
-            value: ratio,
-            message: `${cv.k}-fold CV RMSE ${(0,format/* formatNumber */.Z)(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${(0,format/* formatNumber */.Z)(ratio)} times the training RMSE ${(0,format/* formatNumber */.Z)(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${(0,format/* formatNumber */.Z)(cv.gcv)}, effective degrees of freedom ${(0,format/* formatNumber */.Z)(effectiveDf)} of ${design.p} parameters`,
-            metrics: jsonMetrics({ cv_rmse: cv.cvRmse, ...figures }),
-            detail: jsonRecord(detail),
-        };
-    },
-};
-/* harmony default export */ const cross_validation = (cross_validation_check);
-
-;// CONCATENATED MODULE: ./src/checks/leakage.ts
-
-const leakage_check = {
-    id: 'leakage',
-    title: 'Hold-out rows in the training data',
-    limitKey: 'leakage',
-    description: "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
-    advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
-    line: (d) => d.data.lines.holdout,
-    measure(context) {
-        const { holdout, train, design } = context;
-        if (design.inputs.length === 0) {
-            return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
-        }
-        const leak = (0,shared/* sharedLeakage */.EW)(context);
-        const metrics = { leaked_rows: leak.fullMatches, holdout_rows_in_training: leak.inputMatches };
-        const detail = {
-            columns: [...design.inputs],
-            holdout_rows: leak.holdoutRows,
-            input_matches: leak.inputMatches,
-            target_matches: leak.fullMatches,
-            holdout_lines: leak.holdoutLines,
-            train_lines: leak.trainLines,
-            holdout_file: holdout.file,
-            train_file: train.file,
-        };
-        if (leak.inputMatches === 0) {
-            return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.join(', ')}`, metrics, detail };
-        }
-        const lines = (file, ls) => `${file} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
-        const target = leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
-        return {
-            value: leak.inputMatches,
-            message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
-            metrics,
-            detail,
-        };
-    },
-};
-/* harmony default export */ const leakage = (leakage_check);
-
-// EXTERNAL MODULE: ./src/model/blocks.ts
-var blocks = __nccwpck_require__(4607);
-;// CONCATENATED MODULE: ./src/checks/reproducibility.ts
-
-
-
-
-
-const reproducibility_check = {
-    id: 'reproducibility',
-    title: 'Shipped coefficients against the refit',
-    limitKey: 'reproducibility',
-    description: "Largest absolute difference between the predictions of the descriptor's shipped `coefficients` and of the refit on the hold-out rows, divided by the range (max - min) of the training target: max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y). Shows that the shipped model no longer follows from the committed data and terms. The detail also compares the shipped model's hold-out RMSE with the refit's. Skipped when the descriptor has no `coefficients`. Default limit 0.01 (1 % of the target's range).",
-    advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
-    line: (d) => d.coefficientsLine ?? d.nameLine,
-    measure({ descriptor, design, fit, holdout, metrics }) {
-        const shipped = descriptor.coefficients;
-        if (shipped === null)
-            return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
-        if (shipped.length !== design.p) {
-            return { value: null, reason: 'coefficients-length', message: `\`coefficients\` has ${shipped.length} values for ${design.p} design columns` };
-        }
-        const ps = (0,blocks/* predictRows */.tp)(design, holdout, shipped);
-        const pr = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
-        let diff = 0;
-        let row = -1;
-        for (let i = 0; i < holdout.rows; i++) {
-            const d = Math.abs(ps[i] - pr[i]);
-            if (d > diff || Number.isNaN(d)) {
-                diff = d;
-                row = i;
-            }
-        }
-        const [lo, hi] = metrics.targetRange;
-        const spread = hi - lo;
-        const value = spread > 0 ? diff / spread : diff === 0 ? 0 : Infinity;
-        const shippedSums = (0,regression/* emptySums */.y3)();
-        (0,regression/* addErrors */.xB)(shippedSums, holdout.y, ps, holdout.rows);
-        const shippedRmse = (0,regression/* errorMeasures */._I)(shippedSums).rmse;
-        let coefDiff = 0;
-        for (let j = 0; j < design.p; j++)
-            coefDiff = Math.max(coefDiff, Math.abs(shipped[j] - fit.coefficients[j]));
-        return {
-            value,
-            message: `shipped and refit predictions differ by up to ${(0,format/* formatNumber */.Z)(diff)} on the hold-out rows (${(0,format/* formatNumber */.Z)(value * 100)} % of the training target's range ${(0,format/* formatNumber */.Z)(spread)}${row >= 0 ? `, ${holdout.file} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${(0,format/* formatNumber */.Z)(shippedRmse)}, refit ${(0,format/* formatNumber */.Z)(metrics.holdoutRmse)}`,
-            metrics: { shipped_prediction_difference: (0,result/* jsonNumber */.qj)(value) },
-            detail: jsonRecord({
-                max_prediction_difference: diff,
-                target_range: spread,
-                at_line: row >= 0 ? holdout.lines[row] : null,
-                shipped_holdout_rmse: shippedRmse,
-                refit_holdout_rmse: metrics.holdoutRmse,
-                holdout_rmse_ratio: shippedRmse / metrics.holdoutRmse,
-                max_coefficient_difference: coefDiff,
-            }),
-        };
-    },
-};
-/* harmony default export */ const reproducibility = (reproducibility_check);
-
-;// CONCATENATED MODULE: ./src/checks/swing.ts
-
-
-
-
-/** Describes a point's inputs for a message, e.g. `depth_m = 5.1`. */
-function describePoint(point) {
-    if (point === null)
-        return '';
-    return Object.entries(point.inputs)
-        .map(([name, v]) => `${name} = ${(0,format/* formatNumber */.Z)(v)}`)
-        .join(', ');
-}
-/** The chart data every swing outcome carries (see the README for its shape). */
-function swingDetail(swing) {
-    return jsonRecord({
-        band: swing.band,
-        inside: swing.inside,
-        beyond: swing.beyond,
-        margin: swing.margin,
-        points: swing.points,
-        worst_inside: swing.worstInside,
-        worst_beyond: swing.worstBeyond,
-        segments: swing.segments,
-        curves: swing.curves,
-    });
-}
-/** Line of the first term that reads this input, else the terms line. */
-function inputLine(context, point) {
-    if (point === null)
-        return undefined;
-    const names = Object.keys(point.inputs);
-    const term = context.design.terms.find((t) => t.inputs.some((c) => names.length === 1 && c === names[0]));
-    return term?.spec.line;
-}
-const swing_check = {
-    id: 'swing',
-    title: 'Swing between samples',
-    limitKey: 'swing',
-    description: 'How far the predictions between the training samples leave the band [min y, max y] of the training targets, in units of the band width: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y) over a dense grid. One input: 201 evenly spaced points across the training range plus 8 points inside every gap between neighbouring distinct values (the widest 4,000 gaps when there are more; above 20,000 rows the gaps of 20,000 rows at an even stride plus the extremes). Several inputs: the same grid along each input with the others at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 / inputs) gaps of each input), plus 8 points on each segment between a training row and its 3 nearest neighbours (Euclidean distance on inputs divided by their standard deviations; at most 1,000 rows, an even stride through the file). A model that interpolates its samples with a high-degree polynomial or narrow radial bumps swings far outside the band between them (Runge phenomenon: Runge 1901, Zeitschrift für Mathematik und Physik 46). 0 when every prediction stays inside the band.',
-    advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
-    line: (d) => d.termsLine,
-    measure(context) {
-        const swing = (0,shared/* sharedSwing */.cQ)(context);
-        if (Number.isNaN(swing.inside)) {
-            return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is nothing between samples to scan', detail: swingDetail(swing) };
-        }
-        const where = describePoint(swing.worstInside);
-        return {
-            value: swing.inside,
-            message: swing.inside > 0
-                ? `between the samples the predictions leave the training target band [${(0,format/* formatNumber */.Z)(swing.band[0])}, ${(0,format/* formatNumber */.Z)(swing.band[1])}] by ${(0,format/* formatNumber */.Z)(swing.inside)} band widths (prediction ${(0,format/* formatNumber */.Z)(swing.worstInside?.prediction)} at ${where}; ${swing.points.inside} points scanned)`
-                : `the predictions stay inside the training target band [${(0,format/* formatNumber */.Z)(swing.band[0])}, ${(0,format/* formatNumber */.Z)(swing.band[1])}] at ${swing.points.inside} points between the samples`,
-            line: inputLine(context, swing.worstInside),
-            metrics: { swing: (0,result/* jsonNumber */.qj)(swing.inside) },
-            detail: swingDetail(swing),
-        };
-    },
-};
-/* harmony default export */ const swing = (swing_check);
-
-;// CONCATENATED MODULE: ./src/checks/swing-beyond.ts
-
-
-
-
-const swing_beyond_check = {
-    id: 'swing-beyond',
-    title: 'Swing beyond the samples',
-    limitKey: 'swing_beyond',
-    description: 'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; by default it only warns (above 1 band width). The chart data are in the `swing` outcome.',
-    advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
-    line: (d) => d.termsLine,
-    measure(context) {
-        const swing = (0,shared/* sharedSwing */.cQ)(context);
-        if (Number.isNaN(swing.beyond)) {
-            return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is no range to step beyond' };
-        }
-        const where = describePoint(swing.worstBeyond);
-        return {
-            value: swing.beyond,
-            message: swing.beyond > 0
-                ? `within ${(0,format/* formatNumber */.Z)(swing.margin * 100)} % of the range beyond the samples the predictions leave the training target band [${(0,format/* formatNumber */.Z)(swing.band[0])}, ${(0,format/* formatNumber */.Z)(swing.band[1])}] by ${(0,format/* formatNumber */.Z)(swing.beyond)} band widths (prediction ${(0,format/* formatNumber */.Z)(swing.worstBeyond?.prediction)} at ${where})`
-                : `within ${(0,format/* formatNumber */.Z)(swing.margin * 100)} % of the range beyond the samples the predictions stay inside the training target band`,
-            line: inputLine(context, swing.worstBeyond),
-            metrics: { swing_beyond: (0,result/* jsonNumber */.qj)(swing.beyond) },
-            detail: { margin: swing.margin, points: swing.points.beyond, worst: swing.worstBeyond === null ? null : { inputs: swing.worstBeyond.inputs, prediction: (0,result/* jsonNumber */.qj)(swing.worstBeyond.prediction) } },
-        };
-    },
-};
-/* harmony default export */ const swing_beyond = (swing_beyond_check);
-
-;// CONCATENATED MODULE: ./src/checks/types.ts
-/** Compares a figure with a limit: above `fail` fails, above `warn` warns; NaN passes as skipped. */
-function judge(value, limit) {
-    if (limit.off || value === null || Number.isNaN(value))
-        return 'skipped';
-    if (limit.fail !== null && value > limit.fail)
-        return 'fail';
-    if (limit.warn !== null && value > limit.warn)
-        return 'warn';
-    return 'pass';
-}
-
-;// CONCATENATED MODULE: ./src/checks/index.ts
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-/** Every check, in report order. Ids are unique (checked on load). */
-const CHECKS = validate([
-    generalisation_gap,
-    parameter_ratio,
-    coefficient_size,
-    base_change,
-    cross_validation,
-    swing,
-    swing_beyond,
-    leakage,
-    reproducibility,
-    conditioning,
-    checks_complexity,
-]);
-function validate(checks) {
-    const seen = new Set();
-    for (const c of checks) {
-        if (seen.has(c.id))
-            throw new Error(`duplicate check id ${c.id}`);
-        if (!/^[a-z][a-z0-9-]*$/.test(c.id))
-            throw new Error(`check id ${c.id} is not kebab-case`);
-        seen.add(c.id);
-    }
-    return checks;
-}
-/** The check with this id, or undefined. */
-function findCheck(id) {
-    return CHECKS.find((c) => c.id === id);
-}
-function describeLimit(status, limit) {
-    if (status === 'fail')
-        return `over the fail limit ${(0,format/* formatNumber */.Z)(limit.fail)}`;
-    if (status === 'warn')
-        return `over the warning limit ${(0,format/* formatNumber */.Z)(limit.warn)}`;
-    if (limit.off)
-        return 'limit is off';
-    const parts = [];
-    if (limit.warn !== null)
-        parts.push(`warn above ${(0,format/* formatNumber */.Z)(limit.warn)}`);
-    if (limit.fail !== null)
-        parts.push(`fail above ${(0,format/* formatNumber */.Z)(limit.fail)}`);
-    return `within limits (${parts.join(', ')})`;
-}
-/**
- * Runs one check and compares its figure with the model's limit. A check that throws becomes
- * a skipped outcome with code `<id>/internal-error` (the run goes on).
- */
-function runCheck(check, context) {
-    const limit = context.descriptor.limits[check.limitKey];
-    const line = limit?.line ?? null;
-    let measured;
-    try {
-        measured = check.measure(context);
-    }
-    catch (error) {
-        measured = {
-            value: null,
-            reason: 'internal-error',
-            message: `could not be computed: ${error instanceof Error ? error.message : String(error)}`,
-        };
-    }
-    const effective = limit ?? { warn: null, fail: null, off: true, source: 'default', line: null };
-    const status = judge(measured.value, effective);
-    const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
-    const comparison = measured.value === null ? '' : `; ${describeLimit(status, effective)}`;
-    const outcome = {
-        id: check.id,
-        code: `${check.id}/${reason}`,
-        status,
-        value: measured.value === null ? null : (0,result/* jsonNumber */.qj)(measured.value),
-        limitKey: check.limitKey,
-        limit: effective.off ? null : effective.fail,
-        warn: effective.off ? null : effective.warn,
-        line: line ?? measured.line ?? check.line(context.descriptor),
-        message: `${measured.message}${comparison}`,
-        advice: status === 'fail' || status === 'warn' ? check.advice : '',
-        ...(measured.detail ? { detail: measured.detail } : {}),
-        ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
-    };
-    return { outcome, figures: measured.metrics };
-}
-
-
-/***/ }),
-
-/***/ 8706:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   CA: () => (/* binding */ emptyError),
-/* harmony export */   L6: () => (/* binding */ raggedError),
-/* harmony export */   NX: () => (/* binding */ planRequest),
-/* harmony export */   W4: () => (/* binding */ cellNumber),
-/* harmony export */   _I: () => (/* binding */ DEFAULT_CHUNK_ROWS),
-/* harmony export */   fS: () => (/* binding */ DEFAULT_MAX_BYTES),
-/* harmony export */   j7: () => (/* binding */ planColumns),
-/* harmony export */   vB: () => (/* binding */ ChunkBuilder)
-/* harmony export */ });
-/* unused harmony exports DECIMAL_NUMBER, cellError */
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3916);
-/**
- * The rules both CSV paths share, kept in one place so that the fast path and the general
- * path cannot drift apart: what a number cell may look like, how the header is checked,
- * the exact error each problem raises, and how rows are gathered into chunks.
- */
-
-/** Rows per chunk when the caller does not say. */
-const DEFAULT_CHUNK_ROWS = 65536;
-/** Size cap in bytes when the caller does not say (512 MiB). */
-const DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
-/** How many header names an error message lists before cutting the list. */
-const MAX_NAMES_LISTED = 20;
-/** How many characters of a bad cell an error message quotes. */
-const MAX_CELL_QUOTED = 40;
-/**
- * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
- * (empty text, `Infinity`, hexadecimal / binary / octal prefixes): optional sign, digits
- * with an optional point (`1`, `1.`, `.5`, `1.5`), optional exponent (`e-3`, `E+05`).
- * Source: ECMA-262 `StrDecimalLiteral` (section "ToNumber Applied to the String Type").
- */
-const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-/**
- * Collapses repeated names in a column request.
- * @param columns names as the caller gave them
- */
-function planRequest(columns) {
-    const distinct = [];
-    const slotOfColumn = [];
-    for (const name of columns) {
-        let slot = distinct.indexOf(name);
-        if (slot === -1) {
-            slot = distinct.length;
-            distinct.push(name);
-        }
-        slotOfColumn.push(slot);
-    }
-    return { columns, distinct, slotOfColumn };
-}
-/**
- * Checks the header and maps requested columns to fields.
- * Throws InputError `csv-header` for a repeated name (both 1-based positions),
- * `csv-missing-column` for requested names the header lacks (listing up to 20 names it has).
- *
- * @param file repository-relative path, for messages
- * @param header names as read (already trimmed)
- * @param headerLine 1-based line of the header
- * @param request the distinct requested columns
- */
-function planColumns(file, header, headerLine, request) {
-    const position = new Map();
-    header.forEach((name, i) => {
-        const earlier = position.get(name);
-        if (earlier !== undefined) {
-            throw new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-header', `the header names column ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)} twice, at positions ${earlier + 1} and ${i + 1}; expected unique column names`, { file, line: headerLine, key: name });
-        }
-        position.set(name, i);
-    });
-    const missing = request.distinct.filter((name) => !position.has(name));
-    if (missing.length > 0) {
-        const listed = header.slice(0, MAX_NAMES_LISTED).map((name) => (0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED));
-        const more = header.length > MAX_NAMES_LISTED ? `, … (${header.length - MAX_NAMES_LISTED} more)` : '';
-        const wanted = missing.map((name) => (0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)).join(', ');
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-missing-column', `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`, { file, line: headerLine, key: missing[0] });
-    }
-    const slotOfField = new Int32Array(header.length).fill(-1);
-    const fieldOfSlot = new Int32Array(request.distinct.length);
-    request.distinct.forEach((name, slot) => {
-        const field = position.get(name);
-        slotOfField[field] = slot;
-        fieldOfSlot[slot] = field;
-    });
-    return { header, headerLine, slotOfField, fieldOfSlot };
-}
-/**
- * Reads one cell of a requested column as the general path does: trims white space (as
- * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
- * value is finite. Anything else throws InputError `csv-cell`.
- *
- * @param cell the field text (quotes already removed)
- * @param file repository-relative path, for messages
- * @param line 1-based physical line of the row
- * @param column the column's header name
- */
-function cellNumber(cell, file, line, column) {
-    const text = cell.trim();
-    if (DECIMAL_NUMBER.test(text)) {
-        const value = Number(text);
-        if (Number.isFinite(value))
-            return value;
-    }
-    throw cellError(cell, file, line, column);
-}
-/** The `csv-cell` error for a cell that is not a finite decimal number. */
-function cellError(cell, file, line, column) {
-    const text = cell.trim();
-    let why;
-    if (text === '')
-        why = 'the cell is empty';
-    else if (DECIMAL_NUMBER.test(text))
-        why = `got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
-    else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text))
-        why = `got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
-    else
-        why = `got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}`;
-    return new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`, { file, line, key: column });
-}
-/** The `csv-ragged` error for a row whose field count differs from the header's. */
-function raggedError(file, line, expected, actual) {
-    return new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-ragged', `the row has ${actual} field${actual === 1 ? '' : 's'}; expected ${expected}, as many as the header`, { file, line });
-}
-/** The `csv-empty` error for a file without a header row. */
-function emptyError(file) {
-    return new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-empty', 'the file has no header row; expected a first line of comma-separated column names', {
-        file,
-    });
-}
-/** First buffer size of a chunk; buffers double from here up to the chunk size. */
-const FIRST_CAPACITY = 4096;
-/**
- * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
- * Parsers write `slots[s][row]` and `lines[row]` directly, then advance `row`; when `row`
- * reaches `capacity` they call {@link ChunkBuilder.full}, which grows the buffers (doubling)
- * or hands out a chunk, and reload `slots`, `lines`, `row` and `capacity`.
- */
-class ChunkBuilder {
-    request;
-    chunkRows;
-    /** Filled chunks not yet handed out. */
-    ready = [];
-    /** One buffer per distinct requested column, length `capacity`. */
-    slots = [];
-    /** 1-based physical line of each row, length `capacity`. */
-    lines = new Int32Array(0);
-    /** Rows written in the current buffers. */
-    row = 0;
-    /** Rows the current buffers hold. */
-    capacity = 0;
-    /**
-     * @param request the requested columns (a chunk lists them in the asked order)
-     * @param chunkRows rows per chunk
-     */
-    constructor(request, chunkRows) {
-        this.request = request;
-        this.chunkRows = chunkRows;
-        this.fresh();
-    }
-    /** Advances one row (for parsers that do not track `row` themselves). */
-    endRow() {
-        this.row++;
-        if (this.row === this.capacity)
-            this.full();
-    }
-    /** Called when `row === capacity`: hands out a chunk, or doubles the buffers. */
-    full() {
-        if (this.row >= this.chunkRows) {
-            this.flush();
-            return;
-        }
-        const capacity = Math.min(this.chunkRows, this.capacity * 2);
-        this.slots = this.slots.map((old) => {
-            const grown = new Float64Array(capacity);
-            grown.set(old);
-            return grown;
-        });
-        const lines = new Int32Array(capacity);
-        lines.set(this.lines);
-        this.lines = lines;
-        this.capacity = capacity;
-    }
-    /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
-    flush() {
-        const rows = this.row;
-        if (rows === 0)
-            return;
-        const exact = rows === this.capacity;
-        const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
-        const lines = exact ? this.lines : this.lines.slice(0, rows);
-        const chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
-        if (exact)
-            this.#buffersOf.set(chunk, { slots, lines });
-        this.ready.push(chunk);
-        this.fresh();
-    }
-    /**
-     * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
-     * reused for a later chunk (no allocation per chunk when the reader copies each chunk away
-     * before asking for the next). Chunks of another size are ignored.
-     *
-     * @param chunk a chunk from {@link take}; must not be read afterwards
-     */
-    recycle(chunk) {
-        const buffers = this.#buffersOf.get(chunk);
-        if (buffers === undefined)
-            return;
-        this.#buffersOf.delete(chunk);
-        this.#spare.push(buffers);
-    }
-    #buffersOf = new WeakMap();
-    #spare = [];
-    /** Takes the chunks handed out so far. */
-    take() {
-        return this.ready.splice(0, this.ready.length);
-    }
-    /** New buffers, as large as the last ones (a file that filled one chunk likely fills more). */
-    fresh() {
-        if (this.capacity === 0)
-            this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
-        this.row = 0;
-        while (this.#spare.length > 0) {
-            const spare = this.#spare.pop();
-            if (spare.lines.length !== this.capacity)
-                continue;
-            this.slots = spare.slots;
-            this.lines = spare.lines;
-            return;
-        }
-        this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
-        this.lines = new Int32Array(this.capacity);
-    }
-}
-
-
-/***/ }),
-
-/***/ 5383:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   D: () => (/* binding */ lineBlocks),
-/* harmony export */   S: () => (/* binding */ encodingError)
-/* harmony export */ });
-/* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4573);
-/* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_buffer__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3916);
-/**
- * Turns a file's byte pieces (as a {@link RepoReader} streams them, split anywhere) into
- * blocks that end right after a line feed, so that no line and no UTF-8 character is ever
- * split between two blocks. Both CSV paths read through this one door, which also drops a
- * UTF-8 byte-order mark and stops at the first line that is not UTF-8 (the reader, which
- * counts lines, then throws {@link encodingError}).
- */
-
-
-const LF = 10;
-const BOM = [0xef, 0xbb, 0xbf];
-/**
- * Streams `pieces` as blocks of whole lines, checked to be UTF-8.
- *
- * A leading UTF-8 byte-order mark is dropped (line 1 stays line 1). When a line holds bytes
- * that are not UTF-8, the lines before it are still yielded, then a block with `badUtf8`
- * ends the stream: so errors always surface in file order, whatever the piece sizes.
- * An empty file yields nothing. No piece is copied except the line that straddles two pieces.
- *
- * @param pieces the file's bytes in pieces of any size (an empty piece is allowed)
- */
-async function* lineBlocks(pieces) {
-    let pending = [];
-    let pendingBytes = 0;
-    let first = true;
-    /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8). */
-    function* emit(bytes, final) {
-        if (first) {
-            first = false;
-            if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2])
-                bytes = bytes.subarray(3);
-            else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
-                yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
-                return false;
-            }
-        }
-        if (bytes.length === 0)
-            return true;
-        const good = utf8Prefix(bytes);
-        if (good === bytes.length) {
-            yield { bytes, final, badUtf8: false, utf16: false };
-            return true;
-        }
-        if (good > 0)
-            yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, utf16: false };
-        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: false };
-        return false;
-    }
-    for await (const piece of pieces) {
-        if (piece.length === 0)
-            continue;
-        const firstCut = piece.indexOf(LF) + 1;
-        if (firstCut === 0) {
-            pending.push(piece);
-            pendingBytes += piece.length;
-            continue;
-        }
-        // The line that straddles the previous pieces and this one, then this piece's whole lines.
-        const lastCut = piece.lastIndexOf(LF) + 1;
-        if (pendingBytes > 0) {
-            const joined = concat([...pending, piece.subarray(0, firstCut)], pendingBytes + firstCut);
-            if (!(yield* emit(joined, false)))
-                return;
-            if (lastCut > firstCut && !(yield* emit(piece.subarray(firstCut, lastCut), false)))
-                return;
-        }
-        else if (!(yield* emit(piece.subarray(0, lastCut), false)))
-            return;
-        pending = lastCut < piece.length ? [piece.subarray(lastCut)] : [];
-        pendingBytes = piece.length - lastCut;
-    }
-    if (pendingBytes > 0)
-        yield* emit(concat(pending, pendingBytes), true);
-}
-function concat(parts, total) {
-    if (parts.length === 1)
-        return parts[0];
-    const out = new Uint8Array(total);
-    let at = 0;
-    for (const part of parts) {
-        out.set(part, at);
-        at += part.length;
-    }
-    return out;
-}
-/** Length of the longest run of whole UTF-8 lines at the start of `bytes`. */
-function utf8Prefix(bytes) {
-    if ((0,node_buffer__WEBPACK_IMPORTED_MODULE_0__.isUtf8)(bytes))
-        return bytes.length;
-    let start = 0;
-    while (start < bytes.length) {
-        const lf = bytes.indexOf(LF, start);
-        const end = lf === -1 ? bytes.length : lf + 1;
-        if (!(0,node_buffer__WEBPACK_IMPORTED_MODULE_0__.isUtf8)(bytes.subarray(start, end)))
-            break;
-        start = end;
-    }
-    return start;
-}
-/**
- * The `csv-encoding` error for a line that is not UTF-8.
- * @param file repository-relative path
- * @param line 1-based line holding the bad bytes
- * @param utf16 the file starts with a UTF-16 byte-order mark
- */
-function encodingError(file, line, utf16) {
-    const hint = utf16 ? ' (the file looks like UTF-16)' : '';
-    return new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-encoding', `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`, {
-        file,
-        line,
-    });
-}
-
-
-/***/ }),
-
-/***/ 1927:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   x: () => (/* binding */ createDesign)
-/* harmony export */ });
-/* unused harmony export INTERCEPT */
-/** Name of the intercept column. */
-const INTERCEPT = '(intercept)';
-/**
- * Builds a design from fixed terms.
- * @param terms the terms in descriptor order
- * @param intercept whether to put a column of ones first
- */
-function createDesign(terms, intercept) {
-    const inputs = [];
-    for (const t of terms)
-        for (const c of t.inputs)
-            if (!inputs.includes(c))
-                inputs.push(c);
-    const names = intercept ? ['(intercept)'] : [];
-    const offsets = [];
-    for (const t of terms) {
-        offsets.push(names.length);
-        names.push(...t.columnNames);
-    }
-    const p = names.length;
-    const penalised = names.map((_, j) => !(intercept && j === 0));
-    const termInputIndex = terms.map((t) => t.inputs.map((c) => inputs.indexOf(c)));
-    return {
-        p,
-        columnNames: names,
-        penalised,
-        termOffsets: offsets,
-        intercept,
-        terms,
-        inputs,
-        fill(cols, start, m, out = new Float64Array(m * p)) {
-            if (intercept)
-                out.fill(1, 0, m);
-            const views = cols.map((c) => c.subarray(start, start + m));
-            for (let t = 0; t < terms.length; t++) {
-                terms[t].fill(termInputIndex[t].map((k) => views[k]), m, out, offsets[t]);
-            }
-            return out;
-        },
-    };
-}
-
-
-/***/ }),
-
-/***/ 8455:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   I: () => (/* binding */ selectKth),
-/* harmony export */   z: () => (/* binding */ columnMedian)
-/* harmony export */ });
-/* harmony import */ var _basis_stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6029);
-/**
- * Medians of training columns, computed once per column and shared by every reader (swing,
- * charts): selection on a scratch copy, remembered per column array.
- */
-
-const remembered = new WeakMap();
-/**
- * Median of the first n values of a column: the middle value, or the mean of the two middle
- * values when n is even; NaN when n = 0. Remembered per column array (and n), so a second
- * reader gets it for free. The column is not modified.
- *
- * @param values the column (length >= n)
- * @param n rows to take
- * @param scratch optional work array of length >= n (default: a new one)
- */
-function columnMedian(values, n, scratch) {
-    const known = remembered.get(values);
-    if (known !== undefined && known.n === n)
-        return known.median;
-    let median = Number.NaN;
-    if (n > 0) {
-        const s = scratch !== undefined && scratch.length >= n ? scratch.subarray(0, n) : new Float64Array(n);
-        median = (n >= BRACKET_MIN_ROWS ? bracketedMedian(values, n, s) : null) ?? selectedMedian(values, n, s);
-    }
-    remembered.set(values, { n, median });
-    return median;
-}
-/** Columns of at least this many rows try {@link bracketedMedian} first. */
-const BRACKET_MIN_ROWS = 16384;
-/** Rows in the bracketing sample. */
-const BRACKET_SAMPLE = 2048;
-/** Sample ranks on each side of the sample's middle that bound the bracket (about 9 standard deviations of the middle's rank). */
-const BRACKET_HALF_WIDTH = 200;
-/** The median by selection on a copy of all n values (in `work`, length >= n). */
-function selectedMedian(values, n, work) {
-    const s = work.subarray(0, n);
-    s.set(values.subarray(0, n));
-    return middleOf(s, n, n >> 1);
-}
-/**
- * The median of a[0..m) given that the wanted middle ranks are `upper` (and `upper - 1` when n is
- * even) of the whole column, counted from a's first value: selection on a.
- */
-function middleOf(a, n, upper) {
-    const value = selectKth(a, upper);
-    if (n % 2 === 1)
-        return value;
-    // The lower middle is the largest value left of the upper middle after selection.
-    return ((0,_basis_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .largest */ .nQ)(a, upper) + value) / 2;
-}
-/**
- * The exact median in one pass over the column and a selection among a tenth of it: the middle
- * ranks are bracketed by two values of a sorted even-stride sample, the pass counts the values
- * below the bracket and gathers those inside it, and the middle is selected among those (the
- * sampling step of Floyd & Rivest, "Expected time bounds for selection", Communications of the ACM
- * 18(3), 1975). Returns null when the bracket misses a middle rank or holds too many values (the
- * caller then selects among all of them), so the result is always the exact median.
- */
-function bracketedMedian(values, n, work) {
-    const sample = new Float64Array(BRACKET_SAMPLE);
-    for (let t = 0; t < BRACKET_SAMPLE; t++)
-        sample[t] = values[Math.floor((t * n) / BRACKET_SAMPLE)];
-    sample.sort();
-    const lo = sample[BRACKET_SAMPLE / 2 - BRACKET_HALF_WIDTH];
-    const hi = sample[BRACKET_SAMPLE / 2 + BRACKET_HALF_WIDTH];
-    const inside = gatherBracket(values, n, lo, hi, work, Math.min(n, work.length));
-    if (inside < 0)
-        return null;
-    const below = countBelow(values, n, lo);
-    const upper = n >> 1;
-    const lower = n % 2 === 1 ? upper : upper - 1;
-    // Both middle ranks must fall among the gathered values.
-    if (lower < below || upper >= below + inside)
-        return null;
-    return middleOf(work.subarray(0, inside), n, upper - below);
-}
-// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
-/**
- * One pass: copies the values in [lo, hi] to `out` (in column order) and returns how many; -1 when
- * more than `capacity` values fall in the bracket.
- */
-function gatherBracket(values, n, lo, hi, out, capacity) {
-    let inside = 0;
-    for (let i = 0; i < n; i++) {
-        const v = values[i];
-        if (v >= lo && v <= hi) {
-            if (inside === capacity)
-                return -1;
-            out[inside++] = v;
-        }
-    }
-    return inside;
-}
-/** Values below `lo` among values[0..n). */
-function countBelow(values, n, lo) {
-    let below = 0;
-    for (let i = 0; i < n; i++)
-        if (values[i] < lo)
-            below++;
-    return below;
-}
-/**
- * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
- * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
- *
- * @param a values (reordered in place)
- * @param k rank, 0 <= k < a.length
- */
-function selectKth(a, k) {
-    let lo = 0;
-    let hi = a.length - 1;
-    while (hi > lo) {
-        const mid = (lo + hi) >> 1;
-        let x = a[lo];
-        let y = a[mid];
-        let z = a[hi];
-        // Sort the three with plain swaps (no array literals: see DEVELOPERS.md, "Writing hot loops").
-        let t;
-        if (x > y) {
-            t = x;
-            x = y;
-            y = t;
-        }
-        if (y > z) {
-            t = y;
-            y = z;
-            z = t;
-        }
-        if (x > y) {
-            t = x;
-            x = y;
-            y = t;
-        }
-        const pivot = y;
-        let i = lo;
-        let j = hi;
-        while (i <= j) {
-            while (a[i] < pivot)
-                i++;
-            while (a[j] > pivot)
-                j--;
-            if (i <= j) {
-                const t = a[i];
-                a[i] = a[j];
-                a[j] = t;
-                i++;
-                j--;
-            }
-        }
-        if (k <= j)
-            hi = j;
-        else if (k >= i)
-            lo = i;
-        else
-            return a[k];
-    }
-    return a[k];
-}
-
-
-/***/ }),
-
-/***/ 7070:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  j6: () => (/* binding */ sweepComplexity),
-  mb: () => (/* binding */ sweepTarget)
-});
-
-// UNUSED EXPORTS: SWEEP_MAX_ROWS, oneStandardErrorRule
-
-// EXTERNAL MODULE: ./src/basis/index.ts + 3 modules
-var basis = __nccwpck_require__(2578);
-// EXTERNAL MODULE: ./src/design-matrix.ts
-var design_matrix = __nccwpck_require__(1927);
+// EXTERNAL MODULE: ./src/design/terms/index.ts + 3 modules
+var design_terms = __nccwpck_require__(7482);
+// EXTERNAL MODULE: ./src/design/design-matrix.ts
+var design_matrix = __nccwpck_require__(6566);
 // EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
 var fit = __nccwpck_require__(2485);
 // EXTERNAL MODULE: ./src/fit/svd.ts
@@ -31630,7 +30262,7 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
         }
         for (const { value, current } of settings) {
             const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
-            const terms = design.terms.map((t, i) => (i === target.term ? (0,basis/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
+            const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
             const d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
             const label = `${target.kind} ${formatSetting(value)}`;
             try {
@@ -31661,6 +30293,1404 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
     };
 }
 
+// EXTERNAL MODULE: ./src/core/json.ts
+var json = __nccwpck_require__(6153);
+;// CONCATENATED MODULE: ./src/checks/complexity.ts
+
+
+
+
+const complexity_check = {
+    id: 'complexity',
+    title: 'Simpler setting',
+    limitKey: 'complexity',
+    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. A ridge sweep uses every training row; above 50,000 training rows a degree or width sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
+    advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
+    line: (d) => d.fit.line,
+    measure(context) {
+        const { descriptor, design, train, fit } = context;
+        const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
+        if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
+            return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
+        }
+        const chosen = sweep.curve[sweep.chosen];
+        const current = sweep.curve[sweep.current];
+        const best = sweep.curve[sweep.best];
+        const value = chosen.cvRmse > 0 ? current.cvRmse / chosen.cvRmse : current.cvRmse === 0 ? 1 : Infinity;
+        const detail = (0,json/* jsonRecord */.eJ)({
+            setting: sweep.kind,
+            folds: sweep.folds,
+            rows: sweep.rows,
+            subsampled: sweep.subsampled,
+            rule: 'one-standard-error',
+            chosen: sweep.chosen,
+            best: sweep.best,
+            current: sweep.current,
+            curve: sweep.curve.map((c) => ({ setting: c.setting, label: c.label, parameters: c.parameters, cv_rmse: c.cvRmse, mean_mse: c.meanMse, se_mse: c.seMse, current: c.current, ...(c.failed ? { failed: c.failed } : {}) })),
+        });
+        const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
+        if (sweep.chosen === sweep.current) {
+            return {
+                value,
+                message: `${current.label} is the simplest setting within one standard error of the best cross-validation error (${sweep.curve.length} settings swept${sub})`,
+                line: sweep.line,
+                metrics: { suggested_setting: current.label },
+                detail,
+            };
+        }
+        return {
+            value,
+            message: `${chosen.label} has k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} for the current ${current.label}; it is the simplest of ${sweep.curve.length} settings within one standard error of the best (${best.label}, ${(0,format/* formatNumber */.Z)(best.cvRmse)})${sub}`,
+            line: sweep.line,
+            metrics: { suggested_setting: chosen.label, suggested_cv_rmse: (0,result/* jsonNumber */.qj)(chosen.cvRmse) },
+            detail,
+            suggestion: { text: `${chosen.label} (k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} now)`, line: sweep.line },
+        };
+    },
+};
+/* harmony default export */ const complexity = (complexity_check);
+
+;// CONCATENATED MODULE: ./src/checks/conditioning.ts
+
+
+const conditioning_check = {
+    id: 'conditioning',
+    title: 'Conditioning of the design',
+    limitKey: 'condition',
+    description: '2-norm condition number s_max / s_min of the design with every column scaled to unit length, from the singular values of the triangular factor R of its QR factorisation (Golub & Van Loan, Matrix Computations, 4th ed., 2013, sections 2.6 and 5.3; column scaling as in van der Sluis 1969, Numerische Mathematik 14). Infinite when the design is rank deficient. A large value means some columns are nearly linear combinations of others, so their coefficients are poorly determined; the message names the columns that take part in the most nearly collinear combination (weight |v_j| >= 0.1 in the right singular vector of the smallest singular value) and points at the first of their terms. Default: warn above 1e8 (common practice).',
+    advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
+    line: (d) => d.termsLine,
+    measure({ fit, design, descriptor }) {
+        const value = fit.conditionNumberScaled;
+        const columns = fit.collinearColumns.map((j) => design.columnNames[j]);
+        // Term of each collinear column (the intercept belongs to the `fit` block).
+        const termOf = (j) => {
+            let t = -1;
+            design.termOffsets.forEach((offset, i) => {
+                if (j >= offset && design.terms[i].columnNames.length > 0)
+                    t = i;
+            });
+            return t;
+        };
+        const terms = [...new Set(fit.collinearColumns.map(termOf).filter((t) => t >= 0))];
+        const line = terms.length > 0 ? design.terms[terms[0]].spec.line : descriptor.fit.line;
+        const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
+        return {
+            value,
+            message: `the column-scaled design has condition number ${(0,format/* formatNumber */.Z)(value)} (rank ${fit.rank} of ${design.p})${value > 1e3 ? named : ''}`,
+            line,
+            metrics: { condition_number_scaled: (0,result/* jsonNumber */.qj)(value) },
+            detail: { collinear_columns: columns, collinear_term_lines: terms.map((t) => design.terms[t].spec.line), rank: fit.rank, singular_values_scaled: Array.from(fit.singularValuesScaled, result/* jsonNumber */.qj) },
+        };
+    },
+};
+/* harmony default export */ const conditioning = (conditioning_check);
+
+// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
+var regression_metrics = __nccwpck_require__(155);
+;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
+
+
+
+const cross_validation_check = {
+    id: 'cross-validation',
+    title: 'Cross-validation',
+    limitKey: 'cv_ratio',
+    description: 'k-fold cross-validation RMSE divided by training RMSE. The rows are split into k folds (`fit.folds`, default 5; `fit.fold_order: shuffled` from `fit.seed`, the default, or `blocks`: contiguous blocks in file order, the first n mod k folds one row longer); each fold is predicted by the fit on the other folds with the same ridge penalty, and cv_rmse = sqrt(sum of all squared out-of-fold errors / n) (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10). Also reported: leave-one-out RMSE sqrt(mean((e_i / (1 - h_ii))^2)) from the PRESS residuals (Allen 1974, Technometrics 16(1)), with h_ii the leverages (infinite when a row has leverage 1), generalised cross-validation GCV = mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979, Technometrics 21(2)), and the effective degrees of freedom df = trace of the hat matrix = sum of the leverages, sum_j d_j^2 / (d_j^2 + lambda) for ridge (ESL eq. 3.50). Infinite when the training RMSE is 0 and the CV RMSE is not.',
+    advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
+    line: (d) => d.fit.line,
+    measure(context) {
+        const folds = context.analyses.folds();
+        const cv = context.analyses.crossValidation();
+        const { metrics, train, design } = context;
+        const effectiveDf = cv.effectiveDf;
+        const figures = {
+            loocv_rmse: cv.loocvRmse,
+            gcv: cv.gcv,
+            effective_df: effectiveDf,
+            effective_df_per_sample: effectiveDf / train.rows,
+            cv_folds: cv.k,
+        };
+        const detail = {
+            folds: cv.k,
+            fold_order: folds.order,
+            seed: folds.seed,
+            fold_rows: cv.foldSizes,
+            fold_rmse: cv.foldRmse,
+            cv_rmse: cv.cvRmse,
+            loocv_rmse: cv.loocvRmse,
+            press: cv.press,
+            gcv: cv.gcv,
+            effective_df: effectiveDf,
+            parameters: design.p,
+            max_leverage: cv.maxLeverage,
+            rows_with_leverage_one: cv.rowsWithLeverageOne,
+        };
+        if (cv.k < 2) {
+            return {
+                value: null,
+                reason: 'too-few-rows',
+                message: `cross-validation needs at least 2 training rows, got ${train.rows}`,
+                metrics: (0,json/* jsonMetrics */.Gc)(figures),
+                detail: (0,json/* jsonRecord */.eJ)(detail),
+            };
+        }
+        const ratio = (0,regression_metrics/* gapRatio */.yr)(metrics.trainRmse, cv.cvRmse);
+        const loo = cv.rowsWithLeverageOne > 0 ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)` : (0,format/* formatNumber */.Z)(cv.loocvRmse);
+        return {
+            value: ratio,
+            message: `${cv.k}-fold CV RMSE ${(0,format/* formatNumber */.Z)(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${(0,format/* formatNumber */.Z)(ratio)} times the training RMSE ${(0,format/* formatNumber */.Z)(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${(0,format/* formatNumber */.Z)(cv.gcv)}, effective degrees of freedom ${(0,format/* formatNumber */.Z)(effectiveDf)} of ${design.p} parameters`,
+            metrics: (0,json/* jsonMetrics */.Gc)({ cv_rmse: cv.cvRmse, ...figures }),
+            detail: (0,json/* jsonRecord */.eJ)(detail),
+        };
+    },
+};
+/* harmony default export */ const checks_cross_validation = (cross_validation_check);
+
+;// CONCATENATED MODULE: ./src/checks/leakage.ts
+const leakage_check = {
+    id: 'leakage',
+    title: 'Hold-out rows in the training data',
+    limitKey: 'leakage',
+    description: "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
+    advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
+    line: (d) => d.data.lines.holdout,
+    measure(context) {
+        const { holdout, train, design } = context;
+        if (design.inputs.length === 0) {
+            return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
+        }
+        const leak = context.analyses.leakage();
+        const metrics = { leaked_rows: leak.fullMatches, holdout_rows_in_training: leak.inputMatches };
+        const detail = {
+            columns: [...design.inputs],
+            holdout_rows: leak.holdoutRows,
+            input_matches: leak.inputMatches,
+            target_matches: leak.fullMatches,
+            holdout_lines: leak.holdoutLines,
+            train_lines: leak.trainLines,
+            holdout_file: holdout.file,
+            train_file: train.file,
+        };
+        if (leak.inputMatches === 0) {
+            return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.join(', ')}`, metrics, detail };
+        }
+        const lines = (file, ls) => `${file} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+        const target = leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
+        return {
+            value: leak.inputMatches,
+            message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
+            metrics,
+            detail,
+        };
+    },
+};
+/* harmony default export */ const leakage = (leakage_check);
+
+;// CONCATENATED MODULE: ./src/checks/reproducibility.ts
+
+
+
+const reproducibility_check = {
+    id: 'reproducibility',
+    title: 'Shipped coefficients against the refit',
+    limitKey: 'reproducibility',
+    description: "Largest absolute difference between the predictions of the descriptor's shipped `coefficients` and of the refit on the hold-out rows, divided by the range (max - min) of the training target: max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y). Shows that the shipped model no longer follows from the committed data and terms. The detail also compares the shipped model's hold-out RMSE with the refit's. Skipped when the descriptor has no `coefficients`. Default limit 0.01 (1 % of the target's range).",
+    advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
+    line: (d) => d.coefficientsLine ?? d.nameLine,
+    measure({ shipped, predictions, holdout, metrics }) {
+        if (shipped === null)
+            return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
+        const ps = shipped.holdoutPredictions;
+        const pr = predictions.holdout;
+        let diff = 0;
+        let row = -1;
+        for (let i = 0; i < holdout.rows; i++) {
+            const d = Math.abs(ps[i] - pr[i]);
+            if (d > diff || Number.isNaN(d)) {
+                diff = d;
+                row = i;
+            }
+        }
+        const [lo, hi] = metrics.targetRange;
+        const spread = hi - lo;
+        const value = spread > 0 ? diff / spread : diff === 0 ? 0 : Infinity;
+        const shippedRmse = shipped.holdout.rmse;
+        const coefDiff = shipped.maxCoefficientDifference;
+        return {
+            value,
+            message: `shipped and refit predictions differ by up to ${(0,format/* formatNumber */.Z)(diff)} on the hold-out rows (${(0,format/* formatNumber */.Z)(value * 100)} % of the training target's range ${(0,format/* formatNumber */.Z)(spread)}${row >= 0 ? `, ${holdout.file} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${(0,format/* formatNumber */.Z)(shippedRmse)}, refit ${(0,format/* formatNumber */.Z)(metrics.holdoutRmse)}`,
+            metrics: { shipped_prediction_difference: (0,result/* jsonNumber */.qj)(value) },
+            detail: (0,json/* jsonRecord */.eJ)({
+                max_prediction_difference: diff,
+                target_range: spread,
+                at_line: row >= 0 ? holdout.lines[row] : null,
+                shipped_holdout_rmse: shippedRmse,
+                refit_holdout_rmse: metrics.holdoutRmse,
+                holdout_rmse_ratio: shippedRmse / metrics.holdoutRmse,
+                max_coefficient_difference: coefDiff,
+            }),
+        };
+    },
+};
+/* harmony default export */ const reproducibility = (reproducibility_check);
+
+;// CONCATENATED MODULE: ./src/checks/swing.ts
+
+
+
+/** Describes a point's inputs for a message, e.g. `depth_m = 5.1`. */
+function describePoint(point) {
+    if (point === null)
+        return '';
+    return Object.entries(point.inputs)
+        .map(([name, v]) => `${name} = ${(0,format/* formatNumber */.Z)(v)}`)
+        .join(', ');
+}
+/** The chart data every swing outcome carries (see the README for its shape). */
+function swingDetail(swing) {
+    return (0,json/* jsonRecord */.eJ)({
+        band: swing.band,
+        inside: swing.inside,
+        beyond: swing.beyond,
+        margin: swing.margin,
+        points: swing.points,
+        worst_inside: swing.worstInside,
+        worst_beyond: swing.worstBeyond,
+        segments: swing.segments,
+        curves: swing.curves,
+    });
+}
+/** Line of the first term that reads this input, else the terms line. */
+function inputLine(context, point) {
+    if (point === null)
+        return undefined;
+    const names = Object.keys(point.inputs);
+    const term = context.design.terms.find((t) => t.inputs.some((c) => names.length === 1 && c === names[0]));
+    return term?.spec.line;
+}
+const swing_check = {
+    id: 'swing',
+    title: 'Swing between samples',
+    limitKey: 'swing',
+    description: 'How far the predictions between the training samples leave the band [min y, max y] of the training targets, in units of the band width: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y) over a dense grid. One input: 201 evenly spaced points across the training range plus 8 points inside every gap between neighbouring distinct values (the widest 4,000 gaps when there are more; above 20,000 rows the gaps of 20,000 rows at an even stride plus the extremes). Several inputs: the same grid along each input with the others at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 / inputs) gaps of each input), plus 8 points on each segment between a training row and its 3 nearest neighbours (Euclidean distance on inputs divided by their standard deviations; at most 1,000 rows, an even stride through the file). A model that interpolates its samples with a high-degree polynomial or narrow radial bumps swings far outside the band between them (Runge phenomenon: Runge 1901, Zeitschrift für Mathematik und Physik 46). 0 when every prediction stays inside the band.',
+    advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
+    line: (d) => d.termsLine,
+    measure(context) {
+        const swing = context.analyses.swing();
+        if (Number.isNaN(swing.inside)) {
+            return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is nothing between samples to scan', detail: swingDetail(swing) };
+        }
+        const where = describePoint(swing.worstInside);
+        return {
+            value: swing.inside,
+            message: swing.inside > 0
+                ? `between the samples the predictions leave the training target band [${(0,format/* formatNumber */.Z)(swing.band[0])}, ${(0,format/* formatNumber */.Z)(swing.band[1])}] by ${(0,format/* formatNumber */.Z)(swing.inside)} band widths (prediction ${(0,format/* formatNumber */.Z)(swing.worstInside?.prediction)} at ${where}; ${swing.points.inside} points scanned)`
+                : `the predictions stay inside the training target band [${(0,format/* formatNumber */.Z)(swing.band[0])}, ${(0,format/* formatNumber */.Z)(swing.band[1])}] at ${swing.points.inside} points between the samples`,
+            line: inputLine(context, swing.worstInside),
+            metrics: { swing: (0,result/* jsonNumber */.qj)(swing.inside) },
+            detail: swingDetail(swing),
+        };
+    },
+};
+/* harmony default export */ const swing = (swing_check);
+
+;// CONCATENATED MODULE: ./src/checks/swing-beyond.ts
+
+
+
+const swing_beyond_check = {
+    id: 'swing-beyond',
+    title: 'Swing beyond the samples',
+    limitKey: 'swing_beyond',
+    description: 'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; by default it only warns (above 1 band width). The chart data are in the `swing` outcome.',
+    advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
+    line: (d) => d.termsLine,
+    measure(context) {
+        const swing = context.analyses.swing();
+        if (Number.isNaN(swing.beyond)) {
+            return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is no range to step beyond' };
+        }
+        const where = describePoint(swing.worstBeyond);
+        return {
+            value: swing.beyond,
+            message: swing.beyond > 0
+                ? `within ${(0,format/* formatNumber */.Z)(swing.margin * 100)} % of the range beyond the samples the predictions leave the training target band [${(0,format/* formatNumber */.Z)(swing.band[0])}, ${(0,format/* formatNumber */.Z)(swing.band[1])}] by ${(0,format/* formatNumber */.Z)(swing.beyond)} band widths (prediction ${(0,format/* formatNumber */.Z)(swing.worstBeyond?.prediction)} at ${where})`
+                : `within ${(0,format/* formatNumber */.Z)(swing.margin * 100)} % of the range beyond the samples the predictions stay inside the training target band`,
+            line: inputLine(context, swing.worstBeyond),
+            metrics: { swing_beyond: (0,result/* jsonNumber */.qj)(swing.beyond) },
+            detail: { margin: swing.margin, points: swing.points.beyond, worst: swing.worstBeyond === null ? null : { inputs: swing.worstBeyond.inputs, prediction: (0,result/* jsonNumber */.qj)(swing.worstBeyond.prediction) } },
+        };
+    },
+};
+/* harmony default export */ const swing_beyond = (swing_beyond_check);
+
+;// CONCATENATED MODULE: ./src/checks/types.ts
+/** Compares a figure with a limit: above `fail` fails, above `warn` warns; NaN passes as skipped. */
+function judge(value, limit) {
+    if (limit.off || value === null || Number.isNaN(value))
+        return 'skipped';
+    if (limit.fail !== null && value > limit.fail)
+        return 'fail';
+    if (limit.warn !== null && value > limit.warn)
+        return 'warn';
+    return 'pass';
+}
+
+;// CONCATENATED MODULE: ./src/checks/index.ts
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/** Every check, in report order. Ids are unique (checked on load). */
+const CHECKS = validate([
+    generalisation_gap,
+    parameter_ratio,
+    coefficient_size,
+    base_change,
+    checks_cross_validation,
+    swing,
+    swing_beyond,
+    leakage,
+    reproducibility,
+    conditioning,
+    complexity,
+]);
+function validate(checks) {
+    const seen = new Set();
+    for (const c of checks) {
+        if (seen.has(c.id))
+            throw new Error(`duplicate check id ${c.id}`);
+        if (!/^[a-z][a-z0-9-]*$/.test(c.id))
+            throw new Error(`check id ${c.id} is not kebab-case`);
+        seen.add(c.id);
+    }
+    return checks;
+}
+/** The check with this id, or undefined. */
+function findCheck(id) {
+    return CHECKS.find((c) => c.id === id);
+}
+function describeLimit(status, limit) {
+    if (status === 'fail')
+        return `over the fail limit ${(0,format/* formatNumber */.Z)(limit.fail)}`;
+    if (status === 'warn')
+        return `over the warning limit ${(0,format/* formatNumber */.Z)(limit.warn)}`;
+    if (limit.off)
+        return 'limit is off';
+    const parts = [];
+    if (limit.warn !== null)
+        parts.push(`warn above ${(0,format/* formatNumber */.Z)(limit.warn)}`);
+    if (limit.fail !== null)
+        parts.push(`fail above ${(0,format/* formatNumber */.Z)(limit.fail)}`);
+    return `within limits (${parts.join(', ')})`;
+}
+/**
+ * Runs one check and compares its figure with the model's limit. A check that throws becomes
+ * a skipped outcome with code `<id>/internal-error` (the run goes on).
+ */
+function runCheck(check, context) {
+    const limit = context.descriptor.limits[check.limitKey];
+    const line = limit?.line ?? null;
+    let measured;
+    try {
+        measured = check.measure(context);
+    }
+    catch (error) {
+        measured = {
+            value: null,
+            reason: 'internal-error',
+            message: `could not be computed: ${error instanceof Error ? error.message : String(error)}`,
+        };
+    }
+    const effective = limit ?? { warn: null, fail: null, off: true, source: 'default', line: null };
+    const status = judge(measured.value, effective);
+    const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
+    const comparison = measured.value === null ? '' : `; ${describeLimit(status, effective)}`;
+    const outcome = {
+        id: check.id,
+        code: `${check.id}/${reason}`,
+        status,
+        value: measured.value === null ? null : (0,result/* jsonNumber */.qj)(measured.value),
+        limitKey: check.limitKey,
+        limit: effective.off ? null : effective.fail,
+        warn: effective.off ? null : effective.warn,
+        line: line ?? measured.line ?? check.line(context.descriptor),
+        message: `${measured.message}${comparison}`,
+        advice: status === 'fail' || status === 'warn' ? check.advice : '',
+        ...(measured.detail ? { detail: measured.detail } : {}),
+        ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
+    };
+    return { outcome, figures: measured.metrics };
+}
+
+
+/***/ }),
+
+/***/ 4296:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   cl: () => (/* binding */ quoteValue),
+/* harmony export */   dz: () => (/* binding */ InputError),
+/* harmony export */   gJ: () => (/* binding */ errorMessage)
+/* harmony export */ });
+/**
+ * Errors that stop a run (exit status 2) as opposed to check findings (exit status 1).
+ *
+ * Every problem with the user's files is an {@link InputError}: it carries the file
+ * (repository-relative), the 1-based line and column where known, the key path inside a
+ * YAML document, the offending value and what was expected, so that the CLI and the action
+ * can print one line that says exactly what to fix.
+ */
+/** A problem with the user's settings, descriptor, data or arguments: exit status 2. */
+class InputError extends Error {
+    name = 'InputError';
+    /** Where the problem is. */
+    location;
+    /** Stable machine-readable code, e.g. `yaml-syntax`, `schema`, `csv-cell`, `path-outside`. */
+    code;
+    /**
+     * @param code stable id of the kind of problem
+     * @param message what is wrong and what was expected (without the location prefix)
+     * @param location file, line, column and key where known
+     */
+    constructor(code, message, location = {}) {
+        super(message);
+        this.code = code;
+        this.location = location;
+    }
+    /** `file:line:column: key: message`, leaving out the parts that are unknown. */
+    describe() {
+        const { file, line, column, key } = this.location;
+        let where = file ?? '';
+        if (file !== undefined && line !== undefined)
+            where += `:${line}`;
+        if (file !== undefined && line !== undefined && column !== undefined)
+            where += `:${column}`;
+        const parts = [where, key !== undefined ? `\`${key}\`` : ''].filter((s) => s !== '');
+        return parts.length > 0 ? `${parts.join(': ')}: ${this.message}` : this.message;
+    }
+}
+/** Turns anything thrown into one line of text (no stack). */
+function errorMessage(error) {
+    if (error instanceof InputError)
+        return error.describe();
+    if (error instanceof Error)
+        return error.message;
+    return String(error);
+}
+/** Quotes a user value for an error message, cut to `max` characters (default 80). */
+function quoteValue(value, max = 80) {
+    let text;
+    if (typeof value === 'string')
+        text = JSON.stringify(value);
+    else if (value === undefined)
+        text = 'nothing';
+    else {
+        try {
+            text = JSON.stringify(value) ?? String(value);
+        }
+        catch {
+            text = String(value);
+        }
+    }
+    return text.length > max ? `${text.slice(0, max - 1)}…` : text;
+}
+
+
+/***/ }),
+
+/***/ 6228:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Z: () => (/* binding */ formatNumber)
+/* harmony export */ });
+/**
+ * Number formatting shared by check messages and reporters.
+ */
+/**
+ * Formats a figure for people: 4 significant digits (whole numbers from 1e4 to 1e6 are rounded to
+ * an integer), exponent form below 1e-3 and from 1e6,
+ * `∞`/`-∞` for infinities and `NaN` for NaN. `null` gives `–`.
+ */
+function formatNumber(x, digits = 4) {
+    if (x === null || x === undefined)
+        return '–';
+    if (Number.isNaN(x))
+        return 'NaN';
+    if (x === Infinity)
+        return '∞';
+    if (x === -Infinity)
+        return '-∞';
+    if (x === 0)
+        return '0';
+    const a = Math.abs(x);
+    if (a < 1e-3 || a >= 1e6)
+        return x.toExponential(digits - 1).replace(/\.?0+e/, 'e').replace('e+', 'e');
+    if (a >= 10 ** digits)
+        return String(Math.round(x));
+    const text = x.toPrecision(digits);
+    return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
+}
+
+
+/***/ }),
+
+/***/ 6153:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Gc: () => (/* binding */ jsonMetrics),
+/* harmony export */   M: () => (/* binding */ fromJsonNumber),
+/* harmony export */   eJ: () => (/* binding */ jsonRecord),
+/* harmony export */   qj: () => (/* binding */ jsonNumber)
+/* harmony export */ });
+/* unused harmony export jsonSafe */
+/**
+ * Makes diagnostic figures safe for the JSON report: non-finite numbers become the strings of
+ * {@link jsonNumber}, typed arrays become plain arrays, nested objects and arrays are converted.
+ */
+/** Converts a number for the JSON report (JSON has no infinity or NaN). */
+function jsonNumber(x) {
+    if (Number.isFinite(x))
+        return x;
+    if (Number.isNaN(x))
+        return 'NaN';
+    return x > 0 ? 'Infinity' : '-Infinity';
+}
+/** Reads a {@link JsonNumber} back into a number. */
+function fromJsonNumber(x) {
+    if (x === null || x === undefined)
+        return Number.NaN;
+    if (typeof x === 'number')
+        return x;
+    return x === 'Infinity' ? Infinity : x === '-Infinity' ? -Infinity : Number.NaN;
+}
+/**
+ * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
+ * `undefined` fields dropped).
+ *
+ * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
+ */
+function jsonSafe(value) {
+    if (typeof value === 'number')
+        return jsonNumber(value);
+    if (typeof value === 'string' || typeof value === 'boolean' || value === null)
+        return value;
+    if (ArrayBuffer.isView(value) && !(value instanceof DataView))
+        return Array.from(value, jsonNumber);
+    if (Array.isArray(value))
+        return value.map(jsonSafe);
+    if (typeof value === 'object' && value !== undefined) {
+        const out = {};
+        for (const [k, v] of Object.entries(value))
+            if (v !== undefined)
+                out[k] = jsonSafe(v);
+        return out;
+    }
+    return null;
+}
+/** {@link jsonSafe} for a record of figures (model metrics or check detail). */
+function jsonRecord(record) {
+    return jsonSafe(record);
+}
+/** Model metrics: numbers through `jsonNumber` (flat record). */
+function jsonMetrics(record) {
+    const out = {};
+    for (const [k, v] of Object.entries(record))
+        out[k] = typeof v === 'number' ? jsonNumber(v) : v;
+    return out;
+}
+
+
+/***/ }),
+
+/***/ 8706:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   CA: () => (/* binding */ emptyError),
+/* harmony export */   L6: () => (/* binding */ raggedError),
+/* harmony export */   NX: () => (/* binding */ planRequest),
+/* harmony export */   W4: () => (/* binding */ cellNumber),
+/* harmony export */   _I: () => (/* binding */ DEFAULT_CHUNK_ROWS),
+/* harmony export */   fS: () => (/* binding */ DEFAULT_MAX_BYTES),
+/* harmony export */   j7: () => (/* binding */ planColumns),
+/* harmony export */   vB: () => (/* binding */ ChunkBuilder)
+/* harmony export */ });
+/* unused harmony exports DECIMAL_NUMBER, cellError */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/**
+ * The rules both CSV paths share, kept in one place so that the fast path and the general
+ * path cannot drift apart: what a number cell may look like, how the header is checked,
+ * the exact error each problem raises, and how rows are gathered into chunks.
+ */
+
+/** Rows per chunk when the caller does not say. */
+const DEFAULT_CHUNK_ROWS = 65536;
+/** Size cap in bytes when the caller does not say (512 MiB). */
+const DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
+/** How many header names an error message lists before cutting the list. */
+const MAX_NAMES_LISTED = 20;
+/** How many characters of a bad cell an error message quotes. */
+const MAX_CELL_QUOTED = 40;
+/**
+ * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
+ * (empty text, `Infinity`, hexadecimal / binary / octal prefixes): optional sign, digits
+ * with an optional point (`1`, `1.`, `.5`, `1.5`), optional exponent (`e-3`, `E+05`).
+ * Source: ECMA-262 `StrDecimalLiteral` (section "ToNumber Applied to the String Type").
+ */
+const DECIMAL_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+/**
+ * Collapses repeated names in a column request.
+ * @param columns names as the caller gave them
+ */
+function planRequest(columns) {
+    const distinct = [];
+    const slotOfColumn = [];
+    for (const name of columns) {
+        let slot = distinct.indexOf(name);
+        if (slot === -1) {
+            slot = distinct.length;
+            distinct.push(name);
+        }
+        slotOfColumn.push(slot);
+    }
+    return { columns, distinct, slotOfColumn };
+}
+/**
+ * Checks the header and maps requested columns to fields.
+ * Throws InputError `csv-header` for a repeated name (both 1-based positions),
+ * `csv-missing-column` for requested names the header lacks (listing up to 20 names it has).
+ *
+ * @param file repository-relative path, for messages
+ * @param header names as read (already trimmed)
+ * @param headerLine 1-based line of the header
+ * @param request the distinct requested columns
+ */
+function planColumns(file, header, headerLine, request) {
+    const position = new Map();
+    header.forEach((name, i) => {
+        const earlier = position.get(name);
+        if (earlier !== undefined) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-header', `the header names column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)} twice, at positions ${earlier + 1} and ${i + 1}; expected unique column names`, { file, line: headerLine, key: name });
+        }
+        position.set(name, i);
+    });
+    const missing = request.distinct.filter((name) => !position.has(name));
+    if (missing.length > 0) {
+        const listed = header.slice(0, MAX_NAMES_LISTED).map((name) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED));
+        const more = header.length > MAX_NAMES_LISTED ? `, … (${header.length - MAX_NAMES_LISTED} more)` : '';
+        const wanted = missing.map((name) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)).join(', ');
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-missing-column', `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`, { file, line: headerLine, key: missing[0] });
+    }
+    const slotOfField = new Int32Array(header.length).fill(-1);
+    const fieldOfSlot = new Int32Array(request.distinct.length);
+    request.distinct.forEach((name, slot) => {
+        const field = position.get(name);
+        slotOfField[field] = slot;
+        fieldOfSlot[slot] = field;
+    });
+    return { header, headerLine, slotOfField, fieldOfSlot };
+}
+/**
+ * Reads one cell of a requested column as the general path does: trims white space (as
+ * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
+ * value is finite. Anything else throws InputError `csv-cell`.
+ *
+ * @param cell the field text (quotes already removed)
+ * @param file repository-relative path, for messages
+ * @param line 1-based physical line of the row
+ * @param column the column's header name
+ */
+function cellNumber(cell, file, line, column) {
+    const text = cell.trim();
+    if (DECIMAL_NUMBER.test(text)) {
+        const value = Number(text);
+        if (Number.isFinite(value))
+            return value;
+    }
+    throw cellError(cell, file, line, column);
+}
+/** The `csv-cell` error for a cell that is not a finite decimal number. */
+function cellError(cell, file, line, column) {
+    const text = cell.trim();
+    let why;
+    if (text === '')
+        why = 'the cell is empty';
+    else if (DECIMAL_NUMBER.test(text))
+        why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
+    else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text))
+        why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
+    else
+        why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}`;
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, MAX_CELL_QUOTED)}: expected a finite decimal number (like 12, -0.5 or 1.5e-3); ${why}`, { file, line, key: column });
+}
+/** The `csv-ragged` error for a row whose field count differs from the header's. */
+function raggedError(file, line, expected, actual) {
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-ragged', `the row has ${actual} field${actual === 1 ? '' : 's'}; expected ${expected}, as many as the header`, { file, line });
+}
+/** The `csv-empty` error for a file without a header row. */
+function emptyError(file) {
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-empty', 'the file has no header row; expected a first line of comma-separated column names', {
+        file,
+    });
+}
+/** First buffer size of a chunk; buffers double from here up to the chunk size. */
+const FIRST_CAPACITY = 4096;
+/**
+ * Gathers rows into column buffers and hands out chunks of `chunkRows` rows.
+ * Parsers write `slots[s][row]` and `lines[row]` directly, then advance `row`; when `row`
+ * reaches `capacity` they call {@link ChunkBuilder.full}, which grows the buffers (doubling)
+ * or hands out a chunk, and reload `slots`, `lines`, `row` and `capacity`.
+ */
+class ChunkBuilder {
+    request;
+    chunkRows;
+    /** Filled chunks not yet handed out. */
+    ready = [];
+    /** One buffer per distinct requested column, length `capacity`. */
+    slots = [];
+    /** 1-based physical line of each row, length `capacity`. */
+    lines = new Int32Array(0);
+    /** Rows written in the current buffers. */
+    row = 0;
+    /** Rows the current buffers hold. */
+    capacity = 0;
+    /**
+     * @param request the requested columns (a chunk lists them in the asked order)
+     * @param chunkRows rows per chunk
+     */
+    constructor(request, chunkRows) {
+        this.request = request;
+        this.chunkRows = chunkRows;
+        this.fresh();
+    }
+    /** Advances one row (for parsers that do not track `row` themselves). */
+    endRow() {
+        this.row++;
+        if (this.row === this.capacity)
+            this.full();
+    }
+    /** Called when `row === capacity`: hands out a chunk, or doubles the buffers. */
+    full() {
+        if (this.row >= this.chunkRows) {
+            this.flush();
+            return;
+        }
+        const capacity = Math.min(this.chunkRows, this.capacity * 2);
+        this.slots = this.slots.map((old) => {
+            const grown = new Float64Array(capacity);
+            grown.set(old);
+            return grown;
+        });
+        const lines = new Int32Array(capacity);
+        lines.set(this.lines);
+        this.lines = lines;
+        this.capacity = capacity;
+    }
+    /** Hands out the rows gathered so far as a chunk (nothing when there are none). */
+    flush() {
+        const rows = this.row;
+        if (rows === 0)
+            return;
+        const exact = rows === this.capacity;
+        const slots = exact ? this.slots : this.slots.map((s) => s.slice(0, rows));
+        const lines = exact ? this.lines : this.lines.slice(0, rows);
+        const chunk = { rows, columns: this.request.slotOfColumn.map((slot) => slots[slot]), lines };
+        if (exact)
+            this.#buffersOf.set(chunk, { slots, lines });
+        this.ready.push(chunk);
+        this.fresh();
+    }
+    /**
+     * Takes back a chunk handed out by this builder whose reader is done with it: its buffers are
+     * reused for a later chunk (no allocation per chunk when the reader copies each chunk away
+     * before asking for the next). Chunks of another size are ignored.
+     *
+     * @param chunk a chunk from {@link take}; must not be read afterwards
+     */
+    recycle(chunk) {
+        const buffers = this.#buffersOf.get(chunk);
+        if (buffers === undefined)
+            return;
+        this.#buffersOf.delete(chunk);
+        this.#spare.push(buffers);
+    }
+    #buffersOf = new WeakMap();
+    #spare = [];
+    /** Takes the chunks handed out so far. */
+    take() {
+        return this.ready.splice(0, this.ready.length);
+    }
+    /** New buffers, as large as the last ones (a file that filled one chunk likely fills more). */
+    fresh() {
+        if (this.capacity === 0)
+            this.capacity = Math.min(this.chunkRows, FIRST_CAPACITY);
+        this.row = 0;
+        while (this.#spare.length > 0) {
+            const spare = this.#spare.pop();
+            if (spare.lines.length !== this.capacity)
+                continue;
+            this.slots = spare.slots;
+            this.lines = spare.lines;
+            return;
+        }
+        this.slots = this.request.distinct.map(() => new Float64Array(this.capacity));
+        this.lines = new Int32Array(this.capacity);
+    }
+}
+
+
+/***/ }),
+
+/***/ 5383:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   D: () => (/* binding */ lineBlocks),
+/* harmony export */   S: () => (/* binding */ encodingError)
+/* harmony export */ });
+/* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4573);
+/* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_buffer__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
+/**
+ * Turns a file's byte pieces (as a {@link RepoReader} streams them, split anywhere) into
+ * blocks that end right after a line feed, so that no line and no UTF-8 character is ever
+ * split between two blocks. Both CSV paths read through this one door, which also drops a
+ * UTF-8 byte-order mark and stops at the first line that is not UTF-8 (the reader, which
+ * counts lines, then throws {@link encodingError}).
+ */
+
+
+const LF = 10;
+const BOM = [0xef, 0xbb, 0xbf];
+/**
+ * Streams `pieces` as blocks of whole lines, checked to be UTF-8.
+ *
+ * A leading UTF-8 byte-order mark is dropped (line 1 stays line 1). When a line holds bytes
+ * that are not UTF-8, the lines before it are still yielded, then a block with `badUtf8`
+ * ends the stream: so errors always surface in file order, whatever the piece sizes.
+ * An empty file yields nothing. No piece is copied except the line that straddles two pieces.
+ *
+ * @param pieces the file's bytes in pieces of any size (an empty piece is allowed)
+ */
+async function* lineBlocks(pieces) {
+    let pending = [];
+    let pendingBytes = 0;
+    let first = true;
+    /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8). */
+    function* emit(bytes, final) {
+        if (first) {
+            first = false;
+            if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2])
+                bytes = bytes.subarray(3);
+            else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
+                yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
+                return false;
+            }
+        }
+        if (bytes.length === 0)
+            return true;
+        const good = utf8Prefix(bytes);
+        if (good === bytes.length) {
+            yield { bytes, final, badUtf8: false, utf16: false };
+            return true;
+        }
+        if (good > 0)
+            yield { bytes: bytes.subarray(0, good), final: false, badUtf8: false, utf16: false };
+        yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: false };
+        return false;
+    }
+    for await (const piece of pieces) {
+        if (piece.length === 0)
+            continue;
+        const firstCut = piece.indexOf(LF) + 1;
+        if (firstCut === 0) {
+            pending.push(piece);
+            pendingBytes += piece.length;
+            continue;
+        }
+        // The line that straddles the previous pieces and this one, then this piece's whole lines.
+        const lastCut = piece.lastIndexOf(LF) + 1;
+        if (pendingBytes > 0) {
+            const joined = concat([...pending, piece.subarray(0, firstCut)], pendingBytes + firstCut);
+            if (!(yield* emit(joined, false)))
+                return;
+            if (lastCut > firstCut && !(yield* emit(piece.subarray(firstCut, lastCut), false)))
+                return;
+        }
+        else if (!(yield* emit(piece.subarray(0, lastCut), false)))
+            return;
+        pending = lastCut < piece.length ? [piece.subarray(lastCut)] : [];
+        pendingBytes = piece.length - lastCut;
+    }
+    if (pendingBytes > 0)
+        yield* emit(concat(pending, pendingBytes), true);
+}
+function concat(parts, total) {
+    if (parts.length === 1)
+        return parts[0];
+    const out = new Uint8Array(total);
+    let at = 0;
+    for (const part of parts) {
+        out.set(part, at);
+        at += part.length;
+    }
+    return out;
+}
+/** Length of the longest run of whole UTF-8 lines at the start of `bytes`. */
+function utf8Prefix(bytes) {
+    if ((0,node_buffer__WEBPACK_IMPORTED_MODULE_0__.isUtf8)(bytes))
+        return bytes.length;
+    let start = 0;
+    while (start < bytes.length) {
+        const lf = bytes.indexOf(LF, start);
+        const end = lf === -1 ? bytes.length : lf + 1;
+        if (!(0,node_buffer__WEBPACK_IMPORTED_MODULE_0__.isUtf8)(bytes.subarray(start, end)))
+            break;
+        start = end;
+    }
+    return start;
+}
+/**
+ * The `csv-encoding` error for a line that is not UTF-8.
+ * @param file repository-relative path
+ * @param line 1-based line holding the bad bytes
+ * @param utf16 the file starts with a UTF-16 byte-order mark
+ */
+function encodingError(file, line, utf16) {
+    const hint = utf16 ? ' (the file looks like UTF-16)' : '';
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-encoding', `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`, {
+        file,
+        line,
+    });
+}
+
+
+/***/ }),
+
+/***/ 7254:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   aN: () => (/* binding */ forEachBlock),
+/* harmony export */   kD: () => (/* binding */ addProducts),
+/* harmony export */   tp: () => (/* binding */ predictRows)
+/* harmony export */ });
+/* unused harmony export blockRows */
+/* harmony import */ var _kernels_wasm_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5087);
+
+/**
+ * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
+ * enough to stay in cache between building a block and folding it (the QR works on pieces of a
+ * few hundred rows of it), and to keep each pass's buffer from weighing on peak memory; large
+ * enough that the per-block overhead does not show.
+ */
+function blockRows(p) {
+    return Math.max(64, Math.floor((1 << 16) / Math.max(1, p)));
+}
+/**
+ * Calls `visit(X, start, m)` for consecutive blocks of rows; `X` is column-major m x p and is
+ * reused between calls (copy it to keep it).
+ */
+function forEachBlock(design, data, visit) {
+    const size = blockRows(design.p);
+    const buffer = new Float64Array(Math.min(size, Math.max(1, data.rows)) * design.p);
+    for (let start = 0; start < data.rows; start += size) {
+        const m = Math.min(size, data.rows - start);
+        design.fill(data.inputs, start, m, buffer);
+        visit(buffer, start, m);
+    }
+}
+/** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
+function predictRows(design, data, w) {
+    const out = new Float64Array(data.rows);
+    forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
+    return out;
+}
+/**
+ * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block, the terms
+ * added one after another in column order (four columns per sweep over the rows, so each
+ * output is loaded and stored once per four columns; the sums are those of the plain loop).
+ * Columns whose weight is 0 are left out.
+ *
+ * @param out output (length >= at + m)
+ * @param at first output index
+ * @param X column-major m x p block
+ * @param m rows
+ * @param w coefficients (length >= p)
+ * @param p columns
+ */
+function addProducts(out, at, X, m, w, p) {
+    // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same additions in the same order).
+    const kernels = (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_0__/* .wasmKernels */ .FY)();
+    if (kernels !== null) {
+        (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_0__/* .addProductsInto */ .iT)(kernels, out, at, X, m, w, p);
+        return;
+    }
+    let j = 0;
+    for (; j + 3 < p; j += 4) {
+        if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {
+            for (let q = j; q < j + 4; q++)
+                addColumn(out, at, X, m, w[q], q);
+        }
+        else {
+            addFourColumns(out, at, X, m, w[j], w[j + 1], w[j + 2], w[j + 3], j);
+        }
+    }
+    for (; j < p; j++)
+        addColumn(out, at, X, m, w[j], j);
+}
+// The row loops are functions of their own, each one loop and its return (see DEVELOPERS.md,
+// "Writing hot loops"): the loop over columns above then never runs inside code optimised in
+// the middle of a row loop.
+/** out[at + i] += X[j*m + i] w0 + X[(j+1)*m + i] w1 + X[(j+2)*m + i] w2 + X[(j+3)*m + i] w3, added left to right. */
+function addFourColumns(out, at, X, m, w0, w1, w2, w3, j) {
+    const c0 = j * m;
+    const c1 = c0 + m;
+    const c2 = c1 + m;
+    const c3 = c2 + m;
+    for (let i = 0; i < m; i++)
+        out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
+}
+/** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
+function addColumn(out, at, X, m, wj, j) {
+    if (wj === 0)
+        return;
+    const c = j * m;
+    for (let i = 0; i < m; i++)
+        out[at + i] += X[c + i] * wj;
+}
+
+
+/***/ }),
+
+/***/ 6566:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   x: () => (/* binding */ createDesign)
+/* harmony export */ });
+/* unused harmony export INTERCEPT */
+/** Name of the intercept column. */
+const INTERCEPT = '(intercept)';
+/**
+ * Builds a design from fixed terms.
+ * @param terms the terms in descriptor order
+ * @param intercept whether to put a column of ones first
+ */
+function createDesign(terms, intercept) {
+    const inputs = [];
+    for (const t of terms)
+        for (const c of t.inputs)
+            if (!inputs.includes(c))
+                inputs.push(c);
+    const names = intercept ? ['(intercept)'] : [];
+    const offsets = [];
+    for (const t of terms) {
+        offsets.push(names.length);
+        names.push(...t.columnNames);
+    }
+    const p = names.length;
+    const penalised = names.map((_, j) => !(intercept && j === 0));
+    const termInputIndex = terms.map((t) => t.inputs.map((c) => inputs.indexOf(c)));
+    return {
+        p,
+        columnNames: names,
+        penalised,
+        termOffsets: offsets,
+        intercept,
+        terms,
+        inputs,
+        fill(cols, start, m, out = new Float64Array(m * p)) {
+            if (intercept)
+                out.fill(1, 0, m);
+            const views = cols.map((c) => c.subarray(start, start + m));
+            for (let t = 0; t < terms.length; t++) {
+                terms[t].fill(termInputIndex[t].map((k) => views[k]), m, out, offsets[t]);
+            }
+            return out;
+        },
+    };
+}
+
+
+/***/ }),
+
+/***/ 6801:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Mq: () => (/* binding */ sumOfSquaredDeviations),
+/* harmony export */   jZ: () => (/* binding */ sumOfDeviations),
+/* harmony export */   nQ: () => (/* binding */ largest),
+/* harmony export */   ud: () => (/* binding */ meanAndSd),
+/* harmony export */   y1: () => (/* binding */ range)
+/* harmony export */ });
+/* unused harmony export smallest */
+/**
+ * Column statistics used to fix basis parameters.
+ */
+/**
+ * Mean and population standard deviation sqrt(mean((x - mean)^2)) of the first `n` entries,
+ * by two passes (the second on deviations, so no cancellation). Empty input gives NaN.
+ */
+function meanAndSd(x, n = x.length) {
+    if (n === 0)
+        return { mean: Number.NaN, sd: Number.NaN };
+    let mean = sumOf(x, n) / n;
+    // One correction step (mean of deviations) keeps the mean exact to rounding for large offsets.
+    mean += sumOfDeviations(x, n, mean) / n;
+    return { mean, sd: Math.sqrt(sumOfSquaredDeviations(x, n, mean) / n) };
+}
+// The passes below are separate functions, each one loop followed by nothing but its return, so
+// that V8's code optimised in the middle of a long loop never runs into code it has no type
+// feedback for (which throws the optimised code away; see DEVELOPERS.md, "Writing hot loops").
+function sumOf(x, n) {
+    let sum = 0;
+    for (let i = 0; i < n; i++)
+        sum += x[i];
+    return sum;
+}
+/** Sum of x[i] - shift over x[0..n), added in order. */
+function sumOfDeviations(x, n, shift) {
+    let dev = 0;
+    for (let i = 0; i < n; i++)
+        dev += x[i] - shift;
+    return dev;
+}
+/** Sum of (x[i] - shift)^2 over x[0..n), added in order. */
+function sumOfSquaredDeviations(x, n, shift) {
+    let ss = 0;
+    for (let i = 0; i < n; i++) {
+        const d = x[i] - shift;
+        ss += d * d;
+    }
+    return ss;
+}
+/** Smallest and largest of the first `n` entries (NaN entries ignored); [Infinity, -Infinity] when empty. */
+function range(x, n = x.length) {
+    return [smallest(x, n), largest(x, n)];
+}
+/** Smallest of x[0..n), NaN ignored; Infinity when empty. */
+function smallest(x, n) {
+    let lo = Infinity;
+    for (let i = 0; i < n; i++)
+        if (x[i] < lo)
+            lo = x[i];
+    return lo;
+}
+/** Largest of x[0..n), NaN ignored; -Infinity when empty. */
+function largest(x, n) {
+    let hi = -Infinity;
+    for (let i = 0; i < n; i++)
+        if (x[i] > hi)
+            hi = x[i];
+    return hi;
+}
+
+
+/***/ }),
+
+/***/ 7482:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  P: () => (/* binding */ createTerm),
+  Q: () => (/* binding */ termInputs)
+});
+
+;// CONCATENATED MODULE: ./src/design/terms/linear.ts
+/** Builds the linear term: one design column per listed input column, copied unchanged. */
+function linearTerm(spec) {
+    return {
+        spec,
+        inputs: spec.columns,
+        columnNames: spec.columns,
+        fixed: {},
+        fill(inputs, m, out, offset) {
+            for (let j = 0; j < inputs.length; j++) {
+                out.set(inputs[j].subarray(0, m), (offset + j) * m);
+            }
+        },
+    };
+}
+
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/kernels/wasm.ts + 1 modules
+var wasm = __nccwpck_require__(5087);
+// EXTERNAL MODULE: ./src/design/stats.ts
+var stats = __nccwpck_require__(6801);
+;// CONCATENATED MODULE: ./src/design/terms/polynomial.ts
+
+
+
+/**
+ * Fixes shift and scale from the training column and returns the term.
+ * @throws InputError `constant-input` when the default scale would be 0 (a constant column)
+ */
+function polynomialTerm(spec, training, file) {
+    const x = training.get(spec.of);
+    let shift = spec.shift;
+    let scale = spec.scale;
+    if (shift === null || scale === null) {
+        const { mean, sd } = (0,stats/* meanAndSd */.ud)(x);
+        shift ??= mean;
+        if (scale === null) {
+            if (!(sd > 0)) {
+                throw new errors/* InputError */.dz('constant-input', `column \`${spec.of}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`, { file, line: spec.line, key: 'polynomial.of' });
+            }
+            scale = sd;
+        }
+    }
+    const s = shift;
+    const sc = scale;
+    const raw = s === 0 && scale === 1;
+    const names = [];
+    for (let k = 1; k <= spec.degree; k++) {
+        const base = raw ? spec.of : `z(${spec.of})`;
+        names.push(k === 1 ? base : `${base}^${k}`);
+    }
+    return {
+        spec,
+        inputs: [spec.of],
+        columnNames: names,
+        fixed: { shift: s, scale },
+        fill(inputs, m, out, offset) {
+            const first = offset * m;
+            // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations).
+            const kernels = (0,wasm/* wasmKernels */.FY)();
+            if (kernels !== null) {
+                (0,wasm/* polynomialColumnsInto */.qO)(kernels, inputs[0], m, s, sc, raw, spec.degree, out, first);
+                return;
+            }
+            if (raw)
+                out.set(inputs[0].subarray(0, m), first);
+            else
+                standardise(inputs[0], m, s, sc, out, first);
+            for (let k = 1; k < spec.degree; k++)
+                multiplyColumns(out, (offset + k - 1) * m, first, (offset + k) * m, m);
+        },
+    };
+}
+// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** out[at + i] = (x[i] - shift) / scale for i < m. */
+function standardise(x, m, shift, scale, out, at) {
+    for (let i = 0; i < m; i++)
+        out[at + i] = (x[i] - shift) / scale;
+}
+/** out[to + i] = out[a + i] * out[b + i] for i < m (the next power from the previous one and z). */
+function multiplyColumns(out, a, b, to, m) {
+    for (let i = 0; i < m; i++)
+        out[to + i] = out[a + i] * out[b + i];
+}
+
+;// CONCATENATED MODULE: ./src/design/terms/rbf.ts
+/** Largest number of centres a `{ from, to, step }` range may produce. */
+const MAX_STEP_CENTERS = 10000;
+/** The centres a specification stands for, in order. */
+function rbfCenters(centers, training) {
+    switch (centers.kind) {
+        case 'list':
+            return [...centers.values];
+        case 'count': {
+            const { from, to, count } = centers;
+            if (count === 1)
+                return [from];
+            const out = [];
+            for (let k = 0; k < count; k++)
+                out.push(k === count - 1 ? to : from + ((to - from) * k) / (count - 1));
+            return out;
+        }
+        case 'step': {
+            const { from, to, step } = centers;
+            const out = [];
+            const dir = to >= from ? 1 : -1;
+            for (let k = 0; out.length < MAX_STEP_CENTERS; k++) {
+                const c = from + dir * k * step;
+                if (dir * (c - to) > 1e-9 * step)
+                    break;
+                out.push(c);
+            }
+            return out;
+        }
+        case 'at-samples':
+            return Array.from(training);
+    }
+}
+/** Formats a centre for a column name (shortest round-trip text, at most 6 significant digits). */
+function label(c) {
+    const short = Number(c.toPrecision(6));
+    return String(short);
+}
+/** Builds the Gaussian term with its centres fixed. */
+function rbfTerm(spec, training) {
+    const x = training.get(spec.of);
+    const centres = rbfCenters(spec.centers, x);
+    const a = 1 / (2 * spec.width * spec.width);
+    return {
+        spec,
+        inputs: [spec.of],
+        columnNames: centres.map((c) => `rbf(${spec.of}; c=${label(c)})`),
+        fixed: { width: spec.width, centers: centres },
+        fill(inputs, m, out, offset) {
+            for (let k = 0; k < centres.length; k++)
+                gaussianColumn(inputs[0], m, centres[k], a, out, (offset + k) * m);
+        },
+    };
+}
+/**
+ * out[at + i] = exp(-(x[i] - c)^2 a) for i < m. A function of its own, one loop (see
+ * DEVELOPERS.md, "Writing hot loops").
+ */
+function gaussianColumn(x, m, c, a, out, at) {
+    for (let i = 0; i < m; i++) {
+        const d = x[i] - c;
+        out[at + i] = Math.exp(-d * d * a);
+    }
+}
+
+;// CONCATENATED MODULE: ./src/design/terms/index.ts
+
+
+
+/** Every input column a term reads (without duplicates, in first-use order). */
+function termInputs(spec) {
+    return spec.kind === 'linear' ? [...new Set(spec.columns)] : [spec.of];
+}
+/**
+ * Fixes a term's data-dependent parameters from the training columns.
+ * @param spec the descriptor entry
+ * @param training training columns by name (must hold every input of the term)
+ * @param file descriptor path, for errors
+ */
+function createTerm(spec, training, file) {
+    switch (spec.kind) {
+        case 'linear':
+            return linearTerm(spec);
+        case 'polynomial':
+            return polynomialTerm(spec, training, file);
+        case 'rbf':
+            return rbfTerm(spec, training);
+    }
+}
+
 
 /***/ }),
 
@@ -31680,8 +31710,8 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony export */ });
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2485);
-/* harmony import */ var _model_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4607);
-/* harmony import */ var _fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9554);
+/* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
+/* harmony import */ var _kernels_wasm_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5087);
 
 
 
@@ -31775,7 +31805,7 @@ function oneFold(foldOf, start, m) {
  */
 function foldFactors(design, data, folds) {
     const builder = new FoldFactorBuilder(design.p, folds);
-    (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => builder.add(X, data.y, start, m));
+    (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => builder.add(X, data.y, start, m));
     return builder.factors;
 }
 /**
@@ -31887,8 +31917,8 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
     });
     let pred = new Float64Array(0);
     const column = new Float64Array(p);
-    const kernels = (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_2__/* .wasmKernels */ .FY)();
-    (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
+    const kernels = (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_2__/* .wasmKernels */ .FY)();
+    (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
         if (pred.length < m)
             pred = new Float64Array(m);
         // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
@@ -31896,7 +31926,7 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
         for (let s = 0; s < S; s++) {
             // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations in the same order).
             if (kernels !== null) {
-                (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_2__/* .outOfFoldRows */ .e8)(kernels, X, m, p, tables[s], k, foldOf.subarray(start, start + m), single, data.y.subarray(start, start + m), sse[s]);
+                (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_2__/* .outOfFoldRows */ .e8)(kernels, X, m, p, tables[s], k, foldOf.subarray(start, start + m), single, data.y.subarray(start, start + m), sse[s]);
                 continue;
             }
             const W = tables[s];
@@ -31906,7 +31936,7 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
             if (single >= 0) {
                 for (let j = 0; j < p; j++)
                     column[j] = W[j * k + single];
-                (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, column, p);
+                (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, column, p);
             }
             else {
                 for (let j = 0; j < p; j++) {
@@ -32003,7 +32033,7 @@ function crossValidate(design, data, fit, folds, options = {}) {
         }
         (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .leveragesInto */ .lG)(fit, X, m, h);
         pred.fill(0, 0, m);
-        (0,_model_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
+        (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
         if (out !== undefined)
             out.set(pred.subarray(0, m), start);
         // The sums run in locals and are stored once per block: the same additions in the same order,
@@ -32202,2692 +32232,84 @@ function shuffle(out, random) {
 
 /***/ }),
 
-/***/ 9389:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  X: () => (/* binding */ SHARED_CROSS_VALIDATION_KEY),
-  Tq: () => (/* binding */ SHARED_FOLDS_KEY),
-  b9: () => (/* binding */ SHARED_FOLD_FACTORS_KEY),
-  b6: () => (/* binding */ sharedCrossValidation),
-  zf: () => (/* binding */ sharedFoldFactors),
-  eQ: () => (/* binding */ sharedFolds),
-  EW: () => (/* binding */ sharedLeakage),
-  cQ: () => (/* binding */ sharedSwing)
-});
-
-// UNUSED EXPORTS: SHARED_LEAKAGE_KEY, SHARED_SWING_KEY
-
-// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
-var cross_validation = __nccwpck_require__(4733);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts
-var diagnostics_folds = __nccwpck_require__(9236);
-// EXTERNAL MODULE: ./src/diagnostics/random.ts
-var random = __nccwpck_require__(5089);
-;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
-
-/** How many line numbers of each file to report. */
-const LEAKAGE_EXAMPLE_LINES = 5;
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-/**
- * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
- * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
- * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
- * comparison, so the hash only has to spread rows over the table.
- */
-function rowHash(columns, i) {
-    let h = 0x811c9dc5;
-    for (let c = 0; c < columns.length; c++) {
-        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
-        h = Math.imul(h ^ u32[0], 0x9e3779b1);
-        h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
-        h ^= h >>> 13;
-    }
-    return (0,random/* mix32 */.QV)(h);
-}
-function sameInputs(a, i, b, j) {
-    for (let c = 0; c < a.length; c++)
-        if (a[c][i] !== b[c][j])
-            return false;
-    return true;
-}
-/** The slot of `hash`: where it is, or the empty slot where it goes. */
-function findSlot(table, hash) {
-    const { slotHead, slotHash, mask } = table;
-    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
-    while (slotHead[s] >= 0 && slotHash[s] !== hash)
-        s = (s + 1) & mask;
-    return s;
-}
-// The two passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
-/** Puts rows 0..n-1 in the table, so that each chain lists its rows in file order. */
-function indexRows(table, inputs, n) {
-    for (let r = n - 1; r >= 0; r--) {
-        const hash = rowHash(inputs, r);
-        const s = findSlot(table, hash);
-        table.next[r] = table.slotHead[s];
-        table.slotHash[s] = hash;
-        table.slotHead[s] = r;
-    }
-}
-/**
- * Streams the training rows past the table of hold-out rows in file order: firstMatch[r] receives
- * the first training row whose inputs equal hold-out row r's, targetToo[r] = 1 when some such row
- * has its target too.
- */
-function matchRows(table, holdout, train, firstMatch, targetToo) {
-    for (let i = 0; i < train.rows; i++) {
-        let r = table.slotHead[findSlot(table, rowHash(train.inputs, i))];
-        while (r >= 0) {
-            if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-                if (firstMatch[r] < 0)
-                    firstMatch[r] = i;
-                if (holdout.y[r] === train.y[i])
-                    targetToo[r] = 1;
-            }
-            r = table.next[r];
-        }
-    }
-}
-/**
- * Finds hold-out rows equal to a training row in every input column of the model (values compared
- * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
- * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
- * hold-out rows (typed arrays, about 20 bytes per row).
- *
- * @param train training rows (inputs in the model's order, targets, lines)
- * @param holdout hold-out rows (same input order)
- */
-function findLeakage(train, holdout) {
-    const columns = train.inputs.length;
-    // A hash table of the hold-out rows (the smaller file, usually); the training rows then stream
-    // past it in file order, so each hold-out row's first match is the earliest training row.
-    const h = holdout.rows;
-    let size = 1024;
-    while (size < 2 * h)
-        size *= 2;
-    const table = { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(h).fill(-1) };
-    indexRows(table, holdout.inputs, h);
-    const firstMatch = new Int32Array(h).fill(-1);
-    const targetToo = new Uint8Array(h);
-    if (h > 0)
-        matchRows(table, holdout, train, firstMatch, targetToo);
-    let inputMatches = 0;
-    let fullMatches = 0;
-    const holdoutLines = [];
-    const trainLines = [];
-    for (let r = 0; r < h; r++) {
-        if (firstMatch[r] < 0)
-            continue;
-        inputMatches++;
-        if (targetToo[r] === 1)
-            fullMatches++;
-        if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
-            holdoutLines.push(holdout.lines[r]);
-            trainLines.push(train.lines[firstMatch[r]]);
-        }
-    }
-    return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
-}
-
-// EXTERNAL MODULE: ./src/design-matrix.ts
-var design_matrix = __nccwpck_require__(1927);
-// EXTERNAL MODULE: ./src/model/blocks.ts
-var blocks = __nccwpck_require__(4607);
-// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
-var column_median = __nccwpck_require__(8455);
-// EXTERNAL MODULE: ./src/basis/stats.ts
-var stats = __nccwpck_require__(6029);
-;// CONCATENATED MODULE: ./src/diagnostics/radix-sort.ts
-/**
- * Sorting of large Float64Array columns: a distribution (bucket) sort when the values are spread
- * evenly, else a least-significant-digit radix sort on the IEEE 754 bit patterns (Knuth, The Art
- * of Computer Programming, vol. 3, 2nd ed., sec. 5.2.5); both several times faster than the
- * built-in typed-array sort on a million values (196 ms against 577 ms here), with the same
- * result.
- */
-/**
- * Below this length the built-in sort is used: in a short run, where this code has not been
- * optimised yet, the built-in sort is faster up to about 50,000 values (measured here, one
- * process each: five columns of 20,000 values in 8 ms against 13-16 ms, of 100,000 in 44 ms
- * against 30 ms).
- */
-const RADIX_FROM = 65536;
-const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
-/**
- * Sorts `a` ascending in place, in the order of `Float64Array.prototype.sort` (-0 before +0; the
- * columns sorted here hold no NaN) and returns it.
- *
- * Evenly spread values go by buckets of equal width ({@link bucketSort}). Otherwise the bit
- * pattern of each value becomes an unsigned key that orders like the number (sign bit
- * flipped for positives, every bit inverted for negatives), keys are sorted by four stable
- * counting passes of 16 bits (a pass is skipped when every key has the same digit), and the
- * patterns are turned back.
- *
- * @param a values (sorted in place)
- * @param scratch optional work array of length >= 2 * a.length (default: a new one)
- */
-function sortFloat64(a, scratch) {
-    const n = a.length;
-    if (n < RADIX_FROM || !LITTLE_ENDIAN)
-        return a.sort();
-    const usable = scratch !== undefined && scratch.length >= 2 * n && scratch.byteOffset % 8 === 0;
-    const work = usable ? scratch.subarray(0, 2 * n) : new Uint32Array(2 * n);
-    if (bucketSort(a, new Float64Array(work.buffer, work.byteOffset, n)))
-        return a;
-    return radixSort(a, work);
-}
-/** Largest bucket {@link bucketSort} sorts by insertion; a larger one sends the column to the radix sort. */
-const MAX_BUCKET = 48;
-/** a < b in the order of the built-in sort (-0 before +0). */
-function before(a, b) {
-    return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
-}
-/**
- * Distribution sort for evenly spread values (Knuth, vol. 3, sec. 5.2.5 again: sorting by
- * address calculation): about n/4 buckets of equal width between the extremes (the bucket index
- * never decreases as the value grows), then insertion sort in each bucket. Returns false, with
- * `a` unchanged, when the values are not spread evenly enough (a bucket over MAX_BUCKET values)
- * or the extremes are not usable; the caller then sorts another way.
- */
-function bucketSort(a, out) {
-    const n = a.length;
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (let i = 0; i < n; i++) {
-        const v = a[i];
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
-    const buckets = n >> 2;
-    const scale = buckets / (hi - lo);
-    if (!(hi > lo) || !Number.isFinite(scale) || !(scale > 0))
-        return false;
-    const start = new Int32Array(buckets + 1);
-    const last = buckets - 1;
-    for (let i = 0; i < n; i++) {
-        const b = Math.min(last, Math.floor((a[i] - lo) * scale));
-        start[b + 1]++;
-    }
-    for (let b = 0; b < buckets; b++) {
-        if (start[b + 1] > MAX_BUCKET)
-            return false;
-        start[b + 1] += start[b];
-    }
-    const fill = start.slice(0, buckets);
-    for (let i = 0; i < n; i++) {
-        const v = a[i];
-        const b = Math.min(last, Math.floor((v - lo) * scale));
-        out[fill[b]++] = v;
-    }
-    for (let b = 0; b < buckets; b++) {
-        const end = start[b + 1];
-        for (let i = start[b] + 1; i < end; i++) {
-            const v = out[i];
-            let j = i - 1;
-            while (j >= start[b] && before(v, out[j])) {
-                out[j + 1] = out[j];
-                j--;
-            }
-            out[j + 1] = v;
-        }
-    }
-    a.set(out);
-    return true;
-}
-/** The radix sort of {@link sortFloat64} (any values; `scratch` holds 2n words). */
-function radixSort(a, scratch) {
-    const n = a.length;
-    const u = new Uint32Array(a.buffer, a.byteOffset, 2 * n);
-    const counts = new Uint32Array(4 * 65536);
-    for (let i = 0; i < n; i++) {
-        let lo = u[2 * i];
-        let hi = u[2 * i + 1];
-        if (hi & 0x80000000) {
-            hi = ~hi >>> 0;
-            lo = ~lo >>> 0;
-        }
-        else {
-            hi = (hi | 0x80000000) >>> 0;
-        }
-        u[2 * i] = lo;
-        u[2 * i + 1] = hi;
-        counts[lo & 0xffff]++;
-        counts[65536 + (lo >>> 16)]++;
-        counts[131072 + (hi & 0xffff)]++;
-        counts[196608 + (hi >>> 16)]++;
-    }
-    let src = u;
-    let dst = scratch;
-    for (let d = 0; d < 4; d++) {
-        const base = d * 65536;
-        const word = d < 2 ? 0 : 1;
-        const shift = d % 2 === 0 ? 0 : 16;
-        const firstDigit = (src[word] >>> shift) & 0xffff;
-        if (counts[base + firstDigit] === n)
-            continue; // every key has this digit
-        let sum = 0;
-        for (let b = 0; b < 65536; b++) {
-            const c = counts[base + b];
-            counts[base + b] = sum;
-            sum += c;
-        }
-        for (let i = 0; i < n; i++) {
-            const digit = (src[2 * i + word] >>> shift) & 0xffff;
-            const pos = counts[base + digit]++;
-            dst[2 * pos] = src[2 * i];
-            dst[2 * pos + 1] = src[2 * i + 1];
-        }
-        const t = src;
-        src = dst;
-        dst = t;
-    }
-    if (src !== u)
-        u.set(src);
-    for (let i = 0; i < n; i++) {
-        const hi = u[2 * i + 1];
-        if (hi & 0x80000000) {
-            u[2 * i + 1] = (hi & 0x7fffffff) >>> 0;
-        }
-        else {
-            u[2 * i + 1] = ~hi >>> 0;
-            u[2 * i] = ~u[2 * i] >>> 0;
-        }
-    }
-    return a;
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/nearest-neighbours.ts
-/**
- * The k nearest neighbours of every point of a small set (the swing scan's sampled rows), exactly
- * as a search over all pairs finds them, through a k-d tree (Bentley, "Multidimensional binary
- * search trees used for associative searching", Communications of the ACM 18(9), 1975).
- */
-/** Points per leaf of the tree. */
-const LEAF_SIZE = 8;
-/**
- * Pairs (row, neighbour) of each point and its `kk` nearest other points by squared Euclidean
- * distance, summed over the coordinates in order (exact duplicates, distance 0, are skipped;
- * equal distances: the lower index first).
- *
- * The search descends the tree to the point's own leaf first and visits a subtree on the other
- * side of a split only when the distance to the split plane, squared, is at most the k-th best
- * distance so far: every point there is at least that far in that coordinate alone, and a sum of
- * squares is at least any of its terms (in floating point too, as rounding is monotone). So the
- * result is the result of the search over all s x s pairs.
- *
- * @param flat coordinates, row-major: flat[a * d + c]
- * @param s points
- * @param d coordinates per point
- * @param kk neighbours per point (at most s - 1)
- * @param rows the training row of each point
- * @returns flat pairs [row, neighbour, row, neighbour, ...] of training rows, points in order and
- *   each point's neighbours nearest first
- */
-function nearestPairs(flat, s, d, kk, rows) {
-    const pairs = new Int32Array(2 * s * Math.max(kk, 0));
-    if (s < 2 || kk < 1 || d < 1)
-        return pairs.subarray(0, 0);
-    const tree = buildTree(flat, s, d);
-    let count = 0;
-    const best = new Float64Array(kk);
-    const bestIdx = new Int32Array(kk);
-    for (let a = 0; a < s; a++) {
-        best.fill(Infinity);
-        bestIdx.fill(-1);
-        searchTree(tree, 0, flat, d, a, kk, best, bestIdx);
-        for (let t = 0; t < kk; t++) {
-            if (bestIdx[t] < 0)
-                continue;
-            pairs[count++] = rows[a];
-            pairs[count++] = rows[bestIdx[t]];
-        }
-    }
-    return pairs.subarray(0, count);
-}
-/** Builds the tree: each node splits its points at the median of its widest coordinate. */
-function buildTree(flat, s, d) {
-    const capacity = 2 * Math.ceil(s / (LEAF_SIZE / 2)) + 1;
-    const tree = {
-        idx: Int32Array.from({ length: s }, (_, a) => a),
-        lo: new Int32Array(capacity),
-        hi: new Int32Array(capacity),
-        mid: new Int32Array(capacity),
-        dim: new Int32Array(capacity),
-        value: new Float64Array(capacity),
-        left: new Int32Array(capacity),
-        right: new Int32Array(capacity),
-    };
-    let nodes = 0;
-    const make = (lo, hi) => {
-        const node = nodes++;
-        tree.lo[node] = lo;
-        tree.hi[node] = hi;
-        tree.left[node] = -1;
-        tree.right[node] = -1;
-        tree.dim[node] = -1;
-        if (hi - lo <= LEAF_SIZE)
-            return node;
-        const c = widestCoordinate(flat, d, tree.idx, lo, hi);
-        if (c < 0)
-            return node; // every point equal: a leaf
-        const mid = (lo + hi) >> 1;
-        selectByCoordinate(flat, d, c, tree.idx, lo, hi, mid);
-        tree.dim[node] = c;
-        tree.mid[node] = mid;
-        tree.value[node] = flat[tree.idx[mid] * d + c];
-        tree.left[node] = make(lo, mid);
-        tree.right[node] = make(mid, hi);
-        return node;
-    };
-    make(0, s);
-    return tree;
-}
-/** The coordinate with the widest range over idx[lo..hi), or -1 when every range is 0. */
-function widestCoordinate(flat, d, idx, lo, hi) {
-    let bestDim = -1;
-    let bestWidth = 0;
-    for (let c = 0; c < d; c++) {
-        let min = Infinity;
-        let max = -Infinity;
-        for (let t = lo; t < hi; t++) {
-            const v = flat[idx[t] * d + c];
-            if (v < min)
-                min = v;
-            if (v > max)
-                max = v;
-        }
-        if (max - min > bestWidth) {
-            bestWidth = max - min;
-            bestDim = c;
-        }
-    }
-    return bestDim;
-}
-/**
- * Reorders idx[lo..hi) so that idx[k] holds the point whose coordinate c has rank k - lo, points
- * before it no greater and points after it no smaller in that coordinate (Hoare's selection).
- */
-function selectByCoordinate(flat, d, c, idx, lo, hi, k) {
-    let l = lo;
-    let r = hi - 1;
-    while (r > l) {
-        const pivot = flat[idx[(l + r) >> 1] * d + c];
-        let i = l;
-        let j = r;
-        while (i <= j) {
-            while (flat[idx[i] * d + c] < pivot)
-                i++;
-            while (flat[idx[j] * d + c] > pivot)
-                j--;
-            if (i <= j) {
-                const t = idx[i];
-                idx[i] = idx[j];
-                idx[j] = t;
-                i++;
-                j--;
-            }
-        }
-        if (k <= j)
-            r = j;
-        else if (k >= i)
-            l = i;
-        else
-            return;
-    }
-}
-/**
- * The k nearest points of point a within `node`'s subtree, merged into best (distances) and
- * bestIdx (points), nearest first: the side of each split that holds a first, the other side only
- * when the squared distance to the split can still be at most the k-th best. Points equal to the
- * split value may sit on either side, so a gap of 0 visits both.
- */
-function searchTree(tree, node, flat, d, a, kk, best, bestIdx) {
-    const c = tree.dim[node];
-    if (c < 0) {
-        for (let t = tree.lo[node]; t < tree.hi[node]; t++) {
-            const b = tree.idx[t];
-            if (b !== a)
-                considerNeighbour(flat, d, a, b, kk, best, bestIdx);
-        }
-        return;
-    }
-    const diff = flat[a * d + c] - tree.value[node];
-    searchTree(tree, diff < 0 ? tree.left[node] : tree.right[node], flat, d, a, kk, best, bestIdx);
-    if (diff * diff <= best[kk - 1])
-        searchTree(tree, diff < 0 ? tree.right[node] : tree.left[node], flat, d, a, kk, best, bestIdx);
-}
-/**
- * Puts point b into point a's list of the kk nearest (sorted by distance, then index) when it
- * belongs there; the distance is summed over the coordinates in order, as the list's entries were.
- */
-function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
-    const limit = best[kk - 1];
-    const ra = a * d;
-    const rb = b * d;
-    let dist = 0;
-    // Partial sums only grow: once one passes the k-th best, the point cannot enter.
-    for (let c = 0; c < d && dist <= limit; c++) {
-        const t = flat[ra + c] - flat[rb + c];
-        dist += t * t;
-    }
-    if (dist === 0 || dist > limit || (dist === limit && b > bestIdx[kk - 1]))
-        return;
-    let pos = kk - 1;
-    while (pos > 0 && (best[pos - 1] > dist || (best[pos - 1] === dist && bestIdx[pos - 1] > b))) {
-        best[pos] = best[pos - 1];
-        bestIdx[pos] = bestIdx[pos - 1];
-        pos--;
-    }
-    best[pos] = dist;
-    bestIdx[pos] = b;
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
-/**
- * Swing between and beyond samples: how far a model's predictions leave the band of observed
- * training targets on inputs between the training rows and just past their range.
- */
-
-
-
-
-
-
-/**
- * Excursion of predictions outside the band [lo, hi] in units of its width:
- * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
- */
-function excursion(prediction, lo, hi) {
-    if (!(hi > lo) || prediction.length === 0)
-        return Number.NaN;
-    let worst = 0;
-    for (let i = 0; i < prediction.length; i++) {
-        const v = prediction[i];
-        const e = Number.isNaN(v) ? Infinity : Math.max(v - hi, lo - v);
-        if (e > worst)
-            worst = e;
-    }
-    return worst / (hi - lo);
-}
-/**
- * Grid across one input's range: `uniform` evenly spaced points from min to max, plus `perGap`
- * evenly spaced interior points in each gap between neighbouring distinct values (in the
- * `maxGaps` widest gaps when there are more; at least one per gap), plus `marginPoints` on each
- * side up to `margin` x range outside. Sorted, without duplicates.
- *
- * @param values the input's training values (any order; not modified)
- * @returns inside and beyond points, ascending; empty when the input has no spread
- */
-function inputGrid(values, options = {}) {
-    const sorted = Float64Array.from(values).sort();
-    return gridFromSorted(sorted, sorted.length, options);
-}
-/**
- * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
- * array is overwritten (its distinct values are packed to the front).
- */
-function gridFromSorted(sorted, n, options, work) {
-    const perGap = options.perGap ?? 8;
-    const uniform = options.uniform ?? 201;
-    const margin = options.margin ?? 0.1;
-    const marginPoints = options.marginPoints ?? 40;
-    const maxGaps = options.maxGaps ?? 4000;
-    const count = packDistinct(sorted, n);
-    const distinct = sorted.subarray(0, count);
-    if (count < 2)
-        return { inside: new Float64Array(0), beyond: new Float64Array(0) };
-    const lo = distinct[0];
-    const hi = distinct[count - 1];
-    const width = hi - lo;
-    const gaps = widestGaps(distinct, maxGaps, work);
-    const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
-    const inside = new Float64Array(uniform + gaps.length * per);
-    fillUniform(inside, uniform, lo, hi);
-    const w = fillGaps(inside, uniform, distinct, gaps, per);
-    const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-    return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
-}
-// The loops of the grid are functions of their own, each a loop and its return (see
-// DEVELOPERS.md, "Writing hot loops").
-/** Packs the distinct values of the ascending a[0..n) to its front; returns how many. */
-function packDistinct(a, n) {
-    let count = 0;
-    for (let i = 0; i < n; i++)
-        if (count === 0 || a[i] !== a[count - 1])
-            a[count++] = a[i];
-    return count;
-}
-/** The distinct values of xs[0..length), ascending (xs is reordered). */
-function unique(xs, length) {
-    const u = sortFloat64(xs.subarray(0, length));
-    return u.slice(0, packDistinct(u, u.length));
-}
-/** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
-function fillUniform(out, count, lo, hi) {
-    const width = hi - lo;
-    for (let t = 0; t < count; t++)
-        out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
-}
-/** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
-function fillGaps(out, at, distinct, gaps, per) {
-    let w = at;
-    for (let g = 0; g < gaps.length; g++) {
-        const a = distinct[gaps[g]];
-        const b = distinct[gaps[g] + 1];
-        for (let t = 1; t <= per; t++)
-            out[w++] = a + ((b - a) * t) / (per + 1);
-    }
-    return w;
-}
-/** `count` points on each side of [lo, hi], at (t / count) of `reach` for t = 1..count, alternating below and above. */
-function marginGrid(lo, hi, reach, count) {
-    const beyond = new Float64Array(2 * count);
-    for (let t = 1; t <= count; t++) {
-        const d = (reach * t) / count;
-        beyond[2 * t - 2] = lo - d;
-        beyond[2 * t - 1] = hi + d;
-    }
-    return beyond;
-}
-/**
- * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
- * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
- * is found by selection ({@link select}) on one typed array of the widths.
- */
-function widestGaps(distinct, maxGaps, work) {
-    const count = distinct.length - 1;
-    if (count <= maxGaps)
-        return Int32Array.from({ length: count }, (_, g) => g);
-    const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
-    gapWidths(distinct, count, widths);
-    const threshold = (0,column_median/* selectKth */.I)(widths, count - maxGaps);
-    const out = new Int32Array(maxGaps);
-    pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
-    return out;
-}
-// One loop per function (see DEVELOPERS.md, "Writing hot loops").
-/** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
-function gapWidths(distinct, count, widths) {
-    for (let g = 0; g < count; g++)
-        widths[g] = distinct[g + 1] - distinct[g];
-}
-/** How many of the first `count` gaps are wider than `threshold`. */
-function gapsWiderThan(distinct, count, threshold) {
-    let above = 0;
-    for (let g = 0; g < count; g++)
-        if (distinct[g + 1] - distinct[g] > threshold)
-            above++;
-    return above;
-}
-/** Writes to `out`, ascending, every gap wider than `threshold` and the first `ties` gaps equal to it. */
-function pickGaps(distinct, count, threshold, ties, out) {
-    let left = ties;
-    let w = 0;
-    for (let g = 0; g < count; g++) {
-        const width = distinct[g + 1] - distinct[g];
-        if (width > threshold || (width === threshold && left-- > 0))
-            out[w++] = g;
-    }
-}
-/**
- * Copies the values an input's grid is built from into `out` and returns how many: every row
- * when there are at most `max`, else `max - 2` rows at an even stride plus the smallest and the
- * largest value. Large files have gaps far narrower than any swing, so the sample loses nothing
- * the figure could show and saves sorting millions of values.
- */
-function gridSample(column, n, max, out) {
-    if (n <= max) {
-        out.set(column.subarray(0, n));
-        return n;
-    }
-    const [lo, hi] = (0,stats/* range */.y1)(column, n);
-    const strided = max - 2;
-    out[strided] = lo;
-    out[strided + 1] = hi;
-    stridedSample(column, n, strided, out);
-    return max;
-}
-/** out[t] = column[floor(t n / count)] for t = 0 .. count-1. */
-function stridedSample(column, n, count, out) {
-    for (let t = 0; t < count; t++)
-        out[t] = column[Math.floor((t * n) / count)];
-}
-/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
-function thinIndices(length, count, keep) {
-    if (length <= count)
-        return Array.from({ length }, (_, i) => i);
-    const chosen = new Set(keep.filter((i) => i >= 0 && i < length));
-    const slots = Math.max(2, count - chosen.size);
-    for (let t = 0; t < slots; t++)
-        chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
-    return [...chosen].sort((a, b) => a - b);
-}
-/**
- * Predictions along input c with every other input fixed, as a function of that input's values:
- * terms that do not read input c add the same amount at every point, so they are evaluated once
- * (at the fixed values) and only the terms that read c are filled per point. A model whose every
- * term reads c is predicted with its whole design, as {@link predictRows} does.
- *
- * @param design the fitted design
- * @param coefficients fitted coefficients (length p)
- * @param c index of the varying input in `design.inputs`
- * @param fixed value of every input (entry c is ignored)
- * @returns predict(xs): predictions at the points xs of input c
- */
-function predictorAlong(design, coefficients, c, fixed) {
-    const name = design.inputs[c];
-    const varying = design.terms.map((t) => t.inputs.includes(name));
-    const constantColumns = (n) => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
-    if (varying.every(Boolean)) {
-        return (xs) => {
-            const columns = constantColumns(xs.length);
-            columns[c] = xs;
-            return (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: xs.length }, coefficients);
-        };
-    }
-    // The fixed part: intercept plus every term that does not read input c, at the fixed values.
-    const row = design.fill(constantColumns(1), 0, 1);
-    let base = design.intercept ? coefficients[0] : 0;
-    const sub = [];
-    design.terms.forEach((t, i) => {
-        const first = design.termOffsets[i];
-        const width = t.columnNames.length;
-        for (let j = first; j < first + width; j++) {
-            if (varying[i])
-                sub.push(coefficients[j]);
-            else
-                base += row[j] * coefficients[j];
-        }
-    });
-    const partial = (0,design_matrix/* createDesign */.x)(design.terms.filter((_, i) => varying[i]), false);
-    const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
-    return (xs) => {
-        const columns = partial.inputs.map((input) => (input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN)));
-        const out = (0,blocks/* predictRows */.tp)(partial, { inputs: columns, rows: xs.length }, sub);
-        for (let i = 0; i < out.length; i++)
-            out[i] += base;
-        return out;
-    };
-}
-/**
- * Merges two ascending point sets that never share a value (the margins lie outside the range)
- * with their predictions into xs and ps (length of both sets together): the order a stable sort
- * by x gives.
- */
-function mergeAscending(ax, ap, bx, bp, xs, ps) {
-    const na = ax.length;
-    const nb = bx.length;
-    for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
-        if (b >= nb || (a < na && ax[a] <= bx[b])) {
-            xs[dst] = ax[a];
-            ps[dst] = ap[a++];
-        }
-        else {
-            xs[dst] = bx[b];
-            ps[dst] = bp[b++];
-        }
-    }
-}
-/** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
-function extremeIndices(values) {
-    return [indexOfSmallest(values), indexOfLargest(values)];
-}
-// One loop per function (see DEVELOPERS.md, "Writing hot loops").
-function indexOfSmallest(values) {
-    let imin = 0;
-    for (let i = 1; i < values.length; i++)
-        if (values[i] < values[imin])
-            imin = i;
-    return imin;
-}
-function indexOfLargest(values) {
-    let imax = 0;
-    for (let i = 1; i < values.length; i++)
-        if (values[i] > values[imax])
-            imax = i;
-    return imax;
-}
-/** Excursion of one prediction: max(0, v - hi, lo - v) / (hi - lo); Infinity for NaN. */
-function pointExcursion(v, lo, hi) {
-    return Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / (hi - lo);
-}
-/** The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than -Infinity. */
-function worstExcursionIndex(pred, m, lo, hi) {
-    let value = -Infinity;
-    let index = 0;
-    for (let i = 0; i < m; i++) {
-        const e = pointExcursion(pred[i], lo, hi);
-        if (e > value) {
-            value = e;
-            index = i;
-        }
-    }
-    return index;
-}
-/**
- * The inputs of the sampled rows, each divided by its standard deviation over them after taking
- * off their mean (0 for an input without spread), row-major: flat[a * d + c] for the neighbour
- * search.
- */
-function scaledRows(inputs, rows) {
-    const s = rows.length;
-    const d = inputs.length;
-    const flat = new Float64Array(s * d);
-    const v = new Float64Array(s);
-    for (let c = 0; c < d; c++) {
-        const col = inputs[c];
-        for (let a = 0; a < s; a++)
-            v[a] = col[rows[a]];
-        let mean = 0;
-        for (let a = 0; a < s; a++)
-            mean += v[a] / s;
-        let ss = 0;
-        for (let a = 0; a < s; a++)
-            ss += (v[a] - mean) * (v[a] - mean);
-        const sd = Math.sqrt(ss / s);
-        for (let a = 0; a < s; a++)
-            flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
-    }
-    return flat;
-}
-/** `perSegment` evenly spaced points strictly inside each segment between a row and its neighbour, one column per input. */
-function segmentPoints(inputs, pairs, perSegment) {
-    const d = inputs.length;
-    const segmentsCount = pairs.length / 2;
-    const m = segmentsCount * perSegment;
-    const columns = inputs.map(() => new Float64Array(m));
-    for (let c = 0; c < d; c++)
-        segmentsAlong(inputs[c], pairs, segmentsCount, perSegment, columns[c]);
-    return columns;
-}
-/** One input's points inside every segment (pairs[2q] to pairs[2q + 1]), `perSegment` each, into `out`. */
-function segmentsAlong(col, pairs, segmentsCount, perSegment, out) {
-    for (let q = 0; q < segmentsCount; q++) {
-        const from = col[pairs[2 * q]];
-        const to = col[pairs[2 * q + 1]];
-        for (let t = 1; t <= perSegment; t++)
-            out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
-    }
-}
-/**
- * The coefficient-independent part of {@link measureSwing}: band, medians, grids and segments.
- *
- * @param design the model's design (only its inputs are read)
- * @param train training rows (inputs in `design.inputs` order)
- * @param options grid sizes (see {@link SwingOptions})
- */
-function planSwing(design, train, options = {}) {
-    const n = train.rows;
-    const d = design.inputs.length;
-    const [ylo, yhi] = (0,stats/* range */.y1)(train.y, n);
-    // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
-    const scratch = new Float64Array(n);
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
-    const radixScratch = new Uint32Array(2 * n);
-    const grids = [];
-    const gridOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
-    for (let c = 0; c < d; c++) {
-        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
-        const sample = scratch.subarray(0, len);
-        const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
-        if (grid.inside.length > 0)
-            grids.push({ input: c, inside: grid.inside, beyond: grid.beyond });
-    }
-    // Several inputs: segments between sampled rows and their nearest neighbours.
-    let segments = null;
-    let segmentColumns = null;
-    if (d >= 2 && n >= 2) {
-        const maxRows = options.maxRows ?? 1000;
-        const kNear = options.neighbours ?? 3;
-        const perSegment = options.segmentPoints ?? 8;
-        const s = Math.min(n, maxRows);
-        const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
-        const flat = scaledRows(train.inputs, rows);
-        const kk = Math.min(kNear, s - 1);
-        const pairs = nearestPairs(flat, s, d, kk, rows);
-        if (pairs.length > 0 && perSegment > 0)
-            segmentColumns = segmentPoints(train.inputs, pairs, perSegment);
-        segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
-    }
-    return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
-}
-/**
- * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
- *
- * @param plan from {@link planSwing} on the same design and rows
- * @param design the fitted design
- * @param coefficients fitted coefficients (length p)
- */
-function scoreSwing(plan, design, coefficients) {
-    const [ylo, yhi] = plan.band;
-    const { medians, maxCurvePoints } = plan;
-    let inside = 0;
-    let beyond = 0;
-    let insideCount = 0;
-    let beyondCount = 0;
-    let worstInside = null;
-    let worstBeyond = null;
-    const pointAt = (columns, i, prediction) => {
-        const inputs = {};
-        design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
-        return { inputs, prediction };
-    };
-    /** Scores points (predicted here unless their predictions are given); returns the predictions. */
-    const score = (columns, m, where, given) => {
-        const pred = given ?? (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
-        if (m > 0) {
-            const index = worstExcursionIndex(pred, m, ylo, yhi);
-            const value = pointExcursion(pred[index], ylo, yhi);
-            if (where === 'inside') {
-                if (worstInside === null || value > inside) {
-                    inside = Math.max(inside, value);
-                    worstInside = pointAt(columns, index, pred[index]);
-                }
-            }
-            else if (worstBeyond === null || value > beyond) {
-                beyond = Math.max(beyond, value);
-                worstBeyond = pointAt(columns, index, pred[index]);
-            }
-        }
-        if (where === 'inside')
-            insideCount += m;
-        else
-            beyondCount += m;
-        return pred;
-    };
-    // Along each input, the others at their medians (one reused column of each median).
-    const constants = medians.map(() => new Float64Array(0));
-    const constant = (k, length) => {
-        if (constants[k].length < length)
-            constants[k] = new Float64Array(length).fill(medians[k]);
-        return constants[k].subarray(0, length);
-    };
-    const curves = [];
-    for (const grid of plan.grids) {
-        const c = grid.input;
-        const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
-        const predict = predictorAlong(design, coefficients, c, medians);
-        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
-        const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
-        // Curve for charts: all points ascending, thinned with the extremes kept.
-        const xs = new Float64Array(grid.inside.length + grid.beyond.length);
-        const ps = new Float64Array(xs.length);
-        mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
-        const [imin, imax] = extremeIndices(ps);
-        const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
-        const others = {};
-        design.inputs.forEach((name, k) => {
-            if (k !== c)
-                others[name] = medians[k];
-        });
-        curves.push({
-            input: design.inputs[c],
-            others,
-            range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
-            x: keep.map((i) => xs[i]),
-            prediction: keep.map((i) => ps[i]),
-        });
-    }
-    if (plan.segmentColumns !== null)
-        score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
-    const valid = ylo < yhi;
-    return {
-        inside: valid && insideCount > 0 ? inside : Number.NaN,
-        beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
-        band: [ylo, yhi],
-        points: { inside: insideCount, beyond: beyondCount },
-        worstInside,
-        worstBeyond,
-        curves,
-        segments: plan.segments,
-        margin: plan.margin,
-    };
-}
-/**
- * Measures swing between and beyond samples for a fitted model: {@link planSwing}, then
- * {@link scoreSwing}.
- *
- * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
- * same grid along each input with the other inputs at their training medians, and (b) points on
- * the segments between each of up to `maxRows` sampled training rows (an even stride through the
- * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
- * standard deviations). Margins are along each input. The figure is {@link excursion} against the
- * band of training targets.
- *
- * @param design the fitted design
- * @param train training rows (inputs in `design.inputs` order)
- * @param coefficients fitted coefficients (length p)
- * @param options grid sizes (see {@link SwingOptions})
- */
-function measureSwing(design, train, coefficients, options = {}) {
-    return scoreSwing(planSwing(design, train, options), design, coefficients);
-}
-
-;// CONCATENATED MODULE: ./src/diagnostics/shared.ts
-
-
-
-
-/** Memo key of {@link sharedFolds} (the pipeline fills it from its own pass). */
-const SHARED_FOLDS_KEY = 'diagnostics/folds';
-/** Memo key of {@link sharedCrossValidation} (the pipeline fills it from its own passes). */
-const SHARED_CROSS_VALIDATION_KEY = 'diagnostics/cross-validation';
-/** Memo key of {@link sharedFoldFactors} (the pipeline fills it from its own pass). */
-const SHARED_FOLD_FACTORS_KEY = 'diagnostics/fold-factors';
-/** The model's folds from its `fit` settings (k = fit.folds, order fit.foldOrder, seed fit.seed). */
-function sharedFolds(context) {
-    return context.shared(SHARED_FOLDS_KEY, () => {
-        const { folds, foldOrder, seed } = context.descriptor.fit;
-        return (0,diagnostics_folds/* assignFolds */.o)(context.train.rows, folds, foldOrder, seed);
-    });
-}
-/** QR factors of each fold's training rows and of each fold's complement (one pass when not memoised). */
-function sharedFoldFactors(context) {
-    return context.shared(SHARED_FOLD_FACTORS_KEY, () => {
-        const perFold = (0,cross_validation/* foldFactors */.Y6)(context.design, context.train, sharedFolds(context));
-        return { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
-    });
-}
-/** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
-function sharedCrossValidation(context) {
-    return context.shared(SHARED_CROSS_VALIDATION_KEY, () => {
-        const { perFold, complements } = sharedFoldFactors(context);
-        return (0,cross_validation/* crossValidate */.DJ)(context.design, context.train, context.fit, sharedFolds(context), { factors: perFold, complements });
-    });
-}
-/** Memo key of {@link sharedSwing}. */
-const SHARED_SWING_KEY = 'diagnostics/swing';
-/** Memo key of {@link sharedLeakage}. */
-const SHARED_LEAKAGE_KEY = 'diagnostics/leakage';
-/** Swing between and beyond samples of the refit (see {@link measureSwing}). */
-function sharedSwing(context) {
-    return context.shared(SHARED_SWING_KEY, () => measureSwing(context.design, context.train, context.fit.coefficients));
-}
-/** Hold-out rows that repeat a training row (see {@link findLeakage}). */
-function sharedLeakage(context) {
-    return context.shared(SHARED_LEAKAGE_KEY, () => findLeakage(context.train, context.holdout));
-}
-
-
-/***/ }),
-
-/***/ 3916:
+/***/ 155:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   cl: () => (/* binding */ quoteValue),
-/* harmony export */   dz: () => (/* binding */ InputError),
-/* harmony export */   gJ: () => (/* binding */ errorMessage)
+/* harmony export */   _I: () => (/* binding */ errorMeasures),
+/* harmony export */   xB: () => (/* binding */ addErrors),
+/* harmony export */   y3: () => (/* binding */ emptySums),
+/* harmony export */   yr: () => (/* binding */ gapRatio)
 /* harmony export */ });
+/* harmony import */ var _design_stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6801);
 /**
- * Errors that stop a run (exit status 2) as opposed to check findings (exit status 1).
- *
- * Every problem with the user's files is an {@link InputError}: it carries the file
- * (repository-relative), the 1-based line and column where known, the key path inside a
- * YAML document, the offending value and what was expected, so that the CLI and the action
- * can print one line that says exactly what to fix.
- */
-/** A problem with the user's settings, descriptor, data or arguments: exit status 2. */
-class InputError extends Error {
-    name = 'InputError';
-    /** Where the problem is. */
-    location;
-    /** Stable machine-readable code, e.g. `yaml-syntax`, `schema`, `csv-cell`, `path-outside`. */
-    code;
-    /**
-     * @param code stable id of the kind of problem
-     * @param message what is wrong and what was expected (without the location prefix)
-     * @param location file, line, column and key where known
-     */
-    constructor(code, message, location = {}) {
-        super(message);
-        this.code = code;
-        this.location = location;
-    }
-    /** `file:line:column: key: message`, leaving out the parts that are unknown. */
-    describe() {
-        const { file, line, column, key } = this.location;
-        let where = file ?? '';
-        if (file !== undefined && line !== undefined)
-            where += `:${line}`;
-        if (file !== undefined && line !== undefined && column !== undefined)
-            where += `:${column}`;
-        const parts = [where, key !== undefined ? `\`${key}\`` : ''].filter((s) => s !== '');
-        return parts.length > 0 ? `${parts.join(': ')}: ${this.message}` : this.message;
-    }
-}
-/** Turns anything thrown into one line of text (no stack). */
-function errorMessage(error) {
-    if (error instanceof InputError)
-        return error.describe();
-    if (error instanceof Error)
-        return error.message;
-    return String(error);
-}
-/** Quotes a user value for an error message, cut to `max` characters (default 80). */
-function quoteValue(value, max = 80) {
-    let text;
-    if (typeof value === 'string')
-        text = JSON.stringify(value);
-    else if (value === undefined)
-        text = 'nothing';
-    else {
-        try {
-            text = JSON.stringify(value) ?? String(value);
-        }
-        catch {
-            text = String(value);
-        }
-    }
-    return text.length > max ? `${text.slice(0, max - 1)}…` : text;
-}
-
-
-/***/ }),
-
-/***/ 2485:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  SC: () => (/* reexport */ qr_accumulator_QrAccumulator),
-  rT: () => (/* binding */ RefinementPass),
-  Ps: () => (/* binding */ fitFactor),
-  lG: () => (/* binding */ leveragesInto),
-  C4: () => (/* binding */ refinementApplies),
-  gQ: () => (/* binding */ solveCoefficients)
-});
-
-// UNUSED EXPORTS: REFINE_MAX_CONDITION, REFINE_MIN_CONDITION, fitDesign, leverages, predict
-
-// EXTERNAL MODULE: ./src/fit/svd.ts
-var svd = __nccwpck_require__(5936);
-;// CONCATENATED MODULE: ./src/fit/factor-solver.ts
-/**
- * Rank decisions and solves with a p x p upper-triangular factor R of a design X = Q R.
- *
- * Rank is decided on the column-scaled factor R D^-1 (D = diag of column norms, which equal the
- * design's column norms because ||X e_j|| = ||R e_j||): Householder QR is column-scaling
- * invariant, so the scaled singular values measure collinearity without being fooled by units.
- * Tolerance: a singular value counts when s_i > max(n, p) * eps * s_max (the rule of LAPACK's
- * xGELSS / numpy `matrix_rank`, applied here to the scaled factor; eps = 2^-52).
+ * Error measures of predictions against observed targets, over Float64Arrays.
+ * Formulas: RMSE = sqrt(mean((y - yhat)^2)), MAE = mean(|y - yhat|),
+ * R^2 = 1 - SSE / sum((y - mean(y))^2) (coefficient of determination; Draper & Smith,
+ * Applied Regression Analysis, 3rd ed., 1998, section 1.6). R^2 of hold-out rows uses the
+ * hold-out mean. All are NaN for zero rows; R^2 is NaN when the target is constant.
  */
 
-/**
- * Column norms and the SVD of the column-scaled factor, with the numerical rank.
- *
- * @param R p x p upper-triangular, column-major
- * @param p columns (>= 1)
- * @param rows rows the factor stands for (enters the tolerance max(rows, p) * eps * s_max)
- */
-function scaledSpectrum(R, p, rows) {
-    const columnNorms = new Float64Array(p);
-    const scaled = new Float64Array(p * p);
-    for (let j = 0; j < p; j++) {
-        let amax = 0;
-        for (let i = 0; i <= j; i++)
-            amax = Math.max(amax, Math.abs(R[j * p + i]));
-        let ss = 0;
-        if (amax > 0)
-            for (let i = 0; i <= j; i++)
-                ss += (R[j * p + i] / amax) ** 2;
-        const d = amax * Math.sqrt(ss);
-        columnNorms[j] = d;
-        const div = d > 0 ? d : 1;
-        for (let i = 0; i <= j; i++)
-            scaled[j * p + i] = R[j * p + i] / div;
-    }
-    const { s, V } = (0,svd/* svd */.C)(scaled, p, p, 'right');
-    const tolerance = Math.max(rows, p) * Number.EPSILON * s[0];
-    let rank = 0;
-    while (rank < p && s[rank] > tolerance)
-        rank++;
-    return { columnNorms, singularValues: s, V, tolerance, rank };
+/** Empty sums. */
+function emptySums() {
+    return { n: 0, sse: 0, sae: 0, shift: Number.NaN, sy: 0, syy: 0 };
 }
 /**
- * Singular values of the factor as it is (no scaling), descending.
- *
- * @param R p x p column-major
- * @param p columns (>= 1)
+ * Adds `m` observations (targets `y`, predictions `yhat`) to `sums`. Each sum is its own pass
+ * (one loop per function; see DEVELOPERS.md, "Writing hot loops"), added in row order.
  */
-function rawSingularValues(R, p) {
-    return (0,svd/* svd */.C)(R, p, p, 'none').s;
+function addErrors(sums, y, yhat, m) {
+    if (m > 0 && Number.isNaN(sums.shift))
+        sums.shift = y[0];
+    sums.n += m;
+    sums.sse += squaredErrorSum(y, yhat, m);
+    sums.sae += absoluteErrorSum(y, yhat, m);
+    sums.sy += (0,_design_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfDeviations */ .jZ)(y, m, sums.shift);
+    sums.syy += (0,_design_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfSquaredDeviations */ .Mq)(y, m, sums.shift);
 }
-/**
- * Solves with R (p x p upper triangular, column-major) given its numerical rank: triangular
- * substitution when rank = p (most accurate), else the truncated SVD of R keeping the `rank`
- * largest singular values (minimum-norm least-squares solutions, pseudo-inverse products).
- */
-class FactorSolver {
-    p;
-    rank;
-    #R;
-    #svd;
-    /**
-     * @param R p x p upper-triangular factor, column-major (not copied: do not change it while in use)
-     * @param p columns
-     * @param rank numerical rank from {@link scaledSpectrum} (0..p)
-     */
-    constructor(R, p, rank) {
-        this.p = p;
-        this.rank = rank;
-        this.#R = R;
-        this.#svd = rank < p && rank > 0 ? (0,svd/* svd */.C)(R, p, p) : undefined;
+/** Sum of (y - yhat)^2 over the first m rows. */
+function squaredErrorSum(y, yhat, m) {
+    let sse = 0;
+    for (let i = 0; i < m; i++) {
+        const r = y[i] - yhat[i];
+        sse += r * r;
     }
-    /** w = R^+ b (back-substitution R w = b when full rank). Length p in, length p out. */
-    solve(b) {
-        const p = this.p;
-        const R = this.#R;
-        const w = new Float64Array(p);
-        if (this.rank === p) {
-            for (let j = p - 1; j >= 0; j--) {
-                let t = b[j];
-                for (let k = j + 1; k < p; k++)
-                    t -= R[k * p + j] * w[k];
-                w[j] = t / R[j * p + j];
-            }
-            return w;
-        }
-        const dec = this.#svd;
-        if (dec === undefined)
-            return w; // rank 0: the minimum-norm solution is zero
-        for (let c = 0; c < this.rank; c++) {
-            let t = 0;
-            for (let i = 0; i < p; i++)
-                t += dec.U[c * p + i] * b[i];
-            t /= dec.s[c];
-            for (let i = 0; i < p; i++)
-                w[i] += dec.V[c * p + i] * t;
-        }
-        return w;
-    }
-    /**
-     * z with ||z||^2 = x^T (R^T R)^+ x: z = R^-T x by forward substitution when full rank, else
-     * S_r^-1 V_r^T x from the truncated SVD. Its squared norm is the leverage of row x.
-     *
-     * @param x a row of the design, length p
-     * @param z output, length p (entries beyond the rank are set to 0)
-     */
-    whiten(x, z) {
-        const p = this.p;
-        const R = this.#R;
-        if (this.rank === p) {
-            for (let j = 0; j < p; j++) {
-                let t = x[j];
-                for (let k = 0; k < j; k++)
-                    t -= R[j * p + k] * z[k];
-                z[j] = t / R[j * p + j];
-            }
-            return z;
-        }
-        z.fill(0);
-        const dec = this.#svd;
-        if (dec === undefined)
-            return z;
-        for (let c = 0; c < this.rank; c++) {
-            let t = 0;
-            for (let i = 0; i < p; i++)
-                t += dec.V[c * p + i] * x[i];
-            z[c] = t / dec.s[c];
-        }
-        return z;
-    }
-    /** (R^T R)^+ g: R^-1 R^-T g when full rank, else V_r S_r^-2 V_r^T g. Length p. */
-    solveNormal(g) {
-        const p = this.p;
-        if (this.rank === p)
-            return this.solve(this.whiten(g, new Float64Array(p)));
-        const out = new Float64Array(p);
-        const dec = this.#svd;
-        if (dec === undefined)
-            return out;
-        for (let c = 0; c < this.rank; c++) {
-            let t = 0;
-            for (let i = 0; i < p; i++)
-                t += dec.V[c * p + i] * g[i];
-            t /= dec.s[c] * dec.s[c];
-            for (let i = 0; i < p; i++)
-                out[i] += dec.V[c * p + i] * t;
-        }
-        return out;
-    }
+    return sse;
 }
-
-// EXTERNAL MODULE: ./src/fit/wasm-kernels.ts + 1 modules
-var wasm_kernels = __nccwpck_require__(9554);
-;// CONCATENATED MODULE: ./src/fit/qr-accumulator.ts
-/**
- * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
- * factor block by block, so memory grows with p^2 and not with the number of rows.
- *
- * Folding a block of m rows computes the QR factorisation of the stacked matrix
- *
- *     [ R    qty ]
- *     [ X_b  y_b ]
- *
- * where R is already triangular. Householder reflector j only has to touch row j of R and the
- * m block rows, so a block costs O(m p^2) flops (Golub & Van Loan, Matrix Computations, 4th ed.,
- * sec. 5.1-5.2 Householder QR, and sec. 6.5.2 on updating a QR factorisation by appending rows).
- * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
- */
-
-/** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
-const WORK_NUMBERS = 16384;
-/** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
-const SAFE_SMALL = 1e-150;
-const SAFE_LARGE = 1e150;
-/**
- * Streaming Householder QR: folds row blocks into an upper-triangular p x p factor R, Q^T y and
- * the residual sum of squares.
- *
- * With X the n x p matrix of every row folded so far and y its right-hand side, the state is
- * X = Q [R; 0], Q^T y = [qty; r] and `rss` = ||r||^2, which is the least-squares residual sum of
- * squares min ||X w - y||^2 when R has full rank. Reflectors use the sign choice
- * beta = -sign(alpha) ||a|| (no cancellation), so diagonal entries of R may be negative.
- *
- * @example
- * const acc = new QrAccumulator(2);
- * acc.addRows(new Float64Array([1, 1, 1, 0, 1, 2]), new Float64Array([1, 2, 3]), 3);
- */
-class qr_accumulator_QrAccumulator {
-    /** Number of columns. */
-    p;
-    #rows = 0;
-    #R;
-    #qty;
-    #rss = 0;
-    /** Work block (column-major, leading dimension `#chunk`) and its right-hand side. */
-    #work;
-    #workY;
-    #chunk;
-    /**
-     * @param p number of columns of the design (a non-negative integer)
-     * @throws RangeError when p is not a non-negative integer
-     */
-    constructor(p) {
-        if (!Number.isInteger(p) || p < 0) {
-            throw new RangeError(`QrAccumulator: p must be a non-negative integer, got ${String(p)}`);
-        }
-        this.p = p;
-        this.#R = new Float64Array(p * p);
-        this.#qty = new Float64Array(p);
-        this.#chunk = Math.max(16, Math.floor(WORK_NUMBERS / (p + 1)));
-    }
-    /** Number of rows folded in so far (all rows, including penalty rows). */
-    get rows() {
-        return this.#rows;
-    }
-    /**
-     * Upper-triangular factor, p x p, column-major (R[j*p + i]); rows beyond the rank are zero
-     * (up to rounding) when fewer rows than p were folded. This is the live array: read it, do
-     * not write it (use {@link clone} for a copy to change).
-     */
-    get R() {
-        return this.#R;
-    }
-    /** First p entries of Q^T y (live array: read only). */
-    get qty() {
-        return this.#qty;
-    }
-    /** Sum of squares of the remaining entries of Q^T y (the least-squares residual sum of squares when R has full rank). */
-    get rss() {
-        return this.#rss;
-    }
-    /**
-     * Fold m rows into the factor. Large m is processed in internal blocks; the inputs are not
-     * modified.
-     *
-     * @param X column-major m x p block (X[j*m + i] is row i, column j); length at least m*p
-     * @param y right-hand side, length m or more (the first m entries are used)
-     * @param m number of rows (a non-negative integer; 0 does nothing)
-     * @throws RangeError on bad shapes or a NaN / infinite value (the message names row and column)
-     */
-    addRows(X, y, m) {
-        const p = this.p;
-        if (!Number.isInteger(m) || m < 0) {
-            throw new RangeError(`addRows: m must be a non-negative integer, got ${String(m)}`);
-        }
-        if (X.length < m * p) {
-            throw new RangeError(`addRows: X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
-        }
-        if (y.length < m) {
-            throw new RangeError(`addRows: y must hold at least m = ${m} numbers, got ${y.length}`);
-        }
-        this.#foldAll(X, y, m);
-        this.#rows += m;
-    }
-    /**
-     * Fold another accumulator's factor into this one: stack [R1; R2] (with their Q^T y) and
-     * re-triangularise; residual sums of squares and row counts add. Used for k-fold
-     * cross-validation: the fit without fold k is the merge of the other folds.
-     *
-     * @param other an accumulator with the same p (not modified)
-     * @throws RangeError when the column counts differ
-     */
-    merge(other) {
-        if (other.p !== this.p) {
-            throw new RangeError(`merge: column counts differ (${this.p} and ${other.p})`);
-        }
-        // R2 is column-major p x p with leading dimension p: exactly the block layout of addRows.
-        // Copy first so that merging an accumulator into itself reads the old factor.
-        const R2 = Float64Array.from(other.#R);
-        const qty2 = Float64Array.from(other.#qty);
-        const rss2 = other.#rss;
-        const rows2 = other.#rows;
-        this.#foldAll(R2, qty2, this.p);
-        this.#rss += rss2;
-        this.#rows += rows2;
-    }
-    /** An independent copy (same factor, right-hand side, rss and row count). */
-    clone() {
-        const copy = new qr_accumulator_QrAccumulator(this.p);
-        copy.#R.set(this.#R);
-        copy.#qty.set(this.#qty);
-        copy.#rss = this.#rss;
-        copy.#rows = this.#rows;
-        return copy;
-    }
-    /**
-     * Folds a column-major m x p block in pieces of at most `#chunk` rows: in WebAssembly where it
-     * is in use (wasm-kernels.ts; the same operations in the same order), else below.
-     */
-    #foldAll(X, y, m) {
-        const chunk = this.#chunk;
-        const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
-        if (kernels !== null) {
-            const { rss, bad } = (0,wasm_kernels/* foldRows */.$8)(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
-            this.#rss = rss;
-            if (bad !== null)
-                throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
-            return;
-        }
-        for (let start = 0; start < m; start += chunk) {
-            this.#fold(X, m, y, start, Math.min(chunk, m - start));
-        }
-    }
-    /**
-     * Copies rows [start, start + mb) of the column-major block X (leading dimension ldx) into
-     * the work block, checking every value, then annihilates them against R.
-     */
-    #fold(X, ldx, y, start, mb) {
-        const p = this.p;
-        const ld = this.#chunk;
-        if (this.#work === undefined || this.#workY === undefined) {
-            this.#work = new Float64Array(ld * p);
-            this.#workY = new Float64Array(ld);
-        }
-        copyChecked(X, ldx, y, start, mb, p, this.#work, this.#workY, ld);
-        annihilate(this.#R, this.#qty, this.#work, this.#workY, ld, p, mb);
-        // What is left of the block's right-hand side is orthogonal to the column space.
-        this.#rss += qr_accumulator_sumOfSquares(this.#workY, mb);
-    }
-}
-// The kernels below are separate functions, each one loop nest, so that V8 optimises each
-// whole (a loop that first runs after another loop was optimised mid-function has no type
-// feedback and throws the optimised code away, block after block).
-/**
- * Copies rows [start, start + mb) of the column-major X (leading dimension ldx) and of y into C
- * (leading dimension ld) and yc.
- * @throws RangeError naming row and column when a value is NaN or infinite
- */
-function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
-    for (let j = 0; j < p; j++)
-        copyColumnChecked(X, j * ldx + start, C, j * ld, mb, start, j);
-    copyColumnChecked(y, start, yc, 0, mb, start, -1);
-}
-/**
- * Copies mb values from src[from..] to dst[to..] (one loop per function; see DEVELOPERS.md,
- * "Writing hot loops").
- * @param firstRow the row of src[from], for the error
- * @param column the column of X, or -1 for y, for the error
- * @throws RangeError naming row and column when a value is NaN or infinite
- */
-function copyColumnChecked(src, from, dst, to, mb, firstRow, column) {
-    for (let i = 0; i < mb; i++) {
-        const v = src[from + i];
-        if (!Number.isFinite(v))
-            throw notFinite(firstRow + i, column, v);
-        dst[to + i] = v;
-    }
-}
-/** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
-function notFinite(row, column, value) {
-    const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
-    return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
-}
-/** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
-function qr_accumulator_sumOfSquares(v, m) {
-    let s = 0;
+/** Sum of |y - yhat| over the first m rows. */
+function absoluteErrorSum(y, yhat, m) {
+    let sae = 0;
     for (let i = 0; i < m; i++)
-        s += v[i] * v[i];
-    return s;
+        sae += Math.abs(y[i] - yhat[i]);
+    return sae;
 }
-/**
- * Householder reflections that zero the mb x p block C (leading dimension ld) against the
- * triangular R (p x p, column-major), applied to qty and yc alike. Each step is a function of its
- * own (one loop nest each), so that V8 compiles the small hot pieces separately and soon.
- */
-function annihilate(R, qty, C, yc, ld, p, mb) {
-    for (let j = 0; j < p; j++) {
-        const cj = j * ld;
-        const alpha = R[j * p + j];
-        const beta = reflector(C, cj, mb, alpha);
-        if (Number.isNaN(beta))
-            continue; // nothing to annihilate in this column
-        const tau = (beta - alpha) / beta;
-        let k = j + 1;
-        // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
-        // operations and their order are those of the single-column loop).
-        for (; k + 3 < p; k += 4)
-            reflectFour(R, C, ld, p, j, k, mb, tau);
-        for (; k + 1 < p; k += 2)
-            reflectTwo(R, C, ld, p, j, k, mb, tau);
-        for (; k < p; k++)
-            reflectOne(R, C, ld, p, j, k, mb, tau);
-        reflectTarget(qty, yc, C, cj, mb, tau, j);
-        R[j * p + j] = beta;
-    }
-}
-/**
- * The reflector for column j of [R; C] with a = [alpha; C[cj..cj+mb)]: H = I - tau u u^T with
- * u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]], tau = (beta - alpha) / beta in
- * [1, 2] (the normalisation of LAPACK's dlarfg). Every |u_i| <= 1, so no intermediate overflows or
- * underflows however tiny the column is. Overwrites the column with u's lower part and returns
- * beta; NaN (the column unchanged) when the block part is zero.
- */
-function reflector(C, cj, mb, alpha) {
-    const amax = Math.max(Math.abs(alpha), largestMagnitudeIn(C, cj, mb));
-    if (amax === 0)
-        return Number.NaN;
-    let norm;
-    if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
-        const sigma = sumOfSquaresIn(C, cj, mb); // sum of squares of the block part
-        if (sigma === 0)
-            return Number.NaN;
-        norm = Math.sqrt(alpha * alpha + sigma);
-    }
-    else {
-        const scaled = scaledSumOfSquaresIn(C, cj, mb, amax);
-        if (scaled === 0)
-            return Number.NaN;
-        const a0 = alpha / amax;
-        norm = amax * Math.sqrt(a0 * a0 + scaled);
-    }
-    const beta = alpha >= 0 ? -norm : norm;
-    divideIn(C, cj, mb, alpha - beta);
-    return beta;
-}
-function largestMagnitudeIn(C, from, n) {
-    let amax = 0;
-    for (let i = 0; i < n; i++) {
-        const a = Math.abs(C[from + i]);
-        if (a > amax)
-            amax = a;
-    }
-    return amax;
-}
-function sumOfSquaresIn(C, from, n) {
-    let sigma = 0;
-    for (let i = 0; i < n; i++) {
-        const c = C[from + i];
-        sigma += c * c;
-    }
-    return sigma;
-}
-function scaledSumOfSquaresIn(C, from, n, scale) {
-    let scaled = 0;
-    for (let i = 0; i < n; i++) {
-        const c = C[from + i] / scale;
-        scaled += c * c;
-    }
-    return scaled;
-}
-function divideIn(C, from, n, d) {
-    for (let i = 0; i < n; i++)
-        C[from + i] /= d;
-}
-/** Applies the reflector of column j (u in C's column j) to columns k .. k+3 of [R; C]. */
-function reflectFour(R, C, ld, p, j, k, mb, tau) {
-    const cj = j * ld;
-    const c1 = k * ld;
-    const c2 = c1 + ld;
-    const c3 = c2 + ld;
-    const c4 = c3 + ld;
-    const r1 = k * p + j;
-    let w1 = R[r1];
-    let w2 = R[r1 + p];
-    let w3 = R[r1 + 2 * p];
-    let w4 = R[r1 + 3 * p];
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        w1 += u * C[c1 + i];
-        w2 += u * C[c2 + i];
-        w3 += u * C[c3 + i];
-        w4 += u * C[c4 + i];
-    }
-    const f1 = tau * w1;
-    const f2 = tau * w2;
-    const f3 = tau * w3;
-    const f4 = tau * w4;
-    if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0)
-        return;
-    R[r1] -= f1;
-    R[r1 + p] -= f2;
-    R[r1 + 2 * p] -= f3;
-    R[r1 + 3 * p] -= f4;
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        C[c1 + i] -= f1 * u;
-        C[c2 + i] -= f2 * u;
-        C[c3 + i] -= f3 * u;
-        C[c4 + i] -= f4 * u;
-    }
-}
-/** Applies the reflector of column j to columns k and k+1 of [R; C]. */
-function reflectTwo(R, C, ld, p, j, k, mb, tau) {
-    const cj = j * ld;
-    const ck = k * ld;
-    const ck2 = ck + ld;
-    const rIdx = k * p + j;
-    const rIdx2 = rIdx + p;
-    let w1 = R[rIdx];
-    let w2 = R[rIdx2];
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        w1 += u * C[ck + i];
-        w2 += u * C[ck2 + i];
-    }
-    const f1 = tau * w1;
-    const f2 = tau * w2;
-    if (f1 === 0 && f2 === 0)
-        return;
-    R[rIdx] -= f1;
-    R[rIdx2] -= f2;
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        C[ck + i] -= f1 * u;
-        C[ck2 + i] -= f2 * u;
-    }
-}
-/** Applies the reflector of column j to column k of [R; C]. */
-function reflectOne(R, C, ld, p, j, k, mb, tau) {
-    const cj = j * ld;
-    const ck = k * ld;
-    const rIdx = k * p + j;
-    let w = R[rIdx];
-    for (let i = 0; i < mb; i++)
-        w += C[cj + i] * C[ck + i];
-    const f = tau * w;
-    if (f === 0)
-        return;
-    R[rIdx] -= f;
-    for (let i = 0; i < mb; i++)
-        C[ck + i] -= f * C[cj + i];
-}
-/** Applies the reflector of column j (u in C from cj) to the right-hand side [qty; yc]. */
-function reflectTarget(qty, yc, C, cj, mb, tau, j) {
-    let w = qty[j];
-    for (let i = 0; i < mb; i++)
-        w += C[cj + i] * yc[i];
-    const f = tau * w;
-    if (f === 0)
-        return;
-    qty[j] -= f;
-    for (let i = 0; i < mb; i++)
-        yc[i] -= f * C[cj + i];
-}
-
-;// CONCATENATED MODULE: ./src/fit/ridge.ts
-/**
- * Checks a penalty and its column mask.
- *
- * @param p number of columns
- * @param ridge lambda (default 0)
- * @param penalised mask of length p (default: every column)
- * @returns lambda and a concrete boolean mask of length p
- * @throws RangeError when lambda is negative or not finite, or the mask has the wrong length
- */
-function checkPenalty(p, ridge = 0, penalised) {
-    if (typeof ridge !== 'number' || !Number.isFinite(ridge) || ridge < 0) {
-        throw new RangeError(`ridge must be a finite number >= 0, got ${String(ridge)}`);
-    }
-    if (penalised !== undefined && penalised.length !== p) {
-        throw new RangeError(`penalised must have one entry per column (${p}), got ${penalised.length}`);
-    }
-    const mask = Array.from({ length: p }, (_, j) => (penalised === undefined ? true : Boolean(penalised[j])));
-    return { lambda: ridge, mask };
-}
-/**
- * The factor of [X; sqrt(lambda) E]: a clone of the data factor with one penalty row per
- * penalised column folded in. The penalty applies to the columns exactly as built (lambda is
- * not rescaled by column norms or row counts).
- *
- * @param data factor of the data rows (not modified)
- * @param lambda penalty >= 0; 0 (or no penalised column) returns a plain clone
- * @param mask length p, true where column j is penalised
- * @returns a new accumulator; its `rows` counts the penalty rows too
- */
-function penalisedFactor(data, lambda, mask) {
-    const factor = data.clone();
-    const p = data.p;
-    const cols = [];
-    for (let j = 0; j < p; j++)
-        if (mask[j])
-            cols.push(j);
-    if (lambda === 0 || cols.length === 0)
-        return factor;
-    const k = cols.length;
-    const E = new Float64Array(k * p);
-    const root = Math.sqrt(lambda);
-    cols.forEach((j, r) => {
-        E[j * k + r] = root;
-    });
-    factor.addRows(E, new Float64Array(k), k);
-    return factor;
-}
-
-;// CONCATENATED MODULE: ./src/fit/index.ts
-/**
- * The fitting engine: least squares and ridge from a streaming Householder QR factor, with
- * rank and conditioning diagnostics. This module decides how to solve (triangular substitution
- * or truncated SVD, with or without penalty rows); the solvers know nothing of that choice.
- *
- * Accuracy: on the 11 NIST StRD linear least-squares datasets (raw designs, no centring),
- * `fitDesign(..., { refine: true })` agrees with the certified coefficients and residual SD to at
- * least 9 significant digits, 7.7 on Filip (plain QR: at least 6.5, Wampler5 being the weakest;
- * see test/fit/nist-strd.test.ts, which prints every dataset's figures).
- */
-
-
-
-
-
-/**
- * Solves least squares or ridge from a data factor (data rows only). Never mutates `data`.
- *
- * Rank is decided on the column-scaled factor (see factor-solver.ts: s_i > max(n, p) eps s_max).
- * Full rank: back-substitution on R (most accurate). Rank deficient, or fewer rows than
- * parameters: the minimum-norm least-squares solution from the truncated SVD of R. Ridge solves
- * [X; sqrt(lambda) E] w ~ [y; 0] with E selecting the penalised columns.
- *
- * Edge cases: 0 rows gives rank 0, zero coefficients, condition numbers Infinity; p = 0 gives
- * empty arrays, rank 0, not deficient, condition numbers 1.
- *
- * @param data factor of the data rows
- * @param options ridge penalty (default 0) and penalised columns (default all)
- * @throws RangeError on a negative or non-finite penalty or a mask of the wrong length
- */
-function fitFactor(data, options = {}) {
-    const p = data.p;
-    const { lambda, mask } = checkPenalty(p, options.ridge, options.penalised);
-    const factor = penalisedFactor(data, lambda, mask);
-    if (p === 0) {
-        return {
-            coefficients: new Float64Array(0),
-            rank: 0,
-            rankDeficient: false,
-            conditionNumber: 1,
-            conditionNumberScaled: 1,
-            singularValuesScaled: new Float64Array(0),
-            collinearColumns: [],
-            factor,
-            rss: data.rss,
-            factorRank: 0,
-            degreesOfFreedom: 0,
-            ridge: lambda,
-            penalised: mask,
-            refined: false,
-        };
-    }
-    // Diagnostics of the design itself.
-    const spectrum = scaledSpectrum(data.R, p, data.rows);
-    const rank = spectrum.rank;
-    const rankDeficient = rank < p;
-    const sRaw = rawSingularValues(data.R, p);
-    const conditionNumber = rankDeficient ? Infinity : sRaw[0] / sRaw[p - 1];
-    const sScaled = spectrum.singularValues;
-    const conditionNumberScaled = rankDeficient ? Infinity : sScaled[0] / sScaled[p - 1];
-    const collinearColumns = [];
-    for (let j = 0; j < p; j++) {
-        if (spectrum.columnNorms[j] === 0 || Math.abs(spectrum.V[(p - 1) * p + j]) >= 0.1)
-            collinearColumns.push(j);
-    }
-    // Solve with the factor of the design plus penalty rows.
-    const factorRank = factor.rows === data.rows ? rank : scaledSpectrum(factor.R, p, factor.rows).rank;
-    const solver = new FactorSolver(factor.R, p, factorRank);
-    const coefficients = solver.solve(factor.qty);
+/** RMSE, MAE and R^2 from gathered sums. */
+function errorMeasures(sums) {
+    const { n, sse, sae, sy, syy } = sums;
+    if (n === 0)
+        return { rmse: Number.NaN, mae: Number.NaN, r2: Number.NaN, sse: 0 };
+    const sst = Math.max(0, syy - (sy * sy) / n);
     return {
-        coefficients,
-        rank,
-        rankDeficient,
-        conditionNumber,
-        conditionNumberScaled,
-        singularValuesScaled: sScaled,
-        collinearColumns,
-        factor,
-        rss: dataRss(data, coefficients),
-        factorRank,
-        degreesOfFreedom: hatTrace(data, solver),
-        ridge: lambda,
-        penalised: mask,
-        refined: false,
+        rmse: Math.sqrt(sse / n),
+        mae: sae / n,
+        r2: sst > 0 ? 1 - sse / sst : Number.NaN,
+        sse,
     };
 }
 /**
- * The coefficients {@link fitFactor} returns, without its diagnostics (condition numbers,
- * degrees of freedom): for the many solves of cross-validation and sweeps. The rank decision is
- * the same: full rank is taken without an SVD only when it is certain, i.e. when the lower bound
- * 1 / ||S^-1||_F of the smallest singular value of the column-scaled factor S exceeds the cutoff
- * max(rows, p) eps ||S||_F built on an upper bound of the largest (Golub & Van Loan, Matrix
- * Computations, 4th ed., sec. 2.3.2: ||A||_2 <= ||A||_F); otherwise the SVD decides.
- *
- * @param data factor of the data rows (not modified)
- * @param options ridge penalty (default 0) and penalised columns (default all)
- * @returns length p
- * @throws RangeError on a negative or non-finite penalty or a mask of the wrong length
+ * Generalisation-gap ratio: hold-out RMSE / training RMSE. Infinity when the training RMSE is 0
+ * and the hold-out RMSE is not; 1 when both are 0 (no gap).
  */
-function solveCoefficients(data, options = {}) {
-    const p = data.p;
-    const { lambda, mask } = checkPenalty(p, options.ridge, options.penalised);
-    const factor = penalisedFactor(data, lambda, mask);
-    if (p === 0)
-        return new Float64Array(0);
-    const rank = certainlyFullRank(factor.R, p, factor.rows) ? p : scaledSpectrum(factor.R, p, factor.rows).rank;
-    return new FactorSolver(factor.R, p, rank).solve(factor.qty);
-}
-/** True when the column-scaled triangular factor surely has rank p under the rule of {@link scaledSpectrum}. */
-function certainlyFullRank(R, p, rows) {
-    const S = new Float64Array(p * p);
-    let frob = 0;
-    for (let j = 0; j < p; j++) {
-        let ss = 0;
-        for (let i = 0; i <= j; i++)
-            ss += R[j * p + i] * R[j * p + i];
-        if (!(ss > 1e-280 && ss < 1e280))
-            return false; // leave extreme scales to the SVD
-        const d = Math.sqrt(ss);
-        for (let i = 0; i <= j; i++)
-            S[j * p + i] = R[j * p + i] / d;
-        frob += 1;
-    }
-    // ||S^-1||_F^2 by solving S x = e_c for each column c (back-substitution).
-    const x = new Float64Array(p);
-    let inv = 0;
-    for (let c = 0; c < p; c++) {
-        for (let i = p - 1; i >= 0; i--) {
-            let t = i === c ? 1 : 0;
-            for (let k = i + 1; k <= c; k++)
-                t -= S[k * p + i] * x[k];
-            const diag = S[i * p + i];
-            if (diag === 0)
-                return false;
-            x[i] = i > c ? 0 : t / diag;
-            if (i <= c)
-                inv += x[i] * x[i];
-        }
-    }
-    if (!Number.isFinite(inv))
-        return false;
-    const sMinLower = 1 / Math.sqrt(inv);
-    const sMaxUpper = Math.sqrt(frob);
-    // A safety factor of 2 covers the rounding of these bounds.
-    return sMinLower > 2 * Math.max(rows, p) * Number.EPSILON * sMaxUpper;
-}
-/**
- * Convenience: folds a whole column-major n x p design and solves it.
- *
- * @param X column-major n x p (X[j*n + i] is row i, column j)
- * @param y length n
- * @param n rows
- * @param p columns
- * @param options {@link FitOptions} plus `refine` (one refinement pass over the data; default false)
- * @throws RangeError on bad shapes, NaN or infinite input, or bad options
- */
-function fitDesign(X, y, n, p, options = {}) {
-    const acc = new QrAccumulator(p);
-    acc.addRows(X, y, n);
-    const fit = fitFactor(acc, options);
-    if (options.refine !== true || !refinementApplies(fit))
-        return fit;
-    const pass = new RefinementPass(fit);
-    pass.addRows(X, y, n);
-    const refined = pass.finish();
-    // The data are at hand: take rss directly from compensated residuals at the new coefficients.
-    if (!refined.refined)
-        return fit;
-    const r = new Float64Array(n);
-    residualsInto(X, y, n, refined.coefficients, r, new Float64Array(n));
-    return { ...refined, rss: sumOfSquares(r, n) };
-}
-/**
- * Largest scaled condition number for which {@link RefinementPass} applies its correction:
- * the corrected semi-normal equations step contracts the error by about kappa^2 eps (Björck
- * 1987, "Stability analysis of the method of seminormal equations", Linear Algebra Appl. 88/89),
- * so it is used when kappa^2 eps <= 1e-3, i.e. kappa <= about 2.1e6.
- */
-const REFINE_MAX_CONDITION = Math.sqrt(1e-3 / Number.EPSILON);
-/**
- * Scaled condition number at or below which the refinement pass is skipped: Householder QR is
- * backward stable, so its coefficients are then accurate to about kappa eps, 2e-14 norm-wise
- * (Golub & Van Loan, Matrix Computations, 4th ed., sec. 5.3.8), and the pass would cost about a
- * third of the fit for digits no figure shows. Measured on the benchmark's M workload (kappa
- * 19): without the pass the coefficients differ from the refined ones by 4e-15 norm-wise and
- * 2.5e-13 in the worst single coefficient, the reported figures by at most 7e-14 relative.
- */
-const REFINE_MIN_CONDITION = 100;
-/** True when a refinement pass changes `fit` ({@link REFINE_MIN_CONDITION} < kappa <= {@link REFINE_MAX_CONDITION}, full rank). */
-function refinementApplies(fit) {
-    return fit.coefficients.length > 0 && !fit.rankDeficient && fit.conditionNumberScaled > REFINE_MIN_CONDITION && fit.conditionNumberScaled <= REFINE_MAX_CONDITION;
-}
-/**
- * One step of iterative refinement computed in a streaming pass over the data rows (the same
- * rows, in any blocks, that built the fit's data factor): the corrected semi-normal equations
- * step w += (R^T R)^+ (X^T r - lambda E w) with r = y - X w and R the fit's factor (Björck,
- * Numerical Methods for Least Squares Problems, SIAM 1996, sec. 2.5.3 and 6.6.5). The
- * residuals and X^T r are accumulated in double-double arithmetic (compensated dot products,
- * Ogita, Rump & Oishi 2005, "Accurate sum and dot product", SIAM J. Sci. Comput. 26(6),
- * algorithm Dot2), which is what makes the step gain digits.
- *
- * The correction is applied only where {@link refinementApplies}: the design's scaled condition
- * number above {@link REFINE_MIN_CONDITION} and at most {@link REFINE_MAX_CONDITION}, full rank;
- * otherwise `finish` returns the
- * QR solution unchanged with `refined` false. `rss` of a refined fit is
- * ||r - X dw||^2 = ||r||^2 - 2 dw^T X^T r + dw^T X^T X dw with X^T X = R^T R - lambda E^T E, so
- * no third pass is needed.
- */
-class RefinementPass {
-    #fit;
-    #gHi;
-    #gLo;
-    #rss = 0;
-    /** @param fit a fit from {@link fitFactor} (not modified) */
-    constructor(fit) {
-        this.#fit = fit;
-        this.#gHi = new Float64Array(fit.coefficients.length);
-        this.#gLo = new Float64Array(fit.coefficients.length);
-    }
-    /**
-     * Adds m data rows to the pass.
-     *
-     * @param X column-major m x p block
-     * @param y length at least m
-     * @param m rows
-     * @throws RangeError on bad shapes or non-finite values
-     */
-    addRows(X, y, m) {
-        const w = this.#fit.coefficients;
-        const p = w.length;
-        // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
-        const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
-        if (kernels !== null) {
-            checkShape(X, y, m, p);
-            const { sumOfSquares: ss, bad } = (0,wasm_kernels/* refineRows */.Hb)(kernels, X, y, m, w, this.#gHi, this.#gLo);
-            if (bad !== null)
-                fit_notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
-            this.#rss += ss;
-            return;
-        }
-        checkBlock(X, y, m, p);
-        const hi = new Float64Array(m);
-        const lo = new Float64Array(m);
-        residualsInto(X, y, m, w, hi, lo);
-        this.#rss += qr_accumulator_sumOfSquares(hi, m);
-        for (let j = 0; j < p; j++)
-            addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
-    }
-    /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
-    finish() {
-        const fit = this.#fit;
-        const w = fit.coefficients;
-        const p = w.length;
-        if (!refinementApplies(fit))
-            return fit;
-        const lambda = fit.ridge;
-        const mask = fit.penalised;
-        const gData = new Float64Array(p);
-        for (let j = 0; j < p; j++)
-            gData[j] = this.#gHi[j] + this.#gLo[j];
-        // Gradient of the augmented problem: the penalty rows' residuals are -sqrt(lambda) E w.
-        const g = new Float64Array(p);
-        for (let j = 0; j < p; j++)
-            g[j] = gData[j] - (mask[j] ? lambda * w[j] : 0);
-        const solver = new FactorSolver(fit.factor.R, p, fit.factorRank);
-        const dw = solver.solveNormal(g);
-        const coefficients = new Float64Array(p);
-        for (let j = 0; j < p; j++)
-            coefficients[j] = w[j] + dw[j];
-        // rss at the new coefficients.
-        const R = fit.factor.R;
-        let quad = 0;
-        for (let i = 0; i < p; i++) {
-            let t = 0;
-            for (let k = i; k < p; k++)
-                t += R[k * p + i] * dw[k];
-            quad += t * t;
-        }
-        let cross = 0;
-        for (let j = 0; j < p; j++) {
-            cross += dw[j] * gData[j];
-            if (mask[j])
-                quad -= lambda * dw[j] * dw[j];
-        }
-        const rss = Math.max(0, this.#rss - 2 * cross + quad);
-        return { ...fit, coefficients, rss, refined: true };
-    }
-}
-/**
- * Leverages h_i = x_i^T (X^T X + lambda E)^+ x_i for m rows (diagonal of the hat matrix for the
- * data rows; Hoaglin & Welsch 1978, The American Statistician 32(1)). Uses the fit's factor:
- * forward substitution with R^T when it has full rank, the truncated SVD (pseudo-inverse)
- * otherwise.
- *
- * @param fit a fit from {@link fitFactor} or {@link fitDesign}
- * @param X column-major m x p rows (training rows for the hat diagonal, any rows otherwise)
- * @param m rows
- * @returns length m
- * @throws RangeError on bad shapes or non-finite values
- */
-function leverages(fit, X, m) {
-    const p = fit.factor.p;
-    checkBlock(X, undefined, m, p);
-    const out = new Float64Array(m);
-    if (p === 0)
-        return out;
-    const solver = new FactorSolver(fit.factor.R, p, fit.factorRank);
-    const x = new Float64Array(p);
-    const z = new Float64Array(p);
-    for (let i = 0; i < m; i++) {
-        for (let j = 0; j < p; j++)
-            x[j] = X[j * m + i];
-        solver.whiten(x, z);
-        let h = 0;
-        for (let j = 0; j < p; j++)
-            h += z[j] * z[j];
-        out[i] = h;
-    }
-    return out;
-}
-/**
- * Leverages of m rows written into `out` (see {@link leverages}), computed a few hundred rows at
- * a time with the forward substitution z = R^-T x run down whole columns; per row the operations
- * and their order are those of {@link leverages}, so the figures are identical. No finiteness
- * check (the rows come from a design the factor was built from).
- *
- * @param fit a fit from {@link fitFactor}
- * @param X column-major m x p block
- * @param m rows
- * @param out length >= m; out[i] receives h_i
- */
-function leveragesInto(fit, X, m, out) {
-    const p = fit.factor.p;
-    if (p === 0) {
-        out.fill(0, 0, m);
-        return;
-    }
-    if (fit.factorRank < p) {
-        out.set(leverages(fit, X, m));
-        return;
-    }
-    // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
-    const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
-    if (kernels !== null) {
-        (0,wasm_kernels/* leverageRows */.fO)(kernels, fit.factor.R, p, X, m, out);
-        return;
-    }
-    const Z = new Float64Array(LEVERAGE_CHUNK * p);
-    for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK)
-        leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
-}
-/** Rows per chunk of {@link leveragesInto} (the chunk's z columns stay in cache). */
-const LEVERAGE_CHUNK = 256;
-/**
- * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
- * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
- * its own so that its loops never run inside code V8 optimised in the middle of another chunk
- * (see DEVELOPERS.md, "Writing hot loops").
- */
-function leverageChunk(R, p, X, m, i0, mb, Z, out) {
-    const CH = LEVERAGE_CHUNK;
-    for (let i = 0; i < mb; i++)
-        out[i0 + i] = 0;
-    for (let j = 0; j < p; j++) {
-        const zj = j * CH;
-        const xj = j * m + i0;
-        for (let i = 0; i < mb; i++)
-            Z[zj + i] = X[xj + i];
-        let k = 0;
-        // Four earlier columns per sweep (the same subtractions in the same order per row).
-        for (; k + 3 < j; k += 4) {
-            const r0 = R[j * p + k];
-            const r1 = R[j * p + k + 1];
-            const r2 = R[j * p + k + 2];
-            const r3 = R[j * p + k + 3];
-            const z0 = k * CH;
-            for (let i = 0; i < mb; i++) {
-                Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
-            }
-        }
-        for (; k < j; k++) {
-            const r = R[j * p + k];
-            const zk = k * CH;
-            for (let i = 0; i < mb; i++)
-                Z[zj + i] -= r * Z[zk + i];
-        }
-        const diag = R[j * p + j];
-        for (let i = 0; i < mb; i++) {
-            const z = Z[zj + i] / diag;
-            Z[zj + i] = z;
-            out[i0 + i] += z * z;
-        }
-    }
-}
-/**
- * Predictions X w for m rows of a column-major design.
- *
- * @param X column-major m x p (p = coefficients.length)
- * @param m rows
- * @param coefficients length p
- * @returns length m
- * @throws RangeError when X is shorter than m*p
- */
-function predict(X, m, coefficients) {
-    const p = coefficients.length;
-    if (!Number.isInteger(m) || m < 0)
-        throw new RangeError(`predict: m must be a non-negative integer, got ${String(m)}`);
-    if (X.length < m * p)
-        throw new RangeError(`predict: X must hold m*p = ${m * p} numbers, got ${X.length}`);
-    const out = new Float64Array(m);
-    for (let j = 0; j < p; j++) {
-        const w = coefficients[j];
-        const col = j * m;
-        for (let i = 0; i < m; i++)
-            out[i] += X[col + i] * w;
-    }
-    return out;
-}
-/** ||X w - y||^2 of the data rows from their factor: rss + ||R w - qty||^2. */
-function dataRss(data, w) {
-    const p = data.p;
-    const R = data.R;
-    const qty = data.qty;
-    let extra = 0;
-    for (let i = 0; i < p; i++) {
-        let t = -qty[i];
-        for (let k = i; k < p; k++)
-            t += R[k * p + i] * w[k];
-        extra += t * t;
-    }
-    return data.rss + extra;
-}
-/** trace(X (R_a^T R_a)^+ X^T) = sum over the rows r_i of the data factor of ||whiten(r_i)||^2. */
-function hatTrace(data, solver) {
-    const p = data.p;
-    const R = data.R;
-    const x = new Float64Array(p);
-    const z = new Float64Array(p);
-    let trace = 0;
-    for (let i = 0; i < p; i++) {
-        for (let k = 0; k < p; k++)
-            x[k] = R[k * p + i];
-        solver.whiten(x, z);
-        for (let k = 0; k < p; k++)
-            trace += z[k] * z[k];
-    }
-    return trace;
-}
-/** Checks a column-major block and its right-hand side for shape and finiteness. */
-function checkBlock(X, y, m, p) {
-    checkShape(X, y, m, p);
-    fit_notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
-}
-/** Checks the shapes of a column-major block and its right-hand side. */
-function checkShape(X, y, m, p) {
-    if (!Number.isInteger(m) || m < 0)
-        throw new RangeError(`m must be a non-negative integer, got ${String(m)}`);
-    if (X.length < m * p)
-        throw new RangeError(`X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
-    if (y !== undefined && y.length < m)
-        throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
-}
-/**
- * Throws the RangeError for the first value of X (index k, column-major with m rows) or else of y
- * (index i) that is not finite; does nothing when both are -1.
- */
-function fit_notFinite(X, y, m, k, i) {
-    if (k >= 0)
-        throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
-    if (i >= 0 && y !== undefined)
-        throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
-}
-// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
-// "Writing hot loops").
-/** Index of the first NaN or infinite value among v[0..n), or -1. */
-function firstNotFinite(v, n) {
-    for (let i = 0; i < n; i++)
-        if (!Number.isFinite(v[i]))
-            return i;
-    return -1;
-}
-/**
- * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
- * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
- */
-function addColumnDot2(X, col, m, hi, lo, gHi, gLo, j) {
-    let sum = gHi[j];
-    let comp = gLo[j];
-    for (let i = 0; i < m; i++) {
-        const a = X[col + i];
-        const prod = a * hi[i];
-        const t = sum + prod;
-        const z = t - sum;
-        comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
-        sum = t;
-    }
-    gHi[j] = sum;
-    gLo[j] = comp;
-}
-/**
- * r = y - X w for a column-major m x p block as double-double numbers hi + lo (written to the
- * length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
- */
-function residualsInto(X, y, m, w, hi, lo) {
-    const p = w.length;
-    for (let i = 0; i < m; i++) {
-        let s = y[i];
-        let c = 0;
-        for (let j = 0; j < p; j++) {
-            const a = -X[j * m + i];
-            const prod = a * w[j];
-            const t = s + prod;
-            const z = t - s;
-            c += s - (t - z) + (prod - z) + twoProductError(a, w[j], prod);
-            s = t;
-        }
-        // Renormalise (s, c) into hi + lo with |lo| <= ulp(hi) / 2 (TwoSum).
-        const h = s + c;
-        const z = h - s;
-        hi[i] = h;
-        lo[i] = s - (h - z) + (c - z);
-    }
-}
-/** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */
-function twoProductError(a, b, prod) {
-    const SPLIT = 134217729; // 2^27 + 1
-    let t = SPLIT * a;
-    const ah = t - (t - a);
-    const al = a - ah;
-    t = SPLIT * b;
-    const bh = t - (t - b);
-    const bl = b - bh;
-    return al * bl - (prod - ah * bh - ah * bl - al * bh);
+function gapRatio(trainRmse, holdoutRmse) {
+    if (trainRmse === 0)
+        return holdoutRmse === 0 ? 1 : Infinity;
+    return holdoutRmse / trainRmse;
 }
 
 
 /***/ }),
 
-/***/ 5936:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   C: () => (/* binding */ svd)
-/* harmony export */ });
-/* unused harmony export MAX_SWEEPS */
-/**
- * Singular value decomposition of the small p x p matrices of the fitting engine, by one-sided
- * Jacobi rotations (Hestenes 1958; Demmel & Veselić, "Jacobi's method is more accurate than QR",
- * SIAM J. Matrix Anal. Appl. 13(4), 1992): the columns of A are rotated pairwise until they are
- * mutually orthogonal; their norms are then the singular values, the normalised columns the left
- * singular vectors, and the accumulated rotations the right singular vectors.
- *
- * Why not ml-matrix's SVD (Golub-Kahan-Reinsch as in JAMA): its iteration has no cap, and on
- * factors of rank-deficient designs (all-zero and duplicate columns next to values near the
- * underflow threshold) it was seen to run for minutes without ending. Jacobi sweeps converge
- * quadratically and are capped here (60 sweeps); the matrix is scaled by a power of two (exact)
- * so that its largest entry is about 1, and entries below 2^-600 of it are set to zero.
- */
-/** Machine epsilon, read once (a property read at the top of a hot function has no type feedback on its first call). */
-const EPSILON = Number.EPSILON;
-/** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
-const MAX_SWEEPS = 60;
-/**
- * SVD of a column-major m x k matrix with m >= k >= 1.
- *
- * @param A column-major m x k (A[j*m + i])
- * @param m rows
- * @param k columns (at most m)
- * @param vectors which singular vectors to return; default both
- * @returns singular values in descending order with the matching vectors
- * @throws RangeError when m < k or k < 1, or when A has a non-finite entry
- */
-function svd(A, m, k, vectors = 'both') {
-    if (k < 1 || m < k)
-        throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
-    const amax = largestMagnitude(A, m * k);
-    if (!Number.isFinite(amax))
-        throw new RangeError('svd: the matrix has a non-finite entry');
-    if (amax === 0)
-        return zeroSvd(m, k, vectors);
-    const shift = Math.round(Math.log2(amax));
-    const W = scaledCopy(A, m * k, 2 ** -shift);
-    const V = new Float64Array(k * k);
-    for (let c = 0; c < k; c++)
-        V[c * k + c] = 1;
-    jacobiSweeps(W, V, m, k);
-    // Singular values are the column norms; sort descending.
-    const norms = columnNorms(W, m, k);
-    const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
-    const s = new Float64Array(k);
-    const U = new Float64Array(vectors === 'both' ? m * k : 0);
-    const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
-    order.forEach((c, to) => {
-        s[to] = norms[c] * 2 ** shift;
-        if (U.length > 0 && norms[c] > 0)
-            for (let i = 0; i < m; i++)
-                U[to * m + i] = W[c * m + i] / norms[c];
-        if (Vout.length > 0)
-            for (let i = 0; i < k; i++)
-                Vout[to * k + i] = V[c * k + i];
-    });
-    return { s, U, V: Vout };
-}
-// The loops below are functions of their own, each a loop nest and its return (see DEVELOPERS.md,
-// "Writing hot loops").
-/** Largest |a_i| over A[0..n); NaN or Infinity when an entry is not finite. */
-function largestMagnitude(A, n) {
-    let amax = 0;
-    for (let i = 0; i < n; i++) {
-        const a = Math.abs(A[i]);
-        if (!(a <= amax))
-            amax = a;
-    }
-    return amax;
-}
-/** A[0..n) times `scale` (a power of two, so exact), entries below 2^-600 set to zero. */
-function scaledCopy(A, n, scale) {
-    const floor = 2 ** -600;
-    const W = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-        const v = A[i] * scale;
-        W[i] = Math.abs(v) < floor ? 0 : v;
-    }
-    return W;
-}
-/**
- * One-sided Jacobi: rotates column pairs (p, q) of W (m x k), and the same pairs of V (k x k),
- * until every pair of W's columns is orthogonal to machine precision, or {@link MAX_SWEEPS}.
- */
-function jacobiSweeps(W, V, m, k) {
-    const eps = EPSILON;
-    for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
-        let rotated = false;
-        for (let p = 0; p < k - 1; p++) {
-            const cp = p * m;
-            for (let q = p + 1; q < k; q++) {
-                const cq = q * m;
-                let alpha = 0;
-                let beta = 0;
-                let gamma = 0;
-                for (let i = 0; i < m; i++) {
-                    const x = W[cp + i];
-                    const y = W[cq + i];
-                    alpha += x * x;
-                    beta += y * y;
-                    gamma += x * y;
-                }
-                if (gamma === 0 || Math.abs(gamma) <= eps * Math.sqrt(alpha * beta))
-                    continue;
-                rotated = true;
-                // Rotation angle that zeroes the (p, q) entry of W^T W (Rutishauser's formulas).
-                const zeta = (beta - alpha) / (2 * gamma);
-                const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
-                const c = 1 / Math.sqrt(1 + t * t);
-                const s = c * t;
-                rotate(W, cp, cq, m, c, s);
-                rotate(V, p * k, q * k, k, c, s);
-            }
-        }
-        if (!rotated)
-            return;
-    }
-}
-/** Euclidean norms of the k columns of the column-major m x k W. */
-function columnNorms(W, m, k) {
-    const norms = new Float64Array(k);
-    for (let c = 0; c < k; c++) {
-        let ss = 0;
-        for (let i = 0; i < m; i++)
-            ss += W[c * m + i] ** 2;
-        norms[c] = Math.sqrt(ss);
-    }
-    return norms;
-}
-/** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
-function rotate(M, a, b, n, c, s) {
-    for (let i = 0; i < n; i++) {
-        const x = M[a + i];
-        const y = M[b + i];
-        M[a + i] = c * x - s * y;
-        M[b + i] = s * x + c * y;
-    }
-}
-/** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
-function zeroSvd(m, k, vectors) {
-    const U = new Float64Array(vectors === 'both' ? m * k : 0);
-    const V = new Float64Array(vectors === 'none' ? 0 : k * k);
-    for (let c = 0; c < k; c++) {
-        if (U.length > 0)
-            U[c * m + c] = 1;
-        if (V.length > 0)
-            V[c * k + c] = 1;
-    }
-    return { s: new Float64Array(k), U, V };
-}
-
-
-/***/ }),
-
-/***/ 9554:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  iT: () => (/* binding */ addProductsInto),
-  b5: () => (/* binding */ firstBeyondIn),
-  $8: () => (/* binding */ foldRows),
-  fO: () => (/* binding */ leverageRows),
-  e8: () => (/* binding */ outOfFoldRows),
-  qO: () => (/* binding */ polynomialColumnsInto),
-  Hb: () => (/* binding */ refineRows),
-  FY: () => (/* binding */ wasmKernels)
-});
-
-// UNUSED EXPORTS: useWasmKernels
-
-;// CONCATENATED MODULE: ./src/fit/generated/kernels-wasm.ts
-// Generated by test/tools/gen-wasm.mjs from src/fit/kernels.wat; do not edit.
-/** The row kernels' WebAssembly module (4050 bytes), in base64. */
-const KERNELS_WASM = 'AGFzbQEAAAABkAEQYAJ/fwF/YAN/f38Bf2ACf38BfGADf398AXxgA39/fABgCH9/f39/f398AGAGf39/f3x/AGAHf39/f39/fwBg' +
-    'CX9/f39/f39/fwF/YAZ/f39/f38AYAN8fHwBfGAJf39/f39/f39/AXxgBX9/f39/AGALf39/f39/f39/f38AYAd/f3x8f39/AGAD' +
-    'f398AX8DFxYAAQICAwQDBQUFBgcICQoHCQsMDQ4PBQMBAAEGLwV/AUEAC38BQQALfAFEAAAAAAAAAAALfABEdZQ/aucvyiALfABE' +
-    'r5ZQLjWNE18LB44BDAZtZW1vcnkCAAZiYWRSb3cDAAliYWRDb2x1bW4DAQNyc3MDAg5maXJzdE5vdEZpbml0ZQAABGZvbGQADAls' +
-    'ZXZlcmFnZXMADQZyZWZpbmUAEQthZGRQcm9kdWN0cwASCW91dE9mRm9sZAATEXBvbHlub21pYWxDb2x1bW5zABQLZmlyc3RCZXlv' +
-    'bmQAFQrUHBZAAgF/AXwCQANAIAIgAU4NASAAIAJBA3RqKwMAIQMgAyADoUQAAAAAAAAAAGIEQCACDwsgAkEBaiECDAALC0F/CyMB' +
-    'AX8gACACEAAhAyADQQBIBEAgASAAIAJBA3T8CgAACyADCzgCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwCZIQQgBCADZARAIAQh' +
-    'AwsgAkEBaiECDAALCyADCzUCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwAhBCADIAQgBKKgIQMgAkEBaiECDAALCyADCzgCAX8C' +
-    'fAJAA0AgAyABTg0BIAAgA0EDdGorAwAgAqMhBSAEIAUgBaKgIQQgA0EBaiEDDAALCyAECzEBAn8CQANAIAMgAU4NASAAIANBA3Rq' +
-    'IQQgBCAEKwMAIAKjOQMAIANBAWohAwwACwsLvQEBBnwgApkgACABEAKlIQMgA0QAAAAAAAAAAGEEQEQAAAAAAAD4fw8LIAMjA2Qg' +
-    'AyMEY3EEQCAAIAEQAyEEIAREAAAAAAAAAABhBEBEAAAAAAAA+H8PCyACIAKiIASgnyEHBSAAIAEgAxAEIQUgBUQAAAAAAAAAAGEE' +
-    'QEQAAAAAAAD4fw8LIAIgA6MhBiADIAYgBqIgBaCfoiEHCyAHmiAHIAJEAAAAAAAAAABmGyEIIAAgASACIAihEAUgCAuMBAMHfwl8' +
-    'A38gASAEIAJsQQN0aiEIIAEgBSACbEEDdGohCSAJIAJBA3RqIQogCiACQQN0aiELIAsgAkEDdGohDCAAIAUgA2wgBGpBA3RqIQ0g' +
-    'A0EDdCEOIA0rAwAhDyANIA5qKwMAIRAgDSAOQQJsaisDACERIA0gDkEDbGorAwAhEgJAA0AgGCAGTg0BIBhBA3QhGSAIIBlqKwMA' +
-    'IRcgDyAXIAkgGWorAwCioCEPIBAgFyAKIBlqKwMAoqAhECARIBcgCyAZaisDAKKgIREgEiAXIAwgGWorAwCioCESIBhBAWohGAwA' +
-    'CwsgByAPoiETIAcgEKIhFCAHIBGiIRUgByASoiEWIBNEAAAAAAAAAABhIBREAAAAAAAAAABhcSAVRAAAAAAAAAAAYSAWRAAAAAAA' +
-    'AAAAYXFxBEAPCyANIA0rAwAgE6E5AwAgDSAOaiEaIBogGisDACAUoTkDACAaIA5qIRogGiAaKwMAIBWhOQMAIBogDmohGiAaIBor' +
-    'AwAgFqE5AwBBACEYAkADQCAYIAZODQEgGEEDdCEZIAggGWorAwAhFyAJIBlqIRogGiAaKwMAIBMgF6KhOQMAIAogGWohGiAaIBor' +
-    'AwAgFCAXoqE5AwAgCyAZaiEaIBogGisDACAVIBeioTkDACAMIBlqIRogGiAaKwMAIBYgF6KhOQMAIBhBAWohGAwACwsLuQIDBX8F' +
-    'fAN/IAEgBCACbEEDdGohCCABIAUgAmxBA3RqIQkgCSACQQN0aiEKIAAgBSADbCAEakEDdGohCyALIANBA3RqIQwgCysDACENIAwr' +
-    'AwAhDgJAA0AgEiAGTg0BIBJBA3QhEyAIIBNqKwMAIREgDSARIAkgE2orAwCioCENIA4gESAKIBNqKwMAoqAhDiASQQFqIRIMAAsL' +
-    'IAcgDaIhDyAHIA6iIRAgD0QAAAAAAAAAAGEgEEQAAAAAAAAAAGFxBEAPCyALIAsrAwAgD6E5AwAgDCAMKwMAIBChOQMAQQAhEgJA' +
-    'A0AgEiAGTg0BIBJBA3QhEyAIIBNqKwMAIREgCSATaiEUIBQgFCsDACAPIBGioTkDACAKIBNqIRQgFCAUKwMAIBAgEaKhOQMAIBJB' +
-    'AWohEgwACwsLzgEDA38CfAN/IAEgBCACbEEDdGohCCABIAUgAmxBA3RqIQkgACAFIANsIARqQQN0aiEKIAorAwAhCwJAA0AgDSAG' +
-    'Tg0BIA1BA3QhDiALIAggDmorAwAgCSAOaisDAKKgIQsgDUEBaiENDAALCyAHIAuiIQwgDEQAAAAAAAAAAGEEQA8LIAogCisDACAM' +
-    'oTkDAEEAIQ0CQANAIA0gBk4NASANQQN0IQ4gCSAOaiEPIA8gDysDACAMIAggDmorAwCioTkDACANQQFqIQ0MAAsLC64BAwF/AnwD' +
-    'fyAAIAVBA3RqIQYgBisDACEHAkADQCAJIANODQEgCUEDdCEKIAcgAiAKaisDACABIApqKwMAoqAhByAJQQFqIQkMAAsLIAQgB6Ih' +
-    'CCAIRAAAAAAAAAAAYQRADwsgBiAGKwMAIAihOQMAQQAhCQJAA0AgCSADTg0BIAlBA3QhCiABIApqIQsgCyALKwMAIAggAiAKaisD' +
-    'AKKhOQMAIAlBAWohCQwACwsL9gECBH8DfAJAA0AgByAFTg0BIAIgByAEbEEDdGohCSAAIAcgBWwgB2pBA3RqIQogCisDACELIAkg' +
-    'BiALEAYhDCAMIAxhBEAgDCALoSAMoyENIAdBAWohCAJAA0AgCEEDaiAFTg0BIAAgAiAEIAUgByAIIAYgDRAHIAhBBGohCAwACwsC' +
-    'QANAIAhBAWogBU4NASAAIAIgBCAFIAcgCCAGIA0QCCAIQQJqIQgMAAsLAkADQCAIIAVODQEgACACIAQgBSAHIAggBiANEAkgCEEB' +
-    'aiEIDAALCyABIAMgCSAGIA0gBxAKIAogDDkDAAsgB0EBaiEHDAALCwu+AQEEfwJAA0AgCSAETg0BIAggBCAJayAIIAQgCWtIGyEK' +
-    'QQAhCwJAA0AgCyAFTg0BIAIgCyAEbCAJakEDdGogBiALIAhsQQN0aiAKEAEhDCAMQQBOBEAgCSAMaiQAIAskAUEBDwsgC0EBaiEL' +
-    'DAALCyADIAlBA3RqIAcgChABIQwgDEEATgRAIAkgDGokAEF/JAFBAQ8LIAAgASAGIAcgCCAFIAoQCyMCIAcgChADoCQCIAkgCGoh' +
-    'CQwACwtBAAuYAgMGfwN8An8gA0EDdCEJIAVBACAJ/AsAAkADQCAHIAFODQEgBCAHIAlsaiEKIAogAiAHIAlsaiAJ/AoAAEEAIQgC' +
-    'QANAIAggB04NASAAIAcgAWwgCGpBA3RqKwMAIQwgBCAIIAlsaiELQQAhDwJAA0AgDyAJTg0BIAogD2ohECAQIBArAwAgDCALIA9q' +
-    'KwMAoqE5AwAgD0EIaiEPDAALCyAIQQFqIQgMAAsLIAAgByABbCAHakEDdGorAwAhDUEAIQYCQANAIAYgA04NASAGQQN0IQ8gCiAP' +
-    'aisDACANoyEOIAogD2ogDjkDACAFIA9qIRAgECAQKwMAIA4gDqKgOQMAIAZBAWohBgwACwsgB0EBaiEHDAALCwtcAQV8RAAAAAIA' +
-    'AKBBIACiIQMgAyADIAChoSEEIAAgBKEhBUQAAAACAACgQSABoiEDIAMgAyABoaEhBiABIAahIQcgBSAHoiACIAQgBqKhIAQgB6Kh' +
-    'IAUgBqKhoQvWAQIDfwh8AkADQCAHIAJODQEgB0EDdCEJIAEgCWorAwAhCkQAAAAAAAAAACELQQAhCAJAA0AgCCAETg0BIAAgCCAC' +
-    'bCAHakEDdGorAwCaIQwgAyAIQQN0aisDACENIAwgDaIhDiAKIA6gIQ8gDyAKoSEQIAsgCiAPIBChoSAOIBChoCAMIA0gDhAOoKAh' +
-    'CyAPIQogCEEBaiEIDAALCyAKIAugIREgESAKoSEQIAUgCWogETkDACAGIAlqIAogESAQoaEgCyAQoaA5AwAgB0EBaiEHDAALCwuU' +
-    'AQICfwd8IAQrAwAhCCAFKwMAIQkCQANAIAYgAU4NASAGQQN0IQcgACAHaisDACEKIAIgB2orAwAhCyAKIAuiIQwgCCAMoCENIA0g' +
-    'CKEhDiAJIAggDSAOoaEgDCAOoaAgCiALIAwQDqAgCiADIAdqKwMAoqCgIQkgDSEIIAZBAWohBgwACwsgBCAIOQMAIAUgCTkDAAtZ' +
-    'AgF/AXwgACABIAIgAyAEIAUgBhAPIAUgAhADIQoCQANAIAkgBE4NASAAIAkgAmxBA3RqIAIgBSAGIAcgCUEDdGogCCAJQQN0ahAQ' +
-    'IAlBAWohCQwACwsgCguCAQMBfwF8BH8gAkEDdCEJAkADQCAFIARODQEgAyAFQQN0aisDACEGIAZEAAAAAAAAAABiBEAgASAFIAls' +
-    'aiEHQQAhCAJAA0AgCCAJTg0BIAAgCGohCiAKIAorAwAgByAIaisDACAGoqA5AwAgCEEIaiEIDAALCwsgBUEBaiEFDAALCwuvAgIG' +
-    'fwF8IAhBACABQQN0/AsAIAZBAE4EQAJAA0AgDCACTg0BIAkgDEEDdGogAyAMIARsIAZqQQN0aisDADkDACAMQQFqIQwMAAsLIAgg' +
-    'ACABIAkgAhASBQJAA0AgDCACTg0BIAAgDCABbEEDdGohDSAMIARsIQ5BACELAkADQCALIAFODQEgCCALQQN0aiEPIA8gDysDACAN' +
-    'IAtBA3RqKwMAIAMgDiAFIAtBAnRqKAIAakEDdGorAwCioDkDACALQQFqIQsMAAsLIAxBAWohDAwACwsLQQAhCwJAA0AgCyABTg0B' +
-    'IAcgC0EDdGorAwAgCCALQQN0aisDAKEhESAFIAtBAnRqKAIAIRAgCiAQQQN0aiEPIA8gDysDACARIBGioDkDACALQQFqIQsMAAsL' +
-    'C6sBAQV/IAFBA3QhCSAEBEAgBiAAIAn8CgAABQJAA0AgCCAJTg0BIAYgCGogACAIaisDACACoSADozkDACAIQQhqIQgMAAsLC0EB' +
-    'IQcCQANAIAcgBU4NASAGIAdBAWsgCWxqIQogBiAHIAlsaiELQQAhCAJAA0AgCCAJTg0BIAsgCGogCiAIaisDACAGIAhqKwMAojkD' +
-    'ACAIQQhqIQgMAAsLIAdBAWohBwwACwsLMgEBfwJAA0AgAyABTg0BIAAgA0EDdGorAwCZIAJlRQRAIAMPCyADQQFqIQMMAAsLQX8L';
-
-;// CONCATENATED MODULE: ./src/fit/wasm-kernels.ts
-/**
- * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions,
- * out-of-fold errors, polynomial columns and the design's range check), compiled once per
- * thread, and the wrappers that copy arrays into the module's memory and back. Each kernel
- * computes what the JavaScript it stands in for computes, to the bit; the JavaScript stays as the
- * fallback where WebAssembly is not available (`node --jitless`) or turned off
- * ({@link useWasmKernels}), and as the reference the tests compare with.
- *
- * Why: a small model's row loops run once or twice over a few thousand rows, mostly in V8's
- * interpreter, which boxes every floating-point result; WebAssembly is compiled before its first
- * call. On the S workload of `npm run bench` (2,000 rows, 11 columns) a whole run takes about
- * 30 ms less with them, M and L less too (see the README, "Benchmark").
- */
-
-/** This runtime's WebAssembly, or undefined (`node --jitless` has none). */
-const WASM = globalThis.WebAssembly;
-/** WebAssembly's page size in bytes. */
-const PAGE = 65536;
-let kernels = null;
-let enabled = WASM !== undefined;
-/**
- * Whether the fit uses the WebAssembly kernels (default: when WebAssembly is available). Tests
- * turn them off to run the JavaScript kernels on the same data.
- * @param on true to use them (ignored where WebAssembly is not available), false for JavaScript
- * @returns whether they were in use before
- */
-function useWasmKernels(on) {
-    const before = enabled;
-    enabled = on && WASM !== undefined;
-    return before;
-}
-/** The kernels, compiled on first use; null when they are not in use. */
-function wasmKernels() {
-    if (!enabled || WASM === undefined)
-        return null;
-    if (kernels === null)
-        kernels = new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports;
-    return kernels;
-}
-/** A view of the module's memory with room for at least `doubles` float64 values. */
-function heap(k, doubles) {
-    const bytes = doubles * 8;
-    const have = k.memory.buffer.byteLength;
-    if (bytes > have)
-        k.memory.grow(Math.ceil((bytes - have) / PAGE));
-    return new Float64Array(k.memory.buffer, 0, doubles);
-}
-/**
- * Folds the m rows of a column-major block into [R; qty] (QrAccumulator's fold, in pieces of
- * `chunk` rows). R (p x p) and qty (p) are updated in place.
- * @param rss the residual sum of squares so far
- * @returns the new residual sum of squares, and where a value was not finite (null when none
- *   was; the pieces before it are folded, as the JavaScript leaves them)
- */
-function foldRows(k, R, qty, rss, X, y, m, p, chunk) {
-    const oQty = p * p;
-    const oX = oQty + p;
-    const oY = oX + m * p;
-    const oC = oY + m;
-    const oYc = oC + chunk * p;
-    const f = heap(k, oYc + chunk);
-    f.set(R);
-    f.set(qty, oQty);
-    f.set(X.subarray(0, m * p), oX);
-    f.set(y.subarray(0, m), oY);
-    k.rss.value = rss;
-    const status = k.fold(0, oQty * 8, oX * 8, oY * 8, m, p, oC * 8, oYc * 8, chunk);
-    R.set(f.subarray(0, oQty));
-    qty.set(f.subarray(oQty, oQty + p));
-    const bad = status === 0 ? null : { row: k.badRow.value, column: k.badColumn.value };
-    return { rss: k.rss.value, bad };
-}
-/**
- * Leverages of the m rows of a column-major block under a full-rank factor R (p x p):
- * out[i] = || R^-T x_i ||^2 for i < m.
- */
-function leverageRows(k, R, p, X, m, out) {
-    const oX = p * p;
-    const oZ = oX + m * p;
-    const oOut = oZ + m * p;
-    const f = heap(k, oOut + m);
-    f.set(R.subarray(0, p * p));
-    f.set(X.subarray(0, m * p), oX);
-    k.leverages(0, p, oX * 8, m, oZ * 8, oOut * 8);
-    out.set(f.subarray(oOut, oOut + m));
-}
-/**
- * One block of the refinement pass: checks X (m x p, column-major) and y for finiteness, then
- * adds each column's compensated dot product with the residuals y - X w to (gHi, gLo), in place.
- * @returns the sum of squares of the residuals' high parts, or where a value is not finite
- *   (nothing added then)
- */
-function refineRows(k, X, y, m, w, gHi, gLo) {
-    const p = w.length;
-    const oY = m * p;
-    const oW = oY + m;
-    const oHi = oW + p;
-    const oLo = oHi + m;
-    const oGHi = oLo + m;
-    const oGLo = oGHi + p;
-    const f = heap(k, oGLo + p);
-    f.set(X.subarray(0, m * p));
-    f.set(y.subarray(0, m), oY);
-    const atX = k.firstNotFinite(0, m * p);
-    if (atX >= 0)
-        return { sumOfSquares: 0, bad: { row: atX % m, column: Math.floor(atX / m) } };
-    const atY = k.firstNotFinite(oY * 8, m);
-    if (atY >= 0)
-        return { sumOfSquares: 0, bad: { row: atY, column: -1 } };
-    f.set(w, oW);
-    f.set(gHi, oGHi);
-    f.set(gLo, oGLo);
-    const sumOfSquares = k.refine(0, oY * 8, m, oW * 8, p, oHi * 8, oLo * 8, oGHi * 8, oGLo * 8);
-    gHi.set(f.subarray(oGHi, oGHi + p));
-    gLo.set(f.subarray(oGLo, oGLo + p));
-    return { sumOfSquares, bad: null };
-}
-/**
- * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block (columns
- * whose weight is 0 left out): model/blocks.ts's addProducts.
- */
-function addProductsInto(k, out, at, X, m, w, p) {
-    const oX = m;
-    const oW = oX + m * p;
-    const f = heap(k, oW + p);
-    f.set(out.subarray(at, at + m));
-    f.set(X.subarray(0, m * p), oX);
-    for (let j = 0; j < p; j++)
-        f[oW + j] = w[j];
-    k.addProducts(0, oX * 8, m, oW * 8, p);
-    out.set(f.subarray(0, m), at);
-}
-/**
- * Adds one block's squared out-of-fold errors to errors[f] (cross-validation.ts, outOfFoldErrors,
- * one setting).
- * @param W coefficient j fitted without fold f at W[j * k + f]
- * @param folds the fold of each of the m rows
- * @param single the fold of every row, or -1 when they differ
- * @param y the m rows' targets
- * @param errors per fold, added to in place
- */
-function outOfFoldRows(k, X, m, p, W, kFolds, folds, single, y, errors) {
-    const oW = m * p;
-    const oY = oW + p * kFolds;
-    const oPred = oY + m;
-    const oColumn = oPred + m;
-    const oErrors = oColumn + p;
-    const oFolds = oErrors + kFolds;
-    const f = heap(k, oFolds + Math.ceil(m / 2));
-    f.set(X.subarray(0, m * p));
-    f.set(W, oW);
-    f.set(y.subarray(0, m), oY);
-    for (let q = 0; q < kFolds; q++)
-        f[oErrors + q] = errors[q];
-    new Int32Array(f.buffer, oFolds * 8, m).set(folds.subarray(0, m));
-    k.outOfFold(0, m, p, oW * 8, kFolds, oFolds * 8, single, oY * 8, oPred * 8, oColumn * 8, oErrors * 8);
-    for (let q = 0; q < kFolds; q++)
-        errors[q] = f[oErrors + q];
-}
-/**
- * The `degree` columns of a polynomial term for x[0..m) written to out from `at` (column k at
- * at + k m): z = (x - shift) / scale (x itself when `raw`), then its powers (basis/polynomial.ts).
- */
-function polynomialColumnsInto(k, x, m, shift, scale, raw, degree, out, at) {
-    const oOut = m;
-    const f = heap(k, oOut + degree * m);
-    f.set(x.subarray(0, m));
-    k.polynomialColumns(0, m, shift, scale, raw ? 1 : 0, degree, oOut * 8);
-    out.set(f.subarray(oOut, oOut + degree * m), at);
-}
-/** Index of the first of a[0..n) whose magnitude is not within max (NaN included), or -1. */
-function firstBeyondIn(k, a, n, max) {
-    const f = heap(k, n);
-    f.set(a.subarray(0, n));
-    return k.firstBeyond(0, n, max);
-}
-
-
-/***/ }),
-
-/***/ 6264:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Z: () => (/* binding */ formatNumber)
-/* harmony export */ });
-/**
- * Number formatting shared by check messages and reporters.
- */
-/**
- * Formats a figure for people: 4 significant digits (whole numbers from 1e4 to 1e6 are rounded to
- * an integer), exponent form below 1e-3 and from 1e6,
- * `∞`/`-∞` for infinities and `NaN` for NaN. `null` gives `–`.
- */
-function formatNumber(x, digits = 4) {
-    if (x === null || x === undefined)
-        return '–';
-    if (Number.isNaN(x))
-        return 'NaN';
-    if (x === Infinity)
-        return '∞';
-    if (x === -Infinity)
-        return '-∞';
-    if (x === 0)
-        return '0';
-    const a = Math.abs(x);
-    if (a < 1e-3 || a >= 1e6)
-        return x.toExponential(digits - 1).replace(/\.?0+e/, 'e').replace('e+', 'e');
-    if (a >= 10 ** digits)
-        return String(Math.round(x));
-    const text = x.toPrecision(digits);
-    return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
-}
-
-
-/***/ }),
-
-/***/ 8422:
+/***/ 9939:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
@@ -34899,8 +32321,8 @@ function formatNumber(x, digits = 4) {
 /* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_os__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_2___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_2__);
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3916);
-/* harmony import */ var _shard_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(7903);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
+/* harmony import */ var _run_shard_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6941);
 /**
  * The action's inputs: the only module that calls `core.getInput`. The runner passes each
  * input as an `INPUT_<NAME>` variable with the name upper-cased and hyphens kept
@@ -34933,7 +32355,7 @@ function input(name) {
     return value === '' ? INPUT_DEFAULTS[name] : value;
 }
 function bad(name, expected, value) {
-    return new _errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz('input', `input \`${name}\` must be ${expected}, got ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quoteValue */ .cl)(value)}`, { key: name });
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz('input', `input \`${name}\` must be ${expected}, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quoteValue */ .cl)(value)}`, { key: name });
 }
 /** A YAML 1.2 core-schema boolean, as `core.getBooleanInput` accepts. */
 function booleanInput(name) {
@@ -34978,7 +32400,7 @@ function readInputs(cwd = process.cwd()) {
     };
     const shardText = input('shard');
     return {
-        shard: shardText === '' ? null : (0,_shard_js__WEBPACK_IMPORTED_MODULE_4__/* .parseShard */ .uK)(shardText, 'shard'),
+        shard: shardText === '' ? null : (0,_run_shard_js__WEBPACK_IMPORTED_MODULE_4__/* .parseShard */ .uK)(shardText, 'shard'),
         files: { html: output('html'), sarif: output('sarif'), junit: output('junit') },
         settings: {
             root,
@@ -34998,402 +32420,7 @@ function readInputs(cwd = process.cwd()) {
 
 /***/ }),
 
-/***/ 1730:
-/***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
-
-__nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8298);
-/* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(2413);
-/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8005);
-/* harmony import */ var _action_comment_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1151);
-/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_16__ = __nccwpck_require__(3566);
-/* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5505);
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(3916);
-/* harmony import */ var _inputs_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(8422);
-/* harmony import */ var _parallel_pool_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(6093);
-/* harmony import */ var _parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(9506);
-/* harmony import */ var _output_files_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(6981);
-/* harmony import */ var _pipeline_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(3007);
-/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(8352);
-/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(856);
-/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(5596);
-/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(5655);
-/* harmony import */ var _optimising_compiler_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(6475);
-/**
- * The action's entry: read the inputs, compare with the base commit on pull requests, run the
- * same pipeline as the CLI, hand the Result to the reporters (annotations, log, job summary,
- * comment), set the outputs, and fail the step exactly when the CLI would exit 1 or 2.
- * The only place that calls `core.setFailed`.
- */
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-
-/** Writes one notice or warning line of our own (message escaped). */
-function say(level, message) {
-    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
-}
-async function run() {
-    (0,_optimising_compiler_js__WEBPACK_IMPORTED_MODULE_15__/* .deferOptimisingCompiler */ .DI)();
-    let prefix = '';
-    try {
-        const inputs = (0,_inputs_js__WEBPACK_IMPORTED_MODULE_6__/* .readInputs */ .K)();
-        prefix = inputs.prefix;
-        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_16__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
-        // The base commit first, so that the head run can compare with it.
-        const baseOptions = pr?.baseSha ? await (0,_action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .evaluateBase */ .D0)(inputs.settings, pr.baseSha, { fetchHint: _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .ACTION_FETCH_HINT */ .MZ }) : {};
-        const scale = { shard: inputs.shard, jobs: (0,_parallel_pool_js__WEBPACK_IMPORTED_MODULE_7__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
-        const result = await (0,_pipeline_js__WEBPACK_IMPORTED_MODULE_10__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
-        // Reporters: annotations and log, JSON report, job summary, comment.
-        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatAnnotations */ .MR)(result, { prefix }));
-        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_14__/* .formatText */ .v)(result).split('\n'))
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .escapeLogLine */ ._P)(line));
-        const report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
-        try {
-            await (0,_output_files_js__WEBPACK_IMPORTED_MODULE_9__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn });
-        }
-        catch (error) {
-            say('warning', `could not write a file report: ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
-        }
-        try {
-            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_13__/* .formatSummary */ .kq)(result)).write();
-        }
-        catch (error) {
-            say('warning', `could not write the job summary: ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
-        }
-        if (inputs.comment && pr) {
-            if (inputs.token === '')
-                say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
-            else {
-                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .l)((0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .s)(inputs.token, pr), (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_13__/* .formatComment */ .jw)(result));
-                if (outcome.kind === 'forbidden') {
-                    say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
-                }
-                else if (outcome.kind === 'failed') {
-                    say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
-                }
-            }
-        }
-        // Outputs and the step's status.
-        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, result.verdict);
-        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.failed, String((0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failedCount */ .dD)(result, inputs.settings.failOn)));
-        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.report, report);
-        const failure = (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failureMessage */ .oh)(result, inputs.settings.failOn);
-        if (failure !== null)
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(failure);
-    }
-    catch (error) {
-        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, 'error');
-        if (error instanceof _errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz) {
-            if (error.location.file !== undefined)
-                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(`fitgate could not run: ${error.describe()}`);
-        }
-        else {
-            if (error instanceof Error && error.stack)
-                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz(error.stack);
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(`fitgate failed unexpectedly: ${(0,_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
-        }
-    }
-}
-// In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
-if (!(0,_parallel_worker_role_js__WEBPACK_IMPORTED_MODULE_8__/* .isFitgateWorker */ .$)())
-    await run();
-
-__webpack_async_result__();
-} catch(e) { __webpack_async_result__(e); } }, 1);
-
-/***/ }),
-
-/***/ 1788:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   _I: () => (/* binding */ errorMeasures),
-/* harmony export */   xB: () => (/* binding */ addErrors),
-/* harmony export */   y3: () => (/* binding */ emptySums),
-/* harmony export */   yr: () => (/* binding */ gapRatio)
-/* harmony export */ });
-/* harmony import */ var _basis_stats_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6029);
-/**
- * Error measures of predictions against observed targets, over Float64Arrays.
- * Formulas: RMSE = sqrt(mean((y - yhat)^2)), MAE = mean(|y - yhat|),
- * R^2 = 1 - SSE / sum((y - mean(y))^2) (coefficient of determination; Draper & Smith,
- * Applied Regression Analysis, 3rd ed., 1998, section 1.6). R^2 of hold-out rows uses the
- * hold-out mean. All are NaN for zero rows; R^2 is NaN when the target is constant.
- */
-
-/** Empty sums. */
-function emptySums() {
-    return { n: 0, sse: 0, sae: 0, shift: Number.NaN, sy: 0, syy: 0 };
-}
-/**
- * Adds `m` observations (targets `y`, predictions `yhat`) to `sums`. Each sum is its own pass
- * (one loop per function; see DEVELOPERS.md, "Writing hot loops"), added in row order.
- */
-function addErrors(sums, y, yhat, m) {
-    if (m > 0 && Number.isNaN(sums.shift))
-        sums.shift = y[0];
-    sums.n += m;
-    sums.sse += squaredErrorSum(y, yhat, m);
-    sums.sae += absoluteErrorSum(y, yhat, m);
-    sums.sy += (0,_basis_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfDeviations */ .jZ)(y, m, sums.shift);
-    sums.syy += (0,_basis_stats_js__WEBPACK_IMPORTED_MODULE_0__/* .sumOfSquaredDeviations */ .Mq)(y, m, sums.shift);
-}
-/** Sum of (y - yhat)^2 over the first m rows. */
-function squaredErrorSum(y, yhat, m) {
-    let sse = 0;
-    for (let i = 0; i < m; i++) {
-        const r = y[i] - yhat[i];
-        sse += r * r;
-    }
-    return sse;
-}
-/** Sum of |y - yhat| over the first m rows. */
-function absoluteErrorSum(y, yhat, m) {
-    let sae = 0;
-    for (let i = 0; i < m; i++)
-        sae += Math.abs(y[i] - yhat[i]);
-    return sae;
-}
-/** RMSE, MAE and R^2 from gathered sums. */
-function errorMeasures(sums) {
-    const { n, sse, sae, sy, syy } = sums;
-    if (n === 0)
-        return { rmse: Number.NaN, mae: Number.NaN, r2: Number.NaN, sse: 0 };
-    const sst = Math.max(0, syy - (sy * sy) / n);
-    return {
-        rmse: Math.sqrt(sse / n),
-        mae: sae / n,
-        r2: sst > 0 ? 1 - sse / sst : Number.NaN,
-        sse,
-    };
-}
-/**
- * Generalisation-gap ratio: hold-out RMSE / training RMSE. Infinity when the training RMSE is 0
- * and the hold-out RMSE is not; 1 when both are 0 (no gap).
- */
-function gapRatio(trainRmse, holdoutRmse) {
-    if (trainRmse === 0)
-        return holdoutRmse === 0 ? 1 : Infinity;
-    return holdoutRmse / trainRmse;
-}
-
-
-/***/ }),
-
-/***/ 4607:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   aN: () => (/* binding */ forEachBlock),
-/* harmony export */   kD: () => (/* binding */ addProducts),
-/* harmony export */   tp: () => (/* binding */ predictRows)
-/* harmony export */ });
-/* unused harmony export blockRows */
-/* harmony import */ var _fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(9554);
-
-/**
- * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
- * enough to stay in cache between building a block and folding it (the QR works on pieces of a
- * few hundred rows of it), and to keep each pass's buffer from weighing on peak memory; large
- * enough that the per-block overhead does not show.
- */
-function blockRows(p) {
-    return Math.max(64, Math.floor((1 << 16) / Math.max(1, p)));
-}
-/**
- * Calls `visit(X, start, m)` for consecutive blocks of rows; `X` is column-major m x p and is
- * reused between calls (copy it to keep it).
- */
-function forEachBlock(design, data, visit) {
-    const size = blockRows(design.p);
-    const buffer = new Float64Array(Math.min(size, Math.max(1, data.rows)) * design.p);
-    for (let start = 0; start < data.rows; start += size) {
-        const m = Math.min(size, data.rows - start);
-        design.fill(data.inputs, start, m, buffer);
-        visit(buffer, start, m);
-    }
-}
-/** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
-function predictRows(design, data, w) {
-    const out = new Float64Array(data.rows);
-    forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
-    return out;
-}
-/**
- * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block, the terms
- * added one after another in column order (four columns per sweep over the rows, so each
- * output is loaded and stored once per four columns; the sums are those of the plain loop).
- * Columns whose weight is 0 are left out.
- *
- * @param out output (length >= at + m)
- * @param at first output index
- * @param X column-major m x p block
- * @param m rows
- * @param w coefficients (length >= p)
- * @param p columns
- */
-function addProducts(out, at, X, m, w, p) {
-    // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same additions in the same order).
-    const kernels = (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_0__/* .wasmKernels */ .FY)();
-    if (kernels !== null) {
-        (0,_fit_wasm_kernels_js__WEBPACK_IMPORTED_MODULE_0__/* .addProductsInto */ .iT)(kernels, out, at, X, m, w, p);
-        return;
-    }
-    let j = 0;
-    for (; j + 3 < p; j += 4) {
-        if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {
-            for (let q = j; q < j + 4; q++)
-                addColumn(out, at, X, m, w[q], q);
-        }
-        else {
-            addFourColumns(out, at, X, m, w[j], w[j + 1], w[j + 2], w[j + 3], j);
-        }
-    }
-    for (; j < p; j++)
-        addColumn(out, at, X, m, w[j], j);
-}
-// The row loops are functions of their own, each one loop and its return (see DEVELOPERS.md,
-// "Writing hot loops"): the loop over columns above then never runs inside code optimised in
-// the middle of a row loop.
-/** out[at + i] += X[j*m + i] w0 + X[(j+1)*m + i] w1 + X[(j+2)*m + i] w2 + X[(j+3)*m + i] w3, added left to right. */
-function addFourColumns(out, at, X, m, w0, w1, w2, w3, j) {
-    const c0 = j * m;
-    const c1 = c0 + m;
-    const c2 = c1 + m;
-    const c3 = c2 + m;
-    for (let i = 0; i < m; i++)
-        out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
-}
-/** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
-function addColumn(out, at, X, m, wj, j) {
-    if (wj === 0)
-        return;
-    const c = j * m;
-    for (let i = 0; i < m; i++)
-        out[at + i] += X[c + i] * wj;
-}
-
-
-/***/ }),
-
-/***/ 6475:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  Bu: () => (/* binding */ SMALL_DATA_BYTES),
-  ch: () => (/* binding */ SMALL_WORK),
-  uV: () => (/* binding */ allowOptimisingCompiler),
-  DI: () => (/* binding */ deferOptimisingCompiler),
-  KB: () => (/* binding */ estimateWork)
-});
-
-// UNUSED EXPORTS: compilerFlagsGiven, optimisingCompilerDeferred
-
-;// CONCATENATED MODULE: external "node:v8"
-const external_node_v8_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:v8");
-var external_node_v8_default = /*#__PURE__*/__nccwpck_require__.n(external_node_v8_namespaceObject);
-;// CONCATENATED MODULE: ./src/optimising-compiler.ts
-/**
- * When V8's optimising compiler (TurboFan) runs. A fitgate run over a small model finishes in a
- * few hundred milliseconds, most of it start-up; from the first line TurboFan would spend its
- * background thread and several MiB on the YAML parser, the schema validators and loops that are
- * over before the optimised code arrives. So the entry points start with TurboFan off (V8 still
- * runs its interpreter and the Sparkplug baseline compiler) and turn it on as soon as the run
- * holds more than one model, data files over {@link SMALL_DATA_BYTES}, or more work than
- * {@link SMALL_WORK}. The numbers computed are the same either way: JavaScript arithmetic does not
- * depend on the tier that runs it.
- *
- * Measured on the development machine (2 cores, node 20; medians of 41-61 alternating runs),
- * with TurboFan turned on where the model's work is known (after the settings, descriptor and
- * data are read): a one-input model of 2,000 rows and 11 columns (7.8e5 multiply-adds) takes
- * 0.236 s and 62 MiB against 0.255 s and 55 MiB on baseline code; of 1,000 rows (3.9e5) 0.205 s
- * against 0.213 s; of 400 rows (1.6e5) the same either way, with 7 MiB more. A five-input model of
- * 1,000 rows and 21 columns takes 0.52 s without and 0.34 s with it. (Before the hot loops were
- * written so that V8 keeps their optimised code, the crossover lay near 2e6.)
- */
-
-/**
- * Estimated multiply-adds below which a run stays on baseline code: a few milliseconds of
- * optimised code, about 20 ms of baseline code (the crossover measured above lies between 1.6e5
- * and 3.9e5).
- */
-const SMALL_WORK = 3e5;
-/**
- * Bytes of a model's training and hold-out files above which the optimising compiler is turned
- * on before they are read (parsing 256 KB of CSV is itself a hot loop worth optimising).
- */
-const SMALL_DATA_BYTES = 256 * 1024;
-let deferred = false;
-/** Sets a V8 flag; false when this V8 refuses it (nothing changes then). */
-function setFlag(flag) {
-    try {
-        external_node_v8_default().setFlagsFromString(flag);
-        return true;
-    }
-    catch {
-        return false;
-    }
-}
-/**
- * True when the user chose how V8 compiles (a compiler flag in Node's arguments or NODE_OPTIONS):
- * fitgate then leaves the flags alone.
- */
-function compilerFlagsGiven(execArgv = process.execArgv, nodeOptions = process.env.NODE_OPTIONS) {
-    const given = [...execArgv, ...(nodeOptions ?? '').split(/\s+/)];
-    return given.some((arg) => /^--(no-)?(turbofan|opt|jitless|maglev|sparkplug|always-sparkplug)(=|$)/.test(arg.replace(/_/g, '-')));
-}
-/**
- * Turns TurboFan off until {@link allowOptimisingCompiler}; entry points call it first. Does
- * nothing when the user set a compiler flag ({@link compilerFlagsGiven}).
- */
-function deferOptimisingCompiler() {
-    if (!deferred && !compilerFlagsGiven())
-        deferred = setFlag('--no-turbofan');
-}
-/** Turns TurboFan back on (idempotent; does nothing when it was never turned off). */
-function allowOptimisingCompiler() {
-    if (deferred && setFlag('--turbofan'))
-        deferred = false;
-}
-/** True while TurboFan is turned off by {@link deferOptimisingCompiler}. */
-function optimisingCompilerDeferred() {
-    return deferred;
-}
-/**
- * Multiply-adds of one model's row loops, roughly: the passes over the training rows (folding,
- * refinement, scoring: about 2.5 n p^2), each refit of the complexity sweep (the same again per
- * setting), and the swing scan (8 points in up to 4,000 gaps, plus the 1,000 x 1,000 neighbour
- * search when there are several inputs).
- */
-function estimateWork(shape) {
-    const { rows: n, columns: p, inputs: d, refits } = shape;
-    const passes = 2.5 * n * p * p * (1 + refits);
-    const gridPoints = 201 + 8 * Math.min(Math.max(n - 1, 0), 4000);
-    const swing = d >= 2 ? 1e6 * d + (gridPoints + 24_000) * p : gridPoints * p;
-    return passes + swing;
-}
-
-
-/***/ }),
-
-/***/ 6981:
+/***/ 6797:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -35407,12 +32434,12 @@ var promises_ = __nccwpck_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
-// EXTERNAL MODULE: ./src/checks/index.ts + 13 modules
-var checks = __nccwpck_require__(5614);
-// EXTERNAL MODULE: ./src/format.ts
-var format = __nccwpck_require__(6264);
-// EXTERNAL MODULE: ./src/result.ts
-var src_result = __nccwpck_require__(1666);
+// EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
+var checks = __nccwpck_require__(1093);
+// EXTERNAL MODULE: ./src/core/format.ts
+var format = __nccwpck_require__(6228);
+// EXTERNAL MODULE: ./src/result/result.ts
+var result_result = __nccwpck_require__(1628);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __nccwpck_require__(6412);
 // EXTERNAL MODULE: ./src/report/wording.ts
@@ -36203,7 +33230,7 @@ footer{margin-top:40px;font-size:.82rem;color:var(--muted)}
 function num(v) {
     if (v === null || v === undefined)
         return '–';
-    return (0,report_escape/* escapeHtml */.ZD)((0,format/* formatNumber */.Z)((0,src_result/* fromJsonNumber */.M)(v)));
+    return (0,report_escape/* escapeHtml */.ZD)((0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(v)));
 }
 function badge(status) {
     return `<span class="badge ${(0,report_escape/* escapeHtml */.ZD)(status)}">${(0,report_escape/* escapeHtml */.ZD)(MARK[status] ?? status)}</span>`;
@@ -36340,7 +33367,7 @@ function attrs(pairs) {
         .join('');
 }
 function junit_figure(c) {
-    const value = c.value === null ? '–' : (0,format/* formatNumber */.Z)((0,src_result/* fromJsonNumber */.M)(c.value));
+    const value = c.value === null ? '–' : (0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(c.value));
     return `value ${value}; limit ${(0,wording/* limitText */.PW)(c)}`;
 }
 function suite(m, failOn) {
@@ -36489,7 +33516,7 @@ function sarifLog(result, options = {}) {
                 properties: {
                     model: m.name,
                     code: c.code,
-                    value: c.value === null ? null : (0,format/* formatNumber */.Z)((0,src_result/* fromJsonNumber */.M)(c.value)),
+                    value: c.value === null ? null : (0,format/* formatNumber */.Z)((0,result_result/* fromJsonNumber */.M)(c.value)),
                     limit: c.limit,
                     warn: c.warn,
                 },
@@ -36527,7 +33554,7 @@ function formatSarif(result, options = {}) {
     return `${JSON.stringify(sarifLog(result, options), null, 2)}\n`;
 }
 
-;// CONCATENATED MODULE: ./src/output-files.ts
+;// CONCATENATED MODULE: ./src/entries/output-files.ts
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
  * and the action; the reporters only format, this module only writes.
@@ -36556,163 +33583,2675 @@ async function writeFileReports(result, files) {
 
 /***/ }),
 
-/***/ 6093:
+/***/ 2485:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   aJ: () => (/* binding */ serveTasks),
-/* harmony export */   kD: () => (/* binding */ runPool),
-/* harmony export */   yV: () => (/* binding */ defaultJobs)
-/* harmony export */ });
-/* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8161);
-/* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_os__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5919);
-/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(3916);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  SC: () => (/* reexport */ qr_accumulator_QrAccumulator),
+  rT: () => (/* binding */ RefinementPass),
+  Ps: () => (/* binding */ fitFactor),
+  lG: () => (/* binding */ leveragesInto),
+  C4: () => (/* binding */ refinementApplies),
+  gQ: () => (/* binding */ solveCoefficients)
+});
+
+// UNUSED EXPORTS: REFINE_MAX_CONDITION, REFINE_MIN_CONDITION, fitDesign, leverages, predict
+
+// EXTERNAL MODULE: ./src/fit/svd.ts
+var svd = __nccwpck_require__(5936);
+;// CONCATENATED MODULE: ./src/fit/factor-solver.ts
 /**
- * A small pool of worker threads: runs a list of tasks on up to `jobs` workers and returns the
- * results in the order of the tasks, whatever order they finish in. Tasks and results cross the
- * thread boundary as plain data (structured clone), so they must be plain objects, arrays,
- * strings, numbers, booleans, null and typed arrays.
+ * Rank decisions and solves with a p x p upper-triangular factor R of a design X = Q R.
  *
- * The worker side calls {@link serveTasks} with the function that does one task. An
- * {@link InputError} thrown there comes back as an InputError (code, message, location); any
- * other error comes back as an Error with the worker's message and stack. The first error
- * stops the pool (the other workers are terminated) and rejects the run.
+ * Rank is decided on the column-scaled factor R D^-1 (D = diag of column norms, which equal the
+ * design's column norms because ||X e_j|| = ||R e_j||): Householder QR is column-scaling
+ * invariant, so the scaled singular values measure collinearity without being fooled by units.
+ * Tolerance: a singular value counts when s_i > max(n, p) * eps * s_max (the rule of LAPACK's
+ * xGELSS / numpy `matrix_rank`, applied here to the scaled factor; eps = 2^-52).
  */
 
-
-
-/** The number of workers to use by default: the cores Node may use (os.availableParallelism()). */
-function defaultJobs() {
-    return Math.max(1, (0,node_os__WEBPACK_IMPORTED_MODULE_0__.availableParallelism)());
-}
-/** Turns a thrown value into plain data for the other thread. */
-function errorData(error) {
-    if (error instanceof _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz) {
-        return { name: 'InputError', message: error.message, stack: error.stack, code: error.code, location: { ...error.location } };
+/**
+ * Column norms and the SVD of the column-scaled factor, with the numerical rank.
+ *
+ * @param R p x p upper-triangular, column-major
+ * @param p columns (>= 1)
+ * @param rows rows the factor stands for (enters the tolerance max(rows, p) * eps * s_max)
+ */
+function scaledSpectrum(R, p, rows) {
+    const columnNorms = new Float64Array(p);
+    const scaled = new Float64Array(p * p);
+    for (let j = 0; j < p; j++) {
+        let amax = 0;
+        for (let i = 0; i <= j; i++)
+            amax = Math.max(amax, Math.abs(R[j * p + i]));
+        let ss = 0;
+        if (amax > 0)
+            for (let i = 0; i <= j; i++)
+                ss += (R[j * p + i] / amax) ** 2;
+        const d = amax * Math.sqrt(ss);
+        columnNorms[j] = d;
+        const div = d > 0 ? d : 1;
+        for (let i = 0; i <= j; i++)
+            scaled[j * p + i] = R[j * p + i] / div;
     }
-    if (error instanceof Error)
-        return { name: error.name, message: error.message, stack: error.stack };
-    return { name: 'Error', message: String(error) };
-}
-/** Turns plain error data back into an InputError or an Error. */
-function revive(data) {
-    if (data.name === 'InputError' && data.code !== undefined)
-        return new _errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(data.code, data.message, data.location ?? {});
-    const error = new Error(data.message);
-    error.name = data.name;
-    if (data.stack !== undefined)
-        error.stack = data.stack;
-    return error;
+    const { s, V } = (0,svd/* svd */.C)(scaled, p, p, 'right');
+    const tolerance = Math.max(rows, p) * Number.EPSILON * s[0];
+    let rank = 0;
+    while (rank < p && s[rank] > tolerance)
+        rank++;
+    return { columnNorms, singularValues: s, V, tolerance, rank };
 }
 /**
- * Runs every task on a pool of worker threads.
- * @param tasks plain-data tasks, each handed to one worker
- * @param options number of workers, worker script and its data
- * @returns one result per task, in task order
- * @throws the first task error (InputErrors stay InputErrors), or an Error when a worker exits early
+ * Singular values of the factor as it is (no scaling), descending.
+ *
+ * @param R p x p column-major
+ * @param p columns (>= 1)
  */
-function runPool(tasks, options) {
-    const size = Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length);
-    const results = new Array(tasks.length);
-    if (tasks.length === 0)
-        return Promise.resolve(results);
-    return new Promise((resolve, reject) => {
-        const workers = [];
-        let next = 0;
-        let done = 0;
-        let settled = false;
-        const stop = () => {
-            for (const w of workers)
-                void w.terminate();
-        };
-        const failWith = (error) => {
-            if (settled)
-                return;
-            settled = true;
-            stop();
-            reject(error);
-        };
-        const feed = (worker) => {
-            if (next >= tasks.length)
-                return;
-            const message = { index: next, task: tasks[next] };
-            next++;
-            worker.postMessage(message);
-        };
-        for (let w = 0; w < size; w++) {
-            const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.Worker(options.script, { workerData: options.workerData });
-            workers.push(worker);
-            worker.on('message', (reply) => {
-                if (settled)
-                    return;
-                if (!reply.ok)
-                    return failWith(revive(reply.error));
-                results[reply.index] = reply.value;
-                done++;
-                if (done === tasks.length) {
-                    settled = true;
-                    stop();
-                    resolve(results);
-                    return;
-                }
-                feed(worker);
-            });
-            worker.on('error', (error) => failWith(error instanceof Error ? error : new Error(String(error))));
-            worker.on('exit', (code) => {
-                if (!settled)
-                    failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
-            });
-            feed(worker);
+function rawSingularValues(R, p) {
+    return (0,svd/* svd */.C)(R, p, p, 'none').s;
+}
+/**
+ * Solves with R (p x p upper triangular, column-major) given its numerical rank: triangular
+ * substitution when rank = p (most accurate), else the truncated SVD of R keeping the `rank`
+ * largest singular values (minimum-norm least-squares solutions, pseudo-inverse products).
+ */
+class FactorSolver {
+    p;
+    rank;
+    #R;
+    #svd;
+    /**
+     * @param R p x p upper-triangular factor, column-major (not copied: do not change it while in use)
+     * @param p columns
+     * @param rank numerical rank from {@link scaledSpectrum} (0..p)
+     */
+    constructor(R, p, rank) {
+        this.p = p;
+        this.rank = rank;
+        this.#R = R;
+        this.#svd = rank < p && rank > 0 ? (0,svd/* svd */.C)(R, p, p) : undefined;
+    }
+    /** w = R^+ b (back-substitution R w = b when full rank). Length p in, length p out. */
+    solve(b) {
+        const p = this.p;
+        const R = this.#R;
+        const w = new Float64Array(p);
+        if (this.rank === p) {
+            for (let j = p - 1; j >= 0; j--) {
+                let t = b[j];
+                for (let k = j + 1; k < p; k++)
+                    t -= R[k * p + j] * w[k];
+                w[j] = t / R[j * p + j];
+            }
+            return w;
         }
-    });
+        const dec = this.#svd;
+        if (dec === undefined)
+            return w; // rank 0: the minimum-norm solution is zero
+        for (let c = 0; c < this.rank; c++) {
+            let t = 0;
+            for (let i = 0; i < p; i++)
+                t += dec.U[c * p + i] * b[i];
+            t /= dec.s[c];
+            for (let i = 0; i < p; i++)
+                w[i] += dec.V[c * p + i] * t;
+        }
+        return w;
+    }
+    /**
+     * z with ||z||^2 = x^T (R^T R)^+ x: z = R^-T x by forward substitution when full rank, else
+     * S_r^-1 V_r^T x from the truncated SVD. Its squared norm is the leverage of row x.
+     *
+     * @param x a row of the design, length p
+     * @param z output, length p (entries beyond the rank are set to 0)
+     */
+    whiten(x, z) {
+        const p = this.p;
+        const R = this.#R;
+        if (this.rank === p) {
+            for (let j = 0; j < p; j++) {
+                let t = x[j];
+                for (let k = 0; k < j; k++)
+                    t -= R[j * p + k] * z[k];
+                z[j] = t / R[j * p + j];
+            }
+            return z;
+        }
+        z.fill(0);
+        const dec = this.#svd;
+        if (dec === undefined)
+            return z;
+        for (let c = 0; c < this.rank; c++) {
+            let t = 0;
+            for (let i = 0; i < p; i++)
+                t += dec.V[c * p + i] * x[i];
+            z[c] = t / dec.s[c];
+        }
+        return z;
+    }
+    /** (R^T R)^+ g: R^-1 R^-T g when full rank, else V_r S_r^-2 V_r^T g. Length p. */
+    solveNormal(g) {
+        const p = this.p;
+        if (this.rank === p)
+            return this.solve(this.whiten(g, new Float64Array(p)));
+        const out = new Float64Array(p);
+        const dec = this.#svd;
+        if (dec === undefined)
+            return out;
+        for (let c = 0; c < this.rank; c++) {
+            let t = 0;
+            for (let i = 0; i < p; i++)
+                t += dec.V[c * p + i] * g[i];
+            t /= dec.s[c] * dec.s[c];
+            for (let i = 0; i < p; i++)
+                out[i] += dec.V[c * p + i] * t;
+        }
+        return out;
+    }
+}
+
+// EXTERNAL MODULE: ./src/kernels/wasm.ts + 1 modules
+var wasm = __nccwpck_require__(5087);
+;// CONCATENATED MODULE: ./src/fit/qr-accumulator.ts
+/**
+ * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
+ * factor block by block, so memory grows with p^2 and not with the number of rows.
+ *
+ * Folding a block of m rows computes the QR factorisation of the stacked matrix
+ *
+ *     [ R    qty ]
+ *     [ X_b  y_b ]
+ *
+ * where R is already triangular. Householder reflector j only has to touch row j of R and the
+ * m block rows, so a block costs O(m p^2) flops (Golub & Van Loan, Matrix Computations, 4th ed.,
+ * sec. 5.1-5.2 Householder QR, and sec. 6.5.2 on updating a QR factorisation by appending rows).
+ * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
+ */
+
+/** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
+const WORK_NUMBERS = 16384;
+/** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
+const SAFE_SMALL = 1e-150;
+const SAFE_LARGE = 1e150;
+/**
+ * Streaming Householder QR: folds row blocks into an upper-triangular p x p factor R, Q^T y and
+ * the residual sum of squares.
+ *
+ * With X the n x p matrix of every row folded so far and y its right-hand side, the state is
+ * X = Q [R; 0], Q^T y = [qty; r] and `rss` = ||r||^2, which is the least-squares residual sum of
+ * squares min ||X w - y||^2 when R has full rank. Reflectors use the sign choice
+ * beta = -sign(alpha) ||a|| (no cancellation), so diagonal entries of R may be negative.
+ *
+ * @example
+ * const acc = new QrAccumulator(2);
+ * acc.addRows(new Float64Array([1, 1, 1, 0, 1, 2]), new Float64Array([1, 2, 3]), 3);
+ */
+class qr_accumulator_QrAccumulator {
+    /** Number of columns. */
+    p;
+    #rows = 0;
+    #R;
+    #qty;
+    #rss = 0;
+    /** Work block (column-major, leading dimension `#chunk`) and its right-hand side. */
+    #work;
+    #workY;
+    #chunk;
+    /**
+     * @param p number of columns of the design (a non-negative integer)
+     * @throws RangeError when p is not a non-negative integer
+     */
+    constructor(p) {
+        if (!Number.isInteger(p) || p < 0) {
+            throw new RangeError(`QrAccumulator: p must be a non-negative integer, got ${String(p)}`);
+        }
+        this.p = p;
+        this.#R = new Float64Array(p * p);
+        this.#qty = new Float64Array(p);
+        this.#chunk = Math.max(16, Math.floor(WORK_NUMBERS / (p + 1)));
+    }
+    /** Number of rows folded in so far (all rows, including penalty rows). */
+    get rows() {
+        return this.#rows;
+    }
+    /**
+     * Upper-triangular factor, p x p, column-major (R[j*p + i]); rows beyond the rank are zero
+     * (up to rounding) when fewer rows than p were folded. This is the live array: read it, do
+     * not write it (use {@link clone} for a copy to change).
+     */
+    get R() {
+        return this.#R;
+    }
+    /** First p entries of Q^T y (live array: read only). */
+    get qty() {
+        return this.#qty;
+    }
+    /** Sum of squares of the remaining entries of Q^T y (the least-squares residual sum of squares when R has full rank). */
+    get rss() {
+        return this.#rss;
+    }
+    /**
+     * Fold m rows into the factor. Large m is processed in internal blocks; the inputs are not
+     * modified.
+     *
+     * @param X column-major m x p block (X[j*m + i] is row i, column j); length at least m*p
+     * @param y right-hand side, length m or more (the first m entries are used)
+     * @param m number of rows (a non-negative integer; 0 does nothing)
+     * @throws RangeError on bad shapes or a NaN / infinite value (the message names row and column)
+     */
+    addRows(X, y, m) {
+        const p = this.p;
+        if (!Number.isInteger(m) || m < 0) {
+            throw new RangeError(`addRows: m must be a non-negative integer, got ${String(m)}`);
+        }
+        if (X.length < m * p) {
+            throw new RangeError(`addRows: X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
+        }
+        if (y.length < m) {
+            throw new RangeError(`addRows: y must hold at least m = ${m} numbers, got ${y.length}`);
+        }
+        this.#foldAll(X, y, m);
+        this.#rows += m;
+    }
+    /**
+     * Fold another accumulator's factor into this one: stack [R1; R2] (with their Q^T y) and
+     * re-triangularise; residual sums of squares and row counts add. Used for k-fold
+     * cross-validation: the fit without fold k is the merge of the other folds.
+     *
+     * @param other an accumulator with the same p (not modified)
+     * @throws RangeError when the column counts differ
+     */
+    merge(other) {
+        if (other.p !== this.p) {
+            throw new RangeError(`merge: column counts differ (${this.p} and ${other.p})`);
+        }
+        // R2 is column-major p x p with leading dimension p: exactly the block layout of addRows.
+        // Copy first so that merging an accumulator into itself reads the old factor.
+        const R2 = Float64Array.from(other.#R);
+        const qty2 = Float64Array.from(other.#qty);
+        const rss2 = other.#rss;
+        const rows2 = other.#rows;
+        this.#foldAll(R2, qty2, this.p);
+        this.#rss += rss2;
+        this.#rows += rows2;
+    }
+    /** An independent copy (same factor, right-hand side, rss and row count). */
+    clone() {
+        const copy = new qr_accumulator_QrAccumulator(this.p);
+        copy.#R.set(this.#R);
+        copy.#qty.set(this.#qty);
+        copy.#rss = this.#rss;
+        copy.#rows = this.#rows;
+        return copy;
+    }
+    /**
+     * Folds a column-major m x p block in pieces of at most `#chunk` rows: in WebAssembly where it
+     * is in use (wasm-kernels.ts; the same operations in the same order), else below.
+     */
+    #foldAll(X, y, m) {
+        const chunk = this.#chunk;
+        const kernels = (0,wasm/* wasmKernels */.FY)();
+        if (kernels !== null) {
+            const { rss, bad } = (0,wasm/* foldRows */.$8)(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
+            this.#rss = rss;
+            if (bad !== null)
+                throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
+            return;
+        }
+        for (let start = 0; start < m; start += chunk) {
+            this.#fold(X, m, y, start, Math.min(chunk, m - start));
+        }
+    }
+    /**
+     * Copies rows [start, start + mb) of the column-major block X (leading dimension ldx) into
+     * the work block, checking every value, then annihilates them against R.
+     */
+    #fold(X, ldx, y, start, mb) {
+        const p = this.p;
+        const ld = this.#chunk;
+        if (this.#work === undefined || this.#workY === undefined) {
+            this.#work = new Float64Array(ld * p);
+            this.#workY = new Float64Array(ld);
+        }
+        copyChecked(X, ldx, y, start, mb, p, this.#work, this.#workY, ld);
+        annihilate(this.#R, this.#qty, this.#work, this.#workY, ld, p, mb);
+        // What is left of the block's right-hand side is orthogonal to the column space.
+        this.#rss += qr_accumulator_sumOfSquares(this.#workY, mb);
+    }
+}
+// The kernels below are separate functions, each one loop nest, so that V8 optimises each
+// whole (a loop that first runs after another loop was optimised mid-function has no type
+// feedback and throws the optimised code away, block after block).
+/**
+ * Copies rows [start, start + mb) of the column-major X (leading dimension ldx) and of y into C
+ * (leading dimension ld) and yc.
+ * @throws RangeError naming row and column when a value is NaN or infinite
+ */
+function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
+    for (let j = 0; j < p; j++)
+        copyColumnChecked(X, j * ldx + start, C, j * ld, mb, start, j);
+    copyColumnChecked(y, start, yc, 0, mb, start, -1);
 }
 /**
- * The worker side: answers every task the pool sends with `handle(task)`. Call once, at the top
- * level of the worker script. Does nothing on the main thread.
- * @param handle does one task; its value (or error) goes back to the pool
+ * Copies mb values from src[from..] to dst[to..] (one loop per function; see DEVELOPERS.md,
+ * "Writing hot loops").
+ * @param firstRow the row of src[from], for the error
+ * @param column the column of X, or -1 for y, for the error
+ * @throws RangeError naming row and column when a value is NaN or infinite
  */
-function serveTasks(handle) {
-    if (node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.isMainThread || node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort === null)
+function copyColumnChecked(src, from, dst, to, mb, firstRow, column) {
+    for (let i = 0; i < mb; i++) {
+        const v = src[from + i];
+        if (!Number.isFinite(v))
+            throw notFinite(firstRow + i, column, v);
+        dst[to + i] = v;
+    }
+}
+/** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
+function notFinite(row, column, value) {
+    const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
+    return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
+}
+/** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
+function qr_accumulator_sumOfSquares(v, m) {
+    let s = 0;
+    for (let i = 0; i < m; i++)
+        s += v[i] * v[i];
+    return s;
+}
+/**
+ * Householder reflections that zero the mb x p block C (leading dimension ld) against the
+ * triangular R (p x p, column-major), applied to qty and yc alike. Each step is a function of its
+ * own (one loop nest each), so that V8 compiles the small hot pieces separately and soon.
+ */
+function annihilate(R, qty, C, yc, ld, p, mb) {
+    for (let j = 0; j < p; j++) {
+        const cj = j * ld;
+        const alpha = R[j * p + j];
+        const beta = reflector(C, cj, mb, alpha);
+        if (Number.isNaN(beta))
+            continue; // nothing to annihilate in this column
+        const tau = (beta - alpha) / beta;
+        let k = j + 1;
+        // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
+        // operations and their order are those of the single-column loop).
+        for (; k + 3 < p; k += 4)
+            reflectFour(R, C, ld, p, j, k, mb, tau);
+        for (; k + 1 < p; k += 2)
+            reflectTwo(R, C, ld, p, j, k, mb, tau);
+        for (; k < p; k++)
+            reflectOne(R, C, ld, p, j, k, mb, tau);
+        reflectTarget(qty, yc, C, cj, mb, tau, j);
+        R[j * p + j] = beta;
+    }
+}
+/**
+ * The reflector for column j of [R; C] with a = [alpha; C[cj..cj+mb)]: H = I - tau u u^T with
+ * u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]], tau = (beta - alpha) / beta in
+ * [1, 2] (the normalisation of LAPACK's dlarfg). Every |u_i| <= 1, so no intermediate overflows or
+ * underflows however tiny the column is. Overwrites the column with u's lower part and returns
+ * beta; NaN (the column unchanged) when the block part is zero.
+ */
+function reflector(C, cj, mb, alpha) {
+    const amax = Math.max(Math.abs(alpha), largestMagnitudeIn(C, cj, mb));
+    if (amax === 0)
+        return Number.NaN;
+    let norm;
+    if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
+        const sigma = sumOfSquaresIn(C, cj, mb); // sum of squares of the block part
+        if (sigma === 0)
+            return Number.NaN;
+        norm = Math.sqrt(alpha * alpha + sigma);
+    }
+    else {
+        const scaled = scaledSumOfSquaresIn(C, cj, mb, amax);
+        if (scaled === 0)
+            return Number.NaN;
+        const a0 = alpha / amax;
+        norm = amax * Math.sqrt(a0 * a0 + scaled);
+    }
+    const beta = alpha >= 0 ? -norm : norm;
+    divideIn(C, cj, mb, alpha - beta);
+    return beta;
+}
+function largestMagnitudeIn(C, from, n) {
+    let amax = 0;
+    for (let i = 0; i < n; i++) {
+        const a = Math.abs(C[from + i]);
+        if (a > amax)
+            amax = a;
+    }
+    return amax;
+}
+function sumOfSquaresIn(C, from, n) {
+    let sigma = 0;
+    for (let i = 0; i < n; i++) {
+        const c = C[from + i];
+        sigma += c * c;
+    }
+    return sigma;
+}
+function scaledSumOfSquaresIn(C, from, n, scale) {
+    let scaled = 0;
+    for (let i = 0; i < n; i++) {
+        const c = C[from + i] / scale;
+        scaled += c * c;
+    }
+    return scaled;
+}
+function divideIn(C, from, n, d) {
+    for (let i = 0; i < n; i++)
+        C[from + i] /= d;
+}
+/** Applies the reflector of column j (u in C's column j) to columns k .. k+3 of [R; C]. */
+function reflectFour(R, C, ld, p, j, k, mb, tau) {
+    const cj = j * ld;
+    const c1 = k * ld;
+    const c2 = c1 + ld;
+    const c3 = c2 + ld;
+    const c4 = c3 + ld;
+    const r1 = k * p + j;
+    let w1 = R[r1];
+    let w2 = R[r1 + p];
+    let w3 = R[r1 + 2 * p];
+    let w4 = R[r1 + 3 * p];
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        w1 += u * C[c1 + i];
+        w2 += u * C[c2 + i];
+        w3 += u * C[c3 + i];
+        w4 += u * C[c4 + i];
+    }
+    const f1 = tau * w1;
+    const f2 = tau * w2;
+    const f3 = tau * w3;
+    const f4 = tau * w4;
+    if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0)
         return;
-    const port = node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort;
-    port.on('message', (message) => {
-        Promise.resolve()
-            .then(() => handle(message.task))
-            .then((value) => port.postMessage({ index: message.index, ok: true, value }), (error) => port.postMessage({ index: message.index, ok: false, error: errorData(error) }));
+    R[r1] -= f1;
+    R[r1 + p] -= f2;
+    R[r1 + 2 * p] -= f3;
+    R[r1 + 3 * p] -= f4;
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        C[c1 + i] -= f1 * u;
+        C[c2 + i] -= f2 * u;
+        C[c3 + i] -= f3 * u;
+        C[c4 + i] -= f4 * u;
+    }
+}
+/** Applies the reflector of column j to columns k and k+1 of [R; C]. */
+function reflectTwo(R, C, ld, p, j, k, mb, tau) {
+    const cj = j * ld;
+    const ck = k * ld;
+    const ck2 = ck + ld;
+    const rIdx = k * p + j;
+    const rIdx2 = rIdx + p;
+    let w1 = R[rIdx];
+    let w2 = R[rIdx2];
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        w1 += u * C[ck + i];
+        w2 += u * C[ck2 + i];
+    }
+    const f1 = tau * w1;
+    const f2 = tau * w2;
+    if (f1 === 0 && f2 === 0)
+        return;
+    R[rIdx] -= f1;
+    R[rIdx2] -= f2;
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        C[ck + i] -= f1 * u;
+        C[ck2 + i] -= f2 * u;
+    }
+}
+/** Applies the reflector of column j to column k of [R; C]. */
+function reflectOne(R, C, ld, p, j, k, mb, tau) {
+    const cj = j * ld;
+    const ck = k * ld;
+    const rIdx = k * p + j;
+    let w = R[rIdx];
+    for (let i = 0; i < mb; i++)
+        w += C[cj + i] * C[ck + i];
+    const f = tau * w;
+    if (f === 0)
+        return;
+    R[rIdx] -= f;
+    for (let i = 0; i < mb; i++)
+        C[ck + i] -= f * C[cj + i];
+}
+/** Applies the reflector of column j (u in C from cj) to the right-hand side [qty; yc]. */
+function reflectTarget(qty, yc, C, cj, mb, tau, j) {
+    let w = qty[j];
+    for (let i = 0; i < mb; i++)
+        w += C[cj + i] * yc[i];
+    const f = tau * w;
+    if (f === 0)
+        return;
+    qty[j] -= f;
+    for (let i = 0; i < mb; i++)
+        yc[i] -= f * C[cj + i];
+}
+
+;// CONCATENATED MODULE: ./src/fit/ridge.ts
+/**
+ * Checks a penalty and its column mask.
+ *
+ * @param p number of columns
+ * @param ridge lambda (default 0)
+ * @param penalised mask of length p (default: every column)
+ * @returns lambda and a concrete boolean mask of length p
+ * @throws RangeError when lambda is negative or not finite, or the mask has the wrong length
+ */
+function checkPenalty(p, ridge = 0, penalised) {
+    if (typeof ridge !== 'number' || !Number.isFinite(ridge) || ridge < 0) {
+        throw new RangeError(`ridge must be a finite number >= 0, got ${String(ridge)}`);
+    }
+    if (penalised !== undefined && penalised.length !== p) {
+        throw new RangeError(`penalised must have one entry per column (${p}), got ${penalised.length}`);
+    }
+    const mask = Array.from({ length: p }, (_, j) => (penalised === undefined ? true : Boolean(penalised[j])));
+    return { lambda: ridge, mask };
+}
+/**
+ * The factor of [X; sqrt(lambda) E]: a clone of the data factor with one penalty row per
+ * penalised column folded in. The penalty applies to the columns exactly as built (lambda is
+ * not rescaled by column norms or row counts).
+ *
+ * @param data factor of the data rows (not modified)
+ * @param lambda penalty >= 0; 0 (or no penalised column) returns a plain clone
+ * @param mask length p, true where column j is penalised
+ * @returns a new accumulator; its `rows` counts the penalty rows too
+ */
+function penalisedFactor(data, lambda, mask) {
+    const factor = data.clone();
+    const p = data.p;
+    const cols = [];
+    for (let j = 0; j < p; j++)
+        if (mask[j])
+            cols.push(j);
+    if (lambda === 0 || cols.length === 0)
+        return factor;
+    const k = cols.length;
+    const E = new Float64Array(k * p);
+    const root = Math.sqrt(lambda);
+    cols.forEach((j, r) => {
+        E[j * k + r] = root;
     });
+    factor.addRows(E, new Float64Array(k), k);
+    return factor;
+}
+
+;// CONCATENATED MODULE: ./src/fit/index.ts
+/**
+ * The fitting engine: least squares and ridge from a streaming Householder QR factor, with
+ * rank and conditioning diagnostics. This module decides how to solve (triangular substitution
+ * or truncated SVD, with or without penalty rows); the solvers know nothing of that choice.
+ *
+ * Accuracy: on the 11 NIST StRD linear least-squares datasets (raw designs, no centring),
+ * `fitDesign(..., { refine: true })` agrees with the certified coefficients and residual SD to at
+ * least 9 significant digits, 7.7 on Filip (plain QR: at least 6.5, Wampler5 being the weakest;
+ * see test/fit/nist-strd.test.ts, which prints every dataset's figures).
+ */
+
+
+
+
+
+/**
+ * Solves least squares or ridge from a data factor (data rows only). Never mutates `data`.
+ *
+ * Rank is decided on the column-scaled factor (see factor-solver.ts: s_i > max(n, p) eps s_max).
+ * Full rank: back-substitution on R (most accurate). Rank deficient, or fewer rows than
+ * parameters: the minimum-norm least-squares solution from the truncated SVD of R. Ridge solves
+ * [X; sqrt(lambda) E] w ~ [y; 0] with E selecting the penalised columns.
+ *
+ * Edge cases: 0 rows gives rank 0, zero coefficients, condition numbers Infinity; p = 0 gives
+ * empty arrays, rank 0, not deficient, condition numbers 1.
+ *
+ * @param data factor of the data rows
+ * @param options ridge penalty (default 0) and penalised columns (default all)
+ * @throws RangeError on a negative or non-finite penalty or a mask of the wrong length
+ */
+function fitFactor(data, options = {}) {
+    const p = data.p;
+    const { lambda, mask } = checkPenalty(p, options.ridge, options.penalised);
+    const factor = penalisedFactor(data, lambda, mask);
+    if (p === 0) {
+        return {
+            coefficients: new Float64Array(0),
+            rank: 0,
+            rankDeficient: false,
+            conditionNumber: 1,
+            conditionNumberScaled: 1,
+            singularValuesScaled: new Float64Array(0),
+            collinearColumns: [],
+            factor,
+            rss: data.rss,
+            factorRank: 0,
+            degreesOfFreedom: 0,
+            ridge: lambda,
+            penalised: mask,
+            refined: false,
+        };
+    }
+    // Diagnostics of the design itself.
+    const spectrum = scaledSpectrum(data.R, p, data.rows);
+    const rank = spectrum.rank;
+    const rankDeficient = rank < p;
+    const sRaw = rawSingularValues(data.R, p);
+    const conditionNumber = rankDeficient ? Infinity : sRaw[0] / sRaw[p - 1];
+    const sScaled = spectrum.singularValues;
+    const conditionNumberScaled = rankDeficient ? Infinity : sScaled[0] / sScaled[p - 1];
+    const collinearColumns = [];
+    for (let j = 0; j < p; j++) {
+        if (spectrum.columnNorms[j] === 0 || Math.abs(spectrum.V[(p - 1) * p + j]) >= 0.1)
+            collinearColumns.push(j);
+    }
+    // Solve with the factor of the design plus penalty rows.
+    const factorRank = factor.rows === data.rows ? rank : scaledSpectrum(factor.R, p, factor.rows).rank;
+    const solver = new FactorSolver(factor.R, p, factorRank);
+    const coefficients = solver.solve(factor.qty);
+    return {
+        coefficients,
+        rank,
+        rankDeficient,
+        conditionNumber,
+        conditionNumberScaled,
+        singularValuesScaled: sScaled,
+        collinearColumns,
+        factor,
+        rss: dataRss(data, coefficients),
+        factorRank,
+        degreesOfFreedom: hatTrace(data, solver),
+        ridge: lambda,
+        penalised: mask,
+        refined: false,
+    };
+}
+/**
+ * The coefficients {@link fitFactor} returns, without its diagnostics (condition numbers,
+ * degrees of freedom): for the many solves of cross-validation and sweeps. The rank decision is
+ * the same: full rank is taken without an SVD only when it is certain, i.e. when the lower bound
+ * 1 / ||S^-1||_F of the smallest singular value of the column-scaled factor S exceeds the cutoff
+ * max(rows, p) eps ||S||_F built on an upper bound of the largest (Golub & Van Loan, Matrix
+ * Computations, 4th ed., sec. 2.3.2: ||A||_2 <= ||A||_F); otherwise the SVD decides.
+ *
+ * @param data factor of the data rows (not modified)
+ * @param options ridge penalty (default 0) and penalised columns (default all)
+ * @returns length p
+ * @throws RangeError on a negative or non-finite penalty or a mask of the wrong length
+ */
+function solveCoefficients(data, options = {}) {
+    const p = data.p;
+    const { lambda, mask } = checkPenalty(p, options.ridge, options.penalised);
+    const factor = penalisedFactor(data, lambda, mask);
+    if (p === 0)
+        return new Float64Array(0);
+    const rank = certainlyFullRank(factor.R, p, factor.rows) ? p : scaledSpectrum(factor.R, p, factor.rows).rank;
+    return new FactorSolver(factor.R, p, rank).solve(factor.qty);
+}
+/** True when the column-scaled triangular factor surely has rank p under the rule of {@link scaledSpectrum}. */
+function certainlyFullRank(R, p, rows) {
+    const S = new Float64Array(p * p);
+    let frob = 0;
+    for (let j = 0; j < p; j++) {
+        let ss = 0;
+        for (let i = 0; i <= j; i++)
+            ss += R[j * p + i] * R[j * p + i];
+        if (!(ss > 1e-280 && ss < 1e280))
+            return false; // leave extreme scales to the SVD
+        const d = Math.sqrt(ss);
+        for (let i = 0; i <= j; i++)
+            S[j * p + i] = R[j * p + i] / d;
+        frob += 1;
+    }
+    // ||S^-1||_F^2 by solving S x = e_c for each column c (back-substitution).
+    const x = new Float64Array(p);
+    let inv = 0;
+    for (let c = 0; c < p; c++) {
+        for (let i = p - 1; i >= 0; i--) {
+            let t = i === c ? 1 : 0;
+            for (let k = i + 1; k <= c; k++)
+                t -= S[k * p + i] * x[k];
+            const diag = S[i * p + i];
+            if (diag === 0)
+                return false;
+            x[i] = i > c ? 0 : t / diag;
+            if (i <= c)
+                inv += x[i] * x[i];
+        }
+    }
+    if (!Number.isFinite(inv))
+        return false;
+    const sMinLower = 1 / Math.sqrt(inv);
+    const sMaxUpper = Math.sqrt(frob);
+    // A safety factor of 2 covers the rounding of these bounds.
+    return sMinLower > 2 * Math.max(rows, p) * Number.EPSILON * sMaxUpper;
+}
+/**
+ * Convenience: folds a whole column-major n x p design and solves it.
+ *
+ * @param X column-major n x p (X[j*n + i] is row i, column j)
+ * @param y length n
+ * @param n rows
+ * @param p columns
+ * @param options {@link FitOptions} plus `refine` (one refinement pass over the data; default false)
+ * @throws RangeError on bad shapes, NaN or infinite input, or bad options
+ */
+function fitDesign(X, y, n, p, options = {}) {
+    const acc = new QrAccumulator(p);
+    acc.addRows(X, y, n);
+    const fit = fitFactor(acc, options);
+    if (options.refine !== true || !refinementApplies(fit))
+        return fit;
+    const pass = new RefinementPass(fit);
+    pass.addRows(X, y, n);
+    const refined = pass.finish();
+    // The data are at hand: take rss directly from compensated residuals at the new coefficients.
+    if (!refined.refined)
+        return fit;
+    const r = new Float64Array(n);
+    residualsInto(X, y, n, refined.coefficients, r, new Float64Array(n));
+    return { ...refined, rss: sumOfSquares(r, n) };
+}
+/**
+ * Largest scaled condition number for which {@link RefinementPass} applies its correction:
+ * the corrected semi-normal equations step contracts the error by about kappa^2 eps (Björck
+ * 1987, "Stability analysis of the method of seminormal equations", Linear Algebra Appl. 88/89),
+ * so it is used when kappa^2 eps <= 1e-3, i.e. kappa <= about 2.1e6.
+ */
+const REFINE_MAX_CONDITION = Math.sqrt(1e-3 / Number.EPSILON);
+/**
+ * Scaled condition number at or below which the refinement pass is skipped: Householder QR is
+ * backward stable, so its coefficients are then accurate to about kappa eps, 2e-14 norm-wise
+ * (Golub & Van Loan, Matrix Computations, 4th ed., sec. 5.3.8), and the pass would cost about a
+ * third of the fit for digits no figure shows. Measured on the benchmark's M workload (kappa
+ * 19): without the pass the coefficients differ from the refined ones by 4e-15 norm-wise and
+ * 2.5e-13 in the worst single coefficient, the reported figures by at most 7e-14 relative.
+ */
+const REFINE_MIN_CONDITION = 100;
+/** True when a refinement pass changes `fit` ({@link REFINE_MIN_CONDITION} < kappa <= {@link REFINE_MAX_CONDITION}, full rank). */
+function refinementApplies(fit) {
+    return fit.coefficients.length > 0 && !fit.rankDeficient && fit.conditionNumberScaled > REFINE_MIN_CONDITION && fit.conditionNumberScaled <= REFINE_MAX_CONDITION;
+}
+/**
+ * One step of iterative refinement computed in a streaming pass over the data rows (the same
+ * rows, in any blocks, that built the fit's data factor): the corrected semi-normal equations
+ * step w += (R^T R)^+ (X^T r - lambda E w) with r = y - X w and R the fit's factor (Björck,
+ * Numerical Methods for Least Squares Problems, SIAM 1996, sec. 2.5.3 and 6.6.5). The
+ * residuals and X^T r are accumulated in double-double arithmetic (compensated dot products,
+ * Ogita, Rump & Oishi 2005, "Accurate sum and dot product", SIAM J. Sci. Comput. 26(6),
+ * algorithm Dot2), which is what makes the step gain digits.
+ *
+ * The correction is applied only where {@link refinementApplies}: the design's scaled condition
+ * number above {@link REFINE_MIN_CONDITION} and at most {@link REFINE_MAX_CONDITION}, full rank;
+ * otherwise `finish` returns the
+ * QR solution unchanged with `refined` false. `rss` of a refined fit is
+ * ||r - X dw||^2 = ||r||^2 - 2 dw^T X^T r + dw^T X^T X dw with X^T X = R^T R - lambda E^T E, so
+ * no third pass is needed.
+ */
+class RefinementPass {
+    #fit;
+    #gHi;
+    #gLo;
+    #rss = 0;
+    /** @param fit a fit from {@link fitFactor} (not modified) */
+    constructor(fit) {
+        this.#fit = fit;
+        this.#gHi = new Float64Array(fit.coefficients.length);
+        this.#gLo = new Float64Array(fit.coefficients.length);
+    }
+    /**
+     * Adds m data rows to the pass.
+     *
+     * @param X column-major m x p block
+     * @param y length at least m
+     * @param m rows
+     * @throws RangeError on bad shapes or non-finite values
+     */
+    addRows(X, y, m) {
+        const w = this.#fit.coefficients;
+        const p = w.length;
+        // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
+        const kernels = (0,wasm/* wasmKernels */.FY)();
+        if (kernels !== null) {
+            checkShape(X, y, m, p);
+            const { sumOfSquares: ss, bad } = (0,wasm/* refineRows */.Hb)(kernels, X, y, m, w, this.#gHi, this.#gLo);
+            if (bad !== null)
+                fit_notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+            this.#rss += ss;
+            return;
+        }
+        checkBlock(X, y, m, p);
+        const hi = new Float64Array(m);
+        const lo = new Float64Array(m);
+        residualsInto(X, y, m, w, hi, lo);
+        this.#rss += qr_accumulator_sumOfSquares(hi, m);
+        for (let j = 0; j < p; j++)
+            addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
+    }
+    /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
+    finish() {
+        const fit = this.#fit;
+        const w = fit.coefficients;
+        const p = w.length;
+        if (!refinementApplies(fit))
+            return fit;
+        const lambda = fit.ridge;
+        const mask = fit.penalised;
+        const gData = new Float64Array(p);
+        for (let j = 0; j < p; j++)
+            gData[j] = this.#gHi[j] + this.#gLo[j];
+        // Gradient of the augmented problem: the penalty rows' residuals are -sqrt(lambda) E w.
+        const g = new Float64Array(p);
+        for (let j = 0; j < p; j++)
+            g[j] = gData[j] - (mask[j] ? lambda * w[j] : 0);
+        const solver = new FactorSolver(fit.factor.R, p, fit.factorRank);
+        const dw = solver.solveNormal(g);
+        const coefficients = new Float64Array(p);
+        for (let j = 0; j < p; j++)
+            coefficients[j] = w[j] + dw[j];
+        // rss at the new coefficients.
+        const R = fit.factor.R;
+        let quad = 0;
+        for (let i = 0; i < p; i++) {
+            let t = 0;
+            for (let k = i; k < p; k++)
+                t += R[k * p + i] * dw[k];
+            quad += t * t;
+        }
+        let cross = 0;
+        for (let j = 0; j < p; j++) {
+            cross += dw[j] * gData[j];
+            if (mask[j])
+                quad -= lambda * dw[j] * dw[j];
+        }
+        const rss = Math.max(0, this.#rss - 2 * cross + quad);
+        return { ...fit, coefficients, rss, refined: true };
+    }
+}
+/**
+ * Leverages h_i = x_i^T (X^T X + lambda E)^+ x_i for m rows (diagonal of the hat matrix for the
+ * data rows; Hoaglin & Welsch 1978, The American Statistician 32(1)). Uses the fit's factor:
+ * forward substitution with R^T when it has full rank, the truncated SVD (pseudo-inverse)
+ * otherwise.
+ *
+ * @param fit a fit from {@link fitFactor} or {@link fitDesign}
+ * @param X column-major m x p rows (training rows for the hat diagonal, any rows otherwise)
+ * @param m rows
+ * @returns length m
+ * @throws RangeError on bad shapes or non-finite values
+ */
+function leverages(fit, X, m) {
+    const p = fit.factor.p;
+    checkBlock(X, undefined, m, p);
+    const out = new Float64Array(m);
+    if (p === 0)
+        return out;
+    const solver = new FactorSolver(fit.factor.R, p, fit.factorRank);
+    const x = new Float64Array(p);
+    const z = new Float64Array(p);
+    for (let i = 0; i < m; i++) {
+        for (let j = 0; j < p; j++)
+            x[j] = X[j * m + i];
+        solver.whiten(x, z);
+        let h = 0;
+        for (let j = 0; j < p; j++)
+            h += z[j] * z[j];
+        out[i] = h;
+    }
+    return out;
+}
+/**
+ * Leverages of m rows written into `out` (see {@link leverages}), computed a few hundred rows at
+ * a time with the forward substitution z = R^-T x run down whole columns; per row the operations
+ * and their order are those of {@link leverages}, so the figures are identical. No finiteness
+ * check (the rows come from a design the factor was built from).
+ *
+ * @param fit a fit from {@link fitFactor}
+ * @param X column-major m x p block
+ * @param m rows
+ * @param out length >= m; out[i] receives h_i
+ */
+function leveragesInto(fit, X, m, out) {
+    const p = fit.factor.p;
+    if (p === 0) {
+        out.fill(0, 0, m);
+        return;
+    }
+    if (fit.factorRank < p) {
+        out.set(leverages(fit, X, m));
+        return;
+    }
+    // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
+    const kernels = (0,wasm/* wasmKernels */.FY)();
+    if (kernels !== null) {
+        (0,wasm/* leverageRows */.fO)(kernels, fit.factor.R, p, X, m, out);
+        return;
+    }
+    const Z = new Float64Array(LEVERAGE_CHUNK * p);
+    for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK)
+        leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
+}
+/** Rows per chunk of {@link leveragesInto} (the chunk's z columns stay in cache). */
+const LEVERAGE_CHUNK = 256;
+/**
+ * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
+ * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
+ * its own so that its loops never run inside code V8 optimised in the middle of another chunk
+ * (see DEVELOPERS.md, "Writing hot loops").
+ */
+function leverageChunk(R, p, X, m, i0, mb, Z, out) {
+    const CH = LEVERAGE_CHUNK;
+    for (let i = 0; i < mb; i++)
+        out[i0 + i] = 0;
+    for (let j = 0; j < p; j++) {
+        const zj = j * CH;
+        const xj = j * m + i0;
+        for (let i = 0; i < mb; i++)
+            Z[zj + i] = X[xj + i];
+        let k = 0;
+        // Four earlier columns per sweep (the same subtractions in the same order per row).
+        for (; k + 3 < j; k += 4) {
+            const r0 = R[j * p + k];
+            const r1 = R[j * p + k + 1];
+            const r2 = R[j * p + k + 2];
+            const r3 = R[j * p + k + 3];
+            const z0 = k * CH;
+            for (let i = 0; i < mb; i++) {
+                Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
+            }
+        }
+        for (; k < j; k++) {
+            const r = R[j * p + k];
+            const zk = k * CH;
+            for (let i = 0; i < mb; i++)
+                Z[zj + i] -= r * Z[zk + i];
+        }
+        const diag = R[j * p + j];
+        for (let i = 0; i < mb; i++) {
+            const z = Z[zj + i] / diag;
+            Z[zj + i] = z;
+            out[i0 + i] += z * z;
+        }
+    }
+}
+/**
+ * Predictions X w for m rows of a column-major design.
+ *
+ * @param X column-major m x p (p = coefficients.length)
+ * @param m rows
+ * @param coefficients length p
+ * @returns length m
+ * @throws RangeError when X is shorter than m*p
+ */
+function predict(X, m, coefficients) {
+    const p = coefficients.length;
+    if (!Number.isInteger(m) || m < 0)
+        throw new RangeError(`predict: m must be a non-negative integer, got ${String(m)}`);
+    if (X.length < m * p)
+        throw new RangeError(`predict: X must hold m*p = ${m * p} numbers, got ${X.length}`);
+    const out = new Float64Array(m);
+    for (let j = 0; j < p; j++) {
+        const w = coefficients[j];
+        const col = j * m;
+        for (let i = 0; i < m; i++)
+            out[i] += X[col + i] * w;
+    }
+    return out;
+}
+/** ||X w - y||^2 of the data rows from their factor: rss + ||R w - qty||^2. */
+function dataRss(data, w) {
+    const p = data.p;
+    const R = data.R;
+    const qty = data.qty;
+    let extra = 0;
+    for (let i = 0; i < p; i++) {
+        let t = -qty[i];
+        for (let k = i; k < p; k++)
+            t += R[k * p + i] * w[k];
+        extra += t * t;
+    }
+    return data.rss + extra;
+}
+/** trace(X (R_a^T R_a)^+ X^T) = sum over the rows r_i of the data factor of ||whiten(r_i)||^2. */
+function hatTrace(data, solver) {
+    const p = data.p;
+    const R = data.R;
+    const x = new Float64Array(p);
+    const z = new Float64Array(p);
+    let trace = 0;
+    for (let i = 0; i < p; i++) {
+        for (let k = 0; k < p; k++)
+            x[k] = R[k * p + i];
+        solver.whiten(x, z);
+        for (let k = 0; k < p; k++)
+            trace += z[k] * z[k];
+    }
+    return trace;
+}
+/** Checks a column-major block and its right-hand side for shape and finiteness. */
+function checkBlock(X, y, m, p) {
+    checkShape(X, y, m, p);
+    fit_notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
+}
+/** Checks the shapes of a column-major block and its right-hand side. */
+function checkShape(X, y, m, p) {
+    if (!Number.isInteger(m) || m < 0)
+        throw new RangeError(`m must be a non-negative integer, got ${String(m)}`);
+    if (X.length < m * p)
+        throw new RangeError(`X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
+    if (y !== undefined && y.length < m)
+        throw new RangeError(`y must hold at least m = ${m} numbers, got ${y.length}`);
+}
+/**
+ * Throws the RangeError for the first value of X (index k, column-major with m rows) or else of y
+ * (index i) that is not finite; does nothing when both are -1.
+ */
+function fit_notFinite(X, y, m, k, i) {
+    if (k >= 0)
+        throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
+    if (i >= 0 && y !== undefined)
+        throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
+}
+// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+/** Index of the first NaN or infinite value among v[0..n), or -1. */
+function firstNotFinite(v, n) {
+    for (let i = 0; i < n; i++)
+        if (!Number.isFinite(v[i]))
+            return i;
+    return -1;
+}
+/**
+ * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
+ * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
+ */
+function addColumnDot2(X, col, m, hi, lo, gHi, gLo, j) {
+    let sum = gHi[j];
+    let comp = gLo[j];
+    for (let i = 0; i < m; i++) {
+        const a = X[col + i];
+        const prod = a * hi[i];
+        const t = sum + prod;
+        const z = t - sum;
+        comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
+        sum = t;
+    }
+    gHi[j] = sum;
+    gLo[j] = comp;
+}
+/**
+ * r = y - X w for a column-major m x p block as double-double numbers hi + lo (written to the
+ * length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
+ */
+function residualsInto(X, y, m, w, hi, lo) {
+    const p = w.length;
+    for (let i = 0; i < m; i++) {
+        let s = y[i];
+        let c = 0;
+        for (let j = 0; j < p; j++) {
+            const a = -X[j * m + i];
+            const prod = a * w[j];
+            const t = s + prod;
+            const z = t - s;
+            c += s - (t - z) + (prod - z) + twoProductError(a, w[j], prod);
+            s = t;
+        }
+        // Renormalise (s, c) into hi + lo with |lo| <= ulp(hi) / 2 (TwoSum).
+        const h = s + c;
+        const z = h - s;
+        hi[i] = h;
+        lo[i] = s - (h - z) + (c - z);
+    }
+}
+/** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */
+function twoProductError(a, b, prod) {
+    const SPLIT = 134217729; // 2^27 + 1
+    let t = SPLIT * a;
+    const ah = t - (t - a);
+    const al = a - ah;
+    t = SPLIT * b;
+    const bh = t - (t - b);
+    const bl = b - bh;
+    return al * bl - (prod - ah * bh - ah * bl - al * bh);
 }
 
 
 /***/ }),
 
-/***/ 9506:
+/***/ 5936:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   $: () => (/* binding */ isFitgateWorker),
-/* harmony export */   o: () => (/* binding */ WORKER_FLAG)
+/* harmony export */   C: () => (/* binding */ svd)
 /* harmony export */ });
-/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
-/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
+/* unused harmony export MAX_SWEEPS */
 /**
- * Whether this thread is one of fitgate's worker threads. Every worker runs the same bundle as the
- * command (the bundle of an entry is its worker script too), so the entry files ask
- * {@link isFitgateWorker} and stand aside, and the worker module starts its loop instead.
+ * Singular value decomposition of the small p x p matrices of the fitting engine, by one-sided
+ * Jacobi rotations (Hestenes 1958; Demmel & Veselić, "Jacobi's method is more accurate than QR",
+ * SIAM J. Matrix Anal. Appl. 13(4), 1992): the columns of A are rotated pairwise until they are
+ * mutually orthogonal; their norms are then the singular values, the normalised columns the left
+ * singular vectors, and the accumulated rotations the right singular vectors.
+ *
+ * Why not ml-matrix's SVD (Golub-Kahan-Reinsch as in JAMA): its iteration has no cap, and on
+ * factors of rank-deficient designs (all-zero and duplicate columns next to values near the
+ * underflow threshold) it was seen to run for minutes without ending. Jacobi sweeps converge
+ * quadratically and are capped here (60 sweeps); the matrix is scaled by a power of two (exact)
+ * so that its largest entry is about 1, and entries below 2^-600 of it are set to zero.
  */
-
-/** The `workerData` key that marks a fitgate worker. */
-const WORKER_FLAG = 'fitgateWorker';
-/** True in any worker thread fitgate started. */
-function isFitgateWorker() {
-    return !node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.isMainThread && typeof node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData === 'object' && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData !== null && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_FLAG] === true;
+/** Machine epsilon, read once (a property read at the top of a hot function has no type feedback on its first call). */
+const EPSILON = Number.EPSILON;
+/** Most Jacobi sweeps; convergence is quadratic, so well-scaled matrices need fewer than 15. */
+const MAX_SWEEPS = 60;
+/**
+ * SVD of a column-major m x k matrix with m >= k >= 1.
+ *
+ * @param A column-major m x k (A[j*m + i])
+ * @param m rows
+ * @param k columns (at most m)
+ * @param vectors which singular vectors to return; default both
+ * @returns singular values in descending order with the matching vectors
+ * @throws RangeError when m < k or k < 1, or when A has a non-finite entry
+ */
+function svd(A, m, k, vectors = 'both') {
+    if (k < 1 || m < k)
+        throw new RangeError(`svd: need m >= k >= 1, got ${m} x ${k}`);
+    const amax = largestMagnitude(A, m * k);
+    if (!Number.isFinite(amax))
+        throw new RangeError('svd: the matrix has a non-finite entry');
+    if (amax === 0)
+        return zeroSvd(m, k, vectors);
+    const shift = Math.round(Math.log2(amax));
+    const W = scaledCopy(A, m * k, 2 ** -shift);
+    const V = new Float64Array(k * k);
+    for (let c = 0; c < k; c++)
+        V[c * k + c] = 1;
+    jacobiSweeps(W, V, m, k);
+    // Singular values are the column norms; sort descending.
+    const norms = columnNorms(W, m, k);
+    const order = Array.from({ length: k }, (_, c) => c).sort((a, b) => norms[b] - norms[a]);
+    const s = new Float64Array(k);
+    const U = new Float64Array(vectors === 'both' ? m * k : 0);
+    const Vout = new Float64Array(vectors === 'none' ? 0 : k * k);
+    order.forEach((c, to) => {
+        s[to] = norms[c] * 2 ** shift;
+        if (U.length > 0 && norms[c] > 0)
+            for (let i = 0; i < m; i++)
+                U[to * m + i] = W[c * m + i] / norms[c];
+        if (Vout.length > 0)
+            for (let i = 0; i < k; i++)
+                Vout[to * k + i] = V[c * k + i];
+    });
+    return { s, U, V: Vout };
+}
+// The loops below are functions of their own, each a loop nest and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+/** Largest |a_i| over A[0..n); NaN or Infinity when an entry is not finite. */
+function largestMagnitude(A, n) {
+    let amax = 0;
+    for (let i = 0; i < n; i++) {
+        const a = Math.abs(A[i]);
+        if (!(a <= amax))
+            amax = a;
+    }
+    return amax;
+}
+/** A[0..n) times `scale` (a power of two, so exact), entries below 2^-600 set to zero. */
+function scaledCopy(A, n, scale) {
+    const floor = 2 ** -600;
+    const W = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+        const v = A[i] * scale;
+        W[i] = Math.abs(v) < floor ? 0 : v;
+    }
+    return W;
+}
+/**
+ * One-sided Jacobi: rotates column pairs (p, q) of W (m x k), and the same pairs of V (k x k),
+ * until every pair of W's columns is orthogonal to machine precision, or {@link MAX_SWEEPS}.
+ */
+function jacobiSweeps(W, V, m, k) {
+    const eps = EPSILON;
+    for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
+        let rotated = false;
+        for (let p = 0; p < k - 1; p++) {
+            const cp = p * m;
+            for (let q = p + 1; q < k; q++) {
+                const cq = q * m;
+                let alpha = 0;
+                let beta = 0;
+                let gamma = 0;
+                for (let i = 0; i < m; i++) {
+                    const x = W[cp + i];
+                    const y = W[cq + i];
+                    alpha += x * x;
+                    beta += y * y;
+                    gamma += x * y;
+                }
+                if (gamma === 0 || Math.abs(gamma) <= eps * Math.sqrt(alpha * beta))
+                    continue;
+                rotated = true;
+                // Rotation angle that zeroes the (p, q) entry of W^T W (Rutishauser's formulas).
+                const zeta = (beta - alpha) / (2 * gamma);
+                const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
+                const c = 1 / Math.sqrt(1 + t * t);
+                const s = c * t;
+                rotate(W, cp, cq, m, c, s);
+                rotate(V, p * k, q * k, k, c, s);
+            }
+        }
+        if (!rotated)
+            return;
+    }
+}
+/** Euclidean norms of the k columns of the column-major m x k W. */
+function columnNorms(W, m, k) {
+    const norms = new Float64Array(k);
+    for (let c = 0; c < k; c++) {
+        let ss = 0;
+        for (let i = 0; i < m; i++)
+            ss += W[c * m + i] ** 2;
+        norms[c] = Math.sqrt(ss);
+    }
+    return norms;
+}
+/** Rotates the columns of length n starting at `a` and `b` of `M` by the angle with cosine c, sine s. */
+function rotate(M, a, b, n, c, s) {
+    for (let i = 0; i < n; i++) {
+        const x = M[a + i];
+        const y = M[b + i];
+        M[a + i] = c * x - s * y;
+        M[b + i] = s * x + c * y;
+    }
+}
+/** The SVD of an m x k zero matrix: zero singular values, unit vectors. */
+function zeroSvd(m, k, vectors) {
+    const U = new Float64Array(vectors === 'both' ? m * k : 0);
+    const V = new Float64Array(vectors === 'none' ? 0 : k * k);
+    for (let c = 0; c < k; c++) {
+        if (U.length > 0)
+            U[c * m + c] = 1;
+        if (V.length > 0)
+            V[c * k + c] = 1;
+    }
+    return { s: new Float64Array(k), U, V };
 }
 
 
 /***/ }),
 
-/***/ 3007:
+/***/ 5087:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  iT: () => (/* binding */ addProductsInto),
+  b5: () => (/* binding */ firstBeyondIn),
+  $8: () => (/* binding */ foldRows),
+  fO: () => (/* binding */ leverageRows),
+  e8: () => (/* binding */ outOfFoldRows),
+  qO: () => (/* binding */ polynomialColumnsInto),
+  Hb: () => (/* binding */ refineRows),
+  FY: () => (/* binding */ wasmKernels)
+});
+
+// UNUSED EXPORTS: useWasmKernels
+
+;// CONCATENATED MODULE: ./src/kernels/generated/kernels-wasm.ts
+// Generated by test/tools/gen-wasm.mjs from src/kernels/kernels.wat; do not edit.
+/** The row kernels' WebAssembly module (4050 bytes), in base64. */
+const KERNELS_WASM = 'AGFzbQEAAAABkAEQYAJ/fwF/YAN/f38Bf2ACf38BfGADf398AXxgA39/fABgCH9/f39/f398AGAGf39/f3x/AGAHf39/f39/fwBg' +
+    'CX9/f39/f39/fwF/YAZ/f39/f38AYAN8fHwBfGAJf39/f39/f39/AXxgBX9/f39/AGALf39/f39/f39/f38AYAd/f3x8f39/AGAD' +
+    'f398AX8DFxYAAQICAwQDBQUFBgcICQoHCQsMDQ4PBQMBAAEGLwV/AUEAC38BQQALfAFEAAAAAAAAAAALfABEdZQ/aucvyiALfABE' +
+    'r5ZQLjWNE18LB44BDAZtZW1vcnkCAAZiYWRSb3cDAAliYWRDb2x1bW4DAQNyc3MDAg5maXJzdE5vdEZpbml0ZQAABGZvbGQADAls' +
+    'ZXZlcmFnZXMADQZyZWZpbmUAEQthZGRQcm9kdWN0cwASCW91dE9mRm9sZAATEXBvbHlub21pYWxDb2x1bW5zABQLZmlyc3RCZXlv' +
+    'bmQAFQrUHBZAAgF/AXwCQANAIAIgAU4NASAAIAJBA3RqKwMAIQMgAyADoUQAAAAAAAAAAGIEQCACDwsgAkEBaiECDAALC0F/CyMB' +
+    'AX8gACACEAAhAyADQQBIBEAgASAAIAJBA3T8CgAACyADCzgCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwCZIQQgBCADZARAIAQh' +
+    'AwsgAkEBaiECDAALCyADCzUCAX8CfAJAA0AgAiABTg0BIAAgAkEDdGorAwAhBCADIAQgBKKgIQMgAkEBaiECDAALCyADCzgCAX8C' +
+    'fAJAA0AgAyABTg0BIAAgA0EDdGorAwAgAqMhBSAEIAUgBaKgIQQgA0EBaiEDDAALCyAECzEBAn8CQANAIAMgAU4NASAAIANBA3Rq' +
+    'IQQgBCAEKwMAIAKjOQMAIANBAWohAwwACwsLvQEBBnwgApkgACABEAKlIQMgA0QAAAAAAAAAAGEEQEQAAAAAAAD4fw8LIAMjA2Qg' +
+    'AyMEY3EEQCAAIAEQAyEEIAREAAAAAAAAAABhBEBEAAAAAAAA+H8PCyACIAKiIASgnyEHBSAAIAEgAxAEIQUgBUQAAAAAAAAAAGEE' +
+    'QEQAAAAAAAD4fw8LIAIgA6MhBiADIAYgBqIgBaCfoiEHCyAHmiAHIAJEAAAAAAAAAABmGyEIIAAgASACIAihEAUgCAuMBAMHfwl8' +
+    'A38gASAEIAJsQQN0aiEIIAEgBSACbEEDdGohCSAJIAJBA3RqIQogCiACQQN0aiELIAsgAkEDdGohDCAAIAUgA2wgBGpBA3RqIQ0g' +
+    'A0EDdCEOIA0rAwAhDyANIA5qKwMAIRAgDSAOQQJsaisDACERIA0gDkEDbGorAwAhEgJAA0AgGCAGTg0BIBhBA3QhGSAIIBlqKwMA' +
+    'IRcgDyAXIAkgGWorAwCioCEPIBAgFyAKIBlqKwMAoqAhECARIBcgCyAZaisDAKKgIREgEiAXIAwgGWorAwCioCESIBhBAWohGAwA' +
+    'CwsgByAPoiETIAcgEKIhFCAHIBGiIRUgByASoiEWIBNEAAAAAAAAAABhIBREAAAAAAAAAABhcSAVRAAAAAAAAAAAYSAWRAAAAAAA' +
+    'AAAAYXFxBEAPCyANIA0rAwAgE6E5AwAgDSAOaiEaIBogGisDACAUoTkDACAaIA5qIRogGiAaKwMAIBWhOQMAIBogDmohGiAaIBor' +
+    'AwAgFqE5AwBBACEYAkADQCAYIAZODQEgGEEDdCEZIAggGWorAwAhFyAJIBlqIRogGiAaKwMAIBMgF6KhOQMAIAogGWohGiAaIBor' +
+    'AwAgFCAXoqE5AwAgCyAZaiEaIBogGisDACAVIBeioTkDACAMIBlqIRogGiAaKwMAIBYgF6KhOQMAIBhBAWohGAwACwsLuQIDBX8F' +
+    'fAN/IAEgBCACbEEDdGohCCABIAUgAmxBA3RqIQkgCSACQQN0aiEKIAAgBSADbCAEakEDdGohCyALIANBA3RqIQwgCysDACENIAwr' +
+    'AwAhDgJAA0AgEiAGTg0BIBJBA3QhEyAIIBNqKwMAIREgDSARIAkgE2orAwCioCENIA4gESAKIBNqKwMAoqAhDiASQQFqIRIMAAsL' +
+    'IAcgDaIhDyAHIA6iIRAgD0QAAAAAAAAAAGEgEEQAAAAAAAAAAGFxBEAPCyALIAsrAwAgD6E5AwAgDCAMKwMAIBChOQMAQQAhEgJA' +
+    'A0AgEiAGTg0BIBJBA3QhEyAIIBNqKwMAIREgCSATaiEUIBQgFCsDACAPIBGioTkDACAKIBNqIRQgFCAUKwMAIBAgEaKhOQMAIBJB' +
+    'AWohEgwACwsLzgEDA38CfAN/IAEgBCACbEEDdGohCCABIAUgAmxBA3RqIQkgACAFIANsIARqQQN0aiEKIAorAwAhCwJAA0AgDSAG' +
+    'Tg0BIA1BA3QhDiALIAggDmorAwAgCSAOaisDAKKgIQsgDUEBaiENDAALCyAHIAuiIQwgDEQAAAAAAAAAAGEEQA8LIAogCisDACAM' +
+    'oTkDAEEAIQ0CQANAIA0gBk4NASANQQN0IQ4gCSAOaiEPIA8gDysDACAMIAggDmorAwCioTkDACANQQFqIQ0MAAsLC64BAwF/AnwD' +
+    'fyAAIAVBA3RqIQYgBisDACEHAkADQCAJIANODQEgCUEDdCEKIAcgAiAKaisDACABIApqKwMAoqAhByAJQQFqIQkMAAsLIAQgB6Ih' +
+    'CCAIRAAAAAAAAAAAYQRADwsgBiAGKwMAIAihOQMAQQAhCQJAA0AgCSADTg0BIAlBA3QhCiABIApqIQsgCyALKwMAIAggAiAKaisD' +
+    'AKKhOQMAIAlBAWohCQwACwsL9gECBH8DfAJAA0AgByAFTg0BIAIgByAEbEEDdGohCSAAIAcgBWwgB2pBA3RqIQogCisDACELIAkg' +
+    'BiALEAYhDCAMIAxhBEAgDCALoSAMoyENIAdBAWohCAJAA0AgCEEDaiAFTg0BIAAgAiAEIAUgByAIIAYgDRAHIAhBBGohCAwACwsC' +
+    'QANAIAhBAWogBU4NASAAIAIgBCAFIAcgCCAGIA0QCCAIQQJqIQgMAAsLAkADQCAIIAVODQEgACACIAQgBSAHIAggBiANEAkgCEEB' +
+    'aiEIDAALCyABIAMgCSAGIA0gBxAKIAogDDkDAAsgB0EBaiEHDAALCwu+AQEEfwJAA0AgCSAETg0BIAggBCAJayAIIAQgCWtIGyEK' +
+    'QQAhCwJAA0AgCyAFTg0BIAIgCyAEbCAJakEDdGogBiALIAhsQQN0aiAKEAEhDCAMQQBOBEAgCSAMaiQAIAskAUEBDwsgC0EBaiEL' +
+    'DAALCyADIAlBA3RqIAcgChABIQwgDEEATgRAIAkgDGokAEF/JAFBAQ8LIAAgASAGIAcgCCAFIAoQCyMCIAcgChADoCQCIAkgCGoh' +
+    'CQwACwtBAAuYAgMGfwN8An8gA0EDdCEJIAVBACAJ/AsAAkADQCAHIAFODQEgBCAHIAlsaiEKIAogAiAHIAlsaiAJ/AoAAEEAIQgC' +
+    'QANAIAggB04NASAAIAcgAWwgCGpBA3RqKwMAIQwgBCAIIAlsaiELQQAhDwJAA0AgDyAJTg0BIAogD2ohECAQIBArAwAgDCALIA9q' +
+    'KwMAoqE5AwAgD0EIaiEPDAALCyAIQQFqIQgMAAsLIAAgByABbCAHakEDdGorAwAhDUEAIQYCQANAIAYgA04NASAGQQN0IQ8gCiAP' +
+    'aisDACANoyEOIAogD2ogDjkDACAFIA9qIRAgECAQKwMAIA4gDqKgOQMAIAZBAWohBgwACwsgB0EBaiEHDAALCwtcAQV8RAAAAAIA' +
+    'AKBBIACiIQMgAyADIAChoSEEIAAgBKEhBUQAAAACAACgQSABoiEDIAMgAyABoaEhBiABIAahIQcgBSAHoiACIAQgBqKhIAQgB6Kh' +
+    'IAUgBqKhoQvWAQIDfwh8AkADQCAHIAJODQEgB0EDdCEJIAEgCWorAwAhCkQAAAAAAAAAACELQQAhCAJAA0AgCCAETg0BIAAgCCAC' +
+    'bCAHakEDdGorAwCaIQwgAyAIQQN0aisDACENIAwgDaIhDiAKIA6gIQ8gDyAKoSEQIAsgCiAPIBChoSAOIBChoCAMIA0gDhAOoKAh' +
+    'CyAPIQogCEEBaiEIDAALCyAKIAugIREgESAKoSEQIAUgCWogETkDACAGIAlqIAogESAQoaEgCyAQoaA5AwAgB0EBaiEHDAALCwuU' +
+    'AQICfwd8IAQrAwAhCCAFKwMAIQkCQANAIAYgAU4NASAGQQN0IQcgACAHaisDACEKIAIgB2orAwAhCyAKIAuiIQwgCCAMoCENIA0g' +
+    'CKEhDiAJIAggDSAOoaEgDCAOoaAgCiALIAwQDqAgCiADIAdqKwMAoqCgIQkgDSEIIAZBAWohBgwACwsgBCAIOQMAIAUgCTkDAAtZ' +
+    'AgF/AXwgACABIAIgAyAEIAUgBhAPIAUgAhADIQoCQANAIAkgBE4NASAAIAkgAmxBA3RqIAIgBSAGIAcgCUEDdGogCCAJQQN0ahAQ' +
+    'IAlBAWohCQwACwsgCguCAQMBfwF8BH8gAkEDdCEJAkADQCAFIARODQEgAyAFQQN0aisDACEGIAZEAAAAAAAAAABiBEAgASAFIAls' +
+    'aiEHQQAhCAJAA0AgCCAJTg0BIAAgCGohCiAKIAorAwAgByAIaisDACAGoqA5AwAgCEEIaiEIDAALCwsgBUEBaiEFDAALCwuvAgIG' +
+    'fwF8IAhBACABQQN0/AsAIAZBAE4EQAJAA0AgDCACTg0BIAkgDEEDdGogAyAMIARsIAZqQQN0aisDADkDACAMQQFqIQwMAAsLIAgg' +
+    'ACABIAkgAhASBQJAA0AgDCACTg0BIAAgDCABbEEDdGohDSAMIARsIQ5BACELAkADQCALIAFODQEgCCALQQN0aiEPIA8gDysDACAN' +
+    'IAtBA3RqKwMAIAMgDiAFIAtBAnRqKAIAakEDdGorAwCioDkDACALQQFqIQsMAAsLIAxBAWohDAwACwsLQQAhCwJAA0AgCyABTg0B' +
+    'IAcgC0EDdGorAwAgCCALQQN0aisDAKEhESAFIAtBAnRqKAIAIRAgCiAQQQN0aiEPIA8gDysDACARIBGioDkDACALQQFqIQsMAAsL' +
+    'C6sBAQV/IAFBA3QhCSAEBEAgBiAAIAn8CgAABQJAA0AgCCAJTg0BIAYgCGogACAIaisDACACoSADozkDACAIQQhqIQgMAAsLC0EB' +
+    'IQcCQANAIAcgBU4NASAGIAdBAWsgCWxqIQogBiAHIAlsaiELQQAhCAJAA0AgCCAJTg0BIAsgCGogCiAIaisDACAGIAhqKwMAojkD' +
+    'ACAIQQhqIQgMAAsLIAdBAWohBwwACwsLMgEBfwJAA0AgAyABTg0BIAAgA0EDdGorAwCZIAJlRQRAIAMPCyADQQFqIQMMAAsLQX8L';
+
+;// CONCATENATED MODULE: ./src/kernels/wasm.ts
+/**
+ * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions,
+ * out-of-fold errors, polynomial columns and the design's range check), compiled once per
+ * thread, and the wrappers that copy arrays into the module's memory and back. Each kernel
+ * computes what the JavaScript it stands in for computes, to the bit; the JavaScript stays as the
+ * fallback where WebAssembly is not available (`node --jitless`) or turned off
+ * ({@link useWasmKernels}), and as the reference the tests compare with.
+ *
+ * Why: a small model's row loops run once or twice over a few thousand rows, mostly in V8's
+ * interpreter, which boxes every floating-point result; WebAssembly is compiled before its first
+ * call. On the S workload of `npm run bench` (2,000 rows, 11 columns) a whole run takes about
+ * 30 ms less with them, M and L less too (see the README, "Benchmark").
+ */
+
+/** This runtime's WebAssembly, or undefined (`node --jitless` has none). */
+const WASM = globalThis.WebAssembly;
+/** WebAssembly's page size in bytes. */
+const PAGE = 65536;
+let kernels = null;
+let enabled = WASM !== undefined;
+/**
+ * Whether the fit uses the WebAssembly kernels (default: when WebAssembly is available). Tests
+ * turn them off to run the JavaScript kernels on the same data.
+ * @param on true to use them (ignored where WebAssembly is not available), false for JavaScript
+ * @returns whether they were in use before
+ */
+function useWasmKernels(on) {
+    const before = enabled;
+    enabled = on && WASM !== undefined;
+    return before;
+}
+/** The kernels, compiled on first use; null when they are not in use. */
+function wasmKernels() {
+    if (!enabled || WASM === undefined)
+        return null;
+    if (kernels === null)
+        kernels = new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports;
+    return kernels;
+}
+/** A view of the module's memory with room for at least `doubles` float64 values. */
+function heap(k, doubles) {
+    const bytes = doubles * 8;
+    const have = k.memory.buffer.byteLength;
+    if (bytes > have)
+        k.memory.grow(Math.ceil((bytes - have) / PAGE));
+    return new Float64Array(k.memory.buffer, 0, doubles);
+}
+/**
+ * Folds the m rows of a column-major block into [R; qty] (QrAccumulator's fold, in pieces of
+ * `chunk` rows). R (p x p) and qty (p) are updated in place.
+ * @param rss the residual sum of squares so far
+ * @returns the new residual sum of squares, and where a value was not finite (null when none
+ *   was; the pieces before it are folded, as the JavaScript leaves them)
+ */
+function foldRows(k, R, qty, rss, X, y, m, p, chunk) {
+    const oQty = p * p;
+    const oX = oQty + p;
+    const oY = oX + m * p;
+    const oC = oY + m;
+    const oYc = oC + chunk * p;
+    const f = heap(k, oYc + chunk);
+    f.set(R);
+    f.set(qty, oQty);
+    f.set(X.subarray(0, m * p), oX);
+    f.set(y.subarray(0, m), oY);
+    k.rss.value = rss;
+    const status = k.fold(0, oQty * 8, oX * 8, oY * 8, m, p, oC * 8, oYc * 8, chunk);
+    R.set(f.subarray(0, oQty));
+    qty.set(f.subarray(oQty, oQty + p));
+    const bad = status === 0 ? null : { row: k.badRow.value, column: k.badColumn.value };
+    return { rss: k.rss.value, bad };
+}
+/**
+ * Leverages of the m rows of a column-major block under a full-rank factor R (p x p):
+ * out[i] = || R^-T x_i ||^2 for i < m.
+ */
+function leverageRows(k, R, p, X, m, out) {
+    const oX = p * p;
+    const oZ = oX + m * p;
+    const oOut = oZ + m * p;
+    const f = heap(k, oOut + m);
+    f.set(R.subarray(0, p * p));
+    f.set(X.subarray(0, m * p), oX);
+    k.leverages(0, p, oX * 8, m, oZ * 8, oOut * 8);
+    out.set(f.subarray(oOut, oOut + m));
+}
+/**
+ * One block of the refinement pass: checks X (m x p, column-major) and y for finiteness, then
+ * adds each column's compensated dot product with the residuals y - X w to (gHi, gLo), in place.
+ * @returns the sum of squares of the residuals' high parts, or where a value is not finite
+ *   (nothing added then)
+ */
+function refineRows(k, X, y, m, w, gHi, gLo) {
+    const p = w.length;
+    const oY = m * p;
+    const oW = oY + m;
+    const oHi = oW + p;
+    const oLo = oHi + m;
+    const oGHi = oLo + m;
+    const oGLo = oGHi + p;
+    const f = heap(k, oGLo + p);
+    f.set(X.subarray(0, m * p));
+    f.set(y.subarray(0, m), oY);
+    const atX = k.firstNotFinite(0, m * p);
+    if (atX >= 0)
+        return { sumOfSquares: 0, bad: { row: atX % m, column: Math.floor(atX / m) } };
+    const atY = k.firstNotFinite(oY * 8, m);
+    if (atY >= 0)
+        return { sumOfSquares: 0, bad: { row: atY, column: -1 } };
+    f.set(w, oW);
+    f.set(gHi, oGHi);
+    f.set(gLo, oGLo);
+    const sumOfSquares = k.refine(0, oY * 8, m, oW * 8, p, oHi * 8, oLo * 8, oGHi * 8, oGLo * 8);
+    gHi.set(f.subarray(oGHi, oGHi + p));
+    gLo.set(f.subarray(oGLo, oGLo + p));
+    return { sumOfSquares, bad: null };
+}
+/**
+ * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block (columns
+ * whose weight is 0 left out): model/blocks.ts's addProducts.
+ */
+function addProductsInto(k, out, at, X, m, w, p) {
+    const oX = m;
+    const oW = oX + m * p;
+    const f = heap(k, oW + p);
+    f.set(out.subarray(at, at + m));
+    f.set(X.subarray(0, m * p), oX);
+    for (let j = 0; j < p; j++)
+        f[oW + j] = w[j];
+    k.addProducts(0, oX * 8, m, oW * 8, p);
+    out.set(f.subarray(0, m), at);
+}
+/**
+ * Adds one block's squared out-of-fold errors to errors[f] (cross-validation.ts, outOfFoldErrors,
+ * one setting).
+ * @param W coefficient j fitted without fold f at W[j * k + f]
+ * @param folds the fold of each of the m rows
+ * @param single the fold of every row, or -1 when they differ
+ * @param y the m rows' targets
+ * @param errors per fold, added to in place
+ */
+function outOfFoldRows(k, X, m, p, W, kFolds, folds, single, y, errors) {
+    const oW = m * p;
+    const oY = oW + p * kFolds;
+    const oPred = oY + m;
+    const oColumn = oPred + m;
+    const oErrors = oColumn + p;
+    const oFolds = oErrors + kFolds;
+    const f = heap(k, oFolds + Math.ceil(m / 2));
+    f.set(X.subarray(0, m * p));
+    f.set(W, oW);
+    f.set(y.subarray(0, m), oY);
+    for (let q = 0; q < kFolds; q++)
+        f[oErrors + q] = errors[q];
+    new Int32Array(f.buffer, oFolds * 8, m).set(folds.subarray(0, m));
+    k.outOfFold(0, m, p, oW * 8, kFolds, oFolds * 8, single, oY * 8, oPred * 8, oColumn * 8, oErrors * 8);
+    for (let q = 0; q < kFolds; q++)
+        errors[q] = f[oErrors + q];
+}
+/**
+ * The `degree` columns of a polynomial term for x[0..m) written to out from `at` (column k at
+ * at + k m): z = (x - shift) / scale (x itself when `raw`), then its powers (basis/polynomial.ts).
+ */
+function polynomialColumnsInto(k, x, m, shift, scale, raw, degree, out, at) {
+    const oOut = m;
+    const f = heap(k, oOut + degree * m);
+    f.set(x.subarray(0, m));
+    k.polynomialColumns(0, m, shift, scale, raw ? 1 : 0, degree, oOut * 8);
+    out.set(f.subarray(oOut, oOut + degree * m), at);
+}
+/** Index of the first of a[0..n) whose magnitude is not within max (NaN included), or -1. */
+function firstBeyondIn(k, a, n, max) {
+    const f = heap(k, n);
+    f.set(a.subarray(0, n));
+    return k.firstBeyond(0, n, max);
+}
+
+
+/***/ }),
+
+/***/ 1730:
+/***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
+
+__nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
+/* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8298);
+/* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(2413);
+/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8005);
+/* harmony import */ var _action_comment_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1151);
+/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(3566);
+/* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5505);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4296);
+/* harmony import */ var _entries_inputs_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9939);
+/* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(2499);
+/* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(5280);
+/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(6797);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(8805);
+/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(8352);
+/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(856);
+/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(5596);
+/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(5655);
+/**
+ * The action's entry: read the inputs, compare with the base commit on pull requests, run the
+ * same pipeline as the CLI, hand the Result to the reporters (annotations, log, job summary,
+ * comment), set the outputs, and fail the step exactly when the CLI would exit 1 or 2.
+ * The only place that calls `core.setFailed`.
+ */
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/** Writes one notice or warning line of our own (message escaped). */
+function say(level, message) {
+    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
+}
+async function run() {
+    let prefix = '';
+    try {
+        const inputs = (0,_entries_inputs_js__WEBPACK_IMPORTED_MODULE_6__/* .readInputs */ .K)();
+        prefix = inputs.prefix;
+        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_15__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
+        // The base commit first, so that the head run can compare with it.
+        const baseOptions = pr?.baseSha ? await (0,_action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .evaluateBase */ .D0)(inputs.settings, pr.baseSha, { fetchHint: _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .ACTION_FETCH_HINT */ .MZ }) : {};
+        const scale = { shard: inputs.shard, jobs: (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_7__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
+        const result = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
+        // Reporters: annotations and log, JSON report, job summary, comment.
+        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatAnnotations */ .MR)(result, { prefix }));
+        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_14__/* .formatText */ .v)(result).split('\n'))
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .escapeLogLine */ ._P)(line));
+        const report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
+        try {
+            await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn });
+        }
+        catch (error) {
+            say('warning', `could not write a file report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+        }
+        try {
+            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_13__/* .formatSummary */ .kq)(result)).write();
+        }
+        catch (error) {
+            say('warning', `could not write the job summary: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+        }
+        if (inputs.comment && pr) {
+            if (inputs.token === '')
+                say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
+            else {
+                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .l)((0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .s)(inputs.token, pr), (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_13__/* .formatComment */ .jw)(result));
+                if (outcome.kind === 'forbidden') {
+                    say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
+                }
+                else if (outcome.kind === 'failed') {
+                    say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
+                }
+            }
+        }
+        // Outputs and the step's status.
+        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, result.verdict);
+        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.failed, String((0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failedCount */ .dD)(result, inputs.settings.failOn)));
+        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.report, report);
+        const failure = (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failureMessage */ .oh)(result, inputs.settings.failOn);
+        if (failure !== null)
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(failure);
+    }
+    catch (error) {
+        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, 'error');
+        if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz) {
+            if (error.location.file !== undefined)
+                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(`fitgate could not run: ${error.describe()}`);
+        }
+        else {
+            if (error instanceof Error && error.stack)
+                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz(error.stack);
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(`fitgate failed unexpectedly: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+        }
+    }
+}
+// In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
+if (!(0,_run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__/* .isFitgateWorker */ .$)())
+    await run();
+
+__webpack_async_result__();
+} catch(e) { __webpack_async_result__(e); } }, 1);
+
+/***/ }),
+
+/***/ 8352:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  E: () => (/* binding */ createFsRepository)
+});
+
+;// CONCATENATED MODULE: external "node:fs"
+const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
+// EXTERNAL MODULE: external "node:path"
+var external_node_path_ = __nccwpck_require__(6760);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/repo/repo-path.ts
+var repo_path = __nccwpck_require__(3856);
+;// CONCATENATED MODULE: ./src/repo/fs-repository.ts
+/**
+ * A {@link RepoReader} over a folder on disk (the working tree). Every path is checked
+ * lexically (no absolute paths, no `..` above the root) and then through the file system
+ * (the real path, with every symbolic link at any level followed, must stay inside the
+ * root's real path) before anything is opened; the real path is what gets opened.
+ *
+ * The file system calls are synchronous behind the asynchronous interface: a run reads its files
+ * one after another (models run in parallel on worker threads, each with its own reader), and a
+ * local call takes less time than its round trip through libuv's thread pool. A small model's
+ * run makes a few dozen such calls; a 1 MiB piece of a big file is read in well under a
+ * millisecond.
+ */
+
+
+
+
+/** Glob patterns never searched. */
+const IGNORED_GLOBS = ['**/node_modules/**', '**/.git/**'];
+/**
+ * RepoReader over a folder on disk. Every path is checked: absolute paths, `..` escapes and
+ * symbolic links (at any level) whose real path is outside the root's real path are
+ * InputError `path-outside`; nothing outside the root is ever opened (the real path is
+ * checked before opening).
+ *
+ * @param root the repository folder (absolute, or relative to the working directory)
+ */
+function createFsRepository(root) {
+    const rootAbsolute = external_node_path_.resolve(root);
+    let rootRealPromise = null;
+    const rootReal = () => {
+        rootRealPromise ??= realpath(rootAbsolute).catch((error) => {
+            rootRealPromise = null;
+            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
+        });
+        return rootRealPromise;
+    };
+    /** The real path of a normalised repository-relative path, or null when nothing is there. */
+    const realInside = async (rel, where, shown) => {
+        const base = await rootReal();
+        const full = rel === '' ? base : external_node_path_.join(base, ...rel.split('/'));
+        let real = null;
+        try {
+            real = await realpath(full);
+        }
+        catch (error) {
+            const code = codeOf(error);
+            if (code === 'ELOOP')
+                throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
+            if (code !== 'ENOENT' && code !== 'ENOTDIR')
+                throw error;
+        }
+        if (real === null) {
+            // Missing: still refuse when an existing folder on the way leads outside.
+            for (let parent = external_node_path_.dirname(full); parent.length >= base.length; parent = external_node_path_.dirname(parent)) {
+                try {
+                    const parentReal = await realpath(parent);
+                    if (!isInside(base, parentReal))
+                        throw outside(shown, where);
+                    break;
+                }
+                catch (error) {
+                    if (error instanceof errors/* InputError */.dz)
+                        throw error;
+                    if (parent === base)
+                        break;
+                }
+            }
+            return null;
+        }
+        if (!isInside(base, real))
+            throw outside(shown, where);
+        return real;
+    };
+    const check = async (path) => realInside((0,repo_path/* normaliseRepoPath */.Gn)(path), { file: path }, path);
+    const requireFile = async (path) => {
+        const real = await check(path);
+        if (real === null)
+            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
+        const info = await stat(real);
+        if (!info.isFile())
+            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `is not a regular file (a folder or device); expected a file`, { file: path });
+        return real;
+    };
+    return {
+        label: rootAbsolute,
+        async resolve(fromFile, target, where) {
+            const location = { file: fromFile, ...where };
+            const rel = (0,repo_path/* joinRepoPath */.Kp)(fromFile, target, location);
+            await realInside(rel, location, target);
+            return rel;
+        },
+        async isFile(path) {
+            const real = await check(path);
+            if (real === null)
+                return false;
+            return (await stat(real)).isFile();
+        },
+        async size(path) {
+            return (await stat(await requireFile(path))).size;
+        },
+        async read(path) {
+            return (0,external_node_fs_namespaceObject.readFileSync)(await requireFile(path));
+        },
+        async *stream(path, chunkBytes = 1024 * 1024) {
+            const real = await requireFile(path);
+            const fd = (0,external_node_fs_namespaceObject.openSync)(real, 'r');
+            try {
+                // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
+                // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
+                // so a reader may keep a previous one.
+                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,external_node_fs_namespaceObject.fstatSync)(fd).size + 1)));
+                for (;;) {
+                    const piece = Buffer.allocUnsafe(size);
+                    const n = (0,external_node_fs_namespaceObject.readSync)(fd, piece, 0, size, null);
+                    if (n === 0)
+                        return;
+                    yield n === size ? piece : piece.subarray(0, n);
+                }
+            }
+            finally {
+                (0,external_node_fs_namespaceObject.closeSync)(fd);
+            }
+        },
+        async glob(patterns) {
+            for (const pattern of patterns) {
+                const p = pattern.replace(/\\/g, '/');
+                if ((0,repo_path/* isAbsoluteLike */.tp)(pattern) || p === '..' || p.startsWith('../')) {
+                    throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
+                }
+            }
+            if (patterns.length === 0)
+                return [];
+            // tinyglobby is loaded when a run globs (a run given its descriptors never does).
+            const { glob: tinyGlob } = await __nccwpck_require__.e(/* import() */ 382).then(__nccwpck_require__.bind(__nccwpck_require__, 3382));
+            const found = await tinyGlob(patterns, {
+                cwd: await rootReal(),
+                onlyFiles: true,
+                followSymbolicLinks: false,
+                dot: false,
+                ignore: IGNORED_GLOBS,
+            });
+            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,repo_path/* isIgnoredPath */.wY)(p)));
+            return [...paths].sort();
+        },
+    };
+}
+/** The real path (the system's realpath(3), as fs/promises uses), as a promise. */
+async function realpath(path) {
+    return external_node_fs_namespaceObject.realpathSync.native(path);
+}
+/** File information, as a promise. */
+async function stat(path) {
+    return (0,external_node_fs_namespaceObject.statSync)(path);
+}
+function isInside(base, real) {
+    const rel = external_node_path_.relative(base, real);
+    return rel === '' || (rel !== '..' && !rel.startsWith(`..${external_node_path_.sep}`) && !external_node_path_.isAbsolute(rel));
+}
+function outside(shown, where) {
+    return new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
+}
+function codeOf(error) {
+    return error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : undefined;
+}
+
+
+/***/ }),
+
+/***/ 3856:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   GY: () => (/* binding */ FILE_MISSING),
+/* harmony export */   Gn: () => (/* binding */ normaliseRepoPath),
+/* harmony export */   Kp: () => (/* binding */ joinRepoPath),
+/* harmony export */   oE: () => (/* binding */ PATH_OUTSIDE),
+/* harmony export */   tp: () => (/* binding */ isAbsoluteLike),
+/* harmony export */   wY: () => (/* binding */ isIgnoredPath)
+/* harmony export */ });
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
+/**
+ * Lexical handling of repository-relative paths shared by every {@link RepoReader}:
+ * normalising, and refusing absolute paths and `..` escapes. Links are the disk reader's business.
+ */
+
+
+/** Code of every refused path. */
+const PATH_OUTSIDE = 'path-outside';
+/** Code of a path that names no file. */
+const FILE_MISSING = 'file-missing';
+/** True for `/x`, `\\x`, `C:x` and `C:\x`: paths that do not start at the repository root. */
+function isAbsoluteLike(path) {
+    return path.startsWith('/') || path.startsWith('\\') || /^[A-Za-z]:/.test(path);
+}
+/**
+ * Normalises a repository-relative path: `\` becomes `/`, `.` and `..` segments are
+ * resolved, a leading `./` and trailing `/` are dropped; the root is `''`.
+ *
+ * @param path the path as given
+ * @param location where to point an error (default: the path itself as the file)
+ * @throws InputError `path-outside` for absolute paths and paths that climb above the root
+ */
+function normaliseRepoPath(path, location) {
+    const where = location ?? { file: path };
+    if (path.includes('\u0000'))
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} contains a NUL character; expected a plain relative path`, where);
+    const slashed = path.replace(/\\/g, '/');
+    if (isAbsoluteLike(path)) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} is absolute; expected a path relative to the repository`, where);
+    }
+    let normal = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.normalize(slashed === '' ? '.' : slashed);
+    if (normal === '..' || normal.startsWith('../')) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} leaves the repository; expected a path inside it`, where);
+    }
+    if (normal === '.' || normal === './')
+        return '';
+    normal = normal.replace(/^\.\//, '').replace(/\/+$/, '');
+    return normal;
+}
+/**
+ * Resolves `target` as written in `fromFile` (relative to its folder) lexically.
+ *
+ * @param fromFile repository-relative path of the file that names `target`
+ * @param target the path as written
+ * @param location where to point an error (the naming file, line and key)
+ */
+function joinRepoPath(fromFile, target, location) {
+    if (isAbsoluteLike(target)) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(target)} is absolute; expected a path relative to ${fromFile}'s folder`, location);
+    }
+    const folder = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.dirname(normaliseRepoPath(fromFile));
+    const joined = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.join(folder, target.replace(/\\/g, '/'));
+    return normaliseRepoPath(joined, { ...location, file: location.file ?? fromFile });
+}
+/** True when a repository-relative path passes through `node_modules` or `.git`. */
+function isIgnoredPath(path) {
+    return path.split('/').some((segment) => segment === 'node_modules' || segment === '.git');
+}
+
+
+/***/ }),
+
+/***/ 856:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   MR: () => (/* binding */ formatAnnotations),
+/* harmony export */   _P: () => (/* binding */ escapeLogLine),
+/* harmony export */   cU: () => (/* binding */ inputErrorAnnotation),
+/* harmony export */   fE: () => (/* binding */ formatCommand)
+/* harmony export */ });
+/* unused harmony exports MAX_PER_LEVEL, escapeData, escapeProperty, workspacePath, collectAnnotations */
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
+/**
+ * Workflow-command annotations: one error per failing check or unchecked model, one warning per
+ * warning, at the descriptor line the check points at, most severe first, capped at what the
+ * runner shows per step, then one notice counting the rest. The exact command lines are built
+ * here (and only here) so that they can be tested byte for byte; text from the repository is
+ * escaped so that it can never start a workflow command of its own.
+ */
+
+/** The runner shows at most this many error and this many warning annotations per step. */
+const MAX_PER_LEVEL = 10;
+/**
+ * Escapes a command's message as the toolkit does (`%`, CR, LF percent-encoded), so the text
+ * stays on one line and cannot begin a command.
+ */
+function escapeData(text) {
+    return text.replace(/%/g, '%25').replace(/\r/g, '%0D').replace(/\n/g, '%0A');
+}
+/** Escapes a command property value: as {@link escapeData} plus `:` and `,`. */
+function escapeProperty(text) {
+    return escapeData(text).replace(/:/g, '%3A').replace(/,/g, '%2C');
+}
+/**
+ * Text for a plain log line: line breaks become spaces, and a line that would begin with `::`
+ * (after leading white space, which the runner trims) starts with `» ` instead, so that it
+ * cannot be read as a workflow command.
+ */
+function escapeLogLine(text) {
+    const one = text.replace(/\r\n|\r|\n/g, ' ');
+    return one.trimStart().startsWith('::') ? `» ${one}` : one;
+}
+/**
+ * One workflow command line (without the line break), e.g.
+ * `::error file=models/a.model.yml,line=12,title=…::message`.
+ */
+function formatCommand(a) {
+    const props = [];
+    if (a.file !== undefined && a.file !== '')
+        props.push(`file=${escapeProperty(a.file)}`);
+    if (a.line !== undefined && a.line > 0)
+        props.push(`line=${a.line}`);
+    if (a.title !== undefined && a.title !== '')
+        props.push(`title=${escapeProperty(a.title)}`);
+    return `::${a.level}${props.length > 0 ? ` ${props.join(',')}` : ''}::${escapeData(a.message)}`;
+}
+/** Joins the fitgate root's prefix and a root-relative path. */
+function workspacePath(prefix, file) {
+    return prefix === '' || prefix === '.' ? file : node_path__WEBPACK_IMPORTED_MODULE_0___default().posix.join(prefix, file);
+}
+/** Every finding of one model as an annotation, in check order. */
+function modelFindings(m, prefix) {
+    if (m.error) {
+        return [
+            {
+                level: 'error',
+                file: workspacePath(prefix, m.error.file ?? m.descriptor),
+                ...(m.error.line !== null ? { line: m.error.line } : {}),
+                title: `fitgate could not check ${m.name}`,
+                message: m.error.message,
+            },
+        ];
+    }
+    const found = [];
+    for (const c of m.checks) {
+        if (c.status !== 'fail' && c.status !== 'warn')
+            continue;
+        found.push({
+            level: c.status === 'fail' ? 'error' : 'warning',
+            file: workspacePath(prefix, m.descriptor),
+            line: c.line,
+            title: `fitgate ${c.id} (${m.name})`,
+            message: c.advice ? `${c.message}. ${c.advice}` : c.message,
+        });
+    }
+    return found;
+}
+/**
+ * The annotations of a run: errors first, then warnings (each in report order), at most
+ * `maxPerLevel` of each, then one notice counting those left out, then one notice per run note.
+ * @param result the run's Result
+ * @param options root prefix and cap; defaults in {@link AnnotationOptions}
+ */
+function collectAnnotations(result, options = {}) {
+    const prefix = options.prefix ?? '';
+    const max = options.maxPerLevel ?? MAX_PER_LEVEL;
+    const all = result.models.flatMap((m) => modelFindings(m, prefix));
+    const errors = all.filter((a) => a.level === 'error');
+    const warnings = all.filter((a) => a.level === 'warning');
+    const out = [...errors.slice(0, max), ...warnings.slice(0, max)];
+    const leftErrors = Math.max(0, errors.length - max);
+    const leftWarnings = Math.max(0, warnings.length - max);
+    if (leftErrors + leftWarnings > 0) {
+        out.push({
+            level: 'notice',
+            title: 'fitgate',
+            message: `${leftErrors + leftWarnings} more findings are not annotated (${leftErrors} errors, ${leftWarnings} warnings; the runner shows ${max} of each per step). The job summary lists every model.`,
+        });
+    }
+    for (const note of result.notes)
+        out.push({ level: 'notice', title: 'fitgate', message: note });
+    return out;
+}
+/**
+ * The annotation for a run that could not be done: an error at the file and line of the
+ * problem when known.
+ * @param error the problem
+ * @param prefix the fitgate root's place in the workspace; default `''`
+ */
+function inputErrorAnnotation(error, prefix = '') {
+    const { file, line } = error.location;
+    return {
+        level: 'error',
+        ...(file !== undefined ? { file: workspacePath(prefix, file) } : {}),
+        ...(file !== undefined && line !== undefined ? { line } : {}),
+        title: 'fitgate could not run',
+        message: error.location.key !== undefined ? `\`${error.location.key}\`: ${error.message}` : error.message,
+    };
+}
+/** The command lines of a run's annotations, each ending with a line break. */
+function formatAnnotations(result, options = {}) {
+    return collectAnnotations(result, options)
+        .map((a) => `${formatCommand(a)}\n`)
+        .join('');
+}
+
+
+/***/ }),
+
+/***/ 6412:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   FV: () => (/* binding */ escapeMarkdown),
+/* harmony export */   Fw: () => (/* binding */ escapeMermaid),
+/* harmony export */   X: () => (/* binding */ escapeXml),
+/* harmony export */   ZD: () => (/* binding */ escapeHtml),
+/* harmony export */   en: () => (/* binding */ escapeTerminal)
+/* harmony export */ });
+/**
+ * Escaping of text that comes from the repository (model names, column names, messages) for
+ * each medium it reaches. One helper per medium, tested byte for byte.
+ */
+/** HTML text and attribute values: & < > " ' become entities. */
+function escapeHtml(text) {
+    return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]);
+}
+/**
+ * Markdown inline text (GitHub-flavoured, inside table cells too): line breaks become spaces;
+ * `&`, `<` and `>` become entities (no HTML, no hidden comments); the characters that start
+ * inline Markdown syntax or end a table cell (`\`, backtick, `*`, `_`, `[`, `]`, `|`, `~`) are
+ * backslash-escaped; `@` is followed by a zero-width space so that names never mention anyone.
+ * Text is always placed mid-line, so block syntax (`#`, `-`, `>` at a line start) cannot start.
+ */
+function escapeMarkdown(text) {
+    return text
+        .replace(/\r?\n|\r/g, ' ')
+        .replace(/[&<>]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[c])
+        .replace(/([\\`*_[\]|~])/g, '\\$1')
+        .replace(/@/g, '@\u200b');
+}
+/**
+ * Text for a terminal: control characters (including ESC, which starts colour codes and
+ * cursor moves) are shown as `\u001b` style escapes; line breaks become spaces.
+ */
+function escapeTerminal(text) {
+    return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+}
+/**
+ * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; characters XML 1.0 does
+ * not allow (C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, lone
+ * surrogates) become U+FFFD.
+ */
+function escapeXml(text) {
+    return text
+        .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, '\ufffd')
+        .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]);
+}
+/**
+ * Text inside a double-quoted Mermaid string (chart titles, axis labels): line breaks and other
+ * control characters become spaces; `"` becomes `'`; `<` and `>` become `‹` and `›` (Mermaid
+ * passes labels through an HTML sanitiser); `#` becomes the full-width `＃` (Mermaid reads
+ * `#name;` as an entity code); a backtick becomes `'` so that the text cannot close a
+ * Markdown code fence.
+ */
+function escapeMermaid(text) {
+    return text
+        .replace(/[\u0000-\u001f\u007f-\u009f]+/g, ' ')
+        .replace(/["`]/g, "'")
+        .replace(/</g, '‹')
+        .replace(/>/g, '›')
+        .replace(/#/g, '＃');
+}
+
+
+/***/ }),
+
+/***/ 5596:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  JO: () => (/* binding */ COMMENT_MARKER),
+  jw: () => (/* binding */ formatComment),
+  kq: () => (/* binding */ formatSummary)
+});
+
+// UNUSED EXPORTS: COMMENT_MAX_BYTES, SUMMARY_MAX_BYTES
+
+// EXTERNAL MODULE: ./src/core/format.ts
+var format = __nccwpck_require__(6228);
+// EXTERNAL MODULE: ./src/report/escape.ts
+var report_escape = __nccwpck_require__(6412);
+// EXTERNAL MODULE: ./src/report/svg/units.ts
+var units = __nccwpck_require__(3332);
+;// CONCATENATED MODULE: ./src/report/mermaid.ts
+/**
+ * A small Mermaid `xychart-beta` chart per model for the Markdown summary and pull-request
+ * comment, where GitHub renders Mermaid but strips inline SVG and data-URI images. The chart is
+ * drawn from the pipeline's chart data; xychart-beta has lines and bars only (no scatter), so:
+ * a model of one input shows its fitted curve with the observed target band as two flat lines;
+ * otherwise the cross-validated error over the complexity sweep when there is one; otherwise
+ * the standardised coefficient sizes as bars with the fail limit as a line.
+ */
+
+
+
+/** A number for a Mermaid series: 4 significant digits, plain decimal notation. */
+function value(v) {
+    const r = Number(v.toPrecision(4));
+    return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r)))))) : String(r);
+}
+/** Indices of at most `max` evenly spaced entries of a list of `n`, first and last kept. */
+function evenly(n, max) {
+    if (n <= max)
+        return Array.from({ length: n }, (_, i) => i);
+    return Array.from({ length: max }, (_, t) => Math.round((t * (n - 1)) / (max - 1)));
+}
+function fence(lines) {
+    return ['```mermaid', 'xychart-beta', ...lines.map((l) => `  ${l}`), '```', ''].join('\n');
+}
+function curveChart(name, chart, max) {
+    const fit = chart.fit;
+    if (!fit || fit.x.length < 2)
+        return null;
+    const [lo, hi] = fit.band;
+    const span = hi - lo;
+    // Values far outside the band would flatten the picture: clip them to one band width past it, and say so.
+    const top = hi + span;
+    const bottom = lo - span;
+    const picks = evenly(fit.x.length, max);
+    let clipped = false;
+    const ys = [];
+    for (const i of picks) {
+        let y = fit.y[i];
+        if (y === null) {
+            y = top;
+            clipped = true;
+        }
+        else if (y > top || y < bottom) {
+            y = Math.min(top, Math.max(bottom, y));
+            clipped = true;
+        }
+        ys.push(value(y));
+    }
+    const title = `${name}: fitted ${chart.target}, band ${(0,format/* formatNumber */.Z)(lo)} to ${(0,format/* formatNumber */.Z)(hi)}${clipped ? ' (clipped)' : ''}`;
+    return fence([
+        `title "${(0,report_escape/* escapeMermaid */.Fw)(title)}"`,
+        `x-axis "${(0,report_escape/* escapeMermaid */.Fw)((0,units/* axisLabel */.M)(fit.input))}" ${value(fit.x[0])} --> ${value(fit.x[fit.x.length - 1])}`,
+        `y-axis "${(0,report_escape/* escapeMermaid */.Fw)((0,units/* axisLabel */.M)(chart.target))}" ${value(bottom)} --> ${value(top)}`,
+        `line [${ys.join(', ')}]`,
+        `line [${picks.map(() => value(hi)).join(', ')}]`,
+        `line [${picks.map(() => value(lo)).join(', ')}]`,
+    ]);
+}
+function sweepChart(name, chart, max) {
+    const sweep = chart.sweep;
+    if (!sweep)
+        return null;
+    const picks = evenly(sweep.settings.length, max).filter((i) => sweep.cv[i] !== null);
+    if (picks.length < 2)
+        return null;
+    const cv = picks.map((i) => sweep.cv[i]);
+    const title = `${name}: cross-validated RMSE over ${sweep.parameter}${sweep.chosen !== null ? `, chosen ${(0,format/* formatNumber */.Z)(sweep.chosen)}` : ''}${sweep.suggested !== null ? `, suggested ${(0,format/* formatNumber */.Z)(sweep.suggested)}` : ''}`;
+    const categories = picks.map((i) => `"${(0,report_escape/* escapeMermaid */.Fw)((0,format/* formatNumber */.Z)(sweep.settings[i]))}"`);
+    return fence([
+        `title "${(0,report_escape/* escapeMermaid */.Fw)(title)}"`,
+        `x-axis "${(0,report_escape/* escapeMermaid */.Fw)(sweep.parameter)}" [${categories.join(', ')}]`,
+        `y-axis "cross-validated RMSE"`,
+        `line [${cv.map(value).join(', ')}]`,
+    ]);
+}
+function coefficientChart(name, chart, max) {
+    const coef = chart.coefficients;
+    const entries = coef.columns.map((c, j) => ({ c, v: coef.values[j] })).filter((e) => e.v !== null);
+    if (entries.length === 0)
+        return null;
+    const shown = entries.length <= max ? entries : [...entries].sort((a, b) => Math.abs(b.v) - Math.abs(a.v)).slice(0, max);
+    const bars = shown.map((e) => value(Math.abs(e.v)));
+    const lines = [
+        `title "${(0,report_escape/* escapeMermaid */.Fw)(`${name}: standardised coefficient sizes${coef.limit !== null ? `, fail limit ${(0,format/* formatNumber */.Z)(coef.limit)}` : ''}`)}"`,
+        `x-axis [${shown.map((e) => `"${(0,report_escape/* escapeMermaid */.Fw)(e.c)}"`).join(', ')}]`,
+        `y-axis "|standardised coefficient|"`,
+        `bar [${bars.join(', ')}]`,
+    ];
+    if (coef.limit !== null)
+        lines.push(`line [${shown.map(() => value(coef.limit)).join(', ')}]`);
+    return fence(lines);
+}
+/**
+ * A fenced Mermaid chart for one model (for `report/markdown.ts`: put it after the model's check
+ * table), or null when the model has no chart data.
+ * @param model a model's outcome (reads `charts`)
+ * @param options series length; defaults in {@link MermaidOptions}
+ * @returns "```mermaid ... ```\n" text
+ */
+function mermaidChart(model, options = {}) {
+    const chart = model.charts;
+    if (!chart)
+        return null;
+    const max = options.maxValues ?? 40;
+    return curveChart(model.name, chart, max) ?? sweepChart(model.name, chart, max) ?? coefficientChart(model.name, chart, max);
+}
+
+// EXTERNAL MODULE: ./src/result/result.ts
+var result = __nccwpck_require__(1628);
+// EXTERNAL MODULE: ./src/report/wording.ts
+var wording = __nccwpck_require__(5594);
+;// CONCATENATED MODULE: ./src/report/markdown.ts
+/**
+ * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
+ * One verdict line, a table of every model, then for each model that did not pass each check's
+ * figure against its limit with one sentence on what to change. Built as a string; the caller
+ * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
+ * readable length; the whole report stays under `maxBytes`.
+ */
+
+
+
+
+
+/** Default size cap: under GitHub's job-summary limit of 1 MiB (1,048,576 bytes). */
+const DEFAULT_MAX_BYTES = 1_000_000;
+/** Longest piece of repository text (a name, a message) shown, in characters. */
+const MAX_TEXT = 300;
+/** Bytes kept free for the closing note when cutting. */
+const NOTE_RESERVE = 400;
+const MARK = { pass: 'pass', warn: 'WARN', fail: 'FAIL', error: 'ERROR', skipped: 'skipped' };
+/** Repository text for Markdown: cut to {@link MAX_TEXT} characters, then escaped. */
+function markdown_text(s) {
+    const chars = [...s];
+    return (0,report_escape/* escapeMarkdown */.FV)(chars.length > MAX_TEXT ? `${chars.slice(0, MAX_TEXT - 1).join('')}…` : s);
+}
+function cell(v) {
+    if (typeof v === 'number' || typeof v === 'string')
+        return (0,format/* formatNumber */.Z)((0,result/* fromJsonNumber */.M)(v));
+    return '–';
+}
+function signed(x, suffix = '') {
+    if (Number.isNaN(x))
+        return 'NaN';
+    if (x === 0)
+        return `0${suffix}`;
+    return `${x > 0 ? '+' : ''}${(0,format/* formatNumber */.Z)(x)}${suffix}`;
+}
+/** The verdict in one line. */
+function verdictLine(result) {
+    const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : (0,wording/* verdictHeadline */.ge)(result);
+    return `**${MARK[result.verdict]}**: ${head} (${(0,wording/* countsText */.WN)(result.counts)})`;
+}
+/** The "against base" cell of a model: `new`, the changes, or `–`. */
+function baseCell(m) {
+    const b = m.base;
+    if (!b)
+        return '–';
+    if (b.status === 'new')
+        return 'new';
+    const rmse = b.holdout_rmse_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_rmse_change);
+    const gap = b.gap_ratio_change === null ? null : (0,result/* fromJsonNumber */.M)(b.gap_ratio_change);
+    if (rmse === null && gap === null)
+        return 'base not checked';
+    const parts = [];
+    if (rmse !== null)
+        parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
+    if (gap !== null)
+        parts.push(`gap ${signed(gap)}`);
+    return parts.join(', ');
+}
+/** Table header (and separator) of the model overview. */
+function overviewHead(withBase) {
+    return [
+        `| Status | Model | Hold-out RMSE | Gap ratio | Params / row | Largest std. coef. |${withBase ? ' Against base |' : ''}`,
+        `| --- | --- | ---: | ---: | ---: | ---: |${withBase ? ' --- |' : ''}`,
+    ];
+}
+/** One row of the model overview. */
+function overviewRow(m, withBase) {
+    const x = m.metrics;
+    return `| ${MARK[m.verdict]} | ${markdown_text(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
+}
+/** The block of one model that did not pass. */
+function modelDetail(m) {
+    const lines = [`### ${MARK[m.verdict]}: ${markdown_text(m.name)}`, '', `Descriptor: ${markdown_text(m.descriptor)}`, ''];
+    if (m.error) {
+        const where = m.error.file ? `${markdown_text(m.error.file)}${m.error.line ? ` line ${m.error.line}` : ''}: ` : '';
+        lines.push(`Could not be checked. ${where}${markdown_text(m.error.message)}`, '');
+        return lines;
+    }
+    const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+    lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
+    for (const c of shown)
+        lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);
+    lines.push('');
+    for (const c of shown)
+        lines.push(`- **${c.id}**: ${markdown_text(c.message)}. ${markdown_text(c.advice)}`);
+    lines.push('');
+    const chart = mermaidChart(m);
+    if (chart !== null)
+        lines.push(chart);
+    return lines;
+}
+function bytes(s) {
+    return Buffer.byteLength(s, 'utf8');
+}
+/**
+ * Formats the Result as Markdown, at most `maxBytes` UTF-8 bytes. When the report would be
+ * larger, table rows and then model blocks are left out (the table first keeps every model
+ * that did not pass) and a closing note says how many.
+ * @param result the run's Result
+ * @param options title, size cap and preamble; defaults in {@link MarkdownOptions}
+ */
+function formatMarkdown(result, options = {}) {
+    const maxBytes = options.maxBytes ?? DEFAULT_MAX_BYTES;
+    const budget = maxBytes - NOTE_RESERVE;
+    const withBase = result.models.some((m) => m.base !== undefined);
+    const head = [...(options.preamble ?? []), `## ${markdown_text(options.title ?? 'fitgate')}`, '', verdictLine(result), ''];
+    for (const n of result.notes)
+        head.push(`> ${markdown_text(n)}`, '');
+    let out = `${head.join('\n')}\n`;
+    const notPassing = result.models.filter((m) => m.verdict !== 'pass');
+    const blocks = notPassing.map((m) => `\n${modelDetail(m).join('\n')}`);
+    const detailBytes = blocks.reduce((sum, b) => sum + bytes(b), 0);
+    // The table: when it must be cut it keeps the models that did not pass first, and takes at
+    // least half of what is left, the rest going to the details of those models.
+    const cuts = [];
+    if (result.models.length > 0) {
+        const tableHead = `${overviewHead(withBase).join('\n')}\n`;
+        const rows = result.models.map((m) => `${overviewRow(m, withBase)}\n`);
+        const left = budget - bytes(out);
+        const tableBudget = bytes(out) + Math.max(left / 2, left - detailBytes);
+        let size = bytes(out) + bytes(tableHead);
+        const keep = new Set();
+        const order = result.models.map((_, i) => i).sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
+        for (const i of order) {
+            if (size + bytes(rows[i]) > tableBudget)
+                break;
+            keep.add(i);
+            size += bytes(rows[i]);
+        }
+        out += tableHead + result.models.map((_, i) => (keep.has(i) ? rows[i] : '')).join('');
+        if (keep.size < result.models.length)
+            cuts.push(`${result.models.length - keep.size} of ${result.models.length} table rows`);
+    }
+    // One block per model that did not pass.
+    let shown = 0;
+    let size = bytes(out);
+    for (const block of blocks) {
+        const b = bytes(block);
+        if (size + b > budget)
+            break;
+        out += block;
+        size += b;
+        shown += 1;
+    }
+    if (shown < notPassing.length)
+        cuts.push(`${notPassing.length - shown} of ${notPassing.length} model details`);
+    if (cuts.length > 0) {
+        out += `\n_Cut to stay under the size limit: ${cuts.join(' and ')} left out. Run \`fitgate check\` or read the JSON report for all of them._\n`;
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/report/summary.ts
+
+/** Size cap of the job summary in UTF-8 bytes: under GitHub's 1 MiB (1,048,576 bytes) per step. */
+const SUMMARY_MAX_BYTES = 1_000_000;
+/** Size cap of the comment in UTF-8 bytes: under GitHub's 65,536 characters per comment body. */
+const COMMENT_MAX_BYTES = 60_000;
+/** The hidden HTML comment that marks fitgate's pull-request comment. */
+const COMMENT_MARKER = '<!-- fitgate-report -->';
+/** The job summary's Markdown. */
+function formatSummary(result) {
+    return formatMarkdown(result, { maxBytes: SUMMARY_MAX_BYTES });
+}
+/** The pull-request comment's Markdown: the marker line, then the same report as the summary, cut to fit a comment. */
+function formatComment(result) {
+    return formatMarkdown(result, { maxBytes: COMMENT_MAX_BYTES, preamble: [COMMENT_MARKER] });
+}
+
+
+/***/ }),
+
+/***/ 3332:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   M: () => (/* binding */ axisLabel)
+/* harmony export */ });
+/* unused harmony export unitOf */
+/**
+ * Axis labels from column names: a trailing unit suffix (`_m`, `_kg`, `_c`, `_pct`, ...) is shown
+ * as a unit in brackets after the name, e.g. `depth_m` -> `depth_m (m)`, `exit_temp_c` ->
+ * `exit_temp_c (°C)`. Names without a known suffix stay as they are. The name is kept whole so
+ * that readers find the column they know.
+ */
+/** Unit suffixes (lower case, after the last `_`) and how they are shown. Common practice in data files. */
+const UNITS = {
+    mm: 'mm', cm: 'cm', m: 'm', km: 'km', in: 'in', ft: 'ft',
+    mg: 'mg', g: 'g', kg: 'kg', t: 't', lb: 'lb',
+    ml: 'mL', l: 'L', m3: 'm³',
+    ms: 'ms', s: 's', sec: 's', min: 'min', h: 'h', hr: 'h', hours: 'h', days: 'days', d: 'd',
+    c: '°C', degc: '°C', f: '°F', degf: '°F', k: 'K',
+    pct: '%', percent: '%', ppm: 'ppm', ppb: 'ppb',
+    pa: 'Pa', kpa: 'kPa', mpa: 'MPa', bar: 'bar', psi: 'psi',
+    w: 'W', kw: 'kW', mw: 'MW', kwh: 'kWh', wh: 'Wh', j: 'J', kj: 'kJ',
+    v: 'V', a: 'A', hz: 'Hz', rpm: 'rpm',
+    usd: 'USD', eur: 'EUR', gbp: 'GBP',
+    mps: 'm/s', kmh: 'km/h', lpm: 'L/min',
+};
+/** The unit a column name ends in (`depth_m` -> `m`), or null. */
+function unitOf(column) {
+    const i = column.lastIndexOf('_');
+    if (i <= 0 || i === column.length - 1)
+        return null;
+    return UNITS[column.slice(i + 1).toLowerCase()] ?? null;
+}
+/** Axis label of a column: the name, then its unit in brackets when the name ends in one (plain text, not escaped). */
+function axisLabel(column) {
+    const unit = unitOf(column);
+    return unit ? `${column} (${unit})` : column;
+}
+
+
+/***/ }),
+
+/***/ 5655:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   v: () => (/* binding */ formatText)
+/* harmony export */ });
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6228);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6412);
+/**
+ * The terminal report: one aligned table of every model, then one block per model that did not
+ * pass, with each check's figure against its limit and the descriptor line to change.
+ */
+
+
+
+const COLOURS = { pass: '32', warn: '33', fail: '31', error: '35', skipped: '2' };
+function paint(text, status, color) {
+    return color ? `\u001b[${COLOURS[status]}m${text}\u001b[0m` : text;
+}
+function table(rows, rightAligned) {
+    const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => [...r[j]].length)));
+    return rows.map((r) => r
+        .map((cell, j) => {
+        const pad = ' '.repeat(widths[j] - [...cell].length);
+        return rightAligned[j] ? pad + cell : cell + pad;
+    })
+        .join('  ')
+        .trimEnd());
+}
+function metric(m, key) {
+    const v = m.metrics?.[key];
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
+}
+function checkLine(model, c, color) {
+    const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
+    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.message)}`;
+    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.advice)}` : text;
+}
+/** Formats the Result for a terminal. */
+function formatText(result, options = {}) {
+    const color = options.color ?? false;
+    const out = [];
+    const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
+    const rows = result.models.map((m) => [
+        m.verdict,
+        (0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name),
+        metric(m, 'holdout_rmse'),
+        metric(m, 'gap_ratio'),
+        metric(m, 'params_per_sample'),
+        metric(m, 'max_std_coefficient'),
+    ]);
+    if (rows.length > 0) {
+        const lines = table([header, ...rows], [false, false, true, true, true, true]);
+        out.push(lines[0]);
+        lines.slice(1).forEach((line, i) => {
+            const v = result.models[i].verdict;
+            out.push(paint(v, v, color) + line.slice(v.length));
+        });
+    }
+    else {
+        out.push('no models to check');
+    }
+    for (const m of result.models) {
+        if (m.verdict === 'pass')
+            continue;
+        out.push('');
+        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.descriptor)})`);
+        if (m.error) {
+            const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(where + m.error.message)}`);
+            continue;
+        }
+        for (const c of m.checks)
+            if (c.status === 'fail' || c.status === 'warn')
+                out.push(checkLine(m, c, color));
+    }
+    for (const note of result.notes)
+        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(note)}`);
+    const { counts } = result;
+    out.push('');
+    out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
+    // A line that would begin with `::` (after white space, which a CI runner trims) could be read
+    // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
+    return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
+}
+
+
+/***/ }),
+
+/***/ 5594:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   PW: () => (/* binding */ limitText),
+/* harmony export */   WN: () => (/* binding */ countsText),
+/* harmony export */   ge: () => (/* binding */ verdictHeadline)
+/* harmony export */ });
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6228);
+/**
+ * Sentences several reporters print, as plain text: each reporter escapes them for its medium
+ * (HTML, Markdown, XML).
+ */
+
+/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
+function limitText(c) {
+    const parts = [];
+    if (c.warn !== null)
+        parts.push(`warn > ${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.warn)}`);
+    if (c.limit !== null)
+        parts.push(`fail > ${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.limit)}`);
+    return parts.length ? parts.join(', ') : 'off';
+}
+/** The run's verdict in words, e.g. `2 of 6 models over a limit`. */
+function verdictHeadline(result) {
+    const { counts } = result;
+    if (result.verdict === 'pass')
+        return 'every model within its limits';
+    if (result.verdict === 'warn')
+        return `every model within its fail limits, ${counts.warn} with warnings`;
+    if (result.verdict === 'fail')
+        return `${counts.fail} of ${counts.models} models over a limit`;
+    return `${counts.error} of ${counts.models} models could not be checked`;
+}
+/** The counts behind the verdict: `6 checked: 1 pass, 0 warn, 5 fail, 0 error`. */
+function countsText(counts) {
+    return `${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error`;
+}
+
+
+/***/ }),
+
+/***/ 1628:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   $u: () => (/* binding */ exitStatus),
+/* harmony export */   JJ: () => (/* binding */ worse),
+/* harmony export */   M: () => (/* reexport safe */ _core_json_js__WEBPACK_IMPORTED_MODULE_0__.M),
+/* harmony export */   fS: () => (/* binding */ summarise),
+/* harmony export */   qj: () => (/* reexport safe */ _core_json_js__WEBPACK_IMPORTED_MODULE_0__.qj)
+/* harmony export */ });
+/* harmony import */ var _core_json_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6153);
+
+const ORDER = { pass: 0, warn: 1, fail: 2, error: 3 };
+/** The worse of two verdicts (error > fail > warn > pass). */
+function worse(a, b) {
+    return ORDER[a] >= ORDER[b] ? a : b;
+}
+/** Builds the run-level fields from model results (sorted by descriptor path, then name). */
+function summarise(models, version, notes = []) {
+    const sorted = [...models].sort((a, b) => a.descriptor < b.descriptor ? -1 : a.descriptor > b.descriptor ? 1 : a.name < b.name ? -1 : a.name > b.name ? 1 : 0);
+    const counts = { models: sorted.length, pass: 0, warn: 0, fail: 0, error: 0 };
+    let verdict = 'pass';
+    for (const m of sorted) {
+        counts[m.verdict] += 1;
+        verdict = worse(verdict, m.verdict);
+    }
+    return { tool: { name: 'fitgate', version }, verdict, counts, models: sorted, notes };
+}
+/** Exit status of the CLI: 0 pass/warn, 1 a model over a fail limit, 2 an error. */
+function exitStatus(result, failOn = 'fail') {
+    if (result.verdict === 'error')
+        return 2;
+    if (result.verdict === 'fail')
+        return 1;
+    if (result.verdict === 'warn' && failOn === 'warn')
+        return 1;
+    return 0;
+}
+
+
+/***/ }),
+
+/***/ 8805:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -36847,8 +36386,8 @@ function mergeLimits(settings, descriptorLimits) {
     return merged;
 }
 
-// EXTERNAL MODULE: ./src/errors.ts
-var src_errors = __nccwpck_require__(3916);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var core_errors = __nccwpck_require__(4296);
 ;// CONCATENATED MODULE: ./src/config/schema-errors.ts
 /**
  * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
@@ -36886,7 +36425,7 @@ function formatKeyPath(path) {
 function errorAt(doc, file, code, path, message, pointAt = 'value') {
     const position = locate(doc, path, pointAt);
     const key = formatKeyPath(path);
-    return new src_errors/* InputError */.dz(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
+    return new core_errors/* InputError */.dz(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
 }
 /** Quotes a user value for a message; non-finite numbers as YAML writes them. */
 function showValue(value) {
@@ -36896,7 +36435,7 @@ function showValue(value) {
         return 'binary data';
     if (value === null)
         return 'nothing (null)';
-    return (0,src_errors/* quoteValue */.cl)(value);
+    return (0,core_errors/* quoteValue */.cl)(value);
 }
 /**
  * The single most specific InputError for a failed validation.
@@ -36908,7 +36447,7 @@ function showValue(value) {
 function schemaError(errors, doc, file) {
     const issues = resolveAlternatives(errors).flatMap((e) => toIssue(e, doc.value));
     if (issues.length === 0)
-        return new src_errors/* InputError */.dz(SCHEMA_ERROR_CODE, 'does not match its schema', { file });
+        return new core_errors/* InputError */.dz(SCHEMA_ERROR_CODE, 'does not match its schema', { file });
     // First in document order; within its subtree, the deepest.
     const placed = issues.map((issue, index) => ({ issue, index, at: locate(doc, issue.path, issue.pointAt) ?? { line: 0, column: 0 } }));
     placed.sort((a, b) => a.at.line - b.at.line || a.at.column - b.at.column || a.index - b.index);
@@ -39332,11 +38871,11 @@ function decodeYamlBytes(bytes, file) {
     }
     catch {
         const at = firstInvalidUtf8(bytes);
-        throw new src_errors/* InputError */.dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
     }
     const nul = text.indexOf('\u0000');
     if (nul >= 0) {
-        throw new src_errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', { file, ...positionInText(text, nul) });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', { file, ...positionInText(text, nul) });
     }
     return text;
 }
@@ -39367,7 +38906,7 @@ function parseYaml(text, file) {
     // stack) on documents nested thousands deep, so refuse those before parsing.
     const rough = roughNesting(text);
     if (rough.depth > ROUGH_DEPTH_CAP) {
-        throw new src_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
     }
     const lineCounter = new dist/* LineCounter */.HN();
     const doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
@@ -39379,7 +38918,7 @@ function parseYaml(text, file) {
         const error = doc.errors[0];
         const stackOverflow = /call stack/i.test(error.message);
         const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
-        throw new src_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${message}`, { file, ...at(error.pos[0]) });
+        throw new core_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${message}`, { file, ...at(error.pos[0]) });
     }
     checkStructure(doc, text, file, at);
     let value;
@@ -39388,7 +38927,7 @@ function parseYaml(text, file) {
     }
     catch (error) {
         const first = firstAlias(doc.contents);
-        throw new src_errors/* InputError */.dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
     }
     const locate = (path, wantValue) => {
         let node = doc.contents;
@@ -39485,7 +39024,7 @@ function checkStructure(doc, text, file, at) {
     const visit = (node, depth) => {
         if ((0,dist/* isMap */.jh)(node) || (0,dist/* isSeq */.oP)(node)) {
             if (depth > YAML_GUARDS.maxDepth) {
-                throw new src_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
+                throw new core_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
                     file,
                     ...(node.range ? at(node.range[0]) : {}),
                 });
@@ -39501,7 +39040,7 @@ function checkStructure(doc, text, file, at) {
                 if ((0,dist/* isMap */.jh)(keyNode) || (0,dist/* isSeq */.oP)(keyNode)) {
                     const range = pair.key?.range;
                     const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-                    throw new src_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`, {
+                    throw new core_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`, {
                         file,
                         ...at(keyOffset),
                     });
@@ -39510,7 +39049,7 @@ function checkStructure(doc, text, file, at) {
                 const before = seen.get(key);
                 if (before !== undefined) {
                     const first = at(before);
-                    throw new src_errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${key}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+                    throw new core_errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${key}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
                         file,
                         key,
                         ...at(keyOffset),
@@ -39575,7 +39114,7 @@ function firstAlias(root) {
 }
 function checkSize(bytes, file) {
     if (bytes > YAML_GUARDS.maxBytes) {
-        throw new src_errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, { file });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, { file });
     }
 }
 function firstInvalidUtf8(bytes) {
@@ -39677,7 +39216,7 @@ function defaultSettings() {
 async function loadSettings(repo, path, options = {}) {
     if (!(await repo.isFile(path))) {
         if (options.explicit) {
-            throw new src_errors/* InputError */.dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
+            throw new core_errors/* InputError */.dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
         }
         return defaultSettings();
     }
@@ -39769,7 +39308,7 @@ async function discoverDescriptors(repo, settings, explicit) {
         for (const given of explicit) {
             const path = normaliseGiven(given);
             if (!(await repo.isFile(path))) {
-                throw new src_errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
+                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
             }
             found.add(path);
         }
@@ -39778,12 +39317,12 @@ async function discoverDescriptors(repo, settings, explicit) {
         for (const [index, pattern] of settings.models.entries()) {
             const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
             if (isOutsidePattern(pattern)) {
-                throw new src_errors/* InputError */.dz(DISCOVER_ERROR.globOutside, `pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the repository root, not absolute and not starting with \`..\``, where);
+                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globOutside, `pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the repository root, not absolute and not starting with \`..\``, where);
             }
             const matches = await repo.glob([pattern]);
             if (matches.length === 0) {
                 const source = settings.file === null ? ' (the default, as there is no settings file)' : '';
-                throw new src_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${JSON.stringify(pattern)}${source} matches no file in ${repo.label}; expected at least one model descriptor`, where);
+                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${JSON.stringify(pattern)}${source} matches no file in ${repo.label}; expected at least one model descriptor`, where);
             }
             for (const match of matches)
                 found.add(match);
@@ -39802,7 +39341,7 @@ function checkUniqueNames(descriptors) {
     for (const d of descriptors) {
         const first = seen.get(d.name);
         if (first) {
-            throw new src_errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${JSON.stringify(d.name)} is also used by ${first.file}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
+            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${JSON.stringify(d.name)} is also used by ${first.file}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
         }
         seen.set(d.name, d);
     }
@@ -39816,7 +39355,7 @@ function normaliseGiven(given) {
     const p = given.replace(/\\/g, '/');
     const normal = external_node_path_.posix.normalize(p).replace(/^(\.\/)+/, '');
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || normal === '..' || normal.startsWith('../')) {
-        throw new src_errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', { file: given });
+        throw new core_errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', { file: given });
     }
     return normal;
 }
@@ -39941,88 +39480,1250 @@ function readCenters(doc, file, centers, at) {
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
 
-// EXTERNAL MODULE: ./src/basis/index.ts + 3 modules
-var basis = __nccwpck_require__(2578);
-// EXTERNAL MODULE: ./src/basis/stats.ts
-var stats = __nccwpck_require__(6029);
-// EXTERNAL MODULE: ./src/checks/index.ts + 13 modules
-var src_checks = __nccwpck_require__(5614);
-// EXTERNAL MODULE: ./src/design-matrix.ts
-var design_matrix = __nccwpck_require__(1927);
-// EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
-var src_fit = __nccwpck_require__(2485);
-// EXTERNAL MODULE: ./src/fit/wasm-kernels.ts + 1 modules
-var wasm_kernels = __nccwpck_require__(9554);
-;// CONCATENATED MODULE: ./src/metrics/column-spread.ts
+;// CONCATENATED MODULE: ./src/run/error-result.ts
+/** Error code of a model that failed through a fault in fitgate rather than in its files. */
+const INTERNAL_ERROR = 'internal-error';
 /**
- * Population standard deviations of the design columns, gathered block by block in the same
- * pass that folds rows into the factor. Sums are taken about each column's first value, which
- * keeps the subtraction well conditioned for columns with a large offset.
+ * The outcome of a model that could not be checked. The message starts with the key path
+ * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
+ * does, since the result keeps only the file and line of the location.
  */
-
-/** Running sums per column. */
-class ColumnSpread {
-    p;
-    shift;
-    s1;
-    s2;
-    n = 0;
-    /** @param p number of columns */
-    constructor(p) {
-        this.p = p;
-        this.shift = new Float64Array(p);
-        this.s1 = new Float64Array(p);
-        this.s2 = new Float64Array(p);
-    }
-    /** Adds a column-major block of `m` rows. */
-    add(X, m) {
-        if (m === 0)
-            return;
-        for (let j = 0; j < this.p; j++) {
-            const base = j * m;
-            if (this.n === 0)
-                this.shift[j] = X[base];
-            const column = X.subarray(base, base + m);
-            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
-            this.s1[j] += (0,stats/* sumOfDeviations */.jZ)(column, m, this.shift[j]);
-            this.s2[j] += (0,stats/* sumOfSquaredDeviations */.Mq)(column, m, this.shift[j]);
-        }
-        this.n += m;
-    }
-    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
-    sd() {
-        const out = new Float64Array(this.p);
-        for (let j = 0; j < this.p; j++) {
-            const mean = this.s1[j] / this.n;
-            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
-        }
-        return out;
-    }
+function errorResult(name, descriptor, error) {
+    const key = error.location.key;
+    return {
+        name,
+        descriptor,
+        verdict: 'error',
+        rows: { train: 0, holdout: 0 },
+        parameters: 0,
+        columns: [],
+        metrics: null,
+        coefficients: [],
+        shipped: null,
+        checks: [],
+        error: {
+            message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
+            file: error.location.file ?? null,
+            line: error.location.line ?? null,
+            code: error.code,
+        },
+    };
 }
 
-// EXTERNAL MODULE: ./src/optimising-compiler.ts + 1 modules
-var optimising_compiler = __nccwpck_require__(6475);
-// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
-var complexity = __nccwpck_require__(7070);
-// EXTERNAL MODULE: ./src/metrics/regression.ts
-var regression = __nccwpck_require__(1788);
-// EXTERNAL MODULE: ./src/result.ts
-var result = __nccwpck_require__(1666);
+// EXTERNAL MODULE: external "node:url"
+var external_node_url_ = __nccwpck_require__(3136);
+// EXTERNAL MODULE: external "node:worker_threads"
+var external_node_worker_threads_ = __nccwpck_require__(5919);
+// EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
+var src_checks = __nccwpck_require__(1093);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
 var diagnostics_folds = __nccwpck_require__(9236);
-// EXTERNAL MODULE: ./src/diagnostics/shared.ts + 4 modules
-var shared = __nccwpck_require__(9389);
-// EXTERNAL MODULE: ./src/model/blocks.ts
-var blocks = __nccwpck_require__(4607);
-// EXTERNAL MODULE: ./src/diagnostics/column-median.ts
-var column_median = __nccwpck_require__(8455);
-;// CONCATENATED MODULE: ./src/model/chart-data.ts
+// EXTERNAL MODULE: ./src/diagnostics/random.ts
+var random = __nccwpck_require__(5089);
+;// CONCATENATED MODULE: ./src/diagnostics/leakage.ts
+
+/** How many line numbers of each file to report. */
+const LEAKAGE_EXAMPLE_LINES = 5;
+const f64 = new Float64Array(1);
+const u32 = new Uint32Array(f64.buffer);
+/**
+ * 32-bit hash of the bit patterns of row i's values (-0 counts as 0): each 32-bit half is folded
+ * in with one multiply (golden-ratio and MurmurHash3 constants, Appleby 2011), then the lowbias32
+ * finaliser (Wellons 2018) spreads the bits once per row. Matches are always confirmed by exact
+ * comparison, so the hash only has to spread rows over the table.
+ */
+function rowHash(columns, i) {
+    let h = 0x811c9dc5;
+    for (let c = 0; c < columns.length; c++) {
+        f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
+        h = Math.imul(h ^ u32[0], 0x9e3779b1);
+        h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
+        h ^= h >>> 13;
+    }
+    return (0,random/* mix32 */.QV)(h);
+}
+function sameInputs(a, i, b, j) {
+    for (let c = 0; c < a.length; c++)
+        if (a[c][i] !== b[c][j])
+            return false;
+    return true;
+}
+/** The slot of `hash`: where it is, or the empty slot where it goes. */
+function findSlot(table, hash) {
+    const { slotHead, slotHash, mask } = table;
+    let s = (Math.imul(hash, 0x9e3779b1) >>> 0) & mask;
+    while (slotHead[s] >= 0 && slotHash[s] !== hash)
+        s = (s + 1) & mask;
+    return s;
+}
+// The two passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** Puts rows 0..n-1 in the table, so that each chain lists its rows in file order. */
+function indexRows(table, inputs, n) {
+    for (let r = n - 1; r >= 0; r--) {
+        const hash = rowHash(inputs, r);
+        const s = findSlot(table, hash);
+        table.next[r] = table.slotHead[s];
+        table.slotHash[s] = hash;
+        table.slotHead[s] = r;
+    }
+}
+/**
+ * Streams the training rows past the table of hold-out rows in file order: firstMatch[r] receives
+ * the first training row whose inputs equal hold-out row r's, targetToo[r] = 1 when some such row
+ * has its target too.
+ */
+function matchRows(table, holdout, train, firstMatch, targetToo) {
+    for (let i = 0; i < train.rows; i++) {
+        let r = table.slotHead[findSlot(table, rowHash(train.inputs, i))];
+        while (r >= 0) {
+            if (sameInputs(holdout.inputs, r, train.inputs, i)) {
+                if (firstMatch[r] < 0)
+                    firstMatch[r] = i;
+                if (holdout.y[r] === train.y[i])
+                    targetToo[r] = 1;
+            }
+            r = table.next[r];
+        }
+    }
+}
+/**
+ * Finds hold-out rows equal to a training row in every input column of the model (values compared
+ * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
+ * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
+ * hold-out rows (typed arrays, about 20 bytes per row).
+ *
+ * @param train training rows (inputs in the model's order, targets, lines)
+ * @param holdout hold-out rows (same input order)
+ */
+function findLeakage(train, holdout) {
+    const columns = train.inputs.length;
+    // A hash table of the hold-out rows (the smaller file, usually); the training rows then stream
+    // past it in file order, so each hold-out row's first match is the earliest training row.
+    const h = holdout.rows;
+    let size = 1024;
+    while (size < 2 * h)
+        size *= 2;
+    const table = { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(h).fill(-1) };
+    indexRows(table, holdout.inputs, h);
+    const firstMatch = new Int32Array(h).fill(-1);
+    const targetToo = new Uint8Array(h);
+    if (h > 0)
+        matchRows(table, holdout, train, firstMatch, targetToo);
+    let inputMatches = 0;
+    let fullMatches = 0;
+    const holdoutLines = [];
+    const trainLines = [];
+    for (let r = 0; r < h; r++) {
+        if (firstMatch[r] < 0)
+            continue;
+        inputMatches++;
+        if (targetToo[r] === 1)
+            fullMatches++;
+        if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
+            holdoutLines.push(holdout.lines[r]);
+            trainLines.push(train.lines[firstMatch[r]]);
+        }
+    }
+    return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
+}
+
+// EXTERNAL MODULE: ./src/design/design-matrix.ts
+var design_matrix = __nccwpck_require__(6566);
+// EXTERNAL MODULE: ./src/design/blocks.ts
+var blocks = __nccwpck_require__(7254);
+// EXTERNAL MODULE: ./src/design/stats.ts
+var stats = __nccwpck_require__(6801);
+;// CONCATENATED MODULE: ./src/diagnostics/column-median.ts
+/**
+ * Medians of training columns, computed once per column and shared by every reader (swing,
+ * charts): selection on a scratch copy, remembered per column array.
+ */
+
+const remembered = new WeakMap();
+/**
+ * Median of the first n values of a column: the middle value, or the mean of the two middle
+ * values when n is even; NaN when n = 0. Remembered per column array (and n), so a second
+ * reader gets it for free. The column is not modified.
+ *
+ * @param values the column (length >= n)
+ * @param n rows to take
+ * @param scratch optional work array of length >= n (default: a new one)
+ */
+function columnMedian(values, n, scratch) {
+    const known = remembered.get(values);
+    if (known !== undefined && known.n === n)
+        return known.median;
+    let median = Number.NaN;
+    if (n > 0) {
+        const s = scratch !== undefined && scratch.length >= n ? scratch.subarray(0, n) : new Float64Array(n);
+        median = (n >= BRACKET_MIN_ROWS ? bracketedMedian(values, n, s) : null) ?? selectedMedian(values, n, s);
+    }
+    remembered.set(values, { n, median });
+    return median;
+}
+/** Columns of at least this many rows try {@link bracketedMedian} first. */
+const BRACKET_MIN_ROWS = 16384;
+/** Rows in the bracketing sample. */
+const BRACKET_SAMPLE = 2048;
+/** Sample ranks on each side of the sample's middle that bound the bracket (about 9 standard deviations of the middle's rank). */
+const BRACKET_HALF_WIDTH = 200;
+/** The median by selection on a copy of all n values (in `work`, length >= n). */
+function selectedMedian(values, n, work) {
+    const s = work.subarray(0, n);
+    s.set(values.subarray(0, n));
+    return middleOf(s, n, n >> 1);
+}
+/**
+ * The median of a[0..m) given that the wanted middle ranks are `upper` (and `upper - 1` when n is
+ * even) of the whole column, counted from a's first value: selection on a.
+ */
+function middleOf(a, n, upper) {
+    const value = selectKth(a, upper);
+    if (n % 2 === 1)
+        return value;
+    // The lower middle is the largest value left of the upper middle after selection.
+    return ((0,stats/* largest */.nQ)(a, upper) + value) / 2;
+}
+/**
+ * The exact median in one pass over the column and a selection among a tenth of it: the middle
+ * ranks are bracketed by two values of a sorted even-stride sample, the pass counts the values
+ * below the bracket and gathers those inside it, and the middle is selected among those (the
+ * sampling step of Floyd & Rivest, "Expected time bounds for selection", Communications of the ACM
+ * 18(3), 1975). Returns null when the bracket misses a middle rank or holds too many values (the
+ * caller then selects among all of them), so the result is always the exact median.
+ */
+function bracketedMedian(values, n, work) {
+    const sample = new Float64Array(BRACKET_SAMPLE);
+    for (let t = 0; t < BRACKET_SAMPLE; t++)
+        sample[t] = values[Math.floor((t * n) / BRACKET_SAMPLE)];
+    sample.sort();
+    const lo = sample[BRACKET_SAMPLE / 2 - BRACKET_HALF_WIDTH];
+    const hi = sample[BRACKET_SAMPLE / 2 + BRACKET_HALF_WIDTH];
+    const inside = gatherBracket(values, n, lo, hi, work, Math.min(n, work.length));
+    if (inside < 0)
+        return null;
+    const below = countBelow(values, n, lo);
+    const upper = n >> 1;
+    const lower = n % 2 === 1 ? upper : upper - 1;
+    // Both middle ranks must fall among the gathered values.
+    if (lower < below || upper >= below + inside)
+        return null;
+    return middleOf(work.subarray(0, inside), n, upper - below);
+}
+// The passes below are one loop and a return each (see DEVELOPERS.md, "Writing hot loops").
+/**
+ * One pass: copies the values in [lo, hi] to `out` (in column order) and returns how many; -1 when
+ * more than `capacity` values fall in the bracket.
+ */
+function gatherBracket(values, n, lo, hi, out, capacity) {
+    let inside = 0;
+    for (let i = 0; i < n; i++) {
+        const v = values[i];
+        if (v >= lo && v <= hi) {
+            if (inside === capacity)
+                return -1;
+            out[inside++] = v;
+        }
+    }
+    return inside;
+}
+/** Values below `lo` among values[0..n). */
+function countBelow(values, n, lo) {
+    let below = 0;
+    for (let i = 0; i < n; i++)
+        if (values[i] < lo)
+            below++;
+    return below;
+}
+/**
+ * k-th smallest value (0-based) of a, partially reordering it so that a[i] <= a[k] for i < k
+ * (Hoare's selection, "FIND", Communications of the ACM 4(7), 1961; middle-of-three pivot).
+ *
+ * @param a values (reordered in place)
+ * @param k rank, 0 <= k < a.length
+ */
+function selectKth(a, k) {
+    let lo = 0;
+    let hi = a.length - 1;
+    while (hi > lo) {
+        const mid = (lo + hi) >> 1;
+        let x = a[lo];
+        let y = a[mid];
+        let z = a[hi];
+        // Sort the three with plain swaps (no array literals: see DEVELOPERS.md, "Writing hot loops").
+        let t;
+        if (x > y) {
+            t = x;
+            x = y;
+            y = t;
+        }
+        if (y > z) {
+            t = y;
+            y = z;
+            z = t;
+        }
+        if (x > y) {
+            t = x;
+            x = y;
+            y = t;
+        }
+        const pivot = y;
+        let i = lo;
+        let j = hi;
+        while (i <= j) {
+            while (a[i] < pivot)
+                i++;
+            while (a[j] > pivot)
+                j--;
+            if (i <= j) {
+                const t = a[i];
+                a[i] = a[j];
+                a[j] = t;
+                i++;
+                j--;
+            }
+        }
+        if (k <= j)
+            hi = j;
+        else if (k >= i)
+            lo = i;
+        else
+            return a[k];
+    }
+    return a[k];
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/radix-sort.ts
+/**
+ * Sorting of large Float64Array columns: a distribution (bucket) sort when the values are spread
+ * evenly, else a least-significant-digit radix sort on the IEEE 754 bit patterns (Knuth, The Art
+ * of Computer Programming, vol. 3, 2nd ed., sec. 5.2.5); both several times faster than the
+ * built-in typed-array sort on a million values (196 ms against 577 ms here), with the same
+ * result.
+ */
+/**
+ * Below this length the built-in sort is used: in a short run, where this code has not been
+ * optimised yet, the built-in sort is faster up to about 50,000 values (measured here, one
+ * process each: five columns of 20,000 values in 8 ms against 13-16 ms, of 100,000 in 44 ms
+ * against 30 ms).
+ */
+const RADIX_FROM = 65536;
+const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
+/**
+ * Sorts `a` ascending in place, in the order of `Float64Array.prototype.sort` (-0 before +0; the
+ * columns sorted here hold no NaN) and returns it.
+ *
+ * Evenly spread values go by buckets of equal width ({@link bucketSort}). Otherwise the bit
+ * pattern of each value becomes an unsigned key that orders like the number (sign bit
+ * flipped for positives, every bit inverted for negatives), keys are sorted by four stable
+ * counting passes of 16 bits (a pass is skipped when every key has the same digit), and the
+ * patterns are turned back.
+ *
+ * @param a values (sorted in place)
+ * @param scratch optional work array of length >= 2 * a.length (default: a new one)
+ */
+function sortFloat64(a, scratch) {
+    const n = a.length;
+    if (n < RADIX_FROM || !LITTLE_ENDIAN)
+        return a.sort();
+    const usable = scratch !== undefined && scratch.length >= 2 * n && scratch.byteOffset % 8 === 0;
+    const work = usable ? scratch.subarray(0, 2 * n) : new Uint32Array(2 * n);
+    if (bucketSort(a, new Float64Array(work.buffer, work.byteOffset, n)))
+        return a;
+    return radixSort(a, work);
+}
+/** Largest bucket {@link bucketSort} sorts by insertion; a larger one sends the column to the radix sort. */
+const MAX_BUCKET = 48;
+/** a < b in the order of the built-in sort (-0 before +0). */
+function before(a, b) {
+    return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
+}
+/**
+ * Distribution sort for evenly spread values (Knuth, vol. 3, sec. 5.2.5 again: sorting by
+ * address calculation): about n/4 buckets of equal width between the extremes (the bucket index
+ * never decreases as the value grows), then insertion sort in each bucket. Returns false, with
+ * `a` unchanged, when the values are not spread evenly enough (a bucket over MAX_BUCKET values)
+ * or the extremes are not usable; the caller then sorts another way.
+ */
+function bucketSort(a, out) {
+    const n = a.length;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < n; i++) {
+        const v = a[i];
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    const buckets = n >> 2;
+    const scale = buckets / (hi - lo);
+    if (!(hi > lo) || !Number.isFinite(scale) || !(scale > 0))
+        return false;
+    const start = new Int32Array(buckets + 1);
+    const last = buckets - 1;
+    for (let i = 0; i < n; i++) {
+        const b = Math.min(last, Math.floor((a[i] - lo) * scale));
+        start[b + 1]++;
+    }
+    for (let b = 0; b < buckets; b++) {
+        if (start[b + 1] > MAX_BUCKET)
+            return false;
+        start[b + 1] += start[b];
+    }
+    const fill = start.slice(0, buckets);
+    for (let i = 0; i < n; i++) {
+        const v = a[i];
+        const b = Math.min(last, Math.floor((v - lo) * scale));
+        out[fill[b]++] = v;
+    }
+    for (let b = 0; b < buckets; b++) {
+        const end = start[b + 1];
+        for (let i = start[b] + 1; i < end; i++) {
+            const v = out[i];
+            let j = i - 1;
+            while (j >= start[b] && before(v, out[j])) {
+                out[j + 1] = out[j];
+                j--;
+            }
+            out[j + 1] = v;
+        }
+    }
+    a.set(out);
+    return true;
+}
+/** The radix sort of {@link sortFloat64} (any values; `scratch` holds 2n words). */
+function radixSort(a, scratch) {
+    const n = a.length;
+    const u = new Uint32Array(a.buffer, a.byteOffset, 2 * n);
+    const counts = new Uint32Array(4 * 65536);
+    for (let i = 0; i < n; i++) {
+        let lo = u[2 * i];
+        let hi = u[2 * i + 1];
+        if (hi & 0x80000000) {
+            hi = ~hi >>> 0;
+            lo = ~lo >>> 0;
+        }
+        else {
+            hi = (hi | 0x80000000) >>> 0;
+        }
+        u[2 * i] = lo;
+        u[2 * i + 1] = hi;
+        counts[lo & 0xffff]++;
+        counts[65536 + (lo >>> 16)]++;
+        counts[131072 + (hi & 0xffff)]++;
+        counts[196608 + (hi >>> 16)]++;
+    }
+    let src = u;
+    let dst = scratch;
+    for (let d = 0; d < 4; d++) {
+        const base = d * 65536;
+        const word = d < 2 ? 0 : 1;
+        const shift = d % 2 === 0 ? 0 : 16;
+        const firstDigit = (src[word] >>> shift) & 0xffff;
+        if (counts[base + firstDigit] === n)
+            continue; // every key has this digit
+        let sum = 0;
+        for (let b = 0; b < 65536; b++) {
+            const c = counts[base + b];
+            counts[base + b] = sum;
+            sum += c;
+        }
+        for (let i = 0; i < n; i++) {
+            const digit = (src[2 * i + word] >>> shift) & 0xffff;
+            const pos = counts[base + digit]++;
+            dst[2 * pos] = src[2 * i];
+            dst[2 * pos + 1] = src[2 * i + 1];
+        }
+        const t = src;
+        src = dst;
+        dst = t;
+    }
+    if (src !== u)
+        u.set(src);
+    for (let i = 0; i < n; i++) {
+        const hi = u[2 * i + 1];
+        if (hi & 0x80000000) {
+            u[2 * i + 1] = (hi & 0x7fffffff) >>> 0;
+        }
+        else {
+            u[2 * i + 1] = ~hi >>> 0;
+            u[2 * i] = ~u[2 * i] >>> 0;
+        }
+    }
+    return a;
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/nearest-neighbours.ts
+/**
+ * The k nearest neighbours of every point of a small set (the swing scan's sampled rows), exactly
+ * as a search over all pairs finds them, through a k-d tree (Bentley, "Multidimensional binary
+ * search trees used for associative searching", Communications of the ACM 18(9), 1975).
+ */
+/** Points per leaf of the tree. */
+const LEAF_SIZE = 8;
+/**
+ * Pairs (row, neighbour) of each point and its `kk` nearest other points by squared Euclidean
+ * distance, summed over the coordinates in order (exact duplicates, distance 0, are skipped;
+ * equal distances: the lower index first).
+ *
+ * The search descends the tree to the point's own leaf first and visits a subtree on the other
+ * side of a split only when the distance to the split plane, squared, is at most the k-th best
+ * distance so far: every point there is at least that far in that coordinate alone, and a sum of
+ * squares is at least any of its terms (in floating point too, as rounding is monotone). So the
+ * result is the result of the search over all s x s pairs.
+ *
+ * @param flat coordinates, row-major: flat[a * d + c]
+ * @param s points
+ * @param d coordinates per point
+ * @param kk neighbours per point (at most s - 1)
+ * @param rows the training row of each point
+ * @returns flat pairs [row, neighbour, row, neighbour, ...] of training rows, points in order and
+ *   each point's neighbours nearest first
+ */
+function nearestPairs(flat, s, d, kk, rows) {
+    const pairs = new Int32Array(2 * s * Math.max(kk, 0));
+    if (s < 2 || kk < 1 || d < 1)
+        return pairs.subarray(0, 0);
+    const tree = buildTree(flat, s, d);
+    let count = 0;
+    const best = new Float64Array(kk);
+    const bestIdx = new Int32Array(kk);
+    for (let a = 0; a < s; a++) {
+        best.fill(Infinity);
+        bestIdx.fill(-1);
+        searchTree(tree, 0, flat, d, a, kk, best, bestIdx);
+        for (let t = 0; t < kk; t++) {
+            if (bestIdx[t] < 0)
+                continue;
+            pairs[count++] = rows[a];
+            pairs[count++] = rows[bestIdx[t]];
+        }
+    }
+    return pairs.subarray(0, count);
+}
+/** Builds the tree: each node splits its points at the median of its widest coordinate. */
+function buildTree(flat, s, d) {
+    const capacity = 2 * Math.ceil(s / (LEAF_SIZE / 2)) + 1;
+    const tree = {
+        idx: Int32Array.from({ length: s }, (_, a) => a),
+        lo: new Int32Array(capacity),
+        hi: new Int32Array(capacity),
+        mid: new Int32Array(capacity),
+        dim: new Int32Array(capacity),
+        value: new Float64Array(capacity),
+        left: new Int32Array(capacity),
+        right: new Int32Array(capacity),
+    };
+    let nodes = 0;
+    const make = (lo, hi) => {
+        const node = nodes++;
+        tree.lo[node] = lo;
+        tree.hi[node] = hi;
+        tree.left[node] = -1;
+        tree.right[node] = -1;
+        tree.dim[node] = -1;
+        if (hi - lo <= LEAF_SIZE)
+            return node;
+        const c = widestCoordinate(flat, d, tree.idx, lo, hi);
+        if (c < 0)
+            return node; // every point equal: a leaf
+        const mid = (lo + hi) >> 1;
+        selectByCoordinate(flat, d, c, tree.idx, lo, hi, mid);
+        tree.dim[node] = c;
+        tree.mid[node] = mid;
+        tree.value[node] = flat[tree.idx[mid] * d + c];
+        tree.left[node] = make(lo, mid);
+        tree.right[node] = make(mid, hi);
+        return node;
+    };
+    make(0, s);
+    return tree;
+}
+/** The coordinate with the widest range over idx[lo..hi), or -1 when every range is 0. */
+function widestCoordinate(flat, d, idx, lo, hi) {
+    let bestDim = -1;
+    let bestWidth = 0;
+    for (let c = 0; c < d; c++) {
+        let min = Infinity;
+        let max = -Infinity;
+        for (let t = lo; t < hi; t++) {
+            const v = flat[idx[t] * d + c];
+            if (v < min)
+                min = v;
+            if (v > max)
+                max = v;
+        }
+        if (max - min > bestWidth) {
+            bestWidth = max - min;
+            bestDim = c;
+        }
+    }
+    return bestDim;
+}
+/**
+ * Reorders idx[lo..hi) so that idx[k] holds the point whose coordinate c has rank k - lo, points
+ * before it no greater and points after it no smaller in that coordinate (Hoare's selection).
+ */
+function selectByCoordinate(flat, d, c, idx, lo, hi, k) {
+    let l = lo;
+    let r = hi - 1;
+    while (r > l) {
+        const pivot = flat[idx[(l + r) >> 1] * d + c];
+        let i = l;
+        let j = r;
+        while (i <= j) {
+            while (flat[idx[i] * d + c] < pivot)
+                i++;
+            while (flat[idx[j] * d + c] > pivot)
+                j--;
+            if (i <= j) {
+                const t = idx[i];
+                idx[i] = idx[j];
+                idx[j] = t;
+                i++;
+                j--;
+            }
+        }
+        if (k <= j)
+            r = j;
+        else if (k >= i)
+            l = i;
+        else
+            return;
+    }
+}
+/**
+ * The k nearest points of point a within `node`'s subtree, merged into best (distances) and
+ * bestIdx (points), nearest first: the side of each split that holds a first, the other side only
+ * when the squared distance to the split can still be at most the k-th best. Points equal to the
+ * split value may sit on either side, so a gap of 0 visits both.
+ */
+function searchTree(tree, node, flat, d, a, kk, best, bestIdx) {
+    const c = tree.dim[node];
+    if (c < 0) {
+        for (let t = tree.lo[node]; t < tree.hi[node]; t++) {
+            const b = tree.idx[t];
+            if (b !== a)
+                considerNeighbour(flat, d, a, b, kk, best, bestIdx);
+        }
+        return;
+    }
+    const diff = flat[a * d + c] - tree.value[node];
+    searchTree(tree, diff < 0 ? tree.left[node] : tree.right[node], flat, d, a, kk, best, bestIdx);
+    if (diff * diff <= best[kk - 1])
+        searchTree(tree, diff < 0 ? tree.right[node] : tree.left[node], flat, d, a, kk, best, bestIdx);
+}
+/**
+ * Puts point b into point a's list of the kk nearest (sorted by distance, then index) when it
+ * belongs there; the distance is summed over the coordinates in order, as the list's entries were.
+ */
+function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
+    const limit = best[kk - 1];
+    const ra = a * d;
+    const rb = b * d;
+    let dist = 0;
+    // Partial sums only grow: once one passes the k-th best, the point cannot enter.
+    for (let c = 0; c < d && dist <= limit; c++) {
+        const t = flat[ra + c] - flat[rb + c];
+        dist += t * t;
+    }
+    if (dist === 0 || dist > limit || (dist === limit && b > bestIdx[kk - 1]))
+        return;
+    let pos = kk - 1;
+    while (pos > 0 && (best[pos - 1] > dist || (best[pos - 1] === dist && bestIdx[pos - 1] > b))) {
+        best[pos] = best[pos - 1];
+        bestIdx[pos] = bestIdx[pos - 1];
+        pos--;
+    }
+    best[pos] = dist;
+    bestIdx[pos] = b;
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
+/**
+ * Swing between and beyond samples: how far a model's predictions leave the band of observed
+ * training targets on inputs between the training rows and just past their range.
+ */
 
 
 
 
+
+
+/**
+ * Excursion of predictions outside the band [lo, hi] in units of its width:
+ * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
+ */
+function excursion(prediction, lo, hi) {
+    if (!(hi > lo) || prediction.length === 0)
+        return Number.NaN;
+    let worst = 0;
+    for (let i = 0; i < prediction.length; i++) {
+        const v = prediction[i];
+        const e = Number.isNaN(v) ? Infinity : Math.max(v - hi, lo - v);
+        if (e > worst)
+            worst = e;
+    }
+    return worst / (hi - lo);
+}
+/**
+ * Grid across one input's range: `uniform` evenly spaced points from min to max, plus `perGap`
+ * evenly spaced interior points in each gap between neighbouring distinct values (in the
+ * `maxGaps` widest gaps when there are more; at least one per gap), plus `marginPoints` on each
+ * side up to `margin` x range outside. Sorted, without duplicates.
+ *
+ * @param values the input's training values (any order; not modified)
+ * @returns inside and beyond points, ascending; empty when the input has no spread
+ */
+function inputGrid(values, options = {}) {
+    const sorted = Float64Array.from(values).sort();
+    return gridFromSorted(sorted, sorted.length, options);
+}
+/**
+ * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
+ * array is overwritten (its distinct values are packed to the front).
+ */
+function gridFromSorted(sorted, n, options, work) {
+    const perGap = options.perGap ?? 8;
+    const uniform = options.uniform ?? 201;
+    const margin = options.margin ?? 0.1;
+    const marginPoints = options.marginPoints ?? 40;
+    const maxGaps = options.maxGaps ?? 4000;
+    const count = packDistinct(sorted, n);
+    const distinct = sorted.subarray(0, count);
+    if (count < 2)
+        return { inside: new Float64Array(0), beyond: new Float64Array(0) };
+    const lo = distinct[0];
+    const hi = distinct[count - 1];
+    const width = hi - lo;
+    const gaps = widestGaps(distinct, maxGaps, work);
+    const per = Math.max(1, Math.min(perGap, Math.floor((maxGaps * perGap) / gaps.length)));
+    const inside = new Float64Array(uniform + gaps.length * per);
+    fillUniform(inside, uniform, lo, hi);
+    const w = fillGaps(inside, uniform, distinct, gaps, per);
+    const beyond = marginGrid(lo, hi, margin * width, marginPoints);
+    return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+}
+// The loops of the grid are functions of their own, each a loop and its return (see
+// DEVELOPERS.md, "Writing hot loops").
+/** Packs the distinct values of the ascending a[0..n) to its front; returns how many. */
+function packDistinct(a, n) {
+    let count = 0;
+    for (let i = 0; i < n; i++)
+        if (count === 0 || a[i] !== a[count - 1])
+            a[count++] = a[i];
+    return count;
+}
+/** The distinct values of xs[0..length), ascending (xs is reordered). */
+function unique(xs, length) {
+    const u = sortFloat64(xs.subarray(0, length));
+    return u.slice(0, packDistinct(u, u.length));
+}
+/** out[0..count): count evenly spaced points from lo to hi, both included (hi exactly). */
+function fillUniform(out, count, lo, hi) {
+    const width = hi - lo;
+    for (let t = 0; t < count; t++)
+        out[t] = t === count - 1 ? hi : lo + (width * t) / Math.max(1, count - 1);
+}
+/** Writes `per` points inside each listed gap of `distinct` from out[at]; returns the next free index. */
+function fillGaps(out, at, distinct, gaps, per) {
+    let w = at;
+    for (let g = 0; g < gaps.length; g++) {
+        const a = distinct[gaps[g]];
+        const b = distinct[gaps[g] + 1];
+        for (let t = 1; t <= per; t++)
+            out[w++] = a + ((b - a) * t) / (per + 1);
+    }
+    return w;
+}
+/** `count` points on each side of [lo, hi], at (t / count) of `reach` for t = 1..count, alternating below and above. */
+function marginGrid(lo, hi, reach, count) {
+    const beyond = new Float64Array(2 * count);
+    for (let t = 1; t <= count; t++) {
+        const d = (reach * t) / count;
+        beyond[2 * t - 2] = lo - d;
+        beyond[2 * t - 1] = hi + d;
+    }
+    return beyond;
+}
+/**
+ * Indices g of the `maxGaps` widest gaps distinct[g + 1] - distinct[g] (ties: lower g first), in
+ * ascending g; all gaps when there are no more than `maxGaps`. Linear time: the threshold width
+ * is found by selection ({@link select}) on one typed array of the widths.
+ */
+function widestGaps(distinct, maxGaps, work) {
+    const count = distinct.length - 1;
+    if (count <= maxGaps)
+        return Int32Array.from({ length: count }, (_, g) => g);
+    const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
+    gapWidths(distinct, count, widths);
+    const threshold = selectKth(widths, count - maxGaps);
+    const out = new Int32Array(maxGaps);
+    pickGaps(distinct, count, threshold, maxGaps - gapsWiderThan(distinct, count, threshold), out);
+    return out;
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+/** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
+function gapWidths(distinct, count, widths) {
+    for (let g = 0; g < count; g++)
+        widths[g] = distinct[g + 1] - distinct[g];
+}
+/** How many of the first `count` gaps are wider than `threshold`. */
+function gapsWiderThan(distinct, count, threshold) {
+    let above = 0;
+    for (let g = 0; g < count; g++)
+        if (distinct[g + 1] - distinct[g] > threshold)
+            above++;
+    return above;
+}
+/** Writes to `out`, ascending, every gap wider than `threshold` and the first `ties` gaps equal to it. */
+function pickGaps(distinct, count, threshold, ties, out) {
+    let left = ties;
+    let w = 0;
+    for (let g = 0; g < count; g++) {
+        const width = distinct[g + 1] - distinct[g];
+        if (width > threshold || (width === threshold && left-- > 0))
+            out[w++] = g;
+    }
+}
+/**
+ * Copies the values an input's grid is built from into `out` and returns how many: every row
+ * when there are at most `max`, else `max - 2` rows at an even stride plus the smallest and the
+ * largest value. Large files have gaps far narrower than any swing, so the sample loses nothing
+ * the figure could show and saves sorting millions of values.
+ */
+function gridSample(column, n, max, out) {
+    if (n <= max) {
+        out.set(column.subarray(0, n));
+        return n;
+    }
+    const [lo, hi] = (0,stats/* range */.y1)(column, n);
+    const strided = max - 2;
+    out[strided] = lo;
+    out[strided + 1] = hi;
+    stridedSample(column, n, strided, out);
+    return max;
+}
+/** out[t] = column[floor(t n / count)] for t = 0 .. count-1. */
+function stridedSample(column, n, count, out) {
+    for (let t = 0; t < count; t++)
+        out[t] = column[Math.floor((t * n) / count)];
+}
+/** Indices of at most `count` points (ascending) spread evenly, always keeping `keep`. */
+function thinIndices(length, count, keep) {
+    if (length <= count)
+        return Array.from({ length }, (_, i) => i);
+    const chosen = new Set(keep.filter((i) => i >= 0 && i < length));
+    const slots = Math.max(2, count - chosen.size);
+    for (let t = 0; t < slots; t++)
+        chosen.add(Math.round((t * (length - 1)) / (slots - 1)));
+    return [...chosen].sort((a, b) => a - b);
+}
+/**
+ * Predictions along input c with every other input fixed, as a function of that input's values:
+ * terms that do not read input c add the same amount at every point, so they are evaluated once
+ * (at the fixed values) and only the terms that read c are filled per point. A model whose every
+ * term reads c is predicted with its whole design, as {@link predictRows} does.
+ *
+ * @param design the fitted design
+ * @param coefficients fitted coefficients (length p)
+ * @param c index of the varying input in `design.inputs`
+ * @param fixed value of every input (entry c is ignored)
+ * @returns predict(xs): predictions at the points xs of input c
+ */
+function predictorAlong(design, coefficients, c, fixed) {
+    const name = design.inputs[c];
+    const varying = design.terms.map((t) => t.inputs.includes(name));
+    const constantColumns = (n) => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
+    if (varying.every(Boolean)) {
+        return (xs) => {
+            const columns = constantColumns(xs.length);
+            columns[c] = xs;
+            return (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: xs.length }, coefficients);
+        };
+    }
+    // The fixed part: intercept plus every term that does not read input c, at the fixed values.
+    const row = design.fill(constantColumns(1), 0, 1);
+    let base = design.intercept ? coefficients[0] : 0;
+    const sub = [];
+    design.terms.forEach((t, i) => {
+        const first = design.termOffsets[i];
+        const width = t.columnNames.length;
+        for (let j = first; j < first + width; j++) {
+            if (varying[i])
+                sub.push(coefficients[j]);
+            else
+                base += row[j] * coefficients[j];
+        }
+    });
+    const partial = (0,design_matrix/* createDesign */.x)(design.terms.filter((_, i) => varying[i]), false);
+    const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
+    return (xs) => {
+        const columns = partial.inputs.map((input) => (input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN)));
+        const out = (0,blocks/* predictRows */.tp)(partial, { inputs: columns, rows: xs.length }, sub);
+        for (let i = 0; i < out.length; i++)
+            out[i] += base;
+        return out;
+    };
+}
+/**
+ * Merges two ascending point sets that never share a value (the margins lie outside the range)
+ * with their predictions into xs and ps (length of both sets together): the order a stable sort
+ * by x gives.
+ */
+function mergeAscending(ax, ap, bx, bp, xs, ps) {
+    const na = ax.length;
+    const nb = bx.length;
+    for (let a = 0, b = 0, dst = 0; dst < na + nb; dst++) {
+        if (b >= nb || (a < na && ax[a] <= bx[b])) {
+            xs[dst] = ax[a];
+            ps[dst] = ap[a++];
+        }
+        else {
+            xs[dst] = bx[b];
+            ps[dst] = bp[b++];
+        }
+    }
+}
+/** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
+function extremeIndices(values) {
+    return [indexOfSmallest(values), indexOfLargest(values)];
+}
+// One loop per function (see DEVELOPERS.md, "Writing hot loops").
+function indexOfSmallest(values) {
+    let imin = 0;
+    for (let i = 1; i < values.length; i++)
+        if (values[i] < values[imin])
+            imin = i;
+    return imin;
+}
+function indexOfLargest(values) {
+    let imax = 0;
+    for (let i = 1; i < values.length; i++)
+        if (values[i] > values[imax])
+            imax = i;
+    return imax;
+}
+/** Excursion of one prediction: max(0, v - hi, lo - v) / (hi - lo); Infinity for NaN. */
+function pointExcursion(v, lo, hi) {
+    return Number.isNaN(v) ? Infinity : Math.max(0, v - hi, lo - v) / (hi - lo);
+}
+/** The first index of pred[0..m) with the largest {@link pointExcursion}; 0 when none is larger than -Infinity. */
+function worstExcursionIndex(pred, m, lo, hi) {
+    let value = -Infinity;
+    let index = 0;
+    for (let i = 0; i < m; i++) {
+        const e = pointExcursion(pred[i], lo, hi);
+        if (e > value) {
+            value = e;
+            index = i;
+        }
+    }
+    return index;
+}
+/**
+ * The inputs of the sampled rows, each divided by its standard deviation over them after taking
+ * off their mean (0 for an input without spread), row-major: flat[a * d + c] for the neighbour
+ * search.
+ */
+function scaledRows(inputs, rows) {
+    const s = rows.length;
+    const d = inputs.length;
+    const flat = new Float64Array(s * d);
+    const v = new Float64Array(s);
+    for (let c = 0; c < d; c++) {
+        const col = inputs[c];
+        for (let a = 0; a < s; a++)
+            v[a] = col[rows[a]];
+        let mean = 0;
+        for (let a = 0; a < s; a++)
+            mean += v[a] / s;
+        let ss = 0;
+        for (let a = 0; a < s; a++)
+            ss += (v[a] - mean) * (v[a] - mean);
+        const sd = Math.sqrt(ss / s);
+        for (let a = 0; a < s; a++)
+            flat[a * d + c] = sd > 0 ? (v[a] - mean) / sd : 0;
+    }
+    return flat;
+}
+/** `perSegment` evenly spaced points strictly inside each segment between a row and its neighbour, one column per input. */
+function segmentPoints(inputs, pairs, perSegment) {
+    const d = inputs.length;
+    const segmentsCount = pairs.length / 2;
+    const m = segmentsCount * perSegment;
+    const columns = inputs.map(() => new Float64Array(m));
+    for (let c = 0; c < d; c++)
+        segmentsAlong(inputs[c], pairs, segmentsCount, perSegment, columns[c]);
+    return columns;
+}
+/** One input's points inside every segment (pairs[2q] to pairs[2q + 1]), `perSegment` each, into `out`. */
+function segmentsAlong(col, pairs, segmentsCount, perSegment, out) {
+    for (let q = 0; q < segmentsCount; q++) {
+        const from = col[pairs[2 * q]];
+        const to = col[pairs[2 * q + 1]];
+        for (let t = 1; t <= perSegment; t++)
+            out[q * perSegment + t - 1] = from + (t / (perSegment + 1)) * (to - from);
+    }
+}
+/**
+ * The coefficient-independent part of {@link measureSwing}: band, medians, grids and segments.
+ *
+ * @param design the model's design (only its inputs are read)
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param options grid sizes (see {@link SwingOptions})
+ */
+function planSwing(design, train, options = {}) {
+    const n = train.rows;
+    const d = design.inputs.length;
+    const [ylo, yhi] = (0,stats/* range */.y1)(train.y, n);
+    // One scratch buffer for every input: selection for the medians, then a typed sort for the grid.
+    const scratch = new Float64Array(n);
+    const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
+    const radixScratch = new Uint32Array(2 * n);
+    const grids = [];
+    const gridOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
+    for (let c = 0; c < d; c++) {
+        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
+        const sample = scratch.subarray(0, len);
+        const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
+        if (grid.inside.length > 0)
+            grids.push({ input: c, inside: grid.inside, beyond: grid.beyond });
+    }
+    // Several inputs: segments between sampled rows and their nearest neighbours.
+    let segments = null;
+    let segmentColumns = null;
+    if (d >= 2 && n >= 2) {
+        const maxRows = options.maxRows ?? 1000;
+        const kNear = options.neighbours ?? 3;
+        const perSegment = options.segmentPoints ?? 8;
+        const s = Math.min(n, maxRows);
+        const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
+        const flat = scaledRows(train.inputs, rows);
+        const kk = Math.min(kNear, s - 1);
+        const pairs = nearestPairs(flat, s, d, kk, rows);
+        if (pairs.length > 0 && perSegment > 0)
+            segmentColumns = segmentPoints(train.inputs, pairs, perSegment);
+        segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
+    }
+    return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+}
+/**
+ * Scores a {@link SwingPlan} under the fitted coefficients: the swing figures and curves.
+ *
+ * @param plan from {@link planSwing} on the same design and rows
+ * @param design the fitted design
+ * @param coefficients fitted coefficients (length p)
+ */
+function scoreSwing(plan, design, coefficients) {
+    const [ylo, yhi] = plan.band;
+    const { medians, maxCurvePoints } = plan;
+    let inside = 0;
+    let beyond = 0;
+    let insideCount = 0;
+    let beyondCount = 0;
+    let worstInside = null;
+    let worstBeyond = null;
+    const pointAt = (columns, i, prediction) => {
+        const inputs = {};
+        design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
+        return { inputs, prediction };
+    };
+    /** Scores points (predicted here unless their predictions are given); returns the predictions. */
+    const score = (columns, m, where, given) => {
+        const pred = given ?? (0,blocks/* predictRows */.tp)(design, { inputs: columns, rows: m }, coefficients);
+        if (m > 0) {
+            const index = worstExcursionIndex(pred, m, ylo, yhi);
+            const value = pointExcursion(pred[index], ylo, yhi);
+            if (where === 'inside') {
+                if (worstInside === null || value > inside) {
+                    inside = Math.max(inside, value);
+                    worstInside = pointAt(columns, index, pred[index]);
+                }
+            }
+            else if (worstBeyond === null || value > beyond) {
+                beyond = Math.max(beyond, value);
+                worstBeyond = pointAt(columns, index, pred[index]);
+            }
+        }
+        if (where === 'inside')
+            insideCount += m;
+        else
+            beyondCount += m;
+        return pred;
+    };
+    // Along each input, the others at their medians (one reused column of each median).
+    const constants = medians.map(() => new Float64Array(0));
+    const constant = (k, length) => {
+        if (constants[k].length < length)
+            constants[k] = new Float64Array(length).fill(medians[k]);
+        return constants[k].subarray(0, length);
+    };
+    const curves = [];
+    for (const grid of plan.grids) {
+        const c = grid.input;
+        const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
+        const predict = predictorAlong(design, coefficients, c, medians);
+        const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
+        const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+        // Curve for charts: all points ascending, thinned with the extremes kept.
+        const xs = new Float64Array(grid.inside.length + grid.beyond.length);
+        const ps = new Float64Array(xs.length);
+        mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
+        const [imin, imax] = extremeIndices(ps);
+        const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
+        const others = {};
+        design.inputs.forEach((name, k) => {
+            if (k !== c)
+                others[name] = medians[k];
+        });
+        curves.push({
+            input: design.inputs[c],
+            others,
+            range: [grid.inside[0], grid.inside[grid.inside.length - 1]],
+            x: keep.map((i) => xs[i]),
+            prediction: keep.map((i) => ps[i]),
+        });
+    }
+    if (plan.segmentColumns !== null)
+        score(plan.segmentColumns, plan.segmentColumns[0].length, 'inside');
+    const valid = ylo < yhi;
+    return {
+        inside: valid && insideCount > 0 ? inside : Number.NaN,
+        beyond: valid && beyondCount > 0 ? beyond : Number.NaN,
+        band: [ylo, yhi],
+        points: { inside: insideCount, beyond: beyondCount },
+        worstInside,
+        worstBeyond,
+        curves,
+        segments: plan.segments,
+        margin: plan.margin,
+    };
+}
+/**
+ * Measures swing between and beyond samples for a fitted model: {@link planSwing}, then
+ * {@link scoreSwing}.
+ *
+ * One input: a dense grid across the training range ({@link inputGrid}). Several inputs: (a) the
+ * same grid along each input with the other inputs at their training medians, and (b) points on
+ * the segments between each of up to `maxRows` sampled training rows (an even stride through the
+ * file) and its `neighbours` nearest sampled rows (Euclidean distance on inputs divided by their
+ * standard deviations). Margins are along each input. The figure is {@link excursion} against the
+ * band of training targets.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param options grid sizes (see {@link SwingOptions})
+ */
+function measureSwing(design, train, coefficients, options = {}) {
+    return scoreSwing(planSwing(design, train, options), design, coefficients);
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/analyses.ts
+
+
+
+
+/** One model's shared diagnostics, each computed on first use and kept. */
+class ModelAnalyses {
+    #inputs;
+    #folds;
+    #foldFactors;
+    #crossValidation;
+    #swing;
+    #leakage;
+    /**
+     * @param inputs the model's design, fit and rows
+     * @param known results of the run's own passes; default none
+     */
+    constructor(inputs, known = {}) {
+        this.#inputs = inputs;
+        this.#folds = known.folds;
+        this.#foldFactors = known.foldFactors;
+        this.#crossValidation = known.crossValidation ?? undefined;
+    }
+    /** The training rows' cross-validation folds (see {@link assignFolds}). */
+    folds() {
+        if (this.#folds === undefined) {
+            const { folds, foldOrder, seed } = this.#inputs.folds;
+            this.#folds = (0,diagnostics_folds/* assignFolds */.o)(this.#inputs.train.rows, folds, foldOrder, seed);
+        }
+        return this.#folds;
+    }
+    /** QR factors of each fold's training rows and of each fold's complement (one pass when not known). */
+    foldFactors() {
+        if (this.#foldFactors === undefined) {
+            const perFold = (0,cross_validation/* foldFactors */.Y6)(this.#inputs.design, this.#inputs.train, this.folds());
+            this.#foldFactors = { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
+        }
+        return this.#foldFactors;
+    }
+    /** k-fold, leave-one-out and GCV figures of the refit (see {@link crossValidate}). */
+    crossValidation() {
+        if (this.#crossValidation === undefined) {
+            const { perFold, complements } = this.foldFactors();
+            const { design, train, fit } = this.#inputs;
+            this.#crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, this.folds(), { factors: perFold, complements });
+        }
+        return this.#crossValidation;
+    }
+    /** Swing between and beyond the samples of the refit (see {@link measureSwing}). */
+    swing() {
+        this.#swing ??= measureSwing(this.#inputs.design, this.#inputs.train, this.#inputs.fit.coefficients);
+        return this.#swing;
+    }
+    /** Hold-out rows that repeat a training row (see {@link findLeakage}). */
+    leakage() {
+        this.#leakage ??= findLeakage(this.#inputs.train, this.#inputs.holdout);
+        return this.#leakage;
+    }
+}
+
+// EXTERNAL MODULE: ./src/result/result.ts
+var result = __nccwpck_require__(1628);
+;// CONCATENATED MODULE: ./src/run/base-comparison.ts
+/**
+ * A model's figures against the same model (by name) on the base commit of a pull request.
+ */
+
+/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
+function relativeChange(head, base) {
+    if (Number.isNaN(head) || Number.isNaN(base))
+        return null;
+    if (base === 0)
+        return head === 0 ? 0 : Infinity;
+    return (head - base) / Math.abs(base);
+}
+/** The `base` field of a model result: `new`, or the base figures and the changes. */
+function compareWithBase(metrics, baseline, commit) {
+    if (baseline === null) {
+        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
+    }
+    const b = baseline.metrics;
+    const headRmse = (0,result/* fromJsonNumber */.M)(metrics.holdout_rmse);
+    const headGap = (0,result/* fromJsonNumber */.M)(metrics.gap_ratio);
+    const baseRmse = b ? (0,result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
+    const baseGap = b ? (0,result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
+    const rmseChange = relativeChange(headRmse, baseRmse);
+    const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
+    return {
+        status: 'compared',
+        commit,
+        holdout_rmse: b ? b.holdout_rmse : null,
+        gap_ratio: b ? b.gap_ratio : null,
+        holdout_rmse_change: rmseChange === null ? null : (0,result/* jsonNumber */.qj)(rmseChange),
+        gap_ratio_change: gapChange === null ? null : (0,result/* jsonNumber */.qj)(gapChange),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/result/chart-types.ts
+/**
+ * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
+ */
 /** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
 const MAX_CHART_POINTS = 2000;
 /** Points of the evenly spaced grid along a curve. */
@@ -40031,6 +40732,14 @@ const CURVE_POINTS = 401;
 const CURVE_MARGIN = 0.1;
 /** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
 const CHART_DIGITS = 7;
+
+;// CONCATENATED MODULE: ./src/run/chart-data.ts
+
+
+
+
+
+
 /** Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. */
 function chartNumber(x) {
     return Number.isFinite(x) ? Number(x.toPrecision(CHART_DIGITS)) : null;
@@ -40201,7 +40910,7 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     const { design, tables, metrics, fit, descriptor } = model;
     const { train, holdout } = tables;
     const inputs = [...design.inputs];
-    const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
+    const medians = train.inputs.map((col) => columnMedian(col, train.rows));
     // One input: the curve over the scanned range with the band; several: partial curves.
     let fitCurve = null;
     const partials = [];
@@ -40253,6 +40962,109 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
         sweep: readSweep(checks),
         coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
     };
+}
+
+// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
+var regression_metrics = __nccwpck_require__(155);
+;// CONCATENATED MODULE: ./src/diagnostics/shipped.ts
+
+
+function measures(data, predictions) {
+    const sums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
+    return (0,regression_metrics/* errorMeasures */._I)(sums);
+}
+/**
+ * Scores shipped coefficients on the training and hold-out rows (one prediction pass each).
+ * @param shipped length design.p (the caller checks it)
+ * @param refit the refit's coefficients (length design.p)
+ */
+function scoreShipped(design, train, holdout, shipped, refit) {
+    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, shipped);
+    let diff = 0;
+    for (let j = 0; j < design.p; j++)
+        diff = Math.max(diff, Math.abs(shipped[j] - refit[j]));
+    return {
+        coefficients: shipped,
+        holdoutPredictions,
+        train: measures(train, (0,blocks/* predictRows */.tp)(design, train, shipped)),
+        holdout: measures(holdout, holdoutPredictions),
+        maxCoefficientDifference: diff,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/design/column-spread.ts
+/**
+ * Population standard deviations of the design columns, gathered block by block in the same
+ * pass that folds rows into the factor. Sums are taken about each column's first value, which
+ * keeps the subtraction well conditioned for columns with a large offset.
+ */
+
+/** Running sums per column. */
+class ColumnSpread {
+    p;
+    shift;
+    s1;
+    s2;
+    n = 0;
+    /** @param p number of columns */
+    constructor(p) {
+        this.p = p;
+        this.shift = new Float64Array(p);
+        this.s1 = new Float64Array(p);
+        this.s2 = new Float64Array(p);
+    }
+    /** Adds a column-major block of `m` rows. */
+    add(X, m) {
+        if (m === 0)
+            return;
+        for (let j = 0; j < this.p; j++) {
+            const base = j * m;
+            if (this.n === 0)
+                this.shift[j] = X[base];
+            const column = X.subarray(base, base + m);
+            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
+            this.s1[j] += (0,stats/* sumOfDeviations */.jZ)(column, m, this.shift[j]);
+            this.s2[j] += (0,stats/* sumOfSquaredDeviations */.Mq)(column, m, this.shift[j]);
+        }
+        this.n += m;
+    }
+    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
+    sd() {
+        const out = new Float64Array(this.p);
+        for (let j = 0; j < this.p; j++) {
+            const mean = this.s1[j] / this.n;
+            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
+        }
+        return out;
+    }
+}
+
+// EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
+var src_fit = __nccwpck_require__(2485);
+// EXTERNAL MODULE: ./src/kernels/wasm.ts + 1 modules
+var wasm = __nccwpck_require__(5087);
+;// CONCATENATED MODULE: ./src/kernels/index.ts
+/**
+ * The row kernels behind one facade: each function runs in WebAssembly where it is available and
+ * in JavaScript otherwise, with the same operations in the same order (the results are the same
+ * to the bit). Callers never ask which. The JavaScript is the reference the WebAssembly is tested
+ * against (test/kernels/).
+ */
+
+
+/**
+ * Index of the first of a[0..n) whose magnitude is not within ±max (NaN included), or -1.
+ * @param a values (length >= n)
+ */
+function firstBeyond(a, n, max) {
+    const kernels = (0,wasm/* wasmKernels */.FY)();
+    if (kernels !== null)
+        return (0,wasm/* firstBeyondIn */.b5)(kernels, a, n, max);
+    for (let i = 0; i < n; i++)
+        if (!(Math.abs(a[i]) <= max))
+            return i;
+    return -1;
 }
 
 // EXTERNAL MODULE: ./src/data/csv-rules.ts
@@ -40707,7 +41519,7 @@ function checkOptions(options) {
 async function table_checkSize(repo, path, maxBytes) {
     const size = await repo.size(path);
     if (size > maxBytes) {
-        throw new src_errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
+        throw new core_errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
     }
     return size;
 }
@@ -40752,26 +41564,9 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
     yield* generalChunks(open(), target, handedOut);
 }
 
-;// CONCATENATED MODULE: ./src/model/load-data.ts
+;// CONCATENATED MODULE: ./src/data/load-model-data.ts
 
 
-
-/**
- * Bytes of a model's training and hold-out files together (a file that cannot be read counts 0:
- * reading it reports the problem with its location).
- */
-async function dataBytes(repo, descriptor) {
-    let bytes = 0;
-    for (const path of [descriptor.data.train, descriptor.data.holdout]) {
-        try {
-            bytes += await repo.size(path);
-        }
-        catch {
-            // reported by readTable
-        }
-    }
-    return bytes;
-}
 /**
  * Reads the input columns (in `inputs` order) and the target of both files.
  * @throws InputError `target-as-input` when a term reads the target column,
@@ -40780,13 +41575,10 @@ async function dataBytes(repo, descriptor) {
 async function loadModelData(repo, descriptor, inputs, settings) {
     const { data } = descriptor;
     if (inputs.includes(data.target)) {
-        throw new src_errors/* InputError */.dz('target-as-input', `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
+        throw new core_errors/* InputError */.dz('target-as-input', `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
     }
     const columns = [...inputs, data.target];
     const maxBytes = settings.caps.maxFileBytes;
-    // Reading big files is big work: let the optimising compiler in before the first byte.
-    if ((await dataBytes(repo, descriptor)) > optimising_compiler/* SMALL_DATA_BYTES */.Bu)
-        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
     const load = async (path, line, key) => {
         let table;
         try {
@@ -40796,7 +41588,7 @@ async function loadModelData(repo, descriptor, inputs, settings) {
             throw withAsker(error, descriptor);
         }
         if (table.rows === 0) {
-            throw new src_errors/* InputError */.dz('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
+            throw new core_errors/* InputError */.dz('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
                 file: descriptor.file,
                 line,
                 key,
@@ -40822,21 +41614,19 @@ async function loadModelData(repo, descriptor, inputs, settings) {
  * that reads the column. Other errors pass unchanged.
  */
 function withAsker(error, descriptor) {
-    if (!(error instanceof src_errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+    if (!(error instanceof core_errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
         return error;
     const column = error.location.key;
     const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
     const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
     if (asker === null)
         return error;
-    return new src_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
+    return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
 }
 
-;// CONCATENATED MODULE: ./src/model/evaluate.ts
-/**
- * One model from descriptor to outcome: load its data, fix the terms, fold the training rows
- * into the factor, solve, score training and hold-out rows, run every check.
- */
+// EXTERNAL MODULE: ./src/design/terms/index.ts + 3 modules
+var design_terms = __nccwpck_require__(7482);
+;// CONCATENATED MODULE: ./src/run/plan.ts
 
 
 
@@ -40844,19 +41634,6 @@ function withAsker(error, descriptor) {
 
 
 
-
-
-
-
-
-
-
-
-
-
-
-/** Error code of a model that failed through a fault in fitgate rather than in its files. */
-const INTERNAL_ERROR = 'internal-error';
 /**
  * Largest number of design columns. The diagnostics take singular value decompositions of p x p
  * factors (several per model and fold when the design is rank deficient), whose cost grows with
@@ -40869,176 +41646,238 @@ const MAX_PARAMETERS = 200;
  */
 const MAX_MAGNITUDE = 1e140;
 /**
- * Loads, fits and scores one model (no checks).
- * @throws InputError for bad data, a constant target, or a design over the caps
+ * Plans one model.
+ * @throws InputError for bad data, a design over the caps, a target out of range or constant
  */
-async function fitModel(repo, descriptor, settings) {
+async function planModel(repo, descriptor, settings) {
     const inputs = [];
     for (const t of descriptor.terms)
-        for (const c of (0,basis/* termInputs */.Q)(t))
+        for (const c of (0,design_terms/* termInputs */.Q)(t))
             if (!inputs.includes(c))
                 inputs.push(c);
     const tables = await loadModelData(repo, descriptor, inputs, settings);
-    const { train, holdout } = tables;
+    const { train } = tables;
     const file = descriptor.file;
     // Fix term parameters from the training rows, then check the size before taking memory.
-    const terms = descriptor.terms.map((spec) => (0,basis/* createTerm */.P)(spec, tables.trainColumns, file));
+    const terms = descriptor.terms.map((spec) => (0,design_terms/* createTerm */.P)(spec, tables.trainColumns, file));
     const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
     const p = design.p;
     if (p > MAX_PARAMETERS) {
-        throw new src_errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
+        throw new core_errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
     }
     if (train.rows * p > settings.caps.maxCells) {
-        throw new src_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
+        throw new core_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
     }
     for (const data of [train, tables.holdout]) {
         const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
         if (i >= 0) {
-            throw new src_errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+            throw new core_errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
         }
     }
-    // Big work runs on optimised code (see optimising-compiler.ts); small work finishes sooner without.
-    const sweep = (0,complexity/* sweepTarget */.mb)(descriptor, design);
-    const swept = sweep === null ? null : design.terms[sweep.term]?.spec;
-    const refits = swept?.kind === 'polynomial' ? Math.min(swept.degree, 12) + 3 : swept?.kind === 'rbf' ? 7 : 0;
-    if ((0,optimising_compiler/* estimateWork */.KB)({ rows: train.rows, columns: p, inputs: design.inputs.length, refits }) > optimising_compiler/* SMALL_WORK */.ch)
-        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
     const targetStats = (0,stats/* meanAndSd */.ud)(train.y, train.rows);
     if (!(targetStats.sd > 0)) {
-        throw new src_errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+        throw new core_errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
-    // One pass over the training rows: each fold's rows into its own factor (the folds are known
-    // before the pass), column spreads alongside. The full factor is the merge of the fold factors.
     const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-    const builder = new cross_validation/* FoldFactorBuilder */.UN(p, folds);
-    const spread = new ColumnSpread(p);
+    return { descriptor, tables, design, folds, targetSd: targetStats.sd };
+}
+
+;// CONCATENATED MODULE: ./src/run/passes.ts
+/**
+ * The planned passes over a model's training rows, each building the design block by block
+ * (memory grows with p^2 and the block size, never with rows x p):
+ *
+ * 1. the fold pass: each fold's rows into its own QR factor (the full factor is their merge),
+ *    the design's range check and column spreads alongside;
+ * 2. the refinement pass, where one step of iterative refinement converges and gains digits;
+ * 3. the scoring pass: predictions, out-of-fold errors and leverages together.
+ */
+
+
+
+
+
+
+
+/**
+ * Pass 1: folds every training row into its fold's factor, merges them and solves.
+ * @throws InputError `design-overflow` when a design value is not within ±{@link MAX_MAGNITUDE}
+ */
+function foldPass(plan) {
+    const { design, tables, folds, descriptor } = plan;
+    const train = tables.train;
+    const builder = new cross_validation/* FoldFactorBuilder */.UN(design.p, folds);
+    const spread = new ColumnSpread(design.p);
     (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
-        checkFiniteBlock(design, train, descriptor, X, start, m);
+        checkRange(plan, X, start, m);
         builder.add(X, train.y, start, m);
         spread.add(X, m);
     });
-    const full = (0,cross_validation/* mergeFactors */.Z4)(builder.factors, p);
-    let fit = (0,src_fit/* fitFactor */.Ps)(full, { ridge: descriptor.fit.ridge, penalised: design.penalised });
-    // One step of iterative refinement from a further pass where it converges and gains digits
-    // (not for well-conditioned designs, whose QR solution is already accurate to about 1e-14).
-    if ((0,src_fit/* refinementApplies */.C4)(fit)) {
-        const pass = new src_fit/* RefinementPass */.rT(fit);
-        (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
-        fit = pass.finish();
-    }
-    // One scoring pass over the training rows: predictions, out-of-fold errors and leverages
-    // together (the checks read the cross-validation from the shared memo); then the hold-out rows.
+    const fit = (0,src_fit/* fitFactor */.Ps)((0,cross_validation/* mergeFactors */.Z4)(builder.factors, design.p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
     const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? (0,cross_validation/* complementFactors */.Zd)(builder.factors) : [] };
+    return { fit, foldFactors, columnSd: spread.sd() };
+}
+/**
+ * Pass 2: one step of iterative refinement where it applies (not for well-conditioned designs,
+ * whose QR solution is already accurate to about 1e-14); the fit unchanged otherwise.
+ */
+function refinePass(plan, fit) {
+    if (!(0,src_fit/* refinementApplies */.C4)(fit))
+        return fit;
+    const train = plan.tables.train;
+    const pass = new src_fit/* RefinementPass */.rT(fit);
+    (0,blocks/* forEachBlock */.aN)(plan.design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
+    return pass.finish();
+}
+/** Pass 3: training predictions with the cross-validation in one pass, then the hold-out rows. */
+function scoringPass(plan, fit, foldFactors) {
+    const { design, tables, folds } = plan;
+    const { train, holdout } = tables;
     let trainPredictions = new Float64Array(train.rows);
     let crossValidation;
     try {
         crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
     }
     catch {
-        // The cross-validation check will run it again and report why it could not be computed
-        // (as a check that throws does); the fit itself stands.
+        // The cross-validation check runs it again and reports why it could not be computed (as a
+        // check that throws does); the fit itself stands.
         crossValidation = null;
         trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
     }
-    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
-    const trainSums = (0,regression/* emptySums */.y3)();
-    (0,regression/* addErrors */.xB)(trainSums, train.y, trainPredictions, train.rows);
-    const holdoutSums = (0,regression/* emptySums */.y3)();
-    (0,regression/* addErrors */.xB)(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
-    const tr = (0,regression/* errorMeasures */._I)(trainSums);
-    const ho = (0,regression/* errorMeasures */._I)(holdoutSums);
-    // Coefficient sizes.
-    const columnSd = spread.sd();
-    let maxStd = Number.NaN;
-    let maxStdColumn = -1;
-    let maxAbs = 0;
-    for (let j = 0; j < p; j++) {
-        const w = Math.abs(fit.coefficients[j]);
-        if (w > maxAbs || Number.isNaN(w))
-            maxAbs = w;
-        if (!design.penalised[j])
-            continue;
-        const s = (w * columnSd[j]) / targetStats.sd;
-        if (maxStdColumn < 0 || s > maxStd) {
-            maxStd = s;
-            maxStdColumn = j;
-        }
-    }
-    const metrics = {
-        trainRmse: tr.rmse,
-        holdoutRmse: ho.rmse,
-        trainMae: tr.mae,
-        holdoutMae: ho.mae,
-        trainR2: tr.r2,
-        holdoutR2: ho.r2,
-        gapRatio: (0,regression/* gapRatio */.yr)(tr.rmse, ho.rmse),
-        paramsPerSample: p / train.rows,
-        maxStdCoefficient: maxStd,
-        maxStdCoefficientColumn: maxStdColumn,
-        maxAbsCoefficient: maxAbs,
-        columnSd,
-        targetSd: targetStats.sd,
-        targetRange: (0,stats/* range */.y1)(train.y, train.rows),
-    };
-    return { descriptor, design, fit, tables, metrics, trainPredictions, holdoutPredictions, folds, crossValidation, foldFactors };
-}
-/**
- * Index of the first of values[0..n) that is not within ±max (NaN included), or -1. A function of
- * its own so that fitModel is not optimised in the middle of this loop (see DEVELOPERS.md,
- * "Writing hot loops").
- */
-function firstBeyond(values, n, max) {
-    for (let i = 0; i < n; i++)
-        if (!(Math.abs(values[i]) <= max))
-            return i;
-    return -1;
+    return { trainPredictions, holdoutPredictions: (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients), crossValidation };
 }
 /**
  * InputError `design-overflow` when a block of the training design holds a value that is not a
  * finite number within ±{@link MAX_MAGNITUDE}: finite data can still overflow in a term (a huge
  * `shift` or `scale`, a high power of a large input), and sums of squares must stay finite.
  */
-function checkFiniteBlock(design, train, descriptor, X, start, m) {
-    // In WebAssembly where it is in use (fit/wasm-kernels.ts); the loop below then only runs to
-    // report a value that is out of range.
-    const kernels = (0,wasm_kernels/* wasmKernels */.FY)();
-    if (kernels !== null && (0,wasm_kernels/* firstBeyondIn */.b5)(kernels, X, design.p * m, MAX_MAGNITUDE) < 0)
+function checkRange(plan, X, start, m) {
+    const { design, descriptor } = plan;
+    const train = plan.tables.train;
+    const at = firstBeyond(X, design.p * m, MAX_MAGNITUDE);
+    if (at < 0)
         return;
+    const j = Math.floor(at / m);
+    const i = at % m;
+    let term = 0;
+    while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
+        term += 1;
+    const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
+    throw new core_errors/* InputError */.dz('design-overflow', `design column \`${design.columnNames[j]}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+}
+
+;// CONCATENATED MODULE: ./src/run/fit-model.ts
+
+
+
+
+
+
+/**
+ * Loads, fits and scores one model (no checks).
+ * @throws InputError for bad data, a constant target, a design over the caps, or shipped
+ *   coefficients of the wrong length
+ */
+async function fitModel(repo, descriptor, settings) {
+    const plan = await planModel(repo, descriptor, settings);
+    const { design, tables, folds } = plan;
+    const first = foldPass(plan);
+    const fit = refinePass(plan, first.fit);
+    const scored = scoringPass(plan, fit, first.foldFactors);
+    const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
+    return {
+        descriptor,
+        design,
+        fit,
+        tables,
+        metrics,
+        trainPredictions: scored.trainPredictions,
+        holdoutPredictions: scored.holdoutPredictions,
+        folds,
+        crossValidation: scored.crossValidation,
+        foldFactors: first.foldFactors,
+        shipped: shippedScore(descriptor, design, tables, fit),
+    };
+}
+/**
+ * The figures every check may read: training and hold-out RMSE, MAE and R^2, the gap ratio,
+ * parameters per row and coefficient sizes (|w_j| sd(phi_j) / sd(y) over penalised columns).
+ */
+function coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, holdoutPredictions) {
+    const { train, holdout } = tables;
+    const trainSums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(trainSums, train.y, trainPredictions, train.rows);
+    const holdoutSums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
+    const tr = (0,regression_metrics/* errorMeasures */._I)(trainSums);
+    const ho = (0,regression_metrics/* errorMeasures */._I)(holdoutSums);
+    let maxStd = Number.NaN;
+    let maxStdColumn = -1;
+    let maxAbs = 0;
     for (let j = 0; j < design.p; j++) {
-        const base = j * m;
-        for (let i = 0; i < m; i++) {
-            const v = X[base + i];
-            if (Math.abs(v) <= MAX_MAGNITUDE)
-                continue;
-            let term = 0;
-            while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
-                term += 1;
-            const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
-            throw new src_errors/* InputError */.dz('design-overflow', `design column \`${design.columnNames[j]}\` is ${v} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+        const w = Math.abs(fit.coefficients[j]);
+        if (w > maxAbs || Number.isNaN(w))
+            maxAbs = w;
+        if (!design.penalised[j])
+            continue;
+        const s = (w * columnSd[j]) / targetSd;
+        if (maxStdColumn < 0 || s > maxStd) {
+            maxStd = s;
+            maxStdColumn = j;
         }
     }
+    return {
+        trainRmse: tr.rmse,
+        holdoutRmse: ho.rmse,
+        trainMae: tr.mae,
+        holdoutMae: ho.mae,
+        trainR2: tr.r2,
+        holdoutR2: ho.r2,
+        gapRatio: (0,regression_metrics/* gapRatio */.yr)(tr.rmse, ho.rmse),
+        paramsPerSample: design.p / train.rows,
+        maxStdCoefficient: maxStd,
+        maxStdCoefficientColumn: maxStdColumn,
+        maxAbsCoefficient: maxAbs,
+        columnSd,
+        targetSd,
+        targetRange: (0,stats/* range */.y1)(train.y, train.rows),
+    };
 }
-/** Training and hold-out RMSE of the descriptor's shipped coefficients. */
-function scoreShipped(model) {
-    const { descriptor, design, tables, fit } = model;
+/**
+ * The shipped coefficients scored on the same rows, or null when the descriptor ships none.
+ * @throws InputError `coefficients-length` when their count is not the design's
+ */
+function shippedScore(descriptor, design, tables, fit) {
     const shipped = descriptor.coefficients;
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new src_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
-    const rmse = (data) => {
-        const sums = (0,regression/* emptySums */.y3)();
-        (0,regression/* addErrors */.xB)(sums, data.y, (0,blocks/* predictRows */.tp)(design, data, shipped), data.rows);
-        return (0,regression/* errorMeasures */._I)(sums).rmse;
-    };
-    let diff = 0;
-    for (let j = 0; j < design.p; j++)
-        diff = Math.max(diff, Math.abs(shipped[j] - fit.coefficients[j]));
+    return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+}
+
+;// CONCATENATED MODULE: ./src/run/evaluate.ts
+/**
+ * One model from descriptor to outcome: fit and score it (fit-model.ts), run every check of the
+ * registry against its limits, and build its part of the Result.
+ */
+
+
+
+
+
+
+
+
+/** The report's figures of the shipped coefficients, or null. */
+function shippedMetrics(shipped) {
+    if (shipped === null)
+        return null;
     return {
-        train_rmse: (0,result/* jsonNumber */.qj)(rmse(tables.train)),
-        holdout_rmse: (0,result/* jsonNumber */.qj)(rmse(tables.holdout)),
-        max_coefficient_difference: (0,result/* jsonNumber */.qj)(diff),
+        train_rmse: (0,result/* jsonNumber */.qj)(shipped.train.rmse),
+        holdout_rmse: (0,result/* jsonNumber */.qj)(shipped.holdout.rmse),
+        max_coefficient_difference: (0,result/* jsonNumber */.qj)(shipped.maxCoefficientDifference),
     };
 }
 /** Model metrics for the report. */
@@ -41062,87 +41901,25 @@ function reportMetrics(model) {
     };
 }
 /**
- * The outcome of a model that could not be checked. The message starts with the key path
- * (`` `terms[0].polynomial.degree`: ``) when the error has one, as {@link InputError.describe}
- * does, since the result keeps only the file and line of the location.
- */
-function errorResult(name, descriptor, error) {
-    const key = error.location.key;
-    return {
-        name,
-        descriptor,
-        verdict: 'error',
-        rows: { train: 0, holdout: 0 },
-        parameters: 0,
-        columns: [],
-        metrics: null,
-        coefficients: [],
-        shipped: null,
-        checks: [],
-        error: {
-            message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
-            file: error.location.file ?? null,
-            line: error.location.line ?? null,
-            code: error.code,
-        },
-    };
-}
-/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
-function relativeChange(head, base) {
-    if (Number.isNaN(head) || Number.isNaN(base))
-        return null;
-    if (base === 0)
-        return head === 0 ? 0 : Infinity;
-    return (head - base) / Math.abs(base);
-}
-/** The `base` field of a model result: `new`, or the base figures and the changes. */
-function compareWithBase(metrics, baseline, commit) {
-    if (baseline === null) {
-        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
-    }
-    const b = baseline.metrics;
-    const headRmse = (0,result/* fromJsonNumber */.M)(metrics.holdout_rmse);
-    const headGap = (0,result/* fromJsonNumber */.M)(metrics.gap_ratio);
-    const baseRmse = b ? (0,result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
-    const baseGap = b ? (0,result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
-    const rmseChange = relativeChange(headRmse, baseRmse);
-    const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
-    return {
-        status: 'compared',
-        commit,
-        holdout_rmse: b ? b.holdout_rmse : null,
-        gap_ratio: b ? b.gap_ratio : null,
-        holdout_rmse_change: rmseChange === null ? null : (0,result/* jsonNumber */.qj)(rmseChange),
-        gap_ratio_change: gapChange === null ? null : (0,result/* jsonNumber */.qj)(gapChange),
-    };
-}
-/**
  * Fits one model and runs every check on it. Input problems become a model with verdict
  * `error` (the run goes on); anything else is re-thrown.
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
  */
 async function evaluateModel(repo, descriptor, settings, base) {
     let model;
-    let shipped;
     try {
         model = await fitModel(repo, descriptor, settings);
-        shipped = scoreShipped(model);
     }
     catch (error) {
-        if (error instanceof src_errors/* InputError */.dz)
+        if (error instanceof core_errors/* InputError */.dz)
             return errorResult(descriptor.name, descriptor.file, error);
         // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
         // that every other model still gets its outcome; the code marks it as a bug to report.
         const detail = error instanceof Error ? error.message : String(error);
-        return errorResult(descriptor.name, descriptor.file, new src_errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
+        return errorResult(descriptor.name, descriptor.file, new core_errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
     }
-    // The pipeline's own passes already produced what the shared diagnostics would compute.
-    const memo = new Map([
-        [shared/* SHARED_FOLDS_KEY */.Tq, model.folds],
-        [shared/* SHARED_FOLD_FACTORS_KEY */.b9, model.foldFactors],
-    ]);
-    if (model.crossValidation !== null)
-        memo.set(shared/* SHARED_CROSS_VALIDATION_KEY */.X, model.crossValidation);
+    // The run's own passes already produced the folds, their factors and the cross-validation.
+    const analyses = new ModelAnalyses({ design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit }, { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation });
     const context = {
         descriptor,
         design: model.design,
@@ -41151,11 +41928,9 @@ async function evaluateModel(repo, descriptor, settings, base) {
         train: model.tables.train,
         holdout: model.tables.holdout,
         baseline: base?.models.get(descriptor.name) ?? null,
-        shared(key, compute) {
-            if (!memo.has(key))
-                memo.set(key, compute());
-            return memo.get(key);
-        },
+        analyses,
+        predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
+        shipped: model.shipped,
     };
     const metrics = reportMetrics(model);
     const checks = [];
@@ -41177,7 +41952,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
         columns: [...model.design.columnNames],
         metrics,
         coefficients: Array.from(model.fit.coefficients, result/* jsonNumber */.qj),
-        shipped,
+        shipped: shippedMetrics(model.shipped),
         checks,
         ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
         error: null,
@@ -41189,17 +41964,13 @@ async function evaluateModel(repo, descriptor, settings, base) {
     };
 }
 
-// EXTERNAL MODULE: external "node:url"
-var external_node_url_ = __nccwpck_require__(3136);
-// EXTERNAL MODULE: external "node:worker_threads"
-var external_node_worker_threads_ = __nccwpck_require__(5919);
 // EXTERNAL MODULE: ./src/repo/fs-repository.ts + 1 modules
 var fs_repository = __nccwpck_require__(8352);
-// EXTERNAL MODULE: ./src/parallel/pool.ts
-var pool = __nccwpck_require__(6093);
-// EXTERNAL MODULE: ./src/parallel/worker-role.ts
-var worker_role = __nccwpck_require__(9506);
-;// CONCATENATED MODULE: ./src/parallel/model-worker.ts
+// EXTERNAL MODULE: ./src/run/pool.ts
+var pool = __nccwpck_require__(2499);
+// EXTERNAL MODULE: ./src/run/worker-role.ts
+var worker_role = __nccwpck_require__(5280);
+;// CONCATENATED MODULE: ./src/run/model-worker.ts
 /**
  * Models on worker threads: the main thread sends each model's descriptor (with the settings
  * file and, when comparing with a base commit, that model's base outcome) as plain data; a
@@ -41269,18 +42040,17 @@ function startModelWorker() {
 if (isModelWorker())
     startModelWorker();
 
-// EXTERNAL MODULE: ./src/shard.ts
-var src_shard = __nccwpck_require__(7903);
-;// CONCATENATED MODULE: ./src/version.ts
+// EXTERNAL MODULE: ./src/run/shard.ts
+var run_shard = __nccwpck_require__(6941);
+;// CONCATENATED MODULE: ./src/core/version.ts
 /** fitgate's version, reported in every result. Kept in step with package.json by a test. */
 const VERSION = '0.1.0';
 
-;// CONCATENATED MODULE: ./src/pipeline.ts
+;// CONCATENATED MODULE: ./src/run/pipeline.ts
 /**
  * The whole run: settings file -> descriptors -> one outcome per model -> Result.
  * No output of its own: reporters format the Result; the entry points decide the exit status.
  */
-
 
 
 
@@ -41302,7 +42072,7 @@ const VERSION = '0.1.0';
 async function runPipeline(settings, repo, options = {}) {
     const file = await loadSettings(repo, settings.config, { explicit: settings.configExplicit });
     const shard = options.shard ?? null;
-    const paths = (0,src_shard/* selectShard */.Xm)(await discoverDescriptors(repo, file, settings.descriptors), shard);
+    const paths = (0,run_shard/* selectShard */.Xm)(await discoverDescriptors(repo, file, settings.descriptors), shard);
     const models = [];
     const loaded = [];
     for (const path of paths) {
@@ -41310,1033 +42080,155 @@ async function runPipeline(settings, repo, options = {}) {
             loaded.push(await loadDescriptor(repo, path, file));
         }
         catch (error) {
-            if (!(error instanceof src_errors/* InputError */.dz))
+            if (!(error instanceof core_errors/* InputError */.dz))
                 throw error;
             models.push(errorResult(path, path, error));
         }
     }
     checkUniqueNames(loaded);
-    // Several models reuse the same hot code: worth optimising (see optimising-compiler.ts).
-    if (loaded.length > 1)
-        (0,optimising_compiler/* allowOptimisingCompiler */.uV)();
     const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
     models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
     const notes = [...(options.notes ?? [])];
     if (shard)
-        notes.push(`shard ${(0,src_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+        notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
     return (0,result/* summarise */.fS)(models, VERSION, notes);
 }
 
 
 /***/ }),
 
-/***/ 8352:
+/***/ 2499:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  E: () => (/* binding */ createFsRepository)
-});
-
-;// CONCATENATED MODULE: external "node:fs"
-const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
-// EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __nccwpck_require__(6760);
-// EXTERNAL MODULE: ./src/errors.ts
-var errors = __nccwpck_require__(3916);
-// EXTERNAL MODULE: ./src/repo/repo-path.ts
-var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/repo/fs-repository.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   aJ: () => (/* binding */ serveTasks),
+/* harmony export */   kD: () => (/* binding */ runPool),
+/* harmony export */   yV: () => (/* binding */ defaultJobs)
+/* harmony export */ });
+/* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8161);
+/* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_os__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5919);
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
 /**
- * A {@link RepoReader} over a folder on disk (the working tree). Every path is checked
- * lexically (no absolute paths, no `..` above the root) and then through the file system
- * (the real path, with every symbolic link at any level followed, must stay inside the
- * root's real path) before anything is opened; the real path is what gets opened.
+ * A small pool of worker threads: runs a list of tasks on up to `jobs` workers and returns the
+ * results in the order of the tasks, whatever order they finish in. Tasks and results cross the
+ * thread boundary as plain data (structured clone), so they must be plain objects, arrays,
+ * strings, numbers, booleans, null and typed arrays.
  *
- * The file system calls are synchronous behind the asynchronous interface: a run reads its files
- * one after another (models run in parallel on worker threads, each with its own reader), and a
- * local call takes less time than its round trip through libuv's thread pool. A small model's
- * run makes a few dozen such calls; a 1 MiB piece of a big file is read in well under a
- * millisecond.
+ * The worker side calls {@link serveTasks} with the function that does one task. An
+ * {@link InputError} thrown there comes back as an InputError (code, message, location); any
+ * other error comes back as an Error with the worker's message and stack. The first error
+ * stops the pool (the other workers are terminated) and rejects the run.
  */
 
 
 
-
-/** Glob patterns never searched. */
-const IGNORED_GLOBS = ['**/node_modules/**', '**/.git/**'];
+/** The number of workers to use by default: the cores Node may use (os.availableParallelism()). */
+function defaultJobs() {
+    return Math.max(1, (0,node_os__WEBPACK_IMPORTED_MODULE_0__.availableParallelism)());
+}
+/** Turns a thrown value into plain data for the other thread. */
+function errorData(error) {
+    if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz) {
+        return { name: 'InputError', message: error.message, stack: error.stack, code: error.code, location: { ...error.location } };
+    }
+    if (error instanceof Error)
+        return { name: error.name, message: error.message, stack: error.stack };
+    return { name: 'Error', message: String(error) };
+}
+/** Turns plain error data back into an InputError or an Error. */
+function revive(data) {
+    if (data.name === 'InputError' && data.code !== undefined)
+        return new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(data.code, data.message, data.location ?? {});
+    const error = new Error(data.message);
+    error.name = data.name;
+    if (data.stack !== undefined)
+        error.stack = data.stack;
+    return error;
+}
 /**
- * RepoReader over a folder on disk. Every path is checked: absolute paths, `..` escapes and
- * symbolic links (at any level) whose real path is outside the root's real path are
- * InputError `path-outside`; nothing outside the root is ever opened (the real path is
- * checked before opening).
- *
- * @param root the repository folder (absolute, or relative to the working directory)
+ * Runs every task on a pool of worker threads.
+ * @param tasks plain-data tasks, each handed to one worker
+ * @param options number of workers, worker script and its data
+ * @returns one result per task, in task order
+ * @throws the first task error (InputErrors stay InputErrors), or an Error when a worker exits early
  */
-function createFsRepository(root) {
-    const rootAbsolute = external_node_path_.resolve(root);
-    let rootRealPromise = null;
-    const rootReal = () => {
-        rootRealPromise ??= realpath(rootAbsolute).catch((error) => {
-            rootRealPromise = null;
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
-        });
-        return rootRealPromise;
-    };
-    /** The real path of a normalised repository-relative path, or null when nothing is there. */
-    const realInside = async (rel, where, shown) => {
-        const base = await rootReal();
-        const full = rel === '' ? base : external_node_path_.join(base, ...rel.split('/'));
-        let real = null;
-        try {
-            real = await realpath(full);
-        }
-        catch (error) {
-            const code = codeOf(error);
-            if (code === 'ELOOP')
-                throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
-            if (code !== 'ENOENT' && code !== 'ENOTDIR')
-                throw error;
-        }
-        if (real === null) {
-            // Missing: still refuse when an existing folder on the way leads outside.
-            for (let parent = external_node_path_.dirname(full); parent.length >= base.length; parent = external_node_path_.dirname(parent)) {
-                try {
-                    const parentReal = await realpath(parent);
-                    if (!isInside(base, parentReal))
-                        throw outside(shown, where);
-                    break;
+function runPool(tasks, options) {
+    const size = Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length);
+    const results = new Array(tasks.length);
+    if (tasks.length === 0)
+        return Promise.resolve(results);
+    return new Promise((resolve, reject) => {
+        const workers = [];
+        let next = 0;
+        let done = 0;
+        let settled = false;
+        const stop = () => {
+            for (const w of workers)
+                void w.terminate();
+        };
+        const failWith = (error) => {
+            if (settled)
+                return;
+            settled = true;
+            stop();
+            reject(error);
+        };
+        const feed = (worker) => {
+            if (next >= tasks.length)
+                return;
+            const message = { index: next, task: tasks[next] };
+            next++;
+            worker.postMessage(message);
+        };
+        for (let w = 0; w < size; w++) {
+            const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.Worker(options.script, { workerData: options.workerData });
+            workers.push(worker);
+            worker.on('message', (reply) => {
+                if (settled)
+                    return;
+                if (!reply.ok)
+                    return failWith(revive(reply.error));
+                results[reply.index] = reply.value;
+                done++;
+                if (done === tasks.length) {
+                    settled = true;
+                    stop();
+                    resolve(results);
+                    return;
                 }
-                catch (error) {
-                    if (error instanceof errors/* InputError */.dz)
-                        throw error;
-                    if (parent === base)
-                        break;
-                }
-            }
-            return null;
-        }
-        if (!isInside(base, real))
-            throw outside(shown, where);
-        return real;
-    };
-    const check = async (path) => realInside((0,repo_path/* normaliseRepoPath */.Gn)(path), { file: path }, path);
-    const requireFile = async (path) => {
-        const real = await check(path);
-        if (real === null)
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
-        const info = await stat(real);
-        if (!info.isFile())
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `is not a regular file (a folder or device); expected a file`, { file: path });
-        return real;
-    };
-    return {
-        label: rootAbsolute,
-        async resolve(fromFile, target, where) {
-            const location = { file: fromFile, ...where };
-            const rel = (0,repo_path/* joinRepoPath */.Kp)(fromFile, target, location);
-            await realInside(rel, location, target);
-            return rel;
-        },
-        async isFile(path) {
-            const real = await check(path);
-            if (real === null)
-                return false;
-            return (await stat(real)).isFile();
-        },
-        async size(path) {
-            return (await stat(await requireFile(path))).size;
-        },
-        async read(path) {
-            return (0,external_node_fs_namespaceObject.readFileSync)(await requireFile(path));
-        },
-        async *stream(path, chunkBytes = 1024 * 1024) {
-            const real = await requireFile(path);
-            const fd = (0,external_node_fs_namespaceObject.openSync)(real, 'r');
-            try {
-                // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
-                // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
-                // so a reader may keep a previous one.
-                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,external_node_fs_namespaceObject.fstatSync)(fd).size + 1)));
-                for (;;) {
-                    const piece = Buffer.allocUnsafe(size);
-                    const n = (0,external_node_fs_namespaceObject.readSync)(fd, piece, 0, size, null);
-                    if (n === 0)
-                        return;
-                    yield n === size ? piece : piece.subarray(0, n);
-                }
-            }
-            finally {
-                (0,external_node_fs_namespaceObject.closeSync)(fd);
-            }
-        },
-        async glob(patterns) {
-            for (const pattern of patterns) {
-                const p = pattern.replace(/\\/g, '/');
-                if ((0,repo_path/* isAbsoluteLike */.tp)(pattern) || p === '..' || p.startsWith('../')) {
-                    throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-                }
-            }
-            if (patterns.length === 0)
-                return [];
-            // tinyglobby is loaded when a run globs (a run given its descriptors never does).
-            const { glob: tinyGlob } = await __nccwpck_require__.e(/* import() */ 382).then(__nccwpck_require__.bind(__nccwpck_require__, 3382));
-            const found = await tinyGlob(patterns, {
-                cwd: await rootReal(),
-                onlyFiles: true,
-                followSymbolicLinks: false,
-                dot: false,
-                ignore: IGNORED_GLOBS,
+                feed(worker);
             });
-            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,repo_path/* isIgnoredPath */.wY)(p)));
-            return [...paths].sort();
-        },
-    };
-}
-/** The real path (the system's realpath(3), as fs/promises uses), as a promise. */
-async function realpath(path) {
-    return external_node_fs_namespaceObject.realpathSync.native(path);
-}
-/** File information, as a promise. */
-async function stat(path) {
-    return (0,external_node_fs_namespaceObject.statSync)(path);
-}
-function isInside(base, real) {
-    const rel = external_node_path_.relative(base, real);
-    return rel === '' || (rel !== '..' && !rel.startsWith(`..${external_node_path_.sep}`) && !external_node_path_.isAbsolute(rel));
-}
-function outside(shown, where) {
-    return new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
-}
-function codeOf(error) {
-    return error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : undefined;
-}
-
-
-/***/ }),
-
-/***/ 3856:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   GY: () => (/* binding */ FILE_MISSING),
-/* harmony export */   Gn: () => (/* binding */ normaliseRepoPath),
-/* harmony export */   Kp: () => (/* binding */ joinRepoPath),
-/* harmony export */   oE: () => (/* binding */ PATH_OUTSIDE),
-/* harmony export */   tp: () => (/* binding */ isAbsoluteLike),
-/* harmony export */   wY: () => (/* binding */ isIgnoredPath)
-/* harmony export */ });
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3916);
-/**
- * Lexical handling of repository-relative paths shared by every {@link RepoReader}:
- * normalising, and refusing absolute paths and `..` escapes. Links are the disk reader's business.
- */
-
-
-/** Code of every refused path. */
-const PATH_OUTSIDE = 'path-outside';
-/** Code of a path that names no file. */
-const FILE_MISSING = 'file-missing';
-/** True for `/x`, `\\x`, `C:x` and `C:\x`: paths that do not start at the repository root. */
-function isAbsoluteLike(path) {
-    return path.startsWith('/') || path.startsWith('\\') || /^[A-Za-z]:/.test(path);
-}
-/**
- * Normalises a repository-relative path: `\` becomes `/`, `.` and `..` segments are
- * resolved, a leading `./` and trailing `/` are dropped; the root is `''`.
- *
- * @param path the path as given
- * @param location where to point an error (default: the path itself as the file)
- * @throws InputError `path-outside` for absolute paths and paths that climb above the root
- */
-function normaliseRepoPath(path, location) {
-    const where = location ?? { file: path };
-    if (path.includes('\u0000'))
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} contains a NUL character; expected a plain relative path`, where);
-    const slashed = path.replace(/\\/g, '/');
-    if (isAbsoluteLike(path)) {
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} is absolute; expected a path relative to the repository`, where);
-    }
-    let normal = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.normalize(slashed === '' ? '.' : slashed);
-    if (normal === '..' || normal.startsWith('../')) {
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} leaves the repository; expected a path inside it`, where);
-    }
-    if (normal === '.' || normal === './')
-        return '';
-    normal = normal.replace(/^\.\//, '').replace(/\/+$/, '');
-    return normal;
-}
-/**
- * Resolves `target` as written in `fromFile` (relative to its folder) lexically.
- *
- * @param fromFile repository-relative path of the file that names `target`
- * @param target the path as written
- * @param location where to point an error (the naming file, line and key)
- */
-function joinRepoPath(fromFile, target, location) {
-    if (isAbsoluteLike(target)) {
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(target)} is absolute; expected a path relative to ${fromFile}'s folder`, location);
-    }
-    const folder = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.dirname(normaliseRepoPath(fromFile));
-    const joined = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.join(folder, target.replace(/\\/g, '/'));
-    return normaliseRepoPath(joined, { ...location, file: location.file ?? fromFile });
-}
-/** True when a repository-relative path passes through `node_modules` or `.git`. */
-function isIgnoredPath(path) {
-    return path.split('/').some((segment) => segment === 'node_modules' || segment === '.git');
-}
-
-
-/***/ }),
-
-/***/ 856:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   MR: () => (/* binding */ formatAnnotations),
-/* harmony export */   _P: () => (/* binding */ escapeLogLine),
-/* harmony export */   cU: () => (/* binding */ inputErrorAnnotation),
-/* harmony export */   fE: () => (/* binding */ formatCommand)
-/* harmony export */ });
-/* unused harmony exports MAX_PER_LEVEL, escapeData, escapeProperty, workspacePath, collectAnnotations */
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
-/**
- * Workflow-command annotations: one error per failing check or unchecked model, one warning per
- * warning, at the descriptor line the check points at, most severe first, capped at what the
- * runner shows per step, then one notice counting the rest. The exact command lines are built
- * here (and only here) so that they can be tested byte for byte; text from the repository is
- * escaped so that it can never start a workflow command of its own.
- */
-
-/** The runner shows at most this many error and this many warning annotations per step. */
-const MAX_PER_LEVEL = 10;
-/**
- * Escapes a command's message as the toolkit does (`%`, CR, LF percent-encoded), so the text
- * stays on one line and cannot begin a command.
- */
-function escapeData(text) {
-    return text.replace(/%/g, '%25').replace(/\r/g, '%0D').replace(/\n/g, '%0A');
-}
-/** Escapes a command property value: as {@link escapeData} plus `:` and `,`. */
-function escapeProperty(text) {
-    return escapeData(text).replace(/:/g, '%3A').replace(/,/g, '%2C');
-}
-/**
- * Text for a plain log line: line breaks become spaces, and a line that would begin with `::`
- * (after leading white space, which the runner trims) starts with `» ` instead, so that it
- * cannot be read as a workflow command.
- */
-function escapeLogLine(text) {
-    const one = text.replace(/\r\n|\r|\n/g, ' ');
-    return one.trimStart().startsWith('::') ? `» ${one}` : one;
-}
-/**
- * One workflow command line (without the line break), e.g.
- * `::error file=models/a.model.yml,line=12,title=…::message`.
- */
-function formatCommand(a) {
-    const props = [];
-    if (a.file !== undefined && a.file !== '')
-        props.push(`file=${escapeProperty(a.file)}`);
-    if (a.line !== undefined && a.line > 0)
-        props.push(`line=${a.line}`);
-    if (a.title !== undefined && a.title !== '')
-        props.push(`title=${escapeProperty(a.title)}`);
-    return `::${a.level}${props.length > 0 ? ` ${props.join(',')}` : ''}::${escapeData(a.message)}`;
-}
-/** Joins the fitgate root's prefix and a root-relative path. */
-function workspacePath(prefix, file) {
-    return prefix === '' || prefix === '.' ? file : node_path__WEBPACK_IMPORTED_MODULE_0___default().posix.join(prefix, file);
-}
-/** Every finding of one model as an annotation, in check order. */
-function modelFindings(m, prefix) {
-    if (m.error) {
-        return [
-            {
-                level: 'error',
-                file: workspacePath(prefix, m.error.file ?? m.descriptor),
-                ...(m.error.line !== null ? { line: m.error.line } : {}),
-                title: `fitgate could not check ${m.name}`,
-                message: m.error.message,
-            },
-        ];
-    }
-    const found = [];
-    for (const c of m.checks) {
-        if (c.status !== 'fail' && c.status !== 'warn')
-            continue;
-        found.push({
-            level: c.status === 'fail' ? 'error' : 'warning',
-            file: workspacePath(prefix, m.descriptor),
-            line: c.line,
-            title: `fitgate ${c.id} (${m.name})`,
-            message: c.advice ? `${c.message}. ${c.advice}` : c.message,
-        });
-    }
-    return found;
-}
-/**
- * The annotations of a run: errors first, then warnings (each in report order), at most
- * `maxPerLevel` of each, then one notice counting those left out, then one notice per run note.
- * @param result the run's Result
- * @param options root prefix and cap; defaults in {@link AnnotationOptions}
- */
-function collectAnnotations(result, options = {}) {
-    const prefix = options.prefix ?? '';
-    const max = options.maxPerLevel ?? MAX_PER_LEVEL;
-    const all = result.models.flatMap((m) => modelFindings(m, prefix));
-    const errors = all.filter((a) => a.level === 'error');
-    const warnings = all.filter((a) => a.level === 'warning');
-    const out = [...errors.slice(0, max), ...warnings.slice(0, max)];
-    const leftErrors = Math.max(0, errors.length - max);
-    const leftWarnings = Math.max(0, warnings.length - max);
-    if (leftErrors + leftWarnings > 0) {
-        out.push({
-            level: 'notice',
-            title: 'fitgate',
-            message: `${leftErrors + leftWarnings} more findings are not annotated (${leftErrors} errors, ${leftWarnings} warnings; the runner shows ${max} of each per step). The job summary lists every model.`,
-        });
-    }
-    for (const note of result.notes)
-        out.push({ level: 'notice', title: 'fitgate', message: note });
-    return out;
-}
-/**
- * The annotation for a run that could not be done: an error at the file and line of the
- * problem when known.
- * @param error the problem
- * @param prefix the fitgate root's place in the workspace; default `''`
- */
-function inputErrorAnnotation(error, prefix = '') {
-    const { file, line } = error.location;
-    return {
-        level: 'error',
-        ...(file !== undefined ? { file: workspacePath(prefix, file) } : {}),
-        ...(file !== undefined && line !== undefined ? { line } : {}),
-        title: 'fitgate could not run',
-        message: error.location.key !== undefined ? `\`${error.location.key}\`: ${error.message}` : error.message,
-    };
-}
-/** The command lines of a run's annotations, each ending with a line break. */
-function formatAnnotations(result, options = {}) {
-    return collectAnnotations(result, options)
-        .map((a) => `${formatCommand(a)}\n`)
-        .join('');
-}
-
-
-/***/ }),
-
-/***/ 6412:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   FV: () => (/* binding */ escapeMarkdown),
-/* harmony export */   Fw: () => (/* binding */ escapeMermaid),
-/* harmony export */   X: () => (/* binding */ escapeXml),
-/* harmony export */   ZD: () => (/* binding */ escapeHtml),
-/* harmony export */   en: () => (/* binding */ escapeTerminal)
-/* harmony export */ });
-/**
- * Escaping of text that comes from the repository (model names, column names, messages) for
- * each medium it reaches. One helper per medium, tested byte for byte.
- */
-/** HTML text and attribute values: & < > " ' become entities. */
-function escapeHtml(text) {
-    return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]);
-}
-/**
- * Markdown inline text (GitHub-flavoured, inside table cells too): line breaks become spaces;
- * `&`, `<` and `>` become entities (no HTML, no hidden comments); the characters that start
- * inline Markdown syntax or end a table cell (`\`, backtick, `*`, `_`, `[`, `]`, `|`, `~`) are
- * backslash-escaped; `@` is followed by a zero-width space so that names never mention anyone.
- * Text is always placed mid-line, so block syntax (`#`, `-`, `>` at a line start) cannot start.
- */
-function escapeMarkdown(text) {
-    return text
-        .replace(/\r?\n|\r/g, ' ')
-        .replace(/[&<>]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[c])
-        .replace(/([\\`*_[\]|~])/g, '\\$1')
-        .replace(/@/g, '@\u200b');
-}
-/**
- * Text for a terminal: control characters (including ESC, which starts colour codes and
- * cursor moves) are shown as `\u001b` style escapes; line breaks become spaces.
- */
-function escapeTerminal(text) {
-    return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
-}
-/**
- * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; characters XML 1.0 does
- * not allow (C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, lone
- * surrogates) become U+FFFD.
- */
-function escapeXml(text) {
-    return text
-        .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, '\ufffd')
-        .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]);
-}
-/**
- * Text inside a double-quoted Mermaid string (chart titles, axis labels): line breaks and other
- * control characters become spaces; `"` becomes `'`; `<` and `>` become `‹` and `›` (Mermaid
- * passes labels through an HTML sanitiser); `#` becomes the full-width `＃` (Mermaid reads
- * `#name;` as an entity code); a backtick becomes `'` so that the text cannot close a
- * Markdown code fence.
- */
-function escapeMermaid(text) {
-    return text
-        .replace(/[\u0000-\u001f\u007f-\u009f]+/g, ' ')
-        .replace(/["`]/g, "'")
-        .replace(/</g, '‹')
-        .replace(/>/g, '›')
-        .replace(/#/g, '＃');
-}
-
-
-/***/ }),
-
-/***/ 5596:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  JO: () => (/* binding */ COMMENT_MARKER),
-  jw: () => (/* binding */ formatComment),
-  kq: () => (/* binding */ formatSummary)
-});
-
-// UNUSED EXPORTS: COMMENT_MAX_BYTES, SUMMARY_MAX_BYTES
-
-// EXTERNAL MODULE: ./src/format.ts
-var format = __nccwpck_require__(6264);
-// EXTERNAL MODULE: ./src/report/escape.ts
-var report_escape = __nccwpck_require__(6412);
-// EXTERNAL MODULE: ./src/report/svg/units.ts
-var units = __nccwpck_require__(3332);
-;// CONCATENATED MODULE: ./src/report/mermaid.ts
-/**
- * A small Mermaid `xychart-beta` chart per model for the Markdown summary and pull-request
- * comment, where GitHub renders Mermaid but strips inline SVG and data-URI images. The chart is
- * drawn from the pipeline's chart data; xychart-beta has lines and bars only (no scatter), so:
- * a model of one input shows its fitted curve with the observed target band as two flat lines;
- * otherwise the cross-validated error over the complexity sweep when there is one; otherwise
- * the standardised coefficient sizes as bars with the fail limit as a line.
- */
-
-
-
-/** A number for a Mermaid series: 4 significant digits, plain decimal notation. */
-function value(v) {
-    const r = Number(v.toPrecision(4));
-    return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r)))))) : String(r);
-}
-/** Indices of at most `max` evenly spaced entries of a list of `n`, first and last kept. */
-function evenly(n, max) {
-    if (n <= max)
-        return Array.from({ length: n }, (_, i) => i);
-    return Array.from({ length: max }, (_, t) => Math.round((t * (n - 1)) / (max - 1)));
-}
-function fence(lines) {
-    return ['```mermaid', 'xychart-beta', ...lines.map((l) => `  ${l}`), '```', ''].join('\n');
-}
-function curveChart(name, chart, max) {
-    const fit = chart.fit;
-    if (!fit || fit.x.length < 2)
-        return null;
-    const [lo, hi] = fit.band;
-    const span = hi - lo;
-    // Values far outside the band would flatten the picture: clip them to one band width past it, and say so.
-    const top = hi + span;
-    const bottom = lo - span;
-    const picks = evenly(fit.x.length, max);
-    let clipped = false;
-    const ys = [];
-    for (const i of picks) {
-        let y = fit.y[i];
-        if (y === null) {
-            y = top;
-            clipped = true;
+            worker.on('error', (error) => failWith(error instanceof Error ? error : new Error(String(error))));
+            worker.on('exit', (code) => {
+                if (!settled)
+                    failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
+            });
+            feed(worker);
         }
-        else if (y > top || y < bottom) {
-            y = Math.min(top, Math.max(bottom, y));
-            clipped = true;
-        }
-        ys.push(value(y));
-    }
-    const title = `${name}: fitted ${chart.target}, band ${(0,format/* formatNumber */.Z)(lo)} to ${(0,format/* formatNumber */.Z)(hi)}${clipped ? ' (clipped)' : ''}`;
-    return fence([
-        `title "${(0,report_escape/* escapeMermaid */.Fw)(title)}"`,
-        `x-axis "${(0,report_escape/* escapeMermaid */.Fw)((0,units/* axisLabel */.M)(fit.input))}" ${value(fit.x[0])} --> ${value(fit.x[fit.x.length - 1])}`,
-        `y-axis "${(0,report_escape/* escapeMermaid */.Fw)((0,units/* axisLabel */.M)(chart.target))}" ${value(bottom)} --> ${value(top)}`,
-        `line [${ys.join(', ')}]`,
-        `line [${picks.map(() => value(hi)).join(', ')}]`,
-        `line [${picks.map(() => value(lo)).join(', ')}]`,
-    ]);
-}
-function sweepChart(name, chart, max) {
-    const sweep = chart.sweep;
-    if (!sweep)
-        return null;
-    const picks = evenly(sweep.settings.length, max).filter((i) => sweep.cv[i] !== null);
-    if (picks.length < 2)
-        return null;
-    const cv = picks.map((i) => sweep.cv[i]);
-    const title = `${name}: cross-validated RMSE over ${sweep.parameter}${sweep.chosen !== null ? `, chosen ${(0,format/* formatNumber */.Z)(sweep.chosen)}` : ''}${sweep.suggested !== null ? `, suggested ${(0,format/* formatNumber */.Z)(sweep.suggested)}` : ''}`;
-    const categories = picks.map((i) => `"${(0,report_escape/* escapeMermaid */.Fw)((0,format/* formatNumber */.Z)(sweep.settings[i]))}"`);
-    return fence([
-        `title "${(0,report_escape/* escapeMermaid */.Fw)(title)}"`,
-        `x-axis "${(0,report_escape/* escapeMermaid */.Fw)(sweep.parameter)}" [${categories.join(', ')}]`,
-        `y-axis "cross-validated RMSE"`,
-        `line [${cv.map(value).join(', ')}]`,
-    ]);
-}
-function coefficientChart(name, chart, max) {
-    const coef = chart.coefficients;
-    const entries = coef.columns.map((c, j) => ({ c, v: coef.values[j] })).filter((e) => e.v !== null);
-    if (entries.length === 0)
-        return null;
-    const shown = entries.length <= max ? entries : [...entries].sort((a, b) => Math.abs(b.v) - Math.abs(a.v)).slice(0, max);
-    const bars = shown.map((e) => value(Math.abs(e.v)));
-    const lines = [
-        `title "${(0,report_escape/* escapeMermaid */.Fw)(`${name}: standardised coefficient sizes${coef.limit !== null ? `, fail limit ${(0,format/* formatNumber */.Z)(coef.limit)}` : ''}`)}"`,
-        `x-axis [${shown.map((e) => `"${(0,report_escape/* escapeMermaid */.Fw)(e.c)}"`).join(', ')}]`,
-        `y-axis "|standardised coefficient|"`,
-        `bar [${bars.join(', ')}]`,
-    ];
-    if (coef.limit !== null)
-        lines.push(`line [${shown.map(() => value(coef.limit)).join(', ')}]`);
-    return fence(lines);
+    });
 }
 /**
- * A fenced Mermaid chart for one model (for `report/markdown.ts`: put it after the model's check
- * table), or null when the model has no chart data.
- * @param model a model's outcome (reads `charts`)
- * @param options series length; defaults in {@link MermaidOptions}
- * @returns "```mermaid ... ```\n" text
+ * The worker side: answers every task the pool sends with `handle(task)`. Call once, at the top
+ * level of the worker script. Does nothing on the main thread.
+ * @param handle does one task; its value (or error) goes back to the pool
  */
-function mermaidChart(model, options = {}) {
-    const chart = model.charts;
-    if (!chart)
-        return null;
-    const max = options.maxValues ?? 40;
-    return curveChart(model.name, chart, max) ?? sweepChart(model.name, chart, max) ?? coefficientChart(model.name, chart, max);
-}
-
-// EXTERNAL MODULE: ./src/result.ts
-var result = __nccwpck_require__(1666);
-// EXTERNAL MODULE: ./src/report/wording.ts
-var wording = __nccwpck_require__(5594);
-;// CONCATENATED MODULE: ./src/report/markdown.ts
-/**
- * The Markdown report: the job summary, the pull-request comment and `--format markdown`.
- * One verdict line, a table of every model, then for each model that did not pass each check's
- * figure against its limit with one sentence on what to change. Built as a string; the caller
- * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
- * readable length; the whole report stays under `maxBytes`.
- */
-
-
-
-
-
-/** Default size cap: under GitHub's job-summary limit of 1 MiB (1,048,576 bytes). */
-const DEFAULT_MAX_BYTES = 1_000_000;
-/** Longest piece of repository text (a name, a message) shown, in characters. */
-const MAX_TEXT = 300;
-/** Bytes kept free for the closing note when cutting. */
-const NOTE_RESERVE = 400;
-const MARK = { pass: 'pass', warn: 'WARN', fail: 'FAIL', error: 'ERROR', skipped: 'skipped' };
-/** Repository text for Markdown: cut to {@link MAX_TEXT} characters, then escaped. */
-function markdown_text(s) {
-    const chars = [...s];
-    return (0,report_escape/* escapeMarkdown */.FV)(chars.length > MAX_TEXT ? `${chars.slice(0, MAX_TEXT - 1).join('')}…` : s);
-}
-function cell(v) {
-    if (typeof v === 'number' || typeof v === 'string')
-        return (0,format/* formatNumber */.Z)((0,result/* fromJsonNumber */.M)(v));
-    return '–';
-}
-function signed(x, suffix = '') {
-    if (Number.isNaN(x))
-        return 'NaN';
-    if (x === 0)
-        return `0${suffix}`;
-    return `${x > 0 ? '+' : ''}${(0,format/* formatNumber */.Z)(x)}${suffix}`;
-}
-/** The verdict in one line. */
-function verdictLine(result) {
-    const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : (0,wording/* verdictHeadline */.ge)(result);
-    return `**${MARK[result.verdict]}**: ${head} (${(0,wording/* countsText */.WN)(result.counts)})`;
-}
-/** The "against base" cell of a model: `new`, the changes, or `–`. */
-function baseCell(m) {
-    const b = m.base;
-    if (!b)
-        return '–';
-    if (b.status === 'new')
-        return 'new';
-    const rmse = b.holdout_rmse_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_rmse_change);
-    const gap = b.gap_ratio_change === null ? null : (0,result/* fromJsonNumber */.M)(b.gap_ratio_change);
-    if (rmse === null && gap === null)
-        return 'base not checked';
-    const parts = [];
-    if (rmse !== null)
-        parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
-    if (gap !== null)
-        parts.push(`gap ${signed(gap)}`);
-    return parts.join(', ');
-}
-/** Table header (and separator) of the model overview. */
-function overviewHead(withBase) {
-    return [
-        `| Status | Model | Hold-out RMSE | Gap ratio | Params / row | Largest std. coef. |${withBase ? ' Against base |' : ''}`,
-        `| --- | --- | ---: | ---: | ---: | ---: |${withBase ? ' --- |' : ''}`,
-    ];
-}
-/** One row of the model overview. */
-function overviewRow(m, withBase) {
-    const x = m.metrics;
-    return `| ${MARK[m.verdict]} | ${markdown_text(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
-}
-/** The block of one model that did not pass. */
-function modelDetail(m) {
-    const lines = [`### ${MARK[m.verdict]}: ${markdown_text(m.name)}`, '', `Descriptor: ${markdown_text(m.descriptor)}`, ''];
-    if (m.error) {
-        const where = m.error.file ? `${markdown_text(m.error.file)}${m.error.line ? ` line ${m.error.line}` : ''}: ` : '';
-        lines.push(`Could not be checked. ${where}${markdown_text(m.error.message)}`, '');
-        return lines;
-    }
-    const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
-    lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
-    for (const c of shown)
-        lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);
-    lines.push('');
-    for (const c of shown)
-        lines.push(`- **${c.id}**: ${markdown_text(c.message)}. ${markdown_text(c.advice)}`);
-    lines.push('');
-    const chart = mermaidChart(m);
-    if (chart !== null)
-        lines.push(chart);
-    return lines;
-}
-function bytes(s) {
-    return Buffer.byteLength(s, 'utf8');
-}
-/**
- * Formats the Result as Markdown, at most `maxBytes` UTF-8 bytes. When the report would be
- * larger, table rows and then model blocks are left out (the table first keeps every model
- * that did not pass) and a closing note says how many.
- * @param result the run's Result
- * @param options title, size cap and preamble; defaults in {@link MarkdownOptions}
- */
-function formatMarkdown(result, options = {}) {
-    const maxBytes = options.maxBytes ?? DEFAULT_MAX_BYTES;
-    const budget = maxBytes - NOTE_RESERVE;
-    const withBase = result.models.some((m) => m.base !== undefined);
-    const head = [...(options.preamble ?? []), `## ${markdown_text(options.title ?? 'fitgate')}`, '', verdictLine(result), ''];
-    for (const n of result.notes)
-        head.push(`> ${markdown_text(n)}`, '');
-    let out = `${head.join('\n')}\n`;
-    const notPassing = result.models.filter((m) => m.verdict !== 'pass');
-    const blocks = notPassing.map((m) => `\n${modelDetail(m).join('\n')}`);
-    const detailBytes = blocks.reduce((sum, b) => sum + bytes(b), 0);
-    // The table: when it must be cut it keeps the models that did not pass first, and takes at
-    // least half of what is left, the rest going to the details of those models.
-    const cuts = [];
-    if (result.models.length > 0) {
-        const tableHead = `${overviewHead(withBase).join('\n')}\n`;
-        const rows = result.models.map((m) => `${overviewRow(m, withBase)}\n`);
-        const left = budget - bytes(out);
-        const tableBudget = bytes(out) + Math.max(left / 2, left - detailBytes);
-        let size = bytes(out) + bytes(tableHead);
-        const keep = new Set();
-        const order = result.models.map((_, i) => i).sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
-        for (const i of order) {
-            if (size + bytes(rows[i]) > tableBudget)
-                break;
-            keep.add(i);
-            size += bytes(rows[i]);
-        }
-        out += tableHead + result.models.map((_, i) => (keep.has(i) ? rows[i] : '')).join('');
-        if (keep.size < result.models.length)
-            cuts.push(`${result.models.length - keep.size} of ${result.models.length} table rows`);
-    }
-    // One block per model that did not pass.
-    let shown = 0;
-    let size = bytes(out);
-    for (const block of blocks) {
-        const b = bytes(block);
-        if (size + b > budget)
-            break;
-        out += block;
-        size += b;
-        shown += 1;
-    }
-    if (shown < notPassing.length)
-        cuts.push(`${notPassing.length - shown} of ${notPassing.length} model details`);
-    if (cuts.length > 0) {
-        out += `\n_Cut to stay under the size limit: ${cuts.join(' and ')} left out. Run \`fitgate check\` or read the JSON report for all of them._\n`;
-    }
-    return out;
-}
-
-;// CONCATENATED MODULE: ./src/report/summary.ts
-
-/** Size cap of the job summary in UTF-8 bytes: under GitHub's 1 MiB (1,048,576 bytes) per step. */
-const SUMMARY_MAX_BYTES = 1_000_000;
-/** Size cap of the comment in UTF-8 bytes: under GitHub's 65,536 characters per comment body. */
-const COMMENT_MAX_BYTES = 60_000;
-/** The hidden HTML comment that marks fitgate's pull-request comment. */
-const COMMENT_MARKER = '<!-- fitgate-report -->';
-/** The job summary's Markdown. */
-function formatSummary(result) {
-    return formatMarkdown(result, { maxBytes: SUMMARY_MAX_BYTES });
-}
-/** The pull-request comment's Markdown: the marker line, then the same report as the summary, cut to fit a comment. */
-function formatComment(result) {
-    return formatMarkdown(result, { maxBytes: COMMENT_MAX_BYTES, preamble: [COMMENT_MARKER] });
+function serveTasks(handle) {
+    if (node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.isMainThread || node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort === null)
+        return;
+    const port = node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort;
+    port.on('message', (message) => {
+        Promise.resolve()
+            .then(() => handle(message.task))
+            .then((value) => port.postMessage({ index: message.index, ok: true, value }), (error) => port.postMessage({ index: message.index, ok: false, error: errorData(error) }));
+    });
 }
 
 
 /***/ }),
 
-/***/ 3332:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   M: () => (/* binding */ axisLabel)
-/* harmony export */ });
-/* unused harmony export unitOf */
-/**
- * Axis labels from column names: a trailing unit suffix (`_m`, `_kg`, `_c`, `_pct`, ...) is shown
- * as a unit in brackets after the name, e.g. `depth_m` -> `depth_m (m)`, `exit_temp_c` ->
- * `exit_temp_c (°C)`. Names without a known suffix stay as they are. The name is kept whole so
- * that readers find the column they know.
- */
-/** Unit suffixes (lower case, after the last `_`) and how they are shown. Common practice in data files. */
-const UNITS = {
-    mm: 'mm', cm: 'cm', m: 'm', km: 'km', in: 'in', ft: 'ft',
-    mg: 'mg', g: 'g', kg: 'kg', t: 't', lb: 'lb',
-    ml: 'mL', l: 'L', m3: 'm³',
-    ms: 'ms', s: 's', sec: 's', min: 'min', h: 'h', hr: 'h', hours: 'h', days: 'days', d: 'd',
-    c: '°C', degc: '°C', f: '°F', degf: '°F', k: 'K',
-    pct: '%', percent: '%', ppm: 'ppm', ppb: 'ppb',
-    pa: 'Pa', kpa: 'kPa', mpa: 'MPa', bar: 'bar', psi: 'psi',
-    w: 'W', kw: 'kW', mw: 'MW', kwh: 'kWh', wh: 'Wh', j: 'J', kj: 'kJ',
-    v: 'V', a: 'A', hz: 'Hz', rpm: 'rpm',
-    usd: 'USD', eur: 'EUR', gbp: 'GBP',
-    mps: 'm/s', kmh: 'km/h', lpm: 'L/min',
-};
-/** The unit a column name ends in (`depth_m` -> `m`), or null. */
-function unitOf(column) {
-    const i = column.lastIndexOf('_');
-    if (i <= 0 || i === column.length - 1)
-        return null;
-    return UNITS[column.slice(i + 1).toLowerCase()] ?? null;
-}
-/** Axis label of a column: the name, then its unit in brackets when the name ends in one (plain text, not escaped). */
-function axisLabel(column) {
-    const unit = unitOf(column);
-    return unit ? `${column} (${unit})` : column;
-}
-
-
-/***/ }),
-
-/***/ 5655:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   v: () => (/* binding */ formatText)
-/* harmony export */ });
-/* harmony import */ var _result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1666);
-/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6264);
-/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6412);
-/**
- * The terminal report: one aligned table of every model, then one block per model that did not
- * pass, with each check's figure against its limit and the descriptor line to change.
- */
-
-
-
-const COLOURS = { pass: '32', warn: '33', fail: '31', error: '35', skipped: '2' };
-function paint(text, status, color) {
-    return color ? `\u001b[${COLOURS[status]}m${text}\u001b[0m` : text;
-}
-function table(rows, rightAligned) {
-    const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => [...r[j]].length)));
-    return rows.map((r) => r
-        .map((cell, j) => {
-        const pad = ' '.repeat(widths[j] - [...cell].length);
-        return rightAligned[j] ? pad + cell : cell + pad;
-    })
-        .join('  ')
-        .trimEnd());
-}
-function metric(m, key) {
-    const v = m.metrics?.[key];
-    return typeof v === 'number' || typeof v === 'string' ? (0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
-}
-function checkLine(model, c, color) {
-    const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
-    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.message)}`;
-    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.advice)}` : text;
-}
-/** Formats the Result for a terminal. */
-function formatText(result, options = {}) {
-    const color = options.color ?? false;
-    const out = [];
-    const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
-    const rows = result.models.map((m) => [
-        m.verdict,
-        (0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name),
-        metric(m, 'holdout_rmse'),
-        metric(m, 'gap_ratio'),
-        metric(m, 'params_per_sample'),
-        metric(m, 'max_std_coefficient'),
-    ]);
-    if (rows.length > 0) {
-        const lines = table([header, ...rows], [false, false, true, true, true, true]);
-        out.push(lines[0]);
-        lines.slice(1).forEach((line, i) => {
-            const v = result.models[i].verdict;
-            out.push(paint(v, v, color) + line.slice(v.length));
-        });
-    }
-    else {
-        out.push('no models to check');
-    }
-    for (const m of result.models) {
-        if (m.verdict === 'pass')
-            continue;
-        out.push('');
-        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.descriptor)})`);
-        if (m.error) {
-            const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(where + m.error.message)}`);
-            continue;
-        }
-        for (const c of m.checks)
-            if (c.status === 'fail' || c.status === 'warn')
-                out.push(checkLine(m, c, color));
-    }
-    for (const note of result.notes)
-        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(note)}`);
-    const { counts } = result;
-    out.push('');
-    out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
-    // A line that would begin with `::` (after white space, which a CI runner trims) could be read
-    // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
-    return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
-}
-
-
-/***/ }),
-
-/***/ 5594:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   PW: () => (/* binding */ limitText),
-/* harmony export */   WN: () => (/* binding */ countsText),
-/* harmony export */   ge: () => (/* binding */ verdictHeadline)
-/* harmony export */ });
-/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6264);
-/**
- * Sentences several reporters print, as plain text: each reporter escapes them for its medium
- * (HTML, Markdown, XML).
- */
-
-/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
-function limitText(c) {
-    const parts = [];
-    if (c.warn !== null)
-        parts.push(`warn > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.warn)}`);
-    if (c.limit !== null)
-        parts.push(`fail > ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.limit)}`);
-    return parts.length ? parts.join(', ') : 'off';
-}
-/** The run's verdict in words, e.g. `2 of 6 models over a limit`. */
-function verdictHeadline(result) {
-    const { counts } = result;
-    if (result.verdict === 'pass')
-        return 'every model within its limits';
-    if (result.verdict === 'warn')
-        return `every model within its fail limits, ${counts.warn} with warnings`;
-    if (result.verdict === 'fail')
-        return `${counts.fail} of ${counts.models} models over a limit`;
-    return `${counts.error} of ${counts.models} models could not be checked`;
-}
-/** The counts behind the verdict: `6 checked: 1 pass, 0 warn, 5 fail, 0 error`. */
-function countsText(counts) {
-    return `${counts.models} checked: ${counts.pass} pass, ${counts.warn} warn, ${counts.fail} fail, ${counts.error} error`;
-}
-
-
-/***/ }),
-
-/***/ 1666:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   $u: () => (/* binding */ exitStatus),
-/* harmony export */   JJ: () => (/* binding */ worse),
-/* harmony export */   M: () => (/* binding */ fromJsonNumber),
-/* harmony export */   fS: () => (/* binding */ summarise),
-/* harmony export */   qj: () => (/* binding */ jsonNumber)
-/* harmony export */ });
-/** Converts a number for the JSON report (JSON has no infinity or NaN). */
-function jsonNumber(x) {
-    if (Number.isFinite(x))
-        return x;
-    if (Number.isNaN(x))
-        return 'NaN';
-    return x > 0 ? 'Infinity' : '-Infinity';
-}
-/** Reads a {@link JsonNumber} back into a number. */
-function fromJsonNumber(x) {
-    if (x === null || x === undefined)
-        return Number.NaN;
-    if (typeof x === 'number')
-        return x;
-    return x === 'Infinity' ? Infinity : x === '-Infinity' ? -Infinity : Number.NaN;
-}
-const ORDER = { pass: 0, warn: 1, fail: 2, error: 3 };
-/** The worse of two verdicts (error > fail > warn > pass). */
-function worse(a, b) {
-    return ORDER[a] >= ORDER[b] ? a : b;
-}
-/** Builds the run-level fields from model results (sorted by descriptor path, then name). */
-function summarise(models, version, notes = []) {
-    const sorted = [...models].sort((a, b) => a.descriptor < b.descriptor ? -1 : a.descriptor > b.descriptor ? 1 : a.name < b.name ? -1 : a.name > b.name ? 1 : 0);
-    const counts = { models: sorted.length, pass: 0, warn: 0, fail: 0, error: 0 };
-    let verdict = 'pass';
-    for (const m of sorted) {
-        counts[m.verdict] += 1;
-        verdict = worse(verdict, m.verdict);
-    }
-    return { tool: { name: 'fitgate', version }, verdict, counts, models: sorted, notes };
-}
-/** Exit status of the CLI: 0 pass/warn, 1 a model over a fail limit, 2 an error. */
-function exitStatus(result, failOn = 'fail') {
-    if (result.verdict === 'error')
-        return 2;
-    if (result.verdict === 'fail')
-        return 1;
-    if (result.verdict === 'warn' && failOn === 'warn')
-        return 1;
-    return 0;
-}
-
-
-/***/ }),
-
-/***/ 7903:
+/***/ 6941:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
@@ -42345,7 +42237,7 @@ function exitStatus(result, failOn = 'fail') {
 /* harmony export */   uK: () => (/* binding */ parseShard)
 /* harmony export */ });
 /* unused harmony exports SHARD_ERROR, MAX_SHARDS */
-/* harmony import */ var _errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3916);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /**
  * Sharding: a deterministic share of the models for one job of a matrix.
  *
@@ -42370,12 +42262,12 @@ const MAX_SHARDS = 10_000;
 function parseShard(text, key = '--shard') {
     const match = /^\s*(\d+)\s*\/\s*(\d+)\s*$/.exec(text);
     if (!match) {
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.syntax, `expected K/N with whole numbers 1 <= K <= N (e.g. 2/4), got ${JSON.stringify(text)}`, { key });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.syntax, `expected K/N with whole numbers 1 <= K <= N (e.g. 2/4), got ${JSON.stringify(text)}`, { key });
     }
     const index = Number(match[1]);
     const count = Number(match[2]);
     if (index < 1 || count < 1 || index > count || count > MAX_SHARDS) {
-        throw new _errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.range, `expected 1 <= K <= N <= ${MAX_SHARDS} in K/N, got ${JSON.stringify(text)} (K = ${index}, N = ${count})`, { key });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.range, `expected 1 <= K <= N <= ${MAX_SHARDS} in K/N, got ${JSON.stringify(text)} (K = ${index}, N = ${count})`, { key });
     }
     return { index, count };
 }
@@ -42398,6 +42290,31 @@ function selectShard(paths, shard) {
 /** `K/N` text of a shard (for notes and reports). */
 function formatShard(shard) {
     return `${shard.index}/${shard.count}`;
+}
+
+
+/***/ }),
+
+/***/ 5280:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   $: () => (/* binding */ isFitgateWorker),
+/* harmony export */   o: () => (/* binding */ WORKER_FLAG)
+/* harmony export */ });
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_worker_threads__WEBPACK_IMPORTED_MODULE_0__);
+/**
+ * Whether this thread is one of fitgate's worker threads. Every worker runs the same bundle as the
+ * command (the bundle of an entry is its worker script too), so the entry files ask
+ * {@link isFitgateWorker} and stand aside, and the worker module starts its loop instead.
+ */
+
+/** The `workerData` key that marks a fitgate worker. */
+const WORKER_FLAG = 'fitgateWorker';
+/** True in any worker thread fitgate started. */
+function isFitgateWorker() {
+    return !node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.isMainThread && typeof node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData === 'object' && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData !== null && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_FLAG] === true;
 }
 
 

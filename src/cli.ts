@@ -7,19 +7,18 @@
 // promises module takes about 2 ms to load (readline and streams come with it).
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { parseArgs } from './args.js';
-import { errorMessage, InputError } from './errors.js';
-import type { ReportInput } from './merge.js';
-import { defaultJobs } from './parallel/pool.js';
-import { isFitgateWorker } from './parallel/worker-role.js';
-import { runPipeline } from './pipeline.js';
+import { parseArgs } from './entries/args.js';
+import { errorMessage, InputError } from './core/errors.js';
+import type { ReportInput } from './result/merge.js';
+import { defaultJobs } from './run/pool.js';
+import { isFitgateWorker } from './run/worker-role.js';
+import { runPipeline } from './run/pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
 import { formatJson } from './report/json.js';
 import { escapeTerminal } from './report/escape.js';
 import { formatText } from './report/text.js';
-import { exitStatus, type Result } from './result.js';
-import { VERSION } from './version.js';
-import { deferOptimisingCompiler } from './optimising-compiler.js';
+import { exitStatus, type Result } from './result/result.js';
+import { VERSION } from './core/version.js';
 
 /** Reads the report files of `fitgate merge`; a file that cannot be read is an InputError. */
 function readReports(files: string[]): ReportInput[] {
@@ -34,7 +33,6 @@ function readReports(files: string[]): ReportInput[] {
 
 /** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
 async function main(argv: string[]): Promise<number> {
-  deferOptimisingCompiler();
   let debug = argv.includes('--debug');
   try {
     const parsed = parseArgs(argv, process.cwd());
@@ -47,7 +45,7 @@ async function main(argv: string[]): Promise<number> {
     let failOn: 'fail' | 'warn';
     // Modules only some runs need are loaded when asked for, so that a plain check starts fast.
     if (parsed.kind === 'merge') {
-      const { mergeReports } = await import('./merge.js');
+      const { mergeReports } = await import('./result/merge.js');
       result = mergeReports(readReports(parsed.reports), VERSION);
       failOn = parsed.failOn;
     } else {
@@ -74,7 +72,7 @@ async function main(argv: string[]): Promise<number> {
     // scanning reads them from the checkout); merged shard reports run from the root.
     const prefix = parsed.kind === 'check' ? path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/') : '';
     if (parsed.html === null && parsed.sarif === null && parsed.junit === null) return exitStatus(result, failOn);
-    const { writeFileReports } = await import('./output-files.js');
+    const { writeFileReports } = await import('./entries/output-files.js');
     await writeFileReports(result, {
       html: parsed.html,
       sarif: parsed.sarif,

@@ -10,17 +10,16 @@ import { ACTION_FETCH_HINT, evaluateBase } from './action/base-commit.js';
 import { createCommentApi, upsertComment } from './action/comment.js';
 import { pullRequestOf } from './action/event.js';
 import { failedCount, failureMessage, OUTPUTS, writeReport } from './action/outcome.js';
-import { errorMessage, InputError } from './errors.js';
-import { readInputs } from './inputs.js';
-import { defaultJobs } from './parallel/pool.js';
-import { isFitgateWorker } from './parallel/worker-role.js';
-import { writeFileReports } from './output-files.js';
-import { runPipeline } from './pipeline.js';
+import { errorMessage, InputError } from './core/errors.js';
+import { readInputs } from './entries/inputs.js';
+import { defaultJobs } from './run/pool.js';
+import { isFitgateWorker } from './run/worker-role.js';
+import { writeFileReports } from './entries/output-files.js';
+import { runPipeline } from './run/pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
 import { escapeLogLine, formatAnnotations, formatCommand, inputErrorAnnotation } from './report/annotations.js';
 import { formatComment, formatSummary } from './report/summary.js';
 import { formatText } from './report/text.js';
-import { deferOptimisingCompiler } from './optimising-compiler.js';
 
 /** Writes one notice or warning line of our own (message escaped). */
 function say(level: 'notice' | 'warning', message: string): void {
@@ -28,7 +27,6 @@ function say(level: 'notice' | 'warning', message: string): void {
 }
 
 async function run(): Promise<void> {
-  deferOptimisingCompiler();
   let prefix = '';
   try {
     const inputs = readInputs();

@@ -6,11 +6,11 @@
  */
 import { realpath } from 'node:fs/promises';
 import path from 'node:path';
-import { errorMessage } from '../errors.js';
-import { runPipeline, type PipelineOptions } from '../pipeline.js';
+import { errorMessage } from '../core/errors.js';
+import { runPipeline, type PipelineOptions } from '../run/pipeline.js';
 import { createGitRepository, tryGitTopLevel, tryResolveCommit } from '../repo/git-repository.js';
-import type { ModelResult } from '../result.js';
-import type { Settings } from '../settings.js';
+import type { ModelResult } from '../result/result.js';
+import type { Settings } from '../run/settings.js';
 
 /** Options of {@link evaluateBase}. */
 export interface BaseOptions {

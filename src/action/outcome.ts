@@ -5,7 +5,7 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { formatJson } from '../report/json.js';
-import { exitStatus, type Result } from '../result.js';
+import { exitStatus, type Result } from '../result/result.js';
 
 /** Names of the action's outputs (as in action.yml). */
 export const OUTPUTS = { verdict: 'verdict', failed: 'failed', report: 'report' } as const;

@@ -3,8 +3,8 @@
  * request's base commit, as a fraction.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
-import { fromJsonNumber } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import { fromJsonNumber } from '../result/result.js';
 
 /** Formats a fraction as a signed percentage, e.g. `+12.5%`. */
 function percent(x: number): string {

@@ -2,7 +2,7 @@
  * `coefficient-size`: the largest standardised coefficient.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
+import { formatNumber } from '../core/format.js';
 
 const check: Check = {
   id: 'coefficient-size',

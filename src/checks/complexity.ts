@@ -3,11 +3,10 @@
  * model's main complexity setting.
  */
 import type { Check, Measurement } from './types.js';
-import { formatNumber } from '../format.js';
+import { formatNumber } from '../core/format.js';
 import { sweepComplexity } from '../diagnostics/complexity.js';
-import { jsonRecord } from '../diagnostics/json.js';
-import { sharedFoldFactors } from '../diagnostics/shared.js';
-import { jsonNumber } from '../result.js';
+import { jsonRecord } from '../core/json.js';
+import { jsonNumber } from '../result/result.js';
 
 const check: Check = {
   id: 'complexity',
@@ -19,7 +18,7 @@ const check: Check = {
   line: (d) => d.fit.line,
   measure(context): Measurement {
     const { descriptor, design, train, fit } = context;
-    const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => sharedFoldFactors(context) });
+    const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
       return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
     }

@@ -2,8 +2,8 @@
  * `conditioning`: condition number of the column-scaled design, naming nearly collinear terms.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
-import { jsonNumber } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import { jsonNumber } from '../result/result.js';
 
 const check: Check = {
   id: 'conditioning',

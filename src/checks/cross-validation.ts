@@ -3,10 +3,9 @@
  * GCV and the effective degrees of freedom in the model's metrics.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
-import { gapRatio } from '../metrics/regression.js';
-import { jsonMetrics, jsonRecord } from '../diagnostics/json.js';
-import { sharedCrossValidation, sharedFolds } from '../diagnostics/shared.js';
+import { formatNumber } from '../core/format.js';
+import { gapRatio } from '../diagnostics/regression-metrics.js';
+import { jsonMetrics, jsonRecord } from '../core/json.js';
 
 const check: Check = {
   id: 'cross-validation',
@@ -17,8 +16,8 @@ const check: Check = {
   advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,
   measure(context) {
-    const folds = sharedFolds(context);
-    const cv = sharedCrossValidation(context);
+    const folds = context.analyses.folds();
+    const cv = context.analyses.crossValidation();
     const { metrics, train, design } = context;
     const effectiveDf = cv.effectiveDf;
     const figures = {

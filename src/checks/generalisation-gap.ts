@@ -2,7 +2,7 @@
  * `generalisation-gap`: hold-out RMSE / training RMSE.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
+import { formatNumber } from '../core/format.js';
 
 const check: Check = {
   id: 'generalisation-gap',

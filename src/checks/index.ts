@@ -5,8 +5,8 @@
  * registry and the README in step).
  */
 import type { Limit } from '../config/types.js';
-import { jsonNumber, type CheckResult } from '../result.js';
-import { formatNumber } from '../format.js';
+import { jsonNumber, type CheckResult } from '../result/result.js';
+import { formatNumber } from '../core/format.js';
 import baseChange from './base-change.js';
 import coefficientSize from './coefficient-size.js';
 import generalisationGap from './generalisation-gap.js';
@@ -20,7 +20,7 @@ import swing from './swing.js';
 import swingBeyond from './swing-beyond.js';
 import { judge, type Check, type CheckContext, type Measurement } from './types.js';
 
-export type { Check, CheckContext, CoreMetrics, Measurement, ModelData } from './types.js';
+export type { Check, CheckContext, CoreMetrics, Measurement } from './types.js';
 
 /** Every check, in report order. Ids are unique (checked on load). */
 export const CHECKS: readonly Check[] = validate([

@@ -2,7 +2,6 @@
  * `leakage`: hold-out rows that repeat a training row.
  */
 import type { Check } from './types.js';
-import { sharedLeakage } from '../diagnostics/shared.js';
 
 const check: Check = {
   id: 'leakage',
@@ -17,7 +16,7 @@ const check: Check = {
     if (design.inputs.length === 0) {
       return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
     }
-    const leak = sharedLeakage(context);
+    const leak = context.analyses.leakage();
     const metrics = { leaked_rows: leak.fullMatches, holdout_rows_in_training: leak.inputMatches };
     const detail = {
       columns: [...design.inputs],

@@ -2,7 +2,7 @@
  * `parameter-ratio`: fitted parameters per training row.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
+import { formatNumber } from '../core/format.js';
 
 const check: Check = {
   id: 'parameter-ratio',

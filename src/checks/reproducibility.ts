@@ -2,11 +2,9 @@
  * `reproducibility`: how far the descriptor's shipped coefficients are from the refit.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
-import { jsonRecord } from '../diagnostics/json.js';
-import { addErrors, emptySums, errorMeasures } from '../metrics/regression.js';
-import { predictRows } from '../model/blocks.js';
-import { jsonNumber } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import { jsonRecord } from '../core/json.js';
+import { jsonNumber } from '../result/result.js';
 
 const check: Check = {
   id: 'reproducibility',
@@ -16,14 +14,10 @@ const check: Check = {
     "Largest absolute difference between the predictions of the descriptor's shipped `coefficients` and of the refit on the hold-out rows, divided by the range (max - min) of the training target: max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y). Shows that the shipped model no longer follows from the committed data and terms. The detail also compares the shipped model's hold-out RMSE with the refit's. Skipped when the descriptor has no `coefficients`. Default limit 0.01 (1 % of the target's range).",
   advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
-  measure({ descriptor, design, fit, holdout, metrics }) {
-    const shipped = descriptor.coefficients;
+  measure({ shipped, predictions, holdout, metrics }) {
     if (shipped === null) return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
-    if (shipped.length !== design.p) {
-      return { value: null, reason: 'coefficients-length', message: `\`coefficients\` has ${shipped.length} values for ${design.p} design columns` };
-    }
-    const ps = predictRows(design, holdout, shipped);
-    const pr = predictRows(design, holdout, fit.coefficients);
+    const ps = shipped.holdoutPredictions;
+    const pr = predictions.holdout;
     let diff = 0;
     let row = -1;
     for (let i = 0; i < holdout.rows; i++) {
@@ -36,11 +30,8 @@ const check: Check = {
     const [lo, hi] = metrics.targetRange;
     const spread = hi - lo;
     const value = spread > 0 ? diff / spread : diff === 0 ? 0 : Infinity;
-    const shippedSums = emptySums();
-    addErrors(shippedSums, holdout.y, ps, holdout.rows);
-    const shippedRmse = errorMeasures(shippedSums).rmse;
-    let coefDiff = 0;
-    for (let j = 0; j < design.p; j++) coefDiff = Math.max(coefDiff, Math.abs(shipped[j] - fit.coefficients[j]));
+    const shippedRmse = shipped.holdout.rmse;
+    const coefDiff = shipped.maxCoefficientDifference;
     return {
       value,
       message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${holdout.file} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(metrics.holdoutRmse)}`,

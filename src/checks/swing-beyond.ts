@@ -2,9 +2,8 @@
  * `swing-beyond`: how far predictions just past the training range leave the band of training targets.
  */
 import type { Check } from './types.js';
-import { formatNumber } from '../format.js';
-import { jsonNumber } from '../result.js';
-import { sharedSwing } from '../diagnostics/shared.js';
+import { formatNumber } from '../core/format.js';
+import { jsonNumber } from '../result/result.js';
 import { describePoint, inputLine } from './swing.js';
 
 const check: Check = {
@@ -16,7 +15,7 @@ const check: Check = {
   advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
   line: (d) => d.termsLine,
   measure(context) {
-    const swing = sharedSwing(context);
+    const swing = context.analyses.swing();
     if (Number.isNaN(swing.beyond)) {
       return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is no range to step beyond' };
     }

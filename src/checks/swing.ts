@@ -2,10 +2,9 @@
  * `swing`: how far predictions between the training samples leave the band of training targets.
  */
 import type { Check, CheckContext } from './types.js';
-import { formatNumber } from '../format.js';
-import { jsonNumber } from '../result.js';
-import { jsonRecord } from '../diagnostics/json.js';
-import { sharedSwing } from '../diagnostics/shared.js';
+import { formatNumber } from '../core/format.js';
+import { jsonNumber } from '../result/result.js';
+import { jsonRecord } from '../core/json.js';
 import type { Swing, SwingPoint } from '../diagnostics/swing.js';
 
 /** Describes a point's inputs for a message, e.g. `depth_m = 5.1`. */
@@ -48,7 +47,7 @@ const check: Check = {
   advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
   line: (d) => d.termsLine,
   measure(context) {
-    const swing = sharedSwing(context);
+    const swing = context.analyses.swing();
     if (Number.isNaN(swing.inside)) {
       return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is nothing between samples to scan', detail: swingDetail(swing) };
     }

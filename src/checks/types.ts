@@ -4,9 +4,12 @@
  * log, format or read settings on their own.
  */
 import type { Descriptor, Limit } from '../config/types.js';
-import type { Design } from '../design-matrix.js';
+import type { Design } from '../design/design-matrix.js';
 import type { FitResult } from '../fit/index.js';
-import type { CheckStatus, ModelResult } from '../result.js';
+import type { ModelData } from '../data/model-data.js';
+import type { ModelAnalyses } from '../diagnostics/analyses.js';
+import type { ShippedScore } from '../diagnostics/shipped.js';
+import type { CheckStatus, ModelResult } from '../result/result.js';
 
 /** Figures of the refit that every check may read (plain numbers; non-finite allowed). */
 export interface CoreMetrics {
@@ -31,20 +34,6 @@ export interface CoreMetrics {
   targetRange: [number, number];
 }
 
-/** The data of one model, as columns (column-major, one Float64Array per input). */
-export interface ModelData {
-  /** Input columns in `design.inputs` order. */
-  inputs: Float64Array[];
-  /** Target column. */
-  y: Float64Array;
-  /** 1-based file line of each row. */
-  lines: Int32Array;
-  /** Number of rows. */
-  rows: number;
-  /** Repository-relative file path. */
-  file: string;
-}
-
 /** Everything a check may read about one model. */
 export interface CheckContext {
   descriptor: Descriptor;
@@ -55,8 +44,12 @@ export interface CheckContext {
   holdout: ModelData;
   /** The same model (by name) on the base commit of a pull request; null when there is none to compare with. */
   baseline: ModelResult | null;
-  /** Memoises work shared by several checks under a key (e.g. cross-validation). */
-  shared<T>(key: string, compute: () => T): T;
+  /** Diagnostics shared by several checks, each computed once (cross-validation, swing, leakage...). */
+  analyses: ModelAnalyses;
+  /** The refit's predictions of the training and hold-out rows (lengths train.rows, holdout.rows). */
+  predictions: { train: Float64Array; holdout: Float64Array };
+  /** The descriptor's shipped coefficients scored on the same rows; null when it ships none. */
+  shipped: ShippedScore | null;
 }
 
 /** What a check measured. `value: null` means the check does not apply (status skipped). */

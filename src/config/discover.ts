@@ -4,7 +4,7 @@
  */
 
 import { posix } from 'node:path';
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
 import { modelPatternLine } from './settings-file.js';
 import type { Descriptor, SettingsFile } from './types.js';

@@ -5,7 +5,7 @@
  */
 
 import type { ErrorObject } from 'ajv/dist/2020.js';
-import { InputError, quoteValue } from '../errors.js';
+import { InputError, quoteValue } from '../core/errors.js';
 import type { Position } from './types.js';
 import type { YamlDocument } from './yaml-source.js';
 

@@ -3,7 +3,7 @@
  * limits every model gets, defaults for `fit`, and resource caps.
  */
 
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateSettingsValue } from './schemas.js';

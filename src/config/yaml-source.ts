@@ -7,7 +7,7 @@
 
 import { isAlias, isMap, isPair, isScalar, isSeq, LineCounter, parseDocument } from 'yaml';
 import type { Document, Node as YamlNode, YAMLMap, YAMLSeq } from 'yaml';
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
 import type { Position } from './types.js';
 

@@ -4,7 +4,7 @@
  * the exact error each problem raises, and how rows are gathered into chunks.
  */
 
-import { InputError, quoteValue } from '../errors.js';
+import { InputError, quoteValue } from '../core/errors.js';
 
 /** Rows per chunk when the caller does not say. */
 export const DEFAULT_CHUNK_ROWS = 65536;

@@ -6,7 +6,7 @@
  */
 
 import { parse } from 'csv-parse';
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import { encodingError, lineBlocks, type LineBlock } from './line-blocks.js';
 import {
   ChunkBuilder,

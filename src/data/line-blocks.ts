@@ -7,7 +7,7 @@
  */
 
 import { isUtf8 } from 'node:buffer';
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 
 /** One block of whole lines, or the news that the next line is not UTF-8. */
 export interface LineBlock {

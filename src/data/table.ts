@@ -24,7 +24,7 @@
  */
 
 import type { RepoReader } from '../repo/types.js';
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import { DEFAULT_CHUNK_ROWS, DEFAULT_MAX_BYTES, planRequest, type ColumnPlan } from './csv-rules.js';
 import { FastPathDeclined, fastChunks } from './fast-path.js';
 import type { ScanTarget } from './general-path.js';

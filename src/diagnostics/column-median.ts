@@ -2,7 +2,7 @@
  * Medians of training columns, computed once per column and shared by every reader (swing,
  * charts): selection on a scratch copy, remembered per column array.
  */
-import { largest } from '../basis/stats.js';
+import { largest } from '../design/stats.js';
 
 const remembered = new WeakMap<Float64Array, { n: number; median: number }>();
 

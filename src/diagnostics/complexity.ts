@@ -4,9 +4,9 @@
  * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
  * section 7.10, the "one-standard-error" rule).
  */
-import { createTerm, type Term } from '../basis/index.js';
+import { createTerm, type Term } from '../design/terms/index.js';
 import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
-import { createDesign, type Design } from '../design-matrix.js';
+import { createDesign, type Design } from '../design/design-matrix.js';
 import { solveCoefficients, type FitResult, type QrAccumulator } from '../fit/index.js';
 import { ridgePath } from '../fit/ridge-path.js';
 import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds, type FoldFactors, type Rows } from './cross-validation.js';

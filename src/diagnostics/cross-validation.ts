@@ -3,11 +3,11 @@
  * (one pass over the rows to build them, one to score), leave-one-out from the full fit's
  * leverages (PRESS), and generalised cross-validation from the hat matrix trace.
  */
-import type { ModelData } from '../checks/types.js';
-import type { Design } from '../design-matrix.js';
+import type { ModelData } from '../data/model-data.js';
+import type { Design } from '../design/design-matrix.js';
 import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from '../fit/index.js';
-import { addProducts, forEachBlock } from '../model/blocks.js';
-import { outOfFoldRows, wasmKernels } from '../fit/wasm-kernels.js';
+import { addProducts, forEachBlock } from '../design/blocks.js';
+import { outOfFoldRows, wasmKernels } from '../kernels/wasm.js';
 import type { Folds } from './folds.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */

@@ -2,7 +2,7 @@
  * Hold-out rows that repeat a training row: found by hashing the bit patterns of the input
  * values, confirmed by exact comparison on hash hits.
  */
-import type { ModelData } from '../checks/types.js';
+import type { ModelData } from '../data/model-data.js';
 import { mix32 } from './random.js';
 
 /** How many line numbers of each file to report. */

@@ -2,11 +2,11 @@
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
  * training targets on inputs between the training rows and just past their range.
  */
-import { createDesign, type Design } from '../design-matrix.js';
-import { predictRows } from '../model/blocks.js';
+import { createDesign, type Design } from '../design/design-matrix.js';
+import { predictRows } from '../design/blocks.js';
 import type { Rows } from './cross-validation.js';
 import { columnMedian, selectKth } from './column-median.js';
-import { range } from '../basis/stats.js';
+import { range } from '../design/stats.js';
 import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
 

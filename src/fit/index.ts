@@ -11,7 +11,7 @@
 import { FactorSolver, rawSingularValues, scaledSpectrum } from './factor-solver.js';
 import { QrAccumulator, sumOfSquares } from './qr-accumulator.js';
 import { checkPenalty, penalisedFactor } from './ridge.js';
-import { leverageRows, refineRows, wasmKernels } from './wasm-kernels.js';
+import { leverageRows, refineRows, wasmKernels } from '../kernels/wasm.js';
 
 export { QrAccumulator } from './qr-accumulator.js';
 

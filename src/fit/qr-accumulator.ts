@@ -13,7 +13,7 @@
  * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
  */
 
-import { foldRows, wasmKernels } from './wasm-kernels.js';
+import { foldRows, wasmKernels } from '../kernels/wasm.js';
 
 /** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
 const WORK_NUMBERS = 16384;

@@ -13,7 +13,7 @@
 
 import { closeSync, fstatSync, openSync, readFileSync, readSync, realpathSync, statSync, type Stats } from 'node:fs';
 import * as nodePath from 'node:path';
-import { InputError, type ErrorLocation } from '../errors.js';
+import { InputError, type ErrorLocation } from '../core/errors.js';
 import { FILE_MISSING, isAbsoluteLike, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
 import type { RepoReader } from './types.js';
 

@@ -7,7 +7,7 @@
  */
 import { execFile, spawn } from 'node:child_process';
 import path from 'node:path';
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import { patternMatchers } from './glob-pattern.js';
 import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
 import type { RepoReader } from './types.js';

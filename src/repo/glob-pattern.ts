@@ -4,7 +4,7 @@
  * one path segment, `**` spans segments, `[...]` and `{a,b}` work, and wildcards do not
  * match a leading `.` of a segment.
  */
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import { PATH_OUTSIDE } from './repo-path.js';
 
 /**

@@ -3,7 +3,7 @@
  * comparison, which reads blobs from git. There are no links, so only lexical checks apply.
  */
 
-import { InputError } from '../errors.js';
+import { InputError } from '../core/errors.js';
 import { patternMatchers } from './glob-pattern.js';
 import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath } from './repo-path.js';
 import type { RepoReader } from './types.js';

@@ -4,7 +4,7 @@
  */
 
 import { posix } from 'node:path';
-import { InputError, type ErrorLocation } from '../errors.js';
+import { InputError, type ErrorLocation } from '../core/errors.js';
 
 /** Code of every refused path. */
 export const PATH_OUTSIDE = 'path-outside';

@@ -6,8 +6,8 @@
  * escaped so that it can never start a workflow command of its own.
  */
 import path from 'node:path';
-import type { InputError } from '../errors.js';
-import type { ModelResult, Result } from '../result.js';
+import type { InputError } from '../core/errors.js';
+import type { ModelResult, Result } from '../result/result.js';
 
 /** Severity of an annotation. */
 export type AnnotationLevel = 'error' | 'warning' | 'notice';

@@ -6,9 +6,9 @@
  * (`ModelResult.charts`), so nothing here computes a figure.
  */
 import { findCheck } from '../checks/index.js';
-import { formatNumber } from '../format.js';
-import type { ChartData } from '../model/chart-data.js';
-import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import type { ChartData } from '../result/chart-types.js';
+import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
 import { escapeHtml } from './escape.js';
 import { countsText, limitText, verdictHeadline } from './wording.js';
 import { coefficientBarsChart } from './svg/coefficient-bars.js';

@@ -6,8 +6,8 @@
  * could not be checked is one test case `load` with an `<error>`. All text is XML-escaped with
  * {@link escapeXml}.
  */
-import { formatNumber } from '../format.js';
-import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { escapeXml } from './escape.js';
 import { limitText } from './wording.js';
 

@@ -6,8 +6,8 @@
  * readable length; the whole report stays under `maxBytes`.
  */
 import { mermaidChart } from './mermaid.js';
-import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result.js';
-import { formatNumber } from '../format.js';
+import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
+import { formatNumber } from '../core/format.js';
 import { escapeMarkdown } from './escape.js';
 import { countsText, limitText, verdictHeadline } from './wording.js';
 

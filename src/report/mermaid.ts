@@ -6,9 +6,9 @@
  * otherwise the cross-validated error over the complexity sweep when there is one; otherwise
  * the standardised coefficient sizes as bars with the fail limit as a line.
  */
-import { formatNumber } from '../format.js';
-import type { ChartData } from '../model/chart-data.js';
-import type { ModelResult } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import type { ChartData } from '../result/chart-types.js';
+import type { ModelResult } from '../result/result.js';
 import { escapeMermaid } from './escape.js';
 import { axisLabel } from './svg/units.js';
 

@@ -8,8 +8,8 @@
  */
 import { createHash } from 'node:crypto';
 import { CHECKS } from '../checks/index.js';
-import { formatNumber } from '../format.js';
-import { fromJsonNumber, type CheckResult, type Result } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import { fromJsonNumber, type CheckResult, type Result } from '../result/result.js';
 
 /** Options of the SARIF report. */
 export interface SarifOptions {

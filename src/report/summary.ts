@@ -3,7 +3,7 @@
  * ({@link formatMarkdown}), cut to what each place accepts. The comment starts with a hidden
  * marker by which the next run finds it again.
  */
-import type { Result } from '../result.js';
+import type { Result } from '../result/result.js';
 import { formatMarkdown } from './markdown.js';
 
 /** Size cap of the job summary in UTF-8 bytes: under GitHub's 1 MiB (1,048,576 bytes) per step. */

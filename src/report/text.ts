@@ -2,8 +2,8 @@
  * The terminal report: one aligned table of every model, then one block per model that did not
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
-import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result.js';
-import { formatNumber } from '../format.js';
+import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
+import { formatNumber } from '../core/format.js';
 import { escapeTerminal } from './escape.js';
 
 /** Options of the text report. */

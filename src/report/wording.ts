@@ -2,8 +2,8 @@
  * Sentences several reporters print, as plain text: each reporter escapes them for its medium
  * (HTML, Markdown, XML).
  */
-import { formatNumber } from '../format.js';
-import type { CheckResult, Result } from '../result.js';
+import { formatNumber } from '../core/format.js';
+import type { CheckResult, Result } from '../result/result.js';
 
 /** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
 export function limitText(c: Pick<CheckResult, 'warn' | 'limit'>): string {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/core/errors.js';
 import { collectAnnotations, escapeData, escapeLogLine, escapeProperty, formatAnnotations, formatCommand, inputErrorAnnotation } from '../../src/report/annotations.js';
-import { summarise } from '../../src/result.js';
+import { summarise } from '../../src/result/result.js';
 import { awkwardResult, check, model } from './result-fixture.js';
 
 describe('escaping of workflow commands', () => {

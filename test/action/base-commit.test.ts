@@ -3,10 +3,10 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ACTION_FETCH_HINT, evaluateBase } from '../../src/action/base-commit.js';
-import { runPipeline } from '../../src/pipeline.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createFsRepository } from '../../src/repo/fs-repository.js';
-import { fromJsonNumber } from '../../src/result.js';
-import type { Settings } from '../../src/settings.js';
+import { fromJsonNumber } from '../../src/result/result.js';
+import type { Settings } from '../../src/run/settings.js';
 import { makeFixture, type Fixture } from './fixture.js';
 
 let fixture: Fixture;

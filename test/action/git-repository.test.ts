@@ -3,7 +3,7 @@ import { mkdirSync, mkdtempSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/core/errors.js';
 import { createGitRepository, tryGitTopLevel, tryResolveCommit } from '../../src/repo/git-repository.js';
 import type { RepoReader } from '../../src/repo/types.js';
 

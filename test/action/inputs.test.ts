@@ -3,8 +3,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse } from 'yaml';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors.js';
-import { INPUT_DEFAULTS, readInputs } from '../../src/inputs.js';
+import { InputError } from '../../src/core/errors.js';
+import { INPUT_DEFAULTS, readInputs } from '../../src/entries/inputs.js';
 
 const saved = { ...process.env };
 const WORKSPACE = path.resolve('/tmp/ws');

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatMarkdown, verdictLine } from '../../src/report/markdown.js';
 import { COMMENT_MARKER, COMMENT_MAX_BYTES, formatComment, formatSummary, SUMMARY_MAX_BYTES } from '../../src/report/summary.js';
-import { summarise } from '../../src/result.js';
+import { summarise } from '../../src/result/result.js';
 import { awkwardResult, check, model } from './result-fixture.js';
 
 describe('formatMarkdown', () => {

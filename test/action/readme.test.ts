@@ -7,7 +7,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { OUTPUTS } from '../../src/action/outcome.js';
-import { INPUT_DEFAULTS } from '../../src/inputs.js';
+import { INPUT_DEFAULTS } from '../../src/entries/inputs.js';
 
 const root = new URL('../../', import.meta.url);
 const read = (file: string): string => readFileSync(fileURLToPath(new URL(file, root)), 'utf8');

@@ -3,8 +3,8 @@
  * percent signs, commas, colons, line breaks, a name that looks like a workflow command,
  * NaN and infinite figures, a model that could not be checked, a new model and a compared one.
  */
-import type { CheckResult, ModelResult, Result } from '../../src/result.js';
-import { summarise } from '../../src/result.js';
+import type { CheckResult, ModelResult, Result } from '../../src/result/result.js';
+import { summarise } from '../../src/result/result.js';
 
 /** A check outcome with defaults for the fields a test does not care about. */
 export function check(over: Partial<CheckResult> & Pick<CheckResult, 'id' | 'status'>): CheckResult {

@@ -8,11 +8,11 @@ import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { chromium, type Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runPipeline } from '../../src/pipeline.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createFsRepository } from '../../src/repo/fs-repository.js';
 import { formatHtml, HTML_FILE } from '../../src/report/html.js';
-import type { Result } from '../../src/result.js';
-import { defaultSettings } from '../../src/settings.js';
+import type { Result } from '../../src/result/result.js';
+import { defaultSettings } from '../../src/run/settings.js';
 
 const CHROMIUM = '/usr/bin/chromium';
 const repoRoot = fileURLToPath(new URL('../../', import.meta.url));

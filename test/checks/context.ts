@@ -2,14 +2,17 @@
 // check tests do not depend on the YAML and CSV readers.
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { createTerm } from '../../src/basis/index.js';
-import { meanAndSd, range } from '../../src/basis/stats.js';
-import type { CheckContext, CoreMetrics, ModelData } from '../../src/checks/types.js';
+import { createTerm } from '../../src/design/terms/index.js';
+import { meanAndSd, range } from '../../src/design/stats.js';
+import type { CheckContext, CoreMetrics } from '../../src/checks/types.js';
+import type { ModelData } from '../../src/data/model-data.js';
+import { ModelAnalyses } from '../../src/diagnostics/analyses.js';
+import { scoreShipped } from '../../src/diagnostics/shipped.js';
 import { LIMIT_KEYS, toLimit } from '../../src/config/limits.js';
 import type { Descriptor, Limit, TermSpec } from '../../src/config/types.js';
-import { createDesign } from '../../src/design-matrix.js';
+import { createDesign } from '../../src/design/design-matrix.js';
 import { fitFactor, QrAccumulator } from '../../src/fit/index.js';
-import { forEachBlock, predictRows } from '../../src/model/blocks.js';
+import { forEachBlock, predictRows } from '../../src/design/blocks.js';
 
 /** A term as written in a test, its line optional (distributes over the term kinds). */
 export type TermWithoutLine = TermSpec extends infer T ? (T extends TermSpec ? Omit<T, 'line'> : never) : never;
@@ -144,7 +147,6 @@ export function buildContext(d: Descriptor, train: Table, holdout: Table): Check
     targetSd: meanAndSd(tr.y).sd,
     targetRange: range(tr.y),
   };
-  const memo = new Map<string, unknown>();
   return {
     descriptor: d,
     design,
@@ -153,9 +155,8 @@ export function buildContext(d: Descriptor, train: Table, holdout: Table): Check
     train: tr,
     holdout: ho,
     baseline: null,
-    shared<T>(key: string, compute: () => T): T {
-      if (!memo.has(key)) memo.set(key, compute());
-      return memo.get(key) as T;
-    },
+    analyses: new ModelAnalyses({ design, fit, train: tr, holdout: ho, folds: d.fit }),
+    predictions: { train: predictRows(design, tr, fit.coefficients), holdout: predictRows(design, ho, fit.coefficients) },
+    shipped: d.coefficients === null ? null : scoreShipped(design, tr, ho, d.coefficients, fit.coefficients),
   };
 }

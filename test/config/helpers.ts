@@ -1,6 +1,6 @@
 /** Shared helpers of the config tests: assert an InputError's code and location, not its wording. */
 import { expect } from 'vitest';
-import { InputError, type ErrorLocation } from '../../src/errors.js';
+import { InputError, type ErrorLocation } from '../../src/core/errors.js';
 
 /** What an InputError must carry; `message` matches a fragment when given. */
 export interface ExpectedError extends ErrorLocation {

@@ -4,7 +4,7 @@
  * piece boundaries never change a result.
  */
 
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/core/errors.js';
 import type { RepoReader } from '../../src/repo/types.js';
 
 /** Options for {@link memoryRepo}. */

@@ -3,7 +3,7 @@
  * subnormals and NaN compare exactly), so tests can compare the two paths with toEqual.
  */
 
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/core/errors.js';
 import type { RepoReader } from '../../src/repo/types.js';
 import { readTable, readTableChunks, type ReadTableOptions } from '../../src/data/table.js';
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { readHeader, readTable, readTableChunks } from '../../src/data/table.js';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/core/errors.js';
 import { memoryRepo } from './memory-repo.js';
 import { bits, outcome, type Outcome } from './outcome.js';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { oneStandardErrorRule, sweepComplexity } from '../../src/diagnostics/complexity.js';
-import { createTerm } from '../../src/basis/index.js';
-import { createDesign } from '../../src/design-matrix.js';
+import { createTerm } from '../../src/design/terms/index.js';
+import { createDesign } from '../../src/design/design-matrix.js';
 import { descriptor } from '../checks/context.js';
 import { fitRows, predictRow, relDiff, selectRows } from './helpers.js';
 import { assignFolds } from '../../src/diagnostics/folds.js';

@@ -1,9 +1,9 @@
 // Small designs for diagnostics tests: `linear` terms over generated columns, with an intercept.
-import { linearTerm } from '../../src/basis/linear.js';
+import { linearTerm } from '../../src/design/terms/linear.js';
 import type { Rows } from '../../src/diagnostics/cross-validation.js';
-import { createDesign, type Design } from '../../src/design-matrix.js';
+import { createDesign, type Design } from '../../src/design/design-matrix.js';
 import { fitFactor, QrAccumulator, type FitResult } from '../../src/fit/index.js';
-import { forEachBlock } from '../../src/model/blocks.js';
+import { forEachBlock } from '../../src/design/blocks.js';
 import { seededRandom } from '../../src/diagnostics/random.js';
 
 /** A design [1 | x1 .. xq] (or without the intercept). */

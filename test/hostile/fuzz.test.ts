@@ -11,9 +11,9 @@
 import { rmSync } from 'node:fs';
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors.js';
-import { INTERNAL_ERROR } from '../../src/model/evaluate.js';
-import { runPipeline } from '../../src/pipeline.js';
+import { InputError } from '../../src/core/errors.js';
+import { INTERNAL_ERROR } from '../../src/run/error-result.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import { formatAnnotations } from '../../src/report/annotations.js';
 import { formatHtml } from '../../src/report/html.js';
@@ -21,8 +21,8 @@ import { formatJson } from '../../src/report/json.js';
 import { formatJunit } from '../../src/report/junit.js';
 import { formatMarkdown } from '../../src/report/markdown.js';
 import { formatText } from '../../src/report/text.js';
-import { exitStatus } from '../../src/result.js';
-import { defaultSettings } from '../../src/settings.js';
+import { exitStatus } from '../../src/result/result.js';
+import { defaultSettings } from '../../src/run/settings.js';
 import { rows } from './corpus/repo.js';
 import { foreignCommands, NODE_WARNING, prepareBundles, runCli, STACK_LINE, writeCase, type CaseDirs } from './harness.js';
 

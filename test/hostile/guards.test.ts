@@ -4,12 +4,12 @@
  * them, and a run over many models ends with every model's outcome when some of them fail to load.
  */
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors.js';
-import { runPipeline } from '../../src/pipeline.js';
+import { InputError } from '../../src/core/errors.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import type { RepoReader } from '../../src/repo/types.js';
-import { exitStatus } from '../../src/result.js';
-import { defaultSettings } from '../../src/settings.js';
+import { exitStatus } from '../../src/result/result.js';
+import { defaultSettings } from '../../src/run/settings.js';
 import { descriptor, HOLDOUT, rows, SETTINGS, TRAIN } from './corpus/repo.js';
 
 /** A reader that records every path whose bytes were asked for (read or stream). */

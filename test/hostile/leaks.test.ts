@@ -10,9 +10,9 @@ import { execFileSync } from 'node:child_process';
 import { rmSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runPipeline } from '../../src/pipeline.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
-import { defaultSettings } from '../../src/settings.js';
+import { defaultSettings } from '../../src/run/settings.js';
 import { descriptor, HOLDOUT, rows, SETTINGS, TRAIN } from './corpus/repo.js';
 import { prepareBundles, runAction, runCli, SECRET, STACK_LINE, TOKEN, writeCase, type CaseDirs, type FileSpec, type Run } from './harness.js';
 

@@ -1,11 +1,11 @@
 // Regressions found by fuzzing (test/hostile/fuzz.test.ts), kept as named fixtures: each must end
 // with an exit status and a report, never hang or crash.
 import { describe, expect, it } from 'vitest';
-import { runPipeline } from '../../src/pipeline.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import { formatHtml } from '../../src/report/html.js';
-import { exitStatus } from '../../src/result.js';
-import { defaultSettings } from '../../src/settings.js';
+import { exitStatus } from '../../src/result/result.js';
+import { defaultSettings } from '../../src/run/settings.js';
 
 /** Seed 7: duplicate radial columns (a constant input with centres at the samples) left subnormal
  * entries in a fold factor, and the SVD iteration of the complexity sweep never converged. */

@@ -1,7 +1,7 @@
 // An awkward Result for the reporters' golden-string tests: pipes, `<`, `&`, quotes, emoji,
 // backticks, NaN and infinity in names, messages and figures.
-import type { ChartData } from '../../src/model/chart-data.js';
-import { summarise, type CheckResult, type ModelResult, type Result } from '../../src/result.js';
+import type { ChartData } from '../../src/result/chart-types.js';
+import { summarise, type CheckResult, type ModelResult, type Result } from '../../src/result/result.js';
 
 /** The awkward text used in names and messages. */
 export const AWKWARD = 'a|b <c> & "d" \'e\' 🍎 `f` #g;';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatHtml } from '../../src/report/html.js';
-import { summarise } from '../../src/result.js';
+import { summarise } from '../../src/result/result.js';
 import { AWKWARD, awkwardResult } from './fixture.js';
 
 const ESCAPED = 'a|b &lt;c&gt; &amp; &quot;d&quot; &#39;e&#39; 🍎 `f` #g;';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatJunit } from '../../src/report/junit.js';
-import { summarise } from '../../src/result.js';
+import { summarise } from '../../src/result/result.js';
 import { awkwardResult } from './fixture.js';
 
 const NAME = 'a|b &lt;c&gt; &amp; &quot;d&quot; &apos;e&apos; 🍎 `f` #g;';

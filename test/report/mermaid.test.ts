@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { mermaidChart } from '../../src/report/mermaid.js';
 import { awkwardResult, oneInputCharts } from './fixture.js';
-import type { ModelResult } from '../../src/result.js';
+import type { ModelResult } from '../../src/result/result.js';
 
 function model(charts: ModelResult['charts']): ModelResult {
   const m = awkwardResult().models[1];

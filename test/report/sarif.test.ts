@@ -5,7 +5,7 @@ import addFormatsModule from 'ajv-formats';
 import { describe, expect, it } from 'vitest';
 import { CHECKS } from '../../src/checks/index.js';
 import { formatSarif, sarifLog, SARIF_SCHEMA_URI } from '../../src/report/sarif.js';
-import { summarise } from '../../src/result.js';
+import { summarise } from '../../src/result/result.js';
 import { AWKWARD, awkwardResult } from './fixture.js';
 
 // The SARIF 2.1.0 JSON schema as shipped in @microsoft/jest-sarif (lib/schemas/sarif-2.1.0-rtm.5.json:

@@ -7,11 +7,11 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { parseArgs } from '../../src/args.js';
-import { InputError } from '../../src/errors.js';
-import { runPipeline } from '../../src/pipeline.js';
+import { parseArgs } from '../../src/entries/args.js';
+import { InputError } from '../../src/core/errors.js';
+import { runPipeline } from '../../src/run/pipeline.js';
 import { createFsRepository } from '../../src/repo/fs-repository.js';
-import { exitStatus, type Result } from '../../src/result.js';
+import { exitStatus, type Result } from '../../src/result/result.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const root = path.resolve(here, '..', '..');

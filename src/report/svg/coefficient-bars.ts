@@ -4,8 +4,8 @@
  * positive coefficient is a filled bar, a negative one an outlined bar; bars over the fail limit
  * are vermillion. When sizes span three decades or more the axis is logarithmic.
  */
-import { formatNumber } from '../../format.js';
-import type { CoefficientData } from '../../model/chart-data.js';
+import { formatNumber } from '../../core/format.js';
+import type { CoefficientData } from '../../result/chart-types.js';
 import { escapeHtml } from '../escape.js';
 import { frame, MARGIN, plotArea, px, WIDTH, type ChartOptions } from './frame.js';
 import { COLOURS, DASHES, legendLine } from './palette.js';

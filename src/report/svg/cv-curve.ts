@@ -4,8 +4,8 @@
  * setting, with the descriptor's chosen setting (solid vertical line) and the suggested setting
  * (dashed vertical line) marked and labelled.
  */
-import { formatNumber } from '../../format.js';
-import type { SweepData } from '../../model/chart-data.js';
+import { formatNumber } from '../../core/format.js';
+import type { SweepData } from '../../result/chart-types.js';
 import { escapeHtml } from '../escape.js';
 import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, DASHES, legendLine } from './palette.js';

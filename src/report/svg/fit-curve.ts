@@ -3,8 +3,8 @@
  * target band, hatched stretches where the curve leaves the band, training rows as filled
  * circles and hold-out rows as hollow squares.
  */
-import { formatNumber } from '../../format.js';
-import type { ChartData, FitCurveData } from '../../model/chart-data.js';
+import { formatNumber } from '../../core/format.js';
+import type { ChartData, FitCurveData } from '../../result/chart-types.js';
 import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, LEGEND_BAND, LEGEND_HOLDOUT, LEGEND_TRAIN, legendLine, legendRegion } from './palette.js';
 import { marks, pointData, pointNote } from './points.js';

@@ -5,7 +5,7 @@
  * with the chart). Chart modules pass already escaped body markup; every text given here is
  * escaped on the way in.
  */
-import { formatNumber } from '../../format.js';
+import { formatNumber } from '../../core/format.js';
 import { escapeHtml } from '../escape.js';
 import { COLOURS } from './palette.js';
 import type { Scale } from './scale.js';

@@ -3,8 +3,8 @@
  * input held at its training median, over the input's training range and a margin, with the
  * training values of the input as a rug of ticks under the curve.
  */
-import { formatNumber } from '../../format.js';
-import type { ChartData, CurveData } from '../../model/chart-data.js';
+import { formatNumber } from '../../core/format.js';
+import type { ChartData, CurveData } from '../../result/chart-types.js';
 import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, legendLine } from './palette.js';
 import { extent, linearScale, pad } from './scale.js';

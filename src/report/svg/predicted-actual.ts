@@ -2,7 +2,7 @@
  * Predicted against actual target for training rows (filled circles) and hold-out rows (hollow
  * squares), with the line y = x where a perfect model's points would lie.
  */
-import type { ChartData } from '../../model/chart-data.js';
+import type { ChartData } from '../../result/chart-types.js';
 import { frame, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, DASHES, LEGEND_HOLDOUT, LEGEND_TRAIN, legendLine } from './palette.js';
 import { marks, pointData, pointNote } from './points.js';

@@ -2,7 +2,7 @@
  * Residuals (actual - fitted) against fitted values, training rows as filled circles and hold-out
  * rows as hollow squares, with the zero line.
  */
-import type { ChartData } from '../../model/chart-data.js';
+import type { ChartData } from '../../result/chart-types.js';
 import { frame, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, LEGEND_HOLDOUT, LEGEND_TRAIN, legendLine } from './palette.js';
 import { marks, pointData, pointNote } from './points.js';

@@ -1,0 +1,195 @@
+export const id = 462;
+export const ids = [462];
+export const modules = {
+
+/***/ 6462:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   generalChunks: () => (/* binding */ generalChunks)
+/* harmony export */ });
+/* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6070);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
+/* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(4113);
+/* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8706);
+/**
+ * The general CSV path: csv-parse (streaming API) with quoted fields, CRLF, blank lines and
+ * white space around fields. Every record goes through csv-parse's `on_record` hook as soon
+ * as it is parsed, so rows are checked and converted in file order and errors come out in
+ * file order whatever the piece sizes.
+ */
+
+
+
+
+/** Stops csv-parse from inside `on_record` once the header is known (header-only reads). */
+class StopReading extends Error {
+}
+/**
+ * Reads a CSV file with csv-parse and yields numeric chunks.
+ *
+ * Settings: comma delimiter, `"` quote (and `""` inside quotes), `\n` or `\r\n` line ends,
+ * white space around fields trimmed (`trim: true`, the set of `String.prototype.trim`),
+ * lines holding only white space skipped, field counts checked here (`csv-ragged`).
+ * The physical line of a record is worked out from csv-parse's counts: 1 + skipped blank
+ * lines + earlier records + line breaks inside earlier quoted fields.
+ *
+ * @param pieces the file's bytes in pieces of any size
+ * @param target what to read
+ * @param skipRows data rows already handed out by the fast path: parsed and checked but not converted
+ */
+async function* generalChunks(pieces, target, skipRows = 0) {
+    const { file, request } = target;
+    const builder = new _csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .ChunkBuilder */ .vB(request, target.chunkRows);
+    let plan = null;
+    let breaksInFields = 0;
+    let dataRows = 0;
+    const onRecord = (record, info) => {
+        const line = 1 + info.empty_lines + (info.records - 1) + breaksInFields;
+        for (const field of record) {
+            for (let i = field.indexOf('\n'); i !== -1; i = field.indexOf('\n', i + 1))
+                breaksInFields++;
+        }
+        if (plan === null) {
+            plan = (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .planColumns */ .j7)(file, record, line, request);
+            target.onHeader(plan);
+            if (target.headerOnly)
+                throw new StopReading();
+            return null;
+        }
+        if (record.length !== plan.header.length)
+            throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .raggedError */ .L6)(file, line, plan.header.length, record.length);
+        if (dataRows++ < skipRows)
+            return null;
+        const { fieldOfSlot } = plan;
+        const row = builder.row;
+        for (let slot = 0; slot < fieldOfSlot.length; slot++) {
+            builder.slots[slot][row] = (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .cellNumber */ .W4)(record[fieldOfSlot[slot]], file, line, request.distinct[slot]);
+        }
+        builder.lines[row] = line;
+        builder.endRow();
+        return null;
+    };
+    const parser = (0,csv_parse__WEBPACK_IMPORTED_MODULE_0__/* .parse */ .qg)({
+        bom: false, // line-blocks drops it
+        delimiter: ',',
+        quote: '"',
+        escape: '"',
+        record_delimiter: ['\r\n', '\n'],
+        trim: true,
+        skip_empty_lines: true,
+        relax_column_count: true,
+        on_record: onRecord,
+    });
+    // Errors are read from `parser.errored` after each write; this keeps Node from also
+    // reporting them as unhandled.
+    parser.on('error', () => undefined);
+    /** 1-based line where the next record starts (or the open one started). */
+    const nextLine = () => 1 + parser.info.empty_lines + parser.info.records + breaksInFields;
+    /**
+     * True when reading should stop quietly; throws the row or syntax error otherwise. After
+     * bad bytes (`bad`), a syntax error only means the text was cut short: the bad bytes win.
+     */
+    const settle = (bad) => {
+        const failure = parser.errored;
+        if (failure === null)
+            return false;
+        if (failure instanceof StopReading)
+            return true;
+        if (failure instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz)
+            throw failure;
+        if (bad !== null)
+            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .S)(file, 1 + lineFeeds, bad.utf16);
+        throw syntaxError(failure, file, nextLine());
+    };
+    // Line feeds written so far: the line of bad bytes is the one after them.
+    let lineFeeds = 0;
+    const blocks = (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .lineBlocks */ .D)(pieces)[Symbol.asyncIterator]();
+    try {
+        let bad = null;
+        for (;;) {
+            const next = await blocks.next();
+            if (next.done === true)
+                break;
+            if (next.value.badUtf8) {
+                // The lines before the bad bytes are written; finish them first so that an
+                // earlier row error wins, as it does on the fast path.
+                bad = next.value;
+                break;
+            }
+            const { bytes } = next.value;
+            lineFeeds += countLineFeeds(bytes);
+            parser.write(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
+            if (settle(null))
+                return;
+            for (const chunk of builder.take()) {
+                yield chunk;
+                if (target.recycle === true)
+                    builder.recycle(chunk);
+            }
+        }
+        await endParser(parser);
+        if (settle(bad))
+            return;
+        if (bad !== null)
+            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .S)(file, 1 + lineFeeds, bad.utf16);
+        if (plan === null)
+            throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .emptyError */ .CA)(file);
+        builder.flush();
+        for (const chunk of builder.take()) {
+            yield chunk;
+            if (target.recycle === true)
+                builder.recycle(chunk);
+        }
+    }
+    finally {
+        parser.destroy();
+        await blocks.return?.(undefined);
+    }
+}
+/** Counts `\n` bytes. */
+function countLineFeeds(bytes) {
+    let n = 0;
+    for (let i = bytes.indexOf(10); i !== -1; i = bytes.indexOf(10, i + 1))
+        n++;
+    return n;
+}
+/** Ends the parser's input and waits until it has handled the last record (or failed). */
+function endParser(parser) {
+    return new Promise((resolve) => {
+        if (parser.errored !== null) {
+            resolve();
+            return;
+        }
+        const done = () => resolve();
+        parser.once('finish', done);
+        parser.once('error', done);
+        parser.once('close', done);
+        parser.end();
+    });
+}
+/** Turns a csv-parse error into InputError `csv-syntax` at the line where the record began. */
+function syntaxError(failure, file, line) {
+    const code = failure.code;
+    let what;
+    switch (code) {
+        case 'CSV_QUOTE_NOT_CLOSED':
+            what = `a quoted field in the record starting on line ${line} is never closed; expected a closing quote (")`;
+            break;
+        case 'CSV_INVALID_CLOSING_QUOTE':
+        case 'CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE':
+            what = `in the record starting on line ${line}, a closing quote is followed by text; expected a comma or the end of the line after it (write "" for a quote inside a quoted field)`;
+            break;
+        case 'INVALID_OPENING_QUOTE':
+            what = `in the record starting on line ${line}, a quote appears inside an unquoted field; expected quotes only around a whole field (write "" for a quote inside a quoted field)`;
+            break;
+        default:
+            what = `the record starting on line ${line} is not valid CSV: ${failure.message}`;
+    }
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-syntax', what, { file, line });
+}
+
+
+/***/ })
+
+};

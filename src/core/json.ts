@@ -1,0 +1,55 @@
+/**
+ * Makes diagnostic figures safe for the JSON report: non-finite numbers become the strings of
+ * {@link jsonNumber}, typed arrays become plain arrays, nested objects and arrays are converted.
+ */
+
+/** A number in the JSON report: finite numbers as numbers, others as strings. */
+export type JsonNumber = number | 'Infinity' | '-Infinity' | 'NaN';
+
+/** Converts a number for the JSON report (JSON has no infinity or NaN). */
+export function jsonNumber(x: number): JsonNumber {
+  if (Number.isFinite(x)) return x;
+  if (Number.isNaN(x)) return 'NaN';
+  return x > 0 ? 'Infinity' : '-Infinity';
+}
+
+/** Reads a {@link JsonNumber} back into a number. */
+export function fromJsonNumber(x: JsonNumber | null | undefined): number {
+  if (x === null || x === undefined) return Number.NaN;
+  if (typeof x === 'number') return x;
+  return x === 'Infinity' ? Infinity : x === '-Infinity' ? -Infinity : Number.NaN;
+}
+
+/** A figure after {@link jsonSafe}. */
+export type JsonValue = number | string | boolean | null | JsonValue[] | { [key: string]: JsonValue };
+
+/**
+ * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
+ * `undefined` fields dropped).
+ *
+ * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
+ */
+export function jsonSafe(value: unknown): JsonValue {
+  if (typeof value === 'number') return jsonNumber(value);
+  if (typeof value === 'string' || typeof value === 'boolean' || value === null) return value;
+  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) return Array.from(value as unknown as ArrayLike<number>, jsonNumber);
+  if (Array.isArray(value)) return value.map(jsonSafe);
+  if (typeof value === 'object' && value !== undefined) {
+    const out: { [key: string]: JsonValue } = {};
+    for (const [k, v] of Object.entries(value as Record<string, unknown>)) if (v !== undefined) out[k] = jsonSafe(v);
+    return out;
+  }
+  return null;
+}
+
+/** {@link jsonSafe} for a record of figures (model metrics or check detail). */
+export function jsonRecord(record: Record<string, unknown>): Record<string, JsonValue> {
+  return jsonSafe(record) as Record<string, JsonValue>;
+}
+
+/** Model metrics: numbers through `jsonNumber` (flat record). */
+export function jsonMetrics(record: Record<string, number | string | null>): Record<string, number | string | null> {
+  const out: Record<string, number | string | null> = {};
+  for (const [k, v] of Object.entries(record)) out[k] = typeof v === 'number' ? jsonNumber(v) : v;
+  return out;
+}

@@ -1,0 +1,34 @@
+/**
+ * The factory that turns a descriptor's term entry into a {@link Term}, keyed by its kind.
+ * To add a term kind: write `basis/<kind>.ts` exporting a builder, add it to the schema,
+ * to {@link createTerm} and to the README's "Terms" section.
+ */
+import type { TermSpec } from '../../config/types.js';
+import { linearTerm } from './linear.js';
+import { polynomialTerm } from './polynomial.js';
+import { rbfTerm } from './rbf.js';
+import type { Term, TrainingColumns } from './types.js';
+
+export type { Term, TrainingColumns } from './types.js';
+
+/** Every input column a term reads (without duplicates, in first-use order). */
+export function termInputs(spec: TermSpec): string[] {
+  return spec.kind === 'linear' ? [...new Set(spec.columns)] : [spec.of];
+}
+
+/**
+ * Fixes a term's data-dependent parameters from the training columns.
+ * @param spec the descriptor entry
+ * @param training training columns by name (must hold every input of the term)
+ * @param file descriptor path, for errors
+ */
+export function createTerm(spec: TermSpec, training: TrainingColumns, file: string): Term {
+  switch (spec.kind) {
+    case 'linear':
+      return linearTerm(spec);
+    case 'polynomial':
+      return polynomialTerm(spec, training, file);
+    case 'rbf':
+      return rbfTerm(spec, training);
+  }
+}

@@ -1,0 +1,27 @@
+/**
+ * The shape every basis term shares once its parameters are fixed from the training data.
+ */
+import type { TermSpec } from '../../config/types.js';
+
+/** A term with every parameter fixed (shift, scale, centres), ready to fill design columns. */
+export interface Term {
+  /** The descriptor entry this term came from (for lines and messages). */
+  readonly spec: TermSpec;
+  /** Input column names this term reads, in the order `fill` receives them. */
+  readonly inputs: readonly string[];
+  /** Names of the design columns it builds, e.g. `x^2`, `rbf(x; c=1.5)`. */
+  readonly columnNames: readonly string[];
+  /** Parameters fixed from the training data, for the report (shift, scale, centres...). */
+  readonly fixed: Record<string, number | number[]>;
+  /**
+   * Fills this term's design columns for a block of rows.
+   * @param inputs one Float64Array per entry of `inputs`, each holding at least `m` rows
+   * @param m rows in the block
+   * @param out column-major design block with `m` rows (`out[j * m + i]`)
+   * @param offset index of this term's first column in `out`
+   */
+  fill(inputs: readonly Float64Array[], m: number, out: Float64Array, offset: number): void;
+}
+
+/** Training columns by name, used to fix data-dependent parameters. */
+export type TrainingColumns = ReadonlyMap<string, Float64Array>;

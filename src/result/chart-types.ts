@@ -1,0 +1,113 @@
+/**
+ * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
+ */
+
+/** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
+export const MAX_CHART_POINTS = 2000;
+
+/** Points of the evenly spaced grid along a curve. */
+export const CURVE_POINTS = 401;
+
+/** Margin on each side of an input's training range for curves, as a fraction of the range (as the swing check's default). */
+export const CURVE_MARGIN = 0.1;
+
+/** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
+export const CHART_DIGITS = 7;
+
+/** The rows of one file as points. Arrays are in file order of the kept rows; non-finite values are null. */
+export interface PointSeries {
+  /** Data rows in the file. */
+  rows: number;
+  /** Points kept (`rows` unless thinned). */
+  shown: number;
+  /** True when the rows were thinned to {@link MAX_CHART_POINTS}. */
+  thinned: boolean;
+  /** How rows were kept, in words (empty when not thinned). */
+  thinning: string;
+  /** 1-based file line of each kept row. */
+  lines: number[];
+  /** Input values of each kept row, one array per input (charts of one input read `x[0]`). */
+  x: (number | null)[][];
+  /** Observed target. */
+  actual: (number | null)[];
+  /** The refit's prediction. */
+  fitted: (number | null)[];
+  /** actual - fitted. */
+  residual: (number | null)[];
+}
+
+/** A stretch of the input where the curve is outside the observed target band. */
+export interface BandRegion {
+  from: number;
+  to: number;
+  /** `above` the band's top, `below` its bottom. */
+  side: 'above' | 'below';
+}
+
+/** Predictions along one input with the other inputs held at their training medians. */
+export interface CurveData {
+  input: string;
+  /** Training medians of the other inputs (empty for a model of one input). */
+  others: Record<string, number>;
+  /** Training range of the input. */
+  range: [number, number];
+  /** Input values, ascending. */
+  x: number[];
+  /** Predictions at `x` (null where not finite). */
+  y: (number | null)[];
+}
+
+/** The fitted curve of a model of one input. */
+export interface FitCurveData extends CurveData {
+  /** Observed target band [min, max] of the training targets. */
+  band: [number, number];
+  /** Where the curve leaves the band. */
+  regions: BandRegion[];
+  /** `swing`: range, band and regions as the swing check scanned them; `data`: from the training rows. */
+  source: 'swing' | 'data';
+}
+
+/** Cross-validated error over a complexity sweep. */
+export interface SweepData {
+  /** What was swept, e.g. `ridge` or `degree`. */
+  parameter: string;
+  /** True when settings span a decade or more and read best on a log axis (a setting of 0 is drawn one decade left of the smallest positive one). */
+  log: boolean;
+  /** Settings in ascending order. */
+  settings: number[];
+  /** Cross-validated RMSE at each setting. */
+  cv: (number | null)[];
+  /** Training RMSE at each setting, when the sweep has it. */
+  train: (number | null)[] | null;
+  /** The descriptor's setting, or null when it is not on the sweep. */
+  chosen: number | null;
+  /** The suggested setting, or null. */
+  suggested: number | null;
+}
+
+/** Standardised coefficients w_j sd(phi_j) / sd(y) of the non-intercept columns. */
+export interface CoefficientData {
+  columns: string[];
+  /** Signed standardised coefficients (null where not finite). */
+  values: (number | null)[];
+  /** Fail and warning limits of the `coefficient-size` check (null when off or unset). */
+  limit: number | null;
+  warn: number | null;
+}
+
+/** Everything the charts of one model draw. */
+export interface ChartData {
+  /** Target column name. */
+  target: string;
+  /** Input column names, in design order. */
+  inputs: string[];
+  train: PointSeries;
+  holdout: PointSeries;
+  /** One input: the fitted curve; null otherwise. */
+  fit: FitCurveData | null;
+  /** Several inputs: one curve per input with the others at their medians; empty otherwise. */
+  partials: CurveData[];
+  /** The complexity sweep, when the complexity check ran. */
+  sweep: SweepData | null;
+  coefficients: CoefficientData;
+}

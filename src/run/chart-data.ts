@@ -1,0 +1,244 @@
+/**
+ * The figures the HTML report and the Markdown charts draw, computed once in the pipeline so
+ * that reporters never compute: points of training and hold-out rows (thinned evenly when a file
+ * is large, and saying so), the fitted curve over the scanned range with the observed target band
+ * and the stretches where the curve leaves it, one partial curve per input, the complexity sweep
+ * and the standardised coefficients. Every number is finite or null, so the data survives
+ * `JSON.stringify` unchanged.
+ */
+import type { ModelData } from '../data/model-data.js';
+import { predictRows } from '../design/blocks.js';
+import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/result.js';
+import { columnMedian } from '../diagnostics/column-median.js';
+import { range } from '../design/stats.js';
+import type { FittedModel } from './fit-model.js';
+import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
+
+export { MAX_CHART_POINTS } from '../result/chart-types.js';
+
+/** Rounds to {@link CHART_DIGITS} significant digits; null for NaN and infinities. */
+export function chartNumber(x: number): number | null {
+  return Number.isFinite(x) ? Number(x.toPrecision(CHART_DIGITS)) : null;
+}
+
+/**
+ * Rows to keep when a file has more than `max` rows: `max` evenly spaced indices
+ * floor(t n / max), t = 0 .. max-1 (deterministic: the same file always gives the same points).
+ */
+export function thinRows(n: number, max = MAX_CHART_POINTS): Int32Array {
+  if (n <= max) return Int32Array.from({ length: n }, (_, i) => i);
+  return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
+}
+
+function series(data: ModelData, predictions: Float64Array, max: number): PointSeries {
+  const keep = thinRows(data.rows, max);
+  const thinned = keep.length < data.rows;
+  const pick = (col: ArrayLike<number>): (number | null)[] => Array.from(keep, (i) => chartNumber(col[i]));
+  return {
+    rows: data.rows,
+    shown: keep.length,
+    thinned,
+    thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
+    lines: Array.from(keep, (i) => data.lines[i]),
+    x: data.inputs.map(pick),
+    actual: pick(data.y),
+    fitted: pick(predictions),
+    residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
+  };
+}
+
+/** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
+function curveAlong(model: FittedModel, c: number, lo: number, hi: number, medians: number[], extra: readonly number[]): { x: number[]; y: (number | null)[] } {
+  const xs: number[] = [];
+  for (let t = 0; t < CURVE_POINTS; t++) xs.push(t === CURVE_POINTS - 1 ? hi : lo + ((hi - lo) * t) / (CURVE_POINTS - 1));
+  for (const v of extra) if (v >= lo && v <= hi) xs.push(v);
+  const grid = Float64Array.from(xs).sort();
+  const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+  const pred = predictRows(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
+  const x: number[] = [];
+  const y: (number | null)[] = [];
+  for (let i = 0; i < grid.length; i++) {
+    const xi = chartNumber(grid[i]);
+    if (xi === null || (x.length > 0 && xi === x[x.length - 1])) continue;
+    x.push(xi);
+    y.push(chartNumber(pred[i]));
+  }
+  return { x, y };
+}
+
+/**
+ * Stretches of the curve outside [lo, hi]; edges are placed where the straight line between two
+ * neighbouring grid points crosses the band edge. A null prediction counts as outside (above).
+ */
+export function bandRegions(x: readonly number[], y: readonly (number | null)[], lo: number, hi: number): BandRegion[] {
+  const regions: BandRegion[] = [];
+  const sideOf = (v: number | null): 'above' | 'below' | null => (v === null || v > hi ? 'above' : v < lo ? 'below' : null);
+  const cross = (i: number, edge: number): number => {
+    const a = y[i - 1];
+    const b = y[i];
+    if (a === null || b === null || a === b) return x[i];
+    const f = (edge - a) / (b - a);
+    return x[i - 1] + Math.min(1, Math.max(0, f)) * (x[i] - x[i - 1]);
+  };
+  let open: BandRegion | null = null;
+  for (let i = 0; i < x.length; i++) {
+    const s = sideOf(y[i]);
+    if (open && s !== open.side) {
+      open.to = cross(i, open.side === 'above' ? hi : lo);
+      regions.push(open);
+      open = null;
+    }
+    if (s && !open) open = { from: i === 0 ? x[0] : cross(i, s === 'above' ? hi : lo), to: x[i], side: s };
+  }
+  if (open) {
+    open.to = x[x.length - 1];
+    regions.push(open);
+  }
+  return regions.map((r) => ({ from: chartNumber(r.from) ?? r.from, to: chartNumber(r.to) ?? r.to, side: r.side }));
+}
+
+/** The swing check's detail, as far as charts use it (every field optional: read defensively). */
+interface SwingDetailView {
+  band: [number, number] | null;
+  curve: { x: number[]; prediction: number[]; range: [number, number] | null } | null;
+  regions: BandRegion[] | null;
+}
+
+function numberPair(v: unknown): [number, number] | null {
+  const xs = numbers(v);
+  return xs && xs.length === 2 && Number.isFinite(xs[0]) && Number.isFinite(xs[1]) ? [xs[0], xs[1]] : null;
+}
+
+/** An array of JSON numbers (finite numbers or `"Infinity"` style strings) as numbers, or null. */
+function numbers(v: unknown): number[] | null {
+  if (!Array.isArray(v) || !v.every((e) => typeof e === 'number' || e === 'Infinity' || e === '-Infinity' || e === 'NaN')) return null;
+  return v.map((e) => fromJsonNumber(e as JsonNumber));
+}
+
+function readSwing(checks: readonly CheckResult[], input: string): SwingDetailView | null {
+  const check = checks.find((c) => c.id === 'swing');
+  if (!check || !check.detail) return null;
+  const d = check.detail;
+  const band = numberPair(d.band);
+  let curve: SwingDetailView['curve'] = null;
+  const curves = Array.isArray(d.curves) ? (d.curves as Record<string, unknown>[]) : [];
+  const mine = curves.find((c) => c && c.input === input);
+  if (mine) {
+    const x = numbers(mine.x);
+    const prediction = numbers(mine.prediction);
+    if (x && prediction && x.length === prediction.length && x.length > 0) curve = { x, prediction, range: numberPair(mine.range) };
+  }
+  let regions: BandRegion[] | null = null;
+  if (Array.isArray(d.regions)) {
+    regions = [];
+    for (const r of d.regions as Record<string, unknown>[]) {
+      if (r && (r.input === undefined || r.input === input) && typeof r.from === 'number' && typeof r.to === 'number') {
+        regions.push({ from: r.from, to: r.to, side: r.side === 'below' ? 'below' : 'above' });
+      }
+    }
+  }
+  return { band, curve, regions };
+}
+
+function finiteOrNull(v: unknown): number | null {
+  const x = typeof v === 'number' || typeof v === 'string' ? fromJsonNumber(v as JsonNumber) : Number.NaN;
+  return Number.isFinite(x) ? x : null;
+}
+
+/**
+ * Reads the complexity check's sweep from its detail: `{ setting: 'degree' | 'width' | 'ridge',
+ * current, chosen (the suggested index), curve: [{ setting, cv_rmse }] }`.
+ */
+function readSweep(checks: readonly CheckResult[]): SweepData | null {
+  const check = checks.find((c) => c.id === 'complexity');
+  if (!check || !check.detail || !Array.isArray(check.detail.curve)) return null;
+  const d = check.detail;
+  const curve = d.curve as Record<string, unknown>[];
+  const at = (index: unknown): number | null => {
+    const i = typeof index === 'number' && Number.isInteger(index) ? index : -1;
+    return i >= 0 && i < curve.length ? finiteOrNull(curve[i]?.setting) : null;
+  };
+  const rows: { s: number; cv: number | null }[] = [];
+  for (const p of curve) {
+    const s = p && typeof p === 'object' ? finiteOrNull(p.setting) : null;
+    if (s !== null) rows.push({ s, cv: finiteOrNull(p.cv_rmse) });
+  }
+  if (rows.length === 0) return null;
+  rows.sort((a, b) => a.s - b.s);
+  const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
+  const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
+  return {
+    parameter,
+    log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && Math.max(...positive) / Math.min(...positive) >= 10,
+    settings: rows.map((r) => chartNumber(r.s) ?? r.s),
+    cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
+    train: null,
+    chosen: at(d.current),
+    suggested: at(d.chosen),
+  };
+}
+
+/**
+ * Builds the chart data of one fitted model from its rows, predictions and check outcomes.
+ * Cost: one pass over each file's kept rows, the medians (shared with swing: {@link columnMedian}), and
+ * {@link CURVE_POINTS} predictions per curve.
+ * @param model the fitted model (design, coefficients, data, predictions)
+ * @param checks the model's check outcomes (swing and complexity details are read when present)
+ * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
+ */
+export function buildChartData(model: FittedModel, checks: readonly CheckResult[], maxPoints = MAX_CHART_POINTS): ChartData {
+  const { design, tables, metrics, fit, descriptor } = model;
+  const { train, holdout } = tables;
+  const inputs = [...design.inputs];
+  const medians = train.inputs.map((col) => columnMedian(col, train.rows));
+
+  // One input: the curve over the scanned range with the band; several: partial curves.
+  let fitCurve: FitCurveData | null = null;
+  const partials: CurveData[] = [];
+  for (let c = 0; c < inputs.length; c++) {
+    const [tlo, thi] = range(train.inputs[c], train.rows);
+    if (!(thi > tlo)) continue;
+    const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
+    const swingCurve = swing?.curve ?? null;
+    const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
+    const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
+    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
+    const others: Record<string, number> = {};
+    inputs.forEach((name, k) => {
+      if (k !== c) others[name] = chartNumber(medians[k]) ?? 0;
+    });
+    const curve: CurveData = { input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, y };
+    if (inputs.length === 1) {
+      const band = swing?.band ?? metrics.targetRange;
+      fitCurve = {
+        ...curve,
+        band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
+        regions: swing?.regions ?? bandRegions(x, y, band[0], band[1]),
+        source: swing && (swing.band || swing.curve) ? 'swing' : 'data',
+      };
+    } else {
+      partials.push(curve);
+    }
+  }
+
+  // Standardised coefficients of the non-intercept columns.
+  const coefCheck = checks.find((c) => c.id === 'coefficient-size');
+  const columns: string[] = [];
+  const values: (number | null)[] = [];
+  for (let j = 0; j < design.p; j++) {
+    if (!design.penalised[j]) continue;
+    columns.push(design.columnNames[j]);
+    values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
+  }
+
+  return {
+    target: descriptor.data.target,
+    inputs,
+    train: series(train, model.trainPredictions, maxPoints),
+    holdout: series(holdout, model.holdoutPredictions, maxPoints),
+    fit: fitCurve,
+    partials,
+    sweep: readSweep(checks),
+    coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
+  };
+}

@@ -1,0 +1,111 @@
+/**
+ * One model from descriptor to outcome: fit and score it (fit-model.ts), run every check of the
+ * registry against its limits, and build its part of the Result.
+ */
+import { CHECKS, runCheck, type CheckContext } from '../checks/index.js';
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { InputError } from '../core/errors.js';
+import { ModelAnalyses } from '../diagnostics/analyses.js';
+import type { ShippedScore } from '../diagnostics/shipped.js';
+import type { RepoReader } from '../repo/types.js';
+import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result/result.js';
+import { compareWithBase, type BaseInput } from './base-comparison.js';
+import { buildChartData } from './chart-data.js';
+import { errorResult, INTERNAL_ERROR } from './error-result.js';
+import { fitModel, type FittedModel } from './fit-model.js';
+
+export type { BaseInput } from './base-comparison.js';
+
+/** The report's figures of the shipped coefficients, or null. */
+function shippedMetrics(shipped: ShippedScore | null): ShippedMetrics | null {
+  if (shipped === null) return null;
+  return {
+    train_rmse: jsonNumber(shipped.train.rmse),
+    holdout_rmse: jsonNumber(shipped.holdout.rmse),
+    max_coefficient_difference: jsonNumber(shipped.maxCoefficientDifference),
+  };
+}
+
+/** Model metrics for the report. */
+function reportMetrics(model: FittedModel): ModelMetrics {
+  const { metrics: m, fit, design } = model;
+  return {
+    train_rmse: jsonNumber(m.trainRmse),
+    holdout_rmse: jsonNumber(m.holdoutRmse),
+    train_mae: jsonNumber(m.trainMae),
+    holdout_mae: jsonNumber(m.holdoutMae),
+    train_r2: jsonNumber(m.trainR2),
+    holdout_r2: jsonNumber(m.holdoutR2),
+    gap_ratio: jsonNumber(m.gapRatio),
+    params_per_sample: jsonNumber(m.paramsPerSample),
+    max_std_coefficient: jsonNumber(m.maxStdCoefficient),
+    max_std_coefficient_column: m.maxStdCoefficientColumn >= 0 ? design.columnNames[m.maxStdCoefficientColumn] : null,
+    max_abs_coefficient: jsonNumber(m.maxAbsCoefficient),
+    rank: fit.rank,
+    condition_number: jsonNumber(fit.conditionNumber),
+    condition_number_scaled: jsonNumber(fit.conditionNumberScaled),
+  };
+}
+
+/**
+ * Fits one model and runs every check on it. Input problems become a model with verdict
+ * `error` (the run goes on); anything else is re-thrown.
+ * @param base outcomes on the base commit to compare with; default none (no `base` field)
+ */
+export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
+  let model: FittedModel;
+  try {
+    model = await fitModel(repo, descriptor, settings);
+  } catch (error) {
+    if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
+    // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
+    // that every other model still gets its outcome; the code marks it as a bug to report.
+    const detail = error instanceof Error ? error.message : String(error);
+    return errorResult(descriptor.name, descriptor.file, new InputError(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
+  }
+  // The run's own passes already produced the folds, their factors and the cross-validation.
+  const analyses = new ModelAnalyses(
+    { design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit },
+    { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation },
+  );
+  const context: CheckContext = {
+    descriptor,
+    design: model.design,
+    fit: model.fit,
+    metrics: model.metrics,
+    train: model.tables.train,
+    holdout: model.tables.holdout,
+    baseline: base?.models.get(descriptor.name) ?? null,
+    analyses,
+    predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
+    shipped: model.shipped,
+  };
+  const metrics = reportMetrics(model);
+  const checks: CheckResult[] = [];
+  let verdict: Verdict = 'pass';
+  for (const check of CHECKS) {
+    const { outcome, figures } = runCheck(check, context);
+    checks.push(outcome);
+    if (figures) Object.assign(metrics, figures);
+    if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);
+  }
+  return {
+    name: descriptor.name,
+    descriptor: descriptor.file,
+    verdict,
+    rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    parameters: model.design.p,
+    columns: [...model.design.columnNames],
+    metrics,
+    coefficients: Array.from(model.fit.coefficients, jsonNumber),
+    shipped: shippedMetrics(model.shipped),
+    checks,
+    ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
+    error: null,
+    extra: {
+      rank_deficient: model.fit.rankDeficient,
+      terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
+    },
+    charts: buildChartData(model, checks),
+  };
+}

@@ -1,0 +1,132 @@
+/**
+ * One model fitted and scored: its plan, the passes over its rows, the core figures every check
+ * reads, and the shipped coefficients scored on the same rows. No checks here (see evaluate.ts).
+ */
+import type { CoreMetrics } from '../checks/index.js';
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { InputError } from '../core/errors.js';
+import type { ModelTables } from '../data/load-model-data.js';
+import type { Design } from '../design/design-matrix.js';
+import { range } from '../design/stats.js';
+import type { CrossValidation, FoldFactors } from '../diagnostics/cross-validation.js';
+import type { Folds } from '../diagnostics/folds.js';
+import { addErrors, emptySums, errorMeasures, gapRatio } from '../diagnostics/regression-metrics.js';
+import { scoreShipped, type ShippedScore } from '../diagnostics/shipped.js';
+import type { FitResult } from '../fit/index.js';
+import type { RepoReader } from '../repo/types.js';
+import { foldPass, refinePass, scoringPass } from './passes.js';
+import { planModel } from './plan.js';
+
+/** A fitted model with everything checks and reporters read. */
+export interface FittedModel {
+  descriptor: Descriptor;
+  design: Design;
+  fit: FitResult;
+  tables: ModelTables;
+  metrics: CoreMetrics;
+  trainPredictions: Float64Array;
+  holdoutPredictions: Float64Array;
+  /** Cross-validation folds of the training rows (from the descriptor's `fit` settings). */
+  folds: Folds;
+  /** Cross-validation figures, computed in the fit's passes over the rows; null when they could not be computed. */
+  crossValidation: CrossValidation | null;
+  /** QR factors of each fold's rows and of each fold's complement (k small p x p factors). */
+  foldFactors: FoldFactors;
+  /** The descriptor's shipped coefficients scored on the same rows; null when it ships none. */
+  shipped: ShippedScore | null;
+}
+
+/**
+ * Loads, fits and scores one model (no checks).
+ * @throws InputError for bad data, a constant target, a design over the caps, or shipped
+ *   coefficients of the wrong length
+ */
+export async function fitModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedModel> {
+  const plan = await planModel(repo, descriptor, settings);
+  const { design, tables, folds } = plan;
+  const first = foldPass(plan);
+  const fit = refinePass(plan, first.fit);
+  const scored = scoringPass(plan, fit, first.foldFactors);
+  const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
+  return {
+    descriptor,
+    design,
+    fit,
+    tables,
+    metrics,
+    trainPredictions: scored.trainPredictions,
+    holdoutPredictions: scored.holdoutPredictions,
+    folds,
+    crossValidation: scored.crossValidation,
+    foldFactors: first.foldFactors,
+    shipped: shippedScore(descriptor, design, tables, fit),
+  };
+}
+
+/**
+ * The figures every check may read: training and hold-out RMSE, MAE and R^2, the gap ratio,
+ * parameters per row and coefficient sizes (|w_j| sd(phi_j) / sd(y) over penalised columns).
+ */
+function coreMetrics(
+  targetSd: number,
+  columnSd: Float64Array,
+  fit: FitResult,
+  design: Design,
+  tables: ModelTables,
+  trainPredictions: Float64Array,
+  holdoutPredictions: Float64Array,
+): CoreMetrics {
+  const { train, holdout } = tables;
+  const trainSums = emptySums();
+  addErrors(trainSums, train.y, trainPredictions, train.rows);
+  const holdoutSums = emptySums();
+  addErrors(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
+  const tr = errorMeasures(trainSums);
+  const ho = errorMeasures(holdoutSums);
+  let maxStd = Number.NaN;
+  let maxStdColumn = -1;
+  let maxAbs = 0;
+  for (let j = 0; j < design.p; j++) {
+    const w = Math.abs(fit.coefficients[j]);
+    if (w > maxAbs || Number.isNaN(w)) maxAbs = w;
+    if (!design.penalised[j]) continue;
+    const s = (w * columnSd[j]) / targetSd;
+    if (maxStdColumn < 0 || s > maxStd) {
+      maxStd = s;
+      maxStdColumn = j;
+    }
+  }
+  return {
+    trainRmse: tr.rmse,
+    holdoutRmse: ho.rmse,
+    trainMae: tr.mae,
+    holdoutMae: ho.mae,
+    trainR2: tr.r2,
+    holdoutR2: ho.r2,
+    gapRatio: gapRatio(tr.rmse, ho.rmse),
+    paramsPerSample: design.p / train.rows,
+    maxStdCoefficient: maxStd,
+    maxStdCoefficientColumn: maxStdColumn,
+    maxAbsCoefficient: maxAbs,
+    columnSd,
+    targetSd,
+    targetRange: range(train.y, train.rows),
+  };
+}
+
+/**
+ * The shipped coefficients scored on the same rows, or null when the descriptor ships none.
+ * @throws InputError `coefficients-length` when their count is not the design's
+ */
+function shippedScore(descriptor: Descriptor, design: Design, tables: ModelTables, fit: FitResult): ShippedScore | null {
+  const shipped = descriptor.coefficients;
+  if (shipped === null) return null;
+  if (shipped.length !== design.p) {
+    throw new InputError(
+      'coefficients-length',
+      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
+      { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
+    );
+  }
+  return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+}

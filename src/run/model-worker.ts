@@ -1,0 +1,111 @@
+/**
+ * Models on worker threads: the main thread sends each model's descriptor (with the settings
+ * file and, when comparing with a base commit, that model's base outcome) as plain data; a
+ * worker reads the model's files from the same repository root, fits it, runs its checks and
+ * sends the ModelResult back. Results come back in descriptor order, identical to a serial run.
+ *
+ * The worker runs this very module's file. The CLI is bundled into one file, so there the
+ * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
+ * (it asks isFitgateWorker() of worker-role.ts first), and this module's top level starts the worker loop.
+ * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
+ * worker threads cannot load it and models run serially.
+ */
+import { fileURLToPath } from 'node:url';
+import { workerData } from 'node:worker_threads';
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { evaluateModel, type BaseInput } from './evaluate.js';
+import { createFsRepository } from '../repo/fs-repository.js';
+import type { RepoReader } from '../repo/types.js';
+import type { ModelResult } from '../result/result.js';
+import { runPool, serveTasks } from './pool.js';
+import { isFitgateWorker, WORKER_FLAG } from './worker-role.js';
+
+
+/** What every model worker receives as `workerData`. */
+interface ModelWorkerData {
+  [WORKER_FLAG]: true;
+  /** Absolute repository root the worker reads from. */
+  root: string;
+  settings: SettingsFile;
+}
+
+/** One model to evaluate. */
+interface ModelTask {
+  descriptor: Descriptor;
+  /** The base commit's outcome of this model (null: new), or undefined when not comparing. */
+  baseline?: ModelResult | null;
+  commit?: string;
+}
+
+/** True in a model worker thread started by {@link evaluateModels} (the only kind of fitgate worker). */
+export function isModelWorker(): boolean {
+  return isFitgateWorker();
+}
+
+/**
+ * The file a worker should run: this module's own file, or null when it is not plain JavaScript
+ * (then worker threads cannot load it and models run serially).
+ */
+export function workerScript(): string | null {
+  const url = import.meta.url;
+  if (!url.startsWith('file:') || !/\.(m?js|cjs)$/.test(url)) return null;
+  return fileURLToPath(url);
+}
+
+/** How to evaluate a list of models. */
+export interface EvaluateModelsOptions {
+  /** Largest number of worker threads; 1 (the default) runs serially on this thread. */
+  jobs?: number;
+  /**
+   * Absolute root of the repository on disk, for the workers to read from. Workers are used only
+   * when it is given (a reader in memory or on a git commit cannot cross threads). Default none.
+   */
+  root?: string;
+  /** The base commit's outcomes to compare with. Default none. */
+  base?: BaseInput;
+}
+
+/**
+ * Evaluates models, on worker threads when that is possible and worth it (more than one model,
+ * `jobs` > 1, a disk root, and a JavaScript module file), serially otherwise.
+ * @param repo the repository reader (used by the serial path)
+ * @param descriptors the models, in report order
+ * @param settings the settings file
+ * @param options workers and base comparison; default serial, no comparison
+ * @returns one ModelResult per descriptor, in the same order
+ */
+export async function evaluateModels(
+  repo: RepoReader,
+  descriptors: readonly Descriptor[],
+  settings: SettingsFile,
+  options: EvaluateModelsOptions = {},
+): Promise<ModelResult[]> {
+  const jobs = Math.min(options.jobs ?? 1, descriptors.length);
+  const script = workerScript();
+  if (jobs <= 1 || options.root === undefined || script === null) {
+    const results: ModelResult[] = [];
+    for (const descriptor of descriptors) results.push(await evaluateModel(repo, descriptor, settings, options.base));
+    return results;
+  }
+  const base = options.base;
+  const tasks: ModelTask[] = descriptors.map((descriptor) =>
+    base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor },
+  );
+  const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
+  return runPool<ModelTask, ModelResult>(tasks, { jobs, script, workerData: data });
+}
+
+/** The worker loop: evaluate each model task sent by the pool. */
+function startModelWorker(): void {
+  const data = workerData as ModelWorkerData;
+  const repo = createFsRepository(data.root);
+  serveTasks<ModelTask, ModelResult>((task) => {
+    const base: BaseInput | undefined =
+      task.baseline === undefined
+        ? undefined
+        : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
+    return evaluateModel(repo, task.descriptor, data.settings, base);
+  });
+}
+
+if (isModelWorker()) startModelWorker();

@@ -1,0 +1,70 @@
+/**
+ * The whole run: settings file -> descriptors -> one outcome per model -> Result.
+ * No output of its own: reporters format the Result; the entry points decide the exit status.
+ */
+import { checkUniqueNames, loadDescriptor } from '../config/descriptor.js';
+import { discoverDescriptors } from '../config/discover.js';
+import { loadSettings } from '../config/settings-file.js';
+import type { Descriptor } from '../config/types.js';
+import { InputError } from '../core/errors.js';
+import { errorResult } from './error-result.js';
+import { evaluateModels } from './model-worker.js';
+import type { RepoReader } from '../repo/types.js';
+import { summarise, type ModelResult, type Result } from '../result/result.js';
+import type { Settings } from './settings.js';
+import { formatShard, selectShard, type Shard } from './shard.js';
+import { VERSION } from '../core/version.js';
+
+/** Optional inputs of a run besides its settings. */
+export interface PipelineOptions {
+  /**
+   * Outcomes of the same models on the base commit of a pull request, by model name. When
+   * given, every model gets a `base` comparison (`new` when its name is absent) and the
+   * `base-change` check can judge it. Default: no comparison.
+   */
+  baseline?: ReadonlyMap<string, ModelResult>;
+  /** Full SHA of the commit the baseline comes from (recorded in each comparison). Default empty. */
+  baseCommit?: string;
+  /** Messages about the run as a whole, added to `result.notes`. Default none. */
+  notes?: string[];
+  /** Check only this shard of the descriptors (see shard.ts for the rule). Default: all of them. */
+  shard?: Shard | null;
+  /**
+   * Largest number of worker threads to run models on. Default 1 (serial). Workers are used only
+   * when `root` is given too and there is more than one model; results are the same either way.
+   */
+  jobs?: number;
+  /** Absolute repository root on disk for worker threads to read from. Default none (serial). */
+  root?: string;
+}
+
+/**
+ * Checks every model of a run.
+ * Problems with the settings file or the list of descriptors throw an InputError (nothing can be
+ * checked). A descriptor or data file that is bad makes that model's verdict `error`; every
+ * other model is still checked, so the Result always has every model's outcome.
+ * @param settings what to check
+ * @param repo the repository's files
+ * @param options baseline of a base commit and run notes; default none
+ */
+export async function runPipeline(settings: Settings, repo: RepoReader, options: PipelineOptions = {}): Promise<Result> {
+  const file = await loadSettings(repo, settings.config, { explicit: settings.configExplicit });
+  const shard = options.shard ?? null;
+  const paths = selectShard(await discoverDescriptors(repo, file, settings.descriptors), shard);
+  const models: ModelResult[] = [];
+  const loaded: Descriptor[] = [];
+  for (const path of paths) {
+    try {
+      loaded.push(await loadDescriptor(repo, path, file));
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      models.push(errorResult(path, path, error));
+    }
+  }
+  checkUniqueNames(loaded);
+  const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
+  models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
+  const notes = [...(options.notes ?? [])];
+  if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+  return summarise(models, VERSION, notes);
+}

@@ -1,0 +1,90 @@
+/**
+ * A model's plan, made before any pass over its rows: read the columns it needs, fix the terms'
+ * parameters from the training rows, check the design's size and the target against the caps,
+ * and assign the cross-validation folds.
+ */
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { InputError } from '../core/errors.js';
+import { loadModelData, type ModelTables } from '../data/load-model-data.js';
+import { createDesign, type Design } from '../design/design-matrix.js';
+import { meanAndSd } from '../design/stats.js';
+import { createTerm, termInputs } from '../design/terms/index.js';
+import { assignFolds, type Folds } from '../diagnostics/folds.js';
+import { firstBeyond } from '../kernels/index.js';
+import type { RepoReader } from '../repo/types.js';
+
+/**
+ * Largest number of design columns. The diagnostics take singular value decompositions of p x p
+ * factors (several per model and fold when the design is rank deficient), whose cost grows with
+ * p^3: at 200 columns each takes about 0.4 s here, so a pull request cannot make a run take hours.
+ */
+export const MAX_PARAMETERS = 200;
+
+/**
+ * Largest magnitude of a design value or target: sums of squares of up to 1e9 rows must stay
+ * finite in double precision (1e140^2 * 1e9 = 1e289 < 1.8e308).
+ */
+export const MAX_MAGNITUDE = 1e140;
+
+/** What the passes over a model's rows work from. */
+export interface ModelPlan {
+  descriptor: Descriptor;
+  tables: ModelTables;
+  /** The design with every term's parameters fixed from the training rows. */
+  design: Design;
+  /** Cross-validation folds of the training rows (from the descriptor's `fit` settings). */
+  folds: Folds;
+  /** Population standard deviation of the training target (> 0). */
+  targetSd: number;
+}
+
+/**
+ * Plans one model.
+ * @throws InputError for bad data, a design over the caps, a target out of range or constant
+ */
+export async function planModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<ModelPlan> {
+  const inputs: string[] = [];
+  for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
+  const tables = await loadModelData(repo, descriptor, inputs, settings);
+  const { train } = tables;
+  const file = descriptor.file;
+
+  // Fix term parameters from the training rows, then check the size before taking memory.
+  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file));
+  const design = createDesign(terms, descriptor.fit.intercept);
+  const p = design.p;
+  if (p > MAX_PARAMETERS) {
+    throw new InputError(
+      'too-many-parameters',
+      `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`,
+      { file, line: descriptor.termsLine, key: 'terms' },
+    );
+  }
+  if (train.rows * p > settings.caps.maxCells) {
+    throw new InputError(
+      'too-large',
+      `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`,
+      { file, line: descriptor.termsLine, key: 'terms' },
+    );
+  }
+  for (const data of [train, tables.holdout]) {
+    const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
+    if (i >= 0) {
+      throw new InputError(
+        'target-range',
+        `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
+        { file, line: descriptor.data.lines.target, key: 'data.target' },
+      );
+    }
+  }
+  const targetStats = meanAndSd(train.y, train.rows);
+  if (!(targetStats.sd > 0)) {
+    throw new InputError(
+      'constant-target',
+      `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`,
+      { file, line: descriptor.data.lines.target, key: 'data.target' },
+    );
+  }
+  const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+  return { descriptor, tables, design, folds, targetSd: targetStats.sd };
+}

@@ -1,0 +1,290 @@
+// The WebAssembly row kernels (src/kernels/kernels.wat, src/kernels/wasm.ts) against the
+// JavaScript they stand in for: the same results to the bit, on random data and on the edge cases
+// of each kernel (zero columns, the rescaled sums of squares, zero weights, scattered folds, values
+// that are not finite), and an up-to-date generated module.
+import { spawnSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { afterEach, describe, expect, it } from 'vitest';
+import { crossValidate, outOfFoldErrors } from '../../src/diagnostics/cross-validation.js';
+import { assignFolds } from '../../src/diagnostics/folds.js';
+import { fitFactor, leveragesInto, RefinementPass, refinementApplies } from '../../src/fit/index.js';
+import { QrAccumulator } from '../../src/fit/qr-accumulator.js';
+import { useWasmKernels, wasmKernels } from '../../src/kernels/wasm.js';
+import { addProducts } from '../../src/design/blocks.js';
+// @ts-expect-error the generator is a plain ES module without types
+import { generate } from '../tools/gen-wasm.mjs';
+import { fitRows, linearDesign, randomRows } from '../diagnostics/helpers.js';
+import { seeded } from '../fit/helpers.js';
+import { createTerm } from '../../src/design/terms/index.js';
+import { loadDescriptor } from '../../src/config/descriptor.js';
+import { loadSettings } from '../../src/config/settings-file.js';
+import { createDesign } from '../../src/design/design-matrix.js';
+import { evaluateModel } from '../../src/run/evaluate.js';
+import { createMemoryRepository } from '../../src/repo/memory-repository.js';
+import { descriptor } from '../checks/context.js';
+
+afterEach(() => {
+  useWasmKernels(true);
+});
+
+/** Runs `compute` with the JavaScript kernels and with the WebAssembly ones. */
+function both<T>(compute: () => T): { js: T; wasm: T } {
+  useWasmKernels(false);
+  const js = compute();
+  useWasmKernels(true);
+  const wasm = compute();
+  return { js, wasm };
+}
+
+/** {@link both} for asynchronous work. */
+async function bothAsync<T>(compute: () => Promise<T>): Promise<{ js: T; wasm: T }> {
+  useWasmKernels(false);
+  const js = await compute();
+  useWasmKernels(true);
+  const wasm = await compute();
+  return { js, wasm };
+}
+
+/** The first index where two arrays differ in their bits (-0 and 0 differ), or -1. */
+function firstBitDifference(a: ArrayLike<number>, b: ArrayLike<number>): number {
+  if (a.length !== b.length) return Math.min(a.length, b.length);
+  const x = new Float64Array(1);
+  const y = new Float64Array(1);
+  const xb = new BigUint64Array(x.buffer);
+  const yb = new BigUint64Array(y.buffer);
+  for (let i = 0; i < a.length; i++) {
+    x[0] = a[i];
+    y[0] = b[i];
+    if (xb[0] !== yb[0]) return i;
+  }
+  return -1;
+}
+
+function expectSameBits(label: string, a: ArrayLike<number>, b: ArrayLike<number>): void {
+  const at = firstBitDifference(a, b);
+  expect(at, `${label}: first difference at ${at} (${a[at]} against ${b[at]})`).toBe(-1);
+}
+
+/** A column-major m x p block: column c scaled by scales[c] (1 by default), some columns zero. */
+function block(m: number, p: number, seed: number, options: { scales?: number[]; zeroColumns?: number[] } = {}): { X: Float64Array; y: Float64Array } {
+  const rnd = seeded(seed);
+  const X = new Float64Array(m * p);
+  for (let j = 0; j < p; j++) {
+    const scale = options.scales?.[j] ?? 1;
+    const zero = options.zeroColumns?.includes(j) ?? false;
+    for (let i = 0; i < m; i++) X[j * m + i] = zero ? 0 : j === 0 ? scale : scale * (2 * rnd() - 1) ** (j % 3 === 2 ? 3 : 1);
+  }
+  const y = Float64Array.from({ length: m }, (_, i) => Math.sin(i * 0.7 + seed) * 3 + rnd());
+  return { X, y };
+}
+
+describe('the generated module', () => {
+  it('src/kernels/generated/kernels-wasm.ts is what test/tools/gen-wasm.mjs assembles now (run it when this fails)', async () => {
+    const committed = readFileSync(new URL('../../src/kernels/generated/kernels-wasm.ts', import.meta.url), 'utf8');
+    expect(committed === ((await generate()) as string), 'the generated module is stale: run node test/tools/gen-wasm.mjs').toBe(true);
+  });
+
+  it('is in use in this Node.js, and can be turned off', () => {
+    expect(wasmKernels()).not.toBeNull();
+    expect(useWasmKernels(false)).toBe(true);
+    expect(wasmKernels()).toBeNull();
+  });
+});
+
+describe('the QR fold', () => {
+  const cases: { label: string; m: number; p: number; options?: Parameters<typeof block>[3] }[] = [
+    { label: 'one column', m: 37, p: 1 },
+    { label: 'two columns', m: 50, p: 2 },
+    { label: 'three columns', m: 50, p: 3 },
+    { label: 'eleven columns over several work pieces', m: 3000, p: 11 },
+    { label: 'twenty-one columns', m: 700, p: 21 },
+    { label: 'fewer rows than columns', m: 4, p: 9 },
+    { label: 'zero columns (no reflector)', m: 120, p: 7, options: { zeroColumns: [2, 5] } },
+    { label: 'tiny and huge columns (rescaled sums of squares)', m: 200, p: 6, options: { scales: [1, 1e-170, 1e170, 1e-300, 1, 1e155] } },
+  ];
+  for (const { label, m, p, options } of cases) {
+    it(`${label}: R, Q^T y and the residual sum of squares are the same bits`, () => {
+      const { js, wasm } = both(() => {
+        const acc = new QrAccumulator(p);
+        const first = block(m, p, 11, options);
+        acc.addRows(first.X, first.y, m);
+        const second = block(Math.ceil(m / 3), p, 12, options);
+        acc.addRows(second.X, second.y, Math.ceil(m / 3));
+        const other = new QrAccumulator(p);
+        const third = block(m, p, 13, options);
+        other.addRows(third.X, third.y, m);
+        acc.merge(other);
+        return { R: Float64Array.from(acc.R), qty: Float64Array.from(acc.qty), rss: acc.rss, rows: acc.rows };
+      });
+      expectSameBits('R', js.R, wasm.R);
+      expectSameBits('Q^T y', js.qty, wasm.qty);
+      expectSameBits('rss', [js.rss], [wasm.rss]);
+      expect(wasm.rows).toBe(js.rows);
+    });
+  }
+
+  for (const [where, column] of [
+    ['X', 3],
+    ['y', -1],
+  ] as const) {
+    it(`a value that is not finite in ${where}: the same error, and the same state after it (earlier pieces folded)`, () => {
+      const m = 6000;
+      const p = 5;
+      const { js, wasm } = both(() => {
+        const acc = new QrAccumulator(p);
+        const { X, y } = block(m, p, 21);
+        if (column >= 0) X[column * m + 5000] = Number.POSITIVE_INFINITY;
+        else y[5500] = Number.NaN;
+        let message = '';
+        try {
+          acc.addRows(X, y, m);
+        } catch (error) {
+          message = String(error);
+        }
+        return { message, R: Float64Array.from(acc.R), qty: Float64Array.from(acc.qty), rss: acc.rss, rows: acc.rows };
+      });
+      expect(js.message).toBe(column >= 0 ? 'RangeError: addRows: X at row 5000, column 3 must be a finite number, got Infinity' : 'RangeError: addRows: y at row 5500 must be a finite number, got NaN');
+      expect(wasm.message).toBe(js.message);
+      expectSameBits('R', js.R, wasm.R);
+      expectSameBits('Q^T y', js.qty, wasm.qty);
+      expectSameBits('rss', [js.rss], [wasm.rss]);
+      expect(wasm.rows).toBe(0);
+      expect(js.rss, 'the pieces before the bad value were folded').toBeGreaterThan(0);
+    });
+  }
+});
+
+describe('the refinement pass and the leverages', () => {
+  // Powers of x in [0, 1] up to x^8: scaled condition number far above 100, so the pass applies.
+  const n = 900;
+  const p = 9;
+  const x = Float64Array.from({ length: n }, (_, i) => (i + 0.5) / n);
+  const X = new Float64Array(n * p);
+  for (let j = 0; j < p; j++) for (let i = 0; i < n; i++) X[j * n + i] = x[i] ** j;
+  const y = Float64Array.from(x, (v, i) => Math.exp(v) + 0.01 * Math.sin(i));
+
+  it('refined coefficients and residual sum of squares are the same bits', () => {
+    const { js, wasm } = both(() => {
+      const acc = new QrAccumulator(p);
+      acc.addRows(X, y, n);
+      const fit = fitFactor(acc, { ridge: 0.001, penalised: Array.from({ length: p }, (_, j) => j > 0) });
+      expect(refinementApplies(fit), `scaled condition number ${fit.conditionNumberScaled}`).toBe(true);
+      const pass = new RefinementPass(fit);
+      // Two blocks, as forEachBlock would give them.
+      const half = 400;
+      const first = new Float64Array(half * p);
+      const second = new Float64Array((n - half) * p);
+      for (let j = 0; j < p; j++) {
+        first.set(X.subarray(j * n, j * n + half), j * half);
+        second.set(X.subarray(j * n + half, (j + 1) * n), j * (n - half));
+      }
+      pass.addRows(first, y.subarray(0, half), half);
+      pass.addRows(second, y.subarray(half), n - half);
+      const refined = pass.finish();
+      const h = new Float64Array(n);
+      leveragesInto(refined, X, n, h);
+      return { w: refined.coefficients, rss: refined.rss, h };
+    });
+    expectSameBits('coefficients', js.w, wasm.w);
+    expectSameBits('rss', [js.rss], [wasm.rss]);
+    expectSameBits('leverages', js.h, wasm.h);
+  });
+
+  it('a value that is not finite: the same error', () => {
+    const { js, wasm } = both(() => {
+      const acc = new QrAccumulator(p);
+      acc.addRows(X, y, n);
+      const pass = new RefinementPass(fitFactor(acc));
+      const bad = Float64Array.from(X);
+      bad[4 * n + 17] = Number.NaN;
+      try {
+        pass.addRows(bad, y, n);
+        return '';
+      } catch (error) {
+        return String(error);
+      }
+    });
+    expect(js).toBe('RangeError: X at row 17, column 4 must be a finite number, got NaN');
+    expect(wasm).toBe(js);
+  });
+});
+
+describe('predictions and out-of-fold errors', () => {
+  it('addProducts leaves out zero weights and adds in column order: the same bits', () => {
+    const m = 333;
+    const p = 10;
+    const { X } = block(m, p, 31);
+    const w = [0.5, 0, -2, 3e-3, 0, 0, 7, -0, 1e10, 0.25];
+    const { js, wasm } = both(() => {
+      const out = Float64Array.from({ length: m + 5 }, (_, i) => (i % 7 === 0 ? -0 : i / 3));
+      addProducts(out, 5, X, m, w, p);
+      return out;
+    });
+    expectSameBits('predictions', js, wasm);
+  });
+
+  for (const order of ['blocks', 'shuffled'] as const) {
+    it(`out-of-fold errors and the whole cross-validation (${order} folds): the same bits`, () => {
+      const design = linearDesign(4);
+      const rows = randomRows(5000, 4, 5);
+      const fit = fitRows(design, rows, 0.3);
+      const folds = assignFolds(rows.rows, 7, order, 9);
+      const coefficients = [0, 1].map((s) => Array.from({ length: 7 }, (_, f) => Float64Array.from({ length: design.p }, (_, j) => (j === 2 && f === s ? 0 : (j + 1) * (f + 1) * 0.1))));
+      const { js, wasm } = both(() => ({ sse: outOfFoldErrors(design, rows, folds, coefficients).sse, cv: crossValidate(design, rows, fit, folds) }));
+      for (let s = 0; s < 2; s++) expectSameBits(`sse of setting ${s}`, js.sse[s], wasm.sse[s]);
+      const figures = (cv: typeof js.cv): number[] => [cv.cvRmse, cv.loocvRmse, cv.press, cv.gcv, cv.leverageSum, cv.maxLeverage, cv.rss, ...cv.foldRmse];
+      expectSameBits('cross-validation figures', figures(js.cv), figures(wasm.cv));
+    });
+  }
+});
+
+describe('polynomial columns and the design range check', () => {
+  it('the columns of polynomial terms, standardised and raw, degrees 1 to 12: the same bits', () => {
+    const x = Float64Array.from({ length: 777 }, (_, i) => Math.cos(i * 1.3) * 40 + i / 9);
+    for (const degree of [1, 2, 5, 12]) {
+      for (const [shift, scale] of [
+        [null, null],
+        [0, 1],
+        [3.5, 0.25],
+      ] as const) {
+        const d = descriptor({ terms: [{ kind: 'polynomial', of: 'x', degree, shift, scale }], target: 'y', folds: 5 });
+        const { js, wasm } = both(() => {
+          const design = createDesign([createTerm(d.terms[0], new Map([['x', x]]), d.file)], true);
+          return design.fill([x], 0, x.length);
+        });
+        expectSameBits(`degree ${degree}, shift ${shift}, scale ${scale}`, js, wasm);
+      }
+    }
+  });
+
+  it('a design value beyond the range: the same error, naming the column, the line of the row and the term', async () => {
+    const files = {
+      'models/m.model.yml': 'version: 1\nname: m\ndata:\n  train: ../data/t.csv\n  holdout: ../data/h.csv\n  target: y\nterms:\n  - polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }\n',
+      'data/t.csv': `x,y\n${Array.from({ length: 30 }, (_, i) => `${i === 17 ? 1e30 : (i + 1) / 7},${i % 5}`).join('\n')}\n`,
+      'data/h.csv': 'x,y\n0.5,1\n',
+    };
+    const { js, wasm } = await bothAsync(async () => {
+      const repo = createMemoryRepository(files);
+      const settings = await loadSettings(repo, 'fitgate.yml');
+      const result = await evaluateModel(repo, await loadDescriptor(repo, 'models/m.model.yml', settings), settings);
+      return result.error;
+    });
+    expect(js?.code).toBe('design-overflow');
+    expect(js?.message).toMatch(/^`terms`: design column `z\(x\)\^2` is 1\.0000000000000001e\+180 at training row on line 19 of data\/t\.csv; expected values within ±1e\+140/);
+    expect(wasm).toEqual(js);
+  });
+});
+
+describe('a whole run', () => {
+  it('gives the same report where WebAssembly is not available (node --jitless) as with it', () => {
+    const root = fileURLToPath(new URL('../..', import.meta.url));
+    const run = (flags: string[]) =>
+      spawnSync(process.execPath, [...flags, 'dist/cli/index.js', 'check', '--root', 'examples', '--format', 'json', '--jobs', '1'], { cwd: root, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+    const plain = run([]);
+    const jitless = run(['--jitless']);
+    expect(plain.status, plain.stderr).toBe(1);
+    expect(jitless.status, jitless.stderr).toBe(1);
+    expect(jitless.stdout === plain.stdout, 'the two reports differ').toBe(true);
+  }, 60_000);
+});

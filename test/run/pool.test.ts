@@ -1,0 +1,77 @@
+import { describe, it, expect, beforeAll, afterAll } from 'vitest';
+import { pathToFileURL } from 'node:url';
+import path from 'node:path';
+import { transpileSources } from './transpile.js';
+
+type Task = { n: number; delayMs?: number; fail?: 'input' | 'error' };
+type Reply = { n: number; square: number; thread: number };
+type PoolModule = {
+  runPool: (tasks: Task[], options: { jobs: number; script: string | URL; workerData?: unknown }) => Promise<Reply[]>;
+  defaultJobs: () => number;
+};
+type ErrorsModule = { InputError: new (...args: never[]) => Error & { code: string; location: Record<string, unknown> } };
+
+const script = new URL('./fixtures/task-worker.mjs', import.meta.url);
+let lib: { dir: string; remove: () => void };
+let pool: PoolModule;
+let errors: ErrorsModule;
+let workerData: { lib: string };
+
+beforeAll(async () => {
+  lib = transpileSources();
+  pool = (await import(pathToFileURL(path.join(lib.dir, 'run', 'pool.js')).href)) as PoolModule;
+  errors = (await import(pathToFileURL(path.join(lib.dir, 'core', 'errors.js')).href)) as ErrorsModule;
+  workerData = { lib: pathToFileURL(lib.dir).href };
+});
+afterAll(() => lib?.remove());
+
+describe('runPool', () => {
+  it('returns no results for no tasks without starting workers', async () => {
+    await expect(pool.runPool([], { jobs: 4, script, workerData })).resolves.toEqual([]);
+  });
+
+  it('returns results in task order when later tasks finish first', async () => {
+    // Early tasks are slow, late ones fast: finishing order differs from task order.
+    const tasks: Task[] = Array.from({ length: 12 }, (_, i) => ({ n: i, delayMs: i < 3 ? 60 - 20 * i : 0 }));
+    const results = await pool.runPool(tasks, { jobs: 3, script, workerData });
+    expect(results.map((r) => r.n), 'result order = task order').toEqual(tasks.map((t) => t.n));
+    expect(results.map((r) => r.square)).toEqual(tasks.map((t) => t.n * t.n));
+    const threads = new Set(results.map((r) => r.thread));
+    expect(threads.size, `threads used: ${[...threads].join(', ')}`).toBeGreaterThan(1);
+    expect(threads.size).toBeLessThanOrEqual(3);
+  });
+
+  it('starts no more workers than tasks or jobs', async () => {
+    const results = await pool.runPool([{ n: 1 }, { n: 2 }], { jobs: 8, script, workerData });
+    expect(new Set(results.map((r) => r.thread)).size).toBeLessThanOrEqual(2);
+    const serial = await pool.runPool(Array.from({ length: 5 }, (_, n) => ({ n })), { jobs: 1, script, workerData });
+    expect(new Set(serial.map((r) => r.thread)).size, 'jobs 1 uses one worker').toBe(1);
+  });
+
+  it('hands an InputError back as an InputError with code and location', async () => {
+    const run = pool.runPool([{ n: 1 }, { n: 7, fail: 'input' }, { n: 3 }], { jobs: 2, script, workerData });
+    const error = await run.catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(errors.InputError);
+    const e = error as Error & { code: string; location: Record<string, unknown> };
+    expect(e.code).toBe('test-code');
+    expect(e.message).toBe('bad task 7');
+    expect(e.location).toEqual({ file: 'task.csv', line: 7, key: 'n' });
+  });
+
+  it('hands other errors back with name and message', async () => {
+    const error = (await pool.runPool([{ n: 4, fail: 'error' }], { jobs: 2, script, workerData }).catch((e: unknown) => e)) as Error;
+    expect(error).toBeInstanceOf(Error);
+    expect(error).not.toBeInstanceOf(errors.InputError);
+    expect(error.name).toBe('TypeError');
+    expect(error.message).toBe('broken task 4');
+  });
+
+  it('rejects when a worker script cannot start', async () => {
+    const missing = new URL('../parallel/fixtures/no-such-worker.mjs', import.meta.url);
+    await expect(pool.runPool([{ n: 1 }], { jobs: 1, script: missing, workerData })).rejects.toThrow();
+  });
+
+  it('sizes the default to the cores', () => {
+    expect(pool.defaultJobs()).toBeGreaterThanOrEqual(1);
+  });
+});
