@@ -26,11 +26,11 @@ function yamlBlockUnder(markdown: string, heading: string): string | null {
   return null;
 }
 
-describe('README "Use it in a workflow"', () => {
+describe('README "In a workflow"', () => {
   it('shows exactly examples/workflows/fitgate.yml', () => {
     expect(existsSync(fileURLToPath(new URL('README.md', root))), 'README.md is missing').toBe(true);
-    const block = yamlBlockUnder(read('README.md'), 'Use it in a workflow');
-    expect(block, 'README.md has no ```yaml block under a heading "Use it in a workflow"').not.toBeNull();
+    const block = yamlBlockUnder(read('README.md'), 'In a workflow');
+    expect(block, 'README.md has no ```yaml block under a heading "In a workflow"').not.toBeNull();
     expect(block).toBe(read('examples/workflows/fitgate.yml'));
   });
 
@@ -74,7 +74,7 @@ describe('action.yml', () => {
     expect(workflow.permissions).toEqual({ contents: 'read', 'pull-requests': 'write' });
     const steps = Object.values(workflow.jobs).flatMap((j) => j.steps);
     const step = steps.find((s) => s.uses?.endsWith('/fitgate@v1'));
-    // The everyday inputs; sarif, junit and shard have their own examples in the README.
+    // The everyday inputs; sarif, junit and shard have their own examples in docs/reports.md and docs/scale.md.
     const everyday = Object.keys(INPUT_DEFAULTS).filter((k) => !['github-token', 'sarif', 'junit', 'shard'].includes(k));
     expect(Object.keys(step?.with ?? {}).sort()).toEqual(everyday.sort());
     expect(steps.find((s) => s.uses?.startsWith('actions/checkout@'))?.with?.['fetch-depth']).toBe(2);
