@@ -350,9 +350,13 @@ function axisLabel(column) {
  * (HTML, Markdown, XML).
  */
 
-/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
+/** A check's limits: `warn > 0.25, fail > 0.5`, floors as `warn < 0.8, fail < 0.6`, or `off`. */
 function limitText(c) {
     const parts = [];
+    if (c.floor?.warn != null)
+        parts.push(`warn < ${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.floor.warn)}`);
+    if (c.floor?.fail != null)
+        parts.push(`fail < ${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.floor.fail)}`);
     if (c.warn !== null)
         parts.push(`warn > ${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .Z)(c.warn)}`);
     if (c.limit !== null)

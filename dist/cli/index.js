@@ -44,6 +44,8 @@ __nccwpck_require__.d(__webpack_exports__, {
   k_: () => (/* binding */ runCheck)
 });
 
+// UNUSED EXPORTS: registryLimitKeys
+
 // EXTERNAL MODULE: ./src/result/result.ts
 var result = __nccwpck_require__(1628);
 // EXTERNAL MODULE: ./src/core/format.ts
@@ -61,7 +63,13 @@ const check = {
     id: 'base-change',
     title: 'Change against the base commit',
     limitKey: 'base_change',
-    description: 'Relative change of the hold-out RMSE against the same model (by name) on the base commit of the pull request: (RMSE_head - RMSE_base) / RMSE_base, so 0.1 means 10 % worse; infinite when the base RMSE is 0 and the head RMSE is not. Skipped for models new in the pull request, when the base model could not be checked, and when the base commit is not available. Off by default; set `base_change` to a fraction to use it.',
+    defaultLimit: 'off',
+    direction: 'above',
+    limitSummary: 'Relative change of the hold-out RMSE against the same model on the base branch.',
+    description: `- Default \`off\`. Points at the \`fit\` line.
+- Figure: (hold-out RMSE now - hold-out RMSE on the base commit) / hold-out RMSE on the base
+  commit, for pull requests (the action) or \`fitgate check --base REF\`. Skipped for models new in
+  the pull request and when no base commit is available. \`base_change: 0.1\` allows 10 % worse.`,
     advice: 'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
     line: (d) => d.termsLine,
     measure({ metrics, baseline }) {
@@ -87,7 +95,15 @@ const coefficient_size_check = {
     id: 'coefficient-size',
     title: 'Coefficient size',
     limitKey: 'coefficient',
-    description: 'The largest standardised coefficient max_j |w_j| * sd(phi_j) / sd(y) over the non-intercept design columns, with population standard deviations over the training rows: the change in the prediction, in target standard deviations, for one standard deviation of that column (standardised regression coefficient; Draper & Smith, Applied Regression Analysis, 3rd ed., 1998, section 16.3). Huge values mean columns cancel each other, the signature of an overfit or ill-conditioned fit.',
+    defaultLimit: 25,
+    direction: 'above',
+    limitSummary: 'Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.',
+    description: `- Default \`25\`. Points at the term whose column has the largest figure.
+- Figure: max over non-intercept columns of |w_j| * sd(phi_j) / sd(y), population standard
+  deviations over the training rows: the change of the prediction, in target standard deviations,
+  for one standard deviation of that column (standardised regression coefficient; Draper & Smith,
+  Applied Regression Analysis, 3rd ed., 1998, section 16.3). Huge values mean that columns cancel
+  each other, the signature of an overfit or ill-conditioned fit.`,
     advice: 'Add a ridge penalty (`fit.ridge`) or remove nearly collinear terms so that columns stop cancelling each other.',
     line: (d) => d.fit.ridgeLine,
     measure({ metrics, design }) {
@@ -112,7 +128,15 @@ const generalisation_gap_check = {
     id: 'generalisation-gap',
     title: 'Generalisation gap',
     limitKey: 'gap_ratio',
-    description: 'Hold-out RMSE divided by training RMSE, RMSE = sqrt(mean((y - yhat)^2)). A model that has learnt noise scores far better on the rows it was fitted to than on new rows (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.2). Infinite when the training RMSE is 0 and the hold-out RMSE is not.',
+    defaultLimit: 1.5,
+    direction: 'above',
+    limitSummary: 'Hold-out RMSE divided by training RMSE.',
+    description: `- Default \`1.5\`. Points at the \`fit\` line.
+- Figure: hold-out RMSE / training RMSE, RMSE = sqrt(mean((y - yhat)^2)). Infinite when the
+  training RMSE is 0 and the hold-out RMSE is not (a model that interpolates its training rows); 1
+  when both are 0. A model that has learnt noise scores far better on the rows it was fitted to than
+  on new rows (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
+  section 7.2). The default 1.5 is common practice, not a law: set it per model.`,
     advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
     line: (d) => d.fit.line,
     measure({ metrics }) {
@@ -130,7 +154,15 @@ const parameter_ratio_check = {
     id: 'parameter-ratio',
     title: 'Parameters per row',
     limitKey: 'params_per_sample',
-    description: 'Number of fitted parameters p (columns of the design, intercept included) divided by the number of training rows n. With p = n a least-squares fit interpolates its training rows exactly. Default limit 0.1, that is at least 10 rows per parameter (common practice). With `fit.parameter_count: effective` a ridge model counts its effective degrees of freedom instead, df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, eq. 3.50).',
+    defaultLimit: 0.1,
+    direction: 'above',
+    limitSummary: 'Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).',
+    description: `- Default \`0.1\` (common practice: at least 10 training rows per
+  fitted parameter). Points at the \`terms\` line.
+- Figure: p / n, p the columns of the design (intercept included), n the training rows. With
+  p = n a least-squares fit interpolates its training rows exactly. With \`fit.parameter_count:
+  effective\`, the effective degrees of freedom of a ridge fit take the place of p:
+  df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (ESL eq. 3.50).`,
     advice: 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.',
     line: (d) => (d.fit.parameterCount === 'effective' ? d.fit.ridgeLine : d.termsLine),
     measure({ metrics, design, train, fit, descriptor }) {
@@ -466,7 +498,36 @@ const complexity_check = {
     id: 'complexity',
     title: 'Simpler setting',
     limitKey: 'complexity',
-    description: "Sweeps the model's main complexity setting and cross-validates every setting on the model's folds: the ridge penalty when `fit.ridge` is above 0 (or the model has only linear terms), lambda = s x 10^t for t = 3, 2.5, ..., -6 with s = trace(X^T X) / p, plus the current lambda; else the degree of the polynomial term of highest degree, 1 .. min(degree + 3, 15); else the width of the first radial term, the current width times 2^t for t = 4 .. -2. The suggestion is the simplest setting whose mean fold MSE is within one standard error (sample standard deviation of the fold MSEs / sqrt(k)) of the smallest (the one-standard-error rule: Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10); it is shown as a notice at the term's line (or `fit.ridge`'s) whenever it differs from the current setting. The figure is the current setting's k-fold CV RMSE divided by the suggested setting's: 1 or less when the current setting is already as good. A ridge sweep uses every training row; above 50,000 training rows a degree or width sweep uses an even-stride subsample of 50,000 rows. The whole curve is in the detail.",
+    defaultLimit: { warn: 1.5 },
+    direction: 'above',
+    limitSummary: 'Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.',
+    description: `- Default \`{ warn: 1.5 }\` (see below). Points at the line to change:
+  the swept term's line, or \`fit.ridge\`'s line (the \`fit\` line when \`ridge\` is not written).
+- What is swept (one setting per model, the same folds as \`cross-validation\`):
+  - \`fit.ridge\` above 0, or a model of linear terms only: the ridge penalty lambda = s x 10^t for
+    t = 3, 2.5, ..., -6 with s = trace(X^T X) / p of the model's design, plus the current lambda
+    (20 settings at most); simplest = largest lambda. The design does not change, so the model's
+    own per-fold factors serve every lambda: one SVD per fold complement gives every lambda's
+    coefficients (ESL eq. 3.47, the unpenalised intercept eliminated from the factor's first
+    row), and each fold's squared errors come from its factor
+    (||y_f - X_f w||^2 = ||Q_f^T y_f - R_f w||^2 + the fold's residual sum of squares): no pass over
+    the rows, every row used.
+  - else the polynomial term of highest degree: degrees 1 .. min(degree + 3, 15);
+  - else the first radial term: its width times 2^t for t = 4, 3, ..., -2; simplest = widest.
+- Each setting's k-fold error: the mean of the fold MSEs and its standard error (sample standard
+  deviation of the fold MSEs / sqrt(k)). The suggestion is the simplest setting whose mean is within
+  one standard error of the smallest mean (the one-standard-error rule: Hastie, Tibshirani &
+  Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10). When it differs from
+  the current setting it is shown as a notice at the line to change, e.g. \`degree 3 (k-fold CV RMSE
+  0.47 against 24.9 now)\`.
+- Figure: the current setting's k-fold CV RMSE / the suggested setting's (1 or less when the current
+  setting is as good). The default warns above 1.5: the suggestion is then clearly better,
+  not only simpler; a notice alone is given otherwise, and the check never fails by default.
+- Above 50,000 training rows a degree or width sweep uses a subsample of 50,000 rows at an even
+  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row.
+- Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\` or
+  \`ridge\`), \`folds\`, \`rows\`, \`subsampled\`, \`rule\`, indices \`chosen\`, \`best\`, \`current\`, and \`curve\`:
+  \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
     advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
     line: (d) => d.fit.line,
     measure(context) {
@@ -519,7 +580,19 @@ const conditioning_check = {
     id: 'conditioning',
     title: 'Conditioning of the design',
     limitKey: 'condition',
-    description: '2-norm condition number s_max / s_min of the design with every column scaled to unit length, from the singular values of the triangular factor R of its QR factorisation (Golub & Van Loan, Matrix Computations, 4th ed., 2013, sections 2.6 and 5.3; column scaling as in van der Sluis 1969, Numerische Mathematik 14). Infinite when the design is rank deficient. A large value means some columns are nearly linear combinations of others, so their coefficients are poorly determined; the message names the columns that take part in the most nearly collinear combination (weight |v_j| >= 0.1 in the right singular vector of the smallest singular value) and points at the first of their terms. Default: warn above 1e8 (common practice).',
+    defaultLimit: { warn: 1e8 },
+    direction: 'above',
+    limitSummary: '2-norm condition number of the column-scaled design matrix.',
+    description: `- Default \`{ warn: 1e8 }\` (common practice). Points at the first term that has
+  a nearly collinear column (the \`fit\` line when it is only the intercept).
+- Figure: the 2-norm condition number s_max / s_min of the design with every column scaled to unit
+  length, from the singular values of the triangular factor R of its QR factorisation (Golub & Van
+  Loan, Matrix Computations, 4th ed., 2013, sections 2.6 and 5.3; column scaling: van der Sluis 1969,
+  Numerische Mathematik 14). Infinite for a rank-deficient design.
+- The message names the columns with weight |v_j| >= 0.1 in the right singular vector of the
+  smallest singular value (the most nearly collinear combination) when the figure is above 1e3.
+- Metric \`condition_number_scaled\`. Detail: \`collinear_columns\`, \`collinear_term_lines\`, \`rank\`,
+  \`singular_values_scaled\`.`,
     advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
     line: (d) => d.termsLine,
     measure({ fit, design, descriptor }) {
@@ -558,7 +631,33 @@ const cross_validation_check = {
     id: 'cross-validation',
     title: 'Cross-validation',
     limitKey: 'cv_ratio',
-    description: 'k-fold cross-validation RMSE divided by training RMSE. The rows are split into k folds (`fit.folds`, default 5; `fit.fold_order: shuffled` from `fit.seed`, the default, or `blocks`: contiguous blocks in file order, the first n mod k folds one row longer); each fold is predicted by the fit on the other folds with the same ridge penalty, and cv_rmse = sqrt(sum of all squared out-of-fold errors / n) (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10). Also reported: leave-one-out RMSE sqrt(mean((e_i / (1 - h_ii))^2)) from the PRESS residuals (Allen 1974, Technometrics 16(1)), with h_ii the leverages (infinite when a row has leverage 1), generalised cross-validation GCV = mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979, Technometrics 21(2)), and the effective degrees of freedom df = trace of the hat matrix = sum of the leverages, sum_j d_j^2 / (d_j^2 + lambda) for ridge (ESL eq. 3.50). Infinite when the training RMSE is 0 and the CV RMSE is not.',
+    defaultLimit: 'off',
+    direction: 'above',
+    limitSummary: 'Pooled k-fold cross-validation RMSE divided by training RMSE.',
+    description: `- Default \`off\`. Points at the \`fit\` line.
+- Figure: k-fold CV RMSE / training RMSE (infinite when the training RMSE is 0 and the CV RMSE is not).
+- Folds: \`fit.folds\` (default 5; fewer rows than folds gives one row per fold), \`fit.fold_order\`:
+  \`shuffled\` (default; a Fisher-Yates shuffle driven by a seeded 32-bit generator, seed \`fit.seed\`,
+  default 1, recorded in the detail) or \`blocks\` (contiguous blocks in file order, right for rows
+  ordered in time). In both orders the first n mod k folds hold floor(n/k) + 1 rows, the others
+  floor(n/k).
+- cv_rmse = sqrt(sum over all rows of (y_i - yhat_(-fold(i)))^2 / n), pooled over rows; the RMSE of
+  each fold is in the detail. The fit without fold f uses the same terms (fixed from all training
+  rows) and the same ridge penalty. No refit from scratch: each fold's rows are folded into their own
+  QR factor in one pass; the factor without fold f is the merge of the others (Hastie, Tibshirani &
+  Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10).
+- Leave-one-out by the PRESS residuals e_i / (1 - h_ii) (Allen 1974, Technometrics 16(1)):
+  loocv_rmse = sqrt(mean((e_i / (1 - h_ii))^2)), with e_i the full fit's residual and
+  h_ii = x_i^T (X^T X + lambda E^T E)^+ x_i its leverage (exact for ridge with the same penalty). A row
+  with leverage 1 (within 1e-10: the fit interpolates it) makes the figure infinite; the detail counts
+  such rows.
+- GCV = mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979, Technometrics 21(2)); infinite when df >= n.
+- Effective degrees of freedom df = trace of the hat matrix = sum of the leverages; for ridge on
+  every column sum_j d_j^2 / (d_j^2 + lambda) with d_j the singular values of the design (ESL eq. 3.50);
+  p for least squares of full rank.
+- Metrics: \`cv_rmse\`, \`loocv_rmse\`, \`gcv\`, \`effective_df\`, \`effective_df_per_sample\`, \`cv_folds\`.
+  Detail: \`folds\`, \`fold_order\`, \`seed\`, \`fold_rows\`, \`fold_rmse\`, \`cv_rmse\`, \`loocv_rmse\`, \`press\`,
+  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
     advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
     line: (d) => d.fit.line,
     measure(context) {
@@ -614,7 +713,24 @@ const leakage_check = {
     id: 'leakage',
     title: 'Hold-out rows in the training data',
     limitKey: 'leakage',
-    description: "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
+    defaultLimit: 0,
+    direction: 'above',
+    limitSummary: 'Hold-out rows that also appear in the training data (the default 0 fails when there is any).',
+    description: `- Default \`0\` (fail when any row repeats; common practice: hold-out rows must
+  be unseen). Points at \`data.holdout\`.
+- Figure: the number of hold-out rows whose values in every input column of the model equal those of
+  some training row (exact comparison of the parsed numbers, -0 equal to 0; found through a hash of
+  the values' bit patterns, confirmed value by value). The message says how many of them repeat the
+  target too, and names the first 5 lines of the hold-out file and the first matching training line
+  of each.
+- Metrics: \`holdout_rows_in_training\` (the figure) and \`leaked_rows\`: hold-out rows equal to a
+  training row in the inputs and the target. Only the model's columns are compared: a column of the
+  file that no term reads does not count (a comparison on every column of the files can give a
+  smaller count).
+- Models whose inputs take few distinct values (counts, categories coded as numbers) repeat inputs
+  by nature: set \`leakage\` to a tolerated count or \`off\` for them.
+- Detail: \`columns\`, \`holdout_rows\`, \`input_matches\`, \`target_matches\`, \`holdout_lines\`,
+  \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
     advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
     line: (d) => d.data.lines.holdout,
     measure(context) {
@@ -657,7 +773,17 @@ const reproducibility_check = {
     id: 'reproducibility',
     title: 'Shipped coefficients against the refit',
     limitKey: 'reproducibility',
-    description: "Largest absolute difference between the predictions of the descriptor's shipped `coefficients` and of the refit on the hold-out rows, divided by the range (max - min) of the training target: max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y). Shows that the shipped model no longer follows from the committed data and terms. The detail also compares the shipped model's hold-out RMSE with the refit's. Skipped when the descriptor has no `coefficients`. Default limit 0.01 (1 % of the target's range).",
+    defaultLimit: 0.01,
+    direction: 'above',
+    limitSummary: 'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
+    description: `- Default \`0.01\`. Points at \`coefficients\`. Skipped (code
+  \`reproducibility/no-coefficients\`) when the descriptor ships none.
+- Figure: the largest absolute difference between the predictions of the shipped \`coefficients\` and
+  of the refit on the hold-out rows, divided by the range of the training target:
+  max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y).
+- Metric \`shipped_prediction_difference\`. Detail: \`max_prediction_difference\`, \`target_range\`,
+  \`at_line\` (hold-out line of the largest difference), \`shipped_holdout_rmse\`, \`refit_holdout_rmse\`,
+  \`holdout_rmse_ratio\` (shipped / refit), \`max_coefficient_difference\`.`,
     advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
     line: (d) => d.coefficientsLine ?? d.nameLine,
     measure({ shipped, predictions, holdout, metrics }) {
@@ -735,7 +861,33 @@ const swing_check = {
     id: 'swing',
     title: 'Swing between samples',
     limitKey: 'swing',
-    description: 'How far the predictions between the training samples leave the band [min y, max y] of the training targets, in units of the band width: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y) over a dense grid. One input: 201 evenly spaced points across the training range plus 8 points inside every gap between neighbouring distinct values (the widest 4,000 gaps when there are more; above 20,000 rows the gaps of 20,000 rows at an even stride plus the extremes). Several inputs: the same grid along each input with the others at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 / inputs) gaps of each input), plus 8 points on each segment between a training row and its 3 nearest neighbours (Euclidean distance on inputs divided by their standard deviations; at most 1,000 rows, an even stride through the file). A model that interpolates its samples with a high-degree polynomial or narrow radial bumps swings far outside the band between them (Runge phenomenon: Runge 1901, Zeitschrift für Mathematik und Physik 46). 0 when every prediction stays inside the band.',
+    defaultLimit: { warn: 0.25, fail: 0.5 },
+    direction: 'above',
+    limitSummary: 'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
+    description: `- Default \`{ warn: 0.25, fail: 0.5 }\`. Points at the line of the term that reads
+  the input where the largest excursion happened (models of one input), else at \`terms\`.
+- Figure: how far the predictions between the training samples leave the band [min y, max y] of the
+  training targets, in band widths: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y).
+  0 when every prediction stays in the band.
+- Points scanned, one input: 201 evenly spaced points from the smallest to the largest training value
+  plus 8 evenly spaced points inside every gap between neighbouring distinct values (the 4,000
+  widest gaps when there are more; above 20,000 training rows the gaps are those of 20,000 rows
+  at an even stride through the file plus the input's smallest and largest value, since the gaps
+  of big files are far narrower than any swing). Several inputs: the same grid along each input with the other
+  inputs at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 /
+  inputs) gaps of each input), plus 8 points on each segment between a training row and each of
+  its 3 nearest neighbours (Euclidean distance on the inputs divided by their standard deviations;
+  at most 1,000 rows, taken at an even stride through the file).
+- Why: a model that interpolates its samples with a high-degree polynomial or narrow radial bumps
+  can pass through every sample and still predict absurd values between them (Runge's phenomenon,
+  Runge 1901, Zeitschrift für Mathematik und Physik 46).
+- Metric \`swing\`. Detail (for charts): \`band: [min y, max y]\`, \`inside\`, \`beyond\`, \`margin\` (0.1),
+  \`points: { inside, beyond }\` (counts), \`worst_inside\` and \`worst_beyond\`
+  (\`{ inputs: { <input>: value }, prediction }\` or null), \`segments\` (\`{ rows, neighbours,
+  pointsPerSegment }\` or null for one input) and \`curves\`: one per input with a spread,
+  \`{ input, others: { <input>: median }, range: [min x, max x], x: number[], prediction: number[] }\`,
+  x ascending over the range and both margins, at most 400 points (thinned evenly, always keeping the
+  largest and smallest prediction).`,
     advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
     line: (d) => d.termsLine,
     measure(context) {
@@ -765,7 +917,15 @@ const swing_beyond_check = {
     id: 'swing-beyond',
     title: 'Swing beyond the samples',
     limitKey: 'swing_beyond',
-    description: 'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; by default it only warns (above 1 band width). The chart data are in the `swing` outcome.',
+    defaultLimit: { warn: 1 },
+    direction: 'above',
+    limitSummary: 'Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).',
+    description: `- Default \`{ warn: 1 }\`. Points like \`swing\`.
+- Figure: the \`swing\` figure over the margins outside the training range: 40 evenly spaced points on
+  each side of each input, up to 10 % of its range beyond the smallest and the largest training value
+  (other inputs at their medians). Reported apart from \`swing\` because some extrapolation error is
+  expected of any model. Metric \`swing_beyond\`; detail \`margin\`, \`points\`, \`worst\`. The chart curves
+  are in the \`swing\` outcome (they include the margins).`,
     advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
     line: (d) => d.termsLine,
     measure(context) {
@@ -788,13 +948,16 @@ const swing_beyond_check = {
 /* harmony default export */ const swing_beyond = (swing_beyond_check);
 
 ;// CONCATENATED MODULE: ./src/checks/types.ts
-/** Compares a figure with a limit: above `fail` fails, above `warn` warns; NaN passes as skipped. */
+/**
+ * Compares a figure with a limit: beyond a fail bound (above `fail`, below `failBelow`) fails,
+ * beyond a warn bound warns; a figure that is null or NaN, or an `off` limit, is skipped.
+ */
 function judge(value, limit) {
     if (limit.off || value === null || Number.isNaN(value))
         return 'skipped';
-    if (limit.fail !== null && value > limit.fail)
+    if ((limit.fail !== null && value > limit.fail) || (limit.failBelow !== null && value < limit.failBelow))
         return 'fail';
-    if (limit.warn !== null && value > limit.warn)
+    if ((limit.warn !== null && value > limit.warn) || (limit.warnBelow !== null && value < limit.warnBelow))
         return 'warn';
     return 'pass';
 }
@@ -839,18 +1002,30 @@ function validate(checks) {
     }
     return checks;
 }
+/**
+ * The limit keys of the registry with their defaults, directions and summaries, in registry
+ * order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
+ * docs/checks.md (test/tools/gen-validators.mjs writes them; tests keep them current).
+ */
+function registryLimitKeys() {
+    return CHECKS.map((c) => ({ key: c.limitKey, defaultSpec: c.defaultLimit, direction: c.direction, description: c.limitSummary }));
+}
 /** The check with this id, or undefined. */
 function findCheck(id) {
     return CHECKS.find((c) => c.id === id);
 }
-function describeLimit(status, limit) {
+function describeLimit(status, value, limit) {
     if (status === 'fail')
-        return `over the fail limit ${(0,format/* formatNumber */.Z)(limit.fail)}`;
+        return limit.failBelow !== null && value < limit.failBelow ? `under the fail floor ${(0,format/* formatNumber */.Z)(limit.failBelow)}` : `over the fail limit ${(0,format/* formatNumber */.Z)(limit.fail)}`;
     if (status === 'warn')
-        return `over the warning limit ${(0,format/* formatNumber */.Z)(limit.warn)}`;
+        return limit.warnBelow !== null && value < limit.warnBelow ? `under the warning floor ${(0,format/* formatNumber */.Z)(limit.warnBelow)}` : `over the warning limit ${(0,format/* formatNumber */.Z)(limit.warn)}`;
     if (limit.off)
         return 'limit is off';
     const parts = [];
+    if (limit.warnBelow !== null)
+        parts.push(`warn below ${(0,format/* formatNumber */.Z)(limit.warnBelow)}`);
+    if (limit.failBelow !== null)
+        parts.push(`fail below ${(0,format/* formatNumber */.Z)(limit.failBelow)}`);
     if (limit.warn !== null)
         parts.push(`warn above ${(0,format/* formatNumber */.Z)(limit.warn)}`);
     if (limit.fail !== null)
@@ -875,10 +1050,10 @@ function runCheck(check, context) {
             message: `could not be computed: ${error instanceof Error ? error.message : String(error)}`,
         };
     }
-    const effective = limit ?? { warn: null, fail: null, off: true, source: 'default', line: null };
+    const effective = limit ?? { warn: null, fail: null, warnBelow: null, failBelow: null, off: true, source: 'default', line: null };
     const status = judge(measured.value, effective);
     const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
-    const comparison = measured.value === null ? '' : `; ${describeLimit(status, effective)}`;
+    const comparison = measured.value === null ? '' : `; ${describeLimit(status, measured.value, effective)}`;
     const outcome = {
         id: check.id,
         code: `${check.id}/${reason}`,
@@ -887,6 +1062,7 @@ function runCheck(check, context) {
         limitKey: check.limitKey,
         limit: effective.off ? null : effective.fail,
         warn: effective.off ? null : effective.warn,
+        ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
         line: line ?? measured.line ?? check.line(context.descriptor),
         message: `${measured.message}${comparison}`,
         advice: status === 'fail' || status === 'warn' ? check.advice : '',
@@ -911,7 +1087,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4236);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(4783);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9234);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(4031);
@@ -4923,7 +5099,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 4783:
+/***/ 9234:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -4932,111 +5108,124 @@ __nccwpck_require__.d(__webpack_exports__, {
   a: () => (/* binding */ runPipeline)
 });
 
+;// CONCATENATED MODULE: ./src/config/generated/limit-keys.ts
+/** Every limit key, in registry (report) order. */
+const limit_keys_LIMIT_KEYS = Object.freeze([
+    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE." },
+    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter)." },
+    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns." },
+    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch." },
+    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
+    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
+    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
+    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
+    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
+    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
+    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
+]);
+
 ;// CONCATENATED MODULE: ./src/config/limits.ts
 /**
- * The limit keys a model can set, their defaults, and how the three layers of limits
- * (built-in defaults < settings file < descriptor) combine. Checks read their limit from
- * `Descriptor.limits[key]`; to add a check with a limit, add one entry to {@link LIMIT_KEYS}
- * (and the same key to `limits` in both JSON Schemas, which a test keeps in step).
+ * Limits: the known keys (generated from the check registry), the limit forms, and how the three
+ * layers (built-in defaults < settings file < descriptor) combine. Checks read their limit from
+ * `Descriptor.limits[key]`.
+ *
+ * Forms (docs/configuration.md, "Limits"):
+ * - a number: fail beyond it in the check's direction (above a ceiling, below a floor);
+ * - `{ warn, fail }`: warn and fail beyond them in the check's direction (at least one);
+ * - `{ warn_below, fail_below, warn_above, fail_above }`: explicit bounds (at least one), for a
+ *   floor, a ceiling or both on any check;
+ * - `off`: skip the check.
  */
-/**
- * Every limit key known today, in the order the README lists them. Values above a number
- * fail; `{ warn, fail }` warns above `warn` and fails above `fail`; `off` skips the check.
- */
-const LIMIT_KEYS = Object.freeze([
-    {
-        key: 'gap_ratio',
-        defaultSpec: 1.5,
-        description: 'Hold-out RMSE divided by training RMSE.',
-    },
-    {
-        key: 'params_per_sample',
-        defaultSpec: 0.1,
-        description: 'Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).',
-    },
-    {
-        key: 'coefficient',
-        defaultSpec: 25,
-        description: 'Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.',
-    },
-    {
-        key: 'cv_ratio',
-        defaultSpec: 'off',
-        description: 'Pooled k-fold cross-validation RMSE divided by training RMSE.',
-    },
-    {
-        key: 'leakage',
-        defaultSpec: 0,
-        description: 'Hold-out rows that also appear in the training data (the default 0 fails when there is any).',
-    },
-    {
-        key: 'swing',
-        defaultSpec: { warn: 0.25, fail: 0.5 },
-        description: 'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
-    },
-    {
-        key: 'swing_beyond',
-        defaultSpec: { warn: 1 },
-        description: 'Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).',
-    },
-    {
-        key: 'condition',
-        defaultSpec: { warn: 1e8 },
-        description: '2-norm condition number of the column-scaled design matrix.',
-    },
-    {
-        key: 'reproducibility',
-        defaultSpec: 0.01,
-        description: 'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
-    },
-    {
-        key: 'complexity',
-        defaultSpec: { warn: 1.5 },
-        description: 'Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.',
-    },
-    {
-        key: 'base_change',
-        defaultSpec: 'off',
-        description: 'Relative change of the hold-out RMSE against the same model on the base branch.',
-    },
-]);
-/** The known limit keys, in table order. */
+
+
+/** The known limit keys, in registry order. */
 function limitKeyNames() {
     return LIMIT_KEYS.map((k) => k.key);
+}
+/** The known key's entry, or undefined. */
+function limitKeyInfo(key) {
+    return limit_keys_LIMIT_KEYS.find((k) => k.key === key);
+}
+/** The direction of a key's check (`above` for a key no check knows). */
+function limitDirection(key) {
+    return limitKeyInfo(key)?.direction ?? 'above';
+}
+/** The bounds of an explicit spec, or null for the other forms. */
+function explicitBounds(spec) {
+    if (typeof spec !== 'object' || spec === null)
+        return null;
+    if (!('warn_below' in spec || 'fail_below' in spec || 'warn_above' in spec || 'fail_above' in spec))
+        return null;
+    const s = spec;
+    return { warnBelow: s.warn_below ?? null, failBelow: s.fail_below ?? null, warnAbove: s.warn_above ?? null, failAbove: s.fail_above ?? null };
+}
+/**
+ * Why a spec's bounds are out of order, or null when they are in order: a ceiling's warn at most
+ * its fail, a floor's warn at least its fail, every floor below every ceiling.
+ * @returns the offending pair as `[key, message]`
+ */
+function limitOrderProblem(spec, direction) {
+    if (spec === 'off' || typeof spec === 'number')
+        return null;
+    const b = explicitBounds(spec);
+    const plain = spec;
+    const warnBelow = b ? b.warnBelow : direction === 'below' ? (plain.warn ?? null) : null;
+    const failBelow = b ? b.failBelow : direction === 'below' ? (plain.fail ?? null) : null;
+    const warnAbove = b ? b.warnAbove : direction === 'above' ? (plain.warn ?? null) : null;
+    const failAbove = b ? b.failAbove : direction === 'above' ? (plain.fail ?? null) : null;
+    const [wa, fa, wb, fb] = b ? ['warn_above', 'fail_above', 'warn_below', 'fail_below'] : ['warn', 'fail', 'warn', 'fail'];
+    if (warnAbove !== null && failAbove !== null && warnAbove > failAbove)
+        return [wa, `${wa} ${warnAbove} is above ${fa} ${failAbove}; expected ${wa} <= ${fa} (a ceiling warns before it fails)`];
+    if (warnBelow !== null && failBelow !== null && warnBelow < failBelow)
+        return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
+    const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
+    const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
+    if (floor > ceiling)
+        return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
+    return null;
 }
 /**
  * Normalises a limit as written to a {@link Limit}.
  *
- * @param spec a number (fail above it), `{ warn?, fail? }` (at least one) or `off`; numbers
- *   finite and >= 0, warn <= fail. The loaders check this with file positions first; here
- *   a bad spec is a programming error (TypeError / RangeError).
+ * @param spec one of the forms above; numbers finite (the loaders check the forms and the order
+ *   with file positions first; here a bad spec is a programming error: TypeError / RangeError)
+ * @param direction the check's direction, for a number and `{ warn, fail }`
  * @param source which layer the spec came from
- * @param line descriptor line of the key (descriptor limits), else null
+ * @param line descriptor line of the key (descriptor limits only), else null
  */
-function toLimit(spec, source, line) {
+function toLimit(spec, direction, source, line) {
+    const none = { warn: null, fail: null, warnBelow: null, failBelow: null };
     if (spec === 'off')
-        return { warn: null, fail: null, off: true, source, line };
+        return { ...none, off: true, source, line };
     if (typeof spec === 'number') {
         assertThreshold(spec);
-        return { warn: null, fail: spec, off: false, source, line };
+        return direction === 'above' ? { ...none, fail: spec, off: false, source, line } : { ...none, failBelow: spec, off: false, source, line };
     }
     if (spec === null || typeof spec !== 'object')
-        throw new TypeError(`limit spec must be a number, { warn, fail } or 'off', got ${String(spec)}`);
-    const warn = spec.warn ?? null;
-    const fail = spec.fail ?? null;
-    if (warn === null && fail === null)
-        throw new RangeError('limit spec { warn, fail } needs at least one of them');
-    if (warn !== null)
-        assertThreshold(warn);
-    if (fail !== null)
-        assertThreshold(fail);
-    if (warn !== null && fail !== null && warn > fail)
-        throw new RangeError(`limit warn ${warn} is above fail ${fail}`);
-    return { warn, fail, off: false, source, line };
+        throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
+    const problem = limitOrderProblem(spec, direction);
+    if (problem !== null)
+        throw new RangeError(problem[1]);
+    const b = explicitBounds(spec);
+    let limit;
+    if (b !== null) {
+        limit = { warn: b.warnAbove, fail: b.failAbove, warnBelow: b.warnBelow, failBelow: b.failBelow, off: false, source, line };
+    }
+    else {
+        const { warn = null, fail = null } = spec;
+        limit = direction === 'above' ? { ...none, warn, fail, off: false, source, line } : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
+    }
+    const bounds = [limit.warn, limit.fail, limit.warnBelow, limit.failBelow].filter((x) => x !== null);
+    if (bounds.length === 0)
+        throw new RangeError('a limit needs at least one bound');
+    for (const x of bounds)
+        assertThreshold(x);
+    return limit;
 }
 function assertThreshold(x) {
-    if (typeof x !== 'number' || !Number.isFinite(x) || x < 0)
-        throw new RangeError(`limit threshold must be a finite number >= 0, got ${String(x)}`);
+    if (typeof x !== 'number' || !Number.isFinite(x))
+        throw new RangeError(`limit threshold must be a finite number, got ${String(x)}`);
 }
 /**
  * Merges limits key by key: built-in default < settings file < descriptor. A layer that
@@ -5049,12 +5238,12 @@ function assertThreshold(x) {
  */
 function mergeLimits(settings, descriptorLimits) {
     const merged = {};
-    for (const { key, defaultSpec } of LIMIT_KEYS)
-        merged[key] = toLimit(defaultSpec, 'default', null);
+    for (const { key, defaultSpec, direction } of limit_keys_LIMIT_KEYS)
+        merged[key] = toLimit(defaultSpec, direction, 'default', null);
     for (const [key, { spec }] of Object.entries(settings.limits))
-        merged[key] = toLimit(spec, 'settings', null);
+        merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
     for (const [key, { spec, line }] of Object.entries(descriptorLimits))
-        merged[key] = toLimit(spec, 'descriptor', line);
+        merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
     return merged;
 }
 
@@ -5325,15 +5514,15 @@ const settings_schema_namespaceObject = {};
 var ucs2length = __nccwpck_require__(6214);
 ;// CONCATENATED MODULE: ./src/config/generated/validators.ts
 // @ts-nocheck
-// Generated by test/tools/gen-validators.mjs from src/config/schema/*.json and src/config/limits.ts: do not edit.
+// Generated by test/tools/gen-validators.mjs from src/config/schema/*.json: do not edit.
 
 
 const validateSettings = validate52;
-const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
-const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
+const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } };
 const func2 = Object.prototype.hasOwnProperty;
-const schema21 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+const schema21 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
 function validate54(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
@@ -5472,13 +5661,89 @@ function validate54(data, { instancePath = "", parentData, parentDataProperty, r
             var props0 = true;
         }
         const _errs10 = errors;
-        if ("off" !== data) {
-            const err9 = { instancePath, schemaPath: "#/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema21.oneOf[2], data };
+        if (data && typeof data == "object" && !Array.isArray(data)) {
+            if (Object.keys(data).length < 1) {
+                const err9 = { instancePath, schemaPath: "#/oneOf/2/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema21.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            for (const key1 in data) {
+                if (!((((key1 === "warn_below") || (key1 === "fail_below")) || (key1 === "warn_above")) || (key1 === "fail_above"))) {
+                    const err10 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema21.oneOf[2], data };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_below !== undefined) {
+                let data2 = data.warn_below;
+                if (!((typeof data2 == "number") && (isFinite(data2)))) {
+                    const err11 = { instancePath: instancePath + "/warn_below", schemaPath: "#/oneOf/2/properties/warn_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.warn_below.type, parentSchema: schema21.oneOf[2].properties.warn_below, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_below !== undefined) {
+                let data3 = data.fail_below;
+                if (!((typeof data3 == "number") && (isFinite(data3)))) {
+                    const err12 = { instancePath: instancePath + "/fail_below", schemaPath: "#/oneOf/2/properties/fail_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.fail_below.type, parentSchema: schema21.oneOf[2].properties.fail_below, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_above !== undefined) {
+                let data4 = data.warn_above;
+                if (!((typeof data4 == "number") && (isFinite(data4)))) {
+                    const err13 = { instancePath: instancePath + "/warn_above", schemaPath: "#/oneOf/2/properties/warn_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.warn_above.type, parentSchema: schema21.oneOf[2].properties.warn_above, data: data4 };
+                    if (vErrors === null) {
+                        vErrors = [err13];
+                    }
+                    else {
+                        vErrors.push(err13);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_above !== undefined) {
+                let data5 = data.fail_above;
+                if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                    const err14 = { instancePath: instancePath + "/fail_above", schemaPath: "#/oneOf/2/properties/fail_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.fail_above.type, parentSchema: schema21.oneOf[2].properties.fail_above, data: data5 };
+                    if (vErrors === null) {
+                        vErrors = [err14];
+                    }
+                    else {
+                        vErrors.push(err14);
+                    }
+                    errors++;
+                }
+            }
+        }
+        else {
+            const err15 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema21.oneOf[2].type, parentSchema: schema21.oneOf[2], data };
             if (vErrors === null) {
-                vErrors = [err9];
+                vErrors = [err15];
             }
             else {
-                vErrors.push(err9);
+                vErrors.push(err15);
             }
             errors++;
         }
@@ -5491,16 +5756,41 @@ function validate54(data, { instancePath = "", parentData, parentDataProperty, r
             if (_valid0) {
                 valid0 = true;
                 passing0 = 2;
+                if (props0 !== true) {
+                    props0 = true;
+                }
+            }
+            const _errs21 = errors;
+            if ("off" !== data) {
+                const err16 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema21.oneOf[3], data };
+                if (vErrors === null) {
+                    vErrors = [err16];
+                }
+                else {
+                    vErrors.push(err16);
+                }
+                errors++;
+            }
+            var _valid0 = _errs21 === errors;
+            if (_valid0 && valid0) {
+                valid0 = false;
+                passing0 = [passing0, 3];
+            }
+            else {
+                if (_valid0) {
+                    valid0 = true;
+                    passing0 = 3;
+                }
             }
         }
     }
     if (!valid0) {
-        const err10 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema21.oneOf, parentSchema: schema21, data };
+        const err17 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema21.oneOf, parentSchema: schema21, data };
         if (vErrors === null) {
-            vErrors = [err10];
+            vErrors = [err17];
         }
         else {
-            vErrors.push(err10);
+            vErrors.push(err17);
         }
         errors++;
     }
@@ -5561,14 +5851,14 @@ function validate53(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
-        if (data.cv_ratio !== undefined) {
-            if (!(validate54(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+        if (data.base_change !== undefined) {
+            if (!(validate54(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
                 errors = vErrors.length;
             }
         }
-        if (data.leakage !== undefined) {
-            if (!(validate54(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+        if (data.cv_ratio !== undefined) {
+            if (!(validate54(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
                 errors = vErrors.length;
             }
@@ -5585,8 +5875,8 @@ function validate53(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
-        if (data.condition !== undefined) {
-            if (!(validate54(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+        if (data.leakage !== undefined) {
+            if (!(validate54(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
                 errors = vErrors.length;
             }
@@ -5597,14 +5887,14 @@ function validate53(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
-        if (data.complexity !== undefined) {
-            if (!(validate54(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+        if (data.condition !== undefined) {
+            if (!(validate54(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
                 errors = vErrors.length;
             }
         }
-        if (data.base_change !== undefined) {
-            if (!(validate54(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+        if (data.complexity !== undefined) {
+            if (!(validate54(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
                 errors = vErrors.length;
             }
@@ -5934,7 +6224,7 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
 }
 validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 const validateDescriptor = validate67;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model. Only `regression` today.", "enum": ["regression"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } }, "limit": { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model. Only `regression` today.", "enum": ["regression"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } };
 const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
@@ -6670,8 +6960,8 @@ function validate68(data, { instancePath = "", parentData, parentDataProperty, r
     return errors === 0;
 }
 validate68.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true }, "dynamicProps": false, "dynamicItems": false };
-const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" } } };
-const schema26 = { "title": "limit", "description": "A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail above it)", "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is above this number.", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is above this number.", "type": "number", "minimum": 0 } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } };
+const schema26 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
 function validate73(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
@@ -6810,13 +7100,89 @@ function validate73(data, { instancePath = "", parentData, parentDataProperty, r
             var props0 = true;
         }
         const _errs10 = errors;
-        if ("off" !== data) {
-            const err9 = { instancePath, schemaPath: "#/oneOf/2/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema26.oneOf[2], data };
+        if (data && typeof data == "object" && !Array.isArray(data)) {
+            if (Object.keys(data).length < 1) {
+                const err9 = { instancePath, schemaPath: "#/oneOf/2/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema26.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            for (const key1 in data) {
+                if (!((((key1 === "warn_below") || (key1 === "fail_below")) || (key1 === "warn_above")) || (key1 === "fail_above"))) {
+                    const err10 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema26.oneOf[2], data };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_below !== undefined) {
+                let data2 = data.warn_below;
+                if (!((typeof data2 == "number") && (isFinite(data2)))) {
+                    const err11 = { instancePath: instancePath + "/warn_below", schemaPath: "#/oneOf/2/properties/warn_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.warn_below.type, parentSchema: schema26.oneOf[2].properties.warn_below, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_below !== undefined) {
+                let data3 = data.fail_below;
+                if (!((typeof data3 == "number") && (isFinite(data3)))) {
+                    const err12 = { instancePath: instancePath + "/fail_below", schemaPath: "#/oneOf/2/properties/fail_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.fail_below.type, parentSchema: schema26.oneOf[2].properties.fail_below, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_above !== undefined) {
+                let data4 = data.warn_above;
+                if (!((typeof data4 == "number") && (isFinite(data4)))) {
+                    const err13 = { instancePath: instancePath + "/warn_above", schemaPath: "#/oneOf/2/properties/warn_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.warn_above.type, parentSchema: schema26.oneOf[2].properties.warn_above, data: data4 };
+                    if (vErrors === null) {
+                        vErrors = [err13];
+                    }
+                    else {
+                        vErrors.push(err13);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_above !== undefined) {
+                let data5 = data.fail_above;
+                if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                    const err14 = { instancePath: instancePath + "/fail_above", schemaPath: "#/oneOf/2/properties/fail_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.fail_above.type, parentSchema: schema26.oneOf[2].properties.fail_above, data: data5 };
+                    if (vErrors === null) {
+                        vErrors = [err14];
+                    }
+                    else {
+                        vErrors.push(err14);
+                    }
+                    errors++;
+                }
+            }
+        }
+        else {
+            const err15 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema26.oneOf[2].type, parentSchema: schema26.oneOf[2], data };
             if (vErrors === null) {
-                vErrors = [err9];
+                vErrors = [err15];
             }
             else {
-                vErrors.push(err9);
+                vErrors.push(err15);
             }
             errors++;
         }
@@ -6829,16 +7195,41 @@ function validate73(data, { instancePath = "", parentData, parentDataProperty, r
             if (_valid0) {
                 valid0 = true;
                 passing0 = 2;
+                if (props0 !== true) {
+                    props0 = true;
+                }
+            }
+            const _errs21 = errors;
+            if ("off" !== data) {
+                const err16 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema26.oneOf[3], data };
+                if (vErrors === null) {
+                    vErrors = [err16];
+                }
+                else {
+                    vErrors.push(err16);
+                }
+                errors++;
+            }
+            var _valid0 = _errs21 === errors;
+            if (_valid0 && valid0) {
+                valid0 = false;
+                passing0 = [passing0, 3];
+            }
+            else {
+                if (_valid0) {
+                    valid0 = true;
+                    passing0 = 3;
+                }
             }
         }
     }
     if (!valid0) {
-        const err10 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema26.oneOf, parentSchema: schema26, data };
+        const err17 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema26.oneOf, parentSchema: schema26, data };
         if (vErrors === null) {
-            vErrors = [err10];
+            vErrors = [err17];
         }
         else {
-            vErrors.push(err10);
+            vErrors.push(err17);
         }
         errors++;
     }
@@ -6899,14 +7290,14 @@ function validate72(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
-        if (data.cv_ratio !== undefined) {
-            if (!(validate73(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+        if (data.base_change !== undefined) {
+            if (!(validate73(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
                 errors = vErrors.length;
             }
         }
-        if (data.leakage !== undefined) {
-            if (!(validate73(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+        if (data.cv_ratio !== undefined) {
+            if (!(validate73(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
                 errors = vErrors.length;
             }
@@ -6923,8 +7314,8 @@ function validate72(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
-        if (data.condition !== undefined) {
-            if (!(validate73(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+        if (data.leakage !== undefined) {
+            if (!(validate73(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
                 errors = vErrors.length;
             }
@@ -6935,14 +7326,14 @@ function validate72(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
-        if (data.complexity !== undefined) {
-            if (!(validate73(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+        if (data.condition !== undefined) {
+            if (!(validate73(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
                 errors = vErrors.length;
             }
         }
-        if (data.base_change !== undefined) {
-            if (!(validate73(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+        if (data.complexity !== undefined) {
+            if (!(validate73(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
                 vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
                 errors = vErrors.length;
             }
@@ -7846,6 +8237,7 @@ function positionInText(text, offset) {
 
 
 
+
 /** Default settings path, relative to the repository root. */
 const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
 /** Descriptor glob used when there is no settings file. */
@@ -7927,7 +8319,8 @@ function settingsFromDocument(doc, file) {
     return settings;
 }
 /**
- * Reads a validated `limits` map with the line of each key, checking warn <= fail.
+ * Reads a validated `limits` map with the line of each key, checking the order of its bounds
+ * ({@link limitOrderProblem}).
  *
  * @param doc the parsed document
  * @param file repository-relative path
@@ -7937,9 +8330,9 @@ function settingsFromDocument(doc, file) {
 function readLimits(doc, file, limits, at) {
     const out = {};
     for (const [key, spec] of Object.entries(limits ?? {})) {
-        if (typeof spec === 'object' && spec.warn !== undefined && spec.fail !== undefined && spec.warn > spec.fail) {
-            throw errorAt(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, 'warn'], `warn ${showValue(spec.warn)} is above fail ${showValue(spec.fail)}; expected warn <= fail`);
-        }
+        const problem = limitOrderProblem(spec, limitDirection(key));
+        if (problem !== null)
+            throw errorAt(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, problem[0]], problem[1]);
         out[key] = { spec: typeof spec === 'object' ? { ...spec } : spec, line: doc.positionOf([...at, key])?.line ?? 1 };
     }
     return out;

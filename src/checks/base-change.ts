@@ -16,8 +16,13 @@ const check: Check = {
   id: 'base-change',
   title: 'Change against the base commit',
   limitKey: 'base_change',
-  description:
-    'Relative change of the hold-out RMSE against the same model (by name) on the base commit of the pull request: (RMSE_head - RMSE_base) / RMSE_base, so 0.1 means 10 % worse; infinite when the base RMSE is 0 and the head RMSE is not. Skipped for models new in the pull request, when the base model could not be checked, and when the base commit is not available. Off by default; set `base_change` to a fraction to use it.',
+  defaultLimit: 'off',
+  direction: 'above',
+  limitSummary: 'Relative change of the hold-out RMSE against the same model on the base branch.',
+  description: `- Default \`off\`. Points at the \`fit\` line.
+- Figure: (hold-out RMSE now - hold-out RMSE on the base commit) / hold-out RMSE on the base
+  commit, for pull requests (the action) or \`fitgate check --base REF\`. Skipped for models new in
+  the pull request and when no base commit is available. \`base_change: 0.1\` allows 10 % worse.`,
   advice:
     'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
   line: (d) => d.termsLine,

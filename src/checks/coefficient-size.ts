@@ -8,8 +8,15 @@ const check: Check = {
   id: 'coefficient-size',
   title: 'Coefficient size',
   limitKey: 'coefficient',
-  description:
-    'The largest standardised coefficient max_j |w_j| * sd(phi_j) / sd(y) over the non-intercept design columns, with population standard deviations over the training rows: the change in the prediction, in target standard deviations, for one standard deviation of that column (standardised regression coefficient; Draper & Smith, Applied Regression Analysis, 3rd ed., 1998, section 16.3). Huge values mean columns cancel each other, the signature of an overfit or ill-conditioned fit.',
+  defaultLimit: 25,
+  direction: 'above',
+  limitSummary: 'Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.',
+  description: `- Default \`25\`. Points at the term whose column has the largest figure.
+- Figure: max over non-intercept columns of |w_j| * sd(phi_j) / sd(y), population standard
+  deviations over the training rows: the change of the prediction, in target standard deviations,
+  for one standard deviation of that column (standardised regression coefficient; Draper & Smith,
+  Applied Regression Analysis, 3rd ed., 1998, section 16.3). Huge values mean that columns cancel
+  each other, the signature of an overfit or ill-conditioned fit.`,
   advice: 'Add a ridge penalty (`fit.ridge`) or remove nearly collinear terms so that columns stop cancelling each other.',
   line: (d) => d.fit.ridgeLine,
   measure({ metrics, design }) {

@@ -9,8 +9,19 @@ const check: Check = {
   id: 'conditioning',
   title: 'Conditioning of the design',
   limitKey: 'condition',
-  description:
-    '2-norm condition number s_max / s_min of the design with every column scaled to unit length, from the singular values of the triangular factor R of its QR factorisation (Golub & Van Loan, Matrix Computations, 4th ed., 2013, sections 2.6 and 5.3; column scaling as in van der Sluis 1969, Numerische Mathematik 14). Infinite when the design is rank deficient. A large value means some columns are nearly linear combinations of others, so their coefficients are poorly determined; the message names the columns that take part in the most nearly collinear combination (weight |v_j| >= 0.1 in the right singular vector of the smallest singular value) and points at the first of their terms. Default: warn above 1e8 (common practice).',
+  defaultLimit: { warn: 1e8 },
+  direction: 'above',
+  limitSummary: '2-norm condition number of the column-scaled design matrix.',
+  description: `- Default \`{ warn: 1e8 }\` (common practice). Points at the first term that has
+  a nearly collinear column (the \`fit\` line when it is only the intercept).
+- Figure: the 2-norm condition number s_max / s_min of the design with every column scaled to unit
+  length, from the singular values of the triangular factor R of its QR factorisation (Golub & Van
+  Loan, Matrix Computations, 4th ed., 2013, sections 2.6 and 5.3; column scaling: van der Sluis 1969,
+  Numerische Mathematik 14). Infinite for a rank-deficient design.
+- The message names the columns with weight |v_j| >= 0.1 in the right singular vector of the
+  smallest singular value (the most nearly collinear combination) when the figure is above 1e3.
+- Metric \`condition_number_scaled\`. Detail: \`collinear_columns\`, \`collinear_term_lines\`, \`rank\`,
+  \`singular_values_scaled\`.`,
   advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
   line: (d) => d.termsLine,
   measure({ fit, design, descriptor }) {

@@ -11,8 +11,33 @@ const check: Check = {
   id: 'cross-validation',
   title: 'Cross-validation',
   limitKey: 'cv_ratio',
-  description:
-    'k-fold cross-validation RMSE divided by training RMSE. The rows are split into k folds (`fit.folds`, default 5; `fit.fold_order: shuffled` from `fit.seed`, the default, or `blocks`: contiguous blocks in file order, the first n mod k folds one row longer); each fold is predicted by the fit on the other folds with the same ridge penalty, and cv_rmse = sqrt(sum of all squared out-of-fold errors / n) (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10). Also reported: leave-one-out RMSE sqrt(mean((e_i / (1 - h_ii))^2)) from the PRESS residuals (Allen 1974, Technometrics 16(1)), with h_ii the leverages (infinite when a row has leverage 1), generalised cross-validation GCV = mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979, Technometrics 21(2)), and the effective degrees of freedom df = trace of the hat matrix = sum of the leverages, sum_j d_j^2 / (d_j^2 + lambda) for ridge (ESL eq. 3.50). Infinite when the training RMSE is 0 and the CV RMSE is not.',
+  defaultLimit: 'off',
+  direction: 'above',
+  limitSummary: 'Pooled k-fold cross-validation RMSE divided by training RMSE.',
+  description: `- Default \`off\`. Points at the \`fit\` line.
+- Figure: k-fold CV RMSE / training RMSE (infinite when the training RMSE is 0 and the CV RMSE is not).
+- Folds: \`fit.folds\` (default 5; fewer rows than folds gives one row per fold), \`fit.fold_order\`:
+  \`shuffled\` (default; a Fisher-Yates shuffle driven by a seeded 32-bit generator, seed \`fit.seed\`,
+  default 1, recorded in the detail) or \`blocks\` (contiguous blocks in file order, right for rows
+  ordered in time). In both orders the first n mod k folds hold floor(n/k) + 1 rows, the others
+  floor(n/k).
+- cv_rmse = sqrt(sum over all rows of (y_i - yhat_(-fold(i)))^2 / n), pooled over rows; the RMSE of
+  each fold is in the detail. The fit without fold f uses the same terms (fixed from all training
+  rows) and the same ridge penalty. No refit from scratch: each fold's rows are folded into their own
+  QR factor in one pass; the factor without fold f is the merge of the others (Hastie, Tibshirani &
+  Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.10).
+- Leave-one-out by the PRESS residuals e_i / (1 - h_ii) (Allen 1974, Technometrics 16(1)):
+  loocv_rmse = sqrt(mean((e_i / (1 - h_ii))^2)), with e_i the full fit's residual and
+  h_ii = x_i^T (X^T X + lambda E^T E)^+ x_i its leverage (exact for ridge with the same penalty). A row
+  with leverage 1 (within 1e-10: the fit interpolates it) makes the figure infinite; the detail counts
+  such rows.
+- GCV = mean(e_i^2) / (1 - df/n)^2 (Golub, Heath & Wahba 1979, Technometrics 21(2)); infinite when df >= n.
+- Effective degrees of freedom df = trace of the hat matrix = sum of the leverages; for ridge on
+  every column sum_j d_j^2 / (d_j^2 + lambda) with d_j the singular values of the design (ESL eq. 3.50);
+  p for least squares of full rank.
+- Metrics: \`cv_rmse\`, \`loocv_rmse\`, \`gcv\`, \`effective_df\`, \`effective_df_per_sample\`, \`cv_folds\`.
+  Detail: \`folds\`, \`fold_order\`, \`seed\`, \`fold_rows\`, \`fold_rmse\`, \`cv_rmse\`, \`loocv_rmse\`, \`press\`,
+  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
   advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,
   measure(context) {

@@ -8,8 +8,15 @@ const check: Check = {
   id: 'generalisation-gap',
   title: 'Generalisation gap',
   limitKey: 'gap_ratio',
-  description:
-    'Hold-out RMSE divided by training RMSE, RMSE = sqrt(mean((y - yhat)^2)). A model that has learnt noise scores far better on the rows it was fitted to than on new rows (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, section 7.2). Infinite when the training RMSE is 0 and the hold-out RMSE is not.',
+  defaultLimit: 1.5,
+  direction: 'above',
+  limitSummary: 'Hold-out RMSE divided by training RMSE.',
+  description: `- Default \`1.5\`. Points at the \`fit\` line.
+- Figure: hold-out RMSE / training RMSE, RMSE = sqrt(mean((y - yhat)^2)). Infinite when the
+  training RMSE is 0 and the hold-out RMSE is not (a model that interpolates its training rows); 1
+  when both are 0. A model that has learnt noise scores far better on the rows it was fitted to than
+  on new rows (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
+  section 7.2). The default 1.5 is common practice, not a law: set it per model.`,
   advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
   line: (d) => d.fit.line,
   measure({ metrics }) {

@@ -1,8 +1,8 @@
 /**
  * The check registry: every check module, in a stable order, and the code that runs them.
- * To add a check: write `checks/<id>.ts` default-exporting a {@link Check}, import it below,
- * add its limit key to `config/limits.ts` and the schemas, and a README entry (a test keeps the
- * registry and the README in step).
+ * To add a check: write `checks/<id>.ts` default-exporting a {@link Check} and list it below;
+ * `npm run bundle` (test/tools/gen-validators.mjs) then regenerates the limit-key table, the
+ * JSON Schemas' `limits` and docs/checks.md from this list, and tests fail while they are stale.
  */
 import type { Limit } from '../config/types.js';
 import { jsonNumber, type CheckResult } from '../result/result.js';
@@ -47,16 +47,27 @@ function validate(checks: Check[]): Check[] {
   return checks;
 }
 
+/**
+ * The limit keys of the registry with their defaults, directions and summaries, in registry
+ * order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
+ * docs/checks.md (test/tools/gen-validators.mjs writes them; tests keep them current).
+ */
+export function registryLimitKeys(): { key: string; defaultSpec: Check['defaultLimit']; direction: Check['direction']; description: string }[] {
+  return CHECKS.map((c) => ({ key: c.limitKey, defaultSpec: c.defaultLimit, direction: c.direction, description: c.limitSummary }));
+}
+
 /** The check with this id, or undefined. */
 export function findCheck(id: string): Check | undefined {
   return CHECKS.find((c) => c.id === id);
 }
 
-function describeLimit(status: CheckResult['status'], limit: Limit): string {
-  if (status === 'fail') return `over the fail limit ${formatNumber(limit.fail)}`;
-  if (status === 'warn') return `over the warning limit ${formatNumber(limit.warn)}`;
+function describeLimit(status: CheckResult['status'], value: number, limit: Limit): string {
+  if (status === 'fail') return limit.failBelow !== null && value < limit.failBelow ? `under the fail floor ${formatNumber(limit.failBelow)}` : `over the fail limit ${formatNumber(limit.fail)}`;
+  if (status === 'warn') return limit.warnBelow !== null && value < limit.warnBelow ? `under the warning floor ${formatNumber(limit.warnBelow)}` : `over the warning limit ${formatNumber(limit.warn)}`;
   if (limit.off) return 'limit is off';
   const parts: string[] = [];
+  if (limit.warnBelow !== null) parts.push(`warn below ${formatNumber(limit.warnBelow)}`);
+  if (limit.failBelow !== null) parts.push(`fail below ${formatNumber(limit.failBelow)}`);
   if (limit.warn !== null) parts.push(`warn above ${formatNumber(limit.warn)}`);
   if (limit.fail !== null) parts.push(`fail above ${formatNumber(limit.fail)}`);
   return `within limits (${parts.join(', ')})`;
@@ -79,10 +90,10 @@ export function runCheck(check: Check, context: CheckContext): { outcome: CheckR
       message: `could not be computed: ${error instanceof Error ? error.message : String(error)}`,
     };
   }
-  const effective: Limit = limit ?? { warn: null, fail: null, off: true, source: 'default', line: null };
+  const effective: Limit = limit ?? { warn: null, fail: null, warnBelow: null, failBelow: null, off: true, source: 'default', line: null };
   const status = judge(measured.value, effective);
   const reason = measured.reason ?? (status === 'skipped' && effective.off ? 'off' : status);
-  const comparison = measured.value === null ? '' : `; ${describeLimit(status, effective)}`;
+  const comparison = measured.value === null ? '' : `; ${describeLimit(status, measured.value, effective)}`;
   const outcome: CheckResult = {
     id: check.id,
     code: `${check.id}/${reason}`,
@@ -91,6 +102,7 @@ export function runCheck(check: Check, context: CheckContext): { outcome: CheckR
     limitKey: check.limitKey,
     limit: effective.off ? null : effective.fail,
     warn: effective.off ? null : effective.warn,
+    ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
     line: line ?? measured.line ?? check.line(context.descriptor),
     message: `${measured.message}${comparison}`,
     advice: status === 'fail' || status === 'warn' ? check.advice : '',

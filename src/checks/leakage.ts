@@ -7,8 +7,24 @@ const check: Check = {
   id: 'leakage',
   title: 'Hold-out rows in the training data',
   limitKey: 'leakage',
-  description:
-    "Number of hold-out rows whose values in every input column of the model equal those of some training row (exact comparison of the parsed numbers; rows are found through a hash of the values' bit patterns and confirmed value by value). A repeated row makes the hold-out score look better than it is. The message says how many of them also repeat the target and names the first 5 lines of each file; `leaked_rows` in the metrics counts hold-out rows equal to a training row in the inputs and the target. Only the model's columns are compared: a file column that no term reads does not count. Default limit 0: fail when there is any (common practice: hold-out rows must be unseen).",
+  defaultLimit: 0,
+  direction: 'above',
+  limitSummary: 'Hold-out rows that also appear in the training data (the default 0 fails when there is any).',
+  description: `- Default \`0\` (fail when any row repeats; common practice: hold-out rows must
+  be unseen). Points at \`data.holdout\`.
+- Figure: the number of hold-out rows whose values in every input column of the model equal those of
+  some training row (exact comparison of the parsed numbers, -0 equal to 0; found through a hash of
+  the values' bit patterns, confirmed value by value). The message says how many of them repeat the
+  target too, and names the first 5 lines of the hold-out file and the first matching training line
+  of each.
+- Metrics: \`holdout_rows_in_training\` (the figure) and \`leaked_rows\`: hold-out rows equal to a
+  training row in the inputs and the target. Only the model's columns are compared: a column of the
+  file that no term reads does not count (a comparison on every column of the files can give a
+  smaller count).
+- Models whose inputs take few distinct values (counts, categories coded as numbers) repeat inputs
+  by nature: set \`leakage\` to a tolerated count or \`off\` for them.
+- Detail: \`columns\`, \`holdout_rows\`, \`input_matches\`, \`target_matches\`, \`holdout_lines\`,
+  \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
   advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
   line: (d) => d.data.lines.holdout,
   measure(context) {

@@ -8,8 +8,15 @@ const check: Check = {
   id: 'parameter-ratio',
   title: 'Parameters per row',
   limitKey: 'params_per_sample',
-  description:
-    'Number of fitted parameters p (columns of the design, intercept included) divided by the number of training rows n. With p = n a least-squares fit interpolates its training rows exactly. Default limit 0.1, that is at least 10 rows per parameter (common practice). With `fit.parameter_count: effective` a ridge model counts its effective degrees of freedom instead, df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009, eq. 3.50).',
+  defaultLimit: 0.1,
+  direction: 'above',
+  limitSummary: 'Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).',
+  description: `- Default \`0.1\` (common practice: at least 10 training rows per
+  fitted parameter). Points at the \`terms\` line.
+- Figure: p / n, p the columns of the design (intercept included), n the training rows. With
+  p = n a least-squares fit interpolates its training rows exactly. With \`fit.parameter_count:
+  effective\`, the effective degrees of freedom of a ridge fit take the place of p:
+  df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (ESL eq. 3.50).`,
   advice: 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.',
   line: (d) => (d.fit.parameterCount === 'effective' ? d.fit.ridgeLine : d.termsLine),
   measure({ metrics, design, train, fit, descriptor }) {

@@ -10,8 +10,17 @@ const check: Check = {
   id: 'reproducibility',
   title: 'Shipped coefficients against the refit',
   limitKey: 'reproducibility',
-  description:
-    "Largest absolute difference between the predictions of the descriptor's shipped `coefficients` and of the refit on the hold-out rows, divided by the range (max - min) of the training target: max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y). Shows that the shipped model no longer follows from the committed data and terms. The detail also compares the shipped model's hold-out RMSE with the refit's. Skipped when the descriptor has no `coefficients`. Default limit 0.01 (1 % of the target's range).",
+  defaultLimit: 0.01,
+  direction: 'above',
+  limitSummary: 'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
+  description: `- Default \`0.01\`. Points at \`coefficients\`. Skipped (code
+  \`reproducibility/no-coefficients\`) when the descriptor ships none.
+- Figure: the largest absolute difference between the predictions of the shipped \`coefficients\` and
+  of the refit on the hold-out rows, divided by the range of the training target:
+  max_i |x_i^T w_shipped - x_i^T w_refit| / (max y - min y).
+- Metric \`shipped_prediction_difference\`. Detail: \`max_prediction_difference\`, \`target_range\`,
+  \`at_line\` (hold-out line of the largest difference), \`shipped_holdout_rmse\`, \`refit_holdout_rmse\`,
+  \`holdout_rmse_ratio\` (shipped / refit), \`max_coefficient_difference\`.`,
   advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
   measure({ shipped, predictions, holdout, metrics }) {

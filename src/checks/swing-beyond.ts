@@ -10,8 +10,15 @@ const check: Check = {
   id: 'swing-beyond',
   title: 'Swing beyond the samples',
   limitKey: 'swing_beyond',
-  description:
-    'The figure of `swing` measured in the margins outside the training range: 40 evenly spaced points on each side of each input, up to 10 % of its range beyond the smallest and largest training value (the other inputs at their training medians). Reported separately because moderate extrapolation error is expected of any model; by default it only warns (above 1 band width). The chart data are in the `swing` outcome.',
+  defaultLimit: { warn: 1 },
+  direction: 'above',
+  limitSummary: 'Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).',
+  description: `- Default \`{ warn: 1 }\`. Points like \`swing\`.
+- Figure: the \`swing\` figure over the margins outside the training range: 40 evenly spaced points on
+  each side of each input, up to 10 % of its range beyond the smallest and the largest training value
+  (other inputs at their medians). Reported apart from \`swing\` because some extrapolation error is
+  expected of any model. Metric \`swing_beyond\`; detail \`margin\`, \`points\`, \`worst\`. The chart curves
+  are in the \`swing\` outcome (they include the margins).`,
   advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
   line: (d) => d.termsLine,
   measure(context) {

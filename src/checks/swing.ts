@@ -42,8 +42,33 @@ const check: Check = {
   id: 'swing',
   title: 'Swing between samples',
   limitKey: 'swing',
-  description:
-    'How far the predictions between the training samples leave the band [min y, max y] of the training targets, in units of the band width: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y) over a dense grid. One input: 201 evenly spaced points across the training range plus 8 points inside every gap between neighbouring distinct values (the widest 4,000 gaps when there are more; above 20,000 rows the gaps of 20,000 rows at an even stride plus the extremes). Several inputs: the same grid along each input with the others at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 / inputs) gaps of each input), plus 8 points on each segment between a training row and its 3 nearest neighbours (Euclidean distance on inputs divided by their standard deviations; at most 1,000 rows, an even stride through the file). A model that interpolates its samples with a high-degree polynomial or narrow radial bumps swings far outside the band between them (Runge phenomenon: Runge 1901, Zeitschrift für Mathematik und Physik 46). 0 when every prediction stays inside the band.',
+  defaultLimit: { warn: 0.25, fail: 0.5 },
+  direction: 'above',
+  limitSummary: 'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
+  description: `- Default \`{ warn: 0.25, fail: 0.5 }\`. Points at the line of the term that reads
+  the input where the largest excursion happened (models of one input), else at \`terms\`.
+- Figure: how far the predictions between the training samples leave the band [min y, max y] of the
+  training targets, in band widths: max(0, max(pred) - max y, min y - min(pred)) / (max y - min y).
+  0 when every prediction stays in the band.
+- Points scanned, one input: 201 evenly spaced points from the smallest to the largest training value
+  plus 8 evenly spaced points inside every gap between neighbouring distinct values (the 4,000
+  widest gaps when there are more; above 20,000 training rows the gaps are those of 20,000 rows
+  at an even stride through the file plus the input's smallest and largest value, since the gaps
+  of big files are far narrower than any swing). Several inputs: the same grid along each input with the other
+  inputs at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 /
+  inputs) gaps of each input), plus 8 points on each segment between a training row and each of
+  its 3 nearest neighbours (Euclidean distance on the inputs divided by their standard deviations;
+  at most 1,000 rows, taken at an even stride through the file).
+- Why: a model that interpolates its samples with a high-degree polynomial or narrow radial bumps
+  can pass through every sample and still predict absurd values between them (Runge's phenomenon,
+  Runge 1901, Zeitschrift für Mathematik und Physik 46).
+- Metric \`swing\`. Detail (for charts): \`band: [min y, max y]\`, \`inside\`, \`beyond\`, \`margin\` (0.1),
+  \`points: { inside, beyond }\` (counts), \`worst_inside\` and \`worst_beyond\`
+  (\`{ inputs: { <input>: value }, prediction }\` or null), \`segments\` (\`{ rows, neighbours,
+  pointsPerSegment }\` or null for one input) and \`curves\`: one per input with a spread,
+  \`{ input, others: { <input>: median }, range: [min x, max x], x: number[], prediction: number[] }\`,
+  x ascending over the range and both margins, at most 400 points (thinned evenly, always keeping the
+  largest and smallest prediction).`,
   advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
   line: (d) => d.termsLine,
   measure(context) {

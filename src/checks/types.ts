@@ -3,7 +3,7 @@
  * compares the figure with the model's limit for that check and writes the outcome. Checks never
  * log, format or read settings on their own.
  */
-import type { Descriptor, Limit } from '../config/types.js';
+import type { Descriptor, Limit, LimitDirection, LimitSpec } from '../config/types.js';
 import type { Design } from '../design/design-matrix.js';
 import type { FitResult } from '../fit/index.js';
 import type { ModelData } from '../data/model-data.js';
@@ -77,7 +77,13 @@ export interface Check {
   title: string;
   /** Limit key in YAML (`limits:` map), e.g. `gap_ratio`. */
   limitKey: string;
-  /** One paragraph for the README: what the figure is, its exact formula and its source. */
+  /** The built-in limit, used when neither the settings file nor the descriptor sets the key. */
+  defaultLimit: LimitSpec;
+  /** `above`: the figure fails above its limit (a ceiling); `below`: below it (a floor). */
+  direction: LimitDirection;
+  /** One sentence: what figure the limit applies to (schema descriptions, the docs' tables). */
+  limitSummary: string;
+  /** One paragraph for docs/checks.md: what the figure is, its exact formula and its source. */
   description: string;
   /** One sentence on what to change when the check warns or fails. */
   advice: string;
@@ -87,10 +93,13 @@ export interface Check {
   measure(context: CheckContext): Measurement;
 }
 
-/** Compares a figure with a limit: above `fail` fails, above `warn` warns; NaN passes as skipped. */
+/**
+ * Compares a figure with a limit: beyond a fail bound (above `fail`, below `failBelow`) fails,
+ * beyond a warn bound warns; a figure that is null or NaN, or an `off` limit, is skipped.
+ */
 export function judge(value: number | null, limit: Limit): CheckStatus {
   if (limit.off || value === null || Number.isNaN(value)) return 'skipped';
-  if (limit.fail !== null && value > limit.fail) return 'fail';
-  if (limit.warn !== null && value > limit.warn) return 'warn';
+  if ((limit.fail !== null && value > limit.fail) || (limit.failBelow !== null && value < limit.failBelow)) return 'fail';
+  if ((limit.warn !== null && value > limit.warn) || (limit.warnBelow !== null && value < limit.warnBelow)) return 'warn';
   return 'pass';
 }

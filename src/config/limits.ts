@@ -1,116 +1,100 @@
 /**
- * The limit keys a model can set, their defaults, and how the three layers of limits
- * (built-in defaults < settings file < descriptor) combine. Checks read their limit from
- * `Descriptor.limits[key]`; to add a check with a limit, add one entry to {@link LIMIT_KEYS}
- * (and the same key to `limits` in both JSON Schemas, which a test keeps in step).
+ * Limits: the known keys (generated from the check registry), the limit forms, and how the three
+ * layers (built-in defaults < settings file < descriptor) combine. Checks read their limit from
+ * `Descriptor.limits[key]`.
+ *
+ * Forms (docs/configuration.md, "Limits"):
+ * - a number: fail beyond it in the check's direction (above a ceiling, below a floor);
+ * - `{ warn, fail }`: warn and fail beyond them in the check's direction (at least one);
+ * - `{ warn_below, fail_below, warn_above, fail_above }`: explicit bounds (at least one), for a
+ *   floor, a ceiling or both on any check;
+ * - `off`: skip the check.
  */
+import { LIMIT_KEYS, type LimitKeyInfo } from './generated/limit-keys.js';
+import type { Limit, LimitDirection, LimitSource, LimitSpec, SettingsFile } from './types.js';
 
-import type { Limit, LimitSource, LimitSpec, SettingsFile } from './types.js';
+export { LIMIT_KEYS, type LimitKeyInfo } from './generated/limit-keys.js';
 
-/** One known limit key: its YAML name, its built-in default, and one line for the README. */
-export interface LimitKeyInfo {
-  /** Key in the YAML `limits` map, e.g. `gap_ratio`. */
-  key: string;
-  /** Built-in default, used when neither settings nor descriptor set the key. */
-  defaultSpec: LimitSpec;
-  /** One sentence: what figure the limit applies to. */
-  description: string;
+/** The known limit keys, in registry order. */
+export function limitKeyNames(): string[] {
+  return LIMIT_KEYS.map((k) => k.key);
+}
+
+/** The known key's entry, or undefined. */
+export function limitKeyInfo(key: string): LimitKeyInfo | undefined {
+  return LIMIT_KEYS.find((k) => k.key === key);
+}
+
+/** The direction of a key's check (`above` for a key no check knows). */
+export function limitDirection(key: string): LimitDirection {
+  return limitKeyInfo(key)?.direction ?? 'above';
+}
+
+/** The bounds of an explicit spec, or null for the other forms. */
+function explicitBounds(spec: LimitSpec): { warnBelow: number | null; failBelow: number | null; warnAbove: number | null; failAbove: number | null } | null {
+  if (typeof spec !== 'object' || spec === null) return null;
+  if (!('warn_below' in spec || 'fail_below' in spec || 'warn_above' in spec || 'fail_above' in spec)) return null;
+  const s = spec as { warn_below?: number; fail_below?: number; warn_above?: number; fail_above?: number };
+  return { warnBelow: s.warn_below ?? null, failBelow: s.fail_below ?? null, warnAbove: s.warn_above ?? null, failAbove: s.fail_above ?? null };
 }
 
 /**
- * Every limit key known today, in the order the README lists them. Values above a number
- * fail; `{ warn, fail }` warns above `warn` and fails above `fail`; `off` skips the check.
+ * Why a spec's bounds are out of order, or null when they are in order: a ceiling's warn at most
+ * its fail, a floor's warn at least its fail, every floor below every ceiling.
+ * @returns the offending pair as `[key, message]`
  */
-export const LIMIT_KEYS: ReadonlyArray<LimitKeyInfo> = Object.freeze([
-  {
-    key: 'gap_ratio',
-    defaultSpec: 1.5,
-    description: 'Hold-out RMSE divided by training RMSE.',
-  },
-  {
-    key: 'params_per_sample',
-    defaultSpec: 0.1,
-    description: 'Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).',
-  },
-  {
-    key: 'coefficient',
-    defaultSpec: 25,
-    description: 'Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.',
-  },
-  {
-    key: 'cv_ratio',
-    defaultSpec: 'off',
-    description: 'Pooled k-fold cross-validation RMSE divided by training RMSE.',
-  },
-  {
-    key: 'leakage',
-    defaultSpec: 0,
-    description: 'Hold-out rows that also appear in the training data (the default 0 fails when there is any).',
-  },
-  {
-    key: 'swing',
-    defaultSpec: { warn: 0.25, fail: 0.5 },
-    description: 'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
-  },
-  {
-    key: 'swing_beyond',
-    defaultSpec: { warn: 1 },
-    description: 'Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).',
-  },
-  {
-    key: 'condition',
-    defaultSpec: { warn: 1e8 },
-    description: '2-norm condition number of the column-scaled design matrix.',
-  },
-  {
-    key: 'reproducibility',
-    defaultSpec: 0.01,
-    description: 'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
-  },
-  {
-    key: 'complexity',
-    defaultSpec: { warn: 1.5 },
-    description: 'Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.',
-  },
-  {
-    key: 'base_change',
-    defaultSpec: 'off',
-    description: 'Relative change of the hold-out RMSE against the same model on the base branch.',
-  },
-] satisfies LimitKeyInfo[]);
-
-/** The known limit keys, in table order. */
-export function limitKeyNames(): string[] {
-  return LIMIT_KEYS.map((k) => k.key);
+export function limitOrderProblem(spec: LimitSpec, direction: LimitDirection): [string, string] | null {
+  if (spec === 'off' || typeof spec === 'number') return null;
+  const b = explicitBounds(spec);
+  const plain = spec as { warn?: number; fail?: number };
+  const warnBelow = b ? b.warnBelow : direction === 'below' ? (plain.warn ?? null) : null;
+  const failBelow = b ? b.failBelow : direction === 'below' ? (plain.fail ?? null) : null;
+  const warnAbove = b ? b.warnAbove : direction === 'above' ? (plain.warn ?? null) : null;
+  const failAbove = b ? b.failAbove : direction === 'above' ? (plain.fail ?? null) : null;
+  const [wa, fa, wb, fb] = b ? ['warn_above', 'fail_above', 'warn_below', 'fail_below'] : ['warn', 'fail', 'warn', 'fail'];
+  if (warnAbove !== null && failAbove !== null && warnAbove > failAbove) return [wa, `${wa} ${warnAbove} is above ${fa} ${failAbove}; expected ${wa} <= ${fa} (a ceiling warns before it fails)`];
+  if (warnBelow !== null && failBelow !== null && warnBelow < failBelow) return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
+  const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
+  const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
+  if (floor > ceiling) return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
+  return null;
 }
 
 /**
  * Normalises a limit as written to a {@link Limit}.
  *
- * @param spec a number (fail above it), `{ warn?, fail? }` (at least one) or `off`; numbers
- *   finite and >= 0, warn <= fail. The loaders check this with file positions first; here
- *   a bad spec is a programming error (TypeError / RangeError).
+ * @param spec one of the forms above; numbers finite (the loaders check the forms and the order
+ *   with file positions first; here a bad spec is a programming error: TypeError / RangeError)
+ * @param direction the check's direction, for a number and `{ warn, fail }`
  * @param source which layer the spec came from
- * @param line descriptor line of the key (descriptor limits), else null
+ * @param line descriptor line of the key (descriptor limits only), else null
  */
-export function toLimit(spec: LimitSpec, source: LimitSource, line: number | null): Limit {
-  if (spec === 'off') return { warn: null, fail: null, off: true, source, line };
+export function toLimit(spec: LimitSpec, direction: LimitDirection, source: LimitSource, line: number | null): Limit {
+  const none = { warn: null, fail: null, warnBelow: null, failBelow: null };
+  if (spec === 'off') return { ...none, off: true, source, line };
   if (typeof spec === 'number') {
     assertThreshold(spec);
-    return { warn: null, fail: spec, off: false, source, line };
+    return direction === 'above' ? { ...none, fail: spec, off: false, source, line } : { ...none, failBelow: spec, off: false, source, line };
   }
-  if (spec === null || typeof spec !== 'object') throw new TypeError(`limit spec must be a number, { warn, fail } or 'off', got ${String(spec)}`);
-  const warn = spec.warn ?? null;
-  const fail = spec.fail ?? null;
-  if (warn === null && fail === null) throw new RangeError('limit spec { warn, fail } needs at least one of them');
-  if (warn !== null) assertThreshold(warn);
-  if (fail !== null) assertThreshold(fail);
-  if (warn !== null && fail !== null && warn > fail) throw new RangeError(`limit warn ${warn} is above fail ${fail}`);
-  return { warn, fail, off: false, source, line };
+  if (spec === null || typeof spec !== 'object') throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
+  const problem = limitOrderProblem(spec, direction);
+  if (problem !== null) throw new RangeError(problem[1]);
+  const b = explicitBounds(spec);
+  let limit: Limit;
+  if (b !== null) {
+    limit = { warn: b.warnAbove, fail: b.failAbove, warnBelow: b.warnBelow, failBelow: b.failBelow, off: false, source, line };
+  } else {
+    const { warn = null, fail = null } = spec as { warn?: number; fail?: number };
+    limit = direction === 'above' ? { ...none, warn, fail, off: false, source, line } : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
+  }
+  const bounds = [limit.warn, limit.fail, limit.warnBelow, limit.failBelow].filter((x): x is number => x !== null);
+  if (bounds.length === 0) throw new RangeError('a limit needs at least one bound');
+  for (const x of bounds) assertThreshold(x);
+  return limit;
 }
 
 function assertThreshold(x: number): void {
-  if (typeof x !== 'number' || !Number.isFinite(x) || x < 0) throw new RangeError(`limit threshold must be a finite number >= 0, got ${String(x)}`);
+  if (typeof x !== 'number' || !Number.isFinite(x)) throw new RangeError(`limit threshold must be a finite number, got ${String(x)}`);
 }
 
 /**
@@ -127,8 +111,8 @@ export function mergeLimits(
   descriptorLimits: Record<string, { spec: LimitSpec; line: number }>,
 ): Record<string, Limit> {
   const merged: Record<string, Limit> = {};
-  for (const { key, defaultSpec } of LIMIT_KEYS) merged[key] = toLimit(defaultSpec, 'default', null);
-  for (const [key, { spec }] of Object.entries(settings.limits)) merged[key] = toLimit(spec, 'settings', null);
-  for (const [key, { spec, line }] of Object.entries(descriptorLimits)) merged[key] = toLimit(spec, 'descriptor', line);
+  for (const { key, defaultSpec, direction } of LIMIT_KEYS) merged[key] = toLimit(defaultSpec, direction, 'default', null);
+  for (const [key, { spec }] of Object.entries(settings.limits)) merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
+  for (const [key, { spec, line }] of Object.entries(descriptorLimits)) merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
   return merged;
 }

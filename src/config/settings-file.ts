@@ -5,7 +5,8 @@
 
 import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
-import { errorAt, schemaError, showValue } from './schema-errors.js';
+import { limitDirection, limitOrderProblem } from './limits.js';
+import { errorAt, schemaError } from './schema-errors.js';
 import { validateSettingsValue } from './schemas.js';
 import type { FoldOrder, LimitSpec, ParameterCount, SettingsFile } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
@@ -101,7 +102,8 @@ export function settingsFromDocument(doc: YamlDocument, file: string): SettingsF
 }
 
 /**
- * Reads a validated `limits` map with the line of each key, checking warn <= fail.
+ * Reads a validated `limits` map with the line of each key, checking the order of its bounds
+ * ({@link limitOrderProblem}).
  *
  * @param doc the parsed document
  * @param file repository-relative path
@@ -116,9 +118,8 @@ export function readLimits(
 ): Record<string, { spec: LimitSpec; line: number }> {
   const out: Record<string, { spec: LimitSpec; line: number }> = {};
   for (const [key, spec] of Object.entries(limits ?? {})) {
-    if (typeof spec === 'object' && spec.warn !== undefined && spec.fail !== undefined && spec.warn > spec.fail) {
-      throw errorAt(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, 'warn'], `warn ${showValue(spec.warn)} is above fail ${showValue(spec.fail)}; expected warn <= fail`);
-    }
+    const problem = limitOrderProblem(spec, limitDirection(key));
+    if (problem !== null) throw errorAt(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, problem[0]], problem[1]);
     out[key] = { spec: typeof spec === 'object' ? { ...spec } : spec, line: doc.positionOf([...at, key])?.line ?? 1 };
   }
   return out;

@@ -4,19 +4,38 @@
  * turn YAML text into these; nothing downstream sees raw YAML.
  */
 
-/** A limit as written in YAML: a number (fail above it), `{ warn, fail }` or `off`. */
-export type LimitSpec = number | { warn?: number; fail?: number } | 'off';
+/**
+ * A limit as written in YAML: a number or `{ warn, fail }` in the check's own direction (above it
+ * for a ceiling such as `gap_ratio`, below it for a floor such as `events_per_parameter`),
+ * explicit bounds `{ warn_below, fail_below, warn_above, fail_above }` (any of them, for a floor,
+ * a ceiling or both on any check), or `off`.
+ */
+export type LimitSpec =
+  | number
+  | { warn?: number; fail?: number }
+  | { warn_below?: number; fail_below?: number; warn_above?: number; fail_above?: number }
+  | 'off';
+
+/** Which way a check's figure goes bad: `above` its limit (a ceiling) or `below` it (a floor). */
+export type LimitDirection = 'above' | 'below';
 
 /** Where a limit's value came from, lowest precedence first. */
 export type LimitSource = 'default' | 'settings' | 'descriptor';
 
 /**
- * A resolved limit. A check value strictly above `fail` fails, strictly above `warn` warns.
- * `off` skips the check. `line` is the descriptor line that set it (descriptor limits only).
+ * A resolved limit. A check value strictly above `fail` or strictly below `failBelow` fails;
+ * otherwise strictly above `warn` or strictly below `warnBelow` warns. `off` skips the check.
+ * `line` is the descriptor line that set it (descriptor limits only).
  */
 export interface Limit {
+  /** Ceiling for a warning, or null. */
   warn: number | null;
+  /** Ceiling for a failure, or null. */
   fail: number | null;
+  /** Floor for a warning, or null. */
+  warnBelow: number | null;
+  /** Floor for a failure, or null. */
+  failBelow: number | null;
   off: boolean;
   source: LimitSource;
   /** 1-based descriptor line of this limit's key when the descriptor sets it, else null. */

@@ -106,6 +106,7 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
           code: c.code,
           value: c.value === null ? null : formatNumber(fromJsonNumber(c.value)),
           limit: c.limit,
+          ...(c.floor ? { floor: c.floor } : {}),
           warn: c.warn,
         },
       });

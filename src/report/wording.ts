@@ -5,9 +5,11 @@
 import { formatNumber } from '../core/format.js';
 import type { CheckResult, Result } from '../result/result.js';
 
-/** A check's limits: `warn > 0.25, fail > 0.5`, one of the two, or `off`. */
-export function limitText(c: Pick<CheckResult, 'warn' | 'limit'>): string {
+/** A check's limits: `warn > 0.25, fail > 0.5`, floors as `warn < 0.8, fail < 0.6`, or `off`. */
+export function limitText(c: Pick<CheckResult, 'warn' | 'limit' | 'floor'>): string {
   const parts: string[] = [];
+  if (c.floor?.warn != null) parts.push(`warn < ${formatNumber(c.floor.warn)}`);
+  if (c.floor?.fail != null) parts.push(`fail < ${formatNumber(c.floor.fail)}`);
   if (c.warn !== null) parts.push(`warn > ${formatNumber(c.warn)}`);
   if (c.limit !== null) parts.push(`fail > ${formatNumber(c.limit)}`);
   return parts.length ? parts.join(', ') : 'off';

@@ -30,6 +30,12 @@ export interface CheckResult {
   limit: number | null;
   /** Warning threshold, or null. */
   warn: number | null;
+  /**
+   * Floors, when the limit has any (checks whose figure fails below a value, or an explicit
+   * `fail_below`/`warn_below`): the figure fails below `fail` and warns below `warn`. Absent
+   * for a limit made of ceilings only (`limit`, `warn` above).
+   */
+  floor?: { warn: number | null; fail: number | null };
   /** Descriptor line to annotate. */
   line: number;
   /** One sentence on the finding. */

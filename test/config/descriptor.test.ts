@@ -75,9 +75,9 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
     expect(d.fit).toEqual({ intercept: false, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18 });
     expect(d.coefficients).toEqual([1, 2.5, -3]);
     expect(d.coefficientsLine).toBe(20);
-    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.3, off: false, source: 'descriptor', line: 22 });
-    expect(d.limits.swing).toEqual({ warn: null, fail: 0.4, off: false, source: 'descriptor', line: 23 });
-    expect(d.limits.cv_ratio).toEqual({ warn: null, fail: null, off: true, source: 'descriptor', line: 24 });
+    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.3, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 22 });
+    expect(d.limits.swing).toEqual({ warn: null, fail: 0.4, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 23 });
+    expect(d.limits.cv_ratio).toEqual({ warn: null, fail: null, warnBelow: null, failBelow: null, off: true, source: 'descriptor', line: 24 });
     expect(Object.keys(d.limits).sort()).toEqual(LIMIT_KEYS.map((k) => k.key).sort());
   });
 
@@ -88,7 +88,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
     expect(d.fit).toEqual({ intercept: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4 });
     expect(d.coefficients).toBeNull();
     expect(d.coefficientsLine).toBeNull();
-    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.5, off: false, source: 'default', line: null });
+    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
   });
 
   it('takes fit defaults from the settings file, and descriptor fit keys win', async () => {
@@ -106,11 +106,11 @@ describe('limits merge: defaults < settings < descriptor, key by key', () => {
     const repo = repoWith(descriptor, { 'fitgate.yml': settingsText });
     const settings = await loadSettings(repo, 'fitgate.yml');
     const d = await loadDescriptor(repo, F, settings);
-    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 2, off: false, source: 'settings', line: null });
-    expect(d.limits.condition).toEqual({ warn: null, fail: null, off: true, source: 'settings', line: null });
-    expect(d.limits.coefficient, 'descriptor replaces the settings { warn, fail } entirely').toEqual({ warn: null, fail: 30, off: false, source: 'descriptor', line: 6 });
-    expect(d.limits.swing).toEqual({ warn: 0.25, fail: 0.5, off: false, source: 'default', line: null });
-    expect(d.limits.params_per_sample).toEqual({ warn: null, fail: 0.1, off: false, source: 'default', line: null });
+    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 2, warnBelow: null, failBelow: null, off: false, source: 'settings', line: null });
+    expect(d.limits.condition).toEqual({ warn: null, fail: null, warnBelow: null, failBelow: null, off: true, source: 'settings', line: null });
+    expect(d.limits.coefficient, 'descriptor replaces the settings { warn, fail } entirely').toEqual({ warn: null, fail: 30, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 6 });
+    expect(d.limits.swing).toEqual({ warn: 0.25, fail: 0.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
+    expect(d.limits.params_per_sample).toEqual({ warn: null, fail: 0.1, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
   });
 });
 
@@ -152,7 +152,7 @@ describe('loadDescriptor: schema errors name file, line and key path', () => {
     { name: 'unknown limit key', text: edit(22, '  gap_ration: 1.3'), line: 22, key: 'limits.gap_ration', message: /unknown key `gap_ration`; expected one of: gap_ratio, params_per_sample/ },
     { name: 'negative limit', text: edit(22, '  gap_ratio: -1'), line: 22, key: 'limits.gap_ratio', message: />= 0, got -1/ },
     { name: 'limit as other text', text: edit(22, '  gap_ratio: none'), line: 22, key: 'limits.gap_ratio', message: /expected one of: .*`off`/ },
-    { name: 'empty warn/fail mapping', text: edit(23, '  swing: {}'), line: 23, key: 'limits.swing', message: /at least one of: warn, fail/ },
+    { name: 'empty warn/fail mapping', text: edit(23, '  swing: {}'), line: 23, key: 'limits.swing', message: /expected one of: .*\{ warn, fail \}, \{ warn_below, fail_below, warn_above, fail_above \}/ },
     { name: 'unknown key in warn/fail', text: edit(23, '  swing: { warn: 1, fial: 2 }'), line: 23, key: 'limits.swing.fial', message: /unknown key `fial`/ },
     { name: 'document not a mapping', text: '- a\n- b\n', line: 1, key: '', message: /a mapping/ },
   ];

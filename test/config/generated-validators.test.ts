@@ -1,14 +1,19 @@
 import { readFileSync } from 'node:fs';
 import { describe, it, expect } from 'vitest';
 // @ts-expect-error the generator is a plain ES module without types
-import { generate } from '../tools/gen-validators.mjs';
+import { generateAll } from '../tools/gen-validators.mjs';
 import { validateDescriptorValue, validateSettingsValue } from '../../src/config/schemas.js';
 
 describe('precompiled schema validators', () => {
-  it('src/config/generated/validators.ts is what test/tools/gen-validators.mjs generates now (run it when this fails)', async () => {
-    const committed = readFileSync(new URL('../../src/config/generated/validators.ts', import.meta.url), 'utf8');
-    const fresh = (await generate()) as string;
-    expect(committed === fresh, 'the generated validators are stale: run node test/tools/gen-validators.mjs').toBe(true);
+  it('the limit-key table, the schemas, the validators and docs/checks.md are what test/tools/gen-validators.mjs generates from the registry now (run it when this fails)', async () => {
+    const files = (await generateAll()) as Map<string, string>;
+    expect([...files.keys()].sort()).toEqual(
+      ['docs/checks.md', 'src/config/generated/limit-keys.ts', 'src/config/generated/validators.ts', 'src/config/schema/descriptor.schema.json', 'src/config/schema/settings.schema.json'].sort(),
+    );
+    for (const [rel, fresh] of files) {
+      const committed = readFileSync(new URL(`../../${rel}`, import.meta.url), 'utf8');
+      expect(committed === fresh, `${rel} is stale: run node test/tools/gen-validators.mjs`).toBe(true);
+    }
   });
 
   it('reject what the schemas reject and accept a minimal valid value', () => {

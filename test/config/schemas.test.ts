@@ -34,8 +34,9 @@ describe('shipped JSON Schemas', () => {
     it(`${name}: lists exactly the limit keys of LIMIT_KEYS with the same defaults and descriptions`, () => {
       const props = ((schema.$defs as Json).limits as Json).properties as Record<string, Json>;
       expect(Object.keys(props)).toEqual(LIMIT_KEYS.map((k) => k.key));
-      for (const { key, defaultSpec, description } of LIMIT_KEYS) {
-        expect({ key, default: props[key].default, description: props[key].description }).toEqual({ key, default: defaultSpec, description });
+      for (const { key, defaultSpec, description, direction } of LIMIT_KEYS) {
+        const summary = direction === 'below' ? `${description} A floor: the figure fails below its limit.` : description;
+        expect({ key, default: props[key].default, description: props[key].description }).toEqual({ key, default: defaultSpec, description: summary });
       }
     });
   }
