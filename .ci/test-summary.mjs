@@ -35,7 +35,9 @@ export function summarise(report, vitestStatus, problem = '') {
     }
     if (file.status === 'failed' && !tests.some((t) => t.status === 'failed')) {
       failed++;
-      const first = String(file.message ?? '').split('\n')[0].slice(0, 160);
+      const first = String(file.message ?? '')
+        .split('\n')[0]
+        .slice(0, 160);
       lines.push(`failed outside its tests: ${path.relative(process.cwd(), String(file.name))}: ${first || 'no message'}`);
     }
   }

@@ -71,7 +71,20 @@ describe.skipIf(missing !== null)(`figures against the pandas + numpy + scikit-l
     if (!metrics || !model) throw new Error(`no metrics for ${c.name}`);
     const run = spawnSync(
       PYTHON3,
-      [`${sharedBenchDir}ref_check.py`, '--train', path.join(dir, c.name, 'train.csv'), '--holdout', path.join(dir, c.name, 'holdout.csv'), '--degree', String(c.degree), '--ridge', String(c.ridge), '--folds', String(c.folds), '--loocv'],
+      [
+        `${sharedBenchDir}ref_check.py`,
+        '--train',
+        path.join(dir, c.name, 'train.csv'),
+        '--holdout',
+        path.join(dir, c.name, 'holdout.csv'),
+        '--degree',
+        String(c.degree),
+        '--ridge',
+        String(c.ridge),
+        '--folds',
+        String(c.folds),
+        '--loocv',
+      ],
       { encoding: 'utf8', timeout: 120_000, env: { PATH: '/usr/bin:/bin', HOME: os.tmpdir(), LANG: 'C.UTF-8' } },
     );
     expect(run.status, run.stderr).toBe(0);
@@ -90,7 +103,9 @@ describe.skipIf(missing !== null)(`figures against the pandas + numpy + scikit-l
     const coef = ref.coef as number[];
     expect(model.coefficients.length).toBe(coef.length);
     const scale = Math.max(...coef.map(Math.abs));
-    model.coefficients.forEach((w, j) => expect(Math.abs(fromJsonNumber(w) - coef[j]) / scale, `coefficient ${j}`).toBeLessThanOrEqual(TOLERANCE));
+    model.coefficients.forEach((w, j) =>
+      expect(Math.abs(fromJsonNumber(w) - coef[j]) / scale, `coefficient ${j}`).toBeLessThanOrEqual(TOLERANCE),
+    );
     // The reference's own numpy-vs-scikit-learn cross-check.
     expect(ref.sklearn_max_abs_diff as number).toBeLessThanOrEqual(TOLERANCE * scale);
   });

@@ -20,7 +20,9 @@ const setUp = /^SYSTEM_PACKAGES=\(([^)]*)\)$/m.exec(read('.ci/run'));
 const installed = (setUp?.[1] ?? '').split(/\s+/).filter(Boolean);
 const sources = testSources().filter((f) => !f.startsWith('test/tools/require-tool') && f !== 'test/tools/ci-setup.test.ts');
 const asked = new Set(
-  sources.flatMap((f) => [...read(f).matchAll(/requireTool\(\[([^\]]*)\]/g)].flatMap((m) => [...m[1].matchAll(/'([^']+)'/g)].map((q) => q[1]))),
+  sources.flatMap((f) =>
+    [...read(f).matchAll(/requireTool\(\[([^\]]*)\]/g)].flatMap((m) => [...m[1].matchAll(/'([^']+)'/g)].map((q) => q[1])),
+  ),
 );
 const packagesAsked = [...asked].filter((n) => !n.startsWith('shared/')).sort();
 

@@ -10,17 +10,32 @@ import { summarise } from '../../.ci/test-summary.mjs';
 
 const script = fileURLToPath(new URL('../../.ci/test-summary.mjs', import.meta.url));
 const test = (status: string) => ({ ancestorTitles: [], fullName: 't', status, title: 't', failureMessages: [] });
-const file = (name: string, status: string, tests: object[], message = '') => ({ assertionResults: tests, status, message, name: path.resolve(name) });
+const file = (name: string, status: string, tests: object[], message = '') => ({
+  assertionResults: tests,
+  status,
+  message,
+  name: path.resolve(name),
+});
 
 describe('.ci/run closing line', () => {
   it('counts passed, failed and skipped tests', () => {
-    const report = { testResults: [file('test/a.test.ts', 'failed', [test('passed'), test('failed'), test('skipped'), test('todo')]), file('test/b.test.ts', 'passed', [test('passed')])] };
+    const report = {
+      testResults: [
+        file('test/a.test.ts', 'failed', [test('passed'), test('failed'), test('skipped'), test('todo')]),
+        file('test/b.test.ts', 'passed', [test('passed')]),
+      ],
+    };
     const s = summarise(report, 1);
     expect(s.lines).toEqual(['tests: 2 passed, 1 failed, 2 skipped']);
   });
 
   it('counts a test file that failed to load as failed and names it', () => {
-    const report = { testResults: [file('test/load.test.ts', 'failed', [], 'boom at load\n    at somewhere'), file('test/ok.test.ts', 'passed', [test('passed')])] };
+    const report = {
+      testResults: [
+        file('test/load.test.ts', 'failed', [], 'boom at load\n    at somewhere'),
+        file('test/ok.test.ts', 'passed', [test('passed')]),
+      ],
+    };
     const s = summarise(report, 1);
     expect(s.lines).toEqual(['failed outside its tests: test/load.test.ts: boom at load', 'tests: 1 passed, 1 failed, 0 skipped']);
   });
@@ -38,7 +53,9 @@ describe('.ci/run closing line', () => {
   });
 
   it('prints a failure line and exits 1 when the report is missing', () => {
-    const run = spawnSync(process.execPath, [script, path.join(fileURLToPath(new URL('.', import.meta.url)), 'no-such-report.json'), '0'], { encoding: 'utf8' });
+    const run = spawnSync(process.execPath, [script, path.join(fileURLToPath(new URL('.', import.meta.url)), 'no-such-report.json'), '0'], {
+      encoding: 'utf8',
+    });
     expect(run.status).toBe(1);
     const lines = run.stdout.trim().split('\n');
     expect(lines[0]).toMatch(/^the vitest report is missing or unreadable \(ENOENT/);

@@ -21,7 +21,9 @@ describe('requireTool: a missing tool skips locally and fails under CI=true', ()
   });
 
   it('throws, naming what is missing, when CI=true', () => {
-    expect(() => skipOrThrow(['/usr/bin/chromium is missing'], { CI: 'true' })).toThrow(/^\/usr\/bin\/chromium is missing\. Under CI=true a test may not skip/);
+    expect(() => skipOrThrow(['/usr/bin/chromium is missing'], { CI: 'true' })).toThrow(
+      /^\/usr\/bin\/chromium is missing\. Under CI=true a test may not skip/,
+    );
   });
 
   it('asks for nothing when no need is given', () => {

@@ -34,10 +34,15 @@ export const sharedBenchDir = fileURLToPath(new URL('../../../shared/bench/', im
  */
 export type Need = 'chromium' | 'python3-numpy' | 'python3-pandas' | 'python3-sklearn' | 'shared/reference' | 'shared/bench';
 
-const PYTHON_MODULES: Partial<Record<Need, string>> = { 'python3-numpy': 'numpy', 'python3-pandas': 'pandas', 'python3-sklearn': 'sklearn' };
+const PYTHON_MODULES: Partial<Record<Need, string>> = {
+  'python3-numpy': 'numpy',
+  'python3-pandas': 'pandas',
+  'python3-sklearn': 'sklearn',
+};
 
 /** Prints the names of the given modules that fail to import, one per line (bounded: argv only). */
-const PYTHON_PROBE = 'import importlib, sys\nfor m in sys.argv[1:]:\n    try:\n        importlib.import_module(m)\n    except Exception:\n        print(m)\n';
+const PYTHON_PROBE =
+  'import importlib, sys\nfor m in sys.argv[1:]:\n    try:\n        importlib.import_module(m)\n    except Exception:\n        print(m)\n';
 
 function executable(file: string): boolean {
   try {
@@ -58,18 +63,27 @@ export function unmetNeeds(needs: readonly Need[]): string[] {
       reasons.push(`${PYTHON3} is missing (Debian packages python3 ${packages.join(' ')})`);
     } else {
       const modules = packages.map((n) => PYTHON_MODULES[n] as string);
-      const probe = spawnSync(PYTHON3, ['-c', PYTHON_PROBE, ...modules], { encoding: 'utf8', timeout: 120_000, env: { PATH: '/usr/bin:/bin', HOME: process.env.HOME ?? '/' } });
+      const probe = spawnSync(PYTHON3, ['-c', PYTHON_PROBE, ...modules], {
+        encoding: 'utf8',
+        timeout: 120_000,
+        env: { PATH: '/usr/bin:/bin', HOME: process.env.HOME ?? '/' },
+      });
       if (probe.status !== 0) {
-        reasons.push(`${PYTHON3} could not check its modules (status ${probe.status ?? probe.signal}): ${(probe.stderr || String(probe.error ?? '')).trim().slice(0, 200)}`);
+        reasons.push(
+          `${PYTHON3} could not check its modules (status ${probe.status ?? probe.signal}): ${(probe.stderr || String(probe.error ?? '')).trim().slice(0, 200)}`,
+        );
       } else {
         const failed = new Set(probe.stdout.split('\n').filter(Boolean));
         const absent = packages.filter((n) => failed.has(PYTHON_MODULES[n] as string));
-        if (absent.length > 0) reasons.push(`${PYTHON3} cannot import ${absent.map((n) => PYTHON_MODULES[n]).join(', ')} (Debian packages ${absent.join(' ')})`);
+        if (absent.length > 0)
+          reasons.push(`${PYTHON3} cannot import ${absent.map((n) => PYTHON_MODULES[n]).join(', ')} (Debian packages ${absent.join(' ')})`);
       }
     }
   }
-  if (needs.includes('shared/reference') && !existsSync(sharedReferenceDir)) reasons.push(`the reference data folder ${sharedReferenceDir} is missing`);
-  if (needs.includes('shared/bench') && !existsSync(`${sharedBenchDir}ref_check.py`)) reasons.push(`the benchmark reference ${sharedBenchDir}ref_check.py is missing`);
+  if (needs.includes('shared/reference') && !existsSync(sharedReferenceDir))
+    reasons.push(`the reference data folder ${sharedReferenceDir} is missing`);
+  if (needs.includes('shared/bench') && !existsSync(`${sharedBenchDir}ref_check.py`))
+    reasons.push(`the benchmark reference ${sharedBenchDir}ref_check.py is missing`);
   return reasons;
 }
 
@@ -87,7 +101,10 @@ export function requireTool(needs: readonly Need[], env: NodeJS.ProcessEnv = pro
 export function skipOrThrow(reasons: readonly string[], env: NodeJS.ProcessEnv): string | null {
   if (reasons.length === 0) return null;
   const reason = reasons.join('; ');
-  if (env.CI === 'true') throw new Error(`${reason}. Under CI=true a test may not skip: .ci/run's set-up step installs the Debian packages, and ../shared must be beside the repository.`);
+  if (env.CI === 'true')
+    throw new Error(
+      `${reason}. Under CI=true a test may not skip: .ci/run's set-up step installs the Debian packages, and ../shared must be beside the repository.`,
+    );
   console.warn(`skipping: ${reason} (apt-get install the packages named; tests fail instead of skipping under CI=true)`);
   return reason;
 }
