@@ -13,16 +13,14 @@ import { createFsRepository } from '../../src/repo/fs-repository.js';
 import { formatHtml, HTML_FILE } from '../../src/report/html.js';
 import type { Result } from '../../src/result/result.js';
 import { defaultSettings } from '../../src/run/settings.js';
+import { CHROMIUM, requireTool, skipNote } from '../tools/require-tool.js';
 
-const CHROMIUM = '/usr/bin/chromium';
 const repoRoot = fileURLToPath(new URL('../../', import.meta.url));
 const outDir = path.join(repoRoot, 'test-output', 'browser');
 const shotDir = path.join(repoRoot, 'test-output', 'screenshots');
-const available = existsSync(CHROMIUM);
-if (!available && process.env.CI === 'true') throw new Error(`${CHROMIUM} is missing; .ci/run installs Debian's chromium`);
-if (!available) console.warn(`skipping the browser test: ${CHROMIUM} is missing (apt-get install chromium)`);
+const missing = requireTool(['chromium']);
 
-describe.skipIf(!available)('HTML report in Chromium', () => {
+describe.skipIf(missing !== null)(`HTML report in Chromium${skipNote(missing)}`, () => {
   let browser: Browser;
   let result: Result;
   let url: string;

@@ -6,14 +6,14 @@
 import { readFileSync } from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { fitDesign } from '../../src/fit/index.js';
-import { referenceDir, referencePresent } from './nist.js';
+import { requireTool, skipNote } from '../tools/require-tool.js';
+import { referenceDir } from './nist.js';
 
-const skip = !referencePresent && process.env.CI !== 'true';
+const missing = requireTool(['shared/reference']);
 
-describe.skipIf(skip)(`Anscombe's quartet${skip ? ` (skipped: ${referenceDir} not found)` : ''}`, () => {
+describe.skipIf(missing !== null)(`Anscombe's quartet${skipNote(missing)}`, () => {
   let rows: { set: number; x: number; y: number }[] = [];
   beforeAll(() => {
-    if (!referencePresent) throw new Error(`reference folder ${referenceDir} is missing (required when CI=true)`);
     const lines = readFileSync(`${referenceDir}anscombe.csv`, 'utf8').trim().split(/\r?\n/);
     rows = lines.slice(1).map((l) => {
       const [set, x, y] = l.split(',').map(Number);

@@ -11,18 +11,15 @@
  * centring. The bar is met with `refine: true` (one refinement pass); the plain QR figures are
  * printed beside them.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { fitDesign, REFINE_MIN_CONDITION } from '../../src/fit/index.js';
-import { lre, nistDesign, readNist, referenceDir, referencePresent } from './nist.js';
+import { requireTool, skipNote } from '../tools/require-tool.js';
+import { lre, nistDesign, readNist } from './nist.js';
 
 const DATASETS = ['Norris', 'Pontius', 'NoInt1', 'NoInt2', 'Filip', 'Longley', 'Wampler1', 'Wampler2', 'Wampler3', 'Wampler4', 'Wampler5'];
-const skip = !referencePresent && process.env.CI !== 'true';
+const missing = requireTool(['shared/reference']);
 
-describe.skipIf(skip)(`NIST StRD linear least squares${skip ? ` (skipped: ${referenceDir} not found)` : ''}`, () => {
-  beforeAll(() => {
-    if (!referencePresent) throw new Error(`reference folder ${referenceDir} is missing (required when CI=true)`);
-  });
-
+describe.skipIf(missing !== null)(`NIST StRD linear least squares${skipNote(missing)}`, () => {
   it.each(DATASETS)('%s: coefficients and residual SD to the required LRE', (name) => {
     const d = readNist(name);
     const { X, n, p } = nistDesign(d);

@@ -8,14 +8,11 @@
  * /work/shared/reference/README.md): CRLF lines; a header whose `File Format` entry gives the
  * 1-based line ranges of the certified values and of the data; data columns y first, then x.
  */
-import { existsSync, readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
+import { readFileSync } from 'node:fs';
+import { sharedReferenceDir } from '../tools/require-tool.js';
 
-/** The shared, read-only reference folder (outside the repository). */
-export const referenceDir = fileURLToPath(new URL('../../../shared/reference/', import.meta.url));
-
-/** Whether the reference folder is there; tests skip without it (fail under CI=true). */
-export const referencePresent = existsSync(referenceDir);
+/** The shared, read-only reference folder (outside the repository); tests check it with requireTool. */
+export const referenceDir = sharedReferenceDir;
 
 /** One parsed StRD dataset. */
 export interface NistDataset {
