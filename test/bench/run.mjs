@@ -36,7 +36,7 @@ const root = fileURLToPath(new URL('../..', import.meta.url));
 
 /** The workloads of ../shared/bench/README.md. */
 export const WORKLOADS = {
-  S: { rows: 2_000, holdoutRows: 500, features: 1, degree: 10, folds: 10, loocv: true, seed: 1, wallRatio: 0.15, memRatio: 0.5, memMiB: null },
+  S: { rows: 2_000, holdoutRows: 500, features: 1, degree: 10, folds: 10, loocv: true, seed: 1, wallRatio: 0.25, memRatio: 0.5, memMiB: null },
   M: { rows: 100_000, holdoutRows: 25_000, features: 5, degree: 4, folds: 5, loocv: true, seed: 2, wallRatio: 0.35, memRatio: 0.5, memMiB: null },
   L: { rows: 1_000_000, holdoutRows: 250_000, features: 8, degree: 3, folds: 5, loocv: false, seed: 3, wallRatio: 0.3, memRatio: null, memMiB: 256 },
 };
