@@ -58,9 +58,13 @@ function httpStatus(error: unknown): number | null {
  */
 export function createCommentApi(token: string, ref: PullRequestRef, log: (line: string) => void = () => {}): CommentApi {
   const say = (message: unknown): void => log(quoteServerText(String(message), MAX_LIBRARY_LINE));
-  const octokit = github.getOctokit(token, {
-    baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com',
-    log: { debug: () => {}, info: () => {}, warn: say, error: say },
+  const quiet = { debug: () => {}, info: () => {}, warn: say, error: say };
+  const octokit = github.getOctokit(token, { baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com', log: quiet });
+  // Octokit's request layer writes its warnings (a deprecated route, with the response's headers)
+  // to `request.log`, else to the console, not to the `log` option: hand it the same logger on
+  // every request (the proxy settings in `request` are kept).
+  octokit.hook.before('request', (options) => {
+    options.request = { ...options.request, log: quiet };
   });
   const where = { owner: ref.owner, repo: ref.repo, issue_number: ref.number };
   return {

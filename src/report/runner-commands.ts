@@ -71,14 +71,14 @@ export function neutraliseJson(json: string): string {
 
 /**
  * Text an API server sent back (an error message, a library's warning about a response), made
- * fit to print: cut to `max` characters (with `…`), control and format characters shown as
- * `\u001b` style escapes, lone surrogates replaced, and neutralised as a log line.
+ * fit to print: on one line, control and format characters shown as `\u001b` style escapes,
+ * lone surrogates replaced, neutralised as a log line ({@link neutraliseLogLine}), then cut to at
+ * most `max` characters (the last one `…` when cut; cutting off a tail cannot make a command).
  * @param text the server's text
- * @param max longest result before neutralising; default {@link MAX_SERVER_TEXT}
+ * @param max longest result, in characters; default {@link MAX_SERVER_TEXT}
  */
 export function quoteServerText(text: string, max = MAX_SERVER_TEXT): string {
-  const chars = [...text.replace(LINE_BREAK, ' ')];
-  const cut = chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : chars.join('');
-  const visible = escapeTerminal(cut).replace(/\p{Cf}/gu, codeEscape).replace(/\p{Cs}/gu, '\ufffd');
-  return neutraliseLogLine(visible);
+  const visible = escapeTerminal(text.replace(LINE_BREAK, ' ')).replace(/\p{Cf}/gu, codeEscape).replace(/\p{Cs}/gu, '\ufffd');
+  const chars = [...neutraliseLogLine(visible)];
+  return chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : chars.join('');
 }
