@@ -29242,7 +29242,7 @@ module.exports = {
 
 /***/ }),
 
-/***/ 8005:
+/***/ 6380:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -29254,8 +29254,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // UNUSED EXPORTS: CLI_FETCH_HINT
 
-// EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __nccwpck_require__(1455);
+;// CONCATENATED MODULE: external "node:fs/promises"
+const promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
@@ -29642,7 +29642,7 @@ async function evaluateBase(settings, revision, options) {
     const sha = await tryResolveCommit(settings.root, revision);
     if (sha === null)
         return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
-    const prefix = external_node_path_default().relative(await (0,promises_.realpath)(top), await (0,promises_.realpath)(settings.root)).split((external_node_path_default()).sep).join('/');
+    const prefix = external_node_path_default().relative(await (0,promises_namespaceObject.realpath)(top), await (0,promises_namespaceObject.realpath)(settings.root)).split((external_node_path_default()).sep).join('/');
     const repo = createGitRepository({ cwd: settings.root, commit: sha, prefix });
     try {
         // Explicitly named descriptors that do not exist at the base are new in the head.
@@ -29677,7 +29677,8 @@ async function evaluateBase(settings, revision, options) {
 /* harmony export */   s: () => (/* binding */ createCommentApi)
 /* harmony export */ });
 /* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(157);
-/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5596);
+/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
+/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5596);
 /**
  * The one pull-request comment: found again by its hidden marker and updated in place, created
  * only when none exists. A token that may not write (pull requests from forks, read-only
@@ -29685,6 +29686,9 @@ async function evaluateBase(settings, revision, options) {
  */
 
 
+
+/** Longest line of Octokit's own warnings printed (its text quotes the request and a response's headers). */
+const MAX_LIBRARY_LINE = 200;
 /** HTTP status of an Octokit request error, or null. */
 function httpStatus(error) {
     if (typeof error === 'object' && error !== null && 'status' in error) {
@@ -29696,11 +29700,22 @@ function httpStatus(error) {
 /**
  * The REST API behind {@link CommentApi}, through `@actions/github`'s Octokit (base URL from
  * `GITHUB_API_URL`, proxy from the runner's settings). The token is only handed to Octokit.
+ * Octokit's own warnings and errors (some of them quote a response's headers) never reach the
+ * console: they go to `log`, cut and cleaned with {@link quoteServerText}.
  * @param token a token with `pull-requests: write` (or `issues: write`)
  * @param ref the pull request
+ * @param log where Octokit's warnings and errors go, one cleaned line each; default: dropped
  */
-function createCommentApi(token, ref) {
-    const octokit = _actions_github__WEBPACK_IMPORTED_MODULE_0__/* .getOctokit */ .Q(token, { baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com' });
+function createCommentApi(token, ref, log = () => { }) {
+    const say = (message) => log((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteServerText */ .h3)(String(message), MAX_LIBRARY_LINE));
+    const quiet = { debug: () => { }, info: () => { }, warn: say, error: say };
+    const octokit = _actions_github__WEBPACK_IMPORTED_MODULE_0__/* .getOctokit */ .Q(token, { baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com', log: quiet });
+    // Octokit's request layer writes its warnings (a deprecated route, with the response's headers)
+    // to `request.log`, else to the console, not to the `log` option: hand it the same logger on
+    // every request (the proxy settings in `request` are kept).
+    octokit.hook.before('request', (options) => {
+        options.request = { ...options.request, log: quiet };
+    });
     const where = { owner: ref.owner, repo: ref.repo, issue_number: ref.number };
     return {
         async list() {
@@ -29719,13 +29734,15 @@ function createCommentApi(token, ref) {
  * Updates fitgate's comment in place, or creates it when there is none. Never creates a second
  * one: when several carry the marker (made by hand), the oldest is updated.
  * 401, 403 and 404 come back as `forbidden` (the token may not write here); other failures as
- * `failed`. Neither throws.
+ * `failed`. Neither throws. The message is the server's text cut and cleaned with
+ * {@link quoteServerText} (at most {@link MAX_SERVER_TEXT} characters, one line, no runner
+ * command), ready to print.
  * @param api the comment calls
  * @param body the comment, starting with {@link COMMENT_MARKER}
  */
 async function upsertComment(api, body) {
     try {
-        const existing = (await api.list()).find((c) => c.body.includes(_report_summary_js__WEBPACK_IMPORTED_MODULE_1__/* .COMMENT_MARKER */ .JO));
+        const existing = (await api.list()).find((c) => c.body.includes(_report_summary_js__WEBPACK_IMPORTED_MODULE_2__/* .COMMENT_MARKER */ .JO));
         if (existing) {
             await api.update(existing.id, body);
             return { kind: 'updated', id: existing.id };
@@ -29735,7 +29752,7 @@ async function upsertComment(api, body) {
     }
     catch (error) {
         const status = httpStatus(error);
-        const message = error instanceof Error ? error.message : String(error);
+        const message = (0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteServerText */ .h3)(error instanceof Error ? error.message : String(error));
         if (status === 401 || status === 403 || status === 404)
             return { kind: 'forbidden', status, message };
         return { kind: 'failed', message: status === null ? message : `HTTP ${status}: ${message}` };
@@ -29796,19 +29813,27 @@ __nccwpck_require__.d(__webpack_exports__, {
   u5: () => (/* binding */ writeReport)
 });
 
-// EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __nccwpck_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/report/runner-commands.ts
+var runner_commands = __nccwpck_require__(673);
 ;// CONCATENATED MODULE: ./src/report/json.ts
-/** `JSON.stringify(result)` with two-space indentation and a final newline. */
+
+/**
+ * `JSON.stringify(result)` with two-space indentation and a final newline, where `##[` inside a
+ * string is written `##\u005b` and U+2028, U+2029 and NEL as `\u` escapes
+ * ({@link neutraliseJson}): `JSON.parse` gives back the same Result, and no line of the report
+ * holds a runner command when it is printed in a CI step.
+ */
 function formatJson(result) {
-    return `${JSON.stringify(result, null, 2)}\n`;
+    return `${(0,runner_commands/* neutraliseJson */.rb)(JSON.stringify(result, null, 2))}\n`;
 }
 
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __nccwpck_require__(1628);
+// EXTERNAL MODULE: ./src/entries/safe-write.ts
+var safe_write = __nccwpck_require__(9725);
 ;// CONCATENATED MODULE: ./src/action/outcome.ts
 /**
  * The step's outcome from a Result: the outputs, the JSON report file, and the one-line
@@ -29856,15 +29881,16 @@ function failureMessage(result, failOn) {
 /**
  * Writes the JSON report under `dir` and returns its path: `fitgate-report.json`, or
  * `fitgate-report-<step>.json` when `GITHUB_ACTION` names the step (several steps in one job).
+ * Written with {@link writeFileSafely}: never through a link, atomically.
  * @param result the run's Result
- * @param dir folder to write in (created when missing)
+ * @param dir folder to write in (`RUNNER_TEMP`; created when missing)
  * @param step the step's id (`GITHUB_ACTION`), or undefined
+ * @throws InputError naming `RUNNER_TEMP` when the file is refused or cannot be written
  */
 async function writeReport(result, dir, step) {
     const slug = (step ?? '').replace(/[^A-Za-z0-9_.-]+/g, '-').replace(/^[-.]+/, '');
     const file = external_node_path_default().join(dir, slug === '' ? 'fitgate-report.json' : `fitgate-report-${slug}.json`);
-    await (0,promises_.mkdir)(dir, { recursive: true });
-    await (0,promises_.writeFile)(file, formatJson(result));
+    (0,safe_write/* writeFileSafely */.kv)(file, formatJson(result), { option: 'RUNNER_TEMP', within: [] });
     return file;
 }
 
@@ -32498,13 +32524,16 @@ function gapRatio(trainRmse, holdoutRmse) {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_2___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_2__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
-/* harmony import */ var _run_shard_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6941);
+/* harmony import */ var _repo_real_folder_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6711);
+/* harmony import */ var _run_shard_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(6941);
 /**
  * The action's inputs: the only module that calls `core.getInput`. The runner passes each
  * input as an `INPUT_<NAME>` variable with the name upper-cased and hyphens kept
  * (`INPUT_FAIL-ON`), and applies `action.yml` defaults only inside a real run, so the defaults
- * are applied here too. Bad values throw an InputError that says what was expected.
+ * are applied here too. Bad values throw an InputError that says what was expected. The workspace
+ * and the root are taken as real paths (`realpath(3)`).
  */
+
 
 
 
@@ -32556,13 +32585,18 @@ function insidePath(name, base, value, baseName) {
  * Reads and checks every input (`INPUT_*` variables), `GITHUB_WORKSPACE` and `RUNNER_TEMP`
  * from the process environment.
  * @param cwd folder used when `GITHUB_WORKSPACE` is unset; default `process.cwd()`
- * @throws InputError for a bad value (the run must not go on: exit status 2)
+ * @throws InputError for a bad value (the run must not go on: exit status 2), a workspace or
+ *   `working-directory` that is not an existing folder, or a `working-directory` whose real path
+ *   leaves the workspace's real path
  */
 function readInputs(cwd = process.cwd()) {
     const env = process.env;
-    const workspace = node_path__WEBPACK_IMPORTED_MODULE_2___default().resolve(env.GITHUB_WORKSPACE || cwd);
-    const prefix = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
-    const root = prefix === '' ? workspace : node_path__WEBPACK_IMPORTED_MODULE_2___default().join(workspace, prefix);
+    // Real paths: the root is checked against the workspace as it is on disk, so that a folder
+    // replaced by a link to a parent (or anywhere outside) is refused here, once.
+    const workspace = (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_4__/* .realFolder */ .PX)(node_path__WEBPACK_IMPORTED_MODULE_2___default().resolve(env.GITHUB_WORKSPACE || cwd), { key: 'GITHUB_WORKSPACE', within: null });
+    const named = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
+    const root = (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_4__/* .realFolder */ .PX)(node_path__WEBPACK_IMPORTED_MODULE_2___default().join(workspace, named), { key: 'working-directory', within: workspace, insideOnly: true, withinName: 'workspace' });
+    const prefix = node_path__WEBPACK_IMPORTED_MODULE_2___default().relative(workspace, root).split((node_path__WEBPACK_IMPORTED_MODULE_2___default().sep)).join('/');
     const configValue = input('config');
     const config = insidePath('config', root, configValue, 'working directory');
     if (config === '')
@@ -32576,7 +32610,7 @@ function readInputs(cwd = process.cwd()) {
     };
     const shardText = input('shard');
     return {
-        shard: shardText === '' ? null : (0,_run_shard_js__WEBPACK_IMPORTED_MODULE_4__/* .parseShard */ .uK)(shardText, 'shard'),
+        shard: shardText === '' ? null : (0,_run_shard_js__WEBPACK_IMPORTED_MODULE_5__/* .parseShard */ .uK)(shardText, 'shard'),
         files: { html: output('html'), sarif: output('sarif'), junit: output('junit') },
         settings: {
             root,
@@ -32605,11 +32639,11 @@ __nccwpck_require__.d(__webpack_exports__, {
   n: () => (/* binding */ writeFileReports)
 });
 
-// EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __nccwpck_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
 var checks = __nccwpck_require__(1093);
 // EXTERNAL MODULE: ./src/core/format.ts
@@ -33731,29 +33765,277 @@ function formatSarif(result, options = {}) {
     return `${JSON.stringify(sarifLog(result, options), null, 2)}\n`;
 }
 
+// EXTERNAL MODULE: ./src/entries/safe-write.ts
+var safe_write = __nccwpck_require__(9725);
 ;// CONCATENATED MODULE: ./src/entries/output-files.ts
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
- * and the action; the reporters only format, this module only writes.
+ * and the action; the reporters only format, this module only writes, each file through
+ * {@link writeFileSafely} (never through a link, atomically).
  */
 
 
 
 
 
-/** Writes every requested file report (folders are created). */
+
+/**
+ * Writes every requested file report (missing folders are made, each checked). A report that
+ * cannot be written does not stop the others.
+ * @returns the reports that were not written, in the order html, sarif, junit; empty when all were
+ */
 async function writeFileReports(result, files) {
-    if (files.html !== null) {
-        await (0,promises_.mkdir)(files.html, { recursive: true });
-        await (0,promises_.writeFile)(external_node_path_default().join(files.html, HTML_FILE), formatHtml(result));
+    const failures = [];
+    const place = (name) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
+    const attempt = (name, file, text) => {
+        try {
+            (0,safe_write/* writeFileSafely */.kv)(file, text(), place(name));
+        }
+        catch (error) {
+            failures.push({ option: place(name).option, refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC, message: (0,errors/* errorMessage */.gJ)(error) });
+        }
+    };
+    if (files.html !== null)
+        attempt('html', external_node_path_default().join(files.html, HTML_FILE), () => formatHtml(result));
+    if (files.sarif !== null)
+        attempt('sarif', files.sarif, () => formatSarif(result, { pathPrefix: files.sarifPrefix }));
+    if (files.junit !== null)
+        attempt('junit', files.junit, () => formatJunit(result, { failOn: files.failOn }));
+    return failures;
+}
+
+
+/***/ }),
+
+/***/ 9725:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   LC: () => (/* binding */ OUTPUT_REFUSED),
+/* harmony export */   kv: () => (/* binding */ writeFileSafely)
+/* harmony export */ });
+/* unused harmony export OUTPUT_FAILED */
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+/* harmony import */ var _repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6711);
+/**
+ * Writing one report file: never through a symbolic link, and atomically. Every file fitgate
+ * writes (`--out`, `--html`, `--sarif`, `--junit`, the action's `html` / `sarif` / `junit`, the
+ * JSON report under `RUNNER_TEMP`) goes through {@link writeFileSafely}:
+ *
+ * 1. The folder is checked before anything is created: its deepest existing part is resolved
+ *    with `realpath(3)`, and when the path was named inside one of the boundary folders (the
+ *    action's workspace; the CLI's repository root and working directory) that real path must
+ *    lie inside the boundary's real path. Missing folders are then made one at a time inside the
+ *    real folder, each checked to be a plain folder and not a link.
+ * 2. A target that is a symbolic link, or not a regular file (a folder, a device, a pipe), is
+ *    refused; nothing is written through it.
+ * 3. The bytes go to a new temporary file in the same real folder, opened with
+ *    `O_CREAT | O_EXCL | O_NOFOLLOW` (never an existing file, never a link), written in full,
+ *    flushed with `fsync`, closed, and renamed over the target (`rename(2)` replaces the name in
+ *    one step, and replaces a link rather than following it). A run that is killed or fails
+ *    mid-way (a full disk) leaves the previous complete file, never an empty or cut one; a
+ *    temporary file that fails is removed.
+ *
+ * Every refusal and failure is an InputError whose key is the option that named the path.
+ */
+
+
+
+
+/** Error code of a target refused before writing (a link, not a file, a folder leading outside). */
+const OUTPUT_REFUSED = 'output-refused';
+/** Error code of a write that failed (a full disk, no permission): the previous file is kept. */
+const OUTPUT_FAILED = 'output-failed';
+/** Most folder levels walked up to the deepest existing one (a path deeper than this is refused). */
+const MAX_DEPTH = 256;
+/** Tries at a fresh temporary name before giving up (another writer in the same folder). */
+const MAX_TEMP_TRIES = 8;
+function codeOf(error) {
+    return error?.code;
+}
+/**
+ * Writes `data` to `file` without following a link, atomically (see the module comment).
+ * @param file the target, absolute or relative to the process's folder
+ * @param data the file's content (a string is written as UTF-8)
+ * @param place the option that named it and the boundary folders; see {@link WritePlace}
+ * @param hooks replaced file operations, for tests; default none
+ * @returns the real path written
+ * @throws InputError `output-refused` (nothing was written, the previous file is unchanged) or
+ *   `output-failed` (the write failed; the previous file is unchanged, the temporary file removed)
+ */
+function writeFileSafely(file, data, place, hooks = {}) {
+    const where = { key: place.option };
+    const refuse = (message) => new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_REFUSED, message, where);
+    if (file === '' || file.includes('\0'))
+        throw refuse(`expected a file path, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(file)}`);
+    const named = node_path__WEBPACK_IMPORTED_MODULE_1___default().resolve(file);
+    const name = node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(named);
+    const folder = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(named);
+    if (name === '' || folder === named)
+        throw refuse(`${named} names no file; expected a file path`);
+    const failed = (error) => error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz ? error : new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
+    // 1. The boundary that holds the path as written, and the real folder.
+    const bases = place.within.filter((b) => (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)(b, folder)).sort((a, b) => b.length - a.length);
+    const base = bases[0] ?? null;
+    if (base === null && place.insideOnly)
+        throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
+    let realDir;
+    let target;
+    try {
+        realDir = makeFolder(folder, base, refuse);
+        // 2. The target itself.
+        target = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, name);
+        checkTarget(target, named, refuse);
     }
-    if (files.sarif !== null) {
-        await (0,promises_.mkdir)(external_node_path_default().dirname(external_node_path_default().resolve(files.sarif)), { recursive: true });
-        await (0,promises_.writeFile)(files.sarif, formatSarif(result, { pathPrefix: files.sarifPrefix }));
+    catch (error) {
+        throw failed(error);
     }
-    if (files.junit !== null) {
-        await (0,promises_.mkdir)(external_node_path_default().dirname(external_node_path_default().resolve(files.junit)), { recursive: true });
-        await (0,promises_.writeFile)(files.junit, formatJunit(result, { failOn: files.failOn }));
+    // 3. A temporary file in the same folder, then rename.
+    const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+    const write = hooks.write ?? ((fd, b, offset, length) => (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.writeSync)(fd, b, offset, length));
+    const flags = node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_WRONLY | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_CREAT | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_EXCL | (node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_NOFOLLOW ?? 0);
+    let temp = '';
+    let fd = -1;
+    for (let attempt = 0; fd < 0; attempt++) {
+        temp = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`);
+        try {
+            fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(temp, flags, 0o666);
+        }
+        catch (error) {
+            if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES)
+                throw failed(error);
+        }
+    }
+    try {
+        // Each round writes at least one byte, so this ends after at most bytes.length rounds.
+        for (let offset = 0; offset < bytes.length;) {
+            const n = write(fd, bytes, offset, bytes.length - offset);
+            if (!(n > 0))
+                throw new Error('the write made no progress');
+            offset += n;
+        }
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fsyncSync)(fd);
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+        fd = -1;
+        // The folder must still be the one checked (no link swapped in while writing).
+        if ((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(realDir) !== realDir)
+            throw refuse(`the folder of ${named} changed while it was written; nothing was replaced`);
+        checkTarget(target, named, refuse);
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.renameSync)(temp, target);
+    }
+    catch (error) {
+        if (fd >= 0) {
+            try {
+                (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+            }
+            catch {
+                // already failing; the first error is the one reported
+            }
+        }
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.unlinkSync)(temp);
+        }
+        catch {
+            // gone already
+        }
+        throw failed(error);
+    }
+    syncFolder(realDir);
+    return target;
+}
+/**
+ * The real path of `folder`, made when missing. The deepest existing part is resolved and, when
+ * `base` is given, must lie inside the real path of `base`; each missing folder is then made
+ * inside that real path and checked to be a folder and not a link.
+ */
+function makeFolder(folder, base, refuse) {
+    const missing = [];
+    let existing = folder;
+    for (let depth = 0;; depth++) {
+        if (depth > MAX_DEPTH)
+            throw refuse(`${folder} is more than ${MAX_DEPTH} folders deep`);
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(existing);
+            break;
+        }
+        catch (error) {
+            const code = codeOf(error);
+            if (code !== 'ENOENT' && code !== 'ENOTDIR')
+                throw error;
+        }
+        const parent = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(existing);
+        if (parent === existing)
+            break;
+        missing.unshift(node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(existing));
+        existing = parent;
+    }
+    let real;
+    try {
+        real = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(existing);
+    }
+    catch (error) {
+        const code = codeOf(error);
+        if (code === 'ENOENT' || code === 'ELOOP')
+            throw refuse(`${existing} is a symbolic link that leads nowhere or round a loop; expected a folder`);
+        throw error;
+    }
+    if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(real).isDirectory())
+        throw refuse(`${existing} is not a folder; expected a folder to write in`);
+    if (base !== null && !(0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(base), real)) {
+        throw refuse(`${folder} leads out of ${base} through a symbolic link; expected a folder whose real path is inside it`);
+    }
+    for (const part of missing) {
+        real = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(real, part);
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.mkdirSync)(real);
+        }
+        catch (error) {
+            if (codeOf(error) !== 'EEXIST')
+                throw error;
+        }
+        const info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(real);
+        if (!info.isDirectory())
+            throw refuse(`${real} is ${info.isSymbolicLink() ? 'a symbolic link' : 'not a folder'}; expected a folder to write in`);
+    }
+    return real;
+}
+/** Refuses a target that is a symbolic link or not a regular file; a missing target is fine. */
+function checkTarget(target, named, refuse) {
+    let info;
+    try {
+        info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(target);
+    }
+    catch (error) {
+        if (codeOf(error) === 'ENOENT')
+            return;
+        throw error;
+    }
+    if (info.isSymbolicLink())
+        throw refuse(`${named} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`);
+    if (!info.isFile())
+        throw refuse(`${named} is not a regular file (a folder, device or pipe); expected a file to replace, or no file`);
+}
+/** Flushes the folder's entry list (the rename) to disk where the platform allows; best effort. */
+function syncFolder(dir) {
+    let fd = -1;
+    try {
+        fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(dir, node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_RDONLY);
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fsyncSync)(fd);
+    }
+    catch {
+        // Not every platform opens or syncs a folder; the file itself is already synced.
+    }
+    if (fd >= 0) {
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+        }
+        catch {
+            // nothing left to do
+        }
     }
 }
 
@@ -35325,9 +35607,9 @@ function firstBeyondIn(k, a, n, max) {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8298);
 /* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(157);
-/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8005);
+/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6380);
 /* harmony import */ var _action_comment_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1151);
-/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(3566);
+/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_17__ = __nccwpck_require__(3566);
 /* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5505);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4296);
 /* harmony import */ var _entries_inputs_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9939);
@@ -35335,10 +35617,12 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(5280);
 /* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(6797);
 /* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(2480);
-/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(8352);
-/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(856);
-/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(5596);
-/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(5655);
+/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(9725);
+/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(4526);
+/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(856);
+/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(673);
+/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(5596);
+/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_16__ = __nccwpck_require__(5655);
 /**
  * The action's entry: read the inputs, compare with the base commit on pull requests, run the
  * same pipeline as the CLI, hand the Result to the reporters (annotations, log, job summary,
@@ -35361,33 +35645,57 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 
 
 
-/** Writes one notice or warning line of our own (message escaped). */
+
+
+/** Writes one notice, warning or error line of our own (message escaped, no runner command). */
 function say(level, message) {
-    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
+    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
+}
+/** Fails the step with a message whose runner commands are broken (the toolkit escapes the rest). */
+function fail(message) {
+    _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__/* .defuseLegacyCommands */ .u5)(message));
 }
 async function run() {
     let prefix = '';
     try {
         const inputs = (0,_entries_inputs_js__WEBPACK_IMPORTED_MODULE_6__/* .readInputs */ .K)();
+        // The runner hides the token in every later line of the log.
+        if (inputs.token !== '')
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setSecret */ .Pq(inputs.token);
         prefix = inputs.prefix;
-        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_15__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
+        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_17__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
         // The base commit first, so that the head run can compare with it.
         const baseOptions = pr?.baseSha ? await (0,_action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .evaluateBase */ .D0)(inputs.settings, pr.baseSha, { fetchHint: _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .ACTION_FETCH_HINT */ .MZ }) : {};
         const scale = { shard: inputs.shard, jobs: (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_7__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
-        const result = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_11__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
-        // Reporters: annotations and log, JSON report, job summary, comment.
-        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatAnnotations */ .MR)(result, { prefix }));
-        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_14__/* .formatText */ .v)(result).split('\n'))
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .escapeLogLine */ ._P)(line));
-        const report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
+        const result = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_12__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
+        // Reporters: annotations and log, JSON report, file reports, job summary, comment. A file
+        // that is refused (a link, a folder leading out of the workspace) fails the step as bad
+        // input once every other reporter has run; a write that fails is a warning.
+        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .formatAnnotations */ .MR)(result, { prefix }));
+        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_16__/* .formatText */ .v)(result).split('\n'))
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__/* .neutraliseLogLine */ .h4)(line));
+        const refused = [];
+        let report = '';
         try {
-            await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn });
+            report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
         }
         catch (error) {
-            say('warning', `could not write a file report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+            if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz && error.code === _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_11__/* .OUTPUT_REFUSED */ .LC)
+                refused.push(error.describe());
+            else
+                say('warning', `could not write the JSON report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
         }
+        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn, within: [inputs.workspace], insideOnly: true });
+        for (const failure of files) {
+            if (failure.refused)
+                refused.push(failure.message);
+            else
+                say('warning', `could not write a file report: ${failure.message}`);
+        }
+        for (const message of refused)
+            say('error', `a report file was refused: ${message}`);
         try {
-            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_13__/* .formatSummary */ .kq)(result)).write();
+            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_15__/* .formatSummary */ .kq)(result)).write();
         }
         catch (error) {
             say('warning', `could not write the job summary: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
@@ -35396,7 +35704,8 @@ async function run() {
             if (inputs.token === '')
                 say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
             else {
-                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .l)((0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .s)(inputs.token, pr), (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_13__/* .formatComment */ .jw)(result));
+                const api = (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .s)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
+                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .l)(api, (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_15__/* .formatComment */ .jw)(result));
                 if (outcome.kind === 'forbidden') {
                     say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
                 }
@@ -35405,25 +35714,27 @@ async function run() {
                 }
             }
         }
-        // Outputs and the step's status.
-        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, result.verdict);
+        // Outputs and the step's status (a refused report file counts as bad input, as the CLI's exit status 2).
+        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, refused.length > 0 ? 'error' : result.verdict);
         _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.failed, String((0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failedCount */ .dD)(result, inputs.settings.failOn)));
         _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.report, report);
         const failure = (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failureMessage */ .oh)(result, inputs.settings.failOn);
-        if (failure !== null)
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(failure);
+        if (refused.length > 0)
+            fail(`fitgate refused to write ${refused.length === 1 ? 'a report file' : `${refused.length} report files`} (see the errors above).${failure !== null ? ` ${failure}` : ''}`);
+        else if (failure !== null)
+            fail(failure);
     }
     catch (error) {
         _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, 'error');
         if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz) {
             if (error.location.file !== undefined)
-                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_12__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(`fitgate could not run: ${error.describe()}`);
+                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
+            fail(`fitgate could not run: ${error.describe()}`);
         }
         else {
             if (error instanceof Error && error.stack)
-                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz(error.stack);
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1(`fitgate failed unexpectedly: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__/* .defuseLegacyCommands */ .u5)(error.stack));
+            fail(`fitgate failed unexpectedly: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
         }
     }
 }
@@ -35436,24 +35747,18 @@ __webpack_async_result__();
 
 /***/ }),
 
-/***/ 8352:
+/***/ 4526:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  E: () => (/* binding */ createFsRepository)
-});
-
-;// CONCATENATED MODULE: external "node:fs"
-const external_node_fs_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
-// EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __nccwpck_require__(6760);
-// EXTERNAL MODULE: ./src/core/errors.ts
-var errors = __nccwpck_require__(4296);
-// EXTERNAL MODULE: ./src/repo/repo-path.ts
-var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/repo/fs-repository.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   E: () => (/* binding */ createFsRepository)
+/* harmony export */ });
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+/* harmony import */ var _repo_path_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3856);
 /**
  * A {@link RepoReader} over a folder on disk (the working tree). Every path is checked
  * lexically (no absolute paths, no `..` above the root) and then through the file system
@@ -35481,19 +35786,19 @@ const IGNORED_GLOBS = ['**/node_modules/**', '**/.git/**'];
  * @param root the repository folder (absolute, or relative to the working directory)
  */
 function createFsRepository(root) {
-    const rootAbsolute = external_node_path_.resolve(root);
+    const rootAbsolute = node_path__WEBPACK_IMPORTED_MODULE_1__.resolve(root);
     let rootRealPromise = null;
     const rootReal = () => {
         rootRealPromise ??= realpath(rootAbsolute).catch((error) => {
             rootRealPromise = null;
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
         });
         return rootRealPromise;
     };
     /** The real path of a normalised repository-relative path, or null when nothing is there. */
     const realInside = async (rel, where, shown) => {
         const base = await rootReal();
-        const full = rel === '' ? base : external_node_path_.join(base, ...rel.split('/'));
+        const full = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...rel.split('/'));
         let real = null;
         try {
             real = await realpath(full);
@@ -35501,13 +35806,13 @@ function createFsRepository(root) {
         catch (error) {
             const code = codeOf(error);
             if (code === 'ELOOP')
-                throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
             if (code !== 'ENOENT' && code !== 'ENOTDIR')
                 throw error;
         }
         if (real === null) {
             // Missing: still refuse when an existing folder on the way leads outside.
-            for (let parent = external_node_path_.dirname(full); parent.length >= base.length; parent = external_node_path_.dirname(parent)) {
+            for (let parent = node_path__WEBPACK_IMPORTED_MODULE_1__.dirname(full); parent.length >= base.length; parent = node_path__WEBPACK_IMPORTED_MODULE_1__.dirname(parent)) {
                 try {
                     const parentReal = await realpath(parent);
                     if (!isInside(base, parentReal))
@@ -35515,7 +35820,7 @@ function createFsRepository(root) {
                     break;
                 }
                 catch (error) {
-                    if (error instanceof errors/* InputError */.dz)
+                    if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz)
                         throw error;
                     if (parent === base)
                         break;
@@ -35527,21 +35832,21 @@ function createFsRepository(root) {
             throw outside(shown, where);
         return real;
     };
-    const check = async (path) => realInside((0,repo_path/* normaliseRepoPath */.Gn)(path), { file: path }, path);
+    const check = async (path) => realInside((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(path), { file: path }, path);
     const requireFile = async (path) => {
         const real = await check(path);
         if (real === null)
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
         const info = await stat(real);
         if (!info.isFile())
-            throw new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `is not a regular file (a folder or device); expected a file`, { file: path });
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `is not a regular file (a folder or device); expected a file`, { file: path });
         return real;
     };
     return {
         label: rootAbsolute,
         async resolve(fromFile, target, where) {
             const location = { file: fromFile, ...where };
-            const rel = (0,repo_path/* joinRepoPath */.Kp)(fromFile, target, location);
+            const rel = (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .joinRepoPath */ .Kp)(fromFile, target, location);
             await realInside(rel, location, target);
             return rel;
         },
@@ -35555,33 +35860,33 @@ function createFsRepository(root) {
             return (await stat(await requireFile(path))).size;
         },
         async read(path) {
-            return (0,external_node_fs_namespaceObject.readFileSync)(await requireFile(path));
+            return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readFileSync)(await requireFile(path));
         },
         async *stream(path, chunkBytes = 1024 * 1024) {
             const real = await requireFile(path);
-            const fd = (0,external_node_fs_namespaceObject.openSync)(real, 'r');
+            const fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(real, 'r');
             try {
                 // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
                 // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
                 // so a reader may keep a previous one.
-                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,external_node_fs_namespaceObject.fstatSync)(fd).size + 1)));
+                const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fstatSync)(fd).size + 1)));
                 for (;;) {
                     const piece = Buffer.allocUnsafe(size);
-                    const n = (0,external_node_fs_namespaceObject.readSync)(fd, piece, 0, size, null);
+                    const n = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync)(fd, piece, 0, size, null);
                     if (n === 0)
                         return;
                     yield n === size ? piece : piece.subarray(0, n);
                 }
             }
             finally {
-                (0,external_node_fs_namespaceObject.closeSync)(fd);
+                (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
             }
         },
         async glob(patterns) {
             for (const pattern of patterns) {
                 const p = pattern.replace(/\\/g, '/');
-                if ((0,repo_path/* isAbsoluteLike */.tp)(pattern) || p === '..' || p.startsWith('../')) {
-                    throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
+                if ((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .isAbsoluteLike */ .tp)(pattern) || p === '..' || p.startsWith('../')) {
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
                 }
             }
             if (patterns.length === 0)
@@ -35595,28 +35900,97 @@ function createFsRepository(root) {
                 dot: false,
                 ignore: IGNORED_GLOBS,
             });
-            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,repo_path/* isIgnoredPath */.wY)(p)));
+            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .isIgnoredPath */ .wY)(p)));
             return [...paths].sort();
         },
     };
 }
 /** The real path (the system's realpath(3), as fs/promises uses), as a promise. */
 async function realpath(path) {
-    return external_node_fs_namespaceObject.realpathSync.native(path);
+    return node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync.native(path);
 }
 /** File information, as a promise. */
 async function stat(path) {
-    return (0,external_node_fs_namespaceObject.statSync)(path);
+    return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(path);
 }
 function isInside(base, real) {
-    const rel = external_node_path_.relative(base, real);
-    return rel === '' || (rel !== '..' && !rel.startsWith(`..${external_node_path_.sep}`) && !external_node_path_.isAbsolute(rel));
+    const rel = node_path__WEBPACK_IMPORTED_MODULE_1__.relative(base, real);
+    return rel === '' || (rel !== '..' && !rel.startsWith(`..${node_path__WEBPACK_IMPORTED_MODULE_1__.sep}`) && !node_path__WEBPACK_IMPORTED_MODULE_1__.isAbsolute(rel));
 }
 function outside(shown, where) {
-    return new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
 }
 function codeOf(error) {
     return error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : undefined;
+}
+
+
+/***/ }),
+
+/***/ 6711:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   PX: () => (/* binding */ realFolder),
+/* harmony export */   zz: () => (/* binding */ isInsideFolder)
+/* harmony export */ });
+/* unused harmony export FOLDER_REFUSED */
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+/**
+ * The real path of a folder the user named (the repository root: `working-directory`, `--root`),
+ * checked against the folder it must stay inside. A folder named inside the workspace (action)
+ * or the working directory (CLI) may be reached through symbolic links only while its real path,
+ * with every link on the way resolved, stays inside that folder's real path: a folder replaced by
+ * a link to a parent, or to anywhere else outside, is refused.
+ */
+
+
+
+/** Error code of a named folder that is missing, not a folder, or leads outside its boundary. */
+const FOLDER_REFUSED = 'folder-refused';
+/**
+ * True when `p` is `base` itself or lies below it (both absolute; compared as written, with the
+ * platform's separators; no file system access).
+ */
+function isInsideFolder(base, p) {
+    const rel = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(base, p);
+    return rel === '' || (rel !== '..' && !rel.startsWith(`..${(node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)}`) && !node_path__WEBPACK_IMPORTED_MODULE_1___default().isAbsolute(rel));
+}
+/**
+ * The real path of an existing folder (every symbolic link resolved, `realpath(3)`).
+ * @param named the folder as named, absolute (already resolved against the working directory)
+ * @param options the name for messages and the boundary; see {@link RealFolderOptions}
+ * @throws InputError `folder-refused` (its key is `options.key`) when the folder is missing or is
+ *   not a folder, or when it is named inside `within` and its real path is not inside the real
+ *   path of `within`, or is named outside `within` with `insideOnly`
+ */
+function realFolder(named, options) {
+    const where = { key: options.key };
+    const boundary = options.within;
+    const boundaryName = options.withinName ?? 'folder';
+    const namedInside = boundary !== null && isInsideFolder(boundary, named);
+    if (boundary !== null && !namedInside && options.insideOnly) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} is outside the ${boundaryName} ${boundary}; expected a folder inside it`, where);
+    }
+    let real;
+    try {
+        real = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(named);
+    }
+    catch (error) {
+        const code = error.code ?? String(error);
+        const why = code === 'ELOOP' ? 'goes round a loop of symbolic links' : code === 'ENOENT' || code === 'ENOTDIR' ? 'does not exist' : `cannot be read (${code})`;
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} ${why}; expected an existing folder`, where);
+    }
+    if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(real).isDirectory())
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} is not a folder; expected an existing folder`, where);
+    if (boundary !== null && namedInside && !isInsideFolder((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(boundary), real)) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} leads out of the ${boundaryName} ${boundary} through a symbolic link; expected a folder whose real path is inside it`, where);
+    }
+    return real;
 }
 
 
@@ -35703,13 +36077,13 @@ function isIgnoredPath(path) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   MR: () => (/* binding */ formatAnnotations),
-/* harmony export */   _P: () => (/* binding */ escapeLogLine),
 /* harmony export */   cU: () => (/* binding */ inputErrorAnnotation),
 /* harmony export */   fE: () => (/* binding */ formatCommand)
 /* harmony export */ });
 /* unused harmony exports MAX_PER_LEVEL, escapeData, escapeProperty, workspacePath, collectAnnotations */
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
 /**
  * Workflow-command annotations: one error per failing check or unchecked model, one warning per
  * warning, at the descriptor line the check points at, most severe first, capped at what the
@@ -35717,6 +36091,7 @@ function isIgnoredPath(path) {
  * here (and only here) so that they can be tested byte for byte; text from the repository is
  * escaped so that it can never start a workflow command of its own.
  */
+
 
 /** The runner shows at most this many error and this many warning annotations per step. */
 const MAX_PER_LEVEL = 10;
@@ -35732,27 +36107,20 @@ function escapeProperty(text) {
     return escapeData(text).replace(/:/g, '%3A').replace(/,/g, '%2C');
 }
 /**
- * Text for a plain log line: line breaks become spaces, and a line that would begin with `::`
- * (after leading white space, which the runner trims) starts with `» ` instead, so that it
- * cannot be read as a workflow command.
- */
-function escapeLogLine(text) {
-    const one = text.replace(/\r\n|\r|\n/g, ' ');
-    return one.trimStart().startsWith('::') ? `» ${one}` : one;
-}
-/**
  * One workflow command line (without the line break), e.g.
- * `::error file=models/a.model.yml,line=12,title=…::message`.
+ * `::error file=models/a.model.yml,line=12,title=…::message`. Every `##[` in the file, title and
+ * message is broken first ({@link defuseLegacyCommands}), so that no line fitgate prints holds
+ * the runner's older command form.
  */
 function formatCommand(a) {
     const props = [];
     if (a.file !== undefined && a.file !== '')
-        props.push(`file=${escapeProperty(a.file)}`);
+        props.push(`file=${escapeProperty((0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .defuseLegacyCommands */ .u5)(a.file))}`);
     if (a.line !== undefined && a.line > 0)
         props.push(`line=${a.line}`);
     if (a.title !== undefined && a.title !== '')
-        props.push(`title=${escapeProperty(a.title)}`);
-    return `::${a.level}${props.length > 0 ? ` ${props.join(',')}` : ''}::${escapeData(a.message)}`;
+        props.push(`title=${escapeProperty((0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .defuseLegacyCommands */ .u5)(a.title))}`);
+    return `::${a.level}${props.length > 0 ? ` ${props.join(',')}` : ''}::${escapeData((0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .defuseLegacyCommands */ .u5)(a.message))}`;
 }
 /** Joins the fitgate root's prefix and a root-relative path. */
 function workspacePath(prefix, file) {
@@ -35877,14 +36245,16 @@ function escapeTerminal(text) {
     return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
 /**
- * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; characters XML 1.0 does
- * not allow (C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, lone
- * surrogates) become U+FFFD.
+ * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; tab, line feed and
+ * carriage return become character references (`&#9;`, `&#10;`, `&#13;`: kept exactly in
+ * attribute values, which XML would otherwise turn into spaces, and never a raw line break from a
+ * name); characters XML 1.0 does not allow (other C0 controls, U+FFFE, U+FFFF, lone surrogates)
+ * become U+FFFD. No CDATA is used, so `]]>` is plain text.
  */
 function escapeXml(text) {
     return text
         .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, '\ufffd')
-        .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]);
+        .replace(/[&<>"'\t\n\r]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;', '\t': '&#9;', '\n': '&#10;', '\r': '&#13;' })[c]);
 }
 /**
  * Text inside a double-quoted Mermaid string (chart titles, axis labels): line breaks and other
@@ -35900,6 +36270,98 @@ function escapeMermaid(text) {
         .replace(/</g, '‹')
         .replace(/>/g, '›')
         .replace(/#/g, '＃');
+}
+
+
+/***/ }),
+
+/***/ 673:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Z$: () => (/* binding */ neutraliseLog),
+/* harmony export */   h3: () => (/* binding */ quoteServerText),
+/* harmony export */   h4: () => (/* binding */ neutraliseLogLine),
+/* harmony export */   rb: () => (/* binding */ neutraliseJson),
+/* harmony export */   u5: () => (/* binding */ defuseLegacyCommands)
+/* harmony export */ });
+/* unused harmony export MAX_SERVER_TEXT */
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6412);
+/**
+ * Keeping runner commands out of plain text. A CI runner reads every line a step prints (standard
+ * output and standard error) and obeys two forms of command (actions/runner,
+ * src/Runner.Common/ActionCommand.cs, `TryParseV2` and `TryParse`):
+ *
+ * - `::name props::data` when the line begins with `::` after leading white space;
+ * - the older `##[name props]data` found anywhere in the line.
+ *
+ * The runner matches with .NET's culture-aware `StartsWith` and `IndexOf`, which may skip
+ * characters such as zero-width spaces and other format characters (from memory), so those are
+ * treated here as if absent. Every plain line fitgate prints (the action's log, the CLI's reports
+ * on standard output, its error line) passes through {@link neutraliseLogLine}; the workflow
+ * commands fitgate writes itself (`report/annotations.ts`) pass their text through
+ * {@link defuseLegacyCommands}; JSON keeps its data exact with {@link neutraliseJson}.
+ */
+
+/** Characters a comparison may pass over unseen: controls, format characters (zero-width), marks. */
+const UNSEEN = '[\\p{C}\\p{M}]*';
+/** `##[`, with anything unseen between its three characters. */
+const LEGACY = new RegExp(`#(${UNSEEN})#(${UNSEEN})\\[`, 'gu');
+/** A line that begins with `::` after white space (which the runner trims) and unseen characters. */
+const LEADING = /^[\s\p{C}\p{M}]*::/u;
+/** Every line break a reader may split on. */
+const LINE_BREAK = /\r\n|[\r\n\u0085\u2028\u2029]/g;
+/** A character as a `\u2028` (or `\u{e0001}`) escape. */
+function codeEscape(c) {
+    const code = c.codePointAt(0) ?? 0;
+    return code > 0xffff ? `\\u{${code.toString(16)}}` : `\\u${code.toString(16).padStart(4, '0')}`;
+}
+/** Longest piece of text from an API server that is printed, in characters (house rule: quote a short piece). */
+const MAX_SERVER_TEXT = 80;
+/**
+ * Breaks every `##[` in `text` by putting a space before the `[` (`##[error]` becomes
+ * `## [error]`), so that the runner's older command form cannot start anywhere in it. Nothing
+ * else changes; line breaks are left as they are.
+ */
+function defuseLegacyCommands(text) {
+    return text.replace(LEGACY, '#$1#$2 [');
+}
+/**
+ * One plain log line, safe wherever a runner reads it: line breaks (CR, LF, NEL, LS, PS) become
+ * spaces, every `##[` is broken ({@link defuseLegacyCommands}), and a line that would begin with
+ * `::` (after white space or unseen characters) starts with `» ` instead. Text without any of
+ * these is returned unchanged; applying it twice changes nothing more.
+ */
+function neutraliseLogLine(text) {
+    const one = defuseLegacyCommands(text.replace(LINE_BREAK, ' '));
+    return LEADING.test(one) ? `» ${one}` : one;
+}
+/** {@link neutraliseLogLine} on each `\n`-separated line of a text; the `\n`s are kept. */
+function neutraliseLog(text) {
+    return text.split('\n').map(neutraliseLogLine).join('\n');
+}
+/**
+ * JSON text with the same data but no runner command in any line: `[` after `##` (only ever
+ * inside a string) is written `\u005b`, and the line separators JSON leaves raw (U+2028, U+2029,
+ * NEL) as `\u` escapes. `JSON.parse` gives back exactly the same value. Lines of
+ * `JSON.stringify(value, null, 2)` begin with white space and a bracket, a brace, a quote or a
+ * digit, never with `::`.
+ */
+function neutraliseJson(json) {
+    return json.replace(LEGACY, '#$1#$2\\u005b').replace(/[\u0085\u2028\u2029]/g, codeEscape);
+}
+/**
+ * Text an API server sent back (an error message, a library's warning about a response), made
+ * fit to print: on one line, control and format characters shown as `\u001b` style escapes,
+ * lone surrogates replaced, neutralised as a log line ({@link neutraliseLogLine}), then cut to at
+ * most `max` characters (the last one `…` when cut; cutting off a tail cannot make a command).
+ * @param text the server's text
+ * @param max longest result, in characters; default {@link MAX_SERVER_TEXT}
+ */
+function quoteServerText(text, max = MAX_SERVER_TEXT) {
+    const visible = (0,_escape_js__WEBPACK_IMPORTED_MODULE_0__/* .escapeTerminal */ .en)(text.replace(LINE_BREAK, ' ')).replace(/\p{Cf}/gu, codeEscape).replace(/\p{Cs}/gu, '\ufffd');
+    const chars = [...neutraliseLogLine(visible)];
+    return chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : chars.join('');
 }
 
 
@@ -36261,12 +36723,14 @@ function axisLabel(column) {
 /* harmony export */   v: () => (/* binding */ formatText)
 /* harmony export */ });
 /* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
-/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6228);
-/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6412);
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6228);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6412);
+/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
 /**
  * The terminal report: one aligned table of every model, then one block per model that did not
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
+
 
 
 
@@ -36286,12 +36750,12 @@ function table(rows, rightAligned) {
 }
 function metric(m, key) {
     const v = m.metrics?.[key];
-    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_2__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
     const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
-    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.message)}`;
-    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.advice)}` : text;
+    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(c.message)}`;
+    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
 /** Formats the Result for a terminal. */
 function formatText(result, options = {}) {
@@ -36300,7 +36764,7 @@ function formatText(result, options = {}) {
     const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
     const rows = result.models.map((m) => [
         m.verdict,
-        (0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name),
+        (0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.name),
         metric(m, 'holdout_rmse'),
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
@@ -36321,10 +36785,10 @@ function formatText(result, options = {}) {
         if (m.verdict === 'pass')
             continue;
         out.push('');
-        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.descriptor)})`);
+        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.descriptor)})`);
         if (m.error) {
             const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(where + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(where + m.error.message)}`);
             continue;
         }
         for (const c of m.checks)
@@ -36332,13 +36796,12 @@ function formatText(result, options = {}) {
                 out.push(checkLine(m, c, color));
     }
     for (const note of result.notes)
-        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(note)}`);
+        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(note)}`);
     const { counts } = result;
     out.push('');
     out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
-    // A line that would begin with `::` (after white space, which a CI runner trims) could be read
-    // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
-    return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
+    // Read by a CI runner when the CLI runs in a CI step: no line may hold a runner command.
+    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .neutraliseLog */ .Z$)(out.join('\n'))}\n`;
 }
 
 
@@ -42362,8 +42825,8 @@ async function evaluateModel(repo, descriptor, settings, base) {
     };
 }
 
-// EXTERNAL MODULE: ./src/repo/fs-repository.ts + 1 modules
-var fs_repository = __nccwpck_require__(8352);
+// EXTERNAL MODULE: ./src/repo/fs-repository.ts
+var fs_repository = __nccwpck_require__(4526);
 // EXTERNAL MODULE: ./src/run/pool.ts
 var pool = __nccwpck_require__(2499);
 // EXTERNAL MODULE: ./src/run/worker-role.ts
@@ -42830,10 +43293,10 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:events"
 
 /***/ }),
 
-/***/ 1455:
+/***/ 3024:
 /***/ ((module) => {
 
-module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
 
 /***/ }),
 
@@ -51752,10 +52215,11 @@ __nccwpck_require__.d(__webpack_exports__, {
   pq: () => (/* binding */ info),
   C1: () => (/* binding */ setFailed),
   uH: () => (/* binding */ setOutput),
+  Pq: () => (/* binding */ core_setSecret),
   z: () => (/* reexport */ summary)
 });
 
-// UNUSED EXPORTS: ExitCode, addPath, endGroup, error, exportVariable, getBooleanInput, getIDToken, getMultilineInput, getState, group, isDebug, markdownSummary, notice, platform, saveState, setCommandEcho, setSecret, startGroup, toPlatformPath, toPosixPath, toWin32Path, warning
+// UNUSED EXPORTS: ExitCode, addPath, endGroup, error, exportVariable, getBooleanInput, getIDToken, getMultilineInput, getState, group, isDebug, markdownSummary, notice, platform, saveState, setCommandEcho, startGroup, toPlatformPath, toPosixPath, toWin32Path, warning
 
 // EXTERNAL MODULE: external "os"
 var external_os_ = __nccwpck_require__(857);
@@ -54462,7 +54926,7 @@ function exportVariable(name, val) {
  * ```
  */
 function core_setSecret(secret) {
-    issueCommand('add-mask', {}, secret);
+    command_issueCommand('add-mask', {}, secret);
 }
 /**
  * Prepends inputPath to the PATH (for this action and future actions)

@@ -5,7 +5,7 @@
  */
 // node:fs rather than node:fs/promises: a command reads and writes its few files in turn, and the
 // promises module takes about 2 ms to load (readline and streams come with it).
-import { readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from './entries/args.js';
 import { errorMessage, InputError } from './core/errors.js';
@@ -16,8 +16,10 @@ import { runPipeline } from './run/pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
 import { formatJson } from './report/json.js';
 import { escapeTerminal } from './report/escape.js';
+import { neutraliseLog, neutraliseLogLine } from './report/runner-commands.js';
 import { formatText } from './report/text.js';
 import { exitStatus, type Result } from './result/result.js';
+import { writeFileSafely } from './entries/safe-write.js';
 import { VERSION } from './core/version.js';
 
 /** Reads the report files of `fitgate merge`; a file that cannot be read is an InputError. */
@@ -31,13 +33,18 @@ function readReports(files: string[]): ReportInput[] {
   });
 }
 
-/** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
+/** One line of standard error: control characters shown, no runner command (a file name may hold a line break and `::`). */
+function errorLine(message: string): string {
+  return `fitgate: ${neutraliseLogLine(escapeTerminal(message))}\n`;
+}
+
+/** Runs one command; the report goes to standard output or `--out`, the file reports where asked. */
 async function main(argv: string[]): Promise<number> {
   let debug = argv.includes('--debug');
   try {
     const parsed = parseArgs(argv, process.cwd());
     if (parsed.kind === 'print') {
-      (parsed.status === 0 ? process.stdout : process.stderr).write(parsed.text);
+      (parsed.status === 0 ? process.stdout : process.stderr).write(neutraliseLog(parsed.text));
       return parsed.status;
     }
     debug = parsed.debug;
@@ -60,31 +67,47 @@ async function main(argv: string[]): Promise<number> {
     }
     const toFile = parsed.out !== null;
     const color = parsed.color ?? (!toFile && process.stdout.isTTY === true && !process.env.NO_COLOR);
+    // Each format keeps runner commands out of its lines (the text and JSON reporters do it
+    // themselves), so the report is safe to print in a CI step.
     const text =
       parsed.format === 'json'
         ? formatJson(result)
         : parsed.format === 'markdown'
-          ? (await import('./report/markdown.js')).formatMarkdown(result)
+          ? neutraliseLog((await import('./report/markdown.js')).formatMarkdown(result))
           : formatText(result, { color });
-    if (parsed.out !== null) writeFileSync(parsed.out, text);
-    else process.stdout.write(text);
+    // Where files may go: a path named inside the repository root or the working directory must
+    // really stay inside it; a report that cannot be written does not stop the others.
+    const cwd = process.cwd();
+    const within = parsed.kind === 'check' ? [parsed.settings.root, cwd] : [cwd];
+    const failures: string[] = [];
+    if (parsed.out !== null) {
+      try {
+        writeFileSafely(parsed.out, text, { option: '--out', within });
+      } catch (error) {
+        failures.push(errorMessage(error));
+      }
+    } else process.stdout.write(text);
     // SARIF paths are relative to the working directory when the root lies inside it (code
     // scanning reads them from the checkout); merged shard reports run from the root.
-    const prefix = parsed.kind === 'check' ? path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/') : '';
-    if (parsed.html === null && parsed.sarif === null && parsed.junit === null) return exitStatus(result, failOn);
-    const { writeFileReports } = await import('./entries/output-files.js');
-    await writeFileReports(result, {
-      html: parsed.html,
-      sarif: parsed.sarif,
-      junit: parsed.junit,
-      sarifPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix,
-      failOn,
-    });
-    return exitStatus(result, failOn);
+    const prefix = parsed.kind === 'check' ? path.relative(cwd, parsed.settings.root).split(path.sep).join('/') : '';
+    if (parsed.html !== null || parsed.sarif !== null || parsed.junit !== null) {
+      const { writeFileReports } = await import('./entries/output-files.js');
+      const missed = await writeFileReports(result, {
+        html: parsed.html,
+        sarif: parsed.sarif,
+        junit: parsed.junit,
+        sarifPrefix: prefix.startsWith('..') || path.isAbsolute(prefix) ? '' : prefix,
+        failOn,
+        within,
+        optionPrefix: '--',
+      });
+      for (const failure of missed) failures.push(failure.message);
+    }
+    for (const message of failures) process.stderr.write(errorLine(message));
+    return failures.length > 0 ? 2 : exitStatus(result, failOn);
   } catch (error) {
-    // One line whatever the message holds (a file name may contain a line break and a `::` command).
-    process.stderr.write(`fitgate: ${escapeTerminal(errorMessage(error))}\n`);
-    if (debug && error instanceof Error && error.stack) process.stderr.write(`${error.stack}\n`);
+    process.stderr.write(errorLine(errorMessage(error)));
+    if (debug && error instanceof Error && error.stack) process.stderr.write(`${neutraliseLog(error.stack)}\n`);
     else if (!(error instanceof InputError)) process.stderr.write('(run with --debug for the stack trace)\n');
     return 2;
   }

@@ -16,20 +16,29 @@ import { defaultJobs } from './run/pool.js';
 import { isFitgateWorker } from './run/worker-role.js';
 import { writeFileReports } from './entries/output-files.js';
 import { runPipeline } from './run/pipeline.js';
+import { OUTPUT_REFUSED } from './entries/safe-write.js';
 import { createFsRepository } from './repo/fs-repository.js';
-import { escapeLogLine, formatAnnotations, formatCommand, inputErrorAnnotation } from './report/annotations.js';
+import { formatAnnotations, formatCommand, inputErrorAnnotation } from './report/annotations.js';
+import { defuseLegacyCommands, neutraliseLogLine } from './report/runner-commands.js';
 import { formatComment, formatSummary } from './report/summary.js';
 import { formatText } from './report/text.js';
 
-/** Writes one notice or warning line of our own (message escaped). */
-function say(level: 'notice' | 'warning', message: string): void {
+/** Writes one notice, warning or error line of our own (message escaped, no runner command). */
+function say(level: 'notice' | 'warning' | 'error', message: string): void {
   process.stdout.write(`${formatCommand({ level, title: 'fitgate', message })}\n`);
+}
+
+/** Fails the step with a message whose runner commands are broken (the toolkit escapes the rest). */
+function fail(message: string): void {
+  core.setFailed(defuseLegacyCommands(message));
 }
 
 async function run(): Promise<void> {
   let prefix = '';
   try {
     const inputs = readInputs();
+    // The runner hides the token in every later line of the log.
+    if (inputs.token !== '') core.setSecret(inputs.token);
     prefix = inputs.prefix;
     const pr = pullRequestOf({ eventName: github.context.eventName ?? '', payload: github.context.payload, repository: process.env.GITHUB_REPOSITORY });
 
@@ -38,15 +47,25 @@ async function run(): Promise<void> {
     const scale = { shard: inputs.shard, jobs: defaultJobs(), root: inputs.settings.root };
     const result = await runPipeline(inputs.settings, createFsRepository(inputs.settings.root), { ...baseOptions, ...scale });
 
-    // Reporters: annotations and log, JSON report, job summary, comment.
+    // Reporters: annotations and log, JSON report, file reports, job summary, comment. A file
+    // that is refused (a link, a folder leading out of the workspace) fails the step as bad
+    // input once every other reporter has run; a write that fails is a warning.
     process.stdout.write(formatAnnotations(result, { prefix }));
-    for (const line of formatText(result).split('\n')) core.info(escapeLogLine(line));
-    const report = await writeReport(result, inputs.tempDir, process.env.GITHUB_ACTION);
+    for (const line of formatText(result).split('\n')) core.info(neutraliseLogLine(line));
+    const refused: string[] = [];
+    let report = '';
     try {
-      await writeFileReports(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn });
+      report = await writeReport(result, inputs.tempDir, process.env.GITHUB_ACTION);
     } catch (error) {
-      say('warning', `could not write a file report: ${errorMessage(error)}`);
+      if (error instanceof InputError && error.code === OUTPUT_REFUSED) refused.push(error.describe());
+      else say('warning', `could not write the JSON report: ${errorMessage(error)}`);
     }
+    const files = await writeFileReports(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn, within: [inputs.workspace], insideOnly: true });
+    for (const failure of files) {
+      if (failure.refused) refused.push(failure.message);
+      else say('warning', `could not write a file report: ${failure.message}`);
+    }
+    for (const message of refused) say('error', `a report file was refused: ${message}`);
     try {
       await core.summary.addRaw(formatSummary(result)).write();
     } catch (error) {
@@ -55,7 +74,8 @@ async function run(): Promise<void> {
     if (inputs.comment && pr) {
       if (inputs.token === '') say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
       else {
-        const outcome = await upsertComment(createCommentApi(inputs.token, pr), formatComment(result));
+        const api = createCommentApi(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
+        const outcome = await upsertComment(api, formatComment(result));
         if (outcome.kind === 'forbidden') {
           say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
         } else if (outcome.kind === 'failed') {
@@ -64,20 +84,21 @@ async function run(): Promise<void> {
       }
     }
 
-    // Outputs and the step's status.
-    core.setOutput(OUTPUTS.verdict, result.verdict);
+    // Outputs and the step's status (a refused report file counts as bad input, as the CLI's exit status 2).
+    core.setOutput(OUTPUTS.verdict, refused.length > 0 ? 'error' : result.verdict);
     core.setOutput(OUTPUTS.failed, String(failedCount(result, inputs.settings.failOn)));
     core.setOutput(OUTPUTS.report, report);
     const failure = failureMessage(result, inputs.settings.failOn);
-    if (failure !== null) core.setFailed(failure);
+    if (refused.length > 0) fail(`fitgate refused to write ${refused.length === 1 ? 'a report file' : `${refused.length} report files`} (see the errors above).${failure !== null ? ` ${failure}` : ''}`);
+    else if (failure !== null) fail(failure);
   } catch (error) {
     core.setOutput(OUTPUTS.verdict, 'error');
     if (error instanceof InputError) {
       if (error.location.file !== undefined) process.stdout.write(`${formatCommand(inputErrorAnnotation(error, prefix))}\n`);
-      core.setFailed(`fitgate could not run: ${error.describe()}`);
+      fail(`fitgate could not run: ${error.describe()}`);
     } else {
-      if (error instanceof Error && error.stack) core.debug(error.stack);
-      core.setFailed(`fitgate failed unexpectedly: ${errorMessage(error)}`);
+      if (error instanceof Error && error.stack) core.debug(defuseLegacyCommands(error.stack));
+      fail(`fitgate failed unexpectedly: ${errorMessage(error)}`);
     }
   }
 }

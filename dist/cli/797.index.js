@@ -11,11 +11,11 @@ __webpack_require__.d(__webpack_exports__, {
   writeFileReports: () => (/* binding */ writeFileReports)
 });
 
-// EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __webpack_require__(1455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __webpack_require__(4296);
 // EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
 var checks = __webpack_require__(1093);
 // EXTERNAL MODULE: ./src/core/format.ts
@@ -1137,30 +1137,43 @@ function formatSarif(result, options = {}) {
     return `${JSON.stringify(sarifLog(result, options), null, 2)}\n`;
 }
 
+// EXTERNAL MODULE: ./src/entries/safe-write.ts
+var safe_write = __webpack_require__(9725);
 ;// CONCATENATED MODULE: ./src/entries/output-files.ts
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
- * and the action; the reporters only format, this module only writes.
+ * and the action; the reporters only format, this module only writes, each file through
+ * {@link writeFileSafely} (never through a link, atomically).
  */
 
 
 
 
 
-/** Writes every requested file report (folders are created). */
+
+/**
+ * Writes every requested file report (missing folders are made, each checked). A report that
+ * cannot be written does not stop the others.
+ * @returns the reports that were not written, in the order html, sarif, junit; empty when all were
+ */
 async function writeFileReports(result, files) {
-    if (files.html !== null) {
-        await (0,promises_.mkdir)(files.html, { recursive: true });
-        await (0,promises_.writeFile)(external_node_path_default().join(files.html, HTML_FILE), formatHtml(result));
-    }
-    if (files.sarif !== null) {
-        await (0,promises_.mkdir)(external_node_path_default().dirname(external_node_path_default().resolve(files.sarif)), { recursive: true });
-        await (0,promises_.writeFile)(files.sarif, formatSarif(result, { pathPrefix: files.sarifPrefix }));
-    }
-    if (files.junit !== null) {
-        await (0,promises_.mkdir)(external_node_path_default().dirname(external_node_path_default().resolve(files.junit)), { recursive: true });
-        await (0,promises_.writeFile)(files.junit, formatJunit(result, { failOn: files.failOn }));
-    }
+    const failures = [];
+    const place = (name) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
+    const attempt = (name, file, text) => {
+        try {
+            (0,safe_write/* writeFileSafely */.kv)(file, text(), place(name));
+        }
+        catch (error) {
+            failures.push({ option: place(name).option, refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC, message: (0,errors/* errorMessage */.gJ)(error) });
+        }
+    };
+    if (files.html !== null)
+        attempt('html', external_node_path_default().join(files.html, HTML_FILE), () => formatHtml(result));
+    if (files.sarif !== null)
+        attempt('sarif', files.sarif, () => formatSarif(result, { pathPrefix: files.sarifPrefix }));
+    if (files.junit !== null)
+        attempt('junit', files.junit, () => formatJunit(result, { failOn: files.failOn }));
+    return failures;
 }
 
 

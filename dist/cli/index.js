@@ -1089,17 +1089,21 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
 /* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9234);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
-/* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(2794);
-/* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(4031);
-/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(5655);
-/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(1628);
-/* harmony import */ var _core_version_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(3323);
+/* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2794);
+/* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
+/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(673);
+/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(5655);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(1628);
+/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(9725);
+/* harmony import */ var _core_version_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(3323);
 /**
  * The `fitgate` command: parse argv, run the pipeline, print a report, set the exit status
  * (0 within limits, 1 a model over a limit, 2 the run could not be done).
  */
 // node:fs rather than node:fs/promises: a command reads and writes its few files in turn, and the
 // promises module takes about 2 ms to load (readline and streams come with it).
+
+
 
 
 
@@ -1124,13 +1128,17 @@ function readReports(files) {
         }
     });
 }
-/** Writes the reports asked for with `--html DIR`, `--sarif FILE` and `--junit FILE`. */
+/** One line of standard error: control characters shown, no runner command (a file name may hold a line break and `::`). */
+function errorLine(message) {
+    return `fitgate: ${(0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__/* .neutraliseLogLine */ .h4)((0,_report_escape_js__WEBPACK_IMPORTED_MODULE_13__/* .escapeTerminal */ .en)(message))}\n`;
+}
+/** Runs one command; the report goes to standard output or `--out`, the file reports where asked. */
 async function main(argv) {
     let debug = argv.includes('--debug');
     try {
         const parsed = (0,_entries_args_js__WEBPACK_IMPORTED_MODULE_2__/* .parseArgs */ .Z)(argv, process.cwd());
         if (parsed.kind === 'print') {
-            (parsed.status === 0 ? process.stdout : process.stderr).write(parsed.text);
+            (parsed.status === 0 ? process.stdout : process.stderr).write((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__/* .neutraliseLog */ .Z$)(parsed.text));
             return parsed.status;
         }
         debug = parsed.debug;
@@ -1139,7 +1147,7 @@ async function main(argv) {
         // Modules only some runs need are loaded when asked for, so that a plain check starts fast.
         if (parsed.kind === 'merge') {
             const { mergeReports } = await __nccwpck_require__.e(/* import() */ 49).then(__nccwpck_require__.bind(__nccwpck_require__, 6049));
-            result = mergeReports(readReports(parsed.reports), _core_version_js__WEBPACK_IMPORTED_MODULE_10__/* .VERSION */ .x);
+            result = mergeReports(readReports(parsed.reports), _core_version_js__WEBPACK_IMPORTED_MODULE_14__/* .VERSION */ .x);
             failOn = parsed.failOn;
         }
         else {
@@ -1154,35 +1162,53 @@ async function main(argv) {
         }
         const toFile = parsed.out !== null;
         const color = parsed.color ?? (!toFile && process.stdout.isTTY === true && !process.env.NO_COLOR);
+        // Each format keeps runner commands out of its lines (the text and JSON reporters do it
+        // themselves), so the report is safe to print in a CI step.
         const text = parsed.format === 'json'
-            ? (0,_report_json_js__WEBPACK_IMPORTED_MODULE_11__/* .formatJson */ .I)(result)
+            ? (0,_report_json_js__WEBPACK_IMPORTED_MODULE_8__/* .formatJson */ .I)(result)
             : parsed.format === 'markdown'
-                ? (await __nccwpck_require__.e(/* import() */ 900).then(__nccwpck_require__.bind(__nccwpck_require__, 5900))).formatMarkdown(result)
-                : (0,_report_text_js__WEBPACK_IMPORTED_MODULE_8__/* .formatText */ .v)(result, { color });
-        if (parsed.out !== null)
-            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.writeFileSync)(parsed.out, text);
+                ? (0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__/* .neutraliseLog */ .Z$)((await __nccwpck_require__.e(/* import() */ 900).then(__nccwpck_require__.bind(__nccwpck_require__, 5900))).formatMarkdown(result))
+                : (0,_report_text_js__WEBPACK_IMPORTED_MODULE_10__/* .formatText */ .v)(result, { color });
+        // Where files may go: a path named inside the repository root or the working directory must
+        // really stay inside it; a report that cannot be written does not stop the others.
+        const cwd = process.cwd();
+        const within = parsed.kind === 'check' ? [parsed.settings.root, cwd] : [cwd];
+        const failures = [];
+        if (parsed.out !== null) {
+            try {
+                (0,_entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__/* .writeFileSafely */ .kv)(parsed.out, text, { option: '--out', within });
+            }
+            catch (error) {
+                failures.push((0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorMessage */ .gJ)(error));
+            }
+        }
         else
             process.stdout.write(text);
         // SARIF paths are relative to the working directory when the root lies inside it (code
         // scanning reads them from the checkout); merged shard reports run from the root.
-        const prefix = parsed.kind === 'check' ? node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(process.cwd(), parsed.settings.root).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/') : '';
-        if (parsed.html === null && parsed.sarif === null && parsed.junit === null)
-            return (0,_result_result_js__WEBPACK_IMPORTED_MODULE_9__/* .exitStatus */ .$u)(result, failOn);
-        const { writeFileReports } = await __nccwpck_require__.e(/* import() */ 797).then(__nccwpck_require__.bind(__nccwpck_require__, 6797));
-        await writeFileReports(result, {
-            html: parsed.html,
-            sarif: parsed.sarif,
-            junit: parsed.junit,
-            sarifPrefix: prefix.startsWith('..') || node_path__WEBPACK_IMPORTED_MODULE_1___default().isAbsolute(prefix) ? '' : prefix,
-            failOn,
-        });
-        return (0,_result_result_js__WEBPACK_IMPORTED_MODULE_9__/* .exitStatus */ .$u)(result, failOn);
+        const prefix = parsed.kind === 'check' ? node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(cwd, parsed.settings.root).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/') : '';
+        if (parsed.html !== null || parsed.sarif !== null || parsed.junit !== null) {
+            const { writeFileReports } = await __nccwpck_require__.e(/* import() */ 797).then(__nccwpck_require__.bind(__nccwpck_require__, 6797));
+            const missed = await writeFileReports(result, {
+                html: parsed.html,
+                sarif: parsed.sarif,
+                junit: parsed.junit,
+                sarifPrefix: prefix.startsWith('..') || node_path__WEBPACK_IMPORTED_MODULE_1___default().isAbsolute(prefix) ? '' : prefix,
+                failOn,
+                within,
+                optionPrefix: '--',
+            });
+            for (const failure of missed)
+                failures.push(failure.message);
+        }
+        for (const message of failures)
+            process.stderr.write(errorLine(message));
+        return failures.length > 0 ? 2 : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_11__/* .exitStatus */ .$u)(result, failOn);
     }
     catch (error) {
-        // One line whatever the message holds (a file name may contain a line break and a `::` command).
-        process.stderr.write(`fitgate: ${(0,_report_escape_js__WEBPACK_IMPORTED_MODULE_12__/* .escapeTerminal */ .en)((0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorMessage */ .gJ)(error))}\n`);
+        process.stderr.write(errorLine((0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorMessage */ .gJ)(error)));
         if (debug && error instanceof Error && error.stack)
-            process.stderr.write(`${error.stack}\n`);
+            process.stderr.write(`${(0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__/* .neutraliseLog */ .Z$)(error.stack)}\n`);
         else if (!(error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz))
             process.stderr.write('(run with --debug for the stack trace)\n');
         return 2;
@@ -2809,6 +2835,8 @@ var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_nod
 const external_node_util_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:util");
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/repo/real-folder.ts
+var real_folder = __nccwpck_require__(6711);
 // EXTERNAL MODULE: ./src/run/shard.ts
 var run_shard = __nccwpck_require__(6941);
 // EXTERNAL MODULE: ./src/core/version.ts
@@ -2823,6 +2851,7 @@ var version = __nccwpck_require__(3323);
  * values and the help text are declared once in {@link COMMANDS}. A repeated option keeps its
  * last value, as is usual for command lines.
  */
+
 
 
 
@@ -2896,9 +2925,12 @@ function usageError(message, command) {
     return { kind: 'print', text: `error: ${message}\n${hint}\n`, status: 2 };
 }
 /**
- * Parses argv (without `node` and the script).
+ * Parses argv (without `node` and the script). `--root` is resolved to its real path
+ * (`realpath(3)`); named inside `cwd`, its real path must lie inside the real path of `cwd`.
  * @param argv arguments
- * @param cwd the working directory paths are relative to
+ * @param cwd the working directory paths are relative to (an existing folder)
+ * @throws InputError for a bad value, or a `--root` that is not an existing folder or leads out
+ *   of `cwd` through a symbolic link
  */
 function parseArgs(argv, cwd) {
     const [first, ...rest] = argv;
@@ -2937,7 +2969,10 @@ function parseArgs(argv, cwd) {
     if (command.name === 'merge') {
         return { kind: 'merge', reports: read.positionals.map((r) => external_node_path_default().resolve(cwd, r)), failOn, ...common };
     }
-    const root = external_node_path_default().resolve(cwd, value('root') ?? '.');
+    // The root as named, and its real path: named inside the working directory, it must really
+    // stay inside it (a folder replaced by a link to a parent is refused).
+    const named = external_node_path_default().resolve(cwd, value('root') ?? '.');
+    const root = (0,real_folder/* realFolder */.PX)(named, { key: '--root', within: cwd, withinName: 'working directory' });
     const config = value('config');
     const base = value('base');
     const shard = value('shard');
@@ -2945,9 +2980,10 @@ function parseArgs(argv, cwd) {
         kind: 'check',
         settings: {
             root,
-            config: toRepoPath(root, external_node_path_default().resolve(root, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
+            config: toRepoPath([named], external_node_path_default().resolve(named, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
             configExplicit: config !== null,
-            descriptors: read.positionals.map((d) => toRepoPath(root, external_node_path_default().resolve(cwd, d), d, d)),
+            // Descriptor arguments may be written through the root as named or as it really is.
+            descriptors: read.positionals.map((d) => toRepoPath([named, root], external_node_path_default().resolve(cwd, d), d, d)),
             failOn,
         },
         ...common,
@@ -3055,16 +3091,253 @@ function wrap(text, width) {
 }
 /**
  * A path as repository-relative with `/`; outside the root is an InputError.
+ * @param roots the root's spellings (as named, then its real path): the first that holds the path is used
  * @param given the path as the user wrote it (quoted in the message)
  * @param key what names it: the option (`--config`) or, for an argument, the path itself
  */
-function toRepoPath(root, absolute, given, key) {
-    const rel = external_node_path_default().relative(root, absolute);
-    if (rel === '' || rel.startsWith('..') || external_node_path_default().isAbsolute(rel)) {
-        const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
-        throw new errors/* InputError */.dz('path-outside', `${what} outside the repository root ${root}; expected a path inside it`, { key });
+function toRepoPath(roots, absolute, given, key) {
+    for (const root of roots) {
+        const rel = external_node_path_default().relative(root, absolute);
+        if (!(rel === '' || rel.startsWith('..') || external_node_path_default().isAbsolute(rel)))
+            return rel.split((external_node_path_default()).sep).join('/');
     }
-    return rel.split((external_node_path_default()).sep).join('/');
+    const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
+    throw new errors/* InputError */.dz('path-outside', `${what} outside the repository root ${roots[0]}; expected a path inside it`, { key });
+}
+
+
+/***/ }),
+
+/***/ 9725:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   LC: () => (/* binding */ OUTPUT_REFUSED),
+/* harmony export */   kv: () => (/* binding */ writeFileSafely)
+/* harmony export */ });
+/* unused harmony export OUTPUT_FAILED */
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+/* harmony import */ var _repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6711);
+/**
+ * Writing one report file: never through a symbolic link, and atomically. Every file fitgate
+ * writes (`--out`, `--html`, `--sarif`, `--junit`, the action's `html` / `sarif` / `junit`, the
+ * JSON report under `RUNNER_TEMP`) goes through {@link writeFileSafely}:
+ *
+ * 1. The folder is checked before anything is created: its deepest existing part is resolved
+ *    with `realpath(3)`, and when the path was named inside one of the boundary folders (the
+ *    action's workspace; the CLI's repository root and working directory) that real path must
+ *    lie inside the boundary's real path. Missing folders are then made one at a time inside the
+ *    real folder, each checked to be a plain folder and not a link.
+ * 2. A target that is a symbolic link, or not a regular file (a folder, a device, a pipe), is
+ *    refused; nothing is written through it.
+ * 3. The bytes go to a new temporary file in the same real folder, opened with
+ *    `O_CREAT | O_EXCL | O_NOFOLLOW` (never an existing file, never a link), written in full,
+ *    flushed with `fsync`, closed, and renamed over the target (`rename(2)` replaces the name in
+ *    one step, and replaces a link rather than following it). A run that is killed or fails
+ *    mid-way (a full disk) leaves the previous complete file, never an empty or cut one; a
+ *    temporary file that fails is removed.
+ *
+ * Every refusal and failure is an InputError whose key is the option that named the path.
+ */
+
+
+
+
+/** Error code of a target refused before writing (a link, not a file, a folder leading outside). */
+const OUTPUT_REFUSED = 'output-refused';
+/** Error code of a write that failed (a full disk, no permission): the previous file is kept. */
+const OUTPUT_FAILED = 'output-failed';
+/** Most folder levels walked up to the deepest existing one (a path deeper than this is refused). */
+const MAX_DEPTH = 256;
+/** Tries at a fresh temporary name before giving up (another writer in the same folder). */
+const MAX_TEMP_TRIES = 8;
+function codeOf(error) {
+    return error?.code;
+}
+/**
+ * Writes `data` to `file` without following a link, atomically (see the module comment).
+ * @param file the target, absolute or relative to the process's folder
+ * @param data the file's content (a string is written as UTF-8)
+ * @param place the option that named it and the boundary folders; see {@link WritePlace}
+ * @param hooks replaced file operations, for tests; default none
+ * @returns the real path written
+ * @throws InputError `output-refused` (nothing was written, the previous file is unchanged) or
+ *   `output-failed` (the write failed; the previous file is unchanged, the temporary file removed)
+ */
+function writeFileSafely(file, data, place, hooks = {}) {
+    const where = { key: place.option };
+    const refuse = (message) => new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_REFUSED, message, where);
+    if (file === '' || file.includes('\0'))
+        throw refuse(`expected a file path, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(file)}`);
+    const named = node_path__WEBPACK_IMPORTED_MODULE_1___default().resolve(file);
+    const name = node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(named);
+    const folder = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(named);
+    if (name === '' || folder === named)
+        throw refuse(`${named} names no file; expected a file path`);
+    const failed = (error) => error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz ? error : new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
+    // 1. The boundary that holds the path as written, and the real folder.
+    const bases = place.within.filter((b) => (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)(b, folder)).sort((a, b) => b.length - a.length);
+    const base = bases[0] ?? null;
+    if (base === null && place.insideOnly)
+        throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
+    let realDir;
+    let target;
+    try {
+        realDir = makeFolder(folder, base, refuse);
+        // 2. The target itself.
+        target = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, name);
+        checkTarget(target, named, refuse);
+    }
+    catch (error) {
+        throw failed(error);
+    }
+    // 3. A temporary file in the same folder, then rename.
+    const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+    const write = hooks.write ?? ((fd, b, offset, length) => (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.writeSync)(fd, b, offset, length));
+    const flags = node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_WRONLY | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_CREAT | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_EXCL | (node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_NOFOLLOW ?? 0);
+    let temp = '';
+    let fd = -1;
+    for (let attempt = 0; fd < 0; attempt++) {
+        temp = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`);
+        try {
+            fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(temp, flags, 0o666);
+        }
+        catch (error) {
+            if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES)
+                throw failed(error);
+        }
+    }
+    try {
+        // Each round writes at least one byte, so this ends after at most bytes.length rounds.
+        for (let offset = 0; offset < bytes.length;) {
+            const n = write(fd, bytes, offset, bytes.length - offset);
+            if (!(n > 0))
+                throw new Error('the write made no progress');
+            offset += n;
+        }
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fsyncSync)(fd);
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+        fd = -1;
+        // The folder must still be the one checked (no link swapped in while writing).
+        if ((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(realDir) !== realDir)
+            throw refuse(`the folder of ${named} changed while it was written; nothing was replaced`);
+        checkTarget(target, named, refuse);
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.renameSync)(temp, target);
+    }
+    catch (error) {
+        if (fd >= 0) {
+            try {
+                (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+            }
+            catch {
+                // already failing; the first error is the one reported
+            }
+        }
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.unlinkSync)(temp);
+        }
+        catch {
+            // gone already
+        }
+        throw failed(error);
+    }
+    syncFolder(realDir);
+    return target;
+}
+/**
+ * The real path of `folder`, made when missing. The deepest existing part is resolved and, when
+ * `base` is given, must lie inside the real path of `base`; each missing folder is then made
+ * inside that real path and checked to be a folder and not a link.
+ */
+function makeFolder(folder, base, refuse) {
+    const missing = [];
+    let existing = folder;
+    for (let depth = 0;; depth++) {
+        if (depth > MAX_DEPTH)
+            throw refuse(`${folder} is more than ${MAX_DEPTH} folders deep`);
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(existing);
+            break;
+        }
+        catch (error) {
+            const code = codeOf(error);
+            if (code !== 'ENOENT' && code !== 'ENOTDIR')
+                throw error;
+        }
+        const parent = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(existing);
+        if (parent === existing)
+            break;
+        missing.unshift(node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(existing));
+        existing = parent;
+    }
+    let real;
+    try {
+        real = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(existing);
+    }
+    catch (error) {
+        const code = codeOf(error);
+        if (code === 'ENOENT' || code === 'ELOOP')
+            throw refuse(`${existing} is a symbolic link that leads nowhere or round a loop; expected a folder`);
+        throw error;
+    }
+    if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(real).isDirectory())
+        throw refuse(`${existing} is not a folder; expected a folder to write in`);
+    if (base !== null && !(0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(base), real)) {
+        throw refuse(`${folder} leads out of ${base} through a symbolic link; expected a folder whose real path is inside it`);
+    }
+    for (const part of missing) {
+        real = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(real, part);
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.mkdirSync)(real);
+        }
+        catch (error) {
+            if (codeOf(error) !== 'EEXIST')
+                throw error;
+        }
+        const info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(real);
+        if (!info.isDirectory())
+            throw refuse(`${real} is ${info.isSymbolicLink() ? 'a symbolic link' : 'not a folder'}; expected a folder to write in`);
+    }
+    return real;
+}
+/** Refuses a target that is a symbolic link or not a regular file; a missing target is fine. */
+function checkTarget(target, named, refuse) {
+    let info;
+    try {
+        info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(target);
+    }
+    catch (error) {
+        if (codeOf(error) === 'ENOENT')
+            return;
+        throw error;
+    }
+    if (info.isSymbolicLink())
+        throw refuse(`${named} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`);
+    if (!info.isFile())
+        throw refuse(`${named} is not a regular file (a folder, device or pipe); expected a file to replace, or no file`);
+}
+/** Flushes the folder's entry list (the rename) to disk where the platform allows; best effort. */
+function syncFolder(dir) {
+    let fd = -1;
+    try {
+        fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(dir, node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_RDONLY);
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fsyncSync)(fd);
+    }
+    catch {
+        // Not every platform opens or syncs a folder; the file itself is already synced.
+    }
+    if (fd >= 0) {
+        try {
+            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+        }
+        catch {
+            // nothing left to do
+        }
+    }
 }
 
 
@@ -4809,6 +5082,75 @@ function codeOf(error) {
 
 /***/ }),
 
+/***/ 6711:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   PX: () => (/* binding */ realFolder),
+/* harmony export */   zz: () => (/* binding */ isInsideFolder)
+/* harmony export */ });
+/* unused harmony export FOLDER_REFUSED */
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+/**
+ * The real path of a folder the user named (the repository root: `working-directory`, `--root`),
+ * checked against the folder it must stay inside. A folder named inside the workspace (action)
+ * or the working directory (CLI) may be reached through symbolic links only while its real path,
+ * with every link on the way resolved, stays inside that folder's real path: a folder replaced by
+ * a link to a parent, or to anywhere else outside, is refused.
+ */
+
+
+
+/** Error code of a named folder that is missing, not a folder, or leads outside its boundary. */
+const FOLDER_REFUSED = 'folder-refused';
+/**
+ * True when `p` is `base` itself or lies below it (both absolute; compared as written, with the
+ * platform's separators; no file system access).
+ */
+function isInsideFolder(base, p) {
+    const rel = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(base, p);
+    return rel === '' || (rel !== '..' && !rel.startsWith(`..${(node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)}`) && !node_path__WEBPACK_IMPORTED_MODULE_1___default().isAbsolute(rel));
+}
+/**
+ * The real path of an existing folder (every symbolic link resolved, `realpath(3)`).
+ * @param named the folder as named, absolute (already resolved against the working directory)
+ * @param options the name for messages and the boundary; see {@link RealFolderOptions}
+ * @throws InputError `folder-refused` (its key is `options.key`) when the folder is missing or is
+ *   not a folder, or when it is named inside `within` and its real path is not inside the real
+ *   path of `within`, or is named outside `within` with `insideOnly`
+ */
+function realFolder(named, options) {
+    const where = { key: options.key };
+    const boundary = options.within;
+    const boundaryName = options.withinName ?? 'folder';
+    const namedInside = boundary !== null && isInsideFolder(boundary, named);
+    if (boundary !== null && !namedInside && options.insideOnly) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} is outside the ${boundaryName} ${boundary}; expected a folder inside it`, where);
+    }
+    let real;
+    try {
+        real = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(named);
+    }
+    catch (error) {
+        const code = error.code ?? String(error);
+        const why = code === 'ELOOP' ? 'goes round a loop of symbolic links' : code === 'ENOENT' || code === 'ENOTDIR' ? 'does not exist' : `cannot be read (${code})`;
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} ${why}; expected an existing folder`, where);
+    }
+    if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(real).isDirectory())
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} is not a folder; expected an existing folder`, where);
+    if (boundary !== null && namedInside && !isInsideFolder((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(boundary), real)) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} leads out of the ${boundaryName} ${boundary} through a symbolic link; expected a folder whose real path is inside it`, where);
+    }
+    return real;
+}
+
+
+/***/ }),
+
 /***/ 3856:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -4925,14 +5267,16 @@ function escapeTerminal(text) {
     return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
 /**
- * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; characters XML 1.0 does
- * not allow (C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, lone
- * surrogates) become U+FFFD.
+ * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; tab, line feed and
+ * carriage return become character references (`&#9;`, `&#10;`, `&#13;`: kept exactly in
+ * attribute values, which XML would otherwise turn into spaces, and never a raw line break from a
+ * name); characters XML 1.0 does not allow (other C0 controls, U+FFFE, U+FFFF, lone surrogates)
+ * become U+FFFD. No CDATA is used, so `]]>` is plain text.
  */
 function escapeXml(text) {
     return text
         .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, '\ufffd')
-        .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]);
+        .replace(/[&<>"'\t\n\r]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;', '\t': '&#9;', '\n': '&#10;', '\r': '&#13;' })[c]);
 }
 /**
  * Text inside a double-quoted Mermaid string (chart titles, axis labels): line breaks and other
@@ -4959,9 +5303,105 @@ function escapeMermaid(text) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   I: () => (/* binding */ formatJson)
 /* harmony export */ });
-/** `JSON.stringify(result)` with two-space indentation and a final newline. */
+/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(673);
+
+/**
+ * `JSON.stringify(result)` with two-space indentation and a final newline, where `##[` inside a
+ * string is written `##\u005b` and U+2028, U+2029 and NEL as `\u` escapes
+ * ({@link neutraliseJson}): `JSON.parse` gives back the same Result, and no line of the report
+ * holds a runner command when it is printed in a CI step.
+ */
 function formatJson(result) {
-    return `${JSON.stringify(result, null, 2)}\n`;
+    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_0__/* .neutraliseJson */ .rb)(JSON.stringify(result, null, 2))}\n`;
+}
+
+
+/***/ }),
+
+/***/ 673:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Z$: () => (/* binding */ neutraliseLog),
+/* harmony export */   h4: () => (/* binding */ neutraliseLogLine),
+/* harmony export */   rb: () => (/* binding */ neutraliseJson)
+/* harmony export */ });
+/* unused harmony exports MAX_SERVER_TEXT, defuseLegacyCommands, quoteServerText */
+/**
+ * Keeping runner commands out of plain text. A CI runner reads every line a step prints (standard
+ * output and standard error) and obeys two forms of command (actions/runner,
+ * src/Runner.Common/ActionCommand.cs, `TryParseV2` and `TryParse`):
+ *
+ * - `::name props::data` when the line begins with `::` after leading white space;
+ * - the older `##[name props]data` found anywhere in the line.
+ *
+ * The runner matches with .NET's culture-aware `StartsWith` and `IndexOf`, which may skip
+ * characters such as zero-width spaces and other format characters (from memory), so those are
+ * treated here as if absent. Every plain line fitgate prints (the action's log, the CLI's reports
+ * on standard output, its error line) passes through {@link neutraliseLogLine}; the workflow
+ * commands fitgate writes itself (`report/annotations.ts`) pass their text through
+ * {@link defuseLegacyCommands}; JSON keeps its data exact with {@link neutraliseJson}.
+ */
+
+/** Characters a comparison may pass over unseen: controls, format characters (zero-width), marks. */
+const UNSEEN = '[\\p{C}\\p{M}]*';
+/** `##[`, with anything unseen between its three characters. */
+const LEGACY = new RegExp(`#(${UNSEEN})#(${UNSEEN})\\[`, 'gu');
+/** A line that begins with `::` after white space (which the runner trims) and unseen characters. */
+const LEADING = /^[\s\p{C}\p{M}]*::/u;
+/** Every line break a reader may split on. */
+const LINE_BREAK = /\r\n|[\r\n\u0085\u2028\u2029]/g;
+/** A character as a `\u2028` (or `\u{e0001}`) escape. */
+function codeEscape(c) {
+    const code = c.codePointAt(0) ?? 0;
+    return code > 0xffff ? `\\u{${code.toString(16)}}` : `\\u${code.toString(16).padStart(4, '0')}`;
+}
+/** Longest piece of text from an API server that is printed, in characters (house rule: quote a short piece). */
+const MAX_SERVER_TEXT = 80;
+/**
+ * Breaks every `##[` in `text` by putting a space before the `[` (`##[error]` becomes
+ * `## [error]`), so that the runner's older command form cannot start anywhere in it. Nothing
+ * else changes; line breaks are left as they are.
+ */
+function defuseLegacyCommands(text) {
+    return text.replace(LEGACY, '#$1#$2 [');
+}
+/**
+ * One plain log line, safe wherever a runner reads it: line breaks (CR, LF, NEL, LS, PS) become
+ * spaces, every `##[` is broken ({@link defuseLegacyCommands}), and a line that would begin with
+ * `::` (after white space or unseen characters) starts with `» ` instead. Text without any of
+ * these is returned unchanged; applying it twice changes nothing more.
+ */
+function neutraliseLogLine(text) {
+    const one = defuseLegacyCommands(text.replace(LINE_BREAK, ' '));
+    return LEADING.test(one) ? `» ${one}` : one;
+}
+/** {@link neutraliseLogLine} on each `\n`-separated line of a text; the `\n`s are kept. */
+function neutraliseLog(text) {
+    return text.split('\n').map(neutraliseLogLine).join('\n');
+}
+/**
+ * JSON text with the same data but no runner command in any line: `[` after `##` (only ever
+ * inside a string) is written `\u005b`, and the line separators JSON leaves raw (U+2028, U+2029,
+ * NEL) as `\u` escapes. `JSON.parse` gives back exactly the same value. Lines of
+ * `JSON.stringify(value, null, 2)` begin with white space and a bracket, a brace, a quote or a
+ * digit, never with `::`.
+ */
+function neutraliseJson(json) {
+    return json.replace(LEGACY, '#$1#$2\\u005b').replace(/[\u0085\u2028\u2029]/g, codeEscape);
+}
+/**
+ * Text an API server sent back (an error message, a library's warning about a response), made
+ * fit to print: on one line, control and format characters shown as `\u001b` style escapes,
+ * lone surrogates replaced, neutralised as a log line ({@link neutraliseLogLine}), then cut to at
+ * most `max` characters (the last one `…` when cut; cutting off a tail cannot make a command).
+ * @param text the server's text
+ * @param max longest result, in characters; default {@link MAX_SERVER_TEXT}
+ */
+function quoteServerText(text, max = MAX_SERVER_TEXT) {
+    const visible = escapeTerminal(text.replace(LINE_BREAK, ' ')).replace(/\p{Cf}/gu, codeEscape).replace(/\p{Cs}/gu, '\ufffd');
+    const chars = [...neutraliseLogLine(visible)];
+    return chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : chars.join('');
 }
 
 
@@ -4974,12 +5414,14 @@ function formatJson(result) {
 /* harmony export */   v: () => (/* binding */ formatText)
 /* harmony export */ });
 /* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
-/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6228);
-/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4031);
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6228);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4031);
+/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
 /**
  * The terminal report: one aligned table of every model, then one block per model that did not
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
+
 
 
 
@@ -4999,12 +5441,12 @@ function table(rows, rightAligned) {
 }
 function metric(m, key) {
     const v = m.metrics?.[key];
-    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_2__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
     const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
-    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.message)}`;
-    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(c.advice)}` : text;
+    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(c.message)}`;
+    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
 /** Formats the Result for a terminal. */
 function formatText(result, options = {}) {
@@ -5013,7 +5455,7 @@ function formatText(result, options = {}) {
     const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
     const rows = result.models.map((m) => [
         m.verdict,
-        (0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name),
+        (0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.name),
         metric(m, 'holdout_rmse'),
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
@@ -5034,10 +5476,10 @@ function formatText(result, options = {}) {
         if (m.verdict === 'pass')
             continue;
         out.push('');
-        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(m.descriptor)})`);
+        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.descriptor)})`);
         if (m.error) {
             const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(where + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(where + m.error.message)}`);
             continue;
         }
         for (const c of m.checks)
@@ -5045,13 +5487,12 @@ function formatText(result, options = {}) {
                 out.push(checkLine(m, c, color));
     }
     for (const note of result.notes)
-        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeTerminal */ .en)(note)}`);
+        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(note)}`);
     const { counts } = result;
     out.push('');
     out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
-    // A line that would begin with `::` (after white space, which a CI runner trims) could be read
-    // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
-    return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
+    // Read by a CI runner when the CLI runs in a CI step: no line may hold a runner command.
+    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .neutraliseLog */ .Z$)(out.join('\n'))}\n`;
 }
 
 

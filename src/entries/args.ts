@@ -10,6 +10,7 @@
 import path from 'node:path';
 import { parseArgs as tokenize } from 'node:util';
 import { InputError } from '../core/errors.js';
+import { realFolder } from '../repo/real-folder.js';
 import type { Settings } from '../run/settings.js';
 import { parseShard, type Shard } from '../run/shard.js';
 import { VERSION } from '../core/version.js';
@@ -169,9 +170,12 @@ function usageError(message: string, command: CommandSpec | null): Parsed {
 }
 
 /**
- * Parses argv (without `node` and the script).
+ * Parses argv (without `node` and the script). `--root` is resolved to its real path
+ * (`realpath(3)`); named inside `cwd`, its real path must lie inside the real path of `cwd`.
  * @param argv arguments
- * @param cwd the working directory paths are relative to
+ * @param cwd the working directory paths are relative to (an existing folder)
+ * @throws InputError for a bad value, or a `--root` that is not an existing folder or leads out
+ *   of `cwd` through a symbolic link
  */
 export function parseArgs(argv: string[], cwd: string): Parsed {
   const [first, ...rest] = argv;
@@ -203,7 +207,10 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
   if (command.name === 'merge') {
     return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common };
   }
-  const root = path.resolve(cwd, value('root') ?? '.');
+  // The root as named, and its real path: named inside the working directory, it must really
+  // stay inside it (a folder replaced by a link to a parent is refused).
+  const named = path.resolve(cwd, value('root') ?? '.');
+  const root = realFolder(named, { key: '--root', within: cwd, withinName: 'working directory' });
   const config = value('config');
   const base = value('base');
   const shard = value('shard');
@@ -211,9 +218,10 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
     kind: 'check',
     settings: {
       root,
-      config: toRepoPath(root, path.resolve(root, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
+      config: toRepoPath([named], path.resolve(named, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
       configExplicit: config !== null,
-      descriptors: read.positionals.map((d) => toRepoPath(root, path.resolve(cwd, d), d, d)),
+      // Descriptor arguments may be written through the root as named or as it really is.
+      descriptors: read.positionals.map((d) => toRepoPath([named, root], path.resolve(cwd, d), d, d)),
       failOn,
     },
     ...common,
@@ -319,14 +327,15 @@ function wrap(text: string, width: number): string[] {
 
 /**
  * A path as repository-relative with `/`; outside the root is an InputError.
+ * @param roots the root's spellings (as named, then its real path): the first that holds the path is used
  * @param given the path as the user wrote it (quoted in the message)
  * @param key what names it: the option (`--config`) or, for an argument, the path itself
  */
-function toRepoPath(root: string, absolute: string, given: string, key: string): string {
-  const rel = path.relative(root, absolute);
-  if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel)) {
-    const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
-    throw new InputError('path-outside', `${what} outside the repository root ${root}; expected a path inside it`, { key });
+function toRepoPath(roots: readonly string[], absolute: string, given: string, key: string): string {
+  for (const root of roots) {
+    const rel = path.relative(root, absolute);
+    if (!(rel === '' || rel.startsWith('..') || path.isAbsolute(rel))) return rel.split(path.sep).join('/');
   }
-  return rel.split(path.sep).join('/');
+  const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
+  throw new InputError('path-outside', `${what} outside the repository root ${roots[0]}; expected a path inside it`, { key });
 }

@@ -2,22 +2,27 @@
  * The action's inputs: the only module that calls `core.getInput`. The runner passes each
  * input as an `INPUT_<NAME>` variable with the name upper-cased and hyphens kept
  * (`INPUT_FAIL-ON`), and applies `action.yml` defaults only inside a real run, so the defaults
- * are applied here too. Bad values throw an InputError that says what was expected.
+ * are applied here too. Bad values throw an InputError that says what was expected. The workspace
+ * and the root are taken as real paths (`realpath(3)`).
  */
 import * as core from '@actions/core';
 import os from 'node:os';
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
+import { realFolder } from '../repo/real-folder.js';
 import type { Settings } from '../run/settings.js';
 import { parseShard, type Shard } from '../run/shard.js';
 
 /** Everything the action reads from its inputs and environment. */
 export interface ActionInputs {
-  /** The run's settings; `root` is the workspace joined with `working-directory`. */
+  /**
+   * The run's settings; `root` is the real path of the workspace joined with `working-directory`
+   * (every symbolic link resolved), which must lie inside the workspace's real path.
+   */
   settings: Settings;
-  /** The workspace (absolute): annotations are relative to it. */
+  /** The workspace's real path (absolute): annotations are relative to it. */
   workspace: string;
-  /** `working-directory` as a workspace-relative path with `/` (`''` for the workspace itself). */
+  /** The root's real path relative to the workspace's, with `/` (`''` for the workspace itself). */
   prefix: string;
   /** Post or update the pull-request comment. Default true. */
   comment: boolean;
@@ -80,13 +85,18 @@ function insidePath(name: InputName, base: string, value: string, baseName: stri
  * Reads and checks every input (`INPUT_*` variables), `GITHUB_WORKSPACE` and `RUNNER_TEMP`
  * from the process environment.
  * @param cwd folder used when `GITHUB_WORKSPACE` is unset; default `process.cwd()`
- * @throws InputError for a bad value (the run must not go on: exit status 2)
+ * @throws InputError for a bad value (the run must not go on: exit status 2), a workspace or
+ *   `working-directory` that is not an existing folder, or a `working-directory` whose real path
+ *   leaves the workspace's real path
  */
 export function readInputs(cwd: string = process.cwd()): ActionInputs {
   const env = process.env;
-  const workspace = path.resolve(env.GITHUB_WORKSPACE || cwd);
-  const prefix = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
-  const root = prefix === '' ? workspace : path.join(workspace, prefix);
+  // Real paths: the root is checked against the workspace as it is on disk, so that a folder
+  // replaced by a link to a parent (or anywhere outside) is refused here, once.
+  const workspace = realFolder(path.resolve(env.GITHUB_WORKSPACE || cwd), { key: 'GITHUB_WORKSPACE', within: null });
+  const named = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
+  const root = realFolder(path.join(workspace, named), { key: 'working-directory', within: workspace, insideOnly: true, withinName: 'workspace' });
+  const prefix = path.relative(workspace, root).split(path.sep).join('/');
 
   const configValue = input('config');
   const config = insidePath('config', root, configValue, 'working directory');

@@ -8,6 +8,7 @@
 import path from 'node:path';
 import type { InputError } from '../core/errors.js';
 import type { ModelResult, Result } from '../result/result.js';
+import { defuseLegacyCommands } from './runner-commands.js';
 
 /** Severity of an annotation. */
 export type AnnotationLevel = 'error' | 'warning' | 'notice';
@@ -54,25 +55,17 @@ export function escapeProperty(text: string): string {
 }
 
 /**
- * Text for a plain log line: line breaks become spaces, and a line that would begin with `::`
- * (after leading white space, which the runner trims) starts with `» ` instead, so that it
- * cannot be read as a workflow command.
- */
-export function escapeLogLine(text: string): string {
-  const one = text.replace(/\r\n|\r|\n/g, ' ');
-  return one.trimStart().startsWith('::') ? `» ${one}` : one;
-}
-
-/**
  * One workflow command line (without the line break), e.g.
- * `::error file=models/a.model.yml,line=12,title=…::message`.
+ * `::error file=models/a.model.yml,line=12,title=…::message`. Every `##[` in the file, title and
+ * message is broken first ({@link defuseLegacyCommands}), so that no line fitgate prints holds
+ * the runner's older command form.
  */
 export function formatCommand(a: Annotation): string {
   const props: string[] = [];
-  if (a.file !== undefined && a.file !== '') props.push(`file=${escapeProperty(a.file)}`);
+  if (a.file !== undefined && a.file !== '') props.push(`file=${escapeProperty(defuseLegacyCommands(a.file))}`);
   if (a.line !== undefined && a.line > 0) props.push(`line=${a.line}`);
-  if (a.title !== undefined && a.title !== '') props.push(`title=${escapeProperty(a.title)}`);
-  return `::${a.level}${props.length > 0 ? ` ${props.join(',')}` : ''}::${escapeData(a.message)}`;
+  if (a.title !== undefined && a.title !== '') props.push(`title=${escapeProperty(defuseLegacyCommands(a.title))}`);
+  return `::${a.level}${props.length > 0 ? ` ${props.join(',')}` : ''}::${escapeData(defuseLegacyCommands(a.message))}`;
 }
 
 /** Joins the fitgate root's prefix and a root-relative path. */

@@ -32,14 +32,16 @@ export function escapeTerminal(text: string): string {
 }
 
 /**
- * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; characters XML 1.0 does
- * not allow (C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, lone
- * surrogates) become U+FFFD.
+ * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; tab, line feed and
+ * carriage return become character references (`&#9;`, `&#10;`, `&#13;`: kept exactly in
+ * attribute values, which XML would otherwise turn into spaces, and never a raw line break from a
+ * name); characters XML 1.0 does not allow (other C0 controls, U+FFFE, U+FFFF, lone surrogates)
+ * become U+FFFD. No CDATA is used, so `]]>` is plain text.
  */
 export function escapeXml(text: string): string {
   return text
     .replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, '\ufffd')
-    .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c] as string);
+    .replace(/[&<>"'\t\n\r]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;', '\t': '&#9;', '\n': '&#10;', '\r': '&#13;' })[c] as string);
 }
 
 /**

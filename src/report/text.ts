@@ -5,6 +5,7 @@
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import { escapeTerminal } from './escape.js';
+import { neutraliseLog } from './runner-commands.js';
 
 /** Options of the text report. */
 export interface TextOptions {
@@ -82,7 +83,6 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   out.push(
     `${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`,
   );
-  // A line that would begin with `::` (after white space, which a CI runner trims) could be read
-  // as a workflow command when the CLI runs in a CI step: it starts with `» ` instead.
-  return `${out.join('\n').split('\n').map((line) => (line.trimStart().startsWith('::') ? `» ${line}` : line)).join('\n')}\n`;
+  // Read by a CI runner when the CLI runs in a CI step: no line may hold a runner command.
+  return `${neutraliseLog(out.join('\n'))}\n`;
 }

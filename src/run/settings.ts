@@ -5,7 +5,7 @@
 
 /** What a run checks and how it decides. */
 export interface Settings {
-  /** Repository root, absolute. Nothing outside it is read. */
+  /** Repository root: its real path (absolute, every symbolic link resolved; `args.ts` and `inputs.ts` resolve it). Nothing outside it is read. */
   root: string;
   /** Settings file, repository-relative. Default `fitgate.yml`. */
   config: string;

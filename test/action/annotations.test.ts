@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.js';
-import { collectAnnotations, escapeData, escapeLogLine, escapeProperty, formatAnnotations, formatCommand, inputErrorAnnotation } from '../../src/report/annotations.js';
+import { collectAnnotations, escapeData, escapeProperty, formatAnnotations, formatCommand, inputErrorAnnotation } from '../../src/report/annotations.js';
+import { neutraliseLogLine } from '../../src/report/runner-commands.js';
 import { summarise } from '../../src/result/result.js';
 import { awkwardResult, check, model } from './result-fixture.js';
 
@@ -15,9 +16,15 @@ describe('escaping of workflow commands', () => {
     const line = formatCommand({ level: 'warning', message: 'x\n::error::x', title: '::error::x', file: 'a\n::error::b' });
     expect(line).toBe('::warning file=a%0A%3A%3Aerror%3A%3Ab,title=%3A%3Aerror%3A%3Ax::x%0A::error::x');
     expect(line.split('\n')).toHaveLength(1);
-    expect(escapeLogLine('::error::x')).toBe('» ::error::x');
-    expect(escapeLogLine('  ::error::x')).toBe('»   ::error::x');
-    expect(escapeLogLine('a\n::error::x')).toBe('a ::error::x');
+    expect(neutraliseLogLine('::error::x')).toBe('» ::error::x');
+    expect(neutraliseLogLine('  ::error::x')).toBe('»   ::error::x');
+    expect(neutraliseLogLine('a\n::error::x')).toBe('a ::error::x');
+  });
+
+  it('breaks the older ##[command] form in the file, title and message of its own commands', () => {
+    const line = formatCommand({ level: 'error', message: 'x ##[error]forged', title: 'a##[warning]b', file: 'm##[x].yml' });
+    expect(line).toBe('::error file=m## [x].yml,title=a## [warning]b::x ## [error]forged');
+    expect(line).not.toContain('##[');
   });
 
   it('leaves out empty properties', () => {

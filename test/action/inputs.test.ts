@@ -1,13 +1,20 @@
-import { readFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, realpathSync, rmSync, symlinkSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse } from 'yaml';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.js';
 import { INPUT_DEFAULTS, readInputs } from '../../src/entries/inputs.js';
 
 const saved = { ...process.env };
-const WORKSPACE = path.resolve('/tmp/ws');
+// A real workspace (the root is resolved with realpath): `ml/`, a link `up` to the workspace's
+// parent (a folder replaced by a link leading out), a link `models` to `ml` (staying inside).
+const WORKSPACE = realpathSync(mkdtempSync(path.join(tmpdir(), 'fitgate-inputs-')));
+mkdirSync(path.join(WORKSPACE, 'ml'));
+symlinkSync('..', path.join(WORKSPACE, 'up'));
+symlinkSync('ml', path.join(WORKSPACE, 'models'));
+afterAll(() => rmSync(WORKSPACE, { recursive: true, force: true }));
 
 beforeEach(() => {
   for (const k of Object.keys(process.env)) if (k.startsWith('INPUT_')) delete process.env[k];
@@ -67,6 +74,29 @@ describe('readInputs', () => {
     expect(inputs.prefix).toBe('ml');
     expect(inputs.comment).toBe(false);
     expect(inputs.token).toBe('secret');
+  });
+
+  it('resolves working-directory with realpath: a link inside the workspace is followed, one leading out is refused', () => {
+    process.env['INPUT_WORKING-DIRECTORY'] = 'models';
+    const inputs = readInputs();
+    expect(inputs.settings.root).toBe(path.join(WORKSPACE, 'ml'));
+    expect(inputs.prefix).toBe('ml');
+    process.env['INPUT_WORKING-DIRECTORY'] = 'up';
+    const error = inputError();
+    expect(error.code).toBe('folder-refused');
+    expect(error.location.key).toBe('working-directory');
+    expect(error.message).toMatch(/leads out of the workspace .* through a symbolic link/);
+    process.env['INPUT_WORKING-DIRECTORY'] = 'up/ml';
+    expect(inputError().location.key).toBe('working-directory');
+    process.env['INPUT_WORKING-DIRECTORY'] = 'nowhere';
+    expect(inputError().message).toMatch(/does not exist; expected an existing folder/);
+  });
+
+  it('takes the workspace as its real path', () => {
+    process.env.GITHUB_WORKSPACE = path.join(WORKSPACE, 'models');
+    const inputs = readInputs();
+    expect(inputs.workspace).toBe(path.join(WORKSPACE, 'ml'));
+    expect(inputs.settings.root).toBe(path.join(WORKSPACE, 'ml'));
   });
 
   it('also accepts underscores for hyphens (some local runners)', () => {

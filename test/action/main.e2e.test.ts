@@ -19,6 +19,8 @@ const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const bundle = path.join(repoRoot, 'dist', 'index.js');
 const TOKEN = 'ghs_test-token-do-not-print-4711';
 const MARKER = '<!-- fitgate-report -->';
+/** The line that registers the token with the runner's masking: the first of every run that read its inputs. */
+const MASK = `::add-mask::${TOKEN}`;
 
 /** One request the stand-in API received. */
 interface Seen {
@@ -198,9 +200,10 @@ describe('node dist/index.js on a pull request', () => {
 
   it('annotates, summarises, sets outputs and fails the step on the first run, creating the comment', async () => {
     first = await runAction({}, fixture.baseSha);
-    expect(first.commands, first.stdout + first.stderr).toEqual([...FINDINGS, FAILURE]);
+    expect(first.commands, first.stdout + first.stderr).toEqual([MASK, ...FINDINGS, FAILURE]);
     expect(first.status).toBe(1);
-    expect(first.stdout).not.toContain(TOKEN);
+    // The token is printed once, first, to register it with the runner's masking.
+    expect(first.stdout.split('\n').filter((l) => l.includes(TOKEN))).toEqual([MASK]);
     expect(first.stderr).not.toContain(TOKEN);
 
     // Outputs: verdict, failed count, path of the JSON report under RUNNER_TEMP.
@@ -255,7 +258,7 @@ describe('node dist/index.js on a pull request', () => {
     api.seen = [];
     const before = api.comments.length;
     second = await runAction({}, fixture.baseSha);
-    expect(second.commands).toEqual([...FINDINGS, FAILURE]);
+    expect(second.commands).toEqual([MASK, ...FINDINGS, FAILURE]);
     expect(api.seen.map((s) => `${s.method} ${s.url}`)).toEqual([
       'GET /repos/acme/models/issues/7/comments?per_page=100',
       'GET /repos/acme/models/issues/7/comments?per_page=100&page=2',
@@ -272,11 +275,11 @@ describe('node dist/index.js on a pull request', () => {
     api.mode = 'ok';
     const notice =
       '::notice title=fitgate::the pull-request comment could not be written (HTTP 403): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.';
-    expect(run.commands).toEqual([...FINDINGS, notice, FAILURE]);
+    expect(run.commands).toEqual([MASK, ...FINDINGS, notice, FAILURE]);
     expect(run.status).toBe(first.status);
     expect(run.outputs.verdict).toBe(first.outputs.verdict);
     expect(run.outputs.failed).toBe(first.outputs.failed);
-    expect(run.stdout).not.toContain(TOKEN);
+    expect(run.stdout.split('\n').filter((l) => l.includes(TOKEN))).toEqual([MASK]);
   });
 
   it('says once that the base commit is missing and carries on', async () => {
@@ -287,7 +290,7 @@ describe('node dist/index.js on a pull request', () => {
       '::notice title=fitgate::base commit fffffff is not available; fetch it with `fetch-depth: 2` on actions/checkout (a pull_request checkout is the merge commit, whose first parent is the base). Models are not compared with the base branch in this run.';
     expect(run.commands.filter((l) => l.includes('not available'))).toEqual([note]);
     // Without a base, steady passes its own limits; the other findings stay.
-    expect(run.commands).toEqual([FINDINGS[0], FINDINGS[2], FINDINGS[3], note, FAILURE]);
+    expect(run.commands).toEqual([MASK, FINDINGS[0], FINDINGS[2], FINDINGS[3], note, FAILURE]);
     expect(run.summary).toContain('> base commit fffffff is not available');
     expect(run.summary).not.toContain('Against base');
     expect(api.seen).toEqual([]);
@@ -296,12 +299,13 @@ describe('node dist/index.js on a pull request', () => {
   it('passes a run with warnings, and fails it with fail-on: warn', async () => {
     const inputs = { INPUT_CONFIG: 'lean-only.yml', INPUT_COMMENT: 'false' };
     const lenient = await runAction(inputs, fixture.baseSha);
-    expect(lenient.commands).toEqual([FINDINGS[3]]);
+    expect(lenient.commands).toEqual([MASK, FINDINGS[3]]);
     expect(lenient.status).toBe(0);
     expect(lenient.outputs.verdict).toBe('warn');
     expect(lenient.outputs.failed).toBe('0');
     const strict = await runAction({ ...inputs, 'INPUT_FAIL-ON': 'warn' }, fixture.baseSha);
     expect(strict.commands).toEqual([
+      MASK,
       FINDINGS[3],
       '::error::1 of 1 models over a limit (fail-on: warn counts warnings): lean. The annotations point at the descriptor lines; the job summary has each figure against its limit.',
     ]);

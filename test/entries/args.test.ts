@@ -1,12 +1,20 @@
 // The command line (src/args.ts): every command, option form and mistake, without running a
 // pipeline. The bundle's own behaviour on these is exercised in test/cli.test.ts.
+import { mkdirSync, mkdtempSync, realpathSync, rmSync, symlinkSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { parseArgs, type Parsed } from '../../src/entries/args.js';
 import { InputError } from '../../src/core/errors.js';
 import { VERSION } from '../../src/core/version.js';
 
-const cwd = '/work/repo';
+// A real working directory: --root is resolved with realpath. It holds `sub/`, a link `up` to its
+// parent (a folder replaced by a link leading out), and a link `inner` to `sub` (staying inside).
+const cwd = realpathSync(mkdtempSync(path.join(tmpdir(), 'fitgate-args-')));
+mkdirSync(path.join(cwd, 'sub'));
+symlinkSync('..', path.join(cwd, 'up'));
+symlinkSync('sub', path.join(cwd, 'inner'));
+afterAll(() => rmSync(cwd, { recursive: true, force: true }));
 
 function check(argv: string[]): Extract<Parsed, { kind: 'check' }> {
   const parsed = parseArgs(['check', ...argv], cwd);
@@ -60,6 +68,20 @@ describe('fitgate check', () => {
   it('resolves the root and descriptors from the working directory, the settings file from the root', () => {
     const parsed = check(['--root', 'sub', '--config', 'conf/fg.yml', 'sub/models/a.model.yml']);
     expect(parsed.settings).toMatchObject({ root: path.join(cwd, 'sub'), config: 'conf/fg.yml', configExplicit: true, descriptors: ['models/a.model.yml'] });
+  });
+
+  it('takes the root as its real path, and descriptors written through the link or the real folder', () => {
+    const parsed = check(['--root', 'inner', 'inner/models/a.model.yml', 'sub/models/b.model.yml']);
+    expect(parsed.settings.root).toBe(path.join(cwd, 'sub'));
+    expect(parsed.settings.descriptors).toEqual(['models/a.model.yml', 'models/b.model.yml']);
+  });
+
+  it('refuses a --root that is a link leading out of the working directory, or no folder at all', () => {
+    expect(() => check(['--root', 'up'])).toThrow(expect.objectContaining({ code: 'folder-refused', location: { key: '--root' } }) as Error);
+    expect(() => check(['--root', 'up'])).toThrow(/leads out of the working directory .* through a symbolic link/);
+    expect(() => check(['--root', 'missing'])).toThrow(/does not exist; expected an existing folder/);
+    // Named outside the working directory, the root is taken as named (its real path).
+    expect(check(['--root', '..']).settings.root).toBe(path.dirname(cwd));
   });
 
   it('refuses paths outside the root with the key that named them', () => {

@@ -2,13 +2,14 @@
  * Runs every case of the hostile corpus (corpus/cases.ts) through the built CLI and through the
  * action's entry point, and checks: the exit status (the action: exit 1 and the `verdict`
  * output for statuses 1 and 2), the words of the message, no stack trace, no "unexpected"
- * error, nothing from outside the repository in any output, the token nowhere, and no workflow
- * command on stdout that fitgate did not write.
+ * error, nothing from outside the repository in any output, the token nowhere but in the line
+ * that masks it, no line the runner would take as a command in the CLI's output, and none on the
+ * action's that fitgate did not write.
  */
 import { appendFileSync, rmSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CASES, type CorpusCase } from './corpus/cases.js';
-import { foreignCommands, NODE_WARNING, prepareBundles, runAction, runCli, SECRET, STACK_LINE, TOKEN, verdictsFor, writeCase, type CaseDirs, type Run } from './harness.js';
+import { foreignCommands, NODE_WARNING, prepareBundles, runAction, runCli, runnerCommands, SECRET, STACK_LINE, TOKEN, verdictsFor, withoutMask, writeCase, type CaseDirs, type Run } from './harness.js';
 
 const written = new Map<string, CaseDirs>();
 
@@ -57,6 +58,7 @@ describe.concurrent('hostile repositories through the CLI', () => {
     expect(run.stderr, `a library's warning is not a message of fitgate's\n${show(run)}`).not.toMatch(NODE_WARNING);
     expect(run.stderr, `an unexpected error is a bug\n${show(run)}`).not.toContain('--debug');
     expect(all).not.toContain(SECRET);
+    expect(runnerCommands(all), `no line may hold a runner command\n${show(run)}`).toEqual([]);
     expect(all, `a fault in fitgate is a bug\n${show(run)}`).not.toContain('fault in fitgate');
     if (c.exit === 2 && run.stdout === '') expect(run.stderr, show(run)).toMatch(/^fitgate: \S/);
     if (c.verdicts) {
@@ -80,7 +82,10 @@ describe.concurrent('hostile repositories through the action', () => {
     expect(run.stderr, `a library's warning is not a message of fitgate's\n${show(run)}`).not.toMatch(NODE_WARNING);
     expect(run.stdout, `an unexpected error is a bug\n${show(run)}`).not.toContain('failed unexpectedly');
     expect(foreignCommands(run.stdout), show(run)).toEqual([]);
-    for (const text of [run.stdout, run.stderr, run.summary, run.report, JSON.stringify(run.outputs)]) {
+    expect(foreignCommands(run.stderr), show(run)).toEqual([]);
+    // The token is printed once, to register it with the runner's masking, before anything else.
+    if (run.stdout.includes(TOKEN)) expect(run.stdout.startsWith(`::add-mask::${TOKEN}\n`), show(run)).toBe(true);
+    for (const text of [withoutMask(run.stdout), run.stderr, run.summary, run.report, JSON.stringify(run.outputs)]) {
       expect(text).not.toContain(SECRET);
       expect(text).not.toContain(TOKEN);
     }

@@ -219,10 +219,11 @@ function cleanEnv(): NodeJS.ProcessEnv {
  * Runs `node <cli> check --root <repo> ...args` in the case's base folder (so that relative
  * arguments such as `../outside/x` mean what they say).
  * @param timeoutMs the run is killed after this long (status -9); default 20 s
+ * @param cwd the folder to run in; default the case's base folder (a CI step runs in the repository)
  */
-export async function runCli(dirs: CaseDirs, args: string[], timeoutMs = 20_000): Promise<Run> {
+export async function runCli(dirs: CaseDirs, args: string[], timeoutMs = 20_000, cwd = dirs.base): Promise<Run> {
   const { cli } = prepareBundles();
-  const run = await spawnNode(cli, ['check', '--root', dirs.repo, '--jobs', '1', ...args.map((a) => fill(a, dirs))], { cwd: dirs.base, env: { ...cleanEnv(), NO_COLOR: '1' }, timeoutMs });
+  const run = await spawnNode(cli, ['check', '--root', dirs.repo, '--jobs', '1', ...args.map((a) => fill(a, dirs))], { cwd, env: { ...cleanEnv(), NO_COLOR: '1' }, timeoutMs });
   return { ...run, outputs: {}, summary: '', report: '' };
 }
 
@@ -240,8 +241,9 @@ export function parseOutputs(text: string): Record<string, string> {
  * GITHUB_OUTPUT, GITHUB_STEP_SUMMARY and RUNNER_TEMP.
  * @param inputs extra inputs by name (`config`, `fail-on`, ...); `$OUTSIDE` is replaced
  * @param timeoutMs the run is killed after this long; default 20 s
+ * @param extraEnv variables set after the others (a pull-request event, `GITHUB_API_URL`); default none
  */
-export async function runAction(dirs: CaseDirs, inputs: Record<string, string> = {}, timeoutMs = 20_000): Promise<Run> {
+export async function runAction(dirs: CaseDirs, inputs: Record<string, string> = {}, timeoutMs = 20_000, extraEnv: NodeJS.ProcessEnv = {}): Promise<Run> {
   const { action } = prepareBundles();
   const files = path.join(dirs.base, 'runner');
   mkdirSync(files, { recursive: true });
@@ -266,6 +268,7 @@ export async function runAction(dirs: CaseDirs, inputs: Record<string, string> =
     'INPUT_GITHUB-TOKEN': TOKEN,
   };
   for (const [name, value] of Object.entries(inputs)) env[`INPUT_${name.toUpperCase()}`] = fill(value, dirs);
+  Object.assign(env, extraEnv);
   const run = await spawnNode(action, [], { cwd: dirs.repo, env, timeoutMs });
   const outputs = parseOutputs(readFileSync(outputFile, 'utf8'));
   const report = outputs.report && existsSync(outputs.report) ? readFileSync(outputs.report, 'utf8') : '';
@@ -283,14 +286,32 @@ export const STACK_LINE = /^\s+at .+(:\d+:\d+\)?|\(native\)|<anonymous>\)?)$/m;
 /** A process warning Node.js printed (`(node:1234) Warning: ...`): a library talking past fitgate's own messages. */
 export const NODE_WARNING = /\(node:\d+\) \w*Warning:/;
 
-/** Workflow commands fitgate itself writes: a level, optional escaped properties, then `::`. */
-const OWN_COMMAND = /^::(error|warning|notice|debug)( (file|line|title)=[^:\r\n]*(,(file|line|title)=[^:\r\n]*)*)?::/;
+/** Workflow commands fitgate itself writes: a level, optional escaped properties, then `::`, and the one line that masks the token. */
+const OWN_COMMAND = new RegExp(`^::(error|warning|notice|debug)( (file|line|title)=[^:\\r\\n]*(,(file|line|title)=[^:\\r\\n]*)*)?::|^::add-mask::${TOKEN}$`);
 
 /**
- * Lines of stdout that begin a workflow command fitgate did not write: anything starting with
- * `::` (after leading white space, which the runner ignores) that is not one of fitgate's own
- * error / warning / notice / debug lines.
+ * Lines the runner would take as a command (actions/runner, src/Runner.Common/ActionCommand.cs):
+ * those that begin with `::` after leading white space, and those holding the older `##[` form
+ * anywhere. Control, format and combining characters are ignored first (a culture-aware
+ * comparison may skip them). Lines are split where a reader may split them (CR, LF).
+ */
+export function runnerCommands(text: string): string[] {
+  return text.split(/\r\n|\r|\n/).filter((line) => {
+    const plain = line.replace(/[\p{C}\p{M}]/gu, '');
+    return plain.trimStart().startsWith('::') || plain.includes('##[');
+  });
+}
+
+/**
+ * Lines of the action's stdout that the runner would take as a command fitgate did not write:
+ * anything {@link runnerCommands} finds that is not one of fitgate's own error / warning /
+ * notice / debug lines or its `::add-mask::` of the token, and any line of its own holding `##[`.
  */
 export function foreignCommands(stdout: string): string[] {
-  return stdout.split(/\r?\n/).filter((line) => line.trimStart().startsWith('::') && !OWN_COMMAND.test(line));
+  return runnerCommands(stdout).filter((line) => !OWN_COMMAND.test(line) || line.replace(/[\p{C}\p{M}]/gu, '').includes('##['));
+}
+
+/** stdout without the one line that registers the token with the runner's masking (`::add-mask::<token>`). */
+export function withoutMask(stdout: string): string {
+  return stdout.split('\n').filter((line) => line !== `::add-mask::${TOKEN}`).join('\n');
 }

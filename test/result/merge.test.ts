@@ -1,3 +1,4 @@
+import { tmpdir } from 'node:os';
 import { describe, it, expect } from 'vitest';
 import { parseArgs } from '../../src/entries/args.js';
 import { InputError } from '../../src/core/errors.js';
@@ -136,18 +137,19 @@ describe('merge and scale arguments', () => {
   });
 
   it('parses --shard and --jobs for check', () => {
-    const parsed = parseArgs(['check', '--shard', '2/3', '--jobs', '4'], '/work');
+    // check resolves --root (default the working directory) with realpath: a folder that exists.
+    const parsed = parseArgs(['check', '--shard', '2/3', '--jobs', '4'], tmpdir());
     expect(parsed.kind).toBe('check');
     if (parsed.kind === 'check') {
       expect(parsed.shard).toEqual({ index: 2, count: 3 });
       expect(parsed.jobs).toBe(4);
     }
-    const plain = parseArgs(['check'], '/work');
+    const plain = parseArgs(['check'], tmpdir());
     if (plain.kind === 'check') expect([plain.shard, plain.jobs]).toEqual([null, null]);
   });
 
   it.each([['--shard', '4/3'], ['--shard', 'x'], ['--jobs', '0'], ['--jobs', 'many']])('rejects %s %s with an InputError', (flag, value) => {
-    expect(() => parseArgs(['check', flag, value], '/work')).toThrow(InputError);
+    expect(() => parseArgs(['check', flag, value], tmpdir())).toThrow(InputError);
   });
 });
 

@@ -132,6 +132,20 @@ export const CASES: CorpusCase[] = [
   { id: 'link-loop', about: 'a training file that is a link to itself', files: repo({ [train]: { link: 'train.csv' } }), exit: 2, words: ['models/m.model.yml:', 'loop'] },
   { id: 'nul-in-path', about: 'a data path with a NUL character', files: repo({ [m]: descriptor({ train: '"../data/train.csv\\0.txt"' }) }), exit: 2, words: ['models/m.model.yml:', 'NUL'] },
 
+  // The repository root: its real path must stay inside the workspace (action) or the working directory (CLI)
+  { id: 'root-link-to-ancestor', about: 'the root folder is a link to a folder above the checkout', files: repo({ ml: { link: '../..' } }), args: ['--root', 'repo/ml'], inputs: { 'working-directory': 'ml' }, exit: 2, words: ['ml leads out of', 'through a symbolic link'] },
+
+  // Files fitgate writes: never through a link, never out of the repository through a folder link
+  { id: 'write-out-link', about: '--out naming a link to a file outside', files: repo({ 'report.txt': { link: '$OUTSIDE/plain.txt' } }), args: ['--out', 'repo/report.txt'], inputs: null, cliOnly: 'the action has no --out (its JSON report goes to RUNNER_TEMP)', exit: 2, words: ['`--out`', 'report.txt is a symbolic link'] },
+  { id: 'write-html-folder-link', about: 'the HTML report folder is a link to a folder outside', files: repo({ site: { link: '$OUTSIDE' } }), args: ['--html', 'repo/site'], inputs: { html: 'site' }, exit: 2, words: ['html`', 'site leads out of'] },
+  { id: 'write-junit-link', about: 'the JUnit file is a link to a file outside', files: repo({ 'junit.xml': { link: '$OUTSIDE/plain.txt' } }), args: ['--junit', 'repo/junit.xml'], inputs: { junit: 'junit.xml' }, exit: 2, words: ['junit`', 'junit.xml is a symbolic link'] },
+  { id: 'write-sarif-through-parent-link', about: 'the SARIF path goes through a folder link to the parent', files: repo({ up: { link: '..' } }), args: ['--sarif', 'repo/up/outside/x.sarif'], inputs: { sarif: 'up/outside/x.sarif' }, exit: 2, words: ['sarif`', 'leads out of'] },
+
+  // Runner commands inside a line (the older ##[...] form) and after a line break
+  { id: 'command-in-file-name', about: 'a broken descriptor whose file name holds ##[error] mid-line and a line break before ::error::', files: repo({ 'models/a ##[error]forged\n::error::forged.model.yml': 'version: 1\nname: [broken\n' }), exit: 2, words: ['forged'], verdicts: { m: 'pass', 'models/a ##[error]forged\n::error::forged.model.yml': 'error' } },
+  { id: 'command-in-cell', about: 'a bad cell whose text is ##[error]forged', files: withTrain(TRAIN.replace('\n3,', '\nx ##[error]forged,')), exit: 2, words: ['data/train.csv:5', 'forged'] },
+  { id: 'command-in-target', about: 'a target column named with ##[warning] that the data lacks', files: repo({ [m]: descriptor({ target: '"y ##[warning]forged"' }) }), exit: 2, words: ['forged'] },
+
   // CSV contents
   { id: 'csv-empty', about: 'an empty training file', files: withTrain(''), exit: 2, words: ['data/train.csv', 'no header row'] },
   { id: 'csv-header-only', about: 'a training file with a header and no rows', files: withTrain('x,y\n'), exit: 2, words: ['data/train.csv', 'no data rows'] },
