@@ -21,6 +21,19 @@ import { escapeLogLine, formatAnnotations, formatCommand, inputErrorAnnotation }
 import { formatComment, formatSummary } from './report/summary.js';
 import { formatText } from './report/text.js';
 
+/**
+ * Sets the step's outputs.
+ * @throws InputError `runner-file` when GITHUB_OUTPUT cannot take them (readInputs checked it at
+ *   the start; this is for a file that went away during the run)
+ */
+function setOutputs(outputs: Record<string, string>): void {
+  try {
+    for (const [name, value] of Object.entries(outputs)) core.setOutput(name, value);
+  } catch (error) {
+    throw new InputError('runner-file', `could not write the step's outputs: ${errorMessage(error)}`, { key: 'GITHUB_OUTPUT' });
+  }
+}
+
 /** Writes one notice or warning line of our own (message escaped). */
 function say(level: 'notice' | 'warning', message: string): void {
   process.stdout.write(`${formatCommand({ level, title: 'fitgate', message })}\n`);
@@ -65,13 +78,15 @@ async function run(): Promise<void> {
     }
 
     // Outputs and the step's status.
-    core.setOutput(OUTPUTS.verdict, result.verdict);
-    core.setOutput(OUTPUTS.failed, String(failedCount(result, inputs.settings.failOn)));
-    core.setOutput(OUTPUTS.report, report);
+    setOutputs({ [OUTPUTS.verdict]: result.verdict, [OUTPUTS.failed]: String(failedCount(result, inputs.settings.failOn)), [OUTPUTS.report]: report });
     const failure = failureMessage(result, inputs.settings.failOn);
     if (failure !== null) core.setFailed(failure);
   } catch (error) {
-    core.setOutput(OUTPUTS.verdict, 'error');
+    try {
+      core.setOutput(OUTPUTS.verdict, 'error');
+    } catch {
+      // GITHUB_OUTPUT cannot take it: the error below is still the one to report.
+    }
     if (error instanceof InputError) {
       if (error.location.file !== undefined) process.stdout.write(`${formatCommand(inputErrorAnnotation(error, prefix))}\n`);
       core.setFailed(`fitgate could not run: ${error.describe()}`);

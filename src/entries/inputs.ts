@@ -5,6 +5,7 @@
  * are applied here too. Bad values throw an InputError that says what was expected.
  */
 import * as core from '@actions/core';
+import { accessSync, constants, statSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
@@ -77,13 +78,34 @@ function insidePath(name: InputName, base: string, value: string, baseName: stri
 }
 
 /**
- * Reads and checks every input (`INPUT_*` variables), `GITHUB_WORKSPACE` and `RUNNER_TEMP`
- * from the process environment.
+ * Checks the runner's file for the step's outputs: `GITHUB_OUTPUT`, when set, must name an existing
+ * file this process may write (the runner creates it before the step starts). Unset, the outputs
+ * go to the log as workflow commands (@actions/core does that).
+ * @throws InputError `runner-file` naming the variable and the path otherwise
+ */
+export function checkOutputFile(file: string | undefined): void {
+  if (file === undefined || file === '') return;
+  let problem: string | null = null;
+  try {
+    if (!statSync(file).isFile()) problem = 'is not a file';
+    else accessSync(file, constants.W_OK);
+  } catch (error) {
+    problem = (error as NodeJS.ErrnoException).code === 'ENOENT' ? 'does not exist' : 'cannot be written';
+  }
+  if (problem !== null) {
+    throw new InputError('runner-file', `expected the file the runner creates for the step's outputs, got ${quoteValue(file)}, which ${problem}`, { key: 'GITHUB_OUTPUT' });
+  }
+}
+
+/**
+ * Reads and checks every input (`INPUT_*` variables), `GITHUB_WORKSPACE`, `RUNNER_TEMP` and
+ * `GITHUB_OUTPUT` ({@link checkOutputFile}) from the process environment.
  * @param cwd folder used when `GITHUB_WORKSPACE` is unset; default `process.cwd()`
  * @throws InputError for a bad value (the run must not go on: exit status 2)
  */
 export function readInputs(cwd: string = process.cwd()): ActionInputs {
   const env = process.env;
+  checkOutputFile(env.GITHUB_OUTPUT);
   const workspace = path.resolve(env.GITHUB_WORKSPACE || cwd);
   const prefix = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
   const root = prefix === '' ? workspace : path.join(workspace, prefix);
