@@ -23,6 +23,19 @@ import { defuseLegacyCommands, neutraliseLogLine } from './report/runner-command
 import { formatComment, formatSummary } from './report/summary.js';
 import { formatText } from './report/text.js';
 
+/**
+ * Sets the step's outputs.
+ * @throws InputError `runner-file` when GITHUB_OUTPUT cannot take them (readInputs checked it at
+ *   the start; this is for a file that went away during the run)
+ */
+function setOutputs(outputs: Record<string, string>): void {
+  try {
+    for (const [name, value] of Object.entries(outputs)) core.setOutput(name, value);
+  } catch (error) {
+    throw new InputError('runner-file', `could not write the step's outputs: ${errorMessage(error)}`, { key: 'GITHUB_OUTPUT' });
+  }
+}
+
 /** Writes one notice, warning or error line of our own (message escaped, no runner command). */
 function say(level: 'notice' | 'warning' | 'error', message: string): void {
   process.stdout.write(`${formatCommand({ level, title: 'fitgate', message })}\n`);
@@ -85,14 +98,20 @@ async function run(): Promise<void> {
     }
 
     // Outputs and the step's status (a refused report file counts as bad input, as the CLI's exit status 2).
-    core.setOutput(OUTPUTS.verdict, refused.length > 0 ? 'error' : result.verdict);
-    core.setOutput(OUTPUTS.failed, String(failedCount(result, inputs.settings.failOn)));
-    core.setOutput(OUTPUTS.report, report);
+    setOutputs({
+      [OUTPUTS.verdict]: refused.length > 0 ? 'error' : result.verdict,
+      [OUTPUTS.failed]: String(failedCount(result, inputs.settings.failOn)),
+      [OUTPUTS.report]: report,
+    });
     const failure = failureMessage(result, inputs.settings.failOn);
     if (refused.length > 0) fail(`fitgate refused to write ${refused.length === 1 ? 'a report file' : `${refused.length} report files`} (see the errors above).${failure !== null ? ` ${failure}` : ''}`);
     else if (failure !== null) fail(failure);
   } catch (error) {
-    core.setOutput(OUTPUTS.verdict, 'error');
+    try {
+      core.setOutput(OUTPUTS.verdict, 'error');
+    } catch {
+      // GITHUB_OUTPUT cannot take it: the error below is still the one to report.
+    }
     if (error instanceof InputError) {
       if (error.location.file !== undefined) process.stdout.write(`${formatCommand(inputErrorAnnotation(error, prefix))}\n`);
       fail(`fitgate could not run: ${error.describe()}`);

@@ -1087,7 +1087,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4236);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9234);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(2117);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
@@ -1797,11 +1797,10 @@ function encodingError(file, line, utf16) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   aN: () => (/* binding */ forEachBlock),
-/* harmony export */   kD: () => (/* binding */ addProducts),
 /* harmony export */   tp: () => (/* binding */ predictRows)
 /* harmony export */ });
 /* unused harmony export blockRows */
-/* harmony import */ var _kernels_wasm_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5087);
+/* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8667);
 
 /**
  * Rows per block for a design of p columns: about 64 K doubles (512 KiB), at least 64 rows. Small
@@ -1828,61 +1827,8 @@ function forEachBlock(design, data, visit) {
 /** Predictions Phi w for every row of `data`, block by block (length `data.rows`). */
 function predictRows(design, data, w) {
     const out = new Float64Array(data.rows);
-    forEachBlock(design, data, (X, start, m) => addProducts(out, start, X, m, w, design.p));
+    forEachBlock(design, data, (X, start, m) => (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_0__/* .addProducts */ .kD)(out, start, X, m, w, design.p));
     return out;
-}
-/**
- * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block, the terms
- * added one after another in column order (four columns per sweep over the rows, so each
- * output is loaded and stored once per four columns; the sums are those of the plain loop).
- * Columns whose weight is 0 are left out.
- *
- * @param out output (length >= at + m)
- * @param at first output index
- * @param X column-major m x p block
- * @param m rows
- * @param w coefficients (length >= p)
- * @param p columns
- */
-function addProducts(out, at, X, m, w, p) {
-    // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same additions in the same order).
-    const kernels = (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_0__/* .wasmKernels */ .FY)();
-    if (kernels !== null) {
-        (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_0__/* .addProductsInto */ .iT)(kernels, out, at, X, m, w, p);
-        return;
-    }
-    let j = 0;
-    for (; j + 3 < p; j += 4) {
-        if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {
-            for (let q = j; q < j + 4; q++)
-                addColumn(out, at, X, m, w[q], q);
-        }
-        else {
-            addFourColumns(out, at, X, m, w[j], w[j + 1], w[j + 2], w[j + 3], j);
-        }
-    }
-    for (; j < p; j++)
-        addColumn(out, at, X, m, w[j], j);
-}
-// The row loops are functions of their own, each one loop and its return (see DEVELOPERS.md,
-// "Writing hot loops"): the loop over columns above then never runs inside code optimised in
-// the middle of a row loop.
-/** out[at + i] += X[j*m + i] w0 + X[(j+1)*m + i] w1 + X[(j+2)*m + i] w2 + X[(j+3)*m + i] w3, added left to right. */
-function addFourColumns(out, at, X, m, w0, w1, w2, w3, j) {
-    const c0 = j * m;
-    const c1 = c0 + m;
-    const c2 = c1 + m;
-    const c3 = c2 + m;
-    for (let i = 0; i < m; i++)
-        out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
-}
-/** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
-function addColumn(out, at, X, m, wj, j) {
-    if (wj === 0)
-        return;
-    const c = j * m;
-    for (let i = 0; i < m; i++)
-        out[at + i] += X[c + i] * wj;
 }
 
 
@@ -2043,8 +1989,8 @@ function linearTerm(spec) {
 
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
-// EXTERNAL MODULE: ./src/kernels/wasm.ts + 1 modules
-var wasm = __nccwpck_require__(5087);
+// EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
+var kernels = __nccwpck_require__(8667);
 // EXTERNAL MODULE: ./src/design/stats.ts
 var stats = __nccwpck_require__(6801);
 ;// CONCATENATED MODULE: ./src/design/terms/polynomial.ts
@@ -2083,32 +2029,9 @@ function polynomialTerm(spec, training, file) {
         columnNames: names,
         fixed: { shift: s, scale },
         fill(inputs, m, out, offset) {
-            const first = offset * m;
-            // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations).
-            const kernels = (0,wasm/* wasmKernels */.FY)();
-            if (kernels !== null) {
-                (0,wasm/* polynomialColumnsInto */.qO)(kernels, inputs[0], m, s, sc, raw, spec.degree, out, first);
-                return;
-            }
-            if (raw)
-                out.set(inputs[0].subarray(0, m), first);
-            else
-                standardise(inputs[0], m, s, sc, out, first);
-            for (let k = 1; k < spec.degree; k++)
-                multiplyColumns(out, (offset + k - 1) * m, first, (offset + k) * m, m);
+            (0,kernels/* polynomialColumns */.gU)(inputs[0], m, s, sc, raw, spec.degree, out, offset * m);
         },
     };
-}
-// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
-/** out[at + i] = (x[i] - shift) / scale for i < m. */
-function standardise(x, m, shift, scale, out, at) {
-    for (let i = 0; i < m; i++)
-        out[at + i] = (x[i] - shift) / scale;
-}
-/** out[to + i] = out[a + i] * out[b + i] for i < m (the next power from the previous one and z). */
-function multiplyColumns(out, a, b, to, m) {
-    for (let i = 0; i < m; i++)
-        out[to + i] = out[a + i] * out[b + i];
 }
 
 ;// CONCATENATED MODULE: ./src/design/terms/rbf.ts
@@ -2221,7 +2144,7 @@ function createTerm(spec, training, file) {
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2485);
 /* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
-/* harmony import */ var _kernels_wasm_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5087);
+/* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8667);
 
 
 
@@ -2425,42 +2348,13 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
                 t[j * k + f] = bySet[f][j];
         return t;
     });
-    let pred = new Float64Array(0);
-    const column = new Float64Array(p);
-    const kernels = (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_2__/* .wasmKernels */ .FY)();
     (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
-        if (pred.length < m)
-            pred = new Float64Array(m);
         // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
         const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
-        for (let s = 0; s < S; s++) {
-            // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations in the same order).
-            if (kernels !== null) {
-                (0,_kernels_wasm_js__WEBPACK_IMPORTED_MODULE_2__/* .outOfFoldRows */ .e8)(kernels, X, m, p, tables[s], k, foldOf.subarray(start, start + m), single, data.y.subarray(start, start + m), sse[s]);
-                continue;
-            }
-            const W = tables[s];
-            const errors = sse[s];
-            pred.fill(0, 0, m);
-            // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
-            if (single >= 0) {
-                for (let j = 0; j < p; j++)
-                    column[j] = W[j * k + single];
-                (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, column, p);
-            }
-            else {
-                for (let j = 0; j < p; j++) {
-                    const col = j * m;
-                    const base = j * k;
-                    for (let i = 0; i < m; i++)
-                        pred[i] += X[col + i] * W[base + foldOf[start + i]];
-                }
-            }
-            for (let i = 0; i < m; i++) {
-                const r = data.y[start + i] - pred[i];
-                errors[foldOf[start + i]] += r * r;
-            }
-        }
+        const folds = foldOf.subarray(start, start + m);
+        const y = data.y.subarray(start, start + m);
+        for (let s = 0; s < S; s++)
+            (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_2__/* .outOfFoldRows */ .e8)(X, m, p, tables[s], k, folds, single, y, sse[s]);
         visit?.(X, start, m);
     });
     return { sse };
@@ -2543,7 +2437,7 @@ function crossValidate(design, data, fit, folds, options = {}) {
         }
         (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .leveragesInto */ .lG)(fit, X, m, h);
         pred.fill(0, 0, m);
-        (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
+        (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_2__/* .addProducts */ .kD)(pred, 0, X, m, w, p);
         if (out !== undefined)
             out.set(pred.subarray(0, m), start);
         // The sums run in locals and are stored once per block: the same additions in the same order,
@@ -3512,8 +3406,8 @@ class FactorSolver {
     }
 }
 
-// EXTERNAL MODULE: ./src/kernels/wasm.ts + 1 modules
-var wasm = __nccwpck_require__(5087);
+// EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
+var kernels = __nccwpck_require__(8667);
 ;// CONCATENATED MODULE: ./src/fit/qr-accumulator.ts
 /**
  * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
@@ -3532,9 +3426,6 @@ var wasm = __nccwpck_require__(5087);
 
 /** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
 const WORK_NUMBERS = 16384;
-/** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
-const SAFE_SMALL = 1e-150;
-const SAFE_LARGE = 1e150;
 /**
  * Streaming Householder QR: folds row blocks into an upper-triangular p x p factor R, Q^T y and
  * the residual sum of squares.
@@ -3555,9 +3446,7 @@ class qr_accumulator_QrAccumulator {
     #R;
     #qty;
     #rss = 0;
-    /** Work block (column-major, leading dimension `#chunk`) and its right-hand side. */
-    #work;
-    #workY;
+    /** Rows per piece of a fold (the leading dimension of the kernel's work block). */
     #chunk;
     /**
      * @param p number of columns of the design (a non-negative integer)
@@ -3646,254 +3535,18 @@ class qr_accumulator_QrAccumulator {
         copy.#rows = this.#rows;
         return copy;
     }
-    /**
-     * Folds a column-major m x p block in pieces of at most `#chunk` rows: in WebAssembly where it
-     * is in use (wasm-kernels.ts; the same operations in the same order), else below.
-     */
+    /** Folds a column-major m x p block in pieces of at most `#chunk` rows (kernels/qr-fold.ts). */
     #foldAll(X, y, m) {
-        const chunk = this.#chunk;
-        const kernels = (0,wasm/* wasmKernels */.FY)();
-        if (kernels !== null) {
-            const { rss, bad } = (0,wasm/* foldRows */.$8)(kernels, this.#R, this.#qty, this.#rss, X, y, m, this.p, chunk);
-            this.#rss = rss;
-            if (bad !== null)
-                throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
-            return;
-        }
-        for (let start = 0; start < m; start += chunk) {
-            this.#fold(X, m, y, start, Math.min(chunk, m - start));
-        }
-    }
-    /**
-     * Copies rows [start, start + mb) of the column-major block X (leading dimension ldx) into
-     * the work block, checking every value, then annihilates them against R.
-     */
-    #fold(X, ldx, y, start, mb) {
-        const p = this.p;
-        const ld = this.#chunk;
-        if (this.#work === undefined || this.#workY === undefined) {
-            this.#work = new Float64Array(ld * p);
-            this.#workY = new Float64Array(ld);
-        }
-        copyChecked(X, ldx, y, start, mb, p, this.#work, this.#workY, ld);
-        annihilate(this.#R, this.#qty, this.#work, this.#workY, ld, p, mb);
-        // What is left of the block's right-hand side is orthogonal to the column space.
-        this.#rss += qr_accumulator_sumOfSquares(this.#workY, mb);
-    }
-}
-// The kernels below are separate functions, each one loop nest, so that V8 optimises each
-// whole (a loop that first runs after another loop was optimised mid-function has no type
-// feedback and throws the optimised code away, block after block).
-/**
- * Copies rows [start, start + mb) of the column-major X (leading dimension ldx) and of y into C
- * (leading dimension ld) and yc.
- * @throws RangeError naming row and column when a value is NaN or infinite
- */
-function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
-    for (let j = 0; j < p; j++)
-        copyColumnChecked(X, j * ldx + start, C, j * ld, mb, start, j);
-    copyColumnChecked(y, start, yc, 0, mb, start, -1);
-}
-/**
- * Copies mb values from src[from..] to dst[to..] (one loop per function; see DEVELOPERS.md,
- * "Writing hot loops").
- * @param firstRow the row of src[from], for the error
- * @param column the column of X, or -1 for y, for the error
- * @throws RangeError naming row and column when a value is NaN or infinite
- */
-function copyColumnChecked(src, from, dst, to, mb, firstRow, column) {
-    for (let i = 0; i < mb; i++) {
-        const v = src[from + i];
-        if (!Number.isFinite(v))
-            throw notFinite(firstRow + i, column, v);
-        dst[to + i] = v;
+        const { rss, bad } = (0,kernels/* foldRows */.$8)(this.#R, this.#qty, this.#rss, X, y, m, this.p, this.#chunk);
+        this.#rss = rss;
+        if (bad !== null)
+            throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
     }
 }
 /** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
 function notFinite(row, column, value) {
     const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
     return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
-}
-/** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
-function qr_accumulator_sumOfSquares(v, m) {
-    let s = 0;
-    for (let i = 0; i < m; i++)
-        s += v[i] * v[i];
-    return s;
-}
-/**
- * Householder reflections that zero the mb x p block C (leading dimension ld) against the
- * triangular R (p x p, column-major), applied to qty and yc alike. Each step is a function of its
- * own (one loop nest each), so that V8 compiles the small hot pieces separately and soon.
- */
-function annihilate(R, qty, C, yc, ld, p, mb) {
-    for (let j = 0; j < p; j++) {
-        const cj = j * ld;
-        const alpha = R[j * p + j];
-        const beta = reflector(C, cj, mb, alpha);
-        if (Number.isNaN(beta))
-            continue; // nothing to annihilate in this column
-        const tau = (beta - alpha) / beta;
-        let k = j + 1;
-        // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
-        // operations and their order are those of the single-column loop).
-        for (; k + 3 < p; k += 4)
-            reflectFour(R, C, ld, p, j, k, mb, tau);
-        for (; k + 1 < p; k += 2)
-            reflectTwo(R, C, ld, p, j, k, mb, tau);
-        for (; k < p; k++)
-            reflectOne(R, C, ld, p, j, k, mb, tau);
-        reflectTarget(qty, yc, C, cj, mb, tau, j);
-        R[j * p + j] = beta;
-    }
-}
-/**
- * The reflector for column j of [R; C] with a = [alpha; C[cj..cj+mb)]: H = I - tau u u^T with
- * u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]], tau = (beta - alpha) / beta in
- * [1, 2] (the normalisation of LAPACK's dlarfg). Every |u_i| <= 1, so no intermediate overflows or
- * underflows however tiny the column is. Overwrites the column with u's lower part and returns
- * beta; NaN (the column unchanged) when the block part is zero.
- */
-function reflector(C, cj, mb, alpha) {
-    const amax = Math.max(Math.abs(alpha), largestMagnitudeIn(C, cj, mb));
-    if (amax === 0)
-        return Number.NaN;
-    let norm;
-    if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
-        const sigma = sumOfSquaresIn(C, cj, mb); // sum of squares of the block part
-        if (sigma === 0)
-            return Number.NaN;
-        norm = Math.sqrt(alpha * alpha + sigma);
-    }
-    else {
-        const scaled = scaledSumOfSquaresIn(C, cj, mb, amax);
-        if (scaled === 0)
-            return Number.NaN;
-        const a0 = alpha / amax;
-        norm = amax * Math.sqrt(a0 * a0 + scaled);
-    }
-    const beta = alpha >= 0 ? -norm : norm;
-    divideIn(C, cj, mb, alpha - beta);
-    return beta;
-}
-function largestMagnitudeIn(C, from, n) {
-    let amax = 0;
-    for (let i = 0; i < n; i++) {
-        const a = Math.abs(C[from + i]);
-        if (a > amax)
-            amax = a;
-    }
-    return amax;
-}
-function sumOfSquaresIn(C, from, n) {
-    let sigma = 0;
-    for (let i = 0; i < n; i++) {
-        const c = C[from + i];
-        sigma += c * c;
-    }
-    return sigma;
-}
-function scaledSumOfSquaresIn(C, from, n, scale) {
-    let scaled = 0;
-    for (let i = 0; i < n; i++) {
-        const c = C[from + i] / scale;
-        scaled += c * c;
-    }
-    return scaled;
-}
-function divideIn(C, from, n, d) {
-    for (let i = 0; i < n; i++)
-        C[from + i] /= d;
-}
-/** Applies the reflector of column j (u in C's column j) to columns k .. k+3 of [R; C]. */
-function reflectFour(R, C, ld, p, j, k, mb, tau) {
-    const cj = j * ld;
-    const c1 = k * ld;
-    const c2 = c1 + ld;
-    const c3 = c2 + ld;
-    const c4 = c3 + ld;
-    const r1 = k * p + j;
-    let w1 = R[r1];
-    let w2 = R[r1 + p];
-    let w3 = R[r1 + 2 * p];
-    let w4 = R[r1 + 3 * p];
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        w1 += u * C[c1 + i];
-        w2 += u * C[c2 + i];
-        w3 += u * C[c3 + i];
-        w4 += u * C[c4 + i];
-    }
-    const f1 = tau * w1;
-    const f2 = tau * w2;
-    const f3 = tau * w3;
-    const f4 = tau * w4;
-    if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0)
-        return;
-    R[r1] -= f1;
-    R[r1 + p] -= f2;
-    R[r1 + 2 * p] -= f3;
-    R[r1 + 3 * p] -= f4;
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        C[c1 + i] -= f1 * u;
-        C[c2 + i] -= f2 * u;
-        C[c3 + i] -= f3 * u;
-        C[c4 + i] -= f4 * u;
-    }
-}
-/** Applies the reflector of column j to columns k and k+1 of [R; C]. */
-function reflectTwo(R, C, ld, p, j, k, mb, tau) {
-    const cj = j * ld;
-    const ck = k * ld;
-    const ck2 = ck + ld;
-    const rIdx = k * p + j;
-    const rIdx2 = rIdx + p;
-    let w1 = R[rIdx];
-    let w2 = R[rIdx2];
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        w1 += u * C[ck + i];
-        w2 += u * C[ck2 + i];
-    }
-    const f1 = tau * w1;
-    const f2 = tau * w2;
-    if (f1 === 0 && f2 === 0)
-        return;
-    R[rIdx] -= f1;
-    R[rIdx2] -= f2;
-    for (let i = 0; i < mb; i++) {
-        const u = C[cj + i];
-        C[ck + i] -= f1 * u;
-        C[ck2 + i] -= f2 * u;
-    }
-}
-/** Applies the reflector of column j to column k of [R; C]. */
-function reflectOne(R, C, ld, p, j, k, mb, tau) {
-    const cj = j * ld;
-    const ck = k * ld;
-    const rIdx = k * p + j;
-    let w = R[rIdx];
-    for (let i = 0; i < mb; i++)
-        w += C[cj + i] * C[ck + i];
-    const f = tau * w;
-    if (f === 0)
-        return;
-    R[rIdx] -= f;
-    for (let i = 0; i < mb; i++)
-        C[ck + i] -= f * C[cj + i];
-}
-/** Applies the reflector of column j (u in C from cj) to the right-hand side [qty; yc]. */
-function reflectTarget(qty, yc, C, cj, mb, tau, j) {
-    let w = qty[j];
-    for (let i = 0; i < mb; i++)
-        w += C[cj + i] * yc[i];
-    const f = tau * w;
-    if (f === 0)
-        return;
-    qty[j] -= f;
-    for (let i = 0; i < mb; i++)
-        yc[i] -= f * C[cj + i];
 }
 
 ;// CONCATENATED MODULE: ./src/fit/ridge.ts
@@ -4175,24 +3828,11 @@ class RefinementPass {
      */
     addRows(X, y, m) {
         const w = this.#fit.coefficients;
-        const p = w.length;
-        // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
-        const kernels = (0,wasm/* wasmKernels */.FY)();
-        if (kernels !== null) {
-            checkShape(X, y, m, p);
-            const { sumOfSquares: ss, bad } = (0,wasm/* refineRows */.Hb)(kernels, X, y, m, w, this.#gHi, this.#gLo);
-            if (bad !== null)
-                fit_notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
-            this.#rss += ss;
-            return;
-        }
-        checkBlock(X, y, m, p);
-        const hi = new Float64Array(m);
-        const lo = new Float64Array(m);
-        residualsInto(X, y, m, w, hi, lo);
-        this.#rss += qr_accumulator_sumOfSquares(hi, m);
-        for (let j = 0; j < p; j++)
-            addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
+        checkShape(X, y, m, w.length);
+        const { sumOfSquares: ss, bad } = (0,kernels/* refineRows */.Hb)(X, y, m, w, this.#gHi, this.#gLo);
+        if (bad !== null)
+            fit_notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+        this.#rss += ss;
     }
     /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
     finish() {
@@ -4287,58 +3927,7 @@ function leveragesInto(fit, X, m, out) {
         out.set(leverages(fit, X, m));
         return;
     }
-    // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
-    const kernels = (0,wasm/* wasmKernels */.FY)();
-    if (kernels !== null) {
-        (0,wasm/* leverageRows */.fO)(kernels, fit.factor.R, p, X, m, out);
-        return;
-    }
-    const Z = new Float64Array(LEVERAGE_CHUNK * p);
-    for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK)
-        leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
-}
-/** Rows per chunk of {@link leveragesInto} (the chunk's z columns stay in cache). */
-const LEVERAGE_CHUNK = 256;
-/**
- * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
- * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
- * its own so that its loops never run inside code V8 optimised in the middle of another chunk
- * (see DEVELOPERS.md, "Writing hot loops").
- */
-function leverageChunk(R, p, X, m, i0, mb, Z, out) {
-    const CH = LEVERAGE_CHUNK;
-    for (let i = 0; i < mb; i++)
-        out[i0 + i] = 0;
-    for (let j = 0; j < p; j++) {
-        const zj = j * CH;
-        const xj = j * m + i0;
-        for (let i = 0; i < mb; i++)
-            Z[zj + i] = X[xj + i];
-        let k = 0;
-        // Four earlier columns per sweep (the same subtractions in the same order per row).
-        for (; k + 3 < j; k += 4) {
-            const r0 = R[j * p + k];
-            const r1 = R[j * p + k + 1];
-            const r2 = R[j * p + k + 2];
-            const r3 = R[j * p + k + 3];
-            const z0 = k * CH;
-            for (let i = 0; i < mb; i++) {
-                Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
-            }
-        }
-        for (; k < j; k++) {
-            const r = R[j * p + k];
-            const zk = k * CH;
-            for (let i = 0; i < mb; i++)
-                Z[zj + i] -= r * Z[zk + i];
-        }
-        const diag = R[j * p + j];
-        for (let i = 0; i < mb; i++) {
-            const z = Z[zj + i] / diag;
-            Z[zj + i] = z;
-            out[i0 + i] += z * z;
-        }
-    }
+    (0,kernels/* leverageRows */.fO)(fit.factor.R, p, X, m, out);
 }
 /**
  * Predictions X w for m rows of a column-major design.
@@ -4397,7 +3986,7 @@ function hatTrace(data, solver) {
 /** Checks a column-major block and its right-hand side for shape and finiteness. */
 function checkBlock(X, y, m, p) {
     checkShape(X, y, m, p);
-    fit_notFinite(X, y, m, firstNotFinite(X, m * p), y === undefined ? -1 : firstNotFinite(y, m));
+    fit_notFinite(X, y, m, (0,kernels/* firstNotFinite */.vN)(X, m * p), y === undefined ? -1 : (0,kernels/* firstNotFinite */.vN)(y, m));
 }
 /** Checks the shapes of a column-major block and its right-hand side. */
 function checkShape(X, y, m, p) {
@@ -4417,68 +4006,6 @@ function fit_notFinite(X, y, m, k, i) {
         throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
     if (i >= 0 && y !== undefined)
         throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
-}
-// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
-// "Writing hot loops").
-/** Index of the first NaN or infinite value among v[0..n), or -1. */
-function firstNotFinite(v, n) {
-    for (let i = 0; i < n; i++)
-        if (!Number.isFinite(v[i]))
-            return i;
-    return -1;
-}
-/**
- * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
- * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
- */
-function addColumnDot2(X, col, m, hi, lo, gHi, gLo, j) {
-    let sum = gHi[j];
-    let comp = gLo[j];
-    for (let i = 0; i < m; i++) {
-        const a = X[col + i];
-        const prod = a * hi[i];
-        const t = sum + prod;
-        const z = t - sum;
-        comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
-        sum = t;
-    }
-    gHi[j] = sum;
-    gLo[j] = comp;
-}
-/**
- * r = y - X w for a column-major m x p block as double-double numbers hi + lo (written to the
- * length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
- */
-function residualsInto(X, y, m, w, hi, lo) {
-    const p = w.length;
-    for (let i = 0; i < m; i++) {
-        let s = y[i];
-        let c = 0;
-        for (let j = 0; j < p; j++) {
-            const a = -X[j * m + i];
-            const prod = a * w[j];
-            const t = s + prod;
-            const z = t - s;
-            c += s - (t - z) + (prod - z) + twoProductError(a, w[j], prod);
-            s = t;
-        }
-        // Renormalise (s, c) into hi + lo with |lo| <= ulp(hi) / 2 (TwoSum).
-        const h = s + c;
-        const z = h - s;
-        hi[i] = h;
-        lo[i] = s - (h - z) + (c - z);
-    }
-}
-/** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */
-function twoProductError(a, b, prod) {
-    const SPLIT = 134217729; // 2^27 + 1
-    let t = SPLIT * a;
-    const ah = t - (t - a);
-    const al = a - ah;
-    t = SPLIT * b;
-    const bh = t - (t - b);
-    const bl = b - bh;
-    return al * bl - (prod - ah * bh - ah * bl - al * bh);
 }
 
 
@@ -4645,23 +4172,25 @@ function zeroSvd(m, k, vectors) {
 
 /***/ }),
 
-/***/ 5087:
+/***/ 8667:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
-  iT: () => (/* binding */ addProductsInto),
-  b5: () => (/* binding */ firstBeyondIn),
-  $8: () => (/* binding */ foldRows),
-  fO: () => (/* binding */ leverageRows),
-  e8: () => (/* binding */ outOfFoldRows),
-  qO: () => (/* binding */ polynomialColumnsInto),
-  Hb: () => (/* binding */ refineRows),
-  FY: () => (/* binding */ wasmKernels)
+  kD: () => (/* reexport */ addProducts),
+  gy: () => (/* reexport */ firstBeyond),
+  vN: () => (/* reexport */ firstNotFinite),
+  $8: () => (/* reexport */ foldRows),
+  TJ: () => (/* reexport */ kernelNotes),
+  fO: () => (/* reexport */ leverageRows),
+  e8: () => (/* reexport */ outOfFoldRows),
+  gU: () => (/* reexport */ polynomialColumns),
+  YK: () => (/* reexport */ recordKernelNotes),
+  Hb: () => (/* reexport */ refineRows)
 });
 
-// UNUSED EXPORTS: useWasmKernels
+// UNUSED EXPORTS: KERNEL_FALLBACK_NOTE, kernelEngine, residualsInto, sumOfSquares, useWasmKernels
 
 ;// CONCATENATED MODULE: ./src/kernels/generated/kernels-wasm.ts
 // Generated by test/tools/gen-wasm.mjs from src/kernels/kernels.wat; do not edit.
@@ -4723,82 +4252,194 @@ const KERNELS_WASM = 'AGFzbQEAAAABkAEQYAJ/fwF/YAN/f38Bf2ACf38BfGADf398AXxgA39/fA
 
 ;// CONCATENATED MODULE: ./src/kernels/wasm.ts
 /**
- * The row kernels of kernels.wat (the QR fold, the refinement pass, leverages, predictions,
- * out-of-fold errors, polynomial columns and the design's range check), compiled once per
- * thread, and the wrappers that copy arrays into the module's memory and back. Each kernel
- * computes what the JavaScript it stands in for computes, to the bit; the JavaScript stays as the
- * fallback where WebAssembly is not available (`node --jitless`) or turned off
- * ({@link useWasmKernels}), and as the reference the tests compare with.
- *
- * Why: a small model's row loops run once or twice over a few thousand rows, mostly in V8's
- * interpreter, which boxes every floating-point result; WebAssembly is compiled before its first
- * call. On the S workload of `npm run bench` (2,000 rows, 11 columns) a whole run takes about
- * 30 ms less with them, M and L less too (see the README, "Benchmark").
+ * The WebAssembly module of the row kernels (kernels.wat, assembled into generated/): compiled
+ * and instantiated once per thread by engine.ts, and the one piece of its memory every kernel
+ * copies its arrays into and back out of. The two places that reserve memory (instantiating the
+ * module and growing its memory) turn a failure into a {@link ResourceFault}, which engine.ts
+ * answers by running the JavaScript kernels instead.
  */
 
 /** This runtime's WebAssembly, or undefined (`node --jitless` has none). */
 const WASM = globalThis.WebAssembly;
+/** True where this runtime has WebAssembly. */
+const wasm_WASM_AVAILABLE = WASM !== undefined;
+/**
+ * WebAssembly memory could not be reserved (the module's instance or a larger memory): the
+ * RangeError V8 throws under a low `ulimit -v`, for instance. Nothing outside the module's
+ * memory was changed when it is thrown.
+ */
+class ResourceFault extends Error {
+    name = 'ResourceFault';
+    /** @param cause the RangeError of the WebAssembly API */
+    constructor(cause) {
+        super(cause.message, { cause });
+    }
+}
 /** WebAssembly's page size in bytes. */
 const PAGE = 65536;
-let kernels = null;
-let enabled = WASM !== undefined;
+/** Memory requests left before the injected fault ({@link injectMemoryFault}); -1: none. */
+let faultIn = -1;
 /**
- * Whether the fit uses the WebAssembly kernels (default: when WebAssembly is available). Tests
- * turn them off to run the JavaScript kernels on the same data.
- * @param on true to use them (ignored where WebAssembly is not available), false for JavaScript
- * @returns whether they were in use before
+ * Compiles and instantiates the module.
+ * @returns its exports, or null where this runtime has no WebAssembly
+ * @throws ResourceFault when the instance's memory cannot be reserved
  */
-function useWasmKernels(on) {
-    const before = enabled;
-    enabled = on && WASM !== undefined;
-    return before;
-}
-/** The kernels, compiled on first use; null when they are not in use. */
-function wasmKernels() {
-    if (!enabled || WASM === undefined)
+function instantiateKernels() {
+    if (WASM === undefined)
         return null;
-    if (kernels === null)
-        kernels = new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports;
-    return kernels;
+    try {
+        return new WASM.Instance(new WASM.Module(Buffer.from(KERNELS_WASM, 'base64'))).exports;
+    }
+    catch (error) {
+        if (error instanceof RangeError)
+            throw new ResourceFault(error);
+        throw error;
+    }
 }
-/** A view of the module's memory with room for at least `doubles` float64 values. */
+/**
+ * A view of the module's memory with room for at least `doubles` float64 values from address 0,
+ * growing the memory when it is smaller. Every kernel asks for it before it changes anything.
+ * @throws ResourceFault when the memory cannot grow
+ */
 function heap(k, doubles) {
+    if (faultIn >= 0 && faultIn-- === 0)
+        throw new ResourceFault(new RangeError('WebAssembly.Memory.grow(): injected by a test'));
     const bytes = doubles * 8;
     const have = k.memory.buffer.byteLength;
-    if (bytes > have)
-        k.memory.grow(Math.ceil((bytes - have) / PAGE));
+    if (bytes > have) {
+        try {
+            k.memory.grow(Math.ceil((bytes - have) / PAGE));
+        }
+        catch (error) {
+            if (error instanceof RangeError)
+                throw new ResourceFault(error);
+            throw error;
+        }
+    }
     return new Float64Array(k.memory.buffer, 0, doubles);
 }
 /**
- * Folds the m rows of a column-major block into [R; qty] (QrAccumulator's fold, in pieces of
- * `chunk` rows). R (p x p) and qty (p) are updated in place.
- * @param rss the residual sum of squares so far
- * @returns the new residual sum of squares, and where a value was not finite (null when none
- *   was; the pieces before it are folded, as the JavaScript leaves them)
+ * Tests: makes a later request for the module's memory fail as a memory that cannot grow does.
+ * @param after requests that still succeed first (0: the next one fails); -1 cancels
  */
-function foldRows(k, R, qty, rss, X, y, m, p, chunk) {
-    const oQty = p * p;
-    const oX = oQty + p;
-    const oY = oX + m * p;
-    const oC = oY + m;
-    const oYc = oC + chunk * p;
-    const f = heap(k, oYc + chunk);
-    f.set(R);
-    f.set(qty, oQty);
-    f.set(X.subarray(0, m * p), oX);
-    f.set(y.subarray(0, m), oY);
-    k.rss.value = rss;
-    const status = k.fold(0, oQty * 8, oX * 8, oY * 8, m, p, oC * 8, oYc * 8, chunk);
-    R.set(f.subarray(0, oQty));
-    qty.set(f.subarray(oQty, oQty + p));
-    const bad = status === 0 ? null : { row: k.badRow.value, column: k.badColumn.value };
-    return { rss: k.rss.value, bad };
+function injectMemoryFault(after) {
+    faultIn = after;
+}
+
+;// CONCATENATED MODULE: ./src/kernels/engine.ts
+/**
+ * The one choice between the WebAssembly kernels and the JavaScript ones, made per thread: the
+ * WebAssembly where this runtime has it (compiled on the first kernel call), the JavaScript where
+ * it has not (`node --jitless`) or a test turned it off. When WebAssembly memory cannot be
+ * reserved (a low `ulimit -v`), the kernel that asked runs in JavaScript instead and so does every
+ * later one in the thread; {@link kernelNotes} then holds one note for the run's Result. The
+ * figures do not change: each WebAssembly kernel does its JavaScript reference's operations in the
+ * same order (test/kernels/wasm-kernels.test.ts compares the bits).
+ */
+
+/** The note a run's Result gets when the kernels fell back to JavaScript. */
+const KERNEL_FALLBACK_NOTE = 'WebAssembly memory could not be reserved (a low virtual-memory limit such as `ulimit -v` does this), so the row kernels ran in JavaScript: the same figures, more slowly.';
+/** Whether to use WebAssembly (false after a fallback, or when a test turned it off). */
+let wanted = wasm_WASM_AVAILABLE;
+/** The module's exports once compiled. */
+let kernels = null;
+/** Notes of this thread's fallback and of those other threads reported ({@link recordKernelNotes}). */
+const notes = [];
+/** JavaScript from now on in this thread, with its note. */
+function fallBack() {
+    wanted = false;
+    kernels = null;
+    if (!notes.includes(KERNEL_FALLBACK_NOTE))
+        notes.push(KERNEL_FALLBACK_NOTE);
+}
+/** The compiled module when WebAssembly is in use, else null (falling back when it cannot be instantiated). */
+function current() {
+    if (!wanted)
+        return null;
+    if (kernels === null) {
+        try {
+            kernels = instantiateKernels();
+        }
+        catch (error) {
+            if (!(error instanceof ResourceFault))
+                throw error;
+            fallBack();
+        }
+    }
+    return kernels;
 }
 /**
- * Leverages of the m rows of a column-major block under a full-rank factor R (p x p):
- * out[i] = || R^-T x_i ||^2 for i < m.
+ * A kernel's facade function: runs `wasm` where WebAssembly is in use, else `js`, and `js` when
+ * `wasm` cannot reserve its memory (it throws a {@link ResourceFault} before it changes any of
+ * its arguments, so `js` starts from the same inputs). Any other error is passed on.
+ * @param wasm the WebAssembly wrapper (copies in, runs the module's function, copies out)
+ * @param js the JavaScript reference, with the same parameters and result
  */
-function leverageRows(k, R, p, X, m, out) {
+function facade(wasm, js) {
+    return (...args) => {
+        const k = current();
+        if (k !== null) {
+            try {
+                return wasm(k, ...args);
+            }
+            catch (error) {
+                if (!(error instanceof ResourceFault))
+                    throw error;
+                fallBack();
+            }
+        }
+        return js(...args);
+    };
+}
+/** The kernels the next call runs in this thread (compiling the module when it is not yet). */
+function kernelEngine() {
+    return current() === null ? 'javascript' : 'webassembly';
+}
+/**
+ * Tests: turns the WebAssembly kernels on (where the runtime has WebAssembly) or off for this
+ * thread, forgetting an earlier fallback and its note.
+ * @param on true for WebAssembly, false for JavaScript
+ * @returns whether WebAssembly was wanted before
+ */
+function useWasmKernels(on) {
+    const before = wanted;
+    wanted = on && WASM_AVAILABLE;
+    notes.length = 0;
+    return before;
+}
+/** Notes about the kernels for the run's Result: empty, or the one {@link KERNEL_FALLBACK_NOTE}. */
+function kernelNotes() {
+    return [...notes];
+}
+/**
+ * Adds the kernel notes another thread reported (a model worker's), each once.
+ * @param more that thread's {@link kernelNotes}
+ */
+function recordKernelNotes(more) {
+    for (const note of more)
+        if (!notes.includes(note))
+            notes.push(note);
+}
+
+;// CONCATENATED MODULE: ./src/kernels/leverages.ts
+/**
+ * Leverages of a block of rows under a full-rank triangular factor: h_i = || R^-T x_i ||^2, by
+ * forward substitution run down whole columns a few hundred rows at a time (fit/index.ts,
+ * leveragesInto, says what they are). In WebAssembly where it is in use (kernels.wat,
+ * `leverages`), else in JavaScript ({@link leverageRowsJs}, the reference).
+ */
+
+
+/** Rows per chunk of the JavaScript (the chunk's z columns stay in cache). */
+const LEVERAGE_CHUNK = 256;
+/** The JavaScript reference of {@link leverageRows}. */
+function leverageRowsJs(R, p, X, m, out) {
+    const Z = new Float64Array(LEVERAGE_CHUNK * p);
+    for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK)
+        leverageChunk(R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
+}
+/** {@link leverageRows} in WebAssembly: the same operations in the same order per row. */
+function leverageRowsWasm(k, R, p, X, m, out) {
     const oX = p * p;
     const oZ = oX + m * p;
     const oOut = oZ + m * p;
@@ -4809,12 +4450,583 @@ function leverageRows(k, R, p, X, m, out) {
     out.set(f.subarray(oOut, oOut + m));
 }
 /**
- * One block of the refinement pass: checks X (m x p, column-major) and y for finiteness, then
- * adds each column's compensated dot product with the residuals y - X w to (gHi, gLo), in place.
- * @returns the sum of squares of the residuals' high parts, or where a value is not finite
- *   (nothing added then)
+ * Leverages of the m rows of a column-major m x p block X under a full-rank upper-triangular R
+ * (p x p, column-major): out[i] = || R^-T x_i ||^2 for i < m (out has length >= m). No
+ * finiteness check.
  */
-function refineRows(k, X, y, m, w, gHi, gLo) {
+const leverageRows = facade(leverageRowsWasm, leverageRowsJs);
+/**
+ * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
+ * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
+ * its own so that its loops never run inside code V8 optimised in the middle of another chunk
+ * (see DEVELOPERS.md, "Writing hot loops").
+ */
+function leverageChunk(R, p, X, m, i0, mb, Z, out) {
+    const CH = LEVERAGE_CHUNK;
+    for (let i = 0; i < mb; i++)
+        out[i0 + i] = 0;
+    for (let j = 0; j < p; j++) {
+        const zj = j * CH;
+        const xj = j * m + i0;
+        for (let i = 0; i < mb; i++)
+            Z[zj + i] = X[xj + i];
+        let k = 0;
+        // Four earlier columns per sweep (the same subtractions in the same order per row).
+        for (; k + 3 < j; k += 4) {
+            const r0 = R[j * p + k];
+            const r1 = R[j * p + k + 1];
+            const r2 = R[j * p + k + 2];
+            const r3 = R[j * p + k + 3];
+            const z0 = k * CH;
+            for (let i = 0; i < mb; i++) {
+                Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
+            }
+        }
+        for (; k < j; k++) {
+            const r = R[j * p + k];
+            const zk = k * CH;
+            for (let i = 0; i < mb; i++)
+                Z[zj + i] -= r * Z[zk + i];
+        }
+        const diag = R[j * p + j];
+        for (let i = 0; i < mb; i++) {
+            const z = Z[zj + i] / diag;
+            Z[zj + i] = z;
+            out[i0 + i] += z * z;
+        }
+    }
+}
+
+;// CONCATENATED MODULE: ./src/kernels/products.ts
+/**
+ * Predictions of a block of rows: out[at + i] += sum_j X[j*m + i] w[j] for a column-major m x p
+ * block, the columns added one after another, those whose weight is 0 left out. In WebAssembly
+ * where it is in use (kernels.wat, `addProducts`), else in JavaScript ({@link addProductsJs}, the
+ * reference).
+ */
+
+
+/**
+ * The JavaScript reference of {@link addProducts}: four columns per sweep over the rows, so each
+ * output is loaded and stored once per four columns (the sums are those of the plain loop).
+ */
+function addProductsJs(out, at, X, m, w, p) {
+    let j = 0;
+    for (; j + 3 < p; j += 4) {
+        if (w[j] === 0 || w[j + 1] === 0 || w[j + 2] === 0 || w[j + 3] === 0) {
+            for (let q = j; q < j + 4; q++)
+                addColumn(out, at, X, m, w[q], q);
+        }
+        else {
+            addFourColumns(out, at, X, m, w[j], w[j + 1], w[j + 2], w[j + 3], j);
+        }
+    }
+    for (; j < p; j++)
+        addColumn(out, at, X, m, w[j], j);
+}
+/** {@link addProducts} in WebAssembly: the same additions in the same order. */
+function addProductsWasm(k, out, at, X, m, w, p) {
+    const oX = m;
+    const oW = oX + m * p;
+    const f = heap(k, oW + p);
+    f.set(out.subarray(at, at + m));
+    f.set(X.subarray(0, m * p), oX);
+    for (let j = 0; j < p; j++)
+        f[oW + j] = w[j];
+    k.addProducts(0, oX * 8, m, oW * 8, p);
+    out.set(f.subarray(0, m), at);
+}
+/**
+ * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block, the terms
+ * added one after another in column order. Columns whose weight is 0 are left out (so an
+ * infinite design value in such a column adds nothing, not NaN).
+ *
+ * @param out output (length >= at + m)
+ * @param at first output index
+ * @param X column-major m x p block
+ * @param m rows
+ * @param w coefficients (length >= p)
+ * @param p columns
+ */
+const addProducts = facade(addProductsWasm, addProductsJs);
+// The row loops are functions of their own, each one loop and its return (see DEVELOPERS.md,
+// "Writing hot loops"): the loop over columns above then never runs inside code optimised in
+// the middle of a row loop.
+/** out[at + i] += X[j*m + i] w0 + X[(j+1)*m + i] w1 + X[(j+2)*m + i] w2 + X[(j+3)*m + i] w3, added left to right. */
+function addFourColumns(out, at, X, m, w0, w1, w2, w3, j) {
+    const c0 = j * m;
+    const c1 = c0 + m;
+    const c2 = c1 + m;
+    const c3 = c2 + m;
+    for (let i = 0; i < m; i++)
+        out[at + i] = out[at + i] + X[c0 + i] * w0 + X[c1 + i] * w1 + X[c2 + i] * w2 + X[c3 + i] * w3;
+}
+/** out[at + i] += X[j*m + i] wj; nothing for wj = 0 (so an infinite design value in a column with weight 0 adds nothing, not NaN). */
+function addColumn(out, at, X, m, wj, j) {
+    if (wj === 0)
+        return;
+    const c = j * m;
+    for (let i = 0; i < m; i++)
+        out[at + i] += X[c + i] * wj;
+}
+
+;// CONCATENATED MODULE: ./src/kernels/out-of-fold.ts
+/**
+ * Squared out-of-fold errors of a block of rows for one coefficient setting
+ * (diagnostics/cross-validation.ts, outOfFoldErrors): each row is predicted with the coefficients
+ * fitted without its fold, and (y - prediction)^2 is added to its fold's sum, in row order. In
+ * WebAssembly where it is in use (kernels.wat, `outOfFold`), else in JavaScript
+ * ({@link outOfFoldRowsJs}, the reference).
+ */
+
+
+
+/** The JavaScript's predictions and one fold's coefficients (grown as needed; never re-entered). */
+let pred = new Float64Array(0);
+let column = new Float64Array(0);
+/** The JavaScript reference of {@link outOfFoldRows}. */
+function outOfFoldRowsJs(X, m, p, W, kFolds, folds, single, y, errors) {
+    if (pred.length < m)
+        pred = new Float64Array(m);
+    if (column.length < p)
+        column = new Float64Array(p);
+    pred.fill(0, 0, m);
+    if (single >= 0) {
+        // Every row of one fold: its coefficients, zero weights left out as in addProducts.
+        for (let j = 0; j < p; j++)
+            column[j] = W[j * kFolds + single];
+        addProductsJs(pred, 0, X, m, column, p);
+    }
+    else {
+        // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
+        for (let j = 0; j < p; j++)
+            addFoldColumn(pred, X, j * m, W, j * kFolds, folds, m);
+    }
+    addSquaredErrors(errors, y, pred, folds, m);
+}
+/** {@link outOfFoldRows} in WebAssembly: the same operations in the same order. */
+function outOfFoldRowsWasm(k, X, m, p, W, kFolds, folds, single, y, errors) {
+    const oW = m * p;
+    const oY = oW + p * kFolds;
+    const oPred = oY + m;
+    const oColumn = oPred + m;
+    const oErrors = oColumn + p;
+    const oFolds = oErrors + kFolds;
+    const f = heap(k, oFolds + Math.ceil(m / 2));
+    f.set(X.subarray(0, m * p));
+    f.set(W.subarray(0, p * kFolds), oW);
+    f.set(y.subarray(0, m), oY);
+    for (let q = 0; q < kFolds; q++)
+        f[oErrors + q] = errors[q];
+    new Int32Array(f.buffer, oFolds * 8, m).set(folds.subarray(0, m));
+    k.outOfFold(0, m, p, oW * 8, kFolds, oFolds * 8, single, oY * 8, oPred * 8, oColumn * 8, oErrors * 8);
+    for (let q = 0; q < kFolds; q++)
+        errors[q] = f[oErrors + q];
+}
+/**
+ * Adds one block's squared out-of-fold errors to errors[f] for one setting.
+ * @param X column-major m x p block
+ * @param W coefficient j fitted without fold f at W[j * kFolds + f] (length >= p kFolds)
+ * @param folds the fold of each of the m rows
+ * @param single the fold of every row, or -1 when they differ
+ * @param y the m rows' targets
+ * @param errors per fold (length kFolds), added to in place
+ */
+const outOfFoldRows = facade(outOfFoldRowsWasm, outOfFoldRowsJs);
+// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** pred[i] += X[col + i] * W[base + folds[i]] for i < m. */
+function addFoldColumn(pred, X, col, W, base, folds, m) {
+    for (let i = 0; i < m; i++)
+        pred[i] += X[col + i] * W[base + folds[i]];
+}
+/** errors[folds[i]] += (y[i] - pred[i])^2 for i < m, in row order. */
+function addSquaredErrors(errors, y, pred, folds, m) {
+    for (let i = 0; i < m; i++) {
+        const r = y[i] - pred[i];
+        errors[folds[i]] += r * r;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/kernels/polynomial-columns.ts
+/**
+ * The columns of a polynomial term (design/terms/polynomial.ts): z = (x - shift) / scale (x itself
+ * when raw), then its powers by repeated multiplication (z^k = z^(k-1) * z). In WebAssembly where
+ * it is in use (kernels.wat, `polynomialColumns`), else in JavaScript ({@link polynomialColumnsJs},
+ * the reference).
+ */
+
+
+/** The JavaScript reference of {@link polynomialColumns}. */
+function polynomialColumnsJs(x, m, shift, scale, raw, degree, out, at) {
+    if (raw)
+        out.set(x.subarray(0, m), at);
+    else
+        standardise(x, m, shift, scale, out, at);
+    for (let k = 1; k < degree; k++)
+        multiplyColumns(out, at + (k - 1) * m, at, at + k * m, m);
+}
+/** {@link polynomialColumns} in WebAssembly: the same operations. */
+function polynomialColumnsWasm(k, x, m, shift, scale, raw, degree, out, at) {
+    const oOut = m;
+    const f = heap(k, oOut + degree * m);
+    f.set(x.subarray(0, m));
+    k.polynomialColumns(0, m, shift, scale, raw ? 1 : 0, degree, oOut * 8);
+    out.set(f.subarray(oOut, oOut + degree * m), at);
+}
+/**
+ * The `degree` columns of a polynomial term for x[0..m), written to out from `at` (column k at
+ * at + k m, k = 0 .. degree-1): z = (x - shift) / scale, or x itself when `raw`, then z^2, z^3, ...
+ * @param out length >= at + degree m
+ */
+const polynomialColumns = facade(polynomialColumnsWasm, polynomialColumnsJs);
+// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/** out[at + i] = (x[i] - shift) / scale for i < m. */
+function standardise(x, m, shift, scale, out, at) {
+    for (let i = 0; i < m; i++)
+        out[at + i] = (x[i] - shift) / scale;
+}
+/** out[to + i] = out[a + i] * out[b + i] for i < m (the next power from the previous one and z). */
+function multiplyColumns(out, a, b, to, m) {
+    for (let i = 0; i < m; i++)
+        out[to + i] = out[a + i] * out[b + i];
+}
+
+;// CONCATENATED MODULE: ./src/kernels/qr-fold.ts
+/**
+ * The QR fold: Householder reflections that fold a column-major block of rows (and its
+ * right-hand side) into a triangular factor [R; qty], in pieces of a fixed number of rows, with
+ * the sum of squares of what leaves the top p rows added to the residual sum of squares
+ * (fit/qr-accumulator.ts holds the state and says where the method comes from). In WebAssembly
+ * where it is in use (kernels.wat, `fold`), else in JavaScript ({@link foldRowsJs}, the reference).
+ */
+
+
+/** Sums of squares in this range are computed without rescaling (no overflow or underflow). */
+const SAFE_SMALL = 1e-150;
+const SAFE_LARGE = 1e150;
+/** The work block of the JavaScript fold (grown as needed; the fold is never re-entered). */
+let work = new Float64Array(0);
+let workY = new Float64Array(0);
+/**
+ * The JavaScript reference of {@link foldRows}: for each piece of at most `chunk` rows, copies it
+ * into the work block (leading dimension `chunk`) checking every value, annihilates it against R,
+ * and adds the sum of squares of what is left of its right-hand side.
+ */
+function foldRowsJs(R, qty, rss, X, y, m, p, chunk) {
+    const ld = chunk;
+    if (work.length < ld * p)
+        work = new Float64Array(ld * p);
+    if (workY.length < ld)
+        workY = new Float64Array(ld);
+    let sum = rss;
+    for (let start = 0; start < m; start += chunk) {
+        const mb = Math.min(chunk, m - start);
+        const bad = copyChecked(X, m, y, start, mb, p, work, workY, ld);
+        if (bad !== null)
+            return { rss: sum, bad };
+        annihilate(R, qty, work, workY, ld, p, mb);
+        // What is left of the piece's right-hand side is orthogonal to the column space.
+        sum += sumOfSquares(workY, mb);
+    }
+    return { rss: sum, bad: null };
+}
+/** {@link foldRows} in WebAssembly: the same operations in the same order. */
+function foldRowsWasm(k, R, qty, rss, X, y, m, p, chunk) {
+    const oQty = p * p;
+    const oX = oQty + p;
+    const oY = oX + m * p;
+    const oC = oY + m;
+    const oYc = oC + chunk * p;
+    const f = heap(k, oYc + chunk);
+    f.set(R.subarray(0, oQty));
+    f.set(qty.subarray(0, p), oQty);
+    f.set(X.subarray(0, m * p), oX);
+    f.set(y.subarray(0, m), oY);
+    k.rss.value = rss;
+    const status = k.fold(0, oQty * 8, oX * 8, oY * 8, m, p, oC * 8, oYc * 8, chunk);
+    R.set(f.subarray(0, oQty));
+    qty.set(f.subarray(oQty, oQty + p));
+    const bad = status === 0 ? null : { row: k.badRow.value, column: k.badColumn.value };
+    return { rss: k.rss.value, bad };
+}
+/**
+ * Folds the m rows of a column-major m x p block X and their right-hand side y into the
+ * triangular R (p x p, column-major) and qty (p), in place, in pieces of `chunk` rows.
+ * @param rss the residual sum of squares so far
+ * @param chunk rows per piece (at least 1): also the work block's leading dimension
+ * @returns the new residual sum of squares, and where a value was not finite (null when none
+ *   was; the pieces before it are folded, that piece and the rest are not)
+ */
+const foldRows = facade(foldRowsWasm, foldRowsJs);
+// The loops below are separate functions, each one loop nest, so that V8 optimises each whole
+// (a loop that first runs after another loop was optimised mid-function has no type feedback and
+// throws the optimised code away, block after block; see DEVELOPERS.md, "Writing hot loops").
+/**
+ * Copies rows [start, start + mb) of the column-major X (leading dimension ldx) and of y into C
+ * (leading dimension ld) and yc.
+ * @returns where the first value that is not finite is (columns in order, then y), or null
+ */
+function copyChecked(X, ldx, y, start, mb, p, C, yc, ld) {
+    for (let j = 0; j < p; j++) {
+        const at = copyColumnChecked(X, j * ldx + start, C, j * ld, mb);
+        if (at >= 0)
+            return { row: start + at, column: j };
+    }
+    const at = copyColumnChecked(y, start, yc, 0, mb);
+    return at >= 0 ? { row: start + at, column: -1 } : null;
+}
+/**
+ * Copies mb values from src[from..] to dst[to..], stopping at the first that is not finite.
+ * @returns its index among the mb, or -1
+ */
+function copyColumnChecked(src, from, dst, to, mb) {
+    for (let i = 0; i < mb; i++) {
+        const v = src[from + i];
+        if (!Number.isFinite(v))
+            return i;
+        dst[to + i] = v;
+    }
+    return -1;
+}
+/** Sum of squares of v[0..m), in order (one loop; shared by the fit's passes). */
+function sumOfSquares(v, m) {
+    let s = 0;
+    for (let i = 0; i < m; i++)
+        s += v[i] * v[i];
+    return s;
+}
+/**
+ * Householder reflections that zero the mb x p block C (leading dimension ld) against the
+ * triangular R (p x p, column-major), applied to qty and yc alike. Each step is a function of its
+ * own (one loop nest each), so that V8 compiles the small hot pieces separately and soon.
+ */
+function annihilate(R, qty, C, yc, ld, p, mb) {
+    for (let j = 0; j < p; j++) {
+        const cj = j * ld;
+        const alpha = R[j * p + j];
+        const beta = reflector(C, cj, mb, alpha);
+        if (Number.isNaN(beta))
+            continue; // nothing to annihilate in this column
+        const tau = (beta - alpha) / beta;
+        let k = j + 1;
+        // Four, then two columns at a time: each u_i is loaded once for all of them (per column the
+        // operations and their order are those of the single-column loop).
+        for (; k + 3 < p; k += 4)
+            reflectFour(R, C, ld, p, j, k, mb, tau);
+        for (; k + 1 < p; k += 2)
+            reflectTwo(R, C, ld, p, j, k, mb, tau);
+        for (; k < p; k++)
+            reflectOne(R, C, ld, p, j, k, mb, tau);
+        reflectTarget(qty, yc, C, cj, mb, tau, j);
+        R[j * p + j] = beta;
+    }
+}
+/**
+ * The reflector for column j of [R; C] with a = [alpha; C[cj..cj+mb)]: H = I - tau u u^T with
+ * u = v / v0 = [1; C[:, j] / v0], v = [alpha - beta; C[:, j]], tau = (beta - alpha) / beta in
+ * [1, 2] (the normalisation of LAPACK's dlarfg). Every |u_i| <= 1, so no intermediate overflows or
+ * underflows however tiny the column is. Overwrites the column with u's lower part and returns
+ * beta; NaN (the column unchanged) when the block part is zero.
+ */
+function reflector(C, cj, mb, alpha) {
+    const amax = Math.max(Math.abs(alpha), largestMagnitudeIn(C, cj, mb));
+    if (amax === 0)
+        return Number.NaN;
+    let norm;
+    if (amax > SAFE_SMALL && amax < SAFE_LARGE) {
+        const sigma = sumOfSquaresIn(C, cj, mb); // sum of squares of the block part
+        if (sigma === 0)
+            return Number.NaN;
+        norm = Math.sqrt(alpha * alpha + sigma);
+    }
+    else {
+        const scaled = scaledSumOfSquaresIn(C, cj, mb, amax);
+        if (scaled === 0)
+            return Number.NaN;
+        const a0 = alpha / amax;
+        norm = amax * Math.sqrt(a0 * a0 + scaled);
+    }
+    const beta = alpha >= 0 ? -norm : norm;
+    divideIn(C, cj, mb, alpha - beta);
+    return beta;
+}
+function largestMagnitudeIn(C, from, n) {
+    let amax = 0;
+    for (let i = 0; i < n; i++) {
+        const a = Math.abs(C[from + i]);
+        if (a > amax)
+            amax = a;
+    }
+    return amax;
+}
+function sumOfSquaresIn(C, from, n) {
+    let sigma = 0;
+    for (let i = 0; i < n; i++) {
+        const c = C[from + i];
+        sigma += c * c;
+    }
+    return sigma;
+}
+function scaledSumOfSquaresIn(C, from, n, scale) {
+    let scaled = 0;
+    for (let i = 0; i < n; i++) {
+        const c = C[from + i] / scale;
+        scaled += c * c;
+    }
+    return scaled;
+}
+function divideIn(C, from, n, d) {
+    for (let i = 0; i < n; i++)
+        C[from + i] /= d;
+}
+/** Applies the reflector of column j (u in C's column j) to columns k .. k+3 of [R; C]. */
+function reflectFour(R, C, ld, p, j, k, mb, tau) {
+    const cj = j * ld;
+    const c1 = k * ld;
+    const c2 = c1 + ld;
+    const c3 = c2 + ld;
+    const c4 = c3 + ld;
+    const r1 = k * p + j;
+    let w1 = R[r1];
+    let w2 = R[r1 + p];
+    let w3 = R[r1 + 2 * p];
+    let w4 = R[r1 + 3 * p];
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        w1 += u * C[c1 + i];
+        w2 += u * C[c2 + i];
+        w3 += u * C[c3 + i];
+        w4 += u * C[c4 + i];
+    }
+    const f1 = tau * w1;
+    const f2 = tau * w2;
+    const f3 = tau * w3;
+    const f4 = tau * w4;
+    if (f1 === 0 && f2 === 0 && f3 === 0 && f4 === 0)
+        return;
+    R[r1] -= f1;
+    R[r1 + p] -= f2;
+    R[r1 + 2 * p] -= f3;
+    R[r1 + 3 * p] -= f4;
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        C[c1 + i] -= f1 * u;
+        C[c2 + i] -= f2 * u;
+        C[c3 + i] -= f3 * u;
+        C[c4 + i] -= f4 * u;
+    }
+}
+/** Applies the reflector of column j to columns k and k+1 of [R; C]. */
+function reflectTwo(R, C, ld, p, j, k, mb, tau) {
+    const cj = j * ld;
+    const ck = k * ld;
+    const ck2 = ck + ld;
+    const rIdx = k * p + j;
+    const rIdx2 = rIdx + p;
+    let w1 = R[rIdx];
+    let w2 = R[rIdx2];
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        w1 += u * C[ck + i];
+        w2 += u * C[ck2 + i];
+    }
+    const f1 = tau * w1;
+    const f2 = tau * w2;
+    if (f1 === 0 && f2 === 0)
+        return;
+    R[rIdx] -= f1;
+    R[rIdx2] -= f2;
+    for (let i = 0; i < mb; i++) {
+        const u = C[cj + i];
+        C[ck + i] -= f1 * u;
+        C[ck2 + i] -= f2 * u;
+    }
+}
+/** Applies the reflector of column j to column k of [R; C]. */
+function reflectOne(R, C, ld, p, j, k, mb, tau) {
+    const cj = j * ld;
+    const ck = k * ld;
+    const rIdx = k * p + j;
+    let w = R[rIdx];
+    for (let i = 0; i < mb; i++)
+        w += C[cj + i] * C[ck + i];
+    const f = tau * w;
+    if (f === 0)
+        return;
+    R[rIdx] -= f;
+    for (let i = 0; i < mb; i++)
+        C[ck + i] -= f * C[cj + i];
+}
+/** Applies the reflector of column j (u in C from cj) to the right-hand side [qty; yc]. */
+function reflectTarget(qty, yc, C, cj, mb, tau, j) {
+    let w = qty[j];
+    for (let i = 0; i < mb; i++)
+        w += C[cj + i] * yc[i];
+    const f = tau * w;
+    if (f === 0)
+        return;
+    qty[j] -= f;
+    for (let i = 0; i < mb; i++)
+        yc[i] -= f * C[cj + i];
+}
+
+;// CONCATENATED MODULE: ./src/kernels/range-check.ts
+/**
+ * The design's range check (run/plan.ts and run/passes.ts): the first value of a block whose
+ * magnitude is beyond a bound. In WebAssembly where it is in use (kernels.wat, `firstBeyond`),
+ * else in JavaScript ({@link firstBeyondJs}, the reference).
+ */
+
+
+/** The JavaScript reference of {@link firstBeyond}. */
+function firstBeyondJs(a, n, max) {
+    for (let i = 0; i < n; i++)
+        if (!(Math.abs(a[i]) <= max))
+            return i;
+    return -1;
+}
+/** {@link firstBeyond} in WebAssembly. */
+function firstBeyondWasm(k, a, n, max) {
+    const f = heap(k, n);
+    f.set(a.subarray(0, n));
+    return k.firstBeyond(0, n, max);
+}
+/**
+ * Index of the first of a[0..n) whose magnitude is not within ±max (NaN included), or -1.
+ * @param a values (length >= n)
+ */
+const firstBeyond = facade(firstBeyondWasm, firstBeyondJs);
+
+;// CONCATENATED MODULE: ./src/kernels/refine.ts
+/**
+ * One block of the refinement pass (fit/index.ts, RefinementPass): the residuals r = y - X w of
+ * the block's rows in double-double arithmetic and the compensated dot product of each column
+ * with them (Ogita, Rump & Oishi 2005, "Accurate sum and dot product", SIAM J. Sci. Comput.
+ * 26(6), algorithm Dot2). In WebAssembly where it is in use (kernels.wat, `refine`), else in
+ * JavaScript ({@link refineRowsJs}, the reference).
+ */
+
+
+
+/** The JavaScript reference of {@link refineRows}. */
+function refineRowsJs(X, y, m, w, gHi, gLo) {
+    const p = w.length;
+    const atX = firstNotFinite(X, m * p);
+    if (atX >= 0)
+        return { sumOfSquares: 0, bad: { row: atX % m, column: Math.floor(atX / m) } };
+    const atY = firstNotFinite(y, m);
+    if (atY >= 0)
+        return { sumOfSquares: 0, bad: { row: atY, column: -1 } };
+    const hi = new Float64Array(m);
+    const lo = new Float64Array(m);
+    residualsInto(X, y, m, w, hi, lo);
+    const ss = sumOfSquares(hi, m);
+    for (let j = 0; j < p; j++)
+        addColumnDot2(X, j * m, m, hi, lo, gHi, gLo, j);
+    return { sumOfSquares: ss, bad: null };
+}
+/** {@link refineRows} in WebAssembly: the same operations in the same order. */
+function refineRowsWasm(k, X, y, m, w, gHi, gLo) {
     const p = w.length;
     const oY = m * p;
     const oW = oY + m;
@@ -4840,64 +5052,93 @@ function refineRows(k, X, y, m, w, gHi, gLo) {
     return { sumOfSquares, bad: null };
 }
 /**
- * out[at + i] += sum_j X[j*m + i] w[j] for the m rows of a column-major m x p block (columns
- * whose weight is 0 left out): model/blocks.ts's addProducts.
+ * One block of the refinement pass: checks X (m x p, column-major, p = w.length) and y (m) for
+ * finiteness, then adds to (gHi[j], gLo[j]) the compensated dot product of column j with the
+ * residuals y - X w (as double-double numbers hi + lo), in place.
+ * @returns the sum of squares of the residuals' high parts, or where a value is not finite
+ *   (nothing added then)
  */
-function addProductsInto(k, out, at, X, m, w, p) {
-    const oX = m;
-    const oW = oX + m * p;
-    const f = heap(k, oW + p);
-    f.set(out.subarray(at, at + m));
-    f.set(X.subarray(0, m * p), oX);
-    for (let j = 0; j < p; j++)
-        f[oW + j] = w[j];
-    k.addProducts(0, oX * 8, m, oW * 8, p);
-    out.set(f.subarray(0, m), at);
+const refineRows = facade(refineRowsWasm, refineRowsJs);
+// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
+// "Writing hot loops").
+/** Index of the first NaN or infinite value among v[0..n), or -1 (JavaScript only). */
+function firstNotFinite(v, n) {
+    for (let i = 0; i < n; i++)
+        if (!Number.isFinite(v[i]))
+            return i;
+    return -1;
 }
 /**
- * Adds one block's squared out-of-fold errors to errors[f] (cross-validation.ts, outOfFoldErrors,
- * one setting).
- * @param W coefficient j fitted without fold f at W[j * k + f]
- * @param folds the fold of each of the m rows
- * @param single the fold of every row, or -1 when they differ
- * @param y the m rows' targets
- * @param errors per fold, added to in place
+ * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
+ * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
  */
-function outOfFoldRows(k, X, m, p, W, kFolds, folds, single, y, errors) {
-    const oW = m * p;
-    const oY = oW + p * kFolds;
-    const oPred = oY + m;
-    const oColumn = oPred + m;
-    const oErrors = oColumn + p;
-    const oFolds = oErrors + kFolds;
-    const f = heap(k, oFolds + Math.ceil(m / 2));
-    f.set(X.subarray(0, m * p));
-    f.set(W, oW);
-    f.set(y.subarray(0, m), oY);
-    for (let q = 0; q < kFolds; q++)
-        f[oErrors + q] = errors[q];
-    new Int32Array(f.buffer, oFolds * 8, m).set(folds.subarray(0, m));
-    k.outOfFold(0, m, p, oW * 8, kFolds, oFolds * 8, single, oY * 8, oPred * 8, oColumn * 8, oErrors * 8);
-    for (let q = 0; q < kFolds; q++)
-        errors[q] = f[oErrors + q];
+function addColumnDot2(X, col, m, hi, lo, gHi, gLo, j) {
+    let sum = gHi[j];
+    let comp = gLo[j];
+    for (let i = 0; i < m; i++) {
+        const a = X[col + i];
+        const prod = a * hi[i];
+        const t = sum + prod;
+        const z = t - sum;
+        comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
+        sum = t;
+    }
+    gHi[j] = sum;
+    gLo[j] = comp;
 }
 /**
- * The `degree` columns of a polynomial term for x[0..m) written to out from `at` (column k at
- * at + k m): z = (x - shift) / scale (x itself when `raw`), then its powers (basis/polynomial.ts).
+ * r = y - X w for a column-major m x p block (p = w.length) as double-double numbers hi + lo
+ * (written to the length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
+ * JavaScript only: the refinement pass's WebAssembly does the same inside `refine`.
  */
-function polynomialColumnsInto(k, x, m, shift, scale, raw, degree, out, at) {
-    const oOut = m;
-    const f = heap(k, oOut + degree * m);
-    f.set(x.subarray(0, m));
-    k.polynomialColumns(0, m, shift, scale, raw ? 1 : 0, degree, oOut * 8);
-    out.set(f.subarray(oOut, oOut + degree * m), at);
+function residualsInto(X, y, m, w, hi, lo) {
+    const p = w.length;
+    for (let i = 0; i < m; i++) {
+        let s = y[i];
+        let c = 0;
+        for (let j = 0; j < p; j++) {
+            const a = -X[j * m + i];
+            const prod = a * w[j];
+            const t = s + prod;
+            const z = t - s;
+            c += s - (t - z) + (prod - z) + twoProductError(a, w[j], prod);
+            s = t;
+        }
+        // Renormalise (s, c) into hi + lo with |lo| <= ulp(hi) / 2 (TwoSum).
+        const h = s + c;
+        const z = h - s;
+        hi[i] = h;
+        lo[i] = s - (h - z) + (c - z);
+    }
 }
-/** Index of the first of a[0..n) whose magnitude is not within max (NaN included), or -1. */
-function firstBeyondIn(k, a, n, max) {
-    const f = heap(k, n);
-    f.set(a.subarray(0, n));
-    return k.firstBeyond(0, n, max);
+/** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */
+function twoProductError(a, b, prod) {
+    const SPLIT = 134217729; // 2^27 + 1
+    let t = SPLIT * a;
+    const ah = t - (t - a);
+    const al = a - ah;
+    t = SPLIT * b;
+    const bh = t - (t - b);
+    const bl = b - bh;
+    return al * bl - (prod - ah * bh - ah * bl - al * bh);
 }
+
+;// CONCATENATED MODULE: ./src/kernels/index.ts
+/**
+ * The row kernels behind one facade: each function runs in WebAssembly where it is in use and in
+ * JavaScript otherwise, with the same operations in the same order (the results are the same to
+ * the bit). engine.ts makes that choice once per thread; callers never ask which. Each kernel's
+ * module (qr-fold.ts, refine.ts, ...) holds its JavaScript reference (`...Js`), which
+ * test/kernels/ compares the WebAssembly with. Code outside src/kernels/ imports from here only.
+ */
+
+
+
+
+
+
+
+
 
 
 /***/ }),
@@ -5540,7 +5781,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 9234:
+/***/ 2117:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -8986,6 +9227,8 @@ function readCenters(doc, file, centers, at) {
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
 
+// EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
+var kernels = __nccwpck_require__(8667);
 ;// CONCATENATED MODULE: ./src/run/error-result.ts
 /** Error code of a model that failed through a fault in fitgate rather than in its files. */
 const INTERNAL_ERROR = 'internal-error';
@@ -10548,31 +10791,6 @@ class ColumnSpread {
 
 // EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
 var src_fit = __nccwpck_require__(2485);
-// EXTERNAL MODULE: ./src/kernels/wasm.ts + 1 modules
-var wasm = __nccwpck_require__(5087);
-;// CONCATENATED MODULE: ./src/kernels/index.ts
-/**
- * The row kernels behind one facade: each function runs in WebAssembly where it is available and
- * in JavaScript otherwise, with the same operations in the same order (the results are the same
- * to the bit). Callers never ask which. The JavaScript is the reference the WebAssembly is tested
- * against (test/kernels/).
- */
-
-
-/**
- * Index of the first of a[0..n) whose magnitude is not within ±max (NaN included), or -1.
- * @param a values (length >= n)
- */
-function firstBeyond(a, n, max) {
-    const kernels = (0,wasm/* wasmKernels */.FY)();
-    if (kernels !== null)
-        return (0,wasm/* firstBeyondIn */.b5)(kernels, a, n, max);
-    for (let i = 0; i < n; i++)
-        if (!(Math.abs(a[i]) <= max))
-            return i;
-    return -1;
-}
-
 // EXTERNAL MODULE: ./src/data/csv-rules.ts
 var csv_rules = __nccwpck_require__(8706);
 // EXTERNAL MODULE: ./src/data/line-blocks.ts + 1 modules
@@ -11175,7 +11393,7 @@ async function planModel(repo, descriptor, settings) {
         throw new core_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
     }
     for (const data of [train, tables.holdout]) {
-        const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
+        const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
         if (i >= 0) {
             throw new core_errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
         }
@@ -11260,7 +11478,7 @@ function scoringPass(plan, fit, foldFactors) {
 function checkRange(plan, X, start, m) {
     const { design, descriptor } = plan;
     const train = plan.tables.train;
-    const at = firstBeyond(X, design.p * m, MAX_MAGNITUDE);
+    const at = (0,kernels/* firstBeyond */.gy)(X, design.p * m, MAX_MAGNITUDE);
     if (at < 0)
         return;
     const j = Math.floor(at / m);
@@ -11481,7 +11699,8 @@ var worker_role = __nccwpck_require__(5280);
  * Models on worker threads: the main thread sends each model's descriptor (with the settings
  * file and, when comparing with a base commit, that model's base outcome) as plain data; a
  * worker reads the model's files from the same repository root, fits it, runs its checks and
- * sends the ModelResult back. Results come back in descriptor order, identical to a serial run.
+ * sends the ModelResult back, with its thread's kernel notes. Results come back in descriptor
+ * order, identical to a serial run.
  *
  * The worker runs this very module's file. The CLI is bundled into one file, so there the
  * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
@@ -11489,6 +11708,7 @@ var worker_role = __nccwpck_require__(5280);
  * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
  * worker threads cannot load it and models run serially.
  */
+
 
 
 
@@ -11530,17 +11750,21 @@ async function evaluateModels(repo, descriptors, settings, options = {}) {
     const base = options.base;
     const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor });
     const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
-    return (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data });
+    const replies = await (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data });
+    for (const reply of replies)
+        (0,kernels/* recordKernelNotes */.YK)(reply.kernelNotes);
+    return replies.map((reply) => reply.result);
 }
 /** The worker loop: evaluate each model task sent by the pool. */
 function startModelWorker() {
     const data = external_node_worker_threads_.workerData;
     const repo = (0,fs_repository/* createFsRepository */.E)(data.root);
-    (0,pool/* serveTasks */.aJ)((task) => {
+    (0,pool/* serveTasks */.aJ)(async (task) => {
         const base = task.baseline === undefined
             ? undefined
             : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
-        return evaluateModel(repo, task.descriptor, data.settings, base);
+        const result = await evaluateModel(repo, task.descriptor, data.settings, base);
+        return { result, kernelNotes: (0,kernels/* kernelNotes */.TJ)() };
     });
 }
 if (isModelWorker())
@@ -11564,11 +11788,13 @@ var version = __nccwpck_require__(3323);
 
 
 
+
 /**
  * Checks every model of a run.
  * Problems with the settings file or the list of descriptors throw an InputError (nothing can be
  * checked). A descriptor or data file that is bad makes that model's verdict `error`; every
- * other model is still checked, so the Result always has every model's outcome.
+ * other model is still checked, so the Result always has every model's outcome. When the row
+ * kernels fell back to JavaScript in this process, the Result's notes say so once.
  * @param settings what to check
  * @param repo the repository's files
  * @param options baseline of a base commit and run notes; default none
@@ -11595,6 +11821,10 @@ async function runPipeline(settings, repo, options = {}) {
     const notes = [...(options.notes ?? [])];
     if (shard)
         notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+    // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
+    for (const note of (0,kernels/* kernelNotes */.TJ)())
+        if (!notes.includes(note))
+            notes.push(note);
     return (0,result/* summarise */.fS)(models, version/* VERSION */.x, notes);
 }
 

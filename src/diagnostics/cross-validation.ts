@@ -6,8 +6,8 @@
 import type { ModelData } from '../data/model-data.js';
 import type { Design } from '../design/design-matrix.js';
 import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from '../fit/index.js';
-import { addProducts, forEachBlock } from '../design/blocks.js';
-import { outOfFoldRows, wasmKernels } from '../kernels/wasm.js';
+import { forEachBlock } from '../design/blocks.js';
+import { addProducts, outOfFoldRows } from '../kernels/index.js';
 import type { Folds } from './folds.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
@@ -229,38 +229,12 @@ export function outOfFoldErrors(
     for (let f = 0; f < k; f++) for (let j = 0; j < p; j++) t[j * k + f] = bySet[f][j];
     return t;
   });
-  let pred = new Float64Array(0);
-  const column = new Float64Array(p);
-  const kernels = wasmKernels();
   forEachBlock(design, data, (X, start, m) => {
-    if (pred.length < m) pred = new Float64Array(m);
     // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
     const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
-    for (let s = 0; s < S; s++) {
-      // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations in the same order).
-      if (kernels !== null) {
-        outOfFoldRows(kernels, X, m, p, tables[s], k, foldOf.subarray(start, start + m), single, data.y.subarray(start, start + m), sse[s]);
-        continue;
-      }
-      const W = tables[s];
-      const errors = sse[s];
-      pred.fill(0, 0, m);
-      // Column-major sweep: for each column, add its contribution with the row's fold coefficient.
-      if (single >= 0) {
-        for (let j = 0; j < p; j++) column[j] = W[j * k + single];
-        addProducts(pred, 0, X, m, column, p);
-      } else {
-        for (let j = 0; j < p; j++) {
-          const col = j * m;
-          const base = j * k;
-          for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[base + foldOf[start + i]];
-        }
-      }
-      for (let i = 0; i < m; i++) {
-        const r = data.y[start + i] - pred[i];
-        errors[foldOf[start + i]] += r * r;
-      }
-    }
+    const folds = foldOf.subarray(start, start + m);
+    const y = data.y.subarray(start, start + m);
+    for (let s = 0; s < S; s++) outOfFoldRows(X, m, p, tables[s], k, folds, single, y, sse[s]);
     visit?.(X, start, m);
   });
   return { sse };

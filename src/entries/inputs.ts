@@ -6,6 +6,7 @@
  * and the root are taken as real paths (`realpath(3)`).
  */
 import * as core from '@actions/core';
+import { accessSync, constants, statSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
@@ -82,8 +83,28 @@ function insidePath(name: InputName, base: string, value: string, baseName: stri
 }
 
 /**
- * Reads and checks every input (`INPUT_*` variables), `GITHUB_WORKSPACE` and `RUNNER_TEMP`
- * from the process environment.
+ * Checks the runner's file for the step's outputs: `GITHUB_OUTPUT`, when set, must name an existing
+ * file this process may write (the runner creates it before the step starts). Unset, the outputs
+ * go to the log as workflow commands (@actions/core does that).
+ * @throws InputError `runner-file` naming the variable and the path otherwise
+ */
+export function checkOutputFile(file: string | undefined): void {
+  if (file === undefined || file === '') return;
+  let problem: string | null = null;
+  try {
+    if (!statSync(file).isFile()) problem = 'is not a file';
+    else accessSync(file, constants.W_OK);
+  } catch (error) {
+    problem = (error as NodeJS.ErrnoException).code === 'ENOENT' ? 'does not exist' : 'cannot be written';
+  }
+  if (problem !== null) {
+    throw new InputError('runner-file', `expected the file the runner creates for the step's outputs, got ${quoteValue(file)}, which ${problem}`, { key: 'GITHUB_OUTPUT' });
+  }
+}
+
+/**
+ * Reads and checks every input (`INPUT_*` variables), `GITHUB_WORKSPACE`, `RUNNER_TEMP` and
+ * `GITHUB_OUTPUT` ({@link checkOutputFile}) from the process environment.
  * @param cwd folder used when `GITHUB_WORKSPACE` is unset; default `process.cwd()`
  * @throws InputError for a bad value (the run must not go on: exit status 2), a workspace or
  *   `working-directory` that is not an existing folder, or a `working-directory` whose real path
@@ -91,6 +112,7 @@ function insidePath(name: InputName, base: string, value: string, baseName: stri
  */
 export function readInputs(cwd: string = process.cwd()): ActionInputs {
   const env = process.env;
+  checkOutputFile(env.GITHUB_OUTPUT);
   // Real paths: the root is checked against the workspace as it is on disk, so that a folder
   // replaced by a link to a parent (or anywhere outside) is refused here, once.
   const workspace = realFolder(path.resolve(env.GITHUB_WORKSPACE || cwd), { key: 'GITHUB_WORKSPACE', within: null });

@@ -9,9 +9,9 @@
  * see test/fit/nist-strd.test.ts, which prints every dataset's figures).
  */
 import { FactorSolver, rawSingularValues, scaledSpectrum } from './factor-solver.js';
-import { QrAccumulator, sumOfSquares } from './qr-accumulator.js';
+import { QrAccumulator } from './qr-accumulator.js';
 import { checkPenalty, penalisedFactor } from './ridge.js';
-import { leverageRows, refineRows, wasmKernels } from '../kernels/wasm.js';
+import { firstNotFinite, leverageRows, refineRows, residualsInto, sumOfSquares } from '../kernels/index.js';
 
 export { QrAccumulator } from './qr-accumulator.js';
 
@@ -292,22 +292,10 @@ export class RefinementPass {
    */
   addRows(X: Float64Array, y: Float64Array, m: number): void {
     const w = this.#fit.coefficients;
-    const p = w.length;
-    // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
-    const kernels = wasmKernels();
-    if (kernels !== null) {
-      checkShape(X, y, m, p);
-      const { sumOfSquares: ss, bad } = refineRows(kernels, X, y, m, w, this.#gHi, this.#gLo);
-      if (bad !== null) notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
-      this.#rss += ss;
-      return;
-    }
-    checkBlock(X, y, m, p);
-    const hi = new Float64Array(m);
-    const lo = new Float64Array(m);
-    residualsInto(X, y, m, w, hi, lo);
-    this.#rss += sumOfSquares(hi, m);
-    for (let j = 0; j < p; j++) addColumnDot2(X, j * m, m, hi, lo, this.#gHi, this.#gLo, j);
+    checkShape(X, y, m, w.length);
+    const { sumOfSquares: ss, bad } = refineRows(X, y, m, w, this.#gHi, this.#gLo);
+    if (bad !== null) notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+    this.#rss += ss;
   }
 
   /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
@@ -396,56 +384,7 @@ export function leveragesInto(fit: FitResult, X: Float64Array, m: number, out: F
     out.set(leverages(fit, X, m));
     return;
   }
-  // In WebAssembly where it is in use (wasm-kernels.ts; the same operations in the same order).
-  const kernels = wasmKernels();
-  if (kernels !== null) {
-    leverageRows(kernels, fit.factor.R, p, X, m, out);
-    return;
-  }
-  const Z = new Float64Array(LEVERAGE_CHUNK * p);
-  for (let i0 = 0; i0 < m; i0 += LEVERAGE_CHUNK) leverageChunk(fit.factor.R, p, X, m, i0, Math.min(LEVERAGE_CHUNK, m - i0), Z, out);
-}
-
-/** Rows per chunk of {@link leveragesInto} (the chunk's z columns stay in cache). */
-const LEVERAGE_CHUNK = 256;
-
-/**
- * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
- * substitution z = R^-T x down whole columns of Z (leading dimension LEVERAGE_CHUNK). A function of
- * its own so that its loops never run inside code V8 optimised in the middle of another chunk
- * (see DEVELOPERS.md, "Writing hot loops").
- */
-function leverageChunk(R: Float64Array, p: number, X: Float64Array, m: number, i0: number, mb: number, Z: Float64Array, out: Float64Array): void {
-  const CH = LEVERAGE_CHUNK;
-  for (let i = 0; i < mb; i++) out[i0 + i] = 0;
-  for (let j = 0; j < p; j++) {
-    const zj = j * CH;
-    const xj = j * m + i0;
-    for (let i = 0; i < mb; i++) Z[zj + i] = X[xj + i];
-    let k = 0;
-    // Four earlier columns per sweep (the same subtractions in the same order per row).
-    for (; k + 3 < j; k += 4) {
-      const r0 = R[j * p + k];
-      const r1 = R[j * p + k + 1];
-      const r2 = R[j * p + k + 2];
-      const r3 = R[j * p + k + 3];
-      const z0 = k * CH;
-      for (let i = 0; i < mb; i++) {
-        Z[zj + i] = Z[zj + i] - r0 * Z[z0 + i] - r1 * Z[z0 + CH + i] - r2 * Z[z0 + 2 * CH + i] - r3 * Z[z0 + 3 * CH + i];
-      }
-    }
-    for (; k < j; k++) {
-      const r = R[j * p + k];
-      const zk = k * CH;
-      for (let i = 0; i < mb; i++) Z[zj + i] -= r * Z[zk + i];
-    }
-    const diag = R[j * p + j];
-    for (let i = 0; i < mb; i++) {
-      const z = Z[zj + i] / diag;
-      Z[zj + i] = z;
-      out[i0 + i] += z * z;
-    }
-  }
+  leverageRows(fit.factor.R, p, X, m, out);
 }
 
 /**
@@ -519,69 +458,4 @@ function checkShape(X: Float64Array, y: Float64Array | undefined, m: number, p: 
 function notFinite(X: Float64Array, y: Float64Array | undefined, m: number, k: number, i: number): void {
   if (k >= 0) throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
   if (i >= 0 && y !== undefined) throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
-}
-
-// The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
-// "Writing hot loops").
-
-/** Index of the first NaN or infinite value among v[0..n), or -1. */
-function firstNotFinite(v: Float64Array, n: number): number {
-  for (let i = 0; i < n; i++) if (!Number.isFinite(v[i])) return i;
-  return -1;
-}
-
-/**
- * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
- * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
- */
-function addColumnDot2(X: Float64Array, col: number, m: number, hi: Float64Array, lo: Float64Array, gHi: Float64Array, gLo: Float64Array, j: number): void {
-  let sum = gHi[j];
-  let comp = gLo[j];
-  for (let i = 0; i < m; i++) {
-    const a = X[col + i];
-    const prod = a * hi[i];
-    const t = sum + prod;
-    const z = t - sum;
-    comp += sum - (t - z) + (prod - z) + twoProductError(a, hi[i], prod) + a * lo[i];
-    sum = t;
-  }
-  gHi[j] = sum;
-  gLo[j] = comp;
-}
-
-/**
- * r = y - X w for a column-major m x p block as double-double numbers hi + lo (written to the
- * length-m arrays `hi` and `lo`), each entry by a compensated dot product (Dot2).
- */
-function residualsInto(X: Float64Array, y: Float64Array, m: number, w: Float64Array, hi: Float64Array, lo: Float64Array): void {
-  const p = w.length;
-  for (let i = 0; i < m; i++) {
-    let s = y[i];
-    let c = 0;
-    for (let j = 0; j < p; j++) {
-      const a = -X[j * m + i];
-      const prod = a * w[j];
-      const t = s + prod;
-      const z = t - s;
-      c += s - (t - z) + (prod - z) + twoProductError(a, w[j], prod);
-      s = t;
-    }
-    // Renormalise (s, c) into hi + lo with |lo| <= ulp(hi) / 2 (TwoSum).
-    const h = s + c;
-    const z = h - s;
-    hi[i] = h;
-    lo[i] = s - (h - z) + (c - z);
-  }
-}
-
-/** Exact error of a floating-point product (Dekker / Veltkamp splitting): a*b - fl(a*b). */
-function twoProductError(a: number, b: number, prod: number): number {
-  const SPLIT = 134217729; // 2^27 + 1
-  let t = SPLIT * a;
-  const ah = t - (t - a);
-  const al = a - ah;
-  t = SPLIT * b;
-  const bh = t - (t - b);
-  const bl = b - bh;
-  return al * bl - (prod - ah * bh - ah * bl - al * bh);
 }

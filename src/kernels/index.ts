@@ -1,20 +1,15 @@
 /**
- * The row kernels behind one facade: each function runs in WebAssembly where it is available and
- * in JavaScript otherwise, with the same operations in the same order (the results are the same
- * to the bit). Callers never ask which. The JavaScript is the reference the WebAssembly is tested
- * against (test/kernels/).
+ * The row kernels behind one facade: each function runs in WebAssembly where it is in use and in
+ * JavaScript otherwise, with the same operations in the same order (the results are the same to
+ * the bit). engine.ts makes that choice once per thread; callers never ask which. Each kernel's
+ * module (qr-fold.ts, refine.ts, ...) holds its JavaScript reference (`...Js`), which
+ * test/kernels/ compares the WebAssembly with. Code outside src/kernels/ imports from here only.
  */
-import { firstBeyondIn, wasmKernels } from './wasm.js';
-
-export { useWasmKernels } from './wasm.js';
-
-/**
- * Index of the first of a[0..n) whose magnitude is not within ±max (NaN included), or -1.
- * @param a values (length >= n)
- */
-export function firstBeyond(a: Float64Array, n: number, max: number): number {
-  const kernels = wasmKernels();
-  if (kernels !== null) return firstBeyondIn(kernels, a, n, max);
-  for (let i = 0; i < n; i++) if (!(Math.abs(a[i]) <= max)) return i;
-  return -1;
-}
+export { kernelEngine, kernelNotes, KERNEL_FALLBACK_NOTE, recordKernelNotes, useWasmKernels, type KernelEngine } from './engine.js';
+export { leverageRows } from './leverages.js';
+export { outOfFoldRows } from './out-of-fold.js';
+export { polynomialColumns } from './polynomial-columns.js';
+export { addProducts } from './products.js';
+export { foldRows, sumOfSquares, type BadValue, type FoldOutcome } from './qr-fold.js';
+export { firstBeyond } from './range-check.js';
+export { firstNotFinite, refineRows, residualsInto, type RefineOutcome } from './refine.js';

@@ -1,10 +1,12 @@
-;; Row kernels of the fit in WebAssembly: the streaming Householder QR fold (qr-accumulator.ts),
-;; the refinement pass and the leverages of a full-rank fit (fit/index.ts), predictions
-;; (model/blocks.ts, addProducts) and out-of-fold errors (diagnostics/cross-validation.ts). WebAssembly is compiled before its first call
+;; Row kernels of the fit in WebAssembly: the streaming Householder QR fold (qr-fold.ts), the
+;; refinement pass (refine.ts), the leverages of a full-rank fit (leverages.ts), predictions
+;; (products.ts), out-of-fold errors (out-of-fold.ts), polynomial columns (polynomial-columns.ts)
+;; and the design's range check (range-check.ts). WebAssembly is compiled before its first call
 ;; and computes with unboxed doubles from the start, where JavaScript would run these loops in
-;; V8's interpreter for most of a small model's run. Each function does the operations of the
-;; JavaScript it replaces in the same order, so the results are the same to the bit (IEEE 754
-;; arithmetic, no fused multiply-add); test/fit/wasm-kernels.test.ts compares the two.
+;; V8's interpreter for most of a small model's run. Each function does the operations of its
+;; JavaScript reference (the `...Js` function of the module named) in the same order, so the
+;; results are the same to the bit (IEEE 754 arithmetic, no fused multiply-add);
+;; test/kernels/wasm-kernels.test.ts compares the two.
 ;;
 ;; Arrays are float64 in the module's memory, passed as byte addresses; matrices are column-major.
 ;; Assembled by test/tools/gen-wasm.mjs into src/kernels/generated/kernels-wasm.ts.
@@ -18,11 +20,11 @@
   ;; The residual sum of squares fold adds to (set by the caller, read after the call).
   (global $rss (export "rss") (mut f64) (f64.const 0))
 
-  ;; Sums of squares in this range are computed without rescaling (qr-accumulator.ts).
+  ;; Sums of squares in this range are computed without rescaling (qr-fold.ts).
   (global $SAFE_SMALL f64 (f64.const 1e-150))
   (global $SAFE_LARGE f64 (f64.const 1e150))
 
-  ;; Index of the first NaN or infinite value among the n at a, or -1 (fit/index.ts, firstNotFinite).
+  ;; Index of the first NaN or infinite value among the n at a, or -1 (refine.ts, firstNotFinite).
   (func $firstNotFinite (export "firstNotFinite") (param $a i32) (param $n i32) (result i32)
     (local $i i32) (local $v f64)
     (block $done
@@ -87,7 +89,7 @@
         (local.set $i (i32.add (local.get $i) (i32.const 1)))
         (br $next))))
 
-  ;; The reflector of a column (qr-accumulator.ts, reflector): overwrites the mb values at cj with
+  ;; The reflector of a column (qr-fold.ts, reflector): overwrites the mb values at cj with
   ;; u's lower part and returns beta; NaN (column unchanged) when the block part is zero.
   (func $reflector (param $cj i32) (param $mb i32) (param $alpha f64) (result f64)
     (local $amax f64) (local $sigma f64) (local $scaled f64) (local $a0 f64) (local $norm f64) (local $beta f64)
@@ -291,7 +293,7 @@
         (br $next))))
 
   ;; Folds the m rows of the column-major block X (m x p) and y into [R; qty] in pieces of at most
-  ;; `chunk` rows (QrAccumulator's #foldAll and #fold): each piece is copied into the work block C
+  ;; `chunk` rows (qr-fold.ts, foldRowsJs): each piece is copied into the work block C
   ;; (leading dimension chunk) and yc, checked, annihilated, and the sum of squares of what is left
   ;; of its right-hand side is added to the global rss. Returns 0; 1 when a value is not finite
   ;; (badRow and badColumn say where; the pieces before it stay folded, as in JavaScript).
@@ -331,7 +333,7 @@
     (i32.const 0))
 
   ;; Leverages of the m rows of the column-major block X (m x p) under a full-rank factor R
-  ;; (fit/index.ts, leverageChunk): z = R^-T x by forward substitution down whole columns of Z
+  ;; (leverages.ts, leverageChunk): z = R^-T x by forward substitution down whole columns of Z
   ;; (m x p), out[i] = sum_j z_ij^2. The subtractions run in the JavaScript's order (k ascending).
   (func (export "leverages") (param $R i32) (param $p i32) (param $X i32) (param $m i32) (param $Z i32) (param $out i32)
     (local $i i32) (local $j i32) (local $k i32) (local $colBytes i32) (local $zj i32) (local $zk i32)
@@ -375,7 +377,7 @@
         (br $column))))
 
   ;; Exact error of a floating-point product, a*b - fl(a*b) (Dekker / Veltkamp splitting;
-  ;; fit/index.ts, twoProductError).
+  ;; refine.ts, twoProductError).
   (func $twoProductError (param $a f64) (param $b f64) (param $prod f64) (result f64)
     (local $t f64) (local $ah f64) (local $al f64) (local $bh f64) (local $bl f64)
     (local.set $t (f64.mul (f64.const 134217729) (local.get $a)))
@@ -389,7 +391,7 @@
         (f64.mul (local.get $al) (local.get $bh)))))
 
   ;; r = y - X w for the m rows of the column-major block X (m x p) as double-double numbers
-  ;; hi + lo, each by a compensated dot product (fit/index.ts, residualsInto).
+  ;; hi + lo, each by a compensated dot product (refine.ts, residualsInto).
   (func $residuals (param $X i32) (param $y i32) (param $m i32) (param $w i32) (param $p i32) (param $hi i32) (param $lo i32)
     (local $i i32) (local $j i32) (local $off i32) (local $s f64) (local $c f64) (local $a f64) (local $wj f64)
     (local $prod f64) (local $t f64) (local $z f64) (local $h f64)
@@ -423,7 +425,7 @@
         (br $row))))
 
   ;; Adds to the running (gHi, gLo) at the given addresses the dot product of the m values at x
-  ;; with r = hi + lo: Dot2 with hi, plus the plain dot with lo (fit/index.ts, addColumnDot2).
+  ;; with r = hi + lo: Dot2 with hi, plus the plain dot with lo (refine.ts, addColumnDot2).
   (func $columnDot2 (param $x i32) (param $m i32) (param $hi i32) (param $lo i32) (param $gHi i32) (param $gLo i32)
     (local $i i32) (local $off i32) (local $sum f64) (local $comp f64) (local $a f64) (local $h f64) (local $prod f64) (local $t f64) (local $z f64)
     (local.set $sum (f64.load (local.get $gHi)))
@@ -448,7 +450,7 @@
     (f64.store (local.get $gHi) (local.get $sum))
     (f64.store (local.get $gLo) (local.get $comp)))
 
-  ;; One block of the refinement pass (fit/index.ts, RefinementPass.addRows): the residuals of the
+  ;; One block of the refinement pass (refine.ts, refineRowsJs): the residuals of the
   ;; m rows under w (p values) as hi + lo, then for each column j the compensated dot product of
   ;; column j with them added to gHi[j], gLo[j]. Returns the sum of squares of hi.
   (func (export "refine") (param $X i32) (param $y i32) (param $m i32) (param $w i32) (param $p i32)
@@ -469,8 +471,8 @@
     (local.get $ss))
 
   ;; out[i] += sum_j X[j*m + i] w[j] for the m rows of the column-major block X (m x p), the
-  ;; columns added one after another, those whose weight is 0 left out (model/blocks.ts,
-  ;; addProducts: its four-column sweeps add in the same order).
+  ;; columns added one after another, those whose weight is 0 left out (products.ts,
+  ;; addProductsJs: its four-column sweeps add in the same order).
   (func $addProducts (export "addProducts") (param $out i32) (param $X i32) (param $m i32) (param $w i32) (param $p i32)
     (local $j i32) (local $wj f64) (local $col i32) (local $off i32) (local $end i32) (local $at i32)
     (local.set $end (i32.shl (local.get $m) (i32.const 3)))
@@ -492,8 +494,8 @@
         (local.set $j (i32.add (local.get $j) (i32.const 1)))
         (br $column))))
 
-  ;; Out-of-fold errors of one block for one setting (diagnostics/cross-validation.ts,
-  ;; outOfFoldErrors): pred = the prediction of each row with the coefficients fitted without its
+  ;; Out-of-fold errors of one block for one setting (out-of-fold.ts,
+  ;; outOfFoldRowsJs): pred = the prediction of each row with the coefficients fitted without its
   ;; fold (W[j*k + f], f = folds[i], an i32 per row), then errors[f] += (y[i] - pred[i])^2 in row
   ;; order. With `single` >= 0 every row is of that fold, and the predictions are addProducts with
   ;; its coefficients (zero weights left out, as there).
@@ -543,7 +545,7 @@
         (local.set $i (i32.add (local.get $i) (i32.const 1)))
         (br $next))))
 
-  ;; The degree columns of a polynomial term for m values x (basis/polynomial.ts): column 1 is
+  ;; The degree columns of a polynomial term for m values x (polynomial-columns.ts): column 1 is
   ;; z = (x - shift) / scale (x itself when raw is 1), column k the previous column times z; written
   ;; one after another from out.
   (func (export "polynomialColumns") (param $x i32) (param $m i32) (param $shift f64) (param $scale f64) (param $raw i32)
@@ -578,7 +580,7 @@
         (br $power))))
 
   ;; Index of the first of the n values at a whose magnitude is not within max (NaN included), or
-  ;; -1 (model/evaluate.ts, the design's range check).
+  ;; -1 (range-check.ts, the design's range check).
   (func (export "firstBeyond") (param $a i32) (param $n i32) (param $max f64) (result i32)
     (local $i i32)
     (block $done

@@ -2,7 +2,8 @@
  * Models on worker threads: the main thread sends each model's descriptor (with the settings
  * file and, when comparing with a base commit, that model's base outcome) as plain data; a
  * worker reads the model's files from the same repository root, fits it, runs its checks and
- * sends the ModelResult back. Results come back in descriptor order, identical to a serial run.
+ * sends the ModelResult back, with its thread's kernel notes. Results come back in descriptor
+ * order, identical to a serial run.
  *
  * The worker runs this very module's file. The CLI is bundled into one file, so there the
  * worker loads the whole bundle: the bundle's entry must not start its own work in a worker
@@ -14,6 +15,7 @@ import { fileURLToPath } from 'node:url';
 import { workerData } from 'node:worker_threads';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { evaluateModel, type BaseInput } from './evaluate.js';
+import { kernelNotes, recordKernelNotes } from '../kernels/index.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
 import type { ModelResult } from '../result/result.js';
@@ -35,6 +37,12 @@ interface ModelTask {
   /** The base commit's outcome of this model (null: new), or undefined when not comparing. */
   baseline?: ModelResult | null;
   commit?: string;
+}
+
+/** What a worker sends back for a model: its outcome and the thread's kernel notes (kernels/engine.ts). */
+interface ModelReply {
+  result: ModelResult;
+  kernelNotes: string[];
 }
 
 /** True in a model worker thread started by {@link evaluateModels} (the only kind of fitgate worker). */
@@ -92,19 +100,22 @@ export async function evaluateModels(
     base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor },
   );
   const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
-  return runPool<ModelTask, ModelResult>(tasks, { jobs, script, workerData: data });
+  const replies = await runPool<ModelTask, ModelReply>(tasks, { jobs, script, workerData: data });
+  for (const reply of replies) recordKernelNotes(reply.kernelNotes);
+  return replies.map((reply) => reply.result);
 }
 
 /** The worker loop: evaluate each model task sent by the pool. */
 function startModelWorker(): void {
   const data = workerData as ModelWorkerData;
   const repo = createFsRepository(data.root);
-  serveTasks<ModelTask, ModelResult>((task) => {
+  serveTasks<ModelTask, ModelReply>(async (task) => {
     const base: BaseInput | undefined =
       task.baseline === undefined
         ? undefined
         : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
-    return evaluateModel(repo, task.descriptor, data.settings, base);
+    const result = await evaluateModel(repo, task.descriptor, data.settings, base);
+    return { result, kernelNotes: kernelNotes() };
   });
 }
 

@@ -7,6 +7,7 @@ import { discoverDescriptors } from '../config/discover.js';
 import { loadSettings } from '../config/settings-file.js';
 import type { Descriptor } from '../config/types.js';
 import { InputError } from '../core/errors.js';
+import { kernelNotes } from '../kernels/index.js';
 import { errorResult } from './error-result.js';
 import { evaluateModels } from './model-worker.js';
 import type { RepoReader } from '../repo/types.js';
@@ -42,7 +43,8 @@ export interface PipelineOptions {
  * Checks every model of a run.
  * Problems with the settings file or the list of descriptors throw an InputError (nothing can be
  * checked). A descriptor or data file that is bad makes that model's verdict `error`; every
- * other model is still checked, so the Result always has every model's outcome.
+ * other model is still checked, so the Result always has every model's outcome. When the row
+ * kernels fell back to JavaScript in this process, the Result's notes say so once.
  * @param settings what to check
  * @param repo the repository's files
  * @param options baseline of a base commit and run notes; default none
@@ -66,5 +68,7 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
   models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
   const notes = [...(options.notes ?? [])];
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
+  // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
+  for (const note of kernelNotes()) if (!notes.includes(note)) notes.push(note);
   return summarise(models, VERSION, notes);
 }

@@ -1,11 +1,11 @@
-import { mkdirSync, mkdtempSync, readFileSync, realpathSync, rmSync, symlinkSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, mkdtempSync, readFileSync, realpathSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import os, { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse } from 'yaml';
 import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.js';
-import { INPUT_DEFAULTS, readInputs } from '../../src/entries/inputs.js';
+import { checkOutputFile, INPUT_DEFAULTS, readInputs } from '../../src/entries/inputs.js';
 
 const saved = { ...process.env };
 // A real workspace (the root is resolved with realpath): `ml/`, a link `up` to the workspace's
@@ -126,6 +126,28 @@ describe('readInputs', () => {
     expect(error.location.key).toBe(key.slice(1, -1));
     expect(error.message).toBe(message);
     expect(error.describe()).toBe(`${key}: ${message}`);
+  });
+
+  it('refuses a GITHUB_OUTPUT that names no writable file, naming the variable and the path', () => {
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'fitgate-output-'));
+    try {
+      const file = path.join(dir, 'output.txt');
+      writeFileSync(file, '');
+      process.env.GITHUB_OUTPUT = file;
+      expect(readInputs().workspace).toBe(WORKSPACE);
+      for (const absent of [undefined, '']) expect(() => checkOutputFile(absent)).not.toThrow();
+      for (const [value, problem] of [
+        [path.join(dir, 'missing.txt'), 'does not exist'],
+        [dir, 'is not a file'],
+      ]) {
+        process.env.GITHUB_OUTPUT = value;
+        const error = inputError();
+        expect(error.code).toBe('runner-file');
+        expect(error.describe()).toBe(`\`GITHUB_OUTPUT\`: expected the file the runner creates for the step's outputs, got ${JSON.stringify(value)}, which ${problem}`);
+      }
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('has one default per input of action.yml, equal to the default there', () => {

@@ -39,7 +39,7 @@ export async function microBenchmark({ root, rows = 100_000, inputs = 19, repeat
     const { createTerm } = await load('basis/index.js');
     const { createDesign } = await load('design-matrix.js');
     const { QrAccumulator, fitFactor } = await load('fit/index.js');
-    const { forEachBlock } = await load('model/blocks.js');
+    const { forEachBlock } = await load('design/blocks.js');
     const { crossValidate } = await load('diagnostics/cross-validation.js');
     const { assignFolds } = await load('diagnostics/folds.js');
 

@@ -5,7 +5,7 @@
  */
 import type { PolynomialTermSpec } from '../../config/types.js';
 import { InputError } from '../../core/errors.js';
-import { polynomialColumnsInto, wasmKernels } from '../../kernels/wasm.js';
+import { polynomialColumns } from '../../kernels/index.js';
 import { meanAndSd } from '../stats.js';
 import type { Term, TrainingColumns } from './types.js';
 
@@ -45,28 +45,7 @@ export function polynomialTerm(spec: PolynomialTermSpec, training: TrainingColum
     columnNames: names,
     fixed: { shift: s, scale },
     fill(inputs, m, out, offset) {
-      const first = offset * m;
-      // In WebAssembly where it is in use (fit/wasm-kernels.ts; the same operations).
-      const kernels = wasmKernels();
-      if (kernels !== null) {
-        polynomialColumnsInto(kernels, inputs[0], m, s, sc, raw, spec.degree, out, first);
-        return;
-      }
-      if (raw) out.set(inputs[0].subarray(0, m), first);
-      else standardise(inputs[0], m, s, sc, out, first);
-      for (let k = 1; k < spec.degree; k++) multiplyColumns(out, (offset + k - 1) * m, first, (offset + k) * m, m);
+      polynomialColumns(inputs[0], m, s, sc, raw, spec.degree, out, offset * m);
     },
   };
-}
-
-// The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
-
-/** out[at + i] = (x[i] - shift) / scale for i < m. */
-function standardise(x: Float64Array, m: number, shift: number, scale: number, out: Float64Array, at: number): void {
-  for (let i = 0; i < m; i++) out[at + i] = (x[i] - shift) / scale;
-}
-
-/** out[to + i] = out[a + i] * out[b + i] for i < m (the next power from the previous one and z). */
-function multiplyColumns(out: Float64Array, a: number, b: number, to: number, m: number): void {
-  for (let i = 0; i < m; i++) out[to + i] = out[a + i] * out[b + i];
 }
