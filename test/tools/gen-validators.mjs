@@ -2,7 +2,7 @@
 // stage reads (src/config/generated/limit-keys.ts), the `limits` of both JSON Schemas
 // (src/config/schema/*.json), the schemas precompiled with ajv's standalone code generation
 // (src/config/generated/validators.ts, so that no schema is compiled when fitgate starts), and the
-// per-check entries of docs/checks.md. `npm run bundle` runs it first;
+// per-check entries of docs/checks.md and the README's checks table. `npm run bundle` runs it first;
 // test/config/generated-validators.test.ts fails when any of them is stale.
 //
 // Run: node test/tools/gen-validators.mjs            (writes the file)
@@ -69,6 +69,28 @@ function checksDoc(current, checks) {
   return `${intro}\n\n${DOCS_MARK}\n\n${entries.join('\n')}`;
 }
 
+/** A default limit as a reader writes it: `1.5`, `{ warn: 0.25, fail: 0.5 }`, `off`, `1e8`. */
+function specText(spec) {
+  const num = (x) => (Math.abs(x) >= 1e6 ? x.toExponential().replace('e+', 'e') : String(x));
+  if (typeof spec === 'number') return num(spec);
+  if (typeof spec === 'string') return spec;
+  return `{ ${Object.entries(spec).map(([k, v]) => `${k}: ${num(v)}`).join(', ')} }`;
+}
+
+/** The markers around the README's generated checks table. */
+const TABLE_START = '<!-- checks table: generated from src/checks/ by test/tools/gen-validators.mjs -->';
+const TABLE_END = '<!-- end of checks table -->';
+
+/** README.md with its checks table (between the markers) made from the registry. */
+function readmeWithTable(current, checks) {
+  const start = current.indexOf(TABLE_START);
+  const end = current.indexOf(TABLE_END);
+  if (start < 0 || end < start) throw new Error(`README.md needs the markers ${TABLE_START} and ${TABLE_END} around its checks table`);
+  const rows = checks.map((c) => `| \`${c.id}\` | \`${c.limitKey}\` | \`${specText(c.defaultLimit)}\`${c.direction === 'below' ? ' (floor)' : ''} | ${c.limitSummary.replaceAll('|', '\\|')} |`);
+  const table = ['| id | limit key | default | figure |', '|---|---|---|---|', ...rows].join('\n');
+  return `${current.slice(0, start)}${TABLE_START}\n${table}\n${current.slice(end)}`;
+}
+
 /** Every file this tool writes, by path relative to the repository root, with its text. */
 export async function generateAll() {
   const { checks, limitKeys } = await loadRegistry(root);
@@ -83,6 +105,7 @@ export async function generateAll() {
   files.set(path.relative(root, out), validatorsModule(schemas['settings.schema.json'], schemas['descriptor.schema.json']));
   const docs = path.join('docs', 'checks.md');
   files.set(docs, checksDoc(readFileSync(path.join(root, docs), 'utf8'), checks));
+  files.set('README.md', readmeWithTable(readFileSync(path.join(root, 'README.md'), 'utf8'), checks));
   return files;
 }
 
