@@ -299,6 +299,7 @@ describe('readTable: header caps', () => {
       label: 'endless',
       resolve: async (_from, target) => target,
       isFile: async () => true,
+      entryKind: async () => 'file',
       size: async () => 100 * 1024 * 1024,
       read: async () => {
         throw new Error('read is not used for data');
@@ -312,7 +313,7 @@ describe('readTable: header caps', () => {
           yield piece;
         }
       },
-      glob: async () => [],
+      glob: async () => ({ paths: [], notEntered: [] }),
     };
     return { repo, pulled: () => pulled };
   }
