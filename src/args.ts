@@ -9,9 +9,9 @@
  */
 import path from 'node:path';
 import { parseArgs as tokenize } from 'node:util';
-import { InputError } from './errors.js';
+import { InputError, quoteValue } from './errors.js';
 import type { Settings } from './settings.js';
-import { parseShard, type Shard } from './shard.js';
+import { MAX_SHARDS, parseShard, type Shard } from './shard.js';
 import { VERSION } from './version.js';
 
 /** Output formats of `fitgate check`. */
@@ -62,6 +62,18 @@ export interface MergeCommand {
   html: string | null;
   sarif: string | null;
   junit: string | null;
+  /** `--expect N`: the number of shard reports there must be (a missing one is an error), or null. */
+  expect: number | null;
+}
+
+/** Reads `--expect`: a whole number of reports from 1 to {@link MAX_SHARDS}. */
+function parseExpect(value: string | null): number | null {
+  if (value === null) return null;
+  const n = Number(value);
+  if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1 || n > MAX_SHARDS) {
+    throw new InputError('expect-value', `expected the number of shard reports, a whole number from 1 to ${MAX_SHARDS}, got ${quoteValue(value)}`, { key: '--expect' });
+  }
+  return n;
 }
 
 /** Reads `--jobs`: a whole number >= 1. */
@@ -69,7 +81,7 @@ function parseJobs(value: string | undefined): number | null {
   if (value === undefined) return null;
   const n = Number(value);
   if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1) {
-    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${JSON.stringify(value)}`, { key: '--jobs' });
+    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${quoteValue(value)}`, { key: '--jobs' });
   }
   return n;
 }
@@ -134,6 +146,7 @@ const COMMANDS: readonly CommandSpec[] = [
     summary: 'Join the JSON reports of `fitgate check --shard K/N --format json` jobs into one report. Exit status as for check.',
     argument: { name: 'report', description: 'JSON report files', required: true },
     options: [
+      { name: 'expect', value: 'n', description: 'the number of shard reports there must be: a missing one is an error (reports also name their shard K/N, and a gap among them is an error)' },
       FORMAT,
       OUT,
       FAIL_ON,
@@ -201,7 +214,7 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
   };
   const failOn = value('fail-on') === 'warn' ? 'warn' : 'fail';
   if (command.name === 'merge') {
-    return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common };
+    return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common, expect: parseExpect(value('expect')) };
   }
   const root = path.resolve(cwd, value('root') ?? '.');
   const config = value('config');
@@ -325,7 +338,7 @@ function wrap(text: string, width: number): string[] {
 function toRepoPath(root: string, absolute: string, given: string, key: string): string {
   const rel = path.relative(root, absolute);
   if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel)) {
-    const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
+    const what = key === given ? 'is' : `${quoteValue(given)} is`;
     throw new InputError('path-outside', `${what} outside the repository root ${root}; expected a path inside it`, { key });
   }
   return rel.split(path.sep).join('/');

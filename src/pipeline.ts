@@ -70,5 +70,7 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
   models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
   const notes = [...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
-  return summarise(models, VERSION, notes);
+  const result = summarise(models, VERSION, notes);
+  if (shard) result.shard = { index: shard.index, count: shard.count };
+  return result;
 }
