@@ -7,7 +7,7 @@ import { meanAndSd, range } from '../basis/stats.js';
 import { CHECKS, runCheck, type CheckContext, type CoreMetrics } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { createDesign, type Design } from '../design-matrix.js';
-import { InputError } from '../errors.js';
+import { clip, InputError } from '../errors.js';
 import { fitFactor, RefinementPass, refinementApplies, type FitResult } from '../fit/index.js';
 import { firstBeyondIn, wasmKernels } from '../fit/wasm-kernels.js';
 import { ColumnSpread } from '../metrics/column-spread.js';
@@ -90,7 +90,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     if (i >= 0) {
       throw new InputError(
         'target-range',
-        `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
+        `the target \`${clip(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${clip(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
         { file, line: descriptor.data.lines.target, key: 'data.target' },
       );
     }
@@ -104,7 +104,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   if (!(targetStats.sd > 0)) {
     throw new InputError(
       'constant-target',
-      `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`,
+      `the target \`${clip(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`,
       { file, line: descriptor.data.lines.target, key: 'data.target' },
     );
   }
@@ -214,7 +214,7 @@ function checkFiniteBlock(design: Design, train: FittedModel['tables']['train'],
       const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
       throw new InputError(
         'design-overflow',
-        `design column \`${design.columnNames[j]}\` is ${v} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`,
+        `design column \`${clip(design.columnNames[j])}\` is ${v} at training row on line ${train.lines[start + i]} of ${clip(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`,
         { file: descriptor.file, line, key: 'terms' },
       );
     }
@@ -229,7 +229,7 @@ function scoreShipped(model: FittedModel): ShippedMetrics | null {
   if (shipped.length !== design.p) {
     throw new InputError(
       'coefficients-length',
-      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
+      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => clip(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
       { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
     );
   }
@@ -287,7 +287,7 @@ export function errorResult(name: string, descriptor: string, error: InputError)
     shipped: null,
     checks: [],
     error: {
-      message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
+      message: key !== undefined && key !== '' ? `\`${clip(key)}\`: ${error.message}` : error.message,
       file: error.location.file ?? null,
       line: error.location.line ?? null,
       code: error.code,

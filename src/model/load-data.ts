@@ -2,7 +2,7 @@
  * Loads the columns one model needs from its training and hold-out files.
  */
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { InputError } from '../errors.js';
+import { clip, InputError } from '../errors.js';
 import type { ModelData } from '../checks/types.js';
 import { readTable } from '../data/table.js';
 import { allowOptimisingCompiler, SMALL_DATA_BYTES } from '../optimising-compiler.js';
@@ -47,7 +47,7 @@ export async function loadModelData(
   if (inputs.includes(data.target)) {
     throw new InputError(
       'target-as-input',
-      `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`,
+      `the target column \`${clip(data.target)}\` is also used as an input by a term; a model may not read its own target`,
       { file: descriptor.file, line: data.lines.target, key: 'data.target' },
     );
   }
@@ -63,7 +63,7 @@ export async function loadModelData(
       throw withAsker(error, descriptor);
     }
     if (table.rows === 0) {
-      throw new InputError('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
+      throw new InputError('no-rows', `\`${clip(path)}\` has a header but no data rows; expected at least one row`, {
         file: descriptor.file,
         line,
         key,
@@ -95,6 +95,6 @@ function withAsker(error: unknown, descriptor: Descriptor): unknown {
   const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
   const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
   if (asker === null) return error;
-  return new InputError(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
+  return new InputError(error.code, `${error.message} (asked for by ${asker} of ${clip(descriptor.file)})`, error.location);
 }
 

@@ -6,7 +6,7 @@
  * escaped so that it can never start a workflow command of its own.
  */
 import path from 'node:path';
-import type { InputError } from '../errors.js';
+import { clip, type InputError } from '../errors.js';
 import type { ModelResult, Result } from '../result.js';
 
 /** Severity of an annotation. */
@@ -146,7 +146,7 @@ export function inputErrorAnnotation(error: InputError, prefix = ''): Annotation
     ...(file !== undefined ? { file: workspacePath(prefix, file) } : {}),
     ...(file !== undefined && line !== undefined ? { line } : {}),
     title: 'fitgate could not run',
-    message: error.location.key !== undefined ? `\`${error.location.key}\`: ${error.message}` : error.message,
+    message: error.location.key !== undefined ? `\`${clip(error.location.key)}\`: ${error.message}` : error.message,
   };
 }
 
