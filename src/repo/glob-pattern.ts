@@ -54,17 +54,17 @@ export function patternProblem(pattern: string): PatternProblem | null {
   const p = pattern.replace(/\\/g, '/');
   if (p.includes('\u0000')) return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
   if (p.startsWith('/') || /^[A-Za-z]:/.test(p)) {
-    return { kind: 'outside', message: `pattern ${shown} is absolute; expected a pattern relative to the repository root` };
+    return { kind: 'outside', message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root` };
   }
   if (p.split(/[/{},()|]/).some((piece) => piece === '..')) {
-    return { kind: 'outside', message: `pattern ${shown} has a \`..\` segment; expected a pattern that stays inside the repository (no \`..\` anywhere, braces included)` };
+    return { kind: 'outside', message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)` };
   }
   const alternatives = expandBraces(p, MAX_ALTERNATIVES);
   if (alternatives === null) {
     return { kind: 'complex', message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)` };
   }
   if (alternatives.some((a) => a.startsWith('/') || /^[A-Za-z]:/.test(a))) {
-    return { kind: 'outside', message: `pattern ${shown} has an absolute alternative; expected patterns relative to the repository root` };
+    return { kind: 'outside', message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root` };
   }
   return null;
 }
