@@ -92,6 +92,7 @@ describe('fitgate merge', () => {
       html: null,
       sarif: null,
       junit: null,
+      expect: null,
     });
   });
 
