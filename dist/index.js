@@ -29242,7 +29242,7 @@ module.exports = {
 
 /***/ }),
 
-/***/ 6380:
+/***/ 7416:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -29265,143 +29265,10 @@ var errors = __nccwpck_require__(4296);
 var pipeline = __nccwpck_require__(9200);
 ;// CONCATENATED MODULE: external "node:child_process"
 const external_node_child_process_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
+// EXTERNAL MODULE: ./src/repo/glob-pattern.ts
+var glob_pattern = __nccwpck_require__(955);
 // EXTERNAL MODULE: ./src/repo/repo-path.ts
 var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/repo/glob-pattern.ts
-/**
- * A small glob matcher for readers without a file system (memory, git blobs). It follows
- * the rules the disk reader's tinyglobby applies with `dot: false`: `*` and `?` stay within
- * one path segment, `**` spans segments, `[...]` and `{a,b}` work, and wildcards do not
- * match a leading `.` of a segment.
- */
-
-
-/**
- * Compiles a glob pattern to a matcher of repository-relative paths.
- *
- * @param pattern e.g. `models/**\/*.model.yml`
- * @returns a predicate on `/`-separated paths
- */
-function globMatcher(pattern) {
-    const regexes = expandBraces(pattern).map((p) => new RegExp(`^${segmentsToRegex(p.split('/').filter((s, i, all) => s !== '' || i === all.length - 1))}$`));
-    return (path) => regexes.some((r) => r.test(path));
-}
-/** `{a,b}` to alternatives, nested braces included; an unclosed brace stays literal. */
-function expandBraces(pattern) {
-    let depth = 0;
-    let open = -1;
-    for (let i = 0; i < pattern.length; i++) {
-        const c = pattern[i];
-        if (c === '\\') {
-            i += 1;
-        }
-        else if (c === '{') {
-            if (depth === 0)
-                open = i;
-            depth += 1;
-        }
-        else if (c === '}' && depth > 0) {
-            depth -= 1;
-            if (depth === 0) {
-                const inner = pattern.slice(open + 1, i);
-                const parts = splitTopLevel(inner);
-                if (parts.length < 2)
-                    continue;
-                const head = pattern.slice(0, open);
-                const tail = pattern.slice(i + 1);
-                return parts.flatMap((part) => expandBraces(head + part + tail));
-            }
-        }
-    }
-    return [pattern];
-}
-function splitTopLevel(text) {
-    const parts = [];
-    let depth = 0;
-    let start = 0;
-    for (let i = 0; i < text.length; i++) {
-        const c = text[i];
-        if (c === '\\')
-            i += 1;
-        else if (c === '{')
-            depth += 1;
-        else if (c === '}')
-            depth -= 1;
-        else if (c === ',' && depth === 0) {
-            parts.push(text.slice(start, i));
-            start = i + 1;
-        }
-    }
-    parts.push(text.slice(start));
-    return parts;
-}
-const NO_DOT = '(?!\\.)';
-function segmentsToRegex(segments) {
-    let out = '';
-    for (let i = 0; i < segments.length; i++) {
-        const segment = segments[i];
-        const last = i === segments.length - 1;
-        if (segment === '**') {
-            // Zero or more whole segments, none starting with a dot.
-            out += last ? `(?:${NO_DOT}[^/]+(?:/${NO_DOT}[^/]+)*)?` : `(?:${NO_DOT}[^/]+/)*`;
-        }
-        else {
-            out += segmentToRegex(segment) + (last ? '' : '/');
-        }
-    }
-    return out;
-}
-function segmentToRegex(segment) {
-    let out = '';
-    for (let i = 0; i < segment.length; i++) {
-        const c = segment[i];
-        if (c === '\\' && i + 1 < segment.length) {
-            out += escapeRegex(segment[i + 1]);
-            i += 1;
-        }
-        else if (c === '*') {
-            while (segment[i + 1] === '*')
-                i += 1;
-            out += (out === '' ? NO_DOT : '') + '[^/]*';
-        }
-        else if (c === '?') {
-            out += (out === '' ? NO_DOT : '') + '[^/]';
-        }
-        else if (c === '[') {
-            const close = segment.indexOf(']', i + 2);
-            if (close < 0) {
-                out += '\\[';
-                continue;
-            }
-            const body = segment.slice(i + 1, close).replace(/\\/g, '\\\\');
-            const negated = body.startsWith('!') || body.startsWith('^');
-            out += negated ? `[^/${body.slice(1)}]` : `[${body}]`;
-            i = close;
-        }
-        else {
-            out += escapeRegex(c);
-        }
-    }
-    return out;
-}
-function escapeRegex(c) {
-    return /[.*+?^${}()|[\]\\/]/.test(c) ? `\\${c}` : c;
-}
-/**
- * One matcher per pattern of a settings file's `models` list (for readers without a disk: memory
- * and git commits). `\\` separators become `/` and leading `./` is dropped.
- * @throws InputError `path-outside` for an absolute pattern or one that starts with `..`
- */
-function patternMatchers(patterns) {
-    return patterns.map((pattern) => {
-        const p = pattern.replace(/\\/g, '/');
-        if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../')) {
-            throw new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-        }
-        return globMatcher(p.replace(/^(\.\/)+/, ''));
-    });
-}
-
 ;// CONCATENATED MODULE: ./src/repo/git-repository.ts
 /**
  * A {@link RepoReader} over one git commit: files are read from the commit's tree with
@@ -29505,7 +29372,7 @@ function createGitRepository(options) {
         listing ??= runGit(cwd, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit], 1024 * 1024 * 1024).then((out) => parseTree(out, prefix));
         return listing;
     };
-    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${JSON.stringify(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
+    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
     const missing = (file) => new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${label}; expected an existing file`, { file });
     /**
      * Follows links component by component inside the tree. Returns the final path and its entry
@@ -29537,17 +29404,44 @@ function createGitRepository(options) {
         const final = done.join('/');
         return { path: final, entry: entries.get(final) };
     }
-    /** The blob entry of a regular file at `p` (links followed), or an InputError. */
-    async function fileEntry(p) {
+    /** What `p` names (links followed inside the tree), with its entry when it is a file. */
+    async function kindOf(p) {
         const n = normalise(p);
         if (n === null)
             throw outside(p, {}, p);
         const real = await realPath(n);
         if (real === null)
             throw outside(p, {}, p);
-        if (real.entry?.kind !== 'file')
-            throw missing(n);
-        return real.entry;
+        const entry = real.entry;
+        if (entry?.kind === 'file')
+            return { kind: 'file', entry };
+        if (entry?.kind === 'other')
+            return { kind: 'special', entry: null };
+        // Not an entry of the tree: a folder (entries below it), a link that leads nowhere, or nothing.
+        const entries = await tree();
+        const below = real.path === '' ? '' : `${real.path}/`;
+        for (const key of entries.keys())
+            if (key.startsWith(below))
+                return { kind: 'folder', entry: null };
+        return { kind: real.path !== n || entries.get(n)?.kind === 'link' ? 'broken-link' : 'missing', entry: null };
+    }
+    /** The blob entry of a regular file at `p` (links followed), or an InputError. */
+    async function fileEntry(p) {
+        const { kind, entry } = await kindOf(p);
+        if (kind === 'missing')
+            throw missing(normalise(p) ?? p);
+        if (kind !== 'file' || entry === null)
+            throw (0,repo_path/* notAFileError */.V5)(kind === 'file' ? 'special' : kind, { file: p });
+        return entry;
+    }
+    /** Runs git for the bytes of a file; git's failure (a damaged object store) is `file-unreadable`. */
+    async function blob(p, args, maxBuffer) {
+        try {
+            return await runGit(cwd, args, maxBuffer);
+        }
+        catch (error) {
+            throw (0,repo_path/* unreadableError */.Sw)(error, { file: p });
+        }
     }
     return {
         label,
@@ -29564,12 +29458,15 @@ function createGitRepository(options) {
             const real = await realPath(n);
             return real?.entry?.kind === 'file';
         },
+        async entryKind(p) {
+            return (await kindOf(p)).kind;
+        },
         async size(p) {
             return (await fileEntry(p)).size;
         },
         async read(p) {
             const entry = await fileEntry(p);
-            return new Uint8Array(await runGit(cwd, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
+            return new Uint8Array(await blob(p, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
         },
         async *stream(p, chunkBytes = 1024 * 1024) {
             const entry = await fileEntry(p);
@@ -29591,22 +29488,25 @@ function createGitRepository(options) {
             }
             const code = await closed;
             if (code !== 0)
-                throw new Error(`git cat-file failed for ${p} in ${label} (exit status ${code})`);
+                throw (0,repo_path/* unreadableError */.Sw)({ code: `git cat-file exit status ${code}` }, { file: p });
             if (pendingBytes > 0)
                 yield new Uint8Array(Buffer.concat(pending));
         },
         async glob(patterns) {
-            const matchers = patternMatchers(patterns);
+            const compiled = (0,glob_pattern.compilePatterns)(patterns);
             const entries = await tree();
-            const found = [];
+            const paths = [];
+            const notEntered = [];
             for (const [p, entry] of entries) {
-                if (entry.kind === 'other' || (0,repo_path/* isIgnoredPath */.wY)(p) || !matchers.some((m) => m(p)))
-                    continue;
-                if (entry.kind === 'link' && (await realPath(p))?.entry?.kind !== 'file')
-                    continue;
-                found.push(p);
+                if (entry.kind === 'other')
+                    continue; // a submodule is a folder of another repository
+                if (compiled.matches(p))
+                    paths.push(p);
+                // A link a pattern would search below is never followed as a folder (as on disk).
+                if (entry.kind === 'link' && compiled.searchesBelow(p))
+                    notEntered.push(p);
             }
-            return found.sort();
+            return { paths: paths.sort(), notEntered: notEntered.sort() };
         },
     };
 }
@@ -29953,7 +29853,13 @@ const check = {
 };
 /* harmony default export */ const base_change = (check);
 
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
 ;// CONCATENATED MODULE: ./src/checks/coefficient-size.ts
+/**
+ * `coefficient-size`: the largest standardised coefficient.
+ */
+
 
 const coefficient_size_check = {
     id: 'coefficient-size',
@@ -29978,7 +29884,7 @@ const coefficient_size_check = {
         const term = design.termOffsets.findLastIndex((o) => o <= metrics.maxStdCoefficientColumn);
         return {
             value: metrics.maxStdCoefficient,
-            message: `largest standardised coefficient is ${(0,format/* formatNumber */.Z)(metrics.maxStdCoefficient)}, on column \`${column}\``,
+            message: `largest standardised coefficient is ${(0,format/* formatNumber */.Z)(metrics.maxStdCoefficient)}, on column \`${(0,errors/* clip */.$Q)(column)}\``,
             line: term >= 0 ? design.terms[term].spec.line : undefined,
             detail: { column },
         };
@@ -30438,6 +30344,10 @@ const complexity_check = {
 /* harmony default export */ const complexity = (complexity_check);
 
 ;// CONCATENATED MODULE: ./src/checks/conditioning.ts
+/**
+ * `conditioning`: condition number of the column-scaled design, naming nearly collinear terms.
+ */
+
 
 
 const conditioning_check = {
@@ -30473,7 +30383,7 @@ const conditioning_check = {
         };
         const terms = [...new Set(fit.collinearColumns.map(termOf).filter((t) => t >= 0))];
         const line = terms.length > 0 ? design.terms[terms[0]].spec.line : descriptor.fit.line;
-        const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
+        const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).map((c) => (0,errors/* clip */.$Q)(c)).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
         return {
             value,
             message: `the column-scaled design has condition number ${(0,format/* formatNumber */.Z)(value)} (rank ${fit.rank} of ${design.p})${value > 1e3 ? named : ''}`,
@@ -30573,6 +30483,10 @@ const cross_validation_check = {
 /* harmony default export */ const checks_cross_validation = (cross_validation_check);
 
 ;// CONCATENATED MODULE: ./src/checks/leakage.ts
+/**
+ * `leakage`: hold-out rows that repeat a training row.
+ */
+
 const leakage_check = {
     id: 'leakage',
     title: 'Hold-out rows in the training data',
@@ -30615,13 +30529,13 @@ const leakage_check = {
             train_file: train.file,
         };
         if (leak.inputMatches === 0) {
-            return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.join(', ')}`, metrics, detail };
+            return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')}`, metrics, detail };
         }
-        const lines = (file, ls) => `${file} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+        const lines = (file, ls) => `${(0,errors/* clip */.$Q)(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
         const target = leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
         return {
             value: leak.inputMatches,
-            message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
+            message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
             metrics,
             detail,
         };
@@ -30630,6 +30544,10 @@ const leakage_check = {
 /* harmony default export */ const leakage = (leakage_check);
 
 ;// CONCATENATED MODULE: ./src/checks/reproducibility.ts
+/**
+ * `reproducibility`: how far the descriptor's shipped coefficients are from the refit.
+ */
+
 
 
 
@@ -30671,7 +30589,7 @@ const reproducibility_check = {
         const coefDiff = shipped.maxCoefficientDifference;
         return {
             value,
-            message: `shipped and refit predictions differ by up to ${(0,format/* formatNumber */.Z)(diff)} on the hold-out rows (${(0,format/* formatNumber */.Z)(value * 100)} % of the training target's range ${(0,format/* formatNumber */.Z)(spread)}${row >= 0 ? `, ${holdout.file} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${(0,format/* formatNumber */.Z)(shippedRmse)}, refit ${(0,format/* formatNumber */.Z)(metrics.holdoutRmse)}`,
+            message: `shipped and refit predictions differ by up to ${(0,format/* formatNumber */.Z)(diff)} on the hold-out rows (${(0,format/* formatNumber */.Z)(value * 100)} % of the training target's range ${(0,format/* formatNumber */.Z)(spread)}${row >= 0 ? `, ${(0,errors/* clip */.$Q)(holdout.file)} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${(0,format/* formatNumber */.Z)(shippedRmse)}, refit ${(0,format/* formatNumber */.Z)(metrics.holdoutRmse)}`,
             metrics: { shipped_prediction_difference: (0,result/* jsonNumber */.qj)(value) },
             detail: (0,json/* jsonRecord */.eJ)({
                 max_prediction_difference: diff,
@@ -30688,6 +30606,10 @@ const reproducibility_check = {
 /* harmony default export */ const reproducibility = (reproducibility_check);
 
 ;// CONCATENATED MODULE: ./src/checks/swing.ts
+/**
+ * `swing`: how far predictions between the training samples leave the band of training targets.
+ */
+
 
 
 
@@ -30696,7 +30618,7 @@ function describePoint(point) {
     if (point === null)
         return '';
     return Object.entries(point.inputs)
-        .map(([name, v]) => `${name} = ${(0,format/* formatNumber */.Z)(v)}`)
+        .map(([name, v]) => `${(0,errors/* clip */.$Q)(name)} = ${(0,format/* formatNumber */.Z)(v)}`)
         .join(', ');
 }
 /** The chart data every swing outcome carries (see the README for its shape). */
@@ -30943,10 +30865,12 @@ function runCheck(check, context) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   $Q: () => (/* binding */ clip),
 /* harmony export */   cl: () => (/* binding */ quoteValue),
 /* harmony export */   dz: () => (/* binding */ InputError),
 /* harmony export */   gJ: () => (/* binding */ errorMessage)
 /* harmony export */ });
+/* unused harmony export MAX_QUOTED */
 /**
  * Errors that stop a run (exit status 2) as opposed to check findings (exit status 1).
  *
@@ -30972,9 +30896,14 @@ class InputError extends Error {
         this.code = code;
         this.location = location;
     }
-    /** `file:line:column: key: message`, leaving out the parts that are unknown. */
+    /**
+     * `file:line:column: key: message`, leaving out the parts that are unknown. The file and the
+     * key are user text (a path, a CSV column name) and are cut with {@link clip}.
+     */
     describe() {
-        const { file, line, column, key } = this.location;
+        const { line, column } = this.location;
+        const file = this.location.file === undefined ? undefined : clip(this.location.file);
+        const key = this.location.key === undefined ? undefined : clip(this.location.key);
         let where = file ?? '';
         if (file !== undefined && line !== undefined)
             where += `:${line}`;
@@ -30992,11 +30921,36 @@ function errorMessage(error) {
         return error.message;
     return String(error);
 }
-/** Quotes a user value for an error message, cut to `max` characters (default 80). */
-function quoteValue(value, max = 80) {
+/** Most characters of one piece of user text (a name, a cell, a path, a pattern) a message quotes. */
+const MAX_QUOTED = 80;
+/**
+ * The one way a message shortens user text: at most `max` characters (default
+ * {@link MAX_QUOTED}, 80), the start kept and an ellipsis `…` as the last character when
+ * something was cut. A cut never splits a UTF-16 surrogate pair. Every message that shows a
+ * name, cell, header, path or pattern from the repository passes it through here (or through
+ * {@link quoteValue}, which uses it).
+ *
+ * @param text the user text
+ * @param max largest length of the result in UTF-16 code units (at least 2); default 80
+ */
+function clip(text, max = MAX_QUOTED) {
+    if (text.length <= max)
+        return text;
+    let end = Math.max(1, max - 1);
+    const last = text.charCodeAt(end - 1);
+    if (last >= 0xd800 && last <= 0xdbff)
+        end -= 1;
+    return `${text.slice(0, end)}…`;
+}
+/**
+ * Quotes a user value for an error message: strings as JSON strings, other values as JSON,
+ * `undefined` as `nothing`; the whole cut with {@link clip} to `max` characters (default 80).
+ */
+function quoteValue(value, max = MAX_QUOTED) {
     let text;
+    // A long string is cut before quoting (its quoted form is longer than `max` either way).
     if (typeof value === 'string')
-        text = JSON.stringify(value);
+        text = JSON.stringify(value.length > max ? value.slice(0, max) : value);
     else if (value === undefined)
         text = 'nothing';
     else {
@@ -31007,7 +30961,7 @@ function quoteValue(value, max = 80) {
             text = String(value);
         }
     }
-    return text.length > max ? `${text.slice(0, max - 1)}…` : text;
+    return clip(text, max);
 }
 
 
@@ -31082,7 +31036,8 @@ function fromJsonNumber(x) {
 }
 /**
  * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
- * `undefined` fields dropped).
+ * `undefined` fields dropped). Objects come out without a prototype (their keys may be column
+ * names such as `__proto__`); `JSON.stringify` writes them as any object.
  *
  * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
  */
@@ -31096,7 +31051,8 @@ function jsonSafe(value) {
     if (Array.isArray(value))
         return value.map(jsonSafe);
     if (typeof value === 'object' && value !== undefined) {
-        const out = {};
+        // Keys may be column names (user text): no prototype, so `__proto__` is a name like any other.
+        const out = Object.create(null);
         for (const [k, v] of Object.entries(value))
             if (v !== undefined)
                 out[k] = jsonSafe(v);
@@ -31126,13 +31082,14 @@ function jsonMetrics(record) {
 /* harmony export */   CA: () => (/* binding */ emptyError),
 /* harmony export */   L6: () => (/* binding */ raggedError),
 /* harmony export */   NX: () => (/* binding */ planRequest),
+/* harmony export */   Vt: () => (/* binding */ MIN_NORMAL),
 /* harmony export */   W4: () => (/* binding */ cellNumber),
 /* harmony export */   _I: () => (/* binding */ DEFAULT_CHUNK_ROWS),
 /* harmony export */   fS: () => (/* binding */ DEFAULT_MAX_BYTES),
 /* harmony export */   j7: () => (/* binding */ planColumns),
 /* harmony export */   vB: () => (/* binding */ ChunkBuilder)
 /* harmony export */ });
-/* unused harmony exports DECIMAL_NUMBER, cellError */
+/* unused harmony exports MAX_HEADER_COLUMNS, DECIMAL_NUMBER, layoutHint, underflows, cellError */
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /**
  * The rules both CSV paths share, kept in one place so that the fast path and the general
@@ -31148,6 +31105,14 @@ const DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
 const MAX_NAMES_LISTED = 20;
 /** How many characters of a bad cell an error message quotes. */
 const MAX_CELL_QUOTED = 40;
+/** Most columns a header may name (a header that is the whole of a mis-separated file stops here). */
+const MAX_HEADER_COLUMNS = 100_000;
+/**
+ * Smallest positive normal double, 2^-1022 (IEEE 754 binary64). A nonzero decimal whose value
+ * is below it reads as a subnormal (fewer significant bits) or as 0: an underflow, refused like
+ * an overflow.
+ */
+const MIN_NORMAL = 2.2250738585072014e-308;
 /**
  * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
  * (empty text, `Infinity`, hexadecimal / binary / octal prefixes): optional sign, digits
@@ -31183,6 +31148,12 @@ function planRequest(columns) {
  * @param request the distinct requested columns
  */
 function planColumns(file, header, headerLine, request) {
+    if (header.some((name) => name.includes('\r'))) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-line-ends', 'the header holds a carriage return that no line feed follows; expected lines ending with a line feed (LF or CRLF). Hint: the file has CR-only line ends (as classic Mac OS wrote them): save it with LF or CRLF line ends', { file, line: headerLine });
+    }
+    if (header.length > MAX_HEADER_COLUMNS) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-header-too-wide', `the header names ${header.length} columns; expected at most ${MAX_HEADER_COLUMNS}${layoutHint(header)}`, { file, line: headerLine });
+    }
     const position = new Map();
     header.forEach((name, i) => {
         const earlier = position.get(name);
@@ -31196,7 +31167,7 @@ function planColumns(file, header, headerLine, request) {
         const listed = header.slice(0, MAX_NAMES_LISTED).map((name) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED));
         const more = header.length > MAX_NAMES_LISTED ? `, … (${header.length - MAX_NAMES_LISTED} more)` : '';
         const wanted = missing.map((name) => (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(name, MAX_CELL_QUOTED)).join(', ');
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-missing-column', `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`, { file, line: headerLine, key: missing[0] });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-missing-column', `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}${layoutHint(header)}`, { file, line: headerLine, key: missing[0] });
     }
     const slotOfField = new Int32Array(header.length).fill(-1);
     const fieldOfSlot = new Int32Array(request.distinct.length);
@@ -31207,10 +31178,55 @@ function planColumns(file, header, headerLine, request) {
     });
     return { header, headerLine, slotOfField, fieldOfSlot };
 }
+/** First line of a Git LFS pointer file (git-lfs specification, "version https://git-lfs.github.com/spec/v1"). */
+const LFS_POINTER = 'version https://git-lfs.github.com/spec/';
+/**
+ * A one-sentence hint (starting `. Hint: `) when a header looks like a file that is not
+ * comma-separated CSV at all: a Git LFS pointer (the data was never fetched), a file separated by
+ * semicolons or tabs (one column whose name holds the separators); '' otherwise.
+ *
+ * @param header the header names as read
+ */
+function layoutHint(header) {
+    const only = header.length === 1 ? header[0] : '';
+    if (header.length > 0 && header[0].startsWith(LFS_POINTER)) {
+        return '. Hint: the file is a Git LFS pointer, not the data: fetch the LFS objects before the check (`git lfs pull`, or `lfs: true` on the checkout step)';
+    }
+    if (only.includes(';'))
+        return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; fitgate reads comma-separated files';
+    if (only.includes('\t'))
+        return '. Hint: the header holds tabs and no commas: the file looks tab-separated; fitgate reads comma-separated files';
+    return '';
+}
+/**
+ * True when the decimal text has a nonzero digit before its exponent (its value is not 0).
+ * @param text a {@link DECIMAL_NUMBER} text
+ */
+function nonzeroDecimal(text) {
+    for (let i = 0; i < text.length; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 101 || c === 69)
+            return false; // e, E: the exponent starts
+        if (c >= 49 && c <= 57)
+            return true; // 1-9
+    }
+    return false;
+}
+/**
+ * True when a decimal text's value underflows: the text names a nonzero number, but `Number()`
+ * gives 0 or a subnormal (below {@link MIN_NORMAL} in size), e.g. `1e-400` or `2.5e-320`.
+ *
+ * @param text a {@link DECIMAL_NUMBER} text
+ * @param value `Number(text)`
+ */
+function underflows(text, value) {
+    return Math.abs(value) < MIN_NORMAL && (value !== 0 || nonzeroDecimal(text));
+}
 /**
  * Reads one cell of a requested column as the general path does: trims white space (as
  * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
- * value is finite. Anything else throws InputError `csv-cell`.
+ * value is finite and does not underflow (see {@link underflows}). Anything else throws
+ * InputError `csv-cell`.
  *
  * @param cell the field text (quotes already removed)
  * @param file repository-relative path, for messages
@@ -31221,17 +31237,20 @@ function cellNumber(cell, file, line, column) {
     const text = cell.trim();
     if (DECIMAL_NUMBER.test(text)) {
         const value = Number(text);
-        if (Number.isFinite(value))
+        if (Number.isFinite(value) && !underflows(text, value))
             return value;
     }
     throw cellError(cell, file, line, column);
 }
-/** The `csv-cell` error for a cell that is not a finite decimal number. */
+/** The `csv-cell` error for a cell that is not a finite decimal number (or underflows). */
 function cellError(cell, file, line, column) {
     const text = cell.trim();
     let why;
     if (text === '')
         why = 'the cell is empty';
+    else if (DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text))) {
+        why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}, which is nonzero but too small for 64-bit floating point (below about 2.2e-308 in size it reads as 0 or loses precision); rescale the column`;
+    }
     else if (DECIMAL_NUMBER.test(text))
         why = `got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
     else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text))
@@ -31362,9 +31381,11 @@ class ChunkBuilder {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   D: () => (/* binding */ lineBlocks),
-/* harmony export */   S: () => (/* binding */ encodingError)
+/* harmony export */   Dr: () => (/* binding */ lineBlocks),
+/* harmony export */   Si: () => (/* binding */ blockError),
+/* harmony export */   Sj: () => (/* binding */ encodingError)
 /* harmony export */ });
+/* unused harmony exports MAX_HEADER_BYTES, headerTooLongError */
 /* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4573);
 /* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_buffer__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
@@ -31377,8 +31398,12 @@ class ChunkBuilder {
  */
 
 
+/** The header, with any blank lines before it, must end within this many bytes of the file's start (1 MiB). */
+const MAX_HEADER_BYTES = 1024 * 1024;
 const LF = 10;
+const CR = 13;
 const BOM = [0xef, 0xbb, 0xbf];
+const decoder = new TextDecoder('utf-8');
 /**
  * Streams `pieces` as blocks of whole lines, checked to be UTF-8.
  *
@@ -31386,6 +31411,9 @@ const BOM = [0xef, 0xbb, 0xbf];
  * that are not UTF-8, the lines before it are still yielded, then a block with `badUtf8`
  * ends the stream: so errors always surface in file order, whatever the piece sizes.
  * An empty file yields nothing. No piece is copied except the line that straddles two pieces.
+ * Until the header (the first line that is not blank) has ended, at most
+ * {@link MAX_HEADER_BYTES} bytes are held: past that, a block with `headerTooLong` ends the
+ * stream, so a file that is one endless line is refused before it is in memory.
  *
  * @param pieces the file's bytes in pieces of any size (an empty piece is allowed)
  */
@@ -31393,12 +31421,27 @@ async function* lineBlocks(pieces) {
     let pending = [];
     let pendingBytes = 0;
     let first = true;
-    /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8). */
+    /** Bytes handed out (or passed over as a byte-order mark) so far. */
+    let consumed = 0;
+    /** True once a line that is not blank has ended within the cap. */
+    let headerEnded = false;
+    /** The block that ends the stream for a header over the cap. */
+    const tooLong = (held) => ({
+        bytes: new Uint8Array(0),
+        final: false,
+        badUtf8: false,
+        utf16: false,
+        headerTooLong: true,
+        loneCarriageReturn: held.some(hasLoneCarriageReturn),
+    });
+    /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8, header too long). */
     function* emit(bytes, final) {
         if (first) {
             first = false;
-            if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2])
+            if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2]) {
                 bytes = bytes.subarray(3);
+                consumed += 3;
+            }
             else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
                 yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
                 return false;
@@ -31406,6 +31449,16 @@ async function* lineBlocks(pieces) {
         }
         if (bytes.length === 0)
             return true;
+        if (!headerEnded) {
+            const end = headerEnd(bytes);
+            if (end >= 0)
+                headerEnded = true;
+            if (consumed + (end >= 0 ? end : bytes.length) > MAX_HEADER_BYTES) {
+                yield tooLong([bytes]);
+                return false;
+            }
+        }
+        consumed += bytes.length;
         const good = utf8Prefix(bytes);
         if (good === bytes.length) {
             yield { bytes, final, badUtf8: false, utf16: false };
@@ -31423,6 +31476,11 @@ async function* lineBlocks(pieces) {
         if (firstCut === 0) {
             pending.push(piece);
             pendingBytes += piece.length;
+            if (!headerEnded && consumed + pendingBytes > MAX_HEADER_BYTES) {
+                // Still no line end, and the header would be over the cap: stop holding bytes.
+                yield tooLong(pending);
+                return;
+            }
             continue;
         }
         // The line that straddles the previous pieces and this one, then this piece's whole lines.
@@ -31441,6 +31499,29 @@ async function* lineBlocks(pieces) {
     }
     if (pendingBytes > 0)
         yield* emit(concat(pending, pendingBytes), true);
+}
+/**
+ * Offset just past the end of the first line in `bytes` that is not blank (white space only, as
+ * `String.prototype.trim` defines it), or -1 when every line is blank. The end of `bytes` ends
+ * its last line.
+ */
+function headerEnd(bytes) {
+    let start = 0;
+    while (start < bytes.length) {
+        const lf = bytes.indexOf(LF, start);
+        const end = lf === -1 ? bytes.length : lf + 1;
+        if (decoder.decode(bytes.subarray(start, end)).trim() !== '')
+            return end;
+        start = end;
+    }
+    return -1;
+}
+/** True when `bytes` hold a carriage return that no line feed follows (at the end too). */
+function hasLoneCarriageReturn(bytes) {
+    for (let i = bytes.indexOf(CR); i !== -1; i = bytes.indexOf(CR, i + 1))
+        if (bytes[i + 1] !== LF)
+            return true;
+    return false;
 }
 function concat(parts, total) {
     if (parts.length === 1)
@@ -31466,6 +31547,35 @@ function utf8Prefix(bytes) {
         start = end;
     }
     return start;
+}
+/**
+ * The `csv-header-too-long` error: the header does not end within {@link MAX_HEADER_BYTES}.
+ * @param file repository-relative path
+ * @param line 1-based line where the header starts
+ * @param loneCarriageReturn the bytes read hold carriage returns without line feeds
+ */
+function headerTooLongError(file, line, loneCarriageReturn) {
+    const hint = loneCarriageReturn
+        ? '. Hint: the file has CR-only line ends (as classic Mac OS wrote them), so it reads as one line: save it with LF or CRLF line ends'
+        : '. Hint: a file without line feeds (not CSV text, or one record per file) reads as one line';
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('csv-header-too-long', `the header line does not end within the first ${MAX_HEADER_BYTES} bytes (1 MiB) of the file; expected a header of comma-separated column names on one line${hint}`, {
+        file,
+        line,
+    });
+}
+/**
+ * The error a reader throws for a block that ends the stream (`badUtf8` or `headerTooLong`),
+ * or null for a block of lines. Both CSV paths go through here, so they give the same error.
+ * @param file repository-relative path
+ * @param line 1-based line right after the lines read so far
+ * @param block the block
+ */
+function blockError(file, line, block) {
+    if (block.headerTooLong === true)
+        return headerTooLongError(file, line, block.loneCarriageReturn === true);
+    if (block.badUtf8)
+        return encodingError(file, line, block.utf16);
+    return null;
 }
 /**
  * The `csv-encoding` error for a line that is not UTF-8.
@@ -31702,7 +31812,7 @@ function polynomialTerm(spec, training, file) {
         shift ??= mean;
         if (scale === null) {
             if (!(sd > 0)) {
-                throw new errors/* InputError */.dz('constant-input', `column \`${spec.of}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`, { file, line: spec.line, key: 'polynomial.of' });
+                throw new errors/* InputError */.dz('constant-input', `column \`${(0,errors/* clip */.$Q)(spec.of)}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`, { file, line: spec.line, key: 'polynomial.of' });
             }
             scale = sd;
         }
@@ -32412,7 +32522,7 @@ function gapRatio(trainRmse, holdoutRmse) {
 /* harmony export */   Ko: () => (/* binding */ readInputs)
 /* harmony export */ });
 /* unused harmony exports INPUT_DEFAULTS, checkOutputFile */
-/* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8298);
+/* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6257);
 /* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3024);
 /* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var node_os__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8161);
@@ -35873,9 +35983,9 @@ function twoProductError(a, b, prod) {
 /***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
 
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8298);
+/* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6257);
 /* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(157);
-/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6380);
+/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(7416);
 /* harmony import */ var _action_comment_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1151);
 /* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_17__ = __nccwpck_require__(3566);
 /* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5505);
@@ -36064,13 +36174,12 @@ __webpack_async_result__();
 
 
 
-/** Glob patterns never searched. */
-const IGNORED_GLOBS = ['**/node_modules/**', '**/.git/**'];
 /**
  * RepoReader over a folder on disk. Every path is checked: absolute paths, `..` escapes and
  * symbolic links (at any level) whose real path is outside the root's real path are
  * InputError `path-outside`; nothing outside the root is ever opened (the real path is
- * checked before opening).
+ * checked before opening). Whatever the system refuses while reading (permissions, I/O
+ * errors) is InputError `file-unreadable` naming the file, never a bare system error.
  *
  * @param root the repository folder (absolute, or relative to the working directory)
  */
@@ -36095,9 +36204,9 @@ function createFsRepository(root) {
         catch (error) {
             const code = codeOf(error);
             if (code === 'ELOOP')
-                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(shown)} goes round a loop of symbolic links; expected a plain path`, where);
             if (code !== 'ENOENT' && code !== 'ENOTDIR')
-                throw error;
+                throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, where);
         }
         if (real === null) {
             // Missing: still refuse when an existing folder on the way leads outside.
@@ -36122,13 +36231,30 @@ function createFsRepository(root) {
         return real;
     };
     const check = async (path) => realInside((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(path), { file: path }, path);
-    const requireFile = async (path) => {
+    /** What `path` names, and its real path when something is there. */
+    const kindOf = async (path) => {
         const real = await check(path);
-        if (real === null)
+        if (real === null) {
+            // Nothing at the end of the links: a link that leads nowhere is not "missing".
+            const base = await rootReal();
+            const rel = (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(path);
+            const lexical = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...rel.split('/'));
+            try {
+                return { kind: (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(lexical).isSymbolicLink() ? 'broken-link' : 'missing', real: null };
+            }
+            catch {
+                return { kind: 'missing', real: null };
+            }
+        }
+        const info = await stat(real, { file: path });
+        return { kind: info.isFile() ? 'file' : info.isDirectory() ? 'folder' : 'special', real };
+    };
+    const requireFile = async (path) => {
+        const { kind, real } = await kindOf(path);
+        if (kind === 'missing')
             throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
-        const info = await stat(real);
-        if (!info.isFile())
-            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .FILE_MISSING */ .GY, `is not a regular file (a folder or device); expected a file`, { file: path });
+        if (kind !== 'file' || real === null)
+            throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .notAFileError */ .V5)(kind === 'file' ? 'special' : kind, { file: path });
         return real;
     };
     return {
@@ -36140,20 +36266,32 @@ function createFsRepository(root) {
             return rel;
         },
         async isFile(path) {
-            const real = await check(path);
-            if (real === null)
-                return false;
-            return (await stat(real)).isFile();
+            return (await kindOf(path)).kind === 'file';
+        },
+        async entryKind(path) {
+            return (await kindOf(path)).kind;
         },
         async size(path) {
-            return (await stat(await requireFile(path))).size;
+            return (await stat(await requireFile(path), { file: path })).size;
         },
         async read(path) {
-            return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readFileSync)(await requireFile(path));
+            const real = await requireFile(path);
+            try {
+                return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readFileSync)(real);
+            }
+            catch (error) {
+                throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, { file: path });
+            }
         },
         async *stream(path, chunkBytes = 1024 * 1024) {
             const real = await requireFile(path);
-            const fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(real, 'r');
+            let fd;
+            try {
+                fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(real, 'r');
+            }
+            catch (error) {
+                throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, { file: path });
+            }
             try {
                 // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
                 // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
@@ -36161,7 +36299,13 @@ function createFsRepository(root) {
                 const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fstatSync)(fd).size + 1)));
                 for (;;) {
                     const piece = Buffer.allocUnsafe(size);
-                    const n = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync)(fd, piece, 0, size, null);
+                    let n;
+                    try {
+                        n = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.readSync)(fd, piece, 0, size, null);
+                    }
+                    catch (error) {
+                        throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, { file: path });
+                    }
                     if (n === 0)
                         return;
                     yield n === size ? piece : piece.subarray(0, n);
@@ -36172,25 +36316,13 @@ function createFsRepository(root) {
             }
         },
         async glob(patterns) {
-            for (const pattern of patterns) {
-                const p = pattern.replace(/\\/g, '/');
-                if ((0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .isAbsoluteLike */ .tp)(pattern) || p === '..' || p.startsWith('../')) {
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-                }
-            }
+            // The matcher and the walk are loaded when a run globs (a run given its descriptors never
+            // does); the patterns are checked (and refused) before the first folder is listed.
+            const [{ compilePatterns }, { walkTree }] = await Promise.all([Promise.resolve(/* import() */).then(__nccwpck_require__.bind(__nccwpck_require__, 955)), __nccwpck_require__.e(/* import() */ 502).then(__nccwpck_require__.bind(__nccwpck_require__, 9502))]);
+            const compiled = compilePatterns(patterns);
             if (patterns.length === 0)
-                return [];
-            // tinyglobby is loaded when a run globs (a run given its descriptors never does).
-            const { glob: tinyGlob } = await __nccwpck_require__.e(/* import() */ 382).then(__nccwpck_require__.bind(__nccwpck_require__, 3382));
-            const found = await tinyGlob(patterns, {
-                cwd: await rootReal(),
-                onlyFiles: true,
-                followSymbolicLinks: false,
-                dot: false,
-                ignore: IGNORED_GLOBS,
-            });
-            const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !(0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .isIgnoredPath */ .wY)(p)));
-            return [...paths].sort();
+                return { paths: [], notEntered: [] };
+            return walkTree(await rootReal(), compiled);
         },
     };
 }
@@ -36198,19 +36330,388 @@ function createFsRepository(root) {
 async function realpath(path) {
     return node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync.native(path);
 }
-/** File information, as a promise. */
-async function stat(path) {
-    return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(path);
+/** File information, as a promise; a system error is InputError `file-unreadable` at `where`. */
+async function stat(path, where) {
+    try {
+        return (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(path);
+    }
+    catch (error) {
+        throw (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .unreadableError */ .Sw)(error, where);
+    }
 }
 function isInside(base, real) {
     const rel = node_path__WEBPACK_IMPORTED_MODULE_1__.relative(base, real);
     return rel === '' || (rel !== '..' && !rel.startsWith(`..${node_path__WEBPACK_IMPORTED_MODULE_1__.sep}`) && !node_path__WEBPACK_IMPORTED_MODULE_1__.isAbsolute(rel));
 }
 function outside(shown, where) {
-    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .PATH_OUTSIDE */ .oE, `path ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
 }
 function codeOf(error) {
     return error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : undefined;
+}
+
+
+/***/ }),
+
+/***/ 955:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+__nccwpck_require__.r(__webpack_exports__);
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   GLOB_TOO_COMPLEX: () => (/* binding */ GLOB_TOO_COMPLEX),
+/* harmony export */   MAX_ALTERNATIVES: () => (/* binding */ MAX_ALTERNATIVES),
+/* harmony export */   MAX_PATTERN_LENGTH: () => (/* binding */ MAX_PATTERN_LENGTH),
+/* harmony export */   compilePatterns: () => (/* binding */ compilePatterns),
+/* harmony export */   expandBraces: () => (/* binding */ expandBraces),
+/* harmony export */   globMatcher: () => (/* binding */ globMatcher),
+/* harmony export */   patternProblem: () => (/* binding */ patternProblem)
+/* harmony export */ });
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/* harmony import */ var _repo_path_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3856);
+/**
+ * The glob matcher of the `models` patterns, one for every reader (disk, git commit, memory):
+ * `*` and `?` stay within one path segment, `**` spans segments, `[...]` (with `!` or `^` to
+ * negate, `a-z` ranges) and `{a,b}` (nested too) work, wildcards and `**` do not match a leading
+ * `.` of a segment, and the segments `node_modules` and `.git` are matched only by a pattern
+ * segment that names them literally. `\` is a path separator, as on Windows. There are no
+ * extglobs: `(`, `|` and `)` are plain characters.
+ *
+ * Matching takes time linear in the pattern times the path: a segment is matched by the greedy
+ * wildcard algorithm that returns only to the last `*` (each `*` is tried at each position at most
+ * once), and `**` by a set of pattern positions carried along the path's segments (a
+ * nondeterministic automaton, never backtracking). A pattern of many stars answers at once.
+ *
+ * Patterns are bounded before anything is matched: at most {@link MAX_PATTERN_LENGTH} characters
+ * and {@link MAX_ALTERNATIVES} alternatives once braces are expanded; a `..` segment anywhere
+ * (inside braces and parentheses too) and an absolute pattern are refused.
+ */
+
+
+/** Longest `models` pattern accepted, in characters. */
+const MAX_PATTERN_LENGTH = 1000;
+/** Most alternatives one pattern may expand to through its `{a,b}` braces. */
+const MAX_ALTERNATIVES = 256;
+/** Code of a pattern over the length or alternatives cap. */
+const GLOB_TOO_COMPLEX = 'glob-too-complex';
+/** Folder names entered (and matched) only when a pattern segment names them literally. */
+const PROTECTED = new Set(['node_modules', '.git']);
+/**
+ * Checks a `models` pattern before it is used.
+ *
+ * @param pattern the pattern as written
+ * @returns null when it is usable, else the problem: `outside` for an absolute pattern or a `..`
+ *   segment anywhere (also between braces, commas, parentheses or bars: `{..,a}/x`, `@(..)/x`),
+ *   `complex` for more than {@link MAX_PATTERN_LENGTH} characters or more than
+ *   {@link MAX_ALTERNATIVES} brace alternatives
+ */
+function patternProblem(pattern) {
+    const shown = (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(pattern);
+    if (pattern.length > MAX_PATTERN_LENGTH) {
+        return { kind: 'complex', message: `pattern ${shown} has ${pattern.length} characters; expected at most ${MAX_PATTERN_LENGTH}` };
+    }
+    const p = pattern.replace(/\\/g, '/');
+    if (p.includes('\u0000'))
+        return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
+    if (p.startsWith('/') || /^[A-Za-z]:/.test(p)) {
+        return { kind: 'outside', message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root` };
+    }
+    if (p.split(/[/{},()|]/).some((piece) => piece === '..')) {
+        return { kind: 'outside', message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)` };
+    }
+    const alternatives = expandBraces(p, MAX_ALTERNATIVES);
+    if (alternatives === null) {
+        return { kind: 'complex', message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)` };
+    }
+    if (alternatives.some((a) => a.startsWith('/') || /^[A-Za-z]:/.test(a))) {
+        return { kind: 'outside', message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root` };
+    }
+    return null;
+}
+/**
+ * `{a,b}` to alternatives, nested braces included; an unclosed brace and a brace without a
+ * top-level comma stay literal.
+ *
+ * @param pattern the pattern
+ * @param limit most alternatives; default {@link MAX_ALTERNATIVES}
+ * @returns the alternatives, or null when there would be more than `limit` (found without
+ *   making them all)
+ */
+function expandBraces(pattern, limit = MAX_ALTERNATIVES) {
+    const out = [];
+    // A stack of texts still to expand, so that no recursion depth depends on the pattern.
+    const todo = [pattern];
+    let steps = 0;
+    while (todo.length > 0) {
+        // Each step either finishes an alternative or splits one brace: bounded by the limit.
+        if (++steps > 4 * limit + pattern.length)
+            return null;
+        const text = todo.pop();
+        const group = firstBraceGroup(text);
+        if (group === null) {
+            out.push(text);
+            if (out.length > limit)
+                return null;
+            continue;
+        }
+        const { open, close, parts } = group;
+        if (out.length + todo.length + parts.length > limit)
+            return null;
+        const head = text.slice(0, open);
+        const tail = text.slice(close + 1);
+        for (let k = parts.length - 1; k >= 0; k--)
+            todo.push(head + parts[k] + tail);
+    }
+    return out;
+}
+/** The first top-level `{...}` with a top-level comma, or null. */
+function firstBraceGroup(text) {
+    let depth = 0;
+    let open = -1;
+    for (let i = 0; i < text.length; i++) {
+        const c = text[i];
+        if (c === '{') {
+            if (depth === 0)
+                open = i;
+            depth += 1;
+        }
+        else if (c === '}' && depth > 0) {
+            depth -= 1;
+            if (depth === 0) {
+                const parts = splitTopLevel(text.slice(open + 1, i));
+                if (parts.length >= 2)
+                    return { open, close: i, parts };
+            }
+        }
+    }
+    return null;
+}
+function splitTopLevel(text) {
+    const parts = [];
+    let depth = 0;
+    let start = 0;
+    for (let i = 0; i < text.length; i++) {
+        const c = text[i];
+        if (c === '{')
+            depth += 1;
+        else if (c === '}')
+            depth -= 1;
+        else if (c === ',' && depth === 0) {
+            parts.push(text.slice(start, i));
+            start = i + 1;
+        }
+    }
+    parts.push(text.slice(start));
+    return parts;
+}
+/** Reads a segment pattern into tokens (runs of `*` become one). */
+function compileSegment(text) {
+    if (text === '**')
+        return { kind: 'globstar' };
+    const tokens = [];
+    let wild = false;
+    for (let i = 0; i < text.length; i++) {
+        const c = text[i];
+        if (c === '*') {
+            while (text[i + 1] === '*')
+                i += 1;
+            tokens.push({ kind: 'star' });
+            wild = true;
+        }
+        else if (c === '?') {
+            tokens.push({ kind: 'any' });
+            wild = true;
+        }
+        else if (c === '[') {
+            const close = text.indexOf(']', i + 2);
+            if (close < 0) {
+                tokens.push({ kind: 'char', code: 91 });
+                continue;
+            }
+            let body = text.slice(i + 1, close);
+            const negated = body.startsWith('!') || body.startsWith('^');
+            if (negated)
+                body = body.slice(1);
+            const ranges = [];
+            for (let k = 0; k < body.length; k++) {
+                const lo = body.charCodeAt(k);
+                if (body[k + 1] === '-' && k + 2 < body.length) {
+                    ranges.push(lo, body.charCodeAt(k + 2));
+                    k += 2;
+                }
+                else
+                    ranges.push(lo, lo);
+            }
+            tokens.push({ kind: 'class', negated, ranges });
+            wild = true;
+            i = close;
+        }
+        else {
+            tokens.push({ kind: 'char', code: text.charCodeAt(i) });
+        }
+    }
+    if (!wild)
+        return { kind: 'literal', text };
+    return { kind: 'wild', tokens, noDot: tokens[0].kind === 'star' || tokens[0].kind === 'any' };
+}
+function tokenMatches(token, code) {
+    switch (token.kind) {
+        case 'char':
+            return token.code === code;
+        case 'any':
+            return true;
+        case 'class': {
+            let inside = false;
+            for (let k = 0; k < token.ranges.length && !inside; k += 2)
+                inside = code >= token.ranges[k] && code <= token.ranges[k + 1];
+            return inside !== token.negated;
+        }
+        default:
+            return false;
+    }
+}
+/**
+ * Matches one path segment: the greedy wildcard algorithm that returns only to the latest `*`
+ * (time at most tokens x characters).
+ */
+function segmentMatches(segment, name) {
+    if (segment.kind === 'globstar')
+        return globstarTakes(name);
+    if (segment.kind === 'literal')
+        return segment.text === name;
+    if (PROTECTED.has(name))
+        return false;
+    if (segment.noDot && name.charCodeAt(0) === 46)
+        return false;
+    const tokens = segment.tokens;
+    let t = 0;
+    let n = 0;
+    let starT = -1;
+    let starN = 0;
+    while (n < name.length) {
+        if (t < tokens.length && tokens[t].kind === 'star') {
+            starT = t;
+            starN = n;
+            t += 1;
+        }
+        else if (t < tokens.length && tokenMatches(tokens[t], name.charCodeAt(n))) {
+            t += 1;
+            n += 1;
+        }
+        else if (starT >= 0) {
+            t = starT + 1;
+            starN += 1;
+            n = starN;
+        }
+        else
+            return false;
+    }
+    while (t < tokens.length && tokens[t].kind === 'star')
+        t += 1;
+    return t === tokens.length;
+}
+/** True when `**` may take this segment: not empty, no leading dot, not `node_modules`. */
+function globstarTakes(name) {
+    return name !== '' && name.charCodeAt(0) !== 46 && !PROTECTED.has(name);
+}
+/** Adds `i` and every position after a run of `**` (not the last segment) that may take no segment. */
+function close(alt, positions) {
+    const seen = new Set();
+    const todo = [...positions];
+    while (todo.length > 0) {
+        const i = todo.pop();
+        if (seen.has(i))
+            continue;
+        seen.add(i);
+        const seg = alt.segments[i];
+        // A `**` before another segment may take no segment; the last `**` takes at least one
+        // (`deep/**` matches files below `deep`, not `deep` itself).
+        if (seg !== undefined && seg.kind === 'globstar' && i < alt.segments.length - 1)
+            todo.push(i + 1);
+    }
+    return [...seen].sort((a, b) => a - b);
+}
+function stepAlternative(alt, positions, name) {
+    const next = [];
+    const last = alt.segments.length - 1;
+    for (const i of positions) {
+        const seg = alt.segments[i];
+        if (seg === undefined)
+            continue;
+        if (seg.kind === 'globstar') {
+            if (globstarTakes(name)) {
+                next.push(i);
+                if (i === last)
+                    next.push(i + 1);
+            }
+        }
+        else if (segmentMatches(seg, name))
+            next.push(i + 1);
+    }
+    return next.length === 0 ? next : close(alt, next);
+}
+/**
+ * Compiles `models` patterns (each checked with {@link patternProblem}).
+ *
+ * @param patterns the patterns as written; `\` separators become `/`, a leading `./` is dropped,
+ *   empty segments (`a//b`) are dropped
+ * @throws InputError `path-outside` for a pattern that leaves the repository, `glob-too-complex`
+ *   for one over the caps
+ */
+function compilePatterns(patterns) {
+    const alternatives = [];
+    for (const pattern of patterns) {
+        const problem = patternProblem(pattern);
+        if (problem !== null)
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(problem.kind === 'outside' ? _repo_path_js__WEBPACK_IMPORTED_MODULE_1__/* .PATH_OUTSIDE */ .oE : GLOB_TOO_COMPLEX, problem.message, {});
+        const text = pattern.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
+        for (const alt of expandBraces(text) ?? []) {
+            const parts = alt.replace(/^(\.\/)+/, '').split('/').filter((s) => s !== '' && s !== '.');
+            // A pattern ending with `/` names folders, and a folder is never a descriptor: an empty
+            // last segment matches no name.
+            const segments = parts.map(compileSegment);
+            if (alt.endsWith('/'))
+                segments.push({ kind: 'literal', text: '' });
+            if (parts.length > 0)
+                alternatives.push({ segments });
+        }
+    }
+    const start = alternatives.map((alt) => close(alt, [0]));
+    const step = (state, name) => state.map((positions, a) => (positions.length === 0 ? positions : stepAlternative(alternatives[a], positions, name)));
+    const accepts = (state) => state.some((positions, a) => positions.includes(alternatives[a].segments.length));
+    const alive = (state) => state.some((positions, a) => positions.some((i) => i < alternatives[a].segments.length));
+    const walk = (path) => {
+        let state = start;
+        for (const name of path.split('/')) {
+            if (!alive(state))
+                return null;
+            state = step(state, name);
+        }
+        return state;
+    };
+    return {
+        start,
+        step,
+        accepts,
+        alive,
+        matches(path) {
+            const state = walk(path);
+            return state !== null && accepts(state);
+        },
+        searchesBelow(path) {
+            const state = walk(path);
+            return state !== null && alive(state);
+        },
+    };
+}
+/**
+ * A matcher of repository-relative paths for one pattern (see {@link compilePatterns}).
+ *
+ * @param pattern e.g. `models/**\/*.model.yml`
+ * @returns a predicate on `/`-separated paths
+ */
+function globMatcher(pattern) {
+    const set = compilePatterns([pattern]);
+    return (path) => set.matches(path);
 }
 
 
@@ -36289,13 +36790,17 @@ function realFolder(named, options) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   FP: () => (/* binding */ FILE_UNREADABLE),
 /* harmony export */   GY: () => (/* binding */ FILE_MISSING),
+/* harmony export */   Gk: () => (/* binding */ kindWords),
 /* harmony export */   Gn: () => (/* binding */ normaliseRepoPath),
 /* harmony export */   Kp: () => (/* binding */ joinRepoPath),
-/* harmony export */   oE: () => (/* binding */ PATH_OUTSIDE),
-/* harmony export */   tp: () => (/* binding */ isAbsoluteLike),
-/* harmony export */   wY: () => (/* binding */ isIgnoredPath)
+/* harmony export */   Sw: () => (/* binding */ unreadableError),
+/* harmony export */   V5: () => (/* binding */ notAFileError),
+/* harmony export */   bd: () => (/* binding */ NOT_A_FILE),
+/* harmony export */   oE: () => (/* binding */ PATH_OUTSIDE)
 /* harmony export */ });
+/* unused harmony export isAbsoluteLike */
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
@@ -36309,6 +36814,41 @@ function realFolder(named, options) {
 const PATH_OUTSIDE = 'path-outside';
 /** Code of a path that names no file. */
 const FILE_MISSING = 'file-missing';
+/** Code of a path that names something other than a regular file (a folder, a broken link, a FIFO...). */
+const NOT_A_FILE = 'not-a-file';
+/** Code of a file (or folder) that exists but that the system does not let fitgate read. */
+const FILE_UNREADABLE = 'file-unreadable';
+/** The words for what a path names, when it is not a regular file. */
+const KIND_WORDS = Object.freeze({
+    folder: 'is a folder, not a file',
+    'broken-link': 'is a symbolic link that leads to nothing, not a file',
+    special: 'is not a regular file (a FIFO, socket, device or submodule)',
+});
+/**
+ * Words for a path that names something other than a regular file, e.g. `is a folder, not a file`.
+ * @param kind what the path names
+ */
+function kindWords(kind) {
+    return KIND_WORDS[kind];
+}
+/**
+ * The `not-a-file` error: the path exists but is not a regular file.
+ * @param kind what the path names
+ * @param location where to point (the path itself as the file by default)
+ */
+function notAFileError(kind, location) {
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(NOT_A_FILE, `${kindWords(kind)}; expected a regular file`, location);
+}
+/**
+ * The `file-unreadable` error for a system error while reading (permissions, I/O): that file's
+ * problem, reported like any bad input.
+ * @param error what the system threw (its code, such as `EACCES`, is named)
+ * @param location the file
+ */
+function unreadableError(error, location) {
+    const code = error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : 'error';
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(FILE_UNREADABLE, `cannot be read (${code}); expected a file that the user running fitgate may read`, location);
+}
 /** True for `/x`, `\\x`, `C:x` and `C:\x`: paths that do not start at the repository root. */
 function isAbsoluteLike(path) {
     return path.startsWith('/') || path.startsWith('\\') || /^[A-Za-z]:/.test(path);
@@ -36324,14 +36864,14 @@ function isAbsoluteLike(path) {
 function normaliseRepoPath(path, location) {
     const where = location ?? { file: path };
     if (path.includes('\u0000'))
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} contains a NUL character; expected a plain relative path`, where);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(path)} contains a NUL character; expected a plain relative path`, where);
     const slashed = path.replace(/\\/g, '/');
     if (isAbsoluteLike(path)) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} is absolute; expected a path relative to the repository`, where);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(path)} is absolute; expected a path relative to the repository`, where);
     }
     let normal = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.normalize(slashed === '' ? '.' : slashed);
     if (normal === '..' || normal.startsWith('../')) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(path)} leaves the repository; expected a path inside it`, where);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(path)} leaves the repository; expected a path inside it`, where);
     }
     if (normal === '.' || normal === './')
         return '';
@@ -36347,15 +36887,11 @@ function normaliseRepoPath(path, location) {
  */
 function joinRepoPath(fromFile, target, location) {
     if (isAbsoluteLike(target)) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${JSON.stringify(target)} is absolute; expected a path relative to ${fromFile}'s folder`, location);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(PATH_OUTSIDE, `path ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteValue */ .cl)(target)} is absolute; expected a path relative to ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(fromFile)}'s folder`, location);
     }
     const folder = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.dirname(normaliseRepoPath(fromFile));
     const joined = node_path__WEBPACK_IMPORTED_MODULE_0__.posix.join(folder, target.replace(/\\/g, '/'));
     return normaliseRepoPath(joined, { ...location, file: location.file ?? fromFile });
-}
-/** True when a repository-relative path passes through `node_modules` or `.git`. */
-function isIgnoredPath(path) {
-    return path.split('/').some((segment) => segment === 'node_modules' || segment === '.git');
 }
 
 
@@ -36373,6 +36909,7 @@ function isIgnoredPath(path) {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
 /**
  * Workflow-command annotations: one error per failing check or unchecked model, one warning per
  * warning, at the descriptor line the check points at, most severe first, capped at what the
@@ -36380,6 +36917,7 @@ function isIgnoredPath(path) {
  * here (and only here) so that they can be tested byte for byte; text from the repository is
  * escaped so that it can never start a workflow command of its own.
  */
+
 
 
 /** The runner shows at most this many error and this many warning annotations per step. */
@@ -36481,7 +37019,7 @@ function inputErrorAnnotation(error, prefix = '') {
         ...(file !== undefined ? { file: workspacePath(prefix, file) } : {}),
         ...(file !== undefined && line !== undefined ? { line } : {}),
         title: 'fitgate could not run',
-        message: error.location.key !== undefined ? `\`${error.location.key}\`: ${error.message}` : error.message,
+        message: error.location.key !== undefined ? `\`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .clip */ .$Q)(error.location.key)}\`: ${error.message}` : error.message,
     };
 }
 /** The command lines of a run's annotations, each ending with a line break. */
@@ -37193,6 +37731,10 @@ __nccwpck_require__.d(__webpack_exports__, {
   a: () => (/* binding */ runPipeline)
 });
 
+// EXTERNAL MODULE: ./src/core/errors.ts
+var core_errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/repo/repo-path.ts
+var repo_path = __nccwpck_require__(3856);
 ;// CONCATENATED MODULE: ./src/config/generated/limit-keys.ts
 /** Every limit key, in registry (report) order. */
 const limit_keys_LIMIT_KEYS = Object.freeze([
@@ -37332,8 +37874,6 @@ function mergeLimits(settings, descriptorLimits) {
     return merged;
 }
 
-// EXTERNAL MODULE: ./src/core/errors.ts
-var core_errors = __nccwpck_require__(4296);
 ;// CONCATENATED MODULE: ./src/config/schema-errors.ts
 /**
  * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
@@ -37525,7 +38065,7 @@ function toIssue(e, root) {
                 return []; // reported by propertyNames
             return [{ path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` }];
         case 'const':
-            return [{ path, pointAt: 'value', message: `expected \`${String(params.allowedValue)}\`, ${got}` }];
+            return [{ path, pointAt: 'value', message: `expected \`${(0,core_errors/* clip */.$Q)(String(params.allowedValue))}\`, ${got}` }];
         case 'minimum':
         case 'maximum':
         case 'exclusiveMinimum':
@@ -37547,16 +38087,16 @@ function toIssue(e, root) {
             return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
         case 'required': {
             const missing = String(params.missingProperty);
-            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${missing}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
         }
         case 'additionalProperties': {
             const extra = String(params.additionalProperty);
-            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${extra}\`; expected one of: ${keys.join(', ')}` }];
+            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`; expected one of: ${keys.join(', ')}` }];
         }
         case 'propertyNames': {
             const name = String(params.propertyName);
             const what = isTerm ? 'term kind' : 'key';
-            return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${name}\`; expected one of: ${kinds.join(', ')}` }];
+            return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,core_errors/* clip */.$Q)(name)}\`; expected one of: ${kinds.join(', ')}` }];
         }
         case 'minProperties':
         case 'maxProperties': {
@@ -37603,7 +38143,7 @@ var ucs2length = __nccwpck_require__(6214);
 
 
 const validateSettings = validate52;
-const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
 const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } };
 const func2 = Object.prototype.hasOwnProperty;
@@ -40066,7 +40606,7 @@ function parseYaml(text, file) {
         const error = doc.errors[0];
         const stackOverflow = /call stack/i.test(error.message);
         const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
-        throw new core_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${message}`, { file, ...at(error.pos[0]) });
+        throw new core_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,core_errors/* clip */.$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
     }
     checkStructure(doc, text, file, at);
     let value;
@@ -40188,7 +40728,7 @@ function checkStructure(doc, text, file, at) {
                 if ((0,dist/* isMap */.jh)(keyNode) || (0,dist/* isSeq */.oP)(keyNode)) {
                     const range = pair.key?.range;
                     const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-                    throw new core_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`, {
+                    throw new core_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,core_errors/* clip */.$Q)(written, 40)}\`); expected a plain name before the colon`, {
                         file,
                         ...at(keyOffset),
                     });
@@ -40197,7 +40737,7 @@ function checkStructure(doc, text, file, at) {
                 const before = seen.get(key);
                 if (before !== undefined) {
                     const first = at(before);
-                    throw new core_errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${key}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+                    throw new core_errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${(0,core_errors/* clip */.$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
                         file,
                         key,
                         ...at(keyOffset),
@@ -40218,10 +40758,6 @@ function checkStructure(doc, text, file, at) {
         }
     };
     visit(doc.contents, 1);
-}
-/** The text cut to `max` characters (with an ellipsis). */
-function clip(text, max) {
-    return text.length <= max ? text : `${text.slice(0, max - 1)}…`;
 }
 /** A mapping key as the text plain JavaScript would use for it. */
 function keyText(key) {
@@ -40323,6 +40859,7 @@ function positionInText(text, offset) {
 
 
 
+
 /** Default settings path, relative to the repository root. */
 const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
 /** Descriptor glob used when there is no settings file. */
@@ -40363,14 +40900,42 @@ function defaultSettings() {
  * @throws InputError `file-missing`, `path-outside`, YAML errors, `schema`, `limit-order`
  */
 async function loadSettings(repo, path, options = {}) {
-    if (!(await repo.isFile(path))) {
+    const kind = await repo.entryKind(path);
+    const notes = await yamlTwinNotes(repo, path);
+    if (kind === 'missing') {
         if (options.explicit) {
             throw new core_errors/* InputError */.dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
         }
-        return defaultSettings();
+        return { ...defaultSettings(), notes };
+    }
+    if (kind !== 'file') {
+        // A folder, a link to nothing or a FIFO where the settings belong is never taken for "no settings".
+        throw new core_errors/* InputError */.dz(repo_path/* NOT_A_FILE */.bd, `the settings file ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
     }
     const doc = await readYamlFile(repo, path);
-    return settingsFromDocument(doc, path);
+    // The same object (the pattern lines are kept beside it).
+    const settings = settingsFromDocument(doc, path);
+    settings.notes = notes;
+    return settings;
+}
+/**
+ * A note when a file named like `path` but ending `.yaml` sits beside it (fitgate reads only the
+ * `.yml` name it was given): empty otherwise.
+ */
+async function yamlTwinNotes(repo, path) {
+    if (!path.endsWith('.yml'))
+        return [];
+    const twin = `${path.slice(0, -4)}.yaml`;
+    let kind;
+    try {
+        kind = await repo.entryKind(twin);
+    }
+    catch {
+        return []; // a twin that leads outside is not read, and not ours to report
+    }
+    if (kind === 'missing')
+        return [];
+    return [`${(0,core_errors/* clip */.$Q)(twin)} is not read: fitgate reads its settings from ${(0,core_errors/* clip */.$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`];
 }
 /**
  * Validates a parsed settings document and builds the {@link SettingsFile}.
@@ -40433,52 +40998,100 @@ var external_node_path_ = __nccwpck_require__(6760);
 
 
 
+
 /** Stable codes of the errors this module throws. */
 const DISCOVER_ERROR = Object.freeze({
     missing: 'file-missing',
+    notAFile: repo_path/* NOT_A_FILE */.bd,
     outside: 'path-outside',
     globOutside: 'glob-outside',
     globEmpty: 'glob-empty',
     duplicateName: 'duplicate-name',
 });
+/** Most file names one note lists. */
+const NAMES_LISTED = 5;
 /**
- * Descriptor paths for a run: the given paths (each must exist and be inside the
- * repository) or the settings' globs (a glob that matches nothing is an InputError naming
- * the settings line). Sorted, de-duplicated.
+ * Descriptor paths for a run: the given paths (each must exist, be a regular file and be inside
+ * the repository) or the settings' globs (a glob that matches nothing, or that leaves the
+ * repository, is an InputError naming the settings line). A path a glob matches that is not a
+ * regular file stays in the list: loading it gives that model's error.
  *
  * @param repo the repository
  * @param settings the loaded settings file
  * @param explicit repository-relative descriptor paths from the command line (empty: use the globs)
- * @returns repository-relative paths with `/` separators
- * @throws InputError `path-outside`, `file-missing`, `glob-outside`, `glob-empty`
+ * @returns the paths, sorted and de-duplicated, and notes for the run
+ * @throws InputError `path-outside`, `file-missing`, `not-a-file`, `glob-outside`, `glob-empty`,
+ *   `glob-too-complex`, `glob-too-large`
  */
 async function discoverDescriptors(repo, settings, explicit) {
     const found = new Set();
+    const notes = [];
     if (explicit.length > 0) {
         for (const given of explicit) {
             const path = normaliseGiven(given);
-            if (!(await repo.isFile(path))) {
+            const kind = await repo.entryKind(path);
+            if (kind === 'missing') {
                 throw new core_errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
             }
+            if (kind !== 'file')
+                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, { file: given });
             found.add(path);
         }
+        return { paths: [...found].sort(), notes };
     }
-    else {
-        for (const [index, pattern] of settings.models.entries()) {
-            const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
-            if (isOutsidePattern(pattern)) {
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globOutside, `pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the repository root, not absolute and not starting with \`..\``, where);
-            }
-            const matches = await repo.glob([pattern]);
-            if (matches.length === 0) {
-                const source = settings.file === null ? ' (the default, as there is no settings file)' : '';
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${JSON.stringify(pattern)}${source} matches no file in ${repo.label}; expected at least one model descriptor`, where);
-            }
-            for (const match of matches)
-                found.add(match);
+    for (const [index, pattern] of settings.models.entries()) {
+        const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
+        const shown = (0,core_errors/* quoteValue */.cl)(pattern);
+        const { matches, twins, links } = await globWithTwin(repo, pattern, where);
+        const unread = twins.length > 0 ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)` : '';
+        const unsearched = links.length > 0 ? `${listNames(links)} ${links.length === 1 ? 'is a symbolic link' : 'are symbolic links'} that the pattern would search below; links are never followed as folders (name the real folder in the pattern)` : '';
+        if (matches.length === 0) {
+            const source = settings.file === null ? ' (the default, as there is no settings file)' : '';
+            const why = [unread, unsearched].filter((t) => t !== '').map((t) => `; ${t}`).join('');
+            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
         }
+        if (unread !== '')
+            notes.push(`pattern ${shown}: ${unread}.`);
+        if (unsearched !== '')
+            notes.push(`pattern ${shown}: ${unsearched}.`);
+        for (const match of matches)
+            found.add(match);
     }
-    return [...found].sort();
+    return { paths: [...found].sort(), notes };
+}
+/**
+ * Globs one pattern and, when it ends with `.yml`, its `.yaml` twin in the same walk: matches of
+ * the pattern, twin files that the pattern does not match, and links the pattern would search
+ * below. A refused pattern becomes an InputError at the settings line.
+ */
+async function globWithTwin(repo, pattern, where) {
+    const twin = pattern.endsWith('.yml') ? `${pattern.slice(0, -4)}.yaml` : null;
+    try {
+        if (twin !== null) {
+            try {
+                const both = await repo.glob([pattern, twin]);
+                // Every match of a pattern ending with the literal `.yml` ends with it, and every match of the twin with `.yaml`.
+                return { matches: both.paths.filter((p) => p.endsWith('.yml')), twins: both.paths.filter((p) => p.endsWith('.yaml')), links: both.notEntered };
+            }
+            catch (error) {
+                if (!(error instanceof core_errors/* InputError */.dz))
+                    throw error;
+                // The twin alone is over a cap: fall through to the pattern alone, whose error (if any) is the one to show.
+            }
+        }
+        const alone = await repo.glob([pattern]);
+        return { matches: alone.paths, twins: [], links: alone.notEntered };
+    }
+    catch (error) {
+        if (!(error instanceof core_errors/* InputError */.dz) || error.location.file !== undefined)
+            throw error;
+        throw new core_errors/* InputError */.dz(error.code === DISCOVER_ERROR.outside ? DISCOVER_ERROR.globOutside : error.code, error.message, where);
+    }
+}
+/** Up to {@link NAMES_LISTED} names, each cut to 80 characters, then how many more. */
+function listNames(names) {
+    const shown = names.slice(0, NAMES_LISTED).map((n) => (0,core_errors/* clip */.$Q)(n));
+    return names.length > NAMES_LISTED ? `${shown.join(', ')} and ${names.length - NAMES_LISTED} more` : shown.join(', ');
 }
 /**
  * After loading: duplicate model names are an InputError naming both files.
@@ -40491,15 +41104,10 @@ function checkUniqueNames(descriptors) {
     for (const d of descriptors) {
         const first = seen.get(d.name);
         if (first) {
-            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${JSON.stringify(d.name)} is also used by ${first.file}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
+            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${(0,core_errors/* quoteValue */.cl)(d.name)} is also used by ${(0,core_errors/* clip */.$Q)(first.file)}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
         }
         seen.set(d.name, d);
     }
-}
-/** True for absolute patterns and patterns starting with `..`. */
-function isOutsidePattern(pattern) {
-    const p = pattern.replace(/\\/g, '/');
-    return p.startsWith('/') || /^[A-Za-z]:/.test(p) || p === '..' || p.startsWith('../');
 }
 function normaliseGiven(given) {
     const p = given.replace(/\\/g, '/');
@@ -40521,11 +41129,14 @@ function normaliseGiven(given) {
 
 
 
+
+
 /** Most centres one `rbf` term may have (also the schema's cap on `count`). */
 const MAX_RBF_CENTERS = 10_000;
 /** Stable codes of the errors this module throws (besides YAML, schema and limit codes). */
 const DESCRIPTOR_ERROR = Object.freeze({
     dataMissing: 'file-missing',
+    notAFile: repo_path/* NOT_A_FILE */.bd,
     centers: 'rbf-centers',
 });
 /**
@@ -40546,8 +41157,12 @@ async function loadDescriptor(repo, path, settings) {
         const at = doc.valuePositionOf(key);
         const where = { line: at?.line ?? descriptor.data.lines[which], column: at?.column ?? 1, key: `data.${which}` };
         const resolved = await repo.resolve(path, descriptor.data[which], where);
-        if (!(await repo.isFile(resolved))) {
-            throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${resolved}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+        const kind = await repo.entryKind(resolved);
+        if (kind === 'missing') {
+            throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${(0,core_errors/* clip */.$Q)(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+        }
+        if (kind !== 'file') {
+            throw errorAt(doc, path, DESCRIPTOR_ERROR.notAFile, key, `${showValue(descriptor.data[which])} (${(0,core_errors/* clip */.$Q)(resolved)}) ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a CSV file relative to this descriptor's folder`);
         }
         descriptor.data[which] = resolved;
     }
@@ -40633,6 +41248,10 @@ function readCenters(doc, file, centers, at) {
 // EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
 var kernels = __nccwpck_require__(8667);
 ;// CONCATENATED MODULE: ./src/run/error-result.ts
+/**
+ * The outcome of a model that could not be checked: verdict `error` with the file, line and code.
+ */
+
 /** Error code of a model that failed through a fault in fitgate rather than in its files. */
 const INTERNAL_ERROR = 'internal-error';
 /**
@@ -40654,7 +41273,7 @@ function errorResult(name, descriptor, error) {
         shipped: null,
         checks: [],
         error: {
-            message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
+            message: key !== undefined && key !== '' ? `\`${(0,core_errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
             file: error.location.file ?? null,
             line: error.location.line ?? null,
             code: error.code,
@@ -41680,7 +42299,8 @@ function scoreSwing(plan, design, coefficients) {
     let worstInside = null;
     let worstBeyond = null;
     const pointAt = (columns, i, prediction) => {
-        const inputs = {};
+        // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
+        const inputs = Object.create(null);
         design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
         return { inputs, prediction };
     };
@@ -41727,7 +42347,7 @@ function scoreSwing(plan, design, coefficients) {
         mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
         const [imin, imax] = extremeIndices(ps);
         const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
-        const others = {};
+        const others = Object.create(null);
         design.inputs.forEach((name, k) => {
             if (k !== c)
                 others[name] = medians[k];
@@ -41836,7 +42456,7 @@ class ModelAnalyses {
 }
 
 // EXTERNAL MODULE: ./src/result/result.ts
-var result = __nccwpck_require__(1628);
+var result_result = __nccwpck_require__(1628);
 ;// CONCATENATED MODULE: ./src/run/base-comparison.ts
 /**
  * A model's figures against the same model (by name) on the base commit of a pull request.
@@ -41856,10 +42476,10 @@ function compareWithBase(metrics, baseline, commit) {
         return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
     }
     const b = baseline.metrics;
-    const headRmse = (0,result/* fromJsonNumber */.M)(metrics.holdout_rmse);
-    const headGap = (0,result/* fromJsonNumber */.M)(metrics.gap_ratio);
-    const baseRmse = b ? (0,result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
-    const baseGap = b ? (0,result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
+    const headRmse = (0,result_result/* fromJsonNumber */.M)(metrics.holdout_rmse);
+    const headGap = (0,result_result/* fromJsonNumber */.M)(metrics.gap_ratio);
+    const baseRmse = b ? (0,result_result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
+    const baseGap = b ? (0,result_result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
     const rmseChange = relativeChange(headRmse, baseRmse);
     const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
     return {
@@ -41867,8 +42487,8 @@ function compareWithBase(metrics, baseline, commit) {
         commit,
         holdout_rmse: b ? b.holdout_rmse : null,
         gap_ratio: b ? b.gap_ratio : null,
-        holdout_rmse_change: rmseChange === null ? null : (0,result/* jsonNumber */.qj)(rmseChange),
-        gap_ratio_change: gapChange === null ? null : (0,result/* jsonNumber */.qj)(gapChange),
+        holdout_rmse_change: rmseChange === null ? null : (0,result_result/* jsonNumber */.qj)(rmseChange),
+        gap_ratio_change: gapChange === null ? null : (0,result_result/* jsonNumber */.qj)(gapChange),
     };
 }
 
@@ -41983,7 +42603,7 @@ function numberPair(v) {
 function numbers(v) {
     if (!Array.isArray(v) || !v.every((e) => typeof e === 'number' || e === 'Infinity' || e === '-Infinity' || e === 'NaN'))
         return null;
-    return v.map((e) => (0,result/* fromJsonNumber */.M)(e));
+    return v.map((e) => (0,result_result/* fromJsonNumber */.M)(e));
 }
 function readSwing(checks, input) {
     const check = checks.find((c) => c.id === 'swing');
@@ -42012,7 +42632,7 @@ function readSwing(checks, input) {
     return { band, curve, regions };
 }
 function finiteOrNull(v) {
-    const x = typeof v === 'number' || typeof v === 'string' ? (0,result/* fromJsonNumber */.M)(v) : Number.NaN;
+    const x = typeof v === 'number' || typeof v === 'string' ? (0,result_result/* fromJsonNumber */.M)(v) : Number.NaN;
     return Number.isFinite(x) ? x : null;
 }
 /**
@@ -42075,7 +42695,8 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
         const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
         const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
         const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
-        const others = {};
+        // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
+        const others = Object.create(null);
         inputs.forEach((name, k) => {
             if (k !== c)
                 others[name] = chartNumber(medians[k]) ?? 0;
@@ -42262,9 +42883,10 @@ const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
  */
 async function* fastChunks(pieces, target) {
     const reader = new FastReader(target);
-    for await (const block of (0,line_blocks/* lineBlocks */.D)(pieces)) {
-        if (block.badUtf8)
-            throw (0,line_blocks/* encodingError */.S)(target.file, reader.line, block.utf16);
+    for await (const block of (0,line_blocks/* lineBlocks */.Dr)(pieces)) {
+        const stop = (0,line_blocks/* blockError */.Si)(target.file, reader.line, block);
+        if (stop !== null)
+            throw stop;
         let bytes = block.bytes;
         if (block.final && bytes[bytes.length - 1] !== LF) {
             // Give the last line its line feed so that every inner loop stops on one.
@@ -42427,7 +43049,9 @@ class FastReader {
                     else {
                         text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
                         value = Number(text.toString('latin1', start, p));
-                        if (!Number.isFinite(value))
+                        // Overflow, and underflow of a nonzero text (mantissa > 0) to 0 or a subnormal: the
+                        // general path says which (the exact branch above can do neither).
+                        if (!Number.isFinite(value) || (mantissa !== 0 && Math.abs(value) < csv_rules/* MIN_NORMAL */.Vt))
                             throw new FastPathDeclined(line);
                     }
                     while (b === SPACE || b === TAB)
@@ -42513,8 +43137,11 @@ class FastReader {
  * - The header is the first non-blank record; its names are trimmed and must be unique.
  * - A cell of a requested column must be a finite decimal number as JavaScript's `Number()`
  *   reads it: sign, digits, point, exponent (`-1`, `.5`, `1.`, `2.5E-3`). Empty cells, `NaN`,
- *   `Infinity`, `inf`, hexadecimal and values that overflow (`1e999`) are errors; values that
- *   underflow to a subnormal or zero are kept (they are what `Number()` gives).
+ *   `Infinity`, `inf`, hexadecimal, values that overflow (`1e999`) and nonzero values that
+ *   underflow (`1e-400`, `1e-310`: `Number()` gives 0 or a subnormal) are errors.
+ * - The header must end within the first 1 MiB of the file and name at most 100,000 columns
+ *   (checked before a longer line is held in memory). A header that looks like a Git LFS
+ *   pointer, a semicolon- or tab-separated file, or CR-only line ends gets a hint in the error.
  * - Every row has as many fields as the header.
  * - The whole file must be UTF-8, not only the columns used.
  *
@@ -42702,7 +43329,7 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
 async function loadModelData(repo, descriptor, inputs, settings) {
     const { data } = descriptor;
     if (inputs.includes(data.target)) {
-        throw new core_errors/* InputError */.dz('target-as-input', `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
+        throw new core_errors/* InputError */.dz('target-as-input', `the target column \`${(0,core_errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
     }
     const columns = [...inputs, data.target];
     const maxBytes = settings.caps.maxFileBytes;
@@ -42715,7 +43342,7 @@ async function loadModelData(repo, descriptor, inputs, settings) {
             throw withAsker(error, descriptor);
         }
         if (table.rows === 0) {
-            throw new core_errors/* InputError */.dz('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
+            throw new core_errors/* InputError */.dz('no-rows', `\`${(0,core_errors/* clip */.$Q)(path)}\` has a header but no data rows; expected at least one row`, {
                 file: descriptor.file,
                 line,
                 key,
@@ -42748,7 +43375,7 @@ function withAsker(error, descriptor) {
     const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
     if (asker === null)
         return error;
-    return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
+    return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,core_errors/* clip */.$Q)(descriptor.file)})`, error.location);
 }
 
 // EXTERNAL MODULE: ./src/design/terms/index.ts + 3 modules
@@ -42798,12 +43425,12 @@ async function planModel(repo, descriptor, settings) {
     for (const data of [train, tables.holdout]) {
         const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
         if (i >= 0) {
-            throw new core_errors/* InputError */.dz('target-range', `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+            throw new core_errors/* InputError */.dz('target-range', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${(0,core_errors/* clip */.$Q)(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
         }
     }
     const targetStats = (0,stats/* meanAndSd */.ud)(train.y, train.rows);
     if (!(targetStats.sd > 0)) {
-        throw new core_errors/* InputError */.dz('constant-target', `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+        throw new core_errors/* InputError */.dz('constant-target', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
     const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     return { descriptor, tables, design, folds, targetSd: targetStats.sd };
@@ -42890,7 +43517,7 @@ function checkRange(plan, X, start, m) {
     while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
         term += 1;
     const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
-    throw new core_errors/* InputError */.dz('design-overflow', `design column \`${design.columnNames[j]}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+    throw new core_errors/* InputError */.dz('design-overflow', `design column \`${(0,core_errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,core_errors/* clip */.$Q)(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
 }
 
 ;// CONCATENATED MODULE: ./src/run/fit-model.ts
@@ -42979,7 +43606,7 @@ function shippedScore(descriptor, design, tables, fit) {
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => (0,core_errors/* clip */.$Q)(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
     return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
 }
@@ -43002,29 +43629,29 @@ function shippedMetrics(shipped) {
     if (shipped === null)
         return null;
     return {
-        train_rmse: (0,result/* jsonNumber */.qj)(shipped.train.rmse),
-        holdout_rmse: (0,result/* jsonNumber */.qj)(shipped.holdout.rmse),
-        max_coefficient_difference: (0,result/* jsonNumber */.qj)(shipped.maxCoefficientDifference),
+        train_rmse: (0,result_result/* jsonNumber */.qj)(shipped.train.rmse),
+        holdout_rmse: (0,result_result/* jsonNumber */.qj)(shipped.holdout.rmse),
+        max_coefficient_difference: (0,result_result/* jsonNumber */.qj)(shipped.maxCoefficientDifference),
     };
 }
 /** Model metrics for the report. */
 function reportMetrics(model) {
     const { metrics: m, fit, design } = model;
     return {
-        train_rmse: (0,result/* jsonNumber */.qj)(m.trainRmse),
-        holdout_rmse: (0,result/* jsonNumber */.qj)(m.holdoutRmse),
-        train_mae: (0,result/* jsonNumber */.qj)(m.trainMae),
-        holdout_mae: (0,result/* jsonNumber */.qj)(m.holdoutMae),
-        train_r2: (0,result/* jsonNumber */.qj)(m.trainR2),
-        holdout_r2: (0,result/* jsonNumber */.qj)(m.holdoutR2),
-        gap_ratio: (0,result/* jsonNumber */.qj)(m.gapRatio),
-        params_per_sample: (0,result/* jsonNumber */.qj)(m.paramsPerSample),
-        max_std_coefficient: (0,result/* jsonNumber */.qj)(m.maxStdCoefficient),
+        train_rmse: (0,result_result/* jsonNumber */.qj)(m.trainRmse),
+        holdout_rmse: (0,result_result/* jsonNumber */.qj)(m.holdoutRmse),
+        train_mae: (0,result_result/* jsonNumber */.qj)(m.trainMae),
+        holdout_mae: (0,result_result/* jsonNumber */.qj)(m.holdoutMae),
+        train_r2: (0,result_result/* jsonNumber */.qj)(m.trainR2),
+        holdout_r2: (0,result_result/* jsonNumber */.qj)(m.holdoutR2),
+        gap_ratio: (0,result_result/* jsonNumber */.qj)(m.gapRatio),
+        params_per_sample: (0,result_result/* jsonNumber */.qj)(m.paramsPerSample),
+        max_std_coefficient: (0,result_result/* jsonNumber */.qj)(m.maxStdCoefficient),
         max_std_coefficient_column: m.maxStdCoefficientColumn >= 0 ? design.columnNames[m.maxStdCoefficientColumn] : null,
-        max_abs_coefficient: (0,result/* jsonNumber */.qj)(m.maxAbsCoefficient),
+        max_abs_coefficient: (0,result_result/* jsonNumber */.qj)(m.maxAbsCoefficient),
         rank: fit.rank,
-        condition_number: (0,result/* jsonNumber */.qj)(fit.conditionNumber),
-        condition_number_scaled: (0,result/* jsonNumber */.qj)(fit.conditionNumberScaled),
+        condition_number: (0,result_result/* jsonNumber */.qj)(fit.conditionNumber),
+        condition_number_scaled: (0,result_result/* jsonNumber */.qj)(fit.conditionNumberScaled),
     };
 }
 /**
@@ -43068,7 +43695,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
         if (figures)
             Object.assign(metrics, figures);
         if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result/* worse */.JJ)(verdict, outcome.status);
+            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
     }
     return {
         name: descriptor.name,
@@ -43078,7 +43705,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
         parameters: model.design.p,
         columns: [...model.design.columnNames],
         metrics,
-        coefficients: Array.from(model.fit.coefficients, result/* jsonNumber */.qj),
+        coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj),
         shipped: shippedMetrics(model.shipped),
         checks,
         ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
@@ -43207,7 +43834,8 @@ const VERSION = '0.1.0';
 async function runPipeline(settings, repo, options = {}) {
     const file = await loadSettings(repo, settings.config, { explicit: settings.configExplicit });
     const shard = options.shard ?? null;
-    const paths = (0,run_shard/* selectShard */.Xm)(await discoverDescriptors(repo, file, settings.descriptors), shard);
+    const discovery = await discoverDescriptors(repo, file, settings.descriptors);
+    const paths = (0,run_shard/* selectShard */.Xm)(discovery.paths, shard);
     const models = [];
     const loaded = [];
     for (const path of paths) {
@@ -43223,14 +43851,17 @@ async function runPipeline(settings, repo, options = {}) {
     checkUniqueNames(loaded);
     const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
     models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
-    const notes = [...(options.notes ?? [])];
+    const notes = [...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
     if (shard)
         notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
     // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
     for (const note of (0,kernels/* kernelNotes */.TJ)())
         if (!notes.includes(note))
             notes.push(note);
-    return (0,result/* summarise */.fS)(models, VERSION, notes);
+    const result = (0,result_result/* summarise */.fS)(models, VERSION, notes);
+    if (shard)
+        result.shard = { index: shard.index, count: shard.count };
+    return result;
 }
 
 
@@ -43401,12 +44032,12 @@ const MAX_SHARDS = 10_000;
 function parseShard(text, key = '--shard') {
     const match = /^\s*(\d+)\s*\/\s*(\d+)\s*$/.exec(text);
     if (!match) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.syntax, `expected K/N with whole numbers 1 <= K <= N (e.g. 2/4), got ${JSON.stringify(text)}`, { key });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.syntax, `expected K/N with whole numbers 1 <= K <= N (e.g. 2/4), got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(text)}`, { key });
     }
     const index = Number(match[1]);
     const count = Number(match[2]);
     if (index < 1 || count < 1 || index > count || count > MAX_SHARDS) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.range, `expected 1 <= K <= N <= ${MAX_SHARDS} in K/N, got ${JSON.stringify(text)} (K = ${index}, N = ${count})`, { key });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SHARD_ERROR.range, `expected 1 <= K <= N <= ${MAX_SHARDS} in K/N, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(text)} (K = ${index}, N = ${count})`, { key });
     }
     return { index, count };
 }
@@ -43498,13 +44129,6 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("http");
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("https");
-
-/***/ }),
-
-/***/ 3339:
-/***/ ((module) => {
-
-module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("module");
 
 /***/ }),
 
@@ -43683,13 +44307,6 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("os");
 
 /***/ }),
 
-/***/ 6928:
-/***/ ((module) => {
-
-module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("path");
-
-/***/ }),
-
 /***/ 932:
 /***/ ((module) => {
 
@@ -43715,13 +44332,6 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("string_decod
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("tls");
-
-/***/ }),
-
-/***/ 7016:
-/***/ ((module) => {
-
-module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("url");
 
 /***/ }),
 
@@ -52482,7 +53092,7 @@ exports.visitAsync = visitAsync;
 
 /***/ }),
 
-/***/ 8298:
+/***/ 6257:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -52668,8 +53278,8 @@ function file_command_prepareKeyValueMessage(key, value) {
     return `${key}<<${delimiter}${external_os_.EOL}${convertedValue}${external_os_.EOL}${delimiter}`;
 }
 //# sourceMappingURL=file-command.js.map
-// EXTERNAL MODULE: external "path"
-var external_path_ = __nccwpck_require__(6928);
+;// CONCATENATED MODULE: external "path"
+const external_path_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("path");
 // EXTERNAL MODULE: external "http"
 var external_http_ = __nccwpck_require__(8611);
 // EXTERNAL MODULE: external "https"
@@ -54036,7 +54646,7 @@ function tryGetExecutablePath(filePath, extensions) {
         if (stats && stats.isFile()) {
             if (IS_WINDOWS) {
                 // on Windows, test for valid extension
-                const upperExt = external_path_.extname(filePath).toUpperCase();
+                const upperExt = external_path_namespaceObject.extname(filePath).toUpperCase();
                 if (extensions.some(validExt => validExt.toUpperCase() === upperExt)) {
                     return filePath;
                 }
@@ -54065,11 +54675,11 @@ function tryGetExecutablePath(filePath, extensions) {
                 if (IS_WINDOWS) {
                     // preserve the case of the actual file (since an extension was appended)
                     try {
-                        const directory = external_path_.dirname(filePath);
-                        const upperName = external_path_.basename(filePath).toUpperCase();
+                        const directory = external_path_namespaceObject.dirname(filePath);
+                        const upperName = external_path_namespaceObject.basename(filePath).toUpperCase();
                         for (const actualName of yield readdir(directory)) {
                             if (upperName === actualName.toUpperCase()) {
-                                filePath = external_path_.join(directory, actualName);
+                                filePath = external_path_namespaceObject.join(directory, actualName);
                                 break;
                             }
                         }
@@ -54289,7 +54899,7 @@ function findInPath(tool) {
         // build the list of extensions to try
         const extensions = [];
         if (IS_WINDOWS && process.env['PATHEXT']) {
-            for (const extension of process.env['PATHEXT'].split(external_path_.delimiter)) {
+            for (const extension of process.env['PATHEXT'].split(external_path_namespaceObject.delimiter)) {
                 if (extension) {
                     extensions.push(extension);
                 }
@@ -54304,7 +54914,7 @@ function findInPath(tool) {
             return [];
         }
         // if any path separators, return empty
-        if (tool.includes(external_path_.sep)) {
+        if (tool.includes(external_path_namespaceObject.sep)) {
             return [];
         }
         // build the list of directories
@@ -54315,7 +54925,7 @@ function findInPath(tool) {
         // across platforms.
         const directories = [];
         if (process.env.PATH) {
-            for (const p of process.env.PATH.split(external_path_.delimiter)) {
+            for (const p of process.env.PATH.split(external_path_namespaceObject.delimiter)) {
                 if (p) {
                     directories.push(p);
                 }
@@ -54324,7 +54934,7 @@ function findInPath(tool) {
         // find all matches
         const matches = [];
         for (const directory of directories) {
-            const filePath = yield tryGetExecutablePath(external_path_.join(directory, tool), extensions);
+            const filePath = yield tryGetExecutablePath(external_path_namespaceObject.join(directory, tool), extensions);
             if (filePath) {
                 matches.push(filePath);
             }
@@ -54755,7 +55365,7 @@ class ToolRunner extends external_events_.EventEmitter {
                 (this.toolPath.includes('/') ||
                     (toolrunner_IS_WINDOWS && this.toolPath.includes('\\')))) {
                 // prefer options.cwd if it is specified, however options.cwd may also need to be rooted
-                this.toolPath = external_path_.resolve(process.cwd(), this.options.cwd || process.cwd(), this.toolPath);
+                this.toolPath = external_path_namespaceObject.resolve(process.cwd(), this.options.cwd || process.cwd(), this.toolPath);
             }
             // if the tool is only a file name, then resolve it from the PATH
             // otherwise verify it exists (add extension on Windows if necessary)
@@ -60291,36 +60901,6 @@ function getOctokit(token, options, ...additionalPlugins) {
 /******/ 			() => (module);
 /******/ 		__nccwpck_require__.d(getter, { a: getter });
 /******/ 		return getter;
-/******/ 	};
-/******/ })();
-/******/ 
-/******/ /* webpack/runtime/create fake namespace object */
-/******/ (() => {
-/******/ 	var getProto = Object.getPrototypeOf ? (obj) => (Object.getPrototypeOf(obj)) : (obj) => (obj.__proto__);
-/******/ 	var leafPrototypes;
-/******/ 	// create a fake namespace object
-/******/ 	// mode & 1: value is a module id, require it
-/******/ 	// mode & 2: merge all properties of value into the ns
-/******/ 	// mode & 4: return value when already ns object
-/******/ 	// mode & 16: return value when it's Promise-like
-/******/ 	// mode & 8|1: behave like require
-/******/ 	__nccwpck_require__.t = function(value, mode) {
-/******/ 		if(mode & 1) value = this(value);
-/******/ 		if(mode & 8) return value;
-/******/ 		if(typeof value === 'object' && value) {
-/******/ 			if((mode & 4) && value.__esModule) return value;
-/******/ 			if((mode & 16) && typeof value.then === 'function') return value;
-/******/ 		}
-/******/ 		var ns = Object.create(null);
-/******/ 		__nccwpck_require__.r(ns);
-/******/ 		var def = {};
-/******/ 		leafPrototypes = leafPrototypes || [null, getProto({}), getProto([]), getProto(getProto)];
-/******/ 		for(var current = mode & 2 && value; typeof current == 'object' && !~leafPrototypes.indexOf(current); current = getProto(current)) {
-/******/ 			Object.getOwnPropertyNames(current).forEach((key) => (def[key] = () => (value[key])));
-/******/ 		}
-/******/ 		def['default'] = () => (value);
-/******/ 		__nccwpck_require__.d(ns, def);
-/******/ 		return ns;
 /******/ 	};
 /******/ })();
 /******/ 

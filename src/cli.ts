@@ -53,7 +53,7 @@ async function main(argv: string[]): Promise<number> {
     // Modules only some runs need are loaded when asked for, so that a plain check starts fast.
     if (parsed.kind === 'merge') {
       const { mergeReports } = await import('./result/merge.js');
-      result = mergeReports(readReports(parsed.reports), VERSION);
+      result = mergeReports(readReports(parsed.reports), VERSION, { expect: parsed.expect });
       failOn = parsed.failOn;
     } else {
       let baseOptions = {};

@@ -99,18 +99,20 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         if (failure instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz)
             throw failure;
         if (bad !== null)
-            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .S)(file, 1 + lineFeeds, bad.utf16);
+            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.utf16);
         throw syntaxError(failure, file, nextLine());
     };
     // Line feeds written so far: the line of bad bytes is the one after them.
     let lineFeeds = 0;
-    const blocks = (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .lineBlocks */ .D)(pieces)[Symbol.asyncIterator]();
+    const blocks = (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .lineBlocks */ .Dr)(pieces)[Symbol.asyncIterator]();
     try {
         let bad = null;
         for (;;) {
             const next = await blocks.next();
             if (next.done === true)
                 break;
+            if (next.value.headerTooLong === true)
+                throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .blockError */ .Si)(file, 1 + lineFeeds, next.value);
             if (next.value.badUtf8) {
                 // The lines before the bad bytes are written; finish them first so that an
                 // earlier row error wins, as it does on the fast path.
@@ -132,7 +134,7 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         if (settle(bad))
             return;
         if (bad !== null)
-            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .S)(file, 1 + lineFeeds, bad.utf16);
+            throw (0,_line_blocks_js__WEBPACK_IMPORTED_MODULE_2__/* .encodingError */ .Sj)(file, 1 + lineFeeds, bad.utf16);
         if (plan === null)
             throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .emptyError */ .CA)(file);
         builder.flush();

@@ -1,6 +1,7 @@
 /**
  * `coefficient-size`: the largest standardised coefficient.
  */
+import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 
@@ -27,7 +28,7 @@ const check: Check = {
     const term = design.termOffsets.findLastIndex((o) => o <= metrics.maxStdCoefficientColumn);
     return {
       value: metrics.maxStdCoefficient,
-      message: `largest standardised coefficient is ${formatNumber(metrics.maxStdCoefficient)}, on column \`${column}\``,
+      message: `largest standardised coefficient is ${formatNumber(metrics.maxStdCoefficient)}, on column \`${clip(column)}\``,
       line: term >= 0 ? design.terms[term].spec.line : undefined,
       detail: { column },
     };

@@ -1,6 +1,7 @@
 /**
  * `conditioning`: condition number of the column-scaled design, naming nearly collinear terms.
  */
+import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { jsonNumber } from '../result/result.js';
@@ -37,7 +38,7 @@ const check: Check = {
     };
     const terms = [...new Set(fit.collinearColumns.map(termOf).filter((t) => t >= 0))];
     const line = terms.length > 0 ? design.terms[terms[0]].spec.line : descriptor.fit.line;
-    const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
+    const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).map((c) => clip(c)).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
     return {
       value,
       message: `the column-scaled design has condition number ${formatNumber(value)} (rank ${fit.rank} of ${design.p})${value > 1e3 ? named : ''}`,

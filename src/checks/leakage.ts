@@ -1,6 +1,7 @@
 /**
  * `leakage`: hold-out rows that repeat a training row.
  */
+import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
 
 const check: Check = {
@@ -45,14 +46,14 @@ const check: Check = {
       train_file: train.file,
     };
     if (leak.inputMatches === 0) {
-      return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.join(', ')}`, metrics, detail };
+      return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.map((c) => clip(c)).join(', ')}`, metrics, detail };
     }
-    const lines = (file: string, ls: number[]): string => `${file} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+    const lines = (file: string, ls: number[]): string => `${clip(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
     const target =
       leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
     return {
       value: leak.inputMatches,
-      message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
+      message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => clip(c)).join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
       metrics,
       detail,
     };

@@ -1,6 +1,7 @@
 /**
  * `reproducibility`: how far the descriptor's shipped coefficients are from the refit.
  */
+import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { jsonRecord } from '../core/json.js';
@@ -43,7 +44,7 @@ const check: Check = {
     const coefDiff = shipped.maxCoefficientDifference;
     return {
       value,
-      message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${holdout.file} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(metrics.holdoutRmse)}`,
+      message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${clip(holdout.file)} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(metrics.holdoutRmse)}`,
       metrics: { shipped_prediction_difference: jsonNumber(value) },
       detail: jsonRecord({
         max_prediction_difference: diff,

@@ -1,6 +1,7 @@
 /**
  * `swing`: how far predictions between the training samples leave the band of training targets.
  */
+import { clip } from '../core/errors.js';
 import type { Check, CheckContext } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { jsonNumber } from '../result/result.js';
@@ -11,7 +12,7 @@ import type { Swing, SwingPoint } from '../diagnostics/swing.js';
 export function describePoint(point: SwingPoint | null): string {
   if (point === null) return '';
   return Object.entries(point.inputs)
-    .map(([name, v]) => `${name} = ${formatNumber(v)}`)
+    .map(([name, v]) => `${clip(name)} = ${formatNumber(v)}`)
     .join(', ');
 }
 

@@ -3,6 +3,8 @@
  * resolved inside the repository, `fit` defaults applied and limits merged.
  */
 
+import { clip } from '../core/errors.js';
+import { kindWords, NOT_A_FILE } from '../repo/repo-path.js';
 import type { RepoReader } from '../repo/types.js';
 import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
@@ -19,6 +21,7 @@ export const MAX_RBF_CENTERS = 10_000;
 /** Stable codes of the errors this module throws (besides YAML, schema and limit codes). */
 export const DESCRIPTOR_ERROR = Object.freeze({
   dataMissing: 'file-missing',
+  notAFile: NOT_A_FILE,
   centers: 'rbf-centers',
 });
 
@@ -40,8 +43,12 @@ export async function loadDescriptor(repo: RepoReader, path: string, settings: S
     const at = doc.valuePositionOf(key);
     const where = { line: at?.line ?? descriptor.data.lines[which], column: at?.column ?? 1, key: `data.${which}` };
     const resolved = await repo.resolve(path, descriptor.data[which], where);
-    if (!(await repo.isFile(resolved))) {
-      throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${resolved}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+    const kind = await repo.entryKind(resolved);
+    if (kind === 'missing') {
+      throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${clip(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+    }
+    if (kind !== 'file') {
+      throw errorAt(doc, path, DESCRIPTOR_ERROR.notAFile, key, `${showValue(descriptor.data[which])} (${clip(resolved)}) ${kindWords(kind)}; expected a CSV file relative to this descriptor's folder`);
     }
     descriptor.data[which] = resolved;
   }

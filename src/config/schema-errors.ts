@@ -5,7 +5,7 @@
  */
 
 import type { ErrorObject } from 'ajv/dist/2020.js';
-import { InputError, quoteValue } from '../core/errors.js';
+import { InputError, quoteValue, clip } from '../core/errors.js';
 import type { Position } from './types.js';
 import type { YamlDocument } from './yaml-source.js';
 
@@ -221,7 +221,7 @@ function toIssue(e: ErrorObject, root: unknown): Issue[] {
       if ((e as ErrorObject & { propertyName?: string }).propertyName !== undefined) return []; // reported by propertyNames
       return [{ path, pointAt: 'value', message: `expected one of: ${(params.allowedValues as unknown[]).map(String).join(', ')}, ${got}` }];
     case 'const':
-      return [{ path, pointAt: 'value', message: `expected \`${String(params.allowedValue)}\`, ${got}` }];
+      return [{ path, pointAt: 'value', message: `expected \`${clip(String(params.allowedValue))}\`, ${got}` }];
     case 'minimum':
     case 'maximum':
     case 'exclusiveMinimum':
@@ -243,16 +243,16 @@ function toIssue(e: ErrorObject, root: unknown): Issue[] {
       return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
     case 'required': {
       const missing = String(params.missingProperty);
-      return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${missing}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+      return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${clip(missing)}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
     }
     case 'additionalProperties': {
       const extra = String(params.additionalProperty);
-      return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${extra}\`; expected one of: ${keys.join(', ')}` }];
+      return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${clip(extra)}\`; expected one of: ${keys.join(', ')}` }];
     }
     case 'propertyNames': {
       const name = String(params.propertyName);
       const what = isTerm ? 'term kind' : 'key';
-      return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${name}\`; expected one of: ${kinds.join(', ')}` }];
+      return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${clip(name)}\`; expected one of: ${kinds.join(', ')}` }];
     }
     case 'minProperties':
     case 'maxProperties': {

@@ -3,7 +3,8 @@
  * limits every model gets, defaults for `fit`, and resource caps.
  */
 
-import { InputError } from '../core/errors.js';
+import { InputError, clip } from '../core/errors.js';
+import { kindWords, NOT_A_FILE } from '../repo/repo-path.js';
 import type { RepoReader } from '../repo/types.js';
 import { limitDirection, limitOrderProblem } from './limits.js';
 import { errorAt, schemaError } from './schema-errors.js';
@@ -60,14 +61,40 @@ export function defaultSettings(): SettingsFile {
  * @throws InputError `file-missing`, `path-outside`, YAML errors, `schema`, `limit-order`
  */
 export async function loadSettings(repo: RepoReader, path: string, options: { explicit?: boolean } = {}): Promise<SettingsFile> {
-  if (!(await repo.isFile(path))) {
+  const kind = await repo.entryKind(path);
+  const notes = await yamlTwinNotes(repo, path);
+  if (kind === 'missing') {
     if (options.explicit) {
       throw new InputError(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
     }
-    return defaultSettings();
+    return { ...defaultSettings(), notes };
+  }
+  if (kind !== 'file') {
+    // A folder, a link to nothing or a FIFO where the settings belong is never taken for "no settings".
+    throw new InputError(NOT_A_FILE, `the settings file ${kindWords(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
   }
   const doc = await readYamlFile(repo, path);
-  return settingsFromDocument(doc, path);
+  // The same object (the pattern lines are kept beside it).
+  const settings = settingsFromDocument(doc, path);
+  settings.notes = notes;
+  return settings;
+}
+
+/**
+ * A note when a file named like `path` but ending `.yaml` sits beside it (fitgate reads only the
+ * `.yml` name it was given): empty otherwise.
+ */
+async function yamlTwinNotes(repo: RepoReader, path: string): Promise<string[]> {
+  if (!path.endsWith('.yml')) return [];
+  const twin = `${path.slice(0, -4)}.yaml`;
+  let kind;
+  try {
+    kind = await repo.entryKind(twin);
+  } catch {
+    return []; // a twin that leads outside is not read, and not ours to report
+  }
+  if (kind === 'missing') return [];
+  return [`${clip(twin)} is not read: fitgate reads its settings from ${clip(path)} (rename the file, or name it with --config / the \`config\` input)`];
 }
 
 /**

@@ -162,4 +162,9 @@ export interface SettingsFile {
   /** Defaults for `fit` keys a descriptor leaves out. */
   fit: { folds: number; foldOrder: FoldOrder; seed: number; parameterCount: ParameterCount };
   caps: ResourceCaps;
+  /**
+   * Messages about how the settings file was found, for the run's notes (e.g. a `fitgate.yaml`
+   * beside the `fitgate.yml` that fitgate reads). Default none.
+   */
+  notes?: string[];
 }

@@ -7,7 +7,7 @@
 
 import { isAlias, isMap, isPair, isScalar, isSeq, LineCounter, parseDocument } from 'yaml';
 import type { Document, Node as YamlNode, YAMLMap, YAMLSeq } from 'yaml';
-import { InputError } from '../core/errors.js';
+import { InputError, clip } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
 import type { Position } from './types.js';
 
@@ -113,7 +113,7 @@ export function parseYaml(text: string, file: string): YamlDocument {
     const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
     throw new InputError(
       stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax,
-      stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${message}`,
+      stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${clip(message, 120)}`,
       { file, ...at(error.pos[0]) },
     );
   }
@@ -244,7 +244,7 @@ function checkStructure(doc: Document, text: string, file: string, at: (offset: 
         const before = seen.get(key);
         if (before !== undefined) {
           const first = at(before);
-          throw new InputError(YAML_ERROR.duplicateKey, `key \`${key}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+          throw new InputError(YAML_ERROR.duplicateKey, `key \`${clip(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
             file,
             key,
             ...at(keyOffset),
@@ -262,11 +262,6 @@ function checkStructure(doc: Document, text: string, file: string, at: (offset: 
     }
   };
   visit(doc.contents, 1);
-}
-
-/** The text cut to `max` characters (with an ellipsis). */
-function clip(text: string, max: number): string {
-  return text.length <= max ? text : `${text.slice(0, max - 1)}…`;
 }
 
 /** A mapping key as the text plain JavaScript would use for it. */

@@ -38,9 +38,14 @@ export class InputError extends Error {
     this.location = location;
   }
 
-  /** `file:line:column: key: message`, leaving out the parts that are unknown. */
+  /**
+   * `file:line:column: key: message`, leaving out the parts that are unknown. The file and the
+   * key are user text (a path, a CSV column name) and are cut with {@link clip}.
+   */
   describe(): string {
-    const { file, line, column, key } = this.location;
+    const { line, column } = this.location;
+    const file = this.location.file === undefined ? undefined : clip(this.location.file);
+    const key = this.location.key === undefined ? undefined : clip(this.location.key);
     let where = file ?? '';
     if (file !== undefined && line !== undefined) where += `:${line}`;
     if (file !== undefined && line !== undefined && column !== undefined) where += `:${column}`;
@@ -56,10 +61,35 @@ export function errorMessage(error: unknown): string {
   return String(error);
 }
 
-/** Quotes a user value for an error message, cut to `max` characters (default 80). */
-export function quoteValue(value: unknown, max = 80): string {
+/** Most characters of one piece of user text (a name, a cell, a path, a pattern) a message quotes. */
+export const MAX_QUOTED = 80;
+
+/**
+ * The one way a message shortens user text: at most `max` characters (default
+ * {@link MAX_QUOTED}, 80), the start kept and an ellipsis `…` as the last character when
+ * something was cut. A cut never splits a UTF-16 surrogate pair. Every message that shows a
+ * name, cell, header, path or pattern from the repository passes it through here (or through
+ * {@link quoteValue}, which uses it).
+ *
+ * @param text the user text
+ * @param max largest length of the result in UTF-16 code units (at least 2); default 80
+ */
+export function clip(text: string, max = MAX_QUOTED): string {
+  if (text.length <= max) return text;
+  let end = Math.max(1, max - 1);
+  const last = text.charCodeAt(end - 1);
+  if (last >= 0xd800 && last <= 0xdbff) end -= 1;
+  return `${text.slice(0, end)}…`;
+}
+
+/**
+ * Quotes a user value for an error message: strings as JSON strings, other values as JSON,
+ * `undefined` as `nothing`; the whole cut with {@link clip} to `max` characters (default 80).
+ */
+export function quoteValue(value: unknown, max = MAX_QUOTED): string {
   let text: string;
-  if (typeof value === 'string') text = JSON.stringify(value);
+  // A long string is cut before quoting (its quoted form is longer than `max` either way).
+  if (typeof value === 'string') text = JSON.stringify(value.length > max ? value.slice(0, max) : value);
   else if (value === undefined) text = 'nothing';
   else {
     try {
@@ -68,5 +98,5 @@ export function quoteValue(value: unknown, max = 80): string {
       text = String(value);
     }
   }
-  return text.length > max ? `${text.slice(0, max - 1)}…` : text;
+  return clip(text, max);
 }

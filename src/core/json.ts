@@ -25,7 +25,8 @@ export type JsonValue = number | string | boolean | null | JsonValue[] | { [key:
 
 /**
  * Converts a value for the JSON report (numbers through `jsonNumber`, typed arrays to arrays,
- * `undefined` fields dropped).
+ * `undefined` fields dropped). Objects come out without a prototype (their keys may be column
+ * names such as `__proto__`); `JSON.stringify` writes them as any object.
  *
  * @param value numbers, strings, booleans, null, arrays, typed arrays and plain objects of them
  */
@@ -35,7 +36,8 @@ export function jsonSafe(value: unknown): JsonValue {
   if (ArrayBuffer.isView(value) && !(value instanceof DataView)) return Array.from(value as unknown as ArrayLike<number>, jsonNumber);
   if (Array.isArray(value)) return value.map(jsonSafe);
   if (typeof value === 'object' && value !== undefined) {
-    const out: { [key: string]: JsonValue } = {};
+    // Keys may be column names (user text): no prototype, so `__proto__` is a name like any other.
+    const out: { [key: string]: JsonValue } = Object.create(null);
     for (const [k, v] of Object.entries(value as Record<string, unknown>)) if (v !== undefined) out[k] = jsonSafe(v);
     return out;
   }

@@ -14,6 +14,15 @@ export const DEFAULT_MAX_BYTES = 512 * 1024 * 1024;
 const MAX_NAMES_LISTED = 20;
 /** How many characters of a bad cell an error message quotes. */
 const MAX_CELL_QUOTED = 40;
+/** Most columns a header may name (a header that is the whole of a mis-separated file stops here). */
+export const MAX_HEADER_COLUMNS = 100_000;
+
+/**
+ * Smallest positive normal double, 2^-1022 (IEEE 754 binary64). A nonzero decimal whose value
+ * is below it reads as a subnormal (fewer significant bits) or as 0: an underflow, refused like
+ * an overflow.
+ */
+export const MIN_NORMAL = 2.2250738585072014e-308;
 
 /**
  * A decimal number as JavaScript's `Number()` reads it, without the forms we refuse
@@ -74,6 +83,20 @@ export function planRequest(columns: string[]): Request {
  * @param request the distinct requested columns
  */
 export function planColumns(file: string, header: string[], headerLine: number, request: Request): ColumnPlan {
+  if (header.some((name) => name.includes('\r'))) {
+    throw new InputError(
+      'csv-line-ends',
+      'the header holds a carriage return that no line feed follows; expected lines ending with a line feed (LF or CRLF). Hint: the file has CR-only line ends (as classic Mac OS wrote them): save it with LF or CRLF line ends',
+      { file, line: headerLine },
+    );
+  }
+  if (header.length > MAX_HEADER_COLUMNS) {
+    throw new InputError(
+      'csv-header-too-wide',
+      `the header names ${header.length} columns; expected at most ${MAX_HEADER_COLUMNS}${layoutHint(header)}`,
+      { file, line: headerLine },
+    );
+  }
   const position = new Map<string, number>();
   header.forEach((name, i) => {
     const earlier = position.get(name);
@@ -93,7 +116,7 @@ export function planColumns(file: string, header: string[], headerLine: number, 
     const wanted = missing.map((name) => quoteValue(name, MAX_CELL_QUOTED)).join(', ');
     throw new InputError(
       'csv-missing-column',
-      `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}`,
+      `no column named ${wanted}; the header has ${header.length} column${header.length === 1 ? '' : 's'}: ${listed.join(', ')}${more}${layoutHint(header)}`,
       { file, line: headerLine, key: missing[0] },
     );
   }
@@ -107,10 +130,55 @@ export function planColumns(file: string, header: string[], headerLine: number, 
   return { header, headerLine, slotOfField, fieldOfSlot };
 }
 
+/** First line of a Git LFS pointer file (git-lfs specification, "version https://git-lfs.github.com/spec/v1"). */
+const LFS_POINTER = 'version https://git-lfs.github.com/spec/';
+
+/**
+ * A one-sentence hint (starting `. Hint: `) when a header looks like a file that is not
+ * comma-separated CSV at all: a Git LFS pointer (the data was never fetched), a file separated by
+ * semicolons or tabs (one column whose name holds the separators); '' otherwise.
+ *
+ * @param header the header names as read
+ */
+export function layoutHint(header: readonly string[]): string {
+  const only = header.length === 1 ? header[0] : '';
+  if (header.length > 0 && header[0].startsWith(LFS_POINTER)) {
+    return '. Hint: the file is a Git LFS pointer, not the data: fetch the LFS objects before the check (`git lfs pull`, or `lfs: true` on the checkout step)';
+  }
+  if (only.includes(';')) return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; fitgate reads comma-separated files';
+  if (only.includes('\t')) return '. Hint: the header holds tabs and no commas: the file looks tab-separated; fitgate reads comma-separated files';
+  return '';
+}
+
+/**
+ * True when the decimal text has a nonzero digit before its exponent (its value is not 0).
+ * @param text a {@link DECIMAL_NUMBER} text
+ */
+function nonzeroDecimal(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 101 || c === 69) return false; // e, E: the exponent starts
+    if (c >= 49 && c <= 57) return true; // 1-9
+  }
+  return false;
+}
+
+/**
+ * True when a decimal text's value underflows: the text names a nonzero number, but `Number()`
+ * gives 0 or a subnormal (below {@link MIN_NORMAL} in size), e.g. `1e-400` or `2.5e-320`.
+ *
+ * @param text a {@link DECIMAL_NUMBER} text
+ * @param value `Number(text)`
+ */
+export function underflows(text: string, value: number): boolean {
+  return Math.abs(value) < MIN_NORMAL && (value !== 0 || nonzeroDecimal(text));
+}
+
 /**
  * Reads one cell of a requested column as the general path does: trims white space (as
  * `String.prototype.trim` defines it), then accepts only {@link DECIMAL_NUMBER} text whose
- * value is finite. Anything else throws InputError `csv-cell`.
+ * value is finite and does not underflow (see {@link underflows}). Anything else throws
+ * InputError `csv-cell`.
  *
  * @param cell the field text (quotes already removed)
  * @param file repository-relative path, for messages
@@ -121,17 +189,19 @@ export function cellNumber(cell: string, file: string, line: number, column: str
   const text = cell.trim();
   if (DECIMAL_NUMBER.test(text)) {
     const value = Number(text);
-    if (Number.isFinite(value)) return value;
+    if (Number.isFinite(value) && !underflows(text, value)) return value;
   }
   throw cellError(cell, file, line, column);
 }
 
-/** The `csv-cell` error for a cell that is not a finite decimal number. */
+/** The `csv-cell` error for a cell that is not a finite decimal number (or underflows). */
 export function cellError(cell: string, file: string, line: number, column: string): InputError {
   const text = cell.trim();
   let why: string;
   if (text === '') why = 'the cell is empty';
-  else if (DECIMAL_NUMBER.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
+  else if (DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text))) {
+    why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is nonzero but too small for 64-bit floating point (below about 2.2e-308 in size it reads as 0 or loses precision); rescale the column`;
+  } else if (DECIMAL_NUMBER.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
   else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
   else why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}`;
   return new InputError(

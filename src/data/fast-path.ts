@@ -10,8 +10,8 @@
  * which either accepts it or throws the error the user should see.
  */
 
-import { encodingError, lineBlocks } from './line-blocks.js';
-import { ChunkBuilder, emptyError, planColumns, type Chunk, type ColumnPlan } from './csv-rules.js';
+import { blockError, lineBlocks } from './line-blocks.js';
+import { ChunkBuilder, emptyError, MIN_NORMAL, planColumns, type Chunk, type ColumnPlan } from './csv-rules.js';
 import type { ScanTarget } from './general-path.js';
 
 /** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
@@ -67,7 +67,8 @@ const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
 export async function* fastChunks(pieces: AsyncIterable<Uint8Array>, target: ScanTarget): AsyncGenerator<Chunk> {
   const reader = new FastReader(target);
   for await (const block of lineBlocks(pieces)) {
-    if (block.badUtf8) throw encodingError(target.file, reader.line, block.utf16);
+    const stop = blockError(target.file, reader.line, block);
+    if (stop !== null) throw stop;
     let bytes = block.bytes;
     if (block.final && bytes[bytes.length - 1] !== LF) {
       // Give the last line its line feed so that every inner loop stops on one.
@@ -214,7 +215,9 @@ class FastReader {
           } else {
             text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
             value = Number(text.toString('latin1', start, p));
-            if (!Number.isFinite(value)) throw new FastPathDeclined(line);
+            // Overflow, and underflow of a nonzero text (mantissa > 0) to 0 or a subnormal: the
+            // general path says which (the exact branch above can do neither).
+            if (!Number.isFinite(value) || (mantissa !== 0 && Math.abs(value) < MIN_NORMAL)) throw new FastPathDeclined(line);
           }
           while (b === SPACE || b === TAB) b = buf[++p];
           slots[slot][row] = value;

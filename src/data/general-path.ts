@@ -7,7 +7,7 @@
 
 import { parse } from 'csv-parse';
 import { InputError } from '../core/errors.js';
-import { encodingError, lineBlocks, type LineBlock } from './line-blocks.js';
+import { encodingError, lineBlocks, type LineBlock, blockError } from './line-blocks.js';
 import {
   ChunkBuilder,
   cellNumber,
@@ -123,6 +123,7 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
     for (;;) {
       const next = await blocks.next();
       if (next.done === true) break;
+      if (next.value.headerTooLong === true) throw blockError(file, 1 + lineFeeds, next.value);
       if (next.value.badUtf8) {
         // The lines before the bad bytes are written; finish them first so that an
         // earlier row error wins, as it does on the fast path.

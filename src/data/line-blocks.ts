@@ -23,10 +23,23 @@ export interface LineBlock {
   badUtf8: boolean;
   /** With `badUtf8`: the file starts with a UTF-16 byte-order mark. */
   utf16: boolean;
+  /**
+   * True when the header (the first line that is not blank) does not end within the first
+   * {@link MAX_HEADER_BYTES} bytes (`bytes` is then empty and nothing follows). The reader throws
+   * {@link headerTooLongError}.
+   */
+  headerTooLong?: boolean;
+  /** With `headerTooLong`: the bytes read hold a carriage return that no line feed follows. */
+  loneCarriageReturn?: boolean;
 }
 
+/** The header, with any blank lines before it, must end within this many bytes of the file's start (1 MiB). */
+export const MAX_HEADER_BYTES = 1024 * 1024;
+
 const LF = 10;
+const CR = 13;
 const BOM = [0xef, 0xbb, 0xbf] as const;
+const decoder = new TextDecoder('utf-8');
 
 /**
  * Streams `pieces` as blocks of whole lines, checked to be UTF-8.
@@ -35,6 +48,9 @@ const BOM = [0xef, 0xbb, 0xbf] as const;
  * that are not UTF-8, the lines before it are still yielded, then a block with `badUtf8`
  * ends the stream: so errors always surface in file order, whatever the piece sizes.
  * An empty file yields nothing. No piece is copied except the line that straddles two pieces.
+ * Until the header (the first line that is not blank) has ended, at most
+ * {@link MAX_HEADER_BYTES} bytes are held: past that, a block with `headerTooLong` ends the
+ * stream, so a file that is one endless line is refused before it is in memory.
  *
  * @param pieces the file's bytes in pieces of any size (an empty piece is allowed)
  */
@@ -42,18 +58,43 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
   let pending: Uint8Array[] = [];
   let pendingBytes = 0;
   let first = true;
+  /** Bytes handed out (or passed over as a byte-order mark) so far. */
+  let consumed = 0;
+  /** True once a line that is not blank has ended within the cap. */
+  let headerEnded = false;
 
-  /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8). */
+  /** The block that ends the stream for a header over the cap. */
+  const tooLong = (held: Uint8Array[]): LineBlock => ({
+    bytes: new Uint8Array(0),
+    final: false,
+    badUtf8: false,
+    utf16: false,
+    headerTooLong: true,
+    loneCarriageReturn: held.some(hasLoneCarriageReturn),
+  });
+
+  /** Checks and hands out `bytes`; false when they end the stream (bad UTF-8, header too long). */
   function* emit(bytes: Uint8Array, final: boolean): Generator<LineBlock, boolean> {
     if (first) {
       first = false;
-      if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2]) bytes = bytes.subarray(3);
-      else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
+      if (bytes.length >= 3 && bytes[0] === BOM[0] && bytes[1] === BOM[1] && bytes[2] === BOM[2]) {
+        bytes = bytes.subarray(3);
+        consumed += 3;
+      } else if (bytes.length >= 2 && ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff))) {
         yield { bytes: bytes.subarray(0, 0), final: false, badUtf8: true, utf16: true };
         return false;
       }
     }
     if (bytes.length === 0) return true;
+    if (!headerEnded) {
+      const end = headerEnd(bytes);
+      if (end >= 0) headerEnded = true;
+      if (consumed + (end >= 0 ? end : bytes.length) > MAX_HEADER_BYTES) {
+        yield tooLong([bytes]);
+        return false;
+      }
+    }
+    consumed += bytes.length;
     const good = utf8Prefix(bytes);
     if (good === bytes.length) {
       yield { bytes, final, badUtf8: false, utf16: false };
@@ -70,6 +111,11 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
     if (firstCut === 0) {
       pending.push(piece);
       pendingBytes += piece.length;
+      if (!headerEnded && consumed + pendingBytes > MAX_HEADER_BYTES) {
+        // Still no line end, and the header would be over the cap: stop holding bytes.
+        yield tooLong(pending);
+        return;
+      }
       continue;
     }
     // The line that straddles the previous pieces and this one, then this piece's whole lines.
@@ -83,6 +129,28 @@ export async function* lineBlocks(pieces: AsyncIterable<Uint8Array>): AsyncGener
     pendingBytes = piece.length - lastCut;
   }
   if (pendingBytes > 0) yield* emit(concat(pending, pendingBytes), true);
+}
+
+/**
+ * Offset just past the end of the first line in `bytes` that is not blank (white space only, as
+ * `String.prototype.trim` defines it), or -1 when every line is blank. The end of `bytes` ends
+ * its last line.
+ */
+function headerEnd(bytes: Uint8Array): number {
+  let start = 0;
+  while (start < bytes.length) {
+    const lf = bytes.indexOf(LF, start);
+    const end = lf === -1 ? bytes.length : lf + 1;
+    if (decoder.decode(bytes.subarray(start, end)).trim() !== '') return end;
+    start = end;
+  }
+  return -1;
+}
+
+/** True when `bytes` hold a carriage return that no line feed follows (at the end too). */
+function hasLoneCarriageReturn(bytes: Uint8Array): boolean {
+  for (let i = bytes.indexOf(CR); i !== -1; i = bytes.indexOf(CR, i + 1)) if (bytes[i + 1] !== LF) return true;
+  return false;
 }
 
 function concat(parts: Uint8Array[], total: number): Uint8Array {
@@ -107,6 +175,35 @@ function utf8Prefix(bytes: Uint8Array): number {
     start = end;
   }
   return start;
+}
+
+/**
+ * The `csv-header-too-long` error: the header does not end within {@link MAX_HEADER_BYTES}.
+ * @param file repository-relative path
+ * @param line 1-based line where the header starts
+ * @param loneCarriageReturn the bytes read hold carriage returns without line feeds
+ */
+export function headerTooLongError(file: string, line: number, loneCarriageReturn: boolean): InputError {
+  const hint = loneCarriageReturn
+    ? '. Hint: the file has CR-only line ends (as classic Mac OS wrote them), so it reads as one line: save it with LF or CRLF line ends'
+    : '. Hint: a file without line feeds (not CSV text, or one record per file) reads as one line';
+  return new InputError('csv-header-too-long', `the header line does not end within the first ${MAX_HEADER_BYTES} bytes (1 MiB) of the file; expected a header of comma-separated column names on one line${hint}`, {
+    file,
+    line,
+  });
+}
+
+/**
+ * The error a reader throws for a block that ends the stream (`badUtf8` or `headerTooLong`),
+ * or null for a block of lines. Both CSV paths go through here, so they give the same error.
+ * @param file repository-relative path
+ * @param line 1-based line right after the lines read so far
+ * @param block the block
+ */
+export function blockError(file: string, line: number, block: LineBlock): InputError | null {
+  if (block.headerTooLong === true) return headerTooLongError(file, line, block.loneCarriageReturn === true);
+  if (block.badUtf8) return encodingError(file, line, block.utf16);
+  return null;
 }
 
 /**

@@ -2,7 +2,7 @@
  * Loads the columns one model needs from its training and hold-out files.
  */
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { InputError } from '../core/errors.js';
+import { InputError, clip } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
 import { readTable } from './table.js';
 import type { RepoReader } from '../repo/types.js';
@@ -30,7 +30,7 @@ export async function loadModelData(
   if (inputs.includes(data.target)) {
     throw new InputError(
       'target-as-input',
-      `the target column \`${data.target}\` is also used as an input by a term; a model may not read its own target`,
+      `the target column \`${clip(data.target)}\` is also used as an input by a term; a model may not read its own target`,
       { file: descriptor.file, line: data.lines.target, key: 'data.target' },
     );
   }
@@ -44,7 +44,7 @@ export async function loadModelData(
       throw withAsker(error, descriptor);
     }
     if (table.rows === 0) {
-      throw new InputError('no-rows', `\`${path}\` has a header but no data rows; expected at least one row`, {
+      throw new InputError('no-rows', `\`${clip(path)}\` has a header but no data rows; expected at least one row`, {
         file: descriptor.file,
         line,
         key,
@@ -76,6 +76,6 @@ function withAsker(error: unknown, descriptor: Descriptor): unknown {
   const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
   const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
   if (asker === null) return error;
-  return new InputError(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);
+  return new InputError(error.code, `${error.message} (asked for by ${asker} of ${clip(descriptor.file)})`, error.location);
 }
 

@@ -13,8 +13,11 @@
  * - The header is the first non-blank record; its names are trimmed and must be unique.
  * - A cell of a requested column must be a finite decimal number as JavaScript's `Number()`
  *   reads it: sign, digits, point, exponent (`-1`, `.5`, `1.`, `2.5E-3`). Empty cells, `NaN`,
- *   `Infinity`, `inf`, hexadecimal and values that overflow (`1e999`) are errors; values that
- *   underflow to a subnormal or zero are kept (they are what `Number()` gives).
+ *   `Infinity`, `inf`, hexadecimal, values that overflow (`1e999`) and nonzero values that
+ *   underflow (`1e-400`, `1e-310`: `Number()` gives 0 or a subnormal) are errors.
+ * - The header must end within the first 1 MiB of the file and name at most 100,000 columns
+ *   (checked before a longer line is held in memory). A header that looks like a Git LFS
+ *   pointer, a semicolon- or tab-separated file, or CR-only line ends gets a hint in the error.
  * - Every row has as many fields as the header.
  * - The whole file must be UTF-8, not only the columns used.
  *

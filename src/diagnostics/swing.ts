@@ -487,7 +487,8 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
   let worstInside: SwingPoint | null = null;
   let worstBeyond: SwingPoint | null = null;
   const pointAt = (columns: Float64Array[], i: number, prediction: number): SwingPoint => {
-    const inputs: Record<string, number> = {};
+    // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
+    const inputs: Record<string, number> = Object.create(null);
     design.inputs.forEach((name, c) => (inputs[name] = columns[c][i]));
     return { inputs, prediction };
   };
@@ -531,7 +532,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
     mergeAscending(grid.inside, pin, grid.beyond, pout, xs, ps);
     const [imin, imax] = extremeIndices(ps);
     const keep = thinIndices(xs.length, maxCurvePoints, [imax, imin]);
-    const others: Record<string, number> = {};
+    const others: Record<string, number> = Object.create(null);
     design.inputs.forEach((name, k) => {
       if (k !== c) others[name] = medians[k];
     });

@@ -9,10 +9,10 @@
  */
 import path from 'node:path';
 import { parseArgs as tokenize } from 'node:util';
-import { InputError } from '../core/errors.js';
+import { clip, InputError, quoteValue } from '../core/errors.js';
 import { realFolder } from '../repo/real-folder.js';
 import type { Settings } from '../run/settings.js';
-import { parseShard, type Shard } from '../run/shard.js';
+import { parseShard, type Shard, MAX_SHARDS } from '../run/shard.js';
 import { VERSION } from '../core/version.js';
 
 /** Output formats of `fitgate check`. */
@@ -63,6 +63,18 @@ export interface MergeCommand {
   html: string | null;
   sarif: string | null;
   junit: string | null;
+  /** `--expect N`: the number of shard reports there must be (a missing one is an error), or null. */
+  expect: number | null;
+}
+
+/** Reads `--expect`: a whole number of reports from 1 to {@link MAX_SHARDS}. */
+function parseExpect(value: string | null): number | null {
+  if (value === null) return null;
+  const n = Number(value);
+  if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1 || n > MAX_SHARDS) {
+    throw new InputError('expect-value', `expected the number of shard reports, a whole number from 1 to ${MAX_SHARDS}, got ${quoteValue(value)}`, { key: '--expect' });
+  }
+  return n;
 }
 
 /** Reads `--jobs`: a whole number >= 1. */
@@ -70,7 +82,7 @@ function parseJobs(value: string | undefined): number | null {
   if (value === undefined) return null;
   const n = Number(value);
   if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1) {
-    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${JSON.stringify(value)}`, { key: '--jobs' });
+    throw new InputError('jobs-value', `expected a whole number of worker threads >= 1, got ${quoteValue(value)}`, { key: '--jobs' });
   }
   return n;
 }
@@ -135,6 +147,7 @@ const COMMANDS: readonly CommandSpec[] = [
     summary: 'Join the JSON reports of `fitgate check --shard K/N --format json` jobs into one report. Exit status as for check.',
     argument: { name: 'report', description: 'JSON report files', required: true },
     options: [
+      { name: 'expect', value: 'n', description: 'the number of shard reports there must be: a missing one is an error (reports also name their shard K/N, and a gap among them is an error)' },
       FORMAT,
       OUT,
       FAIL_ON,
@@ -205,7 +218,7 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
   };
   const failOn = value('fail-on') === 'warn' ? 'warn' : 'fail';
   if (command.name === 'merge') {
-    return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common };
+    return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common, expect: parseExpect(value('expect')) };
   }
   // The root as named, and its real path: named inside the working directory, it must really
   // stay inside it (a folder replaced by a link to a parent is refused).
@@ -336,6 +349,6 @@ function toRepoPath(roots: readonly string[], absolute: string, given: string, k
     const rel = path.relative(root, absolute);
     if (!(rel === '' || rel.startsWith('..') || path.isAbsolute(rel))) return rel.split(path.sep).join('/');
   }
-  const what = key === given ? 'is' : `${JSON.stringify(given)} is`;
-  throw new InputError('path-outside', `${what} outside the repository root ${roots[0]}; expected a path inside it`, { key });
+  const what = key === given ? 'is' : `${quoteValue(given)} is`;
+  throw new InputError('path-outside', `${what} outside the repository root ${clip(roots[0])}; expected a path inside it`, { key });
 }

@@ -11,20 +11,18 @@
  * millisecond.
  */
 
-import { closeSync, fstatSync, openSync, readFileSync, readSync, realpathSync, statSync, type Stats } from 'node:fs';
+import { closeSync, fstatSync, lstatSync, openSync, readFileSync, readSync, realpathSync, statSync, type Stats } from 'node:fs';
 import * as nodePath from 'node:path';
-import { InputError, type ErrorLocation } from '../core/errors.js';
-import { FILE_MISSING, isAbsoluteLike, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
-import type { RepoReader } from './types.js';
-
-/** Glob patterns never searched. */
-const IGNORED_GLOBS = ['**/node_modules/**', '**/.git/**'];
+import { InputError, quoteValue, type ErrorLocation } from '../core/errors.js';
+import { FILE_MISSING, joinRepoPath, normaliseRepoPath, notAFileError, PATH_OUTSIDE, unreadableError } from './repo-path.js';
+import type { EntryKind, RepoReader } from './types.js';
 
 /**
  * RepoReader over a folder on disk. Every path is checked: absolute paths, `..` escapes and
  * symbolic links (at any level) whose real path is outside the root's real path are
  * InputError `path-outside`; nothing outside the root is ever opened (the real path is
- * checked before opening).
+ * checked before opening). Whatever the system refuses while reading (permissions, I/O
+ * errors) is InputError `file-unreadable` naming the file, never a bare system error.
  *
  * @param root the repository folder (absolute, or relative to the working directory)
  */
@@ -48,8 +46,8 @@ export function createFsRepository(root: string): RepoReader {
       real = await realpath(full);
     } catch (error) {
       const code = codeOf(error);
-      if (code === 'ELOOP') throw new InputError(PATH_OUTSIDE, `path ${JSON.stringify(shown)} goes round a loop of symbolic links; expected a plain path`, where);
-      if (code !== 'ENOENT' && code !== 'ENOTDIR') throw error;
+      if (code === 'ELOOP') throw new InputError(PATH_OUTSIDE, `path ${quoteValue(shown)} goes round a loop of symbolic links; expected a plain path`, where);
+      if (code !== 'ENOENT' && code !== 'ENOTDIR') throw unreadableError(error, where);
     }
     if (real === null) {
       // Missing: still refuse when an existing folder on the way leads outside.
@@ -71,11 +69,28 @@ export function createFsRepository(root: string): RepoReader {
 
   const check = async (path: string): Promise<string | null> => realInside(normaliseRepoPath(path), { file: path }, path);
 
-  const requireFile = async (path: string): Promise<string> => {
+  /** What `path` names, and its real path when something is there. */
+  const kindOf = async (path: string): Promise<{ kind: EntryKind; real: string | null }> => {
     const real = await check(path);
-    if (real === null) throw new InputError(FILE_MISSING, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
-    const info = await stat(real);
-    if (!info.isFile()) throw new InputError(FILE_MISSING, `is not a regular file (a folder or device); expected a file`, { file: path });
+    if (real === null) {
+      // Nothing at the end of the links: a link that leads nowhere is not "missing".
+      const base = await rootReal();
+      const rel = normaliseRepoPath(path);
+      const lexical = rel === '' ? base : nodePath.join(base, ...rel.split('/'));
+      try {
+        return { kind: lstatSync(lexical).isSymbolicLink() ? 'broken-link' : 'missing', real: null };
+      } catch {
+        return { kind: 'missing', real: null };
+      }
+    }
+    const info = await stat(real, { file: path });
+    return { kind: info.isFile() ? 'file' : info.isDirectory() ? 'folder' : 'special', real };
+  };
+
+  const requireFile = async (path: string): Promise<string> => {
+    const { kind, real } = await kindOf(path);
+    if (kind === 'missing') throw new InputError(FILE_MISSING, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
+    if (kind !== 'file' || real === null) throw notAFileError(kind === 'file' ? 'special' : kind, { file: path });
     return real;
   };
 
@@ -88,19 +103,30 @@ export function createFsRepository(root: string): RepoReader {
       return rel;
     },
     async isFile(path) {
-      const real = await check(path);
-      if (real === null) return false;
-      return (await stat(real)).isFile();
+      return (await kindOf(path)).kind === 'file';
+    },
+    async entryKind(path) {
+      return (await kindOf(path)).kind;
     },
     async size(path) {
-      return (await stat(await requireFile(path))).size;
+      return (await stat(await requireFile(path), { file: path })).size;
     },
     async read(path) {
-      return readFileSync(await requireFile(path));
+      const real = await requireFile(path);
+      try {
+        return readFileSync(real);
+      } catch (error) {
+        throw unreadableError(error, { file: path });
+      }
     },
     async *stream(path, chunkBytes = 1024 * 1024) {
       const real = await requireFile(path);
-      const fd = openSync(real, 'r');
+      let fd: number;
+      try {
+        fd = openSync(real, 'r');
+      } catch (error) {
+        throw unreadableError(error, { file: path });
+      }
       try {
         // Pieces of chunkBytes, no bigger than the file needs (a file that grows meanwhile is
         // still read to its end, in pieces of at least 64 KiB); each piece is a fresh buffer,
@@ -108,7 +134,12 @@ export function createFsRepository(root: string): RepoReader {
         const size = Math.max(1, Math.min(Math.floor(chunkBytes), Math.max(65_536, fstatSync(fd).size + 1)));
         for (;;) {
           const piece = Buffer.allocUnsafe(size);
-          const n = readSync(fd, piece, 0, size, null);
+          let n: number;
+          try {
+            n = readSync(fd, piece, 0, size, null);
+          } catch (error) {
+            throw unreadableError(error, { file: path });
+          }
           if (n === 0) return;
           yield n === size ? piece : piece.subarray(0, n);
         }
@@ -117,24 +148,12 @@ export function createFsRepository(root: string): RepoReader {
       }
     },
     async glob(patterns) {
-      for (const pattern of patterns) {
-        const p = pattern.replace(/\\/g, '/');
-        if (isAbsoluteLike(pattern) || p === '..' || p.startsWith('../')) {
-          throw new InputError(PATH_OUTSIDE, `glob pattern ${JSON.stringify(pattern)} leaves the repository; expected a pattern relative to the root`, {});
-        }
-      }
-      if (patterns.length === 0) return [];
-      // tinyglobby is loaded when a run globs (a run given its descriptors never does).
-      const { glob: tinyGlob } = await import('tinyglobby');
-      const found = await tinyGlob(patterns, {
-        cwd: await rootReal(),
-        onlyFiles: true,
-        followSymbolicLinks: false,
-        dot: false,
-        ignore: IGNORED_GLOBS,
-      });
-      const paths = new Set(found.map((p) => p.replace(/\\/g, '/')).filter((p) => !isIgnoredPath(p)));
-      return [...paths].sort();
+      // The matcher and the walk are loaded when a run globs (a run given its descriptors never
+      // does); the patterns are checked (and refused) before the first folder is listed.
+      const [{ compilePatterns }, { walkTree }] = await Promise.all([import('./glob-pattern.js'), import('./tree-walk.js')]);
+      const compiled = compilePatterns(patterns);
+      if (patterns.length === 0) return { paths: [], notEntered: [] };
+      return walkTree(await rootReal(), compiled);
     },
   };
 }
@@ -144,9 +163,13 @@ async function realpath(path: string): Promise<string> {
   return realpathSync.native(path);
 }
 
-/** File information, as a promise. */
-async function stat(path: string): Promise<Stats> {
-  return statSync(path);
+/** File information, as a promise; a system error is InputError `file-unreadable` at `where`. */
+async function stat(path: string, where: ErrorLocation): Promise<Stats> {
+  try {
+    return statSync(path);
+  } catch (error) {
+    throw unreadableError(error, where);
+  }
 }
 
 function isInside(base: string, real: string): boolean {
@@ -155,7 +178,7 @@ function isInside(base: string, real: string): boolean {
 }
 
 function outside(shown: string, where: ErrorLocation): InputError {
-  return new InputError(PATH_OUTSIDE, `path ${JSON.stringify(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
+  return new InputError(PATH_OUTSIDE, `path ${quoteValue(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
 }
 
 function codeOf(error: unknown): string | undefined {

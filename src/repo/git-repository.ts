@@ -7,10 +7,10 @@
  */
 import { execFile, spawn } from 'node:child_process';
 import path from 'node:path';
-import { InputError } from '../core/errors.js';
-import { patternMatchers } from './glob-pattern.js';
-import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE } from './repo-path.js';
-import type { RepoReader } from './types.js';
+import { InputError, quoteValue } from '../core/errors.js';
+import { compilePatterns } from './glob-pattern.js';
+import { FILE_MISSING, joinRepoPath, normaliseRepoPath, PATH_OUTSIDE, notAFileError, unreadableError } from './repo-path.js';
+import type { RepoReader, EntryKind } from './types.js';
 
 /** Options of {@link createGitRepository}. */
 export interface GitRepositoryOptions {
@@ -121,7 +121,7 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
     return listing;
   };
   const outside = (file: string, where: { file?: string; line?: number; column?: number; key?: string }, target: string): InputError =>
-    new InputError(PATH_OUTSIDE, `path ${JSON.stringify(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
+    new InputError(PATH_OUTSIDE, `path ${quoteValue(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
   const missing = (file: string): InputError => new InputError(FILE_MISSING, `no such file in ${label}; expected an existing file`, { file });
 
   /**
@@ -153,14 +153,37 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
     return { path: final, entry: entries.get(final) };
   }
 
-  /** The blob entry of a regular file at `p` (links followed), or an InputError. */
-  async function fileEntry(p: string): Promise<TreeEntry> {
+  /** What `p` names (links followed inside the tree), with its entry when it is a file. */
+  async function kindOf(p: string): Promise<{ kind: EntryKind; entry: TreeEntry | null }> {
     const n = normalise(p);
     if (n === null) throw outside(p, {}, p);
     const real = await realPath(n);
     if (real === null) throw outside(p, {}, p);
-    if (real.entry?.kind !== 'file') throw missing(n);
-    return real.entry;
+    const entry = real.entry;
+    if (entry?.kind === 'file') return { kind: 'file', entry };
+    if (entry?.kind === 'other') return { kind: 'special', entry: null };
+    // Not an entry of the tree: a folder (entries below it), a link that leads nowhere, or nothing.
+    const entries = await tree();
+    const below = real.path === '' ? '' : `${real.path}/`;
+    for (const key of entries.keys()) if (key.startsWith(below)) return { kind: 'folder', entry: null };
+    return { kind: real.path !== n || entries.get(n)?.kind === 'link' ? 'broken-link' : 'missing', entry: null };
+  }
+
+  /** The blob entry of a regular file at `p` (links followed), or an InputError. */
+  async function fileEntry(p: string): Promise<TreeEntry> {
+    const { kind, entry } = await kindOf(p);
+    if (kind === 'missing') throw missing(normalise(p) ?? p);
+    if (kind !== 'file' || entry === null) throw notAFileError(kind === 'file' ? 'special' : kind, { file: p });
+    return entry;
+  }
+
+  /** Runs git for the bytes of a file; git's failure (a damaged object store) is `file-unreadable`. */
+  async function blob(p: string, args: string[], maxBuffer?: number): Promise<Buffer> {
+    try {
+      return await runGit(cwd, args, maxBuffer);
+    } catch (error) {
+      throw unreadableError(error, { file: p });
+    }
   }
 
   return {
@@ -176,12 +199,15 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
       const real = await realPath(n);
       return real?.entry?.kind === 'file';
     },
+    async entryKind(p) {
+      return (await kindOf(p)).kind;
+    },
     async size(p) {
       return (await fileEntry(p)).size;
     },
     async read(p) {
       const entry = await fileEntry(p);
-      return new Uint8Array(await runGit(cwd, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
+      return new Uint8Array(await blob(p, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
     },
     async *stream(p, chunkBytes = 1024 * 1024) {
       const entry = await fileEntry(p);
@@ -202,19 +228,21 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
         }
       }
       const code = await closed;
-      if (code !== 0) throw new Error(`git cat-file failed for ${p} in ${label} (exit status ${code})`);
+      if (code !== 0) throw unreadableError({ code: `git cat-file exit status ${code}` }, { file: p });
       if (pendingBytes > 0) yield new Uint8Array(Buffer.concat(pending));
     },
     async glob(patterns) {
-      const matchers = patternMatchers(patterns);
+      const compiled = compilePatterns(patterns);
       const entries = await tree();
-      const found: string[] = [];
+      const paths: string[] = [];
+      const notEntered: string[] = [];
       for (const [p, entry] of entries) {
-        if (entry.kind === 'other' || isIgnoredPath(p) || !matchers.some((m) => m(p))) continue;
-        if (entry.kind === 'link' && (await realPath(p))?.entry?.kind !== 'file') continue;
-        found.push(p);
+        if (entry.kind === 'other') continue; // a submodule is a folder of another repository
+        if (compiled.matches(p)) paths.push(p);
+        // A link a pattern would search below is never followed as a folder (as on disk).
+        if (entry.kind === 'link' && compiled.searchesBelow(p)) notEntered.push(p);
       }
-      return found.sort();
+      return { paths: paths.sort(), notEntered: notEntered.sort() };
     },
   };
 }

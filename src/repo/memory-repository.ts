@@ -4,8 +4,8 @@
  */
 
 import { InputError } from '../core/errors.js';
-import { patternMatchers } from './glob-pattern.js';
-import { FILE_MISSING, isIgnoredPath, joinRepoPath, normaliseRepoPath } from './repo-path.js';
+import { compilePatterns } from './glob-pattern.js';
+import { FILE_MISSING, joinRepoPath, normaliseRepoPath, notAFileError } from './repo-path.js';
 import type { RepoReader } from './types.js';
 
 /**
@@ -22,11 +22,20 @@ export function createMemoryRepository(files: Record<string, string | Uint8Array
     store.set(normaliseRepoPath(path), typeof contents === 'string' ? encoder.encode(contents) : contents);
   }
 
+  /** A stored file's path, a folder's (some stored path lies below it), or nothing. */
+  const kindOf = (key: string): 'file' | 'folder' | 'missing' => {
+    if (store.has(key)) return 'file';
+    const below = key === '' ? '' : `${key}/`;
+    for (const stored of store.keys()) if (stored.startsWith(below)) return 'folder';
+    return 'missing';
+  };
+
   const get = (path: string): Uint8Array => {
     const key = normaliseRepoPath(path);
     const contents = store.get(key);
-    if (contents === undefined) throw new InputError(FILE_MISSING, `no such file in ${label}; expected an existing file`, { file: path });
-    return contents;
+    if (contents !== undefined) return contents;
+    if (kindOf(key) === 'folder') throw notAFileError('folder', { file: path });
+    throw new InputError(FILE_MISSING, `no such file in ${label}; expected an existing file`, { file: path });
   };
 
   return {
@@ -36,6 +45,9 @@ export function createMemoryRepository(files: Record<string, string | Uint8Array
     },
     async isFile(path) {
       return store.has(normaliseRepoPath(path));
+    },
+    async entryKind(path) {
+      return kindOf(normaliseRepoPath(path));
     },
     async size(path) {
       return get(path).byteLength;
@@ -49,8 +61,8 @@ export function createMemoryRepository(files: Record<string, string | Uint8Array
       for (let start = 0; start < contents.byteLength; start += step) yield contents.slice(start, start + step);
     },
     async glob(patterns) {
-      const matchers = patternMatchers(patterns);
-      return [...store.keys()].filter((path) => !isIgnoredPath(path) && matchers.some((m) => m(path))).sort();
+      const compiled = compilePatterns(patterns);
+      return { paths: [...store.keys()].filter((path) => compiled.matches(path)).sort(), notEntered: [] };
     },
   };
 }

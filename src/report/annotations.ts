@@ -6,9 +6,9 @@
  * escaped so that it can never start a workflow command of its own.
  */
 import path from 'node:path';
-import type { InputError } from '../core/errors.js';
 import type { ModelResult, Result } from '../result/result.js';
 import { defuseLegacyCommands } from './runner-commands.js';
+import { clip, type InputError } from '../core/errors.js';
 
 /** Severity of an annotation. */
 export type AnnotationLevel = 'error' | 'warning' | 'notice';
@@ -139,7 +139,7 @@ export function inputErrorAnnotation(error: InputError, prefix = ''): Annotation
     ...(file !== undefined ? { file: workspacePath(prefix, file) } : {}),
     ...(file !== undefined && line !== undefined ? { line } : {}),
     title: 'fitgate could not run',
-    message: error.location.key !== undefined ? `\`${error.location.key}\`: ${error.message}` : error.message,
+    message: error.location.key !== undefined ? `\`${clip(error.location.key)}\`: ${error.message}` : error.message,
   };
 }
 

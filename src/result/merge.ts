@@ -1,15 +1,28 @@
 /**
  * Joins the JSON reports of shard jobs (`fitgate check --shard K/N --format json`) into one
- * Result, as if one job had checked every model: the verdict and counts are recomputed with
- * {@link summarise}; notes are kept once each, in input order.
+ * Result, as if one job had checked every model. Nothing in a report is trusted:
  *
- * Every report is validated before anything is merged: bad JSON, or a key with the wrong type,
- * is an InputError naming the report file, the line and column (for JSON syntax) and the key
- * path (e.g. `models[2].verdict`). The same model name in two reports is an error too: the
- * shards of one matrix never overlap, so a repeat means reports of different runs were mixed.
+ * - the text is scanned before it is parsed: nesting deeper than {@link MAX_REPORT_DEPTH} and
+ *   number literals that are not finite (`1e999`) are refused with the file, line and column;
+ * - the parsed value is validated against the report's JSON Schema
+ *   (`config/schema/report.schema.json`, precompiled): every field a reporter reads has its type,
+ *   its range (whole numbers, lines from 1) and its documented strings checked, and no unknown
+ *   key is let through;
+ * - every check's status is recomputed from its figure and limits, every model's verdict from
+ *   its checks (or its error), the report's verdict and counts from its models: a report that
+ *   disagrees with itself was edited and is refused;
+ * - shards are accounted for: with `--expect N` there must be N reports, and when reports name
+ *   their shard (`shard: {index, count}`, written by `--shard`) every K of 1..N must be there
+ *   exactly once;
+ * - the same model name in two reports is an error (the shards of one run never overlap).
+ *
+ * Model names and other user keys are only compared and held in a Map, never used as keys of a
+ * plain object, so `__proto__` and `constructor` are names like any other. Every error is an
+ * InputError naming the report file and the key path (e.g. `models[2].verdict`).
  */
-import { InputError } from '../core/errors.js';
-import { summarise, type ModelResult, type Result } from './result.js';
+import { InputError, clip, quoteValue } from '../core/errors.js';
+import { summarise, type ModelResult, type Result, fromJsonNumber, worse, type CheckResult, type CheckStatus, type Verdict } from './result.js';
+import { validateReport } from '../config/generated/report-validator.js';
 
 /** One shard report as read from disk. */
 export interface ReportInput {
@@ -19,18 +32,26 @@ export interface ReportInput {
   text: string;
 }
 
+/** Options of {@link mergeReports}. */
+export interface MergeOptions {
+  /** The number of reports there must be (`--expect N`); null or absent: any number. */
+  expect?: number | null;
+}
+
 /** Error codes of {@link mergeReports}. */
 export const MERGE_ERROR = Object.freeze({
   none: 'merge-no-reports',
   json: 'merge-json',
+  tooDeep: 'merge-too-deep',
+  number: 'merge-number',
   shape: 'merge-shape',
+  inconsistent: 'merge-inconsistent',
   duplicate: 'merge-duplicate',
+  missingShard: 'merge-missing-shard',
 });
 
-const VERDICTS = ['pass', 'warn', 'fail', 'error'];
-const STATUSES = ['pass', 'warn', 'fail', 'skipped'];
-
-type Json = Record<string, unknown>;
+/** Deepest nesting of arrays and objects a report may have (a real one has fewer than 10 levels). */
+export const MAX_REPORT_DEPTH = 64;
 
 /** 1-based line and column of a character offset. */
 function lineColumn(text: string, offset: number): { line: number; column: number } {
@@ -133,107 +154,208 @@ export function jsonErrorOffset(text: string): number {
   }
 }
 
-/** Parses JSON; a syntax error becomes an InputError with the file, line and column. */
+/**
+ * The first place where a JSON text nests deeper than `maxDepth` or writes a number literal
+ * whose value is not finite, or null. A linear scan that keeps no stack (only the depth), so
+ * that nothing recursive ever meets a deep text; strings are skipped with their escapes.
+ *
+ * @param text the JSON text
+ * @param maxDepth deepest nesting allowed; default {@link MAX_REPORT_DEPTH}
+ * @returns the offset and what is wrong there, or null
+ */
+export function scanJsonText(text: string, maxDepth = MAX_REPORT_DEPTH): { offset: number; problem: 'depth' | 'number' } | null {
+  let depth = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 34) {
+      // A string: skip to its closing quote.
+      for (i += 1; i < text.length && text.charCodeAt(i) !== 34; i++) if (text.charCodeAt(i) === 92) i += 1;
+    } else if (c === 91 || c === 123) {
+      depth += 1;
+      if (depth > maxDepth) return { offset: i, problem: 'depth' };
+    } else if (c === 93 || c === 125) {
+      depth -= 1;
+    } else if (c === 45 || (c >= 48 && c <= 57)) {
+      let end = i + 1;
+      while (end < text.length && isNumberChar(text.charCodeAt(end))) end += 1;
+      const value = Number(text.slice(i, end));
+      if (value === Infinity || value === -Infinity) return { offset: i, problem: 'number' };
+      i = end - 1;
+    }
+  }
+  return null;
+}
+
+/** Digits, `e`, `E`, `+`, `-` and `.`: the characters of a JSON number literal. */
+function isNumberChar(c: number): boolean {
+  return (c >= 48 && c <= 57) || c === 101 || c === 69 || c === 43 || c === 45 || c === 46;
+}
+
+/** Parses a report's JSON: bounded first (depth, numbers), then a syntax error gets its line and column. */
 function parseJson(input: ReportInput): unknown {
+  const scanned = scanJsonText(input.text);
+  if (scanned !== null) {
+    const where = { file: input.file, ...lineColumn(input.text, scanned.offset) };
+    if (scanned.problem === 'depth') {
+      throw new InputError(MERGE_ERROR.tooDeep, `the JSON nests arrays and objects more than ${MAX_REPORT_DEPTH} levels deep; expected a fitgate JSON report (a few levels)`, where);
+    }
+    const literal = /^-?[0-9eE+.-]*/.exec(input.text.slice(scanned.offset, scanned.offset + 200))?.[0] ?? '';
+    throw new InputError(MERGE_ERROR.number, `the number ${quoteValue(literal)} is beyond the range of 64-bit floating point; expected finite numbers (a report writes the others as "Infinity", "-Infinity" or "NaN")`, where);
+  }
   try {
     return JSON.parse(input.text);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const offset = jsonErrorOffset(input.text);
     const where = offset >= 0 ? lineColumn(input.text, offset) : {};
-    throw new InputError(MERGE_ERROR.json, `expected a fitgate JSON report (from \`fitgate check --format json\`), but the JSON does not parse: ${message}`, {
+    throw new InputError(MERGE_ERROR.json, `expected a fitgate JSON report (from \`fitgate check --format json\`), but the JSON does not parse: ${clip(message)}`, {
       file: input.file,
       ...where,
     });
   }
 }
 
-/** Checks one report's shape, throwing an InputError at the first bad key. */
-class ReportValidator {
-  constructor(private readonly file: string) {}
+/** A JSON pointer (`/models/2/verdict`) as a key path (`models[2].verdict`); `(top level)` for the root. */
+function keyPath(pointer: string, extra?: string): string {
+  const parts = pointer === '' ? [] : pointer.slice(1).split('/').map((p) => p.replace(/~1/g, '/').replace(/~0/g, '~'));
+  if (extra !== undefined) parts.push(extra);
+  let out = '';
+  for (const part of parts) out += /^\d+$/.test(part) ? `[${part}]` : out === '' ? part : `.${part}`;
+  return out === '' ? '(top level)' : out;
+}
 
-  fail(key: string, expected: string, value: unknown): never {
-    let shown: string;
-    try {
-      shown = value === undefined ? 'nothing' : (JSON.stringify(value) ?? String(value));
-    } catch {
-      shown = String(value);
+/** The value at a JSON pointer (own properties only). */
+function valueAt(root: unknown, pointer: string): unknown {
+  let node = root;
+  for (const part of pointer === '' ? [] : pointer.slice(1).split('/')) {
+    if (node === null || typeof node !== 'object' || !Object.prototype.hasOwnProperty.call(node, part)) return undefined;
+    node = (node as Record<string, unknown>)[part];
+  }
+  return node;
+}
+
+/** An ajv error, as much of it as is read here. */
+interface SchemaError {
+  instancePath: string;
+  keyword: string;
+  params: Record<string, unknown>;
+}
+
+/** What a failed keyword expected, in words. */
+function expectation(error: SchemaError): string {
+  const p = error.params;
+  switch (error.keyword) {
+    case 'type': {
+      const types = String(p.type).split(',');
+      const words: Record<string, string> = { string: 'a string', number: 'a number', integer: 'a whole number', object: 'an object', array: 'an array', boolean: 'true or false', null: 'null' };
+      return types.map((t) => words[t] ?? t).join(' or ');
     }
-    if (shown.length > 80) shown = `${shown.slice(0, 79)}…`;
-    throw new InputError(MERGE_ERROR.shape, `expected ${expected}, got ${shown}`, { file: this.file, key });
+    case 'enum':
+      return `one of ${(p.allowedValues as unknown[]).map((v) => String(v)).join(', ')}`;
+    case 'const':
+      return JSON.stringify(p.allowedValue);
+    case 'minimum':
+      return `a number >= ${String(p.limit)}`;
+    case 'minItems':
+    case 'maxItems':
+      return `${String(p.limit)} items`;
+    default:
+      return `a value that passes \`${error.keyword}\``;
   }
+}
 
-  object(value: unknown, key: string): Json {
-    if (typeof value !== 'object' || value === null || Array.isArray(value)) this.fail(key, 'an object', value);
-    return value as Json;
+/** The InputError for a report that does not fit the schema: the deepest error, in words. */
+function schemaError(file: string, value: unknown, errors: readonly SchemaError[]): InputError {
+  const depth = (e: SchemaError): number => (e.instancePath === '' ? 0 : e.instancePath.split('/').length);
+  const deepest = errors.reduce((best, e) => (depth(e) > depth(best) ? e : best), errors[0]);
+  if (deepest.keyword === 'required') {
+    const missing = String(deepest.params.missingProperty);
+    return new InputError(MERGE_ERROR.shape, `expected key \`${clip(missing)}\`, got nothing`, { file, key: keyPath(deepest.instancePath, missing) });
   }
-
-  array(value: unknown, key: string): unknown[] {
-    if (!Array.isArray(value)) this.fail(key, 'an array', value);
-    return value;
+  if (deepest.keyword === 'additionalProperties') {
+    const extra = String(deepest.params.additionalProperty);
+    return new InputError(MERGE_ERROR.shape, `expected no key \`${clip(extra)}\` (it is not part of a fitgate JSON report)`, { file, key: keyPath(deepest.instancePath, extra) });
   }
+  // Alternatives (anyOf) at one place: every branch's expectation, once each.
+  const here = errors.filter((e) => e.instancePath === deepest.instancePath && e.keyword !== 'anyOf');
+  const expected = [...new Set((here.length > 0 ? here : [deepest]).map(expectation))].join(', or ');
+  return new InputError(MERGE_ERROR.shape, `expected ${expected}, got ${quoteValue(valueAt(value, deepest.instancePath))}`, { file, key: keyPath(deepest.instancePath) });
+}
 
-  string(value: unknown, key: string): string {
-    if (typeof value !== 'string') this.fail(key, 'a string', value);
-    return value;
-  }
+/** The status the registry gives a figure against its limits (checks/types.ts `judge`); both when limits alone cannot tell. */
+function statusesOf(check: CheckResult): CheckStatus[] {
+  const value = check.value === null ? Number.NaN : fromJsonNumber(check.value);
+  if (Number.isNaN(value)) return ['skipped'];
+  const floor = check.floor ?? { warn: null, fail: null };
+  if ((check.limit !== null && value > check.limit) || (floor.fail !== null && value < floor.fail)) return ['fail'];
+  if ((check.warn !== null && value > check.warn) || (floor.warn !== null && value < floor.warn)) return ['warn'];
+  // Without thresholds the limit may be off (skipped) or have neither set (pass).
+  return check.limit === null && check.warn === null && floor.fail === null && floor.warn === null ? ['pass', 'skipped'] : ['pass'];
+}
 
-  oneOf(value: unknown, key: string, allowed: string[]): void {
-    if (typeof value !== 'string' || !allowed.includes(value)) this.fail(key, `one of ${allowed.join(', ')}`, value);
-  }
-
-  count(value: unknown, key: string): void {
-    if (typeof value !== 'number' || !Number.isInteger(value) || value < 0) this.fail(key, 'a whole number >= 0', value);
-  }
-
-  /** A JSON number as the report writes it: a number or `"Infinity"`, `"-Infinity"`, `"NaN"`. */
-  jsonNumber(value: unknown, key: string, nullable = false): void {
-    if (nullable && value === null) return;
-    if (typeof value === 'number') return;
-    if (value === 'Infinity' || value === '-Infinity' || value === 'NaN') return;
-    this.fail(key, nullable ? 'a number or null' : 'a number', value);
-  }
-
-  model(value: unknown, key: string): ModelResult {
-    const m = this.object(value, key);
-    this.string(m.name, `${key}.name`);
-    this.string(m.descriptor, `${key}.descriptor`);
-    this.oneOf(m.verdict, `${key}.verdict`, VERDICTS);
-    const rows = this.object(m.rows, `${key}.rows`);
-    this.count(rows.train, `${key}.rows.train`);
-    this.count(rows.holdout, `${key}.rows.holdout`);
-    this.count(m.parameters, `${key}.parameters`);
-    this.array(m.columns, `${key}.columns`).forEach((c, i) => this.string(c, `${key}.columns[${i}]`));
-    if (m.metrics !== null) this.object(m.metrics, `${key}.metrics`);
-    this.array(m.coefficients, `${key}.coefficients`).forEach((c, i) => this.jsonNumber(c, `${key}.coefficients[${i}]`));
-    if (m.shipped !== null && m.shipped !== undefined) this.object(m.shipped, `${key}.shipped`);
-    this.array(m.checks, `${key}.checks`).forEach((c, i) => {
-      const at = `${key}.checks[${i}]`;
-      const check = this.object(c, at);
-      this.string(check.id, `${at}.id`);
-      this.string(check.code, `${at}.code`);
-      this.oneOf(check.status, `${at}.status`, STATUSES);
-      this.jsonNumber(check.value, `${at}.value`, true);
-      this.count(check.line, `${at}.line`);
-      this.string(check.message, `${at}.message`);
+/** Refuses a report whose statuses, verdicts and counts disagree with their own figures. */
+function checkConsistency(file: string, report: Result): void {
+  const inconsistent = (key: string, message: string): never => {
+    throw new InputError(MERGE_ERROR.inconsistent, `${message}; expected the report as fitgate wrote it (was it edited?)`, { file, key });
+  };
+  let verdict: Verdict = 'pass';
+  const counts = { models: report.models.length, pass: 0, warn: 0, fail: 0, error: 0 };
+  report.models.forEach((m, i) => {
+    let expected: Verdict = 'pass';
+    m.checks.forEach((c, j) => {
+      const allowed = statusesOf(c);
+      if (!allowed.includes(c.status)) inconsistent(`models[${i}].checks[${j}].status`, `the status is ${quoteValue(c.status)} but the figure ${quoteValue(c.value)} against the limits (fail ${quoteValue(c.limit)}, warn ${quoteValue(c.warn)}) gives ${allowed.join(' or ')}`);
+      if (c.status === 'fail' || c.status === 'warn') expected = worse(expected, c.status);
     });
-    if (m.error !== null) {
-      const e = this.object(m.error, `${key}.error`);
-      this.string(e.message, `${key}.error.message`);
-      this.string(e.code, `${key}.error.code`);
+    if (m.error !== null) expected = 'error';
+    if (m.verdict !== expected) {
+      const because = m.error !== null ? 'the model has an error' : m.verdict === 'error' ? 'the model has no error' : 'its checks give that';
+      inconsistent(`models[${i}].verdict`, `the verdict is ${quoteValue(m.verdict)} but ${because}: ${quoteValue(expected)}`);
     }
-    if (m.verdict === 'error' && m.error === null) this.fail(`${key}.error`, 'the error of a model whose verdict is `error`', m.error);
-    return m as unknown as ModelResult;
+    counts[m.verdict] += 1;
+    verdict = worse(verdict, m.verdict);
+  });
+  if (report.verdict !== verdict) inconsistent('verdict', `the report's verdict is ${quoteValue(report.verdict)} but its models give ${quoteValue(verdict)}`);
+  for (const key of ['models', 'pass', 'warn', 'fail', 'error'] as const) {
+    if (report.counts[key] !== counts[key]) inconsistent(`counts.${key}`, `the count is ${report.counts[key]} but the models give ${counts[key]}`);
   }
+}
 
-  report(value: unknown): { models: ModelResult[]; notes: string[] } {
-    const r = this.object(value, '(top level)');
-    const tool = this.object(r.tool, 'tool');
-    if (tool.name !== 'fitgate') this.fail('tool.name', '"fitgate"', tool.name);
-    this.oneOf(r.verdict, 'verdict', VERDICTS);
-    const models = this.array(r.models, 'models').map((m, i) => this.model(m, `models[${i}]`));
-    const notes = r.notes === undefined ? [] : this.array(r.notes, 'notes').map((n, i) => this.string(n, `notes[${i}]`));
-    return { models, notes };
+/** One report: bounded, parsed, validated against the schema, consistent with itself. */
+function readReport(input: ReportInput): Result {
+  const value = parseJson(input);
+  if (!validateReport(value)) throw schemaError(input.file, value, (validateReport as unknown as { errors: SchemaError[] }).errors ?? []);
+  const report = value as Result;
+  checkConsistency(input.file, report);
+  return report;
+}
+
+/** With `--expect N` there must be N reports; reports that name their shard must cover 1..N once each. */
+function checkShards(inputs: readonly ReportInput[], reports: readonly Result[], expect: number | null): void {
+  if (expect !== null && reports.length !== expect) {
+    throw new InputError(MERGE_ERROR.missingShard, `--expect ${expect} asks for ${expect} shard report${expect === 1 ? '' : 's'}, got ${reports.length}; expected every shard's report (did a shard job fail before writing it?)`, { key: '--expect' });
+  }
+  const named = reports.map((r, i) => ({ shard: r.shard, file: inputs[i].file })).filter((r) => r.shard !== undefined);
+  if (named.length === 0) return;
+  const unnamed = reports.findIndex((r) => r.shard === undefined);
+  if (unnamed >= 0) {
+    throw new InputError(MERGE_ERROR.missingShard, `the report names no shard while ${clip(named[0].file)} is shard ${named[0].shard?.index}/${named[0].shard?.count}; expected reports of one sharded run`, { file: inputs[unnamed].file, key: 'shard' });
+  }
+  const count = expect ?? named[0].shard?.count ?? 0;
+  const seen = new Map<number, string>();
+  for (const { shard, file } of named) {
+    if (shard === undefined) continue;
+    if (shard.count !== count || shard.index > count) {
+      throw new InputError(MERGE_ERROR.missingShard, `the report is shard ${shard.index}/${shard.count}, but ${expect !== null ? `--expect ${expect}` : `${clip(named[0].file)} is of ${count} shards`}; expected reports of one run split ${count} ways`, { file, key: 'shard' });
+    }
+    const first = seen.get(shard.index);
+    if (first !== undefined) throw new InputError(MERGE_ERROR.duplicate, `shard ${shard.index}/${count} is also ${clip(first)}; expected each shard's report once`, { file, key: 'shard.index' });
+    seen.set(shard.index, file);
+  }
+  const missing: number[] = [];
+  for (let k = 1; k <= count && missing.length < 20; k++) if (!seen.has(k)) missing.push(k);
+  if (missing.length > 0) {
+    throw new InputError(MERGE_ERROR.missingShard, `the reports are of a run split ${count} ways, but shard${missing.length === 1 ? '' : 's'} ${missing.map((k) => `${k}/${count}`).join(', ')} ${missing.length === 1 ? 'is' : 'are'} missing; expected every shard's report`, { key: 'shard' });
   }
 }
 
@@ -241,27 +363,33 @@ class ReportValidator {
  * Joins shard reports into one Result.
  * @param inputs the reports' texts with their paths, in the order given (at least one)
  * @param version the tool version to record in the merged Result
+ * @param options `expect`: the number of reports there must be (default: any)
  * @returns the merged Result: models of every report sorted as {@link summarise} sorts them,
- *   verdict and counts recomputed, notes de-duplicated in input order
+ *   verdict and counts recomputed, notes de-duplicated in input order (no `shard`: it is whole)
  * @throws InputError `merge-no-reports` for an empty list, `merge-json` for text that is not
- *   JSON (with line and column), `merge-shape` for a key of the wrong type (with the key path),
- *   `merge-duplicate` when two reports (or one) hold the same model name
+ *   JSON (with line and column), `merge-too-deep` and `merge-number` for text refused before
+ *   parsing, `merge-shape` for a key of the wrong type or range (with the key path),
+ *   `merge-inconsistent` for statuses, verdicts or counts that disagree with the figures,
+ *   `merge-duplicate` when two reports (or one) hold the same model name or shard,
+ *   `merge-missing-shard` when a shard's report is missing
  */
-export function mergeReports(inputs: readonly ReportInput[], version: string): Result {
+export function mergeReports(inputs: readonly ReportInput[], version: string, options: MergeOptions = {}): Result {
   if (inputs.length === 0) {
     throw new InputError(MERGE_ERROR.none, 'expected at least one JSON report to merge (the files `fitgate check --shard K/N --format json --out FILE` wrote), got none');
   }
+  const reports = inputs.map(readReport);
+  checkShards(inputs, reports, options.expect ?? null);
   const models: ModelResult[] = [];
   const notes: string[] = [];
   const seen = new Map<string, { file: string; index: number }>();
-  for (const input of inputs) {
-    const report = new ReportValidator(input.file).report(parseJson(input));
+  reports.forEach((report, r) => {
+    const input = inputs[r];
     report.models.forEach((model, index) => {
       const first = seen.get(model.name);
       if (first) {
         throw new InputError(
           MERGE_ERROR.duplicate,
-          `model \`${model.name}\` is also in ${first.file} (models[${first.index}]); expected every model in exactly one shard report (were reports of different runs mixed?)`,
+          `model ${quoteValue(model.name)} is also in ${clip(first.file)} (models[${first.index}]); expected every model in exactly one shard report (were reports of different runs mixed?)`,
           { file: input.file, key: `models[${index}].name` },
         );
       }
@@ -269,6 +397,6 @@ export function mergeReports(inputs: readonly ReportInput[], version: string): R
       models.push(model);
     });
     for (const note of report.notes) if (!notes.includes(note)) notes.push(note);
-  }
+  });
   return summarise(models, version, notes);
 }

@@ -135,6 +135,11 @@ export interface Result {
   models: ModelResult[];
   /** Messages about the run as a whole (e.g. base commit not available). */
   notes: string[];
+  /**
+   * The share of the models this run checked (`--shard K/N`: index K, count N), so that
+   * `fitgate merge` can tell when a shard's report is missing. Absent for a whole run.
+   */
+  shard?: { index: number; count: number };
 }
 
 const ORDER: Record<Verdict, number> = { pass: 0, warn: 1, fail: 2, error: 3 };

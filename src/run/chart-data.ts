@@ -203,7 +203,8 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
     const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
     const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
-    const others: Record<string, number> = {};
+    // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
+    const others: Record<string, number> = Object.create(null);
     inputs.forEach((name, k) => {
       if (k !== c) others[name] = chartNumber(medians[k]) ?? 0;
     });

@@ -1,7 +1,7 @@
 /**
  * The outcome of a model that could not be checked: verdict `error` with the file, line and code.
  */
-import type { InputError } from '../core/errors.js';
+import { clip, type InputError } from '../core/errors.js';
 import type { ModelResult } from '../result/result.js';
 
 /** Error code of a model that failed through a fault in fitgate rather than in its files. */
@@ -26,7 +26,7 @@ export function errorResult(name: string, descriptor: string, error: InputError)
     shipped: null,
     checks: [],
     error: {
-      message: key !== undefined && key !== '' ? `\`${key}\`: ${error.message}` : error.message,
+      message: key !== undefined && key !== '' ? `\`${clip(key)}\`: ${error.message}` : error.message,
       file: error.location.file ?? null,
       line: error.location.line ?? null,
       code: error.code,

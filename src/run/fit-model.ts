@@ -4,7 +4,7 @@
  */
 import type { CoreMetrics } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { InputError } from '../core/errors.js';
+import { clip, InputError } from '../core/errors.js';
 import type { ModelTables } from '../data/load-model-data.js';
 import type { Design } from '../design/design-matrix.js';
 import { range } from '../design/stats.js';
@@ -124,7 +124,7 @@ function shippedScore(descriptor: Descriptor, design: Design, tables: ModelTable
   if (shipped.length !== design.p) {
     throw new InputError(
       'coefficients-length',
-      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
+      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => clip(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
       { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
     );
   }

@@ -7,7 +7,7 @@
  * 2. the refinement pass, where one step of iterative refinement converges and gains digits;
  * 3. the scoring pass: predictions, out-of-fold errors and leverages together.
  */
-import { InputError } from '../core/errors.js';
+import { clip, InputError } from '../core/errors.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import { complementFactors, crossValidate, FoldFactorBuilder, mergeFactors, type CrossValidation, type FoldFactors } from '../diagnostics/cross-validation.js';
@@ -98,7 +98,7 @@ function checkRange(plan: ModelPlan, X: Float64Array, start: number, m: number):
   const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
   throw new InputError(
     'design-overflow',
-    `design column \`${design.columnNames[j]}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${train.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`,
+    `design column \`${clip(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${clip(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`,
     { file: descriptor.file, line, key: 'terms' },
   );
 }

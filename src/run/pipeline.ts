@@ -52,7 +52,8 @@ export interface PipelineOptions {
 export async function runPipeline(settings: Settings, repo: RepoReader, options: PipelineOptions = {}): Promise<Result> {
   const file = await loadSettings(repo, settings.config, { explicit: settings.configExplicit });
   const shard = options.shard ?? null;
-  const paths = selectShard(await discoverDescriptors(repo, file, settings.descriptors), shard);
+  const discovery = await discoverDescriptors(repo, file, settings.descriptors);
+  const paths = selectShard(discovery.paths, shard);
   const models: ModelResult[] = [];
   const loaded: Descriptor[] = [];
   for (const path of paths) {
@@ -66,9 +67,11 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
   checkUniqueNames(loaded);
   const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
   models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
-  const notes = [...(options.notes ?? [])];
+  const notes = [...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
   // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
   for (const note of kernelNotes()) if (!notes.includes(note)) notes.push(note);
-  return summarise(models, VERSION, notes);
+  const result = summarise(models, VERSION, notes);
+  if (shard) result.shard = { index: shard.index, count: shard.count };
+  return result;
 }

@@ -4,7 +4,7 @@
  * and assign the cross-validation folds.
  */
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { InputError } from '../core/errors.js';
+import { clip, InputError } from '../core/errors.js';
 import { loadModelData, type ModelTables } from '../data/load-model-data.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { meanAndSd } from '../design/stats.js';
@@ -72,7 +72,7 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
     if (i >= 0) {
       throw new InputError(
         'target-range',
-        `the target \`${descriptor.data.target}\` is ${data.y[i]} on line ${data.lines[i]} of ${data.file}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
+        `the target \`${clip(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${clip(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
         { file, line: descriptor.data.lines.target, key: 'data.target' },
       );
     }
@@ -81,7 +81,7 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
   if (!(targetStats.sd > 0)) {
     throw new InputError(
       'constant-target',
-      `the target \`${descriptor.data.target}\` is constant (${train.y[0]}) in every training row; there is nothing to model`,
+      `the target \`${clip(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`,
       { file, line: descriptor.data.lines.target, key: 'data.target' },
     );
   }

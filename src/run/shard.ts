@@ -7,7 +7,7 @@
  * is in exactly one shard, shard sizes differ by at most one, and every job of the matrix
  * computes the same split from the same checkout without talking to the others.
  */
-import { InputError } from '../core/errors.js';
+import { InputError, quoteValue } from '../core/errors.js';
 
 /** Shard K of N (1-based K, 1 <= K <= N). */
 export interface Shard {
@@ -33,14 +33,14 @@ export const MAX_SHARDS = 10_000;
 export function parseShard(text: string, key = '--shard'): Shard {
   const match = /^\s*(\d+)\s*\/\s*(\d+)\s*$/.exec(text);
   if (!match) {
-    throw new InputError(SHARD_ERROR.syntax, `expected K/N with whole numbers 1 <= K <= N (e.g. 2/4), got ${JSON.stringify(text)}`, { key });
+    throw new InputError(SHARD_ERROR.syntax, `expected K/N with whole numbers 1 <= K <= N (e.g. 2/4), got ${quoteValue(text)}`, { key });
   }
   const index = Number(match[1]);
   const count = Number(match[2]);
   if (index < 1 || count < 1 || index > count || count > MAX_SHARDS) {
     throw new InputError(
       SHARD_ERROR.range,
-      `expected 1 <= K <= N <= ${MAX_SHARDS} in K/N, got ${JSON.stringify(text)} (K = ${index}, N = ${count})`,
+      `expected 1 <= K <= N <= ${MAX_SHARDS} in K/N, got ${quoteValue(text)} (K = ${index}, N = ${count})`,
       { key },
     );
   }

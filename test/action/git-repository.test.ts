@@ -80,9 +80,13 @@ describe('createGitRepository', () => {
   });
 
   it('globs the commit tree with the same rules as the other readers (no dot files, ** spans folders)', async () => {
-    expect(await reader(first).glob(['models/**/*.model.yml'])).toEqual(['models/a.model.yml', 'models/deep/b.model.yml']);
-    expect(await reader(second).glob(['models/*.model.yml'])).toEqual(['models/a.model.yml', 'models/c.model.yml']);
-    expect(await reader(first).glob(['models/*.csv'])).toEqual(['models/link.csv']);
+    expect((await reader(first).glob(['models/**/*.model.yml'])).paths).toEqual(['models/a.model.yml', 'models/deep/b.model.yml']);
+    expect((await reader(second).glob(['models/*.model.yml'])).paths).toEqual(['models/a.model.yml', 'models/c.model.yml']);
+    // A link that matches is listed like a file (reading it then says where it leads), as on disk.
+    expect((await reader(first).glob(['models/*.csv'])).paths).toEqual(['models/escape.csv', 'models/link.csv']);
+    expect(await code(reader(first).read('models/escape.csv'))).toBe('path-outside');
+    // A link a pattern would search below is reported, not followed.
+    expect(await reader(first).glob(['data-link/*.csv'])).toEqual({ paths: [], notEntered: ['data-link'] });
     expect(await code(reader(first).glob(['../*.txt']))).toBe('path-outside');
   });
 
@@ -113,7 +117,8 @@ describe('createGitRepository', () => {
 
   it('reports missing files as file-missing', async () => {
     expect(await code(reader(first).read('models/none.yml'))).toBe('file-missing');
-    expect(await code(reader(first).size('models'))).toBe('file-missing');
+    expect(await code(reader(first).size('models'))).toBe('not-a-file');
+    expect(await reader(first).entryKind('models')).toBe('folder');
   });
 });
 

@@ -21,13 +21,28 @@ const FILES = {
 describe('discoverDescriptors', () => {
   it('uses the default glob without a settings file, skipping node_modules and dot folders', async () => {
     const repo = createMemoryRepository(FILES);
-    expect(await discoverDescriptors(repo, defaultSettings(), [])).toEqual(['models/a/a.model.yml', 'models/b.model.yml', 'other/c.model.yml']);
+    expect(await discoverDescriptors(repo, defaultSettings(), [])).toEqual({ paths: ['models/a/a.model.yml', 'models/b.model.yml', 'other/c.model.yml'], notes: [] });
+  });
+
+  it('enters node_modules only for a pattern that names it', async () => {
+    const repo = createMemoryRepository({ ...FILES, 'fitgate.yml': 'version: 1\nmodels:\n  - "node_modules/pkg/*.model.yml"\n' });
+    const settings = await loadSettings(repo, 'fitgate.yml');
+    expect((await discoverDescriptors(repo, settings, [])).paths).toEqual(['node_modules/pkg/x.model.yml']);
+  });
+
+  it('notes *.model.yaml files beside the *.model.yml names a pattern asks for, and names them when nothing else matches', async () => {
+    const repo = createMemoryRepository({ ...FILES, 'models/d.model.yaml': model('d'), 'other/e.model.yaml': model('e') });
+    const found = await discoverDescriptors(repo, defaultSettings(), []);
+    expect(found.paths).toEqual(['models/a/a.model.yml', 'models/b.model.yml', 'other/c.model.yml']);
+    expect(found.notes).toEqual(['pattern "**/*.model.yml": models/d.model.yaml, other/e.model.yaml are not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename them to .yml, or change the pattern).']);
+    const only = createMemoryRepository({ 'models/d.model.yaml': model('d') });
+    await expectInputError(() => discoverDescriptors(only, defaultSettings(), []), { code: 'glob-empty', message: /models\/d\.model\.yaml is not read/ });
   });
 
   it('unites the settings globs, sorted and de-duplicated', async () => {
     const repo = createMemoryRepository({ ...FILES, 'fitgate.yml': 'version: 1\nmodels:\n  - "other/*.model.yml"\n  - "models/**/*.model.yml"\n  - "**/b.model.yml"\n' });
     const settings = await loadSettings(repo, 'fitgate.yml');
-    expect(await discoverDescriptors(repo, settings, [])).toEqual(['models/a/a.model.yml', 'models/b.model.yml', 'other/c.model.yml']);
+    expect((await discoverDescriptors(repo, settings, [])).paths).toEqual(['models/a/a.model.yml', 'models/b.model.yml', 'other/c.model.yml']);
   });
 
   it('refuses a glob that matches nothing, naming the settings line', async () => {
@@ -40,17 +55,25 @@ describe('discoverDescriptors', () => {
     await expectInputError(() => discoverDescriptors(createMemoryRepository({}), defaultSettings(), []), { code: 'glob-empty', key: 'models[0]' });
   });
 
-  it('refuses absolute globs and globs starting with ..', async () => {
-    for (const [pattern, line] of [['/etc/*.yml', 3], ['../elsewhere/*.model.yml', 3]] as const) {
+  it('refuses absolute globs and globs with a .. segment anywhere, braces and parentheses included, at their line', async () => {
+    for (const [pattern, line] of [['/etc/*.yml', 3], ['../elsewhere/*.model.yml', 3], ['models/../../x/*.yml', 3], ['{..,models}/*.yml', 3], ['models/{a,..}/*.yml', 3], ['@(..)/x.yml', 3], ['+(a|..)/x.yml', 3], ['models\\\\..\\\\x.yml', 3], ['{/etc,models}/*.yml', 3], ['C:/x/*.yml', 3]] as const) {
       const repo = createMemoryRepository({ ...FILES, 'fitgate.yml': `version: 1\nmodels:\n  - "${pattern}"\n` });
       const settings = await loadSettings(repo, 'fitgate.yml');
       await expectInputError(() => discoverDescriptors(repo, settings, []), { code: 'glob-outside', file: 'fitgate.yml', line, key: 'models[0]' });
     }
   });
 
+  it('refuses a pattern over the length or brace-alternative cap, at its line', async () => {
+    for (const pattern of [`${'a'.repeat(1001)}.yml`, `${'{a,b}'.repeat(9)}.yml`]) {
+      const repo = createMemoryRepository({ ...FILES, 'fitgate.yml': `version: 1\nmodels:\n  - "models/*.model.yml"\n  - "${pattern}"\n` });
+      const settings = await loadSettings(repo, 'fitgate.yml');
+      await expectInputError(() => discoverDescriptors(repo, settings, []), { code: 'glob-too-complex', file: 'fitgate.yml', line: 4, key: 'models[1]' });
+    }
+  });
+
   it('takes explicit paths instead of globs, normalised, sorted, de-duplicated', async () => {
     const repo = createMemoryRepository(FILES);
-    expect(await discoverDescriptors(repo, defaultSettings(), ['other/c.model.yml', './models/b.model.yml', 'models/../other/c.model.yml'])).toEqual(['models/b.model.yml', 'other/c.model.yml']);
+    expect((await discoverDescriptors(repo, defaultSettings(), ['other/c.model.yml', './models/b.model.yml', 'models/../other/c.model.yml'])).paths).toEqual(['models/b.model.yml', 'other/c.model.yml']);
   });
 
   it('refuses explicit paths that are missing, absolute or leave the repository', async () => {

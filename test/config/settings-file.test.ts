@@ -14,6 +14,7 @@ describe('loadSettings', () => {
       limits: {},
       fit: { folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' },
       caps: { maxFileBytes: 512 * 1024 * 1024, maxCells: 200_000_000 },
+      notes: [],
     });
   });
 
@@ -50,6 +51,7 @@ describe('loadSettings', () => {
       },
       fit: { folds: 10, foldOrder: 'blocks', seed: 42, parameterCount: 'columns' },
       caps: { maxFileBytes: 2 * 1024 * 1024, maxCells: 1000 },
+      notes: [],
     });
     expect([modelPatternLine(settings, 0), modelPatternLine(settings, 1)]).toEqual([3, 4]);
     expect(modelPatternLine(defaultSettings(), 0)).toBeNull();
@@ -57,7 +59,24 @@ describe('loadSettings', () => {
 
   it('fills defaults for keys left out', async () => {
     const settings = await loadSettings(createMemoryRepository({ [S]: 'version: 1\n' }), S);
-    expect(settings).toEqual({ ...defaultSettings(), file: S });
+    expect(settings).toEqual({ ...defaultSettings(), file: S, notes: [] });
+  });
+
+  it('refuses a settings path that is a folder, explicit or not (never taken for "no settings")', async () => {
+    const repo = createMemoryRepository({ 'fitgate.yml/inner.txt': 'x' });
+    await expectInputError(() => loadSettings(repo, S), { code: 'not-a-file', file: S, message: /is a folder/ });
+    await expectInputError(() => loadSettings(repo, S, { explicit: true }), { code: 'not-a-file', file: S });
+  });
+
+  it('notes a fitgate.yaml beside the fitgate.yml it reads, whether or not that one exists', async () => {
+    const alone = await loadSettings(createMemoryRepository({ 'fitgate.yaml': 'version: 1\nlimits: { gap_ratio: 9 }\n' }), S);
+    expect(alone.file).toBeNull();
+    expect(alone.notes).toEqual(['fitgate.yaml is not read: fitgate reads its settings from fitgate.yml (rename the file, or name it with --config / the `config` input)']);
+    const both = await loadSettings(createMemoryRepository({ [S]: 'version: 1\n', 'fitgate.yaml': 'version: 1\n' }), S);
+    expect(both.file).toBe(S);
+    expect(both.notes).toHaveLength(1);
+    const named = await loadSettings(createMemoryRepository({ 'fitgate.yaml': 'version: 1\n' }), 'fitgate.yaml', { explicit: true });
+    expect([named.file, named.notes]).toEqual(['fitgate.yaml', []]);
   });
 
   const errors: Array<{ name: string; text: string; code?: string; line: number; key?: string; message?: RegExp }> = [

@@ -33,6 +33,7 @@ export function memoryRepo(
     streams,
     resolve: async (_from, target) => target,
     isFile: async (path) => bytes.has(path),
+    entryKind: async (path) => (bytes.has(path) ? 'file' : 'missing'),
     size: async (path) => get(path).length,
     read: async (path) => get(path).slice(),
     async *stream(path: string, chunkBytes = 1024 * 1024) {
@@ -49,6 +50,6 @@ export function memoryRepo(
       }
       for (; at < data.length; at += chunkBytes) yield data.slice(at, Math.min(data.length, at + chunkBytes));
     },
-    glob: async () => [...bytes.keys()].sort(),
+    glob: async () => ({ paths: [...bytes.keys()].sort(), notEntered: [] }),
   };
 }

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { readHeader, readTable, readTableChunks } from '../../src/data/table.js';
 import { InputError } from '../../src/core/errors.js';
+import type { RepoReader } from '../../src/repo/types.js';
 import { memoryRepo } from './memory-repo.js';
 import { bits, outcome, type Outcome } from './outcome.js';
 
@@ -68,13 +69,13 @@ describe('readTable: accepted forms (fast and general paths agree)', () => {
     expect(values(result, 'y')).toEqual([-2]);
   });
 
-  it('reads numbers near the ends of the double range, subnormals and exponent forms', async () => {
+  it('reads numbers near the ends of the double range (the smallest normal included), zeros with any exponent and exponent forms', async () => {
     const cells = [
       '1.7976931348623157e308',
       '-1.7976931348623157e308',
       '1e308',
-      '1e-320',
-      '4.9e-324',
+      '-0e-400',
+      '0.000e-500',
       '2.2250738585072014e-308',
       '1E5',
       '1e+5',
@@ -84,7 +85,6 @@ describe('readTable: accepted forms (fast and general paths agree)', () => {
       '+3',
       '007',
       '0e999',
-      '1e-400',
       '123456789012345678901234567890',
       '0.1',
       '9007199254740993',
@@ -92,7 +92,7 @@ describe('readTable: accepted forms (fast and general paths agree)', () => {
     const result = await both(`v\n${cells.join('\n')}\n`, ['v']);
     // Expected values: JavaScript's own Number() of the same text (the contract).
     expect(values(result, 'v').map(bits)).toEqual(cells.map((c) => bits(Number(c))));
-    expect(values(result, 'v')[3]).toBeGreaterThan(0); // 1e-320 stays a subnormal, not 0
+    expect(values(result, 'v')[5]).toBe(2 ** -1022); // the smallest normal double (IEEE 754 binary64)
   });
 
   it('keeps negative zero', async () => {
@@ -189,6 +189,16 @@ describe('readTable: errors (same on both paths)', () => {
     }
   });
 
+  it('csv-cell for nonzero cells that underflow to 0 or a subnormal, like an overflow, naming file, line and column', async () => {
+    const tiny = ['1e-400', '-1e-400', '1e-320', '4.9e-324', '-2.5e-315', '123e-330', `0.${'0'.repeat(400)}1`, ' 1e-400 ', '"1e-400"', `${'9'.repeat(30)}e-340`];
+    for (const cell of tiny) {
+      const error = failure(await both(`x,y\n1,2\n3,${cell}\n`, ['x', 'y']));
+      expect(error, `cell ${JSON.stringify(cell)}`).toMatchObject({ code: 'csv-cell', file: FILE, line: 3, key: 'y' });
+      expect(error.message).toContain('"y"');
+      expect(error.message).toContain('too small for 64-bit floating point');
+    }
+  });
+
   it('csv-cell quotes the cell, cut to 40 characters', async () => {
     const long = 'z'.repeat(100);
     const error = failure(await both(`x\n${long}\n`, ['x']));
@@ -245,5 +255,95 @@ describe('readHeader', () => {
   it('throws csv-empty and csv-header like readTable', async () => {
     await expect(readHeader(memoryRepo({ [FILE]: '\n' }), FILE)).rejects.toMatchObject({ code: 'csv-empty' });
     await expect(readHeader(memoryRepo({ [FILE]: 'a,a\n' }), FILE)).rejects.toMatchObject({ code: 'csv-header' });
+  });
+});
+
+describe('readTable: files that are not comma-separated CSV get a hint naming the likely cause (same on both paths)', () => {
+  it('a Git LFS pointer file', async () => {
+    // The three lines of a pointer as the git-lfs specification (spec/v1) lays them out; the oid is made up.
+    const pointer = `version https://git-lfs.github.com/spec/v1\noid sha256:${'ab12'.repeat(16)}\nsize 123456\n`;
+    const error = failure(await both(pointer, ['x', 'y']));
+    expect(error).toMatchObject({ code: 'csv-missing-column', file: FILE, line: 1 });
+    expect(error.message).toContain('Hint: the file is a Git LFS pointer, not the data');
+  });
+
+  it.each([
+    ['semicolon', 'x;y\n1,5;2\n3;4\n', 'semicolon-separated'],
+    ['tab', 'x\ty\n1\t2\n3\t4\n', 'tab-separated'],
+  ])('a %s-separated file', async (_, text, words) => {
+    const error = failure(await both(text, ['x', 'y']));
+    expect(error).toMatchObject({ code: 'csv-missing-column', file: FILE, line: 1 });
+    expect(error.message).toContain(`Hint: the header holds`);
+    expect(error.message).toContain(words);
+  });
+
+  it('CR-only line ends', async () => {
+    const error = failure(await both('x,y\r1,2\r3,4\r', ['x']));
+    expect(error).toMatchObject({ code: 'csv-line-ends', file: FILE, line: 1 });
+    expect(error.message).toContain('CR-only line ends');
+  });
+
+  it('gives no hint to a plain CSV file that lacks a column', async () => {
+    const error = failure(await both('x,z\n1,2\n', ['x', 'y']));
+    expect(error.code).toBe('csv-missing-column');
+    expect(error.message).not.toContain('Hint');
+  });
+});
+
+describe('readTable: header caps', () => {
+  /** A reader whose one file is `head` then `fill` repeated without end, in 64 KiB pieces; counts bytes handed out. */
+  function endless(head: string, fill: string): { repo: RepoReader; pulled: () => number } {
+    let pulled = 0;
+    const piece = new TextEncoder().encode(fill.repeat(Math.ceil(65_536 / fill.length)).slice(0, 65_536));
+    const repo: RepoReader = {
+      label: 'endless',
+      resolve: async (_from, target) => target,
+      isFile: async () => true,
+      entryKind: async () => 'file',
+      size: async () => 100 * 1024 * 1024,
+      read: async () => {
+        throw new Error('read is not used for data');
+      },
+      async *stream() {
+        const first = new TextEncoder().encode(head);
+        pulled += first.length;
+        yield first;
+        for (let i = 0; i < 100_000; i++) {
+          pulled += piece.length;
+          yield piece;
+        }
+      },
+      glob: async () => ({ paths: [], notEntered: [] }),
+    };
+    return { repo, pulled: () => pulled };
+  }
+
+  it.each([false, true])('refuses a header that does not end within 1 MiB before holding more of it (general path: %s)', async (general) => {
+    const { repo, pulled } = endless('x,y,', 'c,');
+    const error = failure(await outcome(repo, FILE, { columns: ['x'], general }));
+    expect(error).toMatchObject({ code: 'csv-header-too-long', file: FILE, line: 1 });
+    expect(pulled()).toBeLessThanOrEqual(1024 * 1024 + 2 * 65_536);
+  });
+
+  it('names CR-only line ends when a long header holds lone carriage returns', async () => {
+    const { repo } = endless('x,y\r', '1,2\r');
+    const error = failure(await outcome(repo, FILE, { columns: ['x'] }));
+    expect(error.code).toBe('csv-header-too-long');
+    expect(error.message).toContain('CR-only line ends');
+  });
+
+  it('counts blank lines before the header within the cap, and takes a header that ends inside it', async () => {
+    const blank = ' \n'.repeat(1000);
+    const result = await both(`${blank}x,y\n1,2\n`, ['y']);
+    expect(values(result, 'y')).toEqual([2]);
+    // The cap counts from the file's start: 1 MiB of blank line leaves no room for the header.
+    const error = failure(await both(`${' '.repeat(1024 * 1024)}\nx\n1\n`, ['x']));
+    expect(error).toMatchObject({ code: 'csv-header-too-long', line: 1 });
+  });
+
+  it('refuses a header of more than 100,000 columns', async () => {
+    const names = Array.from({ length: 100_001 }, (_, i) => `c${i}`).join(',');
+    const error = failure(await both(`${names}\n`, ['c0']));
+    expect(error).toMatchObject({ code: 'csv-header-too-wide', file: FILE, line: 1 });
   });
 });

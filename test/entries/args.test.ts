@@ -114,6 +114,7 @@ describe('fitgate merge', () => {
       html: null,
       sarif: null,
       junit: null,
+      expect: null,
     });
   });
 

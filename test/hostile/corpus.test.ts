@@ -48,7 +48,7 @@ describe('the corpus', () => {
 describe.concurrent('hostile repositories through the CLI', () => {
   it.each(CASES)('$id: $about -> exit $exit', async (c) => {
     const dirs = dirsOf(c);
-    const run = await runCli(dirs, c.args ?? []);
+    const run = await runCli(dirs, c.args ?? [], undefined, c.command);
     const all = `${run.stdout}\n${run.stderr}`;
     // HOSTILE_DUMP=file collects every case's output, to read the messages as a user would.
     if (process.env.HOSTILE_DUMP) appendFileSync(process.env.HOSTILE_DUMP, `\n=== ${c.id} (${c.about})\n${show(run)}\n`);
@@ -62,7 +62,7 @@ describe.concurrent('hostile repositories through the CLI', () => {
     expect(all, `a fault in fitgate is a bug\n${show(run)}`).not.toContain('fault in fitgate');
     if (c.exit === 2 && run.stdout === '') expect(run.stderr, show(run)).toMatch(/^fitgate: \S/);
     if (c.verdicts) {
-      const json = await runCli(dirs, [...(c.args ?? []), '--format', 'json']);
+      const json = await runCli(dirs, [...(c.args ?? []), '--format', 'json'], undefined, c.command);
       const report = JSON.parse(json.stdout) as { models: { name: string; verdict: string }[] };
       const got = Object.fromEntries(report.models.map((x) => [x.name, x.verdict]));
       expect(got).toEqual(c.verdicts);

@@ -20,6 +20,7 @@ function recording(files: Record<string, string | Uint8Array>): { repo: RepoRead
     label: inner.label,
     resolve: (from, target, where) => inner.resolve(from, target, where),
     isFile: (p) => inner.isFile(p),
+    entryKind: (p) => inner.entryKind(p),
     size: (p) => inner.size(p),
     read: (p) => {
       opened.push(p);

@@ -35,7 +35,9 @@ export type FileSpec =
   /** A sparse file of this many bytes (nothing written: the size alone is the point). */
   | { sparseBytes: number }
   /** Contents made when the case is written (large or generated text). */
-  | { make: () => string | Uint8Array };
+  | { make: () => string | Uint8Array }
+  /** A named pipe (FIFO): opening it for reading would wait for a writer for ever. */
+  | { fifo: true };
 
 /** The folders of one written case. */
 export interface CaseDirs {
@@ -74,6 +76,7 @@ export function writeCase(files: Record<string, FileSpec>, label = 'case'): Case
     if (typeof spec === 'string') writeFileSync(full, spec.split(OUTSIDE_TOKEN).join(outside));
     else if (spec instanceof Uint8Array) writeFileSync(full, spec);
     else if ('link' in spec) symlinkSync(spec.link.split(OUTSIDE_TOKEN).join(outside), full);
+    else if ('fifo' in spec) execFileSync('mkfifo', [full]);
     else if ('sparseBytes' in spec) {
       writeFileSync(full, '');
       // truncate makes a sparse file: no disk blocks, only the length.
@@ -216,14 +219,16 @@ function cleanEnv(): NodeJS.ProcessEnv {
 }
 
 /**
- * Runs `node <cli> check --root <repo> ...args` in the case's base folder (so that relative
- * arguments such as `../outside/x` mean what they say).
+ * Runs `node <cli> check --root <repo> ...args` (or `node <cli> merge ...args`) in the case's base
+ * folder (so that relative arguments such as `../outside/x` or `repo/a.json` mean what they say).
  * @param timeoutMs the run is killed after this long (status -9); default 20 s
+ * @param command `check` (default) or `merge`
  * @param cwd the folder to run in; default the case's base folder (a CI step runs in the repository)
  */
-export async function runCli(dirs: CaseDirs, args: string[], timeoutMs = 20_000, cwd = dirs.base): Promise<Run> {
+export async function runCli(dirs: CaseDirs, args: string[], timeoutMs = 20_000, command: 'check' | 'merge' = 'check', cwd = dirs.base): Promise<Run> {
   const { cli } = prepareBundles();
-  const run = await spawnNode(cli, ['check', '--root', dirs.repo, '--jobs', '1', ...args.map((a) => fill(a, dirs))], { cwd, env: { ...cleanEnv(), NO_COLOR: '1' }, timeoutMs });
+  const head = command === 'merge' ? ['merge'] : ['check', '--root', dirs.repo, '--jobs', '1'];
+  const run = await spawnNode(cli, [...head, ...args.map((a) => fill(a, dirs))], { cwd, env: { ...cleanEnv(), NO_COLOR: '1' }, timeoutMs });
   return { ...run, outputs: {}, summary: '', report: '' };
 }
 

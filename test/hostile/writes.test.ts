@@ -44,7 +44,7 @@ describe('a report target that is a link, or a report folder leading out, is ref
   it('CLI, run in the repository: --out, --html, --sarif and --junit each refused by name, exit 2, nothing written outside', async () => {
     const dirs = write(traps(), 'writes-cli');
     const before = outsideState(dirs);
-    const run = await runCli(dirs, ['--out', 'out.txt', '--html', 'site', '--sarif', 'up/outside/x.sarif', '--junit', 'junit.xml'], 30_000, dirs.repo);
+    const run = await runCli(dirs, ['--out', 'out.txt', '--html', 'site', '--sarif', 'up/outside/x.sarif', '--junit', 'junit.xml'], 30_000, 'check', dirs.repo);
     expect(run.status, show(run)).toBe(2);
     const lines = run.stderr.trim().split('\n');
     expect(lines, show(run)).toEqual([
@@ -59,7 +59,7 @@ describe('a report target that is a link, or a report folder leading out, is ref
 
   it('CLI: a refused report does not stop the others (the SARIF file next to a refused JUnit link is written)', async () => {
     const dirs = write(traps(), 'writes-cli-others');
-    const run = await runCli(dirs, ['--sarif', 'reports/x.sarif', '--junit', 'junit.xml', '--html', 'reports/html'], 30_000, dirs.repo);
+    const run = await runCli(dirs, ['--sarif', 'reports/x.sarif', '--junit', 'junit.xml', '--html', 'reports/html'], 30_000, 'check', dirs.repo);
     expect(run.status, show(run)).toBe(2);
     expect(run.stderr).toContain('`--junit`');
     expect(JSON.parse(readFileSync(path.join(dirs.repo, 'reports/x.sarif'), 'utf8')).version).toBe('2.1.0');
@@ -123,7 +123,7 @@ describe('the repository root is its real path, inside the workspace (item 2)', 
 
   it('CLI, run in the repository: --root replaced by a link to the parent is refused, naming the option', async () => {
     const dirs = write(repo({ ml: { link: '..' } }), 'root-cli');
-    const run = await runCli(dirs, ['--root', 'ml'], 20_000, dirs.repo);
+    const run = await runCli(dirs, ['--root', 'ml'], 20_000, 'check', dirs.repo);
     expect(run.status, show(run)).toBe(2);
     expect(run.stderr).toBe(`fitgate: \`--root\`: ${path.join(dirs.repo, 'ml')} leads out of the working directory ${dirs.repo} through a symbolic link; expected a folder whose real path is inside it\n`);
     expect(run.stdout).toBe('');
@@ -134,7 +134,7 @@ describe('the repository root is its real path, inside the workspace (item 2)', 
     const action = await runAction(dirs, { 'working-directory': 'ml' });
     expect(action.status, show(action)).toBe(0);
     expect(action.stdout).toMatch(/^::warning file=real\/models\/m\.model\.yml,/m);
-    const cli = await runCli(dirs, ['--root', 'ml', 'ml/models/m.model.yml'], 20_000, dirs.repo);
+    const cli = await runCli(dirs, ['--root', 'ml', 'ml/models/m.model.yml'], 20_000, 'check', dirs.repo);
     expect(cli.status, show(cli)).toBe(0);
     expect(runnerCommands(cli.stdout)).toEqual([]);
   });

@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -31,6 +32,10 @@ beforeAll(() => {
   symlinkSync(join(base, 'outside', 'secret.csv'), join(root, 'models', 'out-link.csv'));
   symlinkSync(join(base, 'outside'), join(root, 'models', 'out-dir'));
   symlinkSync(join(base, 'outside', 'nothing.csv'), join(root, 'models', 'dangling.csv'));
+  symlinkSync(join(root, 'models', 'deep'), join(root, 'models', 'in-dir'));
+  execFileSync('mkfifo', [join(root, 'models', 'pipe.csv')]);
+  mkdirSync(join(root, '.git'), { recursive: true });
+  writeFileSync(join(root, '.git', 'g.model.yml'), descriptor('t.csv'));
   writeFileSync(join(root, 'models', 'via-link.model.yml'), descriptor('out-link.csv'));
   writeFileSync(join(root, 'models', 'via-dir.model.yml'), descriptor('out-dir/secret.csv'));
   writeFileSync(join(root, 'models', 'via-inside.model.yml'), descriptor('inside-link.csv'));
@@ -73,11 +78,13 @@ describe('createFsRepository: reading', () => {
     expect(empty).toEqual([]);
   });
 
-  it('gives file-missing for missing files and folders', async () => {
+  it('gives file-missing for missing files, not-a-file for folders, links to nothing and FIFOs', async () => {
     const repo = createFsRepository(root);
     await expectInputError(() => repo.read('models/none.csv'), { code: 'file-missing', file: 'models/none.csv' });
-    await expectInputError(() => repo.size('models'), { code: 'file-missing', file: 'models' });
-    await expectInputError(() => repo.read('models/dangling.csv'), { code: 'file-missing', file: 'models/dangling.csv' });
+    await expectInputError(() => repo.size('models'), { code: 'not-a-file', file: 'models', message: /is a folder/ });
+    await expectInputError(() => repo.read('models/dangling.csv'), { code: 'not-a-file', file: 'models/dangling.csv', message: /symbolic link that leads to nothing/ });
+    await expectInputError(() => repo.read('models/pipe.csv'), { code: 'not-a-file', file: 'models/pipe.csv', message: /FIFO/ });
+    expect(await Promise.all(['models/h.csv', 'models/none.csv', 'models', 'models/dangling.csv', 'models/pipe.csv', 'models/inside-link.csv'].map((p) => repo.entryKind(p)))).toEqual(['file', 'missing', 'folder', 'broken-link', 'special', 'file']);
   });
 
   it('refuses absolute paths, .. escapes and links that lead outside, for every method', async () => {
@@ -112,7 +119,23 @@ describe('createFsRepository: glob', () => {
   it('lists matching files sorted, skipping node_modules, .git and dot folders', async () => {
     const repo = createFsRepository(root);
     const found = await repo.glob(['**/*.model.yml']);
-    expect(found).toEqual(['models/deep/b.model.yml', 'models/ok.model.yml', 'models/via-dir.model.yml', 'models/via-inside.model.yml', 'models/via-link.model.yml']);
+    expect(found.paths).toEqual(['models/deep/b.model.yml', 'models/ok.model.yml', 'models/via-dir.model.yml', 'models/via-inside.model.yml', 'models/via-link.model.yml']);
+  });
+
+  it('enters node_modules and .git only for a pattern that names them', async () => {
+    const repo = createFsRepository(root);
+    expect((await repo.glob(['node_modules/**/*.model.yml'])).paths).toEqual(['node_modules/pkg/n.model.yml']);
+    expect((await repo.glob(['.git/*.model.yml'])).paths).toEqual(['.git/g.model.yml']);
+    expect((await repo.glob(['*/*/*.model.yml', '**/n.model.yml', '**/g.model.yml'])).paths).toEqual(['models/deep/b.model.yml']);
+  });
+
+  it('never follows a link into a folder (inside or outside), reports it, and lists links and FIFOs that match like files', async () => {
+    const repo = createFsRepository(root);
+    // models/out-dir leads outside, models/in-dir inside: neither is searched, both are reported
+    // (links to files are not: they are matches like files).
+    expect(await repo.glob(['models/*/*.model.yml'])).toEqual({ paths: ['models/deep/b.model.yml'], notEntered: ['models/in-dir', 'models/out-dir'] });
+    expect(await repo.glob(['models/out-dir/*.model.yml'])).toEqual({ paths: [], notEntered: ['models/out-dir'] });
+    expect((await repo.glob(['models/*.csv'])).paths).toEqual(['models/dangling.csv', 'models/empty.csv', 'models/h.csv', 'models/inside-link.csv', 'models/out-link.csv', 'models/pipe.csv', 'models/t.csv']);
   });
 
   it('refuses absolute patterns and patterns starting with ..', async () => {

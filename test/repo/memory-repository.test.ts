@@ -36,8 +36,16 @@ describe('createMemoryRepository', () => {
     await expectInputError(() => repo.resolve('a/m.model.yml', '../../c.yml', { line: 3, key: 'data.train' }), { code: 'path-outside', file: 'a/m.model.yml', line: 3, key: 'data.train' });
   });
 
-  it('globs, skipping node_modules', async () => {
-    expect(await repo.glob(['**/*.yml', '**/*.csv'])).toEqual(['a/b.csv', 'c.yml']);
+  it('globs, skipping node_modules unless a pattern names it', async () => {
+    expect(await repo.glob(['**/*.yml', '**/*.csv'])).toEqual({ paths: ['a/b.csv', 'c.yml'], notEntered: [] });
+    expect((await repo.glob(['node_modules/**/*.yml'])).paths).toEqual(['node_modules/p/q.yml']);
     await expectInputError(() => repo.glob(['../*.yml']), { code: 'path-outside' });
+  });
+
+  it('tells folders from missing files', async () => {
+    expect(await repo.entryKind('a')).toBe('folder');
+    expect(await repo.entryKind('a/b.csv')).toBe('file');
+    expect(await repo.entryKind('a/none.csv')).toBe('missing');
+    await expectInputError(() => repo.read('a'), { code: 'not-a-file', file: 'a' });
   });
 });

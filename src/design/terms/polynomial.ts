@@ -4,7 +4,7 @@
  * Powers by repeated multiplication (z^k = z^(k-1) * z). `shift: 0, scale: 1` gives raw powers.
  */
 import type { PolynomialTermSpec } from '../../config/types.js';
-import { InputError } from '../../core/errors.js';
+import { InputError, clip } from '../../core/errors.js';
 import { polynomialColumns } from '../../kernels/index.js';
 import { meanAndSd } from '../stats.js';
 import type { Term, TrainingColumns } from './types.js';
@@ -24,7 +24,7 @@ export function polynomialTerm(spec: PolynomialTermSpec, training: TrainingColum
       if (!(sd > 0)) {
         throw new InputError(
           'constant-input',
-          `column \`${spec.of}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`,
+          `column \`${clip(spec.of)}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop the term`,
           { file, line: spec.line, key: 'polynomial.of' },
         );
       }

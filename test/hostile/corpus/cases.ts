@@ -32,6 +32,8 @@ export interface CorpusCase {
   words: string[];
   /** Expected verdicts of named models in the JSON report, when the run gets that far. */
   verdicts?: Record<string, string>;
+  /** `merge`: the CLI runs `fitgate merge <args>` (report paths relative to the case's base folder, e.g. `repo/a.json`). Default `check`. */
+  command?: 'merge';
 }
 
 const m = 'models/m.model.yml';
@@ -67,6 +69,47 @@ function binaryBytes(n: number): Uint8Array {
 }
 
 const latin1Header = (): Uint8Array => Uint8Array.from([...Buffer.from('x,y'), 0xb0, ...Buffer.from('C\n1,2\n2,4\n3,7\n')]);
+
+/** A settings file with one `models` pattern (on line 3). */
+const pattern = (p: string): string => `version: 1\nmodels:\n  - ${JSON.stringify(p)}\n`;
+
+/** The three lines of a Git LFS pointer file, as the git-lfs specification (spec/v1) lays them out; the oid is made up. */
+const LFS_POINTER = `version https://git-lfs.github.com/spec/v1\noid sha256:${'4d7a'.repeat(16)}\nsize 48213\n`;
+
+/** One model of a shard report, as `fitgate check --format json` writes it: its one check gives its verdict. */
+function reportModel(name: string, verdict: 'pass' | 'fail'): Record<string, unknown> {
+  return {
+    name,
+    descriptor: `models/${name.replace(/[^a-z]/gi, '')}.model.yml`,
+    verdict,
+    rows: { train: 30, holdout: 10 },
+    parameters: 2,
+    columns: ['(intercept)', 'x'],
+    metrics: { train_rmse: 0.1, holdout_rmse: verdict === 'fail' ? 0.5 : 0.12, gap_ratio: verdict === 'fail' ? 5 : 1.2, params_per_sample: 0.07, max_std_coefficient: 1, max_std_coefficient_column: 'x', max_abs_coefficient: 2, rank: 2, condition_number: 3 },
+    coefficients: [1, 2],
+    shipped: null,
+    checks: [{ id: 'generalisation-gap', code: `generalisation-gap/${verdict}`, status: verdict, value: verdict === 'fail' ? 5 : 1.2, limitKey: 'gap_ratio', limit: 1.5, warn: null, line: 3, message: 'hold-out RMSE against training RMSE', advice: '' }],
+    error: null,
+  };
+}
+
+/** A shard report's JSON text; `spoil` edits the object first. */
+function shardReport(models: Record<string, unknown>[], shard: { index: number; count: number } | null, spoil: (r: Record<string, any>) => void = () => undefined): string {
+  const verdicts = models.map((m) => m.verdict as string);
+  const report: Record<string, any> = {
+    tool: { name: 'fitgate', version: '0.1.0' },
+    verdict: verdicts.includes('fail') ? 'fail' : 'pass',
+    counts: { models: models.length, pass: verdicts.filter((v) => v === 'pass').length, warn: 0, fail: verdicts.filter((v) => v === 'fail').length, error: 0 },
+    models,
+    notes: shard ? [`shard ${shard.index}/${shard.count}`] : [],
+    ...(shard ? { shard } : {}),
+  };
+  spoil(report);
+  return JSON.stringify(report, null, 2);
+}
+
+/** Merge cases: the CLI only (the action has no merge). */
+const merge = { command: 'merge' as const, inputs: null, cliOnly: 'the action has no merge command' };
 
 /** Every case. */
 export const CASES: CorpusCase[] = [
@@ -119,7 +162,7 @@ export const CASES: CorpusCase[] = [
   { id: 'outside-data-link-absolute', about: 'the training file is a link to an absolute path outside', files: repo({ [train]: { link: '$OUTSIDE/secret.csv' } }), exit: 2, words: ['models/m.model.yml:', 'outside the repository'] },
   { id: 'outside-data-link-relative', about: 'the training file is a relative link climbing out', files: repo({ [train]: { link: '../../outside/secret.csv' } }), exit: 2, words: ['models/m.model.yml:', 'outside the repository'] },
   { id: 'outside-folder-link', about: 'a folder inside that is a link to a folder outside', files: repo({ 'lib': { link: '$OUTSIDE' }, [m]: descriptor({ train: '../lib/secret.csv' }) }), exit: 2, words: ['models/m.model.yml:', 'outside the repository'] },
-  { id: 'outside-descriptor-link', about: 'the descriptor is a link to a descriptor outside (the glob does not follow it)', files: repo({ [m]: { link: '$OUTSIDE/secret.model.yml' } }), exit: 2, words: ['fitgate.yml:', 'matches no file'] },
+  { id: 'outside-descriptor-link', about: 'the descriptor is a link to a descriptor outside (matched like a file, refused when read)', files: repo({ [m]: { link: '$OUTSIDE/secret.model.yml' } }), exit: 2, words: ['models/m.model.yml', 'outside the repository'] },
   { id: 'outside-settings-link', about: 'fitgate.yml is a link to a file outside', files: repo({ [settings]: { link: '../outside/secret.yml' } }), exit: 2, words: ['fitgate.yml', 'outside the repository'] },
   { id: 'outside-config-dotdot', about: '--config climbing out', files: repo(), args: ['--config', '../outside/secret.yml'], inputs: { config: '../outside/secret.yml' }, exit: 2, words: ['../outside/secret.yml', 'inside'] },
   { id: 'outside-config-absolute', about: '--config as an absolute path outside', files: repo(), args: ['--config', '$OUTSIDE/secret.yml'], inputs: { config: '$OUTSIDE/secret.yml' }, exit: 2, words: ['secret.yml', 'inside'] },
@@ -128,7 +171,7 @@ export const CASES: CorpusCase[] = [
   { id: 'outside-descriptor-argument-link', about: 'a descriptor argument that is a link inside pointing out', files: repo({ 'models/link.model.yml': { link: '$OUTSIDE/secret.model.yml' } }), args: ['repo/models/link.model.yml'], inputs: null, cliOnly: 'the action takes no descriptor paths', exit: 2, words: ['outside the repository'] },
   { id: 'outside-glob-dotdot', about: 'a models pattern climbing out', files: repo({ [settings]: 'version: 1\nmodels: ["../outside/*.model.yml"]\n' }), exit: 2, words: ['fitgate.yml:', 'leaves the repository'] },
   { id: 'outside-glob-absolute', about: 'a models pattern that is absolute', files: repo({ [settings]: 'version: 1\nmodels: ["$OUTSIDE/*.model.yml"]\n' }), exit: 2, words: ['fitgate.yml:', 'leaves the repository'] },
-  { id: 'outside-glob-through-link', about: 'a models pattern under a folder link to outside', files: repo({ [settings]: 'version: 1\nmodels: ["ext/*.model.yml"]\n', ext: { link: '$OUTSIDE' } }), exit: 2, words: ['ext/secret.model.yml', 'outside the repository'] },
+  { id: 'outside-glob-through-link', about: 'a models pattern under a folder link to outside (never followed, and said so)', files: repo({ [settings]: 'version: 1\nmodels: ["ext/*.model.yml"]\n', ext: { link: '$OUTSIDE' } }), exit: 2, words: ['fitgate.yml:', 'matches no file', 'ext is a symbolic link', 'never followed'] },
   { id: 'link-loop', about: 'a training file that is a link to itself', files: repo({ [train]: { link: 'train.csv' } }), exit: 2, words: ['models/m.model.yml:', 'loop'] },
   { id: 'nul-in-path', about: 'a data path with a NUL character', files: repo({ [m]: descriptor({ train: '"../data/train.csv\\0.txt"' }) }), exit: 2, words: ['models/m.model.yml:', 'NUL'] },
 
@@ -178,6 +221,50 @@ export const CASES: CorpusCase[] = [
   { id: 'cap-file-size-sparse', about: 'a 3 GiB (sparse) training file against the default 512 MiB cap', files: repo({ [train]: { sparseBytes: 3 * 1024 ** 3 } }), exit: 2, words: ['data/train.csv', 'caps.max_file_mb'] },
   { id: 'cap-cells', about: 'rows x parameters over caps.max_cells', files: repo({ [settings]: `${SETTINGS}caps:\n  max_cells: 10\n` }), exit: 2, words: ['models/m.model.yml', 'caps.max_cells'] },
   { id: 'cap-parameters', about: '10,000 radial centres', files: withTerms('  - rbf: { of: x, centers: { from: 0, to: 30, count: 10000 }, width: 1 }\n'), exit: 2, words: ['models/m.model.yml', 'design columns'] },
+
+  // Globs stay inside (Hardening item 3)
+  { id: 'glob-dotdot-in-braces', about: 'a .. segment inside braces', files: repo({ [settings]: pattern('{..,models}/*.model.yml') }), exit: 2, words: ['fitgate.yml:3', '`..` segment'] },
+  { id: 'glob-dotdot-in-extglob', about: 'a .. segment inside an extglob', files: repo({ [settings]: pattern('@(..)/outside/*.model.yml') }), exit: 2, words: ['fitgate.yml:3', '`..` segment'] },
+  { id: 'glob-dotdot-middle', about: 'a .. segment in the middle of a pattern', files: repo({ [settings]: pattern('models/../../outside/*.model.yml') }), exit: 2, words: ['fitgate.yml:3', '`..` segment'] },
+  { id: 'glob-dotdot-backslash', about: 'a .. segment between backslashes', files: repo({ [settings]: pattern('models\\..\\..\\outside\\*.model.yml') }), exit: 2, words: ['fitgate.yml:3', '`..` segment'] },
+  { id: 'glob-brace-bomb', about: '40 brace pairs (2^40 alternatives)', files: repo({ [settings]: pattern(`models/${'{a,b}'.repeat(40)}.model.yml`) }), exit: 2, words: ['fitgate.yml:3', 'alternatives'] },
+  { id: 'glob-too-long', about: 'a 5,000-character pattern', files: repo({ [settings]: pattern(`models/${'x'.repeat(5000)}*.model.yml`) }), exit: 2, words: ['fitgate.yml:3', 'at most 1000'] },
+  { id: 'glob-many-stars', about: '25 stars against a 200-character name (a backtracking matcher would not finish)', files: repo({ [settings]: pattern(`models/${'*a'.repeat(25)}b.model.yml`), [`models/${'a'.repeat(200)}.model.yml`]: descriptor({ name: 'long' }) }), exit: 2, words: ['fitgate.yml:3', 'matches no file'] },
+  { id: 'glob-skips-node-modules-and-git', about: 'descriptors under node_modules and .git (the same name as the real one) are not searched by **', files: repo({ [settings]: pattern('**/*.model.yml'), 'node_modules/pkg/evil.model.yml': descriptor(), '.git/evil.model.yml': descriptor() }), exit: 0, words: ['PASS'] },
+  { id: 'glob-names-node-modules', about: 'a pattern that names node_modules searches it', files: repo({ [settings]: 'version: 1\nmodels:\n  - "models/*.model.yml"\n  - "node_modules/pkg/*.model.yml"\n', 'node_modules/pkg/n.model.yml': descriptor({ name: 'n', train: '../../data/train.csv', holdout: '../../data/holdout.csv' }) }), exit: 0, words: ['PASS'], verdicts: { m: 'pass', n: 'pass' } },
+
+  // Nothing is skipped silently (Hardening item 7)
+  { id: 'settings-is-folder', about: 'fitgate.yml is a folder', files: repo({ [settings]: null, 'fitgate.yml/inner.txt': 'x' }), exit: 2, words: ['fitgate.yml', 'is a folder'] },
+  { id: 'settings-dangling-link', about: 'fitgate.yml is a link to nothing', files: repo({ [settings]: { link: 'nowhere.yml' } }), exit: 2, words: ['fitgate.yml', 'leads to nothing'] },
+  { id: 'settings-fifo', about: 'fitgate.yml is a FIFO (reading it would wait for ever)', files: repo({ [settings]: { fifo: true } }), exit: 2, words: ['fitgate.yml', 'FIFO'] },
+  { id: 'settings-yaml-name', about: 'fitgate.yaml instead of fitgate.yml: noted, defaults used', files: repo({ [settings]: null, 'fitgate.yaml': pattern('nowhere/*.model.yml') }), exit: 0, words: ['fitgate.yaml is not read', 'fitgate.yml'] },
+  { id: 'descriptor-yaml-beside-yml', about: 'a *.model.yaml beside the *.model.yml descriptors: noted', files: repo({ 'models/n.model.yaml': descriptor({ name: 'n' }) }), exit: 0, words: ['models/n.model.yaml', 'not read'] },
+  { id: 'descriptor-yaml-only', about: 'only *.model.yaml descriptors: the empty pattern names them', files: repo({ [m]: null, 'models/m.model.yaml': descriptor() }), exit: 2, words: ['matches no file', 'models/m.model.yaml is not read'] },
+  { id: 'descriptor-fifo', about: 'a matched descriptor that is a FIFO: that model is an error, the others are checked', files: repo({ 'models/f.model.yml': { fifo: true } }), exit: 2, words: ['models/f.model.yml', 'FIFO'], verdicts: { m: 'pass', 'models/f.model.yml': 'error' } },
+  { id: 'descriptor-dangling-link', about: 'a matched descriptor that is a link to nothing', files: repo({ 'models/d.model.yml': { link: 'gone.model.yml' } }), exit: 2, words: ['models/d.model.yml', 'leads to nothing'], verdicts: { m: 'pass', 'models/d.model.yml': 'error' } },
+  { id: 'data-fifo', about: 'a training file that is a FIFO', files: repo({ [train]: { fifo: true } }), exit: 2, words: ['models/m.model.yml:', 'FIFO'] },
+  { id: 'data-dangling-link', about: 'a training file that is a link to nothing', files: repo({ [train]: { link: 'gone.csv' } }), exit: 2, words: ['models/m.model.yml:', 'leads to nothing'] },
+
+  // Numbers and formats (Hardening item 10)
+  { id: 'csv-underflow-cell', about: '1e-400 in a used column (reads as 0)', files: withTrain(TRAIN.replace('\n3,', '\n1e-400,')), exit: 2, words: ['data/train.csv:5', '1e-400', 'too small'] },
+  { id: 'csv-subnormal-cell', about: '4.9e-324 in a used column (a subnormal)', files: withTrain(TRAIN.replace('\n3,', '\n4.9e-324,')), exit: 2, words: ['data/train.csv:5', '4.9e-324', 'too small'] },
+  { id: 'csv-lfs-pointer', about: 'the training file is a Git LFS pointer', files: withTrain(LFS_POINTER), exit: 2, words: ['data/train.csv', 'Git LFS pointer'] },
+  { id: 'csv-semicolons', about: 'a semicolon-separated training file', files: withTrain(TRAIN.replace(/,/g, ';')), exit: 2, words: ['data/train.csv', 'semicolon-separated'] },
+  { id: 'csv-tabs', about: 'a tab-separated training file', files: withTrain(TRAIN.replace(/,/g, '\t')), exit: 2, words: ['data/train.csv', 'tab-separated'] },
+  { id: 'csv-cr-only', about: 'CR-only line ends', files: withTrain(rows(30, 0, 1, 'x,y', '\r')), exit: 2, words: ['data/train.csv', 'CR-only line ends'] },
+  { id: 'csv-header-endless', about: 'a 4 MiB first line without a line feed', files: withTrain({ make: () => `x,y,${'c,'.repeat(2 * 1024 * 1024)}` }), exit: 2, words: ['data/train.csv', 'first 1048576 bytes'] },
+  { id: 'csv-header-wide', about: 'a header of 100,001 columns', files: withTrain({ make: () => `${Array.from({ length: 100_001 }, (_, i) => `c${i}`).join(',')}\n` }), exit: 2, words: ['data/train.csv', '100001 columns'] },
+
+  // merge trusts nothing (Hardening item 9)
+  { id: 'merge-deep', about: 'a report of 100,000 nested lists', files: { 'a.json': { make: () => '['.repeat(100_000) } }, args: ['repo/a.json'], ...merge, exit: 2, words: ['repo/a.json:1:65', 'more than 64 levels'] },
+  { id: 'merge-huge-number', about: 'a report with 1e999 (parses to Infinity)', files: { 'a.json': shardReport([reportModel('a', 'pass')], null).replace('"coefficients": [\n        1,', '"coefficients": [\n        1e999,') }, args: ['repo/a.json'], ...merge, exit: 2, words: ['repo/a.json:', '1e999'] },
+  { id: 'merge-verdict-edited', about: 'a failing model edited to pass', files: { 'a.json': shardReport([reportModel('a', 'fail')], null, (r) => ((r.models[0].verdict = 'pass'), (r.verdict = 'pass'), (r.counts = { models: 1, pass: 1, warn: 0, fail: 0, error: 0 }))) }, args: ['repo/a.json'], ...merge, exit: 2, words: ['models[0].verdict', 'was it edited'] },
+  { id: 'merge-status-edited', about: 'a failing check edited to pass (and its model)', files: { 'a.json': shardReport([reportModel('a', 'fail')], null, (r) => ((r.models[0].checks[0].status = 'pass'), (r.models[0].verdict = 'pass'), (r.verdict = 'pass'), (r.counts = { models: 1, pass: 1, warn: 0, fail: 0, error: 0 }))) }, args: ['repo/a.json'], ...merge, exit: 2, words: ['models[0].checks[0].status', 'was it edited'] },
+  { id: 'merge-proto-key', about: 'a model with a __proto__ key', files: { 'a.json': shardReport([reportModel('a', 'pass')], null).replace('"name": "a",', '"__proto__": { "verdict": "fail" },\n      "name": "a",') }, args: ['repo/a.json'], ...merge, exit: 2, words: ['models[0].__proto__', 'not part of a fitgate JSON report'] },
+  { id: 'merge-wrong-type', about: 'a row count that is a string', files: { 'a.json': shardReport([reportModel('a', 'pass')], null, (r) => (r.models[0].rows.train = '30')) }, args: ['repo/a.json'], ...merge, exit: 2, words: ['models[0].rows.train', 'a whole number'] },
+  { id: 'merge-proto-names', about: 'models named __proto__, constructor and hasOwnProperty merge as plain names', files: { 'a.json': shardReport([reportModel('__proto__', 'pass'), reportModel('constructor', 'pass')], { index: 1, count: 2 }), 'b.json': shardReport([reportModel('hasOwnProperty', 'pass')], { index: 2, count: 2 }) }, args: ['repo/a.json', 'repo/b.json', '--expect', '2'], ...merge, exit: 0, words: ['__proto__', 'constructor', 'hasOwnProperty'], verdicts: { ['__proto__']: 'pass', constructor: 'pass', hasOwnProperty: 'pass' } },
+  { id: 'merge-missing-shard-expect', about: 'two reports where --expect 3 asks for three', files: { 'a.json': shardReport([reportModel('a', 'pass')], null), 'b.json': shardReport([reportModel('b', 'pass')], null) }, args: ['repo/a.json', 'repo/b.json', '--expect', '3'], ...merge, exit: 2, words: ['--expect 3', 'got 2'] },
+  { id: 'merge-missing-shard-named', about: 'shards 1/3 and 3/3 without 2/3', files: { 'a.json': shardReport([reportModel('a', 'pass')], { index: 1, count: 3 }), 'c.json': shardReport([reportModel('c', 'pass')], { index: 3, count: 3 }) }, args: ['repo/a.json', 'repo/c.json'], ...merge, exit: 2, words: ['shard 2/3 is missing'] },
 
   // One bad model among good ones
   { id: 'one-bad-among-good', about: 'three models, one with a bad cell: every model gets its outcome', files: repo({ 'models/a.model.yml': descriptor({ name: 'a' }), 'models/b.model.yml': descriptor({ name: 'b', train: '../data/bad.csv' }), 'data/bad.csv': TRAIN.replace('\n3,', '\nx3,') }), exit: 2, words: ['data/bad.csv:5', '"x3"'], verdicts: { a: 'pass', b: 'error', m: 'pass' } },
