@@ -36,8 +36,8 @@ export async function microBenchmark({ root, rows = 100_000, inputs = 19, repeat
   const lib = await transpile(root);
   try {
     const load = (rel) => import(pathToFileURL(path.join(lib, rel)).href);
-    const { createTerm } = await load('basis/index.js');
-    const { createDesign } = await load('design-matrix.js');
+    const { createTerm } = await load('design/terms/index.js');
+    const { createDesign } = await load('design/design-matrix.js');
     const { QrAccumulator, fitFactor } = await load('fit/index.js');
     const { forEachBlock } = await load('design/blocks.js');
     const { crossValidate } = await load('diagnostics/cross-validation.js');
