@@ -3269,8 +3269,10 @@ function jsonErrorOffset(text) {
         if (c === '{') {
             i++;
             ws();
-            if (text[i] === '}')
-                return void i++;
+            if (text[i] === '}') {
+                i++;
+                return;
+            }
             for (;;) {
                 ws();
                 if (text[i] !== '"')
@@ -3284,8 +3286,10 @@ function jsonErrorOffset(text) {
                 ws();
                 if (text[i] === ',')
                     i++;
-                else if (text[i] === '}')
-                    return void i++;
+                else if (text[i] === '}') {
+                    i++;
+                    return;
+                }
                 else
                     fail();
             }
@@ -3293,30 +3297,35 @@ function jsonErrorOffset(text) {
         if (c === '[') {
             i++;
             ws();
-            if (text[i] === ']')
-                return void i++;
+            if (text[i] === ']') {
+                i++;
+                return;
+            }
             for (;;) {
                 value();
                 ws();
                 if (text[i] === ',')
                     i++;
-                else if (text[i] === ']')
-                    return void i++;
+                else if (text[i] === ']') {
+                    i++;
+                    return;
+                }
                 else
                     fail();
             }
         }
         if (c === '"')
-            return string();
-        if (c === 't')
-            return literal('true');
-        if (c === 'f')
-            return literal('false');
-        if (c === 'n')
-            return literal('null');
-        if (c === '-' || (c !== undefined && c >= '0' && c <= '9'))
-            return number();
-        fail();
+            string();
+        else if (c === 't')
+            literal('true');
+        else if (c === 'f')
+            literal('false');
+        else if (c === 'n')
+            literal('null');
+        else if (c === '-' || (c !== undefined && c >= '0' && c <= '9'))
+            number();
+        else
+            fail();
     };
     try {
         value();
@@ -3410,7 +3419,7 @@ function keyPath(pointer, extra) {
 function valueAt(root, pointer) {
     let node = root;
     for (const part of pointer === '' ? [] : pointer.slice(1).split('/')) {
-        if (node === null || typeof node !== 'object' || !Object.prototype.hasOwnProperty.call(node, part))
+        if (node === null || typeof node !== 'object' || !Object.hasOwn(node, part))
             return undefined;
         node = node[part];
     }

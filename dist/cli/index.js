@@ -10950,7 +10950,7 @@ function numbers(v) {
 }
 function readSwing(checks, input) {
     const check = checks.find((c) => c.id === 'swing');
-    if (!check || !check.detail)
+    if (!check?.detail)
         return null;
     const d = check.detail;
     const band = numberPair(d.band);
@@ -10984,7 +10984,7 @@ function finiteOrNull(v) {
  */
 function readSweep(checks) {
     const check = checks.find((c) => c.id === 'complexity');
-    if (!check || !check.detail || !Array.isArray(check.detail.curve))
+    if (!check?.detail || !Array.isArray(check.detail.curve))
         return null;
     const d = check.detail;
     const curve = d.curve;

@@ -87,7 +87,7 @@ export async function loadSettings(repo: RepoReader, path: string, options: { ex
 async function yamlTwinNotes(repo: RepoReader, path: string): Promise<string[]> {
   if (!path.endsWith('.yml')) return [];
   const twin = `${path.slice(0, -4)}.yaml`;
-  let kind;
+  let kind: Awaited<ReturnType<typeof repo.entryKind>>;
   try {
     kind = await repo.entryKind(twin);
   } catch {

@@ -37,7 +37,7 @@ export async function loadModelData(
   const columns = [...inputs, data.target];
   const maxBytes = settings.caps.maxFileBytes;
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
-    let table;
+    let table: Awaited<ReturnType<typeof readTable>>;
     try {
       table = await readTable(repo, path, { columns, maxBytes });
     } catch (error) {

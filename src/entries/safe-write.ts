@@ -195,7 +195,7 @@ function makeFolder(folder: string, base: string | null, refuse: (message: strin
 
 /** Refuses a target that is a symbolic link or not a regular file; a missing target is fine. */
 function checkTarget(target: string, named: string, refuse: (message: string) => InputError): void {
-  let info;
+  let info: ReturnType<typeof lstatSync>;
   try {
     info = lstatSync(target);
   } catch (error) {

@@ -42,7 +42,7 @@ export function ridgePath(data: QrAccumulator, lambdas: readonly number[], penal
   const out = lambdas.map(() => new Float64Array(p));
   const R2 = new Float64Array(k * k);
   for (let c = 0; c < k; c++) for (let r = 0; r <= c; r++) R2[c * k + r] = R[(c + free) * p + (r + free)];
-  let decomposition;
+  let decomposition: ReturnType<typeof svd>;
   try {
     decomposition = svd(R2, k, k, 'both');
   } catch {

@@ -8,7 +8,7 @@
  * where E selects the penalised columns (one row e_j^T per penalised column j). Folding these
  * rows into a copy of the data factor keeps the QR route (no normal equations).
  */
-import { QrAccumulator } from './qr-accumulator.js';
+import type { QrAccumulator } from './qr-accumulator.js';
 
 /**
  * Checks a penalty and its column mask.

@@ -110,7 +110,10 @@ export function jsonErrorOffset(text: string): number {
     if (c === '{') {
       i++;
       ws();
-      if (text[i] === '}') return void i++;
+      if (text[i] === '}') {
+        i++;
+        return;
+      }
       for (;;) {
         ws();
         if (text[i] !== '"') fail();
@@ -121,28 +124,37 @@ export function jsonErrorOffset(text: string): number {
         value();
         ws();
         if (text[i] === ',') i++;
-        else if (text[i] === '}') return void i++;
+        else if (text[i] === '}') {
+          i++;
+          return;
+        }
         else fail();
       }
     }
     if (c === '[') {
       i++;
       ws();
-      if (text[i] === ']') return void i++;
+      if (text[i] === ']') {
+        i++;
+        return;
+      }
       for (;;) {
         value();
         ws();
         if (text[i] === ',') i++;
-        else if (text[i] === ']') return void i++;
+        else if (text[i] === ']') {
+          i++;
+          return;
+        }
         else fail();
       }
     }
-    if (c === '"') return string();
-    if (c === 't') return literal('true');
-    if (c === 'f') return literal('false');
-    if (c === 'n') return literal('null');
-    if (c === '-' || (c !== undefined && c >= '0' && c <= '9')) return number();
-    fail();
+    if (c === '"') string();
+    else if (c === 't') literal('true');
+    else if (c === 'f') literal('false');
+    else if (c === 'n') literal('null');
+    else if (c === '-' || (c !== undefined && c >= '0' && c <= '9')) number();
+    else fail();
   };
   try {
     value();
@@ -228,7 +240,7 @@ function keyPath(pointer: string, extra?: string): string {
 function valueAt(root: unknown, pointer: string): unknown {
   let node = root;
   for (const part of pointer === '' ? [] : pointer.slice(1).split('/')) {
-    if (node === null || typeof node !== 'object' || !Object.prototype.hasOwnProperty.call(node, part)) return undefined;
+    if (node === null || typeof node !== 'object' || !Object.hasOwn(node, part)) return undefined;
     node = (node as Record<string, unknown>)[part];
   }
   return node;

@@ -117,7 +117,7 @@ function numbers(v: unknown): number[] | null {
 
 function readSwing(checks: readonly CheckResult[], input: string): SwingDetailView | null {
   const check = checks.find((c) => c.id === 'swing');
-  if (!check || !check.detail) return null;
+  if (!check?.detail) return null;
   const d = check.detail;
   const band = numberPair(d.band);
   let curve: SwingDetailView['curve'] = null;
@@ -151,7 +151,7 @@ function finiteOrNull(v: unknown): number | null {
  */
 function readSweep(checks: readonly CheckResult[]): SweepData | null {
   const check = checks.find((c) => c.id === 'complexity');
-  if (!check || !check.detail || !Array.isArray(check.detail.curve)) return null;
+  if (!check?.detail || !Array.isArray(check.detail.curve)) return null;
   const d = check.detail;
   const curve = d.curve as Record<string, unknown>[];
   const at = (index: unknown): number | null => {

@@ -56,6 +56,7 @@ describe('action.yml', () => {
     expect(Object.keys(action.inputs).sort()).toEqual(Object.keys(INPUT_DEFAULTS).sort());
     for (const [name, spec] of Object.entries(action.inputs)) {
       expect(spec.description.length, `description of ${name}`).toBeGreaterThan(20);
+      // biome-ignore lint/suspicious/noTemplateCurlyInString: the workflow expression is the expected text
       const expected = name === 'github-token' ? '${{ github.token }}' : INPUT_DEFAULTS[name as keyof typeof INPUT_DEFAULTS];
       expect(String(spec.default), `default of ${name}`).toBe(expected);
     }

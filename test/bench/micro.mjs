@@ -45,7 +45,12 @@ export async function microBenchmark({ root, rows = 100_000, inputs = 19, repeat
 
     // Data: 19 uniform inputs, y = sum of inputs + noise (xorshift32; the figures do not matter).
     let s = 2463534242;
-    const rand = () => ((s ^= s << 13), (s ^= s >>> 17), (s ^= s << 5), (s >>> 0) / 4294967296);
+    const rand = () => {
+      s ^= s << 13;
+      s ^= s >>> 17;
+      s ^= s << 5;
+      return (s >>> 0) / 4294967296;
+    };
     const names = Array.from({ length: inputs }, (_, j) => `x${j + 1}`);
     const columns = names.map(() => Float64Array.from({ length: rows }, rand));
     const y = new Float64Array(rows);

@@ -6,7 +6,7 @@ import { fitDesign } from '../../src/fit/index.js';
 import { fitRows, linearDesign, predictRow, randomRows, relDiff, selectRows } from './helpers.js';
 
 /** Explicit design matrix (row-major number[][]) of rows. */
-function explicit(q: number, rows: ReturnType<typeof randomRows>, intercept = true): number[][] {
+function explicit(_q: number, rows: ReturnType<typeof randomRows>, intercept = true): number[][] {
   return Array.from({ length: rows.rows }, (_, i) => [...(intercept ? [1] : []), ...rows.inputs.map((c) => c[i])]);
 }
 

@@ -1,4 +1,4 @@
-// The spoilers below write any key into parsed JSON, hence `any` in their parameters.
+// biome-ignore-all lint/suspicious/noExplicitAny: the spoilers below write any key into parsed JSON, hence `any` in their parameters.
 import { tmpdir } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { describe, it, expect } from 'vitest';
@@ -218,12 +218,23 @@ describe('merge trusts nothing in a report', () => {
   });
 
   it.each([
-    ['a check status the figure does not give', (r: any) => (r.models[0].checks[0].status = 'pass'), 'models[0].checks[0].status'],
-    ['a model verdict its checks do not give', (r: any) => (r.models[0].verdict = 'pass'), 'models[0].verdict'],
-    ['an error verdict without an error', (r: any) => ((r.models[0].verdict = 'error'), (r.models[0].checks = [])), 'models[0].verdict'],
+    ['a check status the figure does not give', (r: any) => {
+      r.models[0].checks[0].status = 'pass';
+    }, 'models[0].checks[0].status'],
+    ['a model verdict its checks do not give', (r: any) => {
+      r.models[0].verdict = 'pass';
+    }, 'models[0].verdict'],
+    ['an error verdict without an error', (r: any) => {
+      r.models[0].verdict = 'error';
+      r.models[0].checks = [];
+    }, 'models[0].verdict'],
     ['an error with a pass verdict', (r: any) => (r.models[0].error = { message: 'x', file: null, line: null, code: 'c' }), 'models[0].verdict'],
-    ['a report verdict its models do not give', (r: any) => (r.verdict = 'pass'), 'verdict'],
-    ['counts its models do not give', (r: any) => (r.counts.fail = 0), 'counts.fail'],
+    ['a report verdict its models do not give', (r: any) => {
+      r.verdict = 'pass';
+    }, 'verdict'],
+    ['counts its models do not give', (r: any) => {
+      r.counts.fail = 0;
+    }, 'counts.fail'],
   ])('recomputes statuses and verdicts: refuses %s', (_, spoil, key) => {
     const r = JSON.parse(report('a.json', [model('a', 'fail')]).text);
     spoil(r);
@@ -233,14 +244,26 @@ describe('merge trusts nothing in a report', () => {
   });
 
   it.each([
-    ['a chart line 0', (m: any) => (m.charts = charts({ lines: [0] })), 'models[0].charts.train.lines[0]'],
-    ['a chart value as a string', (m: any) => (m.charts = charts({ actual: ['NaN'] })), 'models[0].charts.train.actual[0]'],
-    ['a check line 0', (m: any) => (m.checks[0].line = 0), 'models[0].checks[0].line'],
-    ['a fractional row count', (m: any) => (m.rows.train = 1.5), 'models[0].rows.train'],
-    ['a metric that is an object', (m: any) => (m.metrics.gap_ratio = { x: 1 }), 'models[0].metrics.gap_ratio'],
+    ['a chart line 0', (m: any) => {
+      m.charts = charts({ lines: [0] });
+    }, 'models[0].charts.train.lines[0]'],
+    ['a chart value as a string', (m: any) => {
+      m.charts = charts({ actual: ['NaN'] });
+    }, 'models[0].charts.train.actual[0]'],
+    ['a check line 0', (m: any) => {
+      m.checks[0].line = 0;
+    }, 'models[0].checks[0].line'],
+    ['a fractional row count', (m: any) => {
+      m.rows.train = 1.5;
+    }, 'models[0].rows.train'],
+    ['a metric that is an object', (m: any) => {
+      m.metrics.gap_ratio = { x: 1 };
+    }, 'models[0].metrics.gap_ratio'],
     ['an unknown base status', (m: any) => (m.base = { status: 'old', commit: 'c', holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null }), 'models[0].base.status'],
     ['a __proto__ key on a model', (m: any) => Object.defineProperty(m, '__proto__', { value: { verdict: 'pass' }, enumerable: true }), 'models[0].__proto__'],
-    ['a constructor key on a check', (m: any) => (m.checks[0].constructor = 'x'), 'models[0].checks[0].constructor'],
+    ['a constructor key on a check', (m: any) => {
+      m.checks[0].constructor = 'x';
+    }, 'models[0].checks[0].constructor'],
   ])('validates every field a reporter reads: refuses %s', (_, spoil, key) => {
     const m = JSON.parse(JSON.stringify(model('a', 'pass')));
     spoil(m);

@@ -6,6 +6,7 @@ import { defaultSettings } from '../../src/run/settings.js';
 
 describe('chartNumber', () => {
   it('keeps 7 significant digits and turns NaN and infinities into null', () => {
+    // biome-ignore lint/suspicious/noApproximativeNumericConstant: the expected value is pi cut to 7 significant digits
     expect(chartNumber(Math.PI)).toBe(3.141593);
     expect(chartNumber(-1.23456789e-12)).toBe(-1.234568e-12);
     expect(chartNumber(Number.NaN)).toBeNull();
