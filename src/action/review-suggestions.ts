@@ -89,13 +89,21 @@ export function createReviewApi(token: string, ref: PullRequestRef, log: (line: 
     async comments() {
       const all: ReviewComment[] = [];
       for await (const page of octokit.paginate.iterator(octokit.rest.pulls.listReviewComments, { ...pull, per_page: 100 })) {
-        for (const c of page.data) all.push({ id: c.id, body: c.body ?? '', path: c.path, line: typeof c.line === 'number' ? c.line : null });
+        for (const c of page.data)
+          all.push({ id: c.id, body: c.body ?? '', path: c.path, line: typeof c.line === 'number' ? c.line : null });
         if (all.length >= MAX_LISTED) break;
       }
       return all;
     },
     async create(c) {
-      await octokit.rest.pulls.createReviewComment({ ...pull, body: c.body, path: c.path, line: c.line, side: 'RIGHT', commit_id: c.commit });
+      await octokit.rest.pulls.createReviewComment({
+        ...pull,
+        body: c.body,
+        path: c.path,
+        line: c.line,
+        side: 'RIGHT',
+        commit_id: c.commit,
+      });
     },
     async update(id, body) {
       await octokit.rest.pulls.updateReviewComment({ ...where, comment_id: id, body });
@@ -169,7 +177,10 @@ export async function repositoryPrefix(root: string, fallback: string): Promise<
   const top = await tryGitTopLevel(root);
   if (top === null) return fallback;
   try {
-    return nodePath.relative(await realpath(top), await realpath(root)).split(nodePath.sep).join('/');
+    return nodePath
+      .relative(await realpath(top), await realpath(root))
+      .split(nodePath.sep)
+      .join('/');
   } catch {
     return fallback;
   }
@@ -223,7 +234,10 @@ export async function planSuggestions(result: Result, files: readonly ChangedFil
       }
       const rewritten = rewriteSetting(text, s.line, s.change);
       if (rewritten === null) {
-        if (lines.has(s.line)) skipped.push(`${quoted}: no review suggestion for "${s.text.split(' (')[0]}": the value of \`${s.change.key}\` is not written as a plain number at line ${s.line}`);
+        if (lines.has(s.line))
+          skipped.push(
+            `${quoted}: no review suggestion for "${s.text.split(' (')[0]}": the value of \`${s.change.key}\` is not written as a plain number at line ${s.line}`,
+          );
         continue;
       }
       const diffText = lines.get(rewritten.line);
@@ -236,7 +250,15 @@ export async function planSuggestions(result: Result, files: readonly ChangedFil
         skipped.push(`${quoted}: no review suggestion: line ${rewritten.line} is longer than ${MAX_SUGGESTED_LINE} characters`);
         continue;
       }
-      wanted.push({ model: model.name, check: check.id, path, line: rewritten.line, before: rewritten.before, after: rewritten.after, body: suggestionBody(model.name, check.id, s.text, rewritten.after) });
+      wanted.push({
+        model: model.name,
+        check: check.id,
+        path,
+        line: rewritten.line,
+        before: rewritten.before,
+        after: rewritten.after,
+        body: suggestionBody(model.name, check.id, s.text, rewritten.after),
+      });
     }
   }
   if (wanted.length > MAX_SUGGESTIONS) {

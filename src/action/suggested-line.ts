@@ -64,7 +64,8 @@ export function rewriteSetting(text: string, line: number, change: SettingChange
     Pair(_, pair, path) {
       const value = numericValue(pair, change.key);
       if (value === null) return;
-      const onLine = (p: unknown): boolean => isPair(p) && isScalar(p.key) && p.key.range !== undefined && p.key.range !== null && lineOf(counter, p.key.range[0]) === line;
+      const onLine = (p: unknown): boolean =>
+        isPair(p) && isScalar(p.key) && p.key.range !== undefined && p.key.range !== null && lineOf(counter, p.key.range[0]) === line;
       if (onLine(pair) || path.some(onLine)) found.push(value);
     },
   });

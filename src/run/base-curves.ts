@@ -27,7 +27,12 @@ function baseOf(head: CurveData, base: CurveData | null | undefined, commit: str
  * @param baseline the same model on the base commit, or null
  * @param commit full SHA of the base commit
  */
-export function withBaseCurves(charts: ChartData, head: { columns: readonly string[]; coefficients: readonly JsonNumber[] }, baseline: ModelResult | null, commit: string): ChartData {
+export function withBaseCurves(
+  charts: ChartData,
+  head: { columns: readonly string[]; coefficients: readonly JsonNumber[] },
+  baseline: ModelResult | null,
+  commit: string,
+): ChartData {
   const base = baseline?.charts;
   if (!base || baseline.verdict === 'error') return charts;
   const curvesDiffer =
@@ -43,7 +48,11 @@ export function withBaseCurves(charts: ChartData, head: { columns: readonly stri
     ...charts,
     fit: charts.fit && fitBase ? { ...charts.fit, base: fitBase } : charts.fit,
     partials: charts.partials.map((p) => {
-      const b = baseOf(p, base.partials.find((q) => q.input === p.input), commit);
+      const b = baseOf(
+        p,
+        base.partials.find((q) => q.input === p.input),
+        commit,
+      );
       return b ? { ...p, base: b } : p;
     }),
   };

@@ -36,7 +36,9 @@ describe('diffLines', () => {
   });
 
   it('drops carriage returns, ignores a preamble, a deleted file, an empty patch and lines past a hunk', () => {
-    expect([...diffLines('diff --git a/m.yml b/m.yml\n+++ b/m.yml\n@@ -1,1 +1,1 @@\n-x: 1\r\n+x: 2\r\n+stray: 3\n')]).toEqual([[1, 'x: 2']]);
+    expect([...diffLines('diff --git a/m.yml b/m.yml\n+++ b/m.yml\n@@ -1,1 +1,1 @@\n-x: 1\r\n+x: 2\r\n+stray: 3\n')]).toEqual([
+      [1, 'x: 2'],
+    ]);
     expect(diffLines('@@ -1,2 +0,0 @@\n-a: 1\n-b: 2').size).toBe(0);
     expect(diffLines('').size).toBe(0);
     expect(diffLines('+no: header').size).toBe(0);

@@ -77,10 +77,21 @@ class FakeApi {
       return send(c ? 200 : 404, c ?? { message: 'Not Found' });
     }
     if (url.pathname === `${PULL}/files` && method === 'GET') return send(200, this.files);
-    if (url.pathname === `${PULL}/comments` && method === 'GET') return send(200, this.review.map((c) => ({ ...c, user: { login: 'github-actions[bot]' } })));
+    if (url.pathname === `${PULL}/comments` && method === 'GET')
+      return send(
+        200,
+        this.review.map((c) => ({ ...c, user: { login: 'github-actions[bot]' } })),
+      );
     if (this.mode === 'read-only-pulls') return forbidden();
     if (url.pathname === `${PULL}/comments` && method === 'POST') {
-      const c: Stored = { id: this.nextId++, body: String(body.body), path: String(body.path), line: Number(body.line), commit_id: String(body.commit_id), side: String(body.side) };
+      const c: Stored = {
+        id: this.nextId++,
+        body: String(body.body),
+        path: String(body.path),
+        line: Number(body.line),
+        commit_id: String(body.commit_id),
+        side: String(body.side),
+      };
       this.review.push(c);
       return send(201, c);
     }
@@ -145,8 +156,20 @@ function runAction(options: { fork?: boolean; inputs?: Record<string, string> } 
   writeFileSync(outputFile, '');
   writeFileSync(`${tmp}-summary.md`, '');
   const headRepo = options.fork ? 'someone/models' : 'acme/models';
-  const pullRequest = { number: 7, base: { sha: fixture.baseSha, ref: 'main', repo: { full_name: 'acme/models', fork: false } }, head: { sha: fixture.headSha, repo: { full_name: headRepo, fork: options.fork === true } } };
-  writeFileSync(eventFile, JSON.stringify({ action: 'synchronize', number: 7, pull_request: pullRequest, repository: { name: 'models', owner: { login: 'acme' } } }));
+  const pullRequest = {
+    number: 7,
+    base: { sha: fixture.baseSha, ref: 'main', repo: { full_name: 'acme/models', fork: false } },
+    head: { sha: fixture.headSha, repo: { full_name: headRepo, fork: options.fork === true } },
+  };
+  writeFileSync(
+    eventFile,
+    JSON.stringify({
+      action: 'synchronize',
+      number: 7,
+      pull_request: pullRequest,
+      repository: { name: 'models', owner: { login: 'acme' } },
+    }),
+  );
   const env: NodeJS.ProcessEnv = {
     PATH: process.env.PATH,
     HOME: process.env.HOME,
@@ -165,10 +188,21 @@ function runAction(options: { fork?: boolean; inputs?: Record<string, string> } 
     ...options.inputs,
   };
   return new Promise((resolve) => {
-    execFile(process.execPath, [path.join(lib!.dir, 'main.js')], { cwd: fixture.workspace, env, encoding: 'utf8' }, (error, stdout, stderr) => {
-      const verdict = /^verdict<<(\S+)\n([\s\S]*?)\n\1$/m.exec(readFileSync(outputFile, 'utf8'))?.[2];
-      resolve({ status: error ? (typeof error.code === 'number' ? error.code : -1) : 0, stdout, stderr, commands: stdout.split('\n').filter((l) => l.startsWith('::')), verdict });
-    });
+    execFile(
+      process.execPath,
+      [path.join(lib!.dir, 'main.js')],
+      { cwd: fixture.workspace, env, encoding: 'utf8' },
+      (error, stdout, stderr) => {
+        const verdict = /^verdict<<(\S+)\n([\s\S]*?)\n\1$/m.exec(readFileSync(outputFile, 'utf8'))?.[2];
+        resolve({
+          status: error ? (typeof error.code === 'number' ? error.code : -1) : 0,
+          stdout,
+          stderr,
+          commands: stdout.split('\n').filter((l) => l.startsWith('::')),
+          verdict,
+        });
+      },
+    );
   });
 }
 
@@ -186,8 +220,15 @@ describe('review suggestions on the pull request', () => {
     expect(api.reviewCalls()).toEqual([`GET ${PULL}/files`, `GET ${PULL}/comments`, `POST ${PULL}/comments`]);
     expect(api.review.length).toBe(1);
     const [c] = api.review;
-    expect({ path: c.path, line: c.line, side: c.side, commit_id: c.commit_id }).toEqual({ path: WIDE, line: 8, side: 'RIGHT', commit_id: fixture.headSha });
-    expect(c.body).toMatch(/^<!-- fitgate-suggestion model=wide check=complexity -->\n\*\*fitgate `complexity`\*\* \(model wide\): degree 2 \(k-fold CV RMSE [\d.]+ against [\d.]+ now\)\.\n\n```suggestion\n {2}- polynomial: \{ of: x, degree: 2 \}\n```\n$/);
+    expect({ path: c.path, line: c.line, side: c.side, commit_id: c.commit_id }).toEqual({
+      path: WIDE,
+      line: 8,
+      side: 'RIGHT',
+      commit_id: fixture.headSha,
+    });
+    expect(c.body).toMatch(
+      /^<!-- fitgate-suggestion model=wide check=complexity -->\n\*\*fitgate `complexity`\*\* \(model wide\): degree 2 \(k-fold CV RMSE [\d.]+ against [\d.]+ now\)\.\n\n```suggestion\n {2}- polynomial: \{ of: x, degree: 2 \}\n```\n$/,
+    );
     expect(first.stdout).toContain('review suggestions: 1 posted, 0 updated, 0 unchanged, 0 removed');
     expect(ownLines(first)).toEqual([]);
     expect(first.stdout.split('\n').filter((l) => l.includes(TOKEN))).toEqual([`::add-mask::${TOKEN}`]);

@@ -21,17 +21,29 @@ data:
 terms:
   - polynomial: { of: x, degree: 9 } # keep
 `;
-const PATCH = '@@ -6,3 +6,3 @@\n   target: y\n terms:\n-  - polynomial: { of: x, degree: 2 } # keep\n+  - polynomial: { of: x, degree: 9 } # keep\n';
+const PATCH =
+  '@@ -6,3 +6,3 @@\n   target: y\n terms:\n-  - polynomial: { of: x, degree: 2 } # keep\n+  - polynomial: { of: x, degree: 9 } # keep\n';
 const FILES: ChangedFile[] = [{ filename: 'ml/models/wide.model.yml', patch: PATCH }];
-const SOURCE = { prefix: 'ml', read: async (file: string) => (file === 'models/wide.model.yml' ? WIDE : Promise.reject(new Error('no such file'))) };
+const SOURCE = {
+  prefix: 'ml',
+  read: async (file: string) => (file === 'models/wide.model.yml' ? WIDE : Promise.reject(new Error('no such file'))),
+};
 const HEAD = 'b'.repeat(40);
 
 /** A Result whose model `wide` suggests `degree <value>` at line 8 (and `other` suggests nothing). */
 function result(value: number | null, name = 'wide'): Result {
-  const suggestion = value === null ? {} : { suggestion: { text: `degree ${value} (k-fold CV RMSE 0.18 against 0.22 now)`, line: 8, change: { key: 'degree', value } } };
+  const suggestion =
+    value === null
+      ? {}
+      : { suggestion: { text: `degree ${value} (k-fold CV RMSE 0.18 against 0.22 now)`, line: 8, change: { key: 'degree', value } } };
   return summarise(
     [
-      model({ name, descriptor: 'models/wide.model.yml', verdict: 'pass', checks: [check({ id: 'complexity', status: 'pass', line: 8, ...suggestion })] }),
+      model({
+        name,
+        descriptor: 'models/wide.model.yml',
+        verdict: 'pass',
+        checks: [check({ id: 'complexity', status: 'pass', line: 8, ...suggestion })],
+      }),
       model({ name: 'broken', verdict: 'error', metrics: null, error: { message: 'x', file: null, line: null, code: 'c' } }),
     ],
     '0.1.0',
@@ -85,7 +97,9 @@ describe('review suggestions', () => {
   });
 
   it('writes the body: marker, one sentence, a suggestion block whose fence outlasts the line', () => {
-    expect(suggestionBody('wide|<b>', 'complexity', 'degree 3 (k-fold CV RMSE 0.1 against 0.2 now)', '  - polynomial: { of: x, degree: 3 }')).toBe(
+    expect(
+      suggestionBody('wide|<b>', 'complexity', 'degree 3 (k-fold CV RMSE 0.1 against 0.2 now)', '  - polynomial: { of: x, degree: 3 }'),
+    ).toBe(
       `${suggestionMarker('wide|<b>', 'complexity')}\n**fitgate \`complexity\`** (model wide\\|&lt;b&gt;): degree 3 (k-fold CV RMSE 0.1 against 0.2 now).\n\n\`\`\`suggestion\n  - polynomial: { of: x, degree: 3 }\n\`\`\`\n`,
     );
     expect(suggestionBody('m', 'complexity', 't', 'a: ```` b')).toContain('\n`````suggestion\na: ```` b\n`````\n');
@@ -94,7 +108,14 @@ describe('review suggestions', () => {
   it('plans the rewritten line of a model whose suggestion is on a line of the diff', async () => {
     const plan = await planSuggestions(result(3), FILES, SOURCE);
     expect(plan.wanted.map(({ body, ...w }) => w)).toEqual([
-      { model: 'wide', check: 'complexity', path: 'ml/models/wide.model.yml', line: 8, before: '  - polynomial: { of: x, degree: 9 } # keep', after: '  - polynomial: { of: x, degree: 3 } # keep' },
+      {
+        model: 'wide',
+        check: 'complexity',
+        path: 'ml/models/wide.model.yml',
+        line: 8,
+        before: '  - polynomial: { of: x, degree: 9 } # keep',
+        after: '  - polynomial: { of: x, degree: 3 } # keep',
+      },
     ]);
     expect(plan.skipped).toEqual([]);
     expect([...plan.checked]).toEqual(['wide']);
@@ -112,16 +133,24 @@ describe('review suggestions', () => {
 
   it('posts once, then leaves an equal comment alone, then updates the same comment', async () => {
     const { api, calls, comments } = fakeApi([{ id: 7, body: 'a reviewer', path: 'ml/models/wide.model.yml', line: 8 }]);
-    expect(await reviewSuggestions(api, result(3), SOURCE, HEAD)).toEqual({ kind: 'done', counts: { created: 1, updated: 0, unchanged: 0, deleted: 0 }, skipped: [] });
+    expect(await reviewSuggestions(api, result(3), SOURCE, HEAD)).toEqual({
+      kind: 'done',
+      counts: { created: 1, updated: 0, unchanged: 0, deleted: 0 },
+      skipped: [],
+    });
     expect(calls).toEqual(['files', 'comments', 'create ml/models/wide.model.yml:8 @bbb']);
     expect(comments[1].body).toContain('```suggestion\n  - polynomial: { of: x, degree: 3 } # keep\n```');
 
     calls.length = 0;
-    expect(await reviewSuggestions(api, result(3), SOURCE, HEAD)).toMatchObject({ counts: { created: 0, updated: 0, unchanged: 1, deleted: 0 } });
+    expect(await reviewSuggestions(api, result(3), SOURCE, HEAD)).toMatchObject({
+      counts: { created: 0, updated: 0, unchanged: 1, deleted: 0 },
+    });
     expect(calls).toEqual(['files', 'comments']);
 
     calls.length = 0;
-    expect(await reviewSuggestions(api, result(4), SOURCE, HEAD)).toMatchObject({ counts: { created: 0, updated: 1, unchanged: 0, deleted: 0 } });
+    expect(await reviewSuggestions(api, result(4), SOURCE, HEAD)).toMatchObject({
+      counts: { created: 0, updated: 1, unchanged: 0, deleted: 0 },
+    });
     expect(calls).toEqual(['files', 'comments', 'update 500']);
     expect(comments.length).toBe(2);
     expect(comments[1].body).toContain('degree: 4 } # keep');
@@ -136,7 +165,9 @@ describe('review suggestions', () => {
       { id: 4, body: `${marker}\nelsewhere`, path: 'ml/models/wide.model.yml', line: 2 },
       { id: 5, body: `${suggestionMarker('broken', 'complexity')}\nx`, path: 'ml/models/broken.model.yml', line: 3 },
     ]);
-    expect(await reviewSuggestions(api, result(3), SOURCE, HEAD)).toMatchObject({ counts: { created: 0, updated: 1, unchanged: 0, deleted: 2 } });
+    expect(await reviewSuggestions(api, result(3), SOURCE, HEAD)).toMatchObject({
+      counts: { created: 0, updated: 1, unchanged: 0, deleted: 2 },
+    });
     expect(calls).toEqual(['files', 'comments', 'update 2', 'remove 3', 'remove 4']);
 
     // The suggestion is gone: its live comment goes too; the changed files are not needed.
@@ -147,8 +178,15 @@ describe('review suggestions', () => {
 
   it('turns 403 and 404 into forbidden and other failures into failed, without throwing', async () => {
     for (const status of [403, 404]) {
-      expect(await reviewSuggestions(fakeApi([], { status }).api, result(3), SOURCE, HEAD)).toEqual({ kind: 'forbidden', status, message: 'Resource not accessible by integration' });
+      expect(await reviewSuggestions(fakeApi([], { status }).api, result(3), SOURCE, HEAD)).toEqual({
+        kind: 'forbidden',
+        status,
+        message: 'Resource not accessible by integration',
+      });
     }
-    expect(await reviewSuggestions(fakeApi([], { status: 502 }).api, result(3), SOURCE, HEAD)).toEqual({ kind: 'failed', message: 'HTTP 502: Resource not accessible by integration' });
+    expect(await reviewSuggestions(fakeApi([], { status: 502 }).api, result(3), SOURCE, HEAD)).toEqual({
+      kind: 'failed',
+      message: 'HTTP 502: Resource not accessible by integration',
+    });
   });
 });

@@ -28,7 +28,11 @@ function loadWith(text: string, at: number, line: string) {
 describe('rewriteSetting', () => {
   it('changes only the degree in a flow mapping, keeping indentation, spacing and the comment', () => {
     const r = rewriteSetting(DESCRIPTOR, 8, { key: 'degree', value: 3 });
-    expect(r).toEqual({ line: 8, before: '    - polynomial: { of: fuel, degree: 9 }   # was 2 last spring', after: '    - polynomial: { of: fuel, degree: 3 }   # was 2 last spring' });
+    expect(r).toEqual({
+      line: 8,
+      before: '    - polynomial: { of: fuel, degree: 9 }   # was 2 last spring',
+      after: '    - polynomial: { of: fuel, degree: 3 }   # was 2 last spring',
+    });
     const d = loadWith(DESCRIPTOR, r!.line, r!.after);
     expect(d.terms[0]).toMatchObject({ kind: 'polynomial', degree: 3 });
   });
@@ -52,7 +56,12 @@ describe('rewriteSetting', () => {
     expect(rewriteSetting('fit:\n  intercept: true\nterms:\n  - linear: [x]\n', 1, { key: 'ridge', value: 1 })).toBeNull();
     expect(rewriteSetting('fit:\n  ridge: "0.5"\n', 2, { key: 'ridge', value: 1 })).toBeNull();
     expect(rewriteSetting('fit:\n  ridge: !!float 0.5\n', 2, { key: 'ridge', value: 1 })).toBeNull();
-    expect(rewriteSetting('terms:\n  - polynomial: { of: x, degree: 2 }\n  - polynomial: { of: z, degree: 5 }\n', 1, { key: 'degree', value: 3 })).toBeNull();
+    expect(
+      rewriteSetting('terms:\n  - polynomial: { of: x, degree: 2 }\n  - polynomial: { of: z, degree: 5 }\n', 1, {
+        key: 'degree',
+        value: 3,
+      }),
+    ).toBeNull();
     expect(rewriteSetting('terms: [\n', 1, { key: 'degree', value: 3 })).toBeNull();
     expect(rewriteSetting(DESCRIPTOR, 8, { key: 'degree', value: Number.NaN })).toBeNull();
   });

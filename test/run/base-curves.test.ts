@@ -19,7 +19,13 @@ let baseline: ReadonlyMap<string, ModelResult>;
 beforeAll(async () => {
   const fixture = makeFixture();
   baseSha = fixture.baseSha;
-  const settings = { root: path.join(fixture.workspace, 'ml'), config: 'fitgate.yml', configExplicit: false, descriptors: [], failOn: 'fail' as const };
+  const settings = {
+    root: path.join(fixture.workspace, 'ml'),
+    config: 'fitgate.yml',
+    configExplicit: false,
+    descriptors: [],
+    failOn: 'fail' as const,
+  };
   const options = await evaluateBase(settings, fixture.baseSha, { fetchHint: ACTION_FETCH_HINT });
   baseline = options.baseline!;
   result = await runPipeline(settings, createFsRepository(settings.root), { ...options, jobs: 1 });

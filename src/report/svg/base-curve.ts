@@ -22,7 +22,10 @@ export function baseCurvePath(base: BaseCurve, sx: Scale, sy: Scale): string {
 
 /** The legend entry of the base curve. */
 export function baseCurveLegend(): { mark: string; label: string } {
-  return { mark: `<line x1="0" y1="7" x2="14" y2="7" stroke="${BASE_CURVE_COLOUR}" stroke-width="1.8" stroke-dasharray="${BASE_CURVE_DASH}"/>`, label: BASE_CURVE_LABEL };
+  return {
+    mark: `<line x1="0" y1="7" x2="14" y2="7" stroke="${BASE_CURVE_COLOUR}" stroke-width="1.8" stroke-dasharray="${BASE_CURVE_DASH}"/>`,
+    label: BASE_CURVE_LABEL,
+  };
 }
 
 /** One sentence for the chart's description. */

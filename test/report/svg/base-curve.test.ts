@@ -28,7 +28,10 @@ describe('the base commit curve', () => {
   it('is drawn dashed under the fitted curve, in the legend and the description', () => {
     const c = withBase();
     const svg = fitCurveChart(c, c.fit!, { id: 'm1-fit' });
-    const base = /<path class="base-curve" data-commit="c0ffee1" d="([^"]+)" fill="none" stroke="#6e6e6e" stroke-width="1.8" stroke-dasharray="5 4" stroke-linejoin="round"\/>/.exec(svg);
+    const base =
+      /<path class="base-curve" data-commit="c0ffee1" d="([^"]+)" fill="none" stroke="#6e6e6e" stroke-width="1.8" stroke-dasharray="5 4" stroke-linejoin="round"\/>/.exec(
+        svg,
+      );
     expect(base, svg).not.toBeNull();
     // Five points, one move and four lines; under (before) the model's own curve.
     expect(base![1].match(/[ML]/g)).toEqual(['M', 'L', 'L', 'L', 'L']);
@@ -47,7 +50,9 @@ describe('the base commit curve', () => {
     const natural = labels.reduce((w, l) => w + 28 + l.length * 6.1, 0);
     expect(Number(first![1]) + natural).toBeLessThanOrEqual(560 - 18 + 0.5);
     // A short legend still starts at the plot area's left edge.
-    expect(fitCurveChart(oneInputCharts(), oneInputCharts().fit!, { id: 'x' })).toContain('<g class="legend"><g transform="translate(68.0 9)">');
+    expect(fitCurveChart(oneInputCharts(), oneInputCharts().fit!, { id: 'x' })).toContain(
+      '<g class="legend"><g transform="translate(68.0 9)">',
+    );
   });
 
   it('is drawn on a partial curve, and absent from charts without one', () => {
@@ -63,7 +68,16 @@ describe('the base commit curve', () => {
   });
 
   it('appears in the HTML report only on the model that has it', () => {
-    const html = formatHtml(summarise([model({ name: 'changed', verdict: 'pass', charts: withBase() }), model({ name: 'same', verdict: 'pass', charts: oneInputCharts() })], '0.1.0', []));
+    const html = formatHtml(
+      summarise(
+        [
+          model({ name: 'changed', verdict: 'pass', charts: withBase() }),
+          model({ name: 'same', verdict: 'pass', charts: oneInputCharts() }),
+        ],
+        '0.1.0',
+        [],
+      ),
+    );
     const sections = html.split('<section class="model"').slice(1);
     expect(sections.length).toBe(2);
     expect((sections[0].match(/class="base-curve"/g) ?? []).length).toBe(1);
