@@ -127,7 +127,13 @@ async function run(): Promise<void> {
           say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
         }
         // Review suggestions on the descriptor lines of the diff (a forbidden comment said it all already).
-        if (outcome.kind !== 'forbidden') await suggestOnDiff(result, inputs, pr);
+        if (outcome.kind !== 'forbidden') {
+          try {
+            await suggestOnDiff(result, inputs, pr);
+          } catch (error) {
+            say('warning', `review suggestions could not be written: ${errorMessage(error)}. The result is unchanged.`);
+          }
+        }
       }
     }
 
