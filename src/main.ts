@@ -9,9 +9,12 @@ import * as github from '@actions/github';
 import { ACTION_FETCH_HINT, evaluateBase } from './action/base-commit.js';
 import { createCommentApi, upsertComment } from './action/comment.js';
 import { pullRequestOf } from './action/event.js';
+import { createReviewApi, hasSuggestions, repositoryPrefix, reviewSuggestions } from './action/review-suggestions.js';
 import { failedCount, failureMessage, OUTPUTS, writeReport } from './action/outcome.js';
 import { errorMessage, InputError } from './core/errors.js';
-import { readInputs } from './entries/inputs.js';
+import { readInputs, type ActionInputs } from './entries/inputs.js';
+import type { PullRequestEvent } from './action/event.js';
+import type { Result } from './result/result.js';
 import { defaultJobs } from './run/pool.js';
 import { isFitgateWorker } from './run/worker-role.js';
 import { writeFileReports } from './entries/output-files.js';
@@ -44,6 +47,35 @@ function say(level: 'notice' | 'warning' | 'error', message: string): void {
 /** Fails the step with a message whose runner commands are broken (the toolkit escapes the rest). */
 function fail(message: string): void {
   core.setFailed(defuseLegacyCommands(message));
+}
+
+/**
+ * Posts or updates the review suggestions (action/review-suggestions.ts); a fork's pull request
+ * or a token that may not write gets one notice, other failures one warning. Never fails the run.
+ */
+async function suggestOnDiff(result: Result, inputs: ActionInputs, pr: PullRequestEvent): Promise<void> {
+  if (pr.fromFork) {
+    if (!hasSuggestions(result)) return;
+    say('notice', 'review suggestions are skipped: the pull request comes from a fork, whose token cannot write review comments. The result is unchanged.');
+    return;
+  }
+  if (!pr.headSha) {
+    core.info('review suggestions are skipped: the event names no head commit.');
+    return;
+  }
+  const api = createReviewApi(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
+  const repo = createFsRepository(inputs.settings.root);
+  const source = { prefix: await repositoryPrefix(inputs.settings.root, inputs.prefix), read: async (file: string) => new TextDecoder().decode(await repo.read(file)) };
+  const outcome = await reviewSuggestions(api, result, source, pr.headSha);
+  if (outcome.kind === 'forbidden') {
+    say('notice', `review suggestions could not be written (HTTP ${outcome.status}): the token may not write review comments on this pull request (they need pull-requests: write). The result is unchanged.`);
+  } else if (outcome.kind === 'failed') {
+    say('warning', `review suggestions could not be written: ${outcome.message}. The result is unchanged.`);
+  } else {
+    const { created, updated, unchanged, deleted } = outcome.counts;
+    if (created + updated + unchanged + deleted > 0) core.info(`review suggestions: ${created} posted, ${updated} updated, ${unchanged} unchanged, ${deleted} removed`);
+    for (const line of outcome.skipped) core.info(neutraliseLogLine(line));
+  }
 }
 
 async function run(): Promise<void> {
@@ -93,6 +125,14 @@ async function run(): Promise<void> {
           say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
         } else if (outcome.kind === 'failed') {
           say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
+        }
+        // Review suggestions on the descriptor lines of the diff (a forbidden comment said it all already).
+        if (outcome.kind !== 'forbidden') {
+          try {
+            await suggestOnDiff(result, inputs, pr);
+          } catch (error) {
+            say('warning', `review suggestions could not be written: ${errorMessage(error)}. The result is unchanged.`);
+          }
         }
       }
     }

@@ -39,12 +39,32 @@ export type CommentOutcome =
   | { kind: 'failed'; message: string };
 
 /** HTTP status of an Octokit request error, or null. */
-function httpStatus(error: unknown): number | null {
+export function httpStatus(error: unknown): number | null {
   if (typeof error === 'object' && error !== null && 'status' in error) {
     const status = (error as { status: unknown }).status;
     return typeof status === 'number' ? status : null;
   }
   return null;
+}
+
+/**
+ * `@actions/github`'s Octokit (base URL from `GITHUB_API_URL`, proxy from the runner's settings)
+ * whose own warnings and errors never reach the console: they go to `log`, one line each, cut and
+ * cleaned with {@link quoteServerText}.
+ * @param token the token (only handed to Octokit)
+ * @param log where Octokit's warnings and errors go
+ */
+export function createOctokit(token: string, log: (line: string) => void): ReturnType<typeof github.getOctokit> {
+  const say = (message: unknown): void => log(quoteServerText(String(message), MAX_LIBRARY_LINE));
+  const quiet = { debug: () => {}, info: () => {}, warn: say, error: say };
+  const octokit = github.getOctokit(token, { baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com', log: quiet });
+  // Octokit's request layer writes its warnings (a deprecated route, with the response's headers)
+  // to `request.log`, else to the console, not to the `log` option: hand it the same logger on
+  // every request (the proxy settings in `request` are kept).
+  octokit.hook.before('request', (options) => {
+    options.request = { ...options.request, log: quiet };
+  });
+  return octokit;
 }
 
 /**
@@ -57,15 +77,7 @@ function httpStatus(error: unknown): number | null {
  * @param log where Octokit's warnings and errors go, one cleaned line each; default: dropped
  */
 export function createCommentApi(token: string, ref: PullRequestRef, log: (line: string) => void = () => {}): CommentApi {
-  const say = (message: unknown): void => log(quoteServerText(String(message), MAX_LIBRARY_LINE));
-  const quiet = { debug: () => {}, info: () => {}, warn: say, error: say };
-  const octokit = github.getOctokit(token, { baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com', log: quiet });
-  // Octokit's request layer writes its warnings (a deprecated route, with the response's headers)
-  // to `request.log`, else to the console, not to the `log` option: hand it the same logger on
-  // every request (the proxy settings in `request` are kept).
-  octokit.hook.before('request', (options) => {
-    options.request = { ...options.request, log: quiet };
-  });
+  const octokit = createOctokit(token, log);
   const where = { owner: ref.owner, repo: ref.repo, issue_number: ref.number };
   return {
     async list() {

@@ -16,6 +16,14 @@ export interface EventContext {
 export interface PullRequestEvent extends PullRequestRef {
   /** SHA of the base commit (`pull_request.base.sha`), or null when the payload lacks it. */
   baseSha: string | null;
+  /** SHA of the pull request's head commit (`pull_request.head.sha`), or null when the payload lacks it. */
+  headSha?: string | null;
+  /**
+   * True when the head branch lives in another repository than the base (a fork): its
+   * `head.repo.full_name` differs from `base.repo.full_name`, or, when the payload lacks those,
+   * `head.repo.fork` is true. Such runs get a token that cannot write to the pull request.
+   */
+  fromFork?: boolean;
 }
 
 function record(x: unknown): Record<string, unknown> | null {
@@ -42,5 +50,18 @@ export function pullRequestOf(context: EventContext): PullRequestEvent | null {
   }
   if (!owner || !repo) return null;
   const sha = record(pr?.base)?.sha;
-  return { owner, repo, number, baseSha: typeof sha === 'string' && /^[0-9a-f]{40,64}$/.test(sha) ? sha : null };
+  const head = record(pr?.head);
+  const headSha = head?.sha;
+  const headRepo = record(head?.repo);
+  const baseRepo = record(record(pr?.base)?.repo);
+  const fromFork =
+    typeof headRepo?.full_name === 'string' && typeof baseRepo?.full_name === 'string' ? headRepo.full_name !== baseRepo.full_name : headRepo?.fork === true;
+  return {
+    owner,
+    repo,
+    number,
+    baseSha: typeof sha === 'string' && /^[0-9a-f]{40,64}$/.test(sha) ? sha : null,
+    headSha: typeof headSha === 'string' && /^[0-9a-f]{40,64}$/.test(headSha) ? headSha : null,
+    fromFork,
+  };
 }

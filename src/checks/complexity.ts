@@ -81,7 +81,12 @@ const check: Check = {
       line: sweep.line,
       metrics: { suggested_setting: chosen.label, suggested_cv_rmse: jsonNumber(chosen.cvRmse) },
       detail,
-      suggestion: { text: `${chosen.label} (k-fold CV RMSE ${formatNumber(chosen.cvRmse)} against ${formatNumber(current.cvRmse)} now)`, line: sweep.line },
+      suggestion: {
+        text: `${chosen.label} (k-fold CV RMSE ${formatNumber(chosen.cvRmse)} against ${formatNumber(current.cvRmse)} now)`,
+        line: sweep.line,
+        // The value as the label rounds it (what a person would write): `degree 3`, `width 1.6`, `ridge 0.8`.
+        change: { key: sweep.kind, value: Number(chosen.label.slice(sweep.kind.length + 1)) },
+      },
     };
   },
 };

@@ -65,8 +65,11 @@ export interface Measurement {
   detail?: Record<string, unknown>;
   /** Figures to add to the model's metrics (snake_case keys). */
   metrics?: Record<string, number | string | null>;
-  /** A change to propose at a descriptor line (shown as a notice whatever the status). */
-  suggestion?: { text: string; line: number };
+  /**
+   * A change to propose at a descriptor line (shown as a notice whatever the status); `change`,
+   * when given, is the one value to write instead (the action's review suggestion rewrites it).
+   */
+  suggestion?: { text: string; line: number; change?: { key: string; value: number } };
 }
 
 /** A check module's default export. */

@@ -44,6 +44,20 @@ export interface BandRegion {
   side: 'above' | 'below';
 }
 
+/**
+ * The same curve of the same model (by name) as fitted on the base commit of a pull request,
+ * drawn under the head's curve; only on models whose fit the pull request changed. At most
+ * {@link CURVE_POINTS} points, as the base run drew them (its own range and medians).
+ */
+export interface BaseCurve {
+  /** Full SHA of the base commit. */
+  commit: string;
+  /** Input values, ascending. */
+  x: number[];
+  /** The base fit's predictions at `x` (null where not finite). */
+  y: (number | null)[];
+}
+
 /** Predictions along one input with the other inputs held at their training medians. */
 export interface CurveData {
   input: string;
@@ -55,6 +69,8 @@ export interface CurveData {
   x: number[];
   /** Predictions at `x` (null where not finite). */
   y: (number | null)[];
+  /** The base commit's curve along the same input, when the pull request changed the model's fit (run/base-curves.ts). */
+  base?: BaseCurve;
 }
 
 /** The fitted curve of a model of one input. */

@@ -44,8 +44,12 @@ export interface CheckResult {
   advice: string;
   /** Extra figures for charts and the JSON report. */
   detail?: Record<string, unknown>;
-  /** A change to propose (e.g. `degree 3`) at a descriptor line; reporters show it as a notice. */
-  suggestion?: { text: string; line: number };
+  /**
+   * A change to propose (e.g. `degree 3`) at a descriptor line; reporters show it as a notice.
+   * `change`: the key whose value changes and the new value (e.g. `{ key: 'degree', value: 3 }`),
+   * when the change is one value.
+   */
+  suggestion?: { text: string; line: number; change?: { key: string; value: number } };
 }
 
 /** Fit and hold-out figures of one model. Non-finite values as {@link JsonNumber}. */

@@ -10,6 +10,7 @@ import type { ShippedScore } from '../diagnostics/shipped.js';
 import type { RepoReader } from '../repo/types.js';
 import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result/result.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
+import { withBaseCurves } from './base-curves.js';
 import { buildChartData } from './chart-data.js';
 import { errorResult, INTERNAL_ERROR } from './error-result.js';
 import { fitModel, type FittedModel } from './fit-model.js';
@@ -106,6 +107,6 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
       rank_deficient: model.fit.rankDeficient,
       terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
     },
-    charts: buildChartData(model, checks),
+    charts: withBaseCurves(buildChartData(model, checks), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, jsonNumber) }, context.baseline, base?.commit ?? ''),
   };
 }

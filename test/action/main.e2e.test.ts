@@ -77,6 +77,8 @@ class FakeApi {
       this.comments.push(comment);
       return send(201, comment);
     }
+    // The review suggestions' endpoints (action/review-suggestions.ts): no changed file, no review comment.
+    if (req.method === 'GET' && (url.pathname === '/repos/acme/models/pulls/7/files' || url.pathname === '/repos/acme/models/pulls/7/comments')) return send(200, []);
     const m = /^\/repos\/acme\/models\/issues\/comments\/(\d+)$/.exec(url.pathname);
     if (req.method === 'PATCH' && m) {
       const comment = this.comments.find((c) => c.id === Number(m[1]));
@@ -241,15 +243,17 @@ describe('node dist/index.js on a pull request', () => {
     expect(lines[9]).toMatch(/^\| FAIL \| steady \| 0\.4203 \| 2\.995 \| 0\.1 \| 0\.9999 \| RMSE \+204\.2%, gap \+2\.0\d* \|$/);
     expect(first.summary).toContain('| base-change | FAIL | 2.042 | fail > 0.1 | 11 |');
 
-    // Comment: listed across both pages, then created once with the marker and the same report.
-    const calls = api.seen.map((s) => `${s.method} ${s.url}`);
+    // Comment: listed across both pages, then created once with the marker and the same report
+    // (the review suggestions' calls to /pulls/ are tested in review-suggestions.e2e.test.ts).
+    const issues = api.seen.filter((s) => s.url.includes('/issues/'));
+    const calls = issues.map((s) => `${s.method} ${s.url}`);
     expect(calls).toEqual([
       'GET /repos/acme/models/issues/7/comments?per_page=100',
       `GET /repos/acme/models/issues/7/comments?per_page=100&page=2`,
       'POST /repos/acme/models/issues/7/comments',
     ]);
     expect(api.seen.every((s) => s.authorization === `token ${TOKEN}`)).toBe(true);
-    const posted = api.seen[2].body?.body ?? '';
+    const posted = issues[2].body?.body ?? '';
     expect(posted.startsWith(`${MARKER}\n## fitgate\n`)).toBe(true);
     expect(posted.slice(MARKER.length + 1)).toBe(first.summary);
   });
@@ -259,7 +263,7 @@ describe('node dist/index.js on a pull request', () => {
     const before = api.comments.length;
     second = await runAction({}, fixture.baseSha);
     expect(second.commands).toEqual([MASK, ...FINDINGS, FAILURE]);
-    expect(api.seen.map((s) => `${s.method} ${s.url}`)).toEqual([
+    expect(api.seen.filter((s) => s.url.includes('/issues/')).map((s) => `${s.method} ${s.url}`)).toEqual([
       'GET /repos/acme/models/issues/7/comments?per_page=100',
       'GET /repos/acme/models/issues/7/comments?per_page=100&page=2',
       'PATCH /repos/acme/models/issues/comments/900',

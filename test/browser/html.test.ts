@@ -14,6 +14,8 @@ import { formatHtml, HTML_FILE } from '../../src/report/html.js';
 import type { Result } from '../../src/result/result.js';
 import { defaultSettings } from '../../src/run/settings.js';
 import { CHROMIUM, requireTool, skipNote } from '../tools/require-tool.js';
+import { ACTION_FETCH_HINT, evaluateBase } from '../../src/action/base-commit.js';
+import { makeFixture } from '../action/fixture.js';
 
 const repoRoot = fileURLToPath(new URL('../../', import.meta.url));
 const outDir = path.join(repoRoot, 'test-output', 'browser');
@@ -131,6 +133,43 @@ describe.skipIf(missing !== null)(`HTML report in Chromium${skipNote(missing)}`,
     }
     await page.screenshot({ path: path.join(shotDir, 'overview.png') });
     expect(written.filter((f) => existsSync(f)).length).toBe(result.models.length);
+    await page.close();
+  });
+
+  it('draws the base commit curve of a model the pull request changed, and screenshots it', async () => {
+    // The action's test repository: its pull request raises `wide` from degree 2 to 3.
+    const fixture = makeFixture();
+    const settings = { root: path.join(fixture.workspace, 'ml'), config: 'fitgate.yml', configExplicit: false, descriptors: [], failOn: 'fail' as const };
+    const options = await evaluateBase(settings, fixture.baseSha, { fetchHint: ACTION_FETCH_HINT });
+    const pr = await runPipeline(settings, createFsRepository(settings.root), { ...options, jobs: 1 });
+    const file = path.join(outDir, 'pull-request.html');
+    await writeFile(file, formatHtml(pr));
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await page.goto(pathToFileURL(file).href, { waitUntil: 'load' });
+    const i = pr.models.findIndex((m) => m.name === 'wide');
+    const chart = page.locator(`section#model-${i + 1} svg[data-chart="fit-curve"]`);
+    // Drawn at a real size inside the plot, dashed, and named in the legend.
+    const drawn = await chart.locator('path.base-curve').evaluate((e) => {
+      const r = e.getBoundingClientRect();
+      return { w: r.width, h: r.height, dash: getComputedStyle(e).strokeDasharray, commit: e.getAttribute('data-commit') };
+    });
+    expect(drawn.w).toBeGreaterThan(100);
+    expect(drawn.h).toBeGreaterThan(5);
+    expect(drawn.dash).toMatch(/^5(px)?,? 4(px)?$/);
+    expect(drawn.commit).toBe(fixture.baseSha.slice(0, 7));
+    const labels = await chart.locator('g.legend text').allTextContents();
+    expect(labels.at(-1)).toBe('base commit');
+    // The legend's last label ends inside the picture.
+    const inside = await chart.evaluate((svg) => {
+      const texts = svg.querySelectorAll('g.legend text');
+      return texts[texts.length - 1].getBoundingClientRect().right <= svg.getBoundingClientRect().right;
+    });
+    expect(inside).toBe(true);
+    // Models the pull request did not change have no base curve.
+    expect(await page.locator('path.base-curve').count()).toBe(1);
+    const shot = path.join(shotDir, 'base-commit-wide.png');
+    await chart.screenshot({ path: shot });
+    expect(existsSync(shot)).toBe(true);
     await page.close();
   });
 });

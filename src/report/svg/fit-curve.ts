@@ -5,6 +5,7 @@
  */
 import { formatNumber } from '../../core/format.js';
 import type { ChartData, FitCurveData } from '../../result/chart-types.js';
+import { baseCurveLegend, baseCurveNote, baseCurvePath } from './base-curve.js';
 import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, LEGEND_BAND, LEGEND_HOLDOUT, LEGEND_TRAIN, legendLine, legendRegion } from './palette.js';
 import { marks, pointData, pointNote } from './points.js';
@@ -24,10 +25,10 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
   const { x0, y0, x1, y1 } = plotArea();
   const trainX = chart.train.x[0] ?? [];
   const holdoutX = chart.holdout.x[0] ?? [];
-  const xDomain = extent(fit.x, trainX, holdoutX) ?? [0, 1];
+  const xDomain = extent(fit.x, trainX, holdoutX, fit.base?.x ?? []) ?? [0, 1];
   const data = extent(chart.train.actual, chart.holdout.actual, fit.band) ?? [0, 1];
   const span = Math.max(data[1] - data[0], 1e-12);
-  const curve = extent(fit.y) ?? data;
+  const curve = extent(fit.y, fit.base?.y ?? []) ?? data;
   const yDomain = pad([Math.max(curve[0], data[0] - CURVE_HEADROOM * span), Math.min(curve[1], data[1] + CURVE_HEADROOM * span)].map((v, i) =>
     i === 0 ? Math.min(v, data[0]) : Math.max(v, data[1]),
   ) as [number, number]);
@@ -52,6 +53,7 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
   body.push(
     `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`,
   );
+  if (fit.base) body.push(baseCurvePath(fit.base, sx, sy));
   body.push(`<path class="curve" d="${linePath(fit.x, fit.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`);
   const a = marks('train', trainX, chart.train.actual, sx, sy);
   const b = marks('holdout', holdoutX, chart.holdout.actual, sx, sy);
@@ -64,13 +66,14 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
     { mark: LEGEND_BAND, label: 'observed band' },
   ];
   if (fit.regions.length > 0) legend.push({ mark: legendRegion(id), label: 'leaves band' });
+  if (fit.base) legend.push(baseCurveLegend());
   const where = fit.regions.length
     ? ` The curve leaves the band ${fit.regions.map((r) => `${r.side} it from ${formatNumber(r.from)} to ${formatNumber(r.to)}`).join('; ')}.`
     : ' The curve stays inside the band.';
   const desc =
     `Fitted ${chart.target} against ${fit.input} from ${formatNumber(fit.x[0])} to ${formatNumber(fit.x[fit.x.length - 1])} ` +
     `(training range ${formatNumber(fit.range[0])} to ${formatNumber(fit.range[1])}), with ${a.drawn} training rows as filled circles and ${b.drawn} hold-out rows as hollow squares. ` +
-    `Observed target band ${formatNumber(blo)} to ${formatNumber(bhi)}.${where}${pointNote(chart.train, chart.holdout, a, b)}`;
+    `Observed target band ${formatNumber(blo)} to ${formatNumber(bhi)}.${where}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
   return frame({
     id,
     kind: 'fit-curve',

@@ -151,8 +151,10 @@ export function frame(spec: FrameSpec): string {
     );
   }
   if (spec.overlay) parts.push(spec.overlay);
-  // Legend in one row above the plot area.
-  let lx = x0;
+  // Legend in one row above the plot area; a row too long for it starts further left (into the
+  // margin of the y axis, whose label sits lower down).
+  const natural = spec.legend.reduce((w, item) => w + 28 + item.label.length * 6.1, 0);
+  let lx = x0 + natural > width - MARGIN.right ? Math.max(MARGIN.right, width - MARGIN.right - natural) : x0;
   const legend: string[] = [];
   for (const item of spec.legend) {
     legend.push(`<g transform="translate(${px(lx)} 9)">${item.mark}<text x="19" y="11" font-size="11" fill="#333">${escapeHtml(item.label)}</text></g>`);
