@@ -29242,276 +29242,21 @@ module.exports = {
 
 /***/ }),
 
-/***/ 7416:
+/***/ 4823:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  MZ: () => (/* binding */ ACTION_FETCH_HINT),
-  D0: () => (/* binding */ evaluateBase)
-});
-
-// UNUSED EXPORTS: CLI_FETCH_HINT
-
-;// CONCATENATED MODULE: external "node:fs/promises"
-const promises_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
-// EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __nccwpck_require__(6760);
-var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
-// EXTERNAL MODULE: ./src/core/errors.ts
-var errors = __nccwpck_require__(4296);
-// EXTERNAL MODULE: ./src/run/pipeline.ts + 32 modules
-var pipeline = __nccwpck_require__(9200);
-;// CONCATENATED MODULE: external "node:child_process"
-const external_node_child_process_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
-// EXTERNAL MODULE: ./src/repo/glob-pattern.ts
-var glob_pattern = __nccwpck_require__(955);
-// EXTERNAL MODULE: ./src/repo/repo-path.ts
-var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/repo/git-repository.ts
-/**
- * A {@link RepoReader} over one git commit: files are read from the commit's tree with
- * `git cat-file`, never from the working tree. The reader's root may be a sub-folder of the
- * git repository (the action's `working-directory`); nothing outside that folder is read.
- * Symbolic links are resolved inside the commit's tree only: a link whose target leaves the
- * root is refused like a `..` path.
- */
-
-
-
-
-
-/** Largest number of links followed for one path (as Linux's MAXSYMLINKS). */
-const MAX_LINKS = 40;
-/**
- * Runs git with arguments (never through a shell) and returns standard output as bytes.
- * @throws Error with git's standard error when git exits non-zero
- */
-function runGit(cwd, args, maxBuffer = 64 * 1024 * 1024) {
-    return new Promise((resolve, reject) => {
-        (0,external_node_child_process_namespaceObject.execFile)('git', args, { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
-            if (error) {
-                const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
-                reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
-            }
-            else
-                resolve(stdout);
-        });
-    });
-}
-/**
- * The full SHA of a revision when it names a commit present in the local object store, else null
- * (unknown revision, or a shallow clone without it).
- * @param cwd a folder inside the git work tree
- * @param revision a SHA, branch, tag or expression such as `HEAD^1`
- */
-async function tryResolveCommit(cwd, revision) {
-    if (revision.startsWith('-'))
-        return null;
-    try {
-        const out = await runGit(cwd, ['rev-parse', '--verify', '--quiet', '--end-of-options', `${revision}^{commit}`]);
-        const sha = out.toString('utf8').trim();
-        return /^[0-9a-f]{40,64}$/.test(sha) ? sha : null;
-    }
-    catch {
-        return null;
-    }
-}
-/**
- * The top folder of the git work tree that contains `dir` (absolute), or null when `dir` is not
- * inside a git work tree.
- */
-async function tryGitTopLevel(dir) {
-    try {
-        const out = await runGit(dir, ['rev-parse', '--show-toplevel']);
-        const top = out.toString('utf8').trim();
-        return top === '' ? null : top;
-    }
-    catch {
-        return null;
-    }
-}
-/** Normalises a repository-relative path; null when it is absolute or leaves the root. */
-function normalise(p) {
-    try {
-        return (0,repo_path/* normaliseRepoPath */.Gn)(p);
-    }
-    catch {
-        return null;
-    }
-}
-/** Parses `git ls-tree -r -l -z --full-tree` output into entries by path (relative to `prefix`). */
-function parseTree(out, prefix) {
-    const entries = new Map();
-    const lead = prefix === '' ? '' : `${prefix}/`;
-    for (const record of out.toString('utf8').split('\0')) {
-        if (record === '')
-            continue;
-        const tab = record.indexOf('\t');
-        const [mode, , oid, size] = record.slice(0, tab).split(/ +/);
-        const full = record.slice(tab + 1);
-        if (!full.startsWith(lead))
-            continue;
-        const rel = full.slice(lead.length);
-        const kind = mode === '120000' ? 'link' : mode === '100644' || mode === '100755' ? 'file' : 'other';
-        entries.set(rel, { kind, oid, size: Number(size) || 0 });
-    }
-    return entries;
-}
-/**
- * A reader of the files of one commit under `prefix`. The tree is listed once, on first use.
- * @param options git folder, commit and root prefix
- */
-function createGitRepository(options) {
-    const { cwd, commit } = options;
-    const prefix = normalise(options.prefix ?? '') ?? '';
-    const label = `base commit ${commit.slice(0, 7)}`;
-    let listing = null;
-    const tree = () => {
-        listing ??= runGit(cwd, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit], 1024 * 1024 * 1024).then((out) => parseTree(out, prefix));
-        return listing;
-    };
-    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
-    const missing = (file) => new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${label}; expected an existing file`, { file });
-    /**
-     * Follows links component by component inside the tree. Returns the final path and its entry
-     * (undefined when nothing is there), or null when a link leaves the root.
-     */
-    async function realPath(p) {
-        const entries = await tree();
-        let parts = p === '' ? [] : p.split('/');
-        let done = [];
-        let hops = 0;
-        while (parts.length > 0) {
-            const next = [...done, parts[0]].join('/');
-            const entry = entries.get(next);
-            if (entry?.kind === 'link') {
-                hops += 1;
-                if (hops > MAX_LINKS)
-                    return null;
-                const target = (await runGit(cwd, ['cat-file', 'blob', entry.oid])).toString('utf8');
-                const joined = target.startsWith('/') ? null : normalise(external_node_path_default().posix.join(done.join('/'), target));
-                if (joined === null)
-                    return null;
-                parts = [...(joined === '' ? [] : joined.split('/')), ...parts.slice(1)];
-                done = [];
-                continue;
-            }
-            done.push(parts[0]);
-            parts = parts.slice(1);
-        }
-        const final = done.join('/');
-        return { path: final, entry: entries.get(final) };
-    }
-    /** What `p` names (links followed inside the tree), with its entry when it is a file. */
-    async function kindOf(p) {
-        const n = normalise(p);
-        if (n === null)
-            throw outside(p, {}, p);
-        const real = await realPath(n);
-        if (real === null)
-            throw outside(p, {}, p);
-        const entry = real.entry;
-        if (entry?.kind === 'file')
-            return { kind: 'file', entry };
-        if (entry?.kind === 'other')
-            return { kind: 'special', entry: null };
-        // Not an entry of the tree: a folder (entries below it), a link that leads nowhere, or nothing.
-        const entries = await tree();
-        const below = real.path === '' ? '' : `${real.path}/`;
-        for (const key of entries.keys())
-            if (key.startsWith(below))
-                return { kind: 'folder', entry: null };
-        return { kind: real.path !== n || entries.get(n)?.kind === 'link' ? 'broken-link' : 'missing', entry: null };
-    }
-    /** The blob entry of a regular file at `p` (links followed), or an InputError. */
-    async function fileEntry(p) {
-        const { kind, entry } = await kindOf(p);
-        if (kind === 'missing')
-            throw missing(normalise(p) ?? p);
-        if (kind !== 'file' || entry === null)
-            throw (0,repo_path/* notAFileError */.V5)(kind === 'file' ? 'special' : kind, { file: p });
-        return entry;
-    }
-    /** Runs git for the bytes of a file; git's failure (a damaged object store) is `file-unreadable`. */
-    async function blob(p, args, maxBuffer) {
-        try {
-            return await runGit(cwd, args, maxBuffer);
-        }
-        catch (error) {
-            throw (0,repo_path/* unreadableError */.Sw)(error, { file: p });
-        }
-    }
-    return {
-        label,
-        async resolve(fromFile, target, where) {
-            const joined = (0,repo_path/* joinRepoPath */.Kp)(fromFile, target, { file: fromFile, ...where });
-            if ((await realPath(joined)) === null)
-                throw outside(fromFile, { file: fromFile, ...where }, target);
-            return joined;
-        },
-        async isFile(p) {
-            const n = normalise(p);
-            if (n === null)
-                return false;
-            const real = await realPath(n);
-            return real?.entry?.kind === 'file';
-        },
-        async entryKind(p) {
-            return (await kindOf(p)).kind;
-        },
-        async size(p) {
-            return (await fileEntry(p)).size;
-        },
-        async read(p) {
-            const entry = await fileEntry(p);
-            return new Uint8Array(await blob(p, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
-        },
-        async *stream(p, chunkBytes = 1024 * 1024) {
-            const entry = await fileEntry(p);
-            const child = (0,external_node_child_process_namespaceObject.spawn)('git', ['cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
-            const closed = new Promise((resolve, reject) => {
-                child.on('error', reject);
-                child.on('close', resolve);
-            });
-            let pending = [];
-            let pendingBytes = 0;
-            for await (const piece of child.stdout) {
-                pending.push(piece);
-                pendingBytes += piece.length;
-                if (pendingBytes >= chunkBytes) {
-                    yield new Uint8Array(Buffer.concat(pending));
-                    pending = [];
-                    pendingBytes = 0;
-                }
-            }
-            const code = await closed;
-            if (code !== 0)
-                throw (0,repo_path/* unreadableError */.Sw)({ code: `git cat-file exit status ${code}` }, { file: p });
-            if (pendingBytes > 0)
-                yield new Uint8Array(Buffer.concat(pending));
-        },
-        async glob(patterns) {
-            const compiled = (0,glob_pattern.compilePatterns)(patterns);
-            const entries = await tree();
-            const paths = [];
-            const notEntered = [];
-            for (const [p, entry] of entries) {
-                if (entry.kind === 'other')
-                    continue; // a submodule is a folder of another repository
-                if (compiled.matches(p))
-                    paths.push(p);
-                // A link a pattern would search below is never followed as a folder (as on disk).
-                if (entry.kind === 'link' && compiled.searchesBelow(p))
-                    notEntered.push(p);
-            }
-            return { paths: paths.sort(), notEntered: notEntered.sort() };
-        },
-    };
-}
-
-;// CONCATENATED MODULE: ./src/action/base-commit.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   D0: () => (/* binding */ evaluateBase),
+/* harmony export */   MZ: () => (/* binding */ ACTION_FETCH_HINT)
+/* harmony export */ });
+/* unused harmony export CLI_FETCH_HINT */
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1161);
+/* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4029);
 /**
  * Evaluates every model as it was on a base commit, read with git from that commit (settings
  * file, descriptors and data alike), so that the head run can compare with it. Used by the
@@ -29536,14 +29281,14 @@ const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`) or na
  */
 async function evaluateBase(settings, revision, options) {
     const short = /^[0-9a-f]{40,64}$/.test(revision) ? revision.slice(0, 7) : revision;
-    const top = await tryGitTopLevel(settings.root);
+    const top = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__/* .tryGitTopLevel */ .ZS)(settings.root);
     if (top === null)
         return { notes: [`base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`] };
-    const sha = await tryResolveCommit(settings.root, revision);
+    const sha = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__/* .tryResolveCommit */ .Fl)(settings.root, revision);
     if (sha === null)
         return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
-    const prefix = external_node_path_default().relative(await (0,promises_namespaceObject.realpath)(top), await (0,promises_namespaceObject.realpath)(settings.root)).split((external_node_path_default()).sep).join('/');
-    const repo = createGitRepository({ cwd: settings.root, commit: sha, prefix });
+    const prefix = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(top), await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(settings.root)).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/');
+    const repo = (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__/* .createGitRepository */ .Zd)({ cwd: settings.root, commit: sha, prefix });
     try {
         // Explicitly named descriptors that do not exist at the base are new in the head.
         const descriptors = [];
@@ -29554,7 +29299,7 @@ async function evaluateBase(settings, revision, options) {
         if (settings.descriptors.length === 0 || descriptors.length > 0) {
             const configThere = await repo.isFile(settings.config);
             if (configThere || !settings.configExplicit) {
-                const base = await (0,pipeline/* runPipeline */.a)({ ...settings, descriptors }, repo);
+                const base = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_3__/* .runPipeline */ .a)({ ...settings, descriptors }, repo);
                 for (const m of base.models)
                     baseline.set(m.name, m);
             }
@@ -29562,7 +29307,7 @@ async function evaluateBase(settings, revision, options) {
         return { baseline, baseCommit: sha, notes: [] };
     }
     catch (error) {
-        return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,errors/* errorMessage */.gJ)(error)}); models are not compared with it in this run.`] };
+        return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .errorMessage */ .gJ)(error)}); models are not compared with it in this run.`] };
     }
 }
 
@@ -29573,8 +29318,10 @@ async function evaluateBase(settings, revision, options) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   l: () => (/* binding */ upsertComment),
-/* harmony export */   s: () => (/* binding */ createCommentApi)
+/* harmony export */   Qi: () => (/* binding */ createOctokit),
+/* harmony export */   lB: () => (/* binding */ upsertComment),
+/* harmony export */   nG: () => (/* binding */ httpStatus),
+/* harmony export */   sE: () => (/* binding */ createCommentApi)
 /* harmony export */ });
 /* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(157);
 /* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
@@ -29598,15 +29345,13 @@ function httpStatus(error) {
     return null;
 }
 /**
- * The REST API behind {@link CommentApi}, through `@actions/github`'s Octokit (base URL from
- * `GITHUB_API_URL`, proxy from the runner's settings). The token is only handed to Octokit.
- * Octokit's own warnings and errors (some of them quote a response's headers) never reach the
- * console: they go to `log`, cut and cleaned with {@link quoteServerText}.
- * @param token a token with `pull-requests: write` (or `issues: write`)
- * @param ref the pull request
- * @param log where Octokit's warnings and errors go, one cleaned line each; default: dropped
+ * `@actions/github`'s Octokit (base URL from `GITHUB_API_URL`, proxy from the runner's settings)
+ * whose own warnings and errors never reach the console: they go to `log`, one line each, cut and
+ * cleaned with {@link quoteServerText}.
+ * @param token the token (only handed to Octokit)
+ * @param log where Octokit's warnings and errors go
  */
-function createCommentApi(token, ref, log = () => { }) {
+function createOctokit(token, log) {
     const say = (message) => log((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .quoteServerText */ .h3)(String(message), MAX_LIBRARY_LINE));
     const quiet = { debug: () => { }, info: () => { }, warn: say, error: say };
     const octokit = _actions_github__WEBPACK_IMPORTED_MODULE_0__/* .getOctokit */ .Q(token, { baseUrl: process.env.GITHUB_API_URL || 'https://api.github.com', log: quiet });
@@ -29616,6 +29361,19 @@ function createCommentApi(token, ref, log = () => { }) {
     octokit.hook.before('request', (options) => {
         options.request = { ...options.request, log: quiet };
     });
+    return octokit;
+}
+/**
+ * The REST API behind {@link CommentApi}, through `@actions/github`'s Octokit (base URL from
+ * `GITHUB_API_URL`, proxy from the runner's settings). The token is only handed to Octokit.
+ * Octokit's own warnings and errors (some of them quote a response's headers) never reach the
+ * console: they go to `log`, cut and cleaned with {@link quoteServerText}.
+ * @param token a token with `pull-requests: write` (or `issues: write`)
+ * @param ref the pull request
+ * @param log where Octokit's warnings and errors go, one cleaned line each; default: dropped
+ */
+function createCommentApi(token, ref, log = () => { }) {
+    const octokit = createOctokit(token, log);
     const where = { owner: ref.owner, repo: ref.repo, issue_number: ref.number };
     return {
         async list() {
@@ -29695,7 +29453,19 @@ function pullRequestOf(context) {
     if (!owner || !repo)
         return null;
     const sha = record(pr?.base)?.sha;
-    return { owner, repo, number, baseSha: typeof sha === 'string' && /^[0-9a-f]{40,64}$/.test(sha) ? sha : null };
+    const head = record(pr?.head);
+    const headSha = head?.sha;
+    const headRepo = record(head?.repo);
+    const baseRepo = record(record(pr?.base)?.repo);
+    const fromFork = typeof headRepo?.full_name === 'string' && typeof baseRepo?.full_name === 'string' ? headRepo.full_name !== baseRepo.full_name : headRepo?.fork === true;
+    return {
+        owner,
+        repo,
+        number,
+        baseSha: typeof sha === 'string' && /^[0-9a-f]{40,64}$/.test(sha) ? sha : null,
+        headSha: typeof headSha === 'string' && /^[0-9a-f]{40,64}$/.test(headSha) ? headSha : null,
+        fromFork,
+    };
 }
 
 
@@ -29792,6 +29562,435 @@ async function writeReport(result, dir, step) {
     const file = external_node_path_default().join(dir, slug === '' ? 'fitgate-report.json' : `fitgate-report-${slug}.json`);
     (0,safe_write/* writeFileSafely */.kv)(file, formatJson(result), { option: 'RUNNER_TEMP', within: [] });
     return file;
+}
+
+
+/***/ }),
+
+/***/ 3464:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  nQ: () => (/* binding */ createReviewApi),
+  K2: () => (/* binding */ hasSuggestions),
+  Vk: () => (/* binding */ repositoryPrefix),
+  uT: () => (/* binding */ reviewSuggestions)
+});
+
+// UNUSED EXPORTS: MAX_SUGGESTED_LINE, MAX_SUGGESTIONS, SUGGESTION_MARKER, parseSuggestionMarker, planSuggestions, suggestionBody, suggestionMarker, syncSuggestions
+
+// EXTERNAL MODULE: external "node:fs/promises"
+var promises_ = __nccwpck_require__(1455);
+// EXTERNAL MODULE: external "node:path"
+var external_node_path_ = __nccwpck_require__(6760);
+var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/repo/git-repository.ts + 1 modules
+var git_repository = __nccwpck_require__(4029);
+// EXTERNAL MODULE: ./src/report/escape.ts
+var report_escape = __nccwpck_require__(6412);
+// EXTERNAL MODULE: ./src/report/runner-commands.ts
+var runner_commands = __nccwpck_require__(673);
+// EXTERNAL MODULE: ./src/action/comment.ts
+var comment = __nccwpck_require__(1151);
+;// CONCATENATED MODULE: ./src/action/diff-lines.ts
+/**
+ * Which lines of a file's new side a pull request's diff shows, from the unified-diff `patch`
+ * the REST API gives for each changed file (list files of a pull request). A review comment can
+ * only be placed on such a line (side `RIGHT`): an added line or a context line of a hunk.
+ */
+/** Most patch lines read; the API itself leaves out the patch of very large files. */
+const MAX_PATCH_LINES = 100000;
+/** A hunk header: `@@ -a[,b] +c[,d] @@ optional section text`. */
+const HUNK = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,(\d+))? @@/;
+/**
+ * The new-side lines of a patch, by 1-based line number, with their text (without the leading
+ * `+` or space, and without a trailing carriage return). Removed lines (`-`) and
+ * `\ No newline at end of file` markers take no new-side line. Lines before the first hunk header
+ * (a `diff --git` preamble) are ignored; a hunk that claims more lines than it has simply ends.
+ * At most {@link MAX_PATCH_LINES} patch lines are read.
+ * @param patch the file's `patch` (may be empty: a binary file or a rename without change)
+ * @returns line number -> text, for every line a review comment may point at
+ */
+function diffLines(patch) {
+    const lines = new Map();
+    const rows = patch.split('\n', MAX_PATCH_LINES);
+    let next = -1;
+    let left = 0;
+    for (const row of rows) {
+        const header = HUNK.exec(row);
+        if (header) {
+            next = Number(header[1]);
+            left = header[2] === undefined ? 1 : Number(header[2]);
+            continue;
+        }
+        if (next < 0 || left <= 0)
+            continue;
+        const mark = row.charAt(0);
+        if (mark === '+' || mark === ' ') {
+            lines.set(next, row.slice(1).replace(/\r$/, ''));
+            next += 1;
+            left -= 1;
+        }
+        // '-' (old side only) and '\' (no newline at end of file) take no new-side line.
+    }
+    return lines;
+}
+
+// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
+var dist = __nccwpck_require__(8815);
+;// CONCATENATED MODULE: ./src/action/suggested-line.ts
+/**
+ * The descriptor line a suggestion replaces, rewritten: only the value of one key changes
+ * (`degree: 9` becomes `degree: 3`), the rest of the line stays byte for byte: indentation,
+ * flow-mapping style (`{ of: x, degree: 9 }`), spacing and trailing comments.
+ */
+
+/** Options of the YAML parser, as the descriptor loader reads descriptors (YAML 1.2, core schema). */
+const PARSE = { prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' };
+/** Line of an offset (1-based). */
+function lineOf(counter, offset) {
+    return counter.linePos(offset).line;
+}
+/** The plain numeric scalar value of `key` in `pair`, or null. */
+function numericValue(pair, key) {
+    if (!(0,dist/* isScalar */.jn)(pair.key) || pair.key.value !== key)
+        return null;
+    const v = pair.value;
+    if (!(0,dist/* isScalar */.jn)(v) || typeof v.value !== 'number' || v.type !== 'PLAIN' || v.tag !== undefined || !v.range)
+        return null;
+    return v;
+}
+/**
+ * Rewrites the value of `change.key` that belongs to the descriptor line `line`: either the key
+ * is on that line (`degree: 9`, `ridge: 0`, `{ of: x, degree: 9 }`), or the line holds the key of
+ * a mapping that contains it (`- polynomial:` with `degree: 9` on a line below). The value must be
+ * a plain number on one line, and exactly one such key may match. The new text is checked by
+ * parsing the whole file again: it must be valid YAML whose value at the same place is the new
+ * number.
+ * @param text the descriptor file's text
+ * @param line the line the suggestion points at (1-based)
+ * @param change the key and its new value
+ * @returns the line to replace and its new text, or null when the value cannot be found or
+ *   rewritten this way (e.g. `ridge` not written in the file)
+ */
+function rewriteSetting(text, line, change) {
+    if (!Number.isFinite(change.value))
+        return null;
+    const counter = new dist/* LineCounter */.HN();
+    const doc = (0,dist/* parseDocument */.Tp)(text, { ...PARSE, lineCounter: counter });
+    if (doc.errors.length > 0)
+        return null;
+    // Every pair `key: <number>` that is on the line or inside a mapping whose key is on the line.
+    const found = [];
+    (0,dist/* visit */.YR)(doc, {
+        Pair(_, pair, path) {
+            const value = numericValue(pair, change.key);
+            if (value === null)
+                return;
+            const onLine = (p) => (0,dist/* isPair */.tO)(p) && (0,dist/* isScalar */.jn)(p.key) && p.key.range !== undefined && p.key.range !== null && lineOf(counter, p.key.range[0]) === line;
+            if (onLine(pair) || path.some(onLine))
+                found.push(value);
+        },
+    });
+    if (found.length !== 1)
+        return null;
+    const [start, end] = found[0].range;
+    const at = lineOf(counter, start);
+    if (lineOf(counter, end) !== at)
+        return null;
+    const lines = text.split('\n');
+    const lineStart = counter.lineStarts[at - 1];
+    const before = lines[at - 1].replace(/\r$/, '');
+    const newValue = String(change.value);
+    const after = before.slice(0, start - lineStart) + newValue + before.slice(end - lineStart);
+    // The new file must parse, and hold the new number where the old one was.
+    const changed = [...lines.slice(0, at - 1), after, ...lines.slice(at)].join('\n');
+    const again = (0,dist/* parseDocument */.Tp)(changed, PARSE);
+    if (again.errors.length > 0)
+        return null;
+    let same = false;
+    (0,dist/* visit */.YR)(again, {
+        Scalar(_, node) {
+            if (node.range && node.range[0] === start && node.value === change.value)
+                same = true;
+        },
+    });
+    if (!same || (0,dist/* isMap */.jh)(again.contents) === false)
+        return null;
+    return { line: at, before, after };
+}
+
+;// CONCATENATED MODULE: ./src/action/review-suggestions.ts
+/**
+ * The reviewer's view: a check that proposes one new value for a descriptor setting (the
+ * `complexity` check's `degree 3`) becomes one pull-request review comment holding a
+ * ` ```suggestion ` block that replaces that descriptor line, so that the author applies it in
+ * one click. Only lines in the pull request's diff can take one. Each comment carries a hidden
+ * marker (model and check); later runs find it again and update it in place, never post a second.
+ *
+ * What happens to comments of earlier runs (oldest first, ours only, found by the marker):
+ * - live (GitHub still places it on a line) on the same file and line as this run's suggestion
+ *   of the same model and check: updated when the body differs, else left alone;
+ * - live elsewhere, or a second one at the same place, or for a model this run checked that has
+ *   no suggestion any more: deleted, since one click would apply a change that no longer stands;
+ * - outdated (GitHub no longer places it: the lines around it changed): left as it is, folded
+ *   away by GitHub with its replies;
+ * - for a model this run did not check (another settings file, a model that could not be
+ *   checked, a renamed model): left as it is.
+ */
+
+
+
+
+
+
+
+
+/** Start of the hidden marker of a review suggestion. */
+const SUGGESTION_MARKER = '<!-- fitgate-suggestion';
+/** Most review suggestions written in one run (one per model and check; more are left out with one note). */
+const MAX_SUGGESTIONS = 50;
+/** Longest descriptor line put in a suggestion, in characters (longer lines get none). */
+const MAX_SUGGESTED_LINE = 400;
+/** Most changed files and review comments read (the REST API lists at most 3,000 files). */
+const MAX_LISTED = 3000;
+/**
+ * {@link ReviewApi} through `@actions/github`'s Octokit (see {@link createOctokit}).
+ * @param token a token with `pull-requests: write`
+ * @param ref the pull request
+ * @param log where Octokit's own warnings go (one cleaned line each)
+ */
+function createReviewApi(token, ref, log = () => { }) {
+    const octokit = (0,comment/* createOctokit */.Qi)(token, log);
+    const where = { owner: ref.owner, repo: ref.repo };
+    const pull = { ...where, pull_number: ref.number };
+    return {
+        async files() {
+            const all = [];
+            for await (const page of octokit.paginate.iterator(octokit.rest.pulls.listFiles, { ...pull, per_page: 100 })) {
+                for (const f of page.data)
+                    all.push({ filename: f.filename, ...(typeof f.patch === 'string' ? { patch: f.patch } : {}) });
+                if (all.length >= MAX_LISTED)
+                    break;
+            }
+            return all;
+        },
+        async comments() {
+            const all = [];
+            for await (const page of octokit.paginate.iterator(octokit.rest.pulls.listReviewComments, { ...pull, per_page: 100 })) {
+                for (const c of page.data)
+                    all.push({ id: c.id, body: c.body ?? '', path: c.path, line: typeof c.line === 'number' ? c.line : null });
+                if (all.length >= MAX_LISTED)
+                    break;
+            }
+            return all;
+        },
+        async create(c) {
+            await octokit.rest.pulls.createReviewComment({
+                ...pull,
+                body: c.body,
+                path: c.path,
+                line: c.line,
+                side: 'RIGHT',
+                commit_id: c.commit,
+            });
+        },
+        async update(id, body) {
+            await octokit.rest.pulls.updateReviewComment({ ...where, comment_id: id, body });
+        },
+        async remove(id) {
+            await octokit.rest.pulls.deleteReviewComment({ ...where, comment_id: id });
+        },
+    };
+}
+/** Hidden marker of one model's check: the model name percent-encoded (no `-` either, so never `--`). */
+function suggestionMarker(model, check) {
+    const name = encodeURIComponent(model).replace(/-/g, '%2D');
+    return `${SUGGESTION_MARKER} model=${name} check=${check.replace(/[^a-z0-9]/g, '_')} -->`;
+}
+/** Model and check of a marked comment body, or null when it carries no marker of ours. */
+function parseSuggestionMarker(body) {
+    const m = /<!-- fitgate-suggestion model=(\S+) check=(\S+) -->/.exec(body);
+    if (!m)
+        return null;
+    try {
+        return { model: decodeURIComponent(m[1]), check: m[2] };
+    }
+    catch {
+        return null;
+    }
+}
+/** A fence of backticks longer than any run of backticks in `text` (at least three). */
+function fence(text) {
+    let longest = 0;
+    for (const run of text.match(/`+/g) ?? [])
+        longest = Math.max(longest, run.length);
+    return '`'.repeat(Math.max(3, longest + 1));
+}
+/** The comment body: marker, one sentence, the suggestion block. */
+function suggestionBody(model, check, text, after) {
+    const name = [...model].length > 80 ? `${[...model].slice(0, 79).join('')}…` : model;
+    const f = fence(after);
+    return `${suggestionMarker(model, check)}\n**fitgate \`${check}\`** (model ${(0,report_escape/* escapeMarkdown */.FV)(name)}): ${(0,report_escape/* escapeMarkdown */.FV)(text)}.\n\n${f}suggestion\n${after}\n${f}\n`;
+}
+/**
+ * The fitgate root's path relative to the top of its git work tree, with `/` (`''` at the top):
+ * what turns a descriptor path of the Result into a path of the pull request's diff.
+ * @param root the fitgate root (a real path)
+ * @param fallback used when git cannot tell (the root relative to the workspace)
+ */
+async function repositoryPrefix(root, fallback) {
+    const top = await (0,git_repository/* tryGitTopLevel */.ZS)(root);
+    if (top === null)
+        return fallback;
+    try {
+        return external_node_path_default().relative(await (0,promises_.realpath)(top), await (0,promises_.realpath)(root))
+            .split((external_node_path_default()).sep)
+            .join('/');
+    }
+    catch {
+        return fallback;
+    }
+}
+/** The suggestions of a Result that name one new value (the checks' `suggestion.change`). */
+function hasSuggestions(result) {
+    return result.models.some((m) => m.verdict !== 'error' && m.checks.some((c) => c.suggestion?.change !== undefined));
+}
+/**
+ * Turns the Result's one-value suggestions into review suggestions on lines of the diff: reads
+ * each descriptor from the checkout, rewrites the value ({@link rewriteSetting}), and keeps it
+ * when that line is in the diff and the diff's text of the line is the checkout's (a checkout
+ * that differs from the head commit there gets no suggestion).
+ * @param result the head run's Result
+ * @param files the pull request's changed files
+ * @param source where the descriptors are
+ */
+async function planSuggestions(result, files, source) {
+    const diff = new Map();
+    for (const f of files)
+        if (f.patch !== undefined)
+            diff.set(f.filename, diffLines(f.patch));
+    const wanted = [];
+    const skipped = [];
+    const checked = new Set();
+    for (const model of result.models) {
+        if (model.verdict === 'error')
+            continue;
+        checked.add(model.name);
+        for (const check of model.checks) {
+            const s = check.suggestion;
+            if (s?.change === undefined)
+                continue;
+            const path = source.prefix === '' ? model.descriptor : `${source.prefix}/${model.descriptor}`;
+            const lines = diff.get(path);
+            const quoted = (0,runner_commands/* quoteServerText */.h3)(model.name);
+            if (lines === undefined)
+                continue;
+            let text;
+            try {
+                text = await source.read(model.descriptor);
+            }
+            catch {
+                skipped.push(`${quoted}: the descriptor could not be read again for the review suggestion`);
+                continue;
+            }
+            const rewritten = rewriteSetting(text, s.line, s.change);
+            if (rewritten === null) {
+                if (lines.has(s.line))
+                    skipped.push(`${quoted}: no review suggestion for "${s.text.split(' (')[0]}": the value of \`${s.change.key}\` is not written as a plain number at line ${s.line}`);
+                continue;
+            }
+            const diffText = lines.get(rewritten.line);
+            if (diffText === undefined)
+                continue;
+            if (diffText !== rewritten.before) {
+                skipped.push(`${quoted}: no review suggestion: line ${rewritten.line} of the checkout differs from the pull request's head`);
+                continue;
+            }
+            if (rewritten.after.length > MAX_SUGGESTED_LINE) {
+                skipped.push(`${quoted}: no review suggestion: line ${rewritten.line} is longer than ${MAX_SUGGESTED_LINE} characters`);
+                continue;
+            }
+            wanted.push({
+                model: model.name,
+                check: check.id,
+                path,
+                line: rewritten.line,
+                before: rewritten.before,
+                after: rewritten.after,
+                body: suggestionBody(model.name, check.id, s.text, rewritten.after),
+            });
+        }
+    }
+    if (wanted.length > MAX_SUGGESTIONS) {
+        skipped.push(`${wanted.length - MAX_SUGGESTIONS} more review suggestions left out (at most ${MAX_SUGGESTIONS} a run)`);
+        wanted.length = MAX_SUGGESTIONS;
+    }
+    return { wanted, skipped, checked };
+}
+/**
+ * Brings the pull request's review suggestions of ours in line with `plan` (the rules are in
+ * this module's comment). Throws what the API throws.
+ * @param api the REST calls
+ * @param plan what this run suggests
+ * @param commit the pull request's head SHA (new comments are placed on it)
+ */
+async function syncSuggestions(api, plan, commit) {
+    const counts = { created: 0, updated: 0, unchanged: 0, deleted: 0 };
+    const key = (model, check) => JSON.stringify([model, check]);
+    const wanted = new Map(plan.wanted.map((w) => [key(w.model, w.check), { w, placed: false }]));
+    for (const c of await api.comments()) {
+        const marker = parseSuggestionMarker(c.body);
+        if (marker === null || c.line === null)
+            continue;
+        const entry = wanted.get(key(marker.model, marker.check));
+        if (entry && !entry.placed && c.path === entry.w.path && c.line === entry.w.line) {
+            entry.placed = true;
+            if (c.body === entry.w.body)
+                counts.unchanged += 1;
+            else {
+                await api.update(c.id, entry.w.body);
+                counts.updated += 1;
+            }
+        }
+        else if (entry || plan.checked.has(marker.model)) {
+            await api.remove(c.id);
+            counts.deleted += 1;
+        }
+    }
+    for (const { w, placed } of wanted.values()) {
+        if (placed)
+            continue;
+        await api.create({ body: w.body, path: w.path, line: w.line, commit });
+        counts.created += 1;
+    }
+    return counts;
+}
+/**
+ * Lists the changed files, plans the suggestions and syncs the review comments. Never throws:
+ * 401, 403 and 404 come back as `forbidden` (a token that may not write: a fork's), other
+ * failures as `failed`, each with the server's text cut and cleaned.
+ * @param api the REST calls
+ * @param result the head run's Result (the changed files are only listed when it has a one-value suggestion)
+ * @param source where the descriptors are
+ * @param commit the pull request's head SHA
+ */
+async function reviewSuggestions(api, result, source, commit) {
+    try {
+        // Without a suggestion the changed files are not needed, but earlier suggestions may have to go.
+        const plan = await planSuggestions(result, hasSuggestions(result) ? await api.files() : [], source);
+        const counts = await syncSuggestions(api, plan, commit);
+        return { kind: 'done', counts, skipped: plan.skipped };
+    }
+    catch (error) {
+        const status = (0,comment/* httpStatus */.nG)(error);
+        const message = (0,runner_commands/* quoteServerText */.h3)(error instanceof Error ? error.message : String(error));
+        if (status === 401 || status === 403 || status === 404)
+            return { kind: 'forbidden', status, message };
+        return { kind: 'failed', message: status === null ? message : `HTTP ${status}: ${message}` };
+    }
 }
 
 
@@ -30337,7 +30536,12 @@ const complexity_check = {
             line: sweep.line,
             metrics: { suggested_setting: chosen.label, suggested_cv_rmse: (0,result/* jsonNumber */.qj)(chosen.cvRmse) },
             detail,
-            suggestion: { text: `${chosen.label} (k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} now)`, line: sweep.line },
+            suggestion: {
+                text: `${chosen.label} (k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} now)`,
+                line: sweep.line,
+                // The value as the label rounds it (what a person would write): `degree 3`, `width 1.6`, `ridge 0.8`.
+                change: { key: sweep.kind, value: Number(chosen.label.slice(sweep.kind.length + 1)) },
+            },
         };
     },
 };
@@ -32661,7 +32865,7 @@ function readInputs(cwd = process.cwd()) {
 
 /***/ }),
 
-/***/ 6797:
+/***/ 574:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -32849,8 +33053,10 @@ function frame_frame(spec) {
     }
     if (spec.overlay)
         parts.push(spec.overlay);
-    // Legend in one row above the plot area.
-    let lx = x0;
+    // Legend in one row above the plot area; a row too long for it starts further left (into the
+    // margin of the y axis, whose label sits lower down).
+    const natural = spec.legend.reduce((w, item) => w + 28 + item.label.length * 6.1, 0);
+    let lx = x0 + natural > width - MARGIN.right ? Math.max(MARGIN.right, width - MARGIN.right - natural) : x0;
     const legend = [];
     for (const item of spec.legend) {
         legend.push(`<g transform="translate(${px(lx)} 9)">${item.mark}<text x="19" y="11" font-size="11" fill="#333">${(0,report_escape/* escapeHtml */.ZD)(item.label)}</text></g>`);
@@ -33138,6 +33344,34 @@ function cvCurveChart(sweep, options) {
     });
 }
 
+;// CONCATENATED MODULE: ./src/report/svg/base-curve.ts
+
+/** Colour of the base commit's curve: mid grey #6e6e6e (reads in greyscale; the dash tells it apart). */
+const BASE_CURVE_COLOUR = '#6e6e6e';
+/** Dash pattern of the base commit's curve. */
+const BASE_CURVE_DASH = '5 4';
+/** Legend label of the base commit's curve. */
+const BASE_CURVE_LABEL = 'base commit';
+/** The dashed path of the base curve (class `base-curve`, `data-commit` the short SHA). */
+function baseCurvePath(base, sx, sy) {
+    return `<path class="base-curve" data-commit="${shortSha(base.commit)}" d="${linePath(base.x, base.y, sx, sy)}" fill="none" stroke="${BASE_CURVE_COLOUR}" stroke-width="1.8" stroke-dasharray="${BASE_CURVE_DASH}" stroke-linejoin="round"/>`;
+}
+/** The legend entry of the base curve. */
+function baseCurveLegend() {
+    return {
+        mark: `<line x1="0" y1="7" x2="14" y2="7" stroke="${BASE_CURVE_COLOUR}" stroke-width="1.8" stroke-dasharray="${BASE_CURVE_DASH}"/>`,
+        label: BASE_CURVE_LABEL,
+    };
+}
+/** One sentence for the chart's description. */
+function baseCurveNote(base) {
+    return ` The dashed grey line is the same model fitted on the base commit ${shortSha(base.commit)}.`;
+}
+/** The first 7 hexadecimal digits of a SHA (other characters dropped, so it is safe in markup). */
+function shortSha(commit) {
+    return commit.replace(/[^0-9a-f]/gi, '').slice(0, 7);
+}
+
 ;// CONCATENATED MODULE: ./src/report/svg/points.ts
 
 /**
@@ -33205,6 +33439,7 @@ var units = __nccwpck_require__(3332);
 
 
 
+
 /** How far past the data the y axis may reach to show a swinging curve, in data spans. */
 const CURVE_HEADROOM = 0.6;
 /**
@@ -33217,10 +33452,10 @@ function fitCurveChart(chart, fit, options) {
     const { x0, y0, x1, y1 } = plotArea();
     const trainX = chart.train.x[0] ?? [];
     const holdoutX = chart.holdout.x[0] ?? [];
-    const xDomain = extent(fit.x, trainX, holdoutX) ?? [0, 1];
+    const xDomain = extent(fit.x, trainX, holdoutX, fit.base?.x ?? []) ?? [0, 1];
     const data = extent(chart.train.actual, chart.holdout.actual, fit.band) ?? [0, 1];
     const span = Math.max(data[1] - data[0], 1e-12);
-    const curve = extent(fit.y) ?? data;
+    const curve = extent(fit.y, fit.base?.y ?? []) ?? data;
     const yDomain = pad([Math.max(curve[0], data[0] - CURVE_HEADROOM * span), Math.min(curve[1], data[1] + CURVE_HEADROOM * span)].map((v, i) => i === 0 ? Math.min(v, data[0]) : Math.max(v, data[1])));
     const sx = linearScale(xDomain, [x0, x1]);
     const sy = linearScale(yDomain, [y1, y0]);
@@ -33237,6 +33472,8 @@ function fitCurveChart(chart, fit, options) {
     body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`);
     // Training range edges: the curve past them is extrapolation.
     body.push(`<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`);
+    if (fit.base)
+        body.push(baseCurvePath(fit.base, sx, sy));
     body.push(`<path class="curve" d="${linePath(fit.x, fit.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`);
     const a = marks('train', trainX, chart.train.actual, sx, sy);
     const b = marks('holdout', holdoutX, chart.holdout.actual, sx, sy);
@@ -33249,12 +33486,14 @@ function fitCurveChart(chart, fit, options) {
     ];
     if (fit.regions.length > 0)
         legend.push({ mark: legendRegion(id), label: 'leaves band' });
+    if (fit.base)
+        legend.push(baseCurveLegend());
     const where = fit.regions.length
         ? ` The curve leaves the band ${fit.regions.map((r) => `${r.side} it from ${(0,format/* formatNumber */.Z)(r.from)} to ${(0,format/* formatNumber */.Z)(r.to)}`).join('; ')}.`
         : ' The curve stays inside the band.';
     const desc = `Fitted ${chart.target} against ${fit.input} from ${(0,format/* formatNumber */.Z)(fit.x[0])} to ${(0,format/* formatNumber */.Z)(fit.x[fit.x.length - 1])} ` +
         `(training range ${(0,format/* formatNumber */.Z)(fit.range[0])} to ${(0,format/* formatNumber */.Z)(fit.range[1])}), with ${a.drawn} training rows as filled circles and ${b.drawn} hold-out rows as hollow squares. ` +
-        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${pointNote(chart.train, chart.holdout, a, b)}`;
+        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
     return frame_frame({
         id,
         kind: 'fit-curve',
@@ -33281,6 +33520,7 @@ function fitCurveChart(chart, fit, options) {
 
 
 
+
 /**
  * Renders one partial curve.
  * @param chart the model's chart data
@@ -33291,8 +33531,8 @@ function partialCurveChart(chart, curve, options) {
     const { x0, y0, x1, y1 } = plotArea();
     const c = chart.inputs.indexOf(curve.input);
     const rug = c >= 0 ? chart.train.x[c] : [];
-    const sx = linearScale(extent(curve.x, rug) ?? [0, 1], [x0, x1]);
-    const sy = linearScale(pad(extent(curve.y, chart.train.actual) ?? [0, 1]), [y1, y0]);
+    const sx = linearScale(extent(curve.x, rug, curve.base?.x ?? []) ?? [0, 1], [x0, x1]);
+    const sy = linearScale(pad(extent(curve.y, chart.train.actual, curve.base?.y ?? []) ?? [0, 1]), [y1, y0]);
     const ticks = [];
     for (const v of rug)
         if (v !== null)
@@ -33300,6 +33540,7 @@ function partialCurveChart(chart, curve, options) {
     const body = [
         `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(curve.range[0]))}" y1="${y0}" x2="${px(sx(curve.range[0]))}" y2="${y1}"/><line x1="${px(sx(curve.range[1]))}" y1="${y0}" x2="${px(sx(curve.range[1]))}" y2="${y1}"/></g>`,
         `<path class="rug" d="${ticks.join('')}" stroke="${COLOURS.train}" stroke-opacity="0.55" stroke-width="1"/>`,
+        curve.base ? baseCurvePath(curve.base, sx, sy) : '',
         `<path class="curve" d="${linePath(curve.x, curve.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
     ].join('');
     const others = Object.entries(curve.others)
@@ -33309,7 +33550,7 @@ function partialCurveChart(chart, curve, options) {
         id,
         kind: 'partial-curve',
         title: `Partial curve: ${chart.target} along ${curve.input}`,
-        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.`,
+        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${curve.base ? baseCurveNote(curve.base) : ''}`,
         x: sx,
         y: sy,
         xLabel: (0,units/* axisLabel */.M)(curve.input),
@@ -33318,6 +33559,7 @@ function partialCurveChart(chart, curve, options) {
         legend: [
             { mark: legendLine(COLOURS.curve), label: 'predicted, others at medians' },
             { mark: `<path d="M3 12V5M7 12V5M11 12V5" stroke="${COLOURS.train}" stroke-width="1"/>`, label: 'training values' },
+            ...(curve.base ? [baseCurveLegend()] : []),
         ],
         data: { input: curve.input, 'rug-count': ticks.length },
     });
@@ -35985,28 +36227,30 @@ function twoProductError(a, b, prod) {
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
 /* harmony import */ var _actions_core__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6257);
 /* harmony import */ var _actions_github__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(157);
-/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(7416);
+/* harmony import */ var _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4823);
 /* harmony import */ var _action_comment_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1151);
-/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_17__ = __nccwpck_require__(3566);
-/* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(5505);
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4296);
-/* harmony import */ var _entries_inputs_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(9939);
-/* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(2499);
-/* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(5280);
-/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(6797);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(9200);
-/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(9725);
-/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(4526);
-/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(856);
-/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(673);
-/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(5596);
-/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_16__ = __nccwpck_require__(5655);
+/* harmony import */ var _action_event_js__WEBPACK_IMPORTED_MODULE_18__ = __nccwpck_require__(3566);
+/* harmony import */ var _action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(3464);
+/* harmony import */ var _action_outcome_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5505);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(4296);
+/* harmony import */ var _entries_inputs_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(9939);
+/* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2499);
+/* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(5280);
+/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(574);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(1161);
+/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(9725);
+/* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4526);
+/* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(856);
+/* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(673);
+/* harmony import */ var _report_summary_js__WEBPACK_IMPORTED_MODULE_16__ = __nccwpck_require__(5596);
+/* harmony import */ var _report_text_js__WEBPACK_IMPORTED_MODULE_17__ = __nccwpck_require__(5655);
 /**
  * The action's entry: read the inputs, compare with the base commit on pull requests, run the
  * same pipeline as the CLI, hand the Result to the reporters (annotations, log, job summary,
  * comment), set the outputs, and fail the step exactly when the CLI would exit 1 or 2.
  * The only place that calls `core.setFailed`.
  */
+
 
 
 
@@ -36036,48 +36280,81 @@ function setOutputs(outputs) {
             _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(name, value);
     }
     catch (error) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz('runner-file', `could not write the step's outputs: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`, { key: 'GITHUB_OUTPUT' });
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .InputError */ .dz('runner-file', `could not write the step's outputs: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`, { key: 'GITHUB_OUTPUT' });
     }
 }
 /** Writes one notice, warning or error line of our own (message escaped, no runner command). */
 function say(level, message) {
-    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
+    process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .formatCommand */ .fE)({ level, title: 'fitgate', message })}\n`);
 }
 /** Fails the step with a message whose runner commands are broken (the toolkit escapes the rest). */
 function fail(message) {
-    _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__/* .defuseLegacyCommands */ .u5)(message));
+    _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setFailed */ .C1((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .defuseLegacyCommands */ .u5)(message));
+}
+/**
+ * Posts or updates the review suggestions (action/review-suggestions.ts); a fork's pull request
+ * or a token that may not write gets one notice, other failures one warning. Never fails the run.
+ */
+async function suggestOnDiff(result, inputs, pr) {
+    if (pr.fromFork) {
+        if (!(0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .hasSuggestions */ .K2)(result))
+            return;
+        say('notice', 'review suggestions are skipped: the pull request comes from a fork, whose token cannot write review comments. The result is unchanged.');
+        return;
+    }
+    if (!pr.headSha) {
+        _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq('review suggestions are skipped: the event names no head commit.');
+        return;
+    }
+    const api = (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .createReviewApi */ .nQ)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
+    const repo = (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__/* .createFsRepository */ .E)(inputs.settings.root);
+    const source = { prefix: await (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .repositoryPrefix */ .Vk)(inputs.settings.root, inputs.prefix), read: async (file) => new TextDecoder().decode(await repo.read(file)) };
+    const outcome = await (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .reviewSuggestions */ .uT)(api, result, source, pr.headSha);
+    if (outcome.kind === 'forbidden') {
+        say('notice', `review suggestions could not be written (HTTP ${outcome.status}): the token may not write review comments on this pull request (they need pull-requests: write). The result is unchanged.`);
+    }
+    else if (outcome.kind === 'failed') {
+        say('warning', `review suggestions could not be written: ${outcome.message}. The result is unchanged.`);
+    }
+    else {
+        const { created, updated, unchanged, deleted } = outcome.counts;
+        if (created + updated + unchanged + deleted > 0)
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq(`review suggestions: ${created} posted, ${updated} updated, ${unchanged} unchanged, ${deleted} removed`);
+        for (const line of outcome.skipped)
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .neutraliseLogLine */ .h4)(line));
+    }
 }
 async function run() {
     let prefix = '';
     try {
-        const inputs = (0,_entries_inputs_js__WEBPACK_IMPORTED_MODULE_6__/* .readInputs */ .Ko)();
+        const inputs = (0,_entries_inputs_js__WEBPACK_IMPORTED_MODULE_7__/* .readInputs */ .Ko)();
         // The runner hides the token in every later line of the log.
         if (inputs.token !== '')
             _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setSecret */ .Pq(inputs.token);
         prefix = inputs.prefix;
-        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_17__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
+        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_18__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
         // The base commit first, so that the head run can compare with it.
         const baseOptions = pr?.baseSha ? await (0,_action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .evaluateBase */ .D0)(inputs.settings, pr.baseSha, { fetchHint: _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .ACTION_FETCH_HINT */ .MZ }) : {};
-        const scale = { shard: inputs.shard, jobs: (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_7__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
-        const result = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_10__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_12__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
+        const scale = { shard: inputs.shard, jobs: (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_8__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
+        const result = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__/* .runPipeline */ .a)(inputs.settings, (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__/* .createFsRepository */ .E)(inputs.settings.root), { ...baseOptions, ...scale });
         // Reporters: annotations and log, JSON report, file reports, job summary, comment. A file
         // that is refused (a link, a folder leading out of the workspace) fails the step as bad
         // input once every other reporter has run; a write that fails is a warning.
-        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .formatAnnotations */ .MR)(result, { prefix }));
-        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_16__/* .formatText */ .v)(result).split('\n'))
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__/* .neutraliseLogLine */ .h4)(line));
+        process.stdout.write((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .formatAnnotations */ .MR)(result, { prefix }));
+        for (const line of (0,_report_text_js__WEBPACK_IMPORTED_MODULE_17__/* .formatText */ .v)(result).split('\n'))
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .info */ .pq((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .neutraliseLogLine */ .h4)(line));
         const refused = [];
         let report = '';
         try {
-            report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
+            report = await (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .writeReport */ .u5)(result, inputs.tempDir, process.env.GITHUB_ACTION);
         }
         catch (error) {
-            if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz && error.code === _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_11__/* .OUTPUT_REFUSED */ .LC)
+            if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .InputError */ .dz && error.code === _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__/* .OUTPUT_REFUSED */ .LC)
                 refused.push(error.describe());
             else
-                say('warning', `could not write the JSON report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+                say('warning', `could not write the JSON report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
         }
-        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_9__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn, within: [inputs.workspace], insideOnly: true });
+        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn, within: [inputs.workspace], insideOnly: true });
         for (const failure of files) {
             if (failure.refused)
                 refused.push(failure.message);
@@ -36087,32 +36364,41 @@ async function run() {
         for (const message of refused)
             say('error', `a report file was refused: ${message}`);
         try {
-            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_15__/* .formatSummary */ .kq)(result)).write();
+            await _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .summary */ .z.addRaw((0,_report_summary_js__WEBPACK_IMPORTED_MODULE_16__/* .formatSummary */ .kq)(result)).write();
         }
         catch (error) {
-            say('warning', `could not write the job summary: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+            say('warning', `could not write the job summary: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
         }
         if (inputs.comment && pr) {
             if (inputs.token === '')
                 say('notice', 'no github-token: the pull-request comment is skipped; the report is in the job summary.');
             else {
-                const api = (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .s)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
-                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .l)(api, (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_15__/* .formatComment */ .jw)(result));
+                const api = (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .createCommentApi */ .sE)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
+                const outcome = await (0,_action_comment_js__WEBPACK_IMPORTED_MODULE_3__/* .upsertComment */ .lB)(api, (0,_report_summary_js__WEBPACK_IMPORTED_MODULE_16__/* .formatComment */ .jw)(result));
                 if (outcome.kind === 'forbidden') {
                     say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
                 }
                 else if (outcome.kind === 'failed') {
                     say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
                 }
+                // Review suggestions on the descriptor lines of the diff (a forbidden comment said it all already).
+                if (outcome.kind !== 'forbidden') {
+                    try {
+                        await suggestOnDiff(result, inputs, pr);
+                    }
+                    catch (error) {
+                        say('warning', `review suggestions could not be written: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}. The result is unchanged.`);
+                    }
+                }
             }
         }
         // Outputs and the step's status (a refused report file counts as bad input, as the CLI's exit status 2).
         setOutputs({
-            [_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict]: refused.length > 0 ? 'error' : result.verdict,
-            [_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.failed]: String((0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failedCount */ .dD)(result, inputs.settings.failOn)),
-            [_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.report]: report,
+            [_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .OUTPUTS */ .py.verdict]: refused.length > 0 ? 'error' : result.verdict,
+            [_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .OUTPUTS */ .py.failed]: String((0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .failedCount */ .dD)(result, inputs.settings.failOn)),
+            [_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .OUTPUTS */ .py.report]: report,
         });
-        const failure = (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .failureMessage */ .oh)(result, inputs.settings.failOn);
+        const failure = (0,_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .failureMessage */ .oh)(result, inputs.settings.failOn);
         if (refused.length > 0)
             fail(`fitgate refused to write ${refused.length === 1 ? 'a report file' : `${refused.length} report files`} (see the errors above).${failure !== null ? ` ${failure}` : ''}`);
         else if (failure !== null)
@@ -36120,25 +36406,25 @@ async function run() {
     }
     catch (error) {
         try {
-            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_4__/* .OUTPUTS */ .py.verdict, 'error');
+            _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setOutput */ .uH(_action_outcome_js__WEBPACK_IMPORTED_MODULE_5__/* .OUTPUTS */ .py.verdict, 'error');
         }
         catch {
             // GITHUB_OUTPUT cannot take it: the error below is still the one to report.
         }
-        if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .InputError */ .dz) {
+        if (error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .InputError */ .dz) {
             if (error.location.file !== undefined)
-                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_13__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
+                process.stdout.write(`${(0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .formatCommand */ .fE)((0,_report_annotations_js__WEBPACK_IMPORTED_MODULE_14__/* .inputErrorAnnotation */ .cU)(error, prefix))}\n`);
             fail(`fitgate could not run: ${error.describe()}`);
         }
         else {
             if (error instanceof Error && error.stack)
-                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_14__/* .defuseLegacyCommands */ .u5)(error.stack));
-            fail(`fitgate failed unexpectedly: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_5__/* .errorMessage */ .gJ)(error)}`);
+                _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .debug */ .Yz((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__/* .defuseLegacyCommands */ .u5)(error.stack));
+            fail(`fitgate failed unexpectedly: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
         }
     }
 }
 // In a model worker thread (the bundle is one file, so workers load it too) the worker loop runs instead.
-if (!(0,_run_worker_role_js__WEBPACK_IMPORTED_MODULE_8__/* .isFitgateWorker */ .$)())
+if (!(0,_run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__/* .isFitgateWorker */ .$)())
     await run();
 
 __webpack_async_result__();
@@ -36348,6 +36634,275 @@ function outside(shown, where) {
 }
 function codeOf(error) {
     return error !== null && typeof error === 'object' && 'code' in error ? String(error.code) : undefined;
+}
+
+
+/***/ }),
+
+/***/ 4029:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  Zd: () => (/* binding */ createGitRepository),
+  ZS: () => (/* binding */ tryGitTopLevel),
+  Fl: () => (/* binding */ tryResolveCommit)
+});
+
+// UNUSED EXPORTS: runGit
+
+;// CONCATENATED MODULE: external "node:child_process"
+const external_node_child_process_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
+// EXTERNAL MODULE: external "node:path"
+var external_node_path_ = __nccwpck_require__(6760);
+var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/repo/glob-pattern.ts
+var glob_pattern = __nccwpck_require__(955);
+// EXTERNAL MODULE: ./src/repo/repo-path.ts
+var repo_path = __nccwpck_require__(3856);
+;// CONCATENATED MODULE: ./src/repo/git-repository.ts
+/**
+ * A {@link RepoReader} over one git commit: files are read from the commit's tree with
+ * `git cat-file`, never from the working tree. The reader's root may be a sub-folder of the
+ * git repository (the action's `working-directory`); nothing outside that folder is read.
+ * Symbolic links are resolved inside the commit's tree only: a link whose target leaves the
+ * root is refused like a `..` path.
+ */
+
+
+
+
+
+/** Largest number of links followed for one path (as Linux's MAXSYMLINKS). */
+const MAX_LINKS = 40;
+/**
+ * Runs git with arguments (never through a shell) and returns standard output as bytes.
+ * @throws Error with git's standard error when git exits non-zero
+ */
+function runGit(cwd, args, maxBuffer = 64 * 1024 * 1024) {
+    return new Promise((resolve, reject) => {
+        (0,external_node_child_process_namespaceObject.execFile)('git', args, { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
+            if (error) {
+                const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
+                reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
+            }
+            else
+                resolve(stdout);
+        });
+    });
+}
+/**
+ * The full SHA of a revision when it names a commit present in the local object store, else null
+ * (unknown revision, or a shallow clone without it).
+ * @param cwd a folder inside the git work tree
+ * @param revision a SHA, branch, tag or expression such as `HEAD^1`
+ */
+async function tryResolveCommit(cwd, revision) {
+    if (revision.startsWith('-'))
+        return null;
+    try {
+        const out = await runGit(cwd, ['rev-parse', '--verify', '--quiet', '--end-of-options', `${revision}^{commit}`]);
+        const sha = out.toString('utf8').trim();
+        return /^[0-9a-f]{40,64}$/.test(sha) ? sha : null;
+    }
+    catch {
+        return null;
+    }
+}
+/**
+ * The top folder of the git work tree that contains `dir` (absolute), or null when `dir` is not
+ * inside a git work tree.
+ */
+async function tryGitTopLevel(dir) {
+    try {
+        const out = await runGit(dir, ['rev-parse', '--show-toplevel']);
+        const top = out.toString('utf8').trim();
+        return top === '' ? null : top;
+    }
+    catch {
+        return null;
+    }
+}
+/** Normalises a repository-relative path; null when it is absolute or leaves the root. */
+function normalise(p) {
+    try {
+        return (0,repo_path/* normaliseRepoPath */.Gn)(p);
+    }
+    catch {
+        return null;
+    }
+}
+/** Parses `git ls-tree -r -l -z --full-tree` output into entries by path (relative to `prefix`). */
+function parseTree(out, prefix) {
+    const entries = new Map();
+    const lead = prefix === '' ? '' : `${prefix}/`;
+    for (const record of out.toString('utf8').split('\0')) {
+        if (record === '')
+            continue;
+        const tab = record.indexOf('\t');
+        const [mode, , oid, size] = record.slice(0, tab).split(/ +/);
+        const full = record.slice(tab + 1);
+        if (!full.startsWith(lead))
+            continue;
+        const rel = full.slice(lead.length);
+        const kind = mode === '120000' ? 'link' : mode === '100644' || mode === '100755' ? 'file' : 'other';
+        entries.set(rel, { kind, oid, size: Number(size) || 0 });
+    }
+    return entries;
+}
+/**
+ * A reader of the files of one commit under `prefix`. The tree is listed once, on first use.
+ * @param options git folder, commit and root prefix
+ */
+function createGitRepository(options) {
+    const { cwd, commit } = options;
+    const prefix = normalise(options.prefix ?? '') ?? '';
+    const label = `base commit ${commit.slice(0, 7)}`;
+    let listing = null;
+    const tree = () => {
+        listing ??= runGit(cwd, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit], 1024 * 1024 * 1024).then((out) => parseTree(out, prefix));
+        return listing;
+    };
+    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
+    const missing = (file) => new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${label}; expected an existing file`, { file });
+    /**
+     * Follows links component by component inside the tree. Returns the final path and its entry
+     * (undefined when nothing is there), or null when a link leaves the root.
+     */
+    async function realPath(p) {
+        const entries = await tree();
+        let parts = p === '' ? [] : p.split('/');
+        let done = [];
+        let hops = 0;
+        while (parts.length > 0) {
+            const next = [...done, parts[0]].join('/');
+            const entry = entries.get(next);
+            if (entry?.kind === 'link') {
+                hops += 1;
+                if (hops > MAX_LINKS)
+                    return null;
+                const target = (await runGit(cwd, ['cat-file', 'blob', entry.oid])).toString('utf8');
+                const joined = target.startsWith('/') ? null : normalise(external_node_path_default().posix.join(done.join('/'), target));
+                if (joined === null)
+                    return null;
+                parts = [...(joined === '' ? [] : joined.split('/')), ...parts.slice(1)];
+                done = [];
+                continue;
+            }
+            done.push(parts[0]);
+            parts = parts.slice(1);
+        }
+        const final = done.join('/');
+        return { path: final, entry: entries.get(final) };
+    }
+    /** What `p` names (links followed inside the tree), with its entry when it is a file. */
+    async function kindOf(p) {
+        const n = normalise(p);
+        if (n === null)
+            throw outside(p, {}, p);
+        const real = await realPath(n);
+        if (real === null)
+            throw outside(p, {}, p);
+        const entry = real.entry;
+        if (entry?.kind === 'file')
+            return { kind: 'file', entry };
+        if (entry?.kind === 'other')
+            return { kind: 'special', entry: null };
+        // Not an entry of the tree: a folder (entries below it), a link that leads nowhere, or nothing.
+        const entries = await tree();
+        const below = real.path === '' ? '' : `${real.path}/`;
+        for (const key of entries.keys())
+            if (key.startsWith(below))
+                return { kind: 'folder', entry: null };
+        return { kind: real.path !== n || entries.get(n)?.kind === 'link' ? 'broken-link' : 'missing', entry: null };
+    }
+    /** The blob entry of a regular file at `p` (links followed), or an InputError. */
+    async function fileEntry(p) {
+        const { kind, entry } = await kindOf(p);
+        if (kind === 'missing')
+            throw missing(normalise(p) ?? p);
+        if (kind !== 'file' || entry === null)
+            throw (0,repo_path/* notAFileError */.V5)(kind === 'file' ? 'special' : kind, { file: p });
+        return entry;
+    }
+    /** Runs git for the bytes of a file; git's failure (a damaged object store) is `file-unreadable`. */
+    async function blob(p, args, maxBuffer) {
+        try {
+            return await runGit(cwd, args, maxBuffer);
+        }
+        catch (error) {
+            throw (0,repo_path/* unreadableError */.Sw)(error, { file: p });
+        }
+    }
+    return {
+        label,
+        async resolve(fromFile, target, where) {
+            const joined = (0,repo_path/* joinRepoPath */.Kp)(fromFile, target, { file: fromFile, ...where });
+            if ((await realPath(joined)) === null)
+                throw outside(fromFile, { file: fromFile, ...where }, target);
+            return joined;
+        },
+        async isFile(p) {
+            const n = normalise(p);
+            if (n === null)
+                return false;
+            const real = await realPath(n);
+            return real?.entry?.kind === 'file';
+        },
+        async entryKind(p) {
+            return (await kindOf(p)).kind;
+        },
+        async size(p) {
+            return (await fileEntry(p)).size;
+        },
+        async read(p) {
+            const entry = await fileEntry(p);
+            return new Uint8Array(await blob(p, ['cat-file', 'blob', entry.oid], Math.max(entry.size + 1024, 1024 * 1024)));
+        },
+        async *stream(p, chunkBytes = 1024 * 1024) {
+            const entry = await fileEntry(p);
+            const child = (0,external_node_child_process_namespaceObject.spawn)('git', ['cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
+            const closed = new Promise((resolve, reject) => {
+                child.on('error', reject);
+                child.on('close', resolve);
+            });
+            let pending = [];
+            let pendingBytes = 0;
+            for await (const piece of child.stdout) {
+                pending.push(piece);
+                pendingBytes += piece.length;
+                if (pendingBytes >= chunkBytes) {
+                    yield new Uint8Array(Buffer.concat(pending));
+                    pending = [];
+                    pendingBytes = 0;
+                }
+            }
+            const code = await closed;
+            if (code !== 0)
+                throw (0,repo_path/* unreadableError */.Sw)({ code: `git cat-file exit status ${code}` }, { file: p });
+            if (pendingBytes > 0)
+                yield new Uint8Array(Buffer.concat(pending));
+        },
+        async glob(patterns) {
+            const compiled = (0,glob_pattern.compilePatterns)(patterns);
+            const entries = await tree();
+            const paths = [];
+            const notEntered = [];
+            for (const [p, entry] of entries) {
+                if (entry.kind === 'other')
+                    continue; // a submodule is a folder of another repository
+                if (compiled.matches(p))
+                    paths.push(p);
+                // A link a pattern would search below is never followed as a folder (as on disk).
+                if (entry.kind === 'link' && compiled.searchesBelow(p))
+                    notEntered.push(p);
+            }
+            return { paths: paths.sort(), notEntered: notEntered.sort() };
+        },
+    };
 }
 
 
@@ -37722,7 +38277,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 9200:
+/***/ 1161:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -42492,6 +43047,50 @@ function compareWithBase(metrics, baseline, commit) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/run/base-curves.ts
+/** True when two lists hold the same values in the same order. */
+function same(a, b) {
+    return a.length === b.length && a.every((v, i) => v === b[i]);
+}
+/** The base curve along the same input as `head`, or undefined when the base has none. */
+function baseOf(head, base, commit) {
+    if (!base || base.input !== head.input || base.x.length === 0)
+        return undefined;
+    return { commit, x: [...base.x], y: [...base.y] };
+}
+/**
+ * `charts` with the base commit's curves added (`fit.base`, `partials[i].base`, matched by input
+ * name), when the model changed: its design columns or coefficients differ from the base's, or
+ * a curve does. A model new in the pull request, one that could not be checked on the base, or
+ * one whose fit is the same gets no base curve. The head's charts are not modified.
+ * @param charts the head model's chart data
+ * @param head the head model's design columns and refit coefficients
+ * @param baseline the same model on the base commit, or null
+ * @param commit full SHA of the base commit
+ */
+function withBaseCurves(charts, head, baseline, commit) {
+    const base = baseline?.charts;
+    if (!base || baseline.verdict === 'error')
+        return charts;
+    const curvesDiffer = (charts.fit !== null && base.fit !== null && !same(charts.fit.y, base.fit.y)) ||
+        charts.partials.some((p) => {
+            const b = base.partials.find((q) => q.input === p.input);
+            return b !== undefined && !same(p.y, b.y);
+        });
+    const changed = !same(head.columns, baseline.columns) || !same(head.coefficients, baseline.coefficients) || curvesDiffer;
+    if (!changed)
+        return charts;
+    const fitBase = charts.fit ? baseOf(charts.fit, base.fit, commit) : undefined;
+    return {
+        ...charts,
+        fit: charts.fit && fitBase ? { ...charts.fit, base: fitBase } : charts.fit,
+        partials: charts.partials.map((p) => {
+            const b = baseOf(p, base.partials.find((q) => q.input === p.input), commit);
+            return b ? { ...p, base: b } : p;
+        }),
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/result/chart-types.ts
 /**
  * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
@@ -43624,6 +44223,7 @@ function shippedScore(descriptor, design, tables, fit) {
 
 
 
+
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -43714,7 +44314,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
             rank_deficient: model.fit.rankDeficient,
             terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
         },
-        charts: buildChartData(model, checks),
+        charts: withBaseCurves(buildChartData(model, checks), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
     };
 }
 
@@ -44199,6 +44799,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:events"
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
+
+/***/ }),
+
+/***/ 1455:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
 
 /***/ }),
 
@@ -47178,7 +47785,7 @@ __webpack_unused_export__ = publicApi.parse;
 __webpack_unused_export__ = publicApi.parseAllDocuments;
 exports.Tp = publicApi.parseDocument;
 __webpack_unused_export__ = publicApi.stringify;
-__webpack_unused_export__ = visit.visit;
+exports.YR = visit.visit;
 __webpack_unused_export__ = visit.visitAsync;
 
 

@@ -573,7 +573,12 @@ const complexity_check = {
             line: sweep.line,
             metrics: { suggested_setting: chosen.label, suggested_cv_rmse: (0,result/* jsonNumber */.qj)(chosen.cvRmse) },
             detail,
-            suggestion: { text: `${chosen.label} (k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} now)`, line: sweep.line },
+            suggestion: {
+                text: `${chosen.label} (k-fold CV RMSE ${(0,format/* formatNumber */.Z)(chosen.cvRmse)} against ${(0,format/* formatNumber */.Z)(current.cvRmse)} now)`,
+                line: sweep.line,
+                // The value as the label rounds it (what a person would write): `degree 3`, `width 1.6`, `ridge 0.8`.
+                change: { key: sweep.kind, value: Number(chosen.label.slice(sweep.kind.length + 1)) },
+            },
         };
     },
 };
@@ -1109,7 +1114,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4236);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(2117);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(5786);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
@@ -1210,7 +1215,7 @@ async function main(argv) {
         // scanning reads them from the checkout); merged shard reports run from the root.
         const prefix = parsed.kind === 'check' ? node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(cwd, parsed.settings.root).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/') : '';
         if (parsed.html !== null || parsed.sarif !== null || parsed.junit !== null) {
-            const { writeFileReports } = await __nccwpck_require__.e(/* import() */ 797).then(__nccwpck_require__.bind(__nccwpck_require__, 6797));
+            const { writeFileReports } = await __nccwpck_require__.e(/* import() */ 574).then(__nccwpck_require__.bind(__nccwpck_require__, 574));
             const missed = await writeFileReports(result, {
                 html: parsed.html,
                 sarif: parsed.sarif,
@@ -6065,7 +6070,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 2117:
+/***/ 5786:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -10835,6 +10840,50 @@ function compareWithBase(metrics, baseline, commit) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/run/base-curves.ts
+/** True when two lists hold the same values in the same order. */
+function same(a, b) {
+    return a.length === b.length && a.every((v, i) => v === b[i]);
+}
+/** The base curve along the same input as `head`, or undefined when the base has none. */
+function baseOf(head, base, commit) {
+    if (!base || base.input !== head.input || base.x.length === 0)
+        return undefined;
+    return { commit, x: [...base.x], y: [...base.y] };
+}
+/**
+ * `charts` with the base commit's curves added (`fit.base`, `partials[i].base`, matched by input
+ * name), when the model changed: its design columns or coefficients differ from the base's, or
+ * a curve does. A model new in the pull request, one that could not be checked on the base, or
+ * one whose fit is the same gets no base curve. The head's charts are not modified.
+ * @param charts the head model's chart data
+ * @param head the head model's design columns and refit coefficients
+ * @param baseline the same model on the base commit, or null
+ * @param commit full SHA of the base commit
+ */
+function withBaseCurves(charts, head, baseline, commit) {
+    const base = baseline?.charts;
+    if (!base || baseline.verdict === 'error')
+        return charts;
+    const curvesDiffer = (charts.fit !== null && base.fit !== null && !same(charts.fit.y, base.fit.y)) ||
+        charts.partials.some((p) => {
+            const b = base.partials.find((q) => q.input === p.input);
+            return b !== undefined && !same(p.y, b.y);
+        });
+    const changed = !same(head.columns, baseline.columns) || !same(head.coefficients, baseline.coefficients) || curvesDiffer;
+    if (!changed)
+        return charts;
+    const fitBase = charts.fit ? baseOf(charts.fit, base.fit, commit) : undefined;
+    return {
+        ...charts,
+        fit: charts.fit && fitBase ? { ...charts.fit, base: fitBase } : charts.fit,
+        partials: charts.partials.map((p) => {
+            const b = baseOf(p, base.partials.find((q) => q.input === p.input), commit);
+            return b ? { ...p, base: b } : p;
+        }),
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/result/chart-types.ts
 /**
  * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
@@ -11967,6 +12016,7 @@ function shippedScore(descriptor, design, tables, fit) {
 
 
 
+
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -12057,7 +12107,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
             rank_deficient: model.fit.rankDeficient,
             terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
         },
-        charts: buildChartData(model, checks),
+        charts: withBaseCurves(buildChartData(model, checks), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
     };
 }
 

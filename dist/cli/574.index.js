@@ -1,8 +1,8 @@
-export const id = 797;
-export const ids = [797];
+export const id = 574;
+export const ids = [574];
 export const modules = {
 
-/***/ 6797:
+/***/ 574:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -190,8 +190,10 @@ function frame_frame(spec) {
     }
     if (spec.overlay)
         parts.push(spec.overlay);
-    // Legend in one row above the plot area.
-    let lx = x0;
+    // Legend in one row above the plot area; a row too long for it starts further left (into the
+    // margin of the y axis, whose label sits lower down).
+    const natural = spec.legend.reduce((w, item) => w + 28 + item.label.length * 6.1, 0);
+    let lx = x0 + natural > width - MARGIN.right ? Math.max(MARGIN.right, width - MARGIN.right - natural) : x0;
     const legend = [];
     for (const item of spec.legend) {
         legend.push(`<g transform="translate(${px(lx)} 9)">${item.mark}<text x="19" y="11" font-size="11" fill="#333">${(0,report_escape/* escapeHtml */.ZD)(item.label)}</text></g>`);
@@ -479,6 +481,34 @@ function cvCurveChart(sweep, options) {
     });
 }
 
+;// CONCATENATED MODULE: ./src/report/svg/base-curve.ts
+
+/** Colour of the base commit's curve: mid grey #6e6e6e (reads in greyscale; the dash tells it apart). */
+const BASE_CURVE_COLOUR = '#6e6e6e';
+/** Dash pattern of the base commit's curve. */
+const BASE_CURVE_DASH = '5 4';
+/** Legend label of the base commit's curve. */
+const BASE_CURVE_LABEL = 'base commit';
+/** The dashed path of the base curve (class `base-curve`, `data-commit` the short SHA). */
+function baseCurvePath(base, sx, sy) {
+    return `<path class="base-curve" data-commit="${shortSha(base.commit)}" d="${linePath(base.x, base.y, sx, sy)}" fill="none" stroke="${BASE_CURVE_COLOUR}" stroke-width="1.8" stroke-dasharray="${BASE_CURVE_DASH}" stroke-linejoin="round"/>`;
+}
+/** The legend entry of the base curve. */
+function baseCurveLegend() {
+    return {
+        mark: `<line x1="0" y1="7" x2="14" y2="7" stroke="${BASE_CURVE_COLOUR}" stroke-width="1.8" stroke-dasharray="${BASE_CURVE_DASH}"/>`,
+        label: BASE_CURVE_LABEL,
+    };
+}
+/** One sentence for the chart's description. */
+function baseCurveNote(base) {
+    return ` The dashed grey line is the same model fitted on the base commit ${shortSha(base.commit)}.`;
+}
+/** The first 7 hexadecimal digits of a SHA (other characters dropped, so it is safe in markup). */
+function shortSha(commit) {
+    return commit.replace(/[^0-9a-f]/gi, '').slice(0, 7);
+}
+
 ;// CONCATENATED MODULE: ./src/report/svg/points.ts
 
 /**
@@ -546,6 +576,7 @@ var units = __webpack_require__(3332);
 
 
 
+
 /** How far past the data the y axis may reach to show a swinging curve, in data spans. */
 const CURVE_HEADROOM = 0.6;
 /**
@@ -558,10 +589,10 @@ function fitCurveChart(chart, fit, options) {
     const { x0, y0, x1, y1 } = plotArea();
     const trainX = chart.train.x[0] ?? [];
     const holdoutX = chart.holdout.x[0] ?? [];
-    const xDomain = extent(fit.x, trainX, holdoutX) ?? [0, 1];
+    const xDomain = extent(fit.x, trainX, holdoutX, fit.base?.x ?? []) ?? [0, 1];
     const data = extent(chart.train.actual, chart.holdout.actual, fit.band) ?? [0, 1];
     const span = Math.max(data[1] - data[0], 1e-12);
-    const curve = extent(fit.y) ?? data;
+    const curve = extent(fit.y, fit.base?.y ?? []) ?? data;
     const yDomain = pad([Math.max(curve[0], data[0] - CURVE_HEADROOM * span), Math.min(curve[1], data[1] + CURVE_HEADROOM * span)].map((v, i) => i === 0 ? Math.min(v, data[0]) : Math.max(v, data[1])));
     const sx = linearScale(xDomain, [x0, x1]);
     const sy = linearScale(yDomain, [y1, y0]);
@@ -578,6 +609,8 @@ function fitCurveChart(chart, fit, options) {
     body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`);
     // Training range edges: the curve past them is extrapolation.
     body.push(`<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`);
+    if (fit.base)
+        body.push(baseCurvePath(fit.base, sx, sy));
     body.push(`<path class="curve" d="${linePath(fit.x, fit.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`);
     const a = marks('train', trainX, chart.train.actual, sx, sy);
     const b = marks('holdout', holdoutX, chart.holdout.actual, sx, sy);
@@ -590,12 +623,14 @@ function fitCurveChart(chart, fit, options) {
     ];
     if (fit.regions.length > 0)
         legend.push({ mark: legendRegion(id), label: 'leaves band' });
+    if (fit.base)
+        legend.push(baseCurveLegend());
     const where = fit.regions.length
         ? ` The curve leaves the band ${fit.regions.map((r) => `${r.side} it from ${(0,format/* formatNumber */.Z)(r.from)} to ${(0,format/* formatNumber */.Z)(r.to)}`).join('; ')}.`
         : ' The curve stays inside the band.';
     const desc = `Fitted ${chart.target} against ${fit.input} from ${(0,format/* formatNumber */.Z)(fit.x[0])} to ${(0,format/* formatNumber */.Z)(fit.x[fit.x.length - 1])} ` +
         `(training range ${(0,format/* formatNumber */.Z)(fit.range[0])} to ${(0,format/* formatNumber */.Z)(fit.range[1])}), with ${a.drawn} training rows as filled circles and ${b.drawn} hold-out rows as hollow squares. ` +
-        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${pointNote(chart.train, chart.holdout, a, b)}`;
+        `Observed target band ${(0,format/* formatNumber */.Z)(blo)} to ${(0,format/* formatNumber */.Z)(bhi)}.${where}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
     return frame_frame({
         id,
         kind: 'fit-curve',
@@ -622,6 +657,7 @@ function fitCurveChart(chart, fit, options) {
 
 
 
+
 /**
  * Renders one partial curve.
  * @param chart the model's chart data
@@ -632,8 +668,8 @@ function partialCurveChart(chart, curve, options) {
     const { x0, y0, x1, y1 } = plotArea();
     const c = chart.inputs.indexOf(curve.input);
     const rug = c >= 0 ? chart.train.x[c] : [];
-    const sx = linearScale(extent(curve.x, rug) ?? [0, 1], [x0, x1]);
-    const sy = linearScale(pad(extent(curve.y, chart.train.actual) ?? [0, 1]), [y1, y0]);
+    const sx = linearScale(extent(curve.x, rug, curve.base?.x ?? []) ?? [0, 1], [x0, x1]);
+    const sy = linearScale(pad(extent(curve.y, chart.train.actual, curve.base?.y ?? []) ?? [0, 1]), [y1, y0]);
     const ticks = [];
     for (const v of rug)
         if (v !== null)
@@ -641,6 +677,7 @@ function partialCurveChart(chart, curve, options) {
     const body = [
         `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(curve.range[0]))}" y1="${y0}" x2="${px(sx(curve.range[0]))}" y2="${y1}"/><line x1="${px(sx(curve.range[1]))}" y1="${y0}" x2="${px(sx(curve.range[1]))}" y2="${y1}"/></g>`,
         `<path class="rug" d="${ticks.join('')}" stroke="${COLOURS.train}" stroke-opacity="0.55" stroke-width="1"/>`,
+        curve.base ? baseCurvePath(curve.base, sx, sy) : '',
         `<path class="curve" d="${linePath(curve.x, curve.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
     ].join('');
     const others = Object.entries(curve.others)
@@ -650,7 +687,7 @@ function partialCurveChart(chart, curve, options) {
         id,
         kind: 'partial-curve',
         title: `Partial curve: ${chart.target} along ${curve.input}`,
-        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.`,
+        desc: `Predicted ${chart.target} as ${curve.input} runs from ${(0,format/* formatNumber */.Z)(curve.x[0])} to ${(0,format/* formatNumber */.Z)(curve.x[curve.x.length - 1])} (training range ${(0,format/* formatNumber */.Z)(curve.range[0])} to ${(0,format/* formatNumber */.Z)(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${curve.base ? baseCurveNote(curve.base) : ''}`,
         x: sx,
         y: sy,
         xLabel: (0,units/* axisLabel */.M)(curve.input),
@@ -659,6 +696,7 @@ function partialCurveChart(chart, curve, options) {
         legend: [
             { mark: legendLine(COLOURS.curve), label: 'predicted, others at medians' },
             { mark: `<path d="M3 12V5M7 12V5M11 12V5" stroke="${COLOURS.train}" stroke-width="1"/>`, label: 'training values' },
+            ...(curve.base ? [baseCurveLegend()] : []),
         ],
         data: { input: curve.input, 'rug-count': ticks.length },
     });
