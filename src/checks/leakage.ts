@@ -2,6 +2,7 @@
  * `leakage`: hold-out rows that repeat a training row.
  */
 import type { Check } from './types.js';
+import { classifierLeakage } from './classifier/measures.js';
 
 const check: Check = {
   id: 'leakage',
@@ -27,6 +28,7 @@ const check: Check = {
   \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
   advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
   line: (d) => d.data.lines.holdout,
+  measureClassifier: classifierLeakage,
   measure(context) {
     const { holdout, train, design } = context;
     if (design.inputs.length === 0) {
