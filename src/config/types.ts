@@ -110,8 +110,8 @@ export interface FitSpec {
   line: number;
   /** Line of `ridge` inside `fit` when given, else `line`. */
   ridgeLine: number;
-  /** Classification: a row is predicted positive when its probability is at least this. Default 0.5. */
-  threshold: number;
+  /** Classification: a row is predicted positive when its probability is at least this. Default 0.5 (absent: 0.5). */
+  threshold?: number;
 }
 
 /** What a model predicts: a number (`regression`, the default) or one of two classes (`classification`, binary). */

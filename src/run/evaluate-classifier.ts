@@ -41,7 +41,7 @@ function classifierMetrics(model: FittedClassifier): ModelMetrics {
     holdout_accuracy: n(holdout.accuracy),
     train_auc: n(train.auc),
     holdout_auc: n(holdout.auc),
-    threshold: model.context.descriptor.fit.threshold,
+    threshold: model.context.descriptor.fit.threshold ?? 0.5,
     train_positives: train.positives,
     train_negatives: train.negatives,
     holdout_positives: holdout.positives,

@@ -56,7 +56,7 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   const weighted = fitFactor(fit.weightedFactor, options);
   const trainEta = predictRows(design, train, fit.coefficients);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
-  const threshold = descriptor.fit.threshold;
+  const threshold = descriptor.fit.threshold ?? 0.5;
   const trainFigures = classificationFigures(train.y, trainEta, probabilities(trainEta), train.rows, threshold);
   const holdoutFigures = classificationFigures(holdout.y, holdoutEta, probabilities(holdoutEta), holdout.rows, threshold);
 
