@@ -12,6 +12,7 @@ import type { ModelData } from '../data/model-data.js';
 import { forEachBlock, predictRows, addProducts } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
+import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
 import { calibration, classificationFigures, probabilities } from '../diagnostics/classification-metrics.js';
 import type { Folds } from '../diagnostics/folds.js';
 import { findLeakage } from '../diagnostics/leakage.js';
@@ -74,7 +75,7 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
       shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
       columnSd,
       leakage: leakageOf(train, holdout),
-      complexity: null,
+      complexity: sweepClassifier(descriptor, design, train),
     },
     labels: labels as unknown as ClassLabels,
     train,

@@ -5,6 +5,7 @@
  */
 import type { Descriptor } from '../../config/types.js';
 import type { Design } from '../../design/design-matrix.js';
+import type { ClassifierSweep } from '../../diagnostics/classifier-complexity.js';
 import type { Calibration, ClassificationFigures } from '../../diagnostics/classification-metrics.js';
 import type { Separation } from '../../diagnostics/separation.js';
 import type { FitResult } from '../../fit/index.js';
@@ -54,23 +55,4 @@ export interface ClassifierContext {
   baseline: ModelResult | null;
   /** The complexity sweep scored by CV log-loss, or null when the model has nothing to sweep. */
   complexity: ClassifierSweep | null;
-}
-
-/** One point of a classifier's complexity sweep. */
-export interface ClassifierSweepPoint {
-  value: number;
-  cvLogLoss: number;
-  standardError: number;
-}
-
-/** A classifier's complexity sweep (see checks/complexity.ts for the regression one). */
-export interface ClassifierSweep {
-  kind: 'degree' | 'width' | 'ridge';
-  line: number;
-  current: number;
-  points: ClassifierSweepPoint[];
-  /** Index of the point the one-standard-error rule picks. */
-  chosen: number;
-  /** Index of the point with the lowest CV log-loss. */
-  best: number;
 }

@@ -102,3 +102,31 @@ export function classifierBaseChange({ holdout, baseline }: ClassifierContext): 
   const value = base === 0 ? (head === 0 ? 0 : Infinity) : (head - base) / base;
   return { value, message: `hold-out log-loss ${formatNumber(head)} against ${formatNumber(base)} on the base commit`, detail: { base_holdout_log_loss: base } };
 }
+
+/** `complexity`: the current setting's CV log-loss / that of the setting the one-standard-error rule picks. */
+export function classifierComplexity({ complexity: sweep }: ClassifierContext): Measurement {
+  if (sweep === null || sweep.chosen < 0 || sweep.current < 0) return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
+  const label = (i: number): string => `${sweep.kind} ${formatNumber(sweep.points[i].value)}`;
+  const chosen = sweep.points[sweep.chosen];
+  const current = sweep.points[sweep.current];
+  const value = chosen.cvLogLoss > 0 ? current.cvLogLoss / chosen.cvLogLoss : current.cvLogLoss === 0 ? 1 : Infinity;
+  const detail = {
+    setting: sweep.kind,
+    rule: 'one-standard-error',
+    chosen: sweep.chosen,
+    best: sweep.best,
+    current: sweep.current,
+    curve: sweep.points.map((p) => ({ setting: p.value, cv_log_loss: p.cvLogLoss, se: p.standardError })),
+  };
+  if (sweep.chosen === sweep.current) {
+    return { value, message: `${label(sweep.current)} is the simplest setting within one standard error of the best CV log-loss (${sweep.points.length} settings swept)`, line: sweep.line, detail, metrics: { suggested_setting: label(sweep.current) } };
+  }
+  return {
+    value,
+    message: `${label(sweep.chosen)} has k-fold CV log-loss ${formatNumber(chosen.cvLogLoss)} against ${formatNumber(current.cvLogLoss)} for the current ${label(sweep.current)}; the simplest of ${sweep.points.length} settings within one standard error of the best`,
+    line: sweep.line,
+    detail,
+    metrics: { suggested_setting: label(sweep.chosen) },
+    suggestion: { text: `${label(sweep.chosen)} (k-fold CV log-loss ${formatNumber(chosen.cvLogLoss)} against ${formatNumber(current.cvLogLoss)} now)`, line: sweep.line },
+  };
+}
