@@ -170,3 +170,68 @@ function twoParameterDeviance(y: Float64Array, eta: Float64Array, n: number, a: 
   for (let i = 0; i < n; i++) dev += rowDeviance(a + b * eta[i], y[i]);
   return dev;
 }
+
+/** One bin of a calibration diagram. */
+export interface CalibrationBin {
+  /** Bin range of predicted probabilities [from, to). */
+  from: number;
+  to: number;
+  /** Rows in the bin. */
+  count: number;
+  /** Mean predicted probability of its rows (NaN when empty). */
+  predicted: number;
+  /** Share of positives among its rows (NaN when empty). */
+  observed: number;
+}
+
+/**
+ * Calibration diagram (reliability diagram; DeGroot & Fienberg 1983, The Statistician 32):
+ * `bins` equal-width bins of the predicted probability, each with its count, mean prediction and
+ * observed share of positives (the last bin includes 1).
+ */
+export function calibrationBins(y: Float64Array, p: Float64Array, n: number, bins = 10): CalibrationBin[] {
+  const count = new Float64Array(bins);
+  const sumP = new Float64Array(bins);
+  const sumY = new Float64Array(bins);
+  for (let i = 0; i < n; i++) {
+    const b = Math.min(bins - 1, Math.floor(p[i] * bins));
+    count[b] += 1;
+    sumP[b] += p[i];
+    sumY[b] += y[i];
+  }
+  return Array.from(count, (c, b) => ({ from: b / bins, to: (b + 1) / bins, count: c, predicted: c > 0 ? sumP[b] / c : Number.NaN, observed: c > 0 ? sumY[b] / c : Number.NaN }));
+}
+
+/**
+ * Points of the ROC curve (false positive rate, true positive rate) for drawing: the rates at the
+ * thresholds t = 1 - k / max (k = 0 .. max; a row counts positive when p >= t), from (0, 0) to
+ * (1, 1), counted in one pass over the rows (exact at those thresholds).
+ */
+export function rocPoints(y: Float64Array, p: Float64Array, n: number, max = 50): { fpr: number[]; tpr: number[] } {
+  const pos = new Float64Array(max + 1);
+  const neg = new Float64Array(max + 1);
+  let positives = 0;
+  for (let i = 0; i < n; i++) {
+    // Bin k holds p in [1 - k/max, 1 - (k-1)/max): the rows first counted at threshold index k.
+    const k = Math.min(max, Math.max(0, Math.ceil((1 - p[i]) * max)));
+    if (y[i] === 1) {
+      pos[k] += 1;
+      positives += 1;
+    } else {
+      neg[k] += 1;
+    }
+  }
+  const negatives = n - positives;
+  if (positives === 0 || negatives === 0) return { fpr: [0, 1], tpr: [0, 1] };
+  const fpr = [0];
+  const tpr = [0];
+  let tp = 0;
+  let fp = 0;
+  for (let k = 0; k <= max; k++) {
+    tp += pos[k];
+    fp += neg[k];
+    fpr.push(fp / negatives);
+    tpr.push(tp / positives);
+  }
+  return { fpr, tpr };
+}

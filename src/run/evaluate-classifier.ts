@@ -85,6 +85,8 @@ export async function evaluateClassifier(repo: RepoReader, descriptor: Descripto
     extra: {
       task: 'classification',
       labels: model.labels,
+      roc: { train: model.charts.rocTrain, holdout: model.charts.rocHoldout },
+      calibration_bins: model.charts.calibration.map((b) => ({ from: b.from, to: b.to, count: b.count, predicted: jsonNumber(b.predicted), observed: jsonNumber(b.observed) })),
       terms: model.context.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.context.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
     },
   };

@@ -13,7 +13,7 @@ import { forEachBlock, predictRows, addProducts } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
 import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
-import { calibration, classificationFigures, probabilities } from '../diagnostics/classification-metrics.js';
+import { calibration, calibrationBins, classificationFigures, probabilities, rocPoints, type CalibrationBin } from '../diagnostics/classification-metrics.js';
 import type { Folds } from '../diagnostics/folds.js';
 import { findLeakage } from '../diagnostics/leakage.js';
 import { findSeparation } from '../diagnostics/separation.js';
@@ -32,6 +32,8 @@ export interface FittedClassifier {
   trainEta: Float64Array;
   holdoutEta: Float64Array;
   folds: Folds;
+  /** What the reports draw: ROC points of the training and hold-out rows, and the hold-out calibration diagram (10 bins). */
+  charts: { rocTrain: { fpr: number[]; tpr: number[] }; rocHoldout: { fpr: number[]; tpr: number[] }; calibration: CalibrationBin[] };
 }
 
 /**
@@ -58,8 +60,10 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   const trainEta = predictRows(design, train, fit.coefficients);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
   const threshold = descriptor.fit.threshold ?? 0.5;
-  const trainFigures = classificationFigures(train.y, trainEta, probabilities(trainEta), train.rows, threshold);
-  const holdoutFigures = classificationFigures(holdout.y, holdoutEta, probabilities(holdoutEta), holdout.rows, threshold);
+  const trainP = probabilities(trainEta);
+  const holdoutP = probabilities(holdoutEta);
+  const trainFigures = classificationFigures(train.y, trainEta, trainP, train.rows, threshold);
+  const holdoutFigures = classificationFigures(holdout.y, holdoutEta, holdoutP, holdout.rows, threshold);
 
   return {
     context: {
@@ -83,6 +87,11 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
     trainEta,
     holdoutEta,
     folds,
+    charts: {
+      rocTrain: rocPoints(train.y, trainP, train.rows),
+      rocHoldout: rocPoints(holdout.y, holdoutP, holdout.rows),
+      calibration: calibrationBins(holdout.y, holdoutP, holdout.rows),
+    },
   };
 }
 
