@@ -47,7 +47,7 @@ export function calibrationChart(m: ModelResult): string | null {
   if (!Array.isArray(bins) || bins.length === 0) return null;
   const used = bins.filter((b) => b.count > 0);
   if (used.length < 2) return null;
-  const v = (x: JsonNumber) => String(Number(fromJsonNumber(x).toPrecision(3)));
+  const v = (x: JsonNumber) => String(Number(fromJsonNumber(x).toFixed(3)));
   const title = `${m.name}: hold-out calibration (bars observed, line predicted; rows per bin ${used.map((b) => b.count).join(', ')})`;
   return [
     '```mermaid',
