@@ -20,7 +20,7 @@ describe('examples/classifiers', async () => {
   };
   const status = (name: string, id: string) => model(name).checks.find((c) => c.id === id)?.status;
 
-  it('the text report carries each classifier's figures; the Markdown report a calibration chart per classifier that does not pass', () => {
+  it('the text report carries each classifier figures; the Markdown report a calibration chart per classifier that does not pass', () => {
     const text = formatText(result);
     expect(text).toMatch(/FAIL wax-defect .*\n {2}classifier: log-loss 0\.3011 \/ 0\.4802 \(train \/ hold-out\), AUC 0\.7986 \/ 0\.5869/);
     const markdown = formatMarkdown(result);
