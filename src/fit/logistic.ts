@@ -21,8 +21,10 @@
  *
  * Stopping rule: the fit has converged when a Newton step lowers F by at most 1e-10 (|F| + 0.1)
  * (the relative rule of R's glm.fit, tighter: Newton converges quadratically, so the coefficients
- * of that step are accurate to about the square of the previous step's change); at most 100
- * Newton steps.
+ * of that step are accurate to about the square of the previous step's change), or, from the
+ * second step on, when the Newton decrement of the step just solved (the decrease the quadratic
+ * model predicts, d^T (X^T W X + ridge E) d) is at most that, the new coefficients then taken
+ * without another pass; at most 100 Newton steps.
  */
 import { forEachBlock } from '../design/blocks.js';
 import type { Design } from '../design/design-matrix.js';
@@ -69,9 +71,9 @@ export interface LogisticProblem {
 export interface LogisticFit {
   /** Coefficients at the last accepted step, length p. */
   coefficients: Float64Array;
-  /** Deviance D(w) of the rows fitted. */
+  /** Deviance D of the rows fitted at the last coefficients evaluated (the returned ones, or the step before them when the Newton decrement stopped the fit). */
   deviance: number;
-  /** D(w) + ridge ||E w||^2. */
+  /** D + ridge ||E w||^2 at the same coefficients. */
   objective: number;
   /** Newton steps taken. */
   iterations: number;
@@ -81,7 +83,7 @@ export interface LogisticFit {
   converged: boolean;
   /** Rows fitted. */
   rows: number;
-  /** QR factor of the weighted rows sqrt(W) X at the returned coefficients (no penalty rows). */
+  /** QR factor of the weighted rows sqrt(W) X at the last coefficients evaluated (no penalty rows). */
   weightedFactor: QrAccumulator;
 }
 
@@ -205,6 +207,26 @@ function step(s: State, options: LogisticOptions, maxIterations: number): void {
   s.previous = Float64Array.from(s.w);
   s.w = solveCoefficients(s.acc, { ridge: options.ridge, penalised: options.penalised });
   s.iterations += 1;
+  // Newton decrement: the quadratic model's decrease for the full step d = w_new - w, d^T (X^T W X + ridge E) d
+  // = ||R d||^2 + ridge ||E d||^2. When it is below the tolerance the new coefficients are taken
+  // without another pass (Boyd & Vandenberghe, Convex Optimization, 2004, sec. 9.5.1).
+  if (s.iterations > 1 && newtonDecrease(s.acc.R, s.w, s.previous, options) <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
+    s.done = true;
+    s.converged = true;
+  }
+}
+
+/** ||R d||^2 + ridge ||E d||^2 with d = w - previous (R upper triangular, column-major p x p). */
+function newtonDecrease(R: Float64Array, w: Float64Array, previous: Float64Array, options: LogisticOptions): number {
+  const p = w.length;
+  let total = 0;
+  for (let i = 0; i < p; i++) {
+    let row = 0;
+    for (let j = i; j < p; j++) row += R[j * p + i] * (w[j] - previous[j]);
+    total += row * row;
+    if (options.penalised[i]) total += options.ridge * (w[i] - previous[i]) ** 2;
+  }
+  return total;
 }
 
 /** sum over penalised j of w_j^2. */
@@ -245,8 +267,9 @@ function weightRows(eta: Float64Array, y: Float64Array, start: number, m: number
     if (foldOf[start + i] === exclude) continue;
     const e = eta[i];
     const yi = y[start + i];
-    dev += rowDeviance(e, yi);
-    const pr = 1 / (1 + Math.exp(-e));
+    const x = Math.exp(-Math.abs(e));
+    dev += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
+    const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
     const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
     const s = Math.sqrt(w);
     scale[r] = s;
@@ -264,8 +287,9 @@ function weightAllRows(eta: Float64Array, y: Float64Array, start: number, m: num
   for (let i = 0; i < m; i++) {
     const e = eta[i];
     const yi = y[start + i];
-    dev += rowDeviance(e, yi);
-    const pr = 1 / (1 + Math.exp(-e));
+    const x = Math.exp(-Math.abs(e));
+    dev += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
+    const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
     const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
     const s = Math.sqrt(w);
     scale[i] = s;
