@@ -4,7 +4,10 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { createFsRepository } from '../../src/repo/fs-repository.js';
+import { formatHtml } from '../../src/report/html.js';
+import { formatJunit } from '../../src/report/junit.js';
 import { formatMarkdown } from '../../src/report/markdown.js';
+import { formatSarif } from '../../src/report/sarif.js';
 import { formatText } from '../../src/report/text.js';
 import { runPipeline } from '../../src/run/pipeline.js';
 import { defaultSettings } from '../../src/run/settings.js';
@@ -26,6 +29,20 @@ describe('examples/classifiers', async () => {
     const markdown = formatMarkdown(result);
     expect(markdown).toContain('title "wax-defect: hold-out calibration (bars observed, line predicted; rows per bin 200, 108, 47, 34, 11)"');
     expect(markdown).not.toContain('bruise-reject: hold-out calibration');
+  });
+  it('the JSON, SARIF, JUnit and HTML reports carry the classifier checks', () => {
+    const json = JSON.parse(JSON.stringify(result));
+    expect(json.models.find((m: { name: string }) => m.name === 'stem-check').checks.find((c: { id: string }) => c.id === 'separation').detail.kind).toBe('complete');
+    const sarif = JSON.parse(formatSarif(result));
+    const results = sarif.runs[0].results as { ruleId: string; level: string }[];
+    expect(results.some((r) => r.ruleId === 'separation' && r.level === 'error')).toBe(true);
+    expect(results.some((r) => r.ruleId === 'calibration-slope' && r.level === 'error')).toBe(true);
+    const junit = formatJunit(result);
+    expect(junit).toMatch(/<testcase [^>]*name="separation"/);
+    expect(junit).toMatch(/events-per-parameter/);
+    const html = formatHtml(result);
+    expect(html).toContain('wax-defect');
+    expect(html).toContain('calibration-slope');
   });
   it('bruise-reject passes', () => {
     expect(model('bruise-reject').error).toBeNull();
