@@ -25,7 +25,12 @@ const check: Check = {
   measureClassifier({ calibration, holdout }) {
     const figures = jsonMetrics({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
     if (Number.isNaN(calibration.slope)) {
-      return { value: null, reason: 'not-identified', message: `the hold-out rows (${holdout.positives} positive, ${holdout.negatives} negative) hold one class only or constant probabilities`, metrics: figures };
+      return {
+        value: null,
+        reason: 'not-identified',
+        message: `the hold-out rows (${holdout.positives} positive, ${holdout.negatives} negative) hold one class only or constant probabilities`,
+        metrics: figures,
+      };
     }
     return {
       value: calibration.slope,

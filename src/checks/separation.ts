@@ -21,7 +21,8 @@ const check: Check = {
   of (2y_i - 1) x_i^T b subject to (2y_i - 1) x_i^T b >= 0 for every row and |b_j| <= 1, repeated over the
   rows not yet separated, rows entering the program as cutting planes. Detail: the separated rows'
   count and first lines, the columns of the separating direction and the direction itself.`,
-  advice: 'Remove or merge the terms along which the classes separate, add a ridge penalty (`fit.ridge`), or collect rows where the classes overlap.',
+  advice:
+    'Remove or merge the terms along which the classes separate, add a ridge penalty (`fit.ridge`), or collect rows where the classes overlap.',
   line: (d) => d.termsLine,
   tasks: ['classification'],
   measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
@@ -37,7 +38,12 @@ const check: Check = {
     };
     const metrics = { separation: separation.kind, separated_rows: separation.separatedRows };
     if (separation.kind === 'none') {
-      return { value: 0, message: `the classes overlap: finite maximum-likelihood coefficients exist${separation.exact ? '' : ' (the test stopped at its size cap)'}`, detail, metrics };
+      return {
+        value: 0,
+        message: `the classes overlap: finite maximum-likelihood coefficients exist${separation.exact ? '' : ' (the test stopped at its size cap)'}`,
+        detail,
+        metrics,
+      };
     }
     const penalised = descriptor.fit.ridge > 0;
     const value = separation.kind === 'complete' && !penalised ? 2 : 1;

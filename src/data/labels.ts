@@ -71,7 +71,12 @@ export async function loadClassifierData(
 }
 
 /** The inputs as numbers and the target as text labels (a second read of each file for the target). */
-async function loadTextLabels(repo: RepoReader, descriptor: Descriptor, inputs: readonly string[], settings: SettingsFile): Promise<ClassifierTables> {
+async function loadTextLabels(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  inputs: readonly string[],
+  settings: SettingsFile,
+): Promise<ClassifierTables> {
   const { data } = descriptor;
   const read = async (path: string) => {
     const table = await readTable(repo, path, { columns: [...inputs], maxBytes: settings.caps.maxFileBytes });
@@ -108,7 +113,11 @@ async function loadTextLabels(repo: RepoReader, descriptor: Descriptor, inputs: 
  */
 function chooseClasses(descriptor: Descriptor, found: readonly string[], kind: ClassLabels['kind']): ClassLabels {
   const where = { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' };
-  const list = found.slice(0, 6).map((l) => quoteValue(l, 30)).join(', ') + (found.length > 6 ? ', …' : '');
+  const list =
+    found
+      .slice(0, 6)
+      .map((l) => quoteValue(l, 30))
+      .join(', ') + (found.length > 6 ? ', …' : '');
   if (found.length !== 2) {
     const count = found.length >= MAX_LABELS ? `at least ${MAX_LABELS}` : String(found.length);
     throw new InputError(
@@ -121,10 +130,14 @@ function chooseClasses(descriptor: Descriptor, found: readonly string[], kind: C
   if (positive !== null) {
     const at = found.indexOf(positive);
     if (at < 0) {
-      throw new InputError('positive-label', `\`data.positive\` is ${quoteValue(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
-        ...where,
-        key: 'data.positive',
-      });
+      throw new InputError(
+        'positive-label',
+        `\`data.positive\` is ${quoteValue(positive, 30)} but the training rows' classes are ${list}; expected one of them`,
+        {
+          ...where,
+          key: 'data.positive',
+        },
+      );
     }
     return { positive, negative: found[1 - at], kind };
   }
@@ -161,14 +174,28 @@ function distinctNumbers(y: Float64Array, n: number): number[] {
  * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
  * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
  */
-async function readLabelCodes(repo: RepoReader, path: string, column: string, descriptor: Descriptor): Promise<{ labels: string[]; codes: Int32Array; rows: number }> {
+async function readLabelCodes(
+  repo: RepoReader,
+  path: string,
+  column: string,
+  descriptor: Descriptor,
+): Promise<{ labels: string[]; codes: Int32Array; rows: number }> {
   const labels: string[] = [];
   const index = new Map<string, number>();
   let codes = new Int32Array(1024);
   let rows = 0;
   let field = -1;
   let tooMany = false;
-  const parser = parse({ bom: true, delimiter: ',', quote: '"', escape: '"', record_delimiter: ['\r\n', '\n'], trim: true, skip_empty_lines: true, relax_column_count: true });
+  const parser = parse({
+    bom: true,
+    delimiter: ',',
+    quote: '"',
+    escape: '"',
+    record_delimiter: ['\r\n', '\n'],
+    trim: true,
+    skip_empty_lines: true,
+    relax_column_count: true,
+  });
   const consume = (): void => {
     for (let record = parser.read() as string[] | null; record !== null; record = parser.read() as string[] | null) {
       if (field < 0) {
@@ -204,11 +231,15 @@ async function readLabelCodes(repo: RepoReader, path: string, column: string, de
   await done;
   consume();
   if (tooMany) {
-    throw new InputError('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
-      file: descriptor.file,
-      line: descriptor.data.lines.target,
-      key: 'data.target',
-    });
+    throw new InputError(
+      'target-classes',
+      `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`,
+      {
+        file: descriptor.file,
+        line: descriptor.data.lines.target,
+        key: 'data.target',
+      },
+    );
   }
   return { labels, codes: codes.subarray(0, rows), rows };
 }

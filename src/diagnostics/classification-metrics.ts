@@ -32,7 +32,13 @@ export function probabilities(eta: Float64Array): Float64Array {
  * The figures of rows with labels y (0/1), linear predictors eta and probabilities p.
  * @param threshold a row is predicted positive when p >= threshold
  */
-export function classificationFigures(y: Float64Array, eta: Float64Array, p: Float64Array, n: number, threshold: number): ClassificationFigures {
+export function classificationFigures(
+  y: Float64Array,
+  eta: Float64Array,
+  p: Float64Array,
+  n: number,
+  threshold: number,
+): ClassificationFigures {
   let dev = 0;
   let brier = 0;
   let correct = 0;
@@ -199,7 +205,13 @@ export function calibrationBins(y: Float64Array, p: Float64Array, n: number, bin
     sumP[b] += p[i];
     sumY[b] += y[i];
   }
-  return Array.from(count, (c, b) => ({ from: b / bins, to: (b + 1) / bins, count: c, predicted: c > 0 ? sumP[b] / c : Number.NaN, observed: c > 0 ? sumY[b] / c : Number.NaN }));
+  return Array.from(count, (c, b) => ({
+    from: b / bins,
+    to: (b + 1) / bins,
+    count: c,
+    predicted: c > 0 ? sumP[b] / c : Number.NaN,
+    observed: c > 0 ? sumY[b] / c : Number.NaN,
+  }));
 }
 
 /**

@@ -75,7 +75,8 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
       for (let t = 4; t >= -2; t--) values.push({ value: width * 2 ** t, current: t === 0 });
     }
     for (const { value, current } of values) {
-      const changed = target.kind === 'degree' ? { ...(spec as PolynomialTermSpec), degree: value } : { ...(spec as RbfTermSpec), width: value };
+      const changed =
+        target.kind === 'degree' ? { ...(spec as PolynomialTermSpec), degree: value } : { ...(spec as RbfTermSpec), width: value };
       const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
       points.push({ value, current, design: createDesign(terms, design.intercept), ridge });
     }
@@ -84,7 +85,11 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
   let starts: Float64Array[] | null = null;
   for (const point of points) {
     const d = point.design;
-    const problems = Array.from({ length: folds.k }, (_, f) => ({ foldOf: folds.foldOf, exclude: f, ...(starts && d === design ? { start: starts[f] } : {}) }));
+    const problems = Array.from({ length: folds.k }, (_, f) => ({
+      foldOf: folds.foldOf,
+      exclude: f,
+      ...(starts && d === design ? { start: starts[f] } : {}),
+    }));
     const fits = fitLogistic(d, rows, { ridge: point.ridge, penalised: [...d.penalised] }, problems);
     if (d === design) starts = fits.map((x) => x.coefficients);
     const deviance = new Float64Array(folds.k);

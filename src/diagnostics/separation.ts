@@ -83,7 +83,12 @@ function subsample(data: SeparationRows, m: number): SeparationRows {
     for (let t = 0; t < m; t++) out[t] = col[Math.floor((t * n) / m)];
     return out;
   };
-  return { inputs: data.inputs.map((c) => pick(c, new Float64Array(m))), y: pick(data.y, new Float64Array(m)), rows: m, lines: pick(data.lines, new Int32Array(m)) };
+  return {
+    inputs: data.inputs.map((c) => pick(c, new Float64Array(m))),
+    y: pick(data.y, new Float64Array(m)),
+    rows: m,
+    lines: pick(data.lines, new Int32Array(m)),
+  };
 }
 
 /** Whether the design of these rows has rank p (the scaled-spectrum rule of the QR engine). */
@@ -163,9 +168,16 @@ function rowValue(X: Float64Array, m: number, i: number, p: number, b: Float64Ar
  * Maximises c^T b over -1 <= b <= 1 and a_i^T b >= 0 for every row, adding violated rows to
  * `cuts` (kept between calls: a cut stays valid) until the solution violates none.
  */
-function solveWithCuts(design: Design, data: SeparationRows, scale: Float64Array, c: Float64Array, cuts: Float64Array[]): { b: Float64Array; exact: boolean } {
+function solveWithCuts(
+  design: Design,
+  data: SeparationRows,
+  scale: Float64Array,
+  c: Float64Array,
+  cuts: Float64Array[],
+): { b: Float64Array; exact: boolean } {
   const p = design.p;
-  for (let round = 0; ; round++) {
+  // Each round adds at least one cut or returns, and the cuts are capped: at most MAX_CUTS rounds.
+  for (let round = 0; round <= MAX_CUTS; round++) {
     const b = simplexMax(c, cuts, p);
     const worst: { value: number; row: Float64Array }[] = [];
     forEachBlock(design, data, (X, start, m) => {
@@ -185,13 +197,16 @@ function solveWithCuts(design: Design, data: SeparationRows, scale: Float64Array
     if (cuts.length + worst.length > MAX_CUTS) return { b: new Float64Array(p), exact: false };
     for (const w of worst) cuts.push(w.row);
   }
+  return { b: new Float64Array(p), exact: false };
 }
 
 /**
  * Dense tableau simplex for max c^T b, -1 <= b_j <= 1, a^T b >= 0 for each a in `rows`, with
  * b = u - v (u, v >= 0, u_j + v_j <= 1): every right-hand side is 0 or 1, so the origin is a
- * feasible start (no phase one). Bland's rule: the lowest-index improving column enters, the
- * lowest-index basic variable among ratio ties leaves.
+ * feasible start (no phase one). Dantzig's rule (the most negative reduced cost enters) while the
+ * objective rises; after 50 pivots without a rise, Bland's rule (the lowest-index improving column
+ * enters, the lowest-index basic variable among ratio ties leaves), which cannot cycle. At most
+ * 100,000 pivots.
  */
 export function simplexMax(c: Float64Array, rows: readonly Float64Array[], p: number): Float64Array {
   const r = rows.length;

@@ -114,7 +114,12 @@ interface State {
  * @param problems the fits to make (e.g. the full fit, or one per cross-validation fold)
  * @returns one fit per problem, in order
  */
-export function fitLogistic(design: Design, data: LogisticRows, options: LogisticOptions, problems: readonly LogisticProblem[]): LogisticFit[] {
+export function fitLogistic(
+  design: Design,
+  data: LogisticRows,
+  options: LogisticOptions,
+  problems: readonly LogisticProblem[],
+): LogisticFit[] {
   const p = design.p;
   const maxIterations = options.maxIterations ?? LOGISTIC_MAX_ITERATIONS;
   const states: State[] = problems.map((problem) => ({
@@ -153,7 +158,9 @@ export function fitLogistic(design: Design, data: LogisticRows, options: Logisti
         eta.fill(0, 0, m);
         addProducts(eta, 0, X, m, s.w, p);
         const { foldOf, exclude } = s.problem;
-        const r = foldOf ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, index) : weightAllRows(eta, data.y, start, m, scale, target, index);
+        const r = foldOf
+          ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, index)
+          : weightAllRows(eta, data.y, start, m, scale, target, index);
         s.deviance += blockDeviance;
         s.rows += r;
         for (let j = 0; j < p; j++) scaleColumn(X, j * m, index, scale, r, work, j * r);
@@ -260,7 +267,17 @@ let blockDeviance = 0;
  * from 0; the block's deviance in {@link blockDeviance}.
  * @returns the number of rows kept
  */
-function weightRows(eta: Float64Array, y: Float64Array, start: number, m: number, foldOf: Int32Array, exclude: number, scale: Float64Array, target: Float64Array, index: Int32Array): number {
+function weightRows(
+  eta: Float64Array,
+  y: Float64Array,
+  start: number,
+  m: number,
+  foldOf: Int32Array,
+  exclude: number,
+  scale: Float64Array,
+  target: Float64Array,
+  index: Int32Array,
+): number {
   let r = 0;
   let dev = 0;
   for (let i = 0; i < m; i++) {
@@ -282,7 +299,15 @@ function weightRows(eta: Float64Array, y: Float64Array, start: number, m: number
 }
 
 /** {@link weightRows} for every row of the block. */
-function weightAllRows(eta: Float64Array, y: Float64Array, start: number, m: number, scale: Float64Array, target: Float64Array, index: Int32Array): number {
+function weightAllRows(
+  eta: Float64Array,
+  y: Float64Array,
+  start: number,
+  m: number,
+  scale: Float64Array,
+  target: Float64Array,
+  index: Int32Array,
+): number {
   let dev = 0;
   for (let i = 0; i < m; i++) {
     const e = eta[i];
@@ -309,6 +334,14 @@ export function rowDeviance(eta: number, y: number): number {
 }
 
 /** out[to + k] = scale[k] X[from + index[k]] for k < r. */
-function scaleColumn(X: Float64Array, from: number, index: Int32Array, scale: Float64Array, r: number, out: Float64Array, to: number): void {
+function scaleColumn(
+  X: Float64Array,
+  from: number,
+  index: Int32Array,
+  scale: Float64Array,
+  r: number,
+  out: Float64Array,
+  to: number,
+): void {
   for (let k = 0; k < r; k++) out[to + k] = scale[k] * X[from + index[k]];
 }

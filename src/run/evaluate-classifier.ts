@@ -58,7 +58,12 @@ function classifierMetrics(model: FittedClassifier): ModelMetrics {
  * Fits one classifier and runs every check on it. Errors are handled by the caller
  * (evaluate.ts), as for regression models.
  */
-export async function evaluateClassifier(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
+export async function evaluateClassifier(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  base?: BaseInput,
+): Promise<ModelResult> {
   const model = await fitClassifier(repo, descriptor, settings);
   const context: ClassifierContext = { ...model.context, baseline: base?.models.get(descriptor.name) ?? null };
   const metrics = classifierMetrics(model);
@@ -86,8 +91,20 @@ export async function evaluateClassifier(repo: RepoReader, descriptor: Descripto
       task: 'classification',
       labels: model.labels,
       roc: { train: model.charts.rocTrain, holdout: model.charts.rocHoldout },
-      calibration_bins: model.charts.calibration.map((b) => ({ from: b.from, to: b.to, count: b.count, predicted: jsonNumber(b.predicted), observed: jsonNumber(b.observed) })),
-      terms: model.context.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.context.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
+      calibration_bins: model.charts.calibration.map((b) => ({
+        from: b.from,
+        to: b.to,
+        count: b.count,
+        predicted: jsonNumber(b.predicted),
+        observed: jsonNumber(b.observed),
+      })),
+      terms: model.context.design.terms.map((t, i) => ({
+        kind: t.spec.kind,
+        line: t.spec.line,
+        first_column: model.context.design.termOffsets[i],
+        columns: t.columnNames.length,
+        fixed: t.fixed,
+      })),
     },
   };
 }

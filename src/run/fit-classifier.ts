@@ -13,7 +13,14 @@ import { forEachBlock, predictRows, addProducts } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
 import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
-import { calibration, calibrationBins, classificationFigures, probabilities, rocPoints, type CalibrationBin } from '../diagnostics/classification-metrics.js';
+import {
+  calibration,
+  calibrationBins,
+  classificationFigures,
+  probabilities,
+  rocPoints,
+  type CalibrationBin,
+} from '../diagnostics/classification-metrics.js';
 import type { Folds } from '../diagnostics/folds.js';
 import { findLeakage } from '../diagnostics/leakage.js';
 import { findSeparation } from '../diagnostics/separation.js';

@@ -27,12 +27,17 @@ describe('examples/classifiers', async () => {
     const text = formatText(result);
     expect(text).toMatch(/FAIL wax-defect .*\n {2}classifier: log-loss 0\.3011 \/ 0\.4802 \(train \/ hold-out\), AUC 0\.7986 \/ 0\.5869/);
     const markdown = formatMarkdown(result);
-    expect(markdown).toContain('title "wax-defect: hold-out calibration (bars observed, line predicted; rows per bin 200, 108, 47, 34, 11)"');
+    expect(markdown).toContain(
+      'title "wax-defect: hold-out calibration (bars observed, line predicted; rows per bin 200, 108, 47, 34, 11)"',
+    );
     expect(markdown).not.toContain('bruise-reject: hold-out calibration');
   });
   it('the JSON, SARIF, JUnit and HTML reports carry the classifier checks', () => {
     const json = JSON.parse(JSON.stringify(result));
-    expect(json.models.find((m: { name: string }) => m.name === 'stem-check').checks.find((c: { id: string }) => c.id === 'separation').detail.kind).toBe('complete');
+    expect(
+      json.models.find((m: { name: string }) => m.name === 'stem-check').checks.find((c: { id: string }) => c.id === 'separation').detail
+        .kind,
+    ).toBe('complete');
     const sarif = JSON.parse(formatSarif(result));
     const results = sarif.runs[0].results as { ruleId: string; level: string }[];
     expect(results.some((r) => r.ruleId === 'separation' && r.level === 'error')).toBe(true);

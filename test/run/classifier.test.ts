@@ -56,7 +56,11 @@ describe('classifier: published worked example (Wikipedia, exam pass vs hours st
 describe('classifier: labels', () => {
   const text = PASS.map((v) => (v ? 'passed' : 'failed'));
   it('reads two text labels with data.positive and gives the same fit as 0/1', async () => {
-    const m = await run({ 'm.model.yml': descriptor().replace('  target: y\n', '  target: y\n  positive: passed\n'), 'train.csv': csv(HOURS, text), 'holdout.csv': csv(HOURS, text) });
+    const m = await run({
+      'm.model.yml': descriptor().replace('  target: y\n', '  target: y\n  positive: passed\n'),
+      'train.csv': csv(HOURS, text),
+      'holdout.csv': csv(HOURS, text),
+    });
     expect(m.error).toBeNull();
     expect(fromJsonNumber(m.coefficients[1])).toBeCloseTo(1.5046, 4);
     expect(m.metrics?.positive_label).toBe('passed');
@@ -76,15 +80,33 @@ describe('classifier: labels', () => {
   });
   it('names the labels found when there are more than two, or one', async () => {
     const three = text.map((l, i) => (i === 3 ? 'unsure' : l));
-    const m = await run({ 'm.model.yml': descriptor().replace('  target: y\n', '  target: y\n  positive: passed\n'), 'train.csv': csv(HOURS, three), 'holdout.csv': csv(HOURS, text) });
+    const m = await run({
+      'm.model.yml': descriptor().replace('  target: y\n', '  target: y\n  positive: passed\n'),
+      'train.csv': csv(HOURS, three),
+      'holdout.csv': csv(HOURS, text),
+    });
     expect(m.error?.code).toBe('target-classes');
     expect(m.error?.message).toMatch(/hold 3 \("failed", "unsure", "passed"\)/);
-    const one = await run({ 'm.model.yml': descriptor(), 'train.csv': csv(HOURS, HOURS.map(() => 1)), 'holdout.csv': csv(HOURS, PASS) });
+    const one = await run({
+      'm.model.yml': descriptor(),
+      'train.csv': csv(
+        HOURS,
+        HOURS.map(() => 1),
+      ),
+      'holdout.csv': csv(HOURS, PASS),
+    });
     expect(one.error?.code).toBe('target-classes');
     expect(one.error?.message).toMatch(/hold 1 \("1"\)/);
   });
   it('rejects a hold-out label the training rows do not hold, naming its line', async () => {
-    const m = await run({ 'm.model.yml': descriptor(), 'train.csv': csv(HOURS, PASS), 'holdout.csv': csv(HOURS, PASS.map((v, i) => (i === 4 ? 2 : v))) });
+    const m = await run({
+      'm.model.yml': descriptor(),
+      'train.csv': csv(HOURS, PASS),
+      'holdout.csv': csv(
+        HOURS,
+        PASS.map((v, i) => (i === 4 ? 2 : v)),
+      ),
+    });
     expect(m.error?.code).toBe('target-classes');
     expect(m.error?.message).toMatch(/is "?2"? on line 6 of holdout.csv/);
   });
@@ -122,7 +144,11 @@ describe('classifier: separation (exact, constructed cases)', () => {
   it('complete separation with ridge > 0 is a warning (the penalised fit exists)', async () => {
     const x = [1, 2, 3, 4, 5, 6, 7, 8];
     const y = [0, 0, 0, 0, 1, 1, 1, 1];
-    const m = await run({ 'm.model.yml': descriptor().replace('  folds: 4\n', '  folds: 4\n  ridge: 1\n'), 'train.csv': csv(x, y), 'holdout.csv': csv(x, y) });
+    const m = await run({
+      'm.model.yml': descriptor().replace('  folds: 4\n', '  folds: 4\n  ridge: 1\n'),
+      'train.csv': csv(x, y),
+      'holdout.csv': csv(x, y),
+    });
     const c = check(m, 'separation');
     expect(c?.detail?.kind).toBe('complete');
     expect(c?.status).toBe('warn');

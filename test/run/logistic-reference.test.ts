@@ -66,7 +66,24 @@ describe.skipIf(missing !== null)(`classifier figures against scikit-learn (ref_
     dir = mkdtempSync(path.join(os.tmpdir(), 'fitgate-logistic-reference-'));
     writeFileSync(path.join(dir, 'fitgate.yml'), 'version: 1\nmodels:\n  - "*.model.yml"\n');
     for (const c of CASES) {
-      const gen = spawnSync(PYTHON3, [`${sharedBenchDir}ref_logistic.py`, 'generate', '--out', path.join(dir, c.name), '--rows', String(c.rows), '--holdout-rows', String(c.holdoutRows), '--features', String(c.features), '--seed', String(c.seed)], { encoding: 'utf8' });
+      const gen = spawnSync(
+        PYTHON3,
+        [
+          `${sharedBenchDir}ref_logistic.py`,
+          'generate',
+          '--out',
+          path.join(dir, c.name),
+          '--rows',
+          String(c.rows),
+          '--holdout-rows',
+          String(c.holdoutRows),
+          '--features',
+          String(c.features),
+          '--seed',
+          String(c.seed),
+        ],
+        { encoding: 'utf8' },
+      );
       if (gen.status !== 0) throw new Error(gen.stderr);
       const terms = Array.from({ length: c.features }, (_, j) => `  - polynomial: { of: x${j + 1}, degree: ${c.degree} }`).join('\n');
       writeFileSync(
@@ -89,7 +106,20 @@ describe.skipIf(missing !== null)(`classifier figures against scikit-learn (ref_
     if (!metrics || !model) throw new Error(`no metrics for ${c.name}`);
     const run = spawnSync(
       PYTHON3,
-      [`${sharedBenchDir}ref_logistic.py`, 'check', '--train', path.join(dir, c.name, 'train.csv'), '--holdout', path.join(dir, c.name, 'holdout.csv'), '--degree', String(c.degree), '--ridge', String(c.ridge), '--folds', String(c.folds)],
+      [
+        `${sharedBenchDir}ref_logistic.py`,
+        'check',
+        '--train',
+        path.join(dir, c.name, 'train.csv'),
+        '--holdout',
+        path.join(dir, c.name, 'holdout.csv'),
+        '--degree',
+        String(c.degree),
+        '--ridge',
+        String(c.ridge),
+        '--folds',
+        String(c.folds),
+      ],
       { encoding: 'utf8' },
     );
     expect(run.status, run.stderr).toBe(0);

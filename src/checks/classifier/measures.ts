@@ -50,7 +50,8 @@ export function classifierCoefficientSize({ fit, design, columnSd }: ClassifierC
 
 /** `cross-validation`: pooled k-fold CV log-loss / training log-loss. */
 export function classifierCrossValidation({ crossValidation: cv, train }: ClassifierContext): Measurement {
-  if (cv === null) return { value: null, reason: 'too-few-rows', message: `cross-validation needs at least 2 training rows, got ${train.rows}` };
+  if (cv === null)
+    return { value: null, reason: 'too-few-rows', message: `cross-validation needs at least 2 training rows, got ${train.rows}` };
   const value = ratio(train.logLoss, cv.logLoss);
   return {
     value,
@@ -62,11 +63,15 @@ export function classifierCrossValidation({ crossValidation: cv, train }: Classi
 
 /** `leakage`: hold-out rows that repeat a training row (inputs and label). */
 export function classifierLeakage({ leakage, design }: ClassifierContext): Measurement {
-  if (design.inputs.length === 0) return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
+  if (design.inputs.length === 0)
+    return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
   const shown = leakage.examples.map((e) => `hold-out line ${e.holdoutLine} = training line ${e.trainLine}`).join(', ');
   return {
     value: leakage.duplicates,
-    message: leakage.duplicates === 0 ? 'no hold-out row repeats a training row' : `${leakage.duplicates} hold-out rows repeat a training row, inputs and label (${shown})`,
+    message:
+      leakage.duplicates === 0
+        ? 'no hold-out row repeats a training row'
+        : `${leakage.duplicates} hold-out rows repeat a training row, inputs and label (${shown})`,
     metrics: { leaked_rows: leakage.duplicates },
   };
 }
@@ -77,7 +82,10 @@ export function classifierReproducibility({ shipped }: ClassifierContext): Measu
   return {
     value: shipped.maxProbabilityDifference,
     message: `the shipped coefficients' probabilities differ from the refit's by up to ${formatNumber(shipped.maxProbabilityDifference)} (largest coefficient difference ${formatNumber(shipped.maxCoefficientDifference)})`,
-    metrics: jsonMetrics({ shipped_max_probability_difference: shipped.maxProbabilityDifference, shipped_holdout_log_loss: shipped.holdoutLogLoss }),
+    metrics: jsonMetrics({
+      shipped_max_probability_difference: shipped.maxProbabilityDifference,
+      shipped_holdout_log_loss: shipped.holdoutLogLoss,
+    }),
   };
 }
 
@@ -97,15 +105,21 @@ export function classifierBaseChange({ holdout, baseline }: ClassifierContext): 
   if (!baseline) return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
   const raw = baseline.metrics?.holdout_log_loss;
   const base = typeof raw === 'number' || typeof raw === 'string' ? fromJsonNumber(raw as never) : Number.NaN;
-  if (Number.isNaN(base)) return { value: null, reason: 'base-not-checked', message: 'the model could not be checked as a classifier on the base commit' };
+  if (Number.isNaN(base))
+    return { value: null, reason: 'base-not-checked', message: 'the model could not be checked as a classifier on the base commit' };
   const head = holdout.logLoss;
   const value = base === 0 ? (head === 0 ? 0 : Infinity) : (head - base) / base;
-  return { value, message: `hold-out log-loss ${formatNumber(head)} against ${formatNumber(base)} on the base commit`, detail: { base_holdout_log_loss: base } };
+  return {
+    value,
+    message: `hold-out log-loss ${formatNumber(head)} against ${formatNumber(base)} on the base commit`,
+    detail: { base_holdout_log_loss: base },
+  };
 }
 
 /** `complexity`: the current setting's CV log-loss / that of the setting the one-standard-error rule picks. */
 export function classifierComplexity({ complexity: sweep }: ClassifierContext): Measurement {
-  if (sweep === null || sweep.chosen < 0 || sweep.current < 0) return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
+  if (sweep === null || sweep.chosen < 0 || sweep.current < 0)
+    return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
   const label = (i: number): string => `${sweep.kind} ${formatNumber(sweep.points[i].value)}`;
   const chosen = sweep.points[sweep.chosen];
   const current = sweep.points[sweep.current];
@@ -119,7 +133,13 @@ export function classifierComplexity({ complexity: sweep }: ClassifierContext): 
     curve: sweep.points.map((p) => ({ setting: p.value, cv_log_loss: p.cvLogLoss, se: p.standardError })),
   };
   if (sweep.chosen === sweep.current) {
-    return { value, message: `${label(sweep.current)} is the simplest setting within one standard error of the best CV log-loss (${sweep.points.length} settings swept)`, line: sweep.line, detail, metrics: { suggested_setting: label(sweep.current) } };
+    return {
+      value,
+      message: `${label(sweep.current)} is the simplest setting within one standard error of the best CV log-loss (${sweep.points.length} settings swept)`,
+      line: sweep.line,
+      detail,
+      metrics: { suggested_setting: label(sweep.current) },
+    };
   }
   return {
     value,
@@ -127,6 +147,9 @@ export function classifierComplexity({ complexity: sweep }: ClassifierContext): 
     line: sweep.line,
     detail,
     metrics: { suggested_setting: label(sweep.chosen) },
-    suggestion: { text: `${label(sweep.chosen)} (k-fold CV log-loss ${formatNumber(chosen.cvLogLoss)} against ${formatNumber(current.cvLogLoss)} now)`, line: sweep.line },
+    suggestion: {
+      text: `${label(sweep.chosen)} (k-fold CV log-loss ${formatNumber(chosen.cvLogLoss)} against ${formatNumber(current.cvLogLoss)} now)`,
+      line: sweep.line,
+    },
   };
 }
