@@ -21,8 +21,8 @@ var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
-// EXTERNAL MODULE: ./src/run/pipeline.ts + 33 modules
-var pipeline = __webpack_require__(5786);
+// EXTERNAL MODULE: ./src/run/pipeline.ts + 40 modules
+var pipeline = __webpack_require__(3528);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __webpack_require__(1421);
 // EXTERNAL MODULE: ./src/repo/glob-pattern.ts

@@ -17,6 +17,8 @@ __webpack_require__.d(__webpack_exports__, {
   verdictLine: () => (/* binding */ verdictLine)
 });
 
+// EXTERNAL MODULE: ./src/report/classifier-figures.ts
+var classifier_figures = __webpack_require__(2953);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __webpack_require__(6228);
 // EXTERNAL MODULE: ./src/report/escape.ts
@@ -149,6 +151,7 @@ var wording = __webpack_require__(5594);
 
 
 
+
 /** Default size cap: under GitHub's job-summary limit of 1 MiB (1,048,576 bytes). */
 const DEFAULT_MAX_BYTES = 1_000_000;
 /** Longest piece of repository text (a name, a message) shown, in characters. */
@@ -217,6 +220,8 @@ function modelDetail(m) {
         return lines;
     }
     const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+    if ((0,classifier_figures/* isClassifier */.aA)(m))
+        lines.push(markdown_text((0,classifier_figures/* classifierLine */.KT)(m)), '');
     lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
     for (const c of shown)
         lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${(0,wording/* limitText */.PW)(c)} | ${c.line} |`);
@@ -224,7 +229,7 @@ function modelDetail(m) {
     for (const c of shown)
         lines.push(`- **${c.id}**: ${markdown_text(c.message)}. ${markdown_text(c.advice)}`);
     lines.push('');
-    const chart = mermaidChart(m);
+    const chart = (0,classifier_figures/* isClassifier */.aA)(m) ? (0,classifier_figures/* calibrationChart */.dO)(m) : mermaidChart(m);
     if (chart !== null)
         lines.push(chart);
     return lines;

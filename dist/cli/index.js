@@ -33,15 +33,17 @@ ucs2length.code = 'require("ajv/dist/runtime/ucs2length").default';
 
 /***/ }),
 
-/***/ 1093:
+/***/ 1800:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
   ui: () => (/* binding */ CHECKS),
+  NR: () => (/* binding */ checksFor),
   Sd: () => (/* binding */ findCheck),
-  k_: () => (/* binding */ runCheck)
+  k_: () => (/* binding */ runCheck),
+  Rc: () => (/* binding */ runClassifierCheck)
 });
 
 // UNUSED EXPORTS: registryLimitKeys
@@ -50,7 +52,160 @@ __nccwpck_require__.d(__webpack_exports__, {
 var result = __nccwpck_require__(1628);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __nccwpck_require__(6228);
+// EXTERNAL MODULE: ./src/core/json.ts
+var json = __nccwpck_require__(6153);
+;// CONCATENATED MODULE: ./src/checks/classifier/measures.ts
+/**
+ * How the checks shared with regression measure a binary classifier (Check.measureClassifier):
+ * each figure is the classification counterpart of the regression one, from the log-loss
+ * (mean -[y log p + (1 - y) log(1 - p)]) where the regression check uses the RMSE.
+ */
+
+
+
+/** b / a, with 0 / 0 = 1 and x / 0 = Infinity. */
+function ratio(a, b) {
+    if (a === 0)
+        return b === 0 ? 1 : Infinity;
+    return b / a;
+}
+/** `generalisation-gap`: hold-out log-loss / training log-loss. */
+function classifierGap({ train, holdout }) {
+    const value = ratio(train.logLoss, holdout.logLoss);
+    return {
+        value,
+        message: `hold-out log-loss ${(0,format/* formatNumber */.Z)(holdout.logLoss)} is ${(0,format/* formatNumber */.Z)(value)} times the training log-loss ${(0,format/* formatNumber */.Z)(train.logLoss)}`,
+        metrics: { gap_ratio: value },
+    };
+}
+/** `coefficient-size`: max over non-intercept columns of |w_j| sd(phi_j), the change of the log-odds for one standard deviation of the column. */
+function classifierCoefficientSize({ fit, design, columnSd }) {
+    let best = -1;
+    let value = Number.NaN;
+    for (let j = 0; j < design.p; j++) {
+        if (!design.penalised[j])
+            continue;
+        const s = Math.abs(fit.coefficients[j]) * columnSd[j];
+        if (best < 0 || s > value || Number.isNaN(s)) {
+            value = s;
+            best = j;
+        }
+    }
+    if (best < 0)
+        return { value: null, reason: 'no-columns', message: 'the model has no non-intercept columns' };
+    const term = design.termOffsets.findLastIndex((o) => o <= best);
+    return {
+        value,
+        message: `largest standardised coefficient is ${(0,format/* formatNumber */.Z)(value)} (log-odds per standard deviation), on column \`${design.columnNames[best]}\``,
+        line: term >= 0 ? design.terms[term].spec.line : undefined,
+        detail: { column: design.columnNames[best] },
+        metrics: { max_std_coefficient: value, max_std_coefficient_column: design.columnNames[best] },
+    };
+}
+/** `cross-validation`: pooled k-fold CV log-loss / training log-loss. */
+function classifierCrossValidation({ crossValidation: cv, train }) {
+    if (cv === null)
+        return { value: null, reason: 'too-few-rows', message: `cross-validation needs at least 2 training rows, got ${train.rows}` };
+    const value = ratio(train.logLoss, cv.logLoss);
+    return {
+        value,
+        message: `${cv.k}-fold CV log-loss ${(0,format/* formatNumber */.Z)(cv.logLoss)} is ${(0,format/* formatNumber */.Z)(value)} times the training log-loss ${(0,format/* formatNumber */.Z)(train.logLoss)}${cv.converged ? '' : ' (a fold fit did not converge)'}`,
+        metrics: (0,json/* jsonMetrics */.Gc)({ cv_log_loss: cv.logLoss, cv_folds: cv.k }),
+        detail: { folds: cv.k, fold_rows: cv.foldRows, fold_log_loss: cv.foldLogLoss, converged: cv.converged },
+    };
+}
+/** `leakage`: hold-out rows that repeat a training row (inputs and label). */
+function classifierLeakage({ leakage, design }) {
+    if (design.inputs.length === 0)
+        return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
+    const shown = leakage.examples.map((e) => `hold-out line ${e.holdoutLine} = training line ${e.trainLine}`).join(', ');
+    return {
+        value: leakage.duplicates,
+        message: leakage.duplicates === 0
+            ? 'no hold-out row repeats a training row'
+            : `${leakage.duplicates} hold-out rows repeat a training row, inputs and label (${shown})`,
+        metrics: { leaked_rows: leakage.duplicates },
+    };
+}
+/** `reproducibility`: largest |p_shipped - p_refit| over the training and hold-out rows. */
+function classifierReproducibility({ shipped }) {
+    if (shipped === null)
+        return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
+    return {
+        value: shipped.maxProbabilityDifference,
+        message: `the shipped coefficients' probabilities differ from the refit's by up to ${(0,format/* formatNumber */.Z)(shipped.maxProbabilityDifference)} (largest coefficient difference ${(0,format/* formatNumber */.Z)(shipped.maxCoefficientDifference)})`,
+        metrics: (0,json/* jsonMetrics */.Gc)({
+            shipped_max_probability_difference: shipped.maxProbabilityDifference,
+            shipped_holdout_log_loss: shipped.holdoutLogLoss,
+        }),
+    };
+}
+/** `conditioning`: condition number of the column-scaled weighted design sqrt(W) X at the optimum. */
+function classifierConditioning({ weighted, design }) {
+    const value = weighted.conditionNumberScaled;
+    const cols = weighted.collinearColumns.map((j) => `\`${design.columnNames[j]}\``).join(', ');
+    return {
+        value,
+        message: `the weighted design sqrt(W) X at the optimum has scaled condition number ${(0,format/* formatNumber */.Z)(value)}${value > 1e3 && cols ? ` (nearly collinear: ${cols})` : ''}`,
+        metrics: (0,json/* jsonMetrics */.Gc)({ condition_number: value, rank: weighted.rank }),
+    };
+}
+/** `base-change`: relative change of the hold-out log-loss against the base commit. */
+function classifierBaseChange({ holdout, baseline }) {
+    if (!baseline)
+        return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
+    const raw = baseline.metrics?.holdout_log_loss;
+    const base = typeof raw === 'number' || typeof raw === 'string' ? (0,result/* fromJsonNumber */.M)(raw) : Number.NaN;
+    if (Number.isNaN(base))
+        return { value: null, reason: 'base-not-checked', message: 'the model could not be checked as a classifier on the base commit' };
+    const head = holdout.logLoss;
+    const value = base === 0 ? (head === 0 ? 0 : Infinity) : (head - base) / base;
+    return {
+        value,
+        message: `hold-out log-loss ${(0,format/* formatNumber */.Z)(head)} against ${(0,format/* formatNumber */.Z)(base)} on the base commit`,
+        detail: { base_holdout_log_loss: base },
+    };
+}
+/** `complexity`: the current setting's CV log-loss / that of the setting the one-standard-error rule picks. */
+function classifierComplexity({ complexity: sweep }) {
+    if (sweep === null || sweep.chosen < 0 || sweep.current < 0)
+        return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
+    const label = (i) => `${sweep.kind} ${(0,format/* formatNumber */.Z)(sweep.points[i].value)}`;
+    const chosen = sweep.points[sweep.chosen];
+    const current = sweep.points[sweep.current];
+    const value = chosen.cvLogLoss > 0 ? current.cvLogLoss / chosen.cvLogLoss : current.cvLogLoss === 0 ? 1 : Infinity;
+    const detail = {
+        setting: sweep.kind,
+        rule: 'one-standard-error',
+        chosen: sweep.chosen,
+        best: sweep.best,
+        current: sweep.current,
+        curve: sweep.points.map((p) => ({ setting: p.value, cv_log_loss: p.cvLogLoss, se: p.standardError })),
+    };
+    if (sweep.chosen === sweep.current) {
+        return {
+            value,
+            message: `${label(sweep.current)} is the simplest setting within one standard error of the best CV log-loss (${sweep.points.length} settings swept)`,
+            line: sweep.line,
+            detail,
+            metrics: { suggested_setting: label(sweep.current) },
+        };
+    }
+    return {
+        value,
+        message: `${label(sweep.chosen)} has k-fold CV log-loss ${(0,format/* formatNumber */.Z)(chosen.cvLogLoss)} against ${(0,format/* formatNumber */.Z)(current.cvLogLoss)} for the current ${label(sweep.current)}; the simplest of ${sweep.points.length} settings within one standard error of the best`,
+        line: sweep.line,
+        detail,
+        metrics: { suggested_setting: label(sweep.chosen) },
+        suggestion: {
+            text: `${label(sweep.chosen)} (k-fold CV log-loss ${(0,format/* formatNumber */.Z)(chosen.cvLogLoss)} against ${(0,format/* formatNumber */.Z)(current.cvLogLoss)} now)`,
+            line: sweep.line,
+        },
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/checks/base-change.ts
+
 
 
 /** Formats a fraction as a signed percentage, e.g. `+12.5%`. */
@@ -72,6 +227,7 @@ const check = {
   the pull request and when no base commit is available. \`base_change: 0.1\` allows 10 % worse.`,
     advice: 'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
     line: (d) => d.termsLine,
+    measureClassifier: classifierBaseChange,
     measure({ metrics, baseline }) {
         if (!baseline)
             return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
@@ -97,6 +253,7 @@ var errors = __nccwpck_require__(4296);
  */
 
 
+
 const coefficient_size_check = {
     id: 'coefficient-size',
     title: 'Coefficient size',
@@ -112,6 +269,7 @@ const coefficient_size_check = {
   each other, the signature of an overfit or ill-conditioned fit.`,
     advice: 'Add a ridge penalty (`fit.ridge`) or remove nearly collinear terms so that columns stop cancelling each other.',
     line: (d) => d.fit.ridgeLine,
+    measureClassifier: classifierCoefficientSize,
     measure({ metrics, design }) {
         if (metrics.maxStdCoefficientColumn < 0) {
             return { value: null, reason: 'no-columns', message: 'the model has no non-intercept columns' };
@@ -130,6 +288,7 @@ const coefficient_size_check = {
 
 ;// CONCATENATED MODULE: ./src/checks/generalisation-gap.ts
 
+
 const generalisation_gap_check = {
     id: 'generalisation-gap',
     title: 'Generalisation gap',
@@ -145,6 +304,7 @@ const generalisation_gap_check = {
   section 7.2). The default 1.5 is common practice, not a law: set it per model.`,
     advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
     line: (d) => d.fit.line,
+    measureClassifier: classifierGap,
     measure({ metrics }) {
         return {
             value: metrics.gapRatio,
@@ -191,311 +351,14 @@ const parameter_ratio_check = {
 };
 /* harmony default export */ const parameter_ratio = (parameter_ratio_check);
 
-// EXTERNAL MODULE: ./src/design/terms/index.ts + 3 modules
-var design_terms = __nccwpck_require__(7482);
-// EXTERNAL MODULE: ./src/design/design-matrix.ts
-var design_matrix = __nccwpck_require__(6566);
-// EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
-var fit = __nccwpck_require__(2485);
-// EXTERNAL MODULE: ./src/fit/svd.ts
-var svd = __nccwpck_require__(5936);
-;// CONCATENATED MODULE: ./src/fit/ridge-path.ts
-
-/**
- * Coefficients of every penalty, or null when the penalised columns are not all columns or all
- * but the first, when r00 is 0, or when a penalty is not positive (the caller then solves each
- * penalty on its own).
- *
- * @param data factor of the data rows (not modified)
- * @param lambdas penalties, each > 0
- * @param penalised which columns are penalised (length p)
- * @returns one length-p coefficient array per penalty, in order
- */
-function ridgePath(data, lambdas, penalised) {
-    const p = data.p;
-    if (p === 0 || penalised.length !== p || !lambdas.every((l) => l > 0 && Number.isFinite(l)))
-        return null;
-    let free = 0;
-    while (free < p && !penalised[free])
-        free++;
-    for (let j = free; j < p; j++)
-        if (!penalised[j])
-            return null;
-    if (free > 1)
-        return null;
-    const R = data.R;
-    const q = data.qty;
-    if (free === 1 && !(R[0] !== 0))
-        return null;
-    // The penalised block R2 (k x k) and its right-hand side q2.
-    const k = p - free;
-    if (k === 0)
-        return null;
-    const out = lambdas.map(() => new Float64Array(p));
-    const R2 = new Float64Array(k * k);
-    for (let c = 0; c < k; c++)
-        for (let r = 0; r <= c; r++)
-            R2[c * k + r] = R[(c + free) * p + (r + free)];
-    let decomposition;
-    try {
-        decomposition = (0,svd/* svd */.C)(R2, k, k, 'both');
-    }
-    catch {
-        return null;
-    }
-    const { s, U, V } = decomposition;
-    // U^T q2 once.
-    const uq = new Float64Array(k);
-    for (let c = 0; c < k; c++) {
-        let t = 0;
-        for (let r = 0; r < k; r++)
-            t += U[c * k + r] * q[r + free];
-        uq[c] = t;
-    }
-    const coef = new Float64Array(k);
-    lambdas.forEach((lambda, index) => {
-        for (let c = 0; c < k; c++)
-            coef[c] = (s[c] / (s[c] * s[c] + lambda)) * uq[c];
-        const w = out[index];
-        for (let r = 0; r < k; r++) {
-            let t = 0;
-            for (let c = 0; c < k; c++)
-                t += V[c * k + r] * coef[c];
-            w[r + free] = t;
-        }
-        if (free === 1) {
-            let t = q[0];
-            for (let j = 1; j < p; j++)
-                t -= R[j * p] * w[j];
-            w[0] = t / R[0];
-        }
-    });
-    if (out.some((w) => w.some((v) => !Number.isFinite(v))))
-        return null;
-    return out;
-}
-
-// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
-var cross_validation = __nccwpck_require__(7114);
-// EXTERNAL MODULE: ./src/diagnostics/folds.ts
-var diagnostics_folds = __nccwpck_require__(9236);
-;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
-/**
- * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
- * on the same folds, and pick the simplest setting whose error is within one standard error of
- * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
- * section 7.10, the "one-standard-error" rule).
- */
-
-
-
-
-
-
-/**
- * The one-standard-error rule: with the settings ordered from simplest to most complex, the
- * minimum mean error m* at index `best` and its standard error s*, the choice is the simplest
- * setting whose mean is at most m* + s* (ESL 2nd ed. section 7.10, p. 244). Non-finite means are
- * never the best nor chosen. Returns -1 for both when no mean is finite.
- *
- * @param curve points ordered simplest first
- */
-function oneStandardErrorRule(curve) {
-    let best = -1;
-    for (let i = 0; i < curve.length; i++) {
-        if (Number.isFinite(curve[i].mean) && (best < 0 || curve[i].mean < curve[best].mean))
-            best = i;
-    }
-    if (best < 0)
-        return { best: -1, chosen: -1 };
-    const se = Number.isFinite(curve[best].se) ? curve[best].se : 0;
-    const threshold = curve[best].mean + se;
-    for (let i = 0; i <= best; i++)
-        if (Number.isFinite(curve[i].mean) && curve[i].mean <= threshold)
-            return { best, chosen: i };
-    return { best, chosen: best };
-}
-/** Formats a setting for people (up to 3 significant digits). */
-function formatSetting(x) {
-    if (x === 0)
-        return '0';
-    const a = Math.abs(x);
-    if (a < 1e-3 || a >= 1e5)
-        return x.toExponential(1).replace('e+', 'e');
-    return String(Number(x.toPrecision(a >= 1 ? 3 : 2)));
-}
-/** The setting a sweep varies for this model, or null when there is none. */
-function sweepTarget(descriptor, design) {
-    if (descriptor.fit.ridge > 0)
-        return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
-    let poly = -1;
-    let rbf = -1;
-    design.terms.forEach((t, i) => {
-        const spec = t.spec;
-        if (spec.kind === 'polynomial' && (poly < 0 || spec.degree > design.terms[poly].spec.degree))
-            poly = i;
-        if (spec.kind === 'rbf' && rbf < 0)
-            rbf = i;
-    });
-    if (poly >= 0)
-        return { kind: 'degree', term: poly, line: design.terms[poly].spec.line };
-    if (rbf >= 0)
-        return { kind: 'width', term: rbf, line: design.terms[rbf].spec.line };
-    if (design.p > (design.intercept ? 1 : 0))
-        return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
-    return null;
-}
-/**
- * Rows the sweep uses at most: above this a deterministic even-stride subsample (the detail says
- * `subsampled: true` and gives `rows`). 50,000 rows estimate each setting's k-fold error to well
- * under its own standard error, at a quarter of the cost of 200,000 (common practice: the curve
- * only has to rank the settings).
- */
-const SWEEP_MAX_ROWS = 50000;
-/** Every other row at an even stride, as new columns. */
-function subsample(data, m) {
-    const n = data.rows;
-    const pick = (col) => {
-        const out = new Float64Array(m);
-        for (let t = 0; t < m; t++)
-            out[t] = col[Math.floor((t * n) / m)];
-        return out;
-    };
-    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
-}
-/**
- * coefficients[s][f]: the fit without fold f under penalty s. One SVD per fold serves every
- * positive penalty ({@link ridgePath}); a penalty of 0, or a factor the path does not take, is
- * solved on its own.
- */
-function sweepCoefficients(complements, lambdas, penalised) {
-    const coefficients = lambdas.map(() => new Array(complements.length));
-    const positive = lambdas.filter((l) => l > 0);
-    complements.forEach((acc, f) => {
-        const path = ridgePath(acc, positive, penalised);
-        let next = 0;
-        lambdas.forEach((lambda, s) => {
-            coefficients[s][f] = path !== null && lambda > 0 ? path[next++] : (0,fit/* solveCoefficients */.gQ)(acc, { ridge: lambda, penalised });
-        });
-    });
-    return coefficients;
-}
-/**
- * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
- * k-fold errors (the same folds for every setting).
- *
- * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
- *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
- *   current lambda; simplest = largest. The design does not change, so the model's per-fold
- *   factors serve every lambda: one SVD per fold complement gives every lambda's coefficients
- *   ({@link ridgePath}), and each fold's squared errors come
- *   from its own factor ({@link outOfFoldErrorsFromFactors}), with no pass over the rows. Every
- *   row is used (no subsample).
- * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
- * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
- *   Degree and width settings each build their own design: two passes over the rows each, on
- *   an even-stride subsample above `maxRows` rows.
- *
- * @param descriptor the model (fit options, term lines)
- * @param design the fitted design
- * @param train training rows (inputs in `design.inputs` order)
- * @param fit the current fit (its factor gives trace(X^T X))
- * @param options row cap and highest degree
- * @returns null when the model has no setting to sweep or fewer than 2 rows
- */
-function sweepComplexity(descriptor, design, train, fit, options = {}) {
-    const target = sweepTarget(descriptor, design);
-    if (target === null || train.rows < 2)
-        return null;
-    const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
-    // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
-    const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
-    const rows = subsampled ? subsample(train, maxRows) : train;
-    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-    if (folds.k < 2)
-        return null;
-    const ridge = descriptor.fit.ridge;
-    const curve = [];
-    const pointFrom = (setting, label, parameters, sse, current) => {
-        const s = (0,cross_validation/* summariseFolds */.$l)(sse, folds.sizes);
-        return { setting, label, parameters, cvRmse: s.cvRmse, meanMse: s.meanMse, seMse: s.seMse, current };
-    };
-    if (target.kind === 'ridge') {
-        // trace(X^T X) = trace(R^T R) of the data rows = trace of the penalised factor minus lambda per penalised column.
-        const R = fit.factor.R;
-        const p = design.p;
-        let trace = 0;
-        for (let k = 0; k < p * p; k++)
-            trace += R[k] * R[k];
-        trace -= ridge * fit.penalised.filter(Boolean).length;
-        const scale = trace / Math.max(1, p);
-        const grid = [];
-        for (let t = 3; t >= -6; t -= 0.5)
-            grid.push(scale * 10 ** t);
-        const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
-        let factors;
-        if (options.factors) {
-            factors = options.factors();
-        }
-        else {
-            const perFold = (0,cross_validation/* foldFactors */.Y6)(design, rows, folds);
-            factors = { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
-        }
-        const coefficients = sweepCoefficients(factors.complements, lambdas, design.penalised);
-        const { sse } = (0,cross_validation/* outOfFoldErrorsFromFactors */.un)(factors.perFold, coefficients);
-        lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
-    }
-    else {
-        const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
-        const spec = design.terms[target.term].spec;
-        const settings = [];
-        if (target.kind === 'degree') {
-            const degree = spec.degree;
-            const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
-            for (let g = 1; g <= top; g++)
-                settings.push({ value: g, current: g === degree });
-        }
-        else {
-            const width = spec.width;
-            for (let t = 4; t >= -2; t--)
-                settings.push({ value: width * 2 ** t, current: t === 0 });
-        }
-        for (const { value, current } of settings) {
-            const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
-            const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
-            const d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
-            const label = `${target.kind} ${formatSetting(value)}`;
-            try {
-                const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(d, rows, folds));
-                const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, [ridge], d.penalised);
-                const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(d, rows, folds, coefficients);
-                curve.push(pointFrom(value, label, d.p, sse[0], current));
-            }
-            catch (error) {
-                // A setting whose fit cannot be computed (e.g. columns that underflow) leaves a gap in the curve.
-                if (!(error instanceof RangeError))
-                    throw error;
-                curve.push({ setting: value, label, parameters: d.p, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
-            }
-        }
-    }
-    const { best, chosen } = oneStandardErrorRule(curve.map((c) => ({ mean: c.meanMse, se: c.seMse })));
-    return {
-        kind: target.kind,
-        line: target.line,
-        curve,
-        best,
-        chosen,
-        current: curve.findIndex((c) => c.current),
-        rows: rows.rows,
-        subsampled,
-        folds: folds.k,
-    };
-}
-
-// EXTERNAL MODULE: ./src/core/json.ts
-var json = __nccwpck_require__(6153);
+// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
+var complexity = __nccwpck_require__(7070);
 ;// CONCATENATED MODULE: ./src/checks/complexity.ts
+/**
+ * `complexity`: the simpler setting to use, by the one-standard-error rule on a sweep of the
+ * model's main complexity setting.
+ */
+
 
 
 
@@ -536,9 +399,10 @@ const complexity_check = {
   \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
     advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
     line: (d) => d.fit.line,
+    measureClassifier: classifierComplexity,
     measure(context) {
         const { descriptor, design, train, fit } = context;
-        const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
+        const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
         if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
             return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
         }
@@ -582,12 +446,13 @@ const complexity_check = {
         };
     },
 };
-/* harmony default export */ const complexity = (complexity_check);
+/* harmony default export */ const checks_complexity = (complexity_check);
 
 ;// CONCATENATED MODULE: ./src/checks/conditioning.ts
 /**
  * `conditioning`: condition number of the column-scaled design, naming nearly collinear terms.
  */
+
 
 
 
@@ -610,6 +475,7 @@ const conditioning_check = {
   \`singular_values_scaled\`.`,
     advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
     line: (d) => d.termsLine,
+    measureClassifier: classifierConditioning,
     measure({ fit, design, descriptor }) {
         const value = fit.conditionNumberScaled;
         const columns = fit.collinearColumns.map((j) => design.columnNames[j]);
@@ -639,6 +505,7 @@ const conditioning_check = {
 // EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
 var regression_metrics = __nccwpck_require__(155);
 ;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
+
 
 
 
@@ -675,6 +542,7 @@ const cross_validation_check = {
   \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
     advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
     line: (d) => d.fit.line,
+    measureClassifier: classifierCrossValidation,
     measure(context) {
         const folds = context.analyses.folds();
         const cv = context.analyses.crossValidation();
@@ -721,12 +589,13 @@ const cross_validation_check = {
         };
     },
 };
-/* harmony default export */ const checks_cross_validation = (cross_validation_check);
+/* harmony default export */ const cross_validation = (cross_validation_check);
 
 ;// CONCATENATED MODULE: ./src/checks/leakage.ts
 /**
  * `leakage`: hold-out rows that repeat a training row.
  */
+
 
 const leakage_check = {
     id: 'leakage',
@@ -752,6 +621,7 @@ const leakage_check = {
   \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
     advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
     line: (d) => d.data.lines.holdout,
+    measureClassifier: classifierLeakage,
     measure(context) {
         const { holdout, train, design } = context;
         if (design.inputs.length === 0) {
@@ -792,6 +662,7 @@ const leakage_check = {
 
 
 
+
 const reproducibility_check = {
     id: 'reproducibility',
     title: 'Shipped coefficients against the refit',
@@ -809,6 +680,7 @@ const reproducibility_check = {
   \`holdout_rmse_ratio\` (shipped / refit), \`max_coefficient_difference\`.`,
     advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
     line: (d) => d.coefficientsLine ?? d.nameLine,
+    measureClassifier: classifierReproducibility,
     measure({ shipped, predictions, holdout, metrics }) {
         if (shipped === null)
             return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
@@ -974,7 +846,138 @@ const swing_beyond_check = {
 };
 /* harmony default export */ const swing_beyond = (swing_beyond_check);
 
+;// CONCATENATED MODULE: ./src/checks/calibration-slope.ts
+
+
+const calibration_slope_check = {
+    id: 'calibration-slope',
+    title: 'Calibration slope',
+    limitKey: 'calibration_slope',
+    defaultLimit: { warn: 0.8, fail: 0.6 },
+    direction: 'below',
+    limitSummary: 'Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit.',
+    description: `- Default \`{ warn: 0.8, fail: 0.6 }\` (floors: the check warns below 0.8 and fails below 0.6). Classifiers only. Points at the \`fit\` line.
+- Figure: b of the logistic recalibration logit P(y = 1) = a + b * logit(p) fitted (no penalty) on the
+  hold-out rows, p the model's probabilities (Cox 1958, "Two further applications of a model for binary
+  regression", Biometrika 45(3-4)). b = 1 and a = 0 for a calibrated model; b well below 1 means the
+  probabilities are too extreme on new rows, the classic sign of an overfit classifier. The intercept a
+  is in the metrics (\`calibration_intercept\`). The defaults 0.8 and 0.6 are common practice.`,
+    advice: 'Add a ridge penalty (`fit.ridge`) or use fewer terms so that the probabilities stop being over-confident on new rows.',
+    line: (d) => d.fit.line,
+    tasks: ['classification'],
+    measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
+    measureClassifier({ calibration, holdout }) {
+        const figures = (0,json/* jsonMetrics */.Gc)({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });
+        if (Number.isNaN(calibration.slope)) {
+            return {
+                value: null,
+                reason: 'not-identified',
+                message: `the hold-out rows (${holdout.positives} positive, ${holdout.negatives} negative) hold one class only or constant probabilities`,
+                metrics: figures,
+            };
+        }
+        return {
+            value: calibration.slope,
+            message: `hold-out calibration slope ${(0,format/* formatNumber */.Z)(calibration.slope)}, intercept ${(0,format/* formatNumber */.Z)(calibration.intercept)}${calibration.converged ? '' : ' (the recalibration did not converge: the hold-out rows are separated by the model)'}`,
+            metrics: figures,
+        };
+    },
+};
+/* harmony default export */ const calibration_slope = (calibration_slope_check);
+
+;// CONCATENATED MODULE: ./src/checks/events-per-parameter.ts
+
+const events_per_parameter_check = {
+    id: 'events-per-parameter',
+    title: 'Events per parameter',
+    limitKey: 'events_per_parameter',
+    defaultLimit: 10,
+    direction: 'below',
+    limitSummary: 'Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit.',
+    description: `- Default \`10\` (a floor: the check fails when the figure is below it). Classifiers only. Points at the \`terms\` line.
+- Figure: min(positives, negatives in the training rows) / p, p the design's columns. A logistic model
+  with fewer than about ten events of the rarer class per parameter gives biased coefficients and
+  over-confident probabilities (Peduzzi, Concato, Kemper, Holford & Feinstein 1996, "A simulation study
+  of the number of events per variable in logistic regression analysis", Journal of Clinical
+  Epidemiology 49(12)). The default 10 is common practice after that study, not a law.`,
+    advice: 'Use fewer terms or a lower degree, or collect more rows of the rarer class.',
+    line: (d) => d.termsLine,
+    tasks: ['classification'],
+    measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
+    measureClassifier({ train, design }) {
+        const events = Math.min(train.positives, train.negatives);
+        const value = events / design.p;
+        return {
+            value,
+            message: `${events} training rows of the smaller class (${train.positives} positive, ${train.negatives} negative) for ${design.p} parameters: ${(0,format/* formatNumber */.Z)(value)} per parameter`,
+            metrics: { events_per_parameter: value },
+        };
+    },
+};
+/* harmony default export */ const events_per_parameter = (events_per_parameter_check);
+
+;// CONCATENATED MODULE: ./src/checks/separation.ts
+const separation_check = {
+    id: 'separation',
+    title: 'Separation',
+    limitKey: 'separation',
+    defaultLimit: { warn: 0, fail: 1 },
+    direction: 'above',
+    limitSummary: 'Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.',
+    description: `- Default \`{ warn: 0, fail: 1 }\`: fails on complete separation, warns on quasi-complete. Classifiers only. Points at the \`terms\` line.
+- Figure: 2 when some direction b of the design separates the classes completely ((2y_i - 1) x_i^T b > 0
+  for every training row), 1 when it does so quasi-completely (>= 0 for every row, > 0 for some), 0 when
+  the classes overlap. Only with overlap do finite maximum-likelihood coefficients exist (Albert &
+  Anderson 1984, "On the existence of maximum likelihood estimates in logistic regression models",
+  Biometrika 71(1)); otherwise the fit's coefficients grow without bound and its probabilities reach 0
+  and 1. With \`fit.ridge\` > 0 the penalised fit exists, so complete separation counts 1 (a warning).
+- Exact test by linear programming (Konis 2007, DPhil thesis, University of Oxford): maximise the sum
+  of (2y_i - 1) x_i^T b subject to (2y_i - 1) x_i^T b >= 0 for every row and |b_j| <= 1, repeated over the
+  rows not yet separated, rows entering the program as cutting planes. Detail: the separated rows'
+  count and first lines, the columns of the separating direction and the direction itself.`,
+    advice: 'Remove or merge the terms along which the classes separate, add a ridge penalty (`fit.ridge`), or collect rows where the classes overlap.',
+    line: (d) => d.termsLine,
+    tasks: ['classification'],
+    measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
+    measureClassifier({ separation, design, descriptor }) {
+        const columns = separation.columns.map((j) => `\`${design.columnNames[j]}\``).join(', ');
+        const detail = {
+            kind: separation.kind,
+            separated_rows: separation.separatedRows,
+            lines: separation.lines,
+            columns: separation.columns.map((j) => design.columnNames[j]),
+            direction: separation.direction,
+            exact: separation.exact,
+        };
+        const metrics = { separation: separation.kind, separated_rows: separation.separatedRows };
+        if (separation.kind === 'none') {
+            return {
+                value: 0,
+                message: `the classes overlap: finite maximum-likelihood coefficients exist${separation.exact ? '' : ' (the test stopped at its size cap)'}`,
+                detail,
+                metrics,
+            };
+        }
+        const penalised = descriptor.fit.ridge > 0;
+        const value = separation.kind === 'complete' && !penalised ? 2 : 1;
+        const lines = separation.lines.slice(0, 10).join(', ') + (separation.separatedRows > 10 ? ', …' : '');
+        return {
+            value,
+            message: `${separation.kind} separation: ${separation.separatedRows} training rows (lines ${lines}) are separated along ${columns}${penalised ? '; the ridge penalty keeps the coefficients finite' : '; the maximum-likelihood coefficients are infinite'}`,
+            detail,
+            metrics,
+        };
+    },
+};
+/* harmony default export */ const separation = (separation_check);
+
 ;// CONCATENATED MODULE: ./src/checks/types.ts
+/** Whether a check applies to a task (see {@link Check.tasks}). */
+function appliesTo(check, task) {
+    if (check.tasks)
+        return check.tasks.includes(task);
+    return task === 'regression' || check.measureClassifier !== undefined;
+}
 /**
  * Compares a figure with a limit: beyond a fail bound (above `fail`, below `failBelow`) fails,
  * beyond a warn bound warns; a figure that is null or NaN, or an `off` limit, is skipped.
@@ -1004,19 +1007,25 @@ function judge(value, limit) {
 
 
 
+
+
+
 /** Every check, in report order. Ids are unique (checked on load). */
 const CHECKS = validate([
     generalisation_gap,
     parameter_ratio,
     coefficient_size,
     base_change,
-    checks_cross_validation,
+    cross_validation,
     swing,
     swing_beyond,
     leakage,
     reproducibility,
     conditioning,
-    complexity,
+    checks_complexity,
+    separation,
+    events_per_parameter,
+    calibration_slope,
 ]);
 function validate(checks) {
     const seen = new Set();
@@ -1064,11 +1073,30 @@ function describeLimit(status, value, limit) {
  * a skipped outcome with code `<id>/internal-error` (the run goes on).
  */
 function runCheck(check, context) {
+    return judgeCheck(check, context.descriptor, () => check.measure(context));
+}
+/**
+ * Runs one check on a binary classifier: its `measureClassifier`, or a skipped outcome
+ * `<id>/not-for-classification` when the check does not apply to classifiers.
+ */
+function runClassifierCheck(check, context) {
+    const measure = check.measureClassifier;
+    if (!appliesTo(check, 'classification') || measure === undefined) {
+        return judgeCheck(check, context.descriptor, () => ({ value: null, reason: 'not-for-classification', message: 'applies to regression models only' }));
+    }
+    return judgeCheck(check, context.descriptor, () => measure.call(check, context));
+}
+/** The checks that apply to a task, in report order (a regression model's report lists only these). */
+function checksFor(task) {
+    return CHECKS.filter((c) => task === 'classification' || appliesTo(c, task));
+}
+function judgeCheck(check, descriptor, measure) {
+    const context = { descriptor };
     const limit = context.descriptor.limits[check.limitKey];
     const line = limit?.line ?? null;
     let measured;
     try {
-        measured = check.measure(context);
+        measured = measure();
     }
     catch (error) {
         measured = {
@@ -1114,7 +1142,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4236);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(5786);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(3528);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
@@ -2343,6 +2371,324 @@ function createTerm(spec, training, file) {
 
 /***/ }),
 
+/***/ 7070:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  gs: () => (/* binding */ oneStandardErrorRule),
+  j6: () => (/* binding */ sweepComplexity),
+  mb: () => (/* binding */ sweepTarget)
+});
+
+// UNUSED EXPORTS: SWEEP_MAX_ROWS
+
+// EXTERNAL MODULE: ./src/design/terms/index.ts + 3 modules
+var design_terms = __nccwpck_require__(7482);
+// EXTERNAL MODULE: ./src/design/design-matrix.ts
+var design_matrix = __nccwpck_require__(6566);
+// EXTERNAL MODULE: ./src/fit/index.ts + 2 modules
+var fit = __nccwpck_require__(2450);
+// EXTERNAL MODULE: ./src/fit/svd.ts
+var svd = __nccwpck_require__(5936);
+;// CONCATENATED MODULE: ./src/fit/ridge-path.ts
+
+/**
+ * Coefficients of every penalty, or null when the penalised columns are not all columns or all
+ * but the first, when r00 is 0, or when a penalty is not positive (the caller then solves each
+ * penalty on its own).
+ *
+ * @param data factor of the data rows (not modified)
+ * @param lambdas penalties, each > 0
+ * @param penalised which columns are penalised (length p)
+ * @returns one length-p coefficient array per penalty, in order
+ */
+function ridgePath(data, lambdas, penalised) {
+    const p = data.p;
+    if (p === 0 || penalised.length !== p || !lambdas.every((l) => l > 0 && Number.isFinite(l)))
+        return null;
+    let free = 0;
+    while (free < p && !penalised[free])
+        free++;
+    for (let j = free; j < p; j++)
+        if (!penalised[j])
+            return null;
+    if (free > 1)
+        return null;
+    const R = data.R;
+    const q = data.qty;
+    if (free === 1 && !(R[0] !== 0))
+        return null;
+    // The penalised block R2 (k x k) and its right-hand side q2.
+    const k = p - free;
+    if (k === 0)
+        return null;
+    const out = lambdas.map(() => new Float64Array(p));
+    const R2 = new Float64Array(k * k);
+    for (let c = 0; c < k; c++)
+        for (let r = 0; r <= c; r++)
+            R2[c * k + r] = R[(c + free) * p + (r + free)];
+    let decomposition;
+    try {
+        decomposition = (0,svd/* svd */.C)(R2, k, k, 'both');
+    }
+    catch {
+        return null;
+    }
+    const { s, U, V } = decomposition;
+    // U^T q2 once.
+    const uq = new Float64Array(k);
+    for (let c = 0; c < k; c++) {
+        let t = 0;
+        for (let r = 0; r < k; r++)
+            t += U[c * k + r] * q[r + free];
+        uq[c] = t;
+    }
+    const coef = new Float64Array(k);
+    lambdas.forEach((lambda, index) => {
+        for (let c = 0; c < k; c++)
+            coef[c] = (s[c] / (s[c] * s[c] + lambda)) * uq[c];
+        const w = out[index];
+        for (let r = 0; r < k; r++) {
+            let t = 0;
+            for (let c = 0; c < k; c++)
+                t += V[c * k + r] * coef[c];
+            w[r + free] = t;
+        }
+        if (free === 1) {
+            let t = q[0];
+            for (let j = 1; j < p; j++)
+                t -= R[j * p] * w[j];
+            w[0] = t / R[0];
+        }
+    });
+    if (out.some((w) => w.some((v) => !Number.isFinite(v))))
+        return null;
+    return out;
+}
+
+// EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
+var cross_validation = __nccwpck_require__(7114);
+// EXTERNAL MODULE: ./src/diagnostics/folds.ts
+var diagnostics_folds = __nccwpck_require__(9236);
+;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
+/**
+ * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
+ * on the same folds, and pick the simplest setting whose error is within one standard error of
+ * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
+ * section 7.10, the "one-standard-error" rule).
+ */
+
+
+
+
+
+
+/**
+ * The one-standard-error rule: with the settings ordered from simplest to most complex, the
+ * minimum mean error m* at index `best` and its standard error s*, the choice is the simplest
+ * setting whose mean is at most m* + s* (ESL 2nd ed. section 7.10, p. 244). Non-finite means are
+ * never the best nor chosen. Returns -1 for both when no mean is finite.
+ *
+ * @param curve points ordered simplest first
+ */
+function oneStandardErrorRule(curve) {
+    let best = -1;
+    for (let i = 0; i < curve.length; i++) {
+        if (Number.isFinite(curve[i].mean) && (best < 0 || curve[i].mean < curve[best].mean))
+            best = i;
+    }
+    if (best < 0)
+        return { best: -1, chosen: -1 };
+    const se = Number.isFinite(curve[best].se) ? curve[best].se : 0;
+    const threshold = curve[best].mean + se;
+    for (let i = 0; i <= best; i++)
+        if (Number.isFinite(curve[i].mean) && curve[i].mean <= threshold)
+            return { best, chosen: i };
+    return { best, chosen: best };
+}
+/** Formats a setting for people (up to 3 significant digits). */
+function formatSetting(x) {
+    if (x === 0)
+        return '0';
+    const a = Math.abs(x);
+    if (a < 1e-3 || a >= 1e5)
+        return x.toExponential(1).replace('e+', 'e');
+    return String(Number(x.toPrecision(a >= 1 ? 3 : 2)));
+}
+/** The setting a sweep varies for this model, or null when there is none. */
+function sweepTarget(descriptor, design) {
+    if (descriptor.fit.ridge > 0)
+        return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
+    let poly = -1;
+    let rbf = -1;
+    design.terms.forEach((t, i) => {
+        const spec = t.spec;
+        if (spec.kind === 'polynomial' && (poly < 0 || spec.degree > design.terms[poly].spec.degree))
+            poly = i;
+        if (spec.kind === 'rbf' && rbf < 0)
+            rbf = i;
+    });
+    if (poly >= 0)
+        return { kind: 'degree', term: poly, line: design.terms[poly].spec.line };
+    if (rbf >= 0)
+        return { kind: 'width', term: rbf, line: design.terms[rbf].spec.line };
+    if (design.p > (design.intercept ? 1 : 0))
+        return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
+    return null;
+}
+/**
+ * Rows the sweep uses at most: above this a deterministic even-stride subsample (the detail says
+ * `subsampled: true` and gives `rows`). 50,000 rows estimate each setting's k-fold error to well
+ * under its own standard error, at a quarter of the cost of 200,000 (common practice: the curve
+ * only has to rank the settings).
+ */
+const SWEEP_MAX_ROWS = 50000;
+/** Every other row at an even stride, as new columns. */
+function subsample(data, m) {
+    const n = data.rows;
+    const pick = (col) => {
+        const out = new Float64Array(m);
+        for (let t = 0; t < m; t++)
+            out[t] = col[Math.floor((t * n) / m)];
+        return out;
+    };
+    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
+}
+/**
+ * coefficients[s][f]: the fit without fold f under penalty s. One SVD per fold serves every
+ * positive penalty ({@link ridgePath}); a penalty of 0, or a factor the path does not take, is
+ * solved on its own.
+ */
+function sweepCoefficients(complements, lambdas, penalised) {
+    const coefficients = lambdas.map(() => new Array(complements.length));
+    const positive = lambdas.filter((l) => l > 0);
+    complements.forEach((acc, f) => {
+        const path = ridgePath(acc, positive, penalised);
+        let next = 0;
+        lambdas.forEach((lambda, s) => {
+            coefficients[s][f] = path !== null && lambda > 0 ? path[next++] : (0,fit/* solveCoefficients */.gQ)(acc, { ridge: lambda, penalised });
+        });
+    });
+    return coefficients;
+}
+/**
+ * Sweeps the model's main complexity setting and applies {@link oneStandardErrorRule} to the
+ * k-fold errors (the same folds for every setting).
+ *
+ * - A ridge penalty above 0 (or a model of linear terms only): lambda on a log grid
+ *   s x 10^t, t = -6, -5.5, ..., 3, with s = trace(X^T X) / p of the current design, plus the
+ *   current lambda; simplest = largest. The design does not change, so the model's per-fold
+ *   factors serve every lambda: one SVD per fold complement gives every lambda's coefficients
+ *   ({@link ridgePath}), and each fold's squared errors come
+ *   from its own factor ({@link outOfFoldErrorsFromFactors}), with no pass over the rows. Every
+ *   row is used (no subsample).
+ * - Else the polynomial term of highest degree: degrees 1 .. min(current + 3, maxDegree).
+ * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
+ *   Degree and width settings each build their own design: two passes over the rows each, on
+ *   an even-stride subsample above `maxRows` rows.
+ *
+ * @param descriptor the model (fit options, term lines)
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param fit the current fit (its factor gives trace(X^T X))
+ * @param options row cap and highest degree
+ * @returns null when the model has no setting to sweep or fewer than 2 rows
+ */
+function sweepComplexity(descriptor, design, train, fit, options = {}) {
+    const target = sweepTarget(descriptor, design);
+    if (target === null || train.rows < 2)
+        return null;
+    const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
+    // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
+    const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
+    const rows = subsampled ? subsample(train, maxRows) : train;
+    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    if (folds.k < 2)
+        return null;
+    const ridge = descriptor.fit.ridge;
+    const curve = [];
+    const pointFrom = (setting, label, parameters, sse, current) => {
+        const s = (0,cross_validation/* summariseFolds */.$l)(sse, folds.sizes);
+        return { setting, label, parameters, cvRmse: s.cvRmse, meanMse: s.meanMse, seMse: s.seMse, current };
+    };
+    if (target.kind === 'ridge') {
+        // trace(X^T X) = trace(R^T R) of the data rows = trace of the penalised factor minus lambda per penalised column.
+        const R = fit.factor.R;
+        const p = design.p;
+        let trace = 0;
+        for (let k = 0; k < p * p; k++)
+            trace += R[k] * R[k];
+        trace -= ridge * fit.penalised.filter(Boolean).length;
+        const scale = trace / Math.max(1, p);
+        const grid = [];
+        for (let t = 3; t >= -6; t -= 0.5)
+            grid.push(scale * 10 ** t);
+        const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
+        let factors;
+        if (options.factors) {
+            factors = options.factors();
+        }
+        else {
+            const perFold = (0,cross_validation/* foldFactors */.Y6)(design, rows, folds);
+            factors = { perFold, complements: (0,cross_validation/* complementFactors */.Zd)(perFold) };
+        }
+        const coefficients = sweepCoefficients(factors.complements, lambdas, design.penalised);
+        const { sse } = (0,cross_validation/* outOfFoldErrorsFromFactors */.un)(factors.perFold, coefficients);
+        lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
+    }
+    else {
+        const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
+        const spec = design.terms[target.term].spec;
+        const settings = [];
+        if (target.kind === 'degree') {
+            const degree = spec.degree;
+            const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
+            for (let g = 1; g <= top; g++)
+                settings.push({ value: g, current: g === degree });
+        }
+        else {
+            const width = spec.width;
+            for (let t = 4; t >= -2; t--)
+                settings.push({ value: width * 2 ** t, current: t === 0 });
+        }
+        for (const { value, current } of settings) {
+            const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
+            const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
+            const d = (0,design_matrix/* createDesign */.x)(terms, design.intercept);
+            const label = `${target.kind} ${formatSetting(value)}`;
+            try {
+                const factors = (0,cross_validation/* complementFactors */.Zd)((0,cross_validation/* foldFactors */.Y6)(d, rows, folds));
+                const coefficients = (0,cross_validation/* complementCoefficients */.dn)(factors, [ridge], d.penalised);
+                const { sse } = (0,cross_validation/* outOfFoldErrors */.Yo)(d, rows, folds, coefficients);
+                curve.push(pointFrom(value, label, d.p, sse[0], current));
+            }
+            catch (error) {
+                // A setting whose fit cannot be computed (e.g. columns that underflow) leaves a gap in the curve.
+                if (!(error instanceof RangeError))
+                    throw error;
+                curve.push({ setting: value, label, parameters: d.p, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+            }
+        }
+    }
+    const { best, chosen } = oneStandardErrorRule(curve.map((c) => ({ mean: c.meanMse, se: c.seMse })));
+    return {
+        kind: target.kind,
+        line: target.line,
+        curve,
+        best,
+        chosen,
+        current: curve.findIndex((c) => c.current),
+        rows: rows.rows,
+        subsampled,
+        folds: folds.k,
+    };
+}
+
+
+/***/ }),
+
 /***/ 7114:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -2358,7 +2704,7 @@ function createTerm(spec, training, file) {
 /* harmony export */   un: () => (/* binding */ outOfFoldErrorsFromFactors)
 /* harmony export */ });
 /* unused harmony export LEVERAGE_ONE_TOLERANCE */
-/* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2485);
+/* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2450);
 /* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8667);
 
@@ -3464,13 +3810,13 @@ function syncFolder(dir) {
 
 /***/ }),
 
-/***/ 2485:
+/***/ 2450:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
-  SC: () => (/* reexport */ qr_accumulator_QrAccumulator),
+  SC: () => (/* reexport */ qr_accumulator/* QrAccumulator */.S),
   rT: () => (/* binding */ RefinementPass),
   Ps: () => (/* binding */ fitFactor),
   lG: () => (/* binding */ leveragesInto),
@@ -3633,149 +3979,8 @@ class FactorSolver {
     }
 }
 
-// EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
-var kernels = __nccwpck_require__(8667);
-;// CONCATENATED MODULE: ./src/fit/qr-accumulator.ts
-/**
- * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
- * factor block by block, so memory grows with p^2 and not with the number of rows.
- *
- * Folding a block of m rows computes the QR factorisation of the stacked matrix
- *
- *     [ R    qty ]
- *     [ X_b  y_b ]
- *
- * where R is already triangular. Householder reflector j only has to touch row j of R and the
- * m block rows, so a block costs O(m p^2) flops (Golub & Van Loan, Matrix Computations, 4th ed.,
- * sec. 5.1-5.2 Householder QR, and sec. 6.5.2 on updating a QR factorisation by appending rows).
- * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
- */
-
-/** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
-const WORK_NUMBERS = 16384;
-/**
- * Streaming Householder QR: folds row blocks into an upper-triangular p x p factor R, Q^T y and
- * the residual sum of squares.
- *
- * With X the n x p matrix of every row folded so far and y its right-hand side, the state is
- * X = Q [R; 0], Q^T y = [qty; r] and `rss` = ||r||^2, which is the least-squares residual sum of
- * squares min ||X w - y||^2 when R has full rank. Reflectors use the sign choice
- * beta = -sign(alpha) ||a|| (no cancellation), so diagonal entries of R may be negative.
- *
- * @example
- * const acc = new QrAccumulator(2);
- * acc.addRows(new Float64Array([1, 1, 1, 0, 1, 2]), new Float64Array([1, 2, 3]), 3);
- */
-class qr_accumulator_QrAccumulator {
-    /** Number of columns. */
-    p;
-    #rows = 0;
-    #R;
-    #qty;
-    #rss = 0;
-    /** Rows per piece of a fold (the leading dimension of the kernel's work block). */
-    #chunk;
-    /**
-     * @param p number of columns of the design (a non-negative integer)
-     * @throws RangeError when p is not a non-negative integer
-     */
-    constructor(p) {
-        if (!Number.isInteger(p) || p < 0) {
-            throw new RangeError(`QrAccumulator: p must be a non-negative integer, got ${String(p)}`);
-        }
-        this.p = p;
-        this.#R = new Float64Array(p * p);
-        this.#qty = new Float64Array(p);
-        this.#chunk = Math.max(16, Math.floor(WORK_NUMBERS / (p + 1)));
-    }
-    /** Number of rows folded in so far (all rows, including penalty rows). */
-    get rows() {
-        return this.#rows;
-    }
-    /**
-     * Upper-triangular factor, p x p, column-major (R[j*p + i]); rows beyond the rank are zero
-     * (up to rounding) when fewer rows than p were folded. This is the live array: read it, do
-     * not write it (use {@link clone} for a copy to change).
-     */
-    get R() {
-        return this.#R;
-    }
-    /** First p entries of Q^T y (live array: read only). */
-    get qty() {
-        return this.#qty;
-    }
-    /** Sum of squares of the remaining entries of Q^T y (the least-squares residual sum of squares when R has full rank). */
-    get rss() {
-        return this.#rss;
-    }
-    /**
-     * Fold m rows into the factor. Large m is processed in internal blocks; the inputs are not
-     * modified.
-     *
-     * @param X column-major m x p block (X[j*m + i] is row i, column j); length at least m*p
-     * @param y right-hand side, length m or more (the first m entries are used)
-     * @param m number of rows (a non-negative integer; 0 does nothing)
-     * @throws RangeError on bad shapes or a NaN / infinite value (the message names row and column)
-     */
-    addRows(X, y, m) {
-        const p = this.p;
-        if (!Number.isInteger(m) || m < 0) {
-            throw new RangeError(`addRows: m must be a non-negative integer, got ${String(m)}`);
-        }
-        if (X.length < m * p) {
-            throw new RangeError(`addRows: X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
-        }
-        if (y.length < m) {
-            throw new RangeError(`addRows: y must hold at least m = ${m} numbers, got ${y.length}`);
-        }
-        this.#foldAll(X, y, m);
-        this.#rows += m;
-    }
-    /**
-     * Fold another accumulator's factor into this one: stack [R1; R2] (with their Q^T y) and
-     * re-triangularise; residual sums of squares and row counts add. Used for k-fold
-     * cross-validation: the fit without fold k is the merge of the other folds.
-     *
-     * @param other an accumulator with the same p (not modified)
-     * @throws RangeError when the column counts differ
-     */
-    merge(other) {
-        if (other.p !== this.p) {
-            throw new RangeError(`merge: column counts differ (${this.p} and ${other.p})`);
-        }
-        // R2 is column-major p x p with leading dimension p: exactly the block layout of addRows.
-        // Copy first so that merging an accumulator into itself reads the old factor.
-        const R2 = Float64Array.from(other.#R);
-        const qty2 = Float64Array.from(other.#qty);
-        const rss2 = other.#rss;
-        const rows2 = other.#rows;
-        this.#foldAll(R2, qty2, this.p);
-        this.#rss += rss2;
-        this.#rows += rows2;
-    }
-    /** An independent copy (same factor, right-hand side, rss and row count). */
-    clone() {
-        const copy = new qr_accumulator_QrAccumulator(this.p);
-        copy.#R.set(this.#R);
-        copy.#qty.set(this.#qty);
-        copy.#rss = this.#rss;
-        copy.#rows = this.#rows;
-        return copy;
-    }
-    /** Folds a column-major m x p block in pieces of at most `#chunk` rows (kernels/qr-fold.ts). */
-    #foldAll(X, y, m) {
-        const { rss, bad } = (0,kernels/* foldRows */.$8)(this.#R, this.#qty, this.#rss, X, y, m, this.p, this.#chunk);
-        this.#rss = rss;
-        if (bad !== null)
-            throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
-    }
-}
-/** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
-function notFinite(row, column, value) {
-    const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
-    return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
-}
-
+// EXTERNAL MODULE: ./src/fit/qr-accumulator.ts
+var qr_accumulator = __nccwpck_require__(1355);
 ;// CONCATENATED MODULE: ./src/fit/ridge.ts
 /**
  * Checks a penalty and its column mask.
@@ -3825,6 +4030,8 @@ function penalisedFactor(data, lambda, mask) {
     return factor;
 }
 
+// EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
+var kernels = __nccwpck_require__(8667);
 ;// CONCATENATED MODULE: ./src/fit/index.ts
 /**
  * The fitting engine: least squares and ridge from a streaming Householder QR factor, with
@@ -4058,7 +4265,7 @@ class RefinementPass {
         checkShape(X, y, m, w.length);
         const { sumOfSquares: ss, bad } = (0,kernels/* refineRows */.Hb)(X, y, m, w, this.#gHi, this.#gLo);
         if (bad !== null)
-            fit_notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
+            notFinite(X, y, m, bad.column < 0 ? -1 : bad.column * m + bad.row, bad.column < 0 ? bad.row : -1);
         this.#rss += ss;
     }
     /** The refined fit (coefficients w + dw, `rss` at w + dw, `refined` true), or the fit unchanged (see the class note). */
@@ -4213,7 +4420,7 @@ function hatTrace(data, solver) {
 /** Checks a column-major block and its right-hand side for shape and finiteness. */
 function checkBlock(X, y, m, p) {
     checkShape(X, y, m, p);
-    fit_notFinite(X, y, m, (0,kernels/* firstNotFinite */.vN)(X, m * p), y === undefined ? -1 : (0,kernels/* firstNotFinite */.vN)(y, m));
+    notFinite(X, y, m, (0,kernels/* firstNotFinite */.vN)(X, m * p), y === undefined ? -1 : (0,kernels/* firstNotFinite */.vN)(y, m));
 }
 /** Checks the shapes of a column-major block and its right-hand side. */
 function checkShape(X, y, m, p) {
@@ -4228,11 +4435,161 @@ function checkShape(X, y, m, p) {
  * Throws the RangeError for the first value of X (index k, column-major with m rows) or else of y
  * (index i) that is not finite; does nothing when both are -1.
  */
-function fit_notFinite(X, y, m, k, i) {
+function notFinite(X, y, m, k, i) {
     if (k >= 0)
         throw new RangeError(`X at row ${k % m}, column ${Math.floor(k / m)} must be a finite number, got ${String(X[k])}`);
     if (i >= 0 && y !== undefined)
         throw new RangeError(`y at row ${i} must be a finite number, got ${String(y[i])}`);
+}
+
+
+/***/ }),
+
+/***/ 1355:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   S: () => (/* binding */ QrAccumulator)
+/* harmony export */ });
+/* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8667);
+/**
+ * Streaming Householder QR of a tall design: rows are folded into a p x p upper-triangular
+ * factor block by block, so memory grows with p^2 and not with the number of rows.
+ *
+ * Folding a block of m rows computes the QR factorisation of the stacked matrix
+ *
+ *     [ R    qty ]
+ *     [ X_b  y_b ]
+ *
+ * where R is already triangular. Householder reflector j only has to touch row j of R and the
+ * m block rows, so a block costs O(m p^2) flops (Golub & Van Loan, Matrix Computations, 4th ed.,
+ * sec. 5.1-5.2 Householder QR, and sec. 6.5.2 on updating a QR factorisation by appending rows).
+ * The parts of the transformed right-hand side that leave the top p rows are summed into `rss`.
+ */
+
+/** Target size of the internal work block in numbers (m x p chunk plus its right-hand side). */
+const WORK_NUMBERS = 16384;
+/**
+ * Streaming Householder QR: folds row blocks into an upper-triangular p x p factor R, Q^T y and
+ * the residual sum of squares.
+ *
+ * With X the n x p matrix of every row folded so far and y its right-hand side, the state is
+ * X = Q [R; 0], Q^T y = [qty; r] and `rss` = ||r||^2, which is the least-squares residual sum of
+ * squares min ||X w - y||^2 when R has full rank. Reflectors use the sign choice
+ * beta = -sign(alpha) ||a|| (no cancellation), so diagonal entries of R may be negative.
+ *
+ * @example
+ * const acc = new QrAccumulator(2);
+ * acc.addRows(new Float64Array([1, 1, 1, 0, 1, 2]), new Float64Array([1, 2, 3]), 3);
+ */
+class QrAccumulator {
+    /** Number of columns. */
+    p;
+    #rows = 0;
+    #R;
+    #qty;
+    #rss = 0;
+    /** Rows per piece of a fold (the leading dimension of the kernel's work block). */
+    #chunk;
+    /**
+     * @param p number of columns of the design (a non-negative integer)
+     * @throws RangeError when p is not a non-negative integer
+     */
+    constructor(p) {
+        if (!Number.isInteger(p) || p < 0) {
+            throw new RangeError(`QrAccumulator: p must be a non-negative integer, got ${String(p)}`);
+        }
+        this.p = p;
+        this.#R = new Float64Array(p * p);
+        this.#qty = new Float64Array(p);
+        this.#chunk = Math.max(16, Math.floor(WORK_NUMBERS / (p + 1)));
+    }
+    /** Number of rows folded in so far (all rows, including penalty rows). */
+    get rows() {
+        return this.#rows;
+    }
+    /**
+     * Upper-triangular factor, p x p, column-major (R[j*p + i]); rows beyond the rank are zero
+     * (up to rounding) when fewer rows than p were folded. This is the live array: read it, do
+     * not write it (use {@link clone} for a copy to change).
+     */
+    get R() {
+        return this.#R;
+    }
+    /** First p entries of Q^T y (live array: read only). */
+    get qty() {
+        return this.#qty;
+    }
+    /** Sum of squares of the remaining entries of Q^T y (the least-squares residual sum of squares when R has full rank). */
+    get rss() {
+        return this.#rss;
+    }
+    /**
+     * Fold m rows into the factor. Large m is processed in internal blocks; the inputs are not
+     * modified.
+     *
+     * @param X column-major m x p block (X[j*m + i] is row i, column j); length at least m*p
+     * @param y right-hand side, length m or more (the first m entries are used)
+     * @param m number of rows (a non-negative integer; 0 does nothing)
+     * @throws RangeError on bad shapes or a NaN / infinite value (the message names row and column)
+     */
+    addRows(X, y, m) {
+        const p = this.p;
+        if (!Number.isInteger(m) || m < 0) {
+            throw new RangeError(`addRows: m must be a non-negative integer, got ${String(m)}`);
+        }
+        if (X.length < m * p) {
+            throw new RangeError(`addRows: X must hold m*p = ${m * p} numbers (column-major ${m} x ${p}), got ${X.length}`);
+        }
+        if (y.length < m) {
+            throw new RangeError(`addRows: y must hold at least m = ${m} numbers, got ${y.length}`);
+        }
+        this.#foldAll(X, y, m);
+        this.#rows += m;
+    }
+    /**
+     * Fold another accumulator's factor into this one: stack [R1; R2] (with their Q^T y) and
+     * re-triangularise; residual sums of squares and row counts add. Used for k-fold
+     * cross-validation: the fit without fold k is the merge of the other folds.
+     *
+     * @param other an accumulator with the same p (not modified)
+     * @throws RangeError when the column counts differ
+     */
+    merge(other) {
+        if (other.p !== this.p) {
+            throw new RangeError(`merge: column counts differ (${this.p} and ${other.p})`);
+        }
+        // R2 is column-major p x p with leading dimension p: exactly the block layout of addRows.
+        // Copy first so that merging an accumulator into itself reads the old factor.
+        const R2 = Float64Array.from(other.#R);
+        const qty2 = Float64Array.from(other.#qty);
+        const rss2 = other.#rss;
+        const rows2 = other.#rows;
+        this.#foldAll(R2, qty2, this.p);
+        this.#rss += rss2;
+        this.#rows += rows2;
+    }
+    /** An independent copy (same factor, right-hand side, rss and row count). */
+    clone() {
+        const copy = new QrAccumulator(this.p);
+        copy.#R.set(this.#R);
+        copy.#qty.set(this.#qty);
+        copy.#rss = this.#rss;
+        copy.#rows = this.#rows;
+        return copy;
+    }
+    /** Folds a column-major m x p block in pieces of at most `#chunk` rows (kernels/qr-fold.ts). */
+    #foldAll(X, y, m) {
+        const { rss, bad } = (0,_kernels_index_js__WEBPACK_IMPORTED_MODULE_0__/* .foldRows */ .$8)(this.#R, this.#qty, this.#rss, X, y, m, this.p, this.#chunk);
+        this.#rss = rss;
+        if (bad !== null)
+            throw notFinite(bad.row, bad.column, bad.column < 0 ? y[bad.row] : X[bad.column * m + bad.row]);
+    }
+}
+/** The error for a value of X (row, column) or of y (column -1) that is NaN or infinite. */
+function notFinite(row, column, value) {
+    const what = column < 0 ? `y at row ${row}` : `X at row ${row}, column ${column}`;
+    return new RangeError(`addRows: ${what} must be a finite number, got ${String(value)}`);
 }
 
 
@@ -5757,6 +6114,72 @@ function joinRepoPath(fromFile, target, location) {
 
 /***/ }),
 
+/***/ 2953:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   KT: () => (/* binding */ classifierLine),
+/* harmony export */   aA: () => (/* binding */ isClassifier),
+/* harmony export */   dO: () => (/* binding */ calibrationChart)
+/* harmony export */ });
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6228);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4031);
+/**
+ * The figures of a binary classifier for the text and Markdown reports (format only): one line of
+ * its hold-out figures, and a small Mermaid chart of its hold-out calibration diagram.
+ */
+
+
+
+/** True when the model was checked as a classifier. */
+function isClassifier(m) {
+    return m.metrics?.task === 'classification';
+}
+function figure(m, key) {
+    const v = m.metrics?.[key];
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
+}
+/**
+ * One line: log-loss (training and hold-out), AUC, Brier score, accuracy, calibration slope and
+ * the class counts, e.g. `classifier: log-loss 0.41 / 0.52 (train / hold-out), AUC 0.83, ...`.
+ */
+function classifierLine(m) {
+    return (`classifier: log-loss ${figure(m, 'train_log_loss')} / ${figure(m, 'holdout_log_loss')} (train / hold-out), ` +
+        `AUC ${figure(m, 'train_auc')} / ${figure(m, 'holdout_auc')}, Brier ${figure(m, 'holdout_brier')}, ` +
+        `accuracy ${figure(m, 'holdout_accuracy')} at ${figure(m, 'threshold')}, calibration slope ${figure(m, 'calibration_slope')}, ` +
+        `training rows ${figure(m, 'train_positives')} positive / ${figure(m, 'train_negatives')} negative`);
+}
+/**
+ * A Mermaid `xychart-beta` of the hold-out calibration diagram: observed share of positives per
+ * bin of predicted probability (bars), and the bins' mean prediction (a line: a calibrated model's
+ * bars reach it). Null when the model has no bins.
+ */
+function calibrationChart(m) {
+    const bins = (m.extra?.calibration_bins ?? null);
+    if (!Array.isArray(bins) || bins.length === 0)
+        return null;
+    const used = bins.filter((b) => b.count > 0);
+    if (used.length < 2)
+        return null;
+    const v = (x) => String(Number((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(x).toFixed(3)));
+    const title = `${m.name}: hold-out calibration (bars observed, line predicted; rows per bin ${used.map((b) => b.count).join(', ')})`;
+    return [
+        '```mermaid',
+        'xychart-beta',
+        `  title "${(0,_escape_js__WEBPACK_IMPORTED_MODULE_2__/* .escapeMermaid */ .Fw)(title)}"`,
+        `  x-axis "predicted probability" [${used.map((b) => `"${b.from.toFixed(1)}-${b.to.toFixed(1)}"`).join(', ')}]`,
+        '  y-axis "share positive" 0 --> 1',
+        `  bar [${used.map((b) => v(b.observed)).join(', ')}]`,
+        `  line [${used.map((b) => v(b.predicted)).join(', ')}]`,
+        '```',
+        '',
+    ].join('\n');
+}
+
+
+/***/ }),
+
 /***/ 4031:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -5943,14 +6366,16 @@ function quoteServerText(text, max = MAX_SERVER_TEXT) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   v: () => (/* binding */ formatText)
 /* harmony export */ });
-/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
-/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(6228);
-/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4031);
-/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(673);
+/* harmony import */ var _classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2953);
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1628);
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6228);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4031);
+/* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(673);
 /**
  * The terminal report: one aligned table of every model, then one block per model that did not
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
+
 
 
 
@@ -5971,12 +6396,12 @@ function table(rows, rightAligned) {
 }
 function metric(m, key) {
     const v = m.metrics?.[key];
-    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_2__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(v)) : '–';
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
     const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
-    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(c.message)}`;
-    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(c.advice)}` : text;
+    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.message)}`;
+    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
 /** Formats the Result for a terminal. */
 function formatText(result, options = {}) {
@@ -5985,7 +6410,7 @@ function formatText(result, options = {}) {
     const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
     const rows = result.models.map((m) => [
         m.verdict,
-        (0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.name),
+        (0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name),
         metric(m, 'holdout_rmse'),
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
@@ -6006,23 +6431,25 @@ function formatText(result, options = {}) {
         if (m.verdict === 'pass')
             continue;
         out.push('');
-        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(m.descriptor)})`);
+        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.descriptor)})`);
         if (m.error) {
             const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(where + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(where + m.error.message)}`);
             continue;
         }
+        if ((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .isClassifier */ .aA)(m))
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
         for (const c of m.checks)
             if (c.status === 'fail' || c.status === 'warn')
                 out.push(checkLine(m, c, color));
     }
     for (const note of result.notes)
-        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_3__/* .escapeTerminal */ .en)(note)}`);
+        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(note)}`);
     const { counts } = result;
     out.push('');
     out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
     // Read by a CI runner when the CLI runs in a CI step: no line may hold a runner command.
-    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_1__/* .neutraliseLog */ .Z$)(out.join('\n'))}\n`;
+    return `${(0,_runner_commands_js__WEBPACK_IMPORTED_MODULE_2__/* .neutraliseLog */ .Z$)(out.join('\n'))}\n`;
 }
 
 
@@ -6070,7 +6497,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 5786:
+/***/ 3528:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -6097,6 +6524,9 @@ const limit_keys_LIMIT_KEYS = Object.freeze([
     { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
     { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
     { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
+    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
+    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
+    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
 ]);
 
 ;// CONCATENATED MODULE: ./src/config/limits.ts
@@ -6491,9 +6921,9 @@ var ucs2length = __nccwpck_require__(6214);
 
 
 const validateSettings = validate52;
-const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
-const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } };
+const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
 const func2 = Object.prototype.hasOwnProperty;
 const schema21 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
 function validate54(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
@@ -6872,6 +7302,24 @@ function validate53(data, { instancePath = "", parentData, parentDataProperty, r
                 errors = vErrors.length;
             }
         }
+        if (data.separation !== undefined) {
+            if (!(validate54(data.separation, { instancePath: instancePath + "/separation", parentData: data, parentDataProperty: "separation", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.events_per_parameter !== undefined) {
+            if (!(validate54(data.events_per_parameter, { instancePath: instancePath + "/events_per_parameter", parentData: data, parentDataProperty: "events_per_parameter", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.calibration_slope !== undefined) {
+            if (!(validate54(data.calibration_slope, { instancePath: instancePath + "/calibration_slope", parentData: data, parentDataProperty: "calibration_slope", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
     }
     else {
         const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema20.type, parentSchema: schema20, data };
@@ -7196,15 +7644,15 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
     return errors === 0;
 }
 validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-const validateDescriptor = validate67;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model. Only `regression` today.", "enum": ["regression"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const validateDescriptor = validate70;
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial` or `rbf`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.", "type": "number" }, "scale": { "description": "Divides x - shift. Default: the training population standard deviation of x. Must be > 0.", "type": "number", "exclusiveMinimum": 0 } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "centers": { "$ref": "#/$defs/centers", "description": "The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)." }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 } } } } };
 const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
-function validate69(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+function validate72(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate69.evaluated;
+    const evaluated0 = validate72.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -7548,16 +7996,16 @@ function validate69(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
     }
-    validate69.errors = vErrors;
+    validate72.errors = vErrors;
     evaluated0.props = props0;
     evaluated0.items = items0;
     return errors === 0;
 }
-validate69.evaluated = { "dynamicProps": true, "dynamicItems": true };
-function validate68(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate72.evaluated = { "dynamicProps": true, "dynamicItems": true };
+function validate71(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate68.evaluated;
+    const evaluated0 = validate71.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -7876,8 +8324,8 @@ function validate68(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                 }
                 if (data7.centers !== undefined) {
-                    if (!(validate69(data7.centers, { instancePath: instancePath + "/rbf/centers", parentData: data7, parentDataProperty: "centers", rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+                    if (!(validate72(data7.centers, { instancePath: instancePath + "/rbf/centers", parentData: data7, parentDataProperty: "centers", rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
                         errors = vErrors.length;
                     }
                 }
@@ -7929,16 +8377,16 @@ function validate68(data, { instancePath = "", parentData, parentDataProperty, r
         }
         errors++;
     }
-    validate68.errors = vErrors;
+    validate71.errors = vErrors;
     return errors === 0;
 }
-validate68.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true }, "dynamicProps": false, "dynamicItems": false };
-const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } } } };
+validate71.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true }, "dynamicProps": false, "dynamicItems": false };
+const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
 const schema26 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
-function validate73(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+function validate76(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate73.evaluated;
+    const evaluated0 = validate76.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -8217,15 +8665,15 @@ function validate73(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
     }
-    validate73.errors = vErrors;
+    validate76.errors = vErrors;
     evaluated0.props = props0;
     return errors === 0;
 }
-validate73.evaluated = { "dynamicProps": true, "dynamicItems": false };
-function validate72(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate76.evaluated = { "dynamicProps": true, "dynamicItems": false };
+function validate75(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate72.evaluated;
+    const evaluated0 = validate75.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -8246,68 +8694,86 @@ function validate72(data, { instancePath = "", parentData, parentDataProperty, r
             }
         }
         if (data.gap_ratio !== undefined) {
-            if (!(validate73(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.params_per_sample !== undefined) {
-            if (!(validate73(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.coefficient !== undefined) {
-            if (!(validate73(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.base_change !== undefined) {
-            if (!(validate73(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.cv_ratio !== undefined) {
-            if (!(validate73(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.swing !== undefined) {
-            if (!(validate73(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.swing_beyond !== undefined) {
-            if (!(validate73(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.leakage !== undefined) {
-            if (!(validate73(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.reproducibility !== undefined) {
-            if (!(validate73(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.condition !== undefined) {
-            if (!(validate73(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
         if (data.complexity !== undefined) {
-            if (!(validate73(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+            if (!(validate76(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.separation !== undefined) {
+            if (!(validate76(data.separation, { instancePath: instancePath + "/separation", parentData: data, parentDataProperty: "separation", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.events_per_parameter !== undefined) {
+            if (!(validate76(data.events_per_parameter, { instancePath: instancePath + "/events_per_parameter", parentData: data, parentDataProperty: "events_per_parameter", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.calibration_slope !== undefined) {
+            if (!(validate76(data.calibration_slope, { instancePath: instancePath + "/calibration_slope", parentData: data, parentDataProperty: "calibration_slope", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
                 errors = vErrors.length;
             }
         }
@@ -8322,15 +8788,15 @@ function validate72(data, { instancePath = "", parentData, parentDataProperty, r
         }
         errors++;
     }
-    validate72.errors = vErrors;
+    validate75.errors = vErrors;
     return errors === 0;
 }
-validate72.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-function validate67(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+validate75.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate70(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
     /*# sourceURL="urn:fitgate:schema:descriptor:1" */ ;
     let vErrors = null;
     let errors = 0;
-    const evaluated0 = validate67.evaluated;
+    const evaluated0 = validate70.evaluated;
     if (evaluated0.dynamicProps) {
         evaluated0.props = undefined;
     }
@@ -8450,7 +8916,7 @@ function validate67(data, { instancePath = "", parentData, parentDataProperty, r
         }
         if (data.task !== undefined) {
             let data2 = data.task;
-            if (!(data2 === "regression")) {
+            if (!((data2 === "regression") || (data2 === "classification"))) {
                 const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema22.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.task.enum, parentSchema: schema22.properties.task, data: data2 };
                 if (vErrors === null) {
                     vErrors = [err10];
@@ -8495,7 +8961,7 @@ function validate67(data, { instancePath = "", parentData, parentDataProperty, r
                     errors++;
                 }
                 for (const key1 in data3) {
-                    if (!(((key1 === "train") || (key1 === "holdout")) || (key1 === "target"))) {
+                    if (!((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "positive"))) {
                         const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
                         if (vErrors === null) {
                             vErrors = [err14];
@@ -8581,41 +9047,34 @@ function validate67(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-            }
-            else {
-                const err21 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err21];
-                }
-                else {
-                    vErrors.push(err21);
-                }
-                errors++;
-            }
-        }
-        if (data.terms !== undefined) {
-            let data7 = data.terms;
-            if (Array.isArray(data7)) {
-                if (data7.length < 1) {
-                    const err22 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data7 };
-                    if (vErrors === null) {
-                        vErrors = [err22];
+                if (data3.positive !== undefined) {
+                    let data7 = data3.positive;
+                    if (typeof data7 === "string") {
+                        if (func1(data7) < 1) {
+                            const err21 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err21];
+                            }
+                            else {
+                                vErrors.push(err21);
+                            }
+                            errors++;
+                        }
                     }
                     else {
-                        vErrors.push(err22);
-                    }
-                    errors++;
-                }
-                const len0 = data7.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                    if (!(validate68(data7[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data7, parentDataProperty: i0, rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-                        errors = vErrors.length;
+                        const err22 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err22];
+                        }
+                        else {
+                            vErrors.push(err22);
+                        }
+                        errors++;
                     }
                 }
             }
             else {
-                const err23 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data7 };
+                const err23 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
                 if (vErrors === null) {
                     vErrors = [err23];
                 }
@@ -8625,50 +9084,57 @@ function validate67(data, { instancePath = "", parentData, parentDataProperty, r
                 errors++;
             }
         }
-        if (data.fit !== undefined) {
-            let data9 = data.fit;
-            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                for (const key2 in data9) {
-                    if (!((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count"))) {
-                        const err24 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err24];
-                        }
-                        else {
-                            vErrors.push(err24);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.intercept !== undefined) {
-                    let data10 = data9.intercept;
-                    if (typeof data10 !== "boolean") {
-                        const err25 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data10 };
-                        if (vErrors === null) {
-                            vErrors = [err25];
-                        }
-                        else {
-                            vErrors.push(err25);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.ridge !== undefined) {
-                    let data11 = data9.ridge;
-                    if ((typeof data11 == "number") && (isFinite(data11))) {
-                        if (data11 < 0 || isNaN(data11)) {
-                            const err26 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data11 };
-                            if (vErrors === null) {
-                                vErrors = [err26];
-                            }
-                            else {
-                                vErrors.push(err26);
-                            }
-                            errors++;
-                        }
+        if (data.terms !== undefined) {
+            let data8 = data.terms;
+            if (Array.isArray(data8)) {
+                if (data8.length < 1) {
+                    const err24 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data8 };
+                    if (vErrors === null) {
+                        vErrors = [err24];
                     }
                     else {
-                        const err27 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data11 };
+                        vErrors.push(err24);
+                    }
+                    errors++;
+                }
+                const len0 = data8.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    if (!(validate71(data8[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data8, parentDataProperty: i0, rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
+                        errors = vErrors.length;
+                    }
+                }
+            }
+            else {
+                const err25 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data8 };
+                if (vErrors === null) {
+                    vErrors = [err25];
+                }
+                else {
+                    vErrors.push(err25);
+                }
+                errors++;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data10 = data.fit;
+            if (data10 && typeof data10 == "object" && !Array.isArray(data10)) {
+                for (const key2 in data10) {
+                    if (!(((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))) {
+                        const err26 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err26];
+                        }
+                        else {
+                            vErrors.push(err26);
+                        }
+                        errors++;
+                    }
+                }
+                if (data10.intercept !== undefined) {
+                    let data11 = data10.intercept;
+                    if (typeof data11 !== "boolean") {
+                        const err27 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data11 };
                         if (vErrors === null) {
                             vErrors = [err27];
                         }
@@ -8678,35 +9144,35 @@ function validate67(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data9.folds !== undefined) {
-                    let data12 = data9.folds;
-                    if (!(((typeof data12 == "number") && (!(data12 % 1) && !isNaN(data12))) && (isFinite(data12)))) {
-                        const err28 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err28];
-                        }
-                        else {
-                            vErrors.push(err28);
-                        }
-                        errors++;
-                    }
+                if (data10.ridge !== undefined) {
+                    let data12 = data10.ridge;
                     if ((typeof data12 == "number") && (isFinite(data12))) {
-                        if (data12 < 2 || isNaN(data12)) {
-                            const err29 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data12 };
+                        if (data12 < 0 || isNaN(data12)) {
+                            const err28 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data12 };
                             if (vErrors === null) {
-                                vErrors = [err29];
+                                vErrors = [err28];
                             }
                             else {
-                                vErrors.push(err29);
+                                vErrors.push(err28);
                             }
                             errors++;
                         }
                     }
+                    else {
+                        const err29 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err29];
+                        }
+                        else {
+                            vErrors.push(err29);
+                        }
+                        errors++;
+                    }
                 }
-                if (data9.fold_order !== undefined) {
-                    let data13 = data9.fold_order;
-                    if (!((data13 === "shuffled") || (data13 === "blocks"))) {
-                        const err30 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data13 };
+                if (data10.folds !== undefined) {
+                    let data13 = data10.folds;
+                    if (!(((typeof data13 == "number") && (!(data13 % 1) && !isNaN(data13))) && (isFinite(data13)))) {
+                        const err30 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data13 };
                         if (vErrors === null) {
                             vErrors = [err30];
                         }
@@ -8715,127 +9181,187 @@ function validate67(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                    if ((typeof data13 == "number") && (isFinite(data13))) {
+                        if (data13 < 2 || isNaN(data13)) {
+                            const err31 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data13 };
+                            if (vErrors === null) {
+                                vErrors = [err31];
+                            }
+                            else {
+                                vErrors.push(err31);
+                            }
+                            errors++;
+                        }
+                    }
                 }
-                if (data9.seed !== undefined) {
-                    let data14 = data9.seed;
-                    if (!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))) {
-                        const err31 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data14 };
+                if (data10.fold_order !== undefined) {
+                    let data14 = data10.fold_order;
+                    if (!((data14 === "shuffled") || (data14 === "blocks"))) {
+                        const err32 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data14 };
                         if (vErrors === null) {
-                            vErrors = [err31];
+                            vErrors = [err32];
                         }
                         else {
-                            vErrors.push(err31);
+                            vErrors.push(err32);
                         }
                         errors++;
                     }
-                    if ((typeof data14 == "number") && (isFinite(data14))) {
-                        if (data14 > 4294967295 || isNaN(data14)) {
-                            const err32 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data14 };
+                }
+                if (data10.seed !== undefined) {
+                    let data15 = data10.seed;
+                    if (!(((typeof data15 == "number") && (!(data15 % 1) && !isNaN(data15))) && (isFinite(data15)))) {
+                        const err33 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data15 };
+                        if (vErrors === null) {
+                            vErrors = [err33];
+                        }
+                        else {
+                            vErrors.push(err33);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data15 == "number") && (isFinite(data15))) {
+                        if (data15 > 4294967295 || isNaN(data15)) {
+                            const err34 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data15 };
                             if (vErrors === null) {
-                                vErrors = [err32];
+                                vErrors = [err34];
                             }
                             else {
-                                vErrors.push(err32);
+                                vErrors.push(err34);
                             }
                             errors++;
                         }
-                        if (data14 < 0 || isNaN(data14)) {
-                            const err33 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data14 };
+                        if (data15 < 0 || isNaN(data15)) {
+                            const err35 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data15 };
                             if (vErrors === null) {
-                                vErrors = [err33];
+                                vErrors = [err35];
                             }
                             else {
-                                vErrors.push(err33);
+                                vErrors.push(err35);
                             }
                             errors++;
                         }
                     }
                 }
-                if (data9.parameter_count !== undefined) {
-                    let data15 = data9.parameter_count;
-                    if (!((data15 === "columns") || (data15 === "effective"))) {
-                        const err34 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data15 };
+                if (data10.parameter_count !== undefined) {
+                    let data16 = data10.parameter_count;
+                    if (!((data16 === "columns") || (data16 === "effective"))) {
+                        const err36 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data16 };
                         if (vErrors === null) {
-                            vErrors = [err34];
+                            vErrors = [err36];
                         }
                         else {
-                            vErrors.push(err34);
+                            vErrors.push(err36);
+                        }
+                        errors++;
+                    }
+                }
+                if (data10.threshold !== undefined) {
+                    let data17 = data10.threshold;
+                    if ((typeof data17 == "number") && (isFinite(data17))) {
+                        if (data17 >= 1 || isNaN(data17)) {
+                            const err37 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data17 };
+                            if (vErrors === null) {
+                                vErrors = [err37];
+                            }
+                            else {
+                                vErrors.push(err37);
+                            }
+                            errors++;
+                        }
+                        if (data17 <= 0 || isNaN(data17)) {
+                            const err38 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data17 };
+                            if (vErrors === null) {
+                                vErrors = [err38];
+                            }
+                            else {
+                                vErrors.push(err38);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err39 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data17 };
+                        if (vErrors === null) {
+                            vErrors = [err39];
+                        }
+                        else {
+                            vErrors.push(err39);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err35 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data9 };
+                const err40 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data10 };
                 if (vErrors === null) {
-                    vErrors = [err35];
+                    vErrors = [err40];
                 }
                 else {
-                    vErrors.push(err35);
+                    vErrors.push(err40);
                 }
                 errors++;
             }
         }
         if (data.coefficients !== undefined) {
-            let data16 = data.coefficients;
-            if (Array.isArray(data16)) {
-                if (data16.length < 1) {
-                    const err36 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data16 };
+            let data18 = data.coefficients;
+            if (Array.isArray(data18)) {
+                if (data18.length < 1) {
+                    const err41 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data18 };
                     if (vErrors === null) {
-                        vErrors = [err36];
+                        vErrors = [err41];
                     }
                     else {
-                        vErrors.push(err36);
+                        vErrors.push(err41);
                     }
                     errors++;
                 }
-                const len1 = data16.length;
+                const len1 = data18.length;
                 for (let i1 = 0; i1 < len1; i1++) {
-                    let data17 = data16[i1];
-                    if (!((typeof data17 == "number") && (isFinite(data17)))) {
-                        const err37 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data17 };
+                    let data19 = data18[i1];
+                    if (!((typeof data19 == "number") && (isFinite(data19)))) {
+                        const err42 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data19 };
                         if (vErrors === null) {
-                            vErrors = [err37];
+                            vErrors = [err42];
                         }
                         else {
-                            vErrors.push(err37);
+                            vErrors.push(err42);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err38 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data16 };
+                const err43 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data18 };
                 if (vErrors === null) {
-                    vErrors = [err38];
+                    vErrors = [err43];
                 }
                 else {
-                    vErrors.push(err38);
+                    vErrors.push(err43);
                 }
                 errors++;
             }
         }
         if (data.limits !== undefined) {
-            if (!(validate72(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
+            if (!(validate75(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
                 errors = vErrors.length;
             }
         }
     }
     else {
-        const err39 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
+        const err44 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
         if (vErrors === null) {
-            vErrors = [err39];
+            vErrors = [err44];
         }
         else {
-            vErrors.push(err39);
+            vErrors.push(err44);
         }
         errors++;
     }
-    validate67.errors = vErrors;
+    validate70.errors = vErrors;
     return errors === 0;
 }
-validate67.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+validate70.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 
 ;// CONCATENATED MODULE: ./src/config/schemas.ts
 /**
@@ -9543,6 +10069,7 @@ function descriptorFromDocument(doc, file, settings) {
             holdout: raw.data.holdout,
             target: raw.data.target,
             lines: { train: line(['data', 'train']), holdout: line(['data', 'holdout']), target: line(['data', 'target']) },
+            positive: raw.data.positive ?? null,
         },
         terms,
         fit: {
@@ -9554,6 +10081,7 @@ function descriptorFromDocument(doc, file, settings) {
             parameterCount: raw.fit?.parameter_count ?? settings.fit.parameterCount,
             line: fitLine,
             ridgeLine: raw.fit?.ridge !== undefined ? line(['fit', 'ridge']) : fitLine,
+            threshold: raw.fit?.threshold ?? 0.5,
         },
         coefficients: raw.coefficients ? [...raw.coefficients] : null,
         coefficientsLine: raw.coefficients ? line(['coefficients']) : null,
@@ -9633,8 +10161,8 @@ function errorResult(name, descriptor, error) {
 const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./src/checks/index.ts + 14 modules
-var src_checks = __nccwpck_require__(1093);
+// EXTERNAL MODULE: ./src/checks/index.ts + 16 modules
+var src_checks = __nccwpck_require__(1800);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(7114);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
@@ -11129,84 +11657,8 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     };
 }
 
-// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
-var regression_metrics = __nccwpck_require__(155);
-;// CONCATENATED MODULE: ./src/diagnostics/shipped.ts
-
-
-function measures(data, predictions) {
-    const sums = (0,regression_metrics/* emptySums */.y3)();
-    (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
-    return (0,regression_metrics/* errorMeasures */._I)(sums);
-}
-/**
- * Scores shipped coefficients on the training and hold-out rows (one prediction pass each).
- * @param shipped length design.p (the caller checks it)
- * @param refit the refit's coefficients (length design.p)
- */
-function scoreShipped(design, train, holdout, shipped, refit) {
-    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, shipped);
-    let diff = 0;
-    for (let j = 0; j < design.p; j++)
-        diff = Math.max(diff, Math.abs(shipped[j] - refit[j]));
-    return {
-        coefficients: shipped,
-        holdoutPredictions,
-        train: measures(train, (0,blocks/* predictRows */.tp)(design, train, shipped)),
-        holdout: measures(holdout, holdoutPredictions),
-        maxCoefficientDifference: diff,
-    };
-}
-
-;// CONCATENATED MODULE: ./src/design/column-spread.ts
-/**
- * Population standard deviations of the design columns, gathered block by block in the same
- * pass that folds rows into the factor. Sums are taken about each column's first value, which
- * keeps the subtraction well conditioned for columns with a large offset.
- */
-
-/** Running sums per column. */
-class ColumnSpread {
-    p;
-    shift;
-    s1;
-    s2;
-    n = 0;
-    /** @param p number of columns */
-    constructor(p) {
-        this.p = p;
-        this.shift = new Float64Array(p);
-        this.s1 = new Float64Array(p);
-        this.s2 = new Float64Array(p);
-    }
-    /** Adds a column-major block of `m` rows. */
-    add(X, m) {
-        if (m === 0)
-            return;
-        for (let j = 0; j < this.p; j++) {
-            const base = j * m;
-            if (this.n === 0)
-                this.shift[j] = X[base];
-            const column = X.subarray(base, base + m);
-            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
-            this.s1[j] += (0,stats/* sumOfDeviations */.jZ)(column, m, this.shift[j]);
-            this.s2[j] += (0,stats/* sumOfSquaredDeviations */.Mq)(column, m, this.shift[j]);
-        }
-        this.n += m;
-    }
-    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
-    sd() {
-        const out = new Float64Array(this.p);
-        for (let j = 0; j < this.p; j++) {
-            const mean = this.s1[j] / this.n;
-            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
-        }
-        return out;
-    }
-}
-
-// EXTERNAL MODULE: ./src/fit/index.ts + 3 modules
-var src_fit = __nccwpck_require__(2485);
+// EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 10 modules
+var lib = __nccwpck_require__(8057);
 // EXTERNAL MODULE: ./src/data/csv-rules.ts
 var csv_rules = __nccwpck_require__(8706);
 // EXTERNAL MODULE: ./src/data/line-blocks.ts + 1 modules
@@ -11706,7 +12158,7 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
         }
     }
     // csv-parse is loaded only when a file needs it (most data files take the fast path).
-    const { generalChunks } = await Promise.all(/* import() */[__nccwpck_require__.e(70), __nccwpck_require__.e(462)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
+    const { generalChunks } = await __nccwpck_require__.e(/* import() */ 462).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
     yield* generalChunks(open(), target, handedOut);
 }
 
@@ -11770,8 +12222,1124 @@ function withAsker(error, descriptor) {
     return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,core_errors/* clip */.$Q)(descriptor.file)})`, error.location);
 }
 
+;// CONCATENATED MODULE: ./src/data/labels.ts
+/**
+ * The target of a binary classifier as 0/1: the two classes of the training rows, whichever way
+ * the file writes them (0/1, true/false, or two text labels with `data.positive` naming the
+ * positive one), checked and mapped to 1 (positive) and 0 (negative).
+ */
+
+
+
+
+/** Largest number of distinct labels collected before a target is judged not binary. */
+const MAX_LABELS = 20;
+/**
+ * Reads a classifier's columns: the inputs as numbers, the target as two classes mapped to 1
+ * (positive) and 0 (negative). Numbers: the two values 0 and 1 (1 positive), or two other
+ * numbers with `data.positive` naming one. Text: `true`/`false` (any case; true positive), or
+ * two labels with `data.positive` naming one. The hold-out rows may hold only labels the
+ * training rows hold.
+ * @throws InputError `target-classes` when the training rows hold fewer or more than two
+ *   classes (naming those found), `positive-label` when `data.positive` is needed and missing or
+ *   names no class found, and the errors of {@link loadModelData}
+ */
+async function loadClassifierData(repo, descriptor, inputs, settings) {
+    let tables;
+    try {
+        tables = await loadModelData(repo, descriptor, inputs, settings);
+    }
+    catch (error) {
+        if (error instanceof core_errors/* InputError */.dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
+            return loadTextLabels(repo, descriptor, inputs, settings);
+        }
+        throw error;
+    }
+    const found = distinctNumbers(tables.train.y, tables.train.rows);
+    const shown = found.map((v) => String(v));
+    const labels = chooseClasses(descriptor, shown, 'numeric');
+    const positive = Number(labels.positive);
+    const negative = Number(labels.negative);
+    for (const data of [tables.train, tables.holdout]) {
+        const y = data.y;
+        for (let i = 0; i < data.rows; i++) {
+            const v = y[i];
+            if (v === positive)
+                y[i] = 1;
+            else if (v === negative)
+                y[i] = 0;
+            else
+                throw unknownLabel(descriptor, data.file, data.lines[i], String(v), labels);
+        }
+    }
+    return { ...tables, labels };
+}
+/** The inputs as numbers and the target as text labels (a second read of each file for the target). */
+async function loadTextLabels(repo, descriptor, inputs, settings) {
+    const { data } = descriptor;
+    const read = async (path) => {
+        const table = await readTable(repo, path, { columns: [...inputs], maxBytes: settings.caps.maxFileBytes });
+        const codes = await readLabelCodes(repo, path, data.target, descriptor);
+        if (codes.rows !== table.rows)
+            throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${path}`);
+        return { table, codes };
+    };
+    const train = await read(data.train);
+    const holdout = await read(data.holdout);
+    const labels = chooseClasses(descriptor, train.codes.labels, 'text');
+    const toY = (part, file) => {
+        const y = new Float64Array(part.table.rows);
+        const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
+        for (let i = 0; i < y.length; i++) {
+            const m = meaning[part.codes.codes[i]];
+            if (m < 0)
+                throw unknownLabel(descriptor, file, part.table.lines[i], part.codes.labels[part.codes.codes[i]], labels);
+            y[i] = m;
+        }
+        return y;
+    };
+    const model = (part, file) => ({
+        inputs: inputs.map((c) => part.table.columns.get(c)),
+        y: toY(part, file),
+        lines: part.table.lines,
+        rows: part.table.rows,
+        file,
+    });
+    return { train: model(train, data.train), holdout: model(holdout, data.holdout), trainColumns: train.table.columns, labels };
+}
+/**
+ * Picks the positive and negative class among the labels found in the training rows.
+ * @throws InputError `target-classes` or `positive-label`
+ */
+function chooseClasses(descriptor, found, kind) {
+    const where = { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' };
+    const list = found
+        .slice(0, 6)
+        .map((l) => (0,core_errors/* quoteValue */.cl)(l, 30))
+        .join(', ') + (found.length > 6 ? ', …' : '');
+    if (found.length !== 2) {
+        const count = found.length >= MAX_LABELS ? `at least ${MAX_LABELS}` : String(found.length);
+        throw new core_errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
+    }
+    const positive = descriptor.data.positive ?? null;
+    if (positive !== null) {
+        const at = found.indexOf(positive);
+        if (at < 0) {
+            throw new core_errors/* InputError */.dz('positive-label', `\`data.positive\` is ${(0,core_errors/* quoteValue */.cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
+                ...where,
+                key: 'data.positive',
+            });
+        }
+        return { positive, negative: found[1 - at], kind };
+    }
+    if (kind === 'numeric' && found.includes('0') && found.includes('1'))
+        return { positive: '1', negative: '0', kind };
+    const lower = found.map((l) => l.toLowerCase());
+    if (lower.includes('true') && lower.includes('false')) {
+        const at = lower.indexOf('true');
+        return { positive: found[at], negative: found[1 - at], kind };
+    }
+    throw new core_errors/* InputError */.dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
+}
+function unknownLabel(descriptor, file, line, label, labels) {
+    return new core_errors/* InputError */.dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,core_errors/* quoteValue */.cl)(label, 30)} on line ${line} of ${file}; the training rows' classes are ${(0,core_errors/* quoteValue */.cl)(labels.positive, 30)} and ${(0,core_errors/* quoteValue */.cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
+}
+/** Distinct values of y[0..n), in order of first appearance (at most {@link MAX_LABELS}). */
+function distinctNumbers(y, n) {
+    const out = [];
+    for (let i = 0; i < n && out.length < MAX_LABELS; i++)
+        if (!out.includes(y[i]))
+            out.push(y[i]);
+    return out;
+}
+/**
+ * Reads one column of a CSV file as text labels (trimmed), coded by first appearance. The same
+ * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
+ * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
+ */
+async function readLabelCodes(repo, path, column, descriptor) {
+    const labels = [];
+    const index = new Map();
+    let codes = new Int32Array(1024);
+    let rows = 0;
+    let field = -1;
+    let tooMany = false;
+    const parser = (0,lib/* parse */.qg)({
+        bom: true,
+        delimiter: ',',
+        quote: '"',
+        escape: '"',
+        record_delimiter: ['\r\n', '\n'],
+        trim: true,
+        skip_empty_lines: true,
+        relax_column_count: true,
+    });
+    const consume = () => {
+        for (let record = parser.read(); record !== null; record = parser.read()) {
+            if (field < 0) {
+                field = record.indexOf(column);
+                continue;
+            }
+            const label = record[field] ?? '';
+            let code = index.get(label);
+            if (code === undefined) {
+                if (labels.length >= MAX_LABELS) {
+                    tooMany = true;
+                    continue;
+                }
+                code = labels.length;
+                labels.push(label);
+                index.set(label, code);
+            }
+            if (rows === codes.length) {
+                const next = new Int32Array(codes.length * 2);
+                next.set(codes);
+                codes = next;
+            }
+            codes[rows++] = code;
+        }
+    };
+    parser.on('readable', consume);
+    const done = new Promise((resolve, reject) => {
+        parser.on('end', resolve);
+        parser.on('error', reject);
+    });
+    for await (const piece of repo.stream(path))
+        parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
+    parser.end();
+    await done;
+    consume();
+    if (tooMany) {
+        throw new core_errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
+            file: descriptor.file,
+            line: descriptor.data.lines.target,
+            key: 'data.target',
+        });
+    }
+    return { labels, codes: codes.subarray(0, rows), rows };
+}
+
+;// CONCATENATED MODULE: ./src/design/column-spread.ts
+/**
+ * Population standard deviations of the design columns, gathered block by block in the same
+ * pass that folds rows into the factor. Sums are taken about each column's first value, which
+ * keeps the subtraction well conditioned for columns with a large offset.
+ */
+
+/** Running sums per column. */
+class ColumnSpread {
+    p;
+    shift;
+    s1;
+    s2;
+    n = 0;
+    /** @param p number of columns */
+    constructor(p) {
+        this.p = p;
+        this.shift = new Float64Array(p);
+        this.s1 = new Float64Array(p);
+        this.s2 = new Float64Array(p);
+    }
+    /** Adds a column-major block of `m` rows. */
+    add(X, m) {
+        if (m === 0)
+            return;
+        for (let j = 0; j < this.p; j++) {
+            const base = j * m;
+            if (this.n === 0)
+                this.shift[j] = X[base];
+            const column = X.subarray(base, base + m);
+            // One pass per sum (one loop per function; see DEVELOPERS.md, "Writing hot loops").
+            this.s1[j] += (0,stats/* sumOfDeviations */.jZ)(column, m, this.shift[j]);
+            this.s2[j] += (0,stats/* sumOfSquaredDeviations */.Mq)(column, m, this.shift[j]);
+        }
+        this.n += m;
+    }
+    /** Population standard deviation sqrt(mean((x - mean)^2)) of each column (NaN with no rows). */
+    sd() {
+        const out = new Float64Array(this.p);
+        for (let j = 0; j < this.p; j++) {
+            const mean = this.s1[j] / this.n;
+            out[j] = Math.sqrt(Math.max(0, this.s2[j] / this.n - mean * mean));
+        }
+        return out;
+    }
+}
+
 // EXTERNAL MODULE: ./src/design/terms/index.ts + 3 modules
 var design_terms = __nccwpck_require__(7482);
+// EXTERNAL MODULE: ./src/fit/qr-accumulator.ts
+var qr_accumulator = __nccwpck_require__(1355);
+// EXTERNAL MODULE: ./src/fit/index.ts + 2 modules
+var src_fit = __nccwpck_require__(2450);
+;// CONCATENATED MODULE: ./src/fit/logistic.ts
+/**
+ * Binary logistic regression by iteratively reweighted least squares (IRLS), each Newton step
+ * solved through the streaming QR engine on the weighted design, block by block (memory grows
+ * with p^2 and the block size, never with rows x p).
+ *
+ * Objective: F(w) = D(w) + ridge * sum over penalised j of w_j^2, with the deviance
+ * D(w) = -2 sum_i [y_i log p_i + (1 - y_i) log(1 - p_i)], p_i = 1 / (1 + exp(-x_i^T w)). This is
+ * 2 / C times the objective of scikit-learn's LogisticRegression with C = 1 / ridge and an
+ * unpenalised intercept, so both have the same minimiser.
+ *
+ * Newton step (McCullagh & Nelder, Generalized Linear Models, 2nd ed., 1989, sec. 2.5; Green
+ * 1984, JRSS B 46(2), "Iteratively reweighted least squares"): with W_i = p_i (1 - p_i) and the
+ * working response z_i = eta_i + (y_i - p_i) / W_i, the next w minimises
+ * sum_i W_i (z_i - x_i^T w)^2 + ridge ||E w||^2, i.e. the least squares of the rows
+ * sqrt(W_i) x_i against sqrt(W_i) z_i with the ridge penalty rows, which the QR accumulator folds
+ * (W_i is floored at 1e-14 so that a saturated row keeps a finite working response; the floor
+ * changes the path, not the minimiser, where the gradient X^T (y - p) - ridge E w is zero).
+ *
+ * Step halving: when F at the new w is above F at the previous one (beyond 1e-12 relative, the
+ * rounding of the sums), w moves half way back, up to 40 times.
+ *
+ * Stopping rule: the fit has converged when a Newton step lowers F by at most 1e-10 (|F| + 0.1)
+ * (the relative rule of R's glm.fit, tighter: Newton converges quadratically, so the coefficients
+ * of that step are accurate to about the square of the previous step's change), or, from the
+ * second step on, when the Newton decrement of the step just solved (the decrease the quadratic
+ * model predicts, d^T (X^T W X + ridge E) d) is at most that, the new coefficients then taken
+ * without another pass; at most 100 Newton steps.
+ */
+
+
+
+
+/** Largest number of Newton steps. */
+const LOGISTIC_MAX_ITERATIONS = 100;
+/** Relative decrease of the objective at which IRLS stops. */
+const LOGISTIC_TOLERANCE = 1e-10;
+/** Smallest IRLS weight p (1 - p). */
+const MIN_WEIGHT = 1e-14;
+/** Largest number of step halvings in a row. */
+const MAX_HALVINGS = 40;
+/**
+ * Fits one or more logistic regressions over the same design in shared passes (one pass over
+ * the rows per Newton step of all problems still running: the design block is built once).
+ *
+ * @param design the fixed design
+ * @param data the rows (y in {0, 1})
+ * @param options ridge and penalised columns
+ * @param problems the fits to make (e.g. the full fit, or one per cross-validation fold)
+ * @returns one fit per problem, in order
+ */
+function fitLogistic(design, data, options, problems) {
+    const p = design.p;
+    const maxIterations = options.maxIterations ?? LOGISTIC_MAX_ITERATIONS;
+    const states = problems.map((problem) => ({
+        problem,
+        w: problem.start ? Float64Array.from(problem.start) : defaultStart(design, data, problem),
+        previous: null,
+        previousObjective: Number.POSITIVE_INFINITY,
+        acc: new qr_accumulator/* QrAccumulator */.S(p),
+        deviance: 0,
+        rows: 0,
+        iterations: 0,
+        halvings: 0,
+        halvingRun: 0,
+        done: p === 0,
+        converged: p === 0,
+        lastFactor: null,
+        lastDeviance: Number.NaN,
+    }));
+    const size = Math.max(1, Math.min(data.rows, 1 << 16));
+    const eta = new Float64Array(size);
+    const scale = new Float64Array(size);
+    const target = new Float64Array(size);
+    const index = new Int32Array(size);
+    let work = new Float64Array(0);
+    for (let guard = 0; guard < (maxIterations + 1) * (MAX_HALVINGS + 2); guard++) {
+        const active = states.filter((s) => !s.done);
+        if (active.length === 0)
+            break;
+        for (const s of active) {
+            s.acc = new qr_accumulator/* QrAccumulator */.S(p);
+            s.deviance = 0;
+            s.rows = 0;
+        }
+        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
+            if (work.length < m * p)
+                work = new Float64Array(m * p);
+            for (const s of active) {
+                eta.fill(0, 0, m);
+                (0,kernels/* addProducts */.kD)(eta, 0, X, m, s.w, p);
+                const { foldOf, exclude } = s.problem;
+                const r = foldOf
+                    ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, index)
+                    : weightAllRows(eta, data.y, start, m, scale, target, index);
+                s.deviance += blockDeviance;
+                s.rows += r;
+                for (let j = 0; j < p; j++)
+                    scaleColumn(X, j * m, index, scale, r, work, j * r);
+                s.acc.addRows(work, target, r);
+            }
+        });
+        for (const s of active)
+            step(s, options, maxIterations);
+    }
+    return states.map((s) => ({
+        coefficients: s.w,
+        deviance: s.lastDeviance,
+        objective: s.previousObjective,
+        iterations: s.iterations,
+        halvings: s.halvings,
+        converged: s.converged,
+        rows: s.rows,
+        weightedFactor: s.lastFactor ?? s.acc,
+    }));
+}
+/** After a pass: accept the step (and solve the next), halve it, or stop. */
+function step(s, options, maxIterations) {
+    const objective = s.deviance + options.ridge * penaltySum(s.w, options.penalised);
+    const noise = 1e-12 * (Math.abs(s.previousObjective) + 0.1);
+    if (s.previous !== null && !(objective <= s.previousObjective + noise)) {
+        // Not lower: halve the step back towards the previous coefficients.
+        s.halvings += 1;
+        s.halvingRun += 1;
+        if (s.halvingRun > MAX_HALVINGS || !Number.isFinite(s.previousObjective)) {
+            s.w = s.previous;
+            s.done = true;
+            return;
+        }
+        for (let j = 0; j < s.w.length; j++)
+            s.w[j] = (s.w[j] + s.previous[j]) / 2;
+        return;
+    }
+    s.halvingRun = 0;
+    s.lastFactor = s.acc;
+    s.lastDeviance = s.deviance;
+    const decrease = s.previousObjective - objective;
+    s.previousObjective = objective;
+    if (s.previous !== null && decrease <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
+        s.done = true;
+        s.converged = true;
+        return;
+    }
+    if (s.iterations >= maxIterations) {
+        s.done = true;
+        return;
+    }
+    s.previous = Float64Array.from(s.w);
+    s.w = (0,src_fit/* solveCoefficients */.gQ)(s.acc, { ridge: options.ridge, penalised: options.penalised });
+    s.iterations += 1;
+    // Newton decrement: the quadratic model's decrease for the full step d = w_new - w, d^T (X^T W X + ridge E) d
+    // = ||R d||^2 + ridge ||E d||^2. When it is below the tolerance the new coefficients are taken
+    // without another pass (Boyd & Vandenberghe, Convex Optimization, 2004, sec. 9.5.1).
+    if (s.iterations > 1 && newtonDecrease(s.acc.R, s.w, s.previous, options) <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
+        s.done = true;
+        s.converged = true;
+    }
+}
+/** ||R d||^2 + ridge ||E d||^2 with d = w - previous (R upper triangular, column-major p x p). */
+function newtonDecrease(R, w, previous, options) {
+    const p = w.length;
+    let total = 0;
+    for (let i = 0; i < p; i++) {
+        let row = 0;
+        for (let j = i; j < p; j++)
+            row += R[j * p + i] * (w[j] - previous[j]);
+        total += row * row;
+        if (options.penalised[i])
+            total += options.ridge * (w[i] - previous[i]) ** 2;
+    }
+    return total;
+}
+/** sum over penalised j of w_j^2. */
+function penaltySum(w, penalised) {
+    let s = 0;
+    for (let j = 0; j < w.length; j++)
+        if (penalised[j])
+            s += w[j] * w[j];
+    return s;
+}
+/** Zero coefficients, but the intercept (column 0 when the design has one) at logit of the mean target of the rows fitted. */
+function defaultStart(design, data, problem) {
+    const w = new Float64Array(design.p);
+    if (!design.intercept)
+        return w;
+    let n = 0;
+    let positives = 0;
+    for (let i = 0; i < data.rows; i++) {
+        if (problem.foldOf && problem.foldOf[i] === problem.exclude)
+            continue;
+        n += 1;
+        positives += data.y[i];
+    }
+    const mean = (positives + 0.5) / (n + 1);
+    w[0] = Math.log(mean / (1 - mean));
+    return w;
+}
+/** The deviance of the last block weighted (read right after {@link weightRows}). */
+let blockDeviance = 0;
+/**
+ * The IRLS weights of one block: for each row kept, its index, sqrt(W) and sqrt(W) z, packed
+ * from 0; the block's deviance in {@link blockDeviance}.
+ * @returns the number of rows kept
+ */
+function weightRows(eta, y, start, m, foldOf, exclude, scale, target, index) {
+    let r = 0;
+    let dev = 0;
+    for (let i = 0; i < m; i++) {
+        if (foldOf[start + i] === exclude)
+            continue;
+        const e = eta[i];
+        const yi = y[start + i];
+        const x = Math.exp(-Math.abs(e));
+        dev += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
+        const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
+        const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
+        const s = Math.sqrt(w);
+        scale[r] = s;
+        target[r] = s * e + (yi - pr) / s;
+        index[r] = i;
+        r++;
+    }
+    blockDeviance = dev;
+    return r;
+}
+/** {@link weightRows} for every row of the block. */
+function weightAllRows(eta, y, start, m, scale, target, index) {
+    let dev = 0;
+    for (let i = 0; i < m; i++) {
+        const e = eta[i];
+        const yi = y[start + i];
+        const x = Math.exp(-Math.abs(e));
+        dev += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
+        const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
+        const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
+        const s = Math.sqrt(w);
+        scale[i] = s;
+        target[i] = s * e + (yi - pr) / s;
+        index[i] = i;
+    }
+    blockDeviance = dev;
+    return m;
+}
+/**
+ * One row's deviance -2 [y log p + (1 - y) log(1 - p)] from eta = logit p, without overflow:
+ * 2 [log(1 + exp(-|eta|)) + max(eta, 0) - y eta].
+ */
+function rowDeviance(eta, y) {
+    return 2 * (Math.log1p(Math.exp(-Math.abs(eta))) + Math.max(eta, 0) - y * eta);
+}
+/** out[to + k] = scale[k] X[from + index[k]] for k < r. */
+function scaleColumn(X, from, index, scale, r, out, to) {
+    for (let k = 0; k < r; k++)
+        out[to + k] = scale[k] * X[from + index[k]];
+}
+
+// EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
+var complexity = __nccwpck_require__(7070);
+;// CONCATENATED MODULE: ./src/diagnostics/classifier-complexity.ts
+
+
+
+
+
+
+
+/**
+ * Rows the classifier sweep uses at most (an even-stride subsample above it): every setting is
+ * k IRLS fits, so the sweep is kept to a bounded cost; 20,000 rows rank the settings well within
+ * their standard errors (common practice: the curve only has to rank the settings).
+ */
+const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
+/**
+ * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
+ * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
+ * started from the previous one's fold fits. Degree: 1 .. current + 3 (at most 15). Width: current
+ * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
+ * sd / sqrt(k)).
+ * @returns null when there is nothing to sweep or fewer than 2 folds
+ */
+function sweepClassifier(descriptor, design, train) {
+    const target = (0,complexity/* sweepTarget */.mb)(descriptor, design);
+    if (target === null || train.rows < 2)
+        return null;
+    const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? subsample(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
+    const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+    if (folds.k < 2)
+        return null;
+    const ridge = descriptor.fit.ridge;
+    const points = [];
+    if (target.kind === 'ridge') {
+        const s = Math.max(ridge, rows.rows / 1000);
+        const grid = [];
+        for (let t = 3; t >= -3; t--)
+            grid.push(s * 10 ** t);
+        const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
+        for (const l of lambdas)
+            points.push({ value: l, current: l === ridge, design, ridge: l });
+    }
+    else {
+        const trainColumns = new Map(design.inputs.map((name, c) => [name, train.inputs[c]]));
+        const spec = design.terms[target.term].spec;
+        const values = [];
+        if (target.kind === 'degree') {
+            const degree = spec.degree;
+            const top = Math.max(degree, Math.min(degree + 3, 15));
+            for (let g = 1; g <= top; g++)
+                values.push({ value: g, current: g === degree });
+        }
+        else {
+            const width = spec.width;
+            for (let t = 4; t >= -2; t--)
+                values.push({ value: width * 2 ** t, current: t === 0 });
+        }
+        for (const { value, current } of values) {
+            const changed = target.kind === 'degree' ? { ...spec, degree: value } : { ...spec, width: value };
+            const terms = design.terms.map((t, i) => (i === target.term ? (0,design_terms/* createTerm */.P)(changed, trainColumns, descriptor.file) : t));
+            points.push({ value, current, design: (0,design_matrix/* createDesign */.x)(terms, design.intercept), ridge });
+        }
+    }
+    const curve = [];
+    let starts = null;
+    for (const point of points) {
+        const d = point.design;
+        const problems = Array.from({ length: folds.k }, (_, f) => ({
+            foldOf: folds.foldOf,
+            exclude: f,
+            ...(starts && d === design ? { start: starts[f] } : {}),
+        }));
+        const fits = fitLogistic(d, rows, { ridge: point.ridge, penalised: [...d.penalised] }, problems);
+        if (d === design)
+            starts = fits.map((x) => x.coefficients);
+        const deviance = new Float64Array(folds.k);
+        const eta = new Float64Array(Math.min(rows.rows, 1 << 16));
+        (0,blocks/* forEachBlock */.aN)(d, rows, (X, start, m) => {
+            for (let f = 0; f < folds.k; f++) {
+                eta.fill(0, 0, m);
+                (0,kernels/* addProducts */.kD)(eta, 0, X, m, fits[f].coefficients, d.p);
+                for (let i = 0; i < m; i++)
+                    if (folds.foldOf[start + i] === f)
+                        deviance[f] += rowDeviance(eta[i], rows.y[start + i]);
+            }
+        });
+        const losses = Array.from(deviance, (dv, f) => dv / 2 / folds.sizes[f]);
+        const mean = losses.reduce((a, b) => a + b, 0) / losses.length;
+        const variance = losses.reduce((a, b) => a + (b - mean) ** 2, 0) / (losses.length - 1);
+        curve.push({ value: point.value, cvLogLoss: mean, standardError: Math.sqrt(variance / losses.length) });
+    }
+    const { best, chosen } = (0,complexity/* oneStandardErrorRule */.gs)(curve.map((c) => ({ mean: c.cvLogLoss, se: c.standardError })));
+    return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
+}
+/** Every (n / m)-th row, as new columns. */
+function subsample(data, m) {
+    const n = data.rows;
+    const pick = (col) => {
+        const out = new Float64Array(m);
+        for (let t = 0; t < m; t++)
+            out[t] = col[Math.floor((t * n) / m)];
+        return out;
+    };
+    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/classification-metrics.ts
+/**
+ * Figures of a binary classifier's probabilities against 0/1 labels: log-loss, Brier score,
+ * accuracy at a threshold, ROC AUC (Mann-Whitney, ties counted half), class counts, and the
+ * logistic recalibration (calibration intercept and slope, Cox 1958).
+ */
+
+
+/** p = 1 / (1 + exp(-eta)) for every entry. */
+function probabilities(eta) {
+    const out = new Float64Array(eta.length);
+    for (let i = 0; i < eta.length; i++)
+        out[i] = 1 / (1 + Math.exp(-eta[i]));
+    return out;
+}
+/**
+ * The figures of rows with labels y (0/1), linear predictors eta and probabilities p.
+ * @param threshold a row is predicted positive when p >= threshold
+ */
+function classificationFigures(y, eta, p, n, threshold) {
+    let dev = 0;
+    let brier = 0;
+    let correct = 0;
+    let positives = 0;
+    for (let i = 0; i < n; i++) {
+        const yi = y[i];
+        dev += rowDeviance(eta[i], yi);
+        const d = p[i] - yi;
+        brier += d * d;
+        if ((p[i] >= threshold ? 1 : 0) === yi)
+            correct += 1;
+        positives += yi;
+    }
+    return {
+        rows: n,
+        positives,
+        negatives: n - positives,
+        logLoss: dev / 2 / n,
+        brier: brier / n,
+        accuracy: correct / n,
+        auc: rocAuc(y, p, n),
+    };
+}
+/**
+ * ROC AUC as the Mann-Whitney statistic: the share of (positive, negative) pairs in which the
+ * positive scores higher, ties counted one half (Hanley & McNeil 1982, Radiology 143(1); equal to
+ * the trapezoidal area under the ROC curve). NaN when either class is absent.
+ */
+function rocAuc(y, score, n) {
+    let np = 0;
+    for (let i = 0; i < n; i++)
+        np += y[i];
+    const nn = n - np;
+    if (np === 0 || nn === 0)
+        return Number.NaN;
+    const pos = new Float64Array(np);
+    const neg = new Float64Array(nn);
+    let a = 0;
+    let b = 0;
+    for (let i = 0; i < n; i++) {
+        if (y[i] === 1)
+            pos[a++] = score[i];
+        else
+            neg[b++] = score[i];
+    }
+    sortFloat64(pos);
+    sortFloat64(neg);
+    return pairsAbove(pos, neg) / np / nn;
+}
+/** Sum over positives of (negatives below it + half the negatives equal to it), both sorted ascending. */
+function pairsAbove(pos, neg) {
+    let below = 0;
+    let equalEnd = 0;
+    let total = 0;
+    for (let i = 0; i < pos.length; i++) {
+        const v = pos[i];
+        while (below < neg.length && neg[below] < v)
+            below++;
+        if (equalEnd < below)
+            equalEnd = below;
+        while (equalEnd < neg.length && neg[equalEnd] === v)
+            equalEnd++;
+        total += below + (equalEnd - below) / 2;
+    }
+    return total;
+}
+/**
+ * Calibration intercept and slope (Cox 1958, Biometrika 45(3-4), "Two further applications of a
+ * model for binary regression"): the unpenalised logistic regression of y on the model's linear
+ * predictor eta = logit p, by Newton's method on the two parameters with step halving, stopping
+ * when a step lowers the deviance by at most 1e-12 relative (at most 100 steps). NaN when a class
+ * is absent or eta is constant (the slope is then not identified); a separated recalibration
+ * (perfect ranking) gives the large values its steps reach, flagged `converged: false`.
+ */
+function calibration(y, eta, n) {
+    let positives = 0;
+    let lo = Number.POSITIVE_INFINITY;
+    let hi = Number.NEGATIVE_INFINITY;
+    for (let i = 0; i < n; i++) {
+        positives += y[i];
+        if (eta[i] < lo)
+            lo = eta[i];
+        if (eta[i] > hi)
+            hi = eta[i];
+    }
+    if (positives === 0 || positives === n || !(hi > lo))
+        return { intercept: Number.NaN, slope: Number.NaN, converged: false };
+    let a = Math.log(positives / (n - positives));
+    let b = 0;
+    let dev = twoParameterDeviance(y, eta, n, a, b);
+    for (let iter = 0; iter < 100; iter++) {
+        // Gradient and Hessian of the log-likelihood in (a, b).
+        let g0 = 0;
+        let g1 = 0;
+        let h00 = 0;
+        let h01 = 0;
+        let h11 = 0;
+        for (let i = 0; i < n; i++) {
+            const e = eta[i];
+            const pr = 1 / (1 + Math.exp(-(a + b * e)));
+            const r = y[i] - pr;
+            const w = pr * (1 - pr);
+            g0 += r;
+            g1 += r * e;
+            h00 += w;
+            h01 += w * e;
+            h11 += w * e * e;
+        }
+        const det = h00 * h11 - h01 * h01;
+        if (!(det > 0))
+            return { intercept: a, slope: b, converged: false };
+        let da = (h11 * g0 - h01 * g1) / det;
+        let db = (h00 * g1 - h01 * g0) / det;
+        let next = twoParameterDeviance(y, eta, n, a + da, b + db);
+        let halvings = 0;
+        while (!(next <= dev + 1e-13 * Math.abs(dev)) && halvings < 40) {
+            da /= 2;
+            db /= 2;
+            next = twoParameterDeviance(y, eta, n, a + da, b + db);
+            halvings++;
+        }
+        if (halvings >= 40)
+            return { intercept: a, slope: b, converged: false };
+        a += da;
+        b += db;
+        const decrease = dev - next;
+        dev = next;
+        if (decrease <= 1e-12 * (Math.abs(dev) + 0.1))
+            return { intercept: a, slope: b, converged: true };
+    }
+    return { intercept: a, slope: b, converged: false };
+}
+function twoParameterDeviance(y, eta, n, a, b) {
+    let dev = 0;
+    for (let i = 0; i < n; i++)
+        dev += rowDeviance(a + b * eta[i], y[i]);
+    return dev;
+}
+/**
+ * Calibration diagram (reliability diagram; DeGroot & Fienberg 1983, The Statistician 32):
+ * `bins` equal-width bins of the predicted probability, each with its count, mean prediction and
+ * observed share of positives (the last bin includes 1).
+ */
+function calibrationBins(y, p, n, bins = 10) {
+    const count = new Float64Array(bins);
+    const sumP = new Float64Array(bins);
+    const sumY = new Float64Array(bins);
+    for (let i = 0; i < n; i++) {
+        const b = Math.min(bins - 1, Math.floor(p[i] * bins));
+        count[b] += 1;
+        sumP[b] += p[i];
+        sumY[b] += y[i];
+    }
+    return Array.from(count, (c, b) => ({
+        from: b / bins,
+        to: (b + 1) / bins,
+        count: c,
+        predicted: c > 0 ? sumP[b] / c : Number.NaN,
+        observed: c > 0 ? sumY[b] / c : Number.NaN,
+    }));
+}
+/**
+ * Points of the ROC curve (false positive rate, true positive rate) for drawing: the rates at the
+ * thresholds t = 1 - k / max (k = 0 .. max; a row counts positive when p >= t), from (0, 0) to
+ * (1, 1), counted in one pass over the rows (exact at those thresholds).
+ */
+function rocPoints(y, p, n, max = 50) {
+    const pos = new Float64Array(max + 1);
+    const neg = new Float64Array(max + 1);
+    let positives = 0;
+    for (let i = 0; i < n; i++) {
+        // Bin k holds p in [1 - k/max, 1 - (k-1)/max): the rows first counted at threshold index k.
+        const k = Math.min(max, Math.max(0, Math.ceil((1 - p[i]) * max)));
+        if (y[i] === 1) {
+            pos[k] += 1;
+            positives += 1;
+        }
+        else {
+            neg[k] += 1;
+        }
+    }
+    const negatives = n - positives;
+    if (positives === 0 || negatives === 0)
+        return { fpr: [0, 1], tpr: [0, 1] };
+    const fpr = [0];
+    const tpr = [0];
+    let tp = 0;
+    let fp = 0;
+    for (let k = 0; k <= max; k++) {
+        tp += pos[k];
+        fp += neg[k];
+        fpr.push(fp / negatives);
+        tpr.push(tp / positives);
+    }
+    return { fpr, tpr };
+}
+
+;// CONCATENATED MODULE: ./src/diagnostics/separation.ts
+/**
+ * Separation of a binary classifier's training rows (Albert & Anderson 1984, Biometrika 71(1),
+ * "On the existence of maximum likelihood estimates in logistic regression models"): with
+ * a_i = (2 y_i - 1) x_i, the rows are
+ * - completely separated when some direction b gives a_i^T b > 0 for every row,
+ * - quasi-completely separated when some b gives a_i^T b >= 0 for every row and > 0 for some,
+ * - overlapping otherwise; only then do finite maximum-likelihood coefficients exist.
+ *
+ * Exact test by linear programming (the formulation of Konis 2007, "Linear programming algorithms
+ * for detecting separated data in binary logistic regression models", DPhil thesis, University of
+ * Oxford): maximise sum_{i in T} a_i^T b subject to a_i^T b >= 0 for every row and -1 <= b_j <= 1.
+ * The optimum is positive exactly when some row of T can be separated; the rows with a_i^T b > 0
+ * at the optimum are separated, and the test repeats with T = the rows not yet separated until the
+ * optimum is 0. The union is the set of every separable row (the separating directions form a
+ * convex cone, so the sum of those found separates all of them at once): complete separation when
+ * it holds every row. Rows enter the program's constraints by cutting planes (a pass finds the rows
+ * the current b violates and adds the worst), so the program stays small whatever the rows; the
+ * simplex prices by Dantzig's rule and falls back to Bland's rule (no cycling on these degenerate
+ * programs) when the objective stalls. On more than 4,000 rows an even-stride subset of 4,000 is
+ * tested first: when its rows overlap and its design has full column rank, so do all rows (a
+ * proof, not a sample estimate). Columns are scaled by their
+ * largest magnitude; a_i^T b counts as positive above 1e-9 (|a_i| scaled, |b| <= 1).
+ */
+
+
+/** Rows added to the program per cutting-plane round, at most. */
+const CUTS_PER_ROUND = 64;
+/** Largest number of row constraints in the program; beyond it the test gives up (`exact: false`). */
+const MAX_CUTS = 4000;
+/** A scaled a_i^T b above this counts as positive; below -this as violated. */
+const TOLERANCE = 1e-9;
+/** Rows listed in the result, at most. */
+const MAX_LISTED = 20;
+/**
+ * Tests the training rows for separation (see the module comment).
+ * @param design the fixed design (with its intercept column, if any)
+ * @param data the training rows, y in {0, 1}
+ */
+function findSeparation(design, data) {
+    if (data.rows > SUBSAMPLE_ROWS) {
+        // Overlap of a subset of rows whose design has full column rank proves overlap of all rows:
+        // every b with a_i^T b >= 0 on all rows has it on the subset, hence a_i^T b = 0 there, hence b = 0.
+        const sub = separation_subsample(data, SUBSAMPLE_ROWS);
+        const found = separationOf(design, sub);
+        if (found.kind === 'none' && found.exact && fullColumnRank(design, sub))
+            return found;
+    }
+    return separationOf(design, data);
+}
+/** Rows of the even-stride subset tried first on large data. */
+const SUBSAMPLE_ROWS = 4000;
+/** Every (n / m)-th row. */
+function separation_subsample(data, m) {
+    const n = data.rows;
+    const pick = (col, out) => {
+        for (let t = 0; t < m; t++)
+            out[t] = col[Math.floor((t * n) / m)];
+        return out;
+    };
+    return {
+        inputs: data.inputs.map((c) => pick(c, new Float64Array(m))),
+        y: pick(data.y, new Float64Array(m)),
+        rows: m,
+        lines: pick(data.lines, new Int32Array(m)),
+    };
+}
+/** Whether the design of these rows has rank p (the scaled-spectrum rule of the QR engine). */
+function fullColumnRank(design, data) {
+    const acc = new src_fit/* QrAccumulator */.SC(design.p);
+    const zeros = new Float64Array(Math.max(1, Math.min(data.rows, 1 << 16)));
+    (0,blocks/* forEachBlock */.aN)(design, data, (X, _start, m) => acc.addRows(X, zeros, m));
+    return (0,src_fit/* fitFactor */.Ps)(acc).rank === design.p;
+}
+/** The test on all of `data`'s rows (see the module comment). */
+function separationOf(design, data) {
+    const p = design.p;
+    const n = data.rows;
+    const none = { kind: 'none', separatedRows: 0, lines: [], columns: [], direction: new Array(p).fill(0), exact: true };
+    if (p === 0 || n === 0)
+        return none;
+    const scale = new Float64Array(p);
+    (0,blocks/* forEachBlock */.aN)(design, data, (X, _start, m) => {
+        for (let j = 0; j < p; j++)
+            for (let i = 0; i < m; i++)
+                scale[j] = Math.max(scale[j], Math.abs(X[j * m + i]));
+    });
+    for (let j = 0; j < p; j++)
+        if (!(scale[j] > 0) || !Number.isFinite(scale[j]))
+            scale[j] = 1;
+    const separated = new Uint8Array(n);
+    const total = new Float64Array(p);
+    let exact = true;
+    let count = 0;
+    const cuts = [];
+    for (let round = 0; round < n + 1; round++) {
+        // Objective: the sum of a_i over the rows not yet separated.
+        const c = new Float64Array(p);
+        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
+            for (let i = 0; i < m; i++) {
+                if (separated[start + i])
+                    continue;
+                const sign = 2 * data.y[start + i] - 1;
+                for (let j = 0; j < p; j++)
+                    c[j] += (sign * X[j * m + i]) / scale[j];
+            }
+        });
+        const solved = solveWithCuts(design, data, scale, c, cuts);
+        if (!solved.exact)
+            exact = false;
+        const b = solved.b;
+        let found = 0;
+        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
+            for (let i = 0; i < m; i++) {
+                if (separated[start + i])
+                    continue;
+                if (rowValue(X, m, i, p, b, scale, 2 * data.y[start + i] - 1) > TOLERANCE) {
+                    separated[start + i] = 1;
+                    found += 1;
+                }
+            }
+        });
+        if (found === 0)
+            break;
+        count += found;
+        for (let j = 0; j < p; j++)
+            total[j] += b[j];
+        if (count === n || !solved.exact)
+            break;
+    }
+    if (count === 0)
+        return { ...none, exact };
+    const lines = [];
+    for (let i = 0; i < n && lines.length < MAX_LISTED; i++)
+        if (separated[i])
+            lines.push(data.lines[i]);
+    const big = Math.max(...Array.from(total, Math.abs));
+    const columns = [];
+    const direction = [];
+    for (let j = 0; j < p; j++) {
+        const v = total[j] / big;
+        if (Math.abs(v) > 1e-6)
+            columns.push(j);
+        direction.push(Math.abs(v) > 1e-6 ? v / scale[j] : 0);
+    }
+    return { kind: count === n ? 'complete' : 'quasi-complete', separatedRows: count, lines, columns, direction, exact };
+}
+/** (2y - 1) x_i^T b with x scaled column by column. */
+function rowValue(X, m, i, p, b, scale, sign) {
+    let s = 0;
+    for (let j = 0; j < p; j++)
+        s += (X[j * m + i] / scale[j]) * b[j];
+    return sign * s;
+}
+/**
+ * Maximises c^T b over -1 <= b <= 1 and a_i^T b >= 0 for every row, adding violated rows to
+ * `cuts` (kept between calls: a cut stays valid) until the solution violates none.
+ */
+function solveWithCuts(design, data, scale, c, cuts) {
+    const p = design.p;
+    // Each round adds at least one cut or returns, and the cuts are capped: at most MAX_CUTS rounds.
+    for (let round = 0; round <= MAX_CUTS; round++) {
+        const b = simplexMax(c, cuts, p);
+        const worst = [];
+        (0,blocks/* forEachBlock */.aN)(design, data, (X, start, m) => {
+            for (let i = 0; i < m; i++) {
+                const sign = 2 * data.y[start + i] - 1;
+                const v = rowValue(X, m, i, p, b, scale, sign);
+                if (v >= -TOLERANCE)
+                    continue;
+                if (worst.length === CUTS_PER_ROUND && v >= worst[worst.length - 1].value)
+                    continue;
+                const row = new Float64Array(p);
+                for (let j = 0; j < p; j++)
+                    row[j] = (sign * X[j * m + i]) / scale[j];
+                worst.push({ value: v, row });
+                worst.sort((a, z) => a.value - z.value);
+                if (worst.length > CUTS_PER_ROUND)
+                    worst.pop();
+            }
+        });
+        if (worst.length === 0)
+            return { b, exact: true };
+        if (cuts.length + worst.length > MAX_CUTS)
+            return { b: new Float64Array(p), exact: false };
+        for (const w of worst)
+            cuts.push(w.row);
+    }
+    return { b: new Float64Array(p), exact: false };
+}
+/**
+ * Dense tableau simplex for max c^T b, -1 <= b_j <= 1, a^T b >= 0 for each a in `rows`, with
+ * b = u - v (u, v >= 0, u_j + v_j <= 1): every right-hand side is 0 or 1, so the origin is a
+ * feasible start (no phase one). Dantzig's rule (the most negative reduced cost enters) while the
+ * objective rises; after 50 pivots without a rise, Bland's rule (the lowest-index improving column
+ * enters, the lowest-index basic variable among ratio ties leaves), which cannot cycle. At most
+ * 100,000 pivots.
+ */
+function simplexMax(c, rows, p) {
+    const r = rows.length;
+    const mRows = r + p;
+    const nVars = 2 * p;
+    const cols = nVars + mRows + 1; // variables, slacks, right-hand side
+    const T = new Float64Array((mRows + 1) * cols);
+    const basis = new Int32Array(mRows);
+    for (let k = 0; k < r; k++) {
+        // -a^T (u - v) <= 0
+        const a = rows[k];
+        for (let j = 0; j < p; j++) {
+            T[k * cols + j] = -a[j];
+            T[k * cols + p + j] = a[j];
+        }
+    }
+    for (let j = 0; j < p; j++) {
+        const k = r + j;
+        T[k * cols + j] = 1;
+        T[k * cols + p + j] = 1;
+        T[k * cols + cols - 1] = 1;
+    }
+    for (let k = 0; k < mRows; k++) {
+        T[k * cols + nVars + k] = 1;
+        basis[k] = nVars + k;
+    }
+    const z = mRows * cols;
+    for (let j = 0; j < p; j++) {
+        T[z + j] = -c[j];
+        T[z + p + j] = c[j];
+    }
+    const eps = 1e-12;
+    let stalled = 0;
+    let objective = 0;
+    for (let iter = 0; iter < 100000; iter++) {
+        // Dantzig's rule (most negative reduced cost) while the objective rises; Bland's rule after
+        // 50 pivots without a rise, which cannot cycle.
+        const bland = stalled > 50;
+        let enter = -1;
+        let most = -eps;
+        for (let j = 0; j < cols - 1; j++) {
+            if (T[z + j] < most) {
+                enter = j;
+                if (bland)
+                    break;
+                most = T[z + j];
+            }
+        }
+        if (enter < 0)
+            break;
+        let leave = -1;
+        let best = Number.POSITIVE_INFINITY;
+        for (let k = 0; k < mRows; k++) {
+            const a = T[k * cols + enter];
+            if (a <= eps)
+                continue;
+            const ratio = T[k * cols + cols - 1] / a;
+            if (ratio < best - 1e-15 || (Math.abs(ratio - best) <= 1e-15 && basis[k] < basis[leave])) {
+                best = ratio;
+                leave = k;
+            }
+        }
+        if (leave < 0)
+            break; // unbounded cannot happen (every variable is bounded)
+        const pivot = T[leave * cols + enter];
+        for (let j = 0; j < cols; j++)
+            T[leave * cols + j] /= pivot;
+        for (let k = 0; k <= mRows; k++) {
+            if (k === leave)
+                continue;
+            const f = T[k * cols + enter];
+            if (f === 0)
+                continue;
+            for (let j = 0; j < cols; j++)
+                T[k * cols + j] -= f * T[leave * cols + j];
+        }
+        basis[leave] = enter;
+        const now = T[z + cols - 1];
+        stalled = now > objective + 1e-12 ? 0 : stalled + 1;
+        objective = Math.max(objective, now);
+    }
+    const x = new Float64Array(nVars);
+    for (let k = 0; k < mRows; k++)
+        if (basis[k] < nVars)
+            x[basis[k]] = T[k * cols + cols - 1];
+    const b = new Float64Array(p);
+    for (let j = 0; j < p; j++)
+        b[j] = x[j] - x[p + j];
+    return b;
+}
+
 ;// CONCATENATED MODULE: ./src/run/plan.ts
 
 
@@ -11793,15 +13361,16 @@ const MAX_PARAMETERS = 200;
 const MAX_MAGNITUDE = 1e140;
 /**
  * Plans one model.
+ * @param load how the columns are read: default {@link loadModelData}; classifiers read their target as two classes
  * @throws InputError for bad data, a design over the caps, a target out of range or constant
  */
-async function planModel(repo, descriptor, settings) {
+async function planModel(repo, descriptor, settings, load = loadModelData) {
     const inputs = [];
     for (const t of descriptor.terms)
         for (const c of (0,design_terms/* termInputs */.Q)(t))
             if (!inputs.includes(c))
                 inputs.push(c);
-    const tables = await loadModelData(repo, descriptor, inputs, settings);
+    const tables = await load(repo, descriptor, inputs, settings);
     const { train } = tables;
     const file = descriptor.file;
     // Fix term parameters from the training rows, then check the size before taking memory.
@@ -11826,6 +13395,300 @@ async function planModel(repo, descriptor, settings) {
     }
     const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     return { descriptor, tables, design, folds, targetSd: targetStats.sd };
+}
+
+;// CONCATENATED MODULE: ./src/run/fit-classifier.ts
+
+
+
+
+
+
+
+
+
+
+
+
+/**
+ * Loads, fits and scores one classifier.
+ * @throws InputError for bad data or labels, a design over the caps, or shipped coefficients of the wrong length
+ */
+async function fitClassifier(repo, descriptor, settings) {
+    let labels = null;
+    const plan = await planModel(repo, descriptor, settings, async (r, d, inputs, s) => {
+        const tables = await loadClassifierData(r, d, inputs, s);
+        labels = tables.labels;
+        return tables;
+    });
+    const { design, tables, folds } = plan;
+    const { train, holdout } = tables;
+    const options = { ridge: descriptor.fit.ridge, penalised: [...design.penalised] };
+    const spread = new ColumnSpread(design.p);
+    (0,blocks/* forEachBlock */.aN)(design, train, (X, _start, m) => spread.add(X, m));
+    const columnSd = spread.sd();
+    const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options) }]);
+    const weighted = (0,src_fit/* fitFactor */.Ps)(fit.weightedFactor, options);
+    const trainEta = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
+    const holdoutEta = (0,blocks/* predictRows */.tp)(design, holdout, fit.coefficients);
+    const threshold = descriptor.fit.threshold ?? 0.5;
+    const trainP = probabilities(trainEta);
+    const holdoutP = probabilities(holdoutEta);
+    const trainFigures = classificationFigures(train.y, trainEta, trainP, train.rows, threshold);
+    const holdoutFigures = classificationFigures(holdout.y, holdoutEta, holdoutP, holdout.rows, threshold);
+    return {
+        context: {
+            descriptor,
+            design,
+            fit,
+            weighted,
+            train: trainFigures,
+            holdout: holdoutFigures,
+            calibration: calibration(holdout.y, holdoutEta, holdout.rows),
+            crossValidation: crossValidateClassifier(design, train, folds, fit, options),
+            separation: findSeparation(design, train),
+            shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
+            columnSd,
+            leakage: leakageOf(train, holdout),
+            complexity: sweepClassifier(descriptor, design, train),
+        },
+        labels: labels,
+        train,
+        holdout,
+        trainEta,
+        holdoutEta,
+        folds,
+        charts: {
+            rocTrain: rocPoints(train.y, trainP, train.rows),
+            rocHoldout: rocPoints(holdout.y, holdoutP, holdout.rows),
+            calibration: calibrationBins(holdout.y, holdoutP, holdout.rows),
+        },
+    };
+}
+/** Above this many training rows the full fit starts from the fit of an even-stride subset of this many rows. */
+const WARM_START_ROWS = 50000;
+/**
+ * Starting coefficients for the full fit: on large data, the fit of an even-stride subset of
+ * {@link WARM_START_ROWS} rows with the penalty scaled to its share of the rows (the optimum is
+ * the full fit's, from wherever Newton's method starts; a near start saves whole passes over the
+ * rows). Undefined (the default start) on smaller data.
+ */
+function warmStart(design, train, options) {
+    const n = train.rows;
+    const m = WARM_START_ROWS;
+    if (n <= 2 * m)
+        return undefined;
+    const pick = (col) => {
+        const out = new Float64Array(m);
+        for (let t = 0; t < m; t++)
+            out[t] = col[Math.floor((t * n) / m)];
+        return out;
+    };
+    const sub = { inputs: train.inputs.map(pick), y: pick(train.y), rows: m };
+    const [fit] = fitLogistic(design, sub, { ...options, ridge: (options.ridge * m) / n }, [{}]);
+    return fit.coefficients.every(Number.isFinite) ? fit.coefficients : undefined;
+}
+/**
+ * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
+ * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
+ * log-loss of the out-of-fold probabilities. Null below 2 folds.
+ */
+function crossValidateClassifier(design, train, folds, full, options) {
+    const k = folds.k;
+    if (k < 2)
+        return null;
+    const problems = Array.from({ length: k }, (_, f) => ({ foldOf: folds.foldOf, exclude: f, start: full.coefficients }));
+    const fits = fitLogistic(design, train, options, problems);
+    const foldDeviance = new Float64Array(k);
+    const eta = new Float64Array(Math.min(train.rows, 1 << 16));
+    (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
+        for (let f = 0; f < k; f++) {
+            eta.fill(0, 0, m);
+            (0,kernels/* addProducts */.kD)(eta, 0, X, m, fits[f].coefficients, design.p);
+            for (let i = 0; i < m; i++)
+                if (folds.foldOf[start + i] === f)
+                    foldDeviance[f] += rowDeviance(eta[i], train.y[start + i]);
+        }
+    });
+    let total = 0;
+    for (let f = 0; f < k; f++)
+        total += foldDeviance[f];
+    return {
+        k,
+        logLoss: total / 2 / train.rows,
+        foldLogLoss: Array.from(foldDeviance, (d, f) => d / 2 / folds.sizes[f]),
+        foldRows: [...folds.sizes],
+        converged: fits.every((x) => x.converged),
+    };
+}
+/** The shipped coefficients' probabilities against the refit's; null when the descriptor ships none. */
+function shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta) {
+    const shipped = descriptor.coefficients;
+    if (shipped === null)
+        return null;
+    if (shipped.length !== design.p) {
+        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+    }
+    let maxP = 0;
+    const losses = [];
+    for (const [data, refit] of [
+        [train, trainEta],
+        [holdout, holdoutEta],
+    ]) {
+        const eta = (0,blocks/* predictRows */.tp)(design, data, shipped);
+        let dev = 0;
+        for (let i = 0; i < data.rows; i++) {
+            const d = Math.abs(1 / (1 + Math.exp(-eta[i])) - 1 / (1 + Math.exp(-refit[i])));
+            if (d > maxP || Number.isNaN(d))
+                maxP = d;
+            dev += rowDeviance(eta[i], data.y[i]);
+        }
+        losses.push(dev / 2 / data.rows);
+    }
+    let maxW = 0;
+    for (let j = 0; j < design.p; j++)
+        maxW = Math.max(maxW, Math.abs(shipped[j] - fit.coefficients[j]));
+    return { maxProbabilityDifference: maxP, maxCoefficientDifference: maxW, trainLogLoss: losses[0], holdoutLogLoss: losses[1] };
+}
+function leakageOf(train, holdout) {
+    const found = findLeakage(train, holdout);
+    return {
+        duplicates: found.fullMatches,
+        examples: found.holdoutLines.map((line, i) => ({ holdoutLine: line, trainLine: found.trainLines[i] })),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/run/evaluate-classifier.ts
+/**
+ * One binary classifier from descriptor to outcome: fit and score it (fit-classifier.ts), run
+ * every check of the registry with its classifier measure (checks that apply to regression only
+ * are skipped with `<id>/not-for-classification`), and build its part of the Result.
+ */
+
+
+
+/**
+ * The report's metrics of a classifier: the training and hold-out figures, calibration, class
+ * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
+ * regression keys (RMSE, MAE, R^2) are null: they do not apply.
+ */
+function classifierMetrics(model) {
+    const { train, holdout, fit, design, weighted } = model.context;
+    const n = (x) => (0,result_result/* jsonNumber */.qj)(x);
+    return {
+        task: 'classification',
+        train_rmse: null,
+        holdout_rmse: null,
+        train_mae: null,
+        holdout_mae: null,
+        train_r2: null,
+        holdout_r2: null,
+        gap_ratio: n(train.logLoss === 0 ? (holdout.logLoss === 0 ? 1 : Infinity) : holdout.logLoss / train.logLoss),
+        params_per_sample: n(design.p / train.rows),
+        max_std_coefficient: null,
+        max_std_coefficient_column: null,
+        max_abs_coefficient: n(Math.max(0, ...Array.from(fit.coefficients, Math.abs))),
+        rank: weighted.rank,
+        condition_number: n(weighted.conditionNumberScaled),
+        train_log_loss: n(train.logLoss),
+        holdout_log_loss: n(holdout.logLoss),
+        train_brier: n(train.brier),
+        holdout_brier: n(holdout.brier),
+        train_accuracy: n(train.accuracy),
+        holdout_accuracy: n(holdout.accuracy),
+        train_auc: n(train.auc),
+        holdout_auc: n(holdout.auc),
+        threshold: model.context.descriptor.fit.threshold ?? 0.5,
+        train_positives: train.positives,
+        train_negatives: train.negatives,
+        holdout_positives: holdout.positives,
+        holdout_negatives: holdout.negatives,
+        positive_label: model.labels.positive,
+        negative_label: model.labels.negative,
+        fit_iterations: fit.iterations,
+        fit_converged: fit.converged ? 1 : 0,
+        deviance: n(fit.deviance),
+    };
+}
+/**
+ * Fits one classifier and runs every check on it. Errors are handled by the caller
+ * (evaluate.ts), as for regression models.
+ */
+async function evaluateClassifier(repo, descriptor, settings, base) {
+    const model = await fitClassifier(repo, descriptor, settings);
+    const context = { ...model.context, baseline: base?.models.get(descriptor.name) ?? null };
+    const metrics = classifierMetrics(model);
+    const checks = [];
+    let verdict = 'pass';
+    for (const check of src_checks/* CHECKS */.ui) {
+        const { outcome, figures } = (0,src_checks/* runClassifierCheck */.Rc)(check, context);
+        checks.push(outcome);
+        if (figures)
+            Object.assign(metrics, figures);
+        if (outcome.status === 'fail' || outcome.status === 'warn')
+            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
+    }
+    return {
+        name: descriptor.name,
+        descriptor: descriptor.file,
+        verdict,
+        rows: { train: model.train.rows, holdout: model.holdout.rows },
+        parameters: model.context.design.p,
+        columns: [...model.context.design.columnNames],
+        metrics,
+        coefficients: Array.from(model.context.fit.coefficients, result_result/* jsonNumber */.qj),
+        shipped: null,
+        checks,
+        error: null,
+        extra: {
+            task: 'classification',
+            labels: model.labels,
+            roc: { train: model.charts.rocTrain, holdout: model.charts.rocHoldout },
+            calibration_bins: model.charts.calibration.map((b) => ({
+                from: b.from,
+                to: b.to,
+                count: b.count,
+                predicted: (0,result_result/* jsonNumber */.qj)(b.predicted),
+                observed: (0,result_result/* jsonNumber */.qj)(b.observed),
+            })),
+            terms: model.context.design.terms.map((t, i) => ({
+                kind: t.spec.kind,
+                line: t.spec.line,
+                first_column: model.context.design.termOffsets[i],
+                columns: t.columnNames.length,
+                fixed: t.fixed,
+            })),
+        },
+    };
+}
+
+// EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
+var regression_metrics = __nccwpck_require__(155);
+;// CONCATENATED MODULE: ./src/diagnostics/shipped.ts
+
+
+function measures(data, predictions) {
+    const sums = (0,regression_metrics/* emptySums */.y3)();
+    (0,regression_metrics/* addErrors */.xB)(sums, data.y, predictions, data.rows);
+    return (0,regression_metrics/* errorMeasures */._I)(sums);
+}
+/**
+ * Scores shipped coefficients on the training and hold-out rows (one prediction pass each).
+ * @param shipped length design.p (the caller checks it)
+ * @param refit the refit's coefficients (length design.p)
+ */
+function scoreShipped(design, train, holdout, shipped, refit) {
+    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, holdout, shipped);
+    let diff = 0;
+    for (let j = 0; j < design.p; j++)
+        diff = Math.max(diff, Math.abs(shipped[j] - refit[j]));
+    return {
+        coefficients: shipped,
+        holdoutPredictions,
+        train: measures(train, (0,blocks/* predictRows */.tp)(design, train, shipped)),
+        holdout: measures(holdout, holdoutPredictions),
+        maxCoefficientDifference: diff,
+    };
 }
 
 ;// CONCATENATED MODULE: ./src/run/passes.ts
@@ -12017,6 +13880,7 @@ function shippedScore(descriptor, design, tables, fit) {
 
 
 
+
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -12055,6 +13919,8 @@ function reportMetrics(model) {
 async function evaluateModel(repo, descriptor, settings, base) {
     let model;
     try {
+        if (descriptor.task === 'classification')
+            return await evaluateClassifier(repo, descriptor, settings, base);
         model = await fitModel(repo, descriptor, settings);
     }
     catch (error) {
@@ -12082,7 +13948,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
     const metrics = reportMetrics(model);
     const checks = [];
     let verdict = 'pass';
-    for (const check of src_checks/* CHECKS */.ui) {
+    for (const check of (0,src_checks/* checksFor */.NR)('regression')) {
         const { outcome, figures } = (0,src_checks/* runCheck */.k_)(check, context);
         checks.push(outcome);
         if (figures)
@@ -12540,13 +14406,6 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:worker_
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("process");
-
-/***/ }),
-
-/***/ 2203:
-/***/ ((module) => {
-
-module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("stream");
 
 /***/ }),
 
@@ -21113,6 +22972,2224 @@ function replaceNode(key, path, node) {
 
 exports.visit = visit;
 exports.visitAsync = visitAsync;
+
+
+/***/ }),
+
+/***/ 8057:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  qg: () => (/* binding */ parse)
+});
+
+// UNUSED EXPORTS: CsvError, Parser, normalize_options
+
+;// CONCATENATED MODULE: external "stream"
+const external_stream_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("stream");
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/is_object.js
+const is_object = function (obj) {
+  return typeof obj === "object" && obj !== null && !Array.isArray(obj);
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/CsvError.js
+class CsvError extends Error {
+  constructor(code, message, options, ...contexts) {
+    if (Array.isArray(message)) message = message.join(" ").trim();
+    super(message);
+    if (Error.captureStackTrace !== undefined) {
+      Error.captureStackTrace(this, CsvError);
+    }
+    this.code = code;
+    for (const context of contexts) {
+      for (const key in context) {
+        const value = context[key];
+        this[key] = Buffer.isBuffer(value)
+          ? value.toString(options.encoding)
+          : value == null
+            ? value
+            : JSON.parse(JSON.stringify(value));
+      }
+    }
+  }
+}
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/normalize_columns_array.js
+
+
+
+const normalize_columns_array = function (columns) {
+  const normalizedColumns = [];
+  for (let i = 0, l = columns.length; i < l; i++) {
+    const column = columns[i];
+    if (column === undefined || column === null || column === false) {
+      normalizedColumns[i] = { disabled: true };
+    } else if (typeof column === "string" || typeof column === "number") {
+      normalizedColumns[i] = { name: `${column}` };
+    } else if (is_object(column)) {
+      if (typeof column.name !== "string") {
+        throw new CsvError("CSV_OPTION_COLUMNS_MISSING_NAME", [
+          "Option columns missing name:",
+          `property "name" is required at position ${i}`,
+          "when column is an object literal",
+        ]);
+      }
+      normalizedColumns[i] = column;
+    } else {
+      throw new CsvError("CSV_INVALID_COLUMN_DEFINITION", [
+        "Invalid column definition:",
+        "expect a string or a literal object,",
+        `got ${JSON.stringify(column)} at position ${i}`,
+      ]);
+    }
+  }
+  return normalizedColumns;
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/ResizeableBuffer.js
+class ResizeableBuffer {
+  constructor(size = 100) {
+    this.size = size;
+    this.length = 0;
+    this.buf = Buffer.allocUnsafe(size);
+  }
+  prepend(val) {
+    if (Buffer.isBuffer(val)) {
+      const length = this.length + val.length;
+      if (length >= this.size) {
+        this.resize();
+        if (length >= this.size) {
+          throw Error("INVALID_BUFFER_STATE");
+        }
+      }
+      const buf = this.buf;
+      this.buf = Buffer.allocUnsafe(this.size);
+      val.copy(this.buf, 0);
+      buf.copy(this.buf, val.length);
+      this.length += val.length;
+    } else {
+      const length = this.length++;
+      if (length === this.size) {
+        this.resize();
+      }
+      const buf = this.clone();
+      this.buf[0] = val;
+      buf.copy(this.buf, 1, 0, length);
+    }
+  }
+  append(val) {
+    const length = this.length++;
+    if (length === this.size) {
+      this.resize();
+    }
+    this.buf[length] = val;
+  }
+  clone() {
+    return Buffer.from(this.buf.slice(0, this.length));
+  }
+  resize() {
+    const length = this.length;
+    this.size = this.size * 2;
+    const buf = Buffer.allocUnsafe(this.size);
+    this.buf.copy(buf, 0, 0, length);
+    this.buf = buf;
+  }
+  toString(encoding) {
+    if (encoding) {
+      return this.buf.toString(encoding, 0, this.length);
+    } else {
+      return Uint8Array.prototype.slice.call(this.buf.slice(0, this.length));
+    }
+  }
+  toJSON() {
+    return this.toString("utf8");
+  }
+  reset() {
+    this.length = 0;
+  }
+}
+
+/* harmony default export */ const utils_ResizeableBuffer = (ResizeableBuffer);
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/init_state.js
+
+
+const init_state = function (options) {
+  // ECMAScript WhiteSpace + LineTerminator codepoints, encoded under
+  // `options.encoding`. Aligns trimming with `String.prototype.trim()`.
+  // https://tc39.es/ecma262/#sec-white-space
+  // https://tc39.es/ecma262/#sec-line-terminators
+  //
+  // Codepoints unrepresentable in the target encoding are dropped: Node's
+  // Buffer substitutes them with `?` (0x3F), and including those would cause
+  // literal `?` bytes in the input to be trimmed under `latin1`/`ascii`.
+  const timchars = [
+    // Basic Latin
+    0x0020, // [Space](https://www.fileformat.info/info/unicode/char/0020/index.htm)
+    0x0009, // [CHARACTER TABULATION (HT)](https://www.fileformat.info/info/unicode/char/0009/index.htm)
+    0x000a, // [LINE FEED (LF)](https://www.fileformat.info/info/unicode/char/000a/index.htm)
+    0x000d, // [CARRIAGE RETURN (CR)](https://www.fileformat.info/info/unicode/char/000d/index.htm)
+    0x000c, // [FORM FEED (FF)](https://www.fileformat.info/info/unicode/char/000c/index.htm)
+    0x000b, // [LINE TABULATION (VT)](https://www.fileformat.info/info/unicode/char/000b/index.htm)
+    // Latin-1 Supplement
+    0x00a0, // [NO-BREAK SPACE (NBSP)](https://www.fileformat.info/info/unicode/char/00a0/index.htm)
+    // Ogham
+    0x1680, // [OGHAM SPACE MARK](https://www.fileformat.info/info/unicode/char/1680/index.htm)
+    // General Punctuation
+    0x2000, // [EN QUAD](https://www.fileformat.info/info/unicode/char/2000/index.htm)
+    0x2001, // [EM QUAD](https://www.fileformat.info/info/unicode/char/2001/index.htm)
+    0x2002, // [EN SPACE](https://www.fileformat.info/info/unicode/char/2002/index.htm)
+    0x2003, // [EM SPACE](https://www.fileformat.info/info/unicode/char/2003/index.htm)
+    0x2004, // [THREE-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2004/index.htm)
+    0x2005, // [FOUR-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2005/index.htm)
+    0x2006, // [SIX-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2006/index.htm)
+    0x2007, // [FIGURE SPACE](https://www.fileformat.info/info/unicode/char/2007/index.htm)
+    0x2008, // [PUNCTUATION SPACE](https://www.fileformat.info/info/unicode/char/2008/index.htm)
+    0x2009, // [THIN SPACE](https://www.fileformat.info/info/unicode/char/2009/index.htm)
+    0x200a, // [HAIR SPACE](https://www.fileformat.info/info/unicode/char/200a/index.htm)
+    0x2028, // [LINE SEPARATOR](https://www.fileformat.info/info/unicode/char/2028/index.htm)
+    0x2029, // [PARAGRAPH SEPARATOR](https://www.fileformat.info/info/unicode/char/2029/index.htm)
+    0x202f, // [NARROW NO-BREAK SPACE (NNBSP)](https://www.fileformat.info/info/unicode/char/202f/index.htm)
+    0x205f, // [MEDIUM MATHEMATICAL SPACE (MMSP)](https://www.fileformat.info/info/unicode/char/205f/index.htm)
+    0x3000, // [IDEOGRAPHIC SPACE](https://www.fileformat.info/info/unicode/char/3000/index.htm)
+    0xfeff, // [ZERO WIDTH NO-BREAK SPACE (BOM)](https://www.fileformat.info/info/unicode/char/feff/index.htm)
+  ].reduce((acc, codepoint) => {
+    const encoded = Buffer.from(
+      String.fromCharCode(codepoint),
+      options.encoding,
+    );
+    if (codepoint !== 0x3f && encoded.length === 1 && encoded[0] === 0x3f) {
+      return acc;
+    }
+    acc.push(encoded);
+    return acc;
+  }, []);
+  // First-byte lookup table for `__isCharTrimable`. Non-whitespace bytes
+  // (the common case) bail out in O(1) without scanning every timchar.
+  const timcharFirstBytes = new Uint8Array(256);
+  for (const t of timchars) timcharFirstBytes[t[0]] = 1;
+  return {
+    bomSkipped: false,
+    bufBytesStart: 0,
+    castField: options.cast_function,
+    commenting: false,
+    delimiterBufPrevious: undefined,
+    delimiterDiscovered: false,
+    // Current error encountered by a record
+    error: undefined,
+    enabled: options.from_line === 1,
+    escaping: false,
+    escapeIsQuote:
+      Buffer.isBuffer(options.escape) &&
+      Buffer.isBuffer(options.quote) &&
+      Buffer.compare(options.escape, options.quote) === 0,
+    // columns can be `false`, `true`, `Array`
+    expectedRecordLength: Array.isArray(options.columns)
+      ? options.columns.length
+      : undefined,
+    field: new utils_ResizeableBuffer(20),
+    firstLineToHeaders: options.cast_first_line_to_header,
+    needMoreDataSize: Math.max(
+      // Skip if the remaining buffer smaller than comment
+      options.comment !== null ? options.comment.length : 0,
+      // Skip if the remaining buffer can be delimiter
+      ...(options.delimiter
+        ? options.delimiter.map((delimiter) => delimiter.length)
+        : []),
+      // Auto discovery of delimiter is limited to 1 character
+      options.delimiter_auto ? 1 : 0,
+      // Skip if the remaining buffer can be escape sequence
+      options.quote !== null ? options.quote.length : 0,
+      // Skip if the remaining buffer can be a multi-byte trim character
+      ...timchars.map((t) => t.length),
+    ),
+    previousBuf: undefined,
+    quoting: false,
+    stop: false,
+    rawBuffer: new utils_ResizeableBuffer(100),
+    record: [],
+    recordHasError: false,
+    record_length: 0,
+    recordDelimiterMaxLength:
+      options.record_delimiter.length === 0
+        ? 0
+        : Math.max(...options.record_delimiter.map((v) => v.length)),
+    trimChars: [
+      Buffer.from(" ", options.encoding)[0],
+      Buffer.from("\t", options.encoding)[0],
+    ],
+    wasQuoting: false,
+    wasRowDelimiter: false,
+    timchars: timchars,
+    timcharFirstBytes: timcharFirstBytes,
+  };
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/underscore.js
+const underscore = function (str) {
+  return str.replace(/([A-Z])/g, function (_, match) {
+    return "_" + match.toLowerCase();
+  });
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/normalize_options.js
+
+
+
+
+
+const normalize_options = function (opts) {
+  const options = {};
+  // Merge with user options
+  for (const opt in opts) {
+    options[underscore(opt)] = opts[opt];
+  }
+  // Normalize option `encoding`
+  // Note: defined first because other options depends on it
+  // to convert chars/strings into buffers.
+  if (options.encoding === undefined || options.encoding === true) {
+    options.encoding = "utf8";
+  } else if (options.encoding === null || options.encoding === false) {
+    options.encoding = null;
+  } else if (
+    typeof options.encoding !== "string" &&
+    options.encoding !== null
+  ) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_ENCODING",
+      [
+        "Invalid option encoding:",
+        "encoding must be a string or null to return a buffer,",
+        `got ${JSON.stringify(options.encoding)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `bom`
+  if (
+    options.bom === undefined ||
+    options.bom === null ||
+    options.bom === false
+  ) {
+    options.bom = false;
+  } else if (options.bom !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_BOM",
+      [
+        "Invalid option bom:",
+        "bom must be true,",
+        `got ${JSON.stringify(options.bom)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `cast`
+  options.cast_function = null;
+  if (
+    options.cast === undefined ||
+    options.cast === null ||
+    options.cast === false ||
+    options.cast === ""
+  ) {
+    options.cast = undefined;
+  } else if (typeof options.cast === "function") {
+    options.cast_function = options.cast;
+    options.cast = true;
+  } else if (options.cast !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_CAST",
+      [
+        "Invalid option cast:",
+        "cast must be true or a function,",
+        `got ${JSON.stringify(options.cast)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `cast_date`
+  if (
+    options.cast_date === undefined ||
+    options.cast_date === null ||
+    options.cast_date === false ||
+    options.cast_date === ""
+  ) {
+    options.cast_date = false;
+  } else if (options.cast_date === true) {
+    options.cast_date = function (value) {
+      const date = Date.parse(value);
+      return !isNaN(date) ? new Date(date) : value;
+    };
+  } else if (typeof options.cast_date !== "function") {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_CAST_DATE",
+      [
+        "Invalid option cast_date:",
+        "cast_date must be true or a function,",
+        `got ${JSON.stringify(options.cast_date)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `columns`
+  options.cast_first_line_to_header = undefined;
+  if (options.columns === true) {
+    // Fields in the first line are converted as-is to columns
+    options.cast_first_line_to_header = undefined;
+  } else if (typeof options.columns === "function") {
+    options.cast_first_line_to_header = options.columns;
+    options.columns = true;
+  } else if (Array.isArray(options.columns)) {
+    options.columns = normalize_columns_array(options.columns);
+  } else if (
+    options.columns === undefined ||
+    options.columns === null ||
+    options.columns === false
+  ) {
+    options.columns = false;
+  } else {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_COLUMNS",
+      [
+        "Invalid option columns:",
+        "expect an array, a function or true,",
+        `got ${JSON.stringify(options.columns)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `group_columns_by_name`
+  if (
+    options.group_columns_by_name === undefined ||
+    options.group_columns_by_name === null ||
+    options.group_columns_by_name === false
+  ) {
+    options.group_columns_by_name = false;
+  } else if (options.group_columns_by_name !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
+      [
+        "Invalid option group_columns_by_name:",
+        "expect an boolean,",
+        `got ${JSON.stringify(options.group_columns_by_name)}`,
+      ],
+      options,
+    );
+  } else if (options.columns === false) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
+      [
+        "Invalid option group_columns_by_name:",
+        "the `columns` mode must be activated.",
+      ],
+      options,
+    );
+  }
+  // Normalize option `comment`
+  if (
+    options.comment === undefined ||
+    options.comment === null ||
+    options.comment === false ||
+    options.comment === ""
+  ) {
+    options.comment = null;
+  } else {
+    if (typeof options.comment === "string") {
+      options.comment = Buffer.from(options.comment, options.encoding);
+    }
+    if (!Buffer.isBuffer(options.comment)) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_COMMENT",
+        [
+          "Invalid option comment:",
+          "comment must be a buffer or a string,",
+          `got ${JSON.stringify(options.comment)}`,
+        ],
+        options,
+      );
+    }
+  }
+  // Normalize option `comment_no_infix`
+  if (
+    options.comment_no_infix === undefined ||
+    options.comment_no_infix === null ||
+    options.comment_no_infix === false
+  ) {
+    options.comment_no_infix = false;
+  } else if (options.comment_no_infix !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_COMMENT",
+      [
+        "Invalid option comment_no_infix:",
+        "value must be a boolean,",
+        `got ${JSON.stringify(options.comment_no_infix)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `delimiter_auto`
+  if (
+    options.delimiter_auto === undefined ||
+    options.delimiter_auto === null ||
+    options.delimiter_auto === false
+  ) {
+    options.delimiter_auto = false;
+  } else if (options.delimiter_auto === true) {
+    options.delimiter_auto = {};
+  } else if (!is_object(options.delimiter_auto)) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_DELIMITER_AUTO",
+      [
+        "Invalid option delimiter_auto:",
+        "delimiter_auto must be a boolean or a configuration object,",
+        `got ${JSON.stringify(options.delimiter_auto)}`,
+      ],
+      options,
+    );
+  }
+  if (options.delimiter_auto) {
+    if (options.delimiter_auto.preferred === undefined)
+      options.delimiter_auto.preferred = {
+        [",".charCodeAt(0)]: 1.8,
+        ["\t".charCodeAt(0)]: 1.8,
+        [";".charCodeAt(0)]: 1.6,
+        [" ".charCodeAt(0)]: 1.6,
+        [":".charCodeAt(0)]: 1.5,
+        [".".charCodeAt(0)]: 1.4,
+        ["/".charCodeAt(0)]: 1.4,
+      };
+    else if (!is_object(options.delimiter_auto.preferred)) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER_AUTO",
+        [
+          "Invalid option delimiter_auto:",
+          "preferred must be an object,",
+          `got ${JSON.stringify(options.delimiter_auto.preferred)}`,
+        ],
+        options,
+      );
+    }
+    if (options.delimiter_auto.score === undefined)
+      options.delimiter_auto.score = (info, options) => {
+        return (
+          (info.total - info.std) * (options.preferred[info.char_code] || 1)
+        );
+      };
+    else if (typeof options.delimiter_auto.score !== "function") {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER_AUTO",
+        [
+          "Invalid option delimiter_auto:",
+          "score must be a function,",
+          `got ${JSON.stringify(options.delimiter_auto.score)}`,
+        ],
+        options,
+      );
+    }
+    if (options.delimiter_auto.size === undefined)
+      options.delimiter_auto.size = 2048;
+    else if (typeof options.delimiter_auto.size !== "number") {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER_AUTO",
+        [
+          "Invalid option delimiter_auto:",
+          "size must be a number,",
+          `got ${JSON.stringify(options.delimiter_auto.size)}`,
+        ],
+        options,
+      );
+    }
+  }
+  // Normalize option `delimiter`
+  const delimiter_json = JSON.stringify(options.delimiter);
+  if (options.delimiter_auto !== false) {
+    options.delimiter = [];
+  }
+  if (!Array.isArray(options.delimiter)) {
+    if (
+      options.delimiter === undefined ||
+      options.delimiter === null ||
+      options.delimiter === false
+    ) {
+      options.delimiter = Buffer.from(",", options.encoding);
+    }
+    options.delimiter = [options.delimiter];
+  }
+  options.delimiter = options.delimiter.map(function (delimiter) {
+    if (typeof delimiter === "string") {
+      delimiter = Buffer.from(delimiter, options.encoding);
+    }
+    if (!Buffer.isBuffer(delimiter) || delimiter.length === 0) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER",
+        [
+          "Invalid option delimiter:",
+          "delimiter must be a non empty string or buffer or array of string|buffer,",
+          `got ${delimiter_json}`,
+        ],
+        options,
+      );
+    }
+    return delimiter;
+  });
+  // Normalize option `escape`
+  if (options.escape === undefined || options.escape === true) {
+    options.escape = Buffer.from('"', options.encoding);
+  } else if (typeof options.escape === "string") {
+    options.escape = Buffer.from(options.escape, options.encoding);
+  } else if (options.escape === null || options.escape === false) {
+    options.escape = null;
+  }
+  if (options.escape !== null) {
+    if (!Buffer.isBuffer(options.escape)) {
+      throw new Error(
+        `Invalid Option: escape must be a buffer, a string or a boolean, got ${JSON.stringify(options.escape)}`,
+      );
+    }
+  }
+  // Normalize option `from`
+  if (options.from === undefined || options.from === null) {
+    options.from = 1;
+  } else {
+    if (typeof options.from === "string" && /\d+/.test(options.from)) {
+      options.from = parseInt(options.from);
+    }
+    if (Number.isInteger(options.from)) {
+      if (options.from < 0) {
+        throw new Error(
+          `Invalid Option: from must be a positive integer, got ${JSON.stringify(opts.from)}`,
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: from must be an integer, got ${JSON.stringify(options.from)}`,
+      );
+    }
+  }
+  // Normalize option `from_line`
+  if (options.from_line === undefined || options.from_line === null) {
+    options.from_line = 1;
+  } else {
+    if (
+      typeof options.from_line === "string" &&
+      /\d+/.test(options.from_line)
+    ) {
+      options.from_line = parseInt(options.from_line);
+    }
+    if (Number.isInteger(options.from_line)) {
+      if (options.from_line <= 0) {
+        throw new Error(
+          `Invalid Option: from_line must be a positive integer greater than 0, got ${JSON.stringify(opts.from_line)}`,
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: from_line must be an integer, got ${JSON.stringify(opts.from_line)}`,
+      );
+    }
+  }
+  // Normalize options `ignore_last_delimiters`
+  if (
+    options.ignore_last_delimiters === undefined ||
+    options.ignore_last_delimiters === null
+  ) {
+    options.ignore_last_delimiters = false;
+  } else if (typeof options.ignore_last_delimiters === "number") {
+    options.ignore_last_delimiters = Math.floor(options.ignore_last_delimiters);
+    if (options.ignore_last_delimiters === 0) {
+      options.ignore_last_delimiters = false;
+    }
+  } else if (typeof options.ignore_last_delimiters !== "boolean") {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_IGNORE_LAST_DELIMITERS",
+      [
+        "Invalid option `ignore_last_delimiters`:",
+        "the value must be a boolean value or an integer,",
+        `got ${JSON.stringify(options.ignore_last_delimiters)}`,
+      ],
+      options,
+    );
+  }
+  if (options.ignore_last_delimiters === true && options.columns === false) {
+    throw new CsvError(
+      "CSV_IGNORE_LAST_DELIMITERS_REQUIRES_COLUMNS",
+      [
+        "The option `ignore_last_delimiters`",
+        "requires the activation of the `columns` option",
+      ],
+      options,
+    );
+  }
+  // Normalize option `info`
+  if (
+    options.info === undefined ||
+    options.info === null ||
+    options.info === false
+  ) {
+    options.info = false;
+  } else if (options.info !== true) {
+    throw new Error(
+      `Invalid Option: info must be true, got ${JSON.stringify(options.info)}`,
+    );
+  }
+  // Normalize option `max_record_size`
+  if (
+    options.max_record_size === undefined ||
+    options.max_record_size === null ||
+    options.max_record_size === false
+  ) {
+    options.max_record_size = 0;
+  } else if (
+    Number.isInteger(options.max_record_size) &&
+    options.max_record_size >= 0
+  ) {
+    // Great, nothing to do
+  } else if (
+    typeof options.max_record_size === "string" &&
+    /\d+/.test(options.max_record_size)
+  ) {
+    options.max_record_size = parseInt(options.max_record_size);
+  } else {
+    throw new Error(
+      `Invalid Option: max_record_size must be a positive integer, got ${JSON.stringify(options.max_record_size)}`,
+    );
+  }
+  // Normalize option `objname`
+  if (
+    options.objname === undefined ||
+    options.objname === null ||
+    options.objname === false
+  ) {
+    options.objname = undefined;
+  } else if (Buffer.isBuffer(options.objname)) {
+    if (options.objname.length === 0) {
+      throw new Error(`Invalid Option: objname must be a non empty buffer`);
+    }
+    if (options.encoding === null) {
+      // Don't call `toString`, leave objname as a buffer
+    } else {
+      options.objname = options.objname.toString(options.encoding);
+    }
+  } else if (typeof options.objname === "string") {
+    if (options.objname.length === 0) {
+      throw new Error(`Invalid Option: objname must be a non empty string`);
+    }
+    // Great, nothing to do
+  } else if (typeof options.objname === "number") {
+    // if(options.objname.length === 0){
+    //   throw new Error(`Invalid Option: objname must be a non empty string`);
+    // }
+    // Great, nothing to do
+  } else {
+    throw new Error(
+      `Invalid Option: objname must be a string or a buffer, got ${options.objname}`,
+    );
+  }
+  if (options.objname !== undefined) {
+    if (typeof options.objname === "number") {
+      if (options.columns !== false) {
+        throw Error(
+          "Invalid Option: objname index cannot be combined with columns or be defined as a field",
+        );
+      }
+    } else {
+      // A string or a buffer
+      if (options.columns === false) {
+        throw Error(
+          "Invalid Option: objname field must be combined with columns or be defined as an index",
+        );
+      }
+    }
+  }
+  // Normalize option `on_record`
+  if (options.on_record === undefined || options.on_record === null) {
+    options.on_record = undefined;
+  } else if (typeof options.on_record !== "function") {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_ON_RECORD",
+      [
+        "Invalid option `on_record`:",
+        "expect a function,",
+        `got ${JSON.stringify(options.on_record)}`,
+      ],
+      options,
+    );
+  }
+  // Normalize option `on_skip`
+  // options.on_skip ??= (err, chunk) => {
+  //   this.emit('skip', err, chunk);
+  // };
+  if (
+    options.on_skip !== undefined &&
+    options.on_skip !== null &&
+    typeof options.on_skip !== "function"
+  ) {
+    throw new Error(
+      `Invalid Option: on_skip must be a function, got ${JSON.stringify(options.on_skip)}`,
+    );
+  }
+  // Normalize option `quote`
+  if (
+    options.quote === null ||
+    options.quote === false ||
+    options.quote === ""
+  ) {
+    options.quote = null;
+  } else {
+    if (options.quote === undefined || options.quote === true) {
+      options.quote = Buffer.from('"', options.encoding);
+    } else if (typeof options.quote === "string") {
+      options.quote = Buffer.from(options.quote, options.encoding);
+    }
+    if (!Buffer.isBuffer(options.quote)) {
+      throw new Error(
+        `Invalid Option: quote must be a buffer or a string, got ${JSON.stringify(options.quote)}`,
+      );
+    }
+  }
+  // Normalize option `raw`
+  if (
+    options.raw === undefined ||
+    options.raw === null ||
+    options.raw === false
+  ) {
+    options.raw = false;
+  } else if (options.raw !== true) {
+    throw new Error(
+      `Invalid Option: raw must be true, got ${JSON.stringify(options.raw)}`,
+    );
+  }
+  // Normalize option `record_delimiter`
+  if (options.record_delimiter === undefined) {
+    options.record_delimiter = [];
+  } else if (
+    typeof options.record_delimiter === "string" ||
+    Buffer.isBuffer(options.record_delimiter)
+  ) {
+    if (options.record_delimiter.length === 0) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_RECORD_DELIMITER",
+        [
+          "Invalid option `record_delimiter`:",
+          "value must be a non empty string or buffer,",
+          `got ${JSON.stringify(options.record_delimiter)}`,
+        ],
+        options,
+      );
+    }
+    options.record_delimiter = [options.record_delimiter];
+  } else if (!Array.isArray(options.record_delimiter)) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_RECORD_DELIMITER",
+      [
+        "Invalid option `record_delimiter`:",
+        "value must be a string, a buffer or array of string|buffer,",
+        `got ${JSON.stringify(options.record_delimiter)}`,
+      ],
+      options,
+    );
+  }
+  options.record_delimiter = options.record_delimiter.map(function (rd, i) {
+    if (typeof rd !== "string" && !Buffer.isBuffer(rd)) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_RECORD_DELIMITER",
+        [
+          "Invalid option `record_delimiter`:",
+          "value must be a string, a buffer or array of string|buffer",
+          `at index ${i},`,
+          `got ${JSON.stringify(rd)}`,
+        ],
+        options,
+      );
+    } else if (rd.length === 0) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_RECORD_DELIMITER",
+        [
+          "Invalid option `record_delimiter`:",
+          "value must be a non empty string or buffer",
+          `at index ${i},`,
+          `got ${JSON.stringify(rd)}`,
+        ],
+        options,
+      );
+    }
+    if (typeof rd === "string") {
+      rd = Buffer.from(rd, options.encoding);
+    }
+    return rd;
+  });
+  // Normalize option `relax_column_count`
+  if (typeof options.relax_column_count === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.relax_column_count === undefined ||
+    options.relax_column_count === null
+  ) {
+    options.relax_column_count = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_column_count must be a boolean, got ${JSON.stringify(options.relax_column_count)}`,
+    );
+  }
+  if (typeof options.relax_column_count_less === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.relax_column_count_less === undefined ||
+    options.relax_column_count_less === null
+  ) {
+    options.relax_column_count_less = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_column_count_less must be a boolean, got ${JSON.stringify(options.relax_column_count_less)}`,
+    );
+  }
+  if (typeof options.relax_column_count_more === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.relax_column_count_more === undefined ||
+    options.relax_column_count_more === null
+  ) {
+    options.relax_column_count_more = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_column_count_more must be a boolean, got ${JSON.stringify(options.relax_column_count_more)}`,
+    );
+  }
+  // Normalize option `relax_quotes`
+  if (typeof options.relax_quotes === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.relax_quotes === undefined ||
+    options.relax_quotes === null
+  ) {
+    options.relax_quotes = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_quotes must be a boolean, got ${JSON.stringify(options.relax_quotes)}`,
+    );
+  }
+  // Normalize option `skip_empty_lines`
+  if (typeof options.skip_empty_lines === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.skip_empty_lines === undefined ||
+    options.skip_empty_lines === null
+  ) {
+    options.skip_empty_lines = false;
+  } else {
+    throw new Error(
+      `Invalid Option: skip_empty_lines must be a boolean, got ${JSON.stringify(options.skip_empty_lines)}`,
+    );
+  }
+  // Normalize option `skip_records_with_empty_values`
+  if (typeof options.skip_records_with_empty_values === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.skip_records_with_empty_values === undefined ||
+    options.skip_records_with_empty_values === null
+  ) {
+    options.skip_records_with_empty_values = false;
+  } else {
+    throw new Error(
+      `Invalid Option: skip_records_with_empty_values must be a boolean, got ${JSON.stringify(options.skip_records_with_empty_values)}`,
+    );
+  }
+  // Normalize option `skip_records_with_error`
+  if (typeof options.skip_records_with_error === "boolean") {
+    // Great, nothing to do
+  } else if (
+    options.skip_records_with_error === undefined ||
+    options.skip_records_with_error === null
+  ) {
+    options.skip_records_with_error = false;
+  } else {
+    throw new Error(
+      `Invalid Option: skip_records_with_error must be a boolean, got ${JSON.stringify(options.skip_records_with_error)}`,
+    );
+  }
+  // Normalize option `rtrim`
+  if (
+    options.rtrim === undefined ||
+    options.rtrim === null ||
+    options.rtrim === false
+  ) {
+    options.rtrim = false;
+  } else if (options.rtrim !== true) {
+    throw new Error(
+      `Invalid Option: rtrim must be a boolean, got ${JSON.stringify(options.rtrim)}`,
+    );
+  }
+  // Normalize option `ltrim`
+  if (
+    options.ltrim === undefined ||
+    options.ltrim === null ||
+    options.ltrim === false
+  ) {
+    options.ltrim = false;
+  } else if (options.ltrim !== true) {
+    throw new Error(
+      `Invalid Option: ltrim must be a boolean, got ${JSON.stringify(options.ltrim)}`,
+    );
+  }
+  // Normalize option `trim`
+  if (
+    options.trim === undefined ||
+    options.trim === null ||
+    options.trim === false
+  ) {
+    options.trim = false;
+  } else if (options.trim !== true) {
+    throw new Error(
+      `Invalid Option: trim must be a boolean, got ${JSON.stringify(options.trim)}`,
+    );
+  }
+  // Normalize options `trim`, `ltrim` and `rtrim`
+  if (options.trim === true && opts.ltrim !== false) {
+    options.ltrim = true;
+  } else if (options.ltrim !== true) {
+    options.ltrim = false;
+  }
+  if (options.trim === true && opts.rtrim !== false) {
+    options.rtrim = true;
+  } else if (options.rtrim !== true) {
+    options.rtrim = false;
+  }
+  // Normalize option `to`
+  if (options.to === undefined || options.to === null) {
+    options.to = -1;
+  } else if (options.to !== -1) {
+    if (typeof options.to === "string" && /\d+/.test(options.to)) {
+      options.to = parseInt(options.to);
+    }
+    if (Number.isInteger(options.to)) {
+      if (options.to <= 0) {
+        throw new Error(
+          `Invalid Option: to must be a positive integer greater than 0, got ${JSON.stringify(opts.to)}`,
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: to must be an integer, got ${JSON.stringify(opts.to)}`,
+      );
+    }
+  }
+  // Normalize option `to_line`
+  if (options.to_line === undefined || options.to_line === null) {
+    options.to_line = -1;
+  } else if (options.to_line !== -1) {
+    if (typeof options.to_line === "string" && /\d+/.test(options.to_line)) {
+      options.to_line = parseInt(options.to_line);
+    }
+    if (Number.isInteger(options.to_line)) {
+      if (options.to_line <= 0) {
+        throw new Error(
+          `Invalid Option: to_line must be a positive integer greater than 0, got ${JSON.stringify(opts.to_line)}`,
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: to_line must be an integer, got ${JSON.stringify(opts.to_line)}`,
+      );
+    }
+  }
+  return options;
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/utils/delimiter_discover.js
+
+
+
+// Discussed in [issue #400](https://github.com/adaltas/node-csv/issues/400)
+// See https://github.com/python/cpython/blob/ea1b1c579f600cc85d145c60862b2e6b98701b24/Lib/csv.py#L349
+const delimiter_discover = function (records, options) {
+  // Normalize the configuration
+  if (!options) {
+    ({ delimiter_auto: options } = normalize_options({ delimiter_auto: true }));
+  }
+  // Convert String to Buffer
+  if (typeof records === "string") {
+    records = Buffer.from(records);
+  }
+  // Convert Buffer to an array of records
+  if (Buffer.isBuffer(records)) {
+    records = ((data) => {
+      const records = [];
+      const parser = transform({ delimiter: [] });
+      const push = (record) => records.push(record);
+      const close = () => {};
+      const error = parser.parse(data, true, push, close);
+      if (error !== undefined) throw error;
+      return records;
+    })(records);
+  }
+  // Info array initialization, 127 entries, one per char code
+  const info = Array(127)
+    .fill()
+    .map(() => ({ lines: [] }));
+  // Traverse each records, count occurences per char code
+  records.map(([record], line) => {
+    for (let i = 0, l = record.length; i < l; i++) {
+      // Count the character frequency
+      const code = record.charCodeAt(i);
+      if (info[code].lines[line] === undefined) info[code].lines[line] = 0;
+      info[code].lines[line]++;
+    }
+  });
+  // Traverse each char code, compute the score
+  info.map((info, i) => {
+    info.char_code = i;
+    info.std = std(info.lines);
+    info.total = info.lines.reduce((acc, val) => acc + val, 0);
+    info.preferred = !!options.preferred[i];
+    info.score = options.score(info, options);
+  });
+  // Extract the dominant character
+  const result = info.reduce(
+    (acc, info) => (acc.score > info.score ? acc : info),
+    {},
+  );
+  return String.fromCharCode(result.char_code);
+};
+
+const std = function (array) {
+  const n = array.length;
+  if (n === 0) return 0;
+  const mean = array.reduce((a, b) => a + b) / n;
+  return Math.sqrt(
+    array.map((x) => Math.pow(x - mean, 2)).reduce((a, b) => a + b) / n,
+  );
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/api/index.js
+
+
+
+
+
+
+const isRecordEmpty = function (record) {
+  return record.every(
+    (field) =>
+      field == null || (field.toString && field.toString().trim() === ""),
+  );
+};
+
+const cr = 13; // `\r`, carriage return, 0x0D in hexadécimal, 13 in decimal
+const nl = 10; // `\n`, newline, 0x0A in hexadecimal, 10 in decimal
+
+const boms = {
+  // Note, the following are equals:
+  // Buffer.from("\ufeff")
+  // Buffer.from([239, 187, 191])
+  // Buffer.from('EFBBBF', 'hex')
+  utf8: Buffer.from([239, 187, 191]),
+  // Note, the following are equals:
+  // Buffer.from "\ufeff", 'utf16le
+  // Buffer.from([255, 254])
+  utf16le: Buffer.from([255, 254]),
+};
+
+const transform = function (original_options = {}) {
+  const info = {
+    bytes: 0,
+    bytes_records: 0,
+    comment_lines: 0,
+    empty_lines: 0,
+    invalid_field_length: 0,
+    lines: 1,
+    records: 0,
+  };
+  const options = normalize_options(original_options);
+  return {
+    info: info,
+    original_options: original_options,
+    options: options,
+    state: init_state(options),
+    __needMoreData: function (i, bufLen, end) {
+      if (end) return false;
+      const { encoding, escape, quote } = this.options;
+      const { quoting, needMoreDataSize, recordDelimiterMaxLength } =
+        this.state;
+      const numOfCharLeft = bufLen - i - 1;
+      const requiredLength = Math.max(
+        needMoreDataSize,
+        // Skip if the remaining buffer smaller than record delimiter
+        // If "record_delimiter" is yet to be discovered:
+        // 1. It is equals to `[]` and "recordDelimiterMaxLength" equals `0`
+        // 2. We set the length to windows line ending in the current encoding
+        // Note, that encoding is known from user or bom discovery at that point
+        // recordDelimiterMaxLength,
+        recordDelimiterMaxLength === 0
+          ? Buffer.from("\r\n", encoding).length
+          : recordDelimiterMaxLength,
+        // Skip if remaining buffer can be an escaped quote
+        quoting ? (escape === null ? 0 : escape.length) + quote.length : 0,
+        // Skip if remaining buffer can be record delimiter following the closing quote
+        quoting ? quote.length + recordDelimiterMaxLength : 0,
+      );
+      return numOfCharLeft < requiredLength;
+    },
+    // Central parser implementation
+    parse: function (nextBuf, end, push, close) {
+      const {
+        bom,
+        comment_no_infix,
+        delimiter_auto,
+        encoding,
+        from_line,
+        ltrim,
+        max_record_size,
+        raw,
+        relax_quotes,
+        rtrim,
+        skip_empty_lines,
+        to,
+        to_line,
+      } = this.options;
+      let { comment, escape, quote, record_delimiter } = this.options;
+      const {
+        bomSkipped,
+        delimiterDiscovered,
+        delimiterBufPrevious,
+        rawBuffer,
+        escapeIsQuote,
+      } = this.state;
+      // Automatic delimiter discovery
+      if (!delimiterDiscovered && delimiter_auto) {
+        let delimiterBuf;
+        if (delimiterBufPrevious === undefined) {
+          delimiterBuf = nextBuf;
+        } else if (
+          delimiterBufPrevious !== undefined &&
+          nextBuf === undefined
+        ) {
+          delimiterBuf = delimiterBufPrevious;
+        } else {
+          delimiterBuf = Buffer.concat([delimiterBufPrevious, nextBuf]);
+        }
+        // Ensure that nextBuf is not concatenated a second time during buffer reconciliation
+        nextBuf = undefined;
+        // this.delimiterBufPrevious = delimiterBuf;
+        if (end || delimiterBuf.length > delimiter_auto.size) {
+          this.options.delimiter = [
+            Buffer.from(
+              delimiter_discover(delimiterBuf, this.options.delimiter_auto),
+            ),
+          ];
+          this.state.previousBuf = delimiterBuf;
+          this.state.delimiterBufPrevious = undefined;
+          this.state.delimiterDiscovered = true;
+        } else {
+          this.state.delimiterBufPrevious = delimiterBuf;
+          return;
+        }
+      }
+      // Previous buffers reconciliation
+      const { previousBuf } = this.state;
+      let buf;
+      if (previousBuf === undefined) {
+        if (nextBuf === undefined) {
+          // Handle empty string
+          close();
+          return;
+        } else {
+          buf = nextBuf;
+        }
+      } else if (previousBuf !== undefined && nextBuf === undefined) {
+        buf = previousBuf;
+      } else {
+        buf = Buffer.concat([previousBuf, nextBuf]);
+      }
+      // Handle UTF BOM
+      if (bomSkipped === false) {
+        if (bom === false) {
+          this.state.bomSkipped = true;
+        } else if (buf.length < 3) {
+          // No enough data
+          if (end === false) {
+            // Wait for more data
+            this.state.previousBuf = buf;
+            return;
+          }
+        } else {
+          for (const encoding in boms) {
+            if (boms[encoding].compare(buf, 0, boms[encoding].length) === 0) {
+              // Skip BOM
+              const bomLength = boms[encoding].length;
+              this.state.bufBytesStart += bomLength;
+              buf = buf.slice(bomLength);
+              // Renormalize original options with the new encoding
+              const options = normalize_options({
+                ...this.original_options,
+                encoding: encoding,
+              });
+              // Properties are merged with the existing options instance
+              for (const key in options) {
+                this.options[key] = options[key];
+              }
+              // Options will re-evaluate the Buffer with the new encoding
+              ({ comment, escape, quote } = this.options);
+              break;
+            }
+          }
+          this.state.bomSkipped = true;
+        }
+      }
+      const bufLen = buf.length;
+      let pos;
+      for (pos = 0; pos < bufLen; pos++) {
+        // Ensure we get enough space to look ahead
+        // There should be a way to move this out of the loop
+        if (this.__needMoreData(pos, bufLen, end)) {
+          break;
+        }
+        if (this.state.wasRowDelimiter === true) {
+          this.info.lines++;
+          this.state.wasRowDelimiter = false;
+        }
+        if (to_line !== -1 && this.info.lines > to_line) {
+          this.state.stop = true;
+          close();
+          return;
+        }
+        // Auto discovery of record_delimiter, unix, mac and windows supported
+        if (this.state.quoting === false && record_delimiter.length === 0) {
+          const record_delimiterCount = this.__autoDiscoverRecordDelimiter(
+            buf,
+            pos,
+          );
+          if (record_delimiterCount) {
+            record_delimiter = this.options.record_delimiter;
+          }
+        }
+        const chr = buf[pos];
+        if (raw === true) {
+          rawBuffer.append(chr);
+        }
+        if (
+          (chr === cr || chr === nl) &&
+          this.state.wasRowDelimiter === false
+        ) {
+          this.state.wasRowDelimiter = true;
+        }
+        // Previous char was a valid escape char
+        // treat the current char as a regular char
+        if (this.state.escaping === true) {
+          this.state.escaping = false;
+        } else {
+          // Escape is only active inside quoted fields
+          // We are quoting, the char is an escape chr and there is a chr to escape
+          // if(escape !== null && this.state.quoting === true && chr === escape && pos + 1 < bufLen){
+          if (
+            escape !== null &&
+            this.state.quoting === true &&
+            this.__isEscape(buf, pos, chr) &&
+            pos + escape.length < bufLen
+          ) {
+            if (escapeIsQuote) {
+              if (this.__isQuote(buf, pos + escape.length)) {
+                this.state.escaping = true;
+                pos += escape.length - 1;
+                continue;
+              }
+            } else {
+              this.state.escaping = true;
+              pos += escape.length - 1;
+              continue;
+            }
+          }
+          // Not currently escaping and chr is a quote
+          // TODO: need to compare bytes instead of single char
+          if (this.state.commenting === false && this.__isQuote(buf, pos)) {
+            if (this.state.quoting === true) {
+              const nextChr = buf[pos + quote.length];
+              const isNextChrTrimable =
+                rtrim && this.__isCharTrimable(buf, pos + quote.length);
+              const isNextChrComment =
+                comment !== null &&
+                this.__compareBytes(comment, buf, pos + quote.length, nextChr);
+              const isNextChrDelimiter = this.__isDelimiter(
+                buf,
+                pos + quote.length,
+                nextChr,
+              );
+              const isNextChrRecordDelimiter =
+                record_delimiter.length === 0
+                  ? this.__autoDiscoverRecordDelimiter(buf, pos + quote.length)
+                  : this.__isRecordDelimiter(nextChr, buf, pos + quote.length);
+              // Escape a quote
+              // Treat next char as a regular character
+              if (
+                escape !== null &&
+                this.__isEscape(buf, pos, chr) &&
+                this.__isQuote(buf, pos + escape.length)
+              ) {
+                pos += escape.length - 1;
+              } else if (
+                !nextChr ||
+                isNextChrDelimiter ||
+                isNextChrRecordDelimiter ||
+                isNextChrComment ||
+                isNextChrTrimable
+              ) {
+                this.state.quoting = false;
+                this.state.wasQuoting = true;
+                pos += quote.length - 1;
+                continue;
+              } else if (relax_quotes === false) {
+                const err = this.__error(
+                  new CsvError(
+                    "CSV_INVALID_CLOSING_QUOTE",
+                    [
+                      "Invalid Closing Quote:",
+                      `got "${String.fromCharCode(nextChr)}"`,
+                      `at line ${this.info.lines}`,
+                      "instead of delimiter, record delimiter, trimable character",
+                      "(if activated) or comment",
+                    ],
+                    this.options,
+                    this.__infoField(),
+                  ),
+                );
+                if (err !== undefined) return err;
+              } else {
+                this.state.quoting = false;
+                this.state.wasQuoting = true;
+                this.state.field.prepend(quote);
+                pos += quote.length - 1;
+              }
+            } else {
+              if (this.state.field.length !== 0) {
+                // In relax_quotes mode, treat opening quote preceded by chrs as regular
+                if (relax_quotes === false) {
+                  const info = this.__infoField();
+                  const bom = Object.keys(boms)
+                    .map((b) =>
+                      boms[b].equals(this.state.field.toString()) ? b : false,
+                    )
+                    .filter(Boolean)[0];
+                  const err = this.__error(
+                    new CsvError(
+                      "INVALID_OPENING_QUOTE",
+                      [
+                        "Invalid Opening Quote:",
+                        `a quote is found on field ${JSON.stringify(info.column)} at line ${info.lines}, value is ${JSON.stringify(this.state.field.toString(encoding))}`,
+                        bom ? `(${bom} bom)` : undefined,
+                      ],
+                      this.options,
+                      info,
+                      {
+                        field: this.state.field,
+                      },
+                    ),
+                  );
+                  if (err !== undefined) return err;
+                }
+              } else {
+                this.state.quoting = true;
+                pos += quote.length - 1;
+                continue;
+              }
+            }
+          }
+          if (this.state.quoting === false) {
+            const recordDelimiterLength = this.__isRecordDelimiter(
+              chr,
+              buf,
+              pos,
+            );
+            if (recordDelimiterLength !== 0) {
+              // Do not emit comments which take a full line
+              const skipCommentLine =
+                this.state.commenting &&
+                this.state.wasQuoting === false &&
+                this.state.record.length === 0 &&
+                this.state.field.length === 0;
+              if (skipCommentLine) {
+                this.info.comment_lines++;
+                // Skip full comment line
+              } else {
+                // Activate records emission if above from_line
+                if (
+                  this.state.enabled === false &&
+                  this.info.lines +
+                    (this.state.wasRowDelimiter === true ? 1 : 0) >=
+                    from_line
+                ) {
+                  this.state.enabled = true;
+                  this.__resetField();
+                  this.__resetRecord();
+                  pos += recordDelimiterLength - 1;
+                  continue;
+                }
+                // Skip if line is empty and skip_empty_lines activated
+                if (
+                  skip_empty_lines === true &&
+                  this.state.wasQuoting === false &&
+                  this.state.record.length === 0 &&
+                  this.state.field.length === 0
+                ) {
+                  this.info.empty_lines++;
+                  pos += recordDelimiterLength - 1;
+                  continue;
+                }
+                this.info.bytes = this.state.bufBytesStart + pos;
+                const errField = this.__onField();
+                if (errField !== undefined) return errField;
+                this.info.bytes =
+                  this.state.bufBytesStart + pos + recordDelimiterLength;
+                const errRecord = this.__onRecord(push);
+                if (errRecord !== undefined) return errRecord;
+                if (to !== -1 && this.info.records >= to) {
+                  this.state.stop = true;
+                  close();
+                  return;
+                }
+              }
+              this.state.commenting = false;
+              pos += recordDelimiterLength - 1;
+              continue;
+            }
+            if (this.state.commenting) {
+              continue;
+            }
+            if (
+              comment !== null &&
+              (comment_no_infix === false ||
+                (this.state.record.length === 0 &&
+                  this.state.field.length === 0))
+            ) {
+              const commentCount = this.__compareBytes(comment, buf, pos, chr);
+              if (commentCount !== 0) {
+                this.state.commenting = true;
+                continue;
+              }
+            }
+            const delimiterLength = this.__isDelimiter(buf, pos, chr);
+            if (delimiterLength !== 0) {
+              this.info.bytes = this.state.bufBytesStart + pos;
+              const errField = this.__onField();
+              if (errField !== undefined) return errField;
+              pos += delimiterLength - 1;
+              continue;
+            }
+          }
+        }
+        if (this.state.commenting === false) {
+          if (
+            max_record_size !== 0 &&
+            this.state.record_length + this.state.field.length > max_record_size
+          ) {
+            return this.__error(
+              new CsvError(
+                "CSV_MAX_RECORD_SIZE",
+                [
+                  "Max Record Size:",
+                  "record exceed the maximum number of tolerated bytes",
+                  `of ${max_record_size}`,
+                  `at line ${this.info.lines}`,
+                ],
+                this.options,
+                this.__infoField(),
+              ),
+            );
+          }
+        }
+        const lappend =
+          ltrim === false ||
+          this.state.quoting === true ||
+          this.state.field.length !== 0 ||
+          !this.__isCharTrimable(buf, pos);
+        // rtrim in non quoting is handle in __onField
+        const rappend = rtrim === false || this.state.wasQuoting === false;
+        if (lappend === true && rappend === true) {
+          this.state.field.append(chr);
+        } else if (rtrim === true && !this.__isCharTrimable(buf, pos)) {
+          return this.__error(
+            new CsvError(
+              "CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE",
+              [
+                "Invalid Closing Quote:",
+                "found non trimable byte after quote",
+                `at line ${this.info.lines}`,
+              ],
+              this.options,
+              this.__infoField(),
+            ),
+          );
+        } else {
+          if (lappend === false) {
+            pos += this.__isCharTrimable(buf, pos) - 1;
+          }
+          continue;
+        }
+      }
+      if (end === true) {
+        // Ensure we are not ending in a quoting state
+        if (this.state.quoting === true) {
+          const err = this.__error(
+            new CsvError(
+              "CSV_QUOTE_NOT_CLOSED",
+              [
+                "Quote Not Closed:",
+                `the parsing is finished with an opening quote at line ${this.info.lines}`,
+              ],
+              this.options,
+              this.__infoField(),
+            ),
+          );
+          if (err !== undefined) return err;
+        } else {
+          // Skip last line if it has no characters
+          if (
+            this.state.wasQuoting === true ||
+            this.state.record.length !== 0 ||
+            this.state.field.length !== 0
+          ) {
+            this.info.bytes = this.state.bufBytesStart + pos;
+            const errField = this.__onField();
+            if (errField !== undefined) return errField;
+            const errRecord = this.__onRecord(push);
+            if (errRecord !== undefined) return errRecord;
+          } else if (this.state.wasRowDelimiter === true) {
+            this.info.empty_lines++;
+          } else if (this.state.commenting === true) {
+            this.info.comment_lines++;
+          }
+        }
+      } else {
+        this.state.bufBytesStart += pos;
+        this.state.previousBuf = buf.slice(pos);
+      }
+      if (this.state.wasRowDelimiter === true) {
+        this.info.lines++;
+        this.state.wasRowDelimiter = false;
+      }
+    },
+    __onRecord: function (push) {
+      const {
+        columns,
+        group_columns_by_name,
+        encoding,
+        info,
+        from,
+        relax_column_count,
+        relax_column_count_less,
+        relax_column_count_more,
+        raw,
+        skip_records_with_empty_values,
+      } = this.options;
+      const { enabled, record } = this.state;
+      if (enabled === false) {
+        return this.__resetRecord();
+      }
+      // Convert the first line into column names
+      const recordLength = record.length;
+      if (columns === true) {
+        if (skip_records_with_empty_values === true && isRecordEmpty(record)) {
+          this.__resetRecord();
+          return;
+        }
+        return this.__firstLineToColumns(record);
+      }
+      if (columns === false && this.info.records === 0) {
+        this.state.expectedRecordLength = recordLength;
+      }
+      if (recordLength !== this.state.expectedRecordLength) {
+        const err =
+          columns === false
+            ? new CsvError(
+                "CSV_RECORD_INCONSISTENT_FIELDS_LENGTH",
+                [
+                  "Invalid Record Length:",
+                  `expect ${this.state.expectedRecordLength},`,
+                  `got ${recordLength} on line ${this.info.lines}`,
+                ],
+                this.options,
+                this.__infoField(),
+                {
+                  record: record,
+                },
+              )
+            : new CsvError(
+                "CSV_RECORD_INCONSISTENT_COLUMNS",
+                [
+                  "Invalid Record Length:",
+                  `columns length is ${columns.length},`, // rename columns
+                  `got ${recordLength} on line ${this.info.lines}`,
+                ],
+                this.options,
+                this.__infoField(),
+                {
+                  record: record,
+                },
+              );
+        if (
+          relax_column_count === true ||
+          (relax_column_count_less === true &&
+            recordLength < this.state.expectedRecordLength) ||
+          (relax_column_count_more === true &&
+            recordLength > this.state.expectedRecordLength)
+        ) {
+          this.info.invalid_field_length++;
+          this.state.error = err;
+          // Error is undefined with skip_records_with_error
+        } else {
+          const finalErr = this.__error(err);
+          if (finalErr) return finalErr;
+        }
+      }
+      if (skip_records_with_empty_values === true && isRecordEmpty(record)) {
+        this.__resetRecord();
+        return;
+      }
+      if (this.state.recordHasError === true) {
+        this.__resetRecord();
+        this.state.recordHasError = false;
+        return;
+      }
+      this.info.records++;
+      if (from === 1 || this.info.records >= from) {
+        const { objname } = this.options;
+        // With columns, records are object
+        if (columns !== false) {
+          const obj = {};
+          // Transform record array to an object
+          for (let i = 0, l = record.length; i < l; i++) {
+            if (columns[i] === undefined || columns[i].disabled) continue;
+            // Turn duplicate columns into an array
+            if (
+              group_columns_by_name === true &&
+              Object.hasOwn(obj, columns[i].name)
+            ) {
+              if (Array.isArray(obj[columns[i].name])) {
+                obj[columns[i].name] = obj[columns[i].name].concat(record[i]);
+              } else {
+                obj[columns[i].name] = [obj[columns[i].name], record[i]];
+              }
+            } else {
+              Object.defineProperty(obj, columns[i].name, {
+                value: record[i],
+                enumerable: true,
+                writable: true,
+                configurable: true,
+              });
+            }
+          }
+          // Without objname (default)
+          if (raw === true || info === true) {
+            const extRecord = Object.assign(
+              { record: obj },
+              raw === true
+                ? { raw: this.state.rawBuffer.toString(encoding) }
+                : {},
+              info === true ? { info: this.__infoRecord() } : {},
+            );
+            const err = this.__push(
+              objname === undefined ? extRecord : [obj[objname], extRecord],
+              push,
+            );
+            if (err) {
+              return err;
+            }
+          } else {
+            const err = this.__push(
+              objname === undefined ? obj : [obj[objname], obj],
+              push,
+            );
+            if (err) {
+              return err;
+            }
+          }
+          // Without columns, records are array
+        } else {
+          if (raw === true || info === true) {
+            const extRecord = Object.assign(
+              { record: record },
+              raw === true
+                ? { raw: this.state.rawBuffer.toString(encoding) }
+                : {},
+              info === true ? { info: this.__infoRecord() } : {},
+            );
+            const err = this.__push(
+              objname === undefined ? extRecord : [record[objname], extRecord],
+              push,
+            );
+            if (err) {
+              return err;
+            }
+          } else {
+            const err = this.__push(
+              objname === undefined ? record : [record[objname], record],
+              push,
+            );
+            if (err) {
+              return err;
+            }
+          }
+        }
+      }
+      this.__resetRecord();
+    },
+    __firstLineToColumns: function (record) {
+      const { firstLineToHeaders } = this.state;
+      try {
+        const headers =
+          firstLineToHeaders === undefined
+            ? record
+            : firstLineToHeaders.call(null, record);
+        if (!Array.isArray(headers)) {
+          return this.__error(
+            new CsvError(
+              "CSV_INVALID_COLUMN_MAPPING",
+              [
+                "Invalid Column Mapping:",
+                "expect an array from column function,",
+                `got ${JSON.stringify(headers)}`,
+              ],
+              this.options,
+              this.__infoField(),
+              {
+                headers: headers,
+              },
+            ),
+          );
+        }
+        const normalizedHeaders = normalize_columns_array(headers);
+        this.state.expectedRecordLength = normalizedHeaders.length;
+        this.options.columns = normalizedHeaders;
+        this.__resetRecord();
+        return;
+      } catch (err) {
+        return err;
+      }
+    },
+    __resetRecord: function () {
+      if (this.options.raw === true) {
+        this.state.rawBuffer.reset();
+      }
+      this.state.error = undefined;
+      this.state.record = [];
+      this.state.record_length = 0;
+    },
+    __onField: function () {
+      const { cast, encoding, rtrim, max_record_size } = this.options;
+      const { enabled, wasQuoting } = this.state;
+      // Short circuit for the from_line options
+      if (enabled === false) {
+        return this.__resetField();
+      }
+      let field = this.state.field.toString(encoding);
+      if (rtrim === true && wasQuoting === false) {
+        field = field.trimRight();
+      }
+      if (cast === true) {
+        const [err, f] = this.__cast(field);
+        if (err !== undefined) return err;
+        field = f;
+      }
+      this.state.record.push(field);
+      // Increment record length if record size must not exceed a limit
+      if (max_record_size !== 0 && typeof field === "string") {
+        this.state.record_length += field.length;
+      }
+      this.__resetField();
+    },
+    __resetField: function () {
+      this.state.field.reset();
+      this.state.wasQuoting = false;
+    },
+    __push: function (record, push) {
+      const { on_record } = this.options;
+      if (on_record !== undefined) {
+        const info = this.__infoRecord();
+        try {
+          record = on_record.call(null, record, info);
+        } catch (err) {
+          return err;
+        }
+        if (record === undefined || record === null) {
+          return;
+        }
+      }
+      this.info.bytes_records += this.info.bytes;
+      push(record);
+    },
+    // Return a tuple with the error and the casted value
+    __cast: function (field) {
+      const { columns, relax_column_count } = this.options;
+      const isColumns = Array.isArray(columns);
+      // Dont loose time calling cast
+      // because the final record is an object
+      // and this field can't be associated to a key present in columns
+      if (
+        isColumns === true &&
+        relax_column_count &&
+        this.options.columns.length <= this.state.record.length
+      ) {
+        return [undefined, undefined];
+      }
+      if (this.state.castField !== null) {
+        try {
+          const info = this.__infoField();
+          return [undefined, this.state.castField.call(null, field, info)];
+        } catch (err) {
+          return [err];
+        }
+      }
+      if (this.__isFloat(field)) {
+        return [undefined, parseFloat(field)];
+      } else if (this.options.cast_date !== false) {
+        const info = this.__infoField();
+        return [undefined, this.options.cast_date.call(null, field, info)];
+      }
+      return [undefined, field];
+    },
+    __compareBytes: function (sourceBuf, targetBuf, targetPos, firstByte) {
+      if (sourceBuf[0] !== firstByte) return 0;
+      const sourceLength = sourceBuf.length;
+      for (let i = 1; i < sourceLength; i++) {
+        if (sourceBuf[i] !== targetBuf[targetPos + i]) return 0;
+      }
+      return sourceLength;
+    },
+    // Helper to test if a character is trimable
+    __isCharTrimable: function (buf, pos) {
+      const { timchars, timcharFirstBytes } = this.state;
+      // Fast bail-out: non-whitespace bytes (the common case) are rejected
+      // without scanning the full timchar list.
+      const first = buf[pos];
+      if (first === undefined || timcharFirstBytes[first] === 0) return 0;
+      loop1: for (let i = 0; i < timchars.length; i++) {
+        const timchar = timchars[i];
+        for (let j = 0; j < timchar.length; j++) {
+          if (timchar[j] !== buf[pos + j]) continue loop1;
+        }
+        return timchar.length;
+      }
+      return 0;
+    },
+    __isDelimiter: function (buf, pos, chr) {
+      const { delimiter, ignore_last_delimiters } = this.options;
+      if (
+        ignore_last_delimiters === true &&
+        this.state.record.length === this.options.columns.length - 1
+      ) {
+        return 0;
+      } else if (
+        ignore_last_delimiters !== false &&
+        typeof ignore_last_delimiters === "number" &&
+        this.state.record.length === ignore_last_delimiters - 1
+      ) {
+        return 0;
+      }
+      loop1: for (let i = 0; i < delimiter.length; i++) {
+        const del = delimiter[i];
+        if (del[0] === chr) {
+          for (let j = 1; j < del.length; j++) {
+            if (del[j] !== buf[pos + j]) continue loop1;
+          }
+          return del.length;
+        }
+      }
+      return 0;
+    },
+    __isEscape: function (buf, pos, chr) {
+      const { escape } = this.options;
+      if (escape === null) return false;
+      const l = escape.length;
+      if (escape[0] === chr) {
+        for (let i = 0; i < l; i++) {
+          if (escape[i] !== buf[pos + i]) {
+            return false;
+          }
+        }
+        return true;
+      }
+      return false;
+    },
+    __isFloat: function (value) {
+      return value - parseFloat(value) + 1 >= 0; // Borrowed from jquery
+    },
+    // Keep it in case we implement the `cast_int` option
+    // __isInt(value){
+    //   // return Number.isInteger(parseInt(value))
+    //   // return !isNaN( parseInt( obj ) );
+    //   return /^(\-|\+)?[1-9][0-9]*$/.test(value)
+    // }
+    __isQuote: function (buf, pos) {
+      const { quote } = this.options;
+      if (quote === null) return false;
+      const l = quote.length;
+      for (let i = 0; i < l; i++) {
+        if (quote[i] !== buf[pos + i]) {
+          return false;
+        }
+      }
+      return true;
+    },
+    __isRecordDelimiter: function (chr, buf, pos) {
+      const { record_delimiter } = this.options;
+      const recordDelimiterLength = record_delimiter.length;
+      loop1: for (let i = 0; i < recordDelimiterLength; i++) {
+        const rd = record_delimiter[i];
+        const rdLength = rd.length;
+        if (rd[0] !== chr) {
+          continue;
+        }
+        for (let j = 1; j < rdLength; j++) {
+          if (rd[j] !== buf[pos + j]) {
+            continue loop1;
+          }
+        }
+        return rd.length;
+      }
+      return 0;
+    },
+    __autoDiscoverRecordDelimiter: function (buf, pos) {
+      const { encoding } = this.options;
+      // Note, we don't need to cache this information in state,
+      // It is only called on the first line until we find out a suitable
+      // record delimiter.
+      const rds = [
+        // Important, the windows line ending must be before mac os 9
+        Buffer.from("\r\n", encoding),
+        Buffer.from("\n", encoding),
+        Buffer.from("\r", encoding),
+      ];
+      loop: for (let i = 0; i < rds.length; i++) {
+        const l = rds[i].length;
+        for (let j = 0; j < l; j++) {
+          if (rds[i][j] !== buf[pos + j]) {
+            continue loop;
+          }
+        }
+        this.options.record_delimiter.push(rds[i]);
+        this.state.recordDelimiterMaxLength = rds[i].length;
+        return rds[i].length;
+      }
+      return 0;
+    },
+    __error: function (msg) {
+      const { encoding, raw, skip_records_with_error } = this.options;
+      const err = typeof msg === "string" ? new Error(msg) : msg;
+      if (skip_records_with_error) {
+        this.state.recordHasError = true;
+        if (this.options.on_skip !== undefined) {
+          try {
+            this.options.on_skip(
+              err,
+              raw ? this.state.rawBuffer.toString(encoding) : undefined,
+            );
+          } catch (err) {
+            return err;
+          }
+        }
+        // this.emit('skip', err, raw ? this.state.rawBuffer.toString(encoding) : undefined);
+        return undefined;
+      } else {
+        return err;
+      }
+    },
+    __infoDataSet: function () {
+      return {
+        ...this.info,
+        columns: this.options.columns,
+      };
+    },
+    __infoRecord: function () {
+      const { columns, raw, encoding } = this.options;
+      return {
+        ...this.__infoDataSet(),
+        bytes_records: this.info.bytes,
+        error: this.state.error,
+        header: columns === true,
+        index: this.state.record.length,
+        raw: raw ? this.state.rawBuffer.toString(encoding) : undefined,
+      };
+    },
+    __infoField: function () {
+      const { columns } = this.options;
+      const isColumns = Array.isArray(columns);
+      // Bytes records are only incremented when all records'fields are parsed
+      const bytes_records = this.info.bytes_records;
+      return {
+        ...this.__infoRecord(),
+        bytes_records: bytes_records,
+        column:
+          isColumns === true
+            ? columns.length > this.state.record.length
+              ? columns[this.state.record.length].name
+              : null
+            : this.state.record.length,
+        quoting: this.state.wasQuoting,
+      };
+    },
+  };
+};
+
+
+
+;// CONCATENATED MODULE: ./node_modules/csv-parse/lib/index.js
+/*
+CSV Parse
+
+Please look at the [project documentation](https://csv.js.org/parse/) for
+additional information.
+*/
+
+
+
+
+
+
+
+class Parser extends external_stream_namespaceObject.Transform {
+  constructor(opts = {}) {
+    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
+    this.api = transform({
+      on_skip: (err, chunk) => {
+        this.emit("skip", err, chunk);
+      },
+      ...opts,
+    });
+    // Backward compatibility
+    this.state = this.api.state;
+    this.options = this.api.options;
+    this.info = this.api.info;
+  }
+  // Implementation of `Transform._transform`
+  _transform(buf, _, callback) {
+    if (this.state.stop === true) {
+      return;
+    }
+    const err = this.api.parse(
+      buf,
+      false,
+      (record) => {
+        this.push(record);
+      },
+      () => {
+        this.push(null);
+        this.end();
+        // Fix #333 and break #410
+        //   ko: api.stream.iterator.coffee
+        //   ko with v21.4.0, ok with node v20.5.1: api.stream.finished # aborted (with generate())
+        //   ko: api.stream.finished # aborted (with Readable)
+        // this.destroy()
+        // Fix #410 and partially break #333
+        //   ok: api.stream.iterator.coffee
+        //   ok: api.stream.finished # aborted (with generate())
+        //   broken: api.stream.finished # aborted (with Readable)
+        this.on("end", this.destroy);
+      },
+    );
+    if (err !== undefined) {
+      this.state.stop = true;
+    }
+    callback(err);
+  }
+  // Implementation of `Transform._flush`
+  _flush(callback) {
+    if (this.state.stop === true) {
+      return;
+    }
+    const err = this.api.parse(
+      undefined,
+      true,
+      (record) => {
+        this.push(record);
+      },
+      () => {
+        this.push(null);
+        this.on("end", this.destroy);
+      },
+    );
+    callback(err);
+  }
+}
+
+const parse = function () {
+  let data, options, callback;
+  for (const i in arguments) {
+    const argument = arguments[i];
+    const type = typeof argument;
+    if (
+      data === undefined &&
+      (typeof argument === "string" || Buffer.isBuffer(argument))
+    ) {
+      data = argument;
+    } else if (options === undefined && is_object(argument)) {
+      options = argument;
+    } else if (callback === undefined && type === "function") {
+      callback = argument;
+    } else {
+      throw new CsvError(
+        "CSV_INVALID_ARGUMENT",
+        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
+        options || {},
+      );
+    }
+  }
+  const parser = new Parser(options);
+  if (callback) {
+    const records =
+      options === undefined || options.objname === undefined
+        ? []
+        : Object.create(null);
+    parser.on("readable", function () {
+      let record;
+      while ((record = this.read()) !== null) {
+        if (options === undefined || options.objname === undefined) {
+          records.push(record);
+        } else {
+          Object.assign(records, {
+            [record[0]]: record[1],
+            // writable: true,
+            // enumerable: true,
+            // configurable: true
+          });
+        }
+      }
+    });
+    parser.on("error", function (err) {
+      callback(err, undefined, parser.api.__infoDataSet());
+    });
+    parser.on("end", function () {
+      callback(undefined, records, parser.api.__infoDataSet());
+    });
+  }
+  if (data !== undefined) {
+    const writer = function () {
+      parser.write(data);
+      parser.end();
+    };
+    // Support Deno, Rollup doesn't provide a shim for setImmediate
+    if (typeof setImmediate === "function") {
+      setImmediate(writer);
+    } else {
+      setTimeout(writer, 0);
+    }
+  }
+  return parser;
+};
+
+
 
 
 /***/ })

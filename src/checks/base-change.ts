@@ -3,6 +3,7 @@
  * request's base commit, as a fraction.
  */
 import type { Check } from './types.js';
+import { classifierBaseChange } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 import { fromJsonNumber } from '../result/result.js';
 
@@ -26,6 +27,7 @@ const check: Check = {
   advice:
     'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
   line: (d) => d.termsLine,
+  measureClassifier: classifierBaseChange,
   measure({ metrics, baseline }) {
     if (!baseline) return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
     const base = baseline.metrics ? fromJsonNumber(baseline.metrics.holdout_rmse) : Number.NaN;

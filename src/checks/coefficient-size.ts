@@ -3,6 +3,7 @@
  */
 import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
+import { classifierCoefficientSize } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 
 const check: Check = {
@@ -20,6 +21,7 @@ const check: Check = {
   each other, the signature of an overfit or ill-conditioned fit.`,
   advice: 'Add a ridge penalty (`fit.ridge`) or remove nearly collinear terms so that columns stop cancelling each other.',
   line: (d) => d.fit.ridgeLine,
+  measureClassifier: classifierCoefficientSize,
   measure({ metrics, design }) {
     if (metrics.maxStdCoefficientColumn < 0) {
       return { value: null, reason: 'no-columns', message: 'the model has no non-intercept columns' };

@@ -2,6 +2,7 @@
  * `complexity`: the simpler setting to use, by the one-standard-error rule on a sweep of the
  * model's main complexity setting.
  */
+import { classifierComplexity } from './classifier/measures.js';
 import type { Check, Measurement } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { sweepComplexity } from '../diagnostics/complexity.js';
@@ -44,6 +45,7 @@ const check: Check = {
   \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
   advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
   line: (d) => d.fit.line,
+  measureClassifier: classifierComplexity,
   measure(context): Measurement {
     const { descriptor, design, train, fit } = context;
     const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });

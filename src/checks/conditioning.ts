@@ -3,6 +3,7 @@
  */
 import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
+import { classifierConditioning } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 import { jsonNumber } from '../result/result.js';
 
@@ -25,6 +26,7 @@ const check: Check = {
   \`singular_values_scaled\`.`,
   advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
   line: (d) => d.termsLine,
+  measureClassifier: classifierConditioning,
   measure({ fit, design, descriptor }) {
     const value = fit.conditionNumberScaled;
     const columns = fit.collinearColumns.map((j) => design.columnNames[j]);

@@ -3,6 +3,7 @@
  * GCV and the effective degrees of freedom in the model's metrics.
  */
 import type { Check } from './types.js';
+import { classifierCrossValidation } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 import { gapRatio } from '../diagnostics/regression-metrics.js';
 import { jsonMetrics, jsonRecord } from '../core/json.js';
@@ -40,6 +41,7 @@ const check: Check = {
   \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
   advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,
+  measureClassifier: classifierCrossValidation,
   measure(context) {
     const folds = context.analyses.folds();
     const cv = context.analyses.crossValidation();

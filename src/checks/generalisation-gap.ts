@@ -2,6 +2,7 @@
  * `generalisation-gap`: hold-out RMSE / training RMSE.
  */
 import type { Check } from './types.js';
+import { classifierGap } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 
 const check: Check = {
@@ -19,6 +20,7 @@ const check: Check = {
   section 7.2). The default 1.5 is common practice, not a law: set it per model.`,
   advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
   line: (d) => d.fit.line,
+  measureClassifier: classifierGap,
   measure({ metrics }) {
     return {
       value: metrics.gapRatio,

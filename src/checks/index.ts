@@ -4,7 +4,8 @@
  * `npm run bundle` (test/tools/gen-validators.mjs) then regenerates the limit-key table, the
  * JSON Schemas' `limits` and docs/checks.md from this list, and tests fail while they are stale.
  */
-import type { Limit } from '../config/types.js';
+import type { Descriptor, Limit, Task } from '../config/types.js';
+import type { ClassifierContext } from './classifier/context.js';
 import { jsonNumber, type CheckResult } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import baseChange from './base-change.js';
@@ -18,9 +19,13 @@ import leakage from './leakage.js';
 import reproducibility from './reproducibility.js';
 import swing from './swing.js';
 import swingBeyond from './swing-beyond.js';
-import { judge, type Check, type CheckContext, type Measurement } from './types.js';
+import calibrationSlope from './calibration-slope.js';
+import eventsPerParameter from './events-per-parameter.js';
+import separation from './separation.js';
+import { appliesTo, judge, type Check, type CheckContext, type Measurement } from './types.js';
 
 export type { Check, CheckContext, CoreMetrics, Measurement } from './types.js';
+export type { ClassifierContext } from './classifier/context.js';
 
 /** Every check, in report order. Ids are unique (checked on load). */
 export const CHECKS: readonly Check[] = validate([
@@ -35,6 +40,9 @@ export const CHECKS: readonly Check[] = validate([
   reproducibility,
   conditioning,
   complexity,
+  separation,
+  eventsPerParameter,
+  calibrationSlope,
 ]);
 
 function validate(checks: Check[]): Check[] {
@@ -78,11 +86,33 @@ function describeLimit(status: CheckResult['status'], value: number, limit: Limi
  * a skipped outcome with code `<id>/internal-error` (the run goes on).
  */
 export function runCheck(check: Check, context: CheckContext): { outcome: CheckResult; figures: Measurement['metrics'] } {
+  return judgeCheck(check, context.descriptor, () => check.measure(context));
+}
+
+/**
+ * Runs one check on a binary classifier: its `measureClassifier`, or a skipped outcome
+ * `<id>/not-for-classification` when the check does not apply to classifiers.
+ */
+export function runClassifierCheck(check: Check, context: ClassifierContext): { outcome: CheckResult; figures: Measurement['metrics'] } {
+  const measure = check.measureClassifier;
+  if (!appliesTo(check, 'classification') || measure === undefined) {
+    return judgeCheck(check, context.descriptor, () => ({ value: null, reason: 'not-for-classification', message: 'applies to regression models only' }));
+  }
+  return judgeCheck(check, context.descriptor, () => measure.call(check, context));
+}
+
+/** The checks that apply to a task, in report order (a regression model's report lists only these). */
+export function checksFor(task: Task): Check[] {
+  return CHECKS.filter((c) => task === 'classification' || appliesTo(c, task));
+}
+
+function judgeCheck(check: Check, descriptor: Descriptor, measure: () => Measurement): { outcome: CheckResult; figures: Measurement['metrics'] } {
+  const context = { descriptor };
   const limit = context.descriptor.limits[check.limitKey];
   const line = limit?.line ?? null;
   let measured: Measurement;
   try {
-    measured = check.measure(context);
+    measured = measure();
   } catch (error) {
     measured = {
       value: null,

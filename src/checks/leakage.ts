@@ -3,6 +3,7 @@
  */
 import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
+import { classifierLeakage } from './classifier/measures.js';
 
 const check: Check = {
   id: 'leakage',
@@ -28,6 +29,7 @@ const check: Check = {
   \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
   advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
   line: (d) => d.data.lines.holdout,
+  measureClassifier: classifierLeakage,
   measure(context) {
     const { holdout, train, design } = context;
     if (design.inputs.length === 0) {

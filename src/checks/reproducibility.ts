@@ -3,6 +3,7 @@
  */
 import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
+import { classifierReproducibility } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 import { jsonRecord } from '../core/json.js';
 import { jsonNumber } from '../result/result.js';
@@ -24,6 +25,7 @@ const check: Check = {
   \`holdout_rmse_ratio\` (shipped / refit), \`max_coefficient_difference\`.`,
   advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
+  measureClassifier: classifierReproducibility,
   measure({ shipped, predictions, holdout, metrics }) {
     if (shipped === null) return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
     const ps = shipped.holdoutPredictions;

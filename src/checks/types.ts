@@ -3,7 +3,8 @@
  * compares the figure with the model's limit for that check and writes the outcome. Checks never
  * log, format or read settings on their own.
  */
-import type { Descriptor, Limit, LimitDirection, LimitSpec } from '../config/types.js';
+import type { Descriptor, Limit, LimitDirection, LimitSpec, Task } from '../config/types.js';
+import type { ClassifierContext } from './classifier/context.js';
 import type { Design } from '../design/design-matrix.js';
 import type { FitResult } from '../fit/index.js';
 import type { ModelData } from '../data/model-data.js';
@@ -92,8 +93,23 @@ export interface Check {
   advice: string;
   /** Default line to point at: the term or `fit` line that drives the figure. */
   line(descriptor: Descriptor): number;
-  /** Measures the figure. Must not throw for any fitted model. */
+  /** Measures the figure of a regression model. Must not throw for any fitted model. */
   measure(context: CheckContext): Measurement;
+  /**
+   * The tasks the check applies to. Default: `regression`, plus `classification` when the check
+   * has {@link measureClassifier}. A classifier's report lists a check that does not apply as
+   * skipped (`<id>/not-for-classification`); a regression model's report leaves out checks made
+   * for classifiers only.
+   */
+  tasks?: readonly Task[];
+  /** Measures the figure of a binary classifier (task `classification`). Must not throw. */
+  measureClassifier?(context: ClassifierContext): Measurement;
+}
+
+/** Whether a check applies to a task (see {@link Check.tasks}). */
+export function appliesTo(check: Check, task: Task): boolean {
+  if (check.tasks) return check.tasks.includes(task);
+  return task === 'regression' || check.measureClassifier !== undefined;
 }
 
 /**

@@ -83,6 +83,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       holdout: raw.data.holdout,
       target: raw.data.target,
       lines: { train: line(['data', 'train']), holdout: line(['data', 'holdout']), target: line(['data', 'target']) },
+      positive: raw.data.positive ?? null,
     },
     terms,
     fit: {
@@ -94,6 +95,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       parameterCount: raw.fit?.parameter_count ?? settings.fit.parameterCount,
       line: fitLine,
       ridgeLine: raw.fit?.ridge !== undefined ? line(['fit', 'ridge']) : fitLine,
+      threshold: raw.fit?.threshold ?? 0.5,
     },
     coefficients: raw.coefficients ? [...raw.coefficients] : null,
     coefficientsLine: raw.coefficients ? line(['coefficients']) : null,
@@ -136,10 +138,10 @@ function readCenters(doc: YamlDocument, file: string, centers: RawCenters, at: (
 interface RawDescriptor {
   version: 1;
   name: string;
-  task?: 'regression';
-  data: { train: string; holdout: string; target: string };
+  task?: 'regression' | 'classification';
+  data: { train: string; holdout: string; target: string; positive?: string };
   terms: RawTerm[];
-  fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
+  fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount; threshold?: number };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }

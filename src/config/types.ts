@@ -110,7 +110,12 @@ export interface FitSpec {
   line: number;
   /** Line of `ridge` inside `fit` when given, else `line`. */
   ridgeLine: number;
+  /** Classification: a row is predicted positive when its probability is at least this. Default 0.5 (absent: 0.5). */
+  threshold?: number;
 }
+
+/** What a model predicts: a number (`regression`, the default) or one of two classes (`classification`, binary). */
+export type Task = 'regression' | 'classification';
 
 /** A model descriptor after validation. */
 export interface Descriptor {
@@ -118,7 +123,7 @@ export interface Descriptor {
   file: string;
   /** Unique model name. */
   name: string;
-  task: 'regression';
+  task: Task;
   data: {
     /** Training CSV, repository-relative (already checked to be inside the repository). */
     train: string;
@@ -128,6 +133,8 @@ export interface Descriptor {
     target: string;
     /** Lines of `data.train`, `data.holdout`, `data.target`. */
     lines: { train: number; holdout: number; target: number };
+    /** Classification: the positive label when the target holds text labels (`data.positive`); null when not given. */
+    positive?: string | null;
   };
   terms: TermSpec[];
   fit: FitSpec;

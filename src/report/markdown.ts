@@ -5,6 +5,7 @@
  * writes it. Text from the repository is escaped with {@link escapeMarkdown} and cut to a
  * readable length; the whole report stays under `maxBytes`.
  */
+import { calibrationChart, classifierLine, isClassifier } from './classifier-figures.js';
 import { mermaidChart } from './mermaid.js';
 import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
@@ -92,12 +93,13 @@ export function modelDetail(m: ModelResult): string[] {
     return lines;
   }
   const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+  if (isClassifier(m)) lines.push(text(classifierLine(m)), '');
   lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   for (const c of shown) lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);
   lines.push('');
   for (const c of shown) lines.push(`- **${c.id}**: ${text(c.message)}. ${text(c.advice)}`);
   lines.push('');
-  const chart = mermaidChart(m);
+  const chart = isClassifier(m) ? calibrationChart(m) : mermaidChart(m);
   if (chart !== null) lines.push(chart);
   return lines;
 }

@@ -2,6 +2,7 @@
  * The terminal report: one aligned table of every model, then one block per model that did not
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
+import { classifierLine, isClassifier } from './classifier-figures.js';
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import { escapeTerminal } from './escape.js';
@@ -75,6 +76,7 @@ export function formatText(result: Result, options: TextOptions = {}): string {
       out.push(`  ${escapeTerminal(where + m.error.message)}`);
       continue;
     }
+    if (isClassifier(m)) out.push(`  ${escapeTerminal(classifierLine(m))}`);
     for (const c of m.checks) if (c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
   }
   for (const note of result.notes) out.push('', `note: ${escapeTerminal(note)}`);

@@ -2,7 +2,7 @@
  * One model from descriptor to outcome: fit and score it (fit-model.ts), run every check of the
  * registry against its limits, and build its part of the Result.
  */
-import { CHECKS, runCheck, type CheckContext } from '../checks/index.js';
+import { checksFor, runCheck, type CheckContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
@@ -13,6 +13,7 @@ import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { withBaseCurves } from './base-curves.js';
 import { buildChartData } from './chart-data.js';
 import { errorResult, INTERNAL_ERROR } from './error-result.js';
+import { evaluateClassifier } from './evaluate-classifier.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 
 export type { BaseInput } from './base-comparison.js';
@@ -56,6 +57,7 @@ function reportMetrics(model: FittedModel): ModelMetrics {
 export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
   let model: FittedModel;
   try {
+    if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
     model = await fitModel(repo, descriptor, settings);
   } catch (error) {
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
@@ -84,7 +86,7 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
   const metrics = reportMetrics(model);
   const checks: CheckResult[] = [];
   let verdict: Verdict = 'pass';
-  for (const check of CHECKS) {
+  for (const check of checksFor('regression')) {
     const { outcome, figures } = runCheck(check, context);
     checks.push(outcome);
     if (figures) Object.assign(metrics, figures);

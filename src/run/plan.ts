@@ -40,12 +40,13 @@ export interface ModelPlan {
 
 /**
  * Plans one model.
+ * @param load how the columns are read: default {@link loadModelData}; classifiers read their target as two classes
  * @throws InputError for bad data, a design over the caps, a target out of range or constant
  */
-export async function planModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<ModelPlan> {
+export async function planModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, load: typeof loadModelData = loadModelData): Promise<ModelPlan> {
   const inputs: string[] = [];
   for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
-  const tables = await loadModelData(repo, descriptor, inputs, settings);
+  const tables = await load(repo, descriptor, inputs, settings);
   const { train } = tables;
   const file = descriptor.file;
 

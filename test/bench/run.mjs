@@ -8,6 +8,11 @@
 // by side (pass = within 1e-6 relative; leaked rows exact). Then a micro benchmark of k-fold plus
 // leave-one-out against a single fit (micro.mjs).
 //
+// Workload C is a classifier (task: classification): 1,000,000 training rows of 8 inputs, degree 3,
+// ridge 1, 5 contiguous folds, against ../shared/bench/ref_logistic.py (pandas read_csv, the same
+// basis, scikit-learn LogisticRegression with the newton-cholesky solver, tol 1e-10, and its own
+// k-fold loop), whose `generate` command writes the data (python3 with numpy and pandas needed).
+//
 // Options:
 //   --sizes S,M,L     which workloads (default all three)
 //   --runs N          whole-process runs per tool and size, median reported (default 3)
@@ -39,7 +44,19 @@ export const WORKLOADS = {
   S: { rows: 2_000, holdoutRows: 500, features: 1, degree: 10, folds: 10, loocv: true, seed: 1, wallRatio: 0.25, memRatio: 0.5, memMiB: null },
   M: { rows: 100_000, holdoutRows: 25_000, features: 5, degree: 4, folds: 5, loocv: true, seed: 2, wallRatio: 0.35, memRatio: 0.5, memMiB: null },
   L: { rows: 1_000_000, holdoutRows: 250_000, features: 8, degree: 3, folds: 5, loocv: false, seed: 3, wallRatio: 0.3, memRatio: null, memMiB: 256 },
+  C: { rows: 1_000_000, holdoutRows: 250_000, features: 8, degree: 3, folds: 5, loocv: false, seed: 4, wallRatio: 0.5, memRatio: null, memMiB: 256, task: 'classification' },
 };
+
+/** Classifier figures compared: [label, fitgate metrics key, reader of the reference's output]. */
+const CLASSIFIER_FIGURES = [
+  ['training log-loss', 'train_log_loss', (r) => r.train.log_loss],
+  ['hold-out log-loss', 'holdout_log_loss', (r) => r.holdout.log_loss],
+  ['training ROC AUC', 'train_auc', (r) => r.train.roc_auc],
+  ['hold-out ROC AUC', 'holdout_auc', (r) => r.holdout.roc_auc],
+  ['hold-out Brier score', 'holdout_brier', (r) => r.holdout.brier],
+  ['calibration slope', 'calibration_slope', (r) => r.calibration_slope],
+  ['k-fold log-loss (blocks)', 'cv_log_loss', (r) => r.cv_log_loss],
+];
 
 /** Figures compared: [label, fitgate metrics key, reference key, exact]. */
 const FIGURES = [
@@ -55,7 +72,7 @@ const FIGURES = [
 const RELATIVE_TOLERANCE = 1e-6;
 
 function parseOptions(argv) {
-  const o = { sizes: ['S', 'M', 'L'], runs: 3, data: null, work: path.join(os.tmpdir(), 'fitgate-bench'), reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'), useReference: true, micro: true, json: null, cli: path.join(root, 'dist', 'cli', 'index.js'), inheritEnv: false };
+  const o = { sizes: ['S', 'M', 'L', 'C'], runs: 3, data: null, work: path.join(os.tmpdir(), 'fitgate-bench'), reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'), useReference: true, micro: true, json: null, cli: path.join(root, 'dist', 'cli', 'index.js'), inheritEnv: false };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     const value = () => {
@@ -74,7 +91,7 @@ function parseOptions(argv) {
     else if (a === '--inherit-env') o.inheritEnv = true;
     else throw new Error(`unknown option ${a} (see the top of test/bench/run.mjs)`);
   }
-  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M or L`);
+  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M, L or C`);
   if (!(Number.isInteger(o.runs) && o.runs >= 1)) throw new Error('--runs must be a whole number >= 1');
   return o;
 }
@@ -87,10 +104,15 @@ function sourceData(options, size) {
     for (const f of ['train.csv', 'holdout.csv']) if (!existsSync(path.join(dir, f))) throw new Error(`--data: ${path.join(dir, f)} is missing`);
     return dir;
   }
-  const dir = path.join(options.work, 'data-js', size);
+  const dir = path.join(options.work, w.task === 'classification' ? 'data-py' : 'data-js', size);
   const stamp = path.join(dir, 'params.json');
   const params = JSON.stringify({ rows: w.rows, holdoutRows: w.holdoutRows, features: w.features, seed: w.seed, generator: 1 });
-  if (!existsSync(stamp) || readFileSync(stamp, 'utf8') !== params) {
+  if (w.task === 'classification' && (!existsSync(stamp) || readFileSync(stamp, 'utf8') !== params)) {
+    process.stderr.write(`generating ${size} data with ref_logistic.py (${w.rows} + ${w.holdoutRows} rows x ${w.features + 1} columns)...\n`);
+    const script = path.join(path.dirname(options.reference), 'ref_logistic.py');
+    execFileSync('/usr/bin/python3', [script, 'generate', '--out', dir, '--rows', String(w.rows), '--holdout-rows', String(w.holdoutRows), '--features', String(w.features), '--seed', String(w.seed)], { stdio: 'inherit' });
+    writeFileSync(stamp, params);
+  } else if (!existsSync(stamp) || readFileSync(stamp, 'utf8') !== params) {
     process.stderr.write(`generating ${size} data (${w.rows} + ${w.holdoutRows} rows x ${w.features + 1} columns)...\n`);
     generate({ out: dir, rows: w.rows, holdoutRows: w.holdoutRows, features: w.features, seed: w.seed });
     writeFileSync(stamp, params);
@@ -115,7 +137,7 @@ function descriptorText(size) {
   return `# Benchmark workload ${size} (written by test/bench/run.mjs)
 version: 1
 name: bench-${size.toLowerCase()}
-data:
+${w.task === 'classification' ? 'task: classification\n' : ''}data:
   train: ../data/${size}/train.csv
   holdout: ../data/${size}/holdout.csv
   target: y
@@ -169,7 +191,25 @@ function fitgateFigures(stdout) {
   if (!model || model.metrics === null) throw new Error(`fitgate could not check the model: ${JSON.stringify(model?.error ?? report)}`);
   const figures = {};
   for (const [, key] of FIGURES) figures[key] = model.metrics[key] ?? null;
+  for (const [, key] of CLASSIFIER_FIGURES) figures[key] = model.metrics[key] ?? null;
+  figures.coefficients = model.coefficients;
   return { figures, verdict: model.verdict };
+}
+
+/** A classifier's figures against ref_logistic.py's, and the largest coefficient difference relative to the largest coefficient. */
+function compareClassifierFigures(fg, ref) {
+  const rows = CLASSIFIER_FIGURES.map(([label, key, read]) => {
+    const a = fg[key];
+    const b = read(ref);
+    if (typeof a !== 'number') return { label, fitgate: a, reference: b, relative: null, status: 'fail' };
+    const relative = Math.abs(a - b) / Math.max(Math.abs(b), Number.MIN_VALUE);
+    return { label, fitgate: a, reference: b, relative, status: relative <= RELATIVE_TOLERANCE ? 'pass' : 'fail' };
+  });
+  const scale = Math.max(...ref.coefficients.map(Math.abs));
+  const ok = Array.isArray(fg.coefficients) && fg.coefficients.length === ref.coefficients.length;
+  const relative = ok ? Math.max(...ref.coefficients.map((w, j) => Math.abs(fg.coefficients[j] - w) / scale)) : null;
+  rows.push({ label: `coefficients (${ref.coefficients.length}, max diff / max |w|)`, fitgate: null, reference: null, relative, status: relative !== null && relative <= RELATIVE_TOLERANCE ? 'pass' : 'fail' });
+  return rows;
 }
 
 function compareFigures(fg, ref) {
@@ -219,7 +259,9 @@ async function main() {
       runs.fitgate.push(fg);
       fgOut = fg.stdout;
       if (!refMissing) {
-        const args = [options.reference, '--train', f.train, '--holdout', f.holdout, '--degree', String(w.degree), '--ridge', '1', '--folds', String(w.folds)];
+        const classifier = w.task === 'classification';
+        const script = classifier ? path.join(path.dirname(options.reference), 'ref_logistic.py') : options.reference;
+        const args = [script, ...(classifier ? ['check'] : []), '--train', f.train, '--holdout', f.holdout, '--degree', String(w.degree), '--ridge', '1', '--folds', String(w.folds)];
         if (w.loocv) args.push('--loocv');
         const ref = await measure('/usr/bin/python3', args, { cwd: repo, env });
         runs.reference.push(ref);
@@ -231,8 +273,15 @@ async function main() {
     const ref = refOut ? JSON.parse(refOut) : null;
     results[size] = {
       fitgate: { wall: median(runs.fitgate.map((x) => x.wall)), peakMiB: median(runs.fitgate.map((x) => x.peakMiB)), walls: runs.fitgate.map((x) => x.wall), verdict: fg.verdict },
-      reference: ref ? { wall: median(runs.reference.map((x) => x.wall)), peakMiB: median(runs.reference.map((x) => x.peakMiB)), walls: runs.reference.map((x) => x.wall), timings: ref.timings_s } : null,
-      figures: ref ? compareFigures(fg.figures, ref) : FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' })),
+      reference: ref ? { wall: median(runs.reference.map((x) => x.wall)), peakMiB: median(runs.reference.map((x) => x.peakMiB)), walls: runs.reference.map((x) => x.wall), timings: ref.timings_s ?? ref.timings } : null,
+      figures:
+        w.task === 'classification'
+          ? ref
+            ? compareClassifierFigures(fg.figures, ref)
+            : CLASSIFIER_FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' }))
+          : ref
+            ? compareFigures(fg.figures, ref)
+            : FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' })),
       trainBytes: statSync(f.train).size + statSync(f.holdout).size,
     };
   }

@@ -61,6 +61,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
       holdout: 'models/shared/holdout.csv',
       target: 'exit_temp_c',
       lines: { train: 5, holdout: 6, target: 7 },
+      positive: null,
     });
     expect(d.termsLine).toBe(8);
     expect(d.terms).toEqual([
@@ -72,7 +73,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'step', from: 0, to: 1, step: 0.25 }, width: 0.5, line: 14 },
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'at-samples' }, width: 2, line: 15 },
     ]);
-    expect(d.fit).toEqual({ intercept: false, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18 });
+    expect(d.fit).toEqual({ intercept: false, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18, threshold: 0.5 });
     expect(d.coefficients).toEqual([1, 2.5, -3]);
     expect(d.coefficientsLine).toBe(20);
     expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.3, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 22 });
@@ -85,7 +86,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
     const minimal = 'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms:\n  - linear: [x]\n';
     const d = await loadDescriptor(repoWith(minimal), F, defaultSettings());
     expect(d.task).toBe('regression');
-    expect(d.fit).toEqual({ intercept: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4 });
+    expect(d.fit).toEqual({ intercept: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4, threshold: 0.5 });
     expect(d.coefficients).toBeNull();
     expect(d.coefficientsLine).toBeNull();
     expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
@@ -120,7 +121,7 @@ describe('loadDescriptor: schema errors name file, line and key path', () => {
     { name: 'bad version', text: edit(1, 'version: 2'), line: 1, key: 'version' },
     { name: 'name with a space', text: edit(2, 'name: kiln exit'), line: 2, key: 'name' },
     { name: 'name too long', text: edit(2, `name: ${'a'.repeat(101)}`), line: 2, key: 'name' },
-    { name: 'unknown task', text: edit(3, 'task: classification'), line: 3, key: 'task', message: /expected one of: regression/ },
+    { name: 'unknown task', text: edit(3, 'task: ranking'), line: 3, key: 'task', message: /expected one of: regression, classification/ },
     { name: 'missing data.target', text: edit(7, ''), line: 4, key: 'data.target', message: /missing key `target`/ },
     { name: 'data path not text', text: edit(5, '  train: 3'), line: 5, key: 'data.train' },
     { name: 'unknown term kind', text: edit(9, '  - spline: [humidity_pct]'), line: 9, key: 'terms[0].spline', message: /unknown term kind `spline`; expected one of: linear, polynomial, rbf/ },

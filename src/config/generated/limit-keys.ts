@@ -22,4 +22,7 @@ export const LIMIT_KEYS: readonly LimitKeyInfo[] = Object.freeze([
   { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
   { key: "condition", defaultSpec: {"warn":100000000}, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
   { key: "complexity", defaultSpec: {"warn":1.5}, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
+  { key: "separation", defaultSpec: {"warn":0,"fail":1}, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
+  { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
+  { key: "calibration_slope", defaultSpec: {"warn":0.8,"fail":0.6}, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
 ]);

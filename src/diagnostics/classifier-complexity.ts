@@ -1,0 +1,123 @@
+/**
+ * The complexity sweep of a binary classifier: the same settings as the regression sweep
+ * (complexity.ts: the ridge penalty, else the highest polynomial degree, else the first radial
+ * width), each scored by its k-fold cross-validation log-loss on the model's own folds, and the
+ * one-standard-error rule (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning,
+ * 2nd ed., 2009, section 7.10) picking the simplest setting within one standard error of the best.
+ */
+import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
+import { forEachBlock } from '../design/blocks.js';
+import { addProducts } from '../kernels/index.js';
+import { createDesign, type Design } from '../design/design-matrix.js';
+import { createTerm, type Term } from '../design/terms/index.js';
+import { fitLogistic, rowDeviance, type LogisticRows } from '../fit/logistic.js';
+import { oneStandardErrorRule, sweepTarget } from './complexity.js';
+import { assignFolds } from './folds.js';
+
+/** One point of a classifier's complexity sweep. */
+export interface ClassifierSweepPoint {
+  value: number;
+  cvLogLoss: number;
+  standardError: number;
+}
+
+/** A classifier's complexity sweep (see checks/complexity.ts for the regression one). */
+export interface ClassifierSweep {
+  kind: 'degree' | 'width' | 'ridge';
+  line: number;
+  points: ClassifierSweepPoint[];
+  /** Index of the model's current setting among the points. */
+  current: number;
+  /** Index of the point the one-standard-error rule picks. */
+  chosen: number;
+  /** Index of the point with the lowest CV log-loss. */
+  best: number;
+}
+
+/**
+ * Rows the classifier sweep uses at most (an even-stride subsample above it): every setting is
+ * k IRLS fits, so the sweep is kept to a bounded cost; 20,000 rows rank the settings well within
+ * their standard errors (common practice: the curve only has to rank the settings).
+ */
+export const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
+
+/**
+ * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
+ * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
+ * started from the previous one's fold fits. Degree: 1 .. current + 3 (at most 15). Width: current
+ * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
+ * sd / sqrt(k)).
+ * @returns null when there is nothing to sweep or fewer than 2 folds
+ */
+export function sweepClassifier(descriptor: Descriptor, design: Design, train: LogisticRows): ClassifierSweep | null {
+  const target = sweepTarget(descriptor, design);
+  if (target === null || train.rows < 2) return null;
+  const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? subsample(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
+  const folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
+  if (folds.k < 2) return null;
+  const ridge = descriptor.fit.ridge;
+  const points: { value: number; current: boolean; design: Design; ridge: number }[] = [];
+  if (target.kind === 'ridge') {
+    const s = Math.max(ridge, rows.rows / 1000);
+    const grid: number[] = [];
+    for (let t = 3; t >= -3; t--) grid.push(s * 10 ** t);
+    const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
+    for (const l of lambdas) points.push({ value: l, current: l === ridge, design, ridge: l });
+  } else {
+    const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
+    const spec = design.terms[target.term].spec;
+    const values: { value: number; current: boolean }[] = [];
+    if (target.kind === 'degree') {
+      const degree = (spec as PolynomialTermSpec).degree;
+      const top = Math.max(degree, Math.min(degree + 3, 15));
+      for (let g = 1; g <= top; g++) values.push({ value: g, current: g === degree });
+    } else {
+      const width = (spec as RbfTermSpec).width;
+      for (let t = 4; t >= -2; t--) values.push({ value: width * 2 ** t, current: t === 0 });
+    }
+    for (const { value, current } of values) {
+      const changed =
+        target.kind === 'degree' ? { ...(spec as PolynomialTermSpec), degree: value } : { ...(spec as RbfTermSpec), width: value };
+      const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
+      points.push({ value, current, design: createDesign(terms, design.intercept), ridge });
+    }
+  }
+  const curve: ClassifierSweep['points'] = [];
+  let starts: Float64Array[] | null = null;
+  for (const point of points) {
+    const d = point.design;
+    const problems = Array.from({ length: folds.k }, (_, f) => ({
+      foldOf: folds.foldOf,
+      exclude: f,
+      ...(starts && d === design ? { start: starts[f] } : {}),
+    }));
+    const fits = fitLogistic(d, rows, { ridge: point.ridge, penalised: [...d.penalised] }, problems);
+    if (d === design) starts = fits.map((x) => x.coefficients);
+    const deviance = new Float64Array(folds.k);
+    const eta = new Float64Array(Math.min(rows.rows, 1 << 16));
+    forEachBlock(d, rows, (X, start, m) => {
+      for (let f = 0; f < folds.k; f++) {
+        eta.fill(0, 0, m);
+        addProducts(eta, 0, X, m, fits[f].coefficients, d.p);
+        for (let i = 0; i < m; i++) if (folds.foldOf[start + i] === f) deviance[f] += rowDeviance(eta[i], rows.y[start + i]);
+      }
+    });
+    const losses = Array.from(deviance, (dv, f) => dv / 2 / folds.sizes[f]);
+    const mean = losses.reduce((a, b) => a + b, 0) / losses.length;
+    const variance = losses.reduce((a, b) => a + (b - mean) ** 2, 0) / (losses.length - 1);
+    curve.push({ value: point.value, cvLogLoss: mean, standardError: Math.sqrt(variance / losses.length) });
+  }
+  const { best, chosen } = oneStandardErrorRule(curve.map((c) => ({ mean: c.cvLogLoss, se: c.standardError })));
+  return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
+}
+
+/** Every (n / m)-th row, as new columns. */
+function subsample(data: LogisticRows, m: number): LogisticRows {
+  const n = data.rows;
+  const pick = (col: Float64Array): Float64Array => {
+    const out = new Float64Array(m);
+    for (let t = 0; t < m; t++) out[t] = col[Math.floor((t * n) / m)];
+    return out;
+  };
+  return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
+}

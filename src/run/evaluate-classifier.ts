@@ -1,0 +1,110 @@
+/**
+ * One binary classifier from descriptor to outcome: fit and score it (fit-classifier.ts), run
+ * every check of the registry with its classifier measure (checks that apply to regression only
+ * are skipped with `<id>/not-for-classification`), and build its part of the Result.
+ */
+import { CHECKS, runClassifierCheck, type ClassifierContext } from '../checks/index.js';
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type Verdict } from '../result/result.js';
+import type { RepoReader } from '../repo/types.js';
+import type { BaseInput } from './base-comparison.js';
+import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
+
+/**
+ * The report's metrics of a classifier: the training and hold-out figures, calibration, class
+ * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
+ * regression keys (RMSE, MAE, R^2) are null: they do not apply.
+ */
+function classifierMetrics(model: FittedClassifier): ModelMetrics {
+  const { train, holdout, fit, design, weighted } = model.context;
+  const n = (x: number) => jsonNumber(x);
+  return {
+    task: 'classification',
+    train_rmse: null,
+    holdout_rmse: null,
+    train_mae: null,
+    holdout_mae: null,
+    train_r2: null,
+    holdout_r2: null,
+    gap_ratio: n(train.logLoss === 0 ? (holdout.logLoss === 0 ? 1 : Infinity) : holdout.logLoss / train.logLoss),
+    params_per_sample: n(design.p / train.rows),
+    max_std_coefficient: null,
+    max_std_coefficient_column: null,
+    max_abs_coefficient: n(Math.max(0, ...Array.from(fit.coefficients, Math.abs))),
+    rank: weighted.rank,
+    condition_number: n(weighted.conditionNumberScaled),
+    train_log_loss: n(train.logLoss),
+    holdout_log_loss: n(holdout.logLoss),
+    train_brier: n(train.brier),
+    holdout_brier: n(holdout.brier),
+    train_accuracy: n(train.accuracy),
+    holdout_accuracy: n(holdout.accuracy),
+    train_auc: n(train.auc),
+    holdout_auc: n(holdout.auc),
+    threshold: model.context.descriptor.fit.threshold ?? 0.5,
+    train_positives: train.positives,
+    train_negatives: train.negatives,
+    holdout_positives: holdout.positives,
+    holdout_negatives: holdout.negatives,
+    positive_label: model.labels.positive,
+    negative_label: model.labels.negative,
+    fit_iterations: fit.iterations,
+    fit_converged: fit.converged ? 1 : 0,
+    deviance: n(fit.deviance),
+  } as unknown as ModelMetrics;
+}
+
+/**
+ * Fits one classifier and runs every check on it. Errors are handled by the caller
+ * (evaluate.ts), as for regression models.
+ */
+export async function evaluateClassifier(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  base?: BaseInput,
+): Promise<ModelResult> {
+  const model = await fitClassifier(repo, descriptor, settings);
+  const context: ClassifierContext = { ...model.context, baseline: base?.models.get(descriptor.name) ?? null };
+  const metrics = classifierMetrics(model);
+  const checks: CheckResult[] = [];
+  let verdict: Verdict = 'pass';
+  for (const check of CHECKS) {
+    const { outcome, figures } = runClassifierCheck(check, context);
+    checks.push(outcome);
+    if (figures) Object.assign(metrics, figures);
+    if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);
+  }
+  return {
+    name: descriptor.name,
+    descriptor: descriptor.file,
+    verdict,
+    rows: { train: model.train.rows, holdout: model.holdout.rows },
+    parameters: model.context.design.p,
+    columns: [...model.context.design.columnNames],
+    metrics,
+    coefficients: Array.from(model.context.fit.coefficients, jsonNumber),
+    shipped: null,
+    checks,
+    error: null,
+    extra: {
+      task: 'classification',
+      labels: model.labels,
+      roc: { train: model.charts.rocTrain, holdout: model.charts.rocHoldout },
+      calibration_bins: model.charts.calibration.map((b) => ({
+        from: b.from,
+        to: b.to,
+        count: b.count,
+        predicted: jsonNumber(b.predicted),
+        observed: jsonNumber(b.observed),
+      })),
+      terms: model.context.design.terms.map((t, i) => ({
+        kind: t.spec.kind,
+        line: t.spec.line,
+        first_column: model.context.design.termOffsets[i],
+        columns: t.columnNames.length,
+        fixed: t.fixed,
+      })),
+    },
+  };
+}

@@ -1,0 +1,210 @@
+/**
+ * One binary classifier (task `classification`) fitted and scored: planned like a regression
+ * model (plan.ts, with the target read as two classes), fitted by IRLS (fit/logistic.ts), each
+ * cross-validation fold refitted from the full fit in shared passes, then the figures every
+ * classifier check reads (checks/classifier/context.ts). No checks here.
+ */
+import type { ClassifierContext, ClassifierCrossValidation, ClassifierShipped } from '../checks/classifier/context.js';
+import type { Descriptor, SettingsFile } from '../config/types.js';
+import { InputError } from '../core/errors.js';
+import { loadClassifierData, type ClassLabels } from '../data/labels.js';
+import type { ModelData } from '../data/model-data.js';
+import { forEachBlock, predictRows } from '../design/blocks.js';
+import { addProducts } from '../kernels/index.js';
+import { ColumnSpread } from '../design/column-spread.js';
+import type { Design } from '../design/design-matrix.js';
+import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
+import {
+  calibration,
+  calibrationBins,
+  classificationFigures,
+  probabilities,
+  rocPoints,
+  type CalibrationBin,
+} from '../diagnostics/classification-metrics.js';
+import type { Folds } from '../diagnostics/folds.js';
+import { findLeakage } from '../diagnostics/leakage.js';
+import { findSeparation } from '../diagnostics/separation.js';
+import { fitFactor } from '../fit/index.js';
+import { fitLogistic, rowDeviance, type LogisticFit } from '../fit/logistic.js';
+import type { RepoReader } from '../repo/types.js';
+import { planModel } from './plan.js';
+
+/** A fitted classifier: the check context plus what the reports draw. */
+export interface FittedClassifier {
+  context: Omit<ClassifierContext, 'baseline'>;
+  labels: ClassLabels;
+  train: ModelData;
+  holdout: ModelData;
+  /** Linear predictors (logits) of the training and hold-out rows. */
+  trainEta: Float64Array;
+  holdoutEta: Float64Array;
+  folds: Folds;
+  /** What the reports draw: ROC points of the training and hold-out rows, and the hold-out calibration diagram (10 bins). */
+  charts: { rocTrain: { fpr: number[]; tpr: number[] }; rocHoldout: { fpr: number[]; tpr: number[] }; calibration: CalibrationBin[] };
+}
+
+/**
+ * Loads, fits and scores one classifier.
+ * @throws InputError for bad data or labels, a design over the caps, or shipped coefficients of the wrong length
+ */
+export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedClassifier> {
+  let labels: ClassLabels | null = null;
+  const plan = await planModel(repo, descriptor, settings, async (r, d, inputs, s) => {
+    const tables = await loadClassifierData(r, d, inputs, s);
+    labels = tables.labels;
+    return tables;
+  });
+  const { design, tables, folds } = plan;
+  const { train, holdout } = tables;
+  const options = { ridge: descriptor.fit.ridge, penalised: [...design.penalised] };
+
+  const spread = new ColumnSpread(design.p);
+  forEachBlock(design, train, (X, _start, m) => spread.add(X, m));
+  const columnSd = spread.sd();
+
+  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options) }]);
+  const weighted = fitFactor(fit.weightedFactor, options);
+  const trainEta = predictRows(design, train, fit.coefficients);
+  const holdoutEta = predictRows(design, holdout, fit.coefficients);
+  const threshold = descriptor.fit.threshold ?? 0.5;
+  const trainP = probabilities(trainEta);
+  const holdoutP = probabilities(holdoutEta);
+  const trainFigures = classificationFigures(train.y, trainEta, trainP, train.rows, threshold);
+  const holdoutFigures = classificationFigures(holdout.y, holdoutEta, holdoutP, holdout.rows, threshold);
+
+  return {
+    context: {
+      descriptor,
+      design,
+      fit,
+      weighted,
+      train: trainFigures,
+      holdout: holdoutFigures,
+      calibration: calibration(holdout.y, holdoutEta, holdout.rows),
+      crossValidation: crossValidateClassifier(design, train, folds, fit, options),
+      separation: findSeparation(design, train),
+      shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
+      columnSd,
+      leakage: leakageOf(train, holdout),
+      complexity: sweepClassifier(descriptor, design, train),
+    },
+    labels: labels as unknown as ClassLabels,
+    train,
+    holdout,
+    trainEta,
+    holdoutEta,
+    folds,
+    charts: {
+      rocTrain: rocPoints(train.y, trainP, train.rows),
+      rocHoldout: rocPoints(holdout.y, holdoutP, holdout.rows),
+      calibration: calibrationBins(holdout.y, holdoutP, holdout.rows),
+    },
+  };
+}
+
+/** Above this many training rows the full fit starts from the fit of an even-stride subset of this many rows. */
+export const WARM_START_ROWS = 50000;
+
+/**
+ * Starting coefficients for the full fit: on large data, the fit of an even-stride subset of
+ * {@link WARM_START_ROWS} rows with the penalty scaled to its share of the rows (the optimum is
+ * the full fit's, from wherever Newton's method starts; a near start saves whole passes over the
+ * rows). Undefined (the default start) on smaller data.
+ */
+function warmStart(design: Design, train: ModelData, options: { ridge: number; penalised: boolean[] }): Float64Array | undefined {
+  const n = train.rows;
+  const m = WARM_START_ROWS;
+  if (n <= 2 * m) return undefined;
+  const pick = (col: Float64Array): Float64Array => {
+    const out = new Float64Array(m);
+    for (let t = 0; t < m; t++) out[t] = col[Math.floor((t * n) / m)];
+    return out;
+  };
+  const sub = { inputs: train.inputs.map(pick), y: pick(train.y), rows: m };
+  const [fit] = fitLogistic(design, sub, { ...options, ridge: (options.ridge * m) / n }, [{}]);
+  return fit.coefficients.every(Number.isFinite) ? fit.coefficients : undefined;
+}
+
+/**
+ * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
+ * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
+ * log-loss of the out-of-fold probabilities. Null below 2 folds.
+ */
+export function crossValidateClassifier(
+  design: Design,
+  train: ModelData,
+  folds: Folds,
+  full: LogisticFit,
+  options: { ridge: number; penalised: boolean[] },
+): ClassifierCrossValidation | null {
+  const k = folds.k;
+  if (k < 2) return null;
+  const problems = Array.from({ length: k }, (_, f) => ({ foldOf: folds.foldOf, exclude: f, start: full.coefficients }));
+  const fits = fitLogistic(design, train, options, problems);
+  const foldDeviance = new Float64Array(k);
+  const eta = new Float64Array(Math.min(train.rows, 1 << 16));
+  forEachBlock(design, train, (X, start, m) => {
+    for (let f = 0; f < k; f++) {
+      eta.fill(0, 0, m);
+      addProducts(eta, 0, X, m, fits[f].coefficients, design.p);
+      for (let i = 0; i < m; i++) if (folds.foldOf[start + i] === f) foldDeviance[f] += rowDeviance(eta[i], train.y[start + i]);
+    }
+  });
+  let total = 0;
+  for (let f = 0; f < k; f++) total += foldDeviance[f];
+  return {
+    k,
+    logLoss: total / 2 / train.rows,
+    foldLogLoss: Array.from(foldDeviance, (d, f) => d / 2 / folds.sizes[f]),
+    foldRows: [...folds.sizes],
+    converged: fits.every((x) => x.converged),
+  };
+}
+
+/** The shipped coefficients' probabilities against the refit's; null when the descriptor ships none. */
+function shippedClassifier(
+  descriptor: Descriptor,
+  design: Design,
+  train: ModelData,
+  holdout: ModelData,
+  fit: LogisticFit,
+  trainEta: Float64Array,
+  holdoutEta: Float64Array,
+): ClassifierShipped | null {
+  const shipped = descriptor.coefficients;
+  if (shipped === null) return null;
+  if (shipped.length !== design.p) {
+    throw new InputError(
+      'coefficients-length',
+      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
+      { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
+    );
+  }
+  let maxP = 0;
+  const losses: number[] = [];
+  for (const [data, refit] of [
+    [train, trainEta],
+    [holdout, holdoutEta],
+  ] as const) {
+    const eta = predictRows(design, data, shipped);
+    let dev = 0;
+    for (let i = 0; i < data.rows; i++) {
+      const d = Math.abs(1 / (1 + Math.exp(-eta[i])) - 1 / (1 + Math.exp(-refit[i])));
+      if (d > maxP || Number.isNaN(d)) maxP = d;
+      dev += rowDeviance(eta[i], data.y[i]);
+    }
+    losses.push(dev / 2 / data.rows);
+  }
+  let maxW = 0;
+  for (let j = 0; j < design.p; j++) maxW = Math.max(maxW, Math.abs(shipped[j] - fit.coefficients[j]));
+  return { maxProbabilityDifference: maxP, maxCoefficientDifference: maxW, trainLogLoss: losses[0], holdoutLogLoss: losses[1] };
+}
+
+function leakageOf(train: ModelData, holdout: ModelData): ClassifierContext['leakage'] {
+  const found = findLeakage(train, holdout);
+  return {
+    duplicates: found.fullMatches,
+    examples: found.holdoutLines.map((line, i) => ({ holdoutLine: line, trainLine: found.trainLines[i] })),
+  };
+}
