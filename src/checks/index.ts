@@ -10,6 +10,9 @@ import { formatNumber } from '../core/format.js';
 import baseChange from './base-change.js';
 import coefficientSize from './coefficient-size.js';
 import generalisationGap from './generalisation-gap.js';
+import holdoutMae from './holdout-mae.js';
+import holdoutR2 from './holdout-r2.js';
+import holdoutRmse from './holdout-rmse.js';
 import parameterRatio from './parameter-ratio.js';
 import complexity from './complexity.js';
 import conditioning from './conditioning.js';
@@ -35,6 +38,9 @@ export const CHECKS: readonly Check[] = validate([
   reproducibility,
   conditioning,
   complexity,
+  holdoutR2,
+  holdoutRmse,
+  holdoutMae,
 ]);
 
 function validate(checks: Check[]): Check[] {

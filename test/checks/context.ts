@@ -13,6 +13,7 @@ import type { Descriptor, Limit, TermSpec } from '../../src/config/types.js';
 import { createDesign } from '../../src/design/design-matrix.js';
 import { fitFactor, QrAccumulator } from '../../src/fit/index.js';
 import { forEachBlock, predictRows } from '../../src/design/blocks.js';
+import { addErrors, emptySums, errorMeasures } from '../../src/diagnostics/regression-metrics.js';
 
 /** A term as written in a test, its line optional (distributes over the term kinds). */
 export type TermWithoutLine = TermSpec extends infer T ? (T extends TermSpec ? Omit<T, 'line'> : never) : never;
@@ -123,21 +124,22 @@ export function buildContext(d: Descriptor, train: Table, holdout: Table): Check
   const acc = new QrAccumulator(design.p);
   forEachBlock(design, tr, (X, start, m) => acc.addRows(X, tr.y.subarray(start, start + m), m));
   const fit = fitFactor(acc, { ridge: d.fit.ridge, penalised: design.penalised });
-  const rmse = (data: ModelData): number => {
-    const p = predictRows(design, data, fit.coefficients);
-    let s = 0;
-    for (let i = 0; i < data.rows; i++) s += (data.y[i] - p[i]) ** 2;
-    return Math.sqrt(s / data.rows);
+  const measures = (data: ModelData) => {
+    const sums = emptySums();
+    addErrors(sums, data.y, predictRows(design, data, fit.coefficients), data.rows);
+    return errorMeasures(sums);
   };
-  const trainRmse = rmse(tr);
-  const holdoutRmse = rmse(ho);
+  const trainMeasures = measures(tr);
+  const holdoutMeasures = measures(ho);
+  const trainRmse = trainMeasures.rmse;
+  const holdoutRmse = holdoutMeasures.rmse;
   const metrics: CoreMetrics = {
     trainRmse,
     holdoutRmse,
-    trainMae: Number.NaN,
-    holdoutMae: Number.NaN,
-    trainR2: Number.NaN,
-    holdoutR2: Number.NaN,
+    trainMae: trainMeasures.mae,
+    holdoutMae: holdoutMeasures.mae,
+    trainR2: trainMeasures.r2,
+    holdoutR2: holdoutMeasures.r2,
     gapRatio: holdoutRmse / trainRmse,
     paramsPerSample: design.p / tr.rows,
     maxStdCoefficient: Number.NaN,

@@ -22,4 +22,7 @@ export const LIMIT_KEYS: readonly LimitKeyInfo[] = Object.freeze([
   { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
   { key: "condition", defaultSpec: {"warn":100000000}, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
   { key: "complexity", defaultSpec: {"warn":1.5}, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
+  { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
+  { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
+  { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
 ]);
