@@ -8,6 +8,7 @@ import type { Limit } from '../config/types.js';
 import { jsonNumber, type CheckResult } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import baseChange from './base-change.js';
+import chiSquare from './chi-square.js';
 import coefficientSize from './coefficient-size.js';
 import generalisationGap from './generalisation-gap.js';
 import holdoutMae from './holdout-mae.js';
@@ -41,6 +42,7 @@ export const CHECKS: readonly Check[] = validate([
   holdoutR2,
   holdoutRmse,
   holdoutMae,
+  chiSquare,
 ]);
 
 function validate(checks: Check[]): Check[] {

@@ -8,7 +8,7 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec } from './types.js';
+import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -20,6 +20,7 @@ export const MAX_RBF_CENTERS = 10_000;
 export const DESCRIPTOR_ERROR = Object.freeze({
   dataMissing: 'file-missing',
   centers: 'rbf-centers',
+  weighting: 'weight-and-sigma',
 });
 
 /**
@@ -76,6 +77,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       holdout: raw.data.holdout,
       target: raw.data.target,
       lines: { train: line(['data', 'train']), holdout: line(['data', 'holdout']), target: line(['data', 'target']) },
+      ...weightingOf(readWeighting(doc, file, raw.data, line)),
     },
     terms,
     fit: {
@@ -94,6 +96,21 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
     nameLine: line(['name']),
     termsLine,
   };
+}
+
+/** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
+function readWeighting(doc: YamlDocument, file: string, data: RawDescriptor['data'], line: (path: (string | number)[]) => number): Weighting | null {
+  if (data.weight !== undefined && data.sigma !== undefined) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
+  }
+  if (data.weight !== undefined) return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
+  if (data.sigma !== undefined) return { kind: 'sigma', column: data.sigma, line: line(['data', 'sigma']) };
+  return null;
+}
+
+/** `{ weighting }` when there is one, else nothing (so unweighted descriptors keep their shape). */
+function weightingOf(weighting: Weighting | null): { weighting?: Weighting } {
+  return weighting === null ? {} : { weighting };
 }
 
 function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number, line: number): TermSpec {
@@ -130,7 +147,7 @@ interface RawDescriptor {
   version: 1;
   name: string;
   task?: 'regression';
-  data: { train: string; holdout: string; target: string };
+  data: { train: string; holdout: string; target: string; weight?: string; sigma?: string };
   terms: RawTerm[];
   fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
   coefficients?: number[];

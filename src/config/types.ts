@@ -112,6 +112,13 @@ export interface FitSpec {
   ridgeLine: number;
 }
 
+/** `data.weight` or `data.sigma`: the column, which of the two, and the line of the key. */
+export interface Weighting {
+  kind: 'weight' | 'sigma';
+  column: string;
+  line: number;
+}
+
 /** A model descriptor after validation. */
 export interface Descriptor {
   /** Descriptor path relative to the repository root, with `/` separators. */
@@ -128,6 +135,11 @@ export interface Descriptor {
     target: string;
     /** Lines of `data.train`, `data.holdout`, `data.target`. */
     lines: { train: number; holdout: number; target: number };
+    /**
+     * Row weights, when given: `data.weight` (w as written, >= 0) or `data.sigma` (standard
+     * uncertainties, w = 1 / sigma^2). Absent or null: every row weighs 1.
+     */
+    weighting?: Weighting | null;
   };
   terms: TermSpec[];
   fit: FitSpec;

@@ -1,7 +1,7 @@
 /**
  * Loads the columns one model needs from its training and hold-out files.
  */
-import type { Descriptor, SettingsFile } from '../config/types.js';
+import type { Descriptor, SettingsFile, Weighting } from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
 import { readTable } from './table.js';
@@ -34,7 +34,15 @@ export async function loadModelData(
       { file: descriptor.file, line: data.lines.target, key: 'data.target' },
     );
   }
-  const columns = [...inputs, data.target];
+  const weighting = data.weighting ?? null;
+  if (weighting !== null && weighting.column === data.target) {
+    throw new InputError('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
+      file: descriptor.file,
+      line: weighting.line,
+      key: `data.${weighting.kind}`,
+    });
+  }
+  const columns = [...inputs, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
   const maxBytes = settings.caps.maxFileBytes;
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table;
@@ -50,7 +58,7 @@ export async function loadModelData(
         key,
       });
     }
-    return {
+    const rows = {
       inputs: inputs.map((c) => table.columns.get(c) as Float64Array),
       y: table.columns.get(data.target) as Float64Array,
       lines: table.lines,
@@ -58,12 +66,43 @@ export async function loadModelData(
       file: path,
       byName: table.columns,
     };
+    return weighting === null ? rows : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, path) };
   };
   const train = await load(data.train, data.lines.train, 'data.train');
   const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
   const { byName, ...trainData } = train;
+  if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
+    throw new InputError('bad-weight', `every training row of ${data.train} has weight 0; expected at least one positive weight`, {
+      file: descriptor.file,
+      line: data.weighting?.line,
+      key: `data.${data.weighting?.kind}`,
+    });
+  }
   const { byName: _unused, ...holdoutData } = holdout;
   return { train: trainData, holdout: holdoutData, trainColumns: byName };
+}
+
+/**
+ * The row weights of a `data.weight` or `data.sigma` column: w as written (finite, >= 0), or
+ * w = 1 / sigma^2 with sigma finite and > 0.
+ * @throws InputError `bad-weight` naming the file, line, column and value of the first bad row
+ */
+export function rowWeights(weighting: Weighting, values: Float64Array, lines: Int32Array, rows: number, file: string): { weights: Float64Array; sigma?: Float64Array } {
+  const weights = new Float64Array(rows);
+  const sigma = weighting.kind === 'sigma';
+  for (let i = 0; i < rows; i++) {
+    const v = values[i];
+    const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
+    if (!ok) {
+      throw new InputError(
+        'bad-weight',
+        `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${lines[i]} of ${file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`,
+        { file, line: lines[i], key: weighting.column },
+      );
+    }
+    weights[i] = sigma ? 1 / (v * v) : v;
+  }
+  return sigma ? { weights, sigma: values.subarray(0, rows) } : { weights };
 }
 
 /**
@@ -73,6 +112,10 @@ export async function loadModelData(
 function withAsker(error: unknown, descriptor: Descriptor): unknown {
   if (!(error instanceof InputError) || error.code !== 'csv-missing-column' || error.location.key === undefined) return error;
   const column = error.location.key;
+  if (descriptor.data.weighting?.column === column) {
+    const w = descriptor.data.weighting;
+    return new InputError(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
+  }
   const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
   const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
   if (asker === null) return error;

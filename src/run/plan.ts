@@ -9,6 +9,7 @@ import { loadModelData, type ModelTables } from '../data/load-model-data.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { meanAndSd } from '../design/stats.js';
 import { createTerm, termInputs } from '../design/terms/index.js';
+import { rowScaling, type RowScaling } from '../design/weighted-design.js';
 import { assignFolds, type Folds } from '../diagnostics/folds.js';
 import { firstBeyond } from '../kernels/index.js';
 import type { RepoReader } from '../repo/types.js';
@@ -36,6 +37,8 @@ export interface ModelPlan {
   folds: Folds;
   /** Population standard deviation of the training target (> 0). */
   targetSd: number;
+  /** sqrt(w) and sqrt(w) y of the training rows for a weighted fit; null (or absent) when unweighted. */
+  scaling?: RowScaling | null;
 }
 
 /**
@@ -86,5 +89,5 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
     );
   }
   const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-  return { descriptor, tables, design, folds, targetSd: targetStats.sd };
+  return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
 }

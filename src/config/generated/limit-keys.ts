@@ -25,4 +25,5 @@ export const LIMIT_KEYS: readonly LimitKeyInfo[] = Object.freeze([
   { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
   { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
   { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
+  { key: "chi_square", defaultSpec: {"warn_below":0.5,"warn_above":2}, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only)." },
 ]);

@@ -3,9 +3,9 @@
 "use strict";
 import func1Module from "ajv/dist/runtime/ucs2length.js";
 export const validateSettings = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const func1 = typeof func1Module === "function" ? func1Module : func1Module.default;
-const schema20 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"}}};
+const schema20 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema21 = {"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]};
 
@@ -405,6 +405,12 @@ vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.error
 errors = vErrors.length;
 }
 }
+if(data.chi_square !== undefined){
+if(!(validate54(data.chi_square, {instancePath:instancePath+"/chi_square",parentData:data,parentDataProperty:"chi_square",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
 const err1 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema20.type,parentSchema:schema20,data};
@@ -732,16 +738,16 @@ return errors === 0;
 }
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-export const validateDescriptor = validate70;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+export const validateDescriptor = validate71;
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
 
-function validate72(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate72.evaluated;
+const evaluated0 = validate73.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1085,18 +1091,18 @@ vErrors = null;
 }
 }
 }
-validate72.errors = vErrors;
+validate73.errors = vErrors;
 evaluated0.props = props0;
 evaluated0.items = items0;
 return errors === 0;
 }
-validate72.evaluated = {"dynamicProps":true,"dynamicItems":true};
+validate73.evaluated = {"dynamicProps":true,"dynamicItems":true};
 
 
-function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate72(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate71.evaluated;
+const evaluated0 = validate72.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1415,8 +1421,8 @@ errors++;
 }
 }
 if(data7.centers !== undefined){
-if(!(validate72(data7.centers, {instancePath:instancePath+"/rbf/centers",parentData:data7,parentDataProperty:"centers",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
+if(!(validate73(data7.centers, {instancePath:instancePath+"/rbf/centers",parentData:data7,parentDataProperty:"centers",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
 errors = vErrors.length;
 }
 }
@@ -1468,18 +1474,18 @@ vErrors.push(err29);
 }
 errors++;
 }
-validate71.errors = vErrors;
+validate72.errors = vErrors;
 return errors === 0;
 }
-validate71.evaluated = {"props":{"linear":true,"polynomial":true,"rbf":true},"dynamicProps":false,"dynamicItems":false};
+validate72.evaluated = {"props":{"linear":true,"polynomial":true,"rbf":true},"dynamicProps":false,"dynamicItems":false};
 
-const schema25 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"}}};
+const schema25 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}};
 const schema26 = {"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]};
 
-function validate76(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate76.evaluated;
+const evaluated0 = validate77.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1758,17 +1764,17 @@ vErrors = null;
 }
 }
 }
-validate76.errors = vErrors;
+validate77.errors = vErrors;
 evaluated0.props = props0;
 return errors === 0;
 }
-validate76.evaluated = {"dynamicProps":true,"dynamicItems":false};
+validate77.evaluated = {"dynamicProps":true,"dynamicItems":false};
 
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate76(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate75.evaluated;
+const evaluated0 = validate76.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1789,86 +1795,92 @@ errors++;
 }
 }
 if(data.gap_ratio !== undefined){
-if(!(validate76(data.gap_ratio, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.gap_ratio, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.params_per_sample !== undefined){
-if(!(validate76(data.params_per_sample, {instancePath:instancePath+"/params_per_sample",parentData:data,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.params_per_sample, {instancePath:instancePath+"/params_per_sample",parentData:data,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.coefficient !== undefined){
-if(!(validate76(data.coefficient, {instancePath:instancePath+"/coefficient",parentData:data,parentDataProperty:"coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.coefficient, {instancePath:instancePath+"/coefficient",parentData:data,parentDataProperty:"coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.base_change !== undefined){
-if(!(validate76(data.base_change, {instancePath:instancePath+"/base_change",parentData:data,parentDataProperty:"base_change",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.base_change, {instancePath:instancePath+"/base_change",parentData:data,parentDataProperty:"base_change",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.cv_ratio !== undefined){
-if(!(validate76(data.cv_ratio, {instancePath:instancePath+"/cv_ratio",parentData:data,parentDataProperty:"cv_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.cv_ratio, {instancePath:instancePath+"/cv_ratio",parentData:data,parentDataProperty:"cv_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.swing !== undefined){
-if(!(validate76(data.swing, {instancePath:instancePath+"/swing",parentData:data,parentDataProperty:"swing",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.swing, {instancePath:instancePath+"/swing",parentData:data,parentDataProperty:"swing",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.swing_beyond !== undefined){
-if(!(validate76(data.swing_beyond, {instancePath:instancePath+"/swing_beyond",parentData:data,parentDataProperty:"swing_beyond",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.swing_beyond, {instancePath:instancePath+"/swing_beyond",parentData:data,parentDataProperty:"swing_beyond",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.leakage !== undefined){
-if(!(validate76(data.leakage, {instancePath:instancePath+"/leakage",parentData:data,parentDataProperty:"leakage",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.leakage, {instancePath:instancePath+"/leakage",parentData:data,parentDataProperty:"leakage",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.reproducibility !== undefined){
-if(!(validate76(data.reproducibility, {instancePath:instancePath+"/reproducibility",parentData:data,parentDataProperty:"reproducibility",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.reproducibility, {instancePath:instancePath+"/reproducibility",parentData:data,parentDataProperty:"reproducibility",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.condition !== undefined){
-if(!(validate76(data.condition, {instancePath:instancePath+"/condition",parentData:data,parentDataProperty:"condition",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.condition, {instancePath:instancePath+"/condition",parentData:data,parentDataProperty:"condition",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.complexity !== undefined){
-if(!(validate76(data.complexity, {instancePath:instancePath+"/complexity",parentData:data,parentDataProperty:"complexity",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.complexity, {instancePath:instancePath+"/complexity",parentData:data,parentDataProperty:"complexity",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.holdout_r2 !== undefined){
-if(!(validate76(data.holdout_r2, {instancePath:instancePath+"/holdout_r2",parentData:data,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.holdout_r2, {instancePath:instancePath+"/holdout_r2",parentData:data,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.holdout_rmse !== undefined){
-if(!(validate76(data.holdout_rmse, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.holdout_rmse, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 if(data.holdout_mae !== undefined){
-if(!(validate76(data.holdout_mae, {instancePath:instancePath+"/holdout_mae",parentData:data,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate77(data.holdout_mae, {instancePath:instancePath+"/holdout_mae",parentData:data,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+errors = vErrors.length;
+}
+}
+if(data.chi_square !== undefined){
+if(!(validate77(data.chi_square, {instancePath:instancePath+"/chi_square",parentData:data,parentDataProperty:"chi_square",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
@@ -1883,17 +1895,17 @@ vErrors.push(err1);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate76.errors = vErrors;
 return errors === 0;
 }
-validate75.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate76.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate70(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 /*# sourceURL="urn:fitgate:schema:descriptor:1" */;
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate70.evaluated;
+const evaluated0 = validate71.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -2058,7 +2070,7 @@ vErrors.push(err13);
 errors++;
 }
 for(const key1 in data3){
-if(!(((key1 === "train") || (key1 === "holdout")) || (key1 === "target"))){
+if(!(((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "weight")) || (key1 === "sigma"))){
 const err14 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err14];
@@ -2144,9 +2156,11 @@ vErrors.push(err20);
 errors++;
 }
 }
-}
-else {
-const err21 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
+if(data3.weight !== undefined){
+let data7 = data3.weight;
+if(typeof data7 === "string"){
+if(func1(data7) < 1){
+const err21 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.weight,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2156,11 +2170,8 @@ vErrors.push(err21);
 errors++;
 }
 }
-if(data.terms !== undefined){
-let data7 = data.terms;
-if(Array.isArray(data7)){
-if(data7.length < 1){
-const err22 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data7};
+else {
+const err22 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.weight.type,parentSchema:schema22.properties.data.properties.weight,data:data7};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2169,16 +2180,12 @@ vErrors.push(err22);
 }
 errors++;
 }
-const len0 = data7.length;
-for(let i0=0; i0<len0; i0++){
-if(!(validate71(data7[i0], {instancePath:instancePath+"/terms/" + i0,parentData:data7,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
-errors = vErrors.length;
 }
-}
-}
-else {
-const err23 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data7};
+if(data3.sigma !== undefined){
+let data8 = data3.sigma;
+if(typeof data8 === "string"){
+if(func1(data8) < 1){
+const err23 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.sigma,data:data8};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2188,12 +2195,8 @@ vErrors.push(err23);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data9 = data.fit;
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
-for(const key2 in data9){
-if(!((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count"))){
-const err24 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data9};
+else {
+const err24 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.sigma.type,parentSchema:schema22.properties.data.properties.sigma,data:data8};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -2203,10 +2206,9 @@ vErrors.push(err24);
 errors++;
 }
 }
-if(data9.intercept !== undefined){
-let data10 = data9.intercept;
-if(typeof data10 !== "boolean"){
-const err25 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data10};
+}
+else {
+const err25 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -2216,11 +2218,11 @@ vErrors.push(err25);
 errors++;
 }
 }
-if(data9.ridge !== undefined){
-let data11 = data9.ridge;
-if((typeof data11 == "number") && (isFinite(data11))){
-if(data11 < 0 || isNaN(data11)){
-const err26 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data11};
+if(data.terms !== undefined){
+let data9 = data.terms;
+if(Array.isArray(data9)){
+if(data9.length < 1){
+const err26 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data9};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -2229,9 +2231,16 @@ vErrors.push(err26);
 }
 errors++;
 }
+const len0 = data9.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate72(data9[i0], {instancePath:instancePath+"/terms/" + i0,parentData:data9,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err27 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data11};
+const err27 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data9};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -2241,10 +2250,12 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data9.folds !== undefined){
-let data12 = data9.folds;
-if(!(((typeof data12 == "number") && (!(data12 % 1) && !isNaN(data12))) && (isFinite(data12)))){
-const err28 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data12};
+if(data.fit !== undefined){
+let data11 = data.fit;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+for(const key2 in data11){
+if(!((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count"))){
+const err28 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data11};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2253,9 +2264,11 @@ vErrors.push(err28);
 }
 errors++;
 }
-if((typeof data12 == "number") && (isFinite(data12))){
-if(data12 < 2 || isNaN(data12)){
-const err29 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data12};
+}
+if(data11.intercept !== undefined){
+let data12 = data11.intercept;
+if(typeof data12 !== "boolean"){
+const err29 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2265,11 +2278,11 @@ vErrors.push(err29);
 errors++;
 }
 }
-}
-if(data9.fold_order !== undefined){
-let data13 = data9.fold_order;
-if(!((data13 === "shuffled") || (data13 === "blocks"))){
-const err30 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data13};
+if(data11.ridge !== undefined){
+let data13 = data11.ridge;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 < 0 || isNaN(data13)){
+const err30 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2279,10 +2292,8 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data9.seed !== undefined){
-let data14 = data9.seed;
-if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
-const err31 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+else {
+const err31 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data13};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2291,9 +2302,11 @@ vErrors.push(err31);
 }
 errors++;
 }
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 > 4294967295 || isNaN(data14)){
-const err32 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+}
+if(data11.folds !== undefined){
+let data14 = data11.folds;
+if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
+const err32 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2302,8 +2315,9 @@ vErrors.push(err32);
 }
 errors++;
 }
-if(data14 < 0 || isNaN(data14)){
-const err33 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 < 2 || isNaN(data14)){
+const err33 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data14};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -2314,10 +2328,10 @@ errors++;
 }
 }
 }
-if(data9.parameter_count !== undefined){
-let data15 = data9.parameter_count;
-if(!((data15 === "columns") || (data15 === "effective"))){
-const err34 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data15};
+if(data11.fold_order !== undefined){
+let data15 = data11.fold_order;
+if(!((data15 === "shuffled") || (data15 === "blocks"))){
+const err34 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -2327,9 +2341,10 @@ vErrors.push(err34);
 errors++;
 }
 }
-}
-else {
-const err35 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data9};
+if(data11.seed !== undefined){
+let data16 = data11.seed;
+if(!(((typeof data16 == "number") && (!(data16 % 1) && !isNaN(data16))) && (isFinite(data16)))){
+const err35 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data16};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -2338,12 +2353,9 @@ vErrors.push(err35);
 }
 errors++;
 }
-}
-if(data.coefficients !== undefined){
-let data16 = data.coefficients;
-if(Array.isArray(data16)){
-if(data16.length < 1){
-const err36 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data16};
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 > 4294967295 || isNaN(data16)){
+const err36 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -2352,11 +2364,8 @@ vErrors.push(err36);
 }
 errors++;
 }
-const len1 = data16.length;
-for(let i1=0; i1<len1; i1++){
-let data17 = data16[i1];
-if(!((typeof data17 == "number") && (isFinite(data17)))){
-const err37 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data17};
+if(data16 < 0 || isNaN(data16)){
+const err37 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -2367,8 +2376,10 @@ errors++;
 }
 }
 }
-else {
-const err38 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data16};
+if(data11.parameter_count !== undefined){
+let data17 = data11.parameter_count;
+if(!((data17 === "columns") || (data17 === "effective"))){
+const err38 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -2378,15 +2389,9 @@ vErrors.push(err38);
 errors++;
 }
 }
-if(data.limits !== undefined){
-if(!(validate75(data.limits, {instancePath:instancePath+"/limits",parentData:data,parentDataProperty:"limits",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
-errors = vErrors.length;
-}
-}
 }
 else {
-const err39 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+const err39 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data11};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -2395,8 +2400,65 @@ vErrors.push(err39);
 }
 errors++;
 }
-validate70.errors = vErrors;
+}
+if(data.coefficients !== undefined){
+let data18 = data.coefficients;
+if(Array.isArray(data18)){
+if(data18.length < 1){
+const err40 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data18};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+const len1 = data18.length;
+for(let i1=0; i1<len1; i1++){
+let data19 = data18[i1];
+if(!((typeof data19 == "number") && (isFinite(data19)))){
+const err41 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data19};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+}
+else {
+const err42 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data18};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+if(data.limits !== undefined){
+if(!(validate76(data.limits, {instancePath:instancePath+"/limits",parentData:data,parentDataProperty:"limits",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err43 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+validate71.errors = vErrors;
 return errors === 0;
 }
-validate70.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate71.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
