@@ -21,6 +21,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   dataMissing: 'file-missing',
   centers: 'rbf-centers',
   weighting: 'weight-and-sigma',
+  spline: 'spline-settings',
 });
 
 /**
@@ -119,8 +120,31 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
     const p = term.polynomial;
     return { kind: 'polynomial', of: p.of, degree: p.degree, shift: p.shift ?? null, scale: p.scale ?? null, line };
   }
+  if ('fourier' in term) {
+    const f = term.fourier;
+    return { kind: 'fourier', of: f.of, period: f.period, harmonics: f.harmonics, line };
+  }
+  if ('spline' in term) return readSpline(doc, file, term.spline, ['terms', index, 'spline'], line);
   const r = term.rbf;
   return { kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line };
+}
+
+function readSpline(doc: YamlDocument, file: string, spline: RawSpline, at: (string | number)[], line: number): TermSpec {
+  const degree = spline.degree ?? 3;
+  const natural = spline.natural ?? false;
+  if (natural && degree !== 3) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${showValue(degree)}`);
+  }
+  if (Array.isArray(spline.knots)) {
+    const values = [...spline.knots];
+    for (let k = 1; k < values.length; k++) {
+      if (!(values[k] > values[k - 1])) {
+        throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${showValue(values[k])} does not follow ${showValue(values[k - 1])}; expected strictly increasing knots`);
+      }
+    }
+    return { kind: 'spline', of: spline.of, knots: { kind: 'list', values }, degree, natural, line };
+  }
+  return { kind: 'spline', of: spline.of, knots: { kind: 'count', count: spline.knots.count }, degree, natural, line };
 }
 
 function readCenters(doc: YamlDocument, file: string, centers: RawCenters, at: (string | number)[]): RbfCenters {
@@ -159,4 +183,8 @@ type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: n
 type RawTerm =
   | { linear: string[] }
   | { polynomial: { of: string; degree: number; shift?: number; scale?: number } }
-  | { rbf: { of: string; centers: RawCenters; width: number } };
+  | { rbf: { of: string; centers: RawCenters; width: number } }
+  | { fourier: { of: string; period: number; harmonics: number } }
+  | { spline: RawSpline };
+
+type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean };

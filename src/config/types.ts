@@ -83,8 +83,33 @@ export interface RbfTermSpec {
   line: number;
 }
 
+/** `fourier: { of, period, harmonics }`: sin and cos of 2 pi j x / period, j = 1 .. harmonics. */
+export interface FourierTermSpec {
+  kind: 'fourier';
+  of: string;
+  period: number;
+  harmonics: number;
+  line: number;
+}
+
+/** Knots of a spline term, as written: interior knots, or a count placed at training quantiles. */
+export type SplineKnots = { kind: 'list'; values: number[] } | { kind: 'count'; count: number };
+
+/**
+ * `spline: { of, knots, degree?, natural? }`: a B-spline basis of `degree` (default 3) on the
+ * interior knots and the training range, or natural cubic splines (linear beyond the boundary knots).
+ */
+export interface SplineTermSpec {
+  kind: 'spline';
+  of: string;
+  knots: SplineKnots;
+  degree: number;
+  natural: boolean;
+  line: number;
+}
+
 /** One entry of a descriptor's `terms` list. */
-export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec;
+export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec;
 
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';

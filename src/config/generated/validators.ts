@@ -739,9 +739,9 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate71;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}};
+const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
 
 function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1132,7 +1132,7 @@ errors++;
 }
 for(const key0 in data){
 const _errs1 = errors;
-if(!(((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf"))){
+if(!(((((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf")) || (key0 === "fourier")) || (key0 === "spline"))){
 const err2 = {instancePath,schemaPath:"#/propertyNames/enum",keyword:"enum",params:{allowedValues: schema23.propertyNames.enum},message:"must be equal to one of the allowed values",schema:schema23.propertyNames.enum,parentSchema:schema23.propertyNames,data:key0,propertyName:key0};
 if(vErrors === null){
 vErrors = [err2];
@@ -1463,9 +1463,11 @@ vErrors.push(err28);
 errors++;
 }
 }
-}
-else {
-const err29 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(data.fourier !== undefined){
+let data11 = data.fourier;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+if(data11.of === undefined){
+const err29 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data11};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -1474,10 +1476,430 @@ vErrors.push(err29);
 }
 errors++;
 }
+if(data11.period === undefined){
+const err30 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data11};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+if(data11.harmonics === undefined){
+const err31 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data11};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+for(const key3 in data11){
+if(!(((key3 === "of") || (key3 === "period")) || (key3 === "harmonics"))){
+const err32 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data11};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data11.of !== undefined){
+let data12 = data11.of;
+if(typeof data12 === "string"){
+if(func1(data12) < 1){
+const err33 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data12};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data12};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data11.period !== undefined){
+let data13 = data11.period;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 <= 0 || isNaN(data13)){
+const err35 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data13};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data13};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data11.harmonics !== undefined){
+let data14 = data11.harmonics;
+if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
+const err37 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data14};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 > 50 || isNaN(data14)){
+const err38 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data14};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+if(data14 < 1 || isNaN(data14)){
+const err39 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data14};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data11};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+if(data.spline !== undefined){
+let data15 = data.spline;
+if(data15 && typeof data15 == "object" && !Array.isArray(data15)){
+if(data15.of === undefined){
+const err41 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data15};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+if(data15.knots === undefined){
+const err42 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data15};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+for(const key4 in data15){
+if(!((((key4 === "of") || (key4 === "knots")) || (key4 === "degree")) || (key4 === "natural"))){
+const err43 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data15};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+if(data15.of !== undefined){
+let data16 = data15.of;
+if(typeof data16 === "string"){
+if(func1(data16) < 1){
+const err44 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data16};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data16};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+if(data15.knots !== undefined){
+let data17 = data15.knots;
+const _errs40 = errors;
+let valid8 = false;
+let passing0 = null;
+const _errs41 = errors;
+if(Array.isArray(data17)){
+if(data17.length > 100){
+const err46 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data17};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+if(data17.length < 1){
+const err47 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data17};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+const len1 = data17.length;
+for(let i1=0; i1<len1; i1++){
+let data18 = data17[i1];
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+const err48 = {instancePath:instancePath+"/spline/knots/" + i1,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data18};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+}
+else {
+const err49 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data17};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
+var _valid0 = _errs41 === errors;
+if(_valid0){
+valid8 = true;
+passing0 = 0;
+}
+const _errs45 = errors;
+if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
+if(data17.count === undefined){
+const err50 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data17};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+for(const key5 in data17){
+if(!(key5 === "count")){
+const err51 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data17};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+if(data17.count !== undefined){
+let data19 = data17.count;
+if(!(((typeof data19 == "number") && (!(data19 % 1) && !isNaN(data19))) && (isFinite(data19)))){
+const err52 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data19};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 > 100 || isNaN(data19)){
+const err53 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data19};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
+if(data19 < 1 || isNaN(data19)){
+const err54 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data19};
+if(vErrors === null){
+vErrors = [err54];
+}
+else {
+vErrors.push(err54);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err55 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data17};
+if(vErrors === null){
+vErrors = [err55];
+}
+else {
+vErrors.push(err55);
+}
+errors++;
+}
+var _valid0 = _errs45 === errors;
+if(_valid0 && valid8){
+valid8 = false;
+passing0 = [passing0, 1];
+}
+else {
+if(_valid0){
+valid8 = true;
+passing0 = 1;
+}
+}
+if(!valid8){
+const err56 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data17};
+if(vErrors === null){
+vErrors = [err56];
+}
+else {
+vErrors.push(err56);
+}
+errors++;
+}
+else {
+errors = _errs40;
+if(vErrors !== null){
+if(_errs40){
+vErrors.length = _errs40;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data15.degree !== undefined){
+let data20 = data15.degree;
+if(!(((typeof data20 == "number") && (!(data20 % 1) && !isNaN(data20))) && (isFinite(data20)))){
+const err57 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data20};
+if(vErrors === null){
+vErrors = [err57];
+}
+else {
+vErrors.push(err57);
+}
+errors++;
+}
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 > 5 || isNaN(data20)){
+const err58 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data20};
+if(vErrors === null){
+vErrors = [err58];
+}
+else {
+vErrors.push(err58);
+}
+errors++;
+}
+if(data20 < 1 || isNaN(data20)){
+const err59 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data20};
+if(vErrors === null){
+vErrors = [err59];
+}
+else {
+vErrors.push(err59);
+}
+errors++;
+}
+}
+}
+if(data15.natural !== undefined){
+let data21 = data15.natural;
+if(typeof data21 !== "boolean"){
+const err60 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data21};
+if(vErrors === null){
+vErrors = [err60];
+}
+else {
+vErrors.push(err60);
+}
+errors++;
+}
+}
+}
+else {
+const err61 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data15};
+if(vErrors === null){
+vErrors = [err61];
+}
+else {
+vErrors.push(err61);
+}
+errors++;
+}
+}
+}
+else {
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(vErrors === null){
+vErrors = [err62];
+}
+else {
+vErrors.push(err62);
+}
+errors++;
+}
 validate72.errors = vErrors;
 return errors === 0;
 }
-validate72.evaluated = {"props":{"linear":true,"polynomial":true,"rbf":true},"dynamicProps":false,"dynamicItems":false};
+validate72.evaluated = {"props":{"linear":true,"polynomial":true,"rbf":true,"fourier":true,"spline":true},"dynamicProps":false,"dynamicItems":false};
 
 const schema25 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}};
 const schema26 = {"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]};

@@ -4,9 +4,11 @@
  * to {@link createTerm} and to the README's "Terms" section.
  */
 import type { TermSpec } from '../../config/types.js';
+import { fourierTerm } from './fourier.js';
 import { linearTerm } from './linear.js';
 import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
+import { splineTerm } from './spline.js';
 import type { Term, TrainingColumns } from './types.js';
 
 export type { Term, TrainingColumns } from './types.js';
@@ -30,5 +32,9 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
       return polynomialTerm(spec, training, file);
     case 'rbf':
       return rbfTerm(spec, training);
+    case 'fourier':
+      return fourierTerm(spec);
+    case 'spline':
+      return splineTerm(spec, training, file);
   }
 }
