@@ -22,6 +22,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   centers: 'rbf-centers',
   weighting: 'weight-and-sigma',
   spline: 'spline-settings',
+  polynomial: 'polynomial-inputs',
 });
 
 /**
@@ -118,7 +119,11 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
   if ('linear' in term) return { kind: 'linear', columns: [...term.linear], line };
   if ('polynomial' in term) {
     const p = term.polynomial;
-    return { kind: 'polynomial', of: p.of, degree: p.degree, shift: p.shift ?? null, scale: p.scale ?? null, line };
+    if (Array.isArray(p.of)) return readMultiPolynomial(doc, file, p as RawPolynomial & { of: string[] }, ['terms', index, 'polynomial'], line);
+    for (const key of ['shift', 'scale'] as const) {
+      if (Array.isArray(p[key])) throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
+    }
+    return { kind: 'polynomial', of: p.of, degree: p.degree, shift: (p.shift as number | undefined) ?? null, scale: (p.scale as number | undefined) ?? null, line };
   }
   if ('fourier' in term) {
     const f = term.fourier;
@@ -127,6 +132,19 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
   if ('spline' in term) return readSpline(doc, file, term.spline, ['terms', index, 'spline'], line);
   const r = term.rbf;
   return { kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line };
+}
+
+function readMultiPolynomial(doc: YamlDocument, file: string, p: RawPolynomial & { of: string[] }, at: (string | number)[], line: number): TermSpec {
+  const perInput = (key: 'shift' | 'scale'): (number | null)[] => {
+    const v = p[key];
+    if (v === undefined) return p.of.map(() => null);
+    if (!Array.isArray(v)) return p.of.map(() => v);
+    if (v.length !== p.of.length) {
+      throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
+    }
+    return [...v];
+  };
+  return { kind: 'multi-polynomial', of: [...p.of], degree: p.degree, shift: perInput('shift'), scale: perInput('scale'), line };
 }
 
 function readSpline(doc: YamlDocument, file: string, spline: RawSpline, at: (string | number)[], line: number): TermSpec {
@@ -182,9 +200,11 @@ type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: n
 
 type RawTerm =
   | { linear: string[] }
-  | { polynomial: { of: string; degree: number; shift?: number; scale?: number } }
+  | { polynomial: RawPolynomial }
   | { rbf: { of: string; centers: RawCenters; width: number } }
   | { fourier: { of: string; period: number; harmonics: number } }
   | { spline: RawSpline };
+
+type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[] };
 
 type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean };

@@ -108,8 +108,24 @@ export interface SplineTermSpec {
   line: number;
 }
 
+/**
+ * `polynomial: { of: [a, b, ...], degree, shift?, scale? }`: every monomial of total degree 1 .. degree
+ * in z_i = (x_i - shift_i) / scale_i (kind `multi-polynomial` once read, so that single-input code
+ * keeps its `of: string`).
+ */
+export interface MultiPolynomialTermSpec {
+  kind: 'multi-polynomial';
+  of: string[];
+  degree: number;
+  /** Per input; null entries: the training mean. */
+  shift: (number | null)[];
+  /** Per input; null entries: the training population standard deviation. */
+  scale: (number | null)[];
+  line: number;
+}
+
 /** One entry of a descriptor's `terms` list. */
-export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec;
+export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec;
 
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';

@@ -116,7 +116,7 @@ function withAsker(error: unknown, descriptor: Descriptor): unknown {
     const w = descriptor.data.weighting;
     return new InputError(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
   }
-  const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
+  const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column));
   const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
   if (asker === null) return error;
   return new InputError(error.code, `${error.message} (asked for by ${asker} of ${descriptor.file})`, error.location);

@@ -2,7 +2,7 @@
 // check tests do not depend on the YAML and CSV readers.
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { createTerm } from '../../src/design/terms/index.js';
+import { createTerm, termInputs } from '../../src/design/terms/index.js';
 import { meanAndSd, range } from '../../src/design/stats.js';
 import type { CheckContext, CoreMetrics } from '../../src/checks/types.js';
 import type { ModelData } from '../../src/data/model-data.js';
@@ -105,7 +105,7 @@ export function descriptor(options: {
 /** Fits a descriptor on two tables and returns a check context (core metrics filled as evaluate.ts does). */
 export function buildContext(d: Descriptor, train: Table, holdout: Table): CheckContext {
   const inputs: string[] = [];
-  for (const t of d.terms) for (const c of t.kind === 'linear' ? t.columns : [t.of]) if (!inputs.includes(c)) inputs.push(c);
+  for (const t of d.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
   const pick = (tb: Table): ModelData => {
     const col = (name: string): Float64Array => {
       const k = tb.names.indexOf(name);

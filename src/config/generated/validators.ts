@@ -739,9 +739,9 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate71;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}};
+const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
 
 function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1242,9 +1242,13 @@ errors++;
 }
 if(data2.of !== undefined){
 let data3 = data2.of;
+const _errs10 = errors;
+let valid5 = false;
+let passing0 = null;
+const _errs11 = errors;
 if(typeof data3 === "string"){
 if(func1(data3) < 1){
-const err11 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.polynomial.properties.of,data:data3};
+const err11 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.polynomial.properties.of.oneOf[0],data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1255,7 +1259,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.polynomial.properties.of.type,parentSchema:schema23.properties.polynomial.properties.of,data:data3};
+const err12 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.polynomial.properties.of.oneOf[0].type,parentSchema:schema23.properties.polynomial.properties.of.oneOf[0],data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -1264,11 +1268,15 @@ vErrors.push(err12);
 }
 errors++;
 }
+var _valid0 = _errs11 === errors;
+if(_valid0){
+valid5 = true;
+passing0 = 0;
 }
-if(data2.degree !== undefined){
-let data4 = data2.degree;
-if(!(((typeof data4 == "number") && (!(data4 % 1) && !isNaN(data4))) && (isFinite(data4)))){
-const err13 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.polynomial.properties.degree.type,parentSchema:schema23.properties.polynomial.properties.degree,data:data4};
+const _errs13 = errors;
+if(Array.isArray(data3)){
+if(data3.length > 10){
+const err13 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1277,9 +1285,8 @@ vErrors.push(err13);
 }
 errors++;
 }
-if((typeof data4 == "number") && (isFinite(data4))){
-if(data4 > 30 || isNaN(data4)){
-const err14 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 30},message:"must be <= 30",schema:30,parentSchema:schema23.properties.polynomial.properties.degree,data:data4};
+if(data3.length < 2){
+const err14 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1288,8 +1295,12 @@ vErrors.push(err14);
 }
 errors++;
 }
-if(data4 < 1 || isNaN(data4)){
-const err15 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.polynomial.properties.degree,data:data4};
+const len1 = data3.length;
+for(let i1=0; i1<len1; i1++){
+let data4 = data3[i1];
+if(typeof data4 === "string"){
+if(func1(data4) < 1){
+const err15 = {instancePath:instancePath+"/polynomial/of/" + i1,schemaPath:"#/properties/polynomial/properties/of/oneOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1].items,data:data4};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1299,11 +1310,8 @@ vErrors.push(err15);
 errors++;
 }
 }
-}
-if(data2.shift !== undefined){
-let data5 = data2.shift;
-if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err16 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.shift.type,parentSchema:schema23.properties.polynomial.properties.shift,data:data5};
+else {
+const err16 = {instancePath:instancePath+"/polynomial/of/" + i1,schemaPath:"#/properties/polynomial/properties/of/oneOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.polynomial.properties.of.oneOf[1].items.type,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1].items,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1313,11 +1321,18 @@ vErrors.push(err16);
 errors++;
 }
 }
-if(data2.scale !== undefined){
-let data6 = data2.scale;
-if((typeof data6 == "number") && (isFinite(data6))){
-if(data6 <= 0 || isNaN(data6)){
-const err17 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.polynomial.properties.scale,data:data6};
+let i2 = data3.length;
+let j0;
+if(i2 > 1){
+const indices0 = {};
+for(;i2--;){
+let item0 = data3[i2];
+if(typeof item0 !== "string"){
+continue;
+}
+if(typeof indices0[item0] == "number"){
+j0 = indices0[item0];
+const err17 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/uniqueItems",keyword:"uniqueItems",params:{i: i2, j: j0},message:"must NOT have duplicate items (items ## "+j0+" and "+i2+" are identical)",schema:true,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1325,10 +1340,14 @@ else {
 vErrors.push(err17);
 }
 errors++;
+break;
+}
+indices0[item0] = i2;
+}
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.scale.type,parentSchema:schema23.properties.polynomial.properties.scale,data:data6};
+const err18 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.polynomial.properties.of.oneOf[1].type,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1337,10 +1356,19 @@ vErrors.push(err18);
 }
 errors++;
 }
-}
+var _valid0 = _errs13 === errors;
+if(_valid0 && valid5){
+valid5 = false;
+passing0 = [passing0, 1];
 }
 else {
-const err19 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.polynomial.type,parentSchema:schema23.properties.polynomial,data:data2};
+if(_valid0){
+valid5 = true;
+passing0 = 1;
+}
+}
+if(!valid5){
+const err19 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema23.properties.polynomial.properties.of.oneOf,parentSchema:schema23.properties.polynomial.properties.of,data:data3};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1349,12 +1377,22 @@ vErrors.push(err19);
 }
 errors++;
 }
+else {
+errors = _errs10;
+if(vErrors !== null){
+if(_errs10){
+vErrors.length = _errs10;
 }
-if(data.rbf !== undefined){
-let data7 = data.rbf;
-if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
-if(data7.of === undefined){
-const err20 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data7};
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data2.degree !== undefined){
+let data5 = data2.degree;
+if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
+const err20 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.polynomial.properties.degree.type,parentSchema:schema23.properties.polynomial.properties.degree,data:data5};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1363,8 +1401,9 @@ vErrors.push(err20);
 }
 errors++;
 }
-if(data7.centers === undefined){
-const err21 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "centers"},message:"must have required property '"+"centers"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data7};
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 > 30 || isNaN(data5)){
+const err21 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 30},message:"must be <= 30",schema:30,parentSchema:schema23.properties.polynomial.properties.degree,data:data5};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1373,8 +1412,8 @@ vErrors.push(err21);
 }
 errors++;
 }
-if(data7.width === undefined){
-const err22 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "width"},message:"must have required property '"+"width"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data7};
+if(data5 < 1 || isNaN(data5)){
+const err22 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.polynomial.properties.degree,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1383,9 +1422,16 @@ vErrors.push(err22);
 }
 errors++;
 }
-for(const key2 in data7){
-if(!(((key2 === "of") || (key2 === "centers")) || (key2 === "width"))){
-const err23 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf,data:data7};
+}
+}
+if(data2.shift !== undefined){
+let data6 = data2.shift;
+const _errs20 = errors;
+let valid9 = false;
+let passing1 = null;
+const _errs21 = errors;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err23 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/0/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.shift.oneOf[0].type,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[0],data:data6};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -1394,12 +1440,15 @@ vErrors.push(err23);
 }
 errors++;
 }
+var _valid1 = _errs21 === errors;
+if(_valid1){
+valid9 = true;
+passing1 = 0;
 }
-if(data7.of !== undefined){
-let data8 = data7.of;
-if(typeof data8 === "string"){
-if(func1(data8) < 1){
-const err24 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of,data:data8};
+const _errs23 = errors;
+if(Array.isArray(data6)){
+if(data6.length > 10){
+const err24 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -1408,9 +1457,8 @@ vErrors.push(err24);
 }
 errors++;
 }
-}
-else {
-const err25 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.type,parentSchema:schema23.properties.rbf.properties.of,data:data8};
+if(data6.length < 2){
+const err25 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -1419,18 +1467,11 @@ vErrors.push(err25);
 }
 errors++;
 }
-}
-if(data7.centers !== undefined){
-if(!(validate73(data7.centers, {instancePath:instancePath+"/rbf/centers",parentData:data7,parentDataProperty:"centers",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
-errors = vErrors.length;
-}
-}
-if(data7.width !== undefined){
-let data10 = data7.width;
-if((typeof data10 == "number") && (isFinite(data10))){
-if(data10 <= 0 || isNaN(data10)){
-const err26 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data10};
+const len2 = data6.length;
+for(let i3=0; i3<len2; i3++){
+let data7 = data6[i3];
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err26 = {instancePath:instancePath+"/polynomial/shift/" + i3,schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.shift.oneOf[1].items.type,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1].items,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -1440,8 +1481,9 @@ vErrors.push(err26);
 errors++;
 }
 }
+}
 else {
-const err27 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data10};
+const err27 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.polynomial.properties.shift.oneOf[1].type,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -1450,10 +1492,19 @@ vErrors.push(err27);
 }
 errors++;
 }
-}
+var _valid1 = _errs23 === errors;
+if(_valid1 && valid9){
+valid9 = false;
+passing1 = [passing1, 1];
 }
 else {
-const err28 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data7};
+if(_valid1){
+valid9 = true;
+passing1 = 1;
+}
+}
+if(!valid9){
+const err28 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf",keyword:"oneOf",params:{passingSchemas: passing1},message:"must match exactly one schema in oneOf",schema:schema23.properties.polynomial.properties.shift.oneOf,parentSchema:schema23.properties.polynomial.properties.shift,data:data6};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -1462,12 +1513,27 @@ vErrors.push(err28);
 }
 errors++;
 }
+else {
+errors = _errs20;
+if(vErrors !== null){
+if(_errs20){
+vErrors.length = _errs20;
 }
-if(data.fourier !== undefined){
-let data11 = data.fourier;
-if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
-if(data11.of === undefined){
-const err29 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data11};
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data2.scale !== undefined){
+let data8 = data2.scale;
+const _errs28 = errors;
+let valid12 = false;
+let passing2 = null;
+const _errs29 = errors;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err29 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/0/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[0],data:data8};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -1476,8 +1542,9 @@ vErrors.push(err29);
 }
 errors++;
 }
-if(data11.period === undefined){
-const err30 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data11};
+}
+else {
+const err30 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/0/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.scale.oneOf[0].type,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[0],data:data8};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -1486,8 +1553,15 @@ vErrors.push(err30);
 }
 errors++;
 }
-if(data11.harmonics === undefined){
-const err31 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data11};
+var _valid2 = _errs29 === errors;
+if(_valid2){
+valid12 = true;
+passing2 = 0;
+}
+const _errs31 = errors;
+if(Array.isArray(data8)){
+if(data8.length > 10){
+const err31 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1],data:data8};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -1496,9 +1570,8 @@ vErrors.push(err31);
 }
 errors++;
 }
-for(const key3 in data11){
-if(!(((key3 === "of") || (key3 === "period")) || (key3 === "harmonics"))){
-const err32 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data11};
+if(data8.length < 2){
+const err32 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1],data:data8};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -1507,12 +1580,12 @@ vErrors.push(err32);
 }
 errors++;
 }
-}
-if(data11.of !== undefined){
-let data12 = data11.of;
-if(typeof data12 === "string"){
-if(func1(data12) < 1){
-const err33 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data12};
+const len3 = data8.length;
+for(let i4=0; i4<len3; i4++){
+let data9 = data8[i4];
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 <= 0 || isNaN(data9)){
+const err33 = {instancePath:instancePath+"/polynomial/scale/" + i4,schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/items/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1].items,data:data9};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -1523,7 +1596,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data12};
+const err34 = {instancePath:instancePath+"/polynomial/scale/" + i4,schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.scale.oneOf[1].items.type,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1].items,data:data9};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -1533,11 +1606,9 @@ vErrors.push(err34);
 errors++;
 }
 }
-if(data11.period !== undefined){
-let data13 = data11.period;
-if((typeof data13 == "number") && (isFinite(data13))){
-if(data13 <= 0 || isNaN(data13)){
-const err35 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data13};
+}
+else {
+const err35 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.polynomial.properties.scale.oneOf[1].type,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1],data:data8};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -1546,9 +1617,19 @@ vErrors.push(err35);
 }
 errors++;
 }
+var _valid2 = _errs31 === errors;
+if(_valid2 && valid12){
+valid12 = false;
+passing2 = [passing2, 1];
 }
 else {
-const err36 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data13};
+if(_valid2){
+valid12 = true;
+passing2 = 1;
+}
+}
+if(!valid12){
+const err36 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf",keyword:"oneOf",params:{passingSchemas: passing2},message:"must match exactly one schema in oneOf",schema:schema23.properties.polynomial.properties.scale.oneOf,parentSchema:schema23.properties.polynomial.properties.scale,data:data8};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -1557,11 +1638,21 @@ vErrors.push(err36);
 }
 errors++;
 }
+else {
+errors = _errs28;
+if(vErrors !== null){
+if(_errs28){
+vErrors.length = _errs28;
 }
-if(data11.harmonics !== undefined){
-let data14 = data11.harmonics;
-if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
-const err37 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data14};
+else {
+vErrors = null;
+}
+}
+}
+}
+}
+else {
+const err37 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.polynomial.type,parentSchema:schema23.properties.polynomial,data:data2};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -1570,9 +1661,12 @@ vErrors.push(err37);
 }
 errors++;
 }
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 > 50 || isNaN(data14)){
-const err38 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data14};
+}
+if(data.rbf !== undefined){
+let data10 = data.rbf;
+if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
+if(data10.of === undefined){
+const err38 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -1581,8 +1675,8 @@ vErrors.push(err38);
 }
 errors++;
 }
-if(data14 < 1 || isNaN(data14)){
-const err39 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data14};
+if(data10.centers === undefined){
+const err39 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "centers"},message:"must have required property '"+"centers"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data10};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -1591,11 +1685,8 @@ vErrors.push(err39);
 }
 errors++;
 }
-}
-}
-}
-else {
-const err40 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data11};
+if(data10.width === undefined){
+const err40 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "width"},message:"must have required property '"+"width"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data10};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -1604,12 +1695,9 @@ vErrors.push(err40);
 }
 errors++;
 }
-}
-if(data.spline !== undefined){
-let data15 = data.spline;
-if(data15 && typeof data15 == "object" && !Array.isArray(data15)){
-if(data15.of === undefined){
-const err41 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data15};
+for(const key2 in data10){
+if(!(((key2 === "of") || (key2 === "centers")) || (key2 === "width"))){
+const err41 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf,data:data10};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -1618,8 +1706,12 @@ vErrors.push(err41);
 }
 errors++;
 }
-if(data15.knots === undefined){
-const err42 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data15};
+}
+if(data10.of !== undefined){
+let data11 = data10.of;
+if(typeof data11 === "string"){
+if(func1(data11) < 1){
+const err42 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of,data:data11};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -1628,9 +1720,9 @@ vErrors.push(err42);
 }
 errors++;
 }
-for(const key4 in data15){
-if(!((((key4 === "of") || (key4 === "knots")) || (key4 === "degree")) || (key4 === "natural"))){
-const err43 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data15};
+}
+else {
+const err43 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.type,parentSchema:schema23.properties.rbf.properties.of,data:data11};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -1640,11 +1732,17 @@ vErrors.push(err43);
 errors++;
 }
 }
-if(data15.of !== undefined){
-let data16 = data15.of;
-if(typeof data16 === "string"){
-if(func1(data16) < 1){
-const err44 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data16};
+if(data10.centers !== undefined){
+if(!(validate73(data10.centers, {instancePath:instancePath+"/rbf/centers",parentData:data10,parentDataProperty:"centers",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+errors = vErrors.length;
+}
+}
+if(data10.width !== undefined){
+let data13 = data10.width;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 <= 0 || isNaN(data13)){
+const err44 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data13};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -1655,7 +1753,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data16};
+const err45 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data13};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -1665,15 +1763,9 @@ vErrors.push(err45);
 errors++;
 }
 }
-if(data15.knots !== undefined){
-let data17 = data15.knots;
-const _errs40 = errors;
-let valid8 = false;
-let passing0 = null;
-const _errs41 = errors;
-if(Array.isArray(data17)){
-if(data17.length > 100){
-const err46 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data17};
+}
+else {
+const err46 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data10};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -1682,8 +1774,12 @@ vErrors.push(err46);
 }
 errors++;
 }
-if(data17.length < 1){
-const err47 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data17};
+}
+if(data.fourier !== undefined){
+let data14 = data.fourier;
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+if(data14.of === undefined){
+const err47 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data14};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -1692,11 +1788,8 @@ vErrors.push(err47);
 }
 errors++;
 }
-const len1 = data17.length;
-for(let i1=0; i1<len1; i1++){
-let data18 = data17[i1];
-if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err48 = {instancePath:instancePath+"/spline/knots/" + i1,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data18};
+if(data14.period === undefined){
+const err48 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data14};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -1705,10 +1798,8 @@ vErrors.push(err48);
 }
 errors++;
 }
-}
-}
-else {
-const err49 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data17};
+if(data14.harmonics === undefined){
+const err49 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data14};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -1717,15 +1808,9 @@ vErrors.push(err49);
 }
 errors++;
 }
-var _valid0 = _errs41 === errors;
-if(_valid0){
-valid8 = true;
-passing0 = 0;
-}
-const _errs45 = errors;
-if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
-if(data17.count === undefined){
-const err50 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data17};
+for(const key3 in data14){
+if(!(((key3 === "of") || (key3 === "period")) || (key3 === "harmonics"))){
+const err50 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data14};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -1734,9 +1819,12 @@ vErrors.push(err50);
 }
 errors++;
 }
-for(const key5 in data17){
-if(!(key5 === "count")){
-const err51 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data17};
+}
+if(data14.of !== undefined){
+let data15 = data14.of;
+if(typeof data15 === "string"){
+if(func1(data15) < 1){
+const err51 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data15};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -1746,10 +1834,8 @@ vErrors.push(err51);
 errors++;
 }
 }
-if(data17.count !== undefined){
-let data19 = data17.count;
-if(!(((typeof data19 == "number") && (!(data19 % 1) && !isNaN(data19))) && (isFinite(data19)))){
-const err52 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data19};
+else {
+const err52 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data15};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -1758,9 +1844,12 @@ vErrors.push(err52);
 }
 errors++;
 }
-if((typeof data19 == "number") && (isFinite(data19))){
-if(data19 > 100 || isNaN(data19)){
-const err53 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data19};
+}
+if(data14.period !== undefined){
+let data16 = data14.period;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err53 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data16};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -1769,8 +1858,9 @@ vErrors.push(err53);
 }
 errors++;
 }
-if(data19 < 1 || isNaN(data19)){
-const err54 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data19};
+}
+else {
+const err54 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data16};
 if(vErrors === null){
 vErrors = [err54];
 }
@@ -1780,10 +1870,10 @@ vErrors.push(err54);
 errors++;
 }
 }
-}
-}
-else {
-const err55 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data17};
+if(data14.harmonics !== undefined){
+let data17 = data14.harmonics;
+if(!(((typeof data17 == "number") && (!(data17 % 1) && !isNaN(data17))) && (isFinite(data17)))){
+const err55 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data17};
 if(vErrors === null){
 vErrors = [err55];
 }
@@ -1792,19 +1882,9 @@ vErrors.push(err55);
 }
 errors++;
 }
-var _valid0 = _errs45 === errors;
-if(_valid0 && valid8){
-valid8 = false;
-passing0 = [passing0, 1];
-}
-else {
-if(_valid0){
-valid8 = true;
-passing0 = 1;
-}
-}
-if(!valid8){
-const err56 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data17};
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 > 50 || isNaN(data17)){
+const err56 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data17};
 if(vErrors === null){
 vErrors = [err56];
 }
@@ -1813,22 +1893,8 @@ vErrors.push(err56);
 }
 errors++;
 }
-else {
-errors = _errs40;
-if(vErrors !== null){
-if(_errs40){
-vErrors.length = _errs40;
-}
-else {
-vErrors = null;
-}
-}
-}
-}
-if(data15.degree !== undefined){
-let data20 = data15.degree;
-if(!(((typeof data20 == "number") && (!(data20 % 1) && !isNaN(data20))) && (isFinite(data20)))){
-const err57 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data20};
+if(data17 < 1 || isNaN(data17)){
+const err57 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data17};
 if(vErrors === null){
 vErrors = [err57];
 }
@@ -1837,9 +1903,11 @@ vErrors.push(err57);
 }
 errors++;
 }
-if((typeof data20 == "number") && (isFinite(data20))){
-if(data20 > 5 || isNaN(data20)){
-const err58 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data20};
+}
+}
+}
+else {
+const err58 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data14};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -1848,8 +1916,12 @@ vErrors.push(err58);
 }
 errors++;
 }
-if(data20 < 1 || isNaN(data20)){
-const err59 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data20};
+}
+if(data.spline !== undefined){
+let data18 = data.spline;
+if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
+if(data18.of === undefined){
+const err59 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data18};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -1858,12 +1930,8 @@ vErrors.push(err59);
 }
 errors++;
 }
-}
-}
-if(data15.natural !== undefined){
-let data21 = data15.natural;
-if(typeof data21 !== "boolean"){
-const err60 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data21};
+if(data18.knots === undefined){
+const err60 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data18};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -1872,10 +1940,9 @@ vErrors.push(err60);
 }
 errors++;
 }
-}
-}
-else {
-const err61 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data15};
+for(const key4 in data18){
+if(!((((key4 === "of") || (key4 === "knots")) || (key4 === "degree")) || (key4 === "natural"))){
+const err61 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data18};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -1885,14 +1952,259 @@ vErrors.push(err61);
 errors++;
 }
 }
-}
-else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(data18.of !== undefined){
+let data19 = data18.of;
+if(typeof data19 === "string"){
+if(func1(data19) < 1){
+const err62 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data19};
 if(vErrors === null){
 vErrors = [err62];
 }
 else {
 vErrors.push(err62);
+}
+errors++;
+}
+}
+else {
+const err63 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data19};
+if(vErrors === null){
+vErrors = [err63];
+}
+else {
+vErrors.push(err63);
+}
+errors++;
+}
+}
+if(data18.knots !== undefined){
+let data20 = data18.knots;
+const _errs58 = errors;
+let valid18 = false;
+let passing3 = null;
+const _errs59 = errors;
+if(Array.isArray(data20)){
+if(data20.length > 100){
+const err64 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data20};
+if(vErrors === null){
+vErrors = [err64];
+}
+else {
+vErrors.push(err64);
+}
+errors++;
+}
+if(data20.length < 1){
+const err65 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data20};
+if(vErrors === null){
+vErrors = [err65];
+}
+else {
+vErrors.push(err65);
+}
+errors++;
+}
+const len4 = data20.length;
+for(let i5=0; i5<len4; i5++){
+let data21 = data20[i5];
+if(!((typeof data21 == "number") && (isFinite(data21)))){
+const err66 = {instancePath:instancePath+"/spline/knots/" + i5,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data21};
+if(vErrors === null){
+vErrors = [err66];
+}
+else {
+vErrors.push(err66);
+}
+errors++;
+}
+}
+}
+else {
+const err67 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data20};
+if(vErrors === null){
+vErrors = [err67];
+}
+else {
+vErrors.push(err67);
+}
+errors++;
+}
+var _valid3 = _errs59 === errors;
+if(_valid3){
+valid18 = true;
+passing3 = 0;
+}
+const _errs63 = errors;
+if(data20 && typeof data20 == "object" && !Array.isArray(data20)){
+if(data20.count === undefined){
+const err68 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data20};
+if(vErrors === null){
+vErrors = [err68];
+}
+else {
+vErrors.push(err68);
+}
+errors++;
+}
+for(const key5 in data20){
+if(!(key5 === "count")){
+const err69 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data20};
+if(vErrors === null){
+vErrors = [err69];
+}
+else {
+vErrors.push(err69);
+}
+errors++;
+}
+}
+if(data20.count !== undefined){
+let data22 = data20.count;
+if(!(((typeof data22 == "number") && (!(data22 % 1) && !isNaN(data22))) && (isFinite(data22)))){
+const err70 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data22};
+if(vErrors === null){
+vErrors = [err70];
+}
+else {
+vErrors.push(err70);
+}
+errors++;
+}
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 > 100 || isNaN(data22)){
+const err71 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data22};
+if(vErrors === null){
+vErrors = [err71];
+}
+else {
+vErrors.push(err71);
+}
+errors++;
+}
+if(data22 < 1 || isNaN(data22)){
+const err72 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data22};
+if(vErrors === null){
+vErrors = [err72];
+}
+else {
+vErrors.push(err72);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err73 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data20};
+if(vErrors === null){
+vErrors = [err73];
+}
+else {
+vErrors.push(err73);
+}
+errors++;
+}
+var _valid3 = _errs63 === errors;
+if(_valid3 && valid18){
+valid18 = false;
+passing3 = [passing3, 1];
+}
+else {
+if(_valid3){
+valid18 = true;
+passing3 = 1;
+}
+}
+if(!valid18){
+const err74 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing3},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data20};
+if(vErrors === null){
+vErrors = [err74];
+}
+else {
+vErrors.push(err74);
+}
+errors++;
+}
+else {
+errors = _errs58;
+if(vErrors !== null){
+if(_errs58){
+vErrors.length = _errs58;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data18.degree !== undefined){
+let data23 = data18.degree;
+if(!(((typeof data23 == "number") && (!(data23 % 1) && !isNaN(data23))) && (isFinite(data23)))){
+const err75 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data23};
+if(vErrors === null){
+vErrors = [err75];
+}
+else {
+vErrors.push(err75);
+}
+errors++;
+}
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 > 5 || isNaN(data23)){
+const err76 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data23};
+if(vErrors === null){
+vErrors = [err76];
+}
+else {
+vErrors.push(err76);
+}
+errors++;
+}
+if(data23 < 1 || isNaN(data23)){
+const err77 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data23};
+if(vErrors === null){
+vErrors = [err77];
+}
+else {
+vErrors.push(err77);
+}
+errors++;
+}
+}
+}
+if(data18.natural !== undefined){
+let data24 = data18.natural;
+if(typeof data24 !== "boolean"){
+const err78 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data24};
+if(vErrors === null){
+vErrors = [err78];
+}
+else {
+vErrors.push(err78);
+}
+errors++;
+}
+}
+}
+else {
+const err79 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data18};
+if(vErrors === null){
+vErrors = [err79];
+}
+else {
+vErrors.push(err79);
+}
+errors++;
+}
+}
+}
+else {
+const err80 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(vErrors === null){
+vErrors = [err80];
+}
+else {
+vErrors.push(err80);
 }
 errors++;
 }

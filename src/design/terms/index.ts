@@ -6,6 +6,7 @@
 import type { TermSpec } from '../../config/types.js';
 import { fourierTerm } from './fourier.js';
 import { linearTerm } from './linear.js';
+import { multiPolynomialTerm } from './multi-polynomial.js';
 import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
 import { splineTerm } from './spline.js';
@@ -15,7 +16,8 @@ export type { Term, TrainingColumns } from './types.js';
 
 /** Every input column a term reads (without duplicates, in first-use order). */
 export function termInputs(spec: TermSpec): string[] {
-  return spec.kind === 'linear' ? [...new Set(spec.columns)] : [spec.of];
+  if (spec.kind === 'linear') return [...new Set(spec.columns)];
+  return spec.kind === 'multi-polynomial' ? [...spec.of] : [spec.of];
 }
 
 /**
@@ -36,5 +38,7 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
       return fourierTerm(spec);
     case 'spline':
       return splineTerm(spec, training, file);
+    case 'multi-polynomial':
+      return multiPolynomialTerm(spec, training, file);
   }
 }
