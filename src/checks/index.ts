@@ -22,6 +22,7 @@ import leakage from './leakage.js';
 import reproducibility from './reproducibility.js';
 import swing from './swing.js';
 import swingBeyond from './swing-beyond.js';
+import swingSpikes from './swing-spikes.js';
 import { judge, type Check, type CheckContext, type Measurement } from './types.js';
 
 export type { Check, CheckContext, CoreMetrics, Measurement } from './types.js';
@@ -35,6 +36,7 @@ export const CHECKS: readonly Check[] = validate([
   crossValidation,
   swing,
   swingBeyond,
+  swingSpikes,
   leakage,
   reproducibility,
   conditioning,

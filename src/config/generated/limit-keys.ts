@@ -18,6 +18,7 @@ export const LIMIT_KEYS: readonly LimitKeyInfo[] = Object.freeze([
   { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
   { key: "swing", defaultSpec: {"warn":0.25,"fail":0.5}, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
   { key: "swing_beyond", defaultSpec: {"warn":1}, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
+  { key: "swing_spikes", defaultSpec: {"warn":1.5,"fail":2}, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation." },
   { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
   { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
   { key: "condition", defaultSpec: {"warn":100000000}, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
