@@ -8,7 +8,7 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting } from './types.js';
+import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -119,19 +119,24 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
   if ('linear' in term) return { kind: 'linear', columns: [...term.linear], line };
   if ('polynomial' in term) {
     const p = term.polynomial;
-    if (Array.isArray(p.of)) return readMultiPolynomial(doc, file, p as RawPolynomial & { of: string[] }, ['terms', index, 'polynomial'], line);
+    if (Array.isArray(p.of)) return withTransform(readMultiPolynomial(doc, file, p as RawPolynomial & { of: string[] }, ['terms', index, 'polynomial'], line), p.transform);
     for (const key of ['shift', 'scale'] as const) {
       if (Array.isArray(p[key])) throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
     }
-    return { kind: 'polynomial', of: p.of, degree: p.degree, shift: (p.shift as number | undefined) ?? null, scale: (p.scale as number | undefined) ?? null, line };
+    return withTransform({ kind: 'polynomial', of: p.of, degree: p.degree, shift: (p.shift as number | undefined) ?? null, scale: (p.scale as number | undefined) ?? null, line }, p.transform);
   }
   if ('fourier' in term) {
     const f = term.fourier;
-    return { kind: 'fourier', of: f.of, period: f.period, harmonics: f.harmonics, line };
+    return withTransform({ kind: 'fourier', of: f.of, period: f.period, harmonics: f.harmonics, line }, f.transform);
   }
-  if ('spline' in term) return readSpline(doc, file, term.spline, ['terms', index, 'spline'], line);
+  if ('spline' in term) return withTransform(readSpline(doc, file, term.spline, ['terms', index, 'spline'], line), term.spline.transform);
   const r = term.rbf;
-  return { kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line };
+  return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
+}
+
+/** The spec with its `transform` when one is written (absent otherwise, so specs without one keep their shape). */
+function withTransform(spec: TermSpec, transform: InputTransform | undefined): TermSpec {
+  return transform === undefined ? spec : ({ ...spec, transform } as TermSpec);
 }
 
 function readMultiPolynomial(doc: YamlDocument, file: string, p: RawPolynomial & { of: string[] }, at: (string | number)[], line: number): TermSpec {
@@ -201,10 +206,10 @@ type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: n
 type RawTerm =
   | { linear: string[] }
   | { polynomial: RawPolynomial }
-  | { rbf: { of: string; centers: RawCenters; width: number } }
-  | { fourier: { of: string; period: number; harmonics: number } }
+  | { rbf: { of: string; centers: RawCenters; width: number; transform?: InputTransform } }
+  | { fourier: { of: string; period: number; harmonics: number; transform?: InputTransform } }
   | { spline: RawSpline };
 
-type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[] };
+type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[]; transform?: InputTransform };
 
-type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean };
+type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean; transform?: InputTransform };

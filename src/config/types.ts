@@ -55,6 +55,13 @@ export type RbfCenters =
   | { kind: 'step'; from: number; to: number; step: number }
   | { kind: 'at-samples' };
 
+/**
+ * A transform applied to a term's input before the term sees it: log(x) (x > 0), log(1 + x)
+ * (x > -1), sqrt(x) (x >= 0), or (x - mean) / sd with the training mean and population standard
+ * deviation. Absent: the input as it is.
+ */
+export type InputTransform = 'log' | 'log1p' | 'sqrt' | 'standardise';
+
 /** `linear: [cols]`: the columns as they are. */
 export interface LinearTermSpec {
   kind: 'linear';
@@ -71,6 +78,8 @@ export interface PolynomialTermSpec {
   shift: number | null;
   /** Null: the training population standard deviation of `of`. */
   scale: number | null;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
   line: number;
 }
 
@@ -80,6 +89,8 @@ export interface RbfTermSpec {
   of: string;
   centers: RbfCenters;
   width: number;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
   line: number;
 }
 
@@ -89,6 +100,8 @@ export interface FourierTermSpec {
   of: string;
   period: number;
   harmonics: number;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
   line: number;
 }
 
@@ -105,6 +118,8 @@ export interface SplineTermSpec {
   knots: SplineKnots;
   degree: number;
   natural: boolean;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
   line: number;
 }
 
@@ -121,6 +136,8 @@ export interface MultiPolynomialTermSpec {
   shift: (number | null)[];
   /** Per input; null entries: the training population standard deviation. */
   scale: (number | null)[];
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
   line: number;
 }
 

@@ -9,6 +9,7 @@ import { loadModelData, type ModelTables } from '../data/load-model-data.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { meanAndSd } from '../design/stats.js';
 import { createTerm, termInputs } from '../design/terms/index.js';
+import { checkTransformDomain } from '../design/terms/transform.js';
 import { rowScaling, type RowScaling } from '../design/weighted-design.js';
 import { assignFolds, type Folds } from '../diagnostics/folds.js';
 import { firstBeyond } from '../kernels/index.js';
@@ -52,6 +53,8 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
   const { train } = tables;
   const file = descriptor.file;
 
+  // A transformed input outside its transform's domain is an error naming file, line, column, value.
+  for (const spec of descriptor.terms) for (const data of [train, tables.holdout]) checkTransformDomain(spec, termInputs(spec), data, inputs);
   // Fix term parameters from the training rows, then check the size before taking memory.
   const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file));
   const design = createDesign(terms, descriptor.fit.intercept);

@@ -51,3 +51,20 @@ describe('fourier and spline terms in a descriptor', () => {
     await expect(load('  - fourier: { of: day, period: 0, harmonics: 2 }\n')).rejects.toMatchObject({ location: { line: 8 } });
   });
 });
+
+describe('input transforms', () => {
+  it('a value outside the domain is an error naming file, line, column and value', async () => {
+    const terms = '  - polynomial: { of: hours, degree: 2, transform: log }\n';
+    const d = await load(terms);
+    expect(d.terms[0]).toMatchObject({ kind: 'polynomial', transform: 'log' });
+    // hours is 0 on the first data row (line 2 of d.csv)
+    await expect(fitModel(repo(terms), d, defaultSettings())).rejects.toMatchObject({ code: 'transform-domain', location: { file: 'd.csv', line: 2, key: 'hours' } });
+  });
+
+  it('log1p accepts 0 and names its columns', async () => {
+    const terms = '  - spline: { of: hours, knots: { count: 2 }, natural: true, transform: log1p }\n';
+    const model = await fitModel(repo(terms), await load(terms), defaultSettings());
+    expect(model.design.columnNames).toEqual(['(intercept)', 'ns(log1p(hours); u)', expect.stringMatching(/^ns\(log1p\(hours\); knot /), expect.stringMatching(/^ns\(log1p\(hours\); knot /)]);
+    expect(model.design.inputs).toEqual(['hours']);
+  });
+});

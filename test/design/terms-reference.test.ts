@@ -244,3 +244,28 @@ describe.skipIf(missing !== null)(`polynomial over several inputs against sklear
     });
   }
 });
+
+const TRANSFORM_SCRIPT = `
+import json, sys
+import numpy as np
+d = json.load(sys.stdin)
+x = np.asarray(d['train']); at = np.asarray(d['at'])
+f = {'log': np.log, 'log1p': np.log1p, 'sqrt': np.sqrt, 'standardise': lambda v: (v - x.mean()) / x.std()}[d['transform']]
+tx, ta = f(x), f(at)
+z = (ta - tx.mean()) / tx.std()
+print(json.dumps({'cols': [(z**k).tolist() for k in range(1, d['degree'] + 1)]}))
+`;
+
+describe.skipIf(missing !== null)(`input transforms against numpy${skipNote(missing)}`, () => {
+  for (const transform of ['log', 'log1p', 'sqrt', 'standardise'] as const) {
+    it(`polynomial of ${transform}(x): standardised powers of the transformed input to ${TOLERANCE}`, () => {
+      const positive = train.map((v) => v + 0.5);
+      const points = at.filter((v) => v > 0.1);
+      const spec: TermSpec = { kind: 'polynomial', of: 'x', degree: 3, shift: null, scale: null, transform, line: 1 };
+      const ours = columns(spec, positive, points);
+      const ref = runPythonJson<Reference>(TRANSFORM_SCRIPT, { transform, degree: 3, train: positive, at: points });
+      expect(ours.names[0]).toBe(`z(${transform === 'standardise' ? 'std' : transform}(x))`);
+      expect(worst(ours.cols, ref.cols as number[][])).toBeLessThan(TOLERANCE);
+    });
+  }
+});

@@ -745,9 +745,9 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate72;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false}}}}};
+const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
 
 function validate74(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1235,7 +1235,7 @@ vErrors.push(err9);
 errors++;
 }
 for(const key1 in data2){
-if(!((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale"))){
+if(!(((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale")) || (key1 === "transform"))){
 const err10 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.polynomial,data:data2};
 if(vErrors === null){
 vErrors = [err10];
@@ -1656,9 +1656,10 @@ vErrors = null;
 }
 }
 }
-}
-else {
-const err37 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.polynomial.type,parentSchema:schema23.properties.polynomial,data:data2};
+if(data2.transform !== undefined){
+let data10 = data2.transform;
+if(!((((data10 === "log") || (data10 === "log1p")) || (data10 === "sqrt")) || (data10 === "standardise"))){
+const err37 = {instancePath:instancePath+"/polynomial/transform",schemaPath:"#/properties/polynomial/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.polynomial.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.polynomial.properties.transform.enum,parentSchema:schema23.properties.polynomial.properties.transform,data:data10};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -1668,11 +1669,9 @@ vErrors.push(err37);
 errors++;
 }
 }
-if(data.rbf !== undefined){
-let data10 = data.rbf;
-if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
-if(data10.of === undefined){
-const err38 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data10};
+}
+else {
+const err38 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.polynomial.type,parentSchema:schema23.properties.polynomial,data:data2};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -1681,8 +1680,12 @@ vErrors.push(err38);
 }
 errors++;
 }
-if(data10.centers === undefined){
-const err39 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "centers"},message:"must have required property '"+"centers"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data10};
+}
+if(data.rbf !== undefined){
+let data11 = data.rbf;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+if(data11.of === undefined){
+const err39 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data11};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -1691,8 +1694,8 @@ vErrors.push(err39);
 }
 errors++;
 }
-if(data10.width === undefined){
-const err40 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "width"},message:"must have required property '"+"width"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data10};
+if(data11.centers === undefined){
+const err40 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "centers"},message:"must have required property '"+"centers"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data11};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -1701,9 +1704,8 @@ vErrors.push(err40);
 }
 errors++;
 }
-for(const key2 in data10){
-if(!(((key2 === "of") || (key2 === "centers")) || (key2 === "width"))){
-const err41 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf,data:data10};
+if(data11.width === undefined){
+const err41 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "width"},message:"must have required property '"+"width"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -1712,12 +1714,9 @@ vErrors.push(err41);
 }
 errors++;
 }
-}
-if(data10.of !== undefined){
-let data11 = data10.of;
-if(typeof data11 === "string"){
-if(func1(data11) < 1){
-const err42 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of,data:data11};
+for(const key2 in data11){
+if(!((((key2 === "of") || (key2 === "centers")) || (key2 === "width")) || (key2 === "transform"))){
+const err42 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf,data:data11};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -1727,8 +1726,11 @@ vErrors.push(err42);
 errors++;
 }
 }
-else {
-const err43 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.type,parentSchema:schema23.properties.rbf.properties.of,data:data11};
+if(data11.of !== undefined){
+let data12 = data11.of;
+if(typeof data12 === "string"){
+if(func1(data12) < 1){
+const err43 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of,data:data12};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -1738,17 +1740,8 @@ vErrors.push(err43);
 errors++;
 }
 }
-if(data10.centers !== undefined){
-if(!(validate74(data10.centers, {instancePath:instancePath+"/rbf/centers",parentData:data10,parentDataProperty:"centers",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate74.errors : vErrors.concat(validate74.errors);
-errors = vErrors.length;
-}
-}
-if(data10.width !== undefined){
-let data13 = data10.width;
-if((typeof data13 == "number") && (isFinite(data13))){
-if(data13 <= 0 || isNaN(data13)){
-const err44 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data13};
+else {
+const err44 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.type,parentSchema:schema23.properties.rbf.properties.of,data:data12};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -1758,8 +1751,17 @@ vErrors.push(err44);
 errors++;
 }
 }
-else {
-const err45 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data13};
+if(data11.centers !== undefined){
+if(!(validate74(data11.centers, {instancePath:instancePath+"/rbf/centers",parentData:data11,parentDataProperty:"centers",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate74.errors : vErrors.concat(validate74.errors);
+errors = vErrors.length;
+}
+}
+if(data11.width !== undefined){
+let data14 = data11.width;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err45 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data14};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -1769,9 +1771,8 @@ vErrors.push(err45);
 errors++;
 }
 }
-}
 else {
-const err46 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data10};
+const err46 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data14};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -1781,11 +1782,10 @@ vErrors.push(err46);
 errors++;
 }
 }
-if(data.fourier !== undefined){
-let data14 = data.fourier;
-if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
-if(data14.of === undefined){
-const err47 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data14};
+if(data11.transform !== undefined){
+let data15 = data11.transform;
+if(!((((data15 === "log") || (data15 === "log1p")) || (data15 === "sqrt")) || (data15 === "standardise"))){
+const err47 = {instancePath:instancePath+"/rbf/transform",schemaPath:"#/properties/rbf/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.rbf.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.rbf.properties.transform.enum,parentSchema:schema23.properties.rbf.properties.transform,data:data15};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -1794,8 +1794,10 @@ vErrors.push(err47);
 }
 errors++;
 }
-if(data14.period === undefined){
-const err48 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data14};
+}
+}
+else {
+const err48 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data11};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -1804,8 +1806,12 @@ vErrors.push(err48);
 }
 errors++;
 }
-if(data14.harmonics === undefined){
-const err49 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data14};
+}
+if(data.fourier !== undefined){
+let data16 = data.fourier;
+if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
+if(data16.of === undefined){
+const err49 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data16};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -1814,9 +1820,8 @@ vErrors.push(err49);
 }
 errors++;
 }
-for(const key3 in data14){
-if(!(((key3 === "of") || (key3 === "period")) || (key3 === "harmonics"))){
-const err50 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data14};
+if(data16.period === undefined){
+const err50 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data16};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -1825,12 +1830,8 @@ vErrors.push(err50);
 }
 errors++;
 }
-}
-if(data14.of !== undefined){
-let data15 = data14.of;
-if(typeof data15 === "string"){
-if(func1(data15) < 1){
-const err51 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data15};
+if(data16.harmonics === undefined){
+const err51 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data16};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -1839,9 +1840,9 @@ vErrors.push(err51);
 }
 errors++;
 }
-}
-else {
-const err52 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data15};
+for(const key3 in data16){
+if(!((((key3 === "of") || (key3 === "period")) || (key3 === "harmonics")) || (key3 === "transform"))){
+const err52 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data16};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -1851,11 +1852,11 @@ vErrors.push(err52);
 errors++;
 }
 }
-if(data14.period !== undefined){
-let data16 = data14.period;
-if((typeof data16 == "number") && (isFinite(data16))){
-if(data16 <= 0 || isNaN(data16)){
-const err53 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data16};
+if(data16.of !== undefined){
+let data17 = data16.of;
+if(typeof data17 === "string"){
+if(func1(data17) < 1){
+const err53 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data17};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -1866,7 +1867,7 @@ errors++;
 }
 }
 else {
-const err54 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data16};
+const err54 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data17};
 if(vErrors === null){
 vErrors = [err54];
 }
@@ -1876,10 +1877,11 @@ vErrors.push(err54);
 errors++;
 }
 }
-if(data14.harmonics !== undefined){
-let data17 = data14.harmonics;
-if(!(((typeof data17 == "number") && (!(data17 % 1) && !isNaN(data17))) && (isFinite(data17)))){
-const err55 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data17};
+if(data16.period !== undefined){
+let data18 = data16.period;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 <= 0 || isNaN(data18)){
+const err55 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data18};
 if(vErrors === null){
 vErrors = [err55];
 }
@@ -1888,9 +1890,9 @@ vErrors.push(err55);
 }
 errors++;
 }
-if((typeof data17 == "number") && (isFinite(data17))){
-if(data17 > 50 || isNaN(data17)){
-const err56 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data17};
+}
+else {
+const err56 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data18};
 if(vErrors === null){
 vErrors = [err56];
 }
@@ -1899,8 +1901,11 @@ vErrors.push(err56);
 }
 errors++;
 }
-if(data17 < 1 || isNaN(data17)){
-const err57 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data17};
+}
+if(data16.harmonics !== undefined){
+let data19 = data16.harmonics;
+if(!(((typeof data19 == "number") && (!(data19 % 1) && !isNaN(data19))) && (isFinite(data19)))){
+const err57 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data19};
 if(vErrors === null){
 vErrors = [err57];
 }
@@ -1909,11 +1914,9 @@ vErrors.push(err57);
 }
 errors++;
 }
-}
-}
-}
-else {
-const err58 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data14};
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 > 50 || isNaN(data19)){
+const err58 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data19};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -1922,12 +1925,8 @@ vErrors.push(err58);
 }
 errors++;
 }
-}
-if(data.spline !== undefined){
-let data18 = data.spline;
-if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
-if(data18.of === undefined){
-const err59 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data18};
+if(data19 < 1 || isNaN(data19)){
+const err59 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data19};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -1936,8 +1935,12 @@ vErrors.push(err59);
 }
 errors++;
 }
-if(data18.knots === undefined){
-const err60 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data18};
+}
+}
+if(data16.transform !== undefined){
+let data20 = data16.transform;
+if(!((((data20 === "log") || (data20 === "log1p")) || (data20 === "sqrt")) || (data20 === "standardise"))){
+const err60 = {instancePath:instancePath+"/fourier/transform",schemaPath:"#/properties/fourier/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.fourier.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.fourier.properties.transform.enum,parentSchema:schema23.properties.fourier.properties.transform,data:data20};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -1946,9 +1949,10 @@ vErrors.push(err60);
 }
 errors++;
 }
-for(const key4 in data18){
-if(!((((key4 === "of") || (key4 === "knots")) || (key4 === "degree")) || (key4 === "natural"))){
-const err61 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data18};
+}
+}
+else {
+const err61 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data16};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -1958,11 +1962,11 @@ vErrors.push(err61);
 errors++;
 }
 }
-if(data18.of !== undefined){
-let data19 = data18.of;
-if(typeof data19 === "string"){
-if(func1(data19) < 1){
-const err62 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data19};
+if(data.spline !== undefined){
+let data21 = data.spline;
+if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
+if(data21.of === undefined){
+const err62 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data21};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -1971,9 +1975,8 @@ vErrors.push(err62);
 }
 errors++;
 }
-}
-else {
-const err63 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data19};
+if(data21.knots === undefined){
+const err63 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data21};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -1982,16 +1985,9 @@ vErrors.push(err63);
 }
 errors++;
 }
-}
-if(data18.knots !== undefined){
-let data20 = data18.knots;
-const _errs58 = errors;
-let valid18 = false;
-let passing3 = null;
-const _errs59 = errors;
-if(Array.isArray(data20)){
-if(data20.length > 100){
-const err64 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data20};
+for(const key4 in data21){
+if(!(((((key4 === "of") || (key4 === "knots")) || (key4 === "degree")) || (key4 === "natural")) || (key4 === "transform"))){
+const err64 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data21};
 if(vErrors === null){
 vErrors = [err64];
 }
@@ -2000,8 +1996,12 @@ vErrors.push(err64);
 }
 errors++;
 }
-if(data20.length < 1){
-const err65 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data20};
+}
+if(data21.of !== undefined){
+let data22 = data21.of;
+if(typeof data22 === "string"){
+if(func1(data22) < 1){
+const err65 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data22};
 if(vErrors === null){
 vErrors = [err65];
 }
@@ -2010,11 +2010,9 @@ vErrors.push(err65);
 }
 errors++;
 }
-const len4 = data20.length;
-for(let i5=0; i5<len4; i5++){
-let data21 = data20[i5];
-if(!((typeof data21 == "number") && (isFinite(data21)))){
-const err66 = {instancePath:instancePath+"/spline/knots/" + i5,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data21};
+}
+else {
+const err66 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data22};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -2024,9 +2022,15 @@ vErrors.push(err66);
 errors++;
 }
 }
-}
-else {
-const err67 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data20};
+if(data21.knots !== undefined){
+let data23 = data21.knots;
+const _errs61 = errors;
+let valid18 = false;
+let passing3 = null;
+const _errs62 = errors;
+if(Array.isArray(data23)){
+if(data23.length > 100){
+const err67 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data23};
 if(vErrors === null){
 vErrors = [err67];
 }
@@ -2035,15 +2039,8 @@ vErrors.push(err67);
 }
 errors++;
 }
-var _valid3 = _errs59 === errors;
-if(_valid3){
-valid18 = true;
-passing3 = 0;
-}
-const _errs63 = errors;
-if(data20 && typeof data20 == "object" && !Array.isArray(data20)){
-if(data20.count === undefined){
-const err68 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data20};
+if(data23.length < 1){
+const err68 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data23};
 if(vErrors === null){
 vErrors = [err68];
 }
@@ -2052,9 +2049,11 @@ vErrors.push(err68);
 }
 errors++;
 }
-for(const key5 in data20){
-if(!(key5 === "count")){
-const err69 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data20};
+const len4 = data23.length;
+for(let i5=0; i5<len4; i5++){
+let data24 = data23[i5];
+if(!((typeof data24 == "number") && (isFinite(data24)))){
+const err69 = {instancePath:instancePath+"/spline/knots/" + i5,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data24};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -2064,10 +2063,9 @@ vErrors.push(err69);
 errors++;
 }
 }
-if(data20.count !== undefined){
-let data22 = data20.count;
-if(!(((typeof data22 == "number") && (!(data22 % 1) && !isNaN(data22))) && (isFinite(data22)))){
-const err70 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data22};
+}
+else {
+const err70 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data23};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -2076,9 +2074,15 @@ vErrors.push(err70);
 }
 errors++;
 }
-if((typeof data22 == "number") && (isFinite(data22))){
-if(data22 > 100 || isNaN(data22)){
-const err71 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data22};
+var _valid3 = _errs62 === errors;
+if(_valid3){
+valid18 = true;
+passing3 = 0;
+}
+const _errs66 = errors;
+if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
+if(data23.count === undefined){
+const err71 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data23};
 if(vErrors === null){
 vErrors = [err71];
 }
@@ -2087,8 +2091,9 @@ vErrors.push(err71);
 }
 errors++;
 }
-if(data22 < 1 || isNaN(data22)){
-const err72 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data22};
+for(const key5 in data23){
+if(!(key5 === "count")){
+const err72 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data23};
 if(vErrors === null){
 vErrors = [err72];
 }
@@ -2098,10 +2103,10 @@ vErrors.push(err72);
 errors++;
 }
 }
-}
-}
-else {
-const err73 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data20};
+if(data23.count !== undefined){
+let data25 = data23.count;
+if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
+const err73 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data25};
 if(vErrors === null){
 vErrors = [err73];
 }
@@ -2110,7 +2115,41 @@ vErrors.push(err73);
 }
 errors++;
 }
-var _valid3 = _errs63 === errors;
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 > 100 || isNaN(data25)){
+const err74 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data25};
+if(vErrors === null){
+vErrors = [err74];
+}
+else {
+vErrors.push(err74);
+}
+errors++;
+}
+if(data25 < 1 || isNaN(data25)){
+const err75 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data25};
+if(vErrors === null){
+vErrors = [err75];
+}
+else {
+vErrors.push(err75);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err76 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data23};
+if(vErrors === null){
+vErrors = [err76];
+}
+else {
+vErrors.push(err76);
+}
+errors++;
+}
+var _valid3 = _errs66 === errors;
 if(_valid3 && valid18){
 valid18 = false;
 passing3 = [passing3, 1];
@@ -2122,52 +2161,7 @@ passing3 = 1;
 }
 }
 if(!valid18){
-const err74 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing3},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data20};
-if(vErrors === null){
-vErrors = [err74];
-}
-else {
-vErrors.push(err74);
-}
-errors++;
-}
-else {
-errors = _errs58;
-if(vErrors !== null){
-if(_errs58){
-vErrors.length = _errs58;
-}
-else {
-vErrors = null;
-}
-}
-}
-}
-if(data18.degree !== undefined){
-let data23 = data18.degree;
-if(!(((typeof data23 == "number") && (!(data23 % 1) && !isNaN(data23))) && (isFinite(data23)))){
-const err75 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data23};
-if(vErrors === null){
-vErrors = [err75];
-}
-else {
-vErrors.push(err75);
-}
-errors++;
-}
-if((typeof data23 == "number") && (isFinite(data23))){
-if(data23 > 5 || isNaN(data23)){
-const err76 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data23};
-if(vErrors === null){
-vErrors = [err76];
-}
-else {
-vErrors.push(err76);
-}
-errors++;
-}
-if(data23 < 1 || isNaN(data23)){
-const err77 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data23};
+const err77 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing3},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data23};
 if(vErrors === null){
 vErrors = [err77];
 }
@@ -2176,12 +2170,22 @@ vErrors.push(err77);
 }
 errors++;
 }
+else {
+errors = _errs61;
+if(vErrors !== null){
+if(_errs61){
+vErrors.length = _errs61;
+}
+else {
+vErrors = null;
 }
 }
-if(data18.natural !== undefined){
-let data24 = data18.natural;
-if(typeof data24 !== "boolean"){
-const err78 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data24};
+}
+}
+if(data21.degree !== undefined){
+let data26 = data21.degree;
+if(!(((typeof data26 == "number") && (!(data26 % 1) && !isNaN(data26))) && (isFinite(data26)))){
+const err78 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data26};
 if(vErrors === null){
 vErrors = [err78];
 }
@@ -2190,10 +2194,9 @@ vErrors.push(err78);
 }
 errors++;
 }
-}
-}
-else {
-const err79 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data18};
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 > 5 || isNaN(data26)){
+const err79 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data26};
 if(vErrors === null){
 vErrors = [err79];
 }
@@ -2202,15 +2205,64 @@ vErrors.push(err79);
 }
 errors++;
 }
-}
-}
-else {
-const err80 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(data26 < 1 || isNaN(data26)){
+const err80 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data26};
 if(vErrors === null){
 vErrors = [err80];
 }
 else {
 vErrors.push(err80);
+}
+errors++;
+}
+}
+}
+if(data21.natural !== undefined){
+let data27 = data21.natural;
+if(typeof data27 !== "boolean"){
+const err81 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data27};
+if(vErrors === null){
+vErrors = [err81];
+}
+else {
+vErrors.push(err81);
+}
+errors++;
+}
+}
+if(data21.transform !== undefined){
+let data28 = data21.transform;
+if(!((((data28 === "log") || (data28 === "log1p")) || (data28 === "sqrt")) || (data28 === "standardise"))){
+const err82 = {instancePath:instancePath+"/spline/transform",schemaPath:"#/properties/spline/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.spline.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.spline.properties.transform.enum,parentSchema:schema23.properties.spline.properties.transform,data:data28};
+if(vErrors === null){
+vErrors = [err82];
+}
+else {
+vErrors.push(err82);
+}
+errors++;
+}
+}
+}
+else {
+const err83 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data21};
+if(vErrors === null){
+vErrors = [err83];
+}
+else {
+vErrors.push(err83);
+}
+errors++;
+}
+}
+}
+else {
+const err84 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(vErrors === null){
+vErrors = [err84];
+}
+else {
+vErrors.push(err84);
 }
 errors++;
 }

@@ -10,6 +10,7 @@ import { multiPolynomialTerm } from './multi-polynomial.js';
 import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
 import { splineTerm } from './spline.js';
+import { transformedTerm } from './transform.js';
 import type { Term, TrainingColumns } from './types.js';
 
 export type { Term, TrainingColumns } from './types.js';
@@ -27,6 +28,9 @@ export function termInputs(spec: TermSpec): string[] {
  * @param file descriptor path, for errors
  */
 export function createTerm(spec: TermSpec, training: TrainingColumns, file: string): Term {
+  if (spec.kind !== 'linear' && spec.transform !== undefined) {
+    return transformedTerm(spec, training, file, termInputs(spec), (inner, columns) => createTerm(inner, columns, file));
+  }
   switch (spec.kind) {
     case 'linear':
       return linearTerm(spec);
