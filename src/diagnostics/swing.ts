@@ -3,6 +3,7 @@
  * training targets on inputs between the training rows and just past their range.
  */
 import { createDesign, type Design } from '../design/design-matrix.js';
+import type { Term } from '../design/terms/index.js';
 import { predictRows } from '../design/blocks.js';
 import type { Rows } from './cross-validation.js';
 import { columnMedian, selectKth } from './column-median.js';
@@ -448,8 +449,15 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   for (let c = 0; c < d; c++) {
     const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
     const sample = scratch.subarray(0, len);
+    // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
+    const onScale = inputScaleOf(design, c);
+    if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
     const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
-    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: grid.beyond });
+    if (onScale !== null) {
+      grid.inside = grid.inside.map(onScale.inverse);
+      grid.beyond = grid.beyond.map(onScale.inverse);
+    }
+    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond) });
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
@@ -468,6 +476,23 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
   return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+}
+
+/** The transformed scale every term reading input c shares, or null (no transform, or different ones). */
+function inputScaleOf(design: Design, c: number): NonNullable<Term['inputScale']> | null {
+  const name = design.inputs[c];
+  const readers = design.terms.filter((t) => t.inputs.includes(name));
+  const first = readers[0]?.inputScale;
+  if (first === undefined || !readers.every((t) => t.inputScale?.name === first.name)) return null;
+  return first;
+}
+
+/** The margin points every term reading input c is defined at (e.g. no x <= 0 under `transform: log`). */
+function admitted(design: Design, c: number, points: Float64Array): Float64Array {
+  const name = design.inputs[c];
+  const checks = design.terms.filter((t) => t.admits !== undefined && t.inputs.includes(name));
+  if (checks.length === 0) return points;
+  return points.filter((v) => checks.every((t) => t.admits?.(name, v) ?? true));
 }
 
 /**

@@ -66,6 +66,10 @@ function applyInto(transform: InputTransform, x: Float64Array, m: number, shift:
   else for (let i = 0; i < m; i++) out[i] = (x[i] - shift) / scale;
 }
 
+/** The increasing maps of the transforms that have a fixed form, and their inverses (x = expm1(t) for log1p...). */
+const FORWARD: Record<'log' | 'log1p' | 'sqrt', (v: number) => number> = { log: Math.log, log1p: Math.log1p, sqrt: Math.sqrt };
+const INVERSE: Record<'log' | 'log1p' | 'sqrt', (v: number) => number> = { log: Math.exp, log1p: Math.expm1, sqrt: (v) => (v > 0 ? v * v : 0) };
+
 /** The input's name as the inner term sees it, e.g. `log(dose)`. */
 function renamed(transform: InputTransform, name: string): string {
   return transform === 'standardise' ? `std(${name})` : `${transform}(${name})`;
@@ -107,6 +111,8 @@ export function transformedTerm(spec: Exclude<TermSpec, { kind: 'linear' }>, tra
     inputs,
     columnNames: inner.columnNames,
     fixed: { ...inner.fixed, ...(transform === 'standardise' ? { transform_shift: shift, transform_scale: scale } : {}) },
+    ...(transform === 'standardise' ? {} : { inputScale: { name: transform, forward: FORWARD[transform], inverse: INVERSE[transform] } }),
+    admits: (name, value) => !inputs.includes(name) || inTransformDomain(transform, value),
     fill(blockInputs, m, out, offset) {
       if (scratch.length !== blockInputs.length || scratch[0].length < m) scratch = blockInputs.map(() => new Float64Array(m));
       const views = blockInputs.map((x, k) => {
