@@ -28,7 +28,8 @@ const check: Check = {
     the rows, every row used.
   - else the polynomial term of highest degree (one input or several): degrees 1 .. min(degree + 3, 15)
     (over several inputs only the degrees that build at most 200 columns, and the current one);
-  - else the first radial term: its width times 2^t for t = 4, 3, ..., -2; simplest = widest;
+  - else the first radial term (one input or several): its width times 2^t for t = 4, 3, ..., -2;
+    simplest = widest;
   - else the first spline term: 1 .. current + 4 interior knots (at most 100) at the training
     quantiles (the current setting as written); simplest = fewest;
   - else the first Fourier term: 1 .. harmonics + 3 harmonics (at most 50); simplest = fewest.

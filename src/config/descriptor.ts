@@ -8,7 +8,7 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform } from './types.js';
+import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform, MultiRbfCenters } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -131,12 +131,41 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
   }
   if ('spline' in term) return withTransform(readSpline(doc, file, term.spline, ['terms', index, 'spline'], line), term.spline.transform);
   const r = term.rbf;
-  return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
+  if (Array.isArray(r.of)) return withTransform(readMultiRbf(doc, file, r as RawRbf & { of: string[] }, ['terms', index, 'rbf'], line), r.transform);
+  if (Array.isArray(r.centers) && r.centers.some((c) => typeof c !== 'number')) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
+  }
+  return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers as RawCenters, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
 }
 
 /** The spec with its `transform` when one is written (absent otherwise, so specs without one keep their shape). */
 function withTransform(spec: TermSpec, transform: InputTransform | undefined): TermSpec {
   return transform === undefined ? spec : ({ ...spec, transform } as TermSpec);
+}
+
+function readMultiRbf(doc: YamlDocument, file: string, r: RawRbf & { of: string[] }, at: (string | number)[], line: number): TermSpec {
+  const k = r.of.length;
+  const c = r.centers;
+  const spec = (centers: MultiRbfCenters): TermSpec => ({ kind: 'multi-rbf', of: [...r.of], centers, width: r.width, line });
+  if (c === 'at-samples') return spec({ kind: 'at-samples' });
+  if (Array.isArray(c) && c.every((row) => Array.isArray(row))) {
+    const rows = c as number[][];
+    rows.forEach((row, i) => {
+      if (row.length !== k) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
+    });
+    return spec({ kind: 'rows', rows: rows.map((row) => [...row]) });
+  }
+  if (Array.isArray(c) && c.every((axis) => typeof axis === 'object' && axis !== null && !Array.isArray(axis))) {
+    const axes = c as { from: number; to: number; count: number }[];
+    if (axes.length !== k) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
+    const total = axes.reduce((p, a) => p * a.count, 1);
+    if (total > MAX_RBF_CENTERS) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
+    axes.forEach((a, i) => {
+      if (a.to < a.from) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${showValue(a.to)} is below \`from\` ${showValue(a.from)}; expected from <= to`);
+    });
+    return spec({ kind: 'grid', axes: axes.map((a) => ({ from: a.from, to: a.to, count: a.count })) });
+  }
+  throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
 }
 
 function readMultiPolynomial(doc: YamlDocument, file: string, p: RawPolynomial & { of: string[] }, at: (string | number)[], line: number): TermSpec {
@@ -206,9 +235,11 @@ type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: n
 type RawTerm =
   | { linear: string[] }
   | { polynomial: RawPolynomial }
-  | { rbf: { of: string; centers: RawCenters; width: number; transform?: InputTransform } }
+  | { rbf: RawRbf }
   | { fourier: { of: string; period: number; harmonics: number; transform?: InputTransform } }
   | { spline: RawSpline };
+
+type RawRbf = { of: string | string[]; centers: RawCenters | number[][] | { from: number; to: number; count: number }[]; width: number; transform?: InputTransform };
 
 type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[]; transform?: InputTransform };
 

@@ -141,8 +141,25 @@ export interface MultiPolynomialTermSpec {
   line: number;
 }
 
+/** Centres of a radial term over several inputs, as written (in the inputs' own units). */
+export type MultiRbfCenters = { kind: 'rows'; rows: number[][] } | { kind: 'grid'; axes: { from: number; to: number; count: number }[] } | { kind: 'at-samples' };
+
+/**
+ * `rbf: { of: [a, b, ...], centers, width }`: isotropic Gaussians exp(-||z - z_c||^2 / (2 width^2))
+ * on the standardised inputs z (kind `multi-rbf` once read).
+ */
+export interface MultiRbfTermSpec {
+  kind: 'multi-rbf';
+  of: string[];
+  centers: MultiRbfCenters;
+  width: number;
+  /** Transform of the inputs before the term; absent: none. */
+  transform?: InputTransform;
+  line: number;
+}
+
 /** One entry of a descriptor's `terms` list. */
-export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec;
+export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec | MultiRbfTermSpec;
 
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';

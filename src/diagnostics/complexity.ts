@@ -112,7 +112,7 @@ export function sweepTarget(descriptor: Descriptor, design: Design): { kind: Swe
   design.terms.forEach((t, i) => {
     const spec = t.spec;
     if ((spec.kind === 'polynomial' || spec.kind === 'multi-polynomial') && (poly < 0 || spec.degree > (design.terms[poly].spec as PolynomialTermSpec).degree)) poly = i;
-    if (spec.kind === 'rbf' && rbf < 0) rbf = i;
+    if ((spec.kind === 'rbf' || spec.kind === 'multi-rbf') && rbf < 0) rbf = i;
     if (spec.kind === 'spline' && spline < 0) spline = i;
     if (spec.kind === 'fourier' && fourier < 0) fourier = i;
   });

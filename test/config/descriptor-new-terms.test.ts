@@ -68,3 +68,22 @@ describe('input transforms', () => {
     expect(model.design.inputs).toEqual(['hours']);
   });
 });
+
+describe('radial term over several inputs', () => {
+  it('reads rows, grids and at-samples, and names the centres', async () => {
+    const terms = '  - rbf: { of: [day, hours], centers: [[1, 2], [30, 7]], width: 0.5 }\n  - rbf: { of: [day, hours], centers: [{ from: 0, to: 39, count: 2 }, { from: 0, to: 8, count: 3 }], width: 1 }\n';
+    const d = await load(terms);
+    expect(d.terms[0]).toMatchObject({ kind: 'multi-rbf', of: ['day', 'hours'], centers: { kind: 'rows', rows: [[1, 2], [30, 7]] } });
+    const model = await fitModel(repo(terms), d, defaultSettings());
+    expect(model.design.p).toBe(1 + 2 + 6);
+    expect(model.design.columnNames[1]).toBe('rbf(day, hours; c=(1, 2))');
+  });
+
+  it('a centre row of the wrong length is an error at that row', async () => {
+    await expect(load('  - rbf: { of: [day, hours], centers: [[1, 2], [3, 4, 5]], width: 0.5 }\n')).rejects.toMatchObject({ code: 'rbf-centers', location: { line: 8 } });
+  });
+
+  it('rows of centres for one input are an error', async () => {
+    await expect(load('  - rbf: { of: day, centers: [[1, 2]], width: 0.5 }\n')).rejects.toMatchObject({ code: 'rbf-centers' });
+  });
+});

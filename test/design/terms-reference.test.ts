@@ -269,3 +269,42 @@ describe.skipIf(missing !== null)(`input transforms against numpy${skipNote(miss
     });
   }
 });
+
+const MULTI_RBF_SCRIPT = `
+import json, sys, itertools
+import numpy as np
+d = json.load(sys.stdin)
+X = np.column_stack(d['train']); A = np.column_stack(d['at'])
+mu, sd = X.mean(axis=0), X.std(axis=0)
+if d['centers'] == 'at-samples':
+    C = X
+elif d['centers'] == 'grid':
+    C = np.array(list(itertools.product(*[np.linspace(a['from'], a['to'], a['count']) for a in d['axes']])))
+else:
+    C = np.asarray(d['rows'], float)
+Z, ZC = (A - mu) / sd, (C - mu) / sd
+D2 = ((Z[:, None, :] - ZC[None, :, :])**2).sum(axis=2)
+print(json.dumps({'cols': np.exp(-D2 / (2 * d['width']**2)).T.tolist()}))
+`;
+
+describe.skipIf(missing !== null)(`radial term over several inputs against numpy${skipNote(missing)}`, () => {
+  const trainCols = [trainingX(40, 41, 5), trainingX(40, 42, 30)];
+  const atCols = [trainingX(25, 43, 6), trainingX(25, 44, 33)];
+  for (const centers of [
+    { kind: 'rows', rows: [[1, 10], [3, 20], [4.5, 5]] },
+    { kind: 'grid', axes: [{ from: 0, to: 5, count: 4 }, { from: 0, to: 30, count: 3 }] },
+    { kind: 'at-samples' },
+  ] as const) {
+    it(`centres as ${centers.kind}: isotropic Gaussians on the standardised inputs to ${TOLERANCE}`, () => {
+      const spec: TermSpec = { kind: 'multi-rbf', of: ['a', 'b'], centers: JSON.parse(JSON.stringify(centers)), width: 0.7, line: 1 };
+      const term = createTerm(spec, new Map([['a', Float64Array.from(trainCols[0])], ['b', Float64Array.from(trainCols[1])]]), 'm.model.yml');
+      const m = atCols[0].length;
+      const out = new Float64Array(m * term.columnNames.length);
+      term.fill(atCols.map((c) => Float64Array.from(c)), m, out, 0);
+      const ours = term.columnNames.map((_, j) => Array.from(out.subarray(j * m, (j + 1) * m)));
+      const ref = runPythonJson<{ cols: number[][] }>(MULTI_RBF_SCRIPT, { train: trainCols, at: atCols, width: 0.7, centers: centers.kind, ...centers });
+      expect(ours.length).toBe(ref.cols.length);
+      expect(worst(ours, ref.cols)).toBeLessThan(TOLERANCE);
+    });
+  }
+});

@@ -745,9 +745,9 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate72;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier` or `spline`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}}}};
+const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
 
 function validate74(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1728,9 +1728,13 @@ errors++;
 }
 if(data11.of !== undefined){
 let data12 = data11.of;
+const _errs40 = errors;
+let valid16 = false;
+let passing3 = null;
+const _errs41 = errors;
 if(typeof data12 === "string"){
 if(func1(data12) < 1){
-const err43 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of,data:data12};
+const err43 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of.oneOf[0],data:data12};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -1741,7 +1745,7 @@ errors++;
 }
 }
 else {
-const err44 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.type,parentSchema:schema23.properties.rbf.properties.of,data:data12};
+const err44 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.oneOf[0].type,parentSchema:schema23.properties.rbf.properties.of.oneOf[0],data:data12};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -1750,18 +1754,15 @@ vErrors.push(err44);
 }
 errors++;
 }
+var _valid3 = _errs41 === errors;
+if(_valid3){
+valid16 = true;
+passing3 = 0;
 }
-if(data11.centers !== undefined){
-if(!(validate74(data11.centers, {instancePath:instancePath+"/rbf/centers",parentData:data11,parentDataProperty:"centers",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate74.errors : vErrors.concat(validate74.errors);
-errors = vErrors.length;
-}
-}
-if(data11.width !== undefined){
-let data14 = data11.width;
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 <= 0 || isNaN(data14)){
-const err45 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data14};
+const _errs43 = errors;
+if(Array.isArray(data12)){
+if(data12.length > 10){
+const err45 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -1770,9 +1771,8 @@ vErrors.push(err45);
 }
 errors++;
 }
-}
-else {
-const err46 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data14};
+if(data12.length < 2){
+const err46 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -1781,11 +1781,12 @@ vErrors.push(err46);
 }
 errors++;
 }
-}
-if(data11.transform !== undefined){
-let data15 = data11.transform;
-if(!((((data15 === "log") || (data15 === "log1p")) || (data15 === "sqrt")) || (data15 === "standardise"))){
-const err47 = {instancePath:instancePath+"/rbf/transform",schemaPath:"#/properties/rbf/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.rbf.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.rbf.properties.transform.enum,parentSchema:schema23.properties.rbf.properties.transform,data:data15};
+const len4 = data12.length;
+for(let i5=0; i5<len4; i5++){
+let data13 = data12[i5];
+if(typeof data13 === "string"){
+if(func1(data13) < 1){
+const err47 = {instancePath:instancePath+"/rbf/of/" + i5,schemaPath:"#/properties/rbf/properties/of/oneOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of.oneOf[1].items,data:data13};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -1795,9 +1796,8 @@ vErrors.push(err47);
 errors++;
 }
 }
-}
 else {
-const err48 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data11};
+const err48 = {instancePath:instancePath+"/rbf/of/" + i5,schemaPath:"#/properties/rbf/properties/of/oneOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.oneOf[1].items.type,parentSchema:schema23.properties.rbf.properties.of.oneOf[1].items,data:data13};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -1807,11 +1807,18 @@ vErrors.push(err48);
 errors++;
 }
 }
-if(data.fourier !== undefined){
-let data16 = data.fourier;
-if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
-if(data16.of === undefined){
-const err49 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data16};
+let i6 = data12.length;
+let j1;
+if(i6 > 1){
+const indices1 = {};
+for(;i6--;){
+let item1 = data12[i6];
+if(typeof item1 !== "string"){
+continue;
+}
+if(typeof indices1[item1] == "number"){
+j1 = indices1[item1];
+const err49 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/uniqueItems",keyword:"uniqueItems",params:{i: i6, j: j1},message:"must NOT have duplicate items (items ## "+j1+" and "+i6+" are identical)",schema:true,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -1819,9 +1826,14 @@ else {
 vErrors.push(err49);
 }
 errors++;
+break;
 }
-if(data16.period === undefined){
-const err50 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data16};
+indices1[item1] = i6;
+}
+}
+}
+else {
+const err50 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.of.oneOf[1].type,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -1830,8 +1842,19 @@ vErrors.push(err50);
 }
 errors++;
 }
-if(data16.harmonics === undefined){
-const err51 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data16};
+var _valid3 = _errs43 === errors;
+if(_valid3 && valid16){
+valid16 = false;
+passing3 = [passing3, 1];
+}
+else {
+if(_valid3){
+valid16 = true;
+passing3 = 1;
+}
+}
+if(!valid16){
+const err51 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf",keyword:"oneOf",params:{passingSchemas: passing3},message:"must match exactly one schema in oneOf",schema:schema23.properties.rbf.properties.of.oneOf,parentSchema:schema23.properties.rbf.properties.of,data:data12};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -1840,9 +1863,40 @@ vErrors.push(err51);
 }
 errors++;
 }
-for(const key3 in data16){
-if(!((((key3 === "of") || (key3 === "period")) || (key3 === "harmonics")) || (key3 === "transform"))){
-const err52 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data16};
+else {
+errors = _errs40;
+if(vErrors !== null){
+if(_errs40){
+vErrors.length = _errs40;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data11.centers !== undefined){
+let data14 = data11.centers;
+const _errs48 = errors;
+let valid20 = false;
+let passing4 = null;
+const _errs49 = errors;
+if(!(validate74(data14, {instancePath:instancePath+"/rbf/centers",parentData:data11,parentDataProperty:"centers",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate74.errors : vErrors.concat(validate74.errors);
+errors = vErrors.length;
+}
+else {
+var items4 = validate74.evaluated.items;
+}
+var _valid4 = _errs49 === errors;
+if(_valid4){
+valid20 = true;
+passing4 = 0;
+}
+const _errs50 = errors;
+if(Array.isArray(data14)){
+if(data14.length > 10000){
+const err52 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10000},message:"must NOT have more than 10000 items",schema:10000,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1],data:data14};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -1851,12 +1905,8 @@ vErrors.push(err52);
 }
 errors++;
 }
-}
-if(data16.of !== undefined){
-let data17 = data16.of;
-if(typeof data17 === "string"){
-if(func1(data17) < 1){
-const err53 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data17};
+if(data14.length < 1){
+const err53 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/1/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1],data:data14};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -1865,9 +1915,12 @@ vErrors.push(err53);
 }
 errors++;
 }
-}
-else {
-const err54 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data17};
+const len5 = data14.length;
+for(let i7=0; i7<len5; i7++){
+let data15 = data14[i7];
+if(Array.isArray(data15)){
+if(data15.length > 10){
+const err54 = {instancePath:instancePath+"/rbf/centers/" + i7,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items,data:data15};
 if(vErrors === null){
 vErrors = [err54];
 }
@@ -1876,12 +1929,8 @@ vErrors.push(err54);
 }
 errors++;
 }
-}
-if(data16.period !== undefined){
-let data18 = data16.period;
-if((typeof data18 == "number") && (isFinite(data18))){
-if(data18 <= 0 || isNaN(data18)){
-const err55 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data18};
+if(data15.length < 2){
+const err55 = {instancePath:instancePath+"/rbf/centers/" + i7,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items,data:data15};
 if(vErrors === null){
 vErrors = [err55];
 }
@@ -1890,9 +1939,11 @@ vErrors.push(err55);
 }
 errors++;
 }
-}
-else {
-const err56 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data18};
+const len6 = data15.length;
+for(let i8=0; i8<len6; i8++){
+let data16 = data15[i8];
+if(!((typeof data16 == "number") && (isFinite(data16)))){
+const err56 = {instancePath:instancePath+"/rbf/centers/" + i7+"/" + i8,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.centers.oneOf[1].items.items.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items.items,data:data16};
 if(vErrors === null){
 vErrors = [err56];
 }
@@ -1902,10 +1953,9 @@ vErrors.push(err56);
 errors++;
 }
 }
-if(data16.harmonics !== undefined){
-let data19 = data16.harmonics;
-if(!(((typeof data19 == "number") && (!(data19 % 1) && !isNaN(data19))) && (isFinite(data19)))){
-const err57 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data19};
+}
+else {
+const err57 = {instancePath:instancePath+"/rbf/centers/" + i7,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.centers.oneOf[1].items.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items,data:data15};
 if(vErrors === null){
 vErrors = [err57];
 }
@@ -1914,9 +1964,10 @@ vErrors.push(err57);
 }
 errors++;
 }
-if((typeof data19 == "number") && (isFinite(data19))){
-if(data19 > 50 || isNaN(data19)){
-const err58 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data19};
+}
+}
+else {
+const err58 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.centers.oneOf[1].type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1],data:data14};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -1925,8 +1976,23 @@ vErrors.push(err58);
 }
 errors++;
 }
-if(data19 < 1 || isNaN(data19)){
-const err59 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data19};
+var _valid4 = _errs50 === errors;
+if(_valid4 && valid20){
+valid20 = false;
+passing4 = [passing4, 1];
+}
+else {
+if(_valid4){
+valid20 = true;
+passing4 = 1;
+if(items4 !== true){
+items4 = true;
+}
+}
+const _errs56 = errors;
+if(Array.isArray(data14)){
+if(data14.length > 10){
+const err59 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2],data:data14};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -1935,12 +2001,8 @@ vErrors.push(err59);
 }
 errors++;
 }
-}
-}
-if(data16.transform !== undefined){
-let data20 = data16.transform;
-if(!((((data20 === "log") || (data20 === "log1p")) || (data20 === "sqrt")) || (data20 === "standardise"))){
-const err60 = {instancePath:instancePath+"/fourier/transform",schemaPath:"#/properties/fourier/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.fourier.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.fourier.properties.transform.enum,parentSchema:schema23.properties.fourier.properties.transform,data:data20};
+if(data14.length < 2){
+const err60 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2],data:data14};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -1949,10 +2011,12 @@ vErrors.push(err60);
 }
 errors++;
 }
-}
-}
-else {
-const err61 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data16};
+const len7 = data14.length;
+for(let i9=0; i9<len7; i9++){
+let data17 = data14[i9];
+if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
+if(data17.from === undefined){
+const err61 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.required,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -1961,12 +2025,8 @@ vErrors.push(err61);
 }
 errors++;
 }
-}
-if(data.spline !== undefined){
-let data21 = data.spline;
-if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
-if(data21.of === undefined){
-const err62 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data21};
+if(data17.to === undefined){
+const err62 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.required,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -1975,8 +2035,8 @@ vErrors.push(err62);
 }
 errors++;
 }
-if(data21.knots === undefined){
-const err63 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data21};
+if(data17.count === undefined){
+const err63 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.required,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -1985,9 +2045,9 @@ vErrors.push(err63);
 }
 errors++;
 }
-for(const key4 in data21){
-if(!(((((key4 === "of") || (key4 === "knots")) || (key4 === "degree")) || (key4 === "natural")) || (key4 === "transform"))){
-const err64 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data21};
+for(const key3 in data17){
+if(!(((key3 === "from") || (key3 === "to")) || (key3 === "count"))){
+const err64 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
 if(vErrors === null){
 vErrors = [err64];
 }
@@ -1997,11 +2057,10 @@ vErrors.push(err64);
 errors++;
 }
 }
-if(data21.of !== undefined){
-let data22 = data21.of;
-if(typeof data22 === "string"){
-if(func1(data22) < 1){
-const err65 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data22};
+if(data17.from !== undefined){
+let data18 = data17.from;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+const err65 = {instancePath:instancePath+"/rbf/centers/" + i9+"/from",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from,data:data18};
 if(vErrors === null){
 vErrors = [err65];
 }
@@ -2011,8 +2070,10 @@ vErrors.push(err65);
 errors++;
 }
 }
-else {
-const err66 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data22};
+if(data17.to !== undefined){
+let data19 = data17.to;
+if(!((typeof data19 == "number") && (isFinite(data19)))){
+const err66 = {instancePath:instancePath+"/rbf/centers/" + i9+"/to",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to,data:data19};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -2022,15 +2083,10 @@ vErrors.push(err66);
 errors++;
 }
 }
-if(data21.knots !== undefined){
-let data23 = data21.knots;
-const _errs61 = errors;
-let valid18 = false;
-let passing3 = null;
-const _errs62 = errors;
-if(Array.isArray(data23)){
-if(data23.length > 100){
-const err67 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data23};
+if(data17.count !== undefined){
+let data20 = data17.count;
+if(!(((typeof data20 == "number") && (!(data20 % 1) && !isNaN(data20))) && (isFinite(data20)))){
+const err67 = {instancePath:instancePath+"/rbf/centers/" + i9+"/count",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count,data:data20};
 if(vErrors === null){
 vErrors = [err67];
 }
@@ -2039,8 +2095,9 @@ vErrors.push(err67);
 }
 errors++;
 }
-if(data23.length < 1){
-const err68 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data23};
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 > 100 || isNaN(data20)){
+const err68 = {instancePath:instancePath+"/rbf/centers/" + i9+"/count",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count,data:data20};
 if(vErrors === null){
 vErrors = [err68];
 }
@@ -2049,11 +2106,8 @@ vErrors.push(err68);
 }
 errors++;
 }
-const len4 = data23.length;
-for(let i5=0; i5<len4; i5++){
-let data24 = data23[i5];
-if(!((typeof data24 == "number") && (isFinite(data24)))){
-const err69 = {instancePath:instancePath+"/spline/knots/" + i5,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data24};
+if(data20 < 1 || isNaN(data20)){
+const err69 = {instancePath:instancePath+"/rbf/centers/" + i9+"/count",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count,data:data20};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -2064,8 +2118,9 @@ errors++;
 }
 }
 }
+}
 else {
-const err70 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data23};
+const err70 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -2074,15 +2129,10 @@ vErrors.push(err70);
 }
 errors++;
 }
-var _valid3 = _errs62 === errors;
-if(_valid3){
-valid18 = true;
-passing3 = 0;
 }
-const _errs66 = errors;
-if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
-if(data23.count === undefined){
-const err71 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data23};
+}
+else {
+const err71 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.centers.oneOf[2].type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2],data:data14};
 if(vErrors === null){
 vErrors = [err71];
 }
@@ -2091,9 +2141,23 @@ vErrors.push(err71);
 }
 errors++;
 }
-for(const key5 in data23){
-if(!(key5 === "count")){
-const err72 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data23};
+var _valid4 = _errs56 === errors;
+if(_valid4 && valid20){
+valid20 = false;
+passing4 = [passing4, 2];
+}
+else {
+if(_valid4){
+valid20 = true;
+passing4 = 2;
+if(items4 !== true){
+items4 = true;
+}
+}
+}
+}
+if(!valid20){
+const err72 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf",keyword:"oneOf",params:{passingSchemas: passing4},message:"must match exactly one schema in oneOf",schema:schema23.properties.rbf.properties.centers.oneOf,parentSchema:schema23.properties.rbf.properties.centers,data:data14};
 if(vErrors === null){
 vErrors = [err72];
 }
@@ -2102,11 +2166,23 @@ vErrors.push(err72);
 }
 errors++;
 }
+else {
+errors = _errs48;
+if(vErrors !== null){
+if(_errs48){
+vErrors.length = _errs48;
 }
-if(data23.count !== undefined){
-let data25 = data23.count;
-if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
-const err73 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data25};
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data11.width !== undefined){
+let data21 = data11.width;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 <= 0 || isNaN(data21)){
+const err73 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data21};
 if(vErrors === null){
 vErrors = [err73];
 }
@@ -2115,9 +2191,9 @@ vErrors.push(err73);
 }
 errors++;
 }
-if((typeof data25 == "number") && (isFinite(data25))){
-if(data25 > 100 || isNaN(data25)){
-const err74 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data25};
+}
+else {
+const err74 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data21};
 if(vErrors === null){
 vErrors = [err74];
 }
@@ -2126,8 +2202,11 @@ vErrors.push(err74);
 }
 errors++;
 }
-if(data25 < 1 || isNaN(data25)){
-const err75 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data25};
+}
+if(data11.transform !== undefined){
+let data22 = data11.transform;
+if(!((((data22 === "log") || (data22 === "log1p")) || (data22 === "sqrt")) || (data22 === "standardise"))){
+const err75 = {instancePath:instancePath+"/rbf/transform",schemaPath:"#/properties/rbf/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.rbf.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.rbf.properties.transform.enum,parentSchema:schema23.properties.rbf.properties.transform,data:data22};
 if(vErrors === null){
 vErrors = [err75];
 }
@@ -2138,9 +2217,8 @@ errors++;
 }
 }
 }
-}
 else {
-const err76 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data23};
+const err76 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data11};
 if(vErrors === null){
 vErrors = [err76];
 }
@@ -2149,19 +2227,12 @@ vErrors.push(err76);
 }
 errors++;
 }
-var _valid3 = _errs66 === errors;
-if(_valid3 && valid18){
-valid18 = false;
-passing3 = [passing3, 1];
 }
-else {
-if(_valid3){
-valid18 = true;
-passing3 = 1;
-}
-}
-if(!valid18){
-const err77 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing3},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data23};
+if(data.fourier !== undefined){
+let data23 = data.fourier;
+if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
+if(data23.of === undefined){
+const err77 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data23};
 if(vErrors === null){
 vErrors = [err77];
 }
@@ -2170,22 +2241,8 @@ vErrors.push(err77);
 }
 errors++;
 }
-else {
-errors = _errs61;
-if(vErrors !== null){
-if(_errs61){
-vErrors.length = _errs61;
-}
-else {
-vErrors = null;
-}
-}
-}
-}
-if(data21.degree !== undefined){
-let data26 = data21.degree;
-if(!(((typeof data26 == "number") && (!(data26 % 1) && !isNaN(data26))) && (isFinite(data26)))){
-const err78 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data26};
+if(data23.period === undefined){
+const err78 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data23};
 if(vErrors === null){
 vErrors = [err78];
 }
@@ -2194,9 +2251,8 @@ vErrors.push(err78);
 }
 errors++;
 }
-if((typeof data26 == "number") && (isFinite(data26))){
-if(data26 > 5 || isNaN(data26)){
-const err79 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data26};
+if(data23.harmonics === undefined){
+const err79 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data23};
 if(vErrors === null){
 vErrors = [err79];
 }
@@ -2205,8 +2261,9 @@ vErrors.push(err79);
 }
 errors++;
 }
-if(data26 < 1 || isNaN(data26)){
-const err80 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data26};
+for(const key4 in data23){
+if(!((((key4 === "of") || (key4 === "period")) || (key4 === "harmonics")) || (key4 === "transform"))){
+const err80 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data23};
 if(vErrors === null){
 vErrors = [err80];
 }
@@ -2216,11 +2273,11 @@ vErrors.push(err80);
 errors++;
 }
 }
-}
-if(data21.natural !== undefined){
-let data27 = data21.natural;
-if(typeof data27 !== "boolean"){
-const err81 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data27};
+if(data23.of !== undefined){
+let data24 = data23.of;
+if(typeof data24 === "string"){
+if(func1(data24) < 1){
+const err81 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data24};
 if(vErrors === null){
 vErrors = [err81];
 }
@@ -2230,10 +2287,8 @@ vErrors.push(err81);
 errors++;
 }
 }
-if(data21.transform !== undefined){
-let data28 = data21.transform;
-if(!((((data28 === "log") || (data28 === "log1p")) || (data28 === "sqrt")) || (data28 === "standardise"))){
-const err82 = {instancePath:instancePath+"/spline/transform",schemaPath:"#/properties/spline/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.spline.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.spline.properties.transform.enum,parentSchema:schema23.properties.spline.properties.transform,data:data28};
+else {
+const err82 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data24};
 if(vErrors === null){
 vErrors = [err82];
 }
@@ -2243,9 +2298,11 @@ vErrors.push(err82);
 errors++;
 }
 }
-}
-else {
-const err83 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data21};
+if(data23.period !== undefined){
+let data25 = data23.period;
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 <= 0 || isNaN(data25)){
+const err83 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data25};
 if(vErrors === null){
 vErrors = [err83];
 }
@@ -2255,14 +2312,378 @@ vErrors.push(err83);
 errors++;
 }
 }
-}
 else {
-const err84 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+const err84 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data25};
 if(vErrors === null){
 vErrors = [err84];
 }
 else {
 vErrors.push(err84);
+}
+errors++;
+}
+}
+if(data23.harmonics !== undefined){
+let data26 = data23.harmonics;
+if(!(((typeof data26 == "number") && (!(data26 % 1) && !isNaN(data26))) && (isFinite(data26)))){
+const err85 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data26};
+if(vErrors === null){
+vErrors = [err85];
+}
+else {
+vErrors.push(err85);
+}
+errors++;
+}
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 > 50 || isNaN(data26)){
+const err86 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data26};
+if(vErrors === null){
+vErrors = [err86];
+}
+else {
+vErrors.push(err86);
+}
+errors++;
+}
+if(data26 < 1 || isNaN(data26)){
+const err87 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data26};
+if(vErrors === null){
+vErrors = [err87];
+}
+else {
+vErrors.push(err87);
+}
+errors++;
+}
+}
+}
+if(data23.transform !== undefined){
+let data27 = data23.transform;
+if(!((((data27 === "log") || (data27 === "log1p")) || (data27 === "sqrt")) || (data27 === "standardise"))){
+const err88 = {instancePath:instancePath+"/fourier/transform",schemaPath:"#/properties/fourier/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.fourier.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.fourier.properties.transform.enum,parentSchema:schema23.properties.fourier.properties.transform,data:data27};
+if(vErrors === null){
+vErrors = [err88];
+}
+else {
+vErrors.push(err88);
+}
+errors++;
+}
+}
+}
+else {
+const err89 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data23};
+if(vErrors === null){
+vErrors = [err89];
+}
+else {
+vErrors.push(err89);
+}
+errors++;
+}
+}
+if(data.spline !== undefined){
+let data28 = data.spline;
+if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
+if(data28.of === undefined){
+const err90 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err90];
+}
+else {
+vErrors.push(err90);
+}
+errors++;
+}
+if(data28.knots === undefined){
+const err91 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err91];
+}
+else {
+vErrors.push(err91);
+}
+errors++;
+}
+for(const key5 in data28){
+if(!(((((key5 === "of") || (key5 === "knots")) || (key5 === "degree")) || (key5 === "natural")) || (key5 === "transform"))){
+const err92 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err92];
+}
+else {
+vErrors.push(err92);
+}
+errors++;
+}
+}
+if(data28.of !== undefined){
+let data29 = data28.of;
+if(typeof data29 === "string"){
+if(func1(data29) < 1){
+const err93 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data29};
+if(vErrors === null){
+vErrors = [err93];
+}
+else {
+vErrors.push(err93);
+}
+errors++;
+}
+}
+else {
+const err94 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data29};
+if(vErrors === null){
+vErrors = [err94];
+}
+else {
+vErrors.push(err94);
+}
+errors++;
+}
+}
+if(data28.knots !== undefined){
+let data30 = data28.knots;
+const _errs86 = errors;
+let valid30 = false;
+let passing5 = null;
+const _errs87 = errors;
+if(Array.isArray(data30)){
+if(data30.length > 100){
+const err95 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data30};
+if(vErrors === null){
+vErrors = [err95];
+}
+else {
+vErrors.push(err95);
+}
+errors++;
+}
+if(data30.length < 1){
+const err96 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data30};
+if(vErrors === null){
+vErrors = [err96];
+}
+else {
+vErrors.push(err96);
+}
+errors++;
+}
+const len8 = data30.length;
+for(let i10=0; i10<len8; i10++){
+let data31 = data30[i10];
+if(!((typeof data31 == "number") && (isFinite(data31)))){
+const err97 = {instancePath:instancePath+"/spline/knots/" + i10,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data31};
+if(vErrors === null){
+vErrors = [err97];
+}
+else {
+vErrors.push(err97);
+}
+errors++;
+}
+}
+}
+else {
+const err98 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data30};
+if(vErrors === null){
+vErrors = [err98];
+}
+else {
+vErrors.push(err98);
+}
+errors++;
+}
+var _valid5 = _errs87 === errors;
+if(_valid5){
+valid30 = true;
+passing5 = 0;
+}
+const _errs91 = errors;
+if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
+if(data30.count === undefined){
+const err99 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data30};
+if(vErrors === null){
+vErrors = [err99];
+}
+else {
+vErrors.push(err99);
+}
+errors++;
+}
+for(const key6 in data30){
+if(!(key6 === "count")){
+const err100 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data30};
+if(vErrors === null){
+vErrors = [err100];
+}
+else {
+vErrors.push(err100);
+}
+errors++;
+}
+}
+if(data30.count !== undefined){
+let data32 = data30.count;
+if(!(((typeof data32 == "number") && (!(data32 % 1) && !isNaN(data32))) && (isFinite(data32)))){
+const err101 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data32};
+if(vErrors === null){
+vErrors = [err101];
+}
+else {
+vErrors.push(err101);
+}
+errors++;
+}
+if((typeof data32 == "number") && (isFinite(data32))){
+if(data32 > 100 || isNaN(data32)){
+const err102 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data32};
+if(vErrors === null){
+vErrors = [err102];
+}
+else {
+vErrors.push(err102);
+}
+errors++;
+}
+if(data32 < 1 || isNaN(data32)){
+const err103 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data32};
+if(vErrors === null){
+vErrors = [err103];
+}
+else {
+vErrors.push(err103);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err104 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data30};
+if(vErrors === null){
+vErrors = [err104];
+}
+else {
+vErrors.push(err104);
+}
+errors++;
+}
+var _valid5 = _errs91 === errors;
+if(_valid5 && valid30){
+valid30 = false;
+passing5 = [passing5, 1];
+}
+else {
+if(_valid5){
+valid30 = true;
+passing5 = 1;
+}
+}
+if(!valid30){
+const err105 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing5},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data30};
+if(vErrors === null){
+vErrors = [err105];
+}
+else {
+vErrors.push(err105);
+}
+errors++;
+}
+else {
+errors = _errs86;
+if(vErrors !== null){
+if(_errs86){
+vErrors.length = _errs86;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data28.degree !== undefined){
+let data33 = data28.degree;
+if(!(((typeof data33 == "number") && (!(data33 % 1) && !isNaN(data33))) && (isFinite(data33)))){
+const err106 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data33};
+if(vErrors === null){
+vErrors = [err106];
+}
+else {
+vErrors.push(err106);
+}
+errors++;
+}
+if((typeof data33 == "number") && (isFinite(data33))){
+if(data33 > 5 || isNaN(data33)){
+const err107 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data33};
+if(vErrors === null){
+vErrors = [err107];
+}
+else {
+vErrors.push(err107);
+}
+errors++;
+}
+if(data33 < 1 || isNaN(data33)){
+const err108 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data33};
+if(vErrors === null){
+vErrors = [err108];
+}
+else {
+vErrors.push(err108);
+}
+errors++;
+}
+}
+}
+if(data28.natural !== undefined){
+let data34 = data28.natural;
+if(typeof data34 !== "boolean"){
+const err109 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data34};
+if(vErrors === null){
+vErrors = [err109];
+}
+else {
+vErrors.push(err109);
+}
+errors++;
+}
+}
+if(data28.transform !== undefined){
+let data35 = data28.transform;
+if(!((((data35 === "log") || (data35 === "log1p")) || (data35 === "sqrt")) || (data35 === "standardise"))){
+const err110 = {instancePath:instancePath+"/spline/transform",schemaPath:"#/properties/spline/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.spline.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.spline.properties.transform.enum,parentSchema:schema23.properties.spline.properties.transform,data:data35};
+if(vErrors === null){
+vErrors = [err110];
+}
+else {
+vErrors.push(err110);
+}
+errors++;
+}
+}
+}
+else {
+const err111 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err111];
+}
+else {
+vErrors.push(err111);
+}
+errors++;
+}
+}
+}
+else {
+const err112 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(vErrors === null){
+vErrors = [err112];
+}
+else {
+vErrors.push(err112);
 }
 errors++;
 }

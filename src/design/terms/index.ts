@@ -7,6 +7,7 @@ import type { TermSpec } from '../../config/types.js';
 import { fourierTerm } from './fourier.js';
 import { linearTerm } from './linear.js';
 import { multiPolynomialTerm } from './multi-polynomial.js';
+import { multiRbfTerm } from './multi-rbf.js';
 import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
 import { splineTerm } from './spline.js';
@@ -18,7 +19,7 @@ export type { Term, TrainingColumns } from './types.js';
 /** Every input column a term reads (without duplicates, in first-use order). */
 export function termInputs(spec: TermSpec): string[] {
   if (spec.kind === 'linear') return [...new Set(spec.columns)];
-  return spec.kind === 'multi-polynomial' ? [...spec.of] : [spec.of];
+  return spec.kind === 'multi-polynomial' || spec.kind === 'multi-rbf' ? [...spec.of] : [spec.of];
 }
 
 /**
@@ -44,5 +45,7 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
       return splineTerm(spec, training, file);
     case 'multi-polynomial':
       return multiPolynomialTerm(spec, training, file);
+    case 'multi-rbf':
+      return multiRbfTerm(spec, training, file);
   }
 }

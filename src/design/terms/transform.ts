@@ -78,7 +78,7 @@ function renamed(transform: InputTransform, name: string): string {
 /** The spec with its inputs renamed to their transformed names (and without `transform`). */
 function innerSpec(spec: Exclude<TermSpec, { kind: 'linear' }>, transform: InputTransform): TermSpec {
   const { transform: _dropped, ...rest } = spec;
-  if (rest.kind === 'multi-polynomial') return { ...rest, of: rest.of.map((n) => renamed(transform, n)) };
+  if (rest.kind === 'multi-polynomial' || rest.kind === 'multi-rbf') return { ...rest, of: rest.of.map((n) => renamed(transform, n)) } as TermSpec;
   return { ...rest, of: renamed(transform, rest.of) } as TermSpec;
 }
 
