@@ -129,6 +129,10 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
     const f = term.fourier;
     return withTransform({ kind: 'fourier', of: f.of, period: f.period, harmonics: f.harmonics, line }, f.transform);
   }
+  if ('category' in term) {
+    const c = term.category;
+    return { kind: 'category', of: c.of, reference: c.reference === undefined ? null : String(c.reference), unseen: c.unseen ?? 'error', line };
+  }
   if ('spline' in term) return withTransform(readSpline(doc, file, term.spline, ['terms', index, 'spline'], line), term.spline.transform);
   const r = term.rbf;
   if (Array.isArray(r.of)) return withTransform(readMultiRbf(doc, file, r as RawRbf & { of: string[] }, ['terms', index, 'rbf'], line), r.transform);
@@ -237,7 +241,8 @@ type RawTerm =
   | { polynomial: RawPolynomial }
   | { rbf: RawRbf }
   | { fourier: { of: string; period: number; harmonics: number; transform?: InputTransform } }
-  | { spline: RawSpline };
+  | { spline: RawSpline }
+  | { category: { of: string; reference?: string | number; unseen?: 'error' | 'zero' } };
 
 type RawRbf = { of: string | string[]; centers: RawCenters | number[][] | { from: number; to: number; count: number }[]; width: number; transform?: InputTransform };
 

@@ -158,8 +158,22 @@ export interface MultiRbfTermSpec {
   line: number;
 }
 
+/**
+ * `category: { of, reference?, unseen? }`: one indicator column per training level of a text column
+ * but the reference level (default: the most frequent, ties by text order).
+ */
+export interface CategoryTermSpec {
+  kind: 'category';
+  of: string;
+  /** The reference level; null: the most frequent training level (ties: first in text order). */
+  reference: string | null;
+  /** A hold-out level not seen in training: an error (default), or every indicator 0 (`zero`). */
+  unseen: 'error' | 'zero';
+  line: number;
+}
+
 /** One entry of a descriptor's `terms` list. */
-export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec | MultiRbfTermSpec;
+export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec | MultiRbfTermSpec | CategoryTermSpec;
 
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';

@@ -5,6 +5,8 @@ import type { Descriptor, SettingsFile, Weighting } from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
 import { readTable } from './table.js';
+import { levelCodes, trainingLevels } from './levels.js';
+import { readTextColumns } from './text-columns.js';
 import type { RepoReader } from '../repo/types.js';
 
 /** Training and hold-out columns of one model. */
@@ -13,6 +15,15 @@ export interface ModelTables {
   holdout: ModelData;
   /** Training input columns by name (for fixing term parameters). */
   trainColumns: Map<string, Float64Array>;
+  /** Training levels (text order) of each category column; the columns hold their codes. */
+  levels?: Map<string, string[]>;
+}
+
+/** The category columns of a descriptor with the first category term that reads each. */
+function categoryColumns(descriptor: Descriptor): Map<string, { line: number; unseen: 'error' | 'zero' }> {
+  const out = new Map<string, { line: number; unseen: 'error' | 'zero' }>();
+  for (const t of descriptor.terms) if (t.kind === 'category' && !out.has(t.of)) out.set(t.of, { line: t.line, unseen: t.unseen });
+  return out;
 }
 
 /**
@@ -42,7 +53,11 @@ export async function loadModelData(
       key: `data.${weighting.kind}`,
     });
   }
-  const columns = [...inputs, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
+  // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
+  const categories = categoryColumns(descriptor);
+  const numeric = inputs.filter((c) => !categories.has(c));
+  const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
+  const levels = new Map<string, string[]>();
   const maxBytes = settings.caps.maxFileBytes;
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table;
@@ -57,6 +72,18 @@ export async function loadModelData(
         line,
         key,
       });
+    }
+    if (categories.size > 0) {
+      const text = await readTextColumns(repo, path, [...categories.keys()], maxBytes);
+      if (text.lines.length !== table.rows || text.lines.some((l, i) => l !== table.lines[i])) {
+        throw new InputError('csv-rows', `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: path });
+      }
+      for (const [name, term] of categories) {
+        const values = text.columns.get(name) as string[];
+        if (!levels.has(name)) levels.set(name, trainingLevels(values));
+        const where = { file: path, lines: table.lines, column: name, termLine: term.line, descriptor: descriptor.file };
+        table.columns.set(name, levelCodes(values, levels.get(name) as string[], term.unseen, where));
+      }
     }
     const rows = {
       inputs: inputs.map((c) => table.columns.get(c) as Float64Array),
@@ -79,7 +106,7 @@ export async function loadModelData(
     });
   }
   const { byName: _unused, ...holdoutData } = holdout;
-  return { train: trainData, holdout: holdoutData, trainColumns: byName };
+  return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
 }
 
 /**

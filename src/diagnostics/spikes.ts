@@ -59,6 +59,8 @@ export function measureSpikes(design: Design, train: Rows, coefficients: ArrayLi
   let ratio = Number.NaN;
   let worst: string | null = null;
   design.inputs.forEach((name, c) => {
+    // Category inputs have no order between their levels: no variation along them to compare.
+    if (design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return;
     const grid = inputGrid(train.inputs[c].subarray(0, n)).inside;
     if (grid.length < 2) return;
     const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));

@@ -447,6 +447,12 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const grids: SwingGrid[] = [];
   const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
   for (let c = 0; c < d; c++) {
+    // A category input takes only its level codes: scanned level by level, no margins.
+    const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
+    if (discrete !== undefined) {
+      if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
+      continue;
+    }
     const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
     const sample = scratch.subarray(0, len);
     // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
@@ -472,10 +478,21 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     const flat = scaledRows(train.inputs, rows);
     const kk = Math.min(kNear, s - 1);
     const pairs = nearestPairs(flat, s, d, kk, rows);
-    if (pairs.length > 0 && perSegment > 0) segmentColumns = segmentPoints(train.inputs, pairs, perSegment);
+    if (pairs.length > 0 && perSegment > 0) segmentColumns = admittedRows(design, segmentPoints(train.inputs, pairs, perSegment));
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
   return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+}
+
+/** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
+function admittedRows(design: Design, columns: Float64Array[]): Float64Array[] {
+  const checks = design.terms.filter((t) => t.admits !== undefined);
+  if (checks.length === 0 || columns.length === 0) return columns;
+  const keep: number[] = [];
+  for (let i = 0; i < columns[0].length; i++) {
+    if (checks.every((t) => t.inputs.every((name) => t.admits?.(name, columns[design.inputs.indexOf(name)][i]) ?? true))) keep.push(i);
+  }
+  return columns.map((col) => Float64Array.from(keep, (i) => col[i]));
 }
 
 /** The transformed scale every term reading input c shares, or null (no transform, or different ones). */

@@ -56,7 +56,7 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
   // A transformed input outside its transform's domain is an error naming file, line, column, value.
   for (const spec of descriptor.terms) for (const data of [train, tables.holdout]) checkTransformDomain(spec, termInputs(spec), data, inputs);
   // Fix term parameters from the training rows, then check the size before taking memory.
-  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file));
+  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file, tables.levels));
   const design = createDesign(terms, descriptor.fit.intercept);
   const p = design.p;
   if (p > MAX_PARAMETERS) {

@@ -12,9 +12,10 @@ import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
 import { splineTerm } from './spline.js';
 import { transformedTerm } from './transform.js';
-import type { Term, TrainingColumns } from './types.js';
+import type { Term, TrainingColumns, TrainingLevels } from './types.js';
+import { categoryTerm } from './category.js';
 
-export type { Term, TrainingColumns } from './types.js';
+export type { Term, TrainingColumns, TrainingLevels } from './types.js';
 
 /** Every input column a term reads (without duplicates, in first-use order). */
 export function termInputs(spec: TermSpec): string[] {
@@ -27,9 +28,10 @@ export function termInputs(spec: TermSpec): string[] {
  * @param spec the descriptor entry
  * @param training training columns by name (must hold every input of the term)
  * @param file descriptor path, for errors
+ * @param levels training levels of category columns (needed by `category` terms only)
  */
-export function createTerm(spec: TermSpec, training: TrainingColumns, file: string): Term {
-  if (spec.kind !== 'linear' && spec.transform !== undefined) {
+export function createTerm(spec: TermSpec, training: TrainingColumns, file: string, levels: TrainingLevels = new Map()): Term {
+  if (spec.kind !== 'linear' && spec.kind !== 'category' && spec.transform !== undefined) {
     return transformedTerm(spec, training, file, termInputs(spec), (inner, columns) => createTerm(inner, columns, file));
   }
   switch (spec.kind) {
@@ -47,5 +49,7 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
       return multiPolynomialTerm(spec, training, file);
     case 'multi-rbf':
       return multiRbfTerm(spec, training, file);
+    case 'category':
+      return categoryTerm(spec, training, levels.get(spec.of) ?? [], file);
   }
 }

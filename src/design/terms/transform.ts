@@ -38,7 +38,7 @@ const DOMAIN: Record<InputTransform, string> = { log: 'a value above 0', log1p: 
  * @param order input names of `data.inputs`
  */
 export function checkTransformDomain(spec: TermSpec, inputs: readonly string[], data: Pick<ModelData, 'inputs' | 'rows' | 'lines' | 'file'>, order: readonly string[]): void {
-  const transform = spec.kind === 'linear' ? undefined : spec.transform;
+  const transform = spec.kind === 'linear' || spec.kind === 'category' ? undefined : spec.transform;
   if (transform === undefined || transform === 'standardise') return;
   for (const name of inputs) {
     const col = data.inputs[order.indexOf(name)];
@@ -76,7 +76,7 @@ function renamed(transform: InputTransform, name: string): string {
 }
 
 /** The spec with its inputs renamed to their transformed names (and without `transform`). */
-function innerSpec(spec: Exclude<TermSpec, { kind: 'linear' }>, transform: InputTransform): TermSpec {
+function innerSpec(spec: Exclude<TermSpec, { kind: 'linear' } | { kind: 'category' }>, transform: InputTransform): TermSpec {
   const { transform: _dropped, ...rest } = spec;
   if (rest.kind === 'multi-polynomial' || rest.kind === 'multi-rbf') return { ...rest, of: rest.of.map((n) => renamed(transform, n)) } as TermSpec;
   return { ...rest, of: renamed(transform, rest.of) } as TermSpec;
@@ -87,7 +87,7 @@ function innerSpec(spec: Exclude<TermSpec, { kind: 'linear' }>, transform: Input
  * transformed training columns; the returned term reads the real inputs and transforms each block.
  * @throws InputError `constant-input` for `standardise` of a constant column
  */
-export function transformedTerm(spec: Exclude<TermSpec, { kind: 'linear' }>, training: TrainingColumns, file: string, inputs: readonly string[], build: (inner: TermSpec, columns: TrainingColumns) => Term): Term {
+export function transformedTerm(spec: Exclude<TermSpec, { kind: 'linear' } | { kind: 'category' }>, training: TrainingColumns, file: string, inputs: readonly string[], build: (inner: TermSpec, columns: TrainingColumns) => Term): Term {
   const transform = spec.transform as InputTransform;
   const shift: number[] = [];
   const scale: number[] = [];

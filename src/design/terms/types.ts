@@ -32,8 +32,13 @@ export interface Term {
    * and the increasing map and its inverse. Scans of an input that every term reads on the same
    * scale are laid out on that scale (even steps in log x, margins of 10 % of the log range).
    */
+  /** The only values its (single) input takes, for a category's level codes: scans use exactly these. */
+  discreteValues?: readonly number[];
   inputScale?: { name: string; forward(value: number): number; inverse(value: number): number };
 }
 
 /** Training columns by name, used to fix data-dependent parameters. */
 export type TrainingColumns = ReadonlyMap<string, Float64Array>;
+
+/** Training levels (text order) of each category column, by name; their codes are the columns' values. */
+export type TrainingLevels = ReadonlyMap<string, readonly string[]>;
