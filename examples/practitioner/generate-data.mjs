@@ -21,7 +21,7 @@ function normal(u) {
 }
 
 function write(name, header, rows) {
-  const text = [header.join(','), ...rows.map((r) => r.map((v) => Number(v.toPrecision(6))).join(','))].join('\n');
+  const text = [header.join(','), ...rows.map((r) => r.map((v) => (typeof v === 'number' ? Number(v.toPrecision(6)) : v)).join(','))].join('\n');
   writeFileSync(`${here}data/${name}`, `${text}\n`);
 }
 
@@ -50,13 +50,16 @@ function split(n, make) {
 {
   const u = uniform(201);
   const e = normal(uniform(202));
+  const promos = ['none', 'none', 'flyer', 'radio'];
+  const lift = { none: 0, flyer: 9, radio: 16 };
   const [tr, ho] = split(280, (i) => {
     const price = 4 + 2 * u();
+    const promo = promos[Math.floor(u() * 4)];
     const week = 30 * Math.sin((2 * Math.PI * i) / 7) + 12 * Math.cos((4 * Math.PI * i) / 7);
-    return [i, price, 180 + week - 14 * price + 0.05 * i + 4 * e()];
+    return [i, price, promo, 180 + week - 14 * price + lift[promo] + 0.05 * i + 4 * e()];
   });
-  write('shop-train.csv', ['day', 'price_eur', 'bottles'], tr);
-  write('shop-holdout.csv', ['day', 'price_eur', 'bottles'], ho);
+  write('shop-train.csv', ['day', 'price_eur', 'promotion', 'bottles'], tr);
+  write('shop-holdout.csv', ['day', 'price_eur', 'promotion', 'bottles'], ho);
 }
 
 // yeast-dose: fermentation rate against yeast nutrient dose, logarithmic over two decades.

@@ -24,6 +24,7 @@ describe('examples/practitioner', () => {
     expect(byName.get('cellar-sensor')?.columns).toEqual(['(intercept)', 'z(temp_c)', 'z(rh_pct)', 'z(temp_c)^2', 'z(temp_c)*z(rh_pct)', 'z(rh_pct)^2']);
     expect(byName.get('yeast-dose')?.columns).toEqual(['(intercept)', 'z(log(dose_g_hl))', 'z(log(dose_g_hl))^2']);
     expect(byName.get('shop-demand')?.checks.find((c) => c.id === 'holdout-rmse')?.status).toBe('pass');
+    expect(byName.get('shop-demand')?.columns.slice(-2)).toEqual(['promotion=flyer', 'promotion=radio']);
     const chi = byName.get('refractometer')?.checks.find((c) => c.id === 'chi-square');
     expect(chi?.status, chi?.message).toBe('pass');
     // The log-scale input is scanned on its own scale: every point above 0, margins in log units.
