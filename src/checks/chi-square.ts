@@ -24,7 +24,8 @@ const check: Check = {
 - The same sum over the hold-out rows divided by their count (no parameter was fitted to them) is
   reported as metric \`holdout_chi_square\`; the training figure as \`train_chi_square\`. Detail:
   \`dof\`, \`holdout_rows\`.`,
-  advice: 'Far below 1: simplify the model (it fits the noise) or check that the sigmas are not overstated; far above 1: the model misses structure or the sigmas are understated.',
+  advice:
+    'Far below 1: simplify the model (it fits the noise) or check that the sigmas are not overstated; far above 1: the model misses structure or the sigmas are understated.',
   line: (d) => (d.data.weighting?.kind === 'sigma' ? d.data.weighting.line : d.data.lines.target),
   measure({ train, holdout, predictions, design }) {
     if (train.sigma === undefined || holdout.sigma === undefined) {
@@ -34,7 +35,11 @@ const check: Check = {
     const value = reducedChiSquare(train.y, predictions.train, train.sigma, train.rows, dof);
     const held = reducedChiSquare(holdout.y, predictions.holdout, holdout.sigma, holdout.rows, holdout.rows);
     if (Number.isNaN(value)) {
-      return { value: null, reason: 'not-applicable', message: `${train.rows} training rows for ${design.p} parameters leave no degrees of freedom for a reduced chi-square` };
+      return {
+        value: null,
+        reason: 'not-applicable',
+        message: `${train.rows} training rows for ${design.p} parameters leave no degrees of freedom for a reduced chi-square`,
+      };
     }
     return {
       value,

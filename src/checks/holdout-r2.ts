@@ -18,7 +18,8 @@ const check: Check = {
   It can be negative: a model worse than the hold-out mean. Skipped when the hold-out target is
   constant (SST = 0). Unlike the ratio checks this is an absolute figure: it says how good the model
   is, not whether it overfits. Metric \`holdout_r2\`.`,
-  advice: 'The model explains too little of the hold-out variation: add the inputs or terms it is missing, or lower the floor if the data cannot support it.',
+  advice:
+    'The model explains too little of the hold-out variation: add the inputs or terms it is missing, or lower the floor if the data cannot support it.',
   line: (d) => d.fit.line,
   measure({ metrics }) {
     if (Number.isNaN(metrics.holdoutR2)) {

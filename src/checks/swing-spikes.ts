@@ -30,12 +30,17 @@ const check: Check = {
 - Metric \`swing_spikes\`. Detail: \`worst\` (the input) and \`inputs\`:
   \`[{ input, curve_variation, data_variation, ratio }]\`. The swing curves in the \`swing\` outcome show
   the spikes.`,
-  advice: 'Widen or thin the radial centres, lower the degree or the knot count, or add a ridge penalty, so that the curve stops jumping to each sample.',
+  advice:
+    'Widen or thin the radial centres, lower the degree or the knot count, or add a ridge penalty, so that the curve stops jumping to each sample.',
   line: (d) => d.termsLine,
   measure(context) {
     const spikes = measureSpikes(context.design, context.train, context.fit.coefficients);
     if (Number.isNaN(spikes.ratio)) {
-      return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values with different mean targets, so there is no variation to compare with' };
+      return {
+        value: null,
+        reason: 'not-applicable',
+        message: 'no input has two distinct training values with different mean targets, so there is no variation to compare with',
+      };
     }
     const worst = spikes.perInput.find((s) => s.input === spikes.worst);
     const term = context.design.terms.find((t) => context.design.inputs.length === 1 && t.inputs.includes(spikes.worst ?? ''));
@@ -44,7 +49,15 @@ const check: Check = {
       message: `along \`${spikes.worst}\` the predictions between the samples vary ${formatNumber(spikes.ratio)} times as much as the training targets (total variation ${formatNumber(worst?.curveVariation)} against ${formatNumber(worst?.dataVariation)})`,
       ...(term ? { line: term.spec.line } : {}),
       metrics: { swing_spikes: jsonNumber(spikes.ratio) },
-      detail: jsonRecord({ worst: spikes.worst, inputs: spikes.perInput.map((s) => ({ input: s.input, curve_variation: s.curveVariation, data_variation: s.dataVariation, ratio: s.ratio })) }),
+      detail: jsonRecord({
+        worst: spikes.worst,
+        inputs: spikes.perInput.map((s) => ({
+          input: s.input,
+          curve_variation: s.curveVariation,
+          data_variation: s.dataVariation,
+          ratio: s.ratio,
+        })),
+      }),
     };
   },
 };

@@ -17,7 +17,12 @@ export function trainingLevels(values: readonly string[]): string[] {
  * @param where file, lines and the descriptor line of the term, for the error
  * @throws InputError `unseen-level` at the first unseen level when `unseen` is `error`
  */
-export function levelCodes(values: readonly string[], levels: readonly string[], unseen: 'error' | 'zero', where: { file: string; lines: Int32Array; column: string; termLine: number; descriptor: string }): Float64Array {
+export function levelCodes(
+  values: readonly string[],
+  levels: readonly string[],
+  unseen: 'error' | 'zero',
+  where: { file: string; lines: Int32Array; column: string; termLine: number; descriptor: string },
+): Float64Array {
   const index = new Map(levels.map((l, k) => [l, k]));
   const out = new Float64Array(values.length);
   for (let i = 0; i < values.length; i++) {

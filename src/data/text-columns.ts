@@ -26,16 +26,28 @@ export async function readTextColumns(repo: RepoReader, path: string, names: rea
   const text = new TextDecoder('utf-8').decode(await repo.read(path));
   let records: { record: string[]; info: { lines: number } }[];
   try {
-    records = parse(text, { bom: true, trim: true, info: true, relax_column_count: true, skip_empty_lines: true }) as unknown as { record: string[]; info: { lines: number } }[];
+    records = parse(text, { bom: true, trim: true, info: true, relax_column_count: true, skip_empty_lines: true }) as unknown as {
+      record: string[];
+      info: { lines: number };
+    }[];
   } catch (error) {
-    throw new InputError('csv-syntax', `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`, { file: path });
+    throw new InputError(
+      'csv-syntax',
+      `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`,
+      { file: path },
+    );
   }
   const kept = records.filter((r) => r.record.some((cell) => cell !== ''));
   if (kept.length === 0) throw new InputError('csv-empty', `${path} has no header row`, { file: path });
   const header = kept[0].record;
   const index = names.map((name) => {
     const k = header.indexOf(name);
-    if (k < 0) throw new InputError('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, { file: path, line: kept[0].info.lines, key: name });
+    if (k < 0)
+      throw new InputError('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, {
+        file: path,
+        line: kept[0].info.lines,
+        key: name,
+      });
     return k;
   });
   const rows = kept.slice(1);

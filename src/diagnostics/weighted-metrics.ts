@@ -13,7 +13,12 @@
  */
 
 /** Weighted RMSE, MAE, R^2 and the weighted sum of squared errors (NaN for zero total weight). */
-export function weightedErrorMeasures(y: Float64Array, yhat: Float64Array, w: Float64Array, n: number): { rmse: number; mae: number; r2: number; sse: number } {
+export function weightedErrorMeasures(
+  y: Float64Array,
+  yhat: Float64Array,
+  w: Float64Array,
+  n: number,
+): { rmse: number; mae: number; r2: number; sse: number } {
   const total = weightSum(w, n);
   if (!(total > 0)) return { rmse: Number.NaN, mae: Number.NaN, r2: Number.NaN, sse: 0 };
   const mean = weightedSum(y, w, n) / total;

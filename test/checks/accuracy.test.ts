@@ -18,7 +18,11 @@ const holdoutMean = hx.reduce((s, v, i) => s + 2 * v + hr[i], 0) / 4;
 const sst = hx.reduce((s, v, i) => s + (2 * v + hr[i] - holdoutMean) ** 2, 0);
 
 function context(key: string, spec: LimitSpec, direction: 'above' | 'below') {
-  const d = descriptor({ terms: [{ kind: 'linear', columns: ['x'] }], target: 'y', limits: { ...defaultLimits(), [key]: toLimit(spec, direction, 'descriptor', 40) } });
+  const d = descriptor({
+    terms: [{ kind: 'linear', columns: ['x'] }],
+    target: 'y',
+    limits: { ...defaultLimits(), [key]: toLimit(spec, direction, 'descriptor', 40) },
+  });
   return buildContext(d, train, holdout);
 }
 
@@ -56,8 +60,18 @@ describe('accuracy floors and ceilings (default off)', () => {
   });
 
   it('holdout-r2 is skipped for a constant hold-out target', () => {
-    const flat = table(['x', 'y'], [[1, 2, 3], [5, 5, 5]]);
-    const d = descriptor({ terms: [{ kind: 'linear', columns: ['x'] }], target: 'y', limits: { ...defaultLimits(), holdout_r2: toLimit(0.9, 'below', 'descriptor', 40) } });
+    const flat = table(
+      ['x', 'y'],
+      [
+        [1, 2, 3],
+        [5, 5, 5],
+      ],
+    );
+    const d = descriptor({
+      terms: [{ kind: 'linear', columns: ['x'] }],
+      target: 'y',
+      limits: { ...defaultLimits(), holdout_r2: toLimit(0.9, 'below', 'descriptor', 40) },
+    });
     const { outcome } = runCheck(holdoutR2, buildContext(d, train, flat));
     expect(outcome.status).toBe('skipped');
     expect(outcome.code).toBe('holdout-r2/not-applicable');

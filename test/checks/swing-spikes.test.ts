@@ -12,7 +12,11 @@ const train = table(['x', 'y'], [x, y]);
 
 describe('swing-spikes (default { warn: 1.5, fail: 2 })', () => {
   it('fails the narrow bumps that swing lets through', () => {
-    const d = descriptor({ terms: [{ kind: 'rbf', of: 'x', centers: { kind: 'step', from: 0, to: 100, step: 1 }, width: 1 }], target: 'y', limits: defaultLimits() });
+    const d = descriptor({
+      terms: [{ kind: 'rbf', of: 'x', centers: { kind: 'step', from: 0, to: 100, step: 1 }, width: 1 }],
+      target: 'y',
+      limits: defaultLimits(),
+    });
     const context = buildContext(d, train, train);
     const inBand = runCheck(swing, context).outcome;
     expect(inBand.status, inBand.message).toBe('pass');
@@ -24,7 +28,11 @@ describe('swing-spikes (default { warn: 1.5, fail: 2 })', () => {
   });
 
   it('passes a smooth fit of the same rows', () => {
-    const d = descriptor({ terms: [{ kind: 'spline', of: 'x', knots: { kind: 'count', count: 3 }, degree: 3, natural: true }], target: 'y', limits: defaultLimits() });
+    const d = descriptor({
+      terms: [{ kind: 'spline', of: 'x', knots: { kind: 'count', count: 3 }, degree: 3, natural: true }],
+      target: 'y',
+      limits: defaultLimits(),
+    });
     const { outcome } = runCheck(swingSpikes, buildContext(d, train, train));
     expect(outcome.status, outcome.message).toBe('pass');
     expect(outcome.value as number).toBeLessThan(1.5);
@@ -46,7 +54,11 @@ describe('swing-spikes (default { warn: 1.5, fail: 2 })', () => {
 
   it('keeps the example sugar curve (degree 3) within its limit', () => {
     const t = exampleTable('sugar-train.csv');
-    const d = descriptor({ terms: [{ kind: 'polynomial', of: t.names[0], degree: 3, shift: null, scale: null }], target: t.names[t.names.length - 1], limits: defaultLimits() });
+    const d = descriptor({
+      terms: [{ kind: 'polynomial', of: t.names[0], degree: 3, shift: null, scale: null }],
+      target: t.names[t.names.length - 1],
+      limits: defaultLimits(),
+    });
     const { outcome } = runCheck(swingSpikes, buildContext(d, t, t));
     expect(outcome.status, outcome.message).toBe('pass');
   });

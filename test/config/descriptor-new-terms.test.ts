@@ -20,7 +20,8 @@ async function load(terms: string) {
 
 describe('fourier and spline terms in a descriptor', () => {
   it('reads them with their defaults and fits them', async () => {
-    const terms = '  - fourier: { of: day, period: 7, harmonics: 2 }\n  - spline: { of: hours, knots: { count: 3 } }\n  - spline: { of: hours, knots: [2, 4], natural: true }\n';
+    const terms =
+      '  - fourier: { of: day, period: 7, harmonics: 2 }\n  - spline: { of: hours, knots: { count: 3 } }\n  - spline: { of: hours, knots: [2, 4], natural: true }\n';
     const d = await load(terms);
     expect(d.terms).toEqual([
       { kind: 'fourier', of: 'day', period: 7, harmonics: 2, line: 8 },
@@ -34,17 +35,26 @@ describe('fourier and spline terms in a descriptor', () => {
   });
 
   it('a natural spline of degree 2 is an error at its degree', async () => {
-    await expect(load('  - spline: { of: hours, knots: [2], degree: 2, natural: true }\n')).rejects.toMatchObject({ code: 'spline-settings', location: { line: 8 } });
+    await expect(load('  - spline: { of: hours, knots: [2], degree: 2, natural: true }\n')).rejects.toMatchObject({
+      code: 'spline-settings',
+      location: { line: 8 },
+    });
   });
 
   it('knots out of order are an error at the knot', async () => {
-    await expect(load('  - spline: { of: hours, knots: [4, 2] }\n')).rejects.toMatchObject({ code: 'spline-settings', location: { line: 8 } });
+    await expect(load('  - spline: { of: hours, knots: [4, 2] }\n')).rejects.toMatchObject({
+      code: 'spline-settings',
+      location: { line: 8 },
+    });
   });
 
   it('a knot outside the training range is an error naming the term line', async () => {
     const terms = '  - spline: { of: hours, knots: [50] }\n';
     const d = await load(terms);
-    await expect(fitModel(repo(terms), d, defaultSettings())).rejects.toMatchObject({ code: 'spline-knots', location: { file: 'models/m.model.yml', line: 8 } });
+    await expect(fitModel(repo(terms), d, defaultSettings())).rejects.toMatchObject({
+      code: 'spline-knots',
+      location: { file: 'models/m.model.yml', line: 8 },
+    });
   });
 
   it('a period of 0 is a schema error', async () => {
@@ -58,29 +68,51 @@ describe('input transforms', () => {
     const d = await load(terms);
     expect(d.terms[0]).toMatchObject({ kind: 'polynomial', transform: 'log' });
     // hours is 0 on the first data row (line 2 of d.csv)
-    await expect(fitModel(repo(terms), d, defaultSettings())).rejects.toMatchObject({ code: 'transform-domain', location: { file: 'd.csv', line: 2, key: 'hours' } });
+    await expect(fitModel(repo(terms), d, defaultSettings())).rejects.toMatchObject({
+      code: 'transform-domain',
+      location: { file: 'd.csv', line: 2, key: 'hours' },
+    });
   });
 
   it('log1p accepts 0 and names its columns', async () => {
     const terms = '  - spline: { of: hours, knots: { count: 2 }, natural: true, transform: log1p }\n';
     const model = await fitModel(repo(terms), await load(terms), defaultSettings());
-    expect(model.design.columnNames).toEqual(['(intercept)', 'ns(log1p(hours); u)', expect.stringMatching(/^ns\(log1p\(hours\); knot /), expect.stringMatching(/^ns\(log1p\(hours\); knot /)]);
+    expect(model.design.columnNames).toEqual([
+      '(intercept)',
+      'ns(log1p(hours); u)',
+      expect.stringMatching(/^ns\(log1p\(hours\); knot /),
+      expect.stringMatching(/^ns\(log1p\(hours\); knot /),
+    ]);
     expect(model.design.inputs).toEqual(['hours']);
   });
 });
 
 describe('radial term over several inputs', () => {
   it('reads rows, grids and at-samples, and names the centres', async () => {
-    const terms = '  - rbf: { of: [day, hours], centers: [[1, 2], [30, 7]], width: 0.5 }\n  - rbf: { of: [day, hours], centers: [{ from: 0, to: 39, count: 2 }, { from: 0, to: 8, count: 3 }], width: 1 }\n';
+    const terms =
+      '  - rbf: { of: [day, hours], centers: [[1, 2], [30, 7]], width: 0.5 }\n  - rbf: { of: [day, hours], centers: [{ from: 0, to: 39, count: 2 }, { from: 0, to: 8, count: 3 }], width: 1 }\n';
     const d = await load(terms);
-    expect(d.terms[0]).toMatchObject({ kind: 'multi-rbf', of: ['day', 'hours'], centers: { kind: 'rows', rows: [[1, 2], [30, 7]] } });
+    expect(d.terms[0]).toMatchObject({
+      kind: 'multi-rbf',
+      of: ['day', 'hours'],
+      centers: {
+        kind: 'rows',
+        rows: [
+          [1, 2],
+          [30, 7],
+        ],
+      },
+    });
     const model = await fitModel(repo(terms), d, defaultSettings());
     expect(model.design.p).toBe(1 + 2 + 6);
     expect(model.design.columnNames[1]).toBe('rbf(day, hours; c=(1, 2))');
   });
 
   it('a centre row of the wrong length is an error at that row', async () => {
-    await expect(load('  - rbf: { of: [day, hours], centers: [[1, 2], [3, 4, 5]], width: 0.5 }\n')).rejects.toMatchObject({ code: 'rbf-centers', location: { line: 8 } });
+    await expect(load('  - rbf: { of: [day, hours], centers: [[1, 2], [3, 4, 5]], width: 0.5 }\n')).rejects.toMatchObject({
+      code: 'rbf-centers',
+      location: { line: 8 },
+    });
   });
 
   it('rows of centres for one input are an error', async () => {

@@ -27,7 +27,7 @@ function repo(term: string, hold = holdout) {
   });
 }
 
-async function fit(term: string, hold = holdout) {
+async function fitSite(term: string, hold = holdout) {
   const r = repo(term, hold);
   const settings = defaultSettings();
   const d = await loadDescriptor(r, 'models/m.model.yml', settings);
@@ -48,8 +48,12 @@ print(json.dumps({'names': kept, 'cols': [[1.0 if v == l else 0.0 for v in d['at
 describe.skipIf(missing !== null)(`category against an independent construction${skipNote(missing)}`, () => {
   for (const reference of [null, 'east']) {
     it(`indicator columns, reference ${reference ?? 'the most frequent level'}`, async () => {
-      const { model } = await fit(reference === null ? 'category: { of: site }' : `category: { of: site, reference: ${reference} }`);
-      const trainSites = train.trim().split('\n').slice(1).map((l) => l.split(',')[0].replace(/"/g, ''));
+      const { model } = await fitSite(reference === null ? 'category: { of: site }' : `category: { of: site, reference: ${reference} }`);
+      const trainSites = train
+        .trim()
+        .split('\n')
+        .slice(1)
+        .map((l) => l.split(',')[0].replace(/"/g, ''));
       const ref = runPythonJson<{ names: string[]; cols: number[][] }>(SCRIPT, { train: trainSites, at: trainSites, reference });
       const { design, tables } = model;
       expect(design.columnNames.slice(1, -1)).toEqual(ref.names.map((l) => `site=${l}`));
@@ -62,7 +66,7 @@ describe.skipIf(missing !== null)(`category against an independent construction$
 
 describe('category levels', () => {
   it('numeric-looking text is a level: 07 and 7 are two levels', async () => {
-    const { model } = await fit('category: { of: site }');
+    const { model } = await fitSite('category: { of: site }');
     expect(model.design.columnNames).toEqual(['(intercept)', 'site=07', 'site=7', 'site=east', 'site=south', 'x']);
   });
 
@@ -76,7 +80,7 @@ describe('category levels', () => {
   });
 
   it('unseen: zero predicts an unseen level as the reference level', async () => {
-    const { model } = await fit('category: { of: site, unseen: zero }', `${holdout}west,5,6.5\n`);
+    const { model } = await fitSite('category: { of: site, unseen: zero }', `${holdout}west,5,6.5\n`);
     // The last hold-out row (west, x = 5) gets the reference (north) row's prediction at x = 5.
     expect(model.holdoutPredictions[3]).toBeCloseTo(model.holdoutPredictions[2], 12);
   });
@@ -88,9 +92,10 @@ describe('category levels', () => {
   });
 
   it('swing scans the category level by level, never between levels', async () => {
-    const { result } = await fit('category: { of: site }');
+    const { result } = await fitSite('category: { of: site }');
     const r = await result();
-    const curves = (r.checks.find((c) => c.id === 'swing')?.detail as { curves: { input: string; x: number[] }[] }).curves;
+    const detail = r.checks.find((c) => c.id === 'swing')?.detail as { curves: { input: string; x: number[] }[] } | undefined;
+    const curves = detail?.curves ?? [];
     expect(curves.find((c) => c.input === 'site')?.x).toEqual([0, 1, 2, 3, 4]);
     expect(r.checks.find((c) => c.id === 'swing-spikes')?.status).not.toBe('fail');
   });

@@ -25,7 +25,11 @@ function trainingX(n: number, seed: number, scale: number): number[] {
 }
 
 /** The term's design columns at points `at` (column-major list of columns). */
-function columns(spec: TermSpec, train: number[], at: number[]): { names: readonly string[]; cols: number[][]; fixed: Record<string, unknown> } {
+function columns(
+  spec: TermSpec,
+  train: number[],
+  at: number[],
+): { names: readonly string[]; cols: number[][]; fixed: Record<string, unknown> } {
   const term = createTerm(spec, new Map([['x', Float64Array.from(train)]]), 'm.model.yml');
   const m = at.length;
   const out = new Float64Array(m * term.columnNames.length);
@@ -127,7 +131,14 @@ describe.skipIf(missing !== null)(`terms against numpy / scipy${skipNote(missing
     const spec: TermSpec = { kind: 'fourier', of: 'x', period: 7, harmonics: 3, line: 1 };
     const ours = columns(spec, train, at);
     const ref = runPythonJson<Reference>(SCRIPT, { kind: 'fourier', period: 7, harmonics: 3, train, at });
-    expect(ours.names).toEqual(['sin(2pi*1*x/7)', 'cos(2pi*1*x/7)', 'sin(2pi*2*x/7)', 'cos(2pi*2*x/7)', 'sin(2pi*3*x/7)', 'cos(2pi*3*x/7)']);
+    expect(ours.names).toEqual([
+      'sin(2pi*1*x/7)',
+      'cos(2pi*1*x/7)',
+      'sin(2pi*2*x/7)',
+      'cos(2pi*2*x/7)',
+      'sin(2pi*3*x/7)',
+      'cos(2pi*3*x/7)',
+    ]);
     expect(worst(ours.cols, ref.cols as number[][])).toBeLessThan(TOLERANCE);
   });
 
@@ -137,11 +148,26 @@ describe.skipIf(missing !== null)(`terms against numpy / scipy${skipNote(missing
     [1, { kind: 'count', count: 3 }],
   ] as const) {
     it(`B-spline degree ${degree}, knots ${JSON.stringify(knots)}: scipy's BSpline (extrapolating) to ${TOLERANCE}, and the truncated-power span`, () => {
-      const spec: TermSpec = { kind: 'spline', of: 'x', knots: knots.kind === 'list' ? { kind: 'list', values: [...knots.values] } : knots, degree, natural: false, line: 1 };
+      const spec: TermSpec = {
+        kind: 'spline',
+        of: 'x',
+        knots: knots.kind === 'list' ? { kind: 'list', values: [...knots.values] } : knots,
+        degree,
+        natural: false,
+        line: 1,
+      };
       const ours = columns(spec, train, at);
-      const ref = runPythonJson<Reference>(SCRIPT, { kind: 'bspline', degree, ...(knots.kind === 'count' ? { count: knots.count } : { knots: knots.values }), train, at });
+      const ref = runPythonJson<Reference>(SCRIPT, {
+        kind: 'bspline',
+        degree,
+        ...(knots.kind === 'count' ? { count: knots.count } : { knots: knots.values }),
+        train,
+        at,
+      });
       // Knots at the same quantiles as numpy.quantile (linear interpolation).
-      (ref.knots as number[]).forEach((k, j) => expect(Math.abs((ours.fixed.knots as number[])[j] - k)).toBeLessThanOrEqual(1e-12 * Math.abs(k)));
+      (ref.knots as number[]).forEach((k, j) =>
+        expect(Math.abs((ours.fixed.knots as number[])[j] - k)).toBeLessThanOrEqual(1e-12 * Math.abs(k)),
+      );
       expect(ours.cols.length).toBe((ref.cols as number[][]).length);
       expect(worst(ours.cols, ref.cols as number[][])).toBeLessThan(TOLERANCE);
       // [1, our columns] spans the truncated power basis: least-squares residual of each truncated
@@ -234,9 +260,20 @@ describe.skipIf(missing !== null)(`polynomial over several inputs against sklear
       const term = createTerm(spec, new Map(names.map((n, i) => [n, Float64Array.from(trainCols[i])])), 'm.model.yml');
       const m = atCols[0].length;
       const out = new Float64Array(m * term.columnNames.length);
-      term.fill(atCols.map((c) => Float64Array.from(c)), m, out, 0);
+      term.fill(
+        atCols.map((c) => Float64Array.from(c)),
+        m,
+        out,
+        0,
+      );
       const ours = term.columnNames.map((_, j) => Array.from(out.subarray(j * m, (j + 1) * m)));
-      const ref = runPythonJson<{ cols: number[][]; names: string[] }>(POLY_SCRIPT, { train: trainCols, at: atCols, degree, standardise, names });
+      const ref = runPythonJson<{ cols: number[][]; names: string[] }>(POLY_SCRIPT, {
+        train: trainCols,
+        at: atCols,
+        degree,
+        standardise,
+        names,
+      });
       expect(ours.length).toBe(ref.cols.length);
       // sklearn names `a^2 b`; ours `z(a)^2*z(b)` (or `a^2*b` raw): the same powers in the same order.
       expect(term.columnNames.map((n) => n.replace(/z\(([a-z])\)/g, '$1').replace(/\*/g, ' '))).toEqual(ref.names);
@@ -291,18 +328,49 @@ describe.skipIf(missing !== null)(`radial term over several inputs against numpy
   const trainCols = [trainingX(40, 41, 5), trainingX(40, 42, 30)];
   const atCols = [trainingX(25, 43, 6), trainingX(25, 44, 33)];
   for (const centers of [
-    { kind: 'rows', rows: [[1, 10], [3, 20], [4.5, 5]] },
-    { kind: 'grid', axes: [{ from: 0, to: 5, count: 4 }, { from: 0, to: 30, count: 3 }] },
+    {
+      kind: 'rows',
+      rows: [
+        [1, 10],
+        [3, 20],
+        [4.5, 5],
+      ],
+    },
+    {
+      kind: 'grid',
+      axes: [
+        { from: 0, to: 5, count: 4 },
+        { from: 0, to: 30, count: 3 },
+      ],
+    },
     { kind: 'at-samples' },
   ] as const) {
     it(`centres as ${centers.kind}: isotropic Gaussians on the standardised inputs to ${TOLERANCE}`, () => {
       const spec: TermSpec = { kind: 'multi-rbf', of: ['a', 'b'], centers: JSON.parse(JSON.stringify(centers)), width: 0.7, line: 1 };
-      const term = createTerm(spec, new Map([['a', Float64Array.from(trainCols[0])], ['b', Float64Array.from(trainCols[1])]]), 'm.model.yml');
+      const term = createTerm(
+        spec,
+        new Map([
+          ['a', Float64Array.from(trainCols[0])],
+          ['b', Float64Array.from(trainCols[1])],
+        ]),
+        'm.model.yml',
+      );
       const m = atCols[0].length;
       const out = new Float64Array(m * term.columnNames.length);
-      term.fill(atCols.map((c) => Float64Array.from(c)), m, out, 0);
+      term.fill(
+        atCols.map((c) => Float64Array.from(c)),
+        m,
+        out,
+        0,
+      );
       const ours = term.columnNames.map((_, j) => Array.from(out.subarray(j * m, (j + 1) * m)));
-      const ref = runPythonJson<{ cols: number[][] }>(MULTI_RBF_SCRIPT, { train: trainCols, at: atCols, width: 0.7, centers: centers.kind, ...centers });
+      const ref = runPythonJson<{ cols: number[][] }>(MULTI_RBF_SCRIPT, {
+        train: trainCols,
+        at: atCols,
+        width: 0.7,
+        centers: centers.kind,
+        ...centers,
+      });
       expect(ours.length).toBe(ref.cols.length);
       expect(worst(ours, ref.cols)).toBeLessThan(TOLERANCE);
     });

@@ -6,14 +6,18 @@ import complexity from '../../src/checks/complexity.js';
 import { buildContext, defaultLimits, descriptor, table } from '../checks/context.js';
 
 const n = 120;
-const x = Array.from({ length: n }, (_, i) => (i * 37) % 120 / 6);
+const x = Array.from({ length: n }, (_, i) => ((i * 37) % 120) / 6);
 const z = Array.from({ length: n }, (_, i) => ((i * 53) % 97) / 10);
 const noise = Array.from({ length: n }, (_, i) => (((i * 7919) % 101) / 101 - 0.5) * 0.2);
 
 describe('complexity sweeps of the new settings', () => {
   it('sweeps a spline knot count, simplest first, and suggests fewer knots for a smooth curve', () => {
     const train = table(['x', 'y'], [x, x.map((v, i) => Math.sin(v / 6) + noise[i])]);
-    const d = descriptor({ terms: [{ kind: 'spline', of: 'x', knots: { kind: 'count', count: 12 }, degree: 3, natural: false }], target: 'y', limits: defaultLimits() });
+    const d = descriptor({
+      terms: [{ kind: 'spline', of: 'x', knots: { kind: 'count', count: 12 }, degree: 3, natural: false }],
+      target: 'y',
+      limits: defaultLimits(),
+    });
     const { outcome } = runCheck(complexity, buildContext(d, train, train));
     const detail = outcome.detail as { setting: string; curve: { setting: number; current: boolean }[]; chosen: number };
     expect(detail.setting).toBe('knots');
@@ -36,7 +40,11 @@ describe('complexity sweeps of the new settings', () => {
 
   it('sweeps the degree of a polynomial over two inputs', () => {
     const train = table(['x', 'z', 'y'], [x, z, x.map((v, i) => v * z[i] * 0.1 + noise[i])]);
-    const d = descriptor({ terms: [{ kind: 'multi-polynomial', of: ['x', 'z'], degree: 4, shift: [null, null], scale: [null, null] }], target: 'y', limits: defaultLimits() });
+    const d = descriptor({
+      terms: [{ kind: 'multi-polynomial', of: ['x', 'z'], degree: 4, shift: [null, null], scale: [null, null] }],
+      target: 'y',
+      limits: defaultLimits(),
+    });
     const { outcome } = runCheck(complexity, buildContext(d, train, train));
     const detail = outcome.detail as { setting: string; curve: { setting: number; parameters: number }[]; chosen: number };
     expect(detail.setting).toBe('degree');

@@ -13,7 +13,11 @@ describe('swing of a model with a temperature x humidity interaction', () => {
     const h = Array.from({ length: n }, (_, i) => 30 + ((i * 11) % 41));
     const y = t.map((tv, i) => 0.5 * tv + 0.02 * h[i] + 0.01 * tv * h[i] + ((i % 5) - 2) * 0.05);
     const train = table(['t', 'h', 'y'], [t, h, y]);
-    const d = descriptor({ terms: [{ kind: 'multi-polynomial', of: ['t', 'h'], degree: 2, shift: [0, 0], scale: [1, 1] }], target: 'y', limits: defaultLimits() });
+    const d = descriptor({
+      terms: [{ kind: 'multi-polynomial', of: ['t', 'h'], degree: 2, shift: [0, 0], scale: [1, 1] }],
+      target: 'y',
+      limits: defaultLimits(),
+    });
     const context = buildContext(d, train, train);
     expect(context.design.columnNames).toEqual(['(intercept)', 't', 'h', 't^2', 't*h', 'h^2']);
     const b = context.fit.coefficients;
@@ -35,7 +39,9 @@ describe('swing of a model with a temperature x humidity interaction', () => {
     for (const worst of [swing.worstInside, swing.worstBeyond]) {
       if (worst === null) continue;
       expect(Object.keys(worst.inputs).sort()).toEqual(['h', 't']);
-      expect(Math.abs(worst.prediction - model(worst.inputs.t, worst.inputs.h))).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(worst.prediction)));
+      expect(Math.abs(worst.prediction - model(worst.inputs.t, worst.inputs.h))).toBeLessThanOrEqual(
+        1e-9 * Math.max(1, Math.abs(worst.prediction)),
+      );
     }
   });
 });

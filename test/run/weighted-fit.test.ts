@@ -93,7 +93,11 @@ function rel(a: number, b: number): number {
 }
 
 describe.skipIf(missing !== null)(`weighted fits against numpy / sklearn${skipNote(missing)}`, () => {
-  for (const [kind, key, ridge] of [['w', 'weight: w', 0], ['s', 'sigma: s', 0], ['w', 'weight: w', 0.7]] as const) {
+  for (const [kind, key, ridge] of [
+    ['w', 'weight: w', 0],
+    ['s', 'sigma: s', 0],
+    ['w', 'weight: w', 0.7],
+  ] as const) {
     it(`data.${key.split(':')[0]}, ridge ${ridge}: coefficients and weighted RMSE, MAE, R^2 to ${TOLERANCE}`, async () => {
       const ref = runPythonJson<Reference>(SCRIPT, { train, holdout, kind, ridge });
       const r = repo(key, ridge);
@@ -132,7 +136,8 @@ describe('weights as input', () => {
   it('a negative weight is an error naming file, line, column and value', async () => {
     const bad = { ...train, w: train.w.map((v, i) => (i === 4 ? -1 : v)) };
     const r = createMemoryRepository({
-      'models/m.model.yml': 'version: 1\nname: m\ndata:\n  train: ../data/train.csv\n  holdout: ../data/holdout.csv\n  target: y\n  weight: w\nterms:\n  - linear: [x]\n',
+      'models/m.model.yml':
+        'version: 1\nname: m\ndata:\n  train: ../data/train.csv\n  holdout: ../data/holdout.csv\n  target: y\n  weight: w\nterms:\n  - linear: [x]\n',
       'data/train.csv': csv(bad),
       'data/holdout.csv': csv(holdout),
     });
@@ -151,10 +156,14 @@ describe('weights as input', () => {
 
   it('weight and sigma together are a descriptor error at data.sigma', async () => {
     const r = createMemoryRepository({
-      'models/m.model.yml': 'version: 1\nname: m\ndata:\n  train: ../data/train.csv\n  holdout: ../data/holdout.csv\n  target: y\n  weight: w\n  sigma: s\nterms:\n  - linear: [x]\n',
+      'models/m.model.yml':
+        'version: 1\nname: m\ndata:\n  train: ../data/train.csv\n  holdout: ../data/holdout.csv\n  target: y\n  weight: w\n  sigma: s\nterms:\n  - linear: [x]\n',
       'data/train.csv': csv(train),
       'data/holdout.csv': csv(holdout),
     });
-    await expect(loadDescriptor(r, 'models/m.model.yml', defaultSettings())).rejects.toMatchObject({ code: 'weight-and-sigma', location: { line: 8 } });
+    await expect(loadDescriptor(r, 'models/m.model.yml', defaultSettings())).rejects.toMatchObject({
+      code: 'weight-and-sigma',
+      location: { line: 8 },
+    });
   });
 });

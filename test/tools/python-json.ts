@@ -15,6 +15,7 @@ export function runPythonJson<T>(script: string, input: unknown): T {
     maxBuffer: 64 * 1024 * 1024,
     env: { PATH: '/usr/bin:/bin', HOME: process.env.HOME ?? '/' },
   });
-  if (run.status !== 0) throw new Error(`python3 failed (status ${run.status ?? run.signal}): ${(run.stderr || String(run.error ?? '')).slice(0, 2000)}`);
+  if (run.status !== 0)
+    throw new Error(`python3 failed (status ${run.status ?? run.signal}): ${(run.stderr || String(run.error ?? '')).slice(0, 2000)}`);
   return JSON.parse(run.stdout) as T;
 }

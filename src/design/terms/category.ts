@@ -16,11 +16,18 @@ export function referenceLevel(spec: CategoryTermSpec, levels: readonly string[]
   if (spec.reference !== null) {
     const k = levels.indexOf(spec.reference);
     if (k < 0) {
-      throw new InputError('category-reference', `the reference level ${JSON.stringify(spec.reference.slice(0, 80))} is not a level of \`${spec.of}\` in the training rows; its levels are ${levels.slice(0, 12).map((l) => JSON.stringify(l.slice(0, 40))).join(', ')}${levels.length > 12 ? ', …' : ''}`, {
-        file,
-        line: spec.line,
-        key: 'category.reference',
-      });
+      throw new InputError(
+        'category-reference',
+        `the reference level ${JSON.stringify(spec.reference.slice(0, 80))} is not a level of \`${spec.of}\` in the training rows; its levels are ${levels
+          .slice(0, 12)
+          .map((l) => JSON.stringify(l.slice(0, 40)))
+          .join(', ')}${levels.length > 12 ? ', …' : ''}`,
+        {
+          file,
+          line: spec.line,
+          key: 'category.reference',
+        },
+      );
     }
     return k;
   }

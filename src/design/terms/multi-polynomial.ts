@@ -49,11 +49,15 @@ export function multiPolynomialTerm(spec: MultiPolynomialTermSpec, training: Tra
     const { mean, sd } = meanAndSd(x);
     const sc = spec.scale[i] ?? sd;
     if (!(sc > 0)) {
-      throw new InputError('constant-input', `column \`${name}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop it from \`of\``, {
-        file,
-        line: spec.line,
-        key: 'polynomial.of',
-      });
+      throw new InputError(
+        'constant-input',
+        `column \`${name}\` is constant in the training data, so its default scale (standard deviation) is 0; give \`scale\` explicitly or drop it from \`of\``,
+        {
+          file,
+          line: spec.line,
+          key: 'polynomial.of',
+        },
+      );
     }
     shift.push(spec.shift[i] ?? mean);
     scale.push(sc);

@@ -16,7 +16,9 @@ import type { Term, TrainingColumns } from './types.js';
 export function multiRbfCenters(centers: MultiRbfCenters, training: readonly Float64Array[]): number[][] {
   if (centers.kind === 'rows') return centers.rows.map((r) => [...r]);
   if (centers.kind === 'at-samples') return Array.from({ length: training[0].length }, (_, i) => training.map((col) => col[i]));
-  const axes = centers.axes.map(({ from, to, count }) => (count === 1 ? [from] : Array.from({ length: count }, (_, k) => (k === count - 1 ? to : from + ((to - from) * k) / (count - 1)))));
+  const axes = centers.axes.map(({ from, to, count }) =>
+    count === 1 ? [from] : Array.from({ length: count }, (_, k) => (k === count - 1 ? to : from + ((to - from) * k) / (count - 1))),
+  );
   let rows: number[][] = [[]];
   for (const axis of axes) rows = rows.flatMap((r) => axis.map((v) => [...r, v]));
   return rows;
@@ -38,11 +40,15 @@ export function multiRbfTerm(spec: MultiRbfTermSpec, training: TrainingColumns, 
   spec.of.forEach((name, i) => {
     const { mean, sd } = meanAndSd(columns[i]);
     if (!(sd > 0)) {
-      throw new InputError('constant-input', `column \`${name}\` is constant in the training data, so it cannot be standardised for a radial term over several inputs; drop it from \`of\``, {
-        file,
-        line: spec.line,
-        key: 'rbf.of',
-      });
+      throw new InputError(
+        'constant-input',
+        `column \`${name}\` is constant in the training data, so it cannot be standardised for a radial term over several inputs; drop it from \`of\``,
+        {
+          file,
+          line: spec.line,
+          key: 'rbf.of',
+        },
+      );
     }
     shift.push(mean);
     scale.push(sd);

@@ -39,7 +39,12 @@ export function splineKnots(spec: SplineTermSpec, x: Float64Array, file: string)
     throw new InputError('spline-knots', message, { file, line: spec.line, key: 'spline.knots' });
   };
   if (!(upper > lower)) fail(`column \`${spec.of}\` is constant in the training data, so a spline has no range to span; drop the term`);
-  const interior = spec.knots.kind === 'list' ? [...spec.knots.values] : Array.from({ length: spec.knots.count }, (_, j) => quantileSorted(sorted, (j + 1) / (spec.knots.kind === 'count' ? spec.knots.count + 1 : 1)));
+  const interior =
+    spec.knots.kind === 'list'
+      ? [...spec.knots.values]
+      : Array.from({ length: spec.knots.count }, (_, j) =>
+          quantileSorted(sorted, (j + 1) / (spec.knots.kind === 'count' ? spec.knots.count + 1 : 1)),
+        );
   for (let k = 0; k < interior.length; k++) {
     if (!(interior[k] > lower && interior[k] < upper) || (k > 0 && !(interior[k] > interior[k - 1]))) {
       fail(
@@ -95,7 +100,15 @@ export function splineTerm(spec: SplineTermSpec, training: TrainingColumns, file
  * Values of the d + 1 B-splines B_(span-d) .. B_span that are non-zero at x (Cox-de Boor recursion,
  * The NURBS Book algorithm A2.2), into `basis` (length d + 1). `left`, `right`: scratch, length d + 1.
  */
-export function bsplineValues(t: Float64Array, d: number, span: number, x: number, basis: Float64Array, left: Float64Array, right: Float64Array): void {
+export function bsplineValues(
+  t: Float64Array,
+  d: number,
+  span: number,
+  x: number,
+  basis: Float64Array,
+  left: Float64Array,
+  right: Float64Array,
+): void {
   basis[0] = 1;
   for (let j = 1; j <= d; j++) {
     left[j] = x - t[span + 1 - j];
@@ -141,9 +154,18 @@ function bsplineColumns(x: Float64Array, m: number, t: Float64Array, d: number, 
 }
 
 /** Fills the natural cubic spline columns (ESL eqs. 5.4-5.5 on u) of m rows from `at`. */
-function naturalColumns(x: Float64Array, m: number, lower: number, width: number, xi: readonly number[], out: Float64Array, at: number): void {
+function naturalColumns(
+  x: Float64Array,
+  m: number,
+  lower: number,
+  width: number,
+  xi: readonly number[],
+  out: Float64Array,
+  at: number,
+): void {
   const last = xi.length - 1;
-  const dLast = (u: number): number => cubePlus(u - xi[last - 1]) / (xi[last] - xi[last - 1]) - cubePlus(u - xi[last]) / (xi[last] - xi[last - 1]);
+  const dLast = (u: number): number =>
+    cubePlus(u - xi[last - 1]) / (xi[last] - xi[last - 1]) - cubePlus(u - xi[last]) / (xi[last] - xi[last - 1]);
   for (let i = 0; i < m; i++) {
     const u = (x[i] - lower) / width;
     out[at + i] = u;

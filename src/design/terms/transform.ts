@@ -27,7 +27,12 @@ export function inTransformDomain(transform: InputTransform, v: number): boolean
 }
 
 /** What each transform expects, for messages. */
-const DOMAIN: Record<InputTransform, string> = { log: 'a value above 0', log1p: 'a value above -1', sqrt: 'a value of 0 or more', standardise: 'a number' };
+const DOMAIN: Record<InputTransform, string> = {
+  log: 'a value above 0',
+  log1p: 'a value above -1',
+  sqrt: 'a value of 0 or more',
+  standardise: 'a number',
+};
 
 /**
  * InputError `transform-domain` naming the data file, line, column and value of the first row of
@@ -37,7 +42,12 @@ const DOMAIN: Record<InputTransform, string> = { log: 'a value above 0', log1p: 
  * @param data rows with their input columns in `order`
  * @param order input names of `data.inputs`
  */
-export function checkTransformDomain(spec: TermSpec, inputs: readonly string[], data: Pick<ModelData, 'inputs' | 'rows' | 'lines' | 'file'>, order: readonly string[]): void {
+export function checkTransformDomain(
+  spec: TermSpec,
+  inputs: readonly string[],
+  data: Pick<ModelData, 'inputs' | 'rows' | 'lines' | 'file'>,
+  order: readonly string[],
+): void {
   const transform = spec.kind === 'linear' || spec.kind === 'category' ? undefined : spec.transform;
   if (transform === undefined || transform === 'standardise') return;
   for (const name of inputs) {
@@ -68,7 +78,11 @@ function applyInto(transform: InputTransform, x: Float64Array, m: number, shift:
 
 /** The increasing maps of the transforms that have a fixed form, and their inverses (x = expm1(t) for log1p...). */
 const FORWARD: Record<'log' | 'log1p' | 'sqrt', (v: number) => number> = { log: Math.log, log1p: Math.log1p, sqrt: Math.sqrt };
-const INVERSE: Record<'log' | 'log1p' | 'sqrt', (v: number) => number> = { log: Math.exp, log1p: Math.expm1, sqrt: (v) => (v > 0 ? v * v : 0) };
+const INVERSE: Record<'log' | 'log1p' | 'sqrt', (v: number) => number> = {
+  log: Math.exp,
+  log1p: Math.expm1,
+  sqrt: (v) => (v > 0 ? v * v : 0),
+};
 
 /** The input's name as the inner term sees it, e.g. `log(dose)`. */
 function renamed(transform: InputTransform, name: string): string {
@@ -78,7 +92,8 @@ function renamed(transform: InputTransform, name: string): string {
 /** The spec with its inputs renamed to their transformed names (and without `transform`). */
 function innerSpec(spec: Exclude<TermSpec, { kind: 'linear' } | { kind: 'category' }>, transform: InputTransform): TermSpec {
   const { transform: _dropped, ...rest } = spec;
-  if (rest.kind === 'multi-polynomial' || rest.kind === 'multi-rbf') return { ...rest, of: rest.of.map((n) => renamed(transform, n)) } as TermSpec;
+  if (rest.kind === 'multi-polynomial' || rest.kind === 'multi-rbf')
+    return { ...rest, of: rest.of.map((n) => renamed(transform, n)) } as TermSpec;
   return { ...rest, of: renamed(transform, rest.of) } as TermSpec;
 }
 
@@ -87,7 +102,13 @@ function innerSpec(spec: Exclude<TermSpec, { kind: 'linear' } | { kind: 'categor
  * transformed training columns; the returned term reads the real inputs and transforms each block.
  * @throws InputError `constant-input` for `standardise` of a constant column
  */
-export function transformedTerm(spec: Exclude<TermSpec, { kind: 'linear' } | { kind: 'category' }>, training: TrainingColumns, file: string, inputs: readonly string[], build: (inner: TermSpec, columns: TrainingColumns) => Term): Term {
+export function transformedTerm(
+  spec: Exclude<TermSpec, { kind: 'linear' } | { kind: 'category' }>,
+  training: TrainingColumns,
+  file: string,
+  inputs: readonly string[],
+  build: (inner: TermSpec, columns: TrainingColumns) => Term,
+): Term {
   const transform = spec.transform as InputTransform;
   const shift: number[] = [];
   const scale: number[] = [];
@@ -96,7 +117,11 @@ export function transformedTerm(spec: Exclude<TermSpec, { kind: 'linear' } | { k
     const x = training.get(name) as Float64Array;
     const { mean, sd } = meanAndSd(x);
     if (transform === 'standardise' && !(sd > 0)) {
-      throw new InputError('constant-input', `column \`${name}\` is constant in the training data, so \`transform: standardise\` would divide by 0; drop the transform or the term`, { file, line: spec.line, key: 'transform' });
+      throw new InputError(
+        'constant-input',
+        `column \`${name}\` is constant in the training data, so \`transform: standardise\` would divide by 0; drop the transform or the term`,
+        { file, line: spec.line, key: 'transform' },
+      );
     }
     shift.push(mean);
     scale.push(sd);
