@@ -8,7 +8,7 @@ export const modules = {
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   generalChunks: () => (/* binding */ generalChunks)
 /* harmony export */ });
-/* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8057);
+/* harmony import */ var csv_parse__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(3046);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
 /* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5383);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8706);

@@ -22,7 +22,7 @@ var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_nod
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
 // EXTERNAL MODULE: ./src/run/pipeline.ts + 40 modules
-var pipeline = __webpack_require__(3528);
+var pipeline = __webpack_require__(4706);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __webpack_require__(1421);
 // EXTERNAL MODULE: ./src/repo/glob-pattern.ts

@@ -16,8 +16,8 @@ var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
-// EXTERNAL MODULE: ./src/checks/index.ts + 16 modules
-var checks = __webpack_require__(1800);
+// EXTERNAL MODULE: ./src/checks/index.ts + 22 modules
+var checks = __webpack_require__(9079);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __webpack_require__(6228);
 // EXTERNAL MODULE: ./src/result/result.ts

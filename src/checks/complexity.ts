@@ -27,8 +27,13 @@ const check: Check = {
     row), and each fold's squared errors come from its factor
     (||y_f - X_f w||^2 = ||Q_f^T y_f - R_f w||^2 + the fold's residual sum of squares): no pass over
     the rows, every row used.
-  - else the polynomial term of highest degree: degrees 1 .. min(degree + 3, 15);
-  - else the first radial term: its width times 2^t for t = 4, 3, ..., -2; simplest = widest.
+  - else the polynomial term of highest degree (one input or several): degrees 1 .. min(degree + 3, 15)
+    (over several inputs only the degrees that build at most 200 columns, and the current one);
+  - else the first radial term (one input or several): its width times 2^t for t = 4, 3, ..., -2;
+    simplest = widest;
+  - else the first spline term: 1 .. current + 4 interior knots (at most 100) at the training
+    quantiles (the current setting as written); simplest = fewest;
+  - else the first Fourier term: 1 .. harmonics + 3 harmonics (at most 50); simplest = fewest.
 - Each setting's k-fold error: the mean of the fold MSEs and its standard error (sample standard
   deviation of the fold MSEs / sqrt(k)). The suggestion is the simplest setting whose mean is within
   one standard error of the smallest mean (the one-standard-error rule: Hastie, Tibshirani &
@@ -40,8 +45,8 @@ const check: Check = {
   not only simpler; a notice alone is given otherwise, and the check never fails by default.
 - Above 50,000 training rows a degree or width sweep uses a subsample of 50,000 rows at an even
   stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row.
-- Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\` or
-  \`ridge\`), \`folds\`, \`rows\`, \`subsampled\`, \`rule\`, indices \`chosen\`, \`best\`, \`current\`, and \`curve\`:
+- Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\`,
+  \`knots\`, \`harmonics\` or \`ridge\`), \`folds\`, \`rows\`, \`subsampled\`, \`rule\`, indices \`chosen\`, \`best\`, \`current\`, and \`curve\`:
   \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
   advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
   line: (d) => d.fit.line,

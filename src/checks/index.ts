@@ -9,8 +9,12 @@ import type { ClassifierContext } from './classifier/context.js';
 import { jsonNumber, type CheckResult } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import baseChange from './base-change.js';
+import chiSquare from './chi-square.js';
 import coefficientSize from './coefficient-size.js';
 import generalisationGap from './generalisation-gap.js';
+import holdoutMae from './holdout-mae.js';
+import holdoutR2 from './holdout-r2.js';
+import holdoutRmse from './holdout-rmse.js';
 import parameterRatio from './parameter-ratio.js';
 import complexity from './complexity.js';
 import conditioning from './conditioning.js';
@@ -22,6 +26,7 @@ import swingBeyond from './swing-beyond.js';
 import calibrationSlope from './calibration-slope.js';
 import eventsPerParameter from './events-per-parameter.js';
 import separation from './separation.js';
+import swingSpikes from './swing-spikes.js';
 import { appliesTo, judge, type Check, type CheckContext, type Measurement } from './types.js';
 
 export type { Check, CheckContext, CoreMetrics, Measurement } from './types.js';
@@ -36,10 +41,15 @@ export const CHECKS: readonly Check[] = validate([
   crossValidation,
   swing,
   swingBeyond,
+  swingSpikes,
   leakage,
   reproducibility,
   conditioning,
   complexity,
+  holdoutR2,
+  holdoutRmse,
+  holdoutMae,
+  chiSquare,
   separation,
   eventsPerParameter,
   calibrationSlope,

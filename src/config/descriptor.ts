@@ -10,7 +10,7 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec } from './types.js';
+import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform, MultiRbfCenters } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -23,6 +23,9 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   dataMissing: 'file-missing',
   notAFile: NOT_A_FILE,
   centers: 'rbf-centers',
+  weighting: 'weight-and-sigma',
+  spline: 'spline-settings',
+  polynomial: 'polynomial-inputs',
 });
 
 /**
@@ -84,6 +87,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       target: raw.data.target,
       lines: { train: line(['data', 'train']), holdout: line(['data', 'holdout']), target: line(['data', 'target']) },
       positive: raw.data.positive ?? null,
+      ...weightingOf(readWeighting(doc, file, raw.data, line)),
     },
     terms,
     fit: {
@@ -105,14 +109,107 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   };
 }
 
+/** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
+function readWeighting(doc: YamlDocument, file: string, data: RawDescriptor['data'], line: (path: (string | number)[]) => number): Weighting | null {
+  if (data.weight !== undefined && data.sigma !== undefined) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
+  }
+  if (data.weight !== undefined) return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
+  if (data.sigma !== undefined) return { kind: 'sigma', column: data.sigma, line: line(['data', 'sigma']) };
+  return null;
+}
+
+/** `{ weighting }` when there is one, else nothing (so unweighted descriptors keep their shape). */
+function weightingOf(weighting: Weighting | null): { weighting?: Weighting } {
+  return weighting === null ? {} : { weighting };
+}
+
 function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number, line: number): TermSpec {
   if ('linear' in term) return { kind: 'linear', columns: [...term.linear], line };
   if ('polynomial' in term) {
     const p = term.polynomial;
-    return { kind: 'polynomial', of: p.of, degree: p.degree, shift: p.shift ?? null, scale: p.scale ?? null, line };
+    if (Array.isArray(p.of)) return withTransform(readMultiPolynomial(doc, file, p as RawPolynomial & { of: string[] }, ['terms', index, 'polynomial'], line), p.transform);
+    for (const key of ['shift', 'scale'] as const) {
+      if (Array.isArray(p[key])) throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
+    }
+    return withTransform({ kind: 'polynomial', of: p.of, degree: p.degree, shift: (p.shift as number | undefined) ?? null, scale: (p.scale as number | undefined) ?? null, line }, p.transform);
   }
+  if ('fourier' in term) {
+    const f = term.fourier;
+    return withTransform({ kind: 'fourier', of: f.of, period: f.period, harmonics: f.harmonics, line }, f.transform);
+  }
+  if ('category' in term) {
+    const c = term.category;
+    return { kind: 'category', of: c.of, reference: c.reference === undefined ? null : String(c.reference), unseen: c.unseen ?? 'error', line };
+  }
+  if ('spline' in term) return withTransform(readSpline(doc, file, term.spline, ['terms', index, 'spline'], line), term.spline.transform);
   const r = term.rbf;
-  return { kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line };
+  if (Array.isArray(r.of)) return withTransform(readMultiRbf(doc, file, r as RawRbf & { of: string[] }, ['terms', index, 'rbf'], line), r.transform);
+  if (Array.isArray(r.centers) && r.centers.some((c) => typeof c !== 'number')) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
+  }
+  return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers as RawCenters, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
+}
+
+/** The spec with its `transform` when one is written (absent otherwise, so specs without one keep their shape). */
+function withTransform(spec: TermSpec, transform: InputTransform | undefined): TermSpec {
+  return transform === undefined ? spec : ({ ...spec, transform } as TermSpec);
+}
+
+function readMultiRbf(doc: YamlDocument, file: string, r: RawRbf & { of: string[] }, at: (string | number)[], line: number): TermSpec {
+  const k = r.of.length;
+  const c = r.centers;
+  const spec = (centers: MultiRbfCenters): TermSpec => ({ kind: 'multi-rbf', of: [...r.of], centers, width: r.width, line });
+  if (c === 'at-samples') return spec({ kind: 'at-samples' });
+  if (Array.isArray(c) && c.every((row) => Array.isArray(row))) {
+    const rows = c as number[][];
+    rows.forEach((row, i) => {
+      if (row.length !== k) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
+    });
+    return spec({ kind: 'rows', rows: rows.map((row) => [...row]) });
+  }
+  if (Array.isArray(c) && c.every((axis) => typeof axis === 'object' && axis !== null && !Array.isArray(axis))) {
+    const axes = c as { from: number; to: number; count: number }[];
+    if (axes.length !== k) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
+    const total = axes.reduce((p, a) => p * a.count, 1);
+    if (total > MAX_RBF_CENTERS) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
+    axes.forEach((a, i) => {
+      if (a.to < a.from) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${showValue(a.to)} is below \`from\` ${showValue(a.from)}; expected from <= to`);
+    });
+    return spec({ kind: 'grid', axes: axes.map((a) => ({ from: a.from, to: a.to, count: a.count })) });
+  }
+  throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
+}
+
+function readMultiPolynomial(doc: YamlDocument, file: string, p: RawPolynomial & { of: string[] }, at: (string | number)[], line: number): TermSpec {
+  const perInput = (key: 'shift' | 'scale'): (number | null)[] => {
+    const v = p[key];
+    if (v === undefined) return p.of.map(() => null);
+    if (!Array.isArray(v)) return p.of.map(() => v);
+    if (v.length !== p.of.length) {
+      throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
+    }
+    return [...v];
+  };
+  return { kind: 'multi-polynomial', of: [...p.of], degree: p.degree, shift: perInput('shift'), scale: perInput('scale'), line };
+}
+
+function readSpline(doc: YamlDocument, file: string, spline: RawSpline, at: (string | number)[], line: number): TermSpec {
+  const degree = spline.degree ?? 3;
+  const natural = spline.natural ?? false;
+  if (natural && degree !== 3) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${showValue(degree)}`);
+  }
+  if (Array.isArray(spline.knots)) {
+    const values = [...spline.knots];
+    for (let k = 1; k < values.length; k++) {
+      if (!(values[k] > values[k - 1])) {
+        throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${showValue(values[k])} does not follow ${showValue(values[k - 1])}; expected strictly increasing knots`);
+      }
+    }
+    return { kind: 'spline', of: spline.of, knots: { kind: 'list', values }, degree, natural, line };
+  }
+  return { kind: 'spline', of: spline.of, knots: { kind: 'count', count: spline.knots.count }, degree, natural, line };
 }
 
 function readCenters(doc: YamlDocument, file: string, centers: RawCenters, at: (string | number)[]): RbfCenters {
@@ -139,7 +236,7 @@ interface RawDescriptor {
   version: 1;
   name: string;
   task?: 'regression' | 'classification';
-  data: { train: string; holdout: string; target: string; positive?: string };
+  data: { train: string; holdout: string; target: string; positive?: string; weight?: string; sigma?: string };
   terms: RawTerm[];
   fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount; threshold?: number };
   coefficients?: number[];
@@ -150,5 +247,14 @@ type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: n
 
 type RawTerm =
   | { linear: string[] }
-  | { polynomial: { of: string; degree: number; shift?: number; scale?: number } }
-  | { rbf: { of: string; centers: RawCenters; width: number } };
+  | { polynomial: RawPolynomial }
+  | { rbf: RawRbf }
+  | { fourier: { of: string; period: number; harmonics: number; transform?: InputTransform } }
+  | { spline: RawSpline }
+  | { category: { of: string; reference?: string | number; unseen?: 'error' | 'zero' } };
+
+type RawRbf = { of: string | string[]; centers: RawCenters | number[][] | { from: number; to: number; count: number }[]; width: number; transform?: InputTransform };
+
+type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[]; transform?: InputTransform };
+
+type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean; transform?: InputTransform };

@@ -55,6 +55,13 @@ export type RbfCenters =
   | { kind: 'step'; from: number; to: number; step: number }
   | { kind: 'at-samples' };
 
+/**
+ * A transform applied to a term's input before the term sees it: log(x) (x > 0), log(1 + x)
+ * (x > -1), sqrt(x) (x >= 0), or (x - mean) / sd with the training mean and population standard
+ * deviation. Absent: the input as it is.
+ */
+export type InputTransform = 'log' | 'log1p' | 'sqrt' | 'standardise';
+
 /** `linear: [cols]`: the columns as they are. */
 export interface LinearTermSpec {
   kind: 'linear';
@@ -71,6 +78,8 @@ export interface PolynomialTermSpec {
   shift: number | null;
   /** Null: the training population standard deviation of `of`. */
   scale: number | null;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
   line: number;
 }
 
@@ -80,11 +89,91 @@ export interface RbfTermSpec {
   of: string;
   centers: RbfCenters;
   width: number;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
+  line: number;
+}
+
+/** `fourier: { of, period, harmonics }`: sin and cos of 2 pi j x / period, j = 1 .. harmonics. */
+export interface FourierTermSpec {
+  kind: 'fourier';
+  of: string;
+  period: number;
+  harmonics: number;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
+  line: number;
+}
+
+/** Knots of a spline term, as written: interior knots, or a count placed at training quantiles. */
+export type SplineKnots = { kind: 'list'; values: number[] } | { kind: 'count'; count: number };
+
+/**
+ * `spline: { of, knots, degree?, natural? }`: a B-spline basis of `degree` (default 3) on the
+ * interior knots and the training range, or natural cubic splines (linear beyond the boundary knots).
+ */
+export interface SplineTermSpec {
+  kind: 'spline';
+  of: string;
+  knots: SplineKnots;
+  degree: number;
+  natural: boolean;
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
+  line: number;
+}
+
+/**
+ * `polynomial: { of: [a, b, ...], degree, shift?, scale? }`: every monomial of total degree 1 .. degree
+ * in z_i = (x_i - shift_i) / scale_i (kind `multi-polynomial` once read, so that single-input code
+ * keeps its `of: string`).
+ */
+export interface MultiPolynomialTermSpec {
+  kind: 'multi-polynomial';
+  of: string[];
+  degree: number;
+  /** Per input; null entries: the training mean. */
+  shift: (number | null)[];
+  /** Per input; null entries: the training population standard deviation. */
+  scale: (number | null)[];
+  /** Transform of the input(s) before the term (see {@link InputTransform}); absent: none. */
+  transform?: InputTransform;
+  line: number;
+}
+
+/** Centres of a radial term over several inputs, as written (in the inputs' own units). */
+export type MultiRbfCenters = { kind: 'rows'; rows: number[][] } | { kind: 'grid'; axes: { from: number; to: number; count: number }[] } | { kind: 'at-samples' };
+
+/**
+ * `rbf: { of: [a, b, ...], centers, width }`: isotropic Gaussians exp(-||z - z_c||^2 / (2 width^2))
+ * on the standardised inputs z (kind `multi-rbf` once read).
+ */
+export interface MultiRbfTermSpec {
+  kind: 'multi-rbf';
+  of: string[];
+  centers: MultiRbfCenters;
+  width: number;
+  /** Transform of the inputs before the term; absent: none. */
+  transform?: InputTransform;
+  line: number;
+}
+
+/**
+ * `category: { of, reference?, unseen? }`: one indicator column per training level of a text column
+ * but the reference level (default: the most frequent, ties by text order).
+ */
+export interface CategoryTermSpec {
+  kind: 'category';
+  of: string;
+  /** The reference level; null: the most frequent training level (ties: first in text order). */
+  reference: string | null;
+  /** A hold-out level not seen in training: an error (default), or every indicator 0 (`zero`). */
+  unseen: 'error' | 'zero';
   line: number;
 }
 
 /** One entry of a descriptor's `terms` list. */
-export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec;
+export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec | MultiRbfTermSpec | CategoryTermSpec;
 
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';
@@ -116,6 +205,12 @@ export interface FitSpec {
 
 /** What a model predicts: a number (`regression`, the default) or one of two classes (`classification`, binary). */
 export type Task = 'regression' | 'classification';
+/** `data.weight` or `data.sigma`: the column, which of the two, and the line of the key. */
+export interface Weighting {
+  kind: 'weight' | 'sigma';
+  column: string;
+  line: number;
+}
 
 /** A model descriptor after validation. */
 export interface Descriptor {
@@ -135,6 +230,11 @@ export interface Descriptor {
     lines: { train: number; holdout: number; target: number };
     /** Classification: the positive label when the target holds text labels (`data.positive`); null when not given. */
     positive?: string | null;
+    /**
+     * Row weights, when given: `data.weight` (w as written, >= 0) or `data.sigma` (standard
+     * uncertainties, w = 1 / sigma^2). Absent or null: every row weighs 1.
+     */
+    weighting?: Weighting | null;
   };
   terms: TermSpec[];
   fit: FitSpec;

@@ -1,10 +1,12 @@
 /**
  * Loads the columns one model needs from its training and hold-out files.
  */
-import type { Descriptor, SettingsFile } from '../config/types.js';
+import type { Descriptor, SettingsFile, Weighting } from '../config/types.js';
 import { InputError, clip } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
 import { readTable } from './table.js';
+import { levelCodes, trainingLevels } from './levels.js';
+import { readTextColumns } from './text-columns.js';
 import type { RepoReader } from '../repo/types.js';
 
 /** Training and hold-out columns of one model. */
@@ -13,6 +15,15 @@ export interface ModelTables {
   holdout: ModelData;
   /** Training input columns by name (for fixing term parameters). */
   trainColumns: Map<string, Float64Array>;
+  /** Training levels (text order) of each category column; the columns hold their codes. */
+  levels?: Map<string, string[]>;
+}
+
+/** The category columns of a descriptor with the first category term that reads each. */
+function categoryColumns(descriptor: Descriptor): Map<string, { line: number; unseen: 'error' | 'zero' }> {
+  const out = new Map<string, { line: number; unseen: 'error' | 'zero' }>();
+  for (const t of descriptor.terms) if (t.kind === 'category' && !out.has(t.of)) out.set(t.of, { line: t.line, unseen: t.unseen });
+  return out;
 }
 
 /**
@@ -34,7 +45,19 @@ export async function loadModelData(
       { file: descriptor.file, line: data.lines.target, key: 'data.target' },
     );
   }
-  const columns = [...inputs, data.target];
+  const weighting = data.weighting ?? null;
+  if (weighting !== null && weighting.column === data.target) {
+    throw new InputError('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
+      file: descriptor.file,
+      line: weighting.line,
+      key: `data.${weighting.kind}`,
+    });
+  }
+  // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
+  const categories = categoryColumns(descriptor);
+  const numeric = inputs.filter((c) => !categories.has(c));
+  const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
+  const levels = new Map<string, string[]>();
   const maxBytes = settings.caps.maxFileBytes;
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table: Awaited<ReturnType<typeof readTable>>;
@@ -50,7 +73,19 @@ export async function loadModelData(
         key,
       });
     }
-    return {
+    if (categories.size > 0) {
+      const text = await readTextColumns(repo, path, [...categories.keys()], maxBytes);
+      if (text.lines.length !== table.rows || text.lines.some((l, i) => l !== table.lines[i])) {
+        throw new InputError('csv-rows', `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: path });
+      }
+      for (const [name, term] of categories) {
+        const values = text.columns.get(name) as string[];
+        if (!levels.has(name)) levels.set(name, trainingLevels(values));
+        const where = { file: path, lines: table.lines, column: name, termLine: term.line, descriptor: descriptor.file };
+        table.columns.set(name, levelCodes(values, levels.get(name) as string[], term.unseen, where));
+      }
+    }
+    const rows = {
       inputs: inputs.map((c) => table.columns.get(c) as Float64Array),
       y: table.columns.get(data.target) as Float64Array,
       lines: table.lines,
@@ -58,12 +93,43 @@ export async function loadModelData(
       file: path,
       byName: table.columns,
     };
+    return weighting === null ? rows : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, path) };
   };
   const train = await load(data.train, data.lines.train, 'data.train');
   const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
   const { byName, ...trainData } = train;
+  if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
+    throw new InputError('bad-weight', `every training row of ${data.train} has weight 0; expected at least one positive weight`, {
+      file: descriptor.file,
+      line: data.weighting?.line,
+      key: `data.${data.weighting?.kind}`,
+    });
+  }
   const { byName: _unused, ...holdoutData } = holdout;
-  return { train: trainData, holdout: holdoutData, trainColumns: byName };
+  return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
+}
+
+/**
+ * The row weights of a `data.weight` or `data.sigma` column: w as written (finite, >= 0), or
+ * w = 1 / sigma^2 with sigma finite and > 0.
+ * @throws InputError `bad-weight` naming the file, line, column and value of the first bad row
+ */
+export function rowWeights(weighting: Weighting, values: Float64Array, lines: Int32Array, rows: number, file: string): { weights: Float64Array; sigma?: Float64Array } {
+  const weights = new Float64Array(rows);
+  const sigma = weighting.kind === 'sigma';
+  for (let i = 0; i < rows; i++) {
+    const v = values[i];
+    const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
+    if (!ok) {
+      throw new InputError(
+        'bad-weight',
+        `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${lines[i]} of ${file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`,
+        { file, line: lines[i], key: weighting.column },
+      );
+    }
+    weights[i] = sigma ? 1 / (v * v) : v;
+  }
+  return sigma ? { weights, sigma: values.subarray(0, rows) } : { weights };
 }
 
 /**
@@ -73,7 +139,11 @@ export async function loadModelData(
 function withAsker(error: unknown, descriptor: Descriptor): unknown {
   if (!(error instanceof InputError) || error.code !== 'csv-missing-column' || error.location.key === undefined) return error;
   const column = error.location.key;
-  const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : t.of === column));
+  if (descriptor.data.weighting?.column === column) {
+    const w = descriptor.data.weighting;
+    return new InputError(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
+  }
+  const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column));
   const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
   if (asker === null) return error;
   return new InputError(error.code, `${error.message} (asked for by ${asker} of ${clip(descriptor.file)})`, error.location);

@@ -14,4 +14,11 @@ export interface ModelData {
   rows: number;
   /** Repository-relative file path. */
   file: string;
+  /**
+   * Row weights w (>= 0, finite) when the descriptor gives `data.weight` or `data.sigma`
+   * (then w = 1 / sigma^2); absent: every row weighs 1.
+   */
+  weights?: Float64Array;
+  /** Standard uncertainties of the target when the descriptor gives `data.sigma`. */
+  sigma?: Float64Array;
 }

@@ -11,7 +11,7 @@ import { addProducts } from '../kernels/index.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { createTerm, type Term } from '../design/terms/index.js';
 import { fitLogistic, rowDeviance, type LogisticRows } from '../fit/logistic.js';
-import { oneStandardErrorRule, sweepTarget } from './complexity.js';
+import { oneStandardErrorRule, sweepTarget, type SweepKind } from './complexity.js';
 import { assignFolds } from './folds.js';
 
 /** One point of a classifier's complexity sweep. */
@@ -23,7 +23,7 @@ export interface ClassifierSweepPoint {
 
 /** A classifier's complexity sweep (see checks/complexity.ts for the regression one). */
 export interface ClassifierSweep {
-  kind: 'degree' | 'width' | 'ridge';
+  kind: SweepKind;
   line: number;
   points: ClassifierSweepPoint[];
   /** Index of the model's current setting among the points. */

@@ -5,7 +5,8 @@
  * section 7.10, the "one-standard-error" rule).
  */
 import { createTerm, type Term } from '../design/terms/index.js';
-import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
+import type { Descriptor, FourierTermSpec, MultiPolynomialTermSpec, PolynomialTermSpec, RbfTermSpec, SplineTermSpec, TermSpec } from '../config/types.js';
+import { InputError } from '../core/errors.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { solveCoefficients, type FitResult, type QrAccumulator } from '../fit/index.js';
 import { ridgePath } from '../fit/ridge-path.js';
@@ -41,7 +42,7 @@ export function oneStandardErrorRule(curve: readonly CurvePoint[]): { best: numb
 }
 
 /** Which setting a sweep varies. */
-export type SweepKind = 'degree' | 'width' | 'ridge';
+export type SweepKind = 'degree' | 'width' | 'ridge' | 'knots' | 'harmonics';
 
 /** One setting of the sweep with its cross-validation figures. */
 export interface SweepPoint {
@@ -106,15 +107,46 @@ export function sweepTarget(descriptor: Descriptor, design: Design): { kind: Swe
   if (descriptor.fit.ridge > 0) return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
   let poly = -1;
   let rbf = -1;
+  let spline = -1;
+  let fourier = -1;
   design.terms.forEach((t, i) => {
     const spec = t.spec;
-    if (spec.kind === 'polynomial' && (poly < 0 || spec.degree > (design.terms[poly].spec as PolynomialTermSpec).degree)) poly = i;
-    if (spec.kind === 'rbf' && rbf < 0) rbf = i;
+    if ((spec.kind === 'polynomial' || spec.kind === 'multi-polynomial') && (poly < 0 || spec.degree > (design.terms[poly].spec as PolynomialTermSpec).degree)) poly = i;
+    if ((spec.kind === 'rbf' || spec.kind === 'multi-rbf') && rbf < 0) rbf = i;
+    if (spec.kind === 'spline' && spline < 0) spline = i;
+    if (spec.kind === 'fourier' && fourier < 0) fourier = i;
   });
   if (poly >= 0) return { kind: 'degree', term: poly, line: design.terms[poly].spec.line };
   if (rbf >= 0) return { kind: 'width', term: rbf, line: design.terms[rbf].spec.line };
+  if (spline >= 0) return { kind: 'knots', term: spline, line: design.terms[spline].spec.line };
+  if (fourier >= 0) return { kind: 'harmonics', term: fourier, line: design.terms[fourier].spec.line };
   if (design.p > (design.intercept ? 1 : 0)) return { kind: 'ridge', term: -1, line: descriptor.fit.ridgeLine };
   return null;
+}
+
+/** Most design columns a degree setting of a polynomial over several inputs may build in a sweep. */
+export const MAX_SWEEP_COLUMNS = 200;
+
+/** Columns of a polynomial over k inputs of degree g: C(k + g, g) - 1. */
+function monomialCount(k: number, g: number): number {
+  let c = 1;
+  for (let i = 1; i <= g; i++) c = (c * (k + i)) / i;
+  return Math.round(c) - 1;
+}
+
+/** Knot counts 1 .. current + 4 (at most 100) of a spline, harmonics 1 .. current + 3 (at most 50) of a Fourier term; simplest first. */
+function countSettings(spec: TermSpec): { value: number; current: boolean }[] {
+  const current = spec.kind === 'spline' ? (spec.knots.kind === 'list' ? spec.knots.values.length : spec.knots.count) : spec.kind === 'fourier' ? spec.harmonics : 1;
+  const top = spec.kind === 'spline' ? Math.min(100, current + 4) : Math.min(50, current + 3);
+  return Array.from({ length: top }, (_, i) => ({ value: i + 1, current: i + 1 === current }));
+}
+
+/** The term's spec with the swept setting changed (knots become a count at the training quantiles). */
+function changedSpec(spec: TermSpec, kind: SweepKind, value: number): TermSpec {
+  if (kind === 'degree') return { ...(spec as PolynomialTermSpec | MultiPolynomialTermSpec), degree: value };
+  if (kind === 'width') return { ...(spec as RbfTermSpec), width: value };
+  if (kind === 'knots') return { ...(spec as SplineTermSpec), knots: { kind: 'count', count: value } };
+  return { ...(spec as FourierTermSpec), harmonics: value };
 }
 
 /**
@@ -222,17 +254,28 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
     if (target.kind === 'degree') {
       const degree = (spec as PolynomialTermSpec).degree;
       const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
-      for (let g = 1; g <= top; g++) settings.push({ value: g, current: g === degree });
-    } else {
+      // Over several inputs the columns grow as C(k + g, g) - 1: stop before MAX_SWEEP_COLUMNS.
+      const inputs = spec.kind === 'multi-polynomial' ? spec.of.length : 1;
+      for (let g = 1; g <= top; g++) if (g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS) settings.push({ value: g, current: g === degree });
+    } else if (target.kind === 'width') {
       const width = (spec as RbfTermSpec).width;
       for (let t = 4; t >= -2; t--) settings.push({ value: width * 2 ** t, current: t === 0 });
+    } else {
+      settings.push(...countSettings(spec));
     }
     for (const { value, current } of settings) {
-      const changed =
-        target.kind === 'degree' ? { ...(spec as PolynomialTermSpec), degree: value } : { ...(spec as RbfTermSpec), width: value };
-      const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
-      const d = createDesign(terms, design.intercept);
       const label = `${target.kind} ${formatSetting(value)}`;
+      let d: Design;
+      try {
+        const changed = current ? spec : changedSpec(spec, target.kind, value);
+        const terms: Term[] = design.terms.map((t, i) => (i === target.term ? createTerm(changed, trainColumns, descriptor.file) : t));
+        d = createDesign(terms, design.intercept);
+      } catch (error) {
+        // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) leaves a gap.
+        if (!(error instanceof InputError)) throw error;
+        curve.push({ setting: value, label, parameters: Number.NaN, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+        continue;
+      }
       try {
         const factors = complementFactors(foldFactors(d, rows, folds));
         const coefficients = complementCoefficients(factors, [ridge], d.penalised);

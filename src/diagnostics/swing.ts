@@ -3,6 +3,7 @@
  * training targets on inputs between the training rows and just past their range.
  */
 import { createDesign, type Design } from '../design/design-matrix.js';
+import type { Term } from '../design/terms/index.js';
 import { predictRows } from '../design/blocks.js';
 import type { Rows } from './cross-validation.js';
 import { columnMedian, selectKth } from './column-median.js';
@@ -446,10 +447,23 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const grids: SwingGrid[] = [];
   const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
   for (let c = 0; c < d; c++) {
+    // A category input takes only its level codes: scanned level by level, no margins.
+    const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
+    if (discrete !== undefined) {
+      if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
+      continue;
+    }
     const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
     const sample = scratch.subarray(0, len);
+    // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
+    const onScale = inputScaleOf(design, c);
+    if (onScale !== null) for (let i = 0; i < len; i++) sample[i] = onScale.forward(sample[i]);
     const grid = gridFromSorted(sortFloat64(sample, radixScratch), len, gridOptions, new Float64Array(radixScratch.buffer, 0, len));
-    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: grid.beyond });
+    if (onScale !== null) {
+      grid.inside = grid.inside.map(onScale.inverse);
+      grid.beyond = grid.beyond.map(onScale.inverse);
+    }
+    if (grid.inside.length > 0) grids.push({ input: c, inside: grid.inside, beyond: admitted(design, c, grid.beyond) });
   }
 
   // Several inputs: segments between sampled rows and their nearest neighbours.
@@ -464,10 +478,38 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     const flat = scaledRows(train.inputs, rows);
     const kk = Math.min(kNear, s - 1);
     const pairs = nearestPairs(flat, s, d, kk, rows);
-    if (pairs.length > 0 && perSegment > 0) segmentColumns = segmentPoints(train.inputs, pairs, perSegment);
+    if (pairs.length > 0 && perSegment > 0) segmentColumns = admittedRows(design, segmentPoints(train.inputs, pairs, perSegment));
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
   return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+}
+
+/** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
+function admittedRows(design: Design, columns: Float64Array[]): Float64Array[] {
+  const checks = design.terms.filter((t) => t.admits !== undefined);
+  if (checks.length === 0 || columns.length === 0) return columns;
+  const keep: number[] = [];
+  for (let i = 0; i < columns[0].length; i++) {
+    if (checks.every((t) => t.inputs.every((name) => t.admits?.(name, columns[design.inputs.indexOf(name)][i]) ?? true))) keep.push(i);
+  }
+  return columns.map((col) => Float64Array.from(keep, (i) => col[i]));
+}
+
+/** The transformed scale every term reading input c shares, or null (no transform, or different ones). */
+function inputScaleOf(design: Design, c: number): NonNullable<Term['inputScale']> | null {
+  const name = design.inputs[c];
+  const readers = design.terms.filter((t) => t.inputs.includes(name));
+  const first = readers[0]?.inputScale;
+  if (first === undefined || !readers.every((t) => t.inputScale?.name === first.name)) return null;
+  return first;
+}
+
+/** The margin points every term reading input c is defined at (e.g. no x <= 0 under `transform: log`). */
+function admitted(design: Design, c: number, points: Float64Array): Float64Array {
+  const name = design.inputs[c];
+  const checks = design.terms.filter((t) => t.admits !== undefined && t.inputs.includes(name));
+  if (checks.length === 0) return points;
+  return points.filter((v) => checks.every((t) => t.admits?.(name, v) ?? true));
 }
 
 /**

@@ -12,6 +12,7 @@ import type { CrossValidation, FoldFactors } from '../diagnostics/cross-validati
 import type { Folds } from '../diagnostics/folds.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../diagnostics/regression-metrics.js';
 import { scoreShipped, type ShippedScore } from '../diagnostics/shipped.js';
+import { weightedErrorMeasures } from '../diagnostics/weighted-metrics.js';
 import type { FitResult } from '../fit/index.js';
 import type { RepoReader } from '../repo/types.js';
 import { foldPass, refinePass, scoringPass } from './passes.js';
@@ -77,12 +78,15 @@ function coreMetrics(
   holdoutPredictions: Float64Array,
 ): CoreMetrics {
   const { train, holdout } = tables;
-  const trainSums = emptySums();
-  addErrors(trainSums, train.y, trainPredictions, train.rows);
-  const holdoutSums = emptySums();
-  addErrors(holdoutSums, holdout.y, holdoutPredictions, holdout.rows);
-  const tr = errorMeasures(trainSums);
-  const ho = errorMeasures(holdoutSums);
+  const measures = (data: ModelTables['train'], predictions: Float64Array) => {
+    // Weighted rows get the weighted measures (diagnostics/weighted-metrics.ts).
+    if (data.weights !== undefined) return weightedErrorMeasures(data.y, predictions, data.weights, data.rows);
+    const sums = emptySums();
+    addErrors(sums, data.y, predictions, data.rows);
+    return errorMeasures(sums);
+  };
+  const tr = measures(train, trainPredictions);
+  const ho = measures(holdout, holdoutPredictions);
   let maxStd = Number.NaN;
   let maxStdColumn = -1;
   let maxAbs = 0;

@@ -10,6 +10,7 @@
 import { clip, InputError } from '../core/errors.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
+import { scaleBlockRows, weightedDesign } from '../design/weighted-design.js';
 import { complementFactors, crossValidate, FoldFactorBuilder, mergeFactors, type CrossValidation, type FoldFactors } from '../diagnostics/cross-validation.js';
 import { fitFactor, RefinementPass, refinementApplies, type FitResult } from '../fit/index.js';
 import { firstBeyond } from '../kernels/index.js';
@@ -34,10 +35,13 @@ export function foldPass(plan: ModelPlan): FoldPass {
   const train = tables.train;
   const builder = new FoldFactorBuilder(design.p, folds);
   const spread = new ColumnSpread(design.p);
+  const scaling = plan.scaling ?? null;
   forEachBlock(design, train, (X, start, m) => {
     checkRange(plan, X, start, m);
-    builder.add(X, train.y, start, m);
     spread.add(X, m);
+    // A weighted fit folds the rows scaled by sqrt(w) (design/weighted-design.ts).
+    if (scaling !== null) scaleBlockRows(X, m, design.p, scaling.sqrtW, start);
+    builder.add(X, scaling === null ? train.y : scaling.y, start, m);
   });
   const fit = fitFactor(mergeFactors(builder.factors, design.p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
   const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? complementFactors(builder.factors) : [] };
@@ -52,7 +56,12 @@ export function refinePass(plan: ModelPlan, fit: FitResult): FitResult {
   if (!refinementApplies(fit)) return fit;
   const train = plan.tables.train;
   const pass = new RefinementPass(fit);
-  forEachBlock(plan.design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
+  const scaling = plan.scaling ?? null;
+  const y = scaling === null ? train.y : scaling.y;
+  forEachBlock(plan.design, train, (X, start, m) => {
+    if (scaling !== null) scaleBlockRows(X, m, plan.design.p, scaling.sqrtW, start);
+    pass.addRows(X, y.subarray(start, start + m), m);
+  });
   return pass.finish();
 }
 
@@ -70,8 +79,16 @@ export function scoringPass(plan: ModelPlan, fit: FitResult, foldFactors: FoldFa
   const { train, holdout } = tables;
   let trainPredictions: Float64Array = new Float64Array(train.rows);
   let crossValidation: CrossValidation | null;
+  const scaling = plan.scaling ?? null;
   try {
-    crossValidation = crossValidate(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
+    if (scaling === null) {
+      crossValidation = crossValidate(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
+    } else {
+      // The scaled problem's errors are sqrt(w) times the residuals: weighted cross-validation.
+      const rows = { inputs: train.inputs, y: scaling.y, rows: train.rows };
+      crossValidation = crossValidate(weightedDesign(design, scaling), rows, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements });
+      trainPredictions = predictRows(design, train, fit.coefficients);
+    }
   } catch {
     // The cross-validation check runs it again and reports why it could not be computed (as a
     // check that throws does); the fit itself stands.

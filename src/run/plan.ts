@@ -9,6 +9,8 @@ import { loadModelData, type ModelTables } from '../data/load-model-data.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { meanAndSd } from '../design/stats.js';
 import { createTerm, termInputs } from '../design/terms/index.js';
+import { checkTransformDomain } from '../design/terms/transform.js';
+import { rowScaling, type RowScaling } from '../design/weighted-design.js';
 import { assignFolds, type Folds } from '../diagnostics/folds.js';
 import { firstBeyond } from '../kernels/index.js';
 import type { RepoReader } from '../repo/types.js';
@@ -36,6 +38,8 @@ export interface ModelPlan {
   folds: Folds;
   /** Population standard deviation of the training target (> 0). */
   targetSd: number;
+  /** sqrt(w) and sqrt(w) y of the training rows for a weighted fit; null (or absent) when unweighted. */
+  scaling?: RowScaling | null;
 }
 
 /**
@@ -50,8 +54,10 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
   const { train } = tables;
   const file = descriptor.file;
 
+  // A transformed input outside its transform's domain is an error naming file, line, column, value.
+  for (const spec of descriptor.terms) for (const data of [train, tables.holdout]) checkTransformDomain(spec, termInputs(spec), data, inputs);
   // Fix term parameters from the training rows, then check the size before taking memory.
-  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file));
+  const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file, tables.levels));
   const design = createDesign(terms, descriptor.fit.intercept);
   const p = design.p;
   if (p > MAX_PARAMETERS) {
@@ -87,5 +93,5 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
     );
   }
   const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-  return { descriptor, tables, design, folds, targetSd: targetStats.sd };
+  return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
 }

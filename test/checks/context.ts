@@ -2,7 +2,7 @@
 // check tests do not depend on the YAML and CSV readers.
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { createTerm } from '../../src/design/terms/index.js';
+import { createTerm, termInputs } from '../../src/design/terms/index.js';
 import { meanAndSd, range } from '../../src/design/stats.js';
 import type { CheckContext, CoreMetrics } from '../../src/checks/types.js';
 import type { ModelData } from '../../src/data/model-data.js';
@@ -13,6 +13,7 @@ import type { Descriptor, Limit, TermSpec } from '../../src/config/types.js';
 import { createDesign } from '../../src/design/design-matrix.js';
 import { fitFactor, QrAccumulator } from '../../src/fit/index.js';
 import { forEachBlock, predictRows } from '../../src/design/blocks.js';
+import { addErrors, emptySums, errorMeasures } from '../../src/diagnostics/regression-metrics.js';
 
 /** A term as written in a test, its line optional (distributes over the term kinds). */
 export type TermWithoutLine = TermSpec extends infer T ? (T extends TermSpec ? Omit<T, 'line'> : never) : never;
@@ -104,7 +105,7 @@ export function descriptor(options: {
 /** Fits a descriptor on two tables and returns a check context (core metrics filled as evaluate.ts does). */
 export function buildContext(d: Descriptor, train: Table, holdout: Table): CheckContext {
   const inputs: string[] = [];
-  for (const t of d.terms) for (const c of t.kind === 'linear' ? t.columns : [t.of]) if (!inputs.includes(c)) inputs.push(c);
+  for (const t of d.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
   const pick = (tb: Table): ModelData => {
     const col = (name: string): Float64Array => {
       const k = tb.names.indexOf(name);
@@ -123,21 +124,22 @@ export function buildContext(d: Descriptor, train: Table, holdout: Table): Check
   const acc = new QrAccumulator(design.p);
   forEachBlock(design, tr, (X, start, m) => acc.addRows(X, tr.y.subarray(start, start + m), m));
   const fit = fitFactor(acc, { ridge: d.fit.ridge, penalised: design.penalised });
-  const rmse = (data: ModelData): number => {
-    const p = predictRows(design, data, fit.coefficients);
-    let s = 0;
-    for (let i = 0; i < data.rows; i++) s += (data.y[i] - p[i]) ** 2;
-    return Math.sqrt(s / data.rows);
+  const measures = (data: ModelData) => {
+    const sums = emptySums();
+    addErrors(sums, data.y, predictRows(design, data, fit.coefficients), data.rows);
+    return errorMeasures(sums);
   };
-  const trainRmse = rmse(tr);
-  const holdoutRmse = rmse(ho);
+  const trainMeasures = measures(tr);
+  const holdoutMeasures = measures(ho);
+  const trainRmse = trainMeasures.rmse;
+  const holdoutRmse = holdoutMeasures.rmse;
   const metrics: CoreMetrics = {
     trainRmse,
     holdoutRmse,
-    trainMae: Number.NaN,
-    holdoutMae: Number.NaN,
-    trainR2: Number.NaN,
-    holdoutR2: Number.NaN,
+    trainMae: trainMeasures.mae,
+    holdoutMae: holdoutMeasures.mae,
+    trainR2: trainMeasures.r2,
+    holdoutR2: holdoutMeasures.r2,
     gapRatio: holdoutRmse / trainRmse,
     paramsPerSample: design.p / tr.rows,
     maxStdCoefficient: Number.NaN,

@@ -3,9 +3,9 @@
 "use strict";
 import func1Module from "ajv/dist/runtime/ucs2length.js";
 export const validateSettings = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const func1 = typeof func1Module === "function" ? func1Module : func1Module.default;
-const schema20 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}};
+const schema20 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema21 = {"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]};
 
@@ -363,6 +363,12 @@ vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.error
 errors = vErrors.length;
 }
 }
+if(data.swing_spikes !== undefined){
+if(!(validate54(data.swing_spikes, {instancePath:instancePath+"/swing_spikes",parentData:data,parentDataProperty:"swing_spikes",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+errors = vErrors.length;
+}
+}
 if(data.leakage !== undefined){
 if(!(validate54(data.leakage, {instancePath:instancePath+"/leakage",parentData:data,parentDataProperty:"leakage",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
@@ -383,6 +389,30 @@ errors = vErrors.length;
 }
 if(data.complexity !== undefined){
 if(!(validate54(data.complexity, {instancePath:instancePath+"/complexity",parentData:data,parentDataProperty:"complexity",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+errors = vErrors.length;
+}
+}
+if(data.holdout_r2 !== undefined){
+if(!(validate54(data.holdout_r2, {instancePath:instancePath+"/holdout_r2",parentData:data,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+errors = vErrors.length;
+}
+}
+if(data.holdout_rmse !== undefined){
+if(!(validate54(data.holdout_rmse, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+errors = vErrors.length;
+}
+}
+if(data.holdout_mae !== undefined){
+if(!(validate54(data.holdout_mae, {instancePath:instancePath+"/holdout_mae",parentData:data,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+errors = vErrors.length;
+}
+}
+if(data.chi_square !== undefined){
+if(!(validate54(data.chi_square, {instancePath:instancePath+"/chi_square",parentData:data,parentDataProperty:"chi_square",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
 errors = vErrors.length;
 }
@@ -732,16 +762,16 @@ return errors === 0;
 }
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-export const validateDescriptor = validate70;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+export const validateDescriptor = validate75;
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}};
+const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
 
-function validate72(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate72.evaluated;
+const evaluated0 = validate77.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1085,18 +1115,18 @@ vErrors = null;
 }
 }
 }
-validate72.errors = vErrors;
+validate77.errors = vErrors;
 evaluated0.props = props0;
 evaluated0.items = items0;
 return errors === 0;
 }
-validate72.evaluated = {"dynamicProps":true,"dynamicItems":true};
+validate77.evaluated = {"dynamicProps":true,"dynamicItems":true};
 
 
-function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate76(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate71.evaluated;
+const evaluated0 = validate76.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1126,7 +1156,7 @@ errors++;
 }
 for(const key0 in data){
 const _errs1 = errors;
-if(!(((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf"))){
+if(!((((((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf")) || (key0 === "fourier")) || (key0 === "spline")) || (key0 === "category"))){
 const err2 = {instancePath,schemaPath:"#/propertyNames/enum",keyword:"enum",params:{allowedValues: schema23.propertyNames.enum},message:"must be equal to one of the allowed values",schema:schema23.propertyNames.enum,parentSchema:schema23.propertyNames,data:key0,propertyName:key0};
 if(vErrors === null){
 vErrors = [err2];
@@ -1223,7 +1253,7 @@ vErrors.push(err9);
 errors++;
 }
 for(const key1 in data2){
-if(!((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale"))){
+if(!(((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale")) || (key1 === "transform"))){
 const err10 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.polynomial,data:data2};
 if(vErrors === null){
 vErrors = [err10];
@@ -1236,9 +1266,13 @@ errors++;
 }
 if(data2.of !== undefined){
 let data3 = data2.of;
+const _errs10 = errors;
+let valid5 = false;
+let passing0 = null;
+const _errs11 = errors;
 if(typeof data3 === "string"){
 if(func1(data3) < 1){
-const err11 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.polynomial.properties.of,data:data3};
+const err11 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.polynomial.properties.of.oneOf[0],data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1249,7 +1283,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.polynomial.properties.of.type,parentSchema:schema23.properties.polynomial.properties.of,data:data3};
+const err12 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.polynomial.properties.of.oneOf[0].type,parentSchema:schema23.properties.polynomial.properties.of.oneOf[0],data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -1258,11 +1292,15 @@ vErrors.push(err12);
 }
 errors++;
 }
+var _valid0 = _errs11 === errors;
+if(_valid0){
+valid5 = true;
+passing0 = 0;
 }
-if(data2.degree !== undefined){
-let data4 = data2.degree;
-if(!(((typeof data4 == "number") && (!(data4 % 1) && !isNaN(data4))) && (isFinite(data4)))){
-const err13 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.polynomial.properties.degree.type,parentSchema:schema23.properties.polynomial.properties.degree,data:data4};
+const _errs13 = errors;
+if(Array.isArray(data3)){
+if(data3.length > 10){
+const err13 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1271,9 +1309,8 @@ vErrors.push(err13);
 }
 errors++;
 }
-if((typeof data4 == "number") && (isFinite(data4))){
-if(data4 > 30 || isNaN(data4)){
-const err14 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 30},message:"must be <= 30",schema:30,parentSchema:schema23.properties.polynomial.properties.degree,data:data4};
+if(data3.length < 2){
+const err14 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1282,8 +1319,12 @@ vErrors.push(err14);
 }
 errors++;
 }
-if(data4 < 1 || isNaN(data4)){
-const err15 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.polynomial.properties.degree,data:data4};
+const len1 = data3.length;
+for(let i1=0; i1<len1; i1++){
+let data4 = data3[i1];
+if(typeof data4 === "string"){
+if(func1(data4) < 1){
+const err15 = {instancePath:instancePath+"/polynomial/of/" + i1,schemaPath:"#/properties/polynomial/properties/of/oneOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1].items,data:data4};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1293,11 +1334,8 @@ vErrors.push(err15);
 errors++;
 }
 }
-}
-if(data2.shift !== undefined){
-let data5 = data2.shift;
-if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err16 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.shift.type,parentSchema:schema23.properties.polynomial.properties.shift,data:data5};
+else {
+const err16 = {instancePath:instancePath+"/polynomial/of/" + i1,schemaPath:"#/properties/polynomial/properties/of/oneOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.polynomial.properties.of.oneOf[1].items.type,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1].items,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1307,11 +1345,18 @@ vErrors.push(err16);
 errors++;
 }
 }
-if(data2.scale !== undefined){
-let data6 = data2.scale;
-if((typeof data6 == "number") && (isFinite(data6))){
-if(data6 <= 0 || isNaN(data6)){
-const err17 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.polynomial.properties.scale,data:data6};
+let i2 = data3.length;
+let j0;
+if(i2 > 1){
+const indices0 = {};
+for(;i2--;){
+let item0 = data3[i2];
+if(typeof item0 !== "string"){
+continue;
+}
+if(typeof indices0[item0] == "number"){
+j0 = indices0[item0];
+const err17 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/uniqueItems",keyword:"uniqueItems",params:{i: i2, j: j0},message:"must NOT have duplicate items (items ## "+j0+" and "+i2+" are identical)",schema:true,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1319,10 +1364,14 @@ else {
 vErrors.push(err17);
 }
 errors++;
+break;
+}
+indices0[item0] = i2;
+}
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.scale.type,parentSchema:schema23.properties.polynomial.properties.scale,data:data6};
+const err18 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.polynomial.properties.of.oneOf[1].type,parentSchema:schema23.properties.polynomial.properties.of.oneOf[1],data:data3};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1331,10 +1380,19 @@ vErrors.push(err18);
 }
 errors++;
 }
-}
+var _valid0 = _errs13 === errors;
+if(_valid0 && valid5){
+valid5 = false;
+passing0 = [passing0, 1];
 }
 else {
-const err19 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.polynomial.type,parentSchema:schema23.properties.polynomial,data:data2};
+if(_valid0){
+valid5 = true;
+passing0 = 1;
+}
+}
+if(!valid5){
+const err19 = {instancePath:instancePath+"/polynomial/of",schemaPath:"#/properties/polynomial/properties/of/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema23.properties.polynomial.properties.of.oneOf,parentSchema:schema23.properties.polynomial.properties.of,data:data3};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1343,12 +1401,22 @@ vErrors.push(err19);
 }
 errors++;
 }
+else {
+errors = _errs10;
+if(vErrors !== null){
+if(_errs10){
+vErrors.length = _errs10;
 }
-if(data.rbf !== undefined){
-let data7 = data.rbf;
-if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
-if(data7.of === undefined){
-const err20 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data7};
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data2.degree !== undefined){
+let data5 = data2.degree;
+if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
+const err20 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.polynomial.properties.degree.type,parentSchema:schema23.properties.polynomial.properties.degree,data:data5};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1357,8 +1425,9 @@ vErrors.push(err20);
 }
 errors++;
 }
-if(data7.centers === undefined){
-const err21 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "centers"},message:"must have required property '"+"centers"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data7};
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 > 30 || isNaN(data5)){
+const err21 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 30},message:"must be <= 30",schema:30,parentSchema:schema23.properties.polynomial.properties.degree,data:data5};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1367,8 +1436,8 @@ vErrors.push(err21);
 }
 errors++;
 }
-if(data7.width === undefined){
-const err22 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "width"},message:"must have required property '"+"width"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data7};
+if(data5 < 1 || isNaN(data5)){
+const err22 = {instancePath:instancePath+"/polynomial/degree",schemaPath:"#/properties/polynomial/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.polynomial.properties.degree,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1377,9 +1446,16 @@ vErrors.push(err22);
 }
 errors++;
 }
-for(const key2 in data7){
-if(!(((key2 === "of") || (key2 === "centers")) || (key2 === "width"))){
-const err23 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf,data:data7};
+}
+}
+if(data2.shift !== undefined){
+let data6 = data2.shift;
+const _errs20 = errors;
+let valid9 = false;
+let passing1 = null;
+const _errs21 = errors;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err23 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/0/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.shift.oneOf[0].type,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[0],data:data6};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -1388,12 +1464,15 @@ vErrors.push(err23);
 }
 errors++;
 }
+var _valid1 = _errs21 === errors;
+if(_valid1){
+valid9 = true;
+passing1 = 0;
 }
-if(data7.of !== undefined){
-let data8 = data7.of;
-if(typeof data8 === "string"){
-if(func1(data8) < 1){
-const err24 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of,data:data8};
+const _errs23 = errors;
+if(Array.isArray(data6)){
+if(data6.length > 10){
+const err24 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -1402,9 +1481,8 @@ vErrors.push(err24);
 }
 errors++;
 }
-}
-else {
-const err25 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.type,parentSchema:schema23.properties.rbf.properties.of,data:data8};
+if(data6.length < 2){
+const err25 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -1413,18 +1491,11 @@ vErrors.push(err25);
 }
 errors++;
 }
-}
-if(data7.centers !== undefined){
-if(!(validate72(data7.centers, {instancePath:instancePath+"/rbf/centers",parentData:data7,parentDataProperty:"centers",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
-errors = vErrors.length;
-}
-}
-if(data7.width !== undefined){
-let data10 = data7.width;
-if((typeof data10 == "number") && (isFinite(data10))){
-if(data10 <= 0 || isNaN(data10)){
-const err26 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data10};
+const len2 = data6.length;
+for(let i3=0; i3<len2; i3++){
+let data7 = data6[i3];
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err26 = {instancePath:instancePath+"/polynomial/shift/" + i3,schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.shift.oneOf[1].items.type,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1].items,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -1434,8 +1505,9 @@ vErrors.push(err26);
 errors++;
 }
 }
+}
 else {
-const err27 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data10};
+const err27 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.polynomial.properties.shift.oneOf[1].type,parentSchema:schema23.properties.polynomial.properties.shift.oneOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -1444,10 +1516,19 @@ vErrors.push(err27);
 }
 errors++;
 }
-}
+var _valid1 = _errs23 === errors;
+if(_valid1 && valid9){
+valid9 = false;
+passing1 = [passing1, 1];
 }
 else {
-const err28 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data7};
+if(_valid1){
+valid9 = true;
+passing1 = 1;
+}
+}
+if(!valid9){
+const err28 = {instancePath:instancePath+"/polynomial/shift",schemaPath:"#/properties/polynomial/properties/shift/oneOf",keyword:"oneOf",params:{passingSchemas: passing1},message:"must match exactly one schema in oneOf",schema:schema23.properties.polynomial.properties.shift.oneOf,parentSchema:schema23.properties.polynomial.properties.shift,data:data6};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -1456,10 +1537,27 @@ vErrors.push(err28);
 }
 errors++;
 }
-}
+else {
+errors = _errs20;
+if(vErrors !== null){
+if(_errs20){
+vErrors.length = _errs20;
 }
 else {
-const err29 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+vErrors = null;
+}
+}
+}
+}
+if(data2.scale !== undefined){
+let data8 = data2.scale;
+const _errs28 = errors;
+let valid12 = false;
+let passing2 = null;
+const _errs29 = errors;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err29 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/0/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[0],data:data8};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -1468,18 +1566,1297 @@ vErrors.push(err29);
 }
 errors++;
 }
-validate71.errors = vErrors;
+}
+else {
+const err30 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/0/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.scale.oneOf[0].type,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[0],data:data8};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+var _valid2 = _errs29 === errors;
+if(_valid2){
+valid12 = true;
+passing2 = 0;
+}
+const _errs31 = errors;
+if(Array.isArray(data8)){
+if(data8.length > 10){
+const err31 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1],data:data8};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+if(data8.length < 2){
+const err32 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1],data:data8};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+const len3 = data8.length;
+for(let i4=0; i4<len3; i4++){
+let data9 = data8[i4];
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 <= 0 || isNaN(data9)){
+const err33 = {instancePath:instancePath+"/polynomial/scale/" + i4,schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/items/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1].items,data:data9};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/polynomial/scale/" + i4,schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.polynomial.properties.scale.oneOf[1].items.type,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1].items,data:data9};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.polynomial.properties.scale.oneOf[1].type,parentSchema:schema23.properties.polynomial.properties.scale.oneOf[1],data:data8};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+var _valid2 = _errs31 === errors;
+if(_valid2 && valid12){
+valid12 = false;
+passing2 = [passing2, 1];
+}
+else {
+if(_valid2){
+valid12 = true;
+passing2 = 1;
+}
+}
+if(!valid12){
+const err36 = {instancePath:instancePath+"/polynomial/scale",schemaPath:"#/properties/polynomial/properties/scale/oneOf",keyword:"oneOf",params:{passingSchemas: passing2},message:"must match exactly one schema in oneOf",schema:schema23.properties.polynomial.properties.scale.oneOf,parentSchema:schema23.properties.polynomial.properties.scale,data:data8};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+else {
+errors = _errs28;
+if(vErrors !== null){
+if(_errs28){
+vErrors.length = _errs28;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data2.transform !== undefined){
+let data10 = data2.transform;
+if(!((((data10 === "log") || (data10 === "log1p")) || (data10 === "sqrt")) || (data10 === "standardise"))){
+const err37 = {instancePath:instancePath+"/polynomial/transform",schemaPath:"#/properties/polynomial/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.polynomial.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.polynomial.properties.transform.enum,parentSchema:schema23.properties.polynomial.properties.transform,data:data10};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/polynomial",schemaPath:"#/properties/polynomial/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.polynomial.type,parentSchema:schema23.properties.polynomial,data:data2};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data.rbf !== undefined){
+let data11 = data.rbf;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+if(data11.of === undefined){
+const err39 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data11};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+if(data11.centers === undefined){
+const err40 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "centers"},message:"must have required property '"+"centers"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data11};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+if(data11.width === undefined){
+const err41 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/required",keyword:"required",params:{missingProperty: "width"},message:"must have required property '"+"width"+"'",schema:schema23.properties.rbf.required,parentSchema:schema23.properties.rbf,data:data11};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+for(const key2 in data11){
+if(!((((key2 === "of") || (key2 === "centers")) || (key2 === "width")) || (key2 === "transform"))){
+const err42 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf,data:data11};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+if(data11.of !== undefined){
+let data12 = data11.of;
+const _errs40 = errors;
+let valid16 = false;
+let passing3 = null;
+const _errs41 = errors;
+if(typeof data12 === "string"){
+if(func1(data12) < 1){
+const err43 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of.oneOf[0],data:data12};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+else {
+const err44 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.oneOf[0].type,parentSchema:schema23.properties.rbf.properties.of.oneOf[0],data:data12};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+var _valid3 = _errs41 === errors;
+if(_valid3){
+valid16 = true;
+passing3 = 0;
+}
+const _errs43 = errors;
+if(Array.isArray(data12)){
+if(data12.length > 10){
+const err45 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+if(data12.length < 2){
+const err46 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+const len4 = data12.length;
+for(let i5=0; i5<len4; i5++){
+let data13 = data12[i5];
+if(typeof data13 === "string"){
+if(func1(data13) < 1){
+const err47 = {instancePath:instancePath+"/rbf/of/" + i5,schemaPath:"#/properties/rbf/properties/of/oneOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.rbf.properties.of.oneOf[1].items,data:data13};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+}
+else {
+const err48 = {instancePath:instancePath+"/rbf/of/" + i5,schemaPath:"#/properties/rbf/properties/of/oneOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.rbf.properties.of.oneOf[1].items.type,parentSchema:schema23.properties.rbf.properties.of.oneOf[1].items,data:data13};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+let i6 = data12.length;
+let j1;
+if(i6 > 1){
+const indices1 = {};
+for(;i6--;){
+let item1 = data12[i6];
+if(typeof item1 !== "string"){
+continue;
+}
+if(typeof indices1[item1] == "number"){
+j1 = indices1[item1];
+const err49 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/uniqueItems",keyword:"uniqueItems",params:{i: i6, j: j1},message:"must NOT have duplicate items (items ## "+j1+" and "+i6+" are identical)",schema:true,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+break;
+}
+indices1[item1] = i6;
+}
+}
+}
+else {
+const err50 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.of.oneOf[1].type,parentSchema:schema23.properties.rbf.properties.of.oneOf[1],data:data12};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+var _valid3 = _errs43 === errors;
+if(_valid3 && valid16){
+valid16 = false;
+passing3 = [passing3, 1];
+}
+else {
+if(_valid3){
+valid16 = true;
+passing3 = 1;
+}
+}
+if(!valid16){
+const err51 = {instancePath:instancePath+"/rbf/of",schemaPath:"#/properties/rbf/properties/of/oneOf",keyword:"oneOf",params:{passingSchemas: passing3},message:"must match exactly one schema in oneOf",schema:schema23.properties.rbf.properties.of.oneOf,parentSchema:schema23.properties.rbf.properties.of,data:data12};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+else {
+errors = _errs40;
+if(vErrors !== null){
+if(_errs40){
+vErrors.length = _errs40;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data11.centers !== undefined){
+let data14 = data11.centers;
+const _errs48 = errors;
+let valid20 = false;
+let passing4 = null;
+const _errs49 = errors;
+if(!(validate77(data14, {instancePath:instancePath+"/rbf/centers",parentData:data11,parentDataProperty:"centers",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+errors = vErrors.length;
+}
+else {
+var items4 = validate77.evaluated.items;
+}
+var _valid4 = _errs49 === errors;
+if(_valid4){
+valid20 = true;
+passing4 = 0;
+}
+const _errs50 = errors;
+if(Array.isArray(data14)){
+if(data14.length > 10000){
+const err52 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/1/maxItems",keyword:"maxItems",params:{limit: 10000},message:"must NOT have more than 10000 items",schema:10000,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1],data:data14};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+if(data14.length < 1){
+const err53 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/1/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1],data:data14};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
+const len5 = data14.length;
+for(let i7=0; i7<len5; i7++){
+let data15 = data14[i7];
+if(Array.isArray(data15)){
+if(data15.length > 10){
+const err54 = {instancePath:instancePath+"/rbf/centers/" + i7,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items,data:data15};
+if(vErrors === null){
+vErrors = [err54];
+}
+else {
+vErrors.push(err54);
+}
+errors++;
+}
+if(data15.length < 2){
+const err55 = {instancePath:instancePath+"/rbf/centers/" + i7,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items,data:data15};
+if(vErrors === null){
+vErrors = [err55];
+}
+else {
+vErrors.push(err55);
+}
+errors++;
+}
+const len6 = data15.length;
+for(let i8=0; i8<len6; i8++){
+let data16 = data15[i8];
+if(!((typeof data16 == "number") && (isFinite(data16)))){
+const err56 = {instancePath:instancePath+"/rbf/centers/" + i7+"/" + i8,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.centers.oneOf[1].items.items.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items.items,data:data16};
+if(vErrors === null){
+vErrors = [err56];
+}
+else {
+vErrors.push(err56);
+}
+errors++;
+}
+}
+}
+else {
+const err57 = {instancePath:instancePath+"/rbf/centers/" + i7,schemaPath:"#/properties/rbf/properties/centers/oneOf/1/items/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.centers.oneOf[1].items.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1].items,data:data15};
+if(vErrors === null){
+vErrors = [err57];
+}
+else {
+vErrors.push(err57);
+}
+errors++;
+}
+}
+}
+else {
+const err58 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.centers.oneOf[1].type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[1],data:data14};
+if(vErrors === null){
+vErrors = [err58];
+}
+else {
+vErrors.push(err58);
+}
+errors++;
+}
+var _valid4 = _errs50 === errors;
+if(_valid4 && valid20){
+valid20 = false;
+passing4 = [passing4, 1];
+}
+else {
+if(_valid4){
+valid20 = true;
+passing4 = 1;
+if(items4 !== true){
+items4 = true;
+}
+}
+const _errs56 = errors;
+if(Array.isArray(data14)){
+if(data14.length > 10){
+const err59 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/maxItems",keyword:"maxItems",params:{limit: 10},message:"must NOT have more than 10 items",schema:10,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2],data:data14};
+if(vErrors === null){
+vErrors = [err59];
+}
+else {
+vErrors.push(err59);
+}
+errors++;
+}
+if(data14.length < 2){
+const err60 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2],data:data14};
+if(vErrors === null){
+vErrors = [err60];
+}
+else {
+vErrors.push(err60);
+}
+errors++;
+}
+const len7 = data14.length;
+for(let i9=0; i9<len7; i9++){
+let data17 = data14[i9];
+if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
+if(data17.from === undefined){
+const err61 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.required,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
+if(vErrors === null){
+vErrors = [err61];
+}
+else {
+vErrors.push(err61);
+}
+errors++;
+}
+if(data17.to === undefined){
+const err62 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.required,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
+if(vErrors === null){
+vErrors = [err62];
+}
+else {
+vErrors.push(err62);
+}
+errors++;
+}
+if(data17.count === undefined){
+const err63 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.required,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
+if(vErrors === null){
+vErrors = [err63];
+}
+else {
+vErrors.push(err63);
+}
+errors++;
+}
+for(const key3 in data17){
+if(!(((key3 === "from") || (key3 === "to")) || (key3 === "count"))){
+const err64 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
+if(vErrors === null){
+vErrors = [err64];
+}
+else {
+vErrors.push(err64);
+}
+errors++;
+}
+}
+if(data17.from !== undefined){
+let data18 = data17.from;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+const err65 = {instancePath:instancePath+"/rbf/centers/" + i9+"/from",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from,data:data18};
+if(vErrors === null){
+vErrors = [err65];
+}
+else {
+vErrors.push(err65);
+}
+errors++;
+}
+}
+if(data17.to !== undefined){
+let data19 = data17.to;
+if(!((typeof data19 == "number") && (isFinite(data19)))){
+const err66 = {instancePath:instancePath+"/rbf/centers/" + i9+"/to",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to,data:data19};
+if(vErrors === null){
+vErrors = [err66];
+}
+else {
+vErrors.push(err66);
+}
+errors++;
+}
+}
+if(data17.count !== undefined){
+let data20 = data17.count;
+if(!(((typeof data20 == "number") && (!(data20 % 1) && !isNaN(data20))) && (isFinite(data20)))){
+const err67 = {instancePath:instancePath+"/rbf/centers/" + i9+"/count",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count,data:data20};
+if(vErrors === null){
+vErrors = [err67];
+}
+else {
+vErrors.push(err67);
+}
+errors++;
+}
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 > 100 || isNaN(data20)){
+const err68 = {instancePath:instancePath+"/rbf/centers/" + i9+"/count",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count,data:data20};
+if(vErrors === null){
+vErrors = [err68];
+}
+else {
+vErrors.push(err68);
+}
+errors++;
+}
+if(data20 < 1 || isNaN(data20)){
+const err69 = {instancePath:instancePath+"/rbf/centers/" + i9+"/count",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count,data:data20};
+if(vErrors === null){
+vErrors = [err69];
+}
+else {
+vErrors.push(err69);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err70 = {instancePath:instancePath+"/rbf/centers/" + i9,schemaPath:"#/properties/rbf/properties/centers/oneOf/2/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.properties.centers.oneOf[2].items.type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2].items,data:data17};
+if(vErrors === null){
+vErrors = [err70];
+}
+else {
+vErrors.push(err70);
+}
+errors++;
+}
+}
+}
+else {
+const err71 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf/2/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.rbf.properties.centers.oneOf[2].type,parentSchema:schema23.properties.rbf.properties.centers.oneOf[2],data:data14};
+if(vErrors === null){
+vErrors = [err71];
+}
+else {
+vErrors.push(err71);
+}
+errors++;
+}
+var _valid4 = _errs56 === errors;
+if(_valid4 && valid20){
+valid20 = false;
+passing4 = [passing4, 2];
+}
+else {
+if(_valid4){
+valid20 = true;
+passing4 = 2;
+if(items4 !== true){
+items4 = true;
+}
+}
+}
+}
+if(!valid20){
+const err72 = {instancePath:instancePath+"/rbf/centers",schemaPath:"#/properties/rbf/properties/centers/oneOf",keyword:"oneOf",params:{passingSchemas: passing4},message:"must match exactly one schema in oneOf",schema:schema23.properties.rbf.properties.centers.oneOf,parentSchema:schema23.properties.rbf.properties.centers,data:data14};
+if(vErrors === null){
+vErrors = [err72];
+}
+else {
+vErrors.push(err72);
+}
+errors++;
+}
+else {
+errors = _errs48;
+if(vErrors !== null){
+if(_errs48){
+vErrors.length = _errs48;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data11.width !== undefined){
+let data21 = data11.width;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 <= 0 || isNaN(data21)){
+const err73 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.rbf.properties.width,data:data21};
+if(vErrors === null){
+vErrors = [err73];
+}
+else {
+vErrors.push(err73);
+}
+errors++;
+}
+}
+else {
+const err74 = {instancePath:instancePath+"/rbf/width",schemaPath:"#/properties/rbf/properties/width/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.rbf.properties.width.type,parentSchema:schema23.properties.rbf.properties.width,data:data21};
+if(vErrors === null){
+vErrors = [err74];
+}
+else {
+vErrors.push(err74);
+}
+errors++;
+}
+}
+if(data11.transform !== undefined){
+let data22 = data11.transform;
+if(!((((data22 === "log") || (data22 === "log1p")) || (data22 === "sqrt")) || (data22 === "standardise"))){
+const err75 = {instancePath:instancePath+"/rbf/transform",schemaPath:"#/properties/rbf/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.rbf.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.rbf.properties.transform.enum,parentSchema:schema23.properties.rbf.properties.transform,data:data22};
+if(vErrors === null){
+vErrors = [err75];
+}
+else {
+vErrors.push(err75);
+}
+errors++;
+}
+}
+}
+else {
+const err76 = {instancePath:instancePath+"/rbf",schemaPath:"#/properties/rbf/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.rbf.type,parentSchema:schema23.properties.rbf,data:data11};
+if(vErrors === null){
+vErrors = [err76];
+}
+else {
+vErrors.push(err76);
+}
+errors++;
+}
+}
+if(data.fourier !== undefined){
+let data23 = data.fourier;
+if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
+if(data23.of === undefined){
+const err77 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data23};
+if(vErrors === null){
+vErrors = [err77];
+}
+else {
+vErrors.push(err77);
+}
+errors++;
+}
+if(data23.period === undefined){
+const err78 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "period"},message:"must have required property '"+"period"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data23};
+if(vErrors === null){
+vErrors = [err78];
+}
+else {
+vErrors.push(err78);
+}
+errors++;
+}
+if(data23.harmonics === undefined){
+const err79 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/required",keyword:"required",params:{missingProperty: "harmonics"},message:"must have required property '"+"harmonics"+"'",schema:schema23.properties.fourier.required,parentSchema:schema23.properties.fourier,data:data23};
+if(vErrors === null){
+vErrors = [err79];
+}
+else {
+vErrors.push(err79);
+}
+errors++;
+}
+for(const key4 in data23){
+if(!((((key4 === "of") || (key4 === "period")) || (key4 === "harmonics")) || (key4 === "transform"))){
+const err80 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.fourier,data:data23};
+if(vErrors === null){
+vErrors = [err80];
+}
+else {
+vErrors.push(err80);
+}
+errors++;
+}
+}
+if(data23.of !== undefined){
+let data24 = data23.of;
+if(typeof data24 === "string"){
+if(func1(data24) < 1){
+const err81 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.fourier.properties.of,data:data24};
+if(vErrors === null){
+vErrors = [err81];
+}
+else {
+vErrors.push(err81);
+}
+errors++;
+}
+}
+else {
+const err82 = {instancePath:instancePath+"/fourier/of",schemaPath:"#/properties/fourier/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.fourier.properties.of.type,parentSchema:schema23.properties.fourier.properties.of,data:data24};
+if(vErrors === null){
+vErrors = [err82];
+}
+else {
+vErrors.push(err82);
+}
+errors++;
+}
+}
+if(data23.period !== undefined){
+let data25 = data23.period;
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 <= 0 || isNaN(data25)){
+const err83 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema23.properties.fourier.properties.period,data:data25};
+if(vErrors === null){
+vErrors = [err83];
+}
+else {
+vErrors.push(err83);
+}
+errors++;
+}
+}
+else {
+const err84 = {instancePath:instancePath+"/fourier/period",schemaPath:"#/properties/fourier/properties/period/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.fourier.properties.period.type,parentSchema:schema23.properties.fourier.properties.period,data:data25};
+if(vErrors === null){
+vErrors = [err84];
+}
+else {
+vErrors.push(err84);
+}
+errors++;
+}
+}
+if(data23.harmonics !== undefined){
+let data26 = data23.harmonics;
+if(!(((typeof data26 == "number") && (!(data26 % 1) && !isNaN(data26))) && (isFinite(data26)))){
+const err85 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.fourier.properties.harmonics.type,parentSchema:schema23.properties.fourier.properties.harmonics,data:data26};
+if(vErrors === null){
+vErrors = [err85];
+}
+else {
+vErrors.push(err85);
+}
+errors++;
+}
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 > 50 || isNaN(data26)){
+const err86 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema23.properties.fourier.properties.harmonics,data:data26};
+if(vErrors === null){
+vErrors = [err86];
+}
+else {
+vErrors.push(err86);
+}
+errors++;
+}
+if(data26 < 1 || isNaN(data26)){
+const err87 = {instancePath:instancePath+"/fourier/harmonics",schemaPath:"#/properties/fourier/properties/harmonics/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.fourier.properties.harmonics,data:data26};
+if(vErrors === null){
+vErrors = [err87];
+}
+else {
+vErrors.push(err87);
+}
+errors++;
+}
+}
+}
+if(data23.transform !== undefined){
+let data27 = data23.transform;
+if(!((((data27 === "log") || (data27 === "log1p")) || (data27 === "sqrt")) || (data27 === "standardise"))){
+const err88 = {instancePath:instancePath+"/fourier/transform",schemaPath:"#/properties/fourier/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.fourier.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.fourier.properties.transform.enum,parentSchema:schema23.properties.fourier.properties.transform,data:data27};
+if(vErrors === null){
+vErrors = [err88];
+}
+else {
+vErrors.push(err88);
+}
+errors++;
+}
+}
+}
+else {
+const err89 = {instancePath:instancePath+"/fourier",schemaPath:"#/properties/fourier/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.fourier.type,parentSchema:schema23.properties.fourier,data:data23};
+if(vErrors === null){
+vErrors = [err89];
+}
+else {
+vErrors.push(err89);
+}
+errors++;
+}
+}
+if(data.spline !== undefined){
+let data28 = data.spline;
+if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
+if(data28.of === undefined){
+const err90 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err90];
+}
+else {
+vErrors.push(err90);
+}
+errors++;
+}
+if(data28.knots === undefined){
+const err91 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/required",keyword:"required",params:{missingProperty: "knots"},message:"must have required property '"+"knots"+"'",schema:schema23.properties.spline.required,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err91];
+}
+else {
+vErrors.push(err91);
+}
+errors++;
+}
+for(const key5 in data28){
+if(!(((((key5 === "of") || (key5 === "knots")) || (key5 === "degree")) || (key5 === "natural")) || (key5 === "transform"))){
+const err92 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err92];
+}
+else {
+vErrors.push(err92);
+}
+errors++;
+}
+}
+if(data28.of !== undefined){
+let data29 = data28.of;
+if(typeof data29 === "string"){
+if(func1(data29) < 1){
+const err93 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.spline.properties.of,data:data29};
+if(vErrors === null){
+vErrors = [err93];
+}
+else {
+vErrors.push(err93);
+}
+errors++;
+}
+}
+else {
+const err94 = {instancePath:instancePath+"/spline/of",schemaPath:"#/properties/spline/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.spline.properties.of.type,parentSchema:schema23.properties.spline.properties.of,data:data29};
+if(vErrors === null){
+vErrors = [err94];
+}
+else {
+vErrors.push(err94);
+}
+errors++;
+}
+}
+if(data28.knots !== undefined){
+let data30 = data28.knots;
+const _errs86 = errors;
+let valid30 = false;
+let passing5 = null;
+const _errs87 = errors;
+if(Array.isArray(data30)){
+if(data30.length > 100){
+const err95 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data30};
+if(vErrors === null){
+vErrors = [err95];
+}
+else {
+vErrors.push(err95);
+}
+errors++;
+}
+if(data30.length < 1){
+const err96 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data30};
+if(vErrors === null){
+vErrors = [err96];
+}
+else {
+vErrors.push(err96);
+}
+errors++;
+}
+const len8 = data30.length;
+for(let i10=0; i10<len8; i10++){
+let data31 = data30[i10];
+if(!((typeof data31 == "number") && (isFinite(data31)))){
+const err97 = {instancePath:instancePath+"/spline/knots/" + i10,schemaPath:"#/properties/spline/properties/knots/oneOf/0/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.spline.properties.knots.oneOf[0].items.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0].items,data:data31};
+if(vErrors === null){
+vErrors = [err97];
+}
+else {
+vErrors.push(err97);
+}
+errors++;
+}
+}
+}
+else {
+const err98 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/0/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema23.properties.spline.properties.knots.oneOf[0].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[0],data:data30};
+if(vErrors === null){
+vErrors = [err98];
+}
+else {
+vErrors.push(err98);
+}
+errors++;
+}
+var _valid5 = _errs87 === errors;
+if(_valid5){
+valid30 = true;
+passing5 = 0;
+}
+const _errs91 = errors;
+if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
+if(data30.count === undefined){
+const err99 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema23.properties.spline.properties.knots.oneOf[1].required,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data30};
+if(vErrors === null){
+vErrors = [err99];
+}
+else {
+vErrors.push(err99);
+}
+errors++;
+}
+for(const key6 in data30){
+if(!(key6 === "count")){
+const err100 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data30};
+if(vErrors === null){
+vErrors = [err100];
+}
+else {
+vErrors.push(err100);
+}
+errors++;
+}
+}
+if(data30.count !== undefined){
+let data32 = data30.count;
+if(!(((typeof data32 == "number") && (!(data32 % 1) && !isNaN(data32))) && (isFinite(data32)))){
+const err101 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.knots.oneOf[1].properties.count.type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data32};
+if(vErrors === null){
+vErrors = [err101];
+}
+else {
+vErrors.push(err101);
+}
+errors++;
+}
+if((typeof data32 == "number") && (isFinite(data32))){
+if(data32 > 100 || isNaN(data32)){
+const err102 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 100},message:"must be <= 100",schema:100,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data32};
+if(vErrors === null){
+vErrors = [err102];
+}
+else {
+vErrors.push(err102);
+}
+errors++;
+}
+if(data32 < 1 || isNaN(data32)){
+const err103 = {instancePath:instancePath+"/spline/knots/count",schemaPath:"#/properties/spline/properties/knots/oneOf/1/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.knots.oneOf[1].properties.count,data:data32};
+if(vErrors === null){
+vErrors = [err103];
+}
+else {
+vErrors.push(err103);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err104 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.properties.knots.oneOf[1].type,parentSchema:schema23.properties.spline.properties.knots.oneOf[1],data:data30};
+if(vErrors === null){
+vErrors = [err104];
+}
+else {
+vErrors.push(err104);
+}
+errors++;
+}
+var _valid5 = _errs91 === errors;
+if(_valid5 && valid30){
+valid30 = false;
+passing5 = [passing5, 1];
+}
+else {
+if(_valid5){
+valid30 = true;
+passing5 = 1;
+}
+}
+if(!valid30){
+const err105 = {instancePath:instancePath+"/spline/knots",schemaPath:"#/properties/spline/properties/knots/oneOf",keyword:"oneOf",params:{passingSchemas: passing5},message:"must match exactly one schema in oneOf",schema:schema23.properties.spline.properties.knots.oneOf,parentSchema:schema23.properties.spline.properties.knots,data:data30};
+if(vErrors === null){
+vErrors = [err105];
+}
+else {
+vErrors.push(err105);
+}
+errors++;
+}
+else {
+errors = _errs86;
+if(vErrors !== null){
+if(_errs86){
+vErrors.length = _errs86;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data28.degree !== undefined){
+let data33 = data28.degree;
+if(!(((typeof data33 == "number") && (!(data33 % 1) && !isNaN(data33))) && (isFinite(data33)))){
+const err106 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema23.properties.spline.properties.degree.type,parentSchema:schema23.properties.spline.properties.degree,data:data33};
+if(vErrors === null){
+vErrors = [err106];
+}
+else {
+vErrors.push(err106);
+}
+errors++;
+}
+if((typeof data33 == "number") && (isFinite(data33))){
+if(data33 > 5 || isNaN(data33)){
+const err107 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/maximum",keyword:"maximum",params:{comparison: "<=", limit: 5},message:"must be <= 5",schema:5,parentSchema:schema23.properties.spline.properties.degree,data:data33};
+if(vErrors === null){
+vErrors = [err107];
+}
+else {
+vErrors.push(err107);
+}
+errors++;
+}
+if(data33 < 1 || isNaN(data33)){
+const err108 = {instancePath:instancePath+"/spline/degree",schemaPath:"#/properties/spline/properties/degree/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema23.properties.spline.properties.degree,data:data33};
+if(vErrors === null){
+vErrors = [err108];
+}
+else {
+vErrors.push(err108);
+}
+errors++;
+}
+}
+}
+if(data28.natural !== undefined){
+let data34 = data28.natural;
+if(typeof data34 !== "boolean"){
+const err109 = {instancePath:instancePath+"/spline/natural",schemaPath:"#/properties/spline/properties/natural/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema23.properties.spline.properties.natural.type,parentSchema:schema23.properties.spline.properties.natural,data:data34};
+if(vErrors === null){
+vErrors = [err109];
+}
+else {
+vErrors.push(err109);
+}
+errors++;
+}
+}
+if(data28.transform !== undefined){
+let data35 = data28.transform;
+if(!((((data35 === "log") || (data35 === "log1p")) || (data35 === "sqrt")) || (data35 === "standardise"))){
+const err110 = {instancePath:instancePath+"/spline/transform",schemaPath:"#/properties/spline/properties/transform/enum",keyword:"enum",params:{allowedValues: schema23.properties.spline.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.spline.properties.transform.enum,parentSchema:schema23.properties.spline.properties.transform,data:data35};
+if(vErrors === null){
+vErrors = [err110];
+}
+else {
+vErrors.push(err110);
+}
+errors++;
+}
+}
+}
+else {
+const err111 = {instancePath:instancePath+"/spline",schemaPath:"#/properties/spline/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.spline.type,parentSchema:schema23.properties.spline,data:data28};
+if(vErrors === null){
+vErrors = [err111];
+}
+else {
+vErrors.push(err111);
+}
+errors++;
+}
+}
+if(data.category !== undefined){
+let data36 = data.category;
+if(data36 && typeof data36 == "object" && !Array.isArray(data36)){
+if(data36.of === undefined){
+const err112 = {instancePath:instancePath+"/category",schemaPath:"#/properties/category/required",keyword:"required",params:{missingProperty: "of"},message:"must have required property '"+"of"+"'",schema:schema23.properties.category.required,parentSchema:schema23.properties.category,data:data36};
+if(vErrors === null){
+vErrors = [err112];
+}
+else {
+vErrors.push(err112);
+}
+errors++;
+}
+for(const key7 in data36){
+if(!(((key7 === "of") || (key7 === "reference")) || (key7 === "unseen"))){
+const err113 = {instancePath:instancePath+"/category",schemaPath:"#/properties/category/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key7},message:"must NOT have additional properties",schema:false,parentSchema:schema23.properties.category,data:data36};
+if(vErrors === null){
+vErrors = [err113];
+}
+else {
+vErrors.push(err113);
+}
+errors++;
+}
+}
+if(data36.of !== undefined){
+let data37 = data36.of;
+if(typeof data37 === "string"){
+if(func1(data37) < 1){
+const err114 = {instancePath:instancePath+"/category/of",schemaPath:"#/properties/category/properties/of/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema23.properties.category.properties.of,data:data37};
+if(vErrors === null){
+vErrors = [err114];
+}
+else {
+vErrors.push(err114);
+}
+errors++;
+}
+}
+else {
+const err115 = {instancePath:instancePath+"/category/of",schemaPath:"#/properties/category/properties/of/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.category.properties.of.type,parentSchema:schema23.properties.category.properties.of,data:data37};
+if(vErrors === null){
+vErrors = [err115];
+}
+else {
+vErrors.push(err115);
+}
+errors++;
+}
+}
+if(data36.reference !== undefined){
+let data38 = data36.reference;
+const _errs107 = errors;
+let valid35 = false;
+let passing6 = null;
+const _errs108 = errors;
+if(typeof data38 !== "string"){
+const err116 = {instancePath:instancePath+"/category/reference",schemaPath:"#/properties/category/properties/reference/oneOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema23.properties.category.properties.reference.oneOf[0].type,parentSchema:schema23.properties.category.properties.reference.oneOf[0],data:data38};
+if(vErrors === null){
+vErrors = [err116];
+}
+else {
+vErrors.push(err116);
+}
+errors++;
+}
+var _valid6 = _errs108 === errors;
+if(_valid6){
+valid35 = true;
+passing6 = 0;
+}
+const _errs110 = errors;
+if(!((typeof data38 == "number") && (isFinite(data38)))){
+const err117 = {instancePath:instancePath+"/category/reference",schemaPath:"#/properties/category/properties/reference/oneOf/1/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema23.properties.category.properties.reference.oneOf[1].type,parentSchema:schema23.properties.category.properties.reference.oneOf[1],data:data38};
+if(vErrors === null){
+vErrors = [err117];
+}
+else {
+vErrors.push(err117);
+}
+errors++;
+}
+var _valid6 = _errs110 === errors;
+if(_valid6 && valid35){
+valid35 = false;
+passing6 = [passing6, 1];
+}
+else {
+if(_valid6){
+valid35 = true;
+passing6 = 1;
+}
+}
+if(!valid35){
+const err118 = {instancePath:instancePath+"/category/reference",schemaPath:"#/properties/category/properties/reference/oneOf",keyword:"oneOf",params:{passingSchemas: passing6},message:"must match exactly one schema in oneOf",schema:schema23.properties.category.properties.reference.oneOf,parentSchema:schema23.properties.category.properties.reference,data:data38};
+if(vErrors === null){
+vErrors = [err118];
+}
+else {
+vErrors.push(err118);
+}
+errors++;
+}
+else {
+errors = _errs107;
+if(vErrors !== null){
+if(_errs107){
+vErrors.length = _errs107;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+if(data36.unseen !== undefined){
+let data39 = data36.unseen;
+if(!((data39 === "error") || (data39 === "zero"))){
+const err119 = {instancePath:instancePath+"/category/unseen",schemaPath:"#/properties/category/properties/unseen/enum",keyword:"enum",params:{allowedValues: schema23.properties.category.properties.unseen.enum},message:"must be equal to one of the allowed values",schema:schema23.properties.category.properties.unseen.enum,parentSchema:schema23.properties.category.properties.unseen,data:data39};
+if(vErrors === null){
+vErrors = [err119];
+}
+else {
+vErrors.push(err119);
+}
+errors++;
+}
+}
+}
+else {
+const err120 = {instancePath:instancePath+"/category",schemaPath:"#/properties/category/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.properties.category.type,parentSchema:schema23.properties.category,data:data36};
+if(vErrors === null){
+vErrors = [err120];
+}
+else {
+vErrors.push(err120);
+}
+errors++;
+}
+}
+}
+else {
+const err121 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema23.type,parentSchema:schema23,data};
+if(vErrors === null){
+vErrors = [err121];
+}
+else {
+vErrors.push(err121);
+}
+errors++;
+}
+validate76.errors = vErrors;
 return errors === 0;
 }
-validate71.evaluated = {"props":{"linear":true,"polynomial":true,"rbf":true},"dynamicProps":false,"dynamicItems":false};
+validate76.evaluated = {"props":{"linear":true,"polynomial":true,"rbf":true,"fourier":true,"spline":true,"category":true},"dynamicProps":false,"dynamicItems":false};
 
-const schema25 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}};
+const schema25 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}};
 const schema26 = {"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]};
 
-function validate76(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate81(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate76.evaluated;
+const evaluated0 = validate81.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1758,17 +3135,17 @@ vErrors = null;
 }
 }
 }
-validate76.errors = vErrors;
+validate81.errors = vErrors;
 evaluated0.props = props0;
 return errors === 0;
 }
-validate76.evaluated = {"dynamicProps":true,"dynamicItems":false};
+validate81.evaluated = {"dynamicProps":true,"dynamicItems":false};
 
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate80(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate75.evaluated;
+const evaluated0 = validate80.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1789,86 +3166,116 @@ errors++;
 }
 }
 if(data.gap_ratio !== undefined){
-if(!(validate76(data.gap_ratio, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.gap_ratio, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.params_per_sample !== undefined){
-if(!(validate76(data.params_per_sample, {instancePath:instancePath+"/params_per_sample",parentData:data,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.params_per_sample, {instancePath:instancePath+"/params_per_sample",parentData:data,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.coefficient !== undefined){
-if(!(validate76(data.coefficient, {instancePath:instancePath+"/coefficient",parentData:data,parentDataProperty:"coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.coefficient, {instancePath:instancePath+"/coefficient",parentData:data,parentDataProperty:"coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.base_change !== undefined){
-if(!(validate76(data.base_change, {instancePath:instancePath+"/base_change",parentData:data,parentDataProperty:"base_change",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.base_change, {instancePath:instancePath+"/base_change",parentData:data,parentDataProperty:"base_change",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.cv_ratio !== undefined){
-if(!(validate76(data.cv_ratio, {instancePath:instancePath+"/cv_ratio",parentData:data,parentDataProperty:"cv_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.cv_ratio, {instancePath:instancePath+"/cv_ratio",parentData:data,parentDataProperty:"cv_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.swing !== undefined){
-if(!(validate76(data.swing, {instancePath:instancePath+"/swing",parentData:data,parentDataProperty:"swing",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.swing, {instancePath:instancePath+"/swing",parentData:data,parentDataProperty:"swing",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.swing_beyond !== undefined){
-if(!(validate76(data.swing_beyond, {instancePath:instancePath+"/swing_beyond",parentData:data,parentDataProperty:"swing_beyond",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.swing_beyond, {instancePath:instancePath+"/swing_beyond",parentData:data,parentDataProperty:"swing_beyond",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+errors = vErrors.length;
+}
+}
+if(data.swing_spikes !== undefined){
+if(!(validate81(data.swing_spikes, {instancePath:instancePath+"/swing_spikes",parentData:data,parentDataProperty:"swing_spikes",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.leakage !== undefined){
-if(!(validate76(data.leakage, {instancePath:instancePath+"/leakage",parentData:data,parentDataProperty:"leakage",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.leakage, {instancePath:instancePath+"/leakage",parentData:data,parentDataProperty:"leakage",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.reproducibility !== undefined){
-if(!(validate76(data.reproducibility, {instancePath:instancePath+"/reproducibility",parentData:data,parentDataProperty:"reproducibility",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.reproducibility, {instancePath:instancePath+"/reproducibility",parentData:data,parentDataProperty:"reproducibility",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.condition !== undefined){
-if(!(validate76(data.condition, {instancePath:instancePath+"/condition",parentData:data,parentDataProperty:"condition",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.condition, {instancePath:instancePath+"/condition",parentData:data,parentDataProperty:"condition",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.complexity !== undefined){
-if(!(validate76(data.complexity, {instancePath:instancePath+"/complexity",parentData:data,parentDataProperty:"complexity",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.complexity, {instancePath:instancePath+"/complexity",parentData:data,parentDataProperty:"complexity",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+errors = vErrors.length;
+}
+}
+if(data.holdout_r2 !== undefined){
+if(!(validate81(data.holdout_r2, {instancePath:instancePath+"/holdout_r2",parentData:data,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+errors = vErrors.length;
+}
+}
+if(data.holdout_rmse !== undefined){
+if(!(validate81(data.holdout_rmse, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+errors = vErrors.length;
+}
+}
+if(data.holdout_mae !== undefined){
+if(!(validate81(data.holdout_mae, {instancePath:instancePath+"/holdout_mae",parentData:data,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+errors = vErrors.length;
+}
+}
+if(data.chi_square !== undefined){
+if(!(validate81(data.chi_square, {instancePath:instancePath+"/chi_square",parentData:data,parentDataProperty:"chi_square",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.separation !== undefined){
-if(!(validate76(data.separation, {instancePath:instancePath+"/separation",parentData:data,parentDataProperty:"separation",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.separation, {instancePath:instancePath+"/separation",parentData:data,parentDataProperty:"separation",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.events_per_parameter !== undefined){
-if(!(validate76(data.events_per_parameter, {instancePath:instancePath+"/events_per_parameter",parentData:data,parentDataProperty:"events_per_parameter",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.events_per_parameter, {instancePath:instancePath+"/events_per_parameter",parentData:data,parentDataProperty:"events_per_parameter",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
 if(data.calibration_slope !== undefined){
-if(!(validate76(data.calibration_slope, {instancePath:instancePath+"/calibration_slope",parentData:data,parentDataProperty:"calibration_slope",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+if(!(validate81(data.calibration_slope, {instancePath:instancePath+"/calibration_slope",parentData:data,parentDataProperty:"calibration_slope",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
@@ -1883,17 +3290,17 @@ vErrors.push(err1);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate80.errors = vErrors;
 return errors === 0;
 }
-validate75.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate80.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate70(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 /*# sourceURL="urn:fitgate:schema:descriptor:1" */;
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate70.evaluated;
+const evaluated0 = validate75.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -2058,7 +3465,7 @@ vErrors.push(err13);
 errors++;
 }
 for(const key1 in data3){
-if(!((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "positive"))){
+if(!((((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "positive")) || (key1 === "weight")) || (key1 === "sigma"))){
 const err14 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err14];
@@ -2169,9 +3576,11 @@ vErrors.push(err22);
 errors++;
 }
 }
-}
-else {
-const err23 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
+if(data3.weight !== undefined){
+let data8 = data3.weight;
+if(typeof data8 === "string"){
+if(func1(data8) < 1){
+const err23 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.weight,data:data8};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2181,11 +3590,8 @@ vErrors.push(err23);
 errors++;
 }
 }
-if(data.terms !== undefined){
-let data8 = data.terms;
-if(Array.isArray(data8)){
-if(data8.length < 1){
-const err24 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data8};
+else {
+const err24 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.weight.type,parentSchema:schema22.properties.data.properties.weight,data:data8};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -2194,16 +3600,12 @@ vErrors.push(err24);
 }
 errors++;
 }
-const len0 = data8.length;
-for(let i0=0; i0<len0; i0++){
-if(!(validate71(data8[i0], {instancePath:instancePath+"/terms/" + i0,parentData:data8,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
-errors = vErrors.length;
 }
-}
-}
-else {
-const err25 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data8};
+if(data3.sigma !== undefined){
+let data9 = data3.sigma;
+if(typeof data9 === "string"){
+if(func1(data9) < 1){
+const err25 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.sigma,data:data9};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -2213,12 +3615,8 @@ vErrors.push(err25);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data10 = data.fit;
-if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
-for(const key2 in data10){
-if(!(((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))){
-const err26 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data10};
+else {
+const err26 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.sigma.type,parentSchema:schema22.properties.data.properties.sigma,data:data9};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -2228,10 +3626,9 @@ vErrors.push(err26);
 errors++;
 }
 }
-if(data10.intercept !== undefined){
-let data11 = data10.intercept;
-if(typeof data11 !== "boolean"){
-const err27 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data11};
+}
+else {
+const err27 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -2241,11 +3638,11 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data10.ridge !== undefined){
-let data12 = data10.ridge;
-if((typeof data12 == "number") && (isFinite(data12))){
-if(data12 < 0 || isNaN(data12)){
-const err28 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data12};
+if(data.terms !== undefined){
+let data10 = data.terms;
+if(Array.isArray(data10)){
+if(data10.length < 1){
+const err28 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data10};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2254,9 +3651,16 @@ vErrors.push(err28);
 }
 errors++;
 }
+const len0 = data10.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate76(data10[i0], {instancePath:instancePath+"/terms/" + i0,parentData:data10,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err29 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data12};
+const err29 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data10};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2266,10 +3670,12 @@ vErrors.push(err29);
 errors++;
 }
 }
-if(data10.folds !== undefined){
-let data13 = data10.folds;
-if(!(((typeof data13 == "number") && (!(data13 % 1) && !isNaN(data13))) && (isFinite(data13)))){
-const err30 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data13};
+if(data.fit !== undefined){
+let data12 = data.fit;
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+for(const key2 in data12){
+if(!(((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))){
+const err30 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data12};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2278,9 +3684,11 @@ vErrors.push(err30);
 }
 errors++;
 }
-if((typeof data13 == "number") && (isFinite(data13))){
-if(data13 < 2 || isNaN(data13)){
-const err31 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data13};
+}
+if(data12.intercept !== undefined){
+let data13 = data12.intercept;
+if(typeof data13 !== "boolean"){
+const err31 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data13};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2290,11 +3698,11 @@ vErrors.push(err31);
 errors++;
 }
 }
-}
-if(data10.fold_order !== undefined){
-let data14 = data10.fold_order;
-if(!((data14 === "shuffled") || (data14 === "blocks"))){
-const err32 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data14};
+if(data12.ridge !== undefined){
+let data14 = data12.ridge;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 < 0 || isNaN(data14)){
+const err32 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2304,10 +3712,8 @@ vErrors.push(err32);
 errors++;
 }
 }
-if(data10.seed !== undefined){
-let data15 = data10.seed;
-if(!(((typeof data15 == "number") && (!(data15 % 1) && !isNaN(data15))) && (isFinite(data15)))){
-const err33 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data15};
+else {
+const err33 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data14};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -2316,9 +3722,11 @@ vErrors.push(err33);
 }
 errors++;
 }
-if((typeof data15 == "number") && (isFinite(data15))){
-if(data15 > 4294967295 || isNaN(data15)){
-const err34 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data15};
+}
+if(data12.folds !== undefined){
+let data15 = data12.folds;
+if(!(((typeof data15 == "number") && (!(data15 % 1) && !isNaN(data15))) && (isFinite(data15)))){
+const err34 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -2327,8 +3735,9 @@ vErrors.push(err34);
 }
 errors++;
 }
-if(data15 < 0 || isNaN(data15)){
-const err35 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data15};
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 < 2 || isNaN(data15)){
+const err35 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data15};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -2339,10 +3748,10 @@ errors++;
 }
 }
 }
-if(data10.parameter_count !== undefined){
-let data16 = data10.parameter_count;
-if(!((data16 === "columns") || (data16 === "effective"))){
-const err36 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data16};
+if(data12.fold_order !== undefined){
+let data16 = data12.fold_order;
+if(!((data16 === "shuffled") || (data16 === "blocks"))){
+const err36 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -2352,11 +3761,10 @@ vErrors.push(err36);
 errors++;
 }
 }
-if(data10.threshold !== undefined){
-let data17 = data10.threshold;
-if((typeof data17 == "number") && (isFinite(data17))){
-if(data17 >= 1 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data17};
+if(data12.seed !== undefined){
+let data17 = data12.seed;
+if(!(((typeof data17 == "number") && (!(data17 % 1) && !isNaN(data17))) && (isFinite(data17)))){
+const err37 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -2365,8 +3773,9 @@ vErrors.push(err37);
 }
 errors++;
 }
-if(data17 <= 0 || isNaN(data17)){
-const err38 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data17};
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 > 4294967295 || isNaN(data17)){
+const err38 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -2375,9 +3784,8 @@ vErrors.push(err38);
 }
 errors++;
 }
-}
-else {
-const err39 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data17};
+if(data17 < 0 || isNaN(data17)){
+const err39 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data17};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -2388,8 +3796,10 @@ errors++;
 }
 }
 }
-else {
-const err40 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data10};
+if(data12.parameter_count !== undefined){
+let data18 = data12.parameter_count;
+if(!((data18 === "columns") || (data18 === "effective"))){
+const err40 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -2399,11 +3809,11 @@ vErrors.push(err40);
 errors++;
 }
 }
-if(data.coefficients !== undefined){
-let data18 = data.coefficients;
-if(Array.isArray(data18)){
-if(data18.length < 1){
-const err41 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data18};
+if(data12.threshold !== undefined){
+let data19 = data12.threshold;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 >= 1 || isNaN(data19)){
+const err41 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data19};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -2412,11 +3822,8 @@ vErrors.push(err41);
 }
 errors++;
 }
-const len1 = data18.length;
-for(let i1=0; i1<len1; i1++){
-let data19 = data18[i1];
-if(!((typeof data19 == "number") && (isFinite(data19)))){
-const err42 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data19};
+if(data19 <= 0 || isNaN(data19)){
+const err42 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data19};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -2426,9 +3833,8 @@ vErrors.push(err42);
 errors++;
 }
 }
-}
 else {
-const err43 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data18};
+const err43 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data19};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -2438,15 +3844,9 @@ vErrors.push(err43);
 errors++;
 }
 }
-if(data.limits !== undefined){
-if(!(validate75(data.limits, {instancePath:instancePath+"/limits",parentData:data,parentDataProperty:"limits",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
-errors = vErrors.length;
-}
-}
 }
 else {
-const err44 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+const err44 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data12};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -2455,8 +3855,65 @@ vErrors.push(err44);
 }
 errors++;
 }
-validate70.errors = vErrors;
+}
+if(data.coefficients !== undefined){
+let data20 = data.coefficients;
+if(Array.isArray(data20)){
+if(data20.length < 1){
+const err45 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data20};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+const len1 = data20.length;
+for(let i1=0; i1<len1; i1++){
+let data21 = data20[i1];
+if(!((typeof data21 == "number") && (isFinite(data21)))){
+const err46 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data21};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+}
+else {
+const err47 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data20};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+}
+if(data.limits !== undefined){
+if(!(validate80(data.limits, {instancePath:instancePath+"/limits",parentData:data,parentDataProperty:"limits",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err48 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+validate75.errors = vErrors;
 return errors === 0;
 }
-validate70.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate75.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 

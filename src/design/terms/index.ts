@@ -4,16 +4,23 @@
  * to {@link createTerm} and to the README's "Terms" section.
  */
 import type { TermSpec } from '../../config/types.js';
+import { fourierTerm } from './fourier.js';
 import { linearTerm } from './linear.js';
+import { multiPolynomialTerm } from './multi-polynomial.js';
+import { multiRbfTerm } from './multi-rbf.js';
 import { polynomialTerm } from './polynomial.js';
 import { rbfTerm } from './rbf.js';
-import type { Term, TrainingColumns } from './types.js';
+import { splineTerm } from './spline.js';
+import { transformedTerm } from './transform.js';
+import type { Term, TrainingColumns, TrainingLevels } from './types.js';
+import { categoryTerm } from './category.js';
 
-export type { Term, TrainingColumns } from './types.js';
+export type { Term, TrainingColumns, TrainingLevels } from './types.js';
 
 /** Every input column a term reads (without duplicates, in first-use order). */
 export function termInputs(spec: TermSpec): string[] {
-  return spec.kind === 'linear' ? [...new Set(spec.columns)] : [spec.of];
+  if (spec.kind === 'linear') return [...new Set(spec.columns)];
+  return spec.kind === 'multi-polynomial' || spec.kind === 'multi-rbf' ? [...spec.of] : [spec.of];
 }
 
 /**
@@ -21,8 +28,12 @@ export function termInputs(spec: TermSpec): string[] {
  * @param spec the descriptor entry
  * @param training training columns by name (must hold every input of the term)
  * @param file descriptor path, for errors
+ * @param levels training levels of category columns (needed by `category` terms only)
  */
-export function createTerm(spec: TermSpec, training: TrainingColumns, file: string): Term {
+export function createTerm(spec: TermSpec, training: TrainingColumns, file: string, levels: TrainingLevels = new Map()): Term {
+  if (spec.kind !== 'linear' && spec.kind !== 'category' && spec.transform !== undefined) {
+    return transformedTerm(spec, training, file, termInputs(spec), (inner, columns) => createTerm(inner, columns, file));
+  }
   switch (spec.kind) {
     case 'linear':
       return linearTerm(spec);
@@ -30,5 +41,15 @@ export function createTerm(spec: TermSpec, training: TrainingColumns, file: stri
       return polynomialTerm(spec, training, file);
     case 'rbf':
       return rbfTerm(spec, training);
+    case 'fourier':
+      return fourierTerm(spec);
+    case 'spline':
+      return splineTerm(spec, training, file);
+    case 'multi-polynomial':
+      return multiPolynomialTerm(spec, training, file);
+    case 'multi-rbf':
+      return multiRbfTerm(spec, training, file);
+    case 'category':
+      return categoryTerm(spec, training, levels.get(spec.of) ?? [], file);
   }
 }

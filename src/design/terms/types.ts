@@ -21,7 +21,24 @@ export interface Term {
    * @param offset index of this term's first column in `out`
    */
   fill(inputs: readonly Float64Array[], m: number, out: Float64Array, offset: number): void;
+  /**
+   * Whether the term is defined at this value of one of its inputs (absent: everywhere). Scans
+   * beyond the training range (swing margins) leave out values a term is not defined at, e.g.
+   * x <= 0 under `transform: log`.
+   */
+  admits?(input: string, value: number): boolean;
+  /**
+   * The scale the term sees its inputs on, when it transforms them (`transform: log` ...): a name
+   * and the increasing map and its inverse. Scans of an input that every term reads on the same
+   * scale are laid out on that scale (even steps in log x, margins of 10 % of the log range).
+   */
+  /** The only values its (single) input takes, for a category's level codes: scans use exactly these. */
+  discreteValues?: readonly number[];
+  inputScale?: { name: string; forward(value: number): number; inverse(value: number): number };
 }
 
 /** Training columns by name, used to fix data-dependent parameters. */
 export type TrainingColumns = ReadonlyMap<string, Float64Array>;
+
+/** Training levels (text order) of each category column, by name; their codes are the columns' values. */
+export type TrainingLevels = ReadonlyMap<string, readonly string[]>;
