@@ -65,7 +65,7 @@ async function main(argv: string[]): Promise<number> {
         ? formatJson(result)
         : parsed.format === 'markdown'
           ? (await import('./report/markdown.js')).formatMarkdown(result)
-          : formatText(result, { color });
+          : formatText(result, { color, verbose: parsed.verbose });
     if (parsed.out !== null) writeFileSync(parsed.out, text);
     else process.stdout.write(text);
     // SARIF paths are relative to the working directory when the root lies inside it (code

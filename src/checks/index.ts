@@ -105,7 +105,7 @@ export function runCheck(check: Check, context: CheckContext): { outcome: CheckR
     ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
     line: line ?? measured.line ?? check.line(context.descriptor),
     message: `${measured.message}${comparison}`,
-    advice: status === 'fail' || status === 'warn' ? check.advice : '',
+    advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
     ...(measured.detail ? { detail: measured.detail } : {}),
     ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
   };

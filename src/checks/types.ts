@@ -67,6 +67,8 @@ export interface Measurement {
   metrics?: Record<string, number | string | null>;
   /** A change to propose at a descriptor line (shown as a notice whatever the status). */
   suggestion?: { text: string; line: number };
+  /** Advice for this outcome when it warns or fails, instead of the check's own `advice`. */
+  advice?: string;
 }
 
 /** A check module's default export. */

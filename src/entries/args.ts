@@ -29,6 +29,8 @@ export interface CheckCommand {
   color: boolean | null;
   /** Print stack traces of unexpected errors. */
   debug: boolean;
+  /** Text report: list every check of every model, passing ones included (`--verbose`). */
+  verbose: boolean;
   /** Compare with the models as they are on this git revision (`--base`), or null. */
   base: string | null;
   /** Check only this share of the models (`--shard K/N`), or null for all. */
@@ -58,6 +60,8 @@ export interface MergeCommand {
   failOn: 'fail' | 'warn';
   /** Print stack traces of unexpected errors. */
   debug: boolean;
+  /** Text report: list every check of every model (`--verbose`). */
+  verbose: boolean;
   /** File reports of the joined result, as for check (paths as given), or null. */
   html: string | null;
   sarif: string | null;
@@ -102,6 +106,7 @@ const OUT: OptionSpec = { name: 'out', value: 'file', description: 'write the re
 const FAIL_ON: OptionSpec = { name: 'fail-on', value: 'level', description: 'what fails the run', choices: ['fail', 'warn'], default: 'fail' };
 const COLOR: OptionSpec = { name: 'color', description: 'force colours in the text report' };
 const NO_COLOR: OptionSpec = { name: 'no-color', description: 'never use colours' };
+const VERBOSE: OptionSpec = { name: 'verbose', description: 'text report: list every check of every model with its figure, passing ones included' };
 const DEBUG: OptionSpec = { name: 'debug', description: 'print stack traces of unexpected errors' };
 const HELP: OptionSpec = { name: 'help', description: 'print this help' };
 
@@ -125,6 +130,7 @@ const COMMANDS: readonly CommandSpec[] = [
       { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
       { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },
       { name: 'junit', value: 'file', description: 'also write a JUnit XML report to this file' },
+      VERBOSE,
       DEBUG,
       HELP,
     ],
@@ -142,6 +148,7 @@ const COMMANDS: readonly CommandSpec[] = [
       { name: 'junit', value: 'file', description: 'also write a JUnit XML report of the joined result to this file' },
       COLOR,
       NO_COLOR,
+      VERBOSE,
       DEBUG,
       HELP,
     ],
@@ -175,7 +182,9 @@ function usageError(message: string, command: CommandSpec | null): Parsed {
  */
 export function parseArgs(argv: string[], cwd: string): Parsed {
   const [first, ...rest] = argv;
-  if (first === undefined || first === '-h' || first === '--help') return { kind: 'print', text: mainHelp(), status: 0 };
+  // No command at all is a usage mistake (a script calling `fitgate` alone did nothing): the help, status 2.
+  if (first === undefined) return { kind: 'print', text: mainHelp(), status: 2 };
+  if (first === '-h' || first === '--help') return { kind: 'print', text: mainHelp(), status: 0 };
   if (first === '-V' || first === '--version') return { kind: 'print', text: `${VERSION}\n`, status: 0 };
   if (first === 'help') {
     const topic = rest[0];
@@ -195,6 +204,7 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
     out: value('out'),
     color: read.color,
     debug: read.switches.has('debug'),
+    verbose: read.switches.has('verbose'),
     html: value('html'),
     sarif: value('sarif'),
     junit: value('junit'),
