@@ -40,6 +40,14 @@ async function main(argv: string[]): Promise<number> {
       (parsed.status === 0 ? process.stdout : process.stderr).write(parsed.text);
       return parsed.status;
     }
+    if (parsed.kind === 'explain' || parsed.kind === 'init' || parsed.kind === 'refit') {
+      if (parsed.kind !== 'explain') debug = parsed.debug;
+      const { runToolCommand } = await import('./entries/tool-commands.js');
+      const outcome = await runToolCommand(parsed);
+      process.stdout.write(outcome.stdout);
+      process.stderr.write(outcome.stderr);
+      return outcome.status;
+    }
     debug = parsed.debug;
     let result: Result;
     let failOn: 'fail' | 'warn';

@@ -147,7 +147,7 @@ describe('help and version (status 0)', () => {
   });
 
   it('wraps every help line to 80 columns', () => {
-    for (const argv of [[], ['check', '--help'], ['merge', '--help']]) {
+    for (const argv of [[], ['check', '--help'], ['merge', '--help'], ['init', '--help'], ['refit', '--help'], ['explain', '--help']]) {
       for (const line of printed(argv).text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
     }
   });
