@@ -4,19 +4,10 @@
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import type { Limit } from '../config/types.js';
+import { roundUp2 } from '../config/init-files.js';
 
 const LIMIT_KEY = 'params_per_sample';
 const ADVICE = 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.';
-
-/**
- * The smallest number of two significant digits at or above `x` (0.1333 -> 0.14), for a limit
- * that lets the figure pass.
- */
-export function roundUpLimit(x: number): number {
-  if (!(x > 0) || !Number.isFinite(x)) return x;
-  const step = 10 ** (Math.floor(Math.log10(x)) - 1);
-  return Number((Math.ceil(x / step - 1e-9) * step).toPrecision(2));
-}
 
 /**
  * When the built-in limit (not one the user set) is exceeded, the advice says which rule it is
@@ -27,7 +18,7 @@ function ruleAdvice(limit: Limit | undefined, ratio: number): { advice?: string 
   return {
     advice:
       `The default limit ${formatNumber(limit.fail)} is a rule of thumb (common practice: at least ${formatNumber(1 / limit.fail)} training rows per parameter), not a law. ` +
-      `${ADVICE} If the data set is small by nature and the fit is otherwise sound, relax the rule for this model in its descriptor: \`limits: { ${LIMIT_KEY}: ${roundUpLimit(ratio)} }\`.`,
+      `${ADVICE} If the data set is small by nature and the fit is otherwise sound, relax the rule for this model in its descriptor: \`limits: { ${LIMIT_KEY}: ${roundUp2(ratio)} }\`.`,
   };
 }
 
