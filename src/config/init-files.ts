@@ -77,14 +77,15 @@ function specText(spec: LimitSpec): string {
 
 /** A YAML plain scalar when safe, else a double-quoted one (JSON string syntax is valid YAML). */
 function scalar(text: string): string {
-  return /^[A-Za-z_][A-Za-z0-9_.\-/]*$/.test(text) && !/^(true|false|null|yes|no|on|off|y|n|~)$/i.test(text) ? text : JSON.stringify(text);
+  const plain = /^[A-Za-z_.][A-Za-z0-9_.\-/]*$/.test(text) && !/^(true|false|null|yes|no|on|off|y|n|~)$/i.test(text) && !/^\.(inf|nan)$/i.test(text);
+  return plain ? text : JSON.stringify(text);
 }
 
-/** Every limit key but those given, as commented lines `#   key: default   # summary`. */
-function commentedLimits(indent: string, except: string[]): string[] {
+/** Every limit key but those given, as commented lines `<prefix>key: default   # summary`. */
+function commentedLimits(prefix: string, except: string[]): string[] {
   const rows = LIMIT_KEYS.filter((k) => !except.includes(k.key));
   const width = Math.max(...rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
-  return rows.map((k) => `${indent}# ${`${k.key}: ${specText(k.defaultSpec)}`.padEnd(width)}  # ${k.description}`);
+  return rows.map((k) => `${prefix}${`${k.key}: ${specText(k.defaultSpec)}`.padEnd(width)}  # ${k.description}`);
 }
 
 /**
@@ -115,7 +116,7 @@ export function descriptorText(model: FirstModel, ratio: RatioLimit): string {
     '  ridge: 0                    # L2 penalty on every coefficient but the intercept; 0 = least squares',
     'limits:                       # this model\'s limits; the commented ones show the built-in defaults',
     `  params_per_sample: ${ratio.value}   # ${ratio.comment}`,
-    ...commentedLimits('  ', ['params_per_sample']),
+    ...commentedLimits('  # ', ['params_per_sample']),
     '',
   ].join('\n');
 }
