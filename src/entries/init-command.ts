@@ -18,7 +18,7 @@ import { createFsRepository } from '../repo/fs-repository.js';
 import { existsInRepo, FILE_EXISTS, writeInRepo } from '../repo/safe-write.js';
 import type { RepoReader } from '../repo/types.js';
 import type { InitCommand } from './args.js';
-import type { CommandOutcome } from './tool-commands.js';
+import type { CommandOutcome } from './command-outcome.js';
 
 /** Folder the first descriptor goes into, repository-relative. */
 const MODELS_FOLDER = 'models';

@@ -15,7 +15,7 @@ import { fromJsonNumber } from '../result/result.js';
 import { runPipeline } from '../run/pipeline.js';
 import { escapeTerminal } from '../report/escape.js';
 import type { RefitCommand } from './args.js';
-import type { CommandOutcome } from './tool-commands.js';
+import type { CommandOutcome } from './command-outcome.js';
 
 /** Runs `fitgate refit`; see the module comment. */
 export async function runRefit(command: RefitCommand): Promise<CommandOutcome> {

@@ -4,12 +4,9 @@
  */
 import type { ExplainCommand, InitCommand, RefitCommand } from './args.js';
 
-/** What a command printed: text for standard output and standard error, and the exit status. */
-export interface CommandOutcome {
-  stdout: string;
-  stderr: string;
-  status: 0 | 1 | 2;
-}
+import type { CommandOutcome } from './command-outcome.js';
+
+export type { CommandOutcome } from './command-outcome.js';
 
 /**
  * Runs one of the tool commands. Errors (InputError and others) propagate to the entry, which
