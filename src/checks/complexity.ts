@@ -2,6 +2,7 @@
  * `complexity`: the simpler setting to use, by the one-standard-error rule on a sweep of the
  * model's main complexity setting.
  */
+import { skipWhenScoreOnly } from './score-only.js';
 import type { Check, Measurement } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { sweepComplexity } from '../diagnostics/complexity.js';
@@ -45,6 +46,8 @@ const check: Check = {
   advice: 'Change the setting as suggested: the simpler model predicts new rows about as well or better.',
   line: (d) => d.fit.line,
   measure(context): Measurement {
+    const scoreOnly = skipWhenScoreOnly(context.descriptor);
+    if (scoreOnly) return scoreOnly;
     const { descriptor, design, train, fit } = context;
     const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {

@@ -2,6 +2,7 @@
  * `cross-validation`: k-fold cross-validation RMSE / training RMSE, with leave-one-out (PRESS),
  * GCV and the effective degrees of freedom in the model's metrics.
  */
+import { skipWhenScoreOnly } from './score-only.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { gapRatio } from '../diagnostics/regression-metrics.js';
@@ -41,6 +42,8 @@ const check: Check = {
   advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,
   measure(context) {
+    const scoreOnly = skipWhenScoreOnly(context.descriptor);
+    if (scoreOnly) return scoreOnly;
     const folds = context.analyses.folds();
     const cv = context.analyses.crossValidation();
     const { metrics, train, design } = context;

@@ -1,6 +1,7 @@
 /**
  * `reproducibility`: how far the descriptor's shipped coefficients are from the refit.
  */
+import { skipWhenScoreOnly } from './score-only.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { jsonRecord } from '../core/json.js';
@@ -23,7 +24,9 @@ const check: Check = {
   \`holdout_rmse_ratio\` (shipped / refit), \`max_coefficient_difference\`.`,
   advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
-  measure({ shipped, predictions, holdout, metrics }) {
+  measure({ shipped, predictions, holdout, metrics, descriptor }) {
+    const scoreOnly = skipWhenScoreOnly(descriptor);
+    if (scoreOnly) return scoreOnly;
     if (shipped === null) return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
     const ps = shipped.holdoutPredictions;
     const pr = predictions.holdout;

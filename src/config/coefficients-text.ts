@@ -124,3 +124,9 @@ export function blankCoefficients(text: string): string {
   const end = value?.range ? value.range[1] : key.range[1];
   return text.slice(0, start) + text.slice(start, end).replace(/[^\n]/g, ' ') + text.slice(end);
 }
+
+/** True when a descriptor text says `fit: { refit: false }` (its shipped coefficients are the model). */
+export function scoresAsShipped(text: string): boolean {
+  const doc = parseDocument(text, { version: '1.2', schema: 'core', uniqueKeys: false });
+  return doc.errors.length === 0 && isMap(doc.contents) && doc.getIn(['fit', 'refit']) === false;
+}

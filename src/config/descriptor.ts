@@ -66,6 +66,9 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   const termsLine = line(['terms']);
   const fitLine = raw.fit ? line(['fit']) : termsLine;
   const limits = readLimits(doc, file, raw.limits, ['limits']);
+  if (raw.fit?.refit === false && !raw.coefficients) {
+    throw errorAt(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
+  }
 
   return {
     file,
@@ -80,6 +83,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
     terms,
     fit: {
       intercept: raw.fit?.intercept ?? true,
+      refit: raw.fit?.refit ?? true,
       ridge: raw.fit?.ridge ?? 0,
       folds: raw.fit?.folds ?? settings.fit.folds,
       foldOrder: raw.fit?.fold_order ?? settings.fit.foldOrder,
@@ -132,7 +136,7 @@ interface RawDescriptor {
   task?: 'regression';
   data: { train: string; holdout: string; target: string };
   terms: RawTerm[];
-  fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
+  fit?: { intercept?: boolean; refit?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }

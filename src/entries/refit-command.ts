@@ -3,9 +3,10 @@
  * descriptor's `coefficients` (only those bytes change; see config/coefficients-text.ts), with
  * one summary line per descriptor. `--check` writes nothing and exits 1 when a descriptor's
  * shipped coefficients are stale (missing or apart from the refit), for a CI step. A model that
- * cannot be refitted is listed and makes the exit status 2; the others are still written.
+ * cannot be refitted is listed and makes the exit status 2; the others are still written. A
+ * model scored as shipped (`fit.refit: false`) is kept as it is.
  */
-import { blankCoefficients, compareCoefficients, shippedCoefficients, withCoefficients } from '../config/coefficients-text.js';
+import { blankCoefficients, compareCoefficients, scoresAsShipped, shippedCoefficients, withCoefficients } from '../config/coefficients-text.js';
 import { errorMessage, InputError } from '../core/errors.js';
 import { formatNumber } from '../core/format.js';
 import { createFsRepository } from '../repo/fs-repository.js';
@@ -32,7 +33,12 @@ export async function runRefit(command: RefitCommand): Promise<CommandOutcome> {
     size: (p) => repo.size(p),
     stream: (p, chunk) => repo.stream(p, chunk),
     glob: (patterns) => repo.glob(patterns),
-    read: async (p) => (/\.ya?ml$/i.test(p) ? new TextEncoder().encode(blankCoefficients(new TextDecoder().decode(await repo.read(p)))) : repo.read(p)),
+    read: async (p) => {
+      const bytes = await repo.read(p);
+      if (!/\.ya?ml$/i.test(p)) return bytes;
+      const text = new TextDecoder().decode(bytes);
+      return scoresAsShipped(text) ? bytes : new TextEncoder().encode(blankCoefficients(text));
+    },
   };
   const result = await runPipeline(settings, refitting, { jobs: 1 });
   const lines: string[] = [];
@@ -55,6 +61,10 @@ export async function runRefit(command: RefitCommand): Promise<CommandOutcome> {
     }
     try {
       const text = new TextDecoder('utf-8', { fatal: true }).decode(await repo.read(m.descriptor));
+      if (scoresAsShipped(text)) {
+        lines.push(`kept: ${where}: scored as shipped (\`fit.refit: false\`), not refitted`);
+        continue;
+      }
       const shipped = shippedCoefficients(text);
       const { stale: isStale, largest, at } = compareCoefficients(shipped, refit);
       const count = `${refit.length} coefficient${refit.length === 1 ? '' : 's'}`;

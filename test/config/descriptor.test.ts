@@ -72,7 +72,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'step', from: 0, to: 1, step: 0.25 }, width: 0.5, line: 14 },
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'at-samples' }, width: 2, line: 15 },
     ]);
-    expect(d.fit).toEqual({ intercept: false, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18 });
+    expect(d.fit).toEqual({ intercept: false, refit: true, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18 });
     expect(d.coefficients).toEqual([1, 2.5, -3]);
     expect(d.coefficientsLine).toBe(20);
     expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.3, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 22 });
@@ -85,7 +85,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
     const minimal = 'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms:\n  - linear: [x]\n';
     const d = await loadDescriptor(repoWith(minimal), F, defaultSettings());
     expect(d.task).toBe('regression');
-    expect(d.fit).toEqual({ intercept: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4 });
+    expect(d.fit).toEqual({ intercept: true, refit: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4 });
     expect(d.coefficients).toBeNull();
     expect(d.coefficientsLine).toBeNull();
     expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
