@@ -14,7 +14,7 @@ const ADVICE = 'Remove terms, lower the degree or the number of radial centres, 
  * and how to relax it for a small data set; otherwise nothing (the check's own advice).
  */
 function ruleAdvice(limit: Limit | undefined, ratio: number): { advice?: string } {
-  if (!limit || limit.source !== 'default' || limit.fail === null || !(ratio > limit.fail) || !Number.isFinite(ratio) || ratio >= 1) return {};
+  if (limit?.source !== 'default' || limit.fail === null || !(ratio > limit.fail) || !Number.isFinite(ratio) || ratio >= 1) return {};
   return {
     advice:
       `The default limit ${formatNumber(limit.fail)} is a rule of thumb (common practice: at least ${formatNumber(1 / limit.fail)} training rows per parameter), not a law. ` +

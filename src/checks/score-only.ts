@@ -9,5 +9,10 @@ import type { Measurement } from './types.js';
 /** The skipped measurement when the model is scored as shipped, else null (measure as usual). */
 export function skipWhenScoreOnly(descriptor: Descriptor): Measurement | null {
   if (descriptor.fit.refit !== false) return null;
-  return { value: null, reason: 'score-only', message: 'skipped: this check needs a refit, and the model is scored as shipped (`fit.refit: false`)', line: descriptor.fit.line };
+  return {
+    value: null,
+    reason: 'score-only',
+    message: 'skipped: this check needs a refit, and the model is scored as shipped (`fit.refit: false`)',
+    line: descriptor.fit.line,
+  };
 }

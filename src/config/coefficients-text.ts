@@ -45,7 +45,10 @@ export function withCoefficients(text: string, values: readonly number[], file: 
   }
   const seq = pair.value;
   if (!isSeq(seq) || !seq.range || !seq.items.every((item) => isScalar(item) && item.range)) {
-    throw new InputError(COEFFICIENTS_TEXT_ERROR, 'cannot be rewritten: expected `coefficients` to be a list of numbers', { file, key: 'coefficients' });
+    throw new InputError(COEFFICIENTS_TEXT_ERROR, 'cannot be rewritten: expected `coefficients` to be a list of numbers', {
+      file,
+      key: 'coefficients',
+    });
   }
   const items = seq.items as Scalar[];
   if (items.length === written.length && items.length > 0) {
@@ -91,7 +94,10 @@ export function shippedCoefficients(text: string): number[] | null {
  * 1e-9 times the largest refit coefficient in absolute value (a relative tolerance far below any
  * figure fitgate reports, above the last-bit noise of a refit).
  */
-export function compareCoefficients(shipped: readonly number[] | null, refit: readonly number[]): { stale: boolean; largest: number; at: number } {
+export function compareCoefficients(
+  shipped: readonly number[] | null,
+  refit: readonly number[],
+): { stale: boolean; largest: number; at: number } {
   if (shipped === null || shipped.length !== refit.length) return { stale: true, largest: Number.NaN, at: -1 };
   let largest = 0;
   let at = -1;

@@ -63,7 +63,10 @@ export function ratioLimitFor(parameters: number, rows: number): RatioLimit {
   const ratio = parameters / rows;
   const figure = `${parameters} parameters for ${rows} training rows`;
   if (ratio <= RATIO_DEFAULT) {
-    return { value: RATIO_DEFAULT, comment: `${figure}: the default ${RATIO_DEFAULT} (common practice: at least ${1 / RATIO_DEFAULT} rows per parameter) suits this file` };
+    return {
+      value: RATIO_DEFAULT,
+      comment: `${figure}: the default ${RATIO_DEFAULT} (common practice: at least ${1 / RATIO_DEFAULT} rows per parameter) suits this file`,
+    };
   }
   return {
     value: roundUp2(ratio),
@@ -72,12 +75,15 @@ export function ratioLimitFor(parameters: number, rows: number): RatioLimit {
 }
 
 function specText(spec: LimitSpec): string {
-  return typeof spec === 'object' && spec !== null ? JSON.stringify(spec).replace(/"/g, '').replace(/,/g, ', ').replace(/:/g, ': ').replace(/^\{/, '{ ').replace(/\}$/, ' }') : String(spec);
+  return typeof spec === 'object' && spec !== null
+    ? JSON.stringify(spec).replace(/"/g, '').replace(/,/g, ', ').replace(/:/g, ': ').replace(/^\{/, '{ ').replace(/\}$/, ' }')
+    : String(spec);
 }
 
 /** A YAML plain scalar when safe, else a double-quoted one (JSON string syntax is valid YAML). */
 function scalar(text: string): string {
-  const plain = /^[A-Za-z_.][A-Za-z0-9_.\-/]*$/.test(text) && !/^(true|false|null|yes|no|on|off|y|n|~)$/i.test(text) && !/^\.(inf|nan)$/i.test(text);
+  const plain =
+    /^[A-Za-z_.][A-Za-z0-9_.\-/]*$/.test(text) && !/^(true|false|null|yes|no|on|off|y|n|~)$/i.test(text) && !/^\.(inf|nan)$/i.test(text);
   return plain ? text : JSON.stringify(text);
 }
 
@@ -114,7 +120,7 @@ export function descriptorText(model: FirstModel, ratio: RatioLimit): string {
     'fit:',
     '  intercept: true',
     '  ridge: 0                    # L2 penalty on every coefficient but the intercept; 0 = least squares',
-    'limits:                       # this model\'s limits; the commented ones show the built-in defaults',
+    "limits:                       # this model's limits; the commented ones show the built-in defaults",
     `  params_per_sample: ${ratio.value}   # ${ratio.comment}`,
     ...commentedLimits('  # ', ['params_per_sample']),
     '',
@@ -129,7 +135,7 @@ export function descriptorText(model: FirstModel, ratio: RatioLimit): string {
 export function settingsText(schema: string, pattern: string): string {
   return [
     `# yaml-language-server: $schema=${schema}`,
-    '# fitgate settings, written by `fitgate init`. A descriptor\'s own `limits` win key by key.',
+    "# fitgate settings, written by `fitgate init`. A descriptor's own `limits` win key by key.",
     'version: 1',
     'models:                       # glob patterns of model descriptors, relative to this folder',
     `  - ${JSON.stringify(pattern)}`,

@@ -38,7 +38,12 @@ function schemaLocation(root: string, folder: string, file: 'descriptor' | 'sett
 }
 
 /** Reads the columns that hold numbers only (the target must be one of them). */
-async function numericTable(repo: RepoReader, file: string, header: string[], target: string): Promise<{ table: Table; dropped: string[] }> {
+async function numericTable(
+  repo: RepoReader,
+  file: string,
+  header: string[],
+  target: string,
+): Promise<{ table: Table; dropped: string[] }> {
   let columns = [target, ...header.filter((c) => c !== target)].slice(0, MAX_COLUMNS);
   const dropped: string[] = header.length > MAX_COLUMNS ? header.filter((c) => !columns.includes(c)) : [];
   for (let attempt = 0; attempt <= MAX_COLUMNS; attempt++) {
@@ -67,8 +72,14 @@ function rowsText(lines: string[], rowLines: Int32Array, indexes: Int32Array): s
 
 /** A model name from a file name: letters, digits, `-`, `_`, `.` only. */
 function nameFrom(file: string): string {
-  const stem = path.posix.basename(file).replace(/\.csv$/i, '').replace(/[-_.]?train(ing)?$/i, '');
-  const name = stem.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^[-.]+|[-.]+$/g, '').slice(0, 100);
+  const stem = path.posix
+    .basename(file)
+    .replace(/\.csv$/i, '')
+    .replace(/[-_.]?train(ing)?$/i, '');
+  const name = stem
+    .replace(/[^A-Za-z0-9._-]+/g, '-')
+    .replace(/^[-.]+|[-.]+$/g, '')
+    .slice(0, 100);
   return name === '' ? 'model' : name;
 }
 
@@ -79,13 +90,24 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
   const target = command.target ?? header[header.length - 1];
   if (!header.includes(target)) {
     const near = nearestWord(target, header);
-    throw new InputError('csv-missing-column', `no column ${quoteValue(target, 60)}${near !== null ? ` (did you mean ${quoteValue(near, 60)}?)` : ''}; expected one of: ${header.slice(0, 20).join(', ')}`, { file: command.train, key: '--target' });
+    throw new InputError(
+      'csv-missing-column',
+      `no column ${quoteValue(target, 60)}${near !== null ? ` (did you mean ${quoteValue(near, 60)}?)` : ''}; expected one of: ${header.slice(0, 20).join(', ')}`,
+      { file: command.train, key: '--target' },
+    );
   }
   const { table, dropped } = await numericTable(repo, command.train, header, target);
   const inputs = header.filter((c) => c !== target && table.columns.has(c));
-  if (inputs.length === 0) throw new InputError('csv-missing-column', `no numeric column besides the target ${quoteValue(target, 60)}; expected at least one input column`, { file: command.train });
+  if (inputs.length === 0)
+    throw new InputError(
+      'csv-missing-column',
+      `no numeric column besides the target ${quoteValue(target, 60)}; expected at least one input column`,
+      { file: command.train },
+    );
   if (command.name !== null && !/^[A-Za-z0-9._-]{1,100}$/.test(command.name)) {
-    throw new InputError('option-value', `expected 1 to 100 letters, digits, \`-\`, \`_\` or \`.\`, got ${quoteValue(command.name, 60)}`, { key: '--name' });
+    throw new InputError('option-value', `expected 1 to 100 letters, digits, \`-\`, \`_\` or \`.\`, got ${quoteValue(command.name, 60)}`, {
+      key: '--name',
+    });
   }
   const name = command.name ?? nameFrom(command.train);
   const descriptorPath = `${MODELS_FOLDER}/${name}.model.yml`;
@@ -97,9 +119,15 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
   let holdoutFile = command.holdout;
   let trainRows = table.rows;
   if (holdoutFile === null) {
-    if (table.rows < 3) throw new InputError('csv-empty', `has ${table.rows} data rows; expected at least 3 to split a hold-out off (or give --holdout)`, { file: command.train });
+    if (table.rows < 3)
+      throw new InputError('csv-empty', `has ${table.rows} data rows; expected at least 3 to split a hold-out off (or give --holdout)`, {
+        file: command.train,
+      });
     const split = splitRows(table.rows, command.holdoutShare, command.split, command.seed);
-    const lines = new TextDecoder('utf-8').decode(await repo.read(command.train)).replace(/^\uFEFF/, '').split(/\r?\n/);
+    const lines = new TextDecoder('utf-8')
+      .decode(await repo.read(command.train))
+      .replace(/^\uFEFF/, '')
+      .split(/\r?\n/);
     while (lines.length > 0 && lines[lines.length - 1].trim() === '') lines.pop();
     const stem = command.train.replace(/\.csv$/i, '');
     trainFile = `${stem}-train.csv`;
@@ -112,7 +140,9 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
         ? `the last ${split.holdout.length} of ${table.rows} rows (a block at the end, for data in time order)`
         : `${split.holdout.length} of ${table.rows} rows drawn at random with seed ${command.seed} (reproducible: \`--seed ${command.seed}\` gives the same split)`;
     notes.push(`Hold-out: ${how}, split off ${command.train} by fitgate init.`);
-    said.push(`split ${command.train}: ${trainRows} training rows -> ${trainFile}, ${split.holdout.length} hold-out rows -> ${holdoutFile}; hold-out = ${how}`);
+    said.push(
+      `split ${command.train}: ${trainRows} training rows -> ${trainFile}, ${split.holdout.length} hold-out rows -> ${holdoutFile}; hold-out = ${how}`,
+    );
   } else if (!(await repo.isFile(holdoutFile))) {
     throw new InputError('file-missing', `hold-out file not found in ${repo.label}`, { file: holdoutFile, key: '--holdout' });
   }
@@ -142,13 +172,31 @@ export async function runInit(command: InitCommand): Promise<CommandOutcome> {
     ),
   });
   if (!existsInRepo(command.root, DEFAULT_SETTINGS_PATH)) {
-    writes.push({ file: DEFAULT_SETTINGS_PATH, overwrite: false, text: settingsText(schemaLocation(command.root, '', 'settings'), `${MODELS_FOLDER}/**/*.model.yml`) });
-  } else said.push(`kept the settings file ${DEFAULT_SETTINGS_PATH} as it is (its \`models\` patterns must match ${descriptorPath}; the default is ${DEFAULT_MODEL_PATTERNS.join(', ')})`);
+    writes.push({
+      file: DEFAULT_SETTINGS_PATH,
+      overwrite: false,
+      text: settingsText(schemaLocation(command.root, '', 'settings'), `${MODELS_FOLDER}/**/*.model.yml`),
+    });
+  } else
+    said.push(
+      `kept the settings file ${DEFAULT_SETTINGS_PATH} as it is (its \`models\` patterns must match ${descriptorPath}; the default is ${DEFAULT_MODEL_PATTERNS.join(', ')})`,
+    );
 
   // Every file is checked before any is written, so that a refusal leaves the tree as it was.
   const blocked = writes.filter((w) => !w.overwrite && existsInRepo(command.root, w.file));
   if (blocked.length > 0) {
-    throw new InputError(FILE_EXISTS, `exists; nothing was written. Run again with --force to overwrite ${blocked.length === 1 ? 'it' : `it and ${blocked.slice(1).map((b) => b.file).join(', ')}`}`, { file: blocked[0].file });
+    throw new InputError(
+      FILE_EXISTS,
+      `exists; nothing was written. Run again with --force to overwrite ${
+        blocked.length === 1
+          ? 'it'
+          : `it and ${blocked
+              .slice(1)
+              .map((b) => b.file)
+              .join(', ')}`
+      }`,
+      { file: blocked[0].file },
+    );
   }
   for (const w of writes) writeInRepo(command.root, w.file, w.text, w.overwrite);
   const lines = [

@@ -6,7 +6,13 @@
  * cannot be refitted is listed and makes the exit status 2; the others are still written. A
  * model scored as shipped (`fit.refit: false`) is kept as it is.
  */
-import { blankCoefficients, compareCoefficients, scoresAsShipped, shippedCoefficients, withCoefficients } from '../config/coefficients-text.js';
+import {
+  blankCoefficients,
+  compareCoefficients,
+  scoresAsShipped,
+  shippedCoefficients,
+  withCoefficients,
+} from '../config/coefficients-text.js';
 import { errorMessage, InputError } from '../core/errors.js';
 import { formatNumber } from '../core/format.js';
 import { createFsRepository } from '../repo/fs-repository.js';
@@ -49,7 +55,12 @@ export async function runRefit(command: RefitCommand): Promise<CommandOutcome> {
     const where = escapeTerminal(m.descriptor);
     if (m.error) {
       errors += 1;
-      const at = m.error.file && m.error.file !== m.descriptor ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : m.error.line ? `line ${m.error.line}: ` : '';
+      const at =
+        m.error.file && m.error.file !== m.descriptor
+          ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: `
+          : m.error.line
+            ? `line ${m.error.line}: `
+            : '';
       lines.push(`error: ${where}: ${escapeTerminal(at + m.error.message)}`);
       continue;
     }
@@ -68,10 +79,17 @@ export async function runRefit(command: RefitCommand): Promise<CommandOutcome> {
       const shipped = shippedCoefficients(text);
       const { stale: isStale, largest, at } = compareCoefficients(shipped, refit);
       const count = `${refit.length} coefficient${refit.length === 1 ? '' : 's'}`;
-      const change = shipped === null ? 'none shipped' : shipped.length !== refit.length ? `${shipped.length} shipped` : `largest difference ${formatNumber(largest)} at [${at}]`;
+      const change =
+        shipped === null
+          ? 'none shipped'
+          : shipped.length !== refit.length
+            ? `${shipped.length} shipped`
+            : `largest difference ${formatNumber(largest)} at [${at}]`;
       if (command.check) {
         if (isStale) stale += 1;
-        lines.push(isStale ? `stale: ${where}: ${count} from the refit, ${change}; run \`fitgate refit ${where}\`` : `current: ${where}: ${count}`);
+        lines.push(
+          isStale ? `stale: ${where}: ${count} from the refit, ${change}; run \`fitgate refit ${where}\`` : `current: ${where}: ${count}`,
+        );
         continue;
       }
       if (!isStale && shipped !== null) {

@@ -54,7 +54,12 @@ export function writeInRepo(root: string, rel: string, text: string, overwrite =
       if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
     }
     const real = realpathSync(folder);
-    if (!isInside(base, real)) throw new InputError(PATH_OUTSIDE, 'a folder on the way is a link that leads outside the repository; expected a plain folder inside it', { file: normal });
+    if (!isInside(base, real))
+      throw new InputError(
+        PATH_OUTSIDE,
+        'a folder on the way is a link that leads outside the repository; expected a plain folder inside it',
+        { file: normal },
+      );
     folder = real;
   }
   const target = nodePath.join(folder, segments[segments.length - 1]);
@@ -64,8 +69,10 @@ export function writeInRepo(root: string, rel: string, text: string, overwrite =
   } catch {
     existing = null;
   }
-  if (existing?.isSymbolicLink()) throw new InputError(PATH_OUTSIDE, 'is a symbolic link; fitgate never writes through a link (remove it first)', { file: normal });
-  if (existing && !existing.isFile()) throw new InputError(FILE_EXISTS, 'exists and is not a regular file; expected a file path', { file: normal });
+  if (existing?.isSymbolicLink())
+    throw new InputError(PATH_OUTSIDE, 'is a symbolic link; fitgate never writes through a link (remove it first)', { file: normal });
+  if (existing && !existing.isFile())
+    throw new InputError(FILE_EXISTS, 'exists and is not a regular file; expected a file path', { file: normal });
   if (existing && !overwrite) throw new InputError(FILE_EXISTS, 'exists; run again with --force to overwrite it', { file: normal });
   const temporary = nodePath.join(folder, `.${segments[segments.length - 1].slice(0, 40)}.${process.pid}.${Date.now().toString(36)}.tmp`);
   const fd = openSync(temporary, 'wx', 0o644);

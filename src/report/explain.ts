@@ -9,7 +9,8 @@ import { checkDocsUrl } from '../core/links.js';
 
 /** The explanation of one check, ending with a line break. */
 export function formatExplanation(check: Check): string {
-  const direction = check.direction === 'above' ? 'a ceiling: the figure fails above its limit' : 'a floor: the figure fails below its limit';
+  const direction =
+    check.direction === 'above' ? 'a ceiling: the figure fails above its limit' : 'a floor: the figure fails below its limit';
   return [
     `${check.id}: ${check.title}`,
     '',

@@ -8,7 +8,9 @@ const HEAD = '# kiln\nversion: 1   # first\nname: "kiln"\nterms:\n  - linear: [a
 describe('withCoefficients', () => {
   it('replaces each number where it stands when the count is the same (comments between items survive)', () => {
     const text = `${HEAD}coefficients: [1.0,   # intercept\n  2.0, 3e0]  # old\nlimits: { gap_ratio: 1.3 }\n`;
-    expect(withCoefficients(text, [0.5, -1.25, 1e-7], 'k.yml')).toBe(`${HEAD}coefficients: [0.5,   # intercept\n  -1.25, 1e-7]  # old\nlimits: { gap_ratio: 1.3 }\n`);
+    expect(withCoefficients(text, [0.5, -1.25, 1e-7], 'k.yml')).toBe(
+      `${HEAD}coefficients: [0.5,   # intercept\n  -1.25, 1e-7]  # old\nlimits: { gap_ratio: 1.3 }\n`,
+    );
   });
 
   it('rewrites a flow list of another length in place', () => {

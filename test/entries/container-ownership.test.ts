@@ -21,7 +21,10 @@ function chownCommand(): string[] | null {
 }
 
 const chown = chownCommand();
-const missing = skipOrThrow(chown === null ? ['making a folder owned by another user id needs root or passwordless sudo (chown)'] : [], process.env);
+const missing = skipOrThrow(
+  chown === null ? ['making a folder owned by another user id needs root or passwordless sudo (chown)'] : [],
+  process.env,
+);
 
 describe.skipIf(missing !== null)(`a repository owned by another user id${skipNote(missing)}`, () => {
   let cli: ReturnType<typeof sourceCli>;
@@ -34,14 +37,27 @@ describe.skipIf(missing !== null)(`a repository owned by another user id${skipNo
     repo = greenhouse('limits: { params_per_sample: 0.2 }');
     home = path.join(repo.dir, '..', `${path.basename(repo.dir)}-home`);
     mkdirSync(home);
-    const gitEnv = { ...process.env, ...env(), GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com' };
-    for (const args of [['init', '-q', '-b', 'main'], ['add', '-A'], ['commit', '-q', '-m', 'line']]) execFileSync('git', args, { cwd: repo.dir, env: gitEnv, stdio: 'pipe' });
+    const gitEnv = {
+      ...process.env,
+      ...env(),
+      GIT_AUTHOR_NAME: 't',
+      GIT_AUTHOR_EMAIL: 't@example.com',
+      GIT_COMMITTER_NAME: 't',
+      GIT_COMMITTER_EMAIL: 't@example.com',
+    };
+    for (const args of [
+      ['init', '-q', '-b', 'main'],
+      ['add', '-A'],
+      ['commit', '-q', '-m', 'line'],
+    ])
+      execFileSync('git', args, { cwd: repo.dir, env: gitEnv, stdio: 'pipe' });
     const [command, ...rest] = chown ?? [];
     execFileSync(command, [...rest, '-R', `${OTHER_UID}:${OTHER_UID}`, repo.dir]);
   });
   afterAll(() => {
     cli?.remove();
-    if (repo && chown && process.getuid?.() !== 0) spawnSync('sudo', ['-n', 'chown', '-R', `${process.getuid?.()}:${process.getgid?.()}`, repo.dir]);
+    if (repo && chown && process.getuid?.() !== 0)
+      spawnSync('sudo', ['-n', 'chown', '-R', `${process.getuid?.()}:${process.getgid?.()}`, repo.dir]);
     repo?.remove();
   });
 

@@ -22,7 +22,9 @@ describe('fitgate explain', () => {
     const check = CHECKS.find((c) => c.id === 'generalisation-gap');
     expect(check).toBeDefined();
     if (!check) return;
-    expect(r.stdout).toMatch(/^generalisation-gap: Generalisation gap\n\nLimit key `gap_ratio` \(a ceiling: the figure fails above its limit\)\./);
+    expect(r.stdout).toMatch(
+      /^generalisation-gap: Generalisation gap\n\nLimit key `gap_ratio` \(a ceiling: the figure fails above its limit\)\./,
+    );
     expect(r.stdout).toContain(check.description);
     expect(r.stdout).toContain('hold-out RMSE / training RMSE');
     expect(r.stdout).toContain('The Elements of Statistical Learning');
@@ -52,14 +54,21 @@ describe('fitgate explain', () => {
   it('lists every check with no id', () => {
     const r = cli.run(['explain'], tmpdir());
     expect(r.status).toBe(0);
-    expect(r.stdout.trimEnd().split('\n').map((l) => l.split(/\s+/)[0])).toEqual(CHECKS.map((c) => c.id));
+    expect(
+      r.stdout
+        .trimEnd()
+        .split('\n')
+        .map((l) => l.split(/\s+/)[0]),
+    ).toEqual(CHECKS.map((c) => c.id));
   });
 
   it('refuses an unknown id with the nearest one as a suggestion (status 2)', () => {
     const r = cli.run(['explain', 'coeficient-size'], tmpdir());
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
-    expect(r.stderr).toBe(`error: unknown check "coeficient-size" (did you mean 'coefficient-size'?)\n(run \`fitgate explain\` for the list of checks)\n`);
+    expect(r.stderr).toBe(
+      `error: unknown check "coeficient-size" (did you mean 'coefficient-size'?)\n(run \`fitgate explain\` for the list of checks)\n`,
+    );
     const far = cli.run(['explain', 'zzz'], tmpdir());
     expect(far.stderr).toMatch(/^error: unknown check "zzz"\n/);
   });

@@ -52,8 +52,12 @@ describe('fitgate init with one CSV', () => {
     expect(read(dir, 'data/air-holdout.csv').split('\n')[0]).toBe('hour,vent_pct,site,humidity_pct');
 
     const descriptor = read(dir, 'models/air.model.yml');
-    expect(descriptor.split('\n')[0]).toBe(`# yaml-language-server: $schema=https://raw.githubusercontent.com/fitgate/fitgate/v${VERSION}/dist/schema/descriptor.schema.json`);
-    expect(read(dir, 'fitgate.yml').split('\n')[0]).toBe(`# yaml-language-server: $schema=https://raw.githubusercontent.com/fitgate/fitgate/v${VERSION}/dist/schema/settings.schema.json`);
+    expect(descriptor.split('\n')[0]).toBe(
+      `# yaml-language-server: $schema=https://raw.githubusercontent.com/fitgate/fitgate/v${VERSION}/dist/schema/descriptor.schema.json`,
+    );
+    expect(read(dir, 'fitgate.yml').split('\n')[0]).toBe(
+      `# yaml-language-server: $schema=https://raw.githubusercontent.com/fitgate/fitgate/v${VERSION}/dist/schema/settings.schema.json`,
+    );
     const value = parse(descriptor) as { data: Record<string, string>; terms: unknown[]; limits: Record<string, number> };
     expect(value.data).toEqual({ train: '../data/air-train.csv', holdout: '../data/air-holdout.csv', target: 'humidity_pct' });
     // The text column is left out, and said so.
@@ -61,7 +65,9 @@ describe('fitgate init with one CSV', () => {
     expect(descriptor).toContain('# Left out (not numeric): site.');
     // 3 parameters for 15 rows = 0.2: the default 0.1 would fail; the limit written lets it through and says why.
     expect(value.limits).toEqual({ params_per_sample: 0.2 });
-    expect(descriptor).toMatch(/params_per_sample: 0.2 +# 3 parameters for 15 training rows: the default 0.1 \(common practice: at least 10 rows per parameter\) would fail this small file/);
+    expect(descriptor).toMatch(
+      /params_per_sample: 0.2 +# 3 parameters for 15 training rows: the default 0.1 \(common practice: at least 10 rows per parameter\) would fail this small file/,
+    );
     for (const { key } of LIMIT_KEYS) {
       if (key !== 'params_per_sample') expect(descriptor, key).toMatch(new RegExp(`\\n  # ${key}: `));
       expect(read(dir, 'fitgate.yml'), key).toMatch(new RegExp(`\\n#   ${key}: `));
@@ -72,7 +78,12 @@ describe('fitgate init with one CSV', () => {
   });
 
   it('splits the same way with the same seed, differently with another, and by a block at the end with --split last', () => {
-    const runs = [['--seed', '7'], ['--seed', '7'], ['--seed', '8'], ['--split', 'last']].map((extra) => {
+    const runs = [
+      ['--seed', '7'],
+      ['--seed', '7'],
+      ['--seed', '8'],
+      ['--split', 'last'],
+    ].map((extra) => {
       const dir = repo({ 'data/air.csv': log(40) });
       const r = cli.run(['init', 'data/air.csv', ...extra], dir);
       expect(r.status, r.stderr).toBe(0);
@@ -86,7 +97,9 @@ describe('fitgate init with one CSV', () => {
   it('writes the default limit, saying it suits the file, when there are rows enough', () => {
     const dir = repo({ 'data/air.csv': log(200) });
     expect(cli.run(['init', 'data/air.csv', '--holdout-share', '0.2'], dir).status).toBe(0);
-    expect(read(dir, 'models/air.model.yml')).toMatch(/params_per_sample: 0.1 +# 3 parameters for 160 training rows: the default 0.1 \(common practice: at least 10 rows per parameter\) suits this file/);
+    expect(read(dir, 'models/air.model.yml')).toMatch(
+      /params_per_sample: 0.1 +# 3 parameters for 160 training rows: the default 0.1 \(common practice: at least 10 rows per parameter\) suits this file/,
+    );
   });
 
   it('never overwrites a file without --force, and writes nothing when one is in the way', () => {
@@ -102,7 +115,7 @@ describe('fitgate init with one CSV', () => {
   });
 
   it('keeps an existing settings file as it is, even with --force', () => {
-    const dir = repo({ 'data/air.csv': log(20), 'fitgate.yml': 'version: 1\n# the team\'s own\n' });
+    const dir = repo({ 'data/air.csv': log(20), 'fitgate.yml': "version: 1\n# the team's own\n" });
     const r = cli.run(['init', 'data/air.csv', '--force'], dir);
     expect(r.status, r.stderr).toBe(0);
     expect(read(dir, 'fitgate.yml')).toBe("version: 1\n# the team's own\n");
@@ -128,7 +141,21 @@ describe('fitgate init with a hold-out file', () => {
       'node_modules/fitgate/dist/schema/descriptor.schema.json': '{}\n',
     });
     mkdirSync(path.join(dir, 'models'));
-    const r = cli.run(['init', 'data/air-train.csv', '--holdout', 'data/air-holdout.csv', '--target', 'humidity_pct', '--degree', '2', '--name', 'greenhouse'], dir);
+    const r = cli.run(
+      [
+        'init',
+        'data/air-train.csv',
+        '--holdout',
+        'data/air-holdout.csv',
+        '--target',
+        'humidity_pct',
+        '--degree',
+        '2',
+        '--name',
+        'greenhouse',
+      ],
+      dir,
+    );
     expect(r.status, r.stderr).toBe(0);
     const descriptor = read(dir, 'models/greenhouse.model.yml');
     expect(descriptor.split('\n')[0]).toBe('# yaml-language-server: $schema=../node_modules/fitgate/dist/schema/descriptor.schema.json');
@@ -144,6 +171,8 @@ describe('fitgate init with a hold-out file', () => {
     const dir = repo({ 'data/air.csv': log(20) });
     const r = cli.run(['init', 'data/air.csv', '--target', 'humidty_pct'], dir);
     expect(r.status).toBe(2);
-    expect(r.stderr).toBe('fitgate: data/air.csv: `--target`: no column "humidty_pct" (did you mean "humidity_pct"?); expected one of: hour, vent_pct, site, humidity_pct\n');
+    expect(r.stderr).toBe(
+      'fitgate: data/air.csv: `--target`: no column "humidty_pct" (did you mean "humidity_pct"?); expected one of: hour, vent_pct, site, humidity_pct\n',
+    );
   });
 });

@@ -39,7 +39,10 @@ describe('readable by default', () => {
   it('says which settings file was used, or that the defaults were', () => {
     const none = run(['check', '--jobs', '1'], inRepo('limits: { params_per_sample: 0.2 }'));
     expect(none.stdout).toContain('note: settings: no file at fitgate.yml; built-in defaults (descriptors **/*.model.yml, default limits)');
-    const withFile = run(['check', '--jobs', '1'], inRepo('limits: { params_per_sample: 0.2 }', { 'fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\n' }));
+    const withFile = run(
+      ['check', '--jobs', '1'],
+      inRepo('limits: { params_per_sample: 0.2 }', { 'fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\n' }),
+    );
     expect(withFile.stdout).toContain('note: settings: fitgate.yml');
     expect(withFile.status, withFile.stderr).toBe(0);
   });
@@ -52,15 +55,30 @@ describe('readable by default', () => {
     const verbose = run(['check', '--jobs', '1', '--verbose'], dir);
     expect(verbose.status).toBe(0);
     expect(verbose.stdout).toContain('PASS greenhouse-humidity (models/greenhouse.model.yml)');
-    expect(verbose.stdout).toMatch(/ {2}PASS generalisation-gap \(models\/greenhouse\.model\.yml:\d+\): hold-out RMSE [\d.]+ is [\d.]+ times the training RMSE/);
-    expect(verbose.stdout).toContain('PASS parameter-ratio (models/greenhouse.model.yml:10): 2 parameters for 15 training rows (0.1333 per row); within limits (fail above 0.2)');
+    expect(verbose.stdout).toMatch(
+      / {2}PASS generalisation-gap \(models\/greenhouse\.model\.yml:\d+\): hold-out RMSE [\d.]+ is [\d.]+ times the training RMSE/,
+    );
+    expect(verbose.stdout).toContain(
+      'PASS parameter-ratio (models/greenhouse.model.yml:10): 2 parameters for 15 training rows (0.1333 per row); within limits (fail above 0.2)',
+    );
     expect(verbose.stdout).toMatch(/ {2}SKIPPED reproducibility/);
   });
 
   it('adds a base column when compared with a base commit', () => {
     const dir = inRepo('limits: { params_per_sample: 0.2 }');
-    const env = { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com' };
-    for (const args of [['init', '-q', '-b', 'main'], ['add', '-A'], ['commit', '-q', '-m', 'line']]) execFileSync('git', args, { cwd: dir, env, stdio: 'pipe' });
+    const env = {
+      ...process.env,
+      GIT_AUTHOR_NAME: 't',
+      GIT_AUTHOR_EMAIL: 't@example.com',
+      GIT_COMMITTER_NAME: 't',
+      GIT_COMMITTER_EMAIL: 't@example.com',
+    };
+    for (const args of [
+      ['init', '-q', '-b', 'main'],
+      ['add', '-A'],
+      ['commit', '-q', '-m', 'line'],
+    ])
+      execFileSync('git', args, { cwd: dir, env, stdio: 'pipe' });
     const plain = run(['check', '--jobs', '1'], dir);
     expect(plain.stdout.split('\n')[0]).not.toContain('vs base');
     const compared = run(['check', '--jobs', '1', '--base', 'HEAD'], dir);
@@ -72,13 +90,18 @@ describe('readable by default', () => {
 
   it('names a descriptor error by line and column without repeating the path, and suggests the nearest key', () => {
     const dir = inRepo();
-    writeFileSync(path.join(dir, 'models/greenhouse.model.yml'), lineDescriptor().replace('  target: humidity_pct', '  taget: humidity_pct'));
+    writeFileSync(
+      path.join(dir, 'models/greenhouse.model.yml'),
+      lineDescriptor().replace('  target: humidity_pct', '  taget: humidity_pct'),
+    );
     const r = run(['check', '--jobs', '1'], dir);
     expect(r.status).toBe(2);
     const lines = r.stdout.split('\n');
     const header = lines.findIndex((l) => l.startsWith('ERROR greenhouse.model.yml') || l.startsWith('ERROR models/greenhouse.model.yml'));
     expect(header, r.stdout).toBeGreaterThan(0);
-    expect(lines[header + 1]).toBe('  line 4, column 1: `data.target`: missing key `target` (did you mean `target` instead of "taget"?); required keys: train, holdout, target');
+    expect(lines[header + 1]).toBe(
+      '  line 4, column 1: `data.target`: missing key `target` (did you mean `target` instead of "taget"?); required keys: train, holdout, target',
+    );
     expect(r.stdout).not.toContain('models/greenhouse.model.yml:4');
   });
 
@@ -94,7 +117,9 @@ describe('small data is not failed by surprise', () => {
   it('says which rule a straight line on 15 rows breaks and how to relax it; relaxed, it passes', () => {
     const strict = run(['check', '--jobs', '1'], inRepo());
     expect(strict.status).toBe(1);
-    expect(strict.stdout).toContain('FAIL parameter-ratio (models/greenhouse.model.yml:8): 2 parameters for 15 training rows (0.1333 per row); over the fail limit 0.1');
+    expect(strict.stdout).toContain(
+      'FAIL parameter-ratio (models/greenhouse.model.yml:8): 2 parameters for 15 training rows (0.1333 per row); over the fail limit 0.1',
+    );
     expect(strict.stdout).toContain(
       'The default limit 0.1 is a rule of thumb (common practice: at least 10 training rows per parameter), not a law. Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows. If the data set is small by nature and the fit is otherwise sound, relax the rule for this model in its descriptor: `limits: { params_per_sample: 0.14 }`.',
     );

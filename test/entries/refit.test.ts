@@ -50,7 +50,9 @@ describe('fitgate refit', () => {
     const dir = repo(COMMENTED);
     const before = cli.run(['refit', '--check'], dir);
     expect(before.status).toBe(1);
-    expect(before.stdout).toBe('stale: models/greenhouse.model.yml: 2 coefficients from the refit, 3 shipped; run `fitgate refit models/greenhouse.model.yml`\n1 model: 1 with stale coefficients\n');
+    expect(before.stdout).toBe(
+      'stale: models/greenhouse.model.yml: 2 coefficients from the refit, 3 shipped; run `fitgate refit models/greenhouse.model.yml`\n1 model: 1 with stale coefficients\n',
+    );
     expect(readFileSync(path.join(dir, 'models/greenhouse.model.yml'), 'utf8')).toBe(COMMENTED);
 
     const r = cli.run(['refit'], dir);
@@ -87,7 +89,9 @@ describe('fitgate refit', () => {
     const text = readFileSync(path.join(dir, 'models/greenhouse.model.yml'), 'utf8');
     expect(text.startsWith(plain)).toBe(true);
     expect(text.slice(plain.length)).toMatch(/^coefficients: \[[-\d.e]+, [-\d.e]+\]\n$/);
-    expect(readFileSync(path.join(dir, 'models/other.model.yml'), 'utf8')).toBe(plain.replace("name: 'greenhouse-humidity'", 'name: other'));
+    expect(readFileSync(path.join(dir, 'models/other.model.yml'), 'utf8')).toBe(
+      plain.replace("name: 'greenhouse-humidity'", 'name: other'),
+    );
   });
 
   it('lists a model that cannot be refitted (exit 2) and still writes the others', () => {

@@ -19,7 +19,11 @@ afterAll(() => {
 
 /** RMSE of y = a + b x over the rows of a `vent_pct,humidity_pct` CSV, computed here from the file. */
 function rmse(csv: string, a: number, b: number): number {
-  const rows = csv.trim().split('\n').slice(1).map((l) => l.split(',').map(Number));
+  const rows = csv
+    .trim()
+    .split('\n')
+    .slice(1)
+    .map((l) => l.split(',').map(Number));
   return Math.sqrt(rows.reduce((s, [x, y]) => s + (y - (a + b * x)) ** 2, 0) / rows.length);
 }
 
@@ -33,7 +37,9 @@ function run(extra: string): { dir: string; result: Result; status: number | nul
 describe('fit.refit: false', () => {
   it('judges the shipped coefficients and skips the checks that need a refit, with the reason', () => {
     // Shipped by another team: close to the line, slightly off (82, -0.34 rather than the refit's).
-    const { dir, result, status } = run('fit: { refit: false }\ncoefficients: [82, -0.34]\nlimits: { params_per_sample: 0.2, gap_ratio: 5 }');
+    const { dir, result, status } = run(
+      'fit: { refit: false }\ncoefficients: [82, -0.34]\nlimits: { params_per_sample: 0.2, gap_ratio: 5 }',
+    );
     expect(status).toBe(0);
     const m = result.models[0];
     expect(m.coefficients).toEqual([82, -0.34]);
@@ -48,7 +54,9 @@ describe('fit.refit: false', () => {
     for (const id of ['generalisation-gap', 'parameter-ratio', 'coefficient-size', 'swing', 'leakage', 'conditioning']) {
       expect(m.checks.find((c) => c.id === id)?.status, id).toBe('pass');
     }
-    expect(m.checks.find((c) => c.id === 'cross-validation')?.message).toBe('skipped: this check needs a refit, and the model is scored as shipped (`fit.refit: false`)');
+    expect(m.checks.find((c) => c.id === 'cross-validation')?.message).toBe(
+      'skipped: this check needs a refit, and the model is scored as shipped (`fit.refit: false`)',
+    );
   });
 
   it('fails shipped coefficients that are over a limit, where the refit of the same descriptor passes', () => {
@@ -65,7 +73,9 @@ describe('fit.refit: false', () => {
     cleanup.push(repo.remove);
     const r = cli.run(['check', '--jobs', '1'], repo.dir);
     expect(r.status).toBe(2);
-    expect(r.stdout).toContain('line 11, column 10: `fit.refit`: `refit: false` scores the shipped coefficients, and the descriptor ships none');
+    expect(r.stdout).toContain(
+      'line 11, column 10: `fit.refit`: `refit: false` scores the shipped coefficients, and the descriptor ships none',
+    );
   });
 
   it('is kept as it is by fitgate refit', () => {
@@ -74,7 +84,9 @@ describe('fit.refit: false', () => {
     const before = readFileSync(path.join(repo.dir, 'models/greenhouse.model.yml'), 'utf8');
     const r = cli.run(['refit'], repo.dir);
     expect(r.status, r.stdout).toBe(0);
-    expect(r.stdout).toBe('kept: models/greenhouse.model.yml: scored as shipped (`fit.refit: false`), not refitted\n1 model: 0 descriptors written\n');
+    expect(r.stdout).toBe(
+      'kept: models/greenhouse.model.yml: scored as shipped (`fit.refit: false`), not refitted\n1 model: 0 descriptors written\n',
+    );
     expect(readFileSync(path.join(repo.dir, 'models/greenhouse.model.yml'), 'utf8')).toBe(before);
     expect(cli.run(['refit', '--check'], repo.dir).status).toBe(0);
   });

@@ -11,10 +11,19 @@ export interface CliRun {
 }
 
 /** The transpiled sources: `run(args, cwd)` starts `node cli.js ...args`; `remove()` deletes the folder. */
-export function sourceCli(): { run: (args: string[], cwd: string, env?: Record<string, string>) => CliRun; remove: () => void; dir: string } {
+export function sourceCli(): {
+  run: (args: string[], cwd: string, env?: Record<string, string>) => CliRun;
+  remove: () => void;
+  dir: string;
+} {
   const { dir, remove } = transpileSources();
   const run = (args: string[], cwd: string, env: Record<string, string> = {}): CliRun => {
-    const r = spawnSync(process.execPath, [`${dir}/cli.js`, ...args], { cwd, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1', ...env }, maxBuffer: 64 * 1024 * 1024 });
+    const r = spawnSync(process.execPath, [`${dir}/cli.js`, ...args], {
+      cwd,
+      encoding: 'utf8',
+      env: { ...process.env, NO_COLOR: '1', ...env },
+      maxBuffer: 64 * 1024 * 1024,
+    });
     return { status: r.status, stdout: r.stdout, stderr: r.stderr };
   };
   return { run, remove, dir };

@@ -24,7 +24,15 @@ let packed: { files: { path: string }[]; filename: string };
 
 /** npm with a private cache and no network, no scripts, no audit. */
 function npm(args: string[], cwd: string, command = npmCli) {
-  const env = { ...process.env, npm_config_cache: path.join(base, 'npm-cache'), npm_config_offline: 'true', npm_config_audit: 'false', npm_config_fund: 'false', npm_config_update_notifier: 'false', NO_COLOR: '1' };
+  const env = {
+    ...process.env,
+    npm_config_cache: path.join(base, 'npm-cache'),
+    npm_config_offline: 'true',
+    npm_config_audit: 'false',
+    npm_config_fund: 'false',
+    npm_config_update_notifier: 'false',
+    NO_COLOR: '1',
+  };
   return spawnSync(command, args, { cwd, env, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
 }
 
@@ -33,7 +41,10 @@ beforeAll(() => {
   const pkg = path.join(base, 'pkg');
   mkdirSync(pkg);
   for (const f of ['package.json', 'README.md', 'LICENSE']) copyFileSync(path.join(project, f), path.join(pkg, f));
-  execFileSync(process.execPath, [path.join(project, 'test', 'tools', 'bundle.mjs'), '--out', path.join(pkg, 'dist'), '--cli-only'], { cwd: project, stdio: 'pipe' });
+  execFileSync(process.execPath, [path.join(project, 'test', 'tools', 'bundle.mjs'), '--out', path.join(pkg, 'dist'), '--cli-only'], {
+    cwd: project,
+    stdio: 'pipe',
+  });
   const pack = npm(['pack', '--json', '--ignore-scripts', '--pack-destination', base], pkg);
   if (pack.status !== 0) throw new Error(`npm pack failed: ${pack.stderr}`);
   packed = (JSON.parse(pack.stdout) as (typeof packed)[])[0];
