@@ -45,17 +45,22 @@ function checkLine(model: ModelResult, c: CheckResult, color: boolean): string {
 }
 
 /**
- * Where a model's error is, for the line under its header: the header already names the
- * descriptor, so an error in the descriptor itself shows only `line L, column C: `; an error in
- * another file (a CSV, the settings file) names that file.
+ * Where a model's error is, for the line under its header: `file:line:column: ` (the form
+ * editors and terminals link), the parts that are known.
  */
 function errorWhere(m: ModelResult): string {
   const e = m.error;
-  if (!e) return '';
-  const at = e.line ? `${e.line}${e.column ? `:${e.column}` : ''}` : '';
-  if (e.file && e.file !== m.descriptor) return `${e.file}${at ? `:${at}` : ''}: `;
-  if (!e.line) return '';
-  return `line ${e.line}${e.column ? `, column ${e.column}` : ''}: `;
+  if (!e?.file) return '';
+  return `${e.file}${e.line ? `:${e.line}${e.column ? `:${e.column}` : ''}` : ''}: `;
+}
+
+/**
+ * A model's header: status, name and descriptor path; a model that could not be loaded is named
+ * by its path, which then stands once.
+ */
+function modelHeader(m: ModelResult, color: boolean): string {
+  const where = m.name === m.descriptor ? '' : ` (${escapeTerminal(m.descriptor)})`;
+  return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)}${where}`;
 }
 
 /** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
@@ -102,7 +107,7 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   for (const m of result.models) {
     if (m.verdict === 'pass' && !verbose) continue;
     out.push('');
-    out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)} (${escapeTerminal(m.descriptor)})`);
+    out.push(modelHeader(m, color));
     if (m.error) {
       out.push(`  ${escapeTerminal(errorWhere(m) + m.error.message)}`);
       continue;

@@ -88,28 +88,24 @@ describe('readable by default', () => {
     expect(row).toMatch(/ 0%$/);
   });
 
-  it('names a descriptor error by line and column without repeating the path, and suggests the nearest key', () => {
+  it('names a descriptor error by file, line and column, does not repeat the path in its header, and suggests the nearest key', () => {
     const dir = inRepo();
-    writeFileSync(
-      path.join(dir, 'models/greenhouse.model.yml'),
-      lineDescriptor().replace('  target: humidity_pct', '  taget: humidity_pct'),
-    );
+    writeFileSync(path.join(dir, 'models/greenhouse.model.yml'), lineDescriptor().replace('  target: humidity_pct', '  taget: humidity_pct'));
     const r = run(['check', '--jobs', '1'], dir);
     expect(r.status).toBe(2);
     const lines = r.stdout.split('\n');
-    const header = lines.findIndex((l) => l.startsWith('ERROR greenhouse.model.yml') || l.startsWith('ERROR models/greenhouse.model.yml'));
+    const header = lines.indexOf('ERROR models/greenhouse.model.yml');
     expect(header, r.stdout).toBeGreaterThan(0);
     expect(lines[header + 1]).toBe(
-      '  line 4, column 1: `data.target`: missing key `target` (did you mean `target` instead of "taget"?); required keys: train, holdout, target',
+      '  models/greenhouse.model.yml:4:1: `data.target`: missing key `target` (did you mean `target` instead of "taget"?); required keys: train, holdout, target',
     );
-    expect(r.stdout).not.toContain('models/greenhouse.model.yml:4');
   });
 
   it('suggests the nearest allowed key for an unknown one', () => {
     const dir = inRepo('fit: { ridg: 0.5 }');
     const r = run(['check', '--jobs', '1'], dir);
     expect(r.status).toBe(2);
-    expect(r.stdout).toMatch(/line 10, column 8: `fit\.ridg`: unknown key `ridg` \(did you mean `ridge`\?\); expected one of: /);
+    expect(r.stdout).toMatch(/models\/greenhouse\.model\.yml:10:8: `fit\.ridg`: unknown key `ridg` \(did you mean `ridge`\?\); expected one of: /);
   });
 });
 
