@@ -74,7 +74,7 @@ describe('fit.refit: false', () => {
     const r = cli.run(['check', '--jobs', '1'], repo.dir);
     expect(r.status).toBe(2);
     expect(r.stdout).toContain(
-      'line 11, column 10: `fit.refit`: `refit: false` scores the shipped coefficients, and the descriptor ships none',
+      'models/greenhouse.model.yml:11:10: `fit.refit`: `refit: false` scores the shipped coefficients, and the descriptor ships none',
     );
   });
 
