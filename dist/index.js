@@ -29255,7 +29255,7 @@ module.exports = {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4739);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5918);
 /* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4029);
 /**
  * Evaluates every model as it was on a base commit, read with git from that commit (settings
@@ -29996,7 +29996,7 @@ async function reviewSuggestions(api, result, source, commit) {
 
 /***/ }),
 
-/***/ 9079:
+/***/ 3992:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -30395,12 +30395,137 @@ const holdout_rmse_check = {
 };
 /* harmony default export */ const holdout_rmse = (holdout_rmse_check);
 
+// EXTERNAL MODULE: ./src/config/generated/limit-keys.ts
+var limit_keys = __nccwpck_require__(7672);
+;// CONCATENATED MODULE: ./src/config/init-files.ts
+/**
+ * The text of the files `fitgate init` writes: a settings file and a first descriptor, each
+ * starting with a `# yaml-language-server: $schema=` line (editors that read it validate and
+ * complete the file against fitgate's JSON Schema) and spelling out every limit with its
+ * built-in default as a comment. Pure text: the entry decides paths and writes.
+ */
+
+/** The built-in default of `params_per_sample` (the parameter-ratio check; common practice: >= 10 rows per parameter). */
+const RATIO_DEFAULT = Number(limit_keys/* LIMIT_KEYS */.n.find((k) => k.key === 'params_per_sample')?.defaultSpec ?? 0.1);
+/** Columns of the first model's design: the intercept plus one per input (degree 1) or two (degree 2). */
+function firstModelParameters(inputs, degree) {
+    return 1 + inputs * degree;
+}
+/**
+ * The smallest number of two significant digits at or above `x` (0.1333 -> 0.14).
+ * @param x a positive finite number
+ */
+function roundUp2(x) {
+    const step = 10 ** (Math.floor(Math.log10(x)) - 1);
+    return Number((Math.ceil(x / step - 1e-9) * step).toPrecision(2));
+}
+/**
+ * The `params_per_sample` limit suited to the file: the default when the first model is within
+ * it, else the model's own ratio rounded up, with a comment saying why either way.
+ *
+ * @param parameters columns of the design (intercept included)
+ * @param rows training rows
+ */
+function ratioLimitFor(parameters, rows) {
+    const ratio = parameters / rows;
+    const figure = `${parameters} parameters for ${rows} training rows`;
+    if (ratio <= RATIO_DEFAULT) {
+        return {
+            value: RATIO_DEFAULT,
+            comment: `${figure}: the default ${RATIO_DEFAULT} (common practice: at least ${1 / RATIO_DEFAULT} rows per parameter) suits this file`,
+        };
+    }
+    return {
+        value: roundUp2(ratio),
+        comment: `${figure}: the default ${RATIO_DEFAULT} (common practice: at least ${1 / RATIO_DEFAULT} rows per parameter) would fail this small file; relaxed to let the first model through. Add rows and lower it again.`,
+    };
+}
+function specText(spec) {
+    return typeof spec === 'object' && spec !== null
+        ? JSON.stringify(spec).replace(/"/g, '').replace(/,/g, ', ').replace(/:/g, ': ').replace(/^\{/, '{ ').replace(/\}$/, ' }')
+        : String(spec);
+}
+/** A YAML plain scalar when safe, else a double-quoted one (JSON string syntax is valid YAML). */
+function scalar(text) {
+    const plain = /^[A-Za-z_.][A-Za-z0-9_.\-/]*$/.test(text) && !/^(true|false|null|yes|no|on|off|y|n|~)$/i.test(text) && !/^\.(inf|nan)$/i.test(text);
+    return plain ? text : JSON.stringify(text);
+}
+/** Every limit key but those given, as commented lines `<prefix>key: default   # summary`. */
+function commentedLimits(prefix, except) {
+    const rows = LIMIT_KEYS.filter((k) => !except.includes(k.key));
+    const width = Math.max(...rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
+    return rows.map((k) => `${prefix}${`${k.key}: ${specText(k.defaultSpec)}`.padEnd(width)}  # ${k.description}`);
+}
+/**
+ * The descriptor text of the first model.
+ * @param model what it holds; see {@link FirstModel}
+ * @param ratio the parameter-ratio limit to write (see {@link ratioLimitFor})
+ */
+function descriptorText(model, ratio) {
+    const terms = model.degree === 1
+        ? [`  - linear: [${model.inputs.map(scalar).join(', ')}]`]
+        : model.inputs.map((c) => `  - polynomial: { of: ${scalar(c)}, degree: 2 }   # z = (x - mean) / sd of the training rows`);
+    return [
+        `# yaml-language-server: $schema=${model.schema}`,
+        `# First model of ${scalar(model.target)}, written by \`fitgate init\`. Check it with \`fitgate check\`.`,
+        ...model.notes.map((n) => `# ${n}`),
+        'version: 1',
+        `name: ${scalar(model.name)}`,
+        `task: ${model.task}`,
+        'data:',
+        `  train: ${scalar(model.train)}`,
+        `  holdout: ${scalar(model.holdout)}`,
+        `  target: ${scalar(model.target)}`,
+        `terms:                       # ${model.degree === 1 ? 'linear terms: a modest first model' : 'degree 2, inputs standardised: a modest first model'}`,
+        ...terms,
+        'fit:',
+        '  intercept: true',
+        '  ridge: 0                    # L2 penalty on every coefficient but the intercept; 0 = least squares',
+        "limits:                       # this model's limits; the commented ones show the built-in defaults",
+        `  params_per_sample: ${ratio.value}   # ${ratio.comment}`,
+        ...commentedLimits('  # ', ['params_per_sample']),
+        '',
+    ].join('\n');
+}
+/**
+ * The settings file text: where the descriptors are and every limit's default, commented.
+ * @param schema URL or path (relative to the settings file's folder) of the settings schema
+ * @param pattern glob of the descriptors
+ */
+function settingsText(schema, pattern) {
+    return [
+        `# yaml-language-server: $schema=${schema}`,
+        "# fitgate settings, written by `fitgate init`. A descriptor's own `limits` win key by key.",
+        'version: 1',
+        'models:                       # glob patterns of model descriptors, relative to this folder',
+        `  - ${JSON.stringify(pattern)}`,
+        '# limits:                     # defaults for every model; uncomment to change one',
+        ...commentedLimits('#   ', []),
+        '',
+    ].join('\n');
+}
+
 ;// CONCATENATED MODULE: ./src/checks/parameter-ratio.ts
 
+
+const LIMIT_KEY = 'params_per_sample';
+const ADVICE = 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.';
+/**
+ * When the built-in limit (not one the user set) is exceeded, the advice says which rule it is
+ * and how to relax it for a small data set; otherwise nothing (the check's own advice).
+ */
+function ruleAdvice(limit, ratio) {
+    if (limit?.source !== 'default' || limit.fail === null || !(ratio > limit.fail) || !Number.isFinite(ratio) || ratio >= 1)
+        return {};
+    return {
+        advice: `The default limit ${(0,format/* formatNumber */.Z)(limit.fail)} is a rule of thumb (common practice: at least ${(0,format/* formatNumber */.Z)(1 / limit.fail)} training rows per parameter), not a law. ` +
+            `${ADVICE} If the data set is small by nature and the fit is otherwise sound, relax the rule for this model in its descriptor: \`limits: { ${LIMIT_KEY}: ${roundUp2(ratio)} }\`.`,
+    };
+}
 const parameter_ratio_check = {
     id: 'parameter-ratio',
     title: 'Parameters per row',
-    limitKey: 'params_per_sample',
+    limitKey: LIMIT_KEY,
     defaultLimit: 0.1,
     direction: 'above',
     limitSummary: 'Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).',
@@ -30410,7 +30535,7 @@ const parameter_ratio_check = {
   p = n a least-squares fit interpolates its training rows exactly. With \`fit.parameter_count:
   effective\`, the effective degrees of freedom of a ridge fit take the place of p:
   df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (ESL eq. 3.50).`,
-    advice: 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.',
+    advice: ADVICE,
     line: (d) => (d.fit.parameterCount === 'effective' ? d.fit.ridgeLine : d.termsLine),
     measure({ metrics, design, train, fit, descriptor }) {
         if (descriptor.fit.parameterCount === 'effective') {
@@ -30427,10 +30552,24 @@ const parameter_ratio_check = {
             value: metrics.paramsPerSample,
             message: `${design.p} parameters for ${train.rows} training rows (${(0,format/* formatNumber */.Z)(metrics.paramsPerSample)} per row)`,
             detail: { counted: 'columns', columns: design.p },
+            ...ruleAdvice(descriptor.limits[LIMIT_KEY], metrics.paramsPerSample),
         };
     },
 };
 /* harmony default export */ const parameter_ratio = (parameter_ratio_check);
+
+;// CONCATENATED MODULE: ./src/checks/score-only.ts
+/** The skipped measurement when the model is scored as shipped, else null (measure as usual). */
+function skipWhenScoreOnly(descriptor) {
+    if (descriptor.fit.refit !== false)
+        return null;
+    return {
+        value: null,
+        reason: 'score-only',
+        message: 'skipped: this check needs a refit, and the model is scored as shipped (`fit.refit: false`)',
+        line: descriptor.fit.line,
+    };
+}
 
 // EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
 var complexity = __nccwpck_require__(7070);
@@ -30439,6 +30578,7 @@ var complexity = __nccwpck_require__(7070);
  * `complexity`: the simpler setting to use, by the one-standard-error rule on a sweep of the
  * model's main complexity setting.
  */
+
 
 
 
@@ -30487,6 +30627,9 @@ const complexity_check = {
     line: (d) => d.fit.line,
     measureClassifier: classifierComplexity,
     measure(context) {
+        const scoreOnly = skipWhenScoreOnly(context.descriptor);
+        if (scoreOnly)
+            return scoreOnly;
         const { descriptor, design, train, fit } = context;
         const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
         if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
@@ -30591,6 +30734,11 @@ const conditioning_check = {
 // EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
 var regression_metrics = __nccwpck_require__(155);
 ;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
+/**
+ * `cross-validation`: k-fold cross-validation RMSE / training RMSE, with leave-one-out (PRESS),
+ * GCV and the effective degrees of freedom in the model's metrics.
+ */
+
 
 
 
@@ -30630,6 +30778,9 @@ const cross_validation_check = {
     line: (d) => d.fit.line,
     measureClassifier: classifierCrossValidation,
     measure(context) {
+        const scoreOnly = skipWhenScoreOnly(context.descriptor);
+        if (scoreOnly)
+            return scoreOnly;
         const folds = context.analyses.folds();
         const cv = context.analyses.crossValidation();
         const { metrics, train, design } = context;
@@ -30749,6 +30900,7 @@ const leakage_check = {
 
 
 
+
 const reproducibility_check = {
     id: 'reproducibility',
     title: 'Shipped coefficients against the refit',
@@ -30767,7 +30919,10 @@ const reproducibility_check = {
     advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
     line: (d) => d.coefficientsLine ?? d.nameLine,
     measureClassifier: classifierReproducibility,
-    measure({ shipped, predictions, holdout, metrics }) {
+    measure({ shipped, predictions, holdout, metrics, descriptor }) {
+        const scoreOnly = skipWhenScoreOnly(descriptor);
+        if (scoreOnly)
+            return scoreOnly;
         if (shipped === null)
             return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
         const ps = shipped.holdoutPredictions;
@@ -31344,12 +31499,44 @@ function judgeCheck(check, descriptor, measure) {
         ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
         line: line ?? measured.line ?? check.line(context.descriptor),
         message: `${measured.message}${comparison}`,
-        advice: status === 'fail' || status === 'warn' ? check.advice : '',
+        advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
         ...(measured.detail ? { detail: measured.detail } : {}),
         ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
     };
     return { outcome, figures: measured.metrics };
 }
+
+
+/***/ }),
+
+/***/ 7672:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   n: () => (/* binding */ LIMIT_KEYS)
+/* harmony export */ });
+/** Every limit key, in registry (report) order. */
+const LIMIT_KEYS = Object.freeze([
+    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE." },
+    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter)." },
+    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns." },
+    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch." },
+    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
+    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
+    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
+    { key: "swing_spikes", defaultSpec: { "warn": 1.5, "fail": 2 }, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation." },
+    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
+    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
+    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
+    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
+    { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
+    { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
+    { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
+    { key: "chi_square", defaultSpec: { "warn_below": 0.5, "warn_above": 2 }, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only)." },
+    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
+    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
+    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
+]);
 
 
 /***/ }),
@@ -31564,6 +31751,18 @@ function jsonMetrics(record) {
         out[k] = typeof v === 'number' ? jsonNumber(v) : v;
     return out;
 }
+
+
+/***/ }),
+
+/***/ 3323:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   x: () => (/* binding */ VERSION)
+/* harmony export */ });
+/** fitgate's version, reported in every result. Kept in step with package.json by a test. */
+const VERSION = '0.1.0';
 
 
 /***/ }),
@@ -35255,7 +35454,7 @@ function readInputs(cwd = process.cwd()) {
 
 /***/ }),
 
-/***/ 574:
+/***/ 2766:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -35269,8 +35468,8 @@ var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __nccwpck_require__(4296);
-// EXTERNAL MODULE: ./src/checks/index.ts + 22 modules
-var checks = __nccwpck_require__(9079);
+// EXTERNAL MODULE: ./src/checks/index.ts + 24 modules
+var checks = __nccwpck_require__(3992);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __nccwpck_require__(6228);
 // EXTERNAL MODULE: ./src/result/result.ts
@@ -36299,15 +36498,32 @@ function formatJunit(result, options = {}) {
 
 // EXTERNAL MODULE: external "node:crypto"
 var external_node_crypto_ = __nccwpck_require__(7598);
+// EXTERNAL MODULE: ./src/core/version.ts
+var version = __nccwpck_require__(3323);
+;// CONCATENATED MODULE: ./src/core/links.ts
+/**
+ * Where fitgate's documentation lives on the web: the published repository, and the page of
+ * each check (docs/checks.md, one `### <id>` heading per check, which GitHub anchors as `#<id>`).
+ * The version's tag pins the page to the text of the release that wrote the link.
+ */
+
+/** The repository fitgate is published from (package.json `repository` says the same; a test keeps them in step). */
+const REPOSITORY_URL = 'https://github.com/fitgate/fitgate';
+/** The documentation page of a check: `<repository>/blob/v<version>/docs/checks.md#<id>`. */
+function checkDocsUrl(id) {
+    return `${REPOSITORY_URL}/blob/v${version/* VERSION */.x}/docs/checks.md#${encodeURIComponent(id)}`;
+}
+
 ;// CONCATENATED MODULE: ./src/report/sarif.ts
 /**
  * The SARIF 2.1.0 report (OASIS Static Analysis Results Interchange Format, Version 2.1.0,
  * OASIS Standard, 2020), the format code scanning reads. One rule per check of the registry
- * (id, title, description, advice); one result per check that fails (`error`) or warns
+ * (id, title, description, advice, `helpUri` to the check's docs page); one result per check that fails (`error`) or warns
  * (`warning`), and a `note` for a check that could not be computed, each at the descriptor line
  * the check points at. Models that could not be checked are tool execution notifications at
  * the file and line of the problem. Passing and switched-off checks are not results.
  */
+
 
 
 
@@ -36355,6 +36571,7 @@ function sarifLog(result, options = {}) {
         shortDescription: { text: c.title },
         fullDescription: { text: c.description },
         help: { text: c.advice },
+        helpUri: checkDocsUrl(c.id),
         defaultConfiguration: { level: 'error' },
         properties: { limitKey: c.limitKey },
     }));
@@ -38637,8 +38854,8 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _entries_inputs_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(9939);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2499);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(5280);
-/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(574);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(4739);
+/* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(2766);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(5918);
 /* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(9725);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(856);
@@ -39051,10 +39268,12 @@ __nccwpck_require__.d(__webpack_exports__, {
   Fl: () => (/* binding */ tryResolveCommit)
 });
 
-// UNUSED EXPORTS: runGit
+// UNUSED EXPORTS: runGit, safeDirectoryArgs
 
 ;// CONCATENATED MODULE: external "node:child_process"
 const external_node_child_process_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
+// EXTERNAL MODULE: external "node:fs"
+var external_node_fs_ = __nccwpck_require__(3024);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
@@ -39077,15 +39296,49 @@ var repo_path = __nccwpck_require__(3856);
 
 
 
+
 /** Largest number of links followed for one path (as Linux's MAXSYMLINKS). */
 const MAX_LINKS = 40;
+/** Most folders named by {@link safeDirectoryArgs} (a path deeper than this is cut at the top). */
+const MAX_SAFE_DEPTH = 128;
 /**
- * Runs git with arguments (never through a shell) and returns standard output as bytes.
+ * `-c safe.directory=<folder>` for `cwd` and each folder above it (as given and as real paths),
+ * put before every git command fitgate runs. In a job that runs inside a container the workspace
+ * belongs to another user id than the job's, and git refuses such a repository ("detected
+ * dubious ownership", git 2.35.2 and later); the setting on the command line, which git reads as
+ * protected configuration, lets only fitgate's own git calls read that one repository, and never
+ * changes the user's git configuration. The repository's top folder is among the folders named,
+ * whichever it is.
+ */
+function safeDirectoryArgs(cwd) {
+    const folders = new Set();
+    const starts = [external_node_path_default().resolve(cwd)];
+    try {
+        starts.push((0,external_node_fs_.realpathSync)(cwd));
+    }
+    catch {
+        // A folder that cannot be resolved is named as given only.
+    }
+    for (const start of starts) {
+        let folder = start;
+        for (let depth = 0; depth < MAX_SAFE_DEPTH; depth++) {
+            folders.add(folder);
+            const parent = external_node_path_default().dirname(folder);
+            if (parent === folder)
+                break;
+            folder = parent;
+        }
+    }
+    return [...folders].flatMap((f) => ['-c', `safe.directory=${f}`]);
+}
+/**
+ * Runs git with arguments (never through a shell) and returns standard output as bytes. Every
+ * call names the work tree as a safe directory for that call only ({@link safeDirectoryArgs}).
  * @throws Error with git's standard error when git exits non-zero
  */
 function runGit(cwd, args, maxBuffer = 64 * 1024 * 1024) {
     return new Promise((resolve, reject) => {
-        (0,external_node_child_process_namespaceObject.execFile)('git', args, { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
+        (0,external_node_child_process_namespaceObject.execFile)('git', [...safeDirectoryArgs(cwd), ...args], { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
             if (error) {
                 const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
                 reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
@@ -39265,7 +39518,7 @@ function createGitRepository(options) {
         },
         async *stream(p, chunkBytes = 1024 * 1024) {
             const entry = await fileEntry(p);
-            const child = (0,external_node_child_process_namespaceObject.spawn)('git', ['cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
+            const child = (0,external_node_child_process_namespaceObject.spawn)('git', [...safeDirectoryArgs(cwd), 'cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
             const closed = new Promise((resolve, reject) => {
                 child.on('error', reject);
                 child.on('close', resolve);
@@ -40609,15 +40862,51 @@ function metric(m, key) {
     return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
-    const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
+    const status = paint(c.status.toUpperCase().padEnd(c.status === 'skipped' ? 7 : 4), c.status, color);
     const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.message)}`;
     return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
-/** Formats the Result for a terminal. */
+/**
+ * Where a model's error is, for the line under its header: `file:line:column: ` (the form
+ * editors and terminals link), the parts that are known.
+ */
+function errorWhere(m) {
+    const e = m.error;
+    if (!e?.file)
+        return '';
+    return `${e.file}${e.line ? `:${e.line}${e.column ? `:${e.column}` : ''}` : ''}: `;
+}
+/**
+ * A model's header: status, name and descriptor path; a model that could not be loaded is named
+ * by its path, which then stands once.
+ */
+function modelHeader(m, color) {
+    const where = m.name === m.descriptor ? '' : ` (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.descriptor)})`;
+    return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name)}${where}`;
+}
+/** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
+function baseCell(m) {
+    if (m.base === undefined)
+        return '–';
+    if (m.base.status === 'new')
+        return 'new';
+    const change = m.base.holdout_rmse_change === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(m.base.holdout_rmse_change);
+    if (change === null || !Number.isFinite(change))
+        return '–';
+    const percent = change * 100;
+    return `${percent > 0 ? '+' : ''}${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)(percent)}%`;
+}
+/**
+ * Formats the Result for a terminal: the table of models (a `vs base` column when the run was
+ * compared with a base commit), one block per model that did not pass (every model, with every
+ * check, when `verbose`), the run's notes and the closing count.
+ */
 function formatText(result, options = {}) {
     const color = options.color ?? false;
     const out = [];
-    const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
+    // With a base comparison, one more column: the hold-out RMSE change against the base commit.
+    const withBase = result.models.some((m) => m.base !== undefined);
+    const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef', ...(withBase ? ['vs base'] : [])];
     const rows = result.models.map((m) => [
         m.verdict,
         (0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name),
@@ -40625,9 +40914,10 @@ function formatText(result, options = {}) {
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
         metric(m, 'max_std_coefficient'),
+        ...(withBase ? [baseCell(m)] : []),
     ]);
     if (rows.length > 0) {
-        const lines = table([header, ...rows], [false, false, true, true, true, true]);
+        const lines = table([header, ...rows], [false, false, true, true, true, true, true]);
         out.push(lines[0]);
         lines.slice(1).forEach((line, i) => {
             const v = result.models[i].verdict;
@@ -40637,20 +40927,20 @@ function formatText(result, options = {}) {
     else {
         out.push('no models to check');
     }
+    const verbose = options.verbose ?? false;
     for (const m of result.models) {
-        if (m.verdict === 'pass')
+        if (m.verdict === 'pass' && !verbose)
             continue;
         out.push('');
-        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.descriptor)})`);
+        out.push(modelHeader(m, color));
         if (m.error) {
-            const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(where + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(errorWhere(m) + m.error.message)}`);
             continue;
         }
         if ((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .isClassifier */ .aA)(m))
             out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
         for (const c of m.checks)
-            if (c.status === 'fail' || c.status === 'warn')
+            if (verbose || c.status === 'fail' || c.status === 'warn')
                 out.push(checkLine(m, c, color));
     }
     for (const note of result.notes)
@@ -40753,7 +41043,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 4739:
+/***/ 5918:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -40762,34 +41052,14 @@ __nccwpck_require__.d(__webpack_exports__, {
   a: () => (/* binding */ runPipeline)
 });
 
+// UNUSED EXPORTS: settingsNote
+
 // EXTERNAL MODULE: ./src/core/errors.ts
 var core_errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/repo/repo-path.ts
 var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/config/generated/limit-keys.ts
-/** Every limit key, in registry (report) order. */
-const limit_keys_LIMIT_KEYS = Object.freeze([
-    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE." },
-    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter)." },
-    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns." },
-    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch." },
-    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
-    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
-    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
-    { key: "swing_spikes", defaultSpec: { "warn": 1.5, "fail": 2 }, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation." },
-    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
-    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
-    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
-    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
-    { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
-    { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
-    { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
-    { key: "chi_square", defaultSpec: { "warn_below": 0.5, "warn_above": 2 }, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only)." },
-    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
-    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
-    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
-]);
-
+// EXTERNAL MODULE: ./src/config/generated/limit-keys.ts
+var limit_keys = __nccwpck_require__(7672);
 ;// CONCATENATED MODULE: ./src/config/limits.ts
 /**
  * Limits: the known keys (generated from the check registry), the limit forms, and how the three
@@ -40811,7 +41081,7 @@ function limitKeyNames() {
 }
 /** The known key's entry, or undefined. */
 function limitKeyInfo(key) {
-    return limit_keys_LIMIT_KEYS.find((k) => k.key === key);
+    return limit_keys/* LIMIT_KEYS */.n.find((k) => k.key === key);
 }
 /** The direction of a key's check (`above` for a key no check knows). */
 function limitDirection(key) {
@@ -40904,7 +41174,7 @@ function assertThreshold(x) {
  */
 function mergeLimits(settings, descriptorLimits) {
     const merged = {};
-    for (const { key, defaultSpec, direction } of limit_keys_LIMIT_KEYS)
+    for (const { key, defaultSpec, direction } of limit_keys/* LIMIT_KEYS */.n)
         merged[key] = toLimit(defaultSpec, direction, 'default', null);
     for (const [key, { spec }] of Object.entries(settings.limits))
         merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
@@ -40913,12 +41183,68 @@ function mergeLimits(settings, descriptorLimits) {
     return merged;
 }
 
+;// CONCATENATED MODULE: ./src/core/nearest.ts
+/**
+ * "Did you mean": the allowed word nearest to a mistyped one, by the optimal-string-alignment
+ * distance (insertions, deletions, substitutions and swaps of two neighbours, each costing 1;
+ * Damerau 1964, restricted form).
+ */
+/** Words longer than this are not compared (the cost grows with the product of the lengths). */
+const MAX_LENGTH = 64;
+/**
+ * Edit distance between `a` and `b` with adjacent swaps (optimal string alignment), or
+ * `Infinity` when either is longer than 64 characters.
+ */
+function editDistance(a, b) {
+    if (a.length > MAX_LENGTH || b.length > MAX_LENGTH)
+        return Number.POSITIVE_INFINITY;
+    const rows = a.length + 1;
+    const cols = b.length + 1;
+    const d = new Array(rows * cols).fill(0);
+    for (let i = 0; i < rows; i++)
+        d[i * cols] = i;
+    for (let j = 0; j < cols; j++)
+        d[j] = j;
+    for (let i = 1; i < rows; i++) {
+        for (let j = 1; j < cols; j++) {
+            const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+            let best = Math.min(d[(i - 1) * cols + j] + 1, d[i * cols + j - 1] + 1, d[(i - 1) * cols + j - 1] + cost);
+            if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1])
+                best = Math.min(best, d[(i - 2) * cols + j - 2] + 1);
+            d[i * cols + j] = best;
+        }
+    }
+    return d[rows * cols - 1];
+}
+/**
+ * The candidate nearest to `word` (case ignored), when it is close enough to be a typo: at most
+ * 1 edit for words of up to 4 characters, 2 up to 8, 3 beyond. Ties go to the earlier candidate.
+ * Returns null when none is close enough or `word` is itself a candidate.
+ */
+function nearestWord(word, candidates) {
+    const lower = word.toLowerCase();
+    const allowed = lower.length <= 4 ? 1 : lower.length <= 8 ? 2 : 3;
+    let best = null;
+    let bestDistance = allowed + 1;
+    for (const candidate of candidates) {
+        if (candidate === word)
+            return null;
+        const distance = editDistance(lower, candidate.toLowerCase());
+        if (distance < bestDistance) {
+            best = candidate;
+            bestDistance = distance;
+        }
+    }
+    return best;
+}
+
 ;// CONCATENATED MODULE: ./src/config/schema-errors.ts
 /**
  * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
  * in document order (and within it the deepest), with the file, line, column, key path, the
  * bad value (quoted, cut) and what the schema expected.
  */
+
 
 /** Code of every schema violation. */
 const SCHEMA_ERROR_CODE = 'schema';
@@ -41126,11 +41452,17 @@ function toIssue(e, root) {
             return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
         case 'required': {
             const missing = String(params.missingProperty);
-            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+            // A key present but not allowed that is a near miss of the missing one is the likely typo.
+            const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
+            const typo = present.find((k) => nearestWord(k, [missing]) === missing);
+            const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${(0,core_errors/* quoteValue */.cl)(typo, 40)}?)` : '';
+            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
         }
         case 'additionalProperties': {
             const extra = String(params.additionalProperty);
-            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`; expected one of: ${keys.join(', ')}` }];
+            const near = nearestWord(extra, keys);
+            const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
+            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`${hint}; expected one of: ${keys.join(', ')}` }];
         }
         case 'propertyNames': {
             const name = String(params.propertyName);
@@ -41936,7 +42268,7 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
 }
 validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 const validateDescriptor = validate75;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } };
 const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
@@ -44838,7 +45170,7 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
             let data12 = data.fit;
             if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
                 for (const key2 in data12) {
-                    if (!(((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))) {
+                    if (!((((((((key2 === "intercept") || (key2 === "refit")) || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))) {
                         const err30 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data12 };
                         if (vErrors === null) {
                             vErrors = [err30];
@@ -44862,35 +45194,35 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
+                if (data12.refit !== undefined) {
+                    let data14 = data12.refit;
+                    if (typeof data14 !== "boolean") {
+                        const err32 = { instancePath: instancePath + "/fit/refit", schemaPath: "#/properties/fit/properties/refit/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit.type, parentSchema: schema22.properties.fit.properties.refit, data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err32];
+                        }
+                        else {
+                            vErrors.push(err32);
+                        }
+                        errors++;
+                    }
+                }
                 if (data12.ridge !== undefined) {
-                    let data14 = data12.ridge;
-                    if ((typeof data14 == "number") && (isFinite(data14))) {
-                        if (data14 < 0 || isNaN(data14)) {
-                            const err32 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data14 };
+                    let data15 = data12.ridge;
+                    if ((typeof data15 == "number") && (isFinite(data15))) {
+                        if (data15 < 0 || isNaN(data15)) {
+                            const err33 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data15 };
                             if (vErrors === null) {
-                                vErrors = [err32];
+                                vErrors = [err33];
                             }
                             else {
-                                vErrors.push(err32);
+                                vErrors.push(err33);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err33 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err33];
-                        }
-                        else {
-                            vErrors.push(err33);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.folds !== undefined) {
-                    let data15 = data12.folds;
-                    if (!(((typeof data15 == "number") && (!(data15 % 1) && !isNaN(data15))) && (isFinite(data15)))) {
-                        const err34 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data15 };
+                        const err34 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data15 };
                         if (vErrors === null) {
                             vErrors = [err34];
                         }
@@ -44899,36 +45231,36 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                    if ((typeof data15 == "number") && (isFinite(data15))) {
-                        if (data15 < 2 || isNaN(data15)) {
-                            const err35 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data15 };
+                }
+                if (data12.folds !== undefined) {
+                    let data16 = data12.folds;
+                    if (!(((typeof data16 == "number") && (!(data16 % 1) && !isNaN(data16))) && (isFinite(data16)))) {
+                        const err35 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                        if (vErrors === null) {
+                            vErrors = [err35];
+                        }
+                        else {
+                            vErrors.push(err35);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data16 == "number") && (isFinite(data16))) {
+                        if (data16 < 2 || isNaN(data16)) {
+                            const err36 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
                             if (vErrors === null) {
-                                vErrors = [err35];
+                                vErrors = [err36];
                             }
                             else {
-                                vErrors.push(err35);
+                                vErrors.push(err36);
                             }
                             errors++;
                         }
                     }
                 }
                 if (data12.fold_order !== undefined) {
-                    let data16 = data12.fold_order;
-                    if (!((data16 === "shuffled") || (data16 === "blocks"))) {
-                        const err36 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data16 };
-                        if (vErrors === null) {
-                            vErrors = [err36];
-                        }
-                        else {
-                            vErrors.push(err36);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.seed !== undefined) {
-                    let data17 = data12.seed;
-                    if (!(((typeof data17 == "number") && (!(data17 % 1) && !isNaN(data17))) && (isFinite(data17)))) {
-                        const err37 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data17 };
+                    let data17 = data12.fold_order;
+                    if (!((data17 === "shuffled") || (data17 === "blocks"))) {
+                        const err37 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data17 };
                         if (vErrors === null) {
                             vErrors = [err37];
                         }
@@ -44937,19 +45269,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                    if ((typeof data17 == "number") && (isFinite(data17))) {
-                        if (data17 > 4294967295 || isNaN(data17)) {
-                            const err38 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data17 };
-                            if (vErrors === null) {
-                                vErrors = [err38];
-                            }
-                            else {
-                                vErrors.push(err38);
-                            }
-                            errors++;
+                }
+                if (data12.seed !== undefined) {
+                    let data18 = data12.seed;
+                    if (!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))) {
+                        const err38 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                        if (vErrors === null) {
+                            vErrors = [err38];
                         }
-                        if (data17 < 0 || isNaN(data17)) {
-                            const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data17 };
+                        else {
+                            vErrors.push(err38);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data18 == "number") && (isFinite(data18))) {
+                        if (data18 > 4294967295 || isNaN(data18)) {
+                            const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
                             if (vErrors === null) {
                                 vErrors = [err39];
                             }
@@ -44958,36 +45293,36 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data18 < 0 || isNaN(data18)) {
+                            const err40 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                            if (vErrors === null) {
+                                vErrors = [err40];
+                            }
+                            else {
+                                vErrors.push(err40);
+                            }
+                            errors++;
+                        }
                     }
                 }
                 if (data12.parameter_count !== undefined) {
-                    let data18 = data12.parameter_count;
-                    if (!((data18 === "columns") || (data18 === "effective"))) {
-                        const err40 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data18 };
+                    let data19 = data12.parameter_count;
+                    if (!((data19 === "columns") || (data19 === "effective"))) {
+                        const err41 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data19 };
                         if (vErrors === null) {
-                            vErrors = [err40];
+                            vErrors = [err41];
                         }
                         else {
-                            vErrors.push(err40);
+                            vErrors.push(err41);
                         }
                         errors++;
                     }
                 }
                 if (data12.threshold !== undefined) {
-                    let data19 = data12.threshold;
-                    if ((typeof data19 == "number") && (isFinite(data19))) {
-                        if (data19 >= 1 || isNaN(data19)) {
-                            const err41 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data19 };
-                            if (vErrors === null) {
-                                vErrors = [err41];
-                            }
-                            else {
-                                vErrors.push(err41);
-                            }
-                            errors++;
-                        }
-                        if (data19 <= 0 || isNaN(data19)) {
-                            const err42 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data19 };
+                    let data20 = data12.threshold;
+                    if ((typeof data20 == "number") && (isFinite(data20))) {
+                        if (data20 >= 1 || isNaN(data20)) {
+                            const err42 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
                             if (vErrors === null) {
                                 vErrors = [err42];
                             }
@@ -44996,65 +45331,75 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data20 <= 0 || isNaN(data20)) {
+                            const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                            if (vErrors === null) {
+                                vErrors = [err43];
+                            }
+                            else {
+                                vErrors.push(err43);
+                            }
+                            errors++;
+                        }
                     }
                     else {
-                        const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data19 };
+                        const err44 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
                         if (vErrors === null) {
-                            vErrors = [err43];
+                            vErrors = [err44];
                         }
                         else {
-                            vErrors.push(err43);
+                            vErrors.push(err44);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err44 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
+                const err45 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
                 if (vErrors === null) {
-                    vErrors = [err44];
+                    vErrors = [err45];
                 }
                 else {
-                    vErrors.push(err44);
+                    vErrors.push(err45);
                 }
                 errors++;
             }
         }
         if (data.coefficients !== undefined) {
-            let data20 = data.coefficients;
-            if (Array.isArray(data20)) {
-                if (data20.length < 1) {
-                    const err45 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data20 };
+            let data21 = data.coefficients;
+            if (Array.isArray(data21)) {
+                if (data21.length < 1) {
+                    const err46 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data21 };
                     if (vErrors === null) {
-                        vErrors = [err45];
+                        vErrors = [err46];
                     }
                     else {
-                        vErrors.push(err45);
+                        vErrors.push(err46);
                     }
                     errors++;
                 }
-                const len1 = data20.length;
+                const len1 = data21.length;
                 for (let i1 = 0; i1 < len1; i1++) {
-                    let data21 = data20[i1];
-                    if (!((typeof data21 == "number") && (isFinite(data21)))) {
-                        const err46 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data21 };
+                    let data22 = data21[i1];
+                    if (!((typeof data22 == "number") && (isFinite(data22)))) {
+                        const err47 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data22 };
                         if (vErrors === null) {
-                            vErrors = [err46];
+                            vErrors = [err47];
                         }
                         else {
-                            vErrors.push(err46);
+                            vErrors.push(err47);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err47 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data20 };
+                const err48 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data21 };
                 if (vErrors === null) {
-                    vErrors = [err47];
+                    vErrors = [err48];
                 }
                 else {
-                    vErrors.push(err47);
+                    vErrors.push(err48);
                 }
                 errors++;
             }
@@ -45067,12 +45412,12 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
         }
     }
     else {
-        const err48 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
+        const err49 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
         if (vErrors === null) {
-            vErrors = [err48];
+            vErrors = [err49];
         }
         else {
-            vErrors.push(err48);
+            vErrors.push(err49);
         }
         errors++;
     }
@@ -45781,6 +46126,9 @@ function descriptorFromDocument(doc, file, settings) {
     const termsLine = line(['terms']);
     const fitLine = raw.fit ? line(['fit']) : termsLine;
     const limits = readLimits(doc, file, raw.limits, ['limits']);
+    if (raw.fit?.refit === false && !raw.coefficients) {
+        throw errorAt(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
+    }
     return {
         file,
         name: raw.name,
@@ -45796,6 +46144,7 @@ function descriptorFromDocument(doc, file, settings) {
         terms,
         fit: {
             intercept: raw.fit?.intercept ?? true,
+            refit: raw.fit?.refit ?? true,
             ridge: raw.fit?.ridge ?? 0,
             folds: raw.fit?.folds ?? settings.fit.folds,
             foldOrder: raw.fit?.fold_order ?? settings.fit.foldOrder,
@@ -45974,6 +46323,7 @@ function errorResult(name, descriptor, error) {
             message: key !== undefined && key !== '' ? `\`${(0,core_errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
             file: error.location.file ?? null,
             line: error.location.line ?? null,
+            ...(error.location.column !== undefined ? { column: error.location.column } : {}),
             code: error.code,
         },
     };
@@ -45983,8 +46333,8 @@ function errorResult(name, descriptor, error) {
 var external_node_url_ = __nccwpck_require__(3136);
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./src/checks/index.ts + 22 modules
-var src_checks = __nccwpck_require__(9079);
+// EXTERNAL MODULE: ./src/checks/index.ts + 24 modules
+var src_checks = __nccwpck_require__(3992);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
@@ -48877,6 +49227,7 @@ function checkRange(plan, X, start, m) {
 
 
 
+
 /**
  * Loads, fits and scores one model (no checks).
  * @throws InputError for bad data, a constant target, a design over the caps, or shipped
@@ -48888,6 +49239,8 @@ async function fitModel(repo, descriptor, settings) {
     const first = foldPass(plan);
     const fit = refinePass(plan, first.fit);
     const scored = scoringPass(plan, fit, first.foldFactors);
+    if (descriptor.fit.refit === false)
+        return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
     const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
     return {
         descriptor,
@@ -48901,6 +49254,35 @@ async function fitModel(repo, descriptor, settings) {
         crossValidation: scored.crossValidation,
         foldFactors: first.foldFactors,
         shipped: shippedScore(descriptor, design, tables, fit),
+    };
+}
+/**
+ * A model scored as shipped (`fit.refit: false`): the shipped coefficients take the refit's place
+ * in every figure (predictions, errors, coefficient sizes, swing, the report's `coefficients`);
+ * the internal refit keeps only what describes the design (rank, conditioning, effective degrees
+ * of freedom). No cross-validation; no shipped-against-refit comparison.
+ */
+function scoredAsShipped(descriptor, design, tables, refit, targetSd, columnSd, folds, factors) {
+    const shipped = checkedShipped(descriptor, design);
+    const coefficients = Float64Array.from(shipped ?? []);
+    const trainPredictions = (0,blocks/* predictRows */.tp)(design, tables.train, coefficients);
+    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, tables.holdout, coefficients);
+    let rss = 0;
+    for (let i = 0; i < tables.train.rows; i++)
+        rss += (tables.train.y[i] - trainPredictions[i]) ** 2;
+    const fit = { ...refit, coefficients, rss };
+    return {
+        descriptor,
+        design,
+        fit,
+        tables,
+        metrics: coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, holdoutPredictions),
+        trainPredictions,
+        holdoutPredictions,
+        folds,
+        crossValidation: null,
+        foldFactors: factors,
+        shipped: null,
     };
 }
 /**
@@ -48956,13 +49338,23 @@ function coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, 
  * @throws InputError `coefficients-length` when their count is not the design's
  */
 function shippedScore(descriptor, design, tables, fit) {
+    const shipped = checkedShipped(descriptor, design);
+    if (shipped === null)
+        return null;
+    return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+}
+/**
+ * The shipped coefficients, or null when the descriptor ships none.
+ * @throws InputError `coefficients-length` when their count is not the design's
+ */
+function checkedShipped(descriptor, design) {
     const shipped = descriptor.coefficients;
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
         throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => (0,core_errors/* clip */.$Q)(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
-    return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+    return shipped;
 }
 
 ;// CONCATENATED MODULE: ./src/run/evaluate.ts
@@ -49160,10 +49552,8 @@ if (isModelWorker())
 
 // EXTERNAL MODULE: ./src/run/shard.ts
 var run_shard = __nccwpck_require__(6941);
-;// CONCATENATED MODULE: ./src/core/version.ts
-/** fitgate's version, reported in every result. Kept in step with package.json by a test. */
-const VERSION = '0.1.0';
-
+// EXTERNAL MODULE: ./src/core/version.ts
+var version = __nccwpck_require__(3323);
 ;// CONCATENATED MODULE: ./src/run/pipeline.ts
 /**
  * The whole run: settings file -> descriptors -> one outcome per model -> Result.
@@ -49179,6 +49569,15 @@ const VERSION = '0.1.0';
 
 
 
+/**
+ * The run's note on its settings: the file used, or that there was none and the built-in
+ * defaults applied (limits as in docs/checks.md, descriptors matched by the default pattern).
+ */
+function settingsNote(file, configPath) {
+    if (file.file !== null)
+        return `settings: ${file.file}`;
+    return `settings: no file at ${configPath}; built-in defaults (descriptors ${file.models.join(', ')}, default limits)`;
+}
 /**
  * Checks every model of a run.
  * Problems with the settings file or the list of descriptors throw an InputError (nothing can be
@@ -49209,14 +49608,14 @@ async function runPipeline(settings, repo, options = {}) {
     checkUniqueNames(loaded);
     const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
     models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
-    const notes = [...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+    const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
     if (shard)
         notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
     // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
     for (const note of (0,kernels/* kernelNotes */.TJ)())
         if (!notes.includes(note))
             notes.push(note);
-    const result = (0,result_result/* summarise */.fS)(models, VERSION, notes);
+    const result = (0,result_result/* summarise */.fS)(models, version/* VERSION */.x, notes);
     if (shard)
         result.shard = { index: shard.index, count: shard.count };
     return result;

@@ -47,6 +47,14 @@ async function main(argv: string[]): Promise<number> {
       (parsed.status === 0 ? process.stdout : process.stderr).write(neutraliseLog(parsed.text));
       return parsed.status;
     }
+    if (parsed.kind === 'explain' || parsed.kind === 'init' || parsed.kind === 'refit') {
+      if (parsed.kind !== 'explain') debug = parsed.debug;
+      const { runToolCommand } = await import('./entries/tool-commands.js');
+      const outcome = await runToolCommand(parsed);
+      process.stdout.write(outcome.stdout);
+      process.stderr.write(outcome.stderr);
+      return outcome.status;
+    }
     debug = parsed.debug;
     let result: Result;
     let failOn: 'fail' | 'warn';
@@ -74,7 +82,7 @@ async function main(argv: string[]): Promise<number> {
         ? formatJson(result)
         : parsed.format === 'markdown'
           ? neutraliseLog((await import('./report/markdown.js')).formatMarkdown(result))
-          : formatText(result, { color });
+          : formatText(result, { color, verbose: parsed.verbose });
     // Where files may go: a path named inside the repository root or the working directory must
     // really stay inside it; a report that cannot be written does not stop the others.
     const cwd = process.cwd();

@@ -71,6 +71,18 @@ describe('README', () => {
     expect(read('.ci/run')).toContain('npm test --');
   });
 
+  it('shows how to use it on your own repository: the workflow step and the command line, installed or through npx', () => {
+    const use = section(readme, '## Use it on your repository');
+    // Current major versions as of this writing: actions/checkout v7 (github.com/actions/checkout/releases,
+    // v7.0.0 in July 2026) and actions/upload-artifact v7 (github.com/actions/upload-artifact, README
+    // examples at v7 since pull request #796, April 2026).
+    expect(use).toContain('uses: actions/checkout@v7');
+    expect(use).toContain('uses: actions/upload-artifact@v7');
+    expect(use).toContain('npx fitgate check');
+    expect(use).toContain('npx fitgate init ');
+    expect(use).toContain('npm install --global fitgate');
+  });
+
   it('keeps the Cautions section', () => {
     const cautions = section(readme, '## Cautions');
     expect(cautions).toContain('no proof that a model is fit for its use');

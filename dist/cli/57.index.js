@@ -21,10 +21,12 @@ var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
-// EXTERNAL MODULE: ./src/run/pipeline.ts + 40 modules
-var pipeline = __webpack_require__(4706);
+// EXTERNAL MODULE: ./src/run/pipeline.ts + 29 modules
+var pipeline = __webpack_require__(2897);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __webpack_require__(1421);
+// EXTERNAL MODULE: external "node:fs"
+var external_node_fs_ = __webpack_require__(3024);
 // EXTERNAL MODULE: ./src/repo/glob-pattern.ts
 var glob_pattern = __webpack_require__(955);
 // EXTERNAL MODULE: ./src/repo/repo-path.ts
@@ -42,15 +44,49 @@ var repo_path = __webpack_require__(3856);
 
 
 
+
 /** Largest number of links followed for one path (as Linux's MAXSYMLINKS). */
 const MAX_LINKS = 40;
+/** Most folders named by {@link safeDirectoryArgs} (a path deeper than this is cut at the top). */
+const MAX_SAFE_DEPTH = 128;
 /**
- * Runs git with arguments (never through a shell) and returns standard output as bytes.
+ * `-c safe.directory=<folder>` for `cwd` and each folder above it (as given and as real paths),
+ * put before every git command fitgate runs. In a job that runs inside a container the workspace
+ * belongs to another user id than the job's, and git refuses such a repository ("detected
+ * dubious ownership", git 2.35.2 and later); the setting on the command line, which git reads as
+ * protected configuration, lets only fitgate's own git calls read that one repository, and never
+ * changes the user's git configuration. The repository's top folder is among the folders named,
+ * whichever it is.
+ */
+function safeDirectoryArgs(cwd) {
+    const folders = new Set();
+    const starts = [external_node_path_default().resolve(cwd)];
+    try {
+        starts.push((0,external_node_fs_.realpathSync)(cwd));
+    }
+    catch {
+        // A folder that cannot be resolved is named as given only.
+    }
+    for (const start of starts) {
+        let folder = start;
+        for (let depth = 0; depth < MAX_SAFE_DEPTH; depth++) {
+            folders.add(folder);
+            const parent = external_node_path_default().dirname(folder);
+            if (parent === folder)
+                break;
+            folder = parent;
+        }
+    }
+    return [...folders].flatMap((f) => ['-c', `safe.directory=${f}`]);
+}
+/**
+ * Runs git with arguments (never through a shell) and returns standard output as bytes. Every
+ * call names the work tree as a safe directory for that call only ({@link safeDirectoryArgs}).
  * @throws Error with git's standard error when git exits non-zero
  */
 function runGit(cwd, args, maxBuffer = 64 * 1024 * 1024) {
     return new Promise((resolve, reject) => {
-        (0,external_node_child_process_.execFile)('git', args, { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
+        (0,external_node_child_process_.execFile)('git', [...safeDirectoryArgs(cwd), ...args], { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
             if (error) {
                 const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
                 reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
@@ -230,7 +266,7 @@ function createGitRepository(options) {
         },
         async *stream(p, chunkBytes = 1024 * 1024) {
             const entry = await fileEntry(p);
-            const child = (0,external_node_child_process_.spawn)('git', ['cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
+            const child = (0,external_node_child_process_.spawn)('git', [...safeDirectoryArgs(cwd), 'cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
             const closed = new Promise((resolve, reject) => {
                 child.on('error', reject);
                 child.on('close', resolve);

@@ -2,6 +2,30 @@ export const id = 574;
 export const ids = [574];
 export const modules = {
 
+/***/ 4982:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   l: () => (/* binding */ REPOSITORY_URL),
+/* harmony export */   z: () => (/* binding */ checkDocsUrl)
+/* harmony export */ });
+/* harmony import */ var _version_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(3323);
+/**
+ * Where fitgate's documentation lives on the web: the published repository, and the page of
+ * each check (docs/checks.md, one `### <id>` heading per check, which GitHub anchors as `#<id>`).
+ * The version's tag pins the page to the text of the release that wrote the link.
+ */
+
+/** The repository fitgate is published from (package.json `repository` says the same; a test keeps them in step). */
+const REPOSITORY_URL = 'https://github.com/fitgate/fitgate';
+/** The documentation page of a check: `<repository>/blob/v<version>/docs/checks.md#<id>`. */
+function checkDocsUrl(id) {
+    return `${REPOSITORY_URL}/blob/v${_version_js__WEBPACK_IMPORTED_MODULE_0__/* .VERSION */ .x}/docs/checks.md#${encodeURIComponent(id)}`;
+}
+
+
+/***/ }),
+
 /***/ 574:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
@@ -16,8 +40,8 @@ var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
-// EXTERNAL MODULE: ./src/checks/index.ts + 22 modules
-var checks = __webpack_require__(9079);
+// EXTERNAL MODULE: ./src/checks/index.ts + 23 modules
+var checks = __webpack_require__(1981);
 // EXTERNAL MODULE: ./src/core/format.ts
 var format = __webpack_require__(6228);
 // EXTERNAL MODULE: ./src/result/result.ts
@@ -1046,15 +1070,18 @@ function formatJunit(result, options = {}) {
 
 // EXTERNAL MODULE: external "node:crypto"
 var external_node_crypto_ = __webpack_require__(7598);
+// EXTERNAL MODULE: ./src/core/links.ts
+var links = __webpack_require__(4982);
 ;// CONCATENATED MODULE: ./src/report/sarif.ts
 /**
  * The SARIF 2.1.0 report (OASIS Static Analysis Results Interchange Format, Version 2.1.0,
  * OASIS Standard, 2020), the format code scanning reads. One rule per check of the registry
- * (id, title, description, advice); one result per check that fails (`error`) or warns
+ * (id, title, description, advice, `helpUri` to the check's docs page); one result per check that fails (`error`) or warns
  * (`warning`), and a `note` for a check that could not be computed, each at the descriptor line
  * the check points at. Models that could not be checked are tool execution notifications at
  * the file and line of the problem. Passing and switched-off checks are not results.
  */
+
 
 
 
@@ -1102,6 +1129,7 @@ function sarifLog(result, options = {}) {
         shortDescription: { text: c.title },
         fullDescription: { text: c.description },
         help: { text: c.advice },
+        helpUri: (0,links/* checkDocsUrl */.z)(c.id),
         defaultConfiguration: { level: 'error' },
         properties: { limitKey: c.limitKey },
     }));

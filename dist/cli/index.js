@@ -33,7 +33,7 @@ ucs2length.code = 'require("ajv/dist/runtime/ucs2length").default';
 
 /***/ }),
 
-/***/ 9079:
+/***/ 1981:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -432,12 +432,29 @@ const holdout_rmse_check = {
 };
 /* harmony default export */ const holdout_rmse = (holdout_rmse_check);
 
+// EXTERNAL MODULE: ./src/config/init-files.ts
+var init_files = __nccwpck_require__(1144);
 ;// CONCATENATED MODULE: ./src/checks/parameter-ratio.ts
 
+
+const LIMIT_KEY = 'params_per_sample';
+const ADVICE = 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.';
+/**
+ * When the built-in limit (not one the user set) is exceeded, the advice says which rule it is
+ * and how to relax it for a small data set; otherwise nothing (the check's own advice).
+ */
+function ruleAdvice(limit, ratio) {
+    if (limit?.source !== 'default' || limit.fail === null || !(ratio > limit.fail) || !Number.isFinite(ratio) || ratio >= 1)
+        return {};
+    return {
+        advice: `The default limit ${(0,format/* formatNumber */.Z)(limit.fail)} is a rule of thumb (common practice: at least ${(0,format/* formatNumber */.Z)(1 / limit.fail)} training rows per parameter), not a law. ` +
+            `${ADVICE} If the data set is small by nature and the fit is otherwise sound, relax the rule for this model in its descriptor: \`limits: { ${LIMIT_KEY}: ${(0,init_files/* roundUp2 */.kd)(ratio)} }\`.`,
+    };
+}
 const parameter_ratio_check = {
     id: 'parameter-ratio',
     title: 'Parameters per row',
-    limitKey: 'params_per_sample',
+    limitKey: LIMIT_KEY,
     defaultLimit: 0.1,
     direction: 'above',
     limitSummary: 'Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).',
@@ -447,7 +464,7 @@ const parameter_ratio_check = {
   p = n a least-squares fit interpolates its training rows exactly. With \`fit.parameter_count:
   effective\`, the effective degrees of freedom of a ridge fit take the place of p:
   df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (ESL eq. 3.50).`,
-    advice: 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.',
+    advice: ADVICE,
     line: (d) => (d.fit.parameterCount === 'effective' ? d.fit.ridgeLine : d.termsLine),
     measure({ metrics, design, train, fit, descriptor }) {
         if (descriptor.fit.parameterCount === 'effective') {
@@ -464,10 +481,24 @@ const parameter_ratio_check = {
             value: metrics.paramsPerSample,
             message: `${design.p} parameters for ${train.rows} training rows (${(0,format/* formatNumber */.Z)(metrics.paramsPerSample)} per row)`,
             detail: { counted: 'columns', columns: design.p },
+            ...ruleAdvice(descriptor.limits[LIMIT_KEY], metrics.paramsPerSample),
         };
     },
 };
 /* harmony default export */ const parameter_ratio = (parameter_ratio_check);
+
+;// CONCATENATED MODULE: ./src/checks/score-only.ts
+/** The skipped measurement when the model is scored as shipped, else null (measure as usual). */
+function skipWhenScoreOnly(descriptor) {
+    if (descriptor.fit.refit !== false)
+        return null;
+    return {
+        value: null,
+        reason: 'score-only',
+        message: 'skipped: this check needs a refit, and the model is scored as shipped (`fit.refit: false`)',
+        line: descriptor.fit.line,
+    };
+}
 
 // EXTERNAL MODULE: ./src/diagnostics/complexity.ts + 1 modules
 var complexity = __nccwpck_require__(7070);
@@ -476,6 +507,7 @@ var complexity = __nccwpck_require__(7070);
  * `complexity`: the simpler setting to use, by the one-standard-error rule on a sweep of the
  * model's main complexity setting.
  */
+
 
 
 
@@ -524,6 +556,9 @@ const complexity_check = {
     line: (d) => d.fit.line,
     measureClassifier: classifierComplexity,
     measure(context) {
+        const scoreOnly = skipWhenScoreOnly(context.descriptor);
+        if (scoreOnly)
+            return scoreOnly;
         const { descriptor, design, train, fit } = context;
         const sweep = (0,complexity/* sweepComplexity */.j6)(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
         if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
@@ -628,6 +663,11 @@ const conditioning_check = {
 // EXTERNAL MODULE: ./src/diagnostics/regression-metrics.ts
 var regression_metrics = __nccwpck_require__(155);
 ;// CONCATENATED MODULE: ./src/checks/cross-validation.ts
+/**
+ * `cross-validation`: k-fold cross-validation RMSE / training RMSE, with leave-one-out (PRESS),
+ * GCV and the effective degrees of freedom in the model's metrics.
+ */
+
 
 
 
@@ -667,6 +707,9 @@ const cross_validation_check = {
     line: (d) => d.fit.line,
     measureClassifier: classifierCrossValidation,
     measure(context) {
+        const scoreOnly = skipWhenScoreOnly(context.descriptor);
+        if (scoreOnly)
+            return scoreOnly;
         const folds = context.analyses.folds();
         const cv = context.analyses.crossValidation();
         const { metrics, train, design } = context;
@@ -786,6 +829,7 @@ const leakage_check = {
 
 
 
+
 const reproducibility_check = {
     id: 'reproducibility',
     title: 'Shipped coefficients against the refit',
@@ -804,7 +848,10 @@ const reproducibility_check = {
     advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
     line: (d) => d.coefficientsLine ?? d.nameLine,
     measureClassifier: classifierReproducibility,
-    measure({ shipped, predictions, holdout, metrics }) {
+    measure({ shipped, predictions, holdout, metrics, descriptor }) {
+        const scoreOnly = skipWhenScoreOnly(descriptor);
+        if (scoreOnly)
+            return scoreOnly;
         if (shipped === null)
             return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
         const ps = shipped.holdoutPredictions;
@@ -1381,7 +1428,7 @@ function judgeCheck(check, descriptor, measure) {
         ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
         line: line ?? measured.line ?? check.line(context.descriptor),
         message: `${measured.message}${comparison}`,
-        advice: status === 'fail' || status === 'warn' ? check.advice : '',
+        advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
         ...(measured.detail ? { detail: measured.detail } : {}),
         ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
     };
@@ -1403,7 +1450,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4236);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(4706);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(2897);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2794);
 /* harmony import */ var _report_escape_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4031);
@@ -1457,6 +1504,15 @@ async function main(argv) {
             (parsed.status === 0 ? process.stdout : process.stderr).write((0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__/* .neutraliseLog */ .Z$)(parsed.text));
             return parsed.status;
         }
+        if (parsed.kind === 'explain' || parsed.kind === 'init' || parsed.kind === 'refit') {
+            if (parsed.kind !== 'explain')
+                debug = parsed.debug;
+            const { runToolCommand } = await __nccwpck_require__.e(/* import() */ 627).then(__nccwpck_require__.bind(__nccwpck_require__, 5627));
+            const outcome = await runToolCommand(parsed);
+            process.stdout.write(outcome.stdout);
+            process.stderr.write(outcome.stderr);
+            return outcome.status;
+        }
         debug = parsed.debug;
         let result;
         let failOn;
@@ -1484,7 +1540,7 @@ async function main(argv) {
             ? (0,_report_json_js__WEBPACK_IMPORTED_MODULE_8__/* .formatJson */ .I)(result)
             : parsed.format === 'markdown'
                 ? (0,_report_runner_commands_js__WEBPACK_IMPORTED_MODULE_9__/* .neutraliseLog */ .Z$)((await __nccwpck_require__.e(/* import() */ 900).then(__nccwpck_require__.bind(__nccwpck_require__, 5900))).formatMarkdown(result))
-                : (0,_report_text_js__WEBPACK_IMPORTED_MODULE_10__/* .formatText */ .v)(result, { color });
+                : (0,_report_text_js__WEBPACK_IMPORTED_MODULE_10__/* .formatText */ .v)(result, { color, verbose: parsed.verbose });
         // Where files may go: a path named inside the repository root or the working directory must
         // really stay inside it; a report that cannot be written does not stop the others.
         const cwd = process.cwd();
@@ -1543,6 +1599,5037 @@ if (!(0,_run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__/* .isFitgateWorker */ .
 
 __webpack_async_result__();
 } catch(e) { __webpack_async_result__(e); } }, 1);
+
+/***/ }),
+
+/***/ 7672:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   n: () => (/* binding */ LIMIT_KEYS)
+/* harmony export */ });
+/** Every limit key, in registry (report) order. */
+const LIMIT_KEYS = Object.freeze([
+    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE." },
+    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter)." },
+    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns." },
+    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch." },
+    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
+    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
+    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
+    { key: "swing_spikes", defaultSpec: { "warn": 1.5, "fail": 2 }, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation." },
+    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
+    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
+    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
+    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
+    { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
+    { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
+    { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
+    { key: "chi_square", defaultSpec: { "warn_below": 0.5, "warn_above": 2 }, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only)." },
+    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
+    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
+    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
+]);
+
+
+/***/ }),
+
+/***/ 1144:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   JV: () => (/* binding */ settingsText),
+/* harmony export */   kd: () => (/* binding */ roundUp2),
+/* harmony export */   oE: () => (/* binding */ firstModelParameters),
+/* harmony export */   tl: () => (/* binding */ descriptorText),
+/* harmony export */   y9: () => (/* binding */ ratioLimitFor)
+/* harmony export */ });
+/* harmony import */ var _generated_limit_keys_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7672);
+/**
+ * The text of the files `fitgate init` writes: a settings file and a first descriptor, each
+ * starting with a `# yaml-language-server: $schema=` line (editors that read it validate and
+ * complete the file against fitgate's JSON Schema) and spelling out every limit with its
+ * built-in default as a comment. Pure text: the entry decides paths and writes.
+ */
+
+/** The built-in default of `params_per_sample` (the parameter-ratio check; common practice: >= 10 rows per parameter). */
+const RATIO_DEFAULT = Number(_generated_limit_keys_js__WEBPACK_IMPORTED_MODULE_0__/* .LIMIT_KEYS */ .n.find((k) => k.key === 'params_per_sample')?.defaultSpec ?? 0.1);
+/** Columns of the first model's design: the intercept plus one per input (degree 1) or two (degree 2). */
+function firstModelParameters(inputs, degree) {
+    return 1 + inputs * degree;
+}
+/**
+ * The smallest number of two significant digits at or above `x` (0.1333 -> 0.14).
+ * @param x a positive finite number
+ */
+function roundUp2(x) {
+    const step = 10 ** (Math.floor(Math.log10(x)) - 1);
+    return Number((Math.ceil(x / step - 1e-9) * step).toPrecision(2));
+}
+/**
+ * The `params_per_sample` limit suited to the file: the default when the first model is within
+ * it, else the model's own ratio rounded up, with a comment saying why either way.
+ *
+ * @param parameters columns of the design (intercept included)
+ * @param rows training rows
+ */
+function ratioLimitFor(parameters, rows) {
+    const ratio = parameters / rows;
+    const figure = `${parameters} parameters for ${rows} training rows`;
+    if (ratio <= RATIO_DEFAULT) {
+        return {
+            value: RATIO_DEFAULT,
+            comment: `${figure}: the default ${RATIO_DEFAULT} (common practice: at least ${1 / RATIO_DEFAULT} rows per parameter) suits this file`,
+        };
+    }
+    return {
+        value: roundUp2(ratio),
+        comment: `${figure}: the default ${RATIO_DEFAULT} (common practice: at least ${1 / RATIO_DEFAULT} rows per parameter) would fail this small file; relaxed to let the first model through. Add rows and lower it again.`,
+    };
+}
+function specText(spec) {
+    return typeof spec === 'object' && spec !== null
+        ? JSON.stringify(spec).replace(/"/g, '').replace(/,/g, ', ').replace(/:/g, ': ').replace(/^\{/, '{ ').replace(/\}$/, ' }')
+        : String(spec);
+}
+/** A YAML plain scalar when safe, else a double-quoted one (JSON string syntax is valid YAML). */
+function scalar(text) {
+    const plain = /^[A-Za-z_.][A-Za-z0-9_.\-/]*$/.test(text) && !/^(true|false|null|yes|no|on|off|y|n|~)$/i.test(text) && !/^\.(inf|nan)$/i.test(text);
+    return plain ? text : JSON.stringify(text);
+}
+/** Every limit key but those given, as commented lines `<prefix>key: default   # summary`. */
+function commentedLimits(prefix, except) {
+    const rows = _generated_limit_keys_js__WEBPACK_IMPORTED_MODULE_0__/* .LIMIT_KEYS */ .n.filter((k) => !except.includes(k.key));
+    const width = Math.max(...rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
+    return rows.map((k) => `${prefix}${`${k.key}: ${specText(k.defaultSpec)}`.padEnd(width)}  # ${k.description}`);
+}
+/**
+ * The descriptor text of the first model.
+ * @param model what it holds; see {@link FirstModel}
+ * @param ratio the parameter-ratio limit to write (see {@link ratioLimitFor})
+ */
+function descriptorText(model, ratio) {
+    const terms = model.degree === 1
+        ? [`  - linear: [${model.inputs.map(scalar).join(', ')}]`]
+        : model.inputs.map((c) => `  - polynomial: { of: ${scalar(c)}, degree: 2 }   # z = (x - mean) / sd of the training rows`);
+    return [
+        `# yaml-language-server: $schema=${model.schema}`,
+        `# First model of ${scalar(model.target)}, written by \`fitgate init\`. Check it with \`fitgate check\`.`,
+        ...model.notes.map((n) => `# ${n}`),
+        'version: 1',
+        `name: ${scalar(model.name)}`,
+        `task: ${model.task}`,
+        'data:',
+        `  train: ${scalar(model.train)}`,
+        `  holdout: ${scalar(model.holdout)}`,
+        `  target: ${scalar(model.target)}`,
+        `terms:                       # ${model.degree === 1 ? 'linear terms: a modest first model' : 'degree 2, inputs standardised: a modest first model'}`,
+        ...terms,
+        'fit:',
+        '  intercept: true',
+        '  ridge: 0                    # L2 penalty on every coefficient but the intercept; 0 = least squares',
+        "limits:                       # this model's limits; the commented ones show the built-in defaults",
+        `  params_per_sample: ${ratio.value}   # ${ratio.comment}`,
+        ...commentedLimits('  # ', ['params_per_sample']),
+        '',
+    ].join('\n');
+}
+/**
+ * The settings file text: where the descriptors are and every limit's default, commented.
+ * @param schema URL or path (relative to the settings file's folder) of the settings schema
+ * @param pattern glob of the descriptors
+ */
+function settingsText(schema, pattern) {
+    return [
+        `# yaml-language-server: $schema=${schema}`,
+        "# fitgate settings, written by `fitgate init`. A descriptor's own `limits` win key by key.",
+        'version: 1',
+        'models:                       # glob patterns of model descriptors, relative to this folder',
+        `  - ${JSON.stringify(pattern)}`,
+        '# limits:                     # defaults for every model; uncomment to change one',
+        ...commentedLimits('#   ', []),
+        '',
+    ].join('\n');
+}
+
+
+/***/ }),
+
+/***/ 9304:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   fN: () => (/* binding */ limitDirection),
+/* harmony export */   lr: () => (/* binding */ limitOrderProblem),
+/* harmony export */   n6: () => (/* binding */ mergeLimits)
+/* harmony export */ });
+/* unused harmony exports limitKeyNames, limitKeyInfo, toLimit */
+/* harmony import */ var _generated_limit_keys_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(7672);
+/**
+ * Limits: the known keys (generated from the check registry), the limit forms, and how the three
+ * layers (built-in defaults < settings file < descriptor) combine. Checks read their limit from
+ * `Descriptor.limits[key]`.
+ *
+ * Forms (docs/configuration.md, "Limits"):
+ * - a number: fail beyond it in the check's direction (above a ceiling, below a floor);
+ * - `{ warn, fail }`: warn and fail beyond them in the check's direction (at least one);
+ * - `{ warn_below, fail_below, warn_above, fail_above }`: explicit bounds (at least one), for a
+ *   floor, a ceiling or both on any check;
+ * - `off`: skip the check.
+ */
+
+
+/** The known limit keys, in registry order. */
+function limitKeyNames() {
+    return LIMIT_KEYS.map((k) => k.key);
+}
+/** The known key's entry, or undefined. */
+function limitKeyInfo(key) {
+    return _generated_limit_keys_js__WEBPACK_IMPORTED_MODULE_0__/* .LIMIT_KEYS */ .n.find((k) => k.key === key);
+}
+/** The direction of a key's check (`above` for a key no check knows). */
+function limitDirection(key) {
+    return limitKeyInfo(key)?.direction ?? 'above';
+}
+/** The bounds of an explicit spec, or null for the other forms. */
+function explicitBounds(spec) {
+    if (typeof spec !== 'object' || spec === null)
+        return null;
+    if (!('warn_below' in spec || 'fail_below' in spec || 'warn_above' in spec || 'fail_above' in spec))
+        return null;
+    const s = spec;
+    return { warnBelow: s.warn_below ?? null, failBelow: s.fail_below ?? null, warnAbove: s.warn_above ?? null, failAbove: s.fail_above ?? null };
+}
+/**
+ * Why a spec's bounds are out of order, or null when they are in order: a ceiling's warn at most
+ * its fail, a floor's warn at least its fail, every floor below every ceiling.
+ * @returns the offending pair as `[key, message]`
+ */
+function limitOrderProblem(spec, direction) {
+    if (spec === 'off' || typeof spec === 'number')
+        return null;
+    const b = explicitBounds(spec);
+    const plain = spec;
+    const warnBelow = b ? b.warnBelow : direction === 'below' ? (plain.warn ?? null) : null;
+    const failBelow = b ? b.failBelow : direction === 'below' ? (plain.fail ?? null) : null;
+    const warnAbove = b ? b.warnAbove : direction === 'above' ? (plain.warn ?? null) : null;
+    const failAbove = b ? b.failAbove : direction === 'above' ? (plain.fail ?? null) : null;
+    const [wa, fa, wb, fb] = b ? ['warn_above', 'fail_above', 'warn_below', 'fail_below'] : ['warn', 'fail', 'warn', 'fail'];
+    if (warnAbove !== null && failAbove !== null && warnAbove > failAbove)
+        return [wa, `${wa} ${warnAbove} is above ${fa} ${failAbove}; expected ${wa} <= ${fa} (a ceiling warns before it fails)`];
+    if (warnBelow !== null && failBelow !== null && warnBelow < failBelow)
+        return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
+    const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
+    const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
+    if (floor > ceiling)
+        return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
+    return null;
+}
+/**
+ * Normalises a limit as written to a {@link Limit}.
+ *
+ * @param spec one of the forms above; numbers finite (the loaders check the forms and the order
+ *   with file positions first; here a bad spec is a programming error: TypeError / RangeError)
+ * @param direction the check's direction, for a number and `{ warn, fail }`
+ * @param source which layer the spec came from
+ * @param line descriptor line of the key (descriptor limits only), else null
+ */
+function toLimit(spec, direction, source, line) {
+    const none = { warn: null, fail: null, warnBelow: null, failBelow: null };
+    if (spec === 'off')
+        return { ...none, off: true, source, line };
+    if (typeof spec === 'number') {
+        assertThreshold(spec);
+        return direction === 'above' ? { ...none, fail: spec, off: false, source, line } : { ...none, failBelow: spec, off: false, source, line };
+    }
+    if (spec === null || typeof spec !== 'object')
+        throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
+    const problem = limitOrderProblem(spec, direction);
+    if (problem !== null)
+        throw new RangeError(problem[1]);
+    const b = explicitBounds(spec);
+    let limit;
+    if (b !== null) {
+        limit = { warn: b.warnAbove, fail: b.failAbove, warnBelow: b.warnBelow, failBelow: b.failBelow, off: false, source, line };
+    }
+    else {
+        const { warn = null, fail = null } = spec;
+        limit = direction === 'above' ? { ...none, warn, fail, off: false, source, line } : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
+    }
+    const bounds = [limit.warn, limit.fail, limit.warnBelow, limit.failBelow].filter((x) => x !== null);
+    if (bounds.length === 0)
+        throw new RangeError('a limit needs at least one bound');
+    for (const x of bounds)
+        assertThreshold(x);
+    return limit;
+}
+function assertThreshold(x) {
+    if (typeof x !== 'number' || !Number.isFinite(x))
+        throw new RangeError(`limit threshold must be a finite number, got ${String(x)}`);
+}
+/**
+ * Merges limits key by key: built-in default < settings file < descriptor. A layer that
+ * sets a key replaces the whole limit of the layer below (no mixing of `warn` from one
+ * layer with `fail` from another).
+ *
+ * @param settings the settings file (its `limits`)
+ * @param descriptorLimits the descriptor's own limits with the line of each key
+ * @returns one {@link Limit} per known key plus any further key a layer sets
+ */
+function mergeLimits(settings, descriptorLimits) {
+    const merged = {};
+    for (const { key, defaultSpec, direction } of _generated_limit_keys_js__WEBPACK_IMPORTED_MODULE_0__/* .LIMIT_KEYS */ .n)
+        merged[key] = toLimit(defaultSpec, direction, 'default', null);
+    for (const [key, { spec }] of Object.entries(settings.limits))
+        merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
+    for (const [key, { spec, line }] of Object.entries(descriptorLimits))
+        merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
+    return merged;
+}
+
+
+/***/ }),
+
+/***/ 3119:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Os: () => (/* binding */ errorAt),
+/* harmony export */   g$: () => (/* binding */ schemaError),
+/* harmony export */   vp: () => (/* binding */ showValue)
+/* harmony export */ });
+/* unused harmony exports SCHEMA_ERROR_CODE, formatKeyPath */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/* harmony import */ var _core_nearest_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(761);
+/**
+ * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
+ * in document order (and within it the deepest), with the file, line, column, key path, the
+ * bad value (quoted, cut) and what the schema expected.
+ */
+
+
+/** Code of every schema violation. */
+const SCHEMA_ERROR_CODE = 'schema';
+/**
+ * Formats a key path as written in messages: `terms[1].rbf.width`.
+ *
+ * @param path map keys and list indexes; the empty path gives the empty string
+ */
+function formatKeyPath(path) {
+    let out = '';
+    for (const segment of path) {
+        if (typeof segment === 'number')
+            out += `[${segment}]`;
+        else
+            out += out === '' ? segment : `.${segment}`;
+    }
+    return out;
+}
+/**
+ * An InputError at a key path of a parsed document.
+ *
+ * @param doc the parsed document (for positions)
+ * @param file repository-relative path
+ * @param code stable error code
+ * @param path key path the problem is about
+ * @param message what is wrong and what was expected
+ * @param pointAt `value` (default) points at the value, `key` at the key, `parent` at the parent's key
+ */
+function errorAt(doc, file, code, path, message, pointAt = 'value') {
+    const position = locate(doc, path, pointAt);
+    const key = formatKeyPath(path);
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
+}
+/** Quotes a user value for a message; non-finite numbers as YAML writes them. */
+function showValue(value) {
+    if (typeof value === 'number' && !Number.isFinite(value))
+        return Number.isNaN(value) ? '.nan' : value > 0 ? '.inf' : '-.inf';
+    if (value instanceof Uint8Array)
+        return 'binary data';
+    if (value === null)
+        return 'nothing (null)';
+    return (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(value);
+}
+/**
+ * The single most specific InputError for a failed validation.
+ *
+ * @param errors ajv errors (compiled with `allErrors` and `verbose`)
+ * @param doc the parsed document the errors are about
+ * @param file repository-relative path
+ */
+function schemaError(errors, doc, file) {
+    const issues = resolveAlternatives(errors).flatMap((e) => toIssue(e, doc.value));
+    if (issues.length === 0)
+        return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SCHEMA_ERROR_CODE, 'does not match its schema', { file });
+    // First in document order; within its subtree, the deepest.
+    const placed = issues.map((issue, index) => ({ issue, index, at: locate(doc, issue.path, issue.pointAt) ?? { line: 0, column: 0 } }));
+    placed.sort((a, b) => a.at.line - b.at.line || a.at.column - b.at.column || a.index - b.index);
+    const first = placed[0];
+    let chosen = first;
+    for (const candidate of placed) {
+        if (isPrefix(first.issue.path, candidate.issue.path) && candidate.issue.path.length > chosen.issue.path.length)
+            chosen = candidate;
+    }
+    const { issue } = chosen;
+    return errorAt(doc, file, SCHEMA_ERROR_CODE, issue.path, issue.message, issue.pointAt);
+}
+function isPrefix(prefix, path) {
+    return prefix.length <= path.length && prefix.every((s, i) => s === path[i]);
+}
+function locate(doc, path, pointAt) {
+    let target = pointAt === 'parent' ? path.slice(0, -1) : path;
+    let position = pointAt === 'value' ? doc.valuePositionOf(target) : doc.positionOf(target);
+    while (position === null && target.length > 0) {
+        target = target.slice(0, -1);
+        position = doc.positionOf(target);
+    }
+    return position;
+}
+/** Replaces each failed oneOf/anyOf and its branch errors by the errors of the branch the user meant, or one "expected one of" error. */
+function resolveAlternatives(errors) {
+    const alternatives = errors.filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf').sort((a, b) => a.schemaPath.length - b.schemaPath.length);
+    if (alternatives.length === 0)
+        return errors;
+    const outer = alternatives[0];
+    const prefix = `${outer.schemaPath}/`;
+    const inside = errors.filter((e) => e.schemaPath.startsWith(prefix));
+    const rest = errors.filter((e) => e !== outer && !e.schemaPath.startsWith(prefix));
+    const branches = new Map();
+    for (const e of inside) {
+        const index = Number.parseInt(e.schemaPath.slice(prefix.length), 10);
+        branches.set(index, [...(branches.get(index) ?? []), e]);
+    }
+    const matchingType = [...branches.entries()].filter(([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')));
+    const score = (list) => [Math.max(...list.map((e) => effectiveDepth(e))), -list.length];
+    let best = null;
+    let tie = false;
+    for (const [, list] of matchingType) {
+        if (best === null) {
+            best = list;
+            continue;
+        }
+        const [d1, n1] = score(list);
+        const [d0, n0] = score(best);
+        if (d1 > d0 || (d1 === d0 && n1 > n0)) {
+            best = list;
+            tie = false;
+        }
+        else if (d1 === d0 && n1 === n0) {
+            tie = true;
+        }
+    }
+    const chosen = best !== null && !tie ? best : [alternativesError(outer)];
+    return resolveAlternatives([...rest, ...chosen]);
+}
+/** A stand-in error listing the forms of a failed oneOf/anyOf. */
+function alternativesError(outer) {
+    const forms = Array.isArray(outer.schema) ? outer.schema.map((s) => s.title ?? 'another form') : [];
+    return { ...outer, keyword: 'x-alternatives', params: { forms } };
+}
+function effectiveDepth(e) {
+    const depth = e.instancePath === '' ? 0 : e.instancePath.split('/').length - 1;
+    return e.keyword === 'required' || e.keyword === 'additionalProperties' || e.keyword === 'propertyNames' ? depth + 1 : depth;
+}
+/** JSON pointer to a key path; numbers where the data there is a list. */
+function pointerToPath(pointer, root) {
+    if (pointer === '')
+        return [];
+    const path = [];
+    let node = root;
+    for (const raw of pointer.slice(1).split('/')) {
+        const segment = raw.replace(/~1/g, '/').replace(/~0/g, '~');
+        if (Array.isArray(node)) {
+            const index = Number(segment);
+            path.push(index);
+            node = node[index];
+        }
+        else {
+            path.push(segment);
+            node = node !== null && typeof node === 'object' ? node[segment] : undefined;
+        }
+    }
+    return path;
+}
+const TYPE_WORDS = {
+    number: 'a number',
+    integer: 'an integer',
+    string: 'text',
+    object: 'a mapping (key: value)',
+    array: 'a list',
+    boolean: 'true or false',
+    null: 'nothing',
+};
+const PATTERN_WORDS = {
+    '^[A-Za-z0-9._-]+$': 'only letters, digits, `-`, `_` or `.`',
+};
+function orList(items) {
+    if (items.length <= 1)
+        return items.join('');
+    return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
+}
+function toIssue(e, root) {
+    const path = pointerToPath(e.instancePath, root);
+    const parent = (e.parentSchema ?? {});
+    const got = `got ${showValue(e.data)}`;
+    const params = e.params;
+    const keys = Object.keys(parent.properties ?? {});
+    const isTerm = Array.isArray(parent.propertyNames?.enum) && parent.maxProperties === 1;
+    const kinds = (parent.propertyNames?.enum ?? []).map(String);
+    switch (e.keyword) {
+        case 'type': {
+            const types = (Array.isArray(params.type) ? params.type : String(params.type).split(','));
+            let expected = orList(types.map((t) => TYPE_WORDS[t] ?? t));
+            if (typeof e.data === 'number' && !Number.isFinite(e.data))
+                expected = `a finite ${types.includes('integer') ? 'integer' : 'number'}`;
+            if (types.includes('object') && isTerm)
+                expected = `a mapping with one key, the term kind (${orList(kinds)})`;
+            else if (types.includes('object') && keys.length > 0)
+                expected += ` with keys among: ${keys.join(', ')}`;
+            return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}` }];
+        }
+        case 'enum':
+            if (e.propertyName !== undefined)
+                return []; // reported by propertyNames
+            return [{ path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` }];
+        case 'const':
+            return [{ path, pointAt: 'value', message: `expected \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(String(params.allowedValue))}\`, ${got}` }];
+        case 'minimum':
+        case 'maximum':
+        case 'exclusiveMinimum':
+        case 'exclusiveMaximum':
+            return [{ path, pointAt: 'value', message: `expected ${boundsText(parent)}, ${got}` }];
+        case 'multipleOf':
+            return [{ path, pointAt: 'value', message: `expected a multiple of ${String(params.multipleOf)}, ${got}` }];
+        case 'minLength':
+            return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}` }];
+        case 'maxLength':
+            return [{ path, pointAt: 'value', message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters` }];
+        case 'pattern': {
+            const pattern = String(params.pattern);
+            return [{ path, pointAt: 'value', message: `expected ${PATTERN_WORDS[pattern] ?? `text matching ${pattern}`}, ${got}` }];
+        }
+        case 'minItems':
+            return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}` }];
+        case 'maxItems':
+            return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
+        case 'required': {
+            const missing = String(params.missingProperty);
+            // A key present but not allowed that is a near miss of the missing one is the likely typo.
+            const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
+            const typo = present.find((k) => (0,_core_nearest_js__WEBPACK_IMPORTED_MODULE_1__/* .nearestWord */ .z)(k, [missing]) === missing);
+            const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(typo, 40)}?)` : '';
+            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+        }
+        case 'additionalProperties': {
+            const extra = String(params.additionalProperty);
+            const near = (0,_core_nearest_js__WEBPACK_IMPORTED_MODULE_1__/* .nearestWord */ .z)(extra, keys);
+            const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
+            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(extra)}\`${hint}; expected one of: ${keys.join(', ')}` }];
+        }
+        case 'propertyNames': {
+            const name = String(params.propertyName);
+            const what = isTerm ? 'term kind' : 'key';
+            return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(name)}\`; expected one of: ${kinds.join(', ')}` }];
+        }
+        case 'minProperties':
+        case 'maxProperties': {
+            const present = e.data !== null && typeof e.data === 'object' ? Object.keys(e.data) : [];
+            if (isTerm) {
+                const has = present.length === 0 ? 'no key' : `${present.length} keys (${present.join(', ')})`;
+                return [{ path, pointAt: 'value', message: `a term has exactly one key, the term kind (${orList(kinds)}); got ${has}` }];
+            }
+            return [{ path, pointAt: 'value', message: `expected at least one of: ${keys.join(', ')}, ${got}` }];
+        }
+        case 'x-alternatives':
+            return [{ path, pointAt: 'value', message: `expected one of: ${orList(params.forms)}, ${got}` }];
+        case 'oneOf':
+            return [{ path, pointAt: 'value', message: `matches more than one form; ${got}` }];
+        default:
+            return [{ path, pointAt: 'value', message: `${e.message ?? 'is not valid'}, ${got}` }];
+    }
+}
+function boundsText(schema) {
+    const what = schema.type === 'integer' ? 'an integer' : 'a number';
+    const parts = [];
+    if (schema.minimum !== undefined && schema.maximum !== undefined)
+        return `${what} from ${schema.minimum} to ${schema.maximum}`;
+    if (schema.minimum !== undefined)
+        parts.push(`>= ${schema.minimum}`);
+    if (schema.exclusiveMinimum !== undefined)
+        parts.push(`> ${schema.exclusiveMinimum}`);
+    if (schema.maximum !== undefined)
+        parts.push(`<= ${schema.maximum}`);
+    if (schema.exclusiveMaximum !== undefined)
+        parts.push(`< ${schema.exclusiveMaximum}`);
+    return `${what} ${parts.join(' and ')}`;
+}
+
+
+/***/ }),
+
+/***/ 9602:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  z: () => (/* binding */ validateDescriptorValue),
+  bg: () => (/* binding */ validateSettingsValue)
+});
+
+// UNUSED EXPORTS: descriptorSchema, settingsSchema
+
+;// CONCATENATED MODULE: ./src/config/schema/descriptor.schema.json
+const descriptor_schema_namespaceObject = {};
+;// CONCATENATED MODULE: ./src/config/schema/settings.schema.json
+const settings_schema_namespaceObject = {};
+// EXTERNAL MODULE: ./node_modules/ajv/dist/runtime/ucs2length.js
+var ucs2length = __nccwpck_require__(6214);
+;// CONCATENATED MODULE: ./src/config/generated/validators.ts
+// @ts-nocheck
+// Generated by test/tools/gen-validators.mjs from src/config/schema/*.json: do not edit.
+
+
+const validateSettings = validate52;
+const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
+const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
+const func2 = Object.prototype.hasOwnProperty;
+const schema21 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+function validate54(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate54.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    const _errs0 = errors;
+    let valid0 = false;
+    let passing0 = null;
+    const _errs1 = errors;
+    if ((typeof data == "number") && (isFinite(data))) {
+        if (data < 0 || isNaN(data)) {
+            const err0 = { instancePath, schemaPath: "#/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[0], data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+    }
+    else {
+        const err1 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[0].type, parentSchema: schema21.oneOf[0], data };
+        if (vErrors === null) {
+            vErrors = [err1];
+        }
+        else {
+            vErrors.push(err1);
+        }
+        errors++;
+    }
+    var _valid0 = _errs1 === errors;
+    if (_valid0) {
+        valid0 = true;
+        passing0 = 0;
+    }
+    const _errs3 = errors;
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (Object.keys(data).length < 1) {
+            const err2 = { instancePath, schemaPath: "#/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema21.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err2];
+            }
+            else {
+                vErrors.push(err2);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!((key0 === "warn") || (key0 === "fail"))) {
+                const err3 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema21.oneOf[1], data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.warn !== undefined) {
+            let data0 = data.warn;
+            if ((typeof data0 == "number") && (isFinite(data0))) {
+                if (data0 < 0 || isNaN(data0)) {
+                    const err4 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[1].properties.warn, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err5 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[1].properties.warn.type, parentSchema: schema21.oneOf[1].properties.warn, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.fail !== undefined) {
+            let data1 = data.fail;
+            if ((typeof data1 == "number") && (isFinite(data1))) {
+                if (data1 < 0 || isNaN(data1)) {
+                    const err6 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[1].properties.fail, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[1].properties.fail.type, parentSchema: schema21.oneOf[1].properties.fail, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err8 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema21.oneOf[1].type, parentSchema: schema21.oneOf[1], data };
+        if (vErrors === null) {
+            vErrors = [err8];
+        }
+        else {
+            vErrors.push(err8);
+        }
+        errors++;
+    }
+    var _valid0 = _errs3 === errors;
+    if (_valid0 && valid0) {
+        valid0 = false;
+        passing0 = [passing0, 1];
+    }
+    else {
+        if (_valid0) {
+            valid0 = true;
+            passing0 = 1;
+            var props0 = true;
+        }
+        const _errs10 = errors;
+        if (data && typeof data == "object" && !Array.isArray(data)) {
+            if (Object.keys(data).length < 1) {
+                const err9 = { instancePath, schemaPath: "#/oneOf/2/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema21.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            for (const key1 in data) {
+                if (!((((key1 === "warn_below") || (key1 === "fail_below")) || (key1 === "warn_above")) || (key1 === "fail_above"))) {
+                    const err10 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema21.oneOf[2], data };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_below !== undefined) {
+                let data2 = data.warn_below;
+                if (!((typeof data2 == "number") && (isFinite(data2)))) {
+                    const err11 = { instancePath: instancePath + "/warn_below", schemaPath: "#/oneOf/2/properties/warn_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.warn_below.type, parentSchema: schema21.oneOf[2].properties.warn_below, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_below !== undefined) {
+                let data3 = data.fail_below;
+                if (!((typeof data3 == "number") && (isFinite(data3)))) {
+                    const err12 = { instancePath: instancePath + "/fail_below", schemaPath: "#/oneOf/2/properties/fail_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.fail_below.type, parentSchema: schema21.oneOf[2].properties.fail_below, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_above !== undefined) {
+                let data4 = data.warn_above;
+                if (!((typeof data4 == "number") && (isFinite(data4)))) {
+                    const err13 = { instancePath: instancePath + "/warn_above", schemaPath: "#/oneOf/2/properties/warn_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.warn_above.type, parentSchema: schema21.oneOf[2].properties.warn_above, data: data4 };
+                    if (vErrors === null) {
+                        vErrors = [err13];
+                    }
+                    else {
+                        vErrors.push(err13);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_above !== undefined) {
+                let data5 = data.fail_above;
+                if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                    const err14 = { instancePath: instancePath + "/fail_above", schemaPath: "#/oneOf/2/properties/fail_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.fail_above.type, parentSchema: schema21.oneOf[2].properties.fail_above, data: data5 };
+                    if (vErrors === null) {
+                        vErrors = [err14];
+                    }
+                    else {
+                        vErrors.push(err14);
+                    }
+                    errors++;
+                }
+            }
+        }
+        else {
+            const err15 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema21.oneOf[2].type, parentSchema: schema21.oneOf[2], data };
+            if (vErrors === null) {
+                vErrors = [err15];
+            }
+            else {
+                vErrors.push(err15);
+            }
+            errors++;
+        }
+        var _valid0 = _errs10 === errors;
+        if (_valid0 && valid0) {
+            valid0 = false;
+            passing0 = [passing0, 2];
+        }
+        else {
+            if (_valid0) {
+                valid0 = true;
+                passing0 = 2;
+                if (props0 !== true) {
+                    props0 = true;
+                }
+            }
+            const _errs21 = errors;
+            if ("off" !== data) {
+                const err16 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema21.oneOf[3], data };
+                if (vErrors === null) {
+                    vErrors = [err16];
+                }
+                else {
+                    vErrors.push(err16);
+                }
+                errors++;
+            }
+            var _valid0 = _errs21 === errors;
+            if (_valid0 && valid0) {
+                valid0 = false;
+                passing0 = [passing0, 3];
+            }
+            else {
+                if (_valid0) {
+                    valid0 = true;
+                    passing0 = 3;
+                }
+            }
+        }
+    }
+    if (!valid0) {
+        const err17 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema21.oneOf, parentSchema: schema21, data };
+        if (vErrors === null) {
+            vErrors = [err17];
+        }
+        else {
+            vErrors.push(err17);
+        }
+        errors++;
+    }
+    else {
+        errors = _errs0;
+        if (vErrors !== null) {
+            if (_errs0) {
+                vErrors.length = _errs0;
+            }
+            else {
+                vErrors = null;
+            }
+        }
+    }
+    validate54.errors = vErrors;
+    evaluated0.props = props0;
+    return errors === 0;
+}
+validate54.evaluated = { "dynamicProps": true, "dynamicItems": false };
+function validate53(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate53.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        for (const key0 in data) {
+            if (!(func2.call(schema20.properties, key0))) {
+                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema20, data };
+                if (vErrors === null) {
+                    vErrors = [err0];
+                }
+                else {
+                    vErrors.push(err0);
+                }
+                errors++;
+            }
+        }
+        if (data.gap_ratio !== undefined) {
+            if (!(validate54(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.params_per_sample !== undefined) {
+            if (!(validate54(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.coefficient !== undefined) {
+            if (!(validate54(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.base_change !== undefined) {
+            if (!(validate54(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.cv_ratio !== undefined) {
+            if (!(validate54(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.swing !== undefined) {
+            if (!(validate54(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.swing_beyond !== undefined) {
+            if (!(validate54(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.swing_spikes !== undefined) {
+            if (!(validate54(data.swing_spikes, { instancePath: instancePath + "/swing_spikes", parentData: data, parentDataProperty: "swing_spikes", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.leakage !== undefined) {
+            if (!(validate54(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.reproducibility !== undefined) {
+            if (!(validate54(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.condition !== undefined) {
+            if (!(validate54(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.complexity !== undefined) {
+            if (!(validate54(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.holdout_r2 !== undefined) {
+            if (!(validate54(data.holdout_r2, { instancePath: instancePath + "/holdout_r2", parentData: data, parentDataProperty: "holdout_r2", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.holdout_rmse !== undefined) {
+            if (!(validate54(data.holdout_rmse, { instancePath: instancePath + "/holdout_rmse", parentData: data, parentDataProperty: "holdout_rmse", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.holdout_mae !== undefined) {
+            if (!(validate54(data.holdout_mae, { instancePath: instancePath + "/holdout_mae", parentData: data, parentDataProperty: "holdout_mae", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.chi_square !== undefined) {
+            if (!(validate54(data.chi_square, { instancePath: instancePath + "/chi_square", parentData: data, parentDataProperty: "chi_square", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.separation !== undefined) {
+            if (!(validate54(data.separation, { instancePath: instancePath + "/separation", parentData: data, parentDataProperty: "separation", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.events_per_parameter !== undefined) {
+            if (!(validate54(data.events_per_parameter, { instancePath: instancePath + "/events_per_parameter", parentData: data, parentDataProperty: "events_per_parameter", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.calibration_slope !== undefined) {
+            if (!(validate54(data.calibration_slope, { instancePath: instancePath + "/calibration_slope", parentData: data, parentDataProperty: "calibration_slope", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+                errors = vErrors.length;
+            }
+        }
+    }
+    else {
+        const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema20.type, parentSchema: schema20, data };
+        if (vErrors === null) {
+            vErrors = [err1];
+        }
+        else {
+            vErrors.push(err1);
+        }
+        errors++;
+    }
+    validate53.errors = vErrors;
+    return errors === 0;
+}
+validate53.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate52(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    /*# sourceURL="urn:fitgate:schema:settings:1" */ ;
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate52.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.version === undefined) {
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema19.required, parentSchema: schema19, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!(((((key0 === "version") || (key0 === "models")) || (key0 === "limits")) || (key0 === "fit")) || (key0 === "caps"))) {
+                const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19, data };
+                if (vErrors === null) {
+                    vErrors = [err1];
+                }
+                else {
+                    vErrors.push(err1);
+                }
+                errors++;
+            }
+        }
+        if (data.version !== undefined) {
+            let data0 = data.version;
+            if (1 !== data0) {
+                const err2 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema19.properties.version, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err2];
+                }
+                else {
+                    vErrors.push(err2);
+                }
+                errors++;
+            }
+        }
+        if (data.models !== undefined) {
+            let data1 = data.models;
+            if (Array.isArray(data1)) {
+                if (data1.length < 1) {
+                    const err3 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema19.properties.models, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err3];
+                    }
+                    else {
+                        vErrors.push(err3);
+                    }
+                    errors++;
+                }
+                const len0 = data1.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    let data2 = data1[i0];
+                    if (typeof data2 === "string") {
+                        if (func1(data2) < 1) {
+                            const err4 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema19.properties.models.items, data: data2 };
+                            if (vErrors === null) {
+                                vErrors = [err4];
+                            }
+                            else {
+                                vErrors.push(err4);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err5 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema19.properties.models.items.type, parentSchema: schema19.properties.models.items, data: data2 };
+                        if (vErrors === null) {
+                            vErrors = [err5];
+                        }
+                        else {
+                            vErrors.push(err5);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err6 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema19.properties.models.type, parentSchema: schema19.properties.models, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err6];
+                }
+                else {
+                    vErrors.push(err6);
+                }
+                errors++;
+            }
+        }
+        if (data.limits !== undefined) {
+            if (!(validate53(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data4 = data.fit;
+            if (data4 && typeof data4 == "object" && !Array.isArray(data4)) {
+                for (const key1 in data4) {
+                    if (!((((key1 === "folds") || (key1 === "fold_order")) || (key1 === "seed")) || (key1 === "parameter_count"))) {
+                        const err7 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.fit, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err7];
+                        }
+                        else {
+                            vErrors.push(err7);
+                        }
+                        errors++;
+                    }
+                }
+                if (data4.folds !== undefined) {
+                    let data5 = data4.folds;
+                    if (!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))) {
+                        const err8 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.folds.type, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err8];
+                        }
+                        else {
+                            vErrors.push(err8);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data5 == "number") && (isFinite(data5))) {
+                        if (data5 < 2 || isNaN(data5)) {
+                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err9];
+                            }
+                            else {
+                                vErrors.push(err9);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data4.fold_order !== undefined) {
+                    let data6 = data4.fold_order;
+                    if (!((data6 === "shuffled") || (data6 === "blocks"))) {
+                        const err10 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.fold_order.enum, parentSchema: schema19.properties.fit.properties.fold_order, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err10];
+                        }
+                        else {
+                            vErrors.push(err10);
+                        }
+                        errors++;
+                    }
+                }
+                if (data4.seed !== undefined) {
+                    let data7 = data4.seed;
+                    if (!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))) {
+                        const err11 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.seed.type, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err11];
+                        }
+                        else {
+                            vErrors.push(err11);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data7 == "number") && (isFinite(data7))) {
+                        if (data7 > 4294967295 || isNaN(data7)) {
+                            const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err12];
+                            }
+                            else {
+                                vErrors.push(err12);
+                            }
+                            errors++;
+                        }
+                        if (data7 < 0 || isNaN(data7)) {
+                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err13];
+                            }
+                            else {
+                                vErrors.push(err13);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data4.parameter_count !== undefined) {
+                    let data8 = data4.parameter_count;
+                    if (!((data8 === "columns") || (data8 === "effective"))) {
+                        const err14 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.parameter_count.enum, parentSchema: schema19.properties.fit.properties.parameter_count, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err14];
+                        }
+                        else {
+                            vErrors.push(err14);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err15 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.fit.type, parentSchema: schema19.properties.fit, data: data4 };
+                if (vErrors === null) {
+                    vErrors = [err15];
+                }
+                else {
+                    vErrors.push(err15);
+                }
+                errors++;
+            }
+        }
+        if (data.caps !== undefined) {
+            let data9 = data.caps;
+            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                for (const key2 in data9) {
+                    if (!((key2 === "max_file_mb") || (key2 === "max_cells"))) {
+                        const err16 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.caps, data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err16];
+                        }
+                        else {
+                            vErrors.push(err16);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.max_file_mb !== undefined) {
+                    let data10 = data9.max_file_mb;
+                    if ((typeof data10 == "number") && (isFinite(data10))) {
+                        if (data10 <= 0 || isNaN(data10)) {
+                            const err17 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
+                            if (vErrors === null) {
+                                vErrors = [err17];
+                            }
+                            else {
+                                vErrors.push(err17);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_file_mb.type, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err18];
+                        }
+                        else {
+                            vErrors.push(err18);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.max_cells !== undefined) {
+                    let data11 = data9.max_cells;
+                    if (!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))) {
+                        const err19 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.caps.properties.max_cells.type, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data11 == "number") && (isFinite(data11))) {
+                        if (data11 < 1 || isNaN(data11)) {
+                            const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
+                            if (vErrors === null) {
+                                vErrors = [err20];
+                            }
+                            else {
+                                vErrors.push(err20);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+            }
+            else {
+                const err21 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.caps.type, parentSchema: schema19.properties.caps, data: data9 };
+                if (vErrors === null) {
+                    vErrors = [err21];
+                }
+                else {
+                    vErrors.push(err21);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err22 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.type, parentSchema: schema19, data };
+        if (vErrors === null) {
+            vErrors = [err22];
+        }
+        else {
+            vErrors.push(err22);
+        }
+        errors++;
+    }
+    validate52.errors = vErrors;
+    return errors === 0;
+}
+validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+const validateDescriptor = validate75;
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
+const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } };
+const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
+function validate77(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate77.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    const _errs0 = errors;
+    let valid0 = false;
+    let passing0 = null;
+    const _errs1 = errors;
+    if (Array.isArray(data)) {
+        if (data.length < 1) {
+            const err0 = { instancePath, schemaPath: "#/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema24.oneOf[0], data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        const len0 = data.length;
+        for (let i0 = 0; i0 < len0; i0++) {
+            let data0 = data[i0];
+            if (!((typeof data0 == "number") && (isFinite(data0)))) {
+                const err1 = { instancePath: instancePath + "/" + i0, schemaPath: "#/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[0].items.type, parentSchema: schema24.oneOf[0].items, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err1];
+                }
+                else {
+                    vErrors.push(err1);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err2 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema24.oneOf[0].type, parentSchema: schema24.oneOf[0], data };
+        if (vErrors === null) {
+            vErrors = [err2];
+        }
+        else {
+            vErrors.push(err2);
+        }
+        errors++;
+    }
+    var _valid0 = _errs1 === errors;
+    if (_valid0) {
+        valid0 = true;
+        passing0 = 0;
+        var items0 = true;
+    }
+    const _errs5 = errors;
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.from === undefined) {
+            const err3 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err3];
+            }
+            else {
+                vErrors.push(err3);
+            }
+            errors++;
+        }
+        if (data.to === undefined) {
+            const err4 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err4];
+            }
+            else {
+                vErrors.push(err4);
+            }
+            errors++;
+        }
+        if (data.count === undefined) {
+            const err5 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err5];
+            }
+            else {
+                vErrors.push(err5);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!(((key0 === "from") || (key0 === "to")) || (key0 === "count"))) {
+                const err6 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema24.oneOf[1], data };
+                if (vErrors === null) {
+                    vErrors = [err6];
+                }
+                else {
+                    vErrors.push(err6);
+                }
+                errors++;
+            }
+        }
+        if (data.from !== undefined) {
+            let data1 = data.from;
+            if (!((typeof data1 == "number") && (isFinite(data1)))) {
+                const err7 = { instancePath: instancePath + "/from", schemaPath: "#/oneOf/1/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[1].properties.from.type, parentSchema: schema24.oneOf[1].properties.from, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+        if (data.to !== undefined) {
+            let data2 = data.to;
+            if (!((typeof data2 == "number") && (isFinite(data2)))) {
+                const err8 = { instancePath: instancePath + "/to", schemaPath: "#/oneOf/1/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[1].properties.to.type, parentSchema: schema24.oneOf[1].properties.to, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err8];
+                }
+                else {
+                    vErrors.push(err8);
+                }
+                errors++;
+            }
+        }
+        if (data.count !== undefined) {
+            let data3 = data.count;
+            if (!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))) {
+                const err9 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema24.oneOf[1].properties.count.type, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            if ((typeof data3 == "number") && (isFinite(data3))) {
+                if (data3 > 10000 || isNaN(data3)) {
+                    const err10 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 10000 }, message: "must be <= 10000", schema: 10000, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+                if (data3 < 1 || isNaN(data3)) {
+                    const err11 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+            }
+        }
+    }
+    else {
+        const err12 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema24.oneOf[1].type, parentSchema: schema24.oneOf[1], data };
+        if (vErrors === null) {
+            vErrors = [err12];
+        }
+        else {
+            vErrors.push(err12);
+        }
+        errors++;
+    }
+    var _valid0 = _errs5 === errors;
+    if (_valid0 && valid0) {
+        valid0 = false;
+        passing0 = [passing0, 1];
+    }
+    else {
+        if (_valid0) {
+            valid0 = true;
+            passing0 = 1;
+            var props0 = true;
+        }
+        const _errs14 = errors;
+        if (data && typeof data == "object" && !Array.isArray(data)) {
+            if (data.from === undefined) {
+                const err13 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err13];
+                }
+                else {
+                    vErrors.push(err13);
+                }
+                errors++;
+            }
+            if (data.to === undefined) {
+                const err14 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err14];
+                }
+                else {
+                    vErrors.push(err14);
+                }
+                errors++;
+            }
+            if (data.step === undefined) {
+                const err15 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "step" }, message: "must have required property '" + "step" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err15];
+                }
+                else {
+                    vErrors.push(err15);
+                }
+                errors++;
+            }
+            for (const key1 in data) {
+                if (!(((key1 === "from") || (key1 === "to")) || (key1 === "step"))) {
+                    const err16 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema24.oneOf[2], data };
+                    if (vErrors === null) {
+                        vErrors = [err16];
+                    }
+                    else {
+                        vErrors.push(err16);
+                    }
+                    errors++;
+                }
+            }
+            if (data.from !== undefined) {
+                let data4 = data.from;
+                if (!((typeof data4 == "number") && (isFinite(data4)))) {
+                    const err17 = { instancePath: instancePath + "/from", schemaPath: "#/oneOf/2/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.from.type, parentSchema: schema24.oneOf[2].properties.from, data: data4 };
+                    if (vErrors === null) {
+                        vErrors = [err17];
+                    }
+                    else {
+                        vErrors.push(err17);
+                    }
+                    errors++;
+                }
+            }
+            if (data.to !== undefined) {
+                let data5 = data.to;
+                if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                    const err18 = { instancePath: instancePath + "/to", schemaPath: "#/oneOf/2/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.to.type, parentSchema: schema24.oneOf[2].properties.to, data: data5 };
+                    if (vErrors === null) {
+                        vErrors = [err18];
+                    }
+                    else {
+                        vErrors.push(err18);
+                    }
+                    errors++;
+                }
+            }
+            if (data.step !== undefined) {
+                let data6 = data.step;
+                if ((typeof data6 == "number") && (isFinite(data6))) {
+                    if (data6 <= 0 || isNaN(data6)) {
+                        const err19 = { instancePath: instancePath + "/step", schemaPath: "#/oneOf/2/properties/step/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema24.oneOf[2].properties.step, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                }
+                else {
+                    const err20 = { instancePath: instancePath + "/step", schemaPath: "#/oneOf/2/properties/step/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.step.type, parentSchema: schema24.oneOf[2].properties.step, data: data6 };
+                    if (vErrors === null) {
+                        vErrors = [err20];
+                    }
+                    else {
+                        vErrors.push(err20);
+                    }
+                    errors++;
+                }
+            }
+        }
+        else {
+            const err21 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema24.oneOf[2].type, parentSchema: schema24.oneOf[2], data };
+            if (vErrors === null) {
+                vErrors = [err21];
+            }
+            else {
+                vErrors.push(err21);
+            }
+            errors++;
+        }
+        var _valid0 = _errs14 === errors;
+        if (_valid0 && valid0) {
+            valid0 = false;
+            passing0 = [passing0, 2];
+        }
+        else {
+            if (_valid0) {
+                valid0 = true;
+                passing0 = 2;
+                if (props0 !== true) {
+                    props0 = true;
+                }
+            }
+            const _errs23 = errors;
+            if ("at-samples" !== data) {
+                const err22 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "at-samples" }, message: "must be equal to constant", schema: "at-samples", parentSchema: schema24.oneOf[3], data };
+                if (vErrors === null) {
+                    vErrors = [err22];
+                }
+                else {
+                    vErrors.push(err22);
+                }
+                errors++;
+            }
+            var _valid0 = _errs23 === errors;
+            if (_valid0 && valid0) {
+                valid0 = false;
+                passing0 = [passing0, 3];
+            }
+            else {
+                if (_valid0) {
+                    valid0 = true;
+                    passing0 = 3;
+                }
+            }
+        }
+    }
+    if (!valid0) {
+        const err23 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema24.oneOf, parentSchema: schema24, data };
+        if (vErrors === null) {
+            vErrors = [err23];
+        }
+        else {
+            vErrors.push(err23);
+        }
+        errors++;
+    }
+    else {
+        errors = _errs0;
+        if (vErrors !== null) {
+            if (_errs0) {
+                vErrors.length = _errs0;
+            }
+            else {
+                vErrors = null;
+            }
+        }
+    }
+    validate77.errors = vErrors;
+    evaluated0.props = props0;
+    evaluated0.items = items0;
+    return errors === 0;
+}
+validate77.evaluated = { "dynamicProps": true, "dynamicItems": true };
+function validate76(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate76.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (Object.keys(data).length > 1) {
+            const err0 = { instancePath, schemaPath: "#/maxProperties", keyword: "maxProperties", params: { limit: 1 }, message: "must NOT have more than 1 properties", schema: 1, parentSchema: schema23, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        if (Object.keys(data).length < 1) {
+            const err1 = { instancePath, schemaPath: "#/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema23, data };
+            if (vErrors === null) {
+                vErrors = [err1];
+            }
+            else {
+                vErrors.push(err1);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            const _errs1 = errors;
+            if (!((((((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf")) || (key0 === "fourier")) || (key0 === "spline")) || (key0 === "category"))) {
+                const err2 = { instancePath, schemaPath: "#/propertyNames/enum", keyword: "enum", params: { allowedValues: schema23.propertyNames.enum }, message: "must be equal to one of the allowed values", schema: schema23.propertyNames.enum, parentSchema: schema23.propertyNames, data: key0, propertyName: key0 };
+                if (vErrors === null) {
+                    vErrors = [err2];
+                }
+                else {
+                    vErrors.push(err2);
+                }
+                errors++;
+            }
+            var valid0 = _errs1 === errors;
+            if (!valid0) {
+                const err3 = { instancePath, schemaPath: "#/propertyNames", keyword: "propertyNames", params: { propertyName: key0 }, message: "property name must be valid", schema: schema23.propertyNames, parentSchema: schema23, data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.linear !== undefined) {
+            let data0 = data.linear;
+            if (Array.isArray(data0)) {
+                if (data0.length < 1) {
+                    const err4 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.linear, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+                const len0 = data0.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    let data1 = data0[i0];
+                    if (typeof data1 === "string") {
+                        if (func1(data1) < 1) {
+                            const err5 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.linear.items, data: data1 };
+                            if (vErrors === null) {
+                                vErrors = [err5];
+                            }
+                            else {
+                                vErrors.push(err5);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err6 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.linear.items.type, parentSchema: schema23.properties.linear.items, data: data1 };
+                        if (vErrors === null) {
+                            vErrors = [err6];
+                        }
+                        else {
+                            vErrors.push(err6);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.linear.type, parentSchema: schema23.properties.linear, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+        if (data.polynomial !== undefined) {
+            let data2 = data.polynomial;
+            if (data2 && typeof data2 == "object" && !Array.isArray(data2)) {
+                if (data2.of === undefined) {
+                    const err8 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.polynomial.required, parentSchema: schema23.properties.polynomial, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err8];
+                    }
+                    else {
+                        vErrors.push(err8);
+                    }
+                    errors++;
+                }
+                if (data2.degree === undefined) {
+                    const err9 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "degree" }, message: "must have required property '" + "degree" + "'", schema: schema23.properties.polynomial.required, parentSchema: schema23.properties.polynomial, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err9];
+                    }
+                    else {
+                        vErrors.push(err9);
+                    }
+                    errors++;
+                }
+                for (const key1 in data2) {
+                    if (!(((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale")) || (key1 === "transform"))) {
+                        const err10 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.polynomial, data: data2 };
+                        if (vErrors === null) {
+                            vErrors = [err10];
+                        }
+                        else {
+                            vErrors.push(err10);
+                        }
+                        errors++;
+                    }
+                }
+                if (data2.of !== undefined) {
+                    let data3 = data2.of;
+                    const _errs10 = errors;
+                    let valid5 = false;
+                    let passing0 = null;
+                    const _errs11 = errors;
+                    if (typeof data3 === "string") {
+                        if (func1(data3) < 1) {
+                            const err11 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/0/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.polynomial.properties.of.oneOf[0], data: data3 };
+                            if (vErrors === null) {
+                                vErrors = [err11];
+                            }
+                            else {
+                                vErrors.push(err11);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err12 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.polynomial.properties.of.oneOf[0].type, parentSchema: schema23.properties.polynomial.properties.of.oneOf[0], data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err12];
+                        }
+                        else {
+                            vErrors.push(err12);
+                        }
+                        errors++;
+                    }
+                    var _valid0 = _errs11 === errors;
+                    if (_valid0) {
+                        valid5 = true;
+                        passing0 = 0;
+                    }
+                    const _errs13 = errors;
+                    if (Array.isArray(data3)) {
+                        if (data3.length > 10) {
+                            const err13 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
+                            if (vErrors === null) {
+                                vErrors = [err13];
+                            }
+                            else {
+                                vErrors.push(err13);
+                            }
+                            errors++;
+                        }
+                        if (data3.length < 2) {
+                            const err14 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
+                            if (vErrors === null) {
+                                vErrors = [err14];
+                            }
+                            else {
+                                vErrors.push(err14);
+                            }
+                            errors++;
+                        }
+                        const len1 = data3.length;
+                        for (let i1 = 0; i1 < len1; i1++) {
+                            let data4 = data3[i1];
+                            if (typeof data4 === "string") {
+                                if (func1(data4) < 1) {
+                                    const err15 = { instancePath: instancePath + "/polynomial/of/" + i1, schemaPath: "#/properties/polynomial/properties/of/oneOf/1/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1].items, data: data4 };
+                                    if (vErrors === null) {
+                                        vErrors = [err15];
+                                    }
+                                    else {
+                                        vErrors.push(err15);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err16 = { instancePath: instancePath + "/polynomial/of/" + i1, schemaPath: "#/properties/polynomial/properties/of/oneOf/1/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.polynomial.properties.of.oneOf[1].items.type, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1].items, data: data4 };
+                                if (vErrors === null) {
+                                    vErrors = [err16];
+                                }
+                                else {
+                                    vErrors.push(err16);
+                                }
+                                errors++;
+                            }
+                        }
+                        let i2 = data3.length;
+                        let j0;
+                        if (i2 > 1) {
+                            const indices0 = {};
+                            for (; i2--;) {
+                                let item0 = data3[i2];
+                                if (typeof item0 !== "string") {
+                                    continue;
+                                }
+                                if (typeof indices0[item0] == "number") {
+                                    j0 = indices0[item0];
+                                    const err17 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/uniqueItems", keyword: "uniqueItems", params: { i: i2, j: j0 }, message: "must NOT have duplicate items (items ## " + j0 + " and " + i2 + " are identical)", schema: true, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
+                                    if (vErrors === null) {
+                                        vErrors = [err17];
+                                    }
+                                    else {
+                                        vErrors.push(err17);
+                                    }
+                                    errors++;
+                                    break;
+                                }
+                                indices0[item0] = i2;
+                            }
+                        }
+                    }
+                    else {
+                        const err18 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.polynomial.properties.of.oneOf[1].type, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err18];
+                        }
+                        else {
+                            vErrors.push(err18);
+                        }
+                        errors++;
+                    }
+                    var _valid0 = _errs13 === errors;
+                    if (_valid0 && valid5) {
+                        valid5 = false;
+                        passing0 = [passing0, 1];
+                    }
+                    else {
+                        if (_valid0) {
+                            valid5 = true;
+                            passing0 = 1;
+                        }
+                    }
+                    if (!valid5) {
+                        const err19 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.polynomial.properties.of.oneOf, parentSchema: schema23.properties.polynomial.properties.of, data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
+                        }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs10;
+                        if (vErrors !== null) {
+                            if (_errs10) {
+                                vErrors.length = _errs10;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data2.degree !== undefined) {
+                    let data5 = data2.degree;
+                    if (!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))) {
+                        const err20 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.polynomial.properties.degree.type, parentSchema: schema23.properties.polynomial.properties.degree, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err20];
+                        }
+                        else {
+                            vErrors.push(err20);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data5 == "number") && (isFinite(data5))) {
+                        if (data5 > 30 || isNaN(data5)) {
+                            const err21 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 30 }, message: "must be <= 30", schema: 30, parentSchema: schema23.properties.polynomial.properties.degree, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err21];
+                            }
+                            else {
+                                vErrors.push(err21);
+                            }
+                            errors++;
+                        }
+                        if (data5 < 1 || isNaN(data5)) {
+                            const err22 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.polynomial.properties.degree, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err22];
+                            }
+                            else {
+                                vErrors.push(err22);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data2.shift !== undefined) {
+                    let data6 = data2.shift;
+                    const _errs20 = errors;
+                    let valid9 = false;
+                    let passing1 = null;
+                    const _errs21 = errors;
+                    if (!((typeof data6 == "number") && (isFinite(data6)))) {
+                        const err23 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.shift.oneOf[0].type, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[0], data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err23];
+                        }
+                        else {
+                            vErrors.push(err23);
+                        }
+                        errors++;
+                    }
+                    var _valid1 = _errs21 === errors;
+                    if (_valid1) {
+                        valid9 = true;
+                        passing1 = 0;
+                    }
+                    const _errs23 = errors;
+                    if (Array.isArray(data6)) {
+                        if (data6.length > 10) {
+                            const err24 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1], data: data6 };
+                            if (vErrors === null) {
+                                vErrors = [err24];
+                            }
+                            else {
+                                vErrors.push(err24);
+                            }
+                            errors++;
+                        }
+                        if (data6.length < 2) {
+                            const err25 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1], data: data6 };
+                            if (vErrors === null) {
+                                vErrors = [err25];
+                            }
+                            else {
+                                vErrors.push(err25);
+                            }
+                            errors++;
+                        }
+                        const len2 = data6.length;
+                        for (let i3 = 0; i3 < len2; i3++) {
+                            let data7 = data6[i3];
+                            if (!((typeof data7 == "number") && (isFinite(data7)))) {
+                                const err26 = { instancePath: instancePath + "/polynomial/shift/" + i3, schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.shift.oneOf[1].items.type, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1].items, data: data7 };
+                                if (vErrors === null) {
+                                    vErrors = [err26];
+                                }
+                                else {
+                                    vErrors.push(err26);
+                                }
+                                errors++;
+                            }
+                        }
+                    }
+                    else {
+                        const err27 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.polynomial.properties.shift.oneOf[1].type, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1], data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err27];
+                        }
+                        else {
+                            vErrors.push(err27);
+                        }
+                        errors++;
+                    }
+                    var _valid1 = _errs23 === errors;
+                    if (_valid1 && valid9) {
+                        valid9 = false;
+                        passing1 = [passing1, 1];
+                    }
+                    else {
+                        if (_valid1) {
+                            valid9 = true;
+                            passing1 = 1;
+                        }
+                    }
+                    if (!valid9) {
+                        const err28 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf", keyword: "oneOf", params: { passingSchemas: passing1 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.polynomial.properties.shift.oneOf, parentSchema: schema23.properties.polynomial.properties.shift, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err28];
+                        }
+                        else {
+                            vErrors.push(err28);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs20;
+                        if (vErrors !== null) {
+                            if (_errs20) {
+                                vErrors.length = _errs20;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data2.scale !== undefined) {
+                    let data8 = data2.scale;
+                    const _errs28 = errors;
+                    let valid12 = false;
+                    let passing2 = null;
+                    const _errs29 = errors;
+                    if ((typeof data8 == "number") && (isFinite(data8))) {
+                        if (data8 <= 0 || isNaN(data8)) {
+                            const err29 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/0/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[0], data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err29];
+                            }
+                            else {
+                                vErrors.push(err29);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err30 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.scale.oneOf[0].type, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[0], data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err30];
+                        }
+                        else {
+                            vErrors.push(err30);
+                        }
+                        errors++;
+                    }
+                    var _valid2 = _errs29 === errors;
+                    if (_valid2) {
+                        valid12 = true;
+                        passing2 = 0;
+                    }
+                    const _errs31 = errors;
+                    if (Array.isArray(data8)) {
+                        if (data8.length > 10) {
+                            const err31 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1], data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err31];
+                            }
+                            else {
+                                vErrors.push(err31);
+                            }
+                            errors++;
+                        }
+                        if (data8.length < 2) {
+                            const err32 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1], data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err32];
+                            }
+                            else {
+                                vErrors.push(err32);
+                            }
+                            errors++;
+                        }
+                        const len3 = data8.length;
+                        for (let i4 = 0; i4 < len3; i4++) {
+                            let data9 = data8[i4];
+                            if ((typeof data9 == "number") && (isFinite(data9))) {
+                                if (data9 <= 0 || isNaN(data9)) {
+                                    const err33 = { instancePath: instancePath + "/polynomial/scale/" + i4, schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/items/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1].items, data: data9 };
+                                    if (vErrors === null) {
+                                        vErrors = [err33];
+                                    }
+                                    else {
+                                        vErrors.push(err33);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err34 = { instancePath: instancePath + "/polynomial/scale/" + i4, schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.scale.oneOf[1].items.type, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1].items, data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err34];
+                                }
+                                else {
+                                    vErrors.push(err34);
+                                }
+                                errors++;
+                            }
+                        }
+                    }
+                    else {
+                        const err35 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.polynomial.properties.scale.oneOf[1].type, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1], data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err35];
+                        }
+                        else {
+                            vErrors.push(err35);
+                        }
+                        errors++;
+                    }
+                    var _valid2 = _errs31 === errors;
+                    if (_valid2 && valid12) {
+                        valid12 = false;
+                        passing2 = [passing2, 1];
+                    }
+                    else {
+                        if (_valid2) {
+                            valid12 = true;
+                            passing2 = 1;
+                        }
+                    }
+                    if (!valid12) {
+                        const err36 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf", keyword: "oneOf", params: { passingSchemas: passing2 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.polynomial.properties.scale.oneOf, parentSchema: schema23.properties.polynomial.properties.scale, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err36];
+                        }
+                        else {
+                            vErrors.push(err36);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs28;
+                        if (vErrors !== null) {
+                            if (_errs28) {
+                                vErrors.length = _errs28;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data2.transform !== undefined) {
+                    let data10 = data2.transform;
+                    if (!((((data10 === "log") || (data10 === "log1p")) || (data10 === "sqrt")) || (data10 === "standardise"))) {
+                        const err37 = { instancePath: instancePath + "/polynomial/transform", schemaPath: "#/properties/polynomial/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.polynomial.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.polynomial.properties.transform.enum, parentSchema: schema23.properties.polynomial.properties.transform, data: data10 };
+                        if (vErrors === null) {
+                            vErrors = [err37];
+                        }
+                        else {
+                            vErrors.push(err37);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err38 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.polynomial.type, parentSchema: schema23.properties.polynomial, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err38];
+                }
+                else {
+                    vErrors.push(err38);
+                }
+                errors++;
+            }
+        }
+        if (data.rbf !== undefined) {
+            let data11 = data.rbf;
+            if (data11 && typeof data11 == "object" && !Array.isArray(data11)) {
+                if (data11.of === undefined) {
+                    const err39 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data11 };
+                    if (vErrors === null) {
+                        vErrors = [err39];
+                    }
+                    else {
+                        vErrors.push(err39);
+                    }
+                    errors++;
+                }
+                if (data11.centers === undefined) {
+                    const err40 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "centers" }, message: "must have required property '" + "centers" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data11 };
+                    if (vErrors === null) {
+                        vErrors = [err40];
+                    }
+                    else {
+                        vErrors.push(err40);
+                    }
+                    errors++;
+                }
+                if (data11.width === undefined) {
+                    const err41 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "width" }, message: "must have required property '" + "width" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data11 };
+                    if (vErrors === null) {
+                        vErrors = [err41];
+                    }
+                    else {
+                        vErrors.push(err41);
+                    }
+                    errors++;
+                }
+                for (const key2 in data11) {
+                    if (!((((key2 === "of") || (key2 === "centers")) || (key2 === "width")) || (key2 === "transform"))) {
+                        const err42 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.rbf, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err42];
+                        }
+                        else {
+                            vErrors.push(err42);
+                        }
+                        errors++;
+                    }
+                }
+                if (data11.of !== undefined) {
+                    let data12 = data11.of;
+                    const _errs40 = errors;
+                    let valid16 = false;
+                    let passing3 = null;
+                    const _errs41 = errors;
+                    if (typeof data12 === "string") {
+                        if (func1(data12) < 1) {
+                            const err43 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/0/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.rbf.properties.of.oneOf[0], data: data12 };
+                            if (vErrors === null) {
+                                vErrors = [err43];
+                            }
+                            else {
+                                vErrors.push(err43);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err44 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.rbf.properties.of.oneOf[0].type, parentSchema: schema23.properties.rbf.properties.of.oneOf[0], data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err44];
+                        }
+                        else {
+                            vErrors.push(err44);
+                        }
+                        errors++;
+                    }
+                    var _valid3 = _errs41 === errors;
+                    if (_valid3) {
+                        valid16 = true;
+                        passing3 = 0;
+                    }
+                    const _errs43 = errors;
+                    if (Array.isArray(data12)) {
+                        if (data12.length > 10) {
+                            const err45 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
+                            if (vErrors === null) {
+                                vErrors = [err45];
+                            }
+                            else {
+                                vErrors.push(err45);
+                            }
+                            errors++;
+                        }
+                        if (data12.length < 2) {
+                            const err46 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
+                            if (vErrors === null) {
+                                vErrors = [err46];
+                            }
+                            else {
+                                vErrors.push(err46);
+                            }
+                            errors++;
+                        }
+                        const len4 = data12.length;
+                        for (let i5 = 0; i5 < len4; i5++) {
+                            let data13 = data12[i5];
+                            if (typeof data13 === "string") {
+                                if (func1(data13) < 1) {
+                                    const err47 = { instancePath: instancePath + "/rbf/of/" + i5, schemaPath: "#/properties/rbf/properties/of/oneOf/1/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.rbf.properties.of.oneOf[1].items, data: data13 };
+                                    if (vErrors === null) {
+                                        vErrors = [err47];
+                                    }
+                                    else {
+                                        vErrors.push(err47);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err48 = { instancePath: instancePath + "/rbf/of/" + i5, schemaPath: "#/properties/rbf/properties/of/oneOf/1/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.rbf.properties.of.oneOf[1].items.type, parentSchema: schema23.properties.rbf.properties.of.oneOf[1].items, data: data13 };
+                                if (vErrors === null) {
+                                    vErrors = [err48];
+                                }
+                                else {
+                                    vErrors.push(err48);
+                                }
+                                errors++;
+                            }
+                        }
+                        let i6 = data12.length;
+                        let j1;
+                        if (i6 > 1) {
+                            const indices1 = {};
+                            for (; i6--;) {
+                                let item1 = data12[i6];
+                                if (typeof item1 !== "string") {
+                                    continue;
+                                }
+                                if (typeof indices1[item1] == "number") {
+                                    j1 = indices1[item1];
+                                    const err49 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/uniqueItems", keyword: "uniqueItems", params: { i: i6, j: j1 }, message: "must NOT have duplicate items (items ## " + j1 + " and " + i6 + " are identical)", schema: true, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
+                                    if (vErrors === null) {
+                                        vErrors = [err49];
+                                    }
+                                    else {
+                                        vErrors.push(err49);
+                                    }
+                                    errors++;
+                                    break;
+                                }
+                                indices1[item1] = i6;
+                            }
+                        }
+                    }
+                    else {
+                        const err50 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.of.oneOf[1].type, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err50];
+                        }
+                        else {
+                            vErrors.push(err50);
+                        }
+                        errors++;
+                    }
+                    var _valid3 = _errs43 === errors;
+                    if (_valid3 && valid16) {
+                        valid16 = false;
+                        passing3 = [passing3, 1];
+                    }
+                    else {
+                        if (_valid3) {
+                            valid16 = true;
+                            passing3 = 1;
+                        }
+                    }
+                    if (!valid16) {
+                        const err51 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf", keyword: "oneOf", params: { passingSchemas: passing3 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.rbf.properties.of.oneOf, parentSchema: schema23.properties.rbf.properties.of, data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err51];
+                        }
+                        else {
+                            vErrors.push(err51);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs40;
+                        if (vErrors !== null) {
+                            if (_errs40) {
+                                vErrors.length = _errs40;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data11.centers !== undefined) {
+                    let data14 = data11.centers;
+                    const _errs48 = errors;
+                    let valid20 = false;
+                    let passing4 = null;
+                    const _errs49 = errors;
+                    if (!(validate77(data14, { instancePath: instancePath + "/rbf/centers", parentData: data11, parentDataProperty: "centers", rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+                        errors = vErrors.length;
+                    }
+                    else {
+                        var items4 = validate77.evaluated.items;
+                    }
+                    var _valid4 = _errs49 === errors;
+                    if (_valid4) {
+                        valid20 = true;
+                        passing4 = 0;
+                    }
+                    const _errs50 = errors;
+                    if (Array.isArray(data14)) {
+                        if (data14.length > 10000) {
+                            const err52 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10000 }, message: "must NOT have more than 10000 items", schema: 10000, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1], data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err52];
+                            }
+                            else {
+                                vErrors.push(err52);
+                            }
+                            errors++;
+                        }
+                        if (data14.length < 1) {
+                            const err53 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/1/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1], data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err53];
+                            }
+                            else {
+                                vErrors.push(err53);
+                            }
+                            errors++;
+                        }
+                        const len5 = data14.length;
+                        for (let i7 = 0; i7 < len5; i7++) {
+                            let data15 = data14[i7];
+                            if (Array.isArray(data15)) {
+                                if (data15.length > 10) {
+                                    const err54 = { instancePath: instancePath + "/rbf/centers/" + i7, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items, data: data15 };
+                                    if (vErrors === null) {
+                                        vErrors = [err54];
+                                    }
+                                    else {
+                                        vErrors.push(err54);
+                                    }
+                                    errors++;
+                                }
+                                if (data15.length < 2) {
+                                    const err55 = { instancePath: instancePath + "/rbf/centers/" + i7, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items, data: data15 };
+                                    if (vErrors === null) {
+                                        vErrors = [err55];
+                                    }
+                                    else {
+                                        vErrors.push(err55);
+                                    }
+                                    errors++;
+                                }
+                                const len6 = data15.length;
+                                for (let i8 = 0; i8 < len6; i8++) {
+                                    let data16 = data15[i8];
+                                    if (!((typeof data16 == "number") && (isFinite(data16)))) {
+                                        const err56 = { instancePath: instancePath + "/rbf/centers/" + i7 + "/" + i8, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.centers.oneOf[1].items.items.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items.items, data: data16 };
+                                        if (vErrors === null) {
+                                            vErrors = [err56];
+                                        }
+                                        else {
+                                            vErrors.push(err56);
+                                        }
+                                        errors++;
+                                    }
+                                }
+                            }
+                            else {
+                                const err57 = { instancePath: instancePath + "/rbf/centers/" + i7, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.centers.oneOf[1].items.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items, data: data15 };
+                                if (vErrors === null) {
+                                    vErrors = [err57];
+                                }
+                                else {
+                                    vErrors.push(err57);
+                                }
+                                errors++;
+                            }
+                        }
+                    }
+                    else {
+                        const err58 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.centers.oneOf[1].type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1], data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err58];
+                        }
+                        else {
+                            vErrors.push(err58);
+                        }
+                        errors++;
+                    }
+                    var _valid4 = _errs50 === errors;
+                    if (_valid4 && valid20) {
+                        valid20 = false;
+                        passing4 = [passing4, 1];
+                    }
+                    else {
+                        if (_valid4) {
+                            valid20 = true;
+                            passing4 = 1;
+                            if (items4 !== true) {
+                                items4 = true;
+                            }
+                        }
+                        const _errs56 = errors;
+                        if (Array.isArray(data14)) {
+                            if (data14.length > 10) {
+                                const err59 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2], data: data14 };
+                                if (vErrors === null) {
+                                    vErrors = [err59];
+                                }
+                                else {
+                                    vErrors.push(err59);
+                                }
+                                errors++;
+                            }
+                            if (data14.length < 2) {
+                                const err60 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2], data: data14 };
+                                if (vErrors === null) {
+                                    vErrors = [err60];
+                                }
+                                else {
+                                    vErrors.push(err60);
+                                }
+                                errors++;
+                            }
+                            const len7 = data14.length;
+                            for (let i9 = 0; i9 < len7; i9++) {
+                                let data17 = data14[i9];
+                                if (data17 && typeof data17 == "object" && !Array.isArray(data17)) {
+                                    if (data17.from === undefined) {
+                                        const err61 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.required, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
+                                        if (vErrors === null) {
+                                            vErrors = [err61];
+                                        }
+                                        else {
+                                            vErrors.push(err61);
+                                        }
+                                        errors++;
+                                    }
+                                    if (data17.to === undefined) {
+                                        const err62 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.required, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
+                                        if (vErrors === null) {
+                                            vErrors = [err62];
+                                        }
+                                        else {
+                                            vErrors.push(err62);
+                                        }
+                                        errors++;
+                                    }
+                                    if (data17.count === undefined) {
+                                        const err63 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.required, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
+                                        if (vErrors === null) {
+                                            vErrors = [err63];
+                                        }
+                                        else {
+                                            vErrors.push(err63);
+                                        }
+                                        errors++;
+                                    }
+                                    for (const key3 in data17) {
+                                        if (!(((key3 === "from") || (key3 === "to")) || (key3 === "count"))) {
+                                            const err64 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
+                                            if (vErrors === null) {
+                                                vErrors = [err64];
+                                            }
+                                            else {
+                                                vErrors.push(err64);
+                                            }
+                                            errors++;
+                                        }
+                                    }
+                                    if (data17.from !== undefined) {
+                                        let data18 = data17.from;
+                                        if (!((typeof data18 == "number") && (isFinite(data18)))) {
+                                            const err65 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/from", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from, data: data18 };
+                                            if (vErrors === null) {
+                                                vErrors = [err65];
+                                            }
+                                            else {
+                                                vErrors.push(err65);
+                                            }
+                                            errors++;
+                                        }
+                                    }
+                                    if (data17.to !== undefined) {
+                                        let data19 = data17.to;
+                                        if (!((typeof data19 == "number") && (isFinite(data19)))) {
+                                            const err66 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/to", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to, data: data19 };
+                                            if (vErrors === null) {
+                                                vErrors = [err66];
+                                            }
+                                            else {
+                                                vErrors.push(err66);
+                                            }
+                                            errors++;
+                                        }
+                                    }
+                                    if (data17.count !== undefined) {
+                                        let data20 = data17.count;
+                                        if (!(((typeof data20 == "number") && (!(data20 % 1) && !isNaN(data20))) && (isFinite(data20)))) {
+                                            const err67 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/count", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count, data: data20 };
+                                            if (vErrors === null) {
+                                                vErrors = [err67];
+                                            }
+                                            else {
+                                                vErrors.push(err67);
+                                            }
+                                            errors++;
+                                        }
+                                        if ((typeof data20 == "number") && (isFinite(data20))) {
+                                            if (data20 > 100 || isNaN(data20)) {
+                                                const err68 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/count", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 100 }, message: "must be <= 100", schema: 100, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count, data: data20 };
+                                                if (vErrors === null) {
+                                                    vErrors = [err68];
+                                                }
+                                                else {
+                                                    vErrors.push(err68);
+                                                }
+                                                errors++;
+                                            }
+                                            if (data20 < 1 || isNaN(data20)) {
+                                                const err69 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/count", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count, data: data20 };
+                                                if (vErrors === null) {
+                                                    vErrors = [err69];
+                                                }
+                                                else {
+                                                    vErrors.push(err69);
+                                                }
+                                                errors++;
+                                            }
+                                        }
+                                    }
+                                }
+                                else {
+                                    const err70 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
+                                    if (vErrors === null) {
+                                        vErrors = [err70];
+                                    }
+                                    else {
+                                        vErrors.push(err70);
+                                    }
+                                    errors++;
+                                }
+                            }
+                        }
+                        else {
+                            const err71 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.centers.oneOf[2].type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2], data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err71];
+                            }
+                            else {
+                                vErrors.push(err71);
+                            }
+                            errors++;
+                        }
+                        var _valid4 = _errs56 === errors;
+                        if (_valid4 && valid20) {
+                            valid20 = false;
+                            passing4 = [passing4, 2];
+                        }
+                        else {
+                            if (_valid4) {
+                                valid20 = true;
+                                passing4 = 2;
+                                if (items4 !== true) {
+                                    items4 = true;
+                                }
+                            }
+                        }
+                    }
+                    if (!valid20) {
+                        const err72 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf", keyword: "oneOf", params: { passingSchemas: passing4 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.rbf.properties.centers.oneOf, parentSchema: schema23.properties.rbf.properties.centers, data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err72];
+                        }
+                        else {
+                            vErrors.push(err72);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs48;
+                        if (vErrors !== null) {
+                            if (_errs48) {
+                                vErrors.length = _errs48;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data11.width !== undefined) {
+                    let data21 = data11.width;
+                    if ((typeof data21 == "number") && (isFinite(data21))) {
+                        if (data21 <= 0 || isNaN(data21)) {
+                            const err73 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.rbf.properties.width, data: data21 };
+                            if (vErrors === null) {
+                                vErrors = [err73];
+                            }
+                            else {
+                                vErrors.push(err73);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err74 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.width.type, parentSchema: schema23.properties.rbf.properties.width, data: data21 };
+                        if (vErrors === null) {
+                            vErrors = [err74];
+                        }
+                        else {
+                            vErrors.push(err74);
+                        }
+                        errors++;
+                    }
+                }
+                if (data11.transform !== undefined) {
+                    let data22 = data11.transform;
+                    if (!((((data22 === "log") || (data22 === "log1p")) || (data22 === "sqrt")) || (data22 === "standardise"))) {
+                        const err75 = { instancePath: instancePath + "/rbf/transform", schemaPath: "#/properties/rbf/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.rbf.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.rbf.properties.transform.enum, parentSchema: schema23.properties.rbf.properties.transform, data: data22 };
+                        if (vErrors === null) {
+                            vErrors = [err75];
+                        }
+                        else {
+                            vErrors.push(err75);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err76 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.rbf.type, parentSchema: schema23.properties.rbf, data: data11 };
+                if (vErrors === null) {
+                    vErrors = [err76];
+                }
+                else {
+                    vErrors.push(err76);
+                }
+                errors++;
+            }
+        }
+        if (data.fourier !== undefined) {
+            let data23 = data.fourier;
+            if (data23 && typeof data23 == "object" && !Array.isArray(data23)) {
+                if (data23.of === undefined) {
+                    const err77 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.fourier.required, parentSchema: schema23.properties.fourier, data: data23 };
+                    if (vErrors === null) {
+                        vErrors = [err77];
+                    }
+                    else {
+                        vErrors.push(err77);
+                    }
+                    errors++;
+                }
+                if (data23.period === undefined) {
+                    const err78 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/required", keyword: "required", params: { missingProperty: "period" }, message: "must have required property '" + "period" + "'", schema: schema23.properties.fourier.required, parentSchema: schema23.properties.fourier, data: data23 };
+                    if (vErrors === null) {
+                        vErrors = [err78];
+                    }
+                    else {
+                        vErrors.push(err78);
+                    }
+                    errors++;
+                }
+                if (data23.harmonics === undefined) {
+                    const err79 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/required", keyword: "required", params: { missingProperty: "harmonics" }, message: "must have required property '" + "harmonics" + "'", schema: schema23.properties.fourier.required, parentSchema: schema23.properties.fourier, data: data23 };
+                    if (vErrors === null) {
+                        vErrors = [err79];
+                    }
+                    else {
+                        vErrors.push(err79);
+                    }
+                    errors++;
+                }
+                for (const key4 in data23) {
+                    if (!((((key4 === "of") || (key4 === "period")) || (key4 === "harmonics")) || (key4 === "transform"))) {
+                        const err80 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.fourier, data: data23 };
+                        if (vErrors === null) {
+                            vErrors = [err80];
+                        }
+                        else {
+                            vErrors.push(err80);
+                        }
+                        errors++;
+                    }
+                }
+                if (data23.of !== undefined) {
+                    let data24 = data23.of;
+                    if (typeof data24 === "string") {
+                        if (func1(data24) < 1) {
+                            const err81 = { instancePath: instancePath + "/fourier/of", schemaPath: "#/properties/fourier/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.fourier.properties.of, data: data24 };
+                            if (vErrors === null) {
+                                vErrors = [err81];
+                            }
+                            else {
+                                vErrors.push(err81);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err82 = { instancePath: instancePath + "/fourier/of", schemaPath: "#/properties/fourier/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.fourier.properties.of.type, parentSchema: schema23.properties.fourier.properties.of, data: data24 };
+                        if (vErrors === null) {
+                            vErrors = [err82];
+                        }
+                        else {
+                            vErrors.push(err82);
+                        }
+                        errors++;
+                    }
+                }
+                if (data23.period !== undefined) {
+                    let data25 = data23.period;
+                    if ((typeof data25 == "number") && (isFinite(data25))) {
+                        if (data25 <= 0 || isNaN(data25)) {
+                            const err83 = { instancePath: instancePath + "/fourier/period", schemaPath: "#/properties/fourier/properties/period/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.fourier.properties.period, data: data25 };
+                            if (vErrors === null) {
+                                vErrors = [err83];
+                            }
+                            else {
+                                vErrors.push(err83);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err84 = { instancePath: instancePath + "/fourier/period", schemaPath: "#/properties/fourier/properties/period/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.fourier.properties.period.type, parentSchema: schema23.properties.fourier.properties.period, data: data25 };
+                        if (vErrors === null) {
+                            vErrors = [err84];
+                        }
+                        else {
+                            vErrors.push(err84);
+                        }
+                        errors++;
+                    }
+                }
+                if (data23.harmonics !== undefined) {
+                    let data26 = data23.harmonics;
+                    if (!(((typeof data26 == "number") && (!(data26 % 1) && !isNaN(data26))) && (isFinite(data26)))) {
+                        const err85 = { instancePath: instancePath + "/fourier/harmonics", schemaPath: "#/properties/fourier/properties/harmonics/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.fourier.properties.harmonics.type, parentSchema: schema23.properties.fourier.properties.harmonics, data: data26 };
+                        if (vErrors === null) {
+                            vErrors = [err85];
+                        }
+                        else {
+                            vErrors.push(err85);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data26 == "number") && (isFinite(data26))) {
+                        if (data26 > 50 || isNaN(data26)) {
+                            const err86 = { instancePath: instancePath + "/fourier/harmonics", schemaPath: "#/properties/fourier/properties/harmonics/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema23.properties.fourier.properties.harmonics, data: data26 };
+                            if (vErrors === null) {
+                                vErrors = [err86];
+                            }
+                            else {
+                                vErrors.push(err86);
+                            }
+                            errors++;
+                        }
+                        if (data26 < 1 || isNaN(data26)) {
+                            const err87 = { instancePath: instancePath + "/fourier/harmonics", schemaPath: "#/properties/fourier/properties/harmonics/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.fourier.properties.harmonics, data: data26 };
+                            if (vErrors === null) {
+                                vErrors = [err87];
+                            }
+                            else {
+                                vErrors.push(err87);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data23.transform !== undefined) {
+                    let data27 = data23.transform;
+                    if (!((((data27 === "log") || (data27 === "log1p")) || (data27 === "sqrt")) || (data27 === "standardise"))) {
+                        const err88 = { instancePath: instancePath + "/fourier/transform", schemaPath: "#/properties/fourier/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.fourier.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.fourier.properties.transform.enum, parentSchema: schema23.properties.fourier.properties.transform, data: data27 };
+                        if (vErrors === null) {
+                            vErrors = [err88];
+                        }
+                        else {
+                            vErrors.push(err88);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err89 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.fourier.type, parentSchema: schema23.properties.fourier, data: data23 };
+                if (vErrors === null) {
+                    vErrors = [err89];
+                }
+                else {
+                    vErrors.push(err89);
+                }
+                errors++;
+            }
+        }
+        if (data.spline !== undefined) {
+            let data28 = data.spline;
+            if (data28 && typeof data28 == "object" && !Array.isArray(data28)) {
+                if (data28.of === undefined) {
+                    const err90 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.spline.required, parentSchema: schema23.properties.spline, data: data28 };
+                    if (vErrors === null) {
+                        vErrors = [err90];
+                    }
+                    else {
+                        vErrors.push(err90);
+                    }
+                    errors++;
+                }
+                if (data28.knots === undefined) {
+                    const err91 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/required", keyword: "required", params: { missingProperty: "knots" }, message: "must have required property '" + "knots" + "'", schema: schema23.properties.spline.required, parentSchema: schema23.properties.spline, data: data28 };
+                    if (vErrors === null) {
+                        vErrors = [err91];
+                    }
+                    else {
+                        vErrors.push(err91);
+                    }
+                    errors++;
+                }
+                for (const key5 in data28) {
+                    if (!(((((key5 === "of") || (key5 === "knots")) || (key5 === "degree")) || (key5 === "natural")) || (key5 === "transform"))) {
+                        const err92 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.spline, data: data28 };
+                        if (vErrors === null) {
+                            vErrors = [err92];
+                        }
+                        else {
+                            vErrors.push(err92);
+                        }
+                        errors++;
+                    }
+                }
+                if (data28.of !== undefined) {
+                    let data29 = data28.of;
+                    if (typeof data29 === "string") {
+                        if (func1(data29) < 1) {
+                            const err93 = { instancePath: instancePath + "/spline/of", schemaPath: "#/properties/spline/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.spline.properties.of, data: data29 };
+                            if (vErrors === null) {
+                                vErrors = [err93];
+                            }
+                            else {
+                                vErrors.push(err93);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err94 = { instancePath: instancePath + "/spline/of", schemaPath: "#/properties/spline/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.spline.properties.of.type, parentSchema: schema23.properties.spline.properties.of, data: data29 };
+                        if (vErrors === null) {
+                            vErrors = [err94];
+                        }
+                        else {
+                            vErrors.push(err94);
+                        }
+                        errors++;
+                    }
+                }
+                if (data28.knots !== undefined) {
+                    let data30 = data28.knots;
+                    const _errs86 = errors;
+                    let valid30 = false;
+                    let passing5 = null;
+                    const _errs87 = errors;
+                    if (Array.isArray(data30)) {
+                        if (data30.length > 100) {
+                            const err95 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/0/maxItems", keyword: "maxItems", params: { limit: 100 }, message: "must NOT have more than 100 items", schema: 100, parentSchema: schema23.properties.spline.properties.knots.oneOf[0], data: data30 };
+                            if (vErrors === null) {
+                                vErrors = [err95];
+                            }
+                            else {
+                                vErrors.push(err95);
+                            }
+                            errors++;
+                        }
+                        if (data30.length < 1) {
+                            const err96 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.spline.properties.knots.oneOf[0], data: data30 };
+                            if (vErrors === null) {
+                                vErrors = [err96];
+                            }
+                            else {
+                                vErrors.push(err96);
+                            }
+                            errors++;
+                        }
+                        const len8 = data30.length;
+                        for (let i10 = 0; i10 < len8; i10++) {
+                            let data31 = data30[i10];
+                            if (!((typeof data31 == "number") && (isFinite(data31)))) {
+                                const err97 = { instancePath: instancePath + "/spline/knots/" + i10, schemaPath: "#/properties/spline/properties/knots/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.spline.properties.knots.oneOf[0].items.type, parentSchema: schema23.properties.spline.properties.knots.oneOf[0].items, data: data31 };
+                                if (vErrors === null) {
+                                    vErrors = [err97];
+                                }
+                                else {
+                                    vErrors.push(err97);
+                                }
+                                errors++;
+                            }
+                        }
+                    }
+                    else {
+                        const err98 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.spline.properties.knots.oneOf[0].type, parentSchema: schema23.properties.spline.properties.knots.oneOf[0], data: data30 };
+                        if (vErrors === null) {
+                            vErrors = [err98];
+                        }
+                        else {
+                            vErrors.push(err98);
+                        }
+                        errors++;
+                    }
+                    var _valid5 = _errs87 === errors;
+                    if (_valid5) {
+                        valid30 = true;
+                        passing5 = 0;
+                    }
+                    const _errs91 = errors;
+                    if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
+                        if (data30.count === undefined) {
+                            const err99 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema23.properties.spline.properties.knots.oneOf[1].required, parentSchema: schema23.properties.spline.properties.knots.oneOf[1], data: data30 };
+                            if (vErrors === null) {
+                                vErrors = [err99];
+                            }
+                            else {
+                                vErrors.push(err99);
+                            }
+                            errors++;
+                        }
+                        for (const key6 in data30) {
+                            if (!(key6 === "count")) {
+                                const err100 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.spline.properties.knots.oneOf[1], data: data30 };
+                                if (vErrors === null) {
+                                    vErrors = [err100];
+                                }
+                                else {
+                                    vErrors.push(err100);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data30.count !== undefined) {
+                            let data32 = data30.count;
+                            if (!(((typeof data32 == "number") && (!(data32 % 1) && !isNaN(data32))) && (isFinite(data32)))) {
+                                const err101 = { instancePath: instancePath + "/spline/knots/count", schemaPath: "#/properties/spline/properties/knots/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.spline.properties.knots.oneOf[1].properties.count.type, parentSchema: schema23.properties.spline.properties.knots.oneOf[1].properties.count, data: data32 };
+                                if (vErrors === null) {
+                                    vErrors = [err101];
+                                }
+                                else {
+                                    vErrors.push(err101);
+                                }
+                                errors++;
+                            }
+                            if ((typeof data32 == "number") && (isFinite(data32))) {
+                                if (data32 > 100 || isNaN(data32)) {
+                                    const err102 = { instancePath: instancePath + "/spline/knots/count", schemaPath: "#/properties/spline/properties/knots/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 100 }, message: "must be <= 100", schema: 100, parentSchema: schema23.properties.spline.properties.knots.oneOf[1].properties.count, data: data32 };
+                                    if (vErrors === null) {
+                                        vErrors = [err102];
+                                    }
+                                    else {
+                                        vErrors.push(err102);
+                                    }
+                                    errors++;
+                                }
+                                if (data32 < 1 || isNaN(data32)) {
+                                    const err103 = { instancePath: instancePath + "/spline/knots/count", schemaPath: "#/properties/spline/properties/knots/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.spline.properties.knots.oneOf[1].properties.count, data: data32 };
+                                    if (vErrors === null) {
+                                        vErrors = [err103];
+                                    }
+                                    else {
+                                        vErrors.push(err103);
+                                    }
+                                    errors++;
+                                }
+                            }
+                        }
+                    }
+                    else {
+                        const err104 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.spline.properties.knots.oneOf[1].type, parentSchema: schema23.properties.spline.properties.knots.oneOf[1], data: data30 };
+                        if (vErrors === null) {
+                            vErrors = [err104];
+                        }
+                        else {
+                            vErrors.push(err104);
+                        }
+                        errors++;
+                    }
+                    var _valid5 = _errs91 === errors;
+                    if (_valid5 && valid30) {
+                        valid30 = false;
+                        passing5 = [passing5, 1];
+                    }
+                    else {
+                        if (_valid5) {
+                            valid30 = true;
+                            passing5 = 1;
+                        }
+                    }
+                    if (!valid30) {
+                        const err105 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf", keyword: "oneOf", params: { passingSchemas: passing5 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.spline.properties.knots.oneOf, parentSchema: schema23.properties.spline.properties.knots, data: data30 };
+                        if (vErrors === null) {
+                            vErrors = [err105];
+                        }
+                        else {
+                            vErrors.push(err105);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs86;
+                        if (vErrors !== null) {
+                            if (_errs86) {
+                                vErrors.length = _errs86;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data28.degree !== undefined) {
+                    let data33 = data28.degree;
+                    if (!(((typeof data33 == "number") && (!(data33 % 1) && !isNaN(data33))) && (isFinite(data33)))) {
+                        const err106 = { instancePath: instancePath + "/spline/degree", schemaPath: "#/properties/spline/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.spline.properties.degree.type, parentSchema: schema23.properties.spline.properties.degree, data: data33 };
+                        if (vErrors === null) {
+                            vErrors = [err106];
+                        }
+                        else {
+                            vErrors.push(err106);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data33 == "number") && (isFinite(data33))) {
+                        if (data33 > 5 || isNaN(data33)) {
+                            const err107 = { instancePath: instancePath + "/spline/degree", schemaPath: "#/properties/spline/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 5 }, message: "must be <= 5", schema: 5, parentSchema: schema23.properties.spline.properties.degree, data: data33 };
+                            if (vErrors === null) {
+                                vErrors = [err107];
+                            }
+                            else {
+                                vErrors.push(err107);
+                            }
+                            errors++;
+                        }
+                        if (data33 < 1 || isNaN(data33)) {
+                            const err108 = { instancePath: instancePath + "/spline/degree", schemaPath: "#/properties/spline/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.spline.properties.degree, data: data33 };
+                            if (vErrors === null) {
+                                vErrors = [err108];
+                            }
+                            else {
+                                vErrors.push(err108);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data28.natural !== undefined) {
+                    let data34 = data28.natural;
+                    if (typeof data34 !== "boolean") {
+                        const err109 = { instancePath: instancePath + "/spline/natural", schemaPath: "#/properties/spline/properties/natural/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema23.properties.spline.properties.natural.type, parentSchema: schema23.properties.spline.properties.natural, data: data34 };
+                        if (vErrors === null) {
+                            vErrors = [err109];
+                        }
+                        else {
+                            vErrors.push(err109);
+                        }
+                        errors++;
+                    }
+                }
+                if (data28.transform !== undefined) {
+                    let data35 = data28.transform;
+                    if (!((((data35 === "log") || (data35 === "log1p")) || (data35 === "sqrt")) || (data35 === "standardise"))) {
+                        const err110 = { instancePath: instancePath + "/spline/transform", schemaPath: "#/properties/spline/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.spline.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.spline.properties.transform.enum, parentSchema: schema23.properties.spline.properties.transform, data: data35 };
+                        if (vErrors === null) {
+                            vErrors = [err110];
+                        }
+                        else {
+                            vErrors.push(err110);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err111 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.spline.type, parentSchema: schema23.properties.spline, data: data28 };
+                if (vErrors === null) {
+                    vErrors = [err111];
+                }
+                else {
+                    vErrors.push(err111);
+                }
+                errors++;
+            }
+        }
+        if (data.category !== undefined) {
+            let data36 = data.category;
+            if (data36 && typeof data36 == "object" && !Array.isArray(data36)) {
+                if (data36.of === undefined) {
+                    const err112 = { instancePath: instancePath + "/category", schemaPath: "#/properties/category/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.category.required, parentSchema: schema23.properties.category, data: data36 };
+                    if (vErrors === null) {
+                        vErrors = [err112];
+                    }
+                    else {
+                        vErrors.push(err112);
+                    }
+                    errors++;
+                }
+                for (const key7 in data36) {
+                    if (!(((key7 === "of") || (key7 === "reference")) || (key7 === "unseen"))) {
+                        const err113 = { instancePath: instancePath + "/category", schemaPath: "#/properties/category/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.category, data: data36 };
+                        if (vErrors === null) {
+                            vErrors = [err113];
+                        }
+                        else {
+                            vErrors.push(err113);
+                        }
+                        errors++;
+                    }
+                }
+                if (data36.of !== undefined) {
+                    let data37 = data36.of;
+                    if (typeof data37 === "string") {
+                        if (func1(data37) < 1) {
+                            const err114 = { instancePath: instancePath + "/category/of", schemaPath: "#/properties/category/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.category.properties.of, data: data37 };
+                            if (vErrors === null) {
+                                vErrors = [err114];
+                            }
+                            else {
+                                vErrors.push(err114);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err115 = { instancePath: instancePath + "/category/of", schemaPath: "#/properties/category/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.category.properties.of.type, parentSchema: schema23.properties.category.properties.of, data: data37 };
+                        if (vErrors === null) {
+                            vErrors = [err115];
+                        }
+                        else {
+                            vErrors.push(err115);
+                        }
+                        errors++;
+                    }
+                }
+                if (data36.reference !== undefined) {
+                    let data38 = data36.reference;
+                    const _errs107 = errors;
+                    let valid35 = false;
+                    let passing6 = null;
+                    const _errs108 = errors;
+                    if (typeof data38 !== "string") {
+                        const err116 = { instancePath: instancePath + "/category/reference", schemaPath: "#/properties/category/properties/reference/oneOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.category.properties.reference.oneOf[0].type, parentSchema: schema23.properties.category.properties.reference.oneOf[0], data: data38 };
+                        if (vErrors === null) {
+                            vErrors = [err116];
+                        }
+                        else {
+                            vErrors.push(err116);
+                        }
+                        errors++;
+                    }
+                    var _valid6 = _errs108 === errors;
+                    if (_valid6) {
+                        valid35 = true;
+                        passing6 = 0;
+                    }
+                    const _errs110 = errors;
+                    if (!((typeof data38 == "number") && (isFinite(data38)))) {
+                        const err117 = { instancePath: instancePath + "/category/reference", schemaPath: "#/properties/category/properties/reference/oneOf/1/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.category.properties.reference.oneOf[1].type, parentSchema: schema23.properties.category.properties.reference.oneOf[1], data: data38 };
+                        if (vErrors === null) {
+                            vErrors = [err117];
+                        }
+                        else {
+                            vErrors.push(err117);
+                        }
+                        errors++;
+                    }
+                    var _valid6 = _errs110 === errors;
+                    if (_valid6 && valid35) {
+                        valid35 = false;
+                        passing6 = [passing6, 1];
+                    }
+                    else {
+                        if (_valid6) {
+                            valid35 = true;
+                            passing6 = 1;
+                        }
+                    }
+                    if (!valid35) {
+                        const err118 = { instancePath: instancePath + "/category/reference", schemaPath: "#/properties/category/properties/reference/oneOf", keyword: "oneOf", params: { passingSchemas: passing6 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.category.properties.reference.oneOf, parentSchema: schema23.properties.category.properties.reference, data: data38 };
+                        if (vErrors === null) {
+                            vErrors = [err118];
+                        }
+                        else {
+                            vErrors.push(err118);
+                        }
+                        errors++;
+                    }
+                    else {
+                        errors = _errs107;
+                        if (vErrors !== null) {
+                            if (_errs107) {
+                                vErrors.length = _errs107;
+                            }
+                            else {
+                                vErrors = null;
+                            }
+                        }
+                    }
+                }
+                if (data36.unseen !== undefined) {
+                    let data39 = data36.unseen;
+                    if (!((data39 === "error") || (data39 === "zero"))) {
+                        const err119 = { instancePath: instancePath + "/category/unseen", schemaPath: "#/properties/category/properties/unseen/enum", keyword: "enum", params: { allowedValues: schema23.properties.category.properties.unseen.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.category.properties.unseen.enum, parentSchema: schema23.properties.category.properties.unseen, data: data39 };
+                        if (vErrors === null) {
+                            vErrors = [err119];
+                        }
+                        else {
+                            vErrors.push(err119);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err120 = { instancePath: instancePath + "/category", schemaPath: "#/properties/category/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.category.type, parentSchema: schema23.properties.category, data: data36 };
+                if (vErrors === null) {
+                    vErrors = [err120];
+                }
+                else {
+                    vErrors.push(err120);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err121 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.type, parentSchema: schema23, data };
+        if (vErrors === null) {
+            vErrors = [err121];
+        }
+        else {
+            vErrors.push(err121);
+        }
+        errors++;
+    }
+    validate76.errors = vErrors;
+    return errors === 0;
+}
+validate76.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true, "fourier": true, "spline": true, "category": true }, "dynamicProps": false, "dynamicItems": false };
+const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
+const schema26 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
+function validate81(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate81.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    const _errs0 = errors;
+    let valid0 = false;
+    let passing0 = null;
+    const _errs1 = errors;
+    if ((typeof data == "number") && (isFinite(data))) {
+        if (data < 0 || isNaN(data)) {
+            const err0 = { instancePath, schemaPath: "#/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[0], data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+    }
+    else {
+        const err1 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[0].type, parentSchema: schema26.oneOf[0], data };
+        if (vErrors === null) {
+            vErrors = [err1];
+        }
+        else {
+            vErrors.push(err1);
+        }
+        errors++;
+    }
+    var _valid0 = _errs1 === errors;
+    if (_valid0) {
+        valid0 = true;
+        passing0 = 0;
+    }
+    const _errs3 = errors;
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (Object.keys(data).length < 1) {
+            const err2 = { instancePath, schemaPath: "#/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema26.oneOf[1], data };
+            if (vErrors === null) {
+                vErrors = [err2];
+            }
+            else {
+                vErrors.push(err2);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!((key0 === "warn") || (key0 === "fail"))) {
+                const err3 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema26.oneOf[1], data };
+                if (vErrors === null) {
+                    vErrors = [err3];
+                }
+                else {
+                    vErrors.push(err3);
+                }
+                errors++;
+            }
+        }
+        if (data.warn !== undefined) {
+            let data0 = data.warn;
+            if ((typeof data0 == "number") && (isFinite(data0))) {
+                if (data0 < 0 || isNaN(data0)) {
+                    const err4 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[1].properties.warn, data: data0 };
+                    if (vErrors === null) {
+                        vErrors = [err4];
+                    }
+                    else {
+                        vErrors.push(err4);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err5 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[1].properties.warn.type, parentSchema: schema26.oneOf[1].properties.warn, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.fail !== undefined) {
+            let data1 = data.fail;
+            if ((typeof data1 == "number") && (isFinite(data1))) {
+                if (data1 < 0 || isNaN(data1)) {
+                    const err6 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[1].properties.fail, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err7 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[1].properties.fail.type, parentSchema: schema26.oneOf[1].properties.fail, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err7];
+                }
+                else {
+                    vErrors.push(err7);
+                }
+                errors++;
+            }
+        }
+    }
+    else {
+        const err8 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema26.oneOf[1].type, parentSchema: schema26.oneOf[1], data };
+        if (vErrors === null) {
+            vErrors = [err8];
+        }
+        else {
+            vErrors.push(err8);
+        }
+        errors++;
+    }
+    var _valid0 = _errs3 === errors;
+    if (_valid0 && valid0) {
+        valid0 = false;
+        passing0 = [passing0, 1];
+    }
+    else {
+        if (_valid0) {
+            valid0 = true;
+            passing0 = 1;
+            var props0 = true;
+        }
+        const _errs10 = errors;
+        if (data && typeof data == "object" && !Array.isArray(data)) {
+            if (Object.keys(data).length < 1) {
+                const err9 = { instancePath, schemaPath: "#/oneOf/2/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema26.oneOf[2], data };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+            for (const key1 in data) {
+                if (!((((key1 === "warn_below") || (key1 === "fail_below")) || (key1 === "warn_above")) || (key1 === "fail_above"))) {
+                    const err10 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema26.oneOf[2], data };
+                    if (vErrors === null) {
+                        vErrors = [err10];
+                    }
+                    else {
+                        vErrors.push(err10);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_below !== undefined) {
+                let data2 = data.warn_below;
+                if (!((typeof data2 == "number") && (isFinite(data2)))) {
+                    const err11 = { instancePath: instancePath + "/warn_below", schemaPath: "#/oneOf/2/properties/warn_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.warn_below.type, parentSchema: schema26.oneOf[2].properties.warn_below, data: data2 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_below !== undefined) {
+                let data3 = data.fail_below;
+                if (!((typeof data3 == "number") && (isFinite(data3)))) {
+                    const err12 = { instancePath: instancePath + "/fail_below", schemaPath: "#/oneOf/2/properties/fail_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.fail_below.type, parentSchema: schema26.oneOf[2].properties.fail_below, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+            }
+            if (data.warn_above !== undefined) {
+                let data4 = data.warn_above;
+                if (!((typeof data4 == "number") && (isFinite(data4)))) {
+                    const err13 = { instancePath: instancePath + "/warn_above", schemaPath: "#/oneOf/2/properties/warn_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.warn_above.type, parentSchema: schema26.oneOf[2].properties.warn_above, data: data4 };
+                    if (vErrors === null) {
+                        vErrors = [err13];
+                    }
+                    else {
+                        vErrors.push(err13);
+                    }
+                    errors++;
+                }
+            }
+            if (data.fail_above !== undefined) {
+                let data5 = data.fail_above;
+                if (!((typeof data5 == "number") && (isFinite(data5)))) {
+                    const err14 = { instancePath: instancePath + "/fail_above", schemaPath: "#/oneOf/2/properties/fail_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.fail_above.type, parentSchema: schema26.oneOf[2].properties.fail_above, data: data5 };
+                    if (vErrors === null) {
+                        vErrors = [err14];
+                    }
+                    else {
+                        vErrors.push(err14);
+                    }
+                    errors++;
+                }
+            }
+        }
+        else {
+            const err15 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema26.oneOf[2].type, parentSchema: schema26.oneOf[2], data };
+            if (vErrors === null) {
+                vErrors = [err15];
+            }
+            else {
+                vErrors.push(err15);
+            }
+            errors++;
+        }
+        var _valid0 = _errs10 === errors;
+        if (_valid0 && valid0) {
+            valid0 = false;
+            passing0 = [passing0, 2];
+        }
+        else {
+            if (_valid0) {
+                valid0 = true;
+                passing0 = 2;
+                if (props0 !== true) {
+                    props0 = true;
+                }
+            }
+            const _errs21 = errors;
+            if ("off" !== data) {
+                const err16 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema26.oneOf[3], data };
+                if (vErrors === null) {
+                    vErrors = [err16];
+                }
+                else {
+                    vErrors.push(err16);
+                }
+                errors++;
+            }
+            var _valid0 = _errs21 === errors;
+            if (_valid0 && valid0) {
+                valid0 = false;
+                passing0 = [passing0, 3];
+            }
+            else {
+                if (_valid0) {
+                    valid0 = true;
+                    passing0 = 3;
+                }
+            }
+        }
+    }
+    if (!valid0) {
+        const err17 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema26.oneOf, parentSchema: schema26, data };
+        if (vErrors === null) {
+            vErrors = [err17];
+        }
+        else {
+            vErrors.push(err17);
+        }
+        errors++;
+    }
+    else {
+        errors = _errs0;
+        if (vErrors !== null) {
+            if (_errs0) {
+                vErrors.length = _errs0;
+            }
+            else {
+                vErrors = null;
+            }
+        }
+    }
+    validate81.errors = vErrors;
+    evaluated0.props = props0;
+    return errors === 0;
+}
+validate81.evaluated = { "dynamicProps": true, "dynamicItems": false };
+function validate80(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate80.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        for (const key0 in data) {
+            if (!(func2.call(schema25.properties, key0))) {
+                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema25, data };
+                if (vErrors === null) {
+                    vErrors = [err0];
+                }
+                else {
+                    vErrors.push(err0);
+                }
+                errors++;
+            }
+        }
+        if (data.gap_ratio !== undefined) {
+            if (!(validate81(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.params_per_sample !== undefined) {
+            if (!(validate81(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.coefficient !== undefined) {
+            if (!(validate81(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.base_change !== undefined) {
+            if (!(validate81(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.cv_ratio !== undefined) {
+            if (!(validate81(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.swing !== undefined) {
+            if (!(validate81(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.swing_beyond !== undefined) {
+            if (!(validate81(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.swing_spikes !== undefined) {
+            if (!(validate81(data.swing_spikes, { instancePath: instancePath + "/swing_spikes", parentData: data, parentDataProperty: "swing_spikes", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.leakage !== undefined) {
+            if (!(validate81(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.reproducibility !== undefined) {
+            if (!(validate81(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.condition !== undefined) {
+            if (!(validate81(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.complexity !== undefined) {
+            if (!(validate81(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.holdout_r2 !== undefined) {
+            if (!(validate81(data.holdout_r2, { instancePath: instancePath + "/holdout_r2", parentData: data, parentDataProperty: "holdout_r2", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.holdout_rmse !== undefined) {
+            if (!(validate81(data.holdout_rmse, { instancePath: instancePath + "/holdout_rmse", parentData: data, parentDataProperty: "holdout_rmse", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.holdout_mae !== undefined) {
+            if (!(validate81(data.holdout_mae, { instancePath: instancePath + "/holdout_mae", parentData: data, parentDataProperty: "holdout_mae", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.chi_square !== undefined) {
+            if (!(validate81(data.chi_square, { instancePath: instancePath + "/chi_square", parentData: data, parentDataProperty: "chi_square", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.separation !== undefined) {
+            if (!(validate81(data.separation, { instancePath: instancePath + "/separation", parentData: data, parentDataProperty: "separation", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.events_per_parameter !== undefined) {
+            if (!(validate81(data.events_per_parameter, { instancePath: instancePath + "/events_per_parameter", parentData: data, parentDataProperty: "events_per_parameter", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+        if (data.calibration_slope !== undefined) {
+            if (!(validate81(data.calibration_slope, { instancePath: instancePath + "/calibration_slope", parentData: data, parentDataProperty: "calibration_slope", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
+                errors = vErrors.length;
+            }
+        }
+    }
+    else {
+        const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema25.type, parentSchema: schema25, data };
+        if (vErrors === null) {
+            vErrors = [err1];
+        }
+        else {
+            vErrors.push(err1);
+        }
+        errors++;
+    }
+    validate80.errors = vErrors;
+    return errors === 0;
+}
+validate80.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate75(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
+    /*# sourceURL="urn:fitgate:schema:descriptor:1" */ ;
+    let vErrors = null;
+    let errors = 0;
+    const evaluated0 = validate75.evaluated;
+    if (evaluated0.dynamicProps) {
+        evaluated0.props = undefined;
+    }
+    if (evaluated0.dynamicItems) {
+        evaluated0.items = undefined;
+    }
+    if (data && typeof data == "object" && !Array.isArray(data)) {
+        if (data.version === undefined) {
+            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema22.required, parentSchema: schema22, data };
+            if (vErrors === null) {
+                vErrors = [err0];
+            }
+            else {
+                vErrors.push(err0);
+            }
+            errors++;
+        }
+        if (data.name === undefined) {
+            const err1 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "name" }, message: "must have required property '" + "name" + "'", schema: schema22.required, parentSchema: schema22, data };
+            if (vErrors === null) {
+                vErrors = [err1];
+            }
+            else {
+                vErrors.push(err1);
+            }
+            errors++;
+        }
+        if (data.data === undefined) {
+            const err2 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "data" }, message: "must have required property '" + "data" + "'", schema: schema22.required, parentSchema: schema22, data };
+            if (vErrors === null) {
+                vErrors = [err2];
+            }
+            else {
+                vErrors.push(err2);
+            }
+            errors++;
+        }
+        if (data.terms === undefined) {
+            const err3 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "terms" }, message: "must have required property '" + "terms" + "'", schema: schema22.required, parentSchema: schema22, data };
+            if (vErrors === null) {
+                vErrors = [err3];
+            }
+            else {
+                vErrors.push(err3);
+            }
+            errors++;
+        }
+        for (const key0 in data) {
+            if (!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))) {
+                const err4 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22, data };
+                if (vErrors === null) {
+                    vErrors = [err4];
+                }
+                else {
+                    vErrors.push(err4);
+                }
+                errors++;
+            }
+        }
+        if (data.version !== undefined) {
+            let data0 = data.version;
+            if (1 !== data0) {
+                const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema22.properties.version, data: data0 };
+                if (vErrors === null) {
+                    vErrors = [err5];
+                }
+                else {
+                    vErrors.push(err5);
+                }
+                errors++;
+            }
+        }
+        if (data.name !== undefined) {
+            let data1 = data.name;
+            if (typeof data1 === "string") {
+                if (func1(data1) > 100) {
+                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema22.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err6];
+                    }
+                    else {
+                        vErrors.push(err6);
+                    }
+                    errors++;
+                }
+                if (func1(data1) < 1) {
+                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err7];
+                    }
+                    else {
+                        vErrors.push(err7);
+                    }
+                    errors++;
+                }
+                if (!pattern3.test(data1)) {
+                    const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema22.properties.name, data: data1 };
+                    if (vErrors === null) {
+                        vErrors = [err8];
+                    }
+                    else {
+                        vErrors.push(err8);
+                    }
+                    errors++;
+                }
+            }
+            else {
+                const err9 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.name.type, parentSchema: schema22.properties.name, data: data1 };
+                if (vErrors === null) {
+                    vErrors = [err9];
+                }
+                else {
+                    vErrors.push(err9);
+                }
+                errors++;
+            }
+        }
+        if (data.task !== undefined) {
+            let data2 = data.task;
+            if (!((data2 === "regression") || (data2 === "classification"))) {
+                const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema22.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.task.enum, parentSchema: schema22.properties.task, data: data2 };
+                if (vErrors === null) {
+                    vErrors = [err10];
+                }
+                else {
+                    vErrors.push(err10);
+                }
+                errors++;
+            }
+        }
+        if (data.data !== undefined) {
+            let data3 = data.data;
+            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
+                if (data3.train === undefined) {
+                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err11];
+                    }
+                    else {
+                        vErrors.push(err11);
+                    }
+                    errors++;
+                }
+                if (data3.holdout === undefined) {
+                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err12];
+                    }
+                    else {
+                        vErrors.push(err12);
+                    }
+                    errors++;
+                }
+                if (data3.target === undefined) {
+                    const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
+                    if (vErrors === null) {
+                        vErrors = [err13];
+                    }
+                    else {
+                        vErrors.push(err13);
+                    }
+                    errors++;
+                }
+                for (const key1 in data3) {
+                    if (!((((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "positive")) || (key1 === "weight")) || (key1 === "sigma"))) {
+                        const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
+                        if (vErrors === null) {
+                            vErrors = [err14];
+                        }
+                        else {
+                            vErrors.push(err14);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.train !== undefined) {
+                    let data4 = data3.train;
+                    if (typeof data4 === "string") {
+                        if (func1(data4) < 1) {
+                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train, data: data4 };
+                            if (vErrors === null) {
+                                vErrors = [err15];
+                            }
+                            else {
+                                vErrors.push(err15);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.type, parentSchema: schema22.properties.data.properties.train, data: data4 };
+                        if (vErrors === null) {
+                            vErrors = [err16];
+                        }
+                        else {
+                            vErrors.push(err16);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.holdout !== undefined) {
+                    let data5 = data3.holdout;
+                    if (typeof data5 === "string") {
+                        if (func1(data5) < 1) {
+                            const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err17];
+                            }
+                            else {
+                                vErrors.push(err17);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err18 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.type, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err18];
+                        }
+                        else {
+                            vErrors.push(err18);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.target !== undefined) {
+                    let data6 = data3.target;
+                    if (typeof data6 === "string") {
+                        if (func1(data6) < 1) {
+                            const err19 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data6 };
+                            if (vErrors === null) {
+                                vErrors = [err19];
+                            }
+                            else {
+                                vErrors.push(err19);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err20 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data6 };
+                        if (vErrors === null) {
+                            vErrors = [err20];
+                        }
+                        else {
+                            vErrors.push(err20);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.positive !== undefined) {
+                    let data7 = data3.positive;
+                    if (typeof data7 === "string") {
+                        if (func1(data7) < 1) {
+                            const err21 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err21];
+                            }
+                            else {
+                                vErrors.push(err21);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err22 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err22];
+                        }
+                        else {
+                            vErrors.push(err22);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.weight !== undefined) {
+                    let data8 = data3.weight;
+                    if (typeof data8 === "string") {
+                        if (func1(data8) < 1) {
+                            const err23 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.weight, data: data8 };
+                            if (vErrors === null) {
+                                vErrors = [err23];
+                            }
+                            else {
+                                vErrors.push(err23);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err24 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.weight.type, parentSchema: schema22.properties.data.properties.weight, data: data8 };
+                        if (vErrors === null) {
+                            vErrors = [err24];
+                        }
+                        else {
+                            vErrors.push(err24);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.sigma !== undefined) {
+                    let data9 = data3.sigma;
+                    if (typeof data9 === "string") {
+                        if (func1(data9) < 1) {
+                            const err25 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.sigma, data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err25];
+                            }
+                            else {
+                                vErrors.push(err25);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err26 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.sigma.type, parentSchema: schema22.properties.data.properties.sigma, data: data9 };
+                        if (vErrors === null) {
+                            vErrors = [err26];
+                        }
+                        else {
+                            vErrors.push(err26);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err27 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err27];
+                }
+                else {
+                    vErrors.push(err27);
+                }
+                errors++;
+            }
+        }
+        if (data.terms !== undefined) {
+            let data10 = data.terms;
+            if (Array.isArray(data10)) {
+                if (data10.length < 1) {
+                    const err28 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data10 };
+                    if (vErrors === null) {
+                        vErrors = [err28];
+                    }
+                    else {
+                        vErrors.push(err28);
+                    }
+                    errors++;
+                }
+                const len0 = data10.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    if (!(validate76(data10[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data10, parentDataProperty: i0, rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+                        errors = vErrors.length;
+                    }
+                }
+            }
+            else {
+                const err29 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data10 };
+                if (vErrors === null) {
+                    vErrors = [err29];
+                }
+                else {
+                    vErrors.push(err29);
+                }
+                errors++;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data12 = data.fit;
+            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
+                for (const key2 in data12) {
+                    if (!((((((((key2 === "intercept") || (key2 === "refit")) || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))) {
+                        const err30 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err30];
+                        }
+                        else {
+                            vErrors.push(err30);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.intercept !== undefined) {
+                    let data13 = data12.intercept;
+                    if (typeof data13 !== "boolean") {
+                        const err31 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data13 };
+                        if (vErrors === null) {
+                            vErrors = [err31];
+                        }
+                        else {
+                            vErrors.push(err31);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.refit !== undefined) {
+                    let data14 = data12.refit;
+                    if (typeof data14 !== "boolean") {
+                        const err32 = { instancePath: instancePath + "/fit/refit", schemaPath: "#/properties/fit/properties/refit/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit.type, parentSchema: schema22.properties.fit.properties.refit, data: data14 };
+                        if (vErrors === null) {
+                            vErrors = [err32];
+                        }
+                        else {
+                            vErrors.push(err32);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.ridge !== undefined) {
+                    let data15 = data12.ridge;
+                    if ((typeof data15 == "number") && (isFinite(data15))) {
+                        if (data15 < 0 || isNaN(data15)) {
+                            const err33 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data15 };
+                            if (vErrors === null) {
+                                vErrors = [err33];
+                            }
+                            else {
+                                vErrors.push(err33);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err34 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data15 };
+                        if (vErrors === null) {
+                            vErrors = [err34];
+                        }
+                        else {
+                            vErrors.push(err34);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.folds !== undefined) {
+                    let data16 = data12.folds;
+                    if (!(((typeof data16 == "number") && (!(data16 % 1) && !isNaN(data16))) && (isFinite(data16)))) {
+                        const err35 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                        if (vErrors === null) {
+                            vErrors = [err35];
+                        }
+                        else {
+                            vErrors.push(err35);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data16 == "number") && (isFinite(data16))) {
+                        if (data16 < 2 || isNaN(data16)) {
+                            const err36 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                            if (vErrors === null) {
+                                vErrors = [err36];
+                            }
+                            else {
+                                vErrors.push(err36);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data12.fold_order !== undefined) {
+                    let data17 = data12.fold_order;
+                    if (!((data17 === "shuffled") || (data17 === "blocks"))) {
+                        const err37 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data17 };
+                        if (vErrors === null) {
+                            vErrors = [err37];
+                        }
+                        else {
+                            vErrors.push(err37);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.seed !== undefined) {
+                    let data18 = data12.seed;
+                    if (!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))) {
+                        const err38 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                        if (vErrors === null) {
+                            vErrors = [err38];
+                        }
+                        else {
+                            vErrors.push(err38);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data18 == "number") && (isFinite(data18))) {
+                        if (data18 > 4294967295 || isNaN(data18)) {
+                            const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                            if (vErrors === null) {
+                                vErrors = [err39];
+                            }
+                            else {
+                                vErrors.push(err39);
+                            }
+                            errors++;
+                        }
+                        if (data18 < 0 || isNaN(data18)) {
+                            const err40 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                            if (vErrors === null) {
+                                vErrors = [err40];
+                            }
+                            else {
+                                vErrors.push(err40);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data12.parameter_count !== undefined) {
+                    let data19 = data12.parameter_count;
+                    if (!((data19 === "columns") || (data19 === "effective"))) {
+                        const err41 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data19 };
+                        if (vErrors === null) {
+                            vErrors = [err41];
+                        }
+                        else {
+                            vErrors.push(err41);
+                        }
+                        errors++;
+                    }
+                }
+                if (data12.threshold !== undefined) {
+                    let data20 = data12.threshold;
+                    if ((typeof data20 == "number") && (isFinite(data20))) {
+                        if (data20 >= 1 || isNaN(data20)) {
+                            const err42 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                            if (vErrors === null) {
+                                vErrors = [err42];
+                            }
+                            else {
+                                vErrors.push(err42);
+                            }
+                            errors++;
+                        }
+                        if (data20 <= 0 || isNaN(data20)) {
+                            const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                            if (vErrors === null) {
+                                vErrors = [err43];
+                            }
+                            else {
+                                vErrors.push(err43);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err44 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                        if (vErrors === null) {
+                            vErrors = [err44];
+                        }
+                        else {
+                            vErrors.push(err44);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err45 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
+                if (vErrors === null) {
+                    vErrors = [err45];
+                }
+                else {
+                    vErrors.push(err45);
+                }
+                errors++;
+            }
+        }
+        if (data.coefficients !== undefined) {
+            let data21 = data.coefficients;
+            if (Array.isArray(data21)) {
+                if (data21.length < 1) {
+                    const err46 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data21 };
+                    if (vErrors === null) {
+                        vErrors = [err46];
+                    }
+                    else {
+                        vErrors.push(err46);
+                    }
+                    errors++;
+                }
+                const len1 = data21.length;
+                for (let i1 = 0; i1 < len1; i1++) {
+                    let data22 = data21[i1];
+                    if (!((typeof data22 == "number") && (isFinite(data22)))) {
+                        const err47 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data22 };
+                        if (vErrors === null) {
+                            vErrors = [err47];
+                        }
+                        else {
+                            vErrors.push(err47);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err48 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data21 };
+                if (vErrors === null) {
+                    vErrors = [err48];
+                }
+                else {
+                    vErrors.push(err48);
+                }
+                errors++;
+            }
+        }
+        if (data.limits !== undefined) {
+            if (!(validate80(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
+                vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.errors);
+                errors = vErrors.length;
+            }
+        }
+    }
+    else {
+        const err49 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
+        if (vErrors === null) {
+            vErrors = [err49];
+        }
+        else {
+            vErrors.push(err49);
+        }
+        errors++;
+    }
+    validate75.errors = vErrors;
+    return errors === 0;
+}
+validate75.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+
+;// CONCATENATED MODULE: ./src/config/schemas.ts
+/**
+ * The two JSON Schemas (shipped as JSON files beside this module) as validators. They are
+ * compiled ahead of time by test/tools/gen-validators.mjs (ajv standalone code, run by
+ * `npm run bundle`) into ./generated/validators.ts, with the limit keys of `LIMIT_KEYS` added to
+ * their `limits` so that a key added to the table is accepted even before the schema files list
+ * it (a test keeps the files in step, another fails when the generated module is stale). No
+ * schema is compiled at run time.
+ */
+
+
+
+/** The settings schema as shipped (`settings.schema.json`). */
+const settingsSchema = (/* unused pure expression or super */ null && (settingsSchemaFile));
+/** The descriptor schema as shipped (`descriptor.schema.json`). */
+const descriptorSchema = (/* unused pure expression or super */ null && (descriptorSchemaFile));
+/** Validates a parsed settings file against `settings.schema.json`. */
+const validateSettingsValue = (value) => run(validateSettings, value);
+/** Validates a parsed descriptor against `descriptor.schema.json`. */
+const validateDescriptorValue = (value) => run(validateDescriptor, value);
+function run(validate, value) {
+    return validate(value) ? null : [...(validate.errors ?? [])];
+}
+
+
+/***/ }),
+
+/***/ 4140:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   BU: () => (/* binding */ readLimits),
+/* harmony export */   M5: () => (/* binding */ loadSettings),
+/* harmony export */   WA: () => (/* binding */ DEFAULT_SETTINGS_PATH),
+/* harmony export */   _p: () => (/* binding */ modelPatternLine),
+/* harmony export */   y3: () => (/* binding */ DEFAULT_MODEL_PATTERNS)
+/* harmony export */ });
+/* unused harmony exports DEFAULT_FIT, DEFAULT_CAPS, SETTINGS_ERROR, defaultSettings, settingsFromDocument */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/* harmony import */ var _repo_repo_path_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3856);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(9304);
+/* harmony import */ var _schema_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3119);
+/* harmony import */ var _schemas_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(9602);
+/* harmony import */ var _yaml_source_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(2865);
+/**
+ * The repository settings file (`fitgate.yml` by default): where the descriptors are, the
+ * limits every model gets, defaults for `fit`, and resource caps.
+ */
+
+
+
+
+
+
+/** Default settings path, relative to the repository root. */
+const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
+/** Descriptor glob used when there is no settings file. */
+const DEFAULT_MODEL_PATTERNS = Object.freeze(['**/*.model.yml']);
+/** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
+const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' });
+/** Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters. */
+const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000 });
+/** Stable codes of the errors this module throws (besides YAML and schema codes). */
+const SETTINGS_ERROR = Object.freeze({ missing: 'file-missing', limitOrder: 'limit-order' });
+const MIB = 1024 * 1024;
+/** Lines of each `models` pattern, kept beside a loaded settings object for later messages. */
+const modelLines = new WeakMap();
+/**
+ * The settings line of the `index`-th `models` pattern, or null (no file, or settings not
+ * made by {@link loadSettings}).
+ */
+function modelPatternLine(settings, index) {
+    return modelLines.get(settings)?.[index] ?? null;
+}
+/** Settings used when the repository has no settings file. */
+function defaultSettings() {
+    return {
+        file: null,
+        models: [...DEFAULT_MODEL_PATTERNS],
+        limits: {},
+        fit: { ...DEFAULT_FIT },
+        caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells },
+    };
+}
+/**
+ * Loads and validates the settings file; a missing file at the default path gives defaults
+ * with models ["**\/*.model.yml"]; a missing file given explicitly is an InputError.
+ *
+ * @param repo the repository
+ * @param path repository-relative settings path (default {@link DEFAULT_SETTINGS_PATH} at the caller)
+ * @param options `explicit`: the user named the file (default false), so it must exist
+ * @throws InputError `file-missing`, `path-outside`, YAML errors, `schema`, `limit-order`
+ */
+async function loadSettings(repo, path, options = {}) {
+    const kind = await repo.entryKind(path);
+    const notes = await yamlTwinNotes(repo, path);
+    if (kind === 'missing') {
+        if (options.explicit) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
+        }
+        return { ...defaultSettings(), notes };
+    }
+    if (kind !== 'file') {
+        // A folder, a link to nothing or a FIFO where the settings belong is never taken for "no settings".
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_1__/* .NOT_A_FILE */ .bd, `the settings file ${(0,_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_1__/* .kindWords */ .Gk)(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
+    }
+    const doc = await (0,_yaml_source_js__WEBPACK_IMPORTED_MODULE_5__/* .readYamlFile */ .kv)(repo, path);
+    // The same object (the pattern lines are kept beside it).
+    const settings = settingsFromDocument(doc, path);
+    settings.notes = notes;
+    return settings;
+}
+/**
+ * A note when a file named like `path` but ending `.yaml` sits beside it (fitgate reads only the
+ * `.yml` name it was given): empty otherwise.
+ */
+async function yamlTwinNotes(repo, path) {
+    if (!path.endsWith('.yml'))
+        return [];
+    const twin = `${path.slice(0, -4)}.yaml`;
+    let kind;
+    try {
+        kind = await repo.entryKind(twin);
+    }
+    catch {
+        return []; // a twin that leads outside is not read, and not ours to report
+    }
+    if (kind === 'missing')
+        return [];
+    return [`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(twin)} is not read: fitgate reads its settings from ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .clip */ .$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`];
+}
+/**
+ * Validates a parsed settings document and builds the {@link SettingsFile}.
+ *
+ * @param doc the parsed YAML
+ * @param file repository-relative path of the settings file
+ */
+function settingsFromDocument(doc, file) {
+    const errors = (0,_schemas_js__WEBPACK_IMPORTED_MODULE_4__/* .validateSettingsValue */ .bg)(doc.value);
+    if (errors)
+        throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .schemaError */ .g$)(errors, doc, file);
+    const raw = doc.value;
+    const defaults = defaultSettings();
+    const settings = {
+        file,
+        models: raw.models ? [...raw.models] : defaults.models,
+        limits: readLimits(doc, file, raw.limits, ['limits']),
+        fit: {
+            folds: raw.fit?.folds ?? DEFAULT_FIT.folds,
+            foldOrder: raw.fit?.fold_order ?? DEFAULT_FIT.foldOrder,
+            seed: raw.fit?.seed ?? DEFAULT_FIT.seed,
+            parameterCount: raw.fit?.parameter_count ?? DEFAULT_FIT.parameterCount,
+        },
+        caps: {
+            maxFileBytes: Math.round((raw.caps?.max_file_mb ?? DEFAULT_CAPS.maxFileMb) * MIB),
+            maxCells: raw.caps?.max_cells ?? DEFAULT_CAPS.maxCells,
+        },
+    };
+    if (raw.models)
+        modelLines.set(settings, raw.models.map((_, i) => doc.positionOf(['models', i])?.line ?? 1));
+    return settings;
+}
+/**
+ * Reads a validated `limits` map with the line of each key, checking the order of its bounds
+ * ({@link limitOrderProblem}).
+ *
+ * @param doc the parsed document
+ * @param file repository-relative path
+ * @param limits the map as validated by the schema (or undefined)
+ * @param at key path of the map, e.g. `['limits']`
+ */
+function readLimits(doc, file, limits, at) {
+    const out = {};
+    for (const [key, spec] of Object.entries(limits ?? {})) {
+        const problem = (0,_limits_js__WEBPACK_IMPORTED_MODULE_2__/* .limitOrderProblem */ .lr)(spec, (0,_limits_js__WEBPACK_IMPORTED_MODULE_2__/* .limitDirection */ .fN)(key));
+        if (problem !== null)
+            throw (0,_schema_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .errorAt */ .Os)(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, problem[0]], problem[1]);
+        out[key] = { spec: typeof spec === 'object' ? { ...spec } : spec, line: doc.positionOf([...at, key])?.line ?? 1 };
+    }
+    return out;
+}
+
+
+/***/ }),
+
+/***/ 2865:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   kv: () => (/* binding */ readYamlFile)
+/* harmony export */ });
+/* unused harmony exports YAML_GUARDS, YAML_ERROR, decodeYamlBytes, parseYaml */
+/* harmony import */ var yaml__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8815);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
+/**
+ * YAML text to a plain value plus the source position of any key path, with the guards a
+ * file from a pull request needs: a size cap, a nesting cap, an alias cap, duplicate keys
+ * refused, and non-UTF-8 or binary content refused. Every problem is an {@link InputError}
+ * naming the file, line and column.
+ */
+
+
+/** Guards applied to every YAML file fitgate reads. */
+const YAML_GUARDS = Object.freeze({
+    /** Largest YAML file in bytes: 1 MiB. */
+    maxBytes: 1024 * 1024,
+    /** Deepest nesting of mappings and lists. */
+    maxDepth: 64,
+    /** Most alias expansions (`*name`) in one document. */
+    maxAliasCount: 100,
+});
+/** Stable codes of the errors this module throws. */
+const YAML_ERROR = Object.freeze({
+    syntax: 'yaml-syntax',
+    duplicateKey: 'yaml-duplicate-key',
+    collectionKey: 'yaml-collection-key',
+    tooDeep: 'yaml-too-deep',
+    aliases: 'yaml-aliases',
+    tooLarge: 'file-too-large',
+    encoding: 'file-encoding',
+});
+/**
+ * Decodes file bytes as UTF-8 text (a leading byte-order mark is dropped).
+ *
+ * @param bytes the file's contents
+ * @param file repository-relative path, for messages
+ * @throws InputError `file-too-large` above {@link YAML_GUARDS}.maxBytes, `file-encoding` for
+ *   bytes that are not UTF-8 or that contain NUL characters (binary content)
+ */
+function decodeYamlBytes(bytes, file) {
+    checkSize(bytes.byteLength, file);
+    let text;
+    try {
+        text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: false }).decode(bytes);
+    }
+    catch {
+        const at = firstInvalidUtf8(bytes);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
+    }
+    const nul = text.indexOf('\u0000');
+    if (nul >= 0) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', { file, ...positionInText(text, nul) });
+    }
+    return text;
+}
+/**
+ * Reads and parses a YAML file through the repository reader, checking its size before reading.
+ *
+ * @param repo the repository
+ * @param path repository-relative path
+ */
+async function readYamlFile(repo, path) {
+    checkSize(await repo.size(path), path);
+    return parseYaml(decodeYamlBytes(await repo.read(path), path), path);
+}
+/**
+ * Parses YAML 1.2 text (core schema: `off`, `yes`, `no` stay strings) into a plain value.
+ *
+ * @param text the YAML text
+ * @param file repository-relative path, for messages
+ * @throws InputError `yaml-syntax` (the yaml package's message and position), `yaml-duplicate-key`,
+ *   `yaml-too-deep` (nesting above {@link YAML_GUARDS}.maxDepth), `yaml-aliases` (more alias
+ *   expansions than {@link YAML_GUARDS}.maxAliasCount), `file-too-large`
+ */
+function parseYaml(text, file) {
+    checkSize(Buffer.byteLength(text, 'utf8'), file);
+    if (text.charCodeAt(0) === 0xfeff)
+        text = text.slice(1);
+    // A cheap bound first: the yaml package's parser gets slow (and its composer runs out of
+    // stack) on documents nested thousands deep, so refuse those before parsing.
+    const rough = roughNesting(text);
+    if (rough.depth > ROUGH_DEPTH_CAP) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
+    }
+    const lineCounter = new yaml__WEBPACK_IMPORTED_MODULE_0__/* .LineCounter */ .HN();
+    const doc = (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .parseDocument */ .Tp)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
+    const at = (offset) => {
+        const { line, col } = lineCounter.linePos(offset);
+        return { line, column: col };
+    };
+    if (doc.errors.length > 0) {
+        const error = doc.errors[0];
+        const stackOverflow = /call stack/i.test(error.message);
+        const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
+    }
+    checkStructure(doc, text, file, at);
+    let value;
+    try {
+        value = doc.toJS({ maxAliasCount: YAML_GUARDS.maxAliasCount });
+    }
+    catch (error) {
+        const first = firstAlias(doc.contents);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
+    }
+    const locate = (path, wantValue) => {
+        let node = doc.contents;
+        let keyOffset = node && node.range ? node.range[0] : 0;
+        for (const segment of path) {
+            node = resolveAlias(doc, node);
+            if (typeof segment === 'number' && (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+                const item = node.items[segment];
+                if (item === undefined)
+                    return null;
+                node = item;
+                const range = item?.range;
+                if (!range)
+                    return null;
+                keyOffset = range[0];
+            }
+            else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node)) {
+                const pair = node.items.find((p) => keyText(p.key) === String(segment));
+                if (!pair)
+                    return null;
+                const keyRange = pair.key?.range;
+                keyOffset = keyRange ? keyRange[0] : keyOffset;
+                node = pair.value;
+            }
+            else {
+                return null;
+            }
+        }
+        if (keyOffset === null)
+            return null;
+        if (wantValue) {
+            const range = resolveAlias(doc, node)?.range;
+            const own = node?.range;
+            if (own)
+                return at(own[0]);
+            if (range)
+                return at(range[0]);
+        }
+        return at(keyOffset);
+    };
+    return {
+        value,
+        positionOf: (path) => locate(path, false),
+        valuePositionOf: (path) => locate(path, true),
+    };
+}
+/** Above this rough bound the text is refused before parsing (the exact check is {@link YAML_GUARDS}.maxDepth). */
+const ROUGH_DEPTH_CAP = 512;
+/**
+ * An over-estimate of nesting depth from the raw text: open flow brackets (anywhere, even
+ * inside strings) and leading indentation plus leading `- ` items on each line. Cheap and
+ * linear; only pathological text gets near {@link ROUGH_DEPTH_CAP}.
+ */
+function roughNesting(text) {
+    let flow = 0;
+    let best = 0;
+    let bestOffset = 0;
+    let lineStart = true;
+    let lead = 0;
+    for (let i = 0; i < text.length; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 0x0a) {
+            lineStart = true;
+            lead = 0;
+            continue;
+        }
+        if (lineStart) {
+            if (c === 0x20 || c === 0x09)
+                lead += 1;
+            else if (c === 0x2d && text.charCodeAt(i + 1) === 0x20)
+                lead += 1;
+            else
+                lineStart = false;
+            if (lead > best) {
+                best = lead;
+                bestOffset = i;
+            }
+        }
+        if (c === 0x5b || c === 0x7b) {
+            flow += 1;
+            if (flow > best) {
+                best = flow;
+                bestOffset = i;
+            }
+        }
+        else if ((c === 0x5d || c === 0x7d) && flow > 0) {
+            flow -= 1;
+        }
+    }
+    return { depth: best, offset: bestOffset };
+}
+/** Checks nesting depth, duplicate keys and keys that are lists or mappings on the syntax tree (aliases are followed only to see what a key is). */
+function checkStructure(doc, text, file, at) {
+    const visit = (node, depth) => {
+        if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node) || (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+            if (depth > YAML_GUARDS.maxDepth) {
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
+                    file,
+                    ...(node.range ? at(node.range[0]) : {}),
+                });
+            }
+        }
+        if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node)) {
+            const seen = new Map();
+            for (const pair of node.items) {
+                const keyOffset = pair.key?.range?.[0] ?? node.range?.[0] ?? 0;
+                // YAML allows a list or a mapping as a key; no key of fitgate's files is one, and plain
+                // JavaScript objects cannot hold one (the yaml package would print a process warning).
+                const keyNode = resolveAlias(doc, pair.key);
+                if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) || (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(keyNode)) {
+                    const range = pair.key?.range;
+                    const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.collectionKey, `a ${(0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(written, 40)}\`); expected a plain name before the colon`, {
+                        file,
+                        ...at(keyOffset),
+                    });
+                }
+                const key = keyText(pair.key);
+                const before = seen.get(key);
+                if (before !== undefined) {
+                    const first = at(before);
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.duplicateKey, `key \`${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .clip */ .$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
+                        file,
+                        key,
+                        ...at(keyOffset),
+                    });
+                }
+                seen.set(key, keyOffset);
+                visit(pair.key, depth + 1);
+                visit(pair.value, depth + 1);
+            }
+        }
+        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+            for (const item of node.items)
+                visit(item, depth + 1);
+        }
+        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isPair */ .tO)(node)) {
+            visit(node.key, depth + 1);
+            visit(node.value, depth + 1);
+        }
+    };
+    visit(doc.contents, 1);
+}
+/** A mapping key as the text plain JavaScript would use for it. */
+function keyText(key) {
+    if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isScalar */ .jn)(key))
+        return String(key.value);
+    if (key === null || key === undefined)
+        return '';
+    if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isAlias */ .Vj)(key))
+        return `*${key.source}`;
+    return String(key);
+}
+function resolveAlias(doc, node) {
+    let current = node;
+    for (let hops = 0; (0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isAlias */ .Vj)(current) && hops < 8; hops++)
+        current = current.resolve(doc);
+    return current;
+}
+/** Offset of the first alias in document order, or null. */
+function firstAlias(root) {
+    const stack = [root];
+    let best = null;
+    while (stack.length > 0) {
+        const node = stack.pop();
+        if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isAlias */ .Vj)(node)) {
+            const start = node.range?.[0];
+            if (start !== undefined && (best === null || start < best))
+                best = start;
+        }
+        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isMap */ .jh)(node)) {
+            for (const pair of node.items)
+                stack.push(pair.key, pair.value);
+        }
+        else if ((0,yaml__WEBPACK_IMPORTED_MODULE_0__/* .isSeq */ .oP)(node)) {
+            stack.push(...node.items);
+        }
+    }
+    return best;
+}
+function checkSize(bytes, file) {
+    if (bytes > YAML_GUARDS.maxBytes) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, { file });
+    }
+}
+function firstInvalidUtf8(bytes) {
+    // Largest prefix with no invalid byte (a cut-off sequence at its end is fine), by bisection:
+    // prefix validity is monotone and files are at most 1 MiB.
+    const validPrefix = (length) => {
+        try {
+            new TextDecoder('utf-8', { fatal: true }).decode(bytes.subarray(0, length), { stream: true });
+            return true;
+        }
+        catch {
+            return false;
+        }
+    };
+    if (validPrefix(bytes.length))
+        return Math.max(0, bytes.length - 1); // cut off at the end
+    let lo = 0; // valid
+    let hi = bytes.length; // invalid
+    while (hi - lo > 1) {
+        const mid = (lo + hi) >>> 1;
+        if (validPrefix(mid))
+            lo = mid;
+        else
+            hi = mid;
+    }
+    return hi - 1;
+}
+function positionInBytes(bytes, offset) {
+    let line = 1;
+    let lineStart = 0;
+    for (let i = 0; i < offset; i++) {
+        if (bytes[i] === 0x0a) {
+            line += 1;
+            lineStart = i + 1;
+        }
+    }
+    return { line, column: offset - lineStart + 1 };
+}
+function positionInText(text, offset) {
+    let line = 1;
+    let lineStart = 0;
+    for (let i = 0; i < offset; i++) {
+        if (text.charCodeAt(i) === 0x0a) {
+            line += 1;
+            lineStart = i + 1;
+        }
+    }
+    return { line, column: offset - lineStart + 1 };
+}
+
 
 /***/ }),
 
@@ -1755,6 +6842,70 @@ function jsonMetrics(record) {
     for (const [k, v] of Object.entries(record))
         out[k] = typeof v === 'number' ? jsonNumber(v) : v;
     return out;
+}
+
+
+/***/ }),
+
+/***/ 761:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   z: () => (/* binding */ nearestWord)
+/* harmony export */ });
+/* unused harmony export editDistance */
+/**
+ * "Did you mean": the allowed word nearest to a mistyped one, by the optimal-string-alignment
+ * distance (insertions, deletions, substitutions and swaps of two neighbours, each costing 1;
+ * Damerau 1964, restricted form).
+ */
+/** Words longer than this are not compared (the cost grows with the product of the lengths). */
+const MAX_LENGTH = 64;
+/**
+ * Edit distance between `a` and `b` with adjacent swaps (optimal string alignment), or
+ * `Infinity` when either is longer than 64 characters.
+ */
+function editDistance(a, b) {
+    if (a.length > MAX_LENGTH || b.length > MAX_LENGTH)
+        return Number.POSITIVE_INFINITY;
+    const rows = a.length + 1;
+    const cols = b.length + 1;
+    const d = new Array(rows * cols).fill(0);
+    for (let i = 0; i < rows; i++)
+        d[i * cols] = i;
+    for (let j = 0; j < cols; j++)
+        d[j] = j;
+    for (let i = 1; i < rows; i++) {
+        for (let j = 1; j < cols; j++) {
+            const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+            let best = Math.min(d[(i - 1) * cols + j] + 1, d[i * cols + j - 1] + 1, d[(i - 1) * cols + j - 1] + cost);
+            if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1])
+                best = Math.min(best, d[(i - 2) * cols + j - 2] + 1);
+            d[i * cols + j] = best;
+        }
+    }
+    return d[rows * cols - 1];
+}
+/**
+ * The candidate nearest to `word` (case ignored), when it is close enough to be a typo: at most
+ * 1 edit for words of up to 4 characters, 2 up to 8, 3 beyond. Ties go to the earlier candidate.
+ * Returns null when none is close enough or `word` is itself a candidate.
+ */
+function nearestWord(word, candidates) {
+    const lower = word.toLowerCase();
+    const allowed = lower.length <= 4 ? 1 : lower.length <= 8 ? 2 : 3;
+    let best = null;
+    let bestDistance = allowed + 1;
+    for (const candidate of candidates) {
+        if (candidate === word)
+            return null;
+        const distance = editDistance(lower, candidate.toLowerCase());
+        if (distance < bestDistance) {
+            best = candidate;
+            bestDistance = distance;
+        }
+    }
+    return best;
 }
 
 
@@ -2292,6 +7443,526 @@ function encodingError(file, line, utf16) {
         file,
         line,
     });
+}
+
+
+/***/ }),
+
+/***/ 8785:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  ay: () => (/* binding */ readHeader),
+  xz: () => (/* binding */ readTable)
+});
+
+// UNUSED EXPORTS: readTableChunks
+
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/data/csv-rules.ts
+var csv_rules = __nccwpck_require__(8706);
+// EXTERNAL MODULE: ./src/data/line-blocks.ts + 1 modules
+var line_blocks = __nccwpck_require__(4113);
+;// CONCATENATED MODULE: ./src/data/fast-path.ts
+/**
+ * The fast CSV path: one loop over the bytes of plain numeric CSV (no quotes), parsing
+ * numbers straight into Float64Array columns without building a string per field.
+ *
+ * It accepts a strict subset of what the general path accepts and gives the same numbers
+ * and line numbers for it. Anything else (a quote, a lone carriage return, a field count
+ * that differs from the header's, a cell that is not a plain finite number, white space
+ * other than spaces and tabs where it matters) makes it give up with
+ * {@link FastPathDeclined}; the caller then reads the file again on the general path,
+ * which either accepts it or throws the error the user should see.
+ */
+
+
+/** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
+class FastPathDeclined extends Error {
+    line;
+    constructor(line) {
+        super(`fast CSV path declined at line ${line}`);
+        this.line = line;
+    }
+}
+// Bytes the loop looks at.
+const TAB = 9;
+const LF = 10;
+const VT = 11;
+const FF = 12;
+const CR = 13;
+const SPACE = 32;
+const QUOTE = 34;
+const PLUS = 43;
+const COMMA = 44;
+const MINUS = 45;
+const POINT = 46;
+const DIGIT_0 = 48;
+const DIGIT_9 = 57;
+const UPPER_E = 69;
+const LOWER_E = 101;
+/**
+ * Largest mantissa that can take one more decimal digit and stay below 2^53 (every integer
+ * up to 2^53 is exact in a double): 900719925474098 * 10 + 9 < 9007199254740992.
+ */
+const MANTISSA_ROOM = 900719925474099;
+/** Exponents beyond this are clamped while reading digits (the value then goes through Number()). */
+const EXPONENT_CLAMP = 100000;
+/** Powers of ten that are exact in a double: 10^0 .. 10^22. */
+const EXACT_POWERS_OF_TEN = Float64Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
+/**
+ * Reads plain numeric CSV and yields numeric chunks; throws {@link FastPathDeclined} at the
+ * first thing it does not handle (chunks already yielded stay valid: they are exactly what
+ * the general path gives for those rows).
+ *
+ * A number is built exactly: the digits go into an integer mantissa m (kept below 2^53) and
+ * a decimal exponent e; when |e| <= 22 the value is m * 10^e or m / 10^-e, one correctly
+ * rounded operation on two exact doubles, hence equal to `Number(text)` (W. D. Clinger,
+ * "How to read floating point numbers accurately", PLDI 1990, the fast path). Otherwise the
+ * cell's text goes through `Number()`.
+ *
+ * @param pieces the file's bytes in pieces of any size
+ * @param target what to read
+ */
+async function* fastChunks(pieces, target) {
+    const reader = new FastReader(target);
+    for await (const block of (0,line_blocks/* lineBlocks */.Dr)(pieces)) {
+        const stop = (0,line_blocks/* blockError */.Si)(target.file, reader.line, block);
+        if (stop !== null)
+            throw stop;
+        let bytes = block.bytes;
+        if (block.final && bytes[bytes.length - 1] !== LF) {
+            // Give the last line its line feed so that every inner loop stops on one.
+            const closed = new Uint8Array(bytes.length + 1);
+            closed.set(bytes);
+            closed[bytes.length] = LF;
+            bytes = closed;
+        }
+        reader.read(bytes);
+        if (reader.stopped)
+            return;
+        for (const chunk of reader.builder.take()) {
+            yield chunk;
+            if (target.recycle === true)
+                reader.builder.recycle(chunk);
+        }
+    }
+    if (reader.plan === null)
+        throw (0,csv_rules/* emptyError */.CA)(target.file);
+    reader.builder.flush();
+    for (const chunk of reader.builder.take()) {
+        yield chunk;
+        if (target.recycle === true)
+            reader.builder.recycle(chunk);
+    }
+}
+/** State of the fast path between blocks. */
+class FastReader {
+    target;
+    builder;
+    plan = null;
+    /** 1-based line number of the next line to read. */
+    line = 1;
+    /** True once a header-only read has its header. */
+    stopped = false;
+    constructor(target) {
+        this.target = target;
+        this.builder = new csv_rules/* ChunkBuilder */.vB(target.request, target.chunkRows);
+    }
+    /** Reads whole lines; `buf` ends with a line feed. */
+    read(buf) {
+        let p = this.plan === null ? this.readHeader(buf) : 0;
+        if (this.plan === null || this.stopped)
+            return;
+        const builder = this.builder;
+        while (p < buf.length) {
+            p = this.readRows(buf, p);
+            // The buffer switch lives out here so the hot loop never runs code it has no type
+            // feedback for (which would throw away its optimised code).
+            if (builder.row === builder.capacity)
+                builder.full();
+        }
+    }
+    /** Reads rows from `p` until the block ends or the chunk buffers are full; returns the new offset. */
+    readRows(buf, p) {
+        const plan = this.plan;
+        const end = buf.length;
+        const slotOfField = plan.slotOfField;
+        const lastField = slotOfField.length - 1;
+        const builder = this.builder;
+        const slots = builder.slots;
+        const lines = builder.lines;
+        const capacity = builder.capacity;
+        let row = builder.row;
+        let line = this.line;
+        let text = null;
+        // The counters are stored on every line, inside the loop: code after a loop that V8 optimised
+        // while it ran has no type feedback, and reaching it would throw the optimised code away.
+        while (p < end && row < capacity) {
+            // Line start: skip spaces and tabs; a line of nothing else is blank.
+            let b = buf[p];
+            while (b === SPACE || b === TAB)
+                b = buf[++p];
+            if (b === LF) {
+                p++;
+                line++;
+                this.line = line;
+                continue;
+            }
+            if (b === CR && buf[p + 1] === LF) {
+                p += 2;
+                line++;
+                this.line = line;
+                continue;
+            }
+            // Other white space could make the line blank for the general path: let it decide.
+            if (b > 127 || b === VT || b === FF || b === CR)
+                throw new FastPathDeclined(line);
+            let field = 0;
+            for (;;) {
+                const slot = slotOfField[field];
+                if (slot >= 0) {
+                    // A requested cell: [spaces] [sign] digits [. digits] [e [sign] digits] [spaces]
+                    while (b === SPACE || b === TAB)
+                        b = buf[++p];
+                    const start = p;
+                    let negative = false;
+                    if (b === MINUS) {
+                        negative = true;
+                        b = buf[++p];
+                    }
+                    else if (b === PLUS) {
+                        b = buf[++p];
+                    }
+                    let mantissa = 0;
+                    let digits = 0;
+                    let exponent = 0;
+                    let exact = true;
+                    while (b >= DIGIT_0 && b <= DIGIT_9) {
+                        if (mantissa < MANTISSA_ROOM)
+                            mantissa = mantissa * 10 + (b - DIGIT_0);
+                        else
+                            exact = false;
+                        digits++;
+                        b = buf[++p];
+                    }
+                    if (b === POINT) {
+                        b = buf[++p];
+                        while (b >= DIGIT_0 && b <= DIGIT_9) {
+                            if (mantissa < MANTISSA_ROOM) {
+                                mantissa = mantissa * 10 + (b - DIGIT_0);
+                                exponent--;
+                            }
+                            else
+                                exact = false;
+                            digits++;
+                            b = buf[++p];
+                        }
+                    }
+                    if (digits === 0)
+                        throw new FastPathDeclined(line);
+                    if (b === LOWER_E || b === UPPER_E) {
+                        b = buf[++p];
+                        // The sign multiplies: a unary minus would run only for negative exponents, and code
+                        // that runs rarely has no type feedback when V8 optimises the loop.
+                        let exponentSign = 1;
+                        if (b === MINUS) {
+                            exponentSign = -1;
+                            b = buf[++p];
+                        }
+                        else if (b === PLUS) {
+                            b = buf[++p];
+                        }
+                        if (!(b >= DIGIT_0 && b <= DIGIT_9))
+                            throw new FastPathDeclined(line);
+                        let e = 0;
+                        while (b >= DIGIT_0 && b <= DIGIT_9) {
+                            if (e < EXPONENT_CLAMP)
+                                e = e * 10 + (b - DIGIT_0);
+                            b = buf[++p];
+                        }
+                        exponent += exponentSign * e;
+                    }
+                    let value;
+                    if (exact && exponent >= -22 && exponent <= 22) {
+                        value = exponent < 0 ? mantissa / EXACT_POWERS_OF_TEN[-exponent] : mantissa * EXACT_POWERS_OF_TEN[exponent];
+                        if (negative)
+                            value = -value;
+                    }
+                    else {
+                        text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
+                        value = Number(text.toString('latin1', start, p));
+                        // Overflow, and underflow of a nonzero text (mantissa > 0) to 0 or a subnormal: the
+                        // general path says which (the exact branch above can do neither).
+                        if (!Number.isFinite(value) || (mantissa !== 0 && Math.abs(value) < csv_rules/* MIN_NORMAL */.Vt))
+                            throw new FastPathDeclined(line);
+                    }
+                    while (b === SPACE || b === TAB)
+                        b = buf[++p];
+                    slots[slot][row] = value;
+                }
+                else {
+                    // An unused cell: skip to the comma or the line end.
+                    while (b !== COMMA && b !== LF) {
+                        if (b === QUOTE || (b === CR && buf[p + 1] !== LF))
+                            throw new FastPathDeclined(line);
+                        if (b === CR)
+                            break;
+                        b = buf[++p];
+                    }
+                }
+                if (b === COMMA) {
+                    if (field === lastField)
+                        throw new FastPathDeclined(line);
+                    field++;
+                    b = buf[++p];
+                    continue;
+                }
+                if (b === CR && buf[p + 1] === LF)
+                    b = buf[++p];
+                if (b !== LF || field !== lastField)
+                    throw new FastPathDeclined(line);
+                p++;
+                break;
+            }
+            lines[row] = line;
+            line++;
+            row++;
+            builder.row = row;
+            this.line = line;
+        }
+        return p;
+    }
+    /**
+     * Reads lines up to and including the first non-blank one, the header; returns the offset
+     * after it (or `buf.length` when the block has no header yet).
+     */
+    readHeader(buf) {
+        let p = 0;
+        while (p < buf.length) {
+            const lf = buf.indexOf(LF, p);
+            let end = lf;
+            if (end > p && buf[end - 1] === CR)
+                end--;
+            for (let i = p; i < end; i++) {
+                if (buf[i] === QUOTE || buf[i] === CR)
+                    throw new FastPathDeclined(this.line);
+            }
+            const text = utf8.decode(buf.subarray(p, end));
+            const line = this.line++;
+            p = lf + 1;
+            if (text.trim() === '')
+                continue;
+            const header = text.split(',').map((name) => name.trim());
+            this.plan = (0,csv_rules/* planColumns */.j7)(this.target.file, header, line, this.target.request);
+            this.target.onHeader(this.plan);
+            if (this.target.headerOnly)
+                this.stopped = true;
+            return p;
+        }
+        return p;
+    }
+}
+
+;// CONCATENATED MODULE: ./src/data/table.ts
+/**
+ * CSV data files to numeric columns.
+ *
+ * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
+ * chosen by name and only those are converted. What is accepted, in words:
+ *
+ * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
+ *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
+ *   is the number 1.5.
+ * - White space around a field is ignored (the characters `String.prototype.trim` removes),
+ *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
+ *   blank and skipped, before the header as well as between rows.
+ * - The header is the first non-blank record; its names are trimmed and must be unique.
+ * - A cell of a requested column must be a finite decimal number as JavaScript's `Number()`
+ *   reads it: sign, digits, point, exponent (`-1`, `.5`, `1.`, `2.5E-3`). Empty cells, `NaN`,
+ *   `Infinity`, `inf`, hexadecimal, values that overflow (`1e999`) and nonzero values that
+ *   underflow (`1e-400`, `1e-310`: `Number()` gives 0 or a subnormal) are errors.
+ * - The header must end within the first 1 MiB of the file and name at most 100,000 columns
+ *   (checked before a longer line is held in memory). A header that looks like a Git LFS
+ *   pointer, a semicolon- or tab-separated file, or CR-only line ends gets a hint in the error.
+ * - Every row has as many fields as the header.
+ * - The whole file must be UTF-8, not only the columns used.
+ *
+ * Two readers give the same numbers, line numbers and errors: a fast loop over the bytes for
+ * plain numeric CSV (fast-path.ts), and csv-parse for everything else (general-path.ts). The
+ * fast one hands the file to the general one when it meets something it does not handle.
+ */
+
+
+
+/**
+ * Streams a CSV file as numeric chunks (header checked first).
+ *
+ * Every chunk but the last holds exactly `chunkRows` rows; a file with a header and no data
+ * rows yields no chunk. Errors are InputErrors: `file-too-large` (before reading),
+ * `file-missing`, `csv-empty`, `csv-header`, `csv-missing-column`, `csv-ragged`, `csv-cell`,
+ * `csv-syntax`, `csv-encoding`; each names the file and, where there is one, the line.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path of the CSV file
+ * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
+ *   `general: true` to skip the fast path
+ */
+async function* readTableChunks(repo, path, options) {
+    const settings = checkOptions(options);
+    await checkSize(repo, path, settings.maxBytes);
+    yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
+}
+/**
+ * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
+ * chunks kept): after the first chunk the row count is estimated from the file size and the
+ * bytes read so far (plus 5 %), each chunk is copied in as it arrives and dropped, and the
+ * arrays grow by 1.5x when the estimate was short. The result views the first `rows` entries
+ * (capacity beyond that stays allocated: a few percent). Peak memory is about the data plus
+ * one chunk, instead of twice the data.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path of the CSV file
+ * @param options as for {@link readTableChunks}
+ * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
+ */
+async function readTable(repo, path, options) {
+    const settings = checkOptions(options);
+    const size = await checkSize(repo, path, settings.maxBytes);
+    let header = [];
+    let bytesRead = 0;
+    const counted = async function* () {
+        for await (const piece of repo.stream(path)) {
+            bytesRead += piece.length;
+            yield piece;
+        }
+    };
+    // First position of each distinct requested name (a repeated name shares one array).
+    const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
+    let columns = [];
+    let lines = new Int32Array(0);
+    let rows = 0;
+    const grow = (capacity) => {
+        columns = settings.columns.map((_, k) => {
+            if (firstOf[k] !== k)
+                return columns[firstOf[k]];
+            const next = new Float64Array(capacity);
+            if (rows > 0)
+                next.set(columns[k].subarray(0, rows));
+            return next;
+        });
+        const nextLines = new Int32Array(capacity);
+        if (rows > 0)
+            nextLines.set(lines.subarray(0, rows));
+        lines = nextLines;
+    };
+    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+        const needed = rows + chunk.rows;
+        if (needed > lines.length) {
+            let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
+            if (rows === 0 && bytesRead > 0) {
+                // First chunk: estimate the whole file's rows from its bytes per row.
+                const estimate = Math.ceil((size / bytesRead) * chunk.rows * 1.05);
+                capacity = Math.max(needed, Math.min(estimate, Math.ceil(size / 2) + 1));
+            }
+            grow(capacity);
+        }
+        settings.columns.forEach((_, k) => {
+            if (firstOf[k] === k)
+                columns[k].set(chunk.columns[k], rows);
+        });
+        lines.set(chunk.lines, rows);
+        rows = needed;
+    }
+    const out = new Map();
+    settings.columns.forEach((name, k) => {
+        if (!out.has(name))
+            out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
+    });
+    return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
+}
+/**
+ * Reads only the header names (for messages and checks): trimmed, in file order, checked
+ * for repeats (`csv-header`); `csv-empty` when the file has none.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path of the CSV file
+ * @param maxBytes size cap in bytes; default 512 MiB
+ */
+async function readHeader(repo, path, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS) {
+    const settings = checkOptions({ columns: [], maxBytes });
+    await checkSize(repo, path, settings.maxBytes);
+    let header = [];
+    // A header-only scan ends right after the header and yields no rows.
+    const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
+    while (!(await scanning.next()).done)
+        ;
+    return header;
+}
+/** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
+function checkOptions(options) {
+    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false } = options;
+    if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
+        throw new TypeError('readTable: `columns` must be an array of column names');
+    }
+    if (!Number.isInteger(chunkRows) || chunkRows < 1 || chunkRows > 2 ** 30) {
+        throw new RangeError(`readTable: \`chunkRows\` must be an integer from 1 to 2^30, got ${chunkRows}`);
+    }
+    if (!(maxBytes >= 0))
+        throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
+    return { columns, chunkRows, maxBytes, general };
+}
+/** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
+async function checkSize(repo, path, maxBytes) {
+    const size = await repo.size(path);
+    if (size > maxBytes) {
+        throw new errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
+    }
+    return size;
+}
+function megabytes(bytes) {
+    return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+}
+/**
+ * Runs the fast path, and on the general path from the start when the fast one declines,
+ * handing out only the rows the fast path has not handed out already.
+ */
+async function* scan(open, path, settings, onHeader, headerOnly, recycle = false) {
+    let headerSeen = false;
+    const target = {
+        file: path,
+        request: (0,csv_rules/* planRequest */.NX)(settings.columns),
+        chunkRows: settings.chunkRows,
+        headerOnly,
+        recycle,
+        onHeader: (plan) => {
+            if (headerSeen)
+                return;
+            headerSeen = true;
+            onHeader(plan);
+        },
+    };
+    let handedOut = 0;
+    if (!settings.general) {
+        try {
+            for await (const chunk of fastChunks(open(), target)) {
+                handedOut += chunk.rows;
+                yield chunk;
+            }
+            return;
+        }
+        catch (error) {
+            if (!(error instanceof FastPathDeclined))
+                throw error;
+        }
+    }
+    // csv-parse is loaded only when a file needs it (most data files take the fast path).
+    const { generalChunks } = await __nccwpck_require__.e(/* import() */ 462).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
+    yield* generalChunks(open(), target, handedOut);
 }
 
 
@@ -5367,6 +11038,18 @@ function parseExpect(value) {
     }
     return n;
 }
+/** Reads a number option within bounds (`min < x < max` when `open`, else `min <= x <= max`). */
+function parseNumberOption(value, name, fallback, min, max, open, whole = false) {
+    if (value === null)
+        return fallback;
+    const n = Number(value);
+    const inRange = open ? n > min && n < max : n >= min && n <= max;
+    if (value.trim() === '' || !Number.isFinite(n) || !inRange || (whole && !Number.isSafeInteger(n))) {
+        const range = open ? `between ${min} and ${max} (exclusive)` : `from ${min} to ${max}`;
+        throw new errors/* InputError */.dz('option-value', `expected ${whole ? 'a whole number' : 'a number'} ${range}, got ${JSON.stringify(value.slice(0, 40))}`, { key: `--${name}` });
+    }
+    return n;
+}
 /** Reads `--jobs`: a whole number >= 1. */
 function parseJobs(value) {
     if (value === undefined)
@@ -5382,6 +11065,7 @@ const OUT = { name: 'out', value: 'file', description: 'write the report to a fi
 const FAIL_ON = { name: 'fail-on', value: 'level', description: 'what fails the run', choices: ['fail', 'warn'], default: 'fail' };
 const COLOR = { name: 'color', description: 'force colours in the text report' };
 const NO_COLOR = { name: 'no-color', description: 'never use colours' };
+const VERBOSE = { name: 'verbose', description: 'text report: list every check of every model with its figure, passing ones included' };
 const DEBUG = { name: 'debug', description: 'print stack traces of unexpected errors' };
 const HELP = { name: 'help', description: 'print this help' };
 /** Every command, in the order the main help lists them. */
@@ -5404,6 +11088,7 @@ const COMMANDS = [
             { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
             { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },
             { name: 'junit', value: 'file', description: 'also write a JUnit XML report to this file' },
+            VERBOSE,
             DEBUG,
             HELP,
         ],
@@ -5422,9 +11107,47 @@ const COMMANDS = [
             { name: 'junit', value: 'file', description: 'also write a JUnit XML report of the joined result to this file' },
             COLOR,
             NO_COLOR,
+            VERBOSE,
             DEBUG,
             HELP,
         ],
+    },
+    {
+        name: 'init',
+        summary: 'Start checking a model: write a settings file (when there is none) and a first descriptor for a training CSV, with every limit and its default as comments. Splits a reproducible hold-out off the file when no hold-out is given. Never overwrites a file without --force.',
+        argument: { name: 'train', description: 'the training CSV (inside the repository root)', required: true },
+        options: [
+            { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read or written', default: '.' },
+            { name: 'holdout', value: 'file', description: 'the hold-out CSV (default: split one off the training file)' },
+            { name: 'target', value: 'column', description: 'the column to predict (default: the last column)' },
+            { name: 'task', value: 'task', description: 'what the model predicts', choices: ['regression', 'classification'], default: 'regression' },
+            { name: 'name', value: 'name', description: "the model's name (default: from the file name)" },
+            { name: 'split', value: 'how', description: 'how to split a hold-out off one file: random rows (seeded) or the last rows (data in time order)', choices: ['random', 'last'], default: 'random' },
+            { name: 'holdout-share', value: 'share', description: 'share of the rows to hold out when splitting', default: '0.25' },
+            { name: 'seed', value: 'n', description: 'seed of the random split', default: '1' },
+            { name: 'degree', value: 'd', description: 'terms of the first model: 1 linear terms, 2 polynomials of degree 2 on standardised inputs', choices: ['1', '2'], default: '1' },
+            { name: 'force', description: 'overwrite files that exist' },
+            DEBUG,
+            HELP,
+        ],
+    },
+    {
+        name: 'refit',
+        summary: "Refit models and write the coefficients into each descriptor's `coefficients`, leaving the rest of the file as it is. With --check, write nothing and exit 1 when any shipped coefficients are stale.",
+        argument: { name: 'descriptor', description: 'model descriptors (default: every model the settings file matches)', required: false },
+        options: [
+            { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read or written', default: '.' },
+            { name: 'config', value: 'file', description: 'settings file, relative to the root', default: 'fitgate.yml' },
+            { name: 'check', description: 'write nothing; exit 1 when a descriptor ships coefficients that differ from the refit (or none)' },
+            DEBUG,
+            HELP,
+        ],
+    },
+    {
+        name: 'explain',
+        summary: "Explain a check: its figure, formula and source, and what to change. With no id, list the checks.",
+        argument: { name: 'check', description: 'check ids or limit keys (default: list every check)', required: false },
+        options: [HELP],
     },
 ];
 const DESCRIPTION = 'Refit committed regression models, re-score them on their hold-out rows, and fail when they overfit.';
@@ -5445,7 +11168,10 @@ function usageError(message, command) {
  */
 function parseArgs(argv, cwd) {
     const [first, ...rest] = argv;
-    if (first === undefined || first === '-h' || first === '--help')
+    // No command at all is a usage mistake (a script calling `fitgate` alone did nothing): the help, status 2.
+    if (first === undefined)
+        return { kind: 'print', text: mainHelp(), status: 2 };
+    if (first === '-h' || first === '--help')
         return { kind: 'print', text: mainHelp(), status: 0 };
     if (first === '-V' || first === '--version')
         return { kind: 'print', text: `${version/* VERSION */.x}\n`, status: 0 };
@@ -5472,11 +11198,36 @@ function parseArgs(argv, cwd) {
         out: value('out'),
         color: read.color,
         debug: read.switches.has('debug'),
+        verbose: read.switches.has('verbose'),
         html: value('html'),
         sarif: value('sarif'),
         junit: value('junit'),
     };
     const failOn = value('fail-on') === 'warn' ? 'warn' : 'fail';
+    if (command.name === 'explain')
+        return { kind: 'explain', ids: read.positionals };
+    if (command.name === 'init') {
+        if (read.positionals.length > 1)
+            return usageError(`expected one training CSV, got ${read.positionals.length} arguments`, command);
+        const initRoot = (0,real_folder/* realFolder */.PX)(external_node_path_default().resolve(cwd, value('root') ?? '.'), { key: '--root', within: cwd, withinName: 'working directory' });
+        const [train] = read.positionals;
+        const holdout = value('holdout');
+        return {
+            kind: 'init',
+            root: initRoot,
+            train: toRepoPath([initRoot], external_node_path_default().resolve(cwd, train), train, train),
+            holdout: holdout === null ? null : toRepoPath([initRoot], external_node_path_default().resolve(cwd, holdout), holdout, '--holdout'),
+            target: value('target'),
+            task: value('task') === 'classification' ? 'classification' : 'regression',
+            name: value('name'),
+            split: value('split') === 'last' ? 'last' : 'random',
+            holdoutShare: parseNumberOption(value('holdout-share'), 'holdout-share', 0.25, 0, 1, true),
+            seed: parseNumberOption(value('seed'), 'seed', 1, 0, 2 ** 31 - 1, false, true),
+            degree: value('degree') === '2' ? 2 : 1,
+            force: read.switches.has('force'),
+            debug: common.debug,
+        };
+    }
     if (command.name === 'merge') {
         return { kind: 'merge', reports: read.positionals.map((r) => external_node_path_default().resolve(cwd, r)), failOn, ...common, expect: parseExpect(value('expect')) };
     }
@@ -5487,16 +11238,19 @@ function parseArgs(argv, cwd) {
     const config = value('config');
     const base = value('base');
     const shard = value('shard');
+    const settings = {
+        root,
+        config: toRepoPath([named], external_node_path_default().resolve(named, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
+        configExplicit: config !== null,
+        // Descriptor arguments may be written through the root as named or as it really is.
+        descriptors: read.positionals.map((d) => toRepoPath([named, root], external_node_path_default().resolve(cwd, d), d, d)),
+        failOn,
+    };
+    if (command.name === 'refit')
+        return { kind: 'refit', settings, check: read.switches.has('check'), debug: common.debug };
     return {
         kind: 'check',
-        settings: {
-            root,
-            config: toRepoPath([named], external_node_path_default().resolve(named, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
-            configExplicit: config !== null,
-            // Descriptor arguments may be written through the root as named or as it really is.
-            descriptors: read.positionals.map((d) => toRepoPath([named, root], external_node_path_default().resolve(cwd, d), d, d)),
-            failOn,
-        },
+        settings,
         ...common,
         base: base !== null && base !== '' ? base : null,
         shard: shard !== null ? (0,run_shard/* parseShard */.uK)(shard, '--shard') : null,
@@ -8443,15 +14197,51 @@ function metric(m, key) {
     return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
-    const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
+    const status = paint(c.status.toUpperCase().padEnd(c.status === 'skipped' ? 7 : 4), c.status, color);
     const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.message)}`;
     return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
-/** Formats the Result for a terminal. */
+/**
+ * Where a model's error is, for the line under its header: `file:line:column: ` (the form
+ * editors and terminals link), the parts that are known.
+ */
+function errorWhere(m) {
+    const e = m.error;
+    if (!e?.file)
+        return '';
+    return `${e.file}${e.line ? `:${e.line}${e.column ? `:${e.column}` : ''}` : ''}: `;
+}
+/**
+ * A model's header: status, name and descriptor path; a model that could not be loaded is named
+ * by its path, which then stands once.
+ */
+function modelHeader(m, color) {
+    const where = m.name === m.descriptor ? '' : ` (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.descriptor)})`;
+    return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name)}${where}`;
+}
+/** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
+function baseCell(m) {
+    if (m.base === undefined)
+        return '–';
+    if (m.base.status === 'new')
+        return 'new';
+    const change = m.base.holdout_rmse_change === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(m.base.holdout_rmse_change);
+    if (change === null || !Number.isFinite(change))
+        return '–';
+    const percent = change * 100;
+    return `${percent > 0 ? '+' : ''}${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)(percent)}%`;
+}
+/**
+ * Formats the Result for a terminal: the table of models (a `vs base` column when the run was
+ * compared with a base commit), one block per model that did not pass (every model, with every
+ * check, when `verbose`), the run's notes and the closing count.
+ */
 function formatText(result, options = {}) {
     const color = options.color ?? false;
     const out = [];
-    const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
+    // With a base comparison, one more column: the hold-out RMSE change against the base commit.
+    const withBase = result.models.some((m) => m.base !== undefined);
+    const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef', ...(withBase ? ['vs base'] : [])];
     const rows = result.models.map((m) => [
         m.verdict,
         (0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name),
@@ -8459,9 +14249,10 @@ function formatText(result, options = {}) {
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
         metric(m, 'max_std_coefficient'),
+        ...(withBase ? [baseCell(m)] : []),
     ]);
     if (rows.length > 0) {
-        const lines = table([header, ...rows], [false, false, true, true, true, true]);
+        const lines = table([header, ...rows], [false, false, true, true, true, true, true]);
         out.push(lines[0]);
         lines.slice(1).forEach((line, i) => {
             const v = result.models[i].verdict;
@@ -8471,20 +14262,20 @@ function formatText(result, options = {}) {
     else {
         out.push('no models to check');
     }
+    const verbose = options.verbose ?? false;
     for (const m of result.models) {
-        if (m.verdict === 'pass')
+        if (m.verdict === 'pass' && !verbose)
             continue;
         out.push('');
-        out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.descriptor)})`);
+        out.push(modelHeader(m, color));
         if (m.error) {
-            const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(where + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(errorWhere(m) + m.error.message)}`);
             continue;
         }
         if ((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .isClassifier */ .aA)(m))
             out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
         for (const c of m.checks)
-            if (c.status === 'fail' || c.status === 'warn')
+            if (verbose || c.status === 'fail' || c.status === 'warn')
                 out.push(checkLine(m, c, color));
     }
     for (const note of result.notes)
@@ -8541,7 +14332,7 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 4706:
+/***/ 2897:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -8550,4824 +14341,22 @@ __nccwpck_require__.d(__webpack_exports__, {
   a: () => (/* binding */ runPipeline)
 });
 
+// UNUSED EXPORTS: settingsNote
+
 // EXTERNAL MODULE: ./src/core/errors.ts
-var core_errors = __nccwpck_require__(4296);
+var errors = __nccwpck_require__(4296);
 // EXTERNAL MODULE: ./src/repo/repo-path.ts
 var repo_path = __nccwpck_require__(3856);
-;// CONCATENATED MODULE: ./src/config/generated/limit-keys.ts
-/** Every limit key, in registry (report) order. */
-const limit_keys_LIMIT_KEYS = Object.freeze([
-    { key: "gap_ratio", defaultSpec: 1.5, direction: "above", description: "Hold-out RMSE divided by training RMSE." },
-    { key: "params_per_sample", defaultSpec: 0.1, direction: "above", description: "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter)." },
-    { key: "coefficient", defaultSpec: 25, direction: "above", description: "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns." },
-    { key: "base_change", defaultSpec: "off", direction: "above", description: "Relative change of the hold-out RMSE against the same model on the base branch." },
-    { key: "cv_ratio", defaultSpec: "off", direction: "above", description: "Pooled k-fold cross-validation RMSE divided by training RMSE." },
-    { key: "swing", defaultSpec: { "warn": 0.25, "fail": 0.5 }, direction: "above", description: "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths." },
-    { key: "swing_beyond", defaultSpec: { "warn": 1 }, direction: "above", description: "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation)." },
-    { key: "swing_spikes", defaultSpec: { "warn": 1.5, "fail": 2 }, direction: "above", description: "Total variation of the predictions between the training samples divided by the training targets' own total variation." },
-    { key: "leakage", defaultSpec: 0, direction: "above", description: "Hold-out rows that also appear in the training data (the default 0 fails when there is any)." },
-    { key: "reproducibility", defaultSpec: 0.01, direction: "above", description: "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target." },
-    { key: "condition", defaultSpec: { "warn": 100000000 }, direction: "above", description: "2-norm condition number of the column-scaled design matrix." },
-    { key: "complexity", defaultSpec: { "warn": 1.5 }, direction: "above", description: "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks." },
-    { key: "holdout_r2", defaultSpec: "off", direction: "below", description: "Hold-out R^2 (coefficient of determination)." },
-    { key: "holdout_rmse", defaultSpec: "off", direction: "above", description: "Hold-out RMSE in the target's units." },
-    { key: "holdout_mae", defaultSpec: "off", direction: "above", description: "Hold-out mean absolute error in the target's units." },
-    { key: "chi_square", defaultSpec: { "warn_below": 0.5, "warn_above": 2 }, direction: "above", description: "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only)." },
-    { key: "separation", defaultSpec: { "warn": 0, "fail": 1 }, direction: "above", description: "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete." },
-    { key: "events_per_parameter", defaultSpec: 10, direction: "below", description: "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit." },
-    { key: "calibration_slope", defaultSpec: { "warn": 0.8, "fail": 0.6 }, direction: "below", description: "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit." },
-]);
-
-;// CONCATENATED MODULE: ./src/config/limits.ts
-/**
- * Limits: the known keys (generated from the check registry), the limit forms, and how the three
- * layers (built-in defaults < settings file < descriptor) combine. Checks read their limit from
- * `Descriptor.limits[key]`.
- *
- * Forms (docs/configuration.md, "Limits"):
- * - a number: fail beyond it in the check's direction (above a ceiling, below a floor);
- * - `{ warn, fail }`: warn and fail beyond them in the check's direction (at least one);
- * - `{ warn_below, fail_below, warn_above, fail_above }`: explicit bounds (at least one), for a
- *   floor, a ceiling or both on any check;
- * - `off`: skip the check.
- */
-
-
-/** The known limit keys, in registry order. */
-function limitKeyNames() {
-    return LIMIT_KEYS.map((k) => k.key);
-}
-/** The known key's entry, or undefined. */
-function limitKeyInfo(key) {
-    return limit_keys_LIMIT_KEYS.find((k) => k.key === key);
-}
-/** The direction of a key's check (`above` for a key no check knows). */
-function limitDirection(key) {
-    return limitKeyInfo(key)?.direction ?? 'above';
-}
-/** The bounds of an explicit spec, or null for the other forms. */
-function explicitBounds(spec) {
-    if (typeof spec !== 'object' || spec === null)
-        return null;
-    if (!('warn_below' in spec || 'fail_below' in spec || 'warn_above' in spec || 'fail_above' in spec))
-        return null;
-    const s = spec;
-    return { warnBelow: s.warn_below ?? null, failBelow: s.fail_below ?? null, warnAbove: s.warn_above ?? null, failAbove: s.fail_above ?? null };
-}
-/**
- * Why a spec's bounds are out of order, or null when they are in order: a ceiling's warn at most
- * its fail, a floor's warn at least its fail, every floor below every ceiling.
- * @returns the offending pair as `[key, message]`
- */
-function limitOrderProblem(spec, direction) {
-    if (spec === 'off' || typeof spec === 'number')
-        return null;
-    const b = explicitBounds(spec);
-    const plain = spec;
-    const warnBelow = b ? b.warnBelow : direction === 'below' ? (plain.warn ?? null) : null;
-    const failBelow = b ? b.failBelow : direction === 'below' ? (plain.fail ?? null) : null;
-    const warnAbove = b ? b.warnAbove : direction === 'above' ? (plain.warn ?? null) : null;
-    const failAbove = b ? b.failAbove : direction === 'above' ? (plain.fail ?? null) : null;
-    const [wa, fa, wb, fb] = b ? ['warn_above', 'fail_above', 'warn_below', 'fail_below'] : ['warn', 'fail', 'warn', 'fail'];
-    if (warnAbove !== null && failAbove !== null && warnAbove > failAbove)
-        return [wa, `${wa} ${warnAbove} is above ${fa} ${failAbove}; expected ${wa} <= ${fa} (a ceiling warns before it fails)`];
-    if (warnBelow !== null && failBelow !== null && warnBelow < failBelow)
-        return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
-    const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
-    const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
-    if (floor > ceiling)
-        return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
-    return null;
-}
-/**
- * Normalises a limit as written to a {@link Limit}.
- *
- * @param spec one of the forms above; numbers finite (the loaders check the forms and the order
- *   with file positions first; here a bad spec is a programming error: TypeError / RangeError)
- * @param direction the check's direction, for a number and `{ warn, fail }`
- * @param source which layer the spec came from
- * @param line descriptor line of the key (descriptor limits only), else null
- */
-function toLimit(spec, direction, source, line) {
-    const none = { warn: null, fail: null, warnBelow: null, failBelow: null };
-    if (spec === 'off')
-        return { ...none, off: true, source, line };
-    if (typeof spec === 'number') {
-        assertThreshold(spec);
-        return direction === 'above' ? { ...none, fail: spec, off: false, source, line } : { ...none, failBelow: spec, off: false, source, line };
-    }
-    if (spec === null || typeof spec !== 'object')
-        throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
-    const problem = limitOrderProblem(spec, direction);
-    if (problem !== null)
-        throw new RangeError(problem[1]);
-    const b = explicitBounds(spec);
-    let limit;
-    if (b !== null) {
-        limit = { warn: b.warnAbove, fail: b.failAbove, warnBelow: b.warnBelow, failBelow: b.failBelow, off: false, source, line };
-    }
-    else {
-        const { warn = null, fail = null } = spec;
-        limit = direction === 'above' ? { ...none, warn, fail, off: false, source, line } : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
-    }
-    const bounds = [limit.warn, limit.fail, limit.warnBelow, limit.failBelow].filter((x) => x !== null);
-    if (bounds.length === 0)
-        throw new RangeError('a limit needs at least one bound');
-    for (const x of bounds)
-        assertThreshold(x);
-    return limit;
-}
-function assertThreshold(x) {
-    if (typeof x !== 'number' || !Number.isFinite(x))
-        throw new RangeError(`limit threshold must be a finite number, got ${String(x)}`);
-}
-/**
- * Merges limits key by key: built-in default < settings file < descriptor. A layer that
- * sets a key replaces the whole limit of the layer below (no mixing of `warn` from one
- * layer with `fail` from another).
- *
- * @param settings the settings file (its `limits`)
- * @param descriptorLimits the descriptor's own limits with the line of each key
- * @returns one {@link Limit} per known key plus any further key a layer sets
- */
-function mergeLimits(settings, descriptorLimits) {
-    const merged = {};
-    for (const { key, defaultSpec, direction } of limit_keys_LIMIT_KEYS)
-        merged[key] = toLimit(defaultSpec, direction, 'default', null);
-    for (const [key, { spec }] of Object.entries(settings.limits))
-        merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
-    for (const [key, { spec, line }] of Object.entries(descriptorLimits))
-        merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
-    return merged;
-}
-
-;// CONCATENATED MODULE: ./src/config/schema-errors.ts
-/**
- * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
- * in document order (and within it the deepest), with the file, line, column, key path, the
- * bad value (quoted, cut) and what the schema expected.
- */
-
-/** Code of every schema violation. */
-const SCHEMA_ERROR_CODE = 'schema';
-/**
- * Formats a key path as written in messages: `terms[1].rbf.width`.
- *
- * @param path map keys and list indexes; the empty path gives the empty string
- */
-function formatKeyPath(path) {
-    let out = '';
-    for (const segment of path) {
-        if (typeof segment === 'number')
-            out += `[${segment}]`;
-        else
-            out += out === '' ? segment : `.${segment}`;
-    }
-    return out;
-}
-/**
- * An InputError at a key path of a parsed document.
- *
- * @param doc the parsed document (for positions)
- * @param file repository-relative path
- * @param code stable error code
- * @param path key path the problem is about
- * @param message what is wrong and what was expected
- * @param pointAt `value` (default) points at the value, `key` at the key, `parent` at the parent's key
- */
-function errorAt(doc, file, code, path, message, pointAt = 'value') {
-    const position = locate(doc, path, pointAt);
-    const key = formatKeyPath(path);
-    return new core_errors/* InputError */.dz(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
-}
-/** Quotes a user value for a message; non-finite numbers as YAML writes them. */
-function showValue(value) {
-    if (typeof value === 'number' && !Number.isFinite(value))
-        return Number.isNaN(value) ? '.nan' : value > 0 ? '.inf' : '-.inf';
-    if (value instanceof Uint8Array)
-        return 'binary data';
-    if (value === null)
-        return 'nothing (null)';
-    return (0,core_errors/* quoteValue */.cl)(value);
-}
-/**
- * The single most specific InputError for a failed validation.
- *
- * @param errors ajv errors (compiled with `allErrors` and `verbose`)
- * @param doc the parsed document the errors are about
- * @param file repository-relative path
- */
-function schemaError(errors, doc, file) {
-    const issues = resolveAlternatives(errors).flatMap((e) => toIssue(e, doc.value));
-    if (issues.length === 0)
-        return new core_errors/* InputError */.dz(SCHEMA_ERROR_CODE, 'does not match its schema', { file });
-    // First in document order; within its subtree, the deepest.
-    const placed = issues.map((issue, index) => ({ issue, index, at: locate(doc, issue.path, issue.pointAt) ?? { line: 0, column: 0 } }));
-    placed.sort((a, b) => a.at.line - b.at.line || a.at.column - b.at.column || a.index - b.index);
-    const first = placed[0];
-    let chosen = first;
-    for (const candidate of placed) {
-        if (isPrefix(first.issue.path, candidate.issue.path) && candidate.issue.path.length > chosen.issue.path.length)
-            chosen = candidate;
-    }
-    const { issue } = chosen;
-    return errorAt(doc, file, SCHEMA_ERROR_CODE, issue.path, issue.message, issue.pointAt);
-}
-function isPrefix(prefix, path) {
-    return prefix.length <= path.length && prefix.every((s, i) => s === path[i]);
-}
-function locate(doc, path, pointAt) {
-    let target = pointAt === 'parent' ? path.slice(0, -1) : path;
-    let position = pointAt === 'value' ? doc.valuePositionOf(target) : doc.positionOf(target);
-    while (position === null && target.length > 0) {
-        target = target.slice(0, -1);
-        position = doc.positionOf(target);
-    }
-    return position;
-}
-/** Replaces each failed oneOf/anyOf and its branch errors by the errors of the branch the user meant, or one "expected one of" error. */
-function resolveAlternatives(errors) {
-    const alternatives = errors.filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf').sort((a, b) => a.schemaPath.length - b.schemaPath.length);
-    if (alternatives.length === 0)
-        return errors;
-    const outer = alternatives[0];
-    const prefix = `${outer.schemaPath}/`;
-    const inside = errors.filter((e) => e.schemaPath.startsWith(prefix));
-    const rest = errors.filter((e) => e !== outer && !e.schemaPath.startsWith(prefix));
-    const branches = new Map();
-    for (const e of inside) {
-        const index = Number.parseInt(e.schemaPath.slice(prefix.length), 10);
-        branches.set(index, [...(branches.get(index) ?? []), e]);
-    }
-    const matchingType = [...branches.entries()].filter(([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')));
-    const score = (list) => [Math.max(...list.map((e) => effectiveDepth(e))), -list.length];
-    let best = null;
-    let tie = false;
-    for (const [, list] of matchingType) {
-        if (best === null) {
-            best = list;
-            continue;
-        }
-        const [d1, n1] = score(list);
-        const [d0, n0] = score(best);
-        if (d1 > d0 || (d1 === d0 && n1 > n0)) {
-            best = list;
-            tie = false;
-        }
-        else if (d1 === d0 && n1 === n0) {
-            tie = true;
-        }
-    }
-    const chosen = best !== null && !tie ? best : [alternativesError(outer)];
-    return resolveAlternatives([...rest, ...chosen]);
-}
-/** A stand-in error listing the forms of a failed oneOf/anyOf. */
-function alternativesError(outer) {
-    const forms = Array.isArray(outer.schema) ? outer.schema.map((s) => s.title ?? 'another form') : [];
-    return { ...outer, keyword: 'x-alternatives', params: { forms } };
-}
-function effectiveDepth(e) {
-    const depth = e.instancePath === '' ? 0 : e.instancePath.split('/').length - 1;
-    return e.keyword === 'required' || e.keyword === 'additionalProperties' || e.keyword === 'propertyNames' ? depth + 1 : depth;
-}
-/** JSON pointer to a key path; numbers where the data there is a list. */
-function pointerToPath(pointer, root) {
-    if (pointer === '')
-        return [];
-    const path = [];
-    let node = root;
-    for (const raw of pointer.slice(1).split('/')) {
-        const segment = raw.replace(/~1/g, '/').replace(/~0/g, '~');
-        if (Array.isArray(node)) {
-            const index = Number(segment);
-            path.push(index);
-            node = node[index];
-        }
-        else {
-            path.push(segment);
-            node = node !== null && typeof node === 'object' ? node[segment] : undefined;
-        }
-    }
-    return path;
-}
-const TYPE_WORDS = {
-    number: 'a number',
-    integer: 'an integer',
-    string: 'text',
-    object: 'a mapping (key: value)',
-    array: 'a list',
-    boolean: 'true or false',
-    null: 'nothing',
-};
-const PATTERN_WORDS = {
-    '^[A-Za-z0-9._-]+$': 'only letters, digits, `-`, `_` or `.`',
-};
-function orList(items) {
-    if (items.length <= 1)
-        return items.join('');
-    return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
-}
-function toIssue(e, root) {
-    const path = pointerToPath(e.instancePath, root);
-    const parent = (e.parentSchema ?? {});
-    const got = `got ${showValue(e.data)}`;
-    const params = e.params;
-    const keys = Object.keys(parent.properties ?? {});
-    const isTerm = Array.isArray(parent.propertyNames?.enum) && parent.maxProperties === 1;
-    const kinds = (parent.propertyNames?.enum ?? []).map(String);
-    switch (e.keyword) {
-        case 'type': {
-            const types = (Array.isArray(params.type) ? params.type : String(params.type).split(','));
-            let expected = orList(types.map((t) => TYPE_WORDS[t] ?? t));
-            if (typeof e.data === 'number' && !Number.isFinite(e.data))
-                expected = `a finite ${types.includes('integer') ? 'integer' : 'number'}`;
-            if (types.includes('object') && isTerm)
-                expected = `a mapping with one key, the term kind (${orList(kinds)})`;
-            else if (types.includes('object') && keys.length > 0)
-                expected += ` with keys among: ${keys.join(', ')}`;
-            return [{ path, pointAt: 'value', message: `expected ${expected}, ${got}` }];
-        }
-        case 'enum':
-            if (e.propertyName !== undefined)
-                return []; // reported by propertyNames
-            return [{ path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` }];
-        case 'const':
-            return [{ path, pointAt: 'value', message: `expected \`${(0,core_errors/* clip */.$Q)(String(params.allowedValue))}\`, ${got}` }];
-        case 'minimum':
-        case 'maximum':
-        case 'exclusiveMinimum':
-        case 'exclusiveMaximum':
-            return [{ path, pointAt: 'value', message: `expected ${boundsText(parent)}, ${got}` }];
-        case 'multipleOf':
-            return [{ path, pointAt: 'value', message: `expected a multiple of ${String(params.multipleOf)}, ${got}` }];
-        case 'minLength':
-            return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}` }];
-        case 'maxLength':
-            return [{ path, pointAt: 'value', message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters` }];
-        case 'pattern': {
-            const pattern = String(params.pattern);
-            return [{ path, pointAt: 'value', message: `expected ${PATTERN_WORDS[pattern] ?? `text matching ${pattern}`}, ${got}` }];
-        }
-        case 'minItems':
-            return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}` }];
-        case 'maxItems':
-            return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
-        case 'required': {
-            const missing = String(params.missingProperty);
-            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
-        }
-        case 'additionalProperties': {
-            const extra = String(params.additionalProperty);
-            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`; expected one of: ${keys.join(', ')}` }];
-        }
-        case 'propertyNames': {
-            const name = String(params.propertyName);
-            const what = isTerm ? 'term kind' : 'key';
-            return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,core_errors/* clip */.$Q)(name)}\`; expected one of: ${kinds.join(', ')}` }];
-        }
-        case 'minProperties':
-        case 'maxProperties': {
-            const present = e.data !== null && typeof e.data === 'object' ? Object.keys(e.data) : [];
-            if (isTerm) {
-                const has = present.length === 0 ? 'no key' : `${present.length} keys (${present.join(', ')})`;
-                return [{ path, pointAt: 'value', message: `a term has exactly one key, the term kind (${orList(kinds)}); got ${has}` }];
-            }
-            return [{ path, pointAt: 'value', message: `expected at least one of: ${keys.join(', ')}, ${got}` }];
-        }
-        case 'x-alternatives':
-            return [{ path, pointAt: 'value', message: `expected one of: ${orList(params.forms)}, ${got}` }];
-        case 'oneOf':
-            return [{ path, pointAt: 'value', message: `matches more than one form; ${got}` }];
-        default:
-            return [{ path, pointAt: 'value', message: `${e.message ?? 'is not valid'}, ${got}` }];
-    }
-}
-function boundsText(schema) {
-    const what = schema.type === 'integer' ? 'an integer' : 'a number';
-    const parts = [];
-    if (schema.minimum !== undefined && schema.maximum !== undefined)
-        return `${what} from ${schema.minimum} to ${schema.maximum}`;
-    if (schema.minimum !== undefined)
-        parts.push(`>= ${schema.minimum}`);
-    if (schema.exclusiveMinimum !== undefined)
-        parts.push(`> ${schema.exclusiveMinimum}`);
-    if (schema.maximum !== undefined)
-        parts.push(`<= ${schema.maximum}`);
-    if (schema.exclusiveMaximum !== undefined)
-        parts.push(`< ${schema.exclusiveMaximum}`);
-    return `${what} ${parts.join(' and ')}`;
-}
-
-;// CONCATENATED MODULE: ./src/config/schema/descriptor.schema.json
-const descriptor_schema_namespaceObject = {};
-;// CONCATENATED MODULE: ./src/config/schema/settings.schema.json
-const settings_schema_namespaceObject = {};
-// EXTERNAL MODULE: ./node_modules/ajv/dist/runtime/ucs2length.js
-var ucs2length = __nccwpck_require__(6214);
-;// CONCATENATED MODULE: ./src/config/generated/validators.ts
-// @ts-nocheck
-// Generated by test/tools/gen-validators.mjs from src/config/schema/*.json: do not edit.
-
-
-const validateSettings = validate52;
-const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
-const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
-const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
-const func2 = Object.prototype.hasOwnProperty;
-const schema21 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
-function validate54(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate54.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    const _errs0 = errors;
-    let valid0 = false;
-    let passing0 = null;
-    const _errs1 = errors;
-    if ((typeof data == "number") && (isFinite(data))) {
-        if (data < 0 || isNaN(data)) {
-            const err0 = { instancePath, schemaPath: "#/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[0], data };
-            if (vErrors === null) {
-                vErrors = [err0];
-            }
-            else {
-                vErrors.push(err0);
-            }
-            errors++;
-        }
-    }
-    else {
-        const err1 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[0].type, parentSchema: schema21.oneOf[0], data };
-        if (vErrors === null) {
-            vErrors = [err1];
-        }
-        else {
-            vErrors.push(err1);
-        }
-        errors++;
-    }
-    var _valid0 = _errs1 === errors;
-    if (_valid0) {
-        valid0 = true;
-        passing0 = 0;
-    }
-    const _errs3 = errors;
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        if (Object.keys(data).length < 1) {
-            const err2 = { instancePath, schemaPath: "#/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema21.oneOf[1], data };
-            if (vErrors === null) {
-                vErrors = [err2];
-            }
-            else {
-                vErrors.push(err2);
-            }
-            errors++;
-        }
-        for (const key0 in data) {
-            if (!((key0 === "warn") || (key0 === "fail"))) {
-                const err3 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema21.oneOf[1], data };
-                if (vErrors === null) {
-                    vErrors = [err3];
-                }
-                else {
-                    vErrors.push(err3);
-                }
-                errors++;
-            }
-        }
-        if (data.warn !== undefined) {
-            let data0 = data.warn;
-            if ((typeof data0 == "number") && (isFinite(data0))) {
-                if (data0 < 0 || isNaN(data0)) {
-                    const err4 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[1].properties.warn, data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err4];
-                    }
-                    else {
-                        vErrors.push(err4);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err5 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[1].properties.warn.type, parentSchema: schema21.oneOf[1].properties.warn, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err5];
-                }
-                else {
-                    vErrors.push(err5);
-                }
-                errors++;
-            }
-        }
-        if (data.fail !== undefined) {
-            let data1 = data.fail;
-            if ((typeof data1 == "number") && (isFinite(data1))) {
-                if (data1 < 0 || isNaN(data1)) {
-                    const err6 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema21.oneOf[1].properties.fail, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err6];
-                    }
-                    else {
-                        vErrors.push(err6);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err7 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[1].properties.fail.type, parentSchema: schema21.oneOf[1].properties.fail, data: data1 };
-                if (vErrors === null) {
-                    vErrors = [err7];
-                }
-                else {
-                    vErrors.push(err7);
-                }
-                errors++;
-            }
-        }
-    }
-    else {
-        const err8 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema21.oneOf[1].type, parentSchema: schema21.oneOf[1], data };
-        if (vErrors === null) {
-            vErrors = [err8];
-        }
-        else {
-            vErrors.push(err8);
-        }
-        errors++;
-    }
-    var _valid0 = _errs3 === errors;
-    if (_valid0 && valid0) {
-        valid0 = false;
-        passing0 = [passing0, 1];
-    }
-    else {
-        if (_valid0) {
-            valid0 = true;
-            passing0 = 1;
-            var props0 = true;
-        }
-        const _errs10 = errors;
-        if (data && typeof data == "object" && !Array.isArray(data)) {
-            if (Object.keys(data).length < 1) {
-                const err9 = { instancePath, schemaPath: "#/oneOf/2/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema21.oneOf[2], data };
-                if (vErrors === null) {
-                    vErrors = [err9];
-                }
-                else {
-                    vErrors.push(err9);
-                }
-                errors++;
-            }
-            for (const key1 in data) {
-                if (!((((key1 === "warn_below") || (key1 === "fail_below")) || (key1 === "warn_above")) || (key1 === "fail_above"))) {
-                    const err10 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema21.oneOf[2], data };
-                    if (vErrors === null) {
-                        vErrors = [err10];
-                    }
-                    else {
-                        vErrors.push(err10);
-                    }
-                    errors++;
-                }
-            }
-            if (data.warn_below !== undefined) {
-                let data2 = data.warn_below;
-                if (!((typeof data2 == "number") && (isFinite(data2)))) {
-                    const err11 = { instancePath: instancePath + "/warn_below", schemaPath: "#/oneOf/2/properties/warn_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.warn_below.type, parentSchema: schema21.oneOf[2].properties.warn_below, data: data2 };
-                    if (vErrors === null) {
-                        vErrors = [err11];
-                    }
-                    else {
-                        vErrors.push(err11);
-                    }
-                    errors++;
-                }
-            }
-            if (data.fail_below !== undefined) {
-                let data3 = data.fail_below;
-                if (!((typeof data3 == "number") && (isFinite(data3)))) {
-                    const err12 = { instancePath: instancePath + "/fail_below", schemaPath: "#/oneOf/2/properties/fail_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.fail_below.type, parentSchema: schema21.oneOf[2].properties.fail_below, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err12];
-                    }
-                    else {
-                        vErrors.push(err12);
-                    }
-                    errors++;
-                }
-            }
-            if (data.warn_above !== undefined) {
-                let data4 = data.warn_above;
-                if (!((typeof data4 == "number") && (isFinite(data4)))) {
-                    const err13 = { instancePath: instancePath + "/warn_above", schemaPath: "#/oneOf/2/properties/warn_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.warn_above.type, parentSchema: schema21.oneOf[2].properties.warn_above, data: data4 };
-                    if (vErrors === null) {
-                        vErrors = [err13];
-                    }
-                    else {
-                        vErrors.push(err13);
-                    }
-                    errors++;
-                }
-            }
-            if (data.fail_above !== undefined) {
-                let data5 = data.fail_above;
-                if (!((typeof data5 == "number") && (isFinite(data5)))) {
-                    const err14 = { instancePath: instancePath + "/fail_above", schemaPath: "#/oneOf/2/properties/fail_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema21.oneOf[2].properties.fail_above.type, parentSchema: schema21.oneOf[2].properties.fail_above, data: data5 };
-                    if (vErrors === null) {
-                        vErrors = [err14];
-                    }
-                    else {
-                        vErrors.push(err14);
-                    }
-                    errors++;
-                }
-            }
-        }
-        else {
-            const err15 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema21.oneOf[2].type, parentSchema: schema21.oneOf[2], data };
-            if (vErrors === null) {
-                vErrors = [err15];
-            }
-            else {
-                vErrors.push(err15);
-            }
-            errors++;
-        }
-        var _valid0 = _errs10 === errors;
-        if (_valid0 && valid0) {
-            valid0 = false;
-            passing0 = [passing0, 2];
-        }
-        else {
-            if (_valid0) {
-                valid0 = true;
-                passing0 = 2;
-                if (props0 !== true) {
-                    props0 = true;
-                }
-            }
-            const _errs21 = errors;
-            if ("off" !== data) {
-                const err16 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema21.oneOf[3], data };
-                if (vErrors === null) {
-                    vErrors = [err16];
-                }
-                else {
-                    vErrors.push(err16);
-                }
-                errors++;
-            }
-            var _valid0 = _errs21 === errors;
-            if (_valid0 && valid0) {
-                valid0 = false;
-                passing0 = [passing0, 3];
-            }
-            else {
-                if (_valid0) {
-                    valid0 = true;
-                    passing0 = 3;
-                }
-            }
-        }
-    }
-    if (!valid0) {
-        const err17 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema21.oneOf, parentSchema: schema21, data };
-        if (vErrors === null) {
-            vErrors = [err17];
-        }
-        else {
-            vErrors.push(err17);
-        }
-        errors++;
-    }
-    else {
-        errors = _errs0;
-        if (vErrors !== null) {
-            if (_errs0) {
-                vErrors.length = _errs0;
-            }
-            else {
-                vErrors = null;
-            }
-        }
-    }
-    validate54.errors = vErrors;
-    evaluated0.props = props0;
-    return errors === 0;
-}
-validate54.evaluated = { "dynamicProps": true, "dynamicItems": false };
-function validate53(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate53.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        for (const key0 in data) {
-            if (!(func2.call(schema20.properties, key0))) {
-                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema20, data };
-                if (vErrors === null) {
-                    vErrors = [err0];
-                }
-                else {
-                    vErrors.push(err0);
-                }
-                errors++;
-            }
-        }
-        if (data.gap_ratio !== undefined) {
-            if (!(validate54(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.params_per_sample !== undefined) {
-            if (!(validate54(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.coefficient !== undefined) {
-            if (!(validate54(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.base_change !== undefined) {
-            if (!(validate54(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.cv_ratio !== undefined) {
-            if (!(validate54(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.swing !== undefined) {
-            if (!(validate54(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.swing_beyond !== undefined) {
-            if (!(validate54(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.swing_spikes !== undefined) {
-            if (!(validate54(data.swing_spikes, { instancePath: instancePath + "/swing_spikes", parentData: data, parentDataProperty: "swing_spikes", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.leakage !== undefined) {
-            if (!(validate54(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.reproducibility !== undefined) {
-            if (!(validate54(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.condition !== undefined) {
-            if (!(validate54(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.complexity !== undefined) {
-            if (!(validate54(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.holdout_r2 !== undefined) {
-            if (!(validate54(data.holdout_r2, { instancePath: instancePath + "/holdout_r2", parentData: data, parentDataProperty: "holdout_r2", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.holdout_rmse !== undefined) {
-            if (!(validate54(data.holdout_rmse, { instancePath: instancePath + "/holdout_rmse", parentData: data, parentDataProperty: "holdout_rmse", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.holdout_mae !== undefined) {
-            if (!(validate54(data.holdout_mae, { instancePath: instancePath + "/holdout_mae", parentData: data, parentDataProperty: "holdout_mae", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.chi_square !== undefined) {
-            if (!(validate54(data.chi_square, { instancePath: instancePath + "/chi_square", parentData: data, parentDataProperty: "chi_square", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.separation !== undefined) {
-            if (!(validate54(data.separation, { instancePath: instancePath + "/separation", parentData: data, parentDataProperty: "separation", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.events_per_parameter !== undefined) {
-            if (!(validate54(data.events_per_parameter, { instancePath: instancePath + "/events_per_parameter", parentData: data, parentDataProperty: "events_per_parameter", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.calibration_slope !== undefined) {
-            if (!(validate54(data.calibration_slope, { instancePath: instancePath + "/calibration_slope", parentData: data, parentDataProperty: "calibration_slope", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
-                errors = vErrors.length;
-            }
-        }
-    }
-    else {
-        const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema20.type, parentSchema: schema20, data };
-        if (vErrors === null) {
-            vErrors = [err1];
-        }
-        else {
-            vErrors.push(err1);
-        }
-        errors++;
-    }
-    validate53.errors = vErrors;
-    return errors === 0;
-}
-validate53.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-function validate52(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    /*# sourceURL="urn:fitgate:schema:settings:1" */ ;
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate52.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        if (data.version === undefined) {
-            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema19.required, parentSchema: schema19, data };
-            if (vErrors === null) {
-                vErrors = [err0];
-            }
-            else {
-                vErrors.push(err0);
-            }
-            errors++;
-        }
-        for (const key0 in data) {
-            if (!(((((key0 === "version") || (key0 === "models")) || (key0 === "limits")) || (key0 === "fit")) || (key0 === "caps"))) {
-                const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19, data };
-                if (vErrors === null) {
-                    vErrors = [err1];
-                }
-                else {
-                    vErrors.push(err1);
-                }
-                errors++;
-            }
-        }
-        if (data.version !== undefined) {
-            let data0 = data.version;
-            if (1 !== data0) {
-                const err2 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema19.properties.version, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err2];
-                }
-                else {
-                    vErrors.push(err2);
-                }
-                errors++;
-            }
-        }
-        if (data.models !== undefined) {
-            let data1 = data.models;
-            if (Array.isArray(data1)) {
-                if (data1.length < 1) {
-                    const err3 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema19.properties.models, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err3];
-                    }
-                    else {
-                        vErrors.push(err3);
-                    }
-                    errors++;
-                }
-                const len0 = data1.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                    let data2 = data1[i0];
-                    if (typeof data2 === "string") {
-                        if (func1(data2) < 1) {
-                            const err4 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema19.properties.models.items, data: data2 };
-                            if (vErrors === null) {
-                                vErrors = [err4];
-                            }
-                            else {
-                                vErrors.push(err4);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err5 = { instancePath: instancePath + "/models/" + i0, schemaPath: "#/properties/models/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema19.properties.models.items.type, parentSchema: schema19.properties.models.items, data: data2 };
-                        if (vErrors === null) {
-                            vErrors = [err5];
-                        }
-                        else {
-                            vErrors.push(err5);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err6 = { instancePath: instancePath + "/models", schemaPath: "#/properties/models/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema19.properties.models.type, parentSchema: schema19.properties.models, data: data1 };
-                if (vErrors === null) {
-                    vErrors = [err6];
-                }
-                else {
-                    vErrors.push(err6);
-                }
-                errors++;
-            }
-        }
-        if (data.limits !== undefined) {
-            if (!(validate53(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.fit !== undefined) {
-            let data4 = data.fit;
-            if (data4 && typeof data4 == "object" && !Array.isArray(data4)) {
-                for (const key1 in data4) {
-                    if (!((((key1 === "folds") || (key1 === "fold_order")) || (key1 === "seed")) || (key1 === "parameter_count"))) {
-                        const err7 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.fit, data: data4 };
-                        if (vErrors === null) {
-                            vErrors = [err7];
-                        }
-                        else {
-                            vErrors.push(err7);
-                        }
-                        errors++;
-                    }
-                }
-                if (data4.folds !== undefined) {
-                    let data5 = data4.folds;
-                    if (!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))) {
-                        const err8 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.folds.type, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
-                        if (vErrors === null) {
-                            vErrors = [err8];
-                        }
-                        else {
-                            vErrors.push(err8);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data5 == "number") && (isFinite(data5))) {
-                        if (data5 < 2 || isNaN(data5)) {
-                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
-                            if (vErrors === null) {
-                                vErrors = [err9];
-                            }
-                            else {
-                                vErrors.push(err9);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data4.fold_order !== undefined) {
-                    let data6 = data4.fold_order;
-                    if (!((data6 === "shuffled") || (data6 === "blocks"))) {
-                        const err10 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.fold_order.enum, parentSchema: schema19.properties.fit.properties.fold_order, data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err10];
-                        }
-                        else {
-                            vErrors.push(err10);
-                        }
-                        errors++;
-                    }
-                }
-                if (data4.seed !== undefined) {
-                    let data7 = data4.seed;
-                    if (!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))) {
-                        const err11 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.seed.type, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
-                        if (vErrors === null) {
-                            vErrors = [err11];
-                        }
-                        else {
-                            vErrors.push(err11);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data7 == "number") && (isFinite(data7))) {
-                        if (data7 > 4294967295 || isNaN(data7)) {
-                            const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
-                            if (vErrors === null) {
-                                vErrors = [err12];
-                            }
-                            else {
-                                vErrors.push(err12);
-                            }
-                            errors++;
-                        }
-                        if (data7 < 0 || isNaN(data7)) {
-                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
-                            if (vErrors === null) {
-                                vErrors = [err13];
-                            }
-                            else {
-                                vErrors.push(err13);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data4.parameter_count !== undefined) {
-                    let data8 = data4.parameter_count;
-                    if (!((data8 === "columns") || (data8 === "effective"))) {
-                        const err14 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.parameter_count.enum, parentSchema: schema19.properties.fit.properties.parameter_count, data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err14];
-                        }
-                        else {
-                            vErrors.push(err14);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err15 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.fit.type, parentSchema: schema19.properties.fit, data: data4 };
-                if (vErrors === null) {
-                    vErrors = [err15];
-                }
-                else {
-                    vErrors.push(err15);
-                }
-                errors++;
-            }
-        }
-        if (data.caps !== undefined) {
-            let data9 = data.caps;
-            if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
-                for (const key2 in data9) {
-                    if (!((key2 === "max_file_mb") || (key2 === "max_cells"))) {
-                        const err16 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.caps, data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err16];
-                        }
-                        else {
-                            vErrors.push(err16);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.max_file_mb !== undefined) {
-                    let data10 = data9.max_file_mb;
-                    if ((typeof data10 == "number") && (isFinite(data10))) {
-                        if (data10 <= 0 || isNaN(data10)) {
-                            const err17 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
-                            if (vErrors === null) {
-                                vErrors = [err17];
-                            }
-                            else {
-                                vErrors.push(err17);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_file_mb.type, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
-                        if (vErrors === null) {
-                            vErrors = [err18];
-                        }
-                        else {
-                            vErrors.push(err18);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.max_cells !== undefined) {
-                    let data11 = data9.max_cells;
-                    if (!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))) {
-                        const err19 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.caps.properties.max_cells.type, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
-                        if (vErrors === null) {
-                            vErrors = [err19];
-                        }
-                        else {
-                            vErrors.push(err19);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data11 == "number") && (isFinite(data11))) {
-                        if (data11 < 1 || isNaN(data11)) {
-                            const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
-                            if (vErrors === null) {
-                                vErrors = [err20];
-                            }
-                            else {
-                                vErrors.push(err20);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-            }
-            else {
-                const err21 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.caps.type, parentSchema: schema19.properties.caps, data: data9 };
-                if (vErrors === null) {
-                    vErrors = [err21];
-                }
-                else {
-                    vErrors.push(err21);
-                }
-                errors++;
-            }
-        }
-    }
-    else {
-        const err22 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.type, parentSchema: schema19, data };
-        if (vErrors === null) {
-            vErrors = [err22];
-        }
-        else {
-            vErrors.push(err22);
-        }
-        errors++;
-    }
-    validate52.errors = vErrors;
-    return errors === 0;
-}
-validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-const validateDescriptor = validate75;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
-const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
-const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } };
-const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
-function validate77(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate77.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    const _errs0 = errors;
-    let valid0 = false;
-    let passing0 = null;
-    const _errs1 = errors;
-    if (Array.isArray(data)) {
-        if (data.length < 1) {
-            const err0 = { instancePath, schemaPath: "#/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema24.oneOf[0], data };
-            if (vErrors === null) {
-                vErrors = [err0];
-            }
-            else {
-                vErrors.push(err0);
-            }
-            errors++;
-        }
-        const len0 = data.length;
-        for (let i0 = 0; i0 < len0; i0++) {
-            let data0 = data[i0];
-            if (!((typeof data0 == "number") && (isFinite(data0)))) {
-                const err1 = { instancePath: instancePath + "/" + i0, schemaPath: "#/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[0].items.type, parentSchema: schema24.oneOf[0].items, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err1];
-                }
-                else {
-                    vErrors.push(err1);
-                }
-                errors++;
-            }
-        }
-    }
-    else {
-        const err2 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema24.oneOf[0].type, parentSchema: schema24.oneOf[0], data };
-        if (vErrors === null) {
-            vErrors = [err2];
-        }
-        else {
-            vErrors.push(err2);
-        }
-        errors++;
-    }
-    var _valid0 = _errs1 === errors;
-    if (_valid0) {
-        valid0 = true;
-        passing0 = 0;
-        var items0 = true;
-    }
-    const _errs5 = errors;
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        if (data.from === undefined) {
-            const err3 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
-            if (vErrors === null) {
-                vErrors = [err3];
-            }
-            else {
-                vErrors.push(err3);
-            }
-            errors++;
-        }
-        if (data.to === undefined) {
-            const err4 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
-            if (vErrors === null) {
-                vErrors = [err4];
-            }
-            else {
-                vErrors.push(err4);
-            }
-            errors++;
-        }
-        if (data.count === undefined) {
-            const err5 = { instancePath, schemaPath: "#/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema24.oneOf[1].required, parentSchema: schema24.oneOf[1], data };
-            if (vErrors === null) {
-                vErrors = [err5];
-            }
-            else {
-                vErrors.push(err5);
-            }
-            errors++;
-        }
-        for (const key0 in data) {
-            if (!(((key0 === "from") || (key0 === "to")) || (key0 === "count"))) {
-                const err6 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema24.oneOf[1], data };
-                if (vErrors === null) {
-                    vErrors = [err6];
-                }
-                else {
-                    vErrors.push(err6);
-                }
-                errors++;
-            }
-        }
-        if (data.from !== undefined) {
-            let data1 = data.from;
-            if (!((typeof data1 == "number") && (isFinite(data1)))) {
-                const err7 = { instancePath: instancePath + "/from", schemaPath: "#/oneOf/1/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[1].properties.from.type, parentSchema: schema24.oneOf[1].properties.from, data: data1 };
-                if (vErrors === null) {
-                    vErrors = [err7];
-                }
-                else {
-                    vErrors.push(err7);
-                }
-                errors++;
-            }
-        }
-        if (data.to !== undefined) {
-            let data2 = data.to;
-            if (!((typeof data2 == "number") && (isFinite(data2)))) {
-                const err8 = { instancePath: instancePath + "/to", schemaPath: "#/oneOf/1/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[1].properties.to.type, parentSchema: schema24.oneOf[1].properties.to, data: data2 };
-                if (vErrors === null) {
-                    vErrors = [err8];
-                }
-                else {
-                    vErrors.push(err8);
-                }
-                errors++;
-            }
-        }
-        if (data.count !== undefined) {
-            let data3 = data.count;
-            if (!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))) {
-                const err9 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema24.oneOf[1].properties.count.type, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err9];
-                }
-                else {
-                    vErrors.push(err9);
-                }
-                errors++;
-            }
-            if ((typeof data3 == "number") && (isFinite(data3))) {
-                if (data3 > 10000 || isNaN(data3)) {
-                    const err10 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 10000 }, message: "must be <= 10000", schema: 10000, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err10];
-                    }
-                    else {
-                        vErrors.push(err10);
-                    }
-                    errors++;
-                }
-                if (data3 < 1 || isNaN(data3)) {
-                    const err11 = { instancePath: instancePath + "/count", schemaPath: "#/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema24.oneOf[1].properties.count, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err11];
-                    }
-                    else {
-                        vErrors.push(err11);
-                    }
-                    errors++;
-                }
-            }
-        }
-    }
-    else {
-        const err12 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema24.oneOf[1].type, parentSchema: schema24.oneOf[1], data };
-        if (vErrors === null) {
-            vErrors = [err12];
-        }
-        else {
-            vErrors.push(err12);
-        }
-        errors++;
-    }
-    var _valid0 = _errs5 === errors;
-    if (_valid0 && valid0) {
-        valid0 = false;
-        passing0 = [passing0, 1];
-    }
-    else {
-        if (_valid0) {
-            valid0 = true;
-            passing0 = 1;
-            var props0 = true;
-        }
-        const _errs14 = errors;
-        if (data && typeof data == "object" && !Array.isArray(data)) {
-            if (data.from === undefined) {
-                const err13 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
-                if (vErrors === null) {
-                    vErrors = [err13];
-                }
-                else {
-                    vErrors.push(err13);
-                }
-                errors++;
-            }
-            if (data.to === undefined) {
-                const err14 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
-                if (vErrors === null) {
-                    vErrors = [err14];
-                }
-                else {
-                    vErrors.push(err14);
-                }
-                errors++;
-            }
-            if (data.step === undefined) {
-                const err15 = { instancePath, schemaPath: "#/oneOf/2/required", keyword: "required", params: { missingProperty: "step" }, message: "must have required property '" + "step" + "'", schema: schema24.oneOf[2].required, parentSchema: schema24.oneOf[2], data };
-                if (vErrors === null) {
-                    vErrors = [err15];
-                }
-                else {
-                    vErrors.push(err15);
-                }
-                errors++;
-            }
-            for (const key1 in data) {
-                if (!(((key1 === "from") || (key1 === "to")) || (key1 === "step"))) {
-                    const err16 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema24.oneOf[2], data };
-                    if (vErrors === null) {
-                        vErrors = [err16];
-                    }
-                    else {
-                        vErrors.push(err16);
-                    }
-                    errors++;
-                }
-            }
-            if (data.from !== undefined) {
-                let data4 = data.from;
-                if (!((typeof data4 == "number") && (isFinite(data4)))) {
-                    const err17 = { instancePath: instancePath + "/from", schemaPath: "#/oneOf/2/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.from.type, parentSchema: schema24.oneOf[2].properties.from, data: data4 };
-                    if (vErrors === null) {
-                        vErrors = [err17];
-                    }
-                    else {
-                        vErrors.push(err17);
-                    }
-                    errors++;
-                }
-            }
-            if (data.to !== undefined) {
-                let data5 = data.to;
-                if (!((typeof data5 == "number") && (isFinite(data5)))) {
-                    const err18 = { instancePath: instancePath + "/to", schemaPath: "#/oneOf/2/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.to.type, parentSchema: schema24.oneOf[2].properties.to, data: data5 };
-                    if (vErrors === null) {
-                        vErrors = [err18];
-                    }
-                    else {
-                        vErrors.push(err18);
-                    }
-                    errors++;
-                }
-            }
-            if (data.step !== undefined) {
-                let data6 = data.step;
-                if ((typeof data6 == "number") && (isFinite(data6))) {
-                    if (data6 <= 0 || isNaN(data6)) {
-                        const err19 = { instancePath: instancePath + "/step", schemaPath: "#/oneOf/2/properties/step/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema24.oneOf[2].properties.step, data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err19];
-                        }
-                        else {
-                            vErrors.push(err19);
-                        }
-                        errors++;
-                    }
-                }
-                else {
-                    const err20 = { instancePath: instancePath + "/step", schemaPath: "#/oneOf/2/properties/step/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema24.oneOf[2].properties.step.type, parentSchema: schema24.oneOf[2].properties.step, data: data6 };
-                    if (vErrors === null) {
-                        vErrors = [err20];
-                    }
-                    else {
-                        vErrors.push(err20);
-                    }
-                    errors++;
-                }
-            }
-        }
-        else {
-            const err21 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema24.oneOf[2].type, parentSchema: schema24.oneOf[2], data };
-            if (vErrors === null) {
-                vErrors = [err21];
-            }
-            else {
-                vErrors.push(err21);
-            }
-            errors++;
-        }
-        var _valid0 = _errs14 === errors;
-        if (_valid0 && valid0) {
-            valid0 = false;
-            passing0 = [passing0, 2];
-        }
-        else {
-            if (_valid0) {
-                valid0 = true;
-                passing0 = 2;
-                if (props0 !== true) {
-                    props0 = true;
-                }
-            }
-            const _errs23 = errors;
-            if ("at-samples" !== data) {
-                const err22 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "at-samples" }, message: "must be equal to constant", schema: "at-samples", parentSchema: schema24.oneOf[3], data };
-                if (vErrors === null) {
-                    vErrors = [err22];
-                }
-                else {
-                    vErrors.push(err22);
-                }
-                errors++;
-            }
-            var _valid0 = _errs23 === errors;
-            if (_valid0 && valid0) {
-                valid0 = false;
-                passing0 = [passing0, 3];
-            }
-            else {
-                if (_valid0) {
-                    valid0 = true;
-                    passing0 = 3;
-                }
-            }
-        }
-    }
-    if (!valid0) {
-        const err23 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema24.oneOf, parentSchema: schema24, data };
-        if (vErrors === null) {
-            vErrors = [err23];
-        }
-        else {
-            vErrors.push(err23);
-        }
-        errors++;
-    }
-    else {
-        errors = _errs0;
-        if (vErrors !== null) {
-            if (_errs0) {
-                vErrors.length = _errs0;
-            }
-            else {
-                vErrors = null;
-            }
-        }
-    }
-    validate77.errors = vErrors;
-    evaluated0.props = props0;
-    evaluated0.items = items0;
-    return errors === 0;
-}
-validate77.evaluated = { "dynamicProps": true, "dynamicItems": true };
-function validate76(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate76.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        if (Object.keys(data).length > 1) {
-            const err0 = { instancePath, schemaPath: "#/maxProperties", keyword: "maxProperties", params: { limit: 1 }, message: "must NOT have more than 1 properties", schema: 1, parentSchema: schema23, data };
-            if (vErrors === null) {
-                vErrors = [err0];
-            }
-            else {
-                vErrors.push(err0);
-            }
-            errors++;
-        }
-        if (Object.keys(data).length < 1) {
-            const err1 = { instancePath, schemaPath: "#/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema23, data };
-            if (vErrors === null) {
-                vErrors = [err1];
-            }
-            else {
-                vErrors.push(err1);
-            }
-            errors++;
-        }
-        for (const key0 in data) {
-            const _errs1 = errors;
-            if (!((((((key0 === "linear") || (key0 === "polynomial")) || (key0 === "rbf")) || (key0 === "fourier")) || (key0 === "spline")) || (key0 === "category"))) {
-                const err2 = { instancePath, schemaPath: "#/propertyNames/enum", keyword: "enum", params: { allowedValues: schema23.propertyNames.enum }, message: "must be equal to one of the allowed values", schema: schema23.propertyNames.enum, parentSchema: schema23.propertyNames, data: key0, propertyName: key0 };
-                if (vErrors === null) {
-                    vErrors = [err2];
-                }
-                else {
-                    vErrors.push(err2);
-                }
-                errors++;
-            }
-            var valid0 = _errs1 === errors;
-            if (!valid0) {
-                const err3 = { instancePath, schemaPath: "#/propertyNames", keyword: "propertyNames", params: { propertyName: key0 }, message: "property name must be valid", schema: schema23.propertyNames, parentSchema: schema23, data };
-                if (vErrors === null) {
-                    vErrors = [err3];
-                }
-                else {
-                    vErrors.push(err3);
-                }
-                errors++;
-            }
-        }
-        if (data.linear !== undefined) {
-            let data0 = data.linear;
-            if (Array.isArray(data0)) {
-                if (data0.length < 1) {
-                    const err4 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.linear, data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err4];
-                    }
-                    else {
-                        vErrors.push(err4);
-                    }
-                    errors++;
-                }
-                const len0 = data0.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                    let data1 = data0[i0];
-                    if (typeof data1 === "string") {
-                        if (func1(data1) < 1) {
-                            const err5 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.linear.items, data: data1 };
-                            if (vErrors === null) {
-                                vErrors = [err5];
-                            }
-                            else {
-                                vErrors.push(err5);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err6 = { instancePath: instancePath + "/linear/" + i0, schemaPath: "#/properties/linear/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.linear.items.type, parentSchema: schema23.properties.linear.items, data: data1 };
-                        if (vErrors === null) {
-                            vErrors = [err6];
-                        }
-                        else {
-                            vErrors.push(err6);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err7 = { instancePath: instancePath + "/linear", schemaPath: "#/properties/linear/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.linear.type, parentSchema: schema23.properties.linear, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err7];
-                }
-                else {
-                    vErrors.push(err7);
-                }
-                errors++;
-            }
-        }
-        if (data.polynomial !== undefined) {
-            let data2 = data.polynomial;
-            if (data2 && typeof data2 == "object" && !Array.isArray(data2)) {
-                if (data2.of === undefined) {
-                    const err8 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.polynomial.required, parentSchema: schema23.properties.polynomial, data: data2 };
-                    if (vErrors === null) {
-                        vErrors = [err8];
-                    }
-                    else {
-                        vErrors.push(err8);
-                    }
-                    errors++;
-                }
-                if (data2.degree === undefined) {
-                    const err9 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/required", keyword: "required", params: { missingProperty: "degree" }, message: "must have required property '" + "degree" + "'", schema: schema23.properties.polynomial.required, parentSchema: schema23.properties.polynomial, data: data2 };
-                    if (vErrors === null) {
-                        vErrors = [err9];
-                    }
-                    else {
-                        vErrors.push(err9);
-                    }
-                    errors++;
-                }
-                for (const key1 in data2) {
-                    if (!(((((key1 === "of") || (key1 === "degree")) || (key1 === "shift")) || (key1 === "scale")) || (key1 === "transform"))) {
-                        const err10 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.polynomial, data: data2 };
-                        if (vErrors === null) {
-                            vErrors = [err10];
-                        }
-                        else {
-                            vErrors.push(err10);
-                        }
-                        errors++;
-                    }
-                }
-                if (data2.of !== undefined) {
-                    let data3 = data2.of;
-                    const _errs10 = errors;
-                    let valid5 = false;
-                    let passing0 = null;
-                    const _errs11 = errors;
-                    if (typeof data3 === "string") {
-                        if (func1(data3) < 1) {
-                            const err11 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/0/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.polynomial.properties.of.oneOf[0], data: data3 };
-                            if (vErrors === null) {
-                                vErrors = [err11];
-                            }
-                            else {
-                                vErrors.push(err11);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err12 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.polynomial.properties.of.oneOf[0].type, parentSchema: schema23.properties.polynomial.properties.of.oneOf[0], data: data3 };
-                        if (vErrors === null) {
-                            vErrors = [err12];
-                        }
-                        else {
-                            vErrors.push(err12);
-                        }
-                        errors++;
-                    }
-                    var _valid0 = _errs11 === errors;
-                    if (_valid0) {
-                        valid5 = true;
-                        passing0 = 0;
-                    }
-                    const _errs13 = errors;
-                    if (Array.isArray(data3)) {
-                        if (data3.length > 10) {
-                            const err13 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
-                            if (vErrors === null) {
-                                vErrors = [err13];
-                            }
-                            else {
-                                vErrors.push(err13);
-                            }
-                            errors++;
-                        }
-                        if (data3.length < 2) {
-                            const err14 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
-                            if (vErrors === null) {
-                                vErrors = [err14];
-                            }
-                            else {
-                                vErrors.push(err14);
-                            }
-                            errors++;
-                        }
-                        const len1 = data3.length;
-                        for (let i1 = 0; i1 < len1; i1++) {
-                            let data4 = data3[i1];
-                            if (typeof data4 === "string") {
-                                if (func1(data4) < 1) {
-                                    const err15 = { instancePath: instancePath + "/polynomial/of/" + i1, schemaPath: "#/properties/polynomial/properties/of/oneOf/1/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1].items, data: data4 };
-                                    if (vErrors === null) {
-                                        vErrors = [err15];
-                                    }
-                                    else {
-                                        vErrors.push(err15);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            else {
-                                const err16 = { instancePath: instancePath + "/polynomial/of/" + i1, schemaPath: "#/properties/polynomial/properties/of/oneOf/1/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.polynomial.properties.of.oneOf[1].items.type, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1].items, data: data4 };
-                                if (vErrors === null) {
-                                    vErrors = [err16];
-                                }
-                                else {
-                                    vErrors.push(err16);
-                                }
-                                errors++;
-                            }
-                        }
-                        let i2 = data3.length;
-                        let j0;
-                        if (i2 > 1) {
-                            const indices0 = {};
-                            for (; i2--;) {
-                                let item0 = data3[i2];
-                                if (typeof item0 !== "string") {
-                                    continue;
-                                }
-                                if (typeof indices0[item0] == "number") {
-                                    j0 = indices0[item0];
-                                    const err17 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/uniqueItems", keyword: "uniqueItems", params: { i: i2, j: j0 }, message: "must NOT have duplicate items (items ## " + j0 + " and " + i2 + " are identical)", schema: true, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
-                                    if (vErrors === null) {
-                                        vErrors = [err17];
-                                    }
-                                    else {
-                                        vErrors.push(err17);
-                                    }
-                                    errors++;
-                                    break;
-                                }
-                                indices0[item0] = i2;
-                            }
-                        }
-                    }
-                    else {
-                        const err18 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.polynomial.properties.of.oneOf[1].type, parentSchema: schema23.properties.polynomial.properties.of.oneOf[1], data: data3 };
-                        if (vErrors === null) {
-                            vErrors = [err18];
-                        }
-                        else {
-                            vErrors.push(err18);
-                        }
-                        errors++;
-                    }
-                    var _valid0 = _errs13 === errors;
-                    if (_valid0 && valid5) {
-                        valid5 = false;
-                        passing0 = [passing0, 1];
-                    }
-                    else {
-                        if (_valid0) {
-                            valid5 = true;
-                            passing0 = 1;
-                        }
-                    }
-                    if (!valid5) {
-                        const err19 = { instancePath: instancePath + "/polynomial/of", schemaPath: "#/properties/polynomial/properties/of/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.polynomial.properties.of.oneOf, parentSchema: schema23.properties.polynomial.properties.of, data: data3 };
-                        if (vErrors === null) {
-                            vErrors = [err19];
-                        }
-                        else {
-                            vErrors.push(err19);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs10;
-                        if (vErrors !== null) {
-                            if (_errs10) {
-                                vErrors.length = _errs10;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data2.degree !== undefined) {
-                    let data5 = data2.degree;
-                    if (!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))) {
-                        const err20 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.polynomial.properties.degree.type, parentSchema: schema23.properties.polynomial.properties.degree, data: data5 };
-                        if (vErrors === null) {
-                            vErrors = [err20];
-                        }
-                        else {
-                            vErrors.push(err20);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data5 == "number") && (isFinite(data5))) {
-                        if (data5 > 30 || isNaN(data5)) {
-                            const err21 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 30 }, message: "must be <= 30", schema: 30, parentSchema: schema23.properties.polynomial.properties.degree, data: data5 };
-                            if (vErrors === null) {
-                                vErrors = [err21];
-                            }
-                            else {
-                                vErrors.push(err21);
-                            }
-                            errors++;
-                        }
-                        if (data5 < 1 || isNaN(data5)) {
-                            const err22 = { instancePath: instancePath + "/polynomial/degree", schemaPath: "#/properties/polynomial/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.polynomial.properties.degree, data: data5 };
-                            if (vErrors === null) {
-                                vErrors = [err22];
-                            }
-                            else {
-                                vErrors.push(err22);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data2.shift !== undefined) {
-                    let data6 = data2.shift;
-                    const _errs20 = errors;
-                    let valid9 = false;
-                    let passing1 = null;
-                    const _errs21 = errors;
-                    if (!((typeof data6 == "number") && (isFinite(data6)))) {
-                        const err23 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.shift.oneOf[0].type, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[0], data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err23];
-                        }
-                        else {
-                            vErrors.push(err23);
-                        }
-                        errors++;
-                    }
-                    var _valid1 = _errs21 === errors;
-                    if (_valid1) {
-                        valid9 = true;
-                        passing1 = 0;
-                    }
-                    const _errs23 = errors;
-                    if (Array.isArray(data6)) {
-                        if (data6.length > 10) {
-                            const err24 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1], data: data6 };
-                            if (vErrors === null) {
-                                vErrors = [err24];
-                            }
-                            else {
-                                vErrors.push(err24);
-                            }
-                            errors++;
-                        }
-                        if (data6.length < 2) {
-                            const err25 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1], data: data6 };
-                            if (vErrors === null) {
-                                vErrors = [err25];
-                            }
-                            else {
-                                vErrors.push(err25);
-                            }
-                            errors++;
-                        }
-                        const len2 = data6.length;
-                        for (let i3 = 0; i3 < len2; i3++) {
-                            let data7 = data6[i3];
-                            if (!((typeof data7 == "number") && (isFinite(data7)))) {
-                                const err26 = { instancePath: instancePath + "/polynomial/shift/" + i3, schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.shift.oneOf[1].items.type, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1].items, data: data7 };
-                                if (vErrors === null) {
-                                    vErrors = [err26];
-                                }
-                                else {
-                                    vErrors.push(err26);
-                                }
-                                errors++;
-                            }
-                        }
-                    }
-                    else {
-                        const err27 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.polynomial.properties.shift.oneOf[1].type, parentSchema: schema23.properties.polynomial.properties.shift.oneOf[1], data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err27];
-                        }
-                        else {
-                            vErrors.push(err27);
-                        }
-                        errors++;
-                    }
-                    var _valid1 = _errs23 === errors;
-                    if (_valid1 && valid9) {
-                        valid9 = false;
-                        passing1 = [passing1, 1];
-                    }
-                    else {
-                        if (_valid1) {
-                            valid9 = true;
-                            passing1 = 1;
-                        }
-                    }
-                    if (!valid9) {
-                        const err28 = { instancePath: instancePath + "/polynomial/shift", schemaPath: "#/properties/polynomial/properties/shift/oneOf", keyword: "oneOf", params: { passingSchemas: passing1 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.polynomial.properties.shift.oneOf, parentSchema: schema23.properties.polynomial.properties.shift, data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err28];
-                        }
-                        else {
-                            vErrors.push(err28);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs20;
-                        if (vErrors !== null) {
-                            if (_errs20) {
-                                vErrors.length = _errs20;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data2.scale !== undefined) {
-                    let data8 = data2.scale;
-                    const _errs28 = errors;
-                    let valid12 = false;
-                    let passing2 = null;
-                    const _errs29 = errors;
-                    if ((typeof data8 == "number") && (isFinite(data8))) {
-                        if (data8 <= 0 || isNaN(data8)) {
-                            const err29 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/0/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[0], data: data8 };
-                            if (vErrors === null) {
-                                vErrors = [err29];
-                            }
-                            else {
-                                vErrors.push(err29);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err30 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.scale.oneOf[0].type, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[0], data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err30];
-                        }
-                        else {
-                            vErrors.push(err30);
-                        }
-                        errors++;
-                    }
-                    var _valid2 = _errs29 === errors;
-                    if (_valid2) {
-                        valid12 = true;
-                        passing2 = 0;
-                    }
-                    const _errs31 = errors;
-                    if (Array.isArray(data8)) {
-                        if (data8.length > 10) {
-                            const err31 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1], data: data8 };
-                            if (vErrors === null) {
-                                vErrors = [err31];
-                            }
-                            else {
-                                vErrors.push(err31);
-                            }
-                            errors++;
-                        }
-                        if (data8.length < 2) {
-                            const err32 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1], data: data8 };
-                            if (vErrors === null) {
-                                vErrors = [err32];
-                            }
-                            else {
-                                vErrors.push(err32);
-                            }
-                            errors++;
-                        }
-                        const len3 = data8.length;
-                        for (let i4 = 0; i4 < len3; i4++) {
-                            let data9 = data8[i4];
-                            if ((typeof data9 == "number") && (isFinite(data9))) {
-                                if (data9 <= 0 || isNaN(data9)) {
-                                    const err33 = { instancePath: instancePath + "/polynomial/scale/" + i4, schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/items/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1].items, data: data9 };
-                                    if (vErrors === null) {
-                                        vErrors = [err33];
-                                    }
-                                    else {
-                                        vErrors.push(err33);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            else {
-                                const err34 = { instancePath: instancePath + "/polynomial/scale/" + i4, schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.polynomial.properties.scale.oneOf[1].items.type, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1].items, data: data9 };
-                                if (vErrors === null) {
-                                    vErrors = [err34];
-                                }
-                                else {
-                                    vErrors.push(err34);
-                                }
-                                errors++;
-                            }
-                        }
-                    }
-                    else {
-                        const err35 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.polynomial.properties.scale.oneOf[1].type, parentSchema: schema23.properties.polynomial.properties.scale.oneOf[1], data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err35];
-                        }
-                        else {
-                            vErrors.push(err35);
-                        }
-                        errors++;
-                    }
-                    var _valid2 = _errs31 === errors;
-                    if (_valid2 && valid12) {
-                        valid12 = false;
-                        passing2 = [passing2, 1];
-                    }
-                    else {
-                        if (_valid2) {
-                            valid12 = true;
-                            passing2 = 1;
-                        }
-                    }
-                    if (!valid12) {
-                        const err36 = { instancePath: instancePath + "/polynomial/scale", schemaPath: "#/properties/polynomial/properties/scale/oneOf", keyword: "oneOf", params: { passingSchemas: passing2 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.polynomial.properties.scale.oneOf, parentSchema: schema23.properties.polynomial.properties.scale, data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err36];
-                        }
-                        else {
-                            vErrors.push(err36);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs28;
-                        if (vErrors !== null) {
-                            if (_errs28) {
-                                vErrors.length = _errs28;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data2.transform !== undefined) {
-                    let data10 = data2.transform;
-                    if (!((((data10 === "log") || (data10 === "log1p")) || (data10 === "sqrt")) || (data10 === "standardise"))) {
-                        const err37 = { instancePath: instancePath + "/polynomial/transform", schemaPath: "#/properties/polynomial/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.polynomial.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.polynomial.properties.transform.enum, parentSchema: schema23.properties.polynomial.properties.transform, data: data10 };
-                        if (vErrors === null) {
-                            vErrors = [err37];
-                        }
-                        else {
-                            vErrors.push(err37);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err38 = { instancePath: instancePath + "/polynomial", schemaPath: "#/properties/polynomial/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.polynomial.type, parentSchema: schema23.properties.polynomial, data: data2 };
-                if (vErrors === null) {
-                    vErrors = [err38];
-                }
-                else {
-                    vErrors.push(err38);
-                }
-                errors++;
-            }
-        }
-        if (data.rbf !== undefined) {
-            let data11 = data.rbf;
-            if (data11 && typeof data11 == "object" && !Array.isArray(data11)) {
-                if (data11.of === undefined) {
-                    const err39 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data11 };
-                    if (vErrors === null) {
-                        vErrors = [err39];
-                    }
-                    else {
-                        vErrors.push(err39);
-                    }
-                    errors++;
-                }
-                if (data11.centers === undefined) {
-                    const err40 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "centers" }, message: "must have required property '" + "centers" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data11 };
-                    if (vErrors === null) {
-                        vErrors = [err40];
-                    }
-                    else {
-                        vErrors.push(err40);
-                    }
-                    errors++;
-                }
-                if (data11.width === undefined) {
-                    const err41 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/required", keyword: "required", params: { missingProperty: "width" }, message: "must have required property '" + "width" + "'", schema: schema23.properties.rbf.required, parentSchema: schema23.properties.rbf, data: data11 };
-                    if (vErrors === null) {
-                        vErrors = [err41];
-                    }
-                    else {
-                        vErrors.push(err41);
-                    }
-                    errors++;
-                }
-                for (const key2 in data11) {
-                    if (!((((key2 === "of") || (key2 === "centers")) || (key2 === "width")) || (key2 === "transform"))) {
-                        const err42 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.rbf, data: data11 };
-                        if (vErrors === null) {
-                            vErrors = [err42];
-                        }
-                        else {
-                            vErrors.push(err42);
-                        }
-                        errors++;
-                    }
-                }
-                if (data11.of !== undefined) {
-                    let data12 = data11.of;
-                    const _errs40 = errors;
-                    let valid16 = false;
-                    let passing3 = null;
-                    const _errs41 = errors;
-                    if (typeof data12 === "string") {
-                        if (func1(data12) < 1) {
-                            const err43 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/0/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.rbf.properties.of.oneOf[0], data: data12 };
-                            if (vErrors === null) {
-                                vErrors = [err43];
-                            }
-                            else {
-                                vErrors.push(err43);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err44 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.rbf.properties.of.oneOf[0].type, parentSchema: schema23.properties.rbf.properties.of.oneOf[0], data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err44];
-                        }
-                        else {
-                            vErrors.push(err44);
-                        }
-                        errors++;
-                    }
-                    var _valid3 = _errs41 === errors;
-                    if (_valid3) {
-                        valid16 = true;
-                        passing3 = 0;
-                    }
-                    const _errs43 = errors;
-                    if (Array.isArray(data12)) {
-                        if (data12.length > 10) {
-                            const err45 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
-                            if (vErrors === null) {
-                                vErrors = [err45];
-                            }
-                            else {
-                                vErrors.push(err45);
-                            }
-                            errors++;
-                        }
-                        if (data12.length < 2) {
-                            const err46 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
-                            if (vErrors === null) {
-                                vErrors = [err46];
-                            }
-                            else {
-                                vErrors.push(err46);
-                            }
-                            errors++;
-                        }
-                        const len4 = data12.length;
-                        for (let i5 = 0; i5 < len4; i5++) {
-                            let data13 = data12[i5];
-                            if (typeof data13 === "string") {
-                                if (func1(data13) < 1) {
-                                    const err47 = { instancePath: instancePath + "/rbf/of/" + i5, schemaPath: "#/properties/rbf/properties/of/oneOf/1/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.rbf.properties.of.oneOf[1].items, data: data13 };
-                                    if (vErrors === null) {
-                                        vErrors = [err47];
-                                    }
-                                    else {
-                                        vErrors.push(err47);
-                                    }
-                                    errors++;
-                                }
-                            }
-                            else {
-                                const err48 = { instancePath: instancePath + "/rbf/of/" + i5, schemaPath: "#/properties/rbf/properties/of/oneOf/1/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.rbf.properties.of.oneOf[1].items.type, parentSchema: schema23.properties.rbf.properties.of.oneOf[1].items, data: data13 };
-                                if (vErrors === null) {
-                                    vErrors = [err48];
-                                }
-                                else {
-                                    vErrors.push(err48);
-                                }
-                                errors++;
-                            }
-                        }
-                        let i6 = data12.length;
-                        let j1;
-                        if (i6 > 1) {
-                            const indices1 = {};
-                            for (; i6--;) {
-                                let item1 = data12[i6];
-                                if (typeof item1 !== "string") {
-                                    continue;
-                                }
-                                if (typeof indices1[item1] == "number") {
-                                    j1 = indices1[item1];
-                                    const err49 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/uniqueItems", keyword: "uniqueItems", params: { i: i6, j: j1 }, message: "must NOT have duplicate items (items ## " + j1 + " and " + i6 + " are identical)", schema: true, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
-                                    if (vErrors === null) {
-                                        vErrors = [err49];
-                                    }
-                                    else {
-                                        vErrors.push(err49);
-                                    }
-                                    errors++;
-                                    break;
-                                }
-                                indices1[item1] = i6;
-                            }
-                        }
-                    }
-                    else {
-                        const err50 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.of.oneOf[1].type, parentSchema: schema23.properties.rbf.properties.of.oneOf[1], data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err50];
-                        }
-                        else {
-                            vErrors.push(err50);
-                        }
-                        errors++;
-                    }
-                    var _valid3 = _errs43 === errors;
-                    if (_valid3 && valid16) {
-                        valid16 = false;
-                        passing3 = [passing3, 1];
-                    }
-                    else {
-                        if (_valid3) {
-                            valid16 = true;
-                            passing3 = 1;
-                        }
-                    }
-                    if (!valid16) {
-                        const err51 = { instancePath: instancePath + "/rbf/of", schemaPath: "#/properties/rbf/properties/of/oneOf", keyword: "oneOf", params: { passingSchemas: passing3 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.rbf.properties.of.oneOf, parentSchema: schema23.properties.rbf.properties.of, data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err51];
-                        }
-                        else {
-                            vErrors.push(err51);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs40;
-                        if (vErrors !== null) {
-                            if (_errs40) {
-                                vErrors.length = _errs40;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data11.centers !== undefined) {
-                    let data14 = data11.centers;
-                    const _errs48 = errors;
-                    let valid20 = false;
-                    let passing4 = null;
-                    const _errs49 = errors;
-                    if (!(validate77(data14, { instancePath: instancePath + "/rbf/centers", parentData: data11, parentDataProperty: "centers", rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
-                        errors = vErrors.length;
-                    }
-                    else {
-                        var items4 = validate77.evaluated.items;
-                    }
-                    var _valid4 = _errs49 === errors;
-                    if (_valid4) {
-                        valid20 = true;
-                        passing4 = 0;
-                    }
-                    const _errs50 = errors;
-                    if (Array.isArray(data14)) {
-                        if (data14.length > 10000) {
-                            const err52 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/1/maxItems", keyword: "maxItems", params: { limit: 10000 }, message: "must NOT have more than 10000 items", schema: 10000, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1], data: data14 };
-                            if (vErrors === null) {
-                                vErrors = [err52];
-                            }
-                            else {
-                                vErrors.push(err52);
-                            }
-                            errors++;
-                        }
-                        if (data14.length < 1) {
-                            const err53 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/1/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1], data: data14 };
-                            if (vErrors === null) {
-                                vErrors = [err53];
-                            }
-                            else {
-                                vErrors.push(err53);
-                            }
-                            errors++;
-                        }
-                        const len5 = data14.length;
-                        for (let i7 = 0; i7 < len5; i7++) {
-                            let data15 = data14[i7];
-                            if (Array.isArray(data15)) {
-                                if (data15.length > 10) {
-                                    const err54 = { instancePath: instancePath + "/rbf/centers/" + i7, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items, data: data15 };
-                                    if (vErrors === null) {
-                                        vErrors = [err54];
-                                    }
-                                    else {
-                                        vErrors.push(err54);
-                                    }
-                                    errors++;
-                                }
-                                if (data15.length < 2) {
-                                    const err55 = { instancePath: instancePath + "/rbf/centers/" + i7, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items, data: data15 };
-                                    if (vErrors === null) {
-                                        vErrors = [err55];
-                                    }
-                                    else {
-                                        vErrors.push(err55);
-                                    }
-                                    errors++;
-                                }
-                                const len6 = data15.length;
-                                for (let i8 = 0; i8 < len6; i8++) {
-                                    let data16 = data15[i8];
-                                    if (!((typeof data16 == "number") && (isFinite(data16)))) {
-                                        const err56 = { instancePath: instancePath + "/rbf/centers/" + i7 + "/" + i8, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.centers.oneOf[1].items.items.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items.items, data: data16 };
-                                        if (vErrors === null) {
-                                            vErrors = [err56];
-                                        }
-                                        else {
-                                            vErrors.push(err56);
-                                        }
-                                        errors++;
-                                    }
-                                }
-                            }
-                            else {
-                                const err57 = { instancePath: instancePath + "/rbf/centers/" + i7, schemaPath: "#/properties/rbf/properties/centers/oneOf/1/items/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.centers.oneOf[1].items.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1].items, data: data15 };
-                                if (vErrors === null) {
-                                    vErrors = [err57];
-                                }
-                                else {
-                                    vErrors.push(err57);
-                                }
-                                errors++;
-                            }
-                        }
-                    }
-                    else {
-                        const err58 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/1/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.centers.oneOf[1].type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[1], data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err58];
-                        }
-                        else {
-                            vErrors.push(err58);
-                        }
-                        errors++;
-                    }
-                    var _valid4 = _errs50 === errors;
-                    if (_valid4 && valid20) {
-                        valid20 = false;
-                        passing4 = [passing4, 1];
-                    }
-                    else {
-                        if (_valid4) {
-                            valid20 = true;
-                            passing4 = 1;
-                            if (items4 !== true) {
-                                items4 = true;
-                            }
-                        }
-                        const _errs56 = errors;
-                        if (Array.isArray(data14)) {
-                            if (data14.length > 10) {
-                                const err59 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/maxItems", keyword: "maxItems", params: { limit: 10 }, message: "must NOT have more than 10 items", schema: 10, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2], data: data14 };
-                                if (vErrors === null) {
-                                    vErrors = [err59];
-                                }
-                                else {
-                                    vErrors.push(err59);
-                                }
-                                errors++;
-                            }
-                            if (data14.length < 2) {
-                                const err60 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/minItems", keyword: "minItems", params: { limit: 2 }, message: "must NOT have fewer than 2 items", schema: 2, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2], data: data14 };
-                                if (vErrors === null) {
-                                    vErrors = [err60];
-                                }
-                                else {
-                                    vErrors.push(err60);
-                                }
-                                errors++;
-                            }
-                            const len7 = data14.length;
-                            for (let i9 = 0; i9 < len7; i9++) {
-                                let data17 = data14[i9];
-                                if (data17 && typeof data17 == "object" && !Array.isArray(data17)) {
-                                    if (data17.from === undefined) {
-                                        const err61 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/required", keyword: "required", params: { missingProperty: "from" }, message: "must have required property '" + "from" + "'", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.required, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
-                                        if (vErrors === null) {
-                                            vErrors = [err61];
-                                        }
-                                        else {
-                                            vErrors.push(err61);
-                                        }
-                                        errors++;
-                                    }
-                                    if (data17.to === undefined) {
-                                        const err62 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/required", keyword: "required", params: { missingProperty: "to" }, message: "must have required property '" + "to" + "'", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.required, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
-                                        if (vErrors === null) {
-                                            vErrors = [err62];
-                                        }
-                                        else {
-                                            vErrors.push(err62);
-                                        }
-                                        errors++;
-                                    }
-                                    if (data17.count === undefined) {
-                                        const err63 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.required, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
-                                        if (vErrors === null) {
-                                            vErrors = [err63];
-                                        }
-                                        else {
-                                            vErrors.push(err63);
-                                        }
-                                        errors++;
-                                    }
-                                    for (const key3 in data17) {
-                                        if (!(((key3 === "from") || (key3 === "to")) || (key3 === "count"))) {
-                                            const err64 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
-                                            if (vErrors === null) {
-                                                vErrors = [err64];
-                                            }
-                                            else {
-                                                vErrors.push(err64);
-                                            }
-                                            errors++;
-                                        }
-                                    }
-                                    if (data17.from !== undefined) {
-                                        let data18 = data17.from;
-                                        if (!((typeof data18 == "number") && (isFinite(data18)))) {
-                                            const err65 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/from", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/from/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.from, data: data18 };
-                                            if (vErrors === null) {
-                                                vErrors = [err65];
-                                            }
-                                            else {
-                                                vErrors.push(err65);
-                                            }
-                                            errors++;
-                                        }
-                                    }
-                                    if (data17.to !== undefined) {
-                                        let data19 = data17.to;
-                                        if (!((typeof data19 == "number") && (isFinite(data19)))) {
-                                            const err66 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/to", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/to/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.to, data: data19 };
-                                            if (vErrors === null) {
-                                                vErrors = [err66];
-                                            }
-                                            else {
-                                                vErrors.push(err66);
-                                            }
-                                            errors++;
-                                        }
-                                    }
-                                    if (data17.count !== undefined) {
-                                        let data20 = data17.count;
-                                        if (!(((typeof data20 == "number") && (!(data20 % 1) && !isNaN(data20))) && (isFinite(data20)))) {
-                                            const err67 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/count", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count, data: data20 };
-                                            if (vErrors === null) {
-                                                vErrors = [err67];
-                                            }
-                                            else {
-                                                vErrors.push(err67);
-                                            }
-                                            errors++;
-                                        }
-                                        if ((typeof data20 == "number") && (isFinite(data20))) {
-                                            if (data20 > 100 || isNaN(data20)) {
-                                                const err68 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/count", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 100 }, message: "must be <= 100", schema: 100, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count, data: data20 };
-                                                if (vErrors === null) {
-                                                    vErrors = [err68];
-                                                }
-                                                else {
-                                                    vErrors.push(err68);
-                                                }
-                                                errors++;
-                                            }
-                                            if (data20 < 1 || isNaN(data20)) {
-                                                const err69 = { instancePath: instancePath + "/rbf/centers/" + i9 + "/count", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items.properties.count, data: data20 };
-                                                if (vErrors === null) {
-                                                    vErrors = [err69];
-                                                }
-                                                else {
-                                                    vErrors.push(err69);
-                                                }
-                                                errors++;
-                                            }
-                                        }
-                                    }
-                                }
-                                else {
-                                    const err70 = { instancePath: instancePath + "/rbf/centers/" + i9, schemaPath: "#/properties/rbf/properties/centers/oneOf/2/items/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.rbf.properties.centers.oneOf[2].items.type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2].items, data: data17 };
-                                    if (vErrors === null) {
-                                        vErrors = [err70];
-                                    }
-                                    else {
-                                        vErrors.push(err70);
-                                    }
-                                    errors++;
-                                }
-                            }
-                        }
-                        else {
-                            const err71 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf/2/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.rbf.properties.centers.oneOf[2].type, parentSchema: schema23.properties.rbf.properties.centers.oneOf[2], data: data14 };
-                            if (vErrors === null) {
-                                vErrors = [err71];
-                            }
-                            else {
-                                vErrors.push(err71);
-                            }
-                            errors++;
-                        }
-                        var _valid4 = _errs56 === errors;
-                        if (_valid4 && valid20) {
-                            valid20 = false;
-                            passing4 = [passing4, 2];
-                        }
-                        else {
-                            if (_valid4) {
-                                valid20 = true;
-                                passing4 = 2;
-                                if (items4 !== true) {
-                                    items4 = true;
-                                }
-                            }
-                        }
-                    }
-                    if (!valid20) {
-                        const err72 = { instancePath: instancePath + "/rbf/centers", schemaPath: "#/properties/rbf/properties/centers/oneOf", keyword: "oneOf", params: { passingSchemas: passing4 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.rbf.properties.centers.oneOf, parentSchema: schema23.properties.rbf.properties.centers, data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err72];
-                        }
-                        else {
-                            vErrors.push(err72);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs48;
-                        if (vErrors !== null) {
-                            if (_errs48) {
-                                vErrors.length = _errs48;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data11.width !== undefined) {
-                    let data21 = data11.width;
-                    if ((typeof data21 == "number") && (isFinite(data21))) {
-                        if (data21 <= 0 || isNaN(data21)) {
-                            const err73 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.rbf.properties.width, data: data21 };
-                            if (vErrors === null) {
-                                vErrors = [err73];
-                            }
-                            else {
-                                vErrors.push(err73);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err74 = { instancePath: instancePath + "/rbf/width", schemaPath: "#/properties/rbf/properties/width/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.rbf.properties.width.type, parentSchema: schema23.properties.rbf.properties.width, data: data21 };
-                        if (vErrors === null) {
-                            vErrors = [err74];
-                        }
-                        else {
-                            vErrors.push(err74);
-                        }
-                        errors++;
-                    }
-                }
-                if (data11.transform !== undefined) {
-                    let data22 = data11.transform;
-                    if (!((((data22 === "log") || (data22 === "log1p")) || (data22 === "sqrt")) || (data22 === "standardise"))) {
-                        const err75 = { instancePath: instancePath + "/rbf/transform", schemaPath: "#/properties/rbf/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.rbf.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.rbf.properties.transform.enum, parentSchema: schema23.properties.rbf.properties.transform, data: data22 };
-                        if (vErrors === null) {
-                            vErrors = [err75];
-                        }
-                        else {
-                            vErrors.push(err75);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err76 = { instancePath: instancePath + "/rbf", schemaPath: "#/properties/rbf/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.rbf.type, parentSchema: schema23.properties.rbf, data: data11 };
-                if (vErrors === null) {
-                    vErrors = [err76];
-                }
-                else {
-                    vErrors.push(err76);
-                }
-                errors++;
-            }
-        }
-        if (data.fourier !== undefined) {
-            let data23 = data.fourier;
-            if (data23 && typeof data23 == "object" && !Array.isArray(data23)) {
-                if (data23.of === undefined) {
-                    const err77 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.fourier.required, parentSchema: schema23.properties.fourier, data: data23 };
-                    if (vErrors === null) {
-                        vErrors = [err77];
-                    }
-                    else {
-                        vErrors.push(err77);
-                    }
-                    errors++;
-                }
-                if (data23.period === undefined) {
-                    const err78 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/required", keyword: "required", params: { missingProperty: "period" }, message: "must have required property '" + "period" + "'", schema: schema23.properties.fourier.required, parentSchema: schema23.properties.fourier, data: data23 };
-                    if (vErrors === null) {
-                        vErrors = [err78];
-                    }
-                    else {
-                        vErrors.push(err78);
-                    }
-                    errors++;
-                }
-                if (data23.harmonics === undefined) {
-                    const err79 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/required", keyword: "required", params: { missingProperty: "harmonics" }, message: "must have required property '" + "harmonics" + "'", schema: schema23.properties.fourier.required, parentSchema: schema23.properties.fourier, data: data23 };
-                    if (vErrors === null) {
-                        vErrors = [err79];
-                    }
-                    else {
-                        vErrors.push(err79);
-                    }
-                    errors++;
-                }
-                for (const key4 in data23) {
-                    if (!((((key4 === "of") || (key4 === "period")) || (key4 === "harmonics")) || (key4 === "transform"))) {
-                        const err80 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.fourier, data: data23 };
-                        if (vErrors === null) {
-                            vErrors = [err80];
-                        }
-                        else {
-                            vErrors.push(err80);
-                        }
-                        errors++;
-                    }
-                }
-                if (data23.of !== undefined) {
-                    let data24 = data23.of;
-                    if (typeof data24 === "string") {
-                        if (func1(data24) < 1) {
-                            const err81 = { instancePath: instancePath + "/fourier/of", schemaPath: "#/properties/fourier/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.fourier.properties.of, data: data24 };
-                            if (vErrors === null) {
-                                vErrors = [err81];
-                            }
-                            else {
-                                vErrors.push(err81);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err82 = { instancePath: instancePath + "/fourier/of", schemaPath: "#/properties/fourier/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.fourier.properties.of.type, parentSchema: schema23.properties.fourier.properties.of, data: data24 };
-                        if (vErrors === null) {
-                            vErrors = [err82];
-                        }
-                        else {
-                            vErrors.push(err82);
-                        }
-                        errors++;
-                    }
-                }
-                if (data23.period !== undefined) {
-                    let data25 = data23.period;
-                    if ((typeof data25 == "number") && (isFinite(data25))) {
-                        if (data25 <= 0 || isNaN(data25)) {
-                            const err83 = { instancePath: instancePath + "/fourier/period", schemaPath: "#/properties/fourier/properties/period/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema23.properties.fourier.properties.period, data: data25 };
-                            if (vErrors === null) {
-                                vErrors = [err83];
-                            }
-                            else {
-                                vErrors.push(err83);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err84 = { instancePath: instancePath + "/fourier/period", schemaPath: "#/properties/fourier/properties/period/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.fourier.properties.period.type, parentSchema: schema23.properties.fourier.properties.period, data: data25 };
-                        if (vErrors === null) {
-                            vErrors = [err84];
-                        }
-                        else {
-                            vErrors.push(err84);
-                        }
-                        errors++;
-                    }
-                }
-                if (data23.harmonics !== undefined) {
-                    let data26 = data23.harmonics;
-                    if (!(((typeof data26 == "number") && (!(data26 % 1) && !isNaN(data26))) && (isFinite(data26)))) {
-                        const err85 = { instancePath: instancePath + "/fourier/harmonics", schemaPath: "#/properties/fourier/properties/harmonics/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.fourier.properties.harmonics.type, parentSchema: schema23.properties.fourier.properties.harmonics, data: data26 };
-                        if (vErrors === null) {
-                            vErrors = [err85];
-                        }
-                        else {
-                            vErrors.push(err85);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data26 == "number") && (isFinite(data26))) {
-                        if (data26 > 50 || isNaN(data26)) {
-                            const err86 = { instancePath: instancePath + "/fourier/harmonics", schemaPath: "#/properties/fourier/properties/harmonics/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema23.properties.fourier.properties.harmonics, data: data26 };
-                            if (vErrors === null) {
-                                vErrors = [err86];
-                            }
-                            else {
-                                vErrors.push(err86);
-                            }
-                            errors++;
-                        }
-                        if (data26 < 1 || isNaN(data26)) {
-                            const err87 = { instancePath: instancePath + "/fourier/harmonics", schemaPath: "#/properties/fourier/properties/harmonics/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.fourier.properties.harmonics, data: data26 };
-                            if (vErrors === null) {
-                                vErrors = [err87];
-                            }
-                            else {
-                                vErrors.push(err87);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data23.transform !== undefined) {
-                    let data27 = data23.transform;
-                    if (!((((data27 === "log") || (data27 === "log1p")) || (data27 === "sqrt")) || (data27 === "standardise"))) {
-                        const err88 = { instancePath: instancePath + "/fourier/transform", schemaPath: "#/properties/fourier/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.fourier.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.fourier.properties.transform.enum, parentSchema: schema23.properties.fourier.properties.transform, data: data27 };
-                        if (vErrors === null) {
-                            vErrors = [err88];
-                        }
-                        else {
-                            vErrors.push(err88);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err89 = { instancePath: instancePath + "/fourier", schemaPath: "#/properties/fourier/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.fourier.type, parentSchema: schema23.properties.fourier, data: data23 };
-                if (vErrors === null) {
-                    vErrors = [err89];
-                }
-                else {
-                    vErrors.push(err89);
-                }
-                errors++;
-            }
-        }
-        if (data.spline !== undefined) {
-            let data28 = data.spline;
-            if (data28 && typeof data28 == "object" && !Array.isArray(data28)) {
-                if (data28.of === undefined) {
-                    const err90 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.spline.required, parentSchema: schema23.properties.spline, data: data28 };
-                    if (vErrors === null) {
-                        vErrors = [err90];
-                    }
-                    else {
-                        vErrors.push(err90);
-                    }
-                    errors++;
-                }
-                if (data28.knots === undefined) {
-                    const err91 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/required", keyword: "required", params: { missingProperty: "knots" }, message: "must have required property '" + "knots" + "'", schema: schema23.properties.spline.required, parentSchema: schema23.properties.spline, data: data28 };
-                    if (vErrors === null) {
-                        vErrors = [err91];
-                    }
-                    else {
-                        vErrors.push(err91);
-                    }
-                    errors++;
-                }
-                for (const key5 in data28) {
-                    if (!(((((key5 === "of") || (key5 === "knots")) || (key5 === "degree")) || (key5 === "natural")) || (key5 === "transform"))) {
-                        const err92 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.spline, data: data28 };
-                        if (vErrors === null) {
-                            vErrors = [err92];
-                        }
-                        else {
-                            vErrors.push(err92);
-                        }
-                        errors++;
-                    }
-                }
-                if (data28.of !== undefined) {
-                    let data29 = data28.of;
-                    if (typeof data29 === "string") {
-                        if (func1(data29) < 1) {
-                            const err93 = { instancePath: instancePath + "/spline/of", schemaPath: "#/properties/spline/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.spline.properties.of, data: data29 };
-                            if (vErrors === null) {
-                                vErrors = [err93];
-                            }
-                            else {
-                                vErrors.push(err93);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err94 = { instancePath: instancePath + "/spline/of", schemaPath: "#/properties/spline/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.spline.properties.of.type, parentSchema: schema23.properties.spline.properties.of, data: data29 };
-                        if (vErrors === null) {
-                            vErrors = [err94];
-                        }
-                        else {
-                            vErrors.push(err94);
-                        }
-                        errors++;
-                    }
-                }
-                if (data28.knots !== undefined) {
-                    let data30 = data28.knots;
-                    const _errs86 = errors;
-                    let valid30 = false;
-                    let passing5 = null;
-                    const _errs87 = errors;
-                    if (Array.isArray(data30)) {
-                        if (data30.length > 100) {
-                            const err95 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/0/maxItems", keyword: "maxItems", params: { limit: 100 }, message: "must NOT have more than 100 items", schema: 100, parentSchema: schema23.properties.spline.properties.knots.oneOf[0], data: data30 };
-                            if (vErrors === null) {
-                                vErrors = [err95];
-                            }
-                            else {
-                                vErrors.push(err95);
-                            }
-                            errors++;
-                        }
-                        if (data30.length < 1) {
-                            const err96 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/0/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema23.properties.spline.properties.knots.oneOf[0], data: data30 };
-                            if (vErrors === null) {
-                                vErrors = [err96];
-                            }
-                            else {
-                                vErrors.push(err96);
-                            }
-                            errors++;
-                        }
-                        const len8 = data30.length;
-                        for (let i10 = 0; i10 < len8; i10++) {
-                            let data31 = data30[i10];
-                            if (!((typeof data31 == "number") && (isFinite(data31)))) {
-                                const err97 = { instancePath: instancePath + "/spline/knots/" + i10, schemaPath: "#/properties/spline/properties/knots/oneOf/0/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.spline.properties.knots.oneOf[0].items.type, parentSchema: schema23.properties.spline.properties.knots.oneOf[0].items, data: data31 };
-                                if (vErrors === null) {
-                                    vErrors = [err97];
-                                }
-                                else {
-                                    vErrors.push(err97);
-                                }
-                                errors++;
-                            }
-                        }
-                    }
-                    else {
-                        const err98 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/0/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema23.properties.spline.properties.knots.oneOf[0].type, parentSchema: schema23.properties.spline.properties.knots.oneOf[0], data: data30 };
-                        if (vErrors === null) {
-                            vErrors = [err98];
-                        }
-                        else {
-                            vErrors.push(err98);
-                        }
-                        errors++;
-                    }
-                    var _valid5 = _errs87 === errors;
-                    if (_valid5) {
-                        valid30 = true;
-                        passing5 = 0;
-                    }
-                    const _errs91 = errors;
-                    if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
-                        if (data30.count === undefined) {
-                            const err99 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/1/required", keyword: "required", params: { missingProperty: "count" }, message: "must have required property '" + "count" + "'", schema: schema23.properties.spline.properties.knots.oneOf[1].required, parentSchema: schema23.properties.spline.properties.knots.oneOf[1], data: data30 };
-                            if (vErrors === null) {
-                                vErrors = [err99];
-                            }
-                            else {
-                                vErrors.push(err99);
-                            }
-                            errors++;
-                        }
-                        for (const key6 in data30) {
-                            if (!(key6 === "count")) {
-                                const err100 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.spline.properties.knots.oneOf[1], data: data30 };
-                                if (vErrors === null) {
-                                    vErrors = [err100];
-                                }
-                                else {
-                                    vErrors.push(err100);
-                                }
-                                errors++;
-                            }
-                        }
-                        if (data30.count !== undefined) {
-                            let data32 = data30.count;
-                            if (!(((typeof data32 == "number") && (!(data32 % 1) && !isNaN(data32))) && (isFinite(data32)))) {
-                                const err101 = { instancePath: instancePath + "/spline/knots/count", schemaPath: "#/properties/spline/properties/knots/oneOf/1/properties/count/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.spline.properties.knots.oneOf[1].properties.count.type, parentSchema: schema23.properties.spline.properties.knots.oneOf[1].properties.count, data: data32 };
-                                if (vErrors === null) {
-                                    vErrors = [err101];
-                                }
-                                else {
-                                    vErrors.push(err101);
-                                }
-                                errors++;
-                            }
-                            if ((typeof data32 == "number") && (isFinite(data32))) {
-                                if (data32 > 100 || isNaN(data32)) {
-                                    const err102 = { instancePath: instancePath + "/spline/knots/count", schemaPath: "#/properties/spline/properties/knots/oneOf/1/properties/count/maximum", keyword: "maximum", params: { comparison: "<=", limit: 100 }, message: "must be <= 100", schema: 100, parentSchema: schema23.properties.spline.properties.knots.oneOf[1].properties.count, data: data32 };
-                                    if (vErrors === null) {
-                                        vErrors = [err102];
-                                    }
-                                    else {
-                                        vErrors.push(err102);
-                                    }
-                                    errors++;
-                                }
-                                if (data32 < 1 || isNaN(data32)) {
-                                    const err103 = { instancePath: instancePath + "/spline/knots/count", schemaPath: "#/properties/spline/properties/knots/oneOf/1/properties/count/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.spline.properties.knots.oneOf[1].properties.count, data: data32 };
-                                    if (vErrors === null) {
-                                        vErrors = [err103];
-                                    }
-                                    else {
-                                        vErrors.push(err103);
-                                    }
-                                    errors++;
-                                }
-                            }
-                        }
-                    }
-                    else {
-                        const err104 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.spline.properties.knots.oneOf[1].type, parentSchema: schema23.properties.spline.properties.knots.oneOf[1], data: data30 };
-                        if (vErrors === null) {
-                            vErrors = [err104];
-                        }
-                        else {
-                            vErrors.push(err104);
-                        }
-                        errors++;
-                    }
-                    var _valid5 = _errs91 === errors;
-                    if (_valid5 && valid30) {
-                        valid30 = false;
-                        passing5 = [passing5, 1];
-                    }
-                    else {
-                        if (_valid5) {
-                            valid30 = true;
-                            passing5 = 1;
-                        }
-                    }
-                    if (!valid30) {
-                        const err105 = { instancePath: instancePath + "/spline/knots", schemaPath: "#/properties/spline/properties/knots/oneOf", keyword: "oneOf", params: { passingSchemas: passing5 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.spline.properties.knots.oneOf, parentSchema: schema23.properties.spline.properties.knots, data: data30 };
-                        if (vErrors === null) {
-                            vErrors = [err105];
-                        }
-                        else {
-                            vErrors.push(err105);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs86;
-                        if (vErrors !== null) {
-                            if (_errs86) {
-                                vErrors.length = _errs86;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data28.degree !== undefined) {
-                    let data33 = data28.degree;
-                    if (!(((typeof data33 == "number") && (!(data33 % 1) && !isNaN(data33))) && (isFinite(data33)))) {
-                        const err106 = { instancePath: instancePath + "/spline/degree", schemaPath: "#/properties/spline/properties/degree/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema23.properties.spline.properties.degree.type, parentSchema: schema23.properties.spline.properties.degree, data: data33 };
-                        if (vErrors === null) {
-                            vErrors = [err106];
-                        }
-                        else {
-                            vErrors.push(err106);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data33 == "number") && (isFinite(data33))) {
-                        if (data33 > 5 || isNaN(data33)) {
-                            const err107 = { instancePath: instancePath + "/spline/degree", schemaPath: "#/properties/spline/properties/degree/maximum", keyword: "maximum", params: { comparison: "<=", limit: 5 }, message: "must be <= 5", schema: 5, parentSchema: schema23.properties.spline.properties.degree, data: data33 };
-                            if (vErrors === null) {
-                                vErrors = [err107];
-                            }
-                            else {
-                                vErrors.push(err107);
-                            }
-                            errors++;
-                        }
-                        if (data33 < 1 || isNaN(data33)) {
-                            const err108 = { instancePath: instancePath + "/spline/degree", schemaPath: "#/properties/spline/properties/degree/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema23.properties.spline.properties.degree, data: data33 };
-                            if (vErrors === null) {
-                                vErrors = [err108];
-                            }
-                            else {
-                                vErrors.push(err108);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data28.natural !== undefined) {
-                    let data34 = data28.natural;
-                    if (typeof data34 !== "boolean") {
-                        const err109 = { instancePath: instancePath + "/spline/natural", schemaPath: "#/properties/spline/properties/natural/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema23.properties.spline.properties.natural.type, parentSchema: schema23.properties.spline.properties.natural, data: data34 };
-                        if (vErrors === null) {
-                            vErrors = [err109];
-                        }
-                        else {
-                            vErrors.push(err109);
-                        }
-                        errors++;
-                    }
-                }
-                if (data28.transform !== undefined) {
-                    let data35 = data28.transform;
-                    if (!((((data35 === "log") || (data35 === "log1p")) || (data35 === "sqrt")) || (data35 === "standardise"))) {
-                        const err110 = { instancePath: instancePath + "/spline/transform", schemaPath: "#/properties/spline/properties/transform/enum", keyword: "enum", params: { allowedValues: schema23.properties.spline.properties.transform.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.spline.properties.transform.enum, parentSchema: schema23.properties.spline.properties.transform, data: data35 };
-                        if (vErrors === null) {
-                            vErrors = [err110];
-                        }
-                        else {
-                            vErrors.push(err110);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err111 = { instancePath: instancePath + "/spline", schemaPath: "#/properties/spline/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.spline.type, parentSchema: schema23.properties.spline, data: data28 };
-                if (vErrors === null) {
-                    vErrors = [err111];
-                }
-                else {
-                    vErrors.push(err111);
-                }
-                errors++;
-            }
-        }
-        if (data.category !== undefined) {
-            let data36 = data.category;
-            if (data36 && typeof data36 == "object" && !Array.isArray(data36)) {
-                if (data36.of === undefined) {
-                    const err112 = { instancePath: instancePath + "/category", schemaPath: "#/properties/category/required", keyword: "required", params: { missingProperty: "of" }, message: "must have required property '" + "of" + "'", schema: schema23.properties.category.required, parentSchema: schema23.properties.category, data: data36 };
-                    if (vErrors === null) {
-                        vErrors = [err112];
-                    }
-                    else {
-                        vErrors.push(err112);
-                    }
-                    errors++;
-                }
-                for (const key7 in data36) {
-                    if (!(((key7 === "of") || (key7 === "reference")) || (key7 === "unseen"))) {
-                        const err113 = { instancePath: instancePath + "/category", schemaPath: "#/properties/category/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema23.properties.category, data: data36 };
-                        if (vErrors === null) {
-                            vErrors = [err113];
-                        }
-                        else {
-                            vErrors.push(err113);
-                        }
-                        errors++;
-                    }
-                }
-                if (data36.of !== undefined) {
-                    let data37 = data36.of;
-                    if (typeof data37 === "string") {
-                        if (func1(data37) < 1) {
-                            const err114 = { instancePath: instancePath + "/category/of", schemaPath: "#/properties/category/properties/of/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema23.properties.category.properties.of, data: data37 };
-                            if (vErrors === null) {
-                                vErrors = [err114];
-                            }
-                            else {
-                                vErrors.push(err114);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err115 = { instancePath: instancePath + "/category/of", schemaPath: "#/properties/category/properties/of/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.category.properties.of.type, parentSchema: schema23.properties.category.properties.of, data: data37 };
-                        if (vErrors === null) {
-                            vErrors = [err115];
-                        }
-                        else {
-                            vErrors.push(err115);
-                        }
-                        errors++;
-                    }
-                }
-                if (data36.reference !== undefined) {
-                    let data38 = data36.reference;
-                    const _errs107 = errors;
-                    let valid35 = false;
-                    let passing6 = null;
-                    const _errs108 = errors;
-                    if (typeof data38 !== "string") {
-                        const err116 = { instancePath: instancePath + "/category/reference", schemaPath: "#/properties/category/properties/reference/oneOf/0/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema23.properties.category.properties.reference.oneOf[0].type, parentSchema: schema23.properties.category.properties.reference.oneOf[0], data: data38 };
-                        if (vErrors === null) {
-                            vErrors = [err116];
-                        }
-                        else {
-                            vErrors.push(err116);
-                        }
-                        errors++;
-                    }
-                    var _valid6 = _errs108 === errors;
-                    if (_valid6) {
-                        valid35 = true;
-                        passing6 = 0;
-                    }
-                    const _errs110 = errors;
-                    if (!((typeof data38 == "number") && (isFinite(data38)))) {
-                        const err117 = { instancePath: instancePath + "/category/reference", schemaPath: "#/properties/category/properties/reference/oneOf/1/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema23.properties.category.properties.reference.oneOf[1].type, parentSchema: schema23.properties.category.properties.reference.oneOf[1], data: data38 };
-                        if (vErrors === null) {
-                            vErrors = [err117];
-                        }
-                        else {
-                            vErrors.push(err117);
-                        }
-                        errors++;
-                    }
-                    var _valid6 = _errs110 === errors;
-                    if (_valid6 && valid35) {
-                        valid35 = false;
-                        passing6 = [passing6, 1];
-                    }
-                    else {
-                        if (_valid6) {
-                            valid35 = true;
-                            passing6 = 1;
-                        }
-                    }
-                    if (!valid35) {
-                        const err118 = { instancePath: instancePath + "/category/reference", schemaPath: "#/properties/category/properties/reference/oneOf", keyword: "oneOf", params: { passingSchemas: passing6 }, message: "must match exactly one schema in oneOf", schema: schema23.properties.category.properties.reference.oneOf, parentSchema: schema23.properties.category.properties.reference, data: data38 };
-                        if (vErrors === null) {
-                            vErrors = [err118];
-                        }
-                        else {
-                            vErrors.push(err118);
-                        }
-                        errors++;
-                    }
-                    else {
-                        errors = _errs107;
-                        if (vErrors !== null) {
-                            if (_errs107) {
-                                vErrors.length = _errs107;
-                            }
-                            else {
-                                vErrors = null;
-                            }
-                        }
-                    }
-                }
-                if (data36.unseen !== undefined) {
-                    let data39 = data36.unseen;
-                    if (!((data39 === "error") || (data39 === "zero"))) {
-                        const err119 = { instancePath: instancePath + "/category/unseen", schemaPath: "#/properties/category/properties/unseen/enum", keyword: "enum", params: { allowedValues: schema23.properties.category.properties.unseen.enum }, message: "must be equal to one of the allowed values", schema: schema23.properties.category.properties.unseen.enum, parentSchema: schema23.properties.category.properties.unseen, data: data39 };
-                        if (vErrors === null) {
-                            vErrors = [err119];
-                        }
-                        else {
-                            vErrors.push(err119);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err120 = { instancePath: instancePath + "/category", schemaPath: "#/properties/category/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.properties.category.type, parentSchema: schema23.properties.category, data: data36 };
-                if (vErrors === null) {
-                    vErrors = [err120];
-                }
-                else {
-                    vErrors.push(err120);
-                }
-                errors++;
-            }
-        }
-    }
-    else {
-        const err121 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema23.type, parentSchema: schema23, data };
-        if (vErrors === null) {
-            vErrors = [err121];
-        }
-        else {
-            vErrors.push(err121);
-        }
-        errors++;
-    }
-    validate76.errors = vErrors;
-    return errors === 0;
-}
-validate76.evaluated = { "props": { "linear": true, "polynomial": true, "rbf": true, "fourier": true, "spline": true, "category": true }, "dynamicProps": false, "dynamicItems": false };
-const schema25 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
-const schema26 = { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] };
-function validate81(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate81.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    const _errs0 = errors;
-    let valid0 = false;
-    let passing0 = null;
-    const _errs1 = errors;
-    if ((typeof data == "number") && (isFinite(data))) {
-        if (data < 0 || isNaN(data)) {
-            const err0 = { instancePath, schemaPath: "#/oneOf/0/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[0], data };
-            if (vErrors === null) {
-                vErrors = [err0];
-            }
-            else {
-                vErrors.push(err0);
-            }
-            errors++;
-        }
-    }
-    else {
-        const err1 = { instancePath, schemaPath: "#/oneOf/0/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[0].type, parentSchema: schema26.oneOf[0], data };
-        if (vErrors === null) {
-            vErrors = [err1];
-        }
-        else {
-            vErrors.push(err1);
-        }
-        errors++;
-    }
-    var _valid0 = _errs1 === errors;
-    if (_valid0) {
-        valid0 = true;
-        passing0 = 0;
-    }
-    const _errs3 = errors;
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        if (Object.keys(data).length < 1) {
-            const err2 = { instancePath, schemaPath: "#/oneOf/1/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema26.oneOf[1], data };
-            if (vErrors === null) {
-                vErrors = [err2];
-            }
-            else {
-                vErrors.push(err2);
-            }
-            errors++;
-        }
-        for (const key0 in data) {
-            if (!((key0 === "warn") || (key0 === "fail"))) {
-                const err3 = { instancePath, schemaPath: "#/oneOf/1/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema26.oneOf[1], data };
-                if (vErrors === null) {
-                    vErrors = [err3];
-                }
-                else {
-                    vErrors.push(err3);
-                }
-                errors++;
-            }
-        }
-        if (data.warn !== undefined) {
-            let data0 = data.warn;
-            if ((typeof data0 == "number") && (isFinite(data0))) {
-                if (data0 < 0 || isNaN(data0)) {
-                    const err4 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[1].properties.warn, data: data0 };
-                    if (vErrors === null) {
-                        vErrors = [err4];
-                    }
-                    else {
-                        vErrors.push(err4);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err5 = { instancePath: instancePath + "/warn", schemaPath: "#/oneOf/1/properties/warn/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[1].properties.warn.type, parentSchema: schema26.oneOf[1].properties.warn, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err5];
-                }
-                else {
-                    vErrors.push(err5);
-                }
-                errors++;
-            }
-        }
-        if (data.fail !== undefined) {
-            let data1 = data.fail;
-            if ((typeof data1 == "number") && (isFinite(data1))) {
-                if (data1 < 0 || isNaN(data1)) {
-                    const err6 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema26.oneOf[1].properties.fail, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err6];
-                    }
-                    else {
-                        vErrors.push(err6);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err7 = { instancePath: instancePath + "/fail", schemaPath: "#/oneOf/1/properties/fail/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[1].properties.fail.type, parentSchema: schema26.oneOf[1].properties.fail, data: data1 };
-                if (vErrors === null) {
-                    vErrors = [err7];
-                }
-                else {
-                    vErrors.push(err7);
-                }
-                errors++;
-            }
-        }
-    }
-    else {
-        const err8 = { instancePath, schemaPath: "#/oneOf/1/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema26.oneOf[1].type, parentSchema: schema26.oneOf[1], data };
-        if (vErrors === null) {
-            vErrors = [err8];
-        }
-        else {
-            vErrors.push(err8);
-        }
-        errors++;
-    }
-    var _valid0 = _errs3 === errors;
-    if (_valid0 && valid0) {
-        valid0 = false;
-        passing0 = [passing0, 1];
-    }
-    else {
-        if (_valid0) {
-            valid0 = true;
-            passing0 = 1;
-            var props0 = true;
-        }
-        const _errs10 = errors;
-        if (data && typeof data == "object" && !Array.isArray(data)) {
-            if (Object.keys(data).length < 1) {
-                const err9 = { instancePath, schemaPath: "#/oneOf/2/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema26.oneOf[2], data };
-                if (vErrors === null) {
-                    vErrors = [err9];
-                }
-                else {
-                    vErrors.push(err9);
-                }
-                errors++;
-            }
-            for (const key1 in data) {
-                if (!((((key1 === "warn_below") || (key1 === "fail_below")) || (key1 === "warn_above")) || (key1 === "fail_above"))) {
-                    const err10 = { instancePath, schemaPath: "#/oneOf/2/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema26.oneOf[2], data };
-                    if (vErrors === null) {
-                        vErrors = [err10];
-                    }
-                    else {
-                        vErrors.push(err10);
-                    }
-                    errors++;
-                }
-            }
-            if (data.warn_below !== undefined) {
-                let data2 = data.warn_below;
-                if (!((typeof data2 == "number") && (isFinite(data2)))) {
-                    const err11 = { instancePath: instancePath + "/warn_below", schemaPath: "#/oneOf/2/properties/warn_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.warn_below.type, parentSchema: schema26.oneOf[2].properties.warn_below, data: data2 };
-                    if (vErrors === null) {
-                        vErrors = [err11];
-                    }
-                    else {
-                        vErrors.push(err11);
-                    }
-                    errors++;
-                }
-            }
-            if (data.fail_below !== undefined) {
-                let data3 = data.fail_below;
-                if (!((typeof data3 == "number") && (isFinite(data3)))) {
-                    const err12 = { instancePath: instancePath + "/fail_below", schemaPath: "#/oneOf/2/properties/fail_below/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.fail_below.type, parentSchema: schema26.oneOf[2].properties.fail_below, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err12];
-                    }
-                    else {
-                        vErrors.push(err12);
-                    }
-                    errors++;
-                }
-            }
-            if (data.warn_above !== undefined) {
-                let data4 = data.warn_above;
-                if (!((typeof data4 == "number") && (isFinite(data4)))) {
-                    const err13 = { instancePath: instancePath + "/warn_above", schemaPath: "#/oneOf/2/properties/warn_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.warn_above.type, parentSchema: schema26.oneOf[2].properties.warn_above, data: data4 };
-                    if (vErrors === null) {
-                        vErrors = [err13];
-                    }
-                    else {
-                        vErrors.push(err13);
-                    }
-                    errors++;
-                }
-            }
-            if (data.fail_above !== undefined) {
-                let data5 = data.fail_above;
-                if (!((typeof data5 == "number") && (isFinite(data5)))) {
-                    const err14 = { instancePath: instancePath + "/fail_above", schemaPath: "#/oneOf/2/properties/fail_above/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema26.oneOf[2].properties.fail_above.type, parentSchema: schema26.oneOf[2].properties.fail_above, data: data5 };
-                    if (vErrors === null) {
-                        vErrors = [err14];
-                    }
-                    else {
-                        vErrors.push(err14);
-                    }
-                    errors++;
-                }
-            }
-        }
-        else {
-            const err15 = { instancePath, schemaPath: "#/oneOf/2/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema26.oneOf[2].type, parentSchema: schema26.oneOf[2], data };
-            if (vErrors === null) {
-                vErrors = [err15];
-            }
-            else {
-                vErrors.push(err15);
-            }
-            errors++;
-        }
-        var _valid0 = _errs10 === errors;
-        if (_valid0 && valid0) {
-            valid0 = false;
-            passing0 = [passing0, 2];
-        }
-        else {
-            if (_valid0) {
-                valid0 = true;
-                passing0 = 2;
-                if (props0 !== true) {
-                    props0 = true;
-                }
-            }
-            const _errs21 = errors;
-            if ("off" !== data) {
-                const err16 = { instancePath, schemaPath: "#/oneOf/3/const", keyword: "const", params: { allowedValue: "off" }, message: "must be equal to constant", schema: "off", parentSchema: schema26.oneOf[3], data };
-                if (vErrors === null) {
-                    vErrors = [err16];
-                }
-                else {
-                    vErrors.push(err16);
-                }
-                errors++;
-            }
-            var _valid0 = _errs21 === errors;
-            if (_valid0 && valid0) {
-                valid0 = false;
-                passing0 = [passing0, 3];
-            }
-            else {
-                if (_valid0) {
-                    valid0 = true;
-                    passing0 = 3;
-                }
-            }
-        }
-    }
-    if (!valid0) {
-        const err17 = { instancePath, schemaPath: "#/oneOf", keyword: "oneOf", params: { passingSchemas: passing0 }, message: "must match exactly one schema in oneOf", schema: schema26.oneOf, parentSchema: schema26, data };
-        if (vErrors === null) {
-            vErrors = [err17];
-        }
-        else {
-            vErrors.push(err17);
-        }
-        errors++;
-    }
-    else {
-        errors = _errs0;
-        if (vErrors !== null) {
-            if (_errs0) {
-                vErrors.length = _errs0;
-            }
-            else {
-                vErrors = null;
-            }
-        }
-    }
-    validate81.errors = vErrors;
-    evaluated0.props = props0;
-    return errors === 0;
-}
-validate81.evaluated = { "dynamicProps": true, "dynamicItems": false };
-function validate80(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate80.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        for (const key0 in data) {
-            if (!(func2.call(schema25.properties, key0))) {
-                const err0 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema25, data };
-                if (vErrors === null) {
-                    vErrors = [err0];
-                }
-                else {
-                    vErrors.push(err0);
-                }
-                errors++;
-            }
-        }
-        if (data.gap_ratio !== undefined) {
-            if (!(validate81(data.gap_ratio, { instancePath: instancePath + "/gap_ratio", parentData: data, parentDataProperty: "gap_ratio", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.params_per_sample !== undefined) {
-            if (!(validate81(data.params_per_sample, { instancePath: instancePath + "/params_per_sample", parentData: data, parentDataProperty: "params_per_sample", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.coefficient !== undefined) {
-            if (!(validate81(data.coefficient, { instancePath: instancePath + "/coefficient", parentData: data, parentDataProperty: "coefficient", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.base_change !== undefined) {
-            if (!(validate81(data.base_change, { instancePath: instancePath + "/base_change", parentData: data, parentDataProperty: "base_change", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.cv_ratio !== undefined) {
-            if (!(validate81(data.cv_ratio, { instancePath: instancePath + "/cv_ratio", parentData: data, parentDataProperty: "cv_ratio", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.swing !== undefined) {
-            if (!(validate81(data.swing, { instancePath: instancePath + "/swing", parentData: data, parentDataProperty: "swing", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.swing_beyond !== undefined) {
-            if (!(validate81(data.swing_beyond, { instancePath: instancePath + "/swing_beyond", parentData: data, parentDataProperty: "swing_beyond", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.swing_spikes !== undefined) {
-            if (!(validate81(data.swing_spikes, { instancePath: instancePath + "/swing_spikes", parentData: data, parentDataProperty: "swing_spikes", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.leakage !== undefined) {
-            if (!(validate81(data.leakage, { instancePath: instancePath + "/leakage", parentData: data, parentDataProperty: "leakage", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.reproducibility !== undefined) {
-            if (!(validate81(data.reproducibility, { instancePath: instancePath + "/reproducibility", parentData: data, parentDataProperty: "reproducibility", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.condition !== undefined) {
-            if (!(validate81(data.condition, { instancePath: instancePath + "/condition", parentData: data, parentDataProperty: "condition", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.complexity !== undefined) {
-            if (!(validate81(data.complexity, { instancePath: instancePath + "/complexity", parentData: data, parentDataProperty: "complexity", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.holdout_r2 !== undefined) {
-            if (!(validate81(data.holdout_r2, { instancePath: instancePath + "/holdout_r2", parentData: data, parentDataProperty: "holdout_r2", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.holdout_rmse !== undefined) {
-            if (!(validate81(data.holdout_rmse, { instancePath: instancePath + "/holdout_rmse", parentData: data, parentDataProperty: "holdout_rmse", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.holdout_mae !== undefined) {
-            if (!(validate81(data.holdout_mae, { instancePath: instancePath + "/holdout_mae", parentData: data, parentDataProperty: "holdout_mae", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.chi_square !== undefined) {
-            if (!(validate81(data.chi_square, { instancePath: instancePath + "/chi_square", parentData: data, parentDataProperty: "chi_square", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.separation !== undefined) {
-            if (!(validate81(data.separation, { instancePath: instancePath + "/separation", parentData: data, parentDataProperty: "separation", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.events_per_parameter !== undefined) {
-            if (!(validate81(data.events_per_parameter, { instancePath: instancePath + "/events_per_parameter", parentData: data, parentDataProperty: "events_per_parameter", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-        if (data.calibration_slope !== undefined) {
-            if (!(validate81(data.calibration_slope, { instancePath: instancePath + "/calibration_slope", parentData: data, parentDataProperty: "calibration_slope", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
-                errors = vErrors.length;
-            }
-        }
-    }
-    else {
-        const err1 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema25.type, parentSchema: schema25, data };
-        if (vErrors === null) {
-            vErrors = [err1];
-        }
-        else {
-            vErrors.push(err1);
-        }
-        errors++;
-    }
-    validate80.errors = vErrors;
-    return errors === 0;
-}
-validate80.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-function validate75(data, { instancePath = "", parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {}) {
-    /*# sourceURL="urn:fitgate:schema:descriptor:1" */ ;
-    let vErrors = null;
-    let errors = 0;
-    const evaluated0 = validate75.evaluated;
-    if (evaluated0.dynamicProps) {
-        evaluated0.props = undefined;
-    }
-    if (evaluated0.dynamicItems) {
-        evaluated0.items = undefined;
-    }
-    if (data && typeof data == "object" && !Array.isArray(data)) {
-        if (data.version === undefined) {
-            const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property '" + "version" + "'", schema: schema22.required, parentSchema: schema22, data };
-            if (vErrors === null) {
-                vErrors = [err0];
-            }
-            else {
-                vErrors.push(err0);
-            }
-            errors++;
-        }
-        if (data.name === undefined) {
-            const err1 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "name" }, message: "must have required property '" + "name" + "'", schema: schema22.required, parentSchema: schema22, data };
-            if (vErrors === null) {
-                vErrors = [err1];
-            }
-            else {
-                vErrors.push(err1);
-            }
-            errors++;
-        }
-        if (data.data === undefined) {
-            const err2 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "data" }, message: "must have required property '" + "data" + "'", schema: schema22.required, parentSchema: schema22, data };
-            if (vErrors === null) {
-                vErrors = [err2];
-            }
-            else {
-                vErrors.push(err2);
-            }
-            errors++;
-        }
-        if (data.terms === undefined) {
-            const err3 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "terms" }, message: "must have required property '" + "terms" + "'", schema: schema22.required, parentSchema: schema22, data };
-            if (vErrors === null) {
-                vErrors = [err3];
-            }
-            else {
-                vErrors.push(err3);
-            }
-            errors++;
-        }
-        for (const key0 in data) {
-            if (!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))) {
-                const err4 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22, data };
-                if (vErrors === null) {
-                    vErrors = [err4];
-                }
-                else {
-                    vErrors.push(err4);
-                }
-                errors++;
-            }
-        }
-        if (data.version !== undefined) {
-            let data0 = data.version;
-            if (1 !== data0) {
-                const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema22.properties.version, data: data0 };
-                if (vErrors === null) {
-                    vErrors = [err5];
-                }
-                else {
-                    vErrors.push(err5);
-                }
-                errors++;
-            }
-        }
-        if (data.name !== undefined) {
-            let data1 = data.name;
-            if (typeof data1 === "string") {
-                if (func1(data1) > 100) {
-                    const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/maxLength", keyword: "maxLength", params: { limit: 100 }, message: "must NOT have more than 100 characters", schema: 100, parentSchema: schema22.properties.name, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err6];
-                    }
-                    else {
-                        vErrors.push(err6);
-                    }
-                    errors++;
-                }
-                if (func1(data1) < 1) {
-                    const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.name, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err7];
-                    }
-                    else {
-                        vErrors.push(err7);
-                    }
-                    errors++;
-                }
-                if (!pattern3.test(data1)) {
-                    const err8 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/pattern", keyword: "pattern", params: { pattern: "^[A-Za-z0-9._-]+$" }, message: "must match pattern \"" + "^[A-Za-z0-9._-]+$" + "\"", schema: "^[A-Za-z0-9._-]+$", parentSchema: schema22.properties.name, data: data1 };
-                    if (vErrors === null) {
-                        vErrors = [err8];
-                    }
-                    else {
-                        vErrors.push(err8);
-                    }
-                    errors++;
-                }
-            }
-            else {
-                const err9 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.name.type, parentSchema: schema22.properties.name, data: data1 };
-                if (vErrors === null) {
-                    vErrors = [err9];
-                }
-                else {
-                    vErrors.push(err9);
-                }
-                errors++;
-            }
-        }
-        if (data.task !== undefined) {
-            let data2 = data.task;
-            if (!((data2 === "regression") || (data2 === "classification"))) {
-                const err10 = { instancePath: instancePath + "/task", schemaPath: "#/properties/task/enum", keyword: "enum", params: { allowedValues: schema22.properties.task.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.task.enum, parentSchema: schema22.properties.task, data: data2 };
-                if (vErrors === null) {
-                    vErrors = [err10];
-                }
-                else {
-                    vErrors.push(err10);
-                }
-                errors++;
-            }
-        }
-        if (data.data !== undefined) {
-            let data3 = data.data;
-            if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
-                if (data3.train === undefined) {
-                    const err11 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err11];
-                    }
-                    else {
-                        vErrors.push(err11);
-                    }
-                    errors++;
-                }
-                if (data3.holdout === undefined) {
-                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err12];
-                    }
-                    else {
-                        vErrors.push(err12);
-                    }
-                    errors++;
-                }
-                if (data3.target === undefined) {
-                    const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err13];
-                    }
-                    else {
-                        vErrors.push(err13);
-                    }
-                    errors++;
-                }
-                for (const key1 in data3) {
-                    if (!((((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "positive")) || (key1 === "weight")) || (key1 === "sigma"))) {
-                        const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
-                        if (vErrors === null) {
-                            vErrors = [err14];
-                        }
-                        else {
-                            vErrors.push(err14);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.train !== undefined) {
-                    let data4 = data3.train;
-                    if (typeof data4 === "string") {
-                        if (func1(data4) < 1) {
-                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train, data: data4 };
-                            if (vErrors === null) {
-                                vErrors = [err15];
-                            }
-                            else {
-                                vErrors.push(err15);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.type, parentSchema: schema22.properties.data.properties.train, data: data4 };
-                        if (vErrors === null) {
-                            vErrors = [err16];
-                        }
-                        else {
-                            vErrors.push(err16);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.holdout !== undefined) {
-                    let data5 = data3.holdout;
-                    if (typeof data5 === "string") {
-                        if (func1(data5) < 1) {
-                            const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
-                            if (vErrors === null) {
-                                vErrors = [err17];
-                            }
-                            else {
-                                vErrors.push(err17);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err18 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.type, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
-                        if (vErrors === null) {
-                            vErrors = [err18];
-                        }
-                        else {
-                            vErrors.push(err18);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.target !== undefined) {
-                    let data6 = data3.target;
-                    if (typeof data6 === "string") {
-                        if (func1(data6) < 1) {
-                            const err19 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data6 };
-                            if (vErrors === null) {
-                                vErrors = [err19];
-                            }
-                            else {
-                                vErrors.push(err19);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err20 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err20];
-                        }
-                        else {
-                            vErrors.push(err20);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.positive !== undefined) {
-                    let data7 = data3.positive;
-                    if (typeof data7 === "string") {
-                        if (func1(data7) < 1) {
-                            const err21 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data7 };
-                            if (vErrors === null) {
-                                vErrors = [err21];
-                            }
-                            else {
-                                vErrors.push(err21);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err22 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data7 };
-                        if (vErrors === null) {
-                            vErrors = [err22];
-                        }
-                        else {
-                            vErrors.push(err22);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.weight !== undefined) {
-                    let data8 = data3.weight;
-                    if (typeof data8 === "string") {
-                        if (func1(data8) < 1) {
-                            const err23 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.weight, data: data8 };
-                            if (vErrors === null) {
-                                vErrors = [err23];
-                            }
-                            else {
-                                vErrors.push(err23);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err24 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.weight.type, parentSchema: schema22.properties.data.properties.weight, data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err24];
-                        }
-                        else {
-                            vErrors.push(err24);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.sigma !== undefined) {
-                    let data9 = data3.sigma;
-                    if (typeof data9 === "string") {
-                        if (func1(data9) < 1) {
-                            const err25 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.sigma, data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err25];
-                            }
-                            else {
-                                vErrors.push(err25);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err26 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.sigma.type, parentSchema: schema22.properties.data.properties.sigma, data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err26];
-                        }
-                        else {
-                            vErrors.push(err26);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err27 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err27];
-                }
-                else {
-                    vErrors.push(err27);
-                }
-                errors++;
-            }
-        }
-        if (data.terms !== undefined) {
-            let data10 = data.terms;
-            if (Array.isArray(data10)) {
-                if (data10.length < 1) {
-                    const err28 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data10 };
-                    if (vErrors === null) {
-                        vErrors = [err28];
-                    }
-                    else {
-                        vErrors.push(err28);
-                    }
-                    errors++;
-                }
-                const len0 = data10.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                    if (!(validate76(data10[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data10, parentDataProperty: i0, rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
-                        errors = vErrors.length;
-                    }
-                }
-            }
-            else {
-                const err29 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data10 };
-                if (vErrors === null) {
-                    vErrors = [err29];
-                }
-                else {
-                    vErrors.push(err29);
-                }
-                errors++;
-            }
-        }
-        if (data.fit !== undefined) {
-            let data12 = data.fit;
-            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
-                for (const key2 in data12) {
-                    if (!(((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))) {
-                        const err30 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err30];
-                        }
-                        else {
-                            vErrors.push(err30);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.intercept !== undefined) {
-                    let data13 = data12.intercept;
-                    if (typeof data13 !== "boolean") {
-                        const err31 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data13 };
-                        if (vErrors === null) {
-                            vErrors = [err31];
-                        }
-                        else {
-                            vErrors.push(err31);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.ridge !== undefined) {
-                    let data14 = data12.ridge;
-                    if ((typeof data14 == "number") && (isFinite(data14))) {
-                        if (data14 < 0 || isNaN(data14)) {
-                            const err32 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data14 };
-                            if (vErrors === null) {
-                                vErrors = [err32];
-                            }
-                            else {
-                                vErrors.push(err32);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err33 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err33];
-                        }
-                        else {
-                            vErrors.push(err33);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.folds !== undefined) {
-                    let data15 = data12.folds;
-                    if (!(((typeof data15 == "number") && (!(data15 % 1) && !isNaN(data15))) && (isFinite(data15)))) {
-                        const err34 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data15 };
-                        if (vErrors === null) {
-                            vErrors = [err34];
-                        }
-                        else {
-                            vErrors.push(err34);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data15 == "number") && (isFinite(data15))) {
-                        if (data15 < 2 || isNaN(data15)) {
-                            const err35 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data15 };
-                            if (vErrors === null) {
-                                vErrors = [err35];
-                            }
-                            else {
-                                vErrors.push(err35);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data12.fold_order !== undefined) {
-                    let data16 = data12.fold_order;
-                    if (!((data16 === "shuffled") || (data16 === "blocks"))) {
-                        const err36 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data16 };
-                        if (vErrors === null) {
-                            vErrors = [err36];
-                        }
-                        else {
-                            vErrors.push(err36);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.seed !== undefined) {
-                    let data17 = data12.seed;
-                    if (!(((typeof data17 == "number") && (!(data17 % 1) && !isNaN(data17))) && (isFinite(data17)))) {
-                        const err37 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data17 };
-                        if (vErrors === null) {
-                            vErrors = [err37];
-                        }
-                        else {
-                            vErrors.push(err37);
-                        }
-                        errors++;
-                    }
-                    if ((typeof data17 == "number") && (isFinite(data17))) {
-                        if (data17 > 4294967295 || isNaN(data17)) {
-                            const err38 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data17 };
-                            if (vErrors === null) {
-                                vErrors = [err38];
-                            }
-                            else {
-                                vErrors.push(err38);
-                            }
-                            errors++;
-                        }
-                        if (data17 < 0 || isNaN(data17)) {
-                            const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data17 };
-                            if (vErrors === null) {
-                                vErrors = [err39];
-                            }
-                            else {
-                                vErrors.push(err39);
-                            }
-                            errors++;
-                        }
-                    }
-                }
-                if (data12.parameter_count !== undefined) {
-                    let data18 = data12.parameter_count;
-                    if (!((data18 === "columns") || (data18 === "effective"))) {
-                        const err40 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data18 };
-                        if (vErrors === null) {
-                            vErrors = [err40];
-                        }
-                        else {
-                            vErrors.push(err40);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.threshold !== undefined) {
-                    let data19 = data12.threshold;
-                    if ((typeof data19 == "number") && (isFinite(data19))) {
-                        if (data19 >= 1 || isNaN(data19)) {
-                            const err41 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data19 };
-                            if (vErrors === null) {
-                                vErrors = [err41];
-                            }
-                            else {
-                                vErrors.push(err41);
-                            }
-                            errors++;
-                        }
-                        if (data19 <= 0 || isNaN(data19)) {
-                            const err42 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data19 };
-                            if (vErrors === null) {
-                                vErrors = [err42];
-                            }
-                            else {
-                                vErrors.push(err42);
-                            }
-                            errors++;
-                        }
-                    }
-                    else {
-                        const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data19 };
-                        if (vErrors === null) {
-                            vErrors = [err43];
-                        }
-                        else {
-                            vErrors.push(err43);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err44 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err44];
-                }
-                else {
-                    vErrors.push(err44);
-                }
-                errors++;
-            }
-        }
-        if (data.coefficients !== undefined) {
-            let data20 = data.coefficients;
-            if (Array.isArray(data20)) {
-                if (data20.length < 1) {
-                    const err45 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data20 };
-                    if (vErrors === null) {
-                        vErrors = [err45];
-                    }
-                    else {
-                        vErrors.push(err45);
-                    }
-                    errors++;
-                }
-                const len1 = data20.length;
-                for (let i1 = 0; i1 < len1; i1++) {
-                    let data21 = data20[i1];
-                    if (!((typeof data21 == "number") && (isFinite(data21)))) {
-                        const err46 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data21 };
-                        if (vErrors === null) {
-                            vErrors = [err46];
-                        }
-                        else {
-                            vErrors.push(err46);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err47 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data20 };
-                if (vErrors === null) {
-                    vErrors = [err47];
-                }
-                else {
-                    vErrors.push(err47);
-                }
-                errors++;
-            }
-        }
-        if (data.limits !== undefined) {
-            if (!(validate80(data.limits, { instancePath: instancePath + "/limits", parentData: data, parentDataProperty: "limits", rootData, dynamicAnchors }))) {
-                vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.errors);
-                errors = vErrors.length;
-            }
-        }
-    }
-    else {
-        const err48 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
-        if (vErrors === null) {
-            vErrors = [err48];
-        }
-        else {
-            vErrors.push(err48);
-        }
-        errors++;
-    }
-    validate75.errors = vErrors;
-    return errors === 0;
-}
-validate75.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
-
-;// CONCATENATED MODULE: ./src/config/schemas.ts
-/**
- * The two JSON Schemas (shipped as JSON files beside this module) as validators. They are
- * compiled ahead of time by test/tools/gen-validators.mjs (ajv standalone code, run by
- * `npm run bundle`) into ./generated/validators.ts, with the limit keys of `LIMIT_KEYS` added to
- * their `limits` so that a key added to the table is accepted even before the schema files list
- * it (a test keeps the files in step, another fails when the generated module is stale). No
- * schema is compiled at run time.
- */
-
-
-
-/** The settings schema as shipped (`settings.schema.json`). */
-const settingsSchema = (/* unused pure expression or super */ null && (settingsSchemaFile));
-/** The descriptor schema as shipped (`descriptor.schema.json`). */
-const descriptorSchema = (/* unused pure expression or super */ null && (descriptorSchemaFile));
-/** Validates a parsed settings file against `settings.schema.json`. */
-const validateSettingsValue = (value) => run(validateSettings, value);
-/** Validates a parsed descriptor against `descriptor.schema.json`. */
-const validateDescriptorValue = (value) => run(validateDescriptor, value);
-function run(validate, value) {
-    return validate(value) ? null : [...(validate.errors ?? [])];
-}
-
-// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
-var dist = __nccwpck_require__(8815);
-;// CONCATENATED MODULE: ./src/config/yaml-source.ts
-/**
- * YAML text to a plain value plus the source position of any key path, with the guards a
- * file from a pull request needs: a size cap, a nesting cap, an alias cap, duplicate keys
- * refused, and non-UTF-8 or binary content refused. Every problem is an {@link InputError}
- * naming the file, line and column.
- */
-
-
-/** Guards applied to every YAML file fitgate reads. */
-const YAML_GUARDS = Object.freeze({
-    /** Largest YAML file in bytes: 1 MiB. */
-    maxBytes: 1024 * 1024,
-    /** Deepest nesting of mappings and lists. */
-    maxDepth: 64,
-    /** Most alias expansions (`*name`) in one document. */
-    maxAliasCount: 100,
-});
-/** Stable codes of the errors this module throws. */
-const YAML_ERROR = Object.freeze({
-    syntax: 'yaml-syntax',
-    duplicateKey: 'yaml-duplicate-key',
-    collectionKey: 'yaml-collection-key',
-    tooDeep: 'yaml-too-deep',
-    aliases: 'yaml-aliases',
-    tooLarge: 'file-too-large',
-    encoding: 'file-encoding',
-});
-/**
- * Decodes file bytes as UTF-8 text (a leading byte-order mark is dropped).
- *
- * @param bytes the file's contents
- * @param file repository-relative path, for messages
- * @throws InputError `file-too-large` above {@link YAML_GUARDS}.maxBytes, `file-encoding` for
- *   bytes that are not UTF-8 or that contain NUL characters (binary content)
- */
-function decodeYamlBytes(bytes, file) {
-    checkSize(bytes.byteLength, file);
-    let text;
-    try {
-        text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: false }).decode(bytes);
-    }
-    catch {
-        const at = firstInvalidUtf8(bytes);
-        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
-    }
-    const nul = text.indexOf('\u0000');
-    if (nul >= 0) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', { file, ...positionInText(text, nul) });
-    }
-    return text;
-}
-/**
- * Reads and parses a YAML file through the repository reader, checking its size before reading.
- *
- * @param repo the repository
- * @param path repository-relative path
- */
-async function readYamlFile(repo, path) {
-    checkSize(await repo.size(path), path);
-    return parseYaml(decodeYamlBytes(await repo.read(path), path), path);
-}
-/**
- * Parses YAML 1.2 text (core schema: `off`, `yes`, `no` stay strings) into a plain value.
- *
- * @param text the YAML text
- * @param file repository-relative path, for messages
- * @throws InputError `yaml-syntax` (the yaml package's message and position), `yaml-duplicate-key`,
- *   `yaml-too-deep` (nesting above {@link YAML_GUARDS}.maxDepth), `yaml-aliases` (more alias
- *   expansions than {@link YAML_GUARDS}.maxAliasCount), `file-too-large`
- */
-function parseYaml(text, file) {
-    checkSize(Buffer.byteLength(text, 'utf8'), file);
-    if (text.charCodeAt(0) === 0xfeff)
-        text = text.slice(1);
-    // A cheap bound first: the yaml package's parser gets slow (and its composer runs out of
-    // stack) on documents nested thousands deep, so refuse those before parsing.
-    const rough = roughNesting(text);
-    if (rough.depth > ROUGH_DEPTH_CAP) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
-    }
-    const lineCounter = new dist/* LineCounter */.HN();
-    const doc = (0,dist/* parseDocument */.Tp)(text, { lineCounter, prettyErrors: false, uniqueKeys: false, version: '1.2', schema: 'core' });
-    const at = (offset) => {
-        const { line, col } = lineCounter.linePos(offset);
-        return { line, column: col };
-    };
-    if (doc.errors.length > 0) {
-        const error = doc.errors[0];
-        const stackOverflow = /call stack/i.test(error.message);
-        const message = error.message.replace(/ at line \d+, column \d+:?[\s\S]*$/, '');
-        throw new core_errors/* InputError */.dz(stackOverflow ? YAML_ERROR.tooDeep : YAML_ERROR.syntax, stackOverflow ? `is nested too deeply; expected at most ${YAML_GUARDS.maxDepth} levels` : `is not valid YAML: ${(0,core_errors/* clip */.$Q)(message, 120)}`, { file, ...at(error.pos[0]) });
-    }
-    checkStructure(doc, text, file, at);
-    let value;
-    try {
-        value = doc.toJS({ maxAliasCount: YAML_GUARDS.maxAliasCount });
-    }
-    catch (error) {
-        const first = firstAlias(doc.contents);
-        throw new core_errors/* InputError */.dz(YAML_ERROR.aliases, `expands aliases (*name) more than ${YAML_GUARDS.maxAliasCount} times (${error instanceof Error ? error.message : String(error)}); expected few aliases`, { file, ...(first ? at(first) : {}) });
-    }
-    const locate = (path, wantValue) => {
-        let node = doc.contents;
-        let keyOffset = node && node.range ? node.range[0] : 0;
-        for (const segment of path) {
-            node = resolveAlias(doc, node);
-            if (typeof segment === 'number' && (0,dist/* isSeq */.oP)(node)) {
-                const item = node.items[segment];
-                if (item === undefined)
-                    return null;
-                node = item;
-                const range = item?.range;
-                if (!range)
-                    return null;
-                keyOffset = range[0];
-            }
-            else if ((0,dist/* isMap */.jh)(node)) {
-                const pair = node.items.find((p) => keyText(p.key) === String(segment));
-                if (!pair)
-                    return null;
-                const keyRange = pair.key?.range;
-                keyOffset = keyRange ? keyRange[0] : keyOffset;
-                node = pair.value;
-            }
-            else {
-                return null;
-            }
-        }
-        if (keyOffset === null)
-            return null;
-        if (wantValue) {
-            const range = resolveAlias(doc, node)?.range;
-            const own = node?.range;
-            if (own)
-                return at(own[0]);
-            if (range)
-                return at(range[0]);
-        }
-        return at(keyOffset);
-    };
-    return {
-        value,
-        positionOf: (path) => locate(path, false),
-        valuePositionOf: (path) => locate(path, true),
-    };
-}
-/** Above this rough bound the text is refused before parsing (the exact check is {@link YAML_GUARDS}.maxDepth). */
-const ROUGH_DEPTH_CAP = 512;
-/**
- * An over-estimate of nesting depth from the raw text: open flow brackets (anywhere, even
- * inside strings) and leading indentation plus leading `- ` items on each line. Cheap and
- * linear; only pathological text gets near {@link ROUGH_DEPTH_CAP}.
- */
-function roughNesting(text) {
-    let flow = 0;
-    let best = 0;
-    let bestOffset = 0;
-    let lineStart = true;
-    let lead = 0;
-    for (let i = 0; i < text.length; i++) {
-        const c = text.charCodeAt(i);
-        if (c === 0x0a) {
-            lineStart = true;
-            lead = 0;
-            continue;
-        }
-        if (lineStart) {
-            if (c === 0x20 || c === 0x09)
-                lead += 1;
-            else if (c === 0x2d && text.charCodeAt(i + 1) === 0x20)
-                lead += 1;
-            else
-                lineStart = false;
-            if (lead > best) {
-                best = lead;
-                bestOffset = i;
-            }
-        }
-        if (c === 0x5b || c === 0x7b) {
-            flow += 1;
-            if (flow > best) {
-                best = flow;
-                bestOffset = i;
-            }
-        }
-        else if ((c === 0x5d || c === 0x7d) && flow > 0) {
-            flow -= 1;
-        }
-    }
-    return { depth: best, offset: bestOffset };
-}
-/** Checks nesting depth, duplicate keys and keys that are lists or mappings on the syntax tree (aliases are followed only to see what a key is). */
-function checkStructure(doc, text, file, at) {
-    const visit = (node, depth) => {
-        if ((0,dist/* isMap */.jh)(node) || (0,dist/* isSeq */.oP)(node)) {
-            if (depth > YAML_GUARDS.maxDepth) {
-                throw new core_errors/* InputError */.dz(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
-                    file,
-                    ...(node.range ? at(node.range[0]) : {}),
-                });
-            }
-        }
-        if ((0,dist/* isMap */.jh)(node)) {
-            const seen = new Map();
-            for (const pair of node.items) {
-                const keyOffset = pair.key?.range?.[0] ?? node.range?.[0] ?? 0;
-                // YAML allows a list or a mapping as a key; no key of fitgate's files is one, and plain
-                // JavaScript objects cannot hold one (the yaml package would print a process warning).
-                const keyNode = resolveAlias(doc, pair.key);
-                if ((0,dist/* isMap */.jh)(keyNode) || (0,dist/* isSeq */.oP)(keyNode)) {
-                    const range = pair.key?.range;
-                    const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-                    throw new core_errors/* InputError */.dz(YAML_ERROR.collectionKey, `a ${(0,dist/* isMap */.jh)(keyNode) ? 'mapping' : 'list'} used as a key (\`${(0,core_errors/* clip */.$Q)(written, 40)}\`); expected a plain name before the colon`, {
-                        file,
-                        ...at(keyOffset),
-                    });
-                }
-                const key = keyText(pair.key);
-                const before = seen.get(key);
-                if (before !== undefined) {
-                    const first = at(before);
-                    throw new core_errors/* InputError */.dz(YAML_ERROR.duplicateKey, `key \`${(0,core_errors/* clip */.$Q)(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
-                        file,
-                        key,
-                        ...at(keyOffset),
-                    });
-                }
-                seen.set(key, keyOffset);
-                visit(pair.key, depth + 1);
-                visit(pair.value, depth + 1);
-            }
-        }
-        else if ((0,dist/* isSeq */.oP)(node)) {
-            for (const item of node.items)
-                visit(item, depth + 1);
-        }
-        else if ((0,dist/* isPair */.tO)(node)) {
-            visit(node.key, depth + 1);
-            visit(node.value, depth + 1);
-        }
-    };
-    visit(doc.contents, 1);
-}
-/** A mapping key as the text plain JavaScript would use for it. */
-function keyText(key) {
-    if ((0,dist/* isScalar */.jn)(key))
-        return String(key.value);
-    if (key === null || key === undefined)
-        return '';
-    if ((0,dist/* isAlias */.Vj)(key))
-        return `*${key.source}`;
-    return String(key);
-}
-function resolveAlias(doc, node) {
-    let current = node;
-    for (let hops = 0; (0,dist/* isAlias */.Vj)(current) && hops < 8; hops++)
-        current = current.resolve(doc);
-    return current;
-}
-/** Offset of the first alias in document order, or null. */
-function firstAlias(root) {
-    const stack = [root];
-    let best = null;
-    while (stack.length > 0) {
-        const node = stack.pop();
-        if ((0,dist/* isAlias */.Vj)(node)) {
-            const start = node.range?.[0];
-            if (start !== undefined && (best === null || start < best))
-                best = start;
-        }
-        else if ((0,dist/* isMap */.jh)(node)) {
-            for (const pair of node.items)
-                stack.push(pair.key, pair.value);
-        }
-        else if ((0,dist/* isSeq */.oP)(node)) {
-            stack.push(...node.items);
-        }
-    }
-    return best;
-}
-function checkSize(bytes, file) {
-    if (bytes > YAML_GUARDS.maxBytes) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, { file });
-    }
-}
-function firstInvalidUtf8(bytes) {
-    // Largest prefix with no invalid byte (a cut-off sequence at its end is fine), by bisection:
-    // prefix validity is monotone and files are at most 1 MiB.
-    const validPrefix = (length) => {
-        try {
-            new TextDecoder('utf-8', { fatal: true }).decode(bytes.subarray(0, length), { stream: true });
-            return true;
-        }
-        catch {
-            return false;
-        }
-    };
-    if (validPrefix(bytes.length))
-        return Math.max(0, bytes.length - 1); // cut off at the end
-    let lo = 0; // valid
-    let hi = bytes.length; // invalid
-    while (hi - lo > 1) {
-        const mid = (lo + hi) >>> 1;
-        if (validPrefix(mid))
-            lo = mid;
-        else
-            hi = mid;
-    }
-    return hi - 1;
-}
-function positionInBytes(bytes, offset) {
-    let line = 1;
-    let lineStart = 0;
-    for (let i = 0; i < offset; i++) {
-        if (bytes[i] === 0x0a) {
-            line += 1;
-            lineStart = i + 1;
-        }
-    }
-    return { line, column: offset - lineStart + 1 };
-}
-function positionInText(text, offset) {
-    let line = 1;
-    let lineStart = 0;
-    for (let i = 0; i < offset; i++) {
-        if (text.charCodeAt(i) === 0x0a) {
-            line += 1;
-            lineStart = i + 1;
-        }
-    }
-    return { line, column: offset - lineStart + 1 };
-}
-
-;// CONCATENATED MODULE: ./src/config/settings-file.ts
-/**
- * The repository settings file (`fitgate.yml` by default): where the descriptors are, the
- * limits every model gets, defaults for `fit`, and resource caps.
- */
-
-
-
-
-
-
-/** Default settings path, relative to the repository root. */
-const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
-/** Descriptor glob used when there is no settings file. */
-const DEFAULT_MODEL_PATTERNS = Object.freeze(['**/*.model.yml']);
-/** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
-const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' });
-/** Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters. */
-const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000 });
-/** Stable codes of the errors this module throws (besides YAML and schema codes). */
-const SETTINGS_ERROR = Object.freeze({ missing: 'file-missing', limitOrder: 'limit-order' });
-const MIB = 1024 * 1024;
-/** Lines of each `models` pattern, kept beside a loaded settings object for later messages. */
-const modelLines = new WeakMap();
-/**
- * The settings line of the `index`-th `models` pattern, or null (no file, or settings not
- * made by {@link loadSettings}).
- */
-function modelPatternLine(settings, index) {
-    return modelLines.get(settings)?.[index] ?? null;
-}
-/** Settings used when the repository has no settings file. */
-function defaultSettings() {
-    return {
-        file: null,
-        models: [...DEFAULT_MODEL_PATTERNS],
-        limits: {},
-        fit: { ...DEFAULT_FIT },
-        caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells },
-    };
-}
-/**
- * Loads and validates the settings file; a missing file at the default path gives defaults
- * with models ["**\/*.model.yml"]; a missing file given explicitly is an InputError.
- *
- * @param repo the repository
- * @param path repository-relative settings path (default {@link DEFAULT_SETTINGS_PATH} at the caller)
- * @param options `explicit`: the user named the file (default false), so it must exist
- * @throws InputError `file-missing`, `path-outside`, YAML errors, `schema`, `limit-order`
- */
-async function loadSettings(repo, path, options = {}) {
-    const kind = await repo.entryKind(path);
-    const notes = await yamlTwinNotes(repo, path);
-    if (kind === 'missing') {
-        if (options.explicit) {
-            throw new core_errors/* InputError */.dz(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
-        }
-        return { ...defaultSettings(), notes };
-    }
-    if (kind !== 'file') {
-        // A folder, a link to nothing or a FIFO where the settings belong is never taken for "no settings".
-        throw new core_errors/* InputError */.dz(repo_path/* NOT_A_FILE */.bd, `the settings file ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
-    }
-    const doc = await readYamlFile(repo, path);
-    // The same object (the pattern lines are kept beside it).
-    const settings = settingsFromDocument(doc, path);
-    settings.notes = notes;
-    return settings;
-}
-/**
- * A note when a file named like `path` but ending `.yaml` sits beside it (fitgate reads only the
- * `.yml` name it was given): empty otherwise.
- */
-async function yamlTwinNotes(repo, path) {
-    if (!path.endsWith('.yml'))
-        return [];
-    const twin = `${path.slice(0, -4)}.yaml`;
-    let kind;
-    try {
-        kind = await repo.entryKind(twin);
-    }
-    catch {
-        return []; // a twin that leads outside is not read, and not ours to report
-    }
-    if (kind === 'missing')
-        return [];
-    return [`${(0,core_errors/* clip */.$Q)(twin)} is not read: fitgate reads its settings from ${(0,core_errors/* clip */.$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`];
-}
-/**
- * Validates a parsed settings document and builds the {@link SettingsFile}.
- *
- * @param doc the parsed YAML
- * @param file repository-relative path of the settings file
- */
-function settingsFromDocument(doc, file) {
-    const errors = validateSettingsValue(doc.value);
-    if (errors)
-        throw schemaError(errors, doc, file);
-    const raw = doc.value;
-    const defaults = defaultSettings();
-    const settings = {
-        file,
-        models: raw.models ? [...raw.models] : defaults.models,
-        limits: readLimits(doc, file, raw.limits, ['limits']),
-        fit: {
-            folds: raw.fit?.folds ?? DEFAULT_FIT.folds,
-            foldOrder: raw.fit?.fold_order ?? DEFAULT_FIT.foldOrder,
-            seed: raw.fit?.seed ?? DEFAULT_FIT.seed,
-            parameterCount: raw.fit?.parameter_count ?? DEFAULT_FIT.parameterCount,
-        },
-        caps: {
-            maxFileBytes: Math.round((raw.caps?.max_file_mb ?? DEFAULT_CAPS.maxFileMb) * MIB),
-            maxCells: raw.caps?.max_cells ?? DEFAULT_CAPS.maxCells,
-        },
-    };
-    if (raw.models)
-        modelLines.set(settings, raw.models.map((_, i) => doc.positionOf(['models', i])?.line ?? 1));
-    return settings;
-}
-/**
- * Reads a validated `limits` map with the line of each key, checking the order of its bounds
- * ({@link limitOrderProblem}).
- *
- * @param doc the parsed document
- * @param file repository-relative path
- * @param limits the map as validated by the schema (or undefined)
- * @param at key path of the map, e.g. `['limits']`
- */
-function readLimits(doc, file, limits, at) {
-    const out = {};
-    for (const [key, spec] of Object.entries(limits ?? {})) {
-        const problem = limitOrderProblem(spec, limitDirection(key));
-        if (problem !== null)
-            throw errorAt(doc, file, SETTINGS_ERROR.limitOrder, [...at, key, problem[0]], problem[1]);
-        out[key] = { spec: typeof spec === 'object' ? { ...spec } : spec, line: doc.positionOf([...at, key])?.line ?? 1 };
-    }
-    return out;
-}
-
+// EXTERNAL MODULE: ./src/config/limits.ts
+var config_limits = __nccwpck_require__(9304);
+// EXTERNAL MODULE: ./src/config/schema-errors.ts
+var schema_errors = __nccwpck_require__(3119);
+// EXTERNAL MODULE: ./src/config/schemas.ts + 3 modules
+var schemas = __nccwpck_require__(9602);
+// EXTERNAL MODULE: ./src/config/settings-file.ts
+var settings_file = __nccwpck_require__(4140);
+// EXTERNAL MODULE: ./src/config/yaml-source.ts
+var yaml_source = __nccwpck_require__(2865);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 ;// CONCATENATED MODULE: ./src/config/discover.ts
@@ -13411,24 +14400,24 @@ async function discoverDescriptors(repo, settings, explicit) {
             const path = normaliseGiven(given);
             const kind = await repo.entryKind(path);
             if (kind === 'missing') {
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
+                throw new errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
             }
             if (kind !== 'file')
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, { file: given });
+                throw new errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, { file: given });
             found.add(path);
         }
         return { paths: [...found].sort(), notes };
     }
     for (const [index, pattern] of settings.models.entries()) {
-        const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
-        const shown = (0,core_errors/* quoteValue */.cl)(pattern);
+        const where = { file: settings.file ?? undefined, line: (0,settings_file/* modelPatternLine */._p)(settings, index) ?? undefined, key: `models[${index}]` };
+        const shown = (0,errors/* quoteValue */.cl)(pattern);
         const { matches, twins, links } = await globWithTwin(repo, pattern, where);
         const unread = twins.length > 0 ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)` : '';
         const unsearched = links.length > 0 ? `${listNames(links)} ${links.length === 1 ? 'is a symbolic link' : 'are symbolic links'} that the pattern would search below; links are never followed as folders (name the real folder in the pattern)` : '';
         if (matches.length === 0) {
             const source = settings.file === null ? ' (the default, as there is no settings file)' : '';
             const why = [unread, unsearched].filter((t) => t !== '').map((t) => `; ${t}`).join('');
-            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
+            throw new errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
         }
         if (unread !== '')
             notes.push(`pattern ${shown}: ${unread}.`);
@@ -13454,7 +14443,7 @@ async function globWithTwin(repo, pattern, where) {
                 return { matches: both.paths.filter((p) => p.endsWith('.yml')), twins: both.paths.filter((p) => p.endsWith('.yaml')), links: both.notEntered };
             }
             catch (error) {
-                if (!(error instanceof core_errors/* InputError */.dz))
+                if (!(error instanceof errors/* InputError */.dz))
                     throw error;
                 // The twin alone is over a cap: fall through to the pattern alone, whose error (if any) is the one to show.
             }
@@ -13463,14 +14452,14 @@ async function globWithTwin(repo, pattern, where) {
         return { matches: alone.paths, twins: [], links: alone.notEntered };
     }
     catch (error) {
-        if (!(error instanceof core_errors/* InputError */.dz) || error.location.file !== undefined)
+        if (!(error instanceof errors/* InputError */.dz) || error.location.file !== undefined)
             throw error;
-        throw new core_errors/* InputError */.dz(error.code === DISCOVER_ERROR.outside ? DISCOVER_ERROR.globOutside : error.code, error.message, where);
+        throw new errors/* InputError */.dz(error.code === DISCOVER_ERROR.outside ? DISCOVER_ERROR.globOutside : error.code, error.message, where);
     }
 }
 /** Up to {@link NAMES_LISTED} names, each cut to 80 characters, then how many more. */
 function listNames(names) {
-    const shown = names.slice(0, NAMES_LISTED).map((n) => (0,core_errors/* clip */.$Q)(n));
+    const shown = names.slice(0, NAMES_LISTED).map((n) => (0,errors/* clip */.$Q)(n));
     return names.length > NAMES_LISTED ? `${shown.join(', ')} and ${names.length - NAMES_LISTED} more` : shown.join(', ');
 }
 /**
@@ -13484,7 +14473,7 @@ function checkUniqueNames(descriptors) {
     for (const d of descriptors) {
         const first = seen.get(d.name);
         if (first) {
-            throw new core_errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${(0,core_errors/* quoteValue */.cl)(d.name)} is also used by ${(0,core_errors/* clip */.$Q)(first.file)}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
+            throw new errors/* InputError */.dz(DISCOVER_ERROR.duplicateName, `model name ${(0,errors/* quoteValue */.cl)(d.name)} is also used by ${(0,errors/* clip */.$Q)(first.file)}:${first.nameLine}; expected a name unique in the repository`, { file: d.file, line: d.nameLine, key: 'name' });
         }
         seen.set(d.name, d);
     }
@@ -13493,7 +14482,7 @@ function normaliseGiven(given) {
     const p = given.replace(/\\/g, '/');
     const normal = external_node_path_.posix.normalize(p).replace(/^(\.\/)+/, '');
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || normal === '..' || normal.startsWith('../')) {
-        throw new core_errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', { file: given });
+        throw new errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', { file: given });
     }
     return normal;
 }
@@ -13533,7 +14522,7 @@ const DESCRIPTOR_ERROR = Object.freeze({
  * @throws InputError YAML errors, `schema`, `limit-order`, `rbf-centers`, `path-outside`, `file-missing`
  */
 async function loadDescriptor(repo, path, settings) {
-    const doc = await readYamlFile(repo, path);
+    const doc = await (0,yaml_source/* readYamlFile */.kv)(repo, path);
     const descriptor = descriptorFromDocument(doc, path, settings);
     for (const which of ['train', 'holdout']) {
         const key = ['data', which];
@@ -13542,10 +14531,10 @@ async function loadDescriptor(repo, path, settings) {
         const resolved = await repo.resolve(path, descriptor.data[which], where);
         const kind = await repo.entryKind(resolved);
         if (kind === 'missing') {
-            throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${(0,core_errors/* clip */.$Q)(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${(0,schema_errors/* showValue */.vp)(descriptor.data[which])} (${(0,errors/* clip */.$Q)(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
         }
         if (kind !== 'file') {
-            throw errorAt(doc, path, DESCRIPTOR_ERROR.notAFile, key, `${showValue(descriptor.data[which])} (${(0,core_errors/* clip */.$Q)(resolved)}) ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a CSV file relative to this descriptor's folder`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, path, DESCRIPTOR_ERROR.notAFile, key, `${(0,schema_errors/* showValue */.vp)(descriptor.data[which])} (${(0,errors/* clip */.$Q)(resolved)}) ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a CSV file relative to this descriptor's folder`);
         }
         descriptor.data[which] = resolved;
     }
@@ -13560,15 +14549,18 @@ async function loadDescriptor(repo, path, settings) {
  * @param settings the loaded settings file
  */
 function descriptorFromDocument(doc, file, settings) {
-    const errors = validateDescriptorValue(doc.value);
+    const errors = (0,schemas/* validateDescriptorValue */.z)(doc.value);
     if (errors)
-        throw schemaError(errors, doc, file);
+        throw (0,schema_errors/* schemaError */.g$)(errors, doc, file);
     const raw = doc.value;
     const line = (path) => doc.positionOf(path)?.line ?? 1;
     const terms = raw.terms.map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
     const termsLine = line(['terms']);
     const fitLine = raw.fit ? line(['fit']) : termsLine;
-    const limits = readLimits(doc, file, raw.limits, ['limits']);
+    const limits = (0,settings_file/* readLimits */.BU)(doc, file, raw.limits, ['limits']);
+    if (raw.fit?.refit === false && !raw.coefficients) {
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
+    }
     return {
         file,
         name: raw.name,
@@ -13584,6 +14576,7 @@ function descriptorFromDocument(doc, file, settings) {
         terms,
         fit: {
             intercept: raw.fit?.intercept ?? true,
+            refit: raw.fit?.refit ?? true,
             ridge: raw.fit?.ridge ?? 0,
             folds: raw.fit?.folds ?? settings.fit.folds,
             foldOrder: raw.fit?.fold_order ?? settings.fit.foldOrder,
@@ -13595,7 +14588,7 @@ function descriptorFromDocument(doc, file, settings) {
         },
         coefficients: raw.coefficients ? [...raw.coefficients] : null,
         coefficientsLine: raw.coefficients ? line(['coefficients']) : null,
-        limits: mergeLimits(settings, limits),
+        limits: (0,config_limits/* mergeLimits */.n6)(settings, limits),
         nameLine: line(['name']),
         termsLine,
     };
@@ -13603,7 +14596,7 @@ function descriptorFromDocument(doc, file, settings) {
 /** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
 function readWeighting(doc, file, data, line) {
     if (data.weight !== undefined && data.sigma !== undefined) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
     }
     if (data.weight !== undefined)
         return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
@@ -13624,7 +14617,7 @@ function readTerm(doc, file, term, index, line) {
             return withTransform(readMultiPolynomial(doc, file, p, ['terms', index, 'polynomial'], line), p.transform);
         for (const key of ['shift', 'scale']) {
             if (Array.isArray(p[key]))
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
         }
         return withTransform({ kind: 'polynomial', of: p.of, degree: p.degree, shift: p.shift ?? null, scale: p.scale ?? null, line }, p.transform);
     }
@@ -13642,7 +14635,7 @@ function readTerm(doc, file, term, index, line) {
     if (Array.isArray(r.of))
         return withTransform(readMultiRbf(doc, file, r, ['terms', index, 'rbf'], line), r.transform);
     if (Array.isArray(r.centers) && r.centers.some((c) => typeof c !== 'number')) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
     }
     return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
 }
@@ -13660,24 +14653,24 @@ function readMultiRbf(doc, file, r, at, line) {
         const rows = c;
         rows.forEach((row, i) => {
             if (row.length !== k)
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
         });
         return spec({ kind: 'rows', rows: rows.map((row) => [...row]) });
     }
     if (Array.isArray(c) && c.every((axis) => typeof axis === 'object' && axis !== null && !Array.isArray(axis))) {
         const axes = c;
         if (axes.length !== k)
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
         const total = axes.reduce((p, a) => p * a.count, 1);
         if (total > MAX_RBF_CENTERS)
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
         axes.forEach((a, i) => {
             if (a.to < a.from)
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${showValue(a.to)} is below \`from\` ${showValue(a.from)}; expected from <= to`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${(0,schema_errors/* showValue */.vp)(a.to)} is below \`from\` ${(0,schema_errors/* showValue */.vp)(a.from)}; expected from <= to`);
         });
         return spec({ kind: 'grid', axes: axes.map((a) => ({ from: a.from, to: a.to, count: a.count })) });
     }
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
+    throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
 }
 function readMultiPolynomial(doc, file, p, at, line) {
     const perInput = (key) => {
@@ -13687,7 +14680,7 @@ function readMultiPolynomial(doc, file, p, at, line) {
         if (!Array.isArray(v))
             return p.of.map(() => v);
         if (v.length !== p.of.length) {
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
         }
         return [...v];
     };
@@ -13697,13 +14690,13 @@ function readSpline(doc, file, spline, at, line) {
     const degree = spline.degree ?? 3;
     const natural = spline.natural ?? false;
     if (natural && degree !== 3) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${showValue(degree)}`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${(0,schema_errors/* showValue */.vp)(degree)}`);
     }
     if (Array.isArray(spline.knots)) {
         const values = [...spline.knots];
         for (let k = 1; k < values.length; k++) {
             if (!(values[k] > values[k - 1])) {
-                throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${showValue(values[k])} does not follow ${showValue(values[k - 1])}; expected strictly increasing knots`);
+                throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${(0,schema_errors/* showValue */.vp)(values[k])} does not follow ${(0,schema_errors/* showValue */.vp)(values[k - 1])}; expected strictly increasing knots`);
             }
         }
         return { kind: 'spline', of: spline.of, knots: { kind: 'list', values }, degree, natural, line };
@@ -13716,17 +14709,17 @@ function readCenters(doc, file, centers, at) {
     if (Array.isArray(centers))
         return { kind: 'list', values: [...centers] };
     if (centers.to < centers.from) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'to'], `\`to\` ${showValue(centers.to)} is below \`from\` ${showValue(centers.from)}; expected from <= to`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'to'], `\`to\` ${(0,schema_errors/* showValue */.vp)(centers.to)} is below \`from\` ${(0,schema_errors/* showValue */.vp)(centers.from)}; expected from <= to`);
     }
     if ('count' in centers) {
         if (centers.count > 1 && centers.to === centers.from) {
-            throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'count'], `${centers.count} centres from ${centers.from} to ${centers.to} would all coincide; expected from < to or count 1`);
+            throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'count'], `${centers.count} centres from ${centers.from} to ${centers.to} would all coincide; expected from < to or count 1`);
         }
         return { kind: 'count', from: centers.from, to: centers.to, count: centers.count };
     }
     const n = Math.floor((centers.to - centers.from) / centers.step) + 1;
     if (!(n <= MAX_RBF_CENTERS)) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'step'], `step ${showValue(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`);
+        throw (0,schema_errors/* errorAt */.Os)(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'step'], `step ${(0,schema_errors/* showValue */.vp)(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`);
     }
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
@@ -13759,9 +14752,10 @@ function errorResult(name, descriptor, error) {
         shipped: null,
         checks: [],
         error: {
-            message: key !== undefined && key !== '' ? `\`${(0,core_errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
+            message: key !== undefined && key !== '' ? `\`${(0,errors/* clip */.$Q)(key)}\`: ${error.message}` : error.message,
             file: error.location.file ?? null,
             line: error.location.line ?? null,
+            ...(error.location.column !== undefined ? { column: error.location.column } : {}),
             code: error.code,
         },
     };
@@ -13771,8 +14765,8 @@ function errorResult(name, descriptor, error) {
 const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./src/checks/index.ts + 22 modules
-var src_checks = __nccwpck_require__(9079);
+// EXTERNAL MODULE: ./src/checks/index.ts + 23 modules
+var src_checks = __nccwpck_require__(1981);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(7114);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
@@ -14282,509 +15276,8 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
 
 // EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 1 modules
 var lib = __nccwpck_require__(3046);
-// EXTERNAL MODULE: ./src/data/csv-rules.ts
-var csv_rules = __nccwpck_require__(8706);
-// EXTERNAL MODULE: ./src/data/line-blocks.ts + 1 modules
-var line_blocks = __nccwpck_require__(4113);
-;// CONCATENATED MODULE: ./src/data/fast-path.ts
-/**
- * The fast CSV path: one loop over the bytes of plain numeric CSV (no quotes), parsing
- * numbers straight into Float64Array columns without building a string per field.
- *
- * It accepts a strict subset of what the general path accepts and gives the same numbers
- * and line numbers for it. Anything else (a quote, a lone carriage return, a field count
- * that differs from the header's, a cell that is not a plain finite number, white space
- * other than spaces and tabs where it matters) makes it give up with
- * {@link FastPathDeclined}; the caller then reads the file again on the general path,
- * which either accepts it or throws the error the user should see.
- */
-
-
-/** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
-class FastPathDeclined extends Error {
-    line;
-    constructor(line) {
-        super(`fast CSV path declined at line ${line}`);
-        this.line = line;
-    }
-}
-// Bytes the loop looks at.
-const TAB = 9;
-const LF = 10;
-const VT = 11;
-const FF = 12;
-const CR = 13;
-const SPACE = 32;
-const QUOTE = 34;
-const PLUS = 43;
-const COMMA = 44;
-const MINUS = 45;
-const POINT = 46;
-const DIGIT_0 = 48;
-const DIGIT_9 = 57;
-const UPPER_E = 69;
-const LOWER_E = 101;
-/**
- * Largest mantissa that can take one more decimal digit and stay below 2^53 (every integer
- * up to 2^53 is exact in a double): 900719925474098 * 10 + 9 < 9007199254740992.
- */
-const MANTISSA_ROOM = 900719925474099;
-/** Exponents beyond this are clamped while reading digits (the value then goes through Number()). */
-const EXPONENT_CLAMP = 100000;
-/** Powers of ten that are exact in a double: 10^0 .. 10^22. */
-const EXACT_POWERS_OF_TEN = Float64Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
-const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
-/**
- * Reads plain numeric CSV and yields numeric chunks; throws {@link FastPathDeclined} at the
- * first thing it does not handle (chunks already yielded stay valid: they are exactly what
- * the general path gives for those rows).
- *
- * A number is built exactly: the digits go into an integer mantissa m (kept below 2^53) and
- * a decimal exponent e; when |e| <= 22 the value is m * 10^e or m / 10^-e, one correctly
- * rounded operation on two exact doubles, hence equal to `Number(text)` (W. D. Clinger,
- * "How to read floating point numbers accurately", PLDI 1990, the fast path). Otherwise the
- * cell's text goes through `Number()`.
- *
- * @param pieces the file's bytes in pieces of any size
- * @param target what to read
- */
-async function* fastChunks(pieces, target) {
-    const reader = new FastReader(target);
-    for await (const block of (0,line_blocks/* lineBlocks */.Dr)(pieces)) {
-        const stop = (0,line_blocks/* blockError */.Si)(target.file, reader.line, block);
-        if (stop !== null)
-            throw stop;
-        let bytes = block.bytes;
-        if (block.final && bytes[bytes.length - 1] !== LF) {
-            // Give the last line its line feed so that every inner loop stops on one.
-            const closed = new Uint8Array(bytes.length + 1);
-            closed.set(bytes);
-            closed[bytes.length] = LF;
-            bytes = closed;
-        }
-        reader.read(bytes);
-        if (reader.stopped)
-            return;
-        for (const chunk of reader.builder.take()) {
-            yield chunk;
-            if (target.recycle === true)
-                reader.builder.recycle(chunk);
-        }
-    }
-    if (reader.plan === null)
-        throw (0,csv_rules/* emptyError */.CA)(target.file);
-    reader.builder.flush();
-    for (const chunk of reader.builder.take()) {
-        yield chunk;
-        if (target.recycle === true)
-            reader.builder.recycle(chunk);
-    }
-}
-/** State of the fast path between blocks. */
-class FastReader {
-    target;
-    builder;
-    plan = null;
-    /** 1-based line number of the next line to read. */
-    line = 1;
-    /** True once a header-only read has its header. */
-    stopped = false;
-    constructor(target) {
-        this.target = target;
-        this.builder = new csv_rules/* ChunkBuilder */.vB(target.request, target.chunkRows);
-    }
-    /** Reads whole lines; `buf` ends with a line feed. */
-    read(buf) {
-        let p = this.plan === null ? this.readHeader(buf) : 0;
-        if (this.plan === null || this.stopped)
-            return;
-        const builder = this.builder;
-        while (p < buf.length) {
-            p = this.readRows(buf, p);
-            // The buffer switch lives out here so the hot loop never runs code it has no type
-            // feedback for (which would throw away its optimised code).
-            if (builder.row === builder.capacity)
-                builder.full();
-        }
-    }
-    /** Reads rows from `p` until the block ends or the chunk buffers are full; returns the new offset. */
-    readRows(buf, p) {
-        const plan = this.plan;
-        const end = buf.length;
-        const slotOfField = plan.slotOfField;
-        const lastField = slotOfField.length - 1;
-        const builder = this.builder;
-        const slots = builder.slots;
-        const lines = builder.lines;
-        const capacity = builder.capacity;
-        let row = builder.row;
-        let line = this.line;
-        let text = null;
-        // The counters are stored on every line, inside the loop: code after a loop that V8 optimised
-        // while it ran has no type feedback, and reaching it would throw the optimised code away.
-        while (p < end && row < capacity) {
-            // Line start: skip spaces and tabs; a line of nothing else is blank.
-            let b = buf[p];
-            while (b === SPACE || b === TAB)
-                b = buf[++p];
-            if (b === LF) {
-                p++;
-                line++;
-                this.line = line;
-                continue;
-            }
-            if (b === CR && buf[p + 1] === LF) {
-                p += 2;
-                line++;
-                this.line = line;
-                continue;
-            }
-            // Other white space could make the line blank for the general path: let it decide.
-            if (b > 127 || b === VT || b === FF || b === CR)
-                throw new FastPathDeclined(line);
-            let field = 0;
-            for (;;) {
-                const slot = slotOfField[field];
-                if (slot >= 0) {
-                    // A requested cell: [spaces] [sign] digits [. digits] [e [sign] digits] [spaces]
-                    while (b === SPACE || b === TAB)
-                        b = buf[++p];
-                    const start = p;
-                    let negative = false;
-                    if (b === MINUS) {
-                        negative = true;
-                        b = buf[++p];
-                    }
-                    else if (b === PLUS) {
-                        b = buf[++p];
-                    }
-                    let mantissa = 0;
-                    let digits = 0;
-                    let exponent = 0;
-                    let exact = true;
-                    while (b >= DIGIT_0 && b <= DIGIT_9) {
-                        if (mantissa < MANTISSA_ROOM)
-                            mantissa = mantissa * 10 + (b - DIGIT_0);
-                        else
-                            exact = false;
-                        digits++;
-                        b = buf[++p];
-                    }
-                    if (b === POINT) {
-                        b = buf[++p];
-                        while (b >= DIGIT_0 && b <= DIGIT_9) {
-                            if (mantissa < MANTISSA_ROOM) {
-                                mantissa = mantissa * 10 + (b - DIGIT_0);
-                                exponent--;
-                            }
-                            else
-                                exact = false;
-                            digits++;
-                            b = buf[++p];
-                        }
-                    }
-                    if (digits === 0)
-                        throw new FastPathDeclined(line);
-                    if (b === LOWER_E || b === UPPER_E) {
-                        b = buf[++p];
-                        // The sign multiplies: a unary minus would run only for negative exponents, and code
-                        // that runs rarely has no type feedback when V8 optimises the loop.
-                        let exponentSign = 1;
-                        if (b === MINUS) {
-                            exponentSign = -1;
-                            b = buf[++p];
-                        }
-                        else if (b === PLUS) {
-                            b = buf[++p];
-                        }
-                        if (!(b >= DIGIT_0 && b <= DIGIT_9))
-                            throw new FastPathDeclined(line);
-                        let e = 0;
-                        while (b >= DIGIT_0 && b <= DIGIT_9) {
-                            if (e < EXPONENT_CLAMP)
-                                e = e * 10 + (b - DIGIT_0);
-                            b = buf[++p];
-                        }
-                        exponent += exponentSign * e;
-                    }
-                    let value;
-                    if (exact && exponent >= -22 && exponent <= 22) {
-                        value = exponent < 0 ? mantissa / EXACT_POWERS_OF_TEN[-exponent] : mantissa * EXACT_POWERS_OF_TEN[exponent];
-                        if (negative)
-                            value = -value;
-                    }
-                    else {
-                        text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
-                        value = Number(text.toString('latin1', start, p));
-                        // Overflow, and underflow of a nonzero text (mantissa > 0) to 0 or a subnormal: the
-                        // general path says which (the exact branch above can do neither).
-                        if (!Number.isFinite(value) || (mantissa !== 0 && Math.abs(value) < csv_rules/* MIN_NORMAL */.Vt))
-                            throw new FastPathDeclined(line);
-                    }
-                    while (b === SPACE || b === TAB)
-                        b = buf[++p];
-                    slots[slot][row] = value;
-                }
-                else {
-                    // An unused cell: skip to the comma or the line end.
-                    while (b !== COMMA && b !== LF) {
-                        if (b === QUOTE || (b === CR && buf[p + 1] !== LF))
-                            throw new FastPathDeclined(line);
-                        if (b === CR)
-                            break;
-                        b = buf[++p];
-                    }
-                }
-                if (b === COMMA) {
-                    if (field === lastField)
-                        throw new FastPathDeclined(line);
-                    field++;
-                    b = buf[++p];
-                    continue;
-                }
-                if (b === CR && buf[p + 1] === LF)
-                    b = buf[++p];
-                if (b !== LF || field !== lastField)
-                    throw new FastPathDeclined(line);
-                p++;
-                break;
-            }
-            lines[row] = line;
-            line++;
-            row++;
-            builder.row = row;
-            this.line = line;
-        }
-        return p;
-    }
-    /**
-     * Reads lines up to and including the first non-blank one, the header; returns the offset
-     * after it (or `buf.length` when the block has no header yet).
-     */
-    readHeader(buf) {
-        let p = 0;
-        while (p < buf.length) {
-            const lf = buf.indexOf(LF, p);
-            let end = lf;
-            if (end > p && buf[end - 1] === CR)
-                end--;
-            for (let i = p; i < end; i++) {
-                if (buf[i] === QUOTE || buf[i] === CR)
-                    throw new FastPathDeclined(this.line);
-            }
-            const text = utf8.decode(buf.subarray(p, end));
-            const line = this.line++;
-            p = lf + 1;
-            if (text.trim() === '')
-                continue;
-            const header = text.split(',').map((name) => name.trim());
-            this.plan = (0,csv_rules/* planColumns */.j7)(this.target.file, header, line, this.target.request);
-            this.target.onHeader(this.plan);
-            if (this.target.headerOnly)
-                this.stopped = true;
-            return p;
-        }
-        return p;
-    }
-}
-
-;// CONCATENATED MODULE: ./src/data/table.ts
-/**
- * CSV data files to numeric columns.
- *
- * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
- * chosen by name and only those are converted. What is accepted, in words:
- *
- * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
- *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
- *   is the number 1.5.
- * - White space around a field is ignored (the characters `String.prototype.trim` removes),
- *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
- *   blank and skipped, before the header as well as between rows.
- * - The header is the first non-blank record; its names are trimmed and must be unique.
- * - A cell of a requested column must be a finite decimal number as JavaScript's `Number()`
- *   reads it: sign, digits, point, exponent (`-1`, `.5`, `1.`, `2.5E-3`). Empty cells, `NaN`,
- *   `Infinity`, `inf`, hexadecimal, values that overflow (`1e999`) and nonzero values that
- *   underflow (`1e-400`, `1e-310`: `Number()` gives 0 or a subnormal) are errors.
- * - The header must end within the first 1 MiB of the file and name at most 100,000 columns
- *   (checked before a longer line is held in memory). A header that looks like a Git LFS
- *   pointer, a semicolon- or tab-separated file, or CR-only line ends gets a hint in the error.
- * - Every row has as many fields as the header.
- * - The whole file must be UTF-8, not only the columns used.
- *
- * Two readers give the same numbers, line numbers and errors: a fast loop over the bytes for
- * plain numeric CSV (fast-path.ts), and csv-parse for everything else (general-path.ts). The
- * fast one hands the file to the general one when it meets something it does not handle.
- */
-
-
-
-/**
- * Streams a CSV file as numeric chunks (header checked first).
- *
- * Every chunk but the last holds exactly `chunkRows` rows; a file with a header and no data
- * rows yields no chunk. Errors are InputErrors: `file-too-large` (before reading),
- * `file-missing`, `csv-empty`, `csv-header`, `csv-missing-column`, `csv-ragged`, `csv-cell`,
- * `csv-syntax`, `csv-encoding`; each names the file and, where there is one, the line.
- *
- * @param repo where the file lives
- * @param path repository-relative path of the CSV file
- * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
- *   `general: true` to skip the fast path
- */
-async function* readTableChunks(repo, path, options) {
-    const settings = checkOptions(options);
-    await table_checkSize(repo, path, settings.maxBytes);
-    yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
-}
-/**
- * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
- * chunks kept): after the first chunk the row count is estimated from the file size and the
- * bytes read so far (plus 5 %), each chunk is copied in as it arrives and dropped, and the
- * arrays grow by 1.5x when the estimate was short. The result views the first `rows` entries
- * (capacity beyond that stays allocated: a few percent). Peak memory is about the data plus
- * one chunk, instead of twice the data.
- *
- * @param repo where the file lives
- * @param path repository-relative path of the CSV file
- * @param options as for {@link readTableChunks}
- * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
- */
-async function readTable(repo, path, options) {
-    const settings = checkOptions(options);
-    const size = await table_checkSize(repo, path, settings.maxBytes);
-    let header = [];
-    let bytesRead = 0;
-    const counted = async function* () {
-        for await (const piece of repo.stream(path)) {
-            bytesRead += piece.length;
-            yield piece;
-        }
-    };
-    // First position of each distinct requested name (a repeated name shares one array).
-    const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
-    let columns = [];
-    let lines = new Int32Array(0);
-    let rows = 0;
-    const grow = (capacity) => {
-        columns = settings.columns.map((_, k) => {
-            if (firstOf[k] !== k)
-                return columns[firstOf[k]];
-            const next = new Float64Array(capacity);
-            if (rows > 0)
-                next.set(columns[k].subarray(0, rows));
-            return next;
-        });
-        const nextLines = new Int32Array(capacity);
-        if (rows > 0)
-            nextLines.set(lines.subarray(0, rows));
-        lines = nextLines;
-    };
-    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
-        const needed = rows + chunk.rows;
-        if (needed > lines.length) {
-            let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
-            if (rows === 0 && bytesRead > 0) {
-                // First chunk: estimate the whole file's rows from its bytes per row.
-                const estimate = Math.ceil((size / bytesRead) * chunk.rows * 1.05);
-                capacity = Math.max(needed, Math.min(estimate, Math.ceil(size / 2) + 1));
-            }
-            grow(capacity);
-        }
-        settings.columns.forEach((_, k) => {
-            if (firstOf[k] === k)
-                columns[k].set(chunk.columns[k], rows);
-        });
-        lines.set(chunk.lines, rows);
-        rows = needed;
-    }
-    const out = new Map();
-    settings.columns.forEach((name, k) => {
-        if (!out.has(name))
-            out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
-    });
-    return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
-}
-/**
- * Reads only the header names (for messages and checks): trimmed, in file order, checked
- * for repeats (`csv-header`); `csv-empty` when the file has none.
- *
- * @param repo where the file lives
- * @param path repository-relative path of the CSV file
- * @param maxBytes size cap in bytes; default 512 MiB
- */
-async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES) {
-    const settings = checkOptions({ columns: [], maxBytes });
-    await table_checkSize(repo, path, settings.maxBytes);
-    let header = [];
-    // A header-only scan ends right after the header and yields no rows.
-    const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
-    while (!(await scanning.next()).done)
-        ;
-    return header;
-}
-/** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
-function checkOptions(options) {
-    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false } = options;
-    if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
-        throw new TypeError('readTable: `columns` must be an array of column names');
-    }
-    if (!Number.isInteger(chunkRows) || chunkRows < 1 || chunkRows > 2 ** 30) {
-        throw new RangeError(`readTable: \`chunkRows\` must be an integer from 1 to 2^30, got ${chunkRows}`);
-    }
-    if (!(maxBytes >= 0))
-        throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
-    return { columns, chunkRows, maxBytes, general };
-}
-/** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
-async function table_checkSize(repo, path, maxBytes) {
-    const size = await repo.size(path);
-    if (size > maxBytes) {
-        throw new core_errors/* InputError */.dz('file-too-large', `the file is ${megabytes(size)} (${size} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes); raise caps.max_file_mb in fitgate.yml`, { file: path });
-    }
-    return size;
-}
-function megabytes(bytes) {
-    return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
-}
-/**
- * Runs the fast path, and on the general path from the start when the fast one declines,
- * handing out only the rows the fast path has not handed out already.
- */
-async function* scan(open, path, settings, onHeader, headerOnly, recycle = false) {
-    let headerSeen = false;
-    const target = {
-        file: path,
-        request: (0,csv_rules/* planRequest */.NX)(settings.columns),
-        chunkRows: settings.chunkRows,
-        headerOnly,
-        recycle,
-        onHeader: (plan) => {
-            if (headerSeen)
-                return;
-            headerSeen = true;
-            onHeader(plan);
-        },
-    };
-    let handedOut = 0;
-    if (!settings.general) {
-        try {
-            for await (const chunk of fastChunks(open(), target)) {
-                handedOut += chunk.rows;
-                yield chunk;
-            }
-            return;
-        }
-        catch (error) {
-            if (!(error instanceof FastPathDeclined))
-                throw error;
-        }
-    }
-    // csv-parse is loaded only when a file needs it (most data files take the fast path).
-    const { generalChunks } = await __nccwpck_require__.e(/* import() */ 462).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
-    yield* generalChunks(open(), target, handedOut);
-}
-
+// EXTERNAL MODULE: ./src/data/table.ts + 1 modules
+var data_table = __nccwpck_require__(8785);
 ;// CONCATENATED MODULE: ./src/data/levels.ts
 /**
  * Category levels as numeric codes, so that the design can read a category input like any other
@@ -14813,7 +15306,7 @@ function levelCodes(values, levels, unseen, where) {
                 out[i] = -1;
                 continue;
             }
-            throw new core_errors/* InputError */.dz('unseen-level', `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${where.lines[i]} of ${where.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`, { file: where.file, line: where.lines[i], key: where.column });
+            throw new errors/* InputError */.dz('unseen-level', `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${where.lines[i]} of ${where.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`, { file: where.file, line: where.lines[i], key: where.column });
         }
         out[i] = k;
     }
@@ -14866,23 +15359,23 @@ const parse = function (data, opts = {}) {
 async function readTextColumns(repo, path, names, maxBytes) {
     const size = await repo.size(path);
     if (size > maxBytes)
-        throw new core_errors/* InputError */.dz('file-too-large', `${path} is ${size} bytes; the cap is ${maxBytes}`, { file: path });
+        throw new errors/* InputError */.dz('file-too-large', `${path} is ${size} bytes; the cap is ${maxBytes}`, { file: path });
     const text = new TextDecoder('utf-8').decode(await repo.read(path));
     let records;
     try {
         records = parse(text, { bom: true, trim: true, info: true, relax_column_count: true, skip_empty_lines: true });
     }
     catch (error) {
-        throw new core_errors/* InputError */.dz('csv-syntax', `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`, { file: path });
+        throw new errors/* InputError */.dz('csv-syntax', `${path} could not be read as CSV: ${error instanceof Error ? error.message.slice(0, 200) : String(error)}`, { file: path });
     }
     const kept = records.filter((r) => r.record.some((cell) => cell !== ''));
     if (kept.length === 0)
-        throw new core_errors/* InputError */.dz('csv-empty', `${path} has no header row`, { file: path });
+        throw new errors/* InputError */.dz('csv-empty', `${path} has no header row`, { file: path });
     const header = kept[0].record;
     const index = names.map((name) => {
         const k = header.indexOf(name);
         if (k < 0)
-            throw new core_errors/* InputError */.dz('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, {
+            throw new errors/* InputError */.dz('csv-missing-column', `${path} has no column \`${name}\`; its columns are ${header.slice(0, 20).join(', ')}`, {
                 file: path,
                 line: kept[0].info.lines,
                 key: name,
@@ -14915,11 +15408,11 @@ function categoryColumns(descriptor) {
 async function loadModelData(repo, descriptor, inputs, settings) {
     const { data } = descriptor;
     if (inputs.includes(data.target)) {
-        throw new core_errors/* InputError */.dz('target-as-input', `the target column \`${(0,core_errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
+        throw new errors/* InputError */.dz('target-as-input', `the target column \`${(0,errors/* clip */.$Q)(data.target)}\` is also used as an input by a term; a model may not read its own target`, { file: descriptor.file, line: data.lines.target, key: 'data.target' });
     }
     const weighting = data.weighting ?? null;
     if (weighting !== null && weighting.column === data.target) {
-        throw new core_errors/* InputError */.dz('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
+        throw new errors/* InputError */.dz('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
             file: descriptor.file,
             line: weighting.line,
             key: `data.${weighting.kind}`,
@@ -14934,13 +15427,13 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     const load = async (path, line, key) => {
         let table;
         try {
-            table = await readTable(repo, path, { columns, maxBytes });
+            table = await (0,data_table/* readTable */.xz)(repo, path, { columns, maxBytes });
         }
         catch (error) {
             throw withAsker(error, descriptor);
         }
         if (table.rows === 0) {
-            throw new core_errors/* InputError */.dz('no-rows', `\`${(0,core_errors/* clip */.$Q)(path)}\` has a header but no data rows; expected at least one row`, {
+            throw new errors/* InputError */.dz('no-rows', `\`${(0,errors/* clip */.$Q)(path)}\` has a header but no data rows; expected at least one row`, {
                 file: descriptor.file,
                 line,
                 key,
@@ -14949,7 +15442,7 @@ async function loadModelData(repo, descriptor, inputs, settings) {
         if (categories.size > 0) {
             const text = await readTextColumns(repo, path, [...categories.keys()], maxBytes);
             if (text.lines.length !== table.rows || text.lines.some((l, i) => l !== table.lines[i])) {
-                throw new core_errors/* InputError */.dz('csv-rows', `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: path });
+                throw new errors/* InputError */.dz('csv-rows', `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: path });
             }
             for (const [name, term] of categories) {
                 const values = text.columns.get(name);
@@ -14973,7 +15466,7 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
     const { byName, ...trainData } = train;
     if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
-        throw new core_errors/* InputError */.dz('bad-weight', `every training row of ${data.train} has weight 0; expected at least one positive weight`, {
+        throw new errors/* InputError */.dz('bad-weight', `every training row of ${data.train} has weight 0; expected at least one positive weight`, {
             file: descriptor.file,
             line: data.weighting?.line,
             key: `data.${data.weighting?.kind}`,
@@ -14994,7 +15487,7 @@ function rowWeights(weighting, values, lines, rows, file) {
         const v = values[i];
         const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
         if (!ok) {
-            throw new core_errors/* InputError */.dz('bad-weight', `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${lines[i]} of ${file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`, { file, line: lines[i], key: weighting.column });
+            throw new errors/* InputError */.dz('bad-weight', `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${lines[i]} of ${file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`, { file, line: lines[i], key: weighting.column });
         }
         weights[i] = sigma ? 1 / (v * v) : v;
     }
@@ -15005,18 +15498,18 @@ function rowWeights(weighting, values, lines, rows, file) {
  * that reads the column. Other errors pass unchanged.
  */
 function withAsker(error, descriptor) {
-    if (!(error instanceof core_errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
+    if (!(error instanceof errors/* InputError */.dz) || error.code !== 'csv-missing-column' || error.location.key === undefined)
         return error;
     const column = error.location.key;
     if (descriptor.data.weighting?.column === column) {
         const w = descriptor.data.weighting;
-        return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
+        return new errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
     }
     const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column));
     const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
     if (asker === null)
         return error;
-    return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,core_errors/* clip */.$Q)(descriptor.file)})`, error.location);
+    return new errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,errors/* clip */.$Q)(descriptor.file)})`, error.location);
 }
 
 ;// CONCATENATED MODULE: ./src/data/labels.ts
@@ -15047,7 +15540,7 @@ async function loadClassifierData(repo, descriptor, inputs, settings) {
         tables = await loadModelData(repo, descriptor, inputs, settings);
     }
     catch (error) {
-        if (error instanceof core_errors/* InputError */.dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
+        if (error instanceof errors/* InputError */.dz && error.code === 'csv-cell' && error.location.key === descriptor.data.target) {
             return loadTextLabels(repo, descriptor, inputs, settings);
         }
         throw error;
@@ -15075,7 +15568,7 @@ async function loadClassifierData(repo, descriptor, inputs, settings) {
 async function loadTextLabels(repo, descriptor, inputs, settings) {
     const { data } = descriptor;
     const read = async (path) => {
-        const table = await readTable(repo, path, { columns: [...inputs], maxBytes: settings.caps.maxFileBytes });
+        const table = await (0,data_table/* readTable */.xz)(repo, path, { columns: [...inputs], maxBytes: settings.caps.maxFileBytes });
         const codes = await readLabelCodes(repo, path, data.target, descriptor);
         if (codes.rows !== table.rows)
             throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${path}`);
@@ -15112,17 +15605,17 @@ function chooseClasses(descriptor, found, kind) {
     const where = { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' };
     const list = found
         .slice(0, 6)
-        .map((l) => (0,core_errors/* quoteValue */.cl)(l, 30))
+        .map((l) => (0,errors/* quoteValue */.cl)(l, 30))
         .join(', ') + (found.length > 6 ? ', …' : '');
     if (found.length !== 2) {
         const count = found.length >= MAX_LABELS ? `at least ${MAX_LABELS}` : String(found.length);
-        throw new core_errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
+        throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${descriptor.data.target}\`; the training rows hold ${count} (${list})`, where);
     }
     const positive = descriptor.data.positive ?? null;
     if (positive !== null) {
         const at = found.indexOf(positive);
         if (at < 0) {
-            throw new core_errors/* InputError */.dz('positive-label', `\`data.positive\` is ${(0,core_errors/* quoteValue */.cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
+            throw new errors/* InputError */.dz('positive-label', `\`data.positive\` is ${(0,errors/* quoteValue */.cl)(positive, 30)} but the training rows' classes are ${list}; expected one of them`, {
                 ...where,
                 key: 'data.positive',
             });
@@ -15136,10 +15629,10 @@ function chooseClasses(descriptor, found, kind) {
         const at = lower.indexOf('true');
         return { positive: found[at], negative: found[1 - at], kind };
     }
-    throw new core_errors/* InputError */.dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
+    throw new errors/* InputError */.dz('positive-label', `the target \`${descriptor.data.target}\` holds the classes ${list}; set \`data.positive\` to the one that is the positive class (0/1 and true/false need no setting)`, where);
 }
 function unknownLabel(descriptor, file, line, label, labels) {
-    return new core_errors/* InputError */.dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,core_errors/* quoteValue */.cl)(label, 30)} on line ${line} of ${file}; the training rows' classes are ${(0,core_errors/* quoteValue */.cl)(labels.positive, 30)} and ${(0,core_errors/* quoteValue */.cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
+    return new errors/* InputError */.dz('target-classes', `the target \`${descriptor.data.target}\` is ${(0,errors/* quoteValue */.cl)(label, 30)} on line ${line} of ${file}; the training rows' classes are ${(0,errors/* quoteValue */.cl)(labels.positive, 30)} and ${(0,errors/* quoteValue */.cl)(labels.negative, 30)}`, { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' });
 }
 /** Distinct values of y[0..n), in order of first appearance (at most {@link MAX_LABELS}). */
 function distinctNumbers(y, n) {
@@ -15207,7 +15700,7 @@ async function readLabelCodes(repo, path, column, descriptor) {
     await done;
     consume();
     if (tooMany) {
-        throw new core_errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
+        throw new errors/* InputError */.dz('target-classes', `a binary classifier needs exactly two classes in the target \`${column}\`; ${path} holds more than ${MAX_LABELS}`, {
             file: descriptor.file,
             line: descriptor.data.lines.target,
             key: 'data.target',
@@ -16238,20 +16731,20 @@ async function planModel(repo, descriptor, settings, load = loadModelData) {
     const design = (0,design_matrix/* createDesign */.x)(terms, descriptor.fit.intercept);
     const p = design.p;
     if (p > MAX_PARAMETERS) {
-        throw new core_errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
+        throw new errors/* InputError */.dz('too-many-parameters', `the terms build ${p} design columns; at most ${MAX_PARAMETERS} are supported (the diagnostics decompose p x p factors, at a cost that grows with p^3); use fewer radial centres or a lower degree`, { file, line: descriptor.termsLine, key: 'terms' });
     }
     if (train.rows * p > settings.caps.maxCells) {
-        throw new core_errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
+        throw new errors/* InputError */.dz('too-large', `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`, { file, line: descriptor.termsLine, key: 'terms' });
     }
     for (const data of [train, tables.holdout]) {
         const i = (0,kernels/* firstBeyond */.gy)(data.y, data.rows, MAX_MAGNITUDE);
         if (i >= 0) {
-            throw new core_errors/* InputError */.dz('target-range', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${(0,core_errors/* clip */.$Q)(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+            throw new errors/* InputError */.dz('target-range', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${(0,errors/* clip */.$Q)(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`, { file, line: descriptor.data.lines.target, key: 'data.target' });
         }
     }
     const targetStats = (0,stats/* meanAndSd */.ud)(train.y, train.rows);
     if (!(targetStats.sd > 0)) {
-        throw new core_errors/* InputError */.dz('constant-target', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
+        throw new errors/* InputError */.dz('constant-target', `the target \`${(0,errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
     const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
@@ -16387,7 +16880,7 @@ function shippedClassifier(descriptor, design, train, holdout, fit, trainEta, ho
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+        throw new errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
     let maxP = 0;
     const losses = [];
@@ -16654,10 +17147,11 @@ function checkRange(plan, X, start, m) {
     while (term + 1 < design.termOffsets.length && design.termOffsets[term + 1] <= j)
         term += 1;
     const line = design.terms[term]?.spec.line ?? descriptor.termsLine;
-    throw new core_errors/* InputError */.dz('design-overflow', `design column \`${(0,core_errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,core_errors/* clip */.$Q)(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
+    throw new errors/* InputError */.dz('design-overflow', `design column \`${(0,errors/* clip */.$Q)(design.columnNames[j])}\` is ${X[at]} at training row on line ${train.lines[start + i]} of ${(0,errors/* clip */.$Q)(train.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): use inputs of a smaller size, a lower degree, or a shift and scale near the data`, { file: descriptor.file, line, key: 'terms' });
 }
 
 ;// CONCATENATED MODULE: ./src/run/fit-model.ts
+
 
 
 
@@ -16676,6 +17170,8 @@ async function fitModel(repo, descriptor, settings) {
     const first = foldPass(plan);
     const fit = refinePass(plan, first.fit);
     const scored = scoringPass(plan, fit, first.foldFactors);
+    if (descriptor.fit.refit === false)
+        return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
     const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
     return {
         descriptor,
@@ -16689,6 +17185,35 @@ async function fitModel(repo, descriptor, settings) {
         crossValidation: scored.crossValidation,
         foldFactors: first.foldFactors,
         shipped: shippedScore(descriptor, design, tables, fit),
+    };
+}
+/**
+ * A model scored as shipped (`fit.refit: false`): the shipped coefficients take the refit's place
+ * in every figure (predictions, errors, coefficient sizes, swing, the report's `coefficients`);
+ * the internal refit keeps only what describes the design (rank, conditioning, effective degrees
+ * of freedom). No cross-validation; no shipped-against-refit comparison.
+ */
+function scoredAsShipped(descriptor, design, tables, refit, targetSd, columnSd, folds, factors) {
+    const shipped = checkedShipped(descriptor, design);
+    const coefficients = Float64Array.from(shipped ?? []);
+    const trainPredictions = (0,blocks/* predictRows */.tp)(design, tables.train, coefficients);
+    const holdoutPredictions = (0,blocks/* predictRows */.tp)(design, tables.holdout, coefficients);
+    let rss = 0;
+    for (let i = 0; i < tables.train.rows; i++)
+        rss += (tables.train.y[i] - trainPredictions[i]) ** 2;
+    const fit = { ...refit, coefficients, rss };
+    return {
+        descriptor,
+        design,
+        fit,
+        tables,
+        metrics: coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, holdoutPredictions),
+        trainPredictions,
+        holdoutPredictions,
+        folds,
+        crossValidation: null,
+        foldFactors: factors,
+        shipped: null,
     };
 }
 /**
@@ -16744,13 +17269,23 @@ function coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, 
  * @throws InputError `coefficients-length` when their count is not the design's
  */
 function shippedScore(descriptor, design, tables, fit) {
+    const shipped = checkedShipped(descriptor, design);
+    if (shipped === null)
+        return null;
+    return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+}
+/**
+ * The shipped coefficients, or null when the descriptor ships none.
+ * @throws InputError `coefficients-length` when their count is not the design's
+ */
+function checkedShipped(descriptor, design) {
     const shipped = descriptor.coefficients;
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => (0,core_errors/* clip */.$Q)(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+        throw new errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => (0,errors/* clip */.$Q)(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
-    return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+    return shipped;
 }
 
 ;// CONCATENATED MODULE: ./src/run/evaluate.ts
@@ -16811,12 +17346,12 @@ async function evaluateModel(repo, descriptor, settings, base) {
         model = await fitModel(repo, descriptor, settings);
     }
     catch (error) {
-        if (error instanceof core_errors/* InputError */.dz)
+        if (error instanceof errors/* InputError */.dz)
             return errorResult(descriptor.name, descriptor.file, error);
         // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
         // that every other model still gets its outcome; the code marks it as a bug to report.
         const detail = error instanceof Error ? error.message : String(error);
-        return errorResult(descriptor.name, descriptor.file, new core_errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
+        return errorResult(descriptor.name, descriptor.file, new errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
     }
     // The run's own passes already produced the folds, their factors and the cross-validation.
     const analyses = new ModelAnalyses({ design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit }, { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation });
@@ -16966,6 +17501,15 @@ var version = __nccwpck_require__(3323);
 
 
 /**
+ * The run's note on its settings: the file used, or that there was none and the built-in
+ * defaults applied (limits as in docs/checks.md, descriptors matched by the default pattern).
+ */
+function settingsNote(file, configPath) {
+    if (file.file !== null)
+        return `settings: ${file.file}`;
+    return `settings: no file at ${configPath}; built-in defaults (descriptors ${file.models.join(', ')}, default limits)`;
+}
+/**
  * Checks every model of a run.
  * Problems with the settings file or the list of descriptors throw an InputError (nothing can be
  * checked). A descriptor or data file that is bad makes that model's verdict `error`; every
@@ -16976,7 +17520,7 @@ var version = __nccwpck_require__(3323);
  * @param options baseline of a base commit and run notes; default none
  */
 async function runPipeline(settings, repo, options = {}) {
-    const file = await loadSettings(repo, settings.config, { explicit: settings.configExplicit });
+    const file = await (0,settings_file/* loadSettings */.M5)(repo, settings.config, { explicit: settings.configExplicit });
     const shard = options.shard ?? null;
     const discovery = await discoverDescriptors(repo, file, settings.descriptors);
     const paths = (0,run_shard/* selectShard */.Xm)(discovery.paths, shard);
@@ -16987,7 +17531,7 @@ async function runPipeline(settings, repo, options = {}) {
             loaded.push(await loadDescriptor(repo, path, file));
         }
         catch (error) {
-            if (!(error instanceof core_errors/* InputError */.dz))
+            if (!(error instanceof errors/* InputError */.dz))
                 throw error;
             models.push(errorResult(path, path, error));
         }
@@ -16995,7 +17539,7 @@ async function runPipeline(settings, repo, options = {}) {
     checkUniqueNames(loaded);
     const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
     models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
-    const notes = [...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+    const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
     if (shard)
         notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
     // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).

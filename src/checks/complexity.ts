@@ -3,6 +3,7 @@
  * model's main complexity setting.
  */
 import { classifierComplexity } from './classifier/measures.js';
+import { skipWhenScoreOnly } from './score-only.js';
 import type { Check, Measurement } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { sweepComplexity } from '../diagnostics/complexity.js';
@@ -52,6 +53,8 @@ const check: Check = {
   line: (d) => d.fit.line,
   measureClassifier: classifierComplexity,
   measure(context): Measurement {
+    const scoreOnly = skipWhenScoreOnly(context.descriptor);
+    if (scoreOnly) return scoreOnly;
     const { descriptor, design, train, fit } = context;
     const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {

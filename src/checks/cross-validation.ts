@@ -2,6 +2,7 @@
  * `cross-validation`: k-fold cross-validation RMSE / training RMSE, with leave-one-out (PRESS),
  * GCV and the effective degrees of freedom in the model's metrics.
  */
+import { skipWhenScoreOnly } from './score-only.js';
 import type { Check } from './types.js';
 import { classifierCrossValidation } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
@@ -43,6 +44,8 @@ const check: Check = {
   line: (d) => d.fit.line,
   measureClassifier: classifierCrossValidation,
   measure(context) {
+    const scoreOnly = skipWhenScoreOnly(context.descriptor);
+    if (scoreOnly) return scoreOnly;
     const folds = context.analyses.folds();
     const cv = context.analyses.crossValidation();
     const { metrics, train, design } = context;

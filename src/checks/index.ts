@@ -145,7 +145,7 @@ function judgeCheck(check: Check, descriptor: Descriptor, measure: () => Measure
     ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
     line: line ?? measured.line ?? check.line(context.descriptor),
     message: `${measured.message}${comparison}`,
-    advice: status === 'fail' || status === 'warn' ? check.advice : '',
+    advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
     ...(measured.detail ? { detail: measured.detail } : {}),
     ...(measured.suggestion ? { suggestion: measured.suggestion } : {}),
   };

@@ -2,6 +2,7 @@
  * `reproducibility`: how far the descriptor's shipped coefficients are from the refit.
  */
 import { clip } from '../core/errors.js';
+import { skipWhenScoreOnly } from './score-only.js';
 import type { Check } from './types.js';
 import { classifierReproducibility } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
@@ -26,7 +27,9 @@ const check: Check = {
   advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
   measureClassifier: classifierReproducibility,
-  measure({ shipped, predictions, holdout, metrics }) {
+  measure({ shipped, predictions, holdout, metrics, descriptor }) {
+    const scoreOnly = skipWhenScoreOnly(descriptor);
+    if (scoreOnly) return scoreOnly;
     if (shipped === null) return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
     const ps = shipped.holdoutPredictions;
     const pr = predictions.holdout;

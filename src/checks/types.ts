@@ -71,6 +71,8 @@ export interface Measurement {
    * when given, is the one value to write instead (the action's review suggestion rewrites it).
    */
   suggestion?: { text: string; line: number; change?: { key: string; value: number } };
+  /** Advice for this outcome when it warns or fails, instead of the check's own `advice`. */
+  advice?: string;
 }
 
 /** A check module's default export. */

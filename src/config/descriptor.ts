@@ -76,6 +76,9 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   const termsLine = line(['terms']);
   const fitLine = raw.fit ? line(['fit']) : termsLine;
   const limits = readLimits(doc, file, raw.limits, ['limits']);
+  if (raw.fit?.refit === false && !raw.coefficients) {
+    throw errorAt(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
+  }
 
   return {
     file,
@@ -92,6 +95,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
     terms,
     fit: {
       intercept: raw.fit?.intercept ?? true,
+      refit: raw.fit?.refit ?? true,
       ridge: raw.fit?.ridge ?? 0,
       folds: raw.fit?.folds ?? settings.fit.folds,
       foldOrder: raw.fit?.fold_order ?? settings.fit.foldOrder,
@@ -238,7 +242,7 @@ interface RawDescriptor {
   task?: 'regression' | 'classification';
   data: { train: string; holdout: string; target: string; positive?: string; weight?: string; sigma?: string };
   terms: RawTerm[];
-  fit?: { intercept?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount; threshold?: number };
+  fit?: { intercept?: boolean; refit?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount; threshold?: number };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }

@@ -6,6 +6,7 @@
 
 import type { ErrorObject } from 'ajv/dist/2020.js';
 import { InputError, quoteValue, clip } from '../core/errors.js';
+import { nearestWord } from '../core/nearest.js';
 import type { Position } from './types.js';
 import type { YamlDocument } from './yaml-source.js';
 
@@ -243,11 +244,17 @@ function toIssue(e: ErrorObject, root: unknown): Issue[] {
       return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
     case 'required': {
       const missing = String(params.missingProperty);
-      return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${clip(missing)}\`; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+      // A key present but not allowed that is a near miss of the missing one is the likely typo.
+      const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
+      const typo = present.find((k) => nearestWord(k, [missing]) === missing);
+      const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${quoteValue(typo, 40)}?)` : '';
+      return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${clip(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
     }
     case 'additionalProperties': {
       const extra = String(params.additionalProperty);
-      return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${clip(extra)}\`; expected one of: ${keys.join(', ')}` }];
+      const near = nearestWord(extra, keys);
+      const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
+      return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${clip(extra)}\`${hint}; expected one of: ${keys.join(', ')}` }];
     }
     case 'propertyNames': {
       const name = String(params.propertyName);

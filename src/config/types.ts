@@ -185,6 +185,8 @@ export type ParameterCount = 'columns' | 'effective';
 export interface FitSpec {
   /** Add a column of ones first. Default true. */
   intercept: boolean;
+  /** Refit from the training rows (true; also when absent), or score the shipped coefficients only (false). */
+  refit?: boolean;
   /** L2 penalty on every coefficient but the intercept. Default 0 (least squares). */
   ridge: number;
   /** k of k-fold cross-validation. Default 5. */

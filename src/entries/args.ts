@@ -30,6 +30,8 @@ export interface CheckCommand {
   color: boolean | null;
   /** Print stack traces of unexpected errors. */
   debug: boolean;
+  /** Text report: list every check of every model, passing ones included (`--verbose`). */
+  verbose: boolean;
   /** Compare with the models as they are on this git revision (`--base`), or null. */
   base: string | null;
   /** Check only this share of the models (`--shard K/N`), or null for all. */
@@ -59,6 +61,8 @@ export interface MergeCommand {
   failOn: 'fail' | 'warn';
   /** Print stack traces of unexpected errors. */
   debug: boolean;
+  /** Text report: list every check of every model (`--verbose`). */
+  verbose: boolean;
   /** File reports of the joined result, as for check (paths as given), or null. */
   html: string | null;
   sarif: string | null;
@@ -77,6 +81,62 @@ function parseExpect(value: string | null): number | null {
   return n;
 }
 
+/** A parsed `fitgate explain [check-id...]`: explain checks (none: list them). */
+export interface ExplainCommand {
+  kind: 'explain';
+  /** Check ids or limit keys, as given. */
+  ids: string[];
+}
+
+/** A parsed `fitgate init TRAIN.csv`: write a settings file and a first descriptor. */
+export interface InitCommand {
+  kind: 'init';
+  /** Absolute repository root; every file read and written is inside it. */
+  root: string;
+  /** The training CSV, repository-relative with `/`. */
+  train: string;
+  /** The hold-out CSV, repository-relative; null: split one off the training file. */
+  holdout: string | null;
+  /** Target column; null: the last column of the file. */
+  target: string | null;
+  /** `regression` (default) or `classification`. */
+  task: 'regression' | 'classification';
+  /** Model name; null: from the file name. */
+  name: string | null;
+  /** How a hold-out is split off one file: `random` (seeded, default) or `last` (the last rows, for data in time order). */
+  split: 'random' | 'last';
+  /** Share of the rows held out when splitting, in (0, 1). Default 0.25. */
+  holdoutShare: number;
+  /** Seed of the random split. Default 1. */
+  seed: number;
+  /** Degree of the first model's polynomial terms: 1 (linear terms, default) or 2 (standardised inputs). */
+  degree: 1 | 2;
+  /** Overwrite files that exist (`--force`). */
+  force: boolean;
+  debug: boolean;
+}
+
+/** A parsed `fitgate refit [descriptor...]`: write refitted coefficients into descriptors. */
+export interface RefitCommand {
+  kind: 'refit';
+  settings: Settings;
+  /** Only report stale coefficients (exit 1 when any are), write nothing (`--check`). */
+  check: boolean;
+  debug: boolean;
+}
+
+/** Reads a number option within bounds (`min < x < max` when `open`, else `min <= x <= max`). */
+function parseNumberOption(value: string | null, name: string, fallback: number, min: number, max: number, open: boolean, whole = false): number {
+  if (value === null) return fallback;
+  const n = Number(value);
+  const inRange = open ? n > min && n < max : n >= min && n <= max;
+  if (value.trim() === '' || !Number.isFinite(n) || !inRange || (whole && !Number.isSafeInteger(n))) {
+    const range = open ? `between ${min} and ${max} (exclusive)` : `from ${min} to ${max}`;
+    throw new InputError('option-value', `expected ${whole ? 'a whole number' : 'a number'} ${range}, got ${JSON.stringify(value.slice(0, 40))}`, { key: `--${name}` });
+  }
+  return n;
+}
+
 /** Reads `--jobs`: a whole number >= 1. */
 function parseJobs(value: string | undefined): number | null {
   if (value === undefined) return null;
@@ -88,7 +148,7 @@ function parseJobs(value: string | undefined): number | null {
 }
 
 /** What the command line asked for: a command to run, or text to print (help, version). */
-export type Parsed = CheckCommand | MergeCommand | { kind: 'print'; text: string; status: 0 | 2 };
+export type Parsed = CheckCommand | MergeCommand | ExplainCommand | InitCommand | RefitCommand | { kind: 'print'; text: string; status: 0 | 2 };
 
 /** One option of a command: a switch, or an option taking a value (`value` names it in the help). */
 interface OptionSpec {
@@ -104,7 +164,7 @@ interface OptionSpec {
 
 /** A command: its positional argument and its options. */
 interface CommandSpec {
-  name: 'check' | 'merge';
+  name: 'check' | 'merge' | 'init' | 'refit' | 'explain';
   summary: string;
   argument: { name: string; description: string; required: boolean };
   options: readonly OptionSpec[];
@@ -115,6 +175,7 @@ const OUT: OptionSpec = { name: 'out', value: 'file', description: 'write the re
 const FAIL_ON: OptionSpec = { name: 'fail-on', value: 'level', description: 'what fails the run', choices: ['fail', 'warn'], default: 'fail' };
 const COLOR: OptionSpec = { name: 'color', description: 'force colours in the text report' };
 const NO_COLOR: OptionSpec = { name: 'no-color', description: 'never use colours' };
+const VERBOSE: OptionSpec = { name: 'verbose', description: 'text report: list every check of every model with its figure, passing ones included' };
 const DEBUG: OptionSpec = { name: 'debug', description: 'print stack traces of unexpected errors' };
 const HELP: OptionSpec = { name: 'help', description: 'print this help' };
 
@@ -138,6 +199,7 @@ const COMMANDS: readonly CommandSpec[] = [
       { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
       { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },
       { name: 'junit', value: 'file', description: 'also write a JUnit XML report to this file' },
+      VERBOSE,
       DEBUG,
       HELP,
     ],
@@ -156,9 +218,49 @@ const COMMANDS: readonly CommandSpec[] = [
       { name: 'junit', value: 'file', description: 'also write a JUnit XML report of the joined result to this file' },
       COLOR,
       NO_COLOR,
+      VERBOSE,
       DEBUG,
       HELP,
     ],
+  },
+  {
+    name: 'init',
+    summary:
+      'Start checking a model: write a settings file (when there is none) and a first descriptor for a training CSV, with every limit and its default as comments. Splits a reproducible hold-out off the file when no hold-out is given. Never overwrites a file without --force.',
+    argument: { name: 'train', description: 'the training CSV (inside the repository root)', required: true },
+    options: [
+      { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read or written', default: '.' },
+      { name: 'holdout', value: 'file', description: 'the hold-out CSV (default: split one off the training file)' },
+      { name: 'target', value: 'column', description: 'the column to predict (default: the last column)' },
+      { name: 'task', value: 'task', description: 'what the model predicts', choices: ['regression', 'classification'], default: 'regression' },
+      { name: 'name', value: 'name', description: "the model's name (default: from the file name)" },
+      { name: 'split', value: 'how', description: 'how to split a hold-out off one file: random rows (seeded) or the last rows (data in time order)', choices: ['random', 'last'], default: 'random' },
+      { name: 'holdout-share', value: 'share', description: 'share of the rows to hold out when splitting', default: '0.25' },
+      { name: 'seed', value: 'n', description: 'seed of the random split', default: '1' },
+      { name: 'degree', value: 'd', description: 'terms of the first model: 1 linear terms, 2 polynomials of degree 2 on standardised inputs', choices: ['1', '2'], default: '1' },
+      { name: 'force', description: 'overwrite files that exist' },
+      DEBUG,
+      HELP,
+    ],
+  },
+  {
+    name: 'refit',
+    summary:
+      "Refit models and write the coefficients into each descriptor's `coefficients`, leaving the rest of the file as it is. With --check, write nothing and exit 1 when any shipped coefficients are stale.",
+    argument: { name: 'descriptor', description: 'model descriptors (default: every model the settings file matches)', required: false },
+    options: [
+      { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read or written', default: '.' },
+      { name: 'config', value: 'file', description: 'settings file, relative to the root', default: 'fitgate.yml' },
+      { name: 'check', description: 'write nothing; exit 1 when a descriptor ships coefficients that differ from the refit (or none)' },
+      DEBUG,
+      HELP,
+    ],
+  },
+  {
+    name: 'explain',
+    summary: "Explain a check: its figure, formula and source, and what to change. With no id, list the checks.",
+    argument: { name: 'check', description: 'check ids or limit keys (default: list every check)', required: false },
+    options: [HELP],
   },
 ];
 
@@ -192,7 +294,9 @@ function usageError(message: string, command: CommandSpec | null): Parsed {
  */
 export function parseArgs(argv: string[], cwd: string): Parsed {
   const [first, ...rest] = argv;
-  if (first === undefined || first === '-h' || first === '--help') return { kind: 'print', text: mainHelp(), status: 0 };
+  // No command at all is a usage mistake (a script calling `fitgate` alone did nothing): the help, status 2.
+  if (first === undefined) return { kind: 'print', text: mainHelp(), status: 2 };
+  if (first === '-h' || first === '--help') return { kind: 'print', text: mainHelp(), status: 0 };
   if (first === '-V' || first === '--version') return { kind: 'print', text: `${VERSION}\n`, status: 0 };
   if (first === 'help') {
     const topic = rest[0];
@@ -212,11 +316,34 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
     out: value('out'),
     color: read.color,
     debug: read.switches.has('debug'),
+    verbose: read.switches.has('verbose'),
     html: value('html'),
     sarif: value('sarif'),
     junit: value('junit'),
   };
-  const failOn = value('fail-on') === 'warn' ? 'warn' : 'fail';
+  const failOn: 'fail' | 'warn' = value('fail-on') === 'warn' ? 'warn' : 'fail';
+  if (command.name === 'explain') return { kind: 'explain', ids: read.positionals };
+  if (command.name === 'init') {
+    if (read.positionals.length > 1) return usageError(`expected one training CSV, got ${read.positionals.length} arguments`, command);
+    const initRoot = realFolder(path.resolve(cwd, value('root') ?? '.'), { key: '--root', within: cwd, withinName: 'working directory' });
+    const [train] = read.positionals;
+    const holdout = value('holdout');
+    return {
+      kind: 'init',
+      root: initRoot,
+      train: toRepoPath([initRoot], path.resolve(cwd, train), train, train),
+      holdout: holdout === null ? null : toRepoPath([initRoot], path.resolve(cwd, holdout), holdout, '--holdout'),
+      target: value('target'),
+      task: value('task') === 'classification' ? 'classification' : 'regression',
+      name: value('name'),
+      split: value('split') === 'last' ? 'last' : 'random',
+      holdoutShare: parseNumberOption(value('holdout-share'), 'holdout-share', 0.25, 0, 1, true),
+      seed: parseNumberOption(value('seed'), 'seed', 1, 0, 2 ** 31 - 1, false, true),
+      degree: value('degree') === '2' ? 2 : 1,
+      force: read.switches.has('force'),
+      debug: common.debug,
+    };
+  }
   if (command.name === 'merge') {
     return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common, expect: parseExpect(value('expect')) };
   }
@@ -227,16 +354,19 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
   const config = value('config');
   const base = value('base');
   const shard = value('shard');
+
+  const settings = {
+    root,
+    config: toRepoPath([named], path.resolve(named, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
+    configExplicit: config !== null,
+    // Descriptor arguments may be written through the root as named or as it really is.
+    descriptors: read.positionals.map((d) => toRepoPath([named, root], path.resolve(cwd, d), d, d)),
+    failOn,
+  };
+  if (command.name === 'refit') return { kind: 'refit', settings, check: read.switches.has('check'), debug: common.debug };
   return {
     kind: 'check',
-    settings: {
-      root,
-      config: toRepoPath([named], path.resolve(named, config ?? 'fitgate.yml'), config ?? 'fitgate.yml', '--config'),
-      configExplicit: config !== null,
-      // Descriptor arguments may be written through the root as named or as it really is.
-      descriptors: read.positionals.map((d) => toRepoPath([named, root], path.resolve(cwd, d), d, d)),
-      failOn,
-    },
+    settings,
     ...common,
     base: base !== null && base !== '' ? base : null,
     shard: shard !== null ? parseShard(shard, '--shard') : null,

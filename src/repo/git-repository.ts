@@ -6,6 +6,7 @@
  * root is refused like a `..` path.
  */
 import { execFile, spawn } from 'node:child_process';
+import { realpathSync } from 'node:fs';
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
 import { compilePatterns } from './glob-pattern.js';
@@ -35,13 +36,46 @@ interface TreeEntry {
 /** Largest number of links followed for one path (as Linux's MAXSYMLINKS). */
 const MAX_LINKS = 40;
 
+/** Most folders named by {@link safeDirectoryArgs} (a path deeper than this is cut at the top). */
+const MAX_SAFE_DEPTH = 128;
+
 /**
- * Runs git with arguments (never through a shell) and returns standard output as bytes.
+ * `-c safe.directory=<folder>` for `cwd` and each folder above it (as given and as real paths),
+ * put before every git command fitgate runs. In a job that runs inside a container the workspace
+ * belongs to another user id than the job's, and git refuses such a repository ("detected
+ * dubious ownership", git 2.35.2 and later); the setting on the command line, which git reads as
+ * protected configuration, lets only fitgate's own git calls read that one repository, and never
+ * changes the user's git configuration. The repository's top folder is among the folders named,
+ * whichever it is.
+ */
+export function safeDirectoryArgs(cwd: string): string[] {
+  const folders = new Set<string>();
+  const starts = [path.resolve(cwd)];
+  try {
+    starts.push(realpathSync(cwd));
+  } catch {
+    // A folder that cannot be resolved is named as given only.
+  }
+  for (const start of starts) {
+    let folder = start;
+    for (let depth = 0; depth < MAX_SAFE_DEPTH; depth++) {
+      folders.add(folder);
+      const parent = path.dirname(folder);
+      if (parent === folder) break;
+      folder = parent;
+    }
+  }
+  return [...folders].flatMap((f) => ['-c', `safe.directory=${f}`]);
+}
+
+/**
+ * Runs git with arguments (never through a shell) and returns standard output as bytes. Every
+ * call names the work tree as a safe directory for that call only ({@link safeDirectoryArgs}).
  * @throws Error with git's standard error when git exits non-zero
  */
 export function runGit(cwd: string, args: string[], maxBuffer = 64 * 1024 * 1024): Promise<Buffer> {
   return new Promise((resolve, reject) => {
-    execFile('git', args, { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
+    execFile('git', [...safeDirectoryArgs(cwd), ...args], { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
       if (error) {
         const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
         reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
@@ -211,7 +245,7 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
     },
     async *stream(p, chunkBytes = 1024 * 1024) {
       const entry = await fileEntry(p);
-      const child = spawn('git', ['cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
+      const child = spawn('git', [...safeDirectoryArgs(cwd), 'cat-file', 'blob', entry.oid], { cwd, stdio: ['ignore', 'pipe', 'ignore'] });
       const closed = new Promise<number | null>((resolve, reject) => {
         child.on('error', reject);
         child.on('close', resolve);

@@ -1,7 +1,7 @@
 /**
  * The SARIF 2.1.0 report (OASIS Static Analysis Results Interchange Format, Version 2.1.0,
  * OASIS Standard, 2020), the format code scanning reads. One rule per check of the registry
- * (id, title, description, advice); one result per check that fails (`error`) or warns
+ * (id, title, description, advice, `helpUri` to the check's docs page); one result per check that fails (`error`) or warns
  * (`warning`), and a `note` for a check that could not be computed, each at the descriptor line
  * the check points at. Models that could not be checked are tool execution notifications at
  * the file and line of the problem. Passing and switched-off checks are not results.
@@ -9,6 +9,7 @@
 import { createHash } from 'node:crypto';
 import { CHECKS } from '../checks/index.js';
 import { formatNumber } from '../core/format.js';
+import { checkDocsUrl } from '../core/links.js';
 import { fromJsonNumber, type CheckResult, type Result } from '../result/result.js';
 
 /** Options of the SARIF report. */
@@ -71,6 +72,7 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
     shortDescription: { text: c.title },
     fullDescription: { text: c.description },
     help: { text: c.advice },
+    helpUri: checkDocsUrl(c.id),
     defaultConfiguration: { level: 'error' },
     properties: { limitKey: c.limitKey },
   }));

@@ -12,6 +12,8 @@ import { neutraliseLog } from './runner-commands.js';
 export interface TextOptions {
   /** Use ANSI colours (only on a terminal). Default false. */
   color?: boolean;
+  /** List every check of every model with its figure, passing and skipped ones included. Default false. */
+  verbose?: boolean;
 }
 
 const COLOURS = { pass: '32', warn: '33', fail: '31', error: '35', skipped: '2' } as const;
@@ -39,16 +41,51 @@ function metric(m: ModelResult, key: string): string {
 }
 
 function checkLine(model: ModelResult, c: CheckResult, color: boolean): string {
-  const status = paint(c.status.toUpperCase().padEnd(4), c.status, color);
+  const status = paint(c.status.toUpperCase().padEnd(c.status === 'skipped' ? 7 : 4), c.status, color);
   const text = `  ${status} ${c.id} (${escapeTerminal(model.descriptor)}:${c.line}): ${escapeTerminal(c.message)}`;
   return c.advice ? `${text}\n       ${escapeTerminal(c.advice)}` : text;
 }
 
-/** Formats the Result for a terminal. */
+/**
+ * Where a model's error is, for the line under its header: `file:line:column: ` (the form
+ * editors and terminals link), the parts that are known.
+ */
+function errorWhere(m: ModelResult): string {
+  const e = m.error;
+  if (!e?.file) return '';
+  return `${e.file}${e.line ? `:${e.line}${e.column ? `:${e.column}` : ''}` : ''}: `;
+}
+
+/**
+ * A model's header: status, name and descriptor path; a model that could not be loaded is named
+ * by its path, which then stands once.
+ */
+function modelHeader(m: ModelResult, color: boolean): string {
+  const where = m.name === m.descriptor ? '' : ` (${escapeTerminal(m.descriptor)})`;
+  return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)}${where}`;
+}
+
+/** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
+function baseCell(m: ModelResult): string {
+  if (m.base === undefined) return '–';
+  if (m.base.status === 'new') return 'new';
+  const change = m.base.holdout_rmse_change === null ? null : fromJsonNumber(m.base.holdout_rmse_change);
+  if (change === null || !Number.isFinite(change)) return '–';
+  const percent = change * 100;
+  return `${percent > 0 ? '+' : ''}${formatNumber(percent)}%`;
+}
+
+/**
+ * Formats the Result for a terminal: the table of models (a `vs base` column when the run was
+ * compared with a base commit), one block per model that did not pass (every model, with every
+ * check, when `verbose`), the run's notes and the closing count.
+ */
 export function formatText(result: Result, options: TextOptions = {}): string {
   const color = options.color ?? false;
   const out: string[] = [];
-  const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef'];
+  // With a base comparison, one more column: the hold-out RMSE change against the base commit.
+  const withBase = result.models.some((m) => m.base !== undefined);
+  const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef', ...(withBase ? ['vs base'] : [])];
   const rows = result.models.map((m) => [
     m.verdict,
     escapeTerminal(m.name),
@@ -56,9 +93,10 @@ export function formatText(result: Result, options: TextOptions = {}): string {
     metric(m, 'gap_ratio'),
     metric(m, 'params_per_sample'),
     metric(m, 'max_std_coefficient'),
+    ...(withBase ? [baseCell(m)] : []),
   ]);
   if (rows.length > 0) {
-    const lines = table([header, ...rows], [false, false, true, true, true, true]);
+    const lines = table([header, ...rows], [false, false, true, true, true, true, true]);
     out.push(lines[0]);
     lines.slice(1).forEach((line, i) => {
       const v = result.models[i].verdict;
@@ -67,17 +105,17 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   } else {
     out.push('no models to check');
   }
+  const verbose = options.verbose ?? false;
   for (const m of result.models) {
-    if (m.verdict === 'pass') continue;
+    if (m.verdict === 'pass' && !verbose) continue;
     out.push('');
-    out.push(`${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)} (${escapeTerminal(m.descriptor)})`);
+    out.push(modelHeader(m, color));
     if (m.error) {
-      const where = m.error.file ? `${m.error.file}${m.error.line ? `:${m.error.line}` : ''}: ` : '';
-      out.push(`  ${escapeTerminal(where + m.error.message)}`);
+      out.push(`  ${escapeTerminal(errorWhere(m) + m.error.message)}`);
       continue;
     }
     if (isClassifier(m)) out.push(`  ${escapeTerminal(classifierLine(m))}`);
-    for (const c of m.checks) if (c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
+    for (const c of m.checks) if (verbose || c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
   }
   for (const note of result.notes) out.push('', `note: ${escapeTerminal(note)}`);
   const { counts } = result;

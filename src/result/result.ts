@@ -123,7 +123,7 @@ export interface ModelResult {
   /** Comparison with the base commit; absent when no comparison was asked for or possible. */
   base?: BaseComparison;
   /** Set when the model could not be checked (verdict `error`). */
-  error: { message: string; file: string | null; line: number | null; code: string } | null;
+  error: { message: string; file: string | null; line: number | null; code: string; column?: number | null } | null;
   /** Extra data for charts and further reporters. */
   extra?: Record<string, unknown>;
   /** What the HTML report and the Markdown charts draw (see model/chart-data.ts); absent for models that could not be checked. */

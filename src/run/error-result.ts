@@ -29,6 +29,7 @@ export function errorResult(name: string, descriptor: string, error: InputError)
       message: key !== undefined && key !== '' ? `\`${clip(key)}\`: ${error.message}` : error.message,
       file: error.location.file ?? null,
       line: error.location.line ?? null,
+      ...(error.location.column !== undefined ? { column: error.location.column } : {}),
       code: error.code,
     },
   };

@@ -7,6 +7,7 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
 import type { ModelTables } from '../data/load-model-data.js';
 import type { Design } from '../design/design-matrix.js';
+import { predictRows } from '../design/blocks.js';
 import { range } from '../design/stats.js';
 import type { CrossValidation, FoldFactors } from '../diagnostics/cross-validation.js';
 import type { Folds } from '../diagnostics/folds.js';
@@ -48,6 +49,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   const first = foldPass(plan);
   const fit = refinePass(plan, first.fit);
   const scored = scoringPass(plan, fit, first.foldFactors);
+  if (descriptor.fit.refit === false) return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
   const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
   return {
     descriptor,
@@ -61,6 +63,44 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     crossValidation: scored.crossValidation,
     foldFactors: first.foldFactors,
     shipped: shippedScore(descriptor, design, tables, fit),
+  };
+}
+
+/**
+ * A model scored as shipped (`fit.refit: false`): the shipped coefficients take the refit's place
+ * in every figure (predictions, errors, coefficient sizes, swing, the report's `coefficients`);
+ * the internal refit keeps only what describes the design (rank, conditioning, effective degrees
+ * of freedom). No cross-validation; no shipped-against-refit comparison.
+ */
+function scoredAsShipped(
+  descriptor: Descriptor,
+  design: Design,
+  tables: ModelTables,
+  refit: FitResult,
+  targetSd: number,
+  columnSd: Float64Array,
+  folds: Folds,
+  factors: FoldFactors,
+): FittedModel {
+  const shipped = checkedShipped(descriptor, design);
+  const coefficients = Float64Array.from(shipped ?? []);
+  const trainPredictions = predictRows(design, tables.train, coefficients);
+  const holdoutPredictions = predictRows(design, tables.holdout, coefficients);
+  let rss = 0;
+  for (let i = 0; i < tables.train.rows; i++) rss += (tables.train.y[i] - trainPredictions[i]) ** 2;
+  const fit: FitResult = { ...refit, coefficients, rss };
+  return {
+    descriptor,
+    design,
+    fit,
+    tables,
+    metrics: coreMetrics(targetSd, columnSd, fit, design, tables, trainPredictions, holdoutPredictions),
+    trainPredictions,
+    holdoutPredictions,
+    folds,
+    crossValidation: null,
+    foldFactors: factors,
+    shipped: null,
   };
 }
 
@@ -123,6 +163,16 @@ function coreMetrics(
  * @throws InputError `coefficients-length` when their count is not the design's
  */
 function shippedScore(descriptor: Descriptor, design: Design, tables: ModelTables, fit: FitResult): ShippedScore | null {
+  const shipped = checkedShipped(descriptor, design);
+  if (shipped === null) return null;
+  return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+}
+
+/**
+ * The shipped coefficients, or null when the descriptor ships none.
+ * @throws InputError `coefficients-length` when their count is not the design's
+ */
+function checkedShipped(descriptor: Descriptor, design: Design): readonly number[] | null {
   const shipped = descriptor.coefficients;
   if (shipped === null) return null;
   if (shipped.length !== design.p) {
@@ -132,5 +182,5 @@ function shippedScore(descriptor: Descriptor, design: Design, tables: ModelTable
       { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
     );
   }
-  return scoreShipped(design, tables.train, tables.holdout, shipped, fit.coefficients);
+  return shipped;
 }

@@ -5,7 +5,7 @@
 import { checkUniqueNames, loadDescriptor } from '../config/descriptor.js';
 import { discoverDescriptors } from '../config/discover.js';
 import { loadSettings } from '../config/settings-file.js';
-import type { Descriptor } from '../config/types.js';
+import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import { kernelNotes } from '../kernels/index.js';
 import { errorResult } from './error-result.js';
@@ -40,6 +40,15 @@ export interface PipelineOptions {
 }
 
 /**
+ * The run's note on its settings: the file used, or that there was none and the built-in
+ * defaults applied (limits as in docs/checks.md, descriptors matched by the default pattern).
+ */
+export function settingsNote(file: SettingsFile, configPath: string): string {
+  if (file.file !== null) return `settings: ${file.file}`;
+  return `settings: no file at ${configPath}; built-in defaults (descriptors ${file.models.join(', ')}, default limits)`;
+}
+
+/**
  * Checks every model of a run.
  * Problems with the settings file or the list of descriptors throw an InputError (nothing can be
  * checked). A descriptor or data file that is bad makes that model's verdict `error`; every
@@ -67,7 +76,7 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
   checkUniqueNames(loaded);
   const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
   models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
-  const notes = [...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+  const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
   // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
   for (const note of kernelNotes()) if (!notes.includes(note)) notes.push(note);

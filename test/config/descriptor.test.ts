@@ -73,7 +73,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'step', from: 0, to: 1, step: 0.25 }, width: 0.5, line: 14 },
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'at-samples' }, width: 2, line: 15 },
     ]);
-    expect(d.fit).toEqual({ intercept: false, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18, threshold: 0.5 });
+    expect(d.fit).toEqual({ intercept: false, refit: true, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18, threshold: 0.5 });
     expect(d.coefficients).toEqual([1, 2.5, -3]);
     expect(d.coefficientsLine).toBe(20);
     expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.3, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 22 });
@@ -86,7 +86,7 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
     const minimal = 'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms:\n  - linear: [x]\n';
     const d = await loadDescriptor(repoWith(minimal), F, defaultSettings());
     expect(d.task).toBe('regression');
-    expect(d.fit).toEqual({ intercept: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4, threshold: 0.5 });
+    expect(d.fit).toEqual({ intercept: true, refit: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4, threshold: 0.5 });
     expect(d.coefficients).toBeNull();
     expect(d.coefficientsLine).toBeNull();
     expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
@@ -117,7 +117,7 @@ describe('limits merge: defaults < settings < descriptor, key by key', () => {
 
 describe('loadDescriptor: schema errors name file, line and key path', () => {
   const cases: Array<{ name: string; text: string; line: number; key: string; message?: RegExp }> = [
-    { name: 'unknown top-level key', text: edit(3, 'tusk: regression'), line: 3, key: 'tusk', message: /unknown key `tusk`; expected one of: version, name, task/ },
+    { name: 'unknown top-level key', text: edit(3, 'tusk: regression'), line: 3, key: 'tusk', message: /unknown key `tusk` \(did you mean `task`\?\); expected one of: version, name, task/ },
     { name: 'bad version', text: edit(1, 'version: 2'), line: 1, key: 'version' },
     { name: 'name with a space', text: edit(2, 'name: kiln exit'), line: 2, key: 'name' },
     { name: 'name too long', text: edit(2, `name: ${'a'.repeat(101)}`), line: 2, key: 'name' },
@@ -150,7 +150,7 @@ describe('loadDescriptor: schema errors name file, line and key path', () => {
     { name: 'intercept not boolean', text: edit(17, '  intercept: yes'), line: 17, key: 'fit.intercept', message: /true or false, got "yes"/ },
     { name: 'unknown fit key', text: edit(18, '  lambda: 0.5'), line: 18, key: 'fit.lambda', message: /unknown key `lambda`/ },
     { name: 'coefficient not a number', text: edit(20, 'coefficients: [1, x, 3]'), line: 20, key: 'coefficients[1]' },
-    { name: 'unknown limit key', text: edit(22, '  gap_ration: 1.3'), line: 22, key: 'limits.gap_ration', message: /unknown key `gap_ration`; expected one of: gap_ratio, params_per_sample/ },
+    { name: 'unknown limit key', text: edit(22, '  gap_ration: 1.3'), line: 22, key: 'limits.gap_ration', message: /unknown key `gap_ration` \(did you mean `gap_ratio`\?\); expected one of: gap_ratio, params_per_sample/ },
     { name: 'negative limit', text: edit(22, '  gap_ratio: -1'), line: 22, key: 'limits.gap_ratio', message: />= 0, got -1/ },
     { name: 'limit as other text', text: edit(22, '  gap_ratio: none'), line: 22, key: 'limits.gap_ratio', message: /expected one of: .*`off`/ },
     { name: 'empty warn/fail mapping', text: edit(23, '  swing: {}'), line: 23, key: 'limits.swing', message: /expected one of: .*\{ warn, fail \}, \{ warn_below, fail_below, warn_above, fail_above \}/ },

@@ -82,7 +82,7 @@ describe('loadSettings', () => {
   const errors: Array<{ name: string; text: string; code?: string; line: number; key?: string; message?: RegExp }> = [
     { name: 'empty file', text: '', line: 1, message: /a mapping/ },
     { name: 'missing version', text: 'models: [a]\n', line: 1, key: 'version', message: /missing key `version`/ },
-    { name: 'unknown key', text: 'version: 1\nmodel: [a]\n', line: 2, key: 'model', message: /unknown key `model`; expected one of: version, models, limits, fit, caps/ },
+    { name: 'unknown key', text: 'version: 1\nmodel: [a]\n', line: 2, key: 'model', message: /unknown key `model` \(did you mean `models`\?\); expected one of: version, models, limits, fit, caps/ },
     { name: 'models not a list', text: 'version: 1\nmodels: "**/*.yml"\n', line: 2, key: 'models', message: /a list/ },
     { name: 'empty models', text: 'version: 1\nmodels: []\n', line: 2, key: 'models' },
     { name: 'unknown limit', text: 'version: 1\nlimits:\n  gap: 1\n', line: 3, key: 'limits.gap' },

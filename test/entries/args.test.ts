@@ -37,6 +37,7 @@ describe('fitgate check', () => {
       out: null,
       color: null,
       debug: false,
+      verbose: false,
       base: null,
       shard: null,
       jobs: null,
@@ -111,6 +112,7 @@ describe('fitgate merge', () => {
       color: null,
       failOn: 'warn',
       debug: false,
+      verbose: false,
       html: null,
       sarif: null,
       junit: null,
@@ -146,11 +148,12 @@ describe('help and version (status 0)', () => {
     expect(printed(['-V'])).toEqual({ text: `${VERSION}\n`, status: 0 });
   });
 
-  it('prints the main help with no arguments, --help, -h and help', () => {
-    const main = printed([]);
+  it('prints the main help with --help, -h and help (status 0), and with no command (status 2)', () => {
+    const main = printed(['--help']);
     expect(main.status).toBe(0);
+    expect(printed([])).toEqual({ text: main.text, status: 2 });
     expect(main.text).toMatch(/^Usage: fitgate \[options\] \[command\]\n/);
-    for (const argv of [['--help'], ['-h'], ['help']]) expect(printed(argv)).toEqual(main);
+    for (const argv of [['-h'], ['help']]) expect(printed(argv)).toEqual(main);
     for (const command of ['check [options] [descriptor...]', 'merge [options] <report...>', 'help [command]']) expect(main.text).toContain(`  ${command}`);
   });
 
@@ -167,7 +170,7 @@ describe('help and version (status 0)', () => {
   });
 
   it('wraps every help line to 80 columns', () => {
-    for (const argv of [[], ['check', '--help'], ['merge', '--help']]) {
+    for (const argv of [[], ['check', '--help'], ['merge', '--help'], ['init', '--help'], ['refit', '--help'], ['explain', '--help']]) {
       for (const line of printed(argv).text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
     }
   });

@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { CHECKS } from '../../src/checks/index.js';
 import { formatSarif, sarifLog, SARIF_SCHEMA_URI } from '../../src/report/sarif.js';
 import { summarise } from '../../src/result/result.js';
+import { VERSION } from '../../src/core/version.js';
 import { AWKWARD, awkwardResult } from './fixture.js';
 
 // The SARIF 2.1.0 JSON schema as shipped in @microsoft/jest-sarif (lib/schemas/sarif-2.1.0-rtm.5.json:
@@ -47,6 +48,15 @@ describe('formatSarif', () => {
   it('has one rule per registry check, in registry order', () => {
     const log = sarifLog(awkwardResult()) as Log;
     expect(log.runs[0].tool.driver.rules.map((r) => r.id)).toEqual(CHECKS.map((c) => c.id));
+  });
+
+  it("gives every rule a helpUri to its check's heading on the docs page", () => {
+    const log = sarifLog(awkwardResult()) as { runs: { tool: { driver: { rules: { id: string; helpUri: string }[] } } }[] };
+    const docs = readFileSync(new URL('../../docs/checks.md', import.meta.url), 'utf8');
+    for (const rule of log.runs[0].tool.driver.rules) {
+      expect(rule.helpUri).toBe(`https://github.com/fitgate/fitgate/blob/v${VERSION}/docs/checks.md#${rule.id}`);
+      expect(docs, `docs/checks.md heading of ${rule.id}`).toContain(`\n### ${rule.id}\n`);
+    }
   });
 
   it('reports fail as error, warn as warning, an internal error as note, at the descriptor line; passes are not results', () => {

@@ -130,7 +130,7 @@ describe('mergeReports', () => {
 describe('merge and scale arguments', () => {
   it('parses merge with format, output and fail-on', () => {
     const parsed = parseArgs(['merge', 'a.json', 'dir/b.json', '--format', 'markdown', '--out', 'all.md', '--fail-on', 'warn'], '/work');
-    expect(parsed).toEqual({ kind: 'merge', reports: ['/work/a.json', '/work/dir/b.json'], format: 'markdown', out: 'all.md', color: null, failOn: 'warn', debug: false, html: null, sarif: null, junit: null, expect: null });
+    expect(parsed).toEqual({ kind: 'merge', reports: ['/work/a.json', '/work/dir/b.json'], format: 'markdown', out: 'all.md', color: null, failOn: 'warn', debug: false, verbose: false, html: null, sarif: null, junit: null, expect: null });
   });
 
   it('parses the file reports of merge', () => {
