@@ -4,6 +4,7 @@
  */
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
+import { maxOf } from '../core/extremes.js';
 import { escapeTerminal } from './escape.js';
 
 /** Options of the text report. */
@@ -19,7 +20,7 @@ function paint(text: string, status: keyof typeof COLOURS, color: boolean): stri
 }
 
 function table(rows: string[][], rightAligned: boolean[]): string[] {
-  const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => [...r[j]].length)));
+  const widths = rows[0].map((_, j) => maxOf(rows.map((r) => [...r[j]].length)));
   return rows.map((r) =>
     r
       .map((cell, j) => {

@@ -12,7 +12,7 @@ import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/res
 import { columnMedian } from '../diagnostics/column-median.js';
 import { range } from '../design/stats.js';
 import type { FittedModel } from './fit-model.js';
-import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
+import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, MAX_PARTIAL_CURVES, MAX_SERIES_NUMBERS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
 
 export { MAX_CHART_POINTS } from '../result/chart-types.js';
 
@@ -30,8 +30,13 @@ export function thinRows(n: number, max = MAX_CHART_POINTS): Int32Array {
   return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
 }
 
+/** Rows a series of a model with this many inputs keeps at most: {@link MAX_SERIES_NUMBERS} / (inputs + 4), at most `max`. */
+export function seriesPoints(inputs: number, max = MAX_CHART_POINTS): number {
+  return Math.max(1, Math.min(max, Math.floor(MAX_SERIES_NUMBERS / (inputs + 4))));
+}
+
 function series(data: ModelData, predictions: Float64Array, max: number): PointSeries {
-  const keep = thinRows(data.rows, max);
+  const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
   const thinned = keep.length < data.rows;
   const pick = (col: ArrayLike<number>): (number | null)[] => Array.from(keep, (i) => chartNumber(col[i]));
   return {
@@ -166,10 +171,11 @@ function readSweep(checks: readonly CheckResult[]): SweepData | null {
   if (rows.length === 0) return null;
   rows.sort((a, b) => a.s - b.s);
   const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
+  // rows are sorted by setting, so the positive settings run from the first to the last.
   const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
   return {
     parameter,
-    log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && Math.max(...positive) / Math.min(...positive) >= 10,
+    log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && positive[positive.length - 1] / positive[0] >= 10,
     settings: rows.map((r) => chartNumber(r.s) ?? r.s),
     cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
     train: null,
@@ -195,9 +201,14 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
   // One input: the curve over the scanned range with the band; several: partial curves.
   let fitCurve: FitCurveData | null = null;
   const partials: CurveData[] = [];
+  let partialsLeftOut = 0;
   for (let c = 0; c < inputs.length; c++) {
     const [tlo, thi] = range(train.inputs[c], train.rows);
     if (!(thi > tlo)) continue;
+    if (inputs.length > 1 && partials.length >= MAX_PARTIAL_CURVES) {
+      partialsLeftOut += 1;
+      continue;
+    }
     const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
     const swingCurve = swing?.curve ?? null;
     const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
@@ -238,6 +249,7 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     holdout: series(holdout, model.holdoutPredictions, maxPoints),
     fit: fitCurve,
     partials,
+    ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
     sweep: readSweep(checks),
     coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
   };

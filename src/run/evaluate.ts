@@ -4,6 +4,7 @@
  */
 import { CHECKS, runCheck, type CheckContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
+import { checkDeadline, Deadline, TimeLimitExceeded, withDeadline } from '../core/deadline.js';
 import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
@@ -11,7 +12,7 @@ import type { RepoReader } from '../repo/types.js';
 import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result/result.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { buildChartData } from './chart-data.js';
-import { errorResult, INTERNAL_ERROR } from './error-result.js';
+import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 
 export type { BaseInput } from './base-comparison.js';
@@ -48,15 +49,29 @@ function reportMetrics(model: FittedModel): ModelMetrics {
 }
 
 /**
- * Fits one model and runs every check on it. Input problems become a model with verdict
- * `error` (the run goes on); anything else is re-thrown.
+ * Fits one model and runs every check on it, within its time limit (`caps.max_model_seconds`,
+ * checked between the stages: see core/deadline.ts). Input problems and a model stopped at its
+ * time limit become a model with verdict `error` (the run goes on).
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
+ * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
  */
-export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
+export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput, deadline?: Deadline): Promise<ModelResult> {
+  const within = deadline ?? new Deadline(settings.caps.maxModelSeconds * 1000);
+  try {
+    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, base));
+  } catch (error) {
+    if (!(error instanceof TimeLimitExceeded)) throw error;
+    return errorResult(descriptor.name, descriptor.file, timeLimitError(descriptor, settings.caps.maxModelSeconds, error.elapsedMs, error.stage, settings.file));
+  }
+}
+
+/** {@link evaluateModel} inside its deadline; TimeLimitExceeded passes through. */
+async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
   let model: FittedModel;
   try {
     model = await fitModel(repo, descriptor, settings);
   } catch (error) {
+    if (error instanceof TimeLimitExceeded) throw error;
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
     // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
     // that every other model still gets its outcome; the code marks it as a bug to report.
@@ -84,7 +99,11 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
   const checks: CheckResult[] = [];
   let verdict: Verdict = 'pass';
   for (const check of CHECKS) {
+    const stage = `${check.id} check`;
+    checkDeadline(stage);
     const { outcome, figures } = runCheck(check, context);
+    // A check stopped by the deadline is caught as a check error: the model stops here instead.
+    checkDeadline(stage);
     checks.push(outcome);
     if (figures) Object.assign(metrics, figures);
     if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);

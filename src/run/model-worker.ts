@@ -17,6 +17,7 @@ import { evaluateModel, type BaseInput } from './evaluate.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
 import type { ModelResult } from '../result/result.js';
+import { errorResult, timeLimitError } from './error-result.js';
 import { runPool, serveTasks } from './pool.js';
 import { isFitgateWorker, WORKER_FLAG } from './worker-role.js';
 
@@ -92,8 +93,24 @@ export async function evaluateModels(
     base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor },
   );
   const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
-  return runPool<ModelTask, ModelResult>(tasks, { jobs, script, workerData: data });
+  // The worker checks the model's time limit itself between stages; a model still running
+  // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
+  const limitSeconds = settings.caps.maxModelSeconds;
+  return runPool<ModelTask, ModelResult>(
+    tasks,
+    { jobs, script, workerData: data },
+    {
+      ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
+      onTimeLimit: (task, elapsedMs) => errorResult(task.descriptor.name, task.descriptor.file, timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file)),
+    },
+  );
 }
+
+/**
+ * Milliseconds past a model's time limit after which its worker thread is ended from outside:
+ * the model's own checks stop it at the limit unless one step runs longer than this.
+ */
+export const HARD_STOP_GRACE_MS = 2000;
 
 /** The worker loop: evaluate each model task sent by the pool. */
 function startModelWorker(): void {

@@ -7,6 +7,7 @@
  * 2. the refinement pass, where one step of iterative refinement converges and gains digits;
  * 3. the scoring pass: predictions, out-of-fold errors and leverages together.
  */
+import { checkDeadline, TimeLimitExceeded } from '../core/deadline.js';
 import { InputError } from '../core/errors.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
@@ -35,11 +36,14 @@ export function foldPass(plan: ModelPlan): FoldPass {
   const builder = new FoldFactorBuilder(design.p, folds);
   const spread = new ColumnSpread(design.p);
   forEachBlock(design, train, (X, start, m) => {
+    checkDeadline('fold pass');
     checkRange(plan, X, start, m);
     builder.add(X, train.y, start, m);
     spread.add(X, m);
   });
+  checkDeadline('fold merges');
   const fit = fitFactor(mergeFactors(builder.factors, design.p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
+  checkDeadline('fit');
   const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? complementFactors(builder.factors) : [] };
   return { fit, foldFactors, columnSd: spread.sd() };
 }
@@ -52,7 +56,10 @@ export function refinePass(plan: ModelPlan, fit: FitResult): FitResult {
   if (!refinementApplies(fit)) return fit;
   const train = plan.tables.train;
   const pass = new RefinementPass(fit);
-  forEachBlock(plan.design, train, (X, start, m) => pass.addRows(X, train.y.subarray(start, start + m), m));
+  forEachBlock(plan.design, train, (X, start, m) => {
+    checkDeadline('refinement pass');
+    pass.addRows(X, train.y.subarray(start, start + m), m);
+  });
   return pass.finish();
 }
 
@@ -72,7 +79,8 @@ export function scoringPass(plan: ModelPlan, fit: FitResult, foldFactors: FoldFa
   let crossValidation: CrossValidation | null;
   try {
     crossValidation = crossValidate(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
-  } catch {
+  } catch (error) {
+    if (error instanceof TimeLimitExceeded) throw error;
     // The cross-validation check runs it again and reports why it could not be computed (as a
     // check that throws does); the fit itself stands.
     crossValidation = null;

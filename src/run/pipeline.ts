@@ -63,7 +63,7 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
   }
   checkUniqueNames(loaded);
   const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
-  models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
+  for (const model of await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })) models.push(model);
   const notes = [...(options.notes ?? [])];
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
   return summarise(models, VERSION, notes);

@@ -3,7 +3,7 @@
 "use strict";
 import func1Module from "ajv/dist/runtime/ucs2length.js";
 export const validateSettings = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail above it)","description":"Fail when the figure is above this number.","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is above this number.","type":"number","minimum":0},"fail":{"description":"Fail when the figure is above this number.","type":"number","minimum":0}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are never searched). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml`; not absolute, not starting with `..`.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000},"max_operations":{"description":"Largest estimated work of one model, in operations (one operation is about one floating-point multiply-add): the passes over the training rows, the decompositions of the p x p factors, cross-validation, the swing scan and the complexity sweep, estimated from the rows, columns, folds and sweep settings before the first pass over the rows (docs/scale.md gives the formula). A model over it is refused with its estimate; raise this to allow it.","type":"number","exclusiveMinimum":0,"default":40000000000},"max_model_seconds":{"description":"Time limit of one model, in seconds of wall-clock time from reading its files to its last check. A model still running then stops and becomes that model's error (code `time-limit`); every other model is still checked.","type":"number","exclusiveMinimum":0,"maximum":86400,"default":40}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail above it)","description":"Fail when the figure is above this number.","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is above this number.","type":"number","minimum":0},"fail":{"description":"Fail when the figure is above this number.","type":"number","minimum":0}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const func1 = typeof func1Module === "function" ? func1Module : func1Module.default;
 const schema20 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}};
 const func2 = Object.prototype.hasOwnProperty;
@@ -435,8 +435,8 @@ vErrors.push(err8);
 errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
-if(data5 < 2 || isNaN(data5)){
-const err9 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema19.properties.fit.properties.folds,data:data5};
+if(data5 > 50 || isNaN(data5)){
+const err9 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema19.properties.fit.properties.folds,data:data5};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -445,12 +445,8 @@ vErrors.push(err9);
 }
 errors++;
 }
-}
-}
-if(data4.fold_order !== undefined){
-let data6 = data4.fold_order;
-if(!((data6 === "shuffled") || (data6 === "blocks"))){
-const err10 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.fold_order.enum,parentSchema:schema19.properties.fit.properties.fold_order,data:data6};
+if(data5 < 2 || isNaN(data5)){
+const err10 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema19.properties.fit.properties.folds,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -460,10 +456,11 @@ vErrors.push(err10);
 errors++;
 }
 }
-if(data4.seed !== undefined){
-let data7 = data4.seed;
-if(!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))){
-const err11 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.fit.properties.seed.type,parentSchema:schema19.properties.fit.properties.seed,data:data7};
+}
+if(data4.fold_order !== undefined){
+let data6 = data4.fold_order;
+if(!((data6 === "shuffled") || (data6 === "blocks"))){
+const err11 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.fold_order.enum,parentSchema:schema19.properties.fit.properties.fold_order,data:data6};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -472,9 +469,11 @@ vErrors.push(err11);
 }
 errors++;
 }
-if((typeof data7 == "number") && (isFinite(data7))){
-if(data7 > 4294967295 || isNaN(data7)){
-const err12 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema19.properties.fit.properties.seed,data:data7};
+}
+if(data4.seed !== undefined){
+let data7 = data4.seed;
+if(!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))){
+const err12 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.fit.properties.seed.type,parentSchema:schema19.properties.fit.properties.seed,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -483,8 +482,9 @@ vErrors.push(err12);
 }
 errors++;
 }
-if(data7 < 0 || isNaN(data7)){
-const err13 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema19.properties.fit.properties.seed,data:data7};
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 > 4294967295 || isNaN(data7)){
+const err13 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema19.properties.fit.properties.seed,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -493,12 +493,8 @@ vErrors.push(err13);
 }
 errors++;
 }
-}
-}
-if(data4.parameter_count !== undefined){
-let data8 = data4.parameter_count;
-if(!((data8 === "columns") || (data8 === "effective"))){
-const err14 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.parameter_count.enum,parentSchema:schema19.properties.fit.properties.parameter_count,data:data8};
+if(data7 < 0 || isNaN(data7)){
+const err14 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema19.properties.fit.properties.seed,data:data7};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -509,8 +505,10 @@ errors++;
 }
 }
 }
-else {
-const err15 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.fit.type,parentSchema:schema19.properties.fit,data:data4};
+if(data4.parameter_count !== undefined){
+let data8 = data4.parameter_count;
+if(!((data8 === "columns") || (data8 === "effective"))){
+const err15 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.parameter_count.enum,parentSchema:schema19.properties.fit.properties.parameter_count,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -520,12 +518,9 @@ vErrors.push(err15);
 errors++;
 }
 }
-if(data.caps !== undefined){
-let data9 = data.caps;
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
-for(const key2 in data9){
-if(!((key2 === "max_file_mb") || (key2 === "max_cells"))){
-const err16 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema19.properties.caps,data:data9};
+}
+else {
+const err16 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.fit.type,parentSchema:schema19.properties.fit,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -535,11 +530,12 @@ vErrors.push(err16);
 errors++;
 }
 }
-if(data9.max_file_mb !== undefined){
-let data10 = data9.max_file_mb;
-if((typeof data10 == "number") && (isFinite(data10))){
-if(data10 <= 0 || isNaN(data10)){
-const err17 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
+if(data.caps !== undefined){
+let data9 = data.caps;
+if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+for(const key2 in data9){
+if(!((((key2 === "max_file_mb") || (key2 === "max_cells")) || (key2 === "max_operations")) || (key2 === "max_model_seconds"))){
+const err17 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema19.properties.caps,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -549,8 +545,11 @@ vErrors.push(err17);
 errors++;
 }
 }
-else {
-const err18 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_file_mb.type,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
+if(data9.max_file_mb !== undefined){
+let data10 = data9.max_file_mb;
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 <= 0 || isNaN(data10)){
+const err18 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -560,10 +559,8 @@ vErrors.push(err18);
 errors++;
 }
 }
-if(data9.max_cells !== undefined){
-let data11 = data9.max_cells;
-if(!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))){
-const err19 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.caps.properties.max_cells.type,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
+else {
+const err19 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_file_mb.type,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -572,9 +569,11 @@ vErrors.push(err19);
 }
 errors++;
 }
-if((typeof data11 == "number") && (isFinite(data11))){
-if(data11 < 1 || isNaN(data11)){
-const err20 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
+}
+if(data9.max_cells !== undefined){
+let data11 = data9.max_cells;
+if(!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))){
+const err20 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.caps.properties.max_cells.type,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -583,11 +582,9 @@ vErrors.push(err20);
 }
 errors++;
 }
-}
-}
-}
-else {
-const err21 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.caps.type,parentSchema:schema19.properties.caps,data:data9};
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 < 1 || isNaN(data11)){
+const err21 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -598,13 +595,86 @@ errors++;
 }
 }
 }
-else {
-const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.type,parentSchema:schema19,data};
+if(data9.max_operations !== undefined){
+let data12 = data9.max_operations;
+if((typeof data12 == "number") && (isFinite(data12))){
+if(data12 <= 0 || isNaN(data12)){
+const err22 = {instancePath:instancePath+"/caps/max_operations",schemaPath:"#/properties/caps/properties/max_operations/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_operations,data:data12};
 if(vErrors === null){
 vErrors = [err22];
 }
 else {
 vErrors.push(err22);
+}
+errors++;
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/caps/max_operations",schemaPath:"#/properties/caps/properties/max_operations/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_operations.type,parentSchema:schema19.properties.caps.properties.max_operations,data:data12};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data9.max_model_seconds !== undefined){
+let data13 = data9.max_model_seconds;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 > 86400 || isNaN(data13)){
+const err24 = {instancePath:instancePath+"/caps/max_model_seconds",schemaPath:"#/properties/caps/properties/max_model_seconds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 86400},message:"must be <= 86400",schema:86400,parentSchema:schema19.properties.caps.properties.max_model_seconds,data:data13};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data13 <= 0 || isNaN(data13)){
+const err25 = {instancePath:instancePath+"/caps/max_model_seconds",schemaPath:"#/properties/caps/properties/max_model_seconds/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_model_seconds,data:data13};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/caps/max_model_seconds",schemaPath:"#/properties/caps/properties/max_model_seconds/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_model_seconds.type,parentSchema:schema19.properties.caps.properties.max_model_seconds,data:data13};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+}
+else {
+const err27 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.caps.type,parentSchema:schema19.properties.caps,data:data9};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+}
+else {
+const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.type,parentSchema:schema19,data};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
 }
 errors++;
 }
@@ -614,7 +684,7 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate67;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail above it)","description":"Fail when the figure is above this number.","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is above this number.","type":"number","minimum":0},"fail":{"description":"Fail when the figure is above this number.","type":"number","minimum":0}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"}}},"limit":{"title":"limit","description":"A number (fail when the figure is above it), { warn, fail } (at least one; warn <= fail) or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail above it)","description":"Fail when the figure is above this number.","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn above `warn`, fail above `fail`; give at least one, with warn <= fail.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is above this number.","type":"number","minimum":0},"fail":{"description":"Fail when the figure is above this number.","type":"number","minimum":0}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
@@ -2016,8 +2086,8 @@ vErrors.push(err28);
 errors++;
 }
 if((typeof data12 == "number") && (isFinite(data12))){
-if(data12 < 2 || isNaN(data12)){
-const err29 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data12};
+if(data12 > 50 || isNaN(data12)){
+const err29 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2026,12 +2096,8 @@ vErrors.push(err29);
 }
 errors++;
 }
-}
-}
-if(data9.fold_order !== undefined){
-let data13 = data9.fold_order;
-if(!((data13 === "shuffled") || (data13 === "blocks"))){
-const err30 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data13};
+if(data12 < 2 || isNaN(data12)){
+const err30 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data12};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2041,10 +2107,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data9.seed !== undefined){
-let data14 = data9.seed;
-if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
-const err31 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+}
+if(data9.fold_order !== undefined){
+let data13 = data9.fold_order;
+if(!((data13 === "shuffled") || (data13 === "blocks"))){
+const err31 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data13};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2053,9 +2120,11 @@ vErrors.push(err31);
 }
 errors++;
 }
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 > 4294967295 || isNaN(data14)){
-const err32 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+}
+if(data9.seed !== undefined){
+let data14 = data9.seed;
+if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
+const err32 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2064,8 +2133,9 @@ vErrors.push(err32);
 }
 errors++;
 }
-if(data14 < 0 || isNaN(data14)){
-const err33 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 > 4294967295 || isNaN(data14)){
+const err33 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data14};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -2074,12 +2144,8 @@ vErrors.push(err33);
 }
 errors++;
 }
-}
-}
-if(data9.parameter_count !== undefined){
-let data15 = data9.parameter_count;
-if(!((data15 === "columns") || (data15 === "effective"))){
-const err34 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data15};
+if(data14 < 0 || isNaN(data14)){
+const err34 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data14};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -2090,8 +2156,10 @@ errors++;
 }
 }
 }
-else {
-const err35 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data9};
+if(data9.parameter_count !== undefined){
+let data15 = data9.parameter_count;
+if(!((data15 === "columns") || (data15 === "effective"))){
+const err35 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data15};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -2101,11 +2169,9 @@ vErrors.push(err35);
 errors++;
 }
 }
-if(data.coefficients !== undefined){
-let data16 = data.coefficients;
-if(Array.isArray(data16)){
-if(data16.length < 1){
-const err36 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data16};
+}
+else {
+const err36 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data9};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -2114,11 +2180,12 @@ vErrors.push(err36);
 }
 errors++;
 }
-const len1 = data16.length;
-for(let i1=0; i1<len1; i1++){
-let data17 = data16[i1];
-if(!((typeof data17 == "number") && (isFinite(data17)))){
-const err37 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data17};
+}
+if(data.coefficients !== undefined){
+let data16 = data.coefficients;
+if(Array.isArray(data16)){
+if(data16.length < 1){
+const err37 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -2127,15 +2194,28 @@ vErrors.push(err37);
 }
 errors++;
 }
-}
-}
-else {
-const err38 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data16};
+const len1 = data16.length;
+for(let i1=0; i1<len1; i1++){
+let data17 = data16[i1];
+if(!((typeof data17 == "number") && (isFinite(data17)))){
+const err38 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
 else {
 vErrors.push(err38);
+}
+errors++;
+}
+}
+}
+else {
+const err39 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data16};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
 }
 errors++;
 }
@@ -2148,12 +2228,12 @@ errors = vErrors.length;
 }
 }
 else {
-const err39 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+const err40 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
 if(vErrors === null){
-vErrors = [err39];
+vErrors = [err40];
 }
 else {
-vErrors.push(err39);
+vErrors.push(err40);
 }
 errors++;
 }
