@@ -5,7 +5,7 @@
  */
 // node:fs rather than node:fs/promises: a command reads and writes its few files in turn, and the
 // promises module takes about 2 ms to load (readline and streams come with it).
-import { readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from './entries/args.js';
 import { errorMessage, InputError } from './core/errors.js';
@@ -14,7 +14,8 @@ import { defaultJobs } from './run/pool.js';
 import { isFitgateWorker } from './run/worker-role.js';
 import { runPipeline } from './run/pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
-import { formatJson } from './report/json.js';
+import { writeReportFile, writeReportStream } from './entries/report-file.js';
+import { jsonReport } from './report/json.js';
 import { escapeTerminal } from './report/escape.js';
 import { formatText } from './report/text.js';
 import { exitStatus, type Result } from './result/result.js';
@@ -60,14 +61,17 @@ async function main(argv: string[]): Promise<number> {
     }
     const toFile = parsed.out !== null;
     const color = parsed.color ?? (!toFile && process.stdout.isTTY === true && !process.env.NO_COLOR);
-    const text =
+    // The JSON report comes in pieces (one model at a time), so that a run of any size is written
+    // without being one string; the Markdown report is cut to a size and the text report is one
+    // line per model.
+    const pieces: Iterable<string> =
       parsed.format === 'json'
-        ? formatJson(result)
+        ? jsonReport(result)
         : parsed.format === 'markdown'
-          ? (await import('./report/markdown.js')).formatMarkdown(result)
-          : formatText(result, { color });
-    if (parsed.out !== null) writeFileSync(parsed.out, text);
-    else process.stdout.write(text);
+          ? [(await import('./report/markdown.js')).formatMarkdown(result)]
+          : [formatText(result, { color })];
+    if (parsed.out !== null) writeReportFile(parsed.out, pieces, '--out');
+    else await writeReportStream(process.stdout, pieces);
     // SARIF paths are relative to the working directory when the root lies inside it (code
     // scanning reads them from the checkout); merged shard reports run from the root.
     const prefix = parsed.kind === 'check' ? path.relative(process.cwd(), parsed.settings.root).split(path.sep).join('/') : '';

@@ -2,9 +2,9 @@
  * The step's outcome from a Result: the outputs, the JSON report file, and the one-line
  * failure message. The decision itself is {@link exitStatus}, shared with the CLI.
  */
-import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { formatJson } from '../report/json.js';
+import { writeReportFile } from '../entries/report-file.js';
+import { jsonReport } from '../report/json.js';
 import { exitStatus, type Result } from '../result/result.js';
 
 /** Names of the action's outputs (as in action.yml). */
@@ -50,13 +50,12 @@ export function failureMessage(result: Result, failOn: 'fail' | 'warn'): string 
  * Writes the JSON report under `dir` and returns its path: `fitgate-report.json`, or
  * `fitgate-report-<step>.json` when `GITHUB_ACTION` names the step (several steps in one job).
  * @param result the run's Result
- * @param dir folder to write in (created when missing)
+ * @param dir folder to write in (created when missing); the report is written piece by piece, atomically
  * @param step the step's id (`GITHUB_ACTION`), or undefined
  */
 export async function writeReport(result: Result, dir: string, step: string | undefined): Promise<string> {
   const slug = (step ?? '').replace(/[^A-Za-z0-9_.-]+/g, '-').replace(/^[-.]+/, '');
   const file = path.join(dir, slug === '' ? 'fitgate-report.json' : `fitgate-report-${slug}.json`);
-  await mkdir(dir, { recursive: true });
-  await writeFile(file, formatJson(result));
+  writeReportFile(file, jsonReport(result), 'RUNNER_TEMP');
   return file;
 }

@@ -39,7 +39,7 @@ export interface SwingOptions {
   segmentPoints?: number;
   /**
    * Points kept per curve in the result (thinning keeps each curve's extremes). Default 400, fewer
-   * when more than 10 curves are kept, so that all curves together hold at most
+   * when more than 2 curves are kept, so that all curves together hold at most
    * {@link SWING_CURVE_NUMBERS} points (at least {@link SWING_MIN_CURVE_POINTS} each).
    */
   maxCurvePoints?: number;
@@ -62,8 +62,8 @@ export const SWING_DEFAULTS = Object.freeze({
   maxCurves: 12,
 });
 
-/** Points of all kept curves together, at most (each curve is thinned to its share). */
-export const SWING_CURVE_NUMBERS = 4000;
+/** Points of all kept curves together, at most (each curve is thinned to its share; 400 each up to 2 inputs). */
+export const SWING_CURVE_NUMBERS = 800;
 
 /** Fewest points a kept curve is thinned to. */
 export const SWING_MIN_CURVE_POINTS = 100;

@@ -1,13 +1,14 @@
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
- * and the action; the reporters only format, this module only writes.
+ * and the action; the reporters only format, this module only writes, each report piece by piece
+ * (report-file.ts: never one string, atomically, never through a link).
  */
-import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { formatHtml, HTML_FILE } from '../report/html.js';
-import { formatJunit } from '../report/junit.js';
-import { formatSarif } from '../report/sarif.js';
+import { HTML_FILE, htmlReport } from '../report/html.js';
+import { junitReport } from '../report/junit.js';
+import { sarifReport } from '../report/sarif.js';
 import type { Result } from '../result/result.js';
+import { writeReportFile } from './report-file.js';
 
 /** Which file reports to write; null leaves one out. Paths are absolute or relative to the process's folder. */
 export interface FileReports {
@@ -25,16 +26,7 @@ export interface FileReports {
 
 /** Writes every requested file report (folders are created). */
 export async function writeFileReports(result: Result, files: FileReports): Promise<void> {
-  if (files.html !== null) {
-    await mkdir(files.html, { recursive: true });
-    await writeFile(path.join(files.html, HTML_FILE), formatHtml(result));
-  }
-  if (files.sarif !== null) {
-    await mkdir(path.dirname(path.resolve(files.sarif)), { recursive: true });
-    await writeFile(files.sarif, formatSarif(result, { pathPrefix: files.sarifPrefix }));
-  }
-  if (files.junit !== null) {
-    await mkdir(path.dirname(path.resolve(files.junit)), { recursive: true });
-    await writeFile(files.junit, formatJunit(result, { failOn: files.failOn }));
-  }
+  if (files.html !== null) writeReportFile(path.join(files.html, HTML_FILE), htmlReport(result), 'html');
+  if (files.sarif !== null) writeReportFile(files.sarif, sarifReport(result, { pathPrefix: files.sarifPrefix }), 'sarif');
+  if (files.junit !== null) writeReportFile(files.junit, junitReport(result, { failOn: files.failOn }), 'junit');
 }

@@ -10,6 +10,7 @@ import { createHash } from 'node:crypto';
 import { CHECKS } from '../checks/index.js';
 import { formatNumber } from '../core/format.js';
 import { fromJsonNumber, type CheckResult, type Result } from '../result/result.js';
+import { jsonPieces } from '../core/json-pieces.js';
 
 /** Options of the SARIF report. */
 export interface SarifOptions {
@@ -136,6 +137,15 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
       },
     ],
   };
+}
+
+/**
+ * The SARIF report in pieces (one result each at most), to write one after another: joined, they
+ * are {@link formatSarif}'s text.
+ */
+export function* sarifReport(result: Result, options: SarifOptions = {}): Generator<string> {
+  yield* jsonPieces(sarifLog(result, options));
+  yield '\n';
 }
 
 /** The SARIF report as JSON text (two-space indentation, final newline). */

@@ -12,7 +12,7 @@ import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/res
 import { columnMedian } from '../diagnostics/column-median.js';
 import { range } from '../design/stats.js';
 import type { FittedModel } from './fit-model.js';
-import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, MAX_PARTIAL_CURVES, MAX_SERIES_NUMBERS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
+import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, MAX_PARTIAL_CURVES, MAX_SERIES_NUMBERS, PARTIAL_CURVE_POINTS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
 
 export { MAX_CHART_POINTS } from '../result/chart-types.js';
 
@@ -52,10 +52,15 @@ function series(data: ModelData, predictions: Float64Array, max: number): PointS
   };
 }
 
-/** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
-function curveAlong(model: FittedModel, c: number, lo: number, hi: number, medians: number[], extra: readonly number[]): { x: number[]; y: (number | null)[] } {
+/** Grid points of each partial curve of a model with this many curves (see {@link PARTIAL_CURVE_POINTS}). */
+export function partialCurvePoints(curves: number): number {
+  return Math.max(101, Math.min(CURVE_POINTS, Math.floor(PARTIAL_CURVE_POINTS / Math.max(1, curves))));
+}
+
+/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
+function curveAlong(model: FittedModel, c: number, lo: number, hi: number, medians: number[], extra: readonly number[], points: number): { x: number[]; y: (number | null)[] } {
   const xs: number[] = [];
-  for (let t = 0; t < CURVE_POINTS; t++) xs.push(t === CURVE_POINTS - 1 ? hi : lo + ((hi - lo) * t) / (CURVE_POINTS - 1));
+  for (let t = 0; t < points; t++) xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
   for (const v of extra) if (v >= lo && v <= hi) xs.push(v);
   const grid = Float64Array.from(xs).sort();
   const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
@@ -197,6 +202,12 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
   const { train, holdout } = tables;
   const inputs = [...design.inputs];
   const medians = train.inputs.map((col) => columnMedian(col, train.rows));
+  let spread = 0;
+  for (let c = 0; c < inputs.length; c++) {
+    const [lo, hi] = range(train.inputs[c], train.rows);
+    if (hi > lo) spread++;
+  }
+  const points = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES));
 
   // One input: the curve over the scanned range with the band; several: partial curves.
   let fitCurve: FitCurveData | null = null;
@@ -213,7 +224,7 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     const swingCurve = swing?.curve ?? null;
     const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
     const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
-    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
+    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
     const others: Record<string, number> = {};
     inputs.forEach((name, k) => {
       if (k !== c) others[name] = chartNumber(medians[k]) ?? 0;
