@@ -78,6 +78,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     const detail = error instanceof Error ? error.message : String(error);
     return errorResult(descriptor.name, descriptor.file, new InputError(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
   }
+  const baseMatch = base?.matches.get(descriptor.file) ?? null;
   // The run's own passes already produced the folds, their factors and the cross-validation.
   const analyses = new ModelAnalyses(
     { design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit },
@@ -90,7 +91,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     metrics: model.metrics,
     train: model.tables.train,
     holdout: model.tables.holdout,
-    baseline: base?.models.get(descriptor.name) ?? null,
+    baseline: baseMatch?.model ?? null,
     analyses,
     predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
     shipped: model.shipped,
@@ -119,7 +120,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     coefficients: Array.from(model.fit.coefficients, jsonNumber),
     shipped: shippedMetrics(model.shipped),
     checks,
-    ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
+    ...(base ? { base: compareWithBase(metrics, baseMatch, base.commit) } : {}),
     error: null,
     extra: {
       rank_deficient: model.fit.rankDeficient,

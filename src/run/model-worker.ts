@@ -13,6 +13,7 @@
 import { fileURLToPath } from 'node:url';
 import { workerData } from 'node:worker_threads';
 import type { Descriptor, SettingsFile } from '../config/types.js';
+import type { BaseMatch } from './base-comparison.js';
 import { evaluateModel, type BaseInput } from './evaluate.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
@@ -33,8 +34,8 @@ interface ModelWorkerData {
 /** One model to evaluate. */
 interface ModelTask {
   descriptor: Descriptor;
-  /** The base commit's outcome of this model (null: new), or undefined when not comparing. */
-  baseline?: ModelResult | null;
+  /** The base model this model is compared with (null: new), or undefined when not comparing. */
+  baseline?: BaseMatch | null;
   commit?: string;
 }
 
@@ -90,7 +91,7 @@ export async function evaluateModels(
   }
   const base = options.base;
   const tasks: ModelTask[] = descriptors.map((descriptor) =>
-    base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor },
+    base ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : { descriptor },
   );
   const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
   // The worker checks the model's time limit itself between stages; a model still running
@@ -120,7 +121,7 @@ function startModelWorker(): void {
     const base: BaseInput | undefined =
       task.baseline === undefined
         ? undefined
-        : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
+        : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
     return evaluateModel(repo, task.descriptor, data.settings, base);
   });
 }

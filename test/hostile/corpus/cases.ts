@@ -32,6 +32,11 @@ export interface CorpusCase {
   words: string[];
   /** Expected verdicts of named models in the JSON report, when the run gets that far. */
   verdicts?: Record<string, string>;
+  /**
+   * The files of a base commit: the case is then a pull request against it (the CLI gets
+   * `--base HEAD`, the action a pull_request event). Default none.
+   */
+  base?: Record<string, FileSpec>;
 }
 
 const m = 'models/m.model.yml';
@@ -190,6 +195,30 @@ export const CASES: CorpusCase[] = [
     exit: 2,
     words: ['models/heavy.model.yml', 'time limit of 1 s', 'caps.max_model_seconds'],
     verdicts: { heavy: 'error', m: 'pass' },
+  },
+
+  // The base comparison cannot be dodged by renaming
+  {
+    id: 'base-rename-in-place',
+    about: 'a pull request that makes a model worse and renames it in its file, to escape base_change',
+    base: repo({ [m]: descriptor({ extra: 'limits:\n  base_change: 0.1\n' }) }),
+    files: repo({ [m]: descriptor({ name: 'm-renamed', extra: 'limits:\n  base_change: 0.1\n' }), [holdout]: rows(10, 0.5, 3).replace(/,([-\d.]+)\n/g, (_, y: string) => `,${(Number(y) + 3).toFixed(3)}\n`) }),
+    args: ['--base', 'HEAD'],
+    inputs: {},
+    exit: 1,
+    words: ['base-change', 'm-renamed is compared with m (models/m.model.yml) of the base commit, found by its descriptor path'],
+    verdicts: { 'm-renamed': 'fail' },
+  },
+  {
+    id: 'base-rename-and-move',
+    about: 'the same model renamed and moved to another descriptor file (found by its data files)',
+    base: repo({ [m]: descriptor({ extra: 'limits:\n  base_change: 0.1\n' }) }),
+    files: repo({ [m]: null, 'models/other.model.yml': descriptor({ name: 'other', extra: 'limits:\n  base_change: 0.1\n' }), [holdout]: rows(10, 0.5, 3).replace(/,([-\d.]+)\n/g, (_, y: string) => `,${(Number(y) + 3).toFixed(3)}\n`) }),
+    args: ['--base', 'HEAD'],
+    inputs: {},
+    exit: 1,
+    words: ['base-change', 'other is compared with m (models/m.model.yml) of the base commit, found by its data files'],
+    verdicts: { other: 'fail' },
   },
 
   // One bad model among good ones
