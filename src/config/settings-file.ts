@@ -20,11 +20,11 @@ export const DEFAULT_MODEL_PATTERNS: readonly string[] = Object.freeze(['**/*.mo
 export const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled' as FoldOrder, seed: 1, parameterCount: 'columns' as ParameterCount });
 
 /**
- * Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters, 4e10 estimated
- * operations per model (run/cost.ts; about 30 s on one core of a 2-core machine at the highest
- * estimate allowed) and 40 s per model.
+ * Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters, 2e10 estimated
+ * operations per model (run/cost.ts; at most about 20 to 30 s of one core of a 2-core machine,
+ * measured) and 40 s per model.
  */
-export const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000, maxOperations: 40_000_000_000, maxModelSeconds: 40 });
+export const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000, maxOperations: 20_000_000_000, maxModelSeconds: 40 });
 
 /** Stable codes of the errors this module throws (besides YAML and schema codes). */
 export const SETTINGS_ERROR = Object.freeze({ missing: 'file-missing', limitOrder: 'limit-order' });

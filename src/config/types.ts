@@ -130,7 +130,7 @@ export interface ResourceCaps {
   maxFileBytes: number;
   /** Largest training rows x parameters. Default 2e8. */
   maxCells: number;
-  /** Largest estimated work of one model, in operations (see run/cost.ts). Default 4e10. */
+  /** Largest estimated work of one model, in operations (see run/cost.ts). Default 2e10. */
   maxOperations: number;
   /** Time limit of one model in seconds (wall clock, files to last check). Default 40. */
   maxModelSeconds: number;

@@ -50,6 +50,12 @@ export const SOLVE_SVDS = 5;
  */
 export const LEVERAGE_OPERATIONS = 2;
 
+/**
+ * Operations per row of the leakage scan: two probes of hash tables of the hold-out rows, each
+ * a likely cache miss once the tables outgrow the cache (measured: about 200).
+ */
+export const LEAKAGE_ROW_OPERATIONS = 200;
+
 /** The sizes the estimate is made from. */
 export interface ModelShape {
   /** Training and hold-out rows. */
@@ -134,7 +140,7 @@ export function swingPoints(inputs: number, rows: number): number {
  *   hold-out rows m (b + p), shipped coefficients (n + m)(b + p);
  * - cross-validation solves: k ({@link SOLVE_SVDS} SVDs + p^3 / 3);
  * - swing scan: its points (b + p), the neighbour search 1000^2 d, the grid sorts;
- * - leakage: 4 (n + m) d; charts: curves of 401 points per input (at most 12);
+ * - leakage: (n + m)({@link LEAKAGE_ROW_OPERATIONS} + 4d); charts: curves of 401 points per input (at most 12);
  * - complexity sweep: a ridge sweep k SVDs and 2 L k p^2 for L penalties; a degree or width
  *   sweep, per setting of p_s columns on its n_s rows, n_s (2 b_s + p_s^2 + p_s) + 4 k p_s^3 +
  *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3).
@@ -159,7 +165,7 @@ export function estimateCost(shape: ModelShape): CostEstimate {
   const sorted = Math.min(n, SWING_DEFAULTS.maxGridRows);
   parts.push({ stage: 'swing scan', operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n), sizes: `${grid} points` });
   const curves = Math.min(d, MAX_PARTIAL_CURVES);
-  parts.push({ stage: 'leakage and charts', operations: 4 * (n + m) * d + curves * CURVE_POINTS * (b + p) + 4 * n * d, sizes: `${n} + ${m} rows x ${d} inputs` });
+  parts.push({ stage: 'leakage and charts', operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d, sizes: `${n} + ${m} rows x ${d} inputs` });
   parts.push(sweepPart(shape, k));
   return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
 }

@@ -13,7 +13,7 @@ describe('loadSettings', () => {
       models: ['**/*.model.yml'],
       limits: {},
       fit: { folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' },
-      caps: { maxFileBytes: 512 * 1024 * 1024, maxCells: 200_000_000, maxOperations: 40_000_000_000, maxModelSeconds: 40 },
+      caps: { maxFileBytes: 512 * 1024 * 1024, maxCells: 200_000_000, maxOperations: 20_000_000_000, maxModelSeconds: 40 },
     });
   });
 
