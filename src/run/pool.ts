@@ -9,9 +9,10 @@
  * other error comes back as an Error with the worker's message and stack. The first error
  * stops the pool (the other workers are terminated) and rejects the run.
  *
- * With a time limit, a task still running that long after it was handed to its worker has that
- * worker ended (`Worker.terminate`, which stops even a loop that never yields) and gets the
- * result `onTimeLimit` makes for it; a new worker takes over the tasks left.
+ * With a time limit, a task still running that long after its worker started it (a new worker
+ * first loads its script, which does not count) has that worker ended (`Worker.terminate`, which
+ * stops even a loop that never yields) and gets the result `onTimeLimit` makes for it; a new
+ * worker takes over the tasks left.
  */
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker } from 'node:worker_threads';
@@ -29,7 +30,7 @@ export interface PoolOptions {
 
 /** A per-task time limit of {@link runPool}. */
 export interface PoolTimeLimit<T, R> {
-  /** Milliseconds a task may run on its worker, counted from when it is handed over (> 0). */
+  /** Milliseconds a task may run on its worker, counted from when the worker starts it (> 0). */
   ms: number;
   /** The result of a task stopped at the limit (its worker is ended first). */
   onTimeLimit: (task: T, elapsedMs: number) => R;
@@ -50,8 +51,8 @@ interface ErrorData {
   location?: ErrorLocation;
 }
 
-/** What a worker sends back for a task. */
-type ReplyMessage<R> = { index: number; ok: true; value: R } | { index: number; ok: false; error: ErrorData };
+/** What a worker sends back for a task: that it started it, then its value or its error. */
+type ReplyMessage<R> = { index: number; started: true } | { index: number; ok: true; value: R } | { index: number; ok: false; error: ErrorData };
 
 /** The number of workers to use by default: the cores Node may use (os.availableParallelism()). */
 export function defaultJobs(): number {
@@ -121,11 +122,8 @@ export function runPool<T, R>(tasks: readonly T[], options: PoolOptions, limit?:
       const feed = (): void => {
         if (next >= tasks.length) return;
         current = next++;
-        since = performance.now();
         const message: TaskMessage<T> = { index: current, task: tasks[current] };
         worker.postMessage(message);
-        // Unreferenced: a timer alone never keeps the process running (its worker does, while busy).
-        if (limit !== undefined) timer = setTimeout(expire, limit.ms).unref();
       };
       const expire = (): void => {
         if (settled || limit === undefined || current < 0) return;
@@ -138,6 +136,12 @@ export function runPool<T, R>(tasks: readonly T[], options: PoolOptions, limit?:
       };
       worker.on('message', (reply: ReplyMessage<R>) => {
         if (settled || !workers.has(worker) || reply.index !== current) return;
+        if ('started' in reply) {
+          since = performance.now();
+          // Unreferenced: a timer alone never keeps the process running (its worker does, while busy).
+          if (limit !== undefined) timer = setTimeout(expire, limit.ms).unref();
+          return;
+        }
         clearTimeout(timer);
         current = -1;
         if (!reply.ok) return failWith(revive(reply.error));
@@ -165,6 +169,8 @@ export function serveTasks<T, R>(handle: (task: T) => Promise<R> | R): void {
   if (isMainThread || parentPort === null) return;
   const port = parentPort;
   port.on('message', (message: TaskMessage<T>) => {
+    // Posted before the task runs, so the pool's clock starts even if the task never yields.
+    port.postMessage({ index: message.index, started: true } satisfies ReplyMessage<R>);
     Promise.resolve()
       .then(() => handle(message.task))
       .then(

@@ -186,14 +186,14 @@ export const CASES: CorpusCase[] = [
   },
   {
     id: 'time-limit',
-    about: 'a model of minutes of work (its estimate let through) under a 1 s time limit, beside a small one',
+    about: 'a model of minutes of work (its estimate let through) under a 4 s time limit, beside a small one',
     files: repo({
-      [settings]: `${SETTINGS}caps:\n  max_model_seconds: 1\n  max_operations: 1e15\n`,
+      [settings]: `${SETTINGS}caps:\n  max_model_seconds: 4\n  max_operations: 1e15\n`,
       'data/big.csv': { make: () => rows(60_000, 0, 0.0005) },
       'models/heavy.model.yml': descriptor({ name: 'heavy', train: '../data/big.csv', terms: '  - rbf: { of: x, centers: { from: 0, to: 30, count: 150 }, width: 0.05 }\n' }),
     }),
     exit: 2,
-    words: ['models/heavy.model.yml', 'time limit of 1 s', 'caps.max_model_seconds'],
+    words: ['models/heavy.model.yml', 'time limit of 4 s', 'caps.max_model_seconds'],
     verdicts: { heavy: 'error', m: 'pass' },
   },
 
