@@ -14,7 +14,8 @@ import { defaultJobs } from './run/pool.js';
 import { isFitgateWorker } from './run/worker-role.js';
 import { runPipeline } from './run/pipeline.js';
 import { createFsRepository } from './repo/fs-repository.js';
-import { formatJson } from './report/json.js';
+import { writeReportStream } from './entries/report-file.js';
+import { jsonReport } from './report/json.js';
 import { escapeTerminal } from './report/escape.js';
 import { neutraliseLog, neutraliseLogLine } from './report/runner-commands.js';
 import { formatText } from './report/text.js';
@@ -76,13 +77,14 @@ async function main(argv: string[]): Promise<number> {
     const toFile = parsed.out !== null;
     const color = parsed.color ?? (!toFile && process.stdout.isTTY === true && !process.env.NO_COLOR);
     // Each format keeps runner commands out of its lines (the text and JSON reporters do it
-    // themselves), so the report is safe to print in a CI step.
-    const text =
+    // themselves), so the report is safe to print in a CI step. The JSON report comes in pieces (one
+    // model at a time), so that a run of any size is written without being one string.
+    const pieces: Iterable<string> =
       parsed.format === 'json'
-        ? formatJson(result)
+        ? jsonReport(result)
         : parsed.format === 'markdown'
-          ? neutraliseLog((await import('./report/markdown.js')).formatMarkdown(result))
-          : formatText(result, { color, verbose: parsed.verbose });
+          ? [neutraliseLog((await import('./report/markdown.js')).formatMarkdown(result))]
+          : [formatText(result, { color, verbose: parsed.verbose })];
     // Where files may go: a path named inside the repository root or the working directory must
     // really stay inside it; a report that cannot be written does not stop the others.
     const cwd = process.cwd();
@@ -90,11 +92,11 @@ async function main(argv: string[]): Promise<number> {
     const failures: string[] = [];
     if (parsed.out !== null) {
       try {
-        writeFileSafely(parsed.out, text, { option: '--out', within });
+        writeFileSafely(parsed.out, pieces, { option: '--out', within });
       } catch (error) {
         failures.push(errorMessage(error));
       }
-    } else process.stdout.write(text);
+    } else await writeReportStream(process.stdout, pieces);
     // SARIF paths are relative to the working directory when the root lies inside it (code
     // scanning reads them from the checkout); merged shard reports run from the root.
     const prefix = parsed.kind === 'check' ? path.relative(cwd, parsed.settings.root).split(path.sep).join('/') : '';

@@ -7,6 +7,8 @@
 import { realpath } from 'node:fs/promises';
 import path from 'node:path';
 import { errorMessage } from '../core/errors.js';
+import type { Descriptor } from '../config/types.js';
+import { dataKey } from '../run/base-comparison.js';
 import { runPipeline, type PipelineOptions } from '../run/pipeline.js';
 import { createGitRepository, tryGitTopLevel, tryResolveCommit } from '../repo/git-repository.js';
 import type { ModelResult } from '../result/result.js';
@@ -26,8 +28,9 @@ export const ACTION_FETCH_HINT =
 export const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`) or name a commit that exists locally. Models are not compared with a base in this run.';
 
 /**
- * The head run's options from the base commit: the baseline by model name and the base SHA, or
- * one note saying why there is no comparison.
+ * The head run's options from the base commit: the baseline by model name with each base model's
+ * data files (to match renamed models) and the base SHA, or one note saying why there is no
+ * comparison.
  * @param settings the head run's settings (the same settings file path and descriptors are read at the base)
  * @param revision the base commit: a SHA or any revision git understands
  * @param options the hint shown when git does not have the commit
@@ -46,14 +49,19 @@ export async function evaluateBase(settings: Settings, revision: string, options
     const descriptors: string[] = [];
     for (const d of settings.descriptors) if (await repo.isFile(d)) descriptors.push(d);
     const baseline = new Map<string, ModelResult>();
+    const baselineData = new Map<string, string>();
     if (settings.descriptors.length === 0 || descriptors.length > 0) {
       const configThere = await repo.isFile(settings.config);
       if (configThere || !settings.configExplicit) {
-        const base = await runPipeline({ ...settings, descriptors }, repo);
+        // The data files of each base model, to find it again when a pull request renames and moves it.
+        const onDescriptors = (loaded: readonly Descriptor[]): void => {
+          for (const d of loaded) baselineData.set(d.name, dataKey(d));
+        };
+        const base = await runPipeline({ ...settings, descriptors }, repo, { onDescriptors });
         for (const m of base.models) baseline.set(m.name, m);
       }
     }
-    return { baseline, baseCommit: sha, notes: [] };
+    return { baseline, baselineData, baseCommit: sha, notes: [] };
   } catch (error) {
     return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${errorMessage(error)}); models are not compared with it in this run.`] };
   }

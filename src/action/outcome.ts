@@ -3,7 +3,7 @@
  * failure message. The decision itself is {@link exitStatus}, shared with the CLI.
  */
 import path from 'node:path';
-import { formatJson } from '../report/json.js';
+import { jsonReport } from '../report/json.js';
 import { exitStatus, type Result } from '../result/result.js';
 import { writeFileSafely } from '../entries/safe-write.js';
 
@@ -51,13 +51,13 @@ export function failureMessage(result: Result, failOn: 'fail' | 'warn'): string 
  * `fitgate-report-<step>.json` when `GITHUB_ACTION` names the step (several steps in one job).
  * Written with {@link writeFileSafely}: never through a link, atomically.
  * @param result the run's Result
- * @param dir folder to write in (`RUNNER_TEMP`; created when missing)
+ * @param dir folder to write in (created when missing); the report is written piece by piece, atomically
  * @param step the step's id (`GITHUB_ACTION`), or undefined
  * @throws InputError naming `RUNNER_TEMP` when the file is refused or cannot be written
  */
 export async function writeReport(result: Result, dir: string, step: string | undefined): Promise<string> {
   const slug = (step ?? '').replace(/[^A-Za-z0-9_.-]+/g, '-').replace(/^[-.]+/, '');
   const file = path.join(dir, slug === '' ? 'fitgate-report.json' : `fitgate-report-${slug}.json`);
-  writeFileSafely(file, formatJson(result), { option: 'RUNNER_TEMP', within: [] });
+  writeFileSafely(file, jsonReport(result), { option: 'RUNNER_TEMP', within: [] });
   return file;
 }

@@ -7,6 +7,7 @@
 import type { ErrorObject } from 'ajv/dist/2020.js';
 import { InputError, quoteValue, clip } from '../core/errors.js';
 import { nearestWord } from '../core/nearest.js';
+import { maxOf } from '../core/extremes.js';
 import type { Position } from './types.js';
 import type { YamlDocument } from './yaml-source.js';
 
@@ -117,7 +118,7 @@ function resolveAlternatives(errors: ErrorObject[]): ErrorObject[] {
   const matchingType = [...branches.entries()].filter(
     ([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')),
   );
-  const score = (list: ErrorObject[]): [number, number] => [Math.max(...list.map((e) => effectiveDepth(e))), -list.length];
+  const score = (list: ErrorObject[]): [number, number] => [maxOf(list.map((e) => effectiveDepth(e))), -list.length];
   let best: ErrorObject[] | null = null;
   let tie = false;
   for (const [, list] of matchingType) {

@@ -21,8 +21,12 @@ export const DEFAULT_MODEL_PATTERNS: readonly string[] = Object.freeze(['**/*.mo
 /** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
 export const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled' as FoldOrder, seed: 1, parameterCount: 'columns' as ParameterCount });
 
-/** Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters. */
-export const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000 });
+/**
+ * Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters, 2e10 estimated
+ * operations per model (run/cost.ts; at most about 20 to 30 s of one core of a 2-core machine,
+ * measured) and 40 s per model.
+ */
+export const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000, maxOperations: 20_000_000_000, maxModelSeconds: 40 });
 
 /** Stable codes of the errors this module throws (besides YAML and schema codes). */
 export const SETTINGS_ERROR = Object.freeze({ missing: 'file-missing', limitOrder: 'limit-order' });
@@ -47,7 +51,7 @@ export function defaultSettings(): SettingsFile {
     models: [...DEFAULT_MODEL_PATTERNS],
     limits: {},
     fit: { ...DEFAULT_FIT },
-    caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells },
+    caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells, maxOperations: DEFAULT_CAPS.maxOperations, maxModelSeconds: DEFAULT_CAPS.maxModelSeconds },
   };
 }
 
@@ -122,6 +126,8 @@ export function settingsFromDocument(doc: YamlDocument, file: string): SettingsF
     caps: {
       maxFileBytes: Math.round((raw.caps?.max_file_mb ?? DEFAULT_CAPS.maxFileMb) * MIB),
       maxCells: raw.caps?.max_cells ?? DEFAULT_CAPS.maxCells,
+      maxOperations: raw.caps?.max_operations ?? DEFAULT_CAPS.maxOperations,
+      maxModelSeconds: raw.caps?.max_model_seconds ?? DEFAULT_CAPS.maxModelSeconds,
     },
   };
   if (raw.models) modelLines.set(settings, raw.models.map((_, i) => doc.positionOf(['models', i])?.line ?? 1));
@@ -158,5 +164,5 @@ interface RawSettings {
   models?: string[];
   limits?: Record<string, LimitSpec>;
   fit?: { folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount };
-  caps?: { max_file_mb?: number; max_cells?: number };
+  caps?: { max_file_mb?: number; max_cells?: number; max_operations?: number; max_model_seconds?: number };
 }

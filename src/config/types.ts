@@ -189,7 +189,7 @@ export interface FitSpec {
   refit?: boolean;
   /** L2 penalty on every coefficient but the intercept. Default 0 (least squares). */
   ridge: number;
-  /** k of k-fold cross-validation. Default 5. */
+  /** k of k-fold cross-validation, 2 to 50 (the schemas' bound). Default 5. */
   folds: number;
   /** Fold assignment. Default `shuffled` (from `seed`). */
   foldOrder: FoldOrder;
@@ -258,6 +258,10 @@ export interface ResourceCaps {
   maxFileBytes: number;
   /** Largest training rows x parameters. Default 2e8. */
   maxCells: number;
+  /** Largest estimated work of one model, in operations (see run/cost.ts). Default 2e10. */
+  maxOperations: number;
+  /** Time limit of one model in seconds (wall clock, files to last check). Default 40. */
+  maxModelSeconds: number;
 }
 
 /** The repository settings file after validation. */

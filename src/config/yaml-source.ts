@@ -290,7 +290,7 @@ function firstAlias(root: unknown): number | null {
     } else if (isMap(node)) {
       for (const pair of node.items) stack.push(pair.key, pair.value);
     } else if (isSeq(node)) {
-      stack.push(...node.items);
+      for (const item of node.items) stack.push(item);
     }
   }
   return best;

@@ -43,7 +43,7 @@ export function createDesign(terms: readonly Term[], intercept: boolean): Design
   const offsets: number[] = [];
   for (const t of terms) {
     offsets.push(names.length);
-    names.push(...t.columnNames);
+    for (const name of t.columnNames) names.push(name);
   }
   const p = names.length;
   const penalised = names.map((_, j) => !(intercept && j === 0));

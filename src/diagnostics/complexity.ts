@@ -12,6 +12,7 @@ import { solveCoefficients, type FitResult, type QrAccumulator } from '../fit/in
 import { ridgePath } from '../fit/ridge-path.js';
 import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds, type FoldFactors, type Rows } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
+import { checkDeadline } from '../core/deadline.js';
 
 /** A point of a cross-validation curve, in order of increasing complexity. */
 export interface CurvePoint {
@@ -84,7 +85,7 @@ export interface Sweep {
 export interface SweepOptions {
   /** Degree and width sweeps: subsample rows above this count (even stride through the file). Default {@link SWEEP_MAX_ROWS}. */
   maxRows?: number;
-  /** Highest polynomial degree tried. Default 15. */
+  /** Highest polynomial degree tried. Default {@link SWEEP_MAX_DEGREE}. */
   maxDegree?: number;
   /**
    * The fold factors of `train` under the model's own folds (`fit.folds`, `fit.fold_order`,
@@ -157,6 +158,51 @@ function changedSpec(spec: TermSpec, kind: SweepKind, value: number): TermSpec {
  */
 export const SWEEP_MAX_ROWS = 50000;
 
+/** Highest polynomial degree a degree sweep tries (a current degree above it is tried too). */
+export const SWEEP_MAX_DEGREE = 15;
+
+/** A degree sweep tries degrees 1 .. min(current + this, {@link SWEEP_MAX_DEGREE}). */
+export const SWEEP_DEGREES_ABOVE = 3;
+
+/** A width sweep tries the current width times 2^t for these t, widest (simplest) first. */
+export const SWEEP_WIDTH_EXPONENTS: readonly number[] = Object.freeze([4, 3, 2, 1, 0, -1, -2]);
+
+/** A ridge sweep tries s x 10^t for these t, largest (simplest) first, plus the current lambda. */
+export const SWEEP_RIDGE_EXPONENTS: readonly number[] = Object.freeze(Array.from({ length: 19 }, (_, i) => 3 - i / 2));
+
+/** The degrees a degree sweep tries for a term of this degree (ascending: simplest first). */
+export function sweepDegrees(degree: number, maxDegree = SWEEP_MAX_DEGREE): number[] {
+  const top = Math.max(degree, Math.min(degree + SWEEP_DEGREES_ABOVE, maxDegree));
+  return Array.from({ length: top }, (_, g) => g + 1);
+}
+
+/** What a sweep will fit, known before any pass over the rows (for the cost estimate, run/cost.ts). */
+export interface SweepShape {
+  kind: SweepKind;
+  /** Rows each setting is cross-validated on (a degree or width sweep subsamples above `maxRows`). */
+  rows: number;
+  /** Design columns of each setting, simplest first (ridge: at most this many penalties, all of p columns). */
+  parameters: number[];
+}
+
+/**
+ * The settings a sweep of this model tries and their sizes, as {@link sweepComplexity} runs them.
+ * @param descriptor the model
+ * @param design its design
+ * @param rows training rows
+ * @param options the row cap and highest degree, as for the sweep
+ * @returns null when the model has no setting to sweep or fewer than 2 rows
+ */
+export function sweepShape(descriptor: Descriptor, design: Design, rows: number, options: Pick<SweepOptions, 'maxRows' | 'maxDegree'> = {}): SweepShape | null {
+  const target = sweepTarget(descriptor, design);
+  if (target === null || rows < 2) return null;
+  if (target.kind === 'ridge') return { kind: 'ridge', rows, parameters: Array.from({ length: SWEEP_RIDGE_EXPONENTS.length + 1 }, () => design.p) };
+  const used = Math.min(rows, options.maxRows ?? SWEEP_MAX_ROWS);
+  if (target.kind === 'width') return { kind: 'width', rows: used, parameters: SWEEP_WIDTH_EXPONENTS.map(() => design.p) };
+  const degree = (design.terms[target.term].spec as PolynomialTermSpec).degree;
+  return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
+}
+
 /** Every other row at an even stride, as new columns. */
 function subsample(data: Rows, m: number): Rows {
   const n = data.rows;
@@ -177,6 +223,7 @@ function sweepCoefficients(complements: readonly QrAccumulator[], lambdas: reado
   const coefficients = lambdas.map(() => new Array<Float64Array>(complements.length));
   const positive = lambdas.filter((l) => l > 0);
   complements.forEach((acc, f) => {
+    checkDeadline('complexity sweep');
     const path = ridgePath(acc, positive, penalised);
     let next = 0;
     lambdas.forEach((lambda, s) => {
@@ -234,8 +281,7 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
     for (let k = 0; k < p * p; k++) trace += R[k] * R[k];
     trace -= ridge * fit.penalised.filter(Boolean).length;
     const scale = trace / Math.max(1, p);
-    const grid: number[] = [];
-    for (let t = 3; t >= -6; t -= 0.5) grid.push(scale * 10 ** t);
+    const grid = SWEEP_RIDGE_EXPONENTS.map((t) => scale * 10 ** t);
     const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
     let factors: FoldFactors;
     if (options.factors) {
@@ -264,6 +310,7 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
       settings.push(...countSettings(spec));
     }
     for (const { value, current } of settings) {
+      checkDeadline('complexity sweep');
       const label = `${target.kind} ${formatSetting(value)}`;
       let d: Design;
       try {

@@ -9,6 +9,7 @@ import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from 
 import { forEachBlock } from '../design/blocks.js';
 import { addProducts, outOfFoldRows } from '../kernels/index.js';
 import type { Folds } from './folds.js';
+import { checkDeadline } from '../core/deadline.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
 export type Rows = Pick<ModelData, 'inputs' | 'y' | 'rows'>;
@@ -101,7 +102,10 @@ function oneFold(foldOf: Int32Array, start: number, m: number): boolean {
  */
 export function foldFactors(design: Design, data: Rows, folds: Folds): QrAccumulator[] {
   const builder = new FoldFactorBuilder(design.p, folds);
-  forEachBlock(design, data, (X, start, m) => builder.add(X, data.y, start, m));
+  forEachBlock(design, data, (X, start, m) => {
+    checkDeadline('fold factors');
+    builder.add(X, data.y, start, m);
+  });
   return builder.factors;
 }
 
@@ -132,6 +136,7 @@ export function complementFactors(factors: readonly QrAccumulator[]): QrAccumula
   const p = factors[0].p;
   const prefix: QrAccumulator[] = [new QrAccumulator(p)];
   for (let f = 1; f < k; f++) {
+    checkDeadline('fold merges');
     const next = prefix[f - 1].clone();
     next.merge(factors[f - 1]);
     prefix.push(next);
@@ -139,6 +144,7 @@ export function complementFactors(factors: readonly QrAccumulator[]): QrAccumula
   const out: QrAccumulator[] = new Array<QrAccumulator>(k);
   let suffix = new QrAccumulator(p);
   for (let f = k - 1; f >= 0; f--) {
+    checkDeadline('fold merges');
     const without = prefix[f];
     if (suffix.rows > 0) without.merge(suffix);
     out[f] = without;
@@ -230,6 +236,7 @@ export function outOfFoldErrors(
     return t;
   });
   forEachBlock(design, data, (X, start, m) => {
+    checkDeadline('out-of-fold scoring');
     // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
     const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
     const folds = foldOf.subarray(start, start + m);
@@ -280,7 +287,12 @@ export function complementCoefficients(
   ridges: readonly number[],
   penalised: ArrayLike<boolean>,
 ): Float64Array[][] {
-  return ridges.map((ridge) => complements.map((acc) => solveCoefficients(acc, { ridge, penalised })));
+  return ridges.map((ridge) =>
+    complements.map((acc) => {
+      checkDeadline('fold solves');
+      return solveCoefficients(acc, { ridge, penalised });
+    }),
+  );
 }
 
 /** Every cross-validation figure of one fit. */

@@ -49,15 +49,32 @@ function sameInputs(a: readonly Float64Array[], i: number, b: readonly Float64Ar
   return true;
 }
 
+/** Hash of row i's inputs and target (the target folded into {@link rowHash} of the inputs). */
+function rowTargetHash(inputHash: number, y: Float64Array, i: number): number {
+  f64[0] = y[i] + 0;
+  return mix32(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
+}
+
 /**
- * Hash table of rows by open addressing with linear probing over typed arrays: slot -> (hash,
- * first row), rows with the same hash chained through `next`. No Map, no per-row objects.
+ * Hash table of distinct hold-out rows by open addressing with linear probing over typed arrays:
+ * slot -> (hash, first distinct row), distinct rows with the same hash chained through `next`.
+ * A row equal to one already in the table is not chained: `repOf` names that first row, so every
+ * lookup compares with distinct rows only and the work stays linear however many rows repeat.
+ * No Map, no per-row objects.
  */
 interface RowTable {
   mask: number;
   slotHash: Uint32Array;
   slotHead: Int32Array;
   next: Int32Array;
+  /** repOf[r]: the first hold-out row (in file order) equal to row r (r itself when it is the first). */
+  repOf: Int32Array;
+}
+
+function newTable(rows: number): RowTable {
+  let size = 1024;
+  while (size < 2 * rows) size *= 2;
+  return { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(rows).fill(-1), repOf: new Int32Array(rows) };
 }
 
 /** The slot of `hash`: where it is, or the empty slot where it goes. */
@@ -68,69 +85,90 @@ function findSlot(table: RowTable, hash: number): number {
   return s;
 }
 
-// The two passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+// The passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
 
-/** Puts rows 0..n-1 in the table, so that each chain lists its rows in file order. */
-function indexRows(table: RowTable, inputs: readonly Float64Array[], n: number): void {
-  for (let r = n - 1; r >= 0; r--) {
-    const hash = rowHash(inputs, r);
-    const s = findSlot(table, hash);
-    table.next[r] = table.slotHead[s];
-    table.slotHash[s] = hash;
-    table.slotHead[s] = r;
+/**
+ * Puts the hold-out rows in the tables in file order: `inputs` by their inputs, `full` by their
+ * inputs and target; a row equal to an earlier one only records that row in `repOf`.
+ */
+function indexRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'inputs' | 'y' | 'rows'>): void {
+  for (let r = 0; r < holdout.rows; r++) {
+    const hash = rowHash(holdout.inputs, r);
+    let s = findSlot(inputs, hash);
+    let q = inputs.slotHead[s];
+    while (q >= 0 && !sameInputs(holdout.inputs, q, holdout.inputs, r)) q = inputs.next[q];
+    if (q >= 0) inputs.repOf[r] = q;
+    else {
+      inputs.repOf[r] = r;
+      inputs.next[r] = inputs.slotHead[s];
+      inputs.slotHash[s] = hash;
+      inputs.slotHead[s] = r;
+    }
+    const hashY = rowTargetHash(hash, holdout.y, r);
+    s = findSlot(full, hashY);
+    q = full.slotHead[s];
+    while (q >= 0 && !(holdout.y[q] === holdout.y[r] && sameInputs(holdout.inputs, q, holdout.inputs, r))) q = full.next[q];
+    if (q >= 0) full.repOf[r] = q;
+    else {
+      full.repOf[r] = r;
+      full.next[r] = full.slotHead[s];
+      full.slotHash[s] = hashY;
+      full.slotHead[s] = r;
+    }
   }
 }
 
 /**
- * Streams the training rows past the table of hold-out rows in file order: firstMatch[r] receives
- * the first training row whose inputs equal hold-out row r's, targetToo[r] = 1 when some such row
- * has its target too.
+ * Streams the training rows past the tables of distinct hold-out rows in file order:
+ * firstMatch[q] receives the first training row whose inputs equal those of distinct row q,
+ * targetToo[q] = 1 when some training row has its inputs and its target.
  */
-function matchRows(table: RowTable, holdout: Pick<ModelData, 'inputs' | 'y'>, train: Pick<ModelData, 'inputs' | 'y' | 'rows'>, firstMatch: Int32Array, targetToo: Uint8Array): void {
+function matchRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'inputs' | 'y'>, train: Pick<ModelData, 'inputs' | 'y' | 'rows'>, firstMatch: Int32Array, targetToo: Uint8Array): void {
   for (let i = 0; i < train.rows; i++) {
-    let r = table.slotHead[findSlot(table, rowHash(train.inputs, i))];
-    while (r >= 0) {
-      if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-        if (firstMatch[r] < 0) firstMatch[r] = i;
-        if (holdout.y[r] === train.y[i]) targetToo[r] = 1;
-      }
-      r = table.next[r];
-    }
+    const hash = rowHash(train.inputs, i);
+    let q = inputs.slotHead[findSlot(inputs, hash)];
+    while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i)) q = inputs.next[q];
+    if (q < 0) continue;
+    if (firstMatch[q] < 0) firstMatch[q] = i;
+    q = full.slotHead[findSlot(full, rowTargetHash(hash, train.y, i))];
+    while (q >= 0 && !(holdout.y[q] === train.y[i] && sameInputs(holdout.inputs, q, train.inputs, i))) q = full.next[q];
+    if (q >= 0) targetToo[q] = 1;
   }
 }
 
 /**
  * Finds hold-out rows equal to a training row in every input column of the model (values compared
  * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
- * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
- * hold-out rows (typed arrays, about 20 bytes per row).
+ * Cost: one pass over each file plus exact comparisons on hash hits, against distinct hold-out
+ * rows only (so repeated rows in both files stay linear); memory two hash tables of the hold-out
+ * rows (typed arrays, about 40 bytes per row).
  *
  * @param train training rows (inputs in the model's order, targets, lines)
  * @param holdout hold-out rows (same input order)
  */
 export function findLeakage(train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>, holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>): Leakage {
   const columns = train.inputs.length;
-  // A hash table of the hold-out rows (the smaller file, usually); the training rows then stream
-  // past it in file order, so each hold-out row's first match is the earliest training row.
+  // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
+  // stream past them in file order, so each hold-out row's first match is the earliest training row.
   const h = holdout.rows;
-  let size = 1024;
-  while (size < 2 * h) size *= 2;
-  const table: RowTable = { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(h).fill(-1) };
-  indexRows(table, holdout.inputs, h);
+  const byInputs = newTable(h);
+  const byRow = newTable(h);
+  indexRows(byInputs, byRow, holdout);
   const firstMatch = new Int32Array(h).fill(-1);
   const targetToo = new Uint8Array(h);
-  if (h > 0) matchRows(table, holdout, train, firstMatch, targetToo);
+  if (h > 0) matchRows(byInputs, byRow, holdout, train, firstMatch, targetToo);
   let inputMatches = 0;
   let fullMatches = 0;
   const holdoutLines: number[] = [];
   const trainLines: number[] = [];
   for (let r = 0; r < h; r++) {
-    if (firstMatch[r] < 0) continue;
+    const first = firstMatch[byInputs.repOf[r]];
+    if (first < 0) continue;
     inputMatches++;
-    if (targetToo[r] === 1) fullMatches++;
+    if (targetToo[byRow.repOf[r]] === 1) fullMatches++;
     if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
       holdoutLines.push(holdout.lines[r]);
-      trainLines.push(train.lines[firstMatch[r]]);
+      trainLines.push(train.lines[first]);
     }
   }
   return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };

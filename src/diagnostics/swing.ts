@@ -10,6 +10,7 @@ import { columnMedian, selectKth } from './column-median.js';
 import { range } from '../design/stats.js';
 import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
+import { checkDeadline } from '../core/deadline.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -37,9 +38,36 @@ export interface SwingOptions {
   neighbours?: number;
   /** Several inputs: points inside each segment. Default 8. */
   segmentPoints?: number;
-  /** Points kept per curve in the result (thinning keeps each curve's extremes). Default 400. */
+  /**
+   * Points kept per curve in the result (thinning keeps each curve's extremes). Default 400, fewer
+   * when more than 2 curves are kept, so that all curves together hold at most
+   * {@link SWING_CURVE_NUMBERS} points (at least {@link SWING_MIN_CURVE_POINTS} each).
+   */
   maxCurvePoints?: number;
+  /** Curves kept in the result: those of the first inputs (every input is scanned). Default 12. */
+  maxCurves?: number;
 }
+
+/** The defaults of {@link SwingOptions}, one place for the scan and for the cost estimate (run/cost.ts). */
+export const SWING_DEFAULTS = Object.freeze({
+  perGap: 8,
+  uniform: 201,
+  margin: 0.1,
+  marginPoints: 40,
+  maxGaps: 4000,
+  maxGridRows: 20_000,
+  maxRows: 1000,
+  neighbours: 3,
+  segmentPoints: 8,
+  maxCurvePoints: 400,
+  maxCurves: 12,
+});
+
+/** Points of all kept curves together, at most (each curve is thinned to its share; 400 each up to 2 inputs). */
+export const SWING_CURVE_NUMBERS = 800;
+
+/** Fewest points a kept curve is thinned to. */
+export const SWING_MIN_CURVE_POINTS = 100;
 
 /** One curve for charts: predictions along one input, the other inputs held at their medians. */
 export interface SwingCurve {
@@ -78,7 +106,7 @@ export interface Swing {
   /** Where the largest excursion inside and beyond happened (null when no points). */
   worstInside: SwingPoint | null;
   worstBeyond: SwingPoint | null;
-  /** One curve per input (with a spread). */
+  /** One curve per input with a spread, for the first {@link SwingOptions.maxCurves} such inputs. */
   curves: SwingCurve[];
   /** Several inputs: sampled rows and neighbours used for the segments; null for one input. */
   segments: { rows: number; neighbours: number; pointsPerSegment: number } | null;
@@ -120,11 +148,11 @@ export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {})
  * array is overwritten (its distinct values are packed to the front).
  */
 function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions, work?: Float64Array): { inside: Float64Array; beyond: Float64Array } {
-  const perGap = options.perGap ?? 8;
-  const uniform = options.uniform ?? 201;
-  const margin = options.margin ?? 0.1;
-  const marginPoints = options.marginPoints ?? 40;
-  const maxGaps = options.maxGaps ?? 4000;
+  const perGap = options.perGap ?? SWING_DEFAULTS.perGap;
+  const uniform = options.uniform ?? SWING_DEFAULTS.uniform;
+  const margin = options.margin ?? SWING_DEFAULTS.margin;
+  const marginPoints = options.marginPoints ?? SWING_DEFAULTS.marginPoints;
+  const maxGaps = options.maxGaps ?? SWING_DEFAULTS.maxGaps;
   const count = packDistinct(sorted, n);
   const distinct = sorted.subarray(0, count);
   if (count < 2) return { inside: new Float64Array(0), beyond: new Float64Array(0) };
@@ -385,6 +413,8 @@ export interface SwingPlan {
   segments: Swing['segments'];
   margin: number;
   maxCurvePoints: number;
+  /** Curves kept (those of the first grids). */
+  maxCurves: number;
 }
 
 /**
@@ -445,7 +475,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   const medians = train.inputs.map((col) => columnMedian(col, n, scratch));
   const radixScratch = new Uint32Array(2 * n);
   const grids: SwingGrid[] = [];
-  const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
+  const gridOptions: SwingOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
   for (let c = 0; c < d; c++) {
     // A category input takes only its level codes: scanned level by level, no margins.
     const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
@@ -453,7 +483,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       if (discrete.length >= 2) grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
       continue;
     }
-    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
+    const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
     const sample = scratch.subarray(0, len);
     // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
     const onScale = inputScaleOf(design, c);
@@ -470,9 +500,9 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
   let segments: Swing['segments'] = null;
   let segmentColumns: Float64Array[] | null = null;
   if (d >= 2 && n >= 2) {
-    const maxRows = options.maxRows ?? 1000;
-    const kNear = options.neighbours ?? 3;
-    const perSegment = options.segmentPoints ?? 8;
+    const maxRows = options.maxRows ?? SWING_DEFAULTS.maxRows;
+    const kNear = options.neighbours ?? SWING_DEFAULTS.neighbours;
+    const perSegment = options.segmentPoints ?? SWING_DEFAULTS.segmentPoints;
     const s = Math.min(n, maxRows);
     const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
     const flat = scaledRows(train.inputs, rows);
@@ -481,7 +511,9 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     if (pairs.length > 0 && perSegment > 0) segmentColumns = admittedRows(design, segmentPoints(train.inputs, pairs, perSegment));
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
-  return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+  const maxCurves = options.maxCurves ?? SWING_DEFAULTS.maxCurves;
+  const maxCurvePoints = options.maxCurvePoints ?? Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
+  return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? SWING_DEFAULTS.margin, maxCurvePoints, maxCurves };
 }
 
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
@@ -563,11 +595,13 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
   };
   const curves: SwingCurve[] = [];
   for (const grid of plan.grids) {
+    checkDeadline('swing scan');
     const c = grid.input;
     const along = (xs: Float64Array): Float64Array[] => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
     const predict = predictorAlong(design, coefficients, c, medians);
     const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
     const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+    if (curves.length >= plan.maxCurves) continue;
     // Curve for charts: all points ascending, thinned with the extremes kept.
     const xs = new Float64Array(grid.inside.length + grid.beyond.length);
     const ps = new Float64Array(xs.length);

@@ -11,6 +11,7 @@ import path from 'node:path';
 import { parseArgs as tokenize } from 'node:util';
 import { clip, InputError, quoteValue } from '../core/errors.js';
 import { realFolder } from '../repo/real-folder.js';
+import { maxOf } from '../core/extremes.js';
 import type { Settings } from '../run/settings.js';
 import { parseShard, type Shard, MAX_SHARDS } from '../run/shard.js';
 import { VERSION } from '../core/version.js';
@@ -440,7 +441,10 @@ function commandHelp(command: CommandSpec): string {
 /** A help page: the usage line, the wrapped description, then each titled section as a table. */
 function helpPage(usage: string, description: string, sections: ReadonlyArray<readonly [string, ReadonlyArray<readonly [string, string]>]>): string {
   const lines = [`Usage: ${usage}`, '', ...wrap(description, HELP_WIDTH)];
-  for (const [title, rows] of sections) lines.push('', `${title}:`, ...table(rows));
+  for (const [title, rows] of sections) {
+    lines.push('', `${title}:`);
+    for (const line of table(rows)) lines.push(line);
+  }
   return [...lines, ''].join('\n');
 }
 
@@ -450,7 +454,7 @@ function argumentUsage(command: CommandSpec): string {
 
 /** Two columns: names padded to the widest, descriptions wrapped beside them. */
 function table(rows: ReadonlyArray<readonly [string, string]>): string[] {
-  const indent = 2 + Math.max(...rows.map(([name]) => name.length)) + 2;
+  const indent = 2 + maxOf(rows.map(([name]) => name.length)) + 2;
   return rows.flatMap(([name, text]) => wrap(text, HELP_WIDTH - indent).map((line, i) => (i === 0 ? `  ${name.padEnd(indent - 4)}  ${line}` : `${' '.repeat(indent)}${line}`)));
 }
 

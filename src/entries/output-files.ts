@@ -1,13 +1,13 @@
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
  * and the action; the reporters only format, this module only writes, each file through
- * {@link writeFileSafely} (never through a link, atomically).
+ * {@link writeFileSafely} (never through a link, atomically), piece by piece (never one string).
  */
 import path from 'node:path';
 import { errorMessage, InputError } from '../core/errors.js';
-import { formatHtml, HTML_FILE } from '../report/html.js';
-import { formatJunit } from '../report/junit.js';
-import { formatSarif } from '../report/sarif.js';
+import { HTML_FILE, htmlReport } from '../report/html.js';
+import { junitReport } from '../report/junit.js';
+import { sarifReport } from '../report/sarif.js';
 import type { Result } from '../result/result.js';
 import { OUTPUT_REFUSED, writeFileSafely } from './safe-write.js';
 
@@ -52,15 +52,15 @@ export interface FileReportFailure {
 export async function writeFileReports(result: Result, files: FileReports): Promise<FileReportFailure[]> {
   const failures: FileReportFailure[] = [];
   const place = (name: string) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
-  const attempt = (name: string, file: string, text: () => string): void => {
+  const attempt = (name: string, file: string, pieces: () => Iterable<string>): void => {
     try {
-      writeFileSafely(file, text(), place(name));
+      writeFileSafely(file, pieces(), place(name));
     } catch (error) {
       failures.push({ option: place(name).option, refused: error instanceof InputError && error.code === OUTPUT_REFUSED, message: errorMessage(error) });
     }
   };
-  if (files.html !== null) attempt('html', path.join(files.html, HTML_FILE), () => formatHtml(result));
-  if (files.sarif !== null) attempt('sarif', files.sarif, () => formatSarif(result, { pathPrefix: files.sarifPrefix }));
-  if (files.junit !== null) attempt('junit', files.junit, () => formatJunit(result, { failOn: files.failOn }));
+  if (files.html !== null) attempt('html', path.join(files.html, HTML_FILE), () => htmlReport(result));
+  if (files.sarif !== null) attempt('sarif', files.sarif, () => sarifReport(result, { pathPrefix: files.sarifPrefix }));
+  if (files.junit !== null) attempt('junit', files.junit, () => junitReport(result, { failOn: files.failOn }));
   return failures;
 }

@@ -23,6 +23,12 @@ import { closeSync, constants, fsyncSync, lstatSync, mkdirSync, openSync, realpa
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
 import { isInsideFolder } from '../repo/real-folder.js';
+import { batches } from './report-file.js';
+
+/** The UTF-8 bytes of `pieces`, in batches of about 1 MiB. */
+function* encodedBatches(pieces: Iterable<string>): Generator<Uint8Array> {
+  for (const text of batches(pieces)) yield Buffer.from(text, 'utf8');
+}
 
 /** Error code of a target refused before writing (a link, not a file, a folder leading outside). */
 export const OUTPUT_REFUSED = 'output-refused';
@@ -73,7 +79,7 @@ function codeOf(error: unknown): string | undefined {
  * @throws InputError `output-refused` (nothing was written, the previous file is unchanged) or
  *   `output-failed` (the write failed; the previous file is unchanged, the temporary file removed)
  */
-export function writeFileSafely(file: string, data: string | Uint8Array, place: WritePlace, hooks: WriteHooks = {}): string {
+export function writeFileSafely(file: string, data: string | Uint8Array | Iterable<string>, place: WritePlace, hooks: WriteHooks = {}): string {
   const where = { key: place.option };
   const refuse = (message: string): InputError => new InputError(OUTPUT_REFUSED, message, where);
   if (file === '' || file.includes('\0')) throw refuse(`expected a file path, got ${quoteValue(file)}`);
@@ -100,7 +106,8 @@ export function writeFileSafely(file: string, data: string | Uint8Array, place: 
   }
 
   // 3. A temporary file in the same folder, then rename.
-  const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+  // A report in pieces is written in batches of about 1 MiB: never held as one string.
+  const chunks: Iterable<Uint8Array> = typeof data === 'string' ? [Buffer.from(data, 'utf8')] : data instanceof Uint8Array ? [data] : encodedBatches(data);
   const write = hooks.write ?? ((fd: number, b: Uint8Array, offset: number, length: number) => writeSync(fd, b, offset, length));
   const flags = constants.O_WRONLY | constants.O_CREAT | constants.O_EXCL | (constants.O_NOFOLLOW ?? 0);
   let temp = '';
@@ -114,11 +121,13 @@ export function writeFileSafely(file: string, data: string | Uint8Array, place: 
     }
   }
   try {
-    // Each round writes at least one byte, so this ends after at most bytes.length rounds.
-    for (let offset = 0; offset < bytes.length; ) {
-      const n = write(fd, bytes, offset, bytes.length - offset);
-      if (!(n > 0)) throw new Error('the write made no progress');
-      offset += n;
+    for (const bytes of chunks) {
+      // Each round writes at least one byte, so this ends after at most bytes.length rounds.
+      for (let offset = 0; offset < bytes.length; ) {
+        const n = write(fd, bytes, offset, bytes.length - offset);
+        if (!(n > 0)) throw new Error('the write made no progress');
+        offset += n;
+      }
     }
     fsyncSync(fd);
     closeSync(fd);

@@ -350,7 +350,7 @@ export function leverages(fit: FitResult, X: Float64Array, m: number): Float64Ar
   checkBlock(X, undefined, m, p);
   const out = new Float64Array(m);
   if (p === 0) return out;
-  const solver = new FactorSolver(fit.factor.R, p, fit.factorRank);
+  const solver = solverOf(fit);
   const x = new Float64Array(p);
   const z = new Float64Array(p);
   for (let i = 0; i < m; i++) {
@@ -361,6 +361,20 @@ export function leverages(fit: FitResult, X: Float64Array, m: number): Float64Ar
     out[i] = h;
   }
   return out;
+}
+
+/**
+ * The solver of a fit's factor, made once per fit: a rank-deficient factor's solver holds an SVD
+ * of R (p^3 work), which must not be redone for every block of rows.
+ */
+const solvers = new WeakMap<FitResult, FactorSolver>();
+function solverOf(fit: FitResult): FactorSolver {
+  let solver = solvers.get(fit);
+  if (solver === undefined) {
+    solver = new FactorSolver(fit.factor.R, fit.factor.p, fit.factorRank);
+    solvers.set(fit, solver);
+  }
+  return solver;
 }
 
 /**

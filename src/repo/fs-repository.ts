@@ -40,7 +40,7 @@ export function createFsRepository(root: string): RepoReader {
   /** The real path of a normalised repository-relative path, or null when nothing is there. */
   const realInside = async (rel: string, where: ErrorLocation, shown: string): Promise<string | null> => {
     const base = await rootReal();
-    const full = rel === '' ? base : nodePath.join(base, ...rel.split('/'));
+    const full = rel === '' ? base : nodePath.join(base, rel);
     let real: string | null = null;
     try {
       real = await realpath(full);

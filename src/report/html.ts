@@ -91,23 +91,27 @@ function verdictText(result: Result): string {
   return `${badge(result.verdict)} ${escapeHtml(verdictHeadline(result))} <span class="muted">(${escapeHtml(countsText(result.counts))})</span>`;
 }
 
-function overview(result: Result): string {
-  const rows = result.models.map((m, i) => {
-    const x = m.metrics;
-    const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${escapeHtml(c.id)}</code>`);
-    return (
-      `<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${escapeHtml(m.name)}</a></td>` +
-      `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
-      `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
-      `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`
-    );
-  });
+function overviewRow(m: ModelResult, i: number): string {
+  const x = m.metrics;
+  const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${escapeHtml(c.id)}</code>`);
   return (
+    `<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${escapeHtml(m.name)}</a></td>` +
+    `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
+    `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
+    `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`
+  );
+}
+
+/** The overview table, one piece per row. */
+function* overview(result: Result): Generator<string> {
+  yield (
     '<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
     '<table><thead><tr><th>Status</th><th>Model</th><th class="num">Training rows</th><th class="num">Hold-out rows</th><th class="num">Parameters</th>' +
     '<th class="num">Hold-out RMSE</th><th class="num">Gap ratio</th><th class="num">Max std. coef.</th><th>Over a limit</th></tr></thead>' +
-    `<tbody>${rows.join('')}</tbody></table></section>`
+    '<tbody>'
   );
+  for (let i = 0; i < result.models.length; i++) yield overviewRow(result.models[i], i);
+  yield '</tbody></table></section>';
 }
 
 function checksTable(m: ModelResult): string {
@@ -179,6 +183,8 @@ function modelSection(m: ModelResult, index: number): string {
     const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
     parts.push(`<h3>Charts</h3>`);
     if (thinned.length) parts.push(`<p class="note">${thinned.map((s) => escapeHtml(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`);
+    const leftOut = m.charts.partialsLeftOut ?? 0;
+    if (leftOut > 0) parts.push(`<p class="note">${escapeHtml(`Partial curves of the first ${m.charts.partials.length} inputs; ${leftOut} more left out.`)}</p>`);
     parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
   } else {
     parts.push('<p class="note">No chart data in this result.</p>');
@@ -188,14 +194,16 @@ function modelSection(m: ModelResult, index: number): string {
 }
 
 /**
- * Formats the Result as one self-contained HTML page.
+ * The HTML page in pieces (the head, each overview row, each model's section, the end), to write
+ * one after another: joined, they are {@link formatHtml}'s text. A page of any number of models is
+ * written without ever being one string.
  * @param result the run's Result
  * @param options heading text; defaults in {@link HtmlOptions}
  */
-export function formatHtml(result: Result, options: HtmlOptions = {}): string {
+export function* htmlReport(result: Result, options: HtmlOptions = {}): Generator<string> {
   const title = options.title ?? 'fitgate report';
   const notes = result.notes.map((n) => `<p class="note">${escapeHtml(n)}</p>`).join('');
-  return [
+  yield [
     '<!DOCTYPE html>',
     '<html lang="en">',
     '<head>',
@@ -210,12 +218,25 @@ export function formatHtml(result: Result, options: HtmlOptions = {}): string {
     `<body data-verdict="${escapeHtml(result.verdict)}">`,
     `<header><h1>${escapeHtml(title)}</h1>${options.subtitle ? `<p class="muted">${escapeHtml(options.subtitle)}</p>` : ''}<p class="verdict">${verdictText(result)}</p>${notes}</header>`,
     '<main>',
-    overview(result),
-    ...result.models.map(modelSection),
+    '',
+  ].join('\n');
+  yield* overview(result);
+  yield '\n';
+  for (let i = 0; i < result.models.length; i++) yield `${modelSection(result.models[i], i)}\n`;
+  yield [
     '</main>',
     `<footer>${escapeHtml(`${result.tool.name} ${result.tool.version}`)}. Training rows are filled circles, hold-out rows hollow squares; dashed lines are fail limits, dotted lines warning limits. Colours from the Okabe–Ito colour-blind-safe set.</footer>`,
     '</body>',
     '</html>',
     '',
   ].join('\n');
+}
+
+/**
+ * Formats the Result as one self-contained HTML page ({@link htmlReport} joined).
+ * @param result the run's Result
+ * @param options heading text; defaults in {@link HtmlOptions}
+ */
+export function formatHtml(result: Result, options: HtmlOptions = {}): string {
+  return [...htmlReport(result, options)].join('');
 }

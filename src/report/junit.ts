@@ -70,11 +70,12 @@ function suite(m: ModelResult, failOn: 'fail' | 'warn'): { xml: string; counts: 
 }
 
 /**
- * Formats the Result as JUnit XML.
+ * The JUnit XML report in pieces (the head, then one test suite per model), to write one after
+ * another: joined, they are {@link formatJunit}'s text.
  * @param result the run's Result
  * @param options what counts as a failure; defaults in {@link JunitOptions}
  */
-export function formatJunit(result: Result, options: JunitOptions = {}): string {
+export function* junitReport(result: Result, options: JunitOptions = {}): Generator<string> {
   const failOn = options.failOn ?? 'fail';
   const suites = result.models.map((m) => suite(m, failOn));
   const total: Counts = { tests: 0, failures: 0, errors: 0, skipped: 0 };
@@ -85,6 +86,20 @@ export function formatJunit(result: Result, options: JunitOptions = {}): string 
     total.skipped += s.counts.skipped;
   }
   const head = `<testsuites${attrs({ name: result.tool.name, tests: total.tests, failures: total.failures, errors: total.errors, skipped: total.skipped })}`;
-  const body = suites.length ? `${head}>\n${suites.map((s) => s.xml).join('\n')}\n</testsuites>` : `${head}/>`;
-  return `<?xml version="1.0" encoding="UTF-8"?>\n${body}\n`;
+  if (suites.length === 0) {
+    yield `<?xml version="1.0" encoding="UTF-8"?>\n${head}/>\n`;
+    return;
+  }
+  yield `<?xml version="1.0" encoding="UTF-8"?>\n${head}>`;
+  for (const s of suites) yield `\n${s.xml}`;
+  yield '\n</testsuites>\n';
+}
+
+/**
+ * Formats the Result as JUnit XML ({@link junitReport} joined).
+ * @param result the run's Result
+ * @param options what counts as a failure; defaults in {@link JunitOptions}
+ */
+export function formatJunit(result: Result, options: JunitOptions = {}): string {
+  return [...junitReport(result, options)].join('');
 }

@@ -56,18 +56,19 @@ export function verdictLine(result: Result): string {
   return `**${MARK[result.verdict]}**: ${head} (${countsText(result.counts)})`;
 }
 
-/** The "against base" cell of a model: `new`, the changes, or `–`. */
+/** The "against base" cell of a model: `new`, the changes (after `renamed from <name>:` for a renamed model), or `–`. */
 function baseCell(m: ModelResult): string {
   const b = m.base;
   if (!b) return '–';
   if (b.status === 'new') return 'new';
+  const from = b.status === 'renamed' && b.previous ? `renamed from ${text(b.previous.name)}: ` : '';
   const rmse = b.holdout_rmse_change === null ? null : fromJsonNumber(b.holdout_rmse_change);
   const gap = b.gap_ratio_change === null ? null : fromJsonNumber(b.gap_ratio_change);
-  if (rmse === null && gap === null) return 'base not checked';
+  if (rmse === null && gap === null) return `${from}base not checked`;
   const parts: string[] = [];
   if (rmse !== null) parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
   if (gap !== null) parts.push(`gap ${signed(gap)}`);
-  return parts.join(', ');
+  return `${from}${parts.join(', ')}`;
 }
 
 /** Table header (and separator) of the model overview. */

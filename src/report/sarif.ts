@@ -11,6 +11,7 @@ import { CHECKS } from '../checks/index.js';
 import { formatNumber } from '../core/format.js';
 import { checkDocsUrl } from '../core/links.js';
 import { fromJsonNumber, type CheckResult, type Result } from '../result/result.js';
+import { jsonPieces } from '../core/json-pieces.js';
 
 /** Options of the SARIF report. */
 export interface SarifOptions {
@@ -139,6 +140,15 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
       },
     ],
   };
+}
+
+/**
+ * The SARIF report in pieces (one result each at most), to write one after another: joined, they
+ * are {@link formatSarif}'s text.
+ */
+export function* sarifReport(result: Result, options: SarifOptions = {}): Generator<string> {
+  yield* jsonPieces(sarifLog(result, options));
+  yield '\n';
 }
 
 /** The SARIF report as JSON text (two-space indentation, final newline). */

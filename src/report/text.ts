@@ -5,6 +5,7 @@
 import { classifierLine, isClassifier } from './classifier-figures.js';
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
+import { maxOf } from '../core/extremes.js';
 import { escapeTerminal } from './escape.js';
 import { neutraliseLog } from './runner-commands.js';
 
@@ -23,7 +24,7 @@ function paint(text: string, status: keyof typeof COLOURS, color: boolean): stri
 }
 
 function table(rows: string[][], rightAligned: boolean[]): string[] {
-  const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => [...r[j]].length)));
+  const widths = rows[0].map((_, j) => maxOf(rows.map((r) => [...r[j]].length)));
   return rows.map((r) =>
     r
       .map((cell, j) => {
@@ -116,6 +117,10 @@ export function formatText(result: Result, options: TextOptions = {}): string {
     }
     if (isClassifier(m)) out.push(`  ${escapeTerminal(classifierLine(m))}`);
     for (const c of m.checks) if (verbose || c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
+  }
+  for (const m of result.models) {
+    const previous = m.base?.status === 'renamed' ? m.base.previous : undefined;
+    if (previous) out.push('', `note: ${escapeTerminal(m.name)} is compared with ${escapeTerminal(previous.name)} (${escapeTerminal(previous.descriptor)}) of the base commit, found by its ${previous.matched_by === 'data' ? 'data files' : 'descriptor path'}`);
   }
   for (const note of result.notes) out.push('', `note: ${escapeTerminal(note)}`);
   const { counts } = result;

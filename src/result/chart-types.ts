@@ -2,8 +2,30 @@
  * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
  */
 
-/** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
-export const MAX_CHART_POINTS = 2000;
+/**
+ * Most points drawn per series (training or hold-out); larger files are thinned evenly. A model
+ * of several inputs keeps fewer ({@link MAX_SERIES_NUMBERS}).
+ */
+export const MAX_CHART_POINTS = 1000;
+
+/**
+ * Most numbers one series holds: each kept row carries its line, every input, the target, the
+ * prediction and the residual (inputs + 4 numbers), so a series keeps at most
+ * floor(5,000 / (inputs + 4)) rows, and never more than {@link MAX_CHART_POINTS} (a model of one
+ * input keeps 1,000, of five 555). With at most {@link MAX_PARTIAL_CURVES} curves this bounds a
+ * model's chart data whatever its rows and inputs: a report of 1,000 models of 5 inputs stays
+ * near 300 MB of JSON.
+ */
+export const MAX_SERIES_NUMBERS = 5000;
+
+/** Most partial curves of a model of several inputs: those of its first inputs (with a spread). */
+export const MAX_PARTIAL_CURVES = 12;
+
+/**
+ * Grid points of all partial curves of a model together: up to 3 curves get {@link CURVE_POINTS}
+ * each, more share this many (at least 101 each).
+ */
+export const PARTIAL_CURVE_POINTS = 1203;
 
 /** Points of the evenly spaced grid along a curve. */
 export const CURVE_POINTS = 401;
@@ -20,7 +42,7 @@ export interface PointSeries {
   rows: number;
   /** Points kept (`rows` unless thinned). */
   shown: number;
-  /** True when the rows were thinned to {@link MAX_CHART_POINTS}. */
+  /** True when the rows were thinned (to {@link MAX_CHART_POINTS}, or fewer for many inputs: {@link MAX_SERIES_NUMBERS}). */
   thinned: boolean;
   /** How rows were kept, in words (empty when not thinned). */
   thinning: string;
@@ -121,8 +143,13 @@ export interface ChartData {
   holdout: PointSeries;
   /** One input: the fitted curve; null otherwise. */
   fit: FitCurveData | null;
-  /** Several inputs: one curve per input with the others at their medians; empty otherwise. */
+  /**
+   * Several inputs: one curve per input with the others at their medians, for the first
+   * {@link MAX_PARTIAL_CURVES} inputs with a spread; empty otherwise.
+   */
   partials: CurveData[];
+  /** Inputs with a spread left without a partial curve (beyond {@link MAX_PARTIAL_CURVES}); absent when none. */
+  partialsLeftOut?: number;
   /** The complexity sweep, when the complexity check ran. */
   sweep: SweepData | null;
   coefficients: CoefficientData;

@@ -87,14 +87,19 @@ export interface ShippedMetrics {
 }
 
 /**
- * How a model compares with the same model (by name) on the base commit of a pull request.
- * `new`: no model of that name on the base commit (figures null). `compared`: both were
- * evaluated; a base figure is null when the base model could not be checked.
+ * How a model compares with the same model on the base commit of a pull request, found by name,
+ * else by descriptor path, else by its data files (train, hold-out, target) when exactly one base
+ * model left over has them. `new`: no such model on the base commit (figures null). `compared`:
+ * the base model of the same name. `renamed`: the base model of the same descriptor path or data
+ * files under another name (`previous` says which). A base figure is null when the base model
+ * could not be checked.
  */
 export interface BaseComparison {
-  status: 'new' | 'compared';
+  status: 'new' | 'compared' | 'renamed';
   /** Full SHA of the base commit. */
   commit: string;
+  /** Status `renamed`: the base model compared with, and what matched it. Absent otherwise. */
+  previous?: { name: string; descriptor: string; matched_by: 'descriptor' | 'data' };
   /** Hold-out RMSE on the base commit, or null. */
   holdout_rmse: JsonNumber | null;
   /** Gap ratio on the base commit, or null. */

@@ -1,13 +1,88 @@
 /**
- * A model's figures against the same model (by name) on the base commit of a pull request.
+ * A model's figures against the same model on the base commit of a pull request. The base model
+ * is found by name; a model renamed in the pull request is found by its descriptor path, and one
+ * renamed and moved by its data files, so that renaming a model cannot escape `base-change`.
  */
+import type { Descriptor } from '../config/types.js';
 import { fromJsonNumber, jsonNumber, type BaseComparison, type ModelMetrics, type ModelResult } from '../result/result.js';
 
-/** The base commit's outcomes to compare with, by model name. */
+/** How a head model was matched with a base model. */
+export type MatchedBy = 'name' | 'descriptor' | 'data';
+
+/** The base model a head model is compared with. */
+export interface BaseMatch {
+  model: ModelResult;
+  by: MatchedBy;
+}
+
+/** The base commit's outcomes to compare with, by head descriptor path. */
 export interface BaseInput {
-  models: ReadonlyMap<string, ModelResult>;
+  /** Each head model's base model, by the head descriptor's path; absent: new. */
+  matches: ReadonlyMap<string, BaseMatch>;
   /** Full SHA of the base commit. */
   commit: string;
+}
+
+/** The data files and target of a descriptor, as one key (`train`, `holdout`, `target`). */
+export function dataKey(descriptor: Pick<Descriptor, 'data'>): string {
+  return JSON.stringify([descriptor.data.train, descriptor.data.holdout, descriptor.data.target]);
+}
+
+/** The outcome of {@link matchBase}. */
+export interface BaseMatching {
+  /** Each matched head model's base model, by head descriptor path. */
+  matches: Map<string, BaseMatch>;
+  /** Base models no head model matched (removed, or renamed and moved with other data files). */
+  unmatched: ModelResult[];
+}
+
+/**
+ * Pairs head models with base models, in three rounds, each base model used at most once:
+ * 1. the same name;
+ * 2. the same descriptor path (the model was renamed in place);
+ * 3. the same data key ({@link dataKey}: train, hold-out and target), when exactly one base model
+ *    left and exactly one head model left share it (the model was renamed and moved).
+ *
+ * @param head the head run's descriptors
+ * @param base the base run's outcomes
+ * @param baseData the base descriptors' data keys by base model name (models whose descriptor
+ *   could not be read have none)
+ */
+export function matchBase(head: readonly Descriptor[], base: readonly ModelResult[], baseData: ReadonlyMap<string, string>): BaseMatching {
+  const matches = new Map<string, BaseMatch>();
+  const used = new Set<ModelResult>();
+  const byName = new Map(base.map((m) => [m.name, m]));
+  for (const d of head) {
+    const m = byName.get(d.name);
+    if (m !== undefined && !used.has(m)) {
+      matches.set(d.file, { model: m, by: 'name' });
+      used.add(m);
+    }
+  }
+  const byPath = new Map(base.map((m) => [m.descriptor, m]));
+  for (const d of head) {
+    if (matches.has(d.file)) continue;
+    const m = byPath.get(d.file);
+    if (m !== undefined && !used.has(m)) {
+      matches.set(d.file, { model: m, by: 'descriptor' });
+      used.add(m);
+    }
+  }
+  const baseByKey = new Map<string, ModelResult[]>();
+  for (const m of base) {
+    const key = baseData.get(m.name);
+    if (used.has(m) || key === undefined) continue;
+    baseByKey.set(key, [...(baseByKey.get(key) ?? []), m]);
+  }
+  const headByKey = new Map<string, Descriptor[]>();
+  for (const d of head) if (!matches.has(d.file)) headByKey.set(dataKey(d), [...(headByKey.get(dataKey(d)) ?? []), d]);
+  for (const [key, ds] of headByKey) {
+    const ms = baseByKey.get(key) ?? [];
+    if (ds.length !== 1 || ms.length !== 1) continue;
+    matches.set(ds[0].file, { model: ms[0], by: 'data' });
+    used.add(ms[0]);
+  }
+  return { matches, unmatched: base.filter((m) => !used.has(m)) };
 }
 
 /** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
@@ -17,11 +92,18 @@ function relativeChange(head: number, base: number): number | null {
   return (head - base) / Math.abs(base);
 }
 
-/** The `base` field of a model result: `new`, or the base figures and the changes. */
-export function compareWithBase(metrics: ModelMetrics, baseline: ModelResult | null, commit: string): BaseComparison {
-  if (baseline === null) {
+/**
+ * The `base` field of a model result: `new`, or the base figures and the changes, with the base
+ * model's name and path when it was matched under another name (`renamed`). A base descriptor
+ * that could not be read has its path for a name; matched by that path it is `compared`.
+ */
+export function compareWithBase(metrics: ModelMetrics, match: BaseMatch | null, commit: string): BaseComparison {
+  if (match === null) {
     return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
   }
+  const baseline = match.model;
+  const unreadable = baseline.error !== null && baseline.name === baseline.descriptor;
+  const renamed = match.by !== 'name' && !unreadable;
   const b = baseline.metrics;
   const headRmse = fromJsonNumber(metrics.holdout_rmse);
   const headGap = fromJsonNumber(metrics.gap_ratio);
@@ -30,8 +112,9 @@ export function compareWithBase(metrics: ModelMetrics, baseline: ModelResult | n
   const rmseChange = relativeChange(headRmse, baseRmse);
   const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
   return {
-    status: 'compared',
+    status: renamed ? 'renamed' : 'compared',
     commit,
+    ...(renamed ? { previous: { name: baseline.name, descriptor: baseline.descriptor, matched_by: match.by === 'data' ? 'data' : 'descriptor' } } : {}),
     holdout_rmse: b ? b.holdout_rmse : null,
     gap_ratio: b ? b.gap_ratio : null,
     holdout_rmse_change: rmseChange === null ? null : jsonNumber(rmseChange),

@@ -12,7 +12,7 @@ import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/res
 import { columnMedian } from '../diagnostics/column-median.js';
 import { range } from '../design/stats.js';
 import type { FittedModel } from './fit-model.js';
-import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
+import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, MAX_PARTIAL_CURVES, MAX_SERIES_NUMBERS, PARTIAL_CURVE_POINTS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
 
 export { MAX_CHART_POINTS } from '../result/chart-types.js';
 
@@ -30,8 +30,13 @@ export function thinRows(n: number, max = MAX_CHART_POINTS): Int32Array {
   return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
 }
 
+/** Rows a series of a model with this many inputs keeps at most: {@link MAX_SERIES_NUMBERS} / (inputs + 4), at most `max`. */
+export function seriesPoints(inputs: number, max = MAX_CHART_POINTS): number {
+  return Math.max(1, Math.min(max, Math.floor(MAX_SERIES_NUMBERS / (inputs + 4))));
+}
+
 function series(data: ModelData, predictions: Float64Array, max: number): PointSeries {
-  const keep = thinRows(data.rows, max);
+  const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
   const thinned = keep.length < data.rows;
   const pick = (col: ArrayLike<number>): (number | null)[] => Array.from(keep, (i) => chartNumber(col[i]));
   return {
@@ -47,10 +52,15 @@ function series(data: ModelData, predictions: Float64Array, max: number): PointS
   };
 }
 
-/** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
-function curveAlong(model: FittedModel, c: number, lo: number, hi: number, medians: number[], extra: readonly number[]): { x: number[]; y: (number | null)[] } {
+/** Grid points of each partial curve of a model with this many curves (see {@link PARTIAL_CURVE_POINTS}). */
+export function partialCurvePoints(curves: number): number {
+  return Math.max(101, Math.min(CURVE_POINTS, Math.floor(PARTIAL_CURVE_POINTS / Math.max(1, curves))));
+}
+
+/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
+function curveAlong(model: FittedModel, c: number, lo: number, hi: number, medians: number[], extra: readonly number[], points: number): { x: number[]; y: (number | null)[] } {
   const xs: number[] = [];
-  for (let t = 0; t < CURVE_POINTS; t++) xs.push(t === CURVE_POINTS - 1 ? hi : lo + ((hi - lo) * t) / (CURVE_POINTS - 1));
+  for (let t = 0; t < points; t++) xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
   for (const v of extra) if (v >= lo && v <= hi) xs.push(v);
   const grid = Float64Array.from(xs).sort();
   const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
@@ -166,10 +176,11 @@ function readSweep(checks: readonly CheckResult[]): SweepData | null {
   if (rows.length === 0) return null;
   rows.sort((a, b) => a.s - b.s);
   const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
+  // rows are sorted by setting, so the positive settings run from the first to the last.
   const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
   return {
     parameter,
-    log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && Math.max(...positive) / Math.min(...positive) >= 10,
+    log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && positive[positive.length - 1] / positive[0] >= 10,
     settings: rows.map((r) => chartNumber(r.s) ?? r.s),
     cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
     train: null,
@@ -191,18 +202,29 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
   const { train, holdout } = tables;
   const inputs = [...design.inputs];
   const medians = train.inputs.map((col) => columnMedian(col, train.rows));
+  let spread = 0;
+  for (let c = 0; c < inputs.length; c++) {
+    const [lo, hi] = range(train.inputs[c], train.rows);
+    if (hi > lo) spread++;
+  }
+  const points = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES));
 
   // One input: the curve over the scanned range with the band; several: partial curves.
   let fitCurve: FitCurveData | null = null;
   const partials: CurveData[] = [];
+  let partialsLeftOut = 0;
   for (let c = 0; c < inputs.length; c++) {
     const [tlo, thi] = range(train.inputs[c], train.rows);
     if (!(thi > tlo)) continue;
+    if (inputs.length > 1 && partials.length >= MAX_PARTIAL_CURVES) {
+      partialsLeftOut += 1;
+      continue;
+    }
     const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
     const swingCurve = swing?.curve ?? null;
     const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
     const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
-    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
+    const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
     // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
     const others: Record<string, number> = Object.create(null);
     inputs.forEach((name, k) => {
@@ -239,6 +261,7 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     holdout: series(holdout, model.holdoutPredictions, maxPoints),
     fit: fitCurve,
     partials,
+    ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
     sweep: readSweep(checks),
     coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
   };

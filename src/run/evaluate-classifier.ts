@@ -65,7 +65,8 @@ export async function evaluateClassifier(
   base?: BaseInput,
 ): Promise<ModelResult> {
   const model = await fitClassifier(repo, descriptor, settings);
-  const context: ClassifierContext = { ...model.context, baseline: base?.models.get(descriptor.name) ?? null };
+  const baseMatch = base?.matches.get(descriptor.file) ?? null;
+  const context: ClassifierContext = { ...model.context, baseline: baseMatch?.model ?? null };
   const metrics = classifierMetrics(model);
   const checks: CheckResult[] = [];
   let verdict: Verdict = 'pass';

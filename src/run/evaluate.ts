@@ -4,6 +4,7 @@
  */
 import { checksFor, runCheck, type CheckContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
+import { checkDeadline, Deadline, TimeLimitExceeded, withDeadline } from '../core/deadline.js';
 import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
@@ -12,7 +13,7 @@ import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResul
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { withBaseCurves } from './base-curves.js';
 import { buildChartData } from './chart-data.js';
-import { errorResult, INTERNAL_ERROR } from './error-result.js';
+import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { evaluateClassifier } from './evaluate-classifier.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 
@@ -50,22 +51,37 @@ function reportMetrics(model: FittedModel): ModelMetrics {
 }
 
 /**
- * Fits one model and runs every check on it. Input problems become a model with verdict
- * `error` (the run goes on); anything else is re-thrown.
+ * Fits one model and runs every check on it, within its time limit (`caps.max_model_seconds`,
+ * checked between the stages: see core/deadline.ts). Input problems and a model stopped at its
+ * time limit become a model with verdict `error` (the run goes on).
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
+ * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
  */
-export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
+export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput, deadline?: Deadline): Promise<ModelResult> {
+  const within = deadline ?? new Deadline(settings.caps.maxModelSeconds * 1000);
+  try {
+    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, base));
+  } catch (error) {
+    if (!(error instanceof TimeLimitExceeded)) throw error;
+    return errorResult(descriptor.name, descriptor.file, timeLimitError(descriptor, settings.caps.maxModelSeconds, error.elapsedMs, error.stage, settings.file));
+  }
+}
+
+/** {@link evaluateModel} inside its deadline; TimeLimitExceeded passes through. */
+async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
   let model: FittedModel;
   try {
     if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
     model = await fitModel(repo, descriptor, settings);
   } catch (error) {
+    if (error instanceof TimeLimitExceeded) throw error;
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
     // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
     // that every other model still gets its outcome; the code marks it as a bug to report.
     const detail = error instanceof Error ? error.message : String(error);
     return errorResult(descriptor.name, descriptor.file, new InputError(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
   }
+  const baseMatch = base?.matches.get(descriptor.file) ?? null;
   // The run's own passes already produced the folds, their factors and the cross-validation.
   const analyses = new ModelAnalyses(
     { design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit },
@@ -78,7 +94,7 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     metrics: model.metrics,
     train: model.tables.train,
     holdout: model.tables.holdout,
-    baseline: base?.models.get(descriptor.name) ?? null,
+    baseline: baseMatch?.model ?? null,
     analyses,
     predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
     shipped: model.shipped,
@@ -87,7 +103,11 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
   const checks: CheckResult[] = [];
   let verdict: Verdict = 'pass';
   for (const check of checksFor('regression')) {
+    const stage = `${check.id} check`;
+    checkDeadline(stage);
     const { outcome, figures } = runCheck(check, context);
+    // A check stopped by the deadline is caught as a check error: the model stops here instead.
+    checkDeadline(stage);
     checks.push(outcome);
     if (figures) Object.assign(metrics, figures);
     if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);
@@ -103,7 +123,7 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     coefficients: Array.from(model.fit.coefficients, jsonNumber),
     shipped: shippedMetrics(model.shipped),
     checks,
-    ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
+    ...(base ? { base: compareWithBase(metrics, baseMatch, base.commit) } : {}),
     error: null,
     extra: {
       rank_deficient: model.fit.rankDeficient,

@@ -14,11 +14,13 @@
 import { fileURLToPath } from 'node:url';
 import { workerData } from 'node:worker_threads';
 import type { Descriptor, SettingsFile } from '../config/types.js';
+import type { BaseMatch } from './base-comparison.js';
 import { evaluateModel, type BaseInput } from './evaluate.js';
 import { kernelNotes, recordKernelNotes } from '../kernels/index.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
 import type { ModelResult } from '../result/result.js';
+import { errorResult, timeLimitError } from './error-result.js';
 import { runPool, serveTasks } from './pool.js';
 import { isFitgateWorker, WORKER_FLAG } from './worker-role.js';
 
@@ -34,8 +36,8 @@ interface ModelWorkerData {
 /** One model to evaluate. */
 interface ModelTask {
   descriptor: Descriptor;
-  /** The base commit's outcome of this model (null: new), or undefined when not comparing. */
-  baseline?: ModelResult | null;
+  /** The base model this model is compared with (null: new), or undefined when not comparing. */
+  baseline?: BaseMatch | null;
   commit?: string;
 }
 
@@ -97,13 +99,32 @@ export async function evaluateModels(
   }
   const base = options.base;
   const tasks: ModelTask[] = descriptors.map((descriptor) =>
-    base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor },
+    base ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : { descriptor },
   );
   const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
-  const replies = await runPool<ModelTask, ModelReply>(tasks, { jobs, script, workerData: data });
+  // The worker checks the model's time limit itself between stages; a model still running
+  // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
+  const limitSeconds = settings.caps.maxModelSeconds;
+  const replies = await runPool<ModelTask, ModelReply>(
+    tasks,
+    { jobs, script, workerData: data },
+    {
+      ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
+      onTimeLimit: (task, elapsedMs) => ({
+        result: errorResult(task.descriptor.name, task.descriptor.file, timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file)),
+        kernelNotes: [],
+      }),
+    },
+  );
   for (const reply of replies) recordKernelNotes(reply.kernelNotes);
   return replies.map((reply) => reply.result);
 }
+
+/**
+ * Milliseconds past a model's time limit after which its worker thread is ended from outside:
+ * the model's own checks stop it at the limit unless one step runs longer than this.
+ */
+export const HARD_STOP_GRACE_MS = 2000;
 
 /** The worker loop: evaluate each model task sent by the pool. */
 function startModelWorker(): void {
@@ -113,7 +134,7 @@ function startModelWorker(): void {
     const base: BaseInput | undefined =
       task.baseline === undefined
         ? undefined
-        : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
+        : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
     const result = await evaluateModel(repo, task.descriptor, data.settings, base);
     return { result, kernelNotes: kernelNotes() };
   });

@@ -7,6 +7,7 @@
  * 2. the refinement pass, where one step of iterative refinement converges and gains digits;
  * 3. the scoring pass: predictions, out-of-fold errors and leverages together.
  */
+import { checkDeadline, TimeLimitExceeded } from '../core/deadline.js';
 import { clip, InputError } from '../core/errors.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
@@ -37,13 +38,16 @@ export function foldPass(plan: ModelPlan): FoldPass {
   const spread = new ColumnSpread(design.p);
   const scaling = plan.scaling ?? null;
   forEachBlock(design, train, (X, start, m) => {
+    checkDeadline('fold pass');
     checkRange(plan, X, start, m);
     spread.add(X, m);
     // A weighted fit folds the rows scaled by sqrt(w) (design/weighted-design.ts).
     if (scaling !== null) scaleBlockRows(X, m, design.p, scaling.sqrtW, start);
     builder.add(X, scaling === null ? train.y : scaling.y, start, m);
   });
+  checkDeadline('fold merges');
   const fit = fitFactor(mergeFactors(builder.factors, design.p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
+  checkDeadline('fit');
   const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? complementFactors(builder.factors) : [] };
   return { fit, foldFactors, columnSd: spread.sd() };
 }
@@ -59,6 +63,7 @@ export function refinePass(plan: ModelPlan, fit: FitResult): FitResult {
   const scaling = plan.scaling ?? null;
   const y = scaling === null ? train.y : scaling.y;
   forEachBlock(plan.design, train, (X, start, m) => {
+    checkDeadline('refinement pass');
     if (scaling !== null) scaleBlockRows(X, m, plan.design.p, scaling.sqrtW, start);
     pass.addRows(X, y.subarray(start, start + m), m);
   });
@@ -89,7 +94,8 @@ export function scoringPass(plan: ModelPlan, fit: FitResult, foldFactors: FoldFa
       crossValidation = crossValidate(weightedDesign(design, scaling), rows, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements });
       trainPredictions = predictRows(design, train, fit.coefficients);
     }
-  } catch {
+  } catch (error) {
+    if (error instanceof TimeLimitExceeded) throw error;
     // The cross-validation check runs it again and reports why it could not be computed (as a
     // check that throws does); the fit itself stands.
     crossValidation = null;

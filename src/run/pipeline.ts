@@ -8,6 +8,7 @@ import { loadSettings } from '../config/settings-file.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import { kernelNotes } from '../kernels/index.js';
+import { matchBase, type BaseInput } from './base-comparison.js';
 import { errorResult } from './error-result.js';
 import { evaluateModels } from './model-worker.js';
 import type { RepoReader } from '../repo/types.js';
@@ -19,11 +20,16 @@ import { VERSION } from '../core/version.js';
 /** Optional inputs of a run besides its settings. */
 export interface PipelineOptions {
   /**
-   * Outcomes of the same models on the base commit of a pull request, by model name. When
-   * given, every model gets a `base` comparison (`new` when its name is absent) and the
-   * `base-change` check can judge it. Default: no comparison.
+   * Outcomes of the models on the base commit of a pull request, by model name. When given,
+   * every model gets a `base` comparison, matched by name, else by descriptor path, else by data
+   * files (see base-comparison.ts; `new` when nothing matches), and the `base-change` check can
+   * judge it. Default: no comparison.
    */
   baseline?: ReadonlyMap<string, ModelResult>;
+  /** The base descriptors' data keys (base-comparison.ts `dataKey`) by base model name. Default none. */
+  baselineData?: ReadonlyMap<string, string>;
+  /** Called with the descriptors that loaded, before any model is checked (the base run uses it). Default none. */
+  onDescriptors?: (descriptors: readonly Descriptor[]) => void;
   /** Full SHA of the commit the baseline comes from (recorded in each comparison). Default empty. */
   baseCommit?: string;
   /** Messages about the run as a whole, added to `result.notes`. Default none. */
@@ -74,13 +80,33 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
     }
   }
   checkUniqueNames(loaded);
-  const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
-  models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
+  options.onDescriptors?.(loaded);
   const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+  let base: BaseInput | undefined;
+  if (options.baseline) {
+    const matching = matchBase(loaded, [...options.baseline.values()], options.baselineData ?? new Map());
+    base = { matches: matching.matches, commit: options.baseCommit ?? '' };
+    // A shard checks part of the models, so the base models of the other shards match nothing here.
+    if (shard === null) for (const m of matching.unmatched) notes.push(removedNote(m));
+  }
+  for (const model of await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })) models.push(model);
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
   // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
   for (const note of kernelNotes()) if (!notes.includes(note)) notes.push(note);
   const result = summarise(models, VERSION, notes);
   if (shard) result.shard = { index: shard.index, count: shard.count };
   return result;
+}
+
+/** Longest piece of a model name or path quoted in a note. */
+const QUOTE = 80;
+
+function quoted(text: string): string {
+  const chars = [...text];
+  return chars.length > QUOTE ? `${chars.slice(0, QUOTE - 1).join('')}…` : text;
+}
+
+/** The note of a base model that matched no model of this run. */
+function removedNote(m: ModelResult): string {
+  return `base model ${quoted(m.name)} (${quoted(m.descriptor)}) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared`;
 }

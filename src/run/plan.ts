@@ -1,7 +1,7 @@
 /**
  * A model's plan, made before any pass over its rows: read the columns it needs, fix the terms'
- * parameters from the training rows, check the design's size and the target against the caps,
- * and assign the cross-validation folds.
+ * parameters from the training rows, check the design's size, the target and the estimated work
+ * (cost.ts) against the caps, and assign the cross-validation folds.
  */
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
@@ -14,6 +14,8 @@ import { rowScaling, type RowScaling } from '../design/weighted-design.js';
 import { assignFolds, type Folds } from '../diagnostics/folds.js';
 import { firstBeyond } from '../kernels/index.js';
 import type { RepoReader } from '../repo/types.js';
+import { checkDeadline } from '../core/deadline.js';
+import { checkBudget, estimateCost, modelShape } from './cost.js';
 
 /**
  * Largest number of design columns. The diagnostics take singular value decompositions of p x p
@@ -46,11 +48,13 @@ export interface ModelPlan {
  * Plans one model.
  * @param load how the columns are read: default {@link loadModelData}; classifiers read their target as two classes
  * @throws InputError for bad data, a design over the caps, a target out of range or constant
+ *   or work estimated over `caps.max_operations` (`over-budget`)
  */
 export async function planModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, load: typeof loadModelData = loadModelData): Promise<ModelPlan> {
   const inputs: string[] = [];
   for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
   const tables = await load(repo, descriptor, inputs, settings);
+  checkDeadline('reading of the data');
   const { train } = tables;
   const file = descriptor.file;
 
@@ -92,6 +96,8 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
       { file, line: descriptor.data.lines.target, key: 'data.target' },
     );
   }
+  // The whole model's work, estimated from its shape before the first pass over the rows.
+  checkBudget(descriptor, estimateCost(modelShape(descriptor, design, train.rows, tables.holdout.rows)), settings);
   const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
   return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
 }

@@ -8,6 +8,11 @@
  * {@link InputError} thrown there comes back as an InputError (code, message, location); any
  * other error comes back as an Error with the worker's message and stack. The first error
  * stops the pool (the other workers are terminated) and rejects the run.
+ *
+ * With a time limit, a task still running that long after its worker started it (a new worker
+ * first loads its script, which does not count) has that worker ended (`Worker.terminate`, which
+ * stops even a loop that never yields) and gets the result `onTimeLimit` makes for it; a new
+ * worker takes over the tasks left.
  */
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker } from 'node:worker_threads';
@@ -21,6 +26,14 @@ export interface PoolOptions {
   script: string | URL;
   /** Plain data every worker receives as `workerData`. Default none. */
   workerData?: unknown;
+}
+
+/** A per-task time limit of {@link runPool}. */
+export interface PoolTimeLimit<T, R> {
+  /** Milliseconds a task may run on its worker, counted from when the worker starts it (> 0). */
+  ms: number;
+  /** The result of a task stopped at the limit (its worker is ended first). */
+  onTimeLimit: (task: T, elapsedMs: number) => R;
 }
 
 /** A task sent to a worker. */
@@ -38,8 +51,8 @@ interface ErrorData {
   location?: ErrorLocation;
 }
 
-/** What a worker sends back for a task. */
-type ReplyMessage<R> = { index: number; ok: true; value: R } | { index: number; ok: false; error: ErrorData };
+/** What a worker sends back for a task: that it started it, then its value or its error. */
+type ReplyMessage<R> = { index: number; started: true } | { index: number; ok: true; value: R } | { index: number; ok: false; error: ErrorData };
 
 /** The number of workers to use by default: the cores Node may use (os.availableParallelism()). */
 export function defaultJobs(): number {
@@ -68,15 +81,16 @@ function revive(data: ErrorData): Error {
  * Runs every task on a pool of worker threads.
  * @param tasks plain-data tasks, each handed to one worker
  * @param options number of workers, worker script and its data
+ * @param limit a per-task time limit; default none
  * @returns one result per task, in task order
  * @throws the first task error (InputErrors stay InputErrors), or an Error when a worker exits early
  */
-export function runPool<T, R>(tasks: readonly T[], options: PoolOptions): Promise<R[]> {
+export function runPool<T, R>(tasks: readonly T[], options: PoolOptions, limit?: PoolTimeLimit<T, R>): Promise<R[]> {
   const size = Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length);
   const results = new Array<R>(tasks.length);
   if (tasks.length === 0) return Promise.resolve(results);
   return new Promise<R[]>((resolve, reject) => {
-    const workers: Worker[] = [];
+    const workers = new Set<Worker>();
     let next = 0;
     let done = 0;
     let settled = false;
@@ -89,34 +103,60 @@ export function runPool<T, R>(tasks: readonly T[], options: PoolOptions): Promis
       stop();
       reject(error);
     };
-    const feed = (worker: Worker): void => {
-      if (next >= tasks.length) return;
-      const message: TaskMessage<T> = { index: next, task: tasks[next] };
-      next++;
-      worker.postMessage(message);
+    const finishTask = (index: number, value: R): boolean => {
+      results[index] = value;
+      done++;
+      if (done < tasks.length) return false;
+      settled = true;
+      stop();
+      resolve(results);
+      return true;
     };
-    for (let w = 0; w < size; w++) {
+    const start = (): void => {
       const worker = new Worker(options.script, { workerData: options.workerData });
-      workers.push(worker);
+      workers.add(worker);
+      // The task this worker is on, when it was handed over, and its time-limit timer.
+      let current = -1;
+      let since = 0;
+      let timer: NodeJS.Timeout | undefined;
+      const feed = (): void => {
+        if (next >= tasks.length) return;
+        current = next++;
+        const message: TaskMessage<T> = { index: current, task: tasks[current] };
+        worker.postMessage(message);
+      };
+      const expire = (): void => {
+        if (settled || limit === undefined || current < 0) return;
+        // Ended from outside: its exit and anything it still sends are ignored from here on.
+        workers.delete(worker);
+        void worker.terminate();
+        const index = current;
+        current = -1;
+        if (!finishTask(index, limit.onTimeLimit(tasks[index], performance.now() - since)) && next < tasks.length) start();
+      };
       worker.on('message', (reply: ReplyMessage<R>) => {
-        if (settled) return;
-        if (!reply.ok) return failWith(revive(reply.error));
-        results[reply.index] = reply.value;
-        done++;
-        if (done === tasks.length) {
-          settled = true;
-          stop();
-          resolve(results);
+        if (settled || !workers.has(worker) || reply.index !== current) return;
+        if ('started' in reply) {
+          since = performance.now();
+          // Unreferenced: a timer alone never keeps the process running (its worker does, while busy).
+          if (limit !== undefined) timer = setTimeout(expire, limit.ms).unref();
           return;
         }
-        feed(worker);
+        clearTimeout(timer);
+        current = -1;
+        if (!reply.ok) return failWith(revive(reply.error));
+        if (!finishTask(reply.index, reply.value)) feed();
       });
-      worker.on('error', (error) => failWith(error instanceof Error ? error : new Error(String(error))));
+      worker.on('error', (error) => {
+        if (workers.has(worker)) failWith(error instanceof Error ? error : new Error(String(error)));
+      });
       worker.on('exit', (code) => {
-        if (!settled) failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
+        clearTimeout(timer);
+        if (!settled && workers.has(worker)) failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
       });
-      feed(worker);
-    }
+      feed();
+    };
+    for (let w = 0; w < size; w++) start();
   });
 }
 
@@ -129,6 +169,8 @@ export function serveTasks<T, R>(handle: (task: T) => Promise<R> | R): void {
   if (isMainThread || parentPort === null) return;
   const port = parentPort;
   port.on('message', (message: TaskMessage<T>) => {
+    // Posted before the task runs, so the pool's clock starts even if the task never yields.
+    port.postMessage({ index: message.index, started: true } satisfies ReplyMessage<R>);
     Promise.resolve()
       .then(() => handle(message.task))
       .then(

@@ -13,7 +13,7 @@ describe('loadSettings', () => {
       models: ['**/*.model.yml'],
       limits: {},
       fit: { folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' },
-      caps: { maxFileBytes: 512 * 1024 * 1024, maxCells: 200_000_000 },
+      caps: { maxFileBytes: 512 * 1024 * 1024, maxCells: 200_000_000, maxOperations: 20_000_000_000, maxModelSeconds: 40 },
       notes: [],
     });
   });
@@ -37,7 +37,7 @@ describe('loadSettings', () => {
       '  swing: { warn: 0.1, fail: 0.2 }',
       '  base_change: off',
       'fit: { folds: 10, fold_order: blocks, seed: 42 }',
-      'caps: { max_file_mb: 2, max_cells: 1000 }',
+      'caps: { max_file_mb: 2, max_cells: 1000, max_operations: 5e9, max_model_seconds: 2.5 }',
       '',
     ].join('\n');
     const settings = await loadSettings(createMemoryRepository({ 'ci/fitgate.yml': text }), 'ci/fitgate.yml', { explicit: true });
@@ -50,7 +50,7 @@ describe('loadSettings', () => {
         base_change: { spec: 'off', line: 8 },
       },
       fit: { folds: 10, foldOrder: 'blocks', seed: 42, parameterCount: 'columns' },
-      caps: { maxFileBytes: 2 * 1024 * 1024, maxCells: 1000 },
+      caps: { maxFileBytes: 2 * 1024 * 1024, maxCells: 1000, maxOperations: 5e9, maxModelSeconds: 2.5 },
       notes: [],
     });
     expect([modelPatternLine(settings, 0), modelPatternLine(settings, 1)]).toEqual([3, 4]);
@@ -92,6 +92,10 @@ describe('loadSettings', () => {
     { name: 'negative seed', text: 'version: 1\nfit:\n  seed: -1\n', line: 3, key: 'fit.seed' },
     { name: 'zero max_file_mb', text: 'version: 1\ncaps:\n  max_file_mb: 0\n', line: 3, key: 'caps.max_file_mb' },
     { name: 'fractional max_cells', text: 'version: 1\ncaps:\n  max_cells: 1.5\n', line: 3, key: 'caps.max_cells' },
+    { name: 'folds above 50', text: 'version: 1\nfit:\n  folds: 1000\n', line: 3, key: 'fit.folds', message: /from 2 to 50, got 1000/ },
+    { name: 'zero max_operations', text: 'version: 1\ncaps:\n  max_operations: 0\n', line: 3, key: 'caps.max_operations' },
+    { name: 'zero max_model_seconds', text: 'version: 1\ncaps:\n  max_model_seconds: 0\n', line: 3, key: 'caps.max_model_seconds' },
+    { name: 'max_model_seconds above a day', text: 'version: 1\ncaps:\n  max_model_seconds: 100000\n', line: 3, key: 'caps.max_model_seconds' },
     { name: 'duplicate key', text: 'version: 1\nversion: 1\n', code: 'yaml-duplicate-key', line: 2, key: 'version' },
     { name: 'syntax error', text: 'version: 1\nmodels: [a\n', code: 'yaml-syntax', line: 3 },
   ];

@@ -54,6 +54,27 @@ describe('leakage: hold-out rows equal to a training row', () => {
     expect(findLeakage(data([[1, 1]]), data([])).holdoutRows).toBe(0);
   });
 
+  it('stays linear when both files repeat one row: 200,000 x 200,000 equal rows are counted in linear time', () => {
+    // Before: each training row walked a chain of every equal hold-out row, 4e10 comparisons.
+    const n = 200_000;
+    const same = (rows: number, y: (i: number) => number): ReturnType<typeof data> => ({
+      inputs: [new Float64Array(rows).fill(1), new Float64Array(rows).fill(2)],
+      y: Float64Array.from({ length: rows }, (_, i) => y(i)),
+      rows,
+      lines: Int32Array.from({ length: rows }, (_, i) => i + 2),
+    });
+    const started = performance.now();
+    // Hold-out targets 0..n-1; training targets only even numbers: every row matches on its
+    // inputs, the even-target half on its target too.
+    const leak = findLeakage(same(n, (i) => 2 * i), same(n, (i) => i));
+    const ms = performance.now() - started;
+    expect(leak.inputMatches).toBe(n);
+    expect(leak.fullMatches).toBe(n / 2);
+    expect(leak.holdoutLines).toEqual([2, 3, 4, 5, 6]);
+    expect(leak.trainLines).toEqual([2, 2, 2, 2, 2]);
+    expect(ms, `${ms.toFixed(0)} ms`).toBeLessThan(3000);
+  });
+
   it('matches the count of a naive all-pairs comparison on 2,000 random rows with planted copies', () => {
     let s = 7;
     const next = (): number => {

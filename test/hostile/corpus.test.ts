@@ -16,7 +16,7 @@ const written = new Map<string, CaseDirs>();
 function dirsOf(c: CorpusCase): CaseDirs {
   let dirs = written.get(c.id);
   if (!dirs) {
-    dirs = writeCase(c.files, c.id);
+    dirs = writeCase(c.files, c.id, c.base);
     written.set(c.id, dirs);
   }
   return dirs;

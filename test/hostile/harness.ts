@@ -47,6 +47,17 @@ export interface CaseDirs {
   repo: string;
   /** A sibling folder outside the repository, holding files with {@link SECRET}. */
   outside: string;
+  /**
+   * When the case has a base commit: its SHA. The repository is then a git repository whose one
+   * commit holds the base files, and whose working tree holds the case's files (the pull request).
+   */
+  baseSha?: string;
+}
+
+/** Runs git in `cwd` with a fixed author and date. */
+function git(cwd: string, ...args: string[]): string {
+  const env = { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com', GIT_AUTHOR_DATE: '2024-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2024-01-01T00:00:00Z' };
+  return execFileSync('git', args, { cwd, encoding: 'utf8', env }).trim();
 }
 
 /** Files every case gets outside its repository: a CSV, a YAML settings file and a descriptor, each carrying {@link SECRET}. */
@@ -62,14 +73,35 @@ export function outsideFiles(): Record<string, string> {
 /**
  * Writes a case's files into a new temporary folder: `repo/` and `outside/`.
  * `$OUTSIDE` in text files and link targets becomes the outside folder's absolute path.
+ * With `base` files, those are committed first (the base commit of a pull request), then removed
+ * from the working tree, which gets the case's files (the pull request's head, not committed).
  */
-export function writeCase(files: Record<string, FileSpec>, label = 'case'): CaseDirs {
+export function writeCase(files: Record<string, FileSpec>, label = 'case', base?: Record<string, FileSpec>): CaseDirs {
+  if (base === undefined) return writeFiles(files, label);
+  const dirs = writeFiles(base, label);
+  git(dirs.repo, 'init', '-q', '-b', 'main');
+  git(dirs.repo, 'add', '-A');
+  git(dirs.repo, 'commit', '-q', '-m', 'base');
+  const baseSha = git(dirs.repo, 'rev-parse', 'HEAD');
+  for (const rel of Object.keys(base)) rmSync(path.join(dirs.repo, rel), { force: true });
+  placeFiles(dirs, files);
+  return { ...dirs, baseSha };
+}
+
+function writeFiles(files: Record<string, FileSpec>, label: string): CaseDirs {
   const base = mkdtempSync(path.join(tmpdir(), `fitgate-hostile-${label.replace(/[^a-z0-9-]/gi, '').slice(0, 30)}-`));
   const repo = path.join(base, 'repo');
   const outside = path.join(base, 'outside');
   mkdirSync(repo);
   mkdirSync(outside);
   for (const [name, text] of Object.entries(outsideFiles())) writeFileSync(path.join(outside, name), text);
+  const dirs = { base, repo, outside };
+  placeFiles(dirs, files);
+  return dirs;
+}
+
+/** Writes files into a case's repository (`$OUTSIDE` replaced). */
+function placeFiles({ repo, outside }: CaseDirs, files: Record<string, FileSpec>): void {
   for (const [rel, spec] of Object.entries(files)) {
     const full = path.join(repo, rel);
     mkdirSync(path.dirname(full), { recursive: true });
@@ -83,7 +115,6 @@ export function writeCase(files: Record<string, FileSpec>, label = 'case'): Case
       execFileSync('truncate', ['-s', String(spec.sparseBytes), full]);
     } else writeFileSync(full, spec.make());
   }
-  return { base, repo, outside };
 }
 
 /** Replaces `$OUTSIDE` in arguments and input values. */
@@ -241,9 +272,10 @@ export function parseOutputs(text: string): Record<string, string> {
 }
 
 /**
- * Runs `node <action bundle>` as the runner would on a push: `GITHUB_WORKSPACE` at the case's
- * repository, `INPUT_*` variables (defaults as in action.yml, token set), temporary
- * GITHUB_OUTPUT, GITHUB_STEP_SUMMARY and RUNNER_TEMP.
+ * Runs `node <action bundle>` as the runner would on a push (on a pull request whose base is the
+ * case's base commit, when it has one): `GITHUB_WORKSPACE` at the case's repository, `INPUT_*`
+ * variables (defaults as in action.yml, token set), temporary GITHUB_OUTPUT, GITHUB_STEP_SUMMARY
+ * and RUNNER_TEMP.
  * @param inputs extra inputs by name (`config`, `fail-on`, ...); `$OUTSIDE` is replaced
  * @param timeoutMs the run is killed after this long; default 20 s
  * @param extraEnv variables set after the others (a pull-request event, `GITHUB_API_URL`); default none
@@ -272,6 +304,14 @@ export async function runAction(dirs: CaseDirs, inputs: Record<string, string> =
     'INPUT_FAIL-ON': 'fail',
     'INPUT_GITHUB-TOKEN': TOKEN,
   };
+  if (dirs.baseSha !== undefined) {
+    const eventFile = path.join(files, 'event.json');
+    writeFileSync(eventFile, JSON.stringify({ action: 'synchronize', number: 1, pull_request: { number: 1, base: { sha: dirs.baseSha, ref: 'main' } }, repository: { name: 'models', owner: { login: 'acme' } } }));
+    env.GITHUB_EVENT_NAME = 'pull_request';
+    env.GITHUB_EVENT_PATH = eventFile;
+    // Nothing may reach the network: the comment is left out (no API of our own here).
+    env.INPUT_COMMENT = 'false';
+  }
   for (const [name, value] of Object.entries(inputs)) env[`INPUT_${name.toUpperCase()}`] = fill(value, dirs);
   Object.assign(env, extraEnv);
   const run = await spawnNode(action, [], { cwd: dirs.repo, env, timeoutMs });

@@ -76,7 +76,7 @@ describe('buildChartData through the pipeline', () => {
     const charts = one?.charts;
     if (!charts) throw new Error(`no chart data: ${JSON.stringify(one?.error)}`);
     expect(charts.train).toMatchObject({ rows: 2500, shown: MAX_CHART_POINTS, thinned: true });
-    expect(charts.train.thinning).toBe('2000 of 2500 rows, evenly spaced through the file');
+    expect(charts.train.thinning).toBe('1000 of 2500 rows, evenly spaced through the file');
     expect(charts.train.actual.length).toBe(MAX_CHART_POINTS);
     expect(charts.train.x[0].length).toBe(MAX_CHART_POINTS);
     expect(charts.train.lines[0]).toBe(2);

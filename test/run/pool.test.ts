@@ -3,10 +3,14 @@ import { pathToFileURL } from 'node:url';
 import path from 'node:path';
 import { transpileSources } from './transpile.js';
 
-type Task = { n: number; delayMs?: number; fail?: 'input' | 'error' };
+type Task = { n: number; delayMs?: number; fail?: 'input' | 'error'; spin?: boolean };
 type Reply = { n: number; square: number; thread: number };
 type PoolModule = {
-  runPool: (tasks: Task[], options: { jobs: number; script: string | URL; workerData?: unknown }) => Promise<Reply[]>;
+  runPool: (
+    tasks: Task[],
+    options: { jobs: number; script: string | URL; workerData?: unknown },
+    limit?: { ms: number; onTimeLimit: (task: Task, elapsedMs: number) => Reply },
+  ) => Promise<Reply[]>;
   defaultJobs: () => number;
 };
 type ErrorsModule = { InputError: new (...args: never[]) => Error & { code: string; location: Record<string, unknown> } };
@@ -69,6 +73,29 @@ describe('runPool', () => {
   it('rejects when a worker script cannot start', async () => {
     const missing = new URL('../parallel/fixtures/no-such-worker.mjs', import.meta.url);
     await expect(pool.runPool([{ n: 1 }], { jobs: 1, script: missing, workerData })).rejects.toThrow();
+  });
+
+  it('ends a worker stuck past the time limit: that task gets its time-limit result, the others finish on a new worker', async () => {
+    const tasks: Task[] = [{ n: 1 }, { n: 2, spin: true }, { n: 3 }, { n: 4, spin: true }, { n: 5 }, { n: 6 }];
+    const stopped: { n: number; elapsedMs: number }[] = [];
+    const started = performance.now();
+    const results = await pool.runPool(tasks, { jobs: 2, script, workerData }, {
+      ms: 300,
+      onTimeLimit: (task, elapsedMs) => {
+        stopped.push({ n: task.n, elapsedMs });
+        return { n: task.n, square: -1, thread: -1 };
+      },
+    });
+    expect(results.map((r) => [r.n, r.square])).toEqual([[1, 1], [2, -1], [3, 9], [4, -1], [5, 25], [6, 36]]);
+    expect(stopped.map((s) => s.n).sort()).toEqual([2, 4]);
+    for (const s of stopped) expect(s.elapsedMs).toBeGreaterThanOrEqual(299);
+    // Two stuck tasks on two workers: about two limits, not an endless wait.
+    expect(performance.now() - started).toBeLessThan(15_000);
+  });
+
+  it('keeps a task that answers within the time limit', async () => {
+    const results = await pool.runPool([{ n: 7, delayMs: 20 }], { jobs: 1, script, workerData }, { ms: 10_000, onTimeLimit: () => ({ n: -1, square: -1, thread: -1 }) });
+    expect(results.map((r) => r.square)).toEqual([49]);
   });
 
   it('sizes the default to the cores', () => {

@@ -3,7 +3,7 @@
 "use strict";
 import func1Module from "ajv/dist/runtime/ucs2length.js";
 export const validateSettings = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:settings:1","title":"fitgate repository settings (fitgate.yml)","description":"Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.","type":"object","required":["version"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"models":{"description":"Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.","type":"array","minItems":1,"default":["**/*.model.yml"],"items":{"description":"A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.","type":"string","minLength":1}},"limits":{"$ref":"#/$defs/limits","description":"Limits for every model; a descriptor's own `limits` win key by key."},"fit":{"description":"Defaults for the `fit` keys that a descriptor leaves out.","type":"object","additionalProperties":false,"properties":{"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"caps":{"description":"Resource caps that guard memory and time; raise them for large models.","type":"object","additionalProperties":false,"properties":{"max_file_mb":{"description":"Largest data file, in MiB.","type":"number","exclusiveMinimum":0,"default":512},"max_cells":{"description":"Largest training rows x fitted parameters.","type":"integer","minimum":1,"default":200000000},"max_operations":{"description":"Largest estimated work of one model, in operations (one operation is about one floating-point multiply-add): the passes over the training rows, the decompositions of the p x p factors, cross-validation, the swing scan and the complexity sweep, estimated from the rows, columns, folds and sweep settings before the first pass over the rows (docs/scale.md gives the formula). A model over it is refused with its estimate; raise this to allow it.","type":"number","exclusiveMinimum":0,"default":20000000000},"max_model_seconds":{"description":"Time limit of one model, in seconds of wall-clock time from reading its files to its last check. A model still running then stops and becomes that model's error (code `time-limit`); every other model is still checked.","type":"number","exclusiveMinimum":0,"maximum":86400,"default":40}}}},"$defs":{"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const func1 = typeof func1Module === "function" ? func1Module : func1Module.default;
 const schema20 = {"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}};
 const func2 = Object.prototype.hasOwnProperty;
@@ -584,8 +584,8 @@ vErrors.push(err8);
 errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
-if(data5 < 2 || isNaN(data5)){
-const err9 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema19.properties.fit.properties.folds,data:data5};
+if(data5 > 50 || isNaN(data5)){
+const err9 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema19.properties.fit.properties.folds,data:data5};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -594,12 +594,8 @@ vErrors.push(err9);
 }
 errors++;
 }
-}
-}
-if(data4.fold_order !== undefined){
-let data6 = data4.fold_order;
-if(!((data6 === "shuffled") || (data6 === "blocks"))){
-const err10 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.fold_order.enum,parentSchema:schema19.properties.fit.properties.fold_order,data:data6};
+if(data5 < 2 || isNaN(data5)){
+const err10 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema19.properties.fit.properties.folds,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -609,10 +605,11 @@ vErrors.push(err10);
 errors++;
 }
 }
-if(data4.seed !== undefined){
-let data7 = data4.seed;
-if(!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))){
-const err11 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.fit.properties.seed.type,parentSchema:schema19.properties.fit.properties.seed,data:data7};
+}
+if(data4.fold_order !== undefined){
+let data6 = data4.fold_order;
+if(!((data6 === "shuffled") || (data6 === "blocks"))){
+const err11 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.fold_order.enum,parentSchema:schema19.properties.fit.properties.fold_order,data:data6};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -621,9 +618,11 @@ vErrors.push(err11);
 }
 errors++;
 }
-if((typeof data7 == "number") && (isFinite(data7))){
-if(data7 > 4294967295 || isNaN(data7)){
-const err12 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema19.properties.fit.properties.seed,data:data7};
+}
+if(data4.seed !== undefined){
+let data7 = data4.seed;
+if(!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))){
+const err12 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.fit.properties.seed.type,parentSchema:schema19.properties.fit.properties.seed,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -632,8 +631,9 @@ vErrors.push(err12);
 }
 errors++;
 }
-if(data7 < 0 || isNaN(data7)){
-const err13 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema19.properties.fit.properties.seed,data:data7};
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 > 4294967295 || isNaN(data7)){
+const err13 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema19.properties.fit.properties.seed,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -642,12 +642,8 @@ vErrors.push(err13);
 }
 errors++;
 }
-}
-}
-if(data4.parameter_count !== undefined){
-let data8 = data4.parameter_count;
-if(!((data8 === "columns") || (data8 === "effective"))){
-const err14 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.parameter_count.enum,parentSchema:schema19.properties.fit.properties.parameter_count,data:data8};
+if(data7 < 0 || isNaN(data7)){
+const err14 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema19.properties.fit.properties.seed,data:data7};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -658,8 +654,10 @@ errors++;
 }
 }
 }
-else {
-const err15 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.fit.type,parentSchema:schema19.properties.fit,data:data4};
+if(data4.parameter_count !== undefined){
+let data8 = data4.parameter_count;
+if(!((data8 === "columns") || (data8 === "effective"))){
+const err15 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema19.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema19.properties.fit.properties.parameter_count.enum,parentSchema:schema19.properties.fit.properties.parameter_count,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -669,12 +667,9 @@ vErrors.push(err15);
 errors++;
 }
 }
-if(data.caps !== undefined){
-let data9 = data.caps;
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
-for(const key2 in data9){
-if(!((key2 === "max_file_mb") || (key2 === "max_cells"))){
-const err16 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema19.properties.caps,data:data9};
+}
+else {
+const err16 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.fit.type,parentSchema:schema19.properties.fit,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -684,11 +679,12 @@ vErrors.push(err16);
 errors++;
 }
 }
-if(data9.max_file_mb !== undefined){
-let data10 = data9.max_file_mb;
-if((typeof data10 == "number") && (isFinite(data10))){
-if(data10 <= 0 || isNaN(data10)){
-const err17 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
+if(data.caps !== undefined){
+let data9 = data.caps;
+if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+for(const key2 in data9){
+if(!((((key2 === "max_file_mb") || (key2 === "max_cells")) || (key2 === "max_operations")) || (key2 === "max_model_seconds"))){
+const err17 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema19.properties.caps,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -698,8 +694,11 @@ vErrors.push(err17);
 errors++;
 }
 }
-else {
-const err18 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_file_mb.type,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
+if(data9.max_file_mb !== undefined){
+let data10 = data9.max_file_mb;
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 <= 0 || isNaN(data10)){
+const err18 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -709,10 +708,8 @@ vErrors.push(err18);
 errors++;
 }
 }
-if(data9.max_cells !== undefined){
-let data11 = data9.max_cells;
-if(!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))){
-const err19 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.caps.properties.max_cells.type,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
+else {
+const err19 = {instancePath:instancePath+"/caps/max_file_mb",schemaPath:"#/properties/caps/properties/max_file_mb/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_file_mb.type,parentSchema:schema19.properties.caps.properties.max_file_mb,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -721,9 +718,11 @@ vErrors.push(err19);
 }
 errors++;
 }
-if((typeof data11 == "number") && (isFinite(data11))){
-if(data11 < 1 || isNaN(data11)){
-const err20 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
+}
+if(data9.max_cells !== undefined){
+let data11 = data9.max_cells;
+if(!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))){
+const err20 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema19.properties.caps.properties.max_cells.type,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -732,11 +731,9 @@ vErrors.push(err20);
 }
 errors++;
 }
-}
-}
-}
-else {
-const err21 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.caps.type,parentSchema:schema19.properties.caps,data:data9};
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 < 1 || isNaN(data11)){
+const err21 = {instancePath:instancePath+"/caps/max_cells",schemaPath:"#/properties/caps/properties/max_cells/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema19.properties.caps.properties.max_cells,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -747,13 +744,86 @@ errors++;
 }
 }
 }
-else {
-const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.type,parentSchema:schema19,data};
+if(data9.max_operations !== undefined){
+let data12 = data9.max_operations;
+if((typeof data12 == "number") && (isFinite(data12))){
+if(data12 <= 0 || isNaN(data12)){
+const err22 = {instancePath:instancePath+"/caps/max_operations",schemaPath:"#/properties/caps/properties/max_operations/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_operations,data:data12};
 if(vErrors === null){
 vErrors = [err22];
 }
 else {
 vErrors.push(err22);
+}
+errors++;
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/caps/max_operations",schemaPath:"#/properties/caps/properties/max_operations/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_operations.type,parentSchema:schema19.properties.caps.properties.max_operations,data:data12};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data9.max_model_seconds !== undefined){
+let data13 = data9.max_model_seconds;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 > 86400 || isNaN(data13)){
+const err24 = {instancePath:instancePath+"/caps/max_model_seconds",schemaPath:"#/properties/caps/properties/max_model_seconds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 86400},message:"must be <= 86400",schema:86400,parentSchema:schema19.properties.caps.properties.max_model_seconds,data:data13};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data13 <= 0 || isNaN(data13)){
+const err25 = {instancePath:instancePath+"/caps/max_model_seconds",schemaPath:"#/properties/caps/properties/max_model_seconds/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19.properties.caps.properties.max_model_seconds,data:data13};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/caps/max_model_seconds",schemaPath:"#/properties/caps/properties/max_model_seconds/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.properties.caps.properties.max_model_seconds.type,parentSchema:schema19.properties.caps.properties.max_model_seconds,data:data13};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+}
+else {
+const err27 = {instancePath:instancePath+"/caps",schemaPath:"#/properties/caps/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.properties.caps.type,parentSchema:schema19.properties.caps,data:data9};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+}
+else {
+const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema19.type,parentSchema:schema19,data};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
 }
 errors++;
 }
@@ -763,7 +833,7 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate75;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
@@ -3749,8 +3819,8 @@ vErrors.push(err35);
 errors++;
 }
 if((typeof data16 == "number") && (isFinite(data16))){
-if(data16 < 2 || isNaN(data16)){
-const err36 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data16};
+if(data16 > 50 || isNaN(data16)){
+const err36 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3759,12 +3829,8 @@ vErrors.push(err36);
 }
 errors++;
 }
-}
-}
-if(data12.fold_order !== undefined){
-let data17 = data12.fold_order;
-if(!((data17 === "shuffled") || (data17 === "blocks"))){
-const err37 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data17};
+if(data16 < 2 || isNaN(data16)){
+const err37 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3774,10 +3840,11 @@ vErrors.push(err37);
 errors++;
 }
 }
-if(data12.seed !== undefined){
-let data18 = data12.seed;
-if(!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))){
-const err38 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data18};
+}
+if(data12.fold_order !== undefined){
+let data17 = data12.fold_order;
+if(!((data17 === "shuffled") || (data17 === "blocks"))){
+const err38 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3786,9 +3853,11 @@ vErrors.push(err38);
 }
 errors++;
 }
-if((typeof data18 == "number") && (isFinite(data18))){
-if(data18 > 4294967295 || isNaN(data18)){
-const err39 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data18};
+}
+if(data12.seed !== undefined){
+let data18 = data12.seed;
+if(!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))){
+const err39 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data18};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -3797,8 +3866,9 @@ vErrors.push(err39);
 }
 errors++;
 }
-if(data18 < 0 || isNaN(data18)){
-const err40 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data18};
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 > 4294967295 || isNaN(data18)){
+const err40 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -3807,12 +3877,8 @@ vErrors.push(err40);
 }
 errors++;
 }
-}
-}
-if(data12.parameter_count !== undefined){
-let data19 = data12.parameter_count;
-if(!((data19 === "columns") || (data19 === "effective"))){
-const err41 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data19};
+if(data18 < 0 || isNaN(data18)){
+const err41 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data18};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -3822,11 +3888,11 @@ vErrors.push(err41);
 errors++;
 }
 }
-if(data12.threshold !== undefined){
-let data20 = data12.threshold;
-if((typeof data20 == "number") && (isFinite(data20))){
-if(data20 >= 1 || isNaN(data20)){
-const err42 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data20};
+}
+if(data12.parameter_count !== undefined){
+let data19 = data12.parameter_count;
+if(!((data19 === "columns") || (data19 === "effective"))){
+const err42 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data19};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -3835,8 +3901,12 @@ vErrors.push(err42);
 }
 errors++;
 }
-if(data20 <= 0 || isNaN(data20)){
-const err43 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data20};
+}
+if(data12.threshold !== undefined){
+let data20 = data12.threshold;
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 >= 1 || isNaN(data20)){
+const err43 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data20};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -3845,9 +3915,8 @@ vErrors.push(err43);
 }
 errors++;
 }
-}
-else {
-const err44 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data20};
+if(data20 <= 0 || isNaN(data20)){
+const err44 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data20};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -3857,9 +3926,8 @@ vErrors.push(err44);
 errors++;
 }
 }
-}
 else {
-const err45 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data12};
+const err45 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data20};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -3869,11 +3937,9 @@ vErrors.push(err45);
 errors++;
 }
 }
-if(data.coefficients !== undefined){
-let data21 = data.coefficients;
-if(Array.isArray(data21)){
-if(data21.length < 1){
-const err46 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data21};
+}
+else {
+const err46 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data12};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -3882,11 +3948,12 @@ vErrors.push(err46);
 }
 errors++;
 }
-const len1 = data21.length;
-for(let i1=0; i1<len1; i1++){
-let data22 = data21[i1];
-if(!((typeof data22 == "number") && (isFinite(data22)))){
-const err47 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data22};
+}
+if(data.coefficients !== undefined){
+let data21 = data.coefficients;
+if(Array.isArray(data21)){
+if(data21.length < 1){
+const err47 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data21};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3895,15 +3962,28 @@ vErrors.push(err47);
 }
 errors++;
 }
-}
-}
-else {
-const err48 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data21};
+const len1 = data21.length;
+for(let i1=0; i1<len1; i1++){
+let data22 = data21[i1];
+if(!((typeof data22 == "number") && (isFinite(data22)))){
+const err48 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data22};
 if(vErrors === null){
 vErrors = [err48];
 }
 else {
 vErrors.push(err48);
+}
+errors++;
+}
+}
+}
+else {
+const err49 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data21};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
 }
 errors++;
 }
@@ -3916,12 +3996,12 @@ errors = vErrors.length;
 }
 }
 else {
-const err49 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+const err50 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
 if(vErrors === null){
-vErrors = [err49];
+vErrors = [err50];
 }
 else {
-vErrors.push(err49);
+vErrors.push(err50);
 }
 errors++;
 }

@@ -5,6 +5,7 @@
  * are vermillion. When sizes span three decades or more the axis is logarithmic.
  */
 import { formatNumber } from '../../core/format.js';
+import { maxOf, minOf } from '../../core/extremes.js';
 import type { CoefficientData } from '../../result/chart-types.js';
 import { escapeHtml } from '../escape.js';
 import { frame, MARGIN, plotArea, px, WIDTH, type ChartOptions } from './frame.js';
@@ -34,15 +35,15 @@ export function coefficientBarsChart(coef: CoefficientData, options: ChartOption
       .slice(0, MAX_BARS)
       .sort((a, b) => a.j - b.j);
   }
-  const left = Math.min(170, 16 + Math.max(...shown.map((b) => shorten(b.name).length)) * 6.4);
+  const left = Math.min(170, 16 + maxOf(shown.map((b) => shorten(b.name).length)) * 6.4);
   const height = Math.max(180, MARGIN.top + MARGIN.bottom + shown.length * (BAR + GAP) + GAP);
   const { x0, y0, x1, y1 } = plotArea(WIDTH, height, left);
   const sizes = shown.map((b) => (b.v === null ? null : Math.abs(b.v)));
   const finite = sizes.filter((v): v is number => v !== null);
   const refs = [coef.limit, coef.warn].filter((v): v is number => v !== null && v > 0);
-  const top = Math.max(...finite, ...refs, 1e-12);
+  const top = maxOf([...finite, ...refs], 1e-12);
   const positives = [...finite, ...refs].filter((v) => v > 0);
-  const bottom = positives.length ? Math.min(...positives) : top;
+  const bottom = positives.length ? minOf(positives) : top;
   const log = top / bottom >= 1000;
   const sx = log
     ? logScale([10 ** Math.floor(Math.log10(bottom)), 10 ** Math.ceil(Math.log10(top * 1.05))], [x0, x1])
@@ -77,7 +78,7 @@ export function coefficientBarsChart(coef: CoefficientData, options: ChartOption
   if (coef.limit !== null) legend.push({ mark: legendLine(COLOURS.limit, DASHES.limit, 1.8), label: `fail limit ${formatNumber(coef.limit)}` });
   if (coef.warn !== null) legend.push({ mark: legendLine(COLOURS.warn, DASHES.warn, 1.6), label: `warning ${formatNumber(coef.warn)}` });
   const overCount = sizes.filter((v) => v === null || (coef.limit !== null && v > coef.limit)).length;
-  const largest = finite.length ? Math.max(...finite) : Number.NaN;
+  const largest = finite.length ? maxOf(finite) : Number.NaN;
   return frame({
     id,
     kind: 'coefficients',

@@ -5,6 +5,7 @@
  * (dashed vertical line) marked and labelled.
  */
 import { formatNumber } from '../../core/format.js';
+import { minOf } from '../../core/extremes.js';
 import type { SweepData } from '../../result/chart-types.js';
 import { escapeHtml } from '../escape.js';
 import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
@@ -19,12 +20,17 @@ export function cvCurveChart(sweep: SweepData, options: ChartOptions): string {
   const { x0, y0, x1, y1 } = plotArea();
   // On a log axis a setting of 0 (no penalty) sits one decade left of the smallest positive setting, labelled 0.
   const positives = sweep.settings.filter((v) => v > 0);
-  const zeroAt = sweep.log && positives.length ? Math.min(...positives) / 10 : 0;
+  const zeroAt = sweep.log && positives.length ? minOf(positives) / 10 : 0;
   const s = sweep.settings.map((v) => (sweep.log && v <= 0 ? zeroAt : v));
   const xDomain: [number, number] = [s[0], s[s.length - 1]];
   const sx = sweep.log ? logScale(xDomain, [x0 + 8, x1 - 8]) : linearScale(s.length > 1 ? xDomain : pad(xDomain), [x0 + 8, x1 - 8]);
   const hasZero = sweep.log && sweep.settings.some((v) => v <= 0);
-  if (hasZero) sx.ticks.splice(0, sx.ticks.length, zeroAt, ...sx.ticks.filter((t) => t > zeroAt * 3));
+  if (hasZero) {
+    const kept = sx.ticks.filter((t) => t > zeroAt * 3);
+    sx.ticks.length = 0;
+    sx.ticks.push(zeroAt);
+    for (const t of kept) sx.ticks.push(t);
+  }
   const yRange = extent(sweep.cv, sweep.train ?? []) ?? [0, 1];
   const yLog = yRange[0] > 0 && yRange[1] / yRange[0] >= 100;
   const sy = yLog ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0]) : linearScale(pad(yRange, 0.08), [y1, y0]);

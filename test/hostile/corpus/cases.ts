@@ -34,6 +34,11 @@ export interface CorpusCase {
   verdicts?: Record<string, string>;
   /** `merge`: the CLI runs `fitgate merge <args>` (report paths relative to the case's base folder, e.g. `repo/a.json`). Default `check`. */
   command?: 'merge';
+  /**
+   * The files of a base commit: the case is then a pull request against it (the CLI gets
+   * `--base HEAD`, the action a pull_request event). Default none.
+   */
+  base?: Record<string, FileSpec>;
 }
 
 const m = 'models/m.model.yml';
@@ -221,6 +226,57 @@ export const CASES: CorpusCase[] = [
   { id: 'cap-file-size-sparse', about: 'a 3 GiB (sparse) training file against the default 512 MiB cap', files: repo({ [train]: { sparseBytes: 3 * 1024 ** 3 } }), exit: 2, words: ['data/train.csv', 'caps.max_file_mb'] },
   { id: 'cap-cells', about: 'rows x parameters over caps.max_cells', files: repo({ [settings]: `${SETTINGS}caps:\n  max_cells: 10\n` }), exit: 2, words: ['models/m.model.yml', 'caps.max_cells'] },
   { id: 'cap-parameters', about: '10,000 radial centres', files: withTerms('  - rbf: { of: x, centers: { from: 0, to: 30, count: 10000 }, width: 1 }\n'), exit: 2, words: ['models/m.model.yml', 'design columns'] },
+  { id: 'cap-parameters-at-samples', about: 'a radial centre at each of 150,000 training rows (an array that large once overflowed the call stack)', files: repo({ [train]: { make: () => rows(150_000) }, [m]: descriptor({ terms: '  - rbf: { of: x, centers: at-samples, width: 1 }\n' }) }), exit: 2, words: ['models/m.model.yml', 'design columns'] },
+
+  // Bounded work: the estimate, the folds, the time limit
+  { id: 'cap-operations', about: 'a model over caps.max_operations', files: repo({ [settings]: `${SETTINGS}caps:\n  max_operations: 1000\n` }), exit: 2, words: ['models/m.model.yml', 'caps.max_operations', 'estimated work'] },
+  { id: 'cap-operations-default', about: '200 radial columns on 20,000 rows with a width sweep, over the default estimate cap', files: repo({ [train]: { make: () => rows(20_000, 0, 0.0015) }, [m]: descriptor({ terms: '  - rbf: { of: x, centers: { from: 0, to: 30, count: 199 }, width: 0.2 }\n' }) }), exit: 2, words: ['models/m.model.yml', 'caps.max_operations', 'complexity sweep'] },
+  { id: 'schema-folds-too-many', about: '1,000 folds (at most 50)', files: withExtra('fit:\n  folds: 1000\n'), exit: 2, words: ['models/m.model.yml:', 'folds', 'from 2 to 50'] },
+  { id: 'schema-folds-too-many-settings', about: '1,000 folds as the settings default', files: repo({ [settings]: `${SETTINGS}fit:\n  folds: 1000\n` }), exit: 2, words: ['fitgate.yml:', 'folds', 'from 2 to 50'] },
+  {
+    id: 'leakage-repeated-rows',
+    about: 'one input value repeated in 100,000 training and 100,000 hold-out rows (the leakage scan once compared every pair)',
+    files: repo({ [train]: { make: () => rows(100_000).replace(/\n[^,\n]+,/g, '\n1,') }, [holdout]: { make: () => rows(100_000).replace(/\n[^,\n]+,/g, '\n1,') } }),
+    exit: 1,
+    words: ['leakage'],
+    verdicts: { m: 'fail' },
+  },
+  {
+    id: 'time-limit',
+    about: 'a model of minutes of work (its estimate let through) under a 4 s time limit, beside a small one',
+    files: repo({
+      [settings]: `${SETTINGS}caps:\n  max_model_seconds: 4\n  max_operations: 1e15\n`,
+      'data/big.csv': { make: () => rows(60_000, 0, 0.0005) },
+      'models/heavy.model.yml': descriptor({ name: 'heavy', train: '../data/big.csv', terms: '  - rbf: { of: x, centers: { from: 0, to: 30, count: 150 }, width: 0.05 }\n' }),
+    }),
+    exit: 2,
+    words: ['models/heavy.model.yml', 'time limit of 4 s', 'caps.max_model_seconds'],
+    verdicts: { heavy: 'error', m: 'pass' },
+  },
+
+  // The base comparison cannot be dodged by renaming
+  {
+    id: 'base-rename-in-place',
+    about: 'a pull request that makes a model worse and renames it in its file, to escape base_change',
+    base: repo({ [m]: descriptor({ extra: 'limits:\n  base_change: 0.1\n' }) }),
+    files: repo({ [m]: descriptor({ name: 'm-renamed', extra: 'limits:\n  base_change: 0.1\n' }), [holdout]: rows(10, 0.5, 3).replace(/,([-\d.]+)\n/g, (_, y: string) => `,${(Number(y) + 3).toFixed(3)}\n`) }),
+    args: ['--base', 'HEAD'],
+    inputs: {},
+    exit: 1,
+    words: ['base-change', 'm-renamed is compared with m (models/m.model.yml) of the base commit, found by its descriptor path'],
+    verdicts: { 'm-renamed': 'fail' },
+  },
+  {
+    id: 'base-rename-and-move',
+    about: 'the same model renamed and moved to another descriptor file (found by its data files)',
+    base: repo({ [m]: descriptor({ extra: 'limits:\n  base_change: 0.1\n' }) }),
+    files: repo({ [m]: null, 'models/other.model.yml': descriptor({ name: 'other', extra: 'limits:\n  base_change: 0.1\n' }), [holdout]: rows(10, 0.5, 3).replace(/,([-\d.]+)\n/g, (_, y: string) => `,${(Number(y) + 3).toFixed(3)}\n`) }),
+    args: ['--base', 'HEAD'],
+    inputs: {},
+    exit: 1,
+    words: ['base-change', 'other is compared with m (models/m.model.yml) of the base commit, found by its data files'],
+    verdicts: { other: 'fail' },
+  },
 
   // Globs stay inside (Hardening item 3)
   { id: 'glob-dotdot-in-braces', about: 'a .. segment inside braces', files: repo({ [settings]: pattern('{..,models}/*.model.yml') }), exit: 2, words: ['fitgate.yml:3', '`..` segment'] },

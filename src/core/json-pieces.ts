@@ -1,0 +1,76 @@
+/**
+ * JSON text in pieces: exactly the text `JSON.stringify(value, null, 2)` gives, cut so that no
+ * piece holds more than one branch of the value. A report of any number of models is then written
+ * piece by piece and never held as one string (V8 refuses strings longer than about 2^29
+ * characters: "Invalid string length").
+ *
+ * Containers down to a depth are walked here, key by key and element by element; anything deeper
+ * is one `JSON.stringify` call, re-indented. Strings in JSON text never hold a raw line break, so
+ * the re-indenting cannot touch their content.
+ */
+
+/** Options of {@link jsonPieces}. */
+export interface JsonPiecesOptions {
+  /** Containers nested less deeply than this are walked; deeper values are stringified whole. Default 4. */
+  depth?: number;
+}
+
+const INDENT = '  ';
+
+/** The value JSON.stringify would write for `value` (its `toJSON` applied), or undefined when it writes nothing. */
+function prepared(value: unknown, key: string): unknown {
+  if (value !== null && typeof value === 'object' && typeof (value as { toJSON?: unknown }).toJSON === 'function') {
+    return (value as { toJSON: (key: string) => unknown }).toJSON(key);
+  }
+  return value;
+}
+
+function isWritten(value: unknown): boolean {
+  return value !== undefined && typeof value !== 'function' && typeof value !== 'symbol';
+}
+
+/**
+ * The pieces of `JSON.stringify(value, null, 2)`; joined, they are that text exactly (no final
+ * line break). A value JSON.stringify writes nothing for gives no pieces.
+ * @param value a JSON-compatible value (plain objects, arrays, strings, numbers, booleans, null)
+ * @param options how deep to walk; default 4 levels
+ */
+export function* jsonPieces(value: unknown, options: JsonPiecesOptions = {}): Generator<string> {
+  const v = prepared(value, '');
+  if (!isWritten(v)) return;
+  yield* piecesOf(v, 0, options.depth ?? 4);
+}
+
+function* piecesOf(value: unknown, level: number, depth: number): Generator<string> {
+  if (value === null || typeof value !== 'object' || level >= depth) {
+    const text = JSON.stringify(value, null, 2) ?? 'null';
+    yield level === 0 ? text : text.replace(/\n/g, `\n${INDENT.repeat(level)}`);
+    return;
+  }
+  const inner = INDENT.repeat(level + 1);
+  const outer = INDENT.repeat(level);
+  if (Array.isArray(value)) {
+    if (value.length === 0) {
+      yield '[]';
+      return;
+    }
+    yield '[';
+    for (let i = 0; i < value.length; i++) {
+      yield `${i === 0 ? '' : ','}\n${inner}`;
+      const element = prepared(value[i], String(i));
+      // In an array, what JSON.stringify writes nothing for is written as null.
+      yield* piecesOf(isWritten(element) ? element : null, level + 1, depth);
+    }
+    yield `\n${outer}]`;
+    return;
+  }
+  let first = true;
+  for (const key of Object.keys(value)) {
+    const element = prepared((value as Record<string, unknown>)[key], key);
+    if (!isWritten(element)) continue;
+    yield `${first ? '{' : ','}\n${inner}${JSON.stringify(key)}: `;
+    first = false;
+    yield* piecesOf(element, level + 1, depth);
+  }
+  yield first ? '{}' : `\n${outer}}`;
+}
