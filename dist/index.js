@@ -29255,8 +29255,9 @@ module.exports = {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5918);
-/* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4029);
+/* harmony import */ var _run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5148);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4771);
+/* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4029);
 /**
  * Evaluates every model as it was on a base commit, read with git from that commit (settings
  * file, descriptors and data alike), so that the head run can compare with it. Used by the
@@ -29268,27 +29269,29 @@ module.exports = {
 
 
 
+
 /** Hint for the action: how to make the base commit available. */
 const ACTION_FETCH_HINT = 'fetch it with `fetch-depth: 2` on actions/checkout (a pull_request checkout is the merge commit, whose first parent is the base). Models are not compared with the base branch in this run.';
 /** Hint for the command line. */
 const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`) or name a commit that exists locally. Models are not compared with a base in this run.';
 /**
- * The head run's options from the base commit: the baseline by model name and the base SHA, or
- * one note saying why there is no comparison.
+ * The head run's options from the base commit: the baseline by model name with each base model's
+ * data files (to match renamed models) and the base SHA, or one note saying why there is no
+ * comparison.
  * @param settings the head run's settings (the same settings file path and descriptors are read at the base)
  * @param revision the base commit: a SHA or any revision git understands
  * @param options the hint shown when git does not have the commit
  */
 async function evaluateBase(settings, revision, options) {
     const short = /^[0-9a-f]{40,64}$/.test(revision) ? revision.slice(0, 7) : revision;
-    const top = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__/* .tryGitTopLevel */ .ZS)(settings.root);
+    const top = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .tryGitTopLevel */ .ZS)(settings.root);
     if (top === null)
         return { notes: [`base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`] };
-    const sha = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__/* .tryResolveCommit */ .Fl)(settings.root, revision);
+    const sha = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .tryResolveCommit */ .Fl)(settings.root, revision);
     if (sha === null)
         return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
     const prefix = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(top), await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(settings.root)).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/');
-    const repo = (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_4__/* .createGitRepository */ .Zd)({ cwd: settings.root, commit: sha, prefix });
+    const repo = (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .createGitRepository */ .Zd)({ cwd: settings.root, commit: sha, prefix });
     try {
         // Explicitly named descriptors that do not exist at the base are new in the head.
         const descriptors = [];
@@ -29296,15 +29299,21 @@ async function evaluateBase(settings, revision, options) {
             if (await repo.isFile(d))
                 descriptors.push(d);
         const baseline = new Map();
+        const baselineData = new Map();
         if (settings.descriptors.length === 0 || descriptors.length > 0) {
             const configThere = await repo.isFile(settings.config);
             if (configThere || !settings.configExplicit) {
-                const base = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_3__/* .runPipeline */ .a)({ ...settings, descriptors }, repo);
+                // The data files of each base model, to find it again when a pull request renames and moves it.
+                const onDescriptors = (loaded) => {
+                    for (const d of loaded)
+                        baselineData.set(d.name, (0,_run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__/* .dataKey */ .gf)(d));
+                };
+                const base = await (0,_run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__/* .runPipeline */ .a)({ ...settings, descriptors }, repo, { onDescriptors });
                 for (const m of base.models)
                     baseline.set(m.name, m);
             }
         }
-        return { baseline, baseCommit: sha, notes: [] };
+        return { baseline, baselineData, baseCommit: sha, notes: [] };
     }
     catch (error) {
         return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .errorMessage */ .gJ)(error)}); models are not compared with it in this run.`] };
@@ -29486,10 +29495,27 @@ __nccwpck_require__.d(__webpack_exports__, {
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __nccwpck_require__(6760);
 var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/core/json-pieces.ts
+var json_pieces = __nccwpck_require__(1629);
 // EXTERNAL MODULE: ./src/report/runner-commands.ts
 var runner_commands = __nccwpck_require__(673);
 ;// CONCATENATED MODULE: ./src/report/json.ts
+/**
+ * The JSON report: the Result exactly as the pipeline returned it.
+ */
 
+
+/**
+ * The JSON report in pieces (one branch of the Result each, a model's charts at most), to write
+ * one after another: joined, they are {@link formatJson}'s text. A run of any number of models
+ * is written without ever being one string. Each piece is neutralised ({@link neutraliseJson});
+ * a piece never splits a JSON string, so no `##[` can span two pieces.
+ */
+function* jsonReport(result) {
+    for (const piece of (0,json_pieces/* jsonPieces */.M)(result))
+        yield (0,runner_commands/* neutraliseJson */.rb)(piece);
+    yield '\n';
+}
 /**
  * `JSON.stringify(result)` with two-space indentation and a final newline, where `##[` inside a
  * string is written `##\u005b` and U+2028, U+2029 and NEL as `\u` escapes
@@ -29497,13 +29523,13 @@ var runner_commands = __nccwpck_require__(673);
  * holds a runner command when it is printed in a CI step.
  */
 function formatJson(result) {
-    return `${(0,runner_commands/* neutraliseJson */.rb)(JSON.stringify(result, null, 2))}\n`;
+    return `${neutraliseJson(JSON.stringify(result, null, 2))}\n`;
 }
 
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __nccwpck_require__(1628);
-// EXTERNAL MODULE: ./src/entries/safe-write.ts
-var safe_write = __nccwpck_require__(9725);
+// EXTERNAL MODULE: ./src/entries/safe-write.ts + 1 modules
+var safe_write = __nccwpck_require__(5475);
 ;// CONCATENATED MODULE: ./src/action/outcome.ts
 /**
  * The step's outcome from a Result: the outputs, the JSON report file, and the one-line
@@ -29553,14 +29579,14 @@ function failureMessage(result, failOn) {
  * `fitgate-report-<step>.json` when `GITHUB_ACTION` names the step (several steps in one job).
  * Written with {@link writeFileSafely}: never through a link, atomically.
  * @param result the run's Result
- * @param dir folder to write in (`RUNNER_TEMP`; created when missing)
+ * @param dir folder to write in (created when missing); the report is written piece by piece, atomically
  * @param step the step's id (`GITHUB_ACTION`), or undefined
  * @throws InputError naming `RUNNER_TEMP` when the file is refused or cannot be written
  */
 async function writeReport(result, dir, step) {
     const slug = (step ?? '').replace(/[^A-Za-z0-9_.-]+/g, '-').replace(/^[-.]+/, '');
     const file = external_node_path_default().join(dir, slug === '' ? 'fitgate-report.json' : `fitgate-report-${slug}.json`);
-    (0,safe_write/* writeFileSafely */.kv)(file, formatJson(result), { option: 'RUNNER_TEMP', within: [] });
+    (0,safe_write/* writeFileSafely */.kv)(file, jsonReport(result), { option: 'RUNNER_TEMP', within: [] });
     return file;
 }
 
@@ -30405,6 +30431,7 @@ var limit_keys = __nccwpck_require__(7672);
  * built-in default as a comment. Pure text: the entry decides paths and writes.
  */
 
+
 /** The built-in default of `params_per_sample` (the parameter-ratio check; common practice: >= 10 rows per parameter). */
 const RATIO_DEFAULT = Number(limit_keys/* LIMIT_KEYS */.n.find((k) => k.key === 'params_per_sample')?.defaultSpec ?? 0.1);
 /** Columns of the first model's design: the intercept plus one per input (degree 1) or two (degree 2). */
@@ -30453,7 +30480,7 @@ function scalar(text) {
 /** Every limit key but those given, as commented lines `<prefix>key: default   # summary`. */
 function commentedLimits(prefix, except) {
     const rows = LIMIT_KEYS.filter((k) => !except.includes(k.key));
-    const width = Math.max(...rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
+    const width = maxOf(rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
     return rows.map((k) => `${prefix}${`${k.key}: ${specText(k.defaultSpec)}`.padEnd(width)}  # ${k.description}`);
 }
 /**
@@ -31281,6 +31308,10 @@ function targetVariation(x, y, n) {
 }
 
 ;// CONCATENATED MODULE: ./src/checks/swing-spikes.ts
+/**
+ * `swing-spikes`: spikes inside the band (the curve's total variation between the samples against the targets' own).
+ */
+
 
 
 
@@ -31323,7 +31354,7 @@ const swing_spikes_check = {
         const term = context.design.terms.find((t) => context.design.inputs.length === 1 && t.inputs.includes(spikes.worst ?? ''));
         return {
             value: spikes.ratio,
-            message: `along \`${spikes.worst}\` the predictions between the samples vary ${(0,format/* formatNumber */.Z)(spikes.ratio)} times as much as the training targets (total variation ${(0,format/* formatNumber */.Z)(worst?.curveVariation)} against ${(0,format/* formatNumber */.Z)(worst?.dataVariation)})`,
+            message: `along \`${(0,errors/* clip */.$Q)(spikes.worst ?? '')}\` the predictions between the samples vary ${(0,format/* formatNumber */.Z)(spikes.ratio)} times as much as the training targets (total variation ${(0,format/* formatNumber */.Z)(worst?.curveVariation)} against ${(0,format/* formatNumber */.Z)(worst?.dataVariation)})`,
             ...(term ? { line: term.spec.line } : {}),
             metrics: { swing_spikes: (0,result/* jsonNumber */.qj)(spikes.ratio) },
             detail: (0,json/* jsonRecord */.eJ)({
@@ -31541,6 +31572,103 @@ const LIMIT_KEYS = Object.freeze([
 
 /***/ }),
 
+/***/ 6343:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   B2: () => (/* binding */ Deadline),
+/* harmony export */   Ft: () => (/* binding */ checkDeadline),
+/* harmony export */   NE: () => (/* binding */ withDeadline),
+/* harmony export */   Qo: () => (/* binding */ TimeLimitExceeded)
+/* harmony export */ });
+/* harmony import */ var node_async_hooks__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6698);
+/* harmony import */ var node_async_hooks__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_async_hooks__WEBPACK_IMPORTED_MODULE_0__);
+/**
+ * The per-model time limit, checked cooperatively: a {@link Deadline} is started when a model
+ * starts, and the long stages call {@link checkDeadline} between their steps (after each block of
+ * rows in a pass, between the settings of a sweep, between decompositions, between checks). Past
+ * the deadline the check throws {@link TimeLimitExceeded}, which the run turns into that model's
+ * error; every other model goes on.
+ *
+ * The deadline travels with the model's asynchronous work through Node's AsyncLocalStorage, so
+ * the numerical modules need no extra parameter and two models in flight at once (in tests, say)
+ * never see each other's deadline. A step between two checks is not interrupted: the largest
+ * such steps are one block of rows and one p x p decomposition (p <= 200), well under a second.
+ * Models run on worker threads are also stopped from outside (see run/pool.ts).
+ */
+
+const monotonic = () => performance.now();
+/** Thrown by {@link checkDeadline} once the model's time is up. Not an InputError: the run decides what it means. */
+class TimeLimitExceeded extends Error {
+    /** The limit, in milliseconds. */
+    limitMs;
+    /** Time spent when the check fired, in milliseconds. */
+    elapsedMs;
+    /** The stage that checked (`fold pass`, `complexity sweep`, ...). */
+    stage;
+    constructor(limitMs, elapsedMs, stage) {
+        super(`the time limit of ${limitMs} ms was reached after ${Math.round(elapsedMs)} ms, in the ${stage}`);
+        this.name = 'TimeLimitExceeded';
+        this.limitMs = limitMs;
+        this.elapsedMs = elapsedMs;
+        this.stage = stage;
+    }
+}
+/** A point in time after which one model's work stops. */
+class Deadline {
+    /** The limit it was started with, in milliseconds. */
+    limitMs;
+    #start;
+    #now;
+    /**
+     * @param limitMs milliseconds from now (> 0; Infinity for none)
+     * @param now the clock; default `performance.now()`
+     */
+    constructor(limitMs, now = monotonic) {
+        this.limitMs = limitMs;
+        this.#now = now;
+        this.#start = now();
+    }
+    /** Milliseconds since the deadline was started. */
+    elapsed() {
+        return this.#now() - this.#start;
+    }
+    /** True once the limit has passed. */
+    expired() {
+        return this.elapsed() > this.limitMs;
+    }
+    /**
+     * Throws {@link TimeLimitExceeded} when the limit has passed (again at every later call).
+     * @param stage what is running, for the message
+     */
+    check(stage) {
+        const elapsed = this.elapsed();
+        if (elapsed > this.limitMs)
+            throw new TimeLimitExceeded(this.limitMs, elapsed, stage);
+    }
+}
+const current = new node_async_hooks__WEBPACK_IMPORTED_MODULE_0__.AsyncLocalStorage();
+/**
+ * Runs `work` with `deadline` as the deadline that {@link checkDeadline} checks, in `work` and in
+ * everything it starts (awaited promises included).
+ * @returns what `work` returns
+ */
+function withDeadline(deadline, work) {
+    return current.run(deadline, work);
+}
+/**
+ * Throws {@link TimeLimitExceeded} when the work running has a deadline and it has passed; does
+ * nothing outside {@link withDeadline}. Cheap (a clock read): call it between steps, not inside
+ * a loop over rows.
+ * @param stage what is running, for the message (`fold pass`, `swing scan`, ...)
+ */
+function checkDeadline(stage) {
+    current.getStore()?.check(stage);
+}
+
+
+/***/ }),
+
 /***/ 4296:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -31647,6 +31775,52 @@ function quoteValue(value, max = MAX_QUOTED) {
 
 /***/ }),
 
+/***/ 398:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   H: () => (/* binding */ minOf),
+/* harmony export */   _: () => (/* binding */ maxOf)
+/* harmony export */ });
+/**
+ * The largest and smallest of many numbers without spreading them into a call: `Math.max(...xs)`
+ * passes every element as an argument and throws a RangeError once an array is larger than the
+ * engine's argument limit (about 100,000 elements), so no module spreads an array into a call.
+ */
+/**
+ * The largest value, as `Math.max` gives it: NaN when any value is NaN, `start` when there are none.
+ * @param values any numbers
+ * @param start the result for no values; default -Infinity (as `Math.max()`)
+ */
+function maxOf(values, start = -Infinity) {
+    let best = start;
+    for (const v of values) {
+        if (Number.isNaN(v))
+            return Number.NaN;
+        if (v > best)
+            best = v;
+    }
+    return best;
+}
+/**
+ * The smallest value, as `Math.min` gives it: NaN when any value is NaN, `start` when there are none.
+ * @param values any numbers
+ * @param start the result for no values; default Infinity (as `Math.min()`)
+ */
+function minOf(values, start = Infinity) {
+    let best = start;
+    for (const v of values) {
+        if (Number.isNaN(v))
+            return Number.NaN;
+        if (v < best)
+            best = v;
+    }
+    return best;
+}
+
+
+/***/ }),
+
 /***/ 6228:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -31679,6 +31853,83 @@ function formatNumber(x, digits = 4) {
         return String(Math.round(x));
     const text = x.toPrecision(digits);
     return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
+}
+
+
+/***/ }),
+
+/***/ 1629:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   M: () => (/* binding */ jsonPieces)
+/* harmony export */ });
+/**
+ * JSON text in pieces: exactly the text `JSON.stringify(value, null, 2)` gives, cut so that no
+ * piece holds more than one branch of the value. A report of any number of models is then written
+ * piece by piece and never held as one string (V8 refuses strings longer than about 2^29
+ * characters: "Invalid string length").
+ *
+ * Containers down to a depth are walked here, key by key and element by element; anything deeper
+ * is one `JSON.stringify` call, re-indented. Strings in JSON text never hold a raw line break, so
+ * the re-indenting cannot touch their content.
+ */
+const INDENT = '  ';
+/** The value JSON.stringify would write for `value` (its `toJSON` applied), or undefined when it writes nothing. */
+function prepared(value, key) {
+    if (value !== null && typeof value === 'object' && typeof value.toJSON === 'function') {
+        return value.toJSON(key);
+    }
+    return value;
+}
+function isWritten(value) {
+    return value !== undefined && typeof value !== 'function' && typeof value !== 'symbol';
+}
+/**
+ * The pieces of `JSON.stringify(value, null, 2)`; joined, they are that text exactly (no final
+ * line break). A value JSON.stringify writes nothing for gives no pieces.
+ * @param value a JSON-compatible value (plain objects, arrays, strings, numbers, booleans, null)
+ * @param options how deep to walk; default 4 levels
+ */
+function* jsonPieces(value, options = {}) {
+    const v = prepared(value, '');
+    if (!isWritten(v))
+        return;
+    yield* piecesOf(v, 0, options.depth ?? 4);
+}
+function* piecesOf(value, level, depth) {
+    if (value === null || typeof value !== 'object' || level >= depth) {
+        const text = JSON.stringify(value, null, 2) ?? 'null';
+        yield level === 0 ? text : text.replace(/\n/g, `\n${INDENT.repeat(level)}`);
+        return;
+    }
+    const inner = INDENT.repeat(level + 1);
+    const outer = INDENT.repeat(level);
+    if (Array.isArray(value)) {
+        if (value.length === 0) {
+            yield '[]';
+            return;
+        }
+        yield '[';
+        for (let i = 0; i < value.length; i++) {
+            yield `${i === 0 ? '' : ','}\n${inner}`;
+            const element = prepared(value[i], String(i));
+            // In an array, what JSON.stringify writes nothing for is written as null.
+            yield* piecesOf(isWritten(element) ? element : null, level + 1, depth);
+        }
+        yield `\n${outer}]`;
+        return;
+    }
+    let first = true;
+    for (const key of Object.keys(value)) {
+        const element = prepared(value[key], key);
+        if (!isWritten(element))
+            continue;
+        yield `${first ? '{' : ','}\n${inner}${JSON.stringify(key)}: `;
+        first = false;
+        yield* piecesOf(element, level + 1, depth);
+    }
+    yield first ? '{}' : `\n${outer}}`;
 }
 
 
@@ -32352,7 +32603,8 @@ function createDesign(terms, intercept) {
     const offsets = [];
     for (const t of terms) {
         offsets.push(names.length);
-        names.push(...t.columnNames);
+        for (const name of t.columnNames)
+            names.push(name);
     }
     const p = names.length;
     const penalised = names.map((_, j) => !(intercept && j === 0));
@@ -32529,7 +32781,8 @@ function monomials(k, d) {
     const out = [];
     let level = Array.from({ length: k }, (_, i) => [i]);
     for (let t = 1; t <= d; t++) {
-        out.push(...level);
+        for (const m of level)
+            out.push(m);
         if (t === d)
             break;
         const next = [];
@@ -33362,12 +33615,14 @@ function selectKth(a, k) {
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
+  QA: () => (/* binding */ SWEEP_MAX_ROWS),
   gs: () => (/* binding */ oneStandardErrorRule),
   j6: () => (/* binding */ sweepComplexity),
+  EH: () => (/* binding */ sweepShape),
   mb: () => (/* binding */ sweepTarget)
 });
 
-// UNUSED EXPORTS: MAX_SWEEP_COLUMNS, SWEEP_MAX_ROWS
+// UNUSED EXPORTS: MAX_SWEEP_COLUMNS, SWEEP_DEGREES_ABOVE, SWEEP_MAX_DEGREE, SWEEP_RIDGE_EXPONENTS, SWEEP_WIDTH_EXPONENTS, sweepDegrees
 
 // EXTERNAL MODULE: ./src/design/terms/index.ts + 8 modules
 var design_terms = __nccwpck_require__(6872);
@@ -33459,6 +33714,8 @@ function ridgePath(data, lambdas, penalised) {
 var cross_validation = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
 var diagnostics_folds = __nccwpck_require__(9236);
+// EXTERNAL MODULE: ./src/core/deadline.ts
+var deadline = __nccwpck_require__(6343);
 ;// CONCATENATED MODULE: ./src/diagnostics/complexity.ts
 /**
  * The simpler model to use: sweep a model's main complexity setting, cross-validate each setting
@@ -33466,6 +33723,7 @@ var diagnostics_folds = __nccwpck_require__(9236);
  * the best (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
  * section 7.10, the "one-standard-error" rule).
  */
+
 
 
 
@@ -33568,6 +33826,39 @@ function changedSpec(spec, kind, value) {
  * only has to rank the settings).
  */
 const SWEEP_MAX_ROWS = 50000;
+/** Highest polynomial degree a degree sweep tries (a current degree above it is tried too). */
+const SWEEP_MAX_DEGREE = 15;
+/** A degree sweep tries degrees 1 .. min(current + this, {@link SWEEP_MAX_DEGREE}). */
+const SWEEP_DEGREES_ABOVE = 3;
+/** A width sweep tries the current width times 2^t for these t, widest (simplest) first. */
+const SWEEP_WIDTH_EXPONENTS = Object.freeze([4, 3, 2, 1, 0, -1, -2]);
+/** A ridge sweep tries s x 10^t for these t, largest (simplest) first, plus the current lambda. */
+const SWEEP_RIDGE_EXPONENTS = Object.freeze(Array.from({ length: 19 }, (_, i) => 3 - i / 2));
+/** The degrees a degree sweep tries for a term of this degree (ascending: simplest first). */
+function sweepDegrees(degree, maxDegree = SWEEP_MAX_DEGREE) {
+    const top = Math.max(degree, Math.min(degree + SWEEP_DEGREES_ABOVE, maxDegree));
+    return Array.from({ length: top }, (_, g) => g + 1);
+}
+/**
+ * The settings a sweep of this model tries and their sizes, as {@link sweepComplexity} runs them.
+ * @param descriptor the model
+ * @param design its design
+ * @param rows training rows
+ * @param options the row cap and highest degree, as for the sweep
+ * @returns null when the model has no setting to sweep or fewer than 2 rows
+ */
+function sweepShape(descriptor, design, rows, options = {}) {
+    const target = sweepTarget(descriptor, design);
+    if (target === null || rows < 2)
+        return null;
+    if (target.kind === 'ridge')
+        return { kind: 'ridge', rows, parameters: Array.from({ length: SWEEP_RIDGE_EXPONENTS.length + 1 }, () => design.p) };
+    const used = Math.min(rows, options.maxRows ?? SWEEP_MAX_ROWS);
+    if (target.kind === 'width')
+        return { kind: 'width', rows: used, parameters: SWEEP_WIDTH_EXPONENTS.map(() => design.p) };
+    const degree = design.terms[target.term].spec.degree;
+    return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
+}
 /** Every other row at an even stride, as new columns. */
 function subsample(data, m) {
     const n = data.rows;
@@ -33588,6 +33879,7 @@ function sweepCoefficients(complements, lambdas, penalised) {
     const coefficients = lambdas.map(() => new Array(complements.length));
     const positive = lambdas.filter((l) => l > 0);
     complements.forEach((acc, f) => {
+        (0,deadline/* checkDeadline */.Ft)('complexity sweep');
         const path = ridgePath(acc, positive, penalised);
         let next = 0;
         lambdas.forEach((lambda, s) => {
@@ -33645,9 +33937,7 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
             trace += R[k] * R[k];
         trace -= ridge * fit.penalised.filter(Boolean).length;
         const scale = trace / Math.max(1, p);
-        const grid = [];
-        for (let t = 3; t >= -6; t -= 0.5)
-            grid.push(scale * 10 ** t);
+        const grid = SWEEP_RIDGE_EXPONENTS.map((t) => scale * 10 ** t);
         const lambdas = [...grid.filter((l) => l > ridge), ridge, ...grid.filter((l) => l < ridge)];
         let factors;
         if (options.factors) {
@@ -33680,9 +33970,11 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
                 settings.push({ value: width * 2 ** t, current: t === 0 });
         }
         else {
-            settings.push(...countSettings(spec));
+            for (const setting of countSettings(spec))
+                settings.push(setting);
         }
         for (const { value, current } of settings) {
+            (0,deadline/* checkDeadline */.Ft)('complexity sweep');
             const label = `${target.kind} ${formatSetting(value)}`;
             let d;
             try {
@@ -33746,6 +34038,8 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
 /* harmony import */ var _fit_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2450);
 /* harmony import */ var _design_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(7254);
 /* harmony import */ var _kernels_index_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8667);
+/* harmony import */ var _core_deadline_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6343);
+
 
 
 
@@ -33839,7 +34133,10 @@ function oneFold(foldOf, start, m) {
  */
 function foldFactors(design, data, folds) {
     const builder = new FoldFactorBuilder(design.p, folds);
-    (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => builder.add(X, data.y, start, m));
+    (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_3__/* .checkDeadline */ .Ft)('fold factors');
+        builder.add(X, data.y, start, m);
+    });
     return builder.factors;
 }
 /**
@@ -33871,6 +34168,7 @@ function complementFactors(factors) {
     const p = factors[0].p;
     const prefix = [new _fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .QrAccumulator */ .SC(p)];
     for (let f = 1; f < k; f++) {
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_3__/* .checkDeadline */ .Ft)('fold merges');
         const next = prefix[f - 1].clone();
         next.merge(factors[f - 1]);
         prefix.push(next);
@@ -33878,6 +34176,7 @@ function complementFactors(factors) {
     const out = new Array(k);
     let suffix = new _fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .QrAccumulator */ .SC(p);
     for (let f = k - 1; f >= 0; f--) {
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_3__/* .checkDeadline */ .Ft)('fold merges');
         const without = prefix[f];
         if (suffix.rows > 0)
             without.merge(suffix);
@@ -33950,6 +34249,7 @@ function outOfFoldErrors(design, data, folds, coefficients, visit) {
         return t;
     });
     (0,_design_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .forEachBlock */ .aN)(design, data, (X, start, m) => {
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_3__/* .checkDeadline */ .Ft)('out-of-fold scoring');
         // The block's fold when all its rows share one (the usual case for `blocks` folds), else -1.
         const single = m > 0 && oneFold(foldOf, start, m) ? foldOf[start] : -1;
         const folds = foldOf.subarray(start, start + m);
@@ -33984,7 +34284,10 @@ function summariseFolds(sse, sizes) {
 }
 /** Coefficients of every complement fit, for each ridge penalty given. */
 function complementCoefficients(complements, ridges, penalised) {
-    return ridges.map((ridge) => complements.map((acc) => (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .solveCoefficients */ .gQ)(acc, { ridge, penalised })));
+    return ridges.map((ridge) => complements.map((acc) => {
+        (0,_core_deadline_js__WEBPACK_IMPORTED_MODULE_3__/* .checkDeadline */ .Ft)('fold solves');
+        return (0,_fit_index_js__WEBPACK_IMPORTED_MODULE_0__/* .solveCoefficients */ .gQ)(acc, { ridge, penalised });
+    }));
 }
 /**
  * k-fold cross-validation, leave-one-out and generalised cross-validation of a fit, in two passes
@@ -34489,11 +34792,12 @@ function gapRatio(trainRmse, holdoutRmse) {
 
 // EXPORTS
 __nccwpck_require__.d(__webpack_exports__, {
+  qk: () => (/* binding */ SWING_DEFAULTS),
   ll: () => (/* binding */ inputGrid),
   Fj: () => (/* binding */ measureSwing)
 });
 
-// UNUSED EXPORTS: excursion, planSwing, scoreSwing
+// UNUSED EXPORTS: SWING_CURVE_NUMBERS, SWING_MIN_CURVE_POINTS, excursion, planSwing, scoreSwing
 
 // EXTERNAL MODULE: ./src/design/design-matrix.ts
 var design_matrix = __nccwpck_require__(6566);
@@ -34691,6 +34995,8 @@ function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
     bestIdx[pos] = b;
 }
 
+// EXTERNAL MODULE: ./src/core/deadline.ts
+var deadline = __nccwpck_require__(6343);
 ;// CONCATENATED MODULE: ./src/diagnostics/swing.ts
 /**
  * Swing between and beyond samples: how far a model's predictions leave the band of observed
@@ -34702,6 +35008,25 @@ function considerNeighbour(flat, d, a, b, kk, best, bestIdx) {
 
 
 
+
+/** The defaults of {@link SwingOptions}, one place for the scan and for the cost estimate (run/cost.ts). */
+const SWING_DEFAULTS = Object.freeze({
+    perGap: 8,
+    uniform: 201,
+    margin: 0.1,
+    marginPoints: 40,
+    maxGaps: 4000,
+    maxGridRows: 20_000,
+    maxRows: 1000,
+    neighbours: 3,
+    segmentPoints: 8,
+    maxCurvePoints: 400,
+    maxCurves: 12,
+});
+/** Points of all kept curves together, at most (each curve is thinned to its share; 400 each up to 2 inputs). */
+const SWING_CURVE_NUMBERS = 800;
+/** Fewest points a kept curve is thinned to. */
+const SWING_MIN_CURVE_POINTS = 100;
 /**
  * Excursion of predictions outside the band [lo, hi] in units of its width:
  * max(0, max(pred) - hi, lo - min(pred)) / (hi - lo). NaN when hi <= lo or no predictions.
@@ -34736,11 +35061,11 @@ function inputGrid(values, options = {}) {
  * array is overwritten (its distinct values are packed to the front).
  */
 function gridFromSorted(sorted, n, options, work) {
-    const perGap = options.perGap ?? 8;
-    const uniform = options.uniform ?? 201;
-    const margin = options.margin ?? 0.1;
-    const marginPoints = options.marginPoints ?? 40;
-    const maxGaps = options.maxGaps ?? 4000;
+    const perGap = options.perGap ?? SWING_DEFAULTS.perGap;
+    const uniform = options.uniform ?? SWING_DEFAULTS.uniform;
+    const margin = options.margin ?? SWING_DEFAULTS.margin;
+    const marginPoints = options.marginPoints ?? SWING_DEFAULTS.marginPoints;
+    const maxGaps = options.maxGaps ?? SWING_DEFAULTS.maxGaps;
     const count = packDistinct(sorted, n);
     const distinct = sorted.subarray(0, count);
     if (count < 2)
@@ -35034,7 +35359,7 @@ function planSwing(design, train, options = {}) {
     const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, n, scratch));
     const radixScratch = new Uint32Array(2 * n);
     const grids = [];
-    const gridOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? 4000) / Math.max(1, d)) };
+    const gridOptions = { ...options, maxGaps: Math.ceil((options.maxGaps ?? SWING_DEFAULTS.maxGaps) / Math.max(1, d)) };
     for (let c = 0; c < d; c++) {
         // A category input takes only its level codes: scanned level by level, no margins.
         const discrete = design.terms.find((t) => t.discreteValues !== undefined && t.inputs.includes(design.inputs[c]))?.discreteValues;
@@ -35043,7 +35368,7 @@ function planSwing(design, train, options = {}) {
                 grids.push({ input: c, inside: Float64Array.from(discrete), beyond: new Float64Array(0) });
             continue;
         }
-        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? 20_000, scratch);
+        const len = gridSample(train.inputs[c], n, options.maxGridRows ?? SWING_DEFAULTS.maxGridRows, scratch);
         const sample = scratch.subarray(0, len);
         // An input every term reads on one transformed scale (log x ...) is scanned on that scale.
         const onScale = inputScaleOf(design, c);
@@ -35062,9 +35387,9 @@ function planSwing(design, train, options = {}) {
     let segments = null;
     let segmentColumns = null;
     if (d >= 2 && n >= 2) {
-        const maxRows = options.maxRows ?? 1000;
-        const kNear = options.neighbours ?? 3;
-        const perSegment = options.segmentPoints ?? 8;
+        const maxRows = options.maxRows ?? SWING_DEFAULTS.maxRows;
+        const kNear = options.neighbours ?? SWING_DEFAULTS.neighbours;
+        const perSegment = options.segmentPoints ?? SWING_DEFAULTS.segmentPoints;
         const s = Math.min(n, maxRows);
         const rows = Int32Array.from({ length: s }, (_, t) => Math.floor((t * n) / s));
         const flat = scaledRows(train.inputs, rows);
@@ -35074,7 +35399,9 @@ function planSwing(design, train, options = {}) {
             segmentColumns = admittedRows(design, segmentPoints(train.inputs, pairs, perSegment));
         segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
     }
-    return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? 0.1, maxCurvePoints: options.maxCurvePoints ?? 400 };
+    const maxCurves = options.maxCurves ?? SWING_DEFAULTS.maxCurves;
+    const maxCurvePoints = options.maxCurvePoints ?? Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
+    return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? SWING_DEFAULTS.margin, maxCurvePoints, maxCurves };
 }
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
 function admittedRows(design, columns) {
@@ -35159,11 +35486,14 @@ function scoreSwing(plan, design, coefficients) {
     };
     const curves = [];
     for (const grid of plan.grids) {
+        (0,deadline/* checkDeadline */.Ft)('swing scan');
         const c = grid.input;
         const along = (xs) => design.inputs.map((_, k) => (k === c ? xs : constant(k, xs.length)));
         const predict = predictorAlong(design, coefficients, c, medians);
         const pin = score(along(grid.inside), grid.inside.length, 'inside', predict(grid.inside));
         const pout = score(along(grid.beyond), grid.beyond.length, 'beyond', predict(grid.beyond));
+        if (curves.length >= plan.maxCurves)
+            continue;
         // Curve for charts: all points ascending, thinned with the extremes kept.
         const xs = new Float64Array(grid.inside.length + grid.beyond.length);
         const ps = new Float64Array(xs.length);
@@ -35478,6 +35808,8 @@ var result_result = __nccwpck_require__(1628);
 var report_escape = __nccwpck_require__(6412);
 // EXTERNAL MODULE: ./src/report/wording.ts
 var wording = __nccwpck_require__(5594);
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __nccwpck_require__(398);
 ;// CONCATENATED MODULE: ./src/report/svg/palette.ts
 /**
  * Colours and marks of every chart. Colours come from the colour-blind-safe set of Okabe & Ito
@@ -35757,6 +36089,7 @@ function logScale(domain, range) {
 
 
 
+
 /** Most bars drawn; with more columns the largest are kept, in column order. */
 const MAX_BARS = 60;
 const BAR = 14;
@@ -35778,15 +36111,15 @@ function coefficientBarsChart(coef, options) {
             .slice(0, MAX_BARS)
             .sort((a, b) => a.j - b.j);
     }
-    const left = Math.min(170, 16 + Math.max(...shown.map((b) => shorten(b.name).length)) * 6.4);
+    const left = Math.min(170, 16 + (0,extremes/* maxOf */._)(shown.map((b) => shorten(b.name).length)) * 6.4);
     const height = Math.max(180, MARGIN.top + MARGIN.bottom + shown.length * (BAR + GAP) + GAP);
     const { x0, y0, x1, y1 } = plotArea(WIDTH, height, left);
     const sizes = shown.map((b) => (b.v === null ? null : Math.abs(b.v)));
     const finite = sizes.filter((v) => v !== null);
     const refs = [coef.limit, coef.warn].filter((v) => v !== null && v > 0);
-    const top = Math.max(...finite, ...refs, 1e-12);
+    const top = (0,extremes/* maxOf */._)([...finite, ...refs], 1e-12);
     const positives = [...finite, ...refs].filter((v) => v > 0);
-    const bottom = positives.length ? Math.min(...positives) : top;
+    const bottom = positives.length ? (0,extremes/* minOf */.H)(positives) : top;
     const log = top / bottom >= 1000;
     const sx = log
         ? logScale([10 ** Math.floor(Math.log10(bottom)), 10 ** Math.ceil(Math.log10(top * 1.05))], [x0, x1])
@@ -35821,7 +36154,7 @@ function coefficientBarsChart(coef, options) {
     if (coef.warn !== null)
         legend.push({ mark: legendLine(COLOURS.warn, DASHES.warn, 1.6), label: `warning ${(0,format/* formatNumber */.Z)(coef.warn)}` });
     const overCount = sizes.filter((v) => v === null || (coef.limit !== null && v > coef.limit)).length;
-    const largest = finite.length ? Math.max(...finite) : Number.NaN;
+    const largest = finite.length ? (0,extremes/* maxOf */._)(finite) : Number.NaN;
     return frame_frame({
         id,
         kind: 'coefficients',
@@ -35853,6 +36186,7 @@ function coefficientBarsChart(coef, options) {
 
 
 
+
 const DIAMOND = 4;
 /** Renders the cross-validation curve of a complexity sweep. */
 function cvCurveChart(sweep, options) {
@@ -35860,13 +36194,18 @@ function cvCurveChart(sweep, options) {
     const { x0, y0, x1, y1 } = plotArea();
     // On a log axis a setting of 0 (no penalty) sits one decade left of the smallest positive setting, labelled 0.
     const positives = sweep.settings.filter((v) => v > 0);
-    const zeroAt = sweep.log && positives.length ? Math.min(...positives) / 10 : 0;
+    const zeroAt = sweep.log && positives.length ? (0,extremes/* minOf */.H)(positives) / 10 : 0;
     const s = sweep.settings.map((v) => (sweep.log && v <= 0 ? zeroAt : v));
     const xDomain = [s[0], s[s.length - 1]];
     const sx = sweep.log ? logScale(xDomain, [x0 + 8, x1 - 8]) : linearScale(s.length > 1 ? xDomain : pad(xDomain), [x0 + 8, x1 - 8]);
     const hasZero = sweep.log && sweep.settings.some((v) => v <= 0);
-    if (hasZero)
-        sx.ticks.splice(0, sx.ticks.length, zeroAt, ...sx.ticks.filter((t) => t > zeroAt * 3));
+    if (hasZero) {
+        const kept = sx.ticks.filter((t) => t > zeroAt * 3);
+        sx.ticks.length = 0;
+        sx.ticks.push(zeroAt);
+        for (const t of kept)
+            sx.ticks.push(t);
+    }
     const yRange = extent(sweep.cv, sweep.train ?? []) ?? [0, 1];
     const yLog = yRange[0] > 0 && yRange[1] / yRange[0] >= 100;
     const sy = yLog ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0]) : linearScale(pad(yRange, 0.08), [y1, y0]);
@@ -36310,19 +36649,23 @@ function badge(status) {
 function verdictText(result) {
     return `${badge(result.verdict)} ${(0,report_escape/* escapeHtml */.ZD)((0,wording/* verdictHeadline */.ge)(result))} <span class="muted">(${(0,report_escape/* escapeHtml */.ZD)((0,wording/* countsText */.WN)(result.counts))})</span>`;
 }
-function overview(result) {
-    const rows = result.models.map((m, i) => {
-        const x = m.metrics;
-        const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code>`);
-        return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a></td>` +
-            `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
-            `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
-            `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`);
-    });
-    return ('<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
+function overviewRow(m, i) {
+    const x = m.metrics;
+    const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code>`);
+    return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a></td>` +
+        `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
+        `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
+        `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`);
+}
+/** The overview table, one piece per row. */
+function* overview(result) {
+    yield ('<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
         '<table><thead><tr><th>Status</th><th>Model</th><th class="num">Training rows</th><th class="num">Hold-out rows</th><th class="num">Parameters</th>' +
         '<th class="num">Hold-out RMSE</th><th class="num">Gap ratio</th><th class="num">Max std. coef.</th><th>Over a limit</th></tr></thead>' +
-        `<tbody>${rows.join('')}</tbody></table></section>`);
+        '<tbody>');
+    for (let i = 0; i < result.models.length; i++)
+        yield overviewRow(result.models[i], i);
+    yield '</tbody></table></section>';
 }
 function checksTable(m) {
     const rows = m.checks.map((c) => {
@@ -36379,6 +36722,9 @@ function modelSection(m, index) {
         parts.push(`<h3>Charts</h3>`);
         if (thinned.length)
             parts.push(`<p class="note">${thinned.map((s) => (0,report_escape/* escapeHtml */.ZD)(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`);
+        const leftOut = m.charts.partialsLeftOut ?? 0;
+        if (leftOut > 0)
+            parts.push(`<p class="note">${(0,report_escape/* escapeHtml */.ZD)(`Partial curves of the first ${m.charts.partials.length} inputs; ${leftOut} more left out.`)}</p>`);
         parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
     }
     else {
@@ -36388,14 +36734,16 @@ function modelSection(m, index) {
     return parts.join('');
 }
 /**
- * Formats the Result as one self-contained HTML page.
+ * The HTML page in pieces (the head, each overview row, each model's section, the end), to write
+ * one after another: joined, they are {@link formatHtml}'s text. A page of any number of models is
+ * written without ever being one string.
  * @param result the run's Result
  * @param options heading text; defaults in {@link HtmlOptions}
  */
-function formatHtml(result, options = {}) {
+function* htmlReport(result, options = {}) {
     const title = options.title ?? 'fitgate report';
     const notes = result.notes.map((n) => `<p class="note">${(0,report_escape/* escapeHtml */.ZD)(n)}</p>`).join('');
-    return [
+    yield [
         '<!DOCTYPE html>',
         '<html lang="en">',
         '<head>',
@@ -36410,14 +36758,27 @@ function formatHtml(result, options = {}) {
         `<body data-verdict="${(0,report_escape/* escapeHtml */.ZD)(result.verdict)}">`,
         `<header><h1>${(0,report_escape/* escapeHtml */.ZD)(title)}</h1>${options.subtitle ? `<p class="muted">${(0,report_escape/* escapeHtml */.ZD)(options.subtitle)}</p>` : ''}<p class="verdict">${verdictText(result)}</p>${notes}</header>`,
         '<main>',
-        overview(result),
-        ...result.models.map(modelSection),
+        '',
+    ].join('\n');
+    yield* overview(result);
+    yield '\n';
+    for (let i = 0; i < result.models.length; i++)
+        yield `${modelSection(result.models[i], i)}\n`;
+    yield [
         '</main>',
         `<footer>${(0,report_escape/* escapeHtml */.ZD)(`${result.tool.name} ${result.tool.version}`)}. Training rows are filled circles, hold-out rows hollow squares; dashed lines are fail limits, dotted lines warning limits. Colours from the Okabe–Ito colour-blind-safe set.</footer>`,
         '</body>',
         '</html>',
         '',
     ].join('\n');
+}
+/**
+ * Formats the Result as one self-contained HTML page ({@link htmlReport} joined).
+ * @param result the run's Result
+ * @param options heading text; defaults in {@link HtmlOptions}
+ */
+function formatHtml(result, options = {}) {
+    return [...htmlReport(result, options)].join('');
 }
 
 ;// CONCATENATED MODULE: ./src/report/junit.ts
@@ -36477,11 +36838,12 @@ function suite(m, failOn) {
     return { xml: cases.length ? `${head}>\n${cases.join('\n')}\n  </testsuite>` : `${head}/>`, counts };
 }
 /**
- * Formats the Result as JUnit XML.
+ * The JUnit XML report in pieces (the head, then one test suite per model), to write one after
+ * another: joined, they are {@link formatJunit}'s text.
  * @param result the run's Result
  * @param options what counts as a failure; defaults in {@link JunitOptions}
  */
-function formatJunit(result, options = {}) {
+function* junitReport(result, options = {}) {
     const failOn = options.failOn ?? 'fail';
     const suites = result.models.map((m) => suite(m, failOn));
     const total = { tests: 0, failures: 0, errors: 0, skipped: 0 };
@@ -36492,8 +36854,22 @@ function formatJunit(result, options = {}) {
         total.skipped += s.counts.skipped;
     }
     const head = `<testsuites${attrs({ name: result.tool.name, tests: total.tests, failures: total.failures, errors: total.errors, skipped: total.skipped })}`;
-    const body = suites.length ? `${head}>\n${suites.map((s) => s.xml).join('\n')}\n</testsuites>` : `${head}/>`;
-    return `<?xml version="1.0" encoding="UTF-8"?>\n${body}\n`;
+    if (suites.length === 0) {
+        yield `<?xml version="1.0" encoding="UTF-8"?>\n${head}/>\n`;
+        return;
+    }
+    yield `<?xml version="1.0" encoding="UTF-8"?>\n${head}>`;
+    for (const s of suites)
+        yield `\n${s.xml}`;
+    yield '\n</testsuites>\n';
+}
+/**
+ * Formats the Result as JUnit XML ({@link junitReport} joined).
+ * @param result the run's Result
+ * @param options what counts as a failure; defaults in {@link JunitOptions}
+ */
+function formatJunit(result, options = {}) {
+    return [...junitReport(result, options)].join('');
 }
 
 // EXTERNAL MODULE: external "node:crypto"
@@ -36514,6 +36890,8 @@ function checkDocsUrl(id) {
     return `${REPOSITORY_URL}/blob/v${version/* VERSION */.x}/docs/checks.md#${encodeURIComponent(id)}`;
 }
 
+// EXTERNAL MODULE: ./src/core/json-pieces.ts
+var json_pieces = __nccwpck_require__(1629);
 ;// CONCATENATED MODULE: ./src/report/sarif.ts
 /**
  * The SARIF 2.1.0 report (OASIS Static Analysis Results Interchange Format, Version 2.1.0,
@@ -36523,6 +36901,7 @@ function checkDocsUrl(id) {
  * the check points at. Models that could not be checked are tool execution notifications at
  * the file and line of the problem. Passing and switched-off checks are not results.
  */
+
 
 
 
@@ -36640,18 +37019,26 @@ function sarifLog(result, options = {}) {
         ],
     };
 }
+/**
+ * The SARIF report in pieces (one result each at most), to write one after another: joined, they
+ * are {@link formatSarif}'s text.
+ */
+function* sarifReport(result, options = {}) {
+    yield* (0,json_pieces/* jsonPieces */.M)(sarifLog(result, options));
+    yield '\n';
+}
 /** The SARIF report as JSON text (two-space indentation, final newline). */
 function formatSarif(result, options = {}) {
     return `${JSON.stringify(sarifLog(result, options), null, 2)}\n`;
 }
 
-// EXTERNAL MODULE: ./src/entries/safe-write.ts
-var safe_write = __nccwpck_require__(9725);
+// EXTERNAL MODULE: ./src/entries/safe-write.ts + 1 modules
+var safe_write = __nccwpck_require__(5475);
 ;// CONCATENATED MODULE: ./src/entries/output-files.ts
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
  * and the action; the reporters only format, this module only writes, each file through
- * {@link writeFileSafely} (never through a link, atomically).
+ * {@link writeFileSafely} (never through a link, atomically), piece by piece (never one string).
  */
 
 
@@ -36667,40 +37054,97 @@ var safe_write = __nccwpck_require__(9725);
 async function writeFileReports(result, files) {
     const failures = [];
     const place = (name) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
-    const attempt = (name, file, text) => {
+    const attempt = (name, file, pieces) => {
         try {
-            (0,safe_write/* writeFileSafely */.kv)(file, text(), place(name));
+            (0,safe_write/* writeFileSafely */.kv)(file, pieces(), place(name));
         }
         catch (error) {
             failures.push({ option: place(name).option, refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC, message: (0,errors/* errorMessage */.gJ)(error) });
         }
     };
     if (files.html !== null)
-        attempt('html', external_node_path_default().join(files.html, HTML_FILE), () => formatHtml(result));
+        attempt('html', external_node_path_default().join(files.html, HTML_FILE), () => htmlReport(result));
     if (files.sarif !== null)
-        attempt('sarif', files.sarif, () => formatSarif(result, { pathPrefix: files.sarifPrefix }));
+        attempt('sarif', files.sarif, () => sarifReport(result, { pathPrefix: files.sarifPrefix }));
     if (files.junit !== null)
-        attempt('junit', files.junit, () => formatJunit(result, { failOn: files.failOn }));
+        attempt('junit', files.junit, () => junitReport(result, { failOn: files.failOn }));
     return failures;
 }
 
 
 /***/ }),
 
-/***/ 9725:
+/***/ 5475:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   LC: () => (/* binding */ OUTPUT_REFUSED),
-/* harmony export */   kv: () => (/* binding */ writeFileSafely)
-/* harmony export */ });
-/* unused harmony export OUTPUT_FAILED */
-/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
-/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_fs__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
-/* harmony import */ var _repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6711);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  LC: () => (/* binding */ OUTPUT_REFUSED),
+  kv: () => (/* binding */ writeFileSafely)
+});
+
+// UNUSED EXPORTS: OUTPUT_FAILED
+
+// EXTERNAL MODULE: external "node:fs"
+var external_node_fs_ = __nccwpck_require__(3024);
+// EXTERNAL MODULE: external "node:path"
+var external_node_path_ = __nccwpck_require__(6760);
+var external_node_path_default = /*#__PURE__*/__nccwpck_require__.n(external_node_path_);
+// EXTERNAL MODULE: ./src/core/errors.ts
+var errors = __nccwpck_require__(4296);
+// EXTERNAL MODULE: ./src/repo/real-folder.ts
+var real_folder = __nccwpck_require__(6711);
+;// CONCATENATED MODULE: ./src/entries/report-file.ts
+/** Bytes gathered before each write. */
+const WRITE_BUFFER_BYTES = 1 << 20;
+/** Groups pieces into strings of about {@link WRITE_BUFFER_BYTES} UTF-16 units (one buffer each). */
+function* batches(pieces) {
+    let parts = [];
+    let size = 0;
+    for (const piece of pieces) {
+        parts.push(piece);
+        size += piece.length;
+        if (size >= WRITE_BUFFER_BYTES) {
+            yield parts.join('');
+            parts = [];
+            size = 0;
+        }
+    }
+    if (size > 0)
+        yield parts.join('');
+}
+/**
+ * Writes the pieces to a stream (standard output), waiting for it to drain whenever its buffer is
+ * full, so that memory stays at one buffer whatever the report's size.
+ * @param stream where to write (`process.stdout`)
+ * @param pieces the report's text in pieces
+ */
+async function writeReportStream(stream, pieces) {
+    for (const text of batches(pieces)) {
+        // A closed pipe (`fitgate check | head`) takes nothing more; the run's outcome stands.
+        if (stream.destroyed)
+            return;
+        if (!stream.write(text))
+            await drained(stream);
+    }
+}
+/** Resolves when the stream drains, closes or fails, whichever comes first. */
+function drained(stream) {
+    return new Promise((resolve) => {
+        const done = () => {
+            stream.off('drain', done);
+            stream.off('close', done);
+            stream.off('error', done);
+            resolve();
+        };
+        stream.on('drain', done);
+        stream.on('close', done);
+        stream.on('error', done);
+    });
+}
+
+;// CONCATENATED MODULE: ./src/entries/safe-write.ts
 /**
  * Writing one report file: never through a symbolic link, and atomically. Every file fitgate
  * writes (`--out`, `--html`, `--sarif`, `--junit`, the action's `html` / `sarif` / `junit`, the
@@ -36726,6 +37170,12 @@ async function writeFileReports(result, files) {
 
 
 
+
+/** The UTF-8 bytes of `pieces`, in batches of about 1 MiB. */
+function* encodedBatches(pieces) {
+    for (const text of batches(pieces))
+        yield Buffer.from(text, 'utf8');
+}
 /** Error code of a target refused before writing (a link, not a file, a folder leading outside). */
 const OUTPUT_REFUSED = 'output-refused';
 /** Error code of a write that failed (a full disk, no permission): the previous file is kept. */
@@ -36749,17 +37199,17 @@ function codeOf(error) {
  */
 function writeFileSafely(file, data, place, hooks = {}) {
     const where = { key: place.option };
-    const refuse = (message) => new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_REFUSED, message, where);
+    const refuse = (message) => new errors/* InputError */.dz(OUTPUT_REFUSED, message, where);
     if (file === '' || file.includes('\0'))
-        throw refuse(`expected a file path, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .quoteValue */ .cl)(file)}`);
-    const named = node_path__WEBPACK_IMPORTED_MODULE_1___default().resolve(file);
-    const name = node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(named);
-    const folder = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(named);
+        throw refuse(`expected a file path, got ${(0,errors/* quoteValue */.cl)(file)}`);
+    const named = external_node_path_default().resolve(file);
+    const name = external_node_path_default().basename(named);
+    const folder = external_node_path_default().dirname(named);
     if (name === '' || folder === named)
         throw refuse(`${named} names no file; expected a file path`);
-    const failed = (error) => error instanceof _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz ? error : new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
+    const failed = (error) => error instanceof errors/* InputError */.dz ? error : new errors/* InputError */.dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
     // 1. The boundary that holds the path as written, and the real folder.
-    const bases = place.within.filter((b) => (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)(b, folder)).sort((a, b) => b.length - a.length);
+    const bases = place.within.filter((b) => (0,real_folder/* isInsideFolder */.zz)(b, folder)).sort((a, b) => b.length - a.length);
     const base = bases[0] ?? null;
     if (base === null && place.insideOnly)
         throw refuse(`${named} is outside ${place.within.join(' and ')}; expected a path inside`);
@@ -36768,22 +37218,23 @@ function writeFileSafely(file, data, place, hooks = {}) {
     try {
         realDir = makeFolder(folder, base, refuse);
         // 2. The target itself.
-        target = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, name);
+        target = external_node_path_default().join(realDir, name);
         checkTarget(target, named, refuse);
     }
     catch (error) {
         throw failed(error);
     }
     // 3. A temporary file in the same folder, then rename.
-    const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
-    const write = hooks.write ?? ((fd, b, offset, length) => (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.writeSync)(fd, b, offset, length));
-    const flags = node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_WRONLY | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_CREAT | node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_EXCL | (node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_NOFOLLOW ?? 0);
+    // A report in pieces is written in batches of about 1 MiB: never held as one string.
+    const chunks = typeof data === 'string' ? [Buffer.from(data, 'utf8')] : data instanceof Uint8Array ? [data] : encodedBatches(data);
+    const write = hooks.write ?? ((fd, b, offset, length) => (0,external_node_fs_.writeSync)(fd, b, offset, length));
+    const flags = external_node_fs_.constants.O_WRONLY | external_node_fs_.constants.O_CREAT | external_node_fs_.constants.O_EXCL | (external_node_fs_.constants.O_NOFOLLOW ?? 0);
     let temp = '';
     let fd = -1;
     for (let attempt = 0; fd < 0; attempt++) {
-        temp = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`);
+        temp = external_node_path_default().join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`);
         try {
-            fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(temp, flags, 0o666);
+            fd = (0,external_node_fs_.openSync)(temp, flags, 0o666);
         }
         catch (error) {
             if (codeOf(error) !== 'EEXIST' || attempt + 1 >= MAX_TEMP_TRIES)
@@ -36791,33 +37242,35 @@ function writeFileSafely(file, data, place, hooks = {}) {
         }
     }
     try {
-        // Each round writes at least one byte, so this ends after at most bytes.length rounds.
-        for (let offset = 0; offset < bytes.length;) {
-            const n = write(fd, bytes, offset, bytes.length - offset);
-            if (!(n > 0))
-                throw new Error('the write made no progress');
-            offset += n;
+        for (const bytes of chunks) {
+            // Each round writes at least one byte, so this ends after at most bytes.length rounds.
+            for (let offset = 0; offset < bytes.length;) {
+                const n = write(fd, bytes, offset, bytes.length - offset);
+                if (!(n > 0))
+                    throw new Error('the write made no progress');
+                offset += n;
+            }
         }
-        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fsyncSync)(fd);
-        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+        (0,external_node_fs_.fsyncSync)(fd);
+        (0,external_node_fs_.closeSync)(fd);
         fd = -1;
         // The folder must still be the one checked (no link swapped in while writing).
-        if ((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(realDir) !== realDir)
+        if ((0,external_node_fs_.realpathSync)(realDir) !== realDir)
             throw refuse(`the folder of ${named} changed while it was written; nothing was replaced`);
         checkTarget(target, named, refuse);
-        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.renameSync)(temp, target);
+        (0,external_node_fs_.renameSync)(temp, target);
     }
     catch (error) {
         if (fd >= 0) {
             try {
-                (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+                (0,external_node_fs_.closeSync)(fd);
             }
             catch {
                 // already failing; the first error is the one reported
             }
         }
         try {
-            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.unlinkSync)(temp);
+            (0,external_node_fs_.unlinkSync)(temp);
         }
         catch {
             // gone already
@@ -36839,7 +37292,7 @@ function makeFolder(folder, base, refuse) {
         if (depth > MAX_DEPTH)
             throw refuse(`${folder} is more than ${MAX_DEPTH} folders deep`);
         try {
-            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(existing);
+            (0,external_node_fs_.lstatSync)(existing);
             break;
         }
         catch (error) {
@@ -36847,15 +37300,15 @@ function makeFolder(folder, base, refuse) {
             if (code !== 'ENOENT' && code !== 'ENOTDIR')
                 throw error;
         }
-        const parent = node_path__WEBPACK_IMPORTED_MODULE_1___default().dirname(existing);
+        const parent = external_node_path_default().dirname(existing);
         if (parent === existing)
             break;
-        missing.unshift(node_path__WEBPACK_IMPORTED_MODULE_1___default().basename(existing));
+        missing.unshift(external_node_path_default().basename(existing));
         existing = parent;
     }
     let real;
     try {
-        real = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(existing);
+        real = (0,external_node_fs_.realpathSync)(existing);
     }
     catch (error) {
         const code = codeOf(error);
@@ -36863,21 +37316,21 @@ function makeFolder(folder, base, refuse) {
             throw refuse(`${existing} is a symbolic link that leads nowhere or round a loop; expected a folder`);
         throw error;
     }
-    if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(real).isDirectory())
+    if (!(0,external_node_fs_.statSync)(real).isDirectory())
         throw refuse(`${existing} is not a folder; expected a folder to write in`);
-    if (base !== null && !(0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_3__/* .isInsideFolder */ .zz)((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(base), real)) {
+    if (base !== null && !(0,real_folder/* isInsideFolder */.zz)((0,external_node_fs_.realpathSync)(base), real)) {
         throw refuse(`${folder} leads out of ${base} through a symbolic link; expected a folder whose real path is inside it`);
     }
     for (const part of missing) {
-        real = node_path__WEBPACK_IMPORTED_MODULE_1___default().join(real, part);
+        real = external_node_path_default().join(real, part);
         try {
-            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.mkdirSync)(real);
+            (0,external_node_fs_.mkdirSync)(real);
         }
         catch (error) {
             if (codeOf(error) !== 'EEXIST')
                 throw error;
         }
-        const info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(real);
+        const info = (0,external_node_fs_.lstatSync)(real);
         if (!info.isDirectory())
             throw refuse(`${real} is ${info.isSymbolicLink() ? 'a symbolic link' : 'not a folder'}; expected a folder to write in`);
     }
@@ -36887,7 +37340,7 @@ function makeFolder(folder, base, refuse) {
 function checkTarget(target, named, refuse) {
     let info;
     try {
-        info = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(target);
+        info = (0,external_node_fs_.lstatSync)(target);
     }
     catch (error) {
         if (codeOf(error) === 'ENOENT')
@@ -36903,15 +37356,15 @@ function checkTarget(target, named, refuse) {
 function syncFolder(dir) {
     let fd = -1;
     try {
-        fd = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.openSync)(dir, node_fs__WEBPACK_IMPORTED_MODULE_0__.constants.O_RDONLY);
-        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.fsyncSync)(fd);
+        fd = (0,external_node_fs_.openSync)(dir, external_node_fs_.constants.O_RDONLY);
+        (0,external_node_fs_.fsyncSync)(fd);
     }
     catch {
         // Not every platform opens or syncs a folder; the file itself is already synced.
     }
     if (fd >= 0) {
         try {
-            (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.closeSync)(fd);
+            (0,external_node_fs_.closeSync)(fd);
         }
         catch {
             // nothing left to do
@@ -37438,7 +37891,7 @@ function leverages(fit, X, m) {
     const out = new Float64Array(m);
     if (p === 0)
         return out;
-    const solver = new FactorSolver(fit.factor.R, p, fit.factorRank);
+    const solver = solverOf(fit);
     const x = new Float64Array(p);
     const z = new Float64Array(p);
     for (let i = 0; i < m; i++) {
@@ -37451,6 +37904,19 @@ function leverages(fit, X, m) {
         out[i] = h;
     }
     return out;
+}
+/**
+ * The solver of a fit's factor, made once per fit: a rank-deficient factor's solver holds an SVD
+ * of R (p^3 work), which must not be redone for every block of rows.
+ */
+const solvers = new WeakMap();
+function solverOf(fit) {
+    let solver = solvers.get(fit);
+    if (solver === undefined) {
+        solver = new FactorSolver(fit.factor.R, fit.factor.p, fit.factorRank);
+        solvers.set(fit, solver);
+    }
+    return solver;
 }
 /**
  * Leverages of m rows written into `out` (see {@link leverages}), computed a few hundred rows at
@@ -38076,7 +38542,7 @@ function facade(wasm, js) {
         const k = current();
         if (k !== null) {
             try {
-                return wasm(k, ...args);
+                return Reflect.apply(wasm, undefined, [k, ...args]);
             }
             catch (error) {
                 if (!(error instanceof ResourceFault))
@@ -38084,7 +38550,7 @@ function facade(wasm, js) {
                 fallBack();
             }
         }
-        return js(...args);
+        return Reflect.apply(js, undefined, args);
     };
 }
 /** The kernels the next call runs in this thread (compiling the module when it is not yet). */
@@ -38855,8 +39321,8 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2499);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(5280);
 /* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(2766);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(5918);
-/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(9725);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(4771);
+/* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(5475);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(856);
 /* harmony import */ var _report_runner_commands_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(673);
@@ -39100,7 +39566,7 @@ function createFsRepository(root) {
     /** The real path of a normalised repository-relative path, or null when nothing is there. */
     const realInside = async (rel, where, shown) => {
         const base = await rootReal();
-        const full = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...rel.split('/'));
+        const full = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, rel);
         let real = null;
         try {
             real = await realpath(full);
@@ -39142,7 +39608,7 @@ function createFsRepository(root) {
             // Nothing at the end of the links: a link that leads nowhere is not "missing".
             const base = await rootReal();
             const rel = (0,_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(path);
-            const lexical = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...rel.split('/'));
+            const lexical = rel === '' ? base : node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, rel);
             try {
                 return { kind: (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(lexical).isSymbolicLink() ? 'broken-link' : 'missing', real: null };
             }
@@ -40646,23 +41112,24 @@ function verdictLine(result) {
     const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : (0,wording/* verdictHeadline */.ge)(result);
     return `**${MARK[result.verdict]}**: ${head} (${(0,wording/* countsText */.WN)(result.counts)})`;
 }
-/** The "against base" cell of a model: `new`, the changes, or `–`. */
+/** The "against base" cell of a model: `new`, the changes (after `renamed from <name>:` for a renamed model), or `–`. */
 function baseCell(m) {
     const b = m.base;
     if (!b)
         return '–';
     if (b.status === 'new')
         return 'new';
+    const from = b.status === 'renamed' && b.previous ? `renamed from ${markdown_text(b.previous.name)}: ` : '';
     const rmse = b.holdout_rmse_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_rmse_change);
     const gap = b.gap_ratio_change === null ? null : (0,result/* fromJsonNumber */.M)(b.gap_ratio_change);
     if (rmse === null && gap === null)
-        return 'base not checked';
+        return `${from}base not checked`;
     const parts = [];
     if (rmse !== null)
         parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
     if (gap !== null)
         parts.push(`gap ${signed(gap)}`);
-    return parts.join(', ');
+    return `${from}${parts.join(', ')}`;
 }
 /** Table header (and separator) of the model overview. */
 function overviewHead(withBase) {
@@ -40831,8 +41298,9 @@ function axisLabel(column) {
 /* harmony export */ });
 /* harmony import */ var _classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2953);
 /* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(1628);
-/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6228);
-/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6412);
+/* harmony import */ var _core_format_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6228);
+/* harmony import */ var _core_extremes_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(398);
+/* harmony import */ var _escape_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(6412);
 /* harmony import */ var _runner_commands_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(673);
 /**
  * The terminal report: one aligned table of every model, then one block per model that did not
@@ -40843,12 +41311,13 @@ function axisLabel(column) {
 
 
 
+
 const COLOURS = { pass: '32', warn: '33', fail: '31', error: '35', skipped: '2' };
 function paint(text, status, color) {
     return color ? `\u001b[${COLOURS[status]}m${text}\u001b[0m` : text;
 }
 function table(rows, rightAligned) {
-    const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => [...r[j]].length)));
+    const widths = rows[0].map((_, j) => (0,_core_extremes_js__WEBPACK_IMPORTED_MODULE_3__/* .maxOf */ ._)(rows.map((r) => [...r[j]].length)));
     return rows.map((r) => r
         .map((cell, j) => {
         const pad = ' '.repeat(widths[j] - [...cell].length);
@@ -40859,12 +41328,12 @@ function table(rows, rightAligned) {
 }
 function metric(m, key) {
     const v = m.metrics?.[key];
-    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v)) : '–';
+    return typeof v === 'number' || typeof v === 'string' ? (0,_core_format_js__WEBPACK_IMPORTED_MODULE_4__/* .formatNumber */ .Z)((0,_result_result_js__WEBPACK_IMPORTED_MODULE_1__/* .fromJsonNumber */ .M)(v)) : '–';
 }
 function checkLine(model, c, color) {
     const status = paint(c.status.toUpperCase().padEnd(c.status === 'skipped' ? 7 : 4), c.status, color);
-    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.message)}`;
-    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(c.advice)}` : text;
+    const text = `  ${status} ${c.id} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(model.descriptor)}:${c.line}): ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(c.message)}`;
+    return c.advice ? `${text}\n       ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(c.advice)}` : text;
 }
 /**
  * Where a model's error is, for the line under its header: `file:line:column: ` (the form
@@ -40881,8 +41350,8 @@ function errorWhere(m) {
  * by its path, which then stands once.
  */
 function modelHeader(m, color) {
-    const where = m.name === m.descriptor ? '' : ` (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.descriptor)})`;
-    return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name)}${where}`;
+    const where = m.name === m.descriptor ? '' : ` (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.descriptor)})`;
+    return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.name)}${where}`;
 }
 /** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
 function baseCell(m) {
@@ -40894,7 +41363,7 @@ function baseCell(m) {
     if (change === null || !Number.isFinite(change))
         return '–';
     const percent = change * 100;
-    return `${percent > 0 ? '+' : ''}${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_3__/* .formatNumber */ .Z)(percent)}%`;
+    return `${percent > 0 ? '+' : ''}${(0,_core_format_js__WEBPACK_IMPORTED_MODULE_4__/* .formatNumber */ .Z)(percent)}%`;
 }
 /**
  * Formats the Result for a terminal: the table of models (a `vs base` column when the run was
@@ -40909,7 +41378,7 @@ function formatText(result, options = {}) {
     const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef', ...(withBase ? ['vs base'] : [])];
     const rows = result.models.map((m) => [
         m.verdict,
-        (0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(m.name),
+        (0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.name),
         metric(m, 'holdout_rmse'),
         metric(m, 'gap_ratio'),
         metric(m, 'params_per_sample'),
@@ -40934,17 +41403,22 @@ function formatText(result, options = {}) {
         out.push('');
         out.push(modelHeader(m, color));
         if (m.error) {
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(errorWhere(m) + m.error.message)}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(errorWhere(m) + m.error.message)}`);
             continue;
         }
         if ((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .isClassifier */ .aA)(m))
-            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
+            out.push(`  ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)((0,_classifier_figures_js__WEBPACK_IMPORTED_MODULE_0__/* .classifierLine */ .KT)(m))}`);
         for (const c of m.checks)
             if (verbose || c.status === 'fail' || c.status === 'warn')
                 out.push(checkLine(m, c, color));
     }
+    for (const m of result.models) {
+        const previous = m.base?.status === 'renamed' ? m.base.previous : undefined;
+        if (previous)
+            out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(m.name)} is compared with ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(previous.name)} (${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(previous.descriptor)}) of the base commit, found by its ${previous.matched_by === 'data' ? 'data files' : 'descriptor path'}`);
+    }
     for (const note of result.notes)
-        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_4__/* .escapeTerminal */ .en)(note)}`);
+        out.push('', `note: ${(0,_escape_js__WEBPACK_IMPORTED_MODULE_5__/* .escapeTerminal */ .en)(note)}`);
     const { counts } = result;
     out.push('');
     out.push(`${paint(result.verdict.toUpperCase(), result.verdict, color)}: ${counts.models} model${counts.models === 1 ? '' : 's'}, ${counts.pass} passed, ${counts.warn} warned, ${counts.fail} failed, ${counts.error} could not be checked`);
@@ -41043,7 +41517,115 @@ function exitStatus(result, failOn = 'fail') {
 
 /***/ }),
 
-/***/ 5918:
+/***/ 5148:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   gf: () => (/* binding */ dataKey),
+/* harmony export */   rq: () => (/* binding */ matchBase),
+/* harmony export */   te: () => (/* binding */ compareWithBase)
+/* harmony export */ });
+/* harmony import */ var _result_result_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1628);
+
+/** The data files and target of a descriptor, as one key (`train`, `holdout`, `target`). */
+function dataKey(descriptor) {
+    return JSON.stringify([descriptor.data.train, descriptor.data.holdout, descriptor.data.target]);
+}
+/**
+ * Pairs head models with base models, in three rounds, each base model used at most once:
+ * 1. the same name;
+ * 2. the same descriptor path (the model was renamed in place);
+ * 3. the same data key ({@link dataKey}: train, hold-out and target), when exactly one base model
+ *    left and exactly one head model left share it (the model was renamed and moved).
+ *
+ * @param head the head run's descriptors
+ * @param base the base run's outcomes
+ * @param baseData the base descriptors' data keys by base model name (models whose descriptor
+ *   could not be read have none)
+ */
+function matchBase(head, base, baseData) {
+    const matches = new Map();
+    const used = new Set();
+    const byName = new Map(base.map((m) => [m.name, m]));
+    for (const d of head) {
+        const m = byName.get(d.name);
+        if (m !== undefined && !used.has(m)) {
+            matches.set(d.file, { model: m, by: 'name' });
+            used.add(m);
+        }
+    }
+    const byPath = new Map(base.map((m) => [m.descriptor, m]));
+    for (const d of head) {
+        if (matches.has(d.file))
+            continue;
+        const m = byPath.get(d.file);
+        if (m !== undefined && !used.has(m)) {
+            matches.set(d.file, { model: m, by: 'descriptor' });
+            used.add(m);
+        }
+    }
+    const baseByKey = new Map();
+    for (const m of base) {
+        const key = baseData.get(m.name);
+        if (used.has(m) || key === undefined)
+            continue;
+        baseByKey.set(key, [...(baseByKey.get(key) ?? []), m]);
+    }
+    const headByKey = new Map();
+    for (const d of head)
+        if (!matches.has(d.file))
+            headByKey.set(dataKey(d), [...(headByKey.get(dataKey(d)) ?? []), d]);
+    for (const [key, ds] of headByKey) {
+        const ms = baseByKey.get(key) ?? [];
+        if (ds.length !== 1 || ms.length !== 1)
+            continue;
+        matches.set(ds[0].file, { model: ms[0], by: 'data' });
+        used.add(ms[0]);
+    }
+    return { matches, unmatched: base.filter((m) => !used.has(m)) };
+}
+/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
+function relativeChange(head, base) {
+    if (Number.isNaN(head) || Number.isNaN(base))
+        return null;
+    if (base === 0)
+        return head === 0 ? 0 : Infinity;
+    return (head - base) / Math.abs(base);
+}
+/**
+ * The `base` field of a model result: `new`, or the base figures and the changes, with the base
+ * model's name and path when it was matched under another name (`renamed`). A base descriptor
+ * that could not be read has its path for a name; matched by that path it is `compared`.
+ */
+function compareWithBase(metrics, match, commit) {
+    if (match === null) {
+        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
+    }
+    const baseline = match.model;
+    const unreadable = baseline.error !== null && baseline.name === baseline.descriptor;
+    const renamed = match.by !== 'name' && !unreadable;
+    const b = baseline.metrics;
+    const headRmse = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(metrics.holdout_rmse);
+    const headGap = (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(metrics.gap_ratio);
+    const baseRmse = b ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(b.holdout_rmse) : Number.NaN;
+    const baseGap = b ? (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .fromJsonNumber */ .M)(b.gap_ratio) : Number.NaN;
+    const rmseChange = relativeChange(headRmse, baseRmse);
+    const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
+    return {
+        status: renamed ? 'renamed' : 'compared',
+        commit,
+        ...(renamed ? { previous: { name: baseline.name, descriptor: baseline.descriptor, matched_by: match.by === 'data' ? 'data' : 'descriptor' } } : {}),
+        holdout_rmse: b ? b.holdout_rmse : null,
+        gap_ratio: b ? b.gap_ratio : null,
+        holdout_rmse_change: rmseChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonNumber */ .qj)(rmseChange),
+        gap_ratio_change: gapChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonNumber */ .qj)(gapChange),
+    };
+}
+
+
+/***/ }),
+
+/***/ 4771:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -41238,12 +41820,15 @@ function nearestWord(word, candidates) {
     return best;
 }
 
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __nccwpck_require__(398);
 ;// CONCATENATED MODULE: ./src/config/schema-errors.ts
 /**
  * Turns ajv's validation errors into the one most useful {@link InputError}: the first problem
  * in document order (and within it the deepest), with the file, line, column, key path, the
  * bad value (quoted, cut) and what the schema expected.
  */
+
 
 
 /** Code of every schema violation. */
@@ -41338,7 +41923,7 @@ function resolveAlternatives(errors) {
         branches.set(index, [...(branches.get(index) ?? []), e]);
     }
     const matchingType = [...branches.entries()].filter(([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')));
-    const score = (list) => [Math.max(...list.map((e) => effectiveDepth(e))), -list.length];
+    const score = (list) => [(0,extremes/* maxOf */._)(list.map((e) => effectiveDepth(e))), -list.length];
     let best = null;
     let tie = false;
     for (const [, list] of matchingType) {
@@ -41514,7 +42099,7 @@ var ucs2length = __nccwpck_require__(6214);
 
 
 const validateSettings = validate52;
-const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema19 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:settings:1", "title": "fitgate repository settings (fitgate.yml)", "description": "Where the model descriptors are and the limits every model gets unless its descriptor says otherwise.", "type": "object", "required": ["version"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "models": { "description": "Glob patterns of model descriptors, relative to the repository root (node_modules and .git are searched only when a pattern names them; links to folders are never followed). Each pattern must match at least one file.", "type": "array", "minItems": 1, "default": ["**/*.model.yml"], "items": { "description": "A glob pattern such as `models/**/*.model.yml` (`*`, `?`, `**`, `[...]`, `{a,b}`); not absolute, no `..` segment anywhere, at most 1000 characters and 256 brace alternatives.", "type": "string", "minLength": 1 } }, "limits": { "$ref": "#/$defs/limits", "description": "Limits for every model; a descriptor's own `limits` win key by key." }, "fit": { "description": "Defaults for the `fit` keys that a descriptor leaves out.", "type": "object", "additionalProperties": false, "properties": { "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.", "type": "integer", "minimum": 2, "maximum": 50, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" } } }, "caps": { "description": "Resource caps that guard memory and time; raise them for large models.", "type": "object", "additionalProperties": false, "properties": { "max_file_mb": { "description": "Largest data file, in MiB.", "type": "number", "exclusiveMinimum": 0, "default": 512 }, "max_cells": { "description": "Largest training rows x fitted parameters.", "type": "integer", "minimum": 1, "default": 200000000 }, "max_operations": { "description": "Largest estimated work of one model, in operations (one operation is about one floating-point multiply-add): the passes over the training rows, the decompositions of the p x p factors, cross-validation, the swing scan and the complexity sweep, estimated from the rows, columns, folds and sweep settings before the first pass over the rows (docs/scale.md gives the formula). A model over it is refused with its estimate; raise this to allow it.", "type": "number", "exclusiveMinimum": 0, "default": 20000000000 }, "max_model_seconds": { "description": "Time limit of one model, in seconds of wall-clock time from reading its files to its last check. A model still running then stops and becomes that model's error (code `time-limit`); every other model is still checked.", "type": "number", "exclusiveMinimum": 0, "maximum": 86400, "default": 40 } } } }, "$defs": { "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const func1 = typeof ucs2length/* default */.A === "function" ? ucs2length/* default */.A : ucs2length/* default.default */.A["default"];
 const schema20 = { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } };
 const func2 = Object.prototype.hasOwnProperty;
@@ -42090,8 +42675,8 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                     if ((typeof data5 == "number") && (isFinite(data5))) {
-                        if (data5 < 2 || isNaN(data5)) {
-                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
+                        if (data5 > 50 || isNaN(data5)) {
+                            const err9 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
                             if (vErrors === null) {
                                 vErrors = [err9];
                             }
@@ -42100,25 +42685,22 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data5 < 2 || isNaN(data5)) {
+                            const err10 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema19.properties.fit.properties.folds, data: data5 };
+                            if (vErrors === null) {
+                                vErrors = [err10];
+                            }
+                            else {
+                                vErrors.push(err10);
+                            }
+                            errors++;
+                        }
                     }
                 }
                 if (data4.fold_order !== undefined) {
                     let data6 = data4.fold_order;
                     if (!((data6 === "shuffled") || (data6 === "blocks"))) {
-                        const err10 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.fold_order.enum, parentSchema: schema19.properties.fit.properties.fold_order, data: data6 };
-                        if (vErrors === null) {
-                            vErrors = [err10];
-                        }
-                        else {
-                            vErrors.push(err10);
-                        }
-                        errors++;
-                    }
-                }
-                if (data4.seed !== undefined) {
-                    let data7 = data4.seed;
-                    if (!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))) {
-                        const err11 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.seed.type, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                        const err11 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.fold_order.enum, parentSchema: schema19.properties.fit.properties.fold_order, data: data6 };
                         if (vErrors === null) {
                             vErrors = [err11];
                         }
@@ -42127,19 +42709,22 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                }
+                if (data4.seed !== undefined) {
+                    let data7 = data4.seed;
+                    if (!(((typeof data7 == "number") && (!(data7 % 1) && !isNaN(data7))) && (isFinite(data7)))) {
+                        const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.fit.properties.seed.type, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err12];
+                        }
+                        else {
+                            vErrors.push(err12);
+                        }
+                        errors++;
+                    }
                     if ((typeof data7 == "number") && (isFinite(data7))) {
                         if (data7 > 4294967295 || isNaN(data7)) {
-                            const err12 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
-                            if (vErrors === null) {
-                                vErrors = [err12];
-                            }
-                            else {
-                                vErrors.push(err12);
-                            }
-                            errors++;
-                        }
-                        if (data7 < 0 || isNaN(data7)) {
-                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                            const err13 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
                             if (vErrors === null) {
                                 vErrors = [err13];
                             }
@@ -42148,29 +42733,39 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data7 < 0 || isNaN(data7)) {
+                            const err14 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema19.properties.fit.properties.seed, data: data7 };
+                            if (vErrors === null) {
+                                vErrors = [err14];
+                            }
+                            else {
+                                vErrors.push(err14);
+                            }
+                            errors++;
+                        }
                     }
                 }
                 if (data4.parameter_count !== undefined) {
                     let data8 = data4.parameter_count;
                     if (!((data8 === "columns") || (data8 === "effective"))) {
-                        const err14 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.parameter_count.enum, parentSchema: schema19.properties.fit.properties.parameter_count, data: data8 };
+                        const err15 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema19.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema19.properties.fit.properties.parameter_count.enum, parentSchema: schema19.properties.fit.properties.parameter_count, data: data8 };
                         if (vErrors === null) {
-                            vErrors = [err14];
+                            vErrors = [err15];
                         }
                         else {
-                            vErrors.push(err14);
+                            vErrors.push(err15);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err15 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.fit.type, parentSchema: schema19.properties.fit, data: data4 };
+                const err16 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.fit.type, parentSchema: schema19.properties.fit, data: data4 };
                 if (vErrors === null) {
-                    vErrors = [err15];
+                    vErrors = [err16];
                 }
                 else {
-                    vErrors.push(err15);
+                    vErrors.push(err16);
                 }
                 errors++;
             }
@@ -42179,13 +42774,13 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
             let data9 = data.caps;
             if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
                 for (const key2 in data9) {
-                    if (!((key2 === "max_file_mb") || (key2 === "max_cells"))) {
-                        const err16 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.caps, data: data9 };
+                    if (!((((key2 === "max_file_mb") || (key2 === "max_cells")) || (key2 === "max_operations")) || (key2 === "max_model_seconds"))) {
+                        const err17 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema19.properties.caps, data: data9 };
                         if (vErrors === null) {
-                            vErrors = [err16];
+                            vErrors = [err17];
                         }
                         else {
-                            vErrors.push(err16);
+                            vErrors.push(err17);
                         }
                         errors++;
                     }
@@ -42194,31 +42789,18 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
                     let data10 = data9.max_file_mb;
                     if ((typeof data10 == "number") && (isFinite(data10))) {
                         if (data10 <= 0 || isNaN(data10)) {
-                            const err17 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
+                            const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
                             if (vErrors === null) {
-                                vErrors = [err17];
+                                vErrors = [err18];
                             }
                             else {
-                                vErrors.push(err17);
+                                vErrors.push(err18);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err18 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_file_mb.type, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
-                        if (vErrors === null) {
-                            vErrors = [err18];
-                        }
-                        else {
-                            vErrors.push(err18);
-                        }
-                        errors++;
-                    }
-                }
-                if (data9.max_cells !== undefined) {
-                    let data11 = data9.max_cells;
-                    if (!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))) {
-                        const err19 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.caps.properties.max_cells.type, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
+                        const err19 = { instancePath: instancePath + "/caps/max_file_mb", schemaPath: "#/properties/caps/properties/max_file_mb/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_file_mb.type, parentSchema: schema19.properties.caps.properties.max_file_mb, data: data10 };
                         if (vErrors === null) {
                             vErrors = [err19];
                         }
@@ -42227,39 +42809,112 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                }
+                if (data9.max_cells !== undefined) {
+                    let data11 = data9.max_cells;
+                    if (!(((typeof data11 == "number") && (!(data11 % 1) && !isNaN(data11))) && (isFinite(data11)))) {
+                        const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema19.properties.caps.properties.max_cells.type, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
+                        if (vErrors === null) {
+                            vErrors = [err20];
+                        }
+                        else {
+                            vErrors.push(err20);
+                        }
+                        errors++;
+                    }
                     if ((typeof data11 == "number") && (isFinite(data11))) {
                         if (data11 < 1 || isNaN(data11)) {
-                            const err20 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
+                            const err21 = { instancePath: instancePath + "/caps/max_cells", schemaPath: "#/properties/caps/properties/max_cells/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema19.properties.caps.properties.max_cells, data: data11 };
                             if (vErrors === null) {
-                                vErrors = [err20];
+                                vErrors = [err21];
                             }
                             else {
-                                vErrors.push(err20);
+                                vErrors.push(err21);
                             }
                             errors++;
                         }
                     }
                 }
+                if (data9.max_operations !== undefined) {
+                    let data12 = data9.max_operations;
+                    if ((typeof data12 == "number") && (isFinite(data12))) {
+                        if (data12 <= 0 || isNaN(data12)) {
+                            const err22 = { instancePath: instancePath + "/caps/max_operations", schemaPath: "#/properties/caps/properties/max_operations/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_operations, data: data12 };
+                            if (vErrors === null) {
+                                vErrors = [err22];
+                            }
+                            else {
+                                vErrors.push(err22);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err23 = { instancePath: instancePath + "/caps/max_operations", schemaPath: "#/properties/caps/properties/max_operations/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_operations.type, parentSchema: schema19.properties.caps.properties.max_operations, data: data12 };
+                        if (vErrors === null) {
+                            vErrors = [err23];
+                        }
+                        else {
+                            vErrors.push(err23);
+                        }
+                        errors++;
+                    }
+                }
+                if (data9.max_model_seconds !== undefined) {
+                    let data13 = data9.max_model_seconds;
+                    if ((typeof data13 == "number") && (isFinite(data13))) {
+                        if (data13 > 86400 || isNaN(data13)) {
+                            const err24 = { instancePath: instancePath + "/caps/max_model_seconds", schemaPath: "#/properties/caps/properties/max_model_seconds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 86400 }, message: "must be <= 86400", schema: 86400, parentSchema: schema19.properties.caps.properties.max_model_seconds, data: data13 };
+                            if (vErrors === null) {
+                                vErrors = [err24];
+                            }
+                            else {
+                                vErrors.push(err24);
+                            }
+                            errors++;
+                        }
+                        if (data13 <= 0 || isNaN(data13)) {
+                            const err25 = { instancePath: instancePath + "/caps/max_model_seconds", schemaPath: "#/properties/caps/properties/max_model_seconds/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema19.properties.caps.properties.max_model_seconds, data: data13 };
+                            if (vErrors === null) {
+                                vErrors = [err25];
+                            }
+                            else {
+                                vErrors.push(err25);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err26 = { instancePath: instancePath + "/caps/max_model_seconds", schemaPath: "#/properties/caps/properties/max_model_seconds/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema19.properties.caps.properties.max_model_seconds.type, parentSchema: schema19.properties.caps.properties.max_model_seconds, data: data13 };
+                        if (vErrors === null) {
+                            vErrors = [err26];
+                        }
+                        else {
+                            vErrors.push(err26);
+                        }
+                        errors++;
+                    }
+                }
             }
             else {
-                const err21 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.caps.type, parentSchema: schema19.properties.caps, data: data9 };
+                const err27 = { instancePath: instancePath + "/caps", schemaPath: "#/properties/caps/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.properties.caps.type, parentSchema: schema19.properties.caps, data: data9 };
                 if (vErrors === null) {
-                    vErrors = [err21];
+                    vErrors = [err27];
                 }
                 else {
-                    vErrors.push(err21);
+                    vErrors.push(err27);
                 }
                 errors++;
             }
         }
     }
     else {
-        const err22 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.type, parentSchema: schema19, data };
+        const err28 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema19.type, parentSchema: schema19, data };
         if (vErrors === null) {
-            vErrors = [err22];
+            vErrors = [err28];
         }
         else {
-            vErrors.push(err22);
+            vErrors.push(err28);
         }
         errors++;
     }
@@ -42268,7 +42923,7 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
 }
 validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 const validateDescriptor = validate75;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds.", "type": "integer", "minimum": 2, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.", "type": "integer", "minimum": 2, "maximum": 50, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } };
 const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
@@ -45245,8 +45900,8 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                     if ((typeof data16 == "number") && (isFinite(data16))) {
-                        if (data16 < 2 || isNaN(data16)) {
-                            const err36 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                        if (data16 > 50 || isNaN(data16)) {
+                            const err36 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
                             if (vErrors === null) {
                                 vErrors = [err36];
                             }
@@ -45255,25 +45910,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data16 < 2 || isNaN(data16)) {
+                            const err37 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                            if (vErrors === null) {
+                                vErrors = [err37];
+                            }
+                            else {
+                                vErrors.push(err37);
+                            }
+                            errors++;
+                        }
                     }
                 }
                 if (data12.fold_order !== undefined) {
                     let data17 = data12.fold_order;
                     if (!((data17 === "shuffled") || (data17 === "blocks"))) {
-                        const err37 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data17 };
-                        if (vErrors === null) {
-                            vErrors = [err37];
-                        }
-                        else {
-                            vErrors.push(err37);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.seed !== undefined) {
-                    let data18 = data12.seed;
-                    if (!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))) {
-                        const err38 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                        const err38 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data17 };
                         if (vErrors === null) {
                             vErrors = [err38];
                         }
@@ -45282,19 +45934,22 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                }
+                if (data12.seed !== undefined) {
+                    let data18 = data12.seed;
+                    if (!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))) {
+                        const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                        if (vErrors === null) {
+                            vErrors = [err39];
+                        }
+                        else {
+                            vErrors.push(err39);
+                        }
+                        errors++;
+                    }
                     if ((typeof data18 == "number") && (isFinite(data18))) {
                         if (data18 > 4294967295 || isNaN(data18)) {
-                            const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
-                            if (vErrors === null) {
-                                vErrors = [err39];
-                            }
-                            else {
-                                vErrors.push(err39);
-                            }
-                            errors++;
-                        }
-                        if (data18 < 0 || isNaN(data18)) {
-                            const err40 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                            const err40 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
                             if (vErrors === null) {
                                 vErrors = [err40];
                             }
@@ -45303,17 +45958,27 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data18 < 0 || isNaN(data18)) {
+                            const err41 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                            if (vErrors === null) {
+                                vErrors = [err41];
+                            }
+                            else {
+                                vErrors.push(err41);
+                            }
+                            errors++;
+                        }
                     }
                 }
                 if (data12.parameter_count !== undefined) {
                     let data19 = data12.parameter_count;
                     if (!((data19 === "columns") || (data19 === "effective"))) {
-                        const err41 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data19 };
+                        const err42 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data19 };
                         if (vErrors === null) {
-                            vErrors = [err41];
+                            vErrors = [err42];
                         }
                         else {
-                            vErrors.push(err41);
+                            vErrors.push(err42);
                         }
                         errors++;
                     }
@@ -45322,17 +45987,7 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     let data20 = data12.threshold;
                     if ((typeof data20 == "number") && (isFinite(data20))) {
                         if (data20 >= 1 || isNaN(data20)) {
-                            const err42 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
-                            if (vErrors === null) {
-                                vErrors = [err42];
-                            }
-                            else {
-                                vErrors.push(err42);
-                            }
-                            errors++;
-                        }
-                        if (data20 <= 0 || isNaN(data20)) {
-                            const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                            const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
                             if (vErrors === null) {
                                 vErrors = [err43];
                             }
@@ -45341,26 +45996,36 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
+                        if (data20 <= 0 || isNaN(data20)) {
+                            const err44 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                            if (vErrors === null) {
+                                vErrors = [err44];
+                            }
+                            else {
+                                vErrors.push(err44);
+                            }
+                            errors++;
+                        }
                     }
                     else {
-                        const err44 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                        const err45 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
                         if (vErrors === null) {
-                            vErrors = [err44];
+                            vErrors = [err45];
                         }
                         else {
-                            vErrors.push(err44);
+                            vErrors.push(err45);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err45 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
+                const err46 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
                 if (vErrors === null) {
-                    vErrors = [err45];
+                    vErrors = [err46];
                 }
                 else {
-                    vErrors.push(err45);
+                    vErrors.push(err46);
                 }
                 errors++;
             }
@@ -45369,12 +46034,12 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
             let data21 = data.coefficients;
             if (Array.isArray(data21)) {
                 if (data21.length < 1) {
-                    const err46 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data21 };
+                    const err47 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data21 };
                     if (vErrors === null) {
-                        vErrors = [err46];
+                        vErrors = [err47];
                     }
                     else {
-                        vErrors.push(err46);
+                        vErrors.push(err47);
                     }
                     errors++;
                 }
@@ -45382,24 +46047,24 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                 for (let i1 = 0; i1 < len1; i1++) {
                     let data22 = data21[i1];
                     if (!((typeof data22 == "number") && (isFinite(data22)))) {
-                        const err47 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data22 };
+                        const err48 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data22 };
                         if (vErrors === null) {
-                            vErrors = [err47];
+                            vErrors = [err48];
                         }
                         else {
-                            vErrors.push(err47);
+                            vErrors.push(err48);
                         }
                         errors++;
                     }
                 }
             }
             else {
-                const err48 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data21 };
+                const err49 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data21 };
                 if (vErrors === null) {
-                    vErrors = [err48];
+                    vErrors = [err49];
                 }
                 else {
-                    vErrors.push(err48);
+                    vErrors.push(err49);
                 }
                 errors++;
             }
@@ -45412,12 +46077,12 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
         }
     }
     else {
-        const err49 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
+        const err50 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
         if (vErrors === null) {
-            vErrors = [err49];
+            vErrors = [err50];
         }
         else {
-            vErrors.push(err49);
+            vErrors.push(err50);
         }
         errors++;
     }
@@ -45728,7 +46393,8 @@ function firstAlias(root) {
                 stack.push(pair.key, pair.value);
         }
         else if ((0,dist/* isSeq */.oP)(node)) {
-            stack.push(...node.items);
+            for (const item of node.items)
+                stack.push(item);
         }
     }
     return best;
@@ -45803,8 +46469,12 @@ const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
 const DEFAULT_MODEL_PATTERNS = Object.freeze(['**/*.model.yml']);
 /** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
 const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' });
-/** Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters. */
-const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000 });
+/**
+ * Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters, 2e10 estimated
+ * operations per model (run/cost.ts; at most about 20 to 30 s of one core of a 2-core machine,
+ * measured) and 40 s per model.
+ */
+const DEFAULT_CAPS = Object.freeze({ maxFileMb: 512, maxCells: 200_000_000, maxOperations: 20_000_000_000, maxModelSeconds: 40 });
 /** Stable codes of the errors this module throws (besides YAML and schema codes). */
 const SETTINGS_ERROR = Object.freeze({ missing: 'file-missing', limitOrder: 'limit-order' });
 const MIB = 1024 * 1024;
@@ -45824,7 +46494,7 @@ function defaultSettings() {
         models: [...DEFAULT_MODEL_PATTERNS],
         limits: {},
         fit: { ...DEFAULT_FIT },
-        caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells },
+        caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells, maxOperations: DEFAULT_CAPS.maxOperations, maxModelSeconds: DEFAULT_CAPS.maxModelSeconds },
     };
 }
 /**
@@ -45899,6 +46569,8 @@ function settingsFromDocument(doc, file) {
         caps: {
             maxFileBytes: Math.round((raw.caps?.max_file_mb ?? DEFAULT_CAPS.maxFileMb) * MIB),
             maxCells: raw.caps?.max_cells ?? DEFAULT_CAPS.maxCells,
+            maxOperations: raw.caps?.max_operations ?? DEFAULT_CAPS.maxOperations,
+            maxModelSeconds: raw.caps?.max_model_seconds ?? DEFAULT_CAPS.maxModelSeconds,
         },
     };
     if (raw.models)
@@ -46294,6 +46966,8 @@ function readCenters(doc, file, centers, at) {
 
 // EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
 var kernels = __nccwpck_require__(8667);
+// EXTERNAL MODULE: ./src/run/base-comparison.ts
+var base_comparison = __nccwpck_require__(5148);
 ;// CONCATENATED MODULE: ./src/run/error-result.ts
 /**
  * The outcome of a model that could not be checked: verdict `error` with the file, line and code.
@@ -46328,6 +47002,20 @@ function errorResult(name, descriptor, error) {
         },
     };
 }
+/** Error code of a model stopped at its time limit (`caps.max_model_seconds`). */
+const TIME_LIMIT = 'time-limit';
+/**
+ * The error of a model stopped at its time limit, at the descriptor's `terms` line.
+ * @param descriptor the model
+ * @param limitSeconds the limit (`caps.max_model_seconds`)
+ * @param elapsedMs time spent when it was stopped
+ * @param stage what was running (a stage of the run), or null when the model's thread was ended from outside
+ * @param settingsFile path of the settings file, or null when there is none
+ */
+function timeLimitError(descriptor, limitSeconds, elapsedMs, stage, settingsFile) {
+    const where = stage === null ? 'its worker thread was stopped' : `stopped in the ${stage}`;
+    return new core_errors/* InputError */.dz(TIME_LIMIT, `did not finish within the time limit of ${limitSeconds} s per model (${where} after ${(elapsedMs / 1000).toFixed(1)} s); raise caps.max_model_seconds in ${settingsFile ?? 'the settings file (fitgate.yml)'} to allow more time, or make the model smaller (fewer rows, columns, folds or sweep settings)`, { file: descriptor.file, line: descriptor.termsLine });
+}
 
 // EXTERNAL MODULE: external "node:url"
 var external_node_url_ = __nccwpck_require__(3136);
@@ -46335,6 +47023,8 @@ var external_node_url_ = __nccwpck_require__(3136);
 var external_node_worker_threads_ = __nccwpck_require__(5919);
 // EXTERNAL MODULE: ./src/checks/index.ts + 24 modules
 var src_checks = __nccwpck_require__(3992);
+// EXTERNAL MODULE: ./src/core/deadline.ts
+var core_deadline = __nccwpck_require__(6343);
 // EXTERNAL MODULE: ./src/diagnostics/cross-validation.ts
 var cross_validation = __nccwpck_require__(4733);
 // EXTERNAL MODULE: ./src/diagnostics/folds.ts
@@ -46369,6 +47059,17 @@ function sameInputs(a, i, b, j) {
             return false;
     return true;
 }
+/** Hash of row i's inputs and target (the target folded into {@link rowHash} of the inputs). */
+function rowTargetHash(inputHash, y, i) {
+    f64[0] = y[i] + 0;
+    return (0,random/* mix32 */.QV)(Math.imul(Math.imul(inputHash ^ u32[0], 0x9e3779b1) ^ u32[1], 0x85ebca6b));
+}
+function newTable(rows) {
+    let size = 1024;
+    while (size < 2 * rows)
+        size *= 2;
+    return { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(rows).fill(-1), repOf: new Int32Array(rows) };
+}
 /** The slot of `hash`: where it is, or the empty slot where it goes. */
 function findSlot(table, hash) {
     const { slotHead, slotHash, mask } = table;
@@ -46377,72 +47078,99 @@ function findSlot(table, hash) {
         s = (s + 1) & mask;
     return s;
 }
-// The two passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
-/** Puts rows 0..n-1 in the table, so that each chain lists its rows in file order. */
-function indexRows(table, inputs, n) {
-    for (let r = n - 1; r >= 0; r--) {
-        const hash = rowHash(inputs, r);
-        const s = findSlot(table, hash);
-        table.next[r] = table.slotHead[s];
-        table.slotHash[s] = hash;
-        table.slotHead[s] = r;
+// The passes are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
+/**
+ * Puts the hold-out rows in the tables in file order: `inputs` by their inputs, `full` by their
+ * inputs and target; a row equal to an earlier one only records that row in `repOf`.
+ */
+function indexRows(inputs, full, holdout) {
+    for (let r = 0; r < holdout.rows; r++) {
+        const hash = rowHash(holdout.inputs, r);
+        let s = findSlot(inputs, hash);
+        let q = inputs.slotHead[s];
+        while (q >= 0 && !sameInputs(holdout.inputs, q, holdout.inputs, r))
+            q = inputs.next[q];
+        if (q >= 0)
+            inputs.repOf[r] = q;
+        else {
+            inputs.repOf[r] = r;
+            inputs.next[r] = inputs.slotHead[s];
+            inputs.slotHash[s] = hash;
+            inputs.slotHead[s] = r;
+        }
+        const hashY = rowTargetHash(hash, holdout.y, r);
+        s = findSlot(full, hashY);
+        q = full.slotHead[s];
+        while (q >= 0 && !(holdout.y[q] === holdout.y[r] && sameInputs(holdout.inputs, q, holdout.inputs, r)))
+            q = full.next[q];
+        if (q >= 0)
+            full.repOf[r] = q;
+        else {
+            full.repOf[r] = r;
+            full.next[r] = full.slotHead[s];
+            full.slotHash[s] = hashY;
+            full.slotHead[s] = r;
+        }
     }
 }
 /**
- * Streams the training rows past the table of hold-out rows in file order: firstMatch[r] receives
- * the first training row whose inputs equal hold-out row r's, targetToo[r] = 1 when some such row
- * has its target too.
+ * Streams the training rows past the tables of distinct hold-out rows in file order:
+ * firstMatch[q] receives the first training row whose inputs equal those of distinct row q,
+ * targetToo[q] = 1 when some training row has its inputs and its target.
  */
-function matchRows(table, holdout, train, firstMatch, targetToo) {
+function matchRows(inputs, full, holdout, train, firstMatch, targetToo) {
     for (let i = 0; i < train.rows; i++) {
-        let r = table.slotHead[findSlot(table, rowHash(train.inputs, i))];
-        while (r >= 0) {
-            if (sameInputs(holdout.inputs, r, train.inputs, i)) {
-                if (firstMatch[r] < 0)
-                    firstMatch[r] = i;
-                if (holdout.y[r] === train.y[i])
-                    targetToo[r] = 1;
-            }
-            r = table.next[r];
-        }
+        const hash = rowHash(train.inputs, i);
+        let q = inputs.slotHead[findSlot(inputs, hash)];
+        while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i))
+            q = inputs.next[q];
+        if (q < 0)
+            continue;
+        if (firstMatch[q] < 0)
+            firstMatch[q] = i;
+        q = full.slotHead[findSlot(full, rowTargetHash(hash, train.y, i))];
+        while (q >= 0 && !(holdout.y[q] === train.y[i] && sameInputs(holdout.inputs, q, train.inputs, i)))
+            q = full.next[q];
+        if (q >= 0)
+            targetToo[q] = 1;
     }
 }
 /**
  * Finds hold-out rows equal to a training row in every input column of the model (values compared
  * exactly, as parsed doubles; -0 equals 0), and among them those whose target is equal too.
- * Cost: one pass over each file plus exact comparisons on hash hits; memory one hash table of the
- * hold-out rows (typed arrays, about 20 bytes per row).
+ * Cost: one pass over each file plus exact comparisons on hash hits, against distinct hold-out
+ * rows only (so repeated rows in both files stay linear); memory two hash tables of the hold-out
+ * rows (typed arrays, about 40 bytes per row).
  *
  * @param train training rows (inputs in the model's order, targets, lines)
  * @param holdout hold-out rows (same input order)
  */
 function findLeakage(train, holdout) {
     const columns = train.inputs.length;
-    // A hash table of the hold-out rows (the smaller file, usually); the training rows then stream
-    // past it in file order, so each hold-out row's first match is the earliest training row.
+    // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
+    // stream past them in file order, so each hold-out row's first match is the earliest training row.
     const h = holdout.rows;
-    let size = 1024;
-    while (size < 2 * h)
-        size *= 2;
-    const table = { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(h).fill(-1) };
-    indexRows(table, holdout.inputs, h);
+    const byInputs = newTable(h);
+    const byRow = newTable(h);
+    indexRows(byInputs, byRow, holdout);
     const firstMatch = new Int32Array(h).fill(-1);
     const targetToo = new Uint8Array(h);
     if (h > 0)
-        matchRows(table, holdout, train, firstMatch, targetToo);
+        matchRows(byInputs, byRow, holdout, train, firstMatch, targetToo);
     let inputMatches = 0;
     let fullMatches = 0;
     const holdoutLines = [];
     const trainLines = [];
     for (let r = 0; r < h; r++) {
-        if (firstMatch[r] < 0)
+        const first = firstMatch[byInputs.repOf[r]];
+        if (first < 0)
             continue;
         inputMatches++;
-        if (targetToo[r] === 1)
+        if (targetToo[byRow.repOf[r]] === 1)
             fullMatches++;
         if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
             holdoutLines.push(holdout.lines[r]);
-            trainLines.push(train.lines[firstMatch[r]]);
+            trainLines.push(train.lines[first]);
         }
     }
     return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
@@ -46512,41 +47240,6 @@ class ModelAnalyses {
 
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __nccwpck_require__(1628);
-;// CONCATENATED MODULE: ./src/run/base-comparison.ts
-/**
- * A model's figures against the same model (by name) on the base commit of a pull request.
- */
-
-/** Relative change (head - base) / base; +Infinity when base is 0 and head is not; null when either is missing. */
-function relativeChange(head, base) {
-    if (Number.isNaN(head) || Number.isNaN(base))
-        return null;
-    if (base === 0)
-        return head === 0 ? 0 : Infinity;
-    return (head - base) / Math.abs(base);
-}
-/** The `base` field of a model result: `new`, or the base figures and the changes. */
-function compareWithBase(metrics, baseline, commit) {
-    if (baseline === null) {
-        return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
-    }
-    const b = baseline.metrics;
-    const headRmse = (0,result_result/* fromJsonNumber */.M)(metrics.holdout_rmse);
-    const headGap = (0,result_result/* fromJsonNumber */.M)(metrics.gap_ratio);
-    const baseRmse = b ? (0,result_result/* fromJsonNumber */.M)(b.holdout_rmse) : Number.NaN;
-    const baseGap = b ? (0,result_result/* fromJsonNumber */.M)(b.gap_ratio) : Number.NaN;
-    const rmseChange = relativeChange(headRmse, baseRmse);
-    const gapChange = Number.isNaN(headGap) || Number.isNaN(baseGap) ? null : headGap - baseGap;
-    return {
-        status: 'compared',
-        commit,
-        holdout_rmse: b ? b.holdout_rmse : null,
-        gap_ratio: b ? b.gap_ratio : null,
-        holdout_rmse_change: rmseChange === null ? null : (0,result_result/* jsonNumber */.qj)(rmseChange),
-        gap_ratio_change: gapChange === null ? null : (0,result_result/* jsonNumber */.qj)(gapChange),
-    };
-}
-
 ;// CONCATENATED MODULE: ./src/run/base-curves.ts
 /** True when two lists hold the same values in the same order. */
 function same(a, b) {
@@ -46601,8 +47294,27 @@ var stats = __nccwpck_require__(6801);
 /**
  * The chart data of a model in the Result: plain series the reporters draw, built by run/chart-data.ts.
  */
-/** Most points drawn per series (training or hold-out); larger files are thinned evenly. */
-const MAX_CHART_POINTS = 2000;
+/**
+ * Most points drawn per series (training or hold-out); larger files are thinned evenly. A model
+ * of several inputs keeps fewer ({@link MAX_SERIES_NUMBERS}).
+ */
+const MAX_CHART_POINTS = 1000;
+/**
+ * Most numbers one series holds: each kept row carries its line, every input, the target, the
+ * prediction and the residual (inputs + 4 numbers), so a series keeps at most
+ * floor(5,000 / (inputs + 4)) rows, and never more than {@link MAX_CHART_POINTS} (a model of one
+ * input keeps 1,000, of five 555). With at most {@link MAX_PARTIAL_CURVES} curves this bounds a
+ * model's chart data whatever its rows and inputs: a report of 1,000 models of 5 inputs stays
+ * near 300 MB of JSON.
+ */
+const MAX_SERIES_NUMBERS = 5000;
+/** Most partial curves of a model of several inputs: those of its first inputs (with a spread). */
+const MAX_PARTIAL_CURVES = 12;
+/**
+ * Grid points of all partial curves of a model together: up to 3 curves get {@link CURVE_POINTS}
+ * each, more share this many (at least 101 each).
+ */
+const PARTIAL_CURVE_POINTS = 1203;
 /** Points of the evenly spaced grid along a curve. */
 const CURVE_POINTS = 401;
 /** Margin on each side of an input's training range for curves, as a fraction of the range (as the swing check's default). */
@@ -46630,8 +47342,12 @@ function thinRows(n, max = MAX_CHART_POINTS) {
         return Int32Array.from({ length: n }, (_, i) => i);
     return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
 }
+/** Rows a series of a model with this many inputs keeps at most: {@link MAX_SERIES_NUMBERS} / (inputs + 4), at most `max`. */
+function seriesPoints(inputs, max = MAX_CHART_POINTS) {
+    return Math.max(1, Math.min(max, Math.floor(MAX_SERIES_NUMBERS / (inputs + 4))));
+}
 function series(data, predictions, max) {
-    const keep = thinRows(data.rows, max);
+    const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
     const thinned = keep.length < data.rows;
     const pick = (col) => Array.from(keep, (i) => chartNumber(col[i]));
     return {
@@ -46646,11 +47362,15 @@ function series(data, predictions, max) {
         residual: Array.from(keep, (i) => chartNumber(data.y[i] - predictions[i])),
     };
 }
-/** Predictions along input c over [lo, hi] (plus `extra` x values), the others at `medians`. */
-function curveAlong(model, c, lo, hi, medians, extra) {
+/** Grid points of each partial curve of a model with this many curves (see {@link PARTIAL_CURVE_POINTS}). */
+function partialCurvePoints(curves) {
+    return Math.max(101, Math.min(CURVE_POINTS, Math.floor(PARTIAL_CURVE_POINTS / Math.max(1, curves))));
+}
+/** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
+function curveAlong(model, c, lo, hi, medians, extra, points) {
     const xs = [];
-    for (let t = 0; t < CURVE_POINTS; t++)
-        xs.push(t === CURVE_POINTS - 1 ? hi : lo + ((hi - lo) * t) / (CURVE_POINTS - 1));
+    for (let t = 0; t < points; t++)
+        xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
     for (const v of extra)
         if (v >= lo && v <= hi)
             xs.push(v);
@@ -46764,10 +47484,11 @@ function readSweep(checks) {
         return null;
     rows.sort((a, b) => a.s - b.s);
     const parameter = typeof d.setting === 'string' ? d.setting : 'setting';
+    // rows are sorted by setting, so the positive settings run from the first to the last.
     const positive = rows.filter((r) => r.s > 0).map((r) => r.s);
     return {
         parameter,
-        log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && Math.max(...positive) / Math.min(...positive) >= 10,
+        log: parameter !== 'degree' && positive.length >= 2 && rows.every((r) => r.s >= 0) && positive[positive.length - 1] / positive[0] >= 10,
         settings: rows.map((r) => chartNumber(r.s) ?? r.s),
         cv: rows.map((r) => (r.cv === null ? null : chartNumber(r.cv))),
         train: null,
@@ -46788,18 +47509,30 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     const { train, holdout } = tables;
     const inputs = [...design.inputs];
     const medians = train.inputs.map((col) => (0,column_median/* columnMedian */.z)(col, train.rows));
+    let spread = 0;
+    for (let c = 0; c < inputs.length; c++) {
+        const [lo, hi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
+        if (hi > lo)
+            spread++;
+    }
+    const points = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES));
     // One input: the curve over the scanned range with the band; several: partial curves.
     let fitCurve = null;
     const partials = [];
+    let partialsLeftOut = 0;
     for (let c = 0; c < inputs.length; c++) {
         const [tlo, thi] = (0,stats/* range */.y1)(train.inputs[c], train.rows);
         if (!(thi > tlo))
             continue;
+        if (inputs.length > 1 && partials.length >= MAX_PARTIAL_CURVES) {
+            partialsLeftOut += 1;
+            continue;
+        }
         const swing = inputs.length === 1 ? readSwing(checks, inputs[c]) : null;
         const swingCurve = swing?.curve ?? null;
         const lo = swingCurve ? Math.min(swingCurve.x[0], tlo) : tlo - CURVE_MARGIN * (thi - tlo);
         const hi = swingCurve ? Math.max(swingCurve.x[swingCurve.x.length - 1], thi) : thi + CURVE_MARGIN * (thi - tlo);
-        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : []);
+        const { x, y } = curveAlong(model, c, lo, hi, medians, swingCurve ? swingCurve.x : [], points);
         // Keyed by column names (user text): no prototype, so `__proto__` is a name like any other.
         const others = Object.create(null);
         inputs.forEach((name, k) => {
@@ -46837,6 +47570,7 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
         holdout: series(holdout, model.holdoutPredictions, maxPoints),
         fit: fitCurve,
         partials,
+        ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),
         sweep: readSweep(checks),
         coefficients: { columns, values, limit: coefCheck?.limit ?? null, warn: coefCheck?.warn ?? null },
     };
@@ -48441,6 +49175,7 @@ function rocPoints(y, p, n, max = 50) {
  */
 
 
+
 /** Rows added to the program per cutting-plane round, at most. */
 const CUTS_PER_ROUND = 64;
 /** Largest number of row constraints in the program; beyond it the test gives up (`exact: false`). */
@@ -48551,7 +49286,7 @@ function separationOf(design, data) {
     for (let i = 0; i < n && lines.length < MAX_LISTED; i++)
         if (separated[i])
             lines.push(data.lines[i]);
-    const big = Math.max(...Array.from(total, Math.abs));
+    const big = (0,extremes/* maxOf */._)(Array.from(total, Math.abs));
     const columns = [];
     const direction = [];
     for (let j = 0; j < p; j++) {
@@ -48756,7 +49491,164 @@ function weightedDesign(design, scaling) {
     };
 }
 
+// EXTERNAL MODULE: ./src/core/format.ts
+var format = __nccwpck_require__(6228);
+;// CONCATENATED MODULE: ./src/run/cost.ts
+
+
+
+
+
+/** Operations to build one design value of a Gaussian radial column (an exponential). */
+const BUILD_RBF = 20;
+/** Operations to build one design value of any other column (a copy, a power). */
+const BUILD_OTHER = 4;
+/**
+ * Operations of one SVD of a p x p matrix, per p^3: one-sided Jacobi takes about 5.5 p^3
+ * multiply-adds a sweep and converges in about 12 sweeps (measured: 70).
+ */
+const SVD_OPERATIONS = 70;
+/**
+ * SVDs' worth of work in one fit of the full factor: the scaled spectrum, the raw singular
+ * values, the penalised factor's rank, the truncated solver of a rank-deficient factor and the
+ * hat trace (measured on rank-deficient designs: about 10).
+ */
+const FIT_SVDS = 10;
+/**
+ * SVDs' worth of work in one solve of a fold's complement when its rank is in doubt (the rank
+ * test, then the scaled spectrum and the truncated solver; measured: about 5).
+ */
+const SOLVE_SVDS = 5;
+/**
+ * Operations per row and p^2 of the leverages: forward substitution is p^2 / 2; a rank-deficient
+ * factor's pseudo-inverse takes up to 4 times as long (measured: 3.5).
+ */
+const LEVERAGE_OPERATIONS = 2;
+/**
+ * Operations per row of the leakage scan: two probes of hash tables of the hold-out rows, each
+ * a likely cache miss once the tables outgrow the cache (measured: about 200).
+ */
+const LEAKAGE_ROW_OPERATIONS = 200;
+/** Operations of building `rows` rows of a design whose row costs `buildPerRow`. */
+function build(rows, buildPerRow) {
+    return rows * buildPerRow;
+}
+/** Operations to build one row of a design. */
+function buildCost(design) {
+    let ops = design.intercept ? BUILD_OTHER : 0;
+    for (const t of design.terms)
+        ops += t.columnNames.length * (t.spec.kind === 'rbf' ? BUILD_RBF : BUILD_OTHER);
+    return ops;
+}
+/** The sizes of a planned model. */
+function modelShape(descriptor, design, trainRows, holdoutRows) {
+    return {
+        trainRows,
+        holdoutRows,
+        inputs: design.inputs.length,
+        columns: design.p,
+        buildPerRow: buildCost(design),
+        folds: Math.min(descriptor.fit.folds, trainRows),
+        shipped: descriptor.coefficients !== null,
+        sweep: (0,complexity/* sweepShape */.EH)(descriptor, design, trainRows, { maxRows: complexity/* SWEEP_MAX_ROWS */.QA }),
+    };
+}
+/** Points of the swing scan at most (every input's grid, the margins, the neighbour segments). */
+function swingPoints(inputs, rows) {
+    const s = swing/* SWING_DEFAULTS */.qk;
+    const gaps = Math.min(Math.max(0, rows - 1), s.maxGridRows) * inputs;
+    const gapPoints = Math.min(gaps, s.maxGaps + inputs) * s.perGap;
+    const segments = inputs >= 2 ? Math.min(rows, s.maxRows) * s.neighbours * s.segmentPoints : 0;
+    return inputs * (s.uniform + 2 * s.marginPoints) + gapPoints + segments;
+}
+/**
+ * Estimates the operations of every stage of one model (see the module comment for the unit).
+ * With n training rows, m hold-out rows, p columns, b operations to build a row, k folds and d
+ * inputs:
+ *
+ * - fold pass: n (b + p^2); merges of the fold factors: 4 k p^3 (the full factor and every
+ *   fold's complement);
+ * - fit: {@link FIT_SVDS} SVDs of p x p ({@link SVD_OPERATIONS} p^3 each);
+ * - refinement pass: n (b + 2p); scoring pass: n (b + {@link LEVERAGE_OPERATIONS} p^2 + 2p),
+ *   hold-out rows m (b + p), shipped coefficients (n + m)(b + p);
+ * - cross-validation solves: k ({@link SOLVE_SVDS} SVDs + p^3 / 3);
+ * - swing scan: its points (b + p), the neighbour search 1000^2 d, the grid sorts;
+ * - leakage: (n + m)({@link LEAKAGE_ROW_OPERATIONS} + 4d); charts: curves of 401 points per input (at most 12);
+ * - complexity sweep: a ridge sweep k SVDs and 2 L k p^2 for L penalties; a degree or width
+ *   sweep, per setting of p_s columns on its n_s rows, n_s (2 b_s + p_s^2 + p_s) + 4 k p_s^3 +
+ *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3).
+ */
+function estimateCost(shape) {
+    const { trainRows: n, holdoutRows: m, columns: p, buildPerRow: b, inputs: d } = shape;
+    const k = shape.folds >= 2 ? shape.folds : 0;
+    const p2 = p * p;
+    const p3 = p2 * p;
+    const svd = (q) => SVD_OPERATIONS * q * q * q;
+    const solves = (folds, q) => folds * (SOLVE_SVDS * svd(q) + (q * q * q) / 3);
+    const rowsBy = (rows) => `${rows} rows x ${p} columns`;
+    const parts = [
+        { stage: 'fold pass', operations: build(n, b) + n * p2, sizes: rowsBy(n) },
+        { stage: 'fold merges and fit', operations: 4 * k * p3 + FIT_SVDS * svd(p), sizes: `${k} folds, ${p} columns` },
+        { stage: 'refinement pass', operations: build(n, b) + 2 * n * p, sizes: rowsBy(n) },
+        { stage: 'scoring pass', operations: build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0), sizes: `${n} + ${m} rows x ${p} columns` },
+        { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
+    ];
+    const grid = swingPoints(d, n);
+    const sampled = Math.min(n, swing/* SWING_DEFAULTS */.qk.maxRows);
+    const sorted = Math.min(n, swing/* SWING_DEFAULTS */.qk.maxGridRows);
+    parts.push({ stage: 'swing scan', operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n), sizes: `${grid} points` });
+    const curves = Math.min(d, MAX_PARTIAL_CURVES);
+    parts.push({ stage: 'leakage and charts', operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d, sizes: `${n} + ${m} rows x ${d} inputs` });
+    parts.push(sweepPart(shape, k));
+    return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
+}
+/** The complexity sweep's share (see {@link estimateCost}). */
+function sweepPart(shape, k) {
+    const sweep = shape.sweep;
+    if (sweep === null || k < 2)
+        return { stage: 'complexity sweep', operations: 0, sizes: 'no setting to sweep' };
+    const p = shape.columns;
+    if (sweep.kind === 'ridge') {
+        const L = sweep.parameters.length;
+        return { stage: 'complexity sweep', operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p, sizes: `${L} ridge penalties x ${k} folds` };
+    }
+    const perColumn = shape.buildPerRow / Math.max(1, p);
+    let ops = 0;
+    for (const q of sweep.parameters) {
+        const bq = perColumn * q;
+        ops += sweep.rows * (2 * bq + q * q + q) + 4 * k * q * q * q + k * (SOLVE_SVDS * SVD_OPERATIONS * q * q * q + (q * q * q) / 3);
+    }
+    return { stage: 'complexity sweep', operations: ops, sizes: `${sweep.parameters.length} ${sweep.kind} settings on ${sweep.rows} rows` };
+}
+/** Error code of a model whose estimate is over `caps.max_operations`. */
+const OVER_BUDGET = 'over-budget';
+/** A count of operations for people: `4.2e10`. */
+function formatOperations(x) {
+    return x < 1e6 ? (0,format/* formatNumber */.Z)(Math.round(x)) : x.toExponential(1).replace('e+', 'e');
+}
+/**
+ * Refuses a model whose estimate is over the cap.
+ * @param descriptor the model (its `terms` line is named)
+ * @param estimate from {@link estimateCost}
+ * @param settings the settings file (`caps.maxOperations`, and its path for the message)
+ * @throws InputError {@link OVER_BUDGET} naming the largest stages and the cap to raise
+ */
+function checkBudget(descriptor, estimate, settings) {
+    const cap = settings.caps.maxOperations;
+    if (!(estimate.total > cap))
+        return;
+    const largest = estimate.parts
+        .filter((part) => part.operations > 0)
+        .sort((a, b) => b.operations - a.operations)
+        .slice(0, 3)
+        .map((part) => `${part.stage} ${formatOperations(part.operations)} (${part.sizes})`)
+        .join(', ');
+    throw new core_errors/* InputError */.dz(OVER_BUDGET, `the estimated work of this model, ${formatOperations(estimate.total)} operations, is over the cap of ${formatOperations(cap)} (largest: ${largest}); raise caps.max_operations in ${settings.file ?? 'the settings file (fitgate.yml)'} to allow it, or use fewer rows, columns, folds or sweep settings`, { file: descriptor.file, line: descriptor.termsLine, key: 'terms' });
+}
+
 ;// CONCATENATED MODULE: ./src/run/plan.ts
+
+
 
 
 
@@ -48781,6 +49673,7 @@ const MAX_MAGNITUDE = 1e140;
  * Plans one model.
  * @param load how the columns are read: default {@link loadModelData}; classifiers read their target as two classes
  * @throws InputError for bad data, a design over the caps, a target out of range or constant
+ *   or work estimated over `caps.max_operations` (`over-budget`)
  */
 async function planModel(repo, descriptor, settings, load = loadModelData) {
     const inputs = [];
@@ -48789,6 +49682,7 @@ async function planModel(repo, descriptor, settings, load = loadModelData) {
             if (!inputs.includes(c))
                 inputs.push(c);
     const tables = await load(repo, descriptor, inputs, settings);
+    (0,core_deadline/* checkDeadline */.Ft)('reading of the data');
     const { train } = tables;
     const file = descriptor.file;
     // A transformed input outside its transform's domain is an error naming file, line, column, value.
@@ -48815,6 +49709,8 @@ async function planModel(repo, descriptor, settings, load = loadModelData) {
     if (!(targetStats.sd > 0)) {
         throw new core_errors/* InputError */.dz('constant-target', `the target \`${(0,core_errors/* clip */.$Q)(descriptor.data.target)}\` is constant (${train.y[0]}) in every training row; there is nothing to model`, { file, line: descriptor.data.lines.target, key: 'data.target' });
     }
+    // The whole model's work, estimated from its shape before the first pass over the rows.
+    checkBudget(descriptor, estimateCost(modelShape(descriptor, design, train.rows, tables.holdout.rows)), settings);
     const folds = (0,diagnostics_folds/* assignFolds */.o)(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
 }
@@ -48989,6 +49885,7 @@ function leakageOf(train, holdout) {
 
 
 
+
 /**
  * The report's metrics of a classifier: the training and hold-out figures, calibration, class
  * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
@@ -49009,7 +49906,7 @@ function classifierMetrics(model) {
         params_per_sample: n(design.p / train.rows),
         max_std_coefficient: null,
         max_std_coefficient_column: null,
-        max_abs_coefficient: n(Math.max(0, ...Array.from(fit.coefficients, Math.abs))),
+        max_abs_coefficient: n((0,extremes/* maxOf */._)(Array.from(fit.coefficients, Math.abs), 0)),
         rank: weighted.rank,
         condition_number: n(weighted.conditionNumberScaled),
         train_log_loss: n(train.logLoss),
@@ -49038,7 +49935,8 @@ function classifierMetrics(model) {
  */
 async function evaluateClassifier(repo, descriptor, settings, base) {
     const model = await fitClassifier(repo, descriptor, settings);
-    const context = { ...model.context, baseline: base?.models.get(descriptor.name) ?? null };
+    const baseMatch = base?.matches.get(descriptor.file) ?? null;
+    const context = { ...model.context, baseline: baseMatch?.model ?? null };
     const metrics = classifierMetrics(model);
     const checks = [];
     let verdict = 'pass';
@@ -49133,6 +50031,7 @@ var weighted_metrics = __nccwpck_require__(3759);
 
 
 
+
 /**
  * Pass 1: folds every training row into its fold's factor, merges them and solves.
  * @throws InputError `design-overflow` when a design value is not within ±{@link MAX_MAGNITUDE}
@@ -49144,6 +50043,7 @@ function foldPass(plan) {
     const spread = new ColumnSpread(design.p);
     const scaling = plan.scaling ?? null;
     (0,blocks/* forEachBlock */.aN)(design, train, (X, start, m) => {
+        (0,core_deadline/* checkDeadline */.Ft)('fold pass');
         checkRange(plan, X, start, m);
         spread.add(X, m);
         // A weighted fit folds the rows scaled by sqrt(w) (design/weighted-design.ts).
@@ -49151,7 +50051,9 @@ function foldPass(plan) {
             scaleBlockRows(X, m, design.p, scaling.sqrtW, start);
         builder.add(X, scaling === null ? train.y : scaling.y, start, m);
     });
+    (0,core_deadline/* checkDeadline */.Ft)('fold merges');
     const fit = (0,src_fit/* fitFactor */.Ps)((0,cross_validation/* mergeFactors */.Z4)(builder.factors, design.p), { ridge: descriptor.fit.ridge, penalised: design.penalised });
+    (0,core_deadline/* checkDeadline */.Ft)('fit');
     const foldFactors = { perFold: builder.factors, complements: folds.k >= 2 ? (0,cross_validation/* complementFactors */.Zd)(builder.factors) : [] };
     return { fit, foldFactors, columnSd: spread.sd() };
 }
@@ -49167,6 +50069,7 @@ function refinePass(plan, fit) {
     const scaling = plan.scaling ?? null;
     const y = scaling === null ? train.y : scaling.y;
     (0,blocks/* forEachBlock */.aN)(plan.design, train, (X, start, m) => {
+        (0,core_deadline/* checkDeadline */.Ft)('refinement pass');
         if (scaling !== null)
             scaleBlockRows(X, m, plan.design.p, scaling.sqrtW, start);
         pass.addRows(X, y.subarray(start, start + m), m);
@@ -49191,7 +50094,9 @@ function scoringPass(plan, fit, foldFactors) {
             trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
         }
     }
-    catch {
+    catch (error) {
+        if (error instanceof core_deadline/* TimeLimitExceeded */.Qo)
+            throw error;
         // The cross-validation check runs it again and reports why it could not be computed (as a
         // check that throws does); the fit itself stands.
         crossValidation = null;
@@ -49372,6 +50277,7 @@ function checkedShipped(descriptor, design) {
 
 
 
+
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -49403,11 +50309,25 @@ function reportMetrics(model) {
     };
 }
 /**
- * Fits one model and runs every check on it. Input problems become a model with verdict
- * `error` (the run goes on); anything else is re-thrown.
+ * Fits one model and runs every check on it, within its time limit (`caps.max_model_seconds`,
+ * checked between the stages: see core/deadline.ts). Input problems and a model stopped at its
+ * time limit become a model with verdict `error` (the run goes on).
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
+ * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
  */
-async function evaluateModel(repo, descriptor, settings, base) {
+async function evaluateModel(repo, descriptor, settings, base, deadline) {
+    const within = deadline ?? new core_deadline/* Deadline */.B2(settings.caps.maxModelSeconds * 1000);
+    try {
+        return await (0,core_deadline/* withDeadline */.NE)(within, () => evaluateWithin(repo, descriptor, settings, base));
+    }
+    catch (error) {
+        if (!(error instanceof core_deadline/* TimeLimitExceeded */.Qo))
+            throw error;
+        return errorResult(descriptor.name, descriptor.file, timeLimitError(descriptor, settings.caps.maxModelSeconds, error.elapsedMs, error.stage, settings.file));
+    }
+}
+/** {@link evaluateModel} inside its deadline; TimeLimitExceeded passes through. */
+async function evaluateWithin(repo, descriptor, settings, base) {
     let model;
     try {
         if (descriptor.task === 'classification')
@@ -49415,6 +50335,8 @@ async function evaluateModel(repo, descriptor, settings, base) {
         model = await fitModel(repo, descriptor, settings);
     }
     catch (error) {
+        if (error instanceof core_deadline/* TimeLimitExceeded */.Qo)
+            throw error;
         if (error instanceof core_errors/* InputError */.dz)
             return errorResult(descriptor.name, descriptor.file, error);
         // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
@@ -49422,6 +50344,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
         const detail = error instanceof Error ? error.message : String(error);
         return errorResult(descriptor.name, descriptor.file, new core_errors/* InputError */.dz(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
     }
+    const baseMatch = base?.matches.get(descriptor.file) ?? null;
     // The run's own passes already produced the folds, their factors and the cross-validation.
     const analyses = new ModelAnalyses({ design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit }, { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation });
     const context = {
@@ -49431,7 +50354,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
         metrics: model.metrics,
         train: model.tables.train,
         holdout: model.tables.holdout,
-        baseline: base?.models.get(descriptor.name) ?? null,
+        baseline: baseMatch?.model ?? null,
         analyses,
         predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
         shipped: model.shipped,
@@ -49440,7 +50363,11 @@ async function evaluateModel(repo, descriptor, settings, base) {
     const checks = [];
     let verdict = 'pass';
     for (const check of (0,src_checks/* checksFor */.NR)('regression')) {
+        const stage = `${check.id} check`;
+        (0,core_deadline/* checkDeadline */.Ft)(stage);
         const { outcome, figures } = (0,src_checks/* runCheck */.k_)(check, context);
+        // A check stopped by the deadline is caught as a check error: the model stops here instead.
+        (0,core_deadline/* checkDeadline */.Ft)(stage);
         checks.push(outcome);
         if (figures)
             Object.assign(metrics, figures);
@@ -49458,7 +50385,7 @@ async function evaluateModel(repo, descriptor, settings, base) {
         coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj),
         shipped: shippedMetrics(model.shipped),
         checks,
-        ...(base ? { base: compareWithBase(metrics, context.baseline, base.commit) } : {}),
+        ...(base ? { base: (0,base_comparison/* compareWithBase */.te)(metrics, baseMatch, base.commit) } : {}),
         error: null,
         extra: {
             rank_deficient: model.fit.rankDeficient,
@@ -49488,6 +50415,7 @@ var worker_role = __nccwpck_require__(5280);
  * When the module is not JavaScript (a `.ts` file run through a transpiler, as in tests),
  * worker threads cannot load it and models run serially.
  */
+
 
 
 
@@ -49528,13 +50456,27 @@ async function evaluateModels(repo, descriptors, settings, options = {}) {
         return results;
     }
     const base = options.base;
-    const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.models.get(descriptor.name) ?? null, commit: base.commit } : { descriptor });
+    const tasks = descriptors.map((descriptor) => base ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : { descriptor });
     const data = { [worker_role/* WORKER_FLAG */.o]: true, root: options.root, settings };
-    const replies = await (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data });
+    // The worker checks the model's time limit itself between stages; a model still running
+    // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
+    const limitSeconds = settings.caps.maxModelSeconds;
+    const replies = await (0,pool/* runPool */.kD)(tasks, { jobs, script, workerData: data }, {
+        ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
+        onTimeLimit: (task, elapsedMs) => ({
+            result: errorResult(task.descriptor.name, task.descriptor.file, timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file)),
+            kernelNotes: [],
+        }),
+    });
     for (const reply of replies)
         (0,kernels/* recordKernelNotes */.YK)(reply.kernelNotes);
     return replies.map((reply) => reply.result);
 }
+/**
+ * Milliseconds past a model's time limit after which its worker thread is ended from outside:
+ * the model's own checks stop it at the limit unless one step runs longer than this.
+ */
+const HARD_STOP_GRACE_MS = 2000;
 /** The worker loop: evaluate each model task sent by the pool. */
 function startModelWorker() {
     const data = external_node_worker_threads_.workerData;
@@ -49542,7 +50484,7 @@ function startModelWorker() {
     (0,pool/* serveTasks */.aJ)(async (task) => {
         const base = task.baseline === undefined
             ? undefined
-            : { models: new Map(task.baseline === null ? [] : [[task.descriptor.name, task.baseline]]), commit: task.commit ?? '' };
+            : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
         const result = await evaluateModel(repo, task.descriptor, data.settings, base);
         return { result, kernelNotes: (0,kernels/* kernelNotes */.TJ)() };
     });
@@ -49559,6 +50501,7 @@ var version = __nccwpck_require__(3323);
  * The whole run: settings file -> descriptors -> one outcome per model -> Result.
  * No output of its own: reporters format the Result; the entry points decide the exit status.
  */
+
 
 
 
@@ -49606,9 +50549,19 @@ async function runPipeline(settings, repo, options = {}) {
         }
     }
     checkUniqueNames(loaded);
-    const base = options.baseline ? { models: options.baseline, commit: options.baseCommit ?? '' } : undefined;
-    models.push(...(await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })));
+    options.onDescriptors?.(loaded);
     const notes = [settingsNote(file, settings.config), ...(options.notes ?? []), ...(file.notes ?? []), ...discovery.notes];
+    let base;
+    if (options.baseline) {
+        const matching = (0,base_comparison/* matchBase */.rq)(loaded, [...options.baseline.values()], options.baselineData ?? new Map());
+        base = { matches: matching.matches, commit: options.baseCommit ?? '' };
+        // A shard checks part of the models, so the base models of the other shards match nothing here.
+        if (shard === null)
+            for (const m of matching.unmatched)
+                notes.push(removedNote(m));
+    }
+    for (const model of await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base }))
+        models.push(model);
     if (shard)
         notes.push(`shard ${(0,run_shard/* formatShard */._D)(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
     // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
@@ -49619,6 +50572,16 @@ async function runPipeline(settings, repo, options = {}) {
     if (shard)
         result.shard = { index: shard.index, count: shard.count };
     return result;
+}
+/** Longest piece of a model name or path quoted in a note. */
+const pipeline_QUOTE = 80;
+function quoted(text) {
+    const chars = [...text];
+    return chars.length > pipeline_QUOTE ? `${chars.slice(0, pipeline_QUOTE - 1).join('')}…` : text;
+}
+/** The note of a base model that matched no model of this run. */
+function removedNote(m) {
+    return `base model ${quoted(m.name)} (${quoted(m.descriptor)}) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared`;
 }
 
 
@@ -49647,6 +50610,11 @@ async function runPipeline(settings, repo, options = {}) {
  * {@link InputError} thrown there comes back as an InputError (code, message, location); any
  * other error comes back as an Error with the worker's message and stack. The first error
  * stops the pool (the other workers are terminated) and rejects the run.
+ *
+ * With a time limit, a task still running that long after its worker started it (a new worker
+ * first loads its script, which does not count) has that worker ended (`Worker.terminate`, which
+ * stops even a loop that never yields) and gets the result `onTimeLimit` makes for it; a new
+ * worker takes over the tasks left.
  */
 
 
@@ -49678,16 +50646,17 @@ function revive(data) {
  * Runs every task on a pool of worker threads.
  * @param tasks plain-data tasks, each handed to one worker
  * @param options number of workers, worker script and its data
+ * @param limit a per-task time limit; default none
  * @returns one result per task, in task order
  * @throws the first task error (InputErrors stay InputErrors), or an Error when a worker exits early
  */
-function runPool(tasks, options) {
+function runPool(tasks, options, limit) {
     const size = Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length);
     const results = new Array(tasks.length);
     if (tasks.length === 0)
         return Promise.resolve(results);
     return new Promise((resolve, reject) => {
-        const workers = [];
+        const workers = new Set();
         let next = 0;
         let done = 0;
         let settled = false;
@@ -49702,38 +50671,71 @@ function runPool(tasks, options) {
             stop();
             reject(error);
         };
-        const feed = (worker) => {
-            if (next >= tasks.length)
-                return;
-            const message = { index: next, task: tasks[next] };
-            next++;
-            worker.postMessage(message);
+        const finishTask = (index, value) => {
+            results[index] = value;
+            done++;
+            if (done < tasks.length)
+                return false;
+            settled = true;
+            stop();
+            resolve(results);
+            return true;
         };
-        for (let w = 0; w < size; w++) {
+        const start = () => {
             const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.Worker(options.script, { workerData: options.workerData });
-            workers.push(worker);
-            worker.on('message', (reply) => {
-                if (settled)
+            workers.add(worker);
+            // The task this worker is on, when it was handed over, and its time-limit timer.
+            let current = -1;
+            let since = 0;
+            let timer;
+            const feed = () => {
+                if (next >= tasks.length)
                     return;
-                if (!reply.ok)
-                    return failWith(revive(reply.error));
-                results[reply.index] = reply.value;
-                done++;
-                if (done === tasks.length) {
-                    settled = true;
-                    stop();
-                    resolve(results);
+                current = next++;
+                const message = { index: current, task: tasks[current] };
+                worker.postMessage(message);
+            };
+            const expire = () => {
+                if (settled || limit === undefined || current < 0)
+                    return;
+                // Ended from outside: its exit and anything it still sends are ignored from here on.
+                workers.delete(worker);
+                void worker.terminate();
+                const index = current;
+                current = -1;
+                if (!finishTask(index, limit.onTimeLimit(tasks[index], performance.now() - since)) && next < tasks.length)
+                    start();
+            };
+            worker.on('message', (reply) => {
+                if (settled || !workers.has(worker) || reply.index !== current)
+                    return;
+                if ('started' in reply) {
+                    since = performance.now();
+                    // Unreferenced: a timer alone never keeps the process running (its worker does, while busy).
+                    if (limit !== undefined)
+                        timer = setTimeout(expire, limit.ms).unref();
                     return;
                 }
-                feed(worker);
+                clearTimeout(timer);
+                current = -1;
+                if (!reply.ok)
+                    return failWith(revive(reply.error));
+                if (!finishTask(reply.index, reply.value))
+                    feed();
             });
-            worker.on('error', (error) => failWith(error instanceof Error ? error : new Error(String(error))));
+            worker.on('error', (error) => {
+                if (workers.has(worker))
+                    failWith(error instanceof Error ? error : new Error(String(error)));
+            });
             worker.on('exit', (code) => {
-                if (!settled)
+                clearTimeout(timer);
+                if (!settled && workers.has(worker))
                     failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
             });
-            feed(worker);
-        }
+            feed();
+        };
+        for (let w = 0; w < size; w++)
+            start();
     });
 }
 /**
@@ -49746,6 +50748,8 @@ function serveTasks(handle) {
         return;
     const port = node_worker_threads__WEBPACK_IMPORTED_MODULE_1__.parentPort;
     port.on('message', (message) => {
+        // Posted before the task runs, so the pool's clock starts even if the task never yields.
+        port.postMessage({ index: message.index, started: true });
         Promise.resolve()
             .then(() => handle(message.task))
             .then((value) => port.postMessage({ index: message.index, ok: true, value }), (error) => port.postMessage({ index: message.index, ok: false, error: errorData(error) }));

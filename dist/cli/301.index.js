@@ -161,7 +161,7 @@ var repo_write = __webpack_require__(9056);
 // EXTERNAL MODULE: ./src/result/result.ts
 var result_result = __webpack_require__(1628);
 // EXTERNAL MODULE: ./src/run/pipeline.ts + 29 modules
-var pipeline = __webpack_require__(2897);
+var pipeline = __webpack_require__(6453);
 // EXTERNAL MODULE: ./src/report/escape.ts
 var report_escape = __webpack_require__(4031);
 ;// CONCATENATED MODULE: ./src/entries/refit-command.ts
@@ -308,7 +308,7 @@ const FILE_EXISTS = 'file-exists';
  */
 function existsInRepo(root, rel) {
     try {
-        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(node_path__WEBPACK_IMPORTED_MODULE_1__.join((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(root), ...(0,_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(rel, { file: rel }).split('/')));
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(node_path__WEBPACK_IMPORTED_MODULE_1__.join((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(root), (0,_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(rel, { file: rel })));
         return true;
     }
     catch {
@@ -331,7 +331,7 @@ function writeInRepo(root, rel, text, overwrite = false) {
     const base = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(root);
     if (!overwrite && existsInRepo(base, normal))
         throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FILE_EXISTS, 'exists; run again with --force to overwrite it', { file: normal });
-    (0,_safe_write_js__WEBPACK_IMPORTED_MODULE_4__/* .writeFileSafely */ .kv)(node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...normal.split('/')), text, { option: normal, within: [base], insideOnly: true });
+    (0,_safe_write_js__WEBPACK_IMPORTED_MODULE_4__/* .writeFileSafely */ .kv)(node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, normal), text, { option: normal, within: [base], insideOnly: true });
 }
 
 

@@ -21,8 +21,10 @@ var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
 // EXTERNAL MODULE: ./src/core/errors.ts
 var errors = __webpack_require__(4296);
+// EXTERNAL MODULE: ./src/run/base-comparison.ts
+var base_comparison = __webpack_require__(5148);
 // EXTERNAL MODULE: ./src/run/pipeline.ts + 29 modules
-var pipeline = __webpack_require__(2897);
+var pipeline = __webpack_require__(6453);
 // EXTERNAL MODULE: external "node:child_process"
 var external_node_child_process_ = __webpack_require__(1421);
 // EXTERNAL MODULE: external "node:fs"
@@ -319,13 +321,15 @@ function createGitRepository(options) {
 
 
 
+
 /** Hint for the action: how to make the base commit available. */
 const ACTION_FETCH_HINT = 'fetch it with `fetch-depth: 2` on actions/checkout (a pull_request checkout is the merge commit, whose first parent is the base). Models are not compared with the base branch in this run.';
 /** Hint for the command line. */
 const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`) or name a commit that exists locally. Models are not compared with a base in this run.';
 /**
- * The head run's options from the base commit: the baseline by model name and the base SHA, or
- * one note saying why there is no comparison.
+ * The head run's options from the base commit: the baseline by model name with each base model's
+ * data files (to match renamed models) and the base SHA, or one note saying why there is no
+ * comparison.
  * @param settings the head run's settings (the same settings file path and descriptors are read at the base)
  * @param revision the base commit: a SHA or any revision git understands
  * @param options the hint shown when git does not have the commit
@@ -347,15 +351,21 @@ async function evaluateBase(settings, revision, options) {
             if (await repo.isFile(d))
                 descriptors.push(d);
         const baseline = new Map();
+        const baselineData = new Map();
         if (settings.descriptors.length === 0 || descriptors.length > 0) {
             const configThere = await repo.isFile(settings.config);
             if (configThere || !settings.configExplicit) {
-                const base = await (0,pipeline/* runPipeline */.a)({ ...settings, descriptors }, repo);
+                // The data files of each base model, to find it again when a pull request renames and moves it.
+                const onDescriptors = (loaded) => {
+                    for (const d of loaded)
+                        baselineData.set(d.name, (0,base_comparison/* dataKey */.gf)(d));
+                };
+                const base = await (0,pipeline/* runPipeline */.a)({ ...settings, descriptors }, repo, { onDescriptors });
                 for (const m of base.models)
                     baseline.set(m.name, m);
             }
         }
-        return { baseline, baseCommit: sha, notes: [] };
+        return { baseline, baselineData, baseCommit: sha, notes: [] };
     }
     catch (error) {
         return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,errors/* errorMessage */.gJ)(error)}); models are not compared with it in this run.`] };

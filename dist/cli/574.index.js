@@ -50,6 +50,8 @@ var result_result = __webpack_require__(1628);
 var report_escape = __webpack_require__(4031);
 // EXTERNAL MODULE: ./src/report/wording.ts
 var wording = __webpack_require__(5594);
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __webpack_require__(398);
 ;// CONCATENATED MODULE: ./src/report/svg/palette.ts
 /**
  * Colours and marks of every chart. Colours come from the colour-blind-safe set of Okabe & Ito
@@ -329,6 +331,7 @@ function logScale(domain, range) {
 
 
 
+
 /** Most bars drawn; with more columns the largest are kept, in column order. */
 const MAX_BARS = 60;
 const BAR = 14;
@@ -350,15 +353,15 @@ function coefficientBarsChart(coef, options) {
             .slice(0, MAX_BARS)
             .sort((a, b) => a.j - b.j);
     }
-    const left = Math.min(170, 16 + Math.max(...shown.map((b) => shorten(b.name).length)) * 6.4);
+    const left = Math.min(170, 16 + (0,extremes/* maxOf */._)(shown.map((b) => shorten(b.name).length)) * 6.4);
     const height = Math.max(180, MARGIN.top + MARGIN.bottom + shown.length * (BAR + GAP) + GAP);
     const { x0, y0, x1, y1 } = plotArea(WIDTH, height, left);
     const sizes = shown.map((b) => (b.v === null ? null : Math.abs(b.v)));
     const finite = sizes.filter((v) => v !== null);
     const refs = [coef.limit, coef.warn].filter((v) => v !== null && v > 0);
-    const top = Math.max(...finite, ...refs, 1e-12);
+    const top = (0,extremes/* maxOf */._)([...finite, ...refs], 1e-12);
     const positives = [...finite, ...refs].filter((v) => v > 0);
-    const bottom = positives.length ? Math.min(...positives) : top;
+    const bottom = positives.length ? (0,extremes/* minOf */.H)(positives) : top;
     const log = top / bottom >= 1000;
     const sx = log
         ? logScale([10 ** Math.floor(Math.log10(bottom)), 10 ** Math.ceil(Math.log10(top * 1.05))], [x0, x1])
@@ -393,7 +396,7 @@ function coefficientBarsChart(coef, options) {
     if (coef.warn !== null)
         legend.push({ mark: legendLine(COLOURS.warn, DASHES.warn, 1.6), label: `warning ${(0,format/* formatNumber */.Z)(coef.warn)}` });
     const overCount = sizes.filter((v) => v === null || (coef.limit !== null && v > coef.limit)).length;
-    const largest = finite.length ? Math.max(...finite) : Number.NaN;
+    const largest = finite.length ? (0,extremes/* maxOf */._)(finite) : Number.NaN;
     return frame_frame({
         id,
         kind: 'coefficients',
@@ -425,6 +428,7 @@ function coefficientBarsChart(coef, options) {
 
 
 
+
 const DIAMOND = 4;
 /** Renders the cross-validation curve of a complexity sweep. */
 function cvCurveChart(sweep, options) {
@@ -432,13 +436,18 @@ function cvCurveChart(sweep, options) {
     const { x0, y0, x1, y1 } = plotArea();
     // On a log axis a setting of 0 (no penalty) sits one decade left of the smallest positive setting, labelled 0.
     const positives = sweep.settings.filter((v) => v > 0);
-    const zeroAt = sweep.log && positives.length ? Math.min(...positives) / 10 : 0;
+    const zeroAt = sweep.log && positives.length ? (0,extremes/* minOf */.H)(positives) / 10 : 0;
     const s = sweep.settings.map((v) => (sweep.log && v <= 0 ? zeroAt : v));
     const xDomain = [s[0], s[s.length - 1]];
     const sx = sweep.log ? logScale(xDomain, [x0 + 8, x1 - 8]) : linearScale(s.length > 1 ? xDomain : pad(xDomain), [x0 + 8, x1 - 8]);
     const hasZero = sweep.log && sweep.settings.some((v) => v <= 0);
-    if (hasZero)
-        sx.ticks.splice(0, sx.ticks.length, zeroAt, ...sx.ticks.filter((t) => t > zeroAt * 3));
+    if (hasZero) {
+        const kept = sx.ticks.filter((t) => t > zeroAt * 3);
+        sx.ticks.length = 0;
+        sx.ticks.push(zeroAt);
+        for (const t of kept)
+            sx.ticks.push(t);
+    }
     const yRange = extent(sweep.cv, sweep.train ?? []) ?? [0, 1];
     const yLog = yRange[0] > 0 && yRange[1] / yRange[0] >= 100;
     const sy = yLog ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0]) : linearScale(pad(yRange, 0.08), [y1, y0]);
@@ -882,19 +891,23 @@ function badge(status) {
 function verdictText(result) {
     return `${badge(result.verdict)} ${(0,report_escape/* escapeHtml */.ZD)((0,wording/* verdictHeadline */.ge)(result))} <span class="muted">(${(0,report_escape/* escapeHtml */.ZD)((0,wording/* countsText */.WN)(result.counts))})</span>`;
 }
-function overview(result) {
-    const rows = result.models.map((m, i) => {
-        const x = m.metrics;
-        const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code>`);
-        return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a></td>` +
-            `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
-            `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
-            `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`);
-    });
-    return ('<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
+function overviewRow(m, i) {
+    const x = m.metrics;
+    const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code>`);
+    return (`<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${(0,report_escape/* escapeHtml */.ZD)(m.name)}</a></td>` +
+        `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
+        `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
+        `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`);
+}
+/** The overview table, one piece per row. */
+function* overview(result) {
+    yield ('<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
         '<table><thead><tr><th>Status</th><th>Model</th><th class="num">Training rows</th><th class="num">Hold-out rows</th><th class="num">Parameters</th>' +
         '<th class="num">Hold-out RMSE</th><th class="num">Gap ratio</th><th class="num">Max std. coef.</th><th>Over a limit</th></tr></thead>' +
-        `<tbody>${rows.join('')}</tbody></table></section>`);
+        '<tbody>');
+    for (let i = 0; i < result.models.length; i++)
+        yield overviewRow(result.models[i], i);
+    yield '</tbody></table></section>';
 }
 function checksTable(m) {
     const rows = m.checks.map((c) => {
@@ -951,6 +964,9 @@ function modelSection(m, index) {
         parts.push(`<h3>Charts</h3>`);
         if (thinned.length)
             parts.push(`<p class="note">${thinned.map((s) => (0,report_escape/* escapeHtml */.ZD)(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`);
+        const leftOut = m.charts.partialsLeftOut ?? 0;
+        if (leftOut > 0)
+            parts.push(`<p class="note">${(0,report_escape/* escapeHtml */.ZD)(`Partial curves of the first ${m.charts.partials.length} inputs; ${leftOut} more left out.`)}</p>`);
         parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
     }
     else {
@@ -960,14 +976,16 @@ function modelSection(m, index) {
     return parts.join('');
 }
 /**
- * Formats the Result as one self-contained HTML page.
+ * The HTML page in pieces (the head, each overview row, each model's section, the end), to write
+ * one after another: joined, they are {@link formatHtml}'s text. A page of any number of models is
+ * written without ever being one string.
  * @param result the run's Result
  * @param options heading text; defaults in {@link HtmlOptions}
  */
-function formatHtml(result, options = {}) {
+function* htmlReport(result, options = {}) {
     const title = options.title ?? 'fitgate report';
     const notes = result.notes.map((n) => `<p class="note">${(0,report_escape/* escapeHtml */.ZD)(n)}</p>`).join('');
-    return [
+    yield [
         '<!DOCTYPE html>',
         '<html lang="en">',
         '<head>',
@@ -982,14 +1000,27 @@ function formatHtml(result, options = {}) {
         `<body data-verdict="${(0,report_escape/* escapeHtml */.ZD)(result.verdict)}">`,
         `<header><h1>${(0,report_escape/* escapeHtml */.ZD)(title)}</h1>${options.subtitle ? `<p class="muted">${(0,report_escape/* escapeHtml */.ZD)(options.subtitle)}</p>` : ''}<p class="verdict">${verdictText(result)}</p>${notes}</header>`,
         '<main>',
-        overview(result),
-        ...result.models.map(modelSection),
+        '',
+    ].join('\n');
+    yield* overview(result);
+    yield '\n';
+    for (let i = 0; i < result.models.length; i++)
+        yield `${modelSection(result.models[i], i)}\n`;
+    yield [
         '</main>',
         `<footer>${(0,report_escape/* escapeHtml */.ZD)(`${result.tool.name} ${result.tool.version}`)}. Training rows are filled circles, hold-out rows hollow squares; dashed lines are fail limits, dotted lines warning limits. Colours from the Okabe–Ito colour-blind-safe set.</footer>`,
         '</body>',
         '</html>',
         '',
     ].join('\n');
+}
+/**
+ * Formats the Result as one self-contained HTML page ({@link htmlReport} joined).
+ * @param result the run's Result
+ * @param options heading text; defaults in {@link HtmlOptions}
+ */
+function formatHtml(result, options = {}) {
+    return [...htmlReport(result, options)].join('');
 }
 
 ;// CONCATENATED MODULE: ./src/report/junit.ts
@@ -1049,11 +1080,12 @@ function suite(m, failOn) {
     return { xml: cases.length ? `${head}>\n${cases.join('\n')}\n  </testsuite>` : `${head}/>`, counts };
 }
 /**
- * Formats the Result as JUnit XML.
+ * The JUnit XML report in pieces (the head, then one test suite per model), to write one after
+ * another: joined, they are {@link formatJunit}'s text.
  * @param result the run's Result
  * @param options what counts as a failure; defaults in {@link JunitOptions}
  */
-function formatJunit(result, options = {}) {
+function* junitReport(result, options = {}) {
     const failOn = options.failOn ?? 'fail';
     const suites = result.models.map((m) => suite(m, failOn));
     const total = { tests: 0, failures: 0, errors: 0, skipped: 0 };
@@ -1064,14 +1096,30 @@ function formatJunit(result, options = {}) {
         total.skipped += s.counts.skipped;
     }
     const head = `<testsuites${attrs({ name: result.tool.name, tests: total.tests, failures: total.failures, errors: total.errors, skipped: total.skipped })}`;
-    const body = suites.length ? `${head}>\n${suites.map((s) => s.xml).join('\n')}\n</testsuites>` : `${head}/>`;
-    return `<?xml version="1.0" encoding="UTF-8"?>\n${body}\n`;
+    if (suites.length === 0) {
+        yield `<?xml version="1.0" encoding="UTF-8"?>\n${head}/>\n`;
+        return;
+    }
+    yield `<?xml version="1.0" encoding="UTF-8"?>\n${head}>`;
+    for (const s of suites)
+        yield `\n${s.xml}`;
+    yield '\n</testsuites>\n';
+}
+/**
+ * Formats the Result as JUnit XML ({@link junitReport} joined).
+ * @param result the run's Result
+ * @param options what counts as a failure; defaults in {@link JunitOptions}
+ */
+function formatJunit(result, options = {}) {
+    return [...junitReport(result, options)].join('');
 }
 
 // EXTERNAL MODULE: external "node:crypto"
 var external_node_crypto_ = __webpack_require__(7598);
 // EXTERNAL MODULE: ./src/core/links.ts
 var links = __webpack_require__(4982);
+// EXTERNAL MODULE: ./src/core/json-pieces.ts
+var json_pieces = __webpack_require__(1629);
 ;// CONCATENATED MODULE: ./src/report/sarif.ts
 /**
  * The SARIF 2.1.0 report (OASIS Static Analysis Results Interchange Format, Version 2.1.0,
@@ -1081,6 +1129,7 @@ var links = __webpack_require__(4982);
  * the check points at. Models that could not be checked are tool execution notifications at
  * the file and line of the problem. Passing and switched-off checks are not results.
  */
+
 
 
 
@@ -1198,6 +1247,14 @@ function sarifLog(result, options = {}) {
         ],
     };
 }
+/**
+ * The SARIF report in pieces (one result each at most), to write one after another: joined, they
+ * are {@link formatSarif}'s text.
+ */
+function* sarifReport(result, options = {}) {
+    yield* (0,json_pieces/* jsonPieces */.M)(sarifLog(result, options));
+    yield '\n';
+}
 /** The SARIF report as JSON text (two-space indentation, final newline). */
 function formatSarif(result, options = {}) {
     return `${JSON.stringify(sarifLog(result, options), null, 2)}\n`;
@@ -1209,7 +1266,7 @@ var safe_write = __webpack_require__(9725);
 /**
  * Writes the file reports a run asked for (HTML page, SARIF log, JUnit XML). Shared by the CLI
  * and the action; the reporters only format, this module only writes, each file through
- * {@link writeFileSafely} (never through a link, atomically).
+ * {@link writeFileSafely} (never through a link, atomically), piece by piece (never one string).
  */
 
 
@@ -1225,20 +1282,20 @@ var safe_write = __webpack_require__(9725);
 async function writeFileReports(result, files) {
     const failures = [];
     const place = (name) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
-    const attempt = (name, file, text) => {
+    const attempt = (name, file, pieces) => {
         try {
-            (0,safe_write/* writeFileSafely */.kv)(file, text(), place(name));
+            (0,safe_write/* writeFileSafely */.kv)(file, pieces(), place(name));
         }
         catch (error) {
             failures.push({ option: place(name).option, refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC, message: (0,errors/* errorMessage */.gJ)(error) });
         }
     };
     if (files.html !== null)
-        attempt('html', external_node_path_default().join(files.html, HTML_FILE), () => formatHtml(result));
+        attempt('html', external_node_path_default().join(files.html, HTML_FILE), () => htmlReport(result));
     if (files.sarif !== null)
-        attempt('sarif', files.sarif, () => formatSarif(result, { pathPrefix: files.sarifPrefix }));
+        attempt('sarif', files.sarif, () => sarifReport(result, { pathPrefix: files.sarifPrefix }));
     if (files.junit !== null)
-        attempt('junit', files.junit, () => formatJunit(result, { failOn: files.failOn }));
+        attempt('junit', files.junit, () => junitReport(result, { failOn: files.failOn }));
     return failures;
 }
 

@@ -145,7 +145,7 @@ const MAX_COLUMNS = 200;
  */
 function schemaLocation(root, folder, file) {
     const installed = `node_modules/fitgate/dist/schema/${file}.schema.json`;
-    if ((0,external_node_fs_.existsSync)(external_node_path_default().join(root, ...installed.split('/'))))
+    if ((0,external_node_fs_.existsSync)(external_node_path_default().join(root, installed)))
         return external_node_path_default().posix.relative(folder === '' ? '.' : folder, installed);
     return `${links/* REPOSITORY_URL */.l.replace('https://github.com/', 'https://raw.githubusercontent.com/')}/v${version/* VERSION */.x}/dist/schema/${file}.schema.json`;
 }
@@ -334,7 +334,7 @@ const FILE_EXISTS = 'file-exists';
  */
 function existsInRepo(root, rel) {
     try {
-        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(node_path__WEBPACK_IMPORTED_MODULE_1__.join((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(root), ...(0,_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(rel, { file: rel }).split('/')));
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.lstatSync)(node_path__WEBPACK_IMPORTED_MODULE_1__.join((0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(root), (0,_repo_repo_path_js__WEBPACK_IMPORTED_MODULE_3__/* .normaliseRepoPath */ .Gn)(rel, { file: rel })));
         return true;
     }
     catch {
@@ -357,7 +357,7 @@ function writeInRepo(root, rel, text, overwrite = false) {
     const base = (0,node_fs__WEBPACK_IMPORTED_MODULE_0__.realpathSync)(root);
     if (!overwrite && existsInRepo(base, normal))
         throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FILE_EXISTS, 'exists; run again with --force to overwrite it', { file: normal });
-    (0,_safe_write_js__WEBPACK_IMPORTED_MODULE_4__/* .writeFileSafely */ .kv)(node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, ...normal.split('/')), text, { option: normal, within: [base], insideOnly: true });
+    (0,_safe_write_js__WEBPACK_IMPORTED_MODULE_4__/* .writeFileSafely */ .kv)(node_path__WEBPACK_IMPORTED_MODULE_1__.join(base, normal), text, { option: normal, within: [base], insideOnly: true });
 }
 
 

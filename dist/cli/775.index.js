@@ -43,7 +43,10 @@ var errors = __webpack_require__(4296);
 var nearest = __webpack_require__(761);
 // EXTERNAL MODULE: ./src/core/links.ts
 var links = __webpack_require__(4982);
+// EXTERNAL MODULE: ./src/core/extremes.ts
+var extremes = __webpack_require__(398);
 ;// CONCATENATED MODULE: ./src/report/explain.ts
+
 
 
 /** The explanation of one check, ending with a line break. */
@@ -65,8 +68,8 @@ function formatExplanation(check) {
 }
 /** Every check's id, limit key and title, one per line, in report order. */
 function formatCheckList() {
-    const width = Math.max(...checks/* CHECKS */.ui.map((c) => c.id.length));
-    const keyWidth = Math.max(...checks/* CHECKS */.ui.map((c) => c.limitKey.length));
+    const width = (0,extremes/* maxOf */._)(checks/* CHECKS */.ui.map((c) => c.id.length));
+    const keyWidth = (0,extremes/* maxOf */._)(checks/* CHECKS */.ui.map((c) => c.limitKey.length));
     return `${checks/* CHECKS */.ui.map((c) => `${c.id.padEnd(width)}  ${c.limitKey.padEnd(keyWidth)}  ${c.title}`).join('\n')}\n`;
 }
 

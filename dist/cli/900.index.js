@@ -181,23 +181,24 @@ function verdictLine(result) {
     const head = result.verdict === 'pass' && result.counts.models === 0 ? 'no models to check' : (0,wording/* verdictHeadline */.ge)(result);
     return `**${MARK[result.verdict]}**: ${head} (${(0,wording/* countsText */.WN)(result.counts)})`;
 }
-/** The "against base" cell of a model: `new`, the changes, or `–`. */
+/** The "against base" cell of a model: `new`, the changes (after `renamed from <name>:` for a renamed model), or `–`. */
 function baseCell(m) {
     const b = m.base;
     if (!b)
         return '–';
     if (b.status === 'new')
         return 'new';
+    const from = b.status === 'renamed' && b.previous ? `renamed from ${markdown_text(b.previous.name)}: ` : '';
     const rmse = b.holdout_rmse_change === null ? null : (0,result/* fromJsonNumber */.M)(b.holdout_rmse_change);
     const gap = b.gap_ratio_change === null ? null : (0,result/* fromJsonNumber */.M)(b.gap_ratio_change);
     if (rmse === null && gap === null)
-        return 'base not checked';
+        return `${from}base not checked`;
     const parts = [];
     if (rmse !== null)
         parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
     if (gap !== null)
         parts.push(`gap ${signed(gap)}`);
-    return parts.join(', ');
+    return `${from}${parts.join(', ')}`;
 }
 /** Table header (and separator) of the model overview. */
 function overviewHead(withBase) {

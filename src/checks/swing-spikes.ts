@@ -1,6 +1,7 @@
 /**
  * `swing-spikes`: spikes inside the band (the curve's total variation between the samples against the targets' own).
  */
+import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { jsonRecord } from '../core/json.js';
@@ -46,7 +47,7 @@ const check: Check = {
     const term = context.design.terms.find((t) => context.design.inputs.length === 1 && t.inputs.includes(spikes.worst ?? ''));
     return {
       value: spikes.ratio,
-      message: `along \`${spikes.worst}\` the predictions between the samples vary ${formatNumber(spikes.ratio)} times as much as the training targets (total variation ${formatNumber(worst?.curveVariation)} against ${formatNumber(worst?.dataVariation)})`,
+      message: `along \`${clip(spikes.worst ?? '')}\` the predictions between the samples vary ${formatNumber(spikes.ratio)} times as much as the training targets (total variation ${formatNumber(worst?.curveVariation)} against ${formatNumber(worst?.dataVariation)})`,
       ...(term ? { line: term.spec.line } : {}),
       metrics: { swing_spikes: jsonNumber(spikes.ratio) },
       detail: jsonRecord({

@@ -6,6 +6,7 @@
  */
 import { LIMIT_KEYS } from './generated/limit-keys.js';
 import type { LimitSpec } from './types.js';
+import { maxOf } from '../core/extremes.js';
 
 /** What the first descriptor holds. */
 export interface FirstModel {
@@ -90,7 +91,7 @@ function scalar(text: string): string {
 /** Every limit key but those given, as commented lines `<prefix>key: default   # summary`. */
 function commentedLimits(prefix: string, except: string[]): string[] {
   const rows = LIMIT_KEYS.filter((k) => !except.includes(k.key));
-  const width = Math.max(...rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
+  const width = maxOf(rows.map((k) => `${k.key}: ${specText(k.defaultSpec)}`.length));
   return rows.map((k) => `${prefix}${`${k.key}: ${specText(k.defaultSpec)}`.padEnd(width)}  # ${k.description}`);
 }
 

@@ -307,7 +307,7 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
       const width = (spec as RbfTermSpec).width;
       for (let t = 4; t >= -2; t--) settings.push({ value: width * 2 ** t, current: t === 0 });
     } else {
-      settings.push(...countSettings(spec));
+      for (const setting of countSettings(spec)) settings.push(setting);
     }
     for (const { value, current } of settings) {
       checkDeadline('complexity sweep');

@@ -24,6 +24,7 @@
 import { forEachBlock } from '../design/blocks.js';
 import type { Design } from '../design/design-matrix.js';
 import { fitFactor, QrAccumulator } from '../fit/index.js';
+import { maxOf } from '../core/extremes.js';
 
 /** Rows added to the program per cutting-plane round, at most. */
 const CUTS_PER_ROUND = 64;
@@ -146,7 +147,7 @@ function separationOf(design: Design, data: SeparationRows): Separation {
   if (count === 0) return { ...none, exact };
   const lines: number[] = [];
   for (let i = 0; i < n && lines.length < MAX_LISTED; i++) if (separated[i]) lines.push(data.lines[i]);
-  const big = Math.max(...Array.from(total, Math.abs));
+  const big = maxOf(Array.from(total, Math.abs));
   const columns: number[] = [];
   const direction: number[] = [];
   for (let j = 0; j < p; j++) {

@@ -33,7 +33,7 @@ const MAX_COLUMNS = 200;
  */
 function schemaLocation(root: string, folder: string, file: 'descriptor' | 'settings'): string {
   const installed = `node_modules/fitgate/dist/schema/${file}.schema.json`;
-  if (existsSync(path.join(root, ...installed.split('/')))) return path.posix.relative(folder === '' ? '.' : folder, installed);
+  if (existsSync(path.join(root, installed))) return path.posix.relative(folder === '' ? '.' : folder, installed);
   return `${REPOSITORY_URL.replace('https://github.com/', 'https://raw.githubusercontent.com/')}/v${VERSION}/dist/schema/${file}.schema.json`;
 }
 

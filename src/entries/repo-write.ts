@@ -20,7 +20,7 @@ export const FILE_EXISTS = 'file-exists';
  */
 export function existsInRepo(root: string, rel: string): boolean {
   try {
-    lstatSync(nodePath.join(realpathSync(root), ...normaliseRepoPath(rel, { file: rel }).split('/')));
+    lstatSync(nodePath.join(realpathSync(root), normaliseRepoPath(rel, { file: rel })));
     return true;
   } catch {
     return false;
@@ -42,5 +42,5 @@ export function writeInRepo(root: string, rel: string, text: string, overwrite =
   const normal = normaliseRepoPath(rel, { file: rel });
   const base = realpathSync(root);
   if (!overwrite && existsInRepo(base, normal)) throw new InputError(FILE_EXISTS, 'exists; run again with --force to overwrite it', { file: normal });
-  writeFileSafely(nodePath.join(base, ...normal.split('/')), text, { option: normal, within: [base], insideOnly: true });
+  writeFileSafely(nodePath.join(base, normal), text, { option: normal, within: [base], insideOnly: true });
 }

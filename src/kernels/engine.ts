@@ -56,13 +56,13 @@ export function facade<A extends unknown[], R>(wasm: (k: KernelExports, ...args:
     const k = current();
     if (k !== null) {
       try {
-        return wasm(k, ...args);
+        return Reflect.apply(wasm, undefined, [k, ...args]) as R;
       } catch (error) {
         if (!(error instanceof ResourceFault)) throw error;
         fallBack();
       }
     }
-    return js(...args);
+    return Reflect.apply(js, undefined, args) as R;
   };
 }
 

@@ -76,7 +76,7 @@ export function createFsRepository(root: string): RepoReader {
       // Nothing at the end of the links: a link that leads nowhere is not "missing".
       const base = await rootReal();
       const rel = normaliseRepoPath(path);
-      const lexical = rel === '' ? base : nodePath.join(base, ...rel.split('/'));
+      const lexical = rel === '' ? base : nodePath.join(base, rel);
       try {
         return { kind: lstatSync(lexical).isSymbolicLink() ? 'broken-link' : 'missing', real: null };
       } catch {

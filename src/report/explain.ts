@@ -6,6 +6,7 @@
 import type { Check } from '../checks/index.js';
 import { CHECKS } from '../checks/index.js';
 import { checkDocsUrl } from '../core/links.js';
+import { maxOf } from '../core/extremes.js';
 
 /** The explanation of one check, ending with a line break. */
 export function formatExplanation(check: Check): string {
@@ -28,7 +29,7 @@ export function formatExplanation(check: Check): string {
 
 /** Every check's id, limit key and title, one per line, in report order. */
 export function formatCheckList(): string {
-  const width = Math.max(...CHECKS.map((c) => c.id.length));
-  const keyWidth = Math.max(...CHECKS.map((c) => c.limitKey.length));
+  const width = maxOf(CHECKS.map((c) => c.id.length));
+  const keyWidth = maxOf(CHECKS.map((c) => c.limitKey.length));
   return `${CHECKS.map((c) => `${c.id.padEnd(width)}  ${c.limitKey.padEnd(keyWidth)}  ${c.title}`).join('\n')}\n`;
 }

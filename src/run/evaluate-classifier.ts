@@ -9,6 +9,7 @@ import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResul
 import type { RepoReader } from '../repo/types.js';
 import type { BaseInput } from './base-comparison.js';
 import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
+import { maxOf } from '../core/extremes.js';
 
 /**
  * The report's metrics of a classifier: the training and hold-out figures, calibration, class
@@ -30,7 +31,7 @@ function classifierMetrics(model: FittedClassifier): ModelMetrics {
     params_per_sample: n(design.p / train.rows),
     max_std_coefficient: null,
     max_std_coefficient_column: null,
-    max_abs_coefficient: n(Math.max(0, ...Array.from(fit.coefficients, Math.abs))),
+    max_abs_coefficient: n(maxOf(Array.from(fit.coefficients, Math.abs), 0)),
     rank: weighted.rank,
     condition_number: n(weighted.conditionNumberScaled),
     train_log_loss: n(train.logLoss),

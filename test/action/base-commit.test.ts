@@ -127,7 +127,7 @@ describe('a pull request that renames a model cannot escape base-change', () => 
     expect(m.name).toBe('kiln-v2');
     expect(m.base).toMatchObject({ status: 'renamed', previous: { name: 'kiln', descriptor: 'models/kiln.model.yml', matched_by: 'descriptor' } });
     expect(m.checks.find((c) => c.id === 'base-change')?.status).toBe('fail');
-    expect(result.notes).toEqual([]);
+    expect(result.notes).toEqual(['settings: fitgate.yml']);
     expect(formatMarkdown(result)).toMatch(/\| FAIL \| kiln-v2 \| .* \| renamed from kiln: RMSE \+\d/);
     expect(formatText(result)).toContain('note: kiln-v2 is compared with kiln (models/kiln.model.yml) of the base commit, found by its descriptor path');
   });
@@ -148,6 +148,6 @@ describe('a pull request that renames a model cannot escape base-change', () => 
       'models/oven.model.yml': kiln('oven', '../data/copy-train.csv', '../data/copy-holdout.csv'),
     });
     expect(result.models[0].base?.status).toBe('new');
-    expect(result.notes).toEqual(['base model kiln (models/kiln.model.yml) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared']);
+    expect(result.notes).toEqual(['settings: fitgate.yml', 'base model kiln (models/kiln.model.yml) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared']);
   });
 });

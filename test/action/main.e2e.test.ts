@@ -178,6 +178,9 @@ function advice(id: string): string {
 }
 
 /** The annotation lines every run on the head commit writes, in order. */
+// The run's note naming the settings file it read (every run has one).
+const SETTINGS = '::notice title=fitgate::settings: fitgate.yml';
+
 const FINDINGS = [
   '::error file=ml/models/bad%2C50%25%3A%3Aerror%3A%3Ax.model.yml,line=3,title=fitgate could not check models/bad%2C50%25%3A%3Aerror%3A%3Ax.model.yml::is not valid YAML: Flow sequence in block collection must be sufficiently indented and end with a ]',
   `::error file=ml/models/steady.model.yml,line=11,title=fitgate base-change (steady)::hold-out RMSE 0.4203 against 0.1382 on the base commit (+204%25); over the fail limit 0.1. ${advice('base-change')}`,
@@ -202,7 +205,7 @@ describe('node dist/index.js on a pull request', () => {
 
   it('annotates, summarises, sets outputs and fails the step on the first run, creating the comment', async () => {
     first = await runAction({}, fixture.baseSha);
-    expect(first.commands, first.stdout + first.stderr).toEqual([MASK, ...FINDINGS, FAILURE]);
+    expect(first.commands, first.stdout + first.stderr).toEqual([MASK, ...FINDINGS, SETTINGS, FAILURE]);
     expect(first.status).toBe(1);
     // The token is printed once, first, to register it with the runner's masking.
     expect(first.stdout.split('\n').filter((l) => l.includes(TOKEN))).toEqual([MASK]);
@@ -229,10 +232,12 @@ describe('node dist/index.js on a pull request', () => {
 
     // Summary: the verdict line, the table with the changes against the base, the details.
     const lines = first.summary.split('\n');
-    expect(lines.slice(0, 9)).toEqual([
+    expect(lines.slice(0, 11)).toEqual([
       '## fitgate',
       '',
       '**ERROR**: 1 of 5 models could not be checked (5 checked: 1 pass, 1 warn, 2 fail, 1 error)',
+      '',
+      '> settings: fitgate.yml',
       '',
       '| Status | Model | Hold-out RMSE | Gap ratio | Params / row | Largest std. coef. | Against base |',
       '| --- | --- | ---: | ---: | ---: | ---: | --- |',
@@ -240,7 +245,7 @@ describe('node dist/index.js on a pull request', () => {
       '| pass | fresh | 0.4203 | 2.995 | 0.1 | 0.9999 | new |',
       '| WARN | lean | 4.992 | 0.953 | 0.1667 | 0.9476 | RMSE 0%, gap 0 |',
     ]);
-    expect(lines[9]).toMatch(/^\| FAIL \| steady \| 0\.4203 \| 2\.995 \| 0\.1 \| 0\.9999 \| RMSE \+204\.2%, gap \+2\.0\d* \|$/);
+    expect(lines[11]).toMatch(/^\| FAIL \| steady \| 0\.4203 \| 2\.995 \| 0\.1 \| 0\.9999 \| RMSE \+204\.2%, gap \+2\.0\d* \|$/);
     expect(first.summary).toContain('| base-change | FAIL | 2.042 | fail > 0.1 | 11 |');
 
     // Comment: listed across both pages, then created once with the marker and the same report
@@ -262,7 +267,7 @@ describe('node dist/index.js on a pull request', () => {
     api.seen = [];
     const before = api.comments.length;
     second = await runAction({}, fixture.baseSha);
-    expect(second.commands).toEqual([MASK, ...FINDINGS, FAILURE]);
+    expect(second.commands).toEqual([MASK, ...FINDINGS, SETTINGS, FAILURE]);
     expect(api.seen.filter((s) => s.url.includes('/issues/')).map((s) => `${s.method} ${s.url}`)).toEqual([
       'GET /repos/acme/models/issues/7/comments?per_page=100',
       'GET /repos/acme/models/issues/7/comments?per_page=100&page=2',
@@ -279,7 +284,7 @@ describe('node dist/index.js on a pull request', () => {
     api.mode = 'ok';
     const notice =
       '::notice title=fitgate::the pull-request comment could not be written (HTTP 403): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.';
-    expect(run.commands).toEqual([MASK, ...FINDINGS, notice, FAILURE]);
+    expect(run.commands).toEqual([MASK, ...FINDINGS, SETTINGS, notice, FAILURE]);
     expect(run.status).toBe(first.status);
     expect(run.outputs.verdict).toBe(first.outputs.verdict);
     expect(run.outputs.failed).toBe(first.outputs.failed);
@@ -294,7 +299,7 @@ describe('node dist/index.js on a pull request', () => {
       '::notice title=fitgate::base commit fffffff is not available; fetch it with `fetch-depth: 2` on actions/checkout (a pull_request checkout is the merge commit, whose first parent is the base). Models are not compared with the base branch in this run.';
     expect(run.commands.filter((l) => l.includes('not available'))).toEqual([note]);
     // Without a base, steady passes its own limits; the other findings stay.
-    expect(run.commands).toEqual([MASK, FINDINGS[0], FINDINGS[2], FINDINGS[3], note, FAILURE]);
+    expect(run.commands).toEqual([MASK, FINDINGS[0], FINDINGS[2], FINDINGS[3], SETTINGS, note, FAILURE]);
     expect(run.summary).toContain('> base commit fffffff is not available');
     expect(run.summary).not.toContain('Against base');
     expect(api.seen).toEqual([]);
@@ -303,7 +308,7 @@ describe('node dist/index.js on a pull request', () => {
   it('passes a run with warnings, and fails it with fail-on: warn', async () => {
     const inputs = { INPUT_CONFIG: 'lean-only.yml', INPUT_COMMENT: 'false' };
     const lenient = await runAction(inputs, fixture.baseSha);
-    expect(lenient.commands).toEqual([MASK, FINDINGS[3]]);
+    expect(lenient.commands).toEqual([MASK, FINDINGS[3], '::notice title=fitgate::settings: lean-only.yml']);
     expect(lenient.status).toBe(0);
     expect(lenient.outputs.verdict).toBe('warn');
     expect(lenient.outputs.failed).toBe('0');
@@ -311,6 +316,7 @@ describe('node dist/index.js on a pull request', () => {
     expect(strict.commands).toEqual([
       MASK,
       FINDINGS[3],
+      '::notice title=fitgate::settings: lean-only.yml',
       '::error::1 of 1 models over a limit (fail-on: warn counts warnings): lean. The annotations point at the descriptor lines; the job summary has each figure against its limit.',
     ]);
     expect(strict.status).toBe(1);

@@ -208,7 +208,8 @@ function runAction(options: { fork?: boolean; inputs?: Record<string, string> } 
 
 /** The notice and warning lines of fitgate's own (not the annotations at descriptor lines). */
 function ownLines(run: Run): string[] {
-  return run.commands.filter((l) => /^::(notice|warning) title=fitgate::/.test(l));
+  // The run's note naming its settings file is not about review suggestions.
+  return run.commands.filter((l) => /^::(notice|warning) title=fitgate::/.test(l) && !l.startsWith('::notice title=fitgate::settings: '));
 }
 
 describe('review suggestions on the pull request', () => {

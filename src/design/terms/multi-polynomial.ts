@@ -16,7 +16,7 @@ export function monomials(k: number, d: number): number[][] {
   const out: number[][] = [];
   let level: number[][] = Array.from({ length: k }, (_, i) => [i]);
   for (let t = 1; t <= d; t++) {
-    out.push(...level);
+    for (const m of level) out.push(m);
     if (t === d) break;
     const next: number[][] = [];
     for (const m of level) for (let i = m[m.length - 1]; i < k; i++) next.push([...m, i]);
