@@ -31,6 +31,7 @@ import { InputError } from '../core/errors.js';
 import { DEFAULT_CHUNK_ROWS, DEFAULT_MAX_BYTES, planRequest, type ColumnPlan } from './csv-rules.js';
 import { FastPathDeclined, fastChunks } from './fast-path.js';
 import type { ScanTarget } from './general-path.js';
+import { DEFAULT_FORMAT, decimalSeparatorError, peekSeparator, type CsvFormat, type SplitFilter } from './csv-format.js';
 
 /** A run of consecutive data rows, column-major. */
 export interface TableChunk {
@@ -52,6 +53,10 @@ export interface ReadTableOptions {
   maxBytes?: number;
   /** Force the general path (tests). Default false. */
   general?: boolean;
+  /** How the file is written (csv-format.ts): separator (default `auto`), decimal mark, missing cells. */
+  format?: Partial<CsvFormat>;
+  /** Read only the rows of one side of a split column. */
+  split?: SplitFilter;
 }
 
 /** A whole table's requested columns. */
@@ -66,6 +71,8 @@ export interface Table {
   columns: Map<string, Float64Array>;
   /** 1-based physical line of each row in the file, length `rows`. */
   lines: Int32Array;
+  /** Rows dropped for a missing cell (`missing: drop`); 0 otherwise. */
+  dropped: number;
 }
 
 /**
@@ -84,7 +91,7 @@ export interface Table {
 export async function* readTableChunks(repo: RepoReader, path: string, options: ReadTableOptions): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
   await checkSize(repo, path, settings.maxBytes);
-  yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
+  yield* scan(() => repo.stream(path), path, settings, () => undefined, false, false);
 }
 
 /**
@@ -127,7 +134,8 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
     if (rows > 0) nextLines.set(lines.subarray(0, rows));
     lines = nextLines;
   };
-  for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+  const counts = { dropped: 0 };
+  for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)) {
     const needed = rows + chunk.rows;
     if (needed > lines.length) {
       let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -148,7 +156,7 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
   settings.columns.forEach((name, k) => {
     if (!out.has(name)) out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
   });
-  return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
+  return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows), dropped: counts.dropped };
 }
 
 /**
@@ -159,12 +167,12 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
  * @param path repository-relative path of the CSV file
  * @param maxBytes size cap in bytes; default 512 MiB
  */
-export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFAULT_MAX_BYTES): Promise<string[]> {
-  const settings = checkOptions({ columns: [], maxBytes });
+export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFAULT_MAX_BYTES, format?: Partial<CsvFormat>): Promise<string[]> {
+  const settings = checkOptions({ columns: [], maxBytes, format });
   await checkSize(repo, path, settings.maxBytes);
   let header: string[] = [];
   // A header-only scan ends right after the header and yields no rows.
-  const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
+  const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true, false);
   while (!(await scanning.next()).done);
   return header;
 }
@@ -174,11 +182,14 @@ interface Settings {
   chunkRows: number;
   maxBytes: number;
   general: boolean;
+  format: CsvFormat;
+  split: SplitFilter | undefined;
 }
 
 /** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
 function checkOptions(options: ReadTableOptions): Settings {
-  const { columns, chunkRows = DEFAULT_CHUNK_ROWS, maxBytes = DEFAULT_MAX_BYTES, general = false } = options;
+  const { columns, chunkRows = DEFAULT_CHUNK_ROWS, maxBytes = DEFAULT_MAX_BYTES, general = false, split } = options;
+  const format: CsvFormat = { ...DEFAULT_FORMAT, ...options.format };
   if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
     throw new TypeError('readTable: `columns` must be an array of column names');
   }
@@ -186,7 +197,7 @@ function checkOptions(options: ReadTableOptions): Settings {
     throw new RangeError(`readTable: \`chunkRows\` must be an integer from 1 to 2^30, got ${chunkRows}`);
   }
   if (!(maxBytes >= 0)) throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
-  return { columns, chunkRows, maxBytes, general };
+  return { columns, chunkRows, maxBytes, general, format, split };
 }
 
 /** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
@@ -216,15 +227,27 @@ async function* scan(
   settings: Settings,
   onHeader: (plan: ColumnPlan) => void,
   headerOnly: boolean,
-  recycle = false,
+  recycle: boolean,
+  counts?: { dropped: number },
 ): AsyncGenerator<TableChunk> {
   let headerSeen = false;
+  let format = settings.format;
+  let first: AsyncIterable<Uint8Array> | null = null;
+  if (format.separator === 'auto') {
+    const found = await peekSeparator(open());
+    first = found.pieces;
+    if (found.separator === ',' && format.decimal === ',') throw decimalSeparatorError(path, found.line);
+    format = { ...format, separator: found.separator };
+  } else if (format.separator === ',' && format.decimal === ',') throw decimalSeparatorError(path, 1);
   const target: ScanTarget = {
     file: path,
     request: planRequest(settings.columns),
     chunkRows: settings.chunkRows,
     headerOnly,
     recycle,
+    format,
+    split: settings.split,
+    counts,
     onHeader: (plan) => {
       if (headerSeen) return;
       headerSeen = true;
@@ -234,7 +257,9 @@ async function* scan(
   let handedOut = 0;
   if (!settings.general) {
     try {
-      for await (const chunk of fastChunks(open(), target)) {
+      const pieces = first ?? open();
+      first = null;
+      for await (const chunk of fastChunks(pieces, target)) {
         handedOut += chunk.rows;
         yield chunk;
       }
@@ -245,5 +270,5 @@ async function* scan(
   }
   // csv-parse is loaded only when a file needs it (most data files take the fast path).
   const { generalChunks } = await import('./general-path.js');
-  yield* generalChunks(open(), target, handedOut);
+  yield* generalChunks(first ?? open(), target, handedOut);
 }
