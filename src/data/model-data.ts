@@ -14,4 +14,6 @@ export interface ModelData {
   rows: number;
   /** Repository-relative file path. */
   file: string;
+  /** Rows dropped for a missing cell under `data.missing: drop` (absent otherwise). */
+  dropped?: number;
 }

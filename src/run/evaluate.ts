@@ -94,6 +94,9 @@ export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, se
     descriptor: descriptor.file,
     verdict,
     rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    ...(model.tables.train.dropped !== undefined
+      ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
+      : {}),
     parameters: model.design.p,
     columns: [...model.design.columnNames],
     metrics,

@@ -715,7 +715,7 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate67;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","holdout","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder.","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder.","type":"string","minLength":1},"target":{"description":"Name of the column to predict.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model. Only `regression` today.","enum":["regression"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows).","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder. Required unless `split` is given (then not allowed).","type":"string","minLength":1},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial` or `rbf`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds.","type":"integer","minimum":2,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling. Default: the training mean of x; 0 with scale 1 gives raw powers.","type":"number"},"scale":{"description":"Divides x - shift. Default: the training population standard deviation of x. Must be > 0.","type":"number","exclusiveMinimum":0}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"centers":{"$ref":"#/$defs/centers","description":"The centres c: a list, { from, to, count }, { from, to, step } or `at-samples` (one per training row)."},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
@@ -2001,8 +2001,8 @@ vErrors.push(err11);
 }
 errors++;
 }
-if(data3.holdout === undefined){
-const err12 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
+if(data3.target === undefined){
+const err12 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "target"},message:"must have required property '"+"target"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2011,8 +2011,9 @@ vErrors.push(err12);
 }
 errors++;
 }
-if(data3.target === undefined){
-const err13 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "target"},message:"must have required property '"+"target"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
+for(const key1 in data3){
+if(!(((((((key1 === "train") || (key1 === "holdout")) || (key1 === "separator")) || (key1 === "decimal")) || (key1 === "missing")) || (key1 === "split")) || (key1 === "target"))){
+const err13 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2021,9 +2022,12 @@ vErrors.push(err13);
 }
 errors++;
 }
-for(const key1 in data3){
-if(!(((key1 === "train") || (key1 === "holdout")) || (key1 === "target"))){
-const err14 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
+}
+if(data3.train !== undefined){
+let data4 = data3.train;
+if(typeof data4 === "string"){
+if(func1(data4) < 1){
+const err14 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train,data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2033,11 +2037,8 @@ vErrors.push(err14);
 errors++;
 }
 }
-if(data3.train !== undefined){
-let data4 = data3.train;
-if(typeof data4 === "string"){
-if(func1(data4) < 1){
-const err15 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train,data:data4};
+else {
+const err15 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.type,parentSchema:schema22.properties.data.properties.train,data:data4};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2047,8 +2048,11 @@ vErrors.push(err15);
 errors++;
 }
 }
-else {
-const err16 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.type,parentSchema:schema22.properties.data.properties.train,data:data4};
+if(data3.holdout !== undefined){
+let data5 = data3.holdout;
+if(typeof data5 === "string"){
+if(func1(data5) < 1){
+const err16 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout,data:data5};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2058,11 +2062,8 @@ vErrors.push(err16);
 errors++;
 }
 }
-if(data3.holdout !== undefined){
-let data5 = data3.holdout;
-if(typeof data5 === "string"){
-if(func1(data5) < 1){
-const err17 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout,data:data5};
+else {
+const err17 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.type,parentSchema:schema22.properties.data.properties.holdout,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2072,8 +2073,10 @@ vErrors.push(err17);
 errors++;
 }
 }
-else {
-const err18 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.type,parentSchema:schema22.properties.data.properties.holdout,data:data5};
+if(data3.separator !== undefined){
+let data6 = data3.separator;
+if(!((((data6 === "auto") || (data6 === ",")) || (data6 === ";")) || (data6 === "\t"))){
+const err18 = {instancePath:instancePath+"/data/separator",schemaPath:"#/properties/data/properties/separator/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.separator.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.separator.enum,parentSchema:schema22.properties.data.properties.separator,data:data6};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2083,11 +2086,10 @@ vErrors.push(err18);
 errors++;
 }
 }
-if(data3.target !== undefined){
-let data6 = data3.target;
-if(typeof data6 === "string"){
-if(func1(data6) < 1){
-const err19 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.target,data:data6};
+if(data3.decimal !== undefined){
+let data7 = data3.decimal;
+if(!((data7 === ".") || (data7 === ","))){
+const err19 = {instancePath:instancePath+"/data/decimal",schemaPath:"#/properties/data/properties/decimal/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.decimal.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.decimal.enum,parentSchema:schema22.properties.data.properties.decimal,data:data7};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2097,8 +2099,10 @@ vErrors.push(err19);
 errors++;
 }
 }
-else {
-const err20 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.target.type,parentSchema:schema22.properties.data.properties.target,data:data6};
+if(data3.missing !== undefined){
+let data8 = data3.missing;
+if(!((data8 === "error") || (data8 === "drop"))){
+const err20 = {instancePath:instancePath+"/data/missing",schemaPath:"#/properties/data/properties/missing/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.missing.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.missing.enum,parentSchema:schema22.properties.data.properties.missing,data:data8};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2108,9 +2112,11 @@ vErrors.push(err20);
 errors++;
 }
 }
-}
-else {
-const err21 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
+if(data3.split !== undefined){
+let data9 = data3.split;
+if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+if(data9.column === undefined){
+const err21 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2119,12 +2125,8 @@ vErrors.push(err21);
 }
 errors++;
 }
-}
-if(data.terms !== undefined){
-let data7 = data.terms;
-if(Array.isArray(data7)){
-if(data7.length < 1){
-const err22 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data7};
+if(data9.train === undefined){
+const err22 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2133,16 +2135,8 @@ vErrors.push(err22);
 }
 errors++;
 }
-const len0 = data7.length;
-for(let i0=0; i0<len0; i0++){
-if(!(validate68(data7[i0], {instancePath:instancePath+"/terms/" + i0,parentData:data7,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-}
-}
-else {
-const err23 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data7};
+if(data9.holdout === undefined){
+const err23 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2151,13 +2145,9 @@ vErrors.push(err23);
 }
 errors++;
 }
-}
-if(data.fit !== undefined){
-let data9 = data.fit;
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
 for(const key2 in data9){
-if(!((((((key2 === "intercept") || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count"))){
-const err24 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data9};
+if(!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))){
+const err24 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -2167,10 +2157,11 @@ vErrors.push(err24);
 errors++;
 }
 }
-if(data9.intercept !== undefined){
-let data10 = data9.intercept;
-if(typeof data10 !== "boolean"){
-const err25 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data10};
+if(data9.column !== undefined){
+let data10 = data9.column;
+if(typeof data10 === "string"){
+if(func1(data10) < 1){
+const err25 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.column,data:data10};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -2180,11 +2171,8 @@ vErrors.push(err25);
 errors++;
 }
 }
-if(data9.ridge !== undefined){
-let data11 = data9.ridge;
-if((typeof data11 == "number") && (isFinite(data11))){
-if(data11 < 0 || isNaN(data11)){
-const err26 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data11};
+else {
+const err26 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.column.type,parentSchema:schema22.properties.data.properties.split.properties.column,data:data10};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -2194,8 +2182,11 @@ vErrors.push(err26);
 errors++;
 }
 }
-else {
-const err27 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data11};
+if(data9.train !== undefined){
+let data11 = data9.train;
+if(typeof data11 === "string"){
+if(func1(data11) < 1){
+const err27 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.train,data:data11};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -2205,10 +2196,8 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data9.folds !== undefined){
-let data12 = data9.folds;
-if(!(((typeof data12 == "number") && (!(data12 % 1) && !isNaN(data12))) && (isFinite(data12)))){
-const err28 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data12};
+else {
+const err28 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.train.type,parentSchema:schema22.properties.data.properties.split.properties.train,data:data11};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2217,9 +2206,12 @@ vErrors.push(err28);
 }
 errors++;
 }
-if((typeof data12 == "number") && (isFinite(data12))){
-if(data12 < 2 || isNaN(data12)){
-const err29 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data12};
+}
+if(data9.holdout !== undefined){
+let data12 = data9.holdout;
+if(typeof data12 === "string"){
+if(func1(data12) < 1){
+const err29 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2229,11 +2221,8 @@ vErrors.push(err29);
 errors++;
 }
 }
-}
-if(data9.fold_order !== undefined){
-let data13 = data9.fold_order;
-if(!((data13 === "shuffled") || (data13 === "blocks"))){
-const err30 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data13};
+else {
+const err30 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.holdout.type,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data12};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2243,10 +2232,9 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data9.seed !== undefined){
-let data14 = data9.seed;
-if(!(((typeof data14 == "number") && (!(data14 % 1) && !isNaN(data14))) && (isFinite(data14)))){
-const err31 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+}
+else {
+const err31 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.properties.split.type,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2255,9 +2243,12 @@ vErrors.push(err31);
 }
 errors++;
 }
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 > 4294967295 || isNaN(data14)){
-const err32 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+}
+if(data3.target !== undefined){
+let data13 = data3.target;
+if(typeof data13 === "string"){
+if(func1(data13) < 1){
+const err32 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.target,data:data13};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2266,8 +2257,9 @@ vErrors.push(err32);
 }
 errors++;
 }
-if(data14 < 0 || isNaN(data14)){
-const err33 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data14};
+}
+else {
+const err33 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.target.type,parentSchema:schema22.properties.data.properties.target,data:data13};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -2278,10 +2270,8 @@ errors++;
 }
 }
 }
-if(data9.parameter_count !== undefined){
-let data15 = data9.parameter_count;
-if(!((data15 === "columns") || (data15 === "effective"))){
-const err34 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data15};
+else {
+const err34 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -2291,9 +2281,11 @@ vErrors.push(err34);
 errors++;
 }
 }
-}
-else {
-const err35 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data9};
+if(data.terms !== undefined){
+let data14 = data.terms;
+if(Array.isArray(data14)){
+if(data14.length < 1){
+const err35 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data14};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -2302,12 +2294,16 @@ vErrors.push(err35);
 }
 errors++;
 }
+const len0 = data14.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate68(data14[i0], {instancePath:instancePath+"/terms/" + i0,parentData:data14,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
 }
-if(data.coefficients !== undefined){
-let data16 = data.coefficients;
-if(Array.isArray(data16)){
-if(data16.length < 1){
-const err36 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data16};
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data14};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -2316,11 +2312,13 @@ vErrors.push(err36);
 }
 errors++;
 }
-const len1 = data16.length;
-for(let i1=0; i1<len1; i1++){
-let data17 = data16[i1];
-if(!((typeof data17 == "number") && (isFinite(data17)))){
-const err37 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data17};
+}
+if(data.fit !== undefined){
+let data16 = data.fit;
+if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
+for(const key3 in data16){
+if(!((((((key3 === "intercept") || (key3 === "ridge")) || (key3 === "folds")) || (key3 === "fold_order")) || (key3 === "seed")) || (key3 === "parameter_count"))){
+const err37 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -2330,14 +2328,177 @@ vErrors.push(err37);
 errors++;
 }
 }
-}
-else {
-const err38 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data16};
+if(data16.intercept !== undefined){
+let data17 = data16.intercept;
+if(typeof data17 !== "boolean"){
+const err38 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
 else {
 vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data16.ridge !== undefined){
+let data18 = data16.ridge;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 < 0 || isNaN(data18)){
+const err39 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data18};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data18};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+if(data16.folds !== undefined){
+let data19 = data16.folds;
+if(!(((typeof data19 == "number") && (!(data19 % 1) && !isNaN(data19))) && (isFinite(data19)))){
+const err41 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data19};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 < 2 || isNaN(data19)){
+const err42 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data19};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+}
+if(data16.fold_order !== undefined){
+let data20 = data16.fold_order;
+if(!((data20 === "shuffled") || (data20 === "blocks"))){
+const err43 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data20};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+if(data16.seed !== undefined){
+let data21 = data16.seed;
+if(!(((typeof data21 == "number") && (!(data21 % 1) && !isNaN(data21))) && (isFinite(data21)))){
+const err44 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data21};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 > 4294967295 || isNaN(data21)){
+const err45 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data21};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+if(data21 < 0 || isNaN(data21)){
+const err46 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data21};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+}
+if(data16.parameter_count !== undefined){
+let data22 = data16.parameter_count;
+if(!((data22 === "columns") || (data22 === "effective"))){
+const err47 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data22};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+}
+}
+else {
+const err48 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data16};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+if(data.coefficients !== undefined){
+let data23 = data.coefficients;
+if(Array.isArray(data23)){
+if(data23.length < 1){
+const err49 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data23};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
+const len1 = data23.length;
+for(let i1=0; i1<len1; i1++){
+let data24 = data23[i1];
+if(!((typeof data24 == "number") && (isFinite(data24)))){
+const err50 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data24};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+}
+else {
+const err51 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data23};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
 }
 errors++;
 }
@@ -2350,12 +2511,12 @@ errors = vErrors.length;
 }
 }
 else {
-const err39 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
 if(vErrors === null){
-vErrors = [err39];
+vErrors = [err52];
 }
 else {
-vErrors.push(err39);
+vErrors.push(err52);
 }
 errors++;
 }
