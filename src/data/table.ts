@@ -30,6 +30,7 @@ import type { RepoReader } from '../repo/types.js';
 import { InputError } from '../core/errors.js';
 import { DEFAULT_CHUNK_ROWS, DEFAULT_MAX_BYTES, planRequest, type ColumnPlan } from './csv-rules.js';
 import { FastPathDeclined, fastChunks } from './fast-path.js';
+import { openDataFile } from './gzip-stream.js';
 import type { ScanTarget } from './general-path.js';
 import { DEFAULT_FORMAT, decimalSeparatorError, peekSeparator, type CsvFormat, type SplitFilter } from './csv-format.js';
 
@@ -91,7 +92,7 @@ export interface Table {
 export async function* readTableChunks(repo: RepoReader, path: string, options: ReadTableOptions): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
   await checkSize(repo, path, settings.maxBytes);
-  yield* scan(() => repo.stream(path), path, settings, () => undefined, false, false);
+  yield* scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, () => undefined, false, false);
 }
 
 /**
@@ -113,7 +114,7 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
   let header: string[] = [];
   let bytesRead = 0;
   const counted = async function* (): AsyncIterable<Uint8Array> {
-    for await (const piece of repo.stream(path)) {
+    for await (const piece of openDataFile(repo, path, settings.maxBytes)) {
       bytesRead += piece.length;
       yield piece;
     }
@@ -172,7 +173,7 @@ export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFA
   await checkSize(repo, path, settings.maxBytes);
   let header: string[] = [];
   // A header-only scan ends right after the header and yields no rows.
-  const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true, false);
+  const scanning = scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, (plan) => (header = plan.header), true, false);
   while (!(await scanning.next()).done);
   return header;
 }
