@@ -4,8 +4,11 @@
  * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
  * chosen by name and only those are converted. What is accepted, in words:
  *
- * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
- *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
+ * - Fields are separated by commas, semicolons or tabs (detected from the header line, or set:
+ *   csv-format.ts); lines end with `\n` or `\r\n`; a UTF-8 byte-order mark is dropped. Under
+ *   the options of csv-format.ts a decimal comma is read, rows with missing cells are dropped
+ *   (and counted), and a split column keeps one side's rows. A `.gz` path is decompressed as it
+ *   streams (gzip-stream.ts). Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
  *   is the number 1.5.
  * - White space around a field is ignored (the characters `String.prototype.trim` removes),
  *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
