@@ -10,7 +10,7 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform, MultiRbfCenters } from './types.js';
+import type { DataFormat, Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform, MultiRbfCenters } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -21,6 +21,7 @@ export const MAX_RBF_CENTERS = 10_000;
 /** Stable codes of the errors this module throws (besides YAML, schema and limit codes). */
 export const DESCRIPTOR_ERROR = Object.freeze({
   dataMissing: 'file-missing',
+  dataForm: 'data-form',
   notAFile: NOT_A_FILE,
   centers: 'rbf-centers',
   weighting: 'weight-and-sigma',
@@ -71,6 +72,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   if (errors) throw schemaError(errors, doc, file);
   const raw = doc.value as RawDescriptor;
   const line = (path: (string | number)[]): number => doc.positionOf(path)?.line ?? 1;
+  checkDataForm(doc, file, raw.data);
 
   const terms = raw.terms.map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
   const termsLine = line(['terms']);
@@ -86,9 +88,18 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
     task: raw.task ?? 'regression',
     data: {
       train: raw.data.train,
-      holdout: raw.data.holdout,
+      holdout: raw.data.holdout ?? raw.data.train,
       target: raw.data.target,
-      lines: { train: line(['data', 'train']), holdout: line(['data', 'holdout']), target: line(['data', 'target']) },
+      lines: {
+        train: line(['data', 'train']),
+        holdout: raw.data.holdout !== undefined ? line(['data', 'holdout']) : line(['data', 'split']),
+        target: line(['data', 'target']),
+      },
+      // Present only when written, so descriptors of plain comma files stay as they were.
+      ...(raw.data.separator !== undefined || raw.data.decimal !== undefined || raw.data.missing !== undefined
+        ? { format: { separator: raw.data.separator ?? 'auto', decimal: raw.data.decimal ?? '.', missing: raw.data.missing ?? 'error' } }
+        : {}),
+      ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
       positive: raw.data.positive ?? null,
       ...weightingOf(readWeighting(doc, file, raw.data, line)),
     },
@@ -240,7 +251,18 @@ interface RawDescriptor {
   version: 1;
   name: string;
   task?: 'regression' | 'classification';
-  data: { train: string; holdout: string; target: string; positive?: string; weight?: string; sigma?: string };
+  data: {
+    train: string;
+    holdout?: string;
+    target: string;
+    positive?: string;
+    weight?: string;
+    sigma?: string;
+    separator?: DataFormat['separator'];
+    decimal?: DataFormat['decimal'];
+    missing?: DataFormat['missing'];
+    split?: { column: string; train: string; holdout: string };
+  };
   terms: RawTerm[];
   fit?: { intercept?: boolean; refit?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount; threshold?: number };
   coefficients?: number[];
@@ -262,3 +284,23 @@ type RawRbf = { of: string | string[]; centers: RawCenters | number[][] | { from
 type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[]; transform?: InputTransform };
 
 type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean; transform?: InputTransform };
+
+/**
+ * The `data` rules the schema cannot say: exactly one of `holdout` and `split`; a split's two
+ * labels differ; a decimal comma needs a separator other than the comma.
+ * @throws InputError `data-form` naming the key
+ */
+function checkDataForm(doc: YamlDocument, file: string, data: RawDescriptor['data']): void {
+  if (data.holdout === undefined && data.split === undefined) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data'], 'expected `data.holdout` (a hold-out CSV) or `data.split` (a split column in the training file); got neither', 'key');
+  }
+  if (data.holdout !== undefined && data.split !== undefined) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split'], 'expected either `data.holdout` or `data.split`, not both: with a split column the hold-out rows come from the training file', 'key');
+  }
+  if (data.split !== undefined && data.split.train === data.split.holdout) {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split', 'holdout'], `expected a hold-out label different from the training label ${showValue(data.split.train)}`);
+  }
+  if (data.decimal === ',' && data.separator === ',') {
+    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'decimal'], 'a decimal comma needs a separator other than the comma; expected `data.separator` to be ";" or "\\t" (or `auto`)');
+  }
+}

@@ -214,6 +214,25 @@ export interface Weighting {
   line: number;
 }
 
+/** How a descriptor's data files are written (the `data` keys `separator`, `decimal`, `missing`). */
+export interface DataFormat {
+  /** `auto` (default: detected from the header line), `,`, `;` or a tab. */
+  separator: 'auto' | ',' | ';' | '\t';
+  /** Decimal mark: `.` (default) or `,`. */
+  decimal: '.' | ',';
+  /** `error` (default) or `drop` (rows with a missing used cell are dropped and counted). */
+  missing: 'error' | 'drop';
+}
+
+/** `data.split`: the split column and the labels of training and hold-out rows. */
+export interface DataSplit {
+  column: string;
+  train: string;
+  holdout: string;
+  /** Line of `data.split` in the descriptor. */
+  line: number;
+}
+
 /** A model descriptor after validation. */
 export interface Descriptor {
   /** Descriptor path relative to the repository root, with `/` separators. */
@@ -237,6 +256,13 @@ export interface Descriptor {
      * uncertainties, w = 1 / sigma^2). Absent or null: every row weighs 1.
      */
     weighting?: Weighting | null;
+    /**
+     * How the files are written (`data.separator`, `data.decimal`, `data.missing`); defaults
+     * `auto`, `.`, `error`. Optional so that descriptors built in code before it existed still type-check.
+     */
+    format?: DataFormat;
+    /** `data.split`: one file, rows divided by a label column (`holdout` then names the same file as `train`); null without. */
+    split?: DataSplit | null;
   };
   terms: TermSpec[];
   fit: FitSpec;

@@ -145,8 +145,9 @@ export function layoutHint(header: readonly string[]): string {
   if (header.length > 0 && header[0].startsWith(LFS_POINTER)) {
     return '. Hint: the file is a Git LFS pointer, not the data: fetch the LFS objects before the check (`git lfs pull`, or `lfs: true` on the checkout step)';
   }
-  if (only.includes(';')) return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; fitgate reads comma-separated files';
-  if (only.includes('\t')) return '. Hint: the header holds tabs and no commas: the file looks tab-separated; fitgate reads comma-separated files';
+  if (only.includes(';') && only.includes('\t')) return '. Hint: the header holds both semicolons and tabs and no commas, so the separator is ambiguous: set `data.separator` to ";" or "\\t" in the descriptor';
+  if (only.includes(';')) return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; set `data.separator: ";"` in the descriptor';
+  if (only.includes('\t')) return '. Hint: the header holds tabs and no commas: the file looks tab-separated; set `data.separator: "\\t"` in the descriptor';
   return '';
 }
 

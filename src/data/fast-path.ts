@@ -13,6 +13,7 @@
 import { blockError, lineBlocks } from './line-blocks.js';
 import { ChunkBuilder, emptyError, MIN_NORMAL, planColumns, type Chunk, type ColumnPlan } from './csv-rules.js';
 import type { ScanTarget } from './general-path.js';
+import { splitFieldOf } from './csv-format.js';
 
 /** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
 export class FastPathDeclined extends Error {
@@ -100,9 +101,27 @@ class FastReader {
   line = 1;
   /** True once a header-only read has its header. */
   stopped = false;
+  /** Field separator byte (comma, semicolon or tab). */
+  readonly separator: number;
+  /** Decimal mark byte (point or comma). */
+  readonly decimal: number;
+  /** White space skipped around cells besides the space: the tab, unless the tab separates fields. */
+  readonly blank: number;
+  /** Field index of the split column, or -1. */
+  splitField = -1;
+  /** UTF-8 bytes of the split labels to keep and to skip. */
+  readonly keepLabel: Uint8Array;
+  readonly otherLabel: Uint8Array;
 
   constructor(private readonly target: ScanTarget) {
     this.builder = new ChunkBuilder(target.request, target.chunkRows);
+    const format = target.format;
+    this.separator = format === undefined || format.separator === 'auto' ? COMMA : format.separator.charCodeAt(0);
+    this.decimal = format === undefined ? POINT : format.decimal.charCodeAt(0);
+    this.blank = this.separator === TAB ? SPACE : TAB;
+    const encoder = new TextEncoder();
+    this.keepLabel = encoder.encode(target.split?.keep ?? '');
+    this.otherLabel = encoder.encode(target.split?.other ?? '');
   }
 
   /** Reads whole lines; `buf` ends with a line feed. */
@@ -125,6 +144,10 @@ class FastReader {
     const slotOfField = plan.slotOfField;
     const lastField = slotOfField.length - 1;
     const builder = this.builder;
+    const SEP = this.separator;
+    const DEC = this.decimal;
+    const BLANK = this.blank;
+    const splitField = this.splitField;
     const slots = builder.slots;
     const lines = builder.lines;
     const capacity = builder.capacity;
@@ -137,7 +160,7 @@ class FastReader {
     while (p < end && row < capacity) {
       // Line start: skip spaces and tabs; a line of nothing else is blank.
       let b = buf[p];
-      while (b === SPACE || b === TAB) b = buf[++p];
+      while (b === SPACE || b === BLANK) b = buf[++p];
       if (b === LF) {
         p++;
         line++;
@@ -151,14 +174,15 @@ class FastReader {
         continue;
       }
       // Other white space could make the line blank for the general path: let it decide.
-      if (b > 127 || b === VT || b === FF || b === CR) throw new FastPathDeclined(line);
+      if (b > 127 || b === VT || b === FF || b === CR || b === TAB) throw new FastPathDeclined(line);
+      let keep = true;
 
       let field = 0;
       for (;;) {
         const slot = slotOfField[field];
         if (slot >= 0) {
           // A requested cell: [spaces] [sign] digits [. digits] [e [sign] digits] [spaces]
-          while (b === SPACE || b === TAB) b = buf[++p];
+          while (b === SPACE || b === BLANK) b = buf[++p];
           const start = p;
           let negative = false;
           if (b === MINUS) {
@@ -177,7 +201,7 @@ class FastReader {
             digits++;
             b = buf[++p];
           }
-          if (b === POINT) {
+          if (b === DEC) {
             b = buf[++p];
             while (b >= DIGIT_0 && b <= DIGIT_9) {
               if (mantissa < MANTISSA_ROOM) {
@@ -213,23 +237,26 @@ class FastReader {
             value = exponent < 0 ? mantissa / EXACT_POWERS_OF_TEN[-exponent] : mantissa * EXACT_POWERS_OF_TEN[exponent];
             if (negative) value = -value;
           } else {
+            if (DEC !== POINT) throw new FastPathDeclined(line);
             text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
             value = Number(text.toString('latin1', start, p));
             // Overflow, and underflow of a nonzero text (mantissa > 0) to 0 or a subnormal: the
             // general path says which (the exact branch above can do neither).
             if (!Number.isFinite(value) || (mantissa !== 0 && Math.abs(value) < MIN_NORMAL)) throw new FastPathDeclined(line);
           }
-          while (b === SPACE || b === TAB) b = buf[++p];
+          while (b === SPACE || b === BLANK) b = buf[++p];
           slots[slot][row] = value;
         } else {
-          // An unused cell: skip to the comma or the line end.
-          while (b !== COMMA && b !== LF) {
+          // An unused cell: skip to the separator or the line end.
+          const start = p;
+          while (b !== SEP && b !== LF) {
             if (b === QUOTE || (b === CR && buf[p + 1] !== LF)) throw new FastPathDeclined(line);
             if (b === CR) break;
             b = buf[++p];
           }
+          if (field === splitField) keep = this.splitKeeps(buf, start, p, line);
         }
-        if (b === COMMA) {
+        if (b === SEP) {
           if (field === lastField) throw new FastPathDeclined(line);
           field++;
           b = buf[++p];
@@ -240,13 +267,32 @@ class FastReader {
         p++;
         break;
       }
-      lines[row] = line;
+      if (keep) {
+        lines[row] = line;
+        row++;
+        builder.row = row;
+      }
       line++;
-      row++;
-      builder.row = row;
       this.line = line;
     }
     return p;
+  }
+
+  /**
+   * True when the split cell in `buf[start, end)` (spaces and tabs around it ignored) is the label to
+   * keep, false when it is the other label; declines otherwise (the general path names the error).
+   */
+  private splitKeeps(buf: Uint8Array, start: number, end: number, line: number): boolean {
+    while (start < end && (buf[start] === SPACE || buf[start] === TAB)) start++;
+    while (end > start && (buf[end - 1] === SPACE || buf[end - 1] === TAB)) end--;
+    const same = (label: Uint8Array): boolean => {
+      if (label.length !== end - start) return false;
+      for (let i = 0; i < label.length; i++) if (buf[start + i] !== label[i]) return false;
+      return true;
+    };
+    if (same(this.keepLabel)) return true;
+    if (same(this.otherLabel)) return false;
+    throw new FastPathDeclined(line);
   }
 
   /**
@@ -265,9 +311,14 @@ class FastReader {
       const text = utf8.decode(buf.subarray(p, end));
       const line = this.line++;
       p = lf + 1;
+      // A line of tabs is blank here but a record of empty fields to csv-parse in a tab-separated file.
+      if (this.separator === TAB && text.includes('\t') && text.trim() === '') throw new FastPathDeclined(line);
       if (text.trim() === '') continue;
-      const header = text.split(',').map((name) => name.trim());
+      const header = text.split(String.fromCharCode(this.separator)).map((name) => name.trim());
       this.plan = planColumns(this.target.file, header, line, this.target.request);
+      if (this.target.split !== undefined) this.splitField = splitFieldOf(this.target.file, header, line, this.target.split);
+      // A split column that is also read as numbers: the general path handles it.
+      if (this.splitField !== -1 && this.plan.slotOfField[this.splitField] >= 0) throw new FastPathDeclined(line);
       this.target.onHeader(this.plan);
       if (this.target.headerOnly) this.stopped = true;
       return p;

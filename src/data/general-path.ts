@@ -18,6 +18,7 @@ import {
   type ColumnPlan,
   type Request,
 } from './csv-rules.js';
+import { formatCellNumber, splitFieldOf, splitLabelError, type CsvFormat, type SplitFilter } from './csv-format.js';
 
 /** What a parser is asked to read, shared by both paths. */
 export interface ScanTarget {
@@ -36,6 +37,12 @@ export interface ScanTarget {
    * so the chunk's buffers may be reused. Default false: chunks stay valid.
    */
   recycle?: boolean;
+  /** How the file is written, the separator already resolved (not `auto`). Default: comma, point, missing cells are errors. */
+  format?: CsvFormat;
+  /** Keep only the rows whose split cell is `keep`; skip those with `other`; any other label is an error. */
+  split?: SplitFilter;
+  /** Receives the count of rows dropped for a missing cell (`missing: drop`). */
+  counts?: { dropped: number };
 }
 
 /** Stops csv-parse from inside `on_record` once the header is known (header-only reads). */
@@ -60,6 +67,10 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
   let plan: ColumnPlan | null = null;
   let breaksInFields = 0;
   let dataRows = 0;
+  const format = target.format;
+  const plain = format === undefined || (format.decimal === '.' && format.missing === 'error');
+  const split = target.split;
+  let splitField = -1;
 
   const onRecord = (record: string[], info: { empty_lines: number; records: number }): null => {
     const line = 1 + info.empty_lines + (info.records - 1) + breaksInFields;
@@ -68,16 +79,37 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
     }
     if (plan === null) {
       plan = planColumns(file, record, line, request);
+      if (split !== undefined) splitField = splitFieldOf(file, record, line, split);
       target.onHeader(plan);
       if (target.headerOnly) throw new StopReading();
       return null;
     }
     if (record.length !== plan.header.length) throw raggedError(file, line, plan.header.length, record.length);
+    if (splitField !== -1 && split !== undefined) {
+      const label = record[splitField];
+      if (label !== split.keep) {
+        if (label === split.other) return null;
+        throw splitLabelError(label, file, line, split);
+      }
+    }
     if (dataRows++ < skipRows) return null;
     const { fieldOfSlot } = plan;
     const row = builder.row;
-    for (let slot = 0; slot < fieldOfSlot.length; slot++) {
-      builder.slots[slot][row] = cellNumber(record[fieldOfSlot[slot]], file, line, request.distinct[slot]);
+    if (plain) {
+      for (let slot = 0; slot < fieldOfSlot.length; slot++) {
+        builder.slots[slot][row] = cellNumber(record[fieldOfSlot[slot]], file, line, request.distinct[slot]);
+      }
+    } else {
+      let missing = false;
+      for (let slot = 0; slot < fieldOfSlot.length; slot++) {
+        const value = formatCellNumber(record[fieldOfSlot[slot]], file, line, request.distinct[slot], format);
+        if (Number.isNaN(value)) missing = true;
+        builder.slots[slot][row] = value;
+      }
+      if (missing) {
+        if (target.counts !== undefined) target.counts.dropped++;
+        return null;
+      }
     }
     builder.lines[row] = line;
     builder.endRow();
@@ -86,7 +118,7 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
 
   const parser = parse({
     bom: false, // line-blocks drops it
-    delimiter: ',',
+    delimiter: format?.separator === undefined || format.separator === 'auto' ? ',' : format.separator,
     quote: '"',
     escape: '"',
     record_delimiter: ['\r\n', '\n'],

@@ -2,7 +2,7 @@
  * Loads the columns one model needs from its training and hold-out files.
  */
 import type { Descriptor, SettingsFile, Weighting } from '../config/types.js';
-import { InputError, clip } from '../core/errors.js';
+import { InputError, clip, quoteValue } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
 import { readTable } from './table.js';
 import { levelCodes, trainingLevels } from './levels.js';
@@ -59,15 +59,25 @@ export async function loadModelData(
   const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
   const levels = new Map<string, string[]>();
   const maxBytes = settings.caps.maxFileBytes;
+  const format = data.format;
+  const split = data.split ?? null;
   const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table: Awaited<ReturnType<typeof readTable>>;
+    // With a split column both sides read the one file, each keeping its own label's rows.
+    const side =
+      split === null
+        ? undefined
+        : key === 'data.train'
+          ? { column: split.column, keep: split.train, other: split.holdout }
+          : { column: split.column, keep: split.holdout, other: split.train };
     try {
-      table = await readTable(repo, path, { columns, maxBytes });
+      table = await readTable(repo, path, { columns, maxBytes, ...(format ? { format } : {}), ...(side ? { split: side } : {}) });
     } catch (error) {
       throw withAsker(error, descriptor);
     }
     if (table.rows === 0) {
-      throw new InputError('no-rows', `\`${clip(path)}\` has a header but no data rows; expected at least one row`, {
+      const why = side ? ` labelled ${quoteValue(side.keep)} in column ${quoteValue(side.column)}` : table.dropped > 0 ? ` left after dropping ${table.dropped} with missing cells` : '';
+      throw new InputError('no-rows', `\`${clip(path)}\` has no data rows${why}; expected at least one row`, {
         file: descriptor.file,
         line,
         key,
@@ -91,6 +101,7 @@ export async function loadModelData(
       lines: table.lines,
       rows: table.rows,
       file: path,
+      ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
       byName: table.columns,
     };
     return weighting === null ? rows : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, path) };

@@ -21,4 +21,6 @@ export interface ModelData {
   weights?: Float64Array;
   /** Standard uncertainties of the target when the descriptor gives `data.sigma`. */
   sigma?: Float64Array;
+  /** Rows dropped for a missing cell under `data.missing: drop` (absent otherwise). */
+  dropped?: number;
 }

@@ -4,8 +4,11 @@
  * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
  * chosen by name and only those are converted. What is accepted, in words:
  *
- * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
- *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
+ * - Fields are separated by commas, semicolons or tabs (detected from the header line, or set:
+ *   csv-format.ts); lines end with `\n` or `\r\n`; a UTF-8 byte-order mark is dropped. Under
+ *   the options of csv-format.ts a decimal comma is read, rows with missing cells are dropped
+ *   (and counted), and a split column keeps one side's rows. A `.gz` path is decompressed as it
+ *   streams (gzip-stream.ts). Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
  *   is the number 1.5.
  * - White space around a field is ignored (the characters `String.prototype.trim` removes),
  *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
@@ -30,7 +33,9 @@ import type { RepoReader } from '../repo/types.js';
 import { InputError } from '../core/errors.js';
 import { DEFAULT_CHUNK_ROWS, DEFAULT_MAX_BYTES, planRequest, type ColumnPlan } from './csv-rules.js';
 import { FastPathDeclined, fastChunks } from './fast-path.js';
+import { openDataFile } from './gzip-stream.js';
 import type { ScanTarget } from './general-path.js';
+import { DEFAULT_FORMAT, decimalSeparatorError, peekSeparator, type CsvFormat, type SplitFilter } from './csv-format.js';
 
 /** A run of consecutive data rows, column-major. */
 export interface TableChunk {
@@ -52,6 +57,10 @@ export interface ReadTableOptions {
   maxBytes?: number;
   /** Force the general path (tests). Default false. */
   general?: boolean;
+  /** How the file is written (csv-format.ts): separator (default `auto`), decimal mark, missing cells. */
+  format?: Partial<CsvFormat>;
+  /** Read only the rows of one side of a split column. */
+  split?: SplitFilter;
 }
 
 /** A whole table's requested columns. */
@@ -66,6 +75,8 @@ export interface Table {
   columns: Map<string, Float64Array>;
   /** 1-based physical line of each row in the file, length `rows`. */
   lines: Int32Array;
+  /** Rows dropped for a missing cell (`missing: drop`); 0 otherwise. */
+  dropped: number;
 }
 
 /**
@@ -84,7 +95,7 @@ export interface Table {
 export async function* readTableChunks(repo: RepoReader, path: string, options: ReadTableOptions): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
   await checkSize(repo, path, settings.maxBytes);
-  yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
+  yield* scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, () => undefined, false, false);
 }
 
 /**
@@ -106,7 +117,7 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
   let header: string[] = [];
   let bytesRead = 0;
   const counted = async function* (): AsyncIterable<Uint8Array> {
-    for await (const piece of repo.stream(path)) {
+    for await (const piece of openDataFile(repo, path, settings.maxBytes)) {
       bytesRead += piece.length;
       yield piece;
     }
@@ -127,7 +138,8 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
     if (rows > 0) nextLines.set(lines.subarray(0, rows));
     lines = nextLines;
   };
-  for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+  const counts = { dropped: 0 };
+  for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)) {
     const needed = rows + chunk.rows;
     if (needed > lines.length) {
       let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -148,7 +160,7 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
   settings.columns.forEach((name, k) => {
     if (!out.has(name)) out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
   });
-  return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
+  return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows), dropped: counts.dropped };
 }
 
 /**
@@ -159,12 +171,12 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
  * @param path repository-relative path of the CSV file
  * @param maxBytes size cap in bytes; default 512 MiB
  */
-export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFAULT_MAX_BYTES): Promise<string[]> {
-  const settings = checkOptions({ columns: [], maxBytes });
+export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFAULT_MAX_BYTES, format?: Partial<CsvFormat>): Promise<string[]> {
+  const settings = checkOptions({ columns: [], maxBytes, format });
   await checkSize(repo, path, settings.maxBytes);
   let header: string[] = [];
   // A header-only scan ends right after the header and yields no rows.
-  const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
+  const scanning = scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, (plan) => (header = plan.header), true, false);
   while (!(await scanning.next()).done);
   return header;
 }
@@ -174,11 +186,14 @@ interface Settings {
   chunkRows: number;
   maxBytes: number;
   general: boolean;
+  format: CsvFormat;
+  split: SplitFilter | undefined;
 }
 
 /** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
 function checkOptions(options: ReadTableOptions): Settings {
-  const { columns, chunkRows = DEFAULT_CHUNK_ROWS, maxBytes = DEFAULT_MAX_BYTES, general = false } = options;
+  const { columns, chunkRows = DEFAULT_CHUNK_ROWS, maxBytes = DEFAULT_MAX_BYTES, general = false, split } = options;
+  const format: CsvFormat = { ...DEFAULT_FORMAT, ...options.format };
   if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
     throw new TypeError('readTable: `columns` must be an array of column names');
   }
@@ -186,7 +201,7 @@ function checkOptions(options: ReadTableOptions): Settings {
     throw new RangeError(`readTable: \`chunkRows\` must be an integer from 1 to 2^30, got ${chunkRows}`);
   }
   if (!(maxBytes >= 0)) throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
-  return { columns, chunkRows, maxBytes, general };
+  return { columns, chunkRows, maxBytes, general, format, split };
 }
 
 /** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
@@ -216,15 +231,27 @@ async function* scan(
   settings: Settings,
   onHeader: (plan: ColumnPlan) => void,
   headerOnly: boolean,
-  recycle = false,
+  recycle: boolean,
+  counts?: { dropped: number },
 ): AsyncGenerator<TableChunk> {
   let headerSeen = false;
+  let format = settings.format;
+  let first: AsyncIterable<Uint8Array> | null = null;
+  if (format.separator === 'auto') {
+    const found = await peekSeparator(open());
+    first = found.pieces;
+    if (found.separator === ',' && format.decimal === ',') throw decimalSeparatorError(path, found.line);
+    format = { ...format, separator: found.separator };
+  } else if (format.separator === ',' && format.decimal === ',') throw decimalSeparatorError(path, 1);
   const target: ScanTarget = {
     file: path,
     request: planRequest(settings.columns),
     chunkRows: settings.chunkRows,
     headerOnly,
     recycle,
+    format,
+    split: settings.split,
+    counts,
     onHeader: (plan) => {
       if (headerSeen) return;
       headerSeen = true;
@@ -234,7 +261,9 @@ async function* scan(
   let handedOut = 0;
   if (!settings.general) {
     try {
-      for await (const chunk of fastChunks(open(), target)) {
+      const pieces = first ?? open();
+      first = null;
+      for await (const chunk of fastChunks(pieces, target)) {
         handedOut += chunk.rows;
         yield chunk;
       }
@@ -245,5 +274,5 @@ async function* scan(
   }
   // csv-parse is loaded only when a file needs it (most data files take the fast path).
   const { generalChunks } = await import('./general-path.js');
-  yield* generalChunks(open(), target, handedOut);
+  yield* generalChunks(first ?? open(), target, handedOut);
 }

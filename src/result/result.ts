@@ -117,6 +117,8 @@ export interface ModelResult {
   descriptor: string;
   verdict: Verdict;
   rows: { train: number; holdout: number };
+  /** Rows dropped for a missing cell, per file; present only with `data.missing: drop`. */
+  dropped?: { train: number; holdout: number };
   parameters: number;
   /** Column names of the design, in order (`(intercept)`, `x`, `x^2`, `rbf(x; c=1.5)`...). */
   columns: string[];

@@ -117,6 +117,9 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     descriptor: descriptor.file,
     verdict,
     rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    ...(model.tables.train.dropped !== undefined
+      ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
+      : {}),
     parameters: model.design.p,
     columns: [...model.design.columnNames],
     metrics,

@@ -268,13 +268,18 @@ describe('readTable: files that are not comma-separated CSV get a hint naming th
   });
 
   it.each([
-    ['semicolon', 'x;y\n1,5;2\n3;4\n', 'semicolon-separated'],
-    ['tab', 'x\ty\n1\t2\n3\t4\n', 'tab-separated'],
-  ])('a %s-separated file', async (_, text, words) => {
-    const error = failure(await both(text, ['x', 'y']));
+    ['semicolon', 'x;y\n1.5;2\n3;4\n'],
+    ['tab', 'x\ty\n1.5\t2\n3\t4\n'],
+  ])('a %s-separated file is read (the separator is detected from the header)', async (_, text) => {
+    const table = await both(text, ['x', 'y']);
+    expect(table).toMatchObject({ ok: true, rows: 2, header: ['x', 'y'] });
+  });
+
+  it('a header with both semicolons and tabs (ambiguous) gets the hint to set data.separator', async () => {
+    const error = failure(await both('x;y\tz\n1;2\t3\n', ['x', 'y']));
     expect(error).toMatchObject({ code: 'csv-missing-column', file: FILE, line: 1 });
-    expect(error.message).toContain(`Hint: the header holds`);
-    expect(error.message).toContain(words);
+    expect(error.message).toContain('Hint: the header holds both semicolons and tabs');
+    expect(error.message).toContain('data.separator');
   });
 
   it('CR-only line ends', async () => {

@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,14 +54,14 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
-function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate66.evaluated;
+const evaluated0 = validate68.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -105,7 +105,7 @@ else {
 vErrors.push(err2);
 }
 errors++;
-validate66.errors = vErrors;
+validate68.errors = vErrors;
 return false;
 }
 else {
@@ -119,13 +119,41 @@ vErrors = null;
 }
 }
 }
-validate66.errors = vErrors;
+validate68.errors = vErrors;
 return errors === 0;
 }
-validate66.evaluated = {"dynamicProps":false,"dynamicItems":false};
+validate68.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
 const schema24 = {"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}};
 const schema25 = {"description":"A 1-based line number.","type":"integer","minimum":1};
+
+function validate88(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate88.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(!(((typeof data == "number") && (!(data % 1) && !isNaN(data))) && (isFinite(data)))){
+validate88.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
+return false;
+}
+if(errors === 0){
+if((typeof data == "number") && (isFinite(data))){
+if(data < 1 || isNaN(data)){
+validate88.errors = [{instancePath,schemaPath:"#/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
+return false;
+}
+}
+}
+validate88.errors = vErrors;
+return errors === 0;
+}
+validate88.evaluated = {"dynamicProps":false,"dynamicItems":false};
+
 
 function validate86(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
@@ -137,46 +165,18 @@ evaluated0.props = undefined;
 if(evaluated0.dynamicItems){
 evaluated0.items = undefined;
 }
-if(!(((typeof data == "number") && (!(data % 1) && !isNaN(data))) && (isFinite(data)))){
-validate86.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
-return false;
-}
-if(errors === 0){
-if((typeof data == "number") && (isFinite(data))){
-if(data < 1 || isNaN(data)){
-validate86.errors = [{instancePath,schemaPath:"#/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
-return false;
-}
-}
-}
-validate86.errors = vErrors;
-return errors === 0;
-}
-validate86.evaluated = {"dynamicProps":false,"dynamicItems":false};
-
-
-function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
-let vErrors = null;
-let errors = 0;
-const evaluated0 = validate84.evaluated;
-if(evaluated0.dynamicProps){
-evaluated0.props = undefined;
-}
-if(evaluated0.dynamicItems){
-evaluated0.items = undefined;
-}
 if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if(((((((((((data.id === undefined) && (missing0 = "id")) || ((data.code === undefined) && (missing0 = "code"))) || ((data.status === undefined) && (missing0 = "status"))) || ((data.value === undefined) && (missing0 = "value"))) || ((data.limitKey === undefined) && (missing0 = "limitKey"))) || ((data.limit === undefined) && (missing0 = "limit"))) || ((data.warn === undefined) && (missing0 = "warn"))) || ((data.line === undefined) && (missing0 = "line"))) || ((data.message === undefined) && (missing0 = "message"))) || ((data.advice === undefined) && (missing0 = "advice"))){
-validate84.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate86.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!(func1.call(schema24.properties, key0))){
-validate84.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate86.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -185,7 +185,7 @@ if(_errs1 === errors){
 if(data.id !== undefined){
 const _errs2 = errors;
 if(typeof data.id !== "string"){
-validate84.errors = [{instancePath:instancePath+"/id",schemaPath:"#/properties/id/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/id",schemaPath:"#/properties/id/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -197,7 +197,7 @@ if(valid0){
 if(data.code !== undefined){
 const _errs4 = errors;
 if(typeof data.code !== "string"){
-validate84.errors = [{instancePath:instancePath+"/code",schemaPath:"#/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/code",schemaPath:"#/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs4 === errors;
@@ -210,7 +210,7 @@ if(data.status !== undefined){
 let data2 = data.status;
 const _errs6 = errors;
 if(!((((data2 === "pass") || (data2 === "warn")) || (data2 === "fail")) || (data2 === "skipped"))){
-validate84.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema24.properties.status.enum},message:"must be equal to one of the allowed values"}];
+validate86.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema24.properties.status.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs6 === errors;
@@ -225,8 +225,8 @@ const _errs7 = errors;
 const _errs8 = errors;
 let valid1 = false;
 const _errs9 = errors;
-if(!(validate66(data3, {instancePath:instancePath+"/value",parentData:data,parentDataProperty:"value",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data3, {instancePath:instancePath+"/value",parentData:data,parentDataProperty:"value",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var _valid0 = _errs9 === errors;
@@ -253,7 +253,7 @@ else {
 vErrors.push(err1);
 }
 errors++;
-validate84.errors = vErrors;
+validate86.errors = vErrors;
 return false;
 }
 else {
@@ -276,7 +276,7 @@ if(valid0){
 if(data.limitKey !== undefined){
 const _errs12 = errors;
 if(typeof data.limitKey !== "string"){
-validate84.errors = [{instancePath:instancePath+"/limitKey",schemaPath:"#/properties/limitKey/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/limitKey",schemaPath:"#/properties/limitKey/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs12 === errors;
@@ -289,7 +289,7 @@ if(data.limit !== undefined){
 let data5 = data.limit;
 const _errs14 = errors;
 if((!((typeof data5 == "number") && (isFinite(data5)))) && (data5 !== null)){
-validate84.errors = [{instancePath:instancePath+"/limit",schemaPath:"#/properties/limit/type",keyword:"type",params:{type: schema24.properties.limit.type},message:"must be number,null"}];
+validate86.errors = [{instancePath:instancePath+"/limit",schemaPath:"#/properties/limit/type",keyword:"type",params:{type: schema24.properties.limit.type},message:"must be number,null"}];
 return false;
 }
 var valid0 = _errs14 === errors;
@@ -302,7 +302,7 @@ if(data.warn !== undefined){
 let data6 = data.warn;
 const _errs16 = errors;
 if((!((typeof data6 == "number") && (isFinite(data6)))) && (data6 !== null)){
-validate84.errors = [{instancePath:instancePath+"/warn",schemaPath:"#/properties/warn/type",keyword:"type",params:{type: schema24.properties.warn.type},message:"must be number,null"}];
+validate86.errors = [{instancePath:instancePath+"/warn",schemaPath:"#/properties/warn/type",keyword:"type",params:{type: schema24.properties.warn.type},message:"must be number,null"}];
 return false;
 }
 var valid0 = _errs16 === errors;
@@ -318,14 +318,14 @@ if(errors === _errs18){
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 let missing1;
 if(((data7.warn === undefined) && (missing1 = "warn")) || ((data7.fail === undefined) && (missing1 = "fail"))){
-validate84.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+validate86.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
 const _errs20 = errors;
 for(const key1 in data7){
 if(!((key1 === "warn") || (key1 === "fail"))){
-validate84.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
+validate86.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -335,7 +335,7 @@ if(data7.warn !== undefined){
 let data8 = data7.warn;
 const _errs21 = errors;
 if((!((typeof data8 == "number") && (isFinite(data8)))) && (data8 !== null)){
-validate84.errors = [{instancePath:instancePath+"/floor/warn",schemaPath:"#/properties/floor/properties/warn/type",keyword:"type",params:{type: schema24.properties.floor.properties.warn.type},message:"must be number,null"}];
+validate86.errors = [{instancePath:instancePath+"/floor/warn",schemaPath:"#/properties/floor/properties/warn/type",keyword:"type",params:{type: schema24.properties.floor.properties.warn.type},message:"must be number,null"}];
 return false;
 }
 var valid2 = _errs21 === errors;
@@ -348,7 +348,7 @@ if(data7.fail !== undefined){
 let data9 = data7.fail;
 const _errs23 = errors;
 if((!((typeof data9 == "number") && (isFinite(data9)))) && (data9 !== null)){
-validate84.errors = [{instancePath:instancePath+"/floor/fail",schemaPath:"#/properties/floor/properties/fail/type",keyword:"type",params:{type: schema24.properties.floor.properties.fail.type},message:"must be number,null"}];
+validate86.errors = [{instancePath:instancePath+"/floor/fail",schemaPath:"#/properties/floor/properties/fail/type",keyword:"type",params:{type: schema24.properties.floor.properties.fail.type},message:"must be number,null"}];
 return false;
 }
 var valid2 = _errs23 === errors;
@@ -361,7 +361,7 @@ var valid2 = true;
 }
 }
 else {
-validate84.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate86.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -373,8 +373,8 @@ var valid0 = true;
 if(valid0){
 if(data.line !== undefined){
 const _errs25 = errors;
-if(!(validate86(data.line, {instancePath:instancePath+"/line",parentData:data,parentDataProperty:"line",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
+if(!(validate88(data.line, {instancePath:instancePath+"/line",parentData:data,parentDataProperty:"line",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs25 === errors;
@@ -386,7 +386,7 @@ if(valid0){
 if(data.message !== undefined){
 const _errs26 = errors;
 if(typeof data.message !== "string"){
-validate84.errors = [{instancePath:instancePath+"/message",schemaPath:"#/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/message",schemaPath:"#/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs26 === errors;
@@ -398,7 +398,7 @@ if(valid0){
 if(data.advice !== undefined){
 const _errs28 = errors;
 if(typeof data.advice !== "string"){
-validate84.errors = [{instancePath:instancePath+"/advice",schemaPath:"#/properties/advice/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/advice",schemaPath:"#/properties/advice/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs28 === errors;
@@ -414,14 +414,14 @@ if(errors === _errs30){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
 if(((data13.text === undefined) && (missing2 = "text")) || ((data13.line === undefined) && (missing2 = "line"))){
-validate84.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs32 = errors;
 for(const key2 in data13){
 if(!(((key2 === "text") || (key2 === "line")) || (key2 === "change"))){
-validate84.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -430,7 +430,7 @@ if(_errs32 === errors){
 if(data13.text !== undefined){
 const _errs33 = errors;
 if(typeof data13.text !== "string"){
-validate84.errors = [{instancePath:instancePath+"/suggestion/text",schemaPath:"#/properties/suggestion/properties/text/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion/text",schemaPath:"#/properties/suggestion/properties/text/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid3 = _errs33 === errors;
@@ -441,8 +441,8 @@ var valid3 = true;
 if(valid3){
 if(data13.line !== undefined){
 const _errs35 = errors;
-if(!(validate86(data13.line, {instancePath:instancePath+"/suggestion/line",parentData:data13,parentDataProperty:"line",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
+if(!(validate88(data13.line, {instancePath:instancePath+"/suggestion/line",parentData:data13,parentDataProperty:"line",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs35 === errors;
@@ -458,14 +458,14 @@ if(errors === _errs36){
 if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
 let missing3;
 if(((data16.key === undefined) && (missing3 = "key")) || ((data16.value === undefined) && (missing3 = "value"))){
-validate84.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
 const _errs38 = errors;
 for(const key3 in data16){
 if(!((key3 === "key") || (key3 === "value"))){
-validate84.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -474,7 +474,7 @@ if(_errs38 === errors){
 if(data16.key !== undefined){
 const _errs39 = errors;
 if(typeof data16.key !== "string"){
-validate84.errors = [{instancePath:instancePath+"/suggestion/change/key",schemaPath:"#/properties/suggestion/properties/change/properties/key/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion/change/key",schemaPath:"#/properties/suggestion/properties/change/properties/key/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid4 = _errs39 === errors;
@@ -487,7 +487,7 @@ if(data16.value !== undefined){
 let data18 = data16.value;
 const _errs41 = errors;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-validate84.errors = [{instancePath:instancePath+"/suggestion/change/value",schemaPath:"#/properties/suggestion/properties/change/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion/change/value",schemaPath:"#/properties/suggestion/properties/change/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid4 = _errs41 === errors;
@@ -500,7 +500,7 @@ var valid4 = true;
 }
 }
 else {
-validate84.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -515,7 +515,7 @@ var valid3 = true;
 }
 }
 else {
-validate84.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate86.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -539,21 +539,21 @@ var valid0 = true;
 }
 }
 else {
-validate84.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate86.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate84.errors = vErrors;
+validate86.errors = vErrors;
 return errors === 0;
 }
-validate84.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate86.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema26 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
 
-function validate90(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate92(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate90.evaluated;
+const evaluated0 = validate92.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -564,14 +564,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if(((((((data.status === undefined) && (missing0 = "status")) || ((data.commit === undefined) && (missing0 = "commit"))) || ((data.holdout_rmse === undefined) && (missing0 = "holdout_rmse"))) || ((data.gap_ratio === undefined) && (missing0 = "gap_ratio"))) || ((data.holdout_rmse_change === undefined) && (missing0 = "holdout_rmse_change"))) || ((data.gap_ratio_change === undefined) && (missing0 = "gap_ratio_change"))){
-validate90.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate92.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!((((((key0 === "status") || (key0 === "commit")) || (key0 === "holdout_rmse")) || (key0 === "gap_ratio")) || (key0 === "holdout_rmse_change")) || (key0 === "gap_ratio_change"))){
-validate90.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate92.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -581,7 +581,7 @@ if(data.status !== undefined){
 let data0 = data.status;
 const _errs2 = errors;
 if(!((data0 === "new") || (data0 === "compared"))){
-validate90.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema26.properties.status.enum},message:"must be equal to one of the allowed values"}];
+validate92.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema26.properties.status.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -593,7 +593,7 @@ if(valid0){
 if(data.commit !== undefined){
 const _errs3 = errors;
 if(typeof data.commit !== "string"){
-validate90.errors = [{instancePath:instancePath+"/commit",schemaPath:"#/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate92.errors = [{instancePath:instancePath+"/commit",schemaPath:"#/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs3 === errors;
@@ -608,8 +608,8 @@ const _errs5 = errors;
 const _errs6 = errors;
 let valid1 = false;
 const _errs7 = errors;
-if(!(validate66(data2, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data2, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var _valid0 = _errs7 === errors;
@@ -636,7 +636,7 @@ else {
 vErrors.push(err1);
 }
 errors++;
-validate90.errors = vErrors;
+validate92.errors = vErrors;
 return false;
 }
 else {
@@ -662,8 +662,8 @@ const _errs10 = errors;
 const _errs11 = errors;
 let valid2 = false;
 const _errs12 = errors;
-if(!(validate66(data3, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data3, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var _valid1 = _errs12 === errors;
@@ -690,7 +690,7 @@ else {
 vErrors.push(err3);
 }
 errors++;
-validate90.errors = vErrors;
+validate92.errors = vErrors;
 return false;
 }
 else {
@@ -716,8 +716,8 @@ const _errs15 = errors;
 const _errs16 = errors;
 let valid3 = false;
 const _errs17 = errors;
-if(!(validate66(data4, {instancePath:instancePath+"/holdout_rmse_change",parentData:data,parentDataProperty:"holdout_rmse_change",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data4, {instancePath:instancePath+"/holdout_rmse_change",parentData:data,parentDataProperty:"holdout_rmse_change",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var _valid2 = _errs17 === errors;
@@ -744,7 +744,7 @@ else {
 vErrors.push(err5);
 }
 errors++;
-validate90.errors = vErrors;
+validate92.errors = vErrors;
 return false;
 }
 else {
@@ -770,8 +770,8 @@ const _errs20 = errors;
 const _errs21 = errors;
 let valid4 = false;
 const _errs22 = errors;
-if(!(validate66(data5, {instancePath:instancePath+"/gap_ratio_change",parentData:data,parentDataProperty:"gap_ratio_change",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data5, {instancePath:instancePath+"/gap_ratio_change",parentData:data,parentDataProperty:"gap_ratio_change",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var _valid3 = _errs22 === errors;
@@ -798,7 +798,7 @@ else {
 vErrors.push(err7);
 }
 errors++;
-validate90.errors = vErrors;
+validate92.errors = vErrors;
 return false;
 }
 else {
@@ -826,24 +826,24 @@ var valid0 = true;
 }
 }
 else {
-validate90.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate92.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate90.errors = vErrors;
+validate92.errors = vErrors;
 return errors === 0;
 }
-validate90.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate92.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema27 = {"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}};
 const schema28 = {"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}};
 const schema29 = {"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}};
 const schema30 = {"description":"A finite number, or null.","type":["number","null"]};
 
-function validate104(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate106(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate104.evaluated;
+const evaluated0 = validate106.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -851,19 +851,19 @@ if(evaluated0.dynamicItems){
 evaluated0.items = undefined;
 }
 if((!((typeof data == "number") && (isFinite(data)))) && (data !== null)){
-validate104.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema30.type},message:"must be number,null"}];
+validate106.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema30.type},message:"must be number,null"}];
 return false;
 }
-validate104.errors = vErrors;
+validate106.errors = vErrors;
 return errors === 0;
 }
-validate104.evaluated = {"dynamicProps":false,"dynamicItems":false};
+validate106.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
 
-function validate103(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate105(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate103.evaluated;
+const evaluated0 = validate105.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -876,8 +876,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate104(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -887,20 +887,20 @@ break;
 }
 }
 else {
-validate103.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate105.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate103.errors = vErrors;
+validate105.errors = vErrors;
 return errors === 0;
 }
-validate103.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate105.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate99(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate101(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate99.evaluated;
+const evaluated0 = validate101.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -911,14 +911,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((((((data.rows === undefined) && (missing0 = "rows")) || ((data.shown === undefined) && (missing0 = "shown"))) || ((data.thinned === undefined) && (missing0 = "thinned"))) || ((data.thinning === undefined) && (missing0 = "thinning"))) || ((data.lines === undefined) && (missing0 = "lines"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.actual === undefined) && (missing0 = "actual"))) || ((data.fitted === undefined) && (missing0 = "fitted"))) || ((data.residual === undefined) && (missing0 = "residual"))){
-validate99.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate101.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!(func1.call(schema28.properties, key0))){
-validate99.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate101.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -951,7 +951,7 @@ if(valid0){
 if(data.thinned !== undefined){
 const _errs4 = errors;
 if(typeof data.thinned !== "boolean"){
-validate99.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
+validate101.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
 return false;
 }
 var valid0 = _errs4 === errors;
@@ -963,7 +963,7 @@ if(valid0){
 if(data.thinning !== undefined){
 const _errs6 = errors;
 if(typeof data.thinning !== "string"){
-validate99.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate101.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs6 === errors;
@@ -981,8 +981,8 @@ var valid1 = true;
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
 const _errs10 = errors;
-if(!(validate86(data4[i0], {instancePath:instancePath+"/lines/" + i0,parentData:data4,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
+if(!(validate88(data4[i0], {instancePath:instancePath+"/lines/" + i0,parentData:data4,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
 var valid1 = _errs10 === errors;
@@ -992,7 +992,7 @@ break;
 }
 }
 else {
-validate99.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate101.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1011,8 +1011,8 @@ var valid2 = true;
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs13 = errors;
-if(!(validate103(data6[i1], {instancePath:instancePath+"/x/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data6[i1], {instancePath:instancePath+"/x/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid2 = _errs13 === errors;
@@ -1022,7 +1022,7 @@ break;
 }
 }
 else {
-validate99.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate101.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1034,8 +1034,8 @@ var valid0 = true;
 if(valid0){
 if(data.actual !== undefined){
 const _errs14 = errors;
-if(!(validate103(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs14 === errors;
@@ -1046,8 +1046,8 @@ var valid0 = true;
 if(valid0){
 if(data.fitted !== undefined){
 const _errs15 = errors;
-if(!(validate103(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs15 === errors;
@@ -1058,8 +1058,8 @@ var valid0 = true;
 if(valid0){
 if(data.residual !== undefined){
 const _errs16 = errors;
-if(!(validate103(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs16 === errors;
@@ -1079,22 +1079,22 @@ var valid0 = true;
 }
 }
 else {
-validate99.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate101.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate99.errors = vErrors;
+validate101.errors = vErrors;
 return errors === 0;
 }
-validate99.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate101.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema31 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
 const schema32 = {"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}};
 
-function validate113(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate115(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate113.evaluated;
+const evaluated0 = validate115.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1104,12 +1104,12 @@ evaluated0.items = undefined;
 if(errors === 0){
 if(Array.isArray(data)){
 if(data.length > 2){
-validate113.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
+validate115.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
 return false;
 }
 else {
 if(data.length < 2){
-validate113.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
+validate115.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
 return false;
 }
 else {
@@ -1117,8 +1117,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate104(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -1130,21 +1130,21 @@ break;
 }
 }
 else {
-validate113.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate115.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate113.errors = vErrors;
+validate115.errors = vErrors;
 return errors === 0;
 }
-validate113.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate115.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema33 = {"description":"Finite numbers.","type":"array","items":{"type":"number"}};
 
-function validate116(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate118(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate116.evaluated;
+const evaluated0 = validate118.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1159,7 +1159,7 @@ for(let i0=0; i0<len0; i0++){
 let data0 = data[i0];
 const _errs1 = errors;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-validate116.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate118.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid0 = _errs1 === errors;
@@ -1169,20 +1169,20 @@ break;
 }
 }
 else {
-validate116.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate118.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate116.errors = vErrors;
+validate118.errors = vErrors;
 return errors === 0;
 }
-validate116.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate118.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate112(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate114(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate112.evaluated;
+const evaluated0 = validate114.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1193,14 +1193,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((data.input === undefined) && (missing0 = "input")) || ((data.others === undefined) && (missing0 = "others"))) || ((data.range === undefined) && (missing0 = "range"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.y === undefined) && (missing0 = "y"))){
-validate112.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate114.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!(func1.call(schema31.properties, key0))){
-validate112.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate114.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1209,7 +1209,7 @@ if(_errs1 === errors){
 if(data.input !== undefined){
 const _errs2 = errors;
 if(typeof data.input !== "string"){
-validate112.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate114.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1227,7 +1227,7 @@ for(const key1 in data1){
 let data2 = data1[key1];
 const _errs7 = errors;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-validate112.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate114.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid1 = _errs7 === errors;
@@ -1237,7 +1237,7 @@ break;
 }
 }
 else {
-validate112.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate114.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1249,8 +1249,8 @@ var valid0 = true;
 if(valid0){
 if(data.range !== undefined){
 const _errs9 = errors;
-if(!(validate113(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate113.errors : vErrors.concat(validate113.errors);
+if(!(validate115(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -1261,8 +1261,8 @@ var valid0 = true;
 if(valid0){
 if(data.x !== undefined){
 const _errs10 = errors;
-if(!(validate116(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
+if(!(validate118(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs10 === errors;
@@ -1273,8 +1273,8 @@ var valid0 = true;
 if(valid0){
 if(data.y !== undefined){
 const _errs11 = errors;
-if(!(validate103(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs11 === errors;
@@ -1285,8 +1285,8 @@ var valid0 = true;
 if(valid0){
 if(data.band !== undefined){
 const _errs12 = errors;
-if(!(validate113(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate113.errors : vErrors.concat(validate113.errors);
+if(!(validate115(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs12 === errors;
@@ -1309,14 +1309,14 @@ if(errors === _errs15){
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 let missing1;
 if((((data8.from === undefined) && (missing1 = "from")) || ((data8.to === undefined) && (missing1 = "to"))) || ((data8.side === undefined) && (missing1 = "side"))){
-validate112.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+validate114.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
 const _errs17 = errors;
 for(const key2 in data8){
 if(!(((key2 === "from") || (key2 === "to")) || (key2 === "side"))){
-validate112.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate114.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1324,8 +1324,8 @@ break;
 if(_errs17 === errors){
 if(data8.from !== undefined){
 const _errs18 = errors;
-if(!(validate104(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1336,8 +1336,8 @@ var valid3 = true;
 if(valid3){
 if(data8.to !== undefined){
 const _errs19 = errors;
-if(!(validate104(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs19 === errors;
@@ -1350,7 +1350,7 @@ if(data8.side !== undefined){
 let data11 = data8.side;
 const _errs20 = errors;
 if(!((data11 === "above") || (data11 === "below"))){
-validate112.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema31.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
+validate114.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema31.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid3 = _errs20 === errors;
@@ -1364,7 +1364,7 @@ var valid3 = true;
 }
 }
 else {
-validate112.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate114.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1375,7 +1375,7 @@ break;
 }
 }
 else {
-validate112.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate114.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1389,7 +1389,7 @@ if(data.source !== undefined){
 let data12 = data.source;
 const _errs21 = errors;
 if(!((data12 === "swing") || (data12 === "data"))){
-validate112.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema31.properties.source.enum},message:"must be equal to one of the allowed values"}];
+validate114.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema31.properties.source.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs21 === errors;
@@ -1405,14 +1405,14 @@ if(errors === _errs22){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
 if((((data13.commit === undefined) && (missing2 = "commit")) || ((data13.x === undefined) && (missing2 = "x"))) || ((data13.y === undefined) && (missing2 = "y"))){
-validate112.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+validate114.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs24 = errors;
 for(const key3 in data13){
 if(!(((key3 === "commit") || (key3 === "x")) || (key3 === "y"))){
-validate112.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+validate114.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1421,7 +1421,7 @@ if(_errs24 === errors){
 if(data13.commit !== undefined){
 const _errs25 = errors;
 if(typeof data13.commit !== "string"){
-validate112.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate114.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid4 = _errs25 === errors;
@@ -1432,8 +1432,8 @@ var valid4 = true;
 if(valid4){
 if(data13.x !== undefined){
 const _errs27 = errors;
-if(!(validate116(data13.x, {instancePath:instancePath+"/base/x",parentData:data13,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
+if(!(validate118(data13.x, {instancePath:instancePath+"/base/x",parentData:data13,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
 errors = vErrors.length;
 }
 var valid4 = _errs27 === errors;
@@ -1444,8 +1444,8 @@ var valid4 = true;
 if(valid4){
 if(data13.y !== undefined){
 const _errs28 = errors;
-if(!(validate103(data13.y, {instancePath:instancePath+"/base/y",parentData:data13,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data13.y, {instancePath:instancePath+"/base/y",parentData:data13,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid4 = _errs28 === errors;
@@ -1459,7 +1459,7 @@ var valid4 = true;
 }
 }
 else {
-validate112.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate114.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1480,20 +1480,20 @@ var valid0 = true;
 }
 }
 else {
-validate112.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate114.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate112.errors = vErrors;
+validate114.errors = vErrors;
 return errors === 0;
 }
-validate112.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate114.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate98(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate100(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate98.evaluated;
+const evaluated0 = validate100.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1504,14 +1504,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if(((((((((data.target === undefined) && (missing0 = "target")) || ((data.inputs === undefined) && (missing0 = "inputs"))) || ((data.train === undefined) && (missing0 = "train"))) || ((data.holdout === undefined) && (missing0 = "holdout"))) || ((data.fit === undefined) && (missing0 = "fit"))) || ((data.partials === undefined) && (missing0 = "partials"))) || ((data.sweep === undefined) && (missing0 = "sweep"))) || ((data.coefficients === undefined) && (missing0 = "coefficients"))){
-validate98.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate100.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!((((((((key0 === "target") || (key0 === "inputs")) || (key0 === "train")) || (key0 === "holdout")) || (key0 === "fit")) || (key0 === "partials")) || (key0 === "sweep")) || (key0 === "coefficients"))){
-validate98.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate100.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1520,7 +1520,7 @@ if(_errs1 === errors){
 if(data.target !== undefined){
 const _errs2 = errors;
 if(typeof data.target !== "string"){
-validate98.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate100.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1539,7 +1539,7 @@ const len0 = data1.length;
 for(let i0=0; i0<len0; i0++){
 const _errs6 = errors;
 if(typeof data1[i0] !== "string"){
-validate98.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate100.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid1 = _errs6 === errors;
@@ -1549,7 +1549,7 @@ break;
 }
 }
 else {
-validate98.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate100.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1561,8 +1561,8 @@ var valid0 = true;
 if(valid0){
 if(data.train !== undefined){
 const _errs8 = errors;
-if(!(validate99(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate99.errors : vErrors.concat(validate99.errors);
+if(!(validate101(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs8 === errors;
@@ -1573,8 +1573,8 @@ var valid0 = true;
 if(valid0){
 if(data.holdout !== undefined){
 const _errs9 = errors;
-if(!(validate99(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate99.errors : vErrors.concat(validate99.errors);
+if(!(validate101(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -1602,8 +1602,8 @@ errors++;
 var _valid0 = _errs12 === errors;
 valid2 = valid2 || _valid0;
 const _errs14 = errors;
-if(!(validate112(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate112.errors : vErrors.concat(validate112.errors);
+if(!(validate114(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
 errors = vErrors.length;
 }
 if(errors === _errs14){
@@ -1642,7 +1642,7 @@ else {
 vErrors.push(err3);
 }
 errors++;
-validate98.errors = vErrors;
+validate100.errors = vErrors;
 return false;
 }
 else {
@@ -1671,8 +1671,8 @@ var valid3 = true;
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs18 = errors;
-if(!(validate112(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate112.errors : vErrors.concat(validate112.errors);
+if(!(validate114(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1682,7 +1682,7 @@ break;
 }
 }
 else {
-validate98.errors = [{instancePath:instancePath+"/partials",schemaPath:"#/properties/partials/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate100.errors = [{instancePath:instancePath+"/partials",schemaPath:"#/properties/partials/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1778,8 +1778,8 @@ var valid5 = true;
 if(valid5){
 if(data8.settings !== undefined){
 const _errs30 = errors;
-if(!(validate116(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
+if(!(validate118(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs30 === errors;
@@ -1790,8 +1790,8 @@ var valid5 = true;
 if(valid5){
 if(data8.cv !== undefined){
 const _errs31 = errors;
-if(!(validate103(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs31 === errors;
@@ -1819,8 +1819,8 @@ errors++;
 var _valid2 = _errs34 === errors;
 valid6 = valid6 || _valid2;
 const _errs36 = errors;
-if(!(validate103(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var _valid2 = _errs36 === errors;
@@ -1854,8 +1854,8 @@ var valid5 = true;
 if(valid5){
 if(data8.chosen !== undefined){
 const _errs37 = errors;
-if(!(validate104(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs37 === errors;
@@ -1866,8 +1866,8 @@ var valid5 = true;
 if(valid5){
 if(data8.suggested !== undefined){
 const _errs38 = errors;
-if(!(validate104(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs38 === errors;
@@ -1906,7 +1906,7 @@ else {
 vErrors.push(err12);
 }
 errors++;
-validate98.errors = vErrors;
+validate100.errors = vErrors;
 return false;
 }
 else {
@@ -1933,14 +1933,14 @@ if(errors === _errs39){
 if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
 let missing3;
 if(((((data16.columns === undefined) && (missing3 = "columns")) || ((data16.values === undefined) && (missing3 = "values"))) || ((data16.limit === undefined) && (missing3 = "limit"))) || ((data16.warn === undefined) && (missing3 = "warn"))){
-validate98.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+validate100.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
 const _errs41 = errors;
 for(const key2 in data16){
 if(!((((key2 === "columns") || (key2 === "values")) || (key2 === "limit")) || (key2 === "warn"))){
-validate98.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate100.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1956,7 +1956,7 @@ const len2 = data17.length;
 for(let i2=0; i2<len2; i2++){
 const _errs44 = errors;
 if(typeof data17[i2] !== "string"){
-validate98.errors = [{instancePath:instancePath+"/coefficients/columns/" + i2,schemaPath:"#/properties/coefficients/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate100.errors = [{instancePath:instancePath+"/coefficients/columns/" + i2,schemaPath:"#/properties/coefficients/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid8 = _errs44 === errors;
@@ -1966,7 +1966,7 @@ break;
 }
 }
 else {
-validate98.errors = [{instancePath:instancePath+"/coefficients/columns",schemaPath:"#/properties/coefficients/properties/columns/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate100.errors = [{instancePath:instancePath+"/coefficients/columns",schemaPath:"#/properties/coefficients/properties/columns/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1978,8 +1978,8 @@ var valid7 = true;
 if(valid7){
 if(data16.values !== undefined){
 const _errs46 = errors;
-if(!(validate103(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate103.errors : vErrors.concat(validate103.errors);
+if(!(validate105(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs46 === errors;
@@ -1990,8 +1990,8 @@ var valid7 = true;
 if(valid7){
 if(data16.limit !== undefined){
 const _errs47 = errors;
-if(!(validate104(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs47 === errors;
@@ -2002,8 +2002,8 @@ var valid7 = true;
 if(valid7){
 if(data16.warn !== undefined){
 const _errs48 = errors;
-if(!(validate104(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate104.errors : vErrors.concat(validate104.errors);
+if(!(validate106(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs48 === errors;
@@ -2018,7 +2018,7 @@ var valid7 = true;
 }
 }
 else {
-validate98.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate100.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -2038,14 +2038,14 @@ var valid0 = true;
 }
 }
 else {
-validate98.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate100.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate98.errors = vErrors;
+validate100.errors = vErrors;
 return errors === 0;
 }
-validate98.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate100.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
 function validate61(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -2169,11 +2169,57 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.parameters !== undefined){
+if(data.dropped !== undefined){
+let data6 = data.dropped;
 const _errs12 = errors;
-if(!(validate55(data.parameters, {instancePath:instancePath+"/parameters",parentData:data,parentDataProperty:"parameters",rootData,dynamicAnchors}))){
+if(errors === _errs12){
+if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
+let missing2;
+if(((data6.train === undefined) && (missing2 = "train")) || ((data6.holdout === undefined) && (missing2 = "holdout"))){
+validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+return false;
+}
+else {
+const _errs14 = errors;
+for(const key2 in data6){
+if(!((key2 === "train") || (key2 === "holdout"))){
+validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs14 === errors){
+if(data6.train !== undefined){
+const _errs15 = errors;
+if(!(validate55(data6.train, {instancePath:instancePath+"/dropped/train",parentData:data6,parentDataProperty:"train",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
+}
+var valid2 = _errs15 === errors;
+}
+else {
+var valid2 = true;
+}
+if(valid2){
+if(data6.holdout !== undefined){
+const _errs16 = errors;
+if(!(validate55(data6.holdout, {instancePath:instancePath+"/dropped/holdout",parentData:data6,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid2 = _errs16 === errors;
+}
+else {
+var valid2 = true;
+}
+}
+}
+}
+}
+else {
+validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
 }
 var valid0 = _errs12 === errors;
 }
@@ -2181,21 +2227,33 @@ else {
 var valid0 = true;
 }
 if(valid0){
+if(data.parameters !== undefined){
+const _errs17 = errors;
+if(!(validate55(data.parameters, {instancePath:instancePath+"/parameters",parentData:data,parentDataProperty:"parameters",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs17 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
 if(data.columns !== undefined){
-let data7 = data.columns;
-const _errs13 = errors;
-if(errors === _errs13){
-if(Array.isArray(data7)){
-var valid2 = true;
-const len0 = data7.length;
+let data10 = data.columns;
+const _errs18 = errors;
+if(errors === _errs18){
+if(Array.isArray(data10)){
+var valid3 = true;
+const len0 = data10.length;
 for(let i0=0; i0<len0; i0++){
-const _errs15 = errors;
-if(typeof data7[i0] !== "string"){
+const _errs20 = errors;
+if(typeof data10[i0] !== "string"){
 validate61.errors = [{instancePath:instancePath+"/columns/" + i0,schemaPath:"#/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
-var valid2 = _errs15 === errors;
-if(!valid2){
+var valid3 = _errs20 === errors;
+if(!valid3){
 break;
 }
 }
@@ -2205,19 +2263,19 @@ validate61.errors = [{instancePath:instancePath+"/columns",schemaPath:"#/propert
 return false;
 }
 }
-var valid0 = _errs13 === errors;
+var valid0 = _errs18 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.metrics !== undefined){
-let data9 = data.metrics;
-const _errs17 = errors;
-const _errs18 = errors;
-let valid3 = false;
-const _errs19 = errors;
-if(data9 !== null){
+let data12 = data.metrics;
+const _errs22 = errors;
+const _errs23 = errors;
+let valid4 = false;
+const _errs24 = errors;
+if(data12 !== null){
 const err0 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err0];
@@ -2227,28 +2285,28 @@ vErrors.push(err0);
 }
 errors++;
 }
-var _valid0 = _errs19 === errors;
-valid3 = valid3 || _valid0;
-const _errs21 = errors;
-if(errors === _errs21){
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
-const _errs23 = errors;
-for(const key2 in data9){
-if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key2))){
-let data10 = data9[key2];
-const _errs24 = errors;
-const _errs25 = errors;
-let valid5 = false;
+var _valid0 = _errs24 === errors;
+valid4 = valid4 || _valid0;
 const _errs26 = errors;
-if(!(validate66(data10, {instancePath:instancePath+"/metrics/" + key2.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data9,parentDataProperty:key2,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(errors === _errs26){
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+const _errs28 = errors;
+for(const key3 in data12){
+if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key3))){
+let data13 = data12[key3];
+const _errs29 = errors;
+const _errs30 = errors;
+let valid6 = false;
+const _errs31 = errors;
+if(!(validate68(data13, {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data12,parentDataProperty:key3,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid1 = _errs26 === errors;
-valid5 = valid5 || _valid1;
-const _errs27 = errors;
-if(typeof data10 !== "string"){
-const err1 = {instancePath:instancePath+"/metrics/" + key2.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/1/type",keyword:"type",params:{type: "string"},message:"must be string"};
+var _valid1 = _errs31 === errors;
+valid6 = valid6 || _valid1;
+const _errs32 = errors;
+if(typeof data13 !== "string"){
+const err1 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/1/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2257,11 +2315,11 @@ vErrors.push(err1);
 }
 errors++;
 }
-var _valid1 = _errs27 === errors;
-valid5 = valid5 || _valid1;
-const _errs29 = errors;
-if(data10 !== null){
-const err2 = {instancePath:instancePath+"/metrics/" + key2.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/2/type",keyword:"type",params:{type: "null"},message:"must be null"};
+var _valid1 = _errs32 === errors;
+valid6 = valid6 || _valid1;
+const _errs34 = errors;
+if(data13 !== null){
+const err2 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/2/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2270,10 +2328,10 @@ vErrors.push(err2);
 }
 errors++;
 }
-var _valid1 = _errs29 === errors;
-valid5 = valid5 || _valid1;
-if(!valid5){
-const err3 = {instancePath:instancePath+"/metrics/" + key2.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid1 = _errs34 === errors;
+valid6 = valid6 || _valid1;
+if(!valid6){
+const err3 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2283,135 +2341,135 @@ vErrors.push(err3);
 errors++;
 }
 else {
-errors = _errs25;
+errors = _errs30;
 if(vErrors !== null){
-if(_errs25){
-vErrors.length = _errs25;
+if(_errs30){
+vErrors.length = _errs30;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid4 = _errs24 === errors;
-if(!valid4){
+var valid5 = _errs29 === errors;
+if(!valid5){
 break;
 }
 }
 }
-if(_errs23 === errors){
-if(data9.train_rmse !== undefined){
-const _errs31 = errors;
-if(!(validate66(data9.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data9,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
-errors = vErrors.length;
-}
-var valid6 = _errs31 === errors;
-}
-else {
-var valid6 = true;
-}
-if(valid6){
-if(data9.holdout_rmse !== undefined){
-const _errs32 = errors;
-if(!(validate66(data9.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data9,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
-errors = vErrors.length;
-}
-var valid6 = _errs32 === errors;
-}
-else {
-var valid6 = true;
-}
-if(valid6){
-if(data9.train_mae !== undefined){
-const _errs33 = errors;
-if(!(validate66(data9.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data9,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
-errors = vErrors.length;
-}
-var valid6 = _errs33 === errors;
-}
-else {
-var valid6 = true;
-}
-if(valid6){
-if(data9.holdout_mae !== undefined){
-const _errs34 = errors;
-if(!(validate66(data9.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data9,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
-errors = vErrors.length;
-}
-var valid6 = _errs34 === errors;
-}
-else {
-var valid6 = true;
-}
-if(valid6){
-if(data9.train_r2 !== undefined){
-const _errs35 = errors;
-if(!(validate66(data9.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data9,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
-errors = vErrors.length;
-}
-var valid6 = _errs35 === errors;
-}
-else {
-var valid6 = true;
-}
-if(valid6){
-if(data9.holdout_r2 !== undefined){
+if(_errs28 === errors){
+if(data12.train_rmse !== undefined){
 const _errs36 = errors;
-if(!(validate66(data9.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data9,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data12.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data12,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs36 === errors;
+var valid7 = _errs36 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.gap_ratio !== undefined){
+if(valid7){
+if(data12.holdout_rmse !== undefined){
 const _errs37 = errors;
-if(!(validate66(data9.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data9,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data12.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data12,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs37 === errors;
+var valid7 = _errs37 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.params_per_sample !== undefined){
+if(valid7){
+if(data12.train_mae !== undefined){
 const _errs38 = errors;
-if(!(validate66(data9.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data9,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data12.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data12,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs38 === errors;
+var valid7 = _errs38 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.max_std_coefficient !== undefined){
+if(valid7){
+if(data12.holdout_mae !== undefined){
 const _errs39 = errors;
-if(!(validate66(data9.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data9,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data12.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data12,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs39 === errors;
+var valid7 = _errs39 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.max_std_coefficient_column !== undefined){
-let data20 = data9.max_std_coefficient_column;
+if(valid7){
+if(data12.train_r2 !== undefined){
 const _errs40 = errors;
-if((typeof data20 !== "string") && (data20 !== null)){
+if(!(validate68(data12.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data12,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs40 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.holdout_r2 !== undefined){
+const _errs41 = errors;
+if(!(validate68(data12.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data12,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs41 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.gap_ratio !== undefined){
+const _errs42 = errors;
+if(!(validate68(data12.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data12,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs42 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.params_per_sample !== undefined){
+const _errs43 = errors;
+if(!(validate68(data12.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data12,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs43 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.max_std_coefficient !== undefined){
+const _errs44 = errors;
+if(!(validate68(data12.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data12,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs44 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.max_std_coefficient_column !== undefined){
+let data23 = data12.max_std_coefficient_column;
+const _errs45 = errors;
+if((typeof data23 !== "string") && (data23 !== null)){
 const err4 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err4];
@@ -2421,46 +2479,46 @@ vErrors.push(err4);
 }
 errors++;
 }
-var valid6 = _errs40 === errors;
+var valid7 = _errs45 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.max_abs_coefficient !== undefined){
-const _errs42 = errors;
-if(!(validate66(data9.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data9,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(valid7){
+if(data12.max_abs_coefficient !== undefined){
+const _errs47 = errors;
+if(!(validate68(data12.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data12,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs42 === errors;
+var valid7 = _errs47 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.rank !== undefined){
-const _errs43 = errors;
-if(!(validate55(data9.rank, {instancePath:instancePath+"/metrics/rank",parentData:data9,parentDataProperty:"rank",rootData,dynamicAnchors}))){
+if(valid7){
+if(data12.rank !== undefined){
+const _errs48 = errors;
+if(!(validate55(data12.rank, {instancePath:instancePath+"/metrics/rank",parentData:data12,parentDataProperty:"rank",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs43 === errors;
+var valid7 = _errs48 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
-if(valid6){
-if(data9.condition_number !== undefined){
-const _errs44 = errors;
-if(!(validate66(data9.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data9,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(valid7){
+if(data12.condition_number !== undefined){
+const _errs49 = errors;
+if(!(validate68(data12.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data12,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid6 = _errs44 === errors;
+var valid7 = _errs49 === errors;
 }
 else {
-var valid6 = true;
+var valid7 = true;
 }
 }
 }
@@ -2487,9 +2545,9 @@ vErrors.push(err5);
 errors++;
 }
 }
-var _valid0 = _errs21 === errors;
-valid3 = valid3 || _valid0;
-if(!valid3){
+var _valid0 = _errs26 === errors;
+valid4 = valid4 || _valid0;
+if(!valid4){
 const err6 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err6];
@@ -2502,37 +2560,37 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs18;
+errors = _errs23;
 if(vErrors !== null){
-if(_errs18){
-vErrors.length = _errs18;
+if(_errs23){
+vErrors.length = _errs23;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs17 === errors;
+var valid0 = _errs22 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.coefficients !== undefined){
-let data24 = data.coefficients;
-const _errs45 = errors;
-if(errors === _errs45){
-if(Array.isArray(data24)){
-var valid7 = true;
-const len1 = data24.length;
+let data27 = data.coefficients;
+const _errs50 = errors;
+if(errors === _errs50){
+if(Array.isArray(data27)){
+var valid8 = true;
+const len1 = data27.length;
 for(let i1=0; i1<len1; i1++){
-const _errs47 = errors;
-if(!(validate66(data24[i1], {instancePath:instancePath+"/coefficients/" + i1,parentData:data24,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+const _errs52 = errors;
+if(!(validate68(data27[i1], {instancePath:instancePath+"/coefficients/" + i1,parentData:data27,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs47 === errors;
-if(!valid7){
+var valid8 = _errs52 === errors;
+if(!valid8){
 break;
 }
 }
@@ -2542,19 +2600,19 @@ validate61.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs45 === errors;
+var valid0 = _errs50 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.shipped !== undefined){
-let data26 = data.shipped;
-const _errs48 = errors;
-const _errs49 = errors;
-let valid8 = false;
-const _errs50 = errors;
-if(data26 !== null){
+let data29 = data.shipped;
+const _errs53 = errors;
+const _errs54 = errors;
+let valid9 = false;
+const _errs55 = errors;
+if(data29 !== null){
 const err7 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err7];
@@ -2564,14 +2622,14 @@ vErrors.push(err7);
 }
 errors++;
 }
-var _valid2 = _errs50 === errors;
-valid8 = valid8 || _valid2;
-const _errs52 = errors;
-if(errors === _errs52){
-if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
-let missing2;
-if((((data26.train_rmse === undefined) && (missing2 = "train_rmse")) || ((data26.holdout_rmse === undefined) && (missing2 = "holdout_rmse"))) || ((data26.max_coefficient_difference === undefined) && (missing2 = "max_coefficient_difference"))){
-const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"};
+var _valid2 = _errs55 === errors;
+valid9 = valid9 || _valid2;
+const _errs57 = errors;
+if(errors === _errs57){
+if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
+let missing3;
+if((((data29.train_rmse === undefined) && (missing3 = "train_rmse")) || ((data29.holdout_rmse === undefined) && (missing3 = "holdout_rmse"))) || ((data29.max_coefficient_difference === undefined) && (missing3 = "max_coefficient_difference"))){
+const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2581,10 +2639,10 @@ vErrors.push(err8);
 errors++;
 }
 else {
-const _errs54 = errors;
-for(const key3 in data26){
-if(!(((key3 === "train_rmse") || (key3 === "holdout_rmse")) || (key3 === "max_coefficient_difference"))){
-const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"};
+const _errs59 = errors;
+for(const key4 in data29){
+if(!(((key4 === "train_rmse") || (key4 === "holdout_rmse")) || (key4 === "max_coefficient_difference"))){
+const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2595,41 +2653,41 @@ errors++;
 break;
 }
 }
-if(_errs54 === errors){
-if(data26.train_rmse !== undefined){
-const _errs55 = errors;
-if(!(validate66(data26.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data26,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(_errs59 === errors){
+if(data29.train_rmse !== undefined){
+const _errs60 = errors;
+if(!(validate68(data29.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data29,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid9 = _errs55 === errors;
+var valid10 = _errs60 === errors;
 }
 else {
-var valid9 = true;
+var valid10 = true;
 }
-if(valid9){
-if(data26.holdout_rmse !== undefined){
-const _errs56 = errors;
-if(!(validate66(data26.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data26,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(valid10){
+if(data29.holdout_rmse !== undefined){
+const _errs61 = errors;
+if(!(validate68(data29.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data29,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid9 = _errs56 === errors;
+var valid10 = _errs61 === errors;
 }
 else {
-var valid9 = true;
+var valid10 = true;
 }
-if(valid9){
-if(data26.max_coefficient_difference !== undefined){
-const _errs57 = errors;
-if(!(validate66(data26.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data26,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(valid10){
+if(data29.max_coefficient_difference !== undefined){
+const _errs62 = errors;
+if(!(validate68(data29.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data29,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid9 = _errs57 === errors;
+var valid10 = _errs62 === errors;
 }
 else {
-var valid9 = true;
+var valid10 = true;
 }
 }
 }
@@ -2647,9 +2705,9 @@ vErrors.push(err10);
 errors++;
 }
 }
-var _valid2 = _errs52 === errors;
-valid8 = valid8 || _valid2;
-if(!valid8){
+var _valid2 = _errs57 === errors;
+valid9 = valid9 || _valid2;
+if(!valid9){
 const err11 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err11];
@@ -2662,37 +2720,37 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs49;
+errors = _errs54;
 if(vErrors !== null){
-if(_errs49){
-vErrors.length = _errs49;
+if(_errs54){
+vErrors.length = _errs54;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs48 === errors;
+var valid0 = _errs53 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.checks !== undefined){
-let data30 = data.checks;
-const _errs58 = errors;
-if(errors === _errs58){
-if(Array.isArray(data30)){
-var valid10 = true;
-const len2 = data30.length;
+let data33 = data.checks;
+const _errs63 = errors;
+if(errors === _errs63){
+if(Array.isArray(data33)){
+var valid11 = true;
+const len2 = data33.length;
 for(let i2=0; i2<len2; i2++){
-const _errs60 = errors;
-if(!(validate84(data30[i2], {instancePath:instancePath+"/checks/" + i2,parentData:data30,parentDataProperty:i2,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
+const _errs65 = errors;
+if(!(validate86(data33[i2], {instancePath:instancePath+"/checks/" + i2,parentData:data33,parentDataProperty:i2,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs60 === errors;
-if(!valid10){
+var valid11 = _errs65 === errors;
+if(!valid11){
 break;
 }
 }
@@ -2702,31 +2760,31 @@ validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properti
 return false;
 }
 }
-var valid0 = _errs58 === errors;
+var valid0 = _errs63 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.base !== undefined){
-const _errs61 = errors;
-if(!(validate90(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate90.errors : vErrors.concat(validate90.errors);
+const _errs66 = errors;
+if(!(validate92(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs61 === errors;
+var valid0 = _errs66 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.error !== undefined){
-let data33 = data.error;
-const _errs62 = errors;
-const _errs63 = errors;
-let valid11 = false;
-const _errs64 = errors;
-if(data33 !== null){
+let data36 = data.error;
+const _errs67 = errors;
+const _errs68 = errors;
+let valid12 = false;
+const _errs69 = errors;
+if(data36 !== null){
 const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err12];
@@ -2736,14 +2794,14 @@ vErrors.push(err12);
 }
 errors++;
 }
-var _valid3 = _errs64 === errors;
-valid11 = valid11 || _valid3;
-const _errs66 = errors;
-if(errors === _errs66){
-if(data33 && typeof data33 == "object" && !Array.isArray(data33)){
-let missing3;
-if(((((data33.message === undefined) && (missing3 = "message")) || ((data33.file === undefined) && (missing3 = "file"))) || ((data33.line === undefined) && (missing3 = "line"))) || ((data33.code === undefined) && (missing3 = "code"))){
-const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"};
+var _valid3 = _errs69 === errors;
+valid12 = valid12 || _valid3;
+const _errs71 = errors;
+if(errors === _errs71){
+if(data36 && typeof data36 == "object" && !Array.isArray(data36)){
+let missing4;
+if(((((data36.message === undefined) && (missing4 = "message")) || ((data36.file === undefined) && (missing4 = "file"))) || ((data36.line === undefined) && (missing4 = "line"))) || ((data36.code === undefined) && (missing4 = "code"))){
+const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2753,10 +2811,10 @@ vErrors.push(err13);
 errors++;
 }
 else {
-const _errs68 = errors;
-for(const key4 in data33){
-if(!(((((key4 === "message") || (key4 === "file")) || (key4 === "line")) || (key4 === "column")) || (key4 === "code"))){
-const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"};
+const _errs73 = errors;
+for(const key5 in data36){
+if(!(((((key5 === "message") || (key5 === "file")) || (key5 === "line")) || (key5 === "column")) || (key5 === "code"))){
+const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2767,10 +2825,10 @@ errors++;
 break;
 }
 }
-if(_errs68 === errors){
-if(data33.message !== undefined){
-const _errs69 = errors;
-if(typeof data33.message !== "string"){
+if(_errs73 === errors){
+if(data36.message !== undefined){
+const _errs74 = errors;
+if(typeof data36.message !== "string"){
 const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err15];
@@ -2780,16 +2838,16 @@ vErrors.push(err15);
 }
 errors++;
 }
-var valid12 = _errs69 === errors;
+var valid13 = _errs74 === errors;
 }
 else {
-var valid12 = true;
+var valid13 = true;
 }
-if(valid12){
-if(data33.file !== undefined){
-let data35 = data33.file;
-const _errs71 = errors;
-if((typeof data35 !== "string") && (data35 !== null)){
+if(valid13){
+if(data36.file !== undefined){
+let data38 = data36.file;
+const _errs76 = errors;
+if((typeof data38 !== "string") && (data38 !== null)){
 const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err16];
@@ -2799,26 +2857,26 @@ vErrors.push(err16);
 }
 errors++;
 }
-var valid12 = _errs71 === errors;
+var valid13 = _errs76 === errors;
 }
 else {
-var valid12 = true;
+var valid13 = true;
 }
-if(valid12){
-if(data33.line !== undefined){
-let data36 = data33.line;
-const _errs73 = errors;
-const _errs74 = errors;
-let valid13 = false;
-const _errs75 = errors;
-if(!(validate86(data36, {instancePath:instancePath+"/error/line",parentData:data33,parentDataProperty:"line",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
+if(valid13){
+if(data36.line !== undefined){
+let data39 = data36.line;
+const _errs78 = errors;
+const _errs79 = errors;
+let valid14 = false;
+const _errs80 = errors;
+if(!(validate88(data39, {instancePath:instancePath+"/error/line",parentData:data36,parentDataProperty:"line",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs75 === errors;
-valid13 = valid13 || _valid4;
-const _errs76 = errors;
-if(data36 !== null){
+var _valid4 = _errs80 === errors;
+valid14 = valid14 || _valid4;
+const _errs81 = errors;
+if(data39 !== null){
 const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err17];
@@ -2828,67 +2886,15 @@ vErrors.push(err17);
 }
 errors++;
 }
-var _valid4 = _errs76 === errors;
-valid13 = valid13 || _valid4;
-if(!valid13){
+var _valid4 = _errs81 === errors;
+valid14 = valid14 || _valid4;
+if(!valid14){
 const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err18];
 }
 else {
 vErrors.push(err18);
-}
-errors++;
-}
-else {
-errors = _errs74;
-if(vErrors !== null){
-if(_errs74){
-vErrors.length = _errs74;
-}
-else {
-vErrors = null;
-}
-}
-}
-var valid12 = _errs73 === errors;
-}
-else {
-var valid12 = true;
-}
-if(valid12){
-if(data33.column !== undefined){
-let data37 = data33.column;
-const _errs78 = errors;
-const _errs79 = errors;
-let valid14 = false;
-const _errs80 = errors;
-if(!(validate86(data37, {instancePath:instancePath+"/error/column",parentData:data33,parentDataProperty:"column",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
-errors = vErrors.length;
-}
-var _valid5 = _errs80 === errors;
-valid14 = valid14 || _valid5;
-const _errs81 = errors;
-if(data37 !== null){
-const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
-if(vErrors === null){
-vErrors = [err19];
-}
-else {
-vErrors.push(err19);
-}
-errors++;
-}
-var _valid5 = _errs81 === errors;
-valid14 = valid14 || _valid5;
-if(!valid14){
-const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
-if(vErrors === null){
-vErrors = [err20];
-}
-else {
-vErrors.push(err20);
 }
 errors++;
 }
@@ -2903,15 +2909,67 @@ vErrors = null;
 }
 }
 }
-var valid12 = _errs78 === errors;
+var valid13 = _errs78 === errors;
 }
 else {
-var valid12 = true;
+var valid13 = true;
 }
-if(valid12){
-if(data33.code !== undefined){
+if(valid13){
+if(data36.column !== undefined){
+let data40 = data36.column;
 const _errs83 = errors;
-if(typeof data33.code !== "string"){
+const _errs84 = errors;
+let valid15 = false;
+const _errs85 = errors;
+if(!(validate88(data40, {instancePath:instancePath+"/error/column",parentData:data36,parentDataProperty:"column",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+errors = vErrors.length;
+}
+var _valid5 = _errs85 === errors;
+valid15 = valid15 || _valid5;
+const _errs86 = errors;
+if(data40 !== null){
+const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+var _valid5 = _errs86 === errors;
+valid15 = valid15 || _valid5;
+if(!valid15){
+const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+else {
+errors = _errs84;
+if(vErrors !== null){
+if(_errs84){
+vErrors.length = _errs84;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid13 = _errs83 === errors;
+}
+else {
+var valid13 = true;
+}
+if(valid13){
+if(data36.code !== undefined){
+const _errs88 = errors;
+if(typeof data36.code !== "string"){
 const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err21];
@@ -2921,10 +2979,10 @@ vErrors.push(err21);
 }
 errors++;
 }
-var valid12 = _errs83 === errors;
+var valid13 = _errs88 === errors;
 }
 else {
-var valid12 = true;
+var valid13 = true;
 }
 }
 }
@@ -2944,9 +3002,9 @@ vErrors.push(err22);
 errors++;
 }
 }
-var _valid3 = _errs66 === errors;
-valid11 = valid11 || _valid3;
-if(!valid11){
+var _valid3 = _errs71 === errors;
+valid12 = valid12 || _valid3;
+if(!valid12){
 const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err23];
@@ -2959,32 +3017,33 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs63;
+errors = _errs68;
 if(vErrors !== null){
-if(_errs63){
-vErrors.length = _errs63;
+if(_errs68){
+vErrors.length = _errs68;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs62 === errors;
+var valid0 = _errs67 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs85 = errors;
-if(!(validate98(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate98.errors : vErrors.concat(validate98.errors);
+const _errs90 = errors;
+if(!(validate100(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate100.errors : vErrors.concat(validate100.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs85 === errors;
+var valid0 = _errs90 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }
