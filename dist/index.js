@@ -29256,7 +29256,7 @@ module.exports = {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5148);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4771);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6387);
 /* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4029);
 /**
  * Evaluates every model as it was on a base commit, read with git from that commit (settings
@@ -29286,11 +29286,17 @@ async function evaluateBase(settings, revision, options) {
     const short = /^[0-9a-f]{40,64}$/.test(revision) ? revision.slice(0, 7) : revision;
     const top = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .tryGitTopLevel */ .ZS)(settings.root);
     if (top === null)
-        return { notes: [`base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`] };
+        return {
+            notes: [
+                `base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`,
+            ],
+        };
     const sha = await (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .tryResolveCommit */ .Fl)(settings.root, revision);
     if (sha === null)
         return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
-    const prefix = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(top), await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(settings.root)).split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep)).join('/');
+    const prefix = node_path__WEBPACK_IMPORTED_MODULE_1___default().relative(await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(top), await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.realpath)(settings.root))
+        .split((node_path__WEBPACK_IMPORTED_MODULE_1___default().sep))
+        .join('/');
     const repo = (0,_repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__/* .createGitRepository */ .Zd)({ cwd: settings.root, commit: sha, prefix });
     try {
         // Explicitly named descriptors that do not exist at the base are new in the head.
@@ -29316,7 +29322,9 @@ async function evaluateBase(settings, revision, options) {
         return { baseline, baselineData, baseCommit: sha, notes: [] };
     }
     catch (error) {
-        return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .errorMessage */ .gJ)(error)}); models are not compared with it in this run.`] };
+        return {
+            notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .errorMessage */ .gJ)(error)}); models are not compared with it in this run.`],
+        };
     }
 }
 
@@ -29466,7 +29474,9 @@ function pullRequestOf(context) {
     const headSha = head?.sha;
     const headRepo = record(head?.repo);
     const baseRepo = record(record(pr?.base)?.repo);
-    const fromFork = typeof headRepo?.full_name === 'string' && typeof baseRepo?.full_name === 'string' ? headRepo.full_name !== baseRepo.full_name : headRepo?.fork === true;
+    const fromFork = typeof headRepo?.full_name === 'string' && typeof baseRepo?.full_name === 'string'
+        ? headRepo.full_name !== baseRepo.full_name
+        : headRepo?.fork === true;
     return {
         owner,
         repo,
@@ -30675,7 +30685,16 @@ const complexity_check = {
             chosen: sweep.chosen,
             best: sweep.best,
             current: sweep.current,
-            curve: sweep.curve.map((c) => ({ setting: c.setting, label: c.label, parameters: c.parameters, cv_rmse: c.cvRmse, mean_mse: c.meanMse, se_mse: c.seMse, current: c.current, ...(c.failed ? { failed: c.failed } : {}) })),
+            curve: sweep.curve.map((c) => ({
+                setting: c.setting,
+                label: c.label,
+                parameters: c.parameters,
+                cv_rmse: c.cvRmse,
+                mean_mse: c.meanMse,
+                se_mse: c.seMse,
+                current: c.current,
+                ...(c.failed ? { failed: c.failed } : {}),
+            })),
         });
         const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
         if (sweep.chosen === sweep.current) {
@@ -30746,13 +30765,23 @@ const conditioning_check = {
         };
         const terms = [...new Set(fit.collinearColumns.map(termOf).filter((t) => t >= 0))];
         const line = terms.length > 0 ? design.terms[terms[0]].spec.line : descriptor.fit.line;
-        const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).map((c) => (0,errors/* clip */.$Q)(c)).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
+        const named = columns.length > 0
+            ? `; nearly collinear: ${columns
+                .slice(0, 8)
+                .map((c) => (0,errors/* clip */.$Q)(c))
+                .join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}`
+            : '';
         return {
             value,
             message: `the column-scaled design has condition number ${(0,format/* formatNumber */.Z)(value)} (rank ${fit.rank} of ${design.p})${value > 1e3 ? named : ''}`,
             line,
             metrics: { condition_number_scaled: (0,result/* jsonNumber */.qj)(value) },
-            detail: { collinear_columns: columns, collinear_term_lines: terms.map((t) => design.terms[t].spec.line), rank: fit.rank, singular_values_scaled: Array.from(fit.singularValuesScaled, result/* jsonNumber */.qj) },
+            detail: {
+                collinear_columns: columns,
+                collinear_term_lines: terms.map((t) => design.terms[t].spec.line),
+                rank: fit.rank,
+                singular_values_scaled: Array.from(fit.singularValuesScaled, result/* jsonNumber */.qj),
+            },
         };
     },
 };
@@ -30844,7 +30873,9 @@ const cross_validation_check = {
             };
         }
         const ratio = (0,regression_metrics/* gapRatio */.yr)(metrics.trainRmse, cv.cvRmse);
-        const loo = cv.rowsWithLeverageOne > 0 ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)` : (0,format/* formatNumber */.Z)(cv.loocvRmse);
+        const loo = cv.rowsWithLeverageOne > 0
+            ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)`
+            : (0,format/* formatNumber */.Z)(cv.loocvRmse);
         return {
             value: ratio,
             message: `${cv.k}-fold CV RMSE ${(0,format/* formatNumber */.Z)(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${(0,format/* formatNumber */.Z)(ratio)} times the training RMSE ${(0,format/* formatNumber */.Z)(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${(0,format/* formatNumber */.Z)(cv.gcv)}, effective degrees of freedom ${(0,format/* formatNumber */.Z)(effectiveDf)} of ${design.p} parameters`,
@@ -30904,10 +30935,19 @@ const leakage_check = {
             train_file: train.file,
         };
         if (leak.inputMatches === 0) {
-            return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')}`, metrics, detail };
+            return {
+                value: 0,
+                message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')}`,
+                metrics,
+                detail,
+            };
         }
         const lines = (file, ls) => `${(0,errors/* clip */.$Q)(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
-        const target = leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
+        const target = leak.fullMatches === leak.inputMatches
+            ? 'all with the same target'
+            : leak.fullMatches === 0
+                ? 'none with the same target'
+                : `${leak.fullMatches} with the same target`;
         return {
             value: leak.inputMatches,
             message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => (0,errors/* clip */.$Q)(c)).join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
@@ -31060,7 +31100,12 @@ const swing_check = {
     measure(context) {
         const swing = context.analyses.swing();
         if (Number.isNaN(swing.inside)) {
-            return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is nothing between samples to scan', detail: swingDetail(swing) };
+            return {
+                value: null,
+                reason: 'not-applicable',
+                message: 'no input has two distinct training values, so there is nothing between samples to scan',
+                detail: swingDetail(swing),
+            };
         }
         const where = describePoint(swing.worstInside);
         return {
@@ -31098,7 +31143,11 @@ const swing_beyond_check = {
     measure(context) {
         const swing = context.analyses.swing();
         if (Number.isNaN(swing.beyond)) {
-            return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is no range to step beyond' };
+            return {
+                value: null,
+                reason: 'not-applicable',
+                message: 'no input has two distinct training values, so there is no range to step beyond',
+            };
         }
         const where = describePoint(swing.worstBeyond);
         return {
@@ -31108,7 +31157,11 @@ const swing_beyond_check = {
                 : `within ${(0,format/* formatNumber */.Z)(swing.margin * 100)} % of the range beyond the samples the predictions stay inside the training target band`,
             line: inputLine(context, swing.worstBeyond),
             metrics: { swing_beyond: (0,result/* jsonNumber */.qj)(swing.beyond) },
-            detail: { margin: swing.margin, points: swing.points.beyond, worst: swing.worstBeyond === null ? null : { inputs: swing.worstBeyond.inputs, prediction: (0,result/* jsonNumber */.qj)(swing.worstBeyond.prediction) } },
+            detail: {
+                margin: swing.margin,
+                points: swing.points.beyond,
+                worst: swing.worstBeyond === null ? null : { inputs: swing.worstBeyond.inputs, prediction: (0,result/* jsonNumber */.qj)(swing.worstBeyond.prediction) },
+            },
         };
     },
 };
@@ -31462,9 +31515,13 @@ function findCheck(id) {
 }
 function describeLimit(status, value, limit) {
     if (status === 'fail')
-        return limit.failBelow !== null && value < limit.failBelow ? `under the fail floor ${(0,format/* formatNumber */.Z)(limit.failBelow)}` : `over the fail limit ${(0,format/* formatNumber */.Z)(limit.fail)}`;
+        return limit.failBelow !== null && value < limit.failBelow
+            ? `under the fail floor ${(0,format/* formatNumber */.Z)(limit.failBelow)}`
+            : `over the fail limit ${(0,format/* formatNumber */.Z)(limit.fail)}`;
     if (status === 'warn')
-        return limit.warnBelow !== null && value < limit.warnBelow ? `under the warning floor ${(0,format/* formatNumber */.Z)(limit.warnBelow)}` : `over the warning limit ${(0,format/* formatNumber */.Z)(limit.warn)}`;
+        return limit.warnBelow !== null && value < limit.warnBelow
+            ? `under the warning floor ${(0,format/* formatNumber */.Z)(limit.warnBelow)}`
+            : `over the warning limit ${(0,format/* formatNumber */.Z)(limit.warn)}`;
     if (limit.off)
         return 'limit is off';
     const parts = [];
@@ -31492,7 +31549,11 @@ function runCheck(check, context) {
 function runClassifierCheck(check, context) {
     const measure = check.measureClassifier;
     if (!appliesTo(check, 'classification') || measure === undefined) {
-        return judgeCheck(check, context.descriptor, () => ({ value: null, reason: 'not-for-classification', message: 'applies to regression models only' }));
+        return judgeCheck(check, context.descriptor, () => ({
+            value: null,
+            reason: 'not-for-classification',
+            message: 'applies to regression models only',
+        }));
     }
     return judgeCheck(check, context.descriptor, () => measure.call(check, context));
 }
@@ -31527,7 +31588,9 @@ function judgeCheck(check, descriptor, measure) {
         limitKey: check.limitKey,
         limit: effective.off ? null : effective.fail,
         warn: effective.off ? null : effective.warn,
-        ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
+        ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null)
+            ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } }
+            : {}),
         line: line ?? measured.line ?? check.line(context.descriptor),
         message: `${measured.message}${comparison}`,
         advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',
@@ -31848,7 +31911,10 @@ function formatNumber(x, digits = 4) {
         return '0';
     const a = Math.abs(x);
     if (a < 1e-3 || a >= 1e6)
-        return x.toExponential(digits - 1).replace(/\.?0+e/, 'e').replace('e+', 'e');
+        return x
+            .toExponential(digits - 1)
+            .replace(/\.?0+e/, 'e')
+            .replace('e+', 'e');
     if (a >= 10 ** digits)
         return String(Math.round(x));
     const text = x.toPrecision(digits);
@@ -32018,10 +32084,224 @@ const VERSION = '0.1.0';
 
 /***/ }),
 
+/***/ 3838:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   ID: () => (/* binding */ splitFieldOf),
+/* harmony export */   NQ: () => (/* binding */ peekSeparator),
+/* harmony export */   Zf: () => (/* binding */ decimalSeparatorError),
+/* harmony export */   rS: () => (/* binding */ splitLabelError),
+/* harmony export */   ui: () => (/* binding */ DEFAULT_FORMAT),
+/* harmony export */   v0: () => (/* binding */ formatCellNumber)
+/* harmony export */ });
+/* unused harmony exports MISSING_SPELLINGS, isMissingCell, separatorOfHeader, formatProblem */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
+/* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5383);
+/* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8706);
+/**
+ * The forms a data file may take beyond plain comma-separated numbers: the field separator
+ * (comma, semicolon or tab, detected from the header line or set), the decimal mark (point or
+ * comma), what to do with missing cells (refuse, or drop the row and count it), and a split
+ * column that divides one file into training and hold-out rows. Both CSV paths read these
+ * settings from here so that they cannot drift apart.
+ */
+
+
+
+/** The format when the descriptor says nothing: detected separator, decimal point, missing cells are errors. */
+const DEFAULT_FORMAT = Object.freeze({ separator: 'auto', decimal: '.', missing: 'error' });
+/**
+ * Cell texts that mean "missing" under `missing: drop`, compared after trimming white space and
+ * ignoring case: the empty cell, `NA`, `N/A`, `#N/A`, `NaN`, `null`, `None`. (The spellings
+ * spreadsheet and statistics programs commonly write for a missing value: common practice.)
+ */
+const MISSING_SPELLINGS = Object.freeze(['', 'na', 'n/a', '#n/a', 'nan', 'null', 'none']);
+const MISSING_SET = new Set(MISSING_SPELLINGS);
+/** True when a cell's text (untrimmed) is one of {@link MISSING_SPELLINGS}. */
+function isMissingCell(cell) {
+    const text = cell.trim();
+    return text.length <= 4 && MISSING_SET.has(text.toLowerCase());
+}
+/**
+ * The separator of a header line when it is not set: comma when the line holds a comma outside
+ * quotes (as before separators were detected, so comma files read as they always did); else
+ * semicolon when it holds semicolons and no tabs; else tab when it holds tabs and no semicolons;
+ * else comma (one column, or both semicolons and tabs: ambiguous, the missing-column error then
+ * carries a hint to set `data.separator`).
+ *
+ * @param line the header line's text
+ */
+function separatorOfHeader(line) {
+    let semicolons = 0;
+    let tabs = 0;
+    let quoted = false;
+    for (let i = 0; i < line.length; i++) {
+        const c = line[i];
+        if (c === '"')
+            quoted = !quoted;
+        else if (quoted)
+            continue;
+        else if (c === ',')
+            return ',';
+        else if (c === ';')
+            semicolons++;
+        else if (c === '\t')
+            tabs++;
+    }
+    if (semicolons > 0 && tabs === 0)
+        return ';';
+    if (tabs > 0 && semicolons === 0)
+        return '\t';
+    return ',';
+}
+/**
+ * Reads pieces of a file until its first line that is not blank has ended (within the header's
+ * 1 MiB bound: past it the readers report the long header), finds that line's separator by
+ * {@link separatorOfHeader}, and hands back the same bytes again, held pieces first, then the rest
+ * of the one stream: the file is opened and read once. Comma (line 1) for an empty file.
+ *
+ * @param pieces the file's bytes in pieces of any size
+ * @returns the separator, the header's 1-based line, and the file's pieces from the start
+ */
+async function peekSeparator(pieces) {
+    const iterator = pieces[Symbol.asyncIterator]();
+    const held = [];
+    let heldBytes = 0;
+    let segments = [];
+    let line = 1;
+    let found = null;
+    let done = false;
+    const decoder = new TextDecoder('utf-8');
+    const lineText = () => {
+        const total = segments.reduce((n, s) => n + s.length, 0);
+        const bytes = new Uint8Array(total);
+        let at = 0;
+        for (const s of segments) {
+            bytes.set(s, at);
+            at += s.length;
+        }
+        segments = [];
+        return decoder.decode(bytes);
+    };
+    reading: while (heldBytes <= _line_blocks_js__WEBPACK_IMPORTED_MODULE_1__/* .MAX_HEADER_BYTES */ .v8) {
+        const next = await iterator.next();
+        if (next.done === true) {
+            done = true;
+            const last = lineText();
+            if (last.trim() !== '')
+                found = separatorOfHeader(last);
+            break;
+        }
+        const piece = next.value;
+        held.push(piece);
+        heldBytes += piece.length;
+        let start = 0;
+        for (let lf = piece.indexOf(10); lf !== -1; lf = piece.indexOf(10, start)) {
+            segments.push(piece.subarray(start, lf));
+            start = lf + 1;
+            const text = lineText();
+            if (text.trim() !== '') {
+                found = separatorOfHeader(text);
+                break reading;
+            }
+            line++;
+        }
+        segments.push(piece.subarray(start));
+    }
+    const replay = async function* () {
+        try {
+            yield* held.splice(0, held.length);
+            while (!done) {
+                const next = await iterator.next();
+                if (next.done === true)
+                    break;
+                yield next.value;
+            }
+        }
+        finally {
+            await iterator.return?.(undefined);
+        }
+    };
+    return { separator: found ?? ',', line: found === null ? 1 : line, pieces: replay() };
+}
+/** The `csv-format` error: the header is comma-separated while the decimal mark is the comma. */
+function decimalSeparatorError(file, line) {
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-format', 'the header is comma-separated, but `data.decimal: ","` makes the comma the decimal mark; expected a header separated by semicolons or tabs (or set `data.separator`)', { file, line });
+}
+/**
+ * Checks a format against itself: a decimal comma needs a separator other than the comma.
+ * @returns a sentence saying what is wrong, or null
+ */
+function formatProblem(format) {
+    if (format.decimal === ',' && format.separator === ',') {
+        return 'a decimal comma needs a separator other than the comma; set `data.separator` to ";" or "\\t"';
+    }
+    return null;
+}
+/**
+ * Reads one cell of a used column under a format: trims white space, returns NaN for a missing
+ * cell under `missing: drop` (the row is then dropped), accepts a decimal comma in place of the
+ * point when `decimal` is `,` (a point is then an error), and otherwise reads it as the default
+ * format does (finite, not underflowing; see csv-rules `cellNumber`). Throws InputError `csv-cell`.
+ *
+ * @param cell the field text (quotes already removed)
+ * @param file repository-relative path, for messages
+ * @param line 1-based physical line of the row
+ * @param column the column's header name
+ * @param format the file's format
+ */
+function formatCellNumber(cell, file, line, column, format) {
+    if (format.missing === 'drop' && isMissingCell(cell))
+        return Number.NaN;
+    let text = cell.trim();
+    if (format.decimal === ',') {
+        if (text.includes('.'))
+            throw decimalPointError(cell, file, line, column);
+        text = text.replace(',', '.');
+    }
+    if (_csv_rules_js__WEBPACK_IMPORTED_MODULE_2__/* .DECIMAL_NUMBER */ .A7.test(text)) {
+        const value = Number(text);
+        if (Number.isFinite(value) && !(0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_2__/* .underflows */ .i5)(text, value))
+            return value;
+    }
+    throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_2__/* .cellError */ .B8)(format.decimal === ',' ? text : cell, file, line, column);
+}
+function decimalPointError(cell, file, line, column) {
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-cell', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(column, 40)}: expected a number with a decimal comma (like 12, -0,5 or 1,5e-3), as \`data.decimal: ","\` says; got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, 40)}`, { file, line, key: column });
+}
+/**
+ * The field index of the split column in a header, or throws InputError `csv-missing-column`.
+ * @param file repository-relative path, for messages
+ * @param header the header names
+ * @param headerLine 1-based line of the header
+ * @param split the split filter
+ */
+function splitFieldOf(file, header, headerLine, split) {
+    const field = header.indexOf(split.column);
+    if (field === -1) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-missing-column', `no split column named ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(split.column, 40)} (from \`data.split.column\`); the header has ${header.length} column${header.length === 1 ? '' : 's'}`, {
+            file,
+            line: headerLine,
+            key: split.column,
+        });
+    }
+    return field;
+}
+/** The `csv-split` error for a split cell that is neither label. */
+function splitLabelError(cell, file, line, split) {
+    return new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('csv-split', `column ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(split.column, 40)}: expected ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(split.keep, 40)} or ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(split.other, 40)} (the labels of \`data.split\`); got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quoteValue */ .cl)(cell, 40)}`, { file, line, key: split.column });
+}
+
+
+/***/ }),
+
 /***/ 8706:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   A7: () => (/* binding */ DECIMAL_NUMBER),
+/* harmony export */   B8: () => (/* binding */ cellError),
 /* harmony export */   CA: () => (/* binding */ emptyError),
 /* harmony export */   L6: () => (/* binding */ raggedError),
 /* harmony export */   NX: () => (/* binding */ planRequest),
@@ -32029,10 +32309,11 @@ const VERSION = '0.1.0';
 /* harmony export */   W4: () => (/* binding */ cellNumber),
 /* harmony export */   _I: () => (/* binding */ DEFAULT_CHUNK_ROWS),
 /* harmony export */   fS: () => (/* binding */ DEFAULT_MAX_BYTES),
+/* harmony export */   i5: () => (/* binding */ underflows),
 /* harmony export */   j7: () => (/* binding */ planColumns),
 /* harmony export */   vB: () => (/* binding */ ChunkBuilder)
 /* harmony export */ });
-/* unused harmony exports MAX_HEADER_COLUMNS, DECIMAL_NUMBER, layoutHint, underflows, cellError */
+/* unused harmony exports MAX_HEADER_COLUMNS, layoutHint */
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4296);
 /**
  * The rules both CSV paths share, kept in one place so that the fast path and the general
@@ -32135,10 +32416,12 @@ function layoutHint(header) {
     if (header.length > 0 && header[0].startsWith(LFS_POINTER)) {
         return '. Hint: the file is a Git LFS pointer, not the data: fetch the LFS objects before the check (`git lfs pull`, or `lfs: true` on the checkout step)';
     }
+    if (only.includes(';') && only.includes('\t'))
+        return '. Hint: the header holds both semicolons and tabs and no commas, so the separator is ambiguous: set `data.separator` to ";" or "\\t" in the descriptor';
     if (only.includes(';'))
-        return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; fitgate reads comma-separated files';
+        return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; set `data.separator: ";"` in the descriptor';
     if (only.includes('\t'))
-        return '. Hint: the header holds tabs and no commas: the file looks tab-separated; fitgate reads comma-separated files';
+        return '. Hint: the header holds tabs and no commas: the file looks tab-separated; set `data.separator: "\\t"` in the descriptor';
     return '';
 }
 /**
@@ -32326,9 +32609,10 @@ class ChunkBuilder {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   Dr: () => (/* binding */ lineBlocks),
 /* harmony export */   Si: () => (/* binding */ blockError),
-/* harmony export */   Sj: () => (/* binding */ encodingError)
+/* harmony export */   Sj: () => (/* binding */ encodingError),
+/* harmony export */   v8: () => (/* binding */ MAX_HEADER_BYTES)
 /* harmony export */ });
-/* unused harmony exports MAX_HEADER_BYTES, headerTooLongError */
+/* unused harmony export headerTooLongError */
 /* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4573);
 /* harmony import */ var node_buffer__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_buffer__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4296);
@@ -33773,7 +34057,8 @@ function sweepTarget(descriptor, design) {
     let fourier = -1;
     design.terms.forEach((t, i) => {
         const spec = t.spec;
-        if ((spec.kind === 'polynomial' || spec.kind === 'multi-polynomial') && (poly < 0 || spec.degree > design.terms[poly].spec.degree))
+        if ((spec.kind === 'polynomial' || spec.kind === 'multi-polynomial') &&
+            (poly < 0 || spec.degree > design.terms[poly].spec.degree))
             poly = i;
         if ((spec.kind === 'rbf' || spec.kind === 'multi-rbf') && rbf < 0)
             rbf = i;
@@ -33805,7 +34090,13 @@ function monomialCount(k, g) {
 }
 /** Knot counts 1 .. current + 4 (at most 100) of a spline, harmonics 1 .. current + 3 (at most 50) of a Fourier term; simplest first. */
 function countSettings(spec) {
-    const current = spec.kind === 'spline' ? (spec.knots.kind === 'list' ? spec.knots.values.length : spec.knots.count) : spec.kind === 'fourier' ? spec.harmonics : 1;
+    const current = spec.kind === 'spline'
+        ? spec.knots.kind === 'list'
+            ? spec.knots.values.length
+            : spec.knots.count
+        : spec.kind === 'fourier'
+            ? spec.harmonics
+            : 1;
     const top = spec.kind === 'spline' ? Math.min(100, current + 4) : Math.min(50, current + 3);
     return Array.from({ length: top }, (_, i) => ({ value: i + 1, current: i + 1 === current }));
 }
@@ -33986,7 +34277,16 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
                 // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) leaves a gap.
                 if (!(error instanceof errors/* InputError */.dz))
                     throw error;
-                curve.push({ setting: value, label, parameters: Number.NaN, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+                curve.push({
+                    setting: value,
+                    label,
+                    parameters: Number.NaN,
+                    cvRmse: Number.NaN,
+                    meanMse: Number.NaN,
+                    seMse: Number.NaN,
+                    current,
+                    failed: error.message,
+                });
                 continue;
             }
             try {
@@ -33999,7 +34299,16 @@ function sweepComplexity(descriptor, design, train, fit, options = {}) {
                 // A setting whose fit cannot be computed (e.g. columns that underflow) leaves a gap in the curve.
                 if (!(error instanceof RangeError))
                     throw error;
-                curve.push({ setting: value, label, parameters: d.p, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+                curve.push({
+                    setting: value,
+                    label,
+                    parameters: d.p,
+                    cvRmse: Number.NaN,
+                    meanMse: Number.NaN,
+                    seMse: Number.NaN,
+                    current,
+                    failed: error.message,
+                });
             }
         }
     }
@@ -35236,7 +35545,7 @@ function predictorAlong(design, coefficients, c, fixed) {
     const partial = (0,design_matrix/* createDesign */.x)(design.terms.filter((_, i) => varying[i]), false);
     const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
     return (xs) => {
-        const columns = partial.inputs.map((input) => (input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN)));
+        const columns = partial.inputs.map((input) => input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN));
         const out = (0,blocks/* predictRows */.tp)(partial, { inputs: columns, rows: xs.length }, sub);
         for (let i = 0; i < out.length; i++)
             out[i] += base;
@@ -35400,8 +35709,18 @@ function planSwing(design, train, options = {}) {
         segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
     }
     const maxCurves = options.maxCurves ?? SWING_DEFAULTS.maxCurves;
-    const maxCurvePoints = options.maxCurvePoints ?? Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
-    return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? SWING_DEFAULTS.margin, maxCurvePoints, maxCurves };
+    const maxCurvePoints = options.maxCurvePoints ??
+        Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
+    return {
+        band: [ylo, yhi],
+        medians,
+        grids,
+        segmentColumns,
+        segments,
+        margin: options.margin ?? SWING_DEFAULTS.margin,
+        maxCurvePoints,
+        maxCurves,
+    };
 }
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */
 function admittedRows(design, columns) {
@@ -35749,7 +36068,12 @@ function readInputs(cwd = process.cwd()) {
     // replaced by a link to a parent (or anywhere outside) is refused here, once.
     const workspace = (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_5__/* .realFolder */ .PX)(node_path__WEBPACK_IMPORTED_MODULE_3___default().resolve(env.GITHUB_WORKSPACE || cwd), { key: 'GITHUB_WORKSPACE', within: null });
     const named = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
-    const root = (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_5__/* .realFolder */ .PX)(node_path__WEBPACK_IMPORTED_MODULE_3___default().join(workspace, named), { key: 'working-directory', within: workspace, insideOnly: true, withinName: 'workspace' });
+    const root = (0,_repo_real_folder_js__WEBPACK_IMPORTED_MODULE_5__/* .realFolder */ .PX)(node_path__WEBPACK_IMPORTED_MODULE_3___default().join(workspace, named), {
+        key: 'working-directory',
+        within: workspace,
+        insideOnly: true,
+        withinName: 'workspace',
+    });
     const prefix = node_path__WEBPACK_IMPORTED_MODULE_3___default().relative(workspace, root).split((node_path__WEBPACK_IMPORTED_MODULE_3___default().sep)).join('/');
     const configValue = input('config');
     const config = insidePath('config', root, configValue, 'working directory');
@@ -36208,7 +36532,9 @@ function cvCurveChart(sweep, options) {
     }
     const yRange = extent(sweep.cv, sweep.train ?? []) ?? [0, 1];
     const yLog = yRange[0] > 0 && yRange[1] / yRange[0] >= 100;
-    const sy = yLog ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0]) : linearScale(pad(yRange, 0.08), [y1, y0]);
+    const sy = yLog
+        ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0])
+        : linearScale(pad(yRange, 0.08), [y1, y0]);
     const plotX = (v) => (v === null ? null : sweep.log && v <= 0 ? zeroAt : v);
     const body = [];
     const overlay = [];
@@ -36245,7 +36571,12 @@ function cvCurveChart(sweep, options) {
         if (c !== null && (best < 0 || c < sweep.cv[best]))
             best = i;
     });
-    const legend = [{ mark: `${legendLine(COLOURS.holdout)}<path d="M7 3L11 7L7 11L3 7Z" fill="#fff" stroke="${COLOURS.holdout}" stroke-width="1.4"/>`, label: 'cross-validated RMSE' }];
+    const legend = [
+        {
+            mark: `${legendLine(COLOURS.holdout)}<path d="M7 3L11 7L7 11L3 7Z" fill="#fff" stroke="${COLOURS.holdout}" stroke-width="1.4"/>`,
+            label: 'cross-validated RMSE',
+        },
+    ];
     if (sweep.train)
         legend.push({ mark: legendLine(COLOURS.train, DASHES.reference, 1.6), label: 'training RMSE' });
     if (sweep.chosen !== null)
@@ -36549,7 +36880,11 @@ function residualsChart(chart, options) {
     const sy = linearScale(pad([-m, m]), [y1, y0]);
     const a = marks('train', chart.train.fitted, chart.train.residual, sx, sy);
     const b = marks('holdout', chart.holdout.fitted, chart.holdout.residual, sx, sy);
-    const body = [`<line class="zero" x1="${x0}" y1="${px(sy(0))}" x2="${x1}" y2="${px(sy(0))}" stroke="${COLOURS.reference}" stroke-width="1.2"/>`, a.markup, b.markup].join('');
+    const body = [
+        `<line class="zero" x1="${x0}" y1="${px(sy(0))}" x2="${x1}" y2="${px(sy(0))}" stroke="${COLOURS.reference}" stroke-width="1.2"/>`,
+        a.markup,
+        b.markup,
+    ].join('');
     const label = (0,units/* axisLabel */.M)(chart.target);
     return frame_frame({
         id,
@@ -36659,10 +36994,10 @@ function overviewRow(m, i) {
 }
 /** The overview table, one piece per row. */
 function* overview(result) {
-    yield ('<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
+    yield '<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
         '<table><thead><tr><th>Status</th><th>Model</th><th class="num">Training rows</th><th class="num">Hold-out rows</th><th class="num">Parameters</th>' +
         '<th class="num">Hold-out RMSE</th><th class="num">Gap ratio</th><th class="num">Max std. coef.</th><th>Over a limit</th></tr></thead>' +
-        '<tbody>');
+        '<tbody>';
     for (let i = 0; i < result.models.length; i++)
         yield overviewRow(result.models[i], i);
     yield '</tbody></table></section>';
@@ -36671,7 +37006,9 @@ function checksTable(m) {
     const rows = m.checks.map((c) => {
         const title = (0,checks/* findCheck */.Sd)(c.id)?.title ?? c.id;
         const advice = c.advice ? ` <span class="advice">${(0,report_escape/* escapeHtml */.ZD)(c.advice)}</span>` : '';
-        const suggestion = c.suggestion ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>` : '';
+        const suggestion = c.suggestion
+            ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>`
+            : '';
         return (`<tr data-check="${(0,report_escape/* escapeHtml */.ZD)(c.id)}" data-status="${(0,report_escape/* escapeHtml */.ZD)(c.status)}"><td>${(0,report_escape/* escapeHtml */.ZD)(title)}<br><code class="muted">${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code></td><td>${badge(c.status)}</td>` +
             `<td class="num">${num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
             `<td class="finding">${(0,report_escape/* escapeHtml */.ZD)(c.message)}.${advice}${suggestion}</td></tr>`);
@@ -36964,7 +37301,9 @@ function sarifLog(result, options = {}) {
                 level: 'error',
                 message: { text: `${m.name}: could not be checked: ${m.error.message}` },
                 descriptor: { id: m.error.code },
-                locations: [{ physicalLocation: { artifactLocation: { uri: pathUri(prefix, file), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } }],
+                locations: [
+                    { physicalLocation: { artifactLocation: { uri: pathUri(prefix, file), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } },
+                ],
             });
             continue;
         }
@@ -36980,7 +37319,14 @@ function sarifLog(result, options = {}) {
                 ...(index === undefined ? {} : { ruleIndex: index }),
                 level,
                 message: { text: `${m.name}: ${c.message}.${advice}` },
-                locations: [{ physicalLocation: { artifactLocation: { uri: pathUri(prefix, m.descriptor), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } }],
+                locations: [
+                    {
+                        physicalLocation: {
+                            artifactLocation: { uri: pathUri(prefix, m.descriptor), uriBaseId: '%SRCROOT%' },
+                            ...(r ? { region: r } : {}),
+                        },
+                    },
+                ],
                 partialFingerprints: { 'fitgateFinding/v1': fingerprint(m.name, c.id) },
                 properties: {
                     model: m.name,
@@ -37053,13 +37399,21 @@ var safe_write = __nccwpck_require__(5475);
  */
 async function writeFileReports(result, files) {
     const failures = [];
-    const place = (name) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
+    const place = (name) => ({
+        option: `${files.optionPrefix ?? ''}${name}`,
+        within: files.within,
+        insideOnly: files.insideOnly ?? false,
+    });
     const attempt = (name, file, pieces) => {
         try {
             (0,safe_write/* writeFileSafely */.kv)(file, pieces(), place(name));
         }
         catch (error) {
-            failures.push({ option: place(name).option, refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC, message: (0,errors/* errorMessage */.gJ)(error) });
+            failures.push({
+                option: place(name).option,
+                refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC,
+                message: (0,errors/* errorMessage */.gJ)(error),
+            });
         }
     };
     if (files.html !== null)
@@ -37207,7 +37561,9 @@ function writeFileSafely(file, data, place, hooks = {}) {
     const folder = external_node_path_default().dirname(named);
     if (name === '' || folder === named)
         throw refuse(`${named} names no file; expected a file path`);
-    const failed = (error) => error instanceof errors/* InputError */.dz ? error : new errors/* InputError */.dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
+    const failed = (error) => error instanceof errors/* InputError */.dz
+        ? error
+        : new errors/* InputError */.dz(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
     // 1. The boundary that holds the path as written, and the real folder.
     const bases = place.within.filter((b) => (0,real_folder/* isInsideFolder */.zz)(b, folder)).sort((a, b) => b.length - a.length);
     const base = bases[0] ?? null;
@@ -37788,7 +38144,10 @@ const REFINE_MAX_CONDITION = Math.sqrt(1e-3 / Number.EPSILON);
 const REFINE_MIN_CONDITION = 100;
 /** True when a refinement pass changes `fit` ({@link REFINE_MIN_CONDITION} < kappa <= {@link REFINE_MAX_CONDITION}, full rank). */
 function refinementApplies(fit) {
-    return fit.coefficients.length > 0 && !fit.rankDeficient && fit.conditionNumberScaled > REFINE_MIN_CONDITION && fit.conditionNumberScaled <= REFINE_MAX_CONDITION;
+    return (fit.coefficients.length > 0 &&
+        !fit.rankDeficient &&
+        fit.conditionNumberScaled > REFINE_MIN_CONDITION &&
+        fit.conditionNumberScaled <= REFINE_MAX_CONDITION);
 }
 /**
  * One step of iterative refinement computed in a streaming pass over the data rows (the same
@@ -39321,7 +39680,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2499);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(5280);
 /* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(2766);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(4771);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(6387);
 /* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(5475);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(856);
@@ -39392,7 +39751,10 @@ async function suggestOnDiff(result, inputs, pr) {
     }
     const api = (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .createReviewApi */ .nQ)(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
     const repo = (0,_repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__/* .createFsRepository */ .E)(inputs.settings.root);
-    const source = { prefix: await (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .repositoryPrefix */ .Vk)(inputs.settings.root, inputs.prefix), read: async (file) => new TextDecoder().decode(await repo.read(file)) };
+    const source = {
+        prefix: await (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .repositoryPrefix */ .Vk)(inputs.settings.root, inputs.prefix),
+        read: async (file) => new TextDecoder().decode(await repo.read(file)),
+    };
     const outcome = await (0,_action_review_suggestions_js__WEBPACK_IMPORTED_MODULE_4__/* .reviewSuggestions */ .uT)(api, result, source, pr.headSha);
     if (outcome.kind === 'forbidden') {
         say('notice', `review suggestions could not be written (HTTP ${outcome.status}): the token may not write review comments on this pull request (they need pull-requests: write). The result is unchanged.`);
@@ -39416,7 +39778,11 @@ async function run() {
         if (inputs.token !== '')
             _actions_core__WEBPACK_IMPORTED_MODULE_0__/* .setSecret */ .Pq(inputs.token);
         prefix = inputs.prefix;
-        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_18__/* .pullRequestOf */ ._)({ eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '', payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload, repository: process.env.GITHUB_REPOSITORY });
+        const pr = (0,_action_event_js__WEBPACK_IMPORTED_MODULE_18__/* .pullRequestOf */ ._)({
+            eventName: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.eventName ?? '',
+            payload: _actions_github__WEBPACK_IMPORTED_MODULE_1__/* .context */ ._.payload,
+            repository: process.env.GITHUB_REPOSITORY,
+        });
         // The base commit first, so that the head run can compare with it.
         const baseOptions = pr?.baseSha ? await (0,_action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .evaluateBase */ .D0)(inputs.settings, pr.baseSha, { fetchHint: _action_base_commit_js__WEBPACK_IMPORTED_MODULE_2__/* .ACTION_FETCH_HINT */ .MZ }) : {};
         const scale = { shard: inputs.shard, jobs: (0,_run_pool_js__WEBPACK_IMPORTED_MODULE_8__/* .defaultJobs */ .yV)(), root: inputs.settings.root };
@@ -39438,7 +39804,13 @@ async function run() {
             else
                 say('warning', `could not write the JSON report: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_6__/* .errorMessage */ .gJ)(error)}`);
         }
-        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__/* .writeFileReports */ .n)(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn, within: [inputs.workspace], insideOnly: true });
+        const files = await (0,_entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__/* .writeFileReports */ .n)(result, {
+            ...inputs.files,
+            sarifPrefix: prefix,
+            failOn: inputs.settings.failOn,
+            within: [inputs.workspace],
+            insideOnly: true,
+        });
         for (const failure of files) {
             if (failure.refused)
                 refused.push(failure.message);
@@ -39886,7 +40258,12 @@ function createGitRepository(options) {
         listing ??= runGit(cwd, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit], 1024 * 1024 * 1024).then((out) => parseTree(out, prefix));
         return listing;
     };
-    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
+    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, {
+        file: where.file ?? file,
+        line: where.line,
+        column: where.column,
+        key: where.key,
+    });
     const missing = (file) => new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${label}; expected an existing file`, { file });
     /**
      * Follows links component by component inside the tree. Returns the final path and its entry
@@ -40088,17 +40465,29 @@ function patternProblem(pattern) {
     if (p.includes('\u0000'))
         return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p)) {
-        return { kind: 'outside', message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root`,
+        };
     }
     if (p.split(/[/{},()|]/).some((piece) => piece === '..')) {
-        return { kind: 'outside', message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)`,
+        };
     }
     const alternatives = expandBraces(p, MAX_ALTERNATIVES);
     if (alternatives === null) {
-        return { kind: 'complex', message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)` };
+        return {
+            kind: 'complex',
+            message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)`,
+        };
     }
     if (alternatives.some((a) => a.startsWith('/') || /^[A-Za-z]:/.test(a))) {
-        return { kind: 'outside', message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root`,
+        };
     }
     return null;
 }
@@ -40340,7 +40729,10 @@ function compilePatterns(patterns) {
             throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(problem.kind === 'outside' ? _repo_path_js__WEBPACK_IMPORTED_MODULE_1__/* .PATH_OUTSIDE */ .oE : GLOB_TOO_COMPLEX, problem.message, {});
         const text = pattern.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
         for (const alt of expandBraces(text) ?? []) {
-            const parts = alt.replace(/^(\.\/)+/, '').split('/').filter((s) => s !== '' && s !== '.');
+            const parts = alt
+                .replace(/^(\.\/)+/, '')
+                .split('/')
+                .filter((s) => s !== '' && s !== '.');
             // A pattern ending with `/` names folders, and a folder is never a descriptor: an empty
             // last segment matches no name.
             const segments = parts.map(compileSegment);
@@ -40447,7 +40839,11 @@ function realFolder(named, options) {
     }
     catch (error) {
         const code = error.code ?? String(error);
-        const why = code === 'ELOOP' ? 'goes round a loop of symbolic links' : code === 'ENOENT' || code === 'ENOTDIR' ? 'does not exist' : `cannot be read (${code})`;
+        const why = code === 'ELOOP'
+            ? 'goes round a loop of symbolic links'
+            : code === 'ENOENT' || code === 'ENOTDIR'
+                ? 'does not exist'
+                : `cannot be read (${code})`;
         throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(FOLDER_REFUSED, `${named} ${why}; expected an existing folder`, where);
     }
     if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.statSync)(real).isDirectory())
@@ -40810,7 +41206,9 @@ function escapeMarkdown(text) {
  * cursor moves) are shown as `\u001b` style escapes; line breaks become spaces.
  */
 function escapeTerminal(text) {
-    return text.replace(/\r?\n|\r/g, ' ').replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+    return text
+        .replace(/\r?\n|\r/g, ' ')
+        .replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
 /**
  * XML 1.0 text and attribute values (JUnit): & < > " ' become entities; tab, line feed and
@@ -40927,7 +41325,9 @@ function neutraliseJson(json) {
  * @param max longest result, in characters; default {@link MAX_SERVER_TEXT}
  */
 function quoteServerText(text, max = MAX_SERVER_TEXT) {
-    const visible = (0,_escape_js__WEBPACK_IMPORTED_MODULE_0__/* .escapeTerminal */ .en)(text.replace(LINE_BREAK, ' ')).replace(/\p{Cf}/gu, codeEscape).replace(/\p{Cs}/gu, '\ufffd');
+    const visible = (0,_escape_js__WEBPACK_IMPORTED_MODULE_0__/* .escapeTerminal */ .en)(text.replace(LINE_BREAK, ' '))
+        .replace(/\p{Cf}/gu, codeEscape)
+        .replace(/\p{Cs}/gu, '\ufffd');
     const chars = [...neutraliseLogLine(visible)];
     return chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : chars.join('');
 }
@@ -40971,7 +41371,11 @@ var units = __nccwpck_require__(3332);
 /** A number for a Mermaid series: 4 significant digits, plain decimal notation. */
 function value(v) {
     const r = Number(v.toPrecision(4));
-    return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r)))))) : String(r);
+    return Object.is(r, -0)
+        ? '0'
+        : String(r).includes('e')
+            ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r))))))
+            : String(r);
 }
 /** Indices of at most `max` evenly spaced entries of a list of `n`, first and last kept. */
 function evenly(n, max) {
@@ -41197,7 +41601,9 @@ function formatMarkdown(result, options = {}) {
         const tableBudget = bytes(out) + Math.max(left / 2, left - detailBytes);
         let size = bytes(out) + bytes(tableHead);
         const keep = new Set();
-        const order = result.models.map((_, i) => i).sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
+        const order = result.models
+            .map((_, i) => i)
+            .sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
         for (const i of order) {
             if (size + bytes(rows[i]) > tableBudget)
                 break;
@@ -41262,17 +41668,60 @@ function formatComment(result) {
  */
 /** Unit suffixes (lower case, after the last `_`) and how they are shown. Common practice in data files. */
 const UNITS = {
-    mm: 'mm', cm: 'cm', m: 'm', km: 'km', in: 'in', ft: 'ft',
-    mg: 'mg', g: 'g', kg: 'kg', t: 't', lb: 'lb',
-    ml: 'mL', l: 'L', m3: 'm³',
-    ms: 'ms', s: 's', sec: 's', min: 'min', h: 'h', hr: 'h', hours: 'h', days: 'days', d: 'd',
-    c: '°C', degc: '°C', f: '°F', degf: '°F', k: 'K',
-    pct: '%', percent: '%', ppm: 'ppm', ppb: 'ppb',
-    pa: 'Pa', kpa: 'kPa', mpa: 'MPa', bar: 'bar', psi: 'psi',
-    w: 'W', kw: 'kW', mw: 'MW', kwh: 'kWh', wh: 'Wh', j: 'J', kj: 'kJ',
-    v: 'V', a: 'A', hz: 'Hz', rpm: 'rpm',
-    usd: 'USD', eur: 'EUR', gbp: 'GBP',
-    mps: 'm/s', kmh: 'km/h', lpm: 'L/min',
+    mm: 'mm',
+    cm: 'cm',
+    m: 'm',
+    km: 'km',
+    in: 'in',
+    ft: 'ft',
+    mg: 'mg',
+    g: 'g',
+    kg: 'kg',
+    t: 't',
+    lb: 'lb',
+    ml: 'mL',
+    l: 'L',
+    m3: 'm³',
+    ms: 'ms',
+    s: 's',
+    sec: 's',
+    min: 'min',
+    h: 'h',
+    hr: 'h',
+    hours: 'h',
+    days: 'days',
+    d: 'd',
+    c: '°C',
+    degc: '°C',
+    f: '°F',
+    degf: '°F',
+    k: 'K',
+    pct: '%',
+    percent: '%',
+    ppm: 'ppm',
+    ppb: 'ppb',
+    pa: 'Pa',
+    kpa: 'kPa',
+    mpa: 'MPa',
+    bar: 'bar',
+    psi: 'psi',
+    w: 'W',
+    kw: 'kW',
+    mw: 'MW',
+    kwh: 'kWh',
+    wh: 'Wh',
+    j: 'J',
+    kj: 'kJ',
+    v: 'V',
+    a: 'A',
+    hz: 'Hz',
+    rpm: 'rpm',
+    usd: 'USD',
+    eur: 'EUR',
+    gbp: 'GBP',
+    mps: 'm/s',
+    kmh: 'km/h',
+    lpm: 'L/min',
 };
 /** The unit a column name ends in (`depth_m` -> `m`), or null. */
 function unitOf(column) {
@@ -41614,7 +42063,9 @@ function compareWithBase(metrics, match, commit) {
     return {
         status: renamed ? 'renamed' : 'compared',
         commit,
-        ...(renamed ? { previous: { name: baseline.name, descriptor: baseline.descriptor, matched_by: match.by === 'data' ? 'data' : 'descriptor' } } : {}),
+        ...(renamed
+            ? { previous: { name: baseline.name, descriptor: baseline.descriptor, matched_by: match.by === 'data' ? 'data' : 'descriptor' } }
+            : {}),
         holdout_rmse: b ? b.holdout_rmse : null,
         gap_ratio: b ? b.gap_ratio : null,
         holdout_rmse_change: rmseChange === null ? null : (0,_result_result_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonNumber */ .qj)(rmseChange),
@@ -41625,7 +42076,7 @@ function compareWithBase(metrics, match, commit) {
 
 /***/ }),
 
-/***/ 4771:
+/***/ 6387:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -41676,7 +42127,12 @@ function explicitBounds(spec) {
     if (!('warn_below' in spec || 'fail_below' in spec || 'warn_above' in spec || 'fail_above' in spec))
         return null;
     const s = spec;
-    return { warnBelow: s.warn_below ?? null, failBelow: s.fail_below ?? null, warnAbove: s.warn_above ?? null, failAbove: s.fail_above ?? null };
+    return {
+        warnBelow: s.warn_below ?? null,
+        failBelow: s.fail_below ?? null,
+        warnAbove: s.warn_above ?? null,
+        failAbove: s.fail_above ?? null,
+    };
 }
 /**
  * Why a spec's bounds are out of order, or null when they are in order: a ceiling's warn at most
@@ -41718,7 +42174,9 @@ function toLimit(spec, direction, source, line) {
         return { ...none, off: true, source, line };
     if (typeof spec === 'number') {
         assertThreshold(spec);
-        return direction === 'above' ? { ...none, fail: spec, off: false, source, line } : { ...none, failBelow: spec, off: false, source, line };
+        return direction === 'above'
+            ? { ...none, fail: spec, off: false, source, line }
+            : { ...none, failBelow: spec, off: false, source, line };
     }
     if (spec === null || typeof spec !== 'object')
         throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
@@ -41732,7 +42190,10 @@ function toLimit(spec, direction, source, line) {
     }
     else {
         const { warn = null, fail = null } = spec;
-        limit = direction === 'above' ? { ...none, warn, fail, off: false, source, line } : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
+        limit =
+            direction === 'above'
+                ? { ...none, warn, fail, off: false, source, line }
+                : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
     }
     const bounds = [limit.warn, limit.fail, limit.warnBelow, limit.failBelow].filter((x) => x !== null);
     if (bounds.length === 0)
@@ -41910,7 +42371,9 @@ function locate(doc, path, pointAt) {
 }
 /** Replaces each failed oneOf/anyOf and its branch errors by the errors of the branch the user meant, or one "expected one of" error. */
 function resolveAlternatives(errors) {
-    const alternatives = errors.filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf').sort((a, b) => a.schemaPath.length - b.schemaPath.length);
+    const alternatives = errors
+        .filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf')
+        .sort((a, b) => a.schemaPath.length - b.schemaPath.length);
     if (alternatives.length === 0)
         return errors;
     const outer = alternatives[0];
@@ -42013,7 +42476,9 @@ function toIssue(e, root) {
         case 'enum':
             if (e.propertyName !== undefined)
                 return []; // reported by propertyNames
-            return [{ path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` }];
+            return [
+                { path, pointAt: 'value', message: `expected one of: ${params.allowedValues.map(String).join(', ')}, ${got}` },
+            ];
         case 'const':
             return [{ path, pointAt: 'value', message: `expected \`${(0,core_errors/* clip */.$Q)(String(params.allowedValue))}\`, ${got}` }];
         case 'minimum':
@@ -42024,35 +42489,69 @@ function toIssue(e, root) {
         case 'multipleOf':
             return [{ path, pointAt: 'value', message: `expected a multiple of ${String(params.multipleOf)}, ${got}` }];
         case 'minLength':
-            return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}` }];
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}`,
+                },
+            ];
         case 'maxLength':
-            return [{ path, pointAt: 'value', message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters` }];
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters`,
+                },
+            ];
         case 'pattern': {
             const pattern = String(params.pattern);
             return [{ path, pointAt: 'value', message: `expected ${PATTERN_WORDS[pattern] ?? `text matching ${pattern}`}, ${got}` }];
         }
         case 'minItems':
-            return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}` }];
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}`,
+                },
+            ];
         case 'maxItems':
-            return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
+            return [
+                {
+                    path,
+                    pointAt: 'value',
+                    message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items`,
+                },
+            ];
         case 'required': {
             const missing = String(params.missingProperty);
             // A key present but not allowed that is a near miss of the missing one is the likely typo.
             const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
             const typo = present.find((k) => nearestWord(k, [missing]) === missing);
             const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${(0,core_errors/* quoteValue */.cl)(typo, 40)}?)` : '';
-            return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+            return [
+                {
+                    path: [...path, missing],
+                    pointAt: 'parent',
+                    message: `missing key \`${(0,core_errors/* clip */.$Q)(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}`,
+                },
+            ];
         }
         case 'additionalProperties': {
             const extra = String(params.additionalProperty);
             const near = nearestWord(extra, keys);
             const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
-            return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`${hint}; expected one of: ${keys.join(', ')}` }];
+            return [
+                { path: [...path, extra], pointAt: 'key', message: `unknown key \`${(0,core_errors/* clip */.$Q)(extra)}\`${hint}; expected one of: ${keys.join(', ')}` },
+            ];
         }
         case 'propertyNames': {
             const name = String(params.propertyName);
             const what = isTerm ? 'term kind' : 'key';
-            return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,core_errors/* clip */.$Q)(name)}\`; expected one of: ${kinds.join(', ')}` }];
+            return [
+                { path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${(0,core_errors/* clip */.$Q)(name)}\`; expected one of: ${kinds.join(', ')}` },
+            ];
         }
         case 'minProperties':
         case 'maxProperties': {
@@ -42923,7 +43422,7 @@ function validate52(data, { instancePath = "", parentData, parentDataProperty, r
 }
 validate52.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
 const validateDescriptor = validate75;
-const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "holdout", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder.", "type": "string", "minLength": 1 }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.", "type": "integer", "minimum": 2, "maximum": 50, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
+const schema22 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "$id": "urn:fitgate:schema:descriptor:1", "title": "fitgate model descriptor (*.model.yml)", "description": "One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.", "type": "object", "required": ["version", "name", "data", "terms"], "additionalProperties": false, "properties": { "version": { "description": "Version of this file format. Always 1.", "const": 1 }, "name": { "description": "Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.", "type": "string", "minLength": 1, "maxLength": 100, "pattern": "^[A-Za-z0-9._-]+$" }, "task": { "description": "Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).", "enum": ["regression", "classification"], "default": "regression" }, "data": { "description": "The committed data: CSV paths relative to this file (never outside the repository) and the target column.", "type": "object", "required": ["train", "target"], "additionalProperties": false, "properties": { "train": { "description": "Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows).", "type": "string", "minLength": 1 }, "holdout": { "description": "Hold-out CSV, relative to this descriptor's folder. Required unless `split` is given (then not allowed).", "type": "string", "minLength": 1 }, "separator": { "description": "Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.", "enum": ["auto", ",", ";", "\t"], "default": "auto" }, "decimal": { "description": "Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).", "enum": [".", ","], "default": "." }, "missing": { "description": "What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.", "enum": ["error", "drop"], "default": "error" }, "split": { "description": "One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.", "type": "object", "required": ["column", "train", "holdout"], "additionalProperties": false, "properties": { "column": { "description": "Header name of the split column.", "type": "string", "minLength": 1 }, "train": { "description": "Label of the training rows.", "type": "string", "minLength": 1 }, "holdout": { "description": "Label of the hold-out rows (different from `train`).", "type": "string", "minLength": 1 } } }, "target": { "description": "Name of the column to predict.", "type": "string", "minLength": 1 }, "positive": { "description": "Classification: the label of the positive class when the target holds two text labels (required then).", "type": "string", "minLength": 1 }, "weight": { "description": "Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.", "type": "string", "minLength": 1 }, "sigma": { "description": "Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.", "type": "string", "minLength": 1 } } }, "terms": { "description": "The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.", "type": "array", "minItems": 1, "items": { "$ref": "#/$defs/term", "description": "One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`." } }, "fit": { "description": "How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.", "type": "object", "additionalProperties": false, "properties": { "intercept": { "description": "Add a column of ones first (not penalised by `ridge`).", "type": "boolean", "default": true }, "refit": { "description": "Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).", "type": "boolean", "default": true }, "ridge": { "description": "L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.", "type": "number", "minimum": 0, "default": 0 }, "folds": { "description": "k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.", "type": "integer", "minimum": 2, "maximum": 50, "default": 5 }, "fold_order": { "description": "How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).", "enum": ["shuffled", "blocks"], "default": "shuffled" }, "seed": { "description": "Seed of the fold shuffle and of any other random step, so runs repeat exactly.", "type": "integer", "minimum": 0, "maximum": 4294967295, "default": 1 }, "parameter_count": { "description": "What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).", "enum": ["columns", "effective"], "default": "columns" }, "threshold": { "description": "Classification: a row is predicted positive when its probability is at least this (for accuracy).", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.5 } } }, "coefficients": { "description": "The shipped coefficients: intercept first (when there is one), then each term's columns in order.", "type": "array", "minItems": 1, "items": { "description": "One coefficient (a finite number).", "type": "number" } }, "limits": { "$ref": "#/$defs/limits", "description": "This model's own limits; they win over the settings file key by key." } }, "$defs": { "term": { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } }, "centers": { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] }, "limits": { "title": "limits", "description": "Limits by key. Each is a number (fail above it), { warn, fail } or `off`.", "type": "object", "additionalProperties": false, "properties": { "gap_ratio": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE divided by training RMSE.", "default": 1.5 }, "params_per_sample": { "$ref": "#/$defs/limit", "description": "Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).", "default": 0.1 }, "coefficient": { "$ref": "#/$defs/limit", "description": "Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.", "default": 25 }, "base_change": { "$ref": "#/$defs/limit", "description": "Relative change of the hold-out RMSE against the same model on the base branch.", "default": "off" }, "cv_ratio": { "$ref": "#/$defs/limit", "description": "Pooled k-fold cross-validation RMSE divided by training RMSE.", "default": "off" }, "swing": { "$ref": "#/$defs/limit", "description": "How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.", "default": { "warn": 0.25, "fail": 0.5 } }, "swing_beyond": { "$ref": "#/$defs/limit", "description": "Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).", "default": { "warn": 1 } }, "swing_spikes": { "$ref": "#/$defs/limit", "description": "Total variation of the predictions between the training samples divided by the training targets' own total variation.", "default": { "warn": 1.5, "fail": 2 } }, "leakage": { "$ref": "#/$defs/limit", "description": "Hold-out rows that also appear in the training data (the default 0 fails when there is any).", "default": 0 }, "reproducibility": { "$ref": "#/$defs/limit", "description": "Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.", "default": 0.01 }, "condition": { "$ref": "#/$defs/limit", "description": "2-norm condition number of the column-scaled design matrix.", "default": { "warn": 100000000 } }, "complexity": { "$ref": "#/$defs/limit", "description": "Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.", "default": { "warn": 1.5 } }, "holdout_r2": { "$ref": "#/$defs/limit", "description": "Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.", "default": "off" }, "holdout_rmse": { "$ref": "#/$defs/limit", "description": "Hold-out RMSE in the target's units.", "default": "off" }, "holdout_mae": { "$ref": "#/$defs/limit", "description": "Hold-out mean absolute error in the target's units.", "default": "off" }, "chi_square": { "$ref": "#/$defs/limit", "description": "Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).", "default": { "warn_below": 0.5, "warn_above": 2 } }, "separation": { "$ref": "#/$defs/limit", "description": "Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.", "default": { "warn": 0, "fail": 1 } }, "events_per_parameter": { "$ref": "#/$defs/limit", "description": "Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.", "default": 10 }, "calibration_slope": { "$ref": "#/$defs/limit", "description": "Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.", "default": { "warn": 0.8, "fail": 0.6 } } } }, "limit": { "title": "limit", "description": "A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).", "oneOf": [{ "title": "a number >= 0 (fail beyond it)", "description": "Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, { "title": "{ warn, fail }", "description": "Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn": { "description": "Warn when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 }, "fail": { "description": "Fail when the figure is beyond this number (above a ceiling, below a floor).", "type": "number", "minimum": 0 } } }, { "title": "{ warn_below, fail_below, warn_above, fail_above }", "description": "Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.", "type": "object", "minProperties": 1, "additionalProperties": false, "properties": { "warn_below": { "description": "Warn when the figure is below this number.", "type": "number" }, "fail_below": { "description": "Fail when the figure is below this number.", "type": "number" }, "warn_above": { "description": "Warn when the figure is above this number.", "type": "number" }, "fail_above": { "description": "Fail when the figure is above this number.", "type": "number" } } }, { "title": "`off`", "description": "Skip the check.", "const": "off" }] } } };
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = { "title": "term", "description": "One term of the design: a mapping with exactly one key, the term kind.", "type": "object", "minProperties": 1, "maxProperties": 1, "propertyNames": { "enum": ["linear", "polynomial", "rbf", "fourier", "spline", "category"] }, "properties": { "linear": { "description": "The columns as they are: one design column per listed data column.", "type": "array", "minItems": 1, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }, "polynomial": { "description": "Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.", "type": "object", "required": ["of", "degree"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns for every monomial over them.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "degree": { "description": "Highest power, 1 to 30.", "type": "integer", "minimum": 1, "maximum": 30 }, "shift": { "description": "Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.", "oneOf": [{ "type": "number" }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The shift of one input.", "type": "number" } }] }, "scale": { "description": "Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.", "oneOf": [{ "type": "number", "exclusiveMinimum": 0 }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The scale of one input, > 0.", "type": "number", "exclusiveMinimum": 0 } }] }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "rbf": { "description": "Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.", "type": "object", "required": ["of", "centers", "width"], "additionalProperties": false, "properties": { "of": { "description": "The data column x, or a list of 2 to 10 distinct columns.", "oneOf": [{ "type": "string", "minLength": 1 }, { "type": "array", "minItems": 2, "maxItems": 10, "uniqueItems": true, "items": { "description": "A data column name.", "type": "string", "minLength": 1 } }] }, "centers": { "description": "The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.", "oneOf": [{ "$ref": "#/$defs/centers" }, { "type": "array", "minItems": 1, "maxItems": 10000, "items": { "description": "One centre: a value per input, in the order of `of`.", "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The centre's value of one input.", "type": "number" } } }, { "type": "array", "minItems": 2, "maxItems": 10, "items": { "description": "The grid along one input: count evenly spaced values from `from` to `to`.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First value.", "type": "number" }, "to": { "description": "Last value.", "type": "number" }, "count": { "description": "Values along this input, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } } }] }, "width": { "description": "Width (standard deviation) of each Gaussian, > 0.", "type": "number", "exclusiveMinimum": 0 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "fourier": { "description": "Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.", "type": "object", "required": ["of", "period", "harmonics"], "additionalProperties": false, "properties": { "of": { "description": "The data column x (e.g. a day number).", "type": "string", "minLength": 1 }, "period": { "description": "Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).", "type": "number", "exclusiveMinimum": 0 }, "harmonics": { "description": "Number of sin/cos pairs, 1 to 50.", "type": "integer", "minimum": 1, "maximum": 50 }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "spline": { "description": "A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).", "type": "object", "required": ["of", "knots"], "additionalProperties": false, "properties": { "of": { "description": "The data column x.", "type": "string", "minLength": 1 }, "knots": { "description": "Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).", "oneOf": [{ "type": "array", "minItems": 1, "maxItems": 100, "items": { "type": "number", "description": "An interior knot, in the units of x." } }, { "type": "object", "required": ["count"], "additionalProperties": false, "properties": { "count": { "description": "Number of interior knots, 1 to 100.", "type": "integer", "minimum": 1, "maximum": 100 } } }] }, "degree": { "description": "Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).", "type": "integer", "minimum": 1, "maximum": 5, "default": 3 }, "natural": { "description": "Natural cubic splines: linear beyond the boundary knots. Default false.", "type": "boolean", "default": false }, "transform": { "description": "Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.", "enum": ["log", "log1p", "sqrt", "standardise"] } } }, "category": { "description": "Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.", "type": "object", "required": ["of"], "additionalProperties": false, "properties": { "of": { "description": "The data column; its cells are read as text (levels), even when they look like numbers.", "type": "string", "minLength": 1 }, "reference": { "description": "The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).", "oneOf": [{ "type": "string" }, { "type": "number" }] }, "unseen": { "description": "A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).", "enum": ["error", "zero"], "default": "error" } } } } };
 const schema24 = { "title": "centers", "description": "Centres of Gaussian radial basis columns.", "oneOf": [{ "title": "a list of numbers", "description": "The centres as listed.", "type": "array", "minItems": 1, "items": { "description": "One centre.", "type": "number" } }, { "title": "{ from, to, count }", "description": "`count` evenly spaced centres from `from` to `to`, both included.", "type": "object", "required": ["from", "to", "count"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Last centre (>= from).", "type": "number" }, "count": { "description": "Number of centres, 1 to 10000.", "type": "integer", "minimum": 1, "maximum": 10000 } } }, { "title": "{ from, to, step }", "description": "Centres from `from` every `step` up to `to` (included when it falls on a step).", "type": "object", "required": ["from", "to", "step"], "additionalProperties": false, "properties": { "from": { "description": "First centre.", "type": "number" }, "to": { "description": "Upper end (>= from).", "type": "number" }, "step": { "description": "Distance between centres, > 0 (at most 10000 centres).", "type": "number", "exclusiveMinimum": 0 } } }, { "title": "`at-samples`", "description": "One centre at each training row's value of x.", "const": "at-samples" }] };
@@ -45595,8 +46094,8 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     errors++;
                 }
-                if (data3.holdout === undefined) {
-                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
+                if (data3.target === undefined) {
+                    const err12 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
                     if (vErrors === null) {
                         vErrors = [err12];
                     }
@@ -45605,24 +46104,14 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     }
                     errors++;
                 }
-                if (data3.target === undefined) {
-                    const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/required", keyword: "required", params: { missingProperty: "target" }, message: "must have required property '" + "target" + "'", schema: schema22.properties.data.required, parentSchema: schema22.properties.data, data: data3 };
-                    if (vErrors === null) {
-                        vErrors = [err13];
-                    }
-                    else {
-                        vErrors.push(err13);
-                    }
-                    errors++;
-                }
                 for (const key1 in data3) {
-                    if (!((((((key1 === "train") || (key1 === "holdout")) || (key1 === "target")) || (key1 === "positive")) || (key1 === "weight")) || (key1 === "sigma"))) {
-                        const err14 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
+                    if (!(func2.call(schema22.properties.data.properties, key1))) {
+                        const err13 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data, data: data3 };
                         if (vErrors === null) {
-                            vErrors = [err14];
+                            vErrors = [err13];
                         }
                         else {
-                            vErrors.push(err14);
+                            vErrors.push(err13);
                         }
                         errors++;
                     }
@@ -45631,23 +46120,23 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     let data4 = data3.train;
                     if (typeof data4 === "string") {
                         if (func1(data4) < 1) {
-                            const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train, data: data4 };
+                            const err14 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.train, data: data4 };
                             if (vErrors === null) {
-                                vErrors = [err15];
+                                vErrors = [err14];
                             }
                             else {
-                                vErrors.push(err15);
+                                vErrors.push(err14);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err16 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.type, parentSchema: schema22.properties.data.properties.train, data: data4 };
+                        const err15 = { instancePath: instancePath + "/data/train", schemaPath: "#/properties/data/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.train.type, parentSchema: schema22.properties.data.properties.train, data: data4 };
                         if (vErrors === null) {
-                            vErrors = [err16];
+                            vErrors = [err15];
                         }
                         else {
-                            vErrors.push(err16);
+                            vErrors.push(err15);
                         }
                         errors++;
                     }
@@ -45656,18 +46145,31 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                     let data5 = data3.holdout;
                     if (typeof data5 === "string") {
                         if (func1(data5) < 1) {
-                            const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
+                            const err16 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
                             if (vErrors === null) {
-                                vErrors = [err17];
+                                vErrors = [err16];
                             }
                             else {
-                                vErrors.push(err17);
+                                vErrors.push(err16);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err18 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.type, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
+                        const err17 = { instancePath: instancePath + "/data/holdout", schemaPath: "#/properties/data/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.holdout.type, parentSchema: schema22.properties.data.properties.holdout, data: data5 };
+                        if (vErrors === null) {
+                            vErrors = [err17];
+                        }
+                        else {
+                            vErrors.push(err17);
+                        }
+                        errors++;
+                    }
+                }
+                if (data3.separator !== undefined) {
+                    let data6 = data3.separator;
+                    if (!((((data6 === "auto") || (data6 === ",")) || (data6 === ";")) || (data6 === "\t"))) {
+                        const err18 = { instancePath: instancePath + "/data/separator", schemaPath: "#/properties/data/properties/separator/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.separator.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.separator.enum, parentSchema: schema22.properties.data.properties.separator, data: data6 };
                         if (vErrors === null) {
                             vErrors = [err18];
                         }
@@ -45677,22 +46179,23 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data3.target !== undefined) {
-                    let data6 = data3.target;
-                    if (typeof data6 === "string") {
-                        if (func1(data6) < 1) {
-                            const err19 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data6 };
-                            if (vErrors === null) {
-                                vErrors = [err19];
-                            }
-                            else {
-                                vErrors.push(err19);
-                            }
-                            errors++;
+                if (data3.decimal !== undefined) {
+                    let data7 = data3.decimal;
+                    if (!((data7 === ".") || (data7 === ","))) {
+                        const err19 = { instancePath: instancePath + "/data/decimal", schemaPath: "#/properties/data/properties/decimal/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.decimal.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.decimal.enum, parentSchema: schema22.properties.data.properties.decimal, data: data7 };
+                        if (vErrors === null) {
+                            vErrors = [err19];
                         }
+                        else {
+                            vErrors.push(err19);
+                        }
+                        errors++;
                     }
-                    else {
-                        const err20 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data6 };
+                }
+                if (data3.missing !== undefined) {
+                    let data8 = data3.missing;
+                    if (!((data8 === "error") || (data8 === "drop"))) {
+                        const err20 = { instancePath: instancePath + "/data/missing", schemaPath: "#/properties/data/properties/missing/enum", keyword: "enum", params: { allowedValues: schema22.properties.data.properties.missing.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.data.properties.missing.enum, parentSchema: schema22.properties.data.properties.missing, data: data8 };
                         if (vErrors === null) {
                             vErrors = [err20];
                         }
@@ -45702,11 +46205,11 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data3.positive !== undefined) {
-                    let data7 = data3.positive;
-                    if (typeof data7 === "string") {
-                        if (func1(data7) < 1) {
-                            const err21 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data7 };
+                if (data3.split !== undefined) {
+                    let data9 = data3.split;
+                    if (data9 && typeof data9 == "object" && !Array.isArray(data9)) {
+                        if (data9.column === undefined) {
+                            const err21 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "column" }, message: "must have required property '" + "column" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data9 };
                             if (vErrors === null) {
                                 vErrors = [err21];
                             }
@@ -45715,23 +46218,18 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                    }
-                    else {
-                        const err22 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data7 };
-                        if (vErrors === null) {
-                            vErrors = [err22];
+                        if (data9.train === undefined) {
+                            const err22 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "train" }, message: "must have required property '" + "train" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data9 };
+                            if (vErrors === null) {
+                                vErrors = [err22];
+                            }
+                            else {
+                                vErrors.push(err22);
+                            }
+                            errors++;
                         }
-                        else {
-                            vErrors.push(err22);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.weight !== undefined) {
-                    let data8 = data3.weight;
-                    if (typeof data8 === "string") {
-                        if (func1(data8) < 1) {
-                            const err23 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.weight, data: data8 };
+                        if (data9.holdout === undefined) {
+                            const err23 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/required", keyword: "required", params: { missingProperty: "holdout" }, message: "must have required property '" + "holdout" + "'", schema: schema22.properties.data.properties.split.required, parentSchema: schema22.properties.data.properties.split, data: data9 };
                             if (vErrors === null) {
                                 vErrors = [err23];
                             }
@@ -45740,106 +46238,96 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                    }
-                    else {
-                        const err24 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.weight.type, parentSchema: schema22.properties.data.properties.weight, data: data8 };
-                        if (vErrors === null) {
-                            vErrors = [err24];
+                        for (const key2 in data9) {
+                            if (!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))) {
+                                const err24 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.data.properties.split, data: data9 };
+                                if (vErrors === null) {
+                                    vErrors = [err24];
+                                }
+                                else {
+                                    vErrors.push(err24);
+                                }
+                                errors++;
+                            }
                         }
-                        else {
-                            vErrors.push(err24);
-                        }
-                        errors++;
-                    }
-                }
-                if (data3.sigma !== undefined) {
-                    let data9 = data3.sigma;
-                    if (typeof data9 === "string") {
-                        if (func1(data9) < 1) {
-                            const err25 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.sigma, data: data9 };
-                            if (vErrors === null) {
-                                vErrors = [err25];
+                        if (data9.column !== undefined) {
+                            let data10 = data9.column;
+                            if (typeof data10 === "string") {
+                                if (func1(data10) < 1) {
+                                    const err25 = { instancePath: instancePath + "/data/split/column", schemaPath: "#/properties/data/properties/split/properties/column/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.column, data: data10 };
+                                    if (vErrors === null) {
+                                        vErrors = [err25];
+                                    }
+                                    else {
+                                        vErrors.push(err25);
+                                    }
+                                    errors++;
+                                }
                             }
                             else {
-                                vErrors.push(err25);
+                                const err26 = { instancePath: instancePath + "/data/split/column", schemaPath: "#/properties/data/properties/split/properties/column/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.column.type, parentSchema: schema22.properties.data.properties.split.properties.column, data: data10 };
+                                if (vErrors === null) {
+                                    vErrors = [err26];
+                                }
+                                else {
+                                    vErrors.push(err26);
+                                }
+                                errors++;
                             }
-                            errors++;
+                        }
+                        if (data9.train !== undefined) {
+                            let data11 = data9.train;
+                            if (typeof data11 === "string") {
+                                if (func1(data11) < 1) {
+                                    const err27 = { instancePath: instancePath + "/data/split/train", schemaPath: "#/properties/data/properties/split/properties/train/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.train, data: data11 };
+                                    if (vErrors === null) {
+                                        vErrors = [err27];
+                                    }
+                                    else {
+                                        vErrors.push(err27);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err28 = { instancePath: instancePath + "/data/split/train", schemaPath: "#/properties/data/properties/split/properties/train/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.train.type, parentSchema: schema22.properties.data.properties.split.properties.train, data: data11 };
+                                if (vErrors === null) {
+                                    vErrors = [err28];
+                                }
+                                else {
+                                    vErrors.push(err28);
+                                }
+                                errors++;
+                            }
+                        }
+                        if (data9.holdout !== undefined) {
+                            let data12 = data9.holdout;
+                            if (typeof data12 === "string") {
+                                if (func1(data12) < 1) {
+                                    const err29 = { instancePath: instancePath + "/data/split/holdout", schemaPath: "#/properties/data/properties/split/properties/holdout/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.split.properties.holdout, data: data12 };
+                                    if (vErrors === null) {
+                                        vErrors = [err29];
+                                    }
+                                    else {
+                                        vErrors.push(err29);
+                                    }
+                                    errors++;
+                                }
+                            }
+                            else {
+                                const err30 = { instancePath: instancePath + "/data/split/holdout", schemaPath: "#/properties/data/properties/split/properties/holdout/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.split.properties.holdout.type, parentSchema: schema22.properties.data.properties.split.properties.holdout, data: data12 };
+                                if (vErrors === null) {
+                                    vErrors = [err30];
+                                }
+                                else {
+                                    vErrors.push(err30);
+                                }
+                                errors++;
+                            }
                         }
                     }
                     else {
-                        const err26 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.sigma.type, parentSchema: schema22.properties.data.properties.sigma, data: data9 };
-                        if (vErrors === null) {
-                            vErrors = [err26];
-                        }
-                        else {
-                            vErrors.push(err26);
-                        }
-                        errors++;
-                    }
-                }
-            }
-            else {
-                const err27 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
-                if (vErrors === null) {
-                    vErrors = [err27];
-                }
-                else {
-                    vErrors.push(err27);
-                }
-                errors++;
-            }
-        }
-        if (data.terms !== undefined) {
-            let data10 = data.terms;
-            if (Array.isArray(data10)) {
-                if (data10.length < 1) {
-                    const err28 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data10 };
-                    if (vErrors === null) {
-                        vErrors = [err28];
-                    }
-                    else {
-                        vErrors.push(err28);
-                    }
-                    errors++;
-                }
-                const len0 = data10.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                    if (!(validate76(data10[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data10, parentDataProperty: i0, rootData, dynamicAnchors }))) {
-                        vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
-                        errors = vErrors.length;
-                    }
-                }
-            }
-            else {
-                const err29 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data10 };
-                if (vErrors === null) {
-                    vErrors = [err29];
-                }
-                else {
-                    vErrors.push(err29);
-                }
-                errors++;
-            }
-        }
-        if (data.fit !== undefined) {
-            let data12 = data.fit;
-            if (data12 && typeof data12 == "object" && !Array.isArray(data12)) {
-                for (const key2 in data12) {
-                    if (!((((((((key2 === "intercept") || (key2 === "refit")) || (key2 === "ridge")) || (key2 === "folds")) || (key2 === "fold_order")) || (key2 === "seed")) || (key2 === "parameter_count")) || (key2 === "threshold"))) {
-                        const err30 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key2 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data12 };
-                        if (vErrors === null) {
-                            vErrors = [err30];
-                        }
-                        else {
-                            vErrors.push(err30);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.intercept !== undefined) {
-                    let data13 = data12.intercept;
-                    if (typeof data13 !== "boolean") {
-                        const err31 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data13 };
+                        const err31 = { instancePath: instancePath + "/data/split", schemaPath: "#/properties/data/properties/split/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.properties.split.type, parentSchema: schema22.properties.data.properties.split, data: data9 };
                         if (vErrors === null) {
                             vErrors = [err31];
                         }
@@ -45849,48 +46337,47 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-                if (data12.refit !== undefined) {
-                    let data14 = data12.refit;
-                    if (typeof data14 !== "boolean") {
-                        const err32 = { instancePath: instancePath + "/fit/refit", schemaPath: "#/properties/fit/properties/refit/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit.type, parentSchema: schema22.properties.fit.properties.refit, data: data14 };
-                        if (vErrors === null) {
-                            vErrors = [err32];
-                        }
-                        else {
-                            vErrors.push(err32);
-                        }
-                        errors++;
-                    }
-                }
-                if (data12.ridge !== undefined) {
-                    let data15 = data12.ridge;
-                    if ((typeof data15 == "number") && (isFinite(data15))) {
-                        if (data15 < 0 || isNaN(data15)) {
-                            const err33 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data15 };
+                if (data3.target !== undefined) {
+                    let data13 = data3.target;
+                    if (typeof data13 === "string") {
+                        if (func1(data13) < 1) {
+                            const err32 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.target, data: data13 };
                             if (vErrors === null) {
-                                vErrors = [err33];
+                                vErrors = [err32];
                             }
                             else {
-                                vErrors.push(err33);
+                                vErrors.push(err32);
                             }
                             errors++;
                         }
                     }
                     else {
-                        const err34 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data15 };
+                        const err33 = { instancePath: instancePath + "/data/target", schemaPath: "#/properties/data/properties/target/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.target.type, parentSchema: schema22.properties.data.properties.target, data: data13 };
                         if (vErrors === null) {
-                            vErrors = [err34];
+                            vErrors = [err33];
                         }
                         else {
-                            vErrors.push(err34);
+                            vErrors.push(err33);
                         }
                         errors++;
                     }
                 }
-                if (data12.folds !== undefined) {
-                    let data16 = data12.folds;
-                    if (!(((typeof data16 == "number") && (!(data16 % 1) && !isNaN(data16))) && (isFinite(data16)))) {
-                        const err35 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                if (data3.positive !== undefined) {
+                    let data14 = data3.positive;
+                    if (typeof data14 === "string") {
+                        if (func1(data14) < 1) {
+                            const err34 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.positive, data: data14 };
+                            if (vErrors === null) {
+                                vErrors = [err34];
+                            }
+                            else {
+                                vErrors.push(err34);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err35 = { instancePath: instancePath + "/data/positive", schemaPath: "#/properties/data/properties/positive/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.positive.type, parentSchema: schema22.properties.data.properties.positive, data: data14 };
                         if (vErrors === null) {
                             vErrors = [err35];
                         }
@@ -45899,9 +46386,12 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                    if ((typeof data16 == "number") && (isFinite(data16))) {
-                        if (data16 > 50 || isNaN(data16)) {
-                            const err36 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
+                }
+                if (data3.weight !== undefined) {
+                    let data15 = data3.weight;
+                    if (typeof data15 === "string") {
+                        if (func1(data15) < 1) {
+                            const err36 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.weight, data: data15 };
                             if (vErrors === null) {
                                 vErrors = [err36];
                             }
@@ -45910,35 +46400,34 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                             }
                             errors++;
                         }
-                        if (data16 < 2 || isNaN(data16)) {
-                            const err37 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data16 };
-                            if (vErrors === null) {
-                                vErrors = [err37];
-                            }
-                            else {
-                                vErrors.push(err37);
-                            }
-                            errors++;
-                        }
                     }
-                }
-                if (data12.fold_order !== undefined) {
-                    let data17 = data12.fold_order;
-                    if (!((data17 === "shuffled") || (data17 === "blocks"))) {
-                        const err38 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data17 };
+                    else {
+                        const err37 = { instancePath: instancePath + "/data/weight", schemaPath: "#/properties/data/properties/weight/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.weight.type, parentSchema: schema22.properties.data.properties.weight, data: data15 };
                         if (vErrors === null) {
-                            vErrors = [err38];
+                            vErrors = [err37];
                         }
                         else {
-                            vErrors.push(err38);
+                            vErrors.push(err37);
                         }
                         errors++;
                     }
                 }
-                if (data12.seed !== undefined) {
-                    let data18 = data12.seed;
-                    if (!(((typeof data18 == "number") && (!(data18 % 1) && !isNaN(data18))) && (isFinite(data18)))) {
-                        const err39 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
+                if (data3.sigma !== undefined) {
+                    let data16 = data3.sigma;
+                    if (typeof data16 === "string") {
+                        if (func1(data16) < 1) {
+                            const err38 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema22.properties.data.properties.sigma, data: data16 };
+                            if (vErrors === null) {
+                                vErrors = [err38];
+                            }
+                            else {
+                                vErrors.push(err38);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err39 = { instancePath: instancePath + "/data/sigma", schemaPath: "#/properties/data/properties/sigma/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema22.properties.data.properties.sigma.type, parentSchema: schema22.properties.data.properties.sigma, data: data16 };
                         if (vErrors === null) {
                             vErrors = [err39];
                         }
@@ -45947,68 +46436,83 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
-                    if ((typeof data18 == "number") && (isFinite(data18))) {
-                        if (data18 > 4294967295 || isNaN(data18)) {
-                            const err40 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
-                            if (vErrors === null) {
-                                vErrors = [err40];
-                            }
-                            else {
-                                vErrors.push(err40);
-                            }
-                            errors++;
-                        }
-                        if (data18 < 0 || isNaN(data18)) {
-                            const err41 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data18 };
-                            if (vErrors === null) {
-                                vErrors = [err41];
-                            }
-                            else {
-                                vErrors.push(err41);
-                            }
-                            errors++;
-                        }
+                }
+            }
+            else {
+                const err40 = { instancePath: instancePath + "/data", schemaPath: "#/properties/data/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.data.type, parentSchema: schema22.properties.data, data: data3 };
+                if (vErrors === null) {
+                    vErrors = [err40];
+                }
+                else {
+                    vErrors.push(err40);
+                }
+                errors++;
+            }
+        }
+        if (data.terms !== undefined) {
+            let data17 = data.terms;
+            if (Array.isArray(data17)) {
+                if (data17.length < 1) {
+                    const err41 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.terms, data: data17 };
+                    if (vErrors === null) {
+                        vErrors = [err41];
+                    }
+                    else {
+                        vErrors.push(err41);
+                    }
+                    errors++;
+                }
+                const len0 = data17.length;
+                for (let i0 = 0; i0 < len0; i0++) {
+                    if (!(validate76(data17[i0], { instancePath: instancePath + "/terms/" + i0, parentData: data17, parentDataProperty: i0, rootData, dynamicAnchors }))) {
+                        vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+                        errors = vErrors.length;
                     }
                 }
-                if (data12.parameter_count !== undefined) {
-                    let data19 = data12.parameter_count;
-                    if (!((data19 === "columns") || (data19 === "effective"))) {
-                        const err42 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data19 };
+            }
+            else {
+                const err42 = { instancePath: instancePath + "/terms", schemaPath: "#/properties/terms/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.terms.type, parentSchema: schema22.properties.terms, data: data17 };
+                if (vErrors === null) {
+                    vErrors = [err42];
+                }
+                else {
+                    vErrors.push(err42);
+                }
+                errors++;
+            }
+        }
+        if (data.fit !== undefined) {
+            let data19 = data.fit;
+            if (data19 && typeof data19 == "object" && !Array.isArray(data19)) {
+                for (const key3 in data19) {
+                    if (!((((((((key3 === "intercept") || (key3 === "refit")) || (key3 === "ridge")) || (key3 === "folds")) || (key3 === "fold_order")) || (key3 === "seed")) || (key3 === "parameter_count")) || (key3 === "threshold"))) {
+                        const err43 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key3 }, message: "must NOT have additional properties", schema: false, parentSchema: schema22.properties.fit, data: data19 };
                         if (vErrors === null) {
-                            vErrors = [err42];
+                            vErrors = [err43];
                         }
                         else {
-                            vErrors.push(err42);
+                            vErrors.push(err43);
                         }
                         errors++;
                     }
                 }
-                if (data12.threshold !== undefined) {
-                    let data20 = data12.threshold;
-                    if ((typeof data20 == "number") && (isFinite(data20))) {
-                        if (data20 >= 1 || isNaN(data20)) {
-                            const err43 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
-                            if (vErrors === null) {
-                                vErrors = [err43];
-                            }
-                            else {
-                                vErrors.push(err43);
-                            }
-                            errors++;
+                if (data19.intercept !== undefined) {
+                    let data20 = data19.intercept;
+                    if (typeof data20 !== "boolean") {
+                        const err44 = { instancePath: instancePath + "/fit/intercept", schemaPath: "#/properties/fit/properties/intercept/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.intercept.type, parentSchema: schema22.properties.fit.properties.intercept, data: data20 };
+                        if (vErrors === null) {
+                            vErrors = [err44];
                         }
-                        if (data20 <= 0 || isNaN(data20)) {
-                            const err44 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
-                            if (vErrors === null) {
-                                vErrors = [err44];
-                            }
-                            else {
-                                vErrors.push(err44);
-                            }
-                            errors++;
+                        else {
+                            vErrors.push(err44);
                         }
+                        errors++;
                     }
-                    else {
-                        const err45 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data20 };
+                }
+                if (data19.refit !== undefined) {
+                    let data21 = data19.refit;
+                    if (typeof data21 !== "boolean") {
+                        const err45 = { instancePath: instancePath + "/fit/refit", schemaPath: "#/properties/fit/properties/refit/type", keyword: "type", params: { type: "boolean" }, message: "must be boolean", schema: schema22.properties.fit.properties.refit.type, parentSchema: schema22.properties.fit.properties.refit, data: data21 };
                         if (vErrors === null) {
                             vErrors = [err45];
                         }
@@ -46018,36 +46522,35 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         errors++;
                     }
                 }
-            }
-            else {
-                const err46 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data12 };
-                if (vErrors === null) {
-                    vErrors = [err46];
-                }
-                else {
-                    vErrors.push(err46);
-                }
-                errors++;
-            }
-        }
-        if (data.coefficients !== undefined) {
-            let data21 = data.coefficients;
-            if (Array.isArray(data21)) {
-                if (data21.length < 1) {
-                    const err47 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data21 };
-                    if (vErrors === null) {
-                        vErrors = [err47];
+                if (data19.ridge !== undefined) {
+                    let data22 = data19.ridge;
+                    if ((typeof data22 == "number") && (isFinite(data22))) {
+                        if (data22 < 0 || isNaN(data22)) {
+                            const err46 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.ridge, data: data22 };
+                            if (vErrors === null) {
+                                vErrors = [err46];
+                            }
+                            else {
+                                vErrors.push(err46);
+                            }
+                            errors++;
+                        }
                     }
                     else {
-                        vErrors.push(err47);
+                        const err47 = { instancePath: instancePath + "/fit/ridge", schemaPath: "#/properties/fit/properties/ridge/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.ridge.type, parentSchema: schema22.properties.fit.properties.ridge, data: data22 };
+                        if (vErrors === null) {
+                            vErrors = [err47];
+                        }
+                        else {
+                            vErrors.push(err47);
+                        }
+                        errors++;
                     }
-                    errors++;
                 }
-                const len1 = data21.length;
-                for (let i1 = 0; i1 < len1; i1++) {
-                    let data22 = data21[i1];
-                    if (!((typeof data22 == "number") && (isFinite(data22)))) {
-                        const err48 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data22 };
+                if (data19.folds !== undefined) {
+                    let data23 = data19.folds;
+                    if (!(((typeof data23 == "number") && (!(data23 % 1) && !isNaN(data23))) && (isFinite(data23)))) {
+                        const err48 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.folds.type, parentSchema: schema22.properties.fit.properties.folds, data: data23 };
                         if (vErrors === null) {
                             vErrors = [err48];
                         }
@@ -46056,15 +46559,172 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
                         }
                         errors++;
                     }
+                    if ((typeof data23 == "number") && (isFinite(data23))) {
+                        if (data23 > 50 || isNaN(data23)) {
+                            const err49 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/maximum", keyword: "maximum", params: { comparison: "<=", limit: 50 }, message: "must be <= 50", schema: 50, parentSchema: schema22.properties.fit.properties.folds, data: data23 };
+                            if (vErrors === null) {
+                                vErrors = [err49];
+                            }
+                            else {
+                                vErrors.push(err49);
+                            }
+                            errors++;
+                        }
+                        if (data23 < 2 || isNaN(data23)) {
+                            const err50 = { instancePath: instancePath + "/fit/folds", schemaPath: "#/properties/fit/properties/folds/minimum", keyword: "minimum", params: { comparison: ">=", limit: 2 }, message: "must be >= 2", schema: 2, parentSchema: schema22.properties.fit.properties.folds, data: data23 };
+                            if (vErrors === null) {
+                                vErrors = [err50];
+                            }
+                            else {
+                                vErrors.push(err50);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data19.fold_order !== undefined) {
+                    let data24 = data19.fold_order;
+                    if (!((data24 === "shuffled") || (data24 === "blocks"))) {
+                        const err51 = { instancePath: instancePath + "/fit/fold_order", schemaPath: "#/properties/fit/properties/fold_order/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.fold_order.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.fold_order.enum, parentSchema: schema22.properties.fit.properties.fold_order, data: data24 };
+                        if (vErrors === null) {
+                            vErrors = [err51];
+                        }
+                        else {
+                            vErrors.push(err51);
+                        }
+                        errors++;
+                    }
+                }
+                if (data19.seed !== undefined) {
+                    let data25 = data19.seed;
+                    if (!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))) {
+                        const err52 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema22.properties.fit.properties.seed.type, parentSchema: schema22.properties.fit.properties.seed, data: data25 };
+                        if (vErrors === null) {
+                            vErrors = [err52];
+                        }
+                        else {
+                            vErrors.push(err52);
+                        }
+                        errors++;
+                    }
+                    if ((typeof data25 == "number") && (isFinite(data25))) {
+                        if (data25 > 4294967295 || isNaN(data25)) {
+                            const err53 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/maximum", keyword: "maximum", params: { comparison: "<=", limit: 4294967295 }, message: "must be <= 4294967295", schema: 4294967295, parentSchema: schema22.properties.fit.properties.seed, data: data25 };
+                            if (vErrors === null) {
+                                vErrors = [err53];
+                            }
+                            else {
+                                vErrors.push(err53);
+                            }
+                            errors++;
+                        }
+                        if (data25 < 0 || isNaN(data25)) {
+                            const err54 = { instancePath: instancePath + "/fit/seed", schemaPath: "#/properties/fit/properties/seed/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema22.properties.fit.properties.seed, data: data25 };
+                            if (vErrors === null) {
+                                vErrors = [err54];
+                            }
+                            else {
+                                vErrors.push(err54);
+                            }
+                            errors++;
+                        }
+                    }
+                }
+                if (data19.parameter_count !== undefined) {
+                    let data26 = data19.parameter_count;
+                    if (!((data26 === "columns") || (data26 === "effective"))) {
+                        const err55 = { instancePath: instancePath + "/fit/parameter_count", schemaPath: "#/properties/fit/properties/parameter_count/enum", keyword: "enum", params: { allowedValues: schema22.properties.fit.properties.parameter_count.enum }, message: "must be equal to one of the allowed values", schema: schema22.properties.fit.properties.parameter_count.enum, parentSchema: schema22.properties.fit.properties.parameter_count, data: data26 };
+                        if (vErrors === null) {
+                            vErrors = [err55];
+                        }
+                        else {
+                            vErrors.push(err55);
+                        }
+                        errors++;
+                    }
+                }
+                if (data19.threshold !== undefined) {
+                    let data27 = data19.threshold;
+                    if ((typeof data27 == "number") && (isFinite(data27))) {
+                        if (data27 >= 1 || isNaN(data27)) {
+                            const err56 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema22.properties.fit.properties.threshold, data: data27 };
+                            if (vErrors === null) {
+                                vErrors = [err56];
+                            }
+                            else {
+                                vErrors.push(err56);
+                            }
+                            errors++;
+                        }
+                        if (data27 <= 0 || isNaN(data27)) {
+                            const err57 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema22.properties.fit.properties.threshold, data: data27 };
+                            if (vErrors === null) {
+                                vErrors = [err57];
+                            }
+                            else {
+                                vErrors.push(err57);
+                            }
+                            errors++;
+                        }
+                    }
+                    else {
+                        const err58 = { instancePath: instancePath + "/fit/threshold", schemaPath: "#/properties/fit/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.fit.properties.threshold.type, parentSchema: schema22.properties.fit.properties.threshold, data: data27 };
+                        if (vErrors === null) {
+                            vErrors = [err58];
+                        }
+                        else {
+                            vErrors.push(err58);
+                        }
+                        errors++;
+                    }
                 }
             }
             else {
-                const err49 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data21 };
+                const err59 = { instancePath: instancePath + "/fit", schemaPath: "#/properties/fit/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.properties.fit.type, parentSchema: schema22.properties.fit, data: data19 };
                 if (vErrors === null) {
-                    vErrors = [err49];
+                    vErrors = [err59];
                 }
                 else {
-                    vErrors.push(err49);
+                    vErrors.push(err59);
+                }
+                errors++;
+            }
+        }
+        if (data.coefficients !== undefined) {
+            let data28 = data.coefficients;
+            if (Array.isArray(data28)) {
+                if (data28.length < 1) {
+                    const err60 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema22.properties.coefficients, data: data28 };
+                    if (vErrors === null) {
+                        vErrors = [err60];
+                    }
+                    else {
+                        vErrors.push(err60);
+                    }
+                    errors++;
+                }
+                const len1 = data28.length;
+                for (let i1 = 0; i1 < len1; i1++) {
+                    let data29 = data28[i1];
+                    if (!((typeof data29 == "number") && (isFinite(data29)))) {
+                        const err61 = { instancePath: instancePath + "/coefficients/" + i1, schemaPath: "#/properties/coefficients/items/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema22.properties.coefficients.items.type, parentSchema: schema22.properties.coefficients.items, data: data29 };
+                        if (vErrors === null) {
+                            vErrors = [err61];
+                        }
+                        else {
+                            vErrors.push(err61);
+                        }
+                        errors++;
+                    }
+                }
+            }
+            else {
+                const err62 = { instancePath: instancePath + "/coefficients", schemaPath: "#/properties/coefficients/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema22.properties.coefficients.type, parentSchema: schema22.properties.coefficients, data: data28 };
+                if (vErrors === null) {
+                    vErrors = [err62];
+                }
+                else {
+                    vErrors.push(err62);
                 }
                 errors++;
             }
@@ -46077,12 +46737,12 @@ function validate75(data, { instancePath = "", parentData, parentDataProperty, r
         }
     }
     else {
-        const err50 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
+        const err63 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema22.type, parentSchema: schema22, data };
         if (vErrors === null) {
-            vErrors = [err50];
+            vErrors = [err63];
         }
         else {
-            vErrors.push(err50);
+            vErrors.push(err63);
         }
         errors++;
     }
@@ -46165,7 +46825,10 @@ function decodeYamlBytes(bytes, file) {
     }
     const nul = text.indexOf('\u0000');
     if (nul >= 0) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', { file, ...positionInText(text, nul) });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
+            file,
+            ...positionInText(text, nul),
+        });
     }
     return text;
 }
@@ -46401,7 +47064,9 @@ function firstAlias(root) {
 }
 function checkSize(bytes, file) {
     if (bytes > YAML_GUARDS.maxBytes) {
-        throw new core_errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, { file });
+        throw new core_errors/* InputError */.dz(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
+            file,
+        });
     }
 }
 function firstInvalidUtf8(bytes) {
@@ -46468,7 +47133,12 @@ const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
 /** Descriptor glob used when there is no settings file. */
 const DEFAULT_MODEL_PATTERNS = Object.freeze(['**/*.model.yml']);
 /** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
-const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns' });
+const DEFAULT_FIT = Object.freeze({
+    folds: 5,
+    foldOrder: 'shuffled',
+    seed: 1,
+    parameterCount: 'columns',
+});
 /**
  * Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters, 2e10 estimated
  * operations per model (run/cost.ts; at most about 20 to 30 s of one core of a 2-core machine,
@@ -46494,7 +47164,12 @@ function defaultSettings() {
         models: [...DEFAULT_MODEL_PATTERNS],
         limits: {},
         fit: { ...DEFAULT_FIT },
-        caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells, maxOperations: DEFAULT_CAPS.maxOperations, maxModelSeconds: DEFAULT_CAPS.maxModelSeconds },
+        caps: {
+            maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB,
+            maxCells: DEFAULT_CAPS.maxCells,
+            maxOperations: DEFAULT_CAPS.maxOperations,
+            maxModelSeconds: DEFAULT_CAPS.maxModelSeconds,
+        },
     };
 }
 /**
@@ -46542,7 +47217,9 @@ async function yamlTwinNotes(repo, path) {
     }
     if (kind === 'missing')
         return [];
-    return [`${(0,core_errors/* clip */.$Q)(twin)} is not read: fitgate reads its settings from ${(0,core_errors/* clip */.$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`];
+    return [
+        `${(0,core_errors/* clip */.$Q)(twin)} is not read: fitgate reads its settings from ${(0,core_errors/* clip */.$Q)(path)} (rename the file, or name it with --config / the \`config\` input)`,
+    ];
 }
 /**
  * Validates a parsed settings document and builds the {@link SettingsFile}.
@@ -46643,7 +47320,9 @@ async function discoverDescriptors(repo, settings, explicit) {
                 throw new core_errors/* InputError */.dz(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
             }
             if (kind !== 'file')
-                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, { file: given });
+                throw new core_errors/* InputError */.dz(DISCOVER_ERROR.notAFile, `the descriptor ${(0,repo_path/* kindWords */.Gk)(kind)}; expected a regular *.model.yml file`, {
+                    file: given,
+                });
             found.add(path);
         }
         return { paths: [...found].sort(), notes };
@@ -46652,11 +47331,18 @@ async function discoverDescriptors(repo, settings, explicit) {
         const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
         const shown = (0,core_errors/* quoteValue */.cl)(pattern);
         const { matches, twins, links } = await globWithTwin(repo, pattern, where);
-        const unread = twins.length > 0 ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)` : '';
-        const unsearched = links.length > 0 ? `${listNames(links)} ${links.length === 1 ? 'is a symbolic link' : 'are symbolic links'} that the pattern would search below; links are never followed as folders (name the real folder in the pattern)` : '';
+        const unread = twins.length > 0
+            ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)`
+            : '';
+        const unsearched = links.length > 0
+            ? `${listNames(links)} ${links.length === 1 ? 'is a symbolic link' : 'are symbolic links'} that the pattern would search below; links are never followed as folders (name the real folder in the pattern)`
+            : '';
         if (matches.length === 0) {
             const source = settings.file === null ? ' (the default, as there is no settings file)' : '';
-            const why = [unread, unsearched].filter((t) => t !== '').map((t) => `; ${t}`).join('');
+            const why = [unread, unsearched]
+                .filter((t) => t !== '')
+                .map((t) => `; ${t}`)
+                .join('');
             throw new core_errors/* InputError */.dz(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
         }
         if (unread !== '')
@@ -46680,7 +47366,11 @@ async function globWithTwin(repo, pattern, where) {
             try {
                 const both = await repo.glob([pattern, twin]);
                 // Every match of a pattern ending with the literal `.yml` ends with it, and every match of the twin with `.yaml`.
-                return { matches: both.paths.filter((p) => p.endsWith('.yml')), twins: both.paths.filter((p) => p.endsWith('.yaml')), links: both.notEntered };
+                return {
+                    matches: both.paths.filter((p) => p.endsWith('.yml')),
+                    twins: both.paths.filter((p) => p.endsWith('.yaml')),
+                    links: both.notEntered,
+                };
             }
             catch (error) {
                 if (!(error instanceof core_errors/* InputError */.dz))
@@ -46722,7 +47412,9 @@ function normaliseGiven(given) {
     const p = given.replace(/\\/g, '/');
     const normal = external_node_path_.posix.normalize(p).replace(/^(\.\/)+/, '');
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || normal === '..' || normal.startsWith('../')) {
-        throw new core_errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', { file: given });
+        throw new core_errors/* InputError */.dz(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', {
+            file: given,
+        });
     }
     return normal;
 }
@@ -46745,6 +47437,7 @@ const MAX_RBF_CENTERS = 10_000;
 /** Stable codes of the errors this module throws (besides YAML, schema and limit codes). */
 const DESCRIPTOR_ERROR = Object.freeze({
     dataMissing: 'file-missing',
+    dataForm: 'data-form',
     notAFile: repo_path/* NOT_A_FILE */.bd,
     centers: 'rbf-centers',
     weighting: 'weight-and-sigma',
@@ -46794,6 +47487,7 @@ function descriptorFromDocument(doc, file, settings) {
         throw schemaError(errors, doc, file);
     const raw = doc.value;
     const line = (path) => doc.positionOf(path)?.line ?? 1;
+    checkDataForm(doc, file, raw.data);
     const terms = raw.terms.map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
     const termsLine = line(['terms']);
     const fitLine = raw.fit ? line(['fit']) : termsLine;
@@ -46807,9 +47501,18 @@ function descriptorFromDocument(doc, file, settings) {
         task: raw.task ?? 'regression',
         data: {
             train: raw.data.train,
-            holdout: raw.data.holdout,
+            holdout: raw.data.holdout ?? raw.data.train,
             target: raw.data.target,
-            lines: { train: line(['data', 'train']), holdout: line(['data', 'holdout']), target: line(['data', 'target']) },
+            lines: {
+                train: line(['data', 'train']),
+                holdout: raw.data.holdout !== undefined ? line(['data', 'holdout']) : line(['data', 'split']),
+                target: line(['data', 'target']),
+            },
+            // Present only when written, so descriptors of plain comma files stay as they were.
+            ...(raw.data.separator !== undefined || raw.data.decimal !== undefined || raw.data.missing !== undefined
+                ? { format: { separator: raw.data.separator ?? 'auto', decimal: raw.data.decimal ?? '.', missing: raw.data.missing ?? 'error' } }
+                : {}),
+            ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
             positive: raw.data.positive ?? null,
             ...weightingOf(readWeighting(doc, file, raw.data, line)),
         },
@@ -46859,7 +47562,14 @@ function readTerm(doc, file, term, index, line) {
             if (Array.isArray(p[key]))
                 throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
         }
-        return withTransform({ kind: 'polynomial', of: p.of, degree: p.degree, shift: p.shift ?? null, scale: p.scale ?? null, line }, p.transform);
+        return withTransform({
+            kind: 'polynomial',
+            of: p.of,
+            degree: p.degree,
+            shift: p.shift ?? null,
+            scale: p.scale ?? null,
+            line,
+        }, p.transform);
     }
     if ('fourier' in term) {
         const f = term.fourier;
@@ -46867,7 +47577,13 @@ function readTerm(doc, file, term, index, line) {
     }
     if ('category' in term) {
         const c = term.category;
-        return { kind: 'category', of: c.of, reference: c.reference === undefined ? null : String(c.reference), unseen: c.unseen ?? 'error', line };
+        return {
+            kind: 'category',
+            of: c.of,
+            reference: c.reference === undefined ? null : String(c.reference),
+            unseen: c.unseen ?? 'error',
+            line,
+        };
     }
     if ('spline' in term)
         return withTransform(readSpline(doc, file, term.spline, ['terms', index, 'spline'], line), term.spline.transform);
@@ -46877,7 +47593,13 @@ function readTerm(doc, file, term, index, line) {
     if (Array.isArray(r.centers) && r.centers.some((c) => typeof c !== 'number')) {
         throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
     }
-    return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
+    return withTransform({
+        kind: 'rbf',
+        of: r.of,
+        centers: readCenters(doc, file, r.centers, ['terms', index, 'rbf', 'centers']),
+        width: r.width,
+        line,
+    }, r.transform);
 }
 /** The spec with its `transform` when one is written (absent otherwise, so specs without one keep their shape). */
 function withTransform(spec, transform) {
@@ -46962,6 +47684,25 @@ function readCenters(doc, file, centers, at) {
         throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'step'], `step ${showValue(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`);
     }
     return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
+}
+/**
+ * The `data` rules the schema cannot say: exactly one of `holdout` and `split`; a split's two
+ * labels differ; a decimal comma needs a separator other than the comma.
+ * @throws InputError `data-form` naming the key
+ */
+function checkDataForm(doc, file, data) {
+    if (data.holdout === undefined && data.split === undefined) {
+        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data'], 'expected `data.holdout` (a hold-out CSV) or `data.split` (a split column in the training file); got neither', 'key');
+    }
+    if (data.holdout !== undefined && data.split !== undefined) {
+        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split'], 'expected either `data.holdout` or `data.split`, not both: with a split column the hold-out rows come from the training file', 'key');
+    }
+    if (data.split !== undefined && data.split.train === data.split.holdout) {
+        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split', 'holdout'], `expected a hold-out label different from the training label ${showValue(data.split.train)}`);
+    }
+    if (data.decimal === ',' && data.separator === ',') {
+        throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'decimal'], 'a decimal comma needs a separator other than the comma; expected `data.separator` to be ";" or "\\t" (or `auto`)');
+    }
 }
 
 // EXTERNAL MODULE: ./src/kernels/index.ts + 10 modules
@@ -47048,7 +47789,7 @@ function rowHash(columns, i) {
     for (let c = 0; c < columns.length; c++) {
         f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
         h = Math.imul(h ^ u32[0], 0x9e3779b1);
-        h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
+        h = Math.imul(h ^ (h >>> 15) ^ u32[1], 0x85ebca6b);
         h ^= h >>> 13;
     }
     return (0,random/* mix32 */.QV)(h);
@@ -47068,7 +47809,13 @@ function newTable(rows) {
     let size = 1024;
     while (size < 2 * rows)
         size *= 2;
-    return { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(rows).fill(-1), repOf: new Int32Array(rows) };
+    return {
+        mask: size - 1,
+        slotHash: new Uint32Array(size),
+        slotHead: new Int32Array(size).fill(-1),
+        next: new Int32Array(rows).fill(-1),
+        repOf: new Int32Array(rows),
+    };
 }
 /** The slot of `hash`: where it is, or the empty slot where it goes. */
 function findSlot(table, hash) {
@@ -47582,6 +48329,8 @@ var lib = __nccwpck_require__(3046);
 var csv_rules = __nccwpck_require__(8706);
 // EXTERNAL MODULE: ./src/data/line-blocks.ts
 var line_blocks = __nccwpck_require__(5383);
+// EXTERNAL MODULE: ./src/data/csv-format.ts
+var csv_format = __nccwpck_require__(3838);
 ;// CONCATENATED MODULE: ./src/data/fast-path.ts
 /**
  * The fast CSV path: one loop over the bytes of plain numeric CSV (no quotes), parsing
@@ -47594,6 +48343,7 @@ var line_blocks = __nccwpck_require__(5383);
  * {@link FastPathDeclined}; the caller then reads the file again on the general path,
  * which either accepts it or throws the error the user should see.
  */
+
 
 
 /** Thrown when the fast path meets input it does not handle. Never leaves this folder. */
@@ -47685,9 +48435,27 @@ class FastReader {
     line = 1;
     /** True once a header-only read has its header. */
     stopped = false;
+    /** Field separator byte (comma, semicolon or tab). */
+    separator;
+    /** Decimal mark byte (point or comma). */
+    decimal;
+    /** White space skipped around cells besides the space: the tab, unless the tab separates fields. */
+    blank;
+    /** Field index of the split column, or -1. */
+    splitField = -1;
+    /** UTF-8 bytes of the split labels to keep and to skip. */
+    keepLabel;
+    otherLabel;
     constructor(target) {
         this.target = target;
         this.builder = new csv_rules/* ChunkBuilder */.vB(target.request, target.chunkRows);
+        const format = target.format;
+        this.separator = format === undefined || format.separator === 'auto' ? COMMA : format.separator.charCodeAt(0);
+        this.decimal = format === undefined ? POINT : format.decimal.charCodeAt(0);
+        this.blank = this.separator === TAB ? SPACE : TAB;
+        const encoder = new TextEncoder();
+        this.keepLabel = encoder.encode(target.split?.keep ?? '');
+        this.otherLabel = encoder.encode(target.split?.other ?? '');
     }
     /** Reads whole lines; `buf` ends with a line feed. */
     read(buf) {
@@ -47710,6 +48478,10 @@ class FastReader {
         const slotOfField = plan.slotOfField;
         const lastField = slotOfField.length - 1;
         const builder = this.builder;
+        const SEP = this.separator;
+        const DEC = this.decimal;
+        const BLANK = this.blank;
+        const splitField = this.splitField;
         const slots = builder.slots;
         const lines = builder.lines;
         const capacity = builder.capacity;
@@ -47721,7 +48493,7 @@ class FastReader {
         while (p < end && row < capacity) {
             // Line start: skip spaces and tabs; a line of nothing else is blank.
             let b = buf[p];
-            while (b === SPACE || b === TAB)
+            while (b === SPACE || b === BLANK)
                 b = buf[++p];
             if (b === LF) {
                 p++;
@@ -47736,14 +48508,15 @@ class FastReader {
                 continue;
             }
             // Other white space could make the line blank for the general path: let it decide.
-            if (b > 127 || b === VT || b === FF || b === CR)
+            if (b > 127 || b === VT || b === FF || b === CR || b === TAB)
                 throw new FastPathDeclined(line);
+            let keep = true;
             let field = 0;
             for (;;) {
                 const slot = slotOfField[field];
                 if (slot >= 0) {
                     // A requested cell: [spaces] [sign] digits [. digits] [e [sign] digits] [spaces]
-                    while (b === SPACE || b === TAB)
+                    while (b === SPACE || b === BLANK)
                         b = buf[++p];
                     const start = p;
                     let negative = false;
@@ -47766,7 +48539,7 @@ class FastReader {
                         digits++;
                         b = buf[++p];
                     }
-                    if (b === POINT) {
+                    if (b === DEC) {
                         b = buf[++p];
                         while (b >= DIGIT_0 && b <= DIGIT_9) {
                             if (mantissa < MANTISSA_ROOM) {
@@ -47810,6 +48583,8 @@ class FastReader {
                             value = -value;
                     }
                     else {
+                        if (DEC !== POINT)
+                            throw new FastPathDeclined(line);
                         text ??= Buffer.from(buf.buffer, buf.byteOffset, buf.byteLength);
                         value = Number(text.toString('latin1', start, p));
                         // Overflow, and underflow of a nonzero text (mantissa > 0) to 0 or a subnormal: the
@@ -47817,21 +48592,24 @@ class FastReader {
                         if (!Number.isFinite(value) || (mantissa !== 0 && Math.abs(value) < csv_rules/* MIN_NORMAL */.Vt))
                             throw new FastPathDeclined(line);
                     }
-                    while (b === SPACE || b === TAB)
+                    while (b === SPACE || b === BLANK)
                         b = buf[++p];
                     slots[slot][row] = value;
                 }
                 else {
-                    // An unused cell: skip to the comma or the line end.
-                    while (b !== COMMA && b !== LF) {
+                    // An unused cell: skip to the separator or the line end.
+                    const start = p;
+                    while (b !== SEP && b !== LF) {
                         if (b === QUOTE || (b === CR && buf[p + 1] !== LF))
                             throw new FastPathDeclined(line);
                         if (b === CR)
                             break;
                         b = buf[++p];
                     }
+                    if (field === splitField)
+                        keep = this.splitKeeps(buf, start, p, line);
                 }
-                if (b === COMMA) {
+                if (b === SEP) {
                     if (field === lastField)
                         throw new FastPathDeclined(line);
                     field++;
@@ -47845,13 +48623,38 @@ class FastReader {
                 p++;
                 break;
             }
-            lines[row] = line;
+            if (keep) {
+                lines[row] = line;
+                row++;
+                builder.row = row;
+            }
             line++;
-            row++;
-            builder.row = row;
             this.line = line;
         }
         return p;
+    }
+    /**
+     * True when the split cell in `buf[start, end)` (spaces and tabs around it ignored) is the label to
+     * keep, false when it is the other label; declines otherwise (the general path names the error).
+     */
+    splitKeeps(buf, start, end, line) {
+        while (start < end && (buf[start] === SPACE || buf[start] === TAB))
+            start++;
+        while (end > start && (buf[end - 1] === SPACE || buf[end - 1] === TAB))
+            end--;
+        const same = (label) => {
+            if (label.length !== end - start)
+                return false;
+            for (let i = 0; i < label.length; i++)
+                if (buf[start + i] !== label[i])
+                    return false;
+            return true;
+        };
+        if (same(this.keepLabel))
+            return true;
+        if (same(this.otherLabel))
+            return false;
+        throw new FastPathDeclined(line);
     }
     /**
      * Reads lines up to and including the first non-blank one, the header; returns the offset
@@ -47871,16 +48674,89 @@ class FastReader {
             const text = utf8.decode(buf.subarray(p, end));
             const line = this.line++;
             p = lf + 1;
+            // A line of tabs is blank here but a record of empty fields to csv-parse in a tab-separated file.
+            if (this.separator === TAB && text.includes('\t') && text.trim() === '')
+                throw new FastPathDeclined(line);
             if (text.trim() === '')
                 continue;
-            const header = text.split(',').map((name) => name.trim());
+            const header = text.split(String.fromCharCode(this.separator)).map((name) => name.trim());
             this.plan = (0,csv_rules/* planColumns */.j7)(this.target.file, header, line, this.target.request);
+            if (this.target.split !== undefined)
+                this.splitField = (0,csv_format/* splitFieldOf */.ID)(this.target.file, header, line, this.target.split);
+            // A split column that is also read as numbers: the general path handles it.
+            if (this.splitField !== -1 && this.plan.slotOfField[this.splitField] >= 0)
+                throw new FastPathDeclined(line);
             this.target.onHeader(this.plan);
             if (this.target.headerOnly)
                 this.stopped = true;
             return p;
         }
         return p;
+    }
+}
+
+// EXTERNAL MODULE: external "node:stream"
+var external_node_stream_ = __nccwpck_require__(7075);
+// EXTERNAL MODULE: external "node:zlib"
+var external_node_zlib_ = __nccwpck_require__(8522);
+;// CONCATENATED MODULE: ./src/data/gzip-stream.ts
+/**
+ * Data files compressed with gzip (`.gz` names, e.g. `train.csv.gz`): their bytes are
+ * decompressed as they stream (node:zlib `createGunzip`), never held whole, and the
+ * decompressed size is held to the same cap as a plain file's size, so a small file that
+ * expands without end (a "gzip bomb") stops at the cap.
+ */
+
+
+
+/** True when a data path names a gzip file (ends with `.gz`, any case). */
+function isGzipPath(path) {
+    return path.toLowerCase().endsWith('.gz');
+}
+/**
+ * The file's bytes as the CSV readers read them: decompressed when {@link isGzipPath}, else as
+ * stored.
+ *
+ * @param repo where the file lives
+ * @param path repository-relative path
+ * @param maxBytes cap on the decompressed bytes (the plain-file size cap)
+ * @throws InputError `file-too-large` past the cap, `csv-gzip` for data that is not valid gzip
+ */
+function gzip_stream_openDataFile(repo, path, maxBytes) {
+    if (!isGzipPath(path))
+        return repo.stream(path);
+    return gunzipPieces(repo.stream(path), path, maxBytes);
+}
+/**
+ * Decompresses a gzip stream piece by piece (member after member, as gzip allows).
+ *
+ * @param pieces the compressed bytes in pieces of any size
+ * @param file repository-relative path, for messages
+ * @param maxBytes cap on the decompressed bytes
+ */
+async function* gunzipPieces(pieces, file, maxBytes) {
+    const gunzip = (0,external_node_zlib_.createGunzip)();
+    // Errors of the source or of zlib end the iteration below; the callback only keeps them from being unhandled.
+    (0,external_node_stream_.pipeline)(external_node_stream_.Readable.from(pieces, { objectMode: false }), gunzip, () => undefined);
+    let total = 0;
+    try {
+        for await (const out of gunzip) {
+            total += out.length;
+            if (total > maxBytes) {
+                const mb = (maxBytes / (1024 * 1024)).toFixed(1);
+                throw new core_errors/* InputError */.dz('file-too-large', `the file decompresses to more than ${mb} MB (${maxBytes} bytes), over the cap; raise caps.max_file_mb in fitgate.yml`, { file });
+            }
+            yield out;
+        }
+    }
+    catch (error) {
+        if (error instanceof core_errors/* InputError */.dz)
+            throw error;
+        const code = error.code;
+        throw new core_errors/* InputError */.dz('csv-gzip', `the file is named .gz but is not valid gzip data (${typeof code === 'string' ? code : 'unreadable'}); expected a file written by gzip`, { file });
+    }
+    finally {
+        gunzip.destroy();
     }
 }
 
@@ -47891,8 +48767,11 @@ class FastReader {
  * A data file is UTF-8 CSV: a header row of column names, then rows of numbers; columns are
  * chosen by name and only those are converted. What is accepted, in words:
  *
- * - Fields are separated by commas; lines end with `\n` or `\r\n`; a UTF-8 byte-order mark
- *   is dropped. Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
+ * - Fields are separated by commas, semicolons or tabs (detected from the header line, or set:
+ *   csv-format.ts); lines end with `\n` or `\r\n`; a UTF-8 byte-order mark is dropped. Under
+ *   the options of csv-format.ts a decimal comma is read, rows with missing cells are dropped
+ *   (and counted), and a split column keeps one side's rows. A `.gz` path is decompressed as it
+ *   streams (gzip-stream.ts). Fields may be quoted with `"` (a quote inside is written `""`), so `"1.5"`
  *   is the number 1.5.
  * - White space around a field is ignored (the characters `String.prototype.trim` removes),
  *   inside quotes too: ` 1.5 ` and `" 1.5 "` are 1.5. Lines holding only white space are
@@ -47915,6 +48794,8 @@ class FastReader {
 
 
 
+
+
 /**
  * Streams a CSV file as numeric chunks (header checked first).
  *
@@ -47931,7 +48812,7 @@ class FastReader {
 async function* readTableChunks(repo, path, options) {
     const settings = checkOptions(options);
     await table_checkSize(repo, path, settings.maxBytes);
-    yield* scan(() => repo.stream(path), path, settings, () => undefined, false);
+    yield* scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, () => undefined, false, false);
 }
 /**
  * Reads the requested columns whole into preallocated arrays (no per-row objects, no list of
@@ -47952,7 +48833,7 @@ async function readTable(repo, path, options) {
     let header = [];
     let bytesRead = 0;
     const counted = async function* () {
-        for await (const piece of repo.stream(path)) {
+        for await (const piece of gzip_stream_openDataFile(repo, path, settings.maxBytes)) {
             bytesRead += piece.length;
             yield piece;
         }
@@ -47976,7 +48857,8 @@ async function readTable(repo, path, options) {
             nextLines.set(lines.subarray(0, rows));
         lines = nextLines;
     };
-    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true)) {
+    const counts = { dropped: 0 };
+    for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)) {
         const needed = rows + chunk.rows;
         if (needed > lines.length) {
             let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -47999,7 +48881,14 @@ async function readTable(repo, path, options) {
         if (!out.has(name))
             out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
     });
-    return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows) };
+    return {
+        file: path,
+        header,
+        rows,
+        columns: out,
+        lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows),
+        dropped: counts.dropped,
+    };
 }
 /**
  * Reads only the header names (for messages and checks): trimmed, in file order, checked
@@ -48009,19 +48898,20 @@ async function readTable(repo, path, options) {
  * @param path repository-relative path of the CSV file
  * @param maxBytes size cap in bytes; default 512 MiB
  */
-async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES) {
-    const settings = checkOptions({ columns: [], maxBytes });
+async function readHeader(repo, path, maxBytes = DEFAULT_MAX_BYTES, format) {
+    const settings = checkOptions({ columns: [], maxBytes, format });
     await table_checkSize(repo, path, settings.maxBytes);
     let header = [];
     // A header-only scan ends right after the header and yields no rows.
-    const scanning = scan(() => repo.stream(path), path, settings, (plan) => (header = plan.header), true);
+    const scanning = scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, (plan) => (header = plan.header), true, false);
     while (!(await scanning.next()).done)
         ;
     return header;
 }
 /** Checks the caller's options (a programming error, not the user's: TypeError / RangeError). */
 function checkOptions(options) {
-    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false } = options;
+    const { columns, chunkRows = csv_rules/* DEFAULT_CHUNK_ROWS */._I, maxBytes = csv_rules/* DEFAULT_MAX_BYTES */.fS, general = false, split } = options;
+    const format = { ...csv_format/* DEFAULT_FORMAT */.ui, ...options.format };
     if (!Array.isArray(columns) || columns.some((c) => typeof c !== 'string')) {
         throw new TypeError('readTable: `columns` must be an array of column names');
     }
@@ -48030,7 +48920,7 @@ function checkOptions(options) {
     }
     if (!(maxBytes >= 0))
         throw new RangeError(`readTable: \`maxBytes\` must be a non-negative number, got ${maxBytes}`);
-    return { columns, chunkRows, maxBytes, general };
+    return { columns, chunkRows, maxBytes, general, format, split };
 }
 /** InputError `file-too-large` when the file is over the cap; returns the size in bytes. */
 async function table_checkSize(repo, path, maxBytes) {
@@ -48047,14 +48937,28 @@ function megabytes(bytes) {
  * Runs the fast path, and on the general path from the start when the fast one declines,
  * handing out only the rows the fast path has not handed out already.
  */
-async function* scan(open, path, settings, onHeader, headerOnly, recycle = false) {
+async function* scan(open, path, settings, onHeader, headerOnly, recycle, counts) {
     let headerSeen = false;
+    let format = settings.format;
+    let first = null;
+    if (format.separator === 'auto') {
+        const found = await (0,csv_format/* peekSeparator */.NQ)(open());
+        first = found.pieces;
+        if (found.separator === ',' && format.decimal === ',')
+            throw (0,csv_format/* decimalSeparatorError */.Zf)(path, found.line);
+        format = { ...format, separator: found.separator };
+    }
+    else if (format.separator === ',' && format.decimal === ',')
+        throw (0,csv_format/* decimalSeparatorError */.Zf)(path, 1);
     const target = {
         file: path,
         request: (0,csv_rules/* planRequest */.NX)(settings.columns),
         chunkRows: settings.chunkRows,
         headerOnly,
         recycle,
+        format,
+        split: settings.split,
+        counts,
         onHeader: (plan) => {
             if (headerSeen)
                 return;
@@ -48065,7 +48969,9 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
     let handedOut = 0;
     if (!settings.general) {
         try {
-            for await (const chunk of fastChunks(open(), target)) {
+            const pieces = first ?? open();
+            first = null;
+            for await (const chunk of fastChunks(pieces, target)) {
                 handedOut += chunk.rows;
                 yield chunk;
             }
@@ -48078,7 +48984,7 @@ async function* scan(open, path, settings, onHeader, headerOnly, recycle = false
     }
     // csv-parse is loaded only when a file needs it (most data files take the fast path).
     const { generalChunks } = await __nccwpck_require__.e(/* import() */ 462).then(__nccwpck_require__.bind(__nccwpck_require__, 6462));
-    yield* generalChunks(open(), target, handedOut);
+    yield* generalChunks(first ?? open(), target, handedOut);
 }
 
 ;// CONCATENATED MODULE: ./src/data/levels.ts
@@ -48227,16 +49133,29 @@ async function loadModelData(repo, descriptor, inputs, settings) {
     const columns = [...numeric, data.target, ...(weighting !== null && !inputs.includes(weighting.column) ? [weighting.column] : [])];
     const levels = new Map();
     const maxBytes = settings.caps.maxFileBytes;
+    const format = data.format;
+    const split = data.split ?? null;
     const load = async (path, line, key) => {
         let table;
+        // With a split column both sides read the one file, each keeping its own label's rows.
+        const side = split === null
+            ? undefined
+            : key === 'data.train'
+                ? { column: split.column, keep: split.train, other: split.holdout }
+                : { column: split.column, keep: split.holdout, other: split.train };
         try {
-            table = await readTable(repo, path, { columns, maxBytes });
+            table = await readTable(repo, path, { columns, maxBytes, ...(format ? { format } : {}), ...(side ? { split: side } : {}) });
         }
         catch (error) {
             throw withAsker(error, descriptor);
         }
         if (table.rows === 0) {
-            throw new core_errors/* InputError */.dz('no-rows', `\`${(0,core_errors/* clip */.$Q)(path)}\` has a header but no data rows; expected at least one row`, {
+            const why = side
+                ? ` labelled ${(0,core_errors/* quoteValue */.cl)(side.keep)} in column ${(0,core_errors/* quoteValue */.cl)(side.column)}`
+                : table.dropped > 0
+                    ? ` left after dropping ${table.dropped} with missing cells`
+                    : '';
+            throw new core_errors/* InputError */.dz('no-rows', `\`${(0,core_errors/* clip */.$Q)(path)}\` has no data rows${why}; expected at least one row`, {
                 file: descriptor.file,
                 line,
                 key,
@@ -48261,9 +49180,12 @@ async function loadModelData(repo, descriptor, inputs, settings) {
             lines: table.lines,
             rows: table.rows,
             file: path,
+            ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
             byName: table.columns,
         };
-        return weighting === null ? rows : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column), rows.lines, rows.rows, path) };
+        return weighting === null
+            ? rows
+            : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column), rows.lines, rows.rows, path) };
     };
     const train = await load(data.train, data.lines.train, 'data.train');
     const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
@@ -48308,8 +49230,12 @@ function withAsker(error, descriptor) {
         const w = descriptor.data.weighting;
         return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
     }
-    const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column));
-    const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
+    const term = descriptor.terms.find((t) => t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column);
+    const asker = column === descriptor.data.target
+        ? `\`data.target\` on line ${descriptor.data.lines.target}`
+        : term
+            ? `the ${term.kind} term on line ${term.line}`
+            : null;
     if (asker === null)
         return error;
     return new core_errors/* InputError */.dz(error.code, `${error.message} (asked for by ${asker} of ${(0,core_errors/* clip */.$Q)(descriptor.file)})`, error.location);
@@ -49590,15 +50516,27 @@ function estimateCost(shape) {
         { stage: 'fold pass', operations: build(n, b) + n * p2, sizes: rowsBy(n) },
         { stage: 'fold merges and fit', operations: 4 * k * p3 + FIT_SVDS * svd(p), sizes: `${k} folds, ${p} columns` },
         { stage: 'refinement pass', operations: build(n, b) + 2 * n * p, sizes: rowsBy(n) },
-        { stage: 'scoring pass', operations: build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0), sizes: `${n} + ${m} rows x ${p} columns` },
+        {
+            stage: 'scoring pass',
+            operations: build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0),
+            sizes: `${n} + ${m} rows x ${p} columns`,
+        },
         { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
     ];
     const grid = swingPoints(d, n);
     const sampled = Math.min(n, swing/* SWING_DEFAULTS */.qk.maxRows);
     const sorted = Math.min(n, swing/* SWING_DEFAULTS */.qk.maxGridRows);
-    parts.push({ stage: 'swing scan', operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n), sizes: `${grid} points` });
+    parts.push({
+        stage: 'swing scan',
+        operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n),
+        sizes: `${grid} points`,
+    });
     const curves = Math.min(d, MAX_PARTIAL_CURVES);
-    parts.push({ stage: 'leakage and charts', operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d, sizes: `${n} + ${m} rows x ${d} inputs` });
+    parts.push({
+        stage: 'leakage and charts',
+        operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d,
+        sizes: `${n} + ${m} rows x ${d} inputs`,
+    });
     parts.push(sweepPart(shape, k));
     return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
 }
@@ -49610,7 +50548,11 @@ function sweepPart(shape, k) {
     const p = shape.columns;
     if (sweep.kind === 'ridge') {
         const L = sweep.parameters.length;
-        return { stage: 'complexity sweep', operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p, sizes: `${L} ridge penalties x ${k} folds` };
+        return {
+            stage: 'complexity sweep',
+            operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p,
+            sizes: `${L} ridge penalties x ${k} folds`,
+        };
     }
     const perColumn = shape.buildPerRow / Math.max(1, p);
     let ops = 0;
@@ -50085,12 +51027,19 @@ function scoringPass(plan, fit, foldFactors) {
     const scaling = plan.scaling ?? null;
     try {
         if (scaling === null) {
-            crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
+            crossValidation = (0,cross_validation/* crossValidate */.DJ)(design, train, fit, folds, {
+                factors: foldFactors.perFold,
+                complements: foldFactors.complements,
+                predictions: trainPredictions,
+            });
         }
         else {
             // The scaled problem's errors are sqrt(w) times the residuals: weighted cross-validation.
             const rows = { inputs: train.inputs, y: scaling.y, rows: train.rows };
-            crossValidation = (0,cross_validation/* crossValidate */.DJ)(weightedDesign(design, scaling), rows, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements });
+            crossValidation = (0,cross_validation/* crossValidate */.DJ)(weightedDesign(design, scaling), rows, fit, folds, {
+                factors: foldFactors.perFold,
+                complements: foldFactors.complements,
+            });
             trainPredictions = (0,blocks/* predictRows */.tp)(design, train, fit.coefficients);
         }
     }
@@ -50257,7 +51206,10 @@ function checkedShipped(descriptor, design) {
     if (shipped === null)
         return null;
     if (shipped.length !== design.p) {
-        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => (0,core_errors/* clip */.$Q)(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
+        throw new core_errors/* InputError */.dz('coefficients-length', `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames
+            .slice(0, 12)
+            .map((c) => (0,core_errors/* clip */.$Q)(c))
+            .join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`, { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' });
     }
     return shipped;
 }
@@ -50379,6 +51331,9 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         descriptor: descriptor.file,
         verdict,
         rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+        ...(model.tables.train.dropped !== undefined
+            ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
+            : {}),
         parameters: model.design.p,
         columns: [...model.design.columnNames],
         metrics,
@@ -50389,7 +51344,13 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         error: null,
         extra: {
             rank_deficient: model.fit.rankDeficient,
-            terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
+            terms: model.design.terms.map((t, i) => ({
+                kind: t.spec.kind,
+                line: t.spec.line,
+                first_column: model.design.termOffsets[i],
+                columns: t.columnNames.length,
+                fixed: t.fixed,
+            })),
         },
         charts: withBaseCurves(buildChartData(model, checks), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, result_result/* jsonNumber */.qj) }, context.baseline, base?.commit ?? ''),
     };
@@ -50845,7 +51806,7 @@ function formatShard(shard) {
 const WORKER_FLAG = 'fitgateWorker';
 /** True in any worker thread fitgate started. */
 function isFitgateWorker() {
-    return !node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.isMainThread && typeof node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData === 'object' && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData !== null && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_FLAG] === true;
+    return (!node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.isMainThread && typeof node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData === 'object' && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData !== null && node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData[WORKER_FLAG] === true);
 }
 
 

@@ -56,7 +56,10 @@ function fail(message: string): void {
 async function suggestOnDiff(result: Result, inputs: ActionInputs, pr: PullRequestEvent): Promise<void> {
   if (pr.fromFork) {
     if (!hasSuggestions(result)) return;
-    say('notice', 'review suggestions are skipped: the pull request comes from a fork, whose token cannot write review comments. The result is unchanged.');
+    say(
+      'notice',
+      'review suggestions are skipped: the pull request comes from a fork, whose token cannot write review comments. The result is unchanged.',
+    );
     return;
   }
   if (!pr.headSha) {
@@ -65,15 +68,22 @@ async function suggestOnDiff(result: Result, inputs: ActionInputs, pr: PullReque
   }
   const api = createReviewApi(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
   const repo = createFsRepository(inputs.settings.root);
-  const source = { prefix: await repositoryPrefix(inputs.settings.root, inputs.prefix), read: async (file: string) => new TextDecoder().decode(await repo.read(file)) };
+  const source = {
+    prefix: await repositoryPrefix(inputs.settings.root, inputs.prefix),
+    read: async (file: string) => new TextDecoder().decode(await repo.read(file)),
+  };
   const outcome = await reviewSuggestions(api, result, source, pr.headSha);
   if (outcome.kind === 'forbidden') {
-    say('notice', `review suggestions could not be written (HTTP ${outcome.status}): the token may not write review comments on this pull request (they need pull-requests: write). The result is unchanged.`);
+    say(
+      'notice',
+      `review suggestions could not be written (HTTP ${outcome.status}): the token may not write review comments on this pull request (they need pull-requests: write). The result is unchanged.`,
+    );
   } else if (outcome.kind === 'failed') {
     say('warning', `review suggestions could not be written: ${outcome.message}. The result is unchanged.`);
   } else {
     const { created, updated, unchanged, deleted } = outcome.counts;
-    if (created + updated + unchanged + deleted > 0) core.info(`review suggestions: ${created} posted, ${updated} updated, ${unchanged} unchanged, ${deleted} removed`);
+    if (created + updated + unchanged + deleted > 0)
+      core.info(`review suggestions: ${created} posted, ${updated} updated, ${unchanged} unchanged, ${deleted} removed`);
     for (const line of outcome.skipped) core.info(neutraliseLogLine(line));
   }
 }
@@ -85,7 +95,11 @@ async function run(): Promise<void> {
     // The runner hides the token in every later line of the log.
     if (inputs.token !== '') core.setSecret(inputs.token);
     prefix = inputs.prefix;
-    const pr = pullRequestOf({ eventName: github.context.eventName ?? '', payload: github.context.payload, repository: process.env.GITHUB_REPOSITORY });
+    const pr = pullRequestOf({
+      eventName: github.context.eventName ?? '',
+      payload: github.context.payload,
+      repository: process.env.GITHUB_REPOSITORY,
+    });
 
     // The base commit first, so that the head run can compare with it.
     const baseOptions = pr?.baseSha ? await evaluateBase(inputs.settings, pr.baseSha, { fetchHint: ACTION_FETCH_HINT }) : {};
@@ -105,7 +119,13 @@ async function run(): Promise<void> {
       if (error instanceof InputError && error.code === OUTPUT_REFUSED) refused.push(error.describe());
       else say('warning', `could not write the JSON report: ${errorMessage(error)}`);
     }
-    const files = await writeFileReports(result, { ...inputs.files, sarifPrefix: prefix, failOn: inputs.settings.failOn, within: [inputs.workspace], insideOnly: true });
+    const files = await writeFileReports(result, {
+      ...inputs.files,
+      sarifPrefix: prefix,
+      failOn: inputs.settings.failOn,
+      within: [inputs.workspace],
+      insideOnly: true,
+    });
     for (const failure of files) {
       if (failure.refused) refused.push(failure.message);
       else say('warning', `could not write a file report: ${failure.message}`);
@@ -122,7 +142,10 @@ async function run(): Promise<void> {
         const api = createCommentApi(inputs.token, pr, (line) => say('warning', `GitHub API: ${line}`));
         const outcome = await upsertComment(api, formatComment(result));
         if (outcome.kind === 'forbidden') {
-          say('notice', `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`);
+          say(
+            'notice',
+            `the pull-request comment could not be written (HTTP ${outcome.status}): the token may not write to this pull request (pull requests from forks get a read-only token; the comment needs pull-requests: write). The result is unchanged and the report is in the job summary.`,
+          );
         } else if (outcome.kind === 'failed') {
           say('warning', `the pull-request comment could not be written: ${outcome.message}. The result is unchanged.`);
         }
@@ -144,7 +167,10 @@ async function run(): Promise<void> {
       [OUTPUTS.report]: report,
     });
     const failure = failureMessage(result, inputs.settings.failOn);
-    if (refused.length > 0) fail(`fitgate refused to write ${refused.length === 1 ? 'a report file' : `${refused.length} report files`} (see the errors above).${failure !== null ? ` ${failure}` : ''}`);
+    if (refused.length > 0)
+      fail(
+        `fitgate refused to write ${refused.length === 1 ? 'a report file' : `${refused.length} report files`} (see the errors above).${failure !== null ? ` ${failure}` : ''}`,
+      );
     else if (failure !== null) fail(failure);
   } catch (error) {
     try {

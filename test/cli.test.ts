@@ -14,14 +14,25 @@ const bundle = path.join(root, 'dist', 'cli', 'index.js');
 let repo: string;
 
 function cli(args: string[]): { status: number | null; stdout: string; stderr: string } {
-  const run = spawnSync(process.execPath, [bundle, ...args], { cwd: repo, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' }, maxBuffer: 64 * 1024 * 1024 });
+  const run = spawnSync(process.execPath, [bundle, ...args], {
+    cwd: repo,
+    encoding: 'utf8',
+    env: { ...process.env, NO_COLOR: '1' },
+    maxBuffer: 64 * 1024 * 1024,
+  });
   return { status: run.status, stdout: run.stdout, stderr: run.stderr };
 }
 
 function git(...args: string[]): void {
   execFileSync('git', args, {
     cwd: repo,
-    env: { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com' },
+    env: {
+      ...process.env,
+      GIT_AUTHOR_NAME: 't',
+      GIT_AUTHOR_EMAIL: 't@example.com',
+      GIT_COMMITTER_NAME: 't',
+      GIT_COMMITTER_EMAIL: 't@example.com',
+    },
     stdio: 'pipe',
   });
 }

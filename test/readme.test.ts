@@ -26,12 +26,18 @@ function section(markdown: string, heading: string): string {
 function schemaKeys(schema: Record<string, unknown>, prefix = ''): string[] {
   const props = (schema.properties ?? {}) as Record<string, Record<string, unknown>>;
   // Leaves only: an object key is documented through its own keys (`data.train`, `fit.ridge`).
-  return Object.entries(props).flatMap(([k, v]) => (v.type === 'object' && k !== 'limits' ? schemaKeys(v, `${prefix}${k}.`) : [prefix + k]));
+  return Object.entries(props).flatMap(([k, v]) =>
+    v.type === 'object' && k !== 'limits' ? schemaKeys(v, `${prefix}${k}.`) : [prefix + k],
+  );
 }
 
 /** GitHub's anchor for a heading: lower case, punctuation dropped, spaces as hyphens. */
 function anchor(heading: string): string {
-  return heading.trim().toLowerCase().replace(/[^\p{L}\p{N}\s_-]/gu, '').replace(/ /g, '-');
+  return heading
+    .trim()
+    .toLowerCase()
+    .replace(/[^\p{L}\p{N}\s_-]/gu, '')
+    .replace(/ /g, '-');
 }
 
 /** The anchors of a Markdown document's headings (outside fenced blocks). */
@@ -115,7 +121,13 @@ describe('docs/configuration.md', () => {
 });
 
 describe('links between the documents', () => {
-  const documents = ['README.md', 'DEVELOPERS.md', ...readdirSync(path.join(root, 'docs')).filter((f) => f.endsWith('.md')).map((f) => `docs/${f}`)];
+  const documents = [
+    'README.md',
+    'DEVELOPERS.md',
+    ...readdirSync(path.join(root, 'docs'))
+      .filter((f) => f.endsWith('.md'))
+      .map((f) => `docs/${f}`),
+  ];
 
   it.each(documents)('every relative link of %s points at a file and heading that exist', (document) => {
     const text = read(document);

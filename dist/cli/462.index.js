@@ -12,12 +12,14 @@ export const modules = {
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4296);
 /* harmony import */ var _line_blocks_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(4113);
 /* harmony import */ var _csv_rules_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(8706);
+/* harmony import */ var _csv_format_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(3838);
 /**
  * The general CSV path: csv-parse (streaming API) with quoted fields, CRLF, blank lines and
  * white space around fields. Every record goes through csv-parse's `on_record` hook as soon
  * as it is parsed, so rows are checked and converted in file order and errors come out in
  * file order whatever the piece sizes.
  */
+
 
 
 
@@ -44,6 +46,10 @@ async function* generalChunks(pieces, target, skipRows = 0) {
     let plan = null;
     let breaksInFields = 0;
     let dataRows = 0;
+    const format = target.format;
+    const plain = format === undefined || (format.decimal === '.' && format.missing === 'error');
+    const split = target.split;
+    let splitField = -1;
     const onRecord = (record, info) => {
         const line = 1 + info.empty_lines + (info.records - 1) + breaksInFields;
         for (const field of record) {
@@ -52,6 +58,8 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         }
         if (plan === null) {
             plan = (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .planColumns */ .j7)(file, record, line, request);
+            if (split !== undefined)
+                splitField = (0,_csv_format_js__WEBPACK_IMPORTED_MODULE_4__/* .splitFieldOf */ .ID)(file, record, line, split);
             target.onHeader(plan);
             if (target.headerOnly)
                 throw new StopReading();
@@ -59,12 +67,36 @@ async function* generalChunks(pieces, target, skipRows = 0) {
         }
         if (record.length !== plan.header.length)
             throw (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .raggedError */ .L6)(file, line, plan.header.length, record.length);
+        if (splitField !== -1 && split !== undefined) {
+            const label = record[splitField];
+            if (label !== split.keep) {
+                if (label === split.other)
+                    return null;
+                throw (0,_csv_format_js__WEBPACK_IMPORTED_MODULE_4__/* .splitLabelError */ .rS)(label, file, line, split);
+            }
+        }
         if (dataRows++ < skipRows)
             return null;
         const { fieldOfSlot } = plan;
         const row = builder.row;
-        for (let slot = 0; slot < fieldOfSlot.length; slot++) {
-            builder.slots[slot][row] = (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .cellNumber */ .W4)(record[fieldOfSlot[slot]], file, line, request.distinct[slot]);
+        if (plain) {
+            for (let slot = 0; slot < fieldOfSlot.length; slot++) {
+                builder.slots[slot][row] = (0,_csv_rules_js__WEBPACK_IMPORTED_MODULE_3__/* .cellNumber */ .W4)(record[fieldOfSlot[slot]], file, line, request.distinct[slot]);
+            }
+        }
+        else {
+            let missing = false;
+            for (let slot = 0; slot < fieldOfSlot.length; slot++) {
+                const value = (0,_csv_format_js__WEBPACK_IMPORTED_MODULE_4__/* .formatCellNumber */ .v0)(record[fieldOfSlot[slot]], file, line, request.distinct[slot], format);
+                if (Number.isNaN(value))
+                    missing = true;
+                builder.slots[slot][row] = value;
+            }
+            if (missing) {
+                if (target.counts !== undefined)
+                    target.counts.dropped++;
+                return null;
+            }
         }
         builder.lines[row] = line;
         builder.endRow();
@@ -72,7 +104,7 @@ async function* generalChunks(pieces, target, skipRows = 0) {
     };
     const parser = (0,csv_parse__WEBPACK_IMPORTED_MODULE_0__/* .parse */ .qg)({
         bom: false, // line-blocks drops it
-        delimiter: ',',
+        delimiter: format?.separator === undefined || format.separator === 'auto' ? ',' : format.separator,
         quote: '"',
         escape: '"',
         record_delimiter: ['\r\n', '\n'],

@@ -170,7 +170,12 @@ function createGitRepository(options) {
         listing ??= runGit(cwd, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit], 1024 * 1024 * 1024).then((out) => parseTree(out, prefix));
         return listing;
     };
-    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
+    const outside = (file, where, target) => new errors/* InputError */.dz(repo_path/* PATH_OUTSIDE */.oE, `path ${(0,errors/* quoteValue */.cl)(target)} leaves the repository through a link in ${label}; expected a path inside it`, {
+        file: where.file ?? file,
+        line: where.line,
+        column: where.column,
+        key: where.key,
+    });
     const missing = (file) => new errors/* InputError */.dz(repo_path/* FILE_MISSING */.GY, `no such file in ${label}; expected an existing file`, { file });
     /**
      * Follows links component by component inside the tree. Returns the final path and its entry
@@ -338,11 +343,17 @@ async function evaluateBase(settings, revision, options) {
     const short = /^[0-9a-f]{40,64}$/.test(revision) ? revision.slice(0, 7) : revision;
     const top = await tryGitTopLevel(settings.root);
     if (top === null)
-        return { notes: [`base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`] };
+        return {
+            notes: [
+                `base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`,
+            ],
+        };
     const sha = await tryResolveCommit(settings.root, revision);
     if (sha === null)
         return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
-    const prefix = external_node_path_default().relative(await (0,promises_.realpath)(top), await (0,promises_.realpath)(settings.root)).split((external_node_path_default()).sep).join('/');
+    const prefix = external_node_path_default().relative(await (0,promises_.realpath)(top), await (0,promises_.realpath)(settings.root))
+        .split((external_node_path_default()).sep)
+        .join('/');
     const repo = createGitRepository({ cwd: settings.root, commit: sha, prefix });
     try {
         // Explicitly named descriptors that do not exist at the base are new in the head.
@@ -368,7 +379,9 @@ async function evaluateBase(settings, revision, options) {
         return { baseline, baselineData, baseCommit: sha, notes: [] };
     }
     catch (error) {
-        return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,errors/* errorMessage */.gJ)(error)}); models are not compared with it in this run.`] };
+        return {
+            notes: [`base commit ${sha.slice(0, 7)} could not be checked (${(0,errors/* errorMessage */.gJ)(error)}); models are not compared with it in this run.`],
+        };
     }
 }
 
@@ -435,17 +448,29 @@ function patternProblem(pattern) {
     if (p.includes('\u0000'))
         return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p)) {
-        return { kind: 'outside', message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root`,
+        };
     }
     if (p.split(/[/{},()|]/).some((piece) => piece === '..')) {
-        return { kind: 'outside', message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)`,
+        };
     }
     const alternatives = expandBraces(p, MAX_ALTERNATIVES);
     if (alternatives === null) {
-        return { kind: 'complex', message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)` };
+        return {
+            kind: 'complex',
+            message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)`,
+        };
     }
     if (alternatives.some((a) => a.startsWith('/') || /^[A-Za-z]:/.test(a))) {
-        return { kind: 'outside', message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root`,
+        };
     }
     return null;
 }
@@ -687,7 +712,10 @@ function compilePatterns(patterns) {
             throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(problem.kind === 'outside' ? _repo_path_js__WEBPACK_IMPORTED_MODULE_1__/* .PATH_OUTSIDE */ .oE : GLOB_TOO_COMPLEX, problem.message, {});
         const text = pattern.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
         for (const alt of expandBraces(text) ?? []) {
-            const parts = alt.replace(/^(\.\/)+/, '').split('/').filter((s) => s !== '' && s !== '.');
+            const parts = alt
+                .replace(/^(\.\/)+/, '')
+                .split('/')
+                .filter((s) => s !== '' && s !== '.');
             // A pattern ending with `/` names folders, and a folder is never a descriptor: an empty
             // last segment matches no name.
             const segments = parts.map(compileSegment);

@@ -450,7 +450,9 @@ function cvCurveChart(sweep, options) {
     }
     const yRange = extent(sweep.cv, sweep.train ?? []) ?? [0, 1];
     const yLog = yRange[0] > 0 && yRange[1] / yRange[0] >= 100;
-    const sy = yLog ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0]) : linearScale(pad(yRange, 0.08), [y1, y0]);
+    const sy = yLog
+        ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0])
+        : linearScale(pad(yRange, 0.08), [y1, y0]);
     const plotX = (v) => (v === null ? null : sweep.log && v <= 0 ? zeroAt : v);
     const body = [];
     const overlay = [];
@@ -487,7 +489,12 @@ function cvCurveChart(sweep, options) {
         if (c !== null && (best < 0 || c < sweep.cv[best]))
             best = i;
     });
-    const legend = [{ mark: `${legendLine(COLOURS.holdout)}<path d="M7 3L11 7L7 11L3 7Z" fill="#fff" stroke="${COLOURS.holdout}" stroke-width="1.4"/>`, label: 'cross-validated RMSE' }];
+    const legend = [
+        {
+            mark: `${legendLine(COLOURS.holdout)}<path d="M7 3L11 7L7 11L3 7Z" fill="#fff" stroke="${COLOURS.holdout}" stroke-width="1.4"/>`,
+            label: 'cross-validated RMSE',
+        },
+    ];
     if (sweep.train)
         legend.push({ mark: legendLine(COLOURS.train, DASHES.reference, 1.6), label: 'training RMSE' });
     if (sweep.chosen !== null)
@@ -791,7 +798,11 @@ function residualsChart(chart, options) {
     const sy = linearScale(pad([-m, m]), [y1, y0]);
     const a = marks('train', chart.train.fitted, chart.train.residual, sx, sy);
     const b = marks('holdout', chart.holdout.fitted, chart.holdout.residual, sx, sy);
-    const body = [`<line class="zero" x1="${x0}" y1="${px(sy(0))}" x2="${x1}" y2="${px(sy(0))}" stroke="${COLOURS.reference}" stroke-width="1.2"/>`, a.markup, b.markup].join('');
+    const body = [
+        `<line class="zero" x1="${x0}" y1="${px(sy(0))}" x2="${x1}" y2="${px(sy(0))}" stroke="${COLOURS.reference}" stroke-width="1.2"/>`,
+        a.markup,
+        b.markup,
+    ].join('');
     const label = (0,units/* axisLabel */.M)(chart.target);
     return frame_frame({
         id,
@@ -901,10 +912,10 @@ function overviewRow(m, i) {
 }
 /** The overview table, one piece per row. */
 function* overview(result) {
-    yield ('<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
+    yield '<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
         '<table><thead><tr><th>Status</th><th>Model</th><th class="num">Training rows</th><th class="num">Hold-out rows</th><th class="num">Parameters</th>' +
         '<th class="num">Hold-out RMSE</th><th class="num">Gap ratio</th><th class="num">Max std. coef.</th><th>Over a limit</th></tr></thead>' +
-        '<tbody>');
+        '<tbody>';
     for (let i = 0; i < result.models.length; i++)
         yield overviewRow(result.models[i], i);
     yield '</tbody></table></section>';
@@ -913,7 +924,9 @@ function checksTable(m) {
     const rows = m.checks.map((c) => {
         const title = (0,checks/* findCheck */.Sd)(c.id)?.title ?? c.id;
         const advice = c.advice ? ` <span class="advice">${(0,report_escape/* escapeHtml */.ZD)(c.advice)}</span>` : '';
-        const suggestion = c.suggestion ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>` : '';
+        const suggestion = c.suggestion
+            ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${(0,report_escape/* escapeHtml */.ZD)(c.suggestion.text)}</span>`
+            : '';
         return (`<tr data-check="${(0,report_escape/* escapeHtml */.ZD)(c.id)}" data-status="${(0,report_escape/* escapeHtml */.ZD)(c.status)}"><td>${(0,report_escape/* escapeHtml */.ZD)(title)}<br><code class="muted">${(0,report_escape/* escapeHtml */.ZD)(c.id)}</code></td><td>${badge(c.status)}</td>` +
             `<td class="num">${num(c.value)}</td><td class="num">${(0,report_escape/* escapeHtml */.ZD)((0,wording/* limitText */.PW)(c))}</td><td class="num">${c.line}</td>` +
             `<td class="finding">${(0,report_escape/* escapeHtml */.ZD)(c.message)}.${advice}${suggestion}</td></tr>`);
@@ -1192,7 +1205,9 @@ function sarifLog(result, options = {}) {
                 level: 'error',
                 message: { text: `${m.name}: could not be checked: ${m.error.message}` },
                 descriptor: { id: m.error.code },
-                locations: [{ physicalLocation: { artifactLocation: { uri: pathUri(prefix, file), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } }],
+                locations: [
+                    { physicalLocation: { artifactLocation: { uri: pathUri(prefix, file), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } },
+                ],
             });
             continue;
         }
@@ -1208,7 +1223,14 @@ function sarifLog(result, options = {}) {
                 ...(index === undefined ? {} : { ruleIndex: index }),
                 level,
                 message: { text: `${m.name}: ${c.message}.${advice}` },
-                locations: [{ physicalLocation: { artifactLocation: { uri: pathUri(prefix, m.descriptor), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } }],
+                locations: [
+                    {
+                        physicalLocation: {
+                            artifactLocation: { uri: pathUri(prefix, m.descriptor), uriBaseId: '%SRCROOT%' },
+                            ...(r ? { region: r } : {}),
+                        },
+                    },
+                ],
                 partialFingerprints: { 'fitgateFinding/v1': fingerprint(m.name, c.id) },
                 properties: {
                     model: m.name,
@@ -1281,13 +1303,21 @@ var safe_write = __webpack_require__(9725);
  */
 async function writeFileReports(result, files) {
     const failures = [];
-    const place = (name) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
+    const place = (name) => ({
+        option: `${files.optionPrefix ?? ''}${name}`,
+        within: files.within,
+        insideOnly: files.insideOnly ?? false,
+    });
     const attempt = (name, file, pieces) => {
         try {
             (0,safe_write/* writeFileSafely */.kv)(file, pieces(), place(name));
         }
         catch (error) {
-            failures.push({ option: place(name).option, refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC, message: (0,errors/* errorMessage */.gJ)(error) });
+            failures.push({
+                option: place(name).option,
+                refused: error instanceof errors/* InputError */.dz && error.code === safe_write/* OUTPUT_REFUSED */.LC,
+                message: (0,errors/* errorMessage */.gJ)(error),
+            });
         }
     };
     if (files.html !== null)
@@ -1317,17 +1347,60 @@ async function writeFileReports(result, files) {
  */
 /** Unit suffixes (lower case, after the last `_`) and how they are shown. Common practice in data files. */
 const UNITS = {
-    mm: 'mm', cm: 'cm', m: 'm', km: 'km', in: 'in', ft: 'ft',
-    mg: 'mg', g: 'g', kg: 'kg', t: 't', lb: 'lb',
-    ml: 'mL', l: 'L', m3: 'm³',
-    ms: 'ms', s: 's', sec: 's', min: 'min', h: 'h', hr: 'h', hours: 'h', days: 'days', d: 'd',
-    c: '°C', degc: '°C', f: '°F', degf: '°F', k: 'K',
-    pct: '%', percent: '%', ppm: 'ppm', ppb: 'ppb',
-    pa: 'Pa', kpa: 'kPa', mpa: 'MPa', bar: 'bar', psi: 'psi',
-    w: 'W', kw: 'kW', mw: 'MW', kwh: 'kWh', wh: 'Wh', j: 'J', kj: 'kJ',
-    v: 'V', a: 'A', hz: 'Hz', rpm: 'rpm',
-    usd: 'USD', eur: 'EUR', gbp: 'GBP',
-    mps: 'm/s', kmh: 'km/h', lpm: 'L/min',
+    mm: 'mm',
+    cm: 'cm',
+    m: 'm',
+    km: 'km',
+    in: 'in',
+    ft: 'ft',
+    mg: 'mg',
+    g: 'g',
+    kg: 'kg',
+    t: 't',
+    lb: 'lb',
+    ml: 'mL',
+    l: 'L',
+    m3: 'm³',
+    ms: 'ms',
+    s: 's',
+    sec: 's',
+    min: 'min',
+    h: 'h',
+    hr: 'h',
+    hours: 'h',
+    days: 'days',
+    d: 'd',
+    c: '°C',
+    degc: '°C',
+    f: '°F',
+    degf: '°F',
+    k: 'K',
+    pct: '%',
+    percent: '%',
+    ppm: 'ppm',
+    ppb: 'ppb',
+    pa: 'Pa',
+    kpa: 'kPa',
+    mpa: 'MPa',
+    bar: 'bar',
+    psi: 'psi',
+    w: 'W',
+    kw: 'kW',
+    mw: 'MW',
+    kwh: 'kWh',
+    wh: 'Wh',
+    j: 'J',
+    kj: 'kJ',
+    v: 'V',
+    a: 'A',
+    hz: 'Hz',
+    rpm: 'rpm',
+    usd: 'USD',
+    eur: 'EUR',
+    gbp: 'GBP',
+    mps: 'm/s',
+    kmh: 'km/h',
+    lpm: 'L/min',
 };
 /** The unit a column name ends in (`depth_m` -> `m`), or null. */
 function unitOf(column) {

@@ -40,7 +40,11 @@ var units = __webpack_require__(3332);
 /** A number for a Mermaid series: 4 significant digits, plain decimal notation. */
 function value(v) {
     const r = Number(v.toPrecision(4));
-    return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r)))))) : String(r);
+    return Object.is(r, -0)
+        ? '0'
+        : String(r).includes('e')
+            ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r))))))
+            : String(r);
 }
 /** Indices of at most `max` evenly spaced entries of a list of `n`, first and last kept. */
 function evenly(n, max) {
@@ -266,7 +270,9 @@ function formatMarkdown(result, options = {}) {
         const tableBudget = bytes(out) + Math.max(left / 2, left - detailBytes);
         let size = bytes(out) + bytes(tableHead);
         const keep = new Set();
-        const order = result.models.map((_, i) => i).sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
+        const order = result.models
+            .map((_, i) => i)
+            .sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
         for (const i of order) {
             if (size + bytes(rows[i]) > tableBudget)
                 break;
@@ -314,17 +320,60 @@ function formatMarkdown(result, options = {}) {
  */
 /** Unit suffixes (lower case, after the last `_`) and how they are shown. Common practice in data files. */
 const UNITS = {
-    mm: 'mm', cm: 'cm', m: 'm', km: 'km', in: 'in', ft: 'ft',
-    mg: 'mg', g: 'g', kg: 'kg', t: 't', lb: 'lb',
-    ml: 'mL', l: 'L', m3: 'm³',
-    ms: 'ms', s: 's', sec: 's', min: 'min', h: 'h', hr: 'h', hours: 'h', days: 'days', d: 'd',
-    c: '°C', degc: '°C', f: '°F', degf: '°F', k: 'K',
-    pct: '%', percent: '%', ppm: 'ppm', ppb: 'ppb',
-    pa: 'Pa', kpa: 'kPa', mpa: 'MPa', bar: 'bar', psi: 'psi',
-    w: 'W', kw: 'kW', mw: 'MW', kwh: 'kWh', wh: 'Wh', j: 'J', kj: 'kJ',
-    v: 'V', a: 'A', hz: 'Hz', rpm: 'rpm',
-    usd: 'USD', eur: 'EUR', gbp: 'GBP',
-    mps: 'm/s', kmh: 'km/h', lpm: 'L/min',
+    mm: 'mm',
+    cm: 'cm',
+    m: 'm',
+    km: 'km',
+    in: 'in',
+    ft: 'ft',
+    mg: 'mg',
+    g: 'g',
+    kg: 'kg',
+    t: 't',
+    lb: 'lb',
+    ml: 'mL',
+    l: 'L',
+    m3: 'm³',
+    ms: 'ms',
+    s: 's',
+    sec: 's',
+    min: 'min',
+    h: 'h',
+    hr: 'h',
+    hours: 'h',
+    days: 'days',
+    d: 'd',
+    c: '°C',
+    degc: '°C',
+    f: '°F',
+    degf: '°F',
+    k: 'K',
+    pct: '%',
+    percent: '%',
+    ppm: 'ppm',
+    ppb: 'ppb',
+    pa: 'Pa',
+    kpa: 'kPa',
+    mpa: 'MPa',
+    bar: 'bar',
+    psi: 'psi',
+    w: 'W',
+    kw: 'kW',
+    mw: 'MW',
+    kwh: 'kWh',
+    wh: 'Wh',
+    j: 'J',
+    kj: 'kJ',
+    v: 'V',
+    a: 'A',
+    hz: 'Hz',
+    rpm: 'rpm',
+    usd: 'USD',
+    eur: 'EUR',
+    gbp: 'GBP',
+    mps: 'm/s',
+    kmh: 'km/h',
+    lpm: 'L/min',
 };
 /** The unit a column name ends in (`depth_m` -> `m`), or null. */
 function unitOf(column) {

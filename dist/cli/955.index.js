@@ -62,17 +62,29 @@ function patternProblem(pattern) {
     if (p.includes('\u0000'))
         return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
     if (p.startsWith('/') || /^[A-Za-z]:/.test(p)) {
-        return { kind: 'outside', message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root`,
+        };
     }
     if (p.split(/[/{},()|]/).some((piece) => piece === '..')) {
-        return { kind: 'outside', message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)`,
+        };
     }
     const alternatives = expandBraces(p, MAX_ALTERNATIVES);
     if (alternatives === null) {
-        return { kind: 'complex', message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)` };
+        return {
+            kind: 'complex',
+            message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)`,
+        };
     }
     if (alternatives.some((a) => a.startsWith('/') || /^[A-Za-z]:/.test(a))) {
-        return { kind: 'outside', message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root` };
+        return {
+            kind: 'outside',
+            message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root`,
+        };
     }
     return null;
 }
@@ -314,7 +326,10 @@ function compilePatterns(patterns) {
             throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(problem.kind === 'outside' ? _repo_path_js__WEBPACK_IMPORTED_MODULE_1__/* .PATH_OUTSIDE */ .oE : GLOB_TOO_COMPLEX, problem.message, {});
         const text = pattern.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
         for (const alt of expandBraces(text) ?? []) {
-            const parts = alt.replace(/^(\.\/)+/, '').split('/').filter((s) => s !== '' && s !== '.');
+            const parts = alt
+                .replace(/^(\.\/)+/, '')
+                .split('/')
+                .filter((s) => s !== '' && s !== '.');
             // A pattern ending with `/` names folders, and a folder is never a descriptor: an empty
             // last segment matches no name.
             const segments = parts.map(compileSegment);

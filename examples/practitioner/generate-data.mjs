@@ -21,7 +21,9 @@ function normal(u) {
 }
 
 function write(name, header, rows) {
-  const text = [header.join(','), ...rows.map((r) => r.map((v) => (typeof v === 'number' ? Number(v.toPrecision(6)) : v)).join(','))].join('\n');
+  const text = [header.join(','), ...rows.map((r) => r.map((v) => (typeof v === 'number' ? Number(v.toPrecision(6)) : v)).join(','))].join(
+    '\n',
+  );
   writeFileSync(`${here}data/${name}`, `${text}\n`);
 }
 

@@ -25,7 +25,8 @@ export const ACTION_FETCH_HINT =
   'fetch it with `fetch-depth: 2` on actions/checkout (a pull_request checkout is the merge commit, whose first parent is the base). Models are not compared with the base branch in this run.';
 
 /** Hint for the command line. */
-export const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`) or name a commit that exists locally. Models are not compared with a base in this run.';
+export const CLI_FETCH_HINT =
+  'fetch it (for example `git fetch origin <branch>`) or name a commit that exists locally. Models are not compared with a base in this run.';
 
 /**
  * The head run's options from the base commit: the baseline by model name with each base model's
@@ -38,11 +39,19 @@ export const CLI_FETCH_HINT = 'fetch it (for example `git fetch origin <branch>`
 export async function evaluateBase(settings: Settings, revision: string, options: BaseOptions): Promise<PipelineOptions> {
   const short = /^[0-9a-f]{40,64}$/.test(revision) ? revision.slice(0, 7) : revision;
   const top = await tryGitTopLevel(settings.root);
-  if (top === null) return { notes: [`base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`] };
+  if (top === null)
+    return {
+      notes: [
+        `base commit ${short} is not available: ${settings.root} is not inside a git work tree. Models are not compared with a base in this run.`,
+      ],
+    };
   const sha = await tryResolveCommit(settings.root, revision);
   if (sha === null) return { notes: [`base commit ${short} is not available; ${options.fetchHint}`] };
 
-  const prefix = path.relative(await realpath(top), await realpath(settings.root)).split(path.sep).join('/');
+  const prefix = path
+    .relative(await realpath(top), await realpath(settings.root))
+    .split(path.sep)
+    .join('/');
   const repo = createGitRepository({ cwd: settings.root, commit: sha, prefix });
   try {
     // Explicitly named descriptors that do not exist at the base are new in the head.
@@ -63,6 +72,8 @@ export async function evaluateBase(settings: Settings, revision: string, options
     }
     return { baseline, baselineData, baseCommit: sha, notes: [] };
   } catch (error) {
-    return { notes: [`base commit ${sha.slice(0, 7)} could not be checked (${errorMessage(error)}); models are not compared with it in this run.`] };
+    return {
+      notes: [`base commit ${sha.slice(0, 7)} could not be checked (${errorMessage(error)}); models are not compared with it in this run.`],
+    };
   }
 }

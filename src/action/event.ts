@@ -55,7 +55,9 @@ export function pullRequestOf(context: EventContext): PullRequestEvent | null {
   const headRepo = record(head?.repo);
   const baseRepo = record(record(pr?.base)?.repo);
   const fromFork =
-    typeof headRepo?.full_name === 'string' && typeof baseRepo?.full_name === 'string' ? headRepo.full_name !== baseRepo.full_name : headRepo?.fork === true;
+    typeof headRepo?.full_name === 'string' && typeof baseRepo?.full_name === 'string'
+      ? headRepo.full_name !== baseRepo.full_name
+      : headRepo?.fork === true;
   return {
     owner,
     repo,

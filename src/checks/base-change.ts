@@ -31,7 +31,8 @@ const check: Check = {
   measure({ metrics, baseline }) {
     if (!baseline) return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
     const base = baseline.metrics ? fromJsonNumber(baseline.metrics.holdout_rmse) : Number.NaN;
-    if (Number.isNaN(base)) return { value: null, reason: 'base-not-checked', message: 'the model could not be checked on the base commit' };
+    if (Number.isNaN(base))
+      return { value: null, reason: 'base-not-checked', message: 'the model could not be checked on the base commit' };
     const head = metrics.holdoutRmse;
     const value = base === 0 ? (head === 0 ? 0 : Infinity) : (head - base) / base;
     return {

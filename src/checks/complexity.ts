@@ -73,7 +73,16 @@ const check: Check = {
       chosen: sweep.chosen,
       best: sweep.best,
       current: sweep.current,
-      curve: sweep.curve.map((c) => ({ setting: c.setting, label: c.label, parameters: c.parameters, cv_rmse: c.cvRmse, mean_mse: c.meanMse, se_mse: c.seMse, current: c.current, ...(c.failed ? { failed: c.failed } : {}) })),
+      curve: sweep.curve.map((c) => ({
+        setting: c.setting,
+        label: c.label,
+        parameters: c.parameters,
+        cv_rmse: c.cvRmse,
+        mean_mse: c.meanMse,
+        se_mse: c.seMse,
+        current: c.current,
+        ...(c.failed ? { failed: c.failed } : {}),
+      })),
     });
     const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
     if (sweep.chosen === sweep.current) {

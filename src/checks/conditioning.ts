@@ -24,7 +24,8 @@ const check: Check = {
   smallest singular value (the most nearly collinear combination) when the figure is above 1e3.
 - Metric \`condition_number_scaled\`. Detail: \`collinear_columns\`, \`collinear_term_lines\`, \`rank\`,
   \`singular_values_scaled\`.`,
-  advice: 'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
+  advice:
+    'Drop or merge the named terms, lower the degree, centre and scale polynomial inputs (the default shift and scale), or add a ridge penalty.',
   line: (d) => d.termsLine,
   measureClassifier: classifierConditioning,
   measure({ fit, design, descriptor }) {
@@ -40,13 +41,26 @@ const check: Check = {
     };
     const terms = [...new Set(fit.collinearColumns.map(termOf).filter((t) => t >= 0))];
     const line = terms.length > 0 ? design.terms[terms[0]].spec.line : descriptor.fit.line;
-    const named = columns.length > 0 ? `; nearly collinear: ${columns.slice(0, 8).map((c) => clip(c)).join(', ')}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}` : '';
+    const named =
+      columns.length > 0
+        ? `; nearly collinear: ${columns
+            .slice(0, 8)
+            .map((c) => clip(c))
+            .join(
+              ', ',
+            )}${columns.length > 8 ? ', …' : ''}${terms.length > 0 ? ` (${terms.length === 1 ? 'term on line' : 'terms on lines'} ${terms.map((t) => design.terms[t].spec.line).join(', ')})` : ''}`
+        : '';
     return {
       value,
       message: `the column-scaled design has condition number ${formatNumber(value)} (rank ${fit.rank} of ${design.p})${value > 1e3 ? named : ''}`,
       line,
       metrics: { condition_number_scaled: jsonNumber(value) },
-      detail: { collinear_columns: columns, collinear_term_lines: terms.map((t) => design.terms[t].spec.line), rank: fit.rank, singular_values_scaled: Array.from(fit.singularValuesScaled, jsonNumber) },
+      detail: {
+        collinear_columns: columns,
+        collinear_term_lines: terms.map((t) => design.terms[t].spec.line),
+        rank: fit.rank,
+        singular_values_scaled: Array.from(fit.singularValuesScaled, jsonNumber),
+      },
     };
   },
 };

@@ -40,7 +40,8 @@ const check: Check = {
 - Metrics: \`cv_rmse\`, \`loocv_rmse\`, \`gcv\`, \`effective_df\`, \`effective_df_per_sample\`, \`cv_folds\`.
   Detail: \`folds\`, \`fold_order\`, \`seed\`, \`fold_rows\`, \`fold_rmse\`, \`cv_rmse\`, \`loocv_rmse\`, \`press\`,
   \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
-  advice: 'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
+  advice:
+    'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,
   measureClassifier: classifierCrossValidation,
   measure(context) {
@@ -82,7 +83,10 @@ const check: Check = {
       };
     }
     const ratio = gapRatio(metrics.trainRmse, cv.cvRmse);
-    const loo = cv.rowsWithLeverageOne > 0 ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)` : formatNumber(cv.loocvRmse);
+    const loo =
+      cv.rowsWithLeverageOne > 0
+        ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)`
+        : formatNumber(cv.loocvRmse);
     return {
       value: ratio,
       message: `${cv.k}-fold CV RMSE ${formatNumber(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,

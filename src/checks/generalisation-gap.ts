@@ -18,7 +18,8 @@ const check: Check = {
   when both are 0. A model that has learnt noise scores far better on the rows it was fitted to than
   on new rows (Hastie, Tibshirani & Friedman, The Elements of Statistical Learning, 2nd ed., 2009,
   section 7.2). The default 1.5 is common practice, not a law: set it per model.`,
-  advice: 'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
+  advice:
+    'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
   line: (d) => d.fit.line,
   measureClassifier: classifierGap,
   measure({ metrics }) {

@@ -70,7 +70,12 @@ function validate(checks: Check[]): Check[] {
  * order: the source of src/config/generated/limit-keys.ts, of the JSON Schemas' `limits` and of
  * docs/checks.md (test/tools/gen-validators.mjs writes them; tests keep them current).
  */
-export function registryLimitKeys(): { key: string; defaultSpec: Check['defaultLimit']; direction: Check['direction']; description: string }[] {
+export function registryLimitKeys(): {
+  key: string;
+  defaultSpec: Check['defaultLimit'];
+  direction: Check['direction'];
+  description: string;
+}[] {
   return CHECKS.map((c) => ({ key: c.limitKey, defaultSpec: c.defaultLimit, direction: c.direction, description: c.limitSummary }));
 }
 
@@ -80,8 +85,14 @@ export function findCheck(id: string): Check | undefined {
 }
 
 function describeLimit(status: CheckResult['status'], value: number, limit: Limit): string {
-  if (status === 'fail') return limit.failBelow !== null && value < limit.failBelow ? `under the fail floor ${formatNumber(limit.failBelow)}` : `over the fail limit ${formatNumber(limit.fail)}`;
-  if (status === 'warn') return limit.warnBelow !== null && value < limit.warnBelow ? `under the warning floor ${formatNumber(limit.warnBelow)}` : `over the warning limit ${formatNumber(limit.warn)}`;
+  if (status === 'fail')
+    return limit.failBelow !== null && value < limit.failBelow
+      ? `under the fail floor ${formatNumber(limit.failBelow)}`
+      : `over the fail limit ${formatNumber(limit.fail)}`;
+  if (status === 'warn')
+    return limit.warnBelow !== null && value < limit.warnBelow
+      ? `under the warning floor ${formatNumber(limit.warnBelow)}`
+      : `over the warning limit ${formatNumber(limit.warn)}`;
   if (limit.off) return 'limit is off';
   const parts: string[] = [];
   if (limit.warnBelow !== null) parts.push(`warn below ${formatNumber(limit.warnBelow)}`);
@@ -106,7 +117,11 @@ export function runCheck(check: Check, context: CheckContext): { outcome: CheckR
 export function runClassifierCheck(check: Check, context: ClassifierContext): { outcome: CheckResult; figures: Measurement['metrics'] } {
   const measure = check.measureClassifier;
   if (!appliesTo(check, 'classification') || measure === undefined) {
-    return judgeCheck(check, context.descriptor, () => ({ value: null, reason: 'not-for-classification', message: 'applies to regression models only' }));
+    return judgeCheck(check, context.descriptor, () => ({
+      value: null,
+      reason: 'not-for-classification',
+      message: 'applies to regression models only',
+    }));
   }
   return judgeCheck(check, context.descriptor, () => measure.call(check, context));
 }
@@ -116,7 +131,11 @@ export function checksFor(task: Task): Check[] {
   return CHECKS.filter((c) => task === 'classification' || appliesTo(c, task));
 }
 
-function judgeCheck(check: Check, descriptor: Descriptor, measure: () => Measurement): { outcome: CheckResult; figures: Measurement['metrics'] } {
+function judgeCheck(
+  check: Check,
+  descriptor: Descriptor,
+  measure: () => Measurement,
+): { outcome: CheckResult; figures: Measurement['metrics'] } {
   const context = { descriptor };
   const limit = context.descriptor.limits[check.limitKey];
   const line = limit?.line ?? null;
@@ -142,7 +161,9 @@ function judgeCheck(check: Check, descriptor: Descriptor, measure: () => Measure
     limitKey: check.limitKey,
     limit: effective.off ? null : effective.fail,
     warn: effective.off ? null : effective.warn,
-    ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null) ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } } : {}),
+    ...(!effective.off && (effective.warnBelow !== null || effective.failBelow !== null)
+      ? { floor: { warn: effective.warnBelow, fail: effective.failBelow } }
+      : {}),
     line: line ?? measured.line ?? check.line(context.descriptor),
     message: `${measured.message}${comparison}`,
     advice: status === 'fail' || status === 'warn' ? (measured.advice ?? check.advice) : '',

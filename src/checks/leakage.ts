@@ -48,11 +48,21 @@ const check: Check = {
       train_file: train.file,
     };
     if (leak.inputMatches === 0) {
-      return { value: 0, message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.map((c) => clip(c)).join(', ')}`, metrics, detail };
+      return {
+        value: 0,
+        message: `no hold-out row of ${leak.holdoutRows} repeats a training row in ${design.inputs.map((c) => clip(c)).join(', ')}`,
+        metrics,
+        detail,
+      };
     }
-    const lines = (file: string, ls: number[]): string => `${clip(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+    const lines = (file: string, ls: number[]): string =>
+      `${clip(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
     const target =
-      leak.fullMatches === leak.inputMatches ? 'all with the same target' : leak.fullMatches === 0 ? 'none with the same target' : `${leak.fullMatches} with the same target`;
+      leak.fullMatches === leak.inputMatches
+        ? 'all with the same target'
+        : leak.fullMatches === 0
+          ? 'none with the same target'
+          : `${leak.fullMatches} with the same target`;
     return {
       value: leak.inputMatches,
       message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => clip(c)).join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,

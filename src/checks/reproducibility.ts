@@ -15,7 +15,8 @@ const check: Check = {
   limitKey: 'reproducibility',
   defaultLimit: 0.01,
   direction: 'above',
-  limitSummary: 'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
+  limitSummary:
+    'Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.',
   description: `- Default \`0.01\`. Points at \`coefficients\`. Skipped (code
   \`reproducibility/no-coefficients\`) when the descriptor ships none.
 - Figure: the largest absolute difference between the predictions of the shipped \`coefficients\` and
@@ -24,7 +25,8 @@ const check: Check = {
 - Metric \`shipped_prediction_difference\`. Detail: \`max_prediction_difference\`, \`target_range\`,
   \`at_line\` (hold-out line of the largest difference), \`shipped_holdout_rmse\`, \`refit_holdout_rmse\`,
   \`holdout_rmse_ratio\` (shipped / refit), \`max_coefficient_difference\`.`,
-  advice: 'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
+  advice:
+    'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
   measureClassifier: classifierReproducibility,
   measure({ shipped, predictions, holdout, metrics, descriptor }) {

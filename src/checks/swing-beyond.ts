@@ -19,12 +19,17 @@ const check: Check = {
   (other inputs at their medians). Reported apart from \`swing\` because some extrapolation error is
   expected of any model. Metric \`swing_beyond\`; detail \`margin\`, \`points\`, \`worst\`. The chart curves
   are in the \`swing\` outcome (they include the margins).`,
-  advice: 'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
+  advice:
+    'Do not use the model outside its training range, or choose terms that level off (fewer polynomial powers, radial terms) so that it extrapolates calmly.',
   line: (d) => d.termsLine,
   measure(context) {
     const swing = context.analyses.swing();
     if (Number.isNaN(swing.beyond)) {
-      return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is no range to step beyond' };
+      return {
+        value: null,
+        reason: 'not-applicable',
+        message: 'no input has two distinct training values, so there is no range to step beyond',
+      };
     }
     const where = describePoint(swing.worstBeyond);
     return {
@@ -35,7 +40,12 @@ const check: Check = {
           : `within ${formatNumber(swing.margin * 100)} % of the range beyond the samples the predictions stay inside the training target band`,
       line: inputLine(context, swing.worstBeyond),
       metrics: { swing_beyond: jsonNumber(swing.beyond) },
-      detail: { margin: swing.margin, points: swing.points.beyond, worst: swing.worstBeyond === null ? null : { inputs: swing.worstBeyond.inputs, prediction: jsonNumber(swing.worstBeyond.prediction) } },
+      detail: {
+        margin: swing.margin,
+        points: swing.points.beyond,
+        worst:
+          swing.worstBeyond === null ? null : { inputs: swing.worstBeyond.inputs, prediction: jsonNumber(swing.worstBeyond.prediction) },
+      },
     };
   },
 };

@@ -45,7 +45,8 @@ const check: Check = {
   limitKey: 'swing',
   defaultLimit: { warn: 0.25, fail: 0.5 },
   direction: 'above',
-  limitSummary: 'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
+  limitSummary:
+    'How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.',
   description: `- Default \`{ warn: 0.25, fail: 0.5 }\`. Points at the line of the term that reads
   the input where the largest excursion happened (models of one input), else at \`terms\`.
 - Figure: how far the predictions between the training samples leave the band [min y, max y] of the
@@ -70,12 +71,18 @@ const check: Check = {
   \`{ input, others: { <input>: median }, range: [min x, max x], x: number[], prediction: number[] }\`,
   x ascending over the range and both margins, at most 400 points (thinned evenly, always keeping the
   largest and smallest prediction).`,
-  advice: 'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
+  advice:
+    'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
   line: (d) => d.termsLine,
   measure(context) {
     const swing = context.analyses.swing();
     if (Number.isNaN(swing.inside)) {
-      return { value: null, reason: 'not-applicable', message: 'no input has two distinct training values, so there is nothing between samples to scan', detail: swingDetail(swing) };
+      return {
+        value: null,
+        reason: 'not-applicable',
+        message: 'no input has two distinct training values, so there is nothing between samples to scan',
+        detail: swingDetail(swing),
+      };
     }
     const where = describePoint(swing.worstInside);
     return {

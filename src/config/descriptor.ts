@@ -10,7 +10,19 @@ import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
-import type { DataFormat, Descriptor, FoldOrder, LimitSpec, ParameterCount, RbfCenters, SettingsFile, TermSpec, Weighting, InputTransform, MultiRbfCenters } from './types.js';
+import type {
+  DataFormat,
+  Descriptor,
+  FoldOrder,
+  LimitSpec,
+  ParameterCount,
+  RbfCenters,
+  SettingsFile,
+  TermSpec,
+  Weighting,
+  InputTransform,
+  MultiRbfCenters,
+} from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
 export { checkUniqueNames } from './discover.js';
@@ -49,10 +61,22 @@ export async function loadDescriptor(repo: RepoReader, path: string, settings: S
     const resolved = await repo.resolve(path, descriptor.data[which], where);
     const kind = await repo.entryKind(resolved);
     if (kind === 'missing') {
-      throw errorAt(doc, path, DESCRIPTOR_ERROR.dataMissing, key, `${showValue(descriptor.data[which])} (${clip(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`);
+      throw errorAt(
+        doc,
+        path,
+        DESCRIPTOR_ERROR.dataMissing,
+        key,
+        `${showValue(descriptor.data[which])} (${clip(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`,
+      );
     }
     if (kind !== 'file') {
-      throw errorAt(doc, path, DESCRIPTOR_ERROR.notAFile, key, `${showValue(descriptor.data[which])} (${clip(resolved)}) ${kindWords(kind)}; expected a CSV file relative to this descriptor's folder`);
+      throw errorAt(
+        doc,
+        path,
+        DESCRIPTOR_ERROR.notAFile,
+        key,
+        `${showValue(descriptor.data[which])} (${clip(resolved)}) ${kindWords(kind)}; expected a CSV file relative to this descriptor's folder`,
+      );
     }
     descriptor.data[which] = resolved;
   }
@@ -79,7 +103,13 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   const fitLine = raw.fit ? line(['fit']) : termsLine;
   const limits = readLimits(doc, file, raw.limits, ['limits']);
   if (raw.fit?.refit === false && !raw.coefficients) {
-    throw errorAt(doc, file, 'score-only-coefficients', ['fit', 'refit'], '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`');
+    throw errorAt(
+      doc,
+      file,
+      'score-only-coefficients',
+      ['fit', 'refit'],
+      '`refit: false` scores the shipped coefficients, and the descriptor ships none; expected `coefficients` (one per column, intercept first) or `refit: true`',
+    );
   }
 
   return {
@@ -125,9 +155,20 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
 }
 
 /** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
-function readWeighting(doc: YamlDocument, file: string, data: RawDescriptor['data'], line: (path: (string | number)[]) => number): Weighting | null {
+function readWeighting(
+  doc: YamlDocument,
+  file: string,
+  data: RawDescriptor['data'],
+  line: (path: (string | number)[]) => number,
+): Weighting | null {
   if (data.weight !== undefined && data.sigma !== undefined) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.weighting, ['data', 'sigma'], 'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)');
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.weighting,
+      ['data', 'sigma'],
+      'both `weight` and `sigma` are given; expected one of them (sigma means weight 1 / sigma^2)',
+    );
   }
   if (data.weight !== undefined) return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
   if (data.sigma !== undefined) return { kind: 'sigma', column: data.sigma, line: line(['data', 'sigma']) };
@@ -143,11 +184,32 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
   if ('linear' in term) return { kind: 'linear', columns: [...term.linear], line };
   if ('polynomial' in term) {
     const p = term.polynomial;
-    if (Array.isArray(p.of)) return withTransform(readMultiPolynomial(doc, file, p as RawPolynomial & { of: string[] }, ['terms', index, 'polynomial'], line), p.transform);
+    if (Array.isArray(p.of))
+      return withTransform(
+        readMultiPolynomial(doc, file, p as RawPolynomial & { of: string[] }, ['terms', index, 'polynomial'], line),
+        p.transform,
+      );
     for (const key of ['shift', 'scale'] as const) {
-      if (Array.isArray(p[key])) throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, ['terms', index, 'polynomial', key], `\`${key}\` is a list but \`of\` names one column; expected one number`);
+      if (Array.isArray(p[key]))
+        throw errorAt(
+          doc,
+          file,
+          DESCRIPTOR_ERROR.polynomial,
+          ['terms', index, 'polynomial', key],
+          `\`${key}\` is a list but \`of\` names one column; expected one number`,
+        );
     }
-    return withTransform({ kind: 'polynomial', of: p.of, degree: p.degree, shift: (p.shift as number | undefined) ?? null, scale: (p.scale as number | undefined) ?? null, line }, p.transform);
+    return withTransform(
+      {
+        kind: 'polynomial',
+        of: p.of,
+        degree: p.degree,
+        shift: (p.shift as number | undefined) ?? null,
+        scale: (p.scale as number | undefined) ?? null,
+        line,
+      },
+      p.transform,
+    );
   }
   if ('fourier' in term) {
     const f = term.fourier;
@@ -155,15 +217,37 @@ function readTerm(doc: YamlDocument, file: string, term: RawTerm, index: number,
   }
   if ('category' in term) {
     const c = term.category;
-    return { kind: 'category', of: c.of, reference: c.reference === undefined ? null : String(c.reference), unseen: c.unseen ?? 'error', line };
+    return {
+      kind: 'category',
+      of: c.of,
+      reference: c.reference === undefined ? null : String(c.reference),
+      unseen: c.unseen ?? 'error',
+      line,
+    };
   }
   if ('spline' in term) return withTransform(readSpline(doc, file, term.spline, ['terms', index, 'spline'], line), term.spline.transform);
   const r = term.rbf;
-  if (Array.isArray(r.of)) return withTransform(readMultiRbf(doc, file, r as RawRbf & { of: string[] }, ['terms', index, 'rbf'], line), r.transform);
+  if (Array.isArray(r.of))
+    return withTransform(readMultiRbf(doc, file, r as RawRbf & { of: string[] }, ['terms', index, 'rbf'], line), r.transform);
   if (Array.isArray(r.centers) && r.centers.some((c) => typeof c !== 'number')) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, ['terms', index, 'rbf', 'centers'], '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs');
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.centers,
+      ['terms', index, 'rbf', 'centers'],
+      '`of` names one column, so the centres are numbers (a list), `{ from, to, count }`, `{ from, to, step }` or `at-samples`; rows and grids are for several inputs',
+    );
   }
-  return withTransform({ kind: 'rbf', of: r.of, centers: readCenters(doc, file, r.centers as RawCenters, ['terms', index, 'rbf', 'centers']), width: r.width, line }, r.transform);
+  return withTransform(
+    {
+      kind: 'rbf',
+      of: r.of,
+      centers: readCenters(doc, file, r.centers as RawCenters, ['terms', index, 'rbf', 'centers']),
+      width: r.width,
+      line,
+    },
+    r.transform,
+  );
 }
 
 /** The spec with its `transform` when one is written (absent otherwise, so specs without one keep their shape). */
@@ -179,30 +263,76 @@ function readMultiRbf(doc: YamlDocument, file: string, r: RawRbf & { of: string[
   if (Array.isArray(c) && c.every((row) => Array.isArray(row))) {
     const rows = c as number[][];
     rows.forEach((row, i) => {
-      if (row.length !== k) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i], `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`);
+      if (row.length !== k)
+        throw errorAt(
+          doc,
+          file,
+          DESCRIPTOR_ERROR.centers,
+          [...at, 'centers', i],
+          `centre ${i + 1} has ${row.length} values for ${k} inputs; expected one per input of \`of\`, in the same order`,
+        );
     });
     return spec({ kind: 'rows', rows: rows.map((row) => [...row]) });
   }
   if (Array.isArray(c) && c.every((axis) => typeof axis === 'object' && axis !== null && !Array.isArray(axis))) {
     const axes = c as { from: number; to: number; count: number }[];
-    if (axes.length !== k) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``);
+    if (axes.length !== k)
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.centers,
+        [...at, 'centers'],
+        `the grid has ${axes.length} axes for ${k} inputs; expected one { from, to, count } per input of \`of\``,
+      );
     const total = axes.reduce((p, a) => p * a.count, 1);
-    if (total > MAX_RBF_CENTERS) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`);
+    if (total > MAX_RBF_CENTERS)
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.centers,
+        [...at, 'centers'],
+        `the grid has ${total} centres; expected at most ${MAX_RBF_CENTERS}`,
+      );
     axes.forEach((a, i) => {
-      if (a.to < a.from) throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers', i, 'to'], `\`to\` ${showValue(a.to)} is below \`from\` ${showValue(a.from)}; expected from <= to`);
+      if (a.to < a.from)
+        throw errorAt(
+          doc,
+          file,
+          DESCRIPTOR_ERROR.centers,
+          [...at, 'centers', i, 'to'],
+          `\`to\` ${showValue(a.to)} is below \`from\` ${showValue(a.from)}; expected from <= to`,
+        );
     });
     return spec({ kind: 'grid', axes: axes.map((a) => ({ from: a.from, to: a.to, count: a.count })) });
   }
-  throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'centers'], `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``);
+  throw errorAt(
+    doc,
+    file,
+    DESCRIPTOR_ERROR.centers,
+    [...at, 'centers'],
+    `\`of\` names ${k} columns, so the centres are a list of rows (one value per input), a grid (one { from, to, count } per input) or \`at-samples\``,
+  );
 }
 
-function readMultiPolynomial(doc: YamlDocument, file: string, p: RawPolynomial & { of: string[] }, at: (string | number)[], line: number): TermSpec {
+function readMultiPolynomial(
+  doc: YamlDocument,
+  file: string,
+  p: RawPolynomial & { of: string[] },
+  at: (string | number)[],
+  line: number,
+): TermSpec {
   const perInput = (key: 'shift' | 'scale'): (number | null)[] => {
     const v = p[key];
     if (v === undefined) return p.of.map(() => null);
     if (!Array.isArray(v)) return p.of.map(() => v);
     if (v.length !== p.of.length) {
-      throw errorAt(doc, file, DESCRIPTOR_ERROR.polynomial, [...at, key], `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`);
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.polynomial,
+        [...at, key],
+        `\`${key}\` has ${v.length} values for ${p.of.length} inputs; expected one per input of \`of\`, in the same order`,
+      );
     }
     return [...v];
   };
@@ -213,13 +343,25 @@ function readSpline(doc: YamlDocument, file: string, spline: RawSpline, at: (str
   const degree = spline.degree ?? 3;
   const natural = spline.natural ?? false;
   if (natural && degree !== 3) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'degree'], `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${showValue(degree)}`);
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.spline,
+      [...at, 'degree'],
+      `natural splines are cubic; expected degree 3 (or no degree) with \`natural: true\`, got ${showValue(degree)}`,
+    );
   }
   if (Array.isArray(spline.knots)) {
     const values = [...spline.knots];
     for (let k = 1; k < values.length; k++) {
       if (!(values[k] > values[k - 1])) {
-        throw errorAt(doc, file, DESCRIPTOR_ERROR.spline, [...at, 'knots', k], `knot ${showValue(values[k])} does not follow ${showValue(values[k - 1])}; expected strictly increasing knots`);
+        throw errorAt(
+          doc,
+          file,
+          DESCRIPTOR_ERROR.spline,
+          [...at, 'knots', k],
+          `knot ${showValue(values[k])} does not follow ${showValue(values[k - 1])}; expected strictly increasing knots`,
+        );
       }
     }
     return { kind: 'spline', of: spline.of, knots: { kind: 'list', values }, degree, natural, line };
@@ -231,17 +373,35 @@ function readCenters(doc: YamlDocument, file: string, centers: RawCenters, at: (
   if (centers === 'at-samples') return { kind: 'at-samples' };
   if (Array.isArray(centers)) return { kind: 'list', values: [...centers] };
   if (centers.to < centers.from) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'to'], `\`to\` ${showValue(centers.to)} is below \`from\` ${showValue(centers.from)}; expected from <= to`);
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.centers,
+      [...at, 'to'],
+      `\`to\` ${showValue(centers.to)} is below \`from\` ${showValue(centers.from)}; expected from <= to`,
+    );
   }
   if ('count' in centers) {
     if (centers.count > 1 && centers.to === centers.from) {
-      throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'count'], `${centers.count} centres from ${centers.from} to ${centers.to} would all coincide; expected from < to or count 1`);
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.centers,
+        [...at, 'count'],
+        `${centers.count} centres from ${centers.from} to ${centers.to} would all coincide; expected from < to or count 1`,
+      );
     }
     return { kind: 'count', from: centers.from, to: centers.to, count: centers.count };
   }
   const n = Math.floor((centers.to - centers.from) / centers.step) + 1;
   if (!(n <= MAX_RBF_CENTERS)) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.centers, [...at, 'step'], `step ${showValue(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`);
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.centers,
+      [...at, 'step'],
+      `step ${showValue(centers.step)} gives ${Number.isFinite(n) ? n : 'too many'} centres from ${centers.from} to ${centers.to}; expected at most ${MAX_RBF_CENTERS}`,
+    );
   }
   return { kind: 'step', from: centers.from, to: centers.to, step: centers.step };
 }
@@ -264,7 +424,16 @@ interface RawDescriptor {
     split?: { column: string; train: string; holdout: string };
   };
   terms: RawTerm[];
-  fit?: { intercept?: boolean; refit?: boolean; ridge?: number; folds?: number; fold_order?: FoldOrder; seed?: number; parameter_count?: ParameterCount; threshold?: number };
+  fit?: {
+    intercept?: boolean;
+    refit?: boolean;
+    ridge?: number;
+    folds?: number;
+    fold_order?: FoldOrder;
+    seed?: number;
+    parameter_count?: ParameterCount;
+    threshold?: number;
+  };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }
@@ -279,9 +448,20 @@ type RawTerm =
   | { spline: RawSpline }
   | { category: { of: string; reference?: string | number; unseen?: 'error' | 'zero' } };
 
-type RawRbf = { of: string | string[]; centers: RawCenters | number[][] | { from: number; to: number; count: number }[]; width: number; transform?: InputTransform };
+type RawRbf = {
+  of: string | string[];
+  centers: RawCenters | number[][] | { from: number; to: number; count: number }[];
+  width: number;
+  transform?: InputTransform;
+};
 
-type RawPolynomial = { of: string | string[]; degree: number; shift?: number | number[]; scale?: number | number[]; transform?: InputTransform };
+type RawPolynomial = {
+  of: string | string[];
+  degree: number;
+  shift?: number | number[];
+  scale?: number | number[];
+  transform?: InputTransform;
+};
 
 type RawSpline = { of: string; knots: number[] | { count: number }; degree?: number; natural?: boolean; transform?: InputTransform };
 
@@ -292,15 +472,41 @@ type RawSpline = { of: string; knots: number[] | { count: number }; degree?: num
  */
 function checkDataForm(doc: YamlDocument, file: string, data: RawDescriptor['data']): void {
   if (data.holdout === undefined && data.split === undefined) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data'], 'expected `data.holdout` (a hold-out CSV) or `data.split` (a split column in the training file); got neither', 'key');
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.dataForm,
+      ['data'],
+      'expected `data.holdout` (a hold-out CSV) or `data.split` (a split column in the training file); got neither',
+      'key',
+    );
   }
   if (data.holdout !== undefined && data.split !== undefined) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split'], 'expected either `data.holdout` or `data.split`, not both: with a split column the hold-out rows come from the training file', 'key');
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.dataForm,
+      ['data', 'split'],
+      'expected either `data.holdout` or `data.split`, not both: with a split column the hold-out rows come from the training file',
+      'key',
+    );
   }
   if (data.split !== undefined && data.split.train === data.split.holdout) {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'split', 'holdout'], `expected a hold-out label different from the training label ${showValue(data.split.train)}`);
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.dataForm,
+      ['data', 'split', 'holdout'],
+      `expected a hold-out label different from the training label ${showValue(data.split.train)}`,
+    );
   }
   if (data.decimal === ',' && data.separator === ',') {
-    throw errorAt(doc, file, DESCRIPTOR_ERROR.dataForm, ['data', 'decimal'], 'a decimal comma needs a separator other than the comma; expected `data.separator` to be ";" or "\\t" (or `auto`)');
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.dataForm,
+      ['data', 'decimal'],
+      'a decimal comma needs a separator other than the comma; expected `data.separator` to be ";" or "\\t" (or `auto`)',
+    );
   }
 }

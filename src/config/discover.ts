@@ -56,9 +56,16 @@ export async function discoverDescriptors(repo: RepoReader, settings: SettingsFi
       const path = normaliseGiven(given);
       const kind = await repo.entryKind(path);
       if (kind === 'missing') {
-        throw new InputError(DISCOVER_ERROR.missing, `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`, { file: given });
+        throw new InputError(
+          DISCOVER_ERROR.missing,
+          `descriptor not found in ${repo.label}; expected a repository-relative path to a *.model.yml file`,
+          { file: given },
+        );
       }
-      if (kind !== 'file') throw new InputError(DISCOVER_ERROR.notAFile, `the descriptor ${kindWords(kind)}; expected a regular *.model.yml file`, { file: given });
+      if (kind !== 'file')
+        throw new InputError(DISCOVER_ERROR.notAFile, `the descriptor ${kindWords(kind)}; expected a regular *.model.yml file`, {
+          file: given,
+        });
       found.add(path);
     }
     return { paths: [...found].sort(), notes };
@@ -67,12 +74,25 @@ export async function discoverDescriptors(repo: RepoReader, settings: SettingsFi
     const where = { file: settings.file ?? undefined, line: modelPatternLine(settings, index) ?? undefined, key: `models[${index}]` };
     const shown = quoteValue(pattern);
     const { matches, twins, links } = await globWithTwin(repo, pattern, where);
-    const unread = twins.length > 0 ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)` : '';
-    const unsearched = links.length > 0 ? `${listNames(links)} ${links.length === 1 ? 'is a symbolic link' : 'are symbolic links'} that the pattern would search below; links are never followed as folders (name the real folder in the pattern)` : '';
+    const unread =
+      twins.length > 0
+        ? `${listNames(twins)} ${twins.length === 1 ? 'is' : 'are'} not read: the pattern asks for .yml, and fitgate reads only the names a pattern matches (rename ${twins.length === 1 ? 'it' : 'them'} to .yml, or change the pattern)`
+        : '';
+    const unsearched =
+      links.length > 0
+        ? `${listNames(links)} ${links.length === 1 ? 'is a symbolic link' : 'are symbolic links'} that the pattern would search below; links are never followed as folders (name the real folder in the pattern)`
+        : '';
     if (matches.length === 0) {
       const source = settings.file === null ? ' (the default, as there is no settings file)' : '';
-      const why = [unread, unsearched].filter((t) => t !== '').map((t) => `; ${t}`).join('');
-      throw new InputError(DISCOVER_ERROR.globEmpty, `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`, where);
+      const why = [unread, unsearched]
+        .filter((t) => t !== '')
+        .map((t) => `; ${t}`)
+        .join('');
+      throw new InputError(
+        DISCOVER_ERROR.globEmpty,
+        `pattern ${shown}${source} matches no file in ${repo.label}; expected at least one model descriptor${why}`,
+        where,
+      );
     }
     if (unread !== '') notes.push(`pattern ${shown}: ${unread}.`);
     if (unsearched !== '') notes.push(`pattern ${shown}: ${unsearched}.`);
@@ -86,14 +106,22 @@ export async function discoverDescriptors(repo: RepoReader, settings: SettingsFi
  * the pattern, twin files that the pattern does not match, and links the pattern would search
  * below. A refused pattern becomes an InputError at the settings line.
  */
-async function globWithTwin(repo: RepoReader, pattern: string, where: ErrorLocation): Promise<{ matches: string[]; twins: string[]; links: string[] }> {
+async function globWithTwin(
+  repo: RepoReader,
+  pattern: string,
+  where: ErrorLocation,
+): Promise<{ matches: string[]; twins: string[]; links: string[] }> {
   const twin = pattern.endsWith('.yml') ? `${pattern.slice(0, -4)}.yaml` : null;
   try {
     if (twin !== null) {
       try {
         const both = await repo.glob([pattern, twin]);
         // Every match of a pattern ending with the literal `.yml` ends with it, and every match of the twin with `.yaml`.
-        return { matches: both.paths.filter((p) => p.endsWith('.yml')), twins: both.paths.filter((p) => p.endsWith('.yaml')), links: both.notEntered };
+        return {
+          matches: both.paths.filter((p) => p.endsWith('.yml')),
+          twins: both.paths.filter((p) => p.endsWith('.yaml')),
+          links: both.notEntered,
+        };
       } catch (error) {
         if (!(error instanceof InputError)) throw error;
         // The twin alone is over a cap: fall through to the pattern alone, whose error (if any) is the one to show.
@@ -138,7 +166,9 @@ function normaliseGiven(given: string): string {
   const p = given.replace(/\\/g, '/');
   const normal = posix.normalize(p).replace(/^(\.\/)+/, '');
   if (p.startsWith('/') || /^[A-Za-z]:/.test(p) || normal === '..' || normal.startsWith('../')) {
-    throw new InputError(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', { file: given });
+    throw new InputError(DISCOVER_ERROR.outside, 'is outside the repository; expected a path relative to the repository root', {
+      file: given,
+    });
   }
   return normal;
 }

@@ -31,11 +31,18 @@ export function limitDirection(key: string): LimitDirection {
 }
 
 /** The bounds of an explicit spec, or null for the other forms. */
-function explicitBounds(spec: LimitSpec): { warnBelow: number | null; failBelow: number | null; warnAbove: number | null; failAbove: number | null } | null {
+function explicitBounds(
+  spec: LimitSpec,
+): { warnBelow: number | null; failBelow: number | null; warnAbove: number | null; failAbove: number | null } | null {
   if (typeof spec !== 'object' || spec === null) return null;
   if (!('warn_below' in spec || 'fail_below' in spec || 'warn_above' in spec || 'fail_above' in spec)) return null;
   const s = spec as { warn_below?: number; fail_below?: number; warn_above?: number; fail_above?: number };
-  return { warnBelow: s.warn_below ?? null, failBelow: s.fail_below ?? null, warnAbove: s.warn_above ?? null, failAbove: s.fail_above ?? null };
+  return {
+    warnBelow: s.warn_below ?? null,
+    failBelow: s.fail_below ?? null,
+    warnAbove: s.warn_above ?? null,
+    failAbove: s.fail_above ?? null,
+  };
 }
 
 /**
@@ -52,11 +59,14 @@ export function limitOrderProblem(spec: LimitSpec, direction: LimitDirection): [
   const warnAbove = b ? b.warnAbove : direction === 'above' ? (plain.warn ?? null) : null;
   const failAbove = b ? b.failAbove : direction === 'above' ? (plain.fail ?? null) : null;
   const [wa, fa, wb, fb] = b ? ['warn_above', 'fail_above', 'warn_below', 'fail_below'] : ['warn', 'fail', 'warn', 'fail'];
-  if (warnAbove !== null && failAbove !== null && warnAbove > failAbove) return [wa, `${wa} ${warnAbove} is above ${fa} ${failAbove}; expected ${wa} <= ${fa} (a ceiling warns before it fails)`];
-  if (warnBelow !== null && failBelow !== null && warnBelow < failBelow) return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
+  if (warnAbove !== null && failAbove !== null && warnAbove > failAbove)
+    return [wa, `${wa} ${warnAbove} is above ${fa} ${failAbove}; expected ${wa} <= ${fa} (a ceiling warns before it fails)`];
+  if (warnBelow !== null && failBelow !== null && warnBelow < failBelow)
+    return [wb, `${wb} ${warnBelow} is below ${fb} ${failBelow}; expected ${wb} >= ${fb} (a floor warns before it fails)`];
   const floor = Math.max(warnBelow ?? -Infinity, failBelow ?? -Infinity);
   const ceiling = Math.min(warnAbove ?? Infinity, failAbove ?? Infinity);
-  if (floor > ceiling) return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
+  if (floor > ceiling)
+    return [b ? 'warn_below' : 'warn', `the floor ${floor} is above the ceiling ${ceiling}; every value would be out of bounds`];
   return null;
 }
 
@@ -74,9 +84,12 @@ export function toLimit(spec: LimitSpec, direction: LimitDirection, source: Limi
   if (spec === 'off') return { ...none, off: true, source, line };
   if (typeof spec === 'number') {
     assertThreshold(spec);
-    return direction === 'above' ? { ...none, fail: spec, off: false, source, line } : { ...none, failBelow: spec, off: false, source, line };
+    return direction === 'above'
+      ? { ...none, fail: spec, off: false, source, line }
+      : { ...none, failBelow: spec, off: false, source, line };
   }
-  if (spec === null || typeof spec !== 'object') throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
+  if (spec === null || typeof spec !== 'object')
+    throw new TypeError(`limit spec must be a number, an object of bounds or 'off', got ${String(spec)}`);
   const problem = limitOrderProblem(spec, direction);
   if (problem !== null) throw new RangeError(problem[1]);
   const b = explicitBounds(spec);
@@ -85,7 +98,10 @@ export function toLimit(spec: LimitSpec, direction: LimitDirection, source: Limi
     limit = { warn: b.warnAbove, fail: b.failAbove, warnBelow: b.warnBelow, failBelow: b.failBelow, off: false, source, line };
   } else {
     const { warn = null, fail = null } = spec as { warn?: number; fail?: number };
-    limit = direction === 'above' ? { ...none, warn, fail, off: false, source, line } : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
+    limit =
+      direction === 'above'
+        ? { ...none, warn, fail, off: false, source, line }
+        : { ...none, warnBelow: warn, failBelow: fail, off: false, source, line };
   }
   const bounds = [limit.warn, limit.fail, limit.warnBelow, limit.failBelow].filter((x): x is number => x !== null);
   if (bounds.length === 0) throw new RangeError('a limit needs at least one bound');
@@ -113,6 +129,7 @@ export function mergeLimits(
   const merged: Record<string, Limit> = {};
   for (const { key, defaultSpec, direction } of LIMIT_KEYS) merged[key] = toLimit(defaultSpec, direction, 'default', null);
   for (const [key, { spec }] of Object.entries(settings.limits)) merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
-  for (const [key, { spec, line }] of Object.entries(descriptorLimits)) merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
+  for (const [key, { spec, line }] of Object.entries(descriptorLimits))
+    merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
   return merged;
 }

@@ -50,7 +50,14 @@ export function formatKeyPath(path: KeyPath): string {
  * @param message what is wrong and what was expected
  * @param pointAt `value` (default) points at the value, `key` at the key, `parent` at the parent's key
  */
-export function errorAt(doc: YamlDocument, file: string, code: string, path: KeyPath, message: string, pointAt: 'key' | 'value' | 'parent' = 'value'): InputError {
+export function errorAt(
+  doc: YamlDocument,
+  file: string,
+  code: string,
+  path: KeyPath,
+  message: string,
+  pointAt: 'key' | 'value' | 'parent' = 'value',
+): InputError {
   const position = locate(doc, path, pointAt);
   const key = formatKeyPath(path);
   return new InputError(code, message, { file, ...(position ?? {}), ...(key !== '' ? { key } : {}) });
@@ -103,7 +110,9 @@ function locate(doc: YamlDocument, path: KeyPath, pointAt: 'key' | 'value' | 'pa
 
 /** Replaces each failed oneOf/anyOf and its branch errors by the errors of the branch the user meant, or one "expected one of" error. */
 function resolveAlternatives(errors: ErrorObject[]): ErrorObject[] {
-  const alternatives = errors.filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf').sort((a, b) => a.schemaPath.length - b.schemaPath.length);
+  const alternatives = errors
+    .filter((e) => e.keyword === 'oneOf' || e.keyword === 'anyOf')
+    .sort((a, b) => a.schemaPath.length - b.schemaPath.length);
   if (alternatives.length === 0) return errors;
   const outer = alternatives[0];
   const prefix = `${outer.schemaPath}/`;
@@ -116,7 +125,8 @@ function resolveAlternatives(errors: ErrorObject[]): ErrorObject[] {
     branches.set(index, [...(branches.get(index) ?? []), e]);
   }
   const matchingType = [...branches.entries()].filter(
-    ([, list]) => !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')),
+    ([, list]) =>
+      !list.some((e) => e.instancePath === outer.instancePath && (e.keyword === 'type' || e.keyword === 'const' || e.keyword === 'enum')),
   );
   const score = (list: ErrorObject[]): [number, number] => [maxOf(list.map((e) => effectiveDepth(e))), -list.length];
   let best: ErrorObject[] | null = null;
@@ -221,7 +231,9 @@ function toIssue(e: ErrorObject, root: unknown): Issue[] {
     }
     case 'enum':
       if ((e as ErrorObject & { propertyName?: string }).propertyName !== undefined) return []; // reported by propertyNames
-      return [{ path, pointAt: 'value', message: `expected one of: ${(params.allowedValues as unknown[]).map(String).join(', ')}, ${got}` }];
+      return [
+        { path, pointAt: 'value', message: `expected one of: ${(params.allowedValues as unknown[]).map(String).join(', ')}, ${got}` },
+      ];
     case 'const':
       return [{ path, pointAt: 'value', message: `expected \`${clip(String(params.allowedValue))}\`, ${got}` }];
     case 'minimum':
@@ -232,35 +244,70 @@ function toIssue(e: ErrorObject, root: unknown): Issue[] {
     case 'multipleOf':
       return [{ path, pointAt: 'value', message: `expected a multiple of ${String(params.multipleOf)}, ${got}` }];
     case 'minLength':
-      return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}` }];
+      return [
+        {
+          path,
+          pointAt: 'value',
+          message: `expected ${params.limit === 1 ? 'non-empty text' : `text of at least ${String(params.limit)} characters`}, ${got}`,
+        },
+      ];
     case 'maxLength':
-      return [{ path, pointAt: 'value', message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters` }];
+      return [
+        {
+          path,
+          pointAt: 'value',
+          message: `expected text of at most ${String(params.limit)} characters, got ${String(e.data).length} characters`,
+        },
+      ];
     case 'pattern': {
       const pattern = String(params.pattern);
       return [{ path, pointAt: 'value', message: `expected ${PATTERN_WORDS[pattern] ?? `text matching ${pattern}`}, ${got}` }];
     }
     case 'minItems':
-      return [{ path, pointAt: 'value', message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}` }];
+      return [
+        {
+          path,
+          pointAt: 'value',
+          message: `expected ${params.limit === 1 ? 'a non-empty list' : `a list of at least ${String(params.limit)} items`}, ${got}`,
+        },
+      ];
     case 'maxItems':
-      return [{ path, pointAt: 'value', message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items` }];
+      return [
+        {
+          path,
+          pointAt: 'value',
+          message: `expected a list of at most ${String(params.limit)} items, got ${Array.isArray(e.data) ? e.data.length : '?'} items`,
+        },
+      ];
     case 'required': {
       const missing = String(params.missingProperty);
       // A key present but not allowed that is a near miss of the missing one is the likely typo.
-      const present = e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
+      const present =
+        e.data !== null && typeof e.data === 'object' && !Array.isArray(e.data) ? Object.keys(e.data).filter((k) => !keys.includes(k)) : [];
       const typo = present.find((k) => nearestWord(k, [missing]) === missing);
       const hint = typo !== undefined ? ` (did you mean \`${missing}\` instead of ${quoteValue(typo, 40)}?)` : '';
-      return [{ path: [...path, missing], pointAt: 'parent', message: `missing key \`${clip(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}` }];
+      return [
+        {
+          path: [...path, missing],
+          pointAt: 'parent',
+          message: `missing key \`${clip(missing)}\`${hint}; required keys: ${(parent.required ?? [missing]).join(', ')}`,
+        },
+      ];
     }
     case 'additionalProperties': {
       const extra = String(params.additionalProperty);
       const near = nearestWord(extra, keys);
       const hint = near !== null ? ` (did you mean \`${near}\`?)` : '';
-      return [{ path: [...path, extra], pointAt: 'key', message: `unknown key \`${clip(extra)}\`${hint}; expected one of: ${keys.join(', ')}` }];
+      return [
+        { path: [...path, extra], pointAt: 'key', message: `unknown key \`${clip(extra)}\`${hint}; expected one of: ${keys.join(', ')}` },
+      ];
     }
     case 'propertyNames': {
       const name = String(params.propertyName);
       const what = isTerm ? 'term kind' : 'key';
-      return [{ path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${clip(name)}\`; expected one of: ${kinds.join(', ')}` }];
+      return [
+        { path: [...path, name], pointAt: 'key', message: `unknown ${what} \`${clip(name)}\`; expected one of: ${kinds.join(', ')}` },
+      ];
     }
     case 'minProperties':
     case 'maxProperties': {

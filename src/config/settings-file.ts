@@ -19,7 +19,12 @@ export const DEFAULT_SETTINGS_PATH = 'fitgate.yml';
 export const DEFAULT_MODEL_PATTERNS: readonly string[] = Object.freeze(['**/*.model.yml']);
 
 /** Built-in `fit` defaults: 5 shuffled folds, seed 1. */
-export const DEFAULT_FIT = Object.freeze({ folds: 5, foldOrder: 'shuffled' as FoldOrder, seed: 1, parameterCount: 'columns' as ParameterCount });
+export const DEFAULT_FIT = Object.freeze({
+  folds: 5,
+  foldOrder: 'shuffled' as FoldOrder,
+  seed: 1,
+  parameterCount: 'columns' as ParameterCount,
+});
 
 /**
  * Built-in resource caps: 512 MiB per data file, 2e8 training rows x parameters, 2e10 estimated
@@ -51,7 +56,12 @@ export function defaultSettings(): SettingsFile {
     models: [...DEFAULT_MODEL_PATTERNS],
     limits: {},
     fit: { ...DEFAULT_FIT },
-    caps: { maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB, maxCells: DEFAULT_CAPS.maxCells, maxOperations: DEFAULT_CAPS.maxOperations, maxModelSeconds: DEFAULT_CAPS.maxModelSeconds },
+    caps: {
+      maxFileBytes: DEFAULT_CAPS.maxFileMb * MIB,
+      maxCells: DEFAULT_CAPS.maxCells,
+      maxOperations: DEFAULT_CAPS.maxOperations,
+      maxModelSeconds: DEFAULT_CAPS.maxModelSeconds,
+    },
   };
 }
 
@@ -69,13 +79,21 @@ export async function loadSettings(repo: RepoReader, path: string, options: { ex
   const notes = await yamlTwinNotes(repo, path);
   if (kind === 'missing') {
     if (options.explicit) {
-      throw new InputError(SETTINGS_ERROR.missing, `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`, { file: path });
+      throw new InputError(
+        SETTINGS_ERROR.missing,
+        `settings file not found in ${repo.label}; expected a YAML file such as ${DEFAULT_SETTINGS_PATH}`,
+        { file: path },
+      );
     }
     return { ...defaultSettings(), notes };
   }
   if (kind !== 'file') {
     // A folder, a link to nothing or a FIFO where the settings belong is never taken for "no settings".
-    throw new InputError(NOT_A_FILE, `the settings file ${kindWords(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`, { file: path });
+    throw new InputError(
+      NOT_A_FILE,
+      `the settings file ${kindWords(kind)}; expected a regular YAML file there, or nothing at all (for the defaults)`,
+      { file: path },
+    );
   }
   const doc = await readYamlFile(repo, path);
   // The same object (the pattern lines are kept beside it).
@@ -98,7 +116,9 @@ async function yamlTwinNotes(repo: RepoReader, path: string): Promise<string[]> 
     return []; // a twin that leads outside is not read, and not ours to report
   }
   if (kind === 'missing') return [];
-  return [`${clip(twin)} is not read: fitgate reads its settings from ${clip(path)} (rename the file, or name it with --config / the \`config\` input)`];
+  return [
+    `${clip(twin)} is not read: fitgate reads its settings from ${clip(path)} (rename the file, or name it with --config / the \`config\` input)`,
+  ];
 }
 
 /**
@@ -130,7 +150,11 @@ export function settingsFromDocument(doc: YamlDocument, file: string): SettingsF
       maxModelSeconds: raw.caps?.max_model_seconds ?? DEFAULT_CAPS.maxModelSeconds,
     },
   };
-  if (raw.models) modelLines.set(settings, raw.models.map((_, i) => doc.positionOf(['models', i])?.line ?? 1));
+  if (raw.models)
+    modelLines.set(
+      settings,
+      raw.models.map((_, i) => doc.positionOf(['models', i])?.line ?? 1),
+    );
   return settings;
 }
 

@@ -142,7 +142,10 @@ export interface MultiPolynomialTermSpec {
 }
 
 /** Centres of a radial term over several inputs, as written (in the inputs' own units). */
-export type MultiRbfCenters = { kind: 'rows'; rows: number[][] } | { kind: 'grid'; axes: { from: number; to: number; count: number }[] } | { kind: 'at-samples' };
+export type MultiRbfCenters =
+  | { kind: 'rows'; rows: number[][] }
+  | { kind: 'grid'; axes: { from: number; to: number; count: number }[] }
+  | { kind: 'at-samples' };
 
 /**
  * `rbf: { of: [a, b, ...], centers, width }`: isotropic Gaussians exp(-||z - z_c||^2 / (2 width^2))
@@ -173,7 +176,15 @@ export interface CategoryTermSpec {
 }
 
 /** One entry of a descriptor's `terms` list. */
-export type TermSpec = LinearTermSpec | PolynomialTermSpec | RbfTermSpec | FourierTermSpec | SplineTermSpec | MultiPolynomialTermSpec | MultiRbfTermSpec | CategoryTermSpec;
+export type TermSpec =
+  | LinearTermSpec
+  | PolynomialTermSpec
+  | RbfTermSpec
+  | FourierTermSpec
+  | SplineTermSpec
+  | MultiPolynomialTermSpec
+  | MultiRbfTermSpec
+  | CategoryTermSpec;
 
 /** How cross-validation folds are assigned to rows. */
 export type FoldOrder = 'shuffled' | 'blocks';

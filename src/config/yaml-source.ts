@@ -60,11 +60,18 @@ export function decodeYamlBytes(bytes: Uint8Array, file: string): string {
     text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: false }).decode(bytes);
   } catch {
     const at = firstInvalidUtf8(bytes);
-    throw new InputError(YAML_ERROR.encoding, `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`, { file, ...positionInBytes(bytes, at) });
+    throw new InputError(
+      YAML_ERROR.encoding,
+      `is not UTF-8 text (invalid byte 0x${bytes[at].toString(16).padStart(2, '0')} at offset ${at}); expected a UTF-8 YAML file`,
+      { file, ...positionInBytes(bytes, at) },
+    );
   }
   const nul = text.indexOf('\u0000');
   if (nul >= 0) {
-    throw new InputError(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', { file, ...positionInText(text, nul) });
+    throw new InputError(YAML_ERROR.encoding, 'contains a NUL character, so it looks binary; expected a UTF-8 YAML file', {
+      file,
+      ...positionInText(text, nul),
+    });
   }
   return text;
 }
@@ -97,7 +104,11 @@ export function parseYaml(text: string, file: string): YamlDocument {
   // stack) on documents nested thousands deep, so refuse those before parsing.
   const rough = roughNesting(text);
   if (rough.depth > ROUGH_DEPTH_CAP) {
-    throw new InputError(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, { file, ...positionInText(text, rough.offset) });
+    throw new InputError(
+      YAML_ERROR.tooDeep,
+      `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`,
+      { file, ...positionInText(text, rough.offset) },
+    );
   }
 
   const lineCounter = new LineCounter();
@@ -219,10 +230,14 @@ function checkStructure(doc: Document, text: string, file: string, at: (offset: 
   const visit = (node: unknown, depth: number): void => {
     if (isMap(node) || isSeq(node)) {
       if (depth > YAML_GUARDS.maxDepth) {
-        throw new InputError(YAML_ERROR.tooDeep, `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`, {
-          file,
-          ...(node.range ? at(node.range[0]) : {}),
-        });
+        throw new InputError(
+          YAML_ERROR.tooDeep,
+          `is nested more than ${YAML_GUARDS.maxDepth} levels deep; expected a shallow settings or descriptor file`,
+          {
+            file,
+            ...(node.range ? at(node.range[0]) : {}),
+          },
+        );
       }
     }
     if (isMap(node)) {
@@ -235,20 +250,28 @@ function checkStructure(doc: Document, text: string, file: string, at: (offset: 
         if (isMap(keyNode) || isSeq(keyNode)) {
           const range = (pair.key as YamlNode | null)?.range;
           const written = range ? text.slice(range[0], range[1]).replace(/\s+/g, ' ').trim() : '';
-          throw new InputError(YAML_ERROR.collectionKey, `a ${isMap(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`, {
-            file,
-            ...at(keyOffset),
-          });
+          throw new InputError(
+            YAML_ERROR.collectionKey,
+            `a ${isMap(keyNode) ? 'mapping' : 'list'} used as a key (\`${clip(written, 40)}\`); expected a plain name before the colon`,
+            {
+              file,
+              ...at(keyOffset),
+            },
+          );
         }
         const key = keyText(pair.key);
         const before = seen.get(key);
         if (before !== undefined) {
           const first = at(before);
-          throw new InputError(YAML_ERROR.duplicateKey, `key \`${clip(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`, {
-            file,
-            key,
-            ...at(keyOffset),
-          });
+          throw new InputError(
+            YAML_ERROR.duplicateKey,
+            `key \`${clip(key)}\` appears twice in the same mapping (first at line ${first.line}); expected each key once`,
+            {
+              file,
+              key,
+              ...at(keyOffset),
+            },
+          );
         }
         seen.set(key, keyOffset);
         visit(pair.key, depth + 1);
@@ -298,7 +321,9 @@ function firstAlias(root: unknown): number | null {
 
 function checkSize(bytes: number, file: string): void {
   if (bytes > YAML_GUARDS.maxBytes) {
-    throw new InputError(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, { file });
+    throw new InputError(YAML_ERROR.tooLarge, `is ${bytes} bytes; expected a YAML file of at most ${YAML_GUARDS.maxBytes} bytes (1 MiB)`, {
+      file,
+    });
   }
 }
 

@@ -14,7 +14,11 @@ export function formatNumber(x: number | null | undefined, digits = 4): string {
   if (x === -Infinity) return '-∞';
   if (x === 0) return '0';
   const a = Math.abs(x);
-  if (a < 1e-3 || a >= 1e6) return x.toExponential(digits - 1).replace(/\.?0+e/, 'e').replace('e+', 'e');
+  if (a < 1e-3 || a >= 1e6)
+    return x
+      .toExponential(digits - 1)
+      .replace(/\.?0+e/, 'e')
+      .replace('e+', 'e');
   if (a >= 10 ** digits) return String(Math.round(x));
   const text = x.toPrecision(digits);
   return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;

@@ -211,11 +211,15 @@ function decimalPointError(cell: string, file: string, line: number, column: str
 export function splitFieldOf(file: string, header: readonly string[], headerLine: number, split: SplitFilter): number {
   const field = header.indexOf(split.column);
   if (field === -1) {
-    throw new InputError('csv-missing-column', `no split column named ${quoteValue(split.column, 40)} (from \`data.split.column\`); the header has ${header.length} column${header.length === 1 ? '' : 's'}`, {
-      file,
-      line: headerLine,
-      key: split.column,
-    });
+    throw new InputError(
+      'csv-missing-column',
+      `no split column named ${quoteValue(split.column, 40)} (from \`data.split.column\`); the header has ${header.length} column${header.length === 1 ? '' : 's'}`,
+      {
+        file,
+        line: headerLine,
+        key: split.column,
+      },
+    );
   }
   return field;
 }

@@ -145,9 +145,12 @@ export function layoutHint(header: readonly string[]): string {
   if (header.length > 0 && header[0].startsWith(LFS_POINTER)) {
     return '. Hint: the file is a Git LFS pointer, not the data: fetch the LFS objects before the check (`git lfs pull`, or `lfs: true` on the checkout step)';
   }
-  if (only.includes(';') && only.includes('\t')) return '. Hint: the header holds both semicolons and tabs and no commas, so the separator is ambiguous: set `data.separator` to ";" or "\\t" in the descriptor';
-  if (only.includes(';')) return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; set `data.separator: ";"` in the descriptor';
-  if (only.includes('\t')) return '. Hint: the header holds tabs and no commas: the file looks tab-separated; set `data.separator: "\\t"` in the descriptor';
+  if (only.includes(';') && only.includes('\t'))
+    return '. Hint: the header holds both semicolons and tabs and no commas, so the separator is ambiguous: set `data.separator` to ";" or "\\t" in the descriptor';
+  if (only.includes(';'))
+    return '. Hint: the header holds semicolons and no commas: the file looks semicolon-separated; set `data.separator: ";"` in the descriptor';
+  if (only.includes('\t'))
+    return '. Hint: the header holds tabs and no commas: the file looks tab-separated; set `data.separator: "\\t"` in the descriptor';
   return '';
 }
 
@@ -202,8 +205,10 @@ export function cellError(cell: string, file: string, line: number, column: stri
   if (text === '') why = 'the cell is empty';
   else if (DECIMAL_NUMBER.test(text) && Number.isFinite(Number(text))) {
     why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is nonzero but too small for 64-bit floating point (below about 2.2e-308 in size it reads as 0 or loses precision); rescale the column`;
-  } else if (DECIMAL_NUMBER.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
-  else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text)) why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
+  } else if (DECIMAL_NUMBER.test(text))
+    why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}, which is beyond the range of 64-bit floating point (about ±1.8e308)`;
+  else if (/^[+-]?(?:nan|inf|infinity)$/i.test(text))
+    why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}; missing and infinite values are not allowed`;
   else why = `got ${quoteValue(cell, MAX_CELL_QUOTED)}`;
   return new InputError(
     'csv-cell',

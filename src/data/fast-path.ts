@@ -88,9 +88,9 @@ export async function* fastChunks(pieces: AsyncIterable<Uint8Array>, target: Sca
   if (reader.plan === null) throw emptyError(target.file);
   reader.builder.flush();
   for (const chunk of reader.builder.take()) {
-      yield chunk;
-      if (target.recycle === true) reader.builder.recycle(chunk);
-    }
+    yield chunk;
+    if (target.recycle === true) reader.builder.recycle(chunk);
+  }
 }
 
 /** State of the fast path between blocks. */

@@ -8,16 +8,7 @@
 import { parse } from 'csv-parse';
 import { InputError } from '../core/errors.js';
 import { encodingError, lineBlocks, type LineBlock, blockError } from './line-blocks.js';
-import {
-  ChunkBuilder,
-  cellNumber,
-  emptyError,
-  planColumns,
-  raggedError,
-  type Chunk,
-  type ColumnPlan,
-  type Request,
-} from './csv-rules.js';
+import { ChunkBuilder, cellNumber, emptyError, planColumns, raggedError, type Chunk, type ColumnPlan, type Request } from './csv-rules.js';
 import { formatCellNumber, splitFieldOf, splitLabelError, type CsvFormat, type SplitFilter } from './csv-format.js';
 
 /** What a parser is asked to read, shared by both paths. */
@@ -167,9 +158,9 @@ export async function* generalChunks(pieces: AsyncIterable<Uint8Array>, target: 
       parser.write(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
       if (settle(null)) return;
       for (const chunk of builder.take()) {
-      yield chunk;
-      if (target.recycle === true) builder.recycle(chunk);
-    }
+        yield chunk;
+        if (target.recycle === true) builder.recycle(chunk);
+      }
     }
     await endParser(parser);
     if (settle(bad)) return;

@@ -187,10 +187,14 @@ export function headerTooLongError(file: string, line: number, loneCarriageRetur
   const hint = loneCarriageReturn
     ? '. Hint: the file has CR-only line ends (as classic Mac OS wrote them), so it reads as one line: save it with LF or CRLF line ends'
     : '. Hint: a file without line feeds (not CSV text, or one record per file) reads as one line';
-  return new InputError('csv-header-too-long', `the header line does not end within the first ${MAX_HEADER_BYTES} bytes (1 MiB) of the file; expected a header of comma-separated column names on one line${hint}`, {
-    file,
-    line,
-  });
+  return new InputError(
+    'csv-header-too-long',
+    `the header line does not end within the first ${MAX_HEADER_BYTES} bytes (1 MiB) of the file; expected a header of comma-separated column names on one line${hint}`,
+    {
+      file,
+      line,
+    },
+  );
 }
 
 /**
@@ -214,8 +218,12 @@ export function blockError(file: string, line: number, block: LineBlock): InputE
  */
 export function encodingError(file: string, line: number, utf16: boolean): InputError {
   const hint = utf16 ? ' (the file looks like UTF-16)' : '';
-  return new InputError('csv-encoding', `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`, {
-    file,
-    line,
-  });
+  return new InputError(
+    'csv-encoding',
+    `the line holds bytes that are not UTF-8 text${hint}; expected a UTF-8 CSV file (save it as UTF-8)`,
+    {
+      file,
+      line,
+    },
+  );
 }

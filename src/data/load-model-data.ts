@@ -47,11 +47,15 @@ export async function loadModelData(
   }
   const weighting = data.weighting ?? null;
   if (weighting !== null && weighting.column === data.target) {
-    throw new InputError('weight-is-target', `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`, {
-      file: descriptor.file,
-      line: weighting.line,
-      key: `data.${weighting.kind}`,
-    });
+    throw new InputError(
+      'weight-is-target',
+      `\`data.${weighting.kind}\` names the target column \`${data.target}\`; expected a column of its own`,
+      {
+        file: descriptor.file,
+        line: weighting.line,
+        key: `data.${weighting.kind}`,
+      },
+    );
   }
   // Category inputs are text: read apart (text-columns.ts) and coded (levels.ts), never as numbers.
   const categories = categoryColumns(descriptor);
@@ -76,7 +80,11 @@ export async function loadModelData(
       throw withAsker(error, descriptor);
     }
     if (table.rows === 0) {
-      const why = side ? ` labelled ${quoteValue(side.keep)} in column ${quoteValue(side.column)}` : table.dropped > 0 ? ` left after dropping ${table.dropped} with missing cells` : '';
+      const why = side
+        ? ` labelled ${quoteValue(side.keep)} in column ${quoteValue(side.column)}`
+        : table.dropped > 0
+          ? ` left after dropping ${table.dropped} with missing cells`
+          : '';
       throw new InputError('no-rows', `\`${clip(path)}\` has no data rows${why}; expected at least one row`, {
         file: descriptor.file,
         line,
@@ -86,7 +94,11 @@ export async function loadModelData(
     if (categories.size > 0) {
       const text = await readTextColumns(repo, path, [...categories.keys()], maxBytes);
       if (text.lines.length !== table.rows || text.lines.some((l, i) => l !== table.lines[i])) {
-        throw new InputError('csv-rows', `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`, { file: path });
+        throw new InputError(
+          'csv-rows',
+          `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
+          { file: path },
+        );
       }
       for (const [name, term] of categories) {
         const values = text.columns.get(name) as string[];
@@ -104,7 +116,9 @@ export async function loadModelData(
       ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
       byName: table.columns,
     };
-    return weighting === null ? rows : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, path) };
+    return weighting === null
+      ? rows
+      : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, path) };
   };
   const train = await load(data.train, data.lines.train, 'data.train');
   const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
@@ -125,7 +139,13 @@ export async function loadModelData(
  * w = 1 / sigma^2 with sigma finite and > 0.
  * @throws InputError `bad-weight` naming the file, line, column and value of the first bad row
  */
-export function rowWeights(weighting: Weighting, values: Float64Array, lines: Int32Array, rows: number, file: string): { weights: Float64Array; sigma?: Float64Array } {
+export function rowWeights(
+  weighting: Weighting,
+  values: Float64Array,
+  lines: Int32Array,
+  rows: number,
+  file: string,
+): { weights: Float64Array; sigma?: Float64Array } {
   const weights = new Float64Array(rows);
   const sigma = weighting.kind === 'sigma';
   for (let i = 0; i < rows; i++) {
@@ -152,11 +172,21 @@ function withAsker(error: unknown, descriptor: Descriptor): unknown {
   const column = error.location.key;
   if (descriptor.data.weighting?.column === column) {
     const w = descriptor.data.weighting;
-    return new InputError(error.code, `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`, error.location);
+    return new InputError(
+      error.code,
+      `${error.message} (asked for by \`data.${w.kind}\` on line ${w.line} of ${descriptor.file})`,
+      error.location,
+    );
   }
-  const term = descriptor.terms.find((t) => (t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column));
-  const asker = column === descriptor.data.target ? `\`data.target\` on line ${descriptor.data.lines.target}` : term ? `the ${term.kind} term on line ${term.line}` : null;
+  const term = descriptor.terms.find((t) =>
+    t.kind === 'linear' ? t.columns.includes(column) : Array.isArray(t.of) ? t.of.includes(column) : t.of === column,
+  );
+  const asker =
+    column === descriptor.data.target
+      ? `\`data.target\` on line ${descriptor.data.lines.target}`
+      : term
+        ? `the ${term.kind} term on line ${term.line}`
+        : null;
   if (asker === null) return error;
   return new InputError(error.code, `${error.message} (asked for by ${asker} of ${clip(descriptor.file)})`, error.location);
 }
-

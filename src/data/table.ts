@@ -95,7 +95,14 @@ export interface Table {
 export async function* readTableChunks(repo: RepoReader, path: string, options: ReadTableOptions): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
   await checkSize(repo, path, settings.maxBytes);
-  yield* scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, () => undefined, false, false);
+  yield* scan(
+    () => openDataFile(repo, path, settings.maxBytes),
+    path,
+    settings,
+    () => undefined,
+    false,
+    false,
+  );
 }
 
 /**
@@ -160,7 +167,14 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
   settings.columns.forEach((name, k) => {
     if (!out.has(name)) out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
   });
-  return { file: path, header, rows, columns: out, lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows), dropped: counts.dropped };
+  return {
+    file: path,
+    header,
+    rows,
+    columns: out,
+    lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows),
+    dropped: counts.dropped,
+  };
 }
 
 /**
@@ -171,12 +185,24 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
  * @param path repository-relative path of the CSV file
  * @param maxBytes size cap in bytes; default 512 MiB
  */
-export async function readHeader(repo: RepoReader, path: string, maxBytes = DEFAULT_MAX_BYTES, format?: Partial<CsvFormat>): Promise<string[]> {
+export async function readHeader(
+  repo: RepoReader,
+  path: string,
+  maxBytes = DEFAULT_MAX_BYTES,
+  format?: Partial<CsvFormat>,
+): Promise<string[]> {
   const settings = checkOptions({ columns: [], maxBytes, format });
   await checkSize(repo, path, settings.maxBytes);
   let header: string[] = [];
   // A header-only scan ends right after the header and yields no rows.
-  const scanning = scan(() => openDataFile(repo, path, settings.maxBytes), path, settings, (plan) => (header = plan.header), true, false);
+  const scanning = scan(
+    () => openDataFile(repo, path, settings.maxBytes),
+    path,
+    settings,
+    (plan) => (header = plan.header),
+    true,
+    false,
+  );
   while (!(await scanning.next()).done);
   return header;
 }

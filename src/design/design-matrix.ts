@@ -60,7 +60,12 @@ export function createDesign(terms: readonly Term[], intercept: boolean): Design
       if (intercept) out.fill(1, 0, m);
       const views = cols.map((c) => c.subarray(start, start + m));
       for (let t = 0; t < terms.length; t++) {
-        terms[t].fill(termInputIndex[t].map((k) => views[k]), m, out, offsets[t]);
+        terms[t].fill(
+          termInputIndex[t].map((k) => views[k]),
+          m,
+          out,
+          offsets[t],
+        );
       }
       return out;
     },

@@ -5,12 +5,29 @@
  * section 7.10, the "one-standard-error" rule).
  */
 import { createTerm, type Term } from '../design/terms/index.js';
-import type { Descriptor, FourierTermSpec, MultiPolynomialTermSpec, PolynomialTermSpec, RbfTermSpec, SplineTermSpec, TermSpec } from '../config/types.js';
+import type {
+  Descriptor,
+  FourierTermSpec,
+  MultiPolynomialTermSpec,
+  PolynomialTermSpec,
+  RbfTermSpec,
+  SplineTermSpec,
+  TermSpec,
+} from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { solveCoefficients, type FitResult, type QrAccumulator } from '../fit/index.js';
 import { ridgePath } from '../fit/ridge-path.js';
-import { complementCoefficients, complementFactors, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds, type FoldFactors, type Rows } from './cross-validation.js';
+import {
+  complementCoefficients,
+  complementFactors,
+  foldFactors,
+  outOfFoldErrors,
+  outOfFoldErrorsFromFactors,
+  summariseFolds,
+  type FoldFactors,
+  type Rows,
+} from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 import { checkDeadline } from '../core/deadline.js';
 
@@ -112,7 +129,11 @@ export function sweepTarget(descriptor: Descriptor, design: Design): { kind: Swe
   let fourier = -1;
   design.terms.forEach((t, i) => {
     const spec = t.spec;
-    if ((spec.kind === 'polynomial' || spec.kind === 'multi-polynomial') && (poly < 0 || spec.degree > (design.terms[poly].spec as PolynomialTermSpec).degree)) poly = i;
+    if (
+      (spec.kind === 'polynomial' || spec.kind === 'multi-polynomial') &&
+      (poly < 0 || spec.degree > (design.terms[poly].spec as PolynomialTermSpec).degree)
+    )
+      poly = i;
     if ((spec.kind === 'rbf' || spec.kind === 'multi-rbf') && rbf < 0) rbf = i;
     if (spec.kind === 'spline' && spline < 0) spline = i;
     if (spec.kind === 'fourier' && fourier < 0) fourier = i;
@@ -137,7 +158,14 @@ function monomialCount(k: number, g: number): number {
 
 /** Knot counts 1 .. current + 4 (at most 100) of a spline, harmonics 1 .. current + 3 (at most 50) of a Fourier term; simplest first. */
 function countSettings(spec: TermSpec): { value: number; current: boolean }[] {
-  const current = spec.kind === 'spline' ? (spec.knots.kind === 'list' ? spec.knots.values.length : spec.knots.count) : spec.kind === 'fourier' ? spec.harmonics : 1;
+  const current =
+    spec.kind === 'spline'
+      ? spec.knots.kind === 'list'
+        ? spec.knots.values.length
+        : spec.knots.count
+      : spec.kind === 'fourier'
+        ? spec.harmonics
+        : 1;
   const top = spec.kind === 'spline' ? Math.min(100, current + 4) : Math.min(50, current + 3);
   return Array.from({ length: top }, (_, i) => ({ value: i + 1, current: i + 1 === current }));
 }
@@ -193,10 +221,16 @@ export interface SweepShape {
  * @param options the row cap and highest degree, as for the sweep
  * @returns null when the model has no setting to sweep or fewer than 2 rows
  */
-export function sweepShape(descriptor: Descriptor, design: Design, rows: number, options: Pick<SweepOptions, 'maxRows' | 'maxDegree'> = {}): SweepShape | null {
+export function sweepShape(
+  descriptor: Descriptor,
+  design: Design,
+  rows: number,
+  options: Pick<SweepOptions, 'maxRows' | 'maxDegree'> = {},
+): SweepShape | null {
   const target = sweepTarget(descriptor, design);
   if (target === null || rows < 2) return null;
-  if (target.kind === 'ridge') return { kind: 'ridge', rows, parameters: Array.from({ length: SWEEP_RIDGE_EXPONENTS.length + 1 }, () => design.p) };
+  if (target.kind === 'ridge')
+    return { kind: 'ridge', rows, parameters: Array.from({ length: SWEEP_RIDGE_EXPONENTS.length + 1 }, () => design.p) };
   const used = Math.min(rows, options.maxRows ?? SWEEP_MAX_ROWS);
   if (target.kind === 'width') return { kind: 'width', rows: used, parameters: SWEEP_WIDTH_EXPONENTS.map(() => design.p) };
   const degree = (design.terms[target.term].spec as PolynomialTermSpec).degree;
@@ -219,7 +253,11 @@ function subsample(data: Rows, m: number): Rows {
  * positive penalty ({@link ridgePath}); a penalty of 0, or a factor the path does not take, is
  * solved on its own.
  */
-function sweepCoefficients(complements: readonly QrAccumulator[], lambdas: readonly number[], penalised: readonly boolean[]): Float64Array[][] {
+function sweepCoefficients(
+  complements: readonly QrAccumulator[],
+  lambdas: readonly number[],
+  penalised: readonly boolean[],
+): Float64Array[][] {
   const coefficients = lambdas.map(() => new Array<Float64Array>(complements.length));
   const positive = lambdas.filter((l) => l > 0);
   complements.forEach((acc, f) => {
@@ -256,7 +294,13 @@ function sweepCoefficients(complements: readonly QrAccumulator[], lambdas: reado
  * @param options row cap and highest degree
  * @returns null when the model has no setting to sweep or fewer than 2 rows
  */
-export function sweepComplexity(descriptor: Descriptor, design: Design, train: Rows, fit: FitResult, options: SweepOptions = {}): Sweep | null {
+export function sweepComplexity(
+  descriptor: Descriptor,
+  design: Design,
+  train: Rows,
+  fit: FitResult,
+  options: SweepOptions = {},
+): Sweep | null {
   const target = sweepTarget(descriptor, design);
   if (target === null || train.rows < 2) return null;
   const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
@@ -302,7 +346,8 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
       const top = Math.max(degree, Math.min(degree + 3, options.maxDegree ?? 15));
       // Over several inputs the columns grow as C(k + g, g) - 1: stop before MAX_SWEEP_COLUMNS.
       const inputs = spec.kind === 'multi-polynomial' ? spec.of.length : 1;
-      for (let g = 1; g <= top; g++) if (g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS) settings.push({ value: g, current: g === degree });
+      for (let g = 1; g <= top; g++)
+        if (g === degree || monomialCount(inputs, g) <= MAX_SWEEP_COLUMNS) settings.push({ value: g, current: g === degree });
     } else if (target.kind === 'width') {
       const width = (spec as RbfTermSpec).width;
       for (let t = 4; t >= -2; t--) settings.push({ value: width * 2 ** t, current: t === 0 });
@@ -320,7 +365,16 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
       } catch (error) {
         // A setting the data cannot carry (e.g. more spline knots than distinct quantiles) leaves a gap.
         if (!(error instanceof InputError)) throw error;
-        curve.push({ setting: value, label, parameters: Number.NaN, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+        curve.push({
+          setting: value,
+          label,
+          parameters: Number.NaN,
+          cvRmse: Number.NaN,
+          meanMse: Number.NaN,
+          seMse: Number.NaN,
+          current,
+          failed: error.message,
+        });
         continue;
       }
       try {
@@ -331,7 +385,16 @@ export function sweepComplexity(descriptor: Descriptor, design: Design, train: R
       } catch (error) {
         // A setting whose fit cannot be computed (e.g. columns that underflow) leaves a gap in the curve.
         if (!(error instanceof RangeError)) throw error;
-        curve.push({ setting: value, label, parameters: d.p, cvRmse: Number.NaN, meanMse: Number.NaN, seMse: Number.NaN, current, failed: error.message });
+        curve.push({
+          setting: value,
+          label,
+          parameters: d.p,
+          cvRmse: Number.NaN,
+          meanMse: Number.NaN,
+          seMse: Number.NaN,
+          current,
+          failed: error.message,
+        });
       }
     }
   }

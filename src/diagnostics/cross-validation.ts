@@ -179,7 +179,10 @@ export interface FoldFactors {
  * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
  * @returns sse[s][f], as {@link outOfFoldErrors} gives them from a pass over the rows
  */
-export function outOfFoldErrorsFromFactors(perFold: readonly QrAccumulator[], coefficients: readonly (readonly Float64Array[])[]): OutOfFoldErrors {
+export function outOfFoldErrorsFromFactors(
+  perFold: readonly QrAccumulator[],
+  coefficients: readonly (readonly Float64Array[])[],
+): OutOfFoldErrors {
   const sse = coefficients.map((bySet) =>
     perFold.map((acc, f) => {
       const p = acc.p;
@@ -363,7 +366,13 @@ export interface CrossValidateOptions {
  * @param folds fold assignment of the n rows
  * @param options per-fold factors already built, and a buffer for the training predictions (default none)
  */
-export function crossValidate(design: Design, data: Rows, fit: FitResult, folds: Folds, options: CrossValidateOptions = {}): CrossValidation {
+export function crossValidate(
+  design: Design,
+  data: Rows,
+  fit: FitResult,
+  folds: Folds,
+  options: CrossValidateOptions = {},
+): CrossValidation {
   const n = data.rows;
   const p = design.p;
   const k = folds.k;

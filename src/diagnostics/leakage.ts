@@ -38,7 +38,7 @@ function rowHash(columns: readonly Float64Array[], i: number): number {
   for (let c = 0; c < columns.length; c++) {
     f64[0] = columns[c][i] + 0; // -0 + 0 === +0: equal values hash equal
     h = Math.imul(h ^ u32[0], 0x9e3779b1);
-    h = Math.imul((h ^ (h >>> 15)) ^ u32[1], 0x85ebca6b);
+    h = Math.imul(h ^ (h >>> 15) ^ u32[1], 0x85ebca6b);
     h ^= h >>> 13;
   }
   return mix32(h);
@@ -74,7 +74,13 @@ interface RowTable {
 function newTable(rows: number): RowTable {
   let size = 1024;
   while (size < 2 * rows) size *= 2;
-  return { mask: size - 1, slotHash: new Uint32Array(size), slotHead: new Int32Array(size).fill(-1), next: new Int32Array(rows).fill(-1), repOf: new Int32Array(rows) };
+  return {
+    mask: size - 1,
+    slotHash: new Uint32Array(size),
+    slotHead: new Int32Array(size).fill(-1),
+    next: new Int32Array(rows).fill(-1),
+    repOf: new Int32Array(rows),
+  };
 }
 
 /** The slot of `hash`: where it is, or the empty slot where it goes. */
@@ -123,7 +129,14 @@ function indexRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'i
  * firstMatch[q] receives the first training row whose inputs equal those of distinct row q,
  * targetToo[q] = 1 when some training row has its inputs and its target.
  */
-function matchRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'inputs' | 'y'>, train: Pick<ModelData, 'inputs' | 'y' | 'rows'>, firstMatch: Int32Array, targetToo: Uint8Array): void {
+function matchRows(
+  inputs: RowTable,
+  full: RowTable,
+  holdout: Pick<ModelData, 'inputs' | 'y'>,
+  train: Pick<ModelData, 'inputs' | 'y' | 'rows'>,
+  firstMatch: Int32Array,
+  targetToo: Uint8Array,
+): void {
   for (let i = 0; i < train.rows; i++) {
     const hash = rowHash(train.inputs, i);
     let q = inputs.slotHead[findSlot(inputs, hash)];
@@ -146,7 +159,10 @@ function matchRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'i
  * @param train training rows (inputs in the model's order, targets, lines)
  * @param holdout hold-out rows (same input order)
  */
-export function findLeakage(train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>, holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>): Leakage {
+export function findLeakage(
+  train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>,
+  holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>,
+): Leakage {
   const columns = train.inputs.length;
   // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
   // stream past them in file order, so each hold-out row's first match is the earliest training row.

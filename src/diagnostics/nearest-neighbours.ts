@@ -152,7 +152,16 @@ function selectByCoordinate(flat: Float64Array, d: number, c: number, idx: Int32
  * when the squared distance to the split can still be at most the k-th best. Points equal to the
  * split value may sit on either side, so a gap of 0 visits both.
  */
-function searchTree(tree: Tree, node: number, flat: Float64Array, d: number, a: number, kk: number, best: Float64Array, bestIdx: Int32Array): void {
+function searchTree(
+  tree: Tree,
+  node: number,
+  flat: Float64Array,
+  d: number,
+  a: number,
+  kk: number,
+  best: Float64Array,
+  bestIdx: Int32Array,
+): void {
   const c = tree.dim[node];
   if (c < 0) {
     for (let t = tree.lo[node]; t < tree.hi[node]; t++) {

@@ -33,7 +33,13 @@ function measures(data: ModelData, predictions: Float64Array): ErrorMeasures {
  * @param shipped length design.p (the caller checks it)
  * @param refit the refit's coefficients (length design.p)
  */
-export function scoreShipped(design: Design, train: ModelData, holdout: ModelData, shipped: readonly number[], refit: ArrayLike<number>): ShippedScore {
+export function scoreShipped(
+  design: Design,
+  train: ModelData,
+  holdout: ModelData,
+  shipped: readonly number[],
+  refit: ArrayLike<number>,
+): ShippedScore {
   const holdoutPredictions = predictRows(design, holdout, shipped);
   let diff = 0;
   for (let j = 0; j < design.p; j++) diff = Math.max(diff, Math.abs(shipped[j] - refit[j]));

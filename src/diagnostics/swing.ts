@@ -147,7 +147,12 @@ export function inputGrid(values: ArrayLike<number>, options: SwingOptions = {})
  * {@link inputGrid} from the input's values already sorted ascending in `sorted[0..n)`; the
  * array is overwritten (its distinct values are packed to the front).
  */
-function gridFromSorted(sorted: Float64Array, n: number, options: SwingOptions, work?: Float64Array): { inside: Float64Array; beyond: Float64Array } {
+function gridFromSorted(
+  sorted: Float64Array,
+  n: number,
+  options: SwingOptions,
+  work?: Float64Array,
+): { inside: Float64Array; beyond: Float64Array } {
   const perGap = options.perGap ?? SWING_DEFAULTS.perGap;
   const uniform = options.uniform ?? SWING_DEFAULTS.uniform;
   const margin = options.margin ?? SWING_DEFAULTS.margin;
@@ -297,7 +302,12 @@ function thinIndices(length: number, count: number, keep: readonly number[]): nu
  * @param fixed value of every input (entry c is ignored)
  * @returns predict(xs): predictions at the points xs of input c
  */
-function predictorAlong(design: Design, coefficients: ArrayLike<number>, c: number, fixed: readonly number[]): (xs: Float64Array) => Float64Array {
+function predictorAlong(
+  design: Design,
+  coefficients: ArrayLike<number>,
+  c: number,
+  fixed: readonly number[],
+): (xs: Float64Array) => Float64Array {
   const name = design.inputs[c];
   const varying = design.terms.map((t) => t.inputs.includes(name));
   const constantColumns = (n: number): Float64Array[] => design.inputs.map((_, k) => new Float64Array(n).fill(fixed[k]));
@@ -326,7 +336,9 @@ function predictorAlong(design: Design, coefficients: ArrayLike<number>, c: numb
   );
   const fixedByName = new Map(design.inputs.map((input, k) => [input, fixed[k]]));
   return (xs) => {
-    const columns = partial.inputs.map((input) => (input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN)));
+    const columns = partial.inputs.map((input) =>
+      input === name ? xs : new Float64Array(xs.length).fill(fixedByName.get(input) ?? Number.NaN),
+    );
     const out = predictRows(partial, { inputs: columns, rows: xs.length }, sub);
     for (let i = 0; i < out.length; i++) out[i] += base;
     return out;
@@ -512,8 +524,22 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
   const maxCurves = options.maxCurves ?? SWING_DEFAULTS.maxCurves;
-  const maxCurvePoints = options.maxCurvePoints ?? Math.max(SWING_MIN_CURVE_POINTS, Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))));
-  return { band: [ylo, yhi], medians, grids, segmentColumns, segments, margin: options.margin ?? SWING_DEFAULTS.margin, maxCurvePoints, maxCurves };
+  const maxCurvePoints =
+    options.maxCurvePoints ??
+    Math.max(
+      SWING_MIN_CURVE_POINTS,
+      Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))),
+    );
+  return {
+    band: [ylo, yhi],
+    medians,
+    grids,
+    segmentColumns,
+    segments,
+    margin: options.margin ?? SWING_DEFAULTS.margin,
+    maxCurvePoints,
+    maxCurves,
+  };
 }
 
 /** The points (rows of `columns`) at which every term is defined: a segment between two levels of a category has no levels between them. */

@@ -77,7 +77,11 @@ function parseExpect(value: string | null): number | null {
   if (value === null) return null;
   const n = Number(value);
   if (!/^\s*\d+\s*$/.test(value) || !Number.isSafeInteger(n) || n < 1 || n > MAX_SHARDS) {
-    throw new InputError('expect-value', `expected the number of shard reports, a whole number from 1 to ${MAX_SHARDS}, got ${quoteValue(value)}`, { key: '--expect' });
+    throw new InputError(
+      'expect-value',
+      `expected the number of shard reports, a whole number from 1 to ${MAX_SHARDS}, got ${quoteValue(value)}`,
+      { key: '--expect' },
+    );
   }
   return n;
 }
@@ -127,13 +131,25 @@ export interface RefitCommand {
 }
 
 /** Reads a number option within bounds (`min < x < max` when `open`, else `min <= x <= max`). */
-function parseNumberOption(value: string | null, name: string, fallback: number, min: number, max: number, open: boolean, whole = false): number {
+function parseNumberOption(
+  value: string | null,
+  name: string,
+  fallback: number,
+  min: number,
+  max: number,
+  open: boolean,
+  whole = false,
+): number {
   if (value === null) return fallback;
   const n = Number(value);
   const inRange = open ? n > min && n < max : n >= min && n <= max;
   if (value.trim() === '' || !Number.isFinite(n) || !inRange || (whole && !Number.isSafeInteger(n))) {
     const range = open ? `between ${min} and ${max} (exclusive)` : `from ${min} to ${max}`;
-    throw new InputError('option-value', `expected ${whole ? 'a whole number' : 'a number'} ${range}, got ${JSON.stringify(value.slice(0, 40))}`, { key: `--${name}` });
+    throw new InputError(
+      'option-value',
+      `expected ${whole ? 'a whole number' : 'a number'} ${range}, got ${JSON.stringify(value.slice(0, 40))}`,
+      { key: `--${name}` },
+    );
   }
   return n;
 }
@@ -149,7 +165,13 @@ function parseJobs(value: string | undefined): number | null {
 }
 
 /** What the command line asked for: a command to run, or text to print (help, version). */
-export type Parsed = CheckCommand | MergeCommand | ExplainCommand | InitCommand | RefitCommand | { kind: 'print'; text: string; status: 0 | 2 };
+export type Parsed =
+  | CheckCommand
+  | MergeCommand
+  | ExplainCommand
+  | InitCommand
+  | RefitCommand
+  | { kind: 'print'; text: string; status: 0 | 2 };
 
 /** One option of a command: a switch, or an option taking a value (`value` names it in the help). */
 interface OptionSpec {
@@ -171,12 +193,27 @@ interface CommandSpec {
   options: readonly OptionSpec[];
 }
 
-const FORMAT: OptionSpec = { name: 'format', value: 'format', description: 'report format', choices: ['text', 'json', 'markdown'], default: 'text' };
+const FORMAT: OptionSpec = {
+  name: 'format',
+  value: 'format',
+  description: 'report format',
+  choices: ['text', 'json', 'markdown'],
+  default: 'text',
+};
 const OUT: OptionSpec = { name: 'out', value: 'file', description: 'write the report to a file instead of standard output' };
-const FAIL_ON: OptionSpec = { name: 'fail-on', value: 'level', description: 'what fails the run', choices: ['fail', 'warn'], default: 'fail' };
+const FAIL_ON: OptionSpec = {
+  name: 'fail-on',
+  value: 'level',
+  description: 'what fails the run',
+  choices: ['fail', 'warn'],
+  default: 'fail',
+};
 const COLOR: OptionSpec = { name: 'color', description: 'force colours in the text report' };
 const NO_COLOR: OptionSpec = { name: 'no-color', description: 'never use colours' };
-const VERBOSE: OptionSpec = { name: 'verbose', description: 'text report: list every check of every model with its figure, passing ones included' };
+const VERBOSE: OptionSpec = {
+  name: 'verbose',
+  description: 'text report: list every check of every model with its figure, passing ones included',
+};
 const DEBUG: OptionSpec = { name: 'debug', description: 'print stack traces of unexpected errors' };
 const HELP: OptionSpec = { name: 'help', description: 'print this help' };
 
@@ -185,7 +222,11 @@ const COMMANDS: readonly CommandSpec[] = [
   {
     name: 'check',
     summary: 'Check models against their limits. Exit status: 0 within limits, 1 a model over a limit, 2 the run could not be done.',
-    argument: { name: 'descriptor', description: 'model descriptors to check (default: every model the settings file matches)', required: false },
+    argument: {
+      name: 'descriptor',
+      description: 'model descriptors to check (default: every model the settings file matches)',
+      required: false,
+    },
     options: [
       { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read', default: '.' },
       { name: 'config', value: 'file', description: 'settings file, relative to the root', default: 'fitgate.yml' },
@@ -194,8 +235,17 @@ const COMMANDS: readonly CommandSpec[] = [
       FAIL_ON,
       COLOR,
       NO_COLOR,
-      { name: 'base', value: 'ref', description: 'also check the models as they are on this git commit and compare (hold-out RMSE, gap ratio, the base_change limit)' },
-      { name: 'shard', value: 'K/N', description: 'check only share K of N of the models (descriptors sorted by path, dealt round-robin); join the JSON reports with `fitgate merge`' },
+      {
+        name: 'base',
+        value: 'ref',
+        description: 'also check the models as they are on this git commit and compare (hold-out RMSE, gap ratio, the base_change limit)',
+      },
+      {
+        name: 'shard',
+        value: 'K/N',
+        description:
+          'check only share K of N of the models (descriptors sorted by path, dealt round-robin); join the JSON reports with `fitgate merge`',
+      },
       { name: 'jobs', value: 'n', description: 'worker threads to run models on (default: one per core; 1 = serial)' },
       { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
       { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },
@@ -210,7 +260,12 @@ const COMMANDS: readonly CommandSpec[] = [
     summary: 'Join the JSON reports of `fitgate check --shard K/N --format json` jobs into one report. Exit status as for check.',
     argument: { name: 'report', description: 'JSON report files', required: true },
     options: [
-      { name: 'expect', value: 'n', description: 'the number of shard reports there must be: a missing one is an error (reports also name their shard K/N, and a gap among them is an error)' },
+      {
+        name: 'expect',
+        value: 'n',
+        description:
+          'the number of shard reports there must be: a missing one is an error (reports also name their shard K/N, and a gap among them is an error)',
+      },
       FORMAT,
       OUT,
       FAIL_ON,
@@ -233,12 +288,30 @@ const COMMANDS: readonly CommandSpec[] = [
       { name: 'root', value: 'dir', description: 'repository root; nothing outside it is read or written', default: '.' },
       { name: 'holdout', value: 'file', description: 'the hold-out CSV (default: split one off the training file)' },
       { name: 'target', value: 'column', description: 'the column to predict (default: the last column)' },
-      { name: 'task', value: 'task', description: 'what the model predicts', choices: ['regression', 'classification'], default: 'regression' },
+      {
+        name: 'task',
+        value: 'task',
+        description: 'what the model predicts',
+        choices: ['regression', 'classification'],
+        default: 'regression',
+      },
       { name: 'name', value: 'name', description: "the model's name (default: from the file name)" },
-      { name: 'split', value: 'how', description: 'how to split a hold-out off one file: random rows (seeded) or the last rows (data in time order)', choices: ['random', 'last'], default: 'random' },
+      {
+        name: 'split',
+        value: 'how',
+        description: 'how to split a hold-out off one file: random rows (seeded) or the last rows (data in time order)',
+        choices: ['random', 'last'],
+        default: 'random',
+      },
       { name: 'holdout-share', value: 'share', description: 'share of the rows to hold out when splitting', default: '0.25' },
       { name: 'seed', value: 'n', description: 'seed of the random split', default: '1' },
-      { name: 'degree', value: 'd', description: 'terms of the first model: 1 linear terms, 2 polynomials of degree 2 on standardised inputs', choices: ['1', '2'], default: '1' },
+      {
+        name: 'degree',
+        value: 'd',
+        description: 'terms of the first model: 1 linear terms, 2 polynomials of degree 2 on standardised inputs',
+        choices: ['1', '2'],
+        default: '1',
+      },
       { name: 'force', description: 'overwrite files that exist' },
       DEBUG,
       HELP,
@@ -259,7 +332,7 @@ const COMMANDS: readonly CommandSpec[] = [
   },
   {
     name: 'explain',
-    summary: "Explain a check: its figure, formula and source, and what to change. With no id, list the checks.",
+    summary: 'Explain a check: its figure, formula and source, and what to change. With no id, list the checks.',
     argument: { name: 'check', description: 'check ids or limit keys (default: list every check)', required: false },
     options: [HELP],
   },
@@ -310,7 +383,8 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
   const read = readOptions(command, rest);
   if ('kind' in read) return read;
   if (read.switches.has('help')) return { kind: 'print', text: commandHelp(command), status: 0 };
-  if (command.argument.required && read.positionals.length === 0) return usageError(`missing required argument '${command.argument.name}'`, command);
+  if (command.argument.required && read.positionals.length === 0)
+    return usageError(`missing required argument '${command.argument.name}'`, command);
   const value = (name: string): string | null => read.values.get(name) ?? null;
   const common = {
     format: (value('format') ?? 'text') as OutputFormat,
@@ -346,7 +420,13 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
     };
   }
   if (command.name === 'merge') {
-    return { kind: 'merge', reports: read.positionals.map((r) => path.resolve(cwd, r)), failOn, ...common, expect: parseExpect(value('expect')) };
+    return {
+      kind: 'merge',
+      reports: read.positionals.map((r) => path.resolve(cwd, r)),
+      failOn,
+      ...common,
+      expect: parseExpect(value('expect')),
+    };
   }
   // The root as named, and its real path: named inside the working directory, it must really
   // stay inside it (a folder replaced by a link to a parent is refused).
@@ -381,7 +461,12 @@ export function parseArgs(argv: string[], cwd: string): Parsed {
  * usage error.
  */
 function readOptions(command: CommandSpec, args: string[]): OptionValues | Parsed {
-  const declared = Object.fromEntries(command.options.map((o) => [o.name, { type: o.value === undefined ? ('boolean' as const) : ('string' as const), ...(o.name === 'help' ? { short: 'h' } : {}) }]));
+  const declared = Object.fromEntries(
+    command.options.map((o) => [
+      o.name,
+      { type: o.value === undefined ? ('boolean' as const) : ('string' as const), ...(o.name === 'help' ? { short: 'h' } : {}) },
+    ]),
+  );
   const { tokens } = tokenize({ args, options: declared, strict: false, allowPositionals: true, tokens: true });
   const out: OptionValues = { values: new Map(), switches: new Set(), color: null, positionals: [] };
   // Asking for help wins over any mistake beside it.
@@ -402,7 +487,10 @@ function readOptions(command: CommandSpec, args: string[]): OptionValues | Parse
     }
     if (token.value === undefined) return usageError(`option '--${spec.name} <${spec.value}>' argument missing`, command);
     if (spec.choices && !spec.choices.includes(token.value)) {
-      return usageError(`option '--${spec.name} <${spec.value}>' argument '${token.value}' is invalid; expected one of ${spec.choices.join(', ')}`, command);
+      return usageError(
+        `option '--${spec.name} <${spec.value}>' argument '${token.value}' is invalid; expected one of ${spec.choices.join(', ')}`,
+        command,
+      );
     }
     out.values.set(spec.name, token.value);
   }
@@ -429,7 +517,9 @@ function mainHelp(): string {
 function commandHelp(command: CommandSpec): string {
   const options = command.options.map((o) => {
     const name = o.name === 'help' ? '-h, --help' : `--${o.name}${o.value === undefined ? '' : ` <${o.value}>`}`;
-    const notes = [o.choices ? `one of ${o.choices.join(', ')}` : '', o.default !== undefined ? `default: ${o.default}` : ''].filter((s) => s !== '');
+    const notes = [o.choices ? `one of ${o.choices.join(', ')}` : '', o.default !== undefined ? `default: ${o.default}` : ''].filter(
+      (s) => s !== '',
+    );
     return [name, notes.length > 0 ? `${o.description} (${notes.join('; ')})` : o.description] as const;
   });
   return helpPage(`fitgate ${command.name} [options] ${argumentUsage(command)}`, command.summary, [
@@ -439,7 +529,11 @@ function commandHelp(command: CommandSpec): string {
 }
 
 /** A help page: the usage line, the wrapped description, then each titled section as a table. */
-function helpPage(usage: string, description: string, sections: ReadonlyArray<readonly [string, ReadonlyArray<readonly [string, string]>]>): string {
+function helpPage(
+  usage: string,
+  description: string,
+  sections: ReadonlyArray<readonly [string, ReadonlyArray<readonly [string, string]>]>,
+): string {
   const lines = [`Usage: ${usage}`, '', ...wrap(description, HELP_WIDTH)];
   for (const [title, rows] of sections) {
     lines.push('', `${title}:`);
@@ -455,7 +549,9 @@ function argumentUsage(command: CommandSpec): string {
 /** Two columns: names padded to the widest, descriptions wrapped beside them. */
 function table(rows: ReadonlyArray<readonly [string, string]>): string[] {
   const indent = 2 + maxOf(rows.map(([name]) => name.length)) + 2;
-  return rows.flatMap(([name, text]) => wrap(text, HELP_WIDTH - indent).map((line, i) => (i === 0 ? `  ${name.padEnd(indent - 4)}  ${line}` : `${' '.repeat(indent)}${line}`)));
+  return rows.flatMap(([name, text]) =>
+    wrap(text, HELP_WIDTH - indent).map((line, i) => (i === 0 ? `  ${name.padEnd(indent - 4)}  ${line}` : `${' '.repeat(indent)}${line}`)),
+  );
 }
 
 /** Words of `text` in lines of at most `width` characters (a longer word gets a line of its own). */

@@ -98,7 +98,11 @@ export function checkOutputFile(file: string | undefined): void {
     problem = (error as NodeJS.ErrnoException).code === 'ENOENT' ? 'does not exist' : 'cannot be written';
   }
   if (problem !== null) {
-    throw new InputError('runner-file', `expected the file the runner creates for the step's outputs, got ${quoteValue(file)}, which ${problem}`, { key: 'GITHUB_OUTPUT' });
+    throw new InputError(
+      'runner-file',
+      `expected the file the runner creates for the step's outputs, got ${quoteValue(file)}, which ${problem}`,
+      { key: 'GITHUB_OUTPUT' },
+    );
   }
 }
 
@@ -117,7 +121,12 @@ export function readInputs(cwd: string = process.cwd()): ActionInputs {
   // replaced by a link to a parent (or anywhere outside) is refused here, once.
   const workspace = realFolder(path.resolve(env.GITHUB_WORKSPACE || cwd), { key: 'GITHUB_WORKSPACE', within: null });
   const named = insidePath('working-directory', workspace, input('working-directory'), 'workspace');
-  const root = realFolder(path.join(workspace, named), { key: 'working-directory', within: workspace, insideOnly: true, withinName: 'workspace' });
+  const root = realFolder(path.join(workspace, named), {
+    key: 'working-directory',
+    within: workspace,
+    insideOnly: true,
+    withinName: 'workspace',
+  });
   const prefix = path.relative(workspace, root).split(path.sep).join('/');
 
   const configValue = input('config');

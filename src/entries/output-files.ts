@@ -51,12 +51,20 @@ export interface FileReportFailure {
  */
 export async function writeFileReports(result: Result, files: FileReports): Promise<FileReportFailure[]> {
   const failures: FileReportFailure[] = [];
-  const place = (name: string) => ({ option: `${files.optionPrefix ?? ''}${name}`, within: files.within, insideOnly: files.insideOnly ?? false });
+  const place = (name: string) => ({
+    option: `${files.optionPrefix ?? ''}${name}`,
+    within: files.within,
+    insideOnly: files.insideOnly ?? false,
+  });
   const attempt = (name: string, file: string, pieces: () => Iterable<string>): void => {
     try {
       writeFileSafely(file, pieces(), place(name));
     } catch (error) {
-      failures.push({ option: place(name).option, refused: error instanceof InputError && error.code === OUTPUT_REFUSED, message: errorMessage(error) });
+      failures.push({
+        option: place(name).option,
+        refused: error instanceof InputError && error.code === OUTPUT_REFUSED,
+        message: errorMessage(error),
+      });
     }
   };
   if (files.html !== null) attempt('html', path.join(files.html, HTML_FILE), () => htmlReport(result));

@@ -41,6 +41,7 @@ export function existsInRepo(root: string, rel: string): boolean {
 export function writeInRepo(root: string, rel: string, text: string, overwrite = false): void {
   const normal = normaliseRepoPath(rel, { file: rel });
   const base = realpathSync(root);
-  if (!overwrite && existsInRepo(base, normal)) throw new InputError(FILE_EXISTS, 'exists; run again with --force to overwrite it', { file: normal });
+  if (!overwrite && existsInRepo(base, normal))
+    throw new InputError(FILE_EXISTS, 'exists; run again with --force to overwrite it', { file: normal });
   writeFileSafely(nodePath.join(base, normal), text, { option: normal, within: [base], insideOnly: true });
 }

@@ -19,7 +19,19 @@
  *
  * Every refusal and failure is an InputError whose key is the option that named the path.
  */
-import { closeSync, constants, fsyncSync, lstatSync, mkdirSync, openSync, realpathSync, renameSync, statSync, unlinkSync, writeSync } from 'node:fs';
+import {
+  closeSync,
+  constants,
+  fsyncSync,
+  lstatSync,
+  mkdirSync,
+  openSync,
+  realpathSync,
+  renameSync,
+  statSync,
+  unlinkSync,
+  writeSync,
+} from 'node:fs';
 import path from 'node:path';
 import { InputError, quoteValue } from '../core/errors.js';
 import { isInsideFolder } from '../repo/real-folder.js';
@@ -79,7 +91,12 @@ function codeOf(error: unknown): string | undefined {
  * @throws InputError `output-refused` (nothing was written, the previous file is unchanged) or
  *   `output-failed` (the write failed; the previous file is unchanged, the temporary file removed)
  */
-export function writeFileSafely(file: string, data: string | Uint8Array | Iterable<string>, place: WritePlace, hooks: WriteHooks = {}): string {
+export function writeFileSafely(
+  file: string,
+  data: string | Uint8Array | Iterable<string>,
+  place: WritePlace,
+  hooks: WriteHooks = {},
+): string {
   const where = { key: place.option };
   const refuse = (message: string): InputError => new InputError(OUTPUT_REFUSED, message, where);
   if (file === '' || file.includes('\0')) throw refuse(`expected a file path, got ${quoteValue(file)}`);
@@ -88,7 +105,13 @@ export function writeFileSafely(file: string, data: string | Uint8Array | Iterab
   const folder = path.dirname(named);
   if (name === '' || folder === named) throw refuse(`${named} names no file; expected a file path`);
   const failed = (error: unknown): InputError =>
-    error instanceof InputError ? error : new InputError(OUTPUT_FAILED, `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`, where);
+    error instanceof InputError
+      ? error
+      : new InputError(
+          OUTPUT_FAILED,
+          `could not write ${named} (${codeOf(error) ?? (error instanceof Error ? error.message : String(error))}); the previous file, if any, is unchanged`,
+          where,
+        );
 
   // 1. The boundary that holds the path as written, and the real folder.
   const bases = place.within.filter((b) => isInsideFolder(b, folder)).sort((a, b) => b.length - a.length);
@@ -107,13 +130,17 @@ export function writeFileSafely(file: string, data: string | Uint8Array | Iterab
 
   // 3. A temporary file in the same folder, then rename.
   // A report in pieces is written in batches of about 1 MiB: never held as one string.
-  const chunks: Iterable<Uint8Array> = typeof data === 'string' ? [Buffer.from(data, 'utf8')] : data instanceof Uint8Array ? [data] : encodedBatches(data);
+  const chunks: Iterable<Uint8Array> =
+    typeof data === 'string' ? [Buffer.from(data, 'utf8')] : data instanceof Uint8Array ? [data] : encodedBatches(data);
   const write = hooks.write ?? ((fd: number, b: Uint8Array, offset: number, length: number) => writeSync(fd, b, offset, length));
   const flags = constants.O_WRONLY | constants.O_CREAT | constants.O_EXCL | (constants.O_NOFOLLOW ?? 0);
   let temp = '';
   let fd = -1;
   for (let attempt = 0; fd < 0; attempt++) {
-    temp = path.join(realDir, `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`);
+    temp = path.join(
+      realDir,
+      `.${name.slice(0, 100)}.${process.pid}.${Date.now().toString(36)}${Math.random().toString(36).slice(2, 8)}.tmp`,
+    );
     try {
       fd = openSync(temp, flags, 0o666);
     } catch (error) {
@@ -182,7 +209,8 @@ function makeFolder(folder: string, base: string | null, refuse: (message: strin
     real = realpathSync(existing);
   } catch (error) {
     const code = codeOf(error);
-    if (code === 'ENOENT' || code === 'ELOOP') throw refuse(`${existing} is a symbolic link that leads nowhere or round a loop; expected a folder`);
+    if (code === 'ENOENT' || code === 'ELOOP')
+      throw refuse(`${existing} is a symbolic link that leads nowhere or round a loop; expected a folder`);
     throw error;
   }
   if (!statSync(real).isDirectory()) throw refuse(`${existing} is not a folder; expected a folder to write in`);
@@ -197,7 +225,8 @@ function makeFolder(folder: string, base: string | null, refuse: (message: strin
       if (codeOf(error) !== 'EEXIST') throw error;
     }
     const info = lstatSync(real);
-    if (!info.isDirectory()) throw refuse(`${real} is ${info.isSymbolicLink() ? 'a symbolic link' : 'not a folder'}; expected a folder to write in`);
+    if (!info.isDirectory())
+      throw refuse(`${real} is ${info.isSymbolicLink() ? 'a symbolic link' : 'not a folder'}; expected a folder to write in`);
   }
   return real;
 }
@@ -211,7 +240,8 @@ function checkTarget(target: string, named: string, refuse: (message: string) =>
     if (codeOf(error) === 'ENOENT') return;
     throw error;
   }
-  if (info.isSymbolicLink()) throw refuse(`${named} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`);
+  if (info.isSymbolicLink())
+    throw refuse(`${named} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`);
   if (!info.isFile()) throw refuse(`${named} is not a regular file (a folder, device or pipe); expected a file to replace, or no file`);
 }
 

@@ -250,7 +250,12 @@ export const REFINE_MIN_CONDITION = 100;
 
 /** True when a refinement pass changes `fit` ({@link REFINE_MIN_CONDITION} < kappa <= {@link REFINE_MAX_CONDITION}, full rank). */
 export function refinementApplies(fit: FitResult): boolean {
-  return fit.coefficients.length > 0 && !fit.rankDeficient && fit.conditionNumberScaled > REFINE_MIN_CONDITION && fit.conditionNumberScaled <= REFINE_MAX_CONDITION;
+  return (
+    fit.coefficients.length > 0 &&
+    !fit.rankDeficient &&
+    fit.conditionNumberScaled > REFINE_MIN_CONDITION &&
+    fit.conditionNumberScaled <= REFINE_MAX_CONDITION
+  );
 }
 
 /**

@@ -33,7 +33,10 @@ function leverageRowsWasm(k: KernelExports, R: Float64Array, p: number, X: Float
  * (p x p, column-major): out[i] = || R^-T x_i ||^2 for i < m (out has length >= m). No
  * finiteness check.
  */
-export const leverageRows: (R: Float64Array, p: number, X: Float64Array, m: number, out: Float64Array) => void = facade(leverageRowsWasm, leverageRowsJs);
+export const leverageRows: (R: Float64Array, p: number, X: Float64Array, m: number, out: Float64Array) => void = facade(
+  leverageRowsWasm,
+  leverageRowsJs,
+);
 
 /**
  * Leverages of rows i0 .. i0+mb-1 of the column-major m x p block X into out[i0..): forward
@@ -41,7 +44,16 @@ export const leverageRows: (R: Float64Array, p: number, X: Float64Array, m: numb
  * its own so that its loops never run inside code V8 optimised in the middle of another chunk
  * (see DEVELOPERS.md, "Writing hot loops").
  */
-function leverageChunk(R: Float64Array, p: number, X: Float64Array, m: number, i0: number, mb: number, Z: Float64Array, out: Float64Array): void {
+function leverageChunk(
+  R: Float64Array,
+  p: number,
+  X: Float64Array,
+  m: number,
+  i0: number,
+  mb: number,
+  Z: Float64Array,
+  out: Float64Array,
+): void {
   const CH = LEVERAGE_CHUNK;
   for (let i = 0; i < mb; i++) out[i0 + i] = 0;
   for (let j = 0; j < p; j++) {

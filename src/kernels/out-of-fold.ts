@@ -14,7 +14,17 @@ let pred = new Float64Array(0);
 let column = new Float64Array(0);
 
 /** The JavaScript reference of {@link outOfFoldRows}. */
-export function outOfFoldRowsJs(X: Float64Array, m: number, p: number, W: Float64Array, kFolds: number, folds: Int32Array, single: number, y: Float64Array, errors: number[]): void {
+export function outOfFoldRowsJs(
+  X: Float64Array,
+  m: number,
+  p: number,
+  W: Float64Array,
+  kFolds: number,
+  folds: Int32Array,
+  single: number,
+  y: Float64Array,
+  errors: number[],
+): void {
   if (pred.length < m) pred = new Float64Array(m);
   if (column.length < p) column = new Float64Array(p);
   pred.fill(0, 0, m);
@@ -30,7 +40,18 @@ export function outOfFoldRowsJs(X: Float64Array, m: number, p: number, W: Float6
 }
 
 /** {@link outOfFoldRows} in WebAssembly: the same operations in the same order. */
-function outOfFoldRowsWasm(k: KernelExports, X: Float64Array, m: number, p: number, W: Float64Array, kFolds: number, folds: Int32Array, single: number, y: Float64Array, errors: number[]): void {
+function outOfFoldRowsWasm(
+  k: KernelExports,
+  X: Float64Array,
+  m: number,
+  p: number,
+  W: Float64Array,
+  kFolds: number,
+  folds: Int32Array,
+  single: number,
+  y: Float64Array,
+  errors: number[],
+): void {
   const oW = m * p;
   const oY = oW + p * kFolds;
   const oPred = oY + m;
@@ -56,15 +77,30 @@ function outOfFoldRowsWasm(k: KernelExports, X: Float64Array, m: number, p: numb
  * @param y the m rows' targets
  * @param errors per fold (length kFolds), added to in place
  */
-export const outOfFoldRows: (X: Float64Array, m: number, p: number, W: Float64Array, kFolds: number, folds: Int32Array, single: number, y: Float64Array, errors: number[]) => void = facade(
-  outOfFoldRowsWasm,
-  outOfFoldRowsJs,
-);
+export const outOfFoldRows: (
+  X: Float64Array,
+  m: number,
+  p: number,
+  W: Float64Array,
+  kFolds: number,
+  folds: Int32Array,
+  single: number,
+  y: Float64Array,
+  errors: number[],
+) => void = facade(outOfFoldRowsWasm, outOfFoldRowsJs);
 
 // The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
 
 /** pred[i] += X[col + i] * W[base + folds[i]] for i < m. */
-function addFoldColumn(pred: Float64Array, X: Float64Array, col: number, W: Float64Array, base: number, folds: Int32Array, m: number): void {
+function addFoldColumn(
+  pred: Float64Array,
+  X: Float64Array,
+  col: number,
+  W: Float64Array,
+  base: number,
+  folds: Int32Array,
+  m: number,
+): void {
   for (let i = 0; i < m; i++) pred[i] += X[col + i] * W[base + folds[i]];
 }
 

@@ -8,14 +8,33 @@ import { facade } from './engine.js';
 import { heap, type KernelExports } from './wasm.js';
 
 /** The JavaScript reference of {@link polynomialColumns}. */
-export function polynomialColumnsJs(x: Float64Array, m: number, shift: number, scale: number, raw: boolean, degree: number, out: Float64Array, at: number): void {
+export function polynomialColumnsJs(
+  x: Float64Array,
+  m: number,
+  shift: number,
+  scale: number,
+  raw: boolean,
+  degree: number,
+  out: Float64Array,
+  at: number,
+): void {
   if (raw) out.set(x.subarray(0, m), at);
   else standardise(x, m, shift, scale, out, at);
   for (let k = 1; k < degree; k++) multiplyColumns(out, at + (k - 1) * m, at, at + k * m, m);
 }
 
 /** {@link polynomialColumns} in WebAssembly: the same operations. */
-function polynomialColumnsWasm(k: KernelExports, x: Float64Array, m: number, shift: number, scale: number, raw: boolean, degree: number, out: Float64Array, at: number): void {
+function polynomialColumnsWasm(
+  k: KernelExports,
+  x: Float64Array,
+  m: number,
+  shift: number,
+  scale: number,
+  raw: boolean,
+  degree: number,
+  out: Float64Array,
+  at: number,
+): void {
   const oOut = m;
   const f = heap(k, oOut + degree * m);
   f.set(x.subarray(0, m));
@@ -28,10 +47,16 @@ function polynomialColumnsWasm(k: KernelExports, x: Float64Array, m: number, shi
  * at + k m, k = 0 .. degree-1): z = (x - shift) / scale, or x itself when `raw`, then z^2, z^3, ...
  * @param out length >= at + degree m
  */
-export const polynomialColumns: (x: Float64Array, m: number, shift: number, scale: number, raw: boolean, degree: number, out: Float64Array, at: number) => void = facade(
-  polynomialColumnsWasm,
-  polynomialColumnsJs,
-);
+export const polynomialColumns: (
+  x: Float64Array,
+  m: number,
+  shift: number,
+  scale: number,
+  raw: boolean,
+  degree: number,
+  out: Float64Array,
+  at: number,
+) => void = facade(polynomialColumnsWasm, polynomialColumnsJs);
 
 // The row loops are functions of their own, one loop each (see DEVELOPERS.md, "Writing hot loops").
 

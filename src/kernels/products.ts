@@ -24,7 +24,15 @@ export function addProductsJs(out: Float64Array, at: number, X: Float64Array, m:
 }
 
 /** {@link addProducts} in WebAssembly: the same additions in the same order. */
-function addProductsWasm(k: KernelExports, out: Float64Array, at: number, X: Float64Array, m: number, w: ArrayLike<number>, p: number): void {
+function addProductsWasm(
+  k: KernelExports,
+  out: Float64Array,
+  at: number,
+  X: Float64Array,
+  m: number,
+  w: ArrayLike<number>,
+  p: number,
+): void {
   const oX = m;
   const oW = oX + m * p;
   const f = heap(k, oW + p);
@@ -47,14 +55,27 @@ function addProductsWasm(k: KernelExports, out: Float64Array, at: number, X: Flo
  * @param w coefficients (length >= p)
  * @param p columns
  */
-export const addProducts: (out: Float64Array, at: number, X: Float64Array, m: number, w: ArrayLike<number>, p: number) => void = facade(addProductsWasm, addProductsJs);
+export const addProducts: (out: Float64Array, at: number, X: Float64Array, m: number, w: ArrayLike<number>, p: number) => void = facade(
+  addProductsWasm,
+  addProductsJs,
+);
 
 // The row loops are functions of their own, each one loop and its return (see DEVELOPERS.md,
 // "Writing hot loops"): the loop over columns above then never runs inside code optimised in
 // the middle of a row loop.
 
 /** out[at + i] += X[j*m + i] w0 + X[(j+1)*m + i] w1 + X[(j+2)*m + i] w2 + X[(j+3)*m + i] w3, added left to right. */
-function addFourColumns(out: Float64Array, at: number, X: Float64Array, m: number, w0: number, w1: number, w2: number, w3: number, j: number): void {
+function addFourColumns(
+  out: Float64Array,
+  at: number,
+  X: Float64Array,
+  m: number,
+  w0: number,
+  w1: number,
+  w2: number,
+  w3: number,
+  j: number,
+): void {
   const c0 = j * m;
   const c1 = c0 + m;
   const c2 = c1 + m;

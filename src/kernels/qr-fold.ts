@@ -35,7 +35,16 @@ let workY = new Float64Array(0);
  * into the work block (leading dimension `chunk`) checking every value, annihilates it against R,
  * and adds the sum of squares of what is left of its right-hand side.
  */
-export function foldRowsJs(R: Float64Array, qty: Float64Array, rss: number, X: Float64Array, y: Float64Array, m: number, p: number, chunk: number): FoldOutcome {
+export function foldRowsJs(
+  R: Float64Array,
+  qty: Float64Array,
+  rss: number,
+  X: Float64Array,
+  y: Float64Array,
+  m: number,
+  p: number,
+  chunk: number,
+): FoldOutcome {
   const ld = chunk;
   if (work.length < ld * p) work = new Float64Array(ld * p);
   if (workY.length < ld) workY = new Float64Array(ld);
@@ -52,7 +61,17 @@ export function foldRowsJs(R: Float64Array, qty: Float64Array, rss: number, X: F
 }
 
 /** {@link foldRows} in WebAssembly: the same operations in the same order. */
-function foldRowsWasm(k: KernelExports, R: Float64Array, qty: Float64Array, rss: number, X: Float64Array, y: Float64Array, m: number, p: number, chunk: number): FoldOutcome {
+function foldRowsWasm(
+  k: KernelExports,
+  R: Float64Array,
+  qty: Float64Array,
+  rss: number,
+  X: Float64Array,
+  y: Float64Array,
+  m: number,
+  p: number,
+  chunk: number,
+): FoldOutcome {
   const oQty = p * p;
   const oX = oQty + p;
   const oY = oX + m * p;
@@ -79,7 +98,16 @@ function foldRowsWasm(k: KernelExports, R: Float64Array, qty: Float64Array, rss:
  * @returns the new residual sum of squares, and where a value was not finite (null when none
  *   was; the pieces before it are folded, that piece and the rest are not)
  */
-export const foldRows: (R: Float64Array, qty: Float64Array, rss: number, X: Float64Array, y: Float64Array, m: number, p: number, chunk: number) => FoldOutcome = facade(foldRowsWasm, foldRowsJs);
+export const foldRows: (
+  R: Float64Array,
+  qty: Float64Array,
+  rss: number,
+  X: Float64Array,
+  y: Float64Array,
+  m: number,
+  p: number,
+  chunk: number,
+) => FoldOutcome = facade(foldRowsWasm, foldRowsJs);
 
 // The loops below are separate functions, each one loop nest, so that V8 optimises each whole
 // (a loop that first runs after another loop was optimised mid-function has no type feedback and
@@ -90,7 +118,17 @@ export const foldRows: (R: Float64Array, qty: Float64Array, rss: number, X: Floa
  * (leading dimension ld) and yc.
  * @returns where the first value that is not finite is (columns in order, then y), or null
  */
-function copyChecked(X: Float64Array, ldx: number, y: Float64Array, start: number, mb: number, p: number, C: Float64Array, yc: Float64Array, ld: number): BadValue | null {
+function copyChecked(
+  X: Float64Array,
+  ldx: number,
+  y: Float64Array,
+  start: number,
+  mb: number,
+  p: number,
+  C: Float64Array,
+  yc: Float64Array,
+  ld: number,
+): BadValue | null {
   for (let j = 0; j < p; j++) {
     const at = copyColumnChecked(X, j * ldx + start, C, j * ld, mb);
     if (at >= 0) return { row: start + at, column: j };

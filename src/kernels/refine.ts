@@ -18,7 +18,14 @@ export interface RefineOutcome {
 }
 
 /** The JavaScript reference of {@link refineRows}. */
-export function refineRowsJs(X: Float64Array, y: Float64Array, m: number, w: Float64Array, gHi: Float64Array, gLo: Float64Array): RefineOutcome {
+export function refineRowsJs(
+  X: Float64Array,
+  y: Float64Array,
+  m: number,
+  w: Float64Array,
+  gHi: Float64Array,
+  gLo: Float64Array,
+): RefineOutcome {
   const p = w.length;
   const atX = firstNotFinite(X, m * p);
   if (atX >= 0) return { sumOfSquares: 0, bad: { row: atX % m, column: Math.floor(atX / m) } };
@@ -33,7 +40,15 @@ export function refineRowsJs(X: Float64Array, y: Float64Array, m: number, w: Flo
 }
 
 /** {@link refineRows} in WebAssembly: the same operations in the same order. */
-function refineRowsWasm(k: KernelExports, X: Float64Array, y: Float64Array, m: number, w: Float64Array, gHi: Float64Array, gLo: Float64Array): RefineOutcome {
+function refineRowsWasm(
+  k: KernelExports,
+  X: Float64Array,
+  y: Float64Array,
+  m: number,
+  w: Float64Array,
+  gHi: Float64Array,
+  gLo: Float64Array,
+): RefineOutcome {
   const p = w.length;
   const oY = m * p;
   const oW = oY + m;
@@ -64,7 +79,14 @@ function refineRowsWasm(k: KernelExports, X: Float64Array, y: Float64Array, m: n
  * @returns the sum of squares of the residuals' high parts, or where a value is not finite
  *   (nothing added then)
  */
-export const refineRows: (X: Float64Array, y: Float64Array, m: number, w: Float64Array, gHi: Float64Array, gLo: Float64Array) => RefineOutcome = facade(refineRowsWasm, refineRowsJs);
+export const refineRows: (
+  X: Float64Array,
+  y: Float64Array,
+  m: number,
+  w: Float64Array,
+  gHi: Float64Array,
+  gLo: Float64Array,
+) => RefineOutcome = facade(refineRowsWasm, refineRowsJs);
 
 // The row loops below are functions of their own, each a loop and its return (see DEVELOPERS.md,
 // "Writing hot loops").
@@ -79,7 +101,16 @@ export function firstNotFinite(v: Float64Array, n: number): number {
  * Adds to the running (gHi[j], gLo[j]) the dot product of column j of X (from `col`, m rows) with
  * r = hi + lo: Dot2 with hi, plus the plain dot with lo.
  */
-function addColumnDot2(X: Float64Array, col: number, m: number, hi: Float64Array, lo: Float64Array, gHi: Float64Array, gLo: Float64Array, j: number): void {
+function addColumnDot2(
+  X: Float64Array,
+  col: number,
+  m: number,
+  hi: Float64Array,
+  lo: Float64Array,
+  gHi: Float64Array,
+  gLo: Float64Array,
+  j: number,
+): void {
   let sum = gHi[j];
   let comp = gLo[j];
   for (let i = 0; i < m; i++) {

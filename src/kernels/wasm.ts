@@ -38,7 +38,19 @@ export interface KernelExports {
   firstNotFinite(a: number, n: number): number;
   refine(X: number, y: number, m: number, w: number, p: number, hi: number, lo: number, gHi: number, gLo: number): number;
   addProducts(out: number, X: number, m: number, w: number, p: number): void;
-  outOfFold(X: number, m: number, p: number, W: number, k: number, folds: number, single: number, y: number, pred: number, column: number, errors: number): void;
+  outOfFold(
+    X: number,
+    m: number,
+    p: number,
+    W: number,
+    k: number,
+    folds: number,
+    single: number,
+    y: number,
+    pred: number,
+    column: number,
+    errors: number,
+  ): void;
   polynomialColumns(x: number, m: number, shift: number, scale: number, raw: number, degree: number, out: number): void;
   firstBeyond(a: number, n: number, max: number): number;
 }

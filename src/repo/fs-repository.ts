@@ -32,7 +32,11 @@ export function createFsRepository(root: string): RepoReader {
   const rootReal = (): Promise<string> => {
     rootRealPromise ??= realpath(rootAbsolute).catch((error: unknown) => {
       rootRealPromise = null;
-      throw new InputError(FILE_MISSING, `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`, { file: rootAbsolute });
+      throw new InputError(
+        FILE_MISSING,
+        `repository folder cannot be read (${codeOf(error) ?? String(error)}); expected an existing folder`,
+        { file: rootAbsolute },
+      );
     });
     return rootRealPromise;
   };
@@ -46,7 +50,8 @@ export function createFsRepository(root: string): RepoReader {
       real = await realpath(full);
     } catch (error) {
       const code = codeOf(error);
-      if (code === 'ELOOP') throw new InputError(PATH_OUTSIDE, `path ${quoteValue(shown)} goes round a loop of symbolic links; expected a plain path`, where);
+      if (code === 'ELOOP')
+        throw new InputError(PATH_OUTSIDE, `path ${quoteValue(shown)} goes round a loop of symbolic links; expected a plain path`, where);
       if (code !== 'ENOENT' && code !== 'ENOTDIR') throw unreadableError(error, where);
     }
     if (real === null) {
@@ -89,7 +94,8 @@ export function createFsRepository(root: string): RepoReader {
 
   const requireFile = async (path: string): Promise<string> => {
     const { kind, real } = await kindOf(path);
-    if (kind === 'missing') throw new InputError(FILE_MISSING, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
+    if (kind === 'missing')
+      throw new InputError(FILE_MISSING, `no such file in ${rootAbsolute}; expected an existing file`, { file: path });
     if (kind !== 'file' || real === null) throw notAFileError(kind === 'file' ? 'special' : kind, { file: path });
     return real;
   };
@@ -178,7 +184,11 @@ function isInside(base: string, real: string): boolean {
 }
 
 function outside(shown: string, where: ErrorLocation): InputError {
-  return new InputError(PATH_OUTSIDE, `path ${quoteValue(shown)} leads outside the repository through a symbolic link; expected a file inside it`, where);
+  return new InputError(
+    PATH_OUTSIDE,
+    `path ${quoteValue(shown)} leads outside the repository through a symbolic link; expected a file inside it`,
+    where,
+  );
 }
 
 function codeOf(error: unknown): string | undefined {

@@ -75,12 +75,17 @@ export function safeDirectoryArgs(cwd: string): string[] {
  */
 export function runGit(cwd: string, args: string[], maxBuffer = 64 * 1024 * 1024): Promise<Buffer> {
   return new Promise((resolve, reject) => {
-    execFile('git', [...safeDirectoryArgs(cwd), ...args], { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
-      if (error) {
-        const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
-        reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
-      } else resolve(stdout);
-    });
+    execFile(
+      'git',
+      [...safeDirectoryArgs(cwd), ...args],
+      { cwd, encoding: 'buffer', maxBuffer, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } },
+      (error, stdout, stderr) => {
+        if (error) {
+          const detail = Buffer.isBuffer(stderr) ? stderr.toString('utf8').trim() : '';
+          reject(new Error(`git ${args[0]} failed: ${detail || error.message}`));
+        } else resolve(stdout);
+      },
+    );
   });
 }
 
@@ -155,8 +160,14 @@ export function createGitRepository(options: GitRepositoryOptions): RepoReader {
     return listing;
   };
   const outside = (file: string, where: { file?: string; line?: number; column?: number; key?: string }, target: string): InputError =>
-    new InputError(PATH_OUTSIDE, `path ${quoteValue(target)} leaves the repository through a link in ${label}; expected a path inside it`, { file: where.file ?? file, line: where.line, column: where.column, key: where.key });
-  const missing = (file: string): InputError => new InputError(FILE_MISSING, `no such file in ${label}; expected an existing file`, { file });
+    new InputError(PATH_OUTSIDE, `path ${quoteValue(target)} leaves the repository through a link in ${label}; expected a path inside it`, {
+      file: where.file ?? file,
+      line: where.line,
+      column: where.column,
+      key: where.key,
+    });
+  const missing = (file: string): InputError =>
+    new InputError(FILE_MISSING, `no such file in ${label}; expected an existing file`, { file });
 
   /**
    * Follows links component by component inside the tree. Returns the final path and its entry

@@ -52,19 +52,32 @@ export function patternProblem(pattern: string): PatternProblem | null {
     return { kind: 'complex', message: `pattern ${shown} has ${pattern.length} characters; expected at most ${MAX_PATTERN_LENGTH}` };
   }
   const p = pattern.replace(/\\/g, '/');
-  if (p.includes('\u0000')) return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
+  if (p.includes('\u0000'))
+    return { kind: 'outside', message: `pattern ${shown} contains a NUL character; expected a plain relative pattern` };
   if (p.startsWith('/') || /^[A-Za-z]:/.test(p)) {
-    return { kind: 'outside', message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root` };
+    return {
+      kind: 'outside',
+      message: `pattern ${shown} is absolute, so it leaves the repository; expected a pattern relative to the repository root`,
+    };
   }
   if (p.split(/[/{},()|]/).some((piece) => piece === '..')) {
-    return { kind: 'outside', message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)` };
+    return {
+      kind: 'outside',
+      message: `pattern ${shown} leaves the repository through a \`..\` segment; expected a pattern that stays inside it (no \`..\` anywhere, braces included)`,
+    };
   }
   const alternatives = expandBraces(p, MAX_ALTERNATIVES);
   if (alternatives === null) {
-    return { kind: 'complex', message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)` };
+    return {
+      kind: 'complex',
+      message: `pattern ${shown} expands to more than ${MAX_ALTERNATIVES} alternatives through its braces; expected fewer (write several patterns instead)`,
+    };
   }
   if (alternatives.some((a) => a.startsWith('/') || /^[A-Za-z]:/.test(a))) {
-    return { kind: 'outside', message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root` };
+    return {
+      kind: 'outside',
+      message: `pattern ${shown} has an absolute alternative, which leaves the repository; expected patterns relative to the repository root`,
+    };
   }
   return null;
 }
@@ -314,7 +327,10 @@ export function compilePatterns(patterns: readonly string[]): PatternSet {
     if (problem !== null) throw new InputError(problem.kind === 'outside' ? PATH_OUTSIDE : GLOB_TOO_COMPLEX, problem.message, {});
     const text = pattern.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
     for (const alt of expandBraces(text) ?? []) {
-      const parts = alt.replace(/^(\.\/)+/, '').split('/').filter((s) => s !== '' && s !== '.');
+      const parts = alt
+        .replace(/^(\.\/)+/, '')
+        .split('/')
+        .filter((s) => s !== '' && s !== '.');
       // A pattern ending with `/` names folders, and a folder is never a descriptor: an empty
       // last segment matches no name.
       const segments: Segment[] = parts.map(compileSegment);
@@ -323,7 +339,8 @@ export function compilePatterns(patterns: readonly string[]): PatternSet {
     }
   }
   const start: WalkState = alternatives.map((alt) => close(alt, [0]));
-  const step = (state: WalkState, name: string): WalkState => state.map((positions, a) => (positions.length === 0 ? positions : stepAlternative(alternatives[a], positions, name)));
+  const step = (state: WalkState, name: string): WalkState =>
+    state.map((positions, a) => (positions.length === 0 ? positions : stepAlternative(alternatives[a], positions, name)));
   const accepts = (state: WalkState): boolean => state.some((positions, a) => positions.includes(alternatives[a].segments.length));
   const alive = (state: WalkState): boolean => state.some((positions, a) => positions.some((i) => i < alternatives[a].segments.length));
   const walk = (path: string): WalkState | null => {

@@ -58,12 +58,21 @@ export function realFolder(named: string, options: RealFolderOptions): string {
     real = realpathSync(named);
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code ?? String(error);
-    const why = code === 'ELOOP' ? 'goes round a loop of symbolic links' : code === 'ENOENT' || code === 'ENOTDIR' ? 'does not exist' : `cannot be read (${code})`;
+    const why =
+      code === 'ELOOP'
+        ? 'goes round a loop of symbolic links'
+        : code === 'ENOENT' || code === 'ENOTDIR'
+          ? 'does not exist'
+          : `cannot be read (${code})`;
     throw new InputError(FOLDER_REFUSED, `${named} ${why}; expected an existing folder`, where);
   }
   if (!statSync(real).isDirectory()) throw new InputError(FOLDER_REFUSED, `${named} is not a folder; expected an existing folder`, where);
   if (boundary !== null && namedInside && !isInsideFolder(realpathSync(boundary), real)) {
-    throw new InputError(FOLDER_REFUSED, `${named} leads out of the ${boundaryName} ${boundary} through a symbolic link; expected a folder whose real path is inside it`, where);
+    throw new InputError(
+      FOLDER_REFUSED,
+      `${named} leads out of the ${boundaryName} ${boundary} through a symbolic link; expected a folder whose real path is inside it`,
+      where,
+    );
   }
   return real;
 }

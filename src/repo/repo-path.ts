@@ -65,7 +65,8 @@ export function isAbsoluteLike(path: string): boolean {
  */
 export function normaliseRepoPath(path: string, location?: ErrorLocation): string {
   const where = location ?? { file: path };
-  if (path.includes('\u0000')) throw new InputError(PATH_OUTSIDE, `path ${quoteValue(path)} contains a NUL character; expected a plain relative path`, where);
+  if (path.includes('\u0000'))
+    throw new InputError(PATH_OUTSIDE, `path ${quoteValue(path)} contains a NUL character; expected a plain relative path`, where);
   const slashed = path.replace(/\\/g, '/');
   if (isAbsoluteLike(path)) {
     throw new InputError(PATH_OUTSIDE, `path ${quoteValue(path)} is absolute; expected a path relative to the repository`, where);
@@ -88,7 +89,11 @@ export function normaliseRepoPath(path: string, location?: ErrorLocation): strin
  */
 export function joinRepoPath(fromFile: string, target: string, location: ErrorLocation): string {
   if (isAbsoluteLike(target)) {
-    throw new InputError(PATH_OUTSIDE, `path ${quoteValue(target)} is absolute; expected a path relative to ${clip(fromFile)}'s folder`, location);
+    throw new InputError(
+      PATH_OUTSIDE,
+      `path ${quoteValue(target)} is absolute; expected a path relative to ${clip(fromFile)}'s folder`,
+      location,
+    );
   }
   const folder = posix.dirname(normaliseRepoPath(fromFile));
   const joined = posix.join(folder, target.replace(/\\/g, '/'));

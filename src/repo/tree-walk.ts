@@ -17,7 +17,6 @@ export const MAX_WALK_ENTRIES = 1_000_000;
 /** Code of a walk over {@link MAX_WALK_ENTRIES}. */
 export const WALK_TOO_LARGE = 'glob-too-large';
 
-
 /** What a walk found. */
 export interface WalkResult {
   /**
@@ -52,12 +51,20 @@ export function walkTree(rootReal: string, patterns: PatternSet, maxEntries = MA
     } catch (error) {
       const code = codeOf(error);
       if (code === 'ENOENT' || code === 'ENOTDIR') continue; // gone while the walk ran
-      throw new InputError(FILE_UNREADABLE, `the folder cannot be listed (${code ?? 'error'}) while searching for descriptors; expected a readable folder`, { file: folder.rel === '' ? '.' : folder.rel });
+      throw new InputError(
+        FILE_UNREADABLE,
+        `the folder cannot be listed (${code ?? 'error'}) while searching for descriptors; expected a readable folder`,
+        { file: folder.rel === '' ? '.' : folder.rel },
+      );
     }
     for (const entry of entries) {
       seen += 1;
       if (seen > maxEntries) {
-        throw new InputError(WALK_TOO_LARGE, `the \`models\` patterns reach more than ${maxEntries} files and folders; expected patterns that name the folders holding descriptors (e.g. models/**/*.model.yml)`, {});
+        throw new InputError(
+          WALK_TOO_LARGE,
+          `the \`models\` patterns reach more than ${maxEntries} files and folders; expected patterns that name the folders holding descriptors (e.g. models/**/*.model.yml)`,
+          {},
+        );
       }
       const name = entry.name;
       const rel = folder.rel === '' ? name : `${folder.rel}/${name}`;
@@ -81,7 +88,6 @@ export function walkTree(rootReal: string, patterns: PatternSet, maxEntries = MA
   }
   return { paths: paths.sort(), notEntered: notEntered.sort() };
 }
-
 
 /** True when the link at `abs` leads to a folder (its status only is looked at, never its contents). */
 function leadsToFolder(abs: string): boolean {

@@ -104,12 +104,10 @@ function overviewRow(m: ModelResult, i: number): string {
 
 /** The overview table, one piece per row. */
 function* overview(result: Result): Generator<string> {
-  yield (
-    '<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
+  yield '<section class="overview" aria-labelledby="overview-title"><h2 id="overview-title">Models</h2>' +
     '<table><thead><tr><th>Status</th><th>Model</th><th class="num">Training rows</th><th class="num">Hold-out rows</th><th class="num">Parameters</th>' +
     '<th class="num">Hold-out RMSE</th><th class="num">Gap ratio</th><th class="num">Max std. coef.</th><th>Over a limit</th></tr></thead>' +
-    '<tbody>'
-  );
+    '<tbody>';
   for (let i = 0; i < result.models.length; i++) yield overviewRow(result.models[i], i);
   yield '</tbody></table></section>';
 }
@@ -118,7 +116,9 @@ function checksTable(m: ModelResult): string {
   const rows = m.checks.map((c) => {
     const title = findCheck(c.id)?.title ?? c.id;
     const advice = c.advice ? ` <span class="advice">${escapeHtml(c.advice)}</span>` : '';
-    const suggestion = c.suggestion ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${escapeHtml(c.suggestion.text)}</span>` : '';
+    const suggestion = c.suggestion
+      ? ` <span class="advice">Suggestion (line ${c.suggestion.line}): ${escapeHtml(c.suggestion.text)}</span>`
+      : '';
     return (
       `<tr data-check="${escapeHtml(c.id)}" data-status="${escapeHtml(c.status)}"><td>${escapeHtml(title)}<br><code class="muted">${escapeHtml(c.id)}</code></td><td>${badge(c.status)}</td>` +
       `<td class="num">${num(c.value)}</td><td class="num">${escapeHtml(limitText(c))}</td><td class="num">${c.line}</td>` +
@@ -146,17 +146,33 @@ function charts(chart: ChartData, prefix: string): string[] {
       ),
     );
   } else {
-    out.push(figure(predictedActualChart(chart, { id: `${prefix}-pa` }), 'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.'));
+    out.push(
+      figure(
+        predictedActualChart(chart, { id: `${prefix}-pa` }),
+        'Predicted against actual values; hold-out points far from the dashed line while training points sit on it show overfitting.',
+      ),
+    );
   }
   out.push(figure(residualsChart(chart, { id: `${prefix}-res` }), 'Residuals against fitted values.'));
   chart.partials.forEach((curve, k) => {
-    out.push(figure(partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }), `Partial curve along ${curve.input}, the other inputs at their training medians.`));
+    out.push(
+      figure(
+        partialCurveChart(chart, curve, { id: `${prefix}-partial-${k + 1}` }),
+        `Partial curve along ${curve.input}, the other inputs at their training medians.`,
+      ),
+    );
   });
   if (chart.sweep) {
     out.push(figure(cvCurveChart(chart.sweep, { id: `${prefix}-cv` }), 'Cross-validated error over the complexity sweep.'));
   }
   const bars = coefficientBarsChart(chart.coefficients, { id: `${prefix}-coef` });
-  if (bars) out.push(figure(bars, 'Standardised coefficients: the change in the prediction, in target standard deviations, for one standard deviation of each column.'));
+  if (bars)
+    out.push(
+      figure(
+        bars,
+        'Standardised coefficients: the change in the prediction, in target standard deviations, for one standard deviation of each column.',
+      ),
+    );
   return out;
 }
 
@@ -182,9 +198,15 @@ function modelSection(m: ModelResult, index: number): string {
     const list = charts(m.charts, id);
     const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
     parts.push(`<h3>Charts</h3>`);
-    if (thinned.length) parts.push(`<p class="note">${thinned.map((s) => escapeHtml(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`);
+    if (thinned.length)
+      parts.push(
+        `<p class="note">${thinned.map((s) => escapeHtml(`${s === m.charts?.train ? 'Training' : 'Hold-out'} rows: ${s.thinning}.`)).join(' ')}</p>`,
+      );
     const leftOut = m.charts.partialsLeftOut ?? 0;
-    if (leftOut > 0) parts.push(`<p class="note">${escapeHtml(`Partial curves of the first ${m.charts.partials.length} inputs; ${leftOut} more left out.`)}</p>`);
+    if (leftOut > 0)
+      parts.push(
+        `<p class="note">${escapeHtml(`Partial curves of the first ${m.charts.partials.length} inputs; ${leftOut} more left out.`)}</p>`,
+      );
     parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
   } else {
     parts.push('<p class="note">No chart data in this result.</p>');

@@ -138,7 +138,9 @@ export function formatMarkdown(result: Result, options: MarkdownOptions = {}): s
     const tableBudget = bytes(out) + Math.max(left / 2, left - detailBytes);
     let size = bytes(out) + bytes(tableHead);
     const keep = new Set<number>();
-    const order = result.models.map((_, i) => i).sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
+    const order = result.models
+      .map((_, i) => i)
+      .sort((a, b) => Number(result.models[a].verdict === 'pass') - Number(result.models[b].verdict === 'pass') || a - b);
     for (const i of order) {
       if (size + bytes(rows[i]) > tableBudget) break;
       keep.add(i);

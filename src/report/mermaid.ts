@@ -21,7 +21,11 @@ export interface MermaidOptions {
 /** A number for a Mermaid series: 4 significant digits, plain decimal notation. */
 function value(v: number): string {
   const r = Number(v.toPrecision(4));
-  return Object.is(r, -0) ? '0' : String(r).includes('e') ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r)))))) : String(r);
+  return Object.is(r, -0)
+    ? '0'
+    : String(r).includes('e')
+      ? r.toFixed(Math.min(100, Math.max(0, 3 - Math.floor(Math.log10(Math.abs(r))))))
+      : String(r);
 }
 
 /** Indices of at most `max` evenly spaced entries of a list of `n`, first and last kept. */

@@ -78,7 +78,9 @@ export function neutraliseJson(json: string): string {
  * @param max longest result, in characters; default {@link MAX_SERVER_TEXT}
  */
 export function quoteServerText(text: string, max = MAX_SERVER_TEXT): string {
-  const visible = escapeTerminal(text.replace(LINE_BREAK, ' ')).replace(/\p{Cf}/gu, codeEscape).replace(/\p{Cs}/gu, '\ufffd');
+  const visible = escapeTerminal(text.replace(LINE_BREAK, ' '))
+    .replace(/\p{Cf}/gu, codeEscape)
+    .replace(/\p{Cs}/gu, '\ufffd');
   const chars = [...neutraliseLogLine(visible)];
   return chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : chars.join('');
 }

@@ -87,7 +87,9 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
         level: 'error',
         message: { text: `${m.name}: could not be checked: ${m.error.message}` },
         descriptor: { id: m.error.code },
-        locations: [{ physicalLocation: { artifactLocation: { uri: pathUri(prefix, file), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } }],
+        locations: [
+          { physicalLocation: { artifactLocation: { uri: pathUri(prefix, file), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } },
+        ],
       });
       continue;
     }
@@ -102,7 +104,14 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
         ...(index === undefined ? {} : { ruleIndex: index }),
         level,
         message: { text: `${m.name}: ${c.message}.${advice}` },
-        locations: [{ physicalLocation: { artifactLocation: { uri: pathUri(prefix, m.descriptor), uriBaseId: '%SRCROOT%' }, ...(r ? { region: r } : {}) } }],
+        locations: [
+          {
+            physicalLocation: {
+              artifactLocation: { uri: pathUri(prefix, m.descriptor), uriBaseId: '%SRCROOT%' },
+              ...(r ? { region: r } : {}),
+            },
+          },
+        ],
         partialFingerprints: { 'fitgateFinding/v1': fingerprint(m.name, c.id) },
         properties: {
           model: m.name,

@@ -120,7 +120,11 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   }
   for (const m of result.models) {
     const previous = m.base?.status === 'renamed' ? m.base.previous : undefined;
-    if (previous) out.push('', `note: ${escapeTerminal(m.name)} is compared with ${escapeTerminal(previous.name)} (${escapeTerminal(previous.descriptor)}) of the base commit, found by its ${previous.matched_by === 'data' ? 'data files' : 'descriptor path'}`);
+    if (previous)
+      out.push(
+        '',
+        `note: ${escapeTerminal(m.name)} is compared with ${escapeTerminal(previous.name)} (${escapeTerminal(previous.descriptor)}) of the base commit, found by its ${previous.matched_by === 'data' ? 'data files' : 'descriptor path'}`,
+      );
   }
   for (const note of result.notes) out.push('', `note: ${escapeTerminal(note)}`);
   const { counts } = result;

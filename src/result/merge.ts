@@ -21,7 +21,16 @@
  * InputError naming the report file and the key path (e.g. `models[2].verdict`).
  */
 import { InputError, clip, quoteValue } from '../core/errors.js';
-import { summarise, type ModelResult, type Result, fromJsonNumber, worse, type CheckResult, type CheckStatus, type Verdict } from './result.js';
+import {
+  summarise,
+  type ModelResult,
+  type Result,
+  fromJsonNumber,
+  worse,
+  type CheckResult,
+  type CheckStatus,
+  type Verdict,
+} from './result.js';
 import { validateReport } from '../config/generated/report-validator.js';
 
 /** One shard report as read from disk. */
@@ -127,8 +136,7 @@ export function jsonErrorOffset(text: string): number {
         else if (text[i] === '}') {
           i++;
           return;
-        }
-        else fail();
+        } else fail();
       }
     }
     if (c === '[') {
@@ -145,8 +153,7 @@ export function jsonErrorOffset(text: string): number {
         else if (text[i] === ']') {
           i++;
           return;
-        }
-        else fail();
+        } else fail();
       }
     }
     if (c === '"') string();
@@ -209,10 +216,18 @@ function parseJson(input: ReportInput): unknown {
   if (scanned !== null) {
     const where = { file: input.file, ...lineColumn(input.text, scanned.offset) };
     if (scanned.problem === 'depth') {
-      throw new InputError(MERGE_ERROR.tooDeep, `the JSON nests arrays and objects more than ${MAX_REPORT_DEPTH} levels deep; expected a fitgate JSON report (a few levels)`, where);
+      throw new InputError(
+        MERGE_ERROR.tooDeep,
+        `the JSON nests arrays and objects more than ${MAX_REPORT_DEPTH} levels deep; expected a fitgate JSON report (a few levels)`,
+        where,
+      );
     }
     const literal = /^-?[0-9eE+.-]*/.exec(input.text.slice(scanned.offset, scanned.offset + 200))?.[0] ?? '';
-    throw new InputError(MERGE_ERROR.number, `the number ${quoteValue(literal)} is beyond the range of 64-bit floating point; expected finite numbers (a report writes the others as "Infinity", "-Infinity" or "NaN")`, where);
+    throw new InputError(
+      MERGE_ERROR.number,
+      `the number ${quoteValue(literal)} is beyond the range of 64-bit floating point; expected finite numbers (a report writes the others as "Infinity", "-Infinity" or "NaN")`,
+      where,
+    );
   }
   try {
     return JSON.parse(input.text);
@@ -220,16 +235,26 @@ function parseJson(input: ReportInput): unknown {
     const message = error instanceof Error ? error.message : String(error);
     const offset = jsonErrorOffset(input.text);
     const where = offset >= 0 ? lineColumn(input.text, offset) : {};
-    throw new InputError(MERGE_ERROR.json, `expected a fitgate JSON report (from \`fitgate check --format json\`), but the JSON does not parse: ${clip(message)}`, {
-      file: input.file,
-      ...where,
-    });
+    throw new InputError(
+      MERGE_ERROR.json,
+      `expected a fitgate JSON report (from \`fitgate check --format json\`), but the JSON does not parse: ${clip(message)}`,
+      {
+        file: input.file,
+        ...where,
+      },
+    );
   }
 }
 
 /** A JSON pointer (`/models/2/verdict`) as a key path (`models[2].verdict`); `(top level)` for the root. */
 function keyPath(pointer: string, extra?: string): string {
-  const parts = pointer === '' ? [] : pointer.slice(1).split('/').map((p) => p.replace(/~1/g, '/').replace(/~0/g, '~'));
+  const parts =
+    pointer === ''
+      ? []
+      : pointer
+          .slice(1)
+          .split('/')
+          .map((p) => p.replace(/~1/g, '/').replace(/~0/g, '~'));
   if (extra !== undefined) parts.push(extra);
   let out = '';
   for (const part of parts) out += /^\d+$/.test(part) ? `[${part}]` : out === '' ? part : `.${part}`;
@@ -259,7 +284,15 @@ function expectation(error: SchemaError): string {
   switch (error.keyword) {
     case 'type': {
       const types = String(p.type).split(',');
-      const words: Record<string, string> = { string: 'a string', number: 'a number', integer: 'a whole number', object: 'an object', array: 'an array', boolean: 'true or false', null: 'null' };
+      const words: Record<string, string> = {
+        string: 'a string',
+        number: 'a number',
+        integer: 'a whole number',
+        object: 'an object',
+        array: 'an array',
+        boolean: 'true or false',
+        null: 'null',
+      };
       return types.map((t) => words[t] ?? t).join(' or ');
     }
     case 'enum':
@@ -282,16 +315,25 @@ function schemaError(file: string, value: unknown, errors: readonly SchemaError[
   const deepest = errors.reduce((best, e) => (depth(e) > depth(best) ? e : best), errors[0]);
   if (deepest.keyword === 'required') {
     const missing = String(deepest.params.missingProperty);
-    return new InputError(MERGE_ERROR.shape, `expected key \`${clip(missing)}\`, got nothing`, { file, key: keyPath(deepest.instancePath, missing) });
+    return new InputError(MERGE_ERROR.shape, `expected key \`${clip(missing)}\`, got nothing`, {
+      file,
+      key: keyPath(deepest.instancePath, missing),
+    });
   }
   if (deepest.keyword === 'additionalProperties') {
     const extra = String(deepest.params.additionalProperty);
-    return new InputError(MERGE_ERROR.shape, `expected no key \`${clip(extra)}\` (it is not part of a fitgate JSON report)`, { file, key: keyPath(deepest.instancePath, extra) });
+    return new InputError(MERGE_ERROR.shape, `expected no key \`${clip(extra)}\` (it is not part of a fitgate JSON report)`, {
+      file,
+      key: keyPath(deepest.instancePath, extra),
+    });
   }
   // Alternatives (anyOf) at one place: every branch's expectation, once each.
   const here = errors.filter((e) => e.instancePath === deepest.instancePath && e.keyword !== 'anyOf');
   const expected = [...new Set((here.length > 0 ? here : [deepest]).map(expectation))].join(', or ');
-  return new InputError(MERGE_ERROR.shape, `expected ${expected}, got ${quoteValue(valueAt(value, deepest.instancePath))}`, { file, key: keyPath(deepest.instancePath) });
+  return new InputError(MERGE_ERROR.shape, `expected ${expected}, got ${quoteValue(valueAt(value, deepest.instancePath))}`, {
+    file,
+    key: keyPath(deepest.instancePath),
+  });
 }
 
 /** The status the registry gives a figure against its limits (checks/types.ts `judge`); both when limits alone cannot tell. */
@@ -316,20 +358,27 @@ function checkConsistency(file: string, report: Result): void {
     let expected: Verdict = 'pass';
     m.checks.forEach((c, j) => {
       const allowed = statusesOf(c);
-      if (!allowed.includes(c.status)) inconsistent(`models[${i}].checks[${j}].status`, `the status is ${quoteValue(c.status)} but the figure ${quoteValue(c.value)} against the limits (fail ${quoteValue(c.limit)}, warn ${quoteValue(c.warn)}) gives ${allowed.join(' or ')}`);
+      if (!allowed.includes(c.status))
+        inconsistent(
+          `models[${i}].checks[${j}].status`,
+          `the status is ${quoteValue(c.status)} but the figure ${quoteValue(c.value)} against the limits (fail ${quoteValue(c.limit)}, warn ${quoteValue(c.warn)}) gives ${allowed.join(' or ')}`,
+        );
       if (c.status === 'fail' || c.status === 'warn') expected = worse(expected, c.status);
     });
     if (m.error !== null) expected = 'error';
     if (m.verdict !== expected) {
-      const because = m.error !== null ? 'the model has an error' : m.verdict === 'error' ? 'the model has no error' : 'its checks give that';
+      const because =
+        m.error !== null ? 'the model has an error' : m.verdict === 'error' ? 'the model has no error' : 'its checks give that';
       inconsistent(`models[${i}].verdict`, `the verdict is ${quoteValue(m.verdict)} but ${because}: ${quoteValue(expected)}`);
     }
     counts[m.verdict] += 1;
     verdict = worse(verdict, m.verdict);
   });
-  if (report.verdict !== verdict) inconsistent('verdict', `the report's verdict is ${quoteValue(report.verdict)} but its models give ${quoteValue(verdict)}`);
+  if (report.verdict !== verdict)
+    inconsistent('verdict', `the report's verdict is ${quoteValue(report.verdict)} but its models give ${quoteValue(verdict)}`);
   for (const key of ['models', 'pass', 'warn', 'fail', 'error'] as const) {
-    if (report.counts[key] !== counts[key]) inconsistent(`counts.${key}`, `the count is ${report.counts[key]} but the models give ${counts[key]}`);
+    if (report.counts[key] !== counts[key])
+      inconsistent(`counts.${key}`, `the count is ${report.counts[key]} but the models give ${counts[key]}`);
   }
 }
 
@@ -345,29 +394,50 @@ function readReport(input: ReportInput): Result {
 /** With `--expect N` there must be N reports; reports that name their shard must cover 1..N once each. */
 function checkShards(inputs: readonly ReportInput[], reports: readonly Result[], expect: number | null): void {
   if (expect !== null && reports.length !== expect) {
-    throw new InputError(MERGE_ERROR.missingShard, `--expect ${expect} asks for ${expect} shard report${expect === 1 ? '' : 's'}, got ${reports.length}; expected every shard's report (did a shard job fail before writing it?)`, { key: '--expect' });
+    throw new InputError(
+      MERGE_ERROR.missingShard,
+      `--expect ${expect} asks for ${expect} shard report${expect === 1 ? '' : 's'}, got ${reports.length}; expected every shard's report (did a shard job fail before writing it?)`,
+      { key: '--expect' },
+    );
   }
   const named = reports.map((r, i) => ({ shard: r.shard, file: inputs[i].file })).filter((r) => r.shard !== undefined);
   if (named.length === 0) return;
   const unnamed = reports.findIndex((r) => r.shard === undefined);
   if (unnamed >= 0) {
-    throw new InputError(MERGE_ERROR.missingShard, `the report names no shard while ${clip(named[0].file)} is shard ${named[0].shard?.index}/${named[0].shard?.count}; expected reports of one sharded run`, { file: inputs[unnamed].file, key: 'shard' });
+    throw new InputError(
+      MERGE_ERROR.missingShard,
+      `the report names no shard while ${clip(named[0].file)} is shard ${named[0].shard?.index}/${named[0].shard?.count}; expected reports of one sharded run`,
+      { file: inputs[unnamed].file, key: 'shard' },
+    );
   }
   const count = expect ?? named[0].shard?.count ?? 0;
   const seen = new Map<number, string>();
   for (const { shard, file } of named) {
     if (shard === undefined) continue;
     if (shard.count !== count || shard.index > count) {
-      throw new InputError(MERGE_ERROR.missingShard, `the report is shard ${shard.index}/${shard.count}, but ${expect !== null ? `--expect ${expect}` : `${clip(named[0].file)} is of ${count} shards`}; expected reports of one run split ${count} ways`, { file, key: 'shard' });
+      throw new InputError(
+        MERGE_ERROR.missingShard,
+        `the report is shard ${shard.index}/${shard.count}, but ${expect !== null ? `--expect ${expect}` : `${clip(named[0].file)} is of ${count} shards`}; expected reports of one run split ${count} ways`,
+        { file, key: 'shard' },
+      );
     }
     const first = seen.get(shard.index);
-    if (first !== undefined) throw new InputError(MERGE_ERROR.duplicate, `shard ${shard.index}/${count} is also ${clip(first)}; expected each shard's report once`, { file, key: 'shard.index' });
+    if (first !== undefined)
+      throw new InputError(
+        MERGE_ERROR.duplicate,
+        `shard ${shard.index}/${count} is also ${clip(first)}; expected each shard's report once`,
+        { file, key: 'shard.index' },
+      );
     seen.set(shard.index, file);
   }
   const missing: number[] = [];
   for (let k = 1; k <= count && missing.length < 20; k++) if (!seen.has(k)) missing.push(k);
   if (missing.length > 0) {
-    throw new InputError(MERGE_ERROR.missingShard, `the reports are of a run split ${count} ways, but shard${missing.length === 1 ? '' : 's'} ${missing.map((k) => `${k}/${count}`).join(', ')} ${missing.length === 1 ? 'is' : 'are'} missing; expected every shard's report`, { key: 'shard' });
+    throw new InputError(
+      MERGE_ERROR.missingShard,
+      `the reports are of a run split ${count} ways, but shard${missing.length === 1 ? '' : 's'} ${missing.map((k) => `${k}/${count}`).join(', ')} ${missing.length === 1 ? 'is' : 'are'} missing; expected every shard's report`,
+      { key: 'shard' },
+    );
   }
 }
 
@@ -387,7 +457,10 @@ function checkShards(inputs: readonly ReportInput[], reports: readonly Result[],
  */
 export function mergeReports(inputs: readonly ReportInput[], version: string, options: MergeOptions = {}): Result {
   if (inputs.length === 0) {
-    throw new InputError(MERGE_ERROR.none, 'expected at least one JSON report to merge (the files `fitgate check --shard K/N --format json --out FILE` wrote), got none');
+    throw new InputError(
+      MERGE_ERROR.none,
+      'expected at least one JSON report to merge (the files `fitgate check --shard K/N --format json --out FILE` wrote), got none',
+    );
   }
   const reports = inputs.map(readReport);
   checkShards(inputs, reports, options.expect ?? null);

@@ -14,7 +14,6 @@ export type CheckStatus = 'pass' | 'warn' | 'fail' | 'skipped';
 /** Verdict of a model or of the whole run. `error`: the model could not be checked. */
 export type Verdict = 'pass' | 'warn' | 'fail' | 'error';
 
-
 /** The outcome of one check on one model. */
 export interface CheckResult {
   /** Check id, e.g. `generalisation-gap`. */

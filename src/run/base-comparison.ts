@@ -114,7 +114,9 @@ export function compareWithBase(metrics: ModelMetrics, match: BaseMatch | null, 
   return {
     status: renamed ? 'renamed' : 'compared',
     commit,
-    ...(renamed ? { previous: { name: baseline.name, descriptor: baseline.descriptor, matched_by: match.by === 'data' ? 'data' : 'descriptor' } } : {}),
+    ...(renamed
+      ? { previous: { name: baseline.name, descriptor: baseline.descriptor, matched_by: match.by === 'data' ? 'data' : 'descriptor' } }
+      : {}),
     holdout_rmse: b ? b.holdout_rmse : null,
     gap_ratio: b ? b.gap_ratio : null,
     holdout_rmse_change: rmseChange === null ? null : jsonNumber(rmseChange),

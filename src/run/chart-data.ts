@@ -12,7 +12,21 @@ import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/res
 import { columnMedian } from '../diagnostics/column-median.js';
 import { range } from '../design/stats.js';
 import type { FittedModel } from './fit-model.js';
-import { CHART_DIGITS, CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, MAX_PARTIAL_CURVES, MAX_SERIES_NUMBERS, PARTIAL_CURVE_POINTS, type BandRegion, type ChartData, type CurveData, type FitCurveData, type PointSeries, type SweepData } from '../result/chart-types.js';
+import {
+  CHART_DIGITS,
+  CURVE_MARGIN,
+  CURVE_POINTS,
+  MAX_CHART_POINTS,
+  MAX_PARTIAL_CURVES,
+  MAX_SERIES_NUMBERS,
+  PARTIAL_CURVE_POINTS,
+  type BandRegion,
+  type ChartData,
+  type CurveData,
+  type FitCurveData,
+  type PointSeries,
+  type SweepData,
+} from '../result/chart-types.js';
 
 export { MAX_CHART_POINTS } from '../result/chart-types.js';
 
@@ -58,7 +72,15 @@ export function partialCurvePoints(curves: number): number {
 }
 
 /** Predictions along input c over [lo, hi] at `points` grid points (plus `extra` x values), the others at `medians`. */
-function curveAlong(model: FittedModel, c: number, lo: number, hi: number, medians: number[], extra: readonly number[], points: number): { x: number[]; y: (number | null)[] } {
+function curveAlong(
+  model: FittedModel,
+  c: number,
+  lo: number,
+  hi: number,
+  medians: number[],
+  extra: readonly number[],
+  points: number,
+): { x: number[]; y: (number | null)[] } {
   const xs: number[] = [];
   for (let t = 0; t < points; t++) xs.push(t === points - 1 ? hi : lo + ((hi - lo) * t) / (points - 1));
   for (const v of extra) if (v >= lo && v <= hi) xs.push(v);

@@ -157,15 +157,28 @@ export function estimateCost(shape: ModelShape): CostEstimate {
     { stage: 'fold pass', operations: build(n, b) + n * p2, sizes: rowsBy(n) },
     { stage: 'fold merges and fit', operations: 4 * k * p3 + FIT_SVDS * svd(p), sizes: `${k} folds, ${p} columns` },
     { stage: 'refinement pass', operations: build(n, b) + 2 * n * p, sizes: rowsBy(n) },
-    { stage: 'scoring pass', operations: build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0), sizes: `${n} + ${m} rows x ${p} columns` },
+    {
+      stage: 'scoring pass',
+      operations:
+        build(n, b) + n * (LEVERAGE_OPERATIONS * p2 + 2 * p) + build(m, b) + m * p + (shape.shipped ? build(n + m, b) + (n + m) * p : 0),
+      sizes: `${n} + ${m} rows x ${p} columns`,
+    },
     { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
   ];
   const grid = swingPoints(d, n);
   const sampled = Math.min(n, SWING_DEFAULTS.maxRows);
   const sorted = Math.min(n, SWING_DEFAULTS.maxGridRows);
-  parts.push({ stage: 'swing scan', operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n), sizes: `${grid} points` });
+  parts.push({
+    stage: 'swing scan',
+    operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n),
+    sizes: `${grid} points`,
+  });
   const curves = Math.min(d, MAX_PARTIAL_CURVES);
-  parts.push({ stage: 'leakage and charts', operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d, sizes: `${n} + ${m} rows x ${d} inputs` });
+  parts.push({
+    stage: 'leakage and charts',
+    operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d,
+    sizes: `${n} + ${m} rows x ${d} inputs`,
+  });
   parts.push(sweepPart(shape, k));
   return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
 }
@@ -177,7 +190,11 @@ function sweepPart(shape: ModelShape, k: number): CostPart {
   const p = shape.columns;
   if (sweep.kind === 'ridge') {
     const L = sweep.parameters.length;
-    return { stage: 'complexity sweep', operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p, sizes: `${L} ridge penalties x ${k} folds` };
+    return {
+      stage: 'complexity sweep',
+      operations: k * SVD_OPERATIONS * p * p * p + 2 * L * k * p * p,
+      sizes: `${L} ridge penalties x ${k} folds`,
+    };
   }
   const perColumn = shape.buildPerRow / Math.max(1, p);
   let ops = 0;

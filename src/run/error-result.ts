@@ -47,7 +47,13 @@ export const TIME_LIMIT = 'time-limit';
  * @param stage what was running (a stage of the run), or null when the model's thread was ended from outside
  * @param settingsFile path of the settings file, or null when there is none
  */
-export function timeLimitError(descriptor: Descriptor, limitSeconds: number, elapsedMs: number, stage: string | null, settingsFile: string | null): InputError {
+export function timeLimitError(
+  descriptor: Descriptor,
+  limitSeconds: number,
+  elapsedMs: number,
+  stage: string | null,
+  settingsFile: string | null,
+): InputError {
   const where = stage === null ? 'its worker thread was stopped' : `stopped in the ${stage}`;
   return new InputError(
     TIME_LIMIT,

@@ -9,7 +9,15 @@ import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
 import type { RepoReader } from '../repo/types.js';
-import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type ShippedMetrics, type Verdict } from '../result/result.js';
+import {
+  jsonNumber,
+  worse,
+  type CheckResult,
+  type ModelMetrics,
+  type ModelResult,
+  type ShippedMetrics,
+  type Verdict,
+} from '../result/result.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { withBaseCurves } from './base-curves.js';
 import { buildChartData } from './chart-data.js';
@@ -57,13 +65,23 @@ function reportMetrics(model: FittedModel): ModelMetrics {
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
  * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
  */
-export async function evaluateModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput, deadline?: Deadline): Promise<ModelResult> {
+export async function evaluateModel(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  base?: BaseInput,
+  deadline?: Deadline,
+): Promise<ModelResult> {
   const within = deadline ?? new Deadline(settings.caps.maxModelSeconds * 1000);
   try {
     return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, base));
   } catch (error) {
     if (!(error instanceof TimeLimitExceeded)) throw error;
-    return errorResult(descriptor.name, descriptor.file, timeLimitError(descriptor, settings.caps.maxModelSeconds, error.elapsedMs, error.stage, settings.file));
+    return errorResult(
+      descriptor.name,
+      descriptor.file,
+      timeLimitError(descriptor, settings.caps.maxModelSeconds, error.elapsedMs, error.stage, settings.file),
+    );
   }
 }
 
@@ -79,7 +97,15 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     // A fault of fitgate's own on this model's data: report it on this model (exit status 2) so
     // that every other model still gets its outcome; the code marks it as a bug to report.
     const detail = error instanceof Error ? error.message : String(error);
-    return errorResult(descriptor.name, descriptor.file, new InputError(INTERNAL_ERROR, `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`, { file: descriptor.file, line: descriptor.termsLine }));
+    return errorResult(
+      descriptor.name,
+      descriptor.file,
+      new InputError(
+        INTERNAL_ERROR,
+        `fitgate could not compute this model (${detail}); this is a fault in fitgate, please report it with the descriptor and data`,
+        { file: descriptor.file, line: descriptor.termsLine },
+      ),
+    );
   }
   const baseMatch = base?.matches.get(descriptor.file) ?? null;
   // The run's own passes already produced the folds, their factors and the cross-validation.
@@ -130,8 +156,19 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     error: null,
     extra: {
       rank_deficient: model.fit.rankDeficient,
-      terms: model.design.terms.map((t, i) => ({ kind: t.spec.kind, line: t.spec.line, first_column: model.design.termOffsets[i], columns: t.columnNames.length, fixed: t.fixed })),
+      terms: model.design.terms.map((t, i) => ({
+        kind: t.spec.kind,
+        line: t.spec.line,
+        first_column: model.design.termOffsets[i],
+        columns: t.columnNames.length,
+        fixed: t.fixed,
+      })),
     },
-    charts: withBaseCurves(buildChartData(model, checks), { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, jsonNumber) }, context.baseline, base?.commit ?? ''),
+    charts: withBaseCurves(
+      buildChartData(model, checks),
+      { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, jsonNumber) },
+      context.baseline,
+      base?.commit ?? '',
+    ),
   };
 }

@@ -49,7 +49,8 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   const first = foldPass(plan);
   const fit = refinePass(plan, first.fit);
   const scored = scoringPass(plan, fit, first.foldFactors);
-  if (descriptor.fit.refit === false) return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
+  if (descriptor.fit.refit === false)
+    return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
   const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
   return {
     descriptor,
@@ -178,7 +179,10 @@ function checkedShipped(descriptor: Descriptor, design: Design): readonly number
   if (shipped.length !== design.p) {
     throw new InputError(
       'coefficients-length',
-      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames.slice(0, 12).map((c) => clip(c)).join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
+      `\`coefficients\` has ${shipped.length} values but the terms build ${design.p} columns (${design.columnNames
+        .slice(0, 12)
+        .map((c) => clip(c))
+        .join(', ')}${design.p > 12 ? ', …' : ''}); expected one value per column, intercept first`,
       { file: descriptor.file, line: descriptor.coefficientsLine ?? undefined, key: 'coefficients' },
     );
   }

@@ -24,7 +24,6 @@ import { errorResult, timeLimitError } from './error-result.js';
 import { runPool, serveTasks } from './pool.js';
 import { isFitgateWorker, WORKER_FLAG } from './worker-role.js';
 
-
 /** What every model worker receives as `workerData`. */
 interface ModelWorkerData {
   [WORKER_FLAG]: true;
@@ -111,7 +110,11 @@ export async function evaluateModels(
     {
       ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
       onTimeLimit: (task, elapsedMs) => ({
-        result: errorResult(task.descriptor.name, task.descriptor.file, timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file)),
+        result: errorResult(
+          task.descriptor.name,
+          task.descriptor.file,
+          timeLimitError(task.descriptor, limitSeconds, elapsedMs, null, settings.file),
+        ),
         kernelNotes: [],
       }),
     },

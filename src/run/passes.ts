@@ -12,7 +12,14 @@ import { clip, InputError } from '../core/errors.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import { scaleBlockRows, weightedDesign } from '../design/weighted-design.js';
-import { complementFactors, crossValidate, FoldFactorBuilder, mergeFactors, type CrossValidation, type FoldFactors } from '../diagnostics/cross-validation.js';
+import {
+  complementFactors,
+  crossValidate,
+  FoldFactorBuilder,
+  mergeFactors,
+  type CrossValidation,
+  type FoldFactors,
+} from '../diagnostics/cross-validation.js';
 import { fitFactor, RefinementPass, refinementApplies, type FitResult } from '../fit/index.js';
 import { firstBeyond } from '../kernels/index.js';
 import { MAX_MAGNITUDE, type ModelPlan } from './plan.js';
@@ -87,11 +94,18 @@ export function scoringPass(plan: ModelPlan, fit: FitResult, foldFactors: FoldFa
   const scaling = plan.scaling ?? null;
   try {
     if (scaling === null) {
-      crossValidation = crossValidate(design, train, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements, predictions: trainPredictions });
+      crossValidation = crossValidate(design, train, fit, folds, {
+        factors: foldFactors.perFold,
+        complements: foldFactors.complements,
+        predictions: trainPredictions,
+      });
     } else {
       // The scaled problem's errors are sqrt(w) times the residuals: weighted cross-validation.
       const rows = { inputs: train.inputs, y: scaling.y, rows: train.rows };
-      crossValidation = crossValidate(weightedDesign(design, scaling), rows, fit, folds, { factors: foldFactors.perFold, complements: foldFactors.complements });
+      crossValidation = crossValidate(weightedDesign(design, scaling), rows, fit, folds, {
+        factors: foldFactors.perFold,
+        complements: foldFactors.complements,
+      });
       trainPredictions = predictRows(design, train, fit.coefficients);
     }
   } catch (error) {

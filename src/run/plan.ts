@@ -50,7 +50,12 @@ export interface ModelPlan {
  * @throws InputError for bad data, a design over the caps, a target out of range or constant
  *   or work estimated over `caps.max_operations` (`over-budget`)
  */
-export async function planModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, load: typeof loadModelData = loadModelData): Promise<ModelPlan> {
+export async function planModel(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  load: typeof loadModelData = loadModelData,
+): Promise<ModelPlan> {
   const inputs: string[] = [];
   for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
   const tables = await load(repo, descriptor, inputs, settings);
@@ -59,7 +64,8 @@ export async function planModel(repo: RepoReader, descriptor: Descriptor, settin
   const file = descriptor.file;
 
   // A transformed input outside its transform's domain is an error naming file, line, column, value.
-  for (const spec of descriptor.terms) for (const data of [train, tables.holdout]) checkTransformDomain(spec, termInputs(spec), data, inputs);
+  for (const spec of descriptor.terms)
+    for (const data of [train, tables.holdout]) checkTransformDomain(spec, termInputs(spec), data, inputs);
   // Fix term parameters from the training rows, then check the size before taking memory.
   const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file, tables.levels));
   const design = createDesign(terms, descriptor.fit.intercept);

@@ -52,7 +52,10 @@ interface ErrorData {
 }
 
 /** What a worker sends back for a task: that it started it, then its value or its error. */
-type ReplyMessage<R> = { index: number; started: true } | { index: number; ok: true; value: R } | { index: number; ok: false; error: ErrorData };
+type ReplyMessage<R> =
+  | { index: number; started: true }
+  | { index: number; ok: true; value: R }
+  | { index: number; ok: false; error: ErrorData };
 
 /** The number of workers to use by default: the cores Node may use (os.availableParallelism()). */
 export function defaultJobs(): number {
@@ -152,7 +155,8 @@ export function runPool<T, R>(tasks: readonly T[], options: PoolOptions, limit?:
       });
       worker.on('exit', (code) => {
         clearTimeout(timer);
-        if (!settled && workers.has(worker)) failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
+        if (!settled && workers.has(worker))
+          failWith(new Error(`a worker thread exited (code ${code}) before the pool finished its tasks`));
       });
       feed();
     };

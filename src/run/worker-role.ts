@@ -10,5 +10,7 @@ export const WORKER_FLAG = 'fitgateWorker';
 
 /** True in any worker thread fitgate started. */
 export function isFitgateWorker(): boolean {
-  return !isMainThread && typeof workerData === 'object' && workerData !== null && (workerData as Record<string, unknown>)[WORKER_FLAG] === true;
+  return (
+    !isMainThread && typeof workerData === 'object' && workerData !== null && (workerData as Record<string, unknown>)[WORKER_FLAG] === true
+  );
 }

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.js';
-import { collectAnnotations, escapeData, escapeProperty, formatAnnotations, formatCommand, inputErrorAnnotation } from '../../src/report/annotations.js';
+import {
+  collectAnnotations,
+  escapeData,
+  escapeProperty,
+  formatAnnotations,
+  formatCommand,
+  inputErrorAnnotation,
+} from '../../src/report/annotations.js';
 import { neutraliseLogLine } from '../../src/report/runner-commands.js';
 import { summarise } from '../../src/result/result.js';
 import { awkwardResult, check, model } from './result-fixture.js';
@@ -56,17 +63,25 @@ describe('collectAnnotations', () => {
       model({
         name: `m${String(i).padStart(2, '0')}`,
         verdict: 'fail',
-        checks: [check({ id: 'generalisation-gap', status: 'fail', line: i + 1 }), check({ id: 'parameter-ratio', status: 'warn', line: i + 1 })],
+        checks: [
+          check({ id: 'generalisation-gap', status: 'fail', line: i + 1 }),
+          check({ id: 'parameter-ratio', status: 'warn', line: i + 1 }),
+        ],
       }),
     );
     const all = collectAnnotations(summarise(models, '0.1.0'));
     expect(all.map((a) => a.level)).toEqual([...Array(10).fill('error'), ...Array(10).fill('warning'), 'notice']);
     expect(all[9].title).toBe('fitgate generalisation-gap (m09)');
-    expect(all[20].message).toBe('6 more findings are not annotated (3 errors, 3 warnings; the runner shows 10 of each per step). The job summary lists every model.');
+    expect(all[20].message).toBe(
+      '6 more findings are not annotated (3 errors, 3 warnings; the runner shows 10 of each per step). The job summary lists every model.',
+    );
   });
 
   it('adds no counting notice when everything fits, and nothing for a passing run', () => {
-    const pass = summarise([model({ name: 'ok', verdict: 'pass', checks: [check({ id: 'generalisation-gap', status: 'pass' })] })], '0.1.0');
+    const pass = summarise(
+      [model({ name: 'ok', verdict: 'pass', checks: [check({ id: 'generalisation-gap', status: 'pass' })] })],
+      '0.1.0',
+    );
     expect(collectAnnotations(pass)).toEqual([]);
   });
 });
@@ -74,7 +89,9 @@ describe('collectAnnotations', () => {
 describe('inputErrorAnnotation', () => {
   it('points at the file and line, under the working-directory prefix', () => {
     const error = new InputError('schema', 'must be a number, got "x"', { file: 'fitgate.yml', line: 4, key: 'limits.gap_ratio' });
-    expect(formatCommand(inputErrorAnnotation(error, 'ml'))).toBe('::error file=ml/fitgate.yml,line=4,title=fitgate could not run::`limits.gap_ratio`: must be a number, got "x"');
+    expect(formatCommand(inputErrorAnnotation(error, 'ml'))).toBe(
+      '::error file=ml/fitgate.yml,line=4,title=fitgate could not run::`limits.gap_ratio`: must be a number, got "x"',
+    );
   });
 
   it('has no file when the error has none', () => {

@@ -75,13 +75,17 @@ describe('evaluateBase', () => {
   });
 
   it('treats every model as new when the named settings file did not exist on the base', async () => {
-    const options = await evaluateBase({ ...settings, config: 'lean-only.yml', configExplicit: true }, fixture.baseSha, { fetchHint: ACTION_FETCH_HINT });
+    const options = await evaluateBase({ ...settings, config: 'lean-only.yml', configExplicit: true }, fixture.baseSha, {
+      fetchHint: ACTION_FETCH_HINT,
+    });
     expect(options.baseline?.size).toBe(0);
     expect(options.notes).toEqual([]);
   });
 
   it('leaves out named descriptors that are new in the head', async () => {
-    const options = await evaluateBase({ ...settings, descriptors: ['models/fresh.model.yml', 'models/wide.model.yml'] }, fixture.baseSha, { fetchHint: ACTION_FETCH_HINT });
+    const options = await evaluateBase({ ...settings, descriptors: ['models/fresh.model.yml', 'models/wide.model.yml'] }, fixture.baseSha, {
+      fetchHint: ACTION_FETCH_HINT,
+    });
     expect([...(options.baseline?.keys() ?? [])]).toEqual(['wide']);
   });
 });
@@ -100,10 +104,21 @@ describe('a pull request that renames a model cannot escape base-change', () => 
     const workspace = mkdtempSync(path.join(tmpdir(), 'fitgate-rename-'));
     root = workspace;
     const git = (...args: string[]): string =>
-      execFileSync('git', args, { cwd: workspace, encoding: 'utf8', env: { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com' } }).trim();
+      execFileSync('git', args, {
+        cwd: workspace,
+        encoding: 'utf8',
+        env: {
+          ...process.env,
+          GIT_AUTHOR_NAME: 't',
+          GIT_AUTHOR_EMAIL: 't@example.com',
+          GIT_COMMITTER_NAME: 't',
+          GIT_COMMITTER_EMAIL: 't@example.com',
+        },
+      }).trim();
     git('init', '-q', '-b', 'main');
     writeFiles(workspace, {
-      'fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\nlimits:\n  gap_ratio: off\n  swing: off\n  swing_beyond: off\n  leakage: off\n',
+      'fitgate.yml':
+        'version: 1\nmodels: ["models/*.model.yml"]\nlimits:\n  gap_ratio: off\n  swing: off\n  swing_beyond: off\n  leakage: off\n',
       'models/kiln.model.yml': kiln('kiln'),
       'data/train.csv': rows(20, 0, 1, 1),
       'data/holdout.csv': rows(10, 0.5, 2, 1),
@@ -125,11 +140,16 @@ describe('a pull request that renames a model cannot escape base-change', () => 
     const result = await pullRequest({ 'models/kiln.model.yml': kiln('kiln-v2') });
     const m = result.models[0];
     expect(m.name).toBe('kiln-v2');
-    expect(m.base).toMatchObject({ status: 'renamed', previous: { name: 'kiln', descriptor: 'models/kiln.model.yml', matched_by: 'descriptor' } });
+    expect(m.base).toMatchObject({
+      status: 'renamed',
+      previous: { name: 'kiln', descriptor: 'models/kiln.model.yml', matched_by: 'descriptor' },
+    });
     expect(m.checks.find((c) => c.id === 'base-change')?.status).toBe('fail');
     expect(result.notes).toEqual(['settings: fitgate.yml']);
     expect(formatMarkdown(result)).toMatch(/\| FAIL \| kiln-v2 \| .* \| renamed from kiln: RMSE \+\d/);
-    expect(formatText(result)).toContain('note: kiln-v2 is compared with kiln (models/kiln.model.yml) of the base commit, found by its descriptor path');
+    expect(formatText(result)).toContain(
+      'note: kiln-v2 is compared with kiln (models/kiln.model.yml) of the base commit, found by its descriptor path',
+    );
   });
 
   it('renamed and moved to another file: found by its data files, and base-change fails', async () => {
@@ -148,6 +168,9 @@ describe('a pull request that renames a model cannot escape base-change', () => 
       'models/oven.model.yml': kiln('oven', '../data/copy-train.csv', '../data/copy-holdout.csv'),
     });
     expect(result.models[0].base?.status).toBe('new');
-    expect(result.notes).toEqual(['settings: fitgate.yml', 'base model kiln (models/kiln.model.yml) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared']);
+    expect(result.notes).toEqual([
+      'settings: fitgate.yml',
+      'base model kiln (models/kiln.model.yml) matches no model of this run by name, descriptor path or data files: it was removed, or renamed and moved with other data, and is not compared',
+    ]);
   });
 });

@@ -51,7 +51,13 @@ describe('upsertComment', () => {
   });
 
   it('turns other failures into failed, with the status when there is one', async () => {
-    expect(await upsertComment(fake([], { on: 'list', status: 502, message: 'Bad gateway' }).api, body)).toEqual({ kind: 'failed', message: 'HTTP 502: Bad gateway' });
-    expect(await upsertComment(fake([], { on: 'list', message: 'connect ECONNREFUSED' }).api, body)).toEqual({ kind: 'failed', message: 'connect ECONNREFUSED' });
+    expect(await upsertComment(fake([], { on: 'list', status: 502, message: 'Bad gateway' }).api, body)).toEqual({
+      kind: 'failed',
+      message: 'HTTP 502: Bad gateway',
+    });
+    expect(await upsertComment(fake([], { on: 'list', message: 'connect ECONNREFUSED' }).api, body)).toEqual({
+      kind: 'failed',
+      message: 'connect ECONNREFUSED',
+    });
   });
 });

@@ -113,7 +113,15 @@ function git(cwd: string, ...args: string[]): string {
   return execFileSync('git', args, {
     cwd,
     encoding: 'utf8',
-    env: { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com', GIT_AUTHOR_DATE: '2024-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2024-01-01T00:00:00Z' },
+    env: {
+      ...process.env,
+      GIT_AUTHOR_NAME: 't',
+      GIT_AUTHOR_EMAIL: 't@example.com',
+      GIT_COMMITTER_NAME: 't',
+      GIT_COMMITTER_EMAIL: 't@example.com',
+      GIT_AUTHOR_DATE: '2024-01-01T00:00:00Z',
+      GIT_COMMITTER_DATE: '2024-01-01T00:00:00Z',
+    },
   }).trim();
 }
 
@@ -126,10 +134,26 @@ export function makeFixture(): Fixture {
   write(ml, 'models/steady.model.yml', steady);
   write(ml, 'models/wide.model.yml', wide(2));
   write(ml, 'models/lean.model.yml', lean);
-  write(ml, 'data/steady-train.csv', rows(20, 0, 1, (x, i) => 2 * x + 1 + wobble(i), 'x,y'));
-  write(ml, 'data/steady-holdout.csv', rows(10, 0.5, 2, (x, i) => 2 * x + 1 + wobble(i + 3), 'x,y'));
-  write(ml, 'data/wide-train.csv', rows(12, 0, 1, (x, i) => 0.5 * x * x - x + 3 + wobble(i), 'x,y'));
-  write(ml, 'data/wide-holdout.csv', rows(6, 0.5, 2, (x, i) => 0.5 * x * x - x + 3 + wobble(i + 1), 'x,y'));
+  write(
+    ml,
+    'data/steady-train.csv',
+    rows(20, 0, 1, (x, i) => 2 * x + 1 + wobble(i), 'x,y'),
+  );
+  write(
+    ml,
+    'data/steady-holdout.csv',
+    rows(10, 0.5, 2, (x, i) => 2 * x + 1 + wobble(i + 3), 'x,y'),
+  );
+  write(
+    ml,
+    'data/wide-train.csv',
+    rows(12, 0, 1, (x, i) => 0.5 * x * x - x + 3 + wobble(i), 'x,y'),
+  );
+  write(
+    ml,
+    'data/wide-holdout.csv',
+    rows(6, 0.5, 2, (x, i) => 0.5 * x * x - x + 3 + wobble(i + 1), 'x,y'),
+  );
   git(workspace, 'add', '-A');
   git(workspace, 'commit', '-q', '-m', 'base');
   const baseSha = git(workspace, 'rev-parse', 'HEAD');
@@ -138,7 +162,11 @@ export function makeFixture(): Fixture {
   write(ml, 'models/fresh.model.yml', fresh);
   write(ml, BAD_DESCRIPTOR, 'version: 1\nname: [oops\n');
   write(ml, 'lean-only.yml', SETTINGS.replace('models/*.model.yml', 'models/lean.model.yml'));
-  write(ml, 'data/steady-holdout.csv', rows(10, 0.5, 2, (x, i) => 2 * x + 1 + 3 * wobble(i + 3), 'x,y'));
+  write(
+    ml,
+    'data/steady-holdout.csv',
+    rows(10, 0.5, 2, (x, i) => 2 * x + 1 + 3 * wobble(i + 3), 'x,y'),
+  );
   git(workspace, 'add', '-A');
   git(workspace, 'commit', '-q', '-m', 'head');
   const headSha = git(workspace, 'rev-parse', 'HEAD');

@@ -15,7 +15,13 @@ function git(...args: string[]): string {
   return execFileSync('git', args, {
     cwd: top,
     encoding: 'utf8',
-    env: { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com' },
+    env: {
+      ...process.env,
+      GIT_AUTHOR_NAME: 't',
+      GIT_AUTHOR_EMAIL: 't@example.com',
+      GIT_COMMITTER_NAME: 't',
+      GIT_COMMITTER_EMAIL: 't@example.com',
+    },
   }).trim();
 }
 
@@ -128,7 +134,9 @@ describe('commit lookup', () => {
     expect(await tryResolveCommit(top, second)).toBe(second);
     expect(await tryResolveCommit(top, 'f'.repeat(40))).toBeNull();
     expect(await tryResolveCommit(top, '--output=/tmp/x')).toBeNull();
-    expect(await tryGitTopLevel(path.join(top, 'ml', 'models'))).toBe(execFileSync('git', ['rev-parse', '--show-toplevel'], { cwd: top, encoding: 'utf8' }).trim());
+    expect(await tryGitTopLevel(path.join(top, 'ml', 'models'))).toBe(
+      execFileSync('git', ['rev-parse', '--show-toplevel'], { cwd: top, encoding: 'utf8' }).trim(),
+    );
     expect(await tryGitTopLevel(tmpdir())).toBeNull();
   });
 });

@@ -35,7 +35,9 @@ function inputError(): InputError {
     if (error instanceof InputError) return error;
     throw error;
   }
-  throw new Error(`readInputs accepted ${JSON.stringify(Object.fromEntries(Object.entries(process.env).filter(([k]) => k.startsWith('INPUT_'))))}`);
+  throw new Error(
+    `readInputs accepted ${JSON.stringify(Object.fromEntries(Object.entries(process.env).filter(([k]) => k.startsWith('INPUT_'))))}`,
+  );
 }
 
 describe('readInputs', () => {
@@ -43,7 +45,11 @@ describe('readInputs', () => {
     process.env.INPUT_HTML = 'reports/html';
     process.env.INPUT_SARIF = 'fitgate.sarif';
     process.env.INPUT_JUNIT = '';
-    expect(readInputs().files).toEqual({ html: path.join(WORKSPACE, 'reports/html'), sarif: path.join(WORKSPACE, 'fitgate.sarif'), junit: null });
+    expect(readInputs().files).toEqual({
+      html: path.join(WORKSPACE, 'reports/html'),
+      sarif: path.join(WORKSPACE, 'fitgate.sarif'),
+      junit: null,
+    });
     process.env.INPUT_JUNIT = '../outside.xml';
     const error = inputError();
     expect(error.location.key).toBe('junit');
@@ -70,7 +76,13 @@ describe('readInputs', () => {
     process.env.INPUT_CONFIG = 'conf/gate.yml';
     process.env.INPUT_COMMENT = 'False';
     const inputs = readInputs();
-    expect(inputs.settings).toEqual({ root: path.join(WORKSPACE, 'ml'), config: 'conf/gate.yml', configExplicit: true, descriptors: [], failOn: 'warn' });
+    expect(inputs.settings).toEqual({
+      root: path.join(WORKSPACE, 'ml'),
+      config: 'conf/gate.yml',
+      configExplicit: true,
+      descriptors: [],
+      failOn: 'warn',
+    });
     expect(inputs.prefix).toBe('ml');
     expect(inputs.comment).toBe(false);
     expect(inputs.token).toBe('secret');
@@ -115,7 +127,12 @@ describe('readInputs', () => {
   it.each([
     ['INPUT_FAIL-ON', 'error', '`fail-on`', 'input `fail-on` must be `fail` or `warn`, got "error"'],
     ['INPUT_COMMENT', 'yes', '`comment`', 'input `comment` must be `true` or `false`, got "yes"'],
-    ['INPUT_WORKING-DIRECTORY', '../up', '`working-directory`', 'input `working-directory` must be a path inside the workspace, got "../up"'],
+    [
+      'INPUT_WORKING-DIRECTORY',
+      '../up',
+      '`working-directory`',
+      'input `working-directory` must be a path inside the workspace, got "../up"',
+    ],
     ['INPUT_WORKING-DIRECTORY', '/etc', '`working-directory`', 'input `working-directory` must be a path inside the workspace, got "/etc"'],
     ['INPUT_CONFIG', '../fitgate.yml', '`config`', 'input `config` must be a path inside the working directory, got "../fitgate.yml"'],
     ['INPUT_CONFIG', '.', '`config`', 'input `config` must be a settings file inside the working directory, got "."'],
@@ -143,7 +160,9 @@ describe('readInputs', () => {
         process.env.GITHUB_OUTPUT = value;
         const error = inputError();
         expect(error.code).toBe('runner-file');
-        expect(error.describe()).toBe(`\`GITHUB_OUTPUT\`: expected the file the runner creates for the step's outputs, got ${JSON.stringify(value)}, which ${problem}`);
+        expect(error.describe()).toBe(
+          `\`GITHUB_OUTPUT\`: expected the file the runner creates for the step's outputs, got ${JSON.stringify(value)}, which ${problem}`,
+        );
       }
     } finally {
       rmSync(dir, { recursive: true, force: true });

@@ -57,7 +57,12 @@ class FakeApi {
     for await (const c of req) chunks.push(c as Buffer);
     const raw = Buffer.concat(chunks).toString('utf8');
     const url = new URL(req.url ?? '/', this.url);
-    this.seen.push({ method: req.method ?? '', url: url.pathname + url.search, authorization: req.headers.authorization, body: raw ? JSON.parse(raw) : null });
+    this.seen.push({
+      method: req.method ?? '',
+      url: url.pathname + url.search,
+      authorization: req.headers.authorization,
+      body: raw ? JSON.parse(raw) : null,
+    });
     const send = (status: number, body: unknown, headers: Record<string, string> = {}): void => {
       res.writeHead(status, { 'content-type': 'application/json; charset=utf-8', ...headers });
       res.end(JSON.stringify(body));
@@ -69,7 +74,11 @@ class FakeApi {
       const last = Math.max(1, Math.ceil(this.comments.length / 2));
       const next = new URL(url);
       next.searchParams.set('page', String(page + 1));
-      return send(200, items.map((c) => ({ id: c.id, body: c.body, user: { login: 'someone' } })), page < last ? { link: `<${next.href}>; rel="next"` } : {});
+      return send(
+        200,
+        items.map((c) => ({ id: c.id, body: c.body, user: { login: 'someone' } })),
+        page < last ? { link: `<${next.href}>; rel="next"` } : {},
+      );
     }
     if (req.method === 'POST' && url.pathname === '/repos/acme/models/issues/7/comments') {
       const body = String(JSON.parse(raw).body);
@@ -78,7 +87,11 @@ class FakeApi {
       return send(201, comment);
     }
     // The review suggestions' endpoints (action/review-suggestions.ts): no changed file, no review comment.
-    if (req.method === 'GET' && (url.pathname === '/repos/acme/models/pulls/7/files' || url.pathname === '/repos/acme/models/pulls/7/comments')) return send(200, []);
+    if (
+      req.method === 'GET' &&
+      (url.pathname === '/repos/acme/models/pulls/7/files' || url.pathname === '/repos/acme/models/pulls/7/comments')
+    )
+      return send(200, []);
     const m = /^\/repos\/acme\/models\/issues\/comments\/(\d+)$/.exec(url.pathname);
     if (req.method === 'PATCH' && m) {
       const comment = this.comments.find((c) => c.id === Number(m[1]));
@@ -122,7 +135,9 @@ function workflowInputs(): Record<string, string> {
   const workflow = parse(readFileSync(path.resolve(path.dirname(bundle), '..', 'examples', 'workflows', 'fitgate.yml'), 'utf8')) as {
     jobs: Record<string, { steps: { uses?: string; with?: Record<string, unknown> }[] }>;
   };
-  const step = Object.values(workflow.jobs).flatMap((j) => j.steps).find((st) => st.uses?.endsWith('/fitgate@v1'));
+  const step = Object.values(workflow.jobs)
+    .flatMap((j) => j.steps)
+    .find((st) => st.uses?.endsWith('/fitgate@v1'));
   if (!step?.with) throw new Error('examples/workflows/fitgate.yml has no fitgate step with inputs');
   return Object.fromEntries(Object.entries(step.with).map(([k, v]) => [`INPUT_${k.toUpperCase()}`, String(v)]));
 }
@@ -135,7 +150,15 @@ function runAction(inputs: Record<string, string>, baseSha: string): Promise<Run
   const eventFile = `${tmp}-event.json`;
   writeFileSync(outputFile, '');
   writeFileSync(summaryFile, '');
-  writeFileSync(eventFile, JSON.stringify({ action: 'synchronize', number: 7, pull_request: { number: 7, base: { sha: baseSha, ref: 'main' }, head: { sha: fixture.headSha } }, repository: { name: 'models', owner: { login: 'acme' } } }));
+  writeFileSync(
+    eventFile,
+    JSON.stringify({
+      action: 'synchronize',
+      number: 7,
+      pull_request: { number: 7, base: { sha: baseSha, ref: 'main' }, head: { sha: fixture.headSha } },
+      repository: { name: 'models', owner: { login: 'acme' } },
+    }),
+  );
   const env: NodeJS.ProcessEnv = {
     PATH: process.env.PATH,
     HOME: process.env.HOME,
@@ -330,6 +353,8 @@ describe('node dist/index.js on a pull request', () => {
     expect(bad.outputs).toEqual({ verdict: 'error' });
 
     const outside = await runAction({ 'INPUT_WORKING-DIRECTORY': '../elsewhere', INPUT_COMMENT: 'false' }, fixture.baseSha);
-    expect(outside.commands).toEqual(['::error::fitgate could not run: `working-directory`: input `working-directory` must be a path inside the workspace, got "../elsewhere"']);
+    expect(outside.commands).toEqual([
+      '::error::fitgate could not run: `working-directory`: input `working-directory` must be a path inside the workspace, got "../elsewhere"',
+    ]);
   });
 });

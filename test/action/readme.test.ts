@@ -64,12 +64,17 @@ describe('action.yml', () => {
 
   it('declares the outputs main sets, with a description each', () => {
     expect(Object.keys(action.outputs).sort()).toEqual(Object.values(OUTPUTS).sort());
-    for (const [name, spec] of Object.entries(action.outputs)) expect(spec.description.length, `description of ${name}`).toBeGreaterThan(20);
+    for (const [name, spec] of Object.entries(action.outputs))
+      expect(spec.description.length, `description of ${name}`).toBeGreaterThan(20);
   });
 
   it('is used by the example workflow with the everyday inputs, on pull_request and never pull_request_target', () => {
     const text = read('examples/workflows/fitgate.yml');
-    const workflow = parse(text) as { on: Record<string, unknown>; permissions: Record<string, string>; jobs: Record<string, { steps: { uses?: string; with?: Record<string, unknown> }[] }> };
+    const workflow = parse(text) as {
+      on: Record<string, unknown>;
+      permissions: Record<string, string>;
+      jobs: Record<string, { steps: { uses?: string; with?: Record<string, unknown> }[] }>;
+    };
     expect(text).not.toContain('pull_request_target');
     expect(Object.keys(workflow.on)).toContain('pull_request');
     expect(workflow.permissions).toEqual({ contents: 'read', 'pull-requests': 'write' });

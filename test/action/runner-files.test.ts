@@ -61,7 +61,12 @@ function runAction(files: { output?: string; summary?: string } = {}): Run {
     RUNNER_TEMP: path.join(dir, 'temp'),
     INPUT_COMMENT: 'false',
   };
-  const run = spawnSync(process.execPath, [path.join(lib!.dir, 'main.js')], { cwd: examples, env, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+  const run = spawnSync(process.execPath, [path.join(lib!.dir, 'main.js')], {
+    cwd: examples,
+    env,
+    encoding: 'utf8',
+    maxBuffer: 64 * 1024 * 1024,
+  });
   return {
     status: run.status,
     commands: run.stdout.split('\n').filter((line) => line.startsWith('::') && !/^::(error|warning) file=/.test(line)),
@@ -108,6 +113,9 @@ describe('the action when a runner file is missing', () => {
     expect(run.commands.length).toBe(normal.commands.length + 1);
     expect(run.status).toBe(normal.status);
     expect(run.stderr).toBe('');
-    expect({ ...run.outputs, report: path.basename(run.outputs.report) }).toEqual({ ...normal.outputs, report: path.basename(normal.outputs.report) });
+    expect({ ...run.outputs, report: path.basename(run.outputs.report) }).toEqual({
+      ...normal.outputs,
+      report: path.basename(normal.outputs.report),
+    });
   });
 });

@@ -40,7 +40,8 @@ function sources(dir: string, out: string[] = []): string[] {
   return out;
 }
 
-const IMPORT = /(?:import|export)\s[^'"]*?from\s+['"](\.[^'"]+)['"]|import\(\s*(?:\/\*[^*]*\*\/\s*)?['"](\.[^'"]+)['"]|^import\s+['"](\.[^'"]+)['"]/gms;
+const IMPORT =
+  /(?:import|export)\s[^'"]*?from\s+['"](\.[^'"]+)['"]|import\(\s*(?:\/\*[^*]*\*\/\s*)?['"](\.[^'"]+)['"]|^import\s+['"](\.[^'"]+)['"]/gms;
 
 /** Relative imports of each source file, resolved to source files. */
 function graph(): Map<string, string[]> {
@@ -102,7 +103,8 @@ describe('source layout', () => {
   it('every import points to the same stage or one below it', () => {
     const upward: string[] = [];
     for (const [file, targets] of edges) {
-      for (const t of targets) if (rank(t) > rank(file)) upward.push(`src/${path.relative(SRC, file)} imports src/${path.relative(SRC, t)}`);
+      for (const t of targets)
+        if (rank(t) > rank(file)) upward.push(`src/${path.relative(SRC, file)} imports src/${path.relative(SRC, t)}`);
     }
     expect(upward).toEqual([]);
   });

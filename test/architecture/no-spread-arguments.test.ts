@@ -22,7 +22,7 @@ function sources(dir: string, out: string[] = []): string[] {
 }
 
 /** `file:line: call` for every spread argument of a call or `new` in one source text. */
-export function spreadArguments(file: string, text: string): string[] {
+function spreadArguments(file: string, text: string): string[] {
   const source = ts.createSourceFile(file, text, ts.ScriptTarget.Latest, true);
   const found: string[] = [];
   const visit = (node: ts.Node): void => {
@@ -38,7 +38,8 @@ export function spreadArguments(file: string, text: string): string[] {
 
 describe('spread arguments', () => {
   it('are found in calls and new, not in array or object literals', () => {
-    const text = 'a.push(...xs);\nMath.max(1, ...ys);\nnew Set(...zs);\nconst b = [...xs, 1];\nconst c = { ...o };\nfunction f(...rest: number[]) { return rest; }\n';
+    const text =
+      'a.push(...xs);\nMath.max(1, ...ys);\nnew Set(...zs);\nconst b = [...xs, 1];\nconst c = { ...o };\nfunction f(...rest: number[]) { return rest; }\n';
     expect(spreadArguments('t.ts', text)).toEqual(['t.ts:1: a.push(...xs)', 't.ts:2: Math.max(1, ...ys)', 't.ts:3: new Set(...zs)']);
   });
 

@@ -41,11 +41,18 @@ export function createRandom(seed) {
     t = Math.imul(t ^ (t >>> 13), 0xc2b2ae35);
     return (t ^ (t >>> 16)) >>> 0;
   };
-  let a = split(), b = split(), c = split(), d = split();
+  let a = split(),
+    b = split(),
+    c = split(),
+    d = split();
   const next = () => {
     const r = Math.imul(((Math.imul(b, 5) << 7) | (Math.imul(b, 5) >>> 25)) >>> 0, 9) >>> 0;
     const t = b << 9;
-    c ^= a; d ^= b; b ^= c; a ^= d; c ^= t;
+    c ^= a;
+    d ^= b;
+    b ^= c;
+    a ^= d;
+    c ^= t;
     d = (d << 11) | (d >>> 21);
     return r;
   };
@@ -58,7 +65,8 @@ export function createRandom(seed) {
       return s;
     }
     let u;
-    do u = uniform(); while (u === 0);
+    do u = uniform();
+    while (u === 0);
     const v = uniform();
     const r = Math.sqrt(-2 * Math.log(u));
     spare = r * Math.sin(2 * Math.PI * v);
@@ -135,7 +143,8 @@ function writeCsv(file, columns, header) {
  * @returns the leaked pairs (0-based data rows, train -> hold-out)
  */
 export function generate({ out, rows, holdoutRows, features, seed }) {
-  if (!(features >= 1 && rows >= N_LEAKED && holdoutRows >= N_LEAKED)) throw new RangeError('need features >= 1, rows >= 5, holdout rows >= 5');
+  if (!(features >= 1 && rows >= N_LEAKED && holdoutRows >= N_LEAKED))
+    throw new RangeError('need features >= 1, rows >= 5, holdout rows >= 5');
   const random = createRandom(seed);
   const train = draw(random, rows, features);
   const hold = draw(random, holdoutRows, features);

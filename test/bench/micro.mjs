@@ -9,7 +9,9 @@ import { pathToFileURL } from 'node:url';
 import { median } from './measure.mjs';
 
 function walk(dir) {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)],
+  );
 }
 
 async function transpile(root) {
@@ -23,7 +25,10 @@ async function transpile(root) {
       cpSync(file, out);
       continue;
     }
-    const { outputText } = ts.transpileModule(readFileSync(file, 'utf8'), { compilerOptions: { module: ts.ModuleKind.ESNext, target: ts.ScriptTarget.ES2022 }, fileName: file });
+    const { outputText } = ts.transpileModule(readFileSync(file, 'utf8'), {
+      compilerOptions: { module: ts.ModuleKind.ESNext, target: ts.ScriptTarget.ES2022 },
+      fileName: file,
+    });
     writeFileSync(out.replace(/\.ts$/, '.js'), outputText);
   }
   writeFileSync(path.join(dir, 'package.json'), '{ "type": "module" }\n');

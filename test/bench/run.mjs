@@ -41,10 +41,55 @@ const root = fileURLToPath(new URL('../..', import.meta.url));
 
 /** The workloads of ../shared/bench/README.md. */
 export const WORKLOADS = {
-  S: { rows: 2_000, holdoutRows: 500, features: 1, degree: 10, folds: 10, loocv: true, seed: 1, wallRatio: 0.25, memRatio: 0.5, memMiB: null },
-  M: { rows: 100_000, holdoutRows: 25_000, features: 5, degree: 4, folds: 5, loocv: true, seed: 2, wallRatio: 0.35, memRatio: 0.5, memMiB: null },
-  L: { rows: 1_000_000, holdoutRows: 250_000, features: 8, degree: 3, folds: 5, loocv: false, seed: 3, wallRatio: 0.3, memRatio: null, memMiB: 256 },
-  C: { rows: 1_000_000, holdoutRows: 250_000, features: 8, degree: 3, folds: 5, loocv: false, seed: 4, wallRatio: 0.5, memRatio: null, memMiB: 256, task: 'classification' },
+  S: {
+    rows: 2_000,
+    holdoutRows: 500,
+    features: 1,
+    degree: 10,
+    folds: 10,
+    loocv: true,
+    seed: 1,
+    wallRatio: 0.25,
+    memRatio: 0.5,
+    memMiB: null,
+  },
+  M: {
+    rows: 100_000,
+    holdoutRows: 25_000,
+    features: 5,
+    degree: 4,
+    folds: 5,
+    loocv: true,
+    seed: 2,
+    wallRatio: 0.35,
+    memRatio: 0.5,
+    memMiB: null,
+  },
+  L: {
+    rows: 1_000_000,
+    holdoutRows: 250_000,
+    features: 8,
+    degree: 3,
+    folds: 5,
+    loocv: false,
+    seed: 3,
+    wallRatio: 0.3,
+    memRatio: null,
+    memMiB: 256,
+  },
+  C: {
+    rows: 1_000_000,
+    holdoutRows: 250_000,
+    features: 8,
+    degree: 3,
+    folds: 5,
+    loocv: false,
+    seed: 4,
+    wallRatio: 0.5,
+    memRatio: null,
+    memMiB: 256,
+    task: 'classification',
+  },
 };
 
 /** Classifier figures compared: [label, fitgate metrics key, reader of the reference's output]. */
@@ -72,14 +117,28 @@ const FIGURES = [
 const RELATIVE_TOLERANCE = 1e-6;
 
 function parseOptions(argv) {
-  const o = { sizes: ['S', 'M', 'L', 'C'], runs: 3, data: null, work: path.join(os.tmpdir(), 'fitgate-bench'), reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'), useReference: true, micro: true, json: null, cli: path.join(root, 'dist', 'cli', 'index.js'), inheritEnv: false };
+  const o = {
+    sizes: ['S', 'M', 'L', 'C'],
+    runs: 3,
+    data: null,
+    work: path.join(os.tmpdir(), 'fitgate-bench'),
+    reference: path.resolve(root, '..', 'shared', 'bench', 'ref_check.py'),
+    useReference: true,
+    micro: true,
+    json: null,
+    cli: path.join(root, 'dist', 'cli', 'index.js'),
+    inheritEnv: false,
+  };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     const value = () => {
       if (i + 1 >= argv.length) throw new Error(`${a} needs a value`);
       return argv[++i];
     };
-    if (a === '--sizes') o.sizes = value().split(',').map((s) => s.trim().toUpperCase());
+    if (a === '--sizes')
+      o.sizes = value()
+        .split(',')
+        .map((s) => s.trim().toUpperCase());
     else if (a === '--runs') o.runs = Number(value());
     else if (a === '--data') o.data = path.resolve(value());
     else if (a === '--work') o.work = path.resolve(value());
@@ -101,16 +160,36 @@ function sourceData(options, size) {
   const w = WORKLOADS[size];
   if (options.data) {
     const dir = path.join(options.data, size);
-    for (const f of ['train.csv', 'holdout.csv']) if (!existsSync(path.join(dir, f))) throw new Error(`--data: ${path.join(dir, f)} is missing`);
+    for (const f of ['train.csv', 'holdout.csv'])
+      if (!existsSync(path.join(dir, f))) throw new Error(`--data: ${path.join(dir, f)} is missing`);
     return dir;
   }
   const dir = path.join(options.work, w.task === 'classification' ? 'data-py' : 'data-js', size);
   const stamp = path.join(dir, 'params.json');
   const params = JSON.stringify({ rows: w.rows, holdoutRows: w.holdoutRows, features: w.features, seed: w.seed, generator: 1 });
   if (w.task === 'classification' && (!existsSync(stamp) || readFileSync(stamp, 'utf8') !== params)) {
-    process.stderr.write(`generating ${size} data with ref_logistic.py (${w.rows} + ${w.holdoutRows} rows x ${w.features + 1} columns)...\n`);
+    process.stderr.write(
+      `generating ${size} data with ref_logistic.py (${w.rows} + ${w.holdoutRows} rows x ${w.features + 1} columns)...\n`,
+    );
     const script = path.join(path.dirname(options.reference), 'ref_logistic.py');
-    execFileSync('/usr/bin/python3', [script, 'generate', '--out', dir, '--rows', String(w.rows), '--holdout-rows', String(w.holdoutRows), '--features', String(w.features), '--seed', String(w.seed)], { stdio: 'inherit' });
+    execFileSync(
+      '/usr/bin/python3',
+      [
+        script,
+        'generate',
+        '--out',
+        dir,
+        '--rows',
+        String(w.rows),
+        '--holdout-rows',
+        String(w.holdoutRows),
+        '--features',
+        String(w.features),
+        '--seed',
+        String(w.seed),
+      ],
+      { stdio: 'inherit' },
+    );
     writeFileSync(stamp, params);
   } else if (!existsSync(stamp) || readFileSync(stamp, 'utf8') !== params) {
     process.stderr.write(`generating ${size} data (${w.rows} + ${w.holdoutRows} rows x ${w.features + 1} columns)...\n`);
@@ -180,8 +259,12 @@ function referenceAvailable(options) {
   if (!options.useReference) return 'turned off (--no-reference)';
   if (!existsSync(options.reference)) return `not found: ${options.reference}`;
   if (!existsSync('/usr/bin/python3')) return '/usr/bin/python3 is not installed';
-  const probe = spawnSync('/usr/bin/python3', ['-c', 'import numpy, pandas, sklearn'], { encoding: 'utf8', env: benchEnvironment(options) });
-  if (probe.status !== 0) return 'python3-numpy, python3-pandas or python3-sklearn is not installed (apt-get install -y python3-numpy python3-pandas python3-sklearn)';
+  const probe = spawnSync('/usr/bin/python3', ['-c', 'import numpy, pandas, sklearn'], {
+    encoding: 'utf8',
+    env: benchEnvironment(options),
+  });
+  if (probe.status !== 0)
+    return 'python3-numpy, python3-pandas or python3-sklearn is not installed (apt-get install -y python3-numpy python3-pandas python3-sklearn)';
   return null;
 }
 
@@ -208,7 +291,13 @@ function compareClassifierFigures(fg, ref) {
   const scale = Math.max(...ref.coefficients.map(Math.abs));
   const ok = Array.isArray(fg.coefficients) && fg.coefficients.length === ref.coefficients.length;
   const relative = ok ? Math.max(...ref.coefficients.map((w, j) => Math.abs(fg.coefficients[j] - w) / scale)) : null;
-  rows.push({ label: `coefficients (${ref.coefficients.length}, max diff / max |w|)`, fitgate: null, reference: null, relative, status: relative !== null && relative <= RELATIVE_TOLERANCE ? 'pass' : 'fail' });
+  rows.push({
+    label: `coefficients (${ref.coefficients.length}, max diff / max |w|)`,
+    fitgate: null,
+    reference: null,
+    relative,
+    status: relative !== null && relative <= RELATIVE_TOLERANCE ? 'pass' : 'fail',
+  });
   return rows;
 }
 
@@ -224,7 +313,8 @@ function compareFigures(fg, ref) {
   });
 }
 
-const fmt = (x, digits = 3) => (x === null || x === undefined ? '-' : typeof x !== 'number' ? String(x) : Number.isInteger(x) ? String(x) : x.toPrecision(digits));
+const fmt = (x, digits = 3) =>
+  x === null || x === undefined ? '-' : typeof x !== 'number' ? String(x) : Number.isInteger(x) ? String(x) : x.toPrecision(digits);
 
 function table(rows) {
   const widths = rows[0].map((_, j) => Math.max(...rows.map((r) => String(r[j]).length)));
@@ -243,7 +333,7 @@ async function main() {
   const { repo, files } = buildRepository(options);
   const refMissing = referenceAvailable(options);
   const env = benchEnvironment(options);
-  const envNote = options.inheritEnv ? 'the caller\'s environment' : `a minimal environment (${Object.keys(env).join(', ')}) for both tools`;
+  const envNote = options.inheritEnv ? "the caller's environment" : `a minimal environment (${Object.keys(env).join(', ')}) for both tools`;
   process.stderr.write(`peak memory: ${memoryMethod()}; reference: ${refMissing ?? options.reference}; ${envNote}\n`);
 
   const results = {};
@@ -261,24 +351,58 @@ async function main() {
       if (!refMissing) {
         const classifier = w.task === 'classification';
         const script = classifier ? path.join(path.dirname(options.reference), 'ref_logistic.py') : options.reference;
-        const args = [script, ...(classifier ? ['check'] : []), '--train', f.train, '--holdout', f.holdout, '--degree', String(w.degree), '--ridge', '1', '--folds', String(w.folds)];
+        const args = [
+          script,
+          ...(classifier ? ['check'] : []),
+          '--train',
+          f.train,
+          '--holdout',
+          f.holdout,
+          '--degree',
+          String(w.degree),
+          '--ridge',
+          '1',
+          '--folds',
+          String(w.folds),
+        ];
         if (w.loocv) args.push('--loocv');
         const ref = await measure('/usr/bin/python3', args, { cwd: repo, env });
         runs.reference.push(ref);
         refOut = ref.stdout;
       }
-      process.stderr.write(`${size} run ${r + 1}/${options.runs}: fitgate ${fg.wall.toFixed(2)} s ${fg.peakMiB.toFixed(0)} MiB` + (refMissing ? '\n' : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`));
+      process.stderr.write(
+        `${size} run ${r + 1}/${options.runs}: fitgate ${fg.wall.toFixed(2)} s ${fg.peakMiB.toFixed(0)} MiB` +
+          (refMissing ? '\n' : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`),
+      );
     }
     const fg = fitgateFigures(fgOut);
     const ref = refOut ? JSON.parse(refOut) : null;
     results[size] = {
-      fitgate: { wall: median(runs.fitgate.map((x) => x.wall)), peakMiB: median(runs.fitgate.map((x) => x.peakMiB)), walls: runs.fitgate.map((x) => x.wall), verdict: fg.verdict },
-      reference: ref ? { wall: median(runs.reference.map((x) => x.wall)), peakMiB: median(runs.reference.map((x) => x.peakMiB)), walls: runs.reference.map((x) => x.wall), timings: ref.timings_s ?? ref.timings } : null,
+      fitgate: {
+        wall: median(runs.fitgate.map((x) => x.wall)),
+        peakMiB: median(runs.fitgate.map((x) => x.peakMiB)),
+        walls: runs.fitgate.map((x) => x.wall),
+        verdict: fg.verdict,
+      },
+      reference: ref
+        ? {
+            wall: median(runs.reference.map((x) => x.wall)),
+            peakMiB: median(runs.reference.map((x) => x.peakMiB)),
+            walls: runs.reference.map((x) => x.wall),
+            timings: ref.timings_s ?? ref.timings,
+          }
+        : null,
       figures:
         w.task === 'classification'
           ? ref
             ? compareClassifierFigures(fg.figures, ref)
-            : CLASSIFIER_FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' }))
+            : CLASSIFIER_FIGURES.map(([label, key]) => ({
+                label,
+                fitgate: fg.figures[key],
+                reference: null,
+                relative: null,
+                status: 'n/a',
+              }))
           : ref
             ? compareFigures(fg.figures, ref)
             : FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' })),
@@ -287,7 +411,17 @@ async function main() {
   }
 
   // Timing table.
-  const head = ['size', 'fitgate wall s', 'fitgate peak MiB', 'reference wall s', 'reference peak MiB', 'wall ratio', 'memory ratio', 'target', 'met'];
+  const head = [
+    'size',
+    'fitgate wall s',
+    'fitgate peak MiB',
+    'reference wall s',
+    'reference peak MiB',
+    'wall ratio',
+    'memory ratio',
+    'target',
+    'met',
+  ];
   const rows = [head];
   for (const size of options.sizes) {
     const w = WORKLOADS[size];
@@ -296,16 +430,43 @@ async function main() {
     const memRatio = r.reference ? r.fitgate.peakMiB / r.reference.peakMiB : null;
     const target = `wall <= ${w.wallRatio}x, ` + (w.memMiB !== null ? `memory <= ${w.memMiB} MiB` : `memory <= ${w.memRatio}x`);
     const memOk = w.memMiB !== null ? r.fitgate.peakMiB <= w.memMiB : memRatio !== null && memRatio <= w.memRatio;
-    const met = wallRatio === null ? (w.memMiB !== null ? `memory ${memOk ? 'yes' : 'NO'}; wall n/a` : 'n/a') : wallRatio <= w.wallRatio && memOk ? 'yes' : 'NO';
+    const met =
+      wallRatio === null
+        ? w.memMiB !== null
+          ? `memory ${memOk ? 'yes' : 'NO'}; wall n/a`
+          : 'n/a'
+        : wallRatio <= w.wallRatio && memOk
+          ? 'yes'
+          : 'NO';
     r.ratios = { wall: wallRatio, memory: memRatio, met };
-    rows.push([size, fmt(r.fitgate.wall), fmt(r.fitgate.peakMiB, 4), fmt(r.reference?.wall), fmt(r.reference?.peakMiB, 4), wallRatio === null ? '-' : `${wallRatio.toFixed(3)}x`, memRatio === null ? '-' : `${memRatio.toFixed(3)}x`, target, met]);
+    rows.push([
+      size,
+      fmt(r.fitgate.wall),
+      fmt(r.fitgate.peakMiB, 4),
+      fmt(r.reference?.wall),
+      fmt(r.reference?.peakMiB, 4),
+      wallRatio === null ? '-' : `${wallRatio.toFixed(3)}x`,
+      memRatio === null ? '-' : `${memRatio.toFixed(3)}x`,
+      target,
+      met,
+    ]);
   }
-  process.stdout.write(`\nWhole processes, median of ${options.runs} (${os.cpus().length} cores, node ${process.version}; data: ${options.data ?? 'gen-data.mjs'}; ${envNote})\n\n${table(rows)}\n`);
+  process.stdout.write(
+    `\nWhole processes, median of ${options.runs} (${os.cpus().length} cores, node ${process.version}; data: ${options.data ?? 'gen-data.mjs'}; ${envNote})\n\n${table(rows)}\n`,
+  );
 
   // Figures.
   const figRows = [['size', 'figure', 'fitgate', 'reference', 'relative difference', 'within 1e-6']];
   for (const size of options.sizes) {
-    for (const f of results[size].figures) figRows.push([size, f.label, fmt(f.fitgate, 12), fmt(f.reference, 12), f.relative === null ? '-' : f.relative.toExponential(2), f.status]);
+    for (const f of results[size].figures)
+      figRows.push([
+        size,
+        f.label,
+        fmt(f.fitgate, 12),
+        fmt(f.reference, 12),
+        f.relative === null ? '-' : f.relative.toExponential(2),
+        f.status,
+      ]);
   }
   process.stdout.write(`\nFigures (leaked rows exact)\n\n${table(figRows)}\n`);
 

@@ -37,7 +37,16 @@ describe.skipIf(missing !== null)(`HTML report in Chromium${skipNote(missing)}`,
     url = pathToFileURL(file).href;
     browser = await chromium.launch({
       executablePath: CHROMIUM,
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--headless',
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     });
   });
 
@@ -85,7 +94,12 @@ describe.skipIf(missing !== null)(`HTML report in Chromium${skipNote(missing)}`,
         els.map((e) => {
           const r = e.getBoundingClientRect();
           const [t, d] = (e.getAttribute('aria-labelledby') ?? '').split(' ');
-          return { w: r.width, h: r.height, title: document.getElementById(t)?.textContent ?? '', desc: document.getElementById(d)?.textContent ?? '' };
+          return {
+            w: r.width,
+            h: r.height,
+            title: document.getElementById(t)?.textContent ?? '',
+            desc: document.getElementById(d)?.textContent ?? '',
+          };
         }),
       );
       for (const b of boxes) {
@@ -139,7 +153,13 @@ describe.skipIf(missing !== null)(`HTML report in Chromium${skipNote(missing)}`,
   it('draws the base commit curve of a model the pull request changed, and screenshots it', async () => {
     // The action's test repository: its pull request raises `wide` from degree 2 to 3.
     const fixture = makeFixture();
-    const settings = { root: path.join(fixture.workspace, 'ml'), config: 'fitgate.yml', configExplicit: false, descriptors: [], failOn: 'fail' as const };
+    const settings = {
+      root: path.join(fixture.workspace, 'ml'),
+      config: 'fitgate.yml',
+      configExplicit: false,
+      descriptors: [],
+      failOn: 'fail' as const,
+    };
     const options = await evaluateBase(settings, fixture.baseSha, { fetchHint: ACTION_FETCH_HINT });
     const pr = await runPipeline(settings, createFsRepository(settings.root), { ...options, jobs: 1 });
     const file = path.join(outDir, 'pull-request.html');

@@ -5,7 +5,12 @@ import { buildContext, defaultLimits, descriptor, exampleTable } from './context
 
 describe('complexity check', () => {
   it('suggests a low degree at the term line for the degree-9 tank fit and warns', () => {
-    const d = descriptor({ terms: [{ kind: 'polynomial', of: 'hours', degree: 9, shift: null, scale: null }], target: 'temp_c', foldOrder: 'blocks', limits: defaultLimits({ complexity: { warn: 1.5 } }) });
+    const d = descriptor({
+      terms: [{ kind: 'polynomial', of: 'hours', degree: 9, shift: null, scale: null }],
+      target: 'temp_c',
+      foldOrder: 'blocks',
+      limits: defaultLimits({ complexity: { warn: 1.5 } }),
+    });
     const { outcome, figures } = runCheck(complexity, buildContext(d, exampleTable('tank-train.csv'), exampleTable('tank-holdout.csv')));
     expect(outcome.status, outcome.message).toBe('warn');
     expect(outcome.suggestion?.line).toBe(10);
@@ -16,7 +21,11 @@ describe('complexity check', () => {
   });
 
   it('gives no suggestion when the current setting is the one the rule picks', () => {
-    const d = descriptor({ terms: [{ kind: 'polynomial', of: 'depth_m', degree: 3, shift: null, scale: null }], target: 'temp_c', limits: defaultLimits({ complexity: { warn: 1.5 } }) });
+    const d = descriptor({
+      terms: [{ kind: 'polynomial', of: 'depth_m', degree: 3, shift: null, scale: null }],
+      target: 'temp_c',
+      limits: defaultLimits({ complexity: { warn: 1.5 } }),
+    });
     const { outcome } = runCheck(complexity, buildContext(d, exampleTable('cellar-train.csv'), exampleTable('cellar-holdout.csv')));
     expect(outcome.suggestion).toBeUndefined();
     expect(outcome.value).toBe(1);

@@ -55,7 +55,8 @@ export function table(names: string[], columns: number[][], file = 'memory.csv')
 /** Limits used by tests: the given ones, every other key absent (off). */
 export function limits(spec: Record<string, { warn?: number; fail?: number }>): Record<string, Limit> {
   const out: Record<string, Limit> = {};
-  for (const [k, v] of Object.entries(spec)) out[k] = { warn: v.warn ?? null, fail: v.fail ?? null, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 40 };
+  for (const [k, v] of Object.entries(spec))
+    out[k] = { warn: v.warn ?? null, fail: v.fail ?? null, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 40 };
   return out;
 }
 

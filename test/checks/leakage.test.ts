@@ -5,9 +5,25 @@ import { buildContext, defaultLimits, descriptor, exampleTable, table } from './
 
 describe('leakage check (default limit 0: fail when any)', () => {
   it('fails with exact counts and lines on constructed files', () => {
-    const train = table(['a', 'b', 'y'], [[1, 2, 3, 4, 5, 6], [1, 1, 2, 2, 3, 3], [10, 11, 12, 13, 14, 15]], 'train.csv');
+    const train = table(
+      ['a', 'b', 'y'],
+      [
+        [1, 2, 3, 4, 5, 6],
+        [1, 1, 2, 2, 3, 3],
+        [10, 11, 12, 13, 14, 15],
+      ],
+      'train.csv',
+    );
     // Hold-out rows (lines 2..5): copy of train line 3; same inputs as train line 6 with another target; new; copy of train line 2.
-    const holdout = table(['a', 'b', 'y'], [[2, 5, 9, 1], [1, 3, 9, 1], [11, 99, 0, 10]], 'holdout.csv');
+    const holdout = table(
+      ['a', 'b', 'y'],
+      [
+        [2, 5, 9, 1],
+        [1, 3, 9, 1],
+        [11, 99, 0, 10],
+      ],
+      'holdout.csv',
+    );
     const d = descriptor({ terms: [{ kind: 'linear', columns: ['a', 'b'] }], target: 'y', limits: defaultLimits() });
     const { outcome, figures } = runCheck(leakage, buildContext(d, train, holdout));
     expect(outcome.status).toBe('fail');
@@ -18,10 +34,18 @@ describe('leakage check (default limit 0: fail when any)', () => {
   });
 
   it('fails the bottle-fill example (five planted copies) and passes press-yield', () => {
-    const fill = descriptor({ terms: [{ kind: 'linear', columns: ['line_speed', 'nozzle_bar'] }], target: 'fill_ml', limits: defaultLimits() });
+    const fill = descriptor({
+      terms: [{ kind: 'linear', columns: ['line_speed', 'nozzle_bar'] }],
+      target: 'fill_ml',
+      limits: defaultLimits(),
+    });
     const bad = runCheck(leakage, buildContext(fill, exampleTable('fill-train.csv'), exampleTable('fill-holdout.csv'))).outcome;
     expect([bad.status, bad.value]).toEqual(['fail', 5]);
-    const press = descriptor({ terms: [{ kind: 'linear', columns: ['apples_kg', 'press_min'] }], target: 'juice_l', limits: defaultLimits() });
+    const press = descriptor({
+      terms: [{ kind: 'linear', columns: ['apples_kg', 'press_min'] }],
+      target: 'juice_l',
+      limits: defaultLimits(),
+    });
     const good = runCheck(leakage, buildContext(press, exampleTable('press-train.csv'), exampleTable('press-holdout.csv'))).outcome;
     expect([good.status, good.value]).toEqual(['pass', 0]);
   });

@@ -38,8 +38,17 @@ describe('swing check on the example data (default limit warn 0.25, fail 0.5)', 
   });
 
   it('keeps chart data: the band and one curve of at most 400 points per input, with the worst point', () => {
-    const { swing: outcome } = run('sugar', 'brix', { kind: 'rbf', of: 'day', centers: { kind: 'count', from: 0, to: 14, count: 30 }, width: 0.15 });
-    const detail = outcome.detail as { band: number[]; curves: { input: string; x: number[]; prediction: number[] }[]; worst_inside: { prediction: number } };
+    const { swing: outcome } = run('sugar', 'brix', {
+      kind: 'rbf',
+      of: 'day',
+      centers: { kind: 'count', from: 0, to: 14, count: 30 },
+      width: 0.15,
+    });
+    const detail = outcome.detail as {
+      band: number[];
+      curves: { input: string; x: number[]; prediction: number[] }[];
+      worst_inside: { prediction: number };
+    };
     expect(detail.band.length).toBe(2);
     expect(detail.curves.map((c) => c.input)).toEqual(['day']);
     expect(detail.curves[0].x.length).toBe(detail.curves[0].prediction.length);

@@ -73,28 +73,76 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'step', from: 0, to: 1, step: 0.25 }, width: 0.5, line: 14 },
       { kind: 'rbf', of: 'ambient_c', centers: { kind: 'at-samples' }, width: 2, line: 15 },
     ]);
-    expect(d.fit).toEqual({ intercept: false, refit: true, ridge: 0.5, folds: 5, foldOrder: 'blocks', seed: 1, parameterCount: 'columns', line: 16, ridgeLine: 18, threshold: 0.5 });
+    expect(d.fit).toEqual({
+      intercept: false,
+      refit: true,
+      ridge: 0.5,
+      folds: 5,
+      foldOrder: 'blocks',
+      seed: 1,
+      parameterCount: 'columns',
+      line: 16,
+      ridgeLine: 18,
+      threshold: 0.5,
+    });
     expect(d.coefficients).toEqual([1, 2.5, -3]);
     expect(d.coefficientsLine).toBe(20);
-    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.3, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 22 });
+    expect(d.limits.gap_ratio).toEqual({
+      warn: null,
+      fail: 1.3,
+      warnBelow: null,
+      failBelow: null,
+      off: false,
+      source: 'descriptor',
+      line: 22,
+    });
     expect(d.limits.swing).toEqual({ warn: null, fail: 0.4, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 23 });
-    expect(d.limits.cv_ratio).toEqual({ warn: null, fail: null, warnBelow: null, failBelow: null, off: true, source: 'descriptor', line: 24 });
+    expect(d.limits.cv_ratio).toEqual({
+      warn: null,
+      fail: null,
+      warnBelow: null,
+      failBelow: null,
+      off: true,
+      source: 'descriptor',
+      line: 24,
+    });
     expect(Object.keys(d.limits).sort()).toEqual(LIMIT_KEYS.map((k) => k.key).sort());
   });
 
   it('applies defaults when fit, task, coefficients and limits are left out; fit.line is the terms line', async () => {
-    const minimal = 'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms:\n  - linear: [x]\n';
+    const minimal =
+      'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms:\n  - linear: [x]\n';
     const d = await loadDescriptor(repoWith(minimal), F, defaultSettings());
     expect(d.task).toBe('regression');
-    expect(d.fit).toEqual({ intercept: true, refit: true, ridge: 0, folds: 5, foldOrder: 'shuffled', seed: 1, parameterCount: 'columns', line: 4, ridgeLine: 4, threshold: 0.5 });
+    expect(d.fit).toEqual({
+      intercept: true,
+      refit: true,
+      ridge: 0,
+      folds: 5,
+      foldOrder: 'shuffled',
+      seed: 1,
+      parameterCount: 'columns',
+      line: 4,
+      ridgeLine: 4,
+      threshold: 0.5,
+    });
     expect(d.coefficients).toBeNull();
     expect(d.coefficientsLine).toBeNull();
-    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 1.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
+    expect(d.limits.gap_ratio).toEqual({
+      warn: null,
+      fail: 1.5,
+      warnBelow: null,
+      failBelow: null,
+      off: false,
+      source: 'default',
+      line: null,
+    });
   });
 
   it('takes fit defaults from the settings file, and descriptor fit keys win', async () => {
     const settings: SettingsFile = { ...defaultSettings(), fit: { folds: 10, foldOrder: 'blocks', seed: 7, parameterCount: 'columns' } };
-    const withSeed = 'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms: [ { linear: [x] } ]\nfit:\n  seed: 3\n';
+    const withSeed =
+      'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms: [ { linear: [x] } ]\nfit:\n  seed: 3\n';
     const d = await loadDescriptor(repoWith(withSeed), F, settings);
     expect(d.fit).toMatchObject({ folds: 10, foldOrder: 'blocks', seed: 3, line: 5, ridgeLine: 5 });
   });
@@ -103,65 +151,248 @@ describe('loadDescriptor: a valid descriptor with every term kind', () => {
 describe('limits merge: defaults < settings < descriptor, key by key', () => {
   it('takes each key from the highest layer that sets it, whole', async () => {
     const settingsText = 'version: 1\nlimits:\n  gap_ratio: 2\n  coefficient: { warn: 10, fail: 20 }\n  condition: off\n';
-    const descriptor = 'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms: [ { linear: [x] } ]\nlimits:\n  coefficient: 30\n';
+    const descriptor =
+      'version: 1\nname: m\ndata: { train: data/train.csv, holdout: ../shared/holdout.csv, target: y }\nterms: [ { linear: [x] } ]\nlimits:\n  coefficient: 30\n';
     const repo = repoWith(descriptor, { 'fitgate.yml': settingsText });
     const settings = await loadSettings(repo, 'fitgate.yml');
     const d = await loadDescriptor(repo, F, settings);
-    expect(d.limits.gap_ratio).toEqual({ warn: null, fail: 2, warnBelow: null, failBelow: null, off: false, source: 'settings', line: null });
-    expect(d.limits.condition).toEqual({ warn: null, fail: null, warnBelow: null, failBelow: null, off: true, source: 'settings', line: null });
-    expect(d.limits.coefficient, 'descriptor replaces the settings { warn, fail } entirely').toEqual({ warn: null, fail: 30, warnBelow: null, failBelow: null, off: false, source: 'descriptor', line: 6 });
+    expect(d.limits.gap_ratio).toEqual({
+      warn: null,
+      fail: 2,
+      warnBelow: null,
+      failBelow: null,
+      off: false,
+      source: 'settings',
+      line: null,
+    });
+    expect(d.limits.condition).toEqual({
+      warn: null,
+      fail: null,
+      warnBelow: null,
+      failBelow: null,
+      off: true,
+      source: 'settings',
+      line: null,
+    });
+    expect(d.limits.coefficient, 'descriptor replaces the settings { warn, fail } entirely').toEqual({
+      warn: null,
+      fail: 30,
+      warnBelow: null,
+      failBelow: null,
+      off: false,
+      source: 'descriptor',
+      line: 6,
+    });
     expect(d.limits.swing).toEqual({ warn: 0.25, fail: 0.5, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
-    expect(d.limits.params_per_sample).toEqual({ warn: null, fail: 0.1, warnBelow: null, failBelow: null, off: false, source: 'default', line: null });
+    expect(d.limits.params_per_sample).toEqual({
+      warn: null,
+      fail: 0.1,
+      warnBelow: null,
+      failBelow: null,
+      off: false,
+      source: 'default',
+      line: null,
+    });
   });
 });
 
 describe('loadDescriptor: schema errors name file, line and key path', () => {
   const cases: Array<{ name: string; text: string; line: number; key: string; message?: RegExp }> = [
-    { name: 'unknown top-level key', text: edit(3, 'tusk: regression'), line: 3, key: 'tusk', message: /unknown key `tusk` \(did you mean `task`\?\); expected one of: version, name, task/ },
+    {
+      name: 'unknown top-level key',
+      text: edit(3, 'tusk: regression'),
+      line: 3,
+      key: 'tusk',
+      message: /unknown key `tusk` \(did you mean `task`\?\); expected one of: version, name, task/,
+    },
     { name: 'bad version', text: edit(1, 'version: 2'), line: 1, key: 'version' },
     { name: 'name with a space', text: edit(2, 'name: kiln exit'), line: 2, key: 'name' },
     { name: 'name too long', text: edit(2, `name: ${'a'.repeat(101)}`), line: 2, key: 'name' },
     { name: 'unknown task', text: edit(3, 'task: ranking'), line: 3, key: 'task', message: /expected one of: regression, classification/ },
     { name: 'missing data.target', text: edit(7, ''), line: 4, key: 'data.target', message: /missing key `target`/ },
     { name: 'data path not text', text: edit(5, '  train: 3'), line: 5, key: 'data.train' },
-    { name: 'unknown term kind', text: edit(9, '  - hinge: [humidity_pct]'), line: 9, key: 'terms[0].hinge', message: /unknown term kind `hinge`; expected one of: linear, polynomial, rbf, fourier, spline, category/ },
-    { name: 'two kinds in one term', text: edit(9, '  - { linear: [a], polynomial: { of: b, degree: 2 } }'), line: 9, key: 'terms[0]', message: /exactly one key/ },
-    { name: 'term as plain text', text: edit(9, '  - linear'), line: 9, key: 'terms[0]', message: /linear, polynomial, rbf, fourier, spline or category/ },
+    {
+      name: 'unknown term kind',
+      text: edit(9, '  - hinge: [humidity_pct]'),
+      line: 9,
+      key: 'terms[0].hinge',
+      message: /unknown term kind `hinge`; expected one of: linear, polynomial, rbf, fourier, spline, category/,
+    },
+    {
+      name: 'two kinds in one term',
+      text: edit(9, '  - { linear: [a], polynomial: { of: b, degree: 2 } }'),
+      line: 9,
+      key: 'terms[0]',
+      message: /exactly one key/,
+    },
+    {
+      name: 'term as plain text',
+      text: edit(9, '  - linear'),
+      line: 9,
+      key: 'terms[0]',
+      message: /linear, polynomial, rbf, fourier, spline or category/,
+    },
     { name: 'empty linear list', text: edit(9, '  - linear: []'), line: 9, key: 'terms[0].linear', message: /non-empty list/ },
     { name: 'linear column not text', text: edit(9, '  - linear: [a, [b]]'), line: 9, key: 'terms[0].linear[1]' },
-    { name: 'degree above 30', text: edit(10, '  - polynomial: { of: fuel_rate, degree: 31 }'), line: 10, key: 'terms[1].polynomial.degree', message: /from 1 to 30, got 31/ },
-    { name: 'degree not an integer', text: edit(10, '  - polynomial: { of: fuel_rate, degree: 2.5 }'), line: 10, key: 'terms[1].polynomial.degree', message: /an integer/ },
-    { name: 'polynomial missing degree', text: edit(10, '  - polynomial: { of: fuel_rate }'), line: 10, key: 'terms[1].polynomial.degree', message: /missing key `degree`/ },
-    { name: 'zero scale', text: edit(11, '  - polynomial: { of: fuel_rate, degree: 2, shift: 0, scale: 0 }'), line: 11, key: 'terms[2].polynomial.scale', message: /> 0/ },
-    { name: 'unknown polynomial key', text: edit(11, '  - polynomial: { of: fuel_rate, degree: 2, offset: 0 }'), line: 11, key: 'terms[2].polynomial.offset', message: /unknown key `offset`; expected one of: of, degree, shift, scale/ },
-    { name: 'negative rbf width', text: edit(12, '  - rbf: { of: ambient_c, centers: [1], width: -1 }'), line: 12, key: 'terms[3].rbf.width', message: /got -1/ },
-    { name: 'infinite rbf width', text: edit(12, '  - rbf: { of: ambient_c, centers: [1], width: .inf }'), line: 12, key: 'terms[3].rbf.width', message: /finite number, got \.inf/ },
-    { name: 'non-numeric centre', text: edit(12, '  - rbf: { of: ambient_c, centers: [1, two], width: 1 }'), line: 12, key: 'terms[3].rbf.centers[1]', message: /a number, got "two"/ },
-    { name: 'NaN centre', text: edit(12, '  - rbf: { of: ambient_c, centers: [1, .nan], width: 1 }'), line: 12, key: 'terms[3].rbf.centers[1]', message: /finite/ },
-    { name: 'empty centre list', text: edit(12, '  - rbf: { of: ambient_c, centers: [], width: 1 }'), line: 12, key: 'terms[3].rbf.centers', message: /non-empty list/ },
-    { name: 'count of zero', text: edit(13, '  - rbf: { of: ambient_c, centers: { from: 0, to: 1, count: 0 }, width: 1 }'), line: 13, key: 'terms[4].rbf.centers.count', message: /from 1 to 10000/ },
-    { name: 'step of zero', text: edit(14, '  - rbf: { of: ambient_c, centers: { from: 0, to: 1, step: 0 }, width: 1 }'), line: 14, key: 'terms[5].rbf.centers.step', message: /> 0/ },
-    { name: 'centres text other than at-samples', text: edit(15, '  - rbf: { of: ambient_c, centers: everywhere, width: 1 }'), line: 15, key: 'terms[6].rbf.centers', message: /expected one of: a list of numbers, \{ from, to, count \}, \{ from, to, step \} or `at-samples`, got "everywhere"/ },
-    { name: 'centres mapping with neither count nor step', text: edit(15, '  - rbf: { of: ambient_c, centers: { from: 0, to: 1 }, width: 1 }'), line: 15, key: 'terms[6].rbf.centers', message: /expected one of/ },
-    { name: 'empty terms', text: FULL.split('\n').slice(0, 7).join('\n') + '\nterms: []\n', line: 8, key: 'terms', message: /non-empty list/ },
+    {
+      name: 'degree above 30',
+      text: edit(10, '  - polynomial: { of: fuel_rate, degree: 31 }'),
+      line: 10,
+      key: 'terms[1].polynomial.degree',
+      message: /from 1 to 30, got 31/,
+    },
+    {
+      name: 'degree not an integer',
+      text: edit(10, '  - polynomial: { of: fuel_rate, degree: 2.5 }'),
+      line: 10,
+      key: 'terms[1].polynomial.degree',
+      message: /an integer/,
+    },
+    {
+      name: 'polynomial missing degree',
+      text: edit(10, '  - polynomial: { of: fuel_rate }'),
+      line: 10,
+      key: 'terms[1].polynomial.degree',
+      message: /missing key `degree`/,
+    },
+    {
+      name: 'zero scale',
+      text: edit(11, '  - polynomial: { of: fuel_rate, degree: 2, shift: 0, scale: 0 }'),
+      line: 11,
+      key: 'terms[2].polynomial.scale',
+      message: /> 0/,
+    },
+    {
+      name: 'unknown polynomial key',
+      text: edit(11, '  - polynomial: { of: fuel_rate, degree: 2, offset: 0 }'),
+      line: 11,
+      key: 'terms[2].polynomial.offset',
+      message: /unknown key `offset`; expected one of: of, degree, shift, scale/,
+    },
+    {
+      name: 'negative rbf width',
+      text: edit(12, '  - rbf: { of: ambient_c, centers: [1], width: -1 }'),
+      line: 12,
+      key: 'terms[3].rbf.width',
+      message: /got -1/,
+    },
+    {
+      name: 'infinite rbf width',
+      text: edit(12, '  - rbf: { of: ambient_c, centers: [1], width: .inf }'),
+      line: 12,
+      key: 'terms[3].rbf.width',
+      message: /finite number, got \.inf/,
+    },
+    {
+      name: 'non-numeric centre',
+      text: edit(12, '  - rbf: { of: ambient_c, centers: [1, two], width: 1 }'),
+      line: 12,
+      key: 'terms[3].rbf.centers[1]',
+      message: /a number, got "two"/,
+    },
+    {
+      name: 'NaN centre',
+      text: edit(12, '  - rbf: { of: ambient_c, centers: [1, .nan], width: 1 }'),
+      line: 12,
+      key: 'terms[3].rbf.centers[1]',
+      message: /finite/,
+    },
+    {
+      name: 'empty centre list',
+      text: edit(12, '  - rbf: { of: ambient_c, centers: [], width: 1 }'),
+      line: 12,
+      key: 'terms[3].rbf.centers',
+      message: /non-empty list/,
+    },
+    {
+      name: 'count of zero',
+      text: edit(13, '  - rbf: { of: ambient_c, centers: { from: 0, to: 1, count: 0 }, width: 1 }'),
+      line: 13,
+      key: 'terms[4].rbf.centers.count',
+      message: /from 1 to 10000/,
+    },
+    {
+      name: 'step of zero',
+      text: edit(14, '  - rbf: { of: ambient_c, centers: { from: 0, to: 1, step: 0 }, width: 1 }'),
+      line: 14,
+      key: 'terms[5].rbf.centers.step',
+      message: /> 0/,
+    },
+    {
+      name: 'centres text other than at-samples',
+      text: edit(15, '  - rbf: { of: ambient_c, centers: everywhere, width: 1 }'),
+      line: 15,
+      key: 'terms[6].rbf.centers',
+      message: /expected one of: a list of numbers, \{ from, to, count \}, \{ from, to, step \} or `at-samples`, got "everywhere"/,
+    },
+    {
+      name: 'centres mapping with neither count nor step',
+      text: edit(15, '  - rbf: { of: ambient_c, centers: { from: 0, to: 1 }, width: 1 }'),
+      line: 15,
+      key: 'terms[6].rbf.centers',
+      message: /expected one of/,
+    },
+    {
+      name: 'empty terms',
+      text: FULL.split('\n').slice(0, 7).join('\n') + '\nterms: []\n',
+      line: 8,
+      key: 'terms',
+      message: /non-empty list/,
+    },
     { name: 'negative ridge', text: edit(18, '  ridge: -0.1'), line: 18, key: 'fit.ridge', message: />= 0/ },
     { name: 'one fold', text: edit(18, '  folds: 1'), line: 18, key: 'fit.folds', message: /from 2 to 50, got 1/ },
     { name: 'more folds than the bound', text: edit(18, '  folds: 51'), line: 18, key: 'fit.folds', message: /from 2 to 50, got 51/ },
     { name: 'bad fold order', text: edit(19, '  fold_order: random'), line: 19, key: 'fit.fold_order', message: /shuffled, blocks/ },
-    { name: 'intercept not boolean', text: edit(17, '  intercept: yes'), line: 17, key: 'fit.intercept', message: /true or false, got "yes"/ },
+    {
+      name: 'intercept not boolean',
+      text: edit(17, '  intercept: yes'),
+      line: 17,
+      key: 'fit.intercept',
+      message: /true or false, got "yes"/,
+    },
     { name: 'unknown fit key', text: edit(18, '  lambda: 0.5'), line: 18, key: 'fit.lambda', message: /unknown key `lambda`/ },
     { name: 'coefficient not a number', text: edit(20, 'coefficients: [1, x, 3]'), line: 20, key: 'coefficients[1]' },
-    { name: 'unknown limit key', text: edit(22, '  gap_ration: 1.3'), line: 22, key: 'limits.gap_ration', message: /unknown key `gap_ration` \(did you mean `gap_ratio`\?\); expected one of: gap_ratio, params_per_sample/ },
+    {
+      name: 'unknown limit key',
+      text: edit(22, '  gap_ration: 1.3'),
+      line: 22,
+      key: 'limits.gap_ration',
+      message: /unknown key `gap_ration` \(did you mean `gap_ratio`\?\); expected one of: gap_ratio, params_per_sample/,
+    },
     { name: 'negative limit', text: edit(22, '  gap_ratio: -1'), line: 22, key: 'limits.gap_ratio', message: />= 0, got -1/ },
-    { name: 'limit as other text', text: edit(22, '  gap_ratio: none'), line: 22, key: 'limits.gap_ratio', message: /expected one of: .*`off`/ },
-    { name: 'empty warn/fail mapping', text: edit(23, '  swing: {}'), line: 23, key: 'limits.swing', message: /expected one of: .*\{ warn, fail \}, \{ warn_below, fail_below, warn_above, fail_above \}/ },
-    { name: 'unknown key in warn/fail', text: edit(23, '  swing: { warn: 1, fial: 2 }'), line: 23, key: 'limits.swing.fial', message: /unknown key `fial`/ },
+    {
+      name: 'limit as other text',
+      text: edit(22, '  gap_ratio: none'),
+      line: 22,
+      key: 'limits.gap_ratio',
+      message: /expected one of: .*`off`/,
+    },
+    {
+      name: 'empty warn/fail mapping',
+      text: edit(23, '  swing: {}'),
+      line: 23,
+      key: 'limits.swing',
+      message: /expected one of: .*\{ warn, fail \}, \{ warn_below, fail_below, warn_above, fail_above \}/,
+    },
+    {
+      name: 'unknown key in warn/fail',
+      text: edit(23, '  swing: { warn: 1, fial: 2 }'),
+      line: 23,
+      key: 'limits.swing.fial',
+      message: /unknown key `fial`/,
+    },
     { name: 'document not a mapping', text: '- a\n- b\n', line: 1, key: '', message: /a mapping/ },
   ];
 
   for (const c of cases) {
     it(c.name, async () => {
-      const expected = { code: 'schema', file: F, line: c.line, ...(c.key !== '' ? { key: c.key } : {}), ...(c.message ? { message: c.message } : {}) };
+      const expected = {
+        code: 'schema',
+        file: F,
+        line: c.line,
+        ...(c.key !== '' ? { key: c.key } : {}),
+        ...(c.message ? { message: c.message } : {}),
+      };
       await expectInputError(() => loadDescriptor(repoWith(c.text), F, defaultSettings()), expected);
     });
   }
@@ -176,35 +407,66 @@ describe('loadDescriptor: schema errors name file, line and key path', () => {
 describe('loadDescriptor: checks beyond the schema', () => {
   it('refuses warn above fail at the warn key', async () => {
     await expectInputError(() => loadDescriptor(repoWith(edit(23, '  swing: { warn: 0.6, fail: 0.4 }')), F, defaultSettings()), {
-      code: 'limit-order', file: F, line: 23, key: 'limits.swing.warn',
+      code: 'limit-order',
+      file: F,
+      line: 23,
+      key: 'limits.swing.warn',
     });
   });
 
   it('refuses centres with to below from, and steps giving too many centres', async () => {
-    await expectInputError(() => loadDescriptor(repoWith(edit(13, '  - rbf: { of: a, centers: { from: 5, to: 1, count: 3 }, width: 1 }')), F, defaultSettings()), {
-      code: 'rbf-centers', file: F, line: 13, key: 'terms[4].rbf.centers.to',
-    });
-    await expectInputError(() => loadDescriptor(repoWith(edit(14, '  - rbf: { of: a, centers: { from: 0, to: 1, step: 1e-9 }, width: 1 }')), F, defaultSettings()), {
-      code: 'rbf-centers', file: F, line: 14, key: 'terms[5].rbf.centers.step',
-    });
+    await expectInputError(
+      () => loadDescriptor(repoWith(edit(13, '  - rbf: { of: a, centers: { from: 5, to: 1, count: 3 }, width: 1 }')), F, defaultSettings()),
+      {
+        code: 'rbf-centers',
+        file: F,
+        line: 13,
+        key: 'terms[4].rbf.centers.to',
+      },
+    );
+    await expectInputError(
+      () =>
+        loadDescriptor(repoWith(edit(14, '  - rbf: { of: a, centers: { from: 0, to: 1, step: 1e-9 }, width: 1 }')), F, defaultSettings()),
+      {
+        code: 'rbf-centers',
+        file: F,
+        line: 14,
+        key: 'terms[5].rbf.centers.step',
+      },
+    );
   });
 
   it('refuses a missing data file at its descriptor line', async () => {
     const repo = createMemoryRepository({ [F]: FULL, 'models/kiln/data/train.csv': 'a\n' });
-    await expectInputError(() => loadDescriptor(repo, F, defaultSettings()), { code: 'file-missing', file: F, line: 6, key: 'data.holdout' });
+    await expectInputError(() => loadDescriptor(repo, F, defaultSettings()), {
+      code: 'file-missing',
+      file: F,
+      line: 6,
+      key: 'data.holdout',
+    });
   });
 
   it('refuses data paths that leave the repository or are absolute', async () => {
     await expectInputError(() => loadDescriptor(repoWith(edit(5, '  train: ../../../etc/passwd')), F, defaultSettings()), {
-      code: 'path-outside', file: F, line: 5, key: 'data.train',
+      code: 'path-outside',
+      file: F,
+      line: 5,
+      key: 'data.train',
     });
     await expectInputError(() => loadDescriptor(repoWith(edit(6, '  holdout: /etc/passwd')), F, defaultSettings()), {
-      code: 'path-outside', file: F, line: 6, key: 'data.holdout',
+      code: 'path-outside',
+      file: F,
+      line: 6,
+      key: 'data.holdout',
     });
   });
 
   it('passes YAML errors through with the descriptor file', async () => {
-    await expectInputError(() => loadDescriptor(repoWith(FULL + 'name: again\n'), F, defaultSettings()), { code: 'yaml-duplicate-key', file: F, line: 25 });
+    await expectInputError(() => loadDescriptor(repoWith(FULL + 'name: again\n'), F, defaultSettings()), {
+      code: 'yaml-duplicate-key',
+      file: F,
+      line: 25,
+    });
   });
 
   it('descriptorFromDocument leaves data paths as written', () => {

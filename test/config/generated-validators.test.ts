@@ -8,14 +8,21 @@ describe('precompiled schema validators', () => {
   it('the limit-key table, the schemas, the validators and docs/checks.md are what test/tools/gen-validators.mjs generates from the registry now (run it when this fails)', async () => {
     const files = (await generateAll()) as Map<string, string>;
     expect([...files.keys()].sort()).toEqual(
-      ['README.md', 'docs/checks.md', 'src/config/generated/limit-keys.ts', 'src/config/generated/report-validator.ts', 'src/config/generated/validators.ts', 'src/config/schema/descriptor.schema.json', 'src/config/schema/settings.schema.json'].sort(),
+      [
+        'README.md',
+        'docs/checks.md',
+        'src/config/generated/limit-keys.ts',
+        'src/config/generated/report-validator.ts',
+        'src/config/generated/validators.ts',
+        'src/config/schema/descriptor.schema.json',
+        'src/config/schema/settings.schema.json',
+      ].sort(),
     );
     for (const [rel, fresh] of files) {
       const committed = readFileSync(new URL(`../../${rel}`, import.meta.url), 'utf8');
       expect(committed === fresh, `${rel} is stale: run node test/tools/gen-validators.mjs`).toBe(true);
     }
   });
-
 
   it('reject what the schemas reject and accept a minimal valid value', () => {
     expect(validateSettingsValue({ version: 1 })).toBeNull();

@@ -19,11 +19,17 @@ describe('loadSettings', () => {
   });
 
   it('refuses a missing file given explicitly', async () => {
-    await expectInputError(() => loadSettings(createMemoryRepository({}), 'ci/fitgate.yml', { explicit: true }), { code: 'file-missing', file: 'ci/fitgate.yml' });
+    await expectInputError(() => loadSettings(createMemoryRepository({}), 'ci/fitgate.yml', { explicit: true }), {
+      code: 'file-missing',
+      file: 'ci/fitgate.yml',
+    });
   });
 
   it('refuses a settings path outside the repository', async () => {
-    await expectInputError(() => loadSettings(createMemoryRepository({}), '../fitgate.yml', { explicit: true }), { code: 'path-outside', file: '../fitgate.yml' });
+    await expectInputError(() => loadSettings(createMemoryRepository({}), '../fitgate.yml', { explicit: true }), {
+      code: 'path-outside',
+      file: '../fitgate.yml',
+    });
   });
 
   it('reads every key', async () => {
@@ -71,7 +77,9 @@ describe('loadSettings', () => {
   it('notes a fitgate.yaml beside the fitgate.yml it reads, whether or not that one exists', async () => {
     const alone = await loadSettings(createMemoryRepository({ 'fitgate.yaml': 'version: 1\nlimits: { gap_ratio: 9 }\n' }), S);
     expect(alone.file).toBeNull();
-    expect(alone.notes).toEqual(['fitgate.yaml is not read: fitgate reads its settings from fitgate.yml (rename the file, or name it with --config / the `config` input)']);
+    expect(alone.notes).toEqual([
+      'fitgate.yaml is not read: fitgate reads its settings from fitgate.yml (rename the file, or name it with --config / the `config` input)',
+    ]);
     const both = await loadSettings(createMemoryRepository({ [S]: 'version: 1\n', 'fitgate.yaml': 'version: 1\n' }), S);
     expect(both.file).toBe(S);
     expect(both.notes).toHaveLength(1);
@@ -82,31 +90,64 @@ describe('loadSettings', () => {
   const errors: Array<{ name: string; text: string; code?: string; line: number; key?: string; message?: RegExp }> = [
     { name: 'empty file', text: '', line: 1, message: /a mapping/ },
     { name: 'missing version', text: 'models: [a]\n', line: 1, key: 'version', message: /missing key `version`/ },
-    { name: 'unknown key', text: 'version: 1\nmodel: [a]\n', line: 2, key: 'model', message: /unknown key `model` \(did you mean `models`\?\); expected one of: version, models, limits, fit, caps/ },
+    {
+      name: 'unknown key',
+      text: 'version: 1\nmodel: [a]\n',
+      line: 2,
+      key: 'model',
+      message: /unknown key `model` \(did you mean `models`\?\); expected one of: version, models, limits, fit, caps/,
+    },
     { name: 'models not a list', text: 'version: 1\nmodels: "**/*.yml"\n', line: 2, key: 'models', message: /a list/ },
     { name: 'empty models', text: 'version: 1\nmodels: []\n', line: 2, key: 'models' },
     { name: 'unknown limit', text: 'version: 1\nlimits:\n  gap: 1\n', line: 3, key: 'limits.gap' },
-    { name: 'limit warn above fail', text: 'version: 1\nlimits:\n  condition: { warn: 10, fail: 5 }\n', code: 'limit-order', line: 3, key: 'limits.condition.warn' },
+    {
+      name: 'limit warn above fail',
+      text: 'version: 1\nlimits:\n  condition: { warn: 10, fail: 5 }\n',
+      code: 'limit-order',
+      line: 3,
+      key: 'limits.condition.warn',
+    },
     { name: 'folds below 2', text: 'version: 1\nfit:\n  folds: 1\n', line: 3, key: 'fit.folds' },
-    { name: 'fit ridge belongs to descriptors', text: 'version: 1\nfit:\n  ridge: 1\n', line: 3, key: 'fit.ridge', message: /unknown key `ridge`/ },
+    {
+      name: 'fit ridge belongs to descriptors',
+      text: 'version: 1\nfit:\n  ridge: 1\n',
+      line: 3,
+      key: 'fit.ridge',
+      message: /unknown key `ridge`/,
+    },
     { name: 'negative seed', text: 'version: 1\nfit:\n  seed: -1\n', line: 3, key: 'fit.seed' },
     { name: 'zero max_file_mb', text: 'version: 1\ncaps:\n  max_file_mb: 0\n', line: 3, key: 'caps.max_file_mb' },
     { name: 'fractional max_cells', text: 'version: 1\ncaps:\n  max_cells: 1.5\n', line: 3, key: 'caps.max_cells' },
     { name: 'folds above 50', text: 'version: 1\nfit:\n  folds: 1000\n', line: 3, key: 'fit.folds', message: /from 2 to 50, got 1000/ },
     { name: 'zero max_operations', text: 'version: 1\ncaps:\n  max_operations: 0\n', line: 3, key: 'caps.max_operations' },
     { name: 'zero max_model_seconds', text: 'version: 1\ncaps:\n  max_model_seconds: 0\n', line: 3, key: 'caps.max_model_seconds' },
-    { name: 'max_model_seconds above a day', text: 'version: 1\ncaps:\n  max_model_seconds: 100000\n', line: 3, key: 'caps.max_model_seconds' },
+    {
+      name: 'max_model_seconds above a day',
+      text: 'version: 1\ncaps:\n  max_model_seconds: 100000\n',
+      line: 3,
+      key: 'caps.max_model_seconds',
+    },
     { name: 'duplicate key', text: 'version: 1\nversion: 1\n', code: 'yaml-duplicate-key', line: 2, key: 'version' },
     { name: 'syntax error', text: 'version: 1\nmodels: [a\n', code: 'yaml-syntax', line: 3 },
   ];
   for (const c of errors) {
     it(`refuses: ${c.name}`, async () => {
-      const expected = { code: c.code ?? 'schema', file: S, line: c.line, ...(c.key ? { key: c.key } : {}), ...(c.message ? { message: c.message } : {}) };
+      const expected = {
+        code: c.code ?? 'schema',
+        file: S,
+        line: c.line,
+        ...(c.key ? { key: c.key } : {}),
+        ...(c.message ? { message: c.message } : {}),
+      };
       await expectInputError(() => loadSettings(createMemoryRepository({ [S]: c.text }), S), expected);
     });
   }
 
   it('refuses binary content', async () => {
-    await expectInputError(() => loadSettings(createMemoryRepository({ [S]: new Uint8Array([0x76, 0xc3, 0x28]) }), S), { code: 'file-encoding', file: S, line: 1 });
+    await expectInputError(() => loadSettings(createMemoryRepository({ [S]: new Uint8Array([0x76, 0xc3, 0x28]) }), S), {
+      code: 'file-encoding',
+      file: S,
+      line: 1,
+    });
   });
 });

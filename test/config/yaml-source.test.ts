@@ -48,7 +48,12 @@ describe('parseYaml: errors', () => {
 
   it('refuses duplicate keys at the second occurrence, at any depth', async () => {
     await expectInputError(() => parseYaml('a: 1\nb: 2\na: 3\n', F), { code: 'yaml-duplicate-key', file: F, line: 3, column: 1, key: 'a' });
-    await expectInputError(() => parseYaml('fit:\n  ridge: 1\n  seed: 2\n  ridge: 3\n', F), { code: 'yaml-duplicate-key', file: F, line: 4, column: 3 });
+    await expectInputError(() => parseYaml('fit:\n  ridge: 1\n  seed: 2\n  ridge: 3\n', F), {
+      code: 'yaml-duplicate-key',
+      file: F,
+      line: 4,
+      column: 3,
+    });
   });
 
   it('refuses a list or a mapping used as a key, at its position, without a process warning', async () => {
@@ -56,7 +61,12 @@ describe('parseYaml: errors', () => {
     const onWarning = (w: Error): void => void warnings.push(w);
     process.on('warning', onWarning);
     try {
-      await expectInputError(() => parseYaml('version: 1\nterms:\n  - { from: 0, to: 10 }: 3\n', F), { code: 'yaml-collection-key', file: F, line: 3, column: 5 });
+      await expectInputError(() => parseYaml('version: 1\nterms:\n  - { from: 0, to: 10 }: 3\n', F), {
+        code: 'yaml-collection-key',
+        file: F,
+        line: 3,
+        column: 5,
+      });
       await expectInputError(() => parseYaml('a: 1\n[x, y]: 2\n', F), { code: 'yaml-collection-key', file: F, line: 2, column: 1 });
       await expectInputError(() => parseYaml('a: &l [1, 2]\n*l : 2\n', F), { code: 'yaml-collection-key', file: F, line: 2, column: 1 });
       expect(() => parseYaml('a: 1\n[x, y]: 2\n', F)).toThrow('a list used as a key (`[x, y]`)');
@@ -122,7 +132,12 @@ describe('decodeYamlBytes and readYamlFile', () => {
   });
 
   it('refuses binary content (NUL characters)', async () => {
-    await expectInputError(() => decodeYamlBytes(new Uint8Array([0x61, 0x00, 0x62]), F), { code: 'file-encoding', file: F, line: 1, column: 2 });
+    await expectInputError(() => decodeYamlBytes(new Uint8Array([0x61, 0x00, 0x62]), F), {
+      code: 'file-encoding',
+      file: F,
+      line: 1,
+      column: 2,
+    });
   });
 
   it('reads through a repository, checking the size before reading', async () => {

@@ -16,7 +16,9 @@ const repo = {
   resolve: async (_from, target) => target,
   isFile: async () => true,
   size: async (p) => (await stat(p)).size,
-  read: async () => { throw new Error('not used'); },
+  read: async () => {
+    throw new Error('not used');
+  },
   async *stream(p, chunkBytes = 1024 * 1024) {
     const handle = await open(p);
     try {
@@ -41,5 +43,7 @@ for (let run = 0; run < (mode === 'general' ? 1 : 3); run++) {
   const ms = Number(process.hrtime.bigint() - t0) / 1e6;
   const cpu = process.cpuUsage(cpu0);
   const mb = (await stat(file)).size / 1e6;
-  process.stdout.write(`${mode ?? 'fast'}: ${table.rows} rows x ${table.columns.size} columns, ${mb.toFixed(0)} MB in ${ms.toFixed(0)} ms wall, ${((cpu.user + cpu.system) / 1000).toFixed(0)} ms CPU (${(mb / (ms / 1000)).toFixed(0)} MB/s)\n`);
+  process.stdout.write(
+    `${mode ?? 'fast'}: ${table.rows} rows x ${table.columns.size} columns, ${mb.toFixed(0)} MB in ${ms.toFixed(0)} ms wall, ${((cpu.user + cpu.system) / 1000).toFixed(0)} ms CPU (${(mb / (ms / 1000)).toFixed(0)} MB/s)\n`,
+  );
 }

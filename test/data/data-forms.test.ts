@@ -59,7 +59,10 @@ describe('data forms through the whole pipeline', () => {
     const result = await run({
       'm.model.yml': descriptor('  train: t.csv\n  holdout: h.csv\n  missing: drop\n'),
       't.csv': train,
-      'h.csv': csv(',', '.', rows.slice(30)).replace(/\n([^\n]*)\n$/, '\n$1,\n').replace(/,\n$/, '\n') + '8,n/a\n',
+      'h.csv':
+        csv(',', '.', rows.slice(30))
+          .replace(/\n([^\n]*)\n$/, '\n$1,\n')
+          .replace(/,\n$/, '\n') + '8,n/a\n',
     });
     expect(result.verdict).not.toBe('error');
     expect(result.dropped).toEqual({ train: 2, holdout: 1 });

@@ -32,7 +32,11 @@ export async function outcome(repo: RepoReader, path: string, options: ReadTable
 }
 
 /** Reads `path` with readTableChunks and concatenates; checks chunk sizes on the way. */
-export async function chunkedOutcome(repo: RepoReader, path: string, options: ReadTableOptions): Promise<Outcome & { chunkSizes?: number[] }> {
+export async function chunkedOutcome(
+  repo: RepoReader,
+  path: string,
+  options: ReadTableOptions,
+): Promise<Outcome & { chunkSizes?: number[] }> {
   try {
     const columns: Record<string, string[]> = Object.fromEntries(options.columns.map((c) => [c, [] as string[]]));
     const lines: number[] = [];
@@ -40,7 +44,8 @@ export async function chunkedOutcome(repo: RepoReader, path: string, options: Re
     for await (const chunk of readTableChunks(repo, path, options)) {
       chunkSizes.push(chunk.rows);
       options.columns.forEach((name, k) => {
-        if (chunk.columns[k].length !== chunk.rows) throw new Error(`column ${name} has ${chunk.columns[k].length} values, expected ${chunk.rows}`);
+        if (chunk.columns[k].length !== chunk.rows)
+          throw new Error(`column ${name} has ${chunk.columns[k].length} values, expected ${chunk.rows}`);
         columns[name] = [...columns[name], ...Array.from(chunk.columns[k], bits)];
       });
       if (chunk.lines.length !== chunk.rows) throw new Error(`lines has ${chunk.lines.length} entries, expected ${chunk.rows}`);

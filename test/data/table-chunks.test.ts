@@ -67,7 +67,9 @@ describe('readTable: a larger file in many pieces', () => {
     };
     const texts: string[][] = [];
     for (let i = 0; i < 5000; i++) {
-      texts.push(Array.from({ length: 3 }, () => ((next() - 0.5) * 10 ** Math.floor(next() * 12 - 4)).toPrecision(1 + Math.floor(next() * 17))));
+      texts.push(
+        Array.from({ length: 3 }, () => ((next() - 0.5) * 10 ** Math.floor(next() * 12 - 4)).toPrecision(1 + Math.floor(next() * 17))),
+      );
     }
     const csv = `a,b,c\n${texts.map((row) => row.join(',')).join('\n')}\n`;
     const length = new TextEncoder().encode(csv).length;

@@ -40,7 +40,11 @@ describe('separator detection from the header line', () => {
     const repo = memoryRepo({ [FILE]: 'x;y,z\n1;2,3\n' });
     const got = await outcome(repo, FILE, { columns: ['x', 'y,z'], format: { separator: ';' } });
     expect(got).toMatchObject({ ok: false, code: 'csv-cell', line: 2, key: 'y,z' });
-    expect(await outcome(repo, FILE, { columns: ['x'], format: { separator: ';' } })).toMatchObject({ ok: true, rows: 1, header: ['x', 'y,z'] });
+    expect(await outcome(repo, FILE, { columns: ['x'], format: { separator: ';' } })).toMatchObject({
+      ok: true,
+      rows: 1,
+      header: ['x', 'y,z'],
+    });
   });
 });
 

@@ -29,6 +29,10 @@ describe('gzip data files (.csv.gz)', () => {
     const bomb = gzipSync(Buffer.from('x\n' + '1\n'.repeat(4_000_000)));
     expect(bomb.length).toBeLessThan(100_000);
     const repo = memoryRepo({ 'b.csv.gz': bomb });
-    expect(await outcome(repo, 'b.csv.gz', { columns: ['x'], maxBytes: 1_000_000 })).toMatchObject({ ok: false, code: 'file-too-large', file: 'b.csv.gz' });
+    expect(await outcome(repo, 'b.csv.gz', { columns: ['x'], maxBytes: 1_000_000 })).toMatchObject({
+      ok: false,
+      code: 'file-too-large',
+      file: 'b.csv.gz',
+    });
   });
 });

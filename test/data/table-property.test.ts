@@ -7,7 +7,6 @@ const FILE = 'data/t.csv';
 /** Bounded runs: about 2 s per property on an idle machine (timeouts below allow for a busy one). */
 const RUNS = 200;
 
-
 /** Like C's printf("%.10g", x): 10 significant digits, trailing zeros dropped, exponent form outside 1e-4 .. 1e10. */
 function g10(x: number): string {
   if (x === 0) return Object.is(x, -0) ? '-0' : '0';
@@ -101,8 +100,39 @@ describe('fast and general paths on random numeric tables', () => {
 
   it('agree on arbitrary text, cut anywhere (same table or same InputError), and throw nothing else', async () => {
     const piece = fc.constantFrom(
-      '0', '1', '7', '.', '-', '+', 'e', 'E', ',', ',', ',', '\n', '\n', '\n', '\r\n', '\r', ' ', '\t',
-      '"', '""', 'x', 'NaN', 'Infinity', '1e999', '1e-400', '5e-324', '0e-999', '\u00e9', '\uFEFF', '\u00a0', '\u2028', '\f', '\0',
+      '0',
+      '1',
+      '7',
+      '.',
+      '-',
+      '+',
+      'e',
+      'E',
+      ',',
+      ',',
+      ',',
+      '\n',
+      '\n',
+      '\n',
+      '\r\n',
+      '\r',
+      ' ',
+      '\t',
+      '"',
+      '""',
+      'x',
+      'NaN',
+      'Infinity',
+      '1e999',
+      '1e-400',
+      '5e-324',
+      '0e-999',
+      '\u00e9',
+      '\uFEFF',
+      '\u00a0',
+      '\u2028',
+      '\f',
+      '\0',
     );
     await fc.assert(
       fc.asyncProperty(

@@ -178,10 +178,32 @@ describe('readTable: errors (same on both paths)', () => {
   });
 
   it('csv-cell for text, NaN, Infinity, inf, hex, empty and overflowing cells in a used column', async () => {
-    const bad = ['abc', 'NaN', 'Infinity', '-Infinity', 'inf', '0x1F', '', '  ', '1e999', '-1e999', '1,5', '1.2.3', '1e', '-', '.', '1_000', '"  "'];
+    const bad = [
+      'abc',
+      'NaN',
+      'Infinity',
+      '-Infinity',
+      'inf',
+      '0x1F',
+      '',
+      '  ',
+      '1e999',
+      '-1e999',
+      '1,5',
+      '1.2.3',
+      '1e',
+      '-',
+      '.',
+      '1_000',
+      '"  "',
+    ];
     for (const cell of bad) {
       const error = failure(await both(`x,y\n1,2\n3,${cell}\n`, ['x', 'y']));
-      expect(error, `cell ${JSON.stringify(cell)}`).toMatchObject({ code: cell === '1,5' ? 'csv-ragged' : 'csv-cell', file: FILE, line: 3 });
+      expect(error, `cell ${JSON.stringify(cell)}`).toMatchObject({
+        code: cell === '1,5' ? 'csv-ragged' : 'csv-cell',
+        file: FILE,
+        line: 3,
+      });
       if (cell !== '1,5') {
         expect(error.key).toBe('y');
         expect(error.message).toContain('"y"');
@@ -190,7 +212,18 @@ describe('readTable: errors (same on both paths)', () => {
   });
 
   it('csv-cell for nonzero cells that underflow to 0 or a subnormal, like an overflow, naming file, line and column', async () => {
-    const tiny = ['1e-400', '-1e-400', '1e-320', '4.9e-324', '-2.5e-315', '123e-330', `0.${'0'.repeat(400)}1`, ' 1e-400 ', '"1e-400"', `${'9'.repeat(30)}e-340`];
+    const tiny = [
+      '1e-400',
+      '-1e-400',
+      '1e-320',
+      '4.9e-324',
+      '-2.5e-315',
+      '123e-330',
+      `0.${'0'.repeat(400)}1`,
+      ' 1e-400 ',
+      '"1e-400"',
+      `${'9'.repeat(30)}e-340`,
+    ];
     for (const cell of tiny) {
       const error = failure(await both(`x,y\n1,2\n3,${cell}\n`, ['x', 'y']));
       expect(error, `cell ${JSON.stringify(cell)}`).toMatchObject({ code: 'csv-cell', file: FILE, line: 3, key: 'y' });
@@ -323,12 +356,15 @@ describe('readTable: header caps', () => {
     return { repo, pulled: () => pulled };
   }
 
-  it.each([false, true])('refuses a header that does not end within 1 MiB before holding more of it (general path: %s)', async (general) => {
-    const { repo, pulled } = endless('x,y,', 'c,');
-    const error = failure(await outcome(repo, FILE, { columns: ['x'], general }));
-    expect(error).toMatchObject({ code: 'csv-header-too-long', file: FILE, line: 1 });
-    expect(pulled()).toBeLessThanOrEqual(1024 * 1024 + 2 * 65_536);
-  });
+  it.each([false, true])(
+    'refuses a header that does not end within 1 MiB before holding more of it (general path: %s)',
+    async (general) => {
+      const { repo, pulled } = endless('x,y,', 'c,');
+      const error = failure(await outcome(repo, FILE, { columns: ['x'], general }));
+      expect(error).toMatchObject({ code: 'csv-header-too-long', file: FILE, line: 1 });
+      expect(pulled()).toBeLessThanOrEqual(1024 * 1024 + 2 * 65_536);
+    },
+  );
 
   it('names CR-only line ends when a long header holds lone carriage returns', async () => {
     const { repo } = endless('x,y\r', '1,2\r');

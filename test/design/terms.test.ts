@@ -7,8 +7,19 @@ import { createDesign } from '../../src/design/design-matrix.js';
 import { InputError } from '../../src/core/errors.js';
 
 const x = new Float64Array([1, 2, 3, 4, 5]);
-const training = new Map([['x', x], ['u', new Float64Array([0, 0, 1, 1, 2])]]);
-const poly = (over: Partial<PolynomialTermSpec> = {}): PolynomialTermSpec => ({ kind: 'polynomial', of: 'x', degree: 3, shift: null, scale: null, line: 4, ...over });
+const training = new Map([
+  ['x', x],
+  ['u', new Float64Array([0, 0, 1, 1, 2])],
+]);
+const poly = (over: Partial<PolynomialTermSpec> = {}): PolynomialTermSpec => ({
+  kind: 'polynomial',
+  of: 'x',
+  degree: 3,
+  shift: null,
+  scale: null,
+  line: 4,
+  ...over,
+});
 
 function column(term: ReturnType<typeof createTerm>, k: number, m = 5): number[] {
   const out = new Float64Array(m * term.columnNames.length);
@@ -24,7 +35,11 @@ describe('polynomial term', () => {
     expect(t.fixed.scale).toBeCloseTo(Math.SQRT2, 15);
     const z = Array.from(x, (v) => (v - 3) / Math.SQRT2);
     expect(column(t, 0)).toEqual(z);
-    expect(column(t, 2).map((v, i) => v - z[i] ** 3).every((d) => Math.abs(d) < 1e-14)).toBe(true);
+    expect(
+      column(t, 2)
+        .map((v, i) => v - z[i] ** 3)
+        .every((d) => Math.abs(d) < 1e-14),
+    ).toBe(true);
     expect(t.columnNames).toEqual(['z(x)', 'z(x)^2', 'z(x)^3']);
   });
 
@@ -71,7 +86,10 @@ describe('rbf term', () => {
 
 describe('design matrix', () => {
   it('puts the intercept first, then each term in order, and fills blocks from an offset', () => {
-    const terms = [createTerm({ kind: 'linear', columns: ['u'], line: 2 }, training, 'm'), createTerm(poly({ degree: 2, shift: 0, scale: 1 }), training, 'm')];
+    const terms = [
+      createTerm({ kind: 'linear', columns: ['u'], line: 2 }, training, 'm'),
+      createTerm(poly({ degree: 2, shift: 0, scale: 1 }), training, 'm'),
+    ];
     const d = createDesign(terms, true);
     expect(d.p).toBe(4);
     expect(d.columnNames).toEqual(['(intercept)', 'u', 'x', 'x^2']);

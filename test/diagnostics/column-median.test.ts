@@ -26,7 +26,10 @@ describe('column median (exact; bracketed by a sample on big columns)', () => {
         const values = make(n);
         const copy = Float64Array.from(values);
         expect(columnMedian(values, n), `n ${n}`).toBe(sortedMedian(values));
-        expect(values.every((v, i) => v === copy[i]), 'the column is not modified').toBe(true);
+        expect(
+          values.every((v, i) => v === copy[i]),
+          'the column is not modified',
+        ).toBe(true);
       }
     });
   }

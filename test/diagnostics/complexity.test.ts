@@ -24,7 +24,13 @@ describe('one-standard-error rule (Hastie, Tibshirani & Friedman, ESL 2nd ed. se
   });
 
   it('ignores non-finite means and treats a NaN standard error as 0', () => {
-    expect(oneStandardErrorRule([{ mean: Number.NaN, se: 0 }, { mean: 2, se: Number.NaN }, { mean: 3, se: 0 }])).toEqual({ best: 1, chosen: 1 });
+    expect(
+      oneStandardErrorRule([
+        { mean: Number.NaN, se: 0 },
+        { mean: 2, se: Number.NaN },
+        { mean: 3, se: 0 },
+      ]),
+    ).toEqual({ best: 1, chosen: 1 });
     expect(oneStandardErrorRule([{ mean: Infinity, se: 0 }])).toEqual({ best: -1, chosen: -1 });
   });
 });

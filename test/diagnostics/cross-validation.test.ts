@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { Matrix, inverse, SingularValueDecomposition } from 'ml-matrix';
-import { complementCoefficients, complementFactors, crossValidate, foldFactors, outOfFoldErrors, outOfFoldErrorsFromFactors, summariseFolds } from '../../src/diagnostics/cross-validation.js';
+import {
+  complementCoefficients,
+  complementFactors,
+  crossValidate,
+  foldFactors,
+  outOfFoldErrors,
+  outOfFoldErrorsFromFactors,
+  summariseFolds,
+} from '../../src/diagnostics/cross-validation.js';
 import { assignFolds } from '../../src/diagnostics/folds.js';
 import { fitDesign } from '../../src/fit/index.js';
 import { fitRows, linearDesign, predictRow, randomRows, relDiff, selectRows } from './helpers.js';
@@ -85,7 +93,11 @@ describe('effective degrees of freedom and GCV against explicit formulas (ml-mat
 });
 
 describe('k-fold cross-validation from merged fold factors', () => {
-  for (const [order, ridge] of [['blocks', 0], ['blocks', 1.3], ['shuffled', 0.2]] as const) {
+  for (const [order, ridge] of [
+    ['blocks', 0],
+    ['blocks', 1.3],
+    ['shuffled', 0.2],
+  ] as const) {
     it(`equals brute-force refits per fold to 1e-10 (${order}, ridge ${ridge}, n = 23, k = 5)`, () => {
       const design = linearDesign(3);
       const rows = randomRows(23, 3, 19);
@@ -99,7 +111,9 @@ describe('k-fold cross-validation from merged fold factors', () => {
       }
       const expected = summariseFolds(sse, folds.sizes);
       expect(relDiff(cv.cvRmse, expected.cvRmse), `cv ${cv.cvRmse} vs brute force ${expected.cvRmse}`).toBeLessThan(1e-10);
-      cv.foldRmse.forEach((r, f) => expect(relDiff(r, Math.sqrt(expected.foldMse[f])), `fold ${f}: ${r} vs ${Math.sqrt(expected.foldMse[f])}`).toBeLessThan(1e-10));
+      cv.foldRmse.forEach((r, f) =>
+        expect(relDiff(r, Math.sqrt(expected.foldMse[f])), `fold ${f}: ${r} vs ${Math.sqrt(expected.foldMse[f])}`).toBeLessThan(1e-10),
+      );
       expect(cv.foldSizes).toEqual([5, 5, 5, 4, 4]);
     });
   }
@@ -130,7 +144,10 @@ describe('k-fold cross-validation from merged fold factors', () => {
   });
 
   // Identity ||y_f - X_f w||^2 = ||qty_f - R_f w||^2 + rss_f (Golub & Van Loan, Matrix Computations, 4th ed., sec. 5.3.3).
-  for (const [n, k, q] of [[40, 5, 3], [9, 4, 3]] as const) {
+  for (const [n, k, q] of [
+    [40, 5, 3],
+    [9, 4, 3],
+  ] as const) {
     it(`squared out-of-fold errors from the fold factors equal a pass over the rows (n = ${n}, k = ${k}, p = ${q + 1}${n / k < q + 1 ? ', folds with fewer rows than columns' : ''})`, () => {
       const design = linearDesign(q);
       const rows = randomRows(n, q, 31);
@@ -140,7 +157,9 @@ describe('k-fold cross-validation from merged fold factors', () => {
       const fromFactors = outOfFoldErrorsFromFactors(perFold, coefficients).sse;
       const fromRows = outOfFoldErrors(design, rows, folds, coefficients).sse;
       fromRows.forEach((bySet, s) =>
-        bySet.forEach((e, f) => expect(relDiff(fromFactors[s][f], e), `setting ${s}, fold ${f}: ${fromFactors[s][f]} vs ${e}`).toBeLessThan(1e-11)),
+        bySet.forEach((e, f) =>
+          expect(relDiff(fromFactors[s][f], e), `setting ${s}, fold ${f}: ${fromFactors[s][f]} vs ${e}`).toBeLessThan(1e-11),
+        ),
       );
     });
   }

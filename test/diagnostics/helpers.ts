@@ -35,7 +35,11 @@ export function fitRows(design: Design, rows: Rows, ridge = 0): FitResult {
 export function selectRows(rows: Rows, keep: (i: number) => boolean): Rows {
   const idx: number[] = [];
   for (let i = 0; i < rows.rows; i++) if (keep(i)) idx.push(i);
-  return { inputs: rows.inputs.map((c) => Float64Array.from(idx, (i) => c[i])), y: Float64Array.from(idx, (i) => rows.y[i]), rows: idx.length };
+  return {
+    inputs: rows.inputs.map((c) => Float64Array.from(idx, (i) => c[i])),
+    y: Float64Array.from(idx, (i) => rows.y[i]),
+    rows: idx.length,
+  };
 }
 
 /** Prediction of one row under coefficients w. */

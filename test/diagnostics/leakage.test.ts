@@ -66,7 +66,10 @@ describe('leakage: hold-out rows equal to a training row', () => {
     const started = performance.now();
     // Hold-out targets 0..n-1; training targets only even numbers: every row matches on its
     // inputs, the even-target half on its target too.
-    const leak = findLeakage(same(n, (i) => 2 * i), same(n, (i) => i));
+    const leak = findLeakage(
+      same(n, (i) => 2 * i),
+      same(n, (i) => i),
+    );
     const ms = performance.now() - started;
     expect(leak.inputMatches).toBe(n);
     expect(leak.fullMatches).toBe(n / 2);

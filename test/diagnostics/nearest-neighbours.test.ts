@@ -26,7 +26,15 @@ describe('nearest neighbours (k-d tree) of the swing segments', () => {
   ] as const) {
     it(`equals the search over all pairs (${label})`, () => {
       const u = seededRandom(77);
-      for (const [s, d, kk] of [[1000, 5, 3], [300, 3, 3], [400, 8, 3], [120, 5, 4], [50, 2, 1], [9, 4, 8], [8, 1, 3]]) {
+      for (const [s, d, kk] of [
+        [1000, 5, 3],
+        [300, 3, 3],
+        [400, 8, 3],
+        [120, 5, 4],
+        [50, 2, 1],
+        [9, 4, 8],
+        [8, 1, 3],
+      ]) {
         const flat = Float64Array.from({ length: s * d }, () => values(u));
         const rows = Int32Array.from({ length: s }, (_, a) => 3 * a + 1);
         expect(Array.from(nearestPairs(flat, s, d, kk, rows)), `s ${s}, d ${d}, k ${kk}`).toEqual(bruteForce(flat, s, d, kk, rows));

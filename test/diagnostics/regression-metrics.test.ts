@@ -38,7 +38,10 @@ describe('column spread', () => {
       [3, 3, 3, 3, 3],
     ];
     const spread = new ColumnSpread(2);
-    for (const [start, m] of [[0, 2], [2, 3]]) {
+    for (const [start, m] of [
+      [0, 2],
+      [2, 3],
+    ]) {
       const block = new Float64Array(m * 2);
       for (let j = 0; j < 2; j++) for (let i = 0; i < m; i++) block[j * m + i] = cols[j][start + i];
       spread.add(block, m);

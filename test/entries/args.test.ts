@@ -48,9 +48,39 @@ describe('fitgate check', () => {
   });
 
   it('reads options in any order around the descriptors, with = or a separate value', () => {
-    const parsed = check(['models/a.model.yml', '--format=json', 'models/b.model.yml', '--out', 'r.json', '--fail-on', 'warn', '--debug', '--jobs', '3', '--shard=2/5', '--base', 'main', '--html', 'site', '--sarif', 'r.sarif', '--junit', 'r.xml']);
+    const parsed = check([
+      'models/a.model.yml',
+      '--format=json',
+      'models/b.model.yml',
+      '--out',
+      'r.json',
+      '--fail-on',
+      'warn',
+      '--debug',
+      '--jobs',
+      '3',
+      '--shard=2/5',
+      '--base',
+      'main',
+      '--html',
+      'site',
+      '--sarif',
+      'r.sarif',
+      '--junit',
+      'r.xml',
+    ]);
     expect(parsed.settings.descriptors).toEqual(['models/a.model.yml', 'models/b.model.yml']);
-    expect(parsed).toMatchObject({ format: 'json', out: 'r.json', debug: true, jobs: 3, shard: { index: 2, count: 5 }, base: 'main', html: 'site', sarif: 'r.sarif', junit: 'r.xml' });
+    expect(parsed).toMatchObject({
+      format: 'json',
+      out: 'r.json',
+      debug: true,
+      jobs: 3,
+      shard: { index: 2, count: 5 },
+      base: 'main',
+      html: 'site',
+      sarif: 'r.sarif',
+      junit: 'r.xml',
+    });
     expect(parsed.settings.failOn).toBe('warn');
   });
 
@@ -68,7 +98,12 @@ describe('fitgate check', () => {
 
   it('resolves the root and descriptors from the working directory, the settings file from the root', () => {
     const parsed = check(['--root', 'sub', '--config', 'conf/fg.yml', 'sub/models/a.model.yml']);
-    expect(parsed.settings).toMatchObject({ root: path.join(cwd, 'sub'), config: 'conf/fg.yml', configExplicit: true, descriptors: ['models/a.model.yml'] });
+    expect(parsed.settings).toMatchObject({
+      root: path.join(cwd, 'sub'),
+      config: 'conf/fg.yml',
+      configExplicit: true,
+      descriptors: ['models/a.model.yml'],
+    });
   });
 
   it('takes the root as its real path, and descriptors written through the link or the real folder', () => {
@@ -78,7 +113,9 @@ describe('fitgate check', () => {
   });
 
   it('refuses a --root that is a link leading out of the working directory, or no folder at all', () => {
-    expect(() => check(['--root', 'up'])).toThrow(expect.objectContaining({ code: 'folder-refused', location: { key: '--root' } }) as Error);
+    expect(() => check(['--root', 'up'])).toThrow(
+      expect.objectContaining({ code: 'folder-refused', location: { key: '--root' } }) as Error,
+    );
     expect(() => check(['--root', 'up'])).toThrow(/leads out of the working directory .* through a symbolic link/);
     expect(() => check(['--root', 'missing'])).toThrow(/does not exist; expected an existing folder/);
     // Named outside the working directory, the root is taken as named (its real path).
@@ -91,7 +128,11 @@ describe('fitgate check', () => {
   });
 
   it('refuses a bad --jobs or --shard as an InputError naming the option', () => {
-    for (const argv of [['--jobs', '0'], ['--jobs', '1.5'], ['--jobs', 'many']]) {
+    for (const argv of [
+      ['--jobs', '0'],
+      ['--jobs', '1.5'],
+      ['--jobs', 'many'],
+    ]) {
       expect(() => check(argv)).toThrow(expect.objectContaining({ code: 'jobs-value', location: { key: '--jobs' } }) as Error);
     }
     expect(() => check(['--shard', '3/2'])).toThrow(expect.objectContaining({ location: { key: '--shard' } }) as Error);
@@ -121,7 +162,10 @@ describe('fitgate merge', () => {
   });
 
   it('refuses the options only check has', () => {
-    expect(printed(['merge', 'a.json', '--root', 'x'])).toEqual({ text: "error: unknown option '--root'\n(run `fitgate merge --help` for the options)\n", status: 2 });
+    expect(printed(['merge', 'a.json', '--root', 'x'])).toEqual({
+      text: "error: unknown option '--root'\n(run `fitgate merge --help` for the options)\n",
+      status: 2,
+    });
   });
 });
 
@@ -132,8 +176,14 @@ describe('mistakes on the command line (status 2, a pointer to the help)', () =>
     [['help', 'frob'], "error: unknown command 'frob'\n(run `fitgate --help` for the commands)\n"],
     [['check', '--bogus'], "error: unknown option '--bogus'\n(run `fitgate check --help` for the options)\n"],
     [['check', '-x'], "error: unknown option '-x'\n(run `fitgate check --help` for the options)\n"],
-    [['check', '--format', 'xml'], "error: option '--format <format>' argument 'xml' is invalid; expected one of text, json, markdown\n(run `fitgate check --help` for the options)\n"],
-    [['check', '--fail-on=never'], "error: option '--fail-on <level>' argument 'never' is invalid; expected one of fail, warn\n(run `fitgate check --help` for the options)\n"],
+    [
+      ['check', '--format', 'xml'],
+      "error: option '--format <format>' argument 'xml' is invalid; expected one of text, json, markdown\n(run `fitgate check --help` for the options)\n",
+    ],
+    [
+      ['check', '--fail-on=never'],
+      "error: option '--fail-on <level>' argument 'never' is invalid; expected one of fail, warn\n(run `fitgate check --help` for the options)\n",
+    ],
     [['check', '--out'], "error: option '--out <file>' argument missing\n(run `fitgate check --help` for the options)\n"],
     [['check', '--debug=yes'], "error: option '--debug' takes no value\n(run `fitgate check --help` for the options)\n"],
     [['merge'], "error: missing required argument 'report'\n(run `fitgate merge --help` for the options)\n"],
@@ -154,7 +204,8 @@ describe('help and version (status 0)', () => {
     expect(printed([])).toEqual({ text: main.text, status: 2 });
     expect(main.text).toMatch(/^Usage: fitgate \[options\] \[command\]\n/);
     for (const argv of [['-h'], ['help']]) expect(printed(argv)).toEqual(main);
-    for (const command of ['check [options] [descriptor...]', 'merge [options] <report...>', 'help [command]']) expect(main.text).toContain(`  ${command}`);
+    for (const command of ['check [options] [descriptor...]', 'merge [options] <report...>', 'help [command]'])
+      expect(main.text).toContain(`  ${command}`);
   });
 
   it('prints a command help that lists every option, wherever --help stands', () => {
@@ -162,7 +213,23 @@ describe('help and version (status 0)', () => {
     expect(help.status).toBe(0);
     expect(printed(['check', 'a.model.yml', '-h', '--bogus'])).toEqual(help);
     expect(printed(['help', 'check'])).toEqual(help);
-    for (const flag of ['--root <dir>', '--config <file>', '--format <format>', '--out <file>', '--fail-on <level>', '--color', '--no-color', '--base <ref>', '--shard <K/N>', '--jobs <n>', '--html <dir>', '--sarif <file>', '--junit <file>', '--debug', '-h, --help']) {
+    for (const flag of [
+      '--root <dir>',
+      '--config <file>',
+      '--format <format>',
+      '--out <file>',
+      '--fail-on <level>',
+      '--color',
+      '--no-color',
+      '--base <ref>',
+      '--shard <K/N>',
+      '--jobs <n>',
+      '--html <dir>',
+      '--sarif <file>',
+      '--junit <file>',
+      '--debug',
+      '-h, --help',
+    ]) {
       expect(help.text).toContain(`  ${flag} `);
     }
     expect(help.text).toContain('one of text, json, markdown; default: text');

@@ -90,7 +90,10 @@ describe('readable by default', () => {
 
   it('names a descriptor error by file, line and column, does not repeat the path in its header, and suggests the nearest key', () => {
     const dir = inRepo();
-    writeFileSync(path.join(dir, 'models/greenhouse.model.yml'), lineDescriptor().replace('  target: humidity_pct', '  taget: humidity_pct'));
+    writeFileSync(
+      path.join(dir, 'models/greenhouse.model.yml'),
+      lineDescriptor().replace('  target: humidity_pct', '  taget: humidity_pct'),
+    );
     const r = run(['check', '--jobs', '1'], dir);
     expect(r.status).toBe(2);
     const lines = r.stdout.split('\n');
@@ -105,7 +108,9 @@ describe('readable by default', () => {
     const dir = inRepo('fit: { ridg: 0.5 }');
     const r = run(['check', '--jobs', '1'], dir);
     expect(r.status).toBe(2);
-    expect(r.stdout).toMatch(/models\/greenhouse\.model\.yml:10:8: `fit\.ridg`: unknown key `ridg` \(did you mean `ridge`\?\); expected one of: /);
+    expect(r.stdout).toMatch(
+      /models\/greenhouse\.model\.yml:10:8: `fit\.ridg`: unknown key `ridg` \(did you mean `ridge`\?\); expected one of: /,
+    );
   });
 });
 

@@ -110,7 +110,9 @@ describe('fitgate refit', () => {
     symlinkSync(path.join(dir, 'real.yml'), link);
     const r = cli.run(['refit', 'models/greenhouse.model.yml'], dir);
     expect(r.status).toBe(2);
-    expect(r.stdout).toMatch(/error: models\/greenhouse\.model\.yml: .*greenhouse\.model\.yml is a symbolic link; fitgate never writes through a link/);
+    expect(r.stdout).toMatch(
+      /error: models\/greenhouse\.model\.yml: .*greenhouse\.model\.yml is a symbolic link; fitgate never writes through a link/,
+    );
     expect(readFileSync(path.join(dir, 'real.yml'), 'utf8')).toBe(COMMENTED);
   });
 });

@@ -1,7 +1,20 @@
 // Writing report files (src/safe-write.ts): never through a link, never out of the boundary
 // through a folder link, and atomically (a failed or killed write leaves the previous file).
 import { spawn } from 'node:child_process';
-import { existsSync, lstatSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, realpathSync, rmSync, statSync, symlinkSync, writeFileSync, writeSync } from 'node:fs';
+import {
+  existsSync,
+  lstatSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  realpathSync,
+  rmSync,
+  statSync,
+  symlinkSync,
+  writeFileSync,
+  writeSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
@@ -85,7 +98,9 @@ describe('writeFileSafely refuses, naming the option, and writes nothing', () =>
     symlinkSync(c.secret, target);
     const error = thrown(() => writeFileSafely(target, 'forged', inside));
     expect(error.code).toBe(OUTPUT_REFUSED);
-    expect(error.describe()).toBe(`\`--out\`: ${target} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`);
+    expect(error.describe()).toBe(
+      `\`--out\`: ${target} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`,
+    );
     expect(readFileSync(c.secret, 'utf8')).toBe('outside, unchanged\n');
     expect(lstatSync(target).isSymbolicLink()).toBe(true);
     expect(temps(c.ws)).toEqual([]);
@@ -100,14 +115,16 @@ describe('writeFileSafely refuses, naming the option, and writes nothing', () =>
 
   it('a folder that is a link leading out of the boundary, before making any folder', () => {
     symlinkSync(c.outside, path.join(c.ws, 'site'));
-    const error = thrown(() => writeFileSafely(path.join(c.ws, 'site', 'deep', 'index.html'), 'x', { option: 'html', within: [c.ws], insideOnly: true }));
+    const error = thrown(() =>
+      writeFileSafely(path.join(c.ws, 'site', 'deep', 'index.html'), 'x', { option: 'html', within: [c.ws], insideOnly: true }),
+    );
     expect(error.code).toBe(OUTPUT_REFUSED);
     expect(error.location.key).toBe('html');
     expect(error.message).toContain('leads out of');
     expect(readdirSync(c.outside)).toEqual(['secret.txt']);
   });
 
-  it('a path through a link to the boundary\'s parent', () => {
+  it("a path through a link to the boundary's parent", () => {
     symlinkSync('..', path.join(c.ws, 'up'));
     const error = thrown(() => writeFileSafely(path.join(c.ws, 'up', 'outside', 'x.txt'), 'x', inside));
     expect(error.message).toContain('leads out of');

@@ -65,7 +65,9 @@ export function maxRelDiff(a: ArrayLike<number>, b: ArrayLike<number>): number {
 
 /** A short description of two vectors for failure messages. */
 export function show(actual: ArrayLike<number>, expected: ArrayLike<number>, tol: number): string {
-  return `actual [${Array.from(actual).map((v) => v.toPrecision(8)).join(', ')}], expected [${Array.from(expected)
+  return `actual [${Array.from(actual)
+    .map((v) => v.toPrecision(8))
+    .join(', ')}], expected [${Array.from(expected)
     .map((v) => v.toPrecision(8))
     .join(', ')}], max rel diff ${maxRelDiff(actual, expected).toExponential(2)}, tolerance ${tol}`;
 }

@@ -125,7 +125,9 @@ describe('least squares: invariants', () => {
 
   it('agrees with the pseudo-inverse solution of ml-matrix', () => {
     const w = fitDesign(X, y, n, p).coefficients;
-    const ref = pseudoInverse(toMatrix(X, n, p)).mmul(Matrix.columnVector(Array.from(y))).getColumn(0);
+    const ref = pseudoInverse(toMatrix(X, n, p))
+      .mmul(Matrix.columnVector(Array.from(y)))
+      .getColumn(0);
     expect(maxRelDiff(w, ref), show(w, ref, 1e-10)).toBeLessThan(1e-10);
   });
 
@@ -157,7 +159,10 @@ describe('least squares: invariants', () => {
         rbf[j * m + i] = Math.exp(-((xs[i] - xs[j]) ** 2) / (2 * 0.5 ** 2));
       }
     }
-    for (const [name, B] of [['polynomial', poly], ['rbf', rbf]] as const) {
+    for (const [name, B] of [
+      ['polynomial', poly],
+      ['rbf', rbf],
+    ] as const) {
       const fit = fitDesign(B, ys, m, m);
       const yhat = predict(B, m, fit.coefficients);
       let ss = 0;
@@ -175,7 +180,9 @@ describe('rank deficiency', () => {
     const p = 5;
     const { X, y } = randomProblem(n, p, 9);
     const fit = fitDesign(X, y, n, p);
-    const ref = pseudoInverse(toMatrix(X, n, p)).mmul(Matrix.columnVector(Array.from(y))).getColumn(0);
+    const ref = pseudoInverse(toMatrix(X, n, p))
+      .mmul(Matrix.columnVector(Array.from(y)))
+      .getColumn(0);
     expect(fit.rank).toBe(3);
     expect(fit.rankDeficient).toBe(true);
     expect(fit.conditionNumber).toBe(Infinity);
@@ -213,7 +220,9 @@ describe('ridge', () => {
     const M = toMatrix(X, n, p);
     const A = M.transpose().mmul(M);
     for (let j = 1; j < p; j++) A.set(j, j, A.get(j, j) + lambda);
-    const ref = inverse(A).mmul(M.transpose().mmul(Matrix.columnVector(Array.from(y)))).getColumn(0);
+    const ref = inverse(A)
+      .mmul(M.transpose().mmul(Matrix.columnVector(Array.from(y))))
+      .getColumn(0);
     expect(maxRelDiff(fit.coefficients, ref), show(fit.coefficients, ref, 1e-11)).toBeLessThan(1e-11);
     expect(fit.ridge).toBe(lambda);
   });
@@ -328,7 +337,9 @@ describe('refinement', () => {
       pass.addRows(sliceRows(X, n, p, from, to), y.subarray(from, to), to - from);
     }
     const streamed = pass.finish();
-    expect(maxRelDiff(streamed.coefficients, whole.coefficients), show(streamed.coefficients, whole.coefficients, 1e-13)).toBeLessThan(1e-13);
+    expect(maxRelDiff(streamed.coefficients, whole.coefficients), show(streamed.coefficients, whole.coefficients, 1e-13)).toBeLessThan(
+      1e-13,
+    );
     expect(Math.abs(streamed.rss - whole.rss) / whole.rss).toBeLessThan(1e-10);
   });
 

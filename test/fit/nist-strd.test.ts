@@ -31,7 +31,9 @@ describe.skipIf(missing !== null)(`NIST StRD linear least squares${skipNote(miss
       const fit = fitDesign(X, y, n, p, { refine });
       const coef = d.estimates.map((c, j) => lre(fit.coefficients[j], c));
       const sd = lre(Math.sqrt(fit.rss / (n - p)), d.residualSd);
-      figures.push(`${refine ? 'refined' : 'plain'}: min LRE coefficients ${Math.min(...coef).toFixed(2)}, residual SD ${sd.toFixed(2)}${fit.refined !== refine ? ` (refinement not applied: scaled condition ${fit.conditionNumberScaled.toPrecision(2)}, ${fit.conditionNumberScaled <= REFINE_MIN_CONDITION ? 'already accurate' : 'too large'})` : ''}`);
+      figures.push(
+        `${refine ? 'refined' : 'plain'}: min LRE coefficients ${Math.min(...coef).toFixed(2)}, residual SD ${sd.toFixed(2)}${fit.refined !== refine ? ` (refinement not applied: scaled condition ${fit.conditionNumberScaled.toPrecision(2)}, ${fit.conditionNumberScaled <= REFINE_MIN_CONDITION ? 'already accurate' : 'too large'})` : ''}`,
+      );
       if (refine) result = { coef, sd };
       expect(fit.rank, `${name} rank`).toBe(p);
     }

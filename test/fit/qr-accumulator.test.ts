@@ -114,7 +114,9 @@ describe('QrAccumulator: invariants', () => {
           xtx += X[a * n + i] * X[b * n + i];
           scale += Math.abs(X[a * n + i] * X[b * n + i]);
         }
-        expect(Math.abs(rtr - xtx), `(R^T R)[${a},${b}] = ${rtr}, (X^T X) = ${xtx}, tol ${50 * n * EPS * scale}`).toBeLessThan(50 * n * EPS * scale);
+        expect(Math.abs(rtr - xtx), `(R^T R)[${a},${b}] = ${rtr}, (X^T X) = ${xtx}, tol ${50 * n * EPS * scale}`).toBeLessThan(
+          50 * n * EPS * scale,
+        );
       }
     }
   });

@@ -7,7 +7,8 @@ import { seededRandom } from '../../src/diagnostics/random.js';
 function factor(n: number, p: number, seed: number, intercept: boolean, duplicate = false): QrAccumulator {
   const u = seededRandom(seed);
   const X = new Float64Array(n * p);
-  for (let j = 0; j < p; j++) for (let i = 0; i < n; i++) X[j * n + i] = intercept && j === 0 ? 1 : duplicate && j === p - 1 ? X[(j - 1) * n + i] : 4 * u() - 2;
+  for (let j = 0; j < p; j++)
+    for (let i = 0; i < n; i++) X[j * n + i] = intercept && j === 0 ? 1 : duplicate && j === p - 1 ? X[(j - 1) * n + i] : 4 * u() - 2;
   const y = Float64Array.from({ length: n }, () => 3 * u() - 1);
   const acc = new QrAccumulator(p);
   acc.addRows(X, y, n);

@@ -9,7 +9,22 @@
 import { appendFileSync, rmSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CASES, type CorpusCase } from './corpus/cases.js';
-import { foreignCommands, NODE_WARNING, prepareBundles, runAction, runCli, runnerCommands, SECRET, STACK_LINE, TOKEN, verdictsFor, withoutMask, writeCase, type CaseDirs, type Run } from './harness.js';
+import {
+  foreignCommands,
+  NODE_WARNING,
+  prepareBundles,
+  runAction,
+  runCli,
+  runnerCommands,
+  SECRET,
+  STACK_LINE,
+  TOKEN,
+  verdictsFor,
+  withoutMask,
+  writeCase,
+  type CaseDirs,
+  type Run,
+} from './harness.js';
 
 const written = new Map<string, CaseDirs>();
 

@@ -13,7 +13,18 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MAX_SERVER_TEXT } from '../../src/report/runner-commands.js';
 import { descriptor, rows, SETTINGS, TRAIN } from './corpus/repo.js';
-import { foreignCommands, prepareBundles, runAction, runCli, runnerCommands, TOKEN, withoutMask, writeCase, type CaseDirs, type Run } from './harness.js';
+import {
+  foreignCommands,
+  prepareBundles,
+  runAction,
+  runCli,
+  runnerCommands,
+  TOKEN,
+  withoutMask,
+  writeCase,
+  type CaseDirs,
+  type Run,
+} from './harness.js';
 
 /** A descriptor file name (the broken descriptor's name is its path) with a command in the middle of the line. */
 const MID_LINE_FILE = 'models/a ##[error]forged-mid-line.model.yml';
@@ -28,10 +39,14 @@ const q = (s: string): string => `"${s.replace(/"/g, '""')}"`;
 /** x, a wobbly second input named CELL_COLUMN, y. */
 function data(n: number, x0: number, step: number): string {
   const lines = [['x', q(CELL_COLUMN), 'y'].join(',')];
-  rows(n, x0, step).trim().split('\n').slice(1).forEach((line, i) => {
-    const [x, y] = line.split(',');
-    lines.push([x, String((i % 4) * 0.3), y].join(','));
-  });
+  rows(n, x0, step)
+    .trim()
+    .split('\n')
+    .slice(1)
+    .forEach((line, i) => {
+      const [x, y] = line.split(',');
+      lines.push([x, String((i % 4) * 0.3), y].join(','));
+    });
   return `${lines.join('\n')}\n`;
 }
 
@@ -73,12 +88,14 @@ describe('no runner command anywhere in a line (item 4)', () => {
   it('every model gets its outcome (exit 2: two descriptors and one cell are broken)', () => {
     expect(json.status, json.stderr).toBe(2);
     const report = JSON.parse(json.stdout) as { models: { name: string; verdict: string; columns: string[] }[] };
-    expect(report.models.map((m) => [m.name, m.verdict]).sort()).toEqual([
-      [BREAK_FILE, 'error'],
-      [MID_LINE_FILE, 'error'],
-      ['cell', 'error'],
-      ['m', 'fail'],
-    ].sort());
+    expect(report.models.map((m) => [m.name, m.verdict]).sort()).toEqual(
+      [
+        [BREAK_FILE, 'error'],
+        [MID_LINE_FILE, 'error'],
+        ['cell', 'error'],
+        ['m', 'fail'],
+      ].sort(),
+    );
     // JSON keeps every name exactly.
     expect(report.models.find((m) => m.name === 'm')?.columns).toContain(CELL_COLUMN);
   });
@@ -120,7 +137,10 @@ describe('no runner command anywhere in a line (item 4)', () => {
 
 describe('text reaching XML, HTML or Markdown cannot break out of its element (item 1)', () => {
   it('JUnit XML: every line is one element, no raw line break, `]]>` and `</td>` as text', () => {
-    for (const xml of [readFileSync(path.join(dirs.base, 'junit.xml'), 'utf8'), readFileSync(path.join(dirs.repo, 'site', 'junit.xml'), 'utf8')]) {
+    for (const xml of [
+      readFileSync(path.join(dirs.base, 'junit.xml'), 'utf8'),
+      readFileSync(path.join(dirs.repo, 'site', 'junit.xml'), 'utf8'),
+    ]) {
       const lines = xml.trimEnd().split('\n');
       for (const line of lines) expect(line, line).toMatch(/^\s*<[/?a-z][^<>]*>(?:[^<>]*<\/[a-z-]+>)?$/);
       expect(xml).not.toContain(']]>');
@@ -132,7 +152,10 @@ describe('text reaching XML, HTML or Markdown cannot break out of its element (i
   });
 
   it('HTML: every <td> closes once, the script stays text', () => {
-    for (const html of [readFileSync(path.join(dirs.base, 'html', 'index.html'), 'utf8'), readFileSync(path.join(dirs.repo, 'site', 'index.html'), 'utf8')]) {
+    for (const html of [
+      readFileSync(path.join(dirs.base, 'html', 'index.html'), 'utf8'),
+      readFileSync(path.join(dirs.repo, 'site', 'index.html'), 'utf8'),
+    ]) {
       expect((html.match(/<td[\s>]/g) ?? []).length).toBe((html.match(/<\/td>/g) ?? []).length);
       expect(html).not.toContain('<script>alert(1)');
       expect(html).toContain('u&lt;/td&gt;&lt;script&gt;alert(1)&lt;/script&gt;');
@@ -159,7 +182,12 @@ describe('text from the REST API server is cut and cleaned before it is printed 
       seen.push(`${req.method} ${req.url} ${req.headers.authorization === `token ${TOKEN}` ? 'with token' : 'without token'}`);
       req.resume();
       // Every answer says the route is deprecated (Octokit prints a warning quoting these headers).
-      const headers = { 'content-type': 'application/json', deprecation: 'true', sunset: 'soon ##[error]forged-by-header', link: '<https://example.invalid/##[error]forged-link>; rel="deprecation"' };
+      const headers = {
+        'content-type': 'application/json',
+        deprecation: 'true',
+        sunset: 'soon ##[error]forged-by-header',
+        link: '<https://example.invalid/##[error]forged-link>; rel="deprecation"',
+      };
       if (req.method === 'GET') {
         res.writeHead(200, headers);
         res.end('[]');
@@ -178,7 +206,14 @@ describe('text from the REST API server is cut and cleaned before it is printed 
 
   it('an error body and deprecation headers reach the log as short clean lines', async () => {
     const event = path.join(dirs.base, 'event.json');
-    writeFileSync(event, JSON.stringify({ number: 7, pull_request: { number: 7, base: { sha: 'a'.repeat(40) }, head: { sha: 'b'.repeat(40) } }, repository: { name: 'models', owner: { login: 'acme' } } }));
+    writeFileSync(
+      event,
+      JSON.stringify({
+        number: 7,
+        pull_request: { number: 7, base: { sha: 'a'.repeat(40) }, head: { sha: 'b'.repeat(40) } },
+        repository: { name: 'models', owner: { login: 'acme' } },
+      }),
+    );
     const run = await runAction(dirs, {}, 60_000, { GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: event, GITHUB_API_URL: url });
     expect(seen.length, run.stdout).toBeGreaterThanOrEqual(2);
     expect(seen.every((s) => s.endsWith('with token'))).toBe(true);
@@ -186,7 +221,9 @@ describe('text from the REST API server is cut and cleaned before it is printed 
     expect(runnerCommands(run.stderr), run.stderr).toEqual([]);
     expect(withoutMask(run.stdout)).not.toContain(TOKEN);
     // The failed comment: the server's message, cut to MAX_SERVER_TEXT characters and on one line.
-    const failed = run.stdout.split('\n').find((l) => l.startsWith('::warning title=fitgate::the pull-request comment could not be written'));
+    const failed = run.stdout
+      .split('\n')
+      .find((l) => l.startsWith('::warning title=fitgate::the pull-request comment could not be written'));
     expect(failed, run.stdout).toBeDefined();
     const quoted = /written: HTTP 500: (.*)\. The result is unchanged\.$/.exec(failed ?? '')?.[1] ?? '';
     expect([...quoted].length).toBeLessThanOrEqual(MAX_SERVER_TEXT);

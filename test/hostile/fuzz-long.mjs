@@ -13,7 +13,13 @@ const env = {
   FITGATE_FUZZ_CLI_RUNS: process.env.FITGATE_FUZZ_CLI_RUNS ?? '24',
   FITGATE_FUZZ_SEED: process.env.FITGATE_FUZZ_SEED ?? String(Math.floor(Math.random() * 2 ** 31)),
 };
-process.stdout.write(`fuzz: ${env.FITGATE_FUZZ_RUNS} in-process and ${env.FITGATE_FUZZ_CLI_RUNS} CLI runs, seed ${env.FITGATE_FUZZ_SEED}\n`);
+process.stdout.write(
+  `fuzz: ${env.FITGATE_FUZZ_RUNS} in-process and ${env.FITGATE_FUZZ_CLI_RUNS} CLI runs, seed ${env.FITGATE_FUZZ_SEED}\n`,
+);
 const vitest = path.join(root, 'node_modules', 'vitest', 'vitest.mjs');
-const run = spawnSync(process.execPath, [vitest, 'run', '--config', 'test/vitest.config.ts', 'test/hostile/fuzz.test.ts'], { cwd: root, env, stdio: 'inherit' });
+const run = spawnSync(process.execPath, [vitest, 'run', '--config', 'test/vitest.config.ts', 'test/hostile/fuzz.test.ts'], {
+  cwd: root,
+  env,
+  stdio: 'inherit',
+});
 process.exitCode = run.status ?? 1;

@@ -53,27 +53,49 @@ const positive = often(fc.double({ min: 0.1, max: 20, noNaN: true }).map(String)
 const term = fc.oneof(
   fc.array(column, { minLength: 0, maxLength: 3 }).map((cs) => `  - linear: [${cs.join(', ')}]`),
   fc.constant('  - linear: [x]'),
-  fc.tuple(column, small, often(fc.constant(null), number, 4), often(fc.constant(null), positive, 4)).map(
-    ([of, degree, shift, scale]) => `  - polynomial: { of: ${of}, degree: ${degree}${shift !== null ? `, shift: ${shift}` : ''}${scale !== null ? `, scale: ${scale}` : ''} }`,
-  ),
-  fc.tuple(
-    column,
-    fc.oneof(
-      fc.constant('at-samples'),
-      fc.array(number, { minLength: 0, maxLength: 5 }).map((xs) => `[${xs.join(', ')}]`),
-      fc.tuple(number, number, small).map(([a, b, c]) => `{ from: ${a}, to: ${b}, count: ${c} }`),
-      fc.tuple(small, small).map(([c, n]) => `{ from: 0, to: ${Number(c) * 10 || 10}, count: ${n} }`),
-      fc.tuple(number, number, number).map(([a, b, c]) => `{ from: ${a}, to: ${b}, step: ${c} }`),
+  fc
+    .tuple(column, small, often(fc.constant(null), number, 4), often(fc.constant(null), positive, 4))
+    .map(
+      ([of, degree, shift, scale]) =>
+        `  - polynomial: { of: ${of}, degree: ${degree}${shift !== null ? `, shift: ${shift}` : ''}${scale !== null ? `, scale: ${scale}` : ''} }`,
     ),
-    positive,
-  ).map(([of, centers, width]) => `  - rbf: { of: ${of}, centers: ${centers}, width: ${width} }`),
+  fc
+    .tuple(
+      column,
+      fc.oneof(
+        fc.constant('at-samples'),
+        fc.array(number, { minLength: 0, maxLength: 5 }).map((xs) => `[${xs.join(', ')}]`),
+        fc.tuple(number, number, small).map(([a, b, c]) => `{ from: ${a}, to: ${b}, count: ${c} }`),
+        fc.tuple(small, small).map(([c, n]) => `{ from: 0, to: ${Number(c) * 10 || 10}, count: ${n} }`),
+        fc.tuple(number, number, number).map(([a, b, c]) => `{ from: ${a}, to: ${b}, step: ${c} }`),
+      ),
+      positive,
+    )
+    .map(([of, centers, width]) => `  - rbf: { of: ${of}, centers: ${centers}, width: ${width} }`),
   fc.constantFrom('  - fourier: { of: x }', '  - {}', '  - linear: x', '  -'),
 );
 
 const oddPath = fc.constantFrom('../data/odd.csv', '../../x.csv', '/etc/passwd', 'missing.csv', '../data', '""', '"a\\0b"', 'C:\\\\x.csv');
 
-const limitValue = fc.oneof(number, fc.constant('off'), fc.tuple(number, number).map(([w, f]) => `{ warn: ${w}, fail: ${f} }`), fc.constant('{ }'));
-const limitKey = fc.constantFrom('gap_ratio', 'params_per_sample', 'coefficient', 'cv_ratio', 'leakage', 'swing', 'swing_beyond', 'condition', 'reproducibility', 'base_change', 'nonsense');
+const limitValue = fc.oneof(
+  number,
+  fc.constant('off'),
+  fc.tuple(number, number).map(([w, f]) => `{ warn: ${w}, fail: ${f} }`),
+  fc.constant('{ }'),
+);
+const limitKey = fc.constantFrom(
+  'gap_ratio',
+  'params_per_sample',
+  'coefficient',
+  'cv_ratio',
+  'leakage',
+  'swing',
+  'swing_beyond',
+  'condition',
+  'reproducibility',
+  'base_change',
+  'nonsense',
+);
 
 const descriptorText = fc
   .record({
@@ -83,12 +105,30 @@ const descriptorText = fc
     holdout: often(fc.constant('../data/holdout.csv'), oddPath),
     target: often(fc.constant('y'), column),
     terms: often(fc.array(term, { minLength: 1, maxLength: 3 }), fc.constant<string[]>([])),
-    fit: often(fc.constant(null), fc.tuple(fc.option(number), fc.option(number), fc.option(fc.constantFrom('true', 'false', 'yes')), fc.option(fc.constantFrom('shuffled', 'blocks', 'random'))), 3),
+    fit: often(
+      fc.constant(null),
+      fc.tuple(
+        fc.option(number),
+        fc.option(number),
+        fc.option(fc.constantFrom('true', 'false', 'yes')),
+        fc.option(fc.constantFrom('shuffled', 'blocks', 'random')),
+      ),
+      3,
+    ),
     limits: often(fc.constant<[string, string][]>([]), fc.array(fc.tuple(limitKey, limitValue), { maxLength: 3 }), 2),
     coefficients: often(fc.constant(null), fc.array(number, { maxLength: 5 }), 5),
   })
   .map((d) => {
-    const lines = [`version: ${d.version}`, `name: ${d.name}`, 'data:', `  train: ${d.train}`, `  holdout: ${d.holdout}`, `  target: ${d.target}`, 'terms:', ...d.terms];
+    const lines = [
+      `version: ${d.version}`,
+      `name: ${d.name}`,
+      'data:',
+      `  train: ${d.train}`,
+      `  holdout: ${d.holdout}`,
+      `  target: ${d.target}`,
+      'terms:',
+      ...d.terms,
+    ];
     if (d.fit) {
       const [ridge, folds, intercept, order] = d.fit;
       lines.push('fit:');
@@ -109,25 +149,34 @@ function mutated(text: fc.Arbitrary<string>): fc.Arbitrary<string> {
     fc.tuple(fc.constant('insert' as const), fc.nat(), fc.stringMatching(/^[[\]{}:,\-&*!|>'"%@`\t\n# \\\r\u0000\ufeffa1.]{1,6}$/)),
     fc.tuple(fc.constant('line' as const), fc.nat(), fc.nat()),
   );
-  return fc.tuple(text, often(fc.constant<Array<['cut', number, number] | ['insert', number, string] | ['line', number, number]>>([]), fc.array(edit, { minLength: 1, maxLength: 3 }), 10)).map(([t, edits]) => {
-    let out = t;
-    for (const e of edits) {
-      if (e[0] === 'cut') {
-        const at = e[1] % (out.length + 1);
-        out = out.slice(0, at) + out.slice(at + e[2]);
-      } else if (e[0] === 'insert') {
-        const at = e[1] % (out.length + 1);
-        out = out.slice(0, at) + e[2] + out.slice(at);
-      } else {
-        const lines = out.split('\n');
-        const a = e[1] % lines.length;
-        const b = e[2] % lines.length;
-        lines.splice(b, 0, lines[a]);
-        out = lines.join('\n');
+  return fc
+    .tuple(
+      text,
+      often(
+        fc.constant<Array<['cut', number, number] | ['insert', number, string] | ['line', number, number]>>([]),
+        fc.array(edit, { minLength: 1, maxLength: 3 }),
+        10,
+      ),
+    )
+    .map(([t, edits]) => {
+      let out = t;
+      for (const e of edits) {
+        if (e[0] === 'cut') {
+          const at = e[1] % (out.length + 1);
+          out = out.slice(0, at) + out.slice(at + e[2]);
+        } else if (e[0] === 'insert') {
+          const at = e[1] % (out.length + 1);
+          out = out.slice(0, at) + e[2] + out.slice(at);
+        } else {
+          const lines = out.split('\n');
+          const a = e[1] % lines.length;
+          const b = e[2] % lines.length;
+          lines.splice(b, 0, lines[a]);
+          out = lines.join('\n');
+        }
       }
-    }
-    return out;
-  });
+      return out;
+    });
 }
 
 const settingsText = fc.option(
@@ -152,17 +201,59 @@ const settingsText = fc.option(
 
 /** CSV text: a valid table of 0 to 40 rows with random damage, or random bytes. */
 const csvBytes: fc.Arbitrary<Uint8Array> = fc.oneof(
-  { weight: 25, arbitrary: fc.tuple(fc.integer({ min: 0, max: 40 }), often(fc.constantFrom('x,y', 'x,y,z', 'y,x'), fc.constantFrom('x,x', '"x",y', '\ufeffx,y', 'x;y', '"a|b",x,y', ''))).chain(([n, header]) =>
-    mutated(fc.constant(rows(n, 0, 1, header).replace(/\n([^\n]+)/g, (_, line: string) => `\n${line}${header.split(',').length > 2 ? ',1' : ''}`))).map((t) => new TextEncoder().encode(t)),
-  ) },
+  {
+    weight: 25,
+    arbitrary: fc
+      .tuple(
+        fc.integer({ min: 0, max: 40 }),
+        often(fc.constantFrom('x,y', 'x,y,z', 'y,x'), fc.constantFrom('x,x', '"x",y', '\ufeffx,y', 'x;y', '"a|b",x,y', '')),
+      )
+      .chain(([n, header]) =>
+        mutated(
+          fc.constant(
+            rows(n, 0, 1, header).replace(/\n([^\n]+)/g, (_, line: string) => `\n${line}${header.split(',').length > 2 ? ',1' : ''}`),
+          ),
+        ).map((t) => new TextEncoder().encode(t)),
+      ),
+  },
   { weight: 1, arbitrary: fc.uint8Array({ maxLength: 300 }) },
-  { weight: 1, arbitrary: fc.array(fc.constantFrom('1', '2.5', 'NaN', 'Infinity', '', '1e999', '"3"', '"', '\r', '\n', ',', 'x', '1e308', '-1e308', '\u0000', '\ufeff', 'é'), { maxLength: 60 }).map((parts) => new TextEncoder().encode(`x,y\n${parts.join('')}`)) },
+  {
+    weight: 1,
+    arbitrary: fc
+      .array(
+        fc.constantFrom(
+          '1',
+          '2.5',
+          'NaN',
+          'Infinity',
+          '',
+          '1e999',
+          '"3"',
+          '"',
+          '\r',
+          '\n',
+          ',',
+          'x',
+          '1e308',
+          '-1e308',
+          '\u0000',
+          '\ufeff',
+          'é',
+        ),
+        { maxLength: 60 },
+      )
+      .map((parts) => new TextEncoder().encode(`x,y\n${parts.join('')}`)),
+  },
 );
 
 /** A whole random repository. */
 const repository = fc.record({
   settings: settingsText,
-  descriptors: often(fc.array(mutated(descriptorText), { minLength: 1, maxLength: 1 }), fc.array(mutated(descriptorText), { minLength: 2, maxLength: 2 }), 3),
+  descriptors: often(
+    fc.array(mutated(descriptorText), { minLength: 1, maxLength: 1 }),
+    fc.array(mutated(descriptorText), { minLength: 2, maxLength: 2 }),
+    3,
+  ),
   train: csvBytes,
   holdout: csvBytes,
   odd: csvBytes,
@@ -199,7 +290,8 @@ async function check(r: Repo): Promise<number> {
     JSON.parse(formatJson(result));
     if (status === 2) {
       const bad = result.models.filter((m) => m.verdict === 'error');
-      if (bad.length === 0 || bad.some((m) => !m.error || m.error.message.trim() === '')) throw new Error('exit status 2 without a message');
+      if (bad.length === 0 || bad.some((m) => !m.error || m.error.message.trim() === ''))
+        throw new Error('exit status 2 without a message');
     }
     const fault = result.models.find((m) => m.error?.code === INTERNAL_ERROR);
     if (fault) throw new Error(`a fault in fitgate on ${fault.descriptor}: ${fault.error?.message}`);
@@ -241,7 +333,9 @@ describe('fuzzing the pipeline in-process', () => {
   it('a valid repository from the same generators passes through every stage (the generators are not all noise)', async () => {
     const status = await check({
       settings: 'version: 1\nmodels: ["models/*.model.yml"]\n',
-      descriptors: ['version: 1\nname: m\ndata:\n  train: ../data/train.csv\n  holdout: ../data/holdout.csv\n  target: y\nterms:\n  - linear: [x]\n'],
+      descriptors: [
+        'version: 1\nname: m\ndata:\n  train: ../data/train.csv\n  holdout: ../data/holdout.csv\n  target: y\nterms:\n  - linear: [x]\n',
+      ],
       train: new TextEncoder().encode(rows(30)),
       holdout: new TextEncoder().encode(rows(10, 0.5, 3)),
       odd: new Uint8Array(),

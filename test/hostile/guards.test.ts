@@ -95,7 +95,12 @@ describe('size caps are checked from the size, before reading', () => {
 
 describe('a run over many models ends with every outcome', () => {
   it('40 models, 4 of them broken in different ways: 36 results and 4 errors, exit status 2', async () => {
-    const files: Record<string, string> = { 'fitgate.yml': SETTINGS, 'data/train.csv': TRAIN, 'data/holdout.csv': HOLDOUT, 'data/bad.csv': TRAIN.replace('\n4,', '\nfour,') };
+    const files: Record<string, string> = {
+      'fitgate.yml': SETTINGS,
+      'data/train.csv': TRAIN,
+      'data/holdout.csv': HOLDOUT,
+      'data/bad.csv': TRAIN.replace('\n4,', '\nfour,'),
+    };
     for (let i = 0; i < 40; i++) files[`models/m${String(i).padStart(2, '0')}.model.yml`] = descriptor({ name: `m${i}` });
     files['models/m05.model.yml'] = 'version: 1\nname: [\n'; // YAML syntax
     files['models/m12.model.yml'] = descriptor({ name: 'm12', terms: '  - polynomial: { of: x, degree: 0 }\n' }); // schema

@@ -9,7 +9,20 @@
  * ncc call as `npm run bundle`, without touching `dist/`).
  */
 import { execFile, execFileSync } from 'node:child_process';
-import { copyFileSync, cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, renameSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
+import {
+  copyFileSync,
+  cpSync,
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  renameSync,
+  rmSync,
+  statSync,
+  symlinkSync,
+  writeFileSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -56,7 +69,15 @@ export interface CaseDirs {
 
 /** Runs git in `cwd` with a fixed author and date. */
 function git(cwd: string, ...args: string[]): string {
-  const env = { ...process.env, GIT_AUTHOR_NAME: 't', GIT_AUTHOR_EMAIL: 't@example.com', GIT_COMMITTER_NAME: 't', GIT_COMMITTER_EMAIL: 't@example.com', GIT_AUTHOR_DATE: '2024-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2024-01-01T00:00:00Z' };
+  const env = {
+    ...process.env,
+    GIT_AUTHOR_NAME: 't',
+    GIT_AUTHOR_EMAIL: 't@example.com',
+    GIT_COMMITTER_NAME: 't',
+    GIT_COMMITTER_EMAIL: 't@example.com',
+    GIT_AUTHOR_DATE: '2024-01-01T00:00:00Z',
+    GIT_COMMITTER_DATE: '2024-01-01T00:00:00Z',
+  };
   return execFileSync('git', args, { cwd, encoding: 'utf8', env }).trim();
 }
 
@@ -139,9 +160,15 @@ function newestMtime(dir: string): number {
 
 function buildPrivately(out: string): void {
   const ncc = path.join(PROJECT, 'node_modules', '@vercel', 'ncc', 'dist', 'ncc', 'cli.js');
-  for (const [src, sub] of [['src/main.ts', 'action'], ['src/cli.ts', 'cli']] as const) {
+  for (const [src, sub] of [
+    ['src/main.ts', 'action'],
+    ['src/cli.ts', 'cli'],
+  ] as const) {
     const dir = path.join(out, sub);
-    execFileSync(process.execPath, [ncc, 'build', src, '-o', dir, '--target', 'es2022', '--quiet', '--no-source-map-register'], { cwd: PROJECT, stdio: 'pipe' });
+    execFileSync(process.execPath, [ncc, 'build', src, '-o', dir, '--target', 'es2022', '--quiet', '--no-source-map-register'], {
+      cwd: PROJECT,
+      stdio: 'pipe',
+    });
     if (existsSync(path.join(dir, 'index.mjs'))) renameSync(path.join(dir, 'index.mjs'), path.join(dir, 'index.js'));
     writeFileSync(path.join(dir, 'package.json'), '{ "type": "module" }\n');
   }
@@ -226,13 +253,24 @@ export interface Run {
   ms: number;
 }
 
-function spawnNode(script: string, args: string[], options: { cwd: string; env: NodeJS.ProcessEnv; timeoutMs: number }): Promise<{ status: number; stdout: string; stderr: string; ms: number }> {
+function spawnNode(
+  script: string,
+  args: string[],
+  options: { cwd: string; env: NodeJS.ProcessEnv; timeoutMs: number },
+): Promise<{ status: number; stdout: string; stderr: string; ms: number }> {
   const start = Date.now();
   return new Promise((resolve) => {
     execFile(
       process.execPath,
       [script, ...args],
-      { cwd: options.cwd, env: options.env, encoding: 'utf8', timeout: options.timeoutMs, maxBuffer: 64 * 1024 * 1024, killSignal: 'SIGKILL' },
+      {
+        cwd: options.cwd,
+        env: options.env,
+        encoding: 'utf8',
+        timeout: options.timeoutMs,
+        maxBuffer: 64 * 1024 * 1024,
+        killSignal: 'SIGKILL',
+      },
       (error, stdout, stderr) => {
         let status = 0;
         if (error) status = typeof error.code === 'number' ? error.code : error.killed ? -9 : -1;
@@ -256,7 +294,13 @@ function cleanEnv(): NodeJS.ProcessEnv {
  * @param command `check` (default) or `merge`
  * @param cwd the folder to run in; default the case's base folder (a CI step runs in the repository)
  */
-export async function runCli(dirs: CaseDirs, args: string[], timeoutMs = 20_000, command: 'check' | 'merge' = 'check', cwd = dirs.base): Promise<Run> {
+export async function runCli(
+  dirs: CaseDirs,
+  args: string[],
+  timeoutMs = 20_000,
+  command: 'check' | 'merge' = 'check',
+  cwd = dirs.base,
+): Promise<Run> {
   const { cli } = prepareBundles();
   const head = command === 'merge' ? ['merge'] : ['check', '--root', dirs.repo, '--jobs', '1'];
   const run = await spawnNode(cli, [...head, ...args.map((a) => fill(a, dirs))], { cwd, env: { ...cleanEnv(), NO_COLOR: '1' }, timeoutMs });
@@ -280,7 +324,12 @@ export function parseOutputs(text: string): Record<string, string> {
  * @param timeoutMs the run is killed after this long; default 20 s
  * @param extraEnv variables set after the others (a pull-request event, `GITHUB_API_URL`); default none
  */
-export async function runAction(dirs: CaseDirs, inputs: Record<string, string> = {}, timeoutMs = 20_000, extraEnv: NodeJS.ProcessEnv = {}): Promise<Run> {
+export async function runAction(
+  dirs: CaseDirs,
+  inputs: Record<string, string> = {},
+  timeoutMs = 20_000,
+  extraEnv: NodeJS.ProcessEnv = {},
+): Promise<Run> {
   const { action } = prepareBundles();
   const files = path.join(dirs.base, 'runner');
   mkdirSync(files, { recursive: true });
@@ -306,7 +355,15 @@ export async function runAction(dirs: CaseDirs, inputs: Record<string, string> =
   };
   if (dirs.baseSha !== undefined) {
     const eventFile = path.join(files, 'event.json');
-    writeFileSync(eventFile, JSON.stringify({ action: 'synchronize', number: 1, pull_request: { number: 1, base: { sha: dirs.baseSha, ref: 'main' } }, repository: { name: 'models', owner: { login: 'acme' } } }));
+    writeFileSync(
+      eventFile,
+      JSON.stringify({
+        action: 'synchronize',
+        number: 1,
+        pull_request: { number: 1, base: { sha: dirs.baseSha, ref: 'main' } },
+        repository: { name: 'models', owner: { login: 'acme' } },
+      }),
+    );
     env.GITHUB_EVENT_NAME = 'pull_request';
     env.GITHUB_EVENT_PATH = eventFile;
     // Nothing may reach the network: the comment is left out (no API of our own here).
@@ -332,7 +389,9 @@ export const STACK_LINE = /^\s+at .+(:\d+:\d+\)?|\(native\)|<anonymous>\)?)$/m;
 export const NODE_WARNING = /\(node:\d+\) \w*Warning:/;
 
 /** Workflow commands fitgate itself writes: a level, optional escaped properties, then `::`, and the one line that masks the token. */
-const OWN_COMMAND = new RegExp(`^::(error|warning|notice|debug)( (file|line|title)=[^:\\r\\n]*(,(file|line|title)=[^:\\r\\n]*)*)?::|^::add-mask::${TOKEN}$`);
+const OWN_COMMAND = new RegExp(
+  `^::(error|warning|notice|debug)( (file|line|title)=[^:\\r\\n]*(,(file|line|title)=[^:\\r\\n]*)*)?::|^::add-mask::${TOKEN}$`,
+);
 
 /**
  * Lines the runner would take as a command (actions/runner, src/Runner.Common/ActionCommand.cs):
@@ -358,5 +417,8 @@ export function foreignCommands(stdout: string): string[] {
 
 /** stdout without the one line that registers the token with the runner's masking (`::add-mask::<token>`). */
 export function withoutMask(stdout: string): string {
-  return stdout.split('\n').filter((line) => line !== `::add-mask::${TOKEN}`).join('\n');
+  return stdout
+    .split('\n')
+    .filter((line) => line !== `::add-mask::${TOKEN}`)
+    .join('\n');
 }

@@ -41,7 +41,12 @@ const FILES = {
     target: yq(PIPE_TARGET),
     terms: `  - linear: [${yq(COMMAND_COLUMN)}, ${yq(HTML_COLUMN)}]\n  - polynomial: { of: ${yq(NEWLINE_COLUMN)}, degree: 2 }\n`,
   }),
-  'models/cell.model.yml': descriptor({ name: 'cell', train: '../::error::bad.csv', target: yq(PIPE_TARGET), terms: `  - linear: [${yq(COMMAND_COLUMN)}]\n` }),
+  'models/cell.model.yml': descriptor({
+    name: 'cell',
+    train: '../::error::bad.csv',
+    target: yq(PIPE_TARGET),
+    terms: `  - linear: [${yq(COMMAND_COLUMN)}]\n`,
+  }),
   [HTML_FILE]: 'version: 1\nname: [broken\n',
   [NEWLINE_FILE]: 'version: 1\nname: [broken\n',
   'data/train.csv': data(30, 0, 1),
@@ -71,7 +76,16 @@ beforeAll(async () => {
     runCli(dirs, ['--format', 'json']),
     runAction(dirs),
   ]);
-  wholeDirs = writeCase({ 'fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\n', 'models/a.model.yml': descriptor(), 'models/b\n::error::dup.model.yml': descriptor(), 'data/train.csv': rows(30), 'data/holdout.csv': rows(10, 0.5, 3) }, 'injection-whole');
+  wholeDirs = writeCase(
+    {
+      'fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\n',
+      'models/a.model.yml': descriptor(),
+      'models/b\n::error::dup.model.yml': descriptor(),
+      'data/train.csv': rows(30),
+      'data/holdout.csv': rows(10, 0.5, 3),
+    },
+    'injection-whole',
+  );
   [whole, wholeAction] = await Promise.all([runCli(wholeDirs, []), runAction(wholeDirs)]);
   html = readFileSync(path.join(dirs.base, 'html', 'index.html'), 'utf8');
   junit = readFileSync(path.join(dirs.base, 'junit.xml'), 'utf8');
@@ -93,7 +107,9 @@ describe('text from the repository is escaped for each medium', () => {
       expect(run.status, run.stderr).toBe(2);
       expect(run.stderr).not.toMatch(STACK_LINE);
     }
-    const report = JSON.parse(json.stdout) as { models: { name: string; verdict: string; columns: string[]; error: { message: string } | null }[] };
+    const report = JSON.parse(json.stdout) as {
+      models: { name: string; verdict: string; columns: string[]; error: { message: string } | null }[];
+    };
     const byName = new Map(report.models.map((m) => [m.name, m]));
     expect([...byName.keys()].sort()).toEqual(['cell', 'm', HTML_FILE, NEWLINE_FILE].sort());
     expect(byName.get('m')?.verdict).toBe('fail');

@@ -14,7 +14,19 @@ import { runPipeline } from '../../src/run/pipeline.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import { defaultSettings } from '../../src/run/settings.js';
 import { descriptor, HOLDOUT, rows, SETTINGS, TRAIN } from './corpus/repo.js';
-import { prepareBundles, runAction, runCli, SECRET, STACK_LINE, TOKEN, withoutMask, writeCase, type CaseDirs, type FileSpec, type Run } from './harness.js';
+import {
+  prepareBundles,
+  runAction,
+  runCli,
+  SECRET,
+  STACK_LINE,
+  TOKEN,
+  withoutMask,
+  writeCase,
+  type CaseDirs,
+  type FileSpec,
+  type Run,
+} from './harness.js';
 
 /** Every way a descriptor's data path can point outside, as models of one repository. */
 function routes(file: string): Record<string, FileSpec> {
@@ -68,7 +80,11 @@ describe('data paths that point outside: every route refused, nothing read', () 
   beforeAll(async () => {
     prepareBundles();
     dirs = write(routes('secret.csv'), 'leak-routes');
-    [json, markdown, action] = await Promise.all([runCli(dirs, ['--format', 'json']), runCli(dirs, ['--format', 'markdown']), runAction(dirs)]);
+    [json, markdown, action] = await Promise.all([
+      runCli(dirs, ['--format', 'json']),
+      runCli(dirs, ['--format', 'markdown']),
+      runAction(dirs),
+    ]);
   }, 120_000);
 
   it('each model is an error `path-outside` in the JSON report', () => {
@@ -95,7 +111,15 @@ describe('named pipes outside: a run that opened one would hang', () => {
 
   it('the settings file as a link to a pipe, --config at a pipe, a descriptor argument linking to a pipe', async () => {
     const linked = write({ ...routes('trap.csv'), 'fitgate.yml': { link: '$OUTSIDE/trap.yml' } }, 'leak-fifo-settings', true);
-    const plain = write({ 'fitgate.yml': SETTINGS, 'models/t.model.yml': { link: '$OUTSIDE/trap.model.yml' }, 'models/u.model.yml': { link: '../../outside/trap.model.yml' } }, 'leak-fifo-args', true);
+    const plain = write(
+      {
+        'fitgate.yml': SETTINGS,
+        'models/t.model.yml': { link: '$OUTSIDE/trap.model.yml' },
+        'models/u.model.yml': { link: '../../outside/trap.model.yml' },
+      },
+      'leak-fifo-args',
+      true,
+    );
     const runs = await Promise.all([
       runCli(linked, [], 15_000),
       runCli(plain, ['--config', '../outside/trap.yml'], 15_000),
@@ -122,8 +146,18 @@ describe('messages quote at most the offending cell or line', () => {
   const settings = defaultSettings('/repo');
 
   it('a bad CSV cell: the message shows the cell, not the other cells or lines', async () => {
-    const train = rows(30, 0, 1, 'x,y,note').replace(/\n(\d+),([^\n]+)/g, (_, x: string, y: string) => `\n${x},${y},${MARK}`).replace('\n4,', '\nfour,');
-    const result = await runPipeline(settings, createMemoryRepository({ 'fitgate.yml': SETTINGS, 'models/m.model.yml': descriptor(), 'data/train.csv': train, 'data/holdout.csv': HOLDOUT }));
+    const train = rows(30, 0, 1, 'x,y,note')
+      .replace(/\n(\d+),([^\n]+)/g, (_, x: string, y: string) => `\n${x},${y},${MARK}`)
+      .replace('\n4,', '\nfour,');
+    const result = await runPipeline(
+      settings,
+      createMemoryRepository({
+        'fitgate.yml': SETTINGS,
+        'models/m.model.yml': descriptor(),
+        'data/train.csv': train,
+        'data/holdout.csv': HOLDOUT,
+      }),
+    );
     const error = result.models[0].error;
     expect(error?.message).toContain('"four"');
     expect(JSON.stringify(result)).not.toContain(MARK);
@@ -131,14 +165,25 @@ describe('messages quote at most the offending cell or line', () => {
 
   it('a YAML error: the message names the line, not the file text around it', async () => {
     const text = `# ${MARK}\n${descriptor()}limits: { gap_ratio: [1, \n`;
-    const result = await runPipeline(settings, createMemoryRepository({ 'fitgate.yml': SETTINGS, 'models/m.model.yml': text, 'data/train.csv': TRAIN, 'data/holdout.csv': HOLDOUT }));
+    const result = await runPipeline(
+      settings,
+      createMemoryRepository({ 'fitgate.yml': SETTINGS, 'models/m.model.yml': text, 'data/train.csv': TRAIN, 'data/holdout.csv': HOLDOUT }),
+    );
     expect(result.models[0].error?.code).toBe('yaml-syntax');
     expect(JSON.stringify(result)).not.toContain(MARK);
   });
 
   it('a schema error quotes the bad value cut short, not the whole document', async () => {
     const long = `${MARK}${'z'.repeat(5000)}`;
-    const result = await runPipeline(settings, createMemoryRepository({ 'fitgate.yml': SETTINGS, 'models/m.model.yml': descriptor({ extra: `fit:\n  ridge: "${long}"\n# ${MARK}-2\n` }), 'data/train.csv': TRAIN, 'data/holdout.csv': HOLDOUT }));
+    const result = await runPipeline(
+      settings,
+      createMemoryRepository({
+        'fitgate.yml': SETTINGS,
+        'models/m.model.yml': descriptor({ extra: `fit:\n  ridge: "${long}"\n# ${MARK}-2\n` }),
+        'data/train.csv': TRAIN,
+        'data/holdout.csv': HOLDOUT,
+      }),
+    );
     const message = result.models[0].error?.message ?? '';
     expect(message).toContain('fit.ridge');
     expect(message.length).toBeLessThan(300);

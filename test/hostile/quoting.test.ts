@@ -43,7 +43,15 @@ const base = { 'fitgate.yml': SETTINGS, 'models/m.model.yml': descriptor(), 'dat
 const CASES: Array<[string, Record<string, string>]> = [
   ['a target column the files lack', { ...base, 'models/m.model.yml': descriptor({ target: LONG }) }],
   ['an input column the files lack', { ...base, 'models/m.model.yml': descriptor({ terms: `  - linear: [${LONG}]\n` }) }],
-  ['a long column name that is used (check messages name columns)', { ...base, 'data/train.csv': TRAIN.replace('x,y', `${LONG},y`), 'data/holdout.csv': HOLDOUT.replace('x,y', `${LONG},y`), 'models/m.model.yml': descriptor({ terms: `  - polynomial: { of: ${LONG}, degree: 3 }\n` }) }],
+  [
+    'a long column name that is used (check messages name columns)',
+    {
+      ...base,
+      'data/train.csv': TRAIN.replace('x,y', `${LONG},y`),
+      'data/holdout.csv': HOLDOUT.replace('x,y', `${LONG},y`),
+      'models/m.model.yml': descriptor({ terms: `  - polynomial: { of: ${LONG}, degree: 3 }\n` }),
+    },
+  ],
   ['a header name given twice', { ...base, 'data/train.csv': rows(30, 0, 1, `${LONG},${LONG}`) }],
   ['a data path that names no file', { ...base, 'models/m.model.yml': descriptor({ train: `../data/${LONG}.csv` }) }],
   ['a data path that leaves the repository', { ...base, 'models/m.model.yml': descriptor({ train: `../../${LONG}.csv` }) }],
@@ -53,7 +61,10 @@ const CASES: Array<[string, Record<string, string>]> = [
   ['a pattern with a .. segment', { ...base, 'fitgate.yml': `version: 1\nmodels: ["${LONG.slice(0, 900)}/../../x.yml"]\n` }],
   // YAML keys are at most 1024 characters.
   ['an unknown descriptor key', { ...base, 'models/m.model.yml': `${descriptor()}${LONG.slice(0, 1000)}: 1\n` }],
-  ['a key given twice', { ...base, 'models/m.model.yml': `${descriptor()}limits:\n  ${LONG.slice(0, 1000)}: 1\n  ${LONG.slice(0, 1000)}: 2\n` }],
+  [
+    'a key given twice',
+    { ...base, 'models/m.model.yml': `${descriptor()}limits:\n  ${LONG.slice(0, 1000)}: 1\n  ${LONG.slice(0, 1000)}: 2\n` },
+  ],
   ['a wrong value', { ...base, 'models/m.model.yml': descriptor({ terms: `  - polynomial: { of: x, degree: ${LONG} }\n` }) }],
   ['a text cell', { ...base, 'data/train.csv': TRAIN.replace('\n3,', `\n${LONG},`) }],
   ['a semicolon-separated header', { ...base, 'data/train.csv': `${LONG};y\n1;2\n` }],

@@ -9,7 +9,18 @@ import { existsSync, lstatSync, mkdirSync, readdirSync, readFileSync, rmSync, sy
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { repo } from './corpus/repo.js';
-import { foreignCommands, prepareBundles, runAction, runCli, runnerCommands, SECRET, writeCase, type CaseDirs, type FileSpec, type Run } from './harness.js';
+import {
+  foreignCommands,
+  prepareBundles,
+  runAction,
+  runCli,
+  runnerCommands,
+  SECRET,
+  writeCase,
+  type CaseDirs,
+  type FileSpec,
+  type Run,
+} from './harness.js';
 
 const written: CaseDirs[] = [];
 function write(files: Record<string, FileSpec>, label: string): CaseDirs {
@@ -39,12 +50,23 @@ describe('a report target that is a link, or a report folder leading out, is ref
   // One repository with every trap: `out.txt` and `junit.xml` link to a file outside, `site` is a
   // link to the outside folder, `up` is a link to the repository's parent.
   const traps = (): Record<string, FileSpec> =>
-    repo({ 'out.txt': { link: '$OUTSIDE/plain.txt' }, 'junit.xml': { link: '$OUTSIDE/plain.txt' }, site: { link: '$OUTSIDE' }, up: { link: '..' } });
+    repo({
+      'out.txt': { link: '$OUTSIDE/plain.txt' },
+      'junit.xml': { link: '$OUTSIDE/plain.txt' },
+      site: { link: '$OUTSIDE' },
+      up: { link: '..' },
+    });
 
   it('CLI, run in the repository: --out, --html, --sarif and --junit each refused by name, exit 2, nothing written outside', async () => {
     const dirs = write(traps(), 'writes-cli');
     const before = outsideState(dirs);
-    const run = await runCli(dirs, ['--out', 'out.txt', '--html', 'site', '--sarif', 'up/outside/x.sarif', '--junit', 'junit.xml'], 30_000, 'check', dirs.repo);
+    const run = await runCli(
+      dirs,
+      ['--out', 'out.txt', '--html', 'site', '--sarif', 'up/outside/x.sarif', '--junit', 'junit.xml'],
+      30_000,
+      'check',
+      dirs.repo,
+    );
     expect(run.status, show(run)).toBe(2);
     const lines = run.stderr.trim().split('\n');
     expect(lines, show(run)).toEqual([
@@ -54,12 +76,19 @@ describe('a report target that is a link, or a report folder leading out, is ref
       `fitgate: \`--junit\`: ${path.join(dirs.repo, 'junit.xml')} is a symbolic link; fitgate never writes through a link (remove it, or name another file)`,
     ]);
     expect(outsideState(dirs)).toEqual(before);
-    for (const link of ['out.txt', 'junit.xml', 'site', 'up']) expect(lstatSync(path.join(dirs.repo, link)).isSymbolicLink(), link).toBe(true);
+    for (const link of ['out.txt', 'junit.xml', 'site', 'up'])
+      expect(lstatSync(path.join(dirs.repo, link)).isSymbolicLink(), link).toBe(true);
   });
 
   it('CLI: a refused report does not stop the others (the SARIF file next to a refused JUnit link is written)', async () => {
     const dirs = write(traps(), 'writes-cli-others');
-    const run = await runCli(dirs, ['--sarif', 'reports/x.sarif', '--junit', 'junit.xml', '--html', 'reports/html'], 30_000, 'check', dirs.repo);
+    const run = await runCli(
+      dirs,
+      ['--sarif', 'reports/x.sarif', '--junit', 'junit.xml', '--html', 'reports/html'],
+      30_000,
+      'check',
+      dirs.repo,
+    );
     expect(run.status, show(run)).toBe(2);
     expect(run.stderr).toContain('`--junit`');
     expect(JSON.parse(readFileSync(path.join(dirs.repo, 'reports/x.sarif'), 'utf8')).version).toBe('2.1.0');
@@ -74,7 +103,10 @@ describe('a report target that is a link, or a report folder leading out, is ref
     expect(run.status, show(run)).toBe(1);
     expect(run.outputs.verdict).toBe('error');
     const refused = run.stdout.split('\n').filter((l) => l.startsWith('::error title=fitgate::a report file was refused'));
-    expect(refused.map((l) => /`(\w+)`/.exec(l)?.[1]), show(run)).toEqual(['html', 'sarif', 'junit']);
+    expect(
+      refused.map((l) => /`(\w+)`/.exec(l)?.[1]),
+      show(run),
+    ).toEqual(['html', 'sarif', 'junit']);
     expect(refused[0]).toContain('site leads out of');
     expect(refused[2]).toContain('junit.xml is a symbolic link');
     expect(run.stdout).toContain('::error::fitgate refused to write 3 report files (see the errors above).');
@@ -116,7 +148,9 @@ describe('the repository root is its real path, inside the workspace (item 2)', 
     const run = await runAction(dirs, { 'working-directory': 'ml' });
     expect(run.status, show(run)).toBe(1);
     expect(run.outputs.verdict).toBe('error');
-    expect(run.stdout).toContain(`::error::fitgate could not run: \`working-directory\`: ${path.join(dirs.repo, 'ml')} leads out of the workspace ${dirs.repo} through a symbolic link; expected a folder whose real path is inside it`);
+    expect(run.stdout).toContain(
+      `::error::fitgate could not run: \`working-directory\`: ${path.join(dirs.repo, 'ml')} leads out of the workspace ${dirs.repo} through a symbolic link; expected a folder whose real path is inside it`,
+    );
     expect(run.stdout).not.toContain(SECRET);
     expect(run.report).toBe('');
   });
@@ -125,12 +159,21 @@ describe('the repository root is its real path, inside the workspace (item 2)', 
     const dirs = write(repo({ ml: { link: '..' } }), 'root-cli');
     const run = await runCli(dirs, ['--root', 'ml'], 20_000, 'check', dirs.repo);
     expect(run.status, show(run)).toBe(2);
-    expect(run.stderr).toBe(`fitgate: \`--root\`: ${path.join(dirs.repo, 'ml')} leads out of the working directory ${dirs.repo} through a symbolic link; expected a folder whose real path is inside it\n`);
+    expect(run.stderr).toBe(
+      `fitgate: \`--root\`: ${path.join(dirs.repo, 'ml')} leads out of the working directory ${dirs.repo} through a symbolic link; expected a folder whose real path is inside it\n`,
+    );
     expect(run.stdout).toBe('');
   });
 
   it('a root reached through a link that stays inside is checked at its real path (annotations point at the real files)', async () => {
-    const dirs = write({ 'real/fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\nlimits:\n  params_per_sample: { warn: 0.01, fail: 0.5 }\n', ...prefixed('real/', repo()), ml: { link: 'real' } }, 'root-inside');
+    const dirs = write(
+      {
+        'real/fitgate.yml': 'version: 1\nmodels: ["models/*.model.yml"]\nlimits:\n  params_per_sample: { warn: 0.01, fail: 0.5 }\n',
+        ...prefixed('real/', repo()),
+        ml: { link: 'real' },
+      },
+      'root-inside',
+    );
     const action = await runAction(dirs, { 'working-directory': 'ml' });
     expect(action.status, show(action)).toBe(0);
     expect(action.stdout).toMatch(/^::warning file=real\/models\/m\.model\.yml,/m);
@@ -142,5 +185,9 @@ describe('the repository root is its real path, inside the workspace (item 2)', 
 
 /** The files of a repository moved under `prefix`. */
 function prefixed(prefix: string, files: Record<string, FileSpec>): Record<string, FileSpec> {
-  return Object.fromEntries(Object.entries(files).filter(([name]) => name !== 'fitgate.yml').map(([name, spec]) => [`${prefix}${name}`, spec]));
+  return Object.fromEntries(
+    Object.entries(files)
+      .filter(([name]) => name !== 'fitgate.yml')
+      .map(([name, spec]) => [`${prefix}${name}`, spec]),
+  );
 }

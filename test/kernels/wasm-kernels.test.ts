@@ -97,7 +97,12 @@ function expectSameBits(label: string, a: ArrayLike<number>, b: ArrayLike<number
 }
 
 /** A column-major m x p block: column c scaled by scales[c] (1 by default), some columns zero. */
-function block(m: number, p: number, seed: number, options: { scales?: number[]; zeroColumns?: number[] } = {}): { X: Float64Array; y: Float64Array } {
+function block(
+  m: number,
+  p: number,
+  seed: number,
+  options: { scales?: number[]; zeroColumns?: number[] } = {},
+): { X: Float64Array; y: Float64Array } {
   const rnd = seeded(seed);
   const X = new Float64Array(m * p);
   for (let j = 0; j < p; j++) {
@@ -174,7 +179,11 @@ describe('the QR fold', () => {
         }
         return { message, R: Float64Array.from(acc.R), qty: Float64Array.from(acc.qty), rss: acc.rss, rows: acc.rows };
       });
-      expect(js.message).toBe(column >= 0 ? 'RangeError: addRows: X at row 5000, column 3 must be a finite number, got Infinity' : 'RangeError: addRows: y at row 5500 must be a finite number, got NaN');
+      expect(js.message).toBe(
+        column >= 0
+          ? 'RangeError: addRows: X at row 5000, column 3 must be a finite number, got Infinity'
+          : 'RangeError: addRows: y at row 5500 must be a finite number, got NaN',
+      );
       expect(wasm.message).toBe(js.message);
       expectSameBits('R', js.R, wasm.R);
       expectSameBits('Q^T y', js.qty, wasm.qty);
@@ -260,10 +269,26 @@ describe('predictions and out-of-fold errors', () => {
       const rows = randomRows(5000, 4, 5);
       const fit = fitRows(design, rows, 0.3);
       const folds = assignFolds(rows.rows, 7, order, 9);
-      const coefficients = [0, 1].map((s) => Array.from({ length: 7 }, (_, f) => Float64Array.from({ length: design.p }, (_, j) => (j === 2 && f === s ? 0 : (j + 1) * (f + 1) * 0.1))));
-      const { js, wasm } = both(() => ({ sse: outOfFoldErrors(design, rows, folds, coefficients).sse, cv: crossValidate(design, rows, fit, folds) }));
+      const coefficients = [0, 1].map((s) =>
+        Array.from({ length: 7 }, (_, f) =>
+          Float64Array.from({ length: design.p }, (_, j) => (j === 2 && f === s ? 0 : (j + 1) * (f + 1) * 0.1)),
+        ),
+      );
+      const { js, wasm } = both(() => ({
+        sse: outOfFoldErrors(design, rows, folds, coefficients).sse,
+        cv: crossValidate(design, rows, fit, folds),
+      }));
       for (let s = 0; s < 2; s++) expectSameBits(`sse of setting ${s}`, js.sse[s], wasm.sse[s]);
-      const figures = (cv: typeof js.cv): number[] => [cv.cvRmse, cv.loocvRmse, cv.press, cv.gcv, cv.leverageSum, cv.maxLeverage, cv.rss, ...cv.foldRmse];
+      const figures = (cv: typeof js.cv): number[] => [
+        cv.cvRmse,
+        cv.loocvRmse,
+        cv.press,
+        cv.gcv,
+        cv.leverageSum,
+        cv.maxLeverage,
+        cv.rss,
+        ...cv.foldRmse,
+      ];
       expectSameBits('cross-validation figures', figures(js.cv), figures(wasm.cv));
     });
   }
@@ -290,7 +315,8 @@ describe('polynomial columns and the design range check', () => {
 
   it('a design value beyond the range: the same error, naming the column, the line of the row and the term', async () => {
     const files = {
-      'models/m.model.yml': 'version: 1\nname: m\ndata:\n  train: ../data/t.csv\n  holdout: ../data/h.csv\n  target: y\nterms:\n  - polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }\n',
+      'models/m.model.yml':
+        'version: 1\nname: m\ndata:\n  train: ../data/t.csv\n  holdout: ../data/h.csv\n  target: y\nterms:\n  - polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }\n',
       'data/t.csv': `x,y\n${Array.from({ length: 30 }, (_, i) => `${i === 17 ? 1e30 : (i + 1) / 7},${i % 5}`).join('\n')}\n`,
       'data/h.csv': 'x,y\n0.5,1\n',
     };
@@ -301,7 +327,9 @@ describe('polynomial columns and the design range check', () => {
       return result.error;
     });
     expect(js?.code).toBe('design-overflow');
-    expect(js?.message).toMatch(/^`terms`: design column `z\(x\)\^2` is 1\.0000000000000001e\+180 at training row on line 19 of data\/t\.csv; expected values within ±1e\+140/);
+    expect(js?.message).toMatch(
+      /^`terms`: design column `z\(x\)\^2` is 1\.0000000000000001e\+180 at training row on line 19 of data\/t\.csv; expected values within ±1e\+140/,
+    );
     expect(wasm).toEqual(js);
   });
 });
@@ -339,16 +367,18 @@ const CASES: KernelCase[] = [
       ['zero columns', 120, 7, { zeroColumns: [2, 5] }],
       ['tiny and huge columns', 200, 6, { scales: [1, 1e-170, 1e170, 1e-300, 1, 1e155] }],
     ] as const
-  ).map(([label, m, p, options]): KernelCase => ({
-    label: `foldRows, ${label}`,
-    run(js) {
-      const R = triangle(p, 3);
-      const qty = vector(p, 4);
-      const { X, y } = block(m, p, 11, options as Parameters<typeof block>[3]);
-      const out = (js ? foldRowsJs : foldRows)(R, qty, 0.5, X, y, m, p, 97);
-      return [R, qty, [out.rss], where(out.bad)];
-    },
-  })),
+  ).map(
+    ([label, m, p, options]): KernelCase => ({
+      label: `foldRows, ${label}`,
+      run(js) {
+        const R = triangle(p, 3);
+        const qty = vector(p, 4);
+        const { X, y } = block(m, p, 11, options as Parameters<typeof block>[3]);
+        const out = (js ? foldRowsJs : foldRows)(R, qty, 0.5, X, y, m, p, 97);
+        return [R, qty, [out.rss], where(out.bad)];
+      },
+    }),
+  ),
   {
     label: 'foldRows, a value that is not finite in the third piece',
     run(js) {
@@ -486,7 +516,11 @@ describe('when WebAssembly memory cannot be reserved', () => {
 });
 
 /** Runs Node with `args` under a virtual-memory limit (KiB) set by bash's `ulimit -v`. */
-function underLimit(kib: number, args: string[], env: NodeJS.ProcessEnv = {}): { status: number | null; stdout: string; stderr: string; error?: Error } {
+function underLimit(
+  kib: number,
+  args: string[],
+  env: NodeJS.ProcessEnv = {},
+): { status: number | null; stdout: string; stderr: string; error?: Error } {
   return spawnSync('bash', ['-c', `ulimit -v ${kib} && exec "$@"`, 'bash', process.execPath, ...args], {
     encoding: 'utf8',
     maxBuffer: 64 * 1024 * 1024,
@@ -494,7 +528,8 @@ function underLimit(kib: number, args: string[], env: NodeJS.ProcessEnv = {}): {
   });
 }
 
-const PROBE = "try { new WebAssembly.Memory({ initial: 1 }); console.log('reserved'); } catch (e) { console.log(e instanceof RangeError ? 'refused' : String(e)); }";
+const PROBE =
+  "try { new WebAssembly.Memory({ initial: 1 }); console.log('reserved'); } catch (e) { console.log(e instanceof RangeError ? 'refused' : String(e)); }";
 
 /** A virtual-memory limit (KiB) under which Node runs but WebAssembly memory is refused, or why there is none. */
 function findLimit(): { kib: number } | { why: string } {
@@ -513,7 +548,16 @@ const noLimit = 'why' in limit ? skipOrThrow([`the ulimit -v test cannot run: ${
 describe('whole runs in child processes (src/ transpiled to JavaScript)', () => {
   let lib: { dir: string; remove: () => void } | undefined;
   const root = fileURLToPath(new URL('../..', import.meta.url));
-  const args = (format: string, jobs: string): string[] => [path.join(lib!.dir, 'cli.js'), 'check', '--root', path.join(root, 'examples'), '--format', format, '--jobs', jobs];
+  const args = (format: string, jobs: string): string[] => [
+    path.join(lib!.dir, 'cli.js'),
+    'check',
+    '--root',
+    path.join(root, 'examples'),
+    '--format',
+    format,
+    '--jobs',
+    jobs,
+  ];
 
   beforeAll(() => {
     lib = transpileSources();
@@ -521,7 +565,8 @@ describe('whole runs in child processes (src/ transpiled to JavaScript)', () => 
   afterAll(() => lib?.remove());
 
   it('gives the same report where WebAssembly is not available (node --jitless) as with it', () => {
-    const run = (flags: string[]) => spawnSync(process.execPath, [...flags, ...args('json', '1')], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+    const run = (flags: string[]) =>
+      spawnSync(process.execPath, [...flags, ...args('json', '1')], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
     const plain = run([]);
     const jitless = run(['--jitless']);
     expect(plain.status, plain.stderr).toBe(1);

@@ -12,7 +12,8 @@ import { expectInputError } from '../config/helpers.js';
 let base: string;
 let root: string;
 
-const descriptor = (train: string) => `version: 1\nname: m\ndata:\n  train: ${train}\n  holdout: h.csv\n  target: y\nterms: [ { linear: [x] } ]\n`;
+const descriptor = (train: string) =>
+  `version: 1\nname: m\ndata:\n  train: ${train}\n  holdout: h.csv\n  target: y\nterms: [ { linear: [x] } ]\n`;
 
 beforeAll(() => {
   base = mkdtempSync(join(tmpdir(), 'fitgate-fs-'));
@@ -82,21 +83,41 @@ describe('createFsRepository: reading', () => {
     const repo = createFsRepository(root);
     await expectInputError(() => repo.read('models/none.csv'), { code: 'file-missing', file: 'models/none.csv' });
     await expectInputError(() => repo.size('models'), { code: 'not-a-file', file: 'models', message: /is a folder/ });
-    await expectInputError(() => repo.read('models/dangling.csv'), { code: 'not-a-file', file: 'models/dangling.csv', message: /symbolic link that leads to nothing/ });
+    await expectInputError(() => repo.read('models/dangling.csv'), {
+      code: 'not-a-file',
+      file: 'models/dangling.csv',
+      message: /symbolic link that leads to nothing/,
+    });
     await expectInputError(() => repo.read('models/pipe.csv'), { code: 'not-a-file', file: 'models/pipe.csv', message: /FIFO/ });
-    expect(await Promise.all(['models/h.csv', 'models/none.csv', 'models', 'models/dangling.csv', 'models/pipe.csv', 'models/inside-link.csv'].map((p) => repo.entryKind(p)))).toEqual(['file', 'missing', 'folder', 'broken-link', 'special', 'file']);
+    expect(
+      await Promise.all(
+        ['models/h.csv', 'models/none.csv', 'models', 'models/dangling.csv', 'models/pipe.csv', 'models/inside-link.csv'].map((p) =>
+          repo.entryKind(p),
+        ),
+      ),
+    ).toEqual(['file', 'missing', 'folder', 'broken-link', 'special', 'file']);
   });
 
   it('refuses absolute paths, .. escapes and links that lead outside, for every method', async () => {
     const repo = createFsRepository(root);
-    const bad = [join(base, 'outside', 'secret.csv'), '../outside/secret.csv', 'models/../../outside/secret.csv', 'models/out-link.csv', 'models/out-dir/secret.csv', 'models/out-dir/none.csv'];
+    const bad = [
+      join(base, 'outside', 'secret.csv'),
+      '../outside/secret.csv',
+      'models/../../outside/secret.csv',
+      'models/out-link.csv',
+      'models/out-dir/secret.csv',
+      'models/out-dir/none.csv',
+    ];
     for (const path of bad) {
       await expectInputError(() => repo.read(path), { code: 'path-outside', file: path });
       await expectInputError(() => repo.isFile(path), { code: 'path-outside', file: path });
       await expectInputError(() => repo.size(path), { code: 'path-outside', file: path });
-      await expectInputError(async () => {
-        for await (const chunk of repo.stream(path)) void chunk;
-      }, { code: 'path-outside', file: path });
+      await expectInputError(
+        async () => {
+          for await (const chunk of repo.stream(path)) void chunk;
+        },
+        { code: 'path-outside', file: path },
+      );
     }
   });
 
@@ -105,9 +126,25 @@ describe('createFsRepository: reading', () => {
     const where = { line: 4, column: 10, key: 'data.train' };
     expect(await repo.resolve('models/deep/b.model.yml', '../t.csv', where)).toBe('models/t.csv');
     expect(await repo.resolve('models/ok.model.yml', './sub/../h.csv', where)).toBe('models/h.csv');
-    await expectInputError(() => repo.resolve('models/ok.model.yml', '../../x.csv', where), { code: 'path-outside', file: 'models/ok.model.yml', line: 4, column: 10, key: 'data.train' });
-    await expectInputError(() => repo.resolve('models/ok.model.yml', '/etc/passwd', where), { code: 'path-outside', file: 'models/ok.model.yml', line: 4, key: 'data.train' });
-    await expectInputError(() => repo.resolve('models/ok.model.yml', 'out-link.csv', where), { code: 'path-outside', file: 'models/ok.model.yml', line: 4, key: 'data.train' });
+    await expectInputError(() => repo.resolve('models/ok.model.yml', '../../x.csv', where), {
+      code: 'path-outside',
+      file: 'models/ok.model.yml',
+      line: 4,
+      column: 10,
+      key: 'data.train',
+    });
+    await expectInputError(() => repo.resolve('models/ok.model.yml', '/etc/passwd', where), {
+      code: 'path-outside',
+      file: 'models/ok.model.yml',
+      line: 4,
+      key: 'data.train',
+    });
+    await expectInputError(() => repo.resolve('models/ok.model.yml', 'out-link.csv', where), {
+      code: 'path-outside',
+      file: 'models/ok.model.yml',
+      line: 4,
+      key: 'data.train',
+    });
   });
 
   it('refuses a missing root', async () => {
@@ -119,7 +156,13 @@ describe('createFsRepository: glob', () => {
   it('lists matching files sorted, skipping node_modules, .git and dot folders', async () => {
     const repo = createFsRepository(root);
     const found = await repo.glob(['**/*.model.yml']);
-    expect(found.paths).toEqual(['models/deep/b.model.yml', 'models/ok.model.yml', 'models/via-dir.model.yml', 'models/via-inside.model.yml', 'models/via-link.model.yml']);
+    expect(found.paths).toEqual([
+      'models/deep/b.model.yml',
+      'models/ok.model.yml',
+      'models/via-dir.model.yml',
+      'models/via-inside.model.yml',
+      'models/via-link.model.yml',
+    ]);
   });
 
   it('enters node_modules and .git only for a pattern that names them', async () => {
@@ -133,9 +176,20 @@ describe('createFsRepository: glob', () => {
     const repo = createFsRepository(root);
     // models/out-dir leads outside, models/in-dir inside: neither is searched, both are reported
     // (links to files are not: they are matches like files).
-    expect(await repo.glob(['models/*/*.model.yml'])).toEqual({ paths: ['models/deep/b.model.yml'], notEntered: ['models/in-dir', 'models/out-dir'] });
+    expect(await repo.glob(['models/*/*.model.yml'])).toEqual({
+      paths: ['models/deep/b.model.yml'],
+      notEntered: ['models/in-dir', 'models/out-dir'],
+    });
     expect(await repo.glob(['models/out-dir/*.model.yml'])).toEqual({ paths: [], notEntered: ['models/out-dir'] });
-    expect((await repo.glob(['models/*.csv'])).paths).toEqual(['models/dangling.csv', 'models/empty.csv', 'models/h.csv', 'models/inside-link.csv', 'models/out-link.csv', 'models/pipe.csv', 'models/t.csv']);
+    expect((await repo.glob(['models/*.csv'])).paths).toEqual([
+      'models/dangling.csv',
+      'models/empty.csv',
+      'models/h.csv',
+      'models/inside-link.csv',
+      'models/out-link.csv',
+      'models/pipe.csv',
+      'models/t.csv',
+    ]);
   });
 
   it('refuses absolute patterns and patterns starting with ..', async () => {
@@ -153,8 +207,18 @@ describe('descriptors on disk: data paths and explicit paths through links', () 
 
   it('refuses data paths through links to a file or a folder outside', async () => {
     const repo = createFsRepository(root);
-    await expectInputError(() => loadDescriptor(repo, 'models/via-link.model.yml', defaultSettings()), { code: 'path-outside', file: 'models/via-link.model.yml', line: 4, key: 'data.train' });
-    await expectInputError(() => loadDescriptor(repo, 'models/via-dir.model.yml', defaultSettings()), { code: 'path-outside', file: 'models/via-dir.model.yml', line: 4, key: 'data.train' });
+    await expectInputError(() => loadDescriptor(repo, 'models/via-link.model.yml', defaultSettings()), {
+      code: 'path-outside',
+      file: 'models/via-link.model.yml',
+      line: 4,
+      key: 'data.train',
+    });
+    await expectInputError(() => loadDescriptor(repo, 'models/via-dir.model.yml', defaultSettings()), {
+      code: 'path-outside',
+      file: 'models/via-dir.model.yml',
+      line: 4,
+      key: 'data.train',
+    });
   });
 
   it('refuses explicit descriptor paths through links, .. or absolute', async () => {

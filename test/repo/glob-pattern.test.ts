@@ -108,7 +108,8 @@ describe('patternProblem', () => {
   });
 
   it('accepts dots that are not a `..` segment', () => {
-    for (const pattern of ['models/..x/*.yml', 'models/.../*.yml', '**/*..yml', './models/*.yml', 'a.b/{c,d}.yml']) expect(patternProblem(pattern), pattern).toBeNull();
+    for (const pattern of ['models/..x/*.yml', 'models/.../*.yml', '**/*..yml', './models/*.yml', 'a.b/{c,d}.yml'])
+      expect(patternProblem(pattern), pattern).toBeNull();
   });
 
   it('refuses patterns over the length and alternatives caps before expanding them', () => {
@@ -137,6 +138,8 @@ describe('node_modules and .git', () => {
 
   it('tell a walk which folders to enter', () => {
     const set = compilePatterns(['models/**/*.model.yml']);
-    expect(['models', 'models/a', 'other', 'node_modules', 'models/node_modules', 'models/.hidden'].map((p) => set.searchesBelow(p))).toEqual([true, true, false, false, false, false]);
+    expect(
+      ['models', 'models/a', 'other', 'node_modules', 'models/node_modules', 'models/.hidden'].map((p) => set.searchesBelow(p)),
+    ).toEqual([true, true, false, false, false, false]);
   });
 });

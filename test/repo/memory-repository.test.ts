@@ -3,7 +3,10 @@ import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import { expectInputError } from '../config/helpers.js';
 
 describe('createMemoryRepository', () => {
-  const repo = createMemoryRepository({ 'a/b.csv': 'x\n1\n', './c.yml': new Uint8Array([1, 2, 3, 4, 5]), 'node_modules/p/q.yml': '' }, 'base commit abc1234');
+  const repo = createMemoryRepository(
+    { 'a/b.csv': 'x\n1\n', './c.yml': new Uint8Array([1, 2, 3, 4, 5]), 'node_modules/p/q.yml': '' },
+    'base commit abc1234',
+  );
 
   it('reads strings as UTF-8 and bytes as given, under normalised paths', async () => {
     expect(repo.label).toBe('base commit abc1234');
@@ -33,7 +36,12 @@ describe('createMemoryRepository', () => {
   it('resolves relative to the naming file', async () => {
     expect(await repo.resolve('a/m.model.yml', 'b.csv', {})).toBe('a/b.csv');
     expect(await repo.resolve('a/m.model.yml', '..\\c.yml', {})).toBe('c.yml');
-    await expectInputError(() => repo.resolve('a/m.model.yml', '../../c.yml', { line: 3, key: 'data.train' }), { code: 'path-outside', file: 'a/m.model.yml', line: 3, key: 'data.train' });
+    await expectInputError(() => repo.resolve('a/m.model.yml', '../../c.yml', { line: 3, key: 'data.train' }), {
+      code: 'path-outside',
+      file: 'a/m.model.yml',
+      line: 3,
+      key: 'data.train',
+    });
   });
 
   it('globs, skipping node_modules unless a pattern names it', async () => {

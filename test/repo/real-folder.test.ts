@@ -40,7 +40,13 @@ describe('realFolder', () => {
       ['loop', /goes round a loop of symbolic links/],
     ];
     for (const [name, message] of cases) {
-      expect(() => realFolder(path.join(ws, name), opts), name).toThrow(expect.objectContaining({ code: FOLDER_REFUSED, location: { key: 'working-directory' }, message: expect.stringMatching(message) as string }) as Error);
+      expect(() => realFolder(path.join(ws, name), opts), name).toThrow(
+        expect.objectContaining({
+          code: FOLDER_REFUSED,
+          location: { key: 'working-directory' },
+          message: expect.stringMatching(message) as string,
+        }) as Error,
+      );
     }
   });
 

@@ -18,7 +18,8 @@ import { descriptor, HOLDOUT, TRAIN } from '../hostile/corpus/repo.js';
 vi.mock('node:fs', async (importOriginal) => {
   const actual = await importOriginal<typeof import('node:fs')>();
   const refuse = (path: unknown): void => {
-    if (String(path).includes('locked')) throw Object.assign(new Error(`EACCES: permission denied, open '${String(path)}'`), { code: 'EACCES', errno: -13, syscall: 'open' });
+    if (String(path).includes('locked'))
+      throw Object.assign(new Error(`EACCES: permission denied, open '${String(path)}'`), { code: 'EACCES', errno: -13, syscall: 'open' });
   };
   const readFileSync = ((path: Parameters<typeof actual.readFileSync>[0], ...rest: unknown[]) => {
     refuse(path);
@@ -69,7 +70,9 @@ describe('an unreadable file is that model error (file-unreadable)', () => {
 
   it('an unreadable settings file ends the run with an InputError naming it', async () => {
     const root = write({ 'locked.yml': 'version: 1\n', 'models/a.model.yml': descriptor({ name: 'a' }) });
-    await expect(runPipeline({ ...defaultSettings(root), config: 'locked.yml', configExplicit: true }, createFsRepository(root))).rejects.toMatchObject({
+    await expect(
+      runPipeline({ ...defaultSettings(root), config: 'locked.yml', configExplicit: true }, createFsRepository(root)),
+    ).rejects.toMatchObject({
       name: 'InputError',
       code: 'file-unreadable',
       location: { file: 'locked.yml' },

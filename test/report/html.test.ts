@@ -13,7 +13,9 @@ describe('formatHtml', () => {
     expect(html).toContain(`<a href="#model-2">${ESCAPED}</a>`);
     expect(html).toContain(`data-model="${ESCAPED}"`);
     expect(html).toContain('<code class="muted">models/odd name|&lt;x&gt;.model.yml</code>');
-    expect(html).toContain('<p class="error-text">Could not be checked. data/b&amp;d.csv line 7: expected a number, got &quot;x&lt;y&quot;</p>');
+    expect(html).toContain(
+      '<p class="error-text">Could not be checked. data/b&amp;d.csv line 7: expected a number, got &quot;x&lt;y&quot;</p>',
+    );
     expect(html).toContain(`<td class="finding">ratio is ∞ for ${ESCAPED}. <span class="advice">Fix ${ESCAPED}</span></td>`);
     expect(html).not.toContain(AWKWARD);
     expect(html).not.toContain('<c>');
@@ -31,7 +33,10 @@ describe('formatHtml', () => {
     expect(html).not.toMatch(/url\((?!#)/);
     expect(html).not.toMatch(/@import/);
     const urls = html.match(/https?:\/\/[^\s"'<>)]+/g) ?? [];
-    expect(urls.every((u) => u === 'http://www.w3.org/2000/svg'), urls.join(', ')).toBe(true);
+    expect(
+      urls.every((u) => u === 'http://www.w3.org/2000/svg'),
+      urls.join(', '),
+    ).toBe(true);
     expect(html).toContain(`content="default-src 'none'; style-src 'unsafe-inline'; img-src data:"`);
     expect(html).toContain('@media print');
   });
@@ -56,6 +61,8 @@ describe('formatHtml', () => {
   });
 
   it('escapes the heading options', () => {
-    expect(formatHtml(summarise([], '1'), { title: '<T&>', subtitle: '"s"' })).toContain('<h1>&lt;T&amp;&gt;</h1><p class="muted">&quot;s&quot;</p>');
+    expect(formatHtml(summarise([], '1'), { title: '<T&>', subtitle: '"s"' })).toContain(
+      '<h1>&lt;T&amp;&gt;</h1><p class="muted">&quot;s&quot;</p>',
+    );
   });
 });

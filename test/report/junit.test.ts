@@ -41,7 +41,9 @@ describe('formatJunit', () => {
   });
 
   it('writes an empty suite list for a run without models', () => {
-    expect(formatJunit(summarise([], '1'))).toBe('<?xml version="1.0" encoding="UTF-8"?>\n<testsuites name="fitgate" tests="0" failures="0" errors="0" skipped="0"/>\n');
+    expect(formatJunit(summarise([], '1'))).toBe(
+      '<?xml version="1.0" encoding="UTF-8"?>\n<testsuites name="fitgate" tests="0" failures="0" errors="0" skipped="0"/>\n',
+    );
   });
 
   it('never lets raw markup characters from the repository through', () => {

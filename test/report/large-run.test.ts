@@ -32,7 +32,14 @@ function tenThousand(): Result {
   for (let i = 0; i < 10_000; i++) {
     const name = `model-${String(i).padStart(5, '0')}`;
     if (i % 97 === 0) {
-      models.push(model({ name, verdict: 'error', metrics: null, error: { message: `bad cell on line ${i}`, file: `data/${name}.csv`, line: i + 2, code: 'csv-cell' } }));
+      models.push(
+        model({
+          name,
+          verdict: 'error',
+          metrics: null,
+          error: { message: `bad cell on line ${i}`, file: `data/${name}.csv`, line: i + 2, code: 'csv-cell' },
+        }),
+      );
       continue;
     }
     const verdict = i % 3 === 0 ? 'fail' : i % 3 === 1 ? 'warn' : 'pass';
@@ -110,7 +117,10 @@ describe('a run of 10,000 models', () => {
 /** `rows` rows of 5 inputs and a target. */
 function fiveInputs(rows: number, seed: number): string {
   let s = seed;
-  const u = (): number => (s = (s * 16807) % 2147483647) / 2147483647;
+  const u = (): number => {
+    s = (s * 16807) % 2147483647;
+    return s / 2147483647;
+  };
   const lines = ['a,b,c,d,e,y'];
   for (let i = 0; i < rows; i++) {
     const x = [u(), u(), u(), u(), u()].map((v) => v * 10);
@@ -136,11 +146,16 @@ describe('1,000 models of 5 inputs and 5,000 rows', () => {
       'fitgate.yml': 'version: 1\nmodels: ["*.model.yml"]\n',
       'train.csv': fiveInputs(5000, 11),
       'holdout.csv': fiveInputs(5000, 12),
-      'five.model.yml': 'version: 1\nname: five\ndata: { train: train.csv, holdout: holdout.csv, target: y }\nterms:\n  - polynomial: { of: a, degree: 2 }\n  - linear: [b, c, d, e]\n',
+      'five.model.yml':
+        'version: 1\nname: five\ndata: { train: train.csv, holdout: holdout.csv, target: y }\nterms:\n  - polynomial: { of: a, degree: 2 }\n  - linear: [b, c, d, e]\n',
     });
     one = (await runPipeline(defaultSettings('/nowhere'), repo, { jobs: 1 })).models[0];
     result = summarise(
-      Array.from({ length: 1000 }, (_, i) => ({ ...one, name: `five-${String(i).padStart(4, '0')}`, descriptor: `models/five-${String(i).padStart(4, '0')}.model.yml` })),
+      Array.from({ length: 1000 }, (_, i) => ({
+        ...one,
+        name: `five-${String(i).padStart(4, '0')}`,
+        descriptor: `models/five-${String(i).padStart(4, '0')}.model.yml`,
+      })),
       '0.1.0',
     );
   });
@@ -186,7 +201,10 @@ describe('1,000 models of 5 inputs and 5,000 rows', () => {
   it('keeps at most 12 partial curves and thins series for a model of 30 inputs', async () => {
     const names = Array.from({ length: 30 }, (_, j) => `x${j}`);
     let s = 5;
-    const u = (): number => (s = (s * 16807) % 2147483647) / 2147483647;
+    const u = (): number => {
+      s = (s * 16807) % 2147483647;
+      return s / 2147483647;
+    };
     const table = (rows: number): string =>
       `${[...names, 'y'].join(',')}\n${Array.from({ length: rows }, () => {
         const x = names.map(() => u());

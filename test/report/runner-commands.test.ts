@@ -1,6 +1,13 @@
 // Runner commands in plain text (src/report/runner-commands.ts), byte for byte.
 import { describe, expect, it } from 'vitest';
-import { defuseLegacyCommands, MAX_SERVER_TEXT, neutraliseJson, neutraliseLog, neutraliseLogLine, quoteServerText } from '../../src/report/runner-commands.js';
+import {
+  defuseLegacyCommands,
+  MAX_SERVER_TEXT,
+  neutraliseJson,
+  neutraliseLog,
+  neutraliseLogLine,
+  quoteServerText,
+} from '../../src/report/runner-commands.js';
 
 /**
  * What the runner would take as a command in one line (actions/runner,
@@ -65,7 +72,13 @@ describe('defuseLegacyCommands', () => {
 
 describe('neutraliseJson', () => {
   it('keeps the data exactly and leaves no runner command in any line', () => {
-    const value = { name: 'm ##[error]forged', cell: '#\u200b#[warning]x', text: '::error::not at a line start', sep: 'a\u2028::error::b\u2029c\u0085d', list: [['##[', 1]] };
+    const value = {
+      name: 'm ##[error]forged',
+      cell: '#\u200b#[warning]x',
+      text: '::error::not at a line start',
+      sep: 'a\u2028::error::b\u2029c\u0085d',
+      list: [['##[', 1]],
+    };
     const json = neutraliseJson(JSON.stringify(value, null, 2));
     expect(JSON.parse(json)).toEqual(value);
     for (const line of json.split('\n')) expect(runnerSeesCommand(line), line).toBe(false);

@@ -30,7 +30,9 @@ function valid(text: string): void {
   expect(ok, JSON.stringify(validate.errors, null, 2)).toBe(true);
 }
 
-type Log = { runs: { tool: { driver: { rules: { id: string }[] } }; results: Record<string, unknown>[]; invocations: Record<string, unknown>[] }[] };
+type Log = {
+  runs: { tool: { driver: { rules: { id: string }[] } }; results: Record<string, unknown>[]; invocations: Record<string, unknown>[] }[];
+};
 
 describe('formatSarif', () => {
   it('passes the SARIF 2.1.0 schema for awkward content, an empty run, and a path prefix', () => {
@@ -64,8 +66,8 @@ describe('formatSarif', () => {
     const results = log.runs[0].results.map((r) => ({
       rule: r.ruleId,
       level: r.level,
-      line: ((r.locations as { physicalLocation: { region: { startLine: number } } }[])[0].physicalLocation.region.startLine),
-      uri: ((r.locations as { physicalLocation: { artifactLocation: { uri: string } } }[])[0].physicalLocation.artifactLocation.uri),
+      line: (r.locations as { physicalLocation: { region: { startLine: number } } }[])[0].physicalLocation.region.startLine,
+      uri: (r.locations as { physicalLocation: { artifactLocation: { uri: string } } }[])[0].physicalLocation.artifactLocation.uri,
     }));
     expect(results).toEqual([
       { rule: 'generalisation-gap', level: 'error', line: 11, uri: 'models/odd%20name%7C%3Cx%3E.model.yml' },
@@ -92,7 +94,9 @@ describe('formatSarif', () => {
         level: 'error',
         message: { text: 'broken & <bad>: could not be checked: expected a number, got "x<y"' },
         descriptor: { id: 'bad-number' },
-        locations: [{ physicalLocation: { artifactLocation: { uri: 'data/b%26d.csv', uriBaseId: '%SRCROOT%' }, region: { startLine: 7 } } }],
+        locations: [
+          { physicalLocation: { artifactLocation: { uri: 'data/b%26d.csv', uriBaseId: '%SRCROOT%' }, region: { startLine: 7 } } },
+        ],
       },
     ]);
   });

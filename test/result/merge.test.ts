@@ -19,11 +19,44 @@ function model(name: string, verdict: Verdict, descriptor = `models/${name}.mode
     rows: { train: 10, holdout: 4 },
     parameters: 2,
     columns: ['(intercept)', 'x'],
-    metrics: verdict === 'error' ? null : { train_rmse: 1, holdout_rmse: 'Infinity', gap_ratio: 'Infinity', train_mae: 1, holdout_mae: 1, train_r2: 0.5, holdout_r2: 'NaN', params_per_sample: 0.2, max_std_coefficient: 0.5, max_std_coefficient_column: 'x', max_abs_coefficient: 2, rank: 2, condition_number: 3 },
+    metrics:
+      verdict === 'error'
+        ? null
+        : {
+            train_rmse: 1,
+            holdout_rmse: 'Infinity',
+            gap_ratio: 'Infinity',
+            train_mae: 1,
+            holdout_mae: 1,
+            train_r2: 0.5,
+            holdout_r2: 'NaN',
+            params_per_sample: 0.2,
+            max_std_coefficient: 0.5,
+            max_std_coefficient_column: 'x',
+            max_abs_coefficient: 2,
+            rank: 2,
+            condition_number: 3,
+          },
     coefficients: verdict === 'error' ? [] : [1, 'NaN'],
     shipped: null,
     // One check whose figure gives the model's verdict against its limits (warn 1.3, fail 1.5).
-    checks: verdict === 'error' ? [] : [{ id: 'generalisation-gap', code: `generalisation-gap/${verdict}`, status: verdict, value: verdict === 'fail' ? 'Infinity' : verdict === 'warn' ? 1.4 : 1.1, limitKey: 'gap_ratio', limit: 1.5, warn: 1.3, line: 3, message: 'm', advice: '' }],
+    checks:
+      verdict === 'error'
+        ? []
+        : [
+            {
+              id: 'generalisation-gap',
+              code: `generalisation-gap/${verdict}`,
+              status: verdict,
+              value: verdict === 'fail' ? 'Infinity' : verdict === 'warn' ? 1.4 : 1.1,
+              limitKey: 'gap_ratio',
+              limit: 1.5,
+              warn: 1.3,
+              line: 3,
+              message: 'm',
+              advice: '',
+            },
+          ],
     error: verdict === 'error' ? { message: 'bad cell', file: 'data/x.csv', line: 4, code: 'csv-cell' } : null,
   };
 }
@@ -45,7 +78,10 @@ function mergeError(inputs: ReportInput[], options: MergeOptions = {}): InputErr
 describe('mergeReports', () => {
   it('joins models of every report, sorted, with the verdict and counts recomputed', () => {
     const merged = mergeReports(
-      [report('a.json', [model('zeta', 'pass'), model('alpha', 'warn')], ['shard 1/2: 2 models']), report('b.json', [model('mid', 'fail')], ['shard 2/2: 1 model', 'shard 1/2: 2 models'])],
+      [
+        report('a.json', [model('zeta', 'pass'), model('alpha', 'warn')], ['shard 1/2: 2 models']),
+        report('b.json', [model('mid', 'fail')], ['shard 2/2: 1 model', 'shard 1/2: 2 models']),
+      ],
       '9.9.9',
     );
     expect(merged.models.map((m) => m.name)).toEqual(['alpha', 'mid', 'zeta']);
@@ -89,11 +125,27 @@ describe('mergeReports', () => {
 
   it.each([
     ['not an object', '[]', '(top level)'],
-    ['another tool', '{"tool":{"name":"other","version":"1"},"verdict":"pass","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":[],"notes":[]}', 'tool.name'],
-    ['bad verdict', '{"tool":{"name":"fitgate","version":"1"},"verdict":"fine","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":[],"notes":[]}', 'verdict'],
-    ['models not an array', '{"tool":{"name":"fitgate","version":"1"},"verdict":"pass","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":{},"notes":[]}', 'models'],
+    [
+      'another tool',
+      '{"tool":{"name":"other","version":"1"},"verdict":"pass","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":[],"notes":[]}',
+      'tool.name',
+    ],
+    [
+      'bad verdict',
+      '{"tool":{"name":"fitgate","version":"1"},"verdict":"fine","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":[],"notes":[]}',
+      'verdict',
+    ],
+    [
+      'models not an array',
+      '{"tool":{"name":"fitgate","version":"1"},"verdict":"pass","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":{},"notes":[]}',
+      'models',
+    ],
     ['no counts', '{"tool":{"name":"fitgate","version":"1"},"verdict":"pass","models":[],"notes":[]}', 'counts'],
-    ['an unknown key', '{"tool":{"name":"fitgate","version":"1"},"verdict":"pass","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":[],"notes":[],"verdikt":"pass"}', 'verdikt'],
+    [
+      'an unknown key',
+      '{"tool":{"name":"fitgate","version":"1"},"verdict":"pass","counts":{"models":0,"pass":0,"warn":0,"fail":0,"error":0},"models":[],"notes":[],"verdikt":"pass"}',
+      'verdikt',
+    ],
   ])('rejects a report with %s, naming the key', (_, text, key) => {
     const e = mergeError([{ file: 'x.json', text }]);
     expect(e.code).toBe(MERGE_ERROR.shape);
@@ -105,17 +157,35 @@ describe('mergeReports', () => {
     ['verdict', (m: Record<string, unknown>) => (m.verdict = 'ok'), 'models[1].verdict'],
     ['rows', (m: Record<string, unknown>) => (m.rows = { train: -1, holdout: 2 }), 'models[1].rows.train'],
     ['coefficient', (m: Record<string, unknown>) => (m.coefficients = [1, 'big']), 'models[1].coefficients[1]'],
-    ['check status', (m: Record<string, unknown>) => ((m.checks as Record<string, unknown>[])[0].status = 'bad'), 'models[1].checks[0].status'],
+    [
+      'check status',
+      (m: Record<string, unknown>) => ((m.checks as Record<string, unknown>[])[0].status = 'bad'),
+      'models[1].checks[0].status',
+    ],
   ])('rejects a model with a bad %s, naming the key path', (_, spoil, key) => {
     const models = [model('a', 'pass'), model('b', 'pass')] as unknown as Record<string, unknown>[];
     spoil(models[1]);
-    const e = mergeError([{ file: 'r.json', text: JSON.stringify({ tool: { name: 'fitgate', version: '1' }, verdict: 'pass', counts: { models: 2, pass: 2, warn: 0, fail: 0, error: 0 }, models, notes: [] }) }]);
+    const e = mergeError([
+      {
+        file: 'r.json',
+        text: JSON.stringify({
+          tool: { name: 'fitgate', version: '1' },
+          verdict: 'pass',
+          counts: { models: 2, pass: 2, warn: 0, fail: 0, error: 0 },
+          models,
+          notes: [],
+        }),
+      },
+    ]);
     expect(e.code, e.message).toBe(MERGE_ERROR.shape);
     expect(e.location).toEqual({ file: 'r.json', key });
   });
 
   it('rejects a model name found in two reports, naming both', () => {
-    const e = mergeError([report('a.json', [model('x', 'pass')]), report('b.json', [model('y', 'pass'), model('x', 'pass', 'other/x.model.yml')])]);
+    const e = mergeError([
+      report('a.json', [model('x', 'pass')]),
+      report('b.json', [model('y', 'pass'), model('x', 'pass', 'other/x.model.yml')]),
+    ]);
     expect(e.code).toBe(MERGE_ERROR.duplicate);
     expect(e.location).toEqual({ file: 'b.json', key: 'models[1].name' });
     expect(e.message).toContain('a.json');
@@ -130,7 +200,20 @@ describe('mergeReports', () => {
 describe('merge and scale arguments', () => {
   it('parses merge with format, output and fail-on', () => {
     const parsed = parseArgs(['merge', 'a.json', 'dir/b.json', '--format', 'markdown', '--out', 'all.md', '--fail-on', 'warn'], '/work');
-    expect(parsed).toEqual({ kind: 'merge', reports: ['/work/a.json', '/work/dir/b.json'], format: 'markdown', out: 'all.md', color: null, failOn: 'warn', debug: false, verbose: false, html: null, sarif: null, junit: null, expect: null });
+    expect(parsed).toEqual({
+      kind: 'merge',
+      reports: ['/work/a.json', '/work/dir/b.json'],
+      format: 'markdown',
+      out: 'all.md',
+      color: null,
+      failOn: 'warn',
+      debug: false,
+      verbose: false,
+      html: null,
+      sarif: null,
+      junit: null,
+      expect: null,
+    });
   });
 
   it('parses the file reports of merge', () => {
@@ -156,7 +239,12 @@ describe('merge and scale arguments', () => {
     if (plain.kind === 'check') expect([plain.shard, plain.jobs]).toEqual([null, null]);
   });
 
-  it.each([['--shard', '4/3'], ['--shard', 'x'], ['--jobs', '0'], ['--jobs', 'many']])('rejects %s %s with an InputError', (flag, value) => {
+  it.each([
+    ['--shard', '4/3'],
+    ['--shard', 'x'],
+    ['--jobs', '0'],
+    ['--jobs', 'many'],
+  ])('rejects %s %s with an InputError', (flag, value) => {
     expect(() => parseArgs(['check', flag, value], tmpdir())).toThrow(InputError);
   });
 });
@@ -168,7 +256,17 @@ describe('jsonErrorOffset', () => {
       expect(() => JSON.parse(t)).not.toThrow();
       expect(jsonErrorOffset(t), t).toBe(-1);
     }
-    const invalid: [string, number][] = [['', 0], ['{', 1], ['[1,]', 3], ['{"a" 1}', 5], ['01', 1], ['[1] x', 4], ['"\u0001"', 1], ['[tru]', 1], ['{"a":1,}', 7]];
+    const invalid: [string, number][] = [
+      ['', 0],
+      ['{', 1],
+      ['[1,]', 3],
+      ['{"a" 1}', 5],
+      ['01', 1],
+      ['[1] x', 4],
+      ['"\u0001"', 1],
+      ['[tru]', 1],
+      ['{"a":1,}', 7],
+    ];
     for (const [t, at] of invalid) {
       expect(() => JSON.parse(t), t).toThrow();
       expect(jsonErrorOffset(t), JSON.stringify(t)).toBe(at);
@@ -183,9 +281,19 @@ describe('merge trusts nothing in a report', () => {
     const settings = defaultSettings(EXAMPLES);
     const repo = createFsRepository(EXAMPLES);
     const whole = await runPipeline(settings, repo);
-    const shards = [await runPipeline(settings, repo, { shard: { index: 1, count: 2 } }), await runPipeline(settings, repo, { shard: { index: 2, count: 2 } })];
-    expect(shards.map((s) => s.shard)).toEqual([{ index: 1, count: 2 }, { index: 2, count: 2 }]);
-    const merged = mergeReports(shards.map((s, i) => ({ file: `shard-${i + 1}.json`, text: formatJson(s) })), whole.tool.version, { expect: 2 });
+    const shards = [
+      await runPipeline(settings, repo, { shard: { index: 1, count: 2 } }),
+      await runPipeline(settings, repo, { shard: { index: 2, count: 2 } }),
+    ];
+    expect(shards.map((s) => s.shard)).toEqual([
+      { index: 1, count: 2 },
+      { index: 2, count: 2 },
+    ]);
+    const merged = mergeReports(
+      shards.map((s, i) => ({ file: `shard-${i + 1}.json`, text: formatJson(s) })),
+      whole.tool.version,
+      { expect: 2 },
+    );
     expect(JSON.parse(JSON.stringify(merged.models))).toEqual(JSON.parse(JSON.stringify(whole.models)));
     expect([merged.verdict, merged.counts]).toEqual([whole.verdict, whole.counts]);
     expect(merged.shard).toBeUndefined();
@@ -218,23 +326,47 @@ describe('merge trusts nothing in a report', () => {
   });
 
   it.each([
-    ['a check status the figure does not give', (r: any) => {
-      r.models[0].checks[0].status = 'pass';
-    }, 'models[0].checks[0].status'],
-    ['a model verdict its checks do not give', (r: any) => {
-      r.models[0].verdict = 'pass';
-    }, 'models[0].verdict'],
-    ['an error verdict without an error', (r: any) => {
-      r.models[0].verdict = 'error';
-      r.models[0].checks = [];
-    }, 'models[0].verdict'],
-    ['an error with a pass verdict', (r: any) => (r.models[0].error = { message: 'x', file: null, line: null, code: 'c' }), 'models[0].verdict'],
-    ['a report verdict its models do not give', (r: any) => {
-      r.verdict = 'pass';
-    }, 'verdict'],
-    ['counts its models do not give', (r: any) => {
-      r.counts.fail = 0;
-    }, 'counts.fail'],
+    [
+      'a check status the figure does not give',
+      (r: any) => {
+        r.models[0].checks[0].status = 'pass';
+      },
+      'models[0].checks[0].status',
+    ],
+    [
+      'a model verdict its checks do not give',
+      (r: any) => {
+        r.models[0].verdict = 'pass';
+      },
+      'models[0].verdict',
+    ],
+    [
+      'an error verdict without an error',
+      (r: any) => {
+        r.models[0].verdict = 'error';
+        r.models[0].checks = [];
+      },
+      'models[0].verdict',
+    ],
+    [
+      'an error with a pass verdict',
+      (r: any) => (r.models[0].error = { message: 'x', file: null, line: null, code: 'c' }),
+      'models[0].verdict',
+    ],
+    [
+      'a report verdict its models do not give',
+      (r: any) => {
+        r.verdict = 'pass';
+      },
+      'verdict',
+    ],
+    [
+      'counts its models do not give',
+      (r: any) => {
+        r.counts.fail = 0;
+      },
+      'counts.fail',
+    ],
   ])('recomputes statuses and verdicts: refuses %s', (_, spoil, key) => {
     const r = JSON.parse(report('a.json', [model('a', 'fail')]).text);
     spoil(r);
@@ -244,26 +376,59 @@ describe('merge trusts nothing in a report', () => {
   });
 
   it.each([
-    ['a chart line 0', (m: any) => {
-      m.charts = charts({ lines: [0] });
-    }, 'models[0].charts.train.lines[0]'],
-    ['a chart value as a string', (m: any) => {
-      m.charts = charts({ actual: ['NaN'] });
-    }, 'models[0].charts.train.actual[0]'],
-    ['a check line 0', (m: any) => {
-      m.checks[0].line = 0;
-    }, 'models[0].checks[0].line'],
-    ['a fractional row count', (m: any) => {
-      m.rows.train = 1.5;
-    }, 'models[0].rows.train'],
-    ['a metric that is an object', (m: any) => {
-      m.metrics.gap_ratio = { x: 1 };
-    }, 'models[0].metrics.gap_ratio'],
-    ['an unknown base status', (m: any) => (m.base = { status: 'old', commit: 'c', holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null }), 'models[0].base.status'],
-    ['a __proto__ key on a model', (m: any) => Object.defineProperty(m, '__proto__', { value: { verdict: 'pass' }, enumerable: true }), 'models[0].__proto__'],
-    ['a constructor key on a check', (m: any) => {
-      m.checks[0].constructor = 'x';
-    }, 'models[0].checks[0].constructor'],
+    [
+      'a chart line 0',
+      (m: any) => {
+        m.charts = charts({ lines: [0] });
+      },
+      'models[0].charts.train.lines[0]',
+    ],
+    [
+      'a chart value as a string',
+      (m: any) => {
+        m.charts = charts({ actual: ['NaN'] });
+      },
+      'models[0].charts.train.actual[0]',
+    ],
+    [
+      'a check line 0',
+      (m: any) => {
+        m.checks[0].line = 0;
+      },
+      'models[0].checks[0].line',
+    ],
+    [
+      'a fractional row count',
+      (m: any) => {
+        m.rows.train = 1.5;
+      },
+      'models[0].rows.train',
+    ],
+    [
+      'a metric that is an object',
+      (m: any) => {
+        m.metrics.gap_ratio = { x: 1 };
+      },
+      'models[0].metrics.gap_ratio',
+    ],
+    [
+      'an unknown base status',
+      (m: any) =>
+        (m.base = { status: 'old', commit: 'c', holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null }),
+      'models[0].base.status',
+    ],
+    [
+      'a __proto__ key on a model',
+      (m: any) => Object.defineProperty(m, '__proto__', { value: { verdict: 'pass' }, enumerable: true }),
+      'models[0].__proto__',
+    ],
+    [
+      'a constructor key on a check',
+      (m: any) => {
+        m.checks[0].constructor = 'x';
+      },
+      'models[0].checks[0].constructor',
+    ],
   ])('validates every field a reporter reads: refuses %s', (_, spoil, key) => {
     const m = JSON.parse(JSON.stringify(model('a', 'pass')));
     spoil(m);
@@ -286,12 +451,18 @@ describe('merge trusts nothing in a report', () => {
     expect(Object.getPrototypeOf(merged.models[0])).toBe(Object.prototype);
     expect(formatJson(merged)).toContain('"__proto__": 1.5');
     // The same name twice is still a duplicate.
-    expect(mergeError([report('a.json', [model('__proto__', 'pass')]), report('b.json', [model('__proto__', 'pass', 'x.model.yml')])]).code).toBe(MERGE_ERROR.duplicate);
+    expect(
+      mergeError([report('a.json', [model('__proto__', 'pass')]), report('b.json', [model('__proto__', 'pass', 'x.model.yml')])]).code,
+    ).toBe(MERGE_ERROR.duplicate);
   });
 
   describe('a missing shard is an error', () => {
     const shard = (file: string, index: number, count: number, names: string[]): ReportInput => {
-      const r = summarise(names.map((n) => model(n, 'pass')), '1', [`shard ${index}/${count}`]);
+      const r = summarise(
+        names.map((n) => model(n, 'pass')),
+        '1',
+        [`shard ${index}/${count}`],
+      );
       r.shard = { index, count };
       return { file, text: JSON.stringify(r) };
     };
@@ -300,7 +471,9 @@ describe('merge trusts nothing in a report', () => {
       const e = mergeError([report('a.json', [model('a', 'pass')]), report('b.json', [model('b', 'pass')])], { expect: 3 });
       expect(e.code).toBe(MERGE_ERROR.missingShard);
       expect(e.message).toContain('got 2');
-      expect(mergeReports([report('a.json', [model('a', 'pass')]), report('b.json', [model('b', 'pass')])], '1', { expect: 2 }).counts.models).toBe(2);
+      expect(
+        mergeReports([report('a.json', [model('a', 'pass')]), report('b.json', [model('b', 'pass')])], '1', { expect: 2 }).counts.models,
+      ).toBe(2);
     });
 
     it('reports that name their shard must cover 1..N once each, with or without --expect', () => {
@@ -309,14 +482,18 @@ describe('merge trusts nothing in a report', () => {
       expect(e.message).toContain('shard 2/3 is missing');
       expect(mergeError([shard('a.json', 1, 2, ['a']), shard('b.json', 1, 2, ['b'])]).code).toBe(MERGE_ERROR.duplicate);
       expect(mergeError([shard('a.json', 1, 2, ['a']), shard('b.json', 2, 3, ['b'])]).code).toBe(MERGE_ERROR.missingShard);
-      expect(mergeError([shard('a.json', 1, 2, ['a']), report('b.json', [model('b', 'pass')])]).location).toEqual({ file: 'b.json', key: 'shard' });
+      expect(mergeError([shard('a.json', 1, 2, ['a']), report('b.json', [model('b', 'pass')])]).location).toEqual({
+        file: 'b.json',
+        key: 'shard',
+      });
       expect(mergeError([shard('a.json', 1, 2, ['a']), shard('b.json', 2, 2, ['b'])], { expect: 3 }).code).toBe(MERGE_ERROR.missingShard);
       expect(mergeReports([shard('b.json', 2, 2, ['b']), shard('a.json', 1, 2, ['a'])], '1').models.map((m) => m.name)).toEqual(['a', 'b']);
     });
 
     it('reads --expect from the command line', () => {
       expect(parseArgs(['merge', 'a.json', '--expect', '4'], '/work')).toMatchObject({ kind: 'merge', expect: 4 });
-      for (const bad of ['0', 'x', '1.5', '10001']) expect(() => parseArgs(['merge', 'a.json', '--expect', bad], '/work'), bad).toThrow(InputError);
+      for (const bad of ['0', 'x', '1.5', '10001'])
+        expect(() => parseArgs(['merge', 'a.json', '--expect', bad], '/work'), bad).toThrow(InputError);
     });
   });
 });

@@ -62,8 +62,10 @@ describe('buildChartData through the pipeline', () => {
   const line = (x: number): number => 2 + 0.5 * x + 0.1 * Math.sin(37 * x);
   const files = {
     'fitgate.yml': 'version: 1\nmodels: ["m/*.model.yml"]\n',
-    'm/one.model.yml': 'version: 1\nname: one\ndata:\n  train: ../d/train.csv\n  holdout: ../d/holdout.csv\n  target: y_kg\nterms:\n  - polynomial: { of: x_m, degree: 2 }\n',
-    'm/two.model.yml': 'version: 1\nname: two\ndata:\n  train: ../d/train2.csv\n  holdout: ../d/holdout2.csv\n  target: y\nterms:\n  - linear: [a, b]\n',
+    'm/one.model.yml':
+      'version: 1\nname: one\ndata:\n  train: ../d/train.csv\n  holdout: ../d/holdout.csv\n  target: y_kg\nterms:\n  - polynomial: { of: x_m, degree: 2 }\n',
+    'm/two.model.yml':
+      'version: 1\nname: two\ndata:\n  train: ../d/train2.csv\n  holdout: ../d/holdout2.csv\n  target: y\nterms:\n  - linear: [a, b]\n',
     'd/train.csv': csv('x_m,y_kg', 2500, (i) => [i / 250, line(i / 250)]),
     'd/holdout.csv': csv('x_m,y_kg', 30, (i) => [i / 3 + 0.01, line(i / 3 + 0.01)]),
     'd/train2.csv': csv('a,b,y', 40, (i) => [i, (i * 7) % 11, i + 2 * ((i * 7) % 11) + 0.1 * Math.cos(i)]),

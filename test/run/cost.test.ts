@@ -12,7 +12,10 @@ import { buildContext, descriptor, table } from '../checks/context.js';
 /** n rows of x in [0, 10) and a smooth target with a little noise. */
 function rows(n: number, seed = 1): number[][] {
   let s = seed;
-  const u = (): number => (s = (s * 16807) % 2147483647) / 2147483647;
+  const u = (): number => {
+    s = (s * 16807) % 2147483647;
+    return s / 2147483647;
+  };
   return Array.from({ length: n }, (_, i) => {
     const x = (10 * i) / n + 0.001 * u();
     return [x, Math.sin(x) + 0.1 * u()];
@@ -26,7 +29,8 @@ function shape(over: Partial<ModelShape> = {}): ModelShape {
 describe('the cost estimate', () => {
   it('grows with the rows in the passes and with p^3 in the decompositions', () => {
     const base = estimateCost(shape());
-    const part = (e: ReturnType<typeof estimateCost>, stage: string): number => e.parts.find((p) => p.stage === stage)?.operations ?? Number.NaN;
+    const part = (e: ReturnType<typeof estimateCost>, stage: string): number =>
+      e.parts.find((p) => p.stage === stage)?.operations ?? Number.NaN;
     const doubled = estimateCost(shape({ trainRows: 20_000 }));
     expect(part(doubled, 'fold pass') / part(base, 'fold pass')).toBe(2);
     const wide = estimateCost(shape({ columns: 20 }));
@@ -39,7 +43,13 @@ describe('the cost estimate', () => {
   });
 
   it('counts a row of the design by its columns, radial columns dearer (an exponential each)', () => {
-    const d = descriptor({ terms: [{ kind: 'polynomial', of: 'x', degree: 3, shift: null, scale: null }, { kind: 'rbf', of: 'x', centers: { kind: 'list', values: [1, 2] }, width: 1 }], target: 'y' });
+    const d = descriptor({
+      terms: [
+        { kind: 'polynomial', of: 'x', degree: 3, shift: null, scale: null },
+        { kind: 'rbf', of: 'x', centers: { kind: 'list', values: [1, 2] }, width: 1 },
+      ],
+      target: 'y',
+    });
     const t = table(['x', 'y'], [rows(50).map((r) => r[0]), rows(50).map((r) => r[1])]);
     const ctx = buildContext(d, t, t);
     // intercept + 3 powers at 4 each, 2 radial columns at 20 each
@@ -50,7 +60,13 @@ describe('the cost estimate', () => {
     const data = rows(400);
     const t = table(['x', 'y'], [data.map((r) => r[0]), data.map((r) => r[1])]);
     const cases = [
-      descriptor({ terms: [{ kind: 'polynomial', of: 'x', degree: 4, shift: null, scale: null }, { kind: 'linear', columns: ['x'] }], target: 'y' }),
+      descriptor({
+        terms: [
+          { kind: 'polynomial', of: 'x', degree: 4, shift: null, scale: null },
+          { kind: 'linear', columns: ['x'] },
+        ],
+        target: 'y',
+      }),
       descriptor({ terms: [{ kind: 'rbf', of: 'x', centers: { kind: 'count', from: 0, to: 10, count: 6 }, width: 2 }], target: 'y' }),
       descriptor({ terms: [{ kind: 'linear', columns: ['x'] }], target: 'y', ridge: 0.5 }),
     ];
@@ -68,7 +84,13 @@ describe('the cost estimate', () => {
 
   it('subsamples degree sweeps as the sweep does: above 50,000 rows it counts 50,000', () => {
     const d = descriptor({ terms: [{ kind: 'polynomial', of: 'x', degree: 2, shift: null, scale: null }], target: 'y' });
-    const t = table(['x', 'y'], [[1, 2, 3, 4], [1, 4, 9, 16]]);
+    const t = table(
+      ['x', 'y'],
+      [
+        [1, 2, 3, 4],
+        [1, 4, 9, 16],
+      ],
+    );
     const ctx = buildContext(d, t, t);
     expect(sweepShape(d, ctx.design, 1_000_000)).toEqual({ kind: 'degree', rows: 50_000, parameters: [2, 3, 4, 5, 6] });
     expect(modelShape(d, ctx.design, 1_000_000, 10).sweep?.rows).toBe(50_000);
@@ -77,19 +99,34 @@ describe('the cost estimate', () => {
   it('refuses under the default cap the heaviest shape the other default caps allow, and passes an ordinary model', () => {
     const caps = defaultSettings().caps;
     // 200 columns x 1,000,000 rows = caps.max_cells: the fold pass alone is 4e10 operations.
-    expect(estimateCost(shape({ trainRows: caps.maxCells / 200, columns: 200, buildPerRow: 800 })).total).toBeGreaterThan(caps.maxOperations);
+    expect(estimateCost(shape({ trainRows: caps.maxCells / 200, columns: 200, buildPerRow: 800 })).total).toBeGreaterThan(
+      caps.maxOperations,
+    );
     // A 200-column design of radial columns with a width sweep: decompositions alone are over it.
     const p = 200;
-    const rbf = shape({ trainRows: 20_000, columns: p, buildPerRow: 20 * p, sweep: { kind: 'width', rows: 20_000, parameters: Array(7).fill(p) } });
-    expect(estimateCost(rbf).parts.find((x) => x.stage === 'complexity sweep')?.operations).toBeGreaterThan(7 * 5 * 5 * SVD_OPERATIONS * p ** 3);
+    const rbf = shape({
+      trainRows: 20_000,
+      columns: p,
+      buildPerRow: 20 * p,
+      sweep: { kind: 'width', rows: 20_000, parameters: Array(7).fill(p) },
+    });
+    expect(estimateCost(rbf).parts.find((x) => x.stage === 'complexity sweep')?.operations).toBeGreaterThan(
+      7 * 5 * 5 * SVD_OPERATIONS * p ** 3,
+    );
     expect(estimateCost(rbf).total).toBeGreaterThan(caps.maxOperations);
     // 100,000 rows of a cubic in two inputs: far below.
-    expect(estimateCost(shape({ trainRows: 100_000, holdoutRows: 25_000, inputs: 2, columns: 7, buildPerRow: 28 })).total).toBeLessThan(caps.maxOperations / 100);
+    expect(estimateCost(shape({ trainRows: 100_000, holdoutRows: 25_000, inputs: 2, columns: 7, buildPerRow: 28 })).total).toBeLessThan(
+      caps.maxOperations / 100,
+    );
   });
 
   it('names the descriptor line, the largest stages and the cap to raise', () => {
     const d = descriptor({ terms: [{ kind: 'linear', columns: ['x'] }], target: 'y' });
-    const settings: SettingsFile = { ...defaultSettings(), file: 'ci/fitgate.yml', caps: { ...defaultSettings().caps, maxOperations: 1000 } };
+    const settings: SettingsFile = {
+      ...defaultSettings(),
+      file: 'ci/fitgate.yml',
+      caps: { ...defaultSettings().caps, maxOperations: 1000 },
+    };
     const estimate = estimateCost(shape());
     let error: unknown = null;
     try {
@@ -109,9 +146,12 @@ describe('the cost estimate', () => {
   });
 
   it('refuses an over-budget model before any pass over its rows: that model is an error, with the descriptor line', async () => {
-    const csv = `x,y\n${rows(200).map((r) => r.join(',')).join('\n')}\n`;
+    const csv = `x,y\n${rows(200)
+      .map((r) => r.join(','))
+      .join('\n')}\n`;
     const repo = createMemoryRepository({
-      'm.model.yml': 'version: 1\nname: m\ndata: { train: t.csv, holdout: t.csv, target: y }\nterms:\n  - polynomial: { of: x, degree: 3 }\n',
+      'm.model.yml':
+        'version: 1\nname: m\ndata: { train: t.csv, holdout: t.csv, target: y }\nterms:\n  - polynomial: { of: x, degree: 3 }\n',
       't.csv': csv,
     });
     const settings: SettingsFile = { ...defaultSettings(), caps: { ...defaultSettings().caps, maxOperations: 1e6 } };

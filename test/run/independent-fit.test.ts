@@ -39,17 +39,24 @@ describe('press-yield example against an independent ridge solution', async () =
   const inputs = ['apples_kg', 'press_min'];
   const stats = inputs.map((c) => meanSd(train[c]));
   const phi = (t: Record<string, number[]>) =>
-    t.juice_l.map((_, i) => [1, ...inputs.flatMap((c, k) => {
-      const z = (t[c][i] - stats[k][0]) / stats[k][1];
-      return [z, z * z];
-    })]);
+    t.juice_l.map((_, i) => [
+      1,
+      ...inputs.flatMap((c, k) => {
+        const z = (t[c][i] - stats[k][0]) / stats[k][1];
+        return [z, z * z];
+      }),
+    ]);
   const X = phi(train);
   const p = X[0].length;
   const lambda = 0.1;
-  const aug = [...X, ...Array.from({ length: p - 1 }, (_, j) => Array.from({ length: p }, (_, k) => (k === j + 1 ? Math.sqrt(lambda) : 0)))];
+  const aug = [
+    ...X,
+    ...Array.from({ length: p - 1 }, (_, j) => Array.from({ length: p }, (_, k) => (k === j + 1 ? Math.sqrt(lambda) : 0))),
+  ];
   const rhs = [...train.juice_l, ...new Array(p - 1).fill(0)];
   const w = new QrDecomposition(new Matrix(aug)).solve(Matrix.columnVector(rhs)).to1DArray();
-  const rmse = (rows: number[][], y: number[]) => Math.sqrt(rows.reduce((s, r, i) => s + (y[i] - r.reduce((a, v, j) => a + v * w[j], 0)) ** 2, 0) / y.length);
+  const rmse = (rows: number[][], y: number[]) =>
+    Math.sqrt(rows.reduce((s, r, i) => s + (y[i] - r.reduce((a, v, j) => a + v * w[j], 0)) ** 2, 0) / y.length);
 
   it('has the same coefficients', () => {
     model.coefficients.forEach((c, j) => expect(rel(fromJsonNumber(c), w[j]), `coefficient ${j}: ${c} vs ${w[j]}`).toBeLessThan(1e-6));

@@ -53,7 +53,12 @@ describe('models on worker threads', () => {
   it('through the bundle (where each worker loads the whole CLI): the report alone on stdout, the same as serial', () => {
     // Regression: the bundle's entry ran the command in every worker too, printing the usage text.
     const bundle = path.join(process.cwd(), 'dist', 'cli', 'index.js');
-    const run = (jobs: string) => spawnSync(process.execPath, [bundle, 'check', '--root', repo, '--jobs', jobs, '--format', 'json'], { encoding: 'utf8', env: { ...process.env, NODE_DEBUG: 'worker' }, maxBuffer: 256 * 1024 * 1024 });
+    const run = (jobs: string) =>
+      spawnSync(process.execPath, [bundle, 'check', '--root', repo, '--jobs', jobs, '--format', 'json'], {
+        encoding: 'utf8',
+        env: { ...process.env, NODE_DEBUG: 'worker' },
+        maxBuffer: 256 * 1024 * 1024,
+      });
     const serial = run('1');
     const parallel = run('2');
     expect((parallel.stderr.match(/create new worker/g) ?? []).length, 'workers started').toBe(2);
@@ -79,7 +84,10 @@ describe('models on worker threads', () => {
   it('runs serially from TypeScript sources (workers cannot load .ts)', async () => {
     expect(workerScript(), 'this test runs the .ts module through vite').toBeNull();
     const memory = createMemoryRepository(files);
-    const results = await evaluateModels(memory, [], (await import('../../src/config/settings-file.js')).defaultSettings(), { jobs: 4, root: repo });
+    const results = await evaluateModels(memory, [], (await import('../../src/config/settings-file.js')).defaultSettings(), {
+      jobs: 4,
+      root: repo,
+    });
     expect(results).toEqual([]);
   });
 

@@ -38,7 +38,10 @@ describe('runPool', () => {
     // Early tasks are slow, late ones fast: finishing order differs from task order.
     const tasks: Task[] = Array.from({ length: 12 }, (_, i) => ({ n: i, delayMs: i < 3 ? 60 - 20 * i : 0 }));
     const results = await pool.runPool(tasks, { jobs: 3, script, workerData });
-    expect(results.map((r) => r.n), 'result order = task order').toEqual(tasks.map((t) => t.n));
+    expect(
+      results.map((r) => r.n),
+      'result order = task order',
+    ).toEqual(tasks.map((t) => t.n));
     expect(results.map((r) => r.square)).toEqual(tasks.map((t) => t.n * t.n));
     const threads = new Set(results.map((r) => r.thread));
     expect(threads.size, `threads used: ${[...threads].join(', ')}`).toBeGreaterThan(1);
@@ -48,7 +51,10 @@ describe('runPool', () => {
   it('starts no more workers than tasks or jobs', async () => {
     const results = await pool.runPool([{ n: 1 }, { n: 2 }], { jobs: 8, script, workerData });
     expect(new Set(results.map((r) => r.thread)).size).toBeLessThanOrEqual(2);
-    const serial = await pool.runPool(Array.from({ length: 5 }, (_, n) => ({ n })), { jobs: 1, script, workerData });
+    const serial = await pool.runPool(
+      Array.from({ length: 5 }, (_, n) => ({ n })),
+      { jobs: 1, script, workerData },
+    );
     expect(new Set(serial.map((r) => r.thread)).size, 'jobs 1 uses one worker').toBe(1);
   });
 
@@ -79,14 +85,25 @@ describe('runPool', () => {
     const tasks: Task[] = [{ n: 1 }, { n: 2, spin: true }, { n: 3 }, { n: 4, spin: true }, { n: 5 }, { n: 6 }];
     const stopped: { n: number; elapsedMs: number }[] = [];
     const started = performance.now();
-    const results = await pool.runPool(tasks, { jobs: 2, script, workerData }, {
-      ms: 300,
-      onTimeLimit: (task, elapsedMs) => {
-        stopped.push({ n: task.n, elapsedMs });
-        return { n: task.n, square: -1, thread: -1 };
+    const results = await pool.runPool(
+      tasks,
+      { jobs: 2, script, workerData },
+      {
+        ms: 300,
+        onTimeLimit: (task, elapsedMs) => {
+          stopped.push({ n: task.n, elapsedMs });
+          return { n: task.n, square: -1, thread: -1 };
+        },
       },
-    });
-    expect(results.map((r) => [r.n, r.square])).toEqual([[1, 1], [2, -1], [3, 9], [4, -1], [5, 25], [6, 36]]);
+    );
+    expect(results.map((r) => [r.n, r.square])).toEqual([
+      [1, 1],
+      [2, -1],
+      [3, 9],
+      [4, -1],
+      [5, 25],
+      [6, 36],
+    ]);
     expect(stopped.map((s) => s.n).sort()).toEqual([2, 4]);
     for (const s of stopped) expect(s.elapsedMs).toBeGreaterThanOrEqual(299);
     // Two stuck tasks on two workers: about two limits, not an endless wait.
@@ -94,7 +111,11 @@ describe('runPool', () => {
   });
 
   it('keeps a task that answers within the time limit', async () => {
-    const results = await pool.runPool([{ n: 7, delayMs: 20 }], { jobs: 1, script, workerData }, { ms: 10_000, onTimeLimit: () => ({ n: -1, square: -1, thread: -1 }) });
+    const results = await pool.runPool(
+      [{ n: 7, delayMs: 20 }],
+      { jobs: 1, script, workerData },
+      { ms: 10_000, onTimeLimit: () => ({ n: -1, square: -1, thread: -1 }) },
+    );
     expect(results.map((r) => r.square)).toEqual([49]);
   });
 

@@ -42,7 +42,13 @@ describe('selectShard', () => {
   const paths = ['models/b.model.yml', 'models/a.model.yml', 'z/c.model.yml', 'models/A.model.yml', 'models/a/x.model.yml'];
 
   it('takes every path without a shard, sorted by code units', () => {
-    expect(selectShard(paths, null)).toEqual(['models/A.model.yml', 'models/a.model.yml', 'models/a/x.model.yml', 'models/b.model.yml', 'z/c.model.yml']);
+    expect(selectShard(paths, null)).toEqual([
+      'models/A.model.yml',
+      'models/a.model.yml',
+      'models/a/x.model.yml',
+      'models/b.model.yml',
+      'z/c.model.yml',
+    ]);
     expect(selectShard([], null)).toEqual([]);
   });
 
@@ -55,17 +61,21 @@ describe('selectShard', () => {
 
   it('puts every path in exactly one shard, sizes within one, whatever the input order', () => {
     fc.assert(
-      fc.property(fc.uniqueArray(fc.string({ minLength: 1, maxLength: 12 }), { maxLength: 60 }), fc.integer({ min: 1, max: 12 }), (list, count) => {
-        const reversed = [...list].reverse();
-        const shards = Array.from({ length: count }, (_, k) => selectShard(list, { index: k + 1, count }));
-        const again = Array.from({ length: count }, (_, k) => selectShard(reversed, { index: k + 1, count }));
-        expect(again, 'input order does not matter').toEqual(shards);
-        const all = shards.flat();
-        expect(all.length, `paths ${JSON.stringify(list)}, ${count} shards`).toBe(list.length);
-        expect(new Set(all)).toEqual(new Set(list));
-        const sizes = shards.map((s) => s.length);
-        expect(Math.max(...sizes) - Math.min(...sizes), `sizes ${sizes.join(', ')}`).toBeLessThanOrEqual(1);
-      }),
+      fc.property(
+        fc.uniqueArray(fc.string({ minLength: 1, maxLength: 12 }), { maxLength: 60 }),
+        fc.integer({ min: 1, max: 12 }),
+        (list, count) => {
+          const reversed = [...list].reverse();
+          const shards = Array.from({ length: count }, (_, k) => selectShard(list, { index: k + 1, count }));
+          const again = Array.from({ length: count }, (_, k) => selectShard(reversed, { index: k + 1, count }));
+          expect(again, 'input order does not matter').toEqual(shards);
+          const all = shards.flat();
+          expect(all.length, `paths ${JSON.stringify(list)}, ${count} shards`).toBe(list.length);
+          expect(new Set(all)).toEqual(new Set(list));
+          const sizes = shards.map((s) => s.length);
+          expect(Math.max(...sizes) - Math.min(...sizes), `sizes ${sizes.join(', ')}`).toBeLessThanOrEqual(1);
+        },
+      ),
     );
   });
 
@@ -85,7 +95,10 @@ describe('sharded runs', () => {
       const reports = [];
       for (let k = 1; k <= count; k++) {
         const result = await runPipeline(settings, createMemoryRepository(files), { shard: { index: k, count } });
-        expect(result.notes.some((n) => n.startsWith(`shard ${k}/${count}:`)), `note of shard ${k}/${count}`).toBe(true);
+        expect(
+          result.notes.some((n) => n.startsWith(`shard ${k}/${count}:`)),
+          `note of shard ${k}/${count}`,
+        ).toBe(true);
         reports.push({ file: `shard-${k}.json`, text: JSON.stringify(result) });
       }
       const merged = mergeReports(reports, VERSION);

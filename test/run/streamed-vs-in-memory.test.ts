@@ -47,7 +47,10 @@ async function model(foldOrder: 'blocks' | 'shuffled', ridge: number) {
 }
 
 describe('streamed pipeline versus the whole design in memory (3000 rows, p = 9)', () => {
-  for (const [order, ridge] of [['blocks', 0], ['shuffled', 0.5]] as const) {
+  for (const [order, ridge] of [
+    ['blocks', 0],
+    ['shuffled', 0.5],
+  ] as const) {
     it(`agree to ${TOLERANCE} relative: coefficients, RMSEs, k-fold, leave-one-out (folds ${order}, ridge ${ridge})`, async () => {
       const m = await model(order, ridge);
       const { design, tables, fit } = m;
@@ -64,7 +67,10 @@ describe('streamed pipeline versus the whole design in memory (3000 rows, p = 9)
         maxW = Math.max(maxW, Math.abs(whole.coefficients[j]));
         maxDiff = Math.max(maxDiff, Math.abs(whole.coefficients[j] - fit.coefficients[j]));
       }
-      expect(maxDiff / maxW, `coefficients: streamed ${Array.from(fit.coefficients)}, in memory ${Array.from(whole.coefficients)}`).toBeLessThan(TOLERANCE);
+      expect(
+        maxDiff / maxW,
+        `coefficients: streamed ${Array.from(fit.coefficients)}, in memory ${Array.from(whole.coefficients)}`,
+      ).toBeLessThan(TOLERANCE);
 
       const rmse = (Xm: Float64Array, y: Float64Array, rows: number, w: Float64Array): number => {
         const pred = predict(Xm, rows, w);
@@ -90,7 +96,13 @@ describe('streamed pipeline versus the whole design in memory (3000 rows, p = 9)
           for (let j = 0; j < p; j++) rows.forEach((i, r) => (M[j * rows.length + r] = X[j * n + i]));
           return M;
         };
-        const w = fitDesign(pick(keep), Float64Array.from(keep, (i) => train.y[i]), keep.length, p, options).coefficients;
+        const w = fitDesign(
+          pick(keep),
+          Float64Array.from(keep, (i) => train.y[i]),
+          keep.length,
+          p,
+          options,
+        ).coefficients;
         const pred = predict(pick(out), out.length, w);
         out.forEach((i, r) => (sse += (train.y[i] - pred[r]) ** 2));
       }

@@ -20,7 +20,10 @@ import { transpileSources } from './transpile.js';
 
 function csv(rows: number, seed: number): string {
   let s = seed;
-  const u = (): number => (s = (s * 16807) % 2147483647) / 2147483647;
+  const u = (): number => {
+    s = (s * 16807) % 2147483647;
+    return s / 2147483647;
+  };
   const lines = ['x,y'];
   for (let i = 0; i < rows; i++) {
     const x = (10 * i) / rows + 0.001 * u();
@@ -44,14 +47,20 @@ function files(limitSeconds: number): Record<string, string> {
     'data/big-train.csv': csv(60_000, 5),
     'models/a.model.yml': descriptorText('a', '../data/small-train.csv', '  - linear: [x]\n'),
     'models/b.model.yml': descriptorText('b', '../data/small-train.csv', '  - polynomial: { of: x, degree: 3 }\n'),
-    'models/heavy.model.yml': descriptorText('heavy', '../data/big-train.csv', '  - rbf: { of: x, centers: { from: 0, to: 10, count: 150 }, width: 0.05 }\n'),
+    'models/heavy.model.yml': descriptorText(
+      'heavy',
+      '../data/big-train.csv',
+      '  - rbf: { of: x, centers: { from: 0, to: 10, count: 150 }, width: 0.05 }\n',
+    ),
     'models/z.model.yml': descriptorText('z', '../data/small-train.csv', '  - linear: [x]\n'),
   };
 }
 
 // Paths in the descriptors are relative to models/; fix the hold-out path the same way.
 const fixed = (f: Record<string, string>): Record<string, string> =>
-  Object.fromEntries(Object.entries(f).map(([k, v]) => [k, v.replace('holdout: data/small-holdout.csv', 'holdout: ../data/small-holdout.csv')]));
+  Object.fromEntries(
+    Object.entries(f).map(([k, v]) => [k, v.replace('holdout: data/small-holdout.csv', 'holdout: ../data/small-holdout.csv')]),
+  );
 
 /** Each model's error code, or `checked` when it got its checks' outcome (pass, warn or fail). */
 function outcomes(result: Result): Record<string, string> {
@@ -67,7 +76,9 @@ describe('the per-model time limit on the main thread', () => {
     const result = await evaluateModel(repo, d, settings, undefined, new Deadline(1000, () => (t += 600)));
     expect(result.verdict).toBe('error');
     expect(result.error).toMatchObject({ code: TIME_LIMIT, file: 'models/a.model.yml', line: 4 });
-    expect(result.error?.message).toMatch(/^did not finish within the time limit of 40 s per model \(stopped in the [a-z -]+ after \d+\.\d s\); raise caps\.max_model_seconds in the settings file \(fitgate\.yml\)/);
+    expect(result.error?.message).toMatch(
+      /^did not finish within the time limit of 40 s per model \(stopped in the [a-z -]+ after \d+\.\d s\); raise caps\.max_model_seconds in the settings file \(fitgate\.yml\)/,
+    );
   });
 
   it('stops the heavy model at a 3 s limit and checks the others (serial, --jobs 1)', async () => {
@@ -101,7 +112,11 @@ describe('the per-model time limit on worker threads', () => {
 
   it('gives the heavy model its time-limit error and the others their outcome, and the command ends', () => {
     const started = performance.now();
-    const run = spawnSync(process.execPath, [path.join(lib.dir, 'cli.js'), 'check', '--root', root, '--jobs', '2', '--format', 'json'], { encoding: 'utf8', timeout: 120_000, maxBuffer: 64 * 1024 * 1024 });
+    const run = spawnSync(process.execPath, [path.join(lib.dir, 'cli.js'), 'check', '--root', root, '--jobs', '2', '--format', 'json'], {
+      encoding: 'utf8',
+      timeout: 120_000,
+      maxBuffer: 64 * 1024 * 1024,
+    });
     const seconds = (performance.now() - started) / 1000;
     expect(run.status, run.stderr).toBe(2);
     const report = JSON.parse(run.stdout) as Result;

@@ -26,7 +26,10 @@ interface Expectation {
 
 const scenarios = readdirSync(here, { withFileTypes: true })
   .filter((d) => d.isDirectory() && existsSync(path.join(here, d.name, 'expect.json')))
-  .map((d) => ({ name: d.name, cases: (JSON.parse(readFileSync(path.join(here, d.name, 'expect.json'), 'utf8')) as { cases: Expectation[] }).cases }));
+  .map((d) => ({
+    name: d.name,
+    cases: (JSON.parse(readFileSync(path.join(here, d.name, 'expect.json'), 'utf8')) as { cases: Expectation[] }).cases,
+  }));
 
 function checkModels(result: Result, want: Expectation['models']): void {
   for (const [name, w] of Object.entries(want ?? {})) {

@@ -21,7 +21,10 @@ const ncc = path.join(root, 'node_modules', '@vercel', 'ncc', 'dist', 'ncc', 'cl
 
 /** ncc's bundle of `src` in `out`, as out/index.js (ncc names ESM output index.mjs or index.js). */
 function build(src, out) {
-  execFileSync(process.execPath, [ncc, 'build', src, '-o', out, '--target', 'es2022', '--quiet', '--no-source-map-register'], { cwd: root, stdio: 'inherit' });
+  execFileSync(process.execPath, [ncc, 'build', src, '-o', out, '--target', 'es2022', '--quiet', '--no-source-map-register'], {
+    cwd: root,
+    stdio: 'inherit',
+  });
   if (existsSync(path.join(out, 'index.mjs'))) renameSync(path.join(out, 'index.mjs'), path.join(out, 'index.js'));
   return path.join(out, 'index.js');
 }

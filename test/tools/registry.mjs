@@ -7,7 +7,9 @@ import { pathToFileURL } from 'node:url';
 import ts from 'typescript';
 
 function walk(dir) {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)],
+  );
 }
 
 /**

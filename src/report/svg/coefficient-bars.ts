@@ -66,16 +66,21 @@ export function coefficientBarsChart(coef: CoefficientData, options: ChartOption
   });
   const lines: string[] = [];
   if (coef.warn !== null && coef.warn > 0) {
-    lines.push(`<line class="warn" x1="${px(sx(coef.warn))}" y1="${y0}" x2="${px(sx(coef.warn))}" y2="${y1}" stroke="${COLOURS.warn}" stroke-width="1.6" stroke-dasharray="${DASHES.warn}"/>`);
+    lines.push(
+      `<line class="warn" x1="${px(sx(coef.warn))}" y1="${y0}" x2="${px(sx(coef.warn))}" y2="${y1}" stroke="${COLOURS.warn}" stroke-width="1.6" stroke-dasharray="${DASHES.warn}"/>`,
+    );
   }
   if (coef.limit !== null && coef.limit > 0) {
-    lines.push(`<line class="limit" x1="${px(sx(coef.limit))}" y1="${y0}" x2="${px(sx(coef.limit))}" y2="${y1}" stroke="${COLOURS.limit}" stroke-width="1.8" stroke-dasharray="${DASHES.limit}"/>`);
+    lines.push(
+      `<line class="limit" x1="${px(sx(coef.limit))}" y1="${y0}" x2="${px(sx(coef.limit))}" y2="${y1}" stroke="${COLOURS.limit}" stroke-width="1.8" stroke-dasharray="${DASHES.limit}"/>`,
+    );
   }
   const legend = [
     { mark: `<rect x="1" y="3" width="12" height="8" fill="${COLOURS.train}"/>`, label: 'positive' },
     { mark: `<rect x="1" y="3" width="12" height="8" fill="#fff" stroke="${COLOURS.train}" stroke-width="1.4"/>`, label: 'negative' },
   ];
-  if (coef.limit !== null) legend.push({ mark: legendLine(COLOURS.limit, DASHES.limit, 1.8), label: `fail limit ${formatNumber(coef.limit)}` });
+  if (coef.limit !== null)
+    legend.push({ mark: legendLine(COLOURS.limit, DASHES.limit, 1.8), label: `fail limit ${formatNumber(coef.limit)}` });
   if (coef.warn !== null) legend.push({ mark: legendLine(COLOURS.warn, DASHES.warn, 1.6), label: `warning ${formatNumber(coef.warn)}` });
   const overCount = sizes.filter((v) => v === null || (coef.limit !== null && v > coef.limit)).length;
   const largest = finite.length ? maxOf(finite) : Number.NaN;

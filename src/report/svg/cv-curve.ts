@@ -33,7 +33,9 @@ export function cvCurveChart(sweep: SweepData, options: ChartOptions): string {
   }
   const yRange = extent(sweep.cv, sweep.train ?? []) ?? [0, 1];
   const yLog = yRange[0] > 0 && yRange[1] / yRange[0] >= 100;
-  const sy = yLog ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0]) : linearScale(pad(yRange, 0.08), [y1, y0]);
+  const sy = yLog
+    ? logScale([10 ** Math.floor(Math.log10(yRange[0])), 10 ** Math.ceil(Math.log10(yRange[1]))], [y1, y0])
+    : linearScale(pad(yRange, 0.08), [y1, y0]);
   const plotX = (v: number | null): number | null => (v === null ? null : sweep.log && v <= 0 ? zeroAt : v);
   const body: string[] = [];
   const overlay: string[] = [];
@@ -42,7 +44,9 @@ export function cvCurveChart(sweep: SweepData, options: ChartOptions): string {
     if (value === null || at === null) return;
     const x = sx(at);
     const p = px(x);
-    body.push(`<line class="marker" data-marker="${label}" x1="${p}" y1="${y0}" x2="${p}" y2="${y1}" stroke="${COLOURS.curve}" stroke-width="1.4"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`);
+    body.push(
+      `<line class="marker" data-marker="${label}" x1="${p}" y1="${y0}" x2="${p}" y2="${y1}" stroke="${COLOURS.curve}" stroke-width="1.4"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`,
+    );
     const right = x > (x0 + x1) / 2;
     overlay.push(
       `<text x="${p}" y="${y0 + 13 + 14 * row}" dx="${right ? -4 : 4}" text-anchor="${right ? 'end' : 'start'}" font-size="11" fill="#222" paint-order="stroke" stroke="#fff" stroke-width="3">${escapeHtml(`${label} ${formatNumber(value)}`)}</text>`,
@@ -51,8 +55,12 @@ export function cvCurveChart(sweep: SweepData, options: ChartOptions): string {
   marker(sweep.chosen, 'chosen', null, 0);
   if (sweep.suggested !== null && sweep.suggested !== sweep.chosen) marker(sweep.suggested, 'suggested', DASHES.suggested, 1);
   if (sweep.train) {
-    body.push(`<path class="train" d="${linePath(s, sweep.train, sx, sy)}" fill="none" stroke="${COLOURS.train}" stroke-width="1.6" stroke-dasharray="${DASHES.reference}"/>`);
-    body.push(`<g fill="${COLOURS.train}">${s.map((v, i) => (sweep.train?.[i] == null ? '' : `<circle cx="${px(sx(v))}" cy="${px(sy(sweep.train[i] as number))}" r="2.4"/>`)).join('')}</g>`);
+    body.push(
+      `<path class="train" d="${linePath(s, sweep.train, sx, sy)}" fill="none" stroke="${COLOURS.train}" stroke-width="1.6" stroke-dasharray="${DASHES.reference}"/>`,
+    );
+    body.push(
+      `<g fill="${COLOURS.train}">${s.map((v, i) => (sweep.train?.[i] == null ? '' : `<circle cx="${px(sx(v))}" cy="${px(sy(sweep.train[i] as number))}" r="2.4"/>`)).join('')}</g>`,
+    );
   }
   body.push(`<path class="cv" d="${linePath(s, sweep.cv, sx, sy)}" fill="none" stroke="${COLOURS.holdout}" stroke-width="2"/>`);
   body.push(
@@ -70,10 +78,16 @@ export function cvCurveChart(sweep: SweepData, options: ChartOptions): string {
   sweep.cv.forEach((c, i) => {
     if (c !== null && (best < 0 || c < (sweep.cv[best] as number))) best = i;
   });
-  const legend = [{ mark: `${legendLine(COLOURS.holdout)}<path d="M7 3L11 7L7 11L3 7Z" fill="#fff" stroke="${COLOURS.holdout}" stroke-width="1.4"/>`, label: 'cross-validated RMSE' }];
+  const legend = [
+    {
+      mark: `${legendLine(COLOURS.holdout)}<path d="M7 3L11 7L7 11L3 7Z" fill="#fff" stroke="${COLOURS.holdout}" stroke-width="1.4"/>`,
+      label: 'cross-validated RMSE',
+    },
+  ];
   if (sweep.train) legend.push({ mark: legendLine(COLOURS.train, DASHES.reference, 1.6), label: 'training RMSE' });
   if (sweep.chosen !== null) legend.push({ mark: legendLine(COLOURS.curve, undefined, 1.4), label: 'chosen' });
-  if (sweep.suggested !== null && sweep.suggested !== sweep.chosen) legend.push({ mark: legendLine(COLOURS.curve, DASHES.suggested, 1.4), label: 'suggested' });
+  if (sweep.suggested !== null && sweep.suggested !== sweep.chosen)
+    legend.push({ mark: legendLine(COLOURS.curve, DASHES.suggested, 1.4), label: 'suggested' });
   return frame({
     id,
     kind: 'cv-curve',

@@ -29,9 +29,11 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
   const data = extent(chart.train.actual, chart.holdout.actual, fit.band) ?? [0, 1];
   const span = Math.max(data[1] - data[0], 1e-12);
   const curve = extent(fit.y, fit.base?.y ?? []) ?? data;
-  const yDomain = pad([Math.max(curve[0], data[0] - CURVE_HEADROOM * span), Math.min(curve[1], data[1] + CURVE_HEADROOM * span)].map((v, i) =>
-    i === 0 ? Math.min(v, data[0]) : Math.max(v, data[1]),
-  ) as [number, number]);
+  const yDomain = pad(
+    [Math.max(curve[0], data[0] - CURVE_HEADROOM * span), Math.min(curve[1], data[1] + CURVE_HEADROOM * span)].map((v, i) =>
+      i === 0 ? Math.min(v, data[0]) : Math.max(v, data[1]),
+    ) as [number, number],
+  );
   const sx = linearScale(xDomain, [x0, x1]);
   const sy = linearScale(yDomain, [y1, y0]);
 
@@ -54,7 +56,9 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
     `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`,
   );
   if (fit.base) body.push(baseCurvePath(fit.base, sx, sy));
-  body.push(`<path class="curve" d="${linePath(fit.x, fit.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`);
+  body.push(
+    `<path class="curve" d="${linePath(fit.x, fit.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
+  );
   const a = marks('train', trainX, chart.train.actual, sx, sy);
   const b = marks('holdout', holdoutX, chart.holdout.actual, sx, sy);
   body.push(a.markup, b.markup);

@@ -123,12 +123,16 @@ export function frame(spec: FrameSpec): string {
       const p = x(t);
       if (p < x0 - 0.5 || p > x1 + 0.5) continue;
       grid.push(`<line x1="${px(p)}" y1="${y0}" x2="${px(p)}" y2="${y1}"/>`);
-      labels.push(`<text x="${px(p)}" y="${y1 + 16}" text-anchor="middle">${escapeHtml(spec.xTickLabel?.(t) ?? tickText(t, x.log))}</text>`);
+      labels.push(
+        `<text x="${px(p)}" y="${y1 + 16}" text-anchor="middle">${escapeHtml(spec.xTickLabel?.(t) ?? tickText(t, x.log))}</text>`,
+      );
     }
   }
   if (spec.yCategories) {
     for (const c of spec.yCategories) {
-      labels.push(`<text x="${x0 - 6}" y="${px(c.y + 4)}" text-anchor="end"><title>${escapeHtml(c.full)}</title>${escapeHtml(c.label)}</text>`);
+      labels.push(
+        `<text x="${x0 - 6}" y="${px(c.y + 4)}" text-anchor="end"><title>${escapeHtml(c.full)}</title>${escapeHtml(c.label)}</text>`,
+      );
     }
   } else {
     for (const t of y.ticks) {
@@ -157,7 +161,9 @@ export function frame(spec: FrameSpec): string {
   let lx = x0 + natural > width - MARGIN.right ? Math.max(MARGIN.right, width - MARGIN.right - natural) : x0;
   const legend: string[] = [];
   for (const item of spec.legend) {
-    legend.push(`<g transform="translate(${px(lx)} 9)">${item.mark}<text x="19" y="11" font-size="11" fill="#333">${escapeHtml(item.label)}</text></g>`);
+    legend.push(
+      `<g transform="translate(${px(lx)} 9)">${item.mark}<text x="19" y="11" font-size="11" fill="#333">${escapeHtml(item.label)}</text></g>`,
+    );
     lx += 28 + item.label.length * 6.1;
   }
   parts.push(`<g class="legend">${legend.join('')}</g>`);

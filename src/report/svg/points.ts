@@ -18,7 +18,13 @@ export interface Marks {
  * @param xs x values of the rows (null = not finite)
  * @param ys y values of the rows
  */
-export function marks(series: 'train' | 'holdout', xs: readonly (number | null)[], ys: readonly (number | null)[], sx: Scale, sy: Scale): Marks {
+export function marks(
+  series: 'train' | 'holdout',
+  xs: readonly (number | null)[],
+  ys: readonly (number | null)[],
+  sx: Scale,
+  sy: Scale,
+): Marks {
   const out: string[] = [];
   let omitted = 0;
   const mark = series === 'train' ? trainMark : holdoutMark;

@@ -19,7 +19,11 @@ export function residualsChart(chart: ChartData, options: ChartOptions): string 
   const sy = linearScale(pad([-m, m]), [y1, y0]);
   const a = marks('train', chart.train.fitted, chart.train.residual, sx, sy);
   const b = marks('holdout', chart.holdout.fitted, chart.holdout.residual, sx, sy);
-  const body = [`<line class="zero" x1="${x0}" y1="${px(sy(0))}" x2="${x1}" y2="${px(sy(0))}" stroke="${COLOURS.reference}" stroke-width="1.2"/>`, a.markup, b.markup].join('');
+  const body = [
+    `<line class="zero" x1="${x0}" y1="${px(sy(0))}" x2="${x1}" y2="${px(sy(0))}" stroke="${COLOURS.reference}" stroke-width="1.2"/>`,
+    a.markup,
+    b.markup,
+  ].join('');
   const label = axisLabel(chart.target);
   return frame({
     id,

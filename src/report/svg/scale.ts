@@ -54,7 +54,8 @@ export function niceTicks(lo: number, hi: number, count = 5): number[] {
   const last = Math.floor(hi / step + 1e-9);
   // Far from zero relative to the step (|first| beyond 2^52), the tick index no longer moves by
   // one per step in double precision: fall back to the two ends rather than loop.
-  if (!Number.isFinite(step) || step <= 0 || !(Math.abs(first) < 2 ** 52 && Math.abs(last) < 2 ** 52) || last - first > 100) return [lo, hi];
+  if (!Number.isFinite(step) || step <= 0 || !(Math.abs(first) < 2 ** 52 && Math.abs(last) < 2 ** 52) || last - first > 100)
+    return [lo, hi];
   const ticks: number[] = [];
   for (let t = first; t <= last; t++) {
     const v = t * step;

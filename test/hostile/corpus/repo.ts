@@ -10,7 +10,9 @@ import type { FileSpec } from '../harness.js';
 export const SETTINGS = 'version: 1\nmodels:\n  - "models/*.model.yml"\n';
 
 /** The descriptor, with `extra` lines appended (e.g. `limits:` or `fit:` blocks). */
-export function descriptor(options: { name?: string; train?: string; holdout?: string; target?: string; terms?: string; extra?: string } = {}): string {
+export function descriptor(
+  options: { name?: string; train?: string; holdout?: string; target?: string; terms?: string; extra?: string } = {},
+): string {
   const terms = options.terms ?? '  - linear: [x]\n';
   return (
     `version: 1\nname: ${options.name ?? 'm'}\ndata:\n  train: ${options.train ?? '../data/train.csv'}\n  holdout: ${options.holdout ?? '../data/holdout.csv'}\n` +

@@ -19,7 +19,11 @@ describe('point charts', () => {
     const c = oneInputCharts();
     c.holdout.fitted = [null, 2.5];
     c.holdout.residual = [null, 0.2];
-    for (const svg of [fitCurveChart(c, c.fit ?? (undefined as never), { id: 'a' }), predictedActualChart(c, { id: 'b' }), residualsChart(c, { id: 'c' })]) {
+    for (const svg of [
+      fitCurveChart(c, c.fit ?? (undefined as never), { id: 'a' }),
+      predictedActualChart(c, { id: 'b' }),
+      residualsChart(c, { id: 'c' }),
+    ]) {
       expect(count(svg, 'train')).toBe(3);
       expect(svg).toContain('data-train-rows="3" data-train-shown="3" data-train-points="3" data-train-omitted="0"');
     }
@@ -50,7 +54,10 @@ describe('cvCurveChart', () => {
     expect(svg).toContain('lowest 1 at 2; the descriptor&#39;s setting is 3; suggested 2.');
   });
   it('puts a ridge of 0 one decade left of the smallest positive setting on a log axis, labelled 0', () => {
-    const svg = cvCurveChart({ parameter: 'ridge', log: true, settings: [0, 0.01, 1, 100], cv: [1, 1, 2, 5], train: null, chosen: 0, suggested: 1 }, { id: 'r' });
+    const svg = cvCurveChart(
+      { parameter: 'ridge', log: true, settings: [0, 0.01, 1, 100], cv: [1, 1, 2, 5], train: null, chosen: 0, suggested: 1 },
+      { id: 'r' },
+    );
     expect(svg).toContain('>0</text>');
     expect(svg).toContain('ridge (log scale)');
   });
@@ -63,7 +70,12 @@ describe('coefficientBarsChart', () => {
     expect((svg.match(/class="bar"/g) ?? []).length).toBe(2);
     expect(svg).toContain('class="limit"');
     expect(svg).toContain('data-over="1"');
-    const many = { columns: Array.from({ length: 100 }, (_, j) => `c${j}`), values: Array.from({ length: 100 }, (_, j) => j), limit: 25, warn: 10 };
+    const many = {
+      columns: Array.from({ length: 100 }, (_, j) => `c${j}`),
+      values: Array.from({ length: 100 }, (_, j) => j),
+      limit: 25,
+      warn: 10,
+    };
     const big = coefficientBarsChart(many, { id: 'm' }) ?? '';
     expect((big.match(/class="bar"/g) ?? []).length).toBe(MAX_BARS);
     expect(big).toContain('data-column="c99"');
