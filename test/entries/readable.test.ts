@@ -100,7 +100,7 @@ describe('readable by default', () => {
     const header = lines.indexOf('ERROR models/greenhouse.model.yml');
     expect(header, r.stdout).toBeGreaterThan(0);
     expect(lines[header + 1]).toBe(
-      '  models/greenhouse.model.yml:4:1: `data.target`: missing key `target` (did you mean `target` instead of "taget"?); required keys: train, holdout, target',
+      '  models/greenhouse.model.yml:4:1: `data.target`: missing key `target` (did you mean `target` instead of "taget"?); required keys: train, target',
     );
   });
 
