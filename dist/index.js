@@ -29256,7 +29256,7 @@ module.exports = {
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_base_comparison_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5148);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6387);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(6418);
 /* harmony import */ var _repo_git_repository_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4029);
 /**
  * Evaluates every model as it was on a base commit, read with git from that commit (settings
@@ -33901,6 +33901,7 @@ function selectKth(a, k) {
 __nccwpck_require__.d(__webpack_exports__, {
   QA: () => (/* binding */ SWEEP_MAX_ROWS),
   gs: () => (/* binding */ oneStandardErrorRule),
+  pb: () => (/* binding */ subsample),
   j6: () => (/* binding */ sweepComplexity),
   EH: () => (/* binding */ sweepShape),
   mb: () => (/* binding */ sweepTarget)
@@ -34150,7 +34151,10 @@ function sweepShape(descriptor, design, rows, options = {}) {
     const degree = design.terms[target.term].spec.degree;
     return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
 }
-/** Every other row at an even stride, as new columns. */
+/**
+ * m rows at an even stride through the data (row floor(t n / m) for t < m), as new columns.
+ * @param m rows to keep (<= data.rows)
+ */
 function subsample(data, m) {
     const n = data.rows;
     const pick = (col) => {
@@ -39680,7 +39684,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2499);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_9__ = __nccwpck_require__(5280);
 /* harmony import */ var _entries_output_files_js__WEBPACK_IMPORTED_MODULE_10__ = __nccwpck_require__(2766);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(6387);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_11__ = __nccwpck_require__(6418);
 /* harmony import */ var _entries_safe_write_js__WEBPACK_IMPORTED_MODULE_12__ = __nccwpck_require__(5475);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_13__ = __nccwpck_require__(4526);
 /* harmony import */ var _report_annotations_js__WEBPACK_IMPORTED_MODULE_14__ = __nccwpck_require__(856);
@@ -42076,7 +42080,7 @@ function compareWithBase(metrics, match, commit) {
 
 /***/ }),
 
-/***/ 6387:
+/***/ 6418:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -48323,6 +48327,32 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/run/run-checks.ts
+
+
+/**
+ * Runs `checks` in order with `run` (the task's runner: `runCheck` or `runClassifierCheck` bound
+ * to the model's context), adding each check's figures to `metrics` in place.
+ * @returns the outcomes in order and the model's verdict (`pass` when nothing warns or fails)
+ */
+function runChecks(checks, run, metrics) {
+    const outcomes = [];
+    let verdict = 'pass';
+    for (const check of checks) {
+        const stage = `${check.id} check`;
+        (0,core_deadline/* checkDeadline */.Ft)(stage);
+        const { outcome, figures } = run(check);
+        // A check stopped by the deadline is caught as a check error: the model stops here instead.
+        (0,core_deadline/* checkDeadline */.Ft)(stage);
+        outcomes.push(outcome);
+        if (figures)
+            Object.assign(metrics, figures);
+        if (outcome.status === 'fail' || outcome.status === 'warn')
+            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
+    }
+    return { checks: outcomes, verdict };
+}
+
 // EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 1 modules
 var lib = __nccwpck_require__(3046);
 // EXTERNAL MODULE: ./src/data/csv-rules.ts
@@ -49777,7 +49807,7 @@ function sweepClassifier(descriptor, design, train) {
     const target = (0,complexity/* sweepTarget */.mb)(descriptor, design);
     if (target === null || train.rows < 2)
         return null;
-    const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? subsample(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
+    const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? (0,complexity/* subsample */.pb)(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
     const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
@@ -49843,17 +49873,6 @@ function sweepClassifier(descriptor, design, train) {
     }
     const { best, chosen } = (0,complexity/* oneStandardErrorRule */.gs)(curve.map((c) => ({ mean: c.cvLogLoss, se: c.standardError })));
     return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
-}
-/** Every (n / m)-th row, as new columns. */
-function subsample(data, m) {
-    const n = data.rows;
-    const pick = (col) => {
-        const out = new Float64Array(m);
-        for (let t = 0; t < m; t++)
-            out[t] = col[Math.floor((t * n) / m)];
-        return out;
-    };
-    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
 }
 
 // EXTERNAL MODULE: ./src/diagnostics/radix-sort.ts
@@ -50119,7 +50138,7 @@ function findSeparation(design, data) {
     if (data.rows > SUBSAMPLE_ROWS) {
         // Overlap of a subset of rows whose design has full column rank proves overlap of all rows:
         // every b with a_i^T b >= 0 on all rows has it on the subset, hence a_i^T b = 0 there, hence b = 0.
-        const sub = separation_subsample(data, SUBSAMPLE_ROWS);
+        const sub = subsample(data, SUBSAMPLE_ROWS);
         const found = separationOf(design, sub);
         if (found.kind === 'none' && found.exact && fullColumnRank(design, sub))
             return found;
@@ -50129,7 +50148,7 @@ function findSeparation(design, data) {
 /** Rows of the even-stride subset tried first on large data. */
 const SUBSAMPLE_ROWS = 4000;
 /** Every (n / m)-th row. */
-function separation_subsample(data, m) {
+function subsample(data, m) {
     const n = data.rows;
     const pick = (col, out) => {
         for (let t = 0; t < m; t++)
@@ -50828,6 +50847,7 @@ function leakageOf(train, holdout) {
 
 
 
+
 /**
  * The report's metrics of a classifier: the training and hold-out figures, calibration, class
  * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
@@ -50880,16 +50900,7 @@ async function evaluateClassifier(repo, descriptor, settings, base) {
     const baseMatch = base?.matches.get(descriptor.file) ?? null;
     const context = { ...model.context, baseline: baseMatch?.model ?? null };
     const metrics = classifierMetrics(model);
-    const checks = [];
-    let verdict = 'pass';
-    for (const check of src_checks/* CHECKS */.ui) {
-        const { outcome, figures } = (0,src_checks/* runClassifierCheck */.Rc)(check, context);
-        checks.push(outcome);
-        if (figures)
-            Object.assign(metrics, figures);
-        if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
-    }
+    const { checks, verdict } = runChecks(src_checks/* CHECKS */.ui, (check) => (0,src_checks/* runClassifierCheck */.Rc)(check, context), metrics);
     return {
         name: descriptor.name,
         descriptor: descriptor.file,
@@ -51230,6 +51241,7 @@ function checkedShipped(descriptor, design) {
 
 
 
+
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -51312,20 +51324,7 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         shipped: model.shipped,
     };
     const metrics = reportMetrics(model);
-    const checks = [];
-    let verdict = 'pass';
-    for (const check of (0,src_checks/* checksFor */.NR)('regression')) {
-        const stage = `${check.id} check`;
-        (0,core_deadline/* checkDeadline */.Ft)(stage);
-        const { outcome, figures } = (0,src_checks/* runCheck */.k_)(check, context);
-        // A check stopped by the deadline is caught as a check error: the model stops here instead.
-        (0,core_deadline/* checkDeadline */.Ft)(stage);
-        checks.push(outcome);
-        if (figures)
-            Object.assign(metrics, figures);
-        if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
-    }
+    const { checks, verdict } = runChecks((0,src_checks/* checksFor */.NR)('regression'), (check) => (0,src_checks/* runCheck */.k_)(check, context), metrics);
     return {
         name: descriptor.name,
         descriptor: descriptor.file,

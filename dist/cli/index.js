@@ -1507,7 +1507,7 @@ __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __we
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4296);
 /* harmony import */ var _run_pool_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(4236);
 /* harmony import */ var _run_worker_role_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(5280);
-/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(6453);
+/* harmony import */ var _run_pipeline_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(1015);
 /* harmony import */ var _repo_fs_repository_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4526);
 /* harmony import */ var _entries_report_file_js__WEBPACK_IMPORTED_MODULE_15__ = __nccwpck_require__(7435);
 /* harmony import */ var _report_json_js__WEBPACK_IMPORTED_MODULE_8__ = __nccwpck_require__(2794);
@@ -10029,6 +10029,7 @@ function selectKth(a, k) {
 __nccwpck_require__.d(__webpack_exports__, {
   QA: () => (/* binding */ SWEEP_MAX_ROWS),
   gs: () => (/* binding */ oneStandardErrorRule),
+  pb: () => (/* binding */ subsample),
   j6: () => (/* binding */ sweepComplexity),
   EH: () => (/* binding */ sweepShape),
   mb: () => (/* binding */ sweepTarget)
@@ -10278,7 +10279,10 @@ function sweepShape(descriptor, design, rows, options = {}) {
     const degree = design.terms[target.term].spec.degree;
     return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
 }
-/** Every other row at an even stride, as new columns. */
+/**
+ * m rows at an even stride through the data (row floor(t n / m) for t < m), as new columns.
+ * @param m rows to keep (<= data.rows)
+ */
 function subsample(data, m) {
     const n = data.rows;
     const pick = (col) => {
@@ -15720,7 +15724,7 @@ function compareWithBase(metrics, match, commit) {
 
 /***/ }),
 
-/***/ 6453:
+/***/ 1015:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -16794,6 +16798,32 @@ function buildChartData(model, checks, maxPoints = MAX_CHART_POINTS) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/run/run-checks.ts
+
+
+/**
+ * Runs `checks` in order with `run` (the task's runner: `runCheck` or `runClassifierCheck` bound
+ * to the model's context), adding each check's figures to `metrics` in place.
+ * @returns the outcomes in order and the model's verdict (`pass` when nothing warns or fails)
+ */
+function runChecks(checks, run, metrics) {
+    const outcomes = [];
+    let verdict = 'pass';
+    for (const check of checks) {
+        const stage = `${check.id} check`;
+        (0,core_deadline/* checkDeadline */.Ft)(stage);
+        const { outcome, figures } = run(check);
+        // A check stopped by the deadline is caught as a check error: the model stops here instead.
+        (0,core_deadline/* checkDeadline */.Ft)(stage);
+        outcomes.push(outcome);
+        if (figures)
+            Object.assign(metrics, figures);
+        if (outcome.status === 'fail' || outcome.status === 'warn')
+            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
+    }
+    return { checks: outcomes, verdict };
+}
+
 // EXTERNAL MODULE: ./node_modules/csv-parse/lib/index.js + 1 modules
 var lib = __nccwpck_require__(3046);
 // EXTERNAL MODULE: ./src/data/table.ts + 4 modules
@@ -17588,7 +17618,7 @@ function sweepClassifier(descriptor, design, train) {
     const target = (0,complexity/* sweepTarget */.mb)(descriptor, design);
     if (target === null || train.rows < 2)
         return null;
-    const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? subsample(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
+    const rows = train.rows > CLASSIFIER_SWEEP_MAX_ROWS ? (0,complexity/* subsample */.pb)(train, CLASSIFIER_SWEEP_MAX_ROWS) : train;
     const folds = (0,diagnostics_folds/* assignFolds */.o)(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
     if (folds.k < 2)
         return null;
@@ -17654,17 +17684,6 @@ function sweepClassifier(descriptor, design, train) {
     }
     const { best, chosen } = (0,complexity/* oneStandardErrorRule */.gs)(curve.map((c) => ({ mean: c.cvLogLoss, se: c.standardError })));
     return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
-}
-/** Every (n / m)-th row, as new columns. */
-function subsample(data, m) {
-    const n = data.rows;
-    const pick = (col) => {
-        const out = new Float64Array(m);
-        for (let t = 0; t < m; t++)
-            out[t] = col[Math.floor((t * n) / m)];
-        return out;
-    };
-    return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
 }
 
 // EXTERNAL MODULE: ./src/diagnostics/radix-sort.ts
@@ -17932,7 +17951,7 @@ function findSeparation(design, data) {
     if (data.rows > SUBSAMPLE_ROWS) {
         // Overlap of a subset of rows whose design has full column rank proves overlap of all rows:
         // every b with a_i^T b >= 0 on all rows has it on the subset, hence a_i^T b = 0 there, hence b = 0.
-        const sub = separation_subsample(data, SUBSAMPLE_ROWS);
+        const sub = subsample(data, SUBSAMPLE_ROWS);
         const found = separationOf(design, sub);
         if (found.kind === 'none' && found.exact && fullColumnRank(design, sub))
             return found;
@@ -17942,7 +17961,7 @@ function findSeparation(design, data) {
 /** Rows of the even-stride subset tried first on large data. */
 const SUBSAMPLE_ROWS = 4000;
 /** Every (n / m)-th row. */
-function separation_subsample(data, m) {
+function subsample(data, m) {
     const n = data.rows;
     const pick = (col, out) => {
         for (let t = 0; t < m; t++)
@@ -18641,6 +18660,7 @@ function leakageOf(train, holdout) {
 
 
 
+
 /**
  * The report's metrics of a classifier: the training and hold-out figures, calibration, class
  * counts and the fit's convergence; the checks add theirs (gap ratio, CV log-loss...). The
@@ -18693,16 +18713,7 @@ async function evaluateClassifier(repo, descriptor, settings, base) {
     const baseMatch = base?.matches.get(descriptor.file) ?? null;
     const context = { ...model.context, baseline: baseMatch?.model ?? null };
     const metrics = classifierMetrics(model);
-    const checks = [];
-    let verdict = 'pass';
-    for (const check of src_checks/* CHECKS */.ui) {
-        const { outcome, figures } = (0,src_checks/* runClassifierCheck */.Rc)(check, context);
-        checks.push(outcome);
-        if (figures)
-            Object.assign(metrics, figures);
-        if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
-    }
+    const { checks, verdict } = runChecks(src_checks/* CHECKS */.ui, (check) => (0,src_checks/* runClassifierCheck */.Rc)(check, context), metrics);
     return {
         name: descriptor.name,
         descriptor: descriptor.file,
@@ -19043,6 +19054,7 @@ function checkedShipped(descriptor, design) {
 
 
 
+
 /** The report's figures of the shipped coefficients, or null. */
 function shippedMetrics(shipped) {
     if (shipped === null)
@@ -19125,20 +19137,7 @@ async function evaluateWithin(repo, descriptor, settings, base) {
         shipped: model.shipped,
     };
     const metrics = reportMetrics(model);
-    const checks = [];
-    let verdict = 'pass';
-    for (const check of (0,src_checks/* checksFor */.NR)('regression')) {
-        const stage = `${check.id} check`;
-        (0,core_deadline/* checkDeadline */.Ft)(stage);
-        const { outcome, figures } = (0,src_checks/* runCheck */.k_)(check, context);
-        // A check stopped by the deadline is caught as a check error: the model stops here instead.
-        (0,core_deadline/* checkDeadline */.Ft)(stage);
-        checks.push(outcome);
-        if (figures)
-            Object.assign(metrics, figures);
-        if (outcome.status === 'fail' || outcome.status === 'warn')
-            verdict = (0,result_result/* worse */.JJ)(verdict, outcome.status);
-    }
+    const { checks, verdict } = runChecks((0,src_checks/* checksFor */.NR)('regression'), (check) => (0,src_checks/* runCheck */.k_)(check, context), metrics);
     return {
         name: descriptor.name,
         descriptor: descriptor.file,

@@ -11,7 +11,7 @@ import { addProducts } from '../kernels/index.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { createTerm, type Term } from '../design/terms/index.js';
 import { fitLogistic, rowDeviance, type LogisticRows } from '../fit/logistic.js';
-import { oneStandardErrorRule, sweepTarget, type SweepKind } from './complexity.js';
+import { oneStandardErrorRule, subsample, sweepTarget, type SweepKind } from './complexity.js';
 import { assignFolds } from './folds.js';
 
 /** One point of a classifier's complexity sweep. */
@@ -111,13 +111,3 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
   return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
 }
 
-/** Every (n / m)-th row, as new columns. */
-function subsample(data: LogisticRows, m: number): LogisticRows {
-  const n = data.rows;
-  const pick = (col: Float64Array): Float64Array => {
-    const out = new Float64Array(m);
-    for (let t = 0; t < m; t++) out[t] = col[Math.floor((t * n) / m)];
-    return out;
-  };
-  return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
-}

@@ -237,8 +237,11 @@ export function sweepShape(
   return { kind: 'degree', rows: used, parameters: sweepDegrees(degree, options.maxDegree).map((g) => design.p - degree + g) };
 }
 
-/** Every other row at an even stride, as new columns. */
-function subsample(data: Rows, m: number): Rows {
+/**
+ * m rows at an even stride through the data (row floor(t n / m) for t < m), as new columns.
+ * @param m rows to keep (<= data.rows)
+ */
+export function subsample(data: Rows, m: number): Rows {
   const n = data.rows;
   const pick = (col: Float64Array): Float64Array => {
     const out = new Float64Array(m);

@@ -5,9 +5,10 @@
  */
 import { CHECKS, runClassifierCheck, type ClassifierContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { jsonNumber, worse, type CheckResult, type ModelMetrics, type ModelResult, type Verdict } from '../result/result.js';
+import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 import type { RepoReader } from '../repo/types.js';
 import type { BaseInput } from './base-comparison.js';
+import { runChecks } from './run-checks.js';
 import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
 import { maxOf } from '../core/extremes.js';
 
@@ -69,14 +70,7 @@ export async function evaluateClassifier(
   const baseMatch = base?.matches.get(descriptor.file) ?? null;
   const context: ClassifierContext = { ...model.context, baseline: baseMatch?.model ?? null };
   const metrics = classifierMetrics(model);
-  const checks: CheckResult[] = [];
-  let verdict: Verdict = 'pass';
-  for (const check of CHECKS) {
-    const { outcome, figures } = runClassifierCheck(check, context);
-    checks.push(outcome);
-    if (figures) Object.assign(metrics, figures);
-    if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);
-  }
+  const { checks, verdict } = runChecks(CHECKS, (check) => runClassifierCheck(check, context), metrics);
   return {
     name: descriptor.name,
     descriptor: descriptor.file,

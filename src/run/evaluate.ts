@@ -4,23 +4,16 @@
  */
 import { checksFor, runCheck, type CheckContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { checkDeadline, Deadline, TimeLimitExceeded, withDeadline } from '../core/deadline.js';
+import { Deadline, TimeLimitExceeded, withDeadline } from '../core/deadline.js';
 import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
 import type { RepoReader } from '../repo/types.js';
-import {
-  jsonNumber,
-  worse,
-  type CheckResult,
-  type ModelMetrics,
-  type ModelResult,
-  type ShippedMetrics,
-  type Verdict,
-} from '../result/result.js';
+import { jsonNumber, type ModelMetrics, type ModelResult, type ShippedMetrics } from '../result/result.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { withBaseCurves } from './base-curves.js';
 import { buildChartData } from './chart-data.js';
+import { runChecks } from './run-checks.js';
 import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { evaluateClassifier } from './evaluate-classifier.js';
 import { fitModel, type FittedModel } from './fit-model.js';
@@ -126,18 +119,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     shipped: model.shipped,
   };
   const metrics = reportMetrics(model);
-  const checks: CheckResult[] = [];
-  let verdict: Verdict = 'pass';
-  for (const check of checksFor('regression')) {
-    const stage = `${check.id} check`;
-    checkDeadline(stage);
-    const { outcome, figures } = runCheck(check, context);
-    // A check stopped by the deadline is caught as a check error: the model stops here instead.
-    checkDeadline(stage);
-    checks.push(outcome);
-    if (figures) Object.assign(metrics, figures);
-    if (outcome.status === 'fail' || outcome.status === 'warn') verdict = worse(verdict, outcome.status);
-  }
+  const { checks, verdict } = runChecks(checksFor('regression'), (check) => runCheck(check, context), metrics);
   return {
     name: descriptor.name,
     descriptor: descriptor.file,
