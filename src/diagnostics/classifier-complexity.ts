@@ -110,4 +110,3 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
   const { best, chosen } = oneStandardErrorRule(curve.map((c) => ({ mean: c.cvLogLoss, se: c.standardError })));
   return { kind: target.kind, line: target.line, current: points.findIndex((p) => p.current), points: curve, chosen, best };
 }
-
