@@ -3,6 +3,7 @@
  */
 import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
+import { linesText, partLines } from '../data/data-parts.js';
 import { classifierLeakage } from './classifier/measures.js';
 
 const check: Check = {
@@ -26,7 +27,8 @@ const check: Check = {
 - Models whose inputs take few distinct values (counts, categories coded as numbers) repeat inputs
   by nature: set \`leakage\` to a tolerated count or \`off\` for them.
 - Detail: \`columns\`, \`holdout_rows\`, \`input_matches\`, \`target_matches\`, \`holdout_lines\`,
-  \`train_lines\`, \`holdout_file\`, \`train_file\`.`,
+  \`train_lines\`, \`holdout_file\`, \`train_file\`; with data read from parts, the lines are each part's own
+  and \`holdout_line_files\` / \`train_line_files\` name the part of each.`,
   advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
   line: (d) => d.data.lines.holdout,
   measureClassifier: classifierLeakage,
@@ -42,10 +44,13 @@ const check: Check = {
       holdout_rows: leak.holdoutRows,
       input_matches: leak.inputMatches,
       target_matches: leak.fullMatches,
-      holdout_lines: leak.holdoutLines,
-      train_lines: leak.trainLines,
+      holdout_lines: partLines(holdout, leak.holdoutLines)?.lines ?? leak.holdoutLines,
+      train_lines: partLines(train, leak.trainLines)?.lines ?? leak.trainLines,
       holdout_file: holdout.file,
       train_file: train.file,
+      // Read from parts: the part of each listed line (the lines are each part's own).
+      ...(holdout.parts !== undefined ? { holdout_line_files: partLines(holdout, leak.holdoutLines)?.files } : {}),
+      ...(train.parts !== undefined ? { train_line_files: partLines(train, leak.trainLines)?.files } : {}),
     };
     if (leak.inputMatches === 0) {
       return {
@@ -55,8 +60,7 @@ const check: Check = {
         detail,
       };
     }
-    const lines = (file: string, ls: number[]): string =>
-      `${clip(file)} line${ls.length > 1 ? 's' : ''} ${ls.join(', ')}${leak.inputMatches > ls.length ? ', …' : ''}`;
+    const lines = (data: typeof holdout, ls: number[]): string => `${linesText(data, ls)}${leak.inputMatches > ls.length ? ', …' : ''}`;
     const target =
       leak.fullMatches === leak.inputMatches
         ? 'all with the same target'
@@ -65,7 +69,7 @@ const check: Check = {
           : `${leak.fullMatches} with the same target`;
     return {
       value: leak.inputMatches,
-      message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => clip(c)).join(', ')} (${target}): ${lines(holdout.file, leak.holdoutLines)}; first matching training rows: ${lines(train.file, leak.trainLines)}`,
+      message: `${leak.inputMatches} of ${leak.holdoutRows} hold-out rows repeat a training row in ${design.inputs.map((c) => clip(c)).join(', ')} (${target}): ${lines(holdout, leak.holdoutLines)}; first matching training rows: ${lines(train, leak.trainLines)}`,
       metrics,
       detail,
     };

@@ -1,7 +1,7 @@
 /**
  * `reproducibility`: how far the descriptor's shipped coefficients are from the refit.
  */
-import { clip } from '../core/errors.js';
+import { linesText, placeOfLine } from '../data/data-parts.js';
 import { skipWhenScoreOnly } from './score-only.js';
 import type { Check } from './types.js';
 import { classifierReproducibility } from './classifier/measures.js';
@@ -51,12 +51,13 @@ const check: Check = {
     const coefDiff = shipped.maxCoefficientDifference;
     return {
       value,
-      message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${clip(holdout.file)} line ${holdout.lines[row]}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(metrics.holdoutRmse)}`,
+      message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${linesText(holdout, [holdout.lines[row]])}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(metrics.holdoutRmse)}`,
       metrics: { shipped_prediction_difference: jsonNumber(value) },
       detail: jsonRecord({
         max_prediction_difference: diff,
         target_range: spread,
-        at_line: row >= 0 ? holdout.lines[row] : null,
+        at_line: row >= 0 ? placeOfLine(holdout, holdout.lines[row]).line : null,
+        ...(holdout.parts !== undefined && row >= 0 ? { at_file: placeOfLine(holdout, holdout.lines[row]).file } : {}),
         shipped_holdout_rmse: shippedRmse,
         refit_holdout_rmse: metrics.holdoutRmse,
         holdout_rmse_ratio: shippedRmse / metrics.holdoutRmse,

@@ -2,6 +2,7 @@
  * `separation`: complete or quasi-complete separation of a classifier's training rows.
  */
 import type { Check } from './types.js';
+import { linesText, partLines } from '../data/data-parts.js';
 
 const check: Check = {
   id: 'separation',
@@ -26,12 +27,14 @@ const check: Check = {
   line: (d) => d.termsLine,
   tasks: ['classification'],
   measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
-  measureClassifier({ separation, design, descriptor }) {
+  measureClassifier({ separation, design, descriptor, trainSource }) {
+    const own = trainSource === undefined ? null : partLines(trainSource, separation.lines);
     const columns = separation.columns.map((j) => `\`${design.columnNames[j]}\``).join(', ');
     const detail = {
       kind: separation.kind,
       separated_rows: separation.separatedRows,
-      lines: separation.lines,
+      lines: own?.lines ?? separation.lines,
+      ...(own !== null ? { line_files: own.files } : {}),
       columns: separation.columns.map((j) => design.columnNames[j]),
       direction: separation.direction,
       exact: separation.exact,
@@ -47,7 +50,9 @@ const check: Check = {
     }
     const penalised = descriptor.fit.ridge > 0;
     const value = separation.kind === 'complete' && !penalised ? 2 : 1;
-    const lines = separation.lines.slice(0, 10).join(', ') + (separation.separatedRows > 10 ? ', …' : '');
+    const lines =
+      (trainSource === undefined ? separation.lines.slice(0, 10).join(', ') : linesText(trainSource, separation.lines.slice(0, 10))) +
+      (separation.separatedRows > 10 ? ', …' : '');
     return {
       value,
       message: `${separation.kind} separation: ${separation.separatedRows} training rows (lines ${lines}) are separated along ${columns}${penalised ? '; the ridge penalty keeps the coefficients finite' : '; the maximum-likelihood coefficients are infinite'}`,

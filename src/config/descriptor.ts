@@ -3,9 +3,9 @@
  * resolved inside the repository, `fit` defaults applied and limits merged.
  */
 
-import { clip } from '../core/errors.js';
-import { kindWords, NOT_A_FILE } from '../repo/repo-path.js';
+import { NOT_A_FILE } from '../repo/repo-path.js';
 import type { RepoReader } from '../repo/types.js';
+import { resolveDataPaths } from './data-paths.js';
 import { mergeLimits } from './limits.js';
 import { errorAt, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
@@ -54,31 +54,19 @@ export const DESCRIPTOR_ERROR = Object.freeze({
 export async function loadDescriptor(repo: RepoReader, path: string, settings: SettingsFile): Promise<Descriptor> {
   const doc = await readYamlFile(repo, path);
   const descriptor = descriptorFromDocument(doc, path, settings);
-  for (const which of ['train', 'holdout'] as const) {
-    const key = ['data', which];
-    const at = doc.valuePositionOf(key);
-    const where = { line: at?.line ?? descriptor.data.lines[which], column: at?.column ?? 1, key: `data.${which}` };
-    const resolved = await repo.resolve(path, descriptor.data[which], where);
-    const kind = await repo.entryKind(resolved);
-    if (kind === 'missing') {
-      throw errorAt(
-        doc,
-        path,
-        DESCRIPTOR_ERROR.dataMissing,
-        key,
-        `${showValue(descriptor.data[which])} (${clip(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`,
-      );
+  const written = (doc.value as RawDescriptor).data;
+  const train = await resolveDataPaths(repo, doc, path, 'train', written.train);
+  // With a split column the hold-out rows come from the training file(s).
+  const holdout = written.holdout === undefined ? train : await resolveDataPaths(repo, doc, path, 'holdout', written.holdout);
+  for (const [which, found] of [
+    ['train', train],
+    ['holdout', holdout],
+  ] as const) {
+    if ('single' in found) descriptor.data[which] = found.single;
+    else {
+      descriptor.data[which] = found.parts[0];
+      descriptor.data[which === 'train' ? 'trainParts' : 'holdoutParts'] = found.parts;
     }
-    if (kind !== 'file') {
-      throw errorAt(
-        doc,
-        path,
-        DESCRIPTOR_ERROR.notAFile,
-        key,
-        `${showValue(descriptor.data[which])} (${clip(resolved)}) ${kindWords(kind)}; expected a CSV file relative to this descriptor's folder`,
-      );
-    }
-    descriptor.data[which] = resolved;
   }
   return descriptor;
 }
@@ -117,8 +105,9 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
     name: raw.name,
     task: raw.task ?? 'regression',
     data: {
-      train: raw.data.train,
-      holdout: raw.data.holdout ?? raw.data.train,
+      // As written until loadDescriptor resolves them (a list's first item here).
+      train: firstWritten(raw.data.train),
+      holdout: firstWritten(raw.data.holdout ?? raw.data.train),
       target: raw.data.target,
       lines: {
         train: line(['data', 'train']),
@@ -152,6 +141,11 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
     nameLine: line(['name']),
     termsLine,
   };
+}
+
+/** A data path as written, or the first of a list. */
+function firstWritten(written: string | string[]): string {
+  return typeof written === 'string' ? written : written[0];
 }
 
 /** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
@@ -412,8 +406,8 @@ interface RawDescriptor {
   name: string;
   task?: 'regression' | 'classification';
   data: {
-    train: string;
-    holdout?: string;
+    train: string | string[];
+    holdout?: string | string[];
     target: string;
     positive?: string;
     weight?: string;

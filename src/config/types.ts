@@ -256,6 +256,13 @@ export interface Descriptor {
     train: string;
     /** Hold-out CSV, repository-relative. */
     holdout: string;
+    /**
+     * The training parts, when `data.train` is a list or a glob (config/data-paths.ts): resolved,
+     * in code-point order, at least one; `train` is then the first. Absent for one file.
+     */
+    trainParts?: string[];
+    /** The hold-out parts, as {@link Descriptor.data.trainParts} (with `data.split`: the training parts). */
+    holdoutParts?: string[];
     /** Target column name. */
     target: string;
     /** Lines of `data.train`, `data.holdout`, `data.target`. */

@@ -8,6 +8,8 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError, quoteValue } from '../core/errors.js';
 import { loadModelData, type ModelTables } from './load-model-data.js';
 import { readTable } from './table.js';
+import { openDataFile } from './gzip-stream.js';
+import { placeOfLine, type LinePlace } from './data-parts.js';
 import type { RepoReader } from '../repo/types.js';
 
 /** Largest number of distinct labels collected before a target is judged not binary. */
@@ -64,7 +66,7 @@ export async function loadClassifierData(
       const v = y[i];
       if (v === positive) y[i] = 1;
       else if (v === negative) y[i] = 0;
-      else throw unknownLabel(descriptor, data.file, data.lines[i], String(v), labels);
+      else throw unknownLabel(descriptor, placeOfLine(data, data.lines[i]), String(v), labels);
     }
   }
   return { ...tables, labels };
@@ -78,33 +80,35 @@ async function loadTextLabels(
   settings: SettingsFile,
 ): Promise<ClassifierTables> {
   const { data } = descriptor;
-  const read = async (path: string) => {
-    const table = await readTable(repo, path, { columns: [...inputs], maxBytes: settings.caps.maxFileBytes });
-    const codes = await readLabelCodes(repo, path, data.target, descriptor);
-    if (codes.rows !== table.rows) throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${path}`);
+  const maxBytes = settings.caps.maxFileBytes;
+  const read = async (path: string, parts: readonly string[] | undefined) => {
+    const table = await readTable(repo, parts ?? path, { columns: [...inputs], maxBytes });
+    const codes = await partsLabelCodes(repo, parts ?? [path], data.target, descriptor, maxBytes);
+    if (codes.rows !== table.rows) throw new Error(`label rows ${codes.rows} differ from data rows ${table.rows} in ${table.file}`);
     return { table, codes };
   };
-  const train = await read(data.train);
-  const holdout = await read(data.holdout);
+  const train = await read(data.train, data.trainParts);
+  const holdout = await read(data.holdout, data.holdoutParts);
   const labels = chooseClasses(descriptor, train.codes.labels, 'text');
-  const toY = (part: typeof train, file: string): Float64Array => {
+  const toY = (part: typeof train): Float64Array => {
     const y = new Float64Array(part.table.rows);
     const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
     for (let i = 0; i < y.length; i++) {
       const m = meaning[part.codes.codes[i]];
-      if (m < 0) throw unknownLabel(descriptor, file, part.table.lines[i], part.codes.labels[part.codes.codes[i]], labels);
+      if (m < 0) throw unknownLabel(descriptor, placeOfLine(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
       y[i] = m;
     }
     return y;
   };
-  const model = (part: typeof train, file: string) => ({
+  const model = (part: typeof train) => ({
     inputs: inputs.map((c) => part.table.columns.get(c) as Float64Array),
-    y: toY(part, file),
+    y: toY(part),
     lines: part.table.lines,
     rows: part.table.rows,
-    file,
+    file: part.table.file,
+    ...(part.table.parts ? { parts: part.table.parts } : {}),
   });
-  return { train: model(train, data.train), holdout: model(holdout, data.holdout), trainColumns: train.table.columns, labels };
+  return { train: model(train), holdout: model(holdout), trainColumns: train.table.columns, labels };
 }
 
 /**
@@ -154,10 +158,10 @@ function chooseClasses(descriptor: Descriptor, found: readonly string[], kind: C
   );
 }
 
-function unknownLabel(descriptor: Descriptor, file: string, line: number, label: string, labels: ClassLabels): InputError {
+function unknownLabel(descriptor: Descriptor, place: LinePlace, label: string, labels: ClassLabels): InputError {
   return new InputError(
     'target-classes',
-    `the target \`${descriptor.data.target}\` is ${quoteValue(label, 30)} on line ${line} of ${file}; the training rows' classes are ${quoteValue(labels.positive, 30)} and ${quoteValue(labels.negative, 30)}`,
+    `the target \`${descriptor.data.target}\` is ${quoteValue(label, 30)} on line ${place.line} of ${place.file}; the training rows' classes are ${quoteValue(labels.positive, 30)} and ${quoteValue(labels.negative, 30)}`,
     { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' },
   );
 }
@@ -174,11 +178,55 @@ function distinctNumbers(y: Float64Array, n: number): number[] {
  * CSV rules as the numeric reader (comma, `"` quotes, blank lines skipped), so rows line up.
  * @throws InputError `target-classes` when more than {@link MAX_LABELS} distinct labels appear
  */
+async function partsLabelCodes(
+  repo: RepoReader,
+  paths: readonly string[],
+  column: string,
+  descriptor: Descriptor,
+  maxBytes: number,
+): Promise<{ labels: string[]; codes: Int32Array; rows: number }> {
+  if (paths.length === 1) return readLabelCodes(repo, paths[0], column, descriptor, maxBytes);
+  // Parts one after the other: each part's codes renumbered into the labels of all parts, by first appearance.
+  const labels: string[] = [];
+  const chunks: Int32Array[] = [];
+  let rows = 0;
+  for (const path of paths) {
+    const part = await readLabelCodes(repo, path, column, descriptor, maxBytes);
+    const map = part.labels.map((label) => {
+      const k = labels.indexOf(label);
+      if (k >= 0) return k;
+      labels.push(label);
+      return labels.length - 1;
+    });
+    if (labels.length > MAX_LABELS) {
+      throw new InputError(
+        'target-classes',
+        `a binary classifier needs exactly two classes in the target \`${column}\`; its parts hold more than ${MAX_LABELS}`,
+        { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' },
+      );
+    }
+    chunks.push(Int32Array.from(part.codes, (c) => map[c]));
+    rows += part.rows;
+  }
+  const codes = new Int32Array(rows);
+  let at = 0;
+  for (const chunk of chunks) {
+    codes.set(chunk, at);
+    at += chunk.length;
+  }
+  return { labels, codes, rows };
+}
+
+/**
+ * One file's labels and codes (see {@link partsLabelCodes}); its bytes are read as the numeric
+ * reader reads them (decompressed when `.gz`, held to the same byte cap).
+ */
 async function readLabelCodes(
   repo: RepoReader,
   path: string,
   column: string,
   descriptor: Descriptor,
+  maxBytes: number,
 ): Promise<{ labels: string[]; codes: Int32Array; rows: number }> {
   const labels: string[] = [];
   const index = new Map<string, number>();
@@ -226,7 +274,7 @@ async function readLabelCodes(
     parser.on('end', resolve);
     parser.on('error', reject);
   });
-  for await (const piece of repo.stream(path)) parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
+  for await (const piece of openDataFile(repo, path, maxBytes)) parser.write(Buffer.from(piece.buffer, piece.byteOffset, piece.byteLength));
   parser.end();
   await done;
   consume();

@@ -6,6 +6,7 @@
  * prediction).
  */
 import { InputError } from '../core/errors.js';
+import { placeOfLine, type DataPart } from './data-parts.js';
 
 /** The training levels of a category column, in text order. */
 export function trainingLevels(values: readonly string[]): string[] {
@@ -14,14 +15,14 @@ export function trainingLevels(values: readonly string[]): string[] {
 
 /**
  * Codes of the cells: index of the level in `levels`, or -1 for an unseen level when allowed.
- * @param where file, lines and the descriptor line of the term, for the error
+ * @param where file (and parts, when read from parts), lines and the descriptor line of the term, for the error
  * @throws InputError `unseen-level` at the first unseen level when `unseen` is `error`
  */
 export function levelCodes(
   values: readonly string[],
   levels: readonly string[],
   unseen: 'error' | 'zero',
-  where: { file: string; lines: Int32Array; column: string; termLine: number; descriptor: string },
+  where: { file: string; parts?: DataPart[]; lines: Int32Array; column: string; termLine: number; descriptor: string },
 ): Float64Array {
   const index = new Map(levels.map((l, k) => [l, k]));
   const out = new Float64Array(values.length);
@@ -32,10 +33,11 @@ export function levelCodes(
         out[i] = -1;
         continue;
       }
+      const place = placeOfLine(where, where.lines[i]);
       throw new InputError(
         'unseen-level',
-        `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${where.lines[i]} of ${where.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`,
-        { file: where.file, line: where.lines[i], key: where.column },
+        `column \`${where.column}\` has the level ${JSON.stringify(values[i].slice(0, 80))} on line ${place.line} of ${place.file}, which no training row has; the category term on line ${where.termLine} of ${where.descriptor} has no column for it (add \`unseen: zero\` to predict it as the reference level)`,
+        { file: place.file, line: place.line, key: where.column },
       );
     }
     out[i] = k;

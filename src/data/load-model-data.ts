@@ -4,7 +4,8 @@
 import type { Descriptor, SettingsFile, Weighting } from '../config/types.js';
 import { InputError, clip, quoteValue } from '../core/errors.js';
 import type { ModelData } from './model-data.js';
-import { readTable } from './table.js';
+import { readTable, type Table } from './table.js';
+import { placeOfLine, type DataPart } from './data-parts.js';
 import { levelCodes, trainingLevels } from './levels.js';
 import { readTextColumns } from './text-columns.js';
 import type { RepoReader } from '../repo/types.js';
@@ -65,7 +66,12 @@ export async function loadModelData(
   const maxBytes = settings.caps.maxFileBytes;
   const format = data.format;
   const split = data.split ?? null;
-  const load = async (path: string, line: number, key: string): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
+  const load = async (
+    path: string,
+    partPaths: readonly string[] | undefined,
+    line: number,
+    key: string,
+  ): Promise<ModelData & { byName: Map<string, Float64Array> }> => {
     let table: Awaited<ReturnType<typeof readTable>>;
     // With a split column both sides read the one file, each keeping its own label's rows.
     const side =
@@ -75,7 +81,12 @@ export async function loadModelData(
           ? { column: split.column, keep: split.train, other: split.holdout }
           : { column: split.column, keep: split.holdout, other: split.train };
     try {
-      table = await readTable(repo, path, { columns, maxBytes, ...(format ? { format } : {}), ...(side ? { split: side } : {}) });
+      table = await readTable(repo, partPaths ?? path, {
+        columns,
+        maxBytes,
+        ...(format ? { format } : {}),
+        ...(side ? { split: side } : {}),
+      });
     } catch (error) {
       throw withAsker(error, descriptor);
     }
@@ -85,25 +96,19 @@ export async function loadModelData(
         : table.dropped > 0
           ? ` left after dropping ${table.dropped} with missing cells`
           : '';
-      throw new InputError('no-rows', `\`${clip(path)}\` has no data rows${why}; expected at least one row`, {
+      const named = partPaths === undefined ? `\`${clip(path)}\`` : `the ${partPaths.length} parts of \`${key}\` (${clip(table.file)})`;
+      throw new InputError('no-rows', `${named} ${partPaths === undefined ? 'has' : 'have'} no data rows${why}; expected at least one row`, {
         file: descriptor.file,
         line,
         key,
       });
     }
     if (categories.size > 0) {
-      const text = await readTextColumns(repo, path, [...categories.keys()], maxBytes);
-      if (text.lines.length !== table.rows || text.lines.some((l, i) => l !== table.lines[i])) {
-        throw new InputError(
-          'csv-rows',
-          `${path} gives ${text.lines.length} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
-          { file: path },
-        );
-      }
+      const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
       for (const [name, term] of categories) {
-        const values = text.columns.get(name) as string[];
+        const values = text.get(name) as string[];
         if (!levels.has(name)) levels.set(name, trainingLevels(values));
-        const where = { file: path, lines: table.lines, column: name, termLine: term.line, descriptor: descriptor.file };
+        const where = { file: table.file, ...(table.parts ? { parts: table.parts } : {}), lines: table.lines, column: name, termLine: term.line, descriptor: descriptor.file };
         table.columns.set(name, levelCodes(values, levels.get(name) as string[], term.unseen, where));
       }
     }
@@ -112,19 +117,20 @@ export async function loadModelData(
       y: table.columns.get(data.target) as Float64Array,
       lines: table.lines,
       rows: table.rows,
-      file: path,
+      file: table.file,
+      ...(table.parts ? { parts: table.parts } : {}),
       ...(format?.missing === 'drop' ? { dropped: table.dropped } : {}),
       byName: table.columns,
     };
     return weighting === null
       ? rows
-      : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, path) };
+      : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, rows.file, rows.parts) };
   };
-  const train = await load(data.train, data.lines.train, 'data.train');
-  const holdout = await load(data.holdout, data.lines.holdout, 'data.holdout');
+  const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
+  const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
   const { byName, ...trainData } = train;
   if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
-    throw new InputError('bad-weight', `every training row of ${data.train} has weight 0; expected at least one positive weight`, {
+    throw new InputError('bad-weight', `every training row of ${clip(trainData.file)} has weight 0; expected at least one positive weight`, {
       file: descriptor.file,
       line: data.weighting?.line,
       key: `data.${data.weighting?.kind}`,
@@ -137,7 +143,8 @@ export async function loadModelData(
 /**
  * The row weights of a `data.weight` or `data.sigma` column: w as written (finite, >= 0), or
  * w = 1 / sigma^2 with sigma finite and > 0.
- * @throws InputError `bad-weight` naming the file, line, column and value of the first bad row
+ * @param parts the parts the rows were read from (lines table-wide), absent for one file
+ * @throws InputError `bad-weight` naming the file (the part), line, column and value of the first bad row
  */
 export function rowWeights(
   weighting: Weighting,
@@ -145,6 +152,7 @@ export function rowWeights(
   lines: Int32Array,
   rows: number,
   file: string,
+  parts?: DataPart[],
 ): { weights: Float64Array; sigma?: Float64Array } {
   const weights = new Float64Array(rows);
   const sigma = weighting.kind === 'sigma';
@@ -152,15 +160,60 @@ export function rowWeights(
     const v = values[i];
     const ok = sigma ? Number.isFinite(v) && v > 0 : Number.isFinite(v) && v >= 0;
     if (!ok) {
+      const place = placeOfLine({ file, parts }, lines[i]);
       throw new InputError(
         'bad-weight',
-        `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${lines[i]} of ${file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`,
-        { file, line: lines[i], key: weighting.column },
+        `column \`${weighting.column}\` (\`data.${weighting.kind}\`) is ${v} on line ${place.line} of ${place.file}; expected ${sigma ? 'a finite standard uncertainty above 0' : 'a finite weight of 0 or more'}`,
+        { file: place.file, line: place.line, key: weighting.column },
       );
     }
     weights[i] = sigma ? 1 / (v * v) : v;
   }
   return sigma ? { weights, sigma: values.subarray(0, rows) } : { weights };
+}
+
+/**
+ * The text of the category columns of a table, file by file (each part apart, its lines made
+ * table-wide as the numeric read made them), checked to give the same rows as the numbers.
+ * @throws InputError `csv-rows` when a file gives other rows of text than of numbers
+ */
+async function readCategoryText(
+  repo: RepoReader,
+  table: Table,
+  names: readonly string[],
+  maxBytes: number,
+): Promise<Map<string, string[]>> {
+  const files = table.parts ?? [{ file: table.file, lineOffset: 0 }];
+  const out = new Map<string, string[]>(names.map((n) => [n, []]));
+  let row = 0;
+  let left = maxBytes;
+  for (const part of files) {
+    const text = await readTextColumns(repo, part.file, names, Math.min(left, maxBytes));
+    left -= await repo.size(part.file);
+    const n = text.lines.length;
+    let same = row + n <= table.rows;
+    for (let i = 0; same && i < n; i++) same = text.lines[i] + part.lineOffset === table.lines[row + i];
+    if (!same) {
+      throw new InputError(
+        'csv-rows',
+        `${clip(part.file)} gives ${n} rows of text for its category columns but other rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
+        { file: part.file },
+      );
+    }
+    for (const name of names) {
+      const values = out.get(name) as string[];
+      for (const v of text.columns.get(name) as string[]) values.push(v);
+    }
+    row += n;
+  }
+  if (row !== table.rows) {
+    throw new InputError(
+      'csv-rows',
+      `${clip(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
+      { file: table.parts?.[0]?.file ?? table.file },
+    );
+  }
+  return out;
 }
 
 /**

@@ -2,18 +2,26 @@
  * The columns of one model's rows: what the loader produces and every later stage reads.
  */
 
+import type { DataPart } from './data-parts.js';
+
 /** The data of one model, as columns (column-major, one Float64Array per input). */
 export interface ModelData {
   /** Input columns in `design.inputs` order. */
   inputs: Float64Array[];
   /** Target column. */
   y: Float64Array;
-  /** 1-based file line of each row. */
+  /** 1-based file line of each row (read from parts: table-wide lines, see data-parts.ts). */
   lines: Int32Array;
   /** Number of rows. */
   rows: number;
-  /** Repository-relative file path. */
+  /** Repository-relative file path (read from parts: a label, see `parts`). */
   file: string;
+  /**
+   * Read from a list of parts (`data.train: [a.csv, b.csv]` or a glob): each part with its line
+   * offset, so that `placeOfLine` (data-parts.ts) names a row's part and its own line. Absent
+   * for one file.
+   */
+  parts?: DataPart[];
   /**
    * Row weights w (>= 0, finite) when the descriptor gives `data.weight` or `data.sigma`
    * (then w = 1 / sigma^2); absent: every row weighs 1.

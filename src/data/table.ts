@@ -30,7 +30,8 @@
  */
 
 import type { RepoReader } from '../repo/types.js';
-import { InputError } from '../core/errors.js';
+import { clip, InputError } from '../core/errors.js';
+import { MAX_TABLE_LINE, partsLabel, type DataPart } from './data-parts.js';
 import { DEFAULT_CHUNK_ROWS, DEFAULT_MAX_BYTES, planRequest, type ColumnPlan } from './csv-rules.js';
 import { FastPathDeclined, fastChunks } from './fast-path.js';
 import { openDataFile } from './gzip-stream.js';
@@ -43,8 +44,10 @@ export interface TableChunk {
   rows: number;
   /** One Float64Array per requested column, in the requested order, each of length `rows`. */
   columns: Float64Array[];
-  /** 1-based physical line of each row in the file. */
+  /** 1-based physical line of each row in the file (read from parts: table-wide, see data-parts.ts). */
   lines: Int32Array;
+  /** Read from parts: the part this chunk comes from (a chunk never spans two parts). Absent for one file. */
+  part?: DataPart;
 }
 
 /** What to read from a CSV file. */
@@ -73,10 +76,12 @@ export interface Table {
   rows: number;
   /** Requested columns by name, each length `rows`. */
   columns: Map<string, Float64Array>;
-  /** 1-based physical line of each row in the file, length `rows`. */
+  /** 1-based physical line of each row in the file, length `rows` (read from parts: table-wide, see data-parts.ts). */
   lines: Int32Array;
   /** Rows dropped for a missing cell (`missing: drop`); 0 otherwise. */
   dropped: number;
+  /** Read from a list of files: each part with its line offset, in reading order. Absent for one file. */
+  parts?: DataPart[];
 }
 
 /**
@@ -92,8 +97,13 @@ export interface Table {
  * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
  *   `general: true` to skip the fast path
  */
-export async function* readTableChunks(repo: RepoReader, path: string, options: ReadTableOptions): AsyncGenerator<TableChunk> {
+export async function* readTableChunks(repo: RepoReader, path: string | readonly string[], options: ReadTableOptions): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
+  if (typeof path !== 'string') {
+    await checkSizes(repo, path, settings.maxBytes);
+    yield* scanParts(repo, path, settings, () => undefined, false, undefined, (pieces) => pieces, []);
+    return;
+  }
   await checkSize(repo, path, settings.maxBytes);
   yield* scan(
     () => openDataFile(repo, path, settings.maxBytes),
@@ -118,17 +128,18 @@ export async function* readTableChunks(repo: RepoReader, path: string, options: 
  * @param options as for {@link readTableChunks}
  * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
  */
-export async function readTable(repo: RepoReader, path: string, options: ReadTableOptions): Promise<Table> {
+export async function readTable(repo: RepoReader, path: string | readonly string[], options: ReadTableOptions): Promise<Table> {
   const settings = checkOptions(options);
-  const size = await checkSize(repo, path, settings.maxBytes);
+  const size = typeof path === 'string' ? await checkSize(repo, path, settings.maxBytes) : await checkSizes(repo, path, settings.maxBytes);
   let header: string[] = [];
   let bytesRead = 0;
-  const counted = async function* (): AsyncIterable<Uint8Array> {
-    for await (const piece of openDataFile(repo, path, settings.maxBytes)) {
+  const count = async function* (pieces: AsyncIterable<Uint8Array>): AsyncIterable<Uint8Array> {
+    for await (const piece of pieces) {
       bytesRead += piece.length;
       yield piece;
     }
   };
+  const counted = (): AsyncIterable<Uint8Array> => count(openDataFile(repo, path as string, settings.maxBytes));
   // First position of each distinct requested name (a repeated name shares one array).
   const firstOf = settings.columns.map((name) => settings.columns.indexOf(name));
   let columns: Float64Array[] = [];
@@ -146,7 +157,12 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
     lines = nextLines;
   };
   const counts = { dropped: 0 };
-  for await (const chunk of scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)) {
+  const parts: DataPart[] = [];
+  const chunks =
+    typeof path === 'string'
+      ? scan(counted, path, settings, (plan) => (header = plan.header), false, true, counts)
+      : scanParts(repo, path, settings, (plan) => (header = plan.header), true, counts, count, parts);
+  for await (const chunk of chunks) {
     const needed = rows + chunk.rows;
     if (needed > lines.length) {
       let capacity = Math.max(needed, Math.ceil(lines.length * 1.5));
@@ -168,12 +184,13 @@ export async function readTable(repo: RepoReader, path: string, options: ReadTab
     if (!out.has(name)) out.set(name, rows === 0 ? new Float64Array(0) : columns[k].subarray(0, rows));
   });
   return {
-    file: path,
+    file: typeof path === 'string' ? path : partsLabel(path),
     header,
     rows,
     columns: out,
     lines: rows === 0 ? new Int32Array(0) : lines.subarray(0, rows),
     dropped: counts.dropped,
+    ...(typeof path === 'string' ? {} : { parts }),
   };
 }
 
@@ -241,6 +258,117 @@ async function checkSize(repo: RepoReader, path: string, maxBytes: number): Prom
     );
   }
   return size;
+}
+
+/**
+ * The size cap of a table read from parts: each part at most `maxBytes`, and all of them together
+ * too (InputError `file-too-large` naming the part that passes it); returns the total size.
+ */
+async function checkSizes(repo: RepoReader, paths: readonly string[], maxBytes: number): Promise<number> {
+  if (paths.length === 0) throw new TypeError('readTable: a list of parts must name at least one file');
+  let total = 0;
+  for (const path of paths) {
+    total += await checkSize(repo, path, maxBytes);
+    if (total > maxBytes) {
+      throw new InputError(
+        'file-too-large',
+        `the parts up to this one come to ${megabytes(total)} (${total} bytes), over the cap of ${megabytes(maxBytes)} (${maxBytes} bytes) that holds for all parts together; raise caps.max_file_mb in fitgate.yml`,
+        { file: path },
+      );
+    }
+  }
+  return total;
+}
+
+/**
+ * The chunks of a table read from parts, one part after the other (a chunk never spans two), each
+ * chunk's lines made table-wide (data-parts.ts) and tagged with its part. Every part's header must
+ * name the same columns in the same order as the first part's (InputError `csv-header-parts` at
+ * the first part whose header differs, naming its line and the first column that differs).
+ * Decompressed bytes count against one cap for all parts together: each part may use what the
+ * parts before it left of `maxBytes`.
+ *
+ * @param count wraps each opened byte stream (readTable counts the bytes read for its estimate)
+ * @param parts receives each part with its offset as reading reaches it
+ */
+async function* scanParts(
+  repo: RepoReader,
+  paths: readonly string[],
+  settings: Settings,
+  onHeader: (plan: ColumnPlan) => void,
+  recycle: boolean,
+  counts: { dropped: number } | undefined,
+  count: (pieces: AsyncIterable<Uint8Array>) => AsyncIterable<Uint8Array>,
+  parts: DataPart[],
+): AsyncGenerator<TableChunk> {
+  let first: string[] | null = null;
+  let offset = 0;
+  let left = settings.maxBytes;
+  for (const path of paths) {
+    const part: DataPart = { file: path, lineOffset: offset };
+    parts.push(part);
+    // The decompressed size of the part: the most bytes any one opening of it gave.
+    let used = 0;
+    const open = (): AsyncIterable<Uint8Array> => {
+      const source = openDataFile(repo, path, Math.min(settings.maxBytes, left));
+      return count(
+        (async function* () {
+          let seen = 0;
+          for await (const piece of source) {
+            seen += piece.length;
+            if (seen > used) used = seen;
+            yield piece;
+          }
+        })(),
+      );
+    };
+    const checkHeader = (plan: ColumnPlan): void => {
+      if (first === null) {
+        first = plan.header;
+        onHeader(plan);
+        return;
+      }
+      const differs = headerDifference(first, plan.header);
+      if (differs !== null) {
+        throw new InputError(
+          'csv-header-parts',
+          `the header on line ${plan.headerLine} differs from the first part's (${clip(paths[0])}) at column ${differs.column}: ${differs.text}; expected every part to name the same columns in the same order`,
+          { file: path, line: plan.headerLine, key: differs.name },
+        );
+      }
+    };
+    let lastLine = 0;
+    for await (const chunk of scan(open, path, settings, checkHeader, false, recycle, counts)) {
+      if (chunk.rows === 0) continue;
+      lastLine = chunk.lines[chunk.rows - 1];
+      if (offset > 0) {
+        if (offset + lastLine > MAX_TABLE_LINE) {
+          throw new InputError('too-large', `the parts hold more than ${MAX_TABLE_LINE} lines together; expected fewer`, { file: path });
+        }
+        for (let i = 0; i < chunk.rows; i++) chunk.lines[i] += offset;
+      }
+      chunk.part = part;
+      yield chunk;
+    }
+    left -= used;
+    offset += Math.max(1, lastLine);
+  }
+}
+
+/** Where two headers first differ: the 1-based column, the name there (or the missing one) and words for it; null when equal. */
+function headerDifference(first: readonly string[], other: readonly string[]): { column: number; name: string; text: string } | null {
+  const n = Math.max(first.length, other.length);
+  for (let k = 0; k < n; k++) {
+    if (first[k] === other[k]) continue;
+    const text =
+      other[k] === undefined
+        ? `it ends before \`${clip(first[k])}\``
+        : first[k] === undefined
+          ? `it has the extra column \`${clip(other[k])}\``
+          : `\`${clip(other[k])}\` where the first part has \`${clip(first[k])}\``;
+    return { column: k + 1, name: other[k] ?? first[k], text };
+  }
+  return null;
 }
 
 function megabytes(bytes: number): string {

@@ -8,6 +8,7 @@
 import { parse } from 'csv-parse/sync';
 import { InputError } from '../core/errors.js';
 import type { RepoReader } from '../repo/types.js';
+import { openDataFile } from './gzip-stream.js';
 
 /** Text cells of the requested columns and the 1-based line of each row. */
 export interface TextColumns {
@@ -17,13 +18,16 @@ export interface TextColumns {
 
 /**
  * Reads the named columns as text.
- * @param maxBytes size cap (the caller's; the numeric read of the same file checks it first)
+ * @param maxBytes size cap of the file and of its decompressed bytes (the caller's; the numeric read of the same file checks it first)
  * @throws InputError `csv-missing-column` (naming the columns that exist), `csv-syntax`, `file-too-large`
  */
 export async function readTextColumns(repo: RepoReader, path: string, names: readonly string[], maxBytes: number): Promise<TextColumns> {
   const size = await repo.size(path);
   if (size > maxBytes) throw new InputError('file-too-large', `${path} is ${size} bytes; the cap is ${maxBytes}`, { file: path });
-  const text = new TextDecoder('utf-8').decode(await repo.read(path));
+  // Through the same door as the numeric read: decompressed when `.gz`, the decompressed bytes held to the cap.
+  const pieces: Uint8Array[] = [];
+  for await (const piece of openDataFile(repo, path, maxBytes)) pieces.push(piece);
+  const text = new TextDecoder('utf-8').decode(Buffer.concat(pieces));
   let records: { record: string[]; info: { lines: number } }[];
   try {
     records = parse(text, { bom: true, trim: true, info: true, relax_column_count: true, skip_empty_lines: true }) as unknown as {

@@ -46,8 +46,12 @@ export interface PointSeries {
   thinned: boolean;
   /** How rows were kept, in words (empty when not thinned). */
   thinning: string;
-  /** 1-based file line of each kept row. */
+  /** 1-based file line of each kept row (read from parts: the line in its own part). */
   lines: number[];
+  /** Read from parts only: the parts, in reading order (absent for one file). */
+  files?: string[];
+  /** Read from parts only: each kept row's part, an index into `files`. */
+  file_index?: number[];
   /** Input values of each kept row, one array per input (charts of one input read `x[0]`). */
   x: (number | null)[][];
   /** Observed target. */

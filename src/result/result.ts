@@ -116,6 +116,11 @@ export interface ModelResult {
   descriptor: string;
   verdict: Verdict;
   rows: { train: number; holdout: number };
+  /**
+   * The data files read, repository-relative, in reading order; present only when `data.train` or
+   * `data.holdout` is a list of parts or a glob (so reports of one file per side keep their shape).
+   */
+  data?: { train: string[]; holdout: string[] };
   /** Rows dropped for a missing cell, per file; present only with `data.missing: drop`. */
   dropped?: { train: number; holdout: number };
   parameters: number;

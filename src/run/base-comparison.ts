@@ -4,6 +4,7 @@
  * renamed and moved by its data files, so that renaming a model cannot escape `base-change`.
  */
 import type { Descriptor } from '../config/types.js';
+import { dataFiles } from '../config/data-paths.js';
 import { fromJsonNumber, jsonNumber, type BaseComparison, type ModelMetrics, type ModelResult } from '../result/result.js';
 
 /** How a head model was matched with a base model. */
@@ -23,9 +24,17 @@ export interface BaseInput {
   commit: string;
 }
 
-/** The data files and target of a descriptor, as one key (`train`, `holdout`, `target`). */
+/**
+ * The data files and target of a descriptor, as one key (`train`, `holdout`, `target`); a side
+ * read from parts is the list of all its parts (so that a model whose parts change is not matched
+ * by its first part alone).
+ */
 export function dataKey(descriptor: Pick<Descriptor, 'data'>): string {
-  return JSON.stringify([descriptor.data.train, descriptor.data.holdout, descriptor.data.target]);
+  const side = (which: 'train' | 'holdout'): string | string[] => {
+    const files = dataFiles(descriptor.data, which);
+    return (which === 'train' ? descriptor.data.trainParts : descriptor.data.holdoutParts) === undefined ? files[0] : files;
+  };
+  return JSON.stringify([side('train'), side('holdout'), descriptor.data.target]);
 }
 
 /** The outcome of {@link matchBase}. */

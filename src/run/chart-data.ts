@@ -7,6 +7,7 @@
  * `JSON.stringify` unchanged.
  */
 import type { ModelData } from '../data/model-data.js';
+import { placeOfLine } from '../data/data-parts.js';
 import { predictRows } from '../design/blocks.js';
 import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/result.js';
 import { columnMedian } from '../diagnostics/column-median.js';
@@ -49,6 +50,14 @@ export function seriesPoints(inputs: number, max = MAX_CHART_POINTS): number {
   return Math.max(1, Math.min(max, Math.floor(MAX_SERIES_NUMBERS / (inputs + 4))));
 }
 
+/** Read from parts: the parts and each kept row's part (`files`, `file_index`); nothing for one file. */
+function partIndex(data: ModelData, keep: Int32Array): { files?: string[]; file_index?: number[] } {
+  const parts = data.parts;
+  if (parts === undefined) return {};
+  const index = new Map(parts.map((p, k) => [p.file, k]));
+  return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get(placeOfLine(data, data.lines[i]).file) ?? 0) };
+}
+
 function series(data: ModelData, predictions: Float64Array, max: number): PointSeries {
   const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
   const thinned = keep.length < data.rows;
@@ -58,7 +67,8 @@ function series(data: ModelData, predictions: Float64Array, max: number): PointS
     shown: keep.length,
     thinned,
     thinning: thinned ? `${keep.length} of ${data.rows} rows, evenly spaced through the file` : '',
-    lines: Array.from(keep, (i) => data.lines[i]),
+    lines: Array.from(keep, (i) => placeOfLine(data, data.lines[i]).line),
+    ...partIndex(data, keep),
     x: data.inputs.map(pick),
     actual: pick(data.y),
     fitted: pick(predictions),

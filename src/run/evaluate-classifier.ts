@@ -5,6 +5,7 @@
  */
 import { CHECKS, runClassifierCheck, type ClassifierContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
+import { dataFilesField } from '../config/data-paths.js';
 import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 import type { RepoReader } from '../repo/types.js';
 import type { BaseInput } from './base-comparison.js';
@@ -76,6 +77,7 @@ export async function evaluateClassifier(
     descriptor: descriptor.file,
     verdict,
     rows: { train: model.train.rows, holdout: model.holdout.rows },
+    ...dataFilesField(descriptor.data),
     parameters: model.context.design.p,
     columns: [...model.context.design.columnNames],
     metrics,

@@ -4,6 +4,7 @@
  */
 import { checksFor, runCheck, type CheckContext } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
+import { dataFilesField } from '../config/data-paths.js';
 import { Deadline, TimeLimitExceeded, withDeadline } from '../core/deadline.js';
 import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
@@ -125,6 +126,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     descriptor: descriptor.file,
     verdict,
     rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    ...dataFilesField(descriptor.data),
     ...(model.tables.train.dropped !== undefined
       ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
       : {}),

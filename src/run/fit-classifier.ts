@@ -9,6 +9,7 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { InputError } from '../core/errors.js';
 import { loadClassifierData, type ClassLabels } from '../data/labels.js';
 import type { ModelData } from '../data/model-data.js';
+import { placeOfLine } from '../data/data-parts.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
 import { addProducts } from '../kernels/index.js';
 import { ColumnSpread } from '../design/column-spread.js';
@@ -87,6 +88,7 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
       shipped: shippedClassifier(descriptor, design, train, holdout, fit, trainEta, holdoutEta),
       columnSd,
       leakage: leakageOf(train, holdout),
+      ...(train.parts !== undefined ? { trainSource: { file: train.file, parts: train.parts } } : {}),
       complexity: sweepClassifier(descriptor, design, train),
     },
     labels: labels as unknown as ClassLabels,
@@ -205,6 +207,12 @@ function leakageOf(train: ModelData, holdout: ModelData): ClassifierContext['lea
   const found = findLeakage(train, holdout);
   return {
     duplicates: found.fullMatches,
-    examples: found.holdoutLines.map((line, i) => ({ holdoutLine: line, trainLine: found.trainLines[i] })),
+    examples: found.holdoutLines.map((line, i) => {
+      if (train.parts === undefined && holdout.parts === undefined) return { holdoutLine: line, trainLine: found.trainLines[i] };
+      // Read from parts: each part's own line and its file.
+      const h = placeOfLine(holdout, line);
+      const t = placeOfLine(train, found.trainLines[i]);
+      return { holdoutLine: h.line, trainLine: t.line, holdoutFile: h.file, trainFile: t.file };
+    }),
   };
 }

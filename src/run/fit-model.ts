@@ -6,6 +6,7 @@ import type { CoreMetrics } from '../checks/index.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
 import type { ModelTables } from '../data/load-model-data.js';
+import { lineOfFile } from '../data/data-parts.js';
 import type { Design } from '../design/design-matrix.js';
 import { predictRows } from '../design/blocks.js';
 import { range } from '../design/stats.js';
@@ -18,6 +19,27 @@ import type { FitResult } from '../fit/index.js';
 import type { RepoReader } from '../repo/types.js';
 import { foldPass, refinePass, scoringPass } from './passes.js';
 import { planModel } from './plan.js';
+
+/**
+ * Runs `step` and, when the training rows were read from parts, rewrites the `line N of FILE` of
+ * a `design-overflow` error (passes.ts names a training row by its table-wide line) into the
+ * part's own line and path (data-parts.ts). Other errors, and data of one file, pass unchanged.
+ */
+function partsNamed<T>(tables: ModelTables, step: () => T): T {
+  try {
+    return step();
+  } catch (error) {
+    const train = tables.train;
+    if (!(error instanceof InputError) || error.code !== 'design-overflow' || train.parts === undefined) throw error;
+    const found = / on line (\d+) of /.exec(error.message);
+    const label = clip(train.file);
+    if (found === null) throw error;
+    const after = found.index + found[0].length;
+    if (error.message.slice(after, after + label.length) !== label) throw error;
+    const message = `${error.message.slice(0, found.index)} on ${lineOfFile(train, Number(found[1]))}${error.message.slice(after + label.length)}`;
+    throw new InputError(error.code, message, error.location);
+  }
+}
 
 /** A fitted model with everything checks and reporters read. */
 export interface FittedModel {
@@ -46,7 +68,7 @@ export interface FittedModel {
 export async function fitModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedModel> {
   const plan = await planModel(repo, descriptor, settings);
   const { design, tables, folds } = plan;
-  const first = foldPass(plan);
+  const first = partsNamed(plan.tables, () => foldPass(plan));
   const fit = refinePass(plan, first.fit);
   const scored = scoringPass(plan, fit, first.foldFactors);
   if (descriptor.fit.refit === false)

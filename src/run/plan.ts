@@ -6,6 +6,7 @@
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
 import { loadModelData, type ModelTables } from '../data/load-model-data.js';
+import { lineOfFile } from '../data/data-parts.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { meanAndSd } from '../design/stats.js';
 import { createTerm, termInputs } from '../design/terms/index.js';
@@ -89,7 +90,7 @@ export async function planModel(
     if (i >= 0) {
       throw new InputError(
         'target-range',
-        `the target \`${clip(descriptor.data.target)}\` is ${data.y[i]} on line ${data.lines[i]} of ${clip(data.file)}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
+        `the target \`${clip(descriptor.data.target)}\` is ${data.y[i]} on ${lineOfFile(data, data.lines[i])}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
         { file, line: descriptor.data.lines.target, key: 'data.target' },
       );
     }

@@ -8,6 +8,7 @@ import type { Design } from '../../design/design-matrix.js';
 import type { ClassifierSweep } from '../../diagnostics/classifier-complexity.js';
 import type { Calibration, ClassificationFigures } from '../../diagnostics/classification-metrics.js';
 import type { Separation } from '../../diagnostics/separation.js';
+import type { DataPart } from '../../data/data-parts.js';
 import type { FitResult } from '../../fit/index.js';
 import type { LogisticFit } from '../../fit/logistic.js';
 import type { ModelResult } from '../../result/result.js';
@@ -50,7 +51,10 @@ export interface ClassifierContext {
   /** Population sd of each design column over the training rows. */
   columnSd: Float64Array;
   /** Exact duplicates between training and hold-out rows (inputs and label): count and examples. */
-  leakage: { duplicates: number; examples: { trainLine: number; holdoutLine: number }[] };
+  /** With data read from parts, the lines are each part's own and `trainFile` / `holdoutFile` name the part. */
+  leakage: { duplicates: number; examples: { trainLine: number; holdoutLine: number; trainFile?: string; holdoutFile?: string }[] };
+  /** The training rows' file and parts (data-parts.ts), to name a training line's part; absent: lines are the file's own. */
+  trainSource?: { file: string; parts?: DataPart[] };
   /** The same model on the base commit, when there is one. */
   baseline: ModelResult | null;
   /** The complexity sweep scored by CV log-loss, or null when the model has nothing to sweep. */

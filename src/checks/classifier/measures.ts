@@ -4,6 +4,7 @@
  * (mean -[y log p + (1 - y) log(1 - p)]) where the regression check uses the RMSE.
  */
 import { formatNumber } from '../../core/format.js';
+import { clip } from '../../core/errors.js';
 import { jsonMetrics } from '../../core/json.js';
 import { fromJsonNumber } from '../../result/result.js';
 import type { Measurement } from '../types.js';
@@ -65,7 +66,10 @@ export function classifierCrossValidation({ crossValidation: cv, train }: Classi
 export function classifierLeakage({ leakage, design }: ClassifierContext): Measurement {
   if (design.inputs.length === 0)
     return { value: null, reason: 'not-applicable', message: 'the model reads no input column, so no row can repeat' };
-  const shown = leakage.examples.map((e) => `hold-out line ${e.holdoutLine} = training line ${e.trainLine}`).join(', ');
+  const of = (file: string | undefined): string => (file === undefined ? '' : ` of ${clip(file)}`);
+  const shown = leakage.examples
+    .map((e) => `hold-out line ${e.holdoutLine}${of(e.holdoutFile)} = training line ${e.trainLine}${of(e.trainFile)}`)
+    .join(', ');
   return {
     value: leakage.duplicates,
     message:

@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,7 +54,7 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
@@ -836,14 +836,14 @@ return errors === 0;
 validate92.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema27 = {"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}};
-const schema28 = {"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}};
+const schema28 = {"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}};
 const schema29 = {"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}};
 const schema30 = {"description":"A finite number, or null.","type":["number","null"]};
 
-function validate106(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate107(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate106.evaluated;
+const evaluated0 = validate107.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -851,19 +851,19 @@ if(evaluated0.dynamicItems){
 evaluated0.items = undefined;
 }
 if((!((typeof data == "number") && (isFinite(data)))) && (data !== null)){
-validate106.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema30.type},message:"must be number,null"}];
+validate107.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema30.type},message:"must be number,null"}];
 return false;
 }
-validate106.errors = vErrors;
+validate107.errors = vErrors;
 return errors === 0;
 }
-validate106.evaluated = {"dynamicProps":false,"dynamicItems":false};
+validate107.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
 
-function validate105(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate106(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate105.evaluated;
+const evaluated0 = validate106.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -876,8 +876,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate106(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -887,14 +887,14 @@ break;
 }
 }
 else {
-validate105.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate106.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate105.errors = vErrors;
+validate106.errors = vErrors;
 return errors === 0;
 }
-validate105.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate106.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
 function validate101(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1002,8 +1002,8 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.x !== undefined){
-let data6 = data.x;
+if(data.files !== undefined){
+let data6 = data.files;
 const _errs11 = errors;
 if(errors === _errs11){
 if(Array.isArray(data6)){
@@ -1011,9 +1011,9 @@ var valid2 = true;
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs13 = errors;
-if(!(validate105(data6[i1], {instancePath:instancePath+"/x/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
-errors = vErrors.length;
+if(typeof data6[i1] !== "string"){
+validate101.errors = [{instancePath:instancePath+"/files/" + i1,schemaPath:"#/properties/files/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
 }
 var valid2 = _errs13 === errors;
 if(!valid2){
@@ -1022,7 +1022,7 @@ break;
 }
 }
 else {
-validate101.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate101.errors = [{instancePath:instancePath+"/files",schemaPath:"#/properties/files/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1032,23 +1032,29 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.actual !== undefined){
-const _errs14 = errors;
-if(!(validate105(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(data.file_index !== undefined){
+let data8 = data.file_index;
+const _errs15 = errors;
+if(errors === _errs15){
+if(Array.isArray(data8)){
+var valid3 = true;
+const len2 = data8.length;
+for(let i2=0; i2<len2; i2++){
+const _errs17 = errors;
+if(!(validate55(data8[i2], {instancePath:instancePath+"/file_index/" + i2,parentData:data8,parentDataProperty:i2,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs14 === errors;
+var valid3 = _errs17 === errors;
+if(!valid3){
+break;
+}
+}
 }
 else {
-var valid0 = true;
+validate101.errors = [{instancePath:instancePath+"/file_index",schemaPath:"#/properties/file_index/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
 }
-if(valid0){
-if(data.fitted !== undefined){
-const _errs15 = errors;
-if(!(validate105(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
-errors = vErrors.length;
 }
 var valid0 = _errs15 === errors;
 }
@@ -1056,16 +1062,72 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.residual !== undefined){
-const _errs16 = errors;
-if(!(validate105(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(data.x !== undefined){
+let data10 = data.x;
+const _errs18 = errors;
+if(errors === _errs18){
+if(Array.isArray(data10)){
+var valid4 = true;
+const len3 = data10.length;
+for(let i3=0; i3<len3; i3++){
+const _errs20 = errors;
+if(!(validate106(data10[i3], {instancePath:instancePath+"/x/" + i3,parentData:data10,parentDataProperty:i3,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs16 === errors;
+var valid4 = _errs20 === errors;
+if(!valid4){
+break;
+}
+}
+}
+else {
+validate101.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs18 === errors;
 }
 else {
 var valid0 = true;
+}
+if(valid0){
+if(data.actual !== undefined){
+const _errs21 = errors;
+if(!(validate106(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs21 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.fitted !== undefined){
+const _errs22 = errors;
+if(!(validate106(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs22 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.residual !== undefined){
+const _errs23 = errors;
+if(!(validate106(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs23 === errors;
+}
+else {
+var valid0 = true;
+}
+}
 }
 }
 }
@@ -1091,10 +1153,10 @@ validate101.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false}
 const schema31 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
 const schema32 = {"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}};
 
-function validate115(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate116(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate115.evaluated;
+const evaluated0 = validate116.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1104,12 +1166,12 @@ evaluated0.items = undefined;
 if(errors === 0){
 if(Array.isArray(data)){
 if(data.length > 2){
-validate115.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
+validate116.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
 return false;
 }
 else {
 if(data.length < 2){
-validate115.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
+validate116.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
 return false;
 }
 else {
@@ -1117,8 +1179,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate106(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -1130,21 +1192,21 @@ break;
 }
 }
 else {
-validate115.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate116.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate115.errors = vErrors;
+validate116.errors = vErrors;
 return errors === 0;
 }
-validate115.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate116.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema33 = {"description":"Finite numbers.","type":"array","items":{"type":"number"}};
 
-function validate118(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate119(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate118.evaluated;
+const evaluated0 = validate119.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1159,7 +1221,7 @@ for(let i0=0; i0<len0; i0++){
 let data0 = data[i0];
 const _errs1 = errors;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-validate118.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate119.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid0 = _errs1 === errors;
@@ -1169,20 +1231,20 @@ break;
 }
 }
 else {
-validate118.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate119.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate118.errors = vErrors;
+validate119.errors = vErrors;
 return errors === 0;
 }
-validate118.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate119.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate114(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate115(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate114.evaluated;
+const evaluated0 = validate115.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1193,14 +1255,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((data.input === undefined) && (missing0 = "input")) || ((data.others === undefined) && (missing0 = "others"))) || ((data.range === undefined) && (missing0 = "range"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.y === undefined) && (missing0 = "y"))){
-validate114.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate115.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!(func1.call(schema31.properties, key0))){
-validate114.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate115.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1209,7 +1271,7 @@ if(_errs1 === errors){
 if(data.input !== undefined){
 const _errs2 = errors;
 if(typeof data.input !== "string"){
-validate114.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate115.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1227,7 +1289,7 @@ for(const key1 in data1){
 let data2 = data1[key1];
 const _errs7 = errors;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-validate114.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate115.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid1 = _errs7 === errors;
@@ -1237,7 +1299,7 @@ break;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate115.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1249,8 +1311,8 @@ var valid0 = true;
 if(valid0){
 if(data.range !== undefined){
 const _errs9 = errors;
-if(!(validate115(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
+if(!(validate116(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -1261,8 +1323,8 @@ var valid0 = true;
 if(valid0){
 if(data.x !== undefined){
 const _errs10 = errors;
-if(!(validate118(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
+if(!(validate119(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs10 === errors;
@@ -1273,8 +1335,8 @@ var valid0 = true;
 if(valid0){
 if(data.y !== undefined){
 const _errs11 = errors;
-if(!(validate105(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(!(validate106(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs11 === errors;
@@ -1285,8 +1347,8 @@ var valid0 = true;
 if(valid0){
 if(data.band !== undefined){
 const _errs12 = errors;
-if(!(validate115(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
+if(!(validate116(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs12 === errors;
@@ -1309,14 +1371,14 @@ if(errors === _errs15){
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 let missing1;
 if((((data8.from === undefined) && (missing1 = "from")) || ((data8.to === undefined) && (missing1 = "to"))) || ((data8.side === undefined) && (missing1 = "side"))){
-validate114.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+validate115.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
 const _errs17 = errors;
 for(const key2 in data8){
 if(!(((key2 === "from") || (key2 === "to")) || (key2 === "side"))){
-validate114.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate115.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1324,8 +1386,8 @@ break;
 if(_errs17 === errors){
 if(data8.from !== undefined){
 const _errs18 = errors;
-if(!(validate106(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1336,8 +1398,8 @@ var valid3 = true;
 if(valid3){
 if(data8.to !== undefined){
 const _errs19 = errors;
-if(!(validate106(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs19 === errors;
@@ -1350,7 +1412,7 @@ if(data8.side !== undefined){
 let data11 = data8.side;
 const _errs20 = errors;
 if(!((data11 === "above") || (data11 === "below"))){
-validate114.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema31.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
+validate115.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema31.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid3 = _errs20 === errors;
@@ -1364,7 +1426,7 @@ var valid3 = true;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate115.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1375,7 +1437,7 @@ break;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate115.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1389,7 +1451,7 @@ if(data.source !== undefined){
 let data12 = data.source;
 const _errs21 = errors;
 if(!((data12 === "swing") || (data12 === "data"))){
-validate114.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema31.properties.source.enum},message:"must be equal to one of the allowed values"}];
+validate115.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema31.properties.source.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs21 === errors;
@@ -1405,14 +1467,14 @@ if(errors === _errs22){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
 if((((data13.commit === undefined) && (missing2 = "commit")) || ((data13.x === undefined) && (missing2 = "x"))) || ((data13.y === undefined) && (missing2 = "y"))){
-validate114.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+validate115.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs24 = errors;
 for(const key3 in data13){
 if(!(((key3 === "commit") || (key3 === "x")) || (key3 === "y"))){
-validate114.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+validate115.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1421,7 +1483,7 @@ if(_errs24 === errors){
 if(data13.commit !== undefined){
 const _errs25 = errors;
 if(typeof data13.commit !== "string"){
-validate114.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate115.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid4 = _errs25 === errors;
@@ -1432,8 +1494,8 @@ var valid4 = true;
 if(valid4){
 if(data13.x !== undefined){
 const _errs27 = errors;
-if(!(validate118(data13.x, {instancePath:instancePath+"/base/x",parentData:data13,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
+if(!(validate119(data13.x, {instancePath:instancePath+"/base/x",parentData:data13,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid4 = _errs27 === errors;
@@ -1444,8 +1506,8 @@ var valid4 = true;
 if(valid4){
 if(data13.y !== undefined){
 const _errs28 = errors;
-if(!(validate105(data13.y, {instancePath:instancePath+"/base/y",parentData:data13,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(!(validate106(data13.y, {instancePath:instancePath+"/base/y",parentData:data13,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid4 = _errs28 === errors;
@@ -1459,7 +1521,7 @@ var valid4 = true;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate115.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1480,14 +1542,14 @@ var valid0 = true;
 }
 }
 else {
-validate114.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate115.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate114.errors = vErrors;
+validate115.errors = vErrors;
 return errors === 0;
 }
-validate114.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate115.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
 function validate100(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1602,8 +1664,8 @@ errors++;
 var _valid0 = _errs12 === errors;
 valid2 = valid2 || _valid0;
 const _errs14 = errors;
-if(!(validate114(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
+if(!(validate115(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
 errors = vErrors.length;
 }
 if(errors === _errs14){
@@ -1671,8 +1733,8 @@ var valid3 = true;
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs18 = errors;
-if(!(validate114(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
+if(!(validate115(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1778,8 +1840,8 @@ var valid5 = true;
 if(valid5){
 if(data8.settings !== undefined){
 const _errs30 = errors;
-if(!(validate118(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
+if(!(validate119(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs30 === errors;
@@ -1790,8 +1852,8 @@ var valid5 = true;
 if(valid5){
 if(data8.cv !== undefined){
 const _errs31 = errors;
-if(!(validate105(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(!(validate106(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs31 === errors;
@@ -1819,8 +1881,8 @@ errors++;
 var _valid2 = _errs34 === errors;
 valid6 = valid6 || _valid2;
 const _errs36 = errors;
-if(!(validate105(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(!(validate106(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var _valid2 = _errs36 === errors;
@@ -1854,8 +1916,8 @@ var valid5 = true;
 if(valid5){
 if(data8.chosen !== undefined){
 const _errs37 = errors;
-if(!(validate106(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs37 === errors;
@@ -1866,8 +1928,8 @@ var valid5 = true;
 if(valid5){
 if(data8.suggested !== undefined){
 const _errs38 = errors;
-if(!(validate106(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs38 === errors;
@@ -1978,8 +2040,8 @@ var valid7 = true;
 if(valid7){
 if(data16.values !== undefined){
 const _errs46 = errors;
-if(!(validate105(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+if(!(validate106(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs46 === errors;
@@ -1990,8 +2052,8 @@ var valid7 = true;
 if(valid7){
 if(data16.limit !== undefined){
 const _errs47 = errors;
-if(!(validate106(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs47 === errors;
@@ -2002,8 +2064,8 @@ var valid7 = true;
 if(valid7){
 if(data16.warn !== undefined){
 const _errs48 = errors;
-if(!(validate106(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate107(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs48 === errors;
@@ -2227,11 +2289,93 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.parameters !== undefined){
+if(data.data !== undefined){
+let data9 = data.data;
 const _errs17 = errors;
-if(!(validate55(data.parameters, {instancePath:instancePath+"/parameters",parentData:data,parentDataProperty:"parameters",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
-errors = vErrors.length;
+if(errors === _errs17){
+if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+let missing3;
+if(((data9.train === undefined) && (missing3 = "train")) || ((data9.holdout === undefined) && (missing3 = "holdout"))){
+validate61.errors = [{instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+return false;
+}
+else {
+const _errs19 = errors;
+for(const key3 in data9){
+if(!((key3 === "train") || (key3 === "holdout"))){
+validate61.errors = [{instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs19 === errors){
+if(data9.train !== undefined){
+let data10 = data9.train;
+const _errs20 = errors;
+if(errors === _errs20){
+if(Array.isArray(data10)){
+var valid4 = true;
+const len0 = data10.length;
+for(let i0=0; i0<len0; i0++){
+const _errs22 = errors;
+if(typeof data10[i0] !== "string"){
+validate61.errors = [{instancePath:instancePath+"/data/train/" + i0,schemaPath:"#/properties/data/properties/train/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid4 = _errs22 === errors;
+if(!valid4){
+break;
+}
+}
+}
+else {
+validate61.errors = [{instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid3 = _errs20 === errors;
+}
+else {
+var valid3 = true;
+}
+if(valid3){
+if(data9.holdout !== undefined){
+let data12 = data9.holdout;
+const _errs24 = errors;
+if(errors === _errs24){
+if(Array.isArray(data12)){
+var valid5 = true;
+const len1 = data12.length;
+for(let i1=0; i1<len1; i1++){
+const _errs26 = errors;
+if(typeof data12[i1] !== "string"){
+validate61.errors = [{instancePath:instancePath+"/data/holdout/" + i1,schemaPath:"#/properties/data/properties/holdout/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid5 = _errs26 === errors;
+if(!valid5){
+break;
+}
+}
+}
+else {
+validate61.errors = [{instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid3 = _errs24 === errors;
+}
+else {
+var valid3 = true;
+}
+}
+}
+}
+}
+else {
+validate61.errors = [{instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
 }
 var valid0 = _errs17 === errors;
 }
@@ -2239,21 +2383,33 @@ else {
 var valid0 = true;
 }
 if(valid0){
+if(data.parameters !== undefined){
+const _errs28 = errors;
+if(!(validate55(data.parameters, {instancePath:instancePath+"/parameters",parentData:data,parentDataProperty:"parameters",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs28 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
 if(data.columns !== undefined){
-let data10 = data.columns;
-const _errs18 = errors;
-if(errors === _errs18){
-if(Array.isArray(data10)){
-var valid3 = true;
-const len0 = data10.length;
-for(let i0=0; i0<len0; i0++){
-const _errs20 = errors;
-if(typeof data10[i0] !== "string"){
-validate61.errors = [{instancePath:instancePath+"/columns/" + i0,schemaPath:"#/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+let data15 = data.columns;
+const _errs29 = errors;
+if(errors === _errs29){
+if(Array.isArray(data15)){
+var valid6 = true;
+const len2 = data15.length;
+for(let i2=0; i2<len2; i2++){
+const _errs31 = errors;
+if(typeof data15[i2] !== "string"){
+validate61.errors = [{instancePath:instancePath+"/columns/" + i2,schemaPath:"#/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
-var valid3 = _errs20 === errors;
-if(!valid3){
+var valid6 = _errs31 === errors;
+if(!valid6){
 break;
 }
 }
@@ -2263,19 +2419,19 @@ validate61.errors = [{instancePath:instancePath+"/columns",schemaPath:"#/propert
 return false;
 }
 }
-var valid0 = _errs18 === errors;
+var valid0 = _errs29 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.metrics !== undefined){
-let data12 = data.metrics;
-const _errs22 = errors;
-const _errs23 = errors;
-let valid4 = false;
-const _errs24 = errors;
-if(data12 !== null){
+let data17 = data.metrics;
+const _errs33 = errors;
+const _errs34 = errors;
+let valid7 = false;
+const _errs35 = errors;
+if(data17 !== null){
 const err0 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err0];
@@ -2285,28 +2441,28 @@ vErrors.push(err0);
 }
 errors++;
 }
-var _valid0 = _errs24 === errors;
-valid4 = valid4 || _valid0;
-const _errs26 = errors;
-if(errors === _errs26){
-if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
-const _errs28 = errors;
-for(const key3 in data12){
-if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key3))){
-let data13 = data12[key3];
-const _errs29 = errors;
-const _errs30 = errors;
-let valid6 = false;
-const _errs31 = errors;
-if(!(validate68(data13, {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data12,parentDataProperty:key3,rootData,dynamicAnchors}))){
+var _valid0 = _errs35 === errors;
+valid7 = valid7 || _valid0;
+const _errs37 = errors;
+if(errors === _errs37){
+if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
+const _errs39 = errors;
+for(const key4 in data17){
+if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key4))){
+let data18 = data17[key4];
+const _errs40 = errors;
+const _errs41 = errors;
+let valid9 = false;
+const _errs42 = errors;
+if(!(validate68(data18, {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data17,parentDataProperty:key4,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid1 = _errs31 === errors;
-valid6 = valid6 || _valid1;
-const _errs32 = errors;
-if(typeof data13 !== "string"){
-const err1 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/1/type",keyword:"type",params:{type: "string"},message:"must be string"};
+var _valid1 = _errs42 === errors;
+valid9 = valid9 || _valid1;
+const _errs43 = errors;
+if(typeof data18 !== "string"){
+const err1 = {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/1/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2315,11 +2471,11 @@ vErrors.push(err1);
 }
 errors++;
 }
-var _valid1 = _errs32 === errors;
-valid6 = valid6 || _valid1;
-const _errs34 = errors;
-if(data13 !== null){
-const err2 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/2/type",keyword:"type",params:{type: "null"},message:"must be null"};
+var _valid1 = _errs43 === errors;
+valid9 = valid9 || _valid1;
+const _errs45 = errors;
+if(data18 !== null){
+const err2 = {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/2/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2328,10 +2484,10 @@ vErrors.push(err2);
 }
 errors++;
 }
-var _valid1 = _errs34 === errors;
-valid6 = valid6 || _valid1;
-if(!valid6){
-const err3 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid1 = _errs45 === errors;
+valid9 = valid9 || _valid1;
+if(!valid9){
+const err3 = {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2341,135 +2497,135 @@ vErrors.push(err3);
 errors++;
 }
 else {
-errors = _errs30;
+errors = _errs41;
 if(vErrors !== null){
-if(_errs30){
-vErrors.length = _errs30;
+if(_errs41){
+vErrors.length = _errs41;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid5 = _errs29 === errors;
-if(!valid5){
+var valid8 = _errs40 === errors;
+if(!valid8){
 break;
 }
 }
 }
-if(_errs28 === errors){
-if(data12.train_rmse !== undefined){
-const _errs36 = errors;
-if(!(validate68(data12.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data12,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
+if(_errs39 === errors){
+if(data17.train_rmse !== undefined){
+const _errs47 = errors;
+if(!(validate68(data17.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data17,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs36 === errors;
+var valid10 = _errs47 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.holdout_rmse !== undefined){
-const _errs37 = errors;
-if(!(validate68(data12.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data12,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.holdout_rmse !== undefined){
+const _errs48 = errors;
+if(!(validate68(data17.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data17,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs37 === errors;
+var valid10 = _errs48 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.train_mae !== undefined){
-const _errs38 = errors;
-if(!(validate68(data12.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data12,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.train_mae !== undefined){
+const _errs49 = errors;
+if(!(validate68(data17.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data17,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs38 === errors;
+var valid10 = _errs49 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.holdout_mae !== undefined){
-const _errs39 = errors;
-if(!(validate68(data12.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data12,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.holdout_mae !== undefined){
+const _errs50 = errors;
+if(!(validate68(data17.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data17,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs39 === errors;
+var valid10 = _errs50 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.train_r2 !== undefined){
-const _errs40 = errors;
-if(!(validate68(data12.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data12,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.train_r2 !== undefined){
+const _errs51 = errors;
+if(!(validate68(data17.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data17,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs40 === errors;
+var valid10 = _errs51 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.holdout_r2 !== undefined){
-const _errs41 = errors;
-if(!(validate68(data12.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data12,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.holdout_r2 !== undefined){
+const _errs52 = errors;
+if(!(validate68(data17.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data17,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs41 === errors;
+var valid10 = _errs52 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.gap_ratio !== undefined){
-const _errs42 = errors;
-if(!(validate68(data12.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data12,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.gap_ratio !== undefined){
+const _errs53 = errors;
+if(!(validate68(data17.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data17,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs42 === errors;
+var valid10 = _errs53 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.params_per_sample !== undefined){
-const _errs43 = errors;
-if(!(validate68(data12.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data12,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.params_per_sample !== undefined){
+const _errs54 = errors;
+if(!(validate68(data17.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data17,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs43 === errors;
+var valid10 = _errs54 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.max_std_coefficient !== undefined){
-const _errs44 = errors;
-if(!(validate68(data12.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data12,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.max_std_coefficient !== undefined){
+const _errs55 = errors;
+if(!(validate68(data17.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data17,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs44 === errors;
+var valid10 = _errs55 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.max_std_coefficient_column !== undefined){
-let data23 = data12.max_std_coefficient_column;
-const _errs45 = errors;
-if((typeof data23 !== "string") && (data23 !== null)){
+if(valid10){
+if(data17.max_std_coefficient_column !== undefined){
+let data28 = data17.max_std_coefficient_column;
+const _errs56 = errors;
+if((typeof data28 !== "string") && (data28 !== null)){
 const err4 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err4];
@@ -2479,46 +2635,46 @@ vErrors.push(err4);
 }
 errors++;
 }
-var valid7 = _errs45 === errors;
+var valid10 = _errs56 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.max_abs_coefficient !== undefined){
-const _errs47 = errors;
-if(!(validate68(data12.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data12,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.max_abs_coefficient !== undefined){
+const _errs58 = errors;
+if(!(validate68(data17.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data17,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs47 === errors;
+var valid10 = _errs58 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.rank !== undefined){
-const _errs48 = errors;
-if(!(validate55(data12.rank, {instancePath:instancePath+"/metrics/rank",parentData:data12,parentDataProperty:"rank",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.rank !== undefined){
+const _errs59 = errors;
+if(!(validate55(data17.rank, {instancePath:instancePath+"/metrics/rank",parentData:data17,parentDataProperty:"rank",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs48 === errors;
+var valid10 = _errs59 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
-if(valid7){
-if(data12.condition_number !== undefined){
-const _errs49 = errors;
-if(!(validate68(data12.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data12,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
+if(valid10){
+if(data17.condition_number !== undefined){
+const _errs60 = errors;
+if(!(validate68(data17.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data17,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs49 === errors;
+var valid10 = _errs60 === errors;
 }
 else {
-var valid7 = true;
+var valid10 = true;
 }
 }
 }
@@ -2545,9 +2701,9 @@ vErrors.push(err5);
 errors++;
 }
 }
-var _valid0 = _errs26 === errors;
-valid4 = valid4 || _valid0;
-if(!valid4){
+var _valid0 = _errs37 === errors;
+valid7 = valid7 || _valid0;
+if(!valid7){
 const err6 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err6];
@@ -2560,37 +2716,37 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs23;
+errors = _errs34;
 if(vErrors !== null){
-if(_errs23){
-vErrors.length = _errs23;
+if(_errs34){
+vErrors.length = _errs34;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs22 === errors;
+var valid0 = _errs33 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.coefficients !== undefined){
-let data27 = data.coefficients;
-const _errs50 = errors;
-if(errors === _errs50){
-if(Array.isArray(data27)){
-var valid8 = true;
-const len1 = data27.length;
-for(let i1=0; i1<len1; i1++){
-const _errs52 = errors;
-if(!(validate68(data27[i1], {instancePath:instancePath+"/coefficients/" + i1,parentData:data27,parentDataProperty:i1,rootData,dynamicAnchors}))){
+let data32 = data.coefficients;
+const _errs61 = errors;
+if(errors === _errs61){
+if(Array.isArray(data32)){
+var valid11 = true;
+const len3 = data32.length;
+for(let i3=0; i3<len3; i3++){
+const _errs63 = errors;
+if(!(validate68(data32[i3], {instancePath:instancePath+"/coefficients/" + i3,parentData:data32,parentDataProperty:i3,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid8 = _errs52 === errors;
-if(!valid8){
+var valid11 = _errs63 === errors;
+if(!valid11){
 break;
 }
 }
@@ -2600,19 +2756,19 @@ validate61.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs50 === errors;
+var valid0 = _errs61 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.shipped !== undefined){
-let data29 = data.shipped;
-const _errs53 = errors;
-const _errs54 = errors;
-let valid9 = false;
-const _errs55 = errors;
-if(data29 !== null){
+let data34 = data.shipped;
+const _errs64 = errors;
+const _errs65 = errors;
+let valid12 = false;
+const _errs66 = errors;
+if(data34 !== null){
 const err7 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err7];
@@ -2622,14 +2778,14 @@ vErrors.push(err7);
 }
 errors++;
 }
-var _valid2 = _errs55 === errors;
-valid9 = valid9 || _valid2;
-const _errs57 = errors;
-if(errors === _errs57){
-if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
-let missing3;
-if((((data29.train_rmse === undefined) && (missing3 = "train_rmse")) || ((data29.holdout_rmse === undefined) && (missing3 = "holdout_rmse"))) || ((data29.max_coefficient_difference === undefined) && (missing3 = "max_coefficient_difference"))){
-const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"};
+var _valid2 = _errs66 === errors;
+valid12 = valid12 || _valid2;
+const _errs68 = errors;
+if(errors === _errs68){
+if(data34 && typeof data34 == "object" && !Array.isArray(data34)){
+let missing4;
+if((((data34.train_rmse === undefined) && (missing4 = "train_rmse")) || ((data34.holdout_rmse === undefined) && (missing4 = "holdout_rmse"))) || ((data34.max_coefficient_difference === undefined) && (missing4 = "max_coefficient_difference"))){
+const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2639,10 +2795,10 @@ vErrors.push(err8);
 errors++;
 }
 else {
-const _errs59 = errors;
-for(const key4 in data29){
-if(!(((key4 === "train_rmse") || (key4 === "holdout_rmse")) || (key4 === "max_coefficient_difference"))){
-const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"};
+const _errs70 = errors;
+for(const key5 in data34){
+if(!(((key5 === "train_rmse") || (key5 === "holdout_rmse")) || (key5 === "max_coefficient_difference"))){
+const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2653,41 +2809,41 @@ errors++;
 break;
 }
 }
-if(_errs59 === errors){
-if(data29.train_rmse !== undefined){
-const _errs60 = errors;
-if(!(validate68(data29.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data29,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
+if(_errs70 === errors){
+if(data34.train_rmse !== undefined){
+const _errs71 = errors;
+if(!(validate68(data34.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data34,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs60 === errors;
+var valid13 = _errs71 === errors;
 }
 else {
-var valid10 = true;
+var valid13 = true;
 }
-if(valid10){
-if(data29.holdout_rmse !== undefined){
-const _errs61 = errors;
-if(!(validate68(data29.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data29,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+if(valid13){
+if(data34.holdout_rmse !== undefined){
+const _errs72 = errors;
+if(!(validate68(data34.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data34,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs61 === errors;
+var valid13 = _errs72 === errors;
 }
 else {
-var valid10 = true;
+var valid13 = true;
 }
-if(valid10){
-if(data29.max_coefficient_difference !== undefined){
-const _errs62 = errors;
-if(!(validate68(data29.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data29,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
+if(valid13){
+if(data34.max_coefficient_difference !== undefined){
+const _errs73 = errors;
+if(!(validate68(data34.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data34,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs62 === errors;
+var valid13 = _errs73 === errors;
 }
 else {
-var valid10 = true;
+var valid13 = true;
 }
 }
 }
@@ -2705,9 +2861,9 @@ vErrors.push(err10);
 errors++;
 }
 }
-var _valid2 = _errs57 === errors;
-valid9 = valid9 || _valid2;
-if(!valid9){
+var _valid2 = _errs68 === errors;
+valid12 = valid12 || _valid2;
+if(!valid12){
 const err11 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err11];
@@ -2720,37 +2876,37 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs54;
+errors = _errs65;
 if(vErrors !== null){
-if(_errs54){
-vErrors.length = _errs54;
+if(_errs65){
+vErrors.length = _errs65;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs53 === errors;
+var valid0 = _errs64 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.checks !== undefined){
-let data33 = data.checks;
-const _errs63 = errors;
-if(errors === _errs63){
-if(Array.isArray(data33)){
-var valid11 = true;
-const len2 = data33.length;
-for(let i2=0; i2<len2; i2++){
-const _errs65 = errors;
-if(!(validate86(data33[i2], {instancePath:instancePath+"/checks/" + i2,parentData:data33,parentDataProperty:i2,rootData,dynamicAnchors}))){
+let data38 = data.checks;
+const _errs74 = errors;
+if(errors === _errs74){
+if(Array.isArray(data38)){
+var valid14 = true;
+const len4 = data38.length;
+for(let i4=0; i4<len4; i4++){
+const _errs76 = errors;
+if(!(validate86(data38[i4], {instancePath:instancePath+"/checks/" + i4,parentData:data38,parentDataProperty:i4,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid11 = _errs65 === errors;
-if(!valid11){
+var valid14 = _errs76 === errors;
+if(!valid14){
 break;
 }
 }
@@ -2760,31 +2916,31 @@ validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properti
 return false;
 }
 }
-var valid0 = _errs63 === errors;
+var valid0 = _errs74 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.base !== undefined){
-const _errs66 = errors;
+const _errs77 = errors;
 if(!(validate92(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs66 === errors;
+var valid0 = _errs77 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.error !== undefined){
-let data36 = data.error;
-const _errs67 = errors;
-const _errs68 = errors;
-let valid12 = false;
-const _errs69 = errors;
-if(data36 !== null){
+let data41 = data.error;
+const _errs78 = errors;
+const _errs79 = errors;
+let valid15 = false;
+const _errs80 = errors;
+if(data41 !== null){
 const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err12];
@@ -2794,14 +2950,14 @@ vErrors.push(err12);
 }
 errors++;
 }
-var _valid3 = _errs69 === errors;
-valid12 = valid12 || _valid3;
-const _errs71 = errors;
-if(errors === _errs71){
-if(data36 && typeof data36 == "object" && !Array.isArray(data36)){
-let missing4;
-if(((((data36.message === undefined) && (missing4 = "message")) || ((data36.file === undefined) && (missing4 = "file"))) || ((data36.line === undefined) && (missing4 = "line"))) || ((data36.code === undefined) && (missing4 = "code"))){
-const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
+var _valid3 = _errs80 === errors;
+valid15 = valid15 || _valid3;
+const _errs82 = errors;
+if(errors === _errs82){
+if(data41 && typeof data41 == "object" && !Array.isArray(data41)){
+let missing5;
+if(((((data41.message === undefined) && (missing5 = "message")) || ((data41.file === undefined) && (missing5 = "file"))) || ((data41.line === undefined) && (missing5 = "line"))) || ((data41.code === undefined) && (missing5 = "code"))){
+const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing5},message:"must have required property '"+missing5+"'"};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2811,10 +2967,10 @@ vErrors.push(err13);
 errors++;
 }
 else {
-const _errs73 = errors;
-for(const key5 in data36){
-if(!(((((key5 === "message") || (key5 === "file")) || (key5 === "line")) || (key5 === "column")) || (key5 === "code"))){
-const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
+const _errs84 = errors;
+for(const key6 in data41){
+if(!(((((key6 === "message") || (key6 === "file")) || (key6 === "line")) || (key6 === "column")) || (key6 === "code"))){
+const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties"};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2825,10 +2981,10 @@ errors++;
 break;
 }
 }
-if(_errs73 === errors){
-if(data36.message !== undefined){
-const _errs74 = errors;
-if(typeof data36.message !== "string"){
+if(_errs84 === errors){
+if(data41.message !== undefined){
+const _errs85 = errors;
+if(typeof data41.message !== "string"){
 const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err15];
@@ -2838,16 +2994,16 @@ vErrors.push(err15);
 }
 errors++;
 }
-var valid13 = _errs74 === errors;
+var valid16 = _errs85 === errors;
 }
 else {
-var valid13 = true;
+var valid16 = true;
 }
-if(valid13){
-if(data36.file !== undefined){
-let data38 = data36.file;
-const _errs76 = errors;
-if((typeof data38 !== "string") && (data38 !== null)){
+if(valid16){
+if(data41.file !== undefined){
+let data43 = data41.file;
+const _errs87 = errors;
+if((typeof data43 !== "string") && (data43 !== null)){
 const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err16];
@@ -2857,26 +3013,26 @@ vErrors.push(err16);
 }
 errors++;
 }
-var valid13 = _errs76 === errors;
+var valid16 = _errs87 === errors;
 }
 else {
-var valid13 = true;
+var valid16 = true;
 }
-if(valid13){
-if(data36.line !== undefined){
-let data39 = data36.line;
-const _errs78 = errors;
-const _errs79 = errors;
-let valid14 = false;
-const _errs80 = errors;
-if(!(validate88(data39, {instancePath:instancePath+"/error/line",parentData:data36,parentDataProperty:"line",rootData,dynamicAnchors}))){
+if(valid16){
+if(data41.line !== undefined){
+let data44 = data41.line;
+const _errs89 = errors;
+const _errs90 = errors;
+let valid17 = false;
+const _errs91 = errors;
+if(!(validate88(data44, {instancePath:instancePath+"/error/line",parentData:data41,parentDataProperty:"line",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs80 === errors;
-valid14 = valid14 || _valid4;
-const _errs81 = errors;
-if(data39 !== null){
+var _valid4 = _errs91 === errors;
+valid17 = valid17 || _valid4;
+const _errs92 = errors;
+if(data44 !== null){
 const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err17];
@@ -2886,9 +3042,9 @@ vErrors.push(err17);
 }
 errors++;
 }
-var _valid4 = _errs81 === errors;
-valid14 = valid14 || _valid4;
-if(!valid14){
+var _valid4 = _errs92 === errors;
+valid17 = valid17 || _valid4;
+if(!valid17){
 const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err18];
@@ -2899,36 +3055,36 @@ vErrors.push(err18);
 errors++;
 }
 else {
-errors = _errs79;
+errors = _errs90;
 if(vErrors !== null){
-if(_errs79){
-vErrors.length = _errs79;
+if(_errs90){
+vErrors.length = _errs90;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid13 = _errs78 === errors;
+var valid16 = _errs89 === errors;
 }
 else {
-var valid13 = true;
+var valid16 = true;
 }
-if(valid13){
-if(data36.column !== undefined){
-let data40 = data36.column;
-const _errs83 = errors;
-const _errs84 = errors;
-let valid15 = false;
-const _errs85 = errors;
-if(!(validate88(data40, {instancePath:instancePath+"/error/column",parentData:data36,parentDataProperty:"column",rootData,dynamicAnchors}))){
+if(valid16){
+if(data41.column !== undefined){
+let data45 = data41.column;
+const _errs94 = errors;
+const _errs95 = errors;
+let valid18 = false;
+const _errs96 = errors;
+if(!(validate88(data45, {instancePath:instancePath+"/error/column",parentData:data41,parentDataProperty:"column",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs85 === errors;
-valid15 = valid15 || _valid5;
-const _errs86 = errors;
-if(data40 !== null){
+var _valid5 = _errs96 === errors;
+valid18 = valid18 || _valid5;
+const _errs97 = errors;
+if(data45 !== null){
 const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err19];
@@ -2938,9 +3094,9 @@ vErrors.push(err19);
 }
 errors++;
 }
-var _valid5 = _errs86 === errors;
-valid15 = valid15 || _valid5;
-if(!valid15){
+var _valid5 = _errs97 === errors;
+valid18 = valid18 || _valid5;
+if(!valid18){
 const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err20];
@@ -2951,25 +3107,25 @@ vErrors.push(err20);
 errors++;
 }
 else {
-errors = _errs84;
+errors = _errs95;
 if(vErrors !== null){
-if(_errs84){
-vErrors.length = _errs84;
+if(_errs95){
+vErrors.length = _errs95;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid13 = _errs83 === errors;
+var valid16 = _errs94 === errors;
 }
 else {
-var valid13 = true;
+var valid16 = true;
 }
-if(valid13){
-if(data36.code !== undefined){
-const _errs88 = errors;
-if(typeof data36.code !== "string"){
+if(valid16){
+if(data41.code !== undefined){
+const _errs99 = errors;
+if(typeof data41.code !== "string"){
 const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err21];
@@ -2979,10 +3135,10 @@ vErrors.push(err21);
 }
 errors++;
 }
-var valid13 = _errs88 === errors;
+var valid16 = _errs99 === errors;
 }
 else {
-var valid13 = true;
+var valid16 = true;
 }
 }
 }
@@ -3002,9 +3158,9 @@ vErrors.push(err22);
 errors++;
 }
 }
-var _valid3 = _errs71 === errors;
-valid12 = valid12 || _valid3;
-if(!valid12){
+var _valid3 = _errs82 === errors;
+valid15 = valid15 || _valid3;
+if(!valid15){
 const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err23];
@@ -3017,32 +3173,33 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs68;
+errors = _errs79;
 if(vErrors !== null){
-if(_errs68){
-vErrors.length = _errs68;
+if(_errs79){
+vErrors.length = _errs79;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs67 === errors;
+var valid0 = _errs78 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs90 = errors;
+const _errs101 = errors;
 if(!(validate100(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate100.errors : vErrors.concat(validate100.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs90 === errors;
+var valid0 = _errs101 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }

@@ -8,6 +8,7 @@
  */
 import type { InputTransform, TermSpec } from '../../config/types.js';
 import type { ModelData } from '../../data/model-data.js';
+import { placeOfLine } from '../../data/data-parts.js';
 import { InputError } from '../../core/errors.js';
 import { meanAndSd } from '../stats.js';
 import type { Term, TrainingColumns } from './types.js';
@@ -54,10 +55,11 @@ export function checkTransformDomain(
     const col = data.inputs[order.indexOf(name)];
     const i = firstOutside(col, data.rows, transform);
     if (i < 0) continue;
+    const place = placeOfLine(data, data.lines[i]);
     throw new InputError(
       'transform-domain',
-      `column \`${name}\` is ${col[i]} on line ${data.lines[i]} of ${data.file}, outside the domain of \`transform: ${transform}\` of the ${spec.kind} term on line ${spec.line}; expected ${DOMAIN[transform]}`,
-      { file: data.file, line: data.lines[i], key: name },
+      `column \`${name}\` is ${col[i]} on line ${place.line} of ${place.file}, outside the domain of \`transform: ${transform}\` of the ${spec.kind} term on line ${spec.line}; expected ${DOMAIN[transform]}`,
+      { file: place.file, line: place.line, key: name },
     );
   }
 }
