@@ -309,15 +309,25 @@ async function* scanParts(
     parts.push(part);
     // The decompressed size of the part: the most bytes any one opening of it gave.
     let used = 0;
+    const cap = Math.min(settings.maxBytes, left);
     const open = (): AsyncIterable<Uint8Array> => {
-      const source = openDataFile(repo, path, Math.min(settings.maxBytes, left));
+      const source = openDataFile(repo, path, cap);
       return count(
         (async function* () {
           let seen = 0;
-          for await (const piece of source) {
-            seen += piece.length;
-            if (seen > used) used = seen;
-            yield piece;
+          try {
+            for await (const piece of source) {
+              seen += piece.length;
+              if (seen > used) used = seen;
+              yield piece;
+            }
+          } catch (error) {
+            if (!(error instanceof InputError) || error.code !== 'file-too-large' || cap === settings.maxBytes) throw error;
+            throw new InputError(
+              'file-too-large',
+              `the file decompresses to more than the ${cap} bytes the parts before it left of the cap of ${megabytes(settings.maxBytes)} (${settings.maxBytes} bytes) that holds for all parts together; raise caps.max_file_mb in fitgate.yml`,
+              { file: path },
+            );
           }
         })(),
       );
