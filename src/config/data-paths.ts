@@ -175,7 +175,13 @@ async function oneFile(repo: RepoReader, doc: YamlDocument, file: string, key: (
 }
 
 /** The resolved path when `written` (holding glob characters) names a regular file as it stands, else null. */
-async function namesFile(repo: RepoReader, doc: YamlDocument, file: string, key: (string | number)[], written: string): Promise<string | null> {
+async function namesFile(
+  repo: RepoReader,
+  doc: YamlDocument,
+  file: string,
+  key: (string | number)[],
+  written: string,
+): Promise<string | null> {
   if (patternProblem(written) !== null) return null;
   const at = doc.valuePositionOf(key);
   let resolved: string;

@@ -99,7 +99,10 @@ export function partsLabel(paths: readonly string[]): string {
  * @param data as for {@link placeOfLine}
  * @param lines table-wide lines
  */
-export function partLines(data: { file: string; parts?: readonly DataPart[] }, lines: readonly number[]): { lines: number[]; files: string[] } | null {
+export function partLines(
+  data: { file: string; parts?: readonly DataPart[] },
+  lines: readonly number[],
+): { lines: number[]; files: string[] } | null {
   if (data.parts === undefined) return null;
   const places = lines.map((line) => placeOfLine(data, line));
   return { lines: places.map((p) => p.line), files: places.map((p) => p.file) };

@@ -95,7 +95,8 @@ async function loadTextLabels(
     const meaning = part.codes.labels.map((label) => (label === labels.positive ? 1 : label === labels.negative ? 0 : -1));
     for (let i = 0; i < y.length; i++) {
       const m = meaning[part.codes.codes[i]];
-      if (m < 0) throw unknownLabel(descriptor, placeOfLine(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
+      if (m < 0)
+        throw unknownLabel(descriptor, placeOfLine(part.table, part.table.lines[i]), part.codes.labels[part.codes.codes[i]], labels);
       y[i] = m;
     }
     return y;

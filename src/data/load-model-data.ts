@@ -97,18 +97,29 @@ export async function loadModelData(
           ? ` left after dropping ${table.dropped} with missing cells`
           : '';
       const named = partPaths === undefined ? `\`${clip(path)}\`` : `the ${partPaths.length} parts of \`${key}\` (${clip(table.file)})`;
-      throw new InputError('no-rows', `${named} ${partPaths === undefined ? 'has' : 'have'} no data rows${why}; expected at least one row`, {
-        file: descriptor.file,
-        line,
-        key,
-      });
+      throw new InputError(
+        'no-rows',
+        `${named} ${partPaths === undefined ? 'has' : 'have'} no data rows${why}; expected at least one row`,
+        {
+          file: descriptor.file,
+          line,
+          key,
+        },
+      );
     }
     if (categories.size > 0) {
       const text = await readCategoryText(repo, table, [...categories.keys()], maxBytes);
       for (const [name, term] of categories) {
         const values = text.get(name) as string[];
         if (!levels.has(name)) levels.set(name, trainingLevels(values));
-        const where = { file: table.file, ...(table.parts ? { parts: table.parts } : {}), lines: table.lines, column: name, termLine: term.line, descriptor: descriptor.file };
+        const where = {
+          file: table.file,
+          ...(table.parts ? { parts: table.parts } : {}),
+          lines: table.lines,
+          column: name,
+          termLine: term.line,
+          descriptor: descriptor.file,
+        };
         table.columns.set(name, levelCodes(values, levels.get(name) as string[], term.unseen, where));
       }
     }
@@ -124,17 +135,24 @@ export async function loadModelData(
     };
     return weighting === null
       ? rows
-      : { ...rows, ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, rows.file, rows.parts) };
+      : {
+          ...rows,
+          ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, rows.file, rows.parts),
+        };
   };
   const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
   const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
   const { byName, ...trainData } = train;
   if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
-    throw new InputError('bad-weight', `every training row of ${clip(trainData.file)} has weight 0; expected at least one positive weight`, {
-      file: descriptor.file,
-      line: data.weighting?.line,
-      key: `data.${data.weighting?.kind}`,
-    });
+    throw new InputError(
+      'bad-weight',
+      `every training row of ${clip(trainData.file)} has weight 0; expected at least one positive weight`,
+      {
+        file: descriptor.file,
+        line: data.weighting?.line,
+        key: `data.${data.weighting?.kind}`,
+      },
+    );
   }
   const { byName: _unused, ...holdoutData } = holdout;
   return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };

@@ -88,20 +88,37 @@ export interface Table {
  * Streams a CSV file as numeric chunks (header checked first).
  *
  * Every chunk but the last holds exactly `chunkRows` rows; a file with a header and no data
- * rows yields no chunk. Errors are InputErrors: `file-too-large` (before reading),
+ * rows yields no chunk. Given a list of parts, the parts are read in the order given (the
+ * descriptor loader sorts them) as one table: a chunk never spans two parts (so each part's last
+ * chunk may be short), carries its `part`, and its lines are table-wide (data-parts.ts); every
+ * part's header must match the first's (`csv-header-parts`); the size cap holds for each part
+ * and for all of them together (`file-too-large`). Errors are InputErrors: `file-too-large` (before reading),
  * `file-missing`, `csv-empty`, `csv-header`, `csv-missing-column`, `csv-ragged`, `csv-cell`,
  * `csv-syntax`, `csv-encoding`; each names the file and, where there is one, the line.
  *
  * @param repo where the file lives
- * @param path repository-relative path of the CSV file
+ * @param path repository-relative path of the CSV file, or the list of its parts (at least one)
  * @param options columns to read; chunk size (default 65536 rows); size cap (default 512 MiB);
  *   `general: true` to skip the fast path
  */
-export async function* readTableChunks(repo: RepoReader, path: string | readonly string[], options: ReadTableOptions): AsyncGenerator<TableChunk> {
+export async function* readTableChunks(
+  repo: RepoReader,
+  path: string | readonly string[],
+  options: ReadTableOptions,
+): AsyncGenerator<TableChunk> {
   const settings = checkOptions(options);
   if (typeof path !== 'string') {
     await checkSizes(repo, path, settings.maxBytes);
-    yield* scanParts(repo, path, settings, () => undefined, false, undefined, (pieces) => pieces, []);
+    yield* scanParts(
+      repo,
+      path,
+      settings,
+      () => undefined,
+      false,
+      undefined,
+      (pieces) => pieces,
+      [],
+    );
     return;
   }
   await checkSize(repo, path, settings.maxBytes);
@@ -124,9 +141,10 @@ export async function* readTableChunks(repo: RepoReader, path: string | readonly
  * one chunk, instead of twice the data.
  *
  * @param repo where the file lives
- * @param path repository-relative path of the CSV file
+ * @param path repository-relative path of the CSV file, or the list of its parts (as for {@link readTableChunks})
  * @param options as for {@link readTableChunks}
- * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the rows' lines
+ * @returns the header, the row count, one Float64Array of length `rows` per requested name, and the
+ *   rows' lines; read from parts, also `parts` (each with its line offset) and a `file` label
  */
 export async function readTable(repo: RepoReader, path: string | readonly string[], options: ReadTableOptions): Promise<Table> {
   const settings = checkOptions(options);

@@ -67,12 +67,15 @@ describe('data.train / data.holdout as parts', () => {
   it('errors name the line of the key, or of the list item', async () => {
     const files = { 'models/a.csv': CSV, 'models/h.csv': CSV, 'models/sub/x.csv': CSV };
     // A missing item, at its own line (line 6: the second item of a block list).
-    await expectInputError(() => loadDescriptor(repo('  train:\n    - a.csv\n    - nothing.csv\n  holdout: h.csv\n', files), F, defaultSettings()), {
-      code: 'file-missing',
-      file: F,
-      line: 6,
-      key: 'data.train[1]',
-    });
+    await expectInputError(
+      () => loadDescriptor(repo('  train:\n    - a.csv\n    - nothing.csv\n  holdout: h.csv\n', files), F, defaultSettings()),
+      {
+        code: 'file-missing',
+        file: F,
+        line: 6,
+        key: 'data.train[1]',
+      },
+    );
     // A glob matching nothing.
     await expectInputError(() => loadDescriptor(repo('  train: a.csv\n  holdout: "none/*.csv"\n', files), F, defaultSettings()), {
       code: 'data-glob-empty',
@@ -89,12 +92,15 @@ describe('data.train / data.holdout as parts', () => {
       key: 'data.train',
       message: /`\.\.` segment/,
     });
-    await expectInputError(() => loadDescriptor(repo('  train: ["a.csv", "sub/{x,..}/*.csv"]\n  holdout: h.csv\n', files), F, defaultSettings()), {
-      code: 'path-outside',
-      file: F,
-      line: 4,
-      key: 'data.train[1]',
-    });
+    await expectInputError(
+      () => loadDescriptor(repo('  train: ["a.csv", "sub/{x,..}/*.csv"]\n  holdout: h.csv\n', files), F, defaultSettings()),
+      {
+        code: 'path-outside',
+        file: F,
+        line: 4,
+        key: 'data.train[1]',
+      },
+    );
     // The same file twice (by a path and a glob).
     await expectInputError(() => loadDescriptor(repo('  train: [a.csv, "a*.csv"]\n  holdout: h.csv\n', files), F, defaultSettings()), {
       code: 'data-parts',
@@ -112,7 +118,11 @@ describe('data.train / data.holdout as parts', () => {
   });
 
   it('a glob under a descriptor folder whose name holds a glob character is refused (a list is the way there)', async () => {
-    const files = { 'models[1]/m.model.yml': descriptor('  train: "t/*.csv"\n  holdout: h.csv\n'), 'models[1]/t/a.csv': CSV, 'models[1]/h.csv': CSV };
+    const files = {
+      'models[1]/m.model.yml': descriptor('  train: "t/*.csv"\n  holdout: h.csv\n'),
+      'models[1]/t/a.csv': CSV,
+      'models[1]/h.csv': CSV,
+    };
     await expectInputError(() => loadDescriptor(createMemoryRepository(files), 'models[1]/m.model.yml', defaultSettings()), {
       code: 'data-glob',
       line: 4,

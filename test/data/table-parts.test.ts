@@ -65,7 +65,8 @@ describe('a table read from parts', () => {
     const table = await readTable(repo, order, { columns: ['x'] });
     expect((table.columns.get('x') as Float64Array)[0]).toBe(20 / 4);
     const seen: { file: string | undefined; rows: number }[] = [];
-    for await (const chunk of readTableChunks(repo, PARTS, { columns: ['x'], chunkRows: 4 })) seen.push({ file: chunk.part?.file, rows: chunk.rows });
+    for await (const chunk of readTableChunks(repo, PARTS, { columns: ['x'], chunkRows: 4 }))
+      seen.push({ file: chunk.part?.file, rows: chunk.rows });
     expect(seen.map((s) => s.rows)).toEqual([4, 4, 2, 4, 4, 2, 4, 4, 2]);
     expect(seen.map((s) => s.file)).toEqual([...Array(3).fill(PARTS[0]), ...Array(3).fill(PARTS[1]), ...Array(3).fill(PARTS[2])]);
   });
@@ -85,7 +86,11 @@ describe('a table read from parts', () => {
   it('names the part and its own line in a cell error', async () => {
     const repo = memoryRepo({ ...files(), 'p/part-2.csv': 'x,y\n1,2\n3,oops\n' });
     const error = await errorOf(() => readTable(repo, PARTS, { columns: ['x', 'y'] }));
-    expect({ code: error.code, file: error.location.file, line: error.location.line }).toEqual({ code: 'csv-cell', file: 'p/part-2.csv', line: 3 });
+    expect({ code: error.code, file: error.location.file, line: error.location.line }).toEqual({
+      code: 'csv-cell',
+      file: 'p/part-2.csv',
+      line: 3,
+    });
   });
 
   it('holds each part and all parts together to the byte cap', async () => {

@@ -117,10 +117,15 @@ describe('data parts through the whole pipeline', () => {
   });
 
   it('a classifier with text labels reads its parts as one table', async () => {
-    const labelled = (list: number[][]): string => `x,y\n${list.map((r, k) => `${r[0]},${(r[0] * 7 + k) % 3 < 1.5 ? 'yes' : 'no'}`).join('\n')}\n`;
+    const labelled = (list: number[][]): string =>
+      `x,y\n${list.map((r, k) => `${r[0]},${(r[0] * 7 + k) % 3 < 1.5 ? 'yes' : 'no'}`).join('\n')}\n`;
     const classifier = (data: string): string =>
       `version: 1\nname: c\ntask: classification\ndata:\n${data}  target: y\n  positive: "yes"\nterms:\n  - linear: [x]\n`;
-    const one = await model({ 'c.model.yml': classifier('  train: t.csv\n  holdout: h.csv\n'), 't.csv': labelled(train), 'h.csv': labelled(holdout) });
+    const one = await model({
+      'c.model.yml': classifier('  train: t.csv\n  holdout: h.csv\n'),
+      't.csv': labelled(train),
+      'h.csv': labelled(holdout),
+    });
     const parts = await model({
       'c.model.yml': classifier('  train: [t1.csv, t2.csv.gz]\n  holdout: h.csv\n'),
       't1.csv': labelled(train).split('\n').slice(0, 21).join('\n') + '\n',
@@ -172,12 +177,18 @@ describe('data parts at the command level (in-process, on disk)', () => {
     writeFileSync(path.join(repo, 'models', 'train', 'part-1.csv'), csv(train.slice(0, 20)));
     symlinkSync(path.join(base, 'outside', 'secret.csv'), path.join(repo, 'models', 'train', 'part-2.csv'));
     writeFileSync(path.join(repo, 'models', 'h.csv'), csv(holdout));
-    writeFileSync(path.join(repo, 'models', 'g.model.yml'), descriptor('  train: "train/*.csv"\n  holdout: h.csv\n').replace('name: m', 'name: g'));
+    writeFileSync(
+      path.join(repo, 'models', 'g.model.yml'),
+      descriptor('  train: "train/*.csv"\n  holdout: h.csv\n').replace('name: m', 'name: g'),
+    );
     writeFileSync(
       path.join(repo, 'models', 'l.model.yml'),
       descriptor('  train:\n    - train/part-1.csv\n    - train/part-2.csv\n  holdout: h.csv\n').replace('name: m', 'name: l'),
     );
-    writeFileSync(path.join(repo, 'models', 'd.model.yml'), descriptor('  train: "../../outside/*.csv"\n  holdout: h.csv\n').replace('name: m', 'name: d'));
+    writeFileSync(
+      path.join(repo, 'models', 'd.model.yml'),
+      descriptor('  train: "../../outside/*.csv"\n  holdout: h.csv\n').replace('name: m', 'name: d'),
+    );
     const result = await check(repo);
     // A model that could not be loaded is named by its descriptor path.
     const by = new Map(result.models.map((m) => [m.descriptor.replace(/^models\/(.)\.model\.yml$/, '$1'), m]));

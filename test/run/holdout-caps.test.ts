@@ -49,17 +49,23 @@ describe('the hold-out rows under the caps', () => {
     // Two hold-out parts, each under the cap, together over it.
     const half = csv(60);
     expect(2 * Buffer.byteLength(half)).toBeGreaterThan(cap);
-    const parts = await evaluate({ 't.csv': train, 'h1.csv': half, 'h2.csv': csv(60, 60) }, '[h1.csv, h2.csv]', settingsWith({ maxFileBytes: cap }));
+    const parts = await evaluate(
+      { 't.csv': train, 'h1.csv': half, 'h2.csv': csv(60, 60) },
+      '[h1.csv, h2.csv]',
+      settingsWith({ maxFileBytes: cap }),
+    );
     expect(parts.error).toMatchObject({ code: 'file-too-large', file: 'h2.csv' });
     expect(parts.error?.message).toContain('all parts together');
   });
 
   it('the text labels of a classifier are read through the same cap (a gzip hold-out that expands past it is refused)', async () => {
-    const labelled = (n: number): string => `x,y\n${Array.from({ length: n }, (_, i) => `${i / 10},${(i * 7) % 3 === 0 ? 'yes' : 'no'}`).join('\n')}\n`;
+    const labelled = (n: number): string =>
+      `x,y\n${Array.from({ length: n }, (_, i) => `${i / 10},${(i * 7) % 3 === 0 ? 'yes' : 'no'}`).join('\n')}\n`;
     const train = labelled(200);
     const cap = Buffer.byteLength(train) + 10;
     const files = {
-      'c.model.yml': 'version: 1\nname: c\ntask: classification\ndata: { train: t.csv, holdout: h.csv.gz, target: y, positive: "yes" }\nterms:\n  - linear: [x]\n',
+      'c.model.yml':
+        'version: 1\nname: c\ntask: classification\ndata: { train: t.csv, holdout: h.csv.gz, target: y, positive: "yes" }\nterms:\n  - linear: [x]\n',
       't.csv': train,
       'h.csv.gz': gzipSync(Buffer.from(labelled(100))),
     };
@@ -72,7 +78,9 @@ describe('the hold-out rows under the caps', () => {
     const bomb = gzipSync(Buffer.from(`x,y\n${'1,yes\n0,no\n'.repeat(5000)}`));
     expect(bomb.length).toBeLessThan(cap);
     const big = createMemoryRepository({ ...files, 'h.csv.gz': bomb });
-    const refused = await evaluateClassifier(big, await loadDescriptor(big, 'c.model.yml', settings), settings).catch((error: unknown) => error);
+    const refused = await evaluateClassifier(big, await loadDescriptor(big, 'c.model.yml', settings), settings).catch(
+      (error: unknown) => error,
+    );
     expect(refused).toMatchObject({ code: 'file-too-large', location: { file: 'h.csv.gz' } });
   });
 
