@@ -199,3 +199,30 @@ describe('data parts at the command level (in-process, on disk)', () => {
     expect(JSON.stringify(result)).not.toContain('outside/secret');
   });
 });
+
+describe('data parts in messages of later stages', () => {
+  it('a design value out of range names the training part and its own line', async () => {
+    // Row 3 of part-2 (its line 4) has x = 1e30: with scale 1e-60, z^2 = 1e180 is beyond the design's range (±1e140).
+    const big = train.slice(15, 30).map((r, k) => (k === 2 ? [1e30, r[1]] : r));
+    const m = await model({
+      'm.model.yml': descriptor('  train: [p-1.csv, p-2.csv]\n  holdout: h.csv\n').replace('linear: [x]', 'polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }'),
+      'p-1.csv': csv(train.slice(0, 15)),
+      'p-2.csv': csv(big),
+      'h.csv': csv(holdout),
+    });
+    expect(m.error?.code).toBe('design-overflow');
+    expect(m.error?.message).toContain('on line 4 of p-2.csv;');
+  });
+
+  it('a bad weight names the part and its own line', async () => {
+    const weighted = (list: number[][], bad: number): string =>
+      `x,y,w\n${list.map((r, k) => `${line(r)},${k === bad ? -1 : 1}`).join('\n')}\n`;
+    const m = await model({
+      'm.model.yml': descriptor('  train: [p-1.csv, p-2.csv]\n  holdout: h.csv\n  weight: w\n'),
+      'p-1.csv': weighted(train.slice(0, 15), -1),
+      'p-2.csv': weighted(train.slice(15), 5),
+      'h.csv': weighted(holdout, -1),
+    });
+    expect(m.error).toMatchObject({ code: 'bad-weight', file: 'p-2.csv', line: 7 });
+  });
+});
