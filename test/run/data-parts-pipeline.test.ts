@@ -205,7 +205,10 @@ describe('data parts in messages of later stages', () => {
     // Row 3 of part-2 (its line 4) has x = 1e30: with scale 1e-60, z^2 = 1e180 is beyond the design's range (±1e140).
     const big = train.slice(15, 30).map((r, k) => (k === 2 ? [1e30, r[1]] : r));
     const m = await model({
-      'm.model.yml': descriptor('  train: [p-1.csv, p-2.csv]\n  holdout: h.csv\n').replace('linear: [x]', 'polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }'),
+      'm.model.yml': descriptor('  train: [p-1.csv, p-2.csv]\n  holdout: h.csv\n').replace(
+        'linear: [x]',
+        'polynomial: { of: x, degree: 3, shift: 0, scale: 1e-60 }',
+      ),
       'p-1.csv': csv(train.slice(0, 15)),
       'p-2.csv': csv(big),
       'h.csv': csv(holdout),
