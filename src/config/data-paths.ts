@@ -182,7 +182,7 @@ async function namesFile(
   key: (string | number)[],
   written: string,
 ): Promise<string | null> {
-  if (patternProblem(written) !== null) return null;
+  // Resolved as a path first (`../data/odd[1].csv` is that file when it names one); a path that leaves the repository names none.
   const at = doc.valuePositionOf(key);
   let resolved: string;
   try {

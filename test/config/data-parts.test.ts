@@ -51,6 +51,9 @@ describe('data.train / data.holdout as parts', () => {
     expect(d.data.trainParts).toEqual(['models/p/a1.csv', 'models/p/a2.csv', 'models/q.csv']);
     expect(d.data.holdout).toBe('models/odd[1].csv');
     expect(d.data.holdoutParts).toBeUndefined();
+    // Also through a `..` segment, which a glob may not have: a path that names a file is no glob.
+    const up = await loadDescriptor(repo('  train: q.csv\n  holdout: "../models/odd[1].csv"\n', files), F, defaultSettings());
+    expect(up.data.holdout).toBe('models/odd[1].csv');
   });
 
   it('with data.split both sides read the same parts', async () => {
