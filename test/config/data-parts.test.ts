@@ -112,6 +112,16 @@ describe('data.train / data.holdout as parts', () => {
       key: 'data.train[1]',
       message: /named again/,
     });
+    // A number, or a list holding one, is a schema error at its line.
+    const wrong = await expectInputError(
+      () => loadDescriptor(repo('  train: a.csv\n  holdout: [h.csv, 5]\n', files), F, defaultSettings()),
+      {
+        code: 'schema',
+        file: F,
+        line: 5,
+      },
+    );
+    expect(wrong.message).toBe('expected text, got 5');
     // An empty list is a schema error.
     await expectInputError(() => loadDescriptor(repo('  train: []\n  holdout: h.csv\n', files), F, defaultSettings()), {
       code: 'schema',
