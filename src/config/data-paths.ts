@@ -26,7 +26,7 @@ import { errorAt, showValue } from './schema-errors.js';
 import type { Descriptor } from './types.js';
 import type { YamlDocument } from './yaml-source.js';
 
-/** Most parts one of `data.train` / `data.holdout` may name (a documented constant, common practice for such caps). */
+/** Most parts one of `data.train` / `data.holdout` may name (a documented constant of our choosing: each part is opened and checked in turn). */
 export const MAX_DATA_PARTS = 1000;
 
 /** Stable codes of the errors this module throws (besides the repository's `path-outside`). */

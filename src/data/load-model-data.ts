@@ -144,15 +144,11 @@ export async function loadModelData(
   const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
   const { byName, ...trainData } = train;
   if (trainData.weights !== undefined && !trainData.weights.some((w) => w > 0)) {
-    throw new InputError(
-      'bad-weight',
-      `every training row of ${clip(trainData.file)} has weight 0; expected at least one positive weight`,
-      {
-        file: descriptor.file,
-        line: data.weighting?.line,
-        key: `data.${data.weighting?.kind}`,
-      },
-    );
+    throw new InputError('bad-weight', `every training row of ${trainData.file} has weight 0; expected at least one positive weight`, {
+      file: descriptor.file,
+      line: data.weighting?.line,
+      key: `data.${data.weighting?.kind}`,
+    });
   }
   const { byName: _unused, ...holdoutData } = holdout;
   return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
@@ -212,9 +208,11 @@ async function readCategoryText(
     let same = row + n <= table.rows;
     for (let i = 0; same && i < n; i++) same = text.lines[i] + part.lineOffset === table.lines[row + i];
     if (!same) {
+      // One file: the message as it always was; a part: its own count (the numbers' rows are the whole table's).
+      const numbers = table.parts === undefined ? `${table.rows} rows of numbers` : 'other rows of numbers';
       throw new InputError(
         'csv-rows',
-        `${clip(part.file)} gives ${n} rows of text for its category columns but other rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
+        `${table.parts === undefined ? part.file : clip(part.file)} gives ${n} rows of text for its category columns but ${numbers}; expected one record per line (no line breaks inside quoted category cells)`,
         { file: part.file },
       );
     }
@@ -227,7 +225,7 @@ async function readCategoryText(
   if (row !== table.rows) {
     throw new InputError(
       'csv-rows',
-      `${clip(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
+      `${table.parts === undefined ? table.file : clip(table.file)} gives ${row} rows of text for its category columns but ${table.rows} rows of numbers; expected one record per line (no line breaks inside quoted category cells)`,
       { file: table.parts?.[0]?.file ?? table.file },
     );
   }
