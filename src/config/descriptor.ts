@@ -49,7 +49,8 @@ export const DESCRIPTOR_ERROR = Object.freeze({
  * @param repo the repository
  * @param path repository-relative descriptor path
  * @param settings the loaded settings file (fit defaults and limits)
- * @throws InputError YAML errors, `schema`, `limit-order`, `rbf-centers`, `path-outside`, `file-missing`
+ * @throws InputError YAML errors, `schema`, `limit-order`, `rbf-centers`, `path-outside`, `file-missing`, and
+ *   the errors of data parts (config/data-paths.ts: `data-glob-empty`, `data-glob`, `data-parts`)
  */
 export async function loadDescriptor(repo: RepoReader, path: string, settings: SettingsFile): Promise<Descriptor> {
   const doc = await readYamlFile(repo, path);
