@@ -229,3 +229,42 @@ describe('data parts in messages of later stages', () => {
     expect(m.error).toMatchObject({ code: 'bad-weight', file: 'p-2.csv', line: 7 });
   });
 });
+
+describe('data parts on a commit (the base of a pull request)', () => {
+  it('the git reader resolves a glob of parts as the disk does, links inside the commit included', async () => {
+    const { execFileSync } = await import('node:child_process');
+    const { createGitRepository } = await import('../../src/repo/git-repository.js');
+    const { loadDescriptor } = await import('../../src/config/descriptor.js');
+    const { defaultSettings: settingsFile } = await import('../../src/config/settings-file.js');
+    const dir = mkdtempSync(path.join(tmpdir(), 'fitgate-parts-git-'));
+    try {
+      mkdirSync(path.join(dir, 'models', 'train'), { recursive: true });
+      writeFileSync(path.join(dir, 'models', 'm.model.yml'), descriptor('  train: "train/p-*.csv"\n  holdout: h.csv\n'));
+      writeFileSync(path.join(dir, 'models', 'train', 'p-2.csv'), csv(train.slice(20)));
+      writeFileSync(path.join(dir, 'models', 'real-1.csv'), csv(train.slice(0, 20)));
+      symlinkSync('../real-1.csv', path.join(dir, 'models', 'train', 'p-1.csv'));
+      writeFileSync(path.join(dir, 'models', 'h.csv'), csv(holdout));
+      const env = {
+        ...process.env,
+        GIT_AUTHOR_NAME: 't',
+        GIT_AUTHOR_EMAIL: 't@example.com',
+        GIT_COMMITTER_NAME: 't',
+        GIT_COMMITTER_EMAIL: 't@example.com',
+      };
+      for (const args of [
+        ['init', '-q'],
+        ['add', '-A'],
+        ['commit', '-q', '-m', 'base'],
+      ])
+        execFileSync('git', args, { cwd: dir, env, stdio: 'pipe' });
+      const repo = createGitRepository({ cwd: dir, commit: 'HEAD' });
+      const d = await loadDescriptor(repo, 'models/m.model.yml', settingsFile());
+      expect(d.data.trainParts).toEqual(['models/train/p-1.csv', 'models/train/p-2.csv']);
+      const result = await runPipeline(defaultSettings(dir), repo, { jobs: 1 });
+      const onDisk = await model(ONE);
+      expect(result.models[0].coefficients).toEqual(onDisk.coefficients);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+});
