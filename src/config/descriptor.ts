@@ -7,7 +7,7 @@ import { clip } from '../core/errors.js';
 import { kindWords, NOT_A_FILE } from '../repo/repo-path.js';
 import type { RepoReader } from '../repo/types.js';
 import { mergeLimits } from './limits.js';
-import { errorAt, schemaError, showValue } from './schema-errors.js';
+import { errorAt, SCHEMA_ERROR_CODE, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
 import type {
@@ -22,6 +22,8 @@ import type {
   Weighting,
   InputTransform,
   MultiRbfCenters,
+  PredictionSource,
+  PredictionsSpec,
 } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
@@ -39,6 +41,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   weighting: 'weight-and-sigma',
   spline: 'spline-settings',
   polynomial: 'polynomial-inputs',
+  predictions: 'predictions-form',
 });
 
 /**
@@ -55,32 +58,51 @@ export async function loadDescriptor(repo: RepoReader, path: string, settings: S
   const doc = await readYamlFile(repo, path);
   const descriptor = descriptorFromDocument(doc, path, settings);
   for (const which of ['train', 'holdout'] as const) {
-    const key = ['data', which];
-    const at = doc.valuePositionOf(key);
-    const where = { line: at?.line ?? descriptor.data.lines[which], column: at?.column ?? 1, key: `data.${which}` };
-    const resolved = await repo.resolve(path, descriptor.data[which], where);
-    const kind = await repo.entryKind(resolved);
-    if (kind === 'missing') {
-      throw errorAt(
-        doc,
-        path,
-        DESCRIPTOR_ERROR.dataMissing,
-        key,
-        `${showValue(descriptor.data[which])} (${clip(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`,
-      );
-    }
-    if (kind !== 'file') {
-      throw errorAt(
-        doc,
-        path,
-        DESCRIPTOR_ERROR.notAFile,
-        key,
-        `${showValue(descriptor.data[which])} (${clip(resolved)}) ${kindWords(kind)}; expected a CSV file relative to this descriptor's folder`,
-      );
-    }
-    descriptor.data[which] = resolved;
+    descriptor.data[which] = await resolveDataFile(repo, doc, path, ['data', which], descriptor.data[which], descriptor.data.lines[which]);
+  }
+  // Side files of a model trained elsewhere: the same rules as data files.
+  for (const which of ['train', 'holdout'] as const) {
+    const source = descriptor.predictions?.[which];
+    if (source?.file) source.file = await resolveDataFile(repo, doc, path, ['predictions', which, 'file'], source.file, source.line);
   }
   return descriptor;
+}
+
+/**
+ * A data or side file path resolved inside the repository (relative to the descriptor's folder).
+ * @throws InputError `path-outside`, `file-missing`, `not-a-file` at the key's value
+ */
+async function resolveDataFile(
+  repo: RepoReader,
+  doc: YamlDocument,
+  path: string,
+  key: string[],
+  value: string,
+  fallbackLine: number,
+): Promise<string> {
+  const at = doc.valuePositionOf(key);
+  const where = { line: at?.line ?? fallbackLine, column: at?.column ?? 1, key: key.join('.') };
+  const resolved = await repo.resolve(path, value, where);
+  const kind = await repo.entryKind(resolved);
+  if (kind === 'missing') {
+    throw errorAt(
+      doc,
+      path,
+      DESCRIPTOR_ERROR.dataMissing,
+      key,
+      `${showValue(value)} (${clip(resolved)}) is not a file in ${repo.label}; expected a CSV path relative to this descriptor's folder`,
+    );
+  }
+  if (kind !== 'file') {
+    throw errorAt(
+      doc,
+      path,
+      DESCRIPTOR_ERROR.notAFile,
+      key,
+      `${showValue(value)} (${clip(resolved)}) ${kindWords(kind)}; expected a CSV file relative to this descriptor's folder`,
+    );
+  }
+  return resolved;
 }
 
 /**
@@ -98,8 +120,9 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   const line = (path: (string | number)[]): number => doc.positionOf(path)?.line ?? 1;
   checkDataForm(doc, file, raw.data);
 
-  const terms = raw.terms.map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
-  const termsLine = line(['terms']);
+  const predictions = readPredictions(doc, file, raw, line);
+  const terms = (raw.terms ?? []).map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
+  const termsLine = predictions !== null ? predictions.line : line(['terms']);
   const fitLine = raw.fit ? line(['fit']) : termsLine;
   const limits = readLimits(doc, file, raw.limits, ['limits']);
   if (raw.fit?.refit === false && !raw.coefficients) {
@@ -145,13 +168,101 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       line: fitLine,
       ridgeLine: raw.fit?.ridge !== undefined ? line(['fit', 'ridge']) : fitLine,
       threshold: raw.fit?.threshold ?? 0.5,
+      ...(raw.fit?.refit_compare !== undefined ? { refitCompare: raw.fit.refit_compare } : {}),
     },
     coefficients: raw.coefficients ? [...raw.coefficients] : null,
     coefficientsLine: raw.coefficients ? line(['coefficients']) : null,
     limits: mergeLimits(settings, limits),
     nameLine: line(['name']),
     termsLine,
+    // Present only for models trained elsewhere, so descriptors of terms keep their shape.
+    ...(predictions !== null
+      ? { predictions, parameters: raw.parameters ?? null, parametersLine: raw.parameters !== undefined ? line(['parameters']) : null }
+      : {}),
   };
+}
+
+/**
+ * `predictions` (a model trained elsewhere) with the rules the schema cannot say: exactly one of
+ * `terms` and `predictions`; no `coefficients`, `data.weight`/`data.sigma` or `fit.refit` beside
+ * `predictions`; `key` only with `file`; `parameters` only with `predictions`; `fit.refit_compare`
+ * only with `fit.refit: false`.
+ * @returns the spec, or null for a model of terms
+ * @throws InputError `schema` (neither `terms` nor `predictions`), `predictions-form`
+ */
+function readPredictions(
+  doc: YamlDocument,
+  file: string,
+  raw: RawDescriptor,
+  line: (path: (string | number)[]) => number,
+): PredictionsSpec | null {
+  if (raw.fit?.refit_compare === true && raw.fit.refit !== false) {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit_compare'],
+      '`refit_compare` reports a refit beside the shipped coefficients scored as shipped; expected `refit: false` with it (a model that is refitted already reports its shipped coefficients under `shipped`)',
+    );
+  }
+  const p = raw.predictions;
+  if (p === undefined) {
+    if (raw.terms === undefined) {
+      throw errorAt(
+        doc,
+        file,
+        SCHEMA_ERROR_CODE,
+        ['terms'],
+        'missing key `terms`; required keys: version, name, data, terms (or `predictions` instead of `terms` for a model trained elsewhere)',
+        'parent',
+      );
+    }
+    if (raw.parameters !== undefined) {
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.predictions,
+        ['parameters'],
+        '`parameters` states the parameter count of a model trained elsewhere (`predictions`); a model of terms counts its design columns, so expected no `parameters` here',
+        'key',
+      );
+    }
+    return null;
+  }
+  const clash = (
+    [
+      [raw.terms !== undefined, ['terms'], '`terms`'],
+      [raw.coefficients !== undefined, ['coefficients'], '`coefficients`'],
+      [raw.fit?.refit !== undefined, ['fit', 'refit'], '`fit.refit`'],
+      [raw.data.weight !== undefined, ['data', 'weight'], '`data.weight`'],
+      [raw.data.sigma !== undefined, ['data', 'sigma'], '`data.sigma`'],
+    ] as const
+  ).find(([present]) => present);
+  if (clash) {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      [...clash[1]],
+      `${clash[2]} does not go with \`predictions\` (a model trained elsewhere: fitgate scores its predictions and fits nothing); expected one of the two`,
+      'key',
+    );
+  }
+  const source = (which: 'train' | 'holdout'): PredictionSource => {
+    const s = (p as NonNullable<RawDescriptor['predictions']>)[which];
+    if (s.key !== undefined && s.file === undefined) {
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.predictions,
+        ['predictions', which, 'key'],
+        '`key` matches the rows of a side file with the data rows; expected `file` beside it (or no `key` for a column of the data file)',
+        'key',
+      );
+    }
+    return { column: s.column, file: s.file ?? null, key: s.key ?? null, line: line(['predictions', which]) };
+  };
+  return { train: source('train'), holdout: source('holdout'), inputs: [...(p.inputs ?? [])], line: line(['predictions']) };
 }
 
 /** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
@@ -423,7 +534,13 @@ interface RawDescriptor {
     missing?: DataFormat['missing'];
     split?: { column: string; train: string; holdout: string };
   };
-  terms: RawTerm[];
+  terms?: RawTerm[];
+  predictions?: {
+    train: RawPredictionSource;
+    holdout: RawPredictionSource;
+    inputs?: string[];
+  };
+  parameters?: number;
   fit?: {
     intercept?: boolean;
     refit?: boolean;
@@ -433,10 +550,13 @@ interface RawDescriptor {
     seed?: number;
     parameter_count?: ParameterCount;
     threshold?: number;
+    refit_compare?: boolean;
   };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }
+
+type RawPredictionSource = { column: string; file?: string; key?: string };
 
 type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: number } | { from: number; to: number; step: number };
 

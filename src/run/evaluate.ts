@@ -16,6 +16,7 @@ import { buildChartData } from './chart-data.js';
 import { runChecks } from './run-checks.js';
 import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { evaluateClassifier } from './evaluate-classifier.js';
+import { evaluatePredictions } from './evaluate-predictions.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 
 export type { BaseInput } from './base-comparison.js';
@@ -82,6 +83,7 @@ export async function evaluateModel(
 async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
   let model: FittedModel;
   try {
+    if (descriptor.predictions) return await evaluatePredictions(repo, descriptor, settings, base);
     if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
     model = await fitModel(repo, descriptor, settings);
   } catch (error) {

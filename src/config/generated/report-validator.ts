@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,7 +54,7 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
@@ -2099,11 +2099,11 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.verdict !== undefined){
+if(data.kind !== undefined){
 const _errs6 = errors;
-if(!(validate53(data.verdict, {instancePath:instancePath+"/verdict",parentData:data,parentDataProperty:"verdict",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
-errors = vErrors.length;
+if(!(data.kind === "predictions")){
+validate61.errors = [{instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema22.properties.kind.enum},message:"must be equal to one of the allowed values"}];
+return false;
 }
 var valid0 = _errs6 === errors;
 }
@@ -2111,45 +2111,57 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.rows !== undefined){
-let data3 = data.rows;
+if(data.verdict !== undefined){
 const _errs7 = errors;
-if(errors === _errs7){
-if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
+if(!(validate53(data.verdict, {instancePath:instancePath+"/verdict",parentData:data,parentDataProperty:"verdict",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs7 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.rows !== undefined){
+let data4 = data.rows;
+const _errs8 = errors;
+if(errors === _errs8){
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 let missing1;
-if(((data3.train === undefined) && (missing1 = "train")) || ((data3.holdout === undefined) && (missing1 = "holdout"))){
+if(((data4.train === undefined) && (missing1 = "train")) || ((data4.holdout === undefined) && (missing1 = "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/rows",schemaPath:"#/properties/rows/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
-const _errs9 = errors;
-for(const key1 in data3){
+const _errs10 = errors;
+for(const key1 in data4){
 if(!((key1 === "train") || (key1 === "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/rows",schemaPath:"#/properties/rows/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
-if(_errs9 === errors){
-if(data3.train !== undefined){
-const _errs10 = errors;
-if(!(validate55(data3.train, {instancePath:instancePath+"/rows/train",parentData:data3,parentDataProperty:"train",rootData,dynamicAnchors}))){
+if(_errs10 === errors){
+if(data4.train !== undefined){
+const _errs11 = errors;
+if(!(validate55(data4.train, {instancePath:instancePath+"/rows/train",parentData:data4,parentDataProperty:"train",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid1 = _errs10 === errors;
+var valid1 = _errs11 === errors;
 }
 else {
 var valid1 = true;
 }
 if(valid1){
-if(data3.holdout !== undefined){
-const _errs11 = errors;
-if(!(validate55(data3.holdout, {instancePath:instancePath+"/rows/holdout",parentData:data3,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+if(data4.holdout !== undefined){
+const _errs12 = errors;
+if(!(validate55(data4.holdout, {instancePath:instancePath+"/rows/holdout",parentData:data4,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid1 = _errs11 === errors;
+var valid1 = _errs12 === errors;
 }
 else {
 var valid1 = true;
@@ -2163,51 +2175,51 @@ validate61.errors = [{instancePath:instancePath+"/rows",schemaPath:"#/properties
 return false;
 }
 }
-var valid0 = _errs7 === errors;
+var valid0 = _errs8 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.dropped !== undefined){
-let data6 = data.dropped;
-const _errs12 = errors;
-if(errors === _errs12){
-if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
+let data7 = data.dropped;
+const _errs13 = errors;
+if(errors === _errs13){
+if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 let missing2;
-if(((data6.train === undefined) && (missing2 = "train")) || ((data6.holdout === undefined) && (missing2 = "holdout"))){
+if(((data7.train === undefined) && (missing2 = "train")) || ((data7.holdout === undefined) && (missing2 = "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
-const _errs14 = errors;
-for(const key2 in data6){
+const _errs15 = errors;
+for(const key2 in data7){
 if(!((key2 === "train") || (key2 === "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
-if(_errs14 === errors){
-if(data6.train !== undefined){
-const _errs15 = errors;
-if(!(validate55(data6.train, {instancePath:instancePath+"/dropped/train",parentData:data6,parentDataProperty:"train",rootData,dynamicAnchors}))){
+if(_errs15 === errors){
+if(data7.train !== undefined){
+const _errs16 = errors;
+if(!(validate55(data7.train, {instancePath:instancePath+"/dropped/train",parentData:data7,parentDataProperty:"train",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid2 = _errs15 === errors;
+var valid2 = _errs16 === errors;
 }
 else {
 var valid2 = true;
 }
 if(valid2){
-if(data6.holdout !== undefined){
-const _errs16 = errors;
-if(!(validate55(data6.holdout, {instancePath:instancePath+"/dropped/holdout",parentData:data6,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+if(data7.holdout !== undefined){
+const _errs17 = errors;
+if(!(validate55(data7.holdout, {instancePath:instancePath+"/dropped/holdout",parentData:data7,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid2 = _errs16 === errors;
+var valid2 = _errs17 === errors;
 }
 else {
 var valid2 = true;
@@ -2221,38 +2233,38 @@ validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/propert
 return false;
 }
 }
-var valid0 = _errs12 === errors;
+var valid0 = _errs13 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.parameters !== undefined){
-const _errs17 = errors;
+const _errs18 = errors;
 if(!(validate55(data.parameters, {instancePath:instancePath+"/parameters",parentData:data,parentDataProperty:"parameters",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs17 === errors;
+var valid0 = _errs18 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.columns !== undefined){
-let data10 = data.columns;
-const _errs18 = errors;
-if(errors === _errs18){
-if(Array.isArray(data10)){
+let data11 = data.columns;
+const _errs19 = errors;
+if(errors === _errs19){
+if(Array.isArray(data11)){
 var valid3 = true;
-const len0 = data10.length;
+const len0 = data11.length;
 for(let i0=0; i0<len0; i0++){
-const _errs20 = errors;
-if(typeof data10[i0] !== "string"){
+const _errs21 = errors;
+if(typeof data11[i0] !== "string"){
 validate61.errors = [{instancePath:instancePath+"/columns/" + i0,schemaPath:"#/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
-var valid3 = _errs20 === errors;
+var valid3 = _errs21 === errors;
 if(!valid3){
 break;
 }
@@ -2263,19 +2275,19 @@ validate61.errors = [{instancePath:instancePath+"/columns",schemaPath:"#/propert
 return false;
 }
 }
-var valid0 = _errs18 === errors;
+var valid0 = _errs19 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.metrics !== undefined){
-let data12 = data.metrics;
-const _errs22 = errors;
+let data13 = data.metrics;
 const _errs23 = errors;
-let valid4 = false;
 const _errs24 = errors;
-if(data12 !== null){
+let valid4 = false;
+const _errs25 = errors;
+if(data13 !== null){
 const err0 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err0];
@@ -2285,27 +2297,27 @@ vErrors.push(err0);
 }
 errors++;
 }
-var _valid0 = _errs24 === errors;
+var _valid0 = _errs25 === errors;
 valid4 = valid4 || _valid0;
-const _errs26 = errors;
-if(errors === _errs26){
-if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
-const _errs28 = errors;
-for(const key3 in data12){
-if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key3))){
-let data13 = data12[key3];
+const _errs27 = errors;
+if(errors === _errs27){
+if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 const _errs29 = errors;
+for(const key3 in data13){
+if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key3))){
+let data14 = data13[key3];
 const _errs30 = errors;
-let valid6 = false;
 const _errs31 = errors;
-if(!(validate68(data13, {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data12,parentDataProperty:key3,rootData,dynamicAnchors}))){
+let valid6 = false;
+const _errs32 = errors;
+if(!(validate68(data14, {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data13,parentDataProperty:key3,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid1 = _errs31 === errors;
+var _valid1 = _errs32 === errors;
 valid6 = valid6 || _valid1;
-const _errs32 = errors;
-if(typeof data13 !== "string"){
+const _errs33 = errors;
+if(typeof data14 !== "string"){
 const err1 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/1/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err1];
@@ -2315,10 +2327,10 @@ vErrors.push(err1);
 }
 errors++;
 }
-var _valid1 = _errs32 === errors;
+var _valid1 = _errs33 === errors;
 valid6 = valid6 || _valid1;
-const _errs34 = errors;
-if(data13 !== null){
+const _errs35 = errors;
+if(data14 !== null){
 const err2 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/2/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err2];
@@ -2328,7 +2340,7 @@ vErrors.push(err2);
 }
 errors++;
 }
-var _valid1 = _errs34 === errors;
+var _valid1 = _errs35 === errors;
 valid6 = valid6 || _valid1;
 if(!valid6){
 const err3 = {instancePath:instancePath+"/metrics/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2341,38 +2353,26 @@ vErrors.push(err3);
 errors++;
 }
 else {
-errors = _errs30;
+errors = _errs31;
 if(vErrors !== null){
-if(_errs30){
-vErrors.length = _errs30;
+if(_errs31){
+vErrors.length = _errs31;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid5 = _errs29 === errors;
+var valid5 = _errs30 === errors;
 if(!valid5){
 break;
 }
 }
 }
-if(_errs28 === errors){
-if(data12.train_rmse !== undefined){
-const _errs36 = errors;
-if(!(validate68(data12.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data12,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs36 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.holdout_rmse !== undefined){
+if(_errs29 === errors){
+if(data13.train_rmse !== undefined){
 const _errs37 = errors;
-if(!(validate68(data12.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data12,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+if(!(validate68(data13.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data13,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2382,9 +2382,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.train_mae !== undefined){
+if(data13.holdout_rmse !== undefined){
 const _errs38 = errors;
-if(!(validate68(data12.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data12,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+if(!(validate68(data13.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data13,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2394,9 +2394,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.holdout_mae !== undefined){
+if(data13.train_mae !== undefined){
 const _errs39 = errors;
-if(!(validate68(data12.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data12,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+if(!(validate68(data13.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data13,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2406,9 +2406,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.train_r2 !== undefined){
+if(data13.holdout_mae !== undefined){
 const _errs40 = errors;
-if(!(validate68(data12.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data12,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+if(!(validate68(data13.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data13,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2418,9 +2418,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.holdout_r2 !== undefined){
+if(data13.train_r2 !== undefined){
 const _errs41 = errors;
-if(!(validate68(data12.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data12,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+if(!(validate68(data13.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data13,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2430,9 +2430,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.gap_ratio !== undefined){
+if(data13.holdout_r2 !== undefined){
 const _errs42 = errors;
-if(!(validate68(data12.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data12,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+if(!(validate68(data13.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data13,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2442,9 +2442,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.params_per_sample !== undefined){
+if(data13.gap_ratio !== undefined){
 const _errs43 = errors;
-if(!(validate68(data12.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data12,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+if(!(validate68(data13.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data13,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2454,9 +2454,9 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.max_std_coefficient !== undefined){
+if(data13.params_per_sample !== undefined){
 const _errs44 = errors;
-if(!(validate68(data12.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data12,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+if(!(validate68(data13.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data13,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2466,10 +2466,22 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.max_std_coefficient_column !== undefined){
-let data23 = data12.max_std_coefficient_column;
+if(data13.max_std_coefficient !== undefined){
 const _errs45 = errors;
-if((typeof data23 !== "string") && (data23 !== null)){
+if(!(validate68(data13.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data13,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs45 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data13.max_std_coefficient_column !== undefined){
+let data24 = data13.max_std_coefficient_column;
+const _errs46 = errors;
+if((typeof data24 !== "string") && (data24 !== null)){
 const err4 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err4];
@@ -2479,28 +2491,16 @@ vErrors.push(err4);
 }
 errors++;
 }
-var valid7 = _errs45 === errors;
+var valid7 = _errs46 === errors;
 }
 else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.max_abs_coefficient !== undefined){
-const _errs47 = errors;
-if(!(validate68(data12.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data12,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs47 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.rank !== undefined){
+if(data13.max_abs_coefficient !== undefined){
 const _errs48 = errors;
-if(!(validate55(data12.rank, {instancePath:instancePath+"/metrics/rank",parentData:data12,parentDataProperty:"rank",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+if(!(validate68(data13.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data13,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs48 === errors;
@@ -2509,13 +2509,25 @@ else {
 var valid7 = true;
 }
 if(valid7){
-if(data12.condition_number !== undefined){
+if(data13.rank !== undefined){
 const _errs49 = errors;
-if(!(validate68(data12.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data12,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+if(!(validate55(data13.rank, {instancePath:instancePath+"/metrics/rank",parentData:data13,parentDataProperty:"rank",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs49 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data13.condition_number !== undefined){
+const _errs50 = errors;
+if(!(validate68(data13.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data13,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs50 === errors;
 }
 else {
 var valid7 = true;
@@ -2545,7 +2557,7 @@ vErrors.push(err5);
 errors++;
 }
 }
-var _valid0 = _errs26 === errors;
+var _valid0 = _errs27 === errors;
 valid4 = valid4 || _valid0;
 if(!valid4){
 const err6 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2560,36 +2572,36 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs23;
+errors = _errs24;
 if(vErrors !== null){
-if(_errs23){
-vErrors.length = _errs23;
+if(_errs24){
+vErrors.length = _errs24;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs22 === errors;
+var valid0 = _errs23 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.coefficients !== undefined){
-let data27 = data.coefficients;
-const _errs50 = errors;
-if(errors === _errs50){
-if(Array.isArray(data27)){
+let data28 = data.coefficients;
+const _errs51 = errors;
+if(errors === _errs51){
+if(Array.isArray(data28)){
 var valid8 = true;
-const len1 = data27.length;
+const len1 = data28.length;
 for(let i1=0; i1<len1; i1++){
-const _errs52 = errors;
-if(!(validate68(data27[i1], {instancePath:instancePath+"/coefficients/" + i1,parentData:data27,parentDataProperty:i1,rootData,dynamicAnchors}))){
+const _errs53 = errors;
+if(!(validate68(data28[i1], {instancePath:instancePath+"/coefficients/" + i1,parentData:data28,parentDataProperty:i1,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid8 = _errs52 === errors;
+var valid8 = _errs53 === errors;
 if(!valid8){
 break;
 }
@@ -2600,19 +2612,19 @@ validate61.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs50 === errors;
+var valid0 = _errs51 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.shipped !== undefined){
-let data29 = data.shipped;
-const _errs53 = errors;
+let data30 = data.shipped;
 const _errs54 = errors;
-let valid9 = false;
 const _errs55 = errors;
-if(data29 !== null){
+let valid9 = false;
+const _errs56 = errors;
+if(data30 !== null){
 const err7 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err7];
@@ -2622,13 +2634,13 @@ vErrors.push(err7);
 }
 errors++;
 }
-var _valid2 = _errs55 === errors;
+var _valid2 = _errs56 === errors;
 valid9 = valid9 || _valid2;
-const _errs57 = errors;
-if(errors === _errs57){
-if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
+const _errs58 = errors;
+if(errors === _errs58){
+if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
 let missing3;
-if((((data29.train_rmse === undefined) && (missing3 = "train_rmse")) || ((data29.holdout_rmse === undefined) && (missing3 = "holdout_rmse"))) || ((data29.max_coefficient_difference === undefined) && (missing3 = "max_coefficient_difference"))){
+if((((data30.train_rmse === undefined) && (missing3 = "train_rmse")) || ((data30.holdout_rmse === undefined) && (missing3 = "holdout_rmse"))) || ((data30.max_coefficient_difference === undefined) && (missing3 = "max_coefficient_difference"))){
 const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"};
 if(vErrors === null){
 vErrors = [err8];
@@ -2639,8 +2651,8 @@ vErrors.push(err8);
 errors++;
 }
 else {
-const _errs59 = errors;
-for(const key4 in data29){
+const _errs60 = errors;
+for(const key4 in data30){
 if(!(((key4 === "train_rmse") || (key4 === "holdout_rmse")) || (key4 === "max_coefficient_difference"))){
 const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"};
 if(vErrors === null){
@@ -2653,22 +2665,10 @@ errors++;
 break;
 }
 }
-if(_errs59 === errors){
-if(data29.train_rmse !== undefined){
-const _errs60 = errors;
-if(!(validate68(data29.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data29,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs60 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data29.holdout_rmse !== undefined){
+if(_errs60 === errors){
+if(data30.train_rmse !== undefined){
 const _errs61 = errors;
-if(!(validate68(data29.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data29,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+if(!(validate68(data30.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data30,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2678,13 +2678,25 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data29.max_coefficient_difference !== undefined){
+if(data30.holdout_rmse !== undefined){
 const _errs62 = errors;
-if(!(validate68(data29.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data29,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
+if(!(validate68(data30.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data30,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var valid10 = _errs62 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data30.max_coefficient_difference !== undefined){
+const _errs63 = errors;
+if(!(validate68(data30.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data30,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs63 === errors;
 }
 else {
 var valid10 = true;
@@ -2705,7 +2717,7 @@ vErrors.push(err10);
 errors++;
 }
 }
-var _valid2 = _errs57 === errors;
+var _valid2 = _errs58 === errors;
 valid9 = valid9 || _valid2;
 if(!valid9){
 const err11 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2720,36 +2732,36 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs54;
+errors = _errs55;
 if(vErrors !== null){
-if(_errs54){
-vErrors.length = _errs54;
+if(_errs55){
+vErrors.length = _errs55;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs53 === errors;
+var valid0 = _errs54 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.checks !== undefined){
-let data33 = data.checks;
-const _errs63 = errors;
-if(errors === _errs63){
-if(Array.isArray(data33)){
+let data34 = data.checks;
+const _errs64 = errors;
+if(errors === _errs64){
+if(Array.isArray(data34)){
 var valid11 = true;
-const len2 = data33.length;
+const len2 = data34.length;
 for(let i2=0; i2<len2; i2++){
-const _errs65 = errors;
-if(!(validate86(data33[i2], {instancePath:instancePath+"/checks/" + i2,parentData:data33,parentDataProperty:i2,rootData,dynamicAnchors}))){
+const _errs66 = errors;
+if(!(validate86(data34[i2], {instancePath:instancePath+"/checks/" + i2,parentData:data34,parentDataProperty:i2,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid11 = _errs65 === errors;
+var valid11 = _errs66 === errors;
 if(!valid11){
 break;
 }
@@ -2760,31 +2772,31 @@ validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properti
 return false;
 }
 }
-var valid0 = _errs63 === errors;
+var valid0 = _errs64 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.base !== undefined){
-const _errs66 = errors;
+const _errs67 = errors;
 if(!(validate92(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs66 === errors;
+var valid0 = _errs67 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.error !== undefined){
-let data36 = data.error;
-const _errs67 = errors;
+let data37 = data.error;
 const _errs68 = errors;
-let valid12 = false;
 const _errs69 = errors;
-if(data36 !== null){
+let valid12 = false;
+const _errs70 = errors;
+if(data37 !== null){
 const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err12];
@@ -2794,13 +2806,13 @@ vErrors.push(err12);
 }
 errors++;
 }
-var _valid3 = _errs69 === errors;
+var _valid3 = _errs70 === errors;
 valid12 = valid12 || _valid3;
-const _errs71 = errors;
-if(errors === _errs71){
-if(data36 && typeof data36 == "object" && !Array.isArray(data36)){
+const _errs72 = errors;
+if(errors === _errs72){
+if(data37 && typeof data37 == "object" && !Array.isArray(data37)){
 let missing4;
-if(((((data36.message === undefined) && (missing4 = "message")) || ((data36.file === undefined) && (missing4 = "file"))) || ((data36.line === undefined) && (missing4 = "line"))) || ((data36.code === undefined) && (missing4 = "code"))){
+if(((((data37.message === undefined) && (missing4 = "message")) || ((data37.file === undefined) && (missing4 = "file"))) || ((data37.line === undefined) && (missing4 = "line"))) || ((data37.code === undefined) && (missing4 = "code"))){
 const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
 if(vErrors === null){
 vErrors = [err13];
@@ -2811,8 +2823,8 @@ vErrors.push(err13);
 errors++;
 }
 else {
-const _errs73 = errors;
-for(const key5 in data36){
+const _errs74 = errors;
+for(const key5 in data37){
 if(!(((((key5 === "message") || (key5 === "file")) || (key5 === "line")) || (key5 === "column")) || (key5 === "code"))){
 const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
 if(vErrors === null){
@@ -2825,10 +2837,10 @@ errors++;
 break;
 }
 }
-if(_errs73 === errors){
-if(data36.message !== undefined){
-const _errs74 = errors;
-if(typeof data36.message !== "string"){
+if(_errs74 === errors){
+if(data37.message !== undefined){
+const _errs75 = errors;
+if(typeof data37.message !== "string"){
 const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err15];
@@ -2838,16 +2850,16 @@ vErrors.push(err15);
 }
 errors++;
 }
-var valid13 = _errs74 === errors;
+var valid13 = _errs75 === errors;
 }
 else {
 var valid13 = true;
 }
 if(valid13){
-if(data36.file !== undefined){
-let data38 = data36.file;
-const _errs76 = errors;
-if((typeof data38 !== "string") && (data38 !== null)){
+if(data37.file !== undefined){
+let data39 = data37.file;
+const _errs77 = errors;
+if((typeof data39 !== "string") && (data39 !== null)){
 const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err16];
@@ -2857,26 +2869,26 @@ vErrors.push(err16);
 }
 errors++;
 }
-var valid13 = _errs76 === errors;
+var valid13 = _errs77 === errors;
 }
 else {
 var valid13 = true;
 }
 if(valid13){
-if(data36.line !== undefined){
-let data39 = data36.line;
-const _errs78 = errors;
+if(data37.line !== undefined){
+let data40 = data37.line;
 const _errs79 = errors;
-let valid14 = false;
 const _errs80 = errors;
-if(!(validate88(data39, {instancePath:instancePath+"/error/line",parentData:data36,parentDataProperty:"line",rootData,dynamicAnchors}))){
+let valid14 = false;
+const _errs81 = errors;
+if(!(validate88(data40, {instancePath:instancePath+"/error/line",parentData:data37,parentDataProperty:"line",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs80 === errors;
+var _valid4 = _errs81 === errors;
 valid14 = valid14 || _valid4;
-const _errs81 = errors;
-if(data39 !== null){
+const _errs82 = errors;
+if(data40 !== null){
 const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err17];
@@ -2886,7 +2898,7 @@ vErrors.push(err17);
 }
 errors++;
 }
-var _valid4 = _errs81 === errors;
+var _valid4 = _errs82 === errors;
 valid14 = valid14 || _valid4;
 if(!valid14){
 const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2899,36 +2911,36 @@ vErrors.push(err18);
 errors++;
 }
 else {
-errors = _errs79;
+errors = _errs80;
 if(vErrors !== null){
-if(_errs79){
-vErrors.length = _errs79;
+if(_errs80){
+vErrors.length = _errs80;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid13 = _errs78 === errors;
+var valid13 = _errs79 === errors;
 }
 else {
 var valid13 = true;
 }
 if(valid13){
-if(data36.column !== undefined){
-let data40 = data36.column;
-const _errs83 = errors;
+if(data37.column !== undefined){
+let data41 = data37.column;
 const _errs84 = errors;
-let valid15 = false;
 const _errs85 = errors;
-if(!(validate88(data40, {instancePath:instancePath+"/error/column",parentData:data36,parentDataProperty:"column",rootData,dynamicAnchors}))){
+let valid15 = false;
+const _errs86 = errors;
+if(!(validate88(data41, {instancePath:instancePath+"/error/column",parentData:data37,parentDataProperty:"column",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs85 === errors;
+var _valid5 = _errs86 === errors;
 valid15 = valid15 || _valid5;
-const _errs86 = errors;
-if(data40 !== null){
+const _errs87 = errors;
+if(data41 !== null){
 const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err19];
@@ -2938,7 +2950,7 @@ vErrors.push(err19);
 }
 errors++;
 }
-var _valid5 = _errs86 === errors;
+var _valid5 = _errs87 === errors;
 valid15 = valid15 || _valid5;
 if(!valid15){
 const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2951,25 +2963,25 @@ vErrors.push(err20);
 errors++;
 }
 else {
-errors = _errs84;
+errors = _errs85;
 if(vErrors !== null){
-if(_errs84){
-vErrors.length = _errs84;
+if(_errs85){
+vErrors.length = _errs85;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid13 = _errs83 === errors;
+var valid13 = _errs84 === errors;
 }
 else {
 var valid13 = true;
 }
 if(valid13){
-if(data36.code !== undefined){
-const _errs88 = errors;
-if(typeof data36.code !== "string"){
+if(data37.code !== undefined){
+const _errs89 = errors;
+if(typeof data37.code !== "string"){
 const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err21];
@@ -2979,7 +2991,7 @@ vErrors.push(err21);
 }
 errors++;
 }
-var valid13 = _errs88 === errors;
+var valid13 = _errs89 === errors;
 }
 else {
 var valid13 = true;
@@ -3002,7 +3014,7 @@ vErrors.push(err22);
 errors++;
 }
 }
-var _valid3 = _errs71 === errors;
+var _valid3 = _errs72 === errors;
 valid12 = valid12 || _valid3;
 if(!valid12){
 const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -3017,32 +3029,33 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs68;
+errors = _errs69;
 if(vErrors !== null){
-if(_errs68){
-vErrors.length = _errs68;
+if(_errs69){
+vErrors.length = _errs69;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs67 === errors;
+var valid0 = _errs68 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs90 = errors;
+const _errs91 = errors;
 if(!(validate100(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate100.errors : vErrors.concat(validate100.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs90 === errors;
+var valid0 = _errs91 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }

@@ -833,7 +833,7 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate75;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows).","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder. Required unless `split` is given (then not allowed).","type":"string","minLength":1},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows).","type":"string","minLength":1},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder. Required unless `split` is given (then not allowed).","type":"string","minLength":1},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5},"refit_compare":{"description":"With `refit: false`: also refit the model from its training rows and report the refit's figures (training and hold-out RMSE, k-fold CV RMSE) beside the shipped model's, as information (metrics `refit_*`); no check judges them.","type":"boolean","default":false}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."},"predictions":{"description":"A model trained elsewhere (fitgate cannot refit it): where its predictions of the training and hold-out rows are. Instead of `terms` (not together with `terms`, `coefficients` or `data.weight`/`data.sigma`). Checks that need only predictions run; those that need a refit or coefficients are skipped with a reason.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"$ref":"#/$defs/predictionSource","description":"Predictions of the training rows."},"holdout":{"$ref":"#/$defs/predictionSource","description":"Predictions of the hold-out rows."},"inputs":{"description":"The model's input columns (in the data files), for the `leakage` check; without them `leakage` is skipped.","type":"array","minItems":1,"maxItems":1000,"items":{"description":"A column name of the data files.","type":"string","minLength":1}}}},"parameters":{"description":"The number of parameters of a model trained elsewhere (`predictions`), when it can be stated; enables `parameter-ratio` (and `events-per-parameter` for classifiers).","type":"integer","minimum":1,"maximum":1000000000000}},"$defs":{"predictionSource":{"title":"predictions source","description":"`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].","type":"object","required":["column"],"additionalProperties":false,"properties":{"column":{"description":"Column holding the predictions.","type":"string","minLength":1},"file":{"description":"Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).","type":"string","minLength":1},"key":{"description":"Row key column held by both the data file and the side file (unique in each); only with `file`.","type":"string","minLength":1}}},"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
@@ -3365,6 +3365,132 @@ return errors === 0;
 }
 validate80.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
+const schema27 = {"title":"predictions source","description":"`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].","type":"object","required":["column"],"additionalProperties":false,"properties":{"column":{"description":"Column holding the predictions.","type":"string","minLength":1},"file":{"description":"Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).","type":"string","minLength":1},"key":{"description":"Row key column held by both the data file and the side file (unique in each); only with `file`.","type":"string","minLength":1}}};
+
+function validate102(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate102.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.column === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema27.required,parentSchema:schema27,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((key0 === "column") || (key0 === "file")) || (key0 === "key"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema27,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.column !== undefined){
+let data0 = data.column;
+if(typeof data0 === "string"){
+if(func1(data0) < 1){
+const err2 = {instancePath:instancePath+"/column",schemaPath:"#/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema27.properties.column,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+else {
+const err3 = {instancePath:instancePath+"/column",schemaPath:"#/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema27.properties.column.type,parentSchema:schema27.properties.column,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.file !== undefined){
+let data1 = data.file;
+if(typeof data1 === "string"){
+if(func1(data1) < 1){
+const err4 = {instancePath:instancePath+"/file",schemaPath:"#/properties/file/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema27.properties.file,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/file",schemaPath:"#/properties/file/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema27.properties.file.type,parentSchema:schema27.properties.file,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.key !== undefined){
+let data2 = data.key;
+if(typeof data2 === "string"){
+if(func1(data2) < 1){
+const err6 = {instancePath:instancePath+"/key",schemaPath:"#/properties/key/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema27.properties.key,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/key",schemaPath:"#/properties/key/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema27.properties.key.type,parentSchema:schema27.properties.key,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+}
+else {
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema27.type,parentSchema:schema27,data};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+validate102.errors = vErrors;
+return errors === 0;
+}
+validate102.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+
 
 function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 /*# sourceURL="urn:fitgate:schema:descriptor:1" */;
@@ -3408,8 +3534,9 @@ vErrors.push(err2);
 }
 errors++;
 }
-if(data.terms === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "terms"},message:"must have required property '"+"terms"+"'",schema:schema22.required,parentSchema:schema22,data};
+for(const key0 in data){
+if(!(func2.call(schema22.properties, key0))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema22,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3418,9 +3545,11 @@ vErrors.push(err3);
 }
 errors++;
 }
-for(const key0 in data){
-if(!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))){
-const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema22,data};
+}
+if(data.version !== undefined){
+let data0 = data.version;
+if(1 !== data0){
+const err4 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 1},message:"must be equal to constant",schema:1,parentSchema:schema22.properties.version,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3430,10 +3559,11 @@ vErrors.push(err4);
 errors++;
 }
 }
-if(data.version !== undefined){
-let data0 = data.version;
-if(1 !== data0){
-const err5 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 1},message:"must be equal to constant",schema:1,parentSchema:schema22.properties.version,data:data0};
+if(data.name !== undefined){
+let data1 = data.name;
+if(typeof data1 === "string"){
+if(func1(data1) > 100){
+const err5 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/maxLength",keyword:"maxLength",params:{limit: 100},message:"must NOT have more than 100 characters",schema:100,parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3442,12 +3572,8 @@ vErrors.push(err5);
 }
 errors++;
 }
-}
-if(data.name !== undefined){
-let data1 = data.name;
-if(typeof data1 === "string"){
-if(func1(data1) > 100){
-const err6 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/maxLength",keyword:"maxLength",params:{limit: 100},message:"must NOT have more than 100 characters",schema:100,parentSchema:schema22.properties.name,data:data1};
+if(func1(data1) < 1){
+const err6 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3456,8 +3582,8 @@ vErrors.push(err6);
 }
 errors++;
 }
-if(func1(data1) < 1){
-const err7 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.name,data:data1};
+if(!pattern3.test(data1)){
+const err7 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/pattern",keyword:"pattern",params:{pattern: "^[A-Za-z0-9._-]+$"},message:"must match pattern \""+"^[A-Za-z0-9._-]+$"+"\"",schema:"^[A-Za-z0-9._-]+$",parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3466,8 +3592,9 @@ vErrors.push(err7);
 }
 errors++;
 }
-if(!pattern3.test(data1)){
-const err8 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/pattern",keyword:"pattern",params:{pattern: "^[A-Za-z0-9._-]+$"},message:"must match pattern \""+"^[A-Za-z0-9._-]+$"+"\"",schema:"^[A-Za-z0-9._-]+$",parentSchema:schema22.properties.name,data:data1};
+}
+else {
+const err8 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.name.type,parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3477,8 +3604,10 @@ vErrors.push(err8);
 errors++;
 }
 }
-else {
-const err9 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.name.type,parentSchema:schema22.properties.name,data:data1};
+if(data.task !== undefined){
+let data2 = data.task;
+if(!((data2 === "regression") || (data2 === "classification"))){
+const err9 = {instancePath:instancePath+"/task",schemaPath:"#/properties/task/enum",keyword:"enum",params:{allowedValues: schema22.properties.task.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.task.enum,parentSchema:schema22.properties.task,data:data2};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3488,10 +3617,11 @@ vErrors.push(err9);
 errors++;
 }
 }
-if(data.task !== undefined){
-let data2 = data.task;
-if(!((data2 === "regression") || (data2 === "classification"))){
-const err10 = {instancePath:instancePath+"/task",schemaPath:"#/properties/task/enum",keyword:"enum",params:{allowedValues: schema22.properties.task.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.task.enum,parentSchema:schema22.properties.task,data:data2};
+if(data.data !== undefined){
+let data3 = data.data;
+if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
+if(data3.train === undefined){
+const err10 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3500,12 +3630,8 @@ vErrors.push(err10);
 }
 errors++;
 }
-}
-if(data.data !== undefined){
-let data3 = data.data;
-if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
-if(data3.train === undefined){
-const err11 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
+if(data3.target === undefined){
+const err11 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "target"},message:"must have required property '"+"target"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3514,8 +3640,9 @@ vErrors.push(err11);
 }
 errors++;
 }
-if(data3.target === undefined){
-const err12 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "target"},message:"must have required property '"+"target"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
+for(const key1 in data3){
+if(!(func2.call(schema22.properties.data.properties, key1))){
+const err12 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3524,9 +3651,12 @@ vErrors.push(err12);
 }
 errors++;
 }
-for(const key1 in data3){
-if(!(func2.call(schema22.properties.data.properties, key1))){
-const err13 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
+}
+if(data3.train !== undefined){
+let data4 = data3.train;
+if(typeof data4 === "string"){
+if(func1(data4) < 1){
+const err13 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train,data:data4};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3536,11 +3666,8 @@ vErrors.push(err13);
 errors++;
 }
 }
-if(data3.train !== undefined){
-let data4 = data3.train;
-if(typeof data4 === "string"){
-if(func1(data4) < 1){
-const err14 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train,data:data4};
+else {
+const err14 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.type,parentSchema:schema22.properties.data.properties.train,data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3550,8 +3677,11 @@ vErrors.push(err14);
 errors++;
 }
 }
-else {
-const err15 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.type,parentSchema:schema22.properties.data.properties.train,data:data4};
+if(data3.holdout !== undefined){
+let data5 = data3.holdout;
+if(typeof data5 === "string"){
+if(func1(data5) < 1){
+const err15 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout,data:data5};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3561,11 +3691,8 @@ vErrors.push(err15);
 errors++;
 }
 }
-if(data3.holdout !== undefined){
-let data5 = data3.holdout;
-if(typeof data5 === "string"){
-if(func1(data5) < 1){
-const err16 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout,data:data5};
+else {
+const err16 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.type,parentSchema:schema22.properties.data.properties.holdout,data:data5};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3575,8 +3702,10 @@ vErrors.push(err16);
 errors++;
 }
 }
-else {
-const err17 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.type,parentSchema:schema22.properties.data.properties.holdout,data:data5};
+if(data3.separator !== undefined){
+let data6 = data3.separator;
+if(!((((data6 === "auto") || (data6 === ",")) || (data6 === ";")) || (data6 === "\t"))){
+const err17 = {instancePath:instancePath+"/data/separator",schemaPath:"#/properties/data/properties/separator/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.separator.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.separator.enum,parentSchema:schema22.properties.data.properties.separator,data:data6};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3586,10 +3715,10 @@ vErrors.push(err17);
 errors++;
 }
 }
-if(data3.separator !== undefined){
-let data6 = data3.separator;
-if(!((((data6 === "auto") || (data6 === ",")) || (data6 === ";")) || (data6 === "\t"))){
-const err18 = {instancePath:instancePath+"/data/separator",schemaPath:"#/properties/data/properties/separator/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.separator.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.separator.enum,parentSchema:schema22.properties.data.properties.separator,data:data6};
+if(data3.decimal !== undefined){
+let data7 = data3.decimal;
+if(!((data7 === ".") || (data7 === ","))){
+const err18 = {instancePath:instancePath+"/data/decimal",schemaPath:"#/properties/data/properties/decimal/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.decimal.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.decimal.enum,parentSchema:schema22.properties.data.properties.decimal,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3599,10 +3728,10 @@ vErrors.push(err18);
 errors++;
 }
 }
-if(data3.decimal !== undefined){
-let data7 = data3.decimal;
-if(!((data7 === ".") || (data7 === ","))){
-const err19 = {instancePath:instancePath+"/data/decimal",schemaPath:"#/properties/data/properties/decimal/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.decimal.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.decimal.enum,parentSchema:schema22.properties.data.properties.decimal,data:data7};
+if(data3.missing !== undefined){
+let data8 = data3.missing;
+if(!((data8 === "error") || (data8 === "drop"))){
+const err19 = {instancePath:instancePath+"/data/missing",schemaPath:"#/properties/data/properties/missing/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.missing.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.missing.enum,parentSchema:schema22.properties.data.properties.missing,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3612,10 +3741,11 @@ vErrors.push(err19);
 errors++;
 }
 }
-if(data3.missing !== undefined){
-let data8 = data3.missing;
-if(!((data8 === "error") || (data8 === "drop"))){
-const err20 = {instancePath:instancePath+"/data/missing",schemaPath:"#/properties/data/properties/missing/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.missing.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.missing.enum,parentSchema:schema22.properties.data.properties.missing,data:data8};
+if(data3.split !== undefined){
+let data9 = data3.split;
+if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+if(data9.column === undefined){
+const err20 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3624,12 +3754,8 @@ vErrors.push(err20);
 }
 errors++;
 }
-}
-if(data3.split !== undefined){
-let data9 = data3.split;
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
-if(data9.column === undefined){
-const err21 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
+if(data9.train === undefined){
+const err21 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3638,8 +3764,8 @@ vErrors.push(err21);
 }
 errors++;
 }
-if(data9.train === undefined){
-const err22 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
+if(data9.holdout === undefined){
+const err22 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3648,8 +3774,9 @@ vErrors.push(err22);
 }
 errors++;
 }
-if(data9.holdout === undefined){
-const err23 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data9};
+for(const key2 in data9){
+if(!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))){
+const err23 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3658,9 +3785,12 @@ vErrors.push(err23);
 }
 errors++;
 }
-for(const key2 in data9){
-if(!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))){
-const err24 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data.properties.split,data:data9};
+}
+if(data9.column !== undefined){
+let data10 = data9.column;
+if(typeof data10 === "string"){
+if(func1(data10) < 1){
+const err24 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.column,data:data10};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3670,11 +3800,8 @@ vErrors.push(err24);
 errors++;
 }
 }
-if(data9.column !== undefined){
-let data10 = data9.column;
-if(typeof data10 === "string"){
-if(func1(data10) < 1){
-const err25 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.column,data:data10};
+else {
+const err25 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.column.type,parentSchema:schema22.properties.data.properties.split.properties.column,data:data10};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3684,8 +3811,11 @@ vErrors.push(err25);
 errors++;
 }
 }
-else {
-const err26 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.column.type,parentSchema:schema22.properties.data.properties.split.properties.column,data:data10};
+if(data9.train !== undefined){
+let data11 = data9.train;
+if(typeof data11 === "string"){
+if(func1(data11) < 1){
+const err26 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.train,data:data11};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3695,11 +3825,8 @@ vErrors.push(err26);
 errors++;
 }
 }
-if(data9.train !== undefined){
-let data11 = data9.train;
-if(typeof data11 === "string"){
-if(func1(data11) < 1){
-const err27 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.train,data:data11};
+else {
+const err27 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.train.type,parentSchema:schema22.properties.data.properties.split.properties.train,data:data11};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -3709,8 +3836,11 @@ vErrors.push(err27);
 errors++;
 }
 }
-else {
-const err28 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.train.type,parentSchema:schema22.properties.data.properties.split.properties.train,data:data11};
+if(data9.holdout !== undefined){
+let data12 = data9.holdout;
+if(typeof data12 === "string"){
+if(func1(data12) < 1){
+const err28 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -3720,11 +3850,8 @@ vErrors.push(err28);
 errors++;
 }
 }
-if(data9.holdout !== undefined){
-let data12 = data9.holdout;
-if(typeof data12 === "string"){
-if(func1(data12) < 1){
-const err29 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data12};
+else {
+const err29 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.holdout.type,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -3734,8 +3861,9 @@ vErrors.push(err29);
 errors++;
 }
 }
+}
 else {
-const err30 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.holdout.type,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data12};
+const err30 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.properties.split.type,parentSchema:schema22.properties.data.properties.split,data:data9};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -3745,9 +3873,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-}
-else {
-const err31 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.properties.split.type,parentSchema:schema22.properties.data.properties.split,data:data9};
+if(data3.target !== undefined){
+let data13 = data3.target;
+if(typeof data13 === "string"){
+if(func1(data13) < 1){
+const err31 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.target,data:data13};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3757,11 +3887,8 @@ vErrors.push(err31);
 errors++;
 }
 }
-if(data3.target !== undefined){
-let data13 = data3.target;
-if(typeof data13 === "string"){
-if(func1(data13) < 1){
-const err32 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.target,data:data13};
+else {
+const err32 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.target.type,parentSchema:schema22.properties.data.properties.target,data:data13};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3771,8 +3898,11 @@ vErrors.push(err32);
 errors++;
 }
 }
-else {
-const err33 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.target.type,parentSchema:schema22.properties.data.properties.target,data:data13};
+if(data3.positive !== undefined){
+let data14 = data3.positive;
+if(typeof data14 === "string"){
+if(func1(data14) < 1){
+const err33 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.positive,data:data14};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3782,11 +3912,8 @@ vErrors.push(err33);
 errors++;
 }
 }
-if(data3.positive !== undefined){
-let data14 = data3.positive;
-if(typeof data14 === "string"){
-if(func1(data14) < 1){
-const err34 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.positive,data:data14};
+else {
+const err34 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.positive.type,parentSchema:schema22.properties.data.properties.positive,data:data14};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3796,8 +3923,11 @@ vErrors.push(err34);
 errors++;
 }
 }
-else {
-const err35 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.positive.type,parentSchema:schema22.properties.data.properties.positive,data:data14};
+if(data3.weight !== undefined){
+let data15 = data3.weight;
+if(typeof data15 === "string"){
+if(func1(data15) < 1){
+const err35 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.weight,data:data15};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3807,11 +3937,8 @@ vErrors.push(err35);
 errors++;
 }
 }
-if(data3.weight !== undefined){
-let data15 = data3.weight;
-if(typeof data15 === "string"){
-if(func1(data15) < 1){
-const err36 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.weight,data:data15};
+else {
+const err36 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.weight.type,parentSchema:schema22.properties.data.properties.weight,data:data15};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3821,8 +3948,11 @@ vErrors.push(err36);
 errors++;
 }
 }
-else {
-const err37 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.weight.type,parentSchema:schema22.properties.data.properties.weight,data:data15};
+if(data3.sigma !== undefined){
+let data16 = data3.sigma;
+if(typeof data16 === "string"){
+if(func1(data16) < 1){
+const err37 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.sigma,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3832,11 +3962,8 @@ vErrors.push(err37);
 errors++;
 }
 }
-if(data3.sigma !== undefined){
-let data16 = data3.sigma;
-if(typeof data16 === "string"){
-if(func1(data16) < 1){
-const err38 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.sigma,data:data16};
+else {
+const err38 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.sigma.type,parentSchema:schema22.properties.data.properties.sigma,data:data16};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3846,8 +3973,9 @@ vErrors.push(err38);
 errors++;
 }
 }
+}
 else {
-const err39 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.sigma.type,parentSchema:schema22.properties.data.properties.sigma,data:data16};
+const err39 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -3857,28 +3985,16 @@ vErrors.push(err39);
 errors++;
 }
 }
-}
-else {
-const err40 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
+if(data.terms !== undefined){
+let data17 = data.terms;
+if(Array.isArray(data17)){
+if(data17.length < 1){
+const err40 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data17};
 if(vErrors === null){
 vErrors = [err40];
 }
 else {
 vErrors.push(err40);
-}
-errors++;
-}
-}
-if(data.terms !== undefined){
-let data17 = data.terms;
-if(Array.isArray(data17)){
-if(data17.length < 1){
-const err41 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data17};
-if(vErrors === null){
-vErrors = [err41];
-}
-else {
-vErrors.push(err41);
 }
 errors++;
 }
@@ -3891,7 +4007,22 @@ errors = vErrors.length;
 }
 }
 else {
-const err42 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data17};
+const err41 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data17};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+if(data.fit !== undefined){
+let data19 = data.fit;
+if(data19 && typeof data19 == "object" && !Array.isArray(data19)){
+for(const key3 in data19){
+if(!(func2.call(schema22.properties.fit.properties, key3))){
+const err42 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data19};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -3901,12 +4032,10 @@ vErrors.push(err42);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data19 = data.fit;
-if(data19 && typeof data19 == "object" && !Array.isArray(data19)){
-for(const key3 in data19){
-if(!((((((((key3 === "intercept") || (key3 === "refit")) || (key3 === "ridge")) || (key3 === "folds")) || (key3 === "fold_order")) || (key3 === "seed")) || (key3 === "parameter_count")) || (key3 === "threshold"))){
-const err43 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data19};
+if(data19.intercept !== undefined){
+let data20 = data19.intercept;
+if(typeof data20 !== "boolean"){
+const err43 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data20};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -3916,10 +4045,10 @@ vErrors.push(err43);
 errors++;
 }
 }
-if(data19.intercept !== undefined){
-let data20 = data19.intercept;
-if(typeof data20 !== "boolean"){
-const err44 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data20};
+if(data19.refit !== undefined){
+let data21 = data19.refit;
+if(typeof data21 !== "boolean"){
+const err44 = {instancePath:instancePath+"/fit/refit",schemaPath:"#/properties/fit/properties/refit/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit.type,parentSchema:schema22.properties.fit.properties.refit,data:data21};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -3929,10 +4058,11 @@ vErrors.push(err44);
 errors++;
 }
 }
-if(data19.refit !== undefined){
-let data21 = data19.refit;
-if(typeof data21 !== "boolean"){
-const err45 = {instancePath:instancePath+"/fit/refit",schemaPath:"#/properties/fit/properties/refit/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit.type,parentSchema:schema22.properties.fit.properties.refit,data:data21};
+if(data19.ridge !== undefined){
+let data22 = data19.ridge;
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 < 0 || isNaN(data22)){
+const err45 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data22};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -3942,11 +4072,8 @@ vErrors.push(err45);
 errors++;
 }
 }
-if(data19.ridge !== undefined){
-let data22 = data19.ridge;
-if((typeof data22 == "number") && (isFinite(data22))){
-if(data22 < 0 || isNaN(data22)){
-const err46 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data22};
+else {
+const err46 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data22};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -3956,8 +4083,10 @@ vErrors.push(err46);
 errors++;
 }
 }
-else {
-const err47 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data22};
+if(data19.folds !== undefined){
+let data23 = data19.folds;
+if(!(((typeof data23 == "number") && (!(data23 % 1) && !isNaN(data23))) && (isFinite(data23)))){
+const err47 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data23};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3966,11 +4095,9 @@ vErrors.push(err47);
 }
 errors++;
 }
-}
-if(data19.folds !== undefined){
-let data23 = data19.folds;
-if(!(((typeof data23 == "number") && (!(data23 % 1) && !isNaN(data23))) && (isFinite(data23)))){
-const err48 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data23};
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 > 50 || isNaN(data23)){
+const err48 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data23};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3979,9 +4106,8 @@ vErrors.push(err48);
 }
 errors++;
 }
-if((typeof data23 == "number") && (isFinite(data23))){
-if(data23 > 50 || isNaN(data23)){
-const err49 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data23};
+if(data23 < 2 || isNaN(data23)){
+const err49 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data23};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -3990,8 +4116,12 @@ vErrors.push(err49);
 }
 errors++;
 }
-if(data23 < 2 || isNaN(data23)){
-const err50 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data23};
+}
+}
+if(data19.fold_order !== undefined){
+let data24 = data19.fold_order;
+if(!((data24 === "shuffled") || (data24 === "blocks"))){
+const err50 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data24};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -4001,11 +4131,10 @@ vErrors.push(err50);
 errors++;
 }
 }
-}
-if(data19.fold_order !== undefined){
-let data24 = data19.fold_order;
-if(!((data24 === "shuffled") || (data24 === "blocks"))){
-const err51 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data24};
+if(data19.seed !== undefined){
+let data25 = data19.seed;
+if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
+const err51 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data25};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4014,11 +4143,9 @@ vErrors.push(err51);
 }
 errors++;
 }
-}
-if(data19.seed !== undefined){
-let data25 = data19.seed;
-if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
-const err52 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data25};
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 > 4294967295 || isNaN(data25)){
+const err52 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data25};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -4027,9 +4154,8 @@ vErrors.push(err52);
 }
 errors++;
 }
-if((typeof data25 == "number") && (isFinite(data25))){
-if(data25 > 4294967295 || isNaN(data25)){
-const err53 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data25};
+if(data25 < 0 || isNaN(data25)){
+const err53 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data25};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -4038,8 +4164,12 @@ vErrors.push(err53);
 }
 errors++;
 }
-if(data25 < 0 || isNaN(data25)){
-const err54 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data25};
+}
+}
+if(data19.parameter_count !== undefined){
+let data26 = data19.parameter_count;
+if(!((data26 === "columns") || (data26 === "effective"))){
+const err54 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data26};
 if(vErrors === null){
 vErrors = [err54];
 }
@@ -4049,11 +4179,11 @@ vErrors.push(err54);
 errors++;
 }
 }
-}
-if(data19.parameter_count !== undefined){
-let data26 = data19.parameter_count;
-if(!((data26 === "columns") || (data26 === "effective"))){
-const err55 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data26};
+if(data19.threshold !== undefined){
+let data27 = data19.threshold;
+if((typeof data27 == "number") && (isFinite(data27))){
+if(data27 >= 1 || isNaN(data27)){
+const err55 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data27};
 if(vErrors === null){
 vErrors = [err55];
 }
@@ -4062,12 +4192,8 @@ vErrors.push(err55);
 }
 errors++;
 }
-}
-if(data19.threshold !== undefined){
-let data27 = data19.threshold;
-if((typeof data27 == "number") && (isFinite(data27))){
-if(data27 >= 1 || isNaN(data27)){
-const err56 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data27};
+if(data27 <= 0 || isNaN(data27)){
+const err56 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data27};
 if(vErrors === null){
 vErrors = [err56];
 }
@@ -4076,8 +4202,9 @@ vErrors.push(err56);
 }
 errors++;
 }
-if(data27 <= 0 || isNaN(data27)){
-const err57 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data27};
+}
+else {
+const err57 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data27};
 if(vErrors === null){
 vErrors = [err57];
 }
@@ -4087,8 +4214,10 @@ vErrors.push(err57);
 errors++;
 }
 }
-else {
-const err58 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data27};
+if(data19.refit_compare !== undefined){
+let data28 = data19.refit_compare;
+if(typeof data28 !== "boolean"){
+const err58 = {instancePath:instancePath+"/fit/refit_compare",schemaPath:"#/properties/fit/properties/refit_compare/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit_compare.type,parentSchema:schema22.properties.fit.properties.refit_compare,data:data28};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4111,10 +4240,10 @@ errors++;
 }
 }
 if(data.coefficients !== undefined){
-let data28 = data.coefficients;
-if(Array.isArray(data28)){
-if(data28.length < 1){
-const err60 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data28};
+let data29 = data.coefficients;
+if(Array.isArray(data29)){
+if(data29.length < 1){
+const err60 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data29};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4123,11 +4252,11 @@ vErrors.push(err60);
 }
 errors++;
 }
-const len1 = data28.length;
+const len1 = data29.length;
 for(let i1=0; i1<len1; i1++){
-let data29 = data28[i1];
-if(!((typeof data29 == "number") && (isFinite(data29)))){
-const err61 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data29};
+let data30 = data29[i1];
+if(!((typeof data30 == "number") && (isFinite(data30)))){
+const err61 = {instancePath:instancePath+"/coefficients/" + i1,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data30};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4139,7 +4268,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data28};
+const err62 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data29};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4155,14 +4284,169 @@ vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.error
 errors = vErrors.length;
 }
 }
-}
-else {
-const err63 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(data.predictions !== undefined){
+let data32 = data.predictions;
+if(data32 && typeof data32 == "object" && !Array.isArray(data32)){
+if(data32.train === undefined){
+const err63 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data32};
 if(vErrors === null){
 vErrors = [err63];
 }
 else {
 vErrors.push(err63);
+}
+errors++;
+}
+if(data32.holdout === undefined){
+const err64 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data32};
+if(vErrors === null){
+vErrors = [err64];
+}
+else {
+vErrors.push(err64);
+}
+errors++;
+}
+for(const key4 in data32){
+if(!(((key4 === "train") || (key4 === "holdout")) || (key4 === "inputs"))){
+const err65 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.predictions,data:data32};
+if(vErrors === null){
+vErrors = [err65];
+}
+else {
+vErrors.push(err65);
+}
+errors++;
+}
+}
+if(data32.train !== undefined){
+if(!(validate102(data32.train, {instancePath:instancePath+"/predictions/train",parentData:data32,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+errors = vErrors.length;
+}
+}
+if(data32.holdout !== undefined){
+if(!(validate102(data32.holdout, {instancePath:instancePath+"/predictions/holdout",parentData:data32,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+errors = vErrors.length;
+}
+}
+if(data32.inputs !== undefined){
+let data35 = data32.inputs;
+if(Array.isArray(data35)){
+if(data35.length > 1000){
+const err66 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.predictions.properties.inputs,data:data35};
+if(vErrors === null){
+vErrors = [err66];
+}
+else {
+vErrors.push(err66);
+}
+errors++;
+}
+if(data35.length < 1){
+const err67 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.predictions.properties.inputs,data:data35};
+if(vErrors === null){
+vErrors = [err67];
+}
+else {
+vErrors.push(err67);
+}
+errors++;
+}
+const len2 = data35.length;
+for(let i2=0; i2<len2; i2++){
+let data36 = data35[i2];
+if(typeof data36 === "string"){
+if(func1(data36) < 1){
+const err68 = {instancePath:instancePath+"/predictions/inputs/" + i2,schemaPath:"#/properties/predictions/properties/inputs/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data36};
+if(vErrors === null){
+vErrors = [err68];
+}
+else {
+vErrors.push(err68);
+}
+errors++;
+}
+}
+else {
+const err69 = {instancePath:instancePath+"/predictions/inputs/" + i2,schemaPath:"#/properties/predictions/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.predictions.properties.inputs.items.type,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data36};
+if(vErrors === null){
+vErrors = [err69];
+}
+else {
+vErrors.push(err69);
+}
+errors++;
+}
+}
+}
+else {
+const err70 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.predictions.properties.inputs.type,parentSchema:schema22.properties.predictions.properties.inputs,data:data35};
+if(vErrors === null){
+vErrors = [err70];
+}
+else {
+vErrors.push(err70);
+}
+errors++;
+}
+}
+}
+else {
+const err71 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.predictions.type,parentSchema:schema22.properties.predictions,data:data32};
+if(vErrors === null){
+vErrors = [err71];
+}
+else {
+vErrors.push(err71);
+}
+errors++;
+}
+}
+if(data.parameters !== undefined){
+let data37 = data.parameters;
+if(!(((typeof data37 == "number") && (!(data37 % 1) && !isNaN(data37))) && (isFinite(data37)))){
+const err72 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.parameters.type,parentSchema:schema22.properties.parameters,data:data37};
+if(vErrors === null){
+vErrors = [err72];
+}
+else {
+vErrors.push(err72);
+}
+errors++;
+}
+if((typeof data37 == "number") && (isFinite(data37))){
+if(data37 > 1000000000000 || isNaN(data37)){
+const err73 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1000000000000},message:"must be <= 1000000000000",schema:1000000000000,parentSchema:schema22.properties.parameters,data:data37};
+if(vErrors === null){
+vErrors = [err73];
+}
+else {
+vErrors.push(err73);
+}
+errors++;
+}
+if(data37 < 1 || isNaN(data37)){
+const err74 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema22.properties.parameters,data:data37};
+if(vErrors === null){
+vErrors = [err74];
+}
+else {
+vErrors.push(err74);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err75 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(vErrors === null){
+vErrors = [err75];
+}
+else {
+vErrors.push(err75);
 }
 errors++;
 }
