@@ -205,6 +205,15 @@ function readPredictions(
       '`refit_compare` reports a refit beside the shipped coefficients scored as shipped; expected `refit: false` with it (a model that is refitted already reports its shipped coefficients under `shipped`)',
     );
   }
+  if (raw.fit?.refit_compare === true && raw.task === 'classification') {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit_compare'],
+      '`refit_compare` reports the refit of a regression model scored as shipped; expected no `refit_compare` on a classifier',
+    );
+  }
   const p = raw.predictions;
   if (p === undefined) {
     if (raw.terms === undefined) {

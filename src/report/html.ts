@@ -7,6 +7,7 @@
  */
 import { findCheck } from '../checks/index.js';
 import { kindLine, kindMark, parametersText } from './model-kind.js';
+import { refitCompareLine } from './refit-compare.js';
 import { formatNumber } from '../core/format.js';
 import type { ChartData } from '../result/chart-types.js';
 import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
@@ -196,6 +197,8 @@ function modelSection(m: ModelResult, index: number): string {
   );
   const kind = kindLine(m);
   if (kind !== null) parts.push(`<p class="note" data-kind="predictions">${escapeHtml(kind)}</p>`);
+  const refit = refitCompareLine(m);
+  if (refit !== null) parts.push(`<p class="note" data-refit-compare>${escapeHtml(refit)}</p>`);
   parts.push('<h3>Checks</h3>', checksTable(m));
   if (m.charts) {
     const list = charts(m.charts, id);

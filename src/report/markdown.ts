@@ -7,6 +7,7 @@
  */
 import { calibrationChart, classifierLine, isClassifier } from './classifier-figures.js';
 import { kindLine, kindMark } from './model-kind.js';
+import { refitCompareLine } from './refit-compare.js';
 import { mermaidChart } from './mermaid.js';
 import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
@@ -97,6 +98,8 @@ export function modelDetail(m: ModelResult): string[] {
   const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
   const kind = kindLine(m);
   if (kind !== null) lines.push(text(kind), '');
+  const refit = refitCompareLine(m);
+  if (refit !== null) lines.push(text(refit), '');
   if (isClassifier(m)) lines.push(text(classifierLine(m)), '');
   lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   for (const c of shown) lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);

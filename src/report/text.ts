@@ -4,6 +4,7 @@
  */
 import { classifierLine, isClassifier } from './classifier-figures.js';
 import { kindLine, kindMark } from './model-kind.js';
+import { refitCompareLine } from './refit-compare.js';
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import { maxOf } from '../core/extremes.js';
@@ -118,6 +119,8 @@ export function formatText(result: Result, options: TextOptions = {}): string {
     }
     const kind = kindLine(m);
     if (kind !== null) out.push(`  ${escapeTerminal(kind)}`);
+    const refit = refitCompareLine(m);
+    if (refit !== null) out.push(`  ${escapeTerminal(refit)}`);
     if (isClassifier(m)) out.push(`  ${escapeTerminal(classifierLine(m))}`);
     for (const c of m.checks) if (verbose || c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
   }

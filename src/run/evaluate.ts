@@ -49,6 +49,16 @@ function reportMetrics(model: FittedModel): ModelMetrics {
     rank: fit.rank,
     condition_number: jsonNumber(fit.conditionNumber),
     condition_number_scaled: jsonNumber(fit.conditionNumberScaled),
+    // `fit.refit_compare`: what a refit would give, beside the shipped model's figures above.
+    ...(model.refitCompare
+      ? {
+          refit_train_rmse: jsonNumber(model.refitCompare.trainRmse),
+          refit_holdout_rmse: jsonNumber(model.refitCompare.holdoutRmse),
+          refit_gap_ratio: jsonNumber(model.refitCompare.gapRatio),
+          refit_cv_rmse: jsonNumber(model.refitCompare.cvRmse),
+          refit_cv_folds: model.refitCompare.folds,
+        }
+      : {}),
   };
 }
 
