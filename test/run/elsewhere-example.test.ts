@@ -1,6 +1,8 @@
 // The example of models trained elsewhere (examples/elsewhere, an invented parcel courier): the
 // boosted-tree model whose predictions are a column fails the gap; the classifier whose
 // probabilities are in keyed side files passes. Run through the command from the sources.
+import { cpSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -46,5 +48,19 @@ describe('examples/elsewhere', () => {
     expect(r.stdout).toContain('delivery-minutes (predictions)');
     expect(r.stdout).toContain('late-parcel (predictions)');
     expect(r.stdout).toContain('kind: trained elsewhere, gated from its predictions (48 stated parameters)');
+  });
+
+  it('fitgate refit keeps them as they are (nothing to refit)', () => {
+    const copy = mkdtempSync(path.join(tmpdir(), 'fitgate-elsewhere-'));
+    try {
+      cpSync(dir, copy, { recursive: true });
+      const before = readFileSync(path.join(copy, 'models/delivery-minutes.model.yml'), 'utf8');
+      const r = cli.run(['refit', '--root', copy], copy);
+      expect(r.status, r.stdout + r.stderr).toBe(0);
+      expect(r.stdout).toContain('kept: models/delivery-minutes.model.yml: trained elsewhere (`predictions`), nothing to refit');
+      expect(readFileSync(path.join(copy, 'models/delivery-minutes.model.yml'), 'utf8')).toBe(before);
+    } finally {
+      rmSync(copy, { recursive: true, force: true });
+    }
   });
 });

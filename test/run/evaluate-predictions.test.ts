@@ -307,6 +307,46 @@ describe('a side file of predictions', () => {
   });
 });
 
+describe('with data.split (one file for both sides)', () => {
+  const all = [...TRAIN.map((r) => ['fit', ...r]), ...HOLDOUT.map((r) => ['test', ...r])];
+  const descriptor = (predictions: string) =>
+    [
+      'version: 1',
+      'name: proofing-minutes',
+      'data:',
+      '  train: ../data/all.csv',
+      '  target: minutes',
+      '  split: { column: set, train: fit, holdout: test }',
+      predictions,
+    ].join('\n');
+
+  it('a column reads each side from its own rows', async () => {
+    const m = onlyModel(
+      await run({ 'data/all.csv': csv('set,temp_c,minutes,pred', all), 'models/p.model.yml': descriptor(COLUMN_PREDICTIONS) }),
+    );
+    expect(m.error).toBeNull();
+    expect(metric(m, 'train_rmse')).toBeCloseTo(errors(TRAIN).rmse, 12);
+    expect(metric(m, 'holdout_rmse')).toBeCloseTo(errors(HOLDOUT).rmse, 12);
+  });
+
+  it('one keyed side file may hold the predictions of both sides', async () => {
+    const keyedAll = all.map((r, i) => [`k${i}`, r[0], r[1], r[2]]);
+    const side = all.map((r, i) => [`k${i}`, r[3]]).reverse();
+    const m = onlyModel(
+      await run({
+        'data/all.csv': csv('id,set,temp_c,minutes', keyedAll),
+        'data/preds.csv': csv('id,p', side),
+        'models/p.model.yml': descriptor(
+          'predictions:\n  train: { file: ../data/preds.csv, key: id, column: p }\n  holdout: { file: ../data/preds.csv, key: id, column: p }',
+        ),
+      }),
+    );
+    expect(m.error).toBeNull();
+    expect(metric(m, 'train_rmse')).toBeCloseTo(errors(TRAIN).rmse, 12);
+    expect(metric(m, 'holdout_rmse')).toBeCloseTo(errors(HOLDOUT).rmse, 12);
+  });
+});
+
 describe('a classifier trained elsewhere', () => {
   /** Labels and probabilities, invented: the probabilities rank the labels well. */
   const rows = (n: number, shift: number): [number, number, number][] =>
