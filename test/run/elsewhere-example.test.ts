@@ -40,6 +40,9 @@ describe('examples/elsewhere', () => {
     expect(late.metrics?.task).toBe('classification');
     expect(late.checks.find((c) => c.id === 'calibration-slope')?.status).toBe('pass');
     expect(late.checks.find((c) => c.id === 'events-per-parameter')?.status).toBe('pass');
+    // The worker pool gives the same outcomes.
+    const pooled = cli.run(['check', '--root', dir, '--format', 'json', '--jobs', '2'], dir);
+    expect(JSON.parse(pooled.stdout).models).toEqual(result.models);
   });
 
   it('the text report marks both models and states the kind of the one that fails', () => {
