@@ -244,7 +244,14 @@ async function byKey(
   const lines = new Int32Array(data.rows);
   const used = new Map<string, number>();
   for (let i = 0; i < data.rows; i++) {
-    const k = dataKeyOf.get(data.lines[i]) as string;
+    const k = dataKeyOf.get(data.lines[i]);
+    if (k === undefined) {
+      throw new InputError(
+        PREDICTIONS_ERROR.key,
+        `line ${data.lines[i]} of ${clip(data.file)} has no key in column \`${clip(keyColumn)}\` as its text is read; expected one record per line (no line breaks inside quoted cells)`,
+        { file: data.file, line: data.lines[i], key: keyColumn },
+      );
+    }
     const seen = used.get(k);
     if (seen !== undefined) throw duplicateKey(data.file, keyColumn, k, data.lines[seen], data.lines[i]);
     used.set(k, i);
