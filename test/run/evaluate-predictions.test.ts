@@ -3,6 +3,7 @@
 // figure is recomputed here from the rows the test writes, independently of fitgate's code.
 import { describe, expect, it } from 'vitest';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
+import { collectAnnotations } from '../../src/report/annotations.js';
 import { formatHtml } from '../../src/report/html.js';
 import { formatJunit } from '../../src/report/junit.js';
 import { formatMarkdown } from '../../src/report/markdown.js';
@@ -144,7 +145,9 @@ describe('a regression model trained elsewhere (predictions in a column of the d
     expect(formatHtml(result)).toContain('data-kind="predictions"');
     expect(formatJunit(result)).toContain('<property name="kind" value="predictions"/>');
     expect(JSON.parse(JSON.stringify(result)).models[0].kind).toBe('predictions');
-    if (m.verdict !== 'pass') expect(formatSarif(result)).toContain('"kind": "predictions"');
+    expect(formatSarif(result)).toContain('"kind": "predictions"');
+    expect(m.verdict).toBe('fail');
+    expect(collectAnnotations(result).map((a) => a.title)).toContain('fitgate generalisation-gap (proofing-minutes (predictions))');
   });
 });
 
@@ -176,7 +179,7 @@ describe('parameters and inputs', () => {
 });
 
 describe('a side file of predictions', () => {
-  const ids = (rows: unknown[][], prefix: string) => rows.map((r, i) => [`${prefix}${i + 1}`, ...r]);
+  const ids = (rows: (string | number)[][], prefix: string): (string | number)[][] => rows.map((r, i) => [`${prefix}${i + 1}`, ...r]);
   const keyed = {
     'data/train.csv': csv(
       'id,temp_c,minutes',
