@@ -404,7 +404,31 @@ describe('a classifier trained elsewhere', () => {
     expect(metric(m, 'holdout_auc')).toBeCloseTo(ho.auc, 12);
     expect(fromJsonNumber(check(m, 'generalisation-gap').value as JsonNumber)).toBeCloseTo(ho.logLoss / tr.logLoss, 12);
     expect(fromJsonNumber(check(m, 'events-per-parameter').value as JsonNumber)).toBeCloseTo(Math.min(tr.positives, tr.negatives) / 3, 12);
-    expect(check(m, 'calibration-slope').value).not.toBeNull();
+    // Logistic recalibration logit P(y = 1) = a + b logit(p) on the hold-out rows (Cox 1958), by
+    // plain Newton steps here: b is the calibration slope.
+    const e = holdout.map(([, , p]) => Math.log(p / (1 - p)));
+    let a = 0;
+    let b = 1;
+    for (let step = 0; step < 50; step++) {
+      let g0 = 0;
+      let g1 = 0;
+      let h00 = 0;
+      let h01 = 0;
+      let h11 = 0;
+      holdout.forEach(([, y], i) => {
+        const q = 1 / (1 + Math.exp(-(a + b * e[i])));
+        g0 += y - q;
+        g1 += (y - q) * e[i];
+        h00 += q * (1 - q);
+        h01 += q * (1 - q) * e[i];
+        h11 += q * (1 - q) * e[i] * e[i];
+      });
+      const det = h00 * h11 - h01 * h01;
+      a += (h11 * g0 - h01 * g1) / det;
+      b += (h00 * g1 - h01 * g0) / det;
+    }
+    expect(fromJsonNumber(check(m, 'calibration-slope').value as JsonNumber)).toBeCloseTo(b, 6);
+    expect(metric(m, 'calibration_intercept')).toBeCloseTo(a, 6);
     expect(check(m, 'separation').code).toBe('separation/needs-refit');
     expect(check(m, 'holdout-rmse').code).toBe('holdout-rmse/not-for-classification');
     expect(formatText({ ...(await run(files())) }, { verbose: true })).toContain('classifier: log-loss');
