@@ -6,6 +6,7 @@ import type { Check } from './types.js';
 import { classifierBaseChange } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
 import { fromJsonNumber } from '../result/result.js';
+import { predictionsBaseChange } from './predictions/measures.js';
 
 /** Formats a fraction as a signed percentage, e.g. `+12.5%`. */
 function percent(x: number): string {
@@ -28,6 +29,7 @@ const check: Check = {
     'Find what made the hold-out error grow since the base commit (added terms, a smaller ridge penalty, changed rows) and undo it, or raise `base_change` when the change is intended.',
   line: (d) => d.termsLine,
   measureClassifier: classifierBaseChange,
+  measurePredictions: predictionsBaseChange,
   measure({ metrics, baseline }) {
     if (!baseline) return { value: null, reason: 'no-base', message: 'no model of this name to compare with on the base commit' };
     const base = baseline.metrics ? fromJsonNumber(baseline.metrics.holdout_rmse) : Number.NaN;

@@ -4,6 +4,7 @@
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import { jsonMetrics } from '../core/json.js';
+import { predictionsCalibration } from './predictions/measures.js';
 
 const check: Check = {
   id: 'calibration-slope',
@@ -21,6 +22,7 @@ const check: Check = {
   advice: 'Add a ridge penalty (`fit.ridge`) or use fewer terms so that the probabilities stop being over-confident on new rows.',
   line: (d) => d.fit.line,
   tasks: ['classification'],
+  measurePredictions: predictionsCalibration,
   measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
   measureClassifier({ calibration, holdout }) {
     const figures = jsonMetrics({ calibration_slope: calibration.slope, calibration_intercept: calibration.intercept });

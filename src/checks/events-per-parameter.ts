@@ -3,6 +3,7 @@
  */
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
+import { predictionsEventsPerParameter } from './predictions/measures.js';
 
 const check: Check = {
   id: 'events-per-parameter',
@@ -20,6 +21,7 @@ const check: Check = {
   advice: 'Use fewer terms or a lower degree, or collect more rows of the rarer class.',
   line: (d) => d.termsLine,
   tasks: ['classification'],
+  measurePredictions: predictionsEventsPerParameter,
   measure: () => ({ value: null, reason: 'not-for-regression', message: 'applies to classifiers only' }),
   measureClassifier({ train, design }) {
     const events = Math.min(train.positives, train.negatives);

@@ -4,6 +4,7 @@
 import type { Check } from './types.js';
 import { classifierGap } from './classifier/measures.js';
 import { formatNumber } from '../core/format.js';
+import { predictionsGap } from './predictions/measures.js';
 
 const check: Check = {
   id: 'generalisation-gap',
@@ -22,6 +23,7 @@ const check: Check = {
     'Use fewer or wider basis functions, a lower degree, or a larger ridge penalty, so that the training error stops falling below the hold-out error.',
   line: (d) => d.fit.line,
   measureClassifier: classifierGap,
+  measurePredictions: predictionsGap,
   measure({ metrics }) {
     return {
       value: metrics.gapRatio,

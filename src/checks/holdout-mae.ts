@@ -3,6 +3,7 @@
  */
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
+import { predictionsHoldout } from './predictions/measures.js';
 
 const check: Check = {
   id: 'holdout-mae',
@@ -17,6 +18,7 @@ const check: Check = {
   the RMSE. Metric \`holdout_mae\`.`,
   advice: 'The typical hold-out error is above what the model may have: improve the model (inputs, terms) or agree on a looser limit.',
   line: (d) => d.fit.line,
+  measurePredictions: predictionsHoldout('mae'),
   measure({ metrics }) {
     return { value: metrics.holdoutMae, message: `hold-out MAE is ${formatNumber(metrics.holdoutMae)}` };
   },

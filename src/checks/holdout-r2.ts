@@ -3,6 +3,7 @@
  */
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
+import { predictionsHoldout } from './predictions/measures.js';
 
 const check: Check = {
   id: 'holdout-r2',
@@ -21,6 +22,7 @@ const check: Check = {
   advice:
     'The model explains too little of the hold-out variation: add the inputs or terms it is missing, or lower the floor if the data cannot support it.',
   line: (d) => d.fit.line,
+  measurePredictions: predictionsHoldout('r2'),
   measure({ metrics }) {
     if (Number.isNaN(metrics.holdoutR2)) {
       return { value: null, reason: 'not-applicable', message: 'the hold-out target is constant, so R^2 is not defined' };

@@ -3,6 +3,7 @@
  */
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
+import { predictionsHoldout } from './predictions/measures.js';
 
 const check: Check = {
   id: 'holdout-rmse',
@@ -17,6 +18,7 @@ const check: Check = {
   whether the model is accurate enough for its use, not whether it overfits. Metric \`holdout_rmse\`.`,
   advice: 'The hold-out error is above what the model may have: improve the model (inputs, terms) or agree on a looser limit.',
   line: (d) => d.fit.line,
+  measurePredictions: predictionsHoldout('rmse'),
   measure({ metrics }) {
     return { value: metrics.holdoutRmse, message: `hold-out RMSE is ${formatNumber(metrics.holdoutRmse)}` };
   },

@@ -6,6 +6,7 @@
  */
 import type { Descriptor, Limit, Task } from '../config/types.js';
 import type { ClassifierContext } from './classifier/context.js';
+import type { PredictionsContext } from './predictions/context.js';
 import { jsonNumber, type CheckResult } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import baseChange from './base-change.js';
@@ -31,6 +32,7 @@ import { appliesTo, judge, type Check, type CheckContext, type Measurement } fro
 
 export type { Check, CheckContext, CoreMetrics, Measurement } from './types.js';
 export type { ClassifierContext } from './classifier/context.js';
+export type { PredictionsContext } from './predictions/context.js';
 
 /** Every check, in report order. Ids are unique (checked on load). */
 export const CHECKS: readonly Check[] = validate([
@@ -124,6 +126,33 @@ export function runClassifierCheck(check: Check, context: ClassifierContext): { 
     }));
   }
   return judgeCheck(check, context.descriptor, () => measure.call(check, context));
+}
+
+/**
+ * Runs one check on a model trained elsewhere (`predictions`): its `measurePredictions`; a check
+ * without one needs a refit or coefficients and is skipped with `<id>/needs-refit`; a check not
+ * for the model's task is skipped as for models of terms.
+ */
+export function runPredictionsCheck(check: Check, context: PredictionsContext): { outcome: CheckResult; figures: Measurement['metrics'] } {
+  const { descriptor } = context;
+  const measure = check.measurePredictions;
+  if (!appliesTo(check, descriptor.task)) {
+    return judgeCheck(check, descriptor, () => ({
+      value: null,
+      reason: descriptor.task === 'classification' ? 'not-for-classification' : 'not-for-regression',
+      message: descriptor.task === 'classification' ? 'applies to regression models only' : 'applies to classifiers only',
+    }));
+  }
+  if (measure === undefined) {
+    return judgeCheck(check, descriptor, () => ({
+      value: null,
+      reason: 'needs-refit',
+      message:
+        "skipped: this check needs a refit or the model's coefficients, and the model was trained elsewhere (`predictions`: fitgate has its predictions only)",
+      line: descriptor.predictions?.line,
+    }));
+  }
+  return judgeCheck(check, descriptor, () => measure.call(check, context));
 }
 
 /** The checks that apply to a task, in report order (a regression model's report lists only these). */

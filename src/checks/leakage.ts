@@ -5,6 +5,7 @@ import { clip } from '../core/errors.js';
 import type { Check } from './types.js';
 import { linesText, partLines } from '../data/data-parts.js';
 import { classifierLeakage } from './classifier/measures.js';
+import { predictionsLeakage } from './predictions/measures.js';
 
 const check: Check = {
   id: 'leakage',
@@ -32,6 +33,7 @@ const check: Check = {
   advice: 'Remove the repeated rows from the hold-out file (or from the training file) so that the hold-out rows are new to the fit.',
   line: (d) => d.data.lines.holdout,
   measureClassifier: classifierLeakage,
+  measurePredictions: predictionsLeakage,
   measure(context) {
     const { holdout, train, design } = context;
     if (design.inputs.length === 0) {

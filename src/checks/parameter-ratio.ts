@@ -5,6 +5,7 @@ import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import type { Limit } from '../config/types.js';
 import { roundUp2 } from '../config/init-files.js';
+import { predictionsParameterRatio } from './predictions/measures.js';
 
 const LIMIT_KEY = 'params_per_sample';
 const ADVICE = 'Remove terms, lower the degree or the number of radial centres, add a ridge penalty, or add training rows.';
@@ -37,6 +38,7 @@ const check: Check = {
   df = trace of the hat matrix = sum_j d_j^2 / (d_j^2 + lambda) (ESL eq. 3.50).`,
   advice: ADVICE,
   line: (d) => (d.fit.parameterCount === 'effective' ? d.fit.ridgeLine : d.termsLine),
+  measurePredictions: predictionsParameterRatio,
   measure({ metrics, design, train, fit, descriptor }) {
     if (descriptor.fit.parameterCount === 'effective') {
       const df = fit.degreesOfFreedom;

@@ -7,6 +7,7 @@ import { formatNumber } from '../core/format.js';
 import { jsonNumber } from '../result/result.js';
 import { jsonRecord } from '../core/json.js';
 import type { Swing, SwingPoint } from '../diagnostics/swing.js';
+import { predictionsSwing } from './predictions/measures.js';
 
 /** Describes a point's inputs for a message, e.g. `depth_m = 5.1`. */
 export function describePoint(point: SwingPoint | null): string {
@@ -74,6 +75,7 @@ const check: Check = {
   advice:
     'Lower the degree, widen or thin the radial centres, or add a ridge penalty so that the curve stops swinging between the samples.',
   line: (d) => d.termsLine,
+  measurePredictions: predictionsSwing,
   measure(context) {
     const swing = context.analyses.swing();
     if (Number.isNaN(swing.inside)) {

@@ -5,6 +5,7 @@
  */
 import type { Descriptor, Limit, LimitDirection, LimitSpec, Task } from '../config/types.js';
 import type { ClassifierContext } from './classifier/context.js';
+import type { PredictionsContext } from './predictions/context.js';
 import type { Design } from '../design/design-matrix.js';
 import type { FitResult } from '../fit/index.js';
 import type { ModelData } from '../data/model-data.js';
@@ -106,6 +107,12 @@ export interface Check {
   tasks?: readonly Task[];
   /** Measures the figure of a binary classifier (task `classification`). Must not throw. */
   measureClassifier?(context: ClassifierContext): Measurement;
+  /**
+   * Measures the figure of a model trained elsewhere (`predictions`) from its predictions alone,
+   * either task. Absent: the check needs a refit or coefficients and such a model's report lists
+   * it as skipped (`<id>/needs-refit`). Must not throw.
+   */
+  measurePredictions?(context: PredictionsContext): Measurement;
 }
 
 /** Whether a check applies to a task (see {@link Check.tasks}). */

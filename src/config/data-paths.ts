@@ -85,7 +85,7 @@ export async function resolveDataPaths(
   const folder = descriptorPath.includes('/') ? descriptorPath.slice(0, descriptorPath.lastIndexOf('/')) : '';
   if (typeof written === 'string') {
     const key = ['data', which];
-    if (!GLOB_CHARACTERS.test(written)) return { single: await oneFile(repo, doc, descriptorPath, key, written) };
+    if (!GLOB_CHARACTERS.test(written)) return { single: await resolveDataFile(repo, doc, descriptorPath, key, written) };
     const direct = await namesFile(repo, doc, descriptorPath, key, written);
     if (direct !== null) return { single: direct };
     return { parts: finish(doc, descriptorPath, key, await globParts(repo, doc, descriptorPath, folder, key, written), null) };
@@ -100,7 +100,7 @@ export async function resolveDataPaths(
         ? [direct]
         : GLOB_CHARACTERS.test(item)
           ? await globParts(repo, doc, descriptorPath, folder, key, item)
-          : [await oneFile(repo, doc, descriptorPath, key, item)];
+          : [await resolveDataFile(repo, doc, descriptorPath, key, item)];
     for (const path of paths) {
       found.push(path);
       itemOf.push(index);
@@ -147,8 +147,12 @@ function finish(doc: YamlDocument, file: string, key: (string | number)[], paths
   return [...paths].sort(compareCodePoints);
 }
 
-/** One data file as written: resolved inside the repository and checked to be a regular file. */
-async function oneFile(repo: RepoReader, doc: YamlDocument, file: string, key: (string | number)[], written: string): Promise<string> {
+/**
+ * One data (or predictions side) file as written: resolved inside the repository (relative to the
+ * descriptor's folder) and checked to be a regular file.
+ * @throws InputError `path-outside`, `data-missing`, `not-a-file` at the key's value
+ */
+export async function resolveDataFile(repo: RepoReader, doc: YamlDocument, file: string, key: (string | number)[], written: string): Promise<string> {
   const at = doc.valuePositionOf(key);
   const where = { line: at?.line ?? 1, column: at?.column ?? 1, key: keyText(key) };
   const resolved = await repo.resolve(file, written, where);
@@ -259,7 +263,7 @@ async function globParts(
   for (const match of found.paths) {
     // Relative to the descriptor's folder again, so that it is resolved (links included) as any data path.
     const relative = folder === '' ? match : match.slice(folder.length + 1);
-    out.push(await oneFile(repo, doc, file, key, relative));
+    out.push(await resolveDataFile(repo, doc, file, key, relative));
   }
   return out;
 }

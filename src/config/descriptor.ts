@@ -5,9 +5,9 @@
 
 import { NOT_A_FILE } from '../repo/repo-path.js';
 import type { RepoReader } from '../repo/types.js';
-import { resolveDataPaths } from './data-paths.js';
+import { resolveDataFile, resolveDataPaths } from './data-paths.js';
 import { mergeLimits } from './limits.js';
-import { errorAt, schemaError, showValue } from './schema-errors.js';
+import { errorAt, SCHEMA_ERROR_CODE, schemaError, showValue } from './schema-errors.js';
 import { validateDescriptorValue } from './schemas.js';
 import { readLimits } from './settings-file.js';
 import type {
@@ -22,6 +22,8 @@ import type {
   Weighting,
   InputTransform,
   MultiRbfCenters,
+  PredictionSource,
+  PredictionsSpec,
 } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
 
@@ -39,6 +41,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   weighting: 'weight-and-sigma',
   spline: 'spline-settings',
   polynomial: 'polynomial-inputs',
+  predictions: 'predictions-form',
 });
 
 /**
@@ -69,6 +72,11 @@ export async function loadDescriptor(repo: RepoReader, path: string, settings: S
       descriptor.data[which === 'train' ? 'trainParts' : 'holdoutParts'] = found.parts;
     }
   }
+  // Side files of a model trained elsewhere: the same rules as data files.
+  for (const which of ['train', 'holdout'] as const) {
+    const source = descriptor.predictions?.[which];
+    if (source?.file) source.file = await resolveDataFile(repo, doc, path, ['predictions', which, 'file'], source.file);
+  }
   return descriptor;
 }
 
@@ -87,8 +95,9 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
   const line = (path: (string | number)[]): number => doc.positionOf(path)?.line ?? 1;
   checkDataForm(doc, file, raw.data);
 
-  const terms = raw.terms.map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
-  const termsLine = line(['terms']);
+  const predictions = readPredictions(doc, file, raw, line);
+  const terms = (raw.terms ?? []).map((term, index) => readTerm(doc, file, term, index, line(['terms', index])));
+  const termsLine = predictions !== null ? predictions.line : line(['terms']);
   const fitLine = raw.fit ? line(['fit']) : termsLine;
   const limits = readLimits(doc, file, raw.limits, ['limits']);
   if (raw.fit?.refit === false && !raw.coefficients) {
@@ -135,18 +144,115 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       line: fitLine,
       ridgeLine: raw.fit?.ridge !== undefined ? line(['fit', 'ridge']) : fitLine,
       threshold: raw.fit?.threshold ?? 0.5,
+      ...(raw.fit?.refit_compare !== undefined ? { refitCompare: raw.fit.refit_compare } : {}),
     },
     coefficients: raw.coefficients ? [...raw.coefficients] : null,
     coefficientsLine: raw.coefficients ? line(['coefficients']) : null,
     limits: mergeLimits(settings, limits),
     nameLine: line(['name']),
     termsLine,
+    // Present only for models trained elsewhere, so descriptors of terms keep their shape.
+    ...(predictions !== null
+      ? { predictions, parameters: raw.parameters ?? null, parametersLine: raw.parameters !== undefined ? line(['parameters']) : null }
+      : {}),
   };
 }
 
 /** A data path as written, or the first of a list. */
 function firstWritten(written: string | string[]): string {
   return typeof written === 'string' ? written : written[0];
+}
+
+/**
+ * `predictions` (a model trained elsewhere) with the rules the schema cannot say: exactly one of
+ * `terms` and `predictions`; no `coefficients`, `data.weight`/`data.sigma` or `fit.refit` beside
+ * `predictions`; `key` only with `file`; `parameters` only with `predictions`; `fit.refit_compare`
+ * only with `fit.refit: false`.
+ * @returns the spec, or null for a model of terms
+ * @throws InputError `schema` (neither `terms` nor `predictions`), `predictions-form`
+ */
+function readPredictions(
+  doc: YamlDocument,
+  file: string,
+  raw: RawDescriptor,
+  line: (path: (string | number)[]) => number,
+): PredictionsSpec | null {
+  if (raw.fit?.refit_compare === true && raw.fit.refit !== false) {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit_compare'],
+      '`refit_compare` reports a refit beside the shipped coefficients scored as shipped; expected `refit: false` with it (a model that is refitted already reports its shipped coefficients under `shipped`)',
+    );
+  }
+  if (raw.fit?.refit_compare === true && raw.task === 'classification') {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit_compare'],
+      '`refit_compare` reports the refit of a regression model scored as shipped; expected no `refit_compare` on a classifier',
+    );
+  }
+  const p = raw.predictions;
+  if (p === undefined) {
+    if (raw.terms === undefined) {
+      throw errorAt(
+        doc,
+        file,
+        SCHEMA_ERROR_CODE,
+        ['terms'],
+        'missing key `terms`; required keys: version, name, data, terms (or `predictions` instead of `terms` for a model trained elsewhere)',
+        'parent',
+      );
+    }
+    if (raw.parameters !== undefined) {
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.predictions,
+        ['parameters'],
+        '`parameters` states the parameter count of a model trained elsewhere (`predictions`); a model of terms counts its design columns, so expected no `parameters` here',
+        'key',
+      );
+    }
+    return null;
+  }
+  const clash = (
+    [
+      [raw.terms !== undefined, ['terms'], '`terms`'],
+      [raw.coefficients !== undefined, ['coefficients'], '`coefficients`'],
+      [raw.fit?.refit !== undefined, ['fit', 'refit'], '`fit.refit`'],
+      [raw.data.weight !== undefined, ['data', 'weight'], '`data.weight`'],
+      [raw.data.sigma !== undefined, ['data', 'sigma'], '`data.sigma`'],
+    ] as const
+  ).find(([present]) => present);
+  if (clash) {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      [...clash[1]],
+      `${clash[2]} does not go with \`predictions\` (a model trained elsewhere: fitgate scores its predictions and fits nothing); expected one of the two`,
+      'key',
+    );
+  }
+  const source = (which: 'train' | 'holdout'): PredictionSource => {
+    const s = (p as NonNullable<RawDescriptor['predictions']>)[which];
+    if (s.key !== undefined && s.file === undefined) {
+      throw errorAt(
+        doc,
+        file,
+        DESCRIPTOR_ERROR.predictions,
+        ['predictions', which, 'key'],
+        '`key` matches the rows of a side file with the data rows; expected `file` beside it (or no `key` for a column of the data file)',
+        'key',
+      );
+    }
+    return { column: s.column, file: s.file ?? null, key: s.key ?? null, line: line(['predictions', which]) };
+  };
+  return { train: source('train'), holdout: source('holdout'), inputs: [...(p.inputs ?? [])], line: line(['predictions']) };
 }
 
 /** `data.weight` or `data.sigma` (the schema lets at most one through), or null. */
@@ -418,7 +524,13 @@ interface RawDescriptor {
     missing?: DataFormat['missing'];
     split?: { column: string; train: string; holdout: string };
   };
-  terms: RawTerm[];
+  terms?: RawTerm[];
+  predictions?: {
+    train: RawPredictionSource;
+    holdout: RawPredictionSource;
+    inputs?: string[];
+  };
+  parameters?: number;
   fit?: {
     intercept?: boolean;
     refit?: boolean;
@@ -428,10 +540,13 @@ interface RawDescriptor {
     seed?: number;
     parameter_count?: ParameterCount;
     threshold?: number;
+    refit_compare?: boolean;
   };
   coefficients?: number[];
   limits?: Record<string, LimitSpec>;
 }
+
+type RawPredictionSource = { column: string; file?: string; key?: string };
 
 type RawCenters = number[] | 'at-samples' | { from: number; to: number; count: number } | { from: number; to: number; step: number };
 

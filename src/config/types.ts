@@ -214,6 +214,34 @@ export interface FitSpec {
   ridgeLine: number;
   /** Classification: a row is predicted positive when its probability is at least this. Default 0.5 (absent: 0.5). */
   threshold?: number;
+  /** With `refit: false`: also report the refit's figures beside the shipped model's (`fit.refit_compare`). Default false (absent: false). */
+  refitCompare?: boolean;
+}
+
+/**
+ * Where one file's predictions of a model trained elsewhere are (`predictions.train` or
+ * `predictions.holdout`): a column of the data file (`file` null), or a column of a side file
+ * whose rows go with the data rows in order (`key` null) or by a key column both files hold.
+ */
+export interface PredictionSource {
+  /** Column holding the predictions. */
+  column: string;
+  /** Side file, repository-relative once loaded (checked to be inside the repository); null: the data file itself. */
+  file: string | null;
+  /** Row key column of both files; null: rows go in file order. */
+  key: string | null;
+  /** Line of `predictions.train` / `predictions.holdout`. */
+  line: number;
+}
+
+/** `predictions`: a model trained elsewhere, gated from its predictions only. */
+export interface PredictionsSpec {
+  train: PredictionSource;
+  holdout: PredictionSource;
+  /** The model's input columns (for `leakage`); empty when not given. */
+  inputs: string[];
+  /** Line of `predictions`. */
+  line: number;
 }
 
 /** What a model predicts: a number (`regression`, the default) or one of two classes (`classification`, binary). */
@@ -294,6 +322,16 @@ export interface Descriptor {
   nameLine: number;
   /** Line of `terms`. */
   termsLine: number;
+  /**
+   * A model trained elsewhere (`predictions`): fitgate scores its predictions and does not refit
+   * it; `terms` is then empty and `termsLine` the line of `predictions`. Absent or null: a model
+   * of terms.
+   */
+  predictions?: PredictionsSpec | null;
+  /** `parameters`: the stated parameter count of a model trained elsewhere; absent or null when not stated. */
+  parameters?: number | null;
+  /** Line of `parameters`, or null. */
+  parametersLine?: number | null;
 }
 
 /** Resource caps that guard memory and time; settings can raise them. */

@@ -64,6 +64,10 @@ export async function runRefit(command: RefitCommand): Promise<CommandOutcome> {
       lines.push(`error: ${where}: ${escapeTerminal(at + m.error.message)}`);
       continue;
     }
+    if (m.kind === 'predictions') {
+      lines.push(`kept: ${where}: trained elsewhere (\`predictions\`), nothing to refit`);
+      continue;
+    }
     const refit = m.coefficients.map((c) => fromJsonNumber(c));
     if (!refit.every(Number.isFinite)) {
       errors += 1;

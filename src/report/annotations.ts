@@ -8,6 +8,7 @@
 import path from 'node:path';
 import type { ModelResult, Result } from '../result/result.js';
 import { defuseLegacyCommands } from './runner-commands.js';
+import { kindMark } from './model-kind.js';
 import { clip, type InputError } from '../core/errors.js';
 
 /** Severity of an annotation. */
@@ -93,7 +94,7 @@ function modelFindings(m: ModelResult, prefix: string): Annotation[] {
       level: c.status === 'fail' ? 'error' : 'warning',
       file: workspacePath(prefix, m.descriptor),
       line: c.line,
-      title: `fitgate ${c.id} (${m.name})`,
+      title: `fitgate ${c.id} (${m.name}${kindMark(m)})`,
       message: c.advice ? `${c.message}. ${c.advice}` : c.message,
     });
   }

@@ -6,6 +6,8 @@
  * (`ModelResult.charts`), so nothing here computes a figure.
  */
 import { findCheck } from '../checks/index.js';
+import { kindLine, kindMark, parametersText } from './model-kind.js';
+import { refitCompareLine } from './refit-compare.js';
 import { formatNumber } from '../core/format.js';
 import type { ChartData } from '../result/chart-types.js';
 import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
@@ -95,8 +97,8 @@ function overviewRow(m: ModelResult, i: number): string {
   const x = m.metrics;
   const over = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn').map((c) => `<code>${escapeHtml(c.id)}</code>`);
   return (
-    `<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${escapeHtml(m.name)}</a></td>` +
-    `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${m.parameters}</td>` +
+    `<tr><td>${badge(m.verdict)}</td><td><a href="#model-${i + 1}">${escapeHtml(m.name)}</a>${escapeHtml(kindMark(m))}</td>` +
+    `<td class="num">${m.rows.train}</td><td class="num">${m.rows.holdout}</td><td class="num">${escapeHtml(parametersText(m))}</td>` +
     `<td class="num">${num(x?.holdout_rmse)}</td><td class="num">${num(x?.gap_ratio)}</td><td class="num">${num(x?.max_std_coefficient)}</td>` +
     `<td>${m.error ? 'could not be checked' : over.length ? over.join(', ') : '–'}</td></tr>`
   );
@@ -190,9 +192,13 @@ function modelSection(m: ModelResult, index: number): string {
   }
   const x = m.metrics;
   parts.push(
-    `<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${m.parameters}</b></span>` +
+    `<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${escapeHtml(parametersText(m))}</b></span>` +
       `<span>training RMSE <b>${num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${num(x?.gap_ratio)}</b></span></p>`,
   );
+  const kind = kindLine(m);
+  if (kind !== null) parts.push(`<p class="note" data-kind="predictions">${escapeHtml(kind)}</p>`);
+  const refit = refitCompareLine(m);
+  if (refit !== null) parts.push(`<p class="note" data-refit-compare>${escapeHtml(refit)}</p>`);
   parts.push('<h3>Checks</h3>', checksTable(m));
   if (m.charts) {
     const list = charts(m.charts, id);

@@ -66,6 +66,8 @@ function suite(m: ModelResult, failOn: 'fail' | 'warn'): { xml: string; counts: 
     }
   }
   const head = `  <testsuite${attrs({ name: m.name, tests: counts.tests, failures: counts.failures, errors: counts.errors, skipped: counts.skipped, file: m.descriptor })}`;
+  // A model trained elsewhere says so in the suite's properties (JUnit's place for facts of a suite).
+  if (m.kind) cases.unshift(`    <properties>\n      <property${attrs({ name: 'kind', value: m.kind })}/>\n    </properties>`);
   return { xml: cases.length ? `${head}>\n${cases.join('\n')}\n  </testsuite>` : `${head}/>`, counts };
 }
 

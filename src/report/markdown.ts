@@ -6,6 +6,8 @@
  * readable length; the whole report stays under `maxBytes`.
  */
 import { calibrationChart, classifierLine, isClassifier } from './classifier-figures.js';
+import { kindLine, kindMark } from './model-kind.js';
+import { refitCompareLine } from './refit-compare.js';
 import { mermaidChart } from './mermaid.js';
 import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
@@ -82,7 +84,7 @@ function overviewHead(withBase: boolean): string[] {
 /** One row of the model overview. */
 export function overviewRow(m: ModelResult, withBase: boolean): string {
   const x = m.metrics;
-  return `| ${MARK[m.verdict]} | ${text(m.name)} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
+  return `| ${MARK[m.verdict]} | ${text(m.name + kindMark(m))} | ${cell(x?.holdout_rmse)} | ${cell(x?.gap_ratio)} | ${cell(x?.params_per_sample)} | ${cell(x?.max_std_coefficient)} |${withBase ? ` ${baseCell(m)} |` : ''}`;
 }
 
 /** The block of one model that did not pass. */
@@ -94,6 +96,10 @@ export function modelDetail(m: ModelResult): string[] {
     return lines;
   }
   const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
+  const kind = kindLine(m);
+  if (kind !== null) lines.push(text(kind), '');
+  const refit = refitCompareLine(m);
+  if (refit !== null) lines.push(text(refit), '');
   if (isClassifier(m)) lines.push(text(classifierLine(m)), '');
   lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   for (const c of shown) lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);

@@ -115,6 +115,7 @@ export function sarifLog(result: Result, options: SarifOptions = {}): Record<str
         partialFingerprints: { 'fitgateFinding/v1': fingerprint(m.name, c.id) },
         properties: {
           model: m.name,
+          ...(m.kind ? { kind: m.kind } : {}),
           code: c.code,
           value: c.value === null ? null : formatNumber(fromJsonNumber(c.value)),
           limit: c.limit,

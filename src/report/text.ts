@@ -3,6 +3,8 @@
  * pass, with each check's figure against its limit and the descriptor line to change.
  */
 import { classifierLine, isClassifier } from './classifier-figures.js';
+import { kindLine, kindMark } from './model-kind.js';
+import { refitCompareLine } from './refit-compare.js';
 import { fromJsonNumber, type CheckResult, type ModelResult, type Result } from '../result/result.js';
 import { formatNumber } from '../core/format.js';
 import { maxOf } from '../core/extremes.js';
@@ -89,7 +91,7 @@ export function formatText(result: Result, options: TextOptions = {}): string {
   const header = ['status', 'model', 'hold-out RMSE', 'gap ratio', 'params/row', 'max std coef', ...(withBase ? ['vs base'] : [])];
   const rows = result.models.map((m) => [
     m.verdict,
-    escapeTerminal(m.name),
+    escapeTerminal(m.name) + kindMark(m),
     metric(m, 'holdout_rmse'),
     metric(m, 'gap_ratio'),
     metric(m, 'params_per_sample'),
@@ -115,6 +117,10 @@ export function formatText(result: Result, options: TextOptions = {}): string {
       out.push(`  ${escapeTerminal(errorWhere(m) + m.error.message)}`);
       continue;
     }
+    const kind = kindLine(m);
+    if (kind !== null) out.push(`  ${escapeTerminal(kind)}`);
+    const refit = refitCompareLine(m);
+    if (refit !== null) out.push(`  ${escapeTerminal(refit)}`);
     if (isClassifier(m)) out.push(`  ${escapeTerminal(classifierLine(m))}`);
     for (const c of m.checks) if (verbose || c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
   }

@@ -114,6 +114,12 @@ export interface ModelResult {
   name: string;
   /** Descriptor path relative to the repository root. */
   descriptor: string;
+  /**
+   * `predictions`: a model trained elsewhere, gated from its predictions alone (nothing refitted;
+   * `parameters` is the stated count, 0 when not stated; `columns` and `coefficients` empty).
+   * Absent: a model of terms that fitgate fits.
+   */
+  kind?: 'predictions';
   verdict: Verdict;
   rows: { train: number; holdout: number };
   /**

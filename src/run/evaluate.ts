@@ -17,6 +17,7 @@ import { buildChartData } from './chart-data.js';
 import { runChecks } from './run-checks.js';
 import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { evaluateClassifier } from './evaluate-classifier.js';
+import { evaluatePredictions } from './evaluate-predictions.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 
 export type { BaseInput } from './base-comparison.js';
@@ -49,6 +50,16 @@ function reportMetrics(model: FittedModel): ModelMetrics {
     rank: fit.rank,
     condition_number: jsonNumber(fit.conditionNumber),
     condition_number_scaled: jsonNumber(fit.conditionNumberScaled),
+    // `fit.refit_compare`: what a refit would give, beside the shipped model's figures above.
+    ...(model.refitCompare
+      ? {
+          refit_train_rmse: jsonNumber(model.refitCompare.trainRmse),
+          refit_holdout_rmse: jsonNumber(model.refitCompare.holdoutRmse),
+          refit_gap_ratio: jsonNumber(model.refitCompare.gapRatio),
+          refit_cv_rmse: jsonNumber(model.refitCompare.cvRmse),
+          refit_cv_folds: model.refitCompare.folds,
+        }
+      : {}),
   };
 }
 
@@ -83,6 +94,7 @@ export async function evaluateModel(
 async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
   let model: FittedModel;
   try {
+    if (descriptor.predictions) return await evaluatePredictions(repo, descriptor, settings, base);
     if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
     model = await fitModel(repo, descriptor, settings);
   } catch (error) {

@@ -13,6 +13,7 @@ import { range } from '../design/stats.js';
 import type { CrossValidation, FoldFactors } from '../diagnostics/cross-validation.js';
 import type { Folds } from '../diagnostics/folds.js';
 import { addErrors, emptySums, errorMeasures, gapRatio } from '../diagnostics/regression-metrics.js';
+import { refitFigures, type RefitFigures } from '../diagnostics/refit-compare.js';
 import { scoreShipped, type ShippedScore } from '../diagnostics/shipped.js';
 import { weightedErrorMeasures } from '../diagnostics/weighted-metrics.js';
 import type { FitResult } from '../fit/index.js';
@@ -58,6 +59,8 @@ export interface FittedModel {
   foldFactors: FoldFactors;
   /** The descriptor's shipped coefficients scored on the same rows; null when it ships none. */
   shipped: ShippedScore | null;
+  /** Scored as shipped with `fit.refit_compare: true`: the refit's figures (information); absent otherwise. */
+  refitCompare?: RefitFigures;
 }
 
 /**
@@ -71,8 +74,14 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   const first = partsNamed(plan.tables, () => foldPass(plan));
   const fit = refinePass(plan, first.fit);
   const scored = scoringPass(plan, fit, first.foldFactors);
-  if (descriptor.fit.refit === false)
-    return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
+  if (descriptor.fit.refit === false) {
+    const shipped = scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
+    if (descriptor.fit.refitCompare !== true) return shipped;
+    return {
+      ...shipped,
+      refitCompare: refitFigures(tables.train, tables.holdout, scored.trainPredictions, scored.holdoutPredictions, scored.crossValidation),
+    };
+  }
   const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
   return {
     descriptor,

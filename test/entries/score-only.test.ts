@@ -78,6 +78,36 @@ describe('fit.refit: false', () => {
     );
   });
 
+  it('with `refit_compare: true` reports what a refit would give beside the shipped figures', () => {
+    const { dir, result, status } = run(
+      'fit: { refit: false, refit_compare: true }\ncoefficients: [82, -0.34]\nlimits: { params_per_sample: 0.2, gap_ratio: 5 }',
+    );
+    expect(status).toBe(0);
+    const m = result.models[0];
+    // The refit is least squares of a straight line: slope and intercept in closed form, here.
+    const train = readFileSync(path.join(dir, 'data/air-train.csv'), 'utf8');
+    const holdout = readFileSync(path.join(dir, 'data/air-holdout.csv'), 'utf8');
+    const rows = train
+      .trim()
+      .split('\n')
+      .slice(1)
+      .map((l) => l.split(',').map(Number));
+    const mx = rows.reduce((s, r) => s + r[0], 0) / rows.length;
+    const my = rows.reduce((s, r) => s + r[1], 0) / rows.length;
+    const b = rows.reduce((s, r) => s + (r[0] - mx) * (r[1] - my), 0) / rows.reduce((s, r) => s + (r[0] - mx) ** 2, 0);
+    const a = my - b * mx;
+    expect(m.metrics?.refit_train_rmse).toBeCloseTo(rmse(train, a, b), 10);
+    expect(m.metrics?.refit_holdout_rmse).toBeCloseTo(rmse(holdout, a, b), 10);
+    expect(m.metrics?.train_rmse).toBeCloseTo(rmse(train, 82, -0.34), 12);
+    expect(m.metrics?.refit_cv_folds).toBe(5);
+    // The CV figure is the one the same descriptor gets when it is refitted.
+    const refitted = run('coefficients: [82, -0.34]\nlimits: { params_per_sample: 0.2, reproducibility: off }').result.models[0];
+    expect(m.metrics?.refit_cv_rmse).toBe(refitted.metrics?.cv_rmse);
+    expect(m.checks.find((c) => c.id === 'cross-validation')?.code).toBe('cross-validation/score-only');
+    const text = cli.run(['check', '--verbose', '--jobs', '1'], dir).stdout;
+    expect(text).toMatch(/a refit would give: training RMSE [0-9.]+, hold-out RMSE [0-9.]+, 5-fold CV RMSE [0-9.]+/);
+  });
+
   it('is kept as it is by fitgate refit', () => {
     const repo = greenhouse('fit: { refit: false }\ncoefficients: [82, -0.34]');
     cleanup.push(repo.remove);

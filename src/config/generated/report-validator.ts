@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,7 +54,7 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
@@ -2161,11 +2161,11 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.verdict !== undefined){
+if(data.kind !== undefined){
 const _errs6 = errors;
-if(!(validate53(data.verdict, {instancePath:instancePath+"/verdict",parentData:data,parentDataProperty:"verdict",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
-errors = vErrors.length;
+if(!(data.kind === "predictions")){
+validate61.errors = [{instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema22.properties.kind.enum},message:"must be equal to one of the allowed values"}];
+return false;
 }
 var valid0 = _errs6 === errors;
 }
@@ -2173,45 +2173,57 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.rows !== undefined){
-let data3 = data.rows;
+if(data.verdict !== undefined){
 const _errs7 = errors;
-if(errors === _errs7){
-if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
+if(!(validate53(data.verdict, {instancePath:instancePath+"/verdict",parentData:data,parentDataProperty:"verdict",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs7 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.rows !== undefined){
+let data4 = data.rows;
+const _errs8 = errors;
+if(errors === _errs8){
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 let missing1;
-if(((data3.train === undefined) && (missing1 = "train")) || ((data3.holdout === undefined) && (missing1 = "holdout"))){
+if(((data4.train === undefined) && (missing1 = "train")) || ((data4.holdout === undefined) && (missing1 = "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/rows",schemaPath:"#/properties/rows/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
-const _errs9 = errors;
-for(const key1 in data3){
+const _errs10 = errors;
+for(const key1 in data4){
 if(!((key1 === "train") || (key1 === "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/rows",schemaPath:"#/properties/rows/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
-if(_errs9 === errors){
-if(data3.train !== undefined){
-const _errs10 = errors;
-if(!(validate55(data3.train, {instancePath:instancePath+"/rows/train",parentData:data3,parentDataProperty:"train",rootData,dynamicAnchors}))){
+if(_errs10 === errors){
+if(data4.train !== undefined){
+const _errs11 = errors;
+if(!(validate55(data4.train, {instancePath:instancePath+"/rows/train",parentData:data4,parentDataProperty:"train",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid1 = _errs10 === errors;
+var valid1 = _errs11 === errors;
 }
 else {
 var valid1 = true;
 }
 if(valid1){
-if(data3.holdout !== undefined){
-const _errs11 = errors;
-if(!(validate55(data3.holdout, {instancePath:instancePath+"/rows/holdout",parentData:data3,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+if(data4.holdout !== undefined){
+const _errs12 = errors;
+if(!(validate55(data4.holdout, {instancePath:instancePath+"/rows/holdout",parentData:data4,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid1 = _errs11 === errors;
+var valid1 = _errs12 === errors;
 }
 else {
 var valid1 = true;
@@ -2225,51 +2237,51 @@ validate61.errors = [{instancePath:instancePath+"/rows",schemaPath:"#/properties
 return false;
 }
 }
-var valid0 = _errs7 === errors;
+var valid0 = _errs8 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.dropped !== undefined){
-let data6 = data.dropped;
-const _errs12 = errors;
-if(errors === _errs12){
-if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
+let data7 = data.dropped;
+const _errs13 = errors;
+if(errors === _errs13){
+if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 let missing2;
-if(((data6.train === undefined) && (missing2 = "train")) || ((data6.holdout === undefined) && (missing2 = "holdout"))){
+if(((data7.train === undefined) && (missing2 = "train")) || ((data7.holdout === undefined) && (missing2 = "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
-const _errs14 = errors;
-for(const key2 in data6){
+const _errs15 = errors;
+for(const key2 in data7){
 if(!((key2 === "train") || (key2 === "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/properties/dropped/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
-if(_errs14 === errors){
-if(data6.train !== undefined){
-const _errs15 = errors;
-if(!(validate55(data6.train, {instancePath:instancePath+"/dropped/train",parentData:data6,parentDataProperty:"train",rootData,dynamicAnchors}))){
+if(_errs15 === errors){
+if(data7.train !== undefined){
+const _errs16 = errors;
+if(!(validate55(data7.train, {instancePath:instancePath+"/dropped/train",parentData:data7,parentDataProperty:"train",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid2 = _errs15 === errors;
+var valid2 = _errs16 === errors;
 }
 else {
 var valid2 = true;
 }
 if(valid2){
-if(data6.holdout !== undefined){
-const _errs16 = errors;
-if(!(validate55(data6.holdout, {instancePath:instancePath+"/dropped/holdout",parentData:data6,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+if(data7.holdout !== undefined){
+const _errs17 = errors;
+if(!(validate55(data7.holdout, {instancePath:instancePath+"/dropped/holdout",parentData:data7,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid2 = _errs16 === errors;
+var valid2 = _errs17 === errors;
 }
 else {
 var valid2 = true;
@@ -2283,46 +2295,46 @@ validate61.errors = [{instancePath:instancePath+"/dropped",schemaPath:"#/propert
 return false;
 }
 }
-var valid0 = _errs12 === errors;
+var valid0 = _errs13 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.data !== undefined){
-let data9 = data.data;
-const _errs17 = errors;
-if(errors === _errs17){
-if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+let data10 = data.data;
+const _errs18 = errors;
+if(errors === _errs18){
+if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
 let missing3;
-if(((data9.train === undefined) && (missing3 = "train")) || ((data9.holdout === undefined) && (missing3 = "holdout"))){
+if(((data10.train === undefined) && (missing3 = "train")) || ((data10.holdout === undefined) && (missing3 = "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
-const _errs19 = errors;
-for(const key3 in data9){
+const _errs20 = errors;
+for(const key3 in data10){
 if(!((key3 === "train") || (key3 === "holdout"))){
 validate61.errors = [{instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
-if(_errs19 === errors){
-if(data9.train !== undefined){
-let data10 = data9.train;
-const _errs20 = errors;
-if(errors === _errs20){
-if(Array.isArray(data10)){
+if(_errs20 === errors){
+if(data10.train !== undefined){
+let data11 = data10.train;
+const _errs21 = errors;
+if(errors === _errs21){
+if(Array.isArray(data11)){
 var valid4 = true;
-const len0 = data10.length;
+const len0 = data11.length;
 for(let i0=0; i0<len0; i0++){
-const _errs22 = errors;
-if(typeof data10[i0] !== "string"){
+const _errs23 = errors;
+if(typeof data11[i0] !== "string"){
 validate61.errors = [{instancePath:instancePath+"/data/train/" + i0,schemaPath:"#/properties/data/properties/train/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
-var valid4 = _errs22 === errors;
+var valid4 = _errs23 === errors;
 if(!valid4){
 break;
 }
@@ -2333,26 +2345,26 @@ validate61.errors = [{instancePath:instancePath+"/data/train",schemaPath:"#/prop
 return false;
 }
 }
-var valid3 = _errs20 === errors;
+var valid3 = _errs21 === errors;
 }
 else {
 var valid3 = true;
 }
 if(valid3){
-if(data9.holdout !== undefined){
-let data12 = data9.holdout;
-const _errs24 = errors;
-if(errors === _errs24){
-if(Array.isArray(data12)){
+if(data10.holdout !== undefined){
+let data13 = data10.holdout;
+const _errs25 = errors;
+if(errors === _errs25){
+if(Array.isArray(data13)){
 var valid5 = true;
-const len1 = data12.length;
+const len1 = data13.length;
 for(let i1=0; i1<len1; i1++){
-const _errs26 = errors;
-if(typeof data12[i1] !== "string"){
+const _errs27 = errors;
+if(typeof data13[i1] !== "string"){
 validate61.errors = [{instancePath:instancePath+"/data/holdout/" + i1,schemaPath:"#/properties/data/properties/holdout/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
-var valid5 = _errs26 === errors;
+var valid5 = _errs27 === errors;
 if(!valid5){
 break;
 }
@@ -2363,7 +2375,7 @@ validate61.errors = [{instancePath:instancePath+"/data/holdout",schemaPath:"#/pr
 return false;
 }
 }
-var valid3 = _errs24 === errors;
+var valid3 = _errs25 === errors;
 }
 else {
 var valid3 = true;
@@ -2377,38 +2389,38 @@ validate61.errors = [{instancePath:instancePath+"/data",schemaPath:"#/properties
 return false;
 }
 }
-var valid0 = _errs17 === errors;
+var valid0 = _errs18 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.parameters !== undefined){
-const _errs28 = errors;
+const _errs29 = errors;
 if(!(validate55(data.parameters, {instancePath:instancePath+"/parameters",parentData:data,parentDataProperty:"parameters",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs28 === errors;
+var valid0 = _errs29 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.columns !== undefined){
-let data15 = data.columns;
-const _errs29 = errors;
-if(errors === _errs29){
-if(Array.isArray(data15)){
+let data16 = data.columns;
+const _errs30 = errors;
+if(errors === _errs30){
+if(Array.isArray(data16)){
 var valid6 = true;
-const len2 = data15.length;
+const len2 = data16.length;
 for(let i2=0; i2<len2; i2++){
-const _errs31 = errors;
-if(typeof data15[i2] !== "string"){
+const _errs32 = errors;
+if(typeof data16[i2] !== "string"){
 validate61.errors = [{instancePath:instancePath+"/columns/" + i2,schemaPath:"#/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
-var valid6 = _errs31 === errors;
+var valid6 = _errs32 === errors;
 if(!valid6){
 break;
 }
@@ -2419,19 +2431,19 @@ validate61.errors = [{instancePath:instancePath+"/columns",schemaPath:"#/propert
 return false;
 }
 }
-var valid0 = _errs29 === errors;
+var valid0 = _errs30 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.metrics !== undefined){
-let data17 = data.metrics;
-const _errs33 = errors;
+let data18 = data.metrics;
 const _errs34 = errors;
-let valid7 = false;
 const _errs35 = errors;
-if(data17 !== null){
+let valid7 = false;
+const _errs36 = errors;
+if(data18 !== null){
 const err0 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err0];
@@ -2441,27 +2453,27 @@ vErrors.push(err0);
 }
 errors++;
 }
-var _valid0 = _errs35 === errors;
+var _valid0 = _errs36 === errors;
 valid7 = valid7 || _valid0;
-const _errs37 = errors;
-if(errors === _errs37){
-if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
-const _errs39 = errors;
-for(const key4 in data17){
-if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key4))){
-let data18 = data17[key4];
+const _errs38 = errors;
+if(errors === _errs38){
+if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 const _errs40 = errors;
+for(const key4 in data18){
+if(!(func1.call(schema22.properties.metrics.anyOf[1].properties, key4))){
+let data19 = data18[key4];
 const _errs41 = errors;
-let valid9 = false;
 const _errs42 = errors;
-if(!(validate68(data18, {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data17,parentDataProperty:key4,rootData,dynamicAnchors}))){
+let valid9 = false;
+const _errs43 = errors;
+if(!(validate68(data19, {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),parentData:data18,parentDataProperty:key4,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid1 = _errs42 === errors;
+var _valid1 = _errs43 === errors;
 valid9 = valid9 || _valid1;
-const _errs43 = errors;
-if(typeof data18 !== "string"){
+const _errs44 = errors;
+if(typeof data19 !== "string"){
 const err1 = {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/1/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err1];
@@ -2471,10 +2483,10 @@ vErrors.push(err1);
 }
 errors++;
 }
-var _valid1 = _errs43 === errors;
+var _valid1 = _errs44 === errors;
 valid9 = valid9 || _valid1;
-const _errs45 = errors;
-if(data18 !== null){
+const _errs46 = errors;
+if(data19 !== null){
 const err2 = {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf/2/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err2];
@@ -2484,7 +2496,7 @@ vErrors.push(err2);
 }
 errors++;
 }
-var _valid1 = _errs45 === errors;
+var _valid1 = _errs46 === errors;
 valid9 = valid9 || _valid1;
 if(!valid9){
 const err3 = {instancePath:instancePath+"/metrics/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/metrics/anyOf/1/additionalProperties/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2497,38 +2509,26 @@ vErrors.push(err3);
 errors++;
 }
 else {
-errors = _errs41;
+errors = _errs42;
 if(vErrors !== null){
-if(_errs41){
-vErrors.length = _errs41;
+if(_errs42){
+vErrors.length = _errs42;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid8 = _errs40 === errors;
+var valid8 = _errs41 === errors;
 if(!valid8){
 break;
 }
 }
 }
-if(_errs39 === errors){
-if(data17.train_rmse !== undefined){
-const _errs47 = errors;
-if(!(validate68(data17.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data17,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs47 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data17.holdout_rmse !== undefined){
+if(_errs40 === errors){
+if(data18.train_rmse !== undefined){
 const _errs48 = errors;
-if(!(validate68(data17.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data17,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+if(!(validate68(data18.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data18,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2538,9 +2538,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.train_mae !== undefined){
+if(data18.holdout_rmse !== undefined){
 const _errs49 = errors;
-if(!(validate68(data17.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data17,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+if(!(validate68(data18.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data18,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2550,9 +2550,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.holdout_mae !== undefined){
+if(data18.train_mae !== undefined){
 const _errs50 = errors;
-if(!(validate68(data17.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data17,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+if(!(validate68(data18.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data18,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2562,9 +2562,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.train_r2 !== undefined){
+if(data18.holdout_mae !== undefined){
 const _errs51 = errors;
-if(!(validate68(data17.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data17,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+if(!(validate68(data18.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data18,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2574,9 +2574,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.holdout_r2 !== undefined){
+if(data18.train_r2 !== undefined){
 const _errs52 = errors;
-if(!(validate68(data17.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data17,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+if(!(validate68(data18.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data18,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2586,9 +2586,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.gap_ratio !== undefined){
+if(data18.holdout_r2 !== undefined){
 const _errs53 = errors;
-if(!(validate68(data17.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data17,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+if(!(validate68(data18.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data18,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2598,9 +2598,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.params_per_sample !== undefined){
+if(data18.gap_ratio !== undefined){
 const _errs54 = errors;
-if(!(validate68(data17.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data17,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+if(!(validate68(data18.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data18,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2610,9 +2610,9 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.max_std_coefficient !== undefined){
+if(data18.params_per_sample !== undefined){
 const _errs55 = errors;
-if(!(validate68(data17.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data17,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+if(!(validate68(data18.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data18,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2622,10 +2622,22 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.max_std_coefficient_column !== undefined){
-let data28 = data17.max_std_coefficient_column;
+if(data18.max_std_coefficient !== undefined){
 const _errs56 = errors;
-if((typeof data28 !== "string") && (data28 !== null)){
+if(!(validate68(data18.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data18,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs56 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.max_std_coefficient_column !== undefined){
+let data29 = data18.max_std_coefficient_column;
+const _errs57 = errors;
+if((typeof data29 !== "string") && (data29 !== null)){
 const err4 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err4];
@@ -2635,28 +2647,16 @@ vErrors.push(err4);
 }
 errors++;
 }
-var valid10 = _errs56 === errors;
+var valid10 = _errs57 === errors;
 }
 else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.max_abs_coefficient !== undefined){
-const _errs58 = errors;
-if(!(validate68(data17.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data17,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs58 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data17.rank !== undefined){
+if(data18.max_abs_coefficient !== undefined){
 const _errs59 = errors;
-if(!(validate55(data17.rank, {instancePath:instancePath+"/metrics/rank",parentData:data17,parentDataProperty:"rank",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+if(!(validate68(data18.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data18,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var valid10 = _errs59 === errors;
@@ -2665,13 +2665,25 @@ else {
 var valid10 = true;
 }
 if(valid10){
-if(data17.condition_number !== undefined){
+if(data18.rank !== undefined){
 const _errs60 = errors;
-if(!(validate68(data17.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data17,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+if(!(validate55(data18.rank, {instancePath:instancePath+"/metrics/rank",parentData:data18,parentDataProperty:"rank",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
 var valid10 = _errs60 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.condition_number !== undefined){
+const _errs61 = errors;
+if(!(validate68(data18.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data18,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs61 === errors;
 }
 else {
 var valid10 = true;
@@ -2701,7 +2713,7 @@ vErrors.push(err5);
 errors++;
 }
 }
-var _valid0 = _errs37 === errors;
+var _valid0 = _errs38 === errors;
 valid7 = valid7 || _valid0;
 if(!valid7){
 const err6 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2716,36 +2728,36 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs34;
+errors = _errs35;
 if(vErrors !== null){
-if(_errs34){
-vErrors.length = _errs34;
+if(_errs35){
+vErrors.length = _errs35;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs33 === errors;
+var valid0 = _errs34 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.coefficients !== undefined){
-let data32 = data.coefficients;
-const _errs61 = errors;
-if(errors === _errs61){
-if(Array.isArray(data32)){
+let data33 = data.coefficients;
+const _errs62 = errors;
+if(errors === _errs62){
+if(Array.isArray(data33)){
 var valid11 = true;
-const len3 = data32.length;
+const len3 = data33.length;
 for(let i3=0; i3<len3; i3++){
-const _errs63 = errors;
-if(!(validate68(data32[i3], {instancePath:instancePath+"/coefficients/" + i3,parentData:data32,parentDataProperty:i3,rootData,dynamicAnchors}))){
+const _errs64 = errors;
+if(!(validate68(data33[i3], {instancePath:instancePath+"/coefficients/" + i3,parentData:data33,parentDataProperty:i3,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid11 = _errs63 === errors;
+var valid11 = _errs64 === errors;
 if(!valid11){
 break;
 }
@@ -2756,19 +2768,19 @@ validate61.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs61 === errors;
+var valid0 = _errs62 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.shipped !== undefined){
-let data34 = data.shipped;
-const _errs64 = errors;
+let data35 = data.shipped;
 const _errs65 = errors;
-let valid12 = false;
 const _errs66 = errors;
-if(data34 !== null){
+let valid12 = false;
+const _errs67 = errors;
+if(data35 !== null){
 const err7 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err7];
@@ -2778,13 +2790,13 @@ vErrors.push(err7);
 }
 errors++;
 }
-var _valid2 = _errs66 === errors;
+var _valid2 = _errs67 === errors;
 valid12 = valid12 || _valid2;
-const _errs68 = errors;
-if(errors === _errs68){
-if(data34 && typeof data34 == "object" && !Array.isArray(data34)){
+const _errs69 = errors;
+if(errors === _errs69){
+if(data35 && typeof data35 == "object" && !Array.isArray(data35)){
 let missing4;
-if((((data34.train_rmse === undefined) && (missing4 = "train_rmse")) || ((data34.holdout_rmse === undefined) && (missing4 = "holdout_rmse"))) || ((data34.max_coefficient_difference === undefined) && (missing4 = "max_coefficient_difference"))){
+if((((data35.train_rmse === undefined) && (missing4 = "train_rmse")) || ((data35.holdout_rmse === undefined) && (missing4 = "holdout_rmse"))) || ((data35.max_coefficient_difference === undefined) && (missing4 = "max_coefficient_difference"))){
 const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
 if(vErrors === null){
 vErrors = [err8];
@@ -2795,8 +2807,8 @@ vErrors.push(err8);
 errors++;
 }
 else {
-const _errs70 = errors;
-for(const key5 in data34){
+const _errs71 = errors;
+for(const key5 in data35){
 if(!(((key5 === "train_rmse") || (key5 === "holdout_rmse")) || (key5 === "max_coefficient_difference"))){
 const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
 if(vErrors === null){
@@ -2809,22 +2821,10 @@ errors++;
 break;
 }
 }
-if(_errs70 === errors){
-if(data34.train_rmse !== undefined){
-const _errs71 = errors;
-if(!(validate68(data34.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data34,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid13 = _errs71 === errors;
-}
-else {
-var valid13 = true;
-}
-if(valid13){
-if(data34.holdout_rmse !== undefined){
+if(_errs71 === errors){
+if(data35.train_rmse !== undefined){
 const _errs72 = errors;
-if(!(validate68(data34.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data34,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+if(!(validate68(data35.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data35,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
@@ -2834,13 +2834,25 @@ else {
 var valid13 = true;
 }
 if(valid13){
-if(data34.max_coefficient_difference !== undefined){
+if(data35.holdout_rmse !== undefined){
 const _errs73 = errors;
-if(!(validate68(data34.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data34,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
+if(!(validate68(data35.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data35,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 var valid13 = _errs73 === errors;
+}
+else {
+var valid13 = true;
+}
+if(valid13){
+if(data35.max_coefficient_difference !== undefined){
+const _errs74 = errors;
+if(!(validate68(data35.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data35,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid13 = _errs74 === errors;
 }
 else {
 var valid13 = true;
@@ -2861,7 +2873,7 @@ vErrors.push(err10);
 errors++;
 }
 }
-var _valid2 = _errs68 === errors;
+var _valid2 = _errs69 === errors;
 valid12 = valid12 || _valid2;
 if(!valid12){
 const err11 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -2876,36 +2888,36 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs65;
+errors = _errs66;
 if(vErrors !== null){
-if(_errs65){
-vErrors.length = _errs65;
+if(_errs66){
+vErrors.length = _errs66;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs64 === errors;
+var valid0 = _errs65 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.checks !== undefined){
-let data38 = data.checks;
-const _errs74 = errors;
-if(errors === _errs74){
-if(Array.isArray(data38)){
+let data39 = data.checks;
+const _errs75 = errors;
+if(errors === _errs75){
+if(Array.isArray(data39)){
 var valid14 = true;
-const len4 = data38.length;
+const len4 = data39.length;
 for(let i4=0; i4<len4; i4++){
-const _errs76 = errors;
-if(!(validate86(data38[i4], {instancePath:instancePath+"/checks/" + i4,parentData:data38,parentDataProperty:i4,rootData,dynamicAnchors}))){
+const _errs77 = errors;
+if(!(validate86(data39[i4], {instancePath:instancePath+"/checks/" + i4,parentData:data39,parentDataProperty:i4,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid14 = _errs76 === errors;
+var valid14 = _errs77 === errors;
 if(!valid14){
 break;
 }
@@ -2916,31 +2928,31 @@ validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properti
 return false;
 }
 }
-var valid0 = _errs74 === errors;
+var valid0 = _errs75 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.base !== undefined){
-const _errs77 = errors;
+const _errs78 = errors;
 if(!(validate92(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs77 === errors;
+var valid0 = _errs78 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.error !== undefined){
-let data41 = data.error;
-const _errs78 = errors;
+let data42 = data.error;
 const _errs79 = errors;
-let valid15 = false;
 const _errs80 = errors;
-if(data41 !== null){
+let valid15 = false;
+const _errs81 = errors;
+if(data42 !== null){
 const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err12];
@@ -2950,13 +2962,13 @@ vErrors.push(err12);
 }
 errors++;
 }
-var _valid3 = _errs80 === errors;
+var _valid3 = _errs81 === errors;
 valid15 = valid15 || _valid3;
-const _errs82 = errors;
-if(errors === _errs82){
-if(data41 && typeof data41 == "object" && !Array.isArray(data41)){
+const _errs83 = errors;
+if(errors === _errs83){
+if(data42 && typeof data42 == "object" && !Array.isArray(data42)){
 let missing5;
-if(((((data41.message === undefined) && (missing5 = "message")) || ((data41.file === undefined) && (missing5 = "file"))) || ((data41.line === undefined) && (missing5 = "line"))) || ((data41.code === undefined) && (missing5 = "code"))){
+if(((((data42.message === undefined) && (missing5 = "message")) || ((data42.file === undefined) && (missing5 = "file"))) || ((data42.line === undefined) && (missing5 = "line"))) || ((data42.code === undefined) && (missing5 = "code"))){
 const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing5},message:"must have required property '"+missing5+"'"};
 if(vErrors === null){
 vErrors = [err13];
@@ -2967,8 +2979,8 @@ vErrors.push(err13);
 errors++;
 }
 else {
-const _errs84 = errors;
-for(const key6 in data41){
+const _errs85 = errors;
+for(const key6 in data42){
 if(!(((((key6 === "message") || (key6 === "file")) || (key6 === "line")) || (key6 === "column")) || (key6 === "code"))){
 const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties"};
 if(vErrors === null){
@@ -2981,10 +2993,10 @@ errors++;
 break;
 }
 }
-if(_errs84 === errors){
-if(data41.message !== undefined){
-const _errs85 = errors;
-if(typeof data41.message !== "string"){
+if(_errs85 === errors){
+if(data42.message !== undefined){
+const _errs86 = errors;
+if(typeof data42.message !== "string"){
 const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err15];
@@ -2994,16 +3006,16 @@ vErrors.push(err15);
 }
 errors++;
 }
-var valid16 = _errs85 === errors;
+var valid16 = _errs86 === errors;
 }
 else {
 var valid16 = true;
 }
 if(valid16){
-if(data41.file !== undefined){
-let data43 = data41.file;
-const _errs87 = errors;
-if((typeof data43 !== "string") && (data43 !== null)){
+if(data42.file !== undefined){
+let data44 = data42.file;
+const _errs88 = errors;
+if((typeof data44 !== "string") && (data44 !== null)){
 const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err16];
@@ -3013,26 +3025,26 @@ vErrors.push(err16);
 }
 errors++;
 }
-var valid16 = _errs87 === errors;
+var valid16 = _errs88 === errors;
 }
 else {
 var valid16 = true;
 }
 if(valid16){
-if(data41.line !== undefined){
-let data44 = data41.line;
-const _errs89 = errors;
+if(data42.line !== undefined){
+let data45 = data42.line;
 const _errs90 = errors;
-let valid17 = false;
 const _errs91 = errors;
-if(!(validate88(data44, {instancePath:instancePath+"/error/line",parentData:data41,parentDataProperty:"line",rootData,dynamicAnchors}))){
+let valid17 = false;
+const _errs92 = errors;
+if(!(validate88(data45, {instancePath:instancePath+"/error/line",parentData:data42,parentDataProperty:"line",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs91 === errors;
+var _valid4 = _errs92 === errors;
 valid17 = valid17 || _valid4;
-const _errs92 = errors;
-if(data44 !== null){
+const _errs93 = errors;
+if(data45 !== null){
 const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err17];
@@ -3042,7 +3054,7 @@ vErrors.push(err17);
 }
 errors++;
 }
-var _valid4 = _errs92 === errors;
+var _valid4 = _errs93 === errors;
 valid17 = valid17 || _valid4;
 if(!valid17){
 const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -3055,36 +3067,36 @@ vErrors.push(err18);
 errors++;
 }
 else {
-errors = _errs90;
+errors = _errs91;
 if(vErrors !== null){
-if(_errs90){
-vErrors.length = _errs90;
+if(_errs91){
+vErrors.length = _errs91;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid16 = _errs89 === errors;
+var valid16 = _errs90 === errors;
 }
 else {
 var valid16 = true;
 }
 if(valid16){
-if(data41.column !== undefined){
-let data45 = data41.column;
-const _errs94 = errors;
+if(data42.column !== undefined){
+let data46 = data42.column;
 const _errs95 = errors;
-let valid18 = false;
 const _errs96 = errors;
-if(!(validate88(data45, {instancePath:instancePath+"/error/column",parentData:data41,parentDataProperty:"column",rootData,dynamicAnchors}))){
+let valid18 = false;
+const _errs97 = errors;
+if(!(validate88(data46, {instancePath:instancePath+"/error/column",parentData:data42,parentDataProperty:"column",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs96 === errors;
+var _valid5 = _errs97 === errors;
 valid18 = valid18 || _valid5;
-const _errs97 = errors;
-if(data45 !== null){
+const _errs98 = errors;
+if(data46 !== null){
 const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err19];
@@ -3094,7 +3106,7 @@ vErrors.push(err19);
 }
 errors++;
 }
-var _valid5 = _errs97 === errors;
+var _valid5 = _errs98 === errors;
 valid18 = valid18 || _valid5;
 if(!valid18){
 const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -3107,25 +3119,25 @@ vErrors.push(err20);
 errors++;
 }
 else {
-errors = _errs95;
+errors = _errs96;
 if(vErrors !== null){
-if(_errs95){
-vErrors.length = _errs95;
+if(_errs96){
+vErrors.length = _errs96;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid16 = _errs94 === errors;
+var valid16 = _errs95 === errors;
 }
 else {
 var valid16 = true;
 }
 if(valid16){
-if(data41.code !== undefined){
-const _errs99 = errors;
-if(typeof data41.code !== "string"){
+if(data42.code !== undefined){
+const _errs100 = errors;
+if(typeof data42.code !== "string"){
 const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err21];
@@ -3135,7 +3147,7 @@ vErrors.push(err21);
 }
 errors++;
 }
-var valid16 = _errs99 === errors;
+var valid16 = _errs100 === errors;
 }
 else {
 var valid16 = true;
@@ -3158,7 +3170,7 @@ vErrors.push(err22);
 errors++;
 }
 }
-var _valid3 = _errs82 === errors;
+var _valid3 = _errs83 === errors;
 valid15 = valid15 || _valid3;
 if(!valid15){
 const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
@@ -3173,32 +3185,33 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs79;
+errors = _errs80;
 if(vErrors !== null){
-if(_errs79){
-vErrors.length = _errs79;
+if(_errs80){
+vErrors.length = _errs80;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs78 === errors;
+var valid0 = _errs79 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs101 = errors;
+const _errs102 = errors;
 if(!(validate100(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate100.errors : vErrors.concat(validate100.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs101 === errors;
+var valid0 = _errs102 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }

@@ -833,7 +833,7 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate75;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data","terms"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows); or its parts: a list of paths, or a glob (`train/part-*.csv.gz`), read in code-point order of their paths as one table.","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder, or its parts (as for `train`). Required unless `split` is given (then not allowed).","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."}},"$defs":{"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows); or its parts: a list of paths, or a glob (`train/part-*.csv.gz`), read in code-point order of their paths as one table.","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder, or its parts (as for `train`). Required unless `split` is given (then not allowed).","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5},"refit_compare":{"description":"With `refit: false`: also refit the model from its training rows and report the refit's figures (training and hold-out RMSE, k-fold CV RMSE) beside the shipped model's, as information (metrics `refit_*`); no check judges them.","type":"boolean","default":false}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."},"predictions":{"description":"A model trained elsewhere (fitgate cannot refit it): where its predictions of the training and hold-out rows are. Instead of `terms` (not together with `terms`, `coefficients` or `data.weight`/`data.sigma`). Checks that need only predictions run; those that need a refit or coefficients are skipped with a reason.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"$ref":"#/$defs/predictionSource","description":"Predictions of the training rows."},"holdout":{"$ref":"#/$defs/predictionSource","description":"Predictions of the hold-out rows."},"inputs":{"description":"The model's input columns (in the data files), for the `leakage` check; without them `leakage` is skipped.","type":"array","minItems":1,"maxItems":1000,"items":{"description":"A column name of the data files.","type":"string","minLength":1}}}},"parameters":{"description":"The number of parameters of a model trained elsewhere (`predictions`), when it can be stated; enables `parameter-ratio` (and `events-per-parameter` for classifiers).","type":"integer","minimum":1,"maximum":1000000000000}},"$defs":{"predictionSource":{"title":"predictions source","description":"`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].","type":"object","required":["column"],"additionalProperties":false,"properties":{"column":{"description":"Column holding the predictions.","type":"string","minLength":1},"file":{"description":"Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).","type":"string","minLength":1},"key":{"description":"Row key column held by both the data file and the side file (unique in each); only with `file`.","type":"string","minLength":1}}},"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
@@ -3365,6 +3365,132 @@ return errors === 0;
 }
 validate80.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
+const schema27 = {"title":"predictions source","description":"`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].","type":"object","required":["column"],"additionalProperties":false,"properties":{"column":{"description":"Column holding the predictions.","type":"string","minLength":1},"file":{"description":"Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).","type":"string","minLength":1},"key":{"description":"Row key column held by both the data file and the side file (unique in each); only with `file`.","type":"string","minLength":1}}};
+
+function validate102(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate102.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.column === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema27.required,parentSchema:schema27,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((key0 === "column") || (key0 === "file")) || (key0 === "key"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema27,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.column !== undefined){
+let data0 = data.column;
+if(typeof data0 === "string"){
+if(func1(data0) < 1){
+const err2 = {instancePath:instancePath+"/column",schemaPath:"#/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema27.properties.column,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+else {
+const err3 = {instancePath:instancePath+"/column",schemaPath:"#/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema27.properties.column.type,parentSchema:schema27.properties.column,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.file !== undefined){
+let data1 = data.file;
+if(typeof data1 === "string"){
+if(func1(data1) < 1){
+const err4 = {instancePath:instancePath+"/file",schemaPath:"#/properties/file/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema27.properties.file,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/file",schemaPath:"#/properties/file/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema27.properties.file.type,parentSchema:schema27.properties.file,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.key !== undefined){
+let data2 = data.key;
+if(typeof data2 === "string"){
+if(func1(data2) < 1){
+const err6 = {instancePath:instancePath+"/key",schemaPath:"#/properties/key/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema27.properties.key,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/key",schemaPath:"#/properties/key/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema27.properties.key.type,parentSchema:schema27.properties.key,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+}
+else {
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema27.type,parentSchema:schema27,data};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+validate102.errors = vErrors;
+return errors === 0;
+}
+validate102.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+
 
 function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 /*# sourceURL="urn:fitgate:schema:descriptor:1" */;
@@ -3408,8 +3534,9 @@ vErrors.push(err2);
 }
 errors++;
 }
-if(data.terms === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "terms"},message:"must have required property '"+"terms"+"'",schema:schema22.required,parentSchema:schema22,data};
+for(const key0 in data){
+if(!(func2.call(schema22.properties, key0))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema22,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3418,9 +3545,11 @@ vErrors.push(err3);
 }
 errors++;
 }
-for(const key0 in data){
-if(!((((((((key0 === "version") || (key0 === "name")) || (key0 === "task")) || (key0 === "data")) || (key0 === "terms")) || (key0 === "fit")) || (key0 === "coefficients")) || (key0 === "limits"))){
-const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema22,data};
+}
+if(data.version !== undefined){
+let data0 = data.version;
+if(1 !== data0){
+const err4 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 1},message:"must be equal to constant",schema:1,parentSchema:schema22.properties.version,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3430,10 +3559,11 @@ vErrors.push(err4);
 errors++;
 }
 }
-if(data.version !== undefined){
-let data0 = data.version;
-if(1 !== data0){
-const err5 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 1},message:"must be equal to constant",schema:1,parentSchema:schema22.properties.version,data:data0};
+if(data.name !== undefined){
+let data1 = data.name;
+if(typeof data1 === "string"){
+if(func1(data1) > 100){
+const err5 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/maxLength",keyword:"maxLength",params:{limit: 100},message:"must NOT have more than 100 characters",schema:100,parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3442,12 +3572,8 @@ vErrors.push(err5);
 }
 errors++;
 }
-}
-if(data.name !== undefined){
-let data1 = data.name;
-if(typeof data1 === "string"){
-if(func1(data1) > 100){
-const err6 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/maxLength",keyword:"maxLength",params:{limit: 100},message:"must NOT have more than 100 characters",schema:100,parentSchema:schema22.properties.name,data:data1};
+if(func1(data1) < 1){
+const err6 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3456,8 +3582,8 @@ vErrors.push(err6);
 }
 errors++;
 }
-if(func1(data1) < 1){
-const err7 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.name,data:data1};
+if(!pattern3.test(data1)){
+const err7 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/pattern",keyword:"pattern",params:{pattern: "^[A-Za-z0-9._-]+$"},message:"must match pattern \""+"^[A-Za-z0-9._-]+$"+"\"",schema:"^[A-Za-z0-9._-]+$",parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3466,8 +3592,9 @@ vErrors.push(err7);
 }
 errors++;
 }
-if(!pattern3.test(data1)){
-const err8 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/pattern",keyword:"pattern",params:{pattern: "^[A-Za-z0-9._-]+$"},message:"must match pattern \""+"^[A-Za-z0-9._-]+$"+"\"",schema:"^[A-Za-z0-9._-]+$",parentSchema:schema22.properties.name,data:data1};
+}
+else {
+const err8 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.name.type,parentSchema:schema22.properties.name,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3477,8 +3604,10 @@ vErrors.push(err8);
 errors++;
 }
 }
-else {
-const err9 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.name.type,parentSchema:schema22.properties.name,data:data1};
+if(data.task !== undefined){
+let data2 = data.task;
+if(!((data2 === "regression") || (data2 === "classification"))){
+const err9 = {instancePath:instancePath+"/task",schemaPath:"#/properties/task/enum",keyword:"enum",params:{allowedValues: schema22.properties.task.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.task.enum,parentSchema:schema22.properties.task,data:data2};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3488,10 +3617,11 @@ vErrors.push(err9);
 errors++;
 }
 }
-if(data.task !== undefined){
-let data2 = data.task;
-if(!((data2 === "regression") || (data2 === "classification"))){
-const err10 = {instancePath:instancePath+"/task",schemaPath:"#/properties/task/enum",keyword:"enum",params:{allowedValues: schema22.properties.task.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.task.enum,parentSchema:schema22.properties.task,data:data2};
+if(data.data !== undefined){
+let data3 = data.data;
+if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
+if(data3.train === undefined){
+const err10 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3500,12 +3630,8 @@ vErrors.push(err10);
 }
 errors++;
 }
-}
-if(data.data !== undefined){
-let data3 = data.data;
-if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
-if(data3.train === undefined){
-const err11 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
+if(data3.target === undefined){
+const err11 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "target"},message:"must have required property '"+"target"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3514,24 +3640,14 @@ vErrors.push(err11);
 }
 errors++;
 }
-if(data3.target === undefined){
-const err12 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/required",keyword:"required",params:{missingProperty: "target"},message:"must have required property '"+"target"+"'",schema:schema22.properties.data.required,parentSchema:schema22.properties.data,data:data3};
+for(const key1 in data3){
+if(!(func2.call(schema22.properties.data.properties, key1))){
+const err12 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
 else {
 vErrors.push(err12);
-}
-errors++;
-}
-for(const key1 in data3){
-if(!(func2.call(schema22.properties.data.properties, key1))){
-const err13 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data,data:data3};
-if(vErrors === null){
-vErrors = [err13];
-}
-else {
-vErrors.push(err13);
 }
 errors++;
 }
@@ -3543,7 +3659,18 @@ let valid2 = false;
 const _errs11 = errors;
 if(typeof data4 === "string"){
 if(func1(data4) < 1){
-const err14 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train.anyOf[0],data:data4};
+const err13 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train.anyOf[0],data:data4};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+else {
+const err14 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.anyOf[0].type,parentSchema:schema22.properties.data.properties.train.anyOf[0],data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3552,9 +3679,12 @@ vErrors.push(err14);
 }
 errors++;
 }
-}
-else {
-const err15 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.anyOf[0].type,parentSchema:schema22.properties.data.properties.train.anyOf[0],data:data4};
+var _valid0 = _errs11 === errors;
+valid2 = valid2 || _valid0;
+const _errs13 = errors;
+if(Array.isArray(data4)){
+if(data4.length > 1000){
+const err15 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/1/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.data.properties.train.anyOf[1],data:data4};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3563,12 +3693,8 @@ vErrors.push(err15);
 }
 errors++;
 }
-var _valid0 = _errs11 === errors;
-valid2 = valid2 || _valid0;
-const _errs13 = errors;
-if(Array.isArray(data4)){
-if(data4.length > 1000){
-const err16 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/1/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.data.properties.train.anyOf[1],data:data4};
+if(data4.length < 1){
+const err16 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/1/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.data.properties.train.anyOf[1],data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3577,8 +3703,12 @@ vErrors.push(err16);
 }
 errors++;
 }
-if(data4.length < 1){
-const err17 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/1/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.data.properties.train.anyOf[1],data:data4};
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+let data5 = data4[i0];
+if(typeof data5 === "string"){
+if(func1(data5) < 1){
+const err17 = {instancePath:instancePath+"/data/train/" + i0,schemaPath:"#/properties/data/properties/train/anyOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train.anyOf[1].items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3587,12 +3717,9 @@ vErrors.push(err17);
 }
 errors++;
 }
-const len0 = data4.length;
-for(let i0=0; i0<len0; i0++){
-let data5 = data4[i0];
-if(typeof data5 === "string"){
-if(func1(data5) < 1){
-const err18 = {instancePath:instancePath+"/data/train/" + i0,schemaPath:"#/properties/data/properties/train/anyOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.train.anyOf[1].items,data:data5};
+}
+else {
+const err18 = {instancePath:instancePath+"/data/train/" + i0,schemaPath:"#/properties/data/properties/train/anyOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.anyOf[1].items.type,parentSchema:schema22.properties.data.properties.train.anyOf[1].items,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3602,8 +3729,9 @@ vErrors.push(err18);
 errors++;
 }
 }
+}
 else {
-const err19 = {instancePath:instancePath+"/data/train/" + i0,schemaPath:"#/properties/data/properties/train/anyOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.train.anyOf[1].items.type,parentSchema:schema22.properties.data.properties.train.anyOf[1].items,data:data5};
+const err19 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.data.properties.train.anyOf[1].type,parentSchema:schema22.properties.data.properties.train.anyOf[1],data:data4};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3612,27 +3740,15 @@ vErrors.push(err19);
 }
 errors++;
 }
-}
-}
-else {
-const err20 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.data.properties.train.anyOf[1].type,parentSchema:schema22.properties.data.properties.train.anyOf[1],data:data4};
+var _valid0 = _errs13 === errors;
+valid2 = valid2 || _valid0;
+if(!valid2){
+const err20 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf",schema:schema22.properties.data.properties.train.anyOf,parentSchema:schema22.properties.data.properties.train,data:data4};
 if(vErrors === null){
 vErrors = [err20];
 }
 else {
 vErrors.push(err20);
-}
-errors++;
-}
-var _valid0 = _errs13 === errors;
-valid2 = valid2 || _valid0;
-if(!valid2){
-const err21 = {instancePath:instancePath+"/data/train",schemaPath:"#/properties/data/properties/train/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf",schema:schema22.properties.data.properties.train.anyOf,parentSchema:schema22.properties.data.properties.train,data:data4};
-if(vErrors === null){
-vErrors = [err21];
-}
-else {
-vErrors.push(err21);
 }
 errors++;
 }
@@ -3655,7 +3771,18 @@ let valid5 = false;
 const _errs19 = errors;
 if(typeof data6 === "string"){
 if(func1(data6) < 1){
-const err22 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout.anyOf[0],data:data6};
+const err21 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout.anyOf[0],data:data6};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+else {
+const err22 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.anyOf[0].type,parentSchema:schema22.properties.data.properties.holdout.anyOf[0],data:data6};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3664,9 +3791,12 @@ vErrors.push(err22);
 }
 errors++;
 }
-}
-else {
-const err23 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/0/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.anyOf[0].type,parentSchema:schema22.properties.data.properties.holdout.anyOf[0],data:data6};
+var _valid1 = _errs19 === errors;
+valid5 = valid5 || _valid1;
+const _errs21 = errors;
+if(Array.isArray(data6)){
+if(data6.length > 1000){
+const err23 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/1/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.data.properties.holdout.anyOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3675,12 +3805,8 @@ vErrors.push(err23);
 }
 errors++;
 }
-var _valid1 = _errs19 === errors;
-valid5 = valid5 || _valid1;
-const _errs21 = errors;
-if(Array.isArray(data6)){
-if(data6.length > 1000){
-const err24 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/1/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.data.properties.holdout.anyOf[1],data:data6};
+if(data6.length < 1){
+const err24 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/1/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.data.properties.holdout.anyOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3689,8 +3815,12 @@ vErrors.push(err24);
 }
 errors++;
 }
-if(data6.length < 1){
-const err25 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/1/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.data.properties.holdout.anyOf[1],data:data6};
+const len1 = data6.length;
+for(let i1=0; i1<len1; i1++){
+let data7 = data6[i1];
+if(typeof data7 === "string"){
+if(func1(data7) < 1){
+const err25 = {instancePath:instancePath+"/data/holdout/" + i1,schemaPath:"#/properties/data/properties/holdout/anyOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout.anyOf[1].items,data:data7};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3699,12 +3829,9 @@ vErrors.push(err25);
 }
 errors++;
 }
-const len1 = data6.length;
-for(let i1=0; i1<len1; i1++){
-let data7 = data6[i1];
-if(typeof data7 === "string"){
-if(func1(data7) < 1){
-const err26 = {instancePath:instancePath+"/data/holdout/" + i1,schemaPath:"#/properties/data/properties/holdout/anyOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.holdout.anyOf[1].items,data:data7};
+}
+else {
+const err26 = {instancePath:instancePath+"/data/holdout/" + i1,schemaPath:"#/properties/data/properties/holdout/anyOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.anyOf[1].items.type,parentSchema:schema22.properties.data.properties.holdout.anyOf[1].items,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3714,8 +3841,9 @@ vErrors.push(err26);
 errors++;
 }
 }
+}
 else {
-const err27 = {instancePath:instancePath+"/data/holdout/" + i1,schemaPath:"#/properties/data/properties/holdout/anyOf/1/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.holdout.anyOf[1].items.type,parentSchema:schema22.properties.data.properties.holdout.anyOf[1].items,data:data7};
+const err27 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.data.properties.holdout.anyOf[1].type,parentSchema:schema22.properties.data.properties.holdout.anyOf[1],data:data6};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -3724,27 +3852,15 @@ vErrors.push(err27);
 }
 errors++;
 }
-}
-}
-else {
-const err28 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf/1/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.data.properties.holdout.anyOf[1].type,parentSchema:schema22.properties.data.properties.holdout.anyOf[1],data:data6};
+var _valid1 = _errs21 === errors;
+valid5 = valid5 || _valid1;
+if(!valid5){
+const err28 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf",schema:schema22.properties.data.properties.holdout.anyOf,parentSchema:schema22.properties.data.properties.holdout,data:data6};
 if(vErrors === null){
 vErrors = [err28];
 }
 else {
 vErrors.push(err28);
-}
-errors++;
-}
-var _valid1 = _errs21 === errors;
-valid5 = valid5 || _valid1;
-if(!valid5){
-const err29 = {instancePath:instancePath+"/data/holdout",schemaPath:"#/properties/data/properties/holdout/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf",schema:schema22.properties.data.properties.holdout.anyOf,parentSchema:schema22.properties.data.properties.holdout,data:data6};
-if(vErrors === null){
-vErrors = [err29];
-}
-else {
-vErrors.push(err29);
 }
 errors++;
 }
@@ -3763,7 +3879,20 @@ vErrors = null;
 if(data3.separator !== undefined){
 let data8 = data3.separator;
 if(!((((data8 === "auto") || (data8 === ",")) || (data8 === ";")) || (data8 === "\t"))){
-const err30 = {instancePath:instancePath+"/data/separator",schemaPath:"#/properties/data/properties/separator/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.separator.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.separator.enum,parentSchema:schema22.properties.data.properties.separator,data:data8};
+const err29 = {instancePath:instancePath+"/data/separator",schemaPath:"#/properties/data/properties/separator/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.separator.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.separator.enum,parentSchema:schema22.properties.data.properties.separator,data:data8};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data3.decimal !== undefined){
+let data9 = data3.decimal;
+if(!((data9 === ".") || (data9 === ","))){
+const err30 = {instancePath:instancePath+"/data/decimal",schemaPath:"#/properties/data/properties/decimal/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.decimal.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.decimal.enum,parentSchema:schema22.properties.data.properties.decimal,data:data9};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -3773,10 +3902,10 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data3.decimal !== undefined){
-let data9 = data3.decimal;
-if(!((data9 === ".") || (data9 === ","))){
-const err31 = {instancePath:instancePath+"/data/decimal",schemaPath:"#/properties/data/properties/decimal/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.decimal.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.decimal.enum,parentSchema:schema22.properties.data.properties.decimal,data:data9};
+if(data3.missing !== undefined){
+let data10 = data3.missing;
+if(!((data10 === "error") || (data10 === "drop"))){
+const err31 = {instancePath:instancePath+"/data/missing",schemaPath:"#/properties/data/properties/missing/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.missing.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.missing.enum,parentSchema:schema22.properties.data.properties.missing,data:data10};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3786,10 +3915,11 @@ vErrors.push(err31);
 errors++;
 }
 }
-if(data3.missing !== undefined){
-let data10 = data3.missing;
-if(!((data10 === "error") || (data10 === "drop"))){
-const err32 = {instancePath:instancePath+"/data/missing",schemaPath:"#/properties/data/properties/missing/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.missing.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.missing.enum,parentSchema:schema22.properties.data.properties.missing,data:data10};
+if(data3.split !== undefined){
+let data11 = data3.split;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+if(data11.column === undefined){
+const err32 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3798,12 +3928,8 @@ vErrors.push(err32);
 }
 errors++;
 }
-}
-if(data3.split !== undefined){
-let data11 = data3.split;
-if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
-if(data11.column === undefined){
-const err33 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "column"},message:"must have required property '"+"column"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data11};
+if(data11.train === undefined){
+const err33 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data11};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3812,8 +3938,8 @@ vErrors.push(err33);
 }
 errors++;
 }
-if(data11.train === undefined){
-const err34 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data11};
+if(data11.holdout === undefined){
+const err34 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data11};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3822,8 +3948,9 @@ vErrors.push(err34);
 }
 errors++;
 }
-if(data11.holdout === undefined){
-const err35 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.data.properties.split.required,parentSchema:schema22.properties.data.properties.split,data:data11};
+for(const key2 in data11){
+if(!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))){
+const err35 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data.properties.split,data:data11};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3832,9 +3959,12 @@ vErrors.push(err35);
 }
 errors++;
 }
-for(const key2 in data11){
-if(!(((key2 === "column") || (key2 === "train")) || (key2 === "holdout"))){
-const err36 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.data.properties.split,data:data11};
+}
+if(data11.column !== undefined){
+let data12 = data11.column;
+if(typeof data12 === "string"){
+if(func1(data12) < 1){
+const err36 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.column,data:data12};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3844,11 +3974,8 @@ vErrors.push(err36);
 errors++;
 }
 }
-if(data11.column !== undefined){
-let data12 = data11.column;
-if(typeof data12 === "string"){
-if(func1(data12) < 1){
-const err37 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.column,data:data12};
+else {
+const err37 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.column.type,parentSchema:schema22.properties.data.properties.split.properties.column,data:data12};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3858,8 +3985,11 @@ vErrors.push(err37);
 errors++;
 }
 }
-else {
-const err38 = {instancePath:instancePath+"/data/split/column",schemaPath:"#/properties/data/properties/split/properties/column/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.column.type,parentSchema:schema22.properties.data.properties.split.properties.column,data:data12};
+if(data11.train !== undefined){
+let data13 = data11.train;
+if(typeof data13 === "string"){
+if(func1(data13) < 1){
+const err38 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.train,data:data13};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3869,11 +3999,8 @@ vErrors.push(err38);
 errors++;
 }
 }
-if(data11.train !== undefined){
-let data13 = data11.train;
-if(typeof data13 === "string"){
-if(func1(data13) < 1){
-const err39 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.train,data:data13};
+else {
+const err39 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.train.type,parentSchema:schema22.properties.data.properties.split.properties.train,data:data13};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -3883,8 +4010,11 @@ vErrors.push(err39);
 errors++;
 }
 }
-else {
-const err40 = {instancePath:instancePath+"/data/split/train",schemaPath:"#/properties/data/properties/split/properties/train/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.train.type,parentSchema:schema22.properties.data.properties.split.properties.train,data:data13};
+if(data11.holdout !== undefined){
+let data14 = data11.holdout;
+if(typeof data14 === "string"){
+if(func1(data14) < 1){
+const err40 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data14};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -3894,11 +4024,8 @@ vErrors.push(err40);
 errors++;
 }
 }
-if(data11.holdout !== undefined){
-let data14 = data11.holdout;
-if(typeof data14 === "string"){
-if(func1(data14) < 1){
-const err41 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data14};
+else {
+const err41 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.holdout.type,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data14};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -3908,8 +4035,9 @@ vErrors.push(err41);
 errors++;
 }
 }
+}
 else {
-const err42 = {instancePath:instancePath+"/data/split/holdout",schemaPath:"#/properties/data/properties/split/properties/holdout/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.split.properties.holdout.type,parentSchema:schema22.properties.data.properties.split.properties.holdout,data:data14};
+const err42 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.properties.split.type,parentSchema:schema22.properties.data.properties.split,data:data11};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -3919,9 +4047,11 @@ vErrors.push(err42);
 errors++;
 }
 }
-}
-else {
-const err43 = {instancePath:instancePath+"/data/split",schemaPath:"#/properties/data/properties/split/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.properties.split.type,parentSchema:schema22.properties.data.properties.split,data:data11};
+if(data3.target !== undefined){
+let data15 = data3.target;
+if(typeof data15 === "string"){
+if(func1(data15) < 1){
+const err43 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.target,data:data15};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -3931,11 +4061,8 @@ vErrors.push(err43);
 errors++;
 }
 }
-if(data3.target !== undefined){
-let data15 = data3.target;
-if(typeof data15 === "string"){
-if(func1(data15) < 1){
-const err44 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.target,data:data15};
+else {
+const err44 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.target.type,parentSchema:schema22.properties.data.properties.target,data:data15};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -3945,8 +4072,11 @@ vErrors.push(err44);
 errors++;
 }
 }
-else {
-const err45 = {instancePath:instancePath+"/data/target",schemaPath:"#/properties/data/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.target.type,parentSchema:schema22.properties.data.properties.target,data:data15};
+if(data3.positive !== undefined){
+let data16 = data3.positive;
+if(typeof data16 === "string"){
+if(func1(data16) < 1){
+const err45 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.positive,data:data16};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -3956,11 +4086,8 @@ vErrors.push(err45);
 errors++;
 }
 }
-if(data3.positive !== undefined){
-let data16 = data3.positive;
-if(typeof data16 === "string"){
-if(func1(data16) < 1){
-const err46 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.positive,data:data16};
+else {
+const err46 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.positive.type,parentSchema:schema22.properties.data.properties.positive,data:data16};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -3970,8 +4097,11 @@ vErrors.push(err46);
 errors++;
 }
 }
-else {
-const err47 = {instancePath:instancePath+"/data/positive",schemaPath:"#/properties/data/properties/positive/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.positive.type,parentSchema:schema22.properties.data.properties.positive,data:data16};
+if(data3.weight !== undefined){
+let data17 = data3.weight;
+if(typeof data17 === "string"){
+if(func1(data17) < 1){
+const err47 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.weight,data:data17};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3981,11 +4111,8 @@ vErrors.push(err47);
 errors++;
 }
 }
-if(data3.weight !== undefined){
-let data17 = data3.weight;
-if(typeof data17 === "string"){
-if(func1(data17) < 1){
-const err48 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.weight,data:data17};
+else {
+const err48 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.weight.type,parentSchema:schema22.properties.data.properties.weight,data:data17};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3995,8 +4122,11 @@ vErrors.push(err48);
 errors++;
 }
 }
-else {
-const err49 = {instancePath:instancePath+"/data/weight",schemaPath:"#/properties/data/properties/weight/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.weight.type,parentSchema:schema22.properties.data.properties.weight,data:data17};
+if(data3.sigma !== undefined){
+let data18 = data3.sigma;
+if(typeof data18 === "string"){
+if(func1(data18) < 1){
+const err49 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.sigma,data:data18};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -4006,11 +4136,8 @@ vErrors.push(err49);
 errors++;
 }
 }
-if(data3.sigma !== undefined){
-let data18 = data3.sigma;
-if(typeof data18 === "string"){
-if(func1(data18) < 1){
-const err50 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.data.properties.sigma,data:data18};
+else {
+const err50 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.sigma.type,parentSchema:schema22.properties.data.properties.sigma,data:data18};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -4020,8 +4147,9 @@ vErrors.push(err50);
 errors++;
 }
 }
+}
 else {
-const err51 = {instancePath:instancePath+"/data/sigma",schemaPath:"#/properties/data/properties/sigma/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.data.properties.sigma.type,parentSchema:schema22.properties.data.properties.sigma,data:data18};
+const err51 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4031,28 +4159,16 @@ vErrors.push(err51);
 errors++;
 }
 }
-}
-else {
-const err52 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
+if(data.terms !== undefined){
+let data19 = data.terms;
+if(Array.isArray(data19)){
+if(data19.length < 1){
+const err52 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data19};
 if(vErrors === null){
 vErrors = [err52];
 }
 else {
 vErrors.push(err52);
-}
-errors++;
-}
-}
-if(data.terms !== undefined){
-let data19 = data.terms;
-if(Array.isArray(data19)){
-if(data19.length < 1){
-const err53 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data19};
-if(vErrors === null){
-vErrors = [err53];
-}
-else {
-vErrors.push(err53);
 }
 errors++;
 }
@@ -4065,7 +4181,22 @@ errors = vErrors.length;
 }
 }
 else {
-const err54 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data19};
+const err53 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data19};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
+}
+if(data.fit !== undefined){
+let data21 = data.fit;
+if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
+for(const key3 in data21){
+if(!(func2.call(schema22.properties.fit.properties, key3))){
+const err54 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data21};
 if(vErrors === null){
 vErrors = [err54];
 }
@@ -4075,12 +4206,10 @@ vErrors.push(err54);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data21 = data.fit;
-if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
-for(const key3 in data21){
-if(!((((((((key3 === "intercept") || (key3 === "refit")) || (key3 === "ridge")) || (key3 === "folds")) || (key3 === "fold_order")) || (key3 === "seed")) || (key3 === "parameter_count")) || (key3 === "threshold"))){
-const err55 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data21};
+if(data21.intercept !== undefined){
+let data22 = data21.intercept;
+if(typeof data22 !== "boolean"){
+const err55 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data22};
 if(vErrors === null){
 vErrors = [err55];
 }
@@ -4090,10 +4219,10 @@ vErrors.push(err55);
 errors++;
 }
 }
-if(data21.intercept !== undefined){
-let data22 = data21.intercept;
-if(typeof data22 !== "boolean"){
-const err56 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data22};
+if(data21.refit !== undefined){
+let data23 = data21.refit;
+if(typeof data23 !== "boolean"){
+const err56 = {instancePath:instancePath+"/fit/refit",schemaPath:"#/properties/fit/properties/refit/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit.type,parentSchema:schema22.properties.fit.properties.refit,data:data23};
 if(vErrors === null){
 vErrors = [err56];
 }
@@ -4103,10 +4232,11 @@ vErrors.push(err56);
 errors++;
 }
 }
-if(data21.refit !== undefined){
-let data23 = data21.refit;
-if(typeof data23 !== "boolean"){
-const err57 = {instancePath:instancePath+"/fit/refit",schemaPath:"#/properties/fit/properties/refit/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit.type,parentSchema:schema22.properties.fit.properties.refit,data:data23};
+if(data21.ridge !== undefined){
+let data24 = data21.ridge;
+if((typeof data24 == "number") && (isFinite(data24))){
+if(data24 < 0 || isNaN(data24)){
+const err57 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data24};
 if(vErrors === null){
 vErrors = [err57];
 }
@@ -4116,11 +4246,8 @@ vErrors.push(err57);
 errors++;
 }
 }
-if(data21.ridge !== undefined){
-let data24 = data21.ridge;
-if((typeof data24 == "number") && (isFinite(data24))){
-if(data24 < 0 || isNaN(data24)){
-const err58 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data24};
+else {
+const err58 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data24};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4130,8 +4257,10 @@ vErrors.push(err58);
 errors++;
 }
 }
-else {
-const err59 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data24};
+if(data21.folds !== undefined){
+let data25 = data21.folds;
+if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
+const err59 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data25};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4140,11 +4269,9 @@ vErrors.push(err59);
 }
 errors++;
 }
-}
-if(data21.folds !== undefined){
-let data25 = data21.folds;
-if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
-const err60 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data25};
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 > 50 || isNaN(data25)){
+const err60 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data25};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4153,9 +4280,8 @@ vErrors.push(err60);
 }
 errors++;
 }
-if((typeof data25 == "number") && (isFinite(data25))){
-if(data25 > 50 || isNaN(data25)){
-const err61 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data25};
+if(data25 < 2 || isNaN(data25)){
+const err61 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data25};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4164,8 +4290,12 @@ vErrors.push(err61);
 }
 errors++;
 }
-if(data25 < 2 || isNaN(data25)){
-const err62 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data25};
+}
+}
+if(data21.fold_order !== undefined){
+let data26 = data21.fold_order;
+if(!((data26 === "shuffled") || (data26 === "blocks"))){
+const err62 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data26};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4175,11 +4305,10 @@ vErrors.push(err62);
 errors++;
 }
 }
-}
-if(data21.fold_order !== undefined){
-let data26 = data21.fold_order;
-if(!((data26 === "shuffled") || (data26 === "blocks"))){
-const err63 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data26};
+if(data21.seed !== undefined){
+let data27 = data21.seed;
+if(!(((typeof data27 == "number") && (!(data27 % 1) && !isNaN(data27))) && (isFinite(data27)))){
+const err63 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data27};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -4188,11 +4317,9 @@ vErrors.push(err63);
 }
 errors++;
 }
-}
-if(data21.seed !== undefined){
-let data27 = data21.seed;
-if(!(((typeof data27 == "number") && (!(data27 % 1) && !isNaN(data27))) && (isFinite(data27)))){
-const err64 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data27};
+if((typeof data27 == "number") && (isFinite(data27))){
+if(data27 > 4294967295 || isNaN(data27)){
+const err64 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data27};
 if(vErrors === null){
 vErrors = [err64];
 }
@@ -4201,9 +4328,8 @@ vErrors.push(err64);
 }
 errors++;
 }
-if((typeof data27 == "number") && (isFinite(data27))){
-if(data27 > 4294967295 || isNaN(data27)){
-const err65 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data27};
+if(data27 < 0 || isNaN(data27)){
+const err65 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data27};
 if(vErrors === null){
 vErrors = [err65];
 }
@@ -4212,8 +4338,12 @@ vErrors.push(err65);
 }
 errors++;
 }
-if(data27 < 0 || isNaN(data27)){
-const err66 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data27};
+}
+}
+if(data21.parameter_count !== undefined){
+let data28 = data21.parameter_count;
+if(!((data28 === "columns") || (data28 === "effective"))){
+const err66 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data28};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -4223,11 +4353,11 @@ vErrors.push(err66);
 errors++;
 }
 }
-}
-if(data21.parameter_count !== undefined){
-let data28 = data21.parameter_count;
-if(!((data28 === "columns") || (data28 === "effective"))){
-const err67 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data28};
+if(data21.threshold !== undefined){
+let data29 = data21.threshold;
+if((typeof data29 == "number") && (isFinite(data29))){
+if(data29 >= 1 || isNaN(data29)){
+const err67 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
 if(vErrors === null){
 vErrors = [err67];
 }
@@ -4236,12 +4366,8 @@ vErrors.push(err67);
 }
 errors++;
 }
-}
-if(data21.threshold !== undefined){
-let data29 = data21.threshold;
-if((typeof data29 == "number") && (isFinite(data29))){
-if(data29 >= 1 || isNaN(data29)){
-const err68 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
+if(data29 <= 0 || isNaN(data29)){
+const err68 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
 if(vErrors === null){
 vErrors = [err68];
 }
@@ -4250,8 +4376,9 @@ vErrors.push(err68);
 }
 errors++;
 }
-if(data29 <= 0 || isNaN(data29)){
-const err69 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
+}
+else {
+const err69 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -4261,8 +4388,10 @@ vErrors.push(err69);
 errors++;
 }
 }
-else {
-const err70 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
+if(data21.refit_compare !== undefined){
+let data30 = data21.refit_compare;
+if(typeof data30 !== "boolean"){
+const err70 = {instancePath:instancePath+"/fit/refit_compare",schemaPath:"#/properties/fit/properties/refit_compare/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit_compare.type,parentSchema:schema22.properties.fit.properties.refit_compare,data:data30};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -4285,10 +4414,10 @@ errors++;
 }
 }
 if(data.coefficients !== undefined){
-let data30 = data.coefficients;
-if(Array.isArray(data30)){
-if(data30.length < 1){
-const err72 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data30};
+let data31 = data.coefficients;
+if(Array.isArray(data31)){
+if(data31.length < 1){
+const err72 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data31};
 if(vErrors === null){
 vErrors = [err72];
 }
@@ -4297,11 +4426,11 @@ vErrors.push(err72);
 }
 errors++;
 }
-const len3 = data30.length;
+const len3 = data31.length;
 for(let i3=0; i3<len3; i3++){
-let data31 = data30[i3];
-if(!((typeof data31 == "number") && (isFinite(data31)))){
-const err73 = {instancePath:instancePath+"/coefficients/" + i3,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data31};
+let data32 = data31[i3];
+if(!((typeof data32 == "number") && (isFinite(data32)))){
+const err73 = {instancePath:instancePath+"/coefficients/" + i3,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data32};
 if(vErrors === null){
 vErrors = [err73];
 }
@@ -4313,7 +4442,7 @@ errors++;
 }
 }
 else {
-const err74 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data30};
+const err74 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data31};
 if(vErrors === null){
 vErrors = [err74];
 }
@@ -4329,14 +4458,169 @@ vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.error
 errors = vErrors.length;
 }
 }
-}
-else {
-const err75 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(data.predictions !== undefined){
+let data34 = data.predictions;
+if(data34 && typeof data34 == "object" && !Array.isArray(data34)){
+if(data34.train === undefined){
+const err75 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data34};
 if(vErrors === null){
 vErrors = [err75];
 }
 else {
 vErrors.push(err75);
+}
+errors++;
+}
+if(data34.holdout === undefined){
+const err76 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data34};
+if(vErrors === null){
+vErrors = [err76];
+}
+else {
+vErrors.push(err76);
+}
+errors++;
+}
+for(const key4 in data34){
+if(!(((key4 === "train") || (key4 === "holdout")) || (key4 === "inputs"))){
+const err77 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.predictions,data:data34};
+if(vErrors === null){
+vErrors = [err77];
+}
+else {
+vErrors.push(err77);
+}
+errors++;
+}
+}
+if(data34.train !== undefined){
+if(!(validate102(data34.train, {instancePath:instancePath+"/predictions/train",parentData:data34,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+errors = vErrors.length;
+}
+}
+if(data34.holdout !== undefined){
+if(!(validate102(data34.holdout, {instancePath:instancePath+"/predictions/holdout",parentData:data34,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+errors = vErrors.length;
+}
+}
+if(data34.inputs !== undefined){
+let data37 = data34.inputs;
+if(Array.isArray(data37)){
+if(data37.length > 1000){
+const err78 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.predictions.properties.inputs,data:data37};
+if(vErrors === null){
+vErrors = [err78];
+}
+else {
+vErrors.push(err78);
+}
+errors++;
+}
+if(data37.length < 1){
+const err79 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.predictions.properties.inputs,data:data37};
+if(vErrors === null){
+vErrors = [err79];
+}
+else {
+vErrors.push(err79);
+}
+errors++;
+}
+const len4 = data37.length;
+for(let i4=0; i4<len4; i4++){
+let data38 = data37[i4];
+if(typeof data38 === "string"){
+if(func1(data38) < 1){
+const err80 = {instancePath:instancePath+"/predictions/inputs/" + i4,schemaPath:"#/properties/predictions/properties/inputs/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data38};
+if(vErrors === null){
+vErrors = [err80];
+}
+else {
+vErrors.push(err80);
+}
+errors++;
+}
+}
+else {
+const err81 = {instancePath:instancePath+"/predictions/inputs/" + i4,schemaPath:"#/properties/predictions/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.predictions.properties.inputs.items.type,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data38};
+if(vErrors === null){
+vErrors = [err81];
+}
+else {
+vErrors.push(err81);
+}
+errors++;
+}
+}
+}
+else {
+const err82 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.predictions.properties.inputs.type,parentSchema:schema22.properties.predictions.properties.inputs,data:data37};
+if(vErrors === null){
+vErrors = [err82];
+}
+else {
+vErrors.push(err82);
+}
+errors++;
+}
+}
+}
+else {
+const err83 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.predictions.type,parentSchema:schema22.properties.predictions,data:data34};
+if(vErrors === null){
+vErrors = [err83];
+}
+else {
+vErrors.push(err83);
+}
+errors++;
+}
+}
+if(data.parameters !== undefined){
+let data39 = data.parameters;
+if(!(((typeof data39 == "number") && (!(data39 % 1) && !isNaN(data39))) && (isFinite(data39)))){
+const err84 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.parameters.type,parentSchema:schema22.properties.parameters,data:data39};
+if(vErrors === null){
+vErrors = [err84];
+}
+else {
+vErrors.push(err84);
+}
+errors++;
+}
+if((typeof data39 == "number") && (isFinite(data39))){
+if(data39 > 1000000000000 || isNaN(data39)){
+const err85 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1000000000000},message:"must be <= 1000000000000",schema:1000000000000,parentSchema:schema22.properties.parameters,data:data39};
+if(vErrors === null){
+vErrors = [err85];
+}
+else {
+vErrors.push(err85);
+}
+errors++;
+}
+if(data39 < 1 || isNaN(data39)){
+const err86 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema22.properties.parameters,data:data39};
+if(vErrors === null){
+vErrors = [err86];
+}
+else {
+vErrors.push(err86);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err87 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(vErrors === null){
+vErrors = [err87];
+}
+else {
+vErrors.push(err87);
 }
 errors++;
 }
