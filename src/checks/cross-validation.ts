@@ -82,15 +82,18 @@ const check: Check = {
         detail: jsonRecord(detail),
       };
     }
-    const ratio = gapRatio(metrics.trainRmse, cv.cvRmse);
+    // A transformed target judged on the original scale: the back-transformed out-of-fold predictions (metrics are on that scale too).
+    const scale = context.targetScale ?? null;
+    const cvRmse = scale !== null && scale.limitsScale === 'original' ? scale.original.cvRmse : cv.cvRmse;
+    const ratio = gapRatio(metrics.trainRmse, cvRmse);
     const loo =
       cv.rowsWithLeverageOne > 0
         ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)`
         : formatNumber(cv.loocvRmse);
     return {
       value: ratio,
-      message: `${cv.k}-fold CV RMSE ${formatNumber(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,
-      metrics: jsonMetrics({ cv_rmse: cv.cvRmse, ...figures }),
+      message: `${cv.k}-fold CV RMSE ${formatNumber(cvRmse)}${scale !== null ? ` (${scale.limitsScale} scale of the target)` : ''} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,
+      metrics: jsonMetrics({ cv_rmse: cvRmse, ...figures }),
       detail: jsonRecord(detail),
     };
   },

@@ -35,7 +35,11 @@ const check: Check = {
     'Widen or thin the radial centres, lower the degree or the knot count, or add a ridge penalty, so that the curve stops jumping to each sample.',
   line: (d) => d.termsLine,
   measure(context) {
-    const spikes = measureSpikes(context.design, context.train, context.fit.coefficients);
+    // A transformed target judged on the original scale: back-transformed curve, targets as written.
+    const scale = context.targetScale ?? null;
+    const original =
+      scale !== null && scale.limitsScale === 'original' ? { kind: scale.transform, y: scale.originalRows.train.y } : undefined;
+    const spikes = measureSpikes(context.design, context.train, context.fit.coefficients, original);
     if (Number.isNaN(spikes.ratio)) {
       return {
         value: null,

@@ -21,6 +21,7 @@ import type {
   TermSpec,
   Weighting,
   InputTransform,
+  TargetTransformSpec,
   MultiRbfCenters,
 } from './types.js';
 import { readYamlFile, type YamlDocument } from './yaml-source.js';
@@ -39,6 +40,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   weighting: 'weight-and-sigma',
   spline: 'spline-settings',
   polynomial: 'polynomial-inputs',
+  targetTransform: 'target-transform',
 });
 
 /**
@@ -132,6 +134,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
       positive: raw.data.positive ?? null,
       ...weightingOf(readWeighting(doc, file, raw.data, line)),
+      ...readTargetTransform(doc, file, raw, line),
     },
     terms,
     fit: {
@@ -173,6 +176,40 @@ function readWeighting(
   if (data.weight !== undefined) return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
   if (data.sigma !== undefined) return { kind: 'sigma', column: data.sigma, line: line(['data', 'sigma']) };
   return null;
+}
+
+/**
+ * `data.target_transform` with `data.limits_scale` as `{ targetTransform }`, or nothing (so
+ * descriptors without one keep their shape).
+ * @throws InputError `target-transform` for `limits_scale` without a transform, or a transform on a classifier
+ */
+function readTargetTransform(
+  doc: YamlDocument,
+  file: string,
+  raw: RawDescriptor,
+  line: (path: (string | number)[]) => number,
+): { targetTransform?: TargetTransformSpec } {
+  const { target_transform: kind, limits_scale: scale } = raw.data;
+  if (kind === undefined) {
+    if (scale === undefined) return {};
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.targetTransform,
+      ['data', 'limits_scale'],
+      '`limits_scale` chooses between the original and the transformed target, and `data.target_transform` is not given; expected `target_transform: log | log1p | sqrt` or no `limits_scale`',
+    );
+  }
+  if (raw.task === 'classification') {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.targetTransform,
+      ['data', 'target_transform'],
+      "a classifier's target is two classes, which no transform applies to; expected `target_transform` only with `task: regression`",
+    );
+  }
+  return { targetTransform: { kind, limitsScale: scale ?? 'original', line: line(['data', 'target_transform']) } };
 }
 
 /** `{ weighting }` when there is one, else nothing (so unweighted descriptors keep their shape). */
@@ -418,6 +455,8 @@ interface RawDescriptor {
     positive?: string;
     weight?: string;
     sigma?: string;
+    target_transform?: TargetTransformSpec['kind'];
+    limits_scale?: TargetTransformSpec['limitsScale'];
     separator?: DataFormat['separator'];
     decimal?: DataFormat['decimal'];
     missing?: DataFormat['missing'];

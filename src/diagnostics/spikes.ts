@@ -24,6 +24,7 @@ import { predictRows } from '../design/blocks.js';
 import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
 import { inputGrid } from './swing.js';
+import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
 
 /** One input's figures. */
 export interface SpikeFigures {
@@ -51,8 +52,16 @@ export const SPIKE_MAX_ROWS = 20_000;
  * @param design the fitted design
  * @param train training rows (inputs in `design.inputs` order)
  * @param coefficients fitted coefficients (length p)
+ * @param original a model fitted on t = g(y) judged on the original scale: the transform (the
+ *   curve is back-transformed) and the training targets as written (the data variation is theirs);
+ *   default none (the fit's own scale)
  */
-export function measureSpikes(design: Design, train: Rows, coefficients: ArrayLike<number>): Spikes {
+export function measureSpikes(
+  design: Design,
+  train: Rows,
+  coefficients: ArrayLike<number>,
+  original?: { kind: TargetTransformKind; y: Float64Array },
+): Spikes {
   const n = train.rows;
   const medians = train.inputs.map((col) => columnMedian(col, n));
   const perInput: SpikeFigures[] = [];
@@ -65,8 +74,9 @@ export function measureSpikes(design: Design, train: Rows, coefficients: ArrayLi
     if (grid.length < 2) return;
     const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
     const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
+    if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
     const curveVariation = totalVariation(curve, curve.length);
-    const dataVariation = targetVariation(train.inputs[c], train.y, n);
+    const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n);
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
     perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
     if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {

@@ -18,6 +18,8 @@ import type { FitResult } from '../fit/index.js';
 import type { RepoReader } from '../repo/types.js';
 import { foldPass, refinePass, scoringPass } from './passes.js';
 import { planModel } from './plan.js';
+import type { TargetScale } from '../diagnostics/target-scale.js';
+import { withTargetScale } from './target-scale.js';
 
 /** A fitted model with everything checks and reporters read. */
 export interface FittedModel {
@@ -36,6 +38,8 @@ export interface FittedModel {
   foldFactors: FoldFactors;
   /** The descriptor's shipped coefficients scored on the same rows; null when it ships none. */
   shipped: ShippedScore | null;
+  /** With `data.target_transform`: figures on both scales (run/target-scale.ts); absent otherwise. */
+  targetScale?: TargetScale;
 }
 
 /**
@@ -50,9 +54,9 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   const fit = refinePass(plan, first.fit);
   const scored = scoringPass(plan, fit, first.foldFactors);
   if (descriptor.fit.refit === false)
-    return scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
+    return withTargetScale(plan, scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors));
   const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
-  return {
+  return withTargetScale(plan, {
     descriptor,
     design,
     fit,
@@ -64,7 +68,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     crossValidation: scored.crossValidation,
     foldFactors: first.foldFactors,
     shipped: shippedScore(descriptor, design, tables, fit),
-  };
+  });
 }
 
 /**
