@@ -17,6 +17,7 @@ import { fitCurveChart } from './svg/fit-curve.js';
 import { partialCurveChart } from './svg/partial-curve.js';
 import { predictedActualChart } from './svg/predicted-actual.js';
 import { residualsChart } from './svg/residuals.js';
+import { TARGET_SCALE_HEADINGS, targetScaleRows, targetScaleSentence } from './target-scale-text.js';
 
 /** Options of the HTML report. */
 export interface HtmlOptions {
@@ -193,6 +194,16 @@ function modelSection(m: ModelResult, index: number): string {
     `<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${m.parameters}</b></span>` +
       `<span>training RMSE <b>${num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${num(x?.gap_ratio)}</b></span></p>`,
   );
+  const scale = targetScaleSentence(m);
+  if (scale !== null) {
+    const head = TARGET_SCALE_HEADINGS.map((h, j) => `<th${j > 0 ? ' class="num"' : ''}>${escapeHtml(h)}</th>`).join('');
+    const body = targetScaleRows(m)
+      .map((row) => `<tr>${row.map((c, j) => `<td${j > 0 ? ' class="num"' : ''}>${escapeHtml(c)}</td>`).join('')}</tr>`)
+      .join('');
+    parts.push(
+      `<p class="note">${escapeHtml(scale)}.</p><table class="target-scale"><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table>`,
+    );
+  }
   parts.push('<h3>Checks</h3>', checksTable(m));
   if (m.charts) {
     const list = charts(m.charts, id);

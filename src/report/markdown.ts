@@ -11,6 +11,7 @@ import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '
 import { formatNumber } from '../core/format.js';
 import { escapeMarkdown } from './escape.js';
 import { countsText, limitText, verdictHeadline } from './wording.js';
+import { TARGET_SCALE_HEADINGS, targetScaleRows, targetScaleSentence } from './target-scale-text.js';
 
 /** Options of the Markdown report. */
 export interface MarkdownOptions {
@@ -95,6 +96,12 @@ export function modelDetail(m: ModelResult): string[] {
   }
   const shown = m.checks.filter((c) => c.status === 'fail' || c.status === 'warn');
   if (isClassifier(m)) lines.push(text(classifierLine(m)), '');
+  const scale = targetScaleSentence(m);
+  if (scale !== null) {
+    lines.push(`${scale}:`, '', `| ${TARGET_SCALE_HEADINGS.join(' | ')} |`, '| --- | ---: | ---: | ---: | ---: | ---: | ---: |');
+    for (const row of targetScaleRows(m)) lines.push(`| ${row.join(' | ')} |`);
+    lines.push('');
+  }
   lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   for (const c of shown) lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);
   lines.push('');
