@@ -39,7 +39,10 @@ const check: Check = {
   p for least squares of full rank.
 - Metrics: \`cv_rmse\`, \`loocv_rmse\`, \`gcv\`, \`effective_df\`, \`effective_df_per_sample\`, \`cv_folds\`.
   Detail: \`folds\`, \`fold_order\`, \`seed\`, \`fold_rows\`, \`fold_rmse\`, \`cv_rmse\`, \`loocv_rmse\`, \`press\`,
-  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
+  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.
+- With \`data.target_transform\` judged on the original scale (the default): the figure and metric
+  \`cv_rmse\` back-transform each row's out-of-fold prediction; the detail, leave-one-out and GCV stay on
+  the transformed scale (docs/fitting.md).`,
   advice:
     'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,

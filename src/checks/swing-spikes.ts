@@ -30,7 +30,10 @@ const check: Check = {
   figure is lenient there.
 - Metric \`swing_spikes\`. Detail: \`worst\` (the input) and \`inputs\`:
   \`[{ input, curve_variation, data_variation, ratio }]\`. The swing curves in the \`swing\` outcome show
-  the spikes.`,
+  the spikes; when the check warns or fails, the HTML charts mark the intervals between neighbouring
+  training values where the curve goes up and down more than the limit allows (docs/reports.md).
+- A model with \`data.target_transform\` is judged on the scale \`data.limits_scale\` names: on the
+  original one (the default) the curve is back-transformed and TV_y is that of the target as written.`,
   advice:
     'Widen or thin the radial centres, lower the degree or the knot count, or add a ridge penalty, so that the curve stops jumping to each sample.',
   line: (d) => d.termsLine,

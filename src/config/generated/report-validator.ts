@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"scaleFigures":{"description":"Error figures of one scale of a transformed target.","type":"object","required":["train_rmse","holdout_rmse","train_mae","holdout_mae","train_r2","holdout_r2","gap_ratio","cv_rmse"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"cv_rmse":{"description":"Pooled k-fold cross-validation RMSE; null without cross-validation.","anyOf":[{"type":"null"},{"$ref":"#/$defs/jsonNumber"}]},"train_chi_square":{"description":"Reduced chi-square of the training rows (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"},"holdout_chi_square":{"description":"Chi-square of the hold-out rows per row (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"}}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"scaleFigures":{"description":"Error figures of one scale of a transformed target.","type":"object","required":["train_rmse","holdout_rmse","train_mae","holdout_mae","train_r2","holdout_r2","gap_ratio","cv_rmse"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"cv_rmse":{"description":"Pooled k-fold cross-validation RMSE; null without cross-validation.","anyOf":[{"type":"null"},{"$ref":"#/$defs/jsonNumber"}]},"train_chi_square":{"description":"Reduced chi-square of the training rows (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"},"holdout_chi_square":{"description":"Chi-square of the hold-out rows per row (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"}}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1300,7 +1300,7 @@ return errors === 0;
 }
 validate114.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema32 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
+const schema32 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
 const schema33 = {"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}};
 
 function validate128(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -1610,30 +1610,31 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.base !== undefined){
-let data13 = data.base;
+if(data.spikes !== undefined){
+let data13 = data.spikes;
 const _errs22 = errors;
 if(errors === _errs22){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
-if((((data13.commit === undefined) && (missing2 = "commit")) || ((data13.x === undefined) && (missing2 = "x"))) || ((data13.y === undefined) && (missing2 = "y"))){
-validate127.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+if(((data13.limit === undefined) && (missing2 = "limit")) || ((data13.intervals === undefined) && (missing2 = "intervals"))){
+validate127.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs24 = errors;
 for(const key3 in data13){
-if(!(((key3 === "commit") || (key3 === "x")) || (key3 === "y"))){
-validate127.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+if(!(((key3 === "limit") || (key3 === "intervals")) || (key3 === "left_out"))){
+validate127.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
 if(_errs24 === errors){
-if(data13.commit !== undefined){
+if(data13.limit !== undefined){
+let data14 = data13.limit;
 const _errs25 = errors;
-if(typeof data13.commit !== "string"){
-validate127.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+if(!((typeof data14 == "number") && (isFinite(data14)))){
+validate127.errors = [{instancePath:instancePath+"/spikes/limit",schemaPath:"#/properties/spikes/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid4 = _errs25 === errors;
@@ -1642,11 +1643,103 @@ else {
 var valid4 = true;
 }
 if(valid4){
-if(data13.x !== undefined){
+if(data13.intervals !== undefined){
+let data15 = data13.intervals;
 const _errs27 = errors;
-if(!(validate131(data13.x, {instancePath:instancePath+"/base/x",parentData:data13,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate131.errors : vErrors.concat(validate131.errors);
+if(errors === _errs27){
+if(Array.isArray(data15)){
+var valid5 = true;
+const len1 = data15.length;
+for(let i1=0; i1<len1; i1++){
+let data16 = data15[i1];
+const _errs29 = errors;
+if(errors === _errs29){
+if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
+let missing3;
+if(((((data16.from === undefined) && (missing3 = "from")) || ((data16.to === undefined) && (missing3 = "to"))) || ((data16.variation === undefined) && (missing3 = "variation"))) || ((data16.allowed === undefined) && (missing3 = "allowed"))){
+validate127.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+return false;
+}
+else {
+const _errs31 = errors;
+for(const key4 in data16){
+if(!((((key4 === "from") || (key4 === "to")) || (key4 === "variation")) || (key4 === "allowed"))){
+validate127.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs31 === errors){
+if(data16.from !== undefined){
+let data17 = data16.from;
+const _errs32 = errors;
+if(!((typeof data17 == "number") && (isFinite(data17)))){
+validate127.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/from",schemaPath:"#/properties/spikes/properties/intervals/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid6 = _errs32 === errors;
+}
+else {
+var valid6 = true;
+}
+if(valid6){
+if(data16.to !== undefined){
+let data18 = data16.to;
+const _errs34 = errors;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+validate127.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/to",schemaPath:"#/properties/spikes/properties/intervals/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid6 = _errs34 === errors;
+}
+else {
+var valid6 = true;
+}
+if(valid6){
+if(data16.variation !== undefined){
+const _errs36 = errors;
+if(!(validate119(data16.variation, {instancePath:instancePath+"/spikes/intervals/" + i1+"/variation",parentData:data16,parentDataProperty:"variation",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
+}
+var valid6 = _errs36 === errors;
+}
+else {
+var valid6 = true;
+}
+if(valid6){
+if(data16.allowed !== undefined){
+const _errs37 = errors;
+if(!(validate119(data16.allowed, {instancePath:instancePath+"/spikes/intervals/" + i1+"/allowed",parentData:data16,parentDataProperty:"allowed",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+errors = vErrors.length;
+}
+var valid6 = _errs37 === errors;
+}
+else {
+var valid6 = true;
+}
+}
+}
+}
+}
+}
+}
+else {
+validate127.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid5 = _errs29 === errors;
+if(!valid5){
+break;
+}
+}
+}
+else {
+validate127.errors = [{instancePath:instancePath+"/spikes/intervals",schemaPath:"#/properties/spikes/properties/intervals/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
 }
 var valid4 = _errs27 === errors;
 }
@@ -1654,16 +1747,96 @@ else {
 var valid4 = true;
 }
 if(valid4){
-if(data13.y !== undefined){
-const _errs28 = errors;
-if(!(validate118(data13.y, {instancePath:instancePath+"/base/y",parentData:data13,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
-errors = vErrors.length;
+if(data13.left_out !== undefined){
+let data21 = data13.left_out;
+const _errs38 = errors;
+if(!(((typeof data21 == "number") && (!(data21 % 1) && !isNaN(data21))) && (isFinite(data21)))){
+validate127.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
+return false;
 }
-var valid4 = _errs28 === errors;
+if(errors === _errs38){
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 < 1 || isNaN(data21)){
+validate127.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
+return false;
+}
+}
+}
+var valid4 = _errs38 === errors;
 }
 else {
 var valid4 = true;
+}
+}
+}
+}
+}
+}
+else {
+validate127.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs22 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.base !== undefined){
+let data22 = data.base;
+const _errs40 = errors;
+if(errors === _errs40){
+if(data22 && typeof data22 == "object" && !Array.isArray(data22)){
+let missing4;
+if((((data22.commit === undefined) && (missing4 = "commit")) || ((data22.x === undefined) && (missing4 = "x"))) || ((data22.y === undefined) && (missing4 = "y"))){
+validate127.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"}];
+return false;
+}
+else {
+const _errs42 = errors;
+for(const key5 in data22){
+if(!(((key5 === "commit") || (key5 === "x")) || (key5 === "y"))){
+validate127.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs42 === errors){
+if(data22.commit !== undefined){
+const _errs43 = errors;
+if(typeof data22.commit !== "string"){
+validate127.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid7 = _errs43 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data22.x !== undefined){
+const _errs45 = errors;
+if(!(validate131(data22.x, {instancePath:instancePath+"/base/x",parentData:data22,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate131.errors : vErrors.concat(validate131.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs45 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data22.y !== undefined){
+const _errs46 = errors;
+if(!(validate118(data22.y, {instancePath:instancePath+"/base/y",parentData:data22,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate118.errors : vErrors.concat(validate118.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs46 === errors;
+}
+else {
+var valid7 = true;
 }
 }
 }
@@ -1675,10 +1848,11 @@ validate127.errors = [{instancePath:instancePath+"/base",schemaPath:"#/propertie
 return false;
 }
 }
-var valid0 = _errs22 === errors;
+var valid0 = _errs40 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }
