@@ -11,7 +11,7 @@
  *   range (201 even points plus 8 in each gap between neighbouring distinct values: the points
  *   `swing` scans; see {@link inputGrid});
  * - data variation TV_y = sum_j |ybar_(j+1) - ybar_j| over the input's distinct training values in
- *   ascending order, ybar_j the mean target of the rows at the j-th value (above 20,000 rows, those
+ *   ascending order, ybar_j the mean target (weighted: sum w y / sum w) of the rows at the j-th value (above 20,000 rows, those
  *   of an even-stride sample of 20,000 rows);
  * - ratio TV_f / TV_y.
  * The figure is the largest ratio over the inputs. A curve that passes through every sample has
@@ -50,7 +50,8 @@ export const SPIKE_MAX_ROWS = 20_000;
 /**
  * Measures the spike figure of a fitted model.
  * @param design the fitted design
- * @param train training rows (inputs in `design.inputs` order)
+ * @param train training rows (inputs in `design.inputs` order; with `weights`, the data variation
+ *   uses weighted means, see {@link meanTargets})
  * @param coefficients fitted coefficients (length p)
  * @param original a model fitted on t = g(y) judged on the original scale: the transform (the
  *   curve is back-transformed) and the training targets as written (the data variation is theirs);
@@ -58,9 +59,9 @@ export const SPIKE_MAX_ROWS = 20_000;
  */
 export function measureSpikes(
   design: Design,
-  train: Rows,
+  train: Rows & { weights?: Float64Array },
   coefficients: ArrayLike<number>,
-  original?: { kind: TargetTransformKind; y: Float64Array },
+  original?: { kind: TargetTransformKind; y: Float64Array; weights?: Float64Array },
 ): Spikes {
   const n = train.rows;
   const medians = train.inputs.map((col) => columnMedian(col, n));
@@ -76,7 +77,7 @@ export function measureSpikes(
     const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
     if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
     const curveVariation = totalVariation(curve, curve.length);
-    const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n);
+    const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
     perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
     if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
@@ -94,19 +95,9 @@ function totalVariation(v: Float64Array, m: number): number {
   return s;
 }
 
-/** Total variation of the mean target over the input's distinct values in ascending order. */
-function targetVariation(x: Float64Array, y: Float64Array, n: number): number {
-  const m = Math.min(n, SPIKE_MAX_ROWS);
-  const rows = Array.from({ length: m }, (_, t) => (m === n ? t : Math.floor((t * n) / m)));
-  rows.sort((a, b) => x[a] - x[b]);
-  const means: number[] = [];
-  for (let s = 0; s < m; ) {
-    let e = s;
-    let sum = 0;
-    while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
-    means.push(sum / (e - s));
-    s = e;
-  }
+/** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
+function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): number {
+  const { means } = meanTargets(x, y, n, weights);
   return totalVariation(Float64Array.from(means), means.length);
 }
 
@@ -149,15 +140,15 @@ export const SPIKE_POINTS_PER_GAP = 8;
  */
 export function spikeIntervals(
   design: Design,
-  train: Rows,
+  train: Rows & { weights?: Float64Array },
   coefficients: ArrayLike<number>,
   c: number,
   limit: number,
-  original?: { kind: TargetTransformKind; y: Float64Array },
+  original?: { kind: TargetTransformKind; y: Float64Array; weights?: Float64Array },
 ): SpikeInterval[] {
   const n = train.rows;
   if (!(limit > 0) || c < 0 || c >= design.inputs.length) return [];
-  const { values, means } = meanTargets(train.inputs[c], original?.y ?? train.y, n);
+  const { values, means } = meanTargets(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
   const gaps = values.length - 1;
   if (gaps < 1) return [];
   let dataVariation = 0;
@@ -183,8 +174,12 @@ export function spikeIntervals(
   return out;
 }
 
-/** The distinct values of x ascending (of an even-stride sample above {@link SPIKE_MAX_ROWS} rows) and the mean y at each. */
-function meanTargets(x: Float64Array, y: Float64Array, n: number): { values: number[]; means: number[] } {
+/**
+ * The distinct values of x ascending (of an even-stride sample above {@link SPIKE_MAX_ROWS} rows)
+ * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
+ * value whose rows all weigh 0 is left out: it takes no part in the fit).
+ */
+function meanTargets(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
   const rows = Array.from({ length: m }, (_, t) => (m === n ? t : Math.floor((t * n) / m)));
   rows.sort((a, b) => x[a] - x[b]);
@@ -193,10 +188,19 @@ function meanTargets(x: Float64Array, y: Float64Array, n: number): { values: num
   for (let s = 0; s < m; ) {
     let e = s;
     let sum = 0;
-    while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
-    if (Number.isFinite(x[rows[s]])) {
+    let total = 0;
+    if (weights === undefined) {
+      while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
+      total = e - s;
+    } else {
+      for (; e < m && x[rows[e]] === x[rows[s]]; e++) {
+        sum += weights[rows[e]] * y[rows[e]];
+        total += weights[rows[e]];
+      }
+    }
+    if (Number.isFinite(x[rows[s]]) && total > 0) {
       values.push(x[rows[s]]);
-      means.push(sum / (e - s));
+      means.push(sum / total);
     }
     s = e;
   }

@@ -125,7 +125,8 @@ function spikeMarks(model: FittedModel, checks: readonly CheckResult[], c: numbe
   const name = model.design.inputs[c];
   if (model.design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return null;
   const scale = originalScale(model);
-  const original = scale !== null ? { kind: scale.transform, y: scale.originalRows.train.y } : undefined;
+  const original =
+    scale !== null ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights } : undefined;
   const found = spikeIntervals(model.design, model.tables.train, model.fit.coefficients, c, limit, original);
   if (found.length === 0) return null;
   const kept =
