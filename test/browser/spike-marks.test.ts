@@ -67,7 +67,7 @@ describe.skipIf(missing !== null)(`spike bars in Chromium${skipNote(missing)}`, 
     const geometry = await chart.evaluate((svg) => {
       // The axes path runs up the left edge and along the bottom: its box is the plot area's.
       const plot = (svg.querySelector('g.axes path') as SVGPathElement).getBoundingClientRect();
-      const bars = [...svg.querySelectorAll('rect.spike')].map((e) => {
+      const bars = Array.from(svg.querySelectorAll('rect.spike'), (e) => {
         const b = e.getBoundingClientRect();
         return { left: b.left, right: b.right, top: b.top, bottom: b.bottom, from: Number(e.getAttribute('data-from')) };
       });
