@@ -95,7 +95,7 @@ const check: Check = {
         : formatNumber(cv.loocvRmse);
     return {
       value: ratio,
-      message: `${cv.k}-fold CV RMSE ${formatNumber(cvRmse)}${scale !== null ? ` (${scale.limitsScale} scale of the target)` : ''} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,
+      message: `${cv.k}-fold CV RMSE ${formatNumber(cvRmse)}${scale !== null ? ` on the ${scale.limitsScale} scale of the target` : ''} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,
       metrics: jsonMetrics({ cv_rmse: cvRmse, ...figures }),
       detail: jsonRecord(detail),
     };
