@@ -7,8 +7,27 @@
 import { backTransform, originalScaleCvRmse, scaleFigures, type TargetScale } from '../diagnostics/target-scale.js';
 import type { TargetScaleFigures, TargetScaleResult } from '../result/result.js';
 import { jsonNumber } from '../result/result.js';
-import type { FittedModel } from './fit-model.js';
+import type { CoreMetrics } from '../checks/index.js';
+import type { ModelTables } from '../data/load-model-data.js';
+import type { Design } from '../design/design-matrix.js';
+import type { CrossValidation, FoldFactors } from '../diagnostics/cross-validation.js';
+import type { Folds } from '../diagnostics/folds.js';
+import type { FitResult } from '../fit/index.js';
 import type { ModelPlan } from './plan.js';
+
+/** What {@link withTargetScale} reads of a fitted model (fit-model.ts's `FittedModel` has it all). */
+export interface ScaledModel {
+  design: Design;
+  fit: FitResult;
+  tables: ModelTables;
+  metrics: CoreMetrics;
+  trainPredictions: Float64Array;
+  holdoutPredictions: Float64Array;
+  folds: Folds;
+  crossValidation: CrossValidation | null;
+  foldFactors: FoldFactors;
+  targetScale?: TargetScale;
+}
 
 /**
  * The model with `targetScale` set and its metrics on the limits' scale; the model unchanged
@@ -16,7 +35,7 @@ import type { ModelPlan } from './plan.js';
  * @param plan the model's plan (its original targets)
  * @param model the fitted model, with figures on the transformed scale
  */
-export function withTargetScale(plan: ModelPlan, model: FittedModel): FittedModel {
+export function withTargetScale<M extends ScaledModel>(plan: ModelPlan, model: M): M {
   const spec = plan.descriptor.data.targetTransform ?? null;
   const original = plan.originalTargets ?? null;
   if (spec === null || original === null) return model;
