@@ -101,3 +101,30 @@ function split(n, make) {
   write('cooling-train.csv', ['hours', 'must_c'], tr);
   write('cooling-holdout.csv', ['hours', 'must_c'], ho);
 }
+
+// press-batches: juice yield against press pressure; each row is the mean of several pressings,
+// so its weight is the number of pressings (`data.weight`): the noise of a mean shrinks with it.
+{
+  const u = uniform(601);
+  const e = normal(uniform(602));
+  const [tr, ho] = split(96, () => {
+    const bar = 1 + 7 * u();
+    const batches = 1 + Math.floor(12 * u());
+    return [bar, batches, 52 + 6.5 * bar - 0.45 * bar * bar + (1.8 / Math.sqrt(batches)) * e()];
+  });
+  write('press-train.csv', ['pressure_bar', 'batches', 'yield_pct'], tr);
+  write('press-holdout.csv', ['pressure_bar', 'batches', 'yield_pct'], ho);
+}
+
+// haze-storage: haze of stored cider grows by a roughly constant factor a week, with a
+// multiplicative noise: a model of log(haze) (`data.target_transform: log`).
+{
+  const u = uniform(701);
+  const e = normal(uniform(702));
+  const [tr, ho] = split(100, () => {
+    const weeks = 40 * u();
+    return [weeks, Math.exp(0.4 + 0.085 * weeks - 0.0006 * weeks * weeks + 0.08 * e())];
+  });
+  write('haze-train.csv', ['weeks', 'haze_ntu'], tr);
+  write('haze-holdout.csv', ['weeks', 'haze_ntu'], ho);
+}

@@ -23,17 +23,24 @@ const check: Check = {
   noise, not only the signal (it overfits), or the sigmas are too large.
 - The same sum over the hold-out rows divided by their count (no parameter was fitted to them) is
   reported as metric \`holdout_chi_square\`; the training figure as \`train_chi_square\`. Detail:
-  \`dof\`, \`holdout_rows\`.`,
+  \`dof\`, \`holdout_rows\`.
+- With \`data.target_transform\`: on the original scale (the default \`limits_scale\`) y against the
+  back-transformed predictions with sigma as written; on the transformed scale g(y) against the fit
+  with sigma_t = |g'(y)| sigma (the delta method; docs/fitting.md).`,
   advice:
     'Far below 1: simplify the model (it fits the noise) or check that the sigmas are not overstated; far above 1: the model misses structure or the sigmas are understated.',
   line: (d) => (d.data.weighting?.kind === 'sigma' ? d.data.weighting.line : d.data.lines.target),
-  measure({ train, holdout, predictions, design }) {
+  measure({ train, holdout, predictions, design, targetScale }) {
     if (train.sigma === undefined || holdout.sigma === undefined) {
       return { value: null, reason: 'not-applicable', message: 'the model gives no `data.sigma`, so there is no chi-square to compute' };
     }
     const dof = train.rows - design.p;
-    const value = reducedChiSquare(train.y, predictions.train, train.sigma, train.rows, dof);
-    const held = reducedChiSquare(holdout.y, predictions.holdout, holdout.sigma, holdout.rows, holdout.rows);
+    // A transformed target: the figures of the scale the limits judge (data/target-transform.ts says how sigma transforms).
+    const scaled = targetScale ? targetScale[targetScale.limitsScale] : null;
+    const value = scaled ? scaled.trainChiSquare : reducedChiSquare(train.y, predictions.train, train.sigma, train.rows, dof);
+    const held = scaled
+      ? scaled.holdoutChiSquare
+      : reducedChiSquare(holdout.y, predictions.holdout, holdout.sigma, holdout.rows, holdout.rows);
     if (Number.isNaN(value)) {
       return {
         value: null,

@@ -44,6 +44,10 @@ const check: Check = {
 - Figure: the current setting's k-fold CV RMSE / the suggested setting's (1 or less when the current
   setting is as good). The default warns above 1.5: the suggestion is then clearly better,
   not only simpler; a notice alone is given otherwise, and the check never fails by default.
+- Weighted models (\`data.weight\`, \`data.sigma\`): every setting is the weighted fit (rows scaled by
+  sqrt(w), weights divided by their mean over the rows used), and the errors are weighted: the fold
+  MSEs are sum w r^2 over the fold divided by its rows, cv_rmse = sqrt(sum w r^2 / sum w) (Björck,
+  Numerical Methods for Least Squares Problems, 1996, section 4.4.1).
 - Above 50,000 training rows a degree or width sweep uses a subsample of 50,000 rows at an even
   stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row.
 - Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\`,

@@ -39,7 +39,10 @@ const check: Check = {
   p for least squares of full rank.
 - Metrics: \`cv_rmse\`, \`loocv_rmse\`, \`gcv\`, \`effective_df\`, \`effective_df_per_sample\`, \`cv_folds\`.
   Detail: \`folds\`, \`fold_order\`, \`seed\`, \`fold_rows\`, \`fold_rmse\`, \`cv_rmse\`, \`loocv_rmse\`, \`press\`,
-  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.`,
+  \`gcv\`, \`effective_df\`, \`parameters\`, \`max_leverage\`, \`rows_with_leverage_one\`.
+- With \`data.target_transform\` judged on the original scale (the default): the figure and metric
+  \`cv_rmse\` back-transform each row's out-of-fold prediction; the detail, leave-one-out and GCV stay on
+  the transformed scale (docs/fitting.md).`,
   advice:
     'Use fewer or wider basis functions, a lower degree or a larger ridge penalty until the cross-validation error comes close to the training error.',
   line: (d) => d.fit.line,
@@ -82,15 +85,18 @@ const check: Check = {
         detail: jsonRecord(detail),
       };
     }
-    const ratio = gapRatio(metrics.trainRmse, cv.cvRmse);
+    // A transformed target judged on the original scale: the back-transformed out-of-fold predictions (metrics are on that scale too).
+    const scale = context.targetScale ?? null;
+    const cvRmse = scale !== null && scale.limitsScale === 'original' ? scale.original.cvRmse : cv.cvRmse;
+    const ratio = gapRatio(metrics.trainRmse, cvRmse);
     const loo =
       cv.rowsWithLeverageOne > 0
         ? `infinite (${cv.rowsWithLeverageOne} rows with leverage 1: the fit interpolates them)`
         : formatNumber(cv.loocvRmse);
     return {
       value: ratio,
-      message: `${cv.k}-fold CV RMSE ${formatNumber(cv.cvRmse)} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,
-      metrics: jsonMetrics({ cv_rmse: cv.cvRmse, ...figures }),
+      message: `${cv.k}-fold CV RMSE ${formatNumber(cvRmse)}${scale !== null ? ` on the ${scale.limitsScale} scale of the target` : ''} (${folds.order}${folds.order === 'shuffled' ? `, seed ${folds.seed}` : ''}) is ${formatNumber(ratio)} times the training RMSE ${formatNumber(metrics.trainRmse)}; leave-one-out RMSE ${loo}, GCV ${formatNumber(cv.gcv)}, effective degrees of freedom ${formatNumber(effectiveDf)} of ${design.p} parameters`,
+      metrics: jsonMetrics({ cv_rmse: cvRmse, ...figures }),
       detail: jsonRecord(detail),
     };
   },

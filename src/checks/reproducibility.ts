@@ -29,7 +29,7 @@ const check: Check = {
     'Refit the model from the committed data and ship the new coefficients, or restore the data and terms the shipped coefficients came from.',
   line: (d) => d.coefficientsLine ?? d.nameLine,
   measureClassifier: classifierReproducibility,
-  measure({ shipped, predictions, holdout, metrics, descriptor }) {
+  measure({ shipped, predictions, holdout, metrics, descriptor, targetScale }) {
     const scoreOnly = skipWhenScoreOnly(descriptor);
     if (scoreOnly) return scoreOnly;
     if (shipped === null) return { value: null, reason: 'no-coefficients', message: 'the descriptor ships no coefficients' };
@@ -48,10 +48,12 @@ const check: Check = {
     const spread = hi - lo;
     const value = spread > 0 ? diff / spread : diff === 0 ? 0 : Infinity;
     const shippedRmse = shipped.holdout.rmse;
+    // Shipped and refit are compared on the fit's own scale (a transformed target's too).
+    const refitRmse = targetScale ? targetScale.transformed.holdoutRmse : metrics.holdoutRmse;
     const coefDiff = shipped.maxCoefficientDifference;
     return {
       value,
-      message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${linesText(holdout, [holdout.lines[row]])}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(metrics.holdoutRmse)}`,
+      message: `shipped and refit predictions differ by up to ${formatNumber(diff)} on the hold-out rows (${formatNumber(value * 100)} % of the training target's range ${formatNumber(spread)}${row >= 0 ? `, ${linesText(holdout, [holdout.lines[row]])}` : ''}); hold-out RMSE shipped ${formatNumber(shippedRmse)}, refit ${formatNumber(refitRmse)}`,
       metrics: { shipped_prediction_difference: jsonNumber(value) },
       detail: jsonRecord({
         max_prediction_difference: diff,
@@ -59,8 +61,8 @@ const check: Check = {
         at_line: row >= 0 ? placeOfLine(holdout, holdout.lines[row]).line : null,
         ...(holdout.parts !== undefined && row >= 0 ? { at_file: placeOfLine(holdout, holdout.lines[row]).file } : {}),
         shipped_holdout_rmse: shippedRmse,
-        refit_holdout_rmse: metrics.holdoutRmse,
-        holdout_rmse_ratio: shippedRmse / metrics.holdoutRmse,
+        refit_holdout_rmse: refitRmse,
+        holdout_rmse_ratio: shippedRmse / refitRmse,
         max_coefficient_difference: coefDiff,
       }),
     };

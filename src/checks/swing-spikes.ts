@@ -24,18 +24,27 @@ const check: Check = {
 - Figure, for each input with two distinct training values (the other inputs at their training medians,
   as the swing curves): TV_f = sum |f(g_(k+1)) - f(g_k)| over the points \`swing\` scans inside the
   training range, TV_y = sum |ybar_(j+1) - ybar_j| over the input's distinct training values ascending
-  (ybar_j the mean target at the j-th value; above 20,000 rows an even-stride sample of 20,000), and
+  (ybar_j the mean target at the j-th value, weighted sum w y / sum w for weighted models; above 20,000 rows an even-stride sample of 20,000), and
   the ratio TV_f / TV_y; the figure is the largest ratio. Total variation: the sum of absolute
   increments (Jordan 1881). With several inputs TV_y also holds the other inputs' effects, so the
   figure is lenient there.
 - Metric \`swing_spikes\`. Detail: \`worst\` (the input) and \`inputs\`:
   \`[{ input, curve_variation, data_variation, ratio }]\`. The swing curves in the \`swing\` outcome show
-  the spikes.`,
+  the spikes; when the check warns or fails, the HTML charts mark the intervals between neighbouring
+  training values where the curve goes up and down more than the limit allows (docs/reports.md).
+- A model with \`data.target_transform\` is judged on the scale \`data.limits_scale\` names: on the
+  original one (the default) the curve is back-transformed and TV_y is that of the target as written.`,
   advice:
     'Widen or thin the radial centres, lower the degree or the knot count, or add a ridge penalty, so that the curve stops jumping to each sample.',
   line: (d) => d.termsLine,
   measure(context) {
-    const spikes = measureSpikes(context.design, context.train, context.fit.coefficients);
+    // A transformed target judged on the original scale: back-transformed curve, targets as written.
+    const scale = context.targetScale ?? null;
+    const original =
+      scale !== null && scale.limitsScale === 'original'
+        ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights }
+        : undefined;
+    const spikes = measureSpikes(context.design, context.train, context.fit.coefficients, original);
     if (Number.isNaN(spikes.ratio)) {
       return {
         value: null,

@@ -11,6 +11,7 @@ import type { FitResult } from '../fit/index.js';
 import type { ModelData } from '../data/model-data.js';
 import type { ModelAnalyses } from '../diagnostics/analyses.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
+import type { TargetScale } from '../diagnostics/target-scale.js';
 import type { CheckStatus, ModelResult } from '../result/result.js';
 
 /** Figures of the refit that every check may read (plain numbers; non-finite allowed). */
@@ -52,6 +53,11 @@ export interface CheckContext {
   predictions: { train: Float64Array; holdout: Float64Array };
   /** The descriptor's shipped coefficients scored on the same rows; null when it ships none. */
   shipped: ShippedScore | null;
+  /**
+   * A model fitted on a transformed target (`data.target_transform`): its figures on both scales.
+   * `metrics`' error figures are then those of `targetScale.limitsScale`. Absent or null otherwise.
+   */
+  targetScale?: TargetScale | null;
 }
 
 /** What a check measured. `value: null` means the check does not apply (status skipped). */

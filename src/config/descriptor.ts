@@ -21,6 +21,7 @@ import type {
   TermSpec,
   Weighting,
   InputTransform,
+  TargetTransformSpec,
   MultiRbfCenters,
   PredictionSource,
   PredictionsSpec,
@@ -42,6 +43,7 @@ export const DESCRIPTOR_ERROR = Object.freeze({
   spline: 'spline-settings',
   polynomial: 'polynomial-inputs',
   predictions: 'predictions-form',
+  targetTransform: 'target-transform',
 });
 
 /**
@@ -131,6 +133,7 @@ export function descriptorFromDocument(doc: YamlDocument, file: string, settings
       ...(raw.data.split ? { split: { ...raw.data.split, line: line(['data', 'split']) } } : {}),
       positive: raw.data.positive ?? null,
       ...weightingOf(readWeighting(doc, file, raw.data, line)),
+      ...readTargetTransform(doc, file, raw, line),
     },
     terms,
     fit: {
@@ -184,6 +187,15 @@ function readPredictions(
       DESCRIPTOR_ERROR.predictions,
       ['fit', 'refit_compare'],
       '`refit_compare` reports a refit beside the shipped coefficients scored as shipped; expected `refit: false` with it (a model that is refitted already reports its shipped coefficients under `shipped`)',
+    );
+  }
+  if (raw.fit?.refit_compare === true && raw.data.target_transform !== undefined) {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.predictions,
+      ['fit', 'refit_compare'],
+      '`refit_compare` reports the refit on the target as written; expected no `refit_compare` beside `data.target_transform`',
     );
   }
   if (raw.fit?.refit_compare === true && raw.task === 'classification') {
@@ -274,6 +286,40 @@ function readWeighting(
   if (data.weight !== undefined) return { kind: 'weight', column: data.weight, line: line(['data', 'weight']) };
   if (data.sigma !== undefined) return { kind: 'sigma', column: data.sigma, line: line(['data', 'sigma']) };
   return null;
+}
+
+/**
+ * `data.target_transform` with `data.limits_scale` as `{ targetTransform }`, or nothing (so
+ * descriptors without one keep their shape).
+ * @throws InputError `target-transform` for `limits_scale` without a transform, or a transform on a classifier
+ */
+function readTargetTransform(
+  doc: YamlDocument,
+  file: string,
+  raw: RawDescriptor,
+  line: (path: (string | number)[]) => number,
+): { targetTransform?: TargetTransformSpec } {
+  const { target_transform: kind, limits_scale: scale } = raw.data;
+  if (kind === undefined) {
+    if (scale === undefined) return {};
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.targetTransform,
+      ['data', 'limits_scale'],
+      '`limits_scale` chooses between the original and the transformed target, and `data.target_transform` is not given; expected `target_transform: log | log1p | sqrt` or no `limits_scale`',
+    );
+  }
+  if (raw.task === 'classification') {
+    throw errorAt(
+      doc,
+      file,
+      DESCRIPTOR_ERROR.targetTransform,
+      ['data', 'target_transform'],
+      "a classifier's target is two classes, which no transform applies to; expected `target_transform` only with `task: regression`",
+    );
+  }
+  return { targetTransform: { kind, limitsScale: scale ?? 'original', line: line(['data', 'target_transform']) } };
 }
 
 /** `{ weighting }` when there is one, else nothing (so unweighted descriptors keep their shape). */
@@ -519,6 +565,8 @@ interface RawDescriptor {
     positive?: string;
     weight?: string;
     sigma?: string;
+    target_transform?: TargetTransformSpec['kind'];
+    limits_scale?: TargetTransformSpec['limitsScale'];
     separator?: DataFormat['separator'];
     decimal?: DataFormat['decimal'];
     missing?: DataFormat['missing'];

@@ -253,6 +253,19 @@ export interface Weighting {
   line: number;
 }
 
+/**
+ * `data.target_transform` (with `data.limits_scale`): the model is fitted on t = g(y), g one of
+ * log(y) (y > 0), log(1 + y) (y > -1) or sqrt(y) (y >= 0); figures are reported on both scales and
+ * the limits judge the `limitsScale` one (default `original`: back-transformed predictions against y).
+ */
+export interface TargetTransformSpec {
+  kind: 'log' | 'log1p' | 'sqrt';
+  /** The scale error limits apply to. Default `original`. */
+  limitsScale: 'original' | 'transformed';
+  /** Line of `data.target_transform`. */
+  line: number;
+}
+
 /** How a descriptor's data files are written (the `data` keys `separator`, `decimal`, `missing`). */
 export interface DataFormat {
   /** `auto` (default: detected from the header line), `,`, `;` or a tab. */
@@ -307,6 +320,8 @@ export interface Descriptor {
      * `auto`, `.`, `error`. Optional so that descriptors built in code before it existed still type-check.
      */
     format?: DataFormat;
+    /** `data.target_transform` and `data.limits_scale`; absent or null: the target as written. */
+    targetTransform?: TargetTransformSpec | null;
     /** `data.split`: one file, rows divided by a label column (`holdout` then names the same file as `train`); null without. */
     split?: DataSplit | null;
   };

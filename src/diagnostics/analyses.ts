@@ -10,7 +10,8 @@ import type { FitResult } from '../fit/index.js';
 import { complementFactors, crossValidate, foldFactors, type CrossValidation, type FoldFactors } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 import { findLeakage, type Leakage } from './leakage.js';
-import { measureSwing, type Swing } from './swing.js';
+import { measureSwing, type Swing, type SwingOptions } from './swing.js';
+import type { TargetTransformKind } from '../data/target-transform.js';
 
 /** What the analyses are computed from. */
 export interface AnalysisInputs {
@@ -20,6 +21,8 @@ export interface AnalysisInputs {
   holdout: ModelData;
   /** The descriptor's fold settings (k = folds, order, seed). */
   folds: Pick<FitSpec, 'folds' | 'foldOrder' | 'seed'>;
+  /** A target transform whose limits judge the original scale: swing back-transforms (see {@link SwingOptions.backTransform}); default none. */
+  backTransform?: TargetTransformKind;
 }
 
 /** Results already computed by the run's passes (each optional). */
@@ -79,7 +82,13 @@ export class ModelAnalyses {
 
   /** Swing between and beyond the samples of the refit (see {@link measureSwing}). */
   swing(): Swing {
-    this.#swing ??= measureSwing(this.#inputs.design, this.#inputs.train, this.#inputs.fit.coefficients);
+    const back = this.#inputs.backTransform;
+    this.#swing ??= measureSwing(
+      this.#inputs.design,
+      this.#inputs.train,
+      this.#inputs.fit.coefficients,
+      back ? { backTransform: back } : {},
+    );
     return this.#swing;
   }
 

@@ -30,6 +30,7 @@ import {
 } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 import { checkDeadline } from '../core/deadline.js';
+import { rowScaling, weightedDesign } from '../design/weighted-design.js';
 
 /** A point of a cross-validation curve, in order of increasing complexity. */
 export interface CurvePoint {
@@ -241,14 +242,19 @@ export function sweepShape(
  * m rows at an even stride through the data (row floor(t n / m) for t < m), as new columns.
  * @param m rows to keep (<= data.rows)
  */
-export function subsample(data: Rows, m: number): Rows {
+export function subsample(data: Rows & { weights?: Float64Array }, m: number): Rows & { weights?: Float64Array } {
   const n = data.rows;
   const pick = (col: Float64Array): Float64Array => {
     const out = new Float64Array(m);
     for (let t = 0; t < m; t++) out[t] = col[Math.floor((t * n) / m)];
     return out;
   };
-  return { inputs: data.inputs.map(pick), y: pick(data.y), rows: m };
+  return {
+    inputs: data.inputs.map(pick),
+    y: pick(data.y),
+    rows: m,
+    ...(data.weights !== undefined ? { weights: pick(data.weights) } : {}),
+  };
 }
 
 /**
@@ -289,6 +295,10 @@ function sweepCoefficients(
  * - Else the first radial term: widths current x 2^t, t = -2 .. 4; simplest = widest.
  *   Degree and width settings each build their own design: two passes over the rows each, on
  *   an even-stride subsample above `maxRows` rows.
+ * - Weighted rows (`train.weights`): every setting is the weighted fit, through the rows scaled by
+ *   sqrt(w) with the weights divided by their mean over the rows used (design/weighted-design.ts),
+ *   so each fold's errors are weighted and cv_rmse = sqrt(sum w r^2 / sum w) over the out-of-fold
+ *   residuals r (the ridge sweep gets the same from the model's own weighted fold factors).
  *
  * @param descriptor the model (fit options, term lines)
  * @param design the fitted design
@@ -300,7 +310,7 @@ function sweepCoefficients(
 export function sweepComplexity(
   descriptor: Descriptor,
   design: Design,
-  train: Rows,
+  train: Rows & { weights?: Float64Array },
   fit: FitResult,
   options: SweepOptions = {},
 ): Sweep | null {
@@ -341,6 +351,8 @@ export function sweepComplexity(
     const { sse } = outOfFoldErrorsFromFactors(factors.perFold, coefficients);
     lambdas.forEach((l, s) => curve.push(pointFrom(l, `ridge ${formatSetting(l)}`, p, sse[s], s === lambdas.indexOf(ridge))));
   } else {
+    const scaling = rowScaling(rows);
+    const scaledRows: Rows = scaling === null ? rows : { inputs: rows.inputs, y: scaling.y, rows: rows.rows };
     const trainColumns = new Map<string, Float64Array>(design.inputs.map((name, c) => [name, train.inputs[c]]));
     const spec = design.terms[target.term].spec;
     const settings: { value: number; current: boolean }[] = [];
@@ -381,9 +393,11 @@ export function sweepComplexity(
         continue;
       }
       try {
-        const factors = complementFactors(foldFactors(d, rows, folds));
+        // Weighted rows: the fit of the rows scaled by sqrt(w) (errors sqrt(w) r).
+        const dw = scaling === null ? d : weightedDesign(d, scaling);
+        const factors = complementFactors(foldFactors(dw, scaledRows, folds));
         const coefficients = complementCoefficients(factors, [ridge], d.penalised);
-        const { sse } = outOfFoldErrors(d, rows, folds, coefficients);
+        const { sse } = outOfFoldErrors(dw, scaledRows, folds, coefficients);
         curve.push(pointFrom(value, label, d.p, sse[0], current));
       } catch (error) {
         // A setting whose fit cannot be computed (e.g. columns that underflow) leaves a gap in the curve.

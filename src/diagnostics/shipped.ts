@@ -6,6 +6,7 @@ import type { ModelData } from '../data/model-data.js';
 import { predictRows } from '../design/blocks.js';
 import type { Design } from '../design/design-matrix.js';
 import { addErrors, emptySums, errorMeasures } from './regression-metrics.js';
+import { weightedErrorMeasures } from './weighted-metrics.js';
 
 /** Error measures of one set of rows (see {@link errorMeasures}). */
 export type ErrorMeasures = ReturnType<typeof errorMeasures>;
@@ -22,7 +23,9 @@ export interface ShippedScore {
   maxCoefficientDifference: number;
 }
 
+/** RMSE, MAE and R^2 of the rows; weighted rows get the weighted measures (weighted-metrics.ts), as the refit's. */
 function measures(data: ModelData, predictions: Float64Array): ErrorMeasures {
+  if (data.weights !== undefined) return weightedErrorMeasures(data.y, predictions, data.weights, data.rows);
   const sums = emptySums();
   addErrors(sums, data.y, predictions, data.rows);
   return errorMeasures(sums);

@@ -11,7 +11,7 @@
  *   range (201 even points plus 8 in each gap between neighbouring distinct values: the points
  *   `swing` scans; see {@link inputGrid});
  * - data variation TV_y = sum_j |ybar_(j+1) - ybar_j| over the input's distinct training values in
- *   ascending order, ybar_j the mean target of the rows at the j-th value (above 20,000 rows, those
+ *   ascending order, ybar_j the mean target (weighted: sum w y / sum w) of the rows at the j-th value (above 20,000 rows, those
  *   of an even-stride sample of 20,000 rows);
  * - ratio TV_f / TV_y.
  * The figure is the largest ratio over the inputs. A curve that passes through every sample has
@@ -24,6 +24,7 @@ import { predictRows } from '../design/blocks.js';
 import { columnMedian } from './column-median.js';
 import type { Rows } from './cross-validation.js';
 import { inputGrid } from './swing.js';
+import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
 
 /** One input's figures. */
 export interface SpikeFigures {
@@ -49,10 +50,19 @@ export const SPIKE_MAX_ROWS = 20_000;
 /**
  * Measures the spike figure of a fitted model.
  * @param design the fitted design
- * @param train training rows (inputs in `design.inputs` order)
+ * @param train training rows (inputs in `design.inputs` order; with `weights`, the data variation
+ *   uses weighted means, see {@link meanTargets})
  * @param coefficients fitted coefficients (length p)
+ * @param original a model fitted on t = g(y) judged on the original scale: the transform (the
+ *   curve is back-transformed) and the training targets as written (the data variation is theirs);
+ *   default none (the fit's own scale)
  */
-export function measureSpikes(design: Design, train: Rows, coefficients: ArrayLike<number>): Spikes {
+export function measureSpikes(
+  design: Design,
+  train: Rows & { weights?: Float64Array },
+  coefficients: ArrayLike<number>,
+  original?: { kind: TargetTransformKind; y: Float64Array; weights?: Float64Array },
+): Spikes {
   const n = train.rows;
   const medians = train.inputs.map((col) => columnMedian(col, n));
   const perInput: SpikeFigures[] = [];
@@ -65,8 +75,9 @@ export function measureSpikes(design: Design, train: Rows, coefficients: ArrayLi
     if (grid.length < 2) return;
     const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
     const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
+    if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
     const curveVariation = totalVariation(curve, curve.length);
-    const dataVariation = targetVariation(train.inputs[c], train.y, n);
+    const dataVariation = targetVariation(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
     const r = dataVariation > 0 ? curveVariation / dataVariation : Number.NaN;
     perInput.push({ input: name, curveVariation, dataVariation, ratio: r });
     if (!Number.isNaN(r) && (Number.isNaN(ratio) || r > ratio)) {
@@ -84,18 +95,124 @@ function totalVariation(v: Float64Array, m: number): number {
   return s;
 }
 
-/** Total variation of the mean target over the input's distinct values in ascending order. */
-function targetVariation(x: Float64Array, y: Float64Array, n: number): number {
+/** Total variation of the (weighted) mean target over the input's distinct values in ascending order. */
+function targetVariation(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): number {
+  const { means } = meanTargets(x, y, n, weights);
+  return totalVariation(Float64Array.from(means), means.length);
+}
+
+/** One interval between neighbouring distinct training values where the curve spikes (see {@link spikeIntervals}). */
+export interface SpikeInterval {
+  /** The neighbouring distinct training values the interval runs between. */
+  from: number;
+  to: number;
+  /** Total variation of the curve over the interval. */
+  curveVariation: number;
+  /** What it was compared with: max(|f(x_(j+1)) - f(x_j)|, |ybar_(j+1) - ybar_j|, TV_y / gaps). */
+  allowed: number;
+}
+
+/** Most intervals {@link spikeIntervals} examines (the widest, when an input has more gaps). */
+export const SPIKE_MAX_GAPS = 4000;
+
+/** Points inside each interval at which the curve is evaluated (besides its two ends). */
+export const SPIKE_POINTS_PER_GAP = 8;
+
+/**
+ * The intervals between neighbouring distinct training values of input c where the curve (the
+ * other inputs at their training medians, as {@link measureSpikes}) goes up and down more than
+ * `limit` times what the interval allows: TV_f over [x_j, x_(j+1)] (the curve at both ends and
+ * {@link SPIKE_POINTS_PER_GAP} even points between) above
+ * limit * max(|f(x_(j+1)) - f(x_j)|, |ybar_(j+1) - ybar_j|, TV_y / gaps), with ybar_j the mean
+ * target at the j-th distinct value (an even-stride sample of {@link SPIKE_MAX_ROWS} rows above it)
+ * and TV_y / gaps the data's mean step. A curve that only rises or only falls over the interval has
+ * TV_f equal to its net change, so a steep but monotone stretch is never marked; the data's steps
+ * keep a flat stretch of data from marking every small wiggle. Our own rule for the charts, in the spirit of the
+ * `swing-spikes` figure (which sums the same variations over the whole range); not a published one.
+ * At most {@link SPIKE_MAX_GAPS} intervals are examined (the widest). Ascending by `from`.
+ *
+ * @param design the fitted design
+ * @param train training rows (inputs in `design.inputs` order)
+ * @param coefficients fitted coefficients (length p)
+ * @param c index of the input in `design.inputs`
+ * @param limit the factor (the `swing-spikes` warning limit, else its fail limit)
+ * @param original as in {@link measureSpikes}: back-transform the curve and compare with y as written
+ */
+export function spikeIntervals(
+  design: Design,
+  train: Rows & { weights?: Float64Array },
+  coefficients: ArrayLike<number>,
+  c: number,
+  limit: number,
+  original?: { kind: TargetTransformKind; y: Float64Array; weights?: Float64Array },
+): SpikeInterval[] {
+  const n = train.rows;
+  if (!(limit > 0) || c < 0 || c >= design.inputs.length) return [];
+  const { values, means } = meanTargets(train.inputs[c], original?.y ?? train.y, n, original ? original.weights : train.weights);
+  const gaps = values.length - 1;
+  if (gaps < 1) return [];
+  let dataVariation = 0;
+  for (let j = 0; j < gaps; j++) dataVariation += Math.abs(means[j + 1] - means[j]);
+  const meanStep = dataVariation / gaps;
+  const chosen = widestGapIndices(values, SPIKE_MAX_GAPS);
+  const per = SPIKE_POINTS_PER_GAP + 2;
+  const grid = new Float64Array(chosen.length * per);
+  chosen.forEach((j, q) => {
+    for (let t = 0; t < per; t++) grid[q * per + t] = values[j] + ((values[j + 1] - values[j]) * t) / (per - 1);
+  });
+  const medians = train.inputs.map((col) => columnMedian(col, n));
+  const columns = design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
+  const curve = predictRows(design, { inputs: columns, rows: grid.length }, coefficients);
+  if (original !== undefined) for (let i = 0; i < curve.length; i++) curve[i] = inverseTarget(original.kind, curve[i]);
+  const out: SpikeInterval[] = [];
+  chosen.forEach((j, q) => {
+    const variation = totalVariation(curve.subarray(q * per, (q + 1) * per), per);
+    const net = Math.abs(curve[(q + 1) * per - 1] - curve[q * per]);
+    const allowed = Math.max(net, Math.abs(means[j + 1] - means[j]), meanStep);
+    if (variation > limit * allowed) out.push({ from: values[j], to: values[j + 1], curveVariation: variation, allowed });
+  });
+  return out;
+}
+
+/**
+ * The distinct values of x ascending (of an even-stride sample above {@link SPIKE_MAX_ROWS} rows)
+ * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
+ * value whose rows all weigh 0 is left out: it takes no part in the fit).
+ */
+function meanTargets(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
   const rows = Array.from({ length: m }, (_, t) => (m === n ? t : Math.floor((t * n) / m)));
   rows.sort((a, b) => x[a] - x[b]);
+  const values: number[] = [];
   const means: number[] = [];
   for (let s = 0; s < m; ) {
     let e = s;
     let sum = 0;
-    while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
-    means.push(sum / (e - s));
+    let total = 0;
+    if (weights === undefined) {
+      while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
+      total = e - s;
+    } else {
+      for (; e < m && x[rows[e]] === x[rows[s]]; e++) {
+        sum += weights[rows[e]] * y[rows[e]];
+        total += weights[rows[e]];
+      }
+    }
+    if (Number.isFinite(x[rows[s]]) && total > 0) {
+      values.push(x[rows[s]]);
+      means.push(sum / total);
+    }
     s = e;
   }
-  return totalVariation(Float64Array.from(means), means.length);
+  return { values, means };
+}
+
+/** Indices j of the at most `max` widest gaps values[j]..values[j+1], ascending. */
+function widestGapIndices(values: readonly number[], max: number): number[] {
+  const all = Array.from({ length: values.length - 1 }, (_, j) => j);
+  if (all.length <= max) return all;
+  return all
+    .sort((a, b) => values[b + 1] - values[b] - (values[a + 1] - values[a]) || a - b)
+    .slice(0, max)
+    .sort((a, b) => a - b);
 }

@@ -11,6 +11,7 @@ import { range } from '../design/stats.js';
 import { sortFloat64 } from './radix-sort.js';
 import { nearestPairs } from './nearest-neighbours.js';
 import { checkDeadline } from '../core/deadline.js';
+import { inverseTarget, type TargetTransformKind } from '../data/target-transform.js';
 
 /** Options of {@link measureSwing}; every field has a default. */
 export interface SwingOptions {
@@ -46,6 +47,12 @@ export interface SwingOptions {
   maxCurvePoints?: number;
   /** Curves kept in the result: those of the first inputs (every input is scanned). Default 12. */
   maxCurves?: number;
+  /**
+   * The target transform of a model fitted on t = g(y) (`data.target_transform`) whose limits
+   * judge the original scale: every prediction and the band's ends are back-transformed
+   * (data/target-transform.ts, an increasing map) before they are compared. Default none.
+   */
+  backTransform?: TargetTransformKind;
 }
 
 /** The defaults of {@link SwingOptions}, one place for the scan and for the cost estimate (run/cost.ts). */
@@ -364,6 +371,11 @@ function mergeAscending(ax: Float64Array, ap: Float64Array, bx: Float64Array, bp
   }
 }
 
+/** v[i] = g^-1(v[i]) for i < m (one loop; see DEVELOPERS.md, "Writing hot loops"). */
+function backTransformInPlace(v: Float64Array, m: number, kind: TargetTransformKind): void {
+  for (let i = 0; i < m; i++) v[i] = inverseTarget(kind, v[i]);
+}
+
 /** [index of the smallest, index of the largest] value (first of equals); [0, 0] when empty. */
 function extremeIndices(values: Float64Array): [number, number] {
   return [indexOfSmallest(values), indexOfLargest(values)];
@@ -427,6 +439,8 @@ export interface SwingPlan {
   maxCurvePoints: number;
   /** Curves kept (those of the first grids). */
   maxCurves: number;
+  /** {@link SwingOptions.backTransform}, or absent. */
+  backTransform?: TargetTransformKind;
 }
 
 /**
@@ -530,8 +544,9 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
       SWING_MIN_CURVE_POINTS,
       Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))),
     );
+  const back = options.backTransform;
   return {
-    band: [ylo, yhi],
+    band: back === undefined ? [ylo, yhi] : [inverseTarget(back, ylo), inverseTarget(back, yhi)],
     medians,
     grids,
     segmentColumns,
@@ -539,6 +554,7 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     margin: options.margin ?? SWING_DEFAULTS.margin,
     maxCurvePoints,
     maxCurves,
+    ...(back !== undefined ? { backTransform: back } : {}),
   };
 }
 
@@ -595,6 +611,7 @@ export function scoreSwing(plan: SwingPlan, design: Design, coefficients: ArrayL
   /** Scores points (predicted here unless their predictions are given); returns the predictions. */
   const score = (columns: Float64Array[], m: number, where: 'inside' | 'beyond', given?: Float64Array): Float64Array => {
     const pred = given ?? predictRows(design, { inputs: columns, rows: m }, coefficients);
+    if (plan.backTransform !== undefined) backTransformInPlace(pred, m, plan.backTransform);
     if (m > 0) {
       const index = worstExcursionIndex(pred, m, ylo, yhi);
       const value = pointExcursion(pred[index], ylo, yhi);

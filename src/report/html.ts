@@ -19,6 +19,7 @@ import { fitCurveChart } from './svg/fit-curve.js';
 import { partialCurveChart } from './svg/partial-curve.js';
 import { predictedActualChart } from './svg/predicted-actual.js';
 import { residualsChart } from './svg/residuals.js';
+import { TARGET_SCALE_HEADINGS, targetScaleRows, targetScaleSentence } from './target-scale-text.js';
 
 /** Options of the HTML report. */
 export interface HtmlOptions {
@@ -199,6 +200,16 @@ function modelSection(m: ModelResult, index: number): string {
   if (kind !== null) parts.push(`<p class="note" data-kind="predictions">${escapeHtml(kind)}</p>`);
   const refit = refitCompareLine(m);
   if (refit !== null) parts.push(`<p class="note" data-refit-compare>${escapeHtml(refit)}</p>`);
+  const scale = targetScaleSentence(m);
+  if (scale !== null) {
+    const head = TARGET_SCALE_HEADINGS.map((h, j) => `<th${j > 0 ? ' class="num"' : ''}>${escapeHtml(h)}</th>`).join('');
+    const body = targetScaleRows(m)
+      .map((row) => `<tr>${row.map((c, j) => `<td${j > 0 ? ' class="num"' : ''}>${escapeHtml(c)}</td>`).join('')}</tr>`)
+      .join('');
+    parts.push(
+      `<p class="note">${escapeHtml(scale)}.</p><table class="target-scale"><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table>`,
+    );
+  }
   parts.push('<h3>Checks</h3>', checksTable(m));
   if (m.charts) {
     const list = charts(m.charts, id);

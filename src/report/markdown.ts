@@ -13,6 +13,7 @@ import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '
 import { formatNumber } from '../core/format.js';
 import { escapeMarkdown } from './escape.js';
 import { countsText, limitText, verdictHeadline } from './wording.js';
+import { TARGET_SCALE_HEADINGS, targetScaleRows, targetScaleSentence } from './target-scale-text.js';
 
 /** Options of the Markdown report. */
 export interface MarkdownOptions {
@@ -101,6 +102,12 @@ export function modelDetail(m: ModelResult): string[] {
   const refit = refitCompareLine(m);
   if (refit !== null) lines.push(text(refit), '');
   if (isClassifier(m)) lines.push(text(classifierLine(m)), '');
+  const scale = targetScaleSentence(m);
+  if (scale !== null) {
+    lines.push(`${scale}:`, '', `| ${TARGET_SCALE_HEADINGS.join(' | ')} |`, '| --- | ---: | ---: | ---: | ---: | ---: | ---: |');
+    for (const row of targetScaleRows(m)) lines.push(`| ${row.join(' | ')} |`);
+    lines.push('');
+  }
   lines.push('| Check | Status | Value | Limit | Line |', '| --- | --- | ---: | --- | ---: |');
   for (const c of shown) lines.push(`| ${c.id} | ${MARK[c.status]} | ${cell(c.value)} | ${limitText(c)} | ${c.line} |`);
   lines.push('');

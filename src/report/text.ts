@@ -10,6 +10,7 @@ import { formatNumber } from '../core/format.js';
 import { maxOf } from '../core/extremes.js';
 import { escapeTerminal } from './escape.js';
 import { neutraliseLog } from './runner-commands.js';
+import { TARGET_SCALE_HEADINGS, targetScaleRows, targetScaleSentence } from './target-scale-text.js';
 
 /** Options of the text report. */
 export interface TextOptions {
@@ -122,6 +123,12 @@ export function formatText(result: Result, options: TextOptions = {}): string {
     const refit = refitCompareLine(m);
     if (refit !== null) out.push(`  ${escapeTerminal(refit)}`);
     if (isClassifier(m)) out.push(`  ${escapeTerminal(classifierLine(m))}`);
+    const scale = targetScaleSentence(m);
+    if (scale !== null) {
+      out.push(`  ${scale}:`);
+      for (const line of table([[...TARGET_SCALE_HEADINGS], ...targetScaleRows(m)], [false, true, true, true, true, true, true]))
+        out.push(`    ${line}`);
+    }
     for (const c of m.checks) if (verbose || c.status === 'fail' || c.status === 'warn') out.push(checkLine(m, c, color));
   }
   for (const m of result.models) {

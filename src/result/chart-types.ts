@@ -97,6 +97,21 @@ export interface CurveData {
   y: (number | null)[];
   /** The base commit's curve along the same input, when the pull request changed the model's fit (run/base-curves.ts). */
   base?: BaseCurve;
+  /** Where the curve spikes between neighbouring training values (diagnostics/spikes.ts); only when `swing-spikes` warns or fails and some interval is marked. */
+  spikes?: SpikeMarks;
+}
+
+/** Most spike intervals a curve's chart data keeps (the largest variations over what is allowed). */
+export const MAX_SPIKE_MARKS = 200;
+
+/** The intervals of a curve where it varies more than the `swing-spikes` limit allows. */
+export interface SpikeMarks {
+  /** The factor they were judged with: the `swing-spikes` warning limit, else its fail limit. */
+  limit: number;
+  /** At most {@link MAX_SPIKE_MARKS}, ascending by `from`. */
+  intervals: { from: number; to: number; variation: number | null; allowed: number | null }[];
+  /** Marked intervals left out beyond {@link MAX_SPIKE_MARKS}; absent when none. */
+  left_out?: number;
 }
 
 /** The fitted curve of a model of one input. */

@@ -77,6 +77,38 @@ export interface ModelMetrics {
   [key: string]: JsonNumber | string | number | null;
 }
 
+/** Error figures of one scale of a model with a transformed target (see {@link TargetScaleResult}). */
+export interface TargetScaleFigures {
+  train_rmse: JsonNumber;
+  holdout_rmse: JsonNumber;
+  train_mae: JsonNumber;
+  holdout_mae: JsonNumber;
+  train_r2: JsonNumber;
+  holdout_r2: JsonNumber;
+  /** holdout_rmse / train_rmse. */
+  gap_ratio: JsonNumber;
+  /** Pooled k-fold RMSE; null without cross-validation. */
+  cv_rmse: JsonNumber | null;
+  /** Reduced chi-square of the training and hold-out rows; present with `data.sigma` only. */
+  train_chi_square?: JsonNumber;
+  holdout_chi_square?: JsonNumber;
+}
+
+/**
+ * A model fitted on a transformed target (`data.target_transform`): its error figures on the
+ * original scale (y against the back-transformed predictions, a median of y) and on the
+ * transformed one (the fit's own). `metrics` holds the `limits_scale` ones.
+ */
+export interface TargetScaleResult {
+  transform: 'log' | 'log1p' | 'sqrt';
+  /** The scale the error limits judged. */
+  limits_scale: 'original' | 'transformed';
+  /** The back-transform of predictions: `exp`, `expm1` or `square` (of max(t, 0)). */
+  back_transform: 'exp' | 'expm1' | 'square';
+  original: TargetScaleFigures;
+  transformed: TargetScaleFigures;
+}
+
 /** Figures of the shipped coefficients, when a descriptor carries them. */
 export interface ShippedMetrics {
   train_rmse: JsonNumber;
@@ -136,6 +168,8 @@ export interface ModelResult {
   /** Refit coefficients, intercept first. */
   coefficients: JsonNumber[];
   shipped: ShippedMetrics | null;
+  /** A model with `data.target_transform`: figures on both scales; absent otherwise. */
+  target_scale?: TargetScaleResult;
   checks: CheckResult[];
   /** Comparison with the base commit; absent when no comparison was asked for or possible. */
   base?: BaseComparison;

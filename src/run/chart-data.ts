@@ -12,6 +12,8 @@ import { predictRows } from '../design/blocks.js';
 import { fromJsonNumber, type CheckResult, type JsonNumber } from '../result/result.js';
 import { columnMedian } from '../diagnostics/column-median.js';
 import { range } from '../design/stats.js';
+import { inverseTarget } from '../data/target-transform.js';
+import { spikeIntervals } from '../diagnostics/spikes.js';
 import type { FittedModel } from './fit-model.js';
 import {
   CHART_DIGITS,
@@ -20,12 +22,14 @@ import {
   MAX_CHART_POINTS,
   MAX_PARTIAL_CURVES,
   MAX_SERIES_NUMBERS,
+  MAX_SPIKE_MARKS,
   PARTIAL_CURVE_POINTS,
   type BandRegion,
   type ChartData,
   type CurveData,
   type FitCurveData,
   type PointSeries,
+  type SpikeMarks,
   type SweepData,
 } from '../result/chart-types.js';
 
@@ -97,6 +101,9 @@ function curveAlong(
   const grid = Float64Array.from(xs).sort();
   const columns = model.design.inputs.map((_, k) => (k === c ? grid : new Float64Array(grid.length).fill(medians[k])));
   const pred = predictRows(model.design, { inputs: columns, rows: grid.length }, model.fit.coefficients);
+  // A transformed target judged on the original scale is drawn on it (as the swing check scans it).
+  const scale = originalScale(model);
+  if (scale !== null) for (let i = 0; i < pred.length; i++) pred[i] = inverseTarget(scale.transform, pred[i]);
   const x: number[] = [];
   const y: (number | null)[] = [];
   for (let i = 0; i < grid.length; i++) {
@@ -106,6 +113,51 @@ function curveAlong(
     y.push(chartNumber(pred[i]));
   }
   return { x, y };
+}
+
+/** The target scale of a model fitted on a transformed target whose limits judge the original scale, else null. */
+function originalScale(model: FittedModel): NonNullable<FittedModel['targetScale']> | null {
+  const scale = model.targetScale ?? null;
+  return scale !== null && scale.limitsScale === 'original' ? scale : null;
+}
+
+/**
+ * The intervals along input c where the curve spikes (diagnostics/spikes.ts, {@link spikeIntervals}),
+ * judged with the `swing-spikes` outcome's warning limit, else its fail limit; only when that check
+ * warns or fails (the marks show where its figure comes from), null otherwise, when none is marked
+ * or the input is a category. The largest {@link MAX_SPIKE_MARKS} are kept.
+ */
+function spikeMarks(model: FittedModel, checks: readonly CheckResult[], c: number): SpikeMarks | null {
+  const check = checks.find((k) => k.id === 'swing-spikes');
+  const limit = check?.warn ?? check?.limit ?? null;
+  // Marks explain a finding: only when the figure is over its warning or fail limit.
+  if (check === undefined || (check.status !== 'warn' && check.status !== 'fail') || limit === null || !(limit > 0)) return null;
+  const name = model.design.inputs[c];
+  if (model.design.terms.some((t) => t.discreteValues !== undefined && t.inputs.includes(name))) return null;
+  const scale = originalScale(model);
+  const original =
+    scale !== null ? { kind: scale.transform, y: scale.originalRows.train.y, weights: scale.originalRows.train.weights } : undefined;
+  const found = spikeIntervals(model.design, model.tables.train, model.fit.coefficients, c, limit, original);
+  if (found.length === 0) return null;
+  const kept =
+    found.length <= MAX_SPIKE_MARKS
+      ? found
+      : found
+          .map((s, i) => ({ s, i }))
+          .sort((a, b) => b.s.curveVariation / b.s.allowed - a.s.curveVariation / a.s.allowed || a.i - b.i)
+          .slice(0, MAX_SPIKE_MARKS)
+          .sort((a, b) => a.i - b.i)
+          .map((e) => e.s);
+  return {
+    limit,
+    intervals: kept.map((s) => ({
+      from: chartNumber(s.from) ?? s.from,
+      to: chartNumber(s.to) ?? s.to,
+      variation: chartNumber(s.curveVariation),
+      allowed: chartNumber(s.allowed),
+    })),
+    ...(found.length > kept.length ? { left_out: found.length - kept.length } : {}),
+  };
 }
 
 /**
@@ -262,9 +314,18 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     inputs.forEach((name, k) => {
       if (k !== c) others[name] = chartNumber(medians[k]) ?? 0;
     });
-    const curve: CurveData = { input: inputs[c], others, range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi], x, y };
+    const spikes = spikeMarks(model, checks, c);
+    const curve: CurveData = {
+      input: inputs[c],
+      others,
+      range: [chartNumber(tlo) ?? tlo, chartNumber(thi) ?? thi],
+      x,
+      y,
+      ...(spikes !== null ? { spikes } : {}),
+    };
     if (inputs.length === 1) {
-      const band = swing?.band ?? metrics.targetRange;
+      const onOriginal = originalScale(model);
+      const band = swing?.band ?? (onOriginal ? range(onOriginal.originalRows.train.y, train.rows) : metrics.targetRange);
       fitCurve = {
         ...curve,
         band: [chartNumber(band[0]) ?? band[0], chartNumber(band[1]) ?? band[1]],
@@ -286,11 +347,17 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     values.push(chartNumber((fit.coefficients[j] * metrics.columnSd[j]) / metrics.targetSd));
   }
 
+  // A transformed target judged on the original scale: its rows as written, predictions back-transformed.
+  const scale = originalScale(model);
   return {
     target: descriptor.data.target,
     inputs,
-    train: series(train, model.trainPredictions, maxPoints),
-    holdout: series(holdout, model.holdoutPredictions, maxPoints),
+    train: scale
+      ? series({ ...train, y: scale.originalRows.train.y }, scale.predictions.train, maxPoints)
+      : series(train, model.trainPredictions, maxPoints),
+    holdout: scale
+      ? series({ ...holdout, y: scale.originalRows.holdout.y }, scale.predictions.holdout, maxPoints)
+      : series(holdout, model.holdoutPredictions, maxPoints),
     fit: fitCurve,
     partials,
     ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),

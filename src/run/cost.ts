@@ -73,6 +73,8 @@ export interface ModelShape {
   shipped: boolean;
   /** The complexity sweep's settings, or null when it has none. */
   sweep: SweepShape | null;
+  /** `data.target_transform` is given (figures on the original scale: one more pass); absent otherwise. */
+  targetTransform?: boolean;
 }
 
 /** One stage's share of the estimate. */
@@ -116,6 +118,7 @@ export function modelShape(descriptor: Descriptor, design: Design, trainRows: nu
     folds: Math.min(descriptor.fit.folds, trainRows),
     shipped: descriptor.coefficients !== null,
     sweep: sweepShape(descriptor, design, trainRows, { maxRows: SWEEP_MAX_ROWS }),
+    ...(descriptor.data.targetTransform ? { targetTransform: true } : {}),
   };
 }
 
@@ -143,7 +146,8 @@ export function swingPoints(inputs: number, rows: number): number {
  * - leakage: (n + m)({@link LEAKAGE_ROW_OPERATIONS} + 4d); charts: curves of 401 points per input (at most 12);
  * - complexity sweep: a ridge sweep k SVDs and 2 L k p^2 for L penalties; a degree or width
  *   sweep, per setting of p_s columns on its n_s rows, n_s (2 b_s + p_s^2 + p_s) + 4 k p_s^3 +
- *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3).
+ *   k ({@link SOLVE_SVDS} SVDs + p_s^3 / 3);
+ * - a transformed target's original scale: the out-of-fold pass n (b + p) and k fold solves.
  */
 export function estimateCost(shape: ModelShape): CostEstimate {
   const { trainRows: n, holdoutRows: m, columns: p, buildPerRow: b, inputs: d } = shape;
@@ -180,6 +184,8 @@ export function estimateCost(shape: ModelShape): CostEstimate {
     sizes: `${n} + ${m} rows x ${d} inputs`,
   });
   parts.push(sweepPart(shape, k));
+  if (shape.targetTransform === true)
+    parts.push({ stage: 'original scale of the target', operations: build(n, b) + n * p + solves(k, p), sizes: rowsBy(n) });
   return { total: parts.reduce((sum, part) => sum + part.operations, 0), parts };
 }
 

@@ -19,6 +19,7 @@ import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { evaluateClassifier } from './evaluate-classifier.js';
 import { evaluatePredictions } from './evaluate-predictions.js';
 import { fitModel, type FittedModel } from './fit-model.js';
+import { targetScaleResult } from './target-scale.js';
 
 export type { BaseInput } from './base-comparison.js';
 
@@ -116,7 +117,15 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
   const baseMatch = base?.matches.get(descriptor.file) ?? null;
   // The run's own passes already produced the folds, their factors and the cross-validation.
   const analyses = new ModelAnalyses(
-    { design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit },
+    {
+      design: model.design,
+      fit: model.fit,
+      train: model.tables.train,
+      holdout: model.tables.holdout,
+      folds: descriptor.fit,
+      // A transformed target judged on the original scale: swing back-transforms the predictions.
+      ...(model.targetScale?.limitsScale === 'original' ? { backTransform: model.targetScale.transform } : {}),
+    },
     { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation },
   );
   const context: CheckContext = {
@@ -130,6 +139,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     analyses,
     predictions: { train: model.trainPredictions, holdout: model.holdoutPredictions },
     shipped: model.shipped,
+    targetScale: model.targetScale ?? null,
   };
   const metrics = reportMetrics(model);
   const { checks, verdict } = runChecks(checksFor('regression'), (check) => runCheck(check, context), metrics);
@@ -147,6 +157,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     metrics,
     coefficients: Array.from(model.fit.coefficients, jsonNumber),
     shipped: shippedMetrics(model.shipped),
+    ...(model.targetScale ? { target_scale: targetScaleResult(model.targetScale) } : {}),
     checks,
     ...(base ? { base: compareWithBase(metrics, baseMatch, base.commit) } : {}),
     error: null,

@@ -20,6 +20,8 @@ import type { FitResult } from '../fit/index.js';
 import type { RepoReader } from '../repo/types.js';
 import { foldPass, refinePass, scoringPass } from './passes.js';
 import { planModel } from './plan.js';
+import type { TargetScale } from '../diagnostics/target-scale.js';
+import { withTargetScale } from './target-scale.js';
 
 /**
  * Runs `step` and, when the training rows were read from parts, rewrites the `line N of FILE` of
@@ -61,6 +63,8 @@ export interface FittedModel {
   shipped: ShippedScore | null;
   /** Scored as shipped with `fit.refit_compare: true`: the refit's figures (information); absent otherwise. */
   refitCompare?: RefitFigures;
+  /** With `data.target_transform`: figures on both scales (run/target-scale.ts); absent otherwise. */
+  targetScale?: TargetScale;
 }
 
 /**
@@ -75,7 +79,10 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
   const fit = refinePass(plan, first.fit);
   const scored = scoringPass(plan, fit, first.foldFactors);
   if (descriptor.fit.refit === false) {
-    const shipped = scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors);
+    const shipped = withTargetScale(
+      plan,
+      scoredAsShipped(descriptor, design, tables, fit, plan.targetSd, first.columnSd, folds, first.foldFactors),
+    );
     if (descriptor.fit.refitCompare !== true) return shipped;
     return {
       ...shipped,
@@ -83,7 +90,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     };
   }
   const metrics = coreMetrics(plan.targetSd, first.columnSd, fit, design, tables, scored.trainPredictions, scored.holdoutPredictions);
-  return {
+  return withTargetScale(plan, {
     descriptor,
     design,
     fit,
@@ -95,7 +102,7 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     crossValidation: scored.crossValidation,
     foldFactors: first.foldFactors,
     shipped: shippedScore(descriptor, design, tables, fit),
-  };
+  });
 }
 
 /**

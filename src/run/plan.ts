@@ -7,6 +7,7 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
 import { loadModelData, type ModelTables } from '../data/load-model-data.js';
 import { lineOfFile } from '../data/data-parts.js';
+import { transformTables, type OriginalTarget } from '../data/target-transform.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { meanAndSd } from '../design/stats.js';
 import { createTerm, termInputs } from '../design/terms/index.js';
@@ -43,6 +44,8 @@ export interface ModelPlan {
   targetSd: number;
   /** sqrt(w) and sqrt(w) y of the training rows for a weighted fit; null (or absent) when unweighted. */
   scaling?: RowScaling | null;
+  /** With `data.target_transform`: the targets as written (the tables hold t = g(y)); null (or absent) otherwise. */
+  originalTargets?: { train: OriginalTarget; holdout: OriginalTarget } | null;
 }
 
 /**
@@ -59,7 +62,7 @@ export async function planModel(
 ): Promise<ModelPlan> {
   const inputs: string[] = [];
   for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
-  const tables = await load(repo, descriptor, inputs, settings);
+  let tables = await load(repo, descriptor, inputs, settings);
   checkDeadline('reading of the data');
   const { train } = tables;
   const file = descriptor.file;
@@ -95,7 +98,15 @@ export async function planModel(
       );
     }
   }
-  const targetStats = meanAndSd(train.y, train.rows);
+  // `data.target_transform`: the fit and every figure of the passes work on t = g(y).
+  const transform = descriptor.data.targetTransform ?? null;
+  let originalTargets: ModelPlan['originalTargets'] = null;
+  if (transform !== null) {
+    const transformed = transformTables(tables, transform.kind, descriptor.data.target);
+    tables = transformed.tables;
+    originalTargets = transformed.original;
+  }
+  const targetStats = meanAndSd(tables.train.y, tables.train.rows);
   if (!(targetStats.sd > 0)) {
     throw new InputError(
       'constant-target',
@@ -106,5 +117,5 @@ export async function planModel(
   // The whole model's work, estimated from its shape before the first pass over the rows.
   checkBudget(descriptor, estimateCost(modelShape(descriptor, design, train.rows, tables.holdout.rows)), settings);
   const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-  return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(train) };
+  return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(tables.train), originalTargets };
 }

@@ -25,7 +25,15 @@ describe('examples/practitioner', () => {
       result.models.map((m) => m.verdict),
       summary.join('\n'),
     ).toEqual(result.models.map(() => 'pass'));
-    expect([...byName.keys()].sort()).toEqual(['cellar-sensor', 'must-cooling', 'refractometer', 'shop-demand', 'yeast-dose']);
+    expect([...byName.keys()].sort()).toEqual([
+      'cellar-sensor',
+      'haze-storage',
+      'must-cooling',
+      'press-batches',
+      'refractometer',
+      'shop-demand',
+      'yeast-dose',
+    ]);
     for (const m of result.models) {
       for (const id of ['holdout-r2', 'holdout-rmse', 'holdout-mae', 'chi-square', 'swing-spikes'])
         expect(m.checks.some((c) => c.id === id)).toBe(true);
@@ -53,5 +61,10 @@ describe('examples/practitioner', () => {
     expect(Math.min(...curve.x)).toBeCloseTo(lo / (hi / lo) ** 0.1, 6);
     expect(Math.max(...curve.x)).toBeCloseTo(hi * (hi / lo) ** 0.1, 6);
     expect(byName.get('must-cooling')?.checks.find((c) => c.id === 'complexity')?.detail).toMatchObject({ setting: 'knots' });
+    // The log-target model: both scales reported, the limits judge the original one.
+    const haze = byName.get('haze-storage');
+    expect(haze?.target_scale).toMatchObject({ transform: 'log', limits_scale: 'original', back_transform: 'exp' });
+    expect(haze?.metrics?.holdout_rmse).toBe(haze?.target_scale?.original.holdout_rmse);
+    expect(haze?.metrics?.holdout_rmse).not.toBe(haze?.target_scale?.transformed.holdout_rmse);
   });
 });

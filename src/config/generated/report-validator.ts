@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"scaleFigures":{"description":"Error figures of one scale of a transformed target.","type":"object","required":["train_rmse","holdout_rmse","train_mae","holdout_mae","train_r2","holdout_r2","gap_ratio","cv_rmse"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"cv_rmse":{"description":"Pooled k-fold cross-validation RMSE; null without cross-validation.","anyOf":[{"type":"null"},{"$ref":"#/$defs/jsonNumber"}]},"train_chi_square":{"description":"Reduced chi-square of the training rows (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"},"holdout_chi_square":{"description":"Chi-square of the hold-out rows per row (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"}}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,7 +54,7 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
@@ -124,36 +124,7 @@ return errors === 0;
 }
 validate68.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema24 = {"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}};
-const schema25 = {"description":"A 1-based line number.","type":"integer","minimum":1};
-
-function validate88(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
-let vErrors = null;
-let errors = 0;
-const evaluated0 = validate88.evaluated;
-if(evaluated0.dynamicProps){
-evaluated0.props = undefined;
-}
-if(evaluated0.dynamicItems){
-evaluated0.items = undefined;
-}
-if(!(((typeof data == "number") && (!(data % 1) && !isNaN(data))) && (isFinite(data)))){
-validate88.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
-return false;
-}
-if(errors === 0){
-if((typeof data == "number") && (isFinite(data))){
-if(data < 1 || isNaN(data)){
-validate88.errors = [{instancePath,schemaPath:"#/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
-return false;
-}
-}
-}
-validate88.errors = vErrors;
-return errors === 0;
-}
-validate88.evaluated = {"dynamicProps":false,"dynamicItems":false};
-
+const schema24 = {"description":"Error figures of one scale of a transformed target.","type":"object","required":["train_rmse","holdout_rmse","train_mae","holdout_mae","train_r2","holdout_r2","gap_ratio","cv_rmse"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"cv_rmse":{"description":"Pooled k-fold cross-validation RMSE; null without cross-validation.","anyOf":[{"type":"null"},{"$ref":"#/$defs/jsonNumber"}]},"train_chi_square":{"description":"Reduced chi-square of the training rows (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"},"holdout_chi_square":{"description":"Chi-square of the hold-out rows per row (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"}}};
 
 function validate86(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
@@ -168,7 +139,7 @@ evaluated0.items = undefined;
 if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
-if(((((((((((data.id === undefined) && (missing0 = "id")) || ((data.code === undefined) && (missing0 = "code"))) || ((data.status === undefined) && (missing0 = "status"))) || ((data.value === undefined) && (missing0 = "value"))) || ((data.limitKey === undefined) && (missing0 = "limitKey"))) || ((data.limit === undefined) && (missing0 = "limit"))) || ((data.warn === undefined) && (missing0 = "warn"))) || ((data.line === undefined) && (missing0 = "line"))) || ((data.message === undefined) && (missing0 = "message"))) || ((data.advice === undefined) && (missing0 = "advice"))){
+if(((((((((data.train_rmse === undefined) && (missing0 = "train_rmse")) || ((data.holdout_rmse === undefined) && (missing0 = "holdout_rmse"))) || ((data.train_mae === undefined) && (missing0 = "train_mae"))) || ((data.holdout_mae === undefined) && (missing0 = "holdout_mae"))) || ((data.train_r2 === undefined) && (missing0 = "train_r2"))) || ((data.holdout_r2 === undefined) && (missing0 = "holdout_r2"))) || ((data.gap_ratio === undefined) && (missing0 = "gap_ratio"))) || ((data.cv_rmse === undefined) && (missing0 = "cv_rmse"))){
 validate86.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
@@ -182,10 +153,251 @@ break;
 }
 }
 if(_errs1 === errors){
+if(data.train_rmse !== undefined){
+const _errs2 = errors;
+if(!(validate68(data.train_rmse, {instancePath:instancePath+"/train_rmse",parentData:data,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs2 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_rmse !== undefined){
+const _errs3 = errors;
+if(!(validate68(data.holdout_rmse, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs3 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.train_mae !== undefined){
+const _errs4 = errors;
+if(!(validate68(data.train_mae, {instancePath:instancePath+"/train_mae",parentData:data,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs4 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_mae !== undefined){
+const _errs5 = errors;
+if(!(validate68(data.holdout_mae, {instancePath:instancePath+"/holdout_mae",parentData:data,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs5 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.train_r2 !== undefined){
+const _errs6 = errors;
+if(!(validate68(data.train_r2, {instancePath:instancePath+"/train_r2",parentData:data,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs6 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_r2 !== undefined){
+const _errs7 = errors;
+if(!(validate68(data.holdout_r2, {instancePath:instancePath+"/holdout_r2",parentData:data,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs7 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.gap_ratio !== undefined){
+const _errs8 = errors;
+if(!(validate68(data.gap_ratio, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs8 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.cv_rmse !== undefined){
+let data7 = data.cv_rmse;
+const _errs9 = errors;
+const _errs10 = errors;
+let valid1 = false;
+const _errs11 = errors;
+if(data7 !== null){
+const err0 = {instancePath:instancePath+"/cv_rmse",schemaPath:"#/properties/cv_rmse/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+var _valid0 = _errs11 === errors;
+valid1 = valid1 || _valid0;
+const _errs13 = errors;
+if(!(validate68(data7, {instancePath:instancePath+"/cv_rmse",parentData:data,parentDataProperty:"cv_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid0 = _errs13 === errors;
+valid1 = valid1 || _valid0;
+if(!valid1){
+const err1 = {instancePath:instancePath+"/cv_rmse",schemaPath:"#/properties/cv_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+validate86.errors = vErrors;
+return false;
+}
+else {
+errors = _errs10;
+if(vErrors !== null){
+if(_errs10){
+vErrors.length = _errs10;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid0 = _errs9 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.train_chi_square !== undefined){
+const _errs14 = errors;
+if(!(validate68(data.train_chi_square, {instancePath:instancePath+"/train_chi_square",parentData:data,parentDataProperty:"train_chi_square",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs14 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_chi_square !== undefined){
+const _errs15 = errors;
+if(!(validate68(data.holdout_chi_square, {instancePath:instancePath+"/holdout_chi_square",parentData:data,parentDataProperty:"holdout_chi_square",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs15 === errors;
+}
+else {
+var valid0 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+validate86.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+validate86.errors = vErrors;
+return errors === 0;
+}
+validate86.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+
+const schema25 = {"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}};
+const schema26 = {"description":"A 1-based line number.","type":"integer","minimum":1};
+
+function validate101(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate101.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(!(((typeof data == "number") && (!(data % 1) && !isNaN(data))) && (isFinite(data)))){
+validate101.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
+return false;
+}
+if(errors === 0){
+if((typeof data == "number") && (isFinite(data))){
+if(data < 1 || isNaN(data)){
+validate101.errors = [{instancePath,schemaPath:"#/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
+return false;
+}
+}
+}
+validate101.errors = vErrors;
+return errors === 0;
+}
+validate101.evaluated = {"dynamicProps":false,"dynamicItems":false};
+
+
+function validate99(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate99.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(errors === 0){
+if(data && typeof data == "object" && !Array.isArray(data)){
+let missing0;
+if(((((((((((data.id === undefined) && (missing0 = "id")) || ((data.code === undefined) && (missing0 = "code"))) || ((data.status === undefined) && (missing0 = "status"))) || ((data.value === undefined) && (missing0 = "value"))) || ((data.limitKey === undefined) && (missing0 = "limitKey"))) || ((data.limit === undefined) && (missing0 = "limit"))) || ((data.warn === undefined) && (missing0 = "warn"))) || ((data.line === undefined) && (missing0 = "line"))) || ((data.message === undefined) && (missing0 = "message"))) || ((data.advice === undefined) && (missing0 = "advice"))){
+validate99.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+return false;
+}
+else {
+const _errs1 = errors;
+for(const key0 in data){
+if(!(func1.call(schema25.properties, key0))){
+validate99.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs1 === errors){
 if(data.id !== undefined){
 const _errs2 = errors;
 if(typeof data.id !== "string"){
-validate86.errors = [{instancePath:instancePath+"/id",schemaPath:"#/properties/id/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/id",schemaPath:"#/properties/id/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -197,7 +409,7 @@ if(valid0){
 if(data.code !== undefined){
 const _errs4 = errors;
 if(typeof data.code !== "string"){
-validate86.errors = [{instancePath:instancePath+"/code",schemaPath:"#/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/code",schemaPath:"#/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs4 === errors;
@@ -210,7 +422,7 @@ if(data.status !== undefined){
 let data2 = data.status;
 const _errs6 = errors;
 if(!((((data2 === "pass") || (data2 === "warn")) || (data2 === "fail")) || (data2 === "skipped"))){
-validate86.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema24.properties.status.enum},message:"must be equal to one of the allowed values"}];
+validate99.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema25.properties.status.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs6 === errors;
@@ -253,7 +465,7 @@ else {
 vErrors.push(err1);
 }
 errors++;
-validate86.errors = vErrors;
+validate99.errors = vErrors;
 return false;
 }
 else {
@@ -276,7 +488,7 @@ if(valid0){
 if(data.limitKey !== undefined){
 const _errs12 = errors;
 if(typeof data.limitKey !== "string"){
-validate86.errors = [{instancePath:instancePath+"/limitKey",schemaPath:"#/properties/limitKey/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/limitKey",schemaPath:"#/properties/limitKey/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs12 === errors;
@@ -289,7 +501,7 @@ if(data.limit !== undefined){
 let data5 = data.limit;
 const _errs14 = errors;
 if((!((typeof data5 == "number") && (isFinite(data5)))) && (data5 !== null)){
-validate86.errors = [{instancePath:instancePath+"/limit",schemaPath:"#/properties/limit/type",keyword:"type",params:{type: schema24.properties.limit.type},message:"must be number,null"}];
+validate99.errors = [{instancePath:instancePath+"/limit",schemaPath:"#/properties/limit/type",keyword:"type",params:{type: schema25.properties.limit.type},message:"must be number,null"}];
 return false;
 }
 var valid0 = _errs14 === errors;
@@ -302,7 +514,7 @@ if(data.warn !== undefined){
 let data6 = data.warn;
 const _errs16 = errors;
 if((!((typeof data6 == "number") && (isFinite(data6)))) && (data6 !== null)){
-validate86.errors = [{instancePath:instancePath+"/warn",schemaPath:"#/properties/warn/type",keyword:"type",params:{type: schema24.properties.warn.type},message:"must be number,null"}];
+validate99.errors = [{instancePath:instancePath+"/warn",schemaPath:"#/properties/warn/type",keyword:"type",params:{type: schema25.properties.warn.type},message:"must be number,null"}];
 return false;
 }
 var valid0 = _errs16 === errors;
@@ -318,14 +530,14 @@ if(errors === _errs18){
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 let missing1;
 if(((data7.warn === undefined) && (missing1 = "warn")) || ((data7.fail === undefined) && (missing1 = "fail"))){
-validate86.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+validate99.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
 const _errs20 = errors;
 for(const key1 in data7){
 if(!((key1 === "warn") || (key1 === "fail"))){
-validate86.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
+validate99.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -335,7 +547,7 @@ if(data7.warn !== undefined){
 let data8 = data7.warn;
 const _errs21 = errors;
 if((!((typeof data8 == "number") && (isFinite(data8)))) && (data8 !== null)){
-validate86.errors = [{instancePath:instancePath+"/floor/warn",schemaPath:"#/properties/floor/properties/warn/type",keyword:"type",params:{type: schema24.properties.floor.properties.warn.type},message:"must be number,null"}];
+validate99.errors = [{instancePath:instancePath+"/floor/warn",schemaPath:"#/properties/floor/properties/warn/type",keyword:"type",params:{type: schema25.properties.floor.properties.warn.type},message:"must be number,null"}];
 return false;
 }
 var valid2 = _errs21 === errors;
@@ -348,7 +560,7 @@ if(data7.fail !== undefined){
 let data9 = data7.fail;
 const _errs23 = errors;
 if((!((typeof data9 == "number") && (isFinite(data9)))) && (data9 !== null)){
-validate86.errors = [{instancePath:instancePath+"/floor/fail",schemaPath:"#/properties/floor/properties/fail/type",keyword:"type",params:{type: schema24.properties.floor.properties.fail.type},message:"must be number,null"}];
+validate99.errors = [{instancePath:instancePath+"/floor/fail",schemaPath:"#/properties/floor/properties/fail/type",keyword:"type",params:{type: schema25.properties.floor.properties.fail.type},message:"must be number,null"}];
 return false;
 }
 var valid2 = _errs23 === errors;
@@ -361,7 +573,7 @@ var valid2 = true;
 }
 }
 else {
-validate86.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate99.errors = [{instancePath:instancePath+"/floor",schemaPath:"#/properties/floor/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -373,8 +585,8 @@ var valid0 = true;
 if(valid0){
 if(data.line !== undefined){
 const _errs25 = errors;
-if(!(validate88(data.line, {instancePath:instancePath+"/line",parentData:data,parentDataProperty:"line",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+if(!(validate101(data.line, {instancePath:instancePath+"/line",parentData:data,parentDataProperty:"line",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs25 === errors;
@@ -386,7 +598,7 @@ if(valid0){
 if(data.message !== undefined){
 const _errs26 = errors;
 if(typeof data.message !== "string"){
-validate86.errors = [{instancePath:instancePath+"/message",schemaPath:"#/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/message",schemaPath:"#/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs26 === errors;
@@ -398,7 +610,7 @@ if(valid0){
 if(data.advice !== undefined){
 const _errs28 = errors;
 if(typeof data.advice !== "string"){
-validate86.errors = [{instancePath:instancePath+"/advice",schemaPath:"#/properties/advice/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/advice",schemaPath:"#/properties/advice/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs28 === errors;
@@ -414,14 +626,14 @@ if(errors === _errs30){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
 if(((data13.text === undefined) && (missing2 = "text")) || ((data13.line === undefined) && (missing2 = "line"))){
-validate86.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs32 = errors;
 for(const key2 in data13){
 if(!(((key2 === "text") || (key2 === "line")) || (key2 === "change"))){
-validate86.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -430,7 +642,7 @@ if(_errs32 === errors){
 if(data13.text !== undefined){
 const _errs33 = errors;
 if(typeof data13.text !== "string"){
-validate86.errors = [{instancePath:instancePath+"/suggestion/text",schemaPath:"#/properties/suggestion/properties/text/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion/text",schemaPath:"#/properties/suggestion/properties/text/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid3 = _errs33 === errors;
@@ -441,8 +653,8 @@ var valid3 = true;
 if(valid3){
 if(data13.line !== undefined){
 const _errs35 = errors;
-if(!(validate88(data13.line, {instancePath:instancePath+"/suggestion/line",parentData:data13,parentDataProperty:"line",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+if(!(validate101(data13.line, {instancePath:instancePath+"/suggestion/line",parentData:data13,parentDataProperty:"line",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs35 === errors;
@@ -458,14 +670,14 @@ if(errors === _errs36){
 if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
 let missing3;
 if(((data16.key === undefined) && (missing3 = "key")) || ((data16.value === undefined) && (missing3 = "value"))){
-validate86.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
 const _errs38 = errors;
 for(const key3 in data16){
 if(!((key3 === "key") || (key3 === "value"))){
-validate86.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -474,7 +686,7 @@ if(_errs38 === errors){
 if(data16.key !== undefined){
 const _errs39 = errors;
 if(typeof data16.key !== "string"){
-validate86.errors = [{instancePath:instancePath+"/suggestion/change/key",schemaPath:"#/properties/suggestion/properties/change/properties/key/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion/change/key",schemaPath:"#/properties/suggestion/properties/change/properties/key/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid4 = _errs39 === errors;
@@ -487,7 +699,7 @@ if(data16.value !== undefined){
 let data18 = data16.value;
 const _errs41 = errors;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-validate86.errors = [{instancePath:instancePath+"/suggestion/change/value",schemaPath:"#/properties/suggestion/properties/change/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion/change/value",schemaPath:"#/properties/suggestion/properties/change/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid4 = _errs41 === errors;
@@ -500,7 +712,7 @@ var valid4 = true;
 }
 }
 else {
-validate86.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion/change",schemaPath:"#/properties/suggestion/properties/change/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -515,7 +727,7 @@ var valid3 = true;
 }
 }
 else {
-validate86.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate99.errors = [{instancePath:instancePath+"/suggestion",schemaPath:"#/properties/suggestion/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -539,21 +751,21 @@ var valid0 = true;
 }
 }
 else {
-validate86.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate99.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate86.errors = vErrors;
+validate99.errors = vErrors;
 return errors === 0;
 }
-validate86.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate99.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema26 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
+const schema27 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
 
-function validate92(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate105(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate92.evaluated;
+const evaluated0 = validate105.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -564,14 +776,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if(((((((data.status === undefined) && (missing0 = "status")) || ((data.commit === undefined) && (missing0 = "commit"))) || ((data.holdout_rmse === undefined) && (missing0 = "holdout_rmse"))) || ((data.gap_ratio === undefined) && (missing0 = "gap_ratio"))) || ((data.holdout_rmse_change === undefined) && (missing0 = "holdout_rmse_change"))) || ((data.gap_ratio_change === undefined) && (missing0 = "gap_ratio_change"))){
-validate92.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate105.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!((((((key0 === "status") || (key0 === "commit")) || (key0 === "holdout_rmse")) || (key0 === "gap_ratio")) || (key0 === "holdout_rmse_change")) || (key0 === "gap_ratio_change"))){
-validate92.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate105.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -581,7 +793,7 @@ if(data.status !== undefined){
 let data0 = data.status;
 const _errs2 = errors;
 if(!((data0 === "new") || (data0 === "compared"))){
-validate92.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema26.properties.status.enum},message:"must be equal to one of the allowed values"}];
+validate105.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema27.properties.status.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -593,7 +805,7 @@ if(valid0){
 if(data.commit !== undefined){
 const _errs3 = errors;
 if(typeof data.commit !== "string"){
-validate92.errors = [{instancePath:instancePath+"/commit",schemaPath:"#/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate105.errors = [{instancePath:instancePath+"/commit",schemaPath:"#/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs3 === errors;
@@ -636,7 +848,7 @@ else {
 vErrors.push(err1);
 }
 errors++;
-validate92.errors = vErrors;
+validate105.errors = vErrors;
 return false;
 }
 else {
@@ -690,7 +902,7 @@ else {
 vErrors.push(err3);
 }
 errors++;
-validate92.errors = vErrors;
+validate105.errors = vErrors;
 return false;
 }
 else {
@@ -744,7 +956,7 @@ else {
 vErrors.push(err5);
 }
 errors++;
-validate92.errors = vErrors;
+validate105.errors = vErrors;
 return false;
 }
 else {
@@ -798,7 +1010,7 @@ else {
 vErrors.push(err7);
 }
 errors++;
-validate92.errors = vErrors;
+validate105.errors = vErrors;
 return false;
 }
 else {
@@ -826,24 +1038,24 @@ var valid0 = true;
 }
 }
 else {
-validate92.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate105.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate92.errors = vErrors;
+validate105.errors = vErrors;
 return errors === 0;
 }
-validate92.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate105.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema27 = {"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}};
-const schema28 = {"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}};
-const schema29 = {"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}};
-const schema30 = {"description":"A finite number, or null.","type":["number","null"]};
+const schema28 = {"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}};
+const schema29 = {"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}};
+const schema30 = {"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}};
+const schema31 = {"description":"A finite number, or null.","type":["number","null"]};
 
-function validate107(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate120(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate107.evaluated;
+const evaluated0 = validate120.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -851,19 +1063,19 @@ if(evaluated0.dynamicItems){
 evaluated0.items = undefined;
 }
 if((!((typeof data == "number") && (isFinite(data)))) && (data !== null)){
-validate107.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema30.type},message:"must be number,null"}];
+validate120.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema31.type},message:"must be number,null"}];
 return false;
 }
-validate107.errors = vErrors;
+validate120.errors = vErrors;
 return errors === 0;
 }
-validate107.evaluated = {"dynamicProps":false,"dynamicItems":false};
+validate120.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
 
-function validate106(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate119(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate106.evaluated;
+const evaluated0 = validate119.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -876,8 +1088,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate107(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -887,20 +1099,20 @@ break;
 }
 }
 else {
-validate106.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate119.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate106.errors = vErrors;
+validate119.errors = vErrors;
 return errors === 0;
 }
-validate106.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate119.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate101(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate114(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate101.evaluated;
+const evaluated0 = validate114.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -911,14 +1123,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((((((data.rows === undefined) && (missing0 = "rows")) || ((data.shown === undefined) && (missing0 = "shown"))) || ((data.thinned === undefined) && (missing0 = "thinned"))) || ((data.thinning === undefined) && (missing0 = "thinning"))) || ((data.lines === undefined) && (missing0 = "lines"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.actual === undefined) && (missing0 = "actual"))) || ((data.fitted === undefined) && (missing0 = "fitted"))) || ((data.residual === undefined) && (missing0 = "residual"))){
-validate101.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate114.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
-if(!(func1.call(schema28.properties, key0))){
-validate101.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+if(!(func1.call(schema29.properties, key0))){
+validate114.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -951,7 +1163,7 @@ if(valid0){
 if(data.thinned !== undefined){
 const _errs4 = errors;
 if(typeof data.thinned !== "boolean"){
-validate101.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
+validate114.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
 return false;
 }
 var valid0 = _errs4 === errors;
@@ -963,7 +1175,7 @@ if(valid0){
 if(data.thinning !== undefined){
 const _errs6 = errors;
 if(typeof data.thinning !== "string"){
-validate101.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate114.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs6 === errors;
@@ -981,8 +1193,8 @@ var valid1 = true;
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
 const _errs10 = errors;
-if(!(validate88(data4[i0], {instancePath:instancePath+"/lines/" + i0,parentData:data4,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+if(!(validate101(data4[i0], {instancePath:instancePath+"/lines/" + i0,parentData:data4,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
 var valid1 = _errs10 === errors;
@@ -992,7 +1204,7 @@ break;
 }
 }
 else {
-validate101.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate114.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1012,7 +1224,7 @@ const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs13 = errors;
 if(typeof data6[i1] !== "string"){
-validate101.errors = [{instancePath:instancePath+"/files/" + i1,schemaPath:"#/properties/files/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate114.errors = [{instancePath:instancePath+"/files/" + i1,schemaPath:"#/properties/files/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid2 = _errs13 === errors;
@@ -1022,7 +1234,7 @@ break;
 }
 }
 else {
-validate101.errors = [{instancePath:instancePath+"/files",schemaPath:"#/properties/files/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate114.errors = [{instancePath:instancePath+"/files",schemaPath:"#/properties/files/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1052,7 +1264,7 @@ break;
 }
 }
 else {
-validate101.errors = [{instancePath:instancePath+"/file_index",schemaPath:"#/properties/file_index/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate114.errors = [{instancePath:instancePath+"/file_index",schemaPath:"#/properties/file_index/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1071,8 +1283,8 @@ var valid4 = true;
 const len3 = data10.length;
 for(let i3=0; i3<len3; i3++){
 const _errs20 = errors;
-if(!(validate106(data10[i3], {instancePath:instancePath+"/x/" + i3,parentData:data10,parentDataProperty:i3,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data10[i3], {instancePath:instancePath+"/x/" + i3,parentData:data10,parentDataProperty:i3,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid4 = _errs20 === errors;
@@ -1082,7 +1294,7 @@ break;
 }
 }
 else {
-validate101.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate114.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1094,8 +1306,8 @@ var valid0 = true;
 if(valid0){
 if(data.actual !== undefined){
 const _errs21 = errors;
-if(!(validate106(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs21 === errors;
@@ -1106,8 +1318,8 @@ var valid0 = true;
 if(valid0){
 if(data.fitted !== undefined){
 const _errs22 = errors;
-if(!(validate106(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs22 === errors;
@@ -1118,8 +1330,8 @@ var valid0 = true;
 if(valid0){
 if(data.residual !== undefined){
 const _errs23 = errors;
-if(!(validate106(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs23 === errors;
@@ -1141,22 +1353,22 @@ var valid0 = true;
 }
 }
 else {
-validate101.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate114.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate101.errors = vErrors;
+validate114.errors = vErrors;
 return errors === 0;
 }
-validate101.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate114.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema31 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
-const schema32 = {"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}};
+const schema32 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
+const schema33 = {"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}};
 
-function validate116(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate129(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate116.evaluated;
+const evaluated0 = validate129.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1166,12 +1378,12 @@ evaluated0.items = undefined;
 if(errors === 0){
 if(Array.isArray(data)){
 if(data.length > 2){
-validate116.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
+validate129.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
 return false;
 }
 else {
 if(data.length < 2){
-validate116.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
+validate129.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
 return false;
 }
 else {
@@ -1179,8 +1391,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate107(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -1192,21 +1404,21 @@ break;
 }
 }
 else {
-validate116.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate129.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate116.errors = vErrors;
+validate129.errors = vErrors;
 return errors === 0;
 }
-validate116.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate129.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema33 = {"description":"Finite numbers.","type":"array","items":{"type":"number"}};
+const schema34 = {"description":"Finite numbers.","type":"array","items":{"type":"number"}};
 
-function validate119(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate132(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate119.evaluated;
+const evaluated0 = validate132.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1221,7 +1433,7 @@ for(let i0=0; i0<len0; i0++){
 let data0 = data[i0];
 const _errs1 = errors;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-validate119.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate132.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid0 = _errs1 === errors;
@@ -1231,20 +1443,20 @@ break;
 }
 }
 else {
-validate119.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate132.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate119.errors = vErrors;
+validate132.errors = vErrors;
 return errors === 0;
 }
-validate119.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate132.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate115(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate128(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate115.evaluated;
+const evaluated0 = validate128.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1255,14 +1467,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((data.input === undefined) && (missing0 = "input")) || ((data.others === undefined) && (missing0 = "others"))) || ((data.range === undefined) && (missing0 = "range"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.y === undefined) && (missing0 = "y"))){
-validate115.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate128.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
-if(!(func1.call(schema31.properties, key0))){
-validate115.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+if(!(func1.call(schema32.properties, key0))){
+validate128.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1271,7 +1483,7 @@ if(_errs1 === errors){
 if(data.input !== undefined){
 const _errs2 = errors;
 if(typeof data.input !== "string"){
-validate115.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate128.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1289,7 +1501,7 @@ for(const key1 in data1){
 let data2 = data1[key1];
 const _errs7 = errors;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-validate115.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate128.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid1 = _errs7 === errors;
@@ -1299,7 +1511,7 @@ break;
 }
 }
 else {
-validate115.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate128.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1311,8 +1523,8 @@ var valid0 = true;
 if(valid0){
 if(data.range !== undefined){
 const _errs9 = errors;
-if(!(validate116(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
+if(!(validate129(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate129.errors : vErrors.concat(validate129.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -1323,8 +1535,8 @@ var valid0 = true;
 if(valid0){
 if(data.x !== undefined){
 const _errs10 = errors;
-if(!(validate119(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate132(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate132.errors : vErrors.concat(validate132.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs10 === errors;
@@ -1335,8 +1547,8 @@ var valid0 = true;
 if(valid0){
 if(data.y !== undefined){
 const _errs11 = errors;
-if(!(validate106(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs11 === errors;
@@ -1347,8 +1559,8 @@ var valid0 = true;
 if(valid0){
 if(data.band !== undefined){
 const _errs12 = errors;
-if(!(validate116(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
+if(!(validate129(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate129.errors : vErrors.concat(validate129.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs12 === errors;
@@ -1371,14 +1583,14 @@ if(errors === _errs15){
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 let missing1;
 if((((data8.from === undefined) && (missing1 = "from")) || ((data8.to === undefined) && (missing1 = "to"))) || ((data8.side === undefined) && (missing1 = "side"))){
-validate115.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+validate128.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
 const _errs17 = errors;
 for(const key2 in data8){
 if(!(((key2 === "from") || (key2 === "to")) || (key2 === "side"))){
-validate115.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate128.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1386,8 +1598,8 @@ break;
 if(_errs17 === errors){
 if(data8.from !== undefined){
 const _errs18 = errors;
-if(!(validate107(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1398,8 +1610,8 @@ var valid3 = true;
 if(valid3){
 if(data8.to !== undefined){
 const _errs19 = errors;
-if(!(validate107(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs19 === errors;
@@ -1412,7 +1624,7 @@ if(data8.side !== undefined){
 let data11 = data8.side;
 const _errs20 = errors;
 if(!((data11 === "above") || (data11 === "below"))){
-validate115.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema31.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
+validate128.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema32.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid3 = _errs20 === errors;
@@ -1426,7 +1638,7 @@ var valid3 = true;
 }
 }
 else {
-validate115.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate128.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1437,7 +1649,7 @@ break;
 }
 }
 else {
-validate115.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate128.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1451,7 +1663,7 @@ if(data.source !== undefined){
 let data12 = data.source;
 const _errs21 = errors;
 if(!((data12 === "swing") || (data12 === "data"))){
-validate115.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema31.properties.source.enum},message:"must be equal to one of the allowed values"}];
+validate128.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema32.properties.source.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs21 === errors;
@@ -1460,30 +1672,31 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.base !== undefined){
-let data13 = data.base;
+if(data.spikes !== undefined){
+let data13 = data.spikes;
 const _errs22 = errors;
 if(errors === _errs22){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
-if((((data13.commit === undefined) && (missing2 = "commit")) || ((data13.x === undefined) && (missing2 = "x"))) || ((data13.y === undefined) && (missing2 = "y"))){
-validate115.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+if(((data13.limit === undefined) && (missing2 = "limit")) || ((data13.intervals === undefined) && (missing2 = "intervals"))){
+validate128.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs24 = errors;
 for(const key3 in data13){
-if(!(((key3 === "commit") || (key3 === "x")) || (key3 === "y"))){
-validate115.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+if(!(((key3 === "limit") || (key3 === "intervals")) || (key3 === "left_out"))){
+validate128.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
 }
 if(_errs24 === errors){
-if(data13.commit !== undefined){
+if(data13.limit !== undefined){
+let data14 = data13.limit;
 const _errs25 = errors;
-if(typeof data13.commit !== "string"){
-validate115.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+if(!((typeof data14 == "number") && (isFinite(data14)))){
+validate128.errors = [{instancePath:instancePath+"/spikes/limit",schemaPath:"#/properties/spikes/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid4 = _errs25 === errors;
@@ -1492,11 +1705,103 @@ else {
 var valid4 = true;
 }
 if(valid4){
-if(data13.x !== undefined){
+if(data13.intervals !== undefined){
+let data15 = data13.intervals;
 const _errs27 = errors;
-if(!(validate119(data13.x, {instancePath:instancePath+"/base/x",parentData:data13,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(errors === _errs27){
+if(Array.isArray(data15)){
+var valid5 = true;
+const len1 = data15.length;
+for(let i1=0; i1<len1; i1++){
+let data16 = data15[i1];
+const _errs29 = errors;
+if(errors === _errs29){
+if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
+let missing3;
+if(((((data16.from === undefined) && (missing3 = "from")) || ((data16.to === undefined) && (missing3 = "to"))) || ((data16.variation === undefined) && (missing3 = "variation"))) || ((data16.allowed === undefined) && (missing3 = "allowed"))){
+validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+return false;
+}
+else {
+const _errs31 = errors;
+for(const key4 in data16){
+if(!((((key4 === "from") || (key4 === "to")) || (key4 === "variation")) || (key4 === "allowed"))){
+validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs31 === errors){
+if(data16.from !== undefined){
+let data17 = data16.from;
+const _errs32 = errors;
+if(!((typeof data17 == "number") && (isFinite(data17)))){
+validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/from",schemaPath:"#/properties/spikes/properties/intervals/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid6 = _errs32 === errors;
+}
+else {
+var valid6 = true;
+}
+if(valid6){
+if(data16.to !== undefined){
+let data18 = data16.to;
+const _errs34 = errors;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/to",schemaPath:"#/properties/spikes/properties/intervals/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid6 = _errs34 === errors;
+}
+else {
+var valid6 = true;
+}
+if(valid6){
+if(data16.variation !== undefined){
+const _errs36 = errors;
+if(!(validate120(data16.variation, {instancePath:instancePath+"/spikes/intervals/" + i1+"/variation",parentData:data16,parentDataProperty:"variation",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
+}
+var valid6 = _errs36 === errors;
+}
+else {
+var valid6 = true;
+}
+if(valid6){
+if(data16.allowed !== undefined){
+const _errs37 = errors;
+if(!(validate120(data16.allowed, {instancePath:instancePath+"/spikes/intervals/" + i1+"/allowed",parentData:data16,parentDataProperty:"allowed",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+errors = vErrors.length;
+}
+var valid6 = _errs37 === errors;
+}
+else {
+var valid6 = true;
+}
+}
+}
+}
+}
+}
+}
+else {
+validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid5 = _errs29 === errors;
+if(!valid5){
+break;
+}
+}
+}
+else {
+validate128.errors = [{instancePath:instancePath+"/spikes/intervals",schemaPath:"#/properties/spikes/properties/intervals/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
 }
 var valid4 = _errs27 === errors;
 }
@@ -1504,13 +1809,22 @@ else {
 var valid4 = true;
 }
 if(valid4){
-if(data13.y !== undefined){
-const _errs28 = errors;
-if(!(validate106(data13.y, {instancePath:instancePath+"/base/y",parentData:data13,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
-errors = vErrors.length;
+if(data13.left_out !== undefined){
+let data21 = data13.left_out;
+const _errs38 = errors;
+if(!(((typeof data21 == "number") && (!(data21 % 1) && !isNaN(data21))) && (isFinite(data21)))){
+validate128.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
+return false;
 }
-var valid4 = _errs28 === errors;
+if(errors === _errs38){
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 < 1 || isNaN(data21)){
+validate128.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
+return false;
+}
+}
+}
+var valid4 = _errs38 === errors;
 }
 else {
 var valid4 = true;
@@ -1521,11 +1835,82 @@ var valid4 = true;
 }
 }
 else {
-validate115.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate128.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
 var valid0 = _errs22 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.base !== undefined){
+let data22 = data.base;
+const _errs40 = errors;
+if(errors === _errs40){
+if(data22 && typeof data22 == "object" && !Array.isArray(data22)){
+let missing4;
+if((((data22.commit === undefined) && (missing4 = "commit")) || ((data22.x === undefined) && (missing4 = "x"))) || ((data22.y === undefined) && (missing4 = "y"))){
+validate128.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"}];
+return false;
+}
+else {
+const _errs42 = errors;
+for(const key5 in data22){
+if(!(((key5 === "commit") || (key5 === "x")) || (key5 === "y"))){
+validate128.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs42 === errors){
+if(data22.commit !== undefined){
+const _errs43 = errors;
+if(typeof data22.commit !== "string"){
+validate128.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid7 = _errs43 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data22.x !== undefined){
+const _errs45 = errors;
+if(!(validate132(data22.x, {instancePath:instancePath+"/base/x",parentData:data22,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate132.errors : vErrors.concat(validate132.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs45 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data22.y !== undefined){
+const _errs46 = errors;
+if(!(validate119(data22.y, {instancePath:instancePath+"/base/y",parentData:data22,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs46 === errors;
+}
+else {
+var valid7 = true;
+}
+}
+}
+}
+}
+}
+else {
+validate128.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs40 === errors;
 }
 else {
 var valid0 = true;
@@ -1541,21 +1926,22 @@ var valid0 = true;
 }
 }
 }
+}
 else {
-validate115.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate128.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate115.errors = vErrors;
+validate128.errors = vErrors;
 return errors === 0;
 }
-validate115.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate128.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate100(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate113(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate100.evaluated;
+const evaluated0 = validate113.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1566,14 +1952,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if(((((((((data.target === undefined) && (missing0 = "target")) || ((data.inputs === undefined) && (missing0 = "inputs"))) || ((data.train === undefined) && (missing0 = "train"))) || ((data.holdout === undefined) && (missing0 = "holdout"))) || ((data.fit === undefined) && (missing0 = "fit"))) || ((data.partials === undefined) && (missing0 = "partials"))) || ((data.sweep === undefined) && (missing0 = "sweep"))) || ((data.coefficients === undefined) && (missing0 = "coefficients"))){
-validate100.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate113.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!((((((((key0 === "target") || (key0 === "inputs")) || (key0 === "train")) || (key0 === "holdout")) || (key0 === "fit")) || (key0 === "partials")) || (key0 === "sweep")) || (key0 === "coefficients"))){
-validate100.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate113.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1582,7 +1968,7 @@ if(_errs1 === errors){
 if(data.target !== undefined){
 const _errs2 = errors;
 if(typeof data.target !== "string"){
-validate100.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate113.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1601,7 +1987,7 @@ const len0 = data1.length;
 for(let i0=0; i0<len0; i0++){
 const _errs6 = errors;
 if(typeof data1[i0] !== "string"){
-validate100.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate113.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid1 = _errs6 === errors;
@@ -1611,7 +1997,7 @@ break;
 }
 }
 else {
-validate100.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate113.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1623,8 +2009,8 @@ var valid0 = true;
 if(valid0){
 if(data.train !== undefined){
 const _errs8 = errors;
-if(!(validate101(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
+if(!(validate114(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs8 === errors;
@@ -1635,8 +2021,8 @@ var valid0 = true;
 if(valid0){
 if(data.holdout !== undefined){
 const _errs9 = errors;
-if(!(validate101(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
+if(!(validate114(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -1664,8 +2050,8 @@ errors++;
 var _valid0 = _errs12 === errors;
 valid2 = valid2 || _valid0;
 const _errs14 = errors;
-if(!(validate115(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
+if(!(validate128(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate128.errors : vErrors.concat(validate128.errors);
 errors = vErrors.length;
 }
 if(errors === _errs14){
@@ -1704,7 +2090,7 @@ else {
 vErrors.push(err3);
 }
 errors++;
-validate100.errors = vErrors;
+validate113.errors = vErrors;
 return false;
 }
 else {
@@ -1733,8 +2119,8 @@ var valid3 = true;
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs18 = errors;
-if(!(validate115(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
+if(!(validate128(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate128.errors : vErrors.concat(validate128.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1744,7 +2130,7 @@ break;
 }
 }
 else {
-validate100.errors = [{instancePath:instancePath+"/partials",schemaPath:"#/properties/partials/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate113.errors = [{instancePath:instancePath+"/partials",schemaPath:"#/properties/partials/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1840,8 +2226,8 @@ var valid5 = true;
 if(valid5){
 if(data8.settings !== undefined){
 const _errs30 = errors;
-if(!(validate119(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate132(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate132.errors : vErrors.concat(validate132.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs30 === errors;
@@ -1852,8 +2238,8 @@ var valid5 = true;
 if(valid5){
 if(data8.cv !== undefined){
 const _errs31 = errors;
-if(!(validate106(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs31 === errors;
@@ -1881,8 +2267,8 @@ errors++;
 var _valid2 = _errs34 === errors;
 valid6 = valid6 || _valid2;
 const _errs36 = errors;
-if(!(validate106(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var _valid2 = _errs36 === errors;
@@ -1916,8 +2302,8 @@ var valid5 = true;
 if(valid5){
 if(data8.chosen !== undefined){
 const _errs37 = errors;
-if(!(validate107(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs37 === errors;
@@ -1928,8 +2314,8 @@ var valid5 = true;
 if(valid5){
 if(data8.suggested !== undefined){
 const _errs38 = errors;
-if(!(validate107(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs38 === errors;
@@ -1968,7 +2354,7 @@ else {
 vErrors.push(err12);
 }
 errors++;
-validate100.errors = vErrors;
+validate113.errors = vErrors;
 return false;
 }
 else {
@@ -1995,14 +2381,14 @@ if(errors === _errs39){
 if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
 let missing3;
 if(((((data16.columns === undefined) && (missing3 = "columns")) || ((data16.values === undefined) && (missing3 = "values"))) || ((data16.limit === undefined) && (missing3 = "limit"))) || ((data16.warn === undefined) && (missing3 = "warn"))){
-validate100.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+validate113.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
 const _errs41 = errors;
 for(const key2 in data16){
 if(!((((key2 === "columns") || (key2 === "values")) || (key2 === "limit")) || (key2 === "warn"))){
-validate100.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate113.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -2018,7 +2404,7 @@ const len2 = data17.length;
 for(let i2=0; i2<len2; i2++){
 const _errs44 = errors;
 if(typeof data17[i2] !== "string"){
-validate100.errors = [{instancePath:instancePath+"/coefficients/columns/" + i2,schemaPath:"#/properties/coefficients/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate113.errors = [{instancePath:instancePath+"/coefficients/columns/" + i2,schemaPath:"#/properties/coefficients/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid8 = _errs44 === errors;
@@ -2028,7 +2414,7 @@ break;
 }
 }
 else {
-validate100.errors = [{instancePath:instancePath+"/coefficients/columns",schemaPath:"#/properties/coefficients/properties/columns/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate113.errors = [{instancePath:instancePath+"/coefficients/columns",schemaPath:"#/properties/coefficients/properties/columns/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -2040,8 +2426,8 @@ var valid7 = true;
 if(valid7){
 if(data16.values !== undefined){
 const _errs46 = errors;
-if(!(validate106(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate106.errors : vErrors.concat(validate106.errors);
+if(!(validate119(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs46 === errors;
@@ -2052,8 +2438,8 @@ var valid7 = true;
 if(valid7){
 if(data16.limit !== undefined){
 const _errs47 = errors;
-if(!(validate107(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs47 === errors;
@@ -2064,8 +2450,8 @@ var valid7 = true;
 if(valid7){
 if(data16.warn !== undefined){
 const _errs48 = errors;
-if(!(validate107(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate107.errors : vErrors.concat(validate107.errors);
+if(!(validate120(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs48 === errors;
@@ -2080,7 +2466,7 @@ var valid7 = true;
 }
 }
 else {
-validate100.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate113.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -2100,14 +2486,14 @@ var valid0 = true;
 }
 }
 else {
-validate100.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate113.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate100.errors = vErrors;
+validate113.errors = vErrors;
 return errors === 0;
 }
-validate100.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate113.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
 function validate61(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -2904,27 +3290,97 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.checks !== undefined){
-let data39 = data.checks;
+if(data.target_scale !== undefined){
+let data39 = data.target_scale;
 const _errs75 = errors;
 if(errors === _errs75){
-if(Array.isArray(data39)){
-var valid14 = true;
-const len4 = data39.length;
-for(let i4=0; i4<len4; i4++){
+if(data39 && typeof data39 == "object" && !Array.isArray(data39)){
+let missing5;
+if((((((data39.transform === undefined) && (missing5 = "transform")) || ((data39.limits_scale === undefined) && (missing5 = "limits_scale"))) || ((data39.back_transform === undefined) && (missing5 = "back_transform"))) || ((data39.original === undefined) && (missing5 = "original"))) || ((data39.transformed === undefined) && (missing5 = "transformed"))){
+validate61.errors = [{instancePath:instancePath+"/target_scale",schemaPath:"#/properties/target_scale/required",keyword:"required",params:{missingProperty: missing5},message:"must have required property '"+missing5+"'"}];
+return false;
+}
+else {
 const _errs77 = errors;
-if(!(validate86(data39[i4], {instancePath:instancePath+"/checks/" + i4,parentData:data39,parentDataProperty:i4,rootData,dynamicAnchors}))){
+for(const key6 in data39){
+if(!(((((key6 === "transform") || (key6 === "limits_scale")) || (key6 === "back_transform")) || (key6 === "original")) || (key6 === "transformed"))){
+validate61.errors = [{instancePath:instancePath+"/target_scale",schemaPath:"#/properties/target_scale/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs77 === errors){
+if(data39.transform !== undefined){
+let data40 = data39.transform;
+const _errs78 = errors;
+if(!(((data40 === "log") || (data40 === "log1p")) || (data40 === "sqrt"))){
+validate61.errors = [{instancePath:instancePath+"/target_scale/transform",schemaPath:"#/properties/target_scale/properties/transform/enum",keyword:"enum",params:{allowedValues: schema22.properties.target_scale.properties.transform.enum},message:"must be equal to one of the allowed values"}];
+return false;
+}
+var valid14 = _errs78 === errors;
+}
+else {
+var valid14 = true;
+}
+if(valid14){
+if(data39.limits_scale !== undefined){
+let data41 = data39.limits_scale;
+const _errs79 = errors;
+if(!((data41 === "original") || (data41 === "transformed"))){
+validate61.errors = [{instancePath:instancePath+"/target_scale/limits_scale",schemaPath:"#/properties/target_scale/properties/limits_scale/enum",keyword:"enum",params:{allowedValues: schema22.properties.target_scale.properties.limits_scale.enum},message:"must be equal to one of the allowed values"}];
+return false;
+}
+var valid14 = _errs79 === errors;
+}
+else {
+var valid14 = true;
+}
+if(valid14){
+if(data39.back_transform !== undefined){
+let data42 = data39.back_transform;
+const _errs80 = errors;
+if(!(((data42 === "exp") || (data42 === "expm1")) || (data42 === "square"))){
+validate61.errors = [{instancePath:instancePath+"/target_scale/back_transform",schemaPath:"#/properties/target_scale/properties/back_transform/enum",keyword:"enum",params:{allowedValues: schema22.properties.target_scale.properties.back_transform.enum},message:"must be equal to one of the allowed values"}];
+return false;
+}
+var valid14 = _errs80 === errors;
+}
+else {
+var valid14 = true;
+}
+if(valid14){
+if(data39.original !== undefined){
+const _errs81 = errors;
+if(!(validate86(data39.original, {instancePath:instancePath+"/target_scale/original",parentData:data39,parentDataProperty:"original",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid14 = _errs77 === errors;
-if(!valid14){
-break;
+var valid14 = _errs81 === errors;
+}
+else {
+var valid14 = true;
+}
+if(valid14){
+if(data39.transformed !== undefined){
+const _errs82 = errors;
+if(!(validate86(data39.transformed, {instancePath:instancePath+"/target_scale/transformed",parentData:data39,parentDataProperty:"transformed",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
+errors = vErrors.length;
+}
+var valid14 = _errs82 === errors;
+}
+else {
+var valid14 = true;
+}
+}
+}
+}
+}
 }
 }
 }
 else {
-validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properties/checks/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate61.errors = [{instancePath:instancePath+"/target_scale",schemaPath:"#/properties/target_scale/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -2934,25 +3390,55 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.base !== undefined){
-const _errs78 = errors;
-if(!(validate92(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
+if(data.checks !== undefined){
+let data45 = data.checks;
+const _errs83 = errors;
+if(errors === _errs83){
+if(Array.isArray(data45)){
+var valid15 = true;
+const len4 = data45.length;
+for(let i4=0; i4<len4; i4++){
+const _errs85 = errors;
+if(!(validate99(data45[i4], {instancePath:instancePath+"/checks/" + i4,parentData:data45,parentDataProperty:i4,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate99.errors : vErrors.concat(validate99.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs78 === errors;
+var valid15 = _errs85 === errors;
+if(!valid15){
+break;
+}
+}
+}
+else {
+validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properties/checks/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs83 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.base !== undefined){
+const _errs86 = errors;
+if(!(validate105(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs86 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.error !== undefined){
-let data42 = data.error;
-const _errs79 = errors;
-const _errs80 = errors;
-let valid15 = false;
-const _errs81 = errors;
-if(data42 !== null){
+let data48 = data.error;
+const _errs87 = errors;
+const _errs88 = errors;
+let valid16 = false;
+const _errs89 = errors;
+if(data48 !== null){
 const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err12];
@@ -2962,14 +3448,14 @@ vErrors.push(err12);
 }
 errors++;
 }
-var _valid3 = _errs81 === errors;
-valid15 = valid15 || _valid3;
-const _errs83 = errors;
-if(errors === _errs83){
-if(data42 && typeof data42 == "object" && !Array.isArray(data42)){
-let missing5;
-if(((((data42.message === undefined) && (missing5 = "message")) || ((data42.file === undefined) && (missing5 = "file"))) || ((data42.line === undefined) && (missing5 = "line"))) || ((data42.code === undefined) && (missing5 = "code"))){
-const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing5},message:"must have required property '"+missing5+"'"};
+var _valid3 = _errs89 === errors;
+valid16 = valid16 || _valid3;
+const _errs91 = errors;
+if(errors === _errs91){
+if(data48 && typeof data48 == "object" && !Array.isArray(data48)){
+let missing6;
+if(((((data48.message === undefined) && (missing6 = "message")) || ((data48.file === undefined) && (missing6 = "file"))) || ((data48.line === undefined) && (missing6 = "line"))) || ((data48.code === undefined) && (missing6 = "code"))){
+const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing6},message:"must have required property '"+missing6+"'"};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2979,10 +3465,10 @@ vErrors.push(err13);
 errors++;
 }
 else {
-const _errs85 = errors;
-for(const key6 in data42){
-if(!(((((key6 === "message") || (key6 === "file")) || (key6 === "line")) || (key6 === "column")) || (key6 === "code"))){
-const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties"};
+const _errs93 = errors;
+for(const key7 in data48){
+if(!(((((key7 === "message") || (key7 === "file")) || (key7 === "line")) || (key7 === "column")) || (key7 === "code"))){
+const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key7},message:"must NOT have additional properties"};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2993,10 +3479,10 @@ errors++;
 break;
 }
 }
-if(_errs85 === errors){
-if(data42.message !== undefined){
-const _errs86 = errors;
-if(typeof data42.message !== "string"){
+if(_errs93 === errors){
+if(data48.message !== undefined){
+const _errs94 = errors;
+if(typeof data48.message !== "string"){
 const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err15];
@@ -3006,16 +3492,16 @@ vErrors.push(err15);
 }
 errors++;
 }
-var valid16 = _errs86 === errors;
+var valid17 = _errs94 === errors;
 }
 else {
-var valid16 = true;
+var valid17 = true;
 }
-if(valid16){
-if(data42.file !== undefined){
-let data44 = data42.file;
-const _errs88 = errors;
-if((typeof data44 !== "string") && (data44 !== null)){
+if(valid17){
+if(data48.file !== undefined){
+let data50 = data48.file;
+const _errs96 = errors;
+if((typeof data50 !== "string") && (data50 !== null)){
 const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
 vErrors = [err16];
@@ -3025,26 +3511,26 @@ vErrors.push(err16);
 }
 errors++;
 }
-var valid16 = _errs88 === errors;
+var valid17 = _errs96 === errors;
 }
 else {
-var valid16 = true;
+var valid17 = true;
 }
-if(valid16){
-if(data42.line !== undefined){
-let data45 = data42.line;
-const _errs90 = errors;
-const _errs91 = errors;
-let valid17 = false;
-const _errs92 = errors;
-if(!(validate88(data45, {instancePath:instancePath+"/error/line",parentData:data42,parentDataProperty:"line",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+if(valid17){
+if(data48.line !== undefined){
+let data51 = data48.line;
+const _errs98 = errors;
+const _errs99 = errors;
+let valid18 = false;
+const _errs100 = errors;
+if(!(validate101(data51, {instancePath:instancePath+"/error/line",parentData:data48,parentDataProperty:"line",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs92 === errors;
-valid17 = valid17 || _valid4;
-const _errs93 = errors;
-if(data45 !== null){
+var _valid4 = _errs100 === errors;
+valid18 = valid18 || _valid4;
+const _errs101 = errors;
+if(data51 !== null){
 const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err17];
@@ -3054,9 +3540,9 @@ vErrors.push(err17);
 }
 errors++;
 }
-var _valid4 = _errs93 === errors;
-valid17 = valid17 || _valid4;
-if(!valid17){
+var _valid4 = _errs101 === errors;
+valid18 = valid18 || _valid4;
+if(!valid18){
 const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err18];
@@ -3067,36 +3553,36 @@ vErrors.push(err18);
 errors++;
 }
 else {
-errors = _errs91;
+errors = _errs99;
 if(vErrors !== null){
-if(_errs91){
-vErrors.length = _errs91;
+if(_errs99){
+vErrors.length = _errs99;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid16 = _errs90 === errors;
+var valid17 = _errs98 === errors;
 }
 else {
-var valid16 = true;
+var valid17 = true;
 }
-if(valid16){
-if(data42.column !== undefined){
-let data46 = data42.column;
-const _errs95 = errors;
-const _errs96 = errors;
-let valid18 = false;
-const _errs97 = errors;
-if(!(validate88(data46, {instancePath:instancePath+"/error/column",parentData:data42,parentDataProperty:"column",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+if(valid17){
+if(data48.column !== undefined){
+let data52 = data48.column;
+const _errs103 = errors;
+const _errs104 = errors;
+let valid19 = false;
+const _errs105 = errors;
+if(!(validate101(data52, {instancePath:instancePath+"/error/column",parentData:data48,parentDataProperty:"column",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs97 === errors;
-valid18 = valid18 || _valid5;
-const _errs98 = errors;
-if(data46 !== null){
+var _valid5 = _errs105 === errors;
+valid19 = valid19 || _valid5;
+const _errs106 = errors;
+if(data52 !== null){
 const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err19];
@@ -3106,9 +3592,9 @@ vErrors.push(err19);
 }
 errors++;
 }
-var _valid5 = _errs98 === errors;
-valid18 = valid18 || _valid5;
-if(!valid18){
+var _valid5 = _errs106 === errors;
+valid19 = valid19 || _valid5;
+if(!valid19){
 const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err20];
@@ -3119,25 +3605,25 @@ vErrors.push(err20);
 errors++;
 }
 else {
-errors = _errs96;
+errors = _errs104;
 if(vErrors !== null){
-if(_errs96){
-vErrors.length = _errs96;
+if(_errs104){
+vErrors.length = _errs104;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid16 = _errs95 === errors;
+var valid17 = _errs103 === errors;
 }
 else {
-var valid16 = true;
+var valid17 = true;
 }
-if(valid16){
-if(data42.code !== undefined){
-const _errs100 = errors;
-if(typeof data42.code !== "string"){
+if(valid17){
+if(data48.code !== undefined){
+const _errs108 = errors;
+if(typeof data48.code !== "string"){
 const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
 vErrors = [err21];
@@ -3147,10 +3633,10 @@ vErrors.push(err21);
 }
 errors++;
 }
-var valid16 = _errs100 === errors;
+var valid17 = _errs108 === errors;
 }
 else {
-var valid16 = true;
+var valid17 = true;
 }
 }
 }
@@ -3170,9 +3656,9 @@ vErrors.push(err22);
 errors++;
 }
 }
-var _valid3 = _errs83 === errors;
-valid15 = valid15 || _valid3;
-if(!valid15){
+var _valid3 = _errs91 === errors;
+valid16 = valid16 || _valid3;
+if(!valid16){
 const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err23];
@@ -3185,32 +3671,33 @@ validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs80;
+errors = _errs88;
 if(vErrors !== null){
-if(_errs80){
-vErrors.length = _errs80;
+if(_errs88){
+vErrors.length = _errs88;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs79 === errors;
+var valid0 = _errs87 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs102 = errors;
-if(!(validate100(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate100.errors : vErrors.concat(validate100.errors);
+const _errs110 = errors;
+if(!(validate113(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate113.errors : vErrors.concat(validate113.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs102 === errors;
+var valid0 = _errs110 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }

@@ -833,7 +833,7 @@ return errors === 0;
 validate52.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 export const validateDescriptor = validate75;
-const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows); or its parts: a list of paths, or a glob (`train/part-*.csv.gz`), read in code-point order of their paths as one table.","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder, or its parts (as for `train`). Required unless `split` is given (then not allowed).","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5},"refit_compare":{"description":"With `refit: false`: also refit the model from its training rows and report the refit's figures (training and hold-out RMSE, k-fold CV RMSE) beside the shipped model's, as information (metrics `refit_*`); no check judges them.","type":"boolean","default":false}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."},"predictions":{"description":"A model trained elsewhere (fitgate cannot refit it): where its predictions of the training and hold-out rows are. Instead of `terms` (not together with `terms`, `coefficients` or `data.weight`/`data.sigma`). Checks that need only predictions run; those that need a refit or coefficients are skipped with a reason.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"$ref":"#/$defs/predictionSource","description":"Predictions of the training rows."},"holdout":{"$ref":"#/$defs/predictionSource","description":"Predictions of the hold-out rows."},"inputs":{"description":"The model's input columns (in the data files), for the `leakage` check; without them `leakage` is skipped.","type":"array","minItems":1,"maxItems":1000,"items":{"description":"A column name of the data files.","type":"string","minLength":1}}}},"parameters":{"description":"The number of parameters of a model trained elsewhere (`predictions`), when it can be stated; enables `parameter-ratio` (and `events-per-parameter` for classifiers).","type":"integer","minimum":1,"maximum":1000000000000}},"$defs":{"predictionSource":{"title":"predictions source","description":"`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].","type":"object","required":["column"],"additionalProperties":false,"properties":{"column":{"description":"Column holding the predictions.","type":"string","minLength":1},"file":{"description":"Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).","type":"string","minLength":1},"key":{"description":"Row key column held by both the data file and the side file (unique in each); only with `file`.","type":"string","minLength":1}}},"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
+const schema22 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:descriptor:1","title":"fitgate model descriptor (*.model.yml)","description":"One regression model: its data, its terms (the design matrix), how it is fitted, and its limits.","type":"object","required":["version","name","data"],"additionalProperties":false,"properties":{"version":{"description":"Version of this file format. Always 1.","const":1},"name":{"description":"Model name, unique in the repository: 1 to 100 letters, digits, `-`, `_` or `.`.","type":"string","minLength":1,"maxLength":100,"pattern":"^[A-Za-z0-9._-]+$"},"task":{"description":"Kind of model: `regression` (a number) or `classification` (binary: the target holds two classes, 0/1, true/false or two text labels with `data.positive`).","enum":["regression","classification"],"default":"regression"},"data":{"description":"The committed data: CSV paths relative to this file (never outside the repository) and the target column.","type":"object","required":["train","target"],"additionalProperties":false,"properties":{"train":{"description":"Training CSV, relative to this descriptor's folder (with `split`: the one file holding both training and hold-out rows); or its parts: a list of paths, or a glob (`train/part-*.csv.gz`), read in code-point order of their paths as one table.","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"holdout":{"description":"Hold-out CSV, relative to this descriptor's folder, or its parts (as for `train`). Required unless `split` is given (then not allowed).","anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"maxItems":1000,"items":{"type":"string","minLength":1}}]},"separator":{"description":"Field separator: `auto` (default: detected from the header line among comma, semicolon and tab), or one of `,`, `;`, a tab.","enum":["auto",",",";","\t"],"default":"auto"},"decimal":{"description":"Decimal mark of number cells: `.` (default) or `,` (then the separator must be a semicolon or a tab).","enum":[".",","],"default":"."},"missing":{"description":"What an empty or NA-like cell in a used column does: `error` (default) stops the run; `drop` drops the row and counts it in the report.","enum":["error","drop"],"default":"error"},"split":{"description":"One file with a split column instead of two files: rows whose `column` cell is `train` are training rows, rows with `holdout` are hold-out rows; any other label is an error.","type":"object","required":["column","train","holdout"],"additionalProperties":false,"properties":{"column":{"description":"Header name of the split column.","type":"string","minLength":1},"train":{"description":"Label of the training rows.","type":"string","minLength":1},"holdout":{"description":"Label of the hold-out rows (different from `train`).","type":"string","minLength":1}}},"target":{"description":"Name of the column to predict.","type":"string","minLength":1},"positive":{"description":"Classification: the label of the positive class when the target holds two text labels (required then).","type":"string","minLength":1},"weight":{"description":"Column of non-negative row weights w: weighted least squares, minimising sum w (y - f)^2. Not together with `sigma`.","type":"string","minLength":1},"sigma":{"description":"Column of standard uncertainties sigma > 0 of the target: weighted least squares with w = 1 / sigma^2, and the `chi-square` check. Not together with `weight`.","type":"string","minLength":1},"target_transform":{"description":"Transform of the target before the fit: `log` (y > 0), `log1p` (y > -1) or `sqrt` (y >= 0). The model is fitted on the transformed target; figures are reported on both scales (the original one by back-transforming predictions). Regression only.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"With `target_transform`: the scale the error limits apply to, `original` (default: back-transformed predictions against the target as written) or `transformed` (the scale of the fit).","enum":["original","transformed"],"default":"original"}}},"terms":{"description":"The design matrix: [intercept | columns of each term, in order]. Each item has exactly one key, the term kind.","type":"array","minItems":1,"items":{"$ref":"#/$defs/term","description":"One term: `linear`, `polynomial`, `rbf`, `fourier`, `spline` or `category`."}},"fit":{"description":"How the model is fitted; keys left out come from the settings file's `fit`, then the built-in defaults.","type":"object","additionalProperties":false,"properties":{"intercept":{"description":"Add a column of ones first (not penalised by `ridge`).","type":"boolean","default":true},"refit":{"description":"Refit the model from its training rows (true) or score the shipped `coefficients` only (false: the checks judge the shipped model; cross-validation, complexity and reproducibility, which need a refit, are skipped).","type":"boolean","default":true},"ridge":{"description":"L2 penalty lambda on every coefficient but the intercept, on the columns exactly as the terms build them; 0 is least squares.","type":"number","minimum":0,"default":0},"folds":{"description":"k of k-fold cross-validation: the training rows are split into this many folds (2 to 50). At most 50: every fold keeps two p x p factors and needs its own solve, so memory and time grow with k, while the estimate changes little beyond 10 to 20 folds (common practice: 5 or 10); leave-one-out, the limit of many folds, is computed exactly from the leverages of the fit whatever k is.","type":"integer","minimum":2,"maximum":50,"default":5},"fold_order":{"description":"How rows are assigned to folds: `shuffled` (a seeded random order) or `blocks` (consecutive rows, for ordered data such as time series).","enum":["shuffled","blocks"],"default":"shuffled"},"seed":{"description":"Seed of the fold shuffle and of any other random step, so runs repeat exactly.","type":"integer","minimum":0,"maximum":4294967295,"default":1},"parameter_count":{"description":"What the `parameter-ratio` check counts as parameters: `columns` (the design's columns p) or `effective` (the effective degrees of freedom of a ridge fit, the trace of its hat matrix; equals p for least squares of full rank).","enum":["columns","effective"],"default":"columns"},"threshold":{"description":"Classification: a row is predicted positive when its probability is at least this (for accuracy).","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.5},"refit_compare":{"description":"With `refit: false`: also refit the model from its training rows and report the refit's figures (training and hold-out RMSE, k-fold CV RMSE) beside the shipped model's, as information (metrics `refit_*`); no check judges them.","type":"boolean","default":false}}},"coefficients":{"description":"The shipped coefficients: intercept first (when there is one), then each term's columns in order.","type":"array","minItems":1,"items":{"description":"One coefficient (a finite number).","type":"number"}},"limits":{"$ref":"#/$defs/limits","description":"This model's own limits; they win over the settings file key by key."},"predictions":{"description":"A model trained elsewhere (fitgate cannot refit it): where its predictions of the training and hold-out rows are. Instead of `terms` (not together with `terms`, `coefficients` or `data.weight`/`data.sigma`). Checks that need only predictions run; those that need a refit or coefficients are skipped with a reason.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"$ref":"#/$defs/predictionSource","description":"Predictions of the training rows."},"holdout":{"$ref":"#/$defs/predictionSource","description":"Predictions of the hold-out rows."},"inputs":{"description":"The model's input columns (in the data files), for the `leakage` check; without them `leakage` is skipped.","type":"array","minItems":1,"maxItems":1000,"items":{"description":"A column name of the data files.","type":"string","minLength":1}}}},"parameters":{"description":"The number of parameters of a model trained elsewhere (`predictions`), when it can be stated; enables `parameter-ratio` (and `events-per-parameter` for classifiers).","type":"integer","minimum":1,"maximum":1000000000000}},"$defs":{"predictionSource":{"title":"predictions source","description":"`{ column }`: a column of the data file itself; `{ file, column }`: a column of a side CSV (relative to this descriptor's folder) whose rows go with the data file's rows in order; `{ file, key, column }`: the same, rows matched by a key column that both files hold. Regression: predicted values; classification: probabilities of the positive class in [0, 1].","type":"object","required":["column"],"additionalProperties":false,"properties":{"column":{"description":"Column holding the predictions.","type":"string","minLength":1},"file":{"description":"Side CSV holding the predictions, relative to this descriptor's folder (never outside the repository).","type":"string","minLength":1},"key":{"description":"Row key column held by both the data file and the side file (unique in each); only with `file`.","type":"string","minLength":1}}},"term":{"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}},"centers":{"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]},"limits":{"title":"limits","description":"Limits by key. Each is a number (fail above it), { warn, fail } or `off`.","type":"object","additionalProperties":false,"properties":{"gap_ratio":{"$ref":"#/$defs/limit","description":"Hold-out RMSE divided by training RMSE.","default":1.5},"params_per_sample":{"$ref":"#/$defs/limit","description":"Fitted parameters divided by training rows (common practice: at least 10 rows per parameter).","default":0.1},"coefficient":{"$ref":"#/$defs/limit","description":"Largest standardised coefficient |w_j| * sd(phi_j) / sd(y) over the non-intercept columns.","default":25},"base_change":{"$ref":"#/$defs/limit","description":"Relative change of the hold-out RMSE against the same model on the base branch.","default":"off"},"cv_ratio":{"$ref":"#/$defs/limit","description":"Pooled k-fold cross-validation RMSE divided by training RMSE.","default":"off"},"swing":{"$ref":"#/$defs/limit","description":"How far predictions between neighbouring training samples leave the band [min y, max y] of training targets, in band widths.","default":{"warn":0.25,"fail":0.5}},"swing_beyond":{"$ref":"#/$defs/limit","description":"Like `swing`, in a margin of 10 % of the input range beyond the training samples (extrapolation).","default":{"warn":1}},"swing_spikes":{"$ref":"#/$defs/limit","description":"Total variation of the predictions between the training samples divided by the training targets' own total variation.","default":{"warn":1.5,"fail":2}},"leakage":{"$ref":"#/$defs/limit","description":"Hold-out rows that also appear in the training data (the default 0 fails when there is any).","default":0},"reproducibility":{"$ref":"#/$defs/limit","description":"Largest difference between shipped and refit predictions on the hold-out rows, divided by the range of the training target.","default":0.01},"condition":{"$ref":"#/$defs/limit","description":"2-norm condition number of the column-scaled design matrix.","default":{"warn":100000000}},"complexity":{"$ref":"#/$defs/limit","description":"Current k-fold CV RMSE divided by the CV RMSE of the simpler setting the one-standard-error rule picks.","default":{"warn":1.5}},"holdout_r2":{"$ref":"#/$defs/limit","description":"Hold-out R^2 (coefficient of determination). A floor: the figure fails below its limit.","default":"off"},"holdout_rmse":{"$ref":"#/$defs/limit","description":"Hold-out RMSE in the target's units.","default":"off"},"holdout_mae":{"$ref":"#/$defs/limit","description":"Hold-out mean absolute error in the target's units.","default":"off"},"chi_square":{"$ref":"#/$defs/limit","description":"Reduced chi-square sum(((y - f) / sigma)^2) / (n - p) of the training rows (models with `data.sigma` only).","default":{"warn_below":0.5,"warn_above":2}},"separation":{"$ref":"#/$defs/limit","description":"Separation of the training rows (classifiers): 0 none, 1 quasi-complete (or any with ridge > 0), 2 complete.","default":{"warn":0,"fail":1}},"events_per_parameter":{"$ref":"#/$defs/limit","description":"Training rows of the smaller class divided by the fitted parameters (classifiers); fails below the limit. A floor: the figure fails below its limit.","default":10},"calibration_slope":{"$ref":"#/$defs/limit","description":"Hold-out calibration slope of a classifier (1 = calibrated, below 1 = over-confident); fails below the limit. A floor: the figure fails below its limit.","default":{"warn":0.8,"fail":0.6}}}},"limit":{"title":"limit","description":"A number (fail beyond it in the check's direction: above a ceiling, below a floor), { warn, fail } (at least one) in the same direction, explicit bounds { warn_below, fail_below, warn_above, fail_above } (at least one; a floor's warn >= its fail, a ceiling's warn <= its fail), or `off` (skip the check).","oneOf":[{"title":"a number >= 0 (fail beyond it)","description":"Fail when the figure is beyond this number in the check's direction (above a ceiling, below a floor).","type":"number","minimum":0},{"title":"{ warn, fail }","description":"Warn beyond `warn`, fail beyond `fail`, in the check's direction; give at least one (a ceiling's warn <= fail, a floor's warn >= fail).","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn":{"description":"Warn when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0},"fail":{"description":"Fail when the figure is beyond this number (above a ceiling, below a floor).","type":"number","minimum":0}}},{"title":"{ warn_below, fail_below, warn_above, fail_above }","description":"Explicit bounds on either side, whatever the check's direction: fail below `fail_below` or above `fail_above`, warn below `warn_below` or above `warn_above`; give at least one.","type":"object","minProperties":1,"additionalProperties":false,"properties":{"warn_below":{"description":"Warn when the figure is below this number.","type":"number"},"fail_below":{"description":"Fail when the figure is below this number.","type":"number"},"warn_above":{"description":"Warn when the figure is above this number.","type":"number"},"fail_above":{"description":"Fail when the figure is above this number.","type":"number"}}},{"title":"`off`","description":"Skip the check.","const":"off"}]}}};
 const pattern3 = new RegExp("^[A-Za-z0-9._-]+$", "u");
 const schema23 = {"title":"term","description":"One term of the design: a mapping with exactly one key, the term kind.","type":"object","minProperties":1,"maxProperties":1,"propertyNames":{"enum":["linear","polynomial","rbf","fourier","spline","category"]},"properties":{"linear":{"description":"The columns as they are: one design column per listed data column.","type":"array","minItems":1,"items":{"description":"A data column name.","type":"string","minLength":1}},"polynomial":{"description":"Powers z^1 .. z^degree of z = (x - shift) / scale; with several inputs (`of: [a, b]`) every monomial of total degree 1 .. degree in their z.","type":"object","required":["of","degree"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns for every monomial over them.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"degree":{"description":"Highest power, 1 to 30.","type":"integer","minimum":1,"maximum":30},"shift":{"description":"Subtracted from x before scaling (a list: one per input). Default: the training mean of x; 0 with scale 1 gives raw powers.","oneOf":[{"type":"number"},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The shift of one input.","type":"number"}}]},"scale":{"description":"Divides x - shift (a list: one per input). Default: the training population standard deviation of x. Must be > 0.","oneOf":[{"type":"number","exclusiveMinimum":0},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The scale of one input, > 0.","type":"number","exclusiveMinimum":0}}]},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"rbf":{"description":"Gaussian radial basis columns exp(-(x - c)^2 / (2 width^2)), one per centre c; with several inputs (`of: [a, b]`) isotropic Gaussians on the standardised inputs.","type":"object","required":["of","centers","width"],"additionalProperties":false,"properties":{"of":{"description":"The data column x, or a list of 2 to 10 distinct columns.","oneOf":[{"type":"string","minLength":1},{"type":"array","minItems":2,"maxItems":10,"uniqueItems":true,"items":{"description":"A data column name.","type":"string","minLength":1}}]},"centers":{"description":"The centres: for one input a list, { from, to, count }, { from, to, step } or `at-samples`; for several inputs a list of rows (one value per input), a grid (one { from, to, count } per input) or `at-samples`.","oneOf":[{"$ref":"#/$defs/centers"},{"type":"array","minItems":1,"maxItems":10000,"items":{"description":"One centre: a value per input, in the order of `of`.","type":"array","minItems":2,"maxItems":10,"items":{"description":"The centre's value of one input.","type":"number"}}},{"type":"array","minItems":2,"maxItems":10,"items":{"description":"The grid along one input: count evenly spaced values from `from` to `to`.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First value.","type":"number"},"to":{"description":"Last value.","type":"number"},"count":{"description":"Values along this input, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}}]},"width":{"description":"Width (standard deviation) of each Gaussian, > 0.","type":"number","exclusiveMinimum":0},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"fourier":{"description":"Seasonal columns sin(2 pi j x / period), cos(2 pi j x / period) for j = 1 .. harmonics.","type":"object","required":["of","period","harmonics"],"additionalProperties":false,"properties":{"of":{"description":"The data column x (e.g. a day number).","type":"string","minLength":1},"period":{"description":"Length of one cycle in the units of x, > 0 (e.g. 7 for days of the week).","type":"number","exclusiveMinimum":0},"harmonics":{"description":"Number of sin/cos pairs, 1 to 50.","type":"integer","minimum":1,"maximum":50},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"spline":{"description":"A B-spline basis (de Boor 1978) on the training range, or natural cubic splines (linear beyond the boundary knots).","type":"object","required":["of","knots"],"additionalProperties":false,"properties":{"of":{"description":"The data column x.","type":"string","minLength":1},"knots":{"description":"Interior knots: a list of numbers strictly inside the training range, or { count: k } placed at the training quantiles j / (k + 1).","oneOf":[{"type":"array","minItems":1,"maxItems":100,"items":{"type":"number","description":"An interior knot, in the units of x."}},{"type":"object","required":["count"],"additionalProperties":false,"properties":{"count":{"description":"Number of interior knots, 1 to 100.","type":"integer","minimum":1,"maximum":100}}}]},"degree":{"description":"Degree of the pieces, 1 to 5; default 3. Natural splines are cubic (3 only).","type":"integer","minimum":1,"maximum":5,"default":3},"natural":{"description":"Natural cubic splines: linear beyond the boundary knots. Default false.","type":"boolean","default":false},"transform":{"description":"Transform of the input before the term: `log` (x > 0), `log1p` (log(1 + x), x > -1), `sqrt` (x >= 0) or `standardise` ((x - mean) / sd over the training rows). A value outside the domain is an error naming file, line, column and value.","enum":["log","log1p","sqrt","standardise"]}}},"category":{"description":"Indicator columns of a text column's levels: one per level seen in the training rows but the reference level.","type":"object","required":["of"],"additionalProperties":false,"properties":{"of":{"description":"The data column; its cells are read as text (levels), even when they look like numbers.","type":"string","minLength":1},"reference":{"description":"The reference level (no column; the intercept carries it). Default: the most frequent training level, ties by text order. A number is read as its text (`reference: 7` is the level `7`; write `\"07\"` for `07`).","oneOf":[{"type":"string"},{"type":"number"}]},"unseen":{"description":"A hold-out level no training row has: `error` (default: the model's error names level, file and line) or `zero` (every indicator 0: predicted as the reference level).","enum":["error","zero"],"default":"error"}}}}};
 const schema24 = {"title":"centers","description":"Centres of Gaussian radial basis columns.","oneOf":[{"title":"a list of numbers","description":"The centres as listed.","type":"array","minItems":1,"items":{"description":"One centre.","type":"number"}},{"title":"{ from, to, count }","description":"`count` evenly spaced centres from `from` to `to`, both included.","type":"object","required":["from","to","count"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Last centre (>= from).","type":"number"},"count":{"description":"Number of centres, 1 to 10000.","type":"integer","minimum":1,"maximum":10000}}},{"title":"{ from, to, step }","description":"Centres from `from` every `step` up to `to` (included when it falls on a step).","type":"object","required":["from","to","step"],"additionalProperties":false,"properties":{"from":{"description":"First centre.","type":"number"},"to":{"description":"Upper end (>= from).","type":"number"},"step":{"description":"Distance between centres, > 0 (at most 10000 centres).","type":"number","exclusiveMinimum":0}}},{"title":"`at-samples`","description":"One centre at each training row's value of x.","const":"at-samples"}]};
@@ -4147,9 +4147,10 @@ vErrors.push(err50);
 errors++;
 }
 }
-}
-else {
-const err51 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
+if(data3.target_transform !== undefined){
+let data19 = data3.target_transform;
+if(!(((data19 === "log") || (data19 === "log1p")) || (data19 === "sqrt"))){
+const err51 = {instancePath:instancePath+"/data/target_transform",schemaPath:"#/properties/data/properties/target_transform/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.target_transform.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.target_transform.enum,parentSchema:schema22.properties.data.properties.target_transform,data:data19};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4159,11 +4160,10 @@ vErrors.push(err51);
 errors++;
 }
 }
-if(data.terms !== undefined){
-let data19 = data.terms;
-if(Array.isArray(data19)){
-if(data19.length < 1){
-const err52 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data19};
+if(data3.limits_scale !== undefined){
+let data20 = data3.limits_scale;
+if(!((data20 === "original") || (data20 === "transformed"))){
+const err52 = {instancePath:instancePath+"/data/limits_scale",schemaPath:"#/properties/data/properties/limits_scale/enum",keyword:"enum",params:{allowedValues: schema22.properties.data.properties.limits_scale.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.data.properties.limits_scale.enum,parentSchema:schema22.properties.data.properties.limits_scale,data:data20};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -4172,16 +4172,10 @@ vErrors.push(err52);
 }
 errors++;
 }
-const len2 = data19.length;
-for(let i2=0; i2<len2; i2++){
-if(!(validate76(data19[i2], {instancePath:instancePath+"/terms/" + i2,parentData:data19,parentDataProperty:i2,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
-errors = vErrors.length;
-}
 }
 }
 else {
-const err53 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data19};
+const err53 = {instancePath:instancePath+"/data",schemaPath:"#/properties/data/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.data.type,parentSchema:schema22.properties.data,data:data3};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -4191,12 +4185,11 @@ vErrors.push(err53);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data21 = data.fit;
-if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
-for(const key3 in data21){
-if(!(func2.call(schema22.properties.fit.properties, key3))){
-const err54 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data21};
+if(data.terms !== undefined){
+let data21 = data.terms;
+if(Array.isArray(data21)){
+if(data21.length < 1){
+const err54 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.terms,data:data21};
 if(vErrors === null){
 vErrors = [err54];
 }
@@ -4205,11 +4198,16 @@ vErrors.push(err54);
 }
 errors++;
 }
+const len2 = data21.length;
+for(let i2=0; i2<len2; i2++){
+if(!(validate76(data21[i2], {instancePath:instancePath+"/terms/" + i2,parentData:data21,parentDataProperty:i2,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
+errors = vErrors.length;
 }
-if(data21.intercept !== undefined){
-let data22 = data21.intercept;
-if(typeof data22 !== "boolean"){
-const err55 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data22};
+}
+}
+else {
+const err55 = {instancePath:instancePath+"/terms",schemaPath:"#/properties/terms/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.terms.type,parentSchema:schema22.properties.terms,data:data21};
 if(vErrors === null){
 vErrors = [err55];
 }
@@ -4219,10 +4217,12 @@ vErrors.push(err55);
 errors++;
 }
 }
-if(data21.refit !== undefined){
-let data23 = data21.refit;
-if(typeof data23 !== "boolean"){
-const err56 = {instancePath:instancePath+"/fit/refit",schemaPath:"#/properties/fit/properties/refit/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit.type,parentSchema:schema22.properties.fit.properties.refit,data:data23};
+if(data.fit !== undefined){
+let data23 = data.fit;
+if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
+for(const key3 in data23){
+if(!(func2.call(schema22.properties.fit.properties, key3))){
+const err56 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.fit,data:data23};
 if(vErrors === null){
 vErrors = [err56];
 }
@@ -4232,11 +4232,10 @@ vErrors.push(err56);
 errors++;
 }
 }
-if(data21.ridge !== undefined){
-let data24 = data21.ridge;
-if((typeof data24 == "number") && (isFinite(data24))){
-if(data24 < 0 || isNaN(data24)){
-const err57 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data24};
+if(data23.intercept !== undefined){
+let data24 = data23.intercept;
+if(typeof data24 !== "boolean"){
+const err57 = {instancePath:instancePath+"/fit/intercept",schemaPath:"#/properties/fit/properties/intercept/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.intercept.type,parentSchema:schema22.properties.fit.properties.intercept,data:data24};
 if(vErrors === null){
 vErrors = [err57];
 }
@@ -4246,8 +4245,10 @@ vErrors.push(err57);
 errors++;
 }
 }
-else {
-const err58 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data24};
+if(data23.refit !== undefined){
+let data25 = data23.refit;
+if(typeof data25 !== "boolean"){
+const err58 = {instancePath:instancePath+"/fit/refit",schemaPath:"#/properties/fit/properties/refit/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit.type,parentSchema:schema22.properties.fit.properties.refit,data:data25};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4257,10 +4258,11 @@ vErrors.push(err58);
 errors++;
 }
 }
-if(data21.folds !== undefined){
-let data25 = data21.folds;
-if(!(((typeof data25 == "number") && (!(data25 % 1) && !isNaN(data25))) && (isFinite(data25)))){
-const err59 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data25};
+if(data23.ridge !== undefined){
+let data26 = data23.ridge;
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 < 0 || isNaN(data26)){
+const err59 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.ridge,data:data26};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4269,9 +4271,9 @@ vErrors.push(err59);
 }
 errors++;
 }
-if((typeof data25 == "number") && (isFinite(data25))){
-if(data25 > 50 || isNaN(data25)){
-const err60 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data25};
+}
+else {
+const err60 = {instancePath:instancePath+"/fit/ridge",schemaPath:"#/properties/fit/properties/ridge/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.ridge.type,parentSchema:schema22.properties.fit.properties.ridge,data:data26};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4280,8 +4282,11 @@ vErrors.push(err60);
 }
 errors++;
 }
-if(data25 < 2 || isNaN(data25)){
-const err61 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data25};
+}
+if(data23.folds !== undefined){
+let data27 = data23.folds;
+if(!(((typeof data27 == "number") && (!(data27 % 1) && !isNaN(data27))) && (isFinite(data27)))){
+const err61 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.folds.type,parentSchema:schema22.properties.fit.properties.folds,data:data27};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4290,12 +4295,9 @@ vErrors.push(err61);
 }
 errors++;
 }
-}
-}
-if(data21.fold_order !== undefined){
-let data26 = data21.fold_order;
-if(!((data26 === "shuffled") || (data26 === "blocks"))){
-const err62 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data26};
+if((typeof data27 == "number") && (isFinite(data27))){
+if(data27 > 50 || isNaN(data27)){
+const err62 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/maximum",keyword:"maximum",params:{comparison: "<=", limit: 50},message:"must be <= 50",schema:50,parentSchema:schema22.properties.fit.properties.folds,data:data27};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4304,11 +4306,8 @@ vErrors.push(err62);
 }
 errors++;
 }
-}
-if(data21.seed !== undefined){
-let data27 = data21.seed;
-if(!(((typeof data27 == "number") && (!(data27 % 1) && !isNaN(data27))) && (isFinite(data27)))){
-const err63 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data27};
+if(data27 < 2 || isNaN(data27)){
+const err63 = {instancePath:instancePath+"/fit/folds",schemaPath:"#/properties/fit/properties/folds/minimum",keyword:"minimum",params:{comparison: ">=", limit: 2},message:"must be >= 2",schema:2,parentSchema:schema22.properties.fit.properties.folds,data:data27};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -4317,9 +4316,12 @@ vErrors.push(err63);
 }
 errors++;
 }
-if((typeof data27 == "number") && (isFinite(data27))){
-if(data27 > 4294967295 || isNaN(data27)){
-const err64 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data27};
+}
+}
+if(data23.fold_order !== undefined){
+let data28 = data23.fold_order;
+if(!((data28 === "shuffled") || (data28 === "blocks"))){
+const err64 = {instancePath:instancePath+"/fit/fold_order",schemaPath:"#/properties/fit/properties/fold_order/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.fold_order.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.fold_order.enum,parentSchema:schema22.properties.fit.properties.fold_order,data:data28};
 if(vErrors === null){
 vErrors = [err64];
 }
@@ -4328,8 +4330,11 @@ vErrors.push(err64);
 }
 errors++;
 }
-if(data27 < 0 || isNaN(data27)){
-const err65 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data27};
+}
+if(data23.seed !== undefined){
+let data29 = data23.seed;
+if(!(((typeof data29 == "number") && (!(data29 % 1) && !isNaN(data29))) && (isFinite(data29)))){
+const err65 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.fit.properties.seed.type,parentSchema:schema22.properties.fit.properties.seed,data:data29};
 if(vErrors === null){
 vErrors = [err65];
 }
@@ -4338,12 +4343,9 @@ vErrors.push(err65);
 }
 errors++;
 }
-}
-}
-if(data21.parameter_count !== undefined){
-let data28 = data21.parameter_count;
-if(!((data28 === "columns") || (data28 === "effective"))){
-const err66 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data28};
+if((typeof data29 == "number") && (isFinite(data29))){
+if(data29 > 4294967295 || isNaN(data29)){
+const err66 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/maximum",keyword:"maximum",params:{comparison: "<=", limit: 4294967295},message:"must be <= 4294967295",schema:4294967295,parentSchema:schema22.properties.fit.properties.seed,data:data29};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -4352,12 +4354,8 @@ vErrors.push(err66);
 }
 errors++;
 }
-}
-if(data21.threshold !== undefined){
-let data29 = data21.threshold;
-if((typeof data29 == "number") && (isFinite(data29))){
-if(data29 >= 1 || isNaN(data29)){
-const err67 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
+if(data29 < 0 || isNaN(data29)){
+const err67 = {instancePath:instancePath+"/fit/seed",schemaPath:"#/properties/fit/properties/seed/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema22.properties.fit.properties.seed,data:data29};
 if(vErrors === null){
 vErrors = [err67];
 }
@@ -4366,8 +4364,12 @@ vErrors.push(err67);
 }
 errors++;
 }
-if(data29 <= 0 || isNaN(data29)){
-const err68 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
+}
+}
+if(data23.parameter_count !== undefined){
+let data30 = data23.parameter_count;
+if(!((data30 === "columns") || (data30 === "effective"))){
+const err68 = {instancePath:instancePath+"/fit/parameter_count",schemaPath:"#/properties/fit/properties/parameter_count/enum",keyword:"enum",params:{allowedValues: schema22.properties.fit.properties.parameter_count.enum},message:"must be equal to one of the allowed values",schema:schema22.properties.fit.properties.parameter_count.enum,parentSchema:schema22.properties.fit.properties.parameter_count,data:data30};
 if(vErrors === null){
 vErrors = [err68];
 }
@@ -4377,8 +4379,11 @@ vErrors.push(err68);
 errors++;
 }
 }
-else {
-const err69 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data29};
+if(data23.threshold !== undefined){
+let data31 = data23.threshold;
+if((typeof data31 == "number") && (isFinite(data31))){
+if(data31 >= 1 || isNaN(data31)){
+const err69 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema22.properties.fit.properties.threshold,data:data31};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -4387,11 +4392,8 @@ vErrors.push(err69);
 }
 errors++;
 }
-}
-if(data21.refit_compare !== undefined){
-let data30 = data21.refit_compare;
-if(typeof data30 !== "boolean"){
-const err70 = {instancePath:instancePath+"/fit/refit_compare",schemaPath:"#/properties/fit/properties/refit_compare/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit_compare.type,parentSchema:schema22.properties.fit.properties.refit_compare,data:data30};
+if(data31 <= 0 || isNaN(data31)){
+const err70 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema22.properties.fit.properties.threshold,data:data31};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -4401,9 +4403,8 @@ vErrors.push(err70);
 errors++;
 }
 }
-}
 else {
-const err71 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data21};
+const err71 = {instancePath:instancePath+"/fit/threshold",schemaPath:"#/properties/fit/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.fit.properties.threshold.type,parentSchema:schema22.properties.fit.properties.threshold,data:data31};
 if(vErrors === null){
 vErrors = [err71];
 }
@@ -4413,11 +4414,10 @@ vErrors.push(err71);
 errors++;
 }
 }
-if(data.coefficients !== undefined){
-let data31 = data.coefficients;
-if(Array.isArray(data31)){
-if(data31.length < 1){
-const err72 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data31};
+if(data23.refit_compare !== undefined){
+let data32 = data23.refit_compare;
+if(typeof data32 !== "boolean"){
+const err72 = {instancePath:instancePath+"/fit/refit_compare",schemaPath:"#/properties/fit/properties/refit_compare/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema22.properties.fit.properties.refit_compare.type,parentSchema:schema22.properties.fit.properties.refit_compare,data:data32};
 if(vErrors === null){
 vErrors = [err72];
 }
@@ -4426,11 +4426,10 @@ vErrors.push(err72);
 }
 errors++;
 }
-const len3 = data31.length;
-for(let i3=0; i3<len3; i3++){
-let data32 = data31[i3];
-if(!((typeof data32 == "number") && (isFinite(data32)))){
-const err73 = {instancePath:instancePath+"/coefficients/" + i3,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data32};
+}
+}
+else {
+const err73 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.fit.type,parentSchema:schema22.properties.fit,data:data23};
 if(vErrors === null){
 vErrors = [err73];
 }
@@ -4440,14 +4439,41 @@ vErrors.push(err73);
 errors++;
 }
 }
-}
-else {
-const err74 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data31};
+if(data.coefficients !== undefined){
+let data33 = data.coefficients;
+if(Array.isArray(data33)){
+if(data33.length < 1){
+const err74 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.coefficients,data:data33};
 if(vErrors === null){
 vErrors = [err74];
 }
 else {
 vErrors.push(err74);
+}
+errors++;
+}
+const len3 = data33.length;
+for(let i3=0; i3<len3; i3++){
+let data34 = data33[i3];
+if(!((typeof data34 == "number") && (isFinite(data34)))){
+const err75 = {instancePath:instancePath+"/coefficients/" + i3,schemaPath:"#/properties/coefficients/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema22.properties.coefficients.items.type,parentSchema:schema22.properties.coefficients.items,data:data34};
+if(vErrors === null){
+vErrors = [err75];
+}
+else {
+vErrors.push(err75);
+}
+errors++;
+}
+}
+}
+else {
+const err76 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.coefficients.type,parentSchema:schema22.properties.coefficients,data:data33};
+if(vErrors === null){
+vErrors = [err76];
+}
+else {
+vErrors.push(err76);
 }
 errors++;
 }
@@ -4459,31 +4485,10 @@ errors = vErrors.length;
 }
 }
 if(data.predictions !== undefined){
-let data34 = data.predictions;
-if(data34 && typeof data34 == "object" && !Array.isArray(data34)){
-if(data34.train === undefined){
-const err75 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data34};
-if(vErrors === null){
-vErrors = [err75];
-}
-else {
-vErrors.push(err75);
-}
-errors++;
-}
-if(data34.holdout === undefined){
-const err76 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data34};
-if(vErrors === null){
-vErrors = [err76];
-}
-else {
-vErrors.push(err76);
-}
-errors++;
-}
-for(const key4 in data34){
-if(!(((key4 === "train") || (key4 === "holdout")) || (key4 === "inputs"))){
-const err77 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.predictions,data:data34};
+let data36 = data.predictions;
+if(data36 && typeof data36 == "object" && !Array.isArray(data36)){
+if(data36.train === undefined){
+const err77 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "train"},message:"must have required property '"+"train"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data36};
 if(vErrors === null){
 vErrors = [err77];
 }
@@ -4492,24 +4497,8 @@ vErrors.push(err77);
 }
 errors++;
 }
-}
-if(data34.train !== undefined){
-if(!(validate102(data34.train, {instancePath:instancePath+"/predictions/train",parentData:data34,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
-errors = vErrors.length;
-}
-}
-if(data34.holdout !== undefined){
-if(!(validate102(data34.holdout, {instancePath:instancePath+"/predictions/holdout",parentData:data34,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
-errors = vErrors.length;
-}
-}
-if(data34.inputs !== undefined){
-let data37 = data34.inputs;
-if(Array.isArray(data37)){
-if(data37.length > 1000){
-const err78 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.predictions.properties.inputs,data:data37};
+if(data36.holdout === undefined){
+const err78 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/required",keyword:"required",params:{missingProperty: "holdout"},message:"must have required property '"+"holdout"+"'",schema:schema22.properties.predictions.required,parentSchema:schema22.properties.predictions,data:data36};
 if(vErrors === null){
 vErrors = [err78];
 }
@@ -4518,8 +4507,9 @@ vErrors.push(err78);
 }
 errors++;
 }
-if(data37.length < 1){
-const err79 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.predictions.properties.inputs,data:data37};
+for(const key4 in data36){
+if(!(((key4 === "train") || (key4 === "holdout")) || (key4 === "inputs"))){
+const err79 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema22.properties.predictions,data:data36};
 if(vErrors === null){
 vErrors = [err79];
 }
@@ -4528,12 +4518,24 @@ vErrors.push(err79);
 }
 errors++;
 }
-const len4 = data37.length;
-for(let i4=0; i4<len4; i4++){
-let data38 = data37[i4];
-if(typeof data38 === "string"){
-if(func1(data38) < 1){
-const err80 = {instancePath:instancePath+"/predictions/inputs/" + i4,schemaPath:"#/properties/predictions/properties/inputs/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data38};
+}
+if(data36.train !== undefined){
+if(!(validate102(data36.train, {instancePath:instancePath+"/predictions/train",parentData:data36,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+errors = vErrors.length;
+}
+}
+if(data36.holdout !== undefined){
+if(!(validate102(data36.holdout, {instancePath:instancePath+"/predictions/holdout",parentData:data36,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
+errors = vErrors.length;
+}
+}
+if(data36.inputs !== undefined){
+let data39 = data36.inputs;
+if(Array.isArray(data39)){
+if(data39.length > 1000){
+const err80 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/maxItems",keyword:"maxItems",params:{limit: 1000},message:"must NOT have more than 1000 items",schema:1000,parentSchema:schema22.properties.predictions.properties.inputs,data:data39};
 if(vErrors === null){
 vErrors = [err80];
 }
@@ -4542,9 +4544,8 @@ vErrors.push(err80);
 }
 errors++;
 }
-}
-else {
-const err81 = {instancePath:instancePath+"/predictions/inputs/" + i4,schemaPath:"#/properties/predictions/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.predictions.properties.inputs.items.type,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data38};
+if(data39.length < 1){
+const err81 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema22.properties.predictions.properties.inputs,data:data39};
 if(vErrors === null){
 vErrors = [err81];
 }
@@ -4553,10 +4554,12 @@ vErrors.push(err81);
 }
 errors++;
 }
-}
-}
-else {
-const err82 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.predictions.properties.inputs.type,parentSchema:schema22.properties.predictions.properties.inputs,data:data37};
+const len4 = data39.length;
+for(let i4=0; i4<len4; i4++){
+let data40 = data39[i4];
+if(typeof data40 === "string"){
+if(func1(data40) < 1){
+const err82 = {instancePath:instancePath+"/predictions/inputs/" + i4,schemaPath:"#/properties/predictions/properties/inputs/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data40};
 if(vErrors === null){
 vErrors = [err82];
 }
@@ -4566,9 +4569,8 @@ vErrors.push(err82);
 errors++;
 }
 }
-}
 else {
-const err83 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.predictions.type,parentSchema:schema22.properties.predictions,data:data34};
+const err83 = {instancePath:instancePath+"/predictions/inputs/" + i4,schemaPath:"#/properties/predictions/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema22.properties.predictions.properties.inputs.items.type,parentSchema:schema22.properties.predictions.properties.inputs.items,data:data40};
 if(vErrors === null){
 vErrors = [err83];
 }
@@ -4578,10 +4580,9 @@ vErrors.push(err83);
 errors++;
 }
 }
-if(data.parameters !== undefined){
-let data39 = data.parameters;
-if(!(((typeof data39 == "number") && (!(data39 % 1) && !isNaN(data39))) && (isFinite(data39)))){
-const err84 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.parameters.type,parentSchema:schema22.properties.parameters,data:data39};
+}
+else {
+const err84 = {instancePath:instancePath+"/predictions/inputs",schemaPath:"#/properties/predictions/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema22.properties.predictions.properties.inputs.type,parentSchema:schema22.properties.predictions.properties.inputs,data:data39};
 if(vErrors === null){
 vErrors = [err84];
 }
@@ -4590,9 +4591,10 @@ vErrors.push(err84);
 }
 errors++;
 }
-if((typeof data39 == "number") && (isFinite(data39))){
-if(data39 > 1000000000000 || isNaN(data39)){
-const err85 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1000000000000},message:"must be <= 1000000000000",schema:1000000000000,parentSchema:schema22.properties.parameters,data:data39};
+}
+}
+else {
+const err85 = {instancePath:instancePath+"/predictions",schemaPath:"#/properties/predictions/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.properties.predictions.type,parentSchema:schema22.properties.predictions,data:data36};
 if(vErrors === null){
 vErrors = [err85];
 }
@@ -4601,8 +4603,11 @@ vErrors.push(err85);
 }
 errors++;
 }
-if(data39 < 1 || isNaN(data39)){
-const err86 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema22.properties.parameters,data:data39};
+}
+if(data.parameters !== undefined){
+let data41 = data.parameters;
+if(!(((typeof data41 == "number") && (!(data41 % 1) && !isNaN(data41))) && (isFinite(data41)))){
+const err86 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema22.properties.parameters.type,parentSchema:schema22.properties.parameters,data:data41};
 if(vErrors === null){
 vErrors = [err86];
 }
@@ -4611,16 +4616,37 @@ vErrors.push(err86);
 }
 errors++;
 }
-}
-}
-}
-else {
-const err87 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if((typeof data41 == "number") && (isFinite(data41))){
+if(data41 > 1000000000000 || isNaN(data41)){
+const err87 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1000000000000},message:"must be <= 1000000000000",schema:1000000000000,parentSchema:schema22.properties.parameters,data:data41};
 if(vErrors === null){
 vErrors = [err87];
 }
 else {
 vErrors.push(err87);
+}
+errors++;
+}
+if(data41 < 1 || isNaN(data41)){
+const err88 = {instancePath:instancePath+"/parameters",schemaPath:"#/properties/parameters/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema22.properties.parameters,data:data41};
+if(vErrors === null){
+vErrors = [err88];
+}
+else {
+vErrors.push(err88);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err89 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema22.type,parentSchema:schema22,data};
+if(vErrors === null){
+vErrors = [err89];
+}
+else {
+vErrors.push(err89);
 }
 errors++;
 }

@@ -9,6 +9,7 @@ import { baseCurveLegend, baseCurveNote, baseCurvePath } from './base-curve.js';
 import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, LEGEND_BAND, LEGEND_HOLDOUT, LEGEND_TRAIN, legendLine, legendRegion } from './palette.js';
 import { marks, pointData, pointNote } from './points.js';
+import { LEGEND_SPIKE, spikeBars, spikeLegendLabel, spikeNote } from './spike-marks.js';
 import { extent, linearScale, pad } from './scale.js';
 import { axisLabel } from './units.js';
 
@@ -50,7 +51,7 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
       return `<rect class="region" data-side="${r.side}" x="${px(a)}" y="${y0}" width="${px(Math.max(1.5, b - a))}" height="${y1 - y0}" fill="url(#${id}-hatch)"/>`;
     })
     .join('');
-  body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`);
+  body.push(`<g class="regions" data-count="${fit.regions.length}">${regions}</g>`, spikeBars(fit.spikes, sx, y0));
   // Training range edges: the curve past them is extrapolation.
   body.push(
     `<g stroke="${COLOURS.reference}" stroke-width="1" stroke-dasharray="1 3"><line x1="${px(sx(fit.range[0]))}" y1="${y0}" x2="${px(sx(fit.range[0]))}" y2="${y1}"/><line x1="${px(sx(fit.range[1]))}" y1="${y0}" x2="${px(sx(fit.range[1]))}" y2="${y1}"/></g>`,
@@ -70,6 +71,7 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
     { mark: LEGEND_BAND, label: 'observed band' },
   ];
   if (fit.regions.length > 0) legend.push({ mark: legendRegion(id), label: 'leaves band' });
+  if (fit.spikes && fit.spikes.intervals.length > 0) legend.push({ mark: LEGEND_SPIKE, label: spikeLegendLabel(fit.spikes) });
   if (fit.base) legend.push(baseCurveLegend());
   const where = fit.regions.length
     ? ` The curve leaves the band ${fit.regions.map((r) => `${r.side} it from ${formatNumber(r.from)} to ${formatNumber(r.to)}`).join('; ')}.`
@@ -77,7 +79,7 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
   const desc =
     `Fitted ${chart.target} against ${fit.input} from ${formatNumber(fit.x[0])} to ${formatNumber(fit.x[fit.x.length - 1])} ` +
     `(training range ${formatNumber(fit.range[0])} to ${formatNumber(fit.range[1])}), with ${a.drawn} training rows as filled circles and ${b.drawn} hold-out rows as hollow squares. ` +
-    `Observed target band ${formatNumber(blo)} to ${formatNumber(bhi)}.${where}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
+    `Observed target band ${formatNumber(blo)} to ${formatNumber(bhi)}.${where}${spikeNote(fit.spikes)}${fit.base ? baseCurveNote(fit.base) : ''}${pointNote(chart.train, chart.holdout, a, b)}`;
   return frame({
     id,
     kind: 'fit-curve',
@@ -89,6 +91,11 @@ export function fitCurveChart(chart: ChartData, fit: FitCurveData, options: Char
     yLabel: axisLabel(chart.target),
     body: body.join(''),
     legend,
-    data: { ...pointData(chart.train, chart.holdout, a, b), regions: fit.regions.length, source: fit.source },
+    data: {
+      ...pointData(chart.train, chart.holdout, a, b),
+      regions: fit.regions.length,
+      source: fit.source,
+      ...(fit.spikes ? { spikes: fit.spikes.intervals.length } : {}),
+    },
   });
 }

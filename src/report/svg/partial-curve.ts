@@ -10,6 +10,7 @@ import { frame, linePath, plotArea, px, type ChartOptions } from './frame.js';
 import { COLOURS, legendLine } from './palette.js';
 import { extent, linearScale, pad } from './scale.js';
 import { axisLabel } from './units.js';
+import { LEGEND_SPIKE, spikeBars, spikeLegendLabel, spikeNote } from './spike-marks.js';
 
 /**
  * Renders one partial curve.
@@ -30,6 +31,7 @@ export function partialCurveChart(chart: ChartData, curve: CurveData, options: C
     `<path class="rug" d="${ticks.join('')}" stroke="${COLOURS.train}" stroke-opacity="0.55" stroke-width="1"/>`,
     curve.base ? baseCurvePath(curve.base, sx, sy) : '',
     `<path class="curve" d="${linePath(curve.x, curve.y, sx, sy)}" fill="none" stroke="${COLOURS.curve}" stroke-width="2" stroke-linejoin="round"/>`,
+    spikeBars(curve.spikes, sx, y0),
   ].join('');
   const others = Object.entries(curve.others)
     .map(([k, v]) => `${k} = ${formatNumber(v)}`)
@@ -38,7 +40,7 @@ export function partialCurveChart(chart: ChartData, curve: CurveData, options: C
     id,
     kind: 'partial-curve',
     title: `Partial curve: ${chart.target} along ${curve.input}`,
-    desc: `Predicted ${chart.target} as ${curve.input} runs from ${formatNumber(curve.x[0])} to ${formatNumber(curve.x[curve.x.length - 1])} (training range ${formatNumber(curve.range[0])} to ${formatNumber(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${curve.base ? baseCurveNote(curve.base) : ''}`,
+    desc: `Predicted ${chart.target} as ${curve.input} runs from ${formatNumber(curve.x[0])} to ${formatNumber(curve.x[curve.x.length - 1])} (training range ${formatNumber(curve.range[0])} to ${formatNumber(curve.range[1])}, dotted lines), with the other inputs at their training medians${others ? ` (${others})` : ''}. Ticks along the bottom mark the training values of ${curve.input}.${spikeNote(curve.spikes)}${curve.base ? baseCurveNote(curve.base) : ''}`,
     x: sx,
     y: sy,
     xLabel: axisLabel(curve.input),
@@ -47,8 +49,9 @@ export function partialCurveChart(chart: ChartData, curve: CurveData, options: C
     legend: [
       { mark: legendLine(COLOURS.curve), label: 'predicted, others at medians' },
       { mark: `<path d="M3 12V5M7 12V5M11 12V5" stroke="${COLOURS.train}" stroke-width="1"/>`, label: 'training values' },
+      ...(curve.spikes && curve.spikes.intervals.length > 0 ? [{ mark: LEGEND_SPIKE, label: spikeLegendLabel(curve.spikes) }] : []),
       ...(curve.base ? [baseCurveLegend()] : []),
     ],
-    data: { input: curve.input, 'rug-count': ticks.length },
+    data: { input: curve.input, 'rug-count': ticks.length, ...(curve.spikes ? { spikes: curve.spikes.intervals.length } : {}) },
   });
 }
