@@ -107,6 +107,10 @@ export interface BaseComparison {
   holdout_rmse_change: JsonNumber | null;
   /** head gap ratio - base gap ratio. Null when either side is missing. */
   gap_ratio_change: JsonNumber | null;
+  /** Classifiers only: hold-out log-loss on the base commit, or null (the RMSE fields are null for a classifier). */
+  holdout_log_loss?: JsonNumber | null;
+  /** Classifiers only: (head hold-out log-loss - base) / base; positive = worse. Null when either side is missing. */
+  holdout_log_loss_change?: JsonNumber | null;
 }
 
 /** One model's outcome. */

@@ -7,7 +7,7 @@ import { CHECKS, runClassifierCheck, type ClassifierContext } from '../checks/in
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 import type { RepoReader } from '../repo/types.js';
-import type { BaseInput } from './base-comparison.js';
+import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { runChecks } from './run-checks.js';
 import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
 import { maxOf } from '../core/extremes.js';
@@ -82,6 +82,7 @@ export async function evaluateClassifier(
     coefficients: Array.from(model.context.fit.coefficients, jsonNumber),
     shipped: null,
     checks,
+    ...(base ? { base: compareWithBase(metrics, baseMatch, base.commit) } : {}),
     error: null,
     extra: {
       task: 'classification',
