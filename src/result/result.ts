@@ -5,6 +5,7 @@
  */
 import type { JsonNumber } from '../core/json.js';
 import type { ChartData } from './chart-types.js';
+import type { ClassifierChartData } from './classifier-chart-types.js';
 
 export { fromJsonNumber, jsonNumber, type JsonNumber } from '../core/json.js';
 
@@ -138,6 +139,8 @@ export interface ModelResult {
   extra?: Record<string, unknown>;
   /** What the HTML report and the Markdown charts draw (see model/chart-data.ts); absent for models that could not be checked. */
   charts?: ChartData;
+  /** What the HTML report draws for a classifier (run/classifier-chart-data.ts); absent for regression models and models that could not be checked. */
+  classifier_charts?: ClassifierChartData;
 }
 
 /** The whole run. */

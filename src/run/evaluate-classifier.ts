@@ -9,6 +9,7 @@ import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/resul
 import type { RepoReader } from '../repo/types.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { runChecks } from './run-checks.js';
+import { buildClassifierChartData } from './classifier-chart-data.js';
 import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
 import { maxOf } from '../core/extremes.js';
 
@@ -103,5 +104,6 @@ export async function evaluateClassifier(
         fixed: t.fixed,
       })),
     },
+    classifier_charts: buildClassifierChartData(model),
   };
 }
