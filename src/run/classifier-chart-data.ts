@@ -9,9 +9,8 @@
 import type { ModelData } from '../data/model-data.js';
 import { predictRows } from '../design/blocks.js';
 import { range } from '../design/stats.js';
-import { calibrationBins, probabilities } from '../diagnostics/classification-metrics.js';
 import { columnMedian } from '../diagnostics/column-median.js';
-import { rocCurve, thinCurve, upperHull } from '../diagnostics/roc-curve.js';
+import { thinnedRocCurve, upperHull } from '../diagnostics/roc-curve.js';
 import { CURVE_MARGIN, CURVE_POINTS, MAX_CHART_POINTS, MAX_PARTIAL_CURVES } from '../result/chart-types.js';
 import {
   CALIBRATION_BINS,
@@ -27,36 +26,48 @@ import type { FittedClassifier } from './fit-classifier.js';
 
 /** The ROC curve of one file's rows for drawing (scores: the logits, whose order is the probabilities'). */
 export function rocCurveData(y: Float64Array, eta: Float64Array, rows: number, max = ROC_MAX_POINTS): RocCurveData {
-  const curve = rocCurve(y, eta, rows);
-  const keep = thinCurve(curve.fpr, curve.tpr, Math.max(2, max));
-  const fpr = keep.map((k) => curve.fpr[k]);
-  const tpr = keep.map((k) => curve.tpr[k]);
+  const curve = thinnedRocCurve(y, eta, rows, Math.max(2, max));
   return {
     rows,
     positives: curve.positives,
     negatives: curve.negatives,
-    points: curve.fpr.length,
-    thinned: keep.length < curve.fpr.length,
-    fpr: fpr.map((v) => chartNumber(v) ?? 0),
-    tpr: tpr.map((v) => chartNumber(v) ?? 0),
-    threshold: keep.map((k) => (Number.isNaN(curve.score[k]) ? null : chartNumber(1 / (1 + Math.exp(-curve.score[k]))))),
-    hull: hullOfKept(fpr, tpr),
+    points: curve.points,
+    thinned: curve.kept.length < curve.points,
+    fpr: curve.fpr.map((v) => chartNumber(v) ?? 0),
+    tpr: curve.tpr.map((v) => chartNumber(v) ?? 0),
+    threshold: curve.score.map((v) => (Number.isNaN(v) ? null : chartNumber(1 / (1 + Math.exp(-v))))),
+    hull: hullOfKept(curve.fpr, curve.tpr),
   };
 }
 
-/** Indices of the kept points on the upper hull of the kept points (the whole hull when it was kept whole). */
+/** Indices of the kept points on the upper hull of the kept points (the whole curve's hull when it was kept whole). */
 function hullOfKept(fpr: number[], tpr: number[]): number[] {
   return upperHull(Float64Array.from(fpr), Float64Array.from(tpr));
 }
 
-/** The calibration diagram of one file ({@link CALIBRATION_BINS} equal-width bins). */
-function calibrationData(y: Float64Array, p: Float64Array, rows: number): CalibrationBinData[] {
-  return calibrationBins(y, p, rows, CALIBRATION_BINS).map((b) => ({
-    from: b.from,
-    to: b.to,
-    count: b.count,
-    predicted: chartNumber(b.predicted),
-    observed: chartNumber(b.observed),
+/**
+ * The calibration diagram of one file ({@link CALIBRATION_BINS} equal-width bins of p = 1 / (1 +
+ * exp(-eta)), as diagnostics/classification-metrics.ts calibrationBins bins them), from the
+ * logits without a second array of probabilities.
+ */
+function calibrationData(y: Float64Array, eta: Float64Array, rows: number): CalibrationBinData[] {
+  const bins = CALIBRATION_BINS;
+  const count = new Float64Array(bins);
+  const sumP = new Float64Array(bins);
+  const sumY = new Float64Array(bins);
+  for (let i = 0; i < rows; i++) {
+    const p = 1 / (1 + Math.exp(-eta[i]));
+    const b = Math.min(bins - 1, Math.floor(p * bins));
+    count[b] += 1;
+    sumP[b] += p;
+    sumY[b] += y[i];
+  }
+  return Array.from(count, (c, b) => ({
+    from: b / bins,
+    to: (b + 1) / bins,
+    count: c,
+    predicted: c > 0 ? chartNumber(sumP[b] / c) : null,
+    observed: c > 0 ? chartNumber(sumY[b] / c) : null,
   }));
 }
 
@@ -127,8 +138,8 @@ export function buildClassifierChartData(model: FittedClassifier, maxPoints = MA
     inputs,
     roc: { train: rocCurveData(train.y, trainEta, train.rows), holdout: rocCurveData(holdout.y, holdoutEta, holdout.rows) },
     calibration: {
-      train: calibrationData(train.y, probabilities(trainEta), train.rows),
-      holdout: calibrationData(holdout.y, probabilities(holdoutEta), holdout.rows),
+      train: calibrationData(train.y, trainEta, train.rows),
+      holdout: calibrationData(holdout.y, holdoutEta, holdout.rows),
     },
     train: points(train, trainEta, maxPoints),
     holdout: points(holdout, holdoutEta, maxPoints),

@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { rocAuc } from '../../src/diagnostics/classification-metrics.js';
 import { seededRandom } from '../../src/diagnostics/random.js';
-import { rocCurve, thinCurve, upperHull } from '../../src/diagnostics/roc-curve.js';
+import { rocCurve, thinCurve, thinnedRocCurve, upperHull } from '../../src/diagnostics/roc-curve.js';
 import { rocCurveData } from '../../src/run/classifier-chart-data.js';
 
 const f64 = (xs: number[]) => Float64Array.from(xs);
@@ -52,6 +52,22 @@ describe('rocCurve', () => {
     expect(Array.from(one.tpr)).toEqual([0, 1]);
   });
 
+  it('thins a curve with ties in two walks to the same points as the whole curve thinned', () => {
+    const random = seededRandom(21);
+    const n = 30000;
+    const y = new Float64Array(n);
+    const s = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      s[i] = Math.round(random() * 2000) / 2000;
+      y[i] = random() < s[i] ? 1 : 0;
+    }
+    const c = rocCurve(y, s, n);
+    const walked = thinnedRocCurve(y, s, n, 120);
+    expect(walked.points).toBe(c.fpr.length);
+    expect(walked.kept).toEqual(thinCurve(c.fpr, c.tpr, 120));
+    expect(walked.tpr).toEqual(walked.kept.map((k) => c.tpr[k]));
+  });
+
   it('leaves out rows whose score is NaN', () => {
     const c = rocCurve(f64([1, 0, 1]), f64([0.9, Number.NaN, 0.1]), 3);
     expect(c.positives).toBe(2);
@@ -91,6 +107,13 @@ describe('upperHull and thinCurve', () => {
       keep.map((k) => c.tpr[k]),
     );
     expect(Math.abs(drawn - rocAuc(y, s, n))).toBeLessThan(2e-3);
+    // Thinned in two walks without the whole curve: the same points.
+    const walked = thinnedRocCurve(y, s, n, 300);
+    expect(walked.points).toBe(n + 1);
+    expect(walked.kept).toEqual(keep);
+    expect(walked.fpr).toEqual(keep.map((k) => c.fpr[k]));
+    expect(walked.tpr).toEqual(keep.map((k) => c.tpr[k]));
+    expect(walked.score.slice(1)).toEqual(keep.slice(1).map((k) => c.score[k]));
     // The chart data: the same bound, probabilities as thresholds, the hull of the kept points.
     const data = rocCurveData(y, s, n);
     expect(data.fpr.length).toBe(keep.length);
