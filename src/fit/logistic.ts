@@ -448,6 +448,54 @@ function weightAllRows(
 }
 
 /**
+ * The out-of-fold deviance of k fits each made without one fold: per fold f, the deviance of the
+ * rows of fold f under the coefficients of fit f, in one pass over the rows. Each row's logit is
+ * summed column after column with its own fold's coefficients, as addProducts sums it, so the
+ * figures are those of predicting each fold with its own fit.
+ * @param foldOf fold of each row (0 .. k-1)
+ * @param coefficients the k fits' coefficients, fit f made without fold f
+ * @returns the deviance of each fold's rows (length k)
+ */
+export function outOfFoldDeviance(
+  design: Design,
+  data: LogisticRows,
+  foldOf: Int32Array,
+  coefficients: readonly Float64Array[],
+): Float64Array {
+  const k = coefficients.length;
+  const p = design.p;
+  const deviance = new Float64Array(k);
+  const eta = new Float64Array(Math.max(1, Math.min(data.rows, 1 << 16)));
+  const W = new Float64Array(p * k);
+  for (let f = 0; f < k; f++) for (let j = 0; j < p; j++) W[j * k + f] = coefficients[f][j];
+  forEachBlock(design, data, (X, start, m) => {
+    eta.fill(0, 0, m);
+    for (let j = 0; j < p; j++) addFoldColumn(eta, X, j * m, W, j * k, foldOf, start, m);
+    addFoldDeviance(deviance, eta, data.y, foldOf, start, m);
+  });
+  return deviance;
+}
+
+/** eta[i] += X[col + i] W[base + foldOf[start + i]] for i < m. */
+function addFoldColumn(
+  eta: Float64Array,
+  X: Float64Array,
+  col: number,
+  W: Float64Array,
+  base: number,
+  foldOf: Int32Array,
+  start: number,
+  m: number,
+): void {
+  for (let i = 0; i < m; i++) eta[i] += X[col + i] * W[base + foldOf[start + i]];
+}
+
+/** deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]) for i < m, in row order. */
+function addFoldDeviance(deviance: Float64Array, eta: Float64Array, y: Float64Array, foldOf: Int32Array, start: number, m: number): void {
+  for (let i = 0; i < m; i++) deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]);
+}
+
+/**
  * {@link weightAllRows} with each row's deviance added to its part's sum (`partDev[of[start + i]]`)
  * instead of one block sum.
  */

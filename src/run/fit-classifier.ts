@@ -25,7 +25,7 @@ import type { Folds } from '../diagnostics/folds.js';
 import { findLeakage } from '../diagnostics/leakage.js';
 import { findSeparation } from '../diagnostics/separation.js';
 import { fitFactor } from '../fit/index.js';
-import { firstStepsWithout, fitLogistic, rowDeviance, type LogisticFit } from '../fit/logistic.js';
+import { firstStepsWithout, fitLogistic, outOfFoldDeviance, rowDeviance, type LogisticFit } from '../fit/logistic.js';
 import type { RepoReader } from '../repo/types.js';
 import { planModel } from './plan.js';
 
@@ -151,18 +151,12 @@ export function crossValidateClassifier(
     ...(steps ? { firstStep: steps[f] } : {}),
   }));
   const fits = fitLogistic(design, train, options, problems);
-  const foldDeviance = new Float64Array(k);
-  const eta = new Float64Array(Math.min(train.rows, 1 << 16));
-  // Each row's logit with its own fold's coefficients (W[j k + f]), the columns added one after
-  // another as addProducts adds them, so each row's sum is the one its fold's fit gives.
-  const p = design.p;
-  const W = new Float64Array(p * k);
-  for (let f = 0; f < k; f++) for (let j = 0; j < p; j++) W[j * k + f] = fits[f].coefficients[j];
-  forEachBlock(design, train, (X, start, m) => {
-    eta.fill(0, 0, m);
-    for (let j = 0; j < p; j++) addFoldColumn(eta, X, j * m, W, j * k, folds.foldOf, start, m);
-    addFoldDeviance(foldDeviance, eta, train.y, folds.foldOf, start, m);
-  });
+  const foldDeviance = outOfFoldDeviance(
+    design,
+    train,
+    folds.foldOf,
+    fits.map((x) => x.coefficients),
+  );
   let total = 0;
   for (let f = 0; f < k; f++) total += foldDeviance[f];
   return {
@@ -172,25 +166,6 @@ export function crossValidateClassifier(
     foldRows: [...folds.sizes],
     converged: fits.every((x) => x.converged),
   };
-}
-
-/** eta[i] += X[col + i] W[base + foldOf[start + i]] for i < m. */
-function addFoldColumn(
-  eta: Float64Array,
-  X: Float64Array,
-  col: number,
-  W: Float64Array,
-  base: number,
-  foldOf: Int32Array,
-  start: number,
-  m: number,
-): void {
-  for (let i = 0; i < m; i++) eta[i] += X[col + i] * W[base + foldOf[start + i]];
-}
-
-/** deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]) for i < m, in row order. */
-function addFoldDeviance(deviance: Float64Array, eta: Float64Array, y: Float64Array, foldOf: Int32Array, start: number, m: number): void {
-  for (let i = 0; i < m; i++) deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]);
 }
 
 /** The shipped coefficients' probabilities against the refit's; null when the descriptor ships none. */

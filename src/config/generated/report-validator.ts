@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"},"classifier_charts":{"description":"What the charts of a classifier draw.","$ref":"#/$defs/classifierCharts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss":{"description":"Classifiers: hold-out log-loss there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss_change":{"description":"Classifiers: relative change of the hold-out log-loss, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}},"rocCurve":{"description":"The ROC curve of one file, thinned to at most 300 points keeping its convex hull.","type":"object","required":["rows","positives","negatives","points","thinned","fpr","tpr","threshold","hull"],"additionalProperties":false,"properties":{"rows":{"description":"Rows of the file.","$ref":"#/$defs/count"},"positives":{"description":"Positive rows.","$ref":"#/$defs/count"},"negatives":{"description":"Negative rows.","$ref":"#/$defs/count"},"points":{"description":"Points of the whole curve.","$ref":"#/$defs/count"},"thinned":{"description":"True when fewer points are kept.","type":"boolean"},"fpr":{"description":"False positive rates, ascending.","type":"array","items":{"type":"number"},"maxItems":300},"tpr":{"description":"True positive rates.","type":"array","items":{"type":"number"},"maxItems":300},"threshold":{"description":"Probability threshold of each point (null at the first).","type":"array","items":{"$ref":"#/$defs/chartNumber"},"maxItems":300},"hull":{"description":"Indices of the upper convex hull's vertices.","type":"array","items":{"$ref":"#/$defs/count"},"maxItems":300}}},"calibrationBins":{"description":"A calibration diagram: equal-width bins of the predicted probability.","type":"array","maxItems":100,"items":{"type":"object","required":["from","to","count","predicted","observed"],"additionalProperties":false,"properties":{"from":{"description":"Lower bin edge.","type":"number"},"to":{"description":"Upper bin edge.","type":"number"},"count":{"description":"Rows in the bin.","$ref":"#/$defs/count"},"predicted":{"description":"Mean predicted probability, or null when empty.","$ref":"#/$defs/chartNumber"},"observed":{"description":"Share of positives, or null when empty.","$ref":"#/$defs/chartNumber"}}}},"classifierPoints":{"description":"The rows of one file as points at 0 and 1.","type":"object","required":["rows","shown","thinned","thinning","lines","x","label","probability"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"label":{"description":"1 positive, 0 negative.","type":"array","items":{"enum":[0,1]}},"probability":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}},"classifierCharts":{"description":"Everything the charts of one classifier draw.","type":"object","required":["target","positive","negative","threshold","inputs","roc","calibration","train","holdout","curves"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"positive":{"description":"The positive label.","type":"string"},"negative":{"description":"The negative label.","type":"string"},"threshold":{"description":"Decision threshold of the accuracy figure.","type":"number"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"roc":{"description":"ROC curves of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/rocCurve"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/rocCurve"}}},"calibration":{"description":"Calibration diagrams of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/calibrationBins"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/calibrationBins"}}},"train":{"description":"Training rows.","$ref":"#/$defs/classifierPoints"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/classifierPoints"},"curves":{"description":"Predicted probability along each input, the others at their training medians.","type":"array","items":{"type":"object","required":["input","others","range","x","p"],"additionalProperties":false,"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"p":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}}},"curvesLeftOut":{"description":"Inputs with a spread left without a curve.","$ref":"#/$defs/count"}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse":{"description":"Hold-out RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_mae":{"description":"Training MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_mae":{"description":"Hold-out MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_r2":{"description":"Training R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_r2":{"description":"Hold-out R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"},"classifier_charts":{"description":"What the charts of a classifier draw.","$ref":"#/$defs/classifierCharts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new, compared or renamed.","enum":["new","compared","renamed"]},"commit":{"description":"The base commit.","type":"string"},"previous":{"description":"Status renamed: the base model compared with, and what matched it.","type":"object","required":["name","descriptor","matched_by"],"additionalProperties":false,"properties":{"name":{"description":"Its name on the base commit.","type":"string"},"descriptor":{"description":"Its descriptor path there.","type":"string"},"matched_by":{"description":"descriptor or data.","enum":["descriptor","data"]}}},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss":{"description":"Classifiers: hold-out log-loss there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss_change":{"description":"Classifiers: relative change of the hold-out log-loss, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}},"rocCurve":{"description":"The ROC curve of one file, thinned to at most 300 points keeping its convex hull.","type":"object","required":["rows","positives","negatives","points","thinned","fpr","tpr","threshold","hull"],"additionalProperties":false,"properties":{"rows":{"description":"Rows of the file.","$ref":"#/$defs/count"},"positives":{"description":"Positive rows.","$ref":"#/$defs/count"},"negatives":{"description":"Negative rows.","$ref":"#/$defs/count"},"points":{"description":"Points of the whole curve.","$ref":"#/$defs/count"},"thinned":{"description":"True when fewer points are kept.","type":"boolean"},"fpr":{"description":"False positive rates, ascending.","type":"array","items":{"type":"number"},"maxItems":300},"tpr":{"description":"True positive rates.","type":"array","items":{"type":"number"},"maxItems":300},"threshold":{"description":"Probability threshold of each point (null at the first).","type":"array","items":{"$ref":"#/$defs/chartNumber"},"maxItems":300},"hull":{"description":"Indices of the upper convex hull's vertices.","type":"array","items":{"$ref":"#/$defs/count"},"maxItems":300}}},"calibrationBins":{"description":"A calibration diagram: equal-width bins of the predicted probability.","type":"array","maxItems":100,"items":{"type":"object","required":["from","to","count","predicted","observed"],"additionalProperties":false,"properties":{"from":{"description":"Lower bin edge.","type":"number"},"to":{"description":"Upper bin edge.","type":"number"},"count":{"description":"Rows in the bin.","$ref":"#/$defs/count"},"predicted":{"description":"Mean predicted probability, or null when empty.","$ref":"#/$defs/chartNumber"},"observed":{"description":"Share of positives, or null when empty.","$ref":"#/$defs/chartNumber"}}}},"classifierPoints":{"description":"The rows of one file as points at 0 and 1.","type":"object","required":["rows","shown","thinned","thinning","lines","x","label","probability"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"label":{"description":"1 positive, 0 negative.","type":"array","items":{"enum":[0,1]}},"probability":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}},"classifierCharts":{"description":"Everything the charts of one classifier draw.","type":"object","required":["target","positive","negative","threshold","inputs","roc","calibration","train","holdout","curves"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"positive":{"description":"The positive label.","type":"string"},"negative":{"description":"The negative label.","type":"string"},"threshold":{"description":"Decision threshold of the accuracy figure.","type":"number"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"roc":{"description":"ROC curves of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/rocCurve"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/rocCurve"}}},"calibration":{"description":"Calibration diagrams of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/calibrationBins"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/calibrationBins"}}},"train":{"description":"Training rows.","$ref":"#/$defs/classifierPoints"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/classifierPoints"},"curves":{"description":"Predicted probability along each input, the others at their training medians.","type":"array","items":{"type":"object","required":["input","others","range","x","p"],"additionalProperties":false,"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"p":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}}},"curvesLeftOut":{"description":"Inputs with a spread left without a curve.","$ref":"#/$defs/count"}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,7 +54,7 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"},"classifier_charts":{"description":"What the charts of a classifier draw.","$ref":"#/$defs/classifierCharts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse":{"description":"Hold-out RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_mae":{"description":"Training MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_mae":{"description":"Hold-out MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_r2":{"description":"Training R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_r2":{"description":"Hold-out R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"},"classifier_charts":{"description":"What the charts of a classifier draw.","$ref":"#/$defs/classifierCharts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
@@ -548,7 +548,7 @@ return errors === 0;
 }
 validate86.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema26 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss":{"description":"Classifiers: hold-out log-loss there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss_change":{"description":"Classifiers: relative change of the hold-out log-loss, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
+const schema26 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new, compared or renamed.","enum":["new","compared","renamed"]},"commit":{"description":"The base commit.","type":"string"},"previous":{"description":"Status renamed: the base model compared with, and what matched it.","type":"object","required":["name","descriptor","matched_by"],"additionalProperties":false,"properties":{"name":{"description":"Its name on the base commit.","type":"string"},"descriptor":{"description":"Its descriptor path there.","type":"string"},"matched_by":{"description":"descriptor or data.","enum":["descriptor","data"]}}},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss":{"description":"Classifiers: hold-out log-loss there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss_change":{"description":"Classifiers: relative change of the hold-out log-loss, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
 
 function validate92(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
@@ -570,7 +570,7 @@ return false;
 else {
 const _errs1 = errors;
 for(const key0 in data){
-if(!((((((((key0 === "status") || (key0 === "commit")) || (key0 === "holdout_rmse")) || (key0 === "gap_ratio")) || (key0 === "holdout_rmse_change")) || (key0 === "gap_ratio_change")) || (key0 === "holdout_log_loss")) || (key0 === "holdout_log_loss_change"))){
+if(!(func1.call(schema26.properties, key0))){
 validate92.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
@@ -580,7 +580,7 @@ if(_errs1 === errors){
 if(data.status !== undefined){
 let data0 = data.status;
 const _errs2 = errors;
-if(!((data0 === "new") || (data0 === "compared"))){
+if(!(((data0 === "new") || (data0 === "compared")) || (data0 === "renamed"))){
 validate92.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema26.properties.status.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
@@ -602,20 +602,92 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.holdout_rmse !== undefined){
-let data2 = data.holdout_rmse;
+if(data.previous !== undefined){
+let data2 = data.previous;
 const _errs5 = errors;
-const _errs6 = errors;
-let valid1 = false;
+if(errors === _errs5){
+if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
+let missing1;
+if((((data2.name === undefined) && (missing1 = "name")) || ((data2.descriptor === undefined) && (missing1 = "descriptor"))) || ((data2.matched_by === undefined) && (missing1 = "matched_by"))){
+validate92.errors = [{instancePath:instancePath+"/previous",schemaPath:"#/properties/previous/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+return false;
+}
+else {
 const _errs7 = errors;
-if(!(validate68(data2, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+for(const key1 in data2){
+if(!(((key1 === "name") || (key1 === "descriptor")) || (key1 === "matched_by"))){
+validate92.errors = [{instancePath:instancePath+"/previous",schemaPath:"#/properties/previous/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs7 === errors){
+if(data2.name !== undefined){
+const _errs8 = errors;
+if(typeof data2.name !== "string"){
+validate92.errors = [{instancePath:instancePath+"/previous/name",schemaPath:"#/properties/previous/properties/name/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid1 = _errs8 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data2.descriptor !== undefined){
+const _errs10 = errors;
+if(typeof data2.descriptor !== "string"){
+validate92.errors = [{instancePath:instancePath+"/previous/descriptor",schemaPath:"#/properties/previous/properties/descriptor/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid1 = _errs10 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data2.matched_by !== undefined){
+let data5 = data2.matched_by;
+const _errs12 = errors;
+if(!((data5 === "descriptor") || (data5 === "data"))){
+validate92.errors = [{instancePath:instancePath+"/previous/matched_by",schemaPath:"#/properties/previous/properties/matched_by/enum",keyword:"enum",params:{allowedValues: schema26.properties.previous.properties.matched_by.enum},message:"must be equal to one of the allowed values"}];
+return false;
+}
+var valid1 = _errs12 === errors;
+}
+else {
+var valid1 = true;
+}
+}
+}
+}
+}
+}
+else {
+validate92.errors = [{instancePath:instancePath+"/previous",schemaPath:"#/properties/previous/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs5 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_rmse !== undefined){
+let data6 = data.holdout_rmse;
+const _errs13 = errors;
+const _errs14 = errors;
+let valid2 = false;
+const _errs15 = errors;
+if(!(validate68(data6, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid0 = _errs7 === errors;
-valid1 = valid1 || _valid0;
-const _errs8 = errors;
-if(data2 !== null){
+var _valid0 = _errs15 === errors;
+valid2 = valid2 || _valid0;
+const _errs16 = errors;
+if(data6 !== null){
 const err0 = {instancePath:instancePath+"/holdout_rmse",schemaPath:"#/properties/holdout_rmse/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err0];
@@ -625,9 +697,9 @@ vErrors.push(err0);
 }
 errors++;
 }
-var _valid0 = _errs8 === errors;
-valid1 = valid1 || _valid0;
-if(!valid1){
+var _valid0 = _errs16 === errors;
+valid2 = valid2 || _valid0;
+if(!valid2){
 const err1 = {instancePath:instancePath+"/holdout_rmse",schemaPath:"#/properties/holdout_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err1];
@@ -640,36 +712,36 @@ validate92.errors = vErrors;
 return false;
 }
 else {
-errors = _errs6;
+errors = _errs14;
 if(vErrors !== null){
-if(_errs6){
-vErrors.length = _errs6;
+if(_errs14){
+vErrors.length = _errs14;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs5 === errors;
+var valid0 = _errs13 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.gap_ratio !== undefined){
-let data3 = data.gap_ratio;
-const _errs10 = errors;
-const _errs11 = errors;
-let valid2 = false;
-const _errs12 = errors;
-if(!(validate68(data3, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+let data7 = data.gap_ratio;
+const _errs18 = errors;
+const _errs19 = errors;
+let valid3 = false;
+const _errs20 = errors;
+if(!(validate68(data7, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid1 = _errs12 === errors;
-valid2 = valid2 || _valid1;
-const _errs13 = errors;
-if(data3 !== null){
+var _valid1 = _errs20 === errors;
+valid3 = valid3 || _valid1;
+const _errs21 = errors;
+if(data7 !== null){
 const err2 = {instancePath:instancePath+"/gap_ratio",schemaPath:"#/properties/gap_ratio/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err2];
@@ -679,9 +751,9 @@ vErrors.push(err2);
 }
 errors++;
 }
-var _valid1 = _errs13 === errors;
-valid2 = valid2 || _valid1;
-if(!valid2){
+var _valid1 = _errs21 === errors;
+valid3 = valid3 || _valid1;
+if(!valid3){
 const err3 = {instancePath:instancePath+"/gap_ratio",schemaPath:"#/properties/gap_ratio/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err3];
@@ -694,36 +766,36 @@ validate92.errors = vErrors;
 return false;
 }
 else {
-errors = _errs11;
+errors = _errs19;
 if(vErrors !== null){
-if(_errs11){
-vErrors.length = _errs11;
+if(_errs19){
+vErrors.length = _errs19;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs10 === errors;
+var valid0 = _errs18 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.holdout_rmse_change !== undefined){
-let data4 = data.holdout_rmse_change;
-const _errs15 = errors;
-const _errs16 = errors;
-let valid3 = false;
-const _errs17 = errors;
-if(!(validate68(data4, {instancePath:instancePath+"/holdout_rmse_change",parentData:data,parentDataProperty:"holdout_rmse_change",rootData,dynamicAnchors}))){
+let data8 = data.holdout_rmse_change;
+const _errs23 = errors;
+const _errs24 = errors;
+let valid4 = false;
+const _errs25 = errors;
+if(!(validate68(data8, {instancePath:instancePath+"/holdout_rmse_change",parentData:data,parentDataProperty:"holdout_rmse_change",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid2 = _errs17 === errors;
-valid3 = valid3 || _valid2;
-const _errs18 = errors;
-if(data4 !== null){
+var _valid2 = _errs25 === errors;
+valid4 = valid4 || _valid2;
+const _errs26 = errors;
+if(data8 !== null){
 const err4 = {instancePath:instancePath+"/holdout_rmse_change",schemaPath:"#/properties/holdout_rmse_change/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err4];
@@ -733,9 +805,9 @@ vErrors.push(err4);
 }
 errors++;
 }
-var _valid2 = _errs18 === errors;
-valid3 = valid3 || _valid2;
-if(!valid3){
+var _valid2 = _errs26 === errors;
+valid4 = valid4 || _valid2;
+if(!valid4){
 const err5 = {instancePath:instancePath+"/holdout_rmse_change",schemaPath:"#/properties/holdout_rmse_change/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err5];
@@ -748,36 +820,36 @@ validate92.errors = vErrors;
 return false;
 }
 else {
-errors = _errs16;
+errors = _errs24;
 if(vErrors !== null){
-if(_errs16){
-vErrors.length = _errs16;
+if(_errs24){
+vErrors.length = _errs24;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs15 === errors;
+var valid0 = _errs23 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.gap_ratio_change !== undefined){
-let data5 = data.gap_ratio_change;
-const _errs20 = errors;
-const _errs21 = errors;
-let valid4 = false;
-const _errs22 = errors;
-if(!(validate68(data5, {instancePath:instancePath+"/gap_ratio_change",parentData:data,parentDataProperty:"gap_ratio_change",rootData,dynamicAnchors}))){
+let data9 = data.gap_ratio_change;
+const _errs28 = errors;
+const _errs29 = errors;
+let valid5 = false;
+const _errs30 = errors;
+if(!(validate68(data9, {instancePath:instancePath+"/gap_ratio_change",parentData:data,parentDataProperty:"gap_ratio_change",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid3 = _errs22 === errors;
-valid4 = valid4 || _valid3;
-const _errs23 = errors;
-if(data5 !== null){
+var _valid3 = _errs30 === errors;
+valid5 = valid5 || _valid3;
+const _errs31 = errors;
+if(data9 !== null){
 const err6 = {instancePath:instancePath+"/gap_ratio_change",schemaPath:"#/properties/gap_ratio_change/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err6];
@@ -787,9 +859,9 @@ vErrors.push(err6);
 }
 errors++;
 }
-var _valid3 = _errs23 === errors;
-valid4 = valid4 || _valid3;
-if(!valid4){
+var _valid3 = _errs31 === errors;
+valid5 = valid5 || _valid3;
+if(!valid5){
 const err7 = {instancePath:instancePath+"/gap_ratio_change",schemaPath:"#/properties/gap_ratio_change/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err7];
@@ -802,36 +874,36 @@ validate92.errors = vErrors;
 return false;
 }
 else {
-errors = _errs21;
+errors = _errs29;
 if(vErrors !== null){
-if(_errs21){
-vErrors.length = _errs21;
+if(_errs29){
+vErrors.length = _errs29;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs20 === errors;
+var valid0 = _errs28 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.holdout_log_loss !== undefined){
-let data6 = data.holdout_log_loss;
-const _errs25 = errors;
-const _errs26 = errors;
-let valid5 = false;
-const _errs27 = errors;
-if(!(validate68(data6, {instancePath:instancePath+"/holdout_log_loss",parentData:data,parentDataProperty:"holdout_log_loss",rootData,dynamicAnchors}))){
+let data10 = data.holdout_log_loss;
+const _errs33 = errors;
+const _errs34 = errors;
+let valid6 = false;
+const _errs35 = errors;
+if(!(validate68(data10, {instancePath:instancePath+"/holdout_log_loss",parentData:data,parentDataProperty:"holdout_log_loss",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs27 === errors;
-valid5 = valid5 || _valid4;
-const _errs28 = errors;
-if(data6 !== null){
+var _valid4 = _errs35 === errors;
+valid6 = valid6 || _valid4;
+const _errs36 = errors;
+if(data10 !== null){
 const err8 = {instancePath:instancePath+"/holdout_log_loss",schemaPath:"#/properties/holdout_log_loss/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err8];
@@ -841,9 +913,9 @@ vErrors.push(err8);
 }
 errors++;
 }
-var _valid4 = _errs28 === errors;
-valid5 = valid5 || _valid4;
-if(!valid5){
+var _valid4 = _errs36 === errors;
+valid6 = valid6 || _valid4;
+if(!valid6){
 const err9 = {instancePath:instancePath+"/holdout_log_loss",schemaPath:"#/properties/holdout_log_loss/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err9];
@@ -856,36 +928,36 @@ validate92.errors = vErrors;
 return false;
 }
 else {
-errors = _errs26;
+errors = _errs34;
 if(vErrors !== null){
-if(_errs26){
-vErrors.length = _errs26;
+if(_errs34){
+vErrors.length = _errs34;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs25 === errors;
+var valid0 = _errs33 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.holdout_log_loss_change !== undefined){
-let data7 = data.holdout_log_loss_change;
-const _errs30 = errors;
-const _errs31 = errors;
-let valid6 = false;
-const _errs32 = errors;
-if(!(validate68(data7, {instancePath:instancePath+"/holdout_log_loss_change",parentData:data,parentDataProperty:"holdout_log_loss_change",rootData,dynamicAnchors}))){
+let data11 = data.holdout_log_loss_change;
+const _errs38 = errors;
+const _errs39 = errors;
+let valid7 = false;
+const _errs40 = errors;
+if(!(validate68(data11, {instancePath:instancePath+"/holdout_log_loss_change",parentData:data,parentDataProperty:"holdout_log_loss_change",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs32 === errors;
-valid6 = valid6 || _valid5;
-const _errs33 = errors;
-if(data7 !== null){
+var _valid5 = _errs40 === errors;
+valid7 = valid7 || _valid5;
+const _errs41 = errors;
+if(data11 !== null){
 const err10 = {instancePath:instancePath+"/holdout_log_loss_change",schemaPath:"#/properties/holdout_log_loss_change/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err10];
@@ -895,9 +967,9 @@ vErrors.push(err10);
 }
 errors++;
 }
-var _valid5 = _errs33 === errors;
-valid6 = valid6 || _valid5;
-if(!valid6){
+var _valid5 = _errs41 === errors;
+valid7 = valid7 || _valid5;
+if(!valid7){
 const err11 = {instancePath:instancePath+"/holdout_log_loss_change",schemaPath:"#/properties/holdout_log_loss_change/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err11];
@@ -910,20 +982,21 @@ validate92.errors = vErrors;
 return false;
 }
 else {
-errors = _errs31;
+errors = _errs39;
 if(vErrors !== null){
-if(_errs31){
-vErrors.length = _errs31;
+if(_errs39){
+vErrors.length = _errs39;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs30 === errors;
+var valid0 = _errs38 === errors;
 }
 else {
 var valid0 = true;
+}
 }
 }
 }
@@ -3468,118 +3541,20 @@ break;
 }
 if(_errs28 === errors){
 if(data12.train_rmse !== undefined){
+let data14 = data12.train_rmse;
 const _errs36 = errors;
-if(!(validate68(data12.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data12,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs36 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.holdout_rmse !== undefined){
 const _errs37 = errors;
-if(!(validate68(data12.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data12,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs37 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.train_mae !== undefined){
+let valid8 = false;
 const _errs38 = errors;
-if(!(validate68(data12.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data12,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+if(!(validate68(data14, {instancePath:instancePath+"/metrics/train_rmse",parentData:data12,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid7 = _errs38 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.holdout_mae !== undefined){
+var _valid2 = _errs38 === errors;
+valid8 = valid8 || _valid2;
 const _errs39 = errors;
-if(!(validate68(data12.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data12,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs39 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.train_r2 !== undefined){
-const _errs40 = errors;
-if(!(validate68(data12.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data12,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs40 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.holdout_r2 !== undefined){
-const _errs41 = errors;
-if(!(validate68(data12.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data12,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs41 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.gap_ratio !== undefined){
-const _errs42 = errors;
-if(!(validate68(data12.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data12,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs42 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.params_per_sample !== undefined){
-const _errs43 = errors;
-if(!(validate68(data12.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data12,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs43 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.max_std_coefficient !== undefined){
-const _errs44 = errors;
-if(!(validate68(data12.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data12,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs44 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.max_std_coefficient_column !== undefined){
-let data23 = data12.max_std_coefficient_column;
-const _errs45 = errors;
-if((typeof data23 !== "string") && (data23 !== null)){
-const err4 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
+if(data14 !== null){
+const err4 = {instancePath:instancePath+"/metrics/train_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/train_rmse/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3588,63 +3563,10 @@ vErrors.push(err4);
 }
 errors++;
 }
-var valid7 = _errs45 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.max_abs_coefficient !== undefined){
-const _errs47 = errors;
-if(!(validate68(data12.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data12,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs47 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.rank !== undefined){
-const _errs48 = errors;
-if(!(validate55(data12.rank, {instancePath:instancePath+"/metrics/rank",parentData:data12,parentDataProperty:"rank",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs48 === errors;
-}
-else {
-var valid7 = true;
-}
-if(valid7){
-if(data12.condition_number !== undefined){
-const _errs49 = errors;
-if(!(validate68(data12.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data12,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid7 = _errs49 === errors;
-}
-else {
-var valid7 = true;
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-else {
-const err5 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+var _valid2 = _errs39 === errors;
+valid8 = valid8 || _valid2;
+if(!valid8){
+const err5 = {instancePath:instancePath+"/metrics/train_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/train_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3653,16 +3575,447 @@ vErrors.push(err5);
 }
 errors++;
 }
+else {
+errors = _errs37;
+if(vErrors !== null){
+if(_errs37){
+vErrors.length = _errs37;
 }
-var _valid0 = _errs26 === errors;
-valid4 = valid4 || _valid0;
-if(!valid4){
-const err6 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs36 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.holdout_rmse !== undefined){
+let data15 = data12.holdout_rmse;
+const _errs41 = errors;
+const _errs42 = errors;
+let valid9 = false;
+const _errs43 = errors;
+if(!(validate68(data15, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data12,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid3 = _errs43 === errors;
+valid9 = valid9 || _valid3;
+const _errs44 = errors;
+if(data15 !== null){
+const err6 = {instancePath:instancePath+"/metrics/holdout_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_rmse/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err6];
 }
 else {
 vErrors.push(err6);
+}
+errors++;
+}
+var _valid3 = _errs44 === errors;
+valid9 = valid9 || _valid3;
+if(!valid9){
+const err7 = {instancePath:instancePath+"/metrics/holdout_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+else {
+errors = _errs42;
+if(vErrors !== null){
+if(_errs42){
+vErrors.length = _errs42;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs41 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.train_mae !== undefined){
+let data16 = data12.train_mae;
+const _errs46 = errors;
+const _errs47 = errors;
+let valid10 = false;
+const _errs48 = errors;
+if(!(validate68(data16, {instancePath:instancePath+"/metrics/train_mae",parentData:data12,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid4 = _errs48 === errors;
+valid10 = valid10 || _valid4;
+const _errs49 = errors;
+if(data16 !== null){
+const err8 = {instancePath:instancePath+"/metrics/train_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/train_mae/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+var _valid4 = _errs49 === errors;
+valid10 = valid10 || _valid4;
+if(!valid10){
+const err9 = {instancePath:instancePath+"/metrics/train_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/train_mae/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+else {
+errors = _errs47;
+if(vErrors !== null){
+if(_errs47){
+vErrors.length = _errs47;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs46 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.holdout_mae !== undefined){
+let data17 = data12.holdout_mae;
+const _errs51 = errors;
+const _errs52 = errors;
+let valid11 = false;
+const _errs53 = errors;
+if(!(validate68(data17, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data12,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid5 = _errs53 === errors;
+valid11 = valid11 || _valid5;
+const _errs54 = errors;
+if(data17 !== null){
+const err10 = {instancePath:instancePath+"/metrics/holdout_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_mae/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+var _valid5 = _errs54 === errors;
+valid11 = valid11 || _valid5;
+if(!valid11){
+const err11 = {instancePath:instancePath+"/metrics/holdout_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_mae/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+else {
+errors = _errs52;
+if(vErrors !== null){
+if(_errs52){
+vErrors.length = _errs52;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs51 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.train_r2 !== undefined){
+let data18 = data12.train_r2;
+const _errs56 = errors;
+const _errs57 = errors;
+let valid12 = false;
+const _errs58 = errors;
+if(!(validate68(data18, {instancePath:instancePath+"/metrics/train_r2",parentData:data12,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid6 = _errs58 === errors;
+valid12 = valid12 || _valid6;
+const _errs59 = errors;
+if(data18 !== null){
+const err12 = {instancePath:instancePath+"/metrics/train_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/train_r2/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+var _valid6 = _errs59 === errors;
+valid12 = valid12 || _valid6;
+if(!valid12){
+const err13 = {instancePath:instancePath+"/metrics/train_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/train_r2/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+else {
+errors = _errs57;
+if(vErrors !== null){
+if(_errs57){
+vErrors.length = _errs57;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs56 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.holdout_r2 !== undefined){
+let data19 = data12.holdout_r2;
+const _errs61 = errors;
+const _errs62 = errors;
+let valid13 = false;
+const _errs63 = errors;
+if(!(validate68(data19, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data12,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid7 = _errs63 === errors;
+valid13 = valid13 || _valid7;
+const _errs64 = errors;
+if(data19 !== null){
+const err14 = {instancePath:instancePath+"/metrics/holdout_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_r2/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+var _valid7 = _errs64 === errors;
+valid13 = valid13 || _valid7;
+if(!valid13){
+const err15 = {instancePath:instancePath+"/metrics/holdout_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_r2/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+else {
+errors = _errs62;
+if(vErrors !== null){
+if(_errs62){
+vErrors.length = _errs62;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs61 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.gap_ratio !== undefined){
+const _errs66 = errors;
+if(!(validate68(data12.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data12,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs66 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.params_per_sample !== undefined){
+const _errs67 = errors;
+if(!(validate68(data12.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data12,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs67 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.max_std_coefficient !== undefined){
+let data22 = data12.max_std_coefficient;
+const _errs68 = errors;
+const _errs69 = errors;
+let valid14 = false;
+const _errs70 = errors;
+if(!(validate68(data22, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data12,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid8 = _errs70 === errors;
+valid14 = valid14 || _valid8;
+const _errs71 = errors;
+if(data22 !== null){
+const err16 = {instancePath:instancePath+"/metrics/max_std_coefficient",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+var _valid8 = _errs71 === errors;
+valid14 = valid14 || _valid8;
+if(!valid14){
+const err17 = {instancePath:instancePath+"/metrics/max_std_coefficient",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+else {
+errors = _errs69;
+if(vErrors !== null){
+if(_errs69){
+vErrors.length = _errs69;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid7 = _errs68 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.max_std_coefficient_column !== undefined){
+let data23 = data12.max_std_coefficient_column;
+const _errs73 = errors;
+if((typeof data23 !== "string") && (data23 !== null)){
+const err18 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+var valid7 = _errs73 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.max_abs_coefficient !== undefined){
+const _errs75 = errors;
+if(!(validate68(data12.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data12,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs75 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.rank !== undefined){
+const _errs76 = errors;
+if(!(validate55(data12.rank, {instancePath:instancePath+"/metrics/rank",parentData:data12,parentDataProperty:"rank",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs76 === errors;
+}
+else {
+var valid7 = true;
+}
+if(valid7){
+if(data12.condition_number !== undefined){
+const _errs77 = errors;
+if(!(validate68(data12.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data12,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid7 = _errs77 === errors;
+}
+else {
+var valid7 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+var _valid0 = _errs26 === errors;
+valid4 = valid4 || _valid0;
+if(!valid4){
+const err20 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
 }
 errors++;
 validate61.errors = vErrors;
@@ -3687,19 +4040,19 @@ var valid0 = true;
 if(valid0){
 if(data.coefficients !== undefined){
 let data27 = data.coefficients;
-const _errs50 = errors;
-if(errors === _errs50){
+const _errs78 = errors;
+if(errors === _errs78){
 if(Array.isArray(data27)){
-var valid8 = true;
+var valid15 = true;
 const len1 = data27.length;
 for(let i1=0; i1<len1; i1++){
-const _errs52 = errors;
+const _errs80 = errors;
 if(!(validate68(data27[i1], {instancePath:instancePath+"/coefficients/" + i1,parentData:data27,parentDataProperty:i1,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid8 = _errs52 === errors;
-if(!valid8){
+var valid15 = _errs80 === errors;
+if(!valid15){
 break;
 }
 }
@@ -3709,7 +4062,7 @@ validate61.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs50 === errors;
+var valid0 = _errs78 === errors;
 }
 else {
 var valid0 = true;
@@ -3717,86 +4070,86 @@ var valid0 = true;
 if(valid0){
 if(data.shipped !== undefined){
 let data29 = data.shipped;
-const _errs53 = errors;
-const _errs54 = errors;
-let valid9 = false;
-const _errs55 = errors;
+const _errs81 = errors;
+const _errs82 = errors;
+let valid16 = false;
+const _errs83 = errors;
 if(data29 !== null){
-const err7 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err21 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err7];
+vErrors = [err21];
 }
 else {
-vErrors.push(err7);
+vErrors.push(err21);
 }
 errors++;
 }
-var _valid2 = _errs55 === errors;
-valid9 = valid9 || _valid2;
-const _errs57 = errors;
-if(errors === _errs57){
+var _valid9 = _errs83 === errors;
+valid16 = valid16 || _valid9;
+const _errs85 = errors;
+if(errors === _errs85){
 if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
 let missing3;
 if((((data29.train_rmse === undefined) && (missing3 = "train_rmse")) || ((data29.holdout_rmse === undefined) && (missing3 = "holdout_rmse"))) || ((data29.max_coefficient_difference === undefined) && (missing3 = "max_coefficient_difference"))){
-const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"};
+const err22 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"};
 if(vErrors === null){
-vErrors = [err8];
+vErrors = [err22];
 }
 else {
-vErrors.push(err8);
+vErrors.push(err22);
 }
 errors++;
 }
 else {
-const _errs59 = errors;
+const _errs87 = errors;
 for(const key4 in data29){
 if(!(((key4 === "train_rmse") || (key4 === "holdout_rmse")) || (key4 === "max_coefficient_difference"))){
-const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"};
+const err23 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"};
 if(vErrors === null){
-vErrors = [err9];
+vErrors = [err23];
 }
 else {
-vErrors.push(err9);
+vErrors.push(err23);
 }
 errors++;
 break;
 }
 }
-if(_errs59 === errors){
+if(_errs87 === errors){
 if(data29.train_rmse !== undefined){
-const _errs60 = errors;
+const _errs88 = errors;
 if(!(validate68(data29.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data29,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs60 === errors;
+var valid17 = _errs88 === errors;
 }
 else {
-var valid10 = true;
+var valid17 = true;
 }
-if(valid10){
+if(valid17){
 if(data29.holdout_rmse !== undefined){
-const _errs61 = errors;
+const _errs89 = errors;
 if(!(validate68(data29.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data29,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs61 === errors;
+var valid17 = _errs89 === errors;
 }
 else {
-var valid10 = true;
+var valid17 = true;
 }
-if(valid10){
+if(valid17){
 if(data29.max_coefficient_difference !== undefined){
-const _errs62 = errors;
+const _errs90 = errors;
 if(!(validate68(data29.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data29,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs62 === errors;
+var valid17 = _errs90 === errors;
 }
 else {
-var valid10 = true;
+var valid17 = true;
 }
 }
 }
@@ -3804,42 +4157,42 @@ var valid10 = true;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+const err24 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
 if(vErrors === null){
-vErrors = [err10];
+vErrors = [err24];
 }
 else {
-vErrors.push(err10);
+vErrors.push(err24);
 }
 errors++;
 }
 }
-var _valid2 = _errs57 === errors;
-valid9 = valid9 || _valid2;
-if(!valid9){
-const err11 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid9 = _errs85 === errors;
+valid16 = valid16 || _valid9;
+if(!valid16){
+const err25 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err11];
+vErrors = [err25];
 }
 else {
-vErrors.push(err11);
+vErrors.push(err25);
 }
 errors++;
 validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs54;
+errors = _errs82;
 if(vErrors !== null){
-if(_errs54){
-vErrors.length = _errs54;
+if(_errs82){
+vErrors.length = _errs82;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs53 === errors;
+var valid0 = _errs81 === errors;
 }
 else {
 var valid0 = true;
@@ -3847,19 +4200,19 @@ var valid0 = true;
 if(valid0){
 if(data.checks !== undefined){
 let data33 = data.checks;
-const _errs63 = errors;
-if(errors === _errs63){
+const _errs91 = errors;
+if(errors === _errs91){
 if(Array.isArray(data33)){
-var valid11 = true;
+var valid18 = true;
 const len2 = data33.length;
 for(let i2=0; i2<len2; i2++){
-const _errs65 = errors;
+const _errs93 = errors;
 if(!(validate86(data33[i2], {instancePath:instancePath+"/checks/" + i2,parentData:data33,parentDataProperty:i2,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid11 = _errs65 === errors;
-if(!valid11){
+var valid18 = _errs93 === errors;
+if(!valid18){
 break;
 }
 }
@@ -3869,19 +4222,19 @@ validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properti
 return false;
 }
 }
-var valid0 = _errs63 === errors;
+var valid0 = _errs91 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.base !== undefined){
-const _errs66 = errors;
+const _errs94 = errors;
 if(!(validate92(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs66 === errors;
+var valid0 = _errs94 === errors;
 }
 else {
 var valid0 = true;
@@ -3889,209 +4242,209 @@ var valid0 = true;
 if(valid0){
 if(data.error !== undefined){
 let data36 = data.error;
-const _errs67 = errors;
-const _errs68 = errors;
-let valid12 = false;
-const _errs69 = errors;
+const _errs95 = errors;
+const _errs96 = errors;
+let valid19 = false;
+const _errs97 = errors;
 if(data36 !== null){
-const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err26 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err12];
+vErrors = [err26];
 }
 else {
-vErrors.push(err12);
+vErrors.push(err26);
 }
 errors++;
 }
-var _valid3 = _errs69 === errors;
-valid12 = valid12 || _valid3;
-const _errs71 = errors;
-if(errors === _errs71){
+var _valid10 = _errs97 === errors;
+valid19 = valid19 || _valid10;
+const _errs99 = errors;
+if(errors === _errs99){
 if(data36 && typeof data36 == "object" && !Array.isArray(data36)){
 let missing4;
 if(((((data36.message === undefined) && (missing4 = "message")) || ((data36.file === undefined) && (missing4 = "file"))) || ((data36.line === undefined) && (missing4 = "line"))) || ((data36.code === undefined) && (missing4 = "code"))){
-const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
+const err27 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
 if(vErrors === null){
-vErrors = [err13];
+vErrors = [err27];
 }
 else {
-vErrors.push(err13);
+vErrors.push(err27);
 }
 errors++;
 }
 else {
-const _errs73 = errors;
+const _errs101 = errors;
 for(const key5 in data36){
 if(!(((((key5 === "message") || (key5 === "file")) || (key5 === "line")) || (key5 === "column")) || (key5 === "code"))){
-const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
+const err28 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
 if(vErrors === null){
-vErrors = [err14];
+vErrors = [err28];
 }
 else {
-vErrors.push(err14);
+vErrors.push(err28);
 }
 errors++;
 break;
 }
 }
-if(_errs73 === errors){
+if(_errs101 === errors){
 if(data36.message !== undefined){
-const _errs74 = errors;
+const _errs102 = errors;
 if(typeof data36.message !== "string"){
-const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
+const err29 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
-vErrors = [err15];
+vErrors = [err29];
 }
 else {
-vErrors.push(err15);
+vErrors.push(err29);
 }
 errors++;
 }
-var valid13 = _errs74 === errors;
+var valid20 = _errs102 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
-if(valid13){
+if(valid20){
 if(data36.file !== undefined){
 let data38 = data36.file;
-const _errs76 = errors;
+const _errs104 = errors;
 if((typeof data38 !== "string") && (data38 !== null)){
-const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
+const err30 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
-vErrors = [err16];
+vErrors = [err30];
 }
 else {
-vErrors.push(err16);
+vErrors.push(err30);
 }
 errors++;
 }
-var valid13 = _errs76 === errors;
+var valid20 = _errs104 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
-if(valid13){
+if(valid20){
 if(data36.line !== undefined){
 let data39 = data36.line;
-const _errs78 = errors;
-const _errs79 = errors;
-let valid14 = false;
-const _errs80 = errors;
+const _errs106 = errors;
+const _errs107 = errors;
+let valid21 = false;
+const _errs108 = errors;
 if(!(validate88(data39, {instancePath:instancePath+"/error/line",parentData:data36,parentDataProperty:"line",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs80 === errors;
-valid14 = valid14 || _valid4;
-const _errs81 = errors;
+var _valid11 = _errs108 === errors;
+valid21 = valid21 || _valid11;
+const _errs109 = errors;
 if(data39 !== null){
-const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err31 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err17];
+vErrors = [err31];
 }
 else {
-vErrors.push(err17);
+vErrors.push(err31);
 }
 errors++;
 }
-var _valid4 = _errs81 === errors;
-valid14 = valid14 || _valid4;
-if(!valid14){
-const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid11 = _errs109 === errors;
+valid21 = valid21 || _valid11;
+if(!valid21){
+const err32 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err18];
+vErrors = [err32];
 }
 else {
-vErrors.push(err18);
+vErrors.push(err32);
 }
 errors++;
 }
 else {
-errors = _errs79;
+errors = _errs107;
 if(vErrors !== null){
-if(_errs79){
-vErrors.length = _errs79;
+if(_errs107){
+vErrors.length = _errs107;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid13 = _errs78 === errors;
+var valid20 = _errs106 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
-if(valid13){
+if(valid20){
 if(data36.column !== undefined){
 let data40 = data36.column;
-const _errs83 = errors;
-const _errs84 = errors;
-let valid15 = false;
-const _errs85 = errors;
+const _errs111 = errors;
+const _errs112 = errors;
+let valid22 = false;
+const _errs113 = errors;
 if(!(validate88(data40, {instancePath:instancePath+"/error/column",parentData:data36,parentDataProperty:"column",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs85 === errors;
-valid15 = valid15 || _valid5;
-const _errs86 = errors;
+var _valid12 = _errs113 === errors;
+valid22 = valid22 || _valid12;
+const _errs114 = errors;
 if(data40 !== null){
-const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err33 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err19];
+vErrors = [err33];
 }
 else {
-vErrors.push(err19);
+vErrors.push(err33);
 }
 errors++;
 }
-var _valid5 = _errs86 === errors;
-valid15 = valid15 || _valid5;
-if(!valid15){
-const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid12 = _errs114 === errors;
+valid22 = valid22 || _valid12;
+if(!valid22){
+const err34 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err20];
+vErrors = [err34];
 }
 else {
-vErrors.push(err20);
+vErrors.push(err34);
 }
 errors++;
 }
 else {
-errors = _errs84;
+errors = _errs112;
 if(vErrors !== null){
-if(_errs84){
-vErrors.length = _errs84;
+if(_errs112){
+vErrors.length = _errs112;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid13 = _errs83 === errors;
+var valid20 = _errs111 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
-if(valid13){
+if(valid20){
 if(data36.code !== undefined){
-const _errs88 = errors;
+const _errs116 = errors;
 if(typeof data36.code !== "string"){
-const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
+const err35 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
-vErrors = [err21];
+vErrors = [err35];
 }
 else {
-vErrors.push(err21);
+vErrors.push(err35);
 }
 errors++;
 }
-var valid13 = _errs88 === errors;
+var valid20 = _errs116 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
 }
 }
@@ -4101,66 +4454,66 @@ var valid13 = true;
 }
 }
 else {
-const err22 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+const err36 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
 if(vErrors === null){
-vErrors = [err22];
+vErrors = [err36];
 }
 else {
-vErrors.push(err22);
+vErrors.push(err36);
 }
 errors++;
 }
 }
-var _valid3 = _errs71 === errors;
-valid12 = valid12 || _valid3;
-if(!valid12){
-const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid10 = _errs99 === errors;
+valid19 = valid19 || _valid10;
+if(!valid19){
+const err37 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err23];
+vErrors = [err37];
 }
 else {
-vErrors.push(err23);
+vErrors.push(err37);
 }
 errors++;
 validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs68;
+errors = _errs96;
 if(vErrors !== null){
-if(_errs68){
-vErrors.length = _errs68;
+if(_errs96){
+vErrors.length = _errs96;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs67 === errors;
+var valid0 = _errs95 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs90 = errors;
+const _errs118 = errors;
 if(!(validate102(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate102.errors : vErrors.concat(validate102.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs90 === errors;
+var valid0 = _errs118 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.classifier_charts !== undefined){
-const _errs91 = errors;
+const _errs119 = errors;
 if(!(validate139(data.classifier_charts, {instancePath:instancePath+"/classifier_charts",parentData:data,parentDataProperty:"classifier_charts",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate139.errors : vErrors.concat(validate139.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs91 === errors;
+var valid0 = _errs119 === errors;
 }
 else {
 var valid0 = true;
