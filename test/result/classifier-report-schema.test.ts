@@ -1,7 +1,6 @@
 // The JSON report of classifiers, with their chart data and a base comparison, satisfies the
 // strict report schema (which `fitgate merge` checks shard reports against), and its chart data
 // stays within the documented bounds.
-import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { validateReport } from '../../src/config/generated/report-validator.js';
