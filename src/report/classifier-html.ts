@@ -53,8 +53,8 @@ export function classifierCharts(chart: ClassifierChartData, prefix: string): st
   return out;
 }
 
-/** Notes above a classifier's charts: thinned rows and ROC curves, and inputs left without a curve (HTML). */
-export function classifierChartNotes(chart: ClassifierChartData): string[] {
+/** Notes above a classifier's charts: thinned rows and ROC curves, and inputs left without a curve (HTML; empty when none). */
+export function classifierChartNotes(chart: ClassifierChartData): string {
   const notes: string[] = [];
   if (chart.train.thinned) notes.push(`Training rows: ${chart.train.thinning}.`);
   if (chart.holdout.thinned) notes.push(`Hold-out rows: ${chart.holdout.thinning}.`);
@@ -67,5 +67,5 @@ export function classifierChartNotes(chart: ClassifierChartData): string[] {
   }
   if ((chart.curvesLeftOut ?? 0) > 0)
     notes.push(`Probability curves of the first ${chart.curves.length} inputs; ${chart.curvesLeftOut} more left out.`);
-  return notes.length ? [`<p class="note">${notes.map(escapeHtml).join(' ')}</p>`] : [];
+  return notes.length ? `<p class="note">${notes.map(escapeHtml).join(' ')}</p>` : '';
 }

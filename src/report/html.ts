@@ -199,7 +199,7 @@ function modelSection(m: ModelResult, index: number): string {
   parts.push('<h3>Checks</h3>', checksTable(m));
   if (m.classifier_charts) {
     const list = classifierCharts(m.classifier_charts, id);
-    parts.push('<h3>Charts</h3>', ...classifierChartNotes(m.classifier_charts));
+    parts.push('<h3>Charts</h3>', classifierChartNotes(m.classifier_charts));
     parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
   } else if (m.charts) {
     const list = charts(m.charts, id);
