@@ -6,11 +6,9 @@
  * 2nd ed., 2009, section 7.10) picking the simplest setting within one standard error of the best.
  */
 import type { Descriptor, PolynomialTermSpec, RbfTermSpec } from '../config/types.js';
-import { forEachBlock } from '../design/blocks.js';
-import { addProducts } from '../kernels/index.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
 import { createTerm, type Term } from '../design/terms/index.js';
-import { fitLogistic, rowDeviance, type LogisticRows } from '../fit/logistic.js';
+import { firstStepsWithout, fitLogistic, outOfFoldDeviance, type LogisticRows } from '../fit/logistic.js';
 import { oneStandardErrorRule, subsample, sweepTarget, type SweepKind } from './complexity.js';
 import { assignFolds } from './folds.js';
 
@@ -44,7 +42,8 @@ export const CLASSIFIER_SWEEP_MAX_ROWS = 20000;
 /**
  * Sweeps the classifier's complexity setting. Ridge: lambda = s x 10^t, t = 3, 2, ..., -3, with
  * s = max(current lambda, rows / 1000), plus the current lambda, largest (simplest) first, each
- * started from the previous one's fold fits. Degree: 1 .. current + 3 (at most 15). Width: current
+ * setting's fit on all the sweep's rows started from the previous one's, and its fold fits from
+ * it (their first Newton step from its per-fold factors: fit/logistic.ts, firstStepsWithout). Degree: 1 .. current + 3 (at most 15). Width: current
  * x 2^t, t = 4 .. -2. Each setting: the mean of the fold log-losses and its standard error (sample
  * sd / sqrt(k)).
  * @returns null when there is nothing to sweep or fewer than 2 folds
@@ -83,25 +82,29 @@ export function sweepClassifier(descriptor: Descriptor, design: Design, train: L
     }
   }
   const curve: ClassifierSweep['points'] = [];
-  let starts: Float64Array[] | null = null;
+  let start: Float64Array | null = null;
   for (const point of points) {
     const d = point.design;
+    const options = { ridge: point.ridge, penalised: [...d.penalised] };
+    // The fit on all the sweep's rows first (from the previous setting's, on the same design),
+    // keeping one factor per fold: each fold's first Newton step then needs no pass of its own.
+    const [full] = fitLogistic(d, rows, options, [
+      { parts: { of: folds.foldOf, count: folds.k }, ...(start && d === design ? { start } : {}) },
+    ]);
+    if (d === design) start = full.coefficients;
+    const steps = full.parts !== null ? firstStepsWithout(full.parts, options) : null;
     const problems = Array.from({ length: folds.k }, (_, f) => ({
       foldOf: folds.foldOf,
       exclude: f,
-      ...(starts && d === design ? { start: starts[f] } : {}),
+      ...(steps ? { firstStep: steps[f] } : { start: full.coefficients }),
     }));
-    const fits = fitLogistic(d, rows, { ridge: point.ridge, penalised: [...d.penalised] }, problems);
-    if (d === design) starts = fits.map((x) => x.coefficients);
-    const deviance = new Float64Array(folds.k);
-    const eta = new Float64Array(Math.min(rows.rows, 1 << 16));
-    forEachBlock(d, rows, (X, start, m) => {
-      for (let f = 0; f < folds.k; f++) {
-        eta.fill(0, 0, m);
-        addProducts(eta, 0, X, m, fits[f].coefficients, d.p);
-        for (let i = 0; i < m; i++) if (folds.foldOf[start + i] === f) deviance[f] += rowDeviance(eta[i], rows.y[start + i]);
-      }
-    });
+    const fits = fitLogistic(d, rows, options, problems);
+    const deviance = outOfFoldDeviance(
+      d,
+      rows,
+      folds.foldOf,
+      fits.map((x) => x.coefficients),
+    );
     const losses = Array.from(deviance, (dv, f) => dv / 2 / folds.sizes[f]);
     const mean = losses.reduce((a, b) => a + b, 0) / losses.length;
     const variance = losses.reduce((a, b) => a + (b - mean) ** 2, 0) / (losses.length - 1);

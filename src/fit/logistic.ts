@@ -25,6 +25,12 @@
  * second step on, when the Newton decrement of the step just solved (the decrease the quadratic
  * model predicts, d^T (X^T W X + ridge E) d) is at most that, the new coefficients then taken
  * without another pass; at most 100 Newton steps.
+ *
+ * Shared factors for cross-validation: a fit over all rows can keep one factor per part of the
+ * rows (the folds) at each pass; at the same coefficients every fold fit has the same weights
+ * and working responses, so the Newton step of the fit without fold f is solved from the merge
+ * of the other folds' factors ({@link firstStepsWithout}) and the fold fits, started there,
+ * need one pass over the rows fewer.
  */
 import { forEachBlock } from '../design/blocks.js';
 import type { Design } from '../design/design-matrix.js';
@@ -65,6 +71,36 @@ export interface LogisticProblem {
   exclude?: number;
   /** Starting coefficients (length p); default 0 but the intercept at logit(mean y). */
   start?: Float64Array;
+  /**
+   * Also keep, at the coefficients of each pass, one factor and one deviance per part of the
+   * rows (`of[i]` in 0..count-1, e.g. the cross-validation folds), the problem's own factor being
+   * their merge: {@link LogisticFit.parts}. Default none.
+   */
+  parts?: { of: Int32Array; count: number };
+  /** A Newton step already prepared (see {@link firstStepsWithout}): the fit starts at its solution; `start` is then not read. */
+  firstStep?: LogisticFirstStep;
+}
+
+/**
+ * The first Newton step of a fit, prepared without a pass over the rows: the coefficients it
+ * starts from, the problem's objective and deviance there, and the QR factor of its weighted
+ * rows sqrt(W) [X | z] there.
+ */
+export interface LogisticFirstStep {
+  from: Float64Array;
+  objective: number;
+  deviance: number;
+  factor: QrAccumulator;
+}
+
+/** The per-part factors of a fit with {@link LogisticProblem.parts}, at the last coefficients evaluated. */
+export interface LogisticParts {
+  /** The coefficients the factors and deviances were taken at. */
+  at: Float64Array;
+  /** QR factor of each part's weighted rows sqrt(W) [X | z] (no penalty rows). */
+  factors: QrAccumulator[];
+  /** Deviance of each part's rows. */
+  deviance: Float64Array;
 }
 
 /** The outcome of one logistic fit. */
@@ -85,6 +121,8 @@ export interface LogisticFit {
   rows: number;
   /** QR factor of the weighted rows sqrt(W) X at the last coefficients evaluated (no penalty rows). */
   weightedFactor: QrAccumulator;
+  /** With {@link LogisticProblem.parts}: the factors and deviances per part at those coefficients; null otherwise (or when no pass was accepted). */
+  parts: LogisticParts | null;
 }
 
 interface State {
@@ -102,6 +140,10 @@ interface State {
   converged: boolean;
   lastFactor: QrAccumulator | null;
   lastDeviance: number;
+  /** Per-part accumulators and deviances of the pass under way (problems with `parts`). */
+  partAcc: QrAccumulator[] | null;
+  partDev: Float64Array | null;
+  lastParts: LogisticParts | null;
 }
 
 /**
@@ -122,27 +164,45 @@ export function fitLogistic(
 ): LogisticFit[] {
   const p = design.p;
   const maxIterations = options.maxIterations ?? LOGISTIC_MAX_ITERATIONS;
-  const states: State[] = problems.map((problem) => ({
-    problem,
-    w: problem.start ? Float64Array.from(problem.start) : defaultStart(design, data, problem),
-    previous: null,
-    previousObjective: Number.POSITIVE_INFINITY,
-    acc: new QrAccumulator(p),
-    deviance: 0,
-    rows: 0,
-    iterations: 0,
-    halvings: 0,
-    halvingRun: 0,
-    done: p === 0,
-    converged: p === 0,
-    lastFactor: null,
-    lastDeviance: Number.NaN,
-  }));
+  const states: State[] = problems.map((problem) => {
+    const s: State = {
+      problem,
+      w: problem.start ? Float64Array.from(problem.start) : new Float64Array(0),
+      previous: null,
+      previousObjective: Number.POSITIVE_INFINITY,
+      acc: new QrAccumulator(p),
+      deviance: 0,
+      rows: 0,
+      iterations: 0,
+      halvings: 0,
+      halvingRun: 0,
+      done: p === 0,
+      converged: p === 0,
+      lastFactor: null,
+      lastDeviance: Number.NaN,
+      partAcc: null,
+      partDev: null,
+      lastParts: null,
+    };
+    const first = problem.firstStep;
+    if (first && p > 0) {
+      // Start after the prepared step: as if its pass had just been accepted and solved.
+      s.previous = Float64Array.from(first.from);
+      s.previousObjective = first.objective;
+      s.lastFactor = first.factor;
+      s.lastDeviance = first.deviance;
+      s.w = solveCoefficients(first.factor, { ridge: options.ridge, penalised: options.penalised });
+      s.iterations = 1;
+    } else if (!problem.start) s.w = defaultStart(design, data, problem);
+    return s;
+  });
   const size = Math.max(1, Math.min(data.rows, 1 << 16));
   const eta = new Float64Array(size);
   const scale = new Float64Array(size);
   const target = new Float64Array(size);
   const index = new Int32Array(size);
+  const partScale = new Float64Array(size);
+  const partTarget = new Float64Array(size);
   let work = new Float64Array(0);
   for (let guard = 0; guard < (maxIterations + 1) * (MAX_HALVINGS + 2); guard++) {
     const active = states.filter((s) => !s.done);
@@ -151,13 +211,34 @@ export function fitLogistic(
       s.acc = new QrAccumulator(p);
       s.deviance = 0;
       s.rows = 0;
+      const parts = s.problem.parts;
+      if (parts) {
+        s.partAcc = Array.from({ length: parts.count }, () => new QrAccumulator(p));
+        s.partDev = new Float64Array(parts.count);
+      }
     }
     forEachBlock(design, data, (X, start, m) => {
       if (work.length < m * p) work = new Float64Array(m * p);
       for (const s of active) {
         eta.fill(0, 0, m);
         addProducts(eta, 0, X, m, s.w, p);
-        const { foldOf, exclude } = s.problem;
+        const { foldOf, exclude, parts } = s.problem;
+        if (parts && s.partAcc && s.partDev) {
+          // Every row, each into its part's factor (rows of a part gathered in row order).
+          weightRowsByPart(eta, data.y, start, m, parts.of, s.partDev, scale, target);
+          const offsets = sortByPart(parts.of, start, m, parts.count, index);
+          for (let q = 0; q < parts.count; q++) {
+            const r = offsets[q + 1] - offsets[q];
+            if (r === 0) continue;
+            const rows = index.subarray(offsets[q], offsets[q + 1]);
+            gather(scale, rows, r, partScale);
+            gather(target, rows, r, partTarget);
+            for (let j = 0; j < p; j++) scaleColumn(X, j * m, rows, partScale, r, work, j * r);
+            s.partAcc[q].addRows(work, partTarget, r);
+          }
+          s.rows += m;
+          continue;
+        }
         const r = foldOf
           ? weightRows(eta, data.y, start, m, foldOf, exclude ?? -1, scale, target, index)
           : weightAllRows(eta, data.y, start, m, scale, target, index);
@@ -167,7 +248,16 @@ export function fitLogistic(
         s.acc.addRows(work, target, r);
       }
     });
-    for (const s of active) step(s, options, maxIterations);
+    for (const s of active) {
+      if (s.partAcc && s.partDev) {
+        // The problem's factor and deviance: the merge of its parts', in part order.
+        s.acc = s.partAcc[0].clone();
+        for (let q = 1; q < s.partAcc.length; q++) s.acc.merge(s.partAcc[q]);
+        s.deviance = 0;
+        for (let q = 0; q < s.partDev.length; q++) s.deviance += s.partDev[q];
+      }
+      step(s, options, maxIterations);
+    }
   }
   return states.map((s) => ({
     coefficients: s.w,
@@ -178,7 +268,38 @@ export function fitLogistic(
     converged: s.converged,
     rows: s.rows,
     weightedFactor: s.lastFactor ?? s.acc,
+    parts: s.lastParts,
   }));
+}
+
+/**
+ * The first Newton step of each fit without one part of the rows, from the per-part factors of
+ * a fit over all rows ({@link LogisticProblem.parts}): at the common coefficients `at` every row
+ * has the same weight and working response in every such fit, so the factor of the fit without
+ * part f is the merge of the other parts' factors (in part order), and its deviance the sum of
+ * theirs. Each step is exactly the Newton step a pass over those rows at `at` would give (up to
+ * the rounding of the merge), so cross-validation folds started from the full fit need one pass
+ * fewer.
+ * @param parts the full fit's parts (at least 2)
+ * @returns one prepared step per part, for {@link LogisticProblem.firstStep}
+ */
+export function firstStepsWithout(parts: LogisticParts, options: LogisticOptions): LogisticFirstStep[] {
+  const k = parts.factors.length;
+  const penalty = options.ridge * penaltySum(parts.at, options.penalised);
+  const steps: LogisticFirstStep[] = [];
+  for (let f = 0; f < k; f++) {
+    let factor: QrAccumulator | null = null;
+    let deviance = 0;
+    for (let q = 0; q < k; q++) {
+      if (q === f) continue;
+      if (factor === null) factor = parts.factors[q].clone();
+      else factor.merge(parts.factors[q]);
+      deviance += parts.deviance[q];
+    }
+    if (factor === null) factor = new QrAccumulator(parts.at.length);
+    steps.push({ from: parts.at, objective: deviance + penalty, deviance, factor });
+  }
+  return steps;
 }
 
 /** After a pass: accept the step (and solve the next), halve it, or stop. */
@@ -200,6 +321,7 @@ function step(s: State, options: LogisticOptions, maxIterations: number): void {
   s.halvingRun = 0;
   s.lastFactor = s.acc;
   s.lastDeviance = s.deviance;
+  if (s.partAcc && s.partDev) s.lastParts = { at: Float64Array.from(s.w), factors: s.partAcc, deviance: s.partDev };
   const decrease = s.previousObjective - objective;
   s.previousObjective = objective;
   if (s.previous !== null && decrease <= LOGISTIC_TOLERANCE * (Math.abs(objective) + 0.1)) {
@@ -323,6 +445,96 @@ function weightAllRows(
   }
   blockDeviance = dev;
   return m;
+}
+
+/**
+ * The out-of-fold deviance of k fits each made without one fold: per fold f, the deviance of the
+ * rows of fold f under the coefficients of fit f, in one pass over the rows. Each row's logit is
+ * summed column after column with its own fold's coefficients, as addProducts sums it, so the
+ * figures are those of predicting each fold with its own fit.
+ * @param foldOf fold of each row (0 .. k-1)
+ * @param coefficients the k fits' coefficients, fit f made without fold f
+ * @returns the deviance of each fold's rows (length k)
+ */
+export function outOfFoldDeviance(
+  design: Design,
+  data: LogisticRows,
+  foldOf: Int32Array,
+  coefficients: readonly Float64Array[],
+): Float64Array {
+  const k = coefficients.length;
+  const p = design.p;
+  const deviance = new Float64Array(k);
+  const eta = new Float64Array(Math.max(1, Math.min(data.rows, 1 << 16)));
+  const W = new Float64Array(p * k);
+  for (let f = 0; f < k; f++) for (let j = 0; j < p; j++) W[j * k + f] = coefficients[f][j];
+  forEachBlock(design, data, (X, start, m) => {
+    eta.fill(0, 0, m);
+    for (let j = 0; j < p; j++) addFoldColumn(eta, X, j * m, W, j * k, foldOf, start, m);
+    addFoldDeviance(deviance, eta, data.y, foldOf, start, m);
+  });
+  return deviance;
+}
+
+/** eta[i] += X[col + i] W[base + foldOf[start + i]] for i < m. */
+function addFoldColumn(
+  eta: Float64Array,
+  X: Float64Array,
+  col: number,
+  W: Float64Array,
+  base: number,
+  foldOf: Int32Array,
+  start: number,
+  m: number,
+): void {
+  for (let i = 0; i < m; i++) eta[i] += X[col + i] * W[base + foldOf[start + i]];
+}
+
+/** deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]) for i < m, in row order. */
+function addFoldDeviance(deviance: Float64Array, eta: Float64Array, y: Float64Array, foldOf: Int32Array, start: number, m: number): void {
+  for (let i = 0; i < m; i++) deviance[foldOf[start + i]] += rowDeviance(eta[i], y[start + i]);
+}
+
+/**
+ * {@link weightAllRows} with each row's deviance added to its part's sum (`partDev[of[start + i]]`)
+ * instead of one block sum.
+ */
+function weightRowsByPart(
+  eta: Float64Array,
+  y: Float64Array,
+  start: number,
+  m: number,
+  of: Int32Array,
+  partDev: Float64Array,
+  scale: Float64Array,
+  target: Float64Array,
+): void {
+  for (let i = 0; i < m; i++) {
+    const e = eta[i];
+    const yi = y[start + i];
+    const x = Math.exp(-Math.abs(e));
+    partDev[of[start + i]] += 2 * (Math.log1p(x) + Math.max(e, 0) - yi * e);
+    const pr = e >= 0 ? 1 / (1 + x) : x / (1 + x);
+    const w = Math.max(pr * (1 - pr), MIN_WEIGHT);
+    const s = Math.sqrt(w);
+    scale[i] = s;
+    target[i] = s * e + (yi - pr) / s;
+  }
+}
+
+/** Block-row indices grouped by part (a stable counting sort into `index`); returns the offsets of the parts (length count + 1). */
+function sortByPart(of: Int32Array, start: number, m: number, count: number, index: Int32Array): Int32Array {
+  const offsets = new Int32Array(count + 1);
+  for (let i = 0; i < m; i++) offsets[of[start + i] + 1] += 1;
+  for (let q = 0; q < count; q++) offsets[q + 1] += offsets[q];
+  const next = offsets.slice(0, count);
+  for (let i = 0; i < m; i++) index[next[of[start + i]]++] = i;
+  return offsets;
+}
+
+/** out[k] = from[rows[k]] for k < r. */
+function gather(from: Float64Array, rows: Int32Array, r: number, out: Float64Array): void {
+  for (let k = 0; k < r; k++) out[k] = from[rows[k]];
 }
 
 /**

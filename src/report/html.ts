@@ -12,6 +12,7 @@ import { formatNumber } from '../core/format.js';
 import type { ChartData } from '../result/chart-types.js';
 import { fromJsonNumber, type JsonNumber, type ModelResult, type Result } from '../result/result.js';
 import { escapeHtml } from './escape.js';
+import { classifierChartNotes, classifierCharts, classifierFacts } from './classifier-html.js';
 import { countsText, limitText, verdictHeadline } from './wording.js';
 import { coefficientBarsChart } from './svg/coefficient-bars.js';
 import { cvCurveChart } from './svg/cv-curve.js';
@@ -196,6 +197,8 @@ function modelSection(m: ModelResult, index: number): string {
     `<p class="facts"><span>training rows <b>${m.rows.train}</b></span><span>hold-out rows <b>${m.rows.holdout}</b></span><span>parameters <b>${escapeHtml(parametersText(m))}</b></span>` +
       `<span>training RMSE <b>${num(x?.train_rmse)}</b></span><span>hold-out RMSE <b>${num(x?.holdout_rmse)}</b></span><span>gap ratio <b>${num(x?.gap_ratio)}</b></span></p>`,
   );
+  // A classifier's facts are its log-loss, AUC and calibration slope instead.
+  if (x?.task === 'classification') parts[parts.length - 1] = classifierFacts(m);
   const kind = kindLine(m);
   if (kind !== null) parts.push(`<p class="note" data-kind="predictions">${escapeHtml(kind)}</p>`);
   const refit = refitCompareLine(m);
@@ -211,7 +214,11 @@ function modelSection(m: ModelResult, index: number): string {
     );
   }
   parts.push('<h3>Checks</h3>', checksTable(m));
-  if (m.charts) {
+  if (m.classifier_charts) {
+    const list = classifierCharts(m.classifier_charts, id);
+    parts.push('<h3>Charts</h3>', classifierChartNotes(m.classifier_charts));
+    parts.push(`<div class="charts" data-charts="${list.length}">${list.join('')}</div>`);
+  } else if (m.charts) {
     const list = charts(m.charts, id);
     const thinned = [m.charts.train, m.charts.holdout].filter((s) => s.thinned);
     parts.push(`<h3>Charts</h3>`);

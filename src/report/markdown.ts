@@ -66,10 +66,13 @@ function baseCell(m: ModelResult): string {
   if (b.status === 'new') return 'new';
   const from = b.status === 'renamed' && b.previous ? `renamed from ${text(b.previous.name)}: ` : '';
   const rmse = b.holdout_rmse_change === null ? null : fromJsonNumber(b.holdout_rmse_change);
+  const loss =
+    b.holdout_log_loss_change === undefined || b.holdout_log_loss_change === null ? null : fromJsonNumber(b.holdout_log_loss_change);
   const gap = b.gap_ratio_change === null ? null : fromJsonNumber(b.gap_ratio_change);
-  if (rmse === null && gap === null) return `${from}base not checked`;
+  if (rmse === null && loss === null && gap === null) return `${from}base not checked`;
   const parts: string[] = [];
   if (rmse !== null) parts.push(`RMSE ${Number.isFinite(rmse) ? signed(rmse * 100, '%') : signed(rmse)}`);
+  if (loss !== null) parts.push(`log-loss ${Number.isFinite(loss) ? signed(loss * 100, '%') : signed(loss)}`);
   if (gap !== null) parts.push(`gap ${signed(gap)}`);
   return `${from}${parts.join(', ')}`;
 }

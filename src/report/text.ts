@@ -69,11 +69,13 @@ function modelHeader(m: ModelResult, color: boolean): string {
   return `${paint(m.verdict.toUpperCase(), m.verdict, color)} ${escapeTerminal(m.name)}${where}`;
 }
 
-/** The base column: hold-out RMSE change in per cent, `new` for a model absent on the base. */
+/** The base column: hold-out RMSE change (a classifier's hold-out log-loss change) in per cent, `new` for a model absent on the base. */
 function baseCell(m: ModelResult): string {
   if (m.base === undefined) return '–';
   if (m.base.status === 'new') return 'new';
-  const change = m.base.holdout_rmse_change === null ? null : fromJsonNumber(m.base.holdout_rmse_change);
+  // A classifier's change is that of its hold-out log-loss (its RMSE fields are null).
+  const figure = m.base.holdout_log_loss_change ?? m.base.holdout_rmse_change;
+  const change = figure === null ? null : fromJsonNumber(figure);
   if (change === null || !Number.isFinite(change)) return '–';
   const percent = change * 100;
   return `${percent > 0 ? '+' : ''}${formatNumber(percent)}%`;

@@ -5,6 +5,7 @@
  */
 import type { JsonNumber } from '../core/json.js';
 import type { ChartData } from './chart-types.js';
+import type { ClassifierChartData } from './classifier-chart-types.js';
 
 export { fromJsonNumber, jsonNumber, type JsonNumber } from '../core/json.js';
 
@@ -139,6 +140,10 @@ export interface BaseComparison {
   holdout_rmse_change: JsonNumber | null;
   /** head gap ratio - base gap ratio. Null when either side is missing. */
   gap_ratio_change: JsonNumber | null;
+  /** Classifiers only: hold-out log-loss on the base commit, or null (the RMSE fields are null for a classifier). */
+  holdout_log_loss?: JsonNumber | null;
+  /** Classifiers only: (head hold-out log-loss - base) / base; positive = worse. Null when either side is missing. */
+  holdout_log_loss_change?: JsonNumber | null;
 }
 
 /** One model's outcome. */
@@ -179,6 +184,8 @@ export interface ModelResult {
   extra?: Record<string, unknown>;
   /** What the HTML report and the Markdown charts draw (see model/chart-data.ts); absent for models that could not be checked. */
   charts?: ChartData;
+  /** What the HTML report draws for a classifier (run/classifier-chart-data.ts); absent for regression models and models that could not be checked. */
+  classifier_charts?: ClassifierChartData;
 }
 
 /** The whole run. */

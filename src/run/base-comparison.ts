@@ -5,7 +5,7 @@
  */
 import type { Descriptor } from '../config/types.js';
 import { dataFiles } from '../config/data-paths.js';
-import { fromJsonNumber, jsonNumber, type BaseComparison, type ModelMetrics, type ModelResult } from '../result/result.js';
+import { fromJsonNumber, jsonNumber, type BaseComparison, type JsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 
 /** How a head model was matched with a base model. */
 export type MatchedBy = 'name' | 'descriptor' | 'data';
@@ -107,8 +107,17 @@ function relativeChange(head: number, base: number): number | null {
  * that could not be read has its path for a name; matched by that path it is `compared`.
  */
 export function compareWithBase(metrics: ModelMetrics, match: BaseMatch | null, commit: string): BaseComparison {
+  const classifier = metrics.task === 'classification';
   if (match === null) {
-    return { status: 'new', commit, holdout_rmse: null, gap_ratio: null, holdout_rmse_change: null, gap_ratio_change: null };
+    return {
+      status: 'new',
+      commit,
+      holdout_rmse: null,
+      gap_ratio: null,
+      holdout_rmse_change: null,
+      gap_ratio_change: null,
+      ...(classifier ? { holdout_log_loss: null, holdout_log_loss_change: null } : {}),
+    };
   }
   const baseline = match.model;
   const unreadable = baseline.error !== null && baseline.name === baseline.descriptor;
@@ -130,5 +139,29 @@ export function compareWithBase(metrics: ModelMetrics, match: BaseMatch | null, 
     gap_ratio: b ? b.gap_ratio : null,
     holdout_rmse_change: rmseChange === null ? null : jsonNumber(rmseChange),
     gap_ratio_change: gapChange === null ? null : jsonNumber(gapChange),
+    ...(classifier ? logLossComparison(metrics, b) : {}),
+  };
+}
+
+/** A figure of a metrics record as a number: NaN when absent or not a number. */
+function figure(metrics: ModelMetrics | null, key: string): number {
+  const v = metrics?.[key];
+  return typeof v === 'number' || v === 'Infinity' || v === '-Infinity' || v === 'NaN' ? fromJsonNumber(v) : Number.NaN;
+}
+
+/**
+ * A classifier's hold-out log-loss on the base commit and its relative change (the figure of
+ * `base-change` for classifiers). A base model that was not a classifier (or not checked) has no
+ * log-loss: both null.
+ */
+function logLossComparison(
+  metrics: ModelMetrics,
+  base: ModelMetrics | null,
+): { holdout_log_loss: JsonNumber | null; holdout_log_loss_change: JsonNumber | null } {
+  const baseLoss = base?.task === 'classification' ? figure(base, 'holdout_log_loss') : Number.NaN;
+  const change = relativeChange(figure(metrics, 'holdout_log_loss'), baseLoss);
+  return {
+    holdout_log_loss: Number.isNaN(baseLoss) ? null : jsonNumber(baseLoss),
+    holdout_log_loss_change: change === null ? null : jsonNumber(change),
   };
 }

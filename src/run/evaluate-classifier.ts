@@ -8,8 +8,9 @@ import type { Descriptor, SettingsFile } from '../config/types.js';
 import { dataFilesField } from '../config/data-paths.js';
 import { jsonNumber, type ModelMetrics, type ModelResult } from '../result/result.js';
 import type { RepoReader } from '../repo/types.js';
-import type { BaseInput } from './base-comparison.js';
+import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { runChecks } from './run-checks.js';
+import { buildClassifierChartData } from './classifier-chart-data.js';
 import { fitClassifier, type FittedClassifier } from './fit-classifier.js';
 import { maxOf } from '../core/extremes.js';
 
@@ -84,6 +85,7 @@ export async function evaluateClassifier(
     coefficients: Array.from(model.context.fit.coefficients, jsonNumber),
     shipped: null,
     checks,
+    ...(base ? { base: compareWithBase(metrics, baseMatch, base.commit) } : {}),
     error: null,
     extra: {
       task: 'classification',
@@ -104,5 +106,6 @@ export async function evaluateClassifier(
         fixed: t.fixed,
       })),
     },
+    classifier_charts: buildClassifierChartData(model),
   };
 }

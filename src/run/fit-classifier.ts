@@ -11,7 +11,6 @@ import { loadClassifierData, type ClassLabels } from '../data/labels.js';
 import type { ModelData } from '../data/model-data.js';
 import { placeOfLine } from '../data/data-parts.js';
 import { forEachBlock, predictRows } from '../design/blocks.js';
-import { addProducts } from '../kernels/index.js';
 import { ColumnSpread } from '../design/column-spread.js';
 import type { Design } from '../design/design-matrix.js';
 import { sweepClassifier } from '../diagnostics/classifier-complexity.js';
@@ -27,7 +26,7 @@ import type { Folds } from '../diagnostics/folds.js';
 import { findLeakage } from '../diagnostics/leakage.js';
 import { findSeparation } from '../diagnostics/separation.js';
 import { fitFactor } from '../fit/index.js';
-import { fitLogistic, rowDeviance, type LogisticFit } from '../fit/logistic.js';
+import { firstStepsWithout, fitLogistic, outOfFoldDeviance, rowDeviance, type LogisticFit } from '../fit/logistic.js';
 import type { RepoReader } from '../repo/types.js';
 import { planModel } from './plan.js';
 
@@ -64,7 +63,9 @@ export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, se
   forEachBlock(design, train, (X, _start, m) => spread.add(X, m));
   const columnSd = spread.sd();
 
-  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options) }]);
+  // With folds, each pass also keeps one factor per fold, so that the folds' first Newton steps need no pass of their own.
+  const parts = folds.k >= 2 ? { of: folds.foldOf, count: folds.k } : undefined;
+  const [fit] = fitLogistic(design, train, options, [{ start: warmStart(design, train, options), parts }]);
   const weighted = fitFactor(fit.weightedFactor, options);
   const trainEta = predictRows(design, train, fit.coefficients);
   const holdoutEta = predictRows(design, holdout, fit.coefficients);
@@ -131,7 +132,9 @@ function warmStart(design: Design, train: ModelData, options: { ridge: number; p
 /**
  * k-fold cross-validation: the fit without each fold (the same terms, fixed from all training
  * rows, and the same ridge), started from the full fit, all folds in shared passes; the pooled
- * log-loss of the out-of-fold probabilities. Null below 2 folds.
+ * log-loss of the out-of-fold probabilities. Null below 2 folds. When the full fit kept its
+ * per-fold factors (`full.parts`, one part per fold), each fold's first Newton step is solved
+ * from them without a pass (fit/logistic.ts, firstStepsWithout); the optimum is the same.
  */
 export function crossValidateClassifier(
   design: Design,
@@ -142,17 +145,20 @@ export function crossValidateClassifier(
 ): ClassifierCrossValidation | null {
   const k = folds.k;
   if (k < 2) return null;
-  const problems = Array.from({ length: k }, (_, f) => ({ foldOf: folds.foldOf, exclude: f, start: full.coefficients }));
+  const steps = full.parts !== null && full.parts.factors.length === k ? firstStepsWithout(full.parts, options) : null;
+  const problems = Array.from({ length: k }, (_, f) => ({
+    foldOf: folds.foldOf,
+    exclude: f,
+    start: full.coefficients,
+    ...(steps ? { firstStep: steps[f] } : {}),
+  }));
   const fits = fitLogistic(design, train, options, problems);
-  const foldDeviance = new Float64Array(k);
-  const eta = new Float64Array(Math.min(train.rows, 1 << 16));
-  forEachBlock(design, train, (X, start, m) => {
-    for (let f = 0; f < k; f++) {
-      eta.fill(0, 0, m);
-      addProducts(eta, 0, X, m, fits[f].coefficients, design.p);
-      for (let i = 0; i < m; i++) if (folds.foldOf[start + i] === f) foldDeviance[f] += rowDeviance(eta[i], train.y[start + i]);
-    }
-  });
+  const foldDeviance = outOfFoldDeviance(
+    design,
+    train,
+    folds.foldOf,
+    fits.map((x) => x.coefficients),
+  );
   let total = 0;
   for (let f = 0; f < k; f++) total += foldDeviance[f];
   return {

@@ -3,7 +3,7 @@
 "use strict";
 
 export const validateReport = validate52;
-const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"scaleFigures":{"description":"Error figures of one scale of a transformed target.","type":"object","required":["train_rmse","holdout_rmse","train_mae","holdout_mae","train_r2","holdout_r2","gap_ratio","cv_rmse"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"cv_rmse":{"description":"Pooled k-fold cross-validation RMSE; null without cross-validation.","anyOf":[{"type":"null"},{"$ref":"#/$defs/jsonNumber"}]},"train_chi_square":{"description":"Reduced chi-square of the training rows (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"},"holdout_chi_square":{"description":"Chi-square of the hold-out rows per row (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"}}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}}}};
+const schema19 = {"$schema":"https://json-schema.org/draft/2020-12/schema","$id":"urn:fitgate:schema:report:1","title":"fitgate JSON report (fitgate check --format json)","description":"One run's outcome, as `fitgate check --format json` writes it and `fitgate merge` reads it. Numbers that are not finite are written as the strings \"Infinity\", \"-Infinity\" and \"NaN\".","type":"object","required":["tool","verdict","counts","models","notes"],"additionalProperties":false,"properties":{"tool":{"description":"The program that wrote the report.","type":"object","required":["name","version"],"additionalProperties":false,"properties":{"name":{"description":"Always fitgate.","const":"fitgate"},"version":{"description":"fitgate's version.","type":"string"}}},"verdict":{"description":"The worst model verdict (pass when there are no models).","$ref":"#/$defs/verdict"},"counts":{"description":"Models by verdict.","type":"object","required":["models","pass","warn","fail","error"],"additionalProperties":false,"properties":{"models":{"description":"Number of models.","$ref":"#/$defs/count"},"pass":{"description":"Models that passed.","$ref":"#/$defs/count"},"warn":{"description":"Models with a warning.","$ref":"#/$defs/count"},"fail":{"description":"Models over a fail limit.","$ref":"#/$defs/count"},"error":{"description":"Models that could not be checked.","$ref":"#/$defs/count"}}},"models":{"description":"One outcome per model.","type":"array","items":{"$ref":"#/$defs/model"}},"notes":{"description":"Messages about the run as a whole.","type":"array","items":{"type":"string"}},"shard":{"description":"The share of the models this run checked (`--shard K/N`); absent for a whole run.","type":"object","required":["index","count"],"additionalProperties":false,"properties":{"index":{"description":"K, 1-based.","type":"integer","minimum":1},"count":{"description":"N, the number of shards.","type":"integer","minimum":1}}}},"$defs":{"verdict":{"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]},"count":{"description":"A whole number, 0 or more.","type":"integer","minimum":0},"line":{"description":"A 1-based line number.","type":"integer","minimum":1},"jsonNumber":{"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]},"chartNumber":{"description":"A finite number, or null.","type":["number","null"]},"chartNumbers":{"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}},"numbers":{"description":"Finite numbers.","type":"array","items":{"type":"number"}},"pair":{"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}},"scaleFigures":{"description":"Error figures of one scale of a transformed target.","type":"object","required":["train_rmse","holdout_rmse","train_mae","holdout_mae","train_r2","holdout_r2","gap_ratio","cv_rmse"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"cv_rmse":{"description":"Pooled k-fold cross-validation RMSE; null without cross-validation.","anyOf":[{"type":"null"},{"$ref":"#/$defs/jsonNumber"}]},"train_chi_square":{"description":"Reduced chi-square of the training rows (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"},"holdout_chi_square":{"description":"Chi-square of the hold-out rows per row (with `data.sigma` only).","$ref":"#/$defs/jsonNumber"}}},"model":{"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse":{"description":"Hold-out RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_mae":{"description":"Training MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_mae":{"description":"Hold-out MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_r2":{"description":"Training R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_r2":{"description":"Hold-out R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"},"classifier_charts":{"description":"What the charts of a classifier draw.","$ref":"#/$defs/classifierCharts"}}},"check":{"description":"One check's outcome.","type":"object","required":["id","code","status","value","limitKey","limit","warn","line","message","advice"],"additionalProperties":false,"properties":{"id":{"description":"Check id.","type":"string"},"code":{"description":"The id plus a sub-reason.","type":"string"},"status":{"description":"pass, warn, fail or skipped.","enum":["pass","warn","fail","skipped"]},"value":{"description":"The figure the limit applies to, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"limitKey":{"description":"The limit's key.","type":"string"},"limit":{"description":"Fail threshold, or null.","type":["number","null"]},"warn":{"description":"Warning threshold, or null.","type":["number","null"]},"floor":{"description":"Floors of the limit, when it has any: fail below `fail`, warn below `warn`.","type":"object","required":["warn","fail"],"additionalProperties":false,"properties":{"warn":{"description":"Warn below this, or null.","type":["number","null"]},"fail":{"description":"Fail below this, or null.","type":["number","null"]}}},"line":{"description":"Descriptor line to annotate.","$ref":"#/$defs/line"},"message":{"description":"The finding.","type":"string"},"advice":{"description":"What to change (empty when passing).","type":"string"},"detail":{"description":"Extra figures (free form)."},"suggestion":{"description":"A change to propose at a descriptor line.","type":"object","required":["text","line"],"additionalProperties":false,"properties":{"text":{"description":"The change.","type":"string"},"line":{"description":"Its line.","$ref":"#/$defs/line"},"change":{"description":"The one value to write instead, when the change is one value.","type":"object","required":["key","value"],"additionalProperties":false,"properties":{"key":{"description":"The key whose value changes.","type":"string"},"value":{"description":"The new value.","type":"number"}}}}}}},"base":{"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new, compared or renamed.","enum":["new","compared","renamed"]},"commit":{"description":"The base commit.","type":"string"},"previous":{"description":"Status renamed: the base model compared with, and what matched it.","type":"object","required":["name","descriptor","matched_by"],"additionalProperties":false,"properties":{"name":{"description":"Its name on the base commit.","type":"string"},"descriptor":{"description":"Its descriptor path there.","type":"string"},"matched_by":{"description":"descriptor or data.","enum":["descriptor","data"]}}},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss":{"description":"Classifiers: hold-out log-loss there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss_change":{"description":"Classifiers: relative change of the hold-out log-loss, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}},"series":{"description":"The rows of one file as points.","type":"object","required":["rows","shown","thinned","thinning","lines","x","actual","fitted","residual"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row (read from parts: the line in its own part).","type":"array","items":{"$ref":"#/$defs/line"}},"files":{"description":"Read from parts only: the parts, in reading order.","type":"array","items":{"type":"string"}},"file_index":{"description":"Read from parts only: each kept row's part, an index into `files`.","type":"array","items":{"$ref":"#/$defs/count"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"actual":{"description":"Observed target.","$ref":"#/$defs/chartNumbers"},"fitted":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"residual":{"description":"actual - fitted.","$ref":"#/$defs/chartNumbers"}}},"curve":{"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false},"charts":{"description":"Everything the charts of one model draw.","type":"object","required":["target","inputs","train","holdout","fit","partials","sweep","coefficients"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"train":{"description":"Training rows.","$ref":"#/$defs/series"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/series"},"fit":{"description":"The fitted curve of a model of one input, or null.","anyOf":[{"type":"null"},{"type":"object","$ref":"#/$defs/curve","required":["band","regions","source"],"properties":{"band":true,"regions":true,"source":true,"base":true}}]},"partials":{"description":"One curve per input.","type":"array","items":{"$ref":"#/$defs/curve"}},"sweep":{"description":"The complexity sweep, or null.","anyOf":[{"type":"null"},{"type":"object","required":["parameter","log","settings","cv","train","chosen","suggested"],"additionalProperties":false,"properties":{"parameter":{"description":"What was swept.","type":"string"},"log":{"description":"Log axis.","type":"boolean"},"settings":{"description":"Settings, ascending.","$ref":"#/$defs/numbers"},"cv":{"description":"Cross-validated RMSE per setting.","$ref":"#/$defs/chartNumbers"},"train":{"description":"Training RMSE per setting, or null.","anyOf":[{"type":"null"},{"$ref":"#/$defs/chartNumbers"}]},"chosen":{"description":"The descriptor's setting, or null.","$ref":"#/$defs/chartNumber"},"suggested":{"description":"The suggested setting, or null.","$ref":"#/$defs/chartNumber"}}}]},"coefficients":{"description":"Standardised coefficients.","type":"object","required":["columns","values","limit","warn"],"additionalProperties":false,"properties":{"columns":{"description":"Columns.","type":"array","items":{"type":"string"}},"values":{"description":"Values.","$ref":"#/$defs/chartNumbers"},"limit":{"description":"Fail limit, or null.","$ref":"#/$defs/chartNumber"},"warn":{"description":"Warning limit, or null.","$ref":"#/$defs/chartNumber"}}}}},"rocCurve":{"description":"The ROC curve of one file, thinned to at most 300 points keeping its convex hull.","type":"object","required":["rows","positives","negatives","points","thinned","fpr","tpr","threshold","hull"],"additionalProperties":false,"properties":{"rows":{"description":"Rows of the file.","$ref":"#/$defs/count"},"positives":{"description":"Positive rows.","$ref":"#/$defs/count"},"negatives":{"description":"Negative rows.","$ref":"#/$defs/count"},"points":{"description":"Points of the whole curve.","$ref":"#/$defs/count"},"thinned":{"description":"True when fewer points are kept.","type":"boolean"},"fpr":{"description":"False positive rates, ascending.","type":"array","items":{"type":"number"},"maxItems":300},"tpr":{"description":"True positive rates.","type":"array","items":{"type":"number"},"maxItems":300},"threshold":{"description":"Probability threshold of each point (null at the first).","type":"array","items":{"$ref":"#/$defs/chartNumber"},"maxItems":300},"hull":{"description":"Indices of the upper convex hull's vertices.","type":"array","items":{"$ref":"#/$defs/count"},"maxItems":300}}},"calibrationBins":{"description":"A calibration diagram: equal-width bins of the predicted probability.","type":"array","maxItems":100,"items":{"type":"object","required":["from","to","count","predicted","observed"],"additionalProperties":false,"properties":{"from":{"description":"Lower bin edge.","type":"number"},"to":{"description":"Upper bin edge.","type":"number"},"count":{"description":"Rows in the bin.","$ref":"#/$defs/count"},"predicted":{"description":"Mean predicted probability, or null when empty.","$ref":"#/$defs/chartNumber"},"observed":{"description":"Share of positives, or null when empty.","$ref":"#/$defs/chartNumber"}}}},"classifierPoints":{"description":"The rows of one file as points at 0 and 1.","type":"object","required":["rows","shown","thinned","thinning","lines","x","label","probability"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"label":{"description":"1 positive, 0 negative.","type":"array","items":{"enum":[0,1]}},"probability":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}},"classifierCharts":{"description":"Everything the charts of one classifier draw.","type":"object","required":["target","positive","negative","threshold","inputs","roc","calibration","train","holdout","curves"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"positive":{"description":"The positive label.","type":"string"},"negative":{"description":"The negative label.","type":"string"},"threshold":{"description":"Decision threshold of the accuracy figure.","type":"number"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"roc":{"description":"ROC curves of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/rocCurve"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/rocCurve"}}},"calibration":{"description":"Calibration diagrams of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/calibrationBins"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/calibrationBins"}}},"train":{"description":"Training rows.","$ref":"#/$defs/classifierPoints"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/classifierPoints"},"curves":{"description":"Predicted probability along each input, the others at their training medians.","type":"array","items":{"type":"object","required":["input","others","range","x","p"],"additionalProperties":false,"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"p":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}}},"curvesLeftOut":{"description":"Inputs with a spread left without a curve.","$ref":"#/$defs/count"}}}}};
 const schema20 = {"description":"pass, warn, fail, or error (could not be checked).","enum":["pass","warn","fail","error"]};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -54,7 +54,7 @@ return errors === 0;
 }
 validate55.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
-const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE.","$ref":"#/$defs/jsonNumber"},"train_mae":{"description":"Training MAE.","$ref":"#/$defs/jsonNumber"},"holdout_mae":{"description":"Hold-out MAE.","$ref":"#/$defs/jsonNumber"},"train_r2":{"description":"Training R^2.","$ref":"#/$defs/jsonNumber"},"holdout_r2":{"description":"Hold-out R^2.","$ref":"#/$defs/jsonNumber"},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"}}};
+const schema22 = {"description":"One model's outcome.","type":"object","required":["name","descriptor","verdict","rows","parameters","columns","metrics","coefficients","shipped","checks","error"],"additionalProperties":false,"properties":{"name":{"description":"The model's name.","type":"string"},"descriptor":{"description":"Descriptor path relative to the repository root.","type":"string"},"kind":{"description":"`predictions`: a model trained elsewhere, gated from its predictions alone (`parameters` is the stated count, 0 when not stated). Absent: a model of terms.","enum":["predictions"]},"verdict":{"description":"The model's verdict: the worst of its checks, or error.","$ref":"#/$defs/verdict"},"rows":{"description":"Data rows read.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/count"}}},"dropped":{"description":"Rows dropped for a missing cell in a used column, per file (only with `data.missing: drop`).","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows dropped.","$ref":"#/$defs/count"},"holdout":{"description":"Hold-out rows dropped.","$ref":"#/$defs/count"}}},"data":{"description":"The data files read, when `data.train` or `data.holdout` is a list of parts or a glob (absent for one file each): repository-relative paths in reading order.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training files.","type":"array","items":{"type":"string"}},"holdout":{"description":"Hold-out files.","type":"array","items":{"type":"string"}}}},"parameters":{"description":"Design columns.","$ref":"#/$defs/count"},"columns":{"description":"Design column names, in order.","type":"array","items":{"type":"string"}},"metrics":{"description":"Fit and hold-out figures; null for a model that could not be checked.","anyOf":[{"type":"null"},{"type":"object","properties":{"train_rmse":{"description":"Training RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse":{"description":"Hold-out RMSE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_mae":{"description":"Training MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_mae":{"description":"Hold-out MAE (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"train_r2":{"description":"Training R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_r2":{"description":"Hold-out R^2 (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Hold-out RMSE / training RMSE.","$ref":"#/$defs/jsonNumber"},"params_per_sample":{"description":"Parameters / training rows.","$ref":"#/$defs/jsonNumber"},"max_std_coefficient":{"description":"Largest standardised coefficient (null for a classifier).","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"max_std_coefficient_column":{"description":"Its column, or null.","type":["string","null"]},"max_abs_coefficient":{"description":"Largest coefficient in size.","$ref":"#/$defs/jsonNumber"},"rank":{"description":"Numerical rank of the design.","$ref":"#/$defs/count"},"condition_number":{"description":"Condition number of the column-scaled design.","$ref":"#/$defs/jsonNumber"}},"additionalProperties":{"description":"Further figures of diagnostics.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"string"},{"type":"null"}]}}]},"coefficients":{"description":"Refit coefficients, intercept first.","type":"array","items":{"$ref":"#/$defs/jsonNumber"}},"shipped":{"description":"Figures of the shipped coefficients, or null.","anyOf":[{"type":"null"},{"type":"object","required":["train_rmse","holdout_rmse","max_coefficient_difference"],"additionalProperties":false,"properties":{"train_rmse":{"description":"Training RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"holdout_rmse":{"description":"Hold-out RMSE of the shipped coefficients.","$ref":"#/$defs/jsonNumber"},"max_coefficient_difference":{"description":"max |shipped - refit|.","$ref":"#/$defs/jsonNumber"}}}]},"target_scale":{"description":"A model with `data.target_transform`: error figures on the original scale (the target against back-transformed predictions, a median of the target) and on the transformed scale the model is fitted on; `metrics` holds those of `limits_scale`.","type":"object","required":["transform","limits_scale","back_transform","original","transformed"],"additionalProperties":false,"properties":{"transform":{"description":"The target transform.","enum":["log","log1p","sqrt"]},"limits_scale":{"description":"The scale the error limits judged.","enum":["original","transformed"]},"back_transform":{"description":"The back-transform of predictions: exp, expm1 or the square of max(t, 0).","enum":["exp","expm1","square"]},"original":{"description":"Figures on the original scale.","$ref":"#/$defs/scaleFigures"},"transformed":{"description":"Figures on the transformed scale.","$ref":"#/$defs/scaleFigures"}}},"checks":{"description":"Every check's outcome.","type":"array","items":{"$ref":"#/$defs/check"}},"base":{"description":"Comparison with the base commit.","$ref":"#/$defs/base"},"error":{"description":"Why the model could not be checked, or null.","anyOf":[{"type":"null"},{"type":"object","required":["message","file","line","code"],"additionalProperties":false,"properties":{"message":{"description":"What is wrong and what was expected.","type":"string"},"file":{"description":"The file at fault, or null.","type":["string","null"]},"line":{"description":"Its line, or null.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"column":{"description":"Its column, when known.","anyOf":[{"$ref":"#/$defs/line"},{"type":"null"}]},"code":{"description":"Stable code of the problem.","type":"string"}}}]},"extra":{"description":"Further data (free form)."},"charts":{"description":"What the charts draw.","$ref":"#/$defs/charts"},"classifier_charts":{"description":"What the charts of a classifier draw.","$ref":"#/$defs/classifierCharts"}}};
 const func1 = Object.prototype.hasOwnProperty;
 const schema23 = {"description":"A number, or one of the strings \"Infinity\", \"-Infinity\", \"NaN\".","anyOf":[{"type":"number"},{"enum":["Infinity","-Infinity","NaN"]}]};
 
@@ -760,7 +760,7 @@ return errors === 0;
 }
 validate99.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
-const schema27 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new or compared.","enum":["new","compared"]},"commit":{"description":"The base commit.","type":"string"},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
+const schema27 = {"description":"How the model compares with the same model on the base commit.","type":"object","required":["status","commit","holdout_rmse","gap_ratio","holdout_rmse_change","gap_ratio_change"],"additionalProperties":false,"properties":{"status":{"description":"new, compared or renamed.","enum":["new","compared","renamed"]},"commit":{"description":"The base commit.","type":"string"},"previous":{"description":"Status renamed: the base model compared with, and what matched it.","type":"object","required":["name","descriptor","matched_by"],"additionalProperties":false,"properties":{"name":{"description":"Its name on the base commit.","type":"string"},"descriptor":{"description":"Its descriptor path there.","type":"string"},"matched_by":{"description":"descriptor or data.","enum":["descriptor","data"]}}},"holdout_rmse":{"description":"Hold-out RMSE there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio":{"description":"Gap ratio there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_rmse_change":{"description":"Relative change of the hold-out RMSE, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"gap_ratio_change":{"description":"Change of the gap ratio, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss":{"description":"Classifiers: hold-out log-loss there, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]},"holdout_log_loss_change":{"description":"Classifiers: relative change of the hold-out log-loss, or null.","anyOf":[{"$ref":"#/$defs/jsonNumber"},{"type":"null"}]}}};
 
 function validate105(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
@@ -782,7 +782,7 @@ return false;
 else {
 const _errs1 = errors;
 for(const key0 in data){
-if(!((((((key0 === "status") || (key0 === "commit")) || (key0 === "holdout_rmse")) || (key0 === "gap_ratio")) || (key0 === "holdout_rmse_change")) || (key0 === "gap_ratio_change"))){
+if(!(func1.call(schema27.properties, key0))){
 validate105.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
@@ -792,7 +792,7 @@ if(_errs1 === errors){
 if(data.status !== undefined){
 let data0 = data.status;
 const _errs2 = errors;
-if(!((data0 === "new") || (data0 === "compared"))){
+if(!(((data0 === "new") || (data0 === "compared")) || (data0 === "renamed"))){
 validate105.errors = [{instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema27.properties.status.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
@@ -814,20 +814,92 @@ else {
 var valid0 = true;
 }
 if(valid0){
-if(data.holdout_rmse !== undefined){
-let data2 = data.holdout_rmse;
+if(data.previous !== undefined){
+let data2 = data.previous;
 const _errs5 = errors;
-const _errs6 = errors;
-let valid1 = false;
+if(errors === _errs5){
+if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
+let missing1;
+if((((data2.name === undefined) && (missing1 = "name")) || ((data2.descriptor === undefined) && (missing1 = "descriptor"))) || ((data2.matched_by === undefined) && (missing1 = "matched_by"))){
+validate105.errors = [{instancePath:instancePath+"/previous",schemaPath:"#/properties/previous/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+return false;
+}
+else {
 const _errs7 = errors;
-if(!(validate68(data2, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+for(const key1 in data2){
+if(!(((key1 === "name") || (key1 === "descriptor")) || (key1 === "matched_by"))){
+validate105.errors = [{instancePath:instancePath+"/previous",schemaPath:"#/properties/previous/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs7 === errors){
+if(data2.name !== undefined){
+const _errs8 = errors;
+if(typeof data2.name !== "string"){
+validate105.errors = [{instancePath:instancePath+"/previous/name",schemaPath:"#/properties/previous/properties/name/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid1 = _errs8 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data2.descriptor !== undefined){
+const _errs10 = errors;
+if(typeof data2.descriptor !== "string"){
+validate105.errors = [{instancePath:instancePath+"/previous/descriptor",schemaPath:"#/properties/previous/properties/descriptor/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid1 = _errs10 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data2.matched_by !== undefined){
+let data5 = data2.matched_by;
+const _errs12 = errors;
+if(!((data5 === "descriptor") || (data5 === "data"))){
+validate105.errors = [{instancePath:instancePath+"/previous/matched_by",schemaPath:"#/properties/previous/properties/matched_by/enum",keyword:"enum",params:{allowedValues: schema27.properties.previous.properties.matched_by.enum},message:"must be equal to one of the allowed values"}];
+return false;
+}
+var valid1 = _errs12 === errors;
+}
+else {
+var valid1 = true;
+}
+}
+}
+}
+}
+}
+else {
+validate105.errors = [{instancePath:instancePath+"/previous",schemaPath:"#/properties/previous/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs5 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_rmse !== undefined){
+let data6 = data.holdout_rmse;
+const _errs13 = errors;
+const _errs14 = errors;
+let valid2 = false;
+const _errs15 = errors;
+if(!(validate68(data6, {instancePath:instancePath+"/holdout_rmse",parentData:data,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid0 = _errs7 === errors;
-valid1 = valid1 || _valid0;
-const _errs8 = errors;
-if(data2 !== null){
+var _valid0 = _errs15 === errors;
+valid2 = valid2 || _valid0;
+const _errs16 = errors;
+if(data6 !== null){
 const err0 = {instancePath:instancePath+"/holdout_rmse",schemaPath:"#/properties/holdout_rmse/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err0];
@@ -837,9 +909,9 @@ vErrors.push(err0);
 }
 errors++;
 }
-var _valid0 = _errs8 === errors;
-valid1 = valid1 || _valid0;
-if(!valid1){
+var _valid0 = _errs16 === errors;
+valid2 = valid2 || _valid0;
+if(!valid2){
 const err1 = {instancePath:instancePath+"/holdout_rmse",schemaPath:"#/properties/holdout_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err1];
@@ -852,36 +924,36 @@ validate105.errors = vErrors;
 return false;
 }
 else {
-errors = _errs6;
+errors = _errs14;
 if(vErrors !== null){
-if(_errs6){
-vErrors.length = _errs6;
+if(_errs14){
+vErrors.length = _errs14;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs5 === errors;
+var valid0 = _errs13 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.gap_ratio !== undefined){
-let data3 = data.gap_ratio;
-const _errs10 = errors;
-const _errs11 = errors;
-let valid2 = false;
-const _errs12 = errors;
-if(!(validate68(data3, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+let data7 = data.gap_ratio;
+const _errs18 = errors;
+const _errs19 = errors;
+let valid3 = false;
+const _errs20 = errors;
+if(!(validate68(data7, {instancePath:instancePath+"/gap_ratio",parentData:data,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid1 = _errs12 === errors;
-valid2 = valid2 || _valid1;
-const _errs13 = errors;
-if(data3 !== null){
+var _valid1 = _errs20 === errors;
+valid3 = valid3 || _valid1;
+const _errs21 = errors;
+if(data7 !== null){
 const err2 = {instancePath:instancePath+"/gap_ratio",schemaPath:"#/properties/gap_ratio/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err2];
@@ -891,9 +963,9 @@ vErrors.push(err2);
 }
 errors++;
 }
-var _valid1 = _errs13 === errors;
-valid2 = valid2 || _valid1;
-if(!valid2){
+var _valid1 = _errs21 === errors;
+valid3 = valid3 || _valid1;
+if(!valid3){
 const err3 = {instancePath:instancePath+"/gap_ratio",schemaPath:"#/properties/gap_ratio/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err3];
@@ -906,36 +978,36 @@ validate105.errors = vErrors;
 return false;
 }
 else {
-errors = _errs11;
+errors = _errs19;
 if(vErrors !== null){
-if(_errs11){
-vErrors.length = _errs11;
+if(_errs19){
+vErrors.length = _errs19;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs10 === errors;
+var valid0 = _errs18 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.holdout_rmse_change !== undefined){
-let data4 = data.holdout_rmse_change;
-const _errs15 = errors;
-const _errs16 = errors;
-let valid3 = false;
-const _errs17 = errors;
-if(!(validate68(data4, {instancePath:instancePath+"/holdout_rmse_change",parentData:data,parentDataProperty:"holdout_rmse_change",rootData,dynamicAnchors}))){
+let data8 = data.holdout_rmse_change;
+const _errs23 = errors;
+const _errs24 = errors;
+let valid4 = false;
+const _errs25 = errors;
+if(!(validate68(data8, {instancePath:instancePath+"/holdout_rmse_change",parentData:data,parentDataProperty:"holdout_rmse_change",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid2 = _errs17 === errors;
-valid3 = valid3 || _valid2;
-const _errs18 = errors;
-if(data4 !== null){
+var _valid2 = _errs25 === errors;
+valid4 = valid4 || _valid2;
+const _errs26 = errors;
+if(data8 !== null){
 const err4 = {instancePath:instancePath+"/holdout_rmse_change",schemaPath:"#/properties/holdout_rmse_change/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err4];
@@ -945,9 +1017,9 @@ vErrors.push(err4);
 }
 errors++;
 }
-var _valid2 = _errs18 === errors;
-valid3 = valid3 || _valid2;
-if(!valid3){
+var _valid2 = _errs26 === errors;
+valid4 = valid4 || _valid2;
+if(!valid4){
 const err5 = {instancePath:instancePath+"/holdout_rmse_change",schemaPath:"#/properties/holdout_rmse_change/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err5];
@@ -960,36 +1032,36 @@ validate105.errors = vErrors;
 return false;
 }
 else {
-errors = _errs16;
+errors = _errs24;
 if(vErrors !== null){
-if(_errs16){
-vErrors.length = _errs16;
+if(_errs24){
+vErrors.length = _errs24;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs15 === errors;
+var valid0 = _errs23 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.gap_ratio_change !== undefined){
-let data5 = data.gap_ratio_change;
-const _errs20 = errors;
-const _errs21 = errors;
-let valid4 = false;
-const _errs22 = errors;
-if(!(validate68(data5, {instancePath:instancePath+"/gap_ratio_change",parentData:data,parentDataProperty:"gap_ratio_change",rootData,dynamicAnchors}))){
+let data9 = data.gap_ratio_change;
+const _errs28 = errors;
+const _errs29 = errors;
+let valid5 = false;
+const _errs30 = errors;
+if(!(validate68(data9, {instancePath:instancePath+"/gap_ratio_change",parentData:data,parentDataProperty:"gap_ratio_change",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var _valid3 = _errs22 === errors;
-valid4 = valid4 || _valid3;
-const _errs23 = errors;
-if(data5 !== null){
+var _valid3 = _errs30 === errors;
+valid5 = valid5 || _valid3;
+const _errs31 = errors;
+if(data9 !== null){
 const err6 = {instancePath:instancePath+"/gap_ratio_change",schemaPath:"#/properties/gap_ratio_change/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err6];
@@ -999,9 +1071,9 @@ vErrors.push(err6);
 }
 errors++;
 }
-var _valid3 = _errs23 === errors;
-valid4 = valid4 || _valid3;
-if(!valid4){
+var _valid3 = _errs31 === errors;
+valid5 = valid5 || _valid3;
+if(!valid5){
 const err7 = {instancePath:instancePath+"/gap_ratio_change",schemaPath:"#/properties/gap_ratio_change/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err7];
@@ -1014,20 +1086,131 @@ validate105.errors = vErrors;
 return false;
 }
 else {
-errors = _errs21;
+errors = _errs29;
 if(vErrors !== null){
-if(_errs21){
-vErrors.length = _errs21;
+if(_errs29){
+vErrors.length = _errs29;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs20 === errors;
+var valid0 = _errs28 === errors;
 }
 else {
 var valid0 = true;
+}
+if(valid0){
+if(data.holdout_log_loss !== undefined){
+let data10 = data.holdout_log_loss;
+const _errs33 = errors;
+const _errs34 = errors;
+let valid6 = false;
+const _errs35 = errors;
+if(!(validate68(data10, {instancePath:instancePath+"/holdout_log_loss",parentData:data,parentDataProperty:"holdout_log_loss",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid4 = _errs35 === errors;
+valid6 = valid6 || _valid4;
+const _errs36 = errors;
+if(data10 !== null){
+const err8 = {instancePath:instancePath+"/holdout_log_loss",schemaPath:"#/properties/holdout_log_loss/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+var _valid4 = _errs36 === errors;
+valid6 = valid6 || _valid4;
+if(!valid6){
+const err9 = {instancePath:instancePath+"/holdout_log_loss",schemaPath:"#/properties/holdout_log_loss/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+validate105.errors = vErrors;
+return false;
+}
+else {
+errors = _errs34;
+if(vErrors !== null){
+if(_errs34){
+vErrors.length = _errs34;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid0 = _errs33 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout_log_loss_change !== undefined){
+let data11 = data.holdout_log_loss_change;
+const _errs38 = errors;
+const _errs39 = errors;
+let valid7 = false;
+const _errs40 = errors;
+if(!(validate68(data11, {instancePath:instancePath+"/holdout_log_loss_change",parentData:data,parentDataProperty:"holdout_log_loss_change",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid5 = _errs40 === errors;
+valid7 = valid7 || _valid5;
+const _errs41 = errors;
+if(data11 !== null){
+const err10 = {instancePath:instancePath+"/holdout_log_loss_change",schemaPath:"#/properties/holdout_log_loss_change/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+var _valid5 = _errs41 === errors;
+valid7 = valid7 || _valid5;
+if(!valid7){
+const err11 = {instancePath:instancePath+"/holdout_log_loss_change",schemaPath:"#/properties/holdout_log_loss_change/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+validate105.errors = vErrors;
+return false;
+}
+else {
+errors = _errs39;
+if(vErrors !== null){
+if(_errs39){
+vErrors.length = _errs39;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid0 = _errs38 === errors;
+}
+else {
+var valid0 = true;
+}
+}
+}
 }
 }
 }
@@ -1052,10 +1235,10 @@ const schema29 = {"description":"The rows of one file as points.","type":"object
 const schema30 = {"description":"Finite numbers or nulls.","type":"array","items":{"$ref":"#/$defs/chartNumber"}};
 const schema31 = {"description":"A finite number, or null.","type":["number","null"]};
 
-function validate120(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate122(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate120.evaluated;
+const evaluated0 = validate122.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1063,19 +1246,19 @@ if(evaluated0.dynamicItems){
 evaluated0.items = undefined;
 }
 if((!((typeof data == "number") && (isFinite(data)))) && (data !== null)){
-validate120.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema31.type},message:"must be number,null"}];
+validate122.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: schema31.type},message:"must be number,null"}];
 return false;
 }
-validate120.errors = vErrors;
+validate122.errors = vErrors;
 return errors === 0;
 }
-validate120.evaluated = {"dynamicProps":false,"dynamicItems":false};
+validate122.evaluated = {"dynamicProps":false,"dynamicItems":false};
 
 
-function validate119(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate121(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate119.evaluated;
+const evaluated0 = validate121.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1088,8 +1271,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate120(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -1099,20 +1282,20 @@ break;
 }
 }
 else {
-validate119.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate121.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate119.errors = vErrors;
+validate121.errors = vErrors;
 return errors === 0;
 }
-validate119.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate121.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate114(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate116(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate114.evaluated;
+const evaluated0 = validate116.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1123,14 +1306,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((((((data.rows === undefined) && (missing0 = "rows")) || ((data.shown === undefined) && (missing0 = "shown"))) || ((data.thinned === undefined) && (missing0 = "thinned"))) || ((data.thinning === undefined) && (missing0 = "thinning"))) || ((data.lines === undefined) && (missing0 = "lines"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.actual === undefined) && (missing0 = "actual"))) || ((data.fitted === undefined) && (missing0 = "fitted"))) || ((data.residual === undefined) && (missing0 = "residual"))){
-validate114.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate116.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!(func1.call(schema29.properties, key0))){
-validate114.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate116.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1163,7 +1346,7 @@ if(valid0){
 if(data.thinned !== undefined){
 const _errs4 = errors;
 if(typeof data.thinned !== "boolean"){
-validate114.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
+validate116.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
 return false;
 }
 var valid0 = _errs4 === errors;
@@ -1175,7 +1358,7 @@ if(valid0){
 if(data.thinning !== undefined){
 const _errs6 = errors;
 if(typeof data.thinning !== "string"){
-validate114.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate116.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs6 === errors;
@@ -1204,7 +1387,7 @@ break;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate116.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1224,7 +1407,7 @@ const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs13 = errors;
 if(typeof data6[i1] !== "string"){
-validate114.errors = [{instancePath:instancePath+"/files/" + i1,schemaPath:"#/properties/files/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate116.errors = [{instancePath:instancePath+"/files/" + i1,schemaPath:"#/properties/files/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid2 = _errs13 === errors;
@@ -1234,7 +1417,7 @@ break;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/files",schemaPath:"#/properties/files/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate116.errors = [{instancePath:instancePath+"/files",schemaPath:"#/properties/files/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1264,7 +1447,7 @@ break;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/file_index",schemaPath:"#/properties/file_index/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate116.errors = [{instancePath:instancePath+"/file_index",schemaPath:"#/properties/file_index/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1283,8 +1466,8 @@ var valid4 = true;
 const len3 = data10.length;
 for(let i3=0; i3<len3; i3++){
 const _errs20 = errors;
-if(!(validate119(data10[i3], {instancePath:instancePath+"/x/" + i3,parentData:data10,parentDataProperty:i3,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data10[i3], {instancePath:instancePath+"/x/" + i3,parentData:data10,parentDataProperty:i3,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid4 = _errs20 === errors;
@@ -1294,7 +1477,7 @@ break;
 }
 }
 else {
-validate114.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate116.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1306,8 +1489,8 @@ var valid0 = true;
 if(valid0){
 if(data.actual !== undefined){
 const _errs21 = errors;
-if(!(validate119(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data.actual, {instancePath:instancePath+"/actual",parentData:data,parentDataProperty:"actual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs21 === errors;
@@ -1318,8 +1501,8 @@ var valid0 = true;
 if(valid0){
 if(data.fitted !== undefined){
 const _errs22 = errors;
-if(!(validate119(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data.fitted, {instancePath:instancePath+"/fitted",parentData:data,parentDataProperty:"fitted",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs22 === errors;
@@ -1330,8 +1513,8 @@ var valid0 = true;
 if(valid0){
 if(data.residual !== undefined){
 const _errs23 = errors;
-if(!(validate119(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data.residual, {instancePath:instancePath+"/residual",parentData:data,parentDataProperty:"residual",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs23 === errors;
@@ -1353,22 +1536,22 @@ var valid0 = true;
 }
 }
 else {
-validate114.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate116.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate114.errors = vErrors;
+validate116.errors = vErrors;
 return errors === 0;
 }
-validate114.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate116.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema32 = {"description":"Predictions along one input.","type":"object","required":["input","others","range","x","y"],"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"Predictions.","$ref":"#/$defs/chartNumbers"},"band":{"description":"Observed target band.","$ref":"#/$defs/pair"},"regions":{"description":"Where the curve leaves the band.","type":"array","items":{"type":"object","required":["from","to","side"],"additionalProperties":false,"properties":{"from":{"description":"Start.","$ref":"#/$defs/chartNumber"},"to":{"description":"End.","$ref":"#/$defs/chartNumber"},"side":{"description":"above or below the band.","enum":["above","below"]}}}},"source":{"description":"swing or data.","enum":["swing","data"]},"spikes":{"description":"Intervals between neighbouring training values where the curve varies more than the swing-spikes limit allows; only when the swing-spikes check warns or fails and some interval is marked.","type":"object","required":["limit","intervals"],"additionalProperties":false,"properties":{"limit":{"description":"The factor the intervals were judged with (the swing-spikes warning limit, else its fail limit).","type":"number"},"intervals":{"description":"The marked intervals, ascending.","type":"array","items":{"type":"object","required":["from","to","variation","allowed"],"additionalProperties":false,"properties":{"from":{"description":"Start (a training value).","type":"number"},"to":{"description":"End (the next training value).","type":"number"},"variation":{"description":"Total variation of the curve over the interval.","$ref":"#/$defs/chartNumber"},"allowed":{"description":"What it was compared with (times the limit).","$ref":"#/$defs/chartNumber"}}}},"left_out":{"description":"Marked intervals beyond the most kept, when there were more.","type":"integer","minimum":1}}},"base":{"description":"The base commit's curve along the same input, when the pull request changed the model's fit.","type":"object","required":["commit","x","y"],"additionalProperties":false,"properties":{"commit":{"description":"The base commit.","type":"string"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"y":{"description":"The base fit's predictions.","$ref":"#/$defs/chartNumbers"}}}},"additionalProperties":false};
 const schema33 = {"description":"Two numbers (or nulls).","type":"array","minItems":2,"maxItems":2,"items":{"$ref":"#/$defs/chartNumber"}};
 
-function validate129(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate131(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate129.evaluated;
+const evaluated0 = validate131.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1378,12 +1561,12 @@ evaluated0.items = undefined;
 if(errors === 0){
 if(Array.isArray(data)){
 if(data.length > 2){
-validate129.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
+validate131.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 2},message:"must NOT have more than 2 items"}];
 return false;
 }
 else {
 if(data.length < 2){
-validate129.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
+validate131.errors = [{instancePath,schemaPath:"#/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items"}];
 return false;
 }
 else {
@@ -1391,8 +1574,8 @@ var valid0 = true;
 const len0 = data.length;
 for(let i0=0; i0<len0; i0++){
 const _errs1 = errors;
-if(!(validate120(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data[i0], {instancePath:instancePath+"/" + i0,parentData:data,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs1 === errors;
@@ -1404,21 +1587,21 @@ break;
 }
 }
 else {
-validate129.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate131.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate129.errors = vErrors;
+validate131.errors = vErrors;
 return errors === 0;
 }
-validate129.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate131.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 const schema34 = {"description":"Finite numbers.","type":"array","items":{"type":"number"}};
 
-function validate132(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate134(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate132.evaluated;
+const evaluated0 = validate134.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1433,7 +1616,7 @@ for(let i0=0; i0<len0; i0++){
 let data0 = data[i0];
 const _errs1 = errors;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-validate132.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate134.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid0 = _errs1 === errors;
@@ -1443,20 +1626,20 @@ break;
 }
 }
 else {
-validate132.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate134.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
-validate132.errors = vErrors;
+validate134.errors = vErrors;
 return errors === 0;
 }
-validate132.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+validate134.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate128(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate130(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate128.evaluated;
+const evaluated0 = validate130.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1467,14 +1650,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if((((((data.input === undefined) && (missing0 = "input")) || ((data.others === undefined) && (missing0 = "others"))) || ((data.range === undefined) && (missing0 = "range"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.y === undefined) && (missing0 = "y"))){
-validate128.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate130.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!(func1.call(schema32.properties, key0))){
-validate128.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate130.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1483,7 +1666,7 @@ if(_errs1 === errors){
 if(data.input !== undefined){
 const _errs2 = errors;
 if(typeof data.input !== "string"){
-validate128.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate130.errors = [{instancePath:instancePath+"/input",schemaPath:"#/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1501,7 +1684,7 @@ for(const key1 in data1){
 let data2 = data1[key1];
 const _errs7 = errors;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-validate128.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate130.errors = [{instancePath:instancePath+"/others/" + key1.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid1 = _errs7 === errors;
@@ -1511,7 +1694,7 @@ break;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate130.errors = [{instancePath:instancePath+"/others",schemaPath:"#/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1523,8 +1706,8 @@ var valid0 = true;
 if(valid0){
 if(data.range !== undefined){
 const _errs9 = errors;
-if(!(validate129(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate129.errors : vErrors.concat(validate129.errors);
+if(!(validate131(data.range, {instancePath:instancePath+"/range",parentData:data,parentDataProperty:"range",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate131.errors : vErrors.concat(validate131.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -1535,8 +1718,8 @@ var valid0 = true;
 if(valid0){
 if(data.x !== undefined){
 const _errs10 = errors;
-if(!(validate132(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate132.errors : vErrors.concat(validate132.errors);
+if(!(validate134(data.x, {instancePath:instancePath+"/x",parentData:data,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate134.errors : vErrors.concat(validate134.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs10 === errors;
@@ -1547,8 +1730,8 @@ var valid0 = true;
 if(valid0){
 if(data.y !== undefined){
 const _errs11 = errors;
-if(!(validate119(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data.y, {instancePath:instancePath+"/y",parentData:data,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs11 === errors;
@@ -1559,8 +1742,8 @@ var valid0 = true;
 if(valid0){
 if(data.band !== undefined){
 const _errs12 = errors;
-if(!(validate129(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate129.errors : vErrors.concat(validate129.errors);
+if(!(validate131(data.band, {instancePath:instancePath+"/band",parentData:data,parentDataProperty:"band",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate131.errors : vErrors.concat(validate131.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs12 === errors;
@@ -1583,14 +1766,14 @@ if(errors === _errs15){
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 let missing1;
 if((((data8.from === undefined) && (missing1 = "from")) || ((data8.to === undefined) && (missing1 = "to"))) || ((data8.side === undefined) && (missing1 = "side"))){
-validate128.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+validate130.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
 return false;
 }
 else {
 const _errs17 = errors;
 for(const key2 in data8){
 if(!(((key2 === "from") || (key2 === "to")) || (key2 === "side"))){
-validate128.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate130.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1598,8 +1781,8 @@ break;
 if(_errs17 === errors){
 if(data8.from !== undefined){
 const _errs18 = errors;
-if(!(validate120(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data8.from, {instancePath:instancePath+"/regions/" + i0+"/from",parentData:data8,parentDataProperty:"from",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -1610,8 +1793,8 @@ var valid3 = true;
 if(valid3){
 if(data8.to !== undefined){
 const _errs19 = errors;
-if(!(validate120(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data8.to, {instancePath:instancePath+"/regions/" + i0+"/to",parentData:data8,parentDataProperty:"to",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs19 === errors;
@@ -1624,7 +1807,7 @@ if(data8.side !== undefined){
 let data11 = data8.side;
 const _errs20 = errors;
 if(!((data11 === "above") || (data11 === "below"))){
-validate128.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema32.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
+validate130.errors = [{instancePath:instancePath+"/regions/" + i0+"/side",schemaPath:"#/properties/regions/items/properties/side/enum",keyword:"enum",params:{allowedValues: schema32.properties.regions.items.properties.side.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid3 = _errs20 === errors;
@@ -1638,7 +1821,7 @@ var valid3 = true;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate130.errors = [{instancePath:instancePath+"/regions/" + i0,schemaPath:"#/properties/regions/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1649,7 +1832,7 @@ break;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate130.errors = [{instancePath:instancePath+"/regions",schemaPath:"#/properties/regions/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1663,7 +1846,7 @@ if(data.source !== undefined){
 let data12 = data.source;
 const _errs21 = errors;
 if(!((data12 === "swing") || (data12 === "data"))){
-validate128.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema32.properties.source.enum},message:"must be equal to one of the allowed values"}];
+validate130.errors = [{instancePath:instancePath+"/source",schemaPath:"#/properties/source/enum",keyword:"enum",params:{allowedValues: schema32.properties.source.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
 var valid0 = _errs21 === errors;
@@ -1679,14 +1862,14 @@ if(errors === _errs22){
 if(data13 && typeof data13 == "object" && !Array.isArray(data13)){
 let missing2;
 if(((data13.limit === undefined) && (missing2 = "limit")) || ((data13.intervals === undefined) && (missing2 = "intervals"))){
-validate128.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+validate130.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
 return false;
 }
 else {
 const _errs24 = errors;
 for(const key3 in data13){
 if(!(((key3 === "limit") || (key3 === "intervals")) || (key3 === "left_out"))){
-validate128.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+validate130.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1696,7 +1879,7 @@ if(data13.limit !== undefined){
 let data14 = data13.limit;
 const _errs25 = errors;
 if(!((typeof data14 == "number") && (isFinite(data14)))){
-validate128.errors = [{instancePath:instancePath+"/spikes/limit",schemaPath:"#/properties/spikes/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/limit",schemaPath:"#/properties/spikes/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid4 = _errs25 === errors;
@@ -1719,14 +1902,14 @@ if(errors === _errs29){
 if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
 let missing3;
 if(((((data16.from === undefined) && (missing3 = "from")) || ((data16.to === undefined) && (missing3 = "to"))) || ((data16.variation === undefined) && (missing3 = "variation"))) || ((data16.allowed === undefined) && (missing3 = "allowed"))){
-validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
 const _errs31 = errors;
 for(const key4 in data16){
 if(!((((key4 === "from") || (key4 === "to")) || (key4 === "variation")) || (key4 === "allowed"))){
-validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1736,7 +1919,7 @@ if(data16.from !== undefined){
 let data17 = data16.from;
 const _errs32 = errors;
 if(!((typeof data17 == "number") && (isFinite(data17)))){
-validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/from",schemaPath:"#/properties/spikes/properties/intervals/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/from",schemaPath:"#/properties/spikes/properties/intervals/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid6 = _errs32 === errors;
@@ -1749,7 +1932,7 @@ if(data16.to !== undefined){
 let data18 = data16.to;
 const _errs34 = errors;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/to",schemaPath:"#/properties/spikes/properties/intervals/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1+"/to",schemaPath:"#/properties/spikes/properties/intervals/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number"}];
 return false;
 }
 var valid6 = _errs34 === errors;
@@ -1760,8 +1943,8 @@ var valid6 = true;
 if(valid6){
 if(data16.variation !== undefined){
 const _errs36 = errors;
-if(!(validate120(data16.variation, {instancePath:instancePath+"/spikes/intervals/" + i1+"/variation",parentData:data16,parentDataProperty:"variation",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data16.variation, {instancePath:instancePath+"/spikes/intervals/" + i1+"/variation",parentData:data16,parentDataProperty:"variation",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid6 = _errs36 === errors;
@@ -1772,8 +1955,8 @@ var valid6 = true;
 if(valid6){
 if(data16.allowed !== undefined){
 const _errs37 = errors;
-if(!(validate120(data16.allowed, {instancePath:instancePath+"/spikes/intervals/" + i1+"/allowed",parentData:data16,parentDataProperty:"allowed",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data16.allowed, {instancePath:instancePath+"/spikes/intervals/" + i1+"/allowed",parentData:data16,parentDataProperty:"allowed",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid6 = _errs37 === errors;
@@ -1788,7 +1971,7 @@ var valid6 = true;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/intervals/" + i1,schemaPath:"#/properties/spikes/properties/intervals/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1799,7 +1982,7 @@ break;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/spikes/intervals",schemaPath:"#/properties/spikes/properties/intervals/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/intervals",schemaPath:"#/properties/spikes/properties/intervals/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -1813,13 +1996,13 @@ if(data13.left_out !== undefined){
 let data21 = data13.left_out;
 const _errs38 = errors;
 if(!(((typeof data21 == "number") && (!(data21 % 1) && !isNaN(data21))) && (isFinite(data21)))){
-validate128.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/type",keyword:"type",params:{type: "integer"},message:"must be integer"}];
 return false;
 }
 if(errors === _errs38){
 if((typeof data21 == "number") && (isFinite(data21))){
 if(data21 < 1 || isNaN(data21)){
-validate128.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
+validate130.errors = [{instancePath:instancePath+"/spikes/left_out",schemaPath:"#/properties/spikes/properties/left_out/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1"}];
 return false;
 }
 }
@@ -1835,7 +2018,7 @@ var valid4 = true;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate130.errors = [{instancePath:instancePath+"/spikes",schemaPath:"#/properties/spikes/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1852,14 +2035,14 @@ if(errors === _errs40){
 if(data22 && typeof data22 == "object" && !Array.isArray(data22)){
 let missing4;
 if((((data22.commit === undefined) && (missing4 = "commit")) || ((data22.x === undefined) && (missing4 = "x"))) || ((data22.y === undefined) && (missing4 = "y"))){
-validate128.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"}];
+validate130.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"}];
 return false;
 }
 else {
 const _errs42 = errors;
 for(const key5 in data22){
 if(!(((key5 === "commit") || (key5 === "x")) || (key5 === "y"))){
-validate128.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"}];
+validate130.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1868,7 +2051,7 @@ if(_errs42 === errors){
 if(data22.commit !== undefined){
 const _errs43 = errors;
 if(typeof data22.commit !== "string"){
-validate128.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate130.errors = [{instancePath:instancePath+"/base/commit",schemaPath:"#/properties/base/properties/commit/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid7 = _errs43 === errors;
@@ -1879,8 +2062,8 @@ var valid7 = true;
 if(valid7){
 if(data22.x !== undefined){
 const _errs45 = errors;
-if(!(validate132(data22.x, {instancePath:instancePath+"/base/x",parentData:data22,parentDataProperty:"x",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate132.errors : vErrors.concat(validate132.errors);
+if(!(validate134(data22.x, {instancePath:instancePath+"/base/x",parentData:data22,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate134.errors : vErrors.concat(validate134.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs45 === errors;
@@ -1891,8 +2074,8 @@ var valid7 = true;
 if(valid7){
 if(data22.y !== undefined){
 const _errs46 = errors;
-if(!(validate119(data22.y, {instancePath:instancePath+"/base/y",parentData:data22,parentDataProperty:"y",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data22.y, {instancePath:instancePath+"/base/y",parentData:data22,parentDataProperty:"y",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs46 === errors;
@@ -1906,7 +2089,7 @@ var valid7 = true;
 }
 }
 else {
-validate128.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate130.errors = [{instancePath:instancePath+"/base",schemaPath:"#/properties/base/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -1928,20 +2111,20 @@ var valid0 = true;
 }
 }
 else {
-validate128.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate130.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate128.errors = vErrors;
+validate130.errors = vErrors;
 return errors === 0;
 }
-validate128.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate130.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
-function validate113(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+function validate115(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
 let vErrors = null;
 let errors = 0;
-const evaluated0 = validate113.evaluated;
+const evaluated0 = validate115.evaluated;
 if(evaluated0.dynamicProps){
 evaluated0.props = undefined;
 }
@@ -1952,14 +2135,14 @@ if(errors === 0){
 if(data && typeof data == "object" && !Array.isArray(data)){
 let missing0;
 if(((((((((data.target === undefined) && (missing0 = "target")) || ((data.inputs === undefined) && (missing0 = "inputs"))) || ((data.train === undefined) && (missing0 = "train"))) || ((data.holdout === undefined) && (missing0 = "holdout"))) || ((data.fit === undefined) && (missing0 = "fit"))) || ((data.partials === undefined) && (missing0 = "partials"))) || ((data.sweep === undefined) && (missing0 = "sweep"))) || ((data.coefficients === undefined) && (missing0 = "coefficients"))){
-validate113.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+validate115.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
 return false;
 }
 else {
 const _errs1 = errors;
 for(const key0 in data){
 if(!((((((((key0 === "target") || (key0 === "inputs")) || (key0 === "train")) || (key0 === "holdout")) || (key0 === "fit")) || (key0 === "partials")) || (key0 === "sweep")) || (key0 === "coefficients"))){
-validate113.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+validate115.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -1968,7 +2151,7 @@ if(_errs1 === errors){
 if(data.target !== undefined){
 const _errs2 = errors;
 if(typeof data.target !== "string"){
-validate113.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate115.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid0 = _errs2 === errors;
@@ -1987,7 +2170,7 @@ const len0 = data1.length;
 for(let i0=0; i0<len0; i0++){
 const _errs6 = errors;
 if(typeof data1[i0] !== "string"){
-validate113.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate115.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid1 = _errs6 === errors;
@@ -1997,7 +2180,7 @@ break;
 }
 }
 else {
-validate113.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate115.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -2009,8 +2192,8 @@ var valid0 = true;
 if(valid0){
 if(data.train !== undefined){
 const _errs8 = errors;
-if(!(validate114(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
+if(!(validate116(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs8 === errors;
@@ -2021,8 +2204,8 @@ var valid0 = true;
 if(valid0){
 if(data.holdout !== undefined){
 const _errs9 = errors;
-if(!(validate114(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate114.errors : vErrors.concat(validate114.errors);
+if(!(validate116(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate116.errors : vErrors.concat(validate116.errors);
 errors = vErrors.length;
 }
 var valid0 = _errs9 === errors;
@@ -2050,8 +2233,8 @@ errors++;
 var _valid0 = _errs12 === errors;
 valid2 = valid2 || _valid0;
 const _errs14 = errors;
-if(!(validate128(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate128.errors : vErrors.concat(validate128.errors);
+if(!(validate130(data5, {instancePath:instancePath+"/fit",parentData:data,parentDataProperty:"fit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate130.errors : vErrors.concat(validate130.errors);
 errors = vErrors.length;
 }
 if(errors === _errs14){
@@ -2090,7 +2273,7 @@ else {
 vErrors.push(err3);
 }
 errors++;
-validate113.errors = vErrors;
+validate115.errors = vErrors;
 return false;
 }
 else {
@@ -2119,8 +2302,8 @@ var valid3 = true;
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
 const _errs18 = errors;
-if(!(validate128(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate128.errors : vErrors.concat(validate128.errors);
+if(!(validate130(data6[i1], {instancePath:instancePath+"/partials/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate130.errors : vErrors.concat(validate130.errors);
 errors = vErrors.length;
 }
 var valid3 = _errs18 === errors;
@@ -2130,7 +2313,7 @@ break;
 }
 }
 else {
-validate113.errors = [{instancePath:instancePath+"/partials",schemaPath:"#/properties/partials/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate115.errors = [{instancePath:instancePath+"/partials",schemaPath:"#/properties/partials/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -2226,8 +2409,8 @@ var valid5 = true;
 if(valid5){
 if(data8.settings !== undefined){
 const _errs30 = errors;
-if(!(validate132(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate132.errors : vErrors.concat(validate132.errors);
+if(!(validate134(data8.settings, {instancePath:instancePath+"/sweep/settings",parentData:data8,parentDataProperty:"settings",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate134.errors : vErrors.concat(validate134.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs30 === errors;
@@ -2238,8 +2421,8 @@ var valid5 = true;
 if(valid5){
 if(data8.cv !== undefined){
 const _errs31 = errors;
-if(!(validate119(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data8.cv, {instancePath:instancePath+"/sweep/cv",parentData:data8,parentDataProperty:"cv",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs31 === errors;
@@ -2267,8 +2450,8 @@ errors++;
 var _valid2 = _errs34 === errors;
 valid6 = valid6 || _valid2;
 const _errs36 = errors;
-if(!(validate119(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data13, {instancePath:instancePath+"/sweep/train",parentData:data8,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var _valid2 = _errs36 === errors;
@@ -2302,8 +2485,8 @@ var valid5 = true;
 if(valid5){
 if(data8.chosen !== undefined){
 const _errs37 = errors;
-if(!(validate120(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data8.chosen, {instancePath:instancePath+"/sweep/chosen",parentData:data8,parentDataProperty:"chosen",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs37 === errors;
@@ -2314,8 +2497,8 @@ var valid5 = true;
 if(valid5){
 if(data8.suggested !== undefined){
 const _errs38 = errors;
-if(!(validate120(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data8.suggested, {instancePath:instancePath+"/sweep/suggested",parentData:data8,parentDataProperty:"suggested",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid5 = _errs38 === errors;
@@ -2354,7 +2537,7 @@ else {
 vErrors.push(err12);
 }
 errors++;
-validate113.errors = vErrors;
+validate115.errors = vErrors;
 return false;
 }
 else {
@@ -2381,14 +2564,14 @@ if(errors === _errs39){
 if(data16 && typeof data16 == "object" && !Array.isArray(data16)){
 let missing3;
 if(((((data16.columns === undefined) && (missing3 = "columns")) || ((data16.values === undefined) && (missing3 = "values"))) || ((data16.limit === undefined) && (missing3 = "limit"))) || ((data16.warn === undefined) && (missing3 = "warn"))){
-validate113.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+validate115.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
 return false;
 }
 else {
 const _errs41 = errors;
 for(const key2 in data16){
 if(!((((key2 === "columns") || (key2 === "values")) || (key2 === "limit")) || (key2 === "warn"))){
-validate113.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+validate115.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
 return false;
 break;
 }
@@ -2404,7 +2587,7 @@ const len2 = data17.length;
 for(let i2=0; i2<len2; i2++){
 const _errs44 = errors;
 if(typeof data17[i2] !== "string"){
-validate113.errors = [{instancePath:instancePath+"/coefficients/columns/" + i2,schemaPath:"#/properties/coefficients/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+validate115.errors = [{instancePath:instancePath+"/coefficients/columns/" + i2,schemaPath:"#/properties/coefficients/properties/columns/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
 return false;
 }
 var valid8 = _errs44 === errors;
@@ -2414,7 +2597,7 @@ break;
 }
 }
 else {
-validate113.errors = [{instancePath:instancePath+"/coefficients/columns",schemaPath:"#/properties/coefficients/properties/columns/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+validate115.errors = [{instancePath:instancePath+"/coefficients/columns",schemaPath:"#/properties/coefficients/properties/columns/type",keyword:"type",params:{type: "array"},message:"must be array"}];
 return false;
 }
 }
@@ -2426,8 +2609,8 @@ var valid7 = true;
 if(valid7){
 if(data16.values !== undefined){
 const _errs46 = errors;
-if(!(validate119(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate119.errors : vErrors.concat(validate119.errors);
+if(!(validate121(data16.values, {instancePath:instancePath+"/coefficients/values",parentData:data16,parentDataProperty:"values",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs46 === errors;
@@ -2438,8 +2621,8 @@ var valid7 = true;
 if(valid7){
 if(data16.limit !== undefined){
 const _errs47 = errors;
-if(!(validate120(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data16.limit, {instancePath:instancePath+"/coefficients/limit",parentData:data16,parentDataProperty:"limit",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs47 === errors;
@@ -2450,8 +2633,8 @@ var valid7 = true;
 if(valid7){
 if(data16.warn !== undefined){
 const _errs48 = errors;
-if(!(validate120(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate120.errors : vErrors.concat(validate120.errors);
+if(!(validate122(data16.warn, {instancePath:instancePath+"/coefficients/warn",parentData:data16,parentDataProperty:"warn",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
 errors = vErrors.length;
 }
 var valid7 = _errs48 === errors;
@@ -2466,7 +2649,7 @@ var valid7 = true;
 }
 }
 else {
-validate113.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate115.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
@@ -2486,14 +2669,1013 @@ var valid0 = true;
 }
 }
 else {
-validate113.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+validate115.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
 return false;
 }
 }
-validate113.errors = vErrors;
+validate115.errors = vErrors;
 return errors === 0;
 }
-validate113.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+validate115.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+
+const schema35 = {"description":"Everything the charts of one classifier draw.","type":"object","required":["target","positive","negative","threshold","inputs","roc","calibration","train","holdout","curves"],"additionalProperties":false,"properties":{"target":{"description":"Target column.","type":"string"},"positive":{"description":"The positive label.","type":"string"},"negative":{"description":"The negative label.","type":"string"},"threshold":{"description":"Decision threshold of the accuracy figure.","type":"number"},"inputs":{"description":"Input columns.","type":"array","items":{"type":"string"}},"roc":{"description":"ROC curves of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/rocCurve"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/rocCurve"}}},"calibration":{"description":"Calibration diagrams of both files.","type":"object","required":["train","holdout"],"additionalProperties":false,"properties":{"train":{"description":"Training rows.","$ref":"#/$defs/calibrationBins"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/calibrationBins"}}},"train":{"description":"Training rows.","$ref":"#/$defs/classifierPoints"},"holdout":{"description":"Hold-out rows.","$ref":"#/$defs/classifierPoints"},"curves":{"description":"Predicted probability along each input, the others at their training medians.","type":"array","items":{"type":"object","required":["input","others","range","x","p"],"additionalProperties":false,"properties":{"input":{"description":"The input.","type":"string"},"others":{"description":"Training medians of the other inputs, by name.","type":"object","additionalProperties":{"type":"number"}},"range":{"description":"Training range of the input.","$ref":"#/$defs/pair"},"x":{"description":"Input values, ascending.","$ref":"#/$defs/numbers"},"p":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}}},"curvesLeftOut":{"description":"Inputs with a spread left without a curve.","$ref":"#/$defs/count"}}};
+const schema36 = {"description":"The ROC curve of one file, thinned to at most 300 points keeping its convex hull.","type":"object","required":["rows","positives","negatives","points","thinned","fpr","tpr","threshold","hull"],"additionalProperties":false,"properties":{"rows":{"description":"Rows of the file.","$ref":"#/$defs/count"},"positives":{"description":"Positive rows.","$ref":"#/$defs/count"},"negatives":{"description":"Negative rows.","$ref":"#/$defs/count"},"points":{"description":"Points of the whole curve.","$ref":"#/$defs/count"},"thinned":{"description":"True when fewer points are kept.","type":"boolean"},"fpr":{"description":"False positive rates, ascending.","type":"array","items":{"type":"number"},"maxItems":300},"tpr":{"description":"True positive rates.","type":"array","items":{"type":"number"},"maxItems":300},"threshold":{"description":"Probability threshold of each point (null at the first).","type":"array","items":{"$ref":"#/$defs/chartNumber"},"maxItems":300},"hull":{"description":"Indices of the upper convex hull's vertices.","type":"array","items":{"$ref":"#/$defs/count"},"maxItems":300}}};
+
+function validate156(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate156.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(errors === 0){
+if(data && typeof data == "object" && !Array.isArray(data)){
+let missing0;
+if((((((((((data.rows === undefined) && (missing0 = "rows")) || ((data.positives === undefined) && (missing0 = "positives"))) || ((data.negatives === undefined) && (missing0 = "negatives"))) || ((data.points === undefined) && (missing0 = "points"))) || ((data.thinned === undefined) && (missing0 = "thinned"))) || ((data.fpr === undefined) && (missing0 = "fpr"))) || ((data.tpr === undefined) && (missing0 = "tpr"))) || ((data.threshold === undefined) && (missing0 = "threshold"))) || ((data.hull === undefined) && (missing0 = "hull"))){
+validate156.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+return false;
+}
+else {
+const _errs1 = errors;
+for(const key0 in data){
+if(!(func1.call(schema36.properties, key0))){
+validate156.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs1 === errors){
+if(data.rows !== undefined){
+const _errs2 = errors;
+if(!(validate55(data.rows, {instancePath:instancePath+"/rows",parentData:data,parentDataProperty:"rows",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs2 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.positives !== undefined){
+const _errs3 = errors;
+if(!(validate55(data.positives, {instancePath:instancePath+"/positives",parentData:data,parentDataProperty:"positives",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs3 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.negatives !== undefined){
+const _errs4 = errors;
+if(!(validate55(data.negatives, {instancePath:instancePath+"/negatives",parentData:data,parentDataProperty:"negatives",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs4 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.points !== undefined){
+const _errs5 = errors;
+if(!(validate55(data.points, {instancePath:instancePath+"/points",parentData:data,parentDataProperty:"points",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs5 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.thinned !== undefined){
+const _errs6 = errors;
+if(typeof data.thinned !== "boolean"){
+validate156.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
+return false;
+}
+var valid0 = _errs6 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.fpr !== undefined){
+let data5 = data.fpr;
+const _errs8 = errors;
+if(errors === _errs8){
+if(Array.isArray(data5)){
+if(data5.length > 300){
+validate156.errors = [{instancePath:instancePath+"/fpr",schemaPath:"#/properties/fpr/maxItems",keyword:"maxItems",params:{limit: 300},message:"must NOT have more than 300 items"}];
+return false;
+}
+else {
+var valid1 = true;
+const len0 = data5.length;
+for(let i0=0; i0<len0; i0++){
+let data6 = data5[i0];
+const _errs10 = errors;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+validate156.errors = [{instancePath:instancePath+"/fpr/" + i0,schemaPath:"#/properties/fpr/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid1 = _errs10 === errors;
+if(!valid1){
+break;
+}
+}
+}
+}
+else {
+validate156.errors = [{instancePath:instancePath+"/fpr",schemaPath:"#/properties/fpr/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs8 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.tpr !== undefined){
+let data7 = data.tpr;
+const _errs12 = errors;
+if(errors === _errs12){
+if(Array.isArray(data7)){
+if(data7.length > 300){
+validate156.errors = [{instancePath:instancePath+"/tpr",schemaPath:"#/properties/tpr/maxItems",keyword:"maxItems",params:{limit: 300},message:"must NOT have more than 300 items"}];
+return false;
+}
+else {
+var valid2 = true;
+const len1 = data7.length;
+for(let i1=0; i1<len1; i1++){
+let data8 = data7[i1];
+const _errs14 = errors;
+if(!((typeof data8 == "number") && (isFinite(data8)))){
+validate156.errors = [{instancePath:instancePath+"/tpr/" + i1,schemaPath:"#/properties/tpr/items/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid2 = _errs14 === errors;
+if(!valid2){
+break;
+}
+}
+}
+}
+else {
+validate156.errors = [{instancePath:instancePath+"/tpr",schemaPath:"#/properties/tpr/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs12 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.threshold !== undefined){
+let data9 = data.threshold;
+const _errs16 = errors;
+if(errors === _errs16){
+if(Array.isArray(data9)){
+if(data9.length > 300){
+validate156.errors = [{instancePath:instancePath+"/threshold",schemaPath:"#/properties/threshold/maxItems",keyword:"maxItems",params:{limit: 300},message:"must NOT have more than 300 items"}];
+return false;
+}
+else {
+var valid3 = true;
+const len2 = data9.length;
+for(let i2=0; i2<len2; i2++){
+const _errs18 = errors;
+if(!(validate122(data9[i2], {instancePath:instancePath+"/threshold/" + i2,parentData:data9,parentDataProperty:i2,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
+errors = vErrors.length;
+}
+var valid3 = _errs18 === errors;
+if(!valid3){
+break;
+}
+}
+}
+}
+else {
+validate156.errors = [{instancePath:instancePath+"/threshold",schemaPath:"#/properties/threshold/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs16 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.hull !== undefined){
+let data11 = data.hull;
+const _errs19 = errors;
+if(errors === _errs19){
+if(Array.isArray(data11)){
+if(data11.length > 300){
+validate156.errors = [{instancePath:instancePath+"/hull",schemaPath:"#/properties/hull/maxItems",keyword:"maxItems",params:{limit: 300},message:"must NOT have more than 300 items"}];
+return false;
+}
+else {
+var valid4 = true;
+const len3 = data11.length;
+for(let i3=0; i3<len3; i3++){
+const _errs21 = errors;
+if(!(validate55(data11[i3], {instancePath:instancePath+"/hull/" + i3,parentData:data11,parentDataProperty:i3,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid4 = _errs21 === errors;
+if(!valid4){
+break;
+}
+}
+}
+}
+else {
+validate156.errors = [{instancePath:instancePath+"/hull",schemaPath:"#/properties/hull/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs19 === errors;
+}
+else {
+var valid0 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+validate156.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+validate156.errors = vErrors;
+return errors === 0;
+}
+validate156.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+
+const schema37 = {"description":"A calibration diagram: equal-width bins of the predicted probability.","type":"array","maxItems":100,"items":{"type":"object","required":["from","to","count","predicted","observed"],"additionalProperties":false,"properties":{"from":{"description":"Lower bin edge.","type":"number"},"to":{"description":"Upper bin edge.","type":"number"},"count":{"description":"Rows in the bin.","$ref":"#/$defs/count"},"predicted":{"description":"Mean predicted probability, or null when empty.","$ref":"#/$defs/chartNumber"},"observed":{"description":"Share of positives, or null when empty.","$ref":"#/$defs/chartNumber"}}}};
+
+function validate165(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate165.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(errors === 0){
+if(Array.isArray(data)){
+if(data.length > 100){
+validate165.errors = [{instancePath,schemaPath:"#/maxItems",keyword:"maxItems",params:{limit: 100},message:"must NOT have more than 100 items"}];
+return false;
+}
+else {
+var valid0 = true;
+const len0 = data.length;
+for(let i0=0; i0<len0; i0++){
+let data0 = data[i0];
+const _errs1 = errors;
+if(errors === _errs1){
+if(data0 && typeof data0 == "object" && !Array.isArray(data0)){
+let missing0;
+if((((((data0.from === undefined) && (missing0 = "from")) || ((data0.to === undefined) && (missing0 = "to"))) || ((data0.count === undefined) && (missing0 = "count"))) || ((data0.predicted === undefined) && (missing0 = "predicted"))) || ((data0.observed === undefined) && (missing0 = "observed"))){
+validate165.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+return false;
+}
+else {
+const _errs3 = errors;
+for(const key0 in data0){
+if(!(((((key0 === "from") || (key0 === "to")) || (key0 === "count")) || (key0 === "predicted")) || (key0 === "observed"))){
+validate165.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs3 === errors){
+if(data0.from !== undefined){
+let data1 = data0.from;
+const _errs4 = errors;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+validate165.errors = [{instancePath:instancePath+"/" + i0+"/from",schemaPath:"#/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid1 = _errs4 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data0.to !== undefined){
+let data2 = data0.to;
+const _errs6 = errors;
+if(!((typeof data2 == "number") && (isFinite(data2)))){
+validate165.errors = [{instancePath:instancePath+"/" + i0+"/to",schemaPath:"#/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid1 = _errs6 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data0.count !== undefined){
+const _errs8 = errors;
+if(!(validate55(data0.count, {instancePath:instancePath+"/" + i0+"/count",parentData:data0,parentDataProperty:"count",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid1 = _errs8 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data0.predicted !== undefined){
+const _errs9 = errors;
+if(!(validate122(data0.predicted, {instancePath:instancePath+"/" + i0+"/predicted",parentData:data0,parentDataProperty:"predicted",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
+errors = vErrors.length;
+}
+var valid1 = _errs9 === errors;
+}
+else {
+var valid1 = true;
+}
+if(valid1){
+if(data0.observed !== undefined){
+const _errs10 = errors;
+if(!(validate122(data0.observed, {instancePath:instancePath+"/" + i0+"/observed",parentData:data0,parentDataProperty:"observed",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate122.errors : vErrors.concat(validate122.errors);
+errors = vErrors.length;
+}
+var valid1 = _errs10 === errors;
+}
+else {
+var valid1 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+validate165.errors = [{instancePath:instancePath+"/" + i0,schemaPath:"#/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs1 === errors;
+if(!valid0){
+break;
+}
+}
+}
+}
+else {
+validate165.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+validate165.errors = vErrors;
+return errors === 0;
+}
+validate165.evaluated = {"items":true,"dynamicProps":false,"dynamicItems":false};
+
+const schema38 = {"description":"The rows of one file as points at 0 and 1.","type":"object","required":["rows","shown","thinned","thinning","lines","x","label","probability"],"additionalProperties":false,"properties":{"rows":{"description":"Data rows in the file.","$ref":"#/$defs/count"},"shown":{"description":"Points kept.","$ref":"#/$defs/count"},"thinned":{"description":"True when rows were thinned.","type":"boolean"},"thinning":{"description":"How rows were kept.","type":"string"},"lines":{"description":"File line of each kept row.","type":"array","items":{"$ref":"#/$defs/line"}},"x":{"description":"Input values, one array per input.","type":"array","items":{"$ref":"#/$defs/chartNumbers"}},"label":{"description":"1 positive, 0 negative.","type":"array","items":{"enum":[0,1]}},"probability":{"description":"Predicted probabilities.","$ref":"#/$defs/chartNumbers"}}};
+
+function validate171(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate171.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(errors === 0){
+if(data && typeof data == "object" && !Array.isArray(data)){
+let missing0;
+if(((((((((data.rows === undefined) && (missing0 = "rows")) || ((data.shown === undefined) && (missing0 = "shown"))) || ((data.thinned === undefined) && (missing0 = "thinned"))) || ((data.thinning === undefined) && (missing0 = "thinning"))) || ((data.lines === undefined) && (missing0 = "lines"))) || ((data.x === undefined) && (missing0 = "x"))) || ((data.label === undefined) && (missing0 = "label"))) || ((data.probability === undefined) && (missing0 = "probability"))){
+validate171.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+return false;
+}
+else {
+const _errs1 = errors;
+for(const key0 in data){
+if(!((((((((key0 === "rows") || (key0 === "shown")) || (key0 === "thinned")) || (key0 === "thinning")) || (key0 === "lines")) || (key0 === "x")) || (key0 === "label")) || (key0 === "probability"))){
+validate171.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs1 === errors){
+if(data.rows !== undefined){
+const _errs2 = errors;
+if(!(validate55(data.rows, {instancePath:instancePath+"/rows",parentData:data,parentDataProperty:"rows",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs2 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.shown !== undefined){
+const _errs3 = errors;
+if(!(validate55(data.shown, {instancePath:instancePath+"/shown",parentData:data,parentDataProperty:"shown",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs3 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.thinned !== undefined){
+const _errs4 = errors;
+if(typeof data.thinned !== "boolean"){
+validate171.errors = [{instancePath:instancePath+"/thinned",schemaPath:"#/properties/thinned/type",keyword:"type",params:{type: "boolean"},message:"must be boolean"}];
+return false;
+}
+var valid0 = _errs4 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.thinning !== undefined){
+const _errs6 = errors;
+if(typeof data.thinning !== "string"){
+validate171.errors = [{instancePath:instancePath+"/thinning",schemaPath:"#/properties/thinning/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid0 = _errs6 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.lines !== undefined){
+let data4 = data.lines;
+const _errs8 = errors;
+if(errors === _errs8){
+if(Array.isArray(data4)){
+var valid1 = true;
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+const _errs10 = errors;
+if(!(validate101(data4[i0], {instancePath:instancePath+"/lines/" + i0,parentData:data4,parentDataProperty:i0,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
+errors = vErrors.length;
+}
+var valid1 = _errs10 === errors;
+if(!valid1){
+break;
+}
+}
+}
+else {
+validate171.errors = [{instancePath:instancePath+"/lines",schemaPath:"#/properties/lines/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs8 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.x !== undefined){
+let data6 = data.x;
+const _errs11 = errors;
+if(errors === _errs11){
+if(Array.isArray(data6)){
+var valid2 = true;
+const len1 = data6.length;
+for(let i1=0; i1<len1; i1++){
+const _errs13 = errors;
+if(!(validate121(data6[i1], {instancePath:instancePath+"/x/" + i1,parentData:data6,parentDataProperty:i1,rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
+errors = vErrors.length;
+}
+var valid2 = _errs13 === errors;
+if(!valid2){
+break;
+}
+}
+}
+else {
+validate171.errors = [{instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs11 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.label !== undefined){
+let data8 = data.label;
+const _errs14 = errors;
+if(errors === _errs14){
+if(Array.isArray(data8)){
+var valid3 = true;
+const len2 = data8.length;
+for(let i2=0; i2<len2; i2++){
+let data9 = data8[i2];
+const _errs16 = errors;
+if(!((data9 === 0) || (data9 === 1))){
+validate171.errors = [{instancePath:instancePath+"/label/" + i2,schemaPath:"#/properties/label/items/enum",keyword:"enum",params:{allowedValues: schema38.properties.label.items.enum},message:"must be equal to one of the allowed values"}];
+return false;
+}
+var valid3 = _errs16 === errors;
+if(!valid3){
+break;
+}
+}
+}
+else {
+validate171.errors = [{instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs14 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.probability !== undefined){
+const _errs17 = errors;
+if(!(validate121(data.probability, {instancePath:instancePath+"/probability",parentData:data,parentDataProperty:"probability",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs17 === errors;
+}
+else {
+var valid0 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+validate171.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+validate171.errors = vErrors;
+return errors === 0;
+}
+validate171.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
+
+
+function validate155(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
+let vErrors = null;
+let errors = 0;
+const evaluated0 = validate155.evaluated;
+if(evaluated0.dynamicProps){
+evaluated0.props = undefined;
+}
+if(evaluated0.dynamicItems){
+evaluated0.items = undefined;
+}
+if(errors === 0){
+if(data && typeof data == "object" && !Array.isArray(data)){
+let missing0;
+if(((((((((((data.target === undefined) && (missing0 = "target")) || ((data.positive === undefined) && (missing0 = "positive"))) || ((data.negative === undefined) && (missing0 = "negative"))) || ((data.threshold === undefined) && (missing0 = "threshold"))) || ((data.inputs === undefined) && (missing0 = "inputs"))) || ((data.roc === undefined) && (missing0 = "roc"))) || ((data.calibration === undefined) && (missing0 = "calibration"))) || ((data.train === undefined) && (missing0 = "train"))) || ((data.holdout === undefined) && (missing0 = "holdout"))) || ((data.curves === undefined) && (missing0 = "curves"))){
+validate155.errors = [{instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: missing0},message:"must have required property '"+missing0+"'"}];
+return false;
+}
+else {
+const _errs1 = errors;
+for(const key0 in data){
+if(!(func1.call(schema35.properties, key0))){
+validate155.errors = [{instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs1 === errors){
+if(data.target !== undefined){
+const _errs2 = errors;
+if(typeof data.target !== "string"){
+validate155.errors = [{instancePath:instancePath+"/target",schemaPath:"#/properties/target/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid0 = _errs2 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.positive !== undefined){
+const _errs4 = errors;
+if(typeof data.positive !== "string"){
+validate155.errors = [{instancePath:instancePath+"/positive",schemaPath:"#/properties/positive/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid0 = _errs4 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.negative !== undefined){
+const _errs6 = errors;
+if(typeof data.negative !== "string"){
+validate155.errors = [{instancePath:instancePath+"/negative",schemaPath:"#/properties/negative/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid0 = _errs6 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.threshold !== undefined){
+let data3 = data.threshold;
+const _errs8 = errors;
+if(!((typeof data3 == "number") && (isFinite(data3)))){
+validate155.errors = [{instancePath:instancePath+"/threshold",schemaPath:"#/properties/threshold/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid0 = _errs8 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.inputs !== undefined){
+let data4 = data.inputs;
+const _errs10 = errors;
+if(errors === _errs10){
+if(Array.isArray(data4)){
+var valid1 = true;
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+const _errs12 = errors;
+if(typeof data4[i0] !== "string"){
+validate155.errors = [{instancePath:instancePath+"/inputs/" + i0,schemaPath:"#/properties/inputs/items/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid1 = _errs12 === errors;
+if(!valid1){
+break;
+}
+}
+}
+else {
+validate155.errors = [{instancePath:instancePath+"/inputs",schemaPath:"#/properties/inputs/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs10 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.roc !== undefined){
+let data6 = data.roc;
+const _errs14 = errors;
+if(errors === _errs14){
+if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
+let missing1;
+if(((data6.train === undefined) && (missing1 = "train")) || ((data6.holdout === undefined) && (missing1 = "holdout"))){
+validate155.errors = [{instancePath:instancePath+"/roc",schemaPath:"#/properties/roc/required",keyword:"required",params:{missingProperty: missing1},message:"must have required property '"+missing1+"'"}];
+return false;
+}
+else {
+const _errs16 = errors;
+for(const key1 in data6){
+if(!((key1 === "train") || (key1 === "holdout"))){
+validate155.errors = [{instancePath:instancePath+"/roc",schemaPath:"#/properties/roc/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs16 === errors){
+if(data6.train !== undefined){
+const _errs17 = errors;
+if(!(validate156(data6.train, {instancePath:instancePath+"/roc/train",parentData:data6,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate156.errors : vErrors.concat(validate156.errors);
+errors = vErrors.length;
+}
+var valid2 = _errs17 === errors;
+}
+else {
+var valid2 = true;
+}
+if(valid2){
+if(data6.holdout !== undefined){
+const _errs18 = errors;
+if(!(validate156(data6.holdout, {instancePath:instancePath+"/roc/holdout",parentData:data6,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate156.errors : vErrors.concat(validate156.errors);
+errors = vErrors.length;
+}
+var valid2 = _errs18 === errors;
+}
+else {
+var valid2 = true;
+}
+}
+}
+}
+}
+else {
+validate155.errors = [{instancePath:instancePath+"/roc",schemaPath:"#/properties/roc/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs14 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.calibration !== undefined){
+let data9 = data.calibration;
+const _errs19 = errors;
+if(errors === _errs19){
+if(data9 && typeof data9 == "object" && !Array.isArray(data9)){
+let missing2;
+if(((data9.train === undefined) && (missing2 = "train")) || ((data9.holdout === undefined) && (missing2 = "holdout"))){
+validate155.errors = [{instancePath:instancePath+"/calibration",schemaPath:"#/properties/calibration/required",keyword:"required",params:{missingProperty: missing2},message:"must have required property '"+missing2+"'"}];
+return false;
+}
+else {
+const _errs21 = errors;
+for(const key2 in data9){
+if(!((key2 === "train") || (key2 === "holdout"))){
+validate155.errors = [{instancePath:instancePath+"/calibration",schemaPath:"#/properties/calibration/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs21 === errors){
+if(data9.train !== undefined){
+const _errs22 = errors;
+if(!(validate165(data9.train, {instancePath:instancePath+"/calibration/train",parentData:data9,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate165.errors : vErrors.concat(validate165.errors);
+errors = vErrors.length;
+}
+var valid3 = _errs22 === errors;
+}
+else {
+var valid3 = true;
+}
+if(valid3){
+if(data9.holdout !== undefined){
+const _errs23 = errors;
+if(!(validate165(data9.holdout, {instancePath:instancePath+"/calibration/holdout",parentData:data9,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate165.errors : vErrors.concat(validate165.errors);
+errors = vErrors.length;
+}
+var valid3 = _errs23 === errors;
+}
+else {
+var valid3 = true;
+}
+}
+}
+}
+}
+else {
+validate155.errors = [{instancePath:instancePath+"/calibration",schemaPath:"#/properties/calibration/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid0 = _errs19 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.train !== undefined){
+const _errs24 = errors;
+if(!(validate171(data.train, {instancePath:instancePath+"/train",parentData:data,parentDataProperty:"train",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate171.errors : vErrors.concat(validate171.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs24 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.holdout !== undefined){
+const _errs25 = errors;
+if(!(validate171(data.holdout, {instancePath:instancePath+"/holdout",parentData:data,parentDataProperty:"holdout",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate171.errors : vErrors.concat(validate171.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs25 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.curves !== undefined){
+let data14 = data.curves;
+const _errs26 = errors;
+if(errors === _errs26){
+if(Array.isArray(data14)){
+var valid4 = true;
+const len1 = data14.length;
+for(let i1=0; i1<len1; i1++){
+let data15 = data14[i1];
+const _errs28 = errors;
+if(errors === _errs28){
+if(data15 && typeof data15 == "object" && !Array.isArray(data15)){
+let missing3;
+if((((((data15.input === undefined) && (missing3 = "input")) || ((data15.others === undefined) && (missing3 = "others"))) || ((data15.range === undefined) && (missing3 = "range"))) || ((data15.x === undefined) && (missing3 = "x"))) || ((data15.p === undefined) && (missing3 = "p"))){
+validate155.errors = [{instancePath:instancePath+"/curves/" + i1,schemaPath:"#/properties/curves/items/required",keyword:"required",params:{missingProperty: missing3},message:"must have required property '"+missing3+"'"}];
+return false;
+}
+else {
+const _errs30 = errors;
+for(const key3 in data15){
+if(!(((((key3 === "input") || (key3 === "others")) || (key3 === "range")) || (key3 === "x")) || (key3 === "p"))){
+validate155.errors = [{instancePath:instancePath+"/curves/" + i1,schemaPath:"#/properties/curves/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties"}];
+return false;
+break;
+}
+}
+if(_errs30 === errors){
+if(data15.input !== undefined){
+const _errs31 = errors;
+if(typeof data15.input !== "string"){
+validate155.errors = [{instancePath:instancePath+"/curves/" + i1+"/input",schemaPath:"#/properties/curves/items/properties/input/type",keyword:"type",params:{type: "string"},message:"must be string"}];
+return false;
+}
+var valid5 = _errs31 === errors;
+}
+else {
+var valid5 = true;
+}
+if(valid5){
+if(data15.others !== undefined){
+let data17 = data15.others;
+const _errs33 = errors;
+if(errors === _errs33){
+if(data17 && typeof data17 == "object" && !Array.isArray(data17)){
+for(const key4 in data17){
+let data18 = data17[key4];
+const _errs36 = errors;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+validate155.errors = [{instancePath:instancePath+"/curves/" + i1+"/others/" + key4.replace(/~/g, "~0").replace(/\//g, "~1"),schemaPath:"#/properties/curves/items/properties/others/additionalProperties/type",keyword:"type",params:{type: "number"},message:"must be number"}];
+return false;
+}
+var valid6 = _errs36 === errors;
+if(!valid6){
+break;
+}
+}
+}
+else {
+validate155.errors = [{instancePath:instancePath+"/curves/" + i1+"/others",schemaPath:"#/properties/curves/items/properties/others/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid5 = _errs33 === errors;
+}
+else {
+var valid5 = true;
+}
+if(valid5){
+if(data15.range !== undefined){
+const _errs38 = errors;
+if(!(validate131(data15.range, {instancePath:instancePath+"/curves/" + i1+"/range",parentData:data15,parentDataProperty:"range",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate131.errors : vErrors.concat(validate131.errors);
+errors = vErrors.length;
+}
+var valid5 = _errs38 === errors;
+}
+else {
+var valid5 = true;
+}
+if(valid5){
+if(data15.x !== undefined){
+const _errs39 = errors;
+if(!(validate134(data15.x, {instancePath:instancePath+"/curves/" + i1+"/x",parentData:data15,parentDataProperty:"x",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate134.errors : vErrors.concat(validate134.errors);
+errors = vErrors.length;
+}
+var valid5 = _errs39 === errors;
+}
+else {
+var valid5 = true;
+}
+if(valid5){
+if(data15.p !== undefined){
+const _errs40 = errors;
+if(!(validate121(data15.p, {instancePath:instancePath+"/curves/" + i1+"/p",parentData:data15,parentDataProperty:"p",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate121.errors : vErrors.concat(validate121.errors);
+errors = vErrors.length;
+}
+var valid5 = _errs40 === errors;
+}
+else {
+var valid5 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+validate155.errors = [{instancePath:instancePath+"/curves/" + i1,schemaPath:"#/properties/curves/items/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+var valid4 = _errs28 === errors;
+if(!valid4){
+break;
+}
+}
+}
+else {
+validate155.errors = [{instancePath:instancePath+"/curves",schemaPath:"#/properties/curves/type",keyword:"type",params:{type: "array"},message:"must be array"}];
+return false;
+}
+}
+var valid0 = _errs26 === errors;
+}
+else {
+var valid0 = true;
+}
+if(valid0){
+if(data.curvesLeftOut !== undefined){
+const _errs41 = errors;
+if(!(validate55(data.curvesLeftOut, {instancePath:instancePath+"/curvesLeftOut",parentData:data,parentDataProperty:"curvesLeftOut",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs41 === errors;
+}
+else {
+var valid0 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+validate155.errors = [{instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object"}];
+return false;
+}
+}
+validate155.errors = vErrors;
+return errors === 0;
+}
+validate155.evaluated = {"props":true,"dynamicProps":false,"dynamicItems":false};
 
 
 function validate61(data, {instancePath="", parentData, parentDataProperty, rootData=data, dynamicAnchors={}}={}){
@@ -2913,118 +4095,20 @@ break;
 }
 if(_errs40 === errors){
 if(data18.train_rmse !== undefined){
+let data20 = data18.train_rmse;
 const _errs48 = errors;
-if(!(validate68(data18.train_rmse, {instancePath:instancePath+"/metrics/train_rmse",parentData:data18,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs48 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.holdout_rmse !== undefined){
 const _errs49 = errors;
-if(!(validate68(data18.holdout_rmse, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data18,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs49 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.train_mae !== undefined){
+let valid11 = false;
 const _errs50 = errors;
-if(!(validate68(data18.train_mae, {instancePath:instancePath+"/metrics/train_mae",parentData:data18,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+if(!(validate68(data20, {instancePath:instancePath+"/metrics/train_rmse",parentData:data18,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid10 = _errs50 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.holdout_mae !== undefined){
+var _valid2 = _errs50 === errors;
+valid11 = valid11 || _valid2;
 const _errs51 = errors;
-if(!(validate68(data18.holdout_mae, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data18,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs51 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.train_r2 !== undefined){
-const _errs52 = errors;
-if(!(validate68(data18.train_r2, {instancePath:instancePath+"/metrics/train_r2",parentData:data18,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs52 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.holdout_r2 !== undefined){
-const _errs53 = errors;
-if(!(validate68(data18.holdout_r2, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data18,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs53 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.gap_ratio !== undefined){
-const _errs54 = errors;
-if(!(validate68(data18.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data18,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs54 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.params_per_sample !== undefined){
-const _errs55 = errors;
-if(!(validate68(data18.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data18,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs55 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.max_std_coefficient !== undefined){
-const _errs56 = errors;
-if(!(validate68(data18.max_std_coefficient, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data18,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs56 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.max_std_coefficient_column !== undefined){
-let data29 = data18.max_std_coefficient_column;
-const _errs57 = errors;
-if((typeof data29 !== "string") && (data29 !== null)){
-const err4 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
+if(data20 !== null){
+const err4 = {instancePath:instancePath+"/metrics/train_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/train_rmse/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3033,63 +4117,10 @@ vErrors.push(err4);
 }
 errors++;
 }
-var valid10 = _errs57 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.max_abs_coefficient !== undefined){
-const _errs59 = errors;
-if(!(validate68(data18.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data18,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs59 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.rank !== undefined){
-const _errs60 = errors;
-if(!(validate55(data18.rank, {instancePath:instancePath+"/metrics/rank",parentData:data18,parentDataProperty:"rank",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs60 === errors;
-}
-else {
-var valid10 = true;
-}
-if(valid10){
-if(data18.condition_number !== undefined){
-const _errs61 = errors;
-if(!(validate68(data18.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data18,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
-errors = vErrors.length;
-}
-var valid10 = _errs61 === errors;
-}
-else {
-var valid10 = true;
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-}
-else {
-const err5 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+var _valid2 = _errs51 === errors;
+valid11 = valid11 || _valid2;
+if(!valid11){
+const err5 = {instancePath:instancePath+"/metrics/train_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/train_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3098,16 +4129,447 @@ vErrors.push(err5);
 }
 errors++;
 }
+else {
+errors = _errs49;
+if(vErrors !== null){
+if(_errs49){
+vErrors.length = _errs49;
 }
-var _valid0 = _errs38 === errors;
-valid7 = valid7 || _valid0;
-if(!valid7){
-const err6 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs48 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.holdout_rmse !== undefined){
+let data21 = data18.holdout_rmse;
+const _errs53 = errors;
+const _errs54 = errors;
+let valid12 = false;
+const _errs55 = errors;
+if(!(validate68(data21, {instancePath:instancePath+"/metrics/holdout_rmse",parentData:data18,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid3 = _errs55 === errors;
+valid12 = valid12 || _valid3;
+const _errs56 = errors;
+if(data21 !== null){
+const err6 = {instancePath:instancePath+"/metrics/holdout_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_rmse/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
 vErrors = [err6];
 }
 else {
 vErrors.push(err6);
+}
+errors++;
+}
+var _valid3 = _errs56 === errors;
+valid12 = valid12 || _valid3;
+if(!valid12){
+const err7 = {instancePath:instancePath+"/metrics/holdout_rmse",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_rmse/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+else {
+errors = _errs54;
+if(vErrors !== null){
+if(_errs54){
+vErrors.length = _errs54;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs53 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.train_mae !== undefined){
+let data22 = data18.train_mae;
+const _errs58 = errors;
+const _errs59 = errors;
+let valid13 = false;
+const _errs60 = errors;
+if(!(validate68(data22, {instancePath:instancePath+"/metrics/train_mae",parentData:data18,parentDataProperty:"train_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid4 = _errs60 === errors;
+valid13 = valid13 || _valid4;
+const _errs61 = errors;
+if(data22 !== null){
+const err8 = {instancePath:instancePath+"/metrics/train_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/train_mae/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+var _valid4 = _errs61 === errors;
+valid13 = valid13 || _valid4;
+if(!valid13){
+const err9 = {instancePath:instancePath+"/metrics/train_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/train_mae/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+else {
+errors = _errs59;
+if(vErrors !== null){
+if(_errs59){
+vErrors.length = _errs59;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs58 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.holdout_mae !== undefined){
+let data23 = data18.holdout_mae;
+const _errs63 = errors;
+const _errs64 = errors;
+let valid14 = false;
+const _errs65 = errors;
+if(!(validate68(data23, {instancePath:instancePath+"/metrics/holdout_mae",parentData:data18,parentDataProperty:"holdout_mae",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid5 = _errs65 === errors;
+valid14 = valid14 || _valid5;
+const _errs66 = errors;
+if(data23 !== null){
+const err10 = {instancePath:instancePath+"/metrics/holdout_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_mae/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+var _valid5 = _errs66 === errors;
+valid14 = valid14 || _valid5;
+if(!valid14){
+const err11 = {instancePath:instancePath+"/metrics/holdout_mae",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_mae/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+else {
+errors = _errs64;
+if(vErrors !== null){
+if(_errs64){
+vErrors.length = _errs64;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs63 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.train_r2 !== undefined){
+let data24 = data18.train_r2;
+const _errs68 = errors;
+const _errs69 = errors;
+let valid15 = false;
+const _errs70 = errors;
+if(!(validate68(data24, {instancePath:instancePath+"/metrics/train_r2",parentData:data18,parentDataProperty:"train_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid6 = _errs70 === errors;
+valid15 = valid15 || _valid6;
+const _errs71 = errors;
+if(data24 !== null){
+const err12 = {instancePath:instancePath+"/metrics/train_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/train_r2/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+var _valid6 = _errs71 === errors;
+valid15 = valid15 || _valid6;
+if(!valid15){
+const err13 = {instancePath:instancePath+"/metrics/train_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/train_r2/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+else {
+errors = _errs69;
+if(vErrors !== null){
+if(_errs69){
+vErrors.length = _errs69;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs68 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.holdout_r2 !== undefined){
+let data25 = data18.holdout_r2;
+const _errs73 = errors;
+const _errs74 = errors;
+let valid16 = false;
+const _errs75 = errors;
+if(!(validate68(data25, {instancePath:instancePath+"/metrics/holdout_r2",parentData:data18,parentDataProperty:"holdout_r2",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid7 = _errs75 === errors;
+valid16 = valid16 || _valid7;
+const _errs76 = errors;
+if(data25 !== null){
+const err14 = {instancePath:instancePath+"/metrics/holdout_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_r2/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+var _valid7 = _errs76 === errors;
+valid16 = valid16 || _valid7;
+if(!valid16){
+const err15 = {instancePath:instancePath+"/metrics/holdout_r2",schemaPath:"#/properties/metrics/anyOf/1/properties/holdout_r2/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+else {
+errors = _errs74;
+if(vErrors !== null){
+if(_errs74){
+vErrors.length = _errs74;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs73 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.gap_ratio !== undefined){
+const _errs78 = errors;
+if(!(validate68(data18.gap_ratio, {instancePath:instancePath+"/metrics/gap_ratio",parentData:data18,parentDataProperty:"gap_ratio",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs78 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.params_per_sample !== undefined){
+const _errs79 = errors;
+if(!(validate68(data18.params_per_sample, {instancePath:instancePath+"/metrics/params_per_sample",parentData:data18,parentDataProperty:"params_per_sample",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs79 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.max_std_coefficient !== undefined){
+let data28 = data18.max_std_coefficient;
+const _errs80 = errors;
+const _errs81 = errors;
+let valid17 = false;
+const _errs82 = errors;
+if(!(validate68(data28, {instancePath:instancePath+"/metrics/max_std_coefficient",parentData:data18,parentDataProperty:"max_std_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var _valid8 = _errs82 === errors;
+valid17 = valid17 || _valid8;
+const _errs83 = errors;
+if(data28 !== null){
+const err16 = {instancePath:instancePath+"/metrics/max_std_coefficient",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+var _valid8 = _errs83 === errors;
+valid17 = valid17 || _valid8;
+if(!valid17){
+const err17 = {instancePath:instancePath+"/metrics/max_std_coefficient",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+else {
+errors = _errs81;
+if(vErrors !== null){
+if(_errs81){
+vErrors.length = _errs81;
+}
+else {
+vErrors = null;
+}
+}
+}
+var valid10 = _errs80 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.max_std_coefficient_column !== undefined){
+let data29 = data18.max_std_coefficient_column;
+const _errs85 = errors;
+if((typeof data29 !== "string") && (data29 !== null)){
+const err18 = {instancePath:instancePath+"/metrics/max_std_coefficient_column",schemaPath:"#/properties/metrics/anyOf/1/properties/max_std_coefficient_column/type",keyword:"type",params:{type: schema22.properties.metrics.anyOf[1].properties.max_std_coefficient_column.type},message:"must be string,null"};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+var valid10 = _errs85 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.max_abs_coefficient !== undefined){
+const _errs87 = errors;
+if(!(validate68(data18.max_abs_coefficient, {instancePath:instancePath+"/metrics/max_abs_coefficient",parentData:data18,parentDataProperty:"max_abs_coefficient",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs87 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.rank !== undefined){
+const _errs88 = errors;
+if(!(validate55(data18.rank, {instancePath:instancePath+"/metrics/rank",parentData:data18,parentDataProperty:"rank",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs88 === errors;
+}
+else {
+var valid10 = true;
+}
+if(valid10){
+if(data18.condition_number !== undefined){
+const _errs89 = errors;
+if(!(validate68(data18.condition_number, {instancePath:instancePath+"/metrics/condition_number",parentData:data18,parentDataProperty:"condition_number",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+errors = vErrors.length;
+}
+var valid10 = _errs89 === errors;
+}
+else {
+var valid10 = true;
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+var _valid0 = _errs38 === errors;
+valid7 = valid7 || _valid0;
+if(!valid7){
+const err20 = {instancePath:instancePath+"/metrics",schemaPath:"#/properties/metrics/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
 }
 errors++;
 validate61.errors = vErrors;
@@ -3132,19 +4594,19 @@ var valid0 = true;
 if(valid0){
 if(data.coefficients !== undefined){
 let data33 = data.coefficients;
-const _errs62 = errors;
-if(errors === _errs62){
+const _errs90 = errors;
+if(errors === _errs90){
 if(Array.isArray(data33)){
-var valid11 = true;
+var valid18 = true;
 const len3 = data33.length;
 for(let i3=0; i3<len3; i3++){
-const _errs64 = errors;
+const _errs92 = errors;
 if(!(validate68(data33[i3], {instancePath:instancePath+"/coefficients/" + i3,parentData:data33,parentDataProperty:i3,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid11 = _errs64 === errors;
-if(!valid11){
+var valid18 = _errs92 === errors;
+if(!valid18){
 break;
 }
 }
@@ -3154,7 +4616,7 @@ validate61.errors = [{instancePath:instancePath+"/coefficients",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs62 === errors;
+var valid0 = _errs90 === errors;
 }
 else {
 var valid0 = true;
@@ -3162,86 +4624,86 @@ var valid0 = true;
 if(valid0){
 if(data.shipped !== undefined){
 let data35 = data.shipped;
-const _errs65 = errors;
-const _errs66 = errors;
-let valid12 = false;
-const _errs67 = errors;
+const _errs93 = errors;
+const _errs94 = errors;
+let valid19 = false;
+const _errs95 = errors;
 if(data35 !== null){
-const err7 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err21 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err7];
+vErrors = [err21];
 }
 else {
-vErrors.push(err7);
+vErrors.push(err21);
 }
 errors++;
 }
-var _valid2 = _errs67 === errors;
-valid12 = valid12 || _valid2;
-const _errs69 = errors;
-if(errors === _errs69){
+var _valid9 = _errs95 === errors;
+valid19 = valid19 || _valid9;
+const _errs97 = errors;
+if(errors === _errs97){
 if(data35 && typeof data35 == "object" && !Array.isArray(data35)){
 let missing4;
 if((((data35.train_rmse === undefined) && (missing4 = "train_rmse")) || ((data35.holdout_rmse === undefined) && (missing4 = "holdout_rmse"))) || ((data35.max_coefficient_difference === undefined) && (missing4 = "max_coefficient_difference"))){
-const err8 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
+const err22 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/required",keyword:"required",params:{missingProperty: missing4},message:"must have required property '"+missing4+"'"};
 if(vErrors === null){
-vErrors = [err8];
+vErrors = [err22];
 }
 else {
-vErrors.push(err8);
+vErrors.push(err22);
 }
 errors++;
 }
 else {
-const _errs71 = errors;
+const _errs99 = errors;
 for(const key5 in data35){
 if(!(((key5 === "train_rmse") || (key5 === "holdout_rmse")) || (key5 === "max_coefficient_difference"))){
-const err9 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
+const err23 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties"};
 if(vErrors === null){
-vErrors = [err9];
+vErrors = [err23];
 }
 else {
-vErrors.push(err9);
+vErrors.push(err23);
 }
 errors++;
 break;
 }
 }
-if(_errs71 === errors){
+if(_errs99 === errors){
 if(data35.train_rmse !== undefined){
-const _errs72 = errors;
+const _errs100 = errors;
 if(!(validate68(data35.train_rmse, {instancePath:instancePath+"/shipped/train_rmse",parentData:data35,parentDataProperty:"train_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid13 = _errs72 === errors;
+var valid20 = _errs100 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
-if(valid13){
+if(valid20){
 if(data35.holdout_rmse !== undefined){
-const _errs73 = errors;
+const _errs101 = errors;
 if(!(validate68(data35.holdout_rmse, {instancePath:instancePath+"/shipped/holdout_rmse",parentData:data35,parentDataProperty:"holdout_rmse",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid13 = _errs73 === errors;
+var valid20 = _errs101 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
-if(valid13){
+if(valid20){
 if(data35.max_coefficient_difference !== undefined){
-const _errs74 = errors;
+const _errs102 = errors;
 if(!(validate68(data35.max_coefficient_difference, {instancePath:instancePath+"/shipped/max_coefficient_difference",parentData:data35,parentDataProperty:"max_coefficient_difference",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
-var valid13 = _errs74 === errors;
+var valid20 = _errs102 === errors;
 }
 else {
-var valid13 = true;
+var valid20 = true;
 }
 }
 }
@@ -3249,42 +4711,42 @@ var valid13 = true;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+const err24 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
 if(vErrors === null){
-vErrors = [err10];
+vErrors = [err24];
 }
 else {
-vErrors.push(err10);
+vErrors.push(err24);
 }
 errors++;
 }
 }
-var _valid2 = _errs69 === errors;
-valid12 = valid12 || _valid2;
-if(!valid12){
-const err11 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid9 = _errs97 === errors;
+valid19 = valid19 || _valid9;
+if(!valid19){
+const err25 = {instancePath:instancePath+"/shipped",schemaPath:"#/properties/shipped/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err11];
+vErrors = [err25];
 }
 else {
-vErrors.push(err11);
+vErrors.push(err25);
 }
 errors++;
 validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs66;
+errors = _errs94;
 if(vErrors !== null){
-if(_errs66){
-vErrors.length = _errs66;
+if(_errs94){
+vErrors.length = _errs94;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs65 === errors;
+var valid0 = _errs93 === errors;
 }
 else {
 var valid0 = true;
@@ -3292,8 +4754,8 @@ var valid0 = true;
 if(valid0){
 if(data.target_scale !== undefined){
 let data39 = data.target_scale;
-const _errs75 = errors;
-if(errors === _errs75){
+const _errs103 = errors;
+if(errors === _errs103){
 if(data39 && typeof data39 == "object" && !Array.isArray(data39)){
 let missing5;
 if((((((data39.transform === undefined) && (missing5 = "transform")) || ((data39.limits_scale === undefined) && (missing5 = "limits_scale"))) || ((data39.back_transform === undefined) && (missing5 = "back_transform"))) || ((data39.original === undefined) && (missing5 = "original"))) || ((data39.transformed === undefined) && (missing5 = "transformed"))){
@@ -3301,7 +4763,7 @@ validate61.errors = [{instancePath:instancePath+"/target_scale",schemaPath:"#/pr
 return false;
 }
 else {
-const _errs77 = errors;
+const _errs105 = errors;
 for(const key6 in data39){
 if(!(((((key6 === "transform") || (key6 === "limits_scale")) || (key6 === "back_transform")) || (key6 === "original")) || (key6 === "transformed"))){
 validate61.errors = [{instancePath:instancePath+"/target_scale",schemaPath:"#/properties/target_scale/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties"}];
@@ -3309,68 +4771,68 @@ return false;
 break;
 }
 }
-if(_errs77 === errors){
+if(_errs105 === errors){
 if(data39.transform !== undefined){
 let data40 = data39.transform;
-const _errs78 = errors;
+const _errs106 = errors;
 if(!(((data40 === "log") || (data40 === "log1p")) || (data40 === "sqrt"))){
 validate61.errors = [{instancePath:instancePath+"/target_scale/transform",schemaPath:"#/properties/target_scale/properties/transform/enum",keyword:"enum",params:{allowedValues: schema22.properties.target_scale.properties.transform.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
-var valid14 = _errs78 === errors;
+var valid21 = _errs106 === errors;
 }
 else {
-var valid14 = true;
+var valid21 = true;
 }
-if(valid14){
+if(valid21){
 if(data39.limits_scale !== undefined){
 let data41 = data39.limits_scale;
-const _errs79 = errors;
+const _errs107 = errors;
 if(!((data41 === "original") || (data41 === "transformed"))){
 validate61.errors = [{instancePath:instancePath+"/target_scale/limits_scale",schemaPath:"#/properties/target_scale/properties/limits_scale/enum",keyword:"enum",params:{allowedValues: schema22.properties.target_scale.properties.limits_scale.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
-var valid14 = _errs79 === errors;
+var valid21 = _errs107 === errors;
 }
 else {
-var valid14 = true;
+var valid21 = true;
 }
-if(valid14){
+if(valid21){
 if(data39.back_transform !== undefined){
 let data42 = data39.back_transform;
-const _errs80 = errors;
+const _errs108 = errors;
 if(!(((data42 === "exp") || (data42 === "expm1")) || (data42 === "square"))){
 validate61.errors = [{instancePath:instancePath+"/target_scale/back_transform",schemaPath:"#/properties/target_scale/properties/back_transform/enum",keyword:"enum",params:{allowedValues: schema22.properties.target_scale.properties.back_transform.enum},message:"must be equal to one of the allowed values"}];
 return false;
 }
-var valid14 = _errs80 === errors;
+var valid21 = _errs108 === errors;
 }
 else {
-var valid14 = true;
+var valid21 = true;
 }
-if(valid14){
+if(valid21){
 if(data39.original !== undefined){
-const _errs81 = errors;
+const _errs109 = errors;
 if(!(validate86(data39.original, {instancePath:instancePath+"/target_scale/original",parentData:data39,parentDataProperty:"original",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid14 = _errs81 === errors;
+var valid21 = _errs109 === errors;
 }
 else {
-var valid14 = true;
+var valid21 = true;
 }
-if(valid14){
+if(valid21){
 if(data39.transformed !== undefined){
-const _errs82 = errors;
+const _errs110 = errors;
 if(!(validate86(data39.transformed, {instancePath:instancePath+"/target_scale/transformed",parentData:data39,parentDataProperty:"transformed",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
-var valid14 = _errs82 === errors;
+var valid21 = _errs110 === errors;
 }
 else {
-var valid14 = true;
+var valid21 = true;
 }
 }
 }
@@ -3384,7 +4846,7 @@ validate61.errors = [{instancePath:instancePath+"/target_scale",schemaPath:"#/pr
 return false;
 }
 }
-var valid0 = _errs75 === errors;
+var valid0 = _errs103 === errors;
 }
 else {
 var valid0 = true;
@@ -3392,19 +4854,19 @@ var valid0 = true;
 if(valid0){
 if(data.checks !== undefined){
 let data45 = data.checks;
-const _errs83 = errors;
-if(errors === _errs83){
+const _errs111 = errors;
+if(errors === _errs111){
 if(Array.isArray(data45)){
-var valid15 = true;
+var valid22 = true;
 const len4 = data45.length;
 for(let i4=0; i4<len4; i4++){
-const _errs85 = errors;
+const _errs113 = errors;
 if(!(validate99(data45[i4], {instancePath:instancePath+"/checks/" + i4,parentData:data45,parentDataProperty:i4,rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate99.errors : vErrors.concat(validate99.errors);
 errors = vErrors.length;
 }
-var valid15 = _errs85 === errors;
-if(!valid15){
+var valid22 = _errs113 === errors;
+if(!valid22){
 break;
 }
 }
@@ -3414,19 +4876,19 @@ validate61.errors = [{instancePath:instancePath+"/checks",schemaPath:"#/properti
 return false;
 }
 }
-var valid0 = _errs83 === errors;
+var valid0 = _errs111 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.base !== undefined){
-const _errs86 = errors;
+const _errs114 = errors;
 if(!(validate105(data.base, {instancePath:instancePath+"/base",parentData:data,parentDataProperty:"base",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate105.errors : vErrors.concat(validate105.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs86 === errors;
+var valid0 = _errs114 === errors;
 }
 else {
 var valid0 = true;
@@ -3434,209 +4896,209 @@ var valid0 = true;
 if(valid0){
 if(data.error !== undefined){
 let data48 = data.error;
-const _errs87 = errors;
-const _errs88 = errors;
-let valid16 = false;
-const _errs89 = errors;
+const _errs115 = errors;
+const _errs116 = errors;
+let valid23 = false;
+const _errs117 = errors;
 if(data48 !== null){
-const err12 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err26 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/0/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err12];
+vErrors = [err26];
 }
 else {
-vErrors.push(err12);
+vErrors.push(err26);
 }
 errors++;
 }
-var _valid3 = _errs89 === errors;
-valid16 = valid16 || _valid3;
-const _errs91 = errors;
-if(errors === _errs91){
+var _valid10 = _errs117 === errors;
+valid23 = valid23 || _valid10;
+const _errs119 = errors;
+if(errors === _errs119){
 if(data48 && typeof data48 == "object" && !Array.isArray(data48)){
 let missing6;
 if(((((data48.message === undefined) && (missing6 = "message")) || ((data48.file === undefined) && (missing6 = "file"))) || ((data48.line === undefined) && (missing6 = "line"))) || ((data48.code === undefined) && (missing6 = "code"))){
-const err13 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing6},message:"must have required property '"+missing6+"'"};
+const err27 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/required",keyword:"required",params:{missingProperty: missing6},message:"must have required property '"+missing6+"'"};
 if(vErrors === null){
-vErrors = [err13];
+vErrors = [err27];
 }
 else {
-vErrors.push(err13);
+vErrors.push(err27);
 }
 errors++;
 }
 else {
-const _errs93 = errors;
+const _errs121 = errors;
 for(const key7 in data48){
 if(!(((((key7 === "message") || (key7 === "file")) || (key7 === "line")) || (key7 === "column")) || (key7 === "code"))){
-const err14 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key7},message:"must NOT have additional properties"};
+const err28 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key7},message:"must NOT have additional properties"};
 if(vErrors === null){
-vErrors = [err14];
+vErrors = [err28];
 }
 else {
-vErrors.push(err14);
+vErrors.push(err28);
 }
 errors++;
 break;
 }
 }
-if(_errs93 === errors){
+if(_errs121 === errors){
 if(data48.message !== undefined){
-const _errs94 = errors;
+const _errs122 = errors;
 if(typeof data48.message !== "string"){
-const err15 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
+const err29 = {instancePath:instancePath+"/error/message",schemaPath:"#/properties/error/anyOf/1/properties/message/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
-vErrors = [err15];
+vErrors = [err29];
 }
 else {
-vErrors.push(err15);
+vErrors.push(err29);
 }
 errors++;
 }
-var valid17 = _errs94 === errors;
+var valid24 = _errs122 === errors;
 }
 else {
-var valid17 = true;
+var valid24 = true;
 }
-if(valid17){
+if(valid24){
 if(data48.file !== undefined){
 let data50 = data48.file;
-const _errs96 = errors;
+const _errs124 = errors;
 if((typeof data50 !== "string") && (data50 !== null)){
-const err16 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
+const err30 = {instancePath:instancePath+"/error/file",schemaPath:"#/properties/error/anyOf/1/properties/file/type",keyword:"type",params:{type: schema22.properties.error.anyOf[1].properties.file.type},message:"must be string,null"};
 if(vErrors === null){
-vErrors = [err16];
+vErrors = [err30];
 }
 else {
-vErrors.push(err16);
+vErrors.push(err30);
 }
 errors++;
 }
-var valid17 = _errs96 === errors;
+var valid24 = _errs124 === errors;
 }
 else {
-var valid17 = true;
+var valid24 = true;
 }
-if(valid17){
+if(valid24){
 if(data48.line !== undefined){
 let data51 = data48.line;
-const _errs98 = errors;
-const _errs99 = errors;
-let valid18 = false;
-const _errs100 = errors;
+const _errs126 = errors;
+const _errs127 = errors;
+let valid25 = false;
+const _errs128 = errors;
 if(!(validate101(data51, {instancePath:instancePath+"/error/line",parentData:data48,parentDataProperty:"line",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
-var _valid4 = _errs100 === errors;
-valid18 = valid18 || _valid4;
-const _errs101 = errors;
+var _valid11 = _errs128 === errors;
+valid25 = valid25 || _valid11;
+const _errs129 = errors;
 if(data51 !== null){
-const err17 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err31 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err17];
+vErrors = [err31];
 }
 else {
-vErrors.push(err17);
+vErrors.push(err31);
 }
 errors++;
 }
-var _valid4 = _errs101 === errors;
-valid18 = valid18 || _valid4;
-if(!valid18){
-const err18 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid11 = _errs129 === errors;
+valid25 = valid25 || _valid11;
+if(!valid25){
+const err32 = {instancePath:instancePath+"/error/line",schemaPath:"#/properties/error/anyOf/1/properties/line/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err18];
+vErrors = [err32];
 }
 else {
-vErrors.push(err18);
+vErrors.push(err32);
 }
 errors++;
 }
 else {
-errors = _errs99;
+errors = _errs127;
 if(vErrors !== null){
-if(_errs99){
-vErrors.length = _errs99;
+if(_errs127){
+vErrors.length = _errs127;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid17 = _errs98 === errors;
+var valid24 = _errs126 === errors;
 }
 else {
-var valid17 = true;
+var valid24 = true;
 }
-if(valid17){
+if(valid24){
 if(data48.column !== undefined){
 let data52 = data48.column;
-const _errs103 = errors;
-const _errs104 = errors;
-let valid19 = false;
-const _errs105 = errors;
+const _errs131 = errors;
+const _errs132 = errors;
+let valid26 = false;
+const _errs133 = errors;
 if(!(validate101(data52, {instancePath:instancePath+"/error/column",parentData:data48,parentDataProperty:"column",rootData,dynamicAnchors}))){
 vErrors = vErrors === null ? validate101.errors : vErrors.concat(validate101.errors);
 errors = vErrors.length;
 }
-var _valid5 = _errs105 === errors;
-valid19 = valid19 || _valid5;
-const _errs106 = errors;
+var _valid12 = _errs133 === errors;
+valid26 = valid26 || _valid12;
+const _errs134 = errors;
 if(data52 !== null){
-const err19 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
+const err33 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf/1/type",keyword:"type",params:{type: "null"},message:"must be null"};
 if(vErrors === null){
-vErrors = [err19];
+vErrors = [err33];
 }
 else {
-vErrors.push(err19);
+vErrors.push(err33);
 }
 errors++;
 }
-var _valid5 = _errs106 === errors;
-valid19 = valid19 || _valid5;
-if(!valid19){
-const err20 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid12 = _errs134 === errors;
+valid26 = valid26 || _valid12;
+if(!valid26){
+const err34 = {instancePath:instancePath+"/error/column",schemaPath:"#/properties/error/anyOf/1/properties/column/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err20];
+vErrors = [err34];
 }
 else {
-vErrors.push(err20);
+vErrors.push(err34);
 }
 errors++;
 }
 else {
-errors = _errs104;
+errors = _errs132;
 if(vErrors !== null){
-if(_errs104){
-vErrors.length = _errs104;
+if(_errs132){
+vErrors.length = _errs132;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid17 = _errs103 === errors;
+var valid24 = _errs131 === errors;
 }
 else {
-var valid17 = true;
+var valid24 = true;
 }
-if(valid17){
+if(valid24){
 if(data48.code !== undefined){
-const _errs108 = errors;
+const _errs136 = errors;
 if(typeof data48.code !== "string"){
-const err21 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
+const err35 = {instancePath:instancePath+"/error/code",schemaPath:"#/properties/error/anyOf/1/properties/code/type",keyword:"type",params:{type: "string"},message:"must be string"};
 if(vErrors === null){
-vErrors = [err21];
+vErrors = [err35];
 }
 else {
-vErrors.push(err21);
+vErrors.push(err35);
 }
 errors++;
 }
-var valid17 = _errs108 === errors;
+var valid24 = _errs136 === errors;
 }
 else {
-var valid17 = true;
+var valid24 = true;
 }
 }
 }
@@ -3646,57 +5108,70 @@ var valid17 = true;
 }
 }
 else {
-const err22 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
+const err36 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf/1/type",keyword:"type",params:{type: "object"},message:"must be object"};
 if(vErrors === null){
-vErrors = [err22];
+vErrors = [err36];
 }
 else {
-vErrors.push(err22);
+vErrors.push(err36);
 }
 errors++;
 }
 }
-var _valid3 = _errs91 === errors;
-valid16 = valid16 || _valid3;
-if(!valid16){
-const err23 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
+var _valid10 = _errs119 === errors;
+valid23 = valid23 || _valid10;
+if(!valid23){
+const err37 = {instancePath:instancePath+"/error",schemaPath:"#/properties/error/anyOf",keyword:"anyOf",params:{},message:"must match a schema in anyOf"};
 if(vErrors === null){
-vErrors = [err23];
+vErrors = [err37];
 }
 else {
-vErrors.push(err23);
+vErrors.push(err37);
 }
 errors++;
 validate61.errors = vErrors;
 return false;
 }
 else {
-errors = _errs88;
+errors = _errs116;
 if(vErrors !== null){
-if(_errs88){
-vErrors.length = _errs88;
+if(_errs116){
+vErrors.length = _errs116;
 }
 else {
 vErrors = null;
 }
 }
 }
-var valid0 = _errs87 === errors;
+var valid0 = _errs115 === errors;
 }
 else {
 var valid0 = true;
 }
 if(valid0){
 if(data.charts !== undefined){
-const _errs110 = errors;
-if(!(validate113(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
-vErrors = vErrors === null ? validate113.errors : vErrors.concat(validate113.errors);
+const _errs138 = errors;
+if(!(validate115(data.charts, {instancePath:instancePath+"/charts",parentData:data,parentDataProperty:"charts",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate115.errors : vErrors.concat(validate115.errors);
 errors = vErrors.length;
 }
-var valid0 = _errs110 === errors;
+var valid0 = _errs138 === errors;
 }
 else {
 var valid0 = true;
+}
+if(valid0){
+if(data.classifier_charts !== undefined){
+const _errs139 = errors;
+if(!(validate155(data.classifier_charts, {instancePath:instancePath+"/classifier_charts",parentData:data,parentDataProperty:"classifier_charts",rootData,dynamicAnchors}))){
+vErrors = vErrors === null ? validate155.errors : vErrors.concat(validate155.errors);
+errors = vErrors.length;
+}
+var valid0 = _errs139 === errors;
+}
+else {
+var valid0 = true;
+}
 }
 }
 }
