@@ -70,7 +70,12 @@ async function main(argv: string[]): Promise<number> {
         const { CLI_FETCH_HINT, evaluateBase } = await import('./action/base-commit.js');
         baseOptions = await evaluateBase(parsed.settings, parsed.base, { fetchHint: CLI_FETCH_HINT });
       }
-      const scale = { shard: parsed.shard, jobs: parsed.jobs ?? defaultJobs(), root: parsed.settings.root };
+      const scale = {
+        shard: parsed.shard,
+        jobs: parsed.jobs ?? defaultJobs(),
+        exactJobs: parsed.jobs !== null,
+        root: parsed.settings.root,
+      };
       result = await runPipeline(parsed.settings, createFsRepository(parsed.settings.root), { ...baseOptions, ...scale });
       failOn = parsed.settings.failOn;
     }

@@ -10,7 +10,7 @@ import type { FitResult } from '../fit/index.js';
 import { complementFactors, crossValidate, foldFactors, type CrossValidation, type FoldFactors } from './cross-validation.js';
 import { assignFolds, type Folds } from './folds.js';
 import { findLeakage, type Leakage } from './leakage.js';
-import { measureSwing, type Swing } from './swing.js';
+import { measureSwing, type Swing, type SwingOptions } from './swing.js';
 
 /** What the analyses are computed from. */
 export interface AnalysisInputs {
@@ -37,13 +37,16 @@ export class ModelAnalyses {
   #crossValidation: CrossValidation | undefined;
   #swing: Swing | undefined;
   #leakage: Leakage | undefined;
+  readonly #swingOptions: SwingOptions;
 
   /**
    * @param inputs the model's design, fit and rows
    * @param known results of the run's own passes; default none
+   * @param swingOptions options of the swing scan (e.g. `curveShare`); default none (every default)
    */
-  constructor(inputs: AnalysisInputs, known: KnownAnalyses = {}) {
+  constructor(inputs: AnalysisInputs, known: KnownAnalyses = {}, swingOptions: SwingOptions = {}) {
     this.#inputs = inputs;
+    this.#swingOptions = swingOptions;
     this.#folds = known.folds;
     this.#foldFactors = known.foldFactors;
     this.#crossValidation = known.crossValidation ?? undefined;
@@ -79,7 +82,7 @@ export class ModelAnalyses {
 
   /** Swing between and beyond the samples of the refit (see {@link measureSwing}). */
   swing(): Swing {
-    this.#swing ??= measureSwing(this.#inputs.design, this.#inputs.train, this.#inputs.fit.coefficients);
+    this.#swing ??= measureSwing(this.#inputs.design, this.#inputs.train, this.#inputs.fit.coefficients, this.#swingOptions);
     return this.#swing;
   }
 

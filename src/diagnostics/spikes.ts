@@ -84,18 +84,30 @@ function totalVariation(v: Float64Array, m: number): number {
   return s;
 }
 
-/** Total variation of the mean target over the input's distinct values in ascending order. */
+/**
+ * Total variation of the mean target over the input's distinct values in ascending order. Each
+ * value's targets are summed in row order (as a stable sort of the rows by value would visit
+ * them), in one pass with a table by value; then the distinct values are sorted.
+ */
 function targetVariation(x: Float64Array, y: Float64Array, n: number): number {
   const m = Math.min(n, SPIKE_MAX_ROWS);
-  const rows = Array.from({ length: m }, (_, t) => (m === n ? t : Math.floor((t * n) / m)));
-  rows.sort((a, b) => x[a] - x[b]);
-  const means: number[] = [];
-  for (let s = 0; s < m; ) {
-    let e = s;
-    let sum = 0;
-    while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
-    means.push(sum / (e - s));
-    s = e;
+  // Keyed by value: -0 and +0 are one key (SameValueZero), as they are one value to `===`.
+  const groups = new Map<number, { sum: number; count: number }>();
+  for (let t = 0; t < m; t++) {
+    const row = m === n ? t : Math.floor((t * n) / m);
+    let g = groups.get(x[row]);
+    if (g === undefined) {
+      g = { sum: 0, count: 0 };
+      groups.set(x[row], g);
+    }
+    g.sum += y[row];
+    g.count += 1;
   }
-  return totalVariation(Float64Array.from(means), means.length);
+  const values = Float64Array.from(groups.keys()).sort();
+  const means = new Float64Array(values.length);
+  for (let j = 0; j < values.length; j++) {
+    const g = groups.get(values[j]) as { sum: number; count: number };
+    means[j] = g.sum / g.count;
+  }
+  return totalVariation(means, means.length);
 }
