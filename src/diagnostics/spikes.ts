@@ -86,28 +86,39 @@ function totalVariation(v: Float64Array, m: number): number {
 
 /**
  * Total variation of the mean target over the input's distinct values in ascending order. Each
- * value's targets are summed in row order (as a stable sort of the rows by value would visit
- * them), in one pass with a table by value; then the distinct values are sorted.
+ * value's targets are summed in row order (as a stable sort of the rows by value visits them):
+ * the sampled values are sorted once (a native typed-array sort), and each row finds its value's
+ * slot by binary search.
  */
 function targetVariation(x: Float64Array, y: Float64Array, n: number): number {
   const m = Math.min(n, SPIKE_MAX_ROWS);
-  // Keyed by value: -0 and +0 are one key (SameValueZero), as they are one value to `===`.
-  const groups = new Map<number, { sum: number; count: number }>();
-  for (let t = 0; t < m; t++) {
-    const row = m === n ? t : Math.floor((t * n) / m);
-    let g = groups.get(x[row]);
-    if (g === undefined) {
-      g = { sum: 0, count: 0 };
-      groups.set(x[row], g);
+  const rows = new Int32Array(m);
+  for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
+  const values = new Float64Array(m);
+  for (let t = 0; t < m; t++) values[t] = x[rows[t]];
+  values.sort();
+  // Distinct values to the front (-0 and +0 are one value, as to `===`).
+  let count = 0;
+  for (let i = 0; i < m; i++) if (count === 0 || values[i] !== values[count - 1]) values[count++] = values[i];
+  return variationOfMeans(x, y, rows, values, count);
+}
+
+/** Sums the targets of `rows` by value slot (in row order), then the total variation of the slot means. */
+function variationOfMeans(x: Float64Array, y: Float64Array, rows: Int32Array, values: Float64Array, count: number): number {
+  const sums = new Float64Array(count);
+  const counts = new Float64Array(count);
+  for (let t = 0; t < rows.length; t++) {
+    const v = x[rows[t]];
+    let lo = 0;
+    let hi = count - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (values[mid] < v) lo = mid + 1;
+      else hi = mid;
     }
-    g.sum += y[row];
-    g.count += 1;
+    sums[lo] += y[rows[t]];
+    counts[lo] += 1;
   }
-  const values = Float64Array.from(groups.keys()).sort();
-  const means = new Float64Array(values.length);
-  for (let j = 0; j < values.length; j++) {
-    const g = groups.get(values[j]) as { sum: number; count: number };
-    means[j] = g.sum / g.count;
-  }
-  return totalVariation(means, means.length);
+  for (let j = 0; j < count; j++) sums[j] /= counts[j];
+  return totalVariation(sums, count);
 }

@@ -269,7 +269,7 @@ function marginGrid(lo: number, hi: number, reach: number, count: number): Float
  */
 function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array): Int32Array {
   const count = distinct.length - 1;
-  if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
+  if (count <= maxGaps) return allGaps(count);
   const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
   gapWidths(distinct, count, widths);
   const threshold = selectKth(widths, count - maxGaps);
@@ -279,6 +279,13 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
 }
 
 // One loop per function (see DEVELOPERS.md, "Writing hot loops").
+
+/** 0, 1, ..., count - 1. */
+function allGaps(count: number): Int32Array {
+  const out = new Int32Array(count);
+  for (let g = 0; g < count; g++) out[g] = g;
+  return out;
+}
 
 /** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
 function gapWidths(distinct: Float64Array, count: number, widths: Float64Array): void {
