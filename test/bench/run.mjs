@@ -377,7 +377,7 @@ async function runMonorepo(options, size, env, refMissing) {
       if (exact ? a !== b : relative > RELATIVE_TOLERANCE) status = 'fail';
     }
     return {
-      label: `${label} (largest over ${list.length} models)`,
+      label: `${label} (first model shown; largest difference of ${list.length})`,
       fitgate: example,
       reference: ref ? (ref[list[0].name]?.[refKey] ?? null) : null,
       relative: ref ? worst : null,
