@@ -10,10 +10,8 @@ import path from 'node:path';
 import { parseArgs } from './entries/args.js';
 import { errorMessage, InputError } from './core/errors.js';
 import type { ReportInput } from './result/merge.js';
-import { defaultJobs } from './run/pool.js';
 import { isFitgateWorker } from './run/worker-role.js';
-import { runPipeline } from './run/pipeline.js';
-import { createFsRepository } from './repo/fs-repository.js';
+import { runCheck } from './entries/check-run.js';
 import { writeReportStream } from './entries/report-file.js';
 import { jsonReport } from './report/json.js';
 import { escapeTerminal } from './report/escape.js';
@@ -65,13 +63,7 @@ async function main(argv: string[]): Promise<number> {
       result = mergeReports(readReports(parsed.reports), VERSION, { expect: parsed.expect });
       failOn = parsed.failOn;
     } else {
-      let baseOptions = {};
-      if (parsed.base !== null) {
-        const { CLI_FETCH_HINT, evaluateBase } = await import('./action/base-commit.js');
-        baseOptions = await evaluateBase(parsed.settings, parsed.base, { fetchHint: CLI_FETCH_HINT });
-      }
-      const scale = { shard: parsed.shard, jobs: parsed.jobs ?? defaultJobs(), root: parsed.settings.root };
-      result = await runPipeline(parsed.settings, createFsRepository(parsed.settings.root), { ...baseOptions, ...scale });
+      result = await runCheck(parsed.settings, { base: parsed.base, entry: 'command', shard: parsed.shard, jobs: parsed.jobs });
       failOn = parsed.settings.failOn;
     }
     const toFile = parsed.out !== null;

@@ -6,7 +6,7 @@
  */
 import * as core from '@actions/core';
 import * as github from '@actions/github';
-import { ACTION_FETCH_HINT, evaluateBase } from './action/base-commit.js';
+import { runCheck } from './entries/check-run.js';
 import { createCommentApi, upsertComment } from './action/comment.js';
 import { pullRequestOf } from './action/event.js';
 import { createReviewApi, hasSuggestions, repositoryPrefix, reviewSuggestions } from './action/review-suggestions.js';
@@ -15,10 +15,8 @@ import { errorMessage, InputError } from './core/errors.js';
 import { readInputs, type ActionInputs } from './entries/inputs.js';
 import type { PullRequestEvent } from './action/event.js';
 import type { Result } from './result/result.js';
-import { defaultJobs } from './run/pool.js';
 import { isFitgateWorker } from './run/worker-role.js';
 import { writeFileReports } from './entries/output-files.js';
-import { runPipeline } from './run/pipeline.js';
 import { OUTPUT_REFUSED } from './entries/safe-write.js';
 import { createFsRepository } from './repo/fs-repository.js';
 import { formatAnnotations, formatCommand, inputErrorAnnotation } from './report/annotations.js';
@@ -102,9 +100,7 @@ async function run(): Promise<void> {
     });
 
     // The base commit first, so that the head run can compare with it.
-    const baseOptions = pr?.baseSha ? await evaluateBase(inputs.settings, pr.baseSha, { fetchHint: ACTION_FETCH_HINT }) : {};
-    const scale = { shard: inputs.shard, jobs: defaultJobs(), root: inputs.settings.root };
-    const result = await runPipeline(inputs.settings, createFsRepository(inputs.settings.root), { ...baseOptions, ...scale });
+    const result = await runCheck(inputs.settings, { base: pr?.baseSha || null, entry: 'action', shard: inputs.shard, jobs: null });
 
     // Reporters: annotations and log, JSON report, file reports, job summary, comment. A file
     // that is refused (a link, a folder leading out of the workspace) fails the step as bad

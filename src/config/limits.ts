@@ -113,6 +113,23 @@ function assertThreshold(x: number): void {
   if (typeof x !== 'number' || !Number.isFinite(x)) throw new RangeError(`limit threshold must be a finite number, got ${String(x)}`);
 }
 
+/** The default < settings layers of each settings file, made once per run (every descriptor starts from them). */
+const RUN_LIMITS = new WeakMap<SettingsFile, Readonly<Record<string, Limit>>>();
+
+/** Built-in defaults < settings file, key by key; each Limit frozen, as every descriptor of the run shares it. */
+function runLimits(settings: SettingsFile): Readonly<Record<string, Limit>> {
+  let limits = RUN_LIMITS.get(settings);
+  if (limits === undefined) {
+    const merged: Record<string, Limit> = {};
+    for (const { key, defaultSpec, direction } of LIMIT_KEYS) merged[key] = Object.freeze(toLimit(defaultSpec, direction, 'default', null));
+    for (const [key, { spec }] of Object.entries(settings.limits))
+      merged[key] = Object.freeze(toLimit(spec, limitDirection(key), 'settings', null));
+    limits = Object.freeze(merged);
+    RUN_LIMITS.set(settings, limits);
+  }
+  return limits;
+}
+
 /**
  * Merges limits key by key: built-in default < settings file < descriptor. A layer that
  * sets a key replaces the whole limit of the layer below (no mixing of `warn` from one
@@ -126,9 +143,7 @@ export function mergeLimits(
   settings: SettingsFile,
   descriptorLimits: Record<string, { spec: LimitSpec; line: number }>,
 ): Record<string, Limit> {
-  const merged: Record<string, Limit> = {};
-  for (const { key, defaultSpec, direction } of LIMIT_KEYS) merged[key] = toLimit(defaultSpec, direction, 'default', null);
-  for (const [key, { spec }] of Object.entries(settings.limits)) merged[key] = toLimit(spec, limitDirection(key), 'settings', null);
+  const merged: Record<string, Limit> = { ...runLimits(settings) };
   for (const [key, { spec, line }] of Object.entries(descriptorLimits))
     merged[key] = toLimit(spec, limitDirection(key), 'descriptor', line);
   return merged;

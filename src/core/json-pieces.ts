@@ -41,10 +41,29 @@ export function* jsonPieces(value: unknown, options: JsonPiecesOptions = {}): Ge
   yield* piecesOf(v, 0, options.depth ?? 4);
 }
 
+/**
+ * `JSON.stringify(value, null, 2)` with every line after the first indented `level` more steps:
+ * the value stringified inside `level` one-element arrays (whose lines JSON.stringify indents
+ * itself), the arrays' own brackets cut off. One native call, no second pass over the text.
+ */
+function indented(value: unknown, level: number): string {
+  let wrapped = value;
+  for (let l = 0; l < level; l++) wrapped = [wrapped];
+  const text = JSON.stringify(wrapped, null, 2) ?? 'null';
+  if (level === 0) return text;
+  // Openers: `[` then a line break and one more step of indent per level; closers the mirror image.
+  let head = 0;
+  let tail = 0;
+  for (let l = 0; l < level; l++) {
+    head += 1 + 1 + INDENT.length * (l + 1);
+    tail += 1 + INDENT.length * l + 1;
+  }
+  return text.slice(head, text.length - tail);
+}
+
 function* piecesOf(value: unknown, level: number, depth: number): Generator<string> {
   if (value === null || typeof value !== 'object' || level >= depth) {
-    const text = JSON.stringify(value, null, 2) ?? 'null';
-    yield level === 0 ? text : text.replace(/\n/g, `\n${INDENT.repeat(level)}`);
+    yield indented(value, level);
     return;
   }
   const inner = INDENT.repeat(level + 1);

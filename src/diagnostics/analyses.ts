@@ -40,13 +40,16 @@ export class ModelAnalyses {
   #crossValidation: CrossValidation | undefined;
   #swing: Swing | undefined;
   #leakage: Leakage | undefined;
+  readonly #swingOptions: SwingOptions;
 
   /**
    * @param inputs the model's design, fit and rows
    * @param known results of the run's own passes; default none
+   * @param swingOptions options of the swing scan (e.g. `curveShare`); default none (every default)
    */
-  constructor(inputs: AnalysisInputs, known: KnownAnalyses = {}) {
+  constructor(inputs: AnalysisInputs, known: KnownAnalyses = {}, swingOptions: SwingOptions = {}) {
     this.#inputs = inputs;
+    this.#swingOptions = swingOptions;
     this.#folds = known.folds;
     this.#foldFactors = known.foldFactors;
     this.#crossValidation = known.crossValidation ?? undefined;
@@ -87,7 +90,7 @@ export class ModelAnalyses {
       this.#inputs.design,
       this.#inputs.train,
       this.#inputs.fit.coefficients,
-      back ? { backTransform: back } : {},
+      back ? { ...this.#swingOptions, backTransform: back } : this.#swingOptions,
     );
     return this.#swing;
   }

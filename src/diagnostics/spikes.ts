@@ -177,32 +177,43 @@ export function spikeIntervals(
 /**
  * The distinct values of x ascending (of an even-stride sample above {@link SPIKE_MAX_ROWS} rows)
  * and the mean y at each: the plain mean, or with row weights the weighted mean sum w y / sum w (a
- * value whose rows all weigh 0 is left out: it takes no part in the fit).
+ * value whose rows all weigh 0 is left out: it takes no part in the fit). Each value's targets are
+ * summed in row order (as a stable sort of the rows by value visits them): the sampled values are
+ * sorted once (a native typed-array sort), and each row finds its value's slot by binary search.
  */
 function meanTargets(x: Float64Array, y: Float64Array, n: number, weights?: Float64Array): { values: number[]; means: number[] } {
   const m = Math.min(n, SPIKE_MAX_ROWS);
-  const rows = Array.from({ length: m }, (_, t) => (m === n ? t : Math.floor((t * n) / m)));
-  rows.sort((a, b) => x[a] - x[b]);
+  const rows = new Int32Array(m);
+  for (let t = 0; t < m; t++) rows[t] = m === n ? t : Math.floor((t * n) / m);
+  const sorted = new Float64Array(m);
+  for (let t = 0; t < m; t++) sorted[t] = x[rows[t]];
+  sorted.sort();
+  // Distinct values to the front (-0 and +0 are one value, as to `===`).
+  let count = 0;
+  for (let i = 0; i < m; i++) if (count === 0 || sorted[i] !== sorted[count - 1]) sorted[count++] = sorted[i];
+  const sums = new Float64Array(count);
+  const totals = new Float64Array(count);
+  for (let t = 0; t < m; t++) {
+    const r = rows[t];
+    const v = x[r];
+    let lo = 0;
+    let hi = count - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (sorted[mid] < v) lo = mid + 1;
+      else hi = mid;
+    }
+    const w = weights === undefined ? 1 : weights[r];
+    sums[lo] += weights === undefined ? y[r] : w * y[r];
+    totals[lo] += w;
+  }
   const values: number[] = [];
   const means: number[] = [];
-  for (let s = 0; s < m; ) {
-    let e = s;
-    let sum = 0;
-    let total = 0;
-    if (weights === undefined) {
-      while (e < m && x[rows[e]] === x[rows[s]]) sum += y[rows[e++]];
-      total = e - s;
-    } else {
-      for (; e < m && x[rows[e]] === x[rows[s]]; e++) {
-        sum += weights[rows[e]] * y[rows[e]];
-        total += weights[rows[e]];
-      }
+  for (let j = 0; j < count; j++) {
+    if (Number.isFinite(sorted[j]) && totals[j] > 0) {
+      values.push(sorted[j]);
+      means.push(sums[j] / totals[j]);
     }
-    if (Number.isFinite(x[rows[s]]) && total > 0) {
-      values.push(x[rows[s]]);
-      means.push(sum / total);
-    }
-    s = e;
   }
   return { values, means };
 }

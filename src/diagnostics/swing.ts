@@ -45,6 +45,12 @@ export interface SwingOptions {
    * {@link SWING_CURVE_NUMBERS} points (at least {@link SWING_MIN_CURVE_POINTS} each).
    */
   maxCurvePoints?: number;
+  /**
+   * Fraction (0, 1] of the default `maxCurvePoints` kept when it is not given: a run of many
+   * models shrinks each model's curves (run/chart-data.ts, `chartShare`), to at least
+   * {@link SWING_SHARED_MIN_CURVE_POINTS} points. Default 1.
+   */
+  curveShare?: number;
   /** Curves kept in the result: those of the first inputs (every input is scanned). Default 12. */
   maxCurves?: number;
   /**
@@ -75,6 +81,9 @@ export const SWING_CURVE_NUMBERS = 800;
 
 /** Fewest points a kept curve is thinned to. */
 export const SWING_MIN_CURVE_POINTS = 100;
+
+/** Fewest points a kept curve is thinned to under a `curveShare` below 1. */
+export const SWING_SHARED_MIN_CURVE_POINTS = 25;
 
 /** One curve for charts: predictions along one input, the other inputs held at their medians. */
 export interface SwingCurve {
@@ -177,7 +186,7 @@ function gridFromSorted(
   fillUniform(inside, uniform, lo, hi);
   const w = fillGaps(inside, uniform, distinct, gaps, per);
   const beyond = marginGrid(lo, hi, margin * width, marginPoints);
-  return { inside: unique(inside, w), beyond: unique(beyond, beyond.length) };
+  return { inside: uniqueOfRuns(inside, uniform, w), beyond: unique(beyond, beyond.length) };
 }
 
 // The loops of the grid are functions of their own, each a loop and its return (see
@@ -188,6 +197,42 @@ function packDistinct(a: Float64Array, n: number): number {
   let count = 0;
   for (let i = 0; i < n; i++) if (count === 0 || a[i] !== a[count - 1]) a[count++] = a[i];
   return count;
+}
+
+/**
+ * {@link unique} of xs[0..length) when xs[0..split) and xs[split..length) are each ascending (the
+ * uniform points and the gap points): one linear merge instead of a sort, with the sort's result
+ * (-0 before +0). Falls back to {@link unique} when a run is out of order or holds a NaN.
+ */
+function uniqueOfRuns(xs: Float64Array, split: number, length: number): Float64Array {
+  if (!ascending(xs, 0, split) || !ascending(xs, split, length)) return unique(xs, length);
+  const out = new Float64Array(length);
+  mergeRuns(xs, split, length, out);
+  return out.slice(0, packDistinct(out, length));
+}
+
+/** True when xs[from..to) holds no NaN and is ascending in the order of the built-in sort. */
+function ascending(xs: Float64Array, from: number, to: number): boolean {
+  for (let i = from; i < to; i++) {
+    const v = xs[i];
+    if (Number.isNaN(v) || (i > from && sortsBefore(v, xs[i - 1]))) return false;
+  }
+  return true;
+}
+
+/** out[0..length) = the merge of the ascending runs xs[0..split) and xs[split..length) (equal values: the first run's first). */
+function mergeRuns(xs: Float64Array, split: number, length: number, out: Float64Array): void {
+  let i = 0;
+  let j = split;
+  for (let w = 0; w < length; w++) {
+    if (j >= length || (i < split && !sortsBefore(xs[j], xs[i]))) out[w] = xs[i++];
+    else out[w] = xs[j++];
+  }
+}
+
+/** a < b in the order of the built-in typed-array sort (-0 before +0). */
+function sortsBefore(a: number, b: number): boolean {
+  return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
 
 /** The distinct values of xs[0..length), ascending (xs is reordered). */
@@ -231,7 +276,7 @@ function marginGrid(lo: number, hi: number, reach: number, count: number): Float
  */
 function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array): Int32Array {
   const count = distinct.length - 1;
-  if (count <= maxGaps) return Int32Array.from({ length: count }, (_, g) => g);
+  if (count <= maxGaps) return allGaps(count);
   const widths = work !== undefined && work.length >= count ? work.subarray(0, count) : new Float64Array(count);
   gapWidths(distinct, count, widths);
   const threshold = selectKth(widths, count - maxGaps);
@@ -241,6 +286,13 @@ function widestGaps(distinct: Float64Array, maxGaps: number, work?: Float64Array
 }
 
 // One loop per function (see DEVELOPERS.md, "Writing hot loops").
+
+/** 0, 1, ..., count - 1. */
+function allGaps(count: number): Int32Array {
+  const out = new Int32Array(count);
+  for (let g = 0; g < count; g++) out[g] = g;
+  return out;
+}
 
 /** widths[g] = distinct[g + 1] - distinct[g] for g < count. */
 function gapWidths(distinct: Float64Array, count: number, widths: Float64Array): void {
@@ -538,12 +590,13 @@ export function planSwing(design: Design, train: Rows, options: SwingOptions = {
     segments = { rows: s, neighbours: kk, pointsPerSegment: perSegment };
   }
   const maxCurves = options.maxCurves ?? SWING_DEFAULTS.maxCurves;
+  const fullCurvePoints = Math.max(
+    SWING_MIN_CURVE_POINTS,
+    Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))),
+  );
+  const share = options.curveShare ?? 1;
   const maxCurvePoints =
-    options.maxCurvePoints ??
-    Math.max(
-      SWING_MIN_CURVE_POINTS,
-      Math.min(SWING_DEFAULTS.maxCurvePoints, Math.floor(SWING_CURVE_NUMBERS / Math.max(1, Math.min(d, maxCurves)))),
-    );
+    options.maxCurvePoints ?? (share >= 1 ? fullCurvePoints : Math.max(SWING_SHARED_MIN_CURVE_POINTS, Math.floor(fullCurvePoints * share)));
   const back = options.backTransform;
   return {
     band: back === undefined ? [ylo, yhi] : [inverseTarget(back, ylo), inverseTarget(back, yhi)],

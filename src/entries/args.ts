@@ -246,7 +246,11 @@ const COMMANDS: readonly CommandSpec[] = [
         description:
           'check only share K of N of the models (descriptors sorted by path, dealt round-robin); join the JSON reports with `fitgate merge`',
       },
-      { name: 'jobs', value: 'n', description: 'worker threads to run models on (default: one per core; 1 = serial)' },
+      {
+        name: 'jobs',
+        value: 'n',
+        description: "worker threads to run models on (default: one per core, when the models' work pays for starting them; 1 = serial)",
+      },
       { name: 'html', value: 'dir', description: 'also write the HTML report (index.html, self-contained) into this folder' },
       { name: 'sarif', value: 'file', description: 'also write a SARIF 2.1.0 log for code scanning to this file' },
       { name: 'junit', value: 'file', description: 'also write a JUnit XML report to this file' },

@@ -36,6 +36,59 @@ export const CURVE_MARGIN = 0.1;
 /** Significant digits kept in chart numbers (plenty for a picture, a third of the JSON size). */
 export const CHART_DIGITS = 7;
 
+/**
+ * Chart numbers a whole run keeps at most, over all its models, before each model's share
+ * shrinks ({@link chartShare}): a run of many models keeps its charts (and its report) near a
+ * fixed size instead of growing by a full model's charts per model.
+ */
+export const RUN_CHART_NUMBERS = 1_500_000;
+
+/**
+ * Chart numbers of one model at its full share, about: two series of {@link MAX_SERIES_NUMBERS},
+ * the fitted curve with the swing check's points on it and the swing curve itself. Runs of up to
+ * {@link RUN_CHART_NUMBERS} / this = 100 models keep every model's full charts.
+ */
+export const MODEL_CHART_NUMBERS = 15_000;
+
+/** Fewest numbers a point series keeps under a shrunk share (50 rows of a model of one input). */
+export const MIN_SERIES_NUMBERS = 250;
+
+/** Fewest grid points a curve keeps under a shrunk share. */
+export const MIN_CURVE_POINTS = 51;
+
+/**
+ * One model's share of a run's chart data (plain data: it crosses to worker threads).
+ * `fraction` is 1 for the full amounts; below 1 every bounded amount is scaled by it, down to its floor.
+ */
+export interface ChartShare {
+  /** min(1, RUN_CHART_NUMBERS / (models x MODEL_CHART_NUMBERS)), in (0, 1]. */
+  fraction: number;
+  /** Most numbers per point series: {@link MAX_SERIES_NUMBERS} x fraction, at least {@link MIN_SERIES_NUMBERS}. */
+  seriesNumbers: number;
+  /** Most grid points per curve: {@link CURVE_POINTS} x fraction, at least {@link MIN_CURVE_POINTS}. */
+  curvePoints: number;
+}
+
+/** The share of a model in a run of up to 100 models: every amount at its maximum. */
+export const FULL_CHART_SHARE: ChartShare = Object.freeze({ fraction: 1, seriesNumbers: MAX_SERIES_NUMBERS, curvePoints: CURVE_POINTS });
+
+/**
+ * Each model's share of the chart data of a run of `models` models (see {@link RUN_CHART_NUMBERS}):
+ * the full amounts up to 100 models; beyond, scaled by 100 / models down to the floors, so that
+ * the charts of 1,000 models take about as much as those of 100 (until the floors, near 2,000
+ * models of one input, after which each model adds its floor amounts).
+ * @param models models in the run (>= 0)
+ */
+export function chartShare(models: number): ChartShare {
+  const fraction = Math.min(1, RUN_CHART_NUMBERS / (Math.max(1, models) * MODEL_CHART_NUMBERS));
+  if (fraction >= 1) return FULL_CHART_SHARE;
+  return {
+    fraction,
+    seriesNumbers: Math.max(MIN_SERIES_NUMBERS, Math.floor(MAX_SERIES_NUMBERS * fraction)),
+    curvePoints: Math.max(MIN_CURVE_POINTS, Math.floor(CURVE_POINTS * fraction)),
+  };
+}
+
 /** The rows of one file as points. Arrays are in file order of the kept rows; non-finite values are null. */
 export interface PointSeries {
   /** Data rows in the file. */

@@ -35,11 +35,15 @@ export function withBaseCurves(
 ): ChartData {
   const base = baseline?.charts;
   if (!base || baseline.verdict === 'error') return charts;
+  // Curves are compared only on grids of the same size: a run of over 100 models shrinks each
+  // model's curves by the model count (result/chart-types.ts `chartShare`), which a pull request
+  // adding models changes; the columns and coefficients are compared whatever the grids.
+  const differ = (head: CurveData, other: CurveData): boolean => head.x.length === other.x.length && !same(head.y, other.y);
   const curvesDiffer =
-    (charts.fit !== null && base.fit !== null && !same(charts.fit.y, base.fit.y)) ||
+    (charts.fit !== null && base.fit !== null && differ(charts.fit, base.fit)) ||
     charts.partials.some((p) => {
       const b = base.partials.find((q) => q.input === p.input);
-      return b !== undefined && !same(p.y, b.y);
+      return b !== undefined && differ(p, b);
     });
   const changed = !same(head.columns, baseline.columns) || !same(head.coefficients, baseline.coefficients) || curvesDiffer;
   if (!changed) return charts;

@@ -19,6 +19,7 @@ import {
   CHART_DIGITS,
   CURVE_MARGIN,
   CURVE_POINTS,
+  FULL_CHART_SHARE,
   MAX_CHART_POINTS,
   MAX_PARTIAL_CURVES,
   MAX_SERIES_NUMBERS,
@@ -26,6 +27,7 @@ import {
   PARTIAL_CURVE_POINTS,
   type BandRegion,
   type ChartData,
+  type ChartShare,
   type CurveData,
   type FitCurveData,
   type PointSeries,
@@ -49,9 +51,12 @@ export function thinRows(n: number, max = MAX_CHART_POINTS): Int32Array {
   return Int32Array.from({ length: max }, (_, t) => Math.floor((t * n) / max));
 }
 
-/** Rows a series of a model with this many inputs keeps at most: {@link MAX_SERIES_NUMBERS} / (inputs + 4), at most `max`. */
-export function seriesPoints(inputs: number, max = MAX_CHART_POINTS): number {
-  return Math.max(1, Math.min(max, Math.floor(MAX_SERIES_NUMBERS / (inputs + 4))));
+/**
+ * Rows a series of a model with this many inputs keeps at most: `numbers` / (inputs + 4), at most `max`.
+ * @param numbers most numbers of the series; default {@link MAX_SERIES_NUMBERS} (less under a shrunk {@link ChartShare})
+ */
+export function seriesPoints(inputs: number, max = MAX_CHART_POINTS, numbers = MAX_SERIES_NUMBERS): number {
+  return Math.max(1, Math.min(max, Math.floor(numbers / (inputs + 4))));
 }
 
 /** Read from parts: the parts and each kept row's part (`files`, `file_index`); nothing for one file. */
@@ -62,8 +67,8 @@ function partIndex(data: ModelData, keep: Int32Array): { files?: string[]; file_
   return { files: parts.map((p) => p.file), file_index: Array.from(keep, (i) => index.get(placeOfLine(data, data.lines[i]).file) ?? 0) };
 }
 
-function series(data: ModelData, predictions: Float64Array, max: number): PointSeries {
-  const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max));
+function series(data: ModelData, predictions: Float64Array, max: number, numbers: number): PointSeries {
+  const keep = thinRows(data.rows, seriesPoints(data.inputs.length, max, numbers));
   const thinned = keep.length < data.rows;
   const pick = (col: ArrayLike<number>): (number | null)[] => Array.from(keep, (i) => chartNumber(col[i]));
   return {
@@ -280,8 +285,14 @@ function readSweep(checks: readonly CheckResult[]): SweepData | null {
  * @param model the fitted model (design, coefficients, data, predictions)
  * @param checks the model's check outcomes (swing and complexity details are read when present)
  * @param maxPoints most points per series; default {@link MAX_CHART_POINTS}
+ * @param share the model's share of the run's chart data (series numbers, curve points); default the full share
  */
-export function buildChartData(model: FittedModel, checks: readonly CheckResult[], maxPoints = MAX_CHART_POINTS): ChartData {
+export function buildChartData(
+  model: FittedModel,
+  checks: readonly CheckResult[],
+  maxPoints = MAX_CHART_POINTS,
+  share: ChartShare = FULL_CHART_SHARE,
+): ChartData {
   const { design, tables, metrics, fit, descriptor } = model;
   const { train, holdout } = tables;
   const inputs = [...design.inputs];
@@ -291,7 +302,7 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     const [lo, hi] = range(train.inputs[c], train.rows);
     if (hi > lo) spread++;
   }
-  const points = inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES));
+  const points = Math.min(share.curvePoints, inputs.length === 1 ? CURVE_POINTS : partialCurvePoints(Math.min(spread, MAX_PARTIAL_CURVES)));
 
   // One input: the curve over the scanned range with the band; several: partial curves.
   let fitCurve: FitCurveData | null = null;
@@ -353,11 +364,11 @@ export function buildChartData(model: FittedModel, checks: readonly CheckResult[
     target: descriptor.data.target,
     inputs,
     train: scale
-      ? series({ ...train, y: scale.originalRows.train.y }, scale.predictions.train, maxPoints)
-      : series(train, model.trainPredictions, maxPoints),
+      ? series({ ...train, y: scale.originalRows.train.y }, scale.predictions.train, maxPoints, share.seriesNumbers)
+      : series(train, model.trainPredictions, maxPoints, share.seriesNumbers),
     holdout: scale
-      ? series({ ...holdout, y: scale.originalRows.holdout.y }, scale.predictions.holdout, maxPoints)
-      : series(holdout, model.holdoutPredictions, maxPoints),
+      ? series({ ...holdout, y: scale.originalRows.holdout.y }, scale.predictions.holdout, maxPoints, share.seriesNumbers)
+      : series(holdout, model.holdoutPredictions, maxPoints, share.seriesNumbers),
     fit: fitCurve,
     partials,
     ...(partialsLeftOut > 0 ? { partialsLeftOut } : {}),

@@ -10,6 +10,7 @@ import { InputError } from '../core/errors.js';
 import { ModelAnalyses } from '../diagnostics/analyses.js';
 import type { ShippedScore } from '../diagnostics/shipped.js';
 import type { RepoReader } from '../repo/types.js';
+import { FULL_CHART_SHARE, MAX_CHART_POINTS, type ChartShare } from '../result/chart-types.js';
 import { jsonNumber, type ModelMetrics, type ModelResult, type ShippedMetrics } from '../result/result.js';
 import { compareWithBase, type BaseInput } from './base-comparison.js';
 import { withBaseCurves } from './base-curves.js';
@@ -70,6 +71,7 @@ function reportMetrics(model: FittedModel): ModelMetrics {
  * time limit become a model with verdict `error` (the run goes on).
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
  * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
+ * @param share the model's share of the run's chart data (result/chart-types.ts `chartShare`); default the full share
  */
 export async function evaluateModel(
   repo: RepoReader,
@@ -77,10 +79,11 @@ export async function evaluateModel(
   settings: SettingsFile,
   base?: BaseInput,
   deadline?: Deadline,
+  share: ChartShare = FULL_CHART_SHARE,
 ): Promise<ModelResult> {
   const within = deadline ?? new Deadline(settings.caps.maxModelSeconds * 1000);
   try {
-    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, base));
+    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, share, base));
   } catch (error) {
     if (!(error instanceof TimeLimitExceeded)) throw error;
     return errorResult(
@@ -92,7 +95,13 @@ export async function evaluateModel(
 }
 
 /** {@link evaluateModel} inside its deadline; TimeLimitExceeded passes through. */
-async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
+async function evaluateWithin(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  share: ChartShare,
+  base?: BaseInput,
+): Promise<ModelResult> {
   let model: FittedModel;
   try {
     if (descriptor.predictions) return await evaluatePredictions(repo, descriptor, settings, base);
@@ -127,6 +136,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
       ...(model.targetScale?.limitsScale === 'original' ? { backTransform: model.targetScale.transform } : {}),
     },
     { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation },
+    share.fraction < 1 ? { curveShare: share.fraction } : {},
   );
   const context: CheckContext = {
     descriptor,
@@ -172,7 +182,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
       })),
     },
     charts: withBaseCurves(
-      buildChartData(model, checks),
+      buildChartData(model, checks, MAX_CHART_POINTS, share),
       { columns: model.design.columnNames, coefficients: Array.from(model.fit.coefficients, jsonNumber) },
       context.baseline,
       base?.commit ?? '',

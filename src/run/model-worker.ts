@@ -19,10 +19,12 @@ import { evaluateModel, type BaseInput } from './evaluate.js';
 import { kernelNotes, recordKernelNotes } from '../kernels/index.js';
 import { createFsRepository } from '../repo/fs-repository.js';
 import type { RepoReader } from '../repo/types.js';
+import { FULL_CHART_SHARE, type ChartShare } from '../result/chart-types.js';
 import type { ModelResult } from '../result/result.js';
 import { errorResult, timeLimitError } from './error-result.js';
 import { runPool, serveTasks } from './pool.js';
 import { isFitgateWorker, WORKER_FLAG } from './worker-role.js';
+import { dataBytes, guessWork, largestFirst, workersThatPay } from './work-guess.js';
 
 /** What every model worker receives as `workerData`. */
 interface ModelWorkerData {
@@ -30,6 +32,8 @@ interface ModelWorkerData {
   /** Absolute repository root the worker reads from. */
   root: string;
   settings: SettingsFile;
+  /** Each model's share of the run's chart data. */
+  share: ChartShare;
 }
 
 /** One model to evaluate. */
@@ -70,13 +74,18 @@ export interface EvaluateModelsOptions {
    * when it is given (a reader in memory or on a git commit cannot cross threads). Default none.
    */
   root?: string;
+  /** True: min(jobs, models) workers whatever the guessed work. Default false (as many as the work pays for). */
+  exactJobs?: boolean;
   /** The base commit's outcomes to compare with. Default none. */
   base?: BaseInput;
+  /** Each model's share of the run's chart data (result/chart-types.ts `chartShare`). Default the full share. */
+  share?: ChartShare;
 }
 
 /**
  * Evaluates models, on worker threads when that is possible and worth it (more than one model,
- * `jobs` > 1, a disk root, and a JavaScript module file), serially otherwise.
+ * `jobs` > 1, a disk root, a JavaScript module file, and guessed work that pays for the workers:
+ * work-guess.ts, unless `exactJobs`), serially otherwise. Workers get the models largest guessed work first.
  * @param repo the repository reader (used by the serial path)
  * @param descriptors the models, in report order
  * @param settings the settings file
@@ -91,22 +100,28 @@ export async function evaluateModels(
 ): Promise<ModelResult[]> {
   const jobs = Math.min(options.jobs ?? 1, descriptors.length);
   const script = workerScript();
-  if (jobs <= 1 || options.root === undefined || script === null) {
+  const share = options.share ?? FULL_CHART_SHARE;
+  const serial = async (): Promise<ModelResult[]> => {
     const results: ModelResult[] = [];
-    for (const descriptor of descriptors) results.push(await evaluateModel(repo, descriptor, settings, options.base));
+    for (const descriptor of descriptors) results.push(await evaluateModel(repo, descriptor, settings, options.base, undefined, share));
     return results;
-  }
+  };
+  if (jobs <= 1 || options.root === undefined || script === null) return serial();
+  const works: number[] = [];
+  for (const descriptor of descriptors) works.push(guessWork(descriptor, await dataBytes(repo, descriptor)));
+  const workers = options.exactJobs === true ? jobs : workersThatPay(works, jobs);
+  if (workers <= 1) return serial();
   const base = options.base;
   const tasks: ModelTask[] = descriptors.map((descriptor) =>
     base ? { descriptor, baseline: base.matches.get(descriptor.file) ?? null, commit: base.commit } : { descriptor },
   );
-  const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings };
+  const data: ModelWorkerData = { [WORKER_FLAG]: true, root: options.root, settings, share };
   // The worker checks the model's time limit itself between stages; a model still running
   // HARD_STOP_GRACE_MS later is stuck in one step, and its thread is ended from here.
   const limitSeconds = settings.caps.maxModelSeconds;
   const replies = await runPool<ModelTask, ModelReply>(
     tasks,
-    { jobs, script, workerData: data },
+    { jobs: workers, script, workerData: data, order: largestFirst(works) },
     {
       ms: limitSeconds * 1000 + HARD_STOP_GRACE_MS,
       onTimeLimit: (task, elapsedMs) => ({
@@ -138,7 +153,7 @@ function startModelWorker(): void {
       task.baseline === undefined
         ? undefined
         : { matches: new Map(task.baseline === null ? [] : [[task.descriptor.file, task.baseline]]), commit: task.commit ?? '' };
-    const result = await evaluateModel(repo, task.descriptor, data.settings, base);
+    const result = await evaluateModel(repo, task.descriptor, data.settings, base, undefined, data.share);
     return { result, kernelNotes: kernelNotes() };
   });
 }

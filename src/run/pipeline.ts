@@ -11,6 +11,7 @@ import { kernelNotes } from '../kernels/index.js';
 import { matchBase, type BaseInput } from './base-comparison.js';
 import { errorResult } from './error-result.js';
 import { evaluateModels } from './model-worker.js';
+import { chartShare } from '../result/chart-types.js';
 import type { RepoReader } from '../repo/types.js';
 import { summarise, type ModelResult, type Result } from '../result/result.js';
 import type { Settings } from './settings.js';
@@ -43,6 +44,11 @@ export interface PipelineOptions {
   jobs?: number;
   /** Absolute repository root on disk for worker threads to read from. Default none (serial). */
   root?: string;
+  /**
+   * True: start min(jobs, models) workers whatever the work (a count the user named, `--jobs N`).
+   * Default false: as many as the guessed work pays for, at most `jobs` (run/work-guess.ts).
+   */
+  exactJobs?: boolean;
 }
 
 /**
@@ -89,7 +95,14 @@ export async function runPipeline(settings: Settings, repo: RepoReader, options:
     // A shard checks part of the models, so the base models of the other shards match nothing here.
     if (shard === null) for (const m of matching.unmatched) notes.push(removedNote(m));
   }
-  for (const model of await evaluateModels(repo, loaded, file, { jobs: options.jobs, root: options.root, base })) models.push(model);
+  for (const model of await evaluateModels(repo, loaded, file, {
+    jobs: options.jobs,
+    root: options.root,
+    exactJobs: options.exactJobs,
+    base,
+    share: chartShare(paths.length),
+  }))
+    models.push(model);
   if (shard) notes.push(`shard ${formatShard(shard)}: ${paths.length} model${paths.length === 1 ? '' : 's'} of this run's share`);
   // The row kernels' note when they had to fall back to JavaScript (here or on a worker thread).
   for (const note of kernelNotes()) if (!notes.includes(note)) notes.push(note);

@@ -26,6 +26,11 @@ export interface PoolOptions {
   script: string | URL;
   /** Plain data every worker receives as `workerData`. Default none. */
   workerData?: unknown;
+  /**
+   * The order tasks are handed out in, as indices into the tasks (each once), e.g. largest
+   * first; results still come back in task order. Default: task order.
+   */
+  order?: readonly number[];
 }
 
 /** A per-task time limit of {@link runPool}. */
@@ -92,6 +97,12 @@ export function runPool<T, R>(tasks: readonly T[], options: PoolOptions, limit?:
   const size = Math.min(Math.max(1, Math.floor(options.jobs)), tasks.length);
   const results = new Array<R>(tasks.length);
   if (tasks.length === 0) return Promise.resolve(results);
+  const order = options.order;
+  if (
+    order !== undefined &&
+    (order.length !== tasks.length || new Set(order).size !== tasks.length || !order.every((i) => i >= 0 && i < tasks.length))
+  )
+    return Promise.reject(new RangeError('runPool: `order` must list every task index once'));
   return new Promise<R[]>((resolve, reject) => {
     const workers = new Set<Worker>();
     let next = 0;
@@ -124,7 +135,8 @@ export function runPool<T, R>(tasks: readonly T[], options: PoolOptions, limit?:
       let timer: NodeJS.Timeout | undefined;
       const feed = (): void => {
         if (next >= tasks.length) return;
-        current = next++;
+        current = order === undefined ? next : order[next];
+        next++;
         const message: TaskMessage<T> = { index: current, task: tasks[current] };
         worker.postMessage(message);
       };

@@ -13,8 +13,15 @@
 // basis, scikit-learn LogisticRegression with the newton-cholesky solver, tol 1e-10, and its own
 // k-fold loop), whose `generate` command writes the data (python3 with numpy and pandas needed).
 //
+// MONO1000 and MONO200 are the many-models workloads (monorepo.mjs): 1,000 models of 1,000 training
+// rows and 200 of 2,000, one cubic polynomial term each, ridge 0.1, 5 contiguous folds, checked by
+// one `fitgate check --root REPO` process against ref_check.py's `main` looped over the same models
+// inside one Python process (ref-loop.py: the interpreter and imports paid once), with --loocv
+// because fitgate computes leave-one-out too. Figures are compared model by model; the table shows
+// the largest difference over the models.
+//
 // Options:
-//   --sizes S,M,L     which workloads (default all three)
+//   --sizes S,M,L     which workloads (default S, M, L, C, MONO1000, MONO200)
 //   --runs N          whole-process runs per tool and size, median reported (default 3)
 //   --data DIR        use DIR/S, DIR/M, DIR/L/{train,holdout}.csv (as gen_data.py writes them)
 //                     instead of generating data in JavaScript (gen-data.mjs)
@@ -36,6 +43,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { generate } from './gen-data.mjs';
 import { measure, median, memoryMethod } from './measure.mjs';
+import { buildMonorepo, MONOREPO_WORKLOADS } from './monorepo.mjs';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 
@@ -90,6 +98,8 @@ export const WORKLOADS = {
     memMiB: 256,
     task: 'classification',
   },
+  MONO1000: { ...MONOREPO_WORKLOADS.R1000, monorepo: true, wallRatio: 0.3, memRatio: 0.5, memMiB: null },
+  MONO200: { ...MONOREPO_WORKLOADS.R200, monorepo: true, wallRatio: 0.3, memRatio: 0.5, memMiB: null },
 };
 
 /** Classifier figures compared: [label, fitgate metrics key, reader of the reference's output]. */
@@ -118,7 +128,7 @@ const RELATIVE_TOLERANCE = 1e-6;
 
 function parseOptions(argv) {
   const o = {
-    sizes: ['S', 'M', 'L', 'C'],
+    sizes: ['S', 'M', 'L', 'C', 'MONO1000', 'MONO200'],
     runs: 3,
     data: null,
     work: path.join(os.tmpdir(), 'fitgate-bench'),
@@ -150,7 +160,7 @@ function parseOptions(argv) {
     else if (a === '--inherit-env') o.inheritEnv = true;
     else throw new Error(`unknown option ${a} (see the top of test/bench/run.mjs)`);
   }
-  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M, L or C`);
+  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M, L, C, MONO1000 or MONO200`);
   if (!(Number.isInteger(o.runs) && o.runs >= 1)) throw new Error('--runs must be a whole number >= 1');
   return o;
 }
@@ -236,6 +246,7 @@ function buildRepository(options) {
   writeFileSync(path.join(repo, 'fitgate.yml'), 'version: 1\nmodels:\n  - "models/*.model.yml"\n');
   const files = {};
   for (const size of options.sizes) {
+    if (WORKLOADS[size].monorepo) continue;
     const src = sourceData(options, size);
     const data = path.join(repo, 'data', size);
     mkdirSync(data, { recursive: true });
@@ -313,6 +324,86 @@ function compareFigures(fg, ref) {
   });
 }
 
+/**
+ * One many-models workload: fitgate over the whole repository (its JSON report to a file), then
+ * ref-loop.py over the same models, taking turns; figures compared model by model, the largest
+ * difference of each figure over the models reported.
+ */
+async function runMonorepo(options, size, env, refMissing) {
+  const w = WORKLOADS[size];
+  process.stderr.write(`${size}: building ${w.models} models of ${w.rows} rows (cached when built before)...\n`);
+  const { repo, list } = buildMonorepo(path.join(options.work, `mono-${size.toLowerCase()}`), w);
+  const out = path.join(options.work, `mono-${size.toLowerCase()}-report.json`);
+  const loop = path.join(root, 'test', 'bench', 'ref-loop.py');
+  const runs = { fitgate: [], reference: [] };
+  let refOut = null;
+  for (let r = 0; r < options.runs; r++) {
+    const fg = await measure(process.execPath, [options.cli, 'check', '--root', repo, '--format', 'json', '--out', out], {
+      cwd: repo,
+      okStatus: [0, 1],
+      env,
+    });
+    runs.fitgate.push(fg);
+    if (!refMissing) {
+      const args = [loop, '--reference', options.reference, '--list', path.join(repo, 'models.json'), '--root', repo];
+      args.push('--degree', String(w.degree), '--ridge', String(w.ridge), '--folds', String(w.folds), '--loocv');
+      const ref = await measure('/usr/bin/python3', args, { cwd: repo, env });
+      runs.reference.push(ref);
+      refOut = ref.stdout;
+    }
+    process.stderr.write(
+      `${size} run ${r + 1}/${options.runs}: fitgate ${fg.wall.toFixed(2)} s ${fg.peakMiB.toFixed(0)} MiB` +
+        (refMissing ? '\n' : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`),
+    );
+  }
+  const report = JSON.parse(readFileSync(out, 'utf8'));
+  const byName = new Map(report.models.map((m) => [m.name, m]));
+  const ref = refOut ? JSON.parse(refOut).models : null;
+  const figures = FIGURES.map(([label, fgKey, refKey, exact]) => {
+    let worst = 0;
+    let status = ref ? 'pass' : 'n/a';
+    let example = null;
+    for (const { name } of list) {
+      const a = byName.get(name)?.metrics?.[fgKey];
+      example ??= a ?? null;
+      if (!ref) continue;
+      const b = ref[name]?.[refKey];
+      if (typeof a !== 'number' || typeof b !== 'number') {
+        status = 'fail';
+        continue;
+      }
+      const relative = exact ? Math.abs(a - b) : Math.abs(a - b) / Math.max(Math.abs(b), Number.MIN_VALUE);
+      worst = Math.max(worst, relative);
+      if (exact ? a !== b : relative > RELATIVE_TOLERANCE) status = 'fail';
+    }
+    return {
+      label: `${label} (first model shown; largest difference of ${list.length})`,
+      fitgate: example,
+      reference: ref ? (ref[list[0].name]?.[refKey] ?? null) : null,
+      relative: ref ? worst : null,
+      status,
+    };
+  });
+  return {
+    fitgate: {
+      wall: median(runs.fitgate.map((x) => x.wall)),
+      peakMiB: median(runs.fitgate.map((x) => x.peakMiB)),
+      walls: runs.fitgate.map((x) => x.wall),
+      verdict: report.verdict,
+    },
+    reference: ref
+      ? {
+          wall: median(runs.reference.map((x) => x.wall)),
+          peakMiB: median(runs.reference.map((x) => x.peakMiB)),
+          walls: runs.reference.map((x) => x.wall),
+          timings: { loop: JSON.parse(refOut).seconds },
+        }
+      : null,
+    figures,
+    trainBytes: list.reduce((sum, m) => sum + statSync(path.join(repo, m.train)).size + statSync(path.join(repo, m.holdout)).size, 0),
+  };
+}
+
 const fmt = (x, digits = 3) =>
   x === null || x === undefined ? '-' : typeof x !== 'number' ? String(x) : Number.isInteger(x) ? String(x) : x.toPrecision(digits);
 
@@ -339,6 +430,10 @@ async function main() {
   const results = {};
   for (const size of options.sizes) {
     const w = WORKLOADS[size];
+    if (w.monorepo) {
+      results[size] = await runMonorepo(options, size, env, refMissing);
+      continue;
+    }
     const f = files[size];
     const runs = { fitgate: [], reference: [] };
     let fgOut = null;

@@ -13,6 +13,40 @@ describe('excursion outside the band of training targets', () => {
 });
 
 describe('grid across an input', () => {
+  it('equals the sorted distinct points of the uniform grid and the gap points, however the values fall (merge of two runs)', () => {
+    // The grid's definition, built here with a plain sort: 201 even points from min to max, 8
+    // evenly spaced points inside each gap between neighbouring distinct values.
+    const reference = (values: number[]): Float64Array => {
+      const distinct = [...new Set(Float64Array.from(values).sort())];
+      const lo = distinct[0];
+      const hi = distinct[distinct.length - 1];
+      const points: number[] = [];
+      for (let t = 0; t < 201; t++) points.push(t === 200 ? hi : lo + ((hi - lo) * t) / 200);
+      for (let g = 0; g + 1 < distinct.length; g++)
+        for (let t = 1; t <= 8; t++) points.push(distinct[g] + ((distinct[g + 1] - distinct[g]) * t) / 9);
+      const sorted = Float64Array.from(points).sort();
+      return Float64Array.from(sorted.filter((v, i) => i === 0 || v !== sorted[i - 1]));
+    };
+    let seed = 7;
+    const random = (): number => {
+      seed = (seed * 1103515245 + 12345) % 2147483648;
+      return seed / 2147483648;
+    };
+    const cases: number[][] = [
+      [-0, 0, 1, -1],
+      [0.1, 0.2, 0.30000000000000004, 0.3],
+      Array.from({ length: 500 }, () => Math.round(random() * 40) / 4 - 5),
+      Array.from({ length: 900 }, () => 1e-300 * random()),
+      Array.from({ length: 700 }, () => (random() < 0.5 ? -1 : 1) * 10 ** (20 * random() - 10)),
+    ];
+    for (const values of cases) {
+      const got = inputGrid(values).inside;
+      const want = reference(values);
+      expect(got.length).toBe(want.length);
+      expect(Array.from(got).every((v, i) => Object.is(v, want[i]))).toBe(true);
+    }
+  });
+
   it('puts 8 points inside every gap between neighbouring distinct values, a uniform grid, and margins of 10 % outside', () => {
     const values = [0, 0, 1, 1.001, 5, 10];
     const { inside, beyond } = inputGrid(values);

@@ -81,6 +81,14 @@ describe('models on worker threads', () => {
     expect(descriptors).toEqual([...descriptors].sort());
   });
 
+  it('starts no worker by default when the guessed work is too small to pay for one (the same report)', () => {
+    const byDefault = cli(['check', '--root', repo, '--format', 'json']);
+    const serial = cli(['check', '--root', repo, '--jobs', '1', '--format', 'json']);
+    expect(byDefault.workers, 'a fleet of 5 small models runs on the main thread').toBe(0);
+    expect(byDefault.stdout).toBe(serial.stdout);
+    expect(byDefault.status).toBe(serial.status);
+  });
+
   it('runs serially from TypeScript sources (workers cannot load .ts)', async () => {
     expect(workerScript(), 'this test runs the .ts module through vite').toBeNull();
     const memory = createMemoryRepository(files);

@@ -8,7 +8,7 @@ type Reply = { n: number; square: number; thread: number };
 type PoolModule = {
   runPool: (
     tasks: Task[],
-    options: { jobs: number; script: string | URL; workerData?: unknown },
+    options: { jobs: number; script: string | URL; workerData?: unknown; order?: number[] },
     limit?: { ms: number; onTimeLimit: (task: Task, elapsedMs: number) => Reply },
   ) => Promise<Reply[]>;
   defaultJobs: () => number;
@@ -121,5 +121,21 @@ describe('runPool', () => {
 
   it('sizes the default to the cores', () => {
     expect(pool.defaultJobs()).toBeGreaterThanOrEqual(1);
+  });
+
+  it('hands tasks out in the given order and still returns them in task order', async () => {
+    // One worker takes tasks strictly one after another: the first error is that of the first task handed out.
+    const tasks: Task[] = [{ n: 0, fail: 'error' }, { n: 1 }, { n: 2, fail: 'input' }];
+    await expect(pool.runPool(tasks, { jobs: 1, script, workerData })).rejects.toThrow('broken task 0');
+    await expect(pool.runPool(tasks, { jobs: 1, script, workerData, order: [2, 0, 1] })).rejects.toThrow('bad task 2');
+    const ok: Task[] = Array.from({ length: 6 }, (_, i) => ({ n: i }));
+    const results = await pool.runPool(ok, { jobs: 2, script, workerData, order: [5, 4, 3, 2, 1, 0] });
+    expect(results.map((r) => r.square)).toEqual([0, 1, 4, 9, 16, 25]);
+  });
+
+  it('refuses an order that does not list every task once', async () => {
+    const tasks: Task[] = [{ n: 0 }, { n: 1 }];
+    for (const order of [[0], [0, 0], [0, 2], [1, -1]])
+      await expect(pool.runPool(tasks, { jobs: 1, script, workerData, order }), JSON.stringify(order)).rejects.toThrow(RangeError);
   });
 });

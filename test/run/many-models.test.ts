@@ -1,0 +1,122 @@
+import { describe, it, expect } from 'vitest';
+import { loadDescriptor } from '../../src/config/descriptor.js';
+import { defaultSettings as defaultSettingsFile } from '../../src/config/settings-file.js';
+import { createMemoryRepository } from '../../src/repo/memory-repository.js';
+import {
+  chartShare,
+  CURVE_POINTS,
+  FULL_CHART_SHARE,
+  MAX_SERIES_NUMBERS,
+  MIN_CURVE_POINTS,
+  MIN_SERIES_NUMBERS,
+  MODEL_CHART_NUMBERS,
+  RUN_CHART_NUMBERS,
+} from '../../src/result/chart-types.js';
+import { evaluateModel } from '../../src/run/evaluate.js';
+import {
+  dataBytes,
+  guessColumns,
+  guessWork,
+  largestFirst,
+  MODEL_FIXED_OPERATIONS,
+  WORKER_OPERATIONS,
+  workersThatPay,
+} from '../../src/run/work-guess.js';
+
+function csv(rows: number): string {
+  const lines = ['x,y'];
+  for (let i = 0; i < rows; i++) {
+    const x = (50 * ((i * 0.6180339887) % 1)).toFixed(6);
+    lines.push(`${x},${(2 * Math.sin(Number(x) / 8) + 0.3 * Math.cos(17 * i)).toFixed(6)}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+const files = {
+  'fitgate.yml': 'version: 1\nmodels: ["m/*.model.yml"]\n',
+  'm/a.model.yml':
+    'version: 1\nname: a\ndata:\n  train: ../d/train.csv\n  holdout: ../d/holdout.csv\n  target: y\nterms:\n  - polynomial: { of: x, degree: 3 }\nfit:\n  ridge: 0.1\n',
+  'd/train.csv': csv(1200),
+  'd/holdout.csv': csv(300),
+};
+
+describe('chartShare: a run-wide bound on chart data', () => {
+  it('gives the full share up to 100 models and scales it down beyond, to the floors', () => {
+    expect(RUN_CHART_NUMBERS / MODEL_CHART_NUMBERS).toBe(100);
+    expect(chartShare(1)).toBe(FULL_CHART_SHARE);
+    expect(chartShare(100)).toBe(FULL_CHART_SHARE);
+    const s200 = chartShare(200);
+    expect(s200.fraction).toBe(0.5);
+    expect(s200.seriesNumbers).toBe(MAX_SERIES_NUMBERS / 2);
+    expect(s200.curvePoints).toBe(Math.floor(CURVE_POINTS / 2));
+    const s1000 = chartShare(1000);
+    expect(s1000.seriesNumbers).toBe(500);
+    expect(s1000.curvePoints).toBe(MIN_CURVE_POINTS);
+    const huge = chartShare(1_000_000);
+    expect(huge.seriesNumbers).toBe(MIN_SERIES_NUMBERS);
+    expect(huge.curvePoints).toBe(MIN_CURVE_POINTS);
+  });
+
+  it('bounds the whole run: models x a model share stays near the run budget from 100 to 1,000 models', () => {
+    for (const models of [100, 200, 500, 1000]) {
+      const share = chartShare(models);
+      // Two point series and one curve of x and y per model.
+      const numbers = models * (2 * share.seriesNumbers + 2 * share.curvePoints);
+      expect(numbers, `${models} models`).toBeLessThanOrEqual(RUN_CHART_NUMBERS);
+    }
+  });
+
+  it("shrinks a model's series, fitted curve and swing curve under a share below 1", async () => {
+    const repo = createMemoryRepository(files);
+    const settings = defaultSettingsFile();
+    const d = await loadDescriptor(repo, 'm/a.model.yml', settings);
+    const full = await evaluateModel(repo, d, settings);
+    const small = await evaluateModel(repo, d, settings, undefined, undefined, chartShare(1000));
+    expect(full.charts?.train.shown).toBe(1000);
+    expect(small.charts?.train.shown).toBe(100);
+    expect(small.charts?.train.thinning).toBe('100 of 1200 rows, evenly spaced through the file');
+    const curve = (r: typeof full): number => {
+      const curves = r.checks.find((c) => c.id === 'swing')?.detail?.curves as { x: number[] }[] | undefined;
+      if (curves === undefined) throw new Error('no swing curve');
+      return curves[0].x.length;
+    };
+    // Thinning keeps each curve's extremes, so a curve holds up to its maximum (400; 40 at a tenth).
+    expect(curve(full)).toBeGreaterThan(300);
+    expect(curve(full)).toBeLessThanOrEqual(400);
+    expect(curve(small)).toBeGreaterThanOrEqual(25);
+    expect(curve(small)).toBeLessThanOrEqual(40);
+    expect(small.charts?.fit?.x.length).toBeLessThan((full.charts?.fit?.x.length ?? 0) / 4);
+    // Everything but the chart data and the swing curve is the same.
+    const strip = (r: typeof full) =>
+      JSON.stringify({ ...r, charts: null, checks: r.checks.map((c) => (c.id === 'swing' ? { ...c, detail: null } : c)) });
+    expect(strip(small)).toBe(strip(full));
+    const size = (r: typeof full) => JSON.stringify(r).length;
+    expect(size(small)).toBeLessThan(size(full) / 3);
+  });
+});
+
+describe('the pool sizes itself by guessed work', () => {
+  it('guesses columns from the descriptor and work from the data bytes', async () => {
+    const repo = createMemoryRepository(files);
+    const settings = defaultSettingsFile();
+    const d = await loadDescriptor(repo, 'm/a.model.yml', settings);
+    expect(guessColumns(d)).toBe(4);
+    const bytes = await dataBytes(repo, d);
+    expect(bytes).toBe(files['d/train.csv'].length + files['d/holdout.csv'].length);
+    expect(guessWork(d, 0)).toBe(MODEL_FIXED_OPERATIONS);
+    expect(guessWork(d, 2 * bytes) - guessWork(d, bytes)).toBeCloseTo(guessWork(d, bytes) - guessWork(d, 0), 6);
+  });
+
+  it('starts no worker for small work, one per WORKER_OPERATIONS of work, never more than jobs or models', () => {
+    expect(workersThatPay([1e6, 1e6, 1e6], 2)).toBe(0);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 100), 2)).toBe(2);
+    expect(workersThatPay(Array(1000).fill(WORKER_OPERATIONS / 100), 8)).toBe(8);
+    expect(workersThatPay([WORKER_OPERATIONS * 10], 4)).toBe(1);
+    expect(workersThatPay([WORKER_OPERATIONS * 1.5], 4)).toBe(1);
+  });
+
+  it('hands out the largest guessed work first, ties in descriptor order', () => {
+    expect(largestFirst([3, 9, 3, 1, 9])).toEqual([1, 4, 0, 2, 3]);
+    expect(largestFirst([])).toEqual([]);
+  });
+});
