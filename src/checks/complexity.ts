@@ -56,7 +56,16 @@ const check: Check = {
     const scoreOnly = skipWhenScoreOnly(context.descriptor);
     if (scoreOnly) return scoreOnly;
     const { descriptor, design, train, fit } = context;
-    const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
+    // A streamed model's rows at hand are its sample (data/row-source.ts): the sweep runs on the
+    // sample with folds of its own, not on the fold factors of every row.
+    const sampled = train.sampleOf !== undefined;
+    const sweep = sweepComplexity(
+      descriptor,
+      design,
+      train,
+      fit,
+      sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors() },
+    );
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
       return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
     }
@@ -84,7 +93,11 @@ const check: Check = {
         ...(c.failed ? { failed: c.failed } : {}),
       })),
     });
-    const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
+    const sub = sampled
+      ? ` (on a seeded sample of ${sweep.rows} of ${train.sampleOf} rows)`
+      : sweep.subsampled
+        ? ` (on an even-stride subsample of ${sweep.rows} rows)`
+        : '';
     if (sweep.chosen === sweep.current) {
       return {
         value,

@@ -61,6 +61,8 @@ export interface ReadTableOptions {
   format?: Partial<CsvFormat>;
   /** Read only the rows of one side of a split column. */
   split?: SplitFilter;
+  /** readTableChunks: receives the count of rows dropped for a missing cell (`missing: drop`). */
+  counts?: { dropped: number };
 }
 
 /** A whole table's requested columns. */
@@ -102,6 +104,7 @@ export async function* readTableChunks(repo: RepoReader, path: string, options: 
     () => undefined,
     false,
     false,
+    options.counts,
   );
 }
 

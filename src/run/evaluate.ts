@@ -17,6 +17,20 @@ import { runChecks } from './run-checks.js';
 import { errorResult, INTERNAL_ERROR, timeLimitError } from './error-result.js';
 import { evaluateClassifier } from './evaluate-classifier.js';
 import { fitModel, type FittedModel } from './fit-model.js';
+import type { ScaleOptions } from './plan.js';
+import { trainingRows } from '../data/model-data.js';
+
+/**
+ * What a streamed model's report says of its sampling (docs/scale.md): which figures come from
+ * every row and which from the sample.
+ */
+function streamedNote(sampleRows: number, rows: number): { rows: number; sample_rows: number; note: string } {
+  return {
+    rows,
+    sample_rows: sampleRows,
+    note: `the training file was streamed (${rows} rows); errors, cross-validation, leave-one-out, leakage, coefficients and conditioning use every row; swing, spikes, the complexity sweep, term parameters and charts use a seeded sample of ${sampleRows} rows`,
+  };
+}
 
 export type { BaseInput } from './base-comparison.js';
 
@@ -64,10 +78,11 @@ export async function evaluateModel(
   settings: SettingsFile,
   base?: BaseInput,
   deadline?: Deadline,
+  scale: ScaleOptions = {},
 ): Promise<ModelResult> {
   const within = deadline ?? new Deadline(settings.caps.maxModelSeconds * 1000);
   try {
-    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, base));
+    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, base, scale));
   } catch (error) {
     if (!(error instanceof TimeLimitExceeded)) throw error;
     return errorResult(
@@ -79,11 +94,17 @@ export async function evaluateModel(
 }
 
 /** {@link evaluateModel} inside its deadline; TimeLimitExceeded passes through. */
-async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile, base?: BaseInput): Promise<ModelResult> {
+async function evaluateWithin(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  base: BaseInput | undefined,
+  scale: ScaleOptions,
+): Promise<ModelResult> {
   let model: FittedModel;
   try {
     if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
-    model = await fitModel(repo, descriptor, settings);
+    model = await fitModel(repo, descriptor, settings, scale);
   } catch (error) {
     if (error instanceof TimeLimitExceeded) throw error;
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
@@ -104,7 +125,12 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
   // The run's own passes already produced the folds, their factors and the cross-validation.
   const analyses = new ModelAnalyses(
     { design: model.design, fit: model.fit, train: model.tables.train, holdout: model.tables.holdout, folds: descriptor.fit },
-    { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation },
+    {
+      folds: model.folds,
+      foldFactors: model.foldFactors,
+      crossValidation: model.crossValidation,
+      ...(model.leakage ? { leakage: model.leakage } : {}),
+    },
   );
   const context: CheckContext = {
     descriptor,
@@ -124,7 +150,7 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     name: descriptor.name,
     descriptor: descriptor.file,
     verdict,
-    rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    rows: { train: trainingRows(model.tables.train), holdout: model.tables.holdout.rows },
     ...(model.tables.train.dropped !== undefined
       ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
       : {}),
@@ -138,6 +164,9 @@ async function evaluateWithin(repo: RepoReader, descriptor: Descriptor, settings
     error: null,
     extra: {
       rank_deficient: model.fit.rankDeficient,
+      ...(model.tables.train.sampleOf !== undefined
+        ? { streamed: streamedNote(model.tables.train.rows, model.tables.train.sampleOf) }
+        : {}),
       terms: model.design.terms.map((t, i) => ({
         kind: t.spec.kind,
         line: t.spec.line,
