@@ -58,7 +58,7 @@ const check: Check = {
     const { descriptor, design, train, fit } = context;
     // A streamed model's rows at hand are its sample (data/row-source.ts): the sweep runs on the
     // sample with folds of its own, not on the fold factors of every row.
-    const sampled = train.sampleOf !== undefined;
+    const sampled = train.sampleOf !== undefined && train.sampleOf > train.rows;
     const sweep = sweepComplexity(
       descriptor,
       design,

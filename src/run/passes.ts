@@ -98,6 +98,7 @@ export async function refinePass(plan: ModelPlan, fit: FitResult): Promise<FitRe
  * near 65536 rows, so that the blocks, and with them every sum, are those of the in-memory path.
  */
 function streamChunkRows(plan: ModelPlan): number {
+  if (plan.chunkRows !== undefined) return plan.chunkRows;
   const block = blockRows(plan.design.p);
   return block * Math.max(1, Math.floor(65536 / block));
 }

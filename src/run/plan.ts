@@ -52,6 +52,8 @@ export interface ModelPlan {
   rows: number;
   /** Smallest and largest training target. */
   targetRange: [number, number];
+  /** Rows per chunk of a streamed pass (tests); default a whole number of design blocks near 65536. */
+  chunkRows?: number;
 }
 
 /** Options of a run's scale (tests force the streamed path with a low threshold). */
@@ -134,6 +136,7 @@ export async function planModel(
       source: streamed.source,
       rows,
       targetRange: [streamed.targetMin, streamed.targetMax],
+      ...(scale.chunkRows ? { chunkRows: scale.chunkRows } : {}),
     };
   }
   const folds = assignFolds(train.rows, k, foldOrder, seed);
