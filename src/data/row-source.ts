@@ -82,6 +82,9 @@ export function fileRowSource(repo: RepoReader, path: string, options: FileRowSo
         ...(options.format ? { format: options.format } : {}),
         ...(options.split ? { split: options.split } : {}),
         ...(options.counts ? { counts: options.counts } : {}),
+        // Every consumer copies what it keeps (the reservoir, the factors, the sums), so the reader
+        // refills the same arrays: no garbage of a chunk's size per chunk.
+        recycle: true,
       });
       for await (const chunk of read) {
         visit({ inputs: chunk.columns.slice(0, d), y: chunk.columns[d], lines: chunk.lines, rows: chunk.rows, file: path }, start);

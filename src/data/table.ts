@@ -63,6 +63,11 @@ export interface ReadTableOptions {
   split?: SplitFilter;
   /** readTableChunks: receives the count of rows dropped for a missing cell (`missing: drop`). */
   counts?: { dropped: number };
+  /**
+   * readTableChunks: reuse a chunk's arrays for a later chunk once the consumer asks for the next
+   * (it must copy what it keeps). Default false.
+   */
+  recycle?: boolean;
 }
 
 /** A whole table's requested columns. */
@@ -103,7 +108,7 @@ export async function* readTableChunks(repo: RepoReader, path: string, options: 
     settings,
     () => undefined,
     false,
-    false,
+    options.recycle === true,
     options.counts,
   );
 }
