@@ -102,7 +102,9 @@ export async function planModel(
       { file, line: descriptor.termsLine, key: 'terms' },
     );
   }
-  if (rows * p > settings.caps.maxCells) {
+  // caps.max_cells guards the memory of columns held whole; a streamed model holds none (its
+  // work is still held to caps.max_operations below).
+  if (streamed === null && rows * p > settings.caps.maxCells) {
     throw new InputError(
       'too-large',
       `${rows} training rows x ${p} parameters = ${rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`,
