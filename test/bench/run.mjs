@@ -388,7 +388,13 @@ function table(rows) {
 function readPassSeconds(options, file) {
   const out = path.join(options.work, 'js');
   if (!existsSync(path.join(out, 'data', 'table.js'))) {
-    execFileSync(process.execPath, [path.join(root, 'node_modules', 'typescript', 'bin', 'tsc'), '-p', path.join(root, 'tsconfig.json'), '--outDir', out]);
+    execFileSync(process.execPath, [
+      path.join(root, 'node_modules', 'typescript', 'bin', 'tsc'),
+      '-p',
+      path.join(root, 'tsconfig.json'),
+      '--outDir',
+      out,
+    ]);
     writeFileSync(path.join(out, 'package.json'), '{ "type": "module" }\n');
     if (!existsSync(path.join(out, 'node_modules'))) symlinkSync(path.join(root, 'node_modules'), path.join(out, 'node_modules'));
   }
@@ -460,7 +466,9 @@ async function main() {
       }
       process.stderr.write(
         `${size} run ${r + 1}/${options.runs}: fitgate ${fg.wall.toFixed(2)} s ${fg.peakMiB.toFixed(0)} MiB` +
-          (refMissing || w.gzip ? '\n' : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`),
+          (refMissing || w.gzip
+            ? '\n'
+            : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`),
       );
     }
     const fg = fitgateFigures(fgOut);

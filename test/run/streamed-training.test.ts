@@ -65,7 +65,8 @@ function sameFigures(a: unknown, b: unknown, where: string): void {
   }
   if (a !== null && b !== null && typeof a === 'object' && typeof b === 'object') {
     expect(Object.keys(a).sort(), where).toEqual(Object.keys(b).sort());
-    for (const key of Object.keys(a)) sameFigures((a as Record<string, unknown>)[key], (b as Record<string, unknown>)[key], `${where}.${key}`);
+    for (const key of Object.keys(a))
+      sameFigures((a as Record<string, unknown>)[key], (b as Record<string, unknown>)[key], `${where}.${key}`);
     return;
   }
   // Messages quote figures rounded for people, which may differ in the last digit shown.
@@ -76,7 +77,12 @@ function sameFigures(a: unknown, b: unknown, where: string): void {
 describe('a streamed training file against the same file held in memory', () => {
   for (const [label, file, gz, extra] of [
     ['plain CSV, blocks folds, ridge 0', 'train.csv', false, 'fit:\n  folds: 5\n  fold_order: blocks\n'],
-    ['gzip CSV, blocks folds, ridge 0.5 and shipped coefficients', 'train.csv.gz', true, 'fit:\n  folds: 4\n  fold_order: blocks\n  ridge: 0.5\ncoefficients: [1, 0.1, 0.2, 0.3, 0.1, 0.1, 0.2, 0.1, 0.05]\n'],
+    [
+      'gzip CSV, blocks folds, ridge 0.5 and shipped coefficients',
+      'train.csv.gz',
+      true,
+      'fit:\n  folds: 4\n  fold_order: blocks\n  ridge: 0.5\ncoefficients: [1, 0.1, 0.2, 0.3, 0.1, 0.1, 0.2, 0.1, 0.05]\n',
+    ],
   ] as const) {
     it(`gives every figure of the report within ${TOLERANCE} (${label}; 5000 rows in chunks of 1500)`, async () => {
       const memory = await evaluate(file, extra, gz, false);
@@ -84,7 +90,10 @@ describe('a streamed training file against the same file held in memory', () => 
       expect(memory.error).toBeNull();
       expect(streamed.error).toBeNull();
       expect(streamed.rows).toEqual({ train: 5000, holdout: 704 });
-      expect((streamed.extra as { streamed?: { rows: number; sample_rows: number } }).streamed).toMatchObject({ rows: 5000, sample_rows: 5000 });
+      expect((streamed.extra as { streamed?: { rows: number; sample_rows: number } }).streamed).toMatchObject({
+        rows: 5000,
+        sample_rows: 5000,
+      });
       const { extra: e1, ...s } = streamed;
       const { extra: e2, ...m } = memory;
       const { streamed: _s, ...restStreamed } = e1 as Record<string, unknown>;
@@ -107,7 +116,8 @@ describe('a streamed training file against the same file held in memory', () => 
         const blocks = streamedFolds(n, k, 'blocks', 3);
         // In pieces, as the passes ask for them.
         const pieces = new Int32Array(n);
-        for (let start = 0; start < n; start += 999) pieces.set(foldIdsOf(blocks, start, Math.min(999, n - start), new Int32Array(999)), start);
+        for (let start = 0; start < n; start += 999)
+          pieces.set(foldIdsOf(blocks, start, Math.min(999, n - start), new Int32Array(999)), start);
         expect(Array.from(pieces), `blocks n=${n} k=${k}`).toEqual(Array.from(assignFolds(n, k, 'blocks', 3).foldOf));
       }
     }
