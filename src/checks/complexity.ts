@@ -45,7 +45,9 @@ const check: Check = {
   setting is as good). The default warns above 1.5: the suggestion is then clearly better,
   not only simpler; a notice alone is given otherwise, and the check never fails by default.
 - Above 50,000 training rows a degree or width sweep uses a subsample of 50,000 rows at an even
-  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row.
+  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row. A
+  training file read as a stream (docs/scale.md) is swept on its seeded sample of at most 100,000
+  rows, a ridge sweep too, with folds of the sample's own (\`subsampled: true\`).
 - Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\`,
   \`knots\`, \`harmonics\` or \`ridge\`), \`folds\`, \`rows\`, \`subsampled\`, \`rule\`, indices \`chosen\`, \`best\`, \`current\`, and \`curve\`:
   \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
