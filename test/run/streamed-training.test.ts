@@ -11,6 +11,7 @@ import { evaluateModel } from '../../src/run/evaluate.js';
 import { createMemoryRepository } from '../../src/repo/memory-repository.js';
 import type { ModelResult } from '../../src/result/result.js';
 import { RowReservoir, streamsTrainingFile } from '../../src/data/row-source.js';
+import type { RepoReader } from '../../src/repo/types.js';
 
 const TOLERANCE = 1e-9;
 
@@ -104,6 +105,29 @@ describe('a streamed training file against the same file held in memory', () => 
     });
   }
 
+  it('with a sample smaller than the file: figures of every row stay exact, the sampled diagnostics say so', async () => {
+    const extra = 'fit:\n  folds: 5\n  fold_order: shuffled\n';
+    const repo = repository('train.csv', extra, false);
+    const settings = defaultSettings();
+    const descriptor = await loadDescriptor(repo, 'models/m.model.yml', settings);
+    const memory = await evaluateModel(repo, descriptor, settings);
+    const streamed = await evaluateModel(repo, descriptor, settings, undefined, undefined, { streamAboveBytes: 0, sampleRows: 1000 });
+    expect(streamed.error).toBeNull();
+    expect(streamed.rows.train).toBe(5000);
+    expect((streamed.extra as { streamed?: unknown }).streamed).toMatchObject({ rows: 5000, sample_rows: 1000 });
+    // Every row: training errors, coefficients (terms fixed from the sample give another but
+    // equivalent basis, so compare predictions' errors), parameters per row.
+    for (const key of ['train_rmse', 'train_r2', 'holdout_rmse', 'params_per_sample'] as const)
+      sameFigures(streamed.metrics?.[key], memory.metrics?.[key], key);
+    // Shuffled folds of the streamed path are another shuffle: the k-fold error is close, not equal.
+    const cv = (r: ModelResult) => r.metrics?.cv_rmse as number;
+    expect(Math.abs(cv(streamed) - cv(memory)) / cv(memory)).toBeLessThan(0.02);
+    const sweep = streamed.checks.find((c) => c.id === 'complexity');
+    expect(sweep?.detail).toMatchObject({ subsampled: true });
+    expect((sweep?.detail as { rows: number }).rows).toBeLessThanOrEqual(1000);
+    expect(sweep?.message).toContain('seeded sample of');
+  });
+
   it('shuffled folds: the streamed ones are a partition with the sizes of the in-memory ones, and blocks folds are equal', () => {
     for (const n of [1, 7, 100, 4097, 65536, 100003]) {
       for (const k of [1, 2, 5, 10]) {
@@ -146,6 +170,30 @@ describe('a streamed training file against the same file held in memory', () => 
     expect(streamsTrainingFile('t.csv', 99, 99)).toBe(false);
     expect(streamsTrainingFile('t.csv.gz', 25, 99)).toBe(true);
     expect(streamsTrainingFile('t.csv.gz', 24, 99)).toBe(false);
+  });
+
+  it('refuses a classifier whose training file is too large to hold, naming the descriptor line', async () => {
+    const memory = createMemoryRepository({
+      'm.model.yml':
+        'version: 1\nname: m\ntask: classification\ndata:\n  train: t.csv\n  holdout: t.csv\n  target: y\nterms:\n  - linear: [x]\n',
+      't.csv': 'x,y\n1,0\n2,1\n3,0\n4,1\n',
+    });
+    // The same files, with the training file said to be 600 MiB (over the 512 MiB a classifier may hold).
+    const repo: RepoReader = {
+      label: memory.label,
+      resolve: (f, t, w) => memory.resolve(f, t, w),
+      isFile: (p) => memory.isFile(p),
+      entryKind: (p) => memory.entryKind(p),
+      size: async (p) => (p === 't.csv' ? 600 * 1024 * 1024 : memory.size(p)),
+      read: (p) => memory.read(p),
+      stream: (p, c) => memory.stream(p, c),
+      glob: (g) => memory.glob(g),
+    };
+    const settings = defaultSettings();
+    const descriptor = await loadDescriptor(repo, 'm.model.yml', settings);
+    const result = await evaluateModel(repo, descriptor, settings);
+    expect(result.error).toMatchObject({ code: 'too-large-to-hold', file: 'm.model.yml', line: 5 });
+    expect(result.error?.message).toContain('512 MiB');
   });
 
   it('refuses a streamed model with weights plainly, naming the descriptor line', async () => {
