@@ -95,10 +95,10 @@ export function fileRowSource(repo: RepoReader, path: string, options: FileRowSo
 }
 
 /**
- * Default threshold of {@link streamsTrainingFile}: 192 MiB of CSV text. About 1.4 million rows of
- * 8 inputs and a target at the benchmark's 17 characters per cell; held in memory such a file
- * takes about 150 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1
- * million rows, peaks near 200 MiB), so files below it keep today's in-memory path and those above
+ * Default threshold of {@link streamsTrainingFile}: 192 MiB of CSV text. About 1.8 million rows of
+ * 8 inputs and a target at the benchmark's 111 bytes a row; held in memory such a file takes about
+ * 145 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1 million rows,
+ * 111 MB, peaks near 200 MiB), so files below it keep today's in-memory path and those above
  * stream.
  */
 export const STREAM_ABOVE_BYTES = 192 * 1024 * 1024;
