@@ -95,13 +95,13 @@ export function fileRowSource(repo: RepoReader, path: string, options: FileRowSo
 }
 
 /**
- * Default threshold of {@link streamsTrainingFile}: 192 MiB of CSV text. About 1.8 million rows of
+ * Default threshold of {@link streamsTrainingFile}: 128 MiB of CSV text. About 1.2 million rows of
  * 8 inputs and a target at the benchmark's 111 bytes a row; held in memory such a file takes about
- * 145 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1 million rows,
+ * 100 MiB of columns plus the run's own (the L workload of docs/benchmarks.md, 1 million rows,
  * 111 MB, peaks near 200 MiB), so files below it keep today's in-memory path and those above
- * stream.
+ * stream, and a model of 8 inputs stays under about 256 MiB either way.
  */
-export const STREAM_ABOVE_BYTES = 192 * 1024 * 1024;
+export const STREAM_ABOVE_BYTES = 128 * 1024 * 1024;
 
 /**
  * Assumed ratio of CSV text to gzip bytes when judging a `.gz` file by its stored size (the
