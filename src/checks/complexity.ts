@@ -49,7 +49,9 @@ const check: Check = {
   MSEs are sum w r^2 over the fold divided by its rows, cv_rmse = sqrt(sum w r^2 / sum w) (Björck,
   Numerical Methods for Least Squares Problems, 1996, section 4.4.1).
 - Above 50,000 training rows a degree or width sweep uses a subsample of 50,000 rows at an even
-  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row.
+  stride through the file (detail \`subsampled: true\`); a ridge sweep always uses every row. A
+  training file read as a stream (docs/scale.md) is swept on its seeded sample of at most 100,000
+  rows, a ridge sweep too, with folds of the sample's own (\`subsampled: true\`).
 - Metrics: \`suggested_setting\`, \`suggested_cv_rmse\`. Detail: \`setting\` (\`degree\`, \`width\`,
   \`knots\`, \`harmonics\` or \`ridge\`), \`folds\`, \`rows\`, \`subsampled\`, \`rule\`, indices \`chosen\`, \`best\`, \`current\`, and \`curve\`:
   \`[{ setting, label, parameters, cv_rmse, mean_mse, se_mse, current, failed? }]\`, simplest first.`,
@@ -60,7 +62,16 @@ const check: Check = {
     const scoreOnly = skipWhenScoreOnly(context.descriptor);
     if (scoreOnly) return scoreOnly;
     const { descriptor, design, train, fit } = context;
-    const sweep = sweepComplexity(descriptor, design, train, fit, { factors: () => context.analyses.foldFactors() });
+    // A streamed model's rows at hand are its sample (data/row-source.ts): the sweep runs on the
+    // sample with folds of its own, not on the fold factors of every row.
+    const sampled = train.sampleOf !== undefined && train.sampleOf > train.rows;
+    const sweep = sweepComplexity(
+      descriptor,
+      design,
+      train,
+      fit,
+      sampled ? { sampled: true } : { factors: () => context.analyses.foldFactors() },
+    );
     if (sweep === null || sweep.chosen < 0 || sweep.current < 0) {
       return { value: null, reason: 'not-applicable', message: 'the model has no complexity setting to sweep, or too few rows' };
     }
@@ -88,7 +99,11 @@ const check: Check = {
         ...(c.failed ? { failed: c.failed } : {}),
       })),
     });
-    const sub = sweep.subsampled ? ` (on an even-stride subsample of ${sweep.rows} rows)` : '';
+    const sub = sampled
+      ? ` (on a seeded sample of ${sweep.rows} of ${train.sampleOf} rows)`
+      : sweep.subsampled
+        ? ` (on an even-stride subsample of ${sweep.rows} rows)`
+        : '';
     if (sweep.chosen === sweep.current) {
       return {
         value,

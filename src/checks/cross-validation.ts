@@ -2,6 +2,7 @@
  * `cross-validation`: k-fold cross-validation RMSE / training RMSE, with leave-one-out (PRESS),
  * GCV and the effective degrees of freedom in the model's metrics.
  */
+import { trainingRows } from '../data/model-data.js';
 import { skipWhenScoreOnly } from './score-only.js';
 import type { Check } from './types.js';
 import { classifierCrossValidation } from './classifier/measures.js';
@@ -58,7 +59,7 @@ const check: Check = {
       loocv_rmse: cv.loocvRmse,
       gcv: cv.gcv,
       effective_df: effectiveDf,
-      effective_df_per_sample: effectiveDf / train.rows,
+      effective_df_per_sample: effectiveDf / trainingRows(train),
       cv_folds: cv.k,
     };
     const detail = {

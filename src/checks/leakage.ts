@@ -20,7 +20,8 @@ const check: Check = {
   some training row (exact comparison of the parsed numbers, -0 equal to 0; found through a hash of
   the values' bit patterns, confirmed value by value). The message says how many of them repeat the
   target too, and names the first 5 lines of the hold-out file and the first matching training line
-  of each.
+  of each. A training file read as a stream (docs/scale.md) is compared row by row in full: its rows
+  stream past the hold-out rows' hash table in the scoring pass.
 - Metrics: \`holdout_rows_in_training\` (the figure) and \`leaked_rows\`: hold-out rows equal to a
   training row in the inputs and the target. Only the model's columns are compared: a column of the
   file that no term reads does not count (a comparison on every column of the files can give a

@@ -1,6 +1,7 @@
 /**
  * `parameter-ratio`: fitted parameters per training row.
  */
+import { trainingRows } from '../data/model-data.js';
 import type { Check } from './types.js';
 import { formatNumber } from '../core/format.js';
 import type { Limit } from '../config/types.js';
@@ -42,17 +43,17 @@ const check: Check = {
   measure({ metrics, design, train, fit, descriptor }) {
     if (descriptor.fit.parameterCount === 'effective') {
       const df = fit.degreesOfFreedom;
-      const ratio = df / train.rows;
+      const ratio = df / trainingRows(train);
       return {
         value: ratio,
         reason: 'effective',
-        message: `${formatNumber(df)} effective parameters (of ${design.p} columns) for ${train.rows} training rows (${formatNumber(ratio)} per row)`,
+        message: `${formatNumber(df)} effective parameters (of ${design.p} columns) for ${trainingRows(train)} training rows (${formatNumber(ratio)} per row)`,
         detail: { counted: 'effective', effective_df: df, columns: design.p },
       };
     }
     return {
       value: metrics.paramsPerSample,
-      message: `${design.p} parameters for ${train.rows} training rows (${formatNumber(metrics.paramsPerSample)} per row)`,
+      message: `${design.p} parameters for ${trainingRows(train)} training rows (${formatNumber(metrics.paramsPerSample)} per row)`,
       detail: { counted: 'columns', columns: design.p },
       ...ruleAdvice(descriptor.limits[LIMIT_KEY], metrics.paramsPerSample),
     };

@@ -24,7 +24,8 @@ const check: Check = {
 - Figure, for each input with two distinct training values (the other inputs at their training medians,
   as the swing curves): TV_f = sum |f(g_(k+1)) - f(g_k)| over the points \`swing\` scans inside the
   training range, TV_y = sum |ybar_(j+1) - ybar_j| over the input's distinct training values ascending
-  (ybar_j the mean target at the j-th value, weighted sum w y / sum w for weighted models; above 20,000 rows an even-stride sample of 20,000), and
+  (ybar_j the mean target at the j-th value, weighted sum w y / sum w for weighted models; above 20,000 rows an even-stride sample of 20,000; of a
+  training file read as a stream, docs/scale.md, its seeded sample of at most 100,000 rows), and
   the ratio TV_f / TV_y; the figure is the largest ratio. Total variation: the sum of absolute
   increments (Jordan 1881). With several inputs TV_y also holds the other inputs' effects, so the
   figure is lenient there.

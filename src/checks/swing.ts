@@ -61,7 +61,8 @@ const check: Check = {
   inputs at their training medians (the 4,000 gaps shared evenly: the widest ceil(4,000 /
   inputs) gaps of each input), plus 8 points on each segment between a training row and each of
   its 3 nearest neighbours (Euclidean distance on the inputs divided by their standard deviations;
-  at most 1,000 rows, taken at an even stride through the file).
+  at most 1,000 rows, taken at an even stride through the file). A training file read as a stream
+  (docs/scale.md) is scanned on its seeded sample of at most 100,000 rows (then thinned as above).
 - Why: a model that interpolates its samples with a high-degree polynomial or narrow radial bumps
   can pass through every sample and still predict absurd values between them (Runge's phenomenon,
   Runge 1901, Zeitschrift für Mathematik und Physik 46).

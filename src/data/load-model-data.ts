@@ -9,6 +9,7 @@ import { placeOfLine, type DataPart } from './data-parts.js';
 import { levelCodes, trainingLevels } from './levels.js';
 import { readTextColumns } from './text-columns.js';
 import type { RepoReader } from '../repo/types.js';
+import { fileRowSource, RowReservoir, SAMPLE_ROWS, streamsTrainingFile, type RowChunk, type RowSource } from './row-source.js';
 
 /** Training and hold-out columns of one model. */
 export interface ModelTables {
@@ -18,6 +19,37 @@ export interface ModelTables {
   trainColumns: Map<string, Float64Array>;
   /** Training levels (text order) of each category column; the columns hold their codes. */
   levels?: Map<string, string[]>;
+  /**
+   * Present when the training file streams (row-source.ts): `train` then holds a seeded sample of
+   * at most {@link SAMPLE_ROWS} rows (every row when the file has no more), `trainColumns` its
+   * columns, and this the source of every row with the figures of the whole file's target.
+   */
+  streamed?: StreamedTraining;
+}
+
+/** The training rows of a streamed model: their source and what the sampling read measured. */
+export interface StreamedTraining {
+  source: RowSource;
+  /** Rows in the training file. */
+  rows: number;
+  /** Mean and population standard deviation of the target over every row (Chan et al.'s merge of chunk figures). */
+  targetMean: number;
+  targetSd: number;
+  /** Smallest and largest target. */
+  targetMin: number;
+  targetMax: number;
+}
+
+/** How the loader treats a large training file. */
+export interface LoadOptions {
+  /** Stream the training file when its estimated CSV text is above this (row-source.ts; default STREAM_ABOVE_BYTES). */
+  streamAboveBytes?: number;
+  /** Rows per chunk of the streamed passes (default 65536). */
+  chunkRows?: number;
+  /** Sample size of a streamed model (default {@link SAMPLE_ROWS}). */
+  sampleRows?: number;
+  /** Sees every chunk of a streamed training file during the sampling read (checks that need every row). */
+  onTrainChunk?: (chunk: RowChunk) => void;
 }
 
 /** The category columns of a descriptor with the first category term that reads each. */
@@ -37,6 +69,7 @@ export async function loadModelData(
   descriptor: Descriptor,
   inputs: readonly string[],
   settings: SettingsFile,
+  options: LoadOptions = {},
 ): Promise<ModelTables> {
   const { data } = descriptor;
   if (inputs.includes(data.target)) {
@@ -140,6 +173,75 @@ export async function loadModelData(
           ...rowWeights(weighting, table.columns.get(weighting.column) as Float64Array, rows.lines, rows.rows, rows.file, rows.parts),
         };
   };
+  // A training file read from parts is held in memory (bounded by `caps.max_file_mb` over all parts).
+  if (data.trainParts === undefined && streamsTrainingFile(data.train, await repo.size(data.train), options.streamAboveBytes)) {
+    const why =
+      categories.size > 0
+        ? 'a category term'
+        : weighting !== null
+          ? `\`data.${weighting.kind}\``
+          : (data.targetTransform ?? null) !== null
+            ? '`data.target_transform`'
+            : null;
+    if (why !== null) {
+      throw new InputError(
+        'too-large-to-hold',
+        `the training file ${clip(data.train)} is too large to hold in memory and is read as a stream, which a model with ${why} does not support yet; expected a smaller file, or a model without it`,
+        { file: descriptor.file, line: data.lines.train, key: 'data.train' },
+      );
+    }
+    const split = data.split ?? null;
+    const counts = { dropped: 0 };
+    const source = fileRowSource(repo, data.train, {
+      inputs,
+      target: data.target,
+      maxBytes,
+      ...(options.chunkRows ? { chunkRows: options.chunkRows } : {}),
+      ...(format ? { format } : {}),
+      ...(split ? { split: { column: split.column, keep: split.train, other: split.holdout } } : {}),
+      counts,
+    });
+    const reservoir = new RowReservoir(inputs.length, options.sampleRows ?? SAMPLE_ROWS, descriptor.fit.seed);
+    const target = { n: 0, mean: 0, m2: 0, min: Infinity, max: -Infinity };
+    try {
+      await source.forEachChunk((chunk) => {
+        options.onTrainChunk?.(chunk);
+        reservoir.add(chunk);
+        addTargetFigures(target, chunk.y, chunk.rows);
+      });
+    } catch (error) {
+      throw withAsker(error, descriptor);
+    }
+    if (reservoir.seen === 0) {
+      throw new InputError('no-rows', `\`${clip(data.train)}\` has no data rows; expected at least one row`, {
+        file: descriptor.file,
+        line: data.lines.train,
+        key: 'data.train',
+      });
+    }
+    const sample: ModelData = {
+      ...reservoir.rows(data.train),
+      sampleOf: reservoir.seen,
+      ...(format?.missing === 'drop' ? { dropped: counts.dropped } : {}),
+    };
+    const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
+    const { byName: _unused, ...holdoutData } = holdout;
+    const trainColumns = new Map<string, Float64Array>(inputs.map((name, c) => [name, sample.inputs[c]]));
+    return {
+      train: sample,
+      holdout: holdoutData,
+      trainColumns,
+      levels,
+      streamed: {
+        source,
+        rows: reservoir.seen,
+        targetMean: target.mean,
+        targetSd: Math.sqrt(target.m2 / target.n),
+        targetMin: target.min,
+        targetMax: target.max,
+      },
+    };
+  }
   const train = await load(data.train, data.trainParts, data.lines.train, 'data.train');
   const holdout = await load(data.holdout, data.holdoutParts, data.lines.holdout, 'data.holdout');
   const { byName, ...trainData } = train;
@@ -152,6 +254,29 @@ export async function loadModelData(
   }
   const { byName: _unused, ...holdoutData } = holdout;
   return { train: trainData, holdout: holdoutData, trainColumns: byName, levels };
+}
+
+/**
+ * Adds a chunk's targets to running figures: mean and sum of squared deviations merged by the
+ * pairwise formula of Chan, Golub & LeVeque ("Algorithms for computing the sample variance",
+ * The American Statistician 37(3), 1983, eq. 2.1), the chunk's own from two passes.
+ */
+function addTargetFigures(t: { n: number; mean: number; m2: number; min: number; max: number }, y: Float64Array, m: number): void {
+  if (m === 0) return;
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += y[i];
+  const mean = sum / m;
+  let m2 = 0;
+  for (let i = 0; i < m; i++) m2 += (y[i] - mean) * (y[i] - mean);
+  const n = t.n + m;
+  const delta = mean - t.mean;
+  t.mean = t.n === 0 ? mean : t.mean + (delta * m) / n;
+  t.m2 = t.n === 0 ? m2 : t.m2 + m2 + (delta * delta * t.n * m) / n;
+  t.n = n;
+  for (let i = 0; i < m; i++) {
+    if (y[i] < t.min) t.min = y[i];
+    if (y[i] > t.max) t.max = y[i];
+  }
 }
 
 /**

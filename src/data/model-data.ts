@@ -31,4 +31,14 @@ export interface ModelData {
   sigma?: Float64Array;
   /** Rows dropped for a missing cell under `data.missing: drop` (absent otherwise). */
   dropped?: number;
+  /**
+   * Present when these rows are a sample of a streamed training file (data/row-source.ts): the
+   * number of rows in the file. Figures per training row use it ({@link trainingRows}).
+   */
+  sampleOf?: number;
+}
+
+/** The number of training rows a figure should count: the file's rows, also for a sample of them. */
+export function trainingRows(data: Pick<ModelData, 'rows' | 'sampleOf'>): number {
+  return data.sampleOf ?? data.rows;
 }

@@ -64,6 +64,13 @@ export interface ReadTableOptions {
   format?: Partial<CsvFormat>;
   /** Read only the rows of one side of a split column. */
   split?: SplitFilter;
+  /** readTableChunks: receives the count of rows dropped for a missing cell (`missing: drop`). */
+  counts?: { dropped: number };
+  /**
+   * readTableChunks: reuse a chunk's arrays for a later chunk once the consumer asks for the next
+   * (it must copy what it keeps). Default false.
+   */
+  recycle?: boolean;
 }
 
 /** A whole table's requested columns. */
@@ -128,7 +135,8 @@ export async function* readTableChunks(
     settings,
     () => undefined,
     false,
-    false,
+    options.recycle === true,
+    options.counts,
   );
 }
 

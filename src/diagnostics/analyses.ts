@@ -30,6 +30,8 @@ export interface KnownAnalyses {
   folds?: Folds;
   foldFactors?: FoldFactors;
   crossValidation?: CrossValidation | null;
+  /** Leakage found over every training row (a streamed model's scoring pass). */
+  leakage?: Leakage;
 }
 
 /** One model's shared diagnostics, each computed on first use and kept. */
@@ -53,6 +55,7 @@ export class ModelAnalyses {
     this.#folds = known.folds;
     this.#foldFactors = known.foldFactors;
     this.#crossValidation = known.crossValidation ?? undefined;
+    this.#leakage = known.leakage;
   }
 
   /** The training rows' cross-validation folds (see {@link assignFolds}). */

@@ -111,6 +111,8 @@ export interface SweepOptions {
    * Default: a ridge sweep builds them in one pass.
    */
   factors?: () => FoldFactors;
+  /** The rows given are a sample of a streamed training file (data/row-source.ts): the detail says `subsampled: true`. Default false. */
+  sampled?: boolean;
 }
 
 /** Formats a setting for people (up to 3 significant digits). */
@@ -318,8 +320,9 @@ export function sweepComplexity(
   if (target === null || train.rows < 2) return null;
   const maxRows = options.maxRows ?? SWEEP_MAX_ROWS;
   // A ridge sweep needs no pass over the rows once the fold factors exist, so it uses every row.
-  const subsampled = target.kind !== 'ridge' && train.rows > maxRows;
-  const rows = subsampled ? subsample(train, maxRows) : train;
+  const thinned = target.kind !== 'ridge' && train.rows > maxRows;
+  const rows = thinned ? subsample(train, maxRows) : train;
+  const subsampled = thinned || options.sampled === true;
   const folds: Folds = assignFolds(rows.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
   if (folds.k < 2) return null;
   const ridge = descriptor.fit.ridge;

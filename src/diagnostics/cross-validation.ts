@@ -8,7 +8,7 @@ import type { Design } from '../design/design-matrix.js';
 import { leveragesInto, QrAccumulator, solveCoefficients, type FitResult } from '../fit/index.js';
 import { forEachBlock } from '../design/blocks.js';
 import { addProducts, outOfFoldRows } from '../kernels/index.js';
-import type { Folds } from './folds.js';
+import { foldIdsOf, type Folds } from './folds.js';
 import { checkDeadline } from '../core/deadline.js';
 
 /** The rows a diagnostic reads: input columns in `design.inputs` order and the target. */
@@ -49,11 +49,11 @@ export class FoldFactorBuilder {
    * @param y targets of the whole data set (indexed from `start`)
    * @param start first row
    * @param m rows in the block
+   * @param foldOf fold of each row, indexed like `y`; default the folds' own table
    */
-  add(X: Float64Array, y: Float64Array, start: number, m: number): void {
+  add(X: Float64Array, y: Float64Array, start: number, m: number, foldOf: Int32Array = this.#folds.foldOf): void {
     const p = this.#p;
     const k = this.#folds.k;
-    const foldOf = this.#folds.foldOf;
     if (m === 0) return;
     const first = foldOf[start];
     if (oneFold(foldOf, start, m)) {
@@ -219,6 +219,8 @@ export interface OutOfFoldErrors {
  * @param folds fold of each row
  * @param coefficients coefficients[s][f]: length-p coefficients of setting s fitted without fold f
  * @param visit called with each block (column-major m x p), its first row and m
+ * @param rowFolds for one chunk of a streamed model: its rows' folds (indexed like `data`) and
+ *   the sse table to add into (returned); default the folds' own table and a new sse table
  */
 export function outOfFoldErrors(
   design: Design,
@@ -226,12 +228,14 @@ export function outOfFoldErrors(
   folds: Folds,
   coefficients: readonly (readonly Float64Array[])[],
   visit?: (X: Float64Array, start: number, m: number) => void,
+  rowFolds?: { foldOf: Int32Array; sse: number[][] },
 ): OutOfFoldErrors {
   const p = design.p;
   const k = folds.k;
   const S = coefficients.length;
-  const sse = Array.from({ length: S }, () => new Array<number>(k).fill(0));
-  const foldOf = folds.foldOf;
+  // A streamed model's chunks add into one running table (rowFolds.sse), each with its rows' folds.
+  const sse = rowFolds?.sse ?? Array.from({ length: S }, () => new Array<number>(k).fill(0));
+  const foldOf = rowFolds?.foldOf ?? folds.foldOf;
   // W[s][j * k + f]: coefficient j of setting s fitted without fold f (one flat table per setting).
   const tables = coefficients.map((bySet) => {
     const t = new Float64Array(p * k);
@@ -373,81 +377,134 @@ export function crossValidate(
   folds: Folds,
   options: CrossValidateOptions = {},
 ): CrossValidation {
-  const n = data.rows;
-  const p = design.p;
-  const k = folds.k;
-  const kfold = k >= 2;
-  let coefficients: Float64Array[][] = [];
-  if (kfold) {
-    const complements = options.complements ?? complementFactors(options.factors ?? foldFactors(design, data, folds));
-    coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
+  const scorer = new CrossValidationScorer(design, fit, folds, {
+    ...options,
+    factors: options.factors ?? (options.complements || folds.k < 2 ? undefined : foldFactors(design, data, folds)),
+  });
+  scorer.addRows(data, options.predictions);
+  return scorer.finish(data.rows);
+}
+
+/**
+ * The scoring pass of {@link crossValidate} over rows that arrive in chunks (a streamed model,
+ * data/row-source.ts): {@link addRows} per chunk in file order, then {@link finish}. Fed the whole
+ * rows as one chunk it is {@link crossValidate}, addition for addition.
+ */
+export class CrossValidationScorer {
+  readonly #design: Design;
+  readonly #fit: FitResult;
+  readonly #folds: Folds;
+  readonly #coefficients: Float64Array[][];
+  readonly #sse: number[][];
+  #press = 0;
+  #rss = 0;
+  #leverageSum = 0;
+  #maxLeverage = 0;
+  #rowsWithLeverageOne = 0;
+  #h = new Float64Array(0);
+  #pred = new Float64Array(0);
+  #ids = new Int32Array(0);
+  #rows = 0;
+
+  /**
+   * @param design the model's design
+   * @param fit the full fit
+   * @param folds fold assignment of every row (in-memory or streamed)
+   * @param options the per-fold factors or their complements (one of them is needed for k >= 2)
+   */
+  constructor(design: Design, fit: FitResult, folds: Folds, options: Pick<CrossValidateOptions, 'factors' | 'complements'>) {
+    this.#design = design;
+    this.#fit = fit;
+    this.#folds = folds;
+    let coefficients: Float64Array[][] = [];
+    if (folds.k >= 2) {
+      const complements = options.complements ?? complementFactors(options.factors ?? []);
+      coefficients = complementCoefficients(complements, [fit.ridge], fit.penalised);
+    }
+    this.#coefficients = coefficients;
+    this.#sse = coefficients.map(() => new Array<number>(folds.k).fill(0));
   }
-  const w = fit.coefficients;
-  const out = options.predictions;
-  let press = 0;
-  let rss = 0;
-  let leverageSum = 0;
-  let maxLeverage = 0;
-  let rowsWithLeverageOne = 0;
-  let h = new Float64Array(0);
-  let pred = new Float64Array(0);
-  const visit = (X: Float64Array, start: number, m: number): void => {
-    if (h.length < m) {
-      h = new Float64Array(m);
-      pred = new Float64Array(m);
-    }
-    leveragesInto(fit, X, m, h);
-    pred.fill(0, 0, m);
-    addProducts(pred, 0, X, m, w, p);
-    if (out !== undefined) out.set(pred.subarray(0, m), start);
-    // The sums run in locals and are stored once per block: the same additions in the same order,
-    // without boxing a number into the closure's context on every row.
-    let blockRss = rss;
-    let blockPress = press;
-    let blockLeverageSum = leverageSum;
-    let blockMaxLeverage = maxLeverage;
-    let blockOnes = rowsWithLeverageOne;
-    const y = data.y;
-    for (let i = 0; i < m; i++) {
-      const e = y[start + i] - pred[i];
-      blockRss += e * e;
-      const hi = h[i];
-      blockLeverageSum += hi;
-      if (hi > blockMaxLeverage) blockMaxLeverage = hi;
-      if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
-        blockOnes++;
-        blockPress = Infinity;
-      } else {
-        const loo = e / (1 - hi);
-        blockPress += loo * loo;
+
+  /**
+   * Scores the next chunk of rows (rows #rows .. #rows + data.rows - 1 of the model).
+   * @param predictions when given (length >= data.rows), receives the full fit's predictions
+   */
+  addRows(data: Rows, predictions?: Float64Array): void {
+    const { p } = this.#design;
+    const fit = this.#fit;
+    const w = fit.coefficients;
+    const first = this.#rows;
+    if (this.#ids.length < data.rows && this.#folds.streamed === true) this.#ids = new Int32Array(data.rows);
+    const foldOf = foldIdsOf(this.#folds, first, data.rows, this.#ids);
+    const visit = (X: Float64Array, start: number, m: number): void => {
+      if (this.#h.length < m) {
+        this.#h = new Float64Array(m);
+        this.#pred = new Float64Array(m);
       }
-    }
-    rss = blockRss;
-    press = blockPress;
-    leverageSum = blockLeverageSum;
-    maxLeverage = blockMaxLeverage;
-    rowsWithLeverageOne = blockOnes;
-  };
-  const { sse } = outOfFoldErrors(design, data, folds, coefficients, visit);
-  const summary = kfold ? summariseFolds(sse[0], folds.sizes) : null;
-  const df = fit.degreesOfFreedom;
-  const gcvDenominator = 1 - df / n;
-  const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
-  return {
-    k,
-    foldSizes: [...folds.sizes],
-    cvRmse: summary ? summary.cvRmse : Number.NaN,
-    foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
-    meanMse: summary ? summary.meanMse : Number.NaN,
-    seMse: summary ? summary.seMse : Number.NaN,
-    loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
-    press,
-    gcv,
-    effectiveDf: df,
-    leverageSum,
-    maxLeverage,
-    rowsWithLeverageOne,
-    rss,
-    n,
-  };
+      const h = this.#h;
+      const pred = this.#pred;
+      leveragesInto(fit, X, m, h);
+      pred.fill(0, 0, m);
+      addProducts(pred, 0, X, m, w, p);
+      if (predictions !== undefined) predictions.set(pred.subarray(0, m), start);
+      // The sums run in locals and are stored once per block: the same additions in the same order,
+      // without boxing a number into the closure's context on every row.
+      let blockRss = this.#rss;
+      let blockPress = this.#press;
+      let blockLeverageSum = this.#leverageSum;
+      let blockMaxLeverage = this.#maxLeverage;
+      let blockOnes = this.#rowsWithLeverageOne;
+      const y = data.y;
+      for (let i = 0; i < m; i++) {
+        const e = y[start + i] - pred[i];
+        blockRss += e * e;
+        const hi = h[i];
+        blockLeverageSum += hi;
+        if (hi > blockMaxLeverage) blockMaxLeverage = hi;
+        if (1 - hi <= LEVERAGE_ONE_TOLERANCE) {
+          blockOnes++;
+          blockPress = Infinity;
+        } else {
+          const loo = e / (1 - hi);
+          blockPress += loo * loo;
+        }
+      }
+      this.#rss = blockRss;
+      this.#press = blockPress;
+      this.#leverageSum = blockLeverageSum;
+      this.#maxLeverage = blockMaxLeverage;
+      this.#rowsWithLeverageOne = blockOnes;
+    };
+    outOfFoldErrors(this.#design, data, this.#folds, this.#coefficients, visit, { foldOf, sse: this.#sse });
+    this.#rows += data.rows;
+  }
+
+  /** The figures over every row added; `n` is their count. */
+  finish(n: number = this.#rows): CrossValidation {
+    const folds = this.#folds;
+    const k = folds.k;
+    const summary = k >= 2 ? summariseFolds(this.#sse[0], folds.sizes) : null;
+    const df = this.#fit.degreesOfFreedom;
+    const rss = this.#rss;
+    const press = this.#press;
+    const gcvDenominator = 1 - df / n;
+    const gcv = n === 0 ? Number.NaN : gcvDenominator > LEVERAGE_ONE_TOLERANCE ? rss / n / (gcvDenominator * gcvDenominator) : Infinity;
+    return {
+      k,
+      foldSizes: [...folds.sizes],
+      cvRmse: summary ? summary.cvRmse : Number.NaN,
+      foldRmse: summary ? summary.foldMse.map(Math.sqrt) : [],
+      meanMse: summary ? summary.meanMse : Number.NaN,
+      seMse: summary ? summary.seMse : Number.NaN,
+      loocvRmse: n > 0 ? Math.sqrt(press / n) : Number.NaN,
+      press,
+      gcv,
+      effectiveDf: df,
+      leverageSum: this.#leverageSum,
+      maxLeverage: this.#maxLeverage,
+      rowsWithLeverageOne: this.#rowsWithLeverageOne,
+      rss,
+      n,
+    };
+  }
 }

@@ -126,14 +126,14 @@ function indexRows(inputs: RowTable, full: RowTable, holdout: Pick<ModelData, 'i
 
 /**
  * Streams the training rows past the tables of distinct hold-out rows in file order:
- * firstMatch[q] receives the first training row whose inputs equal those of distinct row q,
+ * firstMatch[q] receives the file line of the first training row whose inputs equal those of distinct row q,
  * targetToo[q] = 1 when some training row has its inputs and its target.
  */
 function matchRows(
   inputs: RowTable,
   full: RowTable,
   holdout: Pick<ModelData, 'inputs' | 'y'>,
-  train: Pick<ModelData, 'inputs' | 'y' | 'rows'>,
+  train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>,
   firstMatch: Int32Array,
   targetToo: Uint8Array,
 ): void {
@@ -142,7 +142,7 @@ function matchRows(
     let q = inputs.slotHead[findSlot(inputs, hash)];
     while (q >= 0 && !sameInputs(holdout.inputs, q, train.inputs, i)) q = inputs.next[q];
     if (q < 0) continue;
-    if (firstMatch[q] < 0) firstMatch[q] = i;
+    if (firstMatch[q] < 0) firstMatch[q] = train.lines[i];
     q = full.slotHead[findSlot(full, rowTargetHash(hash, train.y, i))];
     while (q >= 0 && !(holdout.y[q] === train.y[i] && sameInputs(holdout.inputs, q, train.inputs, i))) q = full.next[q];
     if (q >= 0) targetToo[q] = 1;
@@ -163,29 +163,60 @@ export function findLeakage(
   train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>,
   holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>,
 ): Leakage {
-  const columns = train.inputs.length;
-  // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
-  // stream past them in file order, so each hold-out row's first match is the earliest training row.
-  const h = holdout.rows;
-  const byInputs = newTable(h);
-  const byRow = newTable(h);
-  indexRows(byInputs, byRow, holdout);
-  const firstMatch = new Int32Array(h).fill(-1);
-  const targetToo = new Uint8Array(h);
-  if (h > 0) matchRows(byInputs, byRow, holdout, train, firstMatch, targetToo);
-  let inputMatches = 0;
-  let fullMatches = 0;
-  const holdoutLines: number[] = [];
-  const trainLines: number[] = [];
-  for (let r = 0; r < h; r++) {
-    const first = firstMatch[byInputs.repOf[r]];
-    if (first < 0) continue;
-    inputMatches++;
-    if (targetToo[byRow.repOf[r]] === 1) fullMatches++;
-    if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
-      holdoutLines.push(holdout.lines[r]);
-      trainLines.push(train.lines[first]);
-    }
+  const scan = new LeakageScan(holdout);
+  scan.add(train);
+  return scan.finish();
+}
+
+/**
+ * {@link findLeakage} over training rows that arrive in chunks (a streamed model,
+ * data/row-source.ts): the tables of the hold-out rows are built once, each chunk streams past
+ * them in file order ({@link add}), and {@link finish} gives the figures. Memory: the hold-out
+ * tables only, whatever the training rows.
+ */
+export class LeakageScan {
+  readonly #holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>;
+  readonly #byInputs: RowTable;
+  readonly #byRow: RowTable;
+  readonly #firstMatch: Int32Array;
+  readonly #targetToo: Uint8Array;
+
+  /** @param holdout hold-out rows (inputs in the model's order) */
+  constructor(holdout: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>) {
+    // Tables of the distinct hold-out rows (the smaller file, usually); the training rows then
+    // stream past them in file order, so each hold-out row's first match is the earliest training row.
+    const h = holdout.rows;
+    this.#holdout = holdout;
+    this.#byInputs = newTable(h);
+    this.#byRow = newTable(h);
+    indexRows(this.#byInputs, this.#byRow, holdout);
+    this.#firstMatch = new Int32Array(h).fill(-1);
+    this.#targetToo = new Uint8Array(h);
   }
-  return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns };
+
+  /** Streams the next training rows (in file order) past the hold-out rows. */
+  add(train: Pick<ModelData, 'inputs' | 'y' | 'rows' | 'lines'>): void {
+    if (this.#holdout.rows > 0) matchRows(this.#byInputs, this.#byRow, this.#holdout, train, this.#firstMatch, this.#targetToo);
+  }
+
+  /** The figures over every training row added. */
+  finish(): Leakage {
+    const holdout = this.#holdout;
+    const h = holdout.rows;
+    let inputMatches = 0;
+    let fullMatches = 0;
+    const holdoutLines: number[] = [];
+    const trainLines: number[] = [];
+    for (let r = 0; r < h; r++) {
+      const first = this.#firstMatch[this.#byInputs.repOf[r]];
+      if (first < 0) continue;
+      inputMatches++;
+      if (this.#targetToo[this.#byRow.repOf[r]] === 1) fullMatches++;
+      if (holdoutLines.length < LEAKAGE_EXAMPLE_LINES) {
+        holdoutLines.push(holdout.lines[r]);
+        trainLines.push(first);
+      }
+    }
+    return { inputMatches, fullMatches, holdoutLines, trainLines, holdoutRows: holdout.rows, columns: holdout.inputs.length };
+  }
 }

@@ -75,6 +75,11 @@ export interface ModelShape {
   sweep: SweepShape | null;
   /** `data.target_transform` is given (figures on the original scale: one more pass); absent otherwise. */
   targetTransform?: boolean;
+  /**
+   * Rows of the sample a streamed model's sampled diagnostics use (swing, charts, the sweep:
+   * data/row-source.ts); absent for an in-memory model, whose diagnostics use every row.
+   */
+  sampleRows?: number;
 }
 
 /** One stage's share of the estimate. */
@@ -108,7 +113,14 @@ export function buildCost(design: Design): number {
 }
 
 /** The sizes of a planned model. */
-export function modelShape(descriptor: Descriptor, design: Design, trainRows: number, holdoutRows: number): ModelShape {
+export function modelShape(
+  descriptor: Descriptor,
+  design: Design,
+  trainRows: number,
+  holdoutRows: number,
+  sampleRows?: number,
+): ModelShape {
+  const sampled = sampleRows ?? trainRows;
   return {
     trainRows,
     holdoutRows,
@@ -117,7 +129,8 @@ export function modelShape(descriptor: Descriptor, design: Design, trainRows: nu
     buildPerRow: buildCost(design),
     folds: Math.min(descriptor.fit.folds, trainRows),
     shipped: descriptor.coefficients !== null,
-    sweep: sweepShape(descriptor, design, trainRows, { maxRows: SWEEP_MAX_ROWS }),
+    sweep: sweepShape(descriptor, design, sampled, { maxRows: SWEEP_MAX_ROWS }),
+    ...(sampleRows === undefined ? {} : { sampleRows }),
     ...(descriptor.data.targetTransform ? { targetTransform: true } : {}),
   };
 }
@@ -169,18 +182,20 @@ export function estimateCost(shape: ModelShape): CostEstimate {
     },
     { stage: 'cross-validation', operations: solves(k, p), sizes: `${k} fold solves of ${p} columns` },
   ];
-  const grid = swingPoints(d, n);
-  const sampled = Math.min(n, SWING_DEFAULTS.maxRows);
-  const sorted = Math.min(n, SWING_DEFAULTS.maxGridRows);
+  // A streamed model's swing scan and charts read its sample (ns rows); leakage streams every row.
+  const ns = shape.sampleRows ?? n;
+  const grid = swingPoints(d, ns);
+  const sampled = Math.min(ns, SWING_DEFAULTS.maxRows);
+  const sorted = Math.min(ns, SWING_DEFAULTS.maxGridRows);
   parts.push({
     stage: 'swing scan',
-    operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * n),
+    operations: grid * (b + p) + (d >= 2 ? sampled * sampled * d : 0) + d * (32 * sorted + 4 * ns),
     sizes: `${grid} points`,
   });
   const curves = Math.min(d, MAX_PARTIAL_CURVES);
   parts.push({
     stage: 'leakage and charts',
-    operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * n * d,
+    operations: (n + m) * (LEAKAGE_ROW_OPERATIONS + 4 * d) + curves * CURVE_POINTS * (b + p) + 4 * ns * d,
     sizes: `${n} + ${m} rows x ${d} inputs`,
   });
   parts.push(sweepPart(shape, k));

@@ -21,6 +21,20 @@ import { evaluateClassifier } from './evaluate-classifier.js';
 import { evaluatePredictions } from './evaluate-predictions.js';
 import { fitModel, type FittedModel } from './fit-model.js';
 import { targetScaleResult } from './target-scale.js';
+import type { ScaleOptions } from './plan.js';
+import { trainingRows } from '../data/model-data.js';
+
+/**
+ * What a streamed model's report says of its sampling (docs/scale.md): which figures come from
+ * every row and which from the sample.
+ */
+function streamedNote(sampleRows: number, rows: number): { rows: number; sample_rows: number; note: string } {
+  return {
+    rows,
+    sample_rows: sampleRows,
+    note: `the training file was streamed (${rows} rows); errors, cross-validation, leave-one-out, leakage, coefficients and conditioning use every row; swing, spikes, the complexity sweep, term parameters and charts use a seeded sample of ${sampleRows} rows`,
+  };
+}
 
 export type { BaseInput } from './base-comparison.js';
 
@@ -72,6 +86,7 @@ function reportMetrics(model: FittedModel): ModelMetrics {
  * @param base outcomes on the base commit to compare with; default none (no `base` field)
  * @param deadline the model's deadline; default one of `caps.max_model_seconds` from now
  * @param share the model's share of the run's chart data (result/chart-types.ts `chartShare`); default the full share
+ * @param scale when to stream the training file and how (plan.ts {@link ScaleOptions}); default the built-in threshold
  */
 export async function evaluateModel(
   repo: RepoReader,
@@ -80,10 +95,11 @@ export async function evaluateModel(
   base?: BaseInput,
   deadline?: Deadline,
   share: ChartShare = FULL_CHART_SHARE,
+  scale: ScaleOptions = {},
 ): Promise<ModelResult> {
   const within = deadline ?? new Deadline(settings.caps.maxModelSeconds * 1000);
   try {
-    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, share, base));
+    return await withDeadline(within, () => evaluateWithin(repo, descriptor, settings, share, base, scale));
   } catch (error) {
     if (!(error instanceof TimeLimitExceeded)) throw error;
     return errorResult(
@@ -100,13 +116,14 @@ async function evaluateWithin(
   descriptor: Descriptor,
   settings: SettingsFile,
   share: ChartShare,
-  base?: BaseInput,
+  base: BaseInput | undefined,
+  scale: ScaleOptions,
 ): Promise<ModelResult> {
   let model: FittedModel;
   try {
     if (descriptor.predictions) return await evaluatePredictions(repo, descriptor, settings, base);
     if (descriptor.task === 'classification') return await evaluateClassifier(repo, descriptor, settings, base);
-    model = await fitModel(repo, descriptor, settings);
+    model = await fitModel(repo, descriptor, settings, scale);
   } catch (error) {
     if (error instanceof TimeLimitExceeded) throw error;
     if (error instanceof InputError) return errorResult(descriptor.name, descriptor.file, error);
@@ -135,7 +152,12 @@ async function evaluateWithin(
       // A transformed target judged on the original scale: swing back-transforms the predictions.
       ...(model.targetScale?.limitsScale === 'original' ? { backTransform: model.targetScale.transform } : {}),
     },
-    { folds: model.folds, foldFactors: model.foldFactors, crossValidation: model.crossValidation },
+    {
+      folds: model.folds,
+      foldFactors: model.foldFactors,
+      crossValidation: model.crossValidation,
+      ...(model.leakage ? { leakage: model.leakage } : {}),
+    },
     share.fraction < 1 ? { curveShare: share.fraction } : {},
   );
   const context: CheckContext = {
@@ -157,7 +179,7 @@ async function evaluateWithin(
     name: descriptor.name,
     descriptor: descriptor.file,
     verdict,
-    rows: { train: model.tables.train.rows, holdout: model.tables.holdout.rows },
+    rows: { train: trainingRows(model.tables.train), holdout: model.tables.holdout.rows },
     ...dataFilesField(descriptor.data),
     ...(model.tables.train.dropped !== undefined
       ? { dropped: { train: model.tables.train.dropped, holdout: model.tables.holdout.dropped ?? 0 } }
@@ -173,6 +195,9 @@ async function evaluateWithin(
     error: null,
     extra: {
       rank_deficient: model.fit.rankDeficient,
+      ...(model.tables.train.sampleOf !== undefined
+        ? { streamed: streamedNote(model.tables.train.rows, model.tables.train.sampleOf) }
+        : {}),
       terms: model.design.terms.map((t, i) => ({
         kind: t.spec.kind,
         line: t.spec.line,

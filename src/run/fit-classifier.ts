@@ -6,7 +6,8 @@
  */
 import type { ClassifierContext, ClassifierCrossValidation, ClassifierShipped } from '../checks/classifier/context.js';
 import type { Descriptor, SettingsFile } from '../config/types.js';
-import { InputError } from '../core/errors.js';
+import { clip, InputError } from '../core/errors.js';
+import { streamsTrainingFile } from '../data/row-source.js';
 import { loadClassifierData, type ClassLabels } from '../data/labels.js';
 import type { ModelData } from '../data/model-data.js';
 import { placeOfLine } from '../data/data-parts.js';
@@ -30,6 +31,12 @@ import { firstStepsWithout, fitLogistic, outOfFoldDeviance, rowDeviance, type Lo
 import type { RepoReader } from '../repo/types.js';
 import { planModel } from './plan.js';
 
+/**
+ * Largest estimated CSV text of a classifier's training file (data/row-source.ts estimates it):
+ * 512 MiB, the default file cap, so classifiers within the defaults are unaffected.
+ */
+export const CLASSIFIER_MAX_BYTES = 512 * 1024 * 1024;
+
 /** A fitted classifier: the check context plus what the reports draw. */
 export interface FittedClassifier {
   context: Omit<ClassifierContext, 'baseline'>;
@@ -49,6 +56,16 @@ export interface FittedClassifier {
  * @throws InputError for bad data or labels, a design over the caps, or shipped coefficients of the wrong length
  */
 export async function fitClassifier(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedClassifier> {
+  // Classifiers are held in memory (their fit makes several passes of its own): a file above the
+  // default file cap is refused plainly rather than left to run out of memory.
+  const file = descriptor.data.train;
+  if (streamsTrainingFile(file, await repo.size(file), CLASSIFIER_MAX_BYTES)) {
+    throw new InputError(
+      'too-large-to-hold',
+      `the training file ${clip(file)} is estimated at over ${CLASSIFIER_MAX_BYTES / (1024 * 1024)} MiB of CSV text; a classifier's rows are held in memory and files this large are read as a stream for regression models only; expected a smaller training file`,
+      { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' },
+    );
+  }
   let labels: ClassLabels | null = null;
   const plan = await planModel(repo, descriptor, settings, async (r, d, inputs, s) => {
     const tables = await loadClassifierData(r, d, inputs, s);

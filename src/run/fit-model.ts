@@ -18,8 +18,10 @@ import { scoreShipped, type ShippedScore } from '../diagnostics/shipped.js';
 import { weightedErrorMeasures } from '../diagnostics/weighted-metrics.js';
 import type { FitResult } from '../fit/index.js';
 import type { RepoReader } from '../repo/types.js';
-import { foldPass, refinePass, scoringPass } from './passes.js';
-import { planModel } from './plan.js';
+import { loadModelData } from '../data/load-model-data.js';
+import type { Leakage } from '../diagnostics/leakage.js';
+import { foldPass, refinePass, scoringPass, streamedScoringPass, type FoldPass } from './passes.js';
+import { planModel, type ModelPlan, type ScaleOptions } from './plan.js';
 import type { TargetScale } from '../diagnostics/target-scale.js';
 import { withTargetScale } from './target-scale.js';
 
@@ -28,9 +30,9 @@ import { withTargetScale } from './target-scale.js';
  * a `design-overflow` error (passes.ts names a training row by its table-wide line) into the
  * part's own line and path (data-parts.ts). Other errors, and data of one file, pass unchanged.
  */
-function partsNamed<T>(tables: ModelTables, step: () => T): T {
+async function partsNamed<T>(tables: ModelTables, step: () => Promise<T>): Promise<T> {
   try {
-    return step();
+    return await step();
   } catch (error) {
     const train = tables.train;
     if (!(error instanceof InputError) || error.code !== 'design-overflow' || train.parts === undefined) throw error;
@@ -65,6 +67,11 @@ export interface FittedModel {
   refitCompare?: RefitFigures;
   /** With `data.target_transform`: figures on both scales (run/target-scale.ts); absent otherwise. */
   targetScale?: TargetScale;
+  /**
+   * A streamed model's leakage, found in its scoring pass over every training row (the
+   * diagnostics then do not look for it in the sample `tables.train`); absent otherwise.
+   */
+  leakage?: Leakage;
 }
 
 /**
@@ -72,11 +79,24 @@ export interface FittedModel {
  * @throws InputError for bad data, a constant target, a design over the caps, or shipped
  *   coefficients of the wrong length
  */
-export async function fitModel(repo: RepoReader, descriptor: Descriptor, settings: SettingsFile): Promise<FittedModel> {
-  const plan = await planModel(repo, descriptor, settings);
+export async function fitModel(
+  repo: RepoReader,
+  descriptor: Descriptor,
+  settings: SettingsFile,
+  scale: ScaleOptions = {},
+): Promise<FittedModel> {
+  const plan = await planModel(repo, descriptor, settings, loadModelData, scale);
   const { design, tables, folds } = plan;
-  const first = partsNamed(plan.tables, () => foldPass(plan));
-  const fit = refinePass(plan, first.fit);
+  if (tables.streamed !== undefined && descriptor.fit.refit === false) {
+    throw new InputError(
+      'too-large-to-hold',
+      `the training file ${clip(descriptor.data.train)} is read as a stream (too large to hold in memory), which \`fit.refit: false\` does not support yet; expected a smaller file, or a refit`,
+      { file: descriptor.file, line: descriptor.data.lines.train, key: 'data.train' },
+    );
+  }
+  const first = await partsNamed(plan.tables, () => foldPass(plan));
+  const fit = await refinePass(plan, first.fit);
+  if (tables.streamed !== undefined) return streamedModel(plan, fit, first);
   const scored = scoringPass(plan, fit, first.foldFactors);
   if (descriptor.fit.refit === false) {
     const shipped = withTargetScale(
@@ -103,6 +123,63 @@ export async function fitModel(repo: RepoReader, descriptor: Descriptor, setting
     foldFactors: first.foldFactors,
     shipped: shippedScore(descriptor, design, tables, fit),
   });
+}
+
+/**
+ * A streamed model (data/row-source.ts) from its scoring pass: every figure of the training rows
+ * (errors, cross-validation, leakage, the shipped coefficients' errors) over every row of the
+ * file; `trainPredictions` and `tables.train` are those of the sample.
+ */
+async function streamedModel(plan: ModelPlan, fit: FitResult, first: FoldPass): Promise<FittedModel> {
+  const { descriptor, design, tables, folds } = plan;
+  const shipped = checkedShipped(descriptor, design);
+  const scored = await streamedScoringPass(plan, fit, first.foldFactors, shipped);
+  const metrics = coreMetricsFrom(
+    plan.targetSd,
+    first.columnSd,
+    fit,
+    design,
+    plan.rows,
+    errorMeasures(scored.trainSums),
+    measuresOf(tables.holdout, scored.holdoutPredictions),
+    plan.targetRange,
+  );
+  let shippedScore: ShippedScore | null = null;
+  if (shipped !== null && scored.shippedTrainSums !== null) {
+    const holdoutPredictions = predictRows(design, tables.holdout, shipped);
+    let diff = 0;
+    for (let j = 0; j < design.p; j++) diff = Math.max(diff, Math.abs(shipped[j] - fit.coefficients[j]));
+    shippedScore = {
+      coefficients: shipped,
+      holdoutPredictions,
+      train: errorMeasures(scored.shippedTrainSums),
+      holdout: measuresOf(tables.holdout, holdoutPredictions),
+      maxCoefficientDifference: diff,
+    };
+  }
+  return {
+    descriptor,
+    design,
+    fit,
+    tables,
+    metrics,
+    trainPredictions: scored.samplePredictions,
+    holdoutPredictions: scored.holdoutPredictions,
+    folds,
+    crossValidation: scored.crossValidation,
+    foldFactors: first.foldFactors,
+    shipped: shippedScore,
+    leakage: scored.leakage,
+  };
+}
+
+/** RMSE, MAE and R^2 of predictions of some rows (weighted when the rows carry weights). */
+function measuresOf(data: ModelTables['train'], predictions: Float64Array): ReturnType<typeof errorMeasures> {
+  // Weighted rows get the weighted measures (diagnostics/weighted-metrics.ts).
+  if (data.weights !== undefined) return weightedErrorMeasures(data.y, predictions, data.weights, data.rows);
+  const sums = emptySums();
+  addErrors(sums, data.y, predictions, data.rows);
+  return errorMeasures(sums);
 }
 
 /**
@@ -157,15 +234,22 @@ function coreMetrics(
   holdoutPredictions: Float64Array,
 ): CoreMetrics {
   const { train, holdout } = tables;
-  const measures = (data: ModelTables['train'], predictions: Float64Array) => {
-    // Weighted rows get the weighted measures (diagnostics/weighted-metrics.ts).
-    if (data.weights !== undefined) return weightedErrorMeasures(data.y, predictions, data.weights, data.rows);
-    const sums = emptySums();
-    addErrors(sums, data.y, predictions, data.rows);
-    return errorMeasures(sums);
-  };
-  const tr = measures(train, trainPredictions);
-  const ho = measures(holdout, holdoutPredictions);
+  const tr = measuresOf(train, trainPredictions);
+  const ho = measuresOf(holdout, holdoutPredictions);
+  return coreMetricsFrom(targetSd, columnSd, fit, design, train.rows, tr, ho, range(train.y, train.rows));
+}
+
+/** {@link coreMetrics} from the error measures of both files, the training rows and the target's range. */
+function coreMetricsFrom(
+  targetSd: number,
+  columnSd: Float64Array,
+  fit: FitResult,
+  design: Design,
+  trainRows: number,
+  tr: ReturnType<typeof errorMeasures>,
+  ho: ReturnType<typeof errorMeasures>,
+  targetRange: [number, number],
+): CoreMetrics {
   let maxStd = Number.NaN;
   let maxStdColumn = -1;
   let maxAbs = 0;
@@ -187,13 +271,13 @@ function coreMetrics(
     trainR2: tr.r2,
     holdoutR2: ho.r2,
     gapRatio: gapRatio(tr.rmse, ho.rmse),
-    paramsPerSample: design.p / train.rows,
+    paramsPerSample: design.p / trainRows,
     maxStdCoefficient: maxStd,
     maxStdCoefficientColumn: maxStdColumn,
     maxAbsCoefficient: maxAbs,
     columnSd,
     targetSd,
-    targetRange: range(train.y, train.rows),
+    targetRange,
   };
 }
 

@@ -5,15 +5,16 @@
  */
 import type { Descriptor, SettingsFile } from '../config/types.js';
 import { clip, InputError } from '../core/errors.js';
-import { loadModelData, type ModelTables } from '../data/load-model-data.js';
-import { lineOfFile } from '../data/data-parts.js';
+import { loadModelData, type LoadOptions, type ModelTables } from '../data/load-model-data.js';
+import { memoryRowSource, type RowChunk, type RowSource } from '../data/row-source.js';
+import { lineOfFile, type DataPart } from '../data/data-parts.js';
 import { transformTables, type OriginalTarget } from '../data/target-transform.js';
 import { createDesign, type Design } from '../design/design-matrix.js';
-import { meanAndSd } from '../design/stats.js';
+import { meanAndSd, range } from '../design/stats.js';
 import { createTerm, termInputs } from '../design/terms/index.js';
 import { checkTransformDomain } from '../design/terms/transform.js';
 import { rowScaling, type RowScaling } from '../design/weighted-design.js';
-import { assignFolds, type Folds } from '../diagnostics/folds.js';
+import { assignFolds, streamedFolds, type Folds } from '../diagnostics/folds.js';
 import { firstBeyond } from '../kernels/index.js';
 import type { RepoReader } from '../repo/types.js';
 import { checkDeadline } from '../core/deadline.js';
@@ -46,7 +47,21 @@ export interface ModelPlan {
   scaling?: RowScaling | null;
   /** With `data.target_transform`: the targets as written (the tables hold t = g(y)); null (or absent) otherwise. */
   originalTargets?: { train: OriginalTarget; holdout: OriginalTarget } | null;
+  /**
+   * Every training row, for the passes: the columns of `tables.train` (one chunk), or the file
+   * streamed again on each pass when `tables.streamed` (then `tables.train` is a sample).
+   */
+  source: RowSource;
+  /** Training rows (all of them, also when `tables.train` is a sample). */
+  rows: number;
+  /** Smallest and largest training target. */
+  targetRange: [number, number];
+  /** Rows per chunk of a streamed pass (tests); default a whole number of design blocks near 65536. */
+  chunkRows?: number;
 }
+
+/** Options of a run's scale (tests force the streamed path with a low threshold). */
+export type ScaleOptions = Pick<LoadOptions, 'streamAboveBytes' | 'chunkRows' | 'sampleRows'>;
 
 /**
  * Plans one model.
@@ -59,17 +74,27 @@ export async function planModel(
   descriptor: Descriptor,
   settings: SettingsFile,
   load: typeof loadModelData = loadModelData,
+  scale: ScaleOptions = {},
 ): Promise<ModelPlan> {
   const inputs: string[] = [];
   for (const t of descriptor.terms) for (const c of termInputs(t)) if (!inputs.includes(c)) inputs.push(c);
-  let tables = await load(repo, descriptor, inputs, settings);
+  const file = descriptor.file;
+  // A streamed training file meets the checks of every row chunk by chunk in its sampling read.
+  const everyRow = (data: RowChunk): void => {
+    checkDeadline('reading of the data');
+    for (const spec of descriptor.terms) checkTransformDomain(spec, termInputs(spec), data, inputs);
+    checkTargetRange(descriptor, data);
+  };
+  let tables = await load(repo, descriptor, inputs, settings, { ...scale, onTrainChunk: everyRow });
   checkDeadline('reading of the data');
   const { train } = tables;
-  const file = descriptor.file;
+  const streamed = tables.streamed ?? null;
+  const rows = streamed === null ? train.rows : streamed.rows;
 
   // A transformed input outside its transform's domain is an error naming file, line, column, value.
   for (const spec of descriptor.terms)
-    for (const data of [train, tables.holdout]) checkTransformDomain(spec, termInputs(spec), data, inputs);
+    for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout])
+      checkTransformDomain(spec, termInputs(spec), data, inputs);
   // Fix term parameters from the training rows, then check the size before taking memory.
   const terms = descriptor.terms.map((spec) => createTerm(spec, tables.trainColumns, file, tables.levels));
   const design = createDesign(terms, descriptor.fit.intercept);
@@ -81,32 +106,26 @@ export async function planModel(
       { file, line: descriptor.termsLine, key: 'terms' },
     );
   }
-  if (train.rows * p > settings.caps.maxCells) {
+  // caps.max_cells guards the memory of columns held whole; a streamed model holds none (its
+  // work is still held to caps.max_operations below).
+  if (streamed === null && rows * p > settings.caps.maxCells) {
     throw new InputError(
       'too-large',
-      `${train.rows} training rows x ${p} parameters = ${train.rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`,
+      `${rows} training rows x ${p} parameters = ${rows * p} cells is over the cap of ${settings.caps.maxCells}; raise caps.max_cells in the settings file to allow it`,
       { file, line: descriptor.termsLine, key: 'terms' },
     );
   }
-  for (const data of [train, tables.holdout]) {
-    const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
-    if (i >= 0) {
-      throw new InputError(
-        'target-range',
-        `the target \`${clip(descriptor.data.target)}\` is ${data.y[i]} on ${lineOfFile(data, data.lines[i])}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
-        { file, line: descriptor.data.lines.target, key: 'data.target' },
-      );
-    }
-  }
-  // `data.target_transform`: the fit and every figure of the passes work on t = g(y).
+  for (const data of streamed === null ? [train, tables.holdout] : [tables.holdout]) checkTargetRange(descriptor, data);
+  // `data.target_transform`: the fit and every figure of the passes work on t = g(y) (a streamed
+  // training file is refused with a transform: data/load-model-data.ts).
   const transform = descriptor.data.targetTransform ?? null;
   let originalTargets: ModelPlan['originalTargets'] = null;
-  if (transform !== null) {
+  if (transform !== null && streamed === null) {
     const transformed = transformTables(tables, transform.kind, descriptor.data.target);
     tables = transformed.tables;
     originalTargets = transformed.original;
   }
-  const targetStats = meanAndSd(tables.train.y, tables.train.rows);
+  const targetStats = streamed === null ? meanAndSd(tables.train.y, tables.train.rows) : { mean: streamed.targetMean, sd: streamed.targetSd };
   if (!(targetStats.sd > 0)) {
     throw new InputError(
       'constant-target',
@@ -115,7 +134,48 @@ export async function planModel(
     );
   }
   // The whole model's work, estimated from its shape before the first pass over the rows.
-  checkBudget(descriptor, estimateCost(modelShape(descriptor, design, train.rows, tables.holdout.rows)), settings);
-  const folds = assignFolds(train.rows, descriptor.fit.folds, descriptor.fit.foldOrder, descriptor.fit.seed);
-  return { descriptor, tables, design, folds, targetSd: targetStats.sd, scaling: rowScaling(tables.train), originalTargets };
+  checkBudget(
+    descriptor,
+    estimateCost(modelShape(descriptor, design, rows, tables.holdout.rows, streamed === null ? undefined : train.rows)),
+    settings,
+  );
+  const { folds: k, foldOrder, seed } = descriptor.fit;
+  if (streamed !== null) {
+    return {
+      descriptor,
+      tables,
+      design,
+      folds: streamedFolds(rows, k, foldOrder, seed),
+      targetSd: targetStats.sd,
+      scaling: null,
+      source: streamed.source,
+      rows,
+      targetRange: [streamed.targetMin, streamed.targetMax],
+      ...(scale.chunkRows ? { chunkRows: scale.chunkRows } : {}),
+    };
+  }
+  const folds = assignFolds(rows, k, foldOrder, seed);
+  return {
+    descriptor,
+    tables,
+    design,
+    folds,
+    targetSd: targetStats.sd,
+    scaling: rowScaling(tables.train),
+    originalTargets,
+    source: memoryRowSource(tables.train),
+    rows,
+    targetRange: range(tables.train.y, tables.train.rows),
+  };
+}
+
+/** InputError `target-range` when a target is not within ±{@link MAX_MAGNITUDE}. */
+function checkTargetRange(descriptor: Descriptor, data: Pick<RowChunk, 'y' | 'rows' | 'lines' | 'file'> & { parts?: readonly DataPart[] }): void {
+  const i = firstBeyond(data.y, data.rows, MAX_MAGNITUDE);
+  if (i < 0) return;
+  throw new InputError(
+    'target-range',
+    `the target \`${clip(descriptor.data.target)}\` is ${data.y[i]} on ${lineOfFile(data, data.lines[i])}; expected values within ±${MAX_MAGNITUDE} (sums of squares must stay finite): rescale the target`,
+    { file: descriptor.file, line: descriptor.data.lines.target, key: 'data.target' },
+  );
 }

@@ -21,7 +21,7 @@
 // the largest difference over the models.
 //
 // Options:
-//   --sizes S,M,L     which workloads (default S, M, L, C, MONO1000, MONO200)
+//   --sizes S,M,L     which workloads (default S, M, L, C, MONO1000, MONO200; XL only when named: it is large)
 //   --runs N          whole-process runs per tool and size, median reported (default 3)
 //   --data DIR        use DIR/S, DIR/M, DIR/L/{train,holdout}.csv (as gen_data.py writes them)
 //                     instead of generating data in JavaScript (gen-data.mjs)
@@ -36,8 +36,17 @@
 //                     certificate bundle at start, about 50 ms on the development machine, for a
 //                     command that opens no connection)
 //   --cli FILE        the fitgate bundle to run (default dist/cli/index.js, built when missing)
+//
+// Workload XL is the ten-million-row training file of issue 18 (10,000,000 + 250,000 rows of 8
+// inputs, degree 3 as L, about 1.4 GB of CSV), which fitgate streams (docs/scale.md); XLGZ is the
+// same file gzip-compressed. `--sizes XL` runs both. The bench repository's settings raise the caps
+// such files need (max_file_mb, max_operations, max_model_seconds). Besides wall time and peak
+// memory the table gives the throughput in MB of CSV text per second of wall time; `--stages`
+// also times one read-and-parse pass of the training file alone (the sources compiled by tsc
+// into the work folder). The reference holds the whole file in pandas and the design in numpy;
+// run it with care on a shared machine (--no-reference to leave it out).
 import { execFileSync, spawnSync } from 'node:child_process';
-import { copyFileSync, existsSync, linkSync, mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, linkSync, mkdirSync, readFileSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -100,7 +109,36 @@ export const WORKLOADS = {
   },
   MONO1000: { ...MONOREPO_WORKLOADS.R1000, monorepo: true, wallRatio: 0.3, memRatio: 0.5, memMiB: null },
   MONO200: { ...MONOREPO_WORKLOADS.R200, monorepo: true, wallRatio: 0.3, memRatio: 0.5, memMiB: null },
+  XL: {
+    rows: 10_000_000,
+    holdoutRows: 250_000,
+    features: 8,
+    degree: 3,
+    folds: 5,
+    loocv: false,
+    seed: 6,
+    wallRatio: 0.3,
+    memRatio: null,
+    memMiB: 256,
+  },
+  XLGZ: {
+    rows: 10_000_000,
+    holdoutRows: 250_000,
+    features: 8,
+    degree: 3,
+    folds: 5,
+    loocv: false,
+    seed: 6,
+    wallRatio: 0.3,
+    memRatio: null,
+    memMiB: 256,
+    gzip: true,
+    dataOf: 'XL',
+  },
 };
+
+/** Caps the bench repository's settings raise for the XL workloads (docs/scale.md, "Training files too large to hold"). */
+const XL_CAPS = '  max_file_mb: 4096\n  max_operations: 1e12\n  max_model_seconds: 7200\n';
 
 /** Classifier figures compared: [label, fitgate metrics key, reader of the reference's output]. */
 const CLASSIFIER_FIGURES = [
@@ -138,6 +176,7 @@ function parseOptions(argv) {
     json: null,
     cli: path.join(root, 'dist', 'cli', 'index.js'),
     inheritEnv: false,
+    stages: false,
   };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
@@ -158,9 +197,11 @@ function parseOptions(argv) {
     else if (a === '--json') o.json = path.resolve(value());
     else if (a === '--cli') o.cli = path.resolve(value());
     else if (a === '--inherit-env') o.inheritEnv = true;
+    else if (a === '--stages') o.stages = true;
     else throw new Error(`unknown option ${a} (see the top of test/bench/run.mjs)`);
   }
-  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M, L, C, MONO1000 or MONO200`);
+  if (o.sizes.includes('XL') && !o.sizes.includes('XLGZ')) o.sizes.push('XLGZ');
+  for (const s of o.sizes) if (!WORKLOADS[s]) throw new Error(`unknown size ${s}; expected S, M, L, C, MONO1000, MONO200 or XL`);
   if (!(Number.isInteger(o.runs) && o.runs >= 1)) throw new Error('--runs must be a whole number >= 1');
   return o;
 }
@@ -168,6 +209,16 @@ function parseOptions(argv) {
 /** Source data of one size: DIR/<size>/ from --data, or generated once into the work folder. */
 function sourceData(options, size) {
   const w = WORKLOADS[size];
+  if (w.dataOf) {
+    // The compressed twin of another workload: its files, the training file gzipped once.
+    const dir = sourceData(options, w.dataOf);
+    const gz = path.join(dir, 'train.csv.gz');
+    if (!existsSync(gz) || statSync(gz).mtimeMs < statSync(path.join(dir, 'train.csv')).mtimeMs) {
+      process.stderr.write(`compressing ${w.dataOf} training data (gzip -1)...\n`);
+      execFileSync('sh', ['-c', 'gzip -1 -c "$1" > "$2.part" && mv "$2.part" "$2"', 'sh', path.join(dir, 'train.csv'), gz]);
+    }
+    return dir;
+  }
   if (options.data) {
     const dir = path.join(options.data, size);
     for (const f of ['train.csv', 'holdout.csv'])
@@ -227,7 +278,7 @@ function descriptorText(size) {
 version: 1
 name: bench-${size.toLowerCase()}
 ${w.task === 'classification' ? 'task: classification\n' : ''}data:
-  train: ../data/${size}/train.csv
+  train: ../data/${size}/train.csv${w.gzip ? '.gz' : ''}
   holdout: ../data/${size}/holdout.csv
   target: y
 terms:
@@ -243,17 +294,24 @@ fit:
 function buildRepository(options) {
   const repo = path.join(options.work, 'repo');
   mkdirSync(path.join(repo, 'models'), { recursive: true });
-  writeFileSync(path.join(repo, 'fitgate.yml'), 'version: 1\nmodels:\n  - "models/*.model.yml"\n');
+  const xl = options.sizes.some((s) => s.startsWith('XL'));
+  writeFileSync(path.join(repo, 'fitgate.yml'), `version: 1\nmodels:\n  - "models/*.model.yml"\n${xl ? `caps:\n${XL_CAPS}` : ''}`);
   const files = {};
   for (const size of options.sizes) {
     if (WORKLOADS[size].monorepo) continue;
     const src = sourceData(options, size);
     const data = path.join(repo, 'data', size);
     mkdirSync(data, { recursive: true });
-    for (const f of ['train.csv', 'holdout.csv']) place(path.join(src, f), path.join(data, f));
+    const trainFile = WORKLOADS[size].gzip ? 'train.csv.gz' : 'train.csv';
+    for (const f of [trainFile, 'holdout.csv']) place(path.join(src, f), path.join(data, f));
     const descriptor = path.join('models', `${size.toLowerCase()}.model.yml`);
     writeFileSync(path.join(repo, descriptor), descriptorText(size));
-    files[size] = { descriptor, train: path.join(data, 'train.csv'), holdout: path.join(data, 'holdout.csv') };
+    files[size] = {
+      descriptor,
+      train: path.join(data, trainFile),
+      holdout: path.join(data, 'holdout.csv'),
+      csvBytes: statSync(path.join(src, 'train.csv')).size,
+    };
   }
   return { repo, files };
 }
@@ -413,6 +471,41 @@ function table(rows) {
   return [line(rows[0]), `| ${widths.map((w) => '-'.repeat(w)).join(' | ')} |`, ...rows.slice(1).map(line)].join('\n');
 }
 
+/**
+ * Seconds of one read-and-parse pass over a training file alone (readTableChunks of the sources,
+ * compiled by tsc into the work folder once): the share of a streamed model's wall time each of its
+ * passes over the file costs.
+ */
+function readPassSeconds(options, file) {
+  const out = path.join(options.work, 'js');
+  if (!existsSync(path.join(out, 'data', 'table.js'))) {
+    execFileSync(process.execPath, [
+      path.join(root, 'node_modules', 'typescript', 'bin', 'tsc'),
+      '-p',
+      path.join(root, 'tsconfig.json'),
+      '--outDir',
+      out,
+    ]);
+    writeFileSync(path.join(out, 'package.json'), '{ "type": "module" }\n');
+    if (!existsSync(path.join(out, 'node_modules'))) symlinkSync(path.join(root, 'node_modules'), path.join(out, 'node_modules'));
+  }
+  const script = `
+const [dir, file] = process.argv.slice(1);
+const { readTableChunks } = await import(dir + '/data/table.js');
+const { createFsRepository } = await import(dir + '/repo/fs-repository.js');
+const path = await import('node:path');
+const repo = createFsRepository(path.dirname(file));
+const columns = ['x1','x2','x3','x4','x5','x6','x7','x8','y'];
+const t = process.hrtime.bigint();
+let rows = 0;
+for await (const c of readTableChunks(repo, path.basename(file), { columns, maxBytes: 2 ** 40, recycle: true })) rows += c.rows;
+process.stdout.write(String(Number(process.hrtime.bigint() - t) / 1e9));
+`;
+  const run = spawnSync(process.execPath, ['--input-type=module', '-e', script, out, file], { encoding: 'utf8', cwd: root });
+  if (run.status !== 0) throw new Error(`read pass failed: ${run.stderr}`);
+  return Number(run.stdout);
+}
+
 async function main() {
   const options = parseOptions(process.argv.slice(2));
   const cli = options.cli;
@@ -443,7 +536,8 @@ async function main() {
       const fg = await measure(process.execPath, [cli, 'check', f.descriptor, '--format', 'json'], { cwd: repo, okStatus: [0, 1], env });
       runs.fitgate.push(fg);
       fgOut = fg.stdout;
-      if (!refMissing) {
+      // The compressed twin's reference would read the same rows again: XL's reference stands for both.
+      if (!refMissing && !w.gzip) {
         const classifier = w.task === 'classification';
         const script = classifier ? path.join(path.dirname(options.reference), 'ref_logistic.py') : options.reference;
         const args = [
@@ -467,7 +561,9 @@ async function main() {
       }
       process.stderr.write(
         `${size} run ${r + 1}/${options.runs}: fitgate ${fg.wall.toFixed(2)} s ${fg.peakMiB.toFixed(0)} MiB` +
-          (refMissing ? '\n' : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`),
+          (refMissing || w.gzip
+            ? '\n'
+            : `; reference ${runs.reference[r].wall.toFixed(2)} s ${runs.reference[r].peakMiB.toFixed(0)} MiB\n`),
       );
     }
     const fg = fitgateFigures(fgOut);
@@ -502,6 +598,8 @@ async function main() {
             ? compareFigures(fg.figures, ref)
             : FIGURES.map(([label, key]) => ({ label, fitgate: fg.figures[key], reference: null, relative: null, status: 'n/a' })),
       trainBytes: statSync(f.train).size + statSync(f.holdout).size,
+      csvBytes: f.csvBytes,
+      stages: options.stages && size.startsWith('XL') ? readPassSeconds(options, f.train) : null,
     };
   }
 
@@ -545,6 +643,23 @@ async function main() {
       target,
       met,
     ]);
+  }
+  const big = options.sizes.filter((s) => s.startsWith('XL'));
+  if (big.length > 0) {
+    const tp = [['size', 'training CSV MB', 'stored MB', 'fitgate wall s', 'MB of CSV per s', 'peak MiB', 'one read+parse pass s']];
+    for (const size of big) {
+      const r = results[size];
+      tp.push([
+        size,
+        fmt(r.csvBytes / 1e6, 5),
+        fmt(statSync(files[size].train).size / 1e6, 5),
+        fmt(r.fitgate.wall),
+        fmt(r.csvBytes / 1e6 / r.fitgate.wall),
+        fmt(r.fitgate.peakMiB, 4),
+        fmt(r.stages),
+      ]);
+    }
+    process.stdout.write(`\nStreamed workloads (throughput = training CSV text / whole wall time)\n\n${table(tp)}\n`);
   }
   process.stdout.write(
     `\nWhole processes, median of ${options.runs} (${os.cpus().length} cores, node ${process.version}; data: ${options.data ?? 'gen-data.mjs'}; ${envNote})\n\n${table(rows)}\n`,
